@@ -1,0 +1,44 @@
+/**
+ * Three jest projects, all run by `npm test` (through tests/run.mjs, which first starts a
+ * throwaway MariaDB and builds the web app):
+ *  - server:  supertest against the real Express app and a real MariaDB
+ *  - app:     component tests of the Expo app on the web target (jest-expo/web)
+ *  - browser: the built web app served by the real server, driven in Debian's Chromium
+ */
+// ESM-only packages that jest must transform (unified/remark/rehype and friends join this list).
+const esmOnly = [
+  '((jest-)?react-native|@react-native(-community)?)',
+  'expo(nent)?',
+  '@expo(nent)?/.*',
+  '@expo-google-fonts/.*',
+  'expo-router',
+  'expo-modules-core',
+  'react-navigation',
+  '@react-navigation/.*',
+  'react-native-svg',
+  '@tanstack/.*',
+];
+
+const nodeProject = (name, testMatch, extra = {}) => ({
+  displayName: name,
+  testEnvironment: 'node',
+  testMatch,
+  transform: { '^.+\\.[cm]?[jt]sx?$': 'babel-jest' },
+  transformIgnorePatterns: ['/node_modules/(?!(' + esmOnly.join('|') + ')/)'],
+  moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
+  ...extra,
+});
+
+module.exports = {
+  projects: [
+    nodeProject('server', ['<rootDir>/tests/server/**/*.test.ts', '<rootDir>/server/**/*.test.ts']),
+    {
+      displayName: 'app',
+      preset: 'jest-expo/web',
+      testMatch: ['<rootDir>/components/**/*.test.tsx', '<rootDir>/tests/app/**/*.test.tsx'],
+      transformIgnorePatterns: ['/node_modules/(?!(' + esmOnly.join('|') + ')/)'],
+      moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
+    },
+    nodeProject('browser', ['<rootDir>/tests/browser/**/*.test.ts']),
+  ],
+};

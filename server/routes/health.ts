@@ -1,0 +1,14 @@
+import { Router } from 'express';
+import type { Sequelize } from 'sequelize';
+import type { HealthResponse } from '../../shared/api-types';
+import { databaseIsUp } from '../db/sequelize';
+
+export function healthRoutes(sequelize: Sequelize, version: string): Router {
+  const r = Router();
+  r.get('/health', async (_req, res) => {
+    const up = await databaseIsUp(sequelize);
+    const payload: HealthResponse = { status: up ? 'ok' : 'degraded', db: up ? 'up' : 'down', version };
+    res.set('Cache-Control', 'no-store').status(up ? 200 : 503).json(payload);
+  });
+  return r;
+}

@@ -1,0 +1,50 @@
+/**
+ * Shapes of what the API sends, shared by the Express server and the Expo app.
+ * Keep this file free of runtime dependencies: it is imported on both sides.
+ */
+
+/** Every error the API sends has this one shape. */
+export interface ApiErrorBody {
+  error: {
+    /** Stable, machine-readable code, e.g. `not_found`, `invalid_json`, `validation_failed`. */
+    code: string;
+    /** A sentence for people: what happened and how to fix it. */
+    message: string;
+    /** Per-field messages, keyed by the field's path (`body.title`, `query.page`). */
+    fields?: Record<string, string>;
+  };
+}
+
+/** `GET /api/health` */
+export interface HealthResponse {
+  status: 'ok' | 'degraded';
+  db: 'up' | 'down';
+  version: string;
+}
+
+/** A conservation law and the symmetry behind it (Noether's theorem), or a second-law/charge rule. */
+export interface ConservationLawDto {
+  slug: string;
+  name: string;
+  /** The conserved quantity, e.g. "linear momentum". */
+  quantity: string;
+  /** The symmetry behind it, e.g. "translation in space"; null where no Noether symmetry applies. */
+  symmetry: string | null;
+  summary: string;
+  position: number;
+}
+
+/** A node of the mechanism-class tree. */
+export interface MechanismClassDto {
+  slug: string;
+  name: string;
+  parentSlug: string | null;
+  summary: string;
+  position: number;
+}
+
+/** `GET /api/taxonomy` */
+export interface TaxonomyResponse {
+  laws: ConservationLawDto[];
+  classes: MechanismClassDto[];
+}
