@@ -95,6 +95,41 @@ const assertIdentifier = (s: string, what: string) => {
   if (!/^[A-Za-z0-9_]{1,64}$/.test(s)) throw new Error(`${what} "${s}" must be letters, digits and _ only`);
 };
 
+/**
+ * Creates a database and a user that may use only it, connecting as root over the socket
+ * (root never connects over TCP, and the app never as root). Idempotent; the password is set each time.
+ */
+export async function provisionDatabase(socketPath: string, app: AppDatabase): Promise<void> {
+  assertIdentifier(app.database, 'database name');
+  assertIdentifier(app.user, 'database user');
+  const conn = await mariadb.createConnection({ socketPath, user: 'root' });
+  try {
+    await conn.query(
+      `CREATE DATABASE IF NOT EXISTS \`${app.database}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
+    );
+    for (const host of ['127.0.0.1', 'localhost']) {
+      await conn.query(`CREATE USER IF NOT EXISTS ?@? IDENTIFIED BY ?`, [app.user, host, app.password]);
+      await conn.query(`ALTER USER ?@? IDENTIFIED BY ?`, [app.user, host, app.password]);
+      await conn.query(`GRANT ALL PRIVILEGES ON \`${app.database}\`.* TO ?@?`, [app.user, host]);
+    }
+  } finally {
+    await conn.end();
+  }
+}
+
+/** Drops a database and its user (throwaway databases in tests). */
+export async function dropDatabase(socketPath: string, app: Omit<AppDatabase, 'password'>): Promise<void> {
+  assertIdentifier(app.database, 'database name');
+  assertIdentifier(app.user, 'database user');
+  const conn = await mariadb.createConnection({ socketPath, user: 'root' });
+  try {
+    await conn.query(`DROP DATABASE IF EXISTS \`${app.database}\``);
+    for (const host of ['127.0.0.1', 'localhost']) await conn.query(`DROP USER IF EXISTS ?@?`, [app.user, host]);
+  } finally {
+    await conn.end();
+  }
+}
+
 export class MariaDbServer {
   readonly baseDir: string;
   readonly dataDir: string;
@@ -219,39 +254,9 @@ export class MariaDbServer {
     }
   }
 
-  /** A root connection over the socket (root never connects over TCP, and the app never as root). */
-  rootConnection(): Promise<mariadb.Connection> {
-    return mariadb.createConnection({ socketPath: this.socket, user: 'root' });
-  }
-
   /** Creates the application database and its user (idempotent; the password is set each time). */
-  async provision(app: AppDatabase): Promise<void> {
-    assertIdentifier(app.database, 'database name');
-    assertIdentifier(app.user, 'database user');
-    const conn = await this.rootConnection();
-    try {
-      await conn.query(
-        `CREATE DATABASE IF NOT EXISTS \`${app.database}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
-      );
-      for (const host of ['127.0.0.1', 'localhost']) {
-        await conn.query(`CREATE USER IF NOT EXISTS ?@? IDENTIFIED BY ?`, [app.user, host, app.password]);
-        await conn.query(`ALTER USER ?@? IDENTIFIED BY ?`, [app.user, host, app.password]);
-        await conn.query(`GRANT ALL PRIVILEGES ON \`${app.database}\`.* TO ?@?`, [app.user, host]);
-      }
-    } finally {
-      await conn.end();
-    }
-  }
-
-  /** Drops a database (tests only). */
-  async dropDatabase(name: string): Promise<void> {
-    assertIdentifier(name, 'database name');
-    const conn = await this.rootConnection();
-    try {
-      await conn.query(`DROP DATABASE IF EXISTS \`${name}\``);
-    } finally {
-      await conn.end();
-    }
+  provision(app: AppDatabase): Promise<void> {
+    return provisionDatabase(this.socket, app);
   }
 
   /** Stops mariadbd with SIGTERM (a clean InnoDB shutdown) and waits for it to exit. */

@@ -1,0 +1,129 @@
+/**
+ * `npm start` end to end, as a user runs it: the launcher brings up its own MariaDB in a fresh
+ * datadir, migrates, loads the starter data, serves the web app and the API; Ctrl-C (SIGINT to the
+ * whole process group) stops it and leaves no mariadbd behind; a second start keeps every record;
+ * SIGTERM sent to the launcher alone stops it cleanly too.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import mariadb from 'mariadb';
+import { ROOT } from '../../server/config';
+import { freePort } from '../../server/db/mariadb';
+
+jest.setTimeout(240_000);
+
+const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'cw-start-'));
+let port: number;
+let dbPort: number;
+
+beforeAll(async () => {
+  port = await freePort();
+  dbPort = await freePort();
+});
+afterAll(() => fs.rmSync(dataDir, { recursive: true, force: true }));
+
+interface Running {
+  child: ChildProcess;
+  output: () => string;
+  exited: Promise<number | null>;
+}
+
+function start(): Promise<Running> {
+  const child = spawn(process.execPath, [path.join(ROOT, 'server/start.mjs')], {
+    cwd: ROOT,
+    // Its own process group, like a shell job: a Ctrl-C is SIGINT to the whole group.
+    detached: true,
+    stdio: ['ignore', 'pipe', 'pipe'],
+    env: {
+      ...process.env,
+      NODE_ENV: 'development',
+      DATA_DIR: dataDir,
+      PORT: String(port),
+      DB_PORT: String(dbPort),
+      LOG_LEVEL: 'warn',
+      // The test run has just built dist/; a stale build would be rebuilt here, as for a user.
+    },
+  });
+  let out = '';
+  child.stdout!.on('data', (d) => (out += d));
+  child.stderr!.on('data', (d) => (out += d));
+  const exited = new Promise<number | null>((resolve) => child.on('exit', (code) => resolve(code)));
+  return new Promise((resolve, reject) => {
+    const timer = setInterval(() => {
+      if (out.includes('Counterweight is running at')) {
+        clearInterval(timer);
+        resolve({ child, output: () => out, exited });
+      }
+    }, 100);
+    void exited.then((code) => {
+      clearInterval(timer);
+      reject(new Error(`npm start exited early with ${code}:\n${out}`));
+    });
+  });
+}
+
+/** Every live mariadbd whose command line names our datadir. */
+function mariadbdOnOurDatadir(): number[] {
+  const pids: number[] = [];
+  for (const name of fs.readdirSync('/proc')) {
+    if (!/^\d+$/.test(name)) continue;
+    try {
+      const cmd = fs.readFileSync(`/proc/${name}/cmdline`, 'utf8');
+      if (cmd.includes('mariadbd') && cmd.includes(dataDir)) pids.push(Number(name));
+    } catch {
+      /* gone */
+    }
+  }
+  return pids;
+}
+
+const appConnection = () =>
+  mariadb.createConnection({
+    host: '127.0.0.1',
+    port: dbPort,
+    user: 'counterweight',
+    password: fs.readFileSync(path.join(dataDir, 'db-password'), 'utf8').trim(),
+    database: 'counterweight',
+  });
+
+it('serves the app, stops on Ctrl-C without leftovers, and keeps the data across restarts', async () => {
+  const first = await start();
+  expect(first.output()).toContain('Loaded the starter library');
+  const health = await fetch(`http://127.0.0.1:${port}/api/health`);
+  expect(health.status).toBe(200);
+  expect(await health.json()).toMatchObject({ status: 'ok', db: 'up' });
+  const page = await fetch(`http://127.0.0.1:${port}/library/anything`, { headers: { Accept: 'text/html' } });
+  expect(page.status).toBe(200);
+  expect(await page.text()).toContain('<div id="root">');
+  expect(mariadbdOnOurDatadir()).toHaveLength(1);
+
+  // The app never connects as root: it has its own user, limited to its own database.
+  const conn = await appConnection();
+  await conn.query(
+    "INSERT INTO conservation_laws (slug, name, quantity, summary, position, created_at, updated_at) VALUES ('kept-across-restarts', 'marker', 'marker', 'marker', 99, NOW(), NOW())",
+  );
+  const [{ n: lawsBefore }] = await conn.query('SELECT COUNT(*) AS n FROM conservation_laws');
+  await expect(conn.query('SELECT COUNT(*) FROM mysql.user')).rejects.toThrow();
+  await conn.end();
+
+  process.kill(-first.child.pid!, 'SIGINT');
+  expect(await first.exited).toBe(0);
+  expect(first.output()).toContain('Stopped.');
+  expect(mariadbdOnOurDatadir()).toEqual([]);
+
+  const second = await start();
+  expect(second.output()).not.toContain('Loaded the starter library');
+  expect(second.output()).not.toContain('Created a new MariaDB datadir');
+  const again = await appConnection();
+  const rows = await again.query("SELECT slug FROM conservation_laws WHERE slug = 'kept-across-restarts'");
+  const [{ n: lawsAfter }] = await again.query('SELECT COUNT(*) AS n FROM conservation_laws');
+  await again.end();
+  expect(rows).toHaveLength(1);
+  expect(lawsAfter).toEqual(lawsBefore);
+
+  process.kill(second.child.pid!, 'SIGTERM');
+  expect(await second.exited).toBe(0);
+  expect(mariadbdOnOurDatadir()).toEqual([]);
+});
