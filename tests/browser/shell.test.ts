@@ -1,0 +1,155 @@
+/**
+ * The built web app, served by the real server on a real database, in Debian's Chromium:
+ * the shell renders in our fonts at phone and desktop sizes, navigation moves between sections,
+ * the Library shows what the API sends, and says so clearly when the API cannot be reached.
+ * Screenshots go to test-output/screenshots/.
+ */
+import fs from 'node:fs';
+import type { Server } from 'node:http';
+import path from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { createApp } from '../../server/app';
+import { ROOT } from '../../server/config';
+import { seedIfEmpty } from '../../server/db/seed';
+import { createTestDatabase, type TestDatabase } from '../support/db';
+
+jest.setTimeout(120_000);
+
+const shots = path.join(ROOT, 'test-output', 'screenshots');
+let t: TestDatabase;
+let server: Server;
+let base: string;
+let browser: Browser;
+
+beforeAll(async () => {
+  const dist = path.join(ROOT, 'dist');
+  if (!fs.existsSync(path.join(dist, 'index.html'))) {
+    throw new Error('dist/ is missing: run the browser tests through `npm test`, which builds the web app first.');
+  }
+  fs.mkdirSync(shots, { recursive: true });
+  t = await createTestDatabase();
+  await seedIfEmpty(t.sequelize, path.join(ROOT, 'content'));
+  const app = createApp({ sequelize: t.sequelize, version: 'test', staticDir: dist });
+  server = await new Promise<Server>((resolve) => {
+    const s = app.listen(0, '127.0.0.1', () => resolve(s));
+  });
+  base = `http://127.0.0.1:${(server.address() as { port: number }).port}`;
+  browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+    ],
+  });
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await new Promise((r) => server?.close(r));
+  await t?.drop();
+});
+
+async function open(width: number, height: number): Promise<Page> {
+  const context = await browser.newContext({ viewport: { width, height }, deviceScaleFactor: 1 });
+  const page = await context.newPage();
+  const problems: string[] = [];
+  page.on('pageerror', (e) => problems.push(e.message));
+  (page as Page & { problems: string[] }).problems = problems;
+  return page;
+}
+
+const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]`);
+
+/** The font families the page has actually loaded (FontFace objects with status "loaded"). */
+const loadedFamilies = (page: Page) =>
+  page.evaluate(async () => {
+    await document.fonts.ready;
+    return Array.from(document.fonts)
+      .filter((f) => f.status === 'loaded')
+      .map((f) => f.family.replace(/^"|"$/g, ''));
+  });
+
+const fontOf = (page: Page, selector: string) =>
+  page.locator(selector).first().evaluate((el) => getComputedStyle(el).fontFamily);
+
+describe.each([
+  ['phone', 390, 844, 'nav-bar'],
+  ['desktop', 1280, 800, 'nav-rail'],
+])('the shell on a %s (%ix%i)', (name, width, height, navId) => {
+  let page: Page;
+  beforeAll(async () => {
+    page = await open(width, height);
+  });
+  afterAll(() => page.context().close());
+
+  it('renders the Library in our fonts with the starter taxonomy', async () => {
+    await page.goto(base + '/');
+    await byTestId(page, 'screen-library').waitFor();
+    await page.getByText('Conservation of linear momentum').first().waitFor();
+    const families = await loadedFamilies(page);
+    for (const family of ['IBMPlexSans_400Regular', 'SourceSerif4_400Regular', 'IBMPlexMono_400Regular']) {
+      expect(families).toContain(family);
+    }
+    expect(await fontOf(page, '[data-testid="screen-library"] [role="heading"]')).toMatch(/SourceSerif4|IBMPlexSans/);
+    expect(await fontOf(page, `[data-testid="${navId}"] [data-testid="nav-library"] [dir]`)).toMatch(/IBMPlexSans/);
+    await page.screenshot({ path: path.join(shots, `${name}-library.png`), fullPage: true });
+  });
+
+  it(`shows the ${navId === 'nav-bar' ? 'bottom bar' : 'left rail'}`, async () => {
+    const nav = byTestId(page, navId);
+    await expect(nav.isVisible()).resolves.toBe(true);
+    const box = (await nav.boundingBox())!;
+    if (navId === 'nav-bar') {
+      expect(box.y + box.height).toBeGreaterThan(height - 4);
+      expect(box.width).toBeGreaterThan(width - 4);
+      expect(await byTestId(page, 'nav-rail').count()).toBe(0);
+    } else {
+      expect(box.x).toBeLessThan(4);
+      expect(box.height).toBeGreaterThan(height - 4);
+      expect(await byTestId(page, 'nav-bar').count()).toBe(0);
+    }
+  });
+
+  it('moves between sections and marks the active one', async () => {
+    const nav = byTestId(page, navId);
+    await nav.locator('[data-testid="nav-check"]').click();
+    await byTestId(page, 'screen-check').waitFor();
+    expect(new URL(page.url()).pathname).toBe('/check');
+    expect(await nav.locator('[data-testid="nav-check"]').getAttribute('aria-current')).toBe('page');
+    await page.screenshot({ path: path.join(shots, `${name}-check.png`) });
+
+    await nav.locator('[data-testid="nav-account"]').click();
+    await byTestId(page, 'screen-account').waitFor();
+    expect(new URL(page.url()).pathname).toBe('/account');
+
+    await nav.locator('[data-testid="nav-library"]').click();
+    await byTestId(page, 'screen-library').waitFor();
+    expect(new URL(page.url()).pathname).toBe('/');
+    expect(await nav.locator('[data-testid="nav-library"]').getAttribute('aria-current')).toBe('page');
+  });
+
+  it('opens a section from its address directly (SPA fallback)', async () => {
+    await page.goto(base + '/account');
+    await byTestId(page, 'screen-account').waitFor();
+    expect((page as Page & { problems: string[] }).problems).toEqual([]);
+  });
+});
+
+it('says clearly when the API cannot be reached, and recovers on retry', async () => {
+  const page = await open(390, 844);
+  let block = true;
+  await page.route('**/api/**', (route) => (block ? route.abort('connectionrefused') : route.continue()));
+  await page.goto(base + '/');
+  const message = page.getByText(/could not be reached/i).first();
+  await message.waitFor();
+  await page.screenshot({ path: path.join(shots, 'phone-api-down.png') });
+  block = false;
+  await page.getByRole('button', { name: /retry/i }).click();
+  await page.getByText('Conservation of linear momentum').first().waitFor();
+  await page.context().close();
+});
