@@ -7,7 +7,7 @@
  */
 // ESM-only packages that jest must transform (unified/remark/rehype and friends join this list).
 const esmOnly = [
-  '((jest-)?react-native|@react-native(-community)?)',
+  '((jest-)?react-native(-[a-z-]+)?|@react-native(-community)?)',
   'expo(nent)?',
   '@expo(nent)?/.*',
   '@expo-google-fonts/.*',

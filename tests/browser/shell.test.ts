@@ -66,13 +66,17 @@ async function open(width: number, height: number): Promise<Page> {
 const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]`);
 
 /** The font families the page has actually loaded (FontFace objects with status "loaded"). */
-const loadedFamilies = (page: Page) =>
-  page.evaluate(async () => {
-    await document.fonts.ready;
-    return Array.from(document.fonts)
-      .filter((f) => f.status === 'loaded')
-      .map((f) => f.family.replace(/^"|"$/g, ''));
+const loadedFamilies = async (page: Page): Promise<string[]> => {
+  // A string, not a function: babel would rewrite an async function for a page that lacks its helpers.
+  await page.evaluate('document.fonts.ready');
+  return page.evaluate(() => {
+    const families: string[] = [];
+    document.fonts.forEach((f) => {
+      if (f.status === 'loaded') families.push(f.family.replace(/^"|"$/g, ''));
+    });
+    return families;
   });
+};
 
 const fontOf = (page: Page, selector: string) =>
   page.locator(selector).first().evaluate((el) => getComputedStyle(el).fontFamily);

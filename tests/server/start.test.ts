@@ -22,7 +22,17 @@ beforeAll(async () => {
   port = await freePort();
   dbPort = await freePort();
 });
-afterAll(() => fs.rmSync(dataDir, { recursive: true, force: true }));
+const launched: ChildProcess[] = [];
+afterAll(async () => {
+  // A failed assertion must not leave the launcher (and its mariadbd) running.
+  for (const child of launched) {
+    if (child.exitCode === null && child.signalCode === null) {
+      process.kill(-child.pid!, 'SIGTERM');
+      await new Promise((r) => child.once('exit', r));
+    }
+  }
+  fs.rmSync(dataDir, { recursive: true, force: true });
+});
 
 interface Running {
   child: ChildProcess;
@@ -46,6 +56,7 @@ function start(): Promise<Running> {
       // The test run has just built dist/; a stale build would be rebuilt here, as for a user.
     },
   });
+  launched.push(child);
   let out = '';
   child.stdout!.on('data', (d) => (out += d));
   child.stderr!.on('data', (d) => (out += d));

@@ -1,0 +1,3 @@
+import { NotFoundScreen } from '@/components/screens/NotFoundScreen';
+
+export default NotFoundScreen;

@@ -1,0 +1,39 @@
+import { IBMPlexMono_400Regular } from '@expo-google-fonts/ibm-plex-mono/400Regular';
+import { IBMPlexSans_400Regular } from '@expo-google-fonts/ibm-plex-sans/400Regular';
+import { IBMPlexSans_600SemiBold } from '@expo-google-fonts/ibm-plex-sans/600SemiBold';
+import { SourceSerif4_400Regular } from '@expo-google-fonts/source-serif-4/400Regular';
+import { SourceSerif4_600SemiBold } from '@expo-google-fonts/source-serif-4/600SemiBold';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { useFonts } from 'expo-font';
+import { Slot } from 'expo-router';
+import { StatusBar } from 'expo-status-bar';
+import { useState } from 'react';
+import { SafeAreaProvider } from 'react-native-safe-area-context';
+import { createQueryClient } from '@/components/api';
+import { Shell } from '@/components/Shell';
+import { fonts } from '@/components/theme';
+
+export default function RootLayout() {
+  const [queryClient] = useState(createQueryClient);
+  const [fontsLoaded, fontError] = useFonts({
+    [fonts.sans]: IBMPlexSans_400Regular,
+    [fonts.sansSemiBold]: IBMPlexSans_600SemiBold,
+    [fonts.serif]: SourceSerif4_400Regular,
+    [fonts.serifSemiBold]: SourceSerif4_600SemiBold,
+    [fonts.mono]: IBMPlexMono_400Regular,
+  });
+
+  // First paint is in our own fonts; if they cannot load, the system fonts stand in rather than a blank page.
+  if (!fontsLoaded && !fontError) return null;
+
+  return (
+    <QueryClientProvider client={queryClient}>
+      <SafeAreaProvider>
+        <StatusBar style="dark" />
+        <Shell>
+          <Slot />
+        </Shell>
+      </SafeAreaProvider>
+    </QueryClientProvider>
+  );
+}

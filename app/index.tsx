@@ -1,0 +1,3 @@
+import { LibraryScreen } from '@/components/screens/LibraryScreen';
+
+export default LibraryScreen;

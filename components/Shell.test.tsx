@@ -1,0 +1,111 @@
+import { screen, within } from '@testing-library/react';
+import { Text } from 'react-native';
+import { Navigation } from './nav/Navigation';
+import { Shell } from './Shell';
+import { setPathname } from './testing/expoRouter';
+import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from './testing/render';
+
+jest.mock('expo-router', () => require('./testing/expoRouter'));
+
+const page = <Text>page</Text>;
+
+beforeEach(() => {
+  setPathname('/');
+  mockFetch({ '/api/health': () => jsonResponse(200, { status: 'ok', db: 'up', version: '0.1.0' }) });
+});
+
+describe('Shell', () => {
+  it('shows a bottom bar on a phone', () => {
+    setWindowWidth(390);
+    renderWithProviders(<Shell>{page}</Shell>);
+    const bar = screen.getByTestId('nav-bar');
+    expect(screen.queryByTestId('nav-rail')).toBeNull();
+    expect(bar.tagName).toBe('NAV');
+    expect(bar.getAttribute('aria-label')).toBe('Sections');
+    expect(screen.getByText('page')).toBeTruthy();
+  });
+
+  it('shows a left rail with the product name from 960 px', () => {
+    setWindowWidth(1280);
+    renderWithProviders(<Shell>{page}</Shell>);
+    const rail = screen.getByTestId('nav-rail');
+    expect(screen.queryByTestId('nav-bar')).toBeNull();
+    expect(within(rail).getByText('Counterweight')).toBeTruthy();
+  });
+
+  it('switches exactly at 960 px', () => {
+    setWindowWidth(959);
+    const { unmount } = renderWithProviders(<Shell>{page}</Shell>);
+    expect(screen.getByTestId('nav-bar')).toBeTruthy();
+    unmount();
+    setWindowWidth(960);
+    renderWithProviders(<Shell>{page}</Shell>);
+    expect(screen.getByTestId('nav-rail')).toBeTruthy();
+  });
+
+  it('offers a reader Library, Claim check and Account only', () => {
+    setWindowWidth(390);
+    renderWithProviders(<Shell>{page}</Shell>);
+    const labels = within(screen.getByTestId('nav-bar'))
+      .getAllByRole('link')
+      .map((link) => link.textContent);
+    expect(labels).toEqual(['Library', 'Claim check', 'Account']);
+  });
+
+  it('carries the advice disclaimer and the server version in the footer', async () => {
+    setWindowWidth(390);
+    renderWithProviders(<Shell>{page}</Shell>);
+    const footer = screen.getByTestId('footer');
+    expect(footer.textContent).toContain('not legal, financial or investment advice');
+    expect(await within(footer).findByText('Counterweight 0.1.0')).toBeTruthy();
+    expect(screen.queryByTestId('db-down')).toBeNull();
+  });
+
+  it('says so when the database is down', async () => {
+    mockFetch({ '/api/health': () => jsonResponse(503, { status: 'degraded', db: 'down', version: '0.1.0' }) });
+    setWindowWidth(1280);
+    renderWithProviders(<Shell>{page}</Shell>);
+    expect((await screen.findByTestId('db-down')).textContent).toContain('The database is not answering.');
+  });
+});
+
+describe('Navigation', () => {
+  it.each([
+    ['editor', 'nav-desk'],
+    ['moderator', 'nav-queue'],
+    ['admin', 'nav-admin'],
+  ] as const)('offers the %s role its own section', (role, testID) => {
+    renderWithProviders(<Navigation variant="rail" role={role} />);
+    expect(screen.getByTestId(testID)).toBeTruthy();
+    const others = ['nav-desk', 'nav-queue', 'nav-admin'].filter((id) => id !== testID);
+    for (const id of others) expect(screen.queryByTestId(id)).toBeNull();
+    for (const id of ['nav-library', 'nav-check', 'nav-account']) expect(screen.getByTestId(id)).toBeTruthy();
+  });
+
+  it('hides the role sections from a reader', () => {
+    renderWithProviders(<Navigation variant="bar" role="reader" />);
+    for (const id of ['nav-desk', 'nav-queue', 'nav-admin']) expect(screen.queryByTestId(id)).toBeNull();
+  });
+
+  it('links each item to its section', () => {
+    renderWithProviders(<Navigation variant="bar" role="reader" />);
+    expect(screen.getByTestId('nav-library').getAttribute('href')).toBe('/');
+    expect(screen.getByTestId('nav-check').getAttribute('href')).toBe('/check');
+    expect(screen.getByTestId('nav-account').getAttribute('href')).toBe('/account');
+  });
+
+  it.each(['bar', 'rail'] as const)('marks the active section as the current page in the %s', (variant) => {
+    setPathname('/check');
+    renderWithProviders(<Navigation variant={variant} role="reader" />);
+    expect(screen.getByTestId('nav-check').getAttribute('aria-current')).toBe('page');
+    expect(screen.getByTestId('nav-library').hasAttribute('aria-current')).toBe(false);
+    expect(screen.getByTestId('nav-account').hasAttribute('aria-current')).toBe(false);
+  });
+
+  it('marks Library only on the home path and a section on its subpaths', () => {
+    setPathname('/account/settings');
+    renderWithProviders(<Navigation variant="bar" role="reader" />);
+    expect(screen.getByTestId('nav-account').getAttribute('aria-current')).toBe('page');
+    expect(screen.getByTestId('nav-library').hasAttribute('aria-current')).toBe(false);
+  });
+});

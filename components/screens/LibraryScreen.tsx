@@ -1,0 +1,179 @@
+import { useState } from 'react';
+import { StyleSheet, Text, TextInput, View } from 'react-native';
+import type { ConservationLawDto, MechanismClassDto } from '@/shared/api-types';
+import { useTaxonomy } from '../api';
+import { colors, focusRing, radius, space, type } from '../theme';
+import { ErrorNotice } from '../ui/ErrorNotice';
+import { Loading } from '../ui/Loading';
+import { Notice } from '../ui/Notice';
+import { Screen, Section } from '../ui/Screen';
+
+/** The home: search, the taxonomy to browse by, and what was revised lately. */
+export function LibraryScreen() {
+  return (
+    <Screen
+      testID="screen-library"
+      title="Library"
+      lead="The standard objections to impossible-machine claims: each written once, checked by a second expert, versioned and citable."
+    >
+      <SearchField />
+      <Taxonomy />
+      <Section title="Recently revised">
+        <Notice testID="recent-empty" title="No entries are published yet.">
+          When editors publish entries and their revisions, the latest appear here, newest first.
+        </Notice>
+      </Section>
+    </Screen>
+  );
+}
+
+function SearchField() {
+  const [focused, setFocused] = useState(false);
+  return (
+    <View style={styles.search}>
+      <Text style={type.uiStrong}>Search the library</Text>
+      <TextInput
+        testID="library-search"
+        aria-label="Search the library"
+        role="searchbox"
+        placeholder="A device, a claim, a phrase from a pitch"
+        placeholderTextColor={colors.inkMuted}
+        onFocus={() => setFocused(true)}
+        onBlur={() => setFocused(false)}
+        style={[styles.input, focused && styles.inputFocused]}
+      />
+      <Text testID="library-search-hint" style={type.caption}>
+        Search across entries comes with the published entries. Until then, browse the conservation laws and
+        mechanism classes below.
+      </Text>
+    </View>
+  );
+}
+
+function Taxonomy() {
+  const { data, error, isPending, refetch } = useTaxonomy();
+
+  if (isPending) {
+    return <Loading testID="taxonomy-loading" label="Loading the conservation laws and mechanism classes…" />;
+  }
+  if (error) {
+    return (
+      <ErrorNotice
+        testID="taxonomy-error"
+        error={error}
+        what="the conservation laws and mechanism classes"
+        onRetry={() => void refetch()}
+      />
+    );
+  }
+  if (data.laws.length === 0 && data.classes.length === 0) {
+    return (
+      <Notice testID="taxonomy-empty" title="The taxonomy is empty.">
+        <Text style={type.mono}>npm start</Text> loads the starter laws and classes from{' '}
+        <Text style={type.mono}>content/taxonomy.yml</Text> into an empty database. Restart it against a fresh
+        database, or ask an editor to add them.
+      </Notice>
+    );
+  }
+  return (
+    <>
+      <Section title="Conservation laws">
+        <LawList laws={data.laws} />
+      </Section>
+      <Section title="Mechanism classes">
+        <ClassList classes={data.classes} />
+      </Section>
+    </>
+  );
+}
+
+function LawList({ laws }: { laws: ConservationLawDto[] }) {
+  if (laws.length === 0) {
+    return <Notice title="No conservation laws are listed yet.">An editor can add them to the taxonomy.</Notice>;
+  }
+  return (
+    <View role="list" testID="law-list" style={styles.list}>
+      {[...laws]
+        .sort((a, b) => a.position - b.position)
+        .map((law) => (
+          <View role="listitem" key={law.slug} testID={`law-${law.slug}`} style={styles.row}>
+            <Text style={type.uiStrong}>{law.name}</Text>
+            <Text style={type.caption}>
+              {law.symmetry ? (
+                <>
+                  Symmetry: <Text style={styles.value}>{law.symmetry}</Text>
+                </>
+              ) : (
+                'Not tied to a symmetry'
+              )}
+            </Text>
+            <Text style={type.body}>{law.summary}</Text>
+          </View>
+        ))}
+    </View>
+  );
+}
+
+function ClassList({ classes }: { classes: MechanismClassDto[] }) {
+  if (classes.length === 0) {
+    return <Notice title="No mechanism classes are listed yet.">An editor can add them to the taxonomy.</Notice>;
+  }
+  const ordered = [...classes].sort((a, b) => a.position - b.position);
+  const known = new Set(ordered.map((c) => c.slug));
+  const roots = ordered.filter((c) => c.parentSlug === null || !known.has(c.parentSlug));
+  return (
+    <View role="list" testID="class-list" style={styles.list}>
+      {roots.map((root) => (
+        <View role="listitem" key={root.slug} style={styles.row}>
+          <ClassNode node={root} all={ordered} depth={0} />
+        </View>
+      ))}
+    </View>
+  );
+}
+
+/** A class, then the classes beneath it, each level set in from its parent. */
+function ClassNode({ node, all, depth }: { node: MechanismClassDto; all: MechanismClassDto[]; depth: number }) {
+  const children = all.filter((c) => c.parentSlug === node.slug);
+  return (
+    <View testID={`class-${node.slug}`} style={depth > 0 ? styles.child : styles.node}>
+      <Text style={depth > 0 ? type.ui : type.uiStrong}>{node.name}</Text>
+      <Text style={depth > 0 ? type.caption : type.body}>{node.summary}</Text>
+      {children.length > 0 ? (
+        <View role="list" style={styles.children}>
+          {children.map((child) => (
+            <View role="listitem" key={child.slug}>
+              <ClassNode node={child} all={all} depth={depth + 1} />
+            </View>
+          ))}
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  search: { gap: space.xs, marginTop: space.sm },
+  input: {
+    ...type.ui,
+    ...focusRing,
+    backgroundColor: colors.surface,
+    borderColor: colors.ruleStrong,
+    borderRadius: radius.sm,
+    borderWidth: 1,
+    minHeight: 44,
+    paddingHorizontal: space.sm,
+  },
+  inputFocused: { borderColor: colors.brass },
+  list: { borderTopColor: colors.rule, borderTopWidth: 1 },
+  row: {
+    gap: space.xxs,
+    paddingVertical: space.md,
+    borderBottomColor: colors.rule,
+    borderBottomWidth: 1,
+  },
+  value: { color: colors.ink },
+  children: { gap: space.sm, marginTop: space.xs },
+  node: { gap: space.xxs },
+  child: { gap: 2, paddingLeft: space.md, borderLeftColor: colors.rule, borderLeftWidth: 2 },
+});

@@ -1,0 +1,89 @@
+/**
+ * Counterweight's look in one place: colours, spacing, type and fonts.
+ * Results are never coloured on a red-to-green scale; marks stay neutral (DESIGN.md §6).
+ */
+import type { TextStyle } from 'react-native';
+
+export const colors = {
+  /** Warm paper: the page. */
+  paper: '#F7F4EE',
+  /** A shade deeper than the page: the rail, the bars, quiet panels. */
+  paperDeep: '#EFEAE0',
+  /** Lighter than the page: fields and cards that sit on it. */
+  surface: '#FFFDF9',
+  /** Graphite: all reading text. */
+  ink: '#1E232B',
+  /** Secondary text: captions, hints, inactive navigation. */
+  inkMuted: '#596170',
+  /** Hairlines between things. */
+  rule: '#DCD5C8',
+  /** Borders that must be seen: fields, buttons at rest. */
+  ruleStrong: '#B9B0A0',
+  /** The one accent: links, the active section, primary actions. */
+  teal: '#1F6F6B',
+  /** A wash of the accent behind the active section in the rail. */
+  tealWash: '#E3EDEB',
+  /** Highlights and focus. */
+  brass: '#A8782B',
+  /** A wash of brass behind notices. */
+  brassWash: '#F4EBDA',
+} as const;
+
+export const space = {
+  xxs: 4,
+  xs: 8,
+  sm: 12,
+  md: 16,
+  lg: 24,
+  xl: 32,
+  xxl: 48,
+} as const;
+
+export const radius = {
+  sm: 4,
+  md: 8,
+  pill: 999,
+} as const;
+
+/**
+ * Family names as registered with expo-font in app/_layout.tsx; on the web they are the CSS
+ * font-family names. Each weight is its own family, so styles pick a family, not a fontWeight.
+ */
+export const fonts = {
+  sans: 'IBMPlexSans_400Regular',
+  sansSemiBold: 'IBMPlexSans_600SemiBold',
+  serif: 'SourceSerif4_400Regular',
+  serifSemiBold: 'SourceSerif4_600SemiBold',
+  mono: 'IBMPlexMono_400Regular',
+} as const;
+
+/** Sans for the interface, serif for reading, mono for values and formulas. */
+export const type = {
+  display: { fontFamily: fonts.serifSemiBold, fontSize: 32, lineHeight: 40, color: colors.ink },
+  title: { fontFamily: fonts.serifSemiBold, fontSize: 22, lineHeight: 30, color: colors.ink },
+  heading: { fontFamily: fonts.sansSemiBold, fontSize: 18, lineHeight: 26, color: colors.ink },
+  reading: { fontFamily: fonts.serif, fontSize: 18, lineHeight: 28, color: colors.ink },
+  body: { fontFamily: fonts.serif, fontSize: 16, lineHeight: 25, color: colors.ink },
+  ui: { fontFamily: fonts.sans, fontSize: 16, lineHeight: 22, color: colors.ink },
+  uiStrong: { fontFamily: fonts.sansSemiBold, fontSize: 16, lineHeight: 22, color: colors.ink },
+  caption: { fontFamily: fonts.sans, fontSize: 14, lineHeight: 20, color: colors.inkMuted },
+  small: { fontFamily: fonts.sans, fontSize: 12, lineHeight: 17, color: colors.inkMuted },
+  mono: { fontFamily: fonts.mono, fontSize: 14, lineHeight: 20, color: colors.ink },
+} as const satisfies Record<string, TextStyle>;
+
+export const layout = {
+  /** From this window width on, the left rail replaces the bottom bar. */
+  wideMinWidth: 960,
+  /** Reading column. */
+  contentMaxWidth: 760,
+  railWidth: 232,
+} as const;
+
+/**
+ * Brass focus ring for anything that takes keyboard focus. The browser draws it only on keyboard
+ * focus (`:focus-visible`); the style only sets its colour and offset.
+ */
+export const focusRing = {
+  outlineColor: colors.brass,
+  outlineOffset: 2,
+} as const;
