@@ -17,6 +17,8 @@ const esmOnly = [
   '@react-navigation/.*',
   'react-native-svg',
   '@tanstack/.*',
+  'd3-.*',
+  'internmap',
 ];
 
 const nodeProject = (name, testMatch, extra = {}) => ({
