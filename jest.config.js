@@ -1,6 +1,7 @@
 /**
  * Three jest projects, all run by `npm test` (through tests/run.mjs, which first starts a
  * throwaway MariaDB and builds the web app):
+ *  - shared:  the computing core (worksheets, check kit) against outside references
  *  - server:  supertest against the real Express app and a real MariaDB
  *  - app:     component tests of the Expo app on the web target (jest-expo/web)
  *  - browser: the built web app served by the real server, driven in Debian's Chromium
@@ -33,6 +34,7 @@ const nodeProject = (name, testMatch, extra = {}) => ({
 
 module.exports = {
   projects: [
+    nodeProject('shared', ['<rootDir>/shared/**/*.test.ts']),
     nodeProject('server', ['<rootDir>/tests/server/**/*.test.ts', '<rootDir>/server/**/*.test.ts']),
     {
       displayName: 'app',
