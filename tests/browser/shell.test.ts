@@ -4,66 +4,17 @@
  * the Library shows what the API sends, and says so clearly when the API cannot be reached.
  * Screenshots go to test-output/screenshots/.
  */
-import fs from 'node:fs';
-import type { Server } from 'node:http';
 import path from 'node:path';
-import { chromium, type Browser, type Page } from 'playwright-core';
-import { createApp } from '../../server/app';
-import { ROOT } from '../../server/config';
-import { seedIfEmpty } from '../../server/db/seed';
-import { createTestDatabase, type TestDatabase } from '../support/db';
+import type { Page } from 'playwright-core';
+import { byTestId, screenshotDir as shots, startHarness, type Harness } from '../support/browser';
 
 jest.setTimeout(120_000);
 
-const shots = path.join(ROOT, 'test-output', 'screenshots');
-let t: TestDatabase;
-let server: Server;
-let base: string;
-let browser: Browser;
-
+let h: Harness;
 beforeAll(async () => {
-  const dist = path.join(ROOT, 'dist');
-  if (!fs.existsSync(path.join(dist, 'index.html'))) {
-    throw new Error('dist/ is missing: run the browser tests through `npm test`, which builds the web app first.');
-  }
-  fs.mkdirSync(shots, { recursive: true });
-  t = await createTestDatabase();
-  await seedIfEmpty(t.sequelize, path.join(ROOT, 'content'));
-  const app = createApp({ sequelize: t.sequelize, version: 'test', staticDir: dist });
-  server = await new Promise<Server>((resolve) => {
-    const s = app.listen(0, '127.0.0.1', () => resolve(s));
-  });
-  base = `http://127.0.0.1:${(server.address() as { port: number }).port}`;
-  browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--no-first-run',
-      '--disable-quic',
-    ],
-  });
+  h = await startHarness();
 });
-
-afterAll(async () => {
-  await browser?.close();
-  await new Promise((r) => server?.close(r));
-  await t?.drop();
-});
-
-async function open(width: number, height: number): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width, height }, deviceScaleFactor: 1 });
-  const page = await context.newPage();
-  const problems: string[] = [];
-  page.on('pageerror', (e) => problems.push(e.message));
-  (page as Page & { problems: string[] }).problems = problems;
-  return page;
-}
-
-const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]`);
+afterAll(() => h?.close());
 
 /** The font families the page has actually loaded (FontFace objects with status "loaded"). */
 const loadedFamilies = async (page: Page): Promise<string[]> => {
@@ -85,14 +36,14 @@ describe.each([
   ['phone', 390, 844, 'nav-bar'],
   ['desktop', 1280, 800, 'nav-rail'],
 ])('the shell on a %s (%ix%i)', (name, width, height, navId) => {
-  let page: Page;
+  let page: Page & { problems: string[] };
   beforeAll(async () => {
-    page = await open(width, height);
+    page = await h.open(width, height);
   });
   afterAll(() => page.context().close());
 
   it('renders the Library in our fonts with the starter taxonomy', async () => {
-    await page.goto(base + '/');
+    await page.goto(h.base + '/');
     await byTestId(page, 'screen-library').waitFor();
     await page.getByText('Conservation of linear momentum').first().waitFor();
     const families = await loadedFamilies(page);
@@ -138,17 +89,17 @@ describe.each([
   });
 
   it('opens a section from its address directly (SPA fallback)', async () => {
-    await page.goto(base + '/account');
+    await page.goto(h.base + '/account');
     await byTestId(page, 'screen-account').waitFor();
-    expect((page as Page & { problems: string[] }).problems).toEqual([]);
+    expect(page.problems).toEqual([]);
   });
 });
 
 it('says clearly when the API cannot be reached, and recovers on retry', async () => {
-  const page = await open(390, 844);
+  const page = await h.open(390, 844);
   let block = true;
   await page.route('**/api/**', (route) => (block ? route.abort('connectionrefused') : route.continue()));
-  await page.goto(base + '/');
+  await page.goto(h.base + '/');
   const message = page.getByText(/could not be reached/i).first();
   await message.waitFor();
   await page.screenshot({ path: path.join(shots, 'phone-api-down.png') });
