@@ -10,7 +10,7 @@ import type { Sequelize } from 'sequelize';
 import { createApp } from './app';
 import { buildWeb, webBuildIsStale } from './build';
 import { loadConfig, ROOT } from './config';
-import { ensureMariaDbInstalled, MariaDbServer } from './db/mariadb';
+import { ensureMariaDbInstalled, MariaDbServer, portIsFree } from './db/mariadb';
 import { migrateUp } from './db/migrate';
 import { seedIfEmpty } from './db/seed';
 import { createSequelize } from './db/sequelize';
@@ -54,6 +54,10 @@ async function main() {
   process.on('SIGTERM', () => void shutdown('SIGTERM'));
 
   try {
+    // Before touching the database: a second launcher must not take over the first one's MariaDB.
+    if (!(await portIsFree(config.port, config.host))) {
+      throw new Error(`port ${config.port} is already in use (is Counterweight already running?). Stop it, or set PORT.`);
+    }
     if (process.env.SKIP_WEB_BUILD !== '1' && webBuildIsStale(ROOT, config.staticDir)) {
       buildWeb(ROOT, config.staticDir, say);
     }

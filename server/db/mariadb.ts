@@ -77,6 +77,15 @@ const isAlive = (pid: number): boolean => {
   }
 };
 
+/** True when nothing listens on host:port yet. */
+export function portIsFree(port: number, host = '127.0.0.1'): Promise<boolean> {
+  return new Promise((resolve) => {
+    const srv = net.createServer();
+    srv.once('error', () => resolve(false));
+    srv.listen(port, host, () => srv.close(() => resolve(true)));
+  });
+}
+
 /** Asks the OS for a free TCP port on 127.0.0.1. */
 export function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -176,22 +185,27 @@ export class MariaDbServer {
     return true;
   }
 
-  /** Stops a mariadbd that an earlier run left behind on this datadir (after a crash or kill -9). */
-  private async stopLeftover(): Promise<void> {
+  /** The pid of a live mariadbd on this datadir (started by another process), or null. */
+  runningPid(): number | null {
     let pid: number;
     try {
       pid = Number(fs.readFileSync(this.pidFile, 'utf8').trim());
     } catch {
-      return;
+      return null;
     }
-    if (!pid || !isAlive(pid)) return;
-    let cmdline = '';
+    if (!pid || !isAlive(pid)) return null;
     try {
-      cmdline = fs.readFileSync(`/proc/${pid}/cmdline`, 'utf8');
+      if (!fs.readFileSync(`/proc/${pid}/cmdline`, 'utf8').includes(this.dataDir)) return null;
     } catch {
       /* not Linux: trust the pid file */
     }
-    if (cmdline && !cmdline.includes(this.dataDir)) return;
+    return pid;
+  }
+
+  /** Stops a mariadbd that an earlier run left behind on this datadir (after a crash or kill -9). */
+  private async stopLeftover(): Promise<void> {
+    const pid = this.runningPid();
+    if (pid === null) return;
     process.kill(pid, 'SIGTERM');
     for (let i = 0; i < 300 && isAlive(pid); i++) await sleep(100);
   }

@@ -24,7 +24,8 @@ export async function migrateUp(sequelize: Sequelize, log?: (msg: string) => voi
   return done.map((m) => m.name);
 }
 
-export async function migrateDown(sequelize: Sequelize, to: string | 0 = 0, log?: (msg: string) => void): Promise<string[]> {
-  const done = await migrator(sequelize, log).down({ to });
+/** Reverts the last migration, or every migration down to and including `to` (0: all of them). */
+export async function migrateDown(sequelize: Sequelize, to?: string | 0, log?: (msg: string) => void): Promise<string[]> {
+  const done = await migrator(sequelize, log).down(to === undefined ? {} : { to });
   return done.map((m) => m.name);
 }

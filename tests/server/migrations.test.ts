@@ -22,7 +22,8 @@ it('applies every migration, rolls all back, and applies them again', async () =
   expect(await migrateUp(t.sequelize)).toEqual(migrations.map((m) => m.name));
   expect(await tables()).toEqual(['conservation_laws', 'mechanism_classes']);
   expect(await migrateUp(t.sequelize)).toEqual([]);
-  expect(await migrateDown(t.sequelize)).toEqual([...migrations].reverse().map((m) => m.name));
+  expect(await migrateDown(t.sequelize)).toEqual([migrations[migrations.length - 1].name]);
+  await migrateDown(t.sequelize, 0);
   expect(await tables()).toEqual([]);
   expect(await migrateUp(t.sequelize)).toEqual(migrations.map((m) => m.name));
 });
