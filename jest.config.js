@@ -39,6 +39,8 @@ module.exports = {
     {
       displayName: 'app',
       preset: 'jest-expo/web',
+      // d3-scale and d3-shape ship ES modules as .mjs, which the preset does not transform.
+      transform: { '\\.mjs$': ['babel-jest', { caller: { name: 'metro', bundler: 'metro', platform: 'web' } }] },
       testMatch: ['<rootDir>/components/**/*.test.tsx', '<rootDir>/tests/app/**/*.test.tsx'],
       transformIgnorePatterns: ['/node_modules/(?!(' + esmOnly.join('|') + ')/)'],
       moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },

@@ -43,13 +43,13 @@ describe('Shell', () => {
     expect(screen.getByTestId('nav-rail')).toBeTruthy();
   });
 
-  it('offers a reader Library, Claim check and Account only', () => {
+  it('offers a reader Library, Claim check, Check kit and Account only', () => {
     setWindowWidth(390);
     renderWithProviders(<Shell>{page}</Shell>);
     const labels = within(screen.getByTestId('nav-bar'))
       .getAllByRole('link')
       .map((link) => link.textContent);
-    expect(labels).toEqual(['Library', 'Claim check', 'Account']);
+    expect(labels).toEqual(['Library', 'Claim check', 'Check kit', 'Account']);
   });
 
   it('carries the advice disclaimer and the server version in the footer', async () => {

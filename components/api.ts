@@ -6,6 +6,7 @@
  */
 import { QueryClient, useQuery } from '@tanstack/react-query';
 import type { ApiErrorBody, HealthResponse, TaxonomyResponse } from '@/shared/api-types';
+import type { Worksheet } from '@/shared/worksheet/schema';
 
 export class ApiError extends Error {
   override readonly name = 'ApiError';
@@ -94,7 +95,26 @@ export function createQueryClient(): QueryClient {
 export const queryKeys = {
   health: ['health'] as const,
   taxonomy: ['taxonomy'] as const,
+  worksheets: ['worksheets'] as const,
+  worksheet: (name: string) => ['worksheets', name] as const,
 };
+
+/** One starter worksheet as `GET /api/worksheets` lists it. */
+export interface WorksheetSummary {
+  name: string;
+  title: string;
+  summary: string;
+}
+
+/** `GET /api/worksheets` */
+export interface WorksheetListResponse {
+  worksheets: WorksheetSummary[];
+}
+
+/** `GET /api/worksheets/:name` */
+export interface WorksheetResponse {
+  worksheet: Worksheet;
+}
 
 /** `GET /api/health`; a degraded server (503) is data here, not an error. */
 export function useHealth() {
@@ -109,6 +129,24 @@ export function useTaxonomy() {
   return useQuery({
     queryKey: queryKeys.taxonomy,
     queryFn: ({ signal }) => apiGet<TaxonomyResponse>('/api/taxonomy', { signal }),
+    staleTime: 5 * 60 * 1000,
+  });
+}
+
+/** `GET /api/worksheets`: the starter worksheets, by name, title and summary. */
+export function useWorksheetList() {
+  return useQuery({
+    queryKey: queryKeys.worksheets,
+    queryFn: ({ signal }) => apiGet<WorksheetListResponse>('/api/worksheets', { signal }),
+    staleTime: 5 * 60 * 1000,
+  });
+}
+
+/** `GET /api/worksheets/:name`: one worksheet, to evaluate in the browser. */
+export function useWorksheet(name: string) {
+  return useQuery({
+    queryKey: queryKeys.worksheet(name),
+    queryFn: ({ signal }) => apiGet<WorksheetResponse>(`/api/worksheets/${encodeURIComponent(name)}`, { signal }),
     staleTime: 5 * 60 * 1000,
   });
 }

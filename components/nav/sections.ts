@@ -1,7 +1,7 @@
 /** The app's sections, in navigation order, and which roles are offered each (DESIGN.md §5). */
 import type { Role } from '../viewer';
 
-export type SectionKey = 'library' | 'check' | 'desk' | 'queue' | 'admin' | 'account';
+export type SectionKey = 'library' | 'check' | 'checks' | 'desk' | 'queue' | 'admin' | 'account';
 
 export interface NavSection {
   key: SectionKey;
@@ -15,6 +15,7 @@ const everyone: readonly Role[] = ['reader', 'contributor', 'editor', 'moderator
 export const sections: readonly NavSection[] = [
   { key: 'library', href: '/', label: 'Library', roles: everyone },
   { key: 'check', href: '/check', label: 'Claim check', roles: everyone },
+  { key: 'checks', href: '/checks', label: 'Check kit', roles: everyone },
   { key: 'desk', href: '/desk', label: 'Desk', roles: ['editor'] },
   { key: 'queue', href: '/queue', label: 'Queue', roles: ['moderator'] },
   { key: 'admin', href: '/admin', label: 'Admin', roles: ['admin'] },

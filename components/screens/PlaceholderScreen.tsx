@@ -4,7 +4,7 @@ import { type } from '../theme';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 
-type PlannedSection = Exclude<SectionKey, 'library'>;
+type PlannedSection = Exclude<SectionKey, 'library' | 'checks'>;
 
 interface Plan {
   title: string;

@@ -1,0 +1,3 @@
+import { CheckListScreen } from '@/components/checks/CheckListScreen';
+
+export default CheckListScreen;

@@ -1,0 +1,161 @@
+/**
+ * The numeric cores of the check kit, in SI. The checks call these, and kit-functions.ts exposes the
+ * same functions to worksheets, so each formula is written once. Each throws CheckRangeError naming
+ * the argument when its figures are outside the formula's domain.
+ */
+import { C_LIGHT, G0 } from './constants';
+import { CheckRangeError } from './errors';
+import { fmt } from './format';
+
+function finite(field: string, v: number): void {
+  if (typeof v !== 'number' || !Number.isFinite(v)) throw new CheckRangeError(field, `${field} must be a finite number.`);
+}
+function nonNegative(field: string, v: number): void {
+  finite(field, v);
+  if (v < 0) throw new CheckRangeError(field, `${field} must not be negative (got ${fmt(v)}).`);
+}
+function positive(field: string, v: number): void {
+  finite(field, v);
+  if (!(v > 0)) throw new CheckRangeError(field, `${field} must be more than zero (got ${fmt(v)}).`);
+}
+
+/** Largest thrust (N) of a device that emits only radiation, from the power P (W) it radiates: P/c. */
+export function photonThrustBound(P: number): number {
+  nonNegative('P', P);
+  return P / C_LIGHT;
+}
+
+/** Speed (m/s) at which a constant thrust F (N) delivers kinetic power F·v equal to the input power P (W): P/F. */
+export function breakEvenSpeed(P: number, F: number): number {
+  nonNegative('P', P);
+  positive('F', F);
+  return P / F;
+}
+
+/** Mechanical power (W) a thrust F (N) delivers to a body moving at v (m/s) along it: F·v. */
+export function kineticPower(F: number, v: number): number {
+  finite('F', F);
+  finite('v', v);
+  return F * v;
+}
+
+function carnotTemperatures(Th: number, Tc: number): void {
+  positive('Th', Th);
+  positive('Tc', Tc);
+  if (!(Tc < Th)) {
+    throw new CheckRangeError('Tc', `The cold temperature (${fmt(Tc)} K) must be below the hot one (${fmt(Th)} K).`);
+  }
+}
+
+/** Carnot's bound on the efficiency of a heat engine between Th and Tc (K): 1 − Tc/Th. */
+export function carnotEfficiency(Th: number, Tc: number): number {
+  carnotTemperatures(Th, Tc);
+  return 1 - Tc / Th;
+}
+
+/** Carnot's bound on a heat pump's heating COP (heat delivered at Th per unit work): Th/(Th − Tc). */
+export function carnotCopHeating(Th: number, Tc: number): number {
+  carnotTemperatures(Th, Tc);
+  return Th / (Th - Tc);
+}
+
+/** Carnot's bound on a refrigerator's cooling COP (heat drawn at Tc per unit work): Tc/(Th − Tc). */
+export function carnotCopCooling(Th: number, Tc: number): number {
+  carnotTemperatures(Th, Tc);
+  return Tc / (Th - Tc);
+}
+
+/** Exhaust speed (m/s) from a specific impulse Isp (s): Isp·g0. */
+export function exhaustSpeedFromIsp(Isp: number): number {
+  nonNegative('Isp', Isp);
+  return Isp * G0;
+}
+
+/** Tsiolkovsky's ideal velocity change (m/s): v_e ln(m0/m1), for exhaust speed v_e and masses m0 ≥ m1 > 0. */
+export function tsiolkovskyDv(v_e: number, m0: number, m1: number): number {
+  nonNegative('v_e', v_e);
+  positive('m1', m1);
+  positive('m0', m0);
+  if (m1 > m0) throw new CheckRangeError('m1', `The final mass (${fmt(m1)} kg) cannot exceed the starting mass (${fmt(m0)} kg).`);
+  return v_e * Math.log(m0 / m1);
+}
+
+/**
+ * Force (N) on a straight lead of length L (m) carrying current I (A) across a field B (T), at its
+ * largest (lead perpendicular to the field): |I·L·B|.
+ */
+export function leadLorentzForce(I: number, L: number, B: number): number {
+  finite('I', I);
+  nonNegative('L', L);
+  finite('B', B);
+  return Math.abs(I * L * B);
+}
+
+/** Recoil (N) of radiating power P (W) with a net asymmetry fraction f (0…1) in one direction: f·P/c. */
+export function radiationRecoilForce(P: number, f: number): number {
+  nonNegative('P', P);
+  nonNegative('f', f);
+  if (f > 1) throw new CheckRangeError('f', `The asymmetry fraction must be between 0 and 1 (got ${fmt(f)}).`);
+  return (f * P) / C_LIGHT;
+}
+
+/** Apparent force (N) from a balance's thermal drift: sensitivity k (N/K) times temperature rise ΔT (K), |k·ΔT|. */
+export function thermalDriftForce(k: number, dT: number): number {
+  finite('k', k);
+  finite('dT', dT);
+  return Math.abs(k * dT);
+}
+
+/** Reaction force (N) of gas leaving at mass rate mdot (kg/s) and speed v (m/s), all one way: mdot·v. */
+export function outgassingForce(mdot: number, v: number): number {
+  nonNegative('mdot', mdot);
+  nonNegative('v', v);
+  return mdot * v;
+}
+
+/** Angular gyro-frequency (rad/s) of charge q (C) of mass m (kg) and Lorentz factor γ in field B (T): |q|B/(γm). */
+export function gyroFrequency(q: number, B: number, m: number, gamma: number): number {
+  finite('q', q);
+  finite('B', B);
+  positive('m', m);
+  finite('gamma', gamma);
+  if (gamma < 1) throw new CheckRangeError('gamma', `The Lorentz factor must be at least 1 (got ${fmt(gamma)}).`);
+  return (Math.abs(q) * Math.abs(B)) / (gamma * m);
+}
+
+/** Gyro-radius (m) of a charge q (C) with momentum p_perp (kg m/s) across field B (T): p⊥/(|q|B). */
+export function gyroRadius(p_perp: number, q: number, B: number): number {
+  nonNegative('p_perp', p_perp);
+  finite('q', q);
+  finite('B', B);
+  if (q === 0) throw new CheckRangeError('q', 'The charge must not be zero: a neutral particle does not gyrate.');
+  if (B === 0) throw new CheckRangeError('B', 'The field must not be zero: in no field the orbit is straight.');
+  return p_perp / (Math.abs(q) * Math.abs(B));
+}
+
+/** Lorentz factor from kinetic energy K (J) and rest mass m (kg): 1 + K/(m c²). */
+export function gammaFromKineticEnergy(K: number, m: number): number {
+  nonNegative('K', K);
+  positive('m', m);
+  return 1 + K / (m * C_LIGHT * C_LIGHT);
+}
+
+/** First-law balance (J) of a cycle: energy in − energy out − increase of stored energy. */
+export function firstLawBalance(E_in: number, E_out: number, dE_stored: number): number {
+  finite('E_in', E_in);
+  finite('E_out', E_out);
+  finite('dE_stored', dE_stored);
+  return E_in - E_out - dE_stored;
+}
+
+/** Over-unity ratio: energy out over the net energy supplied, E_out/(E_in − ΔE_stored). */
+export function overUnityRatio(E_in: number, E_out: number, dE_stored: number): number {
+  finite('E_in', E_in);
+  finite('E_out', E_out);
+  finite('dE_stored', dE_stored);
+  const net = E_in - dE_stored;
+  if (!(net > 0)) {
+    throw new CheckRangeError('E_in', `The net energy supplied (E_in − ΔE_stored = ${fmt(net)} J) must be more than zero for a ratio.`);
+  }
+  return E_out / net;
+}
