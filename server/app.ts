@@ -11,8 +11,10 @@ import pino, { type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import { apiNotFound, errorHandler } from './http/errors';
+import { checkRoutes } from './routes/checks';
 import { healthRoutes } from './routes/health';
 import { taxonomyRoutes } from './routes/taxonomy';
+import { worksheetRoutes } from './routes/worksheets';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -29,6 +31,10 @@ export function createApp(opts: AppOptions): express.Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  // Plot series are typed arrays (Float64Array); JSON has no such thing, so they go out as arrays.
+  app.set('json replacer', (_key: string, value: unknown) =>
+    ArrayBuffer.isView(value) && !(value instanceof DataView) ? Array.from(value as Float64Array) : value,
+  );
 
   app.use(
     helmet({
@@ -62,6 +68,8 @@ export function createApp(opts: AppOptions): express.Express {
   api.use(express.json({ limit: opts.jsonLimit ?? '256kb' }));
   api.use(healthRoutes(opts.sequelize, opts.version));
   api.use(taxonomyRoutes());
+  api.use(checkRoutes());
+  api.use(worksheetRoutes());
   api.use(apiNotFound);
   app.use('/api', api);
 

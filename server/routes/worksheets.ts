@@ -1,0 +1,37 @@
+/** Worksheets over HTTP: the starter worksheets, and evaluation of any worksheet with given values. */
+import { Router } from 'express';
+import { z } from 'zod';
+import { evaluateWorksheetWithKit } from '../../shared/compute';
+import { quantityTextSchema, worksheetSchema } from '../../shared/worksheet/schema';
+import { HttpError } from '../http/errors';
+import { validate } from '../http/validate';
+import { starterWorksheets } from '../services/worksheets';
+
+export const evaluateRequestSchema = z
+  .object({
+    worksheet: worksheetSchema,
+    values: z.record(z.string().max(40), quantityTextSchema).default({}),
+  })
+  .strict();
+
+export function worksheetRoutes(): Router {
+  const r = Router();
+
+  r.get('/worksheets', (_req, res) => {
+    res.json({
+      worksheets: [...starterWorksheets().values()].map(({ name, title, summary }) => ({ name, title, summary: summary ?? '' })),
+    });
+  });
+
+  r.get('/worksheets/:name', (req, res) => {
+    const ws = starterWorksheets().get(req.params.name);
+    if (!ws) throw new HttpError(404, 'unknown_worksheet', `There is no starter worksheet "${req.params.name}".`);
+    res.json({ worksheet: ws });
+  });
+
+  r.post('/worksheets/evaluate', (req, res) => {
+    const { worksheet, values } = validate(evaluateRequestSchema, req.body ?? {}, 'body');
+    res.json(evaluateWorksheetWithKit(worksheet, values));
+  });
+  return r;
+}

@@ -1,0 +1,20 @@
+/** The starter worksheets in content/worksheets/, read and validated once per process. */
+import fs from 'node:fs';
+import path from 'node:path';
+import { ROOT } from '../config';
+import { kitFunctions } from '../../shared/checks/kit-functions';
+import { parseWorksheetYaml } from '../../shared/worksheet/load';
+import type { Worksheet } from '../../shared/worksheet/schema';
+
+let cache: Map<string, Worksheet> | null = null;
+
+export function starterWorksheets(dir = path.join(ROOT, 'content', 'worksheets')): Map<string, Worksheet> {
+  if (cache) return cache;
+  const found = new Map<string, Worksheet>();
+  for (const file of fs.readdirSync(dir).filter((f) => f.endsWith('.yml')).sort()) {
+    const ws = parseWorksheetYaml(fs.readFileSync(path.join(dir, file), 'utf8'), file, { functions: kitFunctions });
+    found.set(ws.name, ws);
+  }
+  cache = found;
+  return found;
+}

@@ -1,0 +1,134 @@
+/**
+ * The check kit in Chromium at phone size: every check computes in the browser from its permalink
+ * with the same numbers the API gives (to 1e-12 relative), updates as the reader types, and its
+ * permalink reproduces the result. A starter worksheet evaluates in the browser exactly as on the
+ * server. Screenshots go to test-output/screenshots/.
+ */
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import { checkList } from '../../shared/checks';
+import { runCheck } from '../../shared/checks/run';
+import { byTestId, screenshotDir, startHarness, type Harness } from '../support/browser';
+
+jest.setTimeout(180_000);
+
+let h: Harness;
+beforeAll(async () => {
+  h = await startHarness();
+});
+afterAll(() => h?.close());
+
+/** Polls `probe` until it returns true (10 s at most), for values that settle as the page computes. */
+async function until(what: string, probe: () => Promise<boolean>, timeoutMs = 10_000): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  while (!(await probe())) {
+    if (Date.now() > deadline) throw new Error(`timed out waiting until ${what}`);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+}
+
+const relClose = (a: number, b: number) => a === b || Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b));
+
+/** Every element whose testID starts with `prefix`, as name → exact SI value (data-si). */
+async function siValues(page: Page, prefix: string): Promise<Record<string, number>> {
+  return page.evaluate((p) => {
+    const out: Record<string, number> = {};
+    document.querySelectorAll(`[data-testid^="${p}"][data-si]`).forEach((el) => {
+      out[el.getAttribute('data-testid')!.slice(p.length)] = Number(el.getAttribute('data-si'));
+    });
+    return out;
+  }, prefix);
+}
+
+async function apiCheck(name: string, inputs: Record<string, string>) {
+  const res = await fetch(`${h.base}/api/checks/${name}`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ inputs }),
+  });
+  expect(res.status).toBe(200);
+  return (await res.json()) as { outputs: { name: string; si: number }[]; verdict: { holds: boolean } };
+}
+
+function expectSameNumbers(browser: Record<string, number>, api: { name: string; si: number }[]) {
+  expect(Object.keys(browser).sort()).toEqual(api.map((o) => o.name).sort());
+  for (const o of api) {
+    if (!relClose(browser[o.name], o.si)) throw new Error(`output ${o.name}: browser ${browser[o.name]} vs server ${o.si}`);
+  }
+}
+
+/** The first input whose default, doubled, is still accepted: the value the reader "types". */
+function changedInput(def: (typeof checkList)[number]): { name: string; text: string } {
+  for (const spec of def.inputs) {
+    const m = /^([-+]?\d*\.?\d+(?:e[-+]?\d+)?)(.*)$/i.exec(spec.default.trim());
+    if (!m) continue;
+    const text = `${Number(m[1]) * 2}${m[2]}`;
+    try {
+      runCheck(def.name, { [spec.name]: text });
+      return { name: spec.name, text };
+    } catch {
+      /* out of bounds: try the next input */
+    }
+  }
+  throw new Error(`no input of ${def.name} can be doubled`);
+}
+
+describe.each(checkList.map((c) => [c.name, c] as const))('check %s at phone size', (name, def) => {
+  it('computes from its permalink as the server does, updates as the reader types, and the new permalink reproduces it', async () => {
+    const page = await h.open(390, 844);
+    const defaults = Object.fromEntries(def.inputs.map((i) => [i.name, i.default]));
+    const query = new URLSearchParams(defaults).toString();
+    await page.goto(`${h.base}/checks/${name}?${query}`);
+    await byTestId(page, `screen-check-${name}`).waitFor();
+    await byTestId(page, 'verdict').waitFor();
+    const api = await apiCheck(name, defaults);
+    await until('every output is shown', async () => Object.keys(await siValues(page, 'output-')).length === api.outputs.length);
+    expectSameNumbers(await siValues(page, 'output-'), api.outputs);
+    expect(await byTestId(page, 'verdict').getAttribute('data-holds')).toBe(String(api.verdict.holds));
+    await page.screenshot({ path: path.join(screenshotDir, `check-${name}.png`), fullPage: true });
+
+    const change = changedInput(def);
+    await byTestId(page, `input-${change.name}`).fill(change.text);
+    const changed = await apiCheck(name, { ...defaults, [change.name]: change.text });
+    await until('the outputs follow the typed value', async () => {
+      const v = await siValues(page, 'output-');
+      return changed.outputs.every((o) => relClose(v[o.name], o.si));
+    });
+
+    await until('the permalink carries the typed value', async () => new URL(page.url()).searchParams.get(change.name) === change.text);
+    const again = await h.open(390, 844);
+    await again.goto(page.url());
+    await byTestId(again, 'verdict').waitFor();
+    await until('the permalink shows every output', async () => Object.keys(await siValues(again, 'output-')).length === changed.outputs.length);
+    expectSameNumbers(await siValues(again, 'output-'), changed.outputs);
+    expect(page.problems).toEqual([]);
+    await page.context().close();
+    await again.context().close();
+  });
+});
+
+it('evaluates a starter worksheet in the browser with the same numbers as the server', async () => {
+  const list = (await (await fetch(`${h.base}/api/worksheets`)).json()) as { worksheets: { name: string }[] };
+  expect(list.worksheets.length).toBeGreaterThan(0);
+  for (const { name } of list.worksheets) {
+    const { worksheet } = await (await fetch(`${h.base}/api/worksheets/${name}`)).json();
+    const res = await fetch(`${h.base}/api/worksheets/evaluate`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ worksheet, values: {} }),
+    });
+    const server = (await res.json()) as { steps: { name: string; value?: { si: number } }[] };
+    const page = await h.open(390, 844);
+    await page.goto(`${h.base}/worksheets/${name}`);
+    await byTestId(page, 'screen-worksheet').waitFor();
+    const expected = server.steps.filter((s) => s.value);
+    expect(expected.length).toBeGreaterThan(0);
+    await until(`worksheet ${name} shows every step`, async () => Object.keys(await siValues(page, 'step-')).length === expected.length);
+    const browser = await siValues(page, 'step-');
+    for (const s of expected) {
+      if (!relClose(browser[s.name], s.value!.si)) throw new Error(`${name}.${s.name}: browser ${browser[s.name]} vs server ${s.value!.si}`);
+    }
+    await page.screenshot({ path: path.join(screenshotDir, `worksheet-${name}.png`), fullPage: true });
+    await page.context().close();
+  }
+});
