@@ -48,3 +48,62 @@ export interface TaxonomyResponse {
   laws: ConservationLawDto[];
   classes: MechanismClassDto[];
 }
+
+/** The signed-in user as the API shows it to that user (and to admins). */
+export interface UserDto {
+  id: number;
+  email: string;
+  displayName: string;
+  role: 'contributor' | 'editor' | 'moderator' | 'admin';
+  verified: boolean;
+  createdAt: string;
+}
+
+/**
+ * `GET /api/session`: who is signed in (null for a reader) and the CSRF token that every
+ * state-changing request must carry in the `X-CSRF-Token` header.
+ */
+export interface SessionResponse {
+  user: UserDto | null;
+  csrfToken: string;
+}
+
+/** `GET /api/admin/users` */
+export interface UserListResponse {
+  users: UserDto[];
+  total: number;
+}
+
+/** One row of the append-only audit log. */
+export interface AuditEventDto {
+  id: number;
+  at: string;
+  actor: { id: number; displayName: string } | null;
+  action: string;
+  subjectType: string;
+  subjectId: string;
+  before: unknown;
+  after: unknown;
+}
+
+/** `GET /api/admin/audit` */
+export interface AuditListResponse {
+  events: AuditEventDto[];
+  total: number;
+}
+
+/** A message caught by the development outbox (the local fake SMTP server). */
+export interface OutboxMessageDto {
+  id: number;
+  to: string;
+  from: string;
+  subject: string;
+  text: string;
+  html: string;
+  receivedAt: string;
+}
+
+/** `GET /api/admin/outbox` (development only) */
+export interface OutboxResponse {
+  messages: OutboxMessageDto[];
+}
