@@ -1,5 +1,3 @@
-import { PlaceholderScreen } from '@/components/screens/PlaceholderScreen';
+import { AccountScreen } from '@/components/account/AccountScreen';
 
-export default function AccountRoute() {
-  return <PlaceholderScreen section="account" />;
-}
+export default AccountScreen;

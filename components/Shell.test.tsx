@@ -1,5 +1,6 @@
-import { screen, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import { Text } from 'react-native';
+import type { UserDto } from '@/shared/api-types';
 import { Navigation } from './nav/Navigation';
 import { Shell } from './Shell';
 import { setPathname } from './testing/expoRouter';
@@ -8,6 +9,16 @@ import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from './
 jest.mock('expo-router', () => require('./testing/expoRouter'));
 
 const page = <Text>page</Text>;
+
+// Invented user (DESIGN.md: example.org addresses); the role varies per test.
+const signedIn: UserDto = {
+  id: 3,
+  email: 'chiara.lindqvist@example.org',
+  displayName: 'Chiara Lindqvist',
+  role: 'contributor',
+  verified: true,
+  createdAt: '2026-02-01T08:30:00.000Z',
+};
 
 beforeEach(() => {
   setPathname('/');
@@ -43,6 +54,21 @@ describe('Shell', () => {
     expect(screen.getByTestId('nav-rail')).toBeTruthy();
   });
 
+  it.each([
+    ['editor', ['Library', 'Claim check', 'Check kit', 'Desk', 'Account']],
+    ['moderator', ['Library', 'Claim check', 'Check kit', 'Queue', 'Account']],
+    ['admin', ['Library', 'Claim check', 'Check kit', 'Desk', 'Queue', 'Admin', 'Account']],
+  ] as const)('offers the signed-in %s the sections of that role, from the session', async (role, labels) => {
+    mockFetch({
+      '/api/health': () => jsonResponse(200, { status: 'ok', db: 'up', version: '0.1.0' }),
+      '/api/session': () => jsonResponse(200, { user: { ...signedIn, role }, csrfToken: 'token-for-tests' }),
+    });
+    setWindowWidth(390);
+    renderWithProviders(<Shell>{page}</Shell>);
+    const bar = screen.getByTestId('nav-bar');
+    await waitFor(() => expect(within(bar).getAllByRole('link').map((link) => link.textContent)).toEqual(labels));
+  });
+
   it('offers a reader Library, Claim check, Check kit and Account only', () => {
     setWindowWidth(390);
     renderWithProviders(<Shell>{page}</Shell>);
@@ -71,15 +97,17 @@ describe('Shell', () => {
 
 describe('Navigation', () => {
   it.each([
-    ['editor', 'nav-desk'],
-    ['moderator', 'nav-queue'],
-    ['admin', 'nav-admin'],
-  ] as const)('offers the %s role its own section', (role, testID) => {
+    ['contributor', []],
+    ['editor', ['nav-desk']],
+    ['moderator', ['nav-queue']],
+    ['admin', ['nav-desk', 'nav-queue', 'nav-admin']],
+  ] as const)('offers the %s role its own sections and no others', (role, own) => {
     renderWithProviders(<Navigation variant="rail" role={role} />);
-    expect(screen.getByTestId(testID)).toBeTruthy();
-    const others = ['nav-desk', 'nav-queue', 'nav-admin'].filter((id) => id !== testID);
-    for (const id of others) expect(screen.queryByTestId(id)).toBeNull();
-    for (const id of ['nav-library', 'nav-check', 'nav-account']) expect(screen.getByTestId(id)).toBeTruthy();
+    for (const id of ['nav-desk', 'nav-queue', 'nav-admin']) {
+      if ((own as readonly string[]).includes(id)) expect(screen.getByTestId(id)).toBeTruthy();
+      else expect(screen.queryByTestId(id)).toBeNull();
+    }
+    for (const id of ['nav-library', 'nav-check', 'nav-checks', 'nav-account']) expect(screen.getByTestId(id)).toBeTruthy();
   });
 
   it('hides the role sections from a reader', () => {

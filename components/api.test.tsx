@@ -1,4 +1,4 @@
-import { ApiError, ApiUnreachableError, apiGet } from './api';
+import { ApiError, ApiUnreachableError, apiGet, apiSend, forgetCsrfToken } from './api';
 import { jsonResponse, mockFetch } from './testing/render';
 
 describe('apiGet', () => {
@@ -71,5 +71,76 @@ describe('apiGet', () => {
     mockFetch({ '/api/health': () => jsonResponse(503, { status: 'degraded', db: 'down', version: '0.1.0' }) });
     await expect(apiGet('/api/health', { acceptStatus: [503] })).resolves.toMatchObject({ db: 'down' });
     await expect(apiGet('/api/health')).rejects.toMatchObject({ status: 503, code: 'http_error' });
+  });
+});
+
+describe('apiSend', () => {
+  beforeEach(() => forgetCsrfToken());
+
+  const headersOf = (init?: RequestInit) => (init?.headers ?? {}) as Record<string, string>;
+
+  it('fetches the session for its CSRF token first, then sends JSON with it, same-origin', async () => {
+    const fetchMock = mockFetch({
+      '/api/session': () => jsonResponse(200, { user: null, csrfToken: 'tok-first' }),
+      '/api/auth/forgot': () => jsonResponse(202, {}),
+    });
+    await expect(apiSend('POST', '/api/auth/forgot', { email: 'esther.mbeki@example.org' })).resolves.toEqual({});
+    await apiSend('POST', '/api/auth/forgot', { email: 'esther.mbeki@example.org' });
+
+    const paths = fetchMock.mock.calls.map(([path]) => path);
+    expect(paths).toEqual(['/api/session', '/api/auth/forgot', '/api/auth/forgot']);
+    const [, init] = fetchMock.mock.calls[1];
+    expect(init).toMatchObject({ method: 'POST', credentials: 'same-origin', body: JSON.stringify({ email: 'esther.mbeki@example.org' }) });
+    expect(headersOf(init)).toMatchObject({ 'X-CSRF-Token': 'tok-first', 'Content-Type': 'application/json' });
+  });
+
+  it('takes a refused token (403 csrf_failed) as a changed session: new token, one retry', async () => {
+    let sessions = 0;
+    const fetchMock = mockFetch({
+      '/api/session': () => jsonResponse(200, { user: null, csrfToken: `tok-${++sessions}` }),
+      '/api/account': (init) =>
+        headersOf(init)['X-CSRF-Token'] === 'tok-2'
+          ? jsonResponse(200, { user: { displayName: 'Esther Mbeki' } })
+          : jsonResponse(403, { error: { code: 'csrf_failed', message: 'The form is out of date. Reload the page.' } }),
+    });
+    await expect(apiSend('PATCH', '/api/account', { displayName: 'Esther Mbeki' })).resolves.toMatchObject({
+      user: { displayName: 'Esther Mbeki' },
+    });
+    expect(fetchMock.mock.calls.map(([path]) => path)).toEqual(['/api/session', '/api/account', '/api/session', '/api/account']);
+  });
+
+  it('retries only once', async () => {
+    const fetchMock = mockFetch({
+      '/api/session': () => jsonResponse(200, { user: null, csrfToken: 'tok-stale' }),
+      '/api/auth/sign-out': () => jsonResponse(403, { error: { code: 'csrf_failed', message: 'Refused.' } }),
+    });
+    await expect(apiSend('POST', '/api/auth/sign-out')).rejects.toMatchObject({ status: 403, code: 'csrf_failed' });
+    expect(fetchMock.mock.calls.filter(([path]) => path === '/api/auth/sign-out')).toHaveLength(2);
+  });
+
+  it('resolves a 204 to undefined and sends no body when there is none', async () => {
+    const fetchMock = mockFetch({
+      '/api/session': () => jsonResponse(200, { user: null, csrfToken: 'tok' }),
+      '/api/auth/sign-out': () => jsonResponse(204, undefined),
+    });
+    await expect(apiSend('POST', '/api/auth/sign-out')).resolves.toBeUndefined();
+    const [, init] = fetchMock.mock.calls[1];
+    expect(init?.body).toBeUndefined();
+    expect(headersOf(init)['Content-Type']).toBeUndefined();
+  });
+
+  it('passes on field errors keyed body.<field>', async () => {
+    mockFetch({
+      '/api/session': () => jsonResponse(200, { user: null, csrfToken: 'tok' }),
+      '/api/auth/sign-up': () =>
+        jsonResponse(409, {
+          error: { code: 'email_taken', message: 'That address has an account.', fields: { 'body.email': 'taken' } },
+        }),
+    });
+    await expect(apiSend('POST', '/api/auth/sign-up', {})).rejects.toMatchObject({
+      status: 409,
+      code: 'email_taken',
+      fields: { 'body.email': 'taken' },
+    });
   });
 });

@@ -1,11 +1,33 @@
 /**
- * The one client for Counterweight's API, which is served from the same origin as the app.
- * Every failure becomes one of two errors:
+ * The one client for Counterweight's API, which is served from the same origin as the app:
+ * `apiGet` reads, `apiSend` changes things (with the session's CSRF token). Every failure becomes one of two errors:
  *  - ApiError: the server answered, with an error (our JSON shape, or something else it sent);
  *  - ApiUnreachableError: no answer at all (server down, network gone).
  */
-import { QueryClient, useQuery } from '@tanstack/react-query';
-import type { ApiErrorBody, HealthResponse, TaxonomyResponse } from '@/shared/api-types';
+import { keepPreviousData, QueryClient, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { z } from 'zod';
+import type {
+  ApiErrorBody,
+  AuditListResponse,
+  HealthResponse,
+  OutboxResponse,
+  SessionResponse,
+  TaxonomyResponse,
+  UserDto,
+  UserListResponse,
+} from '@/shared/api-types';
+import type {
+  changePasswordSchema,
+  emailOnlySchema,
+  pageQuerySchema,
+  resetSchema,
+  Role,
+  signInSchema,
+  signUpSchema,
+  updateAccountSchema,
+  userListQuerySchema,
+  verifySchema,
+} from '@/shared/schemas/auth';
 import type { Worksheet } from '@/shared/worksheet/schema';
 
 export class ApiError extends Error {
@@ -54,22 +76,23 @@ export interface GetOptions {
   acceptStatus?: readonly number[];
 }
 
-/** GET a JSON resource from the API, e.g. `apiGet<TaxonomyResponse>('/api/taxonomy')`. */
-export async function apiGet<T>(path: string, { signal, acceptStatus = [] }: GetOptions = {}): Promise<T> {
+/** One request to the API, its answer read as JSON or turned into one of the two errors above. */
+async function call(path: string, init: RequestInit, acceptStatus: readonly number[] = []): Promise<unknown> {
   let response: Response;
   try {
-    response = await fetch(path, { headers: { Accept: 'application/json' }, signal });
+    response = await fetch(path, { ...init, credentials: 'same-origin' });
   } catch (cause) {
-    if (signal?.aborted) throw cause;
+    if (init.signal?.aborted) throw cause;
     throw new ApiUnreachableError(path, { cause });
   }
 
+  if (response.status === 204) return undefined;
   const payload = await readJson(response);
   if (response.ok || acceptStatus.includes(response.status)) {
     if (payload === undefined) {
       throw new ApiError(response.status, 'invalid_response', `The server's answer to ${path} was not JSON.`);
     }
-    return payload as T;
+    return payload;
   }
   if (isErrorBody(payload)) {
     const { code, message, fields } = payload.error;
@@ -80,6 +103,67 @@ export async function apiGet<T>(path: string, { signal, acceptStatus = [] }: Get
     'http_error',
     `The server answered ${path} with HTTP ${response.status}${response.statusText ? ` ${response.statusText}` : ''}.`,
   );
+}
+
+/** GET a JSON resource from the API, e.g. `apiGet<TaxonomyResponse>('/api/taxonomy')`. */
+export async function apiGet<T>(path: string, { signal, acceptStatus = [] }: GetOptions = {}): Promise<T> {
+  return (await call(path, { headers: { Accept: 'application/json' }, signal }, acceptStatus)) as T;
+}
+
+/**
+ * The CSRF token of this browser's session, which every state-changing request carries in the
+ * `X-CSRF-Token` header. It comes with `GET /api/session`; the server may replace it when the
+ * session changes (sign-in, sign-out), so it is forgotten then and fetched again.
+ */
+let knownCsrfToken: string | undefined;
+let pendingCsrfToken: Promise<string> | undefined;
+
+async function fetchSession(signal?: AbortSignal): Promise<SessionResponse> {
+  const session = await apiGet<SessionResponse>('/api/session', { signal });
+  knownCsrfToken = session.csrfToken;
+  return session;
+}
+
+function csrfToken(refresh: boolean): Promise<string> {
+  if (!refresh && knownCsrfToken !== undefined) return Promise.resolve(knownCsrfToken);
+  pendingCsrfToken ??= fetchSession()
+    .then((session) => session.csrfToken)
+    .finally(() => {
+      pendingCsrfToken = undefined;
+    });
+  return pendingCsrfToken;
+}
+
+/** Drops the CSRF token, so that the next request fetches the session's current one first. */
+export function forgetCsrfToken() {
+  knownCsrfToken = undefined;
+}
+
+type SendMethod = 'POST' | 'PATCH' | 'DELETE';
+
+/**
+ * Sends a state-changing request with a JSON body and the session's CSRF token, e.g.
+ * `apiSend<UserResponse>('POST', '/api/auth/sign-in', { email, password })`. A 403 `csrf_failed`
+ * (the session changed under us) fetches the token again and tries once more. A 204 resolves to
+ * undefined. Field errors come in the ApiError's `fields`, keyed `body.<field>`.
+ */
+export async function apiSend<T = void>(method: SendMethod, path: string, body?: unknown): Promise<T> {
+  const send = (token: string) =>
+    call(path, {
+      method,
+      headers: {
+        Accept: 'application/json',
+        'X-CSRF-Token': token,
+        ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
+      },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  try {
+    return (await send(await csrfToken(false))) as T;
+  } catch (error) {
+    if (!(error instanceof ApiError && error.status === 403 && error.code === 'csrf_failed')) throw error;
+    return (await send(await csrfToken(true))) as T;
+  }
 }
 
 /** Retry once, and only what may pass on a second try: no answer at all, or a 5xx. */
@@ -97,6 +181,14 @@ export const queryKeys = {
   taxonomy: ['taxonomy'] as const,
   worksheets: ['worksheets'] as const,
   worksheet: (name: string) => ['worksheets', name] as const,
+  session: ['session'] as const,
+  /** Everything only an admin sees; dropped when who is signed in changes. */
+  admin: ['admin'] as const,
+  users: ['admin', 'users'] as const,
+  userList: (query: UserListQuery) => ['admin', 'users', query] as const,
+  audit: ['admin', 'audit'] as const,
+  auditPage: (page: PageQuery) => ['admin', 'audit', page] as const,
+  outbox: ['admin', 'outbox'] as const,
 };
 
 /** One starter worksheet as `GET /api/worksheets` lists it. */
@@ -148,5 +240,155 @@ export function useWorksheet(name: string) {
     queryKey: queryKeys.worksheet(name),
     queryFn: ({ signal }) => apiGet<WorksheetResponse>(`/api/worksheets/${encodeURIComponent(name)}`, { signal }),
     staleTime: 5 * 60 * 1000,
+  });
+}
+
+/* Accounts (the contract in shared/schemas/auth.ts and shared/api-types.ts). */
+
+export type SignUpBody = z.output<typeof signUpSchema>;
+export type SignInBody = z.output<typeof signInSchema>;
+export type VerifyBody = z.output<typeof verifySchema>;
+export type EmailOnlyBody = z.output<typeof emailOnlySchema>;
+export type ResetBody = z.output<typeof resetSchema>;
+export type ChangePasswordBody = z.output<typeof changePasswordSchema>;
+export type UpdateAccountBody = z.output<typeof updateAccountSchema>;
+export type UserListQuery = z.output<typeof userListQuerySchema>;
+export type PageQuery = z.output<typeof pageQuerySchema>;
+
+/** What sign-up, verify, sign-in, the account and a role change answer with. */
+export interface UserResponse {
+  user: UserDto;
+}
+
+/** A query string from the values that are set, in a fixed order: `?q=ada&limit=25&offset=0`. */
+function queryString(query: Record<string, string | number | undefined>): string {
+  const params = new URLSearchParams();
+  for (const [name, value] of Object.entries(query)) {
+    if (value !== undefined && value !== '') params.set(name, String(value));
+  }
+  const text = params.toString();
+  return text ? `?${text}` : '';
+}
+
+/** `GET /api/session`: who is signed in (null for a reader), and the CSRF token it keeps. */
+export function useSession() {
+  return useQuery({
+    queryKey: queryKeys.session,
+    queryFn: ({ signal }) => fetchSession(signal),
+    staleTime: 60 * 1000,
+  });
+}
+
+/** After sign-in, sign-out or a reset the session is another one: new token, new user, no admin data. */
+async function sessionChanged(client: QueryClient) {
+  forgetCsrfToken();
+  client.removeQueries({ queryKey: queryKeys.admin });
+  await client.invalidateQueries({ queryKey: queryKeys.session });
+}
+
+/** `POST /api/auth/sign-up`: 201 with the new (unverified, not signed-in) user. */
+export function useSignUp() {
+  return useMutation({ mutationFn: (body: SignUpBody) => apiSend<UserResponse>('POST', '/api/auth/sign-up', body) });
+}
+
+/** `POST /api/auth/verify`: confirms the e-mail address with the token from the link. */
+export function useVerify() {
+  return useMutation({ mutationFn: (body: VerifyBody) => apiSend<UserResponse>('POST', '/api/auth/verify', body) });
+}
+
+/** `POST /api/auth/resend-verification`: 202 whether or not the address has an account. */
+export function useResendVerification() {
+  return useMutation({ mutationFn: (body: EmailOnlyBody) => apiSend<object>('POST', '/api/auth/resend-verification', body) });
+}
+
+/** `POST /api/auth/sign-in`; the session is fetched again once it succeeds. */
+export function useSignIn() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (body: SignInBody) => apiSend<UserResponse>('POST', '/api/auth/sign-in', body),
+    onSuccess: () => sessionChanged(client),
+  });
+}
+
+/** `POST /api/auth/sign-out`; the session is fetched again once it succeeds. */
+export function useSignOut() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiSend('POST', '/api/auth/sign-out'),
+    onSuccess: () => sessionChanged(client),
+  });
+}
+
+/** `POST /api/auth/forgot`: 202 whether or not the address has an account. */
+export function useForgotPassword() {
+  return useMutation({ mutationFn: (body: EmailOnlyBody) => apiSend<object>('POST', '/api/auth/forgot', body) });
+}
+
+/** `POST /api/auth/reset`: a new password with the token from the link; every session of that user ends. */
+export function useResetPassword() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (body: ResetBody) => apiSend<object>('POST', '/api/auth/reset', body),
+    onSuccess: () => sessionChanged(client),
+  });
+}
+
+/** `PATCH /api/account`: a new display name, shown at once wherever the session is read. */
+export function useUpdateAccount() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (body: UpdateAccountBody) => apiSend<UserResponse>('PATCH', '/api/account', body),
+    onSuccess: ({ user }) => {
+      client.setQueryData<SessionResponse>(queryKeys.session, (session) => (session ? { ...session, user } : session));
+    },
+  });
+}
+
+/** `POST /api/account/password`. */
+export function useChangePassword() {
+  return useMutation({ mutationFn: (body: ChangePasswordBody) => apiSend<object>('POST', '/api/account/password', body) });
+}
+
+/** `GET /api/admin/users`: a page of users, searched by e-mail or name and filtered by role. */
+export function useUserList(query: UserListQuery) {
+  return useQuery({
+    queryKey: queryKeys.userList(query),
+    queryFn: ({ signal }) => apiGet<UserListResponse>(`/api/admin/users${queryString(query)}`, { signal }),
+    placeholderData: keepPreviousData,
+  });
+}
+
+/**
+ * `PATCH /api/admin/users/:id/role`. The user's new role replaces the old one in every list
+ * already fetched, and the audit log is fetched again to show the change.
+ */
+export function useSetRole() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, role }: { id: number; role: Role }) =>
+      apiSend<UserResponse>('PATCH', `/api/admin/users/${id}/role`, { role }),
+    onSuccess: ({ user }) => {
+      client.setQueriesData<UserListResponse>({ queryKey: queryKeys.users }, (list) =>
+        list ? { ...list, users: list.users.map((u) => (u.id === user.id ? user : u)) } : list,
+      );
+      return client.invalidateQueries({ queryKey: queryKeys.audit });
+    },
+  });
+}
+
+/** `GET /api/admin/audit`: the audit log, newest first. */
+export function useAuditLog(page: PageQuery) {
+  return useQuery({
+    queryKey: queryKeys.auditPage(page),
+    queryFn: ({ signal }) => apiGet<AuditListResponse>(`/api/admin/audit${queryString(page)}`, { signal }),
+    placeholderData: keepPreviousData,
+  });
+}
+
+/** `GET /api/admin/outbox` (development only): the mail the local fake SMTP server caught, newest first. */
+export function useOutbox() {
+  return useQuery({
+    queryKey: queryKeys.outbox,
+    queryFn: ({ signal }) => apiGet<OutboxResponse>('/api/admin/outbox', { signal }),
   });
 }

@@ -1,14 +1,24 @@
 /** Who is looking at the app, as far as the client needs to know: which sections to offer. */
-export type Role = 'reader' | 'contributor' | 'editor' | 'moderator' | 'admin';
+import type { UserDto } from '@/shared/api-types';
+import type { Viewer as ViewerRole } from '@/shared/schemas/auth';
+import { useSession } from './api';
+
+/** A role, or `reader` for a visitor without an account (shared/schemas/auth.ts). */
+export type Role = ViewerRole;
 
 export interface Viewer {
   role: Role;
+  /** The signed-in user; null for a reader, and while the session is still being fetched. */
+  user: UserDto | null;
 }
 
 /**
- * Accounts do not exist yet, so everyone is a reader. A session hook replaces this; the server
- * checks rights on every route regardless of what the client shows.
+ * The signed-in user's role from the session, or `reader` when nobody is signed in (or the
+ * session cannot be fetched). The server checks rights on every route regardless of what the
+ * client shows.
  */
 export function useViewer(): Viewer {
-  return { role: 'reader' };
+  const { data } = useSession();
+  const user = data?.user ?? null;
+  return { role: user?.role ?? 'reader', user };
 }

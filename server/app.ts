@@ -1,7 +1,11 @@
 /**
  * The Express application: the JSON API under /api and the built web app (dist/) with an SPA
  * fallback, on one port. Built by a factory so tests can run it against their own database.
+ *
+ * The API: JSON bodies up to a limit, sessions in MariaDB (cookie cw.sid), passport for sign-in,
+ * and on every route `allow(action)` from policies.ts (who may, plus Origin and CSRF checks).
  */
+import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import compression from 'compression';
@@ -10,11 +14,19 @@ import helmet from 'helmet';
 import pino, { type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
+import { createPassport, sessionMiddleware } from './auth/session';
 import { apiNotFound, errorHandler } from './http/errors';
+import { rateLimiters, type RateLimits } from './http/rate-limit';
+import { createMailer, type Mailer } from './mail/mailer';
+import { policyGuard } from './policies';
+import { accountRoutes } from './routes/account';
+import { adminRoutes } from './routes/admin';
+import { authRoutes } from './routes/auth';
 import { checkRoutes } from './routes/checks';
 import { healthRoutes } from './routes/health';
 import { taxonomyRoutes } from './routes/taxonomy';
 import { worksheetRoutes } from './routes/worksheets';
+import { Accounts } from './services/accounts';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -24,13 +36,43 @@ export interface AppOptions {
   logger?: Logger;
   /** Largest JSON body accepted. */
   jsonLimit?: string;
+  /** Defaults to NODE_ENV (development when unset). Production: Secure cookies, no outbox. */
+  env?: 'development' | 'test' | 'production';
+  /**
+   * Signs the session cookie; every app server sharing the sessions needs the same one(s).
+   * Required in production; elsewhere a random one per app when absent.
+   */
+  sessionSecret?: string | string[];
+  /**
+   * The origin of e-mailed links and of the Origin check (PUBLIC_URL). When absent (tests only),
+   * the request's own origin is used; main.ts always passes it.
+   */
+  publicUrl?: string;
+  /** Outgoing mail; without one, messages are rendered and dropped. */
+  mailer?: Mailer;
+  /** Per-route rate limits (tests set them low for the rate-limit test and high elsewhere). */
+  rateLimits?: Partial<RateLimits>;
+  /** Express's `trust proxy` (TRUST_PROXY); default loopback. */
+  trustProxy?: string | number;
+  /** How often expired sessions are deleted (ms); 0 never. */
+  sessionCleanupMs?: number;
+}
+
+/** What createApp leaves in app.locals for its owner. */
+export interface AppLocals {
+  /** Resolves once the mail work started after earlier answers (forgot, resend) has finished. */
+  settle(): Promise<void>;
+  /** Stops the session store's cleanup timer. */
+  close(): Promise<void>;
 }
 
 export function createApp(opts: AppOptions): express.Express {
   const logger = opts.logger ?? pino({ level: 'silent' });
+  const env = opts.env ?? ((process.env.NODE_ENV as AppOptions['env']) || 'development');
+  if (env === 'production' && !opts.sessionSecret) throw new Error('createApp: a session secret is required in production');
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', opts.trustProxy ?? 'loopback');
   // Plot series are typed arrays (Float64Array); JSON has no such thing, so they go out as arrays.
   app.set('json replacer', (_key: string, value: unknown) =>
     ArrayBuffer.isView(value) && !(value instanceof DataView) ? Array.from(value as Float64Array) : value,
@@ -64,12 +106,50 @@ export function createApp(opts: AppOptions): express.Express {
     }),
   );
 
+  const mailer = opts.mailer ?? createMailer({ url: null, from: 'Counterweight <no-reply@example.org>' });
+  const accounts = new Accounts({ sequelize: opts.sequelize, mailer });
+  const allow = policyGuard({ publicUrl: opts.publicUrl });
+  const limits = rateLimiters(opts.rateLimits);
+  const sessions = sessionMiddleware({
+    sequelize: opts.sequelize,
+    secret: opts.sessionSecret ?? crypto.randomBytes(32).toString('base64url'),
+    secure: env === 'production',
+    cleanupIntervalMs: opts.sessionCleanupMs,
+  });
+  const passport = createPassport();
+
+  // Mail work that runs after the answer has gone (forgot, resend), so that its timing says nothing.
+  const pending = new Set<Promise<void>>();
+  const later = (what: string, job: () => Promise<void>) => {
+    const p: Promise<void> = job()
+      .catch((err) => logger.error({ err }, `${what} failed`))
+      .finally(() => pending.delete(p));
+    pending.add(p);
+  };
+  const locals: AppLocals = {
+    settle: async () => {
+      while (pending.size) await Promise.all([...pending]);
+    },
+    close: async () => {
+      sessions.store.stopExpiringSessions();
+      await locals.settle();
+    },
+  };
+  Object.assign(app.locals, locals);
+  const origin = (req: express.Request) => opts.publicUrl ?? `${req.protocol}://${req.get('host')}`;
+
   const api = express.Router();
   api.use(express.json({ limit: opts.jsonLimit ?? '256kb' }));
-  api.use(healthRoutes(opts.sequelize, opts.version));
-  api.use(taxonomyRoutes());
-  api.use(checkRoutes());
-  api.use(worksheetRoutes());
+  api.use(sessions.middleware);
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use(healthRoutes(allow, opts.sequelize, opts.version));
+  api.use(taxonomyRoutes(allow));
+  api.use(checkRoutes(allow));
+  api.use(worksheetRoutes(allow));
+  api.use(authRoutes({ allow, accounts, passport, limits, origin, later, logger }));
+  api.use(accountRoutes(allow, accounts));
+  api.use(adminRoutes(allow, accounts, env));
   api.use(apiNotFound);
   app.use('/api', api);
 

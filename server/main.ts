@@ -1,18 +1,23 @@
 /**
  * `npm start`: build the web app if needed, bring up our MariaDB, migrate, load the starter data
- * into an empty database, and serve the app and the API on one port. SIGINT or SIGTERM stops
- * Express first, then the database pool, then mariadbd, and leaves no process behind.
+ * into an empty database (and the demo accounts, in development), start the local fake SMTP server
+ * (development, unless SMTP_URL is set), and serve the app and the API on one port. SIGINT or
+ * SIGTERM stops Express first, then the mail catcher, the database pool, then mariadbd, and leaves
+ * no process behind.
  */
 import type { Server } from 'node:http';
 import path from 'node:path';
 import pino from 'pino';
 import type { Sequelize } from 'sequelize';
-import { createApp } from './app';
+import { createApp, type AppLocals } from './app';
 import { buildWeb, webBuildIsStale } from './build';
 import { loadConfig, ROOT } from './config';
 import { ensureMariaDbInstalled, MariaDbServer, portIsFree } from './db/mariadb';
 import { migrateUp } from './db/migrate';
 import { seedIfEmpty } from './db/seed';
+import { seedDemoAccounts } from './db/seed-accounts';
+import { FakeSmtpServer } from './mail/fake-smtp';
+import { createMailer, type Mailer } from './mail/mailer';
 import { createSequelize } from './db/sequelize';
 import { initModels } from './models';
 
@@ -24,6 +29,9 @@ async function main() {
   let db: MariaDbServer | null = null;
   let sequelize: Sequelize | null = null;
   let server: Server | null = null;
+  let locals: AppLocals | null = null;
+  let smtp: FakeSmtpServer | null = null;
+  let mailer: Mailer | null = null;
   let stopping: Promise<void> | null = null;
 
   const shutdown = (reason: string, code = 0) => {
@@ -40,6 +48,9 @@ async function main() {
           }, 5000).unref();
         });
       }
+      await locals?.close().catch(() => {});
+      mailer?.close();
+      if (smtp) await smtp.stop().catch(() => {});
       await sequelize?.close().catch(() => {});
       if (db) {
         say('Stopping MariaDB…');
@@ -75,8 +86,37 @@ async function main() {
     const applied = await migrateUp(sequelize);
     if (applied.length) say(`Applied migrations: ${applied.join(', ')}.`);
     if (await seedIfEmpty(sequelize, path.join(ROOT, 'content'))) say('Loaded the starter library into the empty database.');
+    if (config.env === 'development') {
+      const demo = await seedDemoAccounts(sequelize, path.join(ROOT, 'content'), config.env);
+      if (demo) {
+        say(`Seeded the demo accounts (password for all: ${demo.password}):`);
+        for (const a of demo.accounts) say(`  ${a.email} (${a.role}, ${a.displayName})`);
+      }
+    } else if (config.env === 'production') {
+      say('NODE_ENV=production: the demo accounts are not seeded (their password is published).');
+    }
 
-    const app = createApp({ sequelize, version: config.version, staticDir: config.staticDir, logger });
+    let smtpUrl = config.smtpUrl;
+    if (!smtpUrl) {
+      // Development without SMTP_URL: our own mail catcher on loopback, read in the admin Outbox.
+      smtp = await new FakeSmtpServer({ port: config.smtpPort }).start();
+      smtpUrl = smtp.url;
+      say(`Mail goes to the local mail catcher on 127.0.0.1:${smtp.port}; read it in Admin → Outbox.`);
+    }
+    mailer = createMailer({ url: smtpUrl, from: config.mailFrom });
+
+    const app = createApp({
+      sequelize,
+      version: config.version,
+      staticDir: config.staticDir,
+      logger,
+      env: config.env,
+      sessionSecret: config.sessionSecret,
+      publicUrl: config.publicUrl,
+      mailer,
+      trustProxy: config.trustProxy,
+    });
+    locals = app.locals as unknown as AppLocals;
     const s = app.listen(config.port, config.host);
     server = s;
     await new Promise<void>((resolve, reject) => {

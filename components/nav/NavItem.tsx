@@ -10,10 +10,12 @@ interface NavItemProps {
   section: NavSection;
   active: boolean;
   variant: NavVariant;
+  /** A bar crowded with sections (an admin has seven): smaller labels, so that each word fits a phone. */
+  compact?: boolean;
 }
 
 /** One section in the bottom bar or the rail; the active one is teal and announced as current. */
-export function NavItem({ section, active, variant }: NavItemProps) {
+export function NavItem({ section, active, variant, compact = false }: NavItemProps) {
   const [hovered, setHovered] = useState(false);
   const current =
     Platform.OS === 'web'
@@ -37,8 +39,9 @@ export function NavItem({ section, active, variant }: NavItemProps) {
       >
         <View style={[variant === 'bar' ? styles.barMark : styles.railMark, active && styles.markActive]} />
         <Text
-          style={[variant === 'bar' ? styles.barLabel : styles.railLabel, active && styles.labelActive]}
-          numberOfLines={1}
+          style={[variant === 'bar' ? styles.barLabel : styles.railLabel, compact && styles.compactLabel, active && styles.labelActive]}
+          // In a crowded bar a label of two words takes a second line.
+          numberOfLines={variant === 'bar' ? 2 : 1}
         >
           {section.label}
         </Text>
@@ -67,6 +70,7 @@ const styles = StyleSheet.create({
   railMark: { position: 'absolute', top: 0, bottom: 0, left: 0, width: 3 },
   markActive: { backgroundColor: colors.teal },
   barLabel: { ...type.caption, color: colors.inkMuted, textAlign: 'center' },
+  compactLabel: { fontSize: type.small.fontSize, lineHeight: type.small.lineHeight },
   railLabel: { ...type.ui, color: colors.inkMuted },
   labelActive: { fontFamily: type.uiStrong.fontFamily, color: colors.teal },
 });

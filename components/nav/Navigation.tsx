@@ -14,11 +14,18 @@ interface NavigationProps {
 /** The sections a role is offered: a bottom bar on a phone, a left rail on a wide screen. */
 export function Navigation({ variant, role }: NavigationProps) {
   const pathname = usePathname();
-  const items = sectionsFor(role).map((section) => (
-    <NavItem key={section.key} section={section} active={isInSection(pathname, section)} variant={variant} />
+  const bar = variant === 'bar';
+  const offered = sectionsFor(role);
+  const items = offered.map((section) => (
+    <NavItem
+      key={section.key}
+      section={section}
+      active={isInSection(pathname, section)}
+      variant={variant}
+      compact={bar && offered.length > 5}
+    />
   ));
 
-  const bar = variant === 'bar';
   return (
     <View role="navigation" aria-label="Sections" testID={bar ? 'nav-bar' : 'nav-rail'} style={bar ? styles.bar : styles.rail}>
       {bar ? null : (

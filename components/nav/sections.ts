@@ -1,4 +1,8 @@
-/** The app's sections, in navigation order, and which roles are offered each (DESIGN.md §5). */
+/**
+ * The app's sections, in navigation order, and which roles are offered each (DESIGN.md §5):
+ * Desk to editors, Queue to moderators, Admin to admins; admins are offered Desk and Queue too.
+ * The server checks the same rights on every route; this table only decides what is shown.
+ */
 import type { Role } from '../viewer';
 
 export type SectionKey = 'library' | 'check' | 'checks' | 'desk' | 'queue' | 'admin' | 'account';
@@ -16,11 +20,18 @@ export const sections: readonly NavSection[] = [
   { key: 'library', href: '/', label: 'Library', roles: everyone },
   { key: 'check', href: '/check', label: 'Claim check', roles: everyone },
   { key: 'checks', href: '/checks', label: 'Check kit', roles: everyone },
-  { key: 'desk', href: '/desk', label: 'Desk', roles: ['editor'] },
-  { key: 'queue', href: '/queue', label: 'Queue', roles: ['moderator'] },
+  { key: 'desk', href: '/desk', label: 'Desk', roles: ['editor', 'admin'] },
+  { key: 'queue', href: '/queue', label: 'Queue', roles: ['moderator', 'admin'] },
   { key: 'admin', href: '/admin', label: 'Admin', roles: ['admin'] },
   { key: 'account', href: '/account', label: 'Account', roles: everyone },
 ];
+
+/** Sections that only some roles are offered. */
+export type RoleSectionKey = 'desk' | 'queue' | 'admin';
+
+export function sectionFor(key: SectionKey): NavSection {
+  return sections.find((section) => section.key === key)!;
+}
 
 export function sectionsFor(role: Role): NavSection[] {
   return sections.filter((section) => section.roles.includes(role));

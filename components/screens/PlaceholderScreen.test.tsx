@@ -1,23 +1,67 @@
 import { render, screen, within } from '@testing-library/react';
+import type { SessionResponse, UserDto } from '@/shared/api-types';
 import { setPathname } from '../testing/expoRouter';
+import { jsonResponse, mockFetch, renderWithProviders } from '../testing/render';
 import { NotFoundScreen } from './NotFoundScreen';
 import { PlaceholderScreen } from './PlaceholderScreen';
 
 jest.mock('expo-router', () => require('../testing/expoRouter'));
 
+const user = (role: UserDto['role']): UserDto => ({
+  id: 7,
+  email: 'bruno.salazar@example.org',
+  displayName: 'Bruno Salazar',
+  role,
+  verified: true,
+  createdAt: '2026-01-05T09:00:00.000Z',
+});
+
+function sessionOf(role: UserDto['role'] | null) {
+  const session: SessionResponse = { user: role ? user(role) : null, csrfToken: 'token-for-tests' };
+  mockFetch({ '/api/session': () => jsonResponse(200, session) });
+}
+
 describe('PlaceholderScreen', () => {
   it.each([
-    ['check', 'Claim check', 'referee paragraph'],
-    ['desk', 'Desk', 'drafts'],
-    ['queue', 'Queue', 'oldest first'],
-    ['account', 'Account', 'need no account'],
-    ['admin', 'Admin', 'audit log'],
-  ] as const)('%s has its heading and says what will come there', (section, title, words) => {
-    render(<PlaceholderScreen section={section} />);
+    ['check', 'Claim check', 'referee paragraph', null],
+    ['desk', 'Desk', 'drafts', 'editor'],
+    ['queue', 'Queue', 'oldest first', 'moderator'],
+  ] as const)('%s has its heading and says what will come there', async (section, title, words, role) => {
+    sessionOf(role);
+    renderWithProviders(<PlaceholderScreen section={section} />);
     const root = screen.getByTestId(`screen-${section}`);
     expect(within(root).getByRole('heading', { level: 1 }).textContent).toBe(title);
     expect(root.textContent).toContain(words);
-    expect(screen.getByTestId(`${section}-status`).textContent).toContain('Not open yet');
+    expect((await screen.findByTestId(`${section}-status`)).textContent).toContain('Not open yet');
+  });
+
+  it.each([
+    ['desk', 'contributor', 'Editors and admins only'],
+    ['queue', 'editor', 'Moderators and admins only'],
+  ] as const)('keeps %s from a %s, saying who it is for', async (section, role, words) => {
+    sessionOf(role);
+    renderWithProviders(<PlaceholderScreen section={section} />);
+    const refusal = await screen.findByTestId('role-required');
+    expect(refusal.textContent).toContain(words);
+    expect(refusal.textContent).toContain(`whose role is ${role}`);
+    expect(screen.queryByTestId(`${section}-status`)).toBeNull();
+  });
+
+  it('offers a reader the way to sign in and come back', async () => {
+    setPathname('/queue');
+    sessionOf(null);
+    renderWithProviders(<PlaceholderScreen section="queue" />);
+    await screen.findByTestId('role-required');
+    expect(screen.getByTestId('role-sign-in').getAttribute('href')).toBe('/sign-in?next=%2Fqueue');
+  });
+
+  it('opens Desk and Queue to an admin', async () => {
+    sessionOf('admin');
+    const { unmount } = renderWithProviders(<PlaceholderScreen section="desk" />);
+    expect(await screen.findByTestId('desk-status')).toBeTruthy();
+    unmount();
+    renderWithProviders(<PlaceholderScreen section="queue" />);
+    expect(await screen.findByTestId('queue-status')).toBeTruthy();
   });
 });
 

@@ -1,10 +1,11 @@
 import { Text } from 'react-native';
-import type { SectionKey } from '../nav/sections';
+import { RoleGate } from '../account/RoleGate';
+import type { RoleSectionKey } from '../nav/sections';
 import { type } from '../theme';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 
-type PlannedSection = Exclude<SectionKey, 'library' | 'checks'>;
+type PlannedSection = 'check' | Exclude<RoleSectionKey, 'admin'>;
 
 interface Plan {
   title: string;
@@ -25,37 +26,28 @@ const plans: Record<PlannedSection, Plan> = {
     title: 'Desk',
     purpose:
       'Where editors work: your drafts, the drafts of other editors waiting for your review, and what was published recently.',
-    status: 'The desk opens for editors once accounts and drafts exist.',
+    status: 'The desk opens once editors can write drafts of entries.',
   },
   queue: {
     title: 'Queue',
     purpose:
       'Sightings and corrections sent in by contributors, waiting for a decision, oldest first. A moderator accepts each into an entry, turns it into a draft, asks for more, or declines it with a reason.',
-    status: 'The queue opens for moderators once contributors can send sightings and corrections.',
-  },
-  account: {
-    title: 'Account',
-    purpose:
-      'Sign in or register here. With a verified e-mail address you can send sightings and corrections and keep your saved claim checks. Reading, running worksheets, citing and exporting need no account.',
-    status: 'Accounts are not open yet; everything here works without one for now.',
-  },
-  admin: {
-    title: 'Admin',
-    purpose:
-      'For operators: users and their roles, the audit log of who did what to which record, and, in development, the outbox of the mail the app would have sent.',
-    status: 'Administration opens once accounts exist.',
+    status: 'The queue opens once contributors can send sightings and corrections.',
   },
 };
 
-/** A section that is planned but not built yet: what it will hold, and when. */
+/** A section that is planned but not built yet: what it will hold, and when; Desk and Queue only for their roles. */
 export function PlaceholderScreen({ section }: { section: PlannedSection }) {
   const plan = plans[section];
+  const status = (
+    <Notice testID={`${section}-status`} title="Not open yet">
+      {plan.status}
+    </Notice>
+  );
   return (
     <Screen testID={`screen-${section}`} title={plan.title}>
       <Text style={type.reading}>{plan.purpose}</Text>
-      <Notice testID={`${section}-status`} title="Not open yet">
-        {plan.status}
-      </Notice>
+      {section === 'check' ? status : <RoleGate section={section}>{status}</RoleGate>}
     </Screen>
   );
 }

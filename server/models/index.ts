@@ -1,9 +1,18 @@
 import type { Sequelize } from 'sequelize';
+import { initAccounts } from './accounts';
+import { initAudit } from './audit';
+import { initOutbox } from './outbox';
 import { initTaxonomy } from './taxonomy';
 
 export { ConservationLaw, MechanismClass } from './taxonomy';
+export { EmailToken, Session, User, TOKEN_PURPOSES, type TokenPurpose } from './accounts';
+export { AuditEvent, audit } from './audit';
+export { OutboxMessage } from './outbox';
 
 /** Binds every model to this Sequelize instance. Call once per instance, before any query. */
 export function initModels(sequelize: Sequelize): void {
   initTaxonomy(sequelize);
+  initAccounts(sequelize);
+  initAudit(sequelize);
+  initOutbox(sequelize);
 }

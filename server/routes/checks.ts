@@ -5,6 +5,7 @@ import { checkList } from '../../shared/checks';
 import { CheckInputError, isCheckName, runCheck } from '../../shared/checks/run';
 import { HttpError } from '../http/errors';
 import { validate } from '../http/validate';
+import type { Allow } from '../policies';
 
 const rawInput = z.union([
   z.string().max(80),
@@ -12,10 +13,10 @@ const rawInput = z.union([
 ]);
 export const checkRequestSchema = z.object({ inputs: z.record(z.string().max(40), rawInput).default({}) }).strict();
 
-export function checkRoutes(): Router {
+export function checkRoutes(allow: Allow): Router {
   const r = Router();
 
-  r.get('/checks', (_req, res) => {
+  r.get('/checks', allow('checks.list'), (_req, res) => {
     res.json({
       checks: checkList.map(({ name, title, summary, condition, inputs, cautions }) => ({
         name, title, summary, condition, inputs, cautions,
@@ -23,7 +24,7 @@ export function checkRoutes(): Router {
     });
   });
 
-  r.post('/checks/:check', (req, res) => {
+  r.post('/checks/:check', allow('checks.run'), (req, res) => {
     const name = req.params.check;
     if (!isCheckName(name)) {
       throw new HttpError(404, 'unknown_check', `There is no check "${name}". The kit has: ${checkList.map((c) => c.name).join(', ')}.`);

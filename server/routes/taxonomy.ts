@@ -1,10 +1,11 @@
 import { Router } from 'express';
 import type { TaxonomyResponse } from '../../shared/api-types';
 import { ConservationLaw, MechanismClass } from '../models';
+import type { Allow } from '../policies';
 
-export function taxonomyRoutes(): Router {
+export function taxonomyRoutes(allow: Allow): Router {
   const r = Router();
-  r.get('/taxonomy', async (_req, res) => {
+  r.get('/taxonomy', allow('taxonomy.read'), async (_req, res) => {
     const [laws, classes] = await Promise.all([
       ConservationLaw.findAll({ order: [['position', 'ASC']] }),
       MechanismClass.findAll({ order: [['position', 'ASC']] }),

@@ -5,6 +5,7 @@ import { evaluateWorksheetWithKit } from '../../shared/compute';
 import { quantityTextSchema, worksheetSchema } from '../../shared/worksheet/schema';
 import { HttpError } from '../http/errors';
 import { validate } from '../http/validate';
+import type { Allow } from '../policies';
 import { starterWorksheets } from '../services/worksheets';
 
 export const evaluateRequestSchema = z
@@ -14,22 +15,22 @@ export const evaluateRequestSchema = z
   })
   .strict();
 
-export function worksheetRoutes(): Router {
+export function worksheetRoutes(allow: Allow): Router {
   const r = Router();
 
-  r.get('/worksheets', (_req, res) => {
+  r.get('/worksheets', allow('worksheets.list'), (_req, res) => {
     res.json({
       worksheets: [...starterWorksheets().values()].map(({ name, title, summary }) => ({ name, title, summary: summary ?? '' })),
     });
   });
 
-  r.get('/worksheets/:name', (req, res) => {
+  r.get('/worksheets/:name', allow('worksheets.read'), (req, res) => {
     const ws = starterWorksheets().get(req.params.name);
     if (!ws) throw new HttpError(404, 'unknown_worksheet', `There is no starter worksheet "${req.params.name}".`);
     res.json({ worksheet: ws });
   });
 
-  r.post('/worksheets/evaluate', (req, res) => {
+  r.post('/worksheets/evaluate', allow('worksheets.evaluate'), (req, res) => {
     const { worksheet, values } = validate(evaluateRequestSchema, req.body ?? {}, 'body');
     res.json(evaluateWorksheetWithKit(worksheet, values));
   });

@@ -18,12 +18,55 @@ const tables = async () => {
   return rows.map((r) => r.name).filter((n) => n !== 'schema_migrations').sort();
 };
 
+const columns = async (table: string) => {
+  const rows = await t.sequelize.query<{ name: string }>(
+    'SELECT column_name AS name FROM information_schema.columns WHERE table_schema = DATABASE() AND table_name = ? ORDER BY ordinal_position',
+    { replacements: [table], type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => r.name);
+};
+
+const indexed = async (table: string) => {
+  const rows = await t.sequelize.query<{ name: string }>(
+    'SELECT DISTINCT column_name AS name FROM information_schema.statistics WHERE table_schema = DATABASE() AND table_name = ? AND seq_in_index = 1',
+    { replacements: [table], type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => r.name).sort();
+};
+
+const taxonomy = ['conservation_laws', 'mechanism_classes'];
+const accounts = ['audit_events', 'dev_outbox', 'email_tokens', 'sessions', 'users'];
+
 it('applies every migration, rolls all back, and applies them again', async () => {
   expect(await migrateUp(t.sequelize)).toEqual(migrations.map((m) => m.name));
-  expect(await tables()).toEqual(['conservation_laws', 'mechanism_classes']);
+  expect(await tables()).toEqual([...taxonomy, ...accounts].sort());
   expect(await migrateUp(t.sequelize)).toEqual([]);
   expect(await migrateDown(t.sequelize)).toEqual([migrations[migrations.length - 1].name]);
+  expect(await tables()).toEqual(taxonomy);
   await migrateDown(t.sequelize, 0);
   expect(await tables()).toEqual([]);
   expect(await migrateUp(t.sequelize)).toEqual(migrations.map((m) => m.name));
+});
+
+it('creates the accounts tables with the columns and indexes their users need', async () => {
+  // connect-session-sequelize reads and writes sid, expires and data; user_id lets a reset end a user's sessions.
+  expect(await columns('sessions')).toEqual(['sid', 'expires', 'data', 'user_id', 'created_at', 'updated_at']);
+  expect(await indexed('sessions')).toEqual(['expires', 'sid', 'user_id']);
+  expect(await columns('users')).toEqual(['id', 'email', 'display_name', 'password_hash', 'role', 'email_verified_at', 'created_at', 'updated_at']);
+  expect(await columns('email_tokens')).toEqual(['id', 'user_id', 'purpose', 'token_hash', 'expires_at', 'used_at', 'created_at']);
+  expect(await columns('audit_events')).toEqual(['id', 'actor_id', 'action', 'subject_type', 'subject_id', 'before', 'after', 'created_at']);
+  expect(await indexed('audit_events')).toEqual(expect.arrayContaining(['created_at', 'subject_type']));
+  expect(await columns('dev_outbox')).toEqual(['id', 'to', 'from', 'subject', 'text', 'html', 'received_at']);
+  // The role column: the four roles, contributor by default.
+  const [role] = await t.sequelize.query<{ type: string; def: string }>(
+    "SELECT column_type AS type, column_default AS def FROM information_schema.columns WHERE table_schema = DATABASE() AND table_name = 'users' AND column_name = 'role'",
+    { type: QueryTypes.SELECT },
+  );
+  expect(role.type).toBe("enum('contributor','editor','moderator','admin')");
+  expect(role.def).toMatch(/contributor/);
+  // One account per address.
+  await t.sequelize.query("INSERT INTO users (email, display_name, password_hash, created_at, updated_at) VALUES ('a@example.org', 'A', 'x', NOW(), NOW())");
+  await expect(
+    t.sequelize.query("INSERT INTO users (email, display_name, password_hash, created_at, updated_at) VALUES ('a@example.org', 'B', 'y', NOW(), NOW())"),
+  ).rejects.toMatchObject({ name: 'SequelizeUniqueConstraintError' });
 });

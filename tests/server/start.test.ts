@@ -99,9 +99,43 @@ const appConnection = () =>
     database: 'counterweight',
   });
 
+/**
+ * Through the running server, like the web app: a session and its CSRF token, a sign-up whose
+ * confirmation mail reaches the outbox through the mail catcher, and the demo admin reading it.
+ */
+async function signUpAndFindTheMail() {
+  const base = `http://127.0.0.1:${port}`;
+  const session = async (cookie?: string) => {
+    const res = await fetch(`${base}/api/session`, { headers: cookie ? { Cookie: cookie } : {} });
+    const setCookie = res.headers.get('set-cookie');
+    return { body: (await res.json()) as { csrfToken: string; user: { email: string } | null }, cookie: setCookie ? setCookie.split(';')[0] : cookie! };
+  };
+  const post = (path: string, cookie: string, csrf: string, body: object) =>
+    fetch(`${base}${path}`, { method: 'POST', headers: { 'Content-Type': 'application/json', Cookie: cookie, 'X-CSRF-Token': csrf }, body: JSON.stringify(body) });
+
+  const anon = await session();
+  const up = await post('/api/auth/sign-up', anon.cookie, anon.body.csrfToken, { email: 'first.user@example.org', displayName: 'First User', password: 'violet-gravel-oboe-1874' });
+  expect(up.status).toBe(201);
+
+  const adminSession = await session();
+  const signIn = await post('/api/auth/sign-in', adminSession.cookie, adminSession.body.csrfToken, { email: 'admin@example.org', password: 'counterweight-demo-2026' });
+  expect(signIn.status).toBe(200);
+  const cookie = signIn.headers.get('set-cookie')!.split(';')[0];
+  const outbox = await fetch(`${base}/api/admin/outbox`, { headers: { Cookie: cookie } });
+  expect(outbox.status).toBe(200);
+  const { messages } = (await outbox.json()) as { messages: { to: string; text: string }[] };
+  expect(messages[0].to).toBe('first.user@example.org');
+  // The link is built from PUBLIC_URL's default, http://127.0.0.1:<PORT>.
+  expect(messages[0].text).toContain(`http://127.0.0.1:${port}/verify?token=`);
+}
+
 it('serves the app, stops on Ctrl-C without leftovers, and keeps the data across restarts', async () => {
   const first = await start();
   expect(first.output()).toContain('Loaded the starter library');
+  // Development: the demo accounts are seeded, and mail goes to the local mail catcher.
+  expect(first.output()).toContain('Seeded the demo accounts (password for all: counterweight-demo-2026)');
+  expect(first.output()).toMatch(/local mail catcher on 127\.0\.0\.1:\d+/);
+  await signUpAndFindTheMail();
   const health = await fetch(`http://127.0.0.1:${port}/api/health`);
   expect(health.status).toBe(200);
   expect(await health.json()).toMatchObject({ status: 'ok', db: 'up' });
@@ -126,6 +160,7 @@ it('serves the app, stops on Ctrl-C without leftovers, and keeps the data across
 
   const second = await start();
   expect(second.output()).not.toContain('Loaded the starter library');
+  expect(second.output()).not.toContain('Seeded the demo accounts');
   expect(second.output()).not.toContain('Created a new MariaDB datadir');
   const again = await appConnection();
   const rows = await again.query("SELECT slug FROM conservation_laws WHERE slug = 'kept-across-restarts'");

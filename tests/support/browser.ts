@@ -1,21 +1,27 @@
 /**
  * The browser-test harness: the built web app (dist/) served by the real Express app on a fresh
- * test database, and Debian's Chromium driven through playwright-core.
+ * test database (with the starter library and the demo accounts), its own fake SMTP server whose
+ * messages land in the outbox, and Debian's Chromium driven through playwright-core.
  */
 import fs from 'node:fs';
-import type { Server } from 'node:http';
+import http from 'node:http';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
-import { createApp } from '../../server/app';
+import { createApp, type AppLocals } from '../../server/app';
 import { ROOT } from '../../server/config';
 import { seedIfEmpty } from '../../server/db/seed';
+import { seedDemoAccounts } from '../../server/db/seed-accounts';
+import { HIGH_LIMITS } from './app';
 import { createTestDatabase, type TestDatabase } from './db';
+import { startTestMail, type TestMail } from './mail';
 
 export const screenshotDir = path.join(ROOT, 'test-output', 'screenshots');
 
 export interface Harness {
   base: string;
   browser: Browser;
+  /** The fake SMTP server's catch (the same messages the admin Outbox shows). */
+  mail: TestMail;
   /** A new page in its own context at this viewport; page errors are collected in `problems`. */
   open(width: number, height: number): Promise<Page & { problems: string[] }>;
   close(): Promise<void>;
@@ -29,11 +35,23 @@ export async function startHarness(): Promise<Harness> {
   fs.mkdirSync(screenshotDir, { recursive: true });
   const t: TestDatabase = await createTestDatabase();
   await seedIfEmpty(t.sequelize, path.join(ROOT, 'content'));
-  const app = createApp({ sequelize: t.sequelize, version: 'test', staticDir: dist });
-  const server = await new Promise<Server>((resolve) => {
-    const s = app.listen(0, '127.0.0.1', () => resolve(s));
-  });
+  await seedDemoAccounts(t.sequelize, path.join(ROOT, 'content'), 'development');
+  const mail = await startTestMail();
+  // Listen first, so that the e-mailed links can name the server's real address.
+  const server = http.createServer();
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
   const base = `http://127.0.0.1:${(server.address() as { port: number }).port}`;
+  const app = createApp({
+    sequelize: t.sequelize,
+    version: 'test',
+    env: 'test',
+    staticDir: dist,
+    publicUrl: base,
+    mailer: mail.mailer,
+    rateLimits: HIGH_LIMITS,
+    sessionCleanupMs: 0,
+  });
+  server.on('request', app);
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     args: [
@@ -49,6 +67,7 @@ export async function startHarness(): Promise<Harness> {
   return {
     base,
     browser,
+    mail,
     async open(width, height) {
       const context = await browser.newContext({ viewport: { width, height }, deviceScaleFactor: 1 });
       const page = (await context.newPage()) as Page & { problems: string[] };
@@ -58,7 +77,10 @@ export async function startHarness(): Promise<Harness> {
     },
     async close() {
       await browser.close();
+      server.closeAllConnections();
       await new Promise((r) => server.close(r));
+      await (app.locals as unknown as AppLocals).close();
+      await mail.stop();
       await t.drop();
     },
   };

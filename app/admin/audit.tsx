@@ -1,0 +1,3 @@
+import { AuditScreen } from '@/components/admin/AuditScreen';
+
+export default AuditScreen;

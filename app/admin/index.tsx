@@ -1,0 +1,3 @@
+import { UsersScreen } from '@/components/admin/UsersScreen';
+
+export default UsersScreen;

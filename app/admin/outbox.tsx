@@ -1,0 +1,3 @@
+import { OutboxScreen } from '@/components/admin/OutboxScreen';
+
+export default OutboxScreen;

@@ -1,0 +1,3 @@
+import { ForgotScreen } from '@/components/auth/ForgotScreen';
+
+export default ForgotScreen;

@@ -1,0 +1,3 @@
+import { SignUpScreen } from '@/components/auth/SignUpScreen';
+
+export default SignUpScreen;

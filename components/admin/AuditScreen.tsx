@@ -1,0 +1,132 @@
+import { useState } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
+import type { AuditEventDto } from '@/shared/api-types';
+import { pageQuerySchema } from '@/shared/schemas/auth';
+import { useAuditLog } from '../api';
+import { colors, space, type } from '../theme';
+import { ErrorNotice } from '../ui/ErrorNotice';
+import { Loading } from '../ui/Loading';
+import { Notice } from '../ui/Notice';
+import { AdminFrame } from './AdminFrame';
+import { formatWhen } from './format';
+import { Pager } from './Pager';
+
+const PAGE = 50;
+
+/** What the known actions are called here; any other action shows by its code. */
+const actionNames: Record<string, string> = {
+  'user.signed_up': 'Account created',
+  'user.email_verified': 'E-mail address verified',
+  'user.display_name_changed': 'Display name changed',
+  'user.password_changed': 'Password changed',
+  'user.password_reset': 'Password set from a reset link',
+  'user.role_changed': 'Role changed',
+};
+
+/** Admin: the append-only audit log, newest first: who did what to which record, when, before and after. */
+export function AuditScreen() {
+  return (
+    <AdminFrame
+      testID="screen-audit"
+      title="Audit log"
+      lead="Who did what to which record, and when, newest first. Nothing here can be edited or removed."
+    >
+      <AuditList />
+    </AdminFrame>
+  );
+}
+
+function AuditList() {
+  const [offset, setOffset] = useState(0);
+  const page = pageQuerySchema.parse({ limit: PAGE, offset });
+  const { data, error, isPending, isFetching, refetch } = useAuditLog(page);
+
+  if (isPending) return <Loading testID="audit-loading" label="Loading the audit log…" />;
+  if (error) return <ErrorNotice testID="audit-error" error={error} what="the audit log" onRetry={() => void refetch()} />;
+  if (data.events.length === 0) {
+    return (
+      <Notice testID="audit-empty" title="Nothing is recorded yet.">
+        Changing a user&apos;s role on the Users and roles page writes the first event here.
+      </Notice>
+    );
+  }
+  return (
+    <View style={styles.body}>
+      <View role="list" testID="audit-list" style={styles.list}>
+        {data.events.map((event) => (
+          <AuditRow key={event.id} event={event} />
+        ))}
+      </View>
+      <Pager
+        offset={offset}
+        limit={PAGE}
+        total={data.total}
+        shown={data.events.length}
+        noun={data.total === 1 ? 'event' : 'events'}
+        onOffset={setOffset}
+        busy={isFetching}
+      />
+    </View>
+  );
+}
+
+function AuditRow({ event }: { event: AuditEventDto }) {
+  const name = actionNames[event.action];
+  return (
+    <View role="listitem" testID="audit-event" style={styles.row}>
+      <View style={styles.head}>
+        {name ? <Text style={type.uiStrong}>{name}</Text> : <Text style={styles.code}>{event.action}</Text>}
+        <Text testID="audit-when" style={type.caption}>
+          {formatWhen(event.at)}
+        </Text>
+      </View>
+      <Text style={type.caption}>
+        By <Text style={styles.who}>{event.actor ? event.actor.displayName : 'the system'}</Text>, on {event.subjectType}{' '}
+        <Text style={styles.code}>{event.subjectId}</Text>
+      </Text>
+      <View testID="audit-change" style={styles.change}>
+        {describeChange(event.before, event.after).map((line) => (
+          <Text key={line.field} style={styles.line}>
+            {line.field ? <Text style={type.caption}>{line.field}: </Text> : null}
+            {line.before} <Text style={styles.arrow}>→</Text> {line.after}
+          </Text>
+        ))}
+      </View>
+    </View>
+  );
+}
+
+interface ChangeLine {
+  field: string;
+  before: string;
+  after: string;
+}
+
+const isRecord = (value: unknown): value is Record<string, unknown> =>
+  typeof value === 'object' && value !== null && !Array.isArray(value);
+
+const show = (value: unknown) => (value === undefined || value === null ? '(none)' : typeof value === 'string' ? value : JSON.stringify(value));
+
+/** Before → after, field by field where both are records (`role: contributor → editor`), else as a whole. */
+function describeChange(before: unknown, after: unknown): ChangeLine[] {
+  if (isRecord(before) || isRecord(after)) {
+    const b = isRecord(before) ? before : {};
+    const a = isRecord(after) ? after : {};
+    const fields = [...new Set([...Object.keys(b), ...Object.keys(a)])];
+    const changed = fields.filter((field) => JSON.stringify(b[field]) !== JSON.stringify(a[field]));
+    if (changed.length > 0) return changed.map((field) => ({ field, before: show(b[field]), after: show(a[field]) }));
+  }
+  return [{ field: '', before: show(before), after: show(after) }];
+}
+
+const styles = StyleSheet.create({
+  body: { gap: space.md },
+  list: { borderTopColor: colors.rule, borderTopWidth: 1 },
+  row: { gap: space.xxs, paddingVertical: space.md, borderBottomColor: colors.rule, borderBottomWidth: 1 },
+  head: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'baseline', gap: space.xs },
+  who: { color: colors.ink },
+  code: { ...type.mono, fontSize: 13 },
+  change: { gap: 2, marginTop: space.xxs },
+  line: { ...type.mono },
+  arrow: { color: colors.brass },
+});

@@ -1,0 +1,53 @@
+/** The messages we send, in plain text and HTML, in our own words. */
+import type { OutgoingMessage } from './mailer';
+
+const escapeHtml = (s: string) =>
+  s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
+
+/** One paragraph per string; the link on a line of its own, as a button-like link in HTML. */
+function render(to: string, subject: string, greeting: string, before: string[], link: { href: string; label: string }, after: string[]): OutgoingMessage {
+  const text = [greeting, '', ...before.flatMap((p) => [p, '']), link.href, '', ...after.flatMap((p) => [p, '']), '— Counterweight', ''].join('\n');
+  const p = (s: string) => `<p style="margin:0 0 16px">${escapeHtml(s)}</p>`;
+  const html = `<!doctype html>
+<html lang="en"><head><meta charset="utf-8"><title>${escapeHtml(subject)}</title></head>
+<body style="margin:0;padding:24px;background:#F7F4EE;color:#1E232B;font-family:Georgia,'Source Serif 4',serif;font-size:16px;line-height:1.5">
+<div style="max-width:560px;margin:0 auto">
+${p(greeting)}
+${before.map(p).join('\n')}
+<p style="margin:0 0 16px"><a href="${escapeHtml(link.href)}" style="display:inline-block;padding:10px 16px;background:#1F6F6B;color:#F7F4EE;text-decoration:none;border-radius:4px;font-family:'IBM Plex Sans',Arial,sans-serif">${escapeHtml(link.label)}</a></p>
+<p style="margin:0 0 16px;font-size:14px">If the button does not open, copy this address into your browser:<br><span style="font-family:'IBM Plex Mono',monospace;word-break:break-all">${escapeHtml(link.href)}</span></p>
+${after.map(p).join('\n')}
+<p style="margin:24px 0 0;color:#A8782B">— Counterweight</p>
+</div></body></html>`;
+  return { to, subject, text, html };
+}
+
+export function verificationMessage(to: string, displayName: string, link: string): OutgoingMessage {
+  return render(
+    to,
+    'Confirm your e-mail address for Counterweight',
+    `Hello ${displayName},`,
+    [
+      'An account on Counterweight was opened with this e-mail address. To confirm that the address is yours, open this link within 24 hours:',
+    ],
+    { href: link, label: 'Confirm my address' },
+    [
+      'The link works once. Once the address is confirmed you can sign in, submit sightings and corrections, and keep your claim checks.',
+      'If you did not open an account, ignore this message: an account cannot be used until its address is confirmed.',
+    ],
+  );
+}
+
+export function resetMessage(to: string, displayName: string, link: string): OutgoingMessage {
+  return render(
+    to,
+    'Choose a new Counterweight password',
+    `Hello ${displayName},`,
+    ['Someone asked to choose a new password for the Counterweight account with this e-mail address. To choose one, open this link within an hour:'],
+    { href: link, label: 'Choose a new password' },
+    [
+      'The link works once. Choosing a new password signs the account out everywhere.',
+      'If you did not ask for this, ignore this message: your password stays as it is.',
+    ],
+  );
+}

@@ -1,0 +1,76 @@
+/** Admin: users and their roles, the audit log, and the development outbox. */
+import { Router, type RequestHandler } from 'express';
+import { Op, type WhereOptions } from 'sequelize';
+import { z } from 'zod';
+import type { AuditListResponse, OutboxResponse, UserListResponse } from '../../shared/api-types';
+import { pageQuerySchema, setRoleSchema, userListQuerySchema } from '../../shared/schemas/auth';
+import { HttpError } from '../http/errors';
+import { validate } from '../http/validate';
+import { AuditEvent, OutboxMessage, User } from '../models';
+import type { Allow } from '../policies';
+import type { Accounts } from '../services/accounts';
+
+const idParams = z.object({ id: z.coerce.number().int().min(1, 'a user id (a positive whole number)').max(4_294_967_295) });
+
+/** `%` and `_` in a search are letters, not wildcards. */
+const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
+
+/** The outbox exists in development and tests only: in production the route answers 404 as if absent. */
+const developmentOnly =
+  (env: string): RequestHandler =>
+  (req, res, next) => {
+    if (env === 'production') {
+      next(new HttpError(404, 'not_found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`));
+      return;
+    }
+    next();
+  };
+
+export function adminRoutes(allow: Allow, accounts: Accounts, env: string): Router {
+  const r = Router();
+
+  r.get('/admin/users', allow('users.list'), async (req, res) => {
+    const { q, role, limit, offset } = validate(userListQuerySchema, req.query, 'query');
+    const where: WhereOptions<User>[] = [];
+    if (q) {
+      const like = `%${likeEscape(q.toLowerCase())}%`;
+      where.push({ [Op.or]: [{ email: { [Op.like]: like } }, { displayName: { [Op.like]: like } }] });
+    }
+    if (role) where.push({ role });
+    const { rows, count } = await User.findAndCountAll({
+      where: { [Op.and]: where },
+      order: [['createdAt', 'DESC'], ['id', 'DESC']],
+      limit,
+      offset,
+    });
+    const payload: UserListResponse = { users: rows.map((u) => u.toDto()), total: count };
+    res.set('Cache-Control', 'no-store').json(payload);
+  });
+
+  r.patch('/admin/users/:id/role', allow('users.setRole'), async (req, res) => {
+    const { id } = validate(idParams, req.params, 'params');
+    const { role } = validate(setRoleSchema, req.body ?? {}, 'body');
+    const user = await accounts.setRole(req.user!.id, id, role);
+    res.json({ user: user.toDto() });
+  });
+
+  r.get('/admin/audit', allow('audit.list'), async (req, res) => {
+    const { limit, offset } = validate(pageQuerySchema, req.query, 'query');
+    const { rows, count } = await AuditEvent.findAndCountAll({
+      include: [{ model: User, as: 'actor', attributes: ['id', 'displayName'] }],
+      order: [['createdAt', 'DESC'], ['id', 'DESC']],
+      limit,
+      offset,
+    });
+    const payload: AuditListResponse = { events: rows.map((e) => e.toDto()), total: count };
+    res.set('Cache-Control', 'no-store').json(payload);
+  });
+
+  r.get('/admin/outbox', developmentOnly(env), allow('outbox.list'), async (_req, res) => {
+    const rows = await OutboxMessage.findAll({ order: [['receivedAt', 'DESC'], ['id', 'DESC']], limit: 200 });
+    const payload: OutboxResponse = { messages: rows.map((m) => m.toDto()) };
+    res.set('Cache-Control', 'no-store').json(payload);
+  });
+
+  return r;
+}

@@ -1,0 +1,123 @@
+/**
+ * Protection of state-changing requests: the session's synchronizer token in X-CSRF-Token, an
+ * Origin that is not ours refused, and the session cookie's attributes.
+ */
+import request from 'supertest';
+import { createApp } from '../../server/app';
+import { demo, startTestApp, type TestApp } from '../support/app';
+
+let h: TestApp;
+beforeAll(async () => {
+  h = await startTestApp({ publicUrl: 'https://counterweight.example.org' });
+});
+afterAll(() => h?.close());
+
+const expectCsrf = (res: request.Response) => {
+  expect(res.status).toBe(403);
+  expect(res.body).toEqual({ error: { code: 'csrf_failed', message: expect.any(String) } });
+};
+
+describe('the CSRF token', () => {
+  it('is sent by GET /api/session, kept for the session, and not cached', async () => {
+    const agent = request.agent(h.app);
+    const first = await agent.get('/api/session').expect(200);
+    expect(first.body).toEqual({ user: null, csrfToken: expect.stringMatching(/^[A-Za-z0-9_-]{43}$/) });
+    expect(first.headers['cache-control']).toBe('no-store');
+    const second = await agent.get('/api/session').expect(200);
+    expect(second.body.csrfToken).toBe(first.body.csrfToken);
+    const elsewhere = await request(h.app).get('/api/session').expect(200);
+    expect(elsewhere.body.csrfToken).not.toBe(first.body.csrfToken);
+  });
+
+  it('is required: a missing token is refused, before anything happens', async () => {
+    const agent = request.agent(h.app);
+    await agent.get('/api/session').expect(200);
+    const res = await agent.post('/api/auth/sign-in').send({ email: demo.admin.email, password: demo.password });
+    expectCsrf(res);
+    expect(res.body.error.message).toMatch(/X-CSRF-Token/);
+    expect((await agent.get('/api/session')).body.user).toBeNull();
+  });
+
+  it('must match: a wrong token, or one from another session, is refused', async () => {
+    const mine = await h.client();
+    const theirs = await h.client();
+    expectCsrf(await mine.agent.post('/api/auth/sign-in').set('X-CSRF-Token', 'x'.repeat(43)).send({ email: demo.admin.email, password: demo.password }));
+    expectCsrf(await mine.agent.post('/api/auth/sign-in').set('X-CSRF-Token', theirs.csrf).send({ email: demo.admin.email, password: demo.password }));
+    // No session at all (no cookie): nothing to match.
+    expectCsrf(await request(h.app).post('/api/auth/forgot').set('X-CSRF-Token', mine.csrf).send({ email: demo.admin.email }));
+  });
+
+  it('guards signed-in writes too (PATCH, and the admin routes)', async () => {
+    const admin = await h.signedIn(demo.admin.email);
+    expectCsrf(await admin.agent.patch('/api/account').send({ displayName: 'Changed Without Token' }));
+    expectCsrf(await admin.agent.patch('/api/admin/users/1/role').set('X-CSRF-Token', 'nope').send({ role: 'admin' }));
+    await admin.patch('/api/account', { displayName: 'Ada Okonkwo' }).expect(200);
+  });
+
+  it('survives sign-in and sign-out (same token, new session id)', async () => {
+    const c = await h.client();
+    const token = c.csrf;
+    await c.post('/api/auth/sign-in', { email: demo.admin.email, password: demo.password }).expect(200);
+    expect((await c.session()).csrfToken).toBe(token);
+    await c.post('/api/auth/sign-out').expect(204);
+    expect((await c.session()).csrfToken).toBe(token);
+  });
+});
+
+describe('the Origin check', () => {
+  it('refuses a state-changing request from another origin even with the right token', async () => {
+    const c = await h.client();
+    const res = await c.agent
+      .post('/api/auth/sign-in')
+      .set('X-CSRF-Token', c.csrf)
+      .set('Origin', 'https://evil.example.net')
+      .send({ email: demo.admin.email, password: demo.password });
+    expectCsrf(res);
+    expect(res.body.error.message).toContain('https://evil.example.net');
+    expectCsrf(await c.agent.post('/api/auth/sign-out').set('X-CSRF-Token', c.csrf).set('Origin', 'null'));
+    // Pure computations need no token, but a foreign origin is refused there too.
+    expectCsrf(await request(h.app).post('/api/checks/carnot').set('Origin', 'https://evil.example.net').send({ inputs: {} }));
+  });
+
+  it("accepts PUBLIC_URL's origin and the server's own", async () => {
+    const c = await h.client();
+    await c.agent
+      .post('/api/auth/forgot')
+      .set('X-CSRF-Token', c.csrf)
+      .set('Origin', 'https://counterweight.example.org')
+      .send({ email: 'x@example.org' })
+      .expect(202);
+    await c.agent.post('/api/auth/forgot').set('X-CSRF-Token', c.csrf).set('Host', 'cw.internal:8080').set('Origin', 'http://cw.internal:8080').send({ email: 'x@example.org' }).expect(202);
+  });
+
+  it('leaves reads alone: GET with a foreign Origin and no token', async () => {
+    await request(h.app).get('/api/taxonomy').set('Origin', 'https://evil.example.net').expect(200);
+  });
+
+  it('lets pure computations (check kit, worksheet evaluation) through without a token', async () => {
+    await request(h.app).post('/api/checks/carnot').send({ inputs: {} }).expect(200);
+    await request(h.app).post('/api/worksheets/evaluate').send({}).expect(400);
+  });
+});
+
+describe('the session cookie', () => {
+  it('is cw.sid, HttpOnly, SameSite=Lax, not Secure outside production, and appears only when a session starts', async () => {
+    const none = await request(h.app).get('/api/taxonomy');
+    expect(none.headers['set-cookie']).toBeUndefined();
+    const res = await request(h.app).get('/api/session');
+    const cookie = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('cw.sid='))!;
+    expect(cookie).toMatch(/; HttpOnly/);
+    expect(cookie).toMatch(/; SameSite=Lax/);
+    expect(cookie).not.toMatch(/; Secure/);
+    expect(cookie).toMatch(/; Path=\//);
+  });
+
+  it('is Secure in production (behind a TLS-terminating proxy on loopback)', async () => {
+    const prod = createApp({ sequelize: h.t.sequelize, version: 'test', env: 'production', sessionSecret: 'p'.repeat(40), sessionCleanupMs: 0 });
+    const res = await request(prod).get('/api/session').set('X-Forwarded-Proto', 'https').expect(200);
+    const cookie = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('cw.sid='))!;
+    expect(cookie).toMatch(/; Secure/);
+    expect(cookie).toMatch(/; HttpOnly/);
+    expect(() => createApp({ sequelize: h.t.sequelize, version: 'test', env: 'production' })).toThrow(/secret/);
+  });
+});

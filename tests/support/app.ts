@@ -1,0 +1,113 @@
+/**
+ * The real app on a test database with its own fake SMTP server, and a small client that keeps the
+ * session cookie and sends the CSRF token the way the web app does.
+ */
+import path from 'node:path';
+import request from 'supertest';
+import { createApp, type AppLocals, type AppOptions } from '../../server/app';
+import { ROOT } from '../../server/config';
+import { readDemoAccounts, seedDemoAccounts } from '../../server/db/seed-accounts';
+import { LIMIT_NAMES, type RateLimits } from '../../server/http/rate-limit';
+import { createTestDatabase, type TestDatabase } from './db';
+import { startTestMail, type TestMail } from './mail';
+
+export const CONTENT_DIR = path.join(ROOT, 'content');
+
+/** The demo accounts of content/demo/accounts.yml, by role. */
+export const demo = (() => {
+  const file = readDemoAccounts(CONTENT_DIR);
+  const byRole = (role: string) => file.accounts.find((a) => a.role === role)!;
+  return {
+    password: file.password,
+    admin: byRole('admin'),
+    editor: byRole('editor'),
+    moderator: byRole('moderator'),
+    contributor: byRole('contributor'),
+  };
+})();
+
+/** Limits no test reaches except the rate-limit test, which sets its own. */
+export const HIGH_LIMITS: RateLimits = Object.fromEntries(LIMIT_NAMES.map((n) => [n, { limit: 100_000, windowMs: 60_000 }])) as RateLimits;
+
+export interface TestApp {
+  t: TestDatabase;
+  mail: TestMail;
+  app: ReturnType<typeof createApp>;
+  /** A client with a fresh session (and its CSRF token). */
+  client(): Promise<Client>;
+  /** A client signed in with these credentials (expects 200). */
+  signedIn(email: string, password?: string): Promise<Client>;
+  close(): Promise<void>;
+}
+
+export async function startTestApp(opts: Partial<AppOptions> & { demoAccounts?: boolean } = {}): Promise<TestApp> {
+  const { demoAccounts = true, ...appOpts } = opts;
+  const t = await createTestDatabase();
+  const mail = await startTestMail();
+  if (demoAccounts) await seedDemoAccounts(t.sequelize, CONTENT_DIR, 'development');
+  const app = createApp({ sequelize: t.sequelize, version: 'test', env: 'test', mailer: mail.mailer, rateLimits: HIGH_LIMITS, ...appOpts });
+  const client = () => Client.start(app);
+  return {
+    t,
+    mail,
+    app,
+    client,
+    async signedIn(email, password = demo.password) {
+      const c = await client();
+      const res = await c.post('/api/auth/sign-in', { email, password });
+      if (res.status !== 200) throw new Error(`sign-in as ${email} answered ${res.status}: ${JSON.stringify(res.body)}`);
+      return c;
+    },
+    async close() {
+      await (app.locals as unknown as AppLocals).close();
+      await mail.stop();
+      await t.drop();
+    },
+  };
+}
+
+type Body = string | object | undefined;
+
+/** A browser-like client: one cookie jar, and the CSRF token from GET /api/session on every write. */
+export class Client {
+  private constructor(
+    readonly agent: ReturnType<typeof request.agent>,
+    public csrf: string,
+  ) {}
+
+  static async start(app: Parameters<typeof request.agent>[0]): Promise<Client> {
+    const agent = request.agent(app);
+    const res = await agent.get('/api/session').expect(200);
+    return new Client(agent, res.body.csrfToken);
+  }
+
+  /** Fetches the session again (the CSRF token may have changed). */
+  async session() {
+    const res = await this.agent.get('/api/session').expect(200);
+    this.csrf = res.body.csrfToken;
+    return res.body as { user: { id: number; email: string; role: string } | null; csrfToken: string };
+  }
+
+  get(path: string) {
+    return this.agent.get(path);
+  }
+
+  send(method: 'post' | 'patch' | 'put' | 'delete', path: string, body?: Body) {
+    const req = this.agent[method](path).set('X-CSRF-Token', this.csrf);
+    return body === undefined ? req : req.send(body);
+  }
+
+  post(path: string, body?: Body) {
+    return this.send('post', path, body ?? {});
+  }
+
+  patch(path: string, body?: Body) {
+    return this.send('patch', path, body ?? {});
+  }
+
+  /** The value of the cw.sid cookie in the jar. */
+  sid(): string | undefined {
+    const jar = (this.agent as unknown as { jar: { getCookie(name: string, access: object): { value: string } | undefined } }).jar;
+    return jar.getCookie('cw.sid', { domain: '127.0.0.1', path: '/', secure: false, script: false })?.value;
+  }
+}
