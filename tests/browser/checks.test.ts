@@ -9,6 +9,7 @@ import type { Page } from 'playwright-core';
 import { checkList } from '../../shared/checks';
 import { runCheck } from '../../shared/checks/run';
 import { byTestId, screenshotDir, startHarness, type Harness } from '../support/browser';
+import { relClose, until } from '../support/poll';
 
 jest.setTimeout(180_000);
 
@@ -17,17 +18,6 @@ beforeAll(async () => {
   h = await startHarness();
 });
 afterAll(() => h?.close());
-
-/** Polls `probe` until it returns true (10 s at most), for values that settle as the page computes. */
-async function until(what: string, probe: () => Promise<boolean>, timeoutMs = 10_000): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  while (!(await probe())) {
-    if (Date.now() > deadline) throw new Error(`timed out waiting until ${what}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-}
-
-const relClose = (a: number, b: number) => a === b || Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b));
 
 /** Every element whose testID starts with `prefix`, as name → exact SI value (data-si). */
 async function siValues(page: Page, prefix: string): Promise<Record<string, number>> {
