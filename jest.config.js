@@ -20,6 +20,13 @@ const esmOnly = [
   '@tanstack/.*',
   'd3-.*',
   'internmap',
+  // The Markdown pipeline (shared/markdown.ts) and its dependencies, ESM only.
+  'unified', 'bail', 'is-plain-obj', 'trough', 'vfile(-[a-z-]+)?', 'unist-util-[a-z-]+', 'mdast-util-[a-z-]+',
+  'micromark(-[a-z-]+)?', 'decode-named-character-reference', 'character-entities(-[a-z0-9-]+)?',
+  'remark-[a-z-]+', 'rehype-[a-z-]+', 'hast-util-[a-z0-9-]+', 'hastscript', 'property-information',
+  'space-separated-tokens', 'comma-separated-tokens', 'zwitch', 'html-void-elements', 'ccount', 'markdown-table',
+  'longest-streak', 'devlop', 'trim-lines', 'web-namespaces', 'stringify-entities', 'parse5', 'entities',
+  '@ungap/structured-clone', 'escape-string-regexp',
 ];
 
 const nodeProject = (name, testMatch, extra = {}) => ({

@@ -4,14 +4,19 @@ import { IBMPlexSans_600SemiBold } from '@expo-google-fonts/ibm-plex-sans/600Sem
 import { SourceSerif4_400Regular } from '@expo-google-fonts/source-serif-4/400Regular';
 import { SourceSerif4_600SemiBold } from '@expo-google-fonts/source-serif-4/600SemiBold';
 import { QueryClientProvider } from '@tanstack/react-query';
+// KaTeX's rules for the math in entries (Metro bundles CSS on the web); its fonts come from installKatexFonts.
+import 'katex/dist/katex.min.css';
 import { useFonts } from 'expo-font';
 import { Slot } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
 import { useState } from 'react';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { createQueryClient } from '@/components/api';
+import { installKatexFonts } from '@/components/markdown/katexFonts';
 import { Shell } from '@/components/Shell';
 import { fonts } from '@/components/theme';
+
+installKatexFonts();
 
 export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);

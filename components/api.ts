@@ -28,6 +28,7 @@ import type {
   userListQuerySchema,
   verifySchema,
 } from '@/shared/schemas/auth';
+import type { Citation, EntryContent } from '@/shared/entries/schema';
 import type { Worksheet } from '@/shared/worksheet/schema';
 
 export class ApiError extends Error {
@@ -38,6 +39,8 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    /** The whole answer, for errors that carry more beside `error` (the current draft on a 409 edit_conflict). */
+    readonly payload?: unknown,
   ) {
     super(message);
   }
@@ -96,7 +99,7 @@ async function call(path: string, init: RequestInit, acceptStatus: readonly numb
   }
   if (isErrorBody(payload)) {
     const { code, message, fields } = payload.error;
-    throw new ApiError(response.status, code, message, fields);
+    throw new ApiError(response.status, code, message, fields, payload);
   }
   throw new ApiError(
     response.status,
@@ -139,7 +142,7 @@ export function forgetCsrfToken() {
   knownCsrfToken = undefined;
 }
 
-type SendMethod = 'POST' | 'PATCH' | 'DELETE';
+type SendMethod = 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 /**
  * Sends a state-changing request with a JSON body and the session's CSRF token, e.g.
@@ -189,6 +192,14 @@ export const queryKeys = {
   audit: ['admin', 'audit'] as const,
   auditPage: (page: PageQuery) => ['admin', 'audit', page] as const,
   outbox: ['admin', 'outbox'] as const,
+  entries: ['entries'] as const,
+  entryList: (query: EntryListQuery) => ['entries', 'list', query] as const,
+  entry: (slug: string, version?: number) => ['entries', slug, 'version', version ?? 'latest'] as const,
+  entryVersions: (slug: string) => ['entries', slug, 'versions'] as const,
+  cite: (slug: string, format: CiteFormat, version: number) => ['entries', slug, 'cite', format, version] as const,
+  /** The Desk and its drafts; dropped with the session like the admin data would be. */
+  desk: ['desk'] as const,
+  draft: (id: number) => ['desk', 'draft', id] as const,
 };
 
 /** One starter worksheet as `GET /api/worksheets` lists it. */
@@ -283,6 +294,7 @@ export function useSession() {
 async function sessionChanged(client: QueryClient) {
   forgetCsrfToken();
   client.removeQueries({ queryKey: queryKeys.admin });
+  client.removeQueries({ queryKey: queryKeys.desk });
   await client.invalidateQueries({ queryKey: queryKeys.session });
 }
 
@@ -390,5 +402,263 @@ export function useOutbox() {
   return useQuery({
     queryKey: queryKeys.outbox,
     queryFn: ({ signal }) => apiGet<OutboxResponse>('/api/admin/outbox', { signal }),
+  });
+}
+
+/* Entries (the contract of issue 5; content as in shared/entries/schema.ts). */
+
+/** Someone named on a version: its author or its reviewer. */
+export interface PersonRef {
+  id: number;
+  displayName: string;
+}
+
+/** One published entry as `GET /api/entries` lists it. */
+export interface EntrySummary {
+  slug: string;
+  title: string;
+  version: number;
+  publishedAt: string;
+  laws: string[];
+  mechanismClass: string;
+  inBrief: string;
+}
+
+/** `GET /api/entries` */
+export interface EntryListResponse {
+  entries: EntrySummary[];
+  total: number;
+}
+
+export interface EntryListQuery {
+  law?: string;
+  mechanism?: string;
+  limit?: number;
+  offset?: number;
+}
+
+/** The Markdown sections of a version, rendered and sanitised by the server with shared/markdown.ts. */
+export interface EntryHtml {
+  inBrief: string;
+  howItIsPitched: string;
+  whyItFails: string;
+  whatFakesTheEffect: string;
+  cautions: string;
+  replies: { reply: string; answer: string }[];
+}
+
+export interface EntryVersionDto {
+  number: number;
+  changeNote: string;
+  publishedAt: string;
+  author: PersonRef;
+  reviewer: PersonRef | null;
+  content: EntryContent;
+  html: EntryHtml;
+}
+
+export interface EntryStatus {
+  slug: string;
+  status: 'draft' | 'in_review' | 'published' | 'retired';
+  retired?: { reason: string; successor?: string };
+}
+
+/** `GET /api/entries/:slug` and `GET /api/entries/:slug/versions/:n` */
+export interface EntryResponse {
+  entry: EntryStatus;
+  version: EntryVersionDto;
+}
+
+export interface VersionSummary {
+  number: number;
+  changeNote: string;
+  publishedAt: string;
+  author: { displayName: string };
+  reviewer: { displayName: string } | null;
+}
+
+/** `GET /api/entries/:slug/versions` */
+export interface VersionListResponse {
+  versions: VersionSummary[];
+}
+
+export const CITE_FORMATS = ['apa', 'vancouver', 'harvard', 'bibtex', 'ris', 'csl-json'] as const;
+export type CiteFormat = (typeof CITE_FORMATS)[number];
+
+/** `GET /api/entries/:slug/cite` */
+export interface CiteResponse {
+  format: CiteFormat;
+  text: string;
+  url: string;
+  version: number;
+  date: string;
+}
+
+export type DraftState = 'draft' | 'in_review';
+
+export interface DraftSummary {
+  id: number;
+  slug: string;
+  title: string;
+  state: DraftState;
+  updatedAt: string;
+  author: { displayName: string };
+  lockVersion: number;
+}
+
+/** `GET /api/desk` */
+export interface DeskResponse {
+  mine: DraftSummary[];
+  toReview: DraftSummary[];
+  recent: EntrySummary[];
+}
+
+export interface DraftDto {
+  id: number;
+  slug: string;
+  state: DraftState;
+  lockVersion: number;
+  content: EntryContent;
+  author: PersonRef;
+  reviewer: PersonRef | null;
+  updatedAt: string;
+}
+
+/** What every draft route answers with. */
+export interface DraftResponse {
+  draft: DraftDto;
+}
+
+export interface CitationProblem {
+  index: number;
+  input: string;
+  reason: string;
+}
+
+/** `POST /api/citations/parse` */
+export interface CitationParseResponse {
+  items: Citation[];
+  problems: CitationProblem[];
+}
+
+const entryPath = (slug: string) => `/api/entries/${encodeURIComponent(slug)}`;
+
+/** `GET /api/entries`: published entries, newest revision first, filtered by law and mechanism class. */
+export function useEntryList(query: EntryListQuery) {
+  return useQuery({
+    queryKey: queryKeys.entryList(query),
+    queryFn: ({ signal }) => apiGet<EntryListResponse>(`/api/entries${queryString({ ...query })}`, { signal }),
+    placeholderData: keepPreviousData,
+  });
+}
+
+/** `GET /api/entries/:slug` (the latest published version) or `…/versions/:n` (that version forever). */
+export function useEntry(slug: string, version?: number) {
+  return useQuery({
+    queryKey: queryKeys.entry(slug, version),
+    queryFn: ({ signal }) =>
+      apiGet<EntryResponse>(version === undefined ? entryPath(slug) : `${entryPath(slug)}/versions/${version}`, { signal }),
+    // A published version never changes; the latest one changes only when a revision is approved.
+    staleTime: version === undefined ? 60 * 1000 : Infinity,
+  });
+}
+
+/** `GET /api/entries/:slug/versions` */
+export function useEntryVersions(slug: string) {
+  return useQuery({
+    queryKey: queryKeys.entryVersions(slug),
+    queryFn: ({ signal }) => apiGet<VersionListResponse>(`${entryPath(slug)}/versions`, { signal }),
+  });
+}
+
+/** `GET /api/entries/:slug/cite?format=…&version=…`: the version itself, cited. */
+export function useCite(slug: string, format: CiteFormat, version: number) {
+  return useQuery({
+    queryKey: queryKeys.cite(slug, format, version),
+    queryFn: ({ signal }) => apiGet<CiteResponse>(`${entryPath(slug)}/cite${queryString({ format, version })}`, { signal }),
+    staleTime: Infinity,
+  });
+}
+
+/** `GET /api/desk`: my drafts, drafts waiting for my review, recently published. */
+export function useDesk() {
+  return useQuery({
+    queryKey: queryKeys.desk,
+    queryFn: ({ signal }) => apiGet<DeskResponse>('/api/desk', { signal }),
+  });
+}
+
+/** `GET /api/drafts/:id` */
+export function useDraft(id: number) {
+  return useQuery({
+    queryKey: queryKeys.draft(id),
+    queryFn: ({ signal }) => apiGet<DraftResponse>(`/api/drafts/${id}`, { signal }),
+    // The editor owns its copy while it is open; saving writes the answer back here.
+    staleTime: Infinity,
+  });
+}
+
+/** After a draft is made or changes state, the Desk's lists and its drafts are fetched again. */
+function draftChanged(client: QueryClient) {
+  return client.invalidateQueries({ queryKey: queryKeys.desk });
+}
+
+/** `POST /api/drafts`: a new entry (409 `slug_taken` naming `body.slug`). */
+export function createDraft(slug: string, content: EntryContent) {
+  return apiSend<DraftResponse>('POST', '/api/drafts', { slug, content });
+}
+
+/** `POST /api/entries/:slug/drafts`: a new draft of a published entry, copied from its latest version. */
+export function useReviseEntry() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (slug: string) => apiSend<DraftResponse>('POST', `${entryPath(slug)}/drafts`),
+    onSuccess: () => draftChanged(client),
+  });
+}
+
+/** `PUT /api/drafts/:id`: 409 `edit_conflict` when `lockVersion` is stale, with the current draft in the body. */
+export function saveDraft(id: number, content: EntryContent, lockVersion: number) {
+  return apiSend<DraftResponse>('PUT', `/api/drafts/${id}`, { content, lockVersion });
+}
+
+/** The current draft a 409 `edit_conflict` carries beside its error. */
+export function draftOfConflict(error: unknown): DraftDto | undefined {
+  if (!(error instanceof ApiError) || error.code !== 'edit_conflict') return undefined;
+  const { payload } = error;
+  if (typeof payload !== 'object' || payload === null || !('draft' in payload)) return undefined;
+  return (payload as DraftResponse).draft;
+}
+
+/** The id of the draft already open for an entry, from a 409 `draft_exists` when revising it. */
+export function openDraftOf(error: unknown): number | undefined {
+  if (!(error instanceof ApiError) || error.code !== 'draft_exists') return undefined;
+  const { payload } = error;
+  if (typeof payload !== 'object' || payload === null || !('draftId' in payload)) return undefined;
+  return Number((payload as { draftId: unknown }).draftId);
+}
+
+type DraftAction = { id: number } & (
+  | { action: 'submit'; lockVersion: number }
+  | { action: 'approve'; changeNote: string }
+  | { action: 'send-back'; reason: string }
+);
+
+/** `POST /api/drafts/:id/submit | approve | send-back`: the vetting workflow. */
+export function useDraftAction() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, action, ...body }: DraftAction) => apiSend<unknown>('POST', `/api/drafts/${id}/${action}`, body),
+    onSuccess: async (_result, { action }) => {
+      await draftChanged(client);
+      if (action === 'approve') await client.invalidateQueries({ queryKey: queryKeys.entries });
+    },
+  });
+}
+
+/** `POST /api/citations/parse`: BibTeX, RIS or CSL-JSON to CSL-JSON items, and what could not be read. */
+export function useParseCitations() {
+  return useMutation({
+    mutationFn: (text: string) => apiSend<CitationParseResponse>('POST', '/api/citations/parse', { text }),
   });
 }

@@ -22,11 +22,16 @@ import { policyGuard } from './policies';
 import { accountRoutes } from './routes/account';
 import { adminRoutes } from './routes/admin';
 import { authRoutes } from './routes/auth';
+import { citationRoutes } from './routes/citations';
+import { deskRoutes } from './routes/desk';
+import { draftRoutes } from './routes/drafts';
+import { entryRoutes } from './routes/entries';
 import { checkRoutes } from './routes/checks';
 import { healthRoutes } from './routes/health';
 import { taxonomyRoutes } from './routes/taxonomy';
 import { worksheetRoutes } from './routes/worksheets';
 import { Accounts } from './services/accounts';
+import { Entries } from './services/entries';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -137,6 +142,7 @@ export function createApp(opts: AppOptions): express.Express {
   };
   Object.assign(app.locals, locals);
   const origin = (req: express.Request) => opts.publicUrl ?? `${req.protocol}://${req.get('host')}`;
+  const entries = new Entries({ sequelize: opts.sequelize, mailer, later });
 
   const api = express.Router();
   api.use(express.json({ limit: opts.jsonLimit ?? '256kb' }));
@@ -150,6 +156,10 @@ export function createApp(opts: AppOptions): express.Express {
   api.use(authRoutes({ allow, accounts, passport, limits, origin, later, logger }));
   api.use(accountRoutes(allow, accounts));
   api.use(adminRoutes(allow, accounts, env));
+  api.use(entryRoutes(allow, entries, origin));
+  api.use(draftRoutes(allow, entries, origin));
+  api.use(deskRoutes(allow, entries));
+  api.use(citationRoutes(allow));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -16,6 +16,7 @@ import { ensureMariaDbInstalled, MariaDbServer, portIsFree } from './db/mariadb'
 import { migrateUp } from './db/migrate';
 import { seedIfEmpty } from './db/seed';
 import { seedDemoAccounts } from './db/seed-accounts';
+import { importEntriesIfEmpty } from './db/seed-entries';
 import { FakeSmtpServer } from './mail/fake-smtp';
 import { createMailer, type Mailer } from './mail/mailer';
 import { createSequelize } from './db/sequelize';
@@ -94,6 +95,13 @@ async function main() {
       }
     } else if (config.env === 'production') {
       say('NODE_ENV=production: the demo accounts are not seeded (their password is published).');
+    }
+    if (config.env !== 'production') {
+      // After the accounts: the starter entries name the demo editors as author and reviewer.
+      const imported = await importEntriesIfEmpty(sequelize, path.join(ROOT, 'content'));
+      if (imported) say(`Imported ${imported} starter entries from content/entries.`);
+    } else {
+      say('NODE_ENV=production: the starter entries are not imported (they are attributed to the demo editors).');
     }
 
     let smtpUrl = config.smtpUrl;

@@ -26,6 +26,8 @@ const PUBLIC: Policy = { who: 'public' };
 const COMPUTE: Policy = { who: 'public', csrf: false };
 const SIGNED_IN: Policy = { who: 'signed-in' };
 const ADMIN: Policy = { who: ['admin'] };
+/** Editors write and vet entries; admins may do the same. */
+const EDITOR: Policy = { who: ['editor', 'admin'] };
 
 export const policies = {
   health: { read: PUBLIC },
@@ -46,6 +48,10 @@ export const policies = {
   users: { list: ADMIN, setRole: ADMIN },
   audit: { list: ADMIN },
   outbox: { list: ADMIN },
+  entries: { list: PUBLIC, read: PUBLIC, versions: PUBLIC, cite: PUBLIC, startDraft: EDITOR, retire: EDITOR },
+  drafts: { create: EDITOR, read: EDITOR, update: EDITOR, submit: EDITOR, approve: EDITOR, sendBack: EDITOR },
+  desk: { read: EDITOR },
+  citations: { parse: EDITOR },
 } as const satisfies Record<string, Record<string, Policy>>;
 
 type Table = typeof policies;

@@ -18,3 +18,12 @@ describe('the Check kit section', () => {
     expect(isInSection('/check', kit)).toBe(false);
   });
 });
+
+describe('the Library section', () => {
+  it('holds the home and every entry page, and nothing else', () => {
+    const library = sections.find((s) => s.key === 'library')!;
+    expect(isInSection('/', library)).toBe(true);
+    expect(isInSection('/entries/light-in-a-box/v/2', library)).toBe(true);
+    expect(isInSection('/desk', library)).toBe(false);
+  });
+});

@@ -37,8 +37,8 @@ export function sectionsFor(role: Role): NavSection[] {
   return sections.filter((section) => section.roles.includes(role));
 }
 
-/** The section a path belongs to: `/` only for itself, the others for their own subpaths too. */
+/** The section a path belongs to: the Library holds `/` and the entry pages, the others their own subpaths. */
 export function isInSection(pathname: string, section: NavSection): boolean {
-  if (section.href === '/') return pathname === '/';
+  if (section.href === '/') return pathname === '/' || pathname.startsWith('/entries/');
   return pathname === section.href || pathname.startsWith(`${section.href}/`);
 }

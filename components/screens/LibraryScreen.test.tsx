@@ -1,7 +1,9 @@
-import { fireEvent, screen, within } from '@testing-library/react';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { TaxonomyResponse } from '@/shared/api-types';
 import { jsonResponse, mockFetch, renderWithProviders } from '../testing/render';
 import { LibraryScreen } from './LibraryScreen';
+
+jest.mock('expo-router', () => require('../testing/expoRouter'));
 
 const taxonomy: TaxonomyResponse = {
   laws: [
@@ -37,20 +39,34 @@ const taxonomy: TaxonomyResponse = {
   ],
 };
 
+const noEntries = { '/api/entries?limit=20': () => jsonResponse(200, { entries: [], total: 0 }) };
+
+const entry = (slug: string, title: string, laws: string[], mechanismClass: string, version: number) => ({
+  slug,
+  title,
+  version,
+  publishedAt: '2026-03-02T09:00:00.000Z',
+  laws,
+  mechanismClass,
+  inBrief: `Why *${title.toLowerCase()}* cannot work.`,
+});
+const allEntries = [
+  entry('shuttling-weights', 'Shuttling weights', ['linear-momentum'], 'internal-mass-motion', 3),
+  entry('wheel-of-weights', 'A wheel of weights', ['energy'], 'over-unity', 1),
+];
+
 describe('LibraryScreen', () => {
   it('has its heading, one search field and a word on what search needs', () => {
-    mockFetch({ '/api/taxonomy': () => jsonResponse(200, taxonomy) });
+    mockFetch({ '/api/taxonomy': () => jsonResponse(200, taxonomy), ...noEntries });
     renderWithProviders(<LibraryScreen />);
     const root = screen.getByTestId('screen-library');
     expect(within(root).getByRole('heading', { level: 1 }).textContent).toBe('Library');
     expect(screen.getByLabelText('Search the library').tagName).toBe('INPUT');
-    expect(screen.getByTestId('library-search-hint').textContent).toContain(
-      'Search across entries comes with the published entries',
-    );
+    expect(screen.getByTestId('library-search-hint').textContent).toContain('Search across entries comes in a later release');
   });
 
   it('shows progress, then the laws with their symmetry and the classes as a tree', async () => {
-    const fetchMock = mockFetch({ '/api/taxonomy': () => jsonResponse(200, taxonomy) });
+    const fetchMock = mockFetch({ '/api/taxonomy': () => jsonResponse(200, taxonomy), ...noEntries });
     renderWithProviders(<LibraryScreen />);
     expect(screen.getByTestId('taxonomy-loading').textContent).toContain('Loading');
 
@@ -70,6 +86,7 @@ describe('LibraryScreen', () => {
   it('says the server could not be reached when fetch fails, and retries on request', async () => {
     let reachable = false;
     mockFetch({
+      ...noEntries,
       '/api/taxonomy': () => {
         if (!reachable) throw new TypeError('Failed to fetch');
         return jsonResponse(200, taxonomy);
@@ -90,6 +107,7 @@ describe('LibraryScreen', () => {
 
   it("passes on the server's own error message", async () => {
     mockFetch({
+      ...noEntries,
       '/api/taxonomy': () =>
         jsonResponse(503, { error: { code: 'db_unavailable', message: 'The database cannot be reached right now. Try again in a moment.' } }),
     });
@@ -101,9 +119,41 @@ describe('LibraryScreen', () => {
   });
 
   it('says what comes next when the taxonomy is empty', async () => {
-    mockFetch({ '/api/taxonomy': () => jsonResponse(200, { laws: [], classes: [] }) });
+    mockFetch({ '/api/taxonomy': () => jsonResponse(200, { laws: [], classes: [] }), ...noEntries });
     renderWithProviders(<LibraryScreen />);
     expect((await screen.findByTestId('taxonomy-empty')).textContent).toContain('npm start loads the starter laws and classes');
-    expect(screen.getByTestId('recent-empty').textContent).toContain('No entries are published yet.');
+    expect((await screen.findByTestId('recent-empty')).textContent).toContain('No entries are published yet.');
+  });
+
+  it('lists published entries, newest revision first, each linking to its page, and filters them by law and class', async () => {
+    const fetchMock = mockFetch({
+      '/api/taxonomy': () => jsonResponse(200, taxonomy),
+      '/api/entries?limit=20': () => jsonResponse(200, { entries: allEntries, total: 2 }),
+      '/api/entries?law=energy&limit=20': () => jsonResponse(200, { entries: [allEntries[1]], total: 1 }),
+      '/api/entries?law=energy&mechanism=internal-mass-motion&limit=20': () => jsonResponse(200, { entries: [], total: 0 }),
+    });
+    const onFiltersChange = jest.fn();
+    renderWithProviders(<LibraryScreen onFiltersChange={onFiltersChange} />);
+
+    const list = await screen.findByTestId('entry-list');
+    expect(within(list).getAllByRole('listitem').map((item) => item.getAttribute('data-testid'))).toEqual([
+      'entry-shuttling-weights',
+      'entry-wheel-of-weights',
+    ]);
+    expect(screen.getByTestId('entry-link-shuttling-weights').getAttribute('href')).toBe('/entries/shuttling-weights');
+    const row = screen.getByTestId('entry-shuttling-weights');
+    expect(row.textContent).toContain('Version 3');
+    expect(row.querySelector('em')!.textContent).toBe('shuttling weights');
+    expect(await within(row).findByText('Conservation of linear momentum · Thrust from masses moving inside')).toBeTruthy();
+
+    fireEvent.click(screen.getByTestId('filter-law-energy'));
+    await waitFor(() => expect(screen.queryByTestId('entry-shuttling-weights')).toBeNull());
+    expect(screen.getByTestId('entry-wheel-of-weights')).toBeTruthy();
+    expect(fetchMock).toHaveBeenCalledWith('/api/entries?law=energy&limit=20', expect.anything());
+    expect(onFiltersChange).toHaveBeenLastCalledWith({ law: 'energy' });
+
+    fireEvent.click(screen.getByTestId('filter-mechanism-internal-mass-motion'));
+    expect((await screen.findByTestId('entries-none')).textContent).toContain('No published entry matches these filters.');
+    expect(onFiltersChange).toHaveBeenLastCalledWith({ law: 'energy', mechanism: 'internal-mass-motion' });
   });
 });

@@ -7,9 +7,25 @@ import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
+import { EntryList, type EntryFilters } from './EntryList';
 
-/** The home: search, the taxonomy to browse by, and what was revised lately. */
-export function LibraryScreen() {
+interface LibraryScreenProps {
+  /** Filters to start from, e.g. from the address (`/?law=energy`). */
+  initialFilters?: EntryFilters;
+  /** Called with the filters each time the reader changes them. */
+  onFiltersChange?: (filters: EntryFilters) => void;
+}
+
+/** The home: search, what was revised lately (narrowed by law and class), and the taxonomy to browse by. */
+export function LibraryScreen({ initialFilters = {}, onFiltersChange }: LibraryScreenProps) {
+  const [filters, setFilters] = useState(initialFilters);
+  const [pages, setPages] = useState(1);
+  const { data: taxonomy } = useTaxonomy();
+  const changeFilters = (next: EntryFilters) => {
+    setFilters(next);
+    setPages(1);
+    onFiltersChange?.(next);
+  };
   return (
     <Screen
       testID="screen-library"
@@ -17,12 +33,16 @@ export function LibraryScreen() {
       lead="The standard objections to impossible-machine claims: each written once, checked by a second expert, versioned and citable."
     >
       <SearchField />
-      <Taxonomy />
       <Section title="Recently revised">
-        <Notice testID="recent-empty" title="No entries are published yet.">
-          When editors publish entries and their revisions, the latest appear here, newest first.
-        </Notice>
+        <EntryList
+          filters={filters}
+          onFiltersChange={changeFilters}
+          taxonomy={taxonomy}
+          pages={pages}
+          onMore={() => setPages((n) => n + 1)}
+        />
       </Section>
+      <Taxonomy />
     </Screen>
   );
 }
@@ -43,8 +63,8 @@ function SearchField() {
         style={[styles.input, focused && styles.inputFocused]}
       />
       <Text testID="library-search-hint" style={type.caption}>
-        Search across entries comes with the published entries. Until then, browse the conservation laws and
-        mechanism classes below.
+        Search across entries comes in a later release. Until then, narrow the list below by conservation law and
+        mechanism class.
       </Text>
     </View>
   );

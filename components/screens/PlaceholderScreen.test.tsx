@@ -24,7 +24,6 @@ function sessionOf(role: UserDto['role'] | null) {
 describe('PlaceholderScreen', () => {
   it.each([
     ['check', 'Claim check', 'referee paragraph', null],
-    ['desk', 'Desk', 'drafts', 'editor'],
     ['queue', 'Queue', 'oldest first', 'moderator'],
   ] as const)('%s has its heading and says what will come there', async (section, title, words, role) => {
     sessionOf(role);
@@ -35,10 +34,7 @@ describe('PlaceholderScreen', () => {
     expect((await screen.findByTestId(`${section}-status`)).textContent).toContain('Not open yet');
   });
 
-  it.each([
-    ['desk', 'contributor', 'Editors and admins only'],
-    ['queue', 'editor', 'Moderators and admins only'],
-  ] as const)('keeps %s from a %s, saying who it is for', async (section, role, words) => {
+  it.each([['queue', 'editor', 'Moderators and admins only']] as const)('keeps %s from a %s, saying who it is for', async (section, role, words) => {
     sessionOf(role);
     renderWithProviders(<PlaceholderScreen section={section} />);
     const refusal = await screen.findByTestId('role-required');
@@ -55,11 +51,8 @@ describe('PlaceholderScreen', () => {
     expect(screen.getByTestId('role-sign-in').getAttribute('href')).toBe('/sign-in?next=%2Fqueue');
   });
 
-  it('opens Desk and Queue to an admin', async () => {
+  it('opens the Queue to an admin', async () => {
     sessionOf('admin');
-    const { unmount } = renderWithProviders(<PlaceholderScreen section="desk" />);
-    expect(await screen.findByTestId('desk-status')).toBeTruthy();
-    unmount();
     renderWithProviders(<PlaceholderScreen section="queue" />);
     expect(await screen.findByTestId('queue-status')).toBeTruthy();
   });

@@ -5,7 +5,7 @@ import { type } from '../theme';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 
-type PlannedSection = 'check' | Exclude<RoleSectionKey, 'admin'>;
+type PlannedSection = 'check' | Exclude<RoleSectionKey, 'admin' | 'desk'>;
 
 interface Plan {
   title: string;
@@ -22,12 +22,6 @@ const plans: Record<PlannedSection, Plan> = {
       'Paste a claim — an abstract, a press release, a pitch — and Counterweight finds the entries that match it and shows the words that matched, picks out the figures in the text with their units, and runs the checks that apply. You get a referee paragraph with numbered references, ready to paste, and can save the check or share it by link.',
     status: 'Claim checks open once the library has published entries to match against.',
   },
-  desk: {
-    title: 'Desk',
-    purpose:
-      'Where editors work: your drafts, the drafts of other editors waiting for your review, and what was published recently.',
-    status: 'The desk opens once editors can write drafts of entries.',
-  },
   queue: {
     title: 'Queue',
     purpose:
@@ -36,7 +30,7 @@ const plans: Record<PlannedSection, Plan> = {
   },
 };
 
-/** A section that is planned but not built yet: what it will hold, and when; Desk and Queue only for their roles. */
+/** A section that is planned but not built yet: what it will hold, and when; the Queue only for its roles. */
 export function PlaceholderScreen({ section }: { section: PlannedSection }) {
   const plan = plans[section];
   const status = (

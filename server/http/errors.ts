@@ -12,6 +12,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    /** More top-level members of the answer beside `error` (e.g. the current draft on a 409 edit_conflict). */
+    readonly extra?: Record<string, unknown>,
   ) {
     super(message);
   }
@@ -49,7 +51,7 @@ export function errorHandler(log: { error: (obj: unknown, msg?: string) => void 
   return (err, req, res, next) => {
     if (res.headersSent) return next(err);
     if (err instanceof HttpError) {
-      res.status(err.status).json(body(err.code, err.message, err.fields));
+      res.status(err.status).json({ ...err.extra, ...body(err.code, err.message, err.fields) });
       return;
     }
     const mapped = typeof err?.type === 'string' ? parserErrors[err.type] : undefined;

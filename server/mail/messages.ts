@@ -51,3 +51,39 @@ export function resetMessage(to: string, displayName: string, link: string): Out
     ],
   );
 }
+
+/** To the other editors: a draft waits for review. */
+export function reviewRequestedMessage(to: string, displayName: string, authorName: string, title: string, link: string): OutgoingMessage {
+  return render(
+    to,
+    `Waiting for review: ${title}`,
+    `Hello ${displayName},`,
+    [`${authorName} has submitted the draft “${title}” for review. Any editor other than its author may approve it or send it back with a reason.`],
+    { href: link, label: 'Open the draft' },
+    ['You receive this because you are an editor on Counterweight.'],
+  );
+}
+
+/** To the author: the draft was approved and is now published as version N. */
+export function draftApprovedMessage(to: string, displayName: string, reviewerName: string, title: string, version: number, link: string): OutgoingMessage {
+  return render(
+    to,
+    `Published: ${title}, version ${version}`,
+    `Hello ${displayName},`,
+    [`${reviewerName} has approved your draft “${title}”. It is now published as version ${version}, and this address will show that version for good:`],
+    { href: link, label: `Read version ${version}` },
+    ['Readers see this version until a newer one is approved.'],
+  );
+}
+
+/** To the author: the draft was sent back with a reason. */
+export function draftSentBackMessage(to: string, displayName: string, reviewerName: string, title: string, reason: string, link: string): OutgoingMessage {
+  return render(
+    to,
+    `Sent back for changes: ${title}`,
+    `Hello ${displayName},`,
+    [`${reviewerName} has sent your draft “${title}” back for changes, with this reason:`, reason, 'The draft is editable again; submit it once more when it is ready.'],
+    { href: link, label: 'Open the draft' },
+    [],
+  );
+}

@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { initAccounts } from './accounts';
 import { initAudit } from './audit';
+import { initEntries } from './entries';
 import { initOutbox } from './outbox';
 import { initTaxonomy } from './taxonomy';
 
@@ -8,6 +9,7 @@ export { ConservationLaw, MechanismClass } from './taxonomy';
 export { EmailToken, Session, User, TOKEN_PURPOSES, type TokenPurpose } from './accounts';
 export { AuditEvent, audit } from './audit';
 export { OutboxMessage } from './outbox';
+export { Entry, EntryLaw, EntryVersion, PublishedVersionImmutable, ENTRY_STATUSES, VERSION_STATES, type EntryStatus, type VersionState } from './entries';
 
 /** Binds every model to this Sequelize instance. Call once per instance, before any query. */
 export function initModels(sequelize: Sequelize): void {
@@ -15,4 +17,5 @@ export function initModels(sequelize: Sequelize): void {
   initAccounts(sequelize);
   initAudit(sequelize);
   initOutbox(sequelize);
+  initEntries(sequelize);
 }

@@ -104,7 +104,7 @@ it('says clearly when the API cannot be reached, and recovers on retry', async (
   await message.waitFor();
   await page.screenshot({ path: path.join(shots, 'phone-api-down.png') });
   block = false;
-  await page.getByRole('button', { name: /retry/i }).click();
+  await byTestId(page, 'taxonomy-error-retry').click();
   await page.getByText('Conservation of linear momentum').first().waitFor();
   await page.context().close();
 });

@@ -16,12 +16,15 @@ jest.setTimeout(120_000);
 
 type Viewer = 'reader' | 'contributor' | 'editor' | 'moderator' | 'admin';
 const VIEWERS: Viewer[] = ['reader', 'contributor', 'editor', 'moderator', 'admin'];
-type Who = 'public' | 'signed-in' | 'admin';
+/** 'editor': editors and admins (policies.ts EDITOR). */
+type Who = 'public' | 'signed-in' | 'editor' | 'admin';
 
 interface Expectation {
   who: Who;
   /** For state-changing routes: the request to send (a concrete path and a body). */
   try?: (ctx: { targetId: number }) => { path: string; body: object };
+  /** For read routes with path parameters and a policy beyond public: a concrete path that answers 200. */
+  read?: (ctx: { draftId: number }) => string;
 }
 
 /** Hand-written: who may use each route. Not derived from policies.ts, so that a change there shows here. */
@@ -50,6 +53,22 @@ const expected: Record<string, Expectation> = {
   'PATCH /api/admin/users/:id/role': { who: 'admin', try: ({ targetId }) => ({ path: `/api/admin/users/${targetId}/role`, body: { role: 'editor' } }) },
   'GET /api/admin/audit': { who: 'admin' },
   'GET /api/admin/outbox': { who: 'admin' },
+  // Entries (issue 5). State-changing tries aim at records that do not exist: allowed means 404/400, never 401/403.
+  'GET /api/entries': { who: 'public' },
+  'GET /api/entries/:slug': { who: 'public' },
+  'GET /api/entries/:slug/versions': { who: 'public' },
+  'GET /api/entries/:slug/versions/:n': { who: 'public' },
+  'GET /api/entries/:slug/cite': { who: 'public' },
+  'POST /api/entries/:slug/drafts': { who: 'editor', try: () => ({ path: '/api/entries/no-such-entry/drafts', body: {} }) },
+  'POST /api/entries/:slug/retire': { who: 'editor', try: () => ({ path: '/api/entries/no-such-entry/retire', body: { reason: 'Matrix test.' } }) },
+  'POST /api/drafts': { who: 'editor', try: () => ({ path: '/api/drafts', body: {} }) },
+  'GET /api/drafts/:id': { who: 'editor', read: ({ draftId }) => `/api/drafts/${draftId}` },
+  'PUT /api/drafts/:id': { who: 'editor', try: () => ({ path: '/api/drafts/4000000000', body: { content: {}, lockVersion: 0 } }) },
+  'POST /api/drafts/:id/submit': { who: 'editor', try: () => ({ path: '/api/drafts/4000000000/submit', body: { lockVersion: 0 } }) },
+  'POST /api/drafts/:id/approve': { who: 'editor', try: () => ({ path: '/api/drafts/4000000000/approve', body: { changeNote: 'Matrix test.' } }) },
+  'POST /api/drafts/:id/send-back': { who: 'editor', try: () => ({ path: '/api/drafts/4000000000/send-back', body: { reason: 'Matrix test.' } }) },
+  'GET /api/desk': { who: 'editor' },
+  'POST /api/citations/parse': { who: 'editor', try: () => ({ path: '/api/citations/parse', body: { text: '@book{matrix, title = {A book}, year = 2000}' } }) },
 };
 
 interface FoundRoute {
@@ -84,8 +103,9 @@ const STATE_CHANGING = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 let h: TestApp;
 let routes: FoundRoute[];
 let targetId: number;
+let draftId: number;
 beforeAll(async () => {
-  h = await startTestApp();
+  h = await startTestApp({ taxonomy: true });
   routes = routesOf(h.app).filter((r) => r.path.startsWith('/api/'));
   const target = await User.create({
     email: 'matrix.target@example.org',
@@ -94,7 +114,21 @@ beforeAll(async () => {
     emailVerifiedAt: new Date(),
   });
   targetId = target.id;
+  // A draft for the draft read route to find.
+  const editor = await h.signedIn(demo.editor.email);
+  const created = await editor.post('/api/drafts', {
+    slug: 'matrix-draft',
+    content: { title: 'Matrix draft', mechanismClass: (await firstClassSlug()), laws: [] },
+  });
+  if (created.status !== 201) throw new Error(`could not create the matrix draft: ${created.status} ${JSON.stringify(created.body)}`);
+  draftId = created.body.draft.id;
 });
+
+async function firstClassSlug(): Promise<string> {
+  const res = await request(h.app).get('/api/taxonomy').expect(200);
+  if (!res.body.classes.length) throw new Error('the test database has no mechanism classes');
+  return res.body.classes[0].slug;
+}
 afterAll(() => h?.close());
 
 const accountOf: Record<Exclude<Viewer, 'reader'>, string> = {
@@ -111,6 +145,7 @@ const outcome = (who: Who, viewer: Viewer): 'allowed' | 401 | 403 => {
   if (who === 'public') return 'allowed';
   if (viewer === 'reader') return 401;
   if (who === 'signed-in') return 'allowed';
+  if (who === 'editor') return viewer === 'editor' || viewer === 'admin' ? 'allowed' : 403;
   return viewer === 'admin' ? 'allowed' : 403;
 };
 
@@ -161,7 +196,7 @@ describe('the read routes with a policy beyond public', () => {
   const reads = Object.entries(expected).filter(([key, e]) => key.startsWith('GET ') && e.who !== 'public');
   it.each(reads.flatMap(([key, e]) => VIEWERS.map((v) => [key, v, e.who] as const)))('%s as %s', async (key, viewer, who) => {
     const c = await clientFor(viewer);
-    const res = await c.get(key.split(' ')[1]);
+    const res = await c.get(expected[key].read ? expected[key].read!({ draftId }) : key.split(' ')[1]);
     const want = outcome(who, viewer);
     if (want === 'allowed') expect(res.status).toBe(200);
     else expect({ status: res.status, code: res.body.error.code }).toEqual({ status: want, code: want === 401 ? 'sign_in_required' : 'forbidden' });

@@ -6,7 +6,9 @@ import path from 'node:path';
 import request from 'supertest';
 import { createApp, type AppLocals, type AppOptions } from '../../server/app';
 import { ROOT } from '../../server/config';
+import { seedIfEmpty } from '../../server/db/seed';
 import { readDemoAccounts, seedDemoAccounts } from '../../server/db/seed-accounts';
+import { importEntriesIfEmpty } from '../../server/db/seed-entries';
 import { LIMIT_NAMES, type RateLimits } from '../../server/http/rate-limit';
 import { createTestDatabase, type TestDatabase } from './db';
 import { startTestMail, type TestMail } from './mail';
@@ -40,11 +42,22 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-export async function startTestApp(opts: Partial<AppOptions> & { demoAccounts?: boolean } = {}): Promise<TestApp> {
-  const { demoAccounts = true, ...appOpts } = opts;
+export interface TestAppOptions extends Partial<AppOptions> {
+  /** Seed the demo accounts (default true). */
+  demoAccounts?: boolean;
+  /** Load content/taxonomy.yml (default false). */
+  taxonomy?: boolean;
+  /** Import content/entries after the accounts (default false; implies the taxonomy). */
+  starterEntries?: boolean;
+}
+
+export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> {
+  const { demoAccounts = true, taxonomy = false, starterEntries = false, ...appOpts } = opts;
   const t = await createTestDatabase();
   const mail = await startTestMail();
+  if (taxonomy || starterEntries) await seedIfEmpty(t.sequelize, CONTENT_DIR);
   if (demoAccounts) await seedDemoAccounts(t.sequelize, CONTENT_DIR, 'development');
+  if (starterEntries) await importEntriesIfEmpty(t.sequelize, CONTENT_DIR);
   const app = createApp({ sequelize: t.sequelize, version: 'test', env: 'test', mailer: mail.mailer, rateLimits: HIGH_LIMITS, ...appOpts });
   const client = () => Client.start(app);
   return {
@@ -90,6 +103,10 @@ export class Client {
 
   get(path: string) {
     return this.agent.get(path);
+  }
+
+  put(path: string, body?: Body) {
+    return this.send('put', path, body ?? {});
   }
 
   send(method: 'post' | 'patch' | 'put' | 'delete', path: string, body?: Body) {

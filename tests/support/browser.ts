@@ -11,6 +11,7 @@ import { createApp, type AppLocals } from '../../server/app';
 import { ROOT } from '../../server/config';
 import { seedIfEmpty } from '../../server/db/seed';
 import { seedDemoAccounts } from '../../server/db/seed-accounts';
+import { importEntriesIfEmpty } from '../../server/db/seed-entries';
 import { HIGH_LIMITS } from './app';
 import { createTestDatabase, type TestDatabase } from './db';
 import { startTestMail, type TestMail } from './mail';
@@ -36,6 +37,7 @@ export async function startHarness(): Promise<Harness> {
   const t: TestDatabase = await createTestDatabase();
   await seedIfEmpty(t.sequelize, path.join(ROOT, 'content'));
   await seedDemoAccounts(t.sequelize, path.join(ROOT, 'content'), 'development');
+  await importEntriesIfEmpty(t.sequelize, path.join(ROOT, 'content'));
   const mail = await startTestMail();
   // Listen first, so that the e-mailed links can name the server's real address.
   const server = http.createServer();

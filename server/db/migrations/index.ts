@@ -1,8 +1,10 @@
 /** Every migration, in order. A new migration is a new file here and one line below. */
 import * as m0001 from './0001-taxonomy';
 import * as m0002 from './0002-accounts';
+import * as m0003 from './0003-entries';
 
 export const migrations = [
   { name: '0001-taxonomy', ...m0001 },
   { name: '0002-accounts', ...m0002 },
+  { name: '0003-entries', ...m0003 },
 ];

@@ -1,0 +1,3 @@
+import { DeskScreen } from '@/components/desk/DeskScreen';
+
+export default DeskScreen;

@@ -1,0 +1,3 @@
+import { NewEntryScreen } from '@/components/desk/DraftScreen';
+
+export default NewEntryScreen;

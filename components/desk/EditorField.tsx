@@ -1,0 +1,85 @@
+import { useId, useState, type ReactNode } from 'react';
+import { StyleSheet, Text, TextInput, View } from 'react-native';
+import { colors, focusRing, radius, space, type } from '../theme';
+import { FieldError } from '../worksheet/QuantityField';
+
+interface EditorFieldProps {
+  /** The field's name: the input is `editor-field-<name>`, its error `editor-error-<name>`. */
+  name: string;
+  label: string;
+  value: string;
+  onChangeText: (text: string) => void;
+  /** Markdown prose, a list one item a line, or JSON: several lines, the mono face for JSON and slugs. */
+  lines?: number;
+  mono?: boolean;
+  hint?: string;
+  error?: string;
+  /** Beside the label: a live count, a limit. */
+  aside?: ReactNode;
+  editable?: boolean;
+}
+
+/**
+ * One field of the entry editor: a label, a text box of one or several lines, its hint and its
+ * error beneath. (The account forms' TextField is for single-line fields with autofill.)
+ */
+export function EditorField({ name, label, value, onChangeText, lines = 1, mono, hint, error, aside, editable = true }: EditorFieldProps) {
+  const [focused, setFocused] = useState(false);
+  const id = useId();
+  const describedBy = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(' ');
+  return (
+    <View style={styles.field}>
+      <View style={styles.labelRow}>
+        <Text style={type.uiStrong}>{label}</Text>
+        {aside}
+      </View>
+      <TextInput
+        testID={`editor-field-${name}`}
+        aria-label={label}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy || undefined}
+        value={value}
+        onChangeText={onChangeText}
+        multiline={lines > 1}
+        numberOfLines={lines}
+        editable={editable}
+        autoCapitalize={mono ? 'none' : 'sentences'}
+        autoCorrect={!mono}
+        spellCheck={!mono}
+        onFocus={() => setFocused(true)}
+        onBlur={() => setFocused(false)}
+        style={[
+          mono ? type.mono : type.ui,
+          styles.input,
+          lines > 1 && { minHeight: lines * (mono ? type.mono.lineHeight : type.ui.lineHeight) + 2 * space.xs },
+          error ? styles.inputError : null,
+          focused && styles.inputFocused,
+        ]}
+      />
+      {hint ? (
+        <Text nativeID={`${id}-hint`} style={type.small}>
+          {hint}
+        </Text>
+      ) : null}
+      {error ? <FieldError id={`${id}-error`} testID={`editor-error-${name}`} message={error} /> : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  field: { gap: space.xxs },
+  labelRow: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'baseline', gap: space.xs },
+  input: {
+    ...focusRing,
+    marginTop: space.xxs,
+    backgroundColor: colors.surface,
+    borderColor: colors.ruleStrong,
+    borderRadius: radius.sm,
+    borderWidth: 1,
+    minHeight: 44,
+    paddingHorizontal: space.sm,
+    paddingVertical: space.xs,
+  },
+  inputError: { borderColor: colors.brass, borderWidth: 2, backgroundColor: colors.brassWash },
+  inputFocused: { borderColor: colors.brass },
+});

@@ -1,0 +1,71 @@
+import { router } from 'expo-router';
+import { useState } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
+import { useDraftAction, type DraftDto } from '../api';
+import { ProblemNotice } from '../auth/Form';
+import { problemOf } from '../auth/useForm';
+import { space, type } from '../theme';
+import { Button } from '../ui/Button';
+import { EditorField } from './EditorField';
+
+/**
+ * For an editor reviewing someone else's draft: approve it with a change note (publishing the next
+ * version), or send it back to its author with the reason.
+ */
+export function ReviewPanel({ draft }: { draft: DraftDto }) {
+  const [changeNote, setChangeNote] = useState('');
+  const [reason, setReason] = useState('');
+  const action = useDraftAction();
+  const [missing, setMissing] = useState<'changeNote' | 'reason' | null>(null);
+
+  const approve = () => {
+    if (!changeNote.trim()) return setMissing('changeNote');
+    setMissing(null);
+    action.mutate({ id: draft.id, action: 'approve', changeNote: changeNote.trim() }, { onSuccess: () => router.replace(`/entries/${draft.slug}`) });
+  };
+  const sendBack = () => {
+    if (!reason.trim()) return setMissing('reason');
+    setMissing(null);
+    action.mutate({ id: draft.id, action: 'send-back', reason: reason.trim() }, { onSuccess: () => router.replace('/desk') });
+  };
+  const pending = action.isPending ? action.variables?.action : undefined;
+
+  return (
+    <View testID="review-panel" style={styles.root}>
+      <Text style={type.body}>
+        Written by {draft.author.displayName}. Read it through against its sources and run its worksheets; approving
+        publishes it as the next version under your name as reviewer.
+      </Text>
+      <View testID="change-note" style={styles.group}>
+        <EditorField
+          name="change-note"
+          label="Change note"
+          lines={2}
+          value={changeNote}
+          onChangeText={setChangeNote}
+          hint="What this version changes, for readers of the versions list."
+          error={missing === 'changeNote' ? 'Say what this version changes.' : undefined}
+        />
+        <Button testID="approve" label="Approve and publish" busyLabel="Publishing…" busy={pending === 'approve'} disabled={action.isPending} onPress={approve} />
+      </View>
+      <View style={styles.group}>
+        <EditorField
+          name="send-back-reason"
+          label="Reason for sending it back"
+          lines={3}
+          value={reason}
+          onChangeText={setReason}
+          hint="The author gets this by e-mail with the draft."
+          error={missing === 'reason' ? 'Tell the author what needs to change.' : undefined}
+        />
+        <Button testID="send-back" variant="quiet" label="Send back to the author" busyLabel="Sending back…" busy={pending === 'send-back'} disabled={action.isPending} onPress={sendBack} />
+      </View>
+      <ProblemNotice testID="review-error" problem={action.error ? problemOf(action.error) : null} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { gap: space.lg },
+  group: { gap: space.sm },
+});

@@ -1,0 +1,137 @@
+/**
+ * The editor's working copy of a draft: the entry's content, with the fields typed as text where
+ * an editor writes them as text (other names and related entries one a line, worksheets as JSON).
+ * `readValues` turns it into content checked by the same schema the server uses.
+ */
+import { entryContentSchema, IN_BRIEF_MAX_WORDS, slugSchema, wordCount, type Citation, type EntryContent } from '@/shared/entries/schema';
+import { worksheetSchema } from '@/shared/worksheet/schema';
+
+export interface EditorValues {
+  slug: string;
+  title: string;
+  aliases: string;
+  mechanismClass: string;
+  laws: string[];
+  inBrief: string;
+  howItIsPitched: string;
+  whyItFails: string;
+  worksheets: string;
+  whatFakesTheEffect: string;
+  repliesAndAnswers: { reply: string; answer: string }[];
+  questionsToAsk: string[];
+  cautions: string;
+  related: string;
+  sources: Citation[];
+}
+
+export type EditorField = keyof EditorValues;
+
+const lines = (text: string) =>
+  text
+    .split('\n')
+    .map((line) => line.trim())
+    .filter(Boolean);
+
+export function editorValues(slug: string, content?: EntryContent): EditorValues {
+  return {
+    slug,
+    title: content?.title ?? '',
+    aliases: content?.aliases.join('\n') ?? '',
+    mechanismClass: content?.mechanismClass ?? '',
+    laws: content?.laws ?? [],
+    inBrief: content?.inBrief ?? '',
+    howItIsPitched: content?.howItIsPitched ?? '',
+    whyItFails: content?.whyItFails ?? '',
+    worksheets: content && content.worksheets.length > 0 ? JSON.stringify(content.worksheets, null, 2) : '[]',
+    whatFakesTheEffect: content?.whatFakesTheEffect ?? '',
+    repliesAndAnswers: content?.repliesAndAnswers ?? [],
+    questionsToAsk: content?.questionsToAsk ?? [],
+    cautions: content?.cautions ?? '',
+    related: content?.related.join('\n') ?? '',
+    sources: content?.sources ?? [],
+  };
+}
+
+export interface WorksheetsReading {
+  worksheets?: EntryContent['worksheets'];
+  /** What is wrong with the JSON, with the path of the first problem: "worksheets[0].steps: …". */
+  error?: string;
+}
+
+/** The worksheets field: JSON, an array of worksheets each checked by worksheetSchema. */
+export function readWorksheets(text: string): WorksheetsReading {
+  let parsed: unknown;
+  try {
+    parsed = JSON.parse(text.trim() === '' ? '[]' : text);
+  } catch (error) {
+    return { error: `Not JSON: ${(error as Error).message}` };
+  }
+  const result = worksheetSchema.array().max(6, 'at most 6 worksheets').safeParse(parsed);
+  if (!result.success) {
+    const issue = result.error.issues[0];
+    const path = issue.path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${String(p)}`)).join('');
+    return { error: `worksheets${path}: ${issue.message}` };
+  }
+  return { worksheets: result.data };
+}
+
+export interface Reading {
+  /** The content, when every field passes. */
+  content?: EntryContent;
+  /** What is wrong, by field. */
+  problems: Partial<Record<EditorField, string>>;
+}
+
+export function readValues(values: EditorValues): Reading {
+  const problems: Partial<Record<EditorField, string>> = {};
+  const slug = slugSchema.safeParse(values.slug);
+  if (!slug.success) problems.slug = slug.error.issues[0].message;
+  const sheets = readWorksheets(values.worksheets);
+  if (sheets.error) problems.worksheets = sheets.error;
+  const words = wordCount(values.inBrief);
+  if (words > IN_BRIEF_MAX_WORDS) problems.inBrief = `${words} words; at most ${IN_BRIEF_MAX_WORDS}`;
+
+  const result = entryContentSchema.safeParse({
+    title: values.title,
+    aliases: lines(values.aliases),
+    mechanismClass: values.mechanismClass,
+    laws: values.laws,
+    inBrief: values.inBrief,
+    howItIsPitched: values.howItIsPitched,
+    whyItFails: values.whyItFails,
+    worksheets: sheets.worksheets ?? [],
+    whatFakesTheEffect: values.whatFakesTheEffect,
+    repliesAndAnswers: values.repliesAndAnswers,
+    questionsToAsk: values.questionsToAsk.map((q) => q.trim()),
+    cautions: values.cautions,
+    related: lines(values.related),
+    sources: values.sources,
+  });
+  if (!result.success) {
+    for (const issue of result.error.issues) {
+      const field = issue.path[0] as EditorField;
+      problems[field] ??= issue.path.length > 1 ? `item ${Number(issue.path[1]) + 1}: ${issue.message}` : issue.message;
+    }
+  }
+  return Object.keys(problems).length === 0 && result.success ? { content: result.data, problems } : { problems };
+}
+
+/** The content as typed, without checks, for the live preview: whatever can be shown is shown. */
+export function previewContent(values: EditorValues): EntryContent {
+  return {
+    title: values.title,
+    aliases: lines(values.aliases),
+    mechanismClass: values.mechanismClass,
+    laws: values.laws,
+    inBrief: values.inBrief,
+    howItIsPitched: values.howItIsPitched,
+    whyItFails: values.whyItFails,
+    worksheets: readWorksheets(values.worksheets).worksheets ?? [],
+    whatFakesTheEffect: values.whatFakesTheEffect,
+    repliesAndAnswers: values.repliesAndAnswers.filter((r) => r.reply.trim() || r.answer.trim()),
+    questionsToAsk: values.questionsToAsk.filter((q) => q.trim()),
+    cautions: values.cautions,
+    related: lines(values.related),
+    sources: values.sources,
+  };
+}

@@ -1,0 +1,151 @@
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
+import type { SessionResponse } from '@/shared/api-types';
+import type { CiteFormat } from '../api';
+import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
+import { DiffView } from './DiffView';
+import { EntryScreen } from './EntryScreen';
+import { entryResponse, version1, version2 } from './fixtures';
+
+jest.mock('expo-router', () => require('../testing/expoRouter'));
+
+const reader: SessionResponse = { user: null, csrfToken: 'token-for-tests' };
+const versions = {
+  versions: [1, 2].map((number) => ({
+    number,
+    changeNote: `Note ${number}`,
+    publishedAt: `2026-0${number}-10T09:00:00.000Z`,
+    author: { displayName: 'Imre Castellanos' },
+    reviewer: { displayName: 'Talia Verhoeven' },
+  })),
+};
+const citeText: Record<CiteFormat, string> = {
+  apa: 'Castellanos, I. (2026). Thrust from light kept in a box (Version 2). Counterweight.',
+  vancouver: 'Castellanos I. Thrust from light kept in a box. Version 2. Counterweight; 2026.',
+  harvard: 'Castellanos, I. (2026) Thrust from light kept in a box. Version 2. Counterweight.',
+  bibtex: '@misc{light-in-a-box-v2, title = {Thrust from light kept in a box}}',
+  ris: 'TY  - ELEC\nTI  - Thrust from light kept in a box\nER  - ',
+  'csl-json': '[{"id":"light-in-a-box-v2","type":"webpage"}]',
+};
+
+function routes() {
+  const cite = Object.fromEntries(
+    Object.entries(citeText).map(([format, text]) => [
+      `/api/entries/light-in-a-box/cite?format=${format}&version=2`,
+      () => jsonResponse(200, { format, text, url: 'https://counterweight.example.org/entries/light-in-a-box/v/2', version: 2, date: '2026-02-10' }),
+    ]),
+  );
+  return mockFetch({
+    '/api/session': () => jsonResponse(200, reader),
+    '/api/taxonomy': () =>
+      jsonResponse(200, {
+        laws: [{ slug: 'linear-momentum', name: 'Conservation of linear momentum', quantity: 'linear momentum', symmetry: 'translation in space', summary: '', position: 0 }],
+        classes: [{ slug: 'enclosed-radiation', name: 'Radiation in a closed cavity', parentSlug: null, summary: '', position: 0 }],
+      }),
+    '/api/entries/light-in-a-box': () => jsonResponse(200, entryResponse(2, version2)),
+    '/api/entries/light-in-a-box/versions': () => jsonResponse(200, versions),
+    '/api/entries/light-in-a-box/versions/1': () => jsonResponse(200, entryResponse(1, version1)),
+    '/api/entries/light-in-a-box/versions/2': () => jsonResponse(200, entryResponse(2, version2)),
+    ...cite,
+  });
+}
+
+beforeEach(() => setWindowWidth(390));
+
+describe('EntryScreen', () => {
+  it('shows every section in reading order, with math set and the worksheet running', async () => {
+    routes();
+    renderWithProviders(<EntryScreen slug="light-in-a-box" />);
+    await screen.findByRole('heading', { level: 1, name: 'Thrust from light kept in a box' });
+    const root = screen.getByTestId('screen-entry');
+
+    const order = Array.from(root.querySelectorAll('[data-testid^="entry-section-"]')).map((el) => el.getAttribute('data-testid'));
+    expect(order).toEqual(
+      ['inBrief', 'howItIsPitched', 'whyItFails', 'worksheets', 'whatFakesTheEffect', 'repliesAndAnswers', 'questionsToAsk', 'cautions', 'sources', 'related'].map(
+        (field) => `entry-section-${field}`,
+      ),
+    );
+    expect(screen.getByTestId('entry-section-inBrief').querySelector('.katex annotation')!.textContent).toBe('p = E/c');
+    expect(screen.getByTestId('entry-version').textContent).toContain('Version 2');
+    expect(screen.getByTestId('entry-version').textContent).toContain('vetted by Talia Verhoeven');
+    expect((await screen.findByTestId('entry-law-linear-momentum')).textContent).toBe('Conservation of linear momentum');
+    expect(screen.getByTestId('entry-cautions').textContent).toContain('local RF safety rules');
+    expect(screen.getByTestId('related-photon-rocket').getAttribute('href')).toBe('/entries/photon-rocket');
+
+    // P / c for 1 kW: 1000 W / 299 792 458 m/s = 3.3356 uN (c exact, BIPM SI Brochure, 9th ed.).
+    const sheet = screen.getByTestId('worksheet-cavity-bound');
+    const bound = within(sheet).getByTestId('step-F_bound');
+    expect(Number(bound.getAttribute('data-si'))).toBeCloseTo(1000 / 299_792_458, 15);
+    fireEvent.change(within(sheet).getByTestId('input-P'), { target: { value: '2 kW' } });
+    await waitFor(() => expect(Number(within(sheet).getByTestId('step-F_bound').getAttribute('data-si'))).toBeCloseTo(2000 / 299_792_458, 15));
+  });
+
+  it('puts the worksheet and the sources beside the text on a wide screen', async () => {
+    setWindowWidth(1280);
+    routes();
+    renderWithProviders(<EntryScreen slug="light-in-a-box" />);
+    const sheets = await screen.findByTestId('entry-section-worksheets');
+    const text = screen.getByTestId('entry-section-whyItFails');
+    expect(sheets.parentElement).toBe(screen.getByTestId('entry-section-sources').parentElement);
+    expect(sheets.parentElement).not.toBe(text.parentElement);
+  });
+
+  it('cites the version in each format, with its permanent address, and copies it', async () => {
+    const fetchMock = routes();
+    const writeText = jest.fn(async () => undefined);
+    Object.defineProperty(navigator, 'clipboard', { configurable: true, value: { writeText } });
+    renderWithProviders(<EntryScreen slug="light-in-a-box" />);
+
+    const panel = await screen.findByTestId('cite-panel');
+    expect((await within(panel).findByTestId('cite-text')).textContent).toBe(citeText.apa);
+    expect(within(panel).getByTestId('cite-permalink').textContent).toContain('https://counterweight.example.org/entries/light-in-a-box/v/2');
+
+    for (const format of ['bibtex', 'ris', 'csl-json', 'vancouver'] as const) {
+      fireEvent.click(within(panel).getByTestId(`cite-format-${format}`));
+      await waitFor(() => expect(within(panel).getByTestId('cite-text').textContent).toBe(citeText[format]));
+      expect(fetchMock).toHaveBeenCalledWith(`/api/entries/light-in-a-box/cite?format=${format}&version=2`, expect.anything());
+    }
+    fireEvent.click(within(panel).getByTestId('cite-copy'));
+    await waitFor(() => expect(within(panel).getByTestId('cite-copy-status').textContent).toBe('Copied.'));
+    expect(writeText).toHaveBeenCalledWith(citeText.vancouver);
+  });
+
+  it('lists the versions and compares the shown one with the one before', async () => {
+    routes();
+    renderWithProviders(<EntryScreen slug="light-in-a-box" />);
+    const list = await screen.findByTestId('versions-list');
+    expect(within(list).getByTestId('version-link-1').getAttribute('href')).toBe('/entries/light-in-a-box/v/1');
+    const diff = await screen.findByTestId('diff-view');
+    expect(diff.textContent).toContain('From version 1 to version 2');
+    expect(within(diff).getByTestId('diff-section-Why it fails')).toBeTruthy();
+  });
+
+  it('says so when the entry does not exist', async () => {
+    mockFetch({
+      '/api/entries/no-such-thing': () => jsonResponse(404, { error: { code: 'not_found', message: 'No such entry.' } }),
+    });
+    renderWithProviders(<EntryScreen slug="no-such-thing" />);
+    expect((await screen.findByTestId('entry-not-found')).textContent).toContain('No published entry has the address');
+  });
+});
+
+describe('DiffView', () => {
+  it('underlines added words and strikes removed ones, section by section', () => {
+    renderWithProviders(<DiffView from={{ label: 'version 1', content: version1 }} to={{ label: 'version 2', content: version2 }} />);
+    const why = screen.getByTestId('diff-section-Why it fails');
+    const added = within(why).getAllByTestId('diff-added').map((el) => el.textContent!.trim());
+    const removed = within(why).getAllByTestId('diff-removed').map((el) => el.textContent!.trim());
+    expect(added).toEqual(['far', 'near']);
+    expect(removed).toEqual(['opposite']);
+    expect(within(why).getAllByTestId('diff-removed')[0].getAttribute('aria-label')).toBe('removed: opposite');
+
+    const questions = screen.getByTestId('diff-section-Questions to ask the claimant');
+    expect(within(questions).getByTestId('diff-added').textContent).toContain('What did a dummy load show?');
+    expect(within(questions).queryByTestId('diff-removed')).toBeNull();
+    expect(screen.queryByTestId('diff-section-Title')).toBeNull();
+  });
+
+  it('says when nothing changed', () => {
+    renderWithProviders(<DiffView from={{ label: 'version 1', content: version1 }} to={{ label: 'version 1', content: version1 }} />);
+    expect(screen.getByTestId('diff-none').textContent).toContain('same text in every section');
+  });
+});

@@ -1,0 +1,138 @@
+import { useMemo } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
+import { renderMarkdown } from '@/shared/markdown';
+import type { TaxonomyResponse } from '@/shared/api-types';
+import { ChoiceChips } from '../admin/ChoiceChips';
+import { useEntryList, type EntrySummary } from '../api';
+import { formatDay } from '../entry/format';
+import { Markdown } from '../markdown/Markdown';
+import { colors, space, type } from '../theme';
+import { Button } from '../ui/Button';
+import { ErrorNotice } from '../ui/ErrorNotice';
+import { Loading } from '../ui/Loading';
+import { Notice } from '../ui/Notice';
+import { TextLink } from '../ui/TextLink';
+
+/** Which published entries to list: by the conservation law they break and their mechanism class. */
+export interface EntryFilters {
+  law?: string;
+  mechanism?: string;
+}
+
+const PAGE = 20;
+const ANY = 'any';
+
+interface EntryListProps {
+  filters: EntryFilters;
+  onFiltersChange: (filters: EntryFilters) => void;
+  /** For the chips and the names of laws and classes; the list works without it. */
+  taxonomy?: TaxonomyResponse;
+  pages: number;
+  onMore: () => void;
+}
+
+/** Published entries, most recently revised first, with chips to narrow them by law and by class. */
+export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore }: EntryListProps) {
+  const { data, error, isPending, isFetching, refetch } = useEntryList({ ...filters, limit: PAGE * pages });
+  const lawName = (slug: string) => taxonomy?.laws.find((l) => l.slug === slug)?.name ?? slug;
+  const className = (slug: string) => taxonomy?.classes.find((c) => c.slug === slug)?.name ?? slug;
+  const filtered = Boolean(filters.law || filters.mechanism);
+
+  return (
+    <View style={styles.root}>
+      {taxonomy && taxonomy.laws.length > 0 ? (
+        <FilterRow
+          label="Conservation law broken"
+          testID="filter-law"
+          options={[...taxonomy.laws].sort((a, b) => a.position - b.position).map((l) => ({ value: l.slug, label: l.name }))}
+          value={filters.law}
+          onChange={(law) => onFiltersChange({ ...filters, law })}
+        />
+      ) : null}
+      {taxonomy && taxonomy.classes.length > 0 ? (
+        <FilterRow
+          label="Mechanism class"
+          testID="filter-mechanism"
+          options={[...taxonomy.classes].sort((a, b) => a.position - b.position).map((c) => ({ value: c.slug, label: c.name }))}
+          value={filters.mechanism}
+          onChange={(mechanism) => onFiltersChange({ ...filters, mechanism })}
+        />
+      ) : null}
+      {isPending ? <Loading testID="entries-loading" label="Loading the published entries…" /> : null}
+      {error ? <ErrorNotice testID="entries-error" error={error} what="the published entries" onRetry={() => void refetch()} /> : null}
+      {data && data.entries.length === 0 ? (
+        filtered ? (
+          <Notice testID="entries-none" title="No published entry matches these filters.">
+            Choose “Any” for the law or the class to see more.
+          </Notice>
+        ) : (
+          <Notice testID="recent-empty" title="No entries are published yet.">
+            When editors publish entries and their revisions, the latest appear here, newest first.
+          </Notice>
+        )
+      ) : null}
+      {data && data.entries.length > 0 ? (
+        <>
+          <Text testID="entries-count" style={type.caption}>
+            {data.total === 1 ? '1 entry' : `${data.total} entries`}
+            {filtered ? ' match' : ' published'}, most recently revised first.
+          </Text>
+          <View role="list" testID="entry-list" style={styles.list}>
+            {data.entries.map((entry) => (
+              <EntryRow key={entry.slug} entry={entry} lawName={lawName} className={className} />
+            ))}
+          </View>
+          {data.entries.length < data.total ? (
+            <Button testID="entries-more" variant="quiet" label="Show more entries" busyLabel="Loading…" busy={isFetching} onPress={onMore} />
+          ) : null}
+        </>
+      ) : null}
+    </View>
+  );
+}
+
+function FilterRow(props: {
+  label: string;
+  testID: string;
+  options: { value: string; label: string }[];
+  value?: string;
+  onChange: (value: string | undefined) => void;
+}) {
+  return (
+    <View style={styles.filter}>
+      <Text style={type.caption}>{props.label}</Text>
+      <ChoiceChips
+        label={props.label}
+        testID={props.testID}
+        options={[{ value: ANY, label: 'Any' }, ...props.options]}
+        value={props.value ?? ANY}
+        onChange={(value) => props.onChange(value === ANY ? undefined : value)}
+      />
+    </View>
+  );
+}
+
+function EntryRow({ entry, lawName, className }: { entry: EntrySummary; lawName: (s: string) => string; className: (s: string) => string }) {
+  const brief = useMemo(() => renderMarkdown(entry.inBrief), [entry.inBrief]);
+  return (
+    <View role="listitem" testID={`entry-${entry.slug}`} style={styles.row}>
+      <TextLink href={`/entries/${entry.slug}`} testID={`entry-link-${entry.slug}`}>
+        {entry.title}
+      </TextLink>
+      <Markdown html={brief} size="compact" />
+      <Text style={type.caption}>
+        {entry.laws.map(lawName).join(' · ')} · {className(entry.mechanismClass)}
+      </Text>
+      <Text style={type.small}>
+        Version {entry.version}, {formatDay(entry.publishedAt)}
+      </Text>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { gap: space.md },
+  filter: { gap: space.xxs },
+  list: { borderTopColor: colors.rule, borderTopWidth: 1 },
+  row: { gap: space.xxs, paddingVertical: space.md, borderBottomColor: colors.rule, borderBottomWidth: 1 },
+});

@@ -1,0 +1,29 @@
+/** Pasted BibTeX, RIS or CSL-JSON → CSL-JSON citations, with each unreadable item reported by position. */
+import { Router } from 'express';
+import { z } from 'zod';
+import { parseCitations } from '../../shared/entries/citations';
+import { HttpError } from '../http/errors';
+import type { Allow } from '../policies';
+import { validateSized } from '../services/entries';
+
+const parseBodySchema = z.object({ text: z.string().min(1, 'paste BibTeX, RIS or CSL-JSON').max(200_000) }).strict();
+
+export function citationRoutes(allow: Allow): Router {
+  const r = Router();
+  r.post('/citations/parse', allow('citations.parse'), (req, res) => {
+    const { text } = validateSized(parseBodySchema, req.body ?? {}, 'body');
+    const { items, problems } = parseCitations(text);
+    if (!items.length) {
+      const first = problems[0];
+      throw new HttpError(
+        400,
+        'citation_unparseable',
+        `No citation could be read${first ? ` (item ${first.index + 1}: ${first.reason})` : ''}. Paste BibTeX, RIS or CSL-JSON.`,
+        { 'body.text': first ? `item ${first.index + 1}: ${first.reason}` : 'nothing could be read' },
+        { problems },
+      );
+    }
+    res.json({ items, problems });
+  });
+  return r;
+}
