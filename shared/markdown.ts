@@ -33,7 +33,8 @@ const processor = unified()
   .use(remarkRehype)
   .use(rehypeSanitize, schema)
   // rehype-katex shows a TeX mistake in place (class `katex-error`) rather than failing the page.
-  .use(rehypeKatex, { strict: 'ignore' })
+  // A TeX mistake is shown in place in our brass (DESIGN.md §6), not KaTeX's default red.
+  .use(rehypeKatex, { strict: 'ignore', errorColor: '#A8782B' })
   .use(rehypeStringify)
   .freeze();
 
