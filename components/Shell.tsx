@@ -1,3 +1,4 @@
+import { usePathname } from 'expo-router';
 import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
@@ -13,11 +14,14 @@ export function Shell({ children }: { children: ReactNode }) {
   const { width } = useWindowDimensions();
   const { role } = useViewer();
   const insets = useSafeAreaInsets();
+  const pathname = usePathname();
   const wide = width >= layout.wideMinWidth;
+  // Entry pages and the Desk put a second column beside the text on a wide screen.
+  const twoColumn = wide && /^\/(entries|desk)(\/|$)/.test(pathname ?? '');
 
   const page = (
     <ScrollView style={styles.scroll} contentContainerStyle={[styles.scrollContent, wide && styles.scrollContentWide]}>
-      <View role="main" style={styles.main}>
+      <View role="main" style={[styles.main, twoColumn && styles.mainTwoColumn]}>
         <DatabaseNotice />
         {children}
       </View>
@@ -83,6 +87,7 @@ const styles = StyleSheet.create({
   scrollContent: { flexGrow: 1, padding: space.md, paddingTop: space.lg },
   scrollContentWide: { paddingHorizontal: space.xxl, paddingTop: space.xxl },
   main: { flexGrow: 1, width: '100%', maxWidth: layout.contentMaxWidth, gap: space.md },
+  mainTwoColumn: { maxWidth: layout.twoColumnMaxWidth },
   footer: {
     width: '100%',
     maxWidth: layout.contentMaxWidth,

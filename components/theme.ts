@@ -76,6 +76,8 @@ export const layout = {
   wideMinWidth: 960,
   /** Reading column. */
   contentMaxWidth: 760,
+  /** Pages with a second column beside the text (an entry's sources and worksheets, the Desk's preview). */
+  twoColumnMaxWidth: 1240,
   railWidth: 232,
 } as const;
 
