@@ -66,6 +66,33 @@ describe('EntryEditor', () => {
     expect(bodies).toEqual([expect.objectContaining({ method: 'PUT', lockVersion: 2, content: expect.objectContaining({ title: 'Thrust from light held in a box' }) })]);
   });
 
+  it('edits the worksheets as a form and saves them in the shape the entry keeps', async () => {
+    const bodies: { content: DraftDto['content'] }[] = [];
+    mockFetch({
+      '/api/session': () => jsonResponse(200, editor('editor')),
+      '/api/taxonomy': () => jsonResponse(200, taxonomy),
+      '/api/drafts/5': (init) => {
+        const body = JSON.parse(String(init?.body));
+        bodies.push(body);
+        return jsonResponse(200, { draft: { ...draft, content: body.content, lockVersion: body.lockVersion + 1 } });
+      },
+    });
+    renderWithProviders(<EntryEditor draft={draft} />);
+    const form = screen.getByTestId('worksheet-editor');
+    expect((within(form).getByTestId('editor-field-ws-0-step-0-expression') as HTMLInputElement).value).toBe('P / c');
+
+    // A bad name is marked beside its field, and nothing is saved until it is fixed.
+    type('editor-field-ws-0-name', 'Cavity Bound');
+    expect(screen.getByTestId('editor-error-ws-0-name').textContent).toBe('lower-case words joined by hyphens');
+    expect(screen.getByTestId('editor-error-worksheets').textContent).toContain('worksheets[0].name');
+    type('editor-field-ws-0-name', 'cavity-bound');
+    expect(screen.queryByTestId('editor-error-worksheets')).toBeNull();
+
+    type('editor-field-ws-0-step-0-expression', '2 * P / c');
+    await waitFor(() => expect(screen.getByTestId('save-status').textContent).toMatch(/^Saved /), { timeout: 3000 });
+    expect(bodies.at(-1)!.content.worksheets).toEqual([{ ...version1.worksheets[0], steps: [{ ...version1.worksheets[0].steps[0], expression: '2 * P / c' }] }]);
+  });
+
   it('stops on a 409 edit_conflict and shows the other version with a choice, never overwriting it', async () => {
     const theirs: DraftDto = { ...draft, lockVersion: 3, content: { ...version1, title: 'Light in a sealed box' }, updatedAt: '2026-03-01T10:05:00.000Z' };
     const sent: unknown[] = [];

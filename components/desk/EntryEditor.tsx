@@ -12,13 +12,14 @@ import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { Section } from '../ui/Screen';
 import { EditorField } from './EditorField';
-import { editorValues, previewContent, readValues, readWorksheets, type EditorField as Field, type EditorValues } from './editorValues';
+import { editorValues, previewContent, readValues, type EditorField as Field, type EditorValues } from './editorValues';
 import { EntryPreview } from './EntryPreview';
 import { RowsEditor } from './RowsEditor';
 import { SaveStatus } from './SaveStatus';
 import { SourcesEditor } from './SourcesEditor';
 import { ToggleChips } from './ToggleChips';
 import { useAutosave } from './useAutosave';
+import { WorksheetEditor } from './WorksheetEditor';
 
 /**
  * The editor for a draft of an entry: every section, checked as it is typed by the schema the
@@ -36,12 +37,11 @@ export function EntryEditor({ draft }: { draft?: DraftDto }) {
 
   const set = <K extends Field>(field: K) => (value: EditorValues[K]) => setValues((current) => ({ ...current, [field]: value }));
   const problem = (field: Field) => reading.problems[field];
-  const text = (field: Exclude<Field, 'laws' | 'repliesAndAnswers' | 'questionsToAsk' | 'sources'>, label: string, extra: Partial<Parameters<typeof EditorField>[0]> = {}) => (
+  const text = (field: Exclude<Field, 'laws' | 'worksheets' | 'repliesAndAnswers' | 'questionsToAsk' | 'sources'>, label: string, extra: Partial<Parameters<typeof EditorField>[0]> = {}) => (
     <EditorField name={field} label={label} value={values[field]} onChangeText={set(field)} error={problem(field)} {...extra} />
   );
 
   const words = wordCount(values.inBrief);
-  const sheets = readWorksheets(values.worksheets);
   const saved = autosave.saved;
   const sendForReview = () => {
     if (!saved) return;
@@ -115,13 +115,7 @@ export function EntryEditor({ draft }: { draft?: DraftDto }) {
           })}
           {text('howItIsPitched', sectionTitles.howItIsPitched, { lines: 6, hint: 'The claim pattern and the phrases that give it away.' })}
           {text('whyItFails', sectionTitles.whyItFails, { lines: 12, hint: 'The technical objection: Markdown, with TeX between $…$ or $$…$$.' })}
-          {text('worksheets', sectionTitles.worksheets, {
-            lines: 10,
-            mono: true,
-            hint: sheets.worksheets
-              ? `${sheets.worksheets.length === 1 ? '1 worksheet' : `${sheets.worksheets.length} worksheets`} read; they run in the preview below.`
-              : 'A JSON array of worksheets, in the format of the starter worksheets.',
-          })}
+          <WorksheetEditor label={sectionTitles.worksheets} value={values.worksheets} onChange={set('worksheets')} error={problem('worksheets')} />
           {text('whatFakesTheEffect', sectionTitles.whatFakesTheEffect, { lines: 6, hint: 'Experimental artifacts that look like the effect.' })}
           <RowsEditor
             name="repliesAndAnswers"

@@ -1,10 +1,11 @@
 /**
  * The editor's working copy of a draft: the entry's content, with the fields typed as text where
- * an editor writes them as text (other names and related entries one a line, worksheets as JSON).
+ * an editor writes them as text (other names and related entries one a line); worksheets are kept in
+ * the content's own shape, as the worksheet form edits them.
  * `readValues` turns it into content checked by the same schema the server uses.
  */
 import { entryContentSchema, IN_BRIEF_MAX_WORDS, slugSchema, wordCount, type Citation, type EntryContent } from '@/shared/entries/schema';
-import { worksheetSchema } from '@/shared/worksheet/schema';
+import { worksheetSchema, type Worksheet } from '@/shared/worksheet/schema';
 
 export interface EditorValues {
   slug: string;
@@ -15,7 +16,8 @@ export interface EditorValues {
   inBrief: string;
   howItIsPitched: string;
   whyItFails: string;
-  worksheets: string;
+  /** As typed in the worksheet form: the saved shape, not yet checked. */
+  worksheets: Worksheet[];
   whatFakesTheEffect: string;
   repliesAndAnswers: { reply: string; answer: string }[];
   questionsToAsk: string[];
@@ -42,7 +44,7 @@ export function editorValues(slug: string, content?: EntryContent): EditorValues
     inBrief: content?.inBrief ?? '',
     howItIsPitched: content?.howItIsPitched ?? '',
     whyItFails: content?.whyItFails ?? '',
-    worksheets: content && content.worksheets.length > 0 ? JSON.stringify(content.worksheets, null, 2) : '[]',
+    worksheets: content?.worksheets ?? [],
     whatFakesTheEffect: content?.whatFakesTheEffect ?? '',
     repliesAndAnswers: content?.repliesAndAnswers ?? [],
     questionsToAsk: content?.questionsToAsk ?? [],
@@ -54,19 +56,13 @@ export function editorValues(slug: string, content?: EntryContent): EditorValues
 
 export interface WorksheetsReading {
   worksheets?: EntryContent['worksheets'];
-  /** What is wrong with the JSON, with the path of the first problem: "worksheets[0].steps: …". */
+  /** What is wrong, with the path of the first problem: "worksheets[0].steps: …". */
   error?: string;
 }
 
-/** The worksheets field: JSON, an array of worksheets each checked by worksheetSchema. */
-export function readWorksheets(text: string): WorksheetsReading {
-  let parsed: unknown;
-  try {
-    parsed = JSON.parse(text.trim() === '' ? '[]' : text);
-  } catch (error) {
-    return { error: `Not JSON: ${(error as Error).message}` };
-  }
-  const result = worksheetSchema.array().max(6, 'at most 6 worksheets').safeParse(parsed);
+/** The worksheets as the form holds them, each checked by worksheetSchema. */
+export function readWorksheets(sheets: Worksheet[]): WorksheetsReading {
+  const result = worksheetSchema.array().max(6, 'at most 6 worksheets').safeParse(sheets);
   if (!result.success) {
     const issue = result.error.issues[0];
     const path = issue.path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${String(p)}`)).join('');
@@ -126,7 +122,10 @@ export function previewContent(values: EditorValues): EntryContent {
     inBrief: values.inBrief,
     howItIsPitched: values.howItIsPitched,
     whyItFails: values.whyItFails,
-    worksheets: readWorksheets(values.worksheets).worksheets ?? [],
+    worksheets: values.worksheets.flatMap((ws) => {
+      const one = worksheetSchema.safeParse(ws);
+      return one.success ? [one.data] : [];
+    }),
     whatFakesTheEffect: values.whatFakesTheEffect,
     repliesAndAnswers: values.repliesAndAnswers.filter((r) => r.reply.trim() || r.answer.trim()),
     questionsToAsk: values.questionsToAsk.filter((q) => q.trim()),
