@@ -1,6 +1,7 @@
 import { useId, useState, type ReactNode } from 'react';
 import { StyleSheet, Text, TextInput, View } from 'react-native';
-import { colors, focusRing, radius, space, type } from '../theme';
+import { space, type } from '../theme';
+import { inputBox } from '../ui/inputBox';
 import { FieldError } from '../worksheet/QuantityField';
 
 interface EditorFieldProps {
@@ -70,16 +71,9 @@ const styles = StyleSheet.create({
   field: { gap: space.xxs },
   labelRow: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'baseline', gap: space.xs },
   input: {
-    ...focusRing,
-    marginTop: space.xxs,
-    backgroundColor: colors.surface,
-    borderColor: colors.ruleStrong,
-    borderRadius: radius.sm,
-    borderWidth: 1,
-    minHeight: 44,
-    paddingHorizontal: space.sm,
+    ...inputBox.box,
     paddingVertical: space.xs,
   },
-  inputError: { borderColor: colors.brass, borderWidth: 2, backgroundColor: colors.brassWash },
-  inputFocused: { borderColor: colors.brass },
+  inputError: inputBox.error,
+  inputFocused: inputBox.focused,
 });

@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
 import { StyleSheet, Text, TextInput, View, type TextInputProps } from 'react-native';
-import { colors, focusRing, radius, space, type } from '../theme';
+import { colors, space, type } from '../theme';
+import { inputBox } from './inputBox';
 import { FieldError } from '../worksheet/QuantityField';
 
 /** What a field holds, which sets the keyboard, autofill and whether the text is hidden. */
@@ -71,15 +72,8 @@ const styles = StyleSheet.create({
   field: { gap: space.xxs },
   input: {
     ...type.ui,
-    ...focusRing,
-    marginTop: space.xxs,
-    backgroundColor: colors.surface,
-    borderColor: colors.ruleStrong,
-    borderRadius: radius.sm,
-    borderWidth: 1,
-    minHeight: 44,
-    paddingHorizontal: space.sm,
+    ...inputBox.box,
   },
-  inputError: { borderColor: colors.brass, borderWidth: 2, backgroundColor: colors.brassWash },
-  inputFocused: { borderColor: colors.brass },
+  inputError: inputBox.error,
+  inputFocused: inputBox.focused,
 });

@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { colors, focusRing, radius, space, type } from '../theme';
+import { inputBox } from '../ui/inputBox';
 
 interface QuantityFieldProps {
   /** The input's name: the field is `input-<name>`, its error `input-<name>-error`. */
@@ -100,19 +101,12 @@ const styles = StyleSheet.create({
   field: { gap: space.xxs },
   input: {
     ...type.mono,
-    ...focusRing,
+    ...inputBox.box,
     fontSize: 16,
     lineHeight: 22,
-    marginTop: space.xxs,
-    backgroundColor: colors.surface,
-    borderColor: colors.ruleStrong,
-    borderRadius: radius.sm,
-    borderWidth: 1,
-    minHeight: 44,
-    paddingHorizontal: space.sm,
   },
-  inputError: { borderColor: colors.brass, borderWidth: 2, backgroundColor: colors.brassWash },
-  inputFocused: { borderColor: colors.brass },
+  inputError: inputBox.error,
+  inputFocused: inputBox.focused,
   presets: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs, marginTop: space.xxs },
   preset: {
     ...focusRing,
