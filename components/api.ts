@@ -200,6 +200,7 @@ export const queryKeys = {
   /** The Desk and its drafts; dropped with the session like the admin data would be. */
   desk: ['desk'] as const,
   draft: (id: number) => ['desk', 'draft', id] as const,
+  search: (params: SearchParams) => ['search', params] as const,
 };
 
 /** One starter worksheet as `GET /api/worksheets` lists it. */
@@ -660,5 +661,58 @@ export function useDraftAction() {
 export function useParseCitations() {
   return useMutation({
     mutationFn: (text: string) => apiSend<CitationParseResponse>('POST', '/api/citations/parse', { text }),
+  });
+}
+
+/* Search (issue 6; the contract of `GET /api/search`). */
+
+export interface SearchParams {
+  /** Up to 500 characters; empty lists every published entry, newest first. */
+  q: string;
+  /** A conservation-law slug. */
+  law?: string;
+  /** A mechanism-class slug (matches that class and its children). */
+  mechanism?: string;
+  /** 1–50, 20 when not given. */
+  limit?: number;
+  offset?: number;
+}
+
+/** One ranked result of `GET /api/search`. */
+export interface SearchResult {
+  slug: string;
+  title: string;
+  version: number;
+  score: number;
+  /** The index terms that matched (normalised, so possibly stems: "microwav"). */
+  terms: string[];
+  /** Plain text, HTML-escaped, with the matched words wrapped in `<mark>…</mark>`. */
+  excerpt: string;
+  laws: string[];
+  mechanismClass: string;
+  /** Plain text. */
+  inBrief: string;
+}
+
+/** `GET /api/search` */
+export interface SearchResponse {
+  query: string;
+  total: number;
+  results: SearchResult[];
+  /** Counts over the results of q, each ignoring its own facet's filter. */
+  facets: { laws: Record<string, number>; mechanisms: Record<string, number> };
+}
+
+/** `GET /api/search?q=&law=&mechanism=&limit=&offset=`; the previous results stay while the next ones load. */
+export function useSearch(params: SearchParams, { enabled = true }: { enabled?: boolean } = {}) {
+  return useQuery({
+    queryKey: queryKeys.search(params),
+    queryFn: ({ signal }) =>
+      apiGet<SearchResponse>(
+        `/api/search${queryString({ q: params.q, law: params.law, mechanism: params.mechanism, limit: params.limit, offset: params.offset })}`,
+        { signal },
+      ),
+    placeholderData: keepPreviousData,
+    enabled,
   });
 }

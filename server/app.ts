@@ -28,10 +28,12 @@ import { draftRoutes } from './routes/drafts';
 import { entryRoutes } from './routes/entries';
 import { checkRoutes } from './routes/checks';
 import { healthRoutes } from './routes/health';
+import { searchRoutes } from './routes/search';
 import { taxonomyRoutes } from './routes/taxonomy';
 import { worksheetRoutes } from './routes/worksheets';
 import { Accounts } from './services/accounts';
 import { Entries } from './services/entries';
+import { SearchIndex } from './search';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -61,6 +63,11 @@ export interface AppOptions {
   trustProxy?: string | number;
   /** How often expired sessions are deleted (ms); 0 never. */
   sessionCleanupMs?: number;
+  /**
+   * How often the search index checks the database's change watermark and rebuilds when it moved
+   * (ms), so that entries published through another app server are found; 0 never. Default 5000.
+   */
+  searchRefreshMs?: number;
 }
 
 /** What createApp leaves in app.locals for its owner. */
@@ -137,12 +144,20 @@ export function createApp(opts: AppOptions): express.Express {
     },
     close: async () => {
       sessions.store.stopExpiringSessions();
+      await search.stop();
       await locals.settle();
     },
   };
   Object.assign(app.locals, locals);
   const origin = (req: express.Request) => opts.publicUrl ?? `${req.protocol}://${req.get('host')}`;
-  const entries = new Entries({ sequelize: opts.sequelize, mailer, later });
+  const search = new SearchIndex({ refreshMs: opts.searchRefreshMs ?? 5000, logger });
+  search.start();
+  const entries = new Entries({
+    sequelize: opts.sequelize,
+    mailer,
+    later,
+    changed: (slug) => search.update(slug).catch((err) => logger.error({ err, slug }, 'search index update failed')),
+  });
 
   const api = express.Router();
   api.use(express.json({ limit: opts.jsonLimit ?? '256kb' }));
@@ -160,6 +175,7 @@ export function createApp(opts: AppOptions): express.Express {
   api.use(draftRoutes(allow, entries, origin));
   api.use(deskRoutes(allow, entries));
   api.use(citationRoutes(allow));
+  api.use(searchRoutes(allow, search));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -52,6 +52,7 @@ export const policies = {
   drafts: { create: EDITOR, read: EDITOR, update: EDITOR, submit: EDITOR, approve: EDITOR, sendBack: EDITOR },
   desk: { read: EDITOR },
   citations: { parse: EDITOR },
+  search: { query: PUBLIC },
 } as const satisfies Record<string, Record<string, Policy>>;
 
 type Table = typeof policies;

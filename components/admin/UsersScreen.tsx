@@ -16,7 +16,7 @@ import { ChoiceChips } from './ChoiceChips';
 import { confirmChange } from './confirm';
 import { formatWhen } from './format';
 import { Pager } from './Pager';
-import { useDebounced } from './useDebounced';
+import { useDebounced } from '../ui/useDebounced';
 
 const PAGE = 25;
 type RoleFilter = Role | 'all';

@@ -3,7 +3,7 @@ import { useMemo, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { IN_BRIEF_MAX_WORDS, wordCount } from '@/shared/entries/schema';
 import { ChoiceChips } from '../admin/ChoiceChips';
-import { useDebounced } from '../admin/useDebounced';
+import { useDebounced } from '../ui/useDebounced';
 import { useDraftAction, useTaxonomy, type DraftDto } from '../api';
 import { ProblemNotice } from '../auth/Form';
 import { problemOf } from '../auth/useForm';

@@ -2,10 +2,10 @@ import { useMemo } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { renderMarkdown } from '@/shared/markdown';
 import type { TaxonomyResponse } from '@/shared/api-types';
-import { ChoiceChips } from '../admin/ChoiceChips';
 import { useEntryList, type EntrySummary } from '../api';
 import { formatDay } from '../entry/format';
 import { Markdown } from '../markdown/Markdown';
+import { FilterChips, type LawClassFilters } from '../search/FilterChips';
 import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { ErrorNotice } from '../ui/ErrorNotice';
@@ -14,13 +14,9 @@ import { Notice } from '../ui/Notice';
 import { TextLink } from '../ui/TextLink';
 
 /** Which published entries to list: by the conservation law they break and their mechanism class. */
-export interface EntryFilters {
-  law?: string;
-  mechanism?: string;
-}
+export type EntryFilters = LawClassFilters;
 
 const PAGE = 20;
-const ANY = 'any';
 
 interface EntryListProps {
   filters: EntryFilters;
@@ -40,24 +36,7 @@ export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore }:
 
   return (
     <View style={styles.root}>
-      {taxonomy && taxonomy.laws.length > 0 ? (
-        <FilterRow
-          label="Conservation law broken"
-          testID="filter-law"
-          options={[...taxonomy.laws].sort((a, b) => a.position - b.position).map((l) => ({ value: l.slug, label: l.name }))}
-          value={filters.law}
-          onChange={(law) => onFiltersChange({ ...filters, law })}
-        />
-      ) : null}
-      {taxonomy && taxonomy.classes.length > 0 ? (
-        <FilterRow
-          label="Mechanism class"
-          testID="filter-mechanism"
-          options={[...taxonomy.classes].sort((a, b) => a.position - b.position).map((c) => ({ value: c.slug, label: c.name }))}
-          value={filters.mechanism}
-          onChange={(mechanism) => onFiltersChange({ ...filters, mechanism })}
-        />
-      ) : null}
+      <FilterChips taxonomy={taxonomy} filters={filters} onChange={onFiltersChange} />
       {isPending ? <Loading testID="entries-loading" label="Loading the published entries…" /> : null}
       {error ? <ErrorNotice testID="entries-error" error={error} what="the published entries" onRetry={() => void refetch()} /> : null}
       {data && data.entries.length === 0 ? (
@@ -91,27 +70,6 @@ export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore }:
   );
 }
 
-function FilterRow(props: {
-  label: string;
-  testID: string;
-  options: { value: string; label: string }[];
-  value?: string;
-  onChange: (value: string | undefined) => void;
-}) {
-  return (
-    <View style={styles.filter}>
-      <Text style={type.caption}>{props.label}</Text>
-      <ChoiceChips
-        label={props.label}
-        testID={props.testID}
-        options={[{ value: ANY, label: 'Any' }, ...props.options]}
-        value={props.value ?? ANY}
-        onChange={(value) => props.onChange(value === ANY ? undefined : value)}
-      />
-    </View>
-  );
-}
-
 function EntryRow({ entry, lawName, className }: { entry: EntrySummary; lawName: (s: string) => string; className: (s: string) => string }) {
   const brief = useMemo(() => renderMarkdown(entry.inBrief), [entry.inBrief]);
   return (
@@ -132,7 +90,6 @@ function EntryRow({ entry, lawName, className }: { entry: EntrySummary; lawName:
 
 const styles = StyleSheet.create({
   root: { gap: space.md },
-  filter: { gap: space.xxs },
   list: { borderTopColor: colors.rule, borderTopWidth: 1 },
   row: { gap: space.xxs, paddingVertical: space.md, borderBottomColor: colors.rule, borderBottomWidth: 1 },
 });

@@ -1,6 +1,7 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { TaxonomyResponse } from '@/shared/api-types';
-import { jsonResponse, mockFetch, renderWithProviders } from '../testing/render';
+import type { SearchResponse } from '../api';
+import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 import { LibraryScreen } from './LibraryScreen';
 
 jest.mock('expo-router', () => require('../testing/expoRouter'));
@@ -56,13 +57,13 @@ const allEntries = [
 ];
 
 describe('LibraryScreen', () => {
-  it('has its heading, one search field and a word on what search needs', () => {
+  it('has its heading, one search field and a word on how to search', () => {
     mockFetch({ '/api/taxonomy': () => jsonResponse(200, taxonomy), ...noEntries });
     renderWithProviders(<LibraryScreen />);
     const root = screen.getByTestId('screen-library');
     expect(within(root).getByRole('heading', { level: 1 }).textContent).toBe('Library');
     expect(screen.getByLabelText('Search the library').tagName).toBe('INPUT');
-    expect(screen.getByTestId('library-search-hint').textContent).toContain('Search across entries comes in a later release');
+    expect(screen.getByTestId('library-search-hint').textContent).toContain('Results come as you type');
   });
 
   it('shows progress, then the laws with their symmetry and the classes as a tree', async () => {
@@ -155,5 +156,149 @@ describe('LibraryScreen', () => {
     fireEvent.click(screen.getByTestId('filter-mechanism-internal-mass-motion'));
     expect((await screen.findByTestId('entries-none')).textContent).toContain('No published entry matches these filters.');
     expect(onFiltersChange).toHaveBeenLastCalledWith({ law: 'energy', mechanism: 'internal-mass-motion' });
+  });
+
+  describe('search', () => {
+    const hit = (slug: string, title: string, excerpt: string, terms: string[], laws = ['linear-momentum'], mechanismClass = 'internal-mass-motion') => ({
+      slug,
+      title,
+      version: 2,
+      score: 12.5,
+      terms,
+      excerpt,
+      laws,
+      mechanismClass,
+      inBrief: `Why ${title} cannot work.`,
+    });
+    const shuttle = hit(
+      'shuttling-weights',
+      'Shuttling weights',
+      'Weights <mark>shuttled</mark> inside a sealed &amp; rigid <mark>frame</mark> cannot move its centre of mass &lt;at all&gt;.',
+      ['shuttl', 'frame'],
+    );
+    const wheel = hit('wheel-of-weights', 'A wheel of weights', 'A <mark>wheel</mark> of weights that turns forever.', ['wheel'], ['energy'], 'over-unity');
+    const answer = (query: string, results: ReturnType<typeof hit>[], facets: SearchResponse['facets'] = { laws: { 'linear-momentum': 1, energy: 1 }, mechanisms: { 'internal-mass-motion': 1, 'over-unity': 1 } }) =>
+      jsonResponse(200, { query, total: results.length, results, facets });
+    const base = { '/api/taxonomy': () => jsonResponse(200, taxonomy), '/api/entries?limit=20': () => jsonResponse(200, { entries: allEntries, total: 2 }) };
+    const searchCalls = (fetchMock: jest.Mock) => fetchMock.mock.calls.map(([path]) => String(path)).filter((path) => path.startsWith('/api/search'));
+
+    beforeEach(() => setWindowWidth(390));
+
+    it('searches once the typing rests, and shows the count, the results and the matched words highlighted', async () => {
+      const fetchMock = mockFetch({ ...base, '/api/search?q=shuttling+frame': () => answer('shuttling frame', [shuttle, wheel]) });
+      renderWithProviders(<LibraryScreen />);
+      expect(await screen.findByTestId('entry-list')).toBeTruthy();
+
+      const input = screen.getByTestId('library-search');
+      fireEvent.change(input, { target: { value: 'shu' } });
+      fireEvent.change(input, { target: { value: 'shuttling' } });
+      fireEvent.change(input, { target: { value: 'shuttling frame' } });
+      expect(searchCalls(fetchMock)).toEqual([]);
+
+      expect((await screen.findByTestId('search-count')).textContent).toBe('2 entries');
+      expect(searchCalls(fetchMock)).toEqual(['/api/search?q=shuttling+frame']);
+      expect(screen.queryByTestId('entry-list')).toBeNull();
+
+      const row = screen.getByTestId('search-result-shuttling-weights');
+      expect(screen.getByTestId('entry-link-shuttling-weights').getAttribute('href')).toBe('/entries/shuttling-weights');
+      const marks = within(row).getAllByTestId('mark');
+      expect(marks.map((m) => m.textContent)).toEqual(['shuttled', 'frame']);
+      expect(screen.getByTestId('search-excerpt-shuttling-weights').textContent).toBe(
+        'Weights shuttled inside a sealed & rigid frame cannot move its centre of mass <at all>.',
+      );
+      expect(row.querySelector('mark, script')).toBeNull();
+      expect(row.textContent).toContain('Matched: shuttl, frame');
+      expect(await within(row).findByText('Conservation of linear momentum · Thrust from masses moving inside')).toBeTruthy();
+      expect(screen.getByTestId('filter-law-energy').textContent).toBe('Conservation of energy (first law) (1)');
+      expect(screen.getByTestId('filter-law-entropy').textContent).toBe('Second law of thermodynamics (0)');
+
+      // Emptying the field brings back the recently revised list.
+      fireEvent.change(input, { target: { value: '' } });
+      expect(await screen.findByTestId('entry-list')).toBeTruthy();
+    });
+
+    it('keeps the previous results while the next request is pending', async () => {
+      let release: (response: Response) => void = () => undefined;
+      mockFetch({
+        ...base,
+        '/api/search?q=wheel': () => answer('wheel', [wheel]),
+        '/api/search?q=wheel+weights': () => new Promise<Response>((resolve) => (release = resolve)),
+      });
+      renderWithProviders(<LibraryScreen />);
+      const input = screen.getByTestId('library-search');
+      fireEvent.change(input, { target: { value: 'wheel' } });
+      expect((await screen.findByTestId('search-count')).textContent).toBe('1 entry');
+
+      fireEvent.change(input, { target: { value: 'wheel weights' } });
+      await waitFor(() => expect(screen.getByTestId('search-count').textContent).toContain('searching…'));
+      expect(screen.getByTestId('search-result-wheel-of-weights')).toBeTruthy();
+
+      release(answer('wheel weights', [wheel, shuttle]));
+      await waitFor(() => expect(screen.getByTestId('search-count').textContent).toBe('2 entries'));
+      expect(screen.getByTestId('search-result-shuttling-weights')).toBeTruthy();
+    });
+
+    it('adds law= when a chip is chosen', async () => {
+      const fetchMock = mockFetch({
+        ...base,
+        '/api/search?q=weights': () => answer('weights', [shuttle, wheel]),
+        '/api/search?q=weights&law=energy': () => answer('weights', [wheel]),
+      });
+      const onFiltersChange = jest.fn();
+      renderWithProviders(<LibraryScreen onFiltersChange={onFiltersChange} />);
+      fireEvent.change(screen.getByTestId('library-search'), { target: { value: 'weights' } });
+      expect((await screen.findByTestId('search-count')).textContent).toBe('2 entries');
+
+      fireEvent.click(screen.getByTestId('filter-law-energy'));
+      await waitFor(() => expect(screen.getByTestId('search-count').textContent).toBe('1 entry'));
+      expect(screen.queryByTestId('search-result-shuttling-weights')).toBeNull();
+      expect(searchCalls(fetchMock)).toContain('/api/search?q=weights&law=energy');
+      expect(onFiltersChange).toHaveBeenLastCalledWith({ law: 'energy' });
+    });
+
+    it('says when nothing matches, and searches for a suggestion when it is chosen', async () => {
+      const fetchMock = mockFetch({
+        ...base,
+        '/api/search?q=zzyzx': () => answer('zzyzx', [], { laws: {}, mechanisms: {} }),
+        '/api/search?q=magnet+motor': () => answer('magnet motor', [wheel]),
+      });
+      renderWithProviders(<LibraryScreen />);
+      const input = screen.getByTestId('library-search') as HTMLInputElement;
+      fireEvent.change(input, { target: { value: 'zzyzx' } });
+      const empty = await screen.findByTestId('search-empty');
+      expect(empty.textContent).toContain('Nothing in the library matches “zzyzx”.');
+      expect(screen.getByTestId('search-count').textContent).toBe('0 entries');
+      expect(screen.getByTestId('search-suggestion-0').textContent).toBe('sealed box that pushes itself');
+      expect(screen.getByTestId('search-suggestion-2').textContent).toBe('heat engine on one reservoir');
+
+      fireEvent.click(screen.getByTestId('search-suggestion-1'));
+      expect(input.value).toBe('magnet motor');
+      expect(await screen.findByTestId('search-result-wheel-of-weights')).toBeTruthy();
+      expect(searchCalls(fetchMock)).toContain('/api/search?q=magnet+motor');
+      expect(screen.queryByTestId('search-empty')).toBeNull();
+    });
+
+    it('moves through the results with the arrow keys on a wide screen and opens one with Enter', async () => {
+      setWindowWidth(1280);
+      mockFetch({ ...base, '/api/search?q=weights': () => answer('weights', [shuttle, wheel]) });
+      const onOpenEntry = jest.fn();
+      renderWithProviders(<LibraryScreen onOpenEntry={onOpenEntry} />);
+      const input = screen.getByTestId('library-search');
+      fireEvent.change(input, { target: { value: 'weights' } });
+      await screen.findByTestId('search-result-wheel-of-weights');
+      const selected = () =>
+        ['shuttling-weights', 'wheel-of-weights'].filter((slug) => screen.getByTestId(`search-result-${slug}`).getAttribute('aria-selected') === 'true');
+
+      expect(selected()).toEqual([]);
+      fireEvent.keyDown(input, { key: 'ArrowDown' });
+      expect(selected()).toEqual(['shuttling-weights']);
+      fireEvent.keyDown(input, { key: 'ArrowDown' });
+      fireEvent.keyDown(input, { key: 'ArrowDown' });
+      expect(selected()).toEqual(['wheel-of-weights']);
+      fireEvent.keyDown(input, { key: 'ArrowUp' });
+      expect(selected()).toEqual(['shuttling-weights']);
+      fireEvent.keyDown(input, { key: 'Enter' });
+      expect(onOpenEntry).toHaveBeenCalledWith('shuttling-weights');
+    });
   });
 });

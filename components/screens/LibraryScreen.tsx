@@ -1,8 +1,20 @@
-import { useState } from 'react';
-import { StyleSheet, Text, TextInput, View } from 'react-native';
+import { router } from 'expo-router';
+import { useEffect, useState } from 'react';
+import {
+  Platform,
+  StyleSheet,
+  Text,
+  TextInput,
+  useWindowDimensions,
+  View,
+  type NativeSyntheticEvent,
+  type TextInputKeyPressEventData,
+} from 'react-native';
 import type { ConservationLawDto, MechanismClassDto } from '@/shared/api-types';
-import { useTaxonomy } from '../api';
-import { colors, focusRing, radius, space, type } from '../theme';
+import { useSearch, useTaxonomy } from '../api';
+import { SearchResults } from '../search/SearchResults';
+import { useDebounced } from '../ui/useDebounced';
+import { colors, focusRing, layout, radius, space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
@@ -14,40 +26,104 @@ interface LibraryScreenProps {
   initialFilters?: EntryFilters;
   /** Called with the filters each time the reader changes them. */
   onFiltersChange?: (filters: EntryFilters) => void;
+  /** Opens an entry from the keyboard (Enter on the highlighted result); by default the app's router. */
+  onOpenEntry?: (slug: string) => void;
 }
 
-/** The home: search, what was revised lately (narrowed by law and class), and the taxonomy to browse by. */
-export function LibraryScreen({ initialFilters = {}, onFiltersChange }: LibraryScreenProps) {
+/** How long the query must rest before it is sent. */
+export const SEARCH_DEBOUNCE_MS = 200;
+
+const openWithRouter = (slug: string) => router.push(`/entries/${slug}`);
+
+/**
+ * The home: search as you type (ranked results, narrowed by law and class), what was revised lately
+ * while the query is empty, and the taxonomy to browse by.
+ */
+export function LibraryScreen({ initialFilters = {}, onFiltersChange, onOpenEntry = openWithRouter }: LibraryScreenProps) {
   const [filters, setFilters] = useState(initialFilters);
   const [pages, setPages] = useState(1);
+  const [query, setQuery] = useState('');
+  const [highlighted, setHighlighted] = useState(-1);
+  const { width } = useWindowDimensions();
+  const keyboard = Platform.OS === 'web' && width >= layout.wideMinWidth;
   const { data: taxonomy } = useTaxonomy();
+
+  const settled = useDebounced(query.trim().slice(0, MAX_QUERY), SEARCH_DEBOUNCE_MS);
+  const searching = settled !== '';
+  const search = useSearch({ q: settled, law: filters.law, mechanism: filters.mechanism }, { enabled: searching });
+  const results = searching ? (search.data?.results ?? []) : [];
+
+  // A new query or new filters start the keyboard from the field again.
+  useEffect(() => setHighlighted(-1), [settled, filters.law, filters.mechanism]);
+
   const changeFilters = (next: EntryFilters) => {
     setFilters(next);
     setPages(1);
     onFiltersChange?.(next);
   };
+
+  const onKeyPress = (event: NativeSyntheticEvent<TextInputKeyPressEventData>) => {
+    if (!keyboard || results.length === 0) return;
+    const { key } = event.nativeEvent;
+    if (key === 'ArrowDown' || key === 'ArrowUp') {
+      event.preventDefault();
+      setHighlighted((i) => {
+        const at = Math.min(i, results.length - 1);
+        return key === 'ArrowDown' ? Math.min(at + 1, results.length - 1) : Math.max(at - 1, -1);
+      });
+    } else if (key === 'Enter' && highlighted >= 0 && highlighted < results.length) {
+      event.preventDefault();
+      onOpenEntry(results[highlighted].slug);
+    }
+  };
+
   return (
     <Screen
       testID="screen-library"
       title="Library"
       lead="The standard objections to impossible-machine claims: each written once, checked by a second expert, versioned and citable."
     >
-      <SearchField />
-      <Section title="Recently revised">
-        <EntryList
-          filters={filters}
-          onFiltersChange={changeFilters}
-          taxonomy={taxonomy}
-          pages={pages}
-          onMore={() => setPages((n) => n + 1)}
-        />
-      </Section>
+      <SearchField value={query} onChange={setQuery} onKeyPress={onKeyPress} keyboard={keyboard} />
+      {searching ? (
+        <Section title="Results">
+          <SearchResults
+            query={settled}
+            data={search.data}
+            error={search.error}
+            fetching={search.isFetching}
+            onRetry={() => void search.refetch()}
+            filters={filters}
+            onFiltersChange={changeFilters}
+            taxonomy={taxonomy}
+            highlighted={highlighted}
+            onSuggestion={setQuery}
+          />
+        </Section>
+      ) : (
+        <Section title="Recently revised">
+          <EntryList
+            filters={filters}
+            onFiltersChange={changeFilters}
+            taxonomy={taxonomy}
+            pages={pages}
+            onMore={() => setPages((n) => n + 1)}
+          />
+        </Section>
+      )}
       <Taxonomy />
     </Screen>
   );
 }
 
-function SearchField() {
+/** The API answers 400 beyond this. */
+const MAX_QUERY = 500;
+
+function SearchField(props: {
+  value: string;
+  onChange: (value: string) => void;
+  onKeyPress: (event: NativeSyntheticEvent<TextInputKeyPressEventData>) => void;
+  keyboard: boolean;
+}) {
   const [focused, setFocused] = useState(false);
   return (
     <View style={styles.search}>
@@ -58,13 +134,18 @@ function SearchField() {
         role="searchbox"
         placeholder="A device, a claim, a phrase from a pitch"
         placeholderTextColor={colors.inkMuted}
+        value={props.value}
+        onChangeText={props.onChange}
+        onKeyPress={props.onKeyPress}
+        maxLength={MAX_QUERY}
+        autoCorrect={false}
         onFocus={() => setFocused(true)}
         onBlur={() => setFocused(false)}
         style={[styles.input, focused && styles.inputFocused]}
       />
       <Text testID="library-search-hint" style={type.caption}>
-        Search across entries comes in a later release. Until then, narrow the list below by conservation law and
-        mechanism class.
+        Results come as you type, best match first; narrow them by conservation law and mechanism class.
+        {props.keyboard ? ' ↓ and ↑ move through the results, Enter opens one.' : ''}
       </Text>
     </View>
   );

@@ -171,6 +171,8 @@ export interface EntriesDeps {
   mailer: Mailer;
   /** Runs mail work after the answer has gone (app.ts), logging a failure. */
   later: (what: string, job: () => Promise<void>) => void;
+  /** Called after an entry was published or retired (the search index re-reads it). */
+  changed?: (slug: string) => Promise<void>;
 }
 
 export class Entries {
@@ -517,6 +519,7 @@ export class Entries {
       };
     });
     this.mail('approval mail', notify);
+    await this.deps.changed?.(result.slug);
     return result;
   }
 
@@ -545,7 +548,7 @@ export class Entries {
   }
 
   async retire(actor: User, slug: string, reason: string, successorSlug?: string): Promise<EntryStateDto> {
-    return this.deps.sequelize.transaction(async (transaction) => {
+    const state = await this.deps.sequelize.transaction(async (transaction) => {
       const entry = await this.publishedEntry(slug, transaction);
       if (entry.status === 'retired') throw new HttpError(409, 'entry_retired', `“${entry.title}” is retired already.`);
       let successor: Entry | null = null;
@@ -568,8 +571,10 @@ export class Entries {
         title: entry.title,
         latestVersion: current!.number!,
         retired: successor ? { reason, successor: successor.slug } : { reason },
-      };
+      } satisfies EntryStateDto;
     });
+    await this.deps.changed?.(state.slug);
+    return state;
   }
 
   // ------------------------------------------------------------------------------- the Desk

@@ -31,6 +31,7 @@ interface Expectation {
 const expected: Record<string, Expectation> = {
   'GET /api/health': { who: 'public' },
   'GET /api/taxonomy': { who: 'public' },
+  'GET /api/search': { who: 'public' },
   'GET /api/checks': { who: 'public' },
   'POST /api/checks/:check': { who: 'public', try: () => ({ path: '/api/checks/carnot', body: { inputs: {} } }) },
   'GET /api/worksheets': { who: 'public' },

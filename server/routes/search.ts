@@ -1,0 +1,56 @@
+/** GET /api/search: the full-text index, ranked, with facets (see server/search/index.ts). */
+import { Router } from 'express';
+import { z } from 'zod';
+import { slugSchema } from '../../shared/entries/schema';
+import { HttpError } from '../http/errors';
+import { validate } from '../http/validate';
+import type { Allow } from '../policies';
+import { excerpt, type SearchHit, type SearchIndex } from '../search';
+
+export const searchQuerySchema = z.object({
+  q: z.string().max(500, 'at most 500 characters').default(''),
+  law: slugSchema.optional(),
+  mechanism: slugSchema.optional(),
+  limit: z.coerce.number().int().min(1).max(50).default(20),
+  offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
+});
+
+const unknown = (field: string, what: string, slug: string) =>
+  new HttpError(400, 'validation_failed', `Check ${field}: no ${what} “${slug}” in the taxonomy.`, { [field]: `no ${what} “${slug}” in the taxonomy` });
+
+export function searchRoutes(allow: Allow, index: SearchIndex): Router {
+  const r = Router();
+  r.get('/search', allow('search.query'), async (req, res) => {
+    const q = validate(searchQuerySchema, req.query, 'query');
+    await index.ready();
+    if (q.law && !index.laws.has(q.law)) throw unknown('query.law', 'conservation law', q.law);
+    if (q.mechanism && !index.classes.has(q.mechanism)) throw unknown('query.mechanism', 'mechanism class', q.mechanism);
+    const hits = index.query(q.q);
+    const classes = q.mechanism ? index.classAndChildren(q.mechanism) : null;
+    const byLaw = (h: SearchHit) => !q.law || h.entry.laws.includes(q.law);
+    const byClass = (h: SearchHit) => !classes || (h.entry.mechanismClass !== null && classes.has(h.entry.mechanismClass));
+    // Each facet ignores its own filter, so that a chip shows what choosing it would give.
+    const laws: Record<string, number> = {};
+    for (const h of hits.filter(byClass)) for (const l of h.entry.laws) laws[l] = (laws[l] ?? 0) + 1;
+    const mechanisms: Record<string, number> = {};
+    for (const h of hits.filter(byLaw)) if (h.entry.mechanismClass) mechanisms[h.entry.mechanismClass] = (mechanisms[h.entry.mechanismClass] ?? 0) + 1;
+    const filtered = hits.filter((h) => byLaw(h) && byClass(h));
+    res.json({
+      query: q.q,
+      total: filtered.length,
+      results: filtered.slice(q.offset, q.offset + q.limit).map((h) => ({
+        slug: h.entry.slug,
+        title: h.entry.title,
+        version: h.entry.version,
+        score: h.score,
+        terms: h.terms,
+        excerpt: excerpt(h.entry.excerptText, h.terms),
+        laws: h.entry.laws,
+        mechanismClass: h.entry.mechanismClass,
+        inBrief: h.entry.inBrief,
+      })),
+      facets: { laws, mechanisms },
+    });
+  });
+  return r;
+}

@@ -1,0 +1,284 @@
+/**
+ * The full-text index (issue 6): minisearch over the current published version of every entry
+ * that is not retired. Built from MariaDB at app start, updated at once when this server publishes
+ * or retires an entry, and rebuilt whenever the change watermark in the database (published
+ * versions, retired entries, the newest entries.updated_at) moves, so that what another app server
+ * published is found here within one refresh period.
+ */
+import MiniSearch, { type SearchResult } from 'minisearch';
+import type { Logger } from 'pino';
+import { ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass } from '../models';
+import { fold, normaliseTerm, plainText } from './normalise';
+
+export interface SearchDoc {
+  id: number;
+  slug: string;
+  title: string;
+  aliases: string;
+  inBrief: string;
+  howItIsPitched: string;
+  whyItFails: string;
+  whatFakesTheEffect: string;
+  mechanism: string;
+  laws: string;
+  citations: string;
+}
+
+export interface IndexedEntry {
+  id: number;
+  slug: string;
+  title: string;
+  version: number;
+  publishedAt: number;
+  laws: string[];
+  mechanismClass: string | null;
+  /** Plain text of the brief. */
+  inBrief: string;
+  /** Plain text used for the excerpt: the brief, then why it fails. */
+  excerptText: string;
+}
+
+export interface SearchHit {
+  entry: IndexedEntry;
+  score: number;
+  terms: string[];
+}
+
+const FIELDS = ['title', 'aliases', 'inBrief', 'howItIsPitched', 'whyItFails', 'whatFakesTheEffect', 'mechanism', 'laws', 'citations'] as const;
+const BOOST = { title: 5, aliases: 4, inBrief: 2.5, mechanism: 1.5, laws: 1.5, howItIsPitched: 1.5, whyItFails: 1, whatFakesTheEffect: 1, citations: 0.7 };
+
+const newMiniSearch = () =>
+  new MiniSearch<SearchDoc>({
+    fields: [...FIELDS],
+    storeFields: [],
+    processTerm: normaliseTerm,
+    searchOptions: { boost: BOOST, prefix: true, fuzzy: 0.2, processTerm: normaliseTerm, combineWith: 'OR' },
+  });
+
+export interface SearchIndexOptions {
+  /** How often the watermark is checked (ms); 0 never. */
+  refreshMs: number;
+  logger?: Logger;
+}
+
+export class SearchIndex {
+  private ms = newMiniSearch();
+  private docs = new Map<number, SearchDoc>();
+  private entries = new Map<number, IndexedEntry>();
+  /** Law slug → name; mechanism slug → { name, parent slug }. */
+  laws = new Map<string, string>();
+  classes = new Map<string, { name: string; parent: string | null }>();
+  private watermark = '';
+  private building: Promise<void> | null = null;
+  private built = false;
+  private timer: NodeJS.Timeout | undefined;
+  private ticking = false;
+
+  constructor(private readonly opts: SearchIndexOptions) {}
+
+  /** Starts the first build and the refresh timer. */
+  start(): void {
+    void this.ready().catch((err) => this.opts.logger?.error({ err }, 'search index build failed'));
+    if (this.opts.refreshMs > 0) {
+      this.timer = setInterval(() => void this.tick(), this.opts.refreshMs);
+      this.timer.unref();
+    }
+  }
+
+  /** Stops the timer and waits for a build or refresh under way. */
+  async stop(): Promise<void> {
+    if (this.timer) clearInterval(this.timer);
+    this.timer = undefined;
+    await Promise.allSettled([this.building, this.tickP].filter(Boolean));
+  }
+
+  /** Resolves once the index has been built (a failed build is tried again on the next call). */
+  async ready(): Promise<void> {
+    if (this.built) return;
+    this.building ??= this.rebuild().finally(() => (this.building = null));
+    await this.building;
+  }
+
+  private tickP: Promise<void> | null = null;
+
+  private tick(): Promise<void> {
+    if (this.tickP) return this.tickP;
+    this.tickP = this.refresh().finally(() => (this.tickP = null));
+    return this.tickP;
+  }
+
+  private async refresh(): Promise<void> {
+    if (this.ticking) return;
+    this.ticking = true;
+    try {
+      const mark = await this.currentWatermark();
+      if (mark !== this.watermark) await this.rebuild();
+    } catch (err) {
+      this.opts.logger?.warn({ err }, 'search index refresh failed');
+    } finally {
+      this.ticking = false;
+    }
+  }
+
+  private async currentWatermark(): Promise<string> {
+    const [published, retired, newest] = await Promise.all([
+      EntryVersion.count({ where: { state: 'published' } }),
+      Entry.count({ where: { status: 'retired' } }),
+      Entry.max('updatedAt') as Promise<Date | string | null>,
+    ]);
+    return `${published}/${retired}/${newest ? new Date(newest).getTime() : 0}`;
+  }
+
+  private async loadTaxonomy(): Promise<{ lawById: Map<number, ConservationLaw>; classById: Map<number, MechanismClass> }> {
+    const [laws, classes] = await Promise.all([ConservationLaw.findAll(), MechanismClass.findAll()]);
+    const classById = new Map(classes.map((c) => [c.id, c]));
+    this.laws = new Map(laws.map((l) => [l.slug, l.name]));
+    this.classes = new Map(classes.map((c) => [c.slug, { name: c.name, parent: c.parentId ? (classById.get(c.parentId)?.slug ?? null) : null }]));
+    return { lawById: new Map(laws.map((l) => [l.id, l])), classById };
+  }
+
+  /** Reads entries (all, or those with these ids) that are published, with what the index needs. */
+  private async load(ids?: number[]): Promise<{ doc: SearchDoc; entry: IndexedEntry }[]> {
+    const { lawById, classById } = await this.loadTaxonomy();
+    const rows = await Entry.findAll({
+      where: ids ? { id: ids, status: 'published' } : { status: 'published' },
+      include: [{ model: EntryVersion, as: 'currentVersion' }],
+    });
+    const links = rows.length ? await EntryLaw.findAll({ where: { entryId: rows.map((r) => r.id) } }) : [];
+    return rows
+      .filter((e) => e.currentVersion)
+      .map((e) => {
+        const v = e.currentVersion!;
+        const c = v.content;
+        const own = new Set(links.filter((l) => l.entryId === e.id).map((l) => lawById.get(l.lawId)?.slug));
+        const laws = c.laws.filter((s) => own.has(s));
+        const cls = e.mechanismClassId ? classById.get(e.mechanismClassId) : undefined;
+        const inBrief = plainText(c.inBrief);
+        const doc: SearchDoc = {
+          id: e.id,
+          slug: e.slug,
+          title: c.title,
+          aliases: (c.aliases ?? []).join(' · '),
+          inBrief,
+          howItIsPitched: plainText(c.howItIsPitched),
+          whyItFails: plainText(c.whyItFails),
+          whatFakesTheEffect: plainText(c.whatFakesTheEffect ?? ''),
+          mechanism: cls?.name ?? '',
+          laws: laws.map((s) => this.laws.get(s) ?? s).join(' · '),
+          citations: (c.sources ?? []).map((s) => String(s.csl.title)).join(' · '),
+        };
+        const entry: IndexedEntry = {
+          id: e.id,
+          slug: e.slug,
+          title: c.title,
+          version: v.number!,
+          publishedAt: (v.publishedAt ?? e.lastPublishedAt ?? new Date(0)).getTime(),
+          laws,
+          mechanismClass: cls?.slug ?? null,
+          inBrief,
+          excerptText: `${inBrief} ${doc.whyItFails}`.trim(),
+        };
+        return { doc, entry };
+      });
+  }
+
+  /** Builds the whole index again from the database. */
+  async rebuild(): Promise<void> {
+    const mark = await this.currentWatermark();
+    const loaded = await this.load();
+    const ms = newMiniSearch();
+    ms.addAll(loaded.map((l) => l.doc));
+    this.ms = ms;
+    this.docs = new Map(loaded.map((l) => [l.doc.id, l.doc]));
+    this.entries = new Map(loaded.map((l) => [l.entry.id, l.entry]));
+    this.watermark = mark;
+    this.built = true;
+  }
+
+  /** Re-reads one entry after this server published or retired it. */
+  async update(slug: string): Promise<void> {
+    if (!this.built) return this.ready();
+    const row = await Entry.findOne({ where: { slug }, attributes: ['id'] });
+    if (!row) return;
+    const old = this.docs.get(row.id);
+    if (old) {
+      this.ms.remove(old);
+      this.docs.delete(row.id);
+      this.entries.delete(row.id);
+    }
+    for (const { doc, entry } of await this.load([row.id])) {
+      this.ms.add(doc);
+      this.docs.set(doc.id, doc);
+      this.entries.set(entry.id, entry);
+    }
+  }
+
+  /** The class and every class below it. */
+  classAndChildren(slug: string): Set<string> {
+    const out = new Set([slug]);
+    for (let grew = true; grew; ) {
+      grew = false;
+      for (const [s, c] of this.classes) if (c.parent && out.has(c.parent) && !out.has(s)) (out.add(s), (grew = true));
+    }
+    return out;
+  }
+
+  /** Ranked hits for q (all entries, newest first, when q has no terms). */
+  query(q: string): SearchHit[] {
+    const words = q.split(/\s+/).map(normaliseTerm).filter(Boolean);
+    if (!words.length) {
+      return [...this.entries.values()].sort((a, b) => b.publishedAt - a.publishedAt || b.id - a.id).map((entry) => ({ entry, score: 0, terms: [] }));
+    }
+    return this.ms
+      .search(q)
+      .map((r: SearchResult) => ({ entry: this.entries.get(r.id as number)!, score: r.score, terms: r.terms }))
+      .filter((h) => h.entry);
+  }
+
+  get size(): number {
+    return this.entries.size;
+  }
+}
+
+// ---------------------------------------------------------------------------------------------
+// The excerpt
+
+const escapeHtml = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
+
+/**
+ * About `width` characters of `text` around the first matched word, every matched word in
+ * <mark>…</mark>, all else HTML-escaped. A word matches when its normalised form is one of the
+ * index terms that matched.
+ */
+export function excerpt(text: string, terms: string[], width = 220): string {
+  const matched = new Set(terms);
+  const isMatch = (word: string) => {
+    const t = normaliseTerm(word);
+    return t !== null && (matched.has(t) || matched.has(fold(word)));
+  };
+  const words = [...text.matchAll(/[\p{L}\p{N}]+(?:['’-][\p{L}\p{N}]+)*/gu)];
+  const first = words.find((m) => isMatch(m[0]));
+  let start = 0;
+  if (first && first.index! > width / 3) {
+    start = first.index! - Math.floor(width / 3);
+    const space = text.indexOf(' ', start);
+    if (space >= 0 && space < first.index!) start = space + 1;
+  }
+  let end = Math.min(text.length, start + width);
+  if (end < text.length) {
+    const space = text.lastIndexOf(' ', end);
+    if (space > start) end = space;
+  }
+  let out = start > 0 ? '… ' : '';
+  let at = start;
+  for (const m of words) {
+    const i = m.index!;
+    if (i < start || i + m[0].length > end) continue;
+    if (!isMatch(m[0])) continue;
+    out += escapeHtml(text.slice(at, i)) + `<mark>${escapeHtml(m[0])}</mark>`;
+    at = i + m[0].length;
+  }
+  out += escapeHtml(text.slice(at, end));
+  if (end < text.length) out += ' …';
+  return out;
+}

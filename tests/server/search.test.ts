@@ -1,0 +1,132 @@
+/**
+ * GET /api/search over the starter entries (supertest, real MariaDB): queries in other words than
+ * the entries' own rank the intended entry first, misspellings still find it, filters and facets,
+ * validation, and the excerpt's escaping. The query texts are invented test data.
+ */
+import { excerpt } from '../../server/search';
+import { normaliseTerm, plainText } from '../../server/search/normalise';
+import { startTestApp, type TestApp } from '../support/app';
+
+jest.setTimeout(120_000);
+
+let h: TestApp;
+beforeAll(async () => {
+  h = await startTestApp({ starterEntries: true, searchRefreshMs: 0 });
+});
+afterAll(() => h?.close());
+
+const search = (query: Record<string, string | number>) => h.client().then((c) => c.get('/api/search').query(query));
+
+describe('ranking (invented test queries)', () => {
+  it.each([
+    ['sealed microwave resonator push', 'resonant-cavity-thruster'],
+    ['wheel with weights that never stops', 'overbalanced-wheel'],
+    ['engine running on ambient heat alone', 'ambient-heat-engine'],
+    ['microwve cavty thrustr', 'resonant-cavity-thruster'],
+    ['overbalansed wheal', 'overbalanced-wheel'],
+  ])('"%s" ranks %s first', async (q, slug) => {
+    const res = await search({ q });
+    expect(res.status).toBe(200);
+    expect(res.body.results[0]?.slug).toBe(slug);
+    expect(res.body.results[0].score).toBeGreaterThan(0);
+    expect(res.body.results[0].terms.length).toBeGreaterThan(0);
+  });
+
+  it('answers in the contract shape', async () => {
+    const res = await search({ q: 'microwave cavity' });
+    expect(res.body).toMatchObject({ query: 'microwave cavity', total: expect.any(Number), facets: { laws: expect.any(Object), mechanisms: expect.any(Object) } });
+    const top = res.body.results[0];
+    expect(top).toEqual({
+      slug: 'resonant-cavity-thruster',
+      title: expect.any(String),
+      version: 1,
+      score: expect.any(Number),
+      terms: expect.arrayContaining(['cavity', 'microwav']),
+      excerpt: expect.stringContaining('<mark>'),
+      laws: ['linear-momentum', 'energy'],
+      mechanismClass: 'enclosed-radiation',
+      inBrief: expect.any(String),
+    });
+    expect(top.inBrief).not.toMatch(/[*_$`]/);
+  });
+
+  it('lists every published entry, newest first, for an empty query', async () => {
+    const res = await search({ q: '' });
+    expect(res.body.total).toBe(12);
+    expect(res.body.results).toHaveLength(12);
+    expect(res.body.results.every((r: { score: number; terms: string[] }) => r.score === 0 && r.terms.length === 0)).toBe(true);
+    const all = await (await h.client()).get('/api/entries?limit=100');
+    expect(res.body.results.map((r: { slug: string }) => r.slug)).toEqual(all.body.entries.map((e: { slug: string }) => e.slug));
+  });
+});
+
+describe('filters and facets', () => {
+  it('filters by law and by mechanism class with its children; each facet ignores its own filter', async () => {
+    const all = await search({ q: '', limit: 50 });
+    const entropy = await search({ q: '', law: 'entropy', limit: 50 });
+    expect(entropy.body.total).toBe(all.body.facets.laws.entropy);
+    expect(entropy.body.results.every((r: { laws: string[] }) => r.laws.includes('entropy'))).toBe(true);
+    // The law facet with a law chosen still counts every law (its own filter ignored) …
+    expect(entropy.body.facets.laws).toEqual(all.body.facets.laws);
+    // … while the mechanism facet counts only entries under that law.
+    const sum = (o: Record<string, number>) => Object.values(o).reduce((a, b) => a + b, 0);
+    expect(sum(entropy.body.facets.mechanisms)).toBe(entropy.body.total);
+
+    const parent = await search({ q: '', mechanism: 'propellant-free-thrust', limit: 50 });
+    expect(parent.body.results.map((r: { slug: string }) => r.slug)).toContain('resonant-cavity-thruster');
+    expect(parent.body.results.every((r: { mechanismClass: string }) => r.mechanismClass !== 'overbalanced-wheel')).toBe(true);
+    expect(parent.body.facets.mechanisms).toEqual(all.body.facets.mechanisms);
+  });
+
+  it('pages with limit and offset', async () => {
+    const first = await search({ q: 'energy', limit: 2 });
+    const second = await search({ q: 'energy', limit: 2, offset: 2 });
+    expect(first.body.results).toHaveLength(2);
+    expect(second.body.results[0].slug).not.toBe(first.body.results[0].slug);
+    expect(second.body.total).toBe(first.body.total);
+  });
+});
+
+describe('validation', () => {
+  it('refuses a query over 500 characters, naming query.q', async () => {
+    const res = await search({ q: 'x'.repeat(501) });
+    expect(res.status).toBe(400);
+    expect(res.body.error).toMatchObject({ code: 'validation_failed', fields: { 'query.q': expect.any(String) } });
+    expect((await search({ q: 'wheel '.repeat(83).slice(0, 500) })).status).toBe(200);
+  });
+
+  it('refuses an unknown law or mechanism class, and a bad limit', async () => {
+    const law = await search({ q: 'wheel', law: 'conservation-of-luck' });
+    expect(law.status).toBe(400);
+    expect(law.body.error.fields).toHaveProperty(['query.law']);
+    const mech = await search({ q: 'wheel', mechanism: 'perpetual-gizmo' });
+    expect(mech.status).toBe(400);
+    expect(mech.body.error.fields).toHaveProperty(['query.mechanism']);
+    const limit = await search({ q: 'wheel', limit: 51 });
+    expect(limit.status).toBe(400);
+    expect(limit.body.error.fields).toHaveProperty(['query.limit']);
+  });
+});
+
+describe('excerpts and normalisation', () => {
+  it('marks matched words and escapes everything else', () => {
+    const text = 'A <script>alert("x")</script> cavity & a Cavity’s “wall” > 0';
+    const out = excerpt(text, ['cavity']);
+    expect(out).toBe('A &lt;script&gt;alert(&quot;x&quot;)&lt;/script&gt; <mark>cavity</mark> &amp; a <mark>Cavity’s</mark> “wall” &gt; 0');
+  });
+
+  it('excerpts from the API hold no HTML but the marks', async () => {
+    const res = await search({ q: 'magnet motor energy', limit: 50 });
+    for (const r of res.body.results) expect(r.excerpt.replace(/<\/?mark>/g, '')).not.toMatch(/[<>]/);
+  });
+
+  it('folds case, diacritics and light English suffixes alike (our own stemmer)', () => {
+    expect(['Microwaves', 'microwave', 'microwaved'].map(normaliseTerm)).toEqual(['microwav', 'microwav', 'microwav']);
+    expect(['cavities', 'cavity'].map(normaliseTerm)).toEqual(['cavity', 'cavity']);
+    expect(['thrusters', 'thrusting', 'thrust'].map(normaliseTerm)).toEqual(['thrust', 'thrust', 'thrust']);
+    expect(normaliseTerm('Carnot’s')).toBe(normaliseTerm('carnots'));
+    expect(normaliseTerm('Émigré')).toBe(normaliseTerm('emigre'));
+    expect(normaliseTerm('the')).toBeNull();
+    expect(plainText('**Bold** $E = mc^2$ and [a link](https://x.org) $$\\int f$$')).toBe('Bold and a link');
+  });
+});
