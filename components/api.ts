@@ -9,13 +9,19 @@ import type { z } from 'zod';
 import type {
   ApiErrorBody,
   AuditListResponse,
+  EntryHtml,
+  EntryStateDto,
+  EntryVersionDto,
   HealthResponse,
   OutboxResponse,
+  PersonDto,
   SessionResponse,
   TaxonomyResponse,
   UserDto,
   UserListResponse,
 } from '@/shared/api-types';
+
+export type { EntryHtml, EntryStateDto, EntryVersionDto, PersonDto };
 import type {
   changePasswordSchema,
   emailOnlySchema,
@@ -408,11 +414,6 @@ export function useOutbox() {
 
 /* Entries (the contract of issue 5; content as in shared/entries/schema.ts). */
 
-/** Someone named on a version: its author or its reviewer. */
-export interface PersonRef {
-  id: number;
-  displayName: string;
-}
 
 /** One published entry as `GET /api/entries` lists it. */
 export interface EntrySummary {
@@ -438,35 +439,12 @@ export interface EntryListQuery {
   offset?: number;
 }
 
-/** The Markdown sections of a version, rendered and sanitised by the server with shared/markdown.ts. */
-export interface EntryHtml {
-  inBrief: string;
-  howItIsPitched: string;
-  whyItFails: string;
-  whatFakesTheEffect: string;
-  cautions: string;
-  replies: { reply: string; answer: string }[];
-}
 
-export interface EntryVersionDto {
-  number: number;
-  changeNote: string;
-  publishedAt: string;
-  author: PersonRef;
-  reviewer: PersonRef | null;
-  content: EntryContent;
-  html: EntryHtml;
-}
 
-export interface EntryStatus {
-  slug: string;
-  status: 'draft' | 'in_review' | 'published' | 'retired';
-  retired?: { reason: string; successor?: string };
-}
 
 /** `GET /api/entries/:slug` and `GET /api/entries/:slug/versions/:n` */
 export interface EntryResponse {
-  entry: EntryStatus;
+  entry: EntryStateDto;
   version: EntryVersionDto;
 }
 
@@ -520,8 +498,8 @@ export interface DraftDto {
   state: DraftState;
   lockVersion: number;
   content: EntryContent;
-  author: PersonRef;
-  reviewer: PersonRef | null;
+  author: PersonDto;
+  reviewer: PersonDto | null;
   updatedAt: string;
 }
 

@@ -1,3 +1,5 @@
+import type { EntryContent } from './entries/schema';
+
 /**
  * Shapes of what the API sends, shared by the Express server and the Expo app.
  * Keep this file free of runtime dependencies: it is imported on both sides.
@@ -106,4 +108,41 @@ export interface OutboxMessageDto {
 /** `GET /api/admin/outbox` (development only) */
 export interface OutboxResponse {
   messages: OutboxMessageDto[];
+}
+
+/** A person as entries show them: author or reviewer of a version. */
+export interface PersonDto {
+  id: number;
+  displayName: string;
+}
+
+/** The Markdown sections of a version, rendered and sanitised by the server with shared/markdown.ts. */
+export interface EntryHtml {
+  inBrief: string;
+  howItIsPitched: string;
+  whyItFails: string;
+  whatFakesTheEffect: string;
+  cautions: string;
+  replies: { reply: string; answer: string }[];
+}
+
+/** One published version of an entry, as `GET /api/entries/:slug[/versions/:n]` sends it. */
+export interface EntryVersionDto {
+  number: number;
+  changeNote: string;
+  publishedAt: string;
+  author: PersonDto;
+  reviewer: PersonDto | null;
+  content: EntryContent;
+  html: EntryHtml;
+}
+
+/** An entry's state beside the version being read. */
+export interface EntryStateDto {
+  slug: string;
+  status: 'draft' | 'in_review' | 'published' | 'retired';
+  title: string;
+  /** The newest published version's number. */
+  latestVersion: number;
+  retired?: { reason: string; successor?: string };
 }

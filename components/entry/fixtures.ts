@@ -60,6 +60,6 @@ export function versionDto(number: number, content: EntryContent): EntryVersionD
 }
 
 export const entryResponse = (number: number, content: EntryContent): EntryResponse => ({
-  entry: { slug: 'light-in-a-box', status: 'published' },
+  entry: { slug: 'light-in-a-box', status: 'published', title: content.title, latestVersion: number },
   version: versionDto(number, content),
 });

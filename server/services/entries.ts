@@ -19,6 +19,8 @@ import type { Mailer, OutgoingMessage } from '../mail/mailer';
 import { draftApprovedMessage, draftSentBackMessage, reviewRequestedMessage } from '../mail/messages';
 import { audit, ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass, User } from '../models';
 import { renderHtml } from './render';
+import type { EntryHtml, EntryStateDto, EntryVersionDto, PersonDto } from '../../shared/api-types';
+export type { EntryHtml, EntryStateDto, EntryVersionDto, PersonDto };
 
 // ---------------------------------------------------------------------------------------------
 // Request bodies
@@ -64,40 +66,11 @@ export function validateSized<T>(schema: ZodType<T>, data: unknown, where: 'body
 }
 
 // ---------------------------------------------------------------------------------------------
-// What the API returns
+// What the API returns (the shared DTOs live in shared/api-types.ts)
 
-export interface PersonDto {
-  id: number;
-  displayName: string;
-}
 
-export interface EntryHtml {
-  inBrief: string;
-  howItIsPitched: string;
-  whyItFails: string;
-  whatFakesTheEffect: string;
-  cautions: string;
-  replies: { reply: string; answer: string }[];
-}
 
-export interface EntryVersionDto {
-  number: number;
-  changeNote: string;
-  publishedAt: string;
-  author: PersonDto;
-  reviewer: PersonDto | null;
-  content: EntryContent;
-  html: EntryHtml;
-}
 
-export interface EntryStateDto {
-  slug: string;
-  status: 'draft' | 'in_review' | 'published' | 'retired';
-  title: string;
-  /** The newest published version's number. */
-  latestVersion: number;
-  retired?: { reason: string; successor?: string };
-}
 
 export interface EntryListItemDto {
   slug: string;
