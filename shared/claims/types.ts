@@ -1,0 +1,181 @@
+/**
+ * The claim check (DESIGN.md §4–§5, issue 6): a pasted claim → the matching entries, the figures
+ * found in it, the standard checks run on those figures, and a referee paragraph with references.
+ * These types are the contract between shared/claims/* (extraction, planning, the paragraph), the
+ * server route (server/routes/claim-checks.ts) and the screen (components/claims/*).
+ */
+import type { CheckName, CheckVerdict } from '../checks/types';
+import type { CitationStyle } from '../entries/citations';
+import type { QuantityValue } from '../worksheet/types';
+
+/** Longest pasted text the claim check takes (characters, UTF-16 code units); more answers 413. */
+export const CLAIM_TEXT_MAX = 20_000;
+/** Most figures a request may send back after the reader fixed some. */
+export const CLAIM_FIGURES_MAX = 50;
+
+export const FIGURE_KINDS = ['thrust', 'power', 'energy', 'temperature', 'efficiency', 'cop', 'mass', 'speed', 'current'] as const;
+export type FigureKind = (typeof FIGURE_KINDS)[number];
+
+/** The coherent SI unit (mathjs syntax) a figure of each kind is held in; "" for a pure number. */
+export const FIGURE_SI_UNIT: Record<FigureKind, string> = {
+  thrust: 'N',
+  power: 'W',
+  energy: 'J',
+  temperature: 'K',
+  efficiency: '',
+  cop: '',
+  mass: 'kg',
+  speed: 'm / s',
+  current: 'A',
+};
+
+/** Words for each kind, for the screen. */
+export const FIGURE_KIND_LABEL: Record<FigureKind, string> = {
+  thrust: 'Thrust (force)',
+  power: 'Power',
+  energy: 'Energy',
+  temperature: 'Temperature',
+  efficiency: 'Efficiency',
+  cop: 'Coefficient of performance',
+  mass: 'Mass',
+  speed: 'Speed',
+  current: 'Electric current',
+};
+
+/**
+ * What the figure is, read from the words around it:
+ *  - power and energy: 'in' (drawn, supplied, consumed, input) or 'out' (delivered, produced, output);
+ *  - temperature: 'hot' or 'cold' (source/sink, ambient, room, outside …);
+ *  - cop: 'heating' or 'cooling';
+ *  - null when the words do not say.
+ */
+export type FigureRole = 'in' | 'out' | 'hot' | 'cold' | 'heating' | 'cooling' | null;
+
+export interface Figure {
+  /** "f1", "f2", … in order of appearance (or of the list the reader sent back). */
+  id: string;
+  kind: FigureKind;
+  /** The figure as parseQuantity reads it: "0.2 lbf", "45 %", "300 degC", "3.2" (a COP). */
+  quantity: string;
+  /** The figure exactly as it appears in the text ("0.2 lbf", "1.5 kilowatts", "45%"); the quantity when typed by hand. */
+  text: string;
+  /** UTF-16 offsets of `text` in the pasted text (text.slice(start, end) === figure.text); null when typed by hand. */
+  start: number | null;
+  end: number | null;
+  /** Value in FIGURE_SI_UNIT[kind]. */
+  si: number;
+  /** FIGURE_SI_UNIT[kind]. */
+  unit: string;
+  /** formatQuantity of si, e.g. "889.6 mN", "293.1 K", "0.45". */
+  display: string;
+  role: FigureRole;
+}
+
+/** A figure as the reader sends it back after fixing it (quantity retyped, kind or role changed). */
+export interface FigureInput {
+  kind: FigureKind;
+  quantity: string;
+  role?: FigureRole;
+  /** Kept from the extracted figure so that the screen can still point at the place in the text. */
+  text?: string;
+  start?: number | null;
+  end?: number | null;
+}
+
+/** One check of the kit chosen for the figures, with the typed inputs it was run with. */
+export interface PlannedCheck {
+  check: CheckName;
+  /** Typed inputs for runCheck (figure quantities, or a stated assumption such as "1 h" of running). */
+  inputs: Record<string, string>;
+  /** Ids of the figures used. */
+  uses: string[];
+  /** Why this check applies, in a sentence ("The text gives a thrust and the power that produces it."). */
+  why: string;
+  /** Assumptions made beyond the text's figures, in plain words (may be empty). */
+  assumptions: string[];
+}
+
+export interface ClaimCheckRun extends PlannedCheck {
+  title: string;
+  /** The check's outputs (display strings included) and verdict; plots left out. */
+  outputs: { name: string; label: string; si: number; unit: string; display: string }[];
+  verdict: CheckVerdict;
+  inputsUsed: Record<string, QuantityValue>;
+  /** Path of the check screen with these inputs filled in, e.g. "/checks/photon-bound?F_claimed=0.2%20lbf&P=1.5%20kW". */
+  permalink: string;
+}
+
+export interface ClaimMatch {
+  slug: string;
+  title: string;
+  version: number;
+  score: number;
+  /** The normalised index terms that matched. */
+  terms: string[];
+  /** The words of the pasted text that matched (as written, each once, in order of first appearance). */
+  words: string[];
+  /** Permanent URL of this version. */
+  url: string;
+  inBrief: string;
+}
+
+export interface ParagraphReference {
+  /** 1, 2, … in order of first citation in the paragraph. */
+  n: number;
+  /** CSL id of the item (e.g. "resonant-cavity-thruster-v1" for a Counterweight entry). */
+  id: string;
+  /** True for a Counterweight entry version. */
+  counterweight: boolean;
+  /** The reference formatted by citation-js in the chosen style, plain text, without the number. */
+  text: string;
+}
+
+export interface ClaimParagraph {
+  style: CitationStyle;
+  /** The paragraph proper, with in-text markers [1], [2] … */
+  body: string;
+  references: ParagraphReference[];
+  /** body + a blank line + "References" + the numbered list: what "Copy" puts on the clipboard. */
+  text: string;
+}
+
+export interface ClaimCheckRequest {
+  text: string;
+  style?: CitationStyle;
+  /** The figures as the reader fixed them; when present, the text is not searched for figures again. */
+  figures?: FigureInput[];
+}
+
+export interface ClaimCheckResult {
+  style: CitationStyle;
+  textLength: number;
+  matches: ClaimMatch[];
+  figures: Figure[];
+  checks: ClaimCheckRun[];
+  paragraph: ClaimParagraph;
+  /** Plain-words notes, e.g. "No thrust figure was found, so the photon bound was not run." */
+  notes: string[];
+}
+
+export interface SavedClaimCheckDto {
+  /** Unguessable token (at least 128 random bits, base64url); the share link is `${origin}/check/${token}`. */
+  token: string;
+  url: string;
+  createdAt: string;
+  /** The pasted text and what was sent back, so that the screen can re-run it. */
+  text: string;
+  style: CitationStyle;
+  figures: FigureInput[] | null;
+  result: ClaimCheckResult;
+  /** Whether the viewer owns it (and so may delete it). */
+  mine: boolean;
+}
+
+export interface SavedClaimCheckSummaryDto {
+  token: string;
+  url: string;
+  createdAt: string;
+  /** The first 120 characters of the text. */
+  preview: string;
+  topMatch: string | null;
+}
