@@ -29,6 +29,8 @@ import { entryRoutes } from './routes/entries';
 import { checkRoutes } from './routes/checks';
 import { healthRoutes } from './routes/health';
 import { searchRoutes } from './routes/search';
+import { claimCheckRoutes } from './routes/claim-checks';
+import { ClaimChecks } from './services/claim-checks';
 import { taxonomyRoutes } from './routes/taxonomy';
 import { worksheetRoutes } from './routes/worksheets';
 import { Accounts } from './services/accounts';
@@ -176,6 +178,7 @@ export function createApp(opts: AppOptions): express.Express {
   api.use(deskRoutes(allow, entries));
   api.use(citationRoutes(allow));
   api.use(searchRoutes(allow, search));
+  api.use(claimCheckRoutes(allow, new ClaimChecks({ sequelize: opts.sequelize, index: search, entries }), origin));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -43,10 +43,11 @@ async function main() {
         await new Promise<void>((resolve) => {
           s.close(() => resolve());
           s.closeIdleConnections();
-          setTimeout(() => {
+          // Cast: tsc may read the DOM's setTimeout (returning a number) before Node's.
+          (setTimeout(() => {
             s.closeAllConnections();
             resolve();
-          }, 5000).unref();
+          }, 5000) as unknown as NodeJS.Timeout).unref();
         });
       }
       await locals?.close().catch(() => {});

@@ -53,6 +53,8 @@ export const policies = {
   desk: { read: EDITOR },
   citations: { parse: EDITOR },
   search: { query: PUBLIC },
+  /** The claim check; a saved one is read by anyone holding its link and deleted by its owner only (checked in the service). */
+  claimChecks: { run: COMPUTE, save: SIGNED_IN, listMine: SIGNED_IN, read: PUBLIC, delete: SIGNED_IN },
 } as const satisfies Record<string, Record<string, Policy>>;
 
 type Table = typeof policies;

@@ -22,7 +22,7 @@ export function createSequelize(db: Config['db'], opts: { logging?: (sql: string
 
 /** True when a trivial query answers within the timeout. Never throws. */
 export async function databaseIsUp(sequelize: Sequelize, timeoutMs = 2000): Promise<boolean> {
-  let timer: NodeJS.Timeout | undefined;
+  let timer: ReturnType<typeof setTimeout> | undefined;
   try {
     await Promise.race([
       sequelize.query('SELECT 1'),

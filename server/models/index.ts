@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { initAccounts } from './accounts';
 import { initAudit } from './audit';
+import { initClaimChecks } from './claim-checks';
 import { initEntries } from './entries';
 import { initOutbox } from './outbox';
 import { initTaxonomy } from './taxonomy';
@@ -8,6 +9,7 @@ import { initTaxonomy } from './taxonomy';
 export { ConservationLaw, MechanismClass } from './taxonomy';
 export { EmailToken, Session, User, TOKEN_PURPOSES, type TokenPurpose } from './accounts';
 export { AuditEvent, audit } from './audit';
+export { SavedClaimCheck } from './claim-checks';
 export { OutboxMessage } from './outbox';
 export { Entry, EntryLaw, EntryVersion, PublishedVersionImmutable, ENTRY_STATUSES, VERSION_STATES, type EntryStatus, type VersionState } from './entries';
 
@@ -18,4 +20,5 @@ export function initModels(sequelize: Sequelize): void {
   initAudit(sequelize);
   initOutbox(sequelize);
   initEntries(sequelize);
+  initClaimChecks(sequelize);
 }

@@ -5,7 +5,7 @@
  * versions, retired entries, the newest entries.updated_at) moves, so that what another app server
  * published is found here within one refresh period.
  */
-import MiniSearch, { type SearchResult } from 'minisearch';
+import MiniSearch, { type SearchOptions, type SearchResult } from 'minisearch';
 import type { Logger } from 'pino';
 import { ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass } from '../models';
 import { fold, normaliseTerm, plainText } from './normalise';
@@ -44,6 +44,17 @@ export interface SearchHit {
   terms: string[];
 }
 
+/** A hit of {@link SearchIndex.searchTerms}: also the query terms it matched and the index terms each field matched. */
+export interface TermsHit extends SearchHit {
+  /** The query terms (as given) that matched. */
+  queryTerms: string[];
+  /** Index term → the fields it matched in. */
+  match: Record<string, string[]>;
+}
+
+/** Minisearch options that {@link SearchIndex.searchTerms} takes (the terms come already normalised). */
+export type TermsSearchOptions = Omit<SearchOptions, 'tokenize' | 'processTerm' | 'filter'>;
+
 const FIELDS = ['title', 'aliases', 'inBrief', 'howItIsPitched', 'whyItFails', 'whatFakesTheEffect', 'mechanism', 'laws', 'citations'] as const;
 const BOOST = { title: 5, aliases: 4, inBrief: 2.5, mechanism: 1.5, laws: 1.5, howItIsPitched: 1.5, whyItFails: 1, whatFakesTheEffect: 1, citations: 0.7 };
 
@@ -68,6 +79,8 @@ export class SearchIndex {
   /** Law slug → name; mechanism slug → { name, parent slug }. */
   laws = new Map<string, string>();
   classes = new Map<string, { name: string; parent: string | null }>();
+  /** Normalised term → number of indexed entries that hold it in any field. */
+  private df = new Map<string, number>();
   private watermark = '';
   private building: Promise<void> | null = null;
   private built = false;
@@ -80,7 +93,8 @@ export class SearchIndex {
   start(): void {
     void this.ready().catch((err) => this.opts.logger?.error({ err }, 'search index build failed'));
     if (this.opts.refreshMs > 0) {
-      this.timer = setInterval(() => void this.tick(), this.opts.refreshMs);
+      // Cast: tsc may read the DOM's setInterval (returning a number) before Node's.
+      this.timer = setInterval(() => void this.tick(), this.opts.refreshMs) as unknown as NodeJS.Timeout;
       this.timer.unref();
     }
   }
@@ -144,13 +158,20 @@ export class SearchIndex {
       where: ids ? { id: ids, status: 'published' } : { status: 'published' },
       include: [{ model: EntryVersion, as: 'currentVersion' }],
     });
-    const links = rows.length ? await EntryLaw.findAll({ where: { entryId: rows.map((r) => r.id) } }) : [];
+    const links = rows.length ? await EntryLaw.findAll({ where: { entryId: rows.map((r) => r.id) }, attributes: ['entryId', 'lawId'], raw: true }) : [];
+    // Grouped once: filtering the links per entry is quadratic at 10,000 entries.
+    const lawsOf = new Map<number, Set<string | undefined>>();
+    for (const l of links) {
+      const set = lawsOf.get(l.entryId) ?? new Set();
+      set.add(lawById.get(l.lawId)?.slug);
+      lawsOf.set(l.entryId, set);
+    }
     return rows
       .filter((e) => e.currentVersion)
       .map((e) => {
         const v = e.currentVersion!;
         const c = v.content;
-        const own = new Set(links.filter((l) => l.entryId === e.id).map((l) => lawById.get(l.lawId)?.slug));
+        const own = lawsOf.get(e.id) ?? new Set();
         const laws = c.laws.filter((s) => own.has(s));
         const cls = e.mechanismClassId ? classById.get(e.mechanismClassId) : undefined;
         const inBrief = plainText(c.inBrief);
@@ -188,7 +209,10 @@ export class SearchIndex {
     const loaded = await this.load();
     const ms = newMiniSearch();
     ms.addAll(loaded.map((l) => l.doc));
+    const df = new Map<string, number>();
+    for (const l of loaded) countTerms(df, l.doc, 1);
     this.ms = ms;
+    this.df = df;
     this.docs = new Map(loaded.map((l) => [l.doc.id, l.doc]));
     this.entries = new Map(loaded.map((l) => [l.entry.id, l.entry]));
     this.watermark = mark;
@@ -203,11 +227,13 @@ export class SearchIndex {
     const old = this.docs.get(row.id);
     if (old) {
       this.ms.remove(old);
+      countTerms(this.df, old, -1);
       this.docs.delete(row.id);
       this.entries.delete(row.id);
     }
     for (const { doc, entry } of await this.load([row.id])) {
       this.ms.add(doc);
+      countTerms(this.df, doc, 1);
       this.docs.set(doc.id, doc);
       this.entries.set(entry.id, entry);
     }
@@ -223,20 +249,68 @@ export class SearchIndex {
     return out;
   }
 
-  /** Ranked hits for q (all entries, newest first, when q has no terms). */
+  /**
+   * Ranked hits for q (all entries, newest first, when q has no terms). Every word must match
+   * (AND), falling back to any word (OR) when that finds nothing. Only the last word matches as a
+   * prefix (it is the one still being typed), and only a word that is not in the index's vocabulary
+   * is matched fuzzily, within an edit distance of about a third of its length (at most 2), so that
+   * a swapped or dropped letter is forgiven and a correct word does not fan out over its neighbours.
+   */
   query(q: string): SearchHit[] {
     const words = q.split(/\s+/).map(normaliseTerm).filter(Boolean);
     if (!words.length) {
       return [...this.entries.values()].sort((a, b) => b.publishedAt - a.publishedAt || b.id - a.id).map((entry) => ({ entry, score: 0, terms: [] }));
     }
+    const fuzzy = (term: string) => (this.df.has(term) || term.length < 4 ? false : Math.min(2, Math.round(0.34 * term.length)));
+    const prefix = (_term: string, i: number, terms: string[]) => i === terms.length - 1;
+    const run = (combineWith: 'AND' | 'OR') =>
+      this.ms
+        .search(q, { fuzzy, prefix, combineWith })
+        .map((r: SearchResult) => ({ entry: this.entries.get(r.id as number)!, score: r.score, terms: r.terms }))
+        .filter((h) => h.entry);
+    const all = run('AND');
+    return all.length ? all : run('OR');
+  }
+
+  /**
+   * Ranked hits for query terms that are already normalised (normaliseTerm), each searched once
+   * with these options over the index's field boosts (the claim matcher's way in; GET /api/search
+   * uses query()). Minisearch's score is kept as it gives it: the sum over terms and fields,
+   * times the number of distinct query terms matched.
+   */
+  searchTerms(terms: string[], options: TermsSearchOptions = {}): TermsHit[] {
+    if (!terms.length) return [];
     return this.ms
-      .search(q)
-      .map((r: SearchResult) => ({ entry: this.entries.get(r.id as number)!, score: r.score, terms: r.terms }))
+      .search(terms.join(' '), { boost: BOOST, combineWith: 'OR', prefix: false, fuzzy: false, ...options, tokenize: (s) => s.split(' '), processTerm: (t) => t })
+      .map((r: SearchResult) => ({ entry: this.entries.get(r.id as number)!, score: r.score, terms: r.terms, queryTerms: r.queryTerms, match: r.match }))
       .filter((h) => h.entry);
+  }
+
+  /** How many indexed entries hold this normalised term in any field. */
+  documentFrequency(term: string): number {
+    return this.df.get(term) ?? 0;
   }
 
   get size(): number {
     return this.entries.size;
+  }
+}
+
+const tokenize = MiniSearch.getDefault('tokenize') as (text: string) => string[];
+
+/** Adds `by` to the document frequency of each distinct term of the doc, as the index tokenises and normalises it. */
+function countTerms(df: Map<string, number>, doc: SearchDoc, by: 1 | -1): void {
+  const terms = new Set<string>();
+  for (const field of FIELDS) {
+    for (const token of tokenize(doc[field])) {
+      const t = normaliseTerm(token);
+      if (t) terms.add(t);
+    }
+  }
+  for (const t of terms) {
+    const n = (df.get(t) ?? 0) + by;
+    if (n > 0) df.set(t, n);
+    else df.delete(t);
   }
 }
 

@@ -8,6 +8,40 @@ const STOP = new Set(
   'a an and are as at be by for from has have in into is it its of on or that the their there this to was were which with'.split(' '),
 );
 
+/**
+ * Words too common in running prose to tell one machine from another, left out of long queries
+ * such as a pasted claim (server/search/claim-match.ts), never out of the index or GET /api/search:
+ * English function words, the stock phrases of abstracts, press releases and patent claims, and
+ * the parts of web and mail addresses. Folded (lower case, no diacritics), before stemming.
+ */
+export const COMMON_WORDS = new Set(
+  [
+    // function words
+    'about above across after again against all almost along also although always am among amongst any anyone anything',
+    'around because been before being below beneath beside besides between beyond both but can cannot could did do does',
+    'doing done down during each either else enough even ever every few further had hardly he hence her here hers herself',
+    'him himself his how however i if indeed instead itself just least less let like many may me might mine more most',
+    'much must my myself near neither never nevertheless no nobody none nor not nothing now of off often once one only onto',
+    'other others otherwise our ours ourselves out over own per perhaps quite rather same several shall she should since so',
+    'some somehow something sometimes still such than then thence thereby therefore these they thing things those though',
+    'through throughout thus together too toward towards under unless until up upon us very via was we well were what',
+    'whatever when whenever where whereas whether while who whoever whole whom whose why will within without would yet you',
+    'your yours yourself yourselves',
+    // numbers in words
+    'two three four five six seven eight nine ten eleven twelve twenty thirty forty fifty hundred hundreds thousand',
+    'thousands million millions billion',
+    // stock phrases of abstracts, press releases and patent claims
+    'according announced announce announces approach claim claimed claiming claims comprise comprised comprises comprising',
+    'consisting describe described describes discuss discussed embodiment embodiments firm herein hereby paper present',
+    'presented presents propose proposed proposes report reported reports respectively said say says show shown shows',
+    'study suggest suggests thereof therein thereto today wherein whereby whereupon',
+    // addresses
+    'com contact details example http https info information mailto net org press www',
+  ]
+    .join(' ')
+    .split(' '),
+);
+
 export function stem(word: string): string {
   let w = word;
   if (w.length > 4 && w.endsWith('ies')) return `${w.slice(0, -3)}y`;

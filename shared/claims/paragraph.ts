@@ -68,7 +68,7 @@ export function buildParagraph({ entries, checks, figures, style }: ParagraphInp
   }
 
   if (checks.length) {
-    const given = figures.length ? ` (${list(figures.filter((f) => checks.some((c) => c.uses.includes(f.id))).map((f) => `${f.text}${f.text !== f.display ? ` = ${f.display}` : ''}`))})` : '';
+    const given = figures.length ? ` (${list(figures.filter((f) => checks.some((c) => c.uses.includes(f.id))).map((f) => `${f.quantity}${f.quantity !== f.display ? ` = ${f.display}` : ''}`))})` : '';
     parts.push(`Running the standard checks on the figures the text gives${given}:`);
     for (const c of checks) {
       const cite = top ? ` ${marks([refs.cite(top.item, true)])}` : '';

@@ -69,6 +69,12 @@ const expected: Record<string, Expectation> = {
   'POST /api/drafts/:id/approve': { who: 'editor', try: () => ({ path: '/api/drafts/4000000000/approve', body: { changeNote: 'Matrix test.' } }) },
   'POST /api/drafts/:id/send-back': { who: 'editor', try: () => ({ path: '/api/drafts/4000000000/send-back', body: { reason: 'Matrix test.' } }) },
   'GET /api/desk': { who: 'editor' },
+  // Claim checks (issue 6). Saved-check tries aim at a token that does not exist: allowed means 404, never 401/403.
+  'POST /api/claim-checks': { who: 'public', try: () => ({ path: '/api/claim-checks', body: { text: 'A sealed box said to push itself with 2 mN from 1 kW.' } }) },
+  'POST /api/claim-checks/saved': { who: 'signed-in', try: () => ({ path: '/api/claim-checks/saved', body: { text: '' } }) },
+  'GET /api/claim-checks/saved': { who: 'signed-in' },
+  'GET /api/claim-checks/saved/:token': { who: 'public' },
+  'DELETE /api/claim-checks/saved/:token': { who: 'signed-in', try: () => ({ path: `/api/claim-checks/saved/${'A'.repeat(32)}`, body: {} }) },
   'POST /api/citations/parse': { who: 'editor', try: () => ({ path: '/api/citations/parse', body: { text: '@book{matrix, title = {A book}, year = 2000}' } }) },
 };
 

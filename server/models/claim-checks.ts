@@ -1,0 +1,45 @@
+/** A saved claim check (migration 0004): the pasted text, what was sent back, and the result. */
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { ClaimCheckResult, FigureInput } from '../../shared/claims/types';
+import type { CitationStyle } from '../../shared/entries/citations';
+import { User } from './accounts';
+
+const json = <T>(name: string) => ({
+  // MariaDB's JSON is LONGTEXT: the connector may hand back the text.
+  get(this: Model) {
+    const raw = this.getDataValue(name) as unknown;
+    return (typeof raw === 'string' ? JSON.parse(raw) : raw) as T;
+  },
+});
+
+export class SavedClaimCheck extends Model<InferAttributes<SavedClaimCheck>, InferCreationAttributes<SavedClaimCheck>> {
+  declare id: CreationOptional<number>;
+  declare token: string;
+  declare ownerId: ForeignKey<number>;
+  declare text: string;
+  declare style: CitationStyle;
+  declare figures: FigureInput[] | null;
+  declare result: ClaimCheckResult;
+  declare topMatch: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initClaimChecks(sequelize: Sequelize): void {
+  SavedClaimCheck.init(
+    {
+      id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+      token: { type: DataTypes.STRING(43), allowNull: false, unique: true },
+      ownerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+      text: { type: DataTypes.TEXT('medium'), allowNull: false },
+      style: { type: DataTypes.STRING(16), allowNull: false },
+      figures: { type: DataTypes.JSON, allowNull: true, ...json<FigureInput[] | null>('figures') },
+      result: { type: DataTypes.JSON, allowNull: false, ...json<ClaimCheckResult>('result') },
+      topMatch: { type: DataTypes.STRING(160), allowNull: true },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: 'saved_claim_checks', modelName: 'SavedClaimCheck' },
+  );
+  SavedClaimCheck.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
+}

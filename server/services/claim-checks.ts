@@ -1,0 +1,201 @@
+/**
+ * The claim check (issue 6, item 4): a pasted text → matched entries, figures, the checks they
+ * allow (run), and the referee paragraph with references; and saved checks shared by an
+ * unguessable token. The pure parts live in shared/claims/ (figures, plan, paragraph); this service
+ * adds the search index, the entry versions being cited, and the table of saved checks.
+ */
+import crypto from 'node:crypto';
+import type { Sequelize } from 'sequelize';
+import { z } from 'zod';
+import { extractFigures, readFigure } from '../../shared/claims/figures';
+import { buildParagraph, type ParagraphEntry } from '../../shared/claims/paragraph';
+import { runClaimChecks } from '../../shared/claims/plan';
+import {
+  CLAIM_FIGURES_MAX,
+  CLAIM_TEXT_MAX,
+  FIGURE_KINDS,
+  type ClaimCheckResult,
+  type ClaimMatch,
+  type Figure,
+  type FigureInput,
+  type SavedClaimCheckDto,
+  type SavedClaimCheckSummaryDto,
+} from '../../shared/claims/types';
+import { CITATION_STYLES, type CitationStyle, type CslItem } from '../../shared/entries/citations';
+import { QuantityError } from '../../shared/worksheet/quantity';
+import { HttpError } from '../http/errors';
+import { validate } from '../http/validate';
+import { SavedClaimCheck, type User } from '../models';
+import { citedItem, permalink } from '../routes/entries';
+import { matchClaim } from '../search/claim-match';
+import type { SearchIndex } from '../search';
+import type { Entries } from './entries';
+
+const ROLES = ['in', 'out', 'hot', 'cold', 'heating', 'cooling'] as const;
+
+export const figureInputSchema = z
+  .object({
+    kind: z.enum(FIGURE_KINDS),
+    quantity: z.string().trim().min(1, 'type the figure with its unit, such as "0.2 lbf"').max(80, 'at most 80 characters'),
+    role: z.enum(ROLES).nullable().optional(),
+    text: z.string().max(200).optional(),
+    start: z.number().int().min(0).max(CLAIM_TEXT_MAX).nullable().optional(),
+    end: z.number().int().min(0).max(CLAIM_TEXT_MAX).nullable().optional(),
+  })
+  .strict();
+
+export const claimCheckSchema = z
+  .object({
+    text: z.string({ error: 'paste the text of the claim' }).trim().min(1, 'paste the text of the claim'),
+    style: z.enum(CITATION_STYLES).default('apa'),
+    figures: z.array(figureInputSchema).max(CLAIM_FIGURES_MAX, `at most ${CLAIM_FIGURES_MAX} figures`).optional(),
+  })
+  .strict();
+
+export type ClaimCheckInput = z.infer<typeof claimCheckSchema>;
+
+/** Entries the paragraph names: the best match and up to two related ones. */
+const PARAGRAPH_ENTRIES = 3;
+
+/** Validates a claim-check body: 413 for a text over the limit (before anything else), else 400s naming the field. */
+export function readClaimCheckBody(body: unknown): ClaimCheckInput {
+  const text = (body as { text?: unknown } | null)?.text;
+  if (typeof text === 'string' && text.length > CLAIM_TEXT_MAX) {
+    throw new HttpError(
+      413,
+      'text_too_long',
+      `The text is ${text.length.toLocaleString('en-US')} characters long; the claim check takes at most ${CLAIM_TEXT_MAX.toLocaleString('en-US')}. Paste the part that states the claim and its figures.`,
+      { 'body.text': `at most ${CLAIM_TEXT_MAX} characters` },
+    );
+  }
+  return validate(claimCheckSchema, body ?? {}, 'body');
+}
+
+export interface ClaimChecksDeps {
+  sequelize: Sequelize;
+  index: SearchIndex;
+  entries: Entries;
+}
+
+export class ClaimChecks {
+  constructor(private readonly deps: ClaimChecksDeps) {}
+
+  /** Figures from the reader's list (each checked, 400 naming the one that fails), or from the text. */
+  private figures(input: ClaimCheckInput): Figure[] {
+    if (!input.figures) return extractFigures(input.text);
+    const fields: Record<string, string> = {};
+    const out: Figure[] = [];
+    input.figures.forEach((f, i) => {
+      try {
+        out.push(readFigure(f as FigureInput, `f${i + 1}`));
+      } catch (err) {
+        if (!(err instanceof QuantityError)) throw err;
+        fields[`body.figures.${i}.quantity`] = err.message;
+      }
+    });
+    const names = Object.keys(fields);
+    if (names.length) throw new HttpError(400, 'invalid_figure', `Check ${names.join(', ')}: ${fields[names[0]]}.`, fields);
+    return out;
+  }
+
+  async run(input: ClaimCheckInput, origin: string): Promise<ClaimCheckResult> {
+    const figures = this.figures(input);
+    await this.deps.index.ready();
+    const hits = matchClaim(this.deps.index, input.text);
+    const cited: (ParagraphEntry | null)[] = await Promise.all(
+      hits.map(async (h): Promise<ParagraphEntry | null> => {
+        const { slug, version: n } = h.entry;
+        let version;
+        try {
+          ({ version } = await this.deps.entries.versionRow(slug, n));
+        } catch (err) {
+          // Retired or gone since the index last refreshed: leave it out.
+          if (err instanceof HttpError && err.status === 404) return null;
+          throw err;
+        }
+        const url = permalink(origin, slug, n);
+        const match: ClaimMatch = { slug, title: h.entry.title, version: n, score: h.score, terms: h.terms, words: h.words, url, inBrief: h.entry.inBrief };
+        return {
+          match,
+          item: citedItem(slug, version, url),
+          sources: (version.content.sources ?? []).map((s) => s.csl as CslItem),
+          questions: version.content.questionsToAsk ?? [],
+        };
+      }),
+    );
+    const entries = cited.filter((e): e is ParagraphEntry => e !== null);
+    const { checks, notes } = runClaimChecks(figures);
+    if (!figures.length) notes.unshift('No figures with units were found in the text; add them by hand to run the checks.');
+    if (!entries.length) notes.unshift('No entry of the library matched this text closely.');
+    const paragraph = buildParagraph({ entries: entries.slice(0, PARAGRAPH_ENTRIES), checks, figures, style: input.style });
+    return { style: input.style, textLength: input.text.length, matches: entries.map((e) => e.match), figures, checks, paragraph, notes };
+  }
+
+  private dto(row: SavedClaimCheck, viewer: User | undefined, origin: string): SavedClaimCheckDto {
+    return {
+      token: row.token,
+      url: `${origin}/check/${row.token}`,
+      createdAt: row.createdAt.toISOString(),
+      text: row.text,
+      style: row.style,
+      figures: row.figures,
+      result: row.result,
+      mine: viewer !== undefined && viewer.id === row.ownerId,
+    };
+  }
+
+  async save(owner: User, input: ClaimCheckInput, origin: string): Promise<SavedClaimCheckDto> {
+    const result = await this.run(input, origin);
+    const row = await this.deps.sequelize.transaction((transaction) =>
+      SavedClaimCheck.create(
+        {
+          // 192 random bits: the link is the only key to a saved check.
+          token: crypto.randomBytes(24).toString('base64url'),
+          ownerId: owner.id,
+          text: input.text,
+          style: input.style as CitationStyle,
+          figures: (input.figures as FigureInput[] | undefined) ?? null,
+          result,
+          topMatch: result.matches[0]?.title.slice(0, 160) ?? null,
+        },
+        { transaction },
+      ),
+    );
+    return this.dto(row, owner, origin);
+  }
+
+  async listMine(owner: User, origin: string): Promise<SavedClaimCheckSummaryDto[]> {
+    const rows = await SavedClaimCheck.findAll({
+      where: { ownerId: owner.id },
+      attributes: ['token', 'text', 'topMatch', 'createdAt'],
+      order: [['createdAt', 'DESC'], ['id', 'DESC']],
+      limit: 200,
+    });
+    return rows.map((r) => ({
+      token: r.token,
+      url: `${origin}/check/${r.token}`,
+      createdAt: r.createdAt.toISOString(),
+      preview: r.text.replace(/\s+/g, ' ').trim().slice(0, 120),
+      topMatch: r.topMatch,
+    }));
+  }
+
+  private async find(token: string): Promise<SavedClaimCheck> {
+    const row = await SavedClaimCheck.findOne({ where: { token } });
+    if (!row) throw new HttpError(404, 'not_found', 'There is no saved claim check at this link: it was deleted, or the link is mistyped.');
+    return row;
+  }
+
+  async read(token: string, viewer: User | undefined, origin: string): Promise<SavedClaimCheckDto> {
+    return this.dto(await this.find(token), viewer, origin);
+  }
+
+  async delete(actor: User, token: string): Promise<void> {
+    await this.deps.sequelize.transaction(async (transaction) => {
+      const row = await SavedClaimCheck.findOne({ where: { token }, transaction, lock: transaction.LOCK.UPDATE });
+      if (!row) throw new HttpError(404, 'not_found', 'There is no saved claim check at this link: it was deleted, or the link is mistyped.');
+      if (row.ownerId !== actor.id) throw new HttpError(403, 'not_owner', 'Only the account that saved this claim check may delete it.');
+      await row.destroy({ transaction });
+    });
+  }
+}

@@ -1,0 +1,532 @@
+/**
+ * The figures of a pasted claim, against outside references: NIST SP 811 (2008), "Guide for the Use
+ * of the International System of Units (SI)", Appendix B.8 and B.9 conversion factors and §4.2.1.1
+ * (Celsius temperature); the SI prefixes of the BIPM SI Brochure (9th ed., 2019, Table 7). SP 811
+ * prints most factors to seven significant digits, so those checks allow half a unit in the seventh.
+ *
+ * Every text here is invented test data: invented devices ("QZ-4 cavity", "Helix-7 rig") and an
+ * invented organisation ("Example Dynamics"), no real people or products.
+ */
+import fc from 'fast-check';
+import { formatQuantity, parseQuantity, QuantityError } from '../worksheet/quantity';
+import { extractFigures, readFigure } from './figures';
+import { CLAIM_TEXT_MAX, FIGURE_SI_UNIT, type Figure, type FigureKind } from './types';
+
+/** |a − b| ≤ rel·|b|: agreement to the digits a reference prints. */
+function expectRelClose(actual: number, expected: number, rel: number) {
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
+}
+/** Seven significant digits printed (SP 811 Appendix B) → within half a unit in the seventh digit. */
+const SEVEN = 5e-7;
+/** Exact factors (SI prefixes, defined units) → floating point only. */
+const EXACT = 1e-12;
+
+/** The invariants of the contract (shared/claims/types.ts) that hold for every extracted figure. */
+function expectWellFormed(text: string, figures: Figure[]) {
+  figures.forEach((f, i) => {
+    expect(f.id).toBe(`f${i + 1}`);
+    expect(text.slice(f.start!, f.end!)).toBe(f.text);
+    expect(f.unit).toBe(FIGURE_SI_UNIT[f.kind]);
+    // si and display are parseQuantity and formatQuantity of the quantity (the contract, types.ts).
+    expect(f.si).toBe(parseQuantity(f.quantity, f.unit));
+    expect(f.display).toBe(formatQuantity(f.si, f.unit));
+    if (i > 0) expect(f.start!).toBeGreaterThanOrEqual(figures[i - 1].end!);
+  });
+}
+
+function only(text: string): Figure {
+  const figures = extractFigures(text);
+  expectWellFormed(text, figures);
+  expect(figures).toHaveLength(1);
+  return figures[0];
+}
+
+describe('unit conversions (NIST SP 811 Appendix B)', () => {
+  test('pound-force: 1 lbf = 4.448 222 N (SP 811 B.8)', () => {
+    const f = only('The QZ-4 cavity gave 0.2 lbf on the stand (invented test data).');
+    expect(f).toMatchObject({ kind: 'thrust', text: '0.2 lbf', quantity: '0.2 lbf', unit: 'N' });
+    expectRelClose(f.si, 0.2 * 4.448222, SEVEN); // SP 811 B.8, pound-force → newton 4.448 222 E+00
+    expect(f.display).toBe('889.6 mN'); // 0.2 × 4.448 222 N = 0.889 644 N, to 4 digits (the display rule)
+  });
+
+  test('horsepower: 1 hp (550 ft·lbf/s) = 745.699 9 W (SP 811 B.8)', () => {
+    const f = only('A 3 hp motor turns the Helix-7 rig (invented test data).');
+    expectRelClose(f.si, 3 * 745.6999, SEVEN); // SP 811 B.8, horsepower (550 ft·lbf/s) → watt 7.456 999 E+02
+  });
+
+  test('kilowatt hour: 1 kWh = 3.6 × 10^6 J (SP 811 B.8)', () => {
+    const f = only('It stored 3 kWh overnight (invented test data).');
+    expectRelClose(f.si, 3 * 3.6e6, EXACT); // SP 811 B.8, kilowatt hour → joule 3.6 E+06 (exact)
+  });
+
+  test('British thermal unit (IT): 1 Btu = 1 055.056 J (SP 811 B.8)', () => {
+    const f = only('Each cycle released 10 Btu (invented test data).');
+    expect(f.quantity).toBe('10 BTU'); // mathjs spells it BTU
+    expectRelClose(f.si, 10 * 1055.056, SEVEN); // SP 811 B.8, British thermal unit_IT → joule 1.055 056 E+03
+  });
+
+  test('calorie: mathjs has no "cal", so the extractor uses the thermochemical calorie, 4.184 J (SP 811 B.8)', () => {
+    // mathjs 15 knows no calorie at all (so neither the thermochemical nor the IT one): parseQuantity refuses it.
+    expect(() => parseQuantity('1 cal', 'J')).toThrow(QuantityError);
+    const f = only('The cell gave off 2 cal with each pulse (invented test data).');
+    expect(f.text).toBe('2 cal');
+    expectRelClose(f.si, 2 * 4.184, EXACT); // SP 811 B.8, calorie_th → joule 4.184 E+00 (exact)
+    // and not the International Table calorie, 4.1868 J (SP 811 B.8, calorie_IT): that is 0.07 % off.
+    expect(Math.abs(f.si - 2 * 4.1868)).toBeGreaterThan(1e-3);
+    const k = only('The pellet holds 3 kcal (invented test data).');
+    expectRelClose(k.si, 3 * 4184, EXACT); // SP 811 B.8, kilocalorie_th → joule 4.184 E+03 (exact)
+  });
+
+  test('pound (avoirdupois): 1 lb = 0.453 592 37 kg (SP 811 B.8)', () => {
+    const f = only('The frame weighs 10 lb (invented test data).');
+    expectRelClose(f.si, 10 * 0.45359237, EXACT); // SP 811 B.8, pound (avoirdupois) → kilogram 4.535 924 E-01; exact by definition
+  });
+
+  test('mile per hour: 1 mi/h = 0.447 04 m/s (SP 811 B.8); "mph" is written "mi/h" for mathjs', () => {
+    expect(() => parseQuantity('1 mph', 'm / s')).toThrow(QuantityError); // mathjs knows no "mph"
+    const f = only('The cart reached 60 mph (invented test data).');
+    expect(f.quantity).toBe('60 mi/h');
+    expectRelClose(f.si, 60 * 0.44704, EXACT); // SP 811 B.8, mile per hour → meter per second 4.4704 E-01 (exact)
+  });
+
+  test('Celsius and Fahrenheit: t/°C = T/K − 273.15, t/°F = 1.8·(T/K) − 459.67 (SP 811 §4.2.1.1, B.9)', () => {
+    const c = only('The boiler runs at 300 °C (invented test data).');
+    expectRelClose(c.si, 300 + 273.15, EXACT); // SP 811 §4.2.1.1: T/K = t/°C + 273.15
+    const f = only('The vent reads 100 degrees Fahrenheit (invented test data).');
+    expectRelClose(f.si, (100 + 459.67) / 1.8, EXACT); // SP 811 B.9: T/K = (t/°F + 459.67)/1.8
+    const m = only('The cold plate sits at −40 °F (invented test data).');
+    expectRelClose(m.si, (-40 + 459.67) / 1.8, EXACT); // SP 811 B.9; −40 °F = −40 °C = 233.15 K (from memory)
+  });
+});
+
+describe('each kind, in symbols and in words (invented test data)', () => {
+  // Expected SI values: SI prefixes from the BIPM SI Brochure (9th ed.) Table 7 (m = 10^-3, µ = 10^-6,
+  // k = 10^3, M = 10^6, G = 10^9); other factors from NIST SP 811 B.8/B.9 as in the block above.
+  const LBF = 4.448222; // SP 811 B.8
+  const HP = 745.6999; // SP 811 B.8
+  const cases: [string, FigureKind, number, number][] = [
+    // [written form, kind, SI value, relative tolerance]
+    ['5 N', 'thrust', 5, EXACT],
+    ['5 newtons', 'thrust', 5, EXACT],
+    ['12 mN', 'thrust', 12e-3, EXACT],
+    ['12 millinewtons', 'thrust', 12e-3, EXACT],
+    ['40 µN', 'thrust', 40e-6, EXACT],
+    ['40 μN', 'thrust', 40e-6, EXACT], // Greek mu (U+03BC), as pasted from some editors
+    ['40 uN', 'thrust', 40e-6, EXACT],
+    ['40 micronewtons', 'thrust', 40e-6, EXACT],
+    ['3 kN', 'thrust', 3e3, EXACT],
+    ['3 Kilonewtons', 'thrust', 3e3, EXACT],
+    ['0.2 lbf', 'thrust', 0.2 * LBF, SEVEN],
+    ['0.2 pounds of thrust', 'thrust', 0.2 * LBF, SEVEN],
+    ['0.2 pound-force', 'thrust', 0.2 * LBF, SEVEN],
+    ['75 W', 'power', 75, EXACT],
+    ['75 watts', 'power', 75, EXACT],
+    ['250 mW', 'power', 0.25, EXACT],
+    ['250 milliwatts', 'power', 0.25, EXACT],
+    ['1.5 kW', 'power', 1500, EXACT],
+    ['1.5 kilowatts', 'power', 1500, EXACT],
+    ['2 MW', 'power', 2e6, EXACT],
+    ['2 Megawatts', 'power', 2e6, EXACT],
+    ['1 GW', 'power', 1e9, EXACT],
+    ['3 hp', 'power', 3 * HP, SEVEN],
+    ['3 horsepower', 'power', 3 * HP, SEVEN],
+    ['5 J', 'energy', 5, EXACT],
+    ['5 joules', 'energy', 5, EXACT],
+    ['2 kJ', 'energy', 2e3, EXACT],
+    ['4 MJ', 'energy', 4e6, EXACT],
+    ['10 Wh', 'energy', 10 * 3600, EXACT], // 1 W·h = 3600 J (1 h = 3600 s, SI Brochure Table 8)
+    ['3 kWh', 'energy', 3 * 3.6e6, EXACT], // SP 811 B.8
+    ['3 kilowatt-hours', 'energy', 3 * 3.6e6, EXACT],
+    ['3 kilowatt hours', 'energy', 3 * 3.6e6, EXACT],
+    ['1 MWh', 'energy', 3.6e9, EXACT],
+    ['100 BTU', 'energy', 100 * 1055.056, SEVEN], // SP 811 B.8 (IT)
+    ['100 Btu', 'energy', 100 * 1055.056, SEVEN],
+    ['2 calories', 'energy', 2 * 4.184, EXACT], // SP 811 B.8, calorie_th
+    ['300 K', 'temperature', 300, EXACT],
+    ['300 kelvin', 'temperature', 300, EXACT],
+    ['25 °C', 'temperature', 298.15, EXACT], // SP 811 §4.2.1.1
+    ['25 degC', 'temperature', 298.15, EXACT],
+    ['25 degrees Celsius', 'temperature', 298.15, EXACT],
+    ['77 °F', 'temperature', (77 + 459.67) / 1.8, EXACT], // SP 811 B.9
+    ['77 degrees Fahrenheit', 'temperature', (77 + 459.67) / 1.8, EXACT],
+    ['2 kg', 'mass', 2, EXACT],
+    ['2 kilograms', 'mass', 2, EXACT],
+    ['500 g', 'mass', 0.5, EXACT],
+    ['500 grams', 'mass', 0.5, EXACT],
+    ['20 mg', 'mass', 20e-6, EXACT],
+    ['3 t', 'mass', 3000, EXACT], // 1 t = 1000 kg (SI Brochure Table 8)
+    ['3 tonnes', 'mass', 3000, EXACT],
+    ['10 lbs', 'mass', 10 * 0.45359237, EXACT], // SP 811 B.8
+    ['10 pounds', 'mass', 10 * 0.45359237, EXACT],
+    ['3 m/s', 'speed', 3, EXACT],
+    ['3 metres per second', 'speed', 3, EXACT],
+    ['7.8 km/s', 'speed', 7800, EXACT],
+    ['90 km/h', 'speed', 25, EXACT], // 90 000 m / 3600 s (SI Brochure Table 8: 1 h = 3600 s)
+    ['60 miles per hour', 'speed', 60 * 0.44704, EXACT], // SP 811 B.8
+    ['2 A', 'current', 2, EXACT],
+    ['2 amps', 'current', 2, EXACT],
+    ['2 amperes', 'current', 2, EXACT],
+    ['150 mA', 'current', 0.15, EXACT],
+  ];
+
+  test.each(cases)('"%s" is a %s figure', (written, kind, si, rel) => {
+    const text = `On the bench, the Helix-7 rig showed ${written}, which is the claim.`;
+    const f = only(text);
+    expect(f.kind).toBe(kind);
+    expect(f.text).toBe(written);
+    expect(f.start).toBe(text.indexOf(written));
+    expectRelClose(f.si, si, rel);
+  });
+
+  test('a hyphen between number and unit ("a 500-watt heater") and no space ("5kW")', () => {
+    const text = 'A 500-watt heater and a 5kW pump (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.text, f.si])).toEqual([
+      ['500-watt', 500],
+      ['5kW', 5000],
+    ]);
+  });
+});
+
+describe('numbers', () => {
+  test('English thousands separators are dropped in the quantity (parseQuantity refuses them)', () => {
+    expect(() => parseQuantity('1,500 W', 'W')).toThrow(QuantityError); // the typed-quantity rule (quantity.ts)
+    const text = 'The Example Dynamics stack drew 1,500 W and stored 12,000,000 J (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.text, f.quantity, f.si])).toEqual([
+      ['1,500 W', '1500 W', 1500],
+      ['12,000,000 J', '12000000 J', 12e6],
+    ]);
+  });
+
+  test('a comma as a decimal mark ("1,5 kW") is not guessed at', () => {
+    // A guess could be off by a factor of a thousand (DEVELOPERS.md, the typed-quantity rule).
+    expect(extractFigures('The unit gives 1,5 kW (invented test data).')).toEqual([]);
+  });
+
+  test.each([
+    ['3.4 × 10^5 W', 3.4e5],
+    ['3.4×10^5 W', 3.4e5],
+    ['3.4 x 10^5 W', 3.4e5],
+    ['3.4e5 W', 3.4e5],
+    ['3.4E5 W', 3.4e5],
+    ['2.5×10⁻³ W', 2.5e-3],
+    ['2.5 × 10^-3 W', 2.5e-3],
+    ['6 × 10⁵ W', 6e5],
+  ])('scientific notation "%s"', (written, si) => {
+    const text = `The array produced ${written} at noon (invented test data).`;
+    const f = only(text);
+    expect(f.text).toBe(written);
+    expect(f.kind).toBe('power');
+    expectRelClose(f.si, si, EXACT); // the number as written (powers of ten), read by hand
+  });
+
+  test('negative temperatures with a minus sign or a hyphen', () => {
+    const text = 'It was tested from −40 °C and again at -20 °C (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => f.quantity)).toEqual(['-40 degC', '-20 degC']);
+    expectRelClose(figures[0].si, 233.15, EXACT); // SP 811 §4.2.1.1: −40 + 273.15
+  });
+
+  test('a range gives both ends, each with the unit written after the second', () => {
+    const text = 'Thrust of 10–20 mN, between 3 and 4 kW drawn, and from 5 to 7 °C (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.text, f.quantity])).toEqual([
+      ['thrust', '10', '10 mN'],
+      ['thrust', '20 mN', '20 mN'],
+      ['power', '3', '3 kW'],
+      ['power', '4 kW', '4 kW'],
+      ['temperature', '5', '5 degC'],
+      ['temperature', '7 °C', '7 degC'],
+    ]);
+    // Both ends of the power range share the role the words give ("drawn").
+    expect(figures[2].role).toBe('in');
+    expect(figures[3].role).toBe('in');
+  });
+
+  test('an uncertainty is not a figure of its own', () => {
+    const text = 'We saw 1.2 ± 0.3 mN, later 1.5 mN ± 0.2 mN (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.text, f.quantity])).toEqual([
+      ['1.2 ± 0.3 mN', '1.2 mN'],
+      ['1.5 mN', '1.5 mN'],
+    ]);
+  });
+});
+
+describe('false positives', () => {
+  test.each([
+    ['a year', 'In 2019 the team at Example Dynamics began the work.'],
+    ['a year before an initial', 'In 2019 A. N. Example and, in 2020, W. Example repeated it.'],
+    ['a figure number with a panel letter', 'As Figure 2 A shows, and Fig. 3 N too.'],
+    ['a citation', 'The result [12] was confirmed [3, 4].'],
+    ['a section number', 'Section 3.2 describes the set-up; see also Sec. 4 and Eq. 5.'],
+    ['a page range', 'See pp. 12–14 and p. 7.'],
+    ['a table number', 'Table 4 N lists the runs.'],
+    ['a chemical formula', 'CO2 and H2O were removed.'],
+    ['a power per area', 'The flux was 5 W/m² at the surface.'],
+    ['a thrust per power', 'A figure of merit of 20 mN/W is quoted.'],
+    ['a torque', 'The bolts were set to 5 N·m and 6 N-m.'],
+    ['a probe type', 'Two 2 K-type probes were fitted.'],
+    ['a per-unit figure', 'It gives 10 kW per tonne and 2 cal per pulse.'],
+    ['a percentage that is not an efficiency', 'Output rose 20% and 45 % of the runs failed.'],
+    ['a change of efficiency', 'The efficiency improved by 12% over the year.'],
+    ['an acceleration', 'It accelerated at 9.81 m/s² and 2 m/s^2.'],
+    ['a ton (short, long or refrigeration: ambiguous)', 'A 5 ton chiller.'],
+    ['a bare number', 'It ran 3 times for 45 minutes on 2 days.'],
+  ])('%s (invented test data)', (_what, text) => {
+    expect(extractFigures(text)).toEqual([]);
+  });
+
+  test('"a 2 A current" is a current, "Figure 2 A" is not', () => {
+    const text = 'Figure 2 A shows a 2 A current through the leads (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.text, f.start])).toEqual([['current', '2 A', text.indexOf('2 A current')]]);
+  });
+
+  test('"pounds" is a mass unless it is pounds of thrust', () => {
+    const text = 'The 30 pounds rig made 2 pounds of thrust (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.quantity])).toEqual([
+      ['mass', '30 lb'],
+      ['thrust', '2 lbf'],
+    ]);
+  });
+});
+
+describe('efficiency and COP', () => {
+  test.each([
+    ['an efficiency of 45%', '45%', 0.45],
+    ['an efficiency of 45 percent', '45 percent', 0.45],
+    ['it is 45 % efficient', '45 %', 0.45],
+    ['a 45%-efficient engine', '45%', 0.45],
+    ['a 45% conversion efficiency', '45%', 0.45],
+    ['the efficiency of the engine is 120 %', '120 %', 1.2],
+    ['an efficiency of 0.62', '0.62', 0.62],
+    ['efficiency η = 0.3', '0.3', 0.3],
+  ])('"%s" (invented test data)', (phrase, written, si) => {
+    const text = `The Helix-7 engine: ${phrase}.`;
+    const f = only(text);
+    expect(f).toMatchObject({ kind: 'efficiency', text: written, unit: '', role: null });
+    expect(f.start).toBe(text.lastIndexOf(written));
+    expectRelClose(f.si, si, EXACT); // a percentage is a hundredth (SI Brochure §5.4.7)
+  });
+
+  test.each([
+    ['The QZ-4 heat pump has a COP of 7.', '7', 7, 'heating'],
+    ['Its coefficient of performance 5.5 beats any heater.', '5.5', 5.5, 'heating'],
+    ['The chiller runs at COP 4.', '4', 4, 'cooling'],
+    ['In refrigeration mode the COP is 3.2.', '3.2', 3.2, 'cooling'],
+    ['A COP of 9 is claimed for the module.', '9', 9, null],
+  ])('"%s" (invented test data)', (text, written, si, role) => {
+    const f = only(text);
+    expect(f).toMatchObject({ kind: 'cop', text: written, quantity: written, role });
+    expect(f.si).toBe(si); // a pure number, as written
+  });
+
+  test('an efficiency range (40–50 %) gives two efficiencies', () => {
+    const text = 'An efficiency of 40–50% is claimed (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.text, f.si])).toEqual([
+      ['efficiency', '40', 0.4],
+      ['efficiency', '50%', 0.5],
+    ]);
+  });
+});
+
+describe('roles', () => {
+  test.each([
+    ['The module draws 2 kW from the mains.', 'in'],
+    ['It consumes 2 kW.', 'in'],
+    ['An input of 2 kW is needed.', 'in'],
+    ['It is supplied with 2 kW.', 'in'],
+    ['It runs on 2 kW of electrical input.', 'in'],
+    ['It uses 2 kW.', 'in'],
+    ['It delivers 2 kW.', 'out'],
+    ['It produces 2 kW.', 'out'],
+    ['Its output is 2 kW.', 'out'],
+    ['It generates 2 kW.', 'out'],
+    ['It yields 2 kW.', 'out'],
+    ['It returns 2 kW to the grid.', 'out'],
+    ['2 kW in, nothing else.', 'in'],
+    ['The rating is 2 kW.', null],
+  ])('power: "%s" (invented test data)', (text, role) => {
+    expect(only(text)).toMatchObject({ kind: 'power', role });
+  });
+
+  test.each([
+    ['The hot side is at 90 °C.', 'hot'],
+    ['Heat comes from a 300 °C source.', 'hot'],
+    ['The flame reaches 1200 K.', 'hot'],
+    ['Steam at 180 °C drives it.', 'hot'],
+    ['Ambient is 20 °C.', 'cold'],
+    ['The room is at 21 °C.', 'cold'],
+    ['The cold side is held at 5 °C.', 'cold'],
+    ['It rejects heat to a 15 °C sink.', 'cold'],
+    ['Outside, it is 2 °C.', 'cold'],
+    ['River water at 12 °C cools it.', 'cold'],
+    ['It was measured at 40 °C.', null],
+  ])('temperature: "%s" (invented test data)', (text, role) => {
+    expect(only(text)).toMatchObject({ kind: 'temperature', role });
+  });
+
+  test('two temperatures without words keep null roles (the planner takes the higher as hot)', () => {
+    const text = 'It works between 400 K and 300 K (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.si, f.role])).toEqual([
+      [400, null],
+      [300, null],
+    ]);
+  });
+
+  test('each figure takes the nearest words, not those of its neighbour', () => {
+    const text = 'An input of 2 kW yields 5 kW; it uses 1 kW and produces 3 kW (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => f.role)).toEqual(['in', 'out', 'in', 'out']);
+  });
+
+  test('thrust, mass, speed, current and efficiency have no role', () => {
+    const text = 'It draws 2 A, produces 3 mN, weighs 4 kg, moves at 5 m/s and produces 45% efficiency (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.role])).toEqual([
+      ['current', null],
+      ['thrust', null],
+      ['mass', null],
+      ['speed', null],
+      ['efficiency', null],
+    ]);
+  });
+});
+
+describe('mixed-unit texts (invented test data)', () => {
+  test('a thrust with its power', () => {
+    const text =
+      'Example Dynamics reports that its QZ-4 resonant cavity, drawing 1.5 kilowatts of RF power, produced a steady thrust of ' +
+      '0.2 lbf on a torsion balance (see Figure 3 and [7]). The 12 kg test article was run in 2021 at 25 °C.';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.text, f.role])).toEqual([
+      ['power', '1.5 kilowatts', 'in'],
+      ['thrust', '0.2 lbf', null],
+      ['mass', '12 kg', null],
+      ['temperature', '25 °C', null],
+    ]);
+    expect(figures[0].start).toBe(text.indexOf('1.5 kilowatts'));
+    expect(figures[1].start).toBe(text.indexOf('0.2 lbf'));
+    expectRelClose(figures[0].si, 1500, EXACT); // k = 10^3 (SI Brochure Table 7)
+    expectRelClose(figures[1].si, 0.2 * 4.448222, SEVEN); // SP 811 B.8
+  });
+
+  test('two temperatures and an efficiency', () => {
+    const text =
+      'The Helix-7 engine takes heat from steam at 180 °C and rejects it to river water at 12 °C, ' +
+      'with a claimed thermal efficiency of 62%.';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.quantity, f.role])).toEqual([
+      ['temperature', '180 degC', 'hot'],
+      ['temperature', '12 degC', 'cold'],
+      ['efficiency', '62 %', null],
+    ]);
+    expectRelClose(figures[0].si, 453.15, EXACT); // SP 811 §4.2.1.1: 180 + 273.15
+    expectRelClose(figures[1].si, 285.15, EXACT); // SP 811 §4.2.1.1: 12 + 273.15
+  });
+
+  test('energy in and energy out', () => {
+    const text =
+      'In each cycle the QZ-4 cell consumes 3.6 MJ of electrical input and delivers 1,200 Btu of heat ' +
+      'plus 2 kWh of output, as set out in Section 4.1 (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.text, f.quantity, f.role])).toEqual([
+      ['energy', '3.6 MJ', '3.6 MJ', 'in'],
+      ['energy', '1,200 Btu', '1200 BTU', 'out'],
+      ['energy', '2 kWh', '2 kWh', 'out'],
+    ]);
+    expectRelClose(figures[1].si, 1200 * 1055.056, SEVEN); // SP 811 B.8 (IT Btu)
+    expectRelClose(figures[2].si, 7.2e6, EXACT); // SP 811 B.8: 2 × 3.6 × 10^6 J
+  });
+});
+
+test('a text of the longest size the claim check takes (20,000 characters)', () => {
+  // Speed is measured by `npm run bench`, never by timed assertions (DEVELOPERS.md); this checks
+  // that a text of CLAIM_TEXT_MAX characters is read whole and every offset is right.
+  const paragraph =
+    'Run 17 of the Helix-7 rig (Example Dynamics, 2022) drew 1.5 kW from the mains and gave 0.2 lbf; ' +
+    'the hot side was at 90 °C, ambient 20 °C, efficiency of 45%, see Figure 2 A and [12]. ';
+  let text = '';
+  let copies = 0;
+  while (text.length + paragraph.length <= CLAIM_TEXT_MAX) {
+    text += paragraph;
+    copies += 1;
+  }
+  text = text.padEnd(CLAIM_TEXT_MAX, ' lorem');
+  expect(text.length).toBe(CLAIM_TEXT_MAX);
+  const figures = extractFigures(text);
+  expectWellFormed(text, figures);
+  expect(figures).toHaveLength(5 * copies); // five figures in each paragraph, read by eye
+  expect(figures.slice(0, 5).map((f) => [f.kind, f.role])).toEqual([
+    ['power', 'in'],
+    ['thrust', null],
+    ['temperature', 'hot'],
+    ['temperature', 'cold'],
+    ['efficiency', null],
+  ]);
+  expect(figures[figures.length - 1].id).toBe(`f${5 * copies}`);
+  expect(figures[5].start).toBe(paragraph.length + paragraph.indexOf('1.5 kW'));
+});
+
+test('any text: no exception, and every figure well formed (property test, fast-check)', () => {
+  // Pieces that look like figures, glued with arbitrary characters, so that the odd cases come up.
+  const piece = fc.constantFrom('1,500', '−40', '3.4 × 10^5', '2.5×10⁻³', '0.2', ' ', '-', '–', '±', ' to ', 'kW', 'mN', '°C', 'A', '%', 'efficiency of ', 'COP ', 'Figure ', 'pounds of thrust', 'per', '/', '.', ',', '\n');
+  fc.assert(
+    fc.property(fc.array(fc.oneof(piece, fc.string({ maxLength: 4 })), { maxLength: 30 }), (parts) => {
+      const text = parts.join('');
+      expectWellFormed(text, extractFigures(text));
+    }),
+    { numRuns: 300 },
+  );
+});
+
+describe('readFigure', () => {
+  test('a typed figure: parsed for its kind, text is the quantity, no place in the text', () => {
+    const f = readFigure({ kind: 'thrust', quantity: '0.25 lbf' }, 'f3');
+    expect(f).toMatchObject({ id: 'f3', kind: 'thrust', quantity: '0.25 lbf', text: '0.25 lbf', start: null, end: null, unit: 'N', role: null });
+    expectRelClose(f.si, 0.25 * 4.448222, SEVEN); // SP 811 B.8
+    expect(f.display).toBe(formatQuantity(f.si, 'N'));
+  });
+
+  test('a fixed figure keeps its text, place and role', () => {
+    const f = readFigure({ kind: 'power', quantity: '1.6 kW', role: 'in', text: '1.5 kW', start: 10, end: 16 }, 'f1');
+    expect(f).toMatchObject({ text: '1.5 kW', start: 10, end: 16, role: 'in', si: 1600 });
+  });
+
+  test('efficiency and COP are pure numbers; a percentage is a hundredth', () => {
+    expect(readFigure({ kind: 'efficiency', quantity: '45 %' }, 'f1').si).toBeCloseTo(0.45, 15); // SI Brochure §5.4.7
+    expect(readFigure({ kind: 'cop', quantity: '3.2', role: 'cooling' }, 'f2')).toMatchObject({ si: 3.2, unit: '', role: 'cooling' });
+  });
+
+  test.each([
+    ['1,200 W', 'power'], // thousands separator: refused by parseQuantity, with a hint
+    ['fast', 'power'], // not a number
+    ['3 kg', 'power'], // a mass where a power is needed
+    ['2 mph', 'speed'], // mathjs knows no "mph" (write "mi/h")
+  ] as [string, FigureKind][])('"%s" for a %s throws QuantityError (the server answers 400)', (quantity, kind) => {
+    expect(() => readFigure({ kind, quantity }, 'f1')).toThrow(QuantityError);
+  });
+
+  test('an unknown kind throws QuantityError too', () => {
+    expect(() => readFigure({ kind: 'voltage' as FigureKind, quantity: '3 V' }, 'f1')).toThrow(QuantityError);
+  });
+});

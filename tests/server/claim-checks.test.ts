@@ -1,0 +1,216 @@
+/**
+ * POST /api/claim-checks and saved claim checks (supertest, real MariaDB, the starter library):
+ * the four parts of the answer, the figures sent back after a fix, the limits and the 4xx errors,
+ * and saving, sharing by link and deleting by the owner only. Claim texts are invented test data.
+ */
+import request from 'supertest';
+import { runCheck } from '../../shared/checks/run';
+import type { ClaimCheckResult } from '../../shared/claims/types';
+import { SavedClaimCheck } from '../../server/models';
+import { demo, startTestApp, type TestApp } from '../support/app';
+
+jest.setTimeout(120_000);
+
+let h: TestApp;
+beforeAll(async () => {
+  h = await startTestApp({ starterEntries: true, searchRefreshMs: 0 });
+});
+afterAll(() => h?.close());
+
+// Invented test data.
+const CAVITY =
+  'Breakthrough from Pellworth Aerospace Labs: our sealed copper frustum, fed with microwaves at resonance, ' +
+  'produced 0.2 lbf of thrust from 1.5 kW of input power on a torsion balance, with no propellant leaving the cavity.';
+const ENGINE =
+  'The Ostrander ambient engine runs between a hot side at 90 °C and cold river water at 20 °C, ' +
+  'and converts that heat to shaft work with an efficiency of 45 %, far above any engine of its size.';
+
+const run = (body: object) => request(h.app).post('/api/claim-checks').send(body);
+const kitOutputs = (name: Parameters<typeof runCheck>[0], inputs: Record<string, string>) =>
+  runCheck(name, inputs).outputs.map(({ name: n, label, si, unit, display }) => ({ name: n, label, si, unit, display }));
+
+describe('POST /api/claim-checks', () => {
+  let res: request.Response;
+  let body: ClaimCheckResult;
+  beforeAll(async () => {
+    // No CSRF token: a pure computation, like the check kit.
+    res = await run({ text: CAVITY });
+    body = res.body;
+  });
+
+  it('matches the entry, with the words that matched and the permanent URL of its version', () => {
+    expect(res.status).toBe(200);
+    const top = body.matches[0];
+    expect(top).toMatchObject({ slug: 'resonant-cavity-thruster', version: 1 });
+    expect(top.url).toMatch(/^http:\/\/127\.0\.0\.1(:\d+)?\/entries\/resonant-cavity-thruster\/v\/1$/);
+    expect(top.score).toBeGreaterThan(0);
+    expect(top.words.length).toBeGreaterThan(0);
+    for (const w of top.words) expect(CAVITY).toContain(w);
+  });
+
+  it('finds the figures with their units and their places in the text', () => {
+    const thrust = body.figures.find((f) => f.kind === 'thrust')!;
+    const power = body.figures.find((f) => f.kind === 'power')!;
+    expect(CAVITY.slice(thrust.start!, thrust.end!)).toBe(thrust.text);
+    expect(CAVITY.slice(power.start!, power.end!)).toBe(power.text);
+    // 1 lbf = 4.448 222 N (NIST SP 811, Appendix B.8).
+    expect(thrust.si).toBeCloseTo(0.2 * 4.4482216152605, 9);
+    expect(power.si).toBe(1500);
+  });
+
+  it('runs the checks that apply, with the results of the check kit', () => {
+    expect(body.checks.map((c) => c.check)).toEqual(expect.arrayContaining(['photon-bound', 'break-even-speed']));
+    for (const c of body.checks) {
+      expect(c.outputs).toEqual(kitOutputs(c.check, c.inputs));
+      expect(c.verdict).toEqual(runCheck(c.check, c.inputs).verdict);
+    }
+    const photon = body.checks.find((c) => c.check === 'photon-bound')!;
+    // P/c with c = 299 792 458 m/s (SI Brochure §2.2).
+    expect(photon.outputs.find((o) => o.name === 'F_bound')!.si).toBeCloseTo(1500 / 299_792_458, 15);
+  });
+
+  it('writes the paragraph: the entry with its URL and version, the result, numbered APA references', () => {
+    const p = body.paragraph;
+    expect(p.style).toBe('apa');
+    expect(p.body).toContain(body.matches[0].url);
+    expect(p.body).toContain('version 1');
+    expect(p.body).toMatch(/times the photon-rocket bound/);
+    expect(p.references[0]).toMatchObject({ n: 1, counterweight: true, id: 'resonant-cavity-thruster-v1' });
+    expect(p.references[0].text).toMatch(/\(\d{4}\)\. Thrust from microwaves or light trapped in a closed cavity\. In Counterweight \(Version 1\)\. http/);
+    expect(p.text).toContain(`\nReferences\n1. ${p.references[0].text}`);
+  });
+
+  it.each([
+    ['vancouver', /\[cited \d{4} [A-Z][a-z]{2} \d{1,2}\]\. Available from: http/],
+    ['harvard', /Available at: http\S+ \(Accessed: .*\d{4}\)\./],
+  ])('formats the references in %s', async (style, rule) => {
+    const r = await run({ text: CAVITY, style });
+    expect(r.status).toBe(200);
+    expect(r.body.paragraph.style).toBe(style);
+    expect(r.body.paragraph.references[0].text).toMatch(rule);
+    // Sources of the entry are listed too, formatted by citation-js like the entry's own list.
+    expect(r.body.paragraph.references.length).toBeGreaterThan(1);
+  });
+
+  it('runs Carnot on temperatures and an efficiency', async () => {
+    const r = await run({ text: ENGINE });
+    expect(r.status).toBe(200);
+    expect(r.body.matches[0].slug).toBe('ambient-heat-engine');
+    const carnot = r.body.checks.find((c: { check: string }) => c.check === 'carnot');
+    expect(carnot).toBeDefined();
+    // Carnot efficiency 1 − Tc/Th, T/K = t/°C + 273.15 (NIST SP 811 §4.2.1.1).
+    expect(carnot.outputs.find((o: { name: string }) => o.name === 'eta_max').si).toBeCloseTo(1 - 293.15 / 363.15, 12);
+    expect(carnot.verdict.holds).toBe(false);
+  });
+
+  it('re-runs on figures the reader fixed, without reading the text again', async () => {
+    const figures = body.figures.map((f) => (f.kind === 'thrust' ? { kind: f.kind, quantity: '0.2 mN', role: f.role, text: f.text, start: f.start, end: f.end } : { kind: f.kind, quantity: f.quantity, role: f.role }));
+    const r = await run({ text: CAVITY, figures });
+    expect(r.status).toBe(200);
+    expect(r.body.figures.map((f: { quantity: string }) => f.quantity)).toEqual(figures.map((f) => f.quantity));
+    const photon = r.body.checks.find((c: { check: string }) => c.check === 'photon-bound');
+    expect(photon.inputs.F_claimed).toBe('0.2 mN');
+    expect(photon.outputs).toEqual(kitOutputs('photon-bound', photon.inputs));
+    // The thrust typed by the reader keeps its place in the text.
+    expect(r.body.figures.find((f: { kind: string }) => f.kind === 'thrust').start).toBe(body.figures.find((f) => f.kind === 'thrust')!.start);
+  });
+
+  it('takes 20,000 characters and answers 413 for more', async () => {
+    const filler = ' The balance was read every second.';
+    const long = (CAVITY + filler.repeat(1000)).slice(0, 20_000);
+    const ok = await run({ text: long });
+    expect(ok.status).toBe(200);
+    expect(ok.body.textLength).toBe(20_000);
+    const over = await run({ text: `${long}x` });
+    expect(over.status).toBe(413);
+    expect(over.body.error).toMatchObject({ code: 'text_too_long', fields: { 'body.text': expect.any(String) } });
+  });
+
+  it.each([
+    [{}, 'body.text'],
+    [{ text: '   ' }, 'body.text'],
+    [{ text: CAVITY, style: 'chicago' }, 'body.style'],
+    [{ text: CAVITY, figures: [{ kind: 'thrust', quantity: '0.2 furlongs' }] }, 'body.figures.0.quantity'],
+    [{ text: CAVITY, figures: [{ kind: 'thrust', quantity: '1.5 kW' }] }, 'body.figures.0.quantity'],
+    [{ text: CAVITY, figures: [{ kind: 'torque', quantity: '1 N m' }] }, 'body.figures.0.kind'],
+    [{ text: CAVITY, figures: Array.from({ length: 51 }, () => ({ kind: 'power', quantity: '1 W' })) }, 'body.figures'],
+    [{ text: CAVITY, extra: 1 }, 'body'],
+  ])('answers 400 naming the field for %j', async (sent, field) => {
+    const r = await run(sent);
+    expect(r.status).toBe(400);
+    expect(Object.keys(r.body.error.fields ?? {}).some((k) => k === field || k.startsWith(`${field}.`) || (field === 'body' && k.startsWith('body')))).toBe(true);
+  });
+
+  it('refuses a request from another site', async () => {
+    const r = await request(h.app).post('/api/claim-checks').set('Origin', 'https://elsewhere.example.net').send({ text: CAVITY });
+    expect(r.status).toBe(403);
+    expect(r.body.error.code).toBe('csrf_failed');
+  });
+});
+
+describe('saved claim checks', () => {
+  it('needs an account to save', async () => {
+    const c = await h.client();
+    const r = await c.post('/api/claim-checks/saved', { text: CAVITY });
+    expect(r.status).toBe(401);
+  });
+
+  it('saves, shares by an unguessable link, lists, and lets only the owner delete', async () => {
+    const owner = await h.signedIn(demo.contributor.email);
+    const saved = await owner.post('/api/claim-checks/saved', { text: CAVITY, style: 'harvard' });
+    expect(saved.status).toBe(201);
+    const { token, url, result } = saved.body.saved;
+    expect(token).toMatch(/^[A-Za-z0-9_-]{32,}$/); // 24 random bytes, base64url
+    expect(url).toMatch(new RegExp(`/check/${token}$`));
+    expect(result.paragraph.style).toBe('harvard');
+    expect(saved.body.saved.mine).toBe(true);
+    expect(await SavedClaimCheck.count({ where: { token } })).toBe(1);
+
+    const again = await owner.post('/api/claim-checks/saved', { text: CAVITY });
+    expect(again.body.saved.token).not.toBe(token);
+
+    // Anyone with the link reads it; it is not theirs.
+    const anon = await request(h.app).get(`/api/claim-checks/saved/${token}`);
+    expect(anon.status).toBe(200);
+    expect(anon.body.saved).toMatchObject({ token, text: CAVITY, style: 'harvard', mine: false });
+    expect(anon.body.saved.result.matches[0].slug).toBe('resonant-cavity-thruster');
+    expect(anon.headers['cache-control']).toMatch(/no-store/);
+
+    const mine = await owner.get('/api/claim-checks/saved');
+    expect(mine.body.saved.map((s: { token: string }) => s.token)).toEqual([again.body.saved.token, token]);
+    expect(mine.body.saved[0]).toMatchObject({ preview: CAVITY.slice(0, 120), topMatch: 'Thrust from microwaves or light trapped in a closed cavity' });
+
+    const other = await h.signedIn(demo.editor.email);
+    expect((await other.get('/api/claim-checks/saved')).body.saved).toEqual([]);
+    const refused = await other.send('delete', `/api/claim-checks/saved/${token}`);
+    expect(refused.status).toBe(403);
+    expect(refused.body.error.code).toBe('not_owner');
+
+    const deleted = await owner.send('delete', `/api/claim-checks/saved/${token}`);
+    expect(deleted.status).toBe(204);
+    expect((await request(h.app).get(`/api/claim-checks/saved/${token}`)).status).toBe(404);
+    expect((await owner.send('delete', `/api/claim-checks/saved/${token}`)).status).toBe(404);
+  });
+
+  it('answers 404 for an unknown token and 400 for a malformed one', async () => {
+    expect((await request(h.app).get(`/api/claim-checks/saved/${'B'.repeat(32)}`)).status).toBe(404);
+    const bad = await request(h.app).get('/api/claim-checks/saved/not!a!token');
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['params.token']);
+  });
+
+  it('checks the saved body like a run (413 over the limit)', async () => {
+    const owner = await h.signedIn(demo.contributor.email);
+    const r = await owner.post('/api/claim-checks/saved', { text: 'x'.repeat(20_001) });
+    expect(r.status).toBe(413);
+    expect(await SavedClaimCheck.count({ where: { text: 'x'.repeat(20_001) } })).toBe(0);
+  });
+});
+
+it('cites with the formatter the entry pages use', async () => {
+  const r = await run({ text: CAVITY, style: 'vancouver' });
+  const cite = await request(h.app).get('/api/entries/resonant-cavity-thruster/cite?format=vancouver&version=1');
+  // Each supertest request listens on its own port: compare without the origin.
+  const local = (t: string) => t.replace(/http:\/\/127\.0\.0\.1:\d+/g, 'ORIGIN');
+  expect(local(r.body.paragraph.references[0].text)).toBe(local(cite.body.text));
+});
