@@ -27,6 +27,8 @@ const esmOnly = [
   'space-separated-tokens', 'comma-separated-tokens', 'zwitch', 'html-void-elements', 'ccount', 'markdown-table',
   'longest-streak', 'devlop', 'trim-lines', 'web-namespaces', 'stringify-entities', 'parse5', 'entities',
   '@ungap/structured-clone', 'escape-string-regexp',
+  // file-type (server/uploads/attachments.ts) and its dependencies, ESM only.
+  'file-type', 'strtok3', 'token-types', 'uint8array-extras', '@tokenizer/.*', '@borewit/.*',
 ];
 
 const nodeProject = (name, testMatch, extra = {}) => ({

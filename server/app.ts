@@ -31,6 +31,9 @@ import { healthRoutes } from './routes/health';
 import { searchRoutes } from './routes/search';
 import { claimCheckRoutes } from './routes/claim-checks';
 import { ClaimChecks } from './services/claim-checks';
+import { submissionRoutes } from './routes/submissions';
+import { Submissions } from './services/submissions';
+import { S3Store, storageFromEnv, type ObjectStore } from './storage';
 import { taxonomyRoutes } from './routes/taxonomy';
 import { worksheetRoutes } from './routes/worksheets';
 import { Accounts } from './services/accounts';
@@ -70,6 +73,10 @@ export interface AppOptions {
    * (ms), so that entries published through another app server are found; 0 never. Default 5000.
    */
   searchRefreshMs?: number;
+  /** Where attachments are kept (server/storage); default from the environment (STORAGE, …): .data/uploads. */
+  store?: ObjectStore;
+  /** How long new submissions are gathered before the moderators' digest mail goes out (ms). Default 60 000. */
+  submissionDigestMs?: number;
 }
 
 /** What createApp leaves in app.locals for its owner. */
@@ -147,6 +154,8 @@ export function createApp(opts: AppOptions): express.Express {
     close: async () => {
       sessions.store.stopExpiringSessions();
       await search.stop();
+      submissions.stop();
+      if (!opts.store && store instanceof S3Store) store.close();
       await locals.settle();
     },
   };
@@ -160,6 +169,20 @@ export function createApp(opts: AppOptions): express.Express {
     later,
     changed: (slug) => search.update(slug).catch((err) => logger.error({ err, slug }, 'search index update failed')),
   });
+
+  const store = opts.store ?? storageFromEnv();
+  const submissions = new Submissions({
+    sequelize: opts.sequelize,
+    store,
+    mailer,
+    entries,
+    later,
+    digestMs: opts.submissionDigestMs ?? 60_000,
+    logger,
+  });
+  if (opts.publicUrl) submissions.origin = opts.publicUrl;
+  // Items that arrived before a restart and were never listed in a digest.
+  submissions.scheduleDigest();
 
   const api = express.Router();
   api.use(express.json({ limit: opts.jsonLimit ?? '256kb' }));
@@ -178,6 +201,7 @@ export function createApp(opts: AppOptions): express.Express {
   api.use(deskRoutes(allow, entries));
   api.use(citationRoutes(allow));
   api.use(searchRoutes(allow, search));
+  api.use(submissionRoutes({ allow, submissions, store, origin, limits }));
   api.use(claimCheckRoutes(allow, new ClaimChecks({ sequelize: opts.sequelize, index: search, entries }), origin));
   api.use(apiNotFound);
   app.use('/api', api);

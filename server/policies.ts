@@ -26,6 +26,8 @@ const PUBLIC: Policy = { who: 'public' };
 const COMPUTE: Policy = { who: 'public', csrf: false };
 const SIGNED_IN: Policy = { who: 'signed-in' };
 const ADMIN: Policy = { who: ['admin'] };
+/** Moderators decide submissions; admins may do the same. */
+const MODERATOR: Policy = { who: ['moderator', 'admin'] };
 /** Editors write and vet entries; admins may do the same. */
 const EDITOR: Policy = { who: ['editor', 'admin'] };
 
@@ -48,12 +50,16 @@ export const policies = {
   users: { list: ADMIN, setRole: ADMIN },
   audit: { list: ADMIN },
   outbox: { list: ADMIN },
-  entries: { list: PUBLIC, read: PUBLIC, versions: PUBLIC, cite: PUBLIC, startDraft: EDITOR, retire: EDITOR },
+  entries: { list: PUBLIC, read: PUBLIC, versions: PUBLIC, cite: PUBLIC, sightings: PUBLIC, startDraft: EDITOR, retire: EDITOR },
   drafts: { create: EDITOR, read: EDITOR, update: EDITOR, submit: EDITOR, approve: EDITOR, sendBack: EDITOR },
-  desk: { read: EDITOR },
+  desk: { read: EDITOR, corrections: EDITOR },
   citations: { parse: EDITOR },
   search: { query: PUBLIC },
   /** The claim check; a saved one is read by anyone holding its link and deleted by its owner only (checked in the service). */
+  /** Sightings and corrections; who sees one (submitter, moderators, the editors it was passed to) is checked in the service. */
+  submissions: { sighting: SIGNED_IN, correction: SIGNED_IN, mine: SIGNED_IN, read: SIGNED_IN, answer: SIGNED_IN },
+  attachments: { read: SIGNED_IN },
+  queue: { list: MODERATOR, editors: MODERATOR, claim: MODERATOR, release: MODERATOR, decide: MODERATOR },
   claimChecks: { run: COMPUTE, save: SIGNED_IN, listMine: SIGNED_IN, read: PUBLIC, delete: SIGNED_IN },
 } as const satisfies Record<string, Record<string, Policy>>;
 

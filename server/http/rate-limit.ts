@@ -13,7 +13,7 @@ export interface Limit {
   windowMs: number;
 }
 
-export const LIMIT_NAMES = ['signIn', 'signUp', 'resend', 'forgot', 'reset'] as const;
+export const LIMIT_NAMES = ['signIn', 'signUp', 'resend', 'forgot', 'reset', 'submitAccount', 'submitAddress'] as const;
 export type LimitName = (typeof LIMIT_NAMES)[number];
 export type RateLimits = Record<LimitName, Limit>;
 
@@ -26,6 +26,9 @@ export const DEFAULT_RATE_LIMITS: RateLimits = {
   resend: { limit: 5, windowMs: minutes(60) },
   forgot: { limit: 5, windowMs: minutes(60) },
   reset: { limit: 10, windowMs: minutes(60) },
+  // Sightings and corrections (issue 7): per account, and per address (several accounts behind one).
+  submitAccount: { limit: 20, windowMs: minutes(60) },
+  submitAddress: { limit: 60, windowMs: minutes(60) },
 };
 
 const what: Record<LimitName, string> = {
@@ -34,6 +37,8 @@ const what: Record<LimitName, string> = {
   resend: 'requests for a new confirmation e-mail',
   forgot: 'requests for a password-reset e-mail',
   reset: 'password-reset attempts',
+  submitAccount: 'submissions',
+  submitAddress: 'submissions',
 };
 
 /** "in 40 seconds", "in about 14 minutes", "in about 2 hours" */
@@ -56,12 +61,14 @@ export function rateLimiters(limits: Partial<RateLimits> = {}): Record<LimitName
       legacyHeaders: false,
       identifier: name,
       skipSuccessfulRequests: name === 'signIn',
+      // Per account: the route runs after allow(), so a user is signed in.
+      ...(name === 'submitAccount' ? { keyGenerator: (req: Request) => `user:${(req.user as { id?: number } | undefined)?.id ?? 'none'}` } : {}),
       handler: (req: Request, res) => {
         const reset = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
         const wait = reset ? reset.getTime() - Date.now() : windowMs;
         res
           .status(429)
-          .json(body('rate_limited', `Too many ${what[name]} from your network. Try again ${retryIn(wait)}.`));
+          .json(body('rate_limited', `Too many ${what[name]} ${name === 'submitAccount' ? 'from this account' : 'from your network'}. Try again ${retryIn(wait)}.`));
       },
     });
   }

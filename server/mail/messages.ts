@@ -87,3 +87,73 @@ export function draftSentBackMessage(to: string, displayName: string, reviewerNa
     [],
   );
 }
+
+// ---------------------------------------------------------------------------------------------
+// Submissions (issue 7)
+
+const kindWord = (kind: 'sighting' | 'correction') => (kind === 'sighting' ? 'sighting' : 'correction');
+
+/** To the submitter: a moderator decided their submission. */
+export function submissionDecidedMessage(
+  to: string,
+  displayName: string,
+  s: { kind: 'sighting' | 'correction'; title: string },
+  decision: 'accept' | 'draft' | 'ask' | 'reject',
+  note: string | null,
+  entries: string[],
+  link: string,
+): OutgoingMessage {
+  const what = kindWord(s.kind);
+  const said: Record<typeof decision, { subject: string; lines: string[] }> = {
+    accept: {
+      subject: `Accepted: your ${what} “${s.title}”`,
+      lines:
+        s.kind === 'sighting'
+          ? [`Your ${what} “${s.title}” was accepted. It now shows as seen in the wild on: ${entries.join('; ')}.`]
+          : [`Your ${what} “${s.title}” was accepted and passed to the editors of the entry, who will revise it.`],
+    },
+    draft: {
+      subject: `A new entry will be written from your ${what} “${s.title}”`,
+      lines: [`Your ${what} “${s.title}” describes a device the library does not cover yet. It was turned into a draft entry for an editor to write; the sighting is attached to it.`],
+    },
+    ask: {
+      subject: `A question about your ${what} “${s.title}”`,
+      lines: [`A moderator needs more before deciding your ${what} “${s.title}”:`, note ?? '', 'Answer on the page of your submission; it goes back to the queue when you do.'],
+    },
+    reject: {
+      subject: `Not accepted: your ${what} “${s.title}”`,
+      lines: [`Your ${what} “${s.title}” was not accepted. The moderator's reason:`, note ?? ''],
+    },
+  };
+  const m = said[decision];
+  return render(to, m.subject, `Hello ${displayName},`, m.lines, { href: link, label: 'Open your submission' }, [
+    'You receive this because you sent this submission to Counterweight.',
+  ]);
+}
+
+/** To each moderator: new submissions arrived (one message for all that arrived since the last). */
+export function queueDigestMessage(to: string, displayName: string, items: { kind: 'sighting' | 'correction'; title: string }[], link: string): OutgoingMessage {
+  const n = items.length;
+  const shown = items.slice(0, 20).map((i) => `• ${i.kind === 'sighting' ? 'Sighting' : 'Correction'}: ${i.title}`);
+  if (n > shown.length) shown.push(`… and ${n - shown.length} more.`);
+  return render(
+    to,
+    n === 1 ? `New in the queue: ${items[0].title}` : `${n} new submissions in the queue`,
+    `Hello ${displayName},`,
+    [n === 1 ? 'A new submission waits for a decision:' : `${n} new submissions wait for a decision:`, ...shown],
+    { href: link, label: 'Open the queue' },
+    ['You receive this because you are a moderator on Counterweight. New items are gathered into one message at a time.'],
+  );
+}
+
+/** To an editor of the entry: a reader reported an error in it and a moderator passed it on. */
+export function correctionForwardedMessage(to: string, displayName: string, entryTitle: string, version: number, section: string, link: string): OutgoingMessage {
+  return render(
+    to,
+    `A correction to “${entryTitle}”`,
+    `Hello ${displayName},`,
+    [`A reader reported an error in version ${version} of “${entryTitle}” (section: ${section}), and a moderator has passed it to the entry's editors.`],
+    { href: link, label: 'Read the correction' },
+    ['You receive this because you wrote or reviewed a version of this entry. It is listed on your Desk too.'],
+  );
+}

@@ -2,6 +2,7 @@ import type { Sequelize } from 'sequelize';
 import { initAccounts } from './accounts';
 import { initAudit } from './audit';
 import { initClaimChecks } from './claim-checks';
+import { initSubmissions } from './submissions';
 import { initEntries } from './entries';
 import { initOutbox } from './outbox';
 import { initTaxonomy } from './taxonomy';
@@ -10,6 +11,7 @@ export { ConservationLaw, MechanismClass } from './taxonomy';
 export { EmailToken, Session, User, TOKEN_PURPOSES, type TokenPurpose } from './accounts';
 export { AuditEvent, audit } from './audit';
 export { SavedClaimCheck } from './claim-checks';
+export { Attachment, Submission, SubmissionEntry, SubmissionEvent } from './submissions';
 export { OutboxMessage } from './outbox';
 export { Entry, EntryLaw, EntryVersion, PublishedVersionImmutable, ENTRY_STATUSES, VERSION_STATES, type EntryStatus, type VersionState } from './entries';
 
@@ -21,4 +23,5 @@ export function initModels(sequelize: Sequelize): void {
   initOutbox(sequelize);
   initEntries(sequelize);
   initClaimChecks(sequelize);
+  initSubmissions(sequelize);
 }

@@ -333,14 +333,15 @@ export class Entries {
     return this.draftDto(v);
   }
 
-  /** A new entry with its first draft. */
-  async createDraft(actor: User, slug: string, content: EntryContent): Promise<DraftDto> {
+  /** A new entry with its first draft (inside the caller's transaction when one is given). */
+  async createDraft(actor: User, slug: string, content: EntryContent, opts: { transaction?: Transaction } = {}): Promise<DraftDto> {
     const taken = () =>
       new HttpError(409, 'slug_taken', `The permalink “${slug}” belongs to another entry. Choose another.`, { 'body.slug': 'taken by another entry' });
     await this.checkTaxonomy(content, 'body.content');
-    if (await Entry.findOne({ where: { slug }, attributes: ['id'] })) throw taken();
+    if (await Entry.findOne({ where: { slug }, attributes: ['id'], transaction: opts.transaction })) throw taken();
+    const within = <T>(work: (t: Transaction) => Promise<T>) => (opts.transaction ? work(opts.transaction) : this.deps.sequelize.transaction(work));
     try {
-      return await this.deps.sequelize.transaction(async (transaction) => {
+      return await within(async (transaction) => {
         const cls = await MechanismClass.findOne({ where: { slug: content.mechanismClass }, attributes: ['id'], transaction });
         const entry = await Entry.create(
           { slug, title: content.title, status: 'draft', mechanismClassId: cls!.id, currentVersionId: null, lastPublishedAt: null, retiredReason: null, successorId: null },

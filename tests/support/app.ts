@@ -2,6 +2,8 @@
  * The real app on a test database with its own fake SMTP server, and a small client that keeps the
  * session cookie and sends the CSRF token the way the web app does.
  */
+import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import { createApp, type AppLocals, type AppOptions } from '../../server/app';
@@ -10,6 +12,7 @@ import { seedIfEmpty } from '../../server/db/seed';
 import { readDemoAccounts, seedDemoAccounts } from '../../server/db/seed-accounts';
 import { importEntriesIfEmpty } from '../../server/db/seed-entries';
 import { LIMIT_NAMES, type RateLimits } from '../../server/http/rate-limit';
+import { LocalStore, type ObjectStore } from '../../server/storage';
 import { createTestDatabase, type TestDatabase } from './db';
 import { startTestMail, type TestMail } from './mail';
 
@@ -23,6 +26,8 @@ export const demo = (() => {
     password: file.password,
     admin: byRole('admin'),
     editor: byRole('editor'),
+    /** The second demo editor (each entry needs an author and a different reviewer). */
+    editor2: file.accounts.filter((a) => a.role === 'editor')[1],
     moderator: byRole('moderator'),
     contributor: byRole('contributor'),
   };
@@ -35,6 +40,8 @@ export interface TestApp {
   t: TestDatabase;
   mail: TestMail;
   app: ReturnType<typeof createApp>;
+  /** Where this app keeps attachments. */
+  store: ObjectStore;
   /** A client with a fresh session (and its CSRF token). */
   client(): Promise<Client>;
   /** A client signed in with these credentials (expects 200). */
@@ -58,7 +65,10 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
   if (taxonomy || starterEntries) await seedIfEmpty(t.sequelize, CONTENT_DIR);
   if (demoAccounts) await seedDemoAccounts(t.sequelize, CONTENT_DIR, 'development');
   if (starterEntries) await importEntriesIfEmpty(t.sequelize, CONTENT_DIR);
-  const app = createApp({ sequelize: t.sequelize, version: 'test', env: 'test', mailer: mail.mailer, rateLimits: HIGH_LIMITS, ...appOpts });
+  // Attachments in a throwaway directory (a test may pass its own store, e.g. S3 on s3rver).
+  const uploads = appOpts.store ? null : fs.mkdtempSync(path.join(os.tmpdir(), 'cw-uploads-'));
+  const store = appOpts.store ?? new LocalStore(uploads!);
+  const app = createApp({ sequelize: t.sequelize, version: 'test', env: 'test', mailer: mail.mailer, rateLimits: HIGH_LIMITS, ...appOpts, store });
   const client = () => Client.start(app);
   return {
     t,
@@ -71,10 +81,12 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
       if (res.status !== 200) throw new Error(`sign-in as ${email} answered ${res.status}: ${JSON.stringify(res.body)}`);
       return c;
     },
+    store,
     async close() {
       await (app.locals as unknown as AppLocals).close();
       await mail.stop();
       await t.drop();
+      if (uploads) fs.rmSync(uploads, { recursive: true, force: true });
     },
   };
 }

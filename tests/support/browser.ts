@@ -5,6 +5,7 @@
  */
 import fs from 'node:fs';
 import http from 'node:http';
+import os from 'node:os';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { createApp, type AppLocals } from '../../server/app';
@@ -12,6 +13,7 @@ import { ROOT } from '../../server/config';
 import { seedIfEmpty } from '../../server/db/seed';
 import { seedDemoAccounts } from '../../server/db/seed-accounts';
 import { importEntriesIfEmpty } from '../../server/db/seed-entries';
+import { LocalStore } from '../../server/storage';
 import { HIGH_LIMITS } from './app';
 import { createTestDatabase, type TestDatabase } from './db';
 import { startTestMail, type TestMail } from './mail';
@@ -39,6 +41,7 @@ export async function startHarness(): Promise<Harness> {
   await seedDemoAccounts(t.sequelize, path.join(ROOT, 'content'), 'development');
   await importEntriesIfEmpty(t.sequelize, path.join(ROOT, 'content'));
   const mail = await startTestMail();
+  const uploads = fs.mkdtempSync(path.join(os.tmpdir(), 'cw-uploads-'));
   // Listen first, so that the e-mailed links can name the server's real address.
   const server = http.createServer();
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
@@ -52,6 +55,8 @@ export async function startHarness(): Promise<Harness> {
     mailer: mail.mailer,
     rateLimits: HIGH_LIMITS,
     sessionCleanupMs: 0,
+    store: new LocalStore(uploads),
+    submissionDigestMs: 300,
   });
   server.on('request', app);
   const browser = await chromium.launch({
@@ -84,6 +89,7 @@ export async function startHarness(): Promise<Harness> {
       await (app.locals as unknown as AppLocals).close();
       await mail.stop();
       await t.drop();
+      fs.rmSync(uploads, { recursive: true, force: true });
     },
   };
 }

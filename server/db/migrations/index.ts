@@ -3,10 +3,12 @@ import * as m0001 from './0001-taxonomy';
 import * as m0002 from './0002-accounts';
 import * as m0003 from './0003-entries';
 import * as m0004 from './0004-claim-checks';
+import * as m0005 from './0005-submissions';
 
 export const migrations = [
   { name: '0001-taxonomy', ...m0001 },
   { name: '0002-accounts', ...m0002 },
   { name: '0003-entries', ...m0003 },
   { name: '0004-claim-checks', ...m0004 },
+  { name: '0005-submissions', ...m0005 },
 ];
