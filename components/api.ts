@@ -152,20 +152,22 @@ type SendMethod = 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 /**
  * Sends a state-changing request with a JSON body and the session's CSRF token, e.g.
- * `apiSend<UserResponse>('POST', '/api/auth/sign-in', { email, password })`. A 403 `csrf_failed`
+ * `apiSend<UserResponse>('POST', '/api/auth/sign-in', { email, password })`, or with a FormData body (files). A 403 `csrf_failed`
  * (the session changed under us) fetches the token again and tries once more. A 204 resolves to
  * undefined. Field errors come in the ApiError's `fields`, keyed `body.<field>`.
  */
 export async function apiSend<T = void>(method: SendMethod, path: string, body?: unknown): Promise<T> {
+  // A FormData body (files) goes as it is: the browser sets the multipart boundary itself.
+  const form = typeof FormData !== 'undefined' && body instanceof FormData;
   const send = (token: string) =>
     call(path, {
       method,
       headers: {
         Accept: 'application/json',
         'X-CSRF-Token': token,
-        ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
+        ...(body === undefined || form ? {} : { 'Content-Type': 'application/json' }),
       },
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : form ? (body as FormData) : JSON.stringify(body),
     });
   try {
     return (await send(await csrfToken(false))) as T;

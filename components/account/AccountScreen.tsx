@@ -13,6 +13,7 @@ import { Loading } from '../ui/Loading';
 import { Screen, Section } from '../ui/Screen';
 import { TextField } from '../ui/TextField';
 import { TextLink } from '../ui/TextLink';
+import { MySubmissions } from '../submissions/SubmissionLists';
 import { roleRights } from './roles';
 
 /** A reader's way in (what an account gives, sign in, register); for the signed-in, their account. */
@@ -88,6 +89,9 @@ function SignedIn({ user }: { user: UserDto }) {
           </Fact>
         </View>
         <DisplayNameForm user={user} />
+      </Section>
+      <Section title="Your submissions">
+        <MySubmissions userId={user.id} />
       </Section>
       <Section title="Password">
         <PasswordForm />

@@ -11,6 +11,7 @@ import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
+import { DeskCorrections } from '../submissions/SubmissionLists';
 
 /** Where editors work: their drafts, the drafts waiting for their review, what was published lately. */
 export function DeskScreen() {
@@ -47,6 +48,9 @@ function DeskLists() {
           drafts={data.toReview}
           empty="No other editor's draft is waiting for review. You get an e-mail when one is sent."
         />
+      </Section>
+      <Section title="Corrections for your entries">
+        <DeskCorrections />
       </Section>
       <Section title="Recently published">
         <RecentList entries={data.recent} />

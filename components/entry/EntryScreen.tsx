@@ -6,6 +6,7 @@ import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
+import { ReportError, SeenInTheWild } from '../submissions/EntryParts';
 import { CitePanel } from './CitePanel';
 import { EntryBody } from './EntryBody';
 import { EntryMeta } from './EntryMeta';
@@ -75,6 +76,8 @@ function EntryPage({ data, pinned }: { data: EntryResponse; pinned: boolean }) {
         <ReviseButton slug={entry.slug} />
       )}
       <EntryBody content={version.content} html={version.html} />
+      <ReportError key={version.number} slug={entry.slug} version={version.number} title={version.content.title} />
+      <SeenInTheWild slug={entry.slug} />
       <Section title="Versions">
         <VersionsPanel slug={entry.slug} shown={version.number} />
       </Section>

@@ -87,7 +87,7 @@ const REGION = /^[a-z0-9-]{2,40}$/;
 export function storageConfigFromEnv(env: Env = process.env, rootDir: string = ROOT): StorageConfig {
   const kind = (value(env, 'STORAGE') ?? 'local').toLowerCase();
   if (kind === 'local') {
-    return { kind: 'local', dir: path.resolve(rootDir, value(env, 'UPLOAD_DIR') ?? path.join('.data', 'uploads')) };
+    return { kind: 'local', dir: path.resolve(rootDir, value(env, 'UPLOAD_DIR') ?? path.join(value(env, 'DATA_DIR') ?? '.data', 'uploads')) };
   }
   if (kind !== 's3') throw new StorageConfigError('STORAGE', `STORAGE must be "local" or "s3", got "${env.STORAGE}".`);
 

@@ -1,0 +1,3 @@
+import { QueueScreen } from '@/components/queue/QueueScreen';
+
+export default QueueScreen;

@@ -1,0 +1,3 @@
+import { ReportSightingScreen } from '@/components/submissions/ReportSightingScreen';
+
+export default ReportSightingScreen;

@@ -1,0 +1,94 @@
+/**
+ * The words the submission screens use for states, sections, kinds and events, and the age of an
+ * item, in one place so the submitter's view, the account, the Desk and the queue say the same.
+ */
+import type { CorrectionSection, SubmissionKind, SubmissionStatus } from '@/shared/submissions/types';
+import { ApiError, ApiUnreachableError } from '../api';
+
+export const STATUS_WORDS: Record<SubmissionStatus, string> = {
+  open: 'Waiting for a moderator',
+  claimed: 'A moderator is deciding it',
+  waiting: 'Waiting for your answer',
+  accepted: 'Accepted',
+  drafted: 'Turned into a draft entry',
+  rejected: 'Not taken',
+};
+
+/** The same states as a moderator reads them (the submitter is "them", not "you"). */
+export const QUEUE_STATUS_WORDS: Record<SubmissionStatus, string> = {
+  ...STATUS_WORDS,
+  open: 'Open',
+  claimed: 'Being decided',
+  waiting: 'Waiting for the submitter',
+};
+
+export const KIND_WORDS: Record<SubmissionKind, string> = { sighting: 'Sighting', correction: 'Correction' };
+
+export const SECTION_LABEL: Record<CorrectionSection, string> = {
+  title: 'Title',
+  inBrief: 'In brief',
+  howItIsPitched: 'How it is pitched',
+  whyItFails: 'Why it fails',
+  worksheets: 'Run the numbers (worksheets)',
+  whatFakesTheEffect: 'What fakes the effect',
+  repliesAndAnswers: 'Replies and answers',
+  questionsToAsk: 'Questions to ask',
+  cautions: 'Cautions',
+  sources: 'Sources',
+  other: 'Something else',
+};
+
+const EVENT_WORDS: Record<string, string> = {
+  submitted: 'Sent in',
+  claimed: 'Taken up by a moderator',
+  released: 'Put back in the queue',
+  asked: 'A question for the submitter',
+  answered: 'The submitter answered',
+  accepted: 'Accepted',
+  drafted: 'Turned into a draft entry',
+  rejected: 'Not taken',
+};
+
+export function eventWords(what: string): string {
+  return EVENT_WORDS[what] ?? what;
+}
+
+/** How long ago: "under an hour", "5 hours", "1 day", "12 days". */
+export function ageWords(iso: string, now: number = Date.now()): string {
+  const ms = now - new Date(iso).getTime();
+  if (!Number.isFinite(ms)) return '';
+  const hours = Math.floor(ms / 3_600_000);
+  if (hours < 1) return 'under an hour';
+  if (hours < 24) return hours === 1 ? '1 hour' : `${hours} hours`;
+  const days = Math.floor(hours / 24);
+  return days === 1 ? '1 day' : `${days} days`;
+}
+
+export function bytesWords(bytes: number): string {
+  if (bytes < 1024) return `${bytes} bytes`;
+  if (bytes < 1024 * 1024) return `${(bytes / 1024).toFixed(bytes < 10 * 1024 ? 1 : 0)} KB`;
+  return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+}
+
+/** Our words for the errors a submission's actions can meet; the server's message otherwise. */
+const CODE_WORDS: Record<string, string> = {
+  claimed_by_other: 'Another moderator has taken this item up in the meantime. It is theirs to decide, unless they put it back.',
+  own_submission: 'You sent this item in yourself, so another moderator decides it.',
+  already_decided: 'This item has been decided already; nothing more can be done with it here.',
+  not_claimed: 'You no longer hold this item (it was put back or taken by someone else). Take it up again to decide it.',
+  email_unverified: 'Your e-mail address is not confirmed yet. Confirm it with the link we sent, then send this again.',
+  rate_limited: 'Too many submissions in a short time. Wait a little, then send it again.',
+  file_too_large: 'A file is larger than 10 MB. Remove it or send a smaller copy.',
+  too_many_files: 'At most 5 files go with one sighting. Remove the extra ones.',
+};
+
+export function problemWords(error: Error): string {
+  if (error instanceof ApiUnreachableError) return "Counterweight's server could not be reached. Check the connection, then try again.";
+  if (error instanceof ApiError) {
+    const ours = CODE_WORDS[error.code];
+    if (ours) return ours;
+    if (error.code === 'validation_failed' && error.fields) return Object.values(error.fields).join(' ');
+    return error.message;
+  }
+  return error.message;
+}
