@@ -5,7 +5,7 @@
  */
 import { useId, useState } from 'react';
 import { StyleSheet, Text, TextInput, View } from 'react-native';
-import { FIGURE_KIND_LABEL, type FigureRole } from '@/shared/claims/types';
+import { FIGURE_KIND_LABEL, FIGURE_KIND_SHORT, type FigureRole } from '@/shared/claims/types';
 import { ChoiceChips } from '../admin/ChoiceChips';
 import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
@@ -24,18 +24,7 @@ interface FigureEditorProps {
   errors: Record<string, string>;
 }
 
-/** Short names for the kind chips; the full words are in FIGURE_KIND_LABEL. */
-const KIND_CHIP: Record<(typeof FIGURE_KINDS)[number], string> = {
-  thrust: 'Thrust',
-  power: 'Power',
-  energy: 'Energy',
-  temperature: 'Temperature',
-  efficiency: 'Efficiency',
-  cop: 'COP',
-  mass: 'Mass',
-  speed: 'Speed',
-  current: 'Current',
-};
+const KIND_CHIP = FIGURE_KIND_SHORT;
 
 export function FigureEditor({ drafts, onChange, figures, errors }: FigureEditorProps) {
   const [added, setAdded] = useState(0);

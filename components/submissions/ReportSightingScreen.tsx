@@ -8,7 +8,7 @@ import * as DocumentPicker from 'expo-document-picker';
 import { useRef, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { UserDto } from '@/shared/api-types';
-import { FIGURE_KIND_LABEL, FIGURE_KINDS, type FigureKind } from '@/shared/claims/types';
+import { FIGURE_KIND_LABEL, FIGURE_KIND_SHORT, FIGURE_KINDS, type FigureKind } from '@/shared/claims/types';
 import { ATTACHMENT_TYPES, ATTACHMENTS_MAX, type SubmissionDto } from '@/shared/submissions/types';
 import { ChoiceChips } from '../admin/ChoiceChips';
 import { ApiError, useSession } from '../api';
@@ -28,18 +28,7 @@ import { Field } from './Field';
 import { ALLOWED_WORDS, checkSighting, fileProblem, filesProblem, mediaTypeWords, readFigure, type FigureRow } from './sighting';
 import { bytesWords, problemWords } from './words';
 
-/** Short names for the kind chips; the full words (FIGURE_KIND_LABEL) head each row. */
-const KIND_CHIP: Record<FigureKind, string> = {
-  thrust: 'Thrust',
-  power: 'Power',
-  energy: 'Energy',
-  temperature: 'Temperature',
-  efficiency: 'Efficiency',
-  cop: 'COP',
-  mass: 'Mass',
-  speed: 'Speed',
-  current: 'Current',
-};
+const KIND_CHIP = FIGURE_KIND_SHORT;
 
 export function ReportSightingScreen() {
   const { data, error, isPending, refetch } = useSession();

@@ -141,6 +141,28 @@ const SECTION_WORDS: Record<string, string> = {
   other: 'other',
 };
 
+/** A new submission's fields that its kind, the queue or a decision fill in later. */
+const UNSET = {
+  claimedById: null,
+  claimedAt: null,
+  seenAtUrl: null,
+  seenAtCitation: null,
+  summary: null,
+  figures: null,
+  entryId: null,
+  entryVersion: null,
+  section: null,
+  whatIsWrong: null,
+  suggestedFix: null,
+  sources: null,
+  decision: null,
+  decisionNote: null,
+  decidedById: null,
+  decidedAt: null,
+  draftEntryId: null,
+  moderatorsNotifiedAt: null,
+} as const;
+
 export interface SubmissionsDeps {
   sequelize: Sequelize;
   store: ObjectStore;
@@ -340,27 +362,14 @@ export class Submissions {
       id = await this.deps.sequelize.transaction(async (transaction) => {
         const s = await Submission.create(
           {
+            ...UNSET,
             kind: 'sighting',
             title: input.title,
             submitterId: actor.id,
-            claimedById: null,
-            claimedAt: null,
             seenAtUrl: input.seenAtUrl ?? null,
             seenAtCitation: input.seenAtCitation ?? null,
             summary: input.summary,
             figures,
-            entryId: null,
-            entryVersion: null,
-            section: null,
-            whatIsWrong: null,
-            suggestedFix: null,
-            sources: null,
-            decision: null,
-            decisionNote: null,
-            decidedById: null,
-            decidedAt: null,
-            draftEntryId: null,
-            moderatorsNotifiedAt: null,
           },
           { transaction },
         );
@@ -387,27 +396,16 @@ export class Submissions {
     const id = await this.deps.sequelize.transaction(async (transaction) => {
       const s = await Submission.create(
         {
+          ...UNSET,
           kind: 'correction',
           title: `${entry.title} (version ${input.version}): ${SECTION_WORDS[input.section]}`.slice(0, 200),
           submitterId: actor.id,
-          claimedById: null,
-          claimedAt: null,
-          seenAtUrl: null,
-          seenAtCitation: null,
-          summary: null,
-          figures: null,
           entryId: entry.id,
           entryVersion: input.version,
           section: input.section,
           whatIsWrong: input.whatIsWrong,
           suggestedFix: input.suggestedFix,
           sources: input.sources || null,
-          decision: null,
-          decisionNote: null,
-          decidedById: null,
-          decidedAt: null,
-          draftEntryId: null,
-          moderatorsNotifiedAt: null,
         },
         { transaction },
       );

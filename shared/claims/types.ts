@@ -29,6 +29,19 @@ export const FIGURE_SI_UNIT: Record<FigureKind, string> = {
   current: 'A',
 };
 
+/** Short names for each kind, for choice chips. */
+export const FIGURE_KIND_SHORT: Record<FigureKind, string> = {
+  thrust: 'Thrust',
+  power: 'Power',
+  energy: 'Energy',
+  temperature: 'Temperature',
+  efficiency: 'Efficiency',
+  cop: 'COP',
+  mass: 'Mass',
+  speed: 'Speed',
+  current: 'Current',
+};
+
 /** Words for each kind, for the screen. */
 export const FIGURE_KIND_LABEL: Record<FigureKind, string> = {
   thrust: 'Thrust (force)',

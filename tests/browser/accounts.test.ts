@@ -6,7 +6,7 @@
  */
 import path from 'node:path';
 import type { Page } from 'playwright-core';
-import { byTestId, screenshotDir, startHarness, type Harness } from '../support/browser';
+import { byTestId, screenshotDir, signInThroughForm, startHarness, type Harness } from '../support/browser';
 
 jest.setTimeout(180_000);
 
@@ -21,14 +21,6 @@ const newUser = { email: 'new.referee@example.org', name: 'Farah Quintero', pass
 // The demo admin seeded in development (README, "Roles and demo accounts").
 const admin = { email: 'admin@example.org', password: 'counterweight-demo-2026' };
 
-async function signIn(page: Page, email: string, password: string) {
-  await page.goto(`${h.base}/sign-in`);
-  await byTestId(page, 'screen-sign-in').waitFor();
-  await byTestId(page, 'field-email').fill(email);
-  await byTestId(page, 'field-password').fill(password);
-  await byTestId(page, 'submit').click();
-  await byTestId(page, 'screen-account').waitFor();
-}
 
 const navLabels = (page: Page) =>
   byTestId(page, 'nav-bar').locator('a').evaluateAll((links) => links.map((a) => a.textContent?.trim()));
@@ -49,7 +41,7 @@ it('signs up, verifies through the Outbox, signs in, and is promoted by an admin
   await user.screenshot({ path: path.join(screenshotDir, 'accounts-signed-up.png') });
 
   const adminPage = await h.open(390, 844);
-  await signIn(adminPage, admin.email, admin.password);
+  await signInThroughForm(adminPage, h.base, admin.email, admin.password);
   expect(await navLabels(adminPage)).toEqual(expect.arrayContaining(['Desk', 'Queue', 'Admin']));
   await adminPage.goto(`${h.base}/admin/outbox`);
   await byTestId(adminPage, 'screen-outbox').waitFor();
@@ -62,7 +54,7 @@ it('signs up, verifies through the Outbox, signs in, and is promoted by an admin
   await user.goto(new URL(link!, h.base).toString());
   await byTestId(user, 'screen-verify').waitFor();
   await user.getByText(/verified/i).first().waitFor();
-  await signIn(user, newUser.email, newUser.password);
+  await signInThroughForm(user, h.base, newUser.email, newUser.password);
   expect(await byTestId(user, 'account-role').textContent()).toMatch(/contributor/i);
   const readerSections = await navLabels(user);
   expect(readerSections).not.toContain('Desk');

@@ -10,7 +10,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { runCheck } from '../../shared/checks/run';
 import type { ClaimCheckResult } from '../../shared/claims/types';
-import { byTestId, screenshotDir, startHarness, type Harness } from '../support/browser';
+import { byTestId, screenshotDir, signInThroughForm, startHarness, type Harness } from '../support/browser';
 import { relClose, until } from '../support/poll';
 
 jest.setTimeout(240_000);
@@ -45,14 +45,6 @@ async function apiRun(text: string): Promise<ClaimCheckResult> {
   return (await res.json()) as ClaimCheckResult;
 }
 
-async function signIn(page: Page) {
-  await page.goto(`${h.base}/sign-in`);
-  await byTestId(page, 'screen-sign-in').waitFor();
-  await byTestId(page, 'field-email').fill(contributor.email);
-  await byTestId(page, 'field-password').fill(contributor.password);
-  await byTestId(page, 'submit').click();
-  await byTestId(page, 'screen-account').waitFor();
-}
 
 /** The match testIDs in the order shown. */
 const matchOrder = (page: Page) =>
@@ -137,7 +129,7 @@ it('checks a pasted claim, re-runs it with a fixed figure, copies the paragraph,
   expect(await byTestId(page, 'claim-save').count()).toBe(0);
 
   // 5. Signed in as a contributor: run and fix again, save, and get the share link.
-  await signIn(page);
+  await signInThroughForm(page, h.base, contributor.email, contributor.password);
   const again = await pasteAndRun(page);
   await fixThrustAndRerun(page, again.thrust.id, again.power.quantity);
   await byTestId(page, 'claim-save').click();

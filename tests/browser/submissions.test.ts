@@ -11,7 +11,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
-import { byTestId, screenshotDir, startHarness, type Harness } from '../support/browser';
+import { byTestId, screenshotDir, signInThroughForm, startHarness, type Harness } from '../support/browser';
 import { until } from '../support/poll';
 
 jest.setTimeout(240_000);
@@ -59,14 +59,6 @@ function minimalPdf(): Buffer {
   return Buffer.from(body, 'latin1');
 }
 
-async function signIn(page: Page, email: string) {
-  await page.goto(`${h.base}/sign-in`);
-  await byTestId(page, 'screen-sign-in').waitFor();
-  await byTestId(page, 'field-email').fill(email);
-  await byTestId(page, 'field-password').fill(password);
-  await byTestId(page, 'submit').click();
-  await byTestId(page, 'screen-account').waitFor();
-}
 
 /**
  * The widest right edge of anything on the page, and whether anything was scrolled sideways: nothing
@@ -88,7 +80,7 @@ it('reports a sighting with a PDF, and a moderator accepts it onto an entry', as
 
   // 1. The contributor reports the sighting, with a figure read in SI and the PDF.
   const page = await h.open(390, 844);
-  await signIn(page, contributor);
+  await signInThroughForm(page, h.base, contributor, password);
   await byTestId(page, 'account-report-sighting').click();
   await byTestId(page, 'screen-report').waitFor();
   await byTestId(page, 'sighting-title').fill(title);
@@ -125,7 +117,7 @@ it('reports a sighting with a PDF, and a moderator accepts it onto an entry', as
 
   // 3. The moderator, in a fresh context: the Queue from the bottom bar, the item, its attachment.
   const mod = await h.open(390, 844);
-  await signIn(mod, moderator);
+  await signInThroughForm(mod, h.base, moderator, password);
   await byTestId(mod, 'nav-queue').click();
   await byTestId(mod, 'screen-queue').waitFor();
   await byTestId(mod, `queue-item-${id}`).waitFor();

@@ -95,3 +95,13 @@ export async function startHarness(): Promise<Harness> {
 }
 
 export const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]`);
+
+/** Signs in through the sign-in screen (the demo password unless given) and waits for the account screen. */
+export async function signInThroughForm(page: Page, base: string, email: string, password = 'counterweight-demo-2026'): Promise<void> {
+  await page.goto(`${base}/sign-in`);
+  await byTestId(page, 'screen-sign-in').waitFor();
+  await byTestId(page, 'field-email').fill(email);
+  await byTestId(page, 'field-password').fill(password);
+  await byTestId(page, 'submit').click();
+  await byTestId(page, 'screen-account').waitFor();
+}
