@@ -55,12 +55,25 @@ export interface TermsHit extends SearchHit {
 /** Minisearch options that {@link SearchIndex.searchTerms} takes (the terms come already normalised). */
 export type TermsSearchOptions = Omit<SearchOptions, 'tokenize' | 'processTerm' | 'filter'>;
 
-const FIELDS = ['title', 'aliases', 'inBrief', 'howItIsPitched', 'whyItFails', 'whatFakesTheEffect', 'mechanism', 'laws', 'citations'] as const;
-const BOOST = { title: 5, aliases: 4, inBrief: 2.5, mechanism: 1.5, laws: 1.5, howItIsPitched: 1.5, whyItFails: 1, whatFakesTheEffect: 1, citations: 0.7 };
+/**
+ * The indexed fields. The long sections are one field, `body`, and class and laws another: each
+ * query term then walks five posting lists instead of nine, which is most of a query's time.
+ */
+const FIELDS = ['title', 'aliases', 'inBrief', 'taxonomy', 'body'] as const;
+type Field = (typeof FIELDS)[number];
+const BOOST: Record<Field, number> = { title: 5, aliases: 4, inBrief: 2.5, taxonomy: 1.5, body: 1 };
+
+function fieldText(doc: SearchDoc, field: Field): string {
+  if (field === 'taxonomy') return `${doc.mechanism} · ${doc.laws}`;
+  if (field === 'body') return `${doc.howItIsPitched} ${doc.whyItFails} ${doc.whatFakesTheEffect} ${doc.citations}`;
+  return doc[field];
+}
 
 const newMiniSearch = () =>
   new MiniSearch<SearchDoc>({
     fields: [...FIELDS],
+    // The id stays a number (results are looked up by it).
+    extractField: (doc, field) => (field === 'id' ? (doc.id as unknown as string) : fieldText(doc, field as Field)),
     storeFields: [],
     processTerm: normaliseTerm,
     searchOptions: { boost: BOOST, prefix: true, fuzzy: 0.2, processTerm: normaliseTerm, combineWith: 'OR' },
@@ -302,7 +315,7 @@ const tokenize = MiniSearch.getDefault('tokenize') as (text: string) => string[]
 function countTerms(df: Map<string, number>, doc: SearchDoc, by: 1 | -1): void {
   const terms = new Set<string>();
   for (const field of FIELDS) {
-    for (const token of tokenize(doc[field])) {
+    for (const token of tokenize(fieldText(doc, field))) {
       const t = normaliseTerm(token);
       if (t) terms.add(t);
     }
