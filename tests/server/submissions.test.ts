@@ -362,6 +362,23 @@ it('keeps user text as text: markup is stored and returned as typed, for the scr
 });
 
 describe('rate limits', () => {
+  it('limit submissions per address, whichever account sends them', async () => {
+    const limited = await startTestApp({ starterEntries: false, rateLimits: { ...HIGH_LIMITS, submitAddress: { limit: 2, windowMs: 60_000 } } });
+    try {
+      const body = { entry: 'x-entry', version: 1, section: 'other', whatIsWrong: 'Something is off here.', suggestedFix: 'Fix it.' };
+      const a = await limited.signedIn(demo.contributor.email);
+      const b = await limited.signedIn(demo.editor.email);
+      expect((await a.post('/api/corrections', body)).status).toBe(404);
+      expect((await b.post('/api/corrections', body)).status).toBe(404);
+      const third = await a.post('/api/corrections', body);
+      expect(third.status).toBe(429);
+      expect(third.body.error).toMatchObject({ code: 'rate_limited', message: expect.stringMatching(/from your network/) });
+      expect(third.headers['retry-after']).toBeDefined();
+    } finally {
+      await limited.close();
+    }
+  });
+
   it('limit submissions per account', async () => {
     const limited = await startTestApp({ starterEntries: false, rateLimits: { ...HIGH_LIMITS, submitAccount: { limit: 2, windowMs: 60_000 } } });
     try {
