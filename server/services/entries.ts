@@ -301,6 +301,13 @@ export class Entries {
       if (!laws.some((l) => l.slug === s)) fields[`${prefix}.laws.${i}`] ??= `no conservation law “${s}” in the taxonomy`;
     });
     if (new Set(content.laws).size !== content.laws.length) fields[`${prefix}.laws`] = 'a law is named twice';
+    // Related entries must exist (a draft may name one not yet published; never itself twice).
+    const related = content.related ?? [];
+    const known = related.length ? await Entry.findAll({ where: { slug: related }, attributes: ['slug'], transaction }) : [];
+    related.forEach((s, i) => {
+      if (!known.some((e) => e.slug === s)) fields[`${prefix}.related.${i}`] ??= `no entry “${s}” in the library`;
+    });
+    if (new Set(related).size !== related.length) fields[`${prefix}.related`] = 'an entry is named twice';
     const words = wordCount(content.inBrief);
     if (words > IN_BRIEF_MAX_WORDS) fields[`${prefix}.inBrief`] = `at most ${IN_BRIEF_MAX_WORDS} words (this has ${words})`;
     const names = Object.keys(fields);

@@ -98,6 +98,10 @@ describe('the two-editor workflow', () => {
     expect([law.status, Object.keys(law.body.error.fields)]).toEqual([400, ['body.content.laws.0']]);
     const brief = await one.post('/api/drafts', { slug: 'another-box', content: content({ inBrief: 'word '.repeat(121) }) });
     expect([brief.status, Object.keys(brief.body.error.fields)]).toEqual([400, ['body.content.inBrief']]);
+    const related = await one.post('/api/drafts', { slug: 'another-box', content: content({ related: ['photon-box', 'no-such-entry'] }) });
+    expect([related.status, Object.keys(related.body.error.fields)]).toEqual([400, ['body.content.related.1']]);
+    const twice = await one.post('/api/drafts', { slug: 'another-box', content: content({ related: ['photon-box', 'photon-box'] }) });
+    expect([twice.status, Object.keys(twice.body.error.fields)]).toEqual([400, ['body.content.related']]);
     const big = await one.post('/api/drafts', { slug: 'another-box', content: content({ whyItFails: 'x'.repeat(20_001) }) });
     expect([big.status, big.body.error.code, Object.keys(big.body.error.fields)]).toEqual([413, 'too_large', ['body.content.whyItFails']]);
     const taken = await two.post('/api/drafts', { slug: 'photon-box', content: content() });
