@@ -598,6 +598,15 @@ export function useReviseEntry() {
   });
 }
 
+/** `POST /api/entries/:slug/retire`: a reason (and perhaps a published successor); the pages stay, with a notice. */
+export function useRetireEntry(slug: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (body: { reason: string; successor?: string }) => apiSend<{ entry: unknown }>('POST', `${entryPath(slug)}/retire`, body),
+    onSuccess: () => client.invalidateQueries({ queryKey: queryKeys.entries }),
+  });
+}
+
 /** `PUT /api/drafts/:id`: 409 `edit_conflict` when `lockVersion` is stale, with the current draft in the body. */
 export function saveDraft(id: number, content: EntryContent, lockVersion: number) {
   return apiSend<DraftResponse>('PUT', `/api/drafts/${id}`, { content, lockVersion });

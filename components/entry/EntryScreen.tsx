@@ -1,6 +1,6 @@
-import { Text } from 'react-native';
+import { StyleSheet, Text, View } from 'react-native';
 import { ApiError, useEntry, type EntryResponse } from '../api';
-import { type } from '../theme';
+import { space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
@@ -11,6 +11,7 @@ import { CitePanel } from './CitePanel';
 import { EntryBody } from './EntryBody';
 import { EntryMeta } from './EntryMeta';
 import { ReviseButton } from './ReviseButton';
+import { RetirePanel } from './RetirePanel';
 import { VersionsPanel } from './VersionsPanel';
 
 interface EntryScreenProps {
@@ -73,7 +74,10 @@ function EntryPage({ data, pinned }: { data: EntryResponse; pinned: boolean }) {
           {entry.retired.reason} It stays here, and citable, as it was.
         </Notice>
       ) : (
-        <ReviseButton slug={entry.slug} />
+        <View style={styles.editorActions}>
+          <ReviseButton slug={entry.slug} />
+          {pinned ? null : <RetirePanel slug={entry.slug} title={version.content.title} />}
+        </View>
       )}
       <EntryBody content={version.content} html={version.html} />
       <ReportError key={version.number} slug={entry.slug} version={version.number} title={version.content.title} />
@@ -88,3 +92,7 @@ function EntryPage({ data, pinned }: { data: EntryResponse; pinned: boolean }) {
   );
 }
 
+
+const styles = StyleSheet.create({
+  editorActions: { gap: space.sm, alignItems: 'flex-start' },
+});

@@ -161,3 +161,31 @@ it('renders a published entry full of XSS payloads without running any of them',
   await page.screenshot({ path: path.join(screenshotDir, 'entry-payloads.png') });
   for (const p of [author, reviewer, page]) await p.context().close();
 });
+
+it('lets an editor retire an entry with a reason and a successor; readers then see the notice', async () => {
+  const page = await h.open(390, 844);
+  await signedInRequest(page, 'editor.one@example.org');
+  await page.goto(`${h.base}/entries/buoyancy-wheel`);
+  await byTestId(page, 'screen-entry').waitFor();
+  await byTestId(page, 'retire-open').click();
+  await byTestId(page, 'retire-successor').fill('no-such-entry');
+  await byTestId(page, 'retire-reason').fill('Folded into the entry on overbalanced wheels.');
+  await byTestId(page, 'retire-confirm').click();
+  // An unknown successor is refused beside its field, and nothing is retired.
+  await byTestId(page, 'retire-successor-error').waitFor();
+  expect((await (await fetch(`${h.base}/api/entries/buoyancy-wheel`)).json()).entry.status).toBe('published');
+  await byTestId(page, 'retire-successor').fill('overbalanced-wheel');
+  await byTestId(page, 'retire-confirm').click();
+  await byTestId(page, 'entry-retired').waitFor();
+  expect(await byTestId(page, 'entry-retired').textContent()).toContain('Folded into the entry on overbalanced wheels.');
+  await page.screenshot({ path: path.join(screenshotDir, 'entry-retired.png') });
+
+  // A reader in a fresh context sees the notice and the link to the successor.
+  const reader = await h.open(390, 844);
+  await reader.goto(`${h.base}/entries/buoyancy-wheel`);
+  await byTestId(reader, 'entry-retired').waitFor();
+  await byTestId(reader, 'entry-successor').click();
+  await until('the successor page opens', async () => reader.url().endsWith('/entries/overbalanced-wheel'));
+  expect(page.problems).toEqual([]);
+  expect(reader.problems).toEqual([]);
+});
