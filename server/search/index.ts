@@ -59,6 +59,10 @@ export type TermsSearchOptions = Omit<SearchOptions, 'tokenize' | 'processTerm' 
  * The indexed fields. The long sections are one field, `body`, and class and laws another: each
  * query term then walks five posting lists instead of nine, which is most of a query's time.
  */
+/** How many single words' hits query() keeps, and how many hits in all (least recently used dropped first). */
+const WORD_CACHE_SIZE = 2000;
+const WORD_CACHE_HITS = 1_000_000;
+
 const FIELDS = ['title', 'aliases', 'inBrief', 'taxonomy', 'body'] as const;
 type Field = (typeof FIELDS)[number];
 const BOOST: Record<Field, number> = { title: 5, aliases: 4, inBrief: 2.5, taxonomy: 1.5, body: 1 };
@@ -94,6 +98,10 @@ export class SearchIndex {
   classes = new Map<string, { name: string; parent: string | null }>();
   /** Normalised term → number of indexed entries that hold it in any field. */
   private df = new Map<string, number>();
+  /** Scored hits of single words (see query()); emptied whenever the index changes. */
+  private wordCache = new Map<string, Map<number, { score: number; terms: string[] }>>();
+  /** Hits held in the word cache in all (bounds its memory: about 100 bytes a hit). */
+  private wordCacheHits = 0;
   private watermark = '';
   private building: Promise<void> | null = null;
   private built = false;
@@ -226,6 +234,7 @@ export class SearchIndex {
     for (const l of loaded) countTerms(df, l.doc, 1);
     this.ms = ms;
     this.df = df;
+    this.clearWordCache();
     this.docs = new Map(loaded.map((l) => [l.doc.id, l.doc]));
     this.entries = new Map(loaded.map((l) => [l.entry.id, l.entry]));
     this.watermark = mark;
@@ -241,12 +250,14 @@ export class SearchIndex {
     if (old) {
       this.ms.remove(old);
       countTerms(this.df, old, -1);
+      this.clearWordCache();
       this.docs.delete(row.id);
       this.entries.delete(row.id);
     }
     for (const { doc, entry } of await this.load([row.id])) {
       this.ms.add(doc);
       countTerms(this.df, doc, 1);
+      this.clearWordCache();
       this.docs.set(doc.id, doc);
       this.entries.set(entry.id, entry);
     }
@@ -268,21 +279,72 @@ export class SearchIndex {
    * prefix (it is the one still being typed), and only a word that is not in the index's vocabulary
    * is matched fuzzily, within an edit distance of about a third of its length (at most 2), so that
    * a swapped or dropped letter is forgiven and a correct word does not fan out over its neighbours.
+   *
+   * Each word is searched on its own and its scored hits are kept in a small cache (most of a
+   * query's time is scoring a common word's long posting list, and common words recur from query
+   * to query); the words' hits are then intersected from the shortest list, their scores summed
+   * and multiplied by the number of words matched, as minisearch itself combines them.
    */
   query(q: string): SearchHit[] {
-    const words = q.split(/\s+/).map(normaliseTerm).filter(Boolean);
+    // Split as the index splits ("zero-point" is two words), then normalised as the index normalises.
+    const words = tokenize(q).map(normaliseTerm).filter((w): w is string => Boolean(w));
     if (!words.length) {
       return [...this.entries.values()].sort((a, b) => b.publishedAt - a.publishedAt || b.id - a.id).map((entry) => ({ entry, score: 0, terms: [] }));
     }
-    const fuzzy = (term: string) => (this.df.has(term) || term.length < 4 ? false : Math.min(2, Math.round(0.34 * term.length)));
-    const prefix = (_term: string, i: number, terms: string[]) => i === terms.length - 1;
-    const run = (combineWith: 'AND' | 'OR') =>
-      this.ms
-        .search(q, { fuzzy, prefix, combineWith })
-        .map((r: SearchResult) => ({ entry: this.entries.get(r.id as number)!, score: r.score, terms: r.terms }))
-        .filter((h) => h.entry);
-    const all = run('AND');
-    return all.length ? all : run('OR');
+    const lists = words.map((w, i) => this.wordHits(w, i === words.length - 1));
+    const combine = (ids: Iterable<number>, need: number) => {
+      const out: SearchHit[] = [];
+      for (const id of ids) {
+        let score = 0;
+        let matched = 0;
+        const terms = new Set<string>();
+        for (const list of lists) {
+          const hit = list.get(id);
+          if (!hit) continue;
+          score += hit.score;
+          matched += 1;
+          for (const t of hit.terms) terms.add(t);
+        }
+        const entry = this.entries.get(id);
+        if (matched >= need && entry) out.push({ entry, score: score * matched, terms: [...terms] });
+      }
+      return out.sort((a, b) => b.score - a.score || a.entry.id - b.entry.id);
+    };
+    const shortest = lists.reduce((a, b) => (b.size < a.size ? b : a));
+    const all = combine(shortest.keys(), lists.length);
+    if (all.length) return all;
+    const any = new Set<number>();
+    for (const list of lists) for (const id of list.keys()) any.add(id);
+    return combine(any, 1);
+  }
+
+  private clearWordCache(): void {
+    this.wordCache.clear();
+    this.wordCacheHits = 0;
+  }
+
+  /** One word's scored hits (id → score and the index terms it matched), through the cache. */
+  private wordHits(word: string, last: boolean): Map<number, { score: number; terms: string[] }> {
+    const key = `${last ? 'prefix' : 'exact'}:${word}`;
+    const cached = this.wordCache.get(key);
+    if (cached) {
+      this.wordCache.delete(key); // most recently used last
+      this.wordCache.set(key, cached);
+      return cached;
+    }
+    const fuzzy = this.df.has(word) || word.length < 4 ? false : Math.min(2, Math.round(0.34 * word.length));
+    const hits = new Map<number, { score: number; terms: string[] }>();
+    for (const r of this.ms.search(word, { tokenize: (t) => [t], processTerm: (t) => t, prefix: last, fuzzy, combineWith: 'OR' })) {
+      hits.set(r.id as number, { score: r.score, terms: r.terms });
+    }
+    this.wordCache.set(key, hits);
+    this.wordCacheHits += hits.size;
+    while (this.wordCache.size > WORD_CACHE_SIZE || this.wordCacheHits > WORD_CACHE_HITS) {
+      const [oldest, dropped] = this.wordCache.entries().next().value!;
+      this.wordCache.delete(oldest);
+      this.wordCacheHits -= dropped.size;
+    }
+    return hits;
   }
 
   /**
