@@ -43,6 +43,7 @@ function routes() {
       }),
     '/api/entries/light-in-a-box': () => jsonResponse(200, entryResponse(2, version2)),
     '/api/entries/light-in-a-box/versions': () => jsonResponse(200, versions),
+    '/api/entries/light-in-a-box/sightings': () => jsonResponse(200, { sightings: [] }),
     '/api/entries/light-in-a-box/versions/1': () => jsonResponse(200, entryResponse(1, version1)),
     '/api/entries/light-in-a-box/versions/2': () => jsonResponse(200, entryResponse(2, version2)),
     ...cite,
