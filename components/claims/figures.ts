@@ -3,8 +3,8 @@
  * hand) with its kind, typed quantity and role, read live in the browser with the same
  * parseQuantity the server uses, so a mistyped unit is marked before anything is sent.
  */
-import { FIGURE_KINDS, FIGURE_SI_UNIT, type Figure, type FigureInput, type FigureKind, type FigureRole } from '@/shared/claims/types';
-import { formatQuantity, parseQuantity, QuantityError } from '@/shared/worksheet/quantity';
+import { readQuantityOf, type FigureReading } from '@/shared/claims/figures';
+import { FIGURE_KINDS, type Figure, type FigureInput, type FigureKind, type FigureRole } from '@/shared/claims/types';
 
 export interface FigureDraft {
   /** The result's figure id ("f1") for an extracted figure, "new-1", "new-2" … for one added by hand. */
@@ -81,19 +81,10 @@ export function withKind(draft: FigureDraft, kind: FigureKind): FigureDraft {
   return { ...draft, kind, role };
 }
 
-export type Reading = { ok: true; display: string; si: number } | { ok: false; message: string };
+export type Reading = FigureReading;
 
 /** The typed quantity read as the kind's SI unit: its display ("889.6 mN"), or what is wrong with it. */
-export function readDraft(draft: Pick<FigureDraft, 'kind' | 'quantity'>): Reading {
-  const unit = FIGURE_SI_UNIT[draft.kind];
-  try {
-    const si = parseQuantity(draft.quantity, unit);
-    return { ok: true, si, display: formatQuantity(si, unit) };
-  } catch (err) {
-    if (err instanceof QuantityError) return { ok: false, message: err.message };
-    throw err;
-  }
-}
+export const readDraft = (draft: Pick<FigureDraft, 'kind' | 'quantity'>): Reading => readQuantityOf(draft.kind, draft.quantity);
 
 /** Whether the drafts differ from the figures of the result on screen. */
 export function changedFrom(drafts: readonly FigureDraft[], figures: readonly Figure[]): boolean {

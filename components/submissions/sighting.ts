@@ -3,9 +3,9 @@
  * the same, and its answer is shown beside the same fields): the lengths of the texts, where the
  * claim was seen, each figure read with parseQuantity for its kind, and the attachments.
  */
-import { FIGURE_SI_UNIT, type FigureKind } from '@/shared/claims/types';
+import { readQuantityOf, type FigureReading } from '@/shared/claims/figures';
+import type { FigureKind } from '@/shared/claims/types';
 import { ATTACHMENT_MAX_BYTES, ATTACHMENT_TYPES, ATTACHMENTS_MAX } from '@/shared/submissions/types';
-import { formatQuantity, parseQuantity, QuantityError } from '@/shared/worksheet/quantity';
 import type { PickedFile } from './api';
 import { bytesWords } from './words';
 
@@ -25,19 +25,10 @@ export interface SightingValues {
   files: PickedFile[];
 }
 
-export type Reading = { ok: true; si: number; display: string } | { ok: false; message: string };
+export type Reading = FigureReading;
 
 /** The typed figure in its kind's SI unit, or what is wrong with it. */
-export function readFigure(kind: FigureKind, quantity: string): Reading {
-  const unit = FIGURE_SI_UNIT[kind];
-  try {
-    const si = parseQuantity(quantity, unit);
-    return { ok: true, si, display: formatQuantity(si, unit) };
-  } catch (err) {
-    if (err instanceof QuantityError) return { ok: false, message: err.message };
-    throw err;
-  }
-}
+export const readFigure = readQuantityOf;
 
 const TYPE_WORDS: Record<string, string> = {
   'application/pdf': 'PDF',

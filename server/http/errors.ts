@@ -30,8 +30,13 @@ export function validationError(where: string, err: ZodError): HttpError {
     const key = [where, ...issue.path.map(String)].join('.');
     fields[key] ??= issue.message;
   }
+  return fieldsError('validation_failed', fields);
+}
+
+/** A 400 naming each field (keys like `body.figures.2.quantity`) with the first one's message. */
+export function fieldsError(code: string, fields: Record<string, string>): HttpError {
   const names = Object.keys(fields);
-  return new HttpError(400, 'validation_failed', `Check ${names.join(', ')}: ${fields[names[0]]}.`, fields);
+  return new HttpError(400, code, `Check ${names.join(', ')}: ${fields[names[0]]}.`, fields);
 }
 
 export const apiNotFound: RequestHandler = (req, res) => {

@@ -3,14 +3,8 @@ import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAtt
 import type { ClaimCheckResult, FigureInput } from '../../shared/claims/types';
 import type { CitationStyle } from '../../shared/entries/citations';
 import { User } from './accounts';
+import { jsonColumn } from './json';
 
-const json = <T>(name: string) => ({
-  // MariaDB's JSON is LONGTEXT: the connector may hand back the text.
-  get(this: Model) {
-    const raw = this.getDataValue(name) as unknown;
-    return (typeof raw === 'string' ? JSON.parse(raw) : raw) as T;
-  },
-});
 
 export class SavedClaimCheck extends Model<InferAttributes<SavedClaimCheck>, InferCreationAttributes<SavedClaimCheck>> {
   declare id: CreationOptional<number>;
@@ -33,8 +27,8 @@ export function initClaimChecks(sequelize: Sequelize): void {
       ownerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
       text: { type: DataTypes.TEXT('medium'), allowNull: false },
       style: { type: DataTypes.STRING(16), allowNull: false },
-      figures: { type: DataTypes.JSON, allowNull: true, ...json<FigureInput[] | null>('figures') },
-      result: { type: DataTypes.JSON, allowNull: false, ...json<ClaimCheckResult>('result') },
+      figures: jsonColumn<FigureInput[] | null>('figures', true),
+      result: jsonColumn<ClaimCheckResult>('result', false),
       topMatch: { type: DataTypes.STRING(160), allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,

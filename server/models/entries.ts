@@ -15,6 +15,7 @@ import {
 } from 'sequelize';
 import type { EntryContent } from '../../shared/entries/schema';
 import { User } from './accounts';
+import { jsonColumn } from './json';
 import { ConservationLaw, MechanismClass } from './taxonomy';
 
 export const ENTRY_STATUSES = ['draft', 'in_review', 'published', 'retired'] as const;
@@ -102,15 +103,7 @@ export function initEntries(sequelize: Sequelize): void {
       number: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
       state: { type: DataTypes.ENUM(...VERSION_STATES), allowNull: false, defaultValue: 'draft' },
       basedOnId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
-      content: {
-        type: DataTypes.JSON,
-        allowNull: false,
-        // MariaDB's JSON is LONGTEXT: the connector may hand back the text.
-        get(this: EntryVersion) {
-          const raw = this.getDataValue('content') as unknown;
-          return (typeof raw === 'string' ? JSON.parse(raw) : raw) as EntryContent;
-        },
-      },
+      content: jsonColumn<EntryContent>('content', false),
       changeNote: { type: DataTypes.STRING(500), allowNull: true },
       reviewNote: { type: DataTypes.TEXT, allowNull: true },
       authorId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },

@@ -13,6 +13,7 @@ import type { ClaimedFigureDto, CorrectionSection, Decision, SubmissionKind, Sub
 import { DECISIONS, SUBMISSION_KINDS, SUBMISSION_STATUSES } from '../../shared/submissions/types';
 import { User } from './accounts';
 import { Entry } from './entries';
+import { jsonColumn } from './json';
 
 export class Submission extends Model<InferAttributes<Submission>, InferCreationAttributes<Submission>> {
   declare id: CreationOptional<number>;
@@ -91,15 +92,7 @@ export function initSubmissions(sequelize: Sequelize): void {
       seenAtUrl: { type: DataTypes.STRING(2000), allowNull: true },
       seenAtCitation: { type: DataTypes.TEXT, allowNull: true },
       summary: { type: DataTypes.TEXT, allowNull: true },
-      figures: {
-        type: DataTypes.JSON,
-        allowNull: true,
-        // MariaDB's JSON is LONGTEXT: the connector may hand back the text.
-        get(this: Submission) {
-          const raw = this.getDataValue('figures') as unknown;
-          return (typeof raw === 'string' ? JSON.parse(raw) : raw) as ClaimedFigureDto[] | null;
-        },
-      },
+      figures: jsonColumn<ClaimedFigureDto[] | null>('figures', true),
       entryId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
       entryVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
       section: { type: DataTypes.STRING(40), allowNull: true },

@@ -9,7 +9,6 @@ import { z } from 'zod';
 import { slugSchema } from '../../shared/entries/schema';
 import { HttpError } from '../http/errors';
 import { validate } from '../http/validate';
-import { User } from '../models';
 import type { Allow } from '../policies';
 import type { ObjectStore } from '../storage';
 import { acceptFiles, inspectFiles, storeFiles, uploadedFiles } from '../uploads/attachments';
@@ -109,8 +108,7 @@ export function submissionRoutes({ allow, submissions, store, origin, limits }: 
   });
 
   r.get('/queue/editors', allow('queue.editors'), async (_req, res) => {
-    const editors = await User.findAll({ where: { role: ['editor', 'admin'] }, attributes: ['id', 'displayName', 'role'], order: [['displayName', 'ASC']] });
-    res.json({ editors: editors.map((u) => ({ id: u.id, displayName: u.displayName, role: u.role })) });
+    res.json({ editors: await submissions.editors() });
   });
 
   r.post('/submissions/:id/claim', allow('queue.claim'), async (req, res) => {

@@ -23,7 +23,7 @@ import {
 } from '../../shared/claims/types';
 import { CITATION_STYLES, type CitationStyle, type CslItem } from '../../shared/entries/citations';
 import { QuantityError } from '../../shared/worksheet/quantity';
-import { HttpError } from '../http/errors';
+import { fieldsError, HttpError } from '../http/errors';
 import { validate } from '../http/validate';
 import { SavedClaimCheck, type User } from '../models';
 import { citedItem, permalink } from '../routes/entries';
@@ -53,6 +53,9 @@ export const claimCheckSchema = z
   .strict();
 
 export type ClaimCheckInput = z.infer<typeof claimCheckSchema>;
+
+/** The share link of a saved check (the screen's route). */
+const shareUrl = (origin: string, token: string) => `${origin}/check/${token}`;
 
 /** Entries the paragraph names: the best match and up to two related ones. */
 const PARAGRAPH_ENTRIES = 3;
@@ -93,8 +96,7 @@ export class ClaimChecks {
         fields[`body.figures.${i}.quantity`] = err.message;
       }
     });
-    const names = Object.keys(fields);
-    if (names.length) throw new HttpError(400, 'invalid_figure', `Check ${names.join(', ')}: ${fields[names[0]]}.`, fields);
+    if (Object.keys(fields).length) throw fieldsError('invalid_figure', fields);
     return out;
   }
 
@@ -134,7 +136,7 @@ export class ClaimChecks {
   private dto(row: SavedClaimCheck, viewer: User | undefined, origin: string): SavedClaimCheckDto {
     return {
       token: row.token,
-      url: `${origin}/check/${row.token}`,
+      url: shareUrl(origin, row.token),
       createdAt: row.createdAt.toISOString(),
       text: row.text,
       style: row.style,
@@ -173,7 +175,7 @@ export class ClaimChecks {
     });
     return rows.map((r) => ({
       token: r.token,
-      url: `${origin}/check/${r.token}`,
+      url: shareUrl(origin, r.token),
       createdAt: r.createdAt.toISOString(),
       preview: r.text.replace(/\s+/g, ' ').trim().slice(0, 120),
       topMatch: r.topMatch,

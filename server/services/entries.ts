@@ -14,7 +14,7 @@ import { kitFunctions } from '../../shared/checks/kit-functions';
 import { entryContentSchema, IN_BRIEF_MAX_WORDS, slugSchema, wordCount, type EntryContent } from '../../shared/entries/schema';
 import { validateWorksheet } from '../../shared/worksheet/evaluate';
 import { worksheetSchema } from '../../shared/worksheet/schema';
-import { HttpError, validationError } from '../http/errors';
+import { fieldsError, HttpError, validationError } from '../http/errors';
 import type { Mailer, OutgoingMessage } from '../mail/mailer';
 import { draftApprovedMessage, draftSentBackMessage, reviewRequestedMessage } from '../mail/messages';
 import { audit, ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass, User } from '../models';
@@ -310,8 +310,7 @@ export class Entries {
     if (new Set(related).size !== related.length) fields[`${prefix}.related`] = 'an entry is named twice';
     const words = wordCount(content.inBrief);
     if (words > IN_BRIEF_MAX_WORDS) fields[`${prefix}.inBrief`] = `at most ${IN_BRIEF_MAX_WORDS} words (this has ${words})`;
-    const names = Object.keys(fields);
-    if (names.length) throw new HttpError(400, 'validation_failed', `Check ${names.join(', ')}: ${fields[names[0]]}.`, fields);
+    if (Object.keys(fields).length) throw fieldsError('validation_failed', fields);
     return { classId: cls!.id, lawIds: content.laws.map((s) => laws.find((l) => l.slug === s)!.id) };
   }
 

@@ -7,7 +7,8 @@
  */
 import { Op, type Sequelize, type Transaction, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
-import { FIGURE_KINDS, FIGURE_SI_UNIT } from '../../shared/claims/types';
+import { readQuantityOf } from '../../shared/claims/figures';
+import { FIGURE_KINDS } from '../../shared/claims/types';
 import { slugSchema } from '../../shared/entries/schema';
 import {
   CORRECTION_SECTIONS,
@@ -22,8 +23,7 @@ import {
   type SubmissionStatus,
   type SubmissionSummaryDto,
 } from '../../shared/submissions/types';
-import { formatQuantity, parseQuantity, QuantityError } from '../../shared/worksheet/quantity';
-import { HttpError } from '../http/errors';
+import { fieldsError, HttpError } from '../http/errors';
 import type { Mailer, OutgoingMessage } from '../mail/mailer';
 import { correctionForwardedMessage, queueDigestMessage, submissionDecidedMessage } from '../mail/messages';
 import { Attachment, audit, Entry, EntryVersion, Submission, SubmissionEntry, SubmissionEvent, User } from '../models';
@@ -101,20 +101,14 @@ export type DecideInput = z.infer<typeof decideSchema>;
 /** The figures of a sighting, each checked with parseQuantity for its kind (400 naming the one that fails). */
 export function readClaimedFigures(figures: z.infer<typeof figureSchema>[], where = 'body.figures'): ClaimedFigureDto[] {
   const fields: Record<string, string> = {};
-  const out = figures.map((f, i) => {
-    const unit = FIGURE_SI_UNIT[f.kind];
-    try {
-      const si = parseQuantity(f.quantity, unit);
-      return { kind: f.kind, quantity: f.quantity, si, display: formatQuantity(si, unit), label: f.label };
-    } catch (err) {
-      if (!(err instanceof QuantityError)) throw err;
-      fields[`${where}.${i}.quantity`] = err.message;
-      return null;
-    }
+  const out: ClaimedFigureDto[] = [];
+  figures.forEach((f, i) => {
+    const read = readQuantityOf(f.kind, f.quantity);
+    if (read.ok) out.push({ kind: f.kind, quantity: f.quantity, si: read.si, display: read.display, label: f.label });
+    else fields[`${where}.${i}.quantity`] = read.message;
   });
-  const names = Object.keys(fields);
-  if (names.length) throw new HttpError(400, 'invalid_figure', `Check ${names.join(', ')}: ${fields[names[0]]}.`, fields);
-  return out as ClaimedFigureDto[];
+  if (Object.keys(fields).length) throw fieldsError('invalid_figure', fields);
+  return out;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -328,6 +322,12 @@ export class Submissions {
     if (!entryIds.length) return [];
     const rows = await Submission.findAll({ where: { kind: 'correction', status: 'accepted', entryId: entryIds }, include: this.include(false), order: [['decidedAt', 'DESC'], ['id', 'DESC']], limit: 100 });
     return rows.map((s) => this.summary(s));
+  }
+
+  /** Who can own a draft made from a sighting: editors and admins, by name. */
+  async editors(): Promise<(PersonRef & { role: string })[]> {
+    const rows = await User.findAll({ where: { role: ['editor', 'admin'] }, attributes: ['id', 'displayName', 'role'], order: [['displayName', 'ASC']] });
+    return rows.map((u) => ({ id: u.id, displayName: u.displayName, role: u.role }));
   }
 
   /** An attachment's bytes for a viewer allowed to see its submission. */

@@ -383,6 +383,21 @@ export function extractFigures(text: string): Figure[] {
  * A figure the reader typed or fixed. The quantity is read for its kind by parseQuantity, whose
  * QuantityError is left to propagate (the server answers 400 naming the figure's field).
  */
+/** A typed quantity read in its kind's SI unit: the value and its display, or what is wrong with it. */
+export type FigureReading = { ok: true; si: number; display: string } | { ok: false; message: string };
+
+/** Reads a figure as typed ("0.2 lbf" as a thrust) without throwing: for forms that mark a mistyped unit as it is typed. */
+export function readQuantityOf(kind: FigureKind, quantity: string): FigureReading {
+  const unit = FIGURE_SI_UNIT[kind];
+  try {
+    const si = parseQuantity(quantity, unit);
+    return { ok: true, si, display: formatQuantity(si, unit) };
+  } catch (err) {
+    if (err instanceof QuantityError) return { ok: false, message: err.message };
+    throw err;
+  }
+}
+
 export function readFigure(input: FigureInput, id: string): Figure {
   if (!(FIGURE_KINDS as readonly string[]).includes(input.kind)) {
     throw new QuantityError('syntax', `"${String(input.kind)}" is not a kind of figure (one of ${FIGURE_KINDS.join(', ')})`);

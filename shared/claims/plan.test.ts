@@ -64,7 +64,8 @@ describe('thrust with power', () => {
     const art = checks.find((c) => c.check === 'artifact-budget')!;
     expect(art.inputs).toMatchObject({ F_claimed: '40 uN', I: '3 A', P_heat: '60 W' });
     const lorentz = art.outputs.find((o) => o.name === 'F_lorentz')!.si;
-    // F = I·L·B with the check's default lead length and field (Lorentz force on a straight wire).
+    // Lorentz force on a straight wire across a field, F = I·L·B (any electromagnetism text; from memory),
+    // with the check's defaults L = 10 cm and B = 50 µT (a typical value of the Earth's field, shared/checks/constants.ts).
     const kit = runCheck('artifact-budget', art.inputs);
     expect(lorentz).toBe(kit.outputs.find((o) => o.name === 'F_lorentz')!.si);
     expect(lorentz).toBeCloseTo(3 * 0.1 * 50e-6, 15);

@@ -138,7 +138,7 @@ describe('POST /api/claim-checks', () => {
   ])('answers 400 naming the field for %j', async (sent, field) => {
     const r = await run(sent);
     expect(r.status).toBe(400);
-    expect(Object.keys(r.body.error.fields ?? {}).some((k) => k === field || k.startsWith(`${field}.`) || (field === 'body' && k.startsWith('body')))).toBe(true);
+    expect(Object.keys(r.body.error.fields ?? {}).some((k) => k === field || k.startsWith(`${field}.`))).toBe(true);
   });
 
   it('refuses a request from another site', async () => {
