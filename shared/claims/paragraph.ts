@@ -16,6 +16,10 @@ export interface ParagraphEntry {
   sources: CslItem[];
   /** The entry's questions to ask of a claim. */
   questions: string[];
+  /** The names of the conservation laws the entry rests on ("Conservation of linear momentum"). */
+  laws: string[];
+  /** The entry's common replies and their answers. */
+  replies: { reply: string; answer: string }[];
 }
 
 export interface ParagraphInput {
