@@ -35,7 +35,7 @@ function fieldOf(fn: () => unknown): string | undefined {
 }
 
 describe('the kit', () => {
-  test('eight checks, in the order of CHECK_NAMES, keyed by their names', () => {
+  test('every check, in the order of CHECK_NAMES, keyed by their names', () => {
     expect(checkList.map((c) => c.name)).toEqual([...CHECK_NAMES]);
     for (const name of CHECK_NAMES) expect(checks[name].name).toBe(name);
   });
@@ -290,5 +290,20 @@ describe('rocket-equation', () => {
     expect(fieldOf(() => run('rocket-equation', { m0: 100, m1: 200 }))).toBe('m1');
     // both given and agreeing is fine
     expect(out(run('rocket-equation', { v_e: 2942, Isp: 300 })).v_e_used).toBeCloseTo(2941.995, 6);
+  });
+});
+
+describe('light-speed', () => {
+  // c = 299 792 458 m/s exactly (SI Brochure, 9th ed., table 1).
+  test('a speed above c is reported as such: 4.5e8 m/s is 1.5010 c', () => {
+    const r = run('light-speed', { v: 4.5e8 });
+    expect(out(r).ratio).toBeCloseTo(4.5e8 / 299_792_458, 12);
+    expect(out(r).c).toBe(299_792_458);
+    expect(r.verdict.holds).toBe(false);
+    expect(r.verdict.message).toMatch(/1\.50 times the speed of light/);
+  });
+  test('a speed below c holds, and c itself does not (no body with mass reaches it)', () => {
+    expect(run('light-speed', { v: 0.2 * 299_792_458 }).verdict.holds).toBe(true);
+    expect(run('light-speed', { v: 299_792_458 }).verdict.holds).toBe(false);
   });
 });

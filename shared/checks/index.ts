@@ -1,11 +1,12 @@
 /**
- * The standard check kit (DESIGN.md §4): the eight checks by name and in order, the error they throw
+ * The standard check kit (DESIGN.md §4): the checks by name and in order, the error they throw
  * for bad figures, and the helpers the API and screens may want.
  */
 import { artifactBudget } from './artifact-budget';
 import { breakEvenSpeedCheck } from './break-even-speed';
 import { carnot } from './carnot';
 import { firstLaw } from './first-law';
+import { lightSpeed } from './light-speed';
 import { momentumLedger } from './momentum-ledger';
 import { photonBound } from './photon-bound';
 import { rocketEquation } from './rocket-equation';
@@ -21,6 +22,7 @@ export const checks: Record<CheckName, CheckDefinition> = {
   'sideways-beam': sidewaysBeam,
   'artifact-budget': artifactBudget,
   'rocket-equation': rocketEquation,
+  'light-speed': lightSpeed,
 };
 
 export const checkList: CheckDefinition[] = CHECK_NAMES.map((name) => checks[name]);

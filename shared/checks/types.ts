@@ -12,6 +12,7 @@ export const CHECK_NAMES = [
   'sideways-beam',
   'artifact-budget',
   'rocket-equation',
+  'light-speed',
 ] as const;
 export type CheckName = (typeof CHECK_NAMES)[number];
 
