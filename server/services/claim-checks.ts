@@ -7,13 +7,16 @@
 import crypto from 'node:crypto';
 import type { Sequelize } from 'sequelize';
 import { z } from 'zod';
-import { extractFigures, readFigure } from '../../shared/claims/figures';
-import { buildParagraph, type ParagraphEntry } from '../../shared/claims/paragraph';
-import { runClaimChecks } from '../../shared/claims/plan';
+import { readFigure } from '../../shared/claims/figures';
+import { buildParagraphs, type ParagraphEntry } from '../../shared/claims/paragraph';
+import { runClaimChecks, signalledClasses } from '../../shared/claims/plan';
+import { extractFigures } from '../../shared/claims/reader';
 import {
   CLAIM_FIGURES_MAX,
   CLAIM_TEXT_MAX,
   FIGURE_KINDS,
+  FIGURE_ROLES,
+  PARAGRAPH_VARIANTS,
   type ClaimCheckResult,
   type ClaimMatch,
   type Figure,
@@ -31,13 +34,12 @@ import { matchClaim } from '../search/claim-match';
 import type { SearchIndex } from '../search';
 import type { Entries } from './entries';
 
-const ROLES = ['in', 'out', 'hot', 'cold', 'heating', 'cooling'] as const;
-
 export const figureInputSchema = z
   .object({
     kind: z.enum(FIGURE_KINDS),
     quantity: z.string().trim().min(1, 'type the figure with its unit, such as "0.2 lbf"').max(80, 'at most 80 characters'),
-    role: z.enum(ROLES).nullable().optional(),
+    upper: z.string().trim().max(80, 'at most 80 characters').nullable().optional(),
+    role: z.enum(FIGURE_ROLES).nullable().optional(),
     text: z.string().max(200).optional(),
     start: z.number().int().min(0).max(CLAIM_TEXT_MAX).nullable().optional(),
     end: z.number().int().min(0).max(CLAIM_TEXT_MAX).nullable().optional(),
@@ -48,6 +50,7 @@ export const claimCheckSchema = z
   .object({
     text: z.string({ error: 'paste the text of the claim' }).trim().min(1, 'paste the text of the claim'),
     style: z.enum(CITATION_STYLES).default('apa'),
+    variant: z.enum(PARAGRAPH_VARIANTS).default('referee'),
     figures: z.array(figureInputSchema).max(CLAIM_FIGURES_MAX, `at most ${CLAIM_FIGURES_MAX} figures`).optional(),
   })
   .strict();
@@ -103,7 +106,7 @@ export class ClaimChecks {
   async run(input: ClaimCheckInput, origin: string): Promise<ClaimCheckResult> {
     const figures = this.figures(input);
     await this.deps.index.ready();
-    const hits = matchClaim(this.deps.index, input.text);
+    const hits = matchClaim(this.deps.index, input.text, { classes: signalledClasses(figures, input.text) });
     const cited: (ParagraphEntry | null)[] = await Promise.all(
       hits.map(async (h): Promise<ParagraphEntry | null> => {
         const { slug, version: n } = h.entry;
@@ -122,15 +125,29 @@ export class ClaimChecks {
           item: citedItem(slug, version, url),
           sources: (version.content.sources ?? []).map((s) => s.csl as CslItem),
           questions: version.content.questionsToAsk ?? [],
+          laws: h.entry.laws.map((l) => this.deps.index.laws.get(l) ?? l),
+          replies: version.content.repliesAndAnswers ?? [],
         };
       }),
     );
     const entries = cited.filter((e): e is ParagraphEntry => e !== null);
-    const { checks, notes } = runClaimChecks(figures);
+    const classes = hits.filter((h) => entries.some((e) => e.match.slug === h.entry.slug)).map((h) => h.entry.mechanismClass).filter((c): c is string => c !== null);
+    const { checks, needs, notes } = runClaimChecks(figures, { text: input.text, classes });
     if (!figures.length) notes.unshift('No figures with units were found in the text; add them by hand to run the checks.');
     if (!entries.length) notes.unshift('No entry of the library matched this text closely.');
-    const paragraph = buildParagraph({ entries: entries.slice(0, PARAGRAPH_ENTRIES), checks, figures, style: input.style });
-    return { style: input.style, textLength: input.text.length, matches: entries.map((e) => e.match), figures, checks, paragraph, notes };
+    const paragraphs = buildParagraphs({ entries: entries.slice(0, PARAGRAPH_ENTRIES), checks, needs, figures, text: input.text, style: input.style });
+    return {
+      style: input.style,
+      variant: input.variant,
+      textLength: input.text.length,
+      matches: entries.map((e) => e.match),
+      figures,
+      checks,
+      needs,
+      paragraph: paragraphs[input.variant],
+      paragraphs,
+      notes,
+    };
   }
 
   private dto(row: SavedClaimCheck, viewer: User | undefined, origin: string): SavedClaimCheckDto {

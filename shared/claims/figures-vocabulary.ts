@@ -33,31 +33,71 @@ export const CALORIE_J = 4.184;
 /** Gram-force: mathjs knows kgf (9.80665 N) but not gf, so grams of thrust are written in kgf. */
 export const GRAM_IN_KG = 0.001;
 
+/**
+ * Metric horsepower (PS, CV, ch): 75 kgf·m/s = 735.498 75 W exactly (NIST SP 811, Appendix B.8,
+ * "horsepower, metric"). mathjs's "hp" is the mechanical one, 550 ft·lbf/s ≈ 745.70 W.
+ */
+export const METRIC_HP_W = 735.49875;
+
+/** The speed of light in vacuum, m/s (exact; SI Brochure, 9th ed.), for "1.3 times the speed of light". */
+export const C_M_PER_S = 299_792_458;
+
 export const UNIT_FORMS: readonly UnitForm[] = [
   // Thrust (force)
   { kind: 'thrust', unit: 'N', symbols: ['N'], words: ['newton', 'newtons'] },
-  { kind: 'thrust', unit: 'mN', symbols: ['mN'], words: ['millinewton', 'millinewtons'] },
-  { kind: 'thrust', unit: 'uN', symbols: micro('N'), words: ['micronewton', 'micronewtons'] },
+  { kind: 'thrust', unit: 'mN', symbols: ['mN'], words: ['millinewton', 'millinewtons', 'milli-newton', 'milli-newtons'] },
+  { kind: 'thrust', unit: 'uN', symbols: micro('N'), words: ['micronewton', 'micronewtons', 'micro-newton', 'micro-newtons'] },
   { kind: 'thrust', unit: 'nN', symbols: ['nN'], words: ['nanonewton', 'nanonewtons'] },
   { kind: 'thrust', unit: 'kN', symbols: ['kN'], words: ['kilonewton', 'kilonewtons'] },
   {
     kind: 'thrust',
     unit: 'lbf',
     symbols: ['lbf'],
-    words: ['pound-force', 'pounds-force', 'pound of force', 'pounds of force', 'pound of thrust', 'pounds of thrust', 'lb of thrust', 'lbs of thrust', 'lbf of thrust'],
+    words: [
+      'pound-force', 'pounds-force', 'pound of force', 'pounds of force', 'pound of thrust', 'pounds of thrust', 'lb of thrust', 'lbs of thrust',
+      'lbf of thrust', 'pound of lift', 'pounds of lift', 'lb of lift', 'lbs of lift', 'pounds of push', 'pounds of pull', 'lbs of force', 'lb of force',
+      'pounds thrust', 'lbs thrust', 'lb thrust',
+    ],
   },
-  { kind: 'thrust', unit: 'kgf', symbols: ['kgf'], words: ['kilogram-force', 'kilograms-force', 'kg of thrust', 'kilogram of thrust', 'kilograms of thrust'] },
-  { kind: 'thrust', unit: 'kgf', factor: GRAM_IN_KG, symbols: ['gf'], words: ['gram-force', 'grams-force', 'g of thrust', 'gram of thrust', 'grams of thrust'] },
+  {
+    kind: 'thrust',
+    unit: 'kgf',
+    symbols: ['kgf', 'kp'],
+    words: [
+      'kilogram-force', 'kilograms-force', 'kg of thrust', 'kilogram of thrust', 'kilograms of thrust', 'kg of lift', 'kilogram of lift',
+      'kilograms of lift', 'kilos of thrust', 'kilos of lift', 'kg of force', 'kilopond', 'kiloponds',
+    ],
+  },
+  {
+    kind: 'thrust',
+    unit: 'kgf',
+    factor: GRAM_IN_KG,
+    symbols: ['gf'],
+    words: ['gram-force', 'grams-force', 'g of thrust', 'gram of thrust', 'grams of thrust', 'g of lift', 'gram of lift', 'grams of lift', 'g of force', 'grams of force'],
+  },
+  { kind: 'thrust', unit: 'kgf', factor: 1e-6, symbols: ['mgf'], words: ['milligram-force', 'milligrams-force', 'mg of thrust', 'milligrams of thrust'] },
 
   // Power
-  { kind: 'power', unit: 'W', symbols: ['W'], words: ['watt', 'watts'] },
+  { kind: 'power', unit: 'W', symbols: ['W', 'We', 'Wt', 'Wth'], words: ['watt', 'watts'] },
   { kind: 'power', unit: 'uW', symbols: micro('W'), words: ['microwatt', 'microwatts'] },
   { kind: 'power', unit: 'mW', symbols: ['mW'], words: ['milliwatt', 'milliwatts'] },
   { kind: 'power', unit: 'kW', symbols: ['kW', 'KW', 'kWe', 'kWt', 'kWth'], words: ['kilowatt', 'kilowatts'] },
   { kind: 'power', unit: 'MW', symbols: ['MW', 'MWe', 'MWt', 'MWth'], words: ['megawatt', 'megawatts'] },
   { kind: 'power', unit: 'GW', symbols: ['GW', 'GWe', 'GWt', 'GWth'], words: ['gigawatt', 'gigawatts'] },
-  { kind: 'power', unit: 'hp', symbols: ['hp', 'HP', 'bhp'], words: ['horsepower', 'horse power'] },
-  { kind: 'power', unit: 'BTU/h', symbols: ['BTU/h', 'Btu/h', 'BTU/hr', 'Btu/hr'], words: ['BTU per hour', 'BTUs per hour', 'British thermal units per hour'] },
+  { kind: 'power', unit: 'hp', symbols: ['hp', 'HP', 'bhp', 'BHP', 'shp'], words: ['horsepower', 'horse power', 'mechanical horsepower', 'brake horsepower'] },
+  {
+    kind: 'power',
+    unit: 'W',
+    factor: METRIC_HP_W,
+    symbols: ['PS', 'CV', 'hp(M)', 'hp (M)'],
+    words: ['metric horsepower', 'metric horse power', 'Pferdestärke', 'cheval-vapeur', 'chevaux-vapeur', 'cavalli vapore', 'caballos de vapor'],
+  },
+  {
+    kind: 'power',
+    unit: 'BTU/h',
+    symbols: ['BTU/h', 'Btu/h', 'BTU/hr', 'Btu/hr', 'BTUh', 'Btuh', 'BTU/H'],
+    words: ['BTU per hour', 'BTUs per hour', 'Btu per hour', 'British thermal units per hour', 'British thermal unit per hour'],
+  },
 
   // Energy
   { kind: 'energy', unit: 'J', symbols: ['J'], words: ['joule', 'joules'] },
@@ -74,7 +114,7 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'energy', unit: 'kJ', factor: CALORIE_J, symbols: ['kcal'], words: ['kilocalorie', 'kilocalories'] },
 
   // Temperature
-  { kind: 'temperature', unit: 'K', symbols: ['K'], words: ['kelvin', 'kelvins', 'degrees kelvin'] },
+  { kind: 'temperature', unit: 'K', symbols: ['K', '°K'], words: ['kelvin', 'kelvins', 'degrees kelvin', 'degree kelvin'] },
   { kind: 'temperature', unit: 'mK', symbols: ['mK'], words: ['millikelvin', 'millikelvins'] },
   {
     kind: 'temperature',
@@ -116,6 +156,28 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     words: ['kilometre per hour', 'kilometres per hour', 'kilometer per hour', 'kilometers per hour'],
   },
   { kind: 'speed', unit: 'mi/h', symbols: ['mph', 'MPH', 'mi/h', 'mi/hr'], words: ['mile per hour', 'miles per hour'] },
+  { kind: 'speed', unit: 'mi/s', symbols: ['mi/s'], words: ['mile per second', 'miles per second'] },
+  {
+    kind: 'speed',
+    unit: 'm/s',
+    factor: C_M_PER_S,
+    words: ['times the speed of light', 'times light speed', 'times the velocity of light', 'times faster than light', 'times c'],
+  },
+
+  // Voltage
+  { kind: 'voltage', unit: 'V', symbols: ['V', 'VDC', 'VAC', 'Vdc', 'Vac', 'V DC', 'V AC', 'Vrms', 'V rms'], words: ['volt', 'volts'] },
+  { kind: 'voltage', unit: 'mV', symbols: ['mV'], words: ['millivolt', 'millivolts'] },
+  { kind: 'voltage', unit: 'kV', symbols: ['kV'], words: ['kilovolt', 'kilovolts'] },
+
+  // Duration ("s" alone is left out: seconds are written out, or read as Isp after "Isp"/"specific impulse")
+  { kind: 'duration', unit: 's', symbols: ['s', 'sec', 'secs'], words: ['second', 'seconds'] },
+  { kind: 'duration', unit: 'min', symbols: ['min', 'mins'], words: ['minute', 'minutes'] },
+  { kind: 'duration', unit: 'h', symbols: ['h', 'hr', 'hrs'], words: ['hour', 'hours'] },
+  { kind: 'duration', unit: 'day', symbols: ['d'], words: ['day', 'days'] },
+  { kind: 'duration', unit: 'week', words: ['week', 'weeks'] },
+  { kind: 'duration', unit: 'day', factor: 14, words: ['fortnight', 'fortnights'] },
+  { kind: 'duration', unit: 'month', words: ['month', 'months'] },
+  { kind: 'duration', unit: 'year', symbols: ['yr', 'yrs'], words: ['year', 'years'] },
 
   // Electric current
   { kind: 'current', unit: 'A', symbols: ['A'], words: ['amp', 'amps', 'ampere', 'amperes'] },
@@ -137,39 +199,188 @@ export interface RoleWords {
 
 export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
+    role: 'excess',
+    before: ['excess', 'surplus', 'extra', 'net gain', 'net surplus', 'anomalous', 'unexplained', 'over-unity', 'overunity'],
+    after: ['excess', 'surplus', 'extra', 'more(?= than)', 'above(?= (?:the|its) input)', 'in excess', 'net gain'],
+  },
+  {
     role: 'in',
     before: [
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'suppl(?:y|ies|ied|ying)', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
-      'put in', 'charged with',
+      'put in', 'charged with', 'feeds?', 'feeding', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
+      'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
+      'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
+      'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'burn(?:s|ed|ing)?', 'dissipat(?:e|es|ed|ing)',
     ],
-    after: ['inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed'],
+    after: [
+      '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires)',
+      'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 'in(?=\\s+(?:and|,|to))', 'of input', 'of supply', 'supply'],
   },
   {
     role: 'out',
     before: [
       'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
       'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
-      'excess', 'surplus', 'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?',
+      'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
+      'drives?', 'driving', 'powers', 'powering', 'lights?', 'lighting', 'heats?', 'heating', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
+      'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
+      'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of',
     ],
-    after: ['outputs?', 'delivered', 'produced', 'generated', 'returned', 'yielded', 'recovered', 'released', 'excess', 'surplus'],
+    after: [
+      '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
+      'outputs?', 'delivered', 'produced', 'generated', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
   },
 ];
 
 export const TEMPERATURE_ROLES: readonly RoleWords[] = [
   {
     role: 'hot',
-    before: ['hot', 'hotter', 'hottest', 'source', 'flames?', 'steam', 'boiler', 'furnace', 'combustion', 'burner', 'heated to', 'high-temperature'],
-    after: ['source', 'flames?', 'steam', 'hot', 'boiler', 'furnace'],
+    before: [
+      'hot', 'hotter', 'hottest', 'source', 'flames?', 'steam', 'boiler', 'furnace', 'combustion', 'burner', 'heated to', 'high-temperature',
+      'exhaust', 'waste heat', 'geothermal', 'deliver(?:s|ed|ing)? (?:water |air |heat )?at', 'supply temperature', 'flow temperature', 'output temperature',
+      'indoors?', 'indoor', 'inside', 'radiators?', 'underfloor', 'hot water', 'condensing', 'up to', 'to heat', 'heats? (?:\\w+ )?to', 'heating to',
+      'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper',
+    ],
+    after: ['source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'indoors?', 'inside', 'supply', 'flow', 'output', 'hot side', 'inlet'],
   },
   {
     role: 'cold',
     before: [
       'cold', 'colder', 'coldest', 'ambient', 'room', 'sink', 'outside', 'outdoors?', 'river', 'sea', 'seawater', 'lake', 'ocean',
-      'ground', 'environment', 'surroundings', 'atmosphere', 'cooling water', 'ice', 'condenser', 'low-temperature',
+      'ground', 'environment', 'surroundings', 'atmosphere', 'cooling water', 'ice', 'condenser', 'low-temperature', 'air', 'outside air', 'outdoor air',
+      'from', 'freezer', 'fridge', 'inside the fridge', 'cabinet', 'cold store', 'evaporator', 'extract(?:s|ed|ing)? heat from', 'draw(?:s|n|ing)? heat from',
+      'well water', 'groundwater', 'borehole', 'winter', 'bottom', 'lower', 'rejects? heat (?:to|at)', 'reject(?:s|ed|ing)?', 'cooled to', 'chilled to',
+      'cool(?:s|ed|ing)? (?:\\w+ )?to', 'keeps? (?:\\w+ )?at', 'frozen',
     ],
-    after: ['sink', 'ambient', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater'],
+    after: ['sink', 'ambient', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater', 'cold side', 'air', 'outdoor', 'ground'],
   },
+];
+
+export const MASS_ROLES: readonly RoleWords[] = [
+  {
+    role: 'wet',
+    before: [
+      'wet', 'fuell?ed', 'fully fuell?ed', 'initial', 'starting', 'start', 'launch', 'lift-?off', 'take-?off', 'gross', 'total', 'loaded', 'full',
+      'at launch', 'at ignition', 'before the burn',
+    ],
+    after: ['wet', 'fuell?ed', 'at launch', 'at lift-?off', 'at the start', 'initially', 'fully loaded', 'loaded', 'in all', 'all told', 'gross', 'total'],
+  },
+  {
+    role: 'dry',
+    before: ['dry', 'empty', 'final', 'burn-?out', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert'],
+    after: ['dry', 'empty', 'at burn-?out', 'after the burn', 'when empty', 'at the end'],
+  },
+  {
+    role: 'propellant',
+    before: ['propellant', 'fuel', 'reaction mass', 'xenon', 'krypton', 'argon', 'hydrazine', 'oxidi[sz]er', 'kerosene', 'hydrogen', 'methane', 'water'],
+    after: [
+      'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
+      'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
+    ],
+  },
+];
+
+export const SPEED_ROLES: readonly RoleWords[] = [
+  {
+    role: 'exhaust',
+    before: ['exhaust', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'ion', 'beam', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at'],
+    after: ['exhaust', 'jet', 'exhaust velocity', 'exhaust speed'],
+  },
+  {
+    role: 'delta-v',
+    before: ['Δv', 'Δ-v', 'delta-?v', 'delta v', 'dv', 'velocity change', 'change in velocity', 'change of velocity', 'speed change', 'change in speed', 'velocity increment', 'Δ ?V'],
+    after: ['of Δv', 'of delta-?v', 'of velocity change', 'Δv', 'delta-?v', 'of Δ-v'],
+  },
+];
+
+/** Words that make a percentage (or a bare ratio) a quantum efficiency: particles out per particle in. */
+export const QUANTUM_EFFICIENCY_WORDS = [
+  'quantum efficienc(?:y|ies)', 'quantum yields?', 'EQEs?', 'IQEs?', 'QEs?', 'photon yields?', 'photons? per electrons?', 'electrons? per photons?',
+  'carrier multiplication', 'exciton multiplication', 'multiple exciton generation', 'singlet fission', 'photon upconversion', 'quantum-cutting', 'quantum cutting',
+  'photons? per (?:injected |absorbed )?(?:electrons?|carriers?)', 'electrons? per (?:incident |absorbed )?photons?', 'external quantum', 'internal quantum',
+];
+
+/** Words that make "350 % efficient" a heating COP (heat pumps deliver more heat than the work they take). */
+export const HEAT_PUMP_WORDS = ['heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?'];
+/** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
+export const COOLING_MACHINE_WORDS = ['refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling'];
+
+/** Words that make a temperature a difference: before ("ΔT of 20 K") or after ("a 20 K difference"). */
+export const DIFFERENCE_BEFORE = [
+  'ΔT', 'Δ T', 'delta[- ]?T', 'dT', 'temperature (?:difference|gradient|drop|rise|lift|span|spread|differential|swing|excursion|change|increase)s?',
+  'differences? of', 'differential of', 'gradient of', 'rise of', 'drop of', 'lift of', 'spread of', 'span of', 'increase of', 'swing of', 'change of',
+  'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
+  'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
+];
+export const DIFFERENCE_AFTER = [
+  '(?:temperature )?(?:difference|differential|gradient|drop|rise|lift|span|spread|swing|excursion|delta|split|increase|decrease)s?',
+  '(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)(?: than)?', 'ΔT', 'delta[- ]?T', 'of (?:temperature )?(?:difference|gradient|lift|rise|drop)',
+  'between', 'apart', 'across', 'of heating', 'of warming', 'of cooling',
+];
+
+/** Words before a number of seconds that make it a specific impulse. */
+export const ISP_WORDS = ['I_?sp', 'Isp', 'ISP', 'I sp', 'specific impulses?', 'specific impulse \\(Isp\\)'];
+
+/** Words that say a device is a heat engine (so an efficiency is a Carnot claim). */
+export const HEAT_ENGINE_WORDS = [
+  'heat engines?', 'engines?', 'turbines?', 'thermoelectric\\w*', 'thermo-?electric\\w*', 'thermionic', 'thermophotovoltaic\\w*', 'TPV', 'Stirling',
+  'Rankine', 'ORC', 'steam', 'heat to (?:work|power|electricity)', 'converts? (?:\\w+ )?heat', 'waste[- ]heat', 'thermal (?:to|into) (?:electric|mechanical)',
+  'Seebeck', 'Peltier', 'generators? running on heat', 'heat-driven', 'thermal generator', 'TEG', 'heat recovery', 'power plant', 'power station', 'combustion',
+  'diesel', 'petrol', 'gasoline', 'ambient heat', 'heat of the (?:air|sea|room|surroundings)', 'temperature difference', 'thermal gradient',
+];
+
+/** A device said to throw out nothing: the photon-rocket bound applies to its thrust. */
+export const PROPELLANT_FREE_WORDS = [
+  'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless', 'without (?:any )?(?:propellant|reaction mass|exhaust|expelling|ejecting|emitting|throwing)',
+  'no (?:propellant|reaction mass|exhaust|moving parts|expelled mass|mass is expelled)', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
+  'closed (?:cavity|resonator|system|box|container|frame|vessel|frustum)', 'sealed (?:cavity|resonator|box|unit|container|device|chamber|frustum|drum|housing|case|enclosure)',
+  'inertial (?:propulsion|drive|thrust)', 'field propulsion', 'unidirectional (?:force|thrust)', 'net thrust from inside', 'fuel-?less (?:thruster|drive|propulsion)',
+  'propulsion without', 'thrust without', 'pushes? (?:itself|against nothing)', 'self-propell\\w*', 'frustum', 'tapered (?:cavity|resonator|copper)',
+  'microwave (?:thruster|drive|cavity|resonator)', 'resonant cavity', 'RF (?:thruster|cavity)', 'gyroscopic (?:thrust|lift|propulsion|drive|thruster)',
+  'precession (?:drive|thruster|lift)', 'anti-?gravity', 'space drive', 'inertia drive', 'oscillation thruster', 'shuttl\\w+ masses', 'internal masses',
+  'no (?:external )?reaction', 'momentum from nothing', 'lifter', 'Dean drive', 'stationary thruster',
+];
+/** A device said to carry and expel propellant: the photon-rocket bound does not apply, the rocket equation does. */
+export const PROPELLANT_WORDS = [
+  'propellant', 'xenon', 'krypton', 'argon', 'hydrazine', 'kerosene', 'oxidi[sz]er', 'fuel tanks?', 'exhaust (?:velocity|speed)', 'Isp', 'specific impulse',
+  'ion (?:thruster|engine|drive)', 'Hall(?:-effect)? (?:thruster|effect thruster)', 'rocket', 'reaction mass', 'mass flow', 'nozzle', 'ejects?', 'expels?',
+  'plasma thruster', 'resistojet', 'arcjet', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
+  'rotor', 'fan', 'air-breathing', 'sail', 'laser-pushed', 'beamed', 'tether',
+];
+
+/** Phrases that say a device needs no input (the input power is then 0). */
+export const SELF_RUNNING_WORDS = [
+  'self-?running', 'self-?sustain(?:ing|ed|s)', 'self-?powered', 'self-?looped', 'self-?looping', 'self-?feeding', 'self-?charging', 'self-?perpetuating',
+  'needs? no (?:external )?(?:power|energy|input|supply|fuel|battery|electricity|source)', 'requires? no (?:external )?(?:power|energy|input|supply|fuel|electricity|source)',
+  'without (?:any )?(?:external )?(?:power|energy|input|supply|fuel|electricity)(?: source| supply| input)?', 'no (?:external )?(?:power|energy) (?:input|source|supply)',
+  'no (?:external )?input', 'powers? itself', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
+  'closed[- ]loop', 'feeds? (?:its own )?output back', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
+  'no fuel', 'fuel-?less', 'free energy', 'zero input',
+];
+/** Where "self-powered" is lawful: the device harvests an outside flow of energy. */
+export const HARVEST_WORDS = [
+  'harvest\\w*', 'solar', 'photovoltaic', 'sunlight', 'light', 'vibrations?', 'body heat', 'thermal gradient', 'temperature difference', 'wind', 'tides?',
+  'waves?', 'radio waves', 'RF energy', 'ambient (?:light|RF|vibration)', 'battery', 'batteries', 'capacitor', 'supercapacitor', 'piezo\\w*', 'triboelectric',
+  'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell',
+];
+
+/** Nouns after "5K" that make the K a thousand ("5K cycles"), not kelvins. */
+export const THOUSAND_NOUNS = [
+  'cycles?', 'hours?', 'hrs?', 'rpm', 'RPM', 'revolutions?', 'rotations?', 'runs?', 'tests?', 'trials?', 'units?', 'miles?', 'km', 'steps?', 'iterations?',
+  'shots?', 'pulses?', 'seconds?', 'minutes?', 'days?', 'cells?', 'orders?', 'customers?', 'users?', 'dollars?', 'euros?', 'pounds?', 'USD', 'EUR',
+  'homes?', 'households?', 'devices?', 'vehicles?', 'cars?', 'operating hours', 'loops?', 'turns?', 'strokes?', 'rounds?', 'samples?', 'subscribers?',
+  'watts?', 'W\\b', 'volts?', 'amps?', 'joules?', 'newtons?', 'feet', 'ft',
+];
+
+/** Hedges before a figure, and what they mean. */
+export const HEDGES: readonly { hedge: 'up-to' | 'about' | 'at-least' | 'at-most' | 'more-than' | 'less-than'; words: readonly string[] }[] = [
+  { hedge: 'up-to', words: ['up to', 'as much as', 'as high as', 'peaks? of', 'peaking at', 'maximum of', 'max(?:imum)?\\.?', 'a peak'] },
+  { hedge: 'about', words: ['about', 'around', 'approximately', 'approx\\.?', 'roughly', 'nearly', 'almost', 'close to', 'some', 'circa', 'ca\\.', 'of order', '~', '≈', '∼', 'c\\.'] },
+  { hedge: 'at-least', words: ['at least', 'no less than', 'not less than', 'a minimum of', 'minimum', '≥', '>='] },
+  { hedge: 'at-most', words: ['at most', 'no more than', 'not more than', '≤', '<='] },
+  { hedge: 'more-than', words: ['more than', 'over', 'above', 'in excess of', 'exceeding', 'upwards of', 'greater than', 'better than', 'beyond', '>'] },
+  { hedge: 'less-than', words: ['less than', 'under', 'below', 'fewer than', 'lower than', '<'] },
 ];
 
 /** COP: cooling words are looked for first, then heating words (within COP_WINDOW characters). */

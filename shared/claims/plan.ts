@@ -1,166 +1,473 @@
 /**
- * Which standard checks a claim's figures allow, and running them (issue 6, item 4c). The rules:
- *  - a thrust with a power            → photon-bound and break-even-speed (mass and speed when given);
- *  - two temperatures with an efficiency or a COP → carnot (the higher, or the one called hot, is Th);
- *  - an energy in and an energy out   → first-law; a power in and a power out → first-law over one
- *    hour of steady running (stated as an assumption); an efficiency above 1 with no two
- *    temperatures → first-law on 1 kJ supplied (stated);
- *  - a thrust with an electric current → artifact-budget (the Lorentz force on the leads is then
- *    the text's own; the other artifacts take the check's typical bench values, stated).
- * Every input a check takes that the text did not give keeps the check's default, and that is said
- * in `assumptions`. The checks are run with runCheck, the same function as the check screens.
+ * Which standard checks a claim's figures allow, and running them (issue 11, item 2): verdicts a
+ * referee can stand behind.
+ *
+ *  - A check runs only on figures the text gives (or derives from them: a power from a current
+ *    and a voltage, an output from an excess over the input, energies from powers over a stated
+ *    run). A check that would need a figure the text does not give is listed in `needs` with the
+ *    words of what is missing — never run on the check's example default and reported as a result.
+ *    What a check takes that no claim states (a heat-out term of 0 in the first-law ledger, a
+ *    claimed value of 0 for "not claimed") is said in its assumptions.
+ *  - Ranges: each range a check uses is tried at both ends, and the check reports the ends most
+ *    favourable to the claim (the least severe result), saying so.
+ *  - The checks and when they apply:
+ *     · photon-bound: a thrust (or thrust per power) and a power, for a device the text or the
+ *       matched entry's class says throws out no propellant; break-even-speed too when the text
+ *       gives a speed of the craft;
+ *     · rocket-equation: an exhaust speed or Isp, the masses (wet and dry, or either with the
+ *       propellant), and a claimed Δv when there is one;
+ *     · carnot: two temperatures (or one and a difference) with a heat engine's efficiency or a
+ *       heat pump's or refrigerator's COP;
+ *     · first-law: energies (or powers) in and out; an input of 0 for a self-running device; an
+ *       efficiency or gain above 1 that is not a heat pump's COP nor a quantum efficiency;
+ *     · light-speed: a stated speed of at least 1 % of c.
+ *  - A quantum efficiency above 100 % counts particles, not energy: no check, a note.
+ *
+ * Every run goes through runCheck, the same function as the check screens.
  */
 import { checks } from '../checks';
-import { CheckInputError, runCheck } from '../checks/run';
+import { C_LIGHT } from '../checks/constants';
+import { CheckInputError, runCheck, type CheckRun } from '../checks/run';
 import type { CheckName } from '../checks/types';
-import { formatQuantity } from '../worksheet/quantity';
-import type { ClaimCheckRun, Figure, FigureKind, PlannedCheck } from './types';
+import {
+  HEAT_ENGINE_WORDS,
+  HEAT_PUMP_WORDS,
+  COOLING_MACHINE_WORDS,
+  PROPELLANT_FREE_WORDS,
+  PROPELLANT_WORDS,
+} from './figures-vocabulary';
+import { formatPrint, printText } from './print';
+import type { ClaimCheckNeed, ClaimCheckRun, Figure, FigureKind, PlannedCheck } from './types';
+
+/** Mechanism classes (content/taxonomy.yml) whose devices throw out nothing. */
+export const PROPELLANT_FREE_CLASSES = ['propellant-free-thrust', 'internal-mass-motion', 'enclosed-radiation', 'sideways-beams', 'gyroscopic-drive'];
+/** Mechanism classes of machines said to give more energy than they take. */
+export const OVER_UNITY_CLASSES = ['over-unity', 'overbalanced-wheel', 'magnet-motor', 'over-unity-circuit', 'vacuum-energy'];
+
+/** The law each check rests on, in words. */
+export const CHECK_LAW: Record<CheckName, string> = {
+  'photon-bound': 'conservation of linear momentum',
+  'break-even-speed': 'conservation of energy',
+  carnot: 'the second law of thermodynamics',
+  'first-law': 'conservation of energy (the first law of thermodynamics)',
+  'momentum-ledger': 'conservation of linear momentum',
+  'sideways-beam': 'conservation of linear momentum',
+  'artifact-budget': 'conservation of linear momentum',
+  'rocket-equation': 'conservation of linear momentum (the rocket equation)',
+  'light-speed': 'special relativity (nothing with mass reaches the speed of light)',
+};
+
+/** What the planner knows beyond the figures: the text, and the classes of the entries it matched. */
+export interface PlanContext {
+  text?: string;
+  /** Mechanism class slugs of the matched entries (the best first). */
+  classes?: string[];
+}
+
+const compile = (words: readonly string[]) => new RegExp(`(?<!\\p{L})(?:${words.join('|')})(?!\\p{L})`, 'iu');
+const PROPELLANT_FREE_RE = compile(PROPELLANT_FREE_WORDS);
+const PROPELLANT_FREE_ALL_RE = new RegExp(PROPELLANT_FREE_RE.source, 'giu');
+const PROPELLANT_RE = compile(PROPELLANT_WORDS);
+const HEAT_ENGINE_RE = compile(HEAT_ENGINE_WORDS);
+const HEAT_PUMP_RE = compile(HEAT_PUMP_WORDS);
+const COOLING_RE = compile(COOLING_MACHINE_WORDS);
+const OVER_UNITY_RE = /(?<!\p{L})(?:over-?unity|free energy|self-?running|self-?sustaining|perpetual|more (?:energy|power) (?:out )?than|generator|alternator|magnet motor|output exceeds|exceeds (?:the|its) input|COP of|gain)(?!\p{L})/iu;
+
+/** What the words of the text (and the matched classes) say about the device. */
+export interface Signals {
+  propellantFree: boolean;
+  propellant: boolean;
+  heatEngine: boolean;
+  heatPump: boolean;
+  cooling: boolean;
+  overUnity: boolean;
+}
+
+export function readSignals(ctx: PlanContext): Signals {
+  const text = ctx.text ?? '';
+  const classes = ctx.classes ?? [];
+  const top = classes[0];
+  const withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ');
+  return {
+    propellantFree: PROPELLANT_FREE_RE.test(text) || (top !== undefined && PROPELLANT_FREE_CLASSES.includes(top)),
+    propellant: PROPELLANT_RE.test(withoutFree),
+    heatEngine: HEAT_ENGINE_RE.test(text),
+    heatPump: HEAT_PUMP_RE.test(text),
+    cooling: COOLING_RE.test(text),
+    overUnity: OVER_UNITY_RE.test(text) || (top !== undefined && OVER_UNITY_CLASSES.includes(top)),
+  };
+}
+
+/**
+ * The mechanism classes a claim's figures point to, for the matcher: a thrust with a power (or a
+ * thrust per power) and no word of propellant → the propellant-free classes; an energy or power
+ * out with an input (or none, for a self-running device), or a gain above 1 → the over-unity classes.
+ */
+export function signalledClasses(figures: Figure[], text: string): string[] {
+  const s = readSignals({ text });
+  const has = (kind: FigureKind) => figures.some((f) => f.kind === kind);
+  const out: string[] = [];
+  if (((has('thrust') && has('power')) || has('thrust-per-power')) && !s.propellant) out.push('propellant-free-thrust');
+  const energyOut = figures.some((f) => (f.kind === 'power' || f.kind === 'energy') && f.role === 'out');
+  const energyIn = figures.some((f) => (f.kind === 'power' || f.kind === 'energy') && f.role === 'in');
+  const gain = figures.some((f) => f.kind === 'efficiency' && f.si > 1);
+  if ((energyOut && energyIn) || gain) if (!s.heatPump && !s.cooling && !has('thrust')) out.push('over-unity');
+  return out;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Figures at one end of their range
+
+type End = 'low' | 'high';
+/** A figure's typed quantity at one end of its range (the figure itself when it is no range). */
+const at = (f: Figure, end: End) => (end === 'high' && f.upper ? f.upper.quantity : f.quantity);
+const siAt = (f: Figure, end: End) => (end === 'high' && f.upper ? f.upper.si : f.si);
+/** A typed quantity for an SI value, exact enough to read back (15 significant figures). */
+const typed = (si: number, unit: string) => `${Number(si.toPrecision(15))} ${unit}`.trim();
+
+interface Plan {
+  check: CheckName;
+  /** The figures used; those with an upper end are tried at both ends. */
+  uses: Figure[];
+  /** The inputs for one choice of ends. */
+  inputs: (end: (f: Figure) => End) => Record<string, string>;
+  why: string;
+  assumptions: string[];
+}
 
 const ofKind = (figures: Figure[], kind: FigureKind) => figures.filter((f) => f.kind === kind);
+const largest = (fs: Figure[]) => [...fs].sort((a, b) => (b.upper?.si ?? b.si) - (a.upper?.si ?? a.si))[0];
 
-/** The first figure of a kind with this role, else (when `fallback`) the first with no role. */
-function pick(figures: Figure[], kind: FigureKind, role: Figure['role'], fallback = true): Figure | undefined {
-  const all = ofKind(figures, kind);
-  return all.find((f) => f.role === role) ?? (fallback ? all.find((f) => f.role === null) : undefined);
+function uniq<T>(xs: (T | undefined)[]): T[] {
+  return [...new Set(xs.filter((x): x is T => x !== undefined))];
 }
 
-/** A typed quantity for an SI value, exact enough to read back (17 significant figures). */
-const typed = (si: number, unit: string) => `${Number(si.toPrecision(17))} ${unit}`.trim();
-
-function withDefaults(check: CheckName, given: Record<string, string>): { inputs: Record<string, string>; assumptions: string[] } {
-  const assumptions: string[] = [];
-  for (const spec of checks[check].inputs) {
-    if (given[spec.name] !== undefined) continue;
-    assumptions.push(`${spec.label}: ${spec.default} (the check's default; the text does not give it).`);
-  }
-  return { inputs: given, assumptions };
+export interface PlanResult {
+  plans: Plan[];
+  needs: ClaimCheckNeed[];
+  notes: string[];
 }
 
-function plan(check: CheckName, given: Record<string, string>, uses: Figure[], why: string, extra: string[] = []): PlannedCheck {
-  const { inputs, assumptions } = withDefaults(check, given);
-  return { check, inputs, uses: uses.map((f) => f.id), why, assumptions: [...extra, ...assumptions] };
+function need(check: CheckName, missing: string[], why: string, uses: Figure[]): ClaimCheckNeed {
+  return { check, title: checks[check].title, missing, why, uses: uses.map((f) => f.id) };
 }
 
-export function planChecks(figures: Figure[]): { planned: PlannedCheck[]; notes: string[] } {
-  const planned: PlannedCheck[] = [];
+export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
+  const s = readSignals(ctx);
+  const plans: Plan[] = [];
+  const needs: ClaimCheckNeed[] = [];
   const notes: string[] = [];
+
+  const power = ofKind(figures, 'power');
+  const energy = ofKind(figures, 'energy');
+  const pIn = power.find((f) => f.role === 'in');
+  const pOut = power.find((f) => f.role === 'out');
+  const eIn = energy.find((f) => f.role === 'in');
+  const eOut = energy.find((f) => f.role === 'out');
+  const duration = largest(ofKind(figures, 'duration'));
+
+  // ---- Thrust
   const thrust = ofKind(figures, 'thrust')[0];
-  const powerIn = pick(figures, 'power', 'in');
-  const anyPower = powerIn ?? ofKind(figures, 'power')[0];
-  const mass = ofKind(figures, 'mass')[0];
-  const speed = ofKind(figures, 'speed')[0];
-  const current = ofKind(figures, 'current')[0];
-
-  // Thrust and power.
-  if (thrust && anyPower) {
-    planned.push(
-      plan('photon-bound', { F_claimed: thrust.quantity, P: anyPower.quantity }, [thrust, anyPower], 'The text gives a thrust and the power that produces it.'),
-    );
-    const given: Record<string, string> = { F: thrust.quantity, P: anyPower.quantity };
-    const uses = [thrust, anyPower];
-    if (mass) (given.m = mass.quantity), uses.push(mass);
-    if (speed) (given.v = speed.quantity), uses.push(speed);
-    planned.push(plan('break-even-speed', given, uses, 'A constant thrust on a constant power: the kinetic power F·v passes the input power at v = P/F.'));
-  } else if (thrust) {
-    notes.push('The text gives a thrust but no input power, so the photon bound and the break-even speed were not run; add the power to run them.');
-  } else if (anyPower && /thrust|propel|push/i.test(figures.map((f) => f.text).join(' '))) {
-    notes.push('No thrust figure was found, so the photon bound was not run.');
+  const perPower = ofKind(figures, 'thrust-per-power')[0];
+  const drivePower = pIn ?? power.find((f) => f.role === null) ?? power.find((f) => f.role !== 'out' && f.role !== 'excess') ?? pOut;
+  const speeds = ofKind(figures, 'speed');
+  const craftSpeed = speeds.find((f) => f.role === null);
+  const photonApplies = s.propellantFree && !s.propellant;
+  if ((thrust && drivePower) || perPower) {
+    if (photonApplies) {
+      if (thrust && drivePower) {
+        plans.push({
+          check: 'photon-bound',
+          uses: [thrust, drivePower],
+          inputs: (e) => ({ F_claimed: at(thrust, e(thrust)), P: at(drivePower, e(drivePower)) }),
+          why: 'The text gives a thrust and the power that produces it, for a device that throws out no propellant.',
+          assumptions: [],
+        });
+        if (craftSpeed) {
+          plans.push({
+            check: 'break-even-speed',
+            uses: [thrust, drivePower, craftSpeed],
+            inputs: (e) => ({ F: at(thrust, e(thrust)), P: at(drivePower, e(drivePower)), v: at(craftSpeed, e(craftSpeed)), m: '0 kg' }),
+            why: 'A constant thrust on a constant power: the kinetic power F·v passes the input power at v = P/F.',
+            assumptions: ['Mass of the craft: not used (the text gives none; only the time to reach the break-even speed would need it).'],
+          });
+        } else {
+          needs.push(need('break-even-speed', ['a speed of the craft in some inertial frame'], 'A constant thrust on a constant power gains kinetic energy faster than it is fed above v = P/F.', [thrust, drivePower]));
+        }
+      } else if (perPower) {
+        plans.push({
+          check: 'photon-bound',
+          uses: [perPower],
+          inputs: (e) => ({ F_claimed: typed(siAt(perPower, e(perPower)), 'N'), P: '1 W' }),
+          why: 'The text gives the thrust per unit power of a device that throws out no propellant.',
+          assumptions: ['Run per watt of input: the ratio to the bound does not depend on the power.'],
+        });
+      }
+    } else if (s.propellant) {
+      notes.push('The text says the device expels propellant, so the photon-rocket bound (for devices that throw out nothing) does not apply; the rocket equation does.');
+    } else {
+      needs.push(
+        need(
+          'photon-bound',
+          ['whether the device throws out propellant or anything else (the photon-rocket bound applies only if it does not)'],
+          'The text gives a thrust and a power but does not say whether the device expels anything.',
+          uniq([thrust, drivePower, perPower]),
+        ),
+      );
+    }
+  } else if (thrust && photonApplies) {
+    needs.push(need('photon-bound', ['the input power'], 'A propellant-free thrust is bounded by the power that produces it (F ≤ P/c).', [thrust]));
   }
 
-  // Thrust with a current: the leads' Lorentz force is the text's own.
-  if (thrust && current) {
-    const given: Record<string, string> = { F_claimed: thrust.quantity, I: current.quantity };
-    const uses = [thrust, current];
-    if (anyPower) (given.P_heat = anyPower.quantity), uses.push(anyPower);
-    const extra = anyPower ? ['All of the input power is taken to end as heat radiated from the device.'] : [];
-    planned.push(plan('artifact-budget', given, uses, 'A small thrust measured on a device fed by a current: the usual bench artifacts, sized.', extra));
+  // ---- Rocket equation
+  const masses = ofKind(figures, 'mass');
+  const wet = masses.find((f) => f.role === 'wet');
+  const dry = masses.find((f) => f.role === 'dry');
+  const prop = masses.find((f) => f.role === 'propellant');
+  const isp = ofKind(figures, 'specific-impulse')[0];
+  const exhaust = speeds.find((f) => f.role === 'exhaust');
+  const dv = speeds.find((f) => f.role === 'delta-v');
+  const rocketish = isp || exhaust || dv || wet || dry || prop;
+  if (rocketish && (s.propellant || isp || exhaust || prop || (dv && (wet || dry)))) {
+    const missing: string[] = [];
+    if (!isp && !exhaust) missing.push('the exhaust speed or the specific impulse');
+    const twoMasses = [wet, dry, prop].filter(Boolean).length >= 2;
+    if (!twoMasses) missing.push(!wet && !dry ? 'the masses of the craft with and without its propellant' : 'the propellant mass (or the mass with or without it)');
+    if (missing.length) {
+      if (dv || twoMasses || isp || exhaust) needs.push(need('rocket-equation', missing, 'A craft that throws out propellant can change its speed by at most v_e·ln(m0/m1).', uniq([isp, exhaust, wet, dry, prop, dv])));
+    } else {
+      const m0 = (e: (f: Figure) => End): string =>
+        wet ? at(wet, e(wet)) : typed(siAt(dry!, e(dry!)) + siAt(prop!, e(prop!)), 'kg');
+      const m1 = (e: (f: Figure) => End): string =>
+        dry ? at(dry, e(dry)) : typed(siAt(wet!, e(wet!)) - siAt(prop!, e(prop!)), 'kg');
+      const extra: string[] = [];
+      if (!wet) extra.push('Starting mass = dry mass + propellant.');
+      if (!dry) extra.push('Final mass = starting mass − propellant.');
+      plans.push({
+        check: 'rocket-equation',
+        uses: uniq([isp, exhaust, wet, dry, prop, dv]),
+        inputs: (e) => ({
+          v_e: exhaust ? at(exhaust, e(exhaust)) : '0 m/s',
+          Isp: isp && !exhaust ? at(isp, e(isp)) : '0 s',
+          m0: m0(e),
+          m1: m1(e),
+          dv_claimed: dv ? at(dv, e(dv)) : '0 m/s',
+        }),
+        why: 'The text gives what the rocket equation needs: the exhaust speed (or Isp) and the masses with and without propellant.',
+        assumptions: dv ? extra : [...extra, 'No velocity change is claimed: the check gives the Δv the propellant allows.'],
+      });
+    }
   }
 
-  // Temperatures with an efficiency or a COP.
+  // ---- Carnot
   const temps = ofKind(figures, 'temperature');
-  const efficiency = ofKind(figures, 'efficiency')[0];
+  const efficiency = ofKind(figures, 'efficiency').find((f) => !f.derived);
+  const gain = ofKind(figures, 'efficiency').find((f) => f.derived);
   const cop = ofKind(figures, 'cop')[0];
-  if (temps.length >= 2 && (efficiency || cop)) {
+  const engineEfficiency = efficiency && (s.heatEngine || temps.length >= 2) && !(efficiency.si > 1 && temps.length < 2);
+  const copForCarnot = cop && (cop.role !== null || s.heatPump || s.cooling || temps.length >= 2 || !s.overUnity);
+  if ((engineEfficiency || copForCarnot) && temps.length >= 2) {
     const hot = temps.find((t) => t.role === 'hot') ?? [...temps].sort((a, b) => b.si - a.si)[0];
     const cold = temps.find((t) => t.role === 'cold' && t !== hot) ?? [...temps].filter((t) => t !== hot).sort((a, b) => a.si - b.si)[0];
-    // What the text does not claim is sent as 0 ("not claimed"), not left at the check's example default.
-    const given: Record<string, string> = { Th: hot.quantity, Tc: cold.quantity, eta_claimed: '0', cop_heating_claimed: '0', cop_cooling_claimed: '0' };
-    const uses = [hot, cold];
     const extra: string[] = [];
-    if (hot.role !== 'hot' || cold.role !== 'cold') extra.push(`The higher temperature (${hot.display}) is taken as the hot reservoir and ${cold.display} as the cold one.`);
-    if (efficiency) (given.eta_claimed = efficiency.quantity), uses.push(efficiency);
-    if (cop) {
-      const cooling = cop.role === 'cooling';
-      given[cooling ? 'cop_cooling_claimed' : 'cop_heating_claimed'] = cop.quantity;
-      uses.push(cop);
-      if (cop.role === null) extra.push('The COP is read as a heating COP (heat delivered over work in); mark it as cooling if it is a refrigerator or chiller.');
-    }
-    planned.push(plan('carnot', given, uses, 'The text gives the temperatures the machine works between and what it claims to achieve there.', extra));
-  } else if ((efficiency || cop) && temps.length < 2 && !(efficiency && efficiency.si > 1)) {
-    notes.push(`The text gives ${efficiency ? 'an efficiency' : 'a COP'} but ${temps.length ? 'only one temperature' : 'no temperatures'}, so the Carnot bound was not run; add the hot and cold temperatures to run it.`);
-  }
-
-  // Energy (or power) in and out.
-  const energies = ofKind(figures, 'energy');
-  const eIn = pick(figures, 'energy', 'in', false);
-  const eOut = pick(figures, 'energy', 'out', false);
-  const pIn = pick(figures, 'power', 'in', false);
-  const pOut = pick(figures, 'power', 'out', false);
-  if (eIn && eOut) {
-    planned.push(plan('first-law', { E_in: eIn.quantity, W_out: eOut.quantity, Q_out: '0 J' }, [eIn, eOut], 'The text gives the energy put in and the energy got out.', ['Heat out: 0 J (all of the output counted as work; any heat rejected only adds to the output).']));
-  } else if (energies.length === 2 && !eIn && !eOut) {
-    const [a, b] = energies;
-    planned.push(
-      plan('first-law', { E_in: a.quantity, W_out: b.quantity, Q_out: '0 J' }, [a, b], 'The text gives two energies; the first is read as the input and the second as the output.', [
-        `The first energy (${a.display}) is read as the input and the second (${b.display}) as the output; swap their roles if that is wrong.`,
-        'Heat out: 0 J (all of the output counted as work).',
-      ]),
-    );
-  } else if (pIn && pOut) {
-    const hour = 3600;
-    planned.push(
-      plan(
-        'first-law',
-        { E_in: typed(pIn.si * hour, 'J'), W_out: typed(pOut.si * hour, 'J'), Q_out: '0 J' },
-        [pIn, pOut],
-        'The text gives the power drawn and the power delivered.',
-        [`Over one hour of steady running: ${pIn.display} in is ${formatQuantity(pIn.si * hour, 'J')}, ${pOut.display} out is ${formatQuantity(pOut.si * hour, 'J')}.`, 'Heat out: 0 J (all of the output counted as work).'],
+    if (hot.role !== 'hot' || cold.role !== 'cold') extra.push(`The higher temperature (${hot.display}) is taken as the hot side and ${cold.display} as the cold side.`);
+    const cooling = cop?.role === 'cooling' || (cop?.role === null && s.cooling && !s.heatPump);
+    if (cop && cop.role === null) extra.push(cooling ? 'The COP is read as a cooling COP (heat drawn out over work in).' : 'The COP is read as a heating COP (heat delivered over work in); mark it as cooling if the machine is a refrigerator or chiller.');
+    const claimed = [engineEfficiency ? efficiency : undefined, copForCarnot ? cop : undefined];
+    plans.push({
+      check: 'carnot',
+      uses: uniq([hot, cold, ...claimed]),
+      inputs: (e) => ({
+        Th: at(hot, e(hot)),
+        Tc: at(cold, e(cold)),
+        eta_claimed: engineEfficiency ? at(efficiency!, e(efficiency!)) : '0',
+        cop_heating_claimed: copForCarnot && !cooling ? at(cop!, e(cop!)) : '0',
+        cop_cooling_claimed: copForCarnot && cooling ? at(cop!, e(cop!)) : '0',
+      }),
+      why: 'The text gives the temperatures the machine works between and what it claims to achieve there.',
+      assumptions: extra,
+    });
+  } else if ((engineEfficiency || (copForCarnot && (cop.role !== null || s.heatPump || s.cooling))) && temps.length < 2) {
+    const missing = temps.length === 0 ? ['the temperature of the hot side', 'the temperature of the cold side'] : [temps[0].role === 'hot' ? 'the temperature of the cold side' : temps[0].role === 'cold' ? 'the temperature of the hot side' : 'the temperature of the other side'];
+    needs.push(
+      need(
+        'carnot',
+        missing,
+        cop ? 'A heat pump or refrigerator is bounded by the Carnot COP of the temperatures it works between.' : 'A heat engine is bounded by the Carnot efficiency of the temperatures it works between.',
+        uniq([efficiency, cop, ...temps]),
       ),
     );
-  } else if (efficiency && efficiency.si > 1 && temps.length < 2) {
-    planned.push(
-      plan('first-law', { E_in: '1 kJ', W_out: typed(efficiency.si * 1000, 'J'), Q_out: '0 J' }, [efficiency], 'An efficiency above 1 claims more energy out than in.', [
-        `On 1 kJ supplied, an efficiency of ${efficiency.display} gives ${formatQuantity(efficiency.si * 1000, 'J')} out.`,
-        'Heat out: 0 J.',
-      ]),
-    );
-  } else if (eIn || eOut || ((pIn || pOut) && !(thrust && anyPower))) {
-    notes.push('The text gives an energy or a power on one side only (in or out), so the first-law balance was not run; add the other side to run it.');
+    if (cop && cop.si > 1) notes.push('A heat pump or refrigerator moves more heat than the work it takes (a COP above 1) without breaking any law; whether its COP is possible depends on the temperatures.');
   }
 
-  return { planned, notes };
+  // ---- First law
+  const firstLawWhy = 'The text gives the energy put in and the energy got out.';
+  if ((eIn || pIn) && (eOut || pOut) && !(thrust && photonApplies && !eOut && !pOut)) {
+    const inF = eIn ?? pIn!;
+    const outF = eOut ?? pOut!;
+    const bothPower = !eIn && !eOut;
+    const t = duration?.si;
+    const extra: string[] = ['Heat out: counted in the output (0 J apart; any heat rejected only adds to the output).'];
+    const toEnergy = (f: Figure, e: End): string | null => {
+      if (f.kind === 'energy') return at(f, e);
+      if (t !== undefined) return typed(siAt(f, e) * t, 'J');
+      if (bothPower) return typed(siAt(f, e), 'J'); // one second of steady running
+      return null;
+    };
+    if (duration && !bothPower) extra.push(`Over the stated ${duration.display}: power × time.`);
+    else if (bothPower && !duration) extra.push('Powers compared over one second of steady running: the ratio does not depend on how long.');
+    else if (bothPower && duration) extra.push(`Powers over the stated ${duration.display}.`);
+    if (toEnergy(inF, 'low') === null || toEnergy(outF, 'low') === null) {
+      needs.push(need('first-law', ['how long the device ran (to compare a power with an energy)'], 'The text gives a power on one side and an energy on the other.', [inF, outF]));
+    } else {
+      plans.push({
+        check: 'first-law',
+        uses: uniq([inF, outF, t !== undefined && !bothPower ? duration : undefined]),
+        inputs: (e) => ({ E_in: toEnergy(inF, e(inF))!, W_out: toEnergy(outF, e(outF))!, Q_out: '0 J', dE_stored: '0 J' }),
+        why: bothPower ? 'The text gives the power drawn and the power delivered.' : firstLawWhy,
+        assumptions: [...extra, 'Stored energy: unchanged over the run (the text does not say it ran down).'],
+      });
+    }
+  } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop) {
+    plans.push({
+      check: 'first-law',
+      uses: [efficiency!],
+      inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(efficiency!, e(efficiency!)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
+      why: 'An efficiency above 1 claims more energy out than in.',
+      assumptions: ['Run on 1 J supplied: the over-unity ratio does not depend on the amount.'],
+    });
+  } else if ((gain?.si ?? 0) > 1 && !cop) {
+    plans.push({
+      check: 'first-law',
+      uses: [gain!],
+      inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(gain!, e(gain!)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
+      why: 'The text gives the output as a multiple of the input.',
+      assumptions: ['Run on 1 J supplied: the over-unity ratio does not depend on the amount.'],
+    });
+  } else if (cop && !copForCarnot && cop.si > 1 && temps.length < 2) {
+    plans.push({
+      check: 'first-law',
+      uses: [cop],
+      inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(cop, e(cop)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
+      why: 'The text gives a "COP" for a device that is no heat pump: its output over its input.',
+      assumptions: ['The COP is read as electrical or mechanical output over input, since the text describes no heat pump; run on 1 J supplied.'],
+    });
+  } else if ((eOut || pOut) && !(eIn || pIn) && s.overUnity) {
+    needs.push(need('first-law', ['the energy or power put in (all of it: electrical, mechanical, chemical, heat)'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eOut, pOut])));
+  } else if ((eIn || pIn) && !(eOut || pOut) && s.overUnity && !thrust) {
+    needs.push(need('first-law', ['the energy or power got out'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eIn, pIn])));
+  }
+
+  // ---- Speeds against c
+  const fastest = speeds.filter((f) => f.role !== 'delta-v' || f.si >= C_LIGHT).sort((a, b) => b.si - a.si)[0] ?? largest(speeds);
+  if (fastest && (fastest.upper?.si ?? fastest.si) >= 0.01 * C_LIGHT) {
+    plans.push({
+      check: 'light-speed',
+      uses: [fastest],
+      inputs: (e) => ({ v: at(fastest, e(fastest)) }),
+      why: 'The text states a speed that is a sizeable fraction of the speed of light, or more.',
+      assumptions: [],
+    });
+  }
+
+  // ---- Quantum efficiency
+  const qe = ofKind(figures, 'quantum-efficiency').find((f) => (f.upper?.si ?? f.si) > 1);
+  if (qe) {
+    notes.push(
+      `A quantum efficiency of ${qe.display.trim() || formatPrint(qe.si)} counts particles (photons per electron, or electrons per photon), not energy: above 1 it is not by itself a claim of more energy out than in (carrier multiplication and similar effects give it lawfully). The energy balance needs the power in and the power out.`,
+    );
+  }
+  return { plans, needs, notes };
 }
 
-/** The planned checks, run. A check the figures cannot run (say Tc above Th) becomes a note. */
-export function runClaimChecks(figures: Figure[]): { checks: ClaimCheckRun[]; notes: string[] } {
-  const { planned, notes } = planChecks(figures);
-  const out: ClaimCheckRun[] = [];
-  for (const p of planned) {
-    const def = checks[p.check];
-    try {
-      const run = runCheck(p.check, p.inputs);
-      out.push({
-        ...p,
-        title: def.title,
-        outputs: run.outputs.map(({ name, label, si, unit, display }) => ({ name, label, si, unit, display })),
-        verdict: run.verdict,
-        inputsUsed: run.inputs,
-        permalink: `/checks/${p.check}?${Object.entries(p.inputs).map(([k, v]) => `${encodeURIComponent(k)}=${encodeURIComponent(v)}`).join('&')}`,
-      });
-    } catch (err) {
-      if (!(err instanceof CheckInputError)) throw err;
-      notes.push(`${def.title} could not be run on these figures: ${err.message}`);
+// ---------------------------------------------------------------------------------------------
+// Running
+
+/** How bad a run is for the claim (larger is worse): the check's ratio of claim to bound. */
+function severity(run: CheckRun): number {
+  const o = (name: string) => run.outputs.find((x) => x.name === name)?.si;
+  switch (run.check) {
+    case 'photon-bound':
+    case 'light-speed':
+      return o('ratio') ?? 0;
+    case 'break-even-speed':
+      return o('power_ratio') ?? 0;
+    case 'carnot':
+      return Math.max(0, ...run.outputs.filter((x) => x.name.endsWith('_ratio')).map((x) => x.si));
+    case 'first-law': {
+      const r = o('over_unity');
+      if (r !== undefined) return r;
+      return -(o('balance') ?? 0);
     }
+    case 'rocket-equation':
+      return o('dv_ratio') ?? -(o('dv') ?? 0);
+    default:
+      return run.verdict.holds ? 0 : 1;
   }
-  return { checks: out, notes };
+}
+
+function sentenceOf(check: CheckName, run: CheckRun): string {
+  const law = CHECK_LAW[check];
+  const head = run.verdict.holds ? `Consistent with ${law}` : `Conflicts with ${law}`;
+  return `${head}: ${printText(run.verdict.message)}`;
+}
+
+/** Plans, run: each at the ends of its ranges most favourable to the claim. */
+export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { checks: ClaimCheckRun[]; needs: ClaimCheckNeed[]; notes: string[] } {
+  const { plans, needs, notes } = planFor(figures, ctx);
+  const out: ClaimCheckRun[] = [];
+  for (const p of plans) {
+    const def = checks[p.check];
+    const ranged = p.uses.filter((f) => f.upper);
+    let best: { run: CheckRun; inputs: Record<string, string>; ends: Map<Figure, End> } | null = null;
+    let lastError: CheckInputError | null = null;
+    const combos = 1 << Math.min(ranged.length, 5);
+    for (let mask = 0; mask < combos; mask++) {
+      const ends = new Map<Figure, End>(ranged.map((f, i) => [f, mask & (1 << i) ? 'high' : 'low']));
+      const inputs = p.inputs((f) => ends.get(f) ?? 'low');
+      try {
+        const run = runCheck(p.check, inputs);
+        if (!best || severity(run) < severity(best.run)) best = { run, inputs, ends };
+      } catch (err) {
+        if (!(err instanceof CheckInputError)) throw err;
+        lastError = err;
+      }
+    }
+    if (!best) {
+      notes.push(`${def.title} could not be run on these figures: ${lastError?.message ?? 'the inputs are not valid'}`);
+      continue;
+    }
+    const assumptions = [...p.assumptions];
+    for (const [f, end] of best.ends) {
+      const chosen = end === 'high' ? f.upper!.display : f.display;
+      assumptions.push(`The text gives a range, ${f.display} to ${f.upper!.display} ("${f.text}"); the end most favourable to the claim, ${chosen}, is used.`);
+    }
+    const { run, inputs } = best;
+    out.push({
+      check: p.check,
+      inputs,
+      uses: p.uses.map((f) => f.id),
+      why: p.why,
+      assumptions,
+      title: def.title,
+      outputs: run.outputs.map(({ name, label, si, unit, display }) => ({ name, label, si, unit, display })),
+      verdict: run.verdict,
+      inputsUsed: run.inputs,
+      permalink: `/checks/${p.check}?${Object.entries(inputs).map(([k, v]) => `${encodeURIComponent(k)}=${encodeURIComponent(v)}`).join('&')}`,
+      law: CHECK_LAW[p.check],
+      finding: run.verdict.holds ? 'consistent' : 'breaks',
+      sentence: sentenceOf(p.check, run),
+    });
+  }
+  return { checks: out, needs, notes };
+}
+
+/** The plans as the contract's PlannedCheck (inputs at the lower ends): for tests and the screen. */
+export function planChecks(figures: Figure[], ctx: PlanContext = {}): { planned: PlannedCheck[]; needs: ClaimCheckNeed[]; notes: string[] } {
+  const { plans, needs, notes } = planFor(figures, ctx);
+  return {
+    planned: plans.map((p) => ({ check: p.check, inputs: p.inputs(() => 'low'), uses: p.uses.map((f) => f.id), why: p.why, assumptions: p.assumptions })),
+    needs,
+    notes,
+  };
 }

@@ -97,7 +97,8 @@ export const FIGURE_KIND_LABEL: Record<FigureKind, string> = {
 
 /**
  * What the figure is, read from the words around it:
- *  - power and energy: 'in' (drawn, supplied, consumed, input) or 'out' (delivered, produced, output);
+ *  - power and energy: 'in' (drawn, supplied, consumed, input), 'out' (delivered, produced, output) or
+ *    'excess' (said to come out over and above the input: out = in + excess);
  *  - temperature: 'hot' or 'cold' (source/sink, ambient, room, outside …);
  *  - cop: 'heating' or 'cooling';
  *  - mass: 'wet' (at the start, with propellant, fuelled, total), 'dry' (at the end, empty) or
@@ -105,7 +106,7 @@ export const FIGURE_KIND_LABEL: Record<FigureKind, string> = {
  *  - speed: 'exhaust' (exhaust or jet speed) or 'delta-v' (a claimed change of speed);
  *  - null when the words do not say.
  */
-export const FIGURE_ROLES = ['in', 'out', 'hot', 'cold', 'heating', 'cooling', 'wet', 'dry', 'propellant', 'exhaust', 'delta-v'] as const;
+export const FIGURE_ROLES = ['in', 'out', 'excess', 'hot', 'cold', 'heating', 'cooling', 'wet', 'dry', 'propellant', 'exhaust', 'delta-v'] as const;
 export type FigureRole = (typeof FIGURE_ROLES)[number] | null;
 
 /** Words said before or around a figure that qualify it ("up to", "about", "±"). */

@@ -1,0 +1,786 @@
+/**
+ * The figure reader of the claim check (issue 11, item 1): the figures of a pasted claim, each with
+ * its kind, SI value, role, the words it was read from and its place in the text — read the way
+ * claims state them, not only as "0.2 lbf".
+ *
+ * How it reads a text:
+ *  1. Numbers. Digits with signs, decimals, English thousands separators ("1,500"), decimal commas
+ *     where they cannot be thousands ("2,5 kW", "0,75 kW"), e-notation and "× 10⁻³"/"x 10^-3"; a
+ *     thousand written "5K"/"5k" before a noun that is not a temperature ("5K cycles"); and numbers
+ *     in words ("two weeks", "three and a half hours", "twelve amps"), recognised by the
+ *     `compromise` package (a well-kept English NLP library) and kept only where a unit follows.
+ *  2. Units. The vocabulary in figures-vocabulary.ts (symbols with their case, words in any case,
+ *     the longest form winning), then mathjs (parseQuantity) for the conversion. Compounds of a
+ *     thrust over a power ("mN/kW", "µN per watt") are a thrust per power, of a power over a mass
+ *     ("W/kg") a specific power; other compounds ("W/m²", "N·m") are not figures.
+ *  3. Kinds by context, in the same sentence:
+ *     - a temperature with difference words ("a 20 °C temperature difference", "ΔT of 20 K", "40
+ *       degrees above ambient") is a temperature difference (20 °C of difference is 20 K);
+ *     - seconds after "Isp"/"specific impulse" are a specific impulse;
+ *     - a percentage: with quantum-efficiency words (EQE, IQE, quantum yield, photons per electron)
+ *       a quantum efficiency; with heat-pump words ("350 % efficient") a heating COP, with
+ *       refrigerator words a cooling COP; with efficiency words an efficiency; "30 % of the speed
+ *       of light" a speed; other percentages are not figures;
+ *     - a bare number after "COP", "efficiency", "EQE", "over-unity ratio of", or in "1.3 units back for
+ *       every unit", "three times the energy it takes", "output is 3 times the input" (a gain, read as
+ *       an efficiency).
+ *  4. Ranges and hedges: "3–6 mN", "3 to 6 mN", "between 0.5 and 1.5 kW", "from 2 to 4 kW" and
+ *     "1.2 ± 0.3 mN" are one figure with an upper end; "up to", "about", "~", "at least", "more
+ *     than" … are kept as the figure's hedge.
+ *  5. Roles from the words around (figures-vocabulary.ts): in/out/excess for power and energy,
+ *     hot/cold for temperatures, heating/cooling for a COP, wet/dry/propellant for masses,
+ *     exhaust/delta-v for speeds.
+ *  6. Relations, as derived figures with the words they came from:
+ *     - a current and a voltage in one clause ("12 A at 24 V") → a power I·V;
+ *     - an excess over a stated input ("4 W more heat than the 20 W it draws") → out = in + excess;
+ *     - "self-running", "needs no supply" … (not where the device harvests an outside flow) → in = 0;
+ *     - one temperature and a difference → the other temperature (hot = cold + ΔT, or cold = hot − ΔT).
+ *  Numbers after a label ("Figure 2 A", "Section 3.2", "p. 12", "Eq. 4", "§ 3") and years before an
+ *  initial ("in 2019 A. N. Other") are not figures.
+ */
+import nlp from 'compromise';
+import { QuantityError, formatQuantity, parseQuantity } from '../worksheet/quantity';
+import {
+  BARE_CONNECTORS,
+  COOLING_MACHINE_WORDS,
+  COP_COOLING,
+  COP_HEATING,
+  DIFFERENCE_AFTER,
+  DIFFERENCE_BEFORE,
+  EFFICIENCY_CHANGE_WORDS,
+  HARVEST_WORDS,
+  HEAT_PUMP_WORDS,
+  HEDGES,
+  ISP_WORDS,
+  LABEL_WORDS,
+  MASS_ROLES,
+  POWER_ENERGY_ROLES,
+  QUANTUM_EFFICIENCY_WORDS,
+  SELF_RUNNING_WORDS,
+  SPEED_ROLES,
+  TEMPERATURE_ROLES,
+  THOUSAND_NOUNS,
+  UNIT_FORMS,
+  C_M_PER_S,
+  type RoleWords,
+  type UnitForm,
+} from './figures-vocabulary';
+import { FIGURE_SI_UNIT, type Figure, type FigureHedge, type FigureKind, type FigureRole } from './types';
+
+// ---------------------------------------------------------------------------------------------
+// The unit vocabulary, compiled
+
+const escapeRe = (s: string) => s.replace(/[.*+?^${}()|[\]\\/]/g, '\\$&');
+const symbolKey = (s: string) => s.replace(/\s+/g, '');
+const wordKey = (s: string) => s.toLowerCase().split(/[\s-]+/).join(' ');
+const byLength = (a: string, b: string) => b.length - a.length;
+const alt = (words: readonly string[]) => words.join('|');
+
+const SYMBOLS = new Map<string, UnitForm>();
+const WORDS = new Map<string, UnitForm>();
+for (const form of UNIT_FORMS) {
+  for (const s of form.symbols ?? []) {
+    const prior = SYMBOLS.get(symbolKey(s));
+    if (prior && prior !== form) throw new Error(`figures-vocabulary: the symbol "${s}" is listed twice`);
+    SYMBOLS.set(symbolKey(s), form);
+  }
+  for (const w of form.words ?? []) {
+    const prior = WORDS.get(wordKey(w));
+    if (prior && prior !== form) throw new Error(`figures-vocabulary: the word "${w}" is listed twice`);
+    WORDS.set(wordKey(w), form);
+  }
+}
+
+/** Between a number and its unit: up to three spaces (not a line break), or a hyphen ("a 2-A current", "a 72-hour run"). */
+const SEP = '(?:[^\\S\\n]{1,3}|-)?';
+const symbolAlts = UNIT_FORMS.flatMap((f) => f.symbols ?? [])
+  .sort(byLength)
+  .map((s) => escapeRe(s).replace(/ /g, '\\s?'))
+  .join('|');
+const wordAlts = UNIT_FORMS.flatMap((f) => f.words ?? [])
+  .sort(byLength)
+  .map((w) => w.split(/[\s-]+/).map(escapeRe).join('[\\s-]+'))
+  .join('|');
+/** A symbol must not run on into a letter, digit or power ("K-type", "W²"); compounds are read after it. */
+const SYMBOL_RE = new RegExp(`${SEP}(${symbolAlts})(?![\\p{L}\\p{N}_²³⁻\\^]|-[^\\S\\n]*\\p{N})`, 'uy');
+const WORD_RE = new RegExp(`${SEP}(${wordAlts})(?![\\p{L}\\p{N}_])`, 'iuy');
+const PERCENT_RE = /[^\S\n]{0,2}(?:%|per[ -]?cent(?!\p{L})|pct\.?(?!\p{L}))/iuy;
+/** A compound after a unit: "/kW", " per kilowatt", "·m", "/m²". */
+const COMPOUND_RE = /[^\S\n]*(?:\/|per(?!\p{L})|·|⋅|-(?=[^\S\n]*\p{L}\p{L}?\b))[^\S\n]*/iuy;
+const COMPOUND_AFTER_RE = /[^\S\n]*(?:[/·⋅][^\S\n]*[\p{L}\p{N}]|per[^\S\n]+\p{L})/iuy;
+/** "1.3c", "0.5 c": a multiple of the speed of light (only attached to the number, or spaced before a non-letter). */
+const C_SUFFIX_RE = /(?:c|[^\S\n]c)(?![\p{L}\p{N}_°])/uy;
+/** "5K cycles", "5 k hours": a thousand before a counted noun or a unit word. */
+const THOUSAND_RE = new RegExp(`(?:[^\\S\\n]?[kK](?=[^\\S\\n]+(?:${alt(THOUSAND_NOUNS)})(?![\\p{L}]))|[^\\S\\n]+thousand(?!\\p{L}))`, 'uy');
+const MILLION_RE = /[^\S\n]+(?:million|M(?=[^\S\n]+(?:cycles?|hours?|miles?|km|units?)))(?!\p{L})/uy;
+
+/**
+ * A number in digits: sign, digits (English thousands separators), decimals (a point, or a comma
+ * that cannot be a thousands separator), then e-notation or × 10^n.
+ */
+const NUMBER_RE =
+  /(?<![\p{L}\p{N}_.,/^])([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?!\p{L})|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
+
+const SUPERSCRIPT_DIGITS: Record<string, string> = { '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-', '⁺': '' };
+
+const LABEL_RE = new RegExp(`(?:(?<!\\p{L})(?:${alt(LABEL_WORDS)})|[§#¶])[^\\S\\n]*$`, 'iu');
+const PLUS_MINUS_RE = /(?:±|\+\/-|\+-)[^\S\n]*$/u;
+
+const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
+const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
+const COP_WORDS_BEFORE_RE = new RegExp(`(?<!\\p{L})coefficients?[\\s-]+of[\\s-]+performance(?:[^\\S\\n]*\\(COP\\))?${CONNECT}$`, 'iu');
+const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|η)(?!\\p{L})${CONNECT}$`, 'iu');
+const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})([^\\d.;!?\\n]{0,60})$`, 'iu');
+const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');
+/** "efficiency … 45%": the keyword, then up to 60 characters without digits or a sentence break. */
+const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient)(?!\p{L})([^\d.;!?\n]{0,60})$/iu;
+const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
+/** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
+const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|cy|cies)(?!\p{L})/iuy;
+const SPEED_OF_LIGHT_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light|[^\S\n]*of[^\S\n]+c(?!\p{L})|[^\S\n]*(?:the[^\S\n]+)?light[- ]speed/iuy;
+const HEAT_PUMP_RE = new RegExp(`(?<!\\p{L})(?:${alt(HEAT_PUMP_WORDS)})(?!\\p{L})`, 'iu');
+const COOLING_MACHINE_RE = new RegExp(`(?<!\\p{L})(?:${alt(COOLING_MACHINE_WORDS)})(?!\\p{L})`, 'iu');
+const DIFF_BEFORE_RE = new RegExp(`(?<![\\p{L}])(?:${alt(DIFFERENCE_BEFORE)})(?!\\p{L})(?:[^\\S\\n]*(?:[=:≈~]|of|is|was|by|about|around|only|just|a|an|some|up to|nearly|roughly|approximately|just over|just under|over|under))*[^\\S\\n]*$`, 'iu');
+const DIFF_AFTER_RE = new RegExp(`[^\\S\\n]*(?:\\)[^\\S\\n]*)?(?:(?:temperature|thermal|of|the)[^\\S\\n]+){0,2}(?:${alt(DIFFERENCE_AFTER)})(?!\\p{L})`, 'iuy');
+const ISP_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})${CONNECT}$`, 'u');
+/** Gains: "1.3 units back for every unit", "three times the energy it takes", "output is 3 times the input". */
+const GAIN_AFTER_RE =
+  /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|work)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input))?[^\S\n]+(?:in|put in|supplied|consumed|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested)/iuy;
+const TIMES_AFTER_RE =
+  /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical)[^\S\n]+)?(?:input|consumption|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in)/iuy;
+const TIMES_BEFORE_RE = /(?<!\p{L})(?:output|yield|gain|returns?|delivers?|produces?|generates?)(?:[^\S\n]+(?:is|of|was|are|reaches|reached|power|energy|exactly|about|roughly|some|nearly))*[^\S\n]*$/iu;
+const RATIO_BEFORE_RE = /(?<!\p{L})(?:over-?unity|output[- ]to[- ]input|out(?:put)?\/in(?:put)?|energy gain|power gain|gain|amplification|multiplication)(?:[^\S\n]+(?:ratio|factor|coefficient))?(?:[^\S\n]*(?:[=:≈~]|of|is|was|reaching|about|around|approximately|roughly|near|up to|over|above|exceeding))*[^\S\n]*$/iu;
+
+/** Words that may stand between a figure and the role word after it ("2 kW of electrical input"). */
+const AFTER_FILLER =
+  '(?:(?:of|the|its|electrical|electric|thermal|mechanical|heat|net|total|useful|shaft|continuous|peak|rated|gross|average|mean|power|energy|DC|AC|battery|mains|grid)[\\s-]+){0,3}';
+
+interface CompiledRoles {
+  groups: readonly RoleWords[];
+  before: RegExp;
+  after: RegExp;
+}
+
+function compileRoles(groups: readonly RoleWords[]): CompiledRoles {
+  const named = (key: 'before' | 'after') => groups.map((g, i) => `(?<r${i}>${alt(g[key])})`).join('|');
+  return {
+    groups,
+    before: new RegExp(`(?<!\\p{L})(?:${named('before')})(?!\\p{L})`, 'giu'),
+    after: new RegExp(`[^\\S\\n]*-?[^\\S\\n]*${AFTER_FILLER}(?:${named('after')})(?!\\p{L})`, 'iuy'),
+  };
+}
+
+const ROLES: Partial<Record<FigureKind, CompiledRoles>> = {
+  power: compileRoles(POWER_ENERGY_ROLES),
+  energy: compileRoles(POWER_ENERGY_ROLES),
+  temperature: compileRoles(TEMPERATURE_ROLES),
+  mass: compileRoles(MASS_ROLES),
+  speed: compileRoles(SPEED_ROLES),
+};
+/** "1.5 kW in, 3 kW out": a bare in/out right after the figure, ending the clause. */
+const IN_OUT_AFTER_RE = /[^\S\n]*(in|out)(?=[^\S\n]*(?:[,;.!?)\]\n]|and\b|$))/iy;
+const COP_COOLING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_COOLING)})(?!\\p{L})`, 'iu');
+const COP_HEATING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_HEATING)})(?!\\p{L})`, 'iu');
+const HEDGE_RES = HEDGES.map((h) => ({ hedge: h.hedge, re: new RegExp(`(?:(?<!\\p{L})(?:${alt(h.words.filter((w) => /^\p{L}/u.test(w)))})|${h.words.filter((w) => !/^\p{L}/u.test(w)).map(escapeRe).join('|') || '(?!)'})[^\\S\\n]*$`, 'iu') }));
+const SELF_RUNNING_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'giu');
+const HARVEST_RE = new RegExp(`(?<!\\p{L})(?:${alt(HARVEST_WORDS)})(?!\\p{L})`, 'iu');
+const COP_WINDOW = 120;
+const BEFORE_WINDOW = 80;
+const SENTENCE_BREAK_RE = /[.!?;](?:\s|$)|\n/g;
+
+// ---------------------------------------------------------------------------------------------
+// Pass 1: numbers and what follows them
+
+type Suffix =
+  | { type: 'unit'; form: UnitForm; per?: UnitForm }
+  | { type: 'percent' }
+  | null;
+
+interface NumberToken {
+  start: number;
+  /** End of the number itself (a thousand multiplier included). */
+  numEnd: number;
+  /** End of the number and its unit or percent sign. */
+  end: number;
+  /** The number as parseQuantity reads it: "-40", "1500", "3.4e5". */
+  num: string;
+  suffix: Suffix;
+  /** A label's number, a year before an initial: never a figure. */
+  skip: boolean;
+  /** Written after "±": an uncertainty. */
+  plusMinus: boolean;
+  consumed: boolean;
+  /** Written in words ("two weeks"): kept only with a unit. */
+  words: boolean;
+}
+
+function cleanNumber(m: RegExpExecArray): string {
+  const sign = m[1] === undefined || m[1] === '+' ? '' : '-';
+  let exp: string | undefined = m[4] ?? m[5];
+  if (exp !== undefined) exp = exp.replace('−', '-');
+  else if (m[6] !== undefined) exp = [...m[6]].map((c) => SUPERSCRIPT_DIGITS[c]).join('');
+  let int = m[2];
+  let frac = m[3] ?? '';
+  if (/^\d{1,3}(?:,\d{3})+$/.test(int)) int = int.replace(/,/g, '');
+  else if (int.includes(',')) {
+    // A decimal comma: "2,5", "0,75", "3,14159".
+    const [a, b] = int.split(',');
+    int = a;
+    frac = `.${b}`;
+  }
+  return `${sign}${int}${frac}${exp !== undefined ? `e${exp}` : ''}`;
+}
+
+function unitAt(text: string, at: number): { form: UnitForm; end: number } | null {
+  SYMBOL_RE.lastIndex = at;
+  const s = SYMBOL_RE.exec(text);
+  WORD_RE.lastIndex = at;
+  const w = WORD_RE.exec(text);
+  if (s && (!w || s[0].length >= w[0].length)) return { form: SYMBOLS.get(symbolKey(s[1]))!, end: at + s[0].length };
+  if (w) return { form: WORDS.get(wordKey(w[1]))!, end: at + w[0].length };
+  return null;
+}
+
+function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
+  const u = unitAt(text, at);
+  if (u) {
+    // A compound: thrust per power, power per mass; any other compound is not a figure.
+    COMPOUND_RE.lastIndex = u.end;
+    const c = COMPOUND_RE.exec(text);
+    if (c && c[0].trim() !== '-') {
+      const per = unitAt(text, u.end + c[0].length);
+      if (per && !per.form.factor && !u.form.factor) {
+        if (u.form.kind === 'thrust' && per.form.kind === 'power') return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
+        if (u.form.kind === 'power' && per.form.kind === 'mass') return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
+      }
+      COMPOUND_AFTER_RE.lastIndex = u.end;
+      if (COMPOUND_AFTER_RE.test(text) && !/^[^\S\n]*-/.test(text.slice(u.end))) return { suffix: null, end: at };
+    }
+    return { suffix: { type: 'unit', form: u.form }, end: u.end };
+  }
+  C_SUFFIX_RE.lastIndex = at;
+  const cm = C_SUFFIX_RE.exec(text);
+  if (cm && !/^[^\S\n]c[^\S\n]*[.,;]?[^\S\n]*$/.test(text.slice(at, at + cm[0].length + 2)) && /^c/.test(cm[0])) {
+    return { suffix: { type: 'unit', form: SPEED_OF_LIGHT }, end: at + cm[0].length };
+  }
+  PERCENT_RE.lastIndex = at;
+  const p = PERCENT_RE.exec(text);
+  if (p) return { suffix: { type: 'percent' }, end: at + p[0].length };
+  return { suffix: null, end: at };
+}
+
+const SPEED_OF_LIGHT: UnitForm = { kind: 'speed', unit: 'm/s', factor: C_M_PER_S };
+
+const WORD_NUMBER_HINT = /(?<!\p{L})(?:one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|sixteen|seventeen|eighteen|nineteen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|thousand|half|dozen|a quarter)(?!\p{L})/iu;
+
+/** Numbers in words, through compromise: start, end and value of each. */
+function wordNumbers(text: string): { start: number; end: number; value: number }[] {
+  if (!WORD_NUMBER_HINT.test(text)) return [];
+  const out: { start: number; end: number; value: number }[] = [];
+  const doc = nlp(text);
+  const found = doc.numbers().json({ offset: true }) as { text: string; offset: { start: number; length: number }; number?: { num?: number } }[];
+  for (const n of found) {
+    const raw = text.slice(n.offset.start, n.offset.start + n.offset.length);
+    if (/\d/.test(raw)) continue; // digits are read by NUMBER_RE
+    const value = n.number?.num;
+    if (typeof value !== 'number' || !Number.isFinite(value)) continue;
+    const trimmed = raw.replace(/[\s-]+$/u, '');
+    out.push({ start: n.offset.start, end: n.offset.start + trimmed.length, value });
+  }
+  // "a dozen", "half an hour": compromise leaves these; they are rare in claims with figures.
+  return out;
+}
+
+function tokenize(text: string): NumberToken[] {
+  const tokens: NumberToken[] = [];
+  NUMBER_RE.lastIndex = 0;
+  const push = (start: number, numEndRaw: number, num: string, words: boolean) => {
+    let numEnd = numEndRaw;
+    let value = num;
+    THOUSAND_RE.lastIndex = numEnd;
+    const k = THOUSAND_RE.exec(text);
+    if (k) {
+      value = String(Number(num) * 1000);
+      numEnd += k[0].length;
+    } else {
+      MILLION_RE.lastIndex = numEnd;
+      const mm = MILLION_RE.exec(text);
+      if (mm) {
+        value = String(Number(num) * 1e6);
+        numEnd += mm[0].length;
+      }
+    }
+    const { suffix, end } = readSuffix(text, numEnd);
+    const before = text.slice(Math.max(0, start - 16), start);
+    let skip = LABEL_RE.test(before);
+    if (!skip && /^\d{4}$/.test(num) && numEnd === numEndRaw) {
+      const year = Number(num);
+      const after = text.slice(numEnd, end);
+      if (year >= 1800 && year <= 2100) {
+        // "in 2019 A. N. Other" (an initial), "the 1990s", "in 2025 s" is not a time.
+        if (suffix?.type === 'unit' && after.trim().length === 1 && /^[.,]/.test(text.slice(end, end + 1))) skip = true;
+        if (suffix?.type === 'unit' && /^s$/.test(after)) skip = true;
+      }
+    }
+    tokens.push({ start, numEnd, end, num: value, suffix, skip, plusMinus: PLUS_MINUS_RE.test(before), consumed: false, words });
+  };
+  for (let m = NUMBER_RE.exec(text); m; m = NUMBER_RE.exec(text)) push(m.index, m.index + m[0].length, cleanNumber(m), false);
+  for (const w of wordNumbers(text)) {
+    if (tokens.some((t) => t.start < w.end && w.start < t.end)) continue;
+    push(w.start, w.end, String(w.value), true);
+  }
+  tokens.sort((a, b) => a.start - b.start);
+  return tokens;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Pass 2: figures
+
+interface Draft {
+  start: number;
+  end: number;
+  kind: FigureKind;
+  quantity: string;
+  upper?: string;
+  role: FigureRole;
+  hedge?: FigureHedge;
+  derived?: string;
+  assumption?: string;
+}
+
+function suffixKind(s: Suffix): string | null {
+  if (s === null) return null;
+  if (s.type === 'percent') return '%';
+  return s.per ? `${s.form.kind}/${s.per.kind}` : s.form.kind;
+}
+
+function isRangeGap(text: string, gapStart: number, gapEnd: number, firstStart: number): boolean {
+  const gap = text.slice(gapStart, gapEnd);
+  if (/^[^\S\n]*(?:[-–—]|to|or|and up to|up to|through|-to-)[^\S\n]*$/i.test(gap)) return !/^[^\S\n]+or[^\S\n]+$/i.test(gap) || /between|from/i.test(text.slice(Math.max(0, firstStart - 12), firstStart));
+  return /^[^\S\n]+and[^\S\n]+$/i.test(gap) && /(?:between|from)[^\S\n]+$/i.test(text.slice(Math.max(0, firstStart - 12), firstStart));
+}
+
+/** Start of the window of words before `at`: the previous figure, the sentence start or `at - max`. */
+function windowStart(text: string, at: number, floor: number, max: number): number {
+  let from = Math.max(floor, at - max);
+  SENTENCE_BREAK_RE.lastIndex = 0;
+  const slice = text.slice(from, at);
+  let cut = -1;
+  for (let m = SENTENCE_BREAK_RE.exec(slice); m; m = SENTENCE_BREAK_RE.exec(slice)) cut = m.index + m[0].length;
+  if (cut >= 0) from += cut;
+  return from;
+}
+
+/** The sentence around [start, end): from the last sentence break before to the next after. */
+function sentenceAround(text: string, start: number, end: number): string {
+  const from = windowStart(text, start, 0, 400);
+  const rest = text.slice(end, end + 400);
+  const m = /[.!?;](?:\s|$)|\n/.exec(rest);
+  return text.slice(from, m ? end + m.index : end + rest.length);
+}
+
+function roleFromWords(text: string, roles: CompiledRoles, start: number, end: number, floor: number): FigureRole {
+  roles.after.lastIndex = end;
+  const a = roles.after.exec(text);
+  if (a?.groups) {
+    for (let i = 0; i < roles.groups.length; i++) if (a.groups[`r${i}`] !== undefined) return roles.groups[i].role;
+  }
+  const from = windowStart(text, start, floor, BEFORE_WINDOW);
+  const slice = text.slice(from, start);
+  roles.before.lastIndex = 0;
+  let last: RegExpExecArray | null = null;
+  for (let m = roles.before.exec(slice); m; m = roles.before.exec(slice)) last = m;
+  if (last?.groups) {
+    for (let i = 0; i < roles.groups.length; i++) if (last.groups[`r${i}`] !== undefined) return roles.groups[i].role;
+  }
+  return null;
+}
+
+function roleFor(text: string, kind: FigureKind, start: number, end: number, floor: number): FigureRole {
+  if (kind === 'power' || kind === 'energy') {
+    IN_OUT_AFTER_RE.lastIndex = end;
+    const io = IN_OUT_AFTER_RE.exec(text);
+    if (io) return io[1].toLowerCase() === 'in' ? 'in' : 'out';
+  }
+  const roles = ROLES[kind];
+  if (roles) return roleFromWords(text, roles, start, end, floor);
+  if (kind === 'cop') {
+    const around = text.slice(Math.max(0, start - COP_WINDOW), Math.min(text.length, end + COP_WINDOW));
+    if (COP_COOLING_RE.test(around)) return 'cooling';
+    if (COP_HEATING_RE.test(around)) return 'heating';
+  }
+  return null;
+}
+
+function hedgeBefore(text: string, start: number): FigureHedge | undefined {
+  const before = text.slice(Math.max(0, start - 24), start);
+  for (const h of HEDGE_RES) if (h.re.test(before)) return h.hedge;
+  return undefined;
+}
+
+type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; unit: string; assumption?: string } | null;
+
+/** What a percentage is, by its context. */
+function readPercent(text: string, start: number, end: number, floor: number): PercentReading {
+  SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
+  const light = SPEED_OF_LIGHT_AFTER_RE.exec(text);
+  if (light) return { kind: 'speed', factor: C_M_PER_S / 100, unit: 'm/s' };
+  const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start);
+  QE_AFTER_RE.lastIndex = end;
+  const qe = QE_BEFORE_RE.exec(before);
+  if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };
+  EFFICIENCY_AFTER_RE.lastIndex = end;
+  const after = EFFICIENCY_AFTER_RE.test(text);
+  const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before);
+  const efficiency = after || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1]));
+  if (!efficiency) return null;
+  const sentence = sentenceAround(text, start, end);
+  const value = Number(text.slice(start, end).replace(/[^\d.,eE+-]/g, '').replace(',', '.'));
+  if (HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
+    if (!(value <= 100)) return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump said to be more than 100 % efficient: read as a heating COP (heat delivered over work put in).' };
+    return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump\'s percentage read as a heating COP (heat delivered over work put in).' };
+  }
+  if (COOLING_MACHINE_RE.test(sentence) && value > 100) {
+    return { kind: 'cop', role: 'cooling', factor: 0.01, unit: '', assumption: 'A refrigerator or air conditioner said to be more than 100 % efficient: read as a cooling COP (heat drawn out over work put in).' };
+  }
+  return { kind: 'efficiency', factor: 1, unit: '%' };
+}
+
+/** The kind of a bare number, from the words before it; a gain or ratio from the words after. */
+function bareKind(text: string, start: number, end: number, floor: number): { kind: FigureKind; role?: FigureRole; derived?: string } | null {
+  const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start);
+  if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before)) return { kind: 'cop' };
+  if (QE_BEFORE_RE.test(before) && /(?:[=:]|of|is|was|reaching|above|over|exceeding)[^\S\n]*$/i.test(before)) return { kind: 'quantum-efficiency' };
+  if (EFFICIENCY_BARE_BEFORE_RE.test(before)) return { kind: 'efficiency' };
+  if (RATIO_BEFORE_RE.test(before)) return { kind: 'efficiency', derived: 'a ratio of output to input' };
+  GAIN_AFTER_RE.lastIndex = end;
+  if (GAIN_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'units out for each unit in' };
+  TIMES_AFTER_RE.lastIndex = end;
+  if (TIMES_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
+  if (/^[^\S\n]*(?:times|x|×)(?!\p{L})/iu.test(text.slice(end, end + 8)) && TIMES_BEFORE_RE.test(before) && /input|consum|draw|put in|supplied|takes|uses/i.test(text.slice(end, end + 60))) {
+    return { kind: 'efficiency', derived: 'output as a multiple of the input' };
+  }
+  return null;
+}
+
+/** The number × factor, written so that parseQuantity reads it back. */
+function scaled(num: string, factor: number | undefined): string {
+  if (factor === undefined) return num;
+  return String(Number((Number(num) * factor).toPrecision(15)));
+}
+
+function unitQuantity(num: string, s: Extract<Suffix, { type: 'unit' }>): { kind: FigureKind; quantity: string } {
+  if (s.per) {
+    const kind: FigureKind = s.form.kind === 'thrust' ? 'thrust-per-power' : 'specific-power';
+    return { kind, quantity: `${num} ${s.form.unit} / ${s.per.unit}` };
+  }
+  return { kind: s.form.kind, quantity: `${scaled(num, s.form.factor)} ${s.form.unit}` };
+}
+
+/** A temperature read as a difference: "20 degC" of difference is "20 K"; "36 degF" is 20 K. */
+function differenceQuantity(num: string, unit: string): string {
+  const n = Number(num);
+  if (unit === 'degC' || unit === 'K') return `${num} K`;
+  if (unit === 'mK') return `${num} mK`;
+  if (unit === 'degF') return `${Number(((n * 5) / 9).toPrecision(15))} K`;
+  return `${num} K`;
+}
+
+function isDifference(text: string, start: number, end: number, floor: number): boolean {
+  const before = text.slice(Math.max(floor, start - 60), start);
+  if (DIFF_BEFORE_RE.test(before)) {
+    // "only 20 °C" / "just 20 °C" alone are not differences: the clause must speak of one.
+    const m = DIFF_BEFORE_RE.exec(before)!;
+    if (!/^(?:only|a mere|just)/i.test(m[0].trim()) || /differen|gradient|ΔT|delta|lift|rise/i.test(sentenceAround(text, start, end))) return true;
+  }
+  DIFF_AFTER_RE.lastIndex = end;
+  const a = DIFF_AFTER_RE.exec(text);
+  if (!a) return false;
+  const word = a[0].trim().toLowerCase();
+  // "20 °C above ambient", "heated 40 K over room temperature"; "between" only as "20 K between the plates".
+  if (/^(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)/.test(word)) {
+    return /^[^\S\n]*(?:than[^\S\n]+)?(?:the[^\S\n]+)?(?:ambient|room|outside|surroundings|environment|air|water|inlet|sink|source|cold|hot|the other|its|freezing|\p{N})/iu.test(text.slice(end + a[0].length, end + a[0].length + 40)) || /^\s*than/.test(text.slice(end + a[0].length));
+  }
+  if (/^between|^apart|^across/.test(word)) return /^[^\S\n]*(?:the|its|two|both|hot|cold|plates|sides|ends|junctions|reservoirs)/i.test(text.slice(end + a[0].length, end + a[0].length + 20));
+  return true;
+}
+
+/**
+ * The figures in a pasted text, in order of appearance, with ids "f1", "f2", …; derived figures
+ * follow the figures they come from. See the file's comment for what is read.
+ */
+export function extractFigures(text: string): Figure[] {
+  const tokens = tokenize(text);
+  const drafts: Draft[] = [];
+  let floor = 0;
+
+  for (let i = 0; i < tokens.length; i++) {
+    const t = tokens[i];
+    if (t.skip || t.consumed || t.plusMinus) continue;
+    let suffix = t.suffix;
+    let end = t.end;
+    const start = t.start;
+    let upperNum: string | undefined;
+    const next: NumberToken | undefined = tokens[i + 1];
+    // Ranges and uncertainties: "3–6 mN", "3 mN to 6 mN", "between 0.5 and 1.5 kW", "1.2 ± 0.3 mN".
+    if (next && !next.skip) {
+      const gapStart = t.suffix ? t.end : t.numEnd;
+      const pmGap = /^[^\S\n]*(?:±|\+\/-|\+-)[^\S\n]*$/.test(text.slice(gapStart, next.start));
+      if (pmGap && next.plusMinus && (!t.suffix || suffixKind(t.suffix) === suffixKind(next.suffix) || !next.suffix)) {
+        const unc = Number(next.num);
+        const mid = Number(t.num);
+        suffix = t.suffix ?? next.suffix;
+        upperNum = String(Number((mid + unc).toPrecision(15)));
+        t.num = String(Number((mid - unc).toPrecision(15)));
+        end = t.suffix && !next.suffix ? next.numEnd : next.end;
+        next.consumed = true;
+      } else if (
+        !next.plusMinus &&
+        isRangeGap(text, gapStart, next.start, t.start) &&
+        (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) &&
+        next.suffix &&
+        // Two temperatures "between 600 °C and 30 °C" or "from 10 °C to 55 °C" are the two sides, not a range.
+        !(suffixKind(next.suffix) === 'temperature' && !/^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start)) && !isDifference(text, t.start, next.end, floor))
+      ) {
+        suffix = next.suffix;
+        upperNum = next.num;
+        end = next.end;
+        next.consumed = true;
+      }
+    }
+    if (t.words && !suffix) continue;
+
+    let kind: FigureKind | null = null;
+    let quantity = '';
+    let upper: string | undefined;
+    let role: FigureRole | undefined;
+    let derived: string | undefined;
+    let assumption: string | undefined;
+    if (suffix?.type === 'unit') {
+      const q = unitQuantity(t.num, suffix);
+      kind = q.kind;
+      quantity = q.quantity;
+      if (upperNum !== undefined) upper = unitQuantity(upperNum, suffix).quantity;
+      if (kind === 'temperature' && isDifference(text, start, end, floor)) {
+        kind = 'temperature-difference';
+        quantity = differenceQuantity(scaled(t.num, suffix.form.factor), suffix.form.unit);
+        if (upperNum !== undefined) upper = differenceQuantity(upperNum, suffix.form.unit);
+      } else if (kind === 'duration' && suffix.form.unit === 's' && ISP_BEFORE_RE.test(text.slice(Math.max(floor, start - BEFORE_WINDOW), start))) {
+        kind = 'specific-impulse';
+      }
+    } else if (suffix?.type === 'percent') {
+      const reading = readPercent(text, start, end, floor);
+      if (reading) {
+        kind = reading.kind;
+        role = reading.role;
+        assumption = reading.assumption;
+        const q = (n: string) => (reading.unit === '%' ? `${n} %` : reading.unit ? `${scaled(n, reading.factor)} ${reading.unit}` : scaled(n, reading.factor));
+        quantity = q(t.num);
+        if (upperNum !== undefined) upper = q(upperNum);
+      }
+    } else {
+      const bare = bareKind(text, start, t.numEnd, floor);
+      if (bare && !t.words) {
+        kind = bare.kind;
+        role = bare.role;
+        derived = bare.derived;
+        quantity = t.num;
+        if (upperNum !== undefined) upper = upperNum;
+      } else if (bare && t.words) {
+        kind = bare.kind;
+        derived = bare.derived;
+        quantity = t.num;
+      }
+    }
+    if (kind === null) continue;
+    if (role === undefined) role = roleFor(text, kind, start, end, floor);
+    let hedge = hedgeBefore(text, start);
+    // "over two weeks", "for over 3 hours" speak of the time the claim covers.
+    if (kind === 'duration' && (hedge === 'more-than' || hedge === 'less-than')) hedge = undefined;
+    // A range's lower end must be the lower number ("6–3 mN" is read as 3 to 6).
+    if (upper !== undefined) {
+      try {
+        const unit = FIGURE_SI_UNIT[kind];
+        if (parseQuantity(upper, unit) < parseQuantity(quantity, unit)) [quantity, upper] = [upper, quantity];
+      } catch {
+        /* left to the final pass */
+      }
+    }
+    drafts.push({ start, end, kind, quantity, upper, role, hedge, derived, assumption });
+    floor = end;
+  }
+
+  relate(text, drafts);
+
+  const figures: Figure[] = [];
+  for (const d of drafts) {
+    const unit = FIGURE_SI_UNIT[d.kind];
+    let si: number;
+    let up: Figure['upper'];
+    try {
+      si = parseQuantity(d.quantity, unit);
+      if (d.upper !== undefined) {
+        const u = parseQuantity(d.upper, unit);
+        up = { quantity: d.upper, si: u, display: formatQuantity(u, unit) };
+      }
+    } catch (err) {
+      if (err instanceof QuantityError) continue; // not a figure after all (kept out rather than guessed)
+      throw err;
+    }
+    const f: Figure = {
+      id: `f${figures.length + 1}`,
+      kind: d.kind,
+      quantity: d.quantity,
+      text: text.slice(d.start, d.end),
+      start: d.start,
+      end: d.end,
+      si,
+      unit,
+      display: formatQuantity(si, unit),
+      role: d.role,
+    };
+    if (up) f.upper = up;
+    if (d.hedge) f.hedge = d.hedge;
+    if (d.derived) f.derived = d.derived;
+    if (d.assumption) f.assumption = d.assumption;
+    figures.push(f);
+  }
+  return figures;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Pass 3: relations between figures
+
+const typedSi = (si: number, unit: string) => `${Number(si.toPrecision(12))} ${unit}`.trim();
+
+function siOf(d: Draft): number | null {
+  try {
+    return parseQuantity(d.quantity, FIGURE_SI_UNIT[d.kind]);
+  } catch {
+    return null;
+  }
+}
+function upperSiOf(d: Draft): number | null {
+  if (d.upper === undefined) return null;
+  try {
+    return parseQuantity(d.upper, FIGURE_SI_UNIT[d.kind]);
+  } catch {
+    return null;
+  }
+}
+
+/** Derived figures, inserted after the figures they come from (see the file's comment). */
+function relate(text: string, drafts: Draft[]): void {
+  const insertAfter = (anchor: Draft, d: Draft) => {
+    const at = drafts.indexOf(anchor);
+    drafts.splice(at + 1, 0, d);
+  };
+  const sameSentence = (a: Draft, b: Draft) => {
+    const [x, y] = a.start < b.start ? [a, b] : [b, a];
+    return !/[.!?;](?:\s|$)|\n/.test(text.slice(x.end, y.start));
+  };
+
+  // "4 W more heat than the 20 W it draws": the first is an excess, the second the input.
+  for (let i = 0; i + 1 < drafts.length; i++) {
+    const a = drafts[i];
+    const b = drafts[i + 1];
+    if (!(a.kind === b.kind && (a.kind === 'power' || a.kind === 'energy'))) continue;
+    const gap = text.slice(a.end, b.start);
+    if (/^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:more|extra|additional|over and above|above|beyond|in excess of|on top of)(?:[^\S\n]+[\p{L}-]+){0,4}?[^\S\n]+(?:than|over|of|on|above)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|an[^\S\n]+|a[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}$/iu.test(gap) || /^[^\S\n]+(?:more|extra)[^\S\n]+than[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?$/iu.test(gap)) {
+      a.role = 'excess';
+      b.role = 'in';
+    }
+  }
+
+  // out = in + excess, when the text gives no output itself.
+  for (const kind of ['power', 'energy'] as const) {
+    const excess = drafts.find((d) => d.kind === kind && d.role === 'excess' && !d.derived);
+    const input = drafts.find((d) => d.kind === kind && d.role === 'in');
+    const output = drafts.find((d) => d.kind === kind && d.role === 'out');
+    if (excess && input && !output) {
+      const e = siOf(excess);
+      const n = siOf(input);
+      if (e === null || n === null) continue;
+      const unit = FIGURE_SI_UNIT[kind];
+      const eu = upperSiOf(excess);
+      const anchor = excess.start > input.start ? excess : input;
+      insertAfter(anchor, {
+        start: Math.min(excess.start, input.start),
+        end: Math.max(excess.end, input.end),
+        kind,
+        quantity: typedSi(n + e, unit),
+        upper: eu !== null ? typedSi(n + eu, unit) : undefined,
+        role: 'out',
+        derived: `output = input + excess (${formatQuantity(n, unit)} + ${formatQuantity(e, unit)})`,
+      });
+    }
+  }
+
+  // Power from a current and a voltage in the same clause: "12 A at 24 V", "3 amps from a 48-volt pack".
+  for (const cur of drafts.filter((d) => d.kind === 'current')) {
+    const volt = drafts.find((d) => d.kind === 'voltage' && sameSentence(d, cur) && Math.abs(d.start - cur.start) < 120);
+    if (!volt) continue;
+    const i = siOf(cur);
+    const v = siOf(volt);
+    if (i === null || v === null) continue;
+    // The text states that power itself already.
+    if (drafts.some((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= 0.01 * i * v)) continue;
+    const iu = upperSiOf(cur);
+    const vu = upperSiOf(volt);
+    const first = cur.start < volt.start ? cur : volt;
+    const last = first === cur ? volt : cur;
+    // The role: the words around the current or the voltage ("draws 3 A" → in, "delivers 10 A" → out).
+    const role = roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
+    insertAfter(last, {
+      start: first.start,
+      end: last.end,
+      kind: 'power',
+      quantity: typedSi(i * v, 'W'),
+      upper: iu !== null || vu !== null ? typedSi((iu ?? i) * (vu ?? v), 'W') : undefined,
+      role: role === 'excess' ? 'out' : (role ?? 'in'),
+      derived: `power = current × voltage (${formatQuantity(i, 'A')} × ${formatQuantity(v, 'V')})`,
+      assumption: role === null ? 'The power of this current and voltage is read as the power supplied to the device.' : undefined,
+    });
+  }
+
+  // "Self-running", "needs no supply": the input is 0 (not where the device harvests a flow from outside).
+  if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in')) {
+    SELF_RUNNING_RE.lastIndex = 0;
+    const m = SELF_RUNNING_RE.exec(text);
+    const out = drafts.find((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== 'in');
+    if (m && out && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {
+      const start = m.index;
+      const end = m.index + m[0].length;
+      const draft: Draft = { start, end, kind: out.kind, quantity: `0 ${FIGURE_SI_UNIT[out.kind]}`, role: 'in', derived: `no input: "${m[0]}"` };
+      // Keep the drafts in order of their place in the text.
+      const at = drafts.findIndex((d) => d.start > start);
+      if (at < 0) drafts.push(draft);
+      else drafts.splice(at, 0, draft);
+      if (out.role === null) out.role = 'out';
+    }
+  }
+
+  // One temperature and a difference: the other temperature.
+  const temps = drafts.filter((d) => d.kind === 'temperature' && !d.derived);
+  const diff = drafts.find((d) => d.kind === 'temperature-difference');
+  if (diff && temps.length === 1) {
+    const t = temps[0];
+    const tSi = siOf(t);
+    const dSi = siOf(diff);
+    if (tSi !== null && dSi !== null) {
+      const hot = t.role === 'hot';
+      const other = hot ? tSi - dSi : tSi + dSi;
+      const anchor = diff.start > t.start ? diff : t;
+      insertAfter(anchor, {
+        start: Math.min(t.start, diff.start),
+        end: Math.max(t.end, diff.end),
+        kind: 'temperature',
+        quantity: typedSi(other, 'K'),
+        role: hot ? 'cold' : 'hot',
+        derived: hot ? `cold side = hot side − difference` : `hot side = cold side + difference`,
+        assumption: t.role === null ? `The stated temperature is read as the cold side and the difference is added to it; mark it as hot if it is the hot side.` : undefined,
+      });
+      if (t.role === null) t.role = 'cold';
+    }
+  }
+}
