@@ -120,5 +120,25 @@ describe('afterSignIn', () => {
     expect(afterSignIn('//elsewhere.example.org/')).toBe('/account');
     expect(afterSignIn('https://elsewhere.example.org/')).toBe('/account');
     expect(afterSignIn('/sign-in?next=/desk')).toBe('/account');
+    // The query and hash of a page of the app are kept (the claim check comes back to the kept check).
+    expect(afterSignIn('/check?resume=1')).toBe('/check?resume=1');
+    expect(afterSignIn('/entries/a-slug/v/2#sources')).toBe('/entries/a-slug/v/2#sources');
+    // Read as a browser reads it: a backslash is a slash, tabs and line breaks are dropped.
+    expect(afterSignIn('/\\elsewhere.example.org/')).toBe('/account');
+    expect(afterSignIn('/\t/elsewhere.example.org/')).toBe('/account');
+    expect(afterSignIn('/\n/elsewhere.example.org/')).toBe('/account');
+    expect(afterSignIn('javascript:alert(1)')).toBe('/account');
+  });
+
+  it('says it will return to the page the reader came from', () => {
+    mockFetch({ '/api/session': () => jsonResponse(200, { user: null, csrfToken: 'csrf-1' }) });
+    renderWithProviders(<SignInScreen next="/check?resume=1" />);
+    expect(screen.getByTestId('sign-in-returns').textContent).toContain('you go back to the page you came from');
+  });
+
+  it('says nothing of returning when it would go to the account', () => {
+    mockFetch({ '/api/session': () => jsonResponse(200, { user: null, csrfToken: 'csrf-1' }) });
+    renderWithProviders(<SignInScreen next="//elsewhere.example.org/" />);
+    expect(screen.queryByTestId('sign-in-returns')).toBeNull();
   });
 });

@@ -11,10 +11,23 @@ import { Form } from './Form';
 import { ResendVerification } from './ResendVerification';
 import { useForm } from './useForm';
 
-/** Where to go after signing in: the app's own page the reader came from, else the account. */
+/**
+ * Where to go after signing in: the app's own page the reader came from (path, query and hash kept),
+ * else the account. Only a path of this site is followed: it is read as the browser would read it
+ * (which ignores tabs and line breaks and takes a backslash for a slash), and anything that would
+ * leave the site, or lead back to the sign-in screen, goes to the account instead.
+ */
 export function afterSignIn(next: string | undefined): string {
-  const own = next !== undefined && next.startsWith('/') && !next.startsWith('//') && !next.startsWith('/\\');
-  return own && !next.startsWith('/sign-in') ? next : '/account';
+  if (next === undefined || !next.startsWith('/')) return '/account';
+  const here = 'https://counterweight.invalid';
+  let url: URL;
+  try {
+    url = new URL(next, here);
+  } catch {
+    return '/account';
+  }
+  if (url.origin !== here || url.pathname === '/sign-in' || url.pathname.startsWith('/sign-in/')) return '/account';
+  return `${url.pathname}${url.search}${url.hash}`;
 }
 
 interface SignInScreenProps {
@@ -38,6 +51,11 @@ export function SignInScreen({ next, email = '' }: SignInScreenProps) {
       {user ? (
         <Text testID="signed-in-as" style={type.caption}>
           You are signed in as {user.displayName}. Signing in with another account replaces that.
+        </Text>
+      ) : null}
+      {afterSignIn(next) !== '/account' ? (
+        <Text testID="sign-in-returns" style={type.caption}>
+          Once you are signed in, you go back to the page you came from.
         </Text>
       ) : null}
       <Form
