@@ -18,8 +18,10 @@ import { formatCitation, type CitationStyle, type CslItem } from '../entries/cit
 import { parseEntryFile } from '../entries/load';
 import { wordCount, type EntryFile } from '../entries/schema';
 import { buildParagraph, buildParagraphs, contentKeys, lawInProse, matchReply, PARAGRAPH_WORDS_MAX, resultSentence, type ParagraphEntry, type ParagraphsInput } from './paragraph';
+import { readFigure } from './figures';
+import { runClaimChecks } from './plan';
 import { formatPrint } from './print';
-import { PARAGRAPH_VARIANTS, type ClaimCheckNeed, type ClaimCheckRun, type ClaimParagraph, type Figure, type ParagraphVariant } from './types';
+import { PARAGRAPH_VARIANTS, type ClaimCheckNeed, type ClaimCheckRun, type ClaimParagraph, type Figure, type FigureInput, type ParagraphVariant } from './types';
 
 // ---------------------------------------------------------------------------------------------
 // The starter library as paragraph entries
@@ -203,7 +205,8 @@ describe('the four variants', () => {
 
 describe('references', () => {
   describe.each(['apa', 'vancouver', 'harvard'] as const)('in %s', (style: CitationStyle) => {
-    const entries = [entry('resonant-cavity-thruster'), entry('sideways-beam-thruster')];
+    // One short question, so that there is room for the related entry (the first part left out for length).
+    const entries = [{ ...entry('resonant-cavity-thruster'), questions: ['Was it measured in vacuum?'] }, entry('sideways-beam-thruster')];
     const p = buildParagraph({ entries, checks: [photon], needs: [], figures, text: 'A sealed resonator.', style, variant: 'referee' });
     const cavity = entries[0];
 
@@ -395,13 +398,70 @@ describe('results', () => {
   it('rewrite the “× 10^n” of an older sentence into superscripts', () => {
     const old = { ...photon, sentence: 'The claimed thrust is 1.778 × 10^5 times the bound of 5.003 × 10^-6 N' };
     const p = buildParagraph({ ...input(), checks: [old] });
-    expect(p.body).toContain('1.778 × 10⁵ times the bound of 5.003 × 10⁻⁶ N.');
+    expect(p.body).toContain('1.778 × 10⁵ times the bound of 5.003 × 10⁻⁶ N, in conflict with conservation of linear momentum.');
     expect(p.body).not.toContain('^');
   });
 
   it('come one sentence each, breaking ones first', () => {
     const p = buildParagraph({ ...input(), entries: [entry('ambient-heat-engine')], checks: [heatPump, hotEngine], text: '' });
-    expect(p.body.indexOf(hotEngine.sentence)).toBeLessThan(p.body.indexOf(heatPump.sentence));
+    const at = (r: ClaimCheckRun) => p.body.indexOf(r.sentence.replace(/\.$/, ''));
+    expect(at(hotEngine)).toBeGreaterThan(0);
+    expect(at(hotEngine)).toBeLessThan(at(heatPump));
+    // Each names the law it was checked against.
+    expect(p.body).toContain(`${hotEngine.sentence.replace(/\.$/, '')}, in conflict with the second law of thermodynamics.`);
+    expect(p.body).toContain(`${heatPump.sentence.replace(/\.$/, '')}, consistent with the second law of thermodynamics.`);
+  });
+});
+
+describe('with the planner’s own runs', () => {
+  // Invented claims, their figures typed as a reader would fix them, run through the planner.
+  const claims: { text: string; figures: FigureInput[]; entries: string[] }[] = [
+    {
+      text: CAVITY_TEXT,
+      figures: [
+        { kind: 'thrust', quantity: '0.2 lbf' },
+        { kind: 'power', quantity: '1.5 kW', role: 'in' },
+      ],
+      entries: ['resonant-cavity-thruster', 'sideways-beam-thruster', 'internal-mass-drive'],
+    },
+    {
+      text: 'Our heat pump is 350 % efficient, heating a house to 35 °C from 5 °C outside air.',
+      figures: [
+        { kind: 'cop', quantity: '3.5', role: 'heating' },
+        { kind: 'temperature', quantity: '5 degC', role: 'cold' },
+        { kind: 'temperature', quantity: '35 degC', role: 'hot' },
+      ],
+      entries: ['ambient-heat-engine'],
+    },
+    {
+      text: 'The generator gives back 1.3 kWh for every 1 kWh it takes in. The output voltage times the output current is larger than the input power.',
+      figures: [
+        { kind: 'energy', quantity: '1 kWh', role: 'in' },
+        { kind: 'energy', quantity: '1.3 kWh', role: 'out' },
+      ],
+      entries: ['over-unity-circuit', 'permanent-magnet-motor'],
+    },
+  ];
+
+  it.each(claims.map((c) => [c.text.slice(0, 40), c] as const))('%s…: within the limit, numbers in print, one sentence per result', (_t, c) => {
+    const figs = c.figures.map((f, i) => readFigure(f, `f${i + 1}`));
+    const { checks, needs } = runClaimChecks(figs, { text: c.text });
+    expect(checks.length).toBeGreaterThan(0);
+    for (const p of Object.values(buildParagraphs({ entries: c.entries.map((s) => entry(s)), checks, needs, figures: figs, text: c.text, style: 'apa' }))) {
+      expect(wordCount(p.body)).toBeLessThanOrEqual(PARAGRAPH_WORDS_MAX);
+      // No caret power, no e-notation, no long whole number (177806 is printed 1.78 × 10⁵).
+      expect(p.body).not.toMatch(/\^|\de[+-]?\d|\b\d{6,}\b/);
+      // The finding is not said twice ("Conflicts with …: " is the paragraph's to say).
+      expect(p.body).not.toMatch(/(Conflicts|Consistent) with [^:.]+: /);
+      for (const r of checks) {
+        const first = r.sentence.replace(/^(?:conflicts|consistent) with [^:]+:\s+/i, '').split(/(?<=[.!?])\s+(?=[A-Z])/)[0];
+        // Its first sentence is there (up to the numbers put in print); the rest of a long verdict is not.
+        expect(p.body).toContain(first.replace(/[.]$/, '').split(/\d{6,}/)[0]);
+        const rest = r.sentence.split(/(?<=[.!?])\s+(?=[A-Z])/).slice(1).join(' ');
+        if (wordCount(first) >= 8 && rest) expect(p.body).not.toContain(rest);
+      }
+    }
+    if (c.text.startsWith('Our tapered')) expect(buildParagraph({ entries: [entry(c.entries[0])], checks, needs, figures: figs, text: c.text, style: 'apa' }).body).toContain('1.78 × 10⁵ times the photon-rocket bound');
   });
 });
 

@@ -133,7 +133,7 @@ const plain = (md: string) =>
 
 const sentencesOf = (text: string) =>
   plain(text)
-    .split(/(?<=[.!?])\s+(?=[A-Z0-9“"‘'(])/)
+    .split(/(?<=[.!?])\s+(?=[A-Z“"‘'(])/)
     .map((s) => s.trim())
     .filter(Boolean);
 
@@ -245,15 +245,34 @@ function answerForms(answer: string): string[] {
 
 const breaks = (run: ClaimCheckRun) => (run.finding ?? (run.verdict.holds ? 'consistent' : 'breaks')) === 'breaks';
 
-/** One sentence of a run's result, numbers as in print: the planner's, else built from the outputs. */
-export function resultSentence(run: ClaimCheckRun, fallbackLaw = 'the law it rests on'): string {
-  const given = run.sentence?.trim();
-  if (given) return sentence(printText(given));
+/** Computed numbers as in print: powers of ten in superscripts, long whole numbers ("177806") in scientific form. */
+const printed = (s: string) => printText(s, { bigIntegers: true });
+
+/** A planner's sentence may open with its finding ("Conflicts with …: ", "Consistent with …: "). */
+const FINDING_HEAD = /^(?:conflicts|consistent) with [^:]+:\s+(?=[A-Z“"(])/i;
+
+/**
+ * One sentence of a run's result, numbers as in print: the first sentence of the planner's (the
+ * rest of a longer verdict is the check screen's to show), else one built from the outputs. With
+ * `withLaw`, it ends by naming the law it was checked against ("…, in conflict with conservation of
+ * linear momentum."), unless it names it already; without, the paragraph has said the law around it.
+ */
+export function resultSentence(run: ClaimCheckRun, fallbackLaw = 'the law it rests on', withLaw = true): string {
   const law = run.law?.trim() ? lawInProse(run.law) : fallbackLaw;
-  // A pure number (a ratio) to three figures; a quantity as displayed, its powers of ten in print.
-  const outs = run.outputs.map((o) => `the ${lowerFirst(o.label)} is ${o.unit ? printText(o.display) : formatPrint(o.si, 3)}`);
-  const finding = breaks(run) ? `the figures break ${law}` : `the figures are consistent with ${law}`;
-  return `${run.title}: ${outs.length ? `${list(outs)}; ` : ''}${finding}.`;
+  const given = run.sentence?.trim().replace(FINDING_HEAD, '');
+  let core: string;
+  if (given) {
+    const [first, second] = sentencesOf(given);
+    core = printed(second && wordCount(first) < 8 ? `${first} ${second}` : first);
+  } else {
+    // A pure number (a ratio) to three figures; a quantity as displayed, in print.
+    const outs = run.outputs.map((o) => `the ${lowerFirst(o.label)} is ${o.unit ? printed(o.display) : formatPrint(o.si, 3)}`);
+    core = `${run.title}: ${outs.length ? list(outs) : 'no output'}`;
+  }
+  core = core.trim().replace(/[.;:,]+$/, '');
+  const named = core.toLowerCase().includes(sameLaw(law));
+  if (!withLaw || named) return sentence(core);
+  return sentence(`${core}${given ? ',' : ';'} ${breaks(run) ? (given ? 'in conflict with' : 'the figures break') : given ? 'consistent with' : 'the figures are consistent with'} ${law}`);
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -643,8 +662,9 @@ function paragraph(input: ParagraphInput, formatted: Map<string, string>): Claim
   const fallbackLaw = lawsPhrase(laws.length ? laws : okLaws);
   // Results that break first, each once, numbers as in print.
   const ordered = [...broken, ...ok];
-  const results = ordered.map((r) => resultSentence(r, fallbackLaw));
-  const assumptions = [...new Set(ordered.flatMap((r) => r.assumptions ?? []).map((a) => printText(a)))];
+  // Said with each result, unless every result is consistent (the paragraph then names the law once, around them).
+  const results = ordered.map((r) => resultSentence(r, fallbackLaw, mode !== 'consistent'));
+  const assumptions = [...new Set(ordered.flatMap((r) => r.assumptions ?? []).map((a) => printed(a)))];
 
   const m = top ? matchReply(text, top.replies ?? []) : null;
   const forms = m ? answerForms(m.answer) : [];

@@ -116,6 +116,17 @@ describe('printText', () => {
     expect(printText('the 2e-class cells and item 1e')).toBe('the 2e-class cells and item 1e');
   });
 
+  it('prints long whole numbers of computed values in scientific form when asked, and only then', () => {
+    const verdict = 'The claimed thrust, 890 mN, is 177806 times the bound (1000000 W).';
+    expect(printText(verdict)).toBe(verdict);
+    // 177 806 to three figures is 1.78 × 10⁵; 1 000 000 is 1.00 × 10⁶ (by hand).
+    expect(printText(verdict, { bigIntegers: true })).toBe('The claimed thrust, 890 mN, is 1.78 × 10⁵ times the bound (1.00 × 10⁶ W).');
+    expect(printText('ends at 123456.', { bigIntegers: true, digits: 2 })).toBe('ends at 1.2 × 10⁵.');
+    // Five digits, decimals, codes and words stay as written.
+    const keep = 'In 2026, 12345 runs gave 1234567.5 J; ISBN 9780486603612-x and run-1234567 and v1234567.';
+    expect(printText(keep, { bigIntegers: true })).toBe(keep);
+  });
+
   it('leaves no caret power or e-notation in any formatted output it rewrites', () => {
     fc.assert(
       fc.property(fc.double({ noNaN: true, noDefaultInfinity: true, min: -1e300, max: 1e300 }), (x) => {

@@ -75,15 +75,32 @@ const E_NOTATION = /(^|[^\w.])(\d+(?:\.\d*)?|\.\d+)[eE]([+\-\u2212]?\d+)(?![\w.]
 /** A unit or symbol raised to an integer power: "m^2", "s^-1", "s^(-2)". */
 const UNIT_POWER = /([A-Za-zµμΩ°)])\^\s*(?:\(\s*|\{\s*)?([+\-\u2212]?\d+)(?:\s*\)|\s*\})?/g;
 
+/** A whole number of six digits or more standing alone ("177806 times"), not part of a decimal, a word or a code. */
+const BIG_INTEGER = /(^|[\s(“"'])(\d{6,})(?=$|[\s,;:)”"'!?]|\.(?!\d))/g;
+
+export interface PrintTextOptions {
+  /**
+   * Also print whole numbers of six digits or more in scientific form to `digits` significant
+   * figures ("177806 times" → "1.78 × 10⁵ times"). For computed values only: it would mangle a
+   * reference number or a count that must stay exact.
+   */
+  bigIntegers?: boolean;
+  /** Significant figures for bigIntegers (default 3). */
+  digits?: number;
+}
+
 /**
  * Rewrites the plain-text powers of older messages into print: "3.4 × 10^5" and "3.4 x 10^-6" →
  * "3.4 × 10⁵", "3.4 × 10⁻⁶"; "2.5e+11" → "2.5 × 10¹¹"; "10^-3" → "10⁻³"; "m/s^2" → "m/s²". The
- * mantissa is kept as written; text without such powers is returned unchanged.
+ * mantissa is kept as written; text without such powers is returned unchanged. With `bigIntegers`,
+ * long whole numbers are put in scientific form too (see PrintTextOptions).
  */
-export function printText(text: string): string {
-  return text
+export function printText(text: string, options: PrintTextOptions = {}): string {
+  const out = text
     .replace(TIMES_TEN, (_m, digit: string, exp: string) => `${digit} × 10${superscript(exp)}`)
     .replace(E_NOTATION, (_m, before: string, mantissa: string, exp: string) => `${before}${mantissa} × 10${superscript(exp)}`)
     .replace(BARE_TEN, (_m, before: string, exp: string) => `${before}10${superscript(exp)}`)
     .replace(UNIT_POWER, (_m, base: string, exp: string) => `${base}${superscript(exp)}`);
+  if (!options.bigIntegers) return out;
+  return out.replace(BIG_INTEGER, (_m, before: string, digits: string) => `${before}${formatPrint(Number(digits), options.digits ?? 3)}`);
 }
