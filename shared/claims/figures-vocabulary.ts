@@ -18,6 +18,8 @@ export interface UnitForm {
   words?: readonly string[];
   /** When set, the quantity is (number × factor) in `unit`: for forms that mathjs does not know. */
   factor?: number;
+  /** "degrees" alone: a temperature only where the sentence speaks of one (not an angle), read as Celsius. */
+  ambiguous?: boolean;
 }
 
 const MICRO = ['µ', 'μ', 'u'];
@@ -129,6 +131,8 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     words: ['degree Fahrenheit', 'degrees Fahrenheit', 'degree F', 'degrees F', 'Fahrenheit'],
   },
 
+  { kind: 'temperature', unit: 'degC', ambiguous: true, symbols: ['°', 'º'], words: ['degree', 'degrees', 'deg'] },
+
   // Mass ("pounds" is a mass unless "of thrust"/"of force"/"-force" follows: the longer form wins)
   { kind: 'mass', unit: 'kg', symbols: ['kg'], words: ['kilogram', 'kilograms', 'kilogramme', 'kilogrammes', 'kilo', 'kilos'] },
   { kind: 'mass', unit: 'g', symbols: ['g'], words: ['gram', 'grams', 'gramme', 'grammes'] },
@@ -141,19 +145,19 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     kind: 'speed',
     unit: 'm/s',
     symbols: ['m/s', 'm s^-1', 'm s⁻¹', 'm·s⁻¹', 'ms⁻¹', 'ms^-1'],
-    words: ['metre per second', 'metres per second', 'meter per second', 'meters per second'],
+    words: ['metre per second', 'metres per second', 'meter per second', 'meters per second', 'm per second'],
   },
   {
     kind: 'speed',
     unit: 'km/s',
     symbols: ['km/s', 'km s^-1', 'km s⁻¹', 'km·s⁻¹'],
-    words: ['kilometre per second', 'kilometres per second', 'kilometer per second', 'kilometers per second'],
+    words: ['kilometre per second', 'kilometres per second', 'kilometer per second', 'kilometers per second', 'km per second', 'km a second', 'kilometres a second'],
   },
   {
     kind: 'speed',
     unit: 'km/h',
     symbols: ['km/h', 'km/hr', 'kph', 'km h^-1', 'km h⁻¹'],
-    words: ['kilometre per hour', 'kilometres per hour', 'kilometer per hour', 'kilometers per hour'],
+    words: ['kilometre per hour', 'kilometres per hour', 'kilometer per hour', 'kilometers per hour', 'km per hour', 'km an hour'],
   },
   { kind: 'speed', unit: 'mi/h', symbols: ['mph', 'MPH', 'mi/h', 'mi/hr'], words: ['mile per hour', 'miles per hour'] },
   { kind: 'speed', unit: 'mi/s', symbols: ['mi/s'], words: ['mile per second', 'miles per second'] },
@@ -212,10 +216,11 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'burn(?:s|ed|ing)?', 'dissipat(?:e|es|ed|ing)',
+      'took', 'turned by', 'by a', 'fuel', 'containing', 'P_?\\{?in\\}?', 'E_?\\{?in\\}?', 'Pin', 'invest(?:s|ed|ing)?', 'gas input', 'fuel input',
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires)',
-      'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 'in(?=\\s+(?:and|,|to))', 'of input', 'of supply', 'supply'],
+      'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s+(?:and|,|to))', 'of input', 'of supply', 'supply'],
   },
   {
     role: 'out',
@@ -225,11 +230,12 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
       'drives?', 'driving', 'powers', 'powering', 'lights?', 'lighting', 'heats?', 'heating', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
-      'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of',
+      'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
+      'puts', 'put', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
-      'outputs?', 'delivered', 'produced', 'generated', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
+      'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
   },
 ];
 
@@ -239,10 +245,10 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
     before: [
       'hot', 'hotter', 'hottest', 'source', 'flames?', 'steam', 'boiler', 'furnace', 'combustion', 'burner', 'heated to', 'high-temperature',
       'exhaust', 'waste heat', 'geothermal', 'deliver(?:s|ed|ing)? (?:water |air |heat )?at', 'supply temperature', 'flow temperature', 'output temperature',
-      'indoors?', 'indoor', 'inside', 'radiators?', 'underfloor', 'hot water', 'condensing', 'up to', 'to heat', 'heats? (?:\\w+ )?to', 'heating to',
-      'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper',
+      'radiators?', 'underfloor', 'warm', 'warmer', 'warm (?:end|side)', 'to a', 'into a', 'hot water', 'condensing', 'up to', 'to heat', 'heats? (?:\\w+ )?to', 'heating to',
+      'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper', 'firing', 'firing temperature',
     ],
-    after: ['source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'indoors?', 'inside', 'supply', 'flow', 'output', 'hot side', 'inlet'],
+    after: ['source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor', 'loop', 'tank', 'radiators?'],
   },
   {
     role: 'cold',
@@ -261,7 +267,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
   {
     role: 'wet',
     before: [
-      'wet', 'fuell?ed', 'fully fuell?ed', 'initial', 'starting', 'start', 'launch', 'lift-?off', 'take-?off', 'gross', 'total', 'loaded', 'full',
+      'wet', 'fuell?ed', 'fully fuell?ed', 'initial', 'starting', 'start', 'launch', 'lift-?off', 'lifts? off (?:at|with)', 'take-?off', 'gross', 'total', 'loaded', 'full',
       'at launch', 'at ignition', 'before the burn',
     ],
     after: ['wet', 'fuell?ed', 'at launch', 'at lift-?off', 'at the start', 'initially', 'fully loaded', 'loaded', 'in all', 'all told', 'gross', 'total'],
@@ -275,7 +281,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
     role: 'propellant',
     before: ['propellant', 'fuel', 'reaction mass', 'xenon', 'krypton', 'argon', 'hydrazine', 'oxidi[sz]er', 'kerosene', 'hydrogen', 'methane', 'water'],
     after: [
-      'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
+      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass)', 'of cold-gas propellant', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
       'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
     ],
   },
@@ -332,11 +338,14 @@ export const HEAT_ENGINE_WORDS = [
 
 /** A device said to throw out nothing: the photon-rocket bound applies to its thrust. */
 export const PROPELLANT_FREE_WORDS = [
-  'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless', 'without (?:any )?(?:propellant|reaction mass|exhaust|expelling|ejecting|emitting|throwing)',
+  'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless',
+  'without (?:any )?(?:expelling|ejecting|emitting|throwing|shedding|venting)(?: (?:out )?(?:any )?(?:propellant|mass|reaction mass|material|matter|exhaust|gas))?',
+  'without (?:any )?(?:propellant|reaction mass|exhaust)', 'nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)', 'photon (?:thruster|rocket|drive|propulsion)',
+  'laser (?:thruster|diode|light|propulsion)', 'recoil', 'collimated', 'light (?:alone|only)',
   'no (?:propellant|reaction mass|exhaust|moving parts|expelled mass|mass is expelled)', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
   'closed (?:cavity|resonator|system|box|container|frame|vessel|frustum)', 'sealed (?:cavity|resonator|box|unit|container|device|chamber|frustum|drum|housing|case|enclosure)',
   'inertial (?:propulsion|drive|thrust)', 'field propulsion', 'unidirectional (?:force|thrust)', 'net thrust from inside', 'fuel-?less (?:thruster|drive|propulsion)',
-  'propulsion without', 'thrust without', 'pushes? (?:itself|against nothing)', 'self-propell\\w*', 'frustum', 'tapered (?:cavity|resonator|copper)',
+  'pushes? (?:itself|against nothing)', 'self-propell\\w*', 'frustum', 'tapered (?:cavity|resonator|copper)',
   'microwave (?:thruster|drive|cavity|resonator)', 'resonant cavity', 'RF (?:thruster|cavity)', 'gyroscopic (?:thrust|lift|propulsion|drive|thruster)',
   'precession (?:drive|thruster|lift)', 'anti-?gravity', 'space drive', 'inertia drive', 'oscillation thruster', 'shuttl\\w+ masses', 'internal masses',
   'no (?:external )?reaction', 'momentum from nothing', 'lifter', 'Dean drive', 'stationary thruster',
@@ -346,7 +355,7 @@ export const PROPELLANT_WORDS = [
   'propellant', 'xenon', 'krypton', 'argon', 'hydrazine', 'kerosene', 'oxidi[sz]er', 'fuel tanks?', 'exhaust (?:velocity|speed)', 'Isp', 'specific impulse',
   'ion (?:thruster|engine|drive)', 'Hall(?:-effect)? (?:thruster|effect thruster)', 'rocket', 'reaction mass', 'mass flow', 'nozzle', 'ejects?', 'expels?',
   'plasma thruster', 'resistojet', 'arcjet', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
-  'rotor', 'fan', 'air-breathing', 'sail', 'laser-pushed', 'beamed', 'tether',
+  'fan', 'air-breathing', 'sail', 'laser-pushed', 'beamed', 'tether',
 ];
 
 /** Phrases that say a device needs no input (the input power is then 0). */
@@ -355,7 +364,8 @@ export const SELF_RUNNING_WORDS = [
   'needs? no (?:external )?(?:power|energy|input|supply|fuel|battery|electricity|source)', 'requires? no (?:external )?(?:power|energy|input|supply|fuel|electricity|source)',
   'without (?:any )?(?:external )?(?:power|energy|input|supply|fuel|electricity)(?: source| supply| input)?', 'no (?:external )?(?:power|energy) (?:input|source|supply)',
   'no (?:external )?input', 'powers? itself', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
-  'closed[- ]loop', 'feeds? (?:its own )?output back', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
+  'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
+  'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
   'no fuel', 'fuel-?less', 'free energy', 'zero input',
 ];
 /** Where "self-powered" is lawful: the device harvests an outside flow of energy. */
@@ -399,6 +409,6 @@ export const EFFICIENCY_CHANGE_WORDS = ['by', 'increas\\w*', 'improv\\w*', 'gain
 
 /** Words allowed between "efficiency"/"COP" and a bare number ("an efficiency of 0.62", "COP = 4"). */
 export const BARE_CONNECTORS = [
-  'of', 'is', 'was', 'were', 'be', 'reaching', 'reached', 'reaches', 'near', 'about', 'around', 'approximately', 'roughly',
+  'of', 'is', 'was', 'were', 'be', 'between', 'from', 'ranging from', 'in the range', 'range', 'reaching', 'reached', 'reaches', 'near', 'about', 'around', 'approximately', 'roughly',
   'up to', 'above', 'over', 'exceeding', 'as high as', 'equal to', 'rated', 'value', 'measured', 'a', 'an', 'the',
 ];

@@ -54,8 +54,15 @@ export const CHECK_LAW: Record<CheckName, string> = {
   'sideways-beam': 'conservation of linear momentum',
   'artifact-budget': 'conservation of linear momentum',
   'rocket-equation': 'conservation of linear momentum (the rocket equation)',
-  'light-speed': 'special relativity (nothing with mass reaches the speed of light)',
+  'light-speed': 'special relativity',
 };
+
+/**
+ * Speeds from which the light-speed check is run: 100 km/s, beyond anything on or near the Earth
+ * (orbital and escape speeds are about 8–11 km/s), so that ordinary speeds do not clutter the result.
+ * A rule of thumb (common practice, no source).
+ */
+export const LIGHT_SPEED_FROM = 100_000;
 
 /** What the planner knows beyond the figures: the text, and the classes of the entries it matched. */
 export interface PlanContext {
@@ -310,6 +317,7 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
     const extra: string[] = ['Heat out: counted in the output (0 J apart; any heat rejected only adds to the output).'];
     const toEnergy = (f: Figure, e: End): string | null => {
       if (f.kind === 'energy') return at(f, e);
+      if (siAt(f, e) === 0) return '0 J'; // no input at all, however long it ran
       if (t !== undefined) return typed(siAt(f, e) * t, 'J');
       if (bothPower) return typed(siAt(f, e), 'J'); // one second of steady running
       return null;
@@ -360,7 +368,7 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
 
   // ---- Speeds against c
   const fastest = speeds.filter((f) => f.role !== 'delta-v' || f.si >= C_LIGHT).sort((a, b) => b.si - a.si)[0] ?? largest(speeds);
-  if (fastest && (fastest.upper?.si ?? fastest.si) >= 0.01 * C_LIGHT) {
+  if (fastest && (fastest.upper?.si ?? fastest.si) >= LIGHT_SPEED_FROM) {
     plans.push({
       check: 'light-speed',
       uses: [fastest],
@@ -406,10 +414,12 @@ function severity(run: CheckRun): number {
   }
 }
 
+/** The first sentence of a verdict, numbers as in print, headed by the finding and its law. */
 function sentenceOf(check: CheckName, run: CheckRun): string {
   const law = CHECK_LAW[check];
   const head = run.verdict.holds ? `Consistent with ${law}` : `Conflicts with ${law}`;
-  return `${head}: ${printText(run.verdict.message)}`;
+  const first = /^(.*?[.:;])(?:\s+[A-Z]|$)/s.exec(run.verdict.message)?.[1] ?? run.verdict.message;
+  return `${head}: ${printText(first.replace(/[:;]$/, '.'), { bigIntegers: true })}`;
 }
 
 /** Plans, run: each at the ends of its ranges most favourable to the claim. */

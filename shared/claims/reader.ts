@@ -137,15 +137,23 @@ const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficie
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
 const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|cy|cies)(?!\p{L})/iuy;
+/** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */
+const PERCENT_OF_HEAT_RE =
+  /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat)(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
 const SPEED_OF_LIGHT_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light|[^\S\n]*of[^\S\n]+c(?!\p{L})|[^\S\n]*(?:the[^\S\n]+)?light[- ]speed/iuy;
+const TEMPERATURE_CONTEXT_RE = /(?<!\p{L})(?:temperatures?|heat(?:ed|s|ing)?|hot|hotter|warm(?:er|s|ed)?|cold|colder|cool(?:er|s|ed)?|ambient|boil\w*|freez\w*|Celsius|Fahrenheit|thermal|room|outdoor|outside|air|water|collector)(?!\p{L})/iu;
 const HEAT_PUMP_RE = new RegExp(`(?<!\\p{L})(?:${alt(HEAT_PUMP_WORDS)})(?!\\p{L})`, 'iu');
 const COOLING_MACHINE_RE = new RegExp(`(?<!\\p{L})(?:${alt(COOLING_MACHINE_WORDS)})(?!\\p{L})`, 'iu');
 const DIFF_BEFORE_RE = new RegExp(`(?<![\\p{L}])(?:${alt(DIFFERENCE_BEFORE)})(?!\\p{L})(?:[^\\S\\n]*(?:[=:≈~]|of|is|was|by|about|around|only|just|a|an|some|up to|nearly|roughly|approximately|just over|just under|over|under))*[^\\S\\n]*$`, 'iu');
 const DIFF_AFTER_RE = new RegExp(`[^\\S\\n]*(?:\\)[^\\S\\n]*)?(?:(?:temperature|thermal|of|the)[^\\S\\n]+){0,2}(?:${alt(DIFFERENCE_AFTER)})(?!\\p{L})`, 'iuy');
 const ISP_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})${CONNECT}$`, 'u');
+const ISP_AFTER_RE = new RegExp(`[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})`, 'uy');
 /** Gains: "1.3 units back for every unit", "three times the energy it takes", "output is 3 times the input". */
 const GAIN_AFTER_RE =
   /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|work)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input))?[^\S\n]+(?:in|put in|supplied|consumed|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested)/iuy;
+/** "For every unit of electricity we put in, the amplifier gives back 1.3." */
+const GAIN_BEFORE_RE =
+  /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
 const TIMES_AFTER_RE =
   /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical)[^\S\n]+)?(?:input|consumption|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in)/iuy;
 const TIMES_BEFORE_RE = /(?<!\p{L})(?:output|yield|gain|returns?|delivers?|produces?|generates?)(?:[^\S\n]+(?:is|of|was|are|reaches|reached|power|energy|exactly|about|roughly|some|nearly))*[^\S\n]*$/iu;
@@ -346,6 +354,8 @@ interface Draft {
   hedge?: FigureHedge;
   derived?: string;
   assumption?: string;
+  /** For a temperature difference: which way the other temperature lies ("30 °C below a 25 °C room"). */
+  direction?: 'up' | 'down';
 }
 
 function suffixKind(s: Suffix): string | null {
@@ -379,7 +389,14 @@ function sentenceAround(text: string, start: number, end: number): string {
   return text.slice(from, m ? end + m.index : end + rest.length);
 }
 
+/** "warm end", "cold side", "hot junction" just before a temperature outweigh the words after it. */
+const STRONG_SIDE_RE = /(?<!\p{L})(hot|warm|cold|cool)(?:er)?[- ](?:end|side|junction|plate|face|reservoir)s?(?:[^\S\n]+(?:\p{L}+))?[^\S\n]+(?:in|at|of|is|sits at|held at|kept at|runs at|near)?[^\S\n]*(?:(?:a|an|the)[^\S\n]+)?$/iu;
+
 function roleFromWords(text: string, roles: CompiledRoles, start: number, end: number, floor: number): FigureRole {
+  if (roles === ROLES.temperature) {
+    const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start));
+    if (strong) return /^(?:hot|warm)/i.test(strong[1]) ? 'hot' : 'cold';
+  }
   roles.after.lastIndex = end;
   const a = roles.after.exec(text);
   if (a?.groups) {
@@ -430,7 +447,8 @@ function readPercent(text: string, start: number, end: number, floor: number): P
   const qe = QE_BEFORE_RE.exec(before);
   if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };
   EFFICIENCY_AFTER_RE.lastIndex = end;
-  const after = EFFICIENCY_AFTER_RE.test(text);
+  PERCENT_OF_HEAT_RE.lastIndex = end;
+  const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text);
   const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before);
   const efficiency = after || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1]));
   if (!efficiency) return null;
@@ -455,6 +473,7 @@ function bareKind(text: string, start: number, end: number, floor: number): { ki
   if (RATIO_BEFORE_RE.test(before)) return { kind: 'efficiency', derived: 'a ratio of output to input' };
   GAIN_AFTER_RE.lastIndex = end;
   if (GAIN_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'units out for each unit in' };
+  if (GAIN_BEFORE_RE.test(text.slice(windowStart(text, start, floor, 160), start))) return { kind: 'efficiency', derived: 'units out for each unit in' };
   TIMES_AFTER_RE.lastIndex = end;
   if (TIMES_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
   if (/^[^\S\n]*(?:times|x|×)(?!\p{L})/iu.test(text.slice(end, end + 8)) && TIMES_BEFORE_RE.test(before) && /input|consum|draw|put in|supplied|takes|uses/i.test(text.slice(end, end + 60))) {
@@ -486,6 +505,14 @@ function differenceQuantity(num: string, unit: string): string {
   return `${num} K`;
 }
 
+/** Which way a difference points: "30 °C below …", "9 °F cooler" → down; "40 degrees above …" → up. */
+function differenceDirection(text: string, end: number): 'up' | 'down' | undefined {
+  const after = text.slice(end, end + 30);
+  if (/^[^\S\n]*(?:\p{L}+[^\S\n]+)?(?:below|under|cooler|colder|lower)(?!\p{L})/iu.test(after)) return 'down';
+  if (/^[^\S\n]*(?:\p{L}+[^\S\n]+)?(?:above|over|warmer|hotter|higher)(?!\p{L})/iu.test(after)) return 'up';
+  return undefined;
+}
+
 function isDifference(text: string, start: number, end: number, floor: number): boolean {
   const before = text.slice(Math.max(floor, start - 60), start);
   if (DIFF_BEFORE_RE.test(before)) {
@@ -499,7 +526,9 @@ function isDifference(text: string, start: number, end: number, floor: number): 
   const word = a[0].trim().toLowerCase();
   // "20 °C above ambient", "heated 40 K over room temperature"; "between" only as "20 K between the plates".
   if (/^(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)/.test(word)) {
-    return /^[^\S\n]*(?:than[^\S\n]+)?(?:the[^\S\n]+)?(?:ambient|room|outside|surroundings|environment|air|water|inlet|sink|source|cold|hot|the other|its|freezing|\p{N})/iu.test(text.slice(end + a[0].length, end + a[0].length + 40)) || /^\s*than/.test(text.slice(end + a[0].length));
+    const rest = text.slice(end + a[0].length, end + a[0].length + 40);
+    if (/^(?:warmer|hotter|cooler|colder)/.test(word) && /^[^\S\n]*(?:[,.;:)!?]|and\b|$)/.test(rest)) return true;
+    return /^[^\S\n]*(?:than[^\S\n]+)?(?:(?:the|a|an|its|their)[^\S\n]+)?(?:ambient|room|outside|outdoor|surroundings|environment|air|water|inlet|sink|source|cold|hot|other|freezing|surface|\p{N}|[-−])/iu.test(rest) || /^\s*than/.test(rest);
   }
   if (/^between|^apart|^across/.test(word)) return /^[^\S\n]*(?:the|its|two|both|hot|cold|plates|sides|ends|junctions|reservoirs)/i.test(text.slice(end + a[0].length, end + a[0].length + 20));
   return true;
@@ -534,6 +563,11 @@ export function extractFigures(text: string): Figure[] {
         t.num = String(Number((mid - unc).toPrecision(15)));
         end = t.suffix && !next.suffix ? next.numEnd : next.end;
         next.consumed = true;
+      } else if (!t.suffix && !next.suffix && !t.words && !next.words && !next.plusMinus && isRangeGap(text, t.numEnd, next.start, t.start) && bareKind(text, t.start, t.numEnd, floor)) {
+        // "a COP between 3.2 and 4.1", "an efficiency of 0.3–0.4".
+        upperNum = next.num;
+        end = next.end;
+        next.consumed = true;
       } else if (
         !next.plusMinus &&
         isRangeGap(text, gapStart, next.start, t.start) &&
@@ -548,7 +582,7 @@ export function extractFigures(text: string): Figure[] {
         next.consumed = true;
       }
     }
-    if (t.words && !suffix) continue;
+    if (t.words && !suffix && !bareKind(text, t.start, t.numEnd, floor)) continue;
 
     let kind: FigureKind | null = null;
     let quantity = '';
@@ -556,6 +590,7 @@ export function extractFigures(text: string): Figure[] {
     let role: FigureRole | undefined;
     let derived: string | undefined;
     let assumption: string | undefined;
+    let direction: Draft['direction'];
     if (suffix?.type === 'unit') {
       const q = unitQuantity(t.num, suffix);
       kind = q.kind;
@@ -564,9 +599,14 @@ export function extractFigures(text: string): Figure[] {
       if (kind === 'temperature' && isDifference(text, start, end, floor)) {
         kind = 'temperature-difference';
         quantity = differenceQuantity(scaled(t.num, suffix.form.factor), suffix.form.unit);
+        direction = differenceDirection(text, end);
         if (upperNum !== undefined) upper = differenceQuantity(upperNum, suffix.form.unit);
-      } else if (kind === 'duration' && suffix.form.unit === 's' && ISP_BEFORE_RE.test(text.slice(Math.max(floor, start - BEFORE_WINDOW), start))) {
+      } else if (kind === 'duration' && suffix.form.unit === 's' && (ISP_BEFORE_RE.test(text.slice(Math.max(floor, start - BEFORE_WINDOW), start)) || ((ISP_AFTER_RE.lastIndex = end), ISP_AFTER_RE.test(text)))) {
         kind = 'specific-impulse';
+      } else if (kind === 'temperature' && suffix.form.ambiguous) {
+        // "degrees" alone: a temperature where the sentence speaks of one, else an angle (not a figure).
+        if (!TEMPERATURE_CONTEXT_RE.test(sentenceAround(text, start, end))) continue;
+        assumption = '"Degrees" read as degrees Celsius.';
       }
     } else if (suffix?.type === 'percent') {
       const reading = readPercent(text, start, end, floor);
@@ -580,16 +620,19 @@ export function extractFigures(text: string): Figure[] {
       }
     } else {
       const bare = bareKind(text, start, t.numEnd, floor);
-      if (bare && !t.words) {
+      if (bare) {
         kind = bare.kind;
         role = bare.role;
         derived = bare.derived;
         quantity = t.num;
         if (upperNum !== undefined) upper = upperNum;
-      } else if (bare && t.words) {
-        kind = bare.kind;
-        derived = bare.derived;
-        quantity = t.num;
+        // "three times as much heat as the electricity it uses", for a heat pump: a heating COP.
+        if (kind === 'efficiency' && derived && HEAT_PUMP_RE.test(sentenceAround(text, start, end))) {
+          kind = 'cop';
+          role = 'heating';
+          derived = undefined;
+          assumption = 'A heat pump\'s heat out as a multiple of its work in: read as a heating COP.';
+        }
       }
     }
     if (kind === null) continue;
@@ -606,7 +649,7 @@ export function extractFigures(text: string): Figure[] {
         /* left to the final pass */
       }
     }
-    drafts.push({ start, end, kind, quantity, upper, role, hedge, derived, assumption });
+    drafts.push({ start, end, kind, quantity, upper, role, hedge, derived, assumption, direction });
     floor = end;
   }
 
@@ -651,6 +694,72 @@ export function extractFigures(text: string): Figure[] {
 // ---------------------------------------------------------------------------------------------
 // Pass 3: relations between figures
 
+const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|lander|probe|satellite|CubeSat|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines? (?:fire|burn))(?!\p{L})/iu;
+
+/** Roles the words leave open, read from the other figures (see the file's comment). */
+function rolesByContext(text: string, drafts: Draft[]): void {
+  const energyLike = (d: Draft) => d.kind === 'power' || d.kind === 'energy';
+  // A thrust and a power: the power drives it.
+  if (drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power')) {
+    for (const d of drafts) if (d.kind === 'power' && d.role === null) d.role = 'in';
+  }
+  // One side named, one figure left: the other side.
+  const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
+  const open = drafts.filter((d) => energyLike(d) && d.role === null);
+  if (named.length && open.length === 1) {
+    if (named.every((d) => d.role === 'in')) open[0].role = 'out';
+    else if (named.every((d) => d.role === 'out')) open[0].role = 'in';
+  }
+  // A rocket: masses and speeds.
+  const masses = drafts.filter((d) => d.kind === 'mass');
+  const rocket =
+    drafts.some((d) => d.kind === 'specific-impulse' || (d.kind === 'speed' && (d.role === 'exhaust' || d.role === 'delta-v')) || (d.kind === 'mass' && d.role === 'propellant')) ||
+    (masses.length > 0 && ROCKET_RE.test(text));
+  if (!rocket) return;
+  const has = (role: FigureRole) => masses.find((m) => m.role === role);
+  const nulls = masses.filter((m) => m.role === null);
+  if (has('propellant') && !has('wet') && !has('dry') && nulls.length === 1) nulls[0].role = 'wet';
+  else if (!has('wet') && !has('dry') && nulls.length === 2) {
+    const [a, b] = [...nulls].sort((x, y) => (siOf(y) ?? 0) - (siOf(x) ?? 0));
+    a.role = 'wet';
+    b.role = 'dry';
+  } else if (has('wet') && !has('dry') && !has('propellant') && nulls.length === 1) nulls[0].role = 'dry';
+  else if (has('dry') && !has('wet') && !has('propellant') && nulls.length === 1) nulls[0].role = 'wet';
+  const wet = has('wet');
+  const dry = has('dry');
+  const prop = has('propellant');
+  if (wet && prop && !dry) {
+    const w = siOf(wet);
+    const p = siOf(prop);
+    if (w !== null && p !== null && p < w) {
+      const last = wet.start > prop.start ? wet : prop;
+      drafts.splice(drafts.indexOf(last) + 1, 0, {
+        start: Math.min(wet.start, prop.start),
+        end: Math.max(wet.end, prop.end),
+        kind: 'mass',
+        quantity: typedSi(w - p, 'kg'),
+        role: 'dry',
+        derived: `dry mass = starting mass − propellant (${formatQuantity(w, 'kg')} − ${formatQuantity(p, 'kg')})`,
+      });
+    }
+  } else if (dry && prop && !wet) {
+    const d = siOf(dry);
+    const p = siOf(prop);
+    if (d !== null && p !== null) {
+      const last = dry.start > prop.start ? dry : prop;
+      drafts.splice(drafts.indexOf(last) + 1, 0, {
+        start: Math.min(dry.start, prop.start),
+        end: Math.max(dry.end, prop.end),
+        kind: 'mass',
+        quantity: typedSi(d + p, 'kg'),
+        role: 'wet',
+        derived: `starting mass = dry mass + propellant (${formatQuantity(d, 'kg')} + ${formatQuantity(p, 'kg')})`,
+      });
+    }
+  }
+  for (const d of drafts) if (d.kind === 'speed' && d.role === null && (siOf(d) ?? 0) < 299_792_458) d.role = 'delta-v';
+}
+
 const typedSi = (si: number, unit: string) => `${Number(si.toPrecision(12))} ${unit}`.trim();
 
 function siOf(d: Draft): number | null {
@@ -692,6 +801,37 @@ function relate(text: string, drafts: Draft[]): void {
     }
   }
 
+  // Power from a current and a voltage in the same clause: "12 A at 24 V", "3 amps from a 48-volt pack".
+  for (const cur of drafts.filter((d) => d.kind === 'current')) {
+    const volt = drafts.find((d) => d.kind === 'voltage' && sameSentence(d, cur) && Math.abs(d.start - cur.start) < 120);
+    if (!volt) continue;
+    const i = siOf(cur);
+    const v = siOf(volt);
+    if (i === null || v === null) continue;
+    // The text states that power itself already.
+    if (drafts.some((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= 0.01 * i * v)) continue;
+    const iu = upperSiOf(cur);
+    const vu = upperSiOf(volt);
+    const first = cur.start < volt.start ? cur : volt;
+    const last = first === cur ? volt : cur;
+    // The role: the words around the current or the voltage ("draws 3 A" → in, "delivers 10 A" → out).
+    const wordsRole = roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
+    const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null);
+    const role: FigureRole = wordsRole ?? (others.length && others.every((d) => d.role === 'in') ? 'out' : null);
+    insertAfter(last, {
+      start: first.start,
+      end: last.end,
+      kind: 'power',
+      quantity: typedSi(i * v, 'W'),
+      upper: iu !== null || vu !== null ? typedSi((iu ?? i) * (vu ?? v), 'W') : undefined,
+      role: role === 'excess' ? 'out' : (role ?? 'in'),
+      derived: `power = current × voltage (${formatQuantity(i, 'A')} × ${formatQuantity(v, 'V')})`,
+      assumption: role === null ? 'The power of this current and voltage is read as the power supplied to the device.' : undefined,
+    });
+  }
+
+  rolesByContext(text, drafts);
+
   // out = in + excess, when the text gives no output itself.
   for (const kind of ['power', 'energy'] as const) {
     const excess = drafts.find((d) => d.kind === kind && d.role === 'excess' && !d.derived);
@@ -716,42 +856,16 @@ function relate(text: string, drafts: Draft[]): void {
     }
   }
 
-  // Power from a current and a voltage in the same clause: "12 A at 24 V", "3 amps from a 48-volt pack".
-  for (const cur of drafts.filter((d) => d.kind === 'current')) {
-    const volt = drafts.find((d) => d.kind === 'voltage' && sameSentence(d, cur) && Math.abs(d.start - cur.start) < 120);
-    if (!volt) continue;
-    const i = siOf(cur);
-    const v = siOf(volt);
-    if (i === null || v === null) continue;
-    // The text states that power itself already.
-    if (drafts.some((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= 0.01 * i * v)) continue;
-    const iu = upperSiOf(cur);
-    const vu = upperSiOf(volt);
-    const first = cur.start < volt.start ? cur : volt;
-    const last = first === cur ? volt : cur;
-    // The role: the words around the current or the voltage ("draws 3 A" → in, "delivers 10 A" → out).
-    const role = roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
-    insertAfter(last, {
-      start: first.start,
-      end: last.end,
-      kind: 'power',
-      quantity: typedSi(i * v, 'W'),
-      upper: iu !== null || vu !== null ? typedSi((iu ?? i) * (vu ?? v), 'W') : undefined,
-      role: role === 'excess' ? 'out' : (role ?? 'in'),
-      derived: `power = current × voltage (${formatQuantity(i, 'A')} × ${formatQuantity(v, 'V')})`,
-      assumption: role === null ? 'The power of this current and voltage is read as the power supplied to the device.' : undefined,
-    });
-  }
-
   // "Self-running", "needs no supply": the input is 0 (not where the device harvests a flow from outside).
   if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in')) {
     SELF_RUNNING_RE.lastIndex = 0;
     const m = SELF_RUNNING_RE.exec(text);
-    const out = drafts.find((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== 'in');
+    const hasThrust = drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power');
+    const out = drafts.find((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust)));
     if (m && out && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {
       const start = m.index;
       const end = m.index + m[0].length;
-      const draft: Draft = { start, end, kind: out.kind, quantity: `0 ${FIGURE_SI_UNIT[out.kind]}`, role: 'in', derived: `no input: "${m[0]}"` };
+      const draft: Draft = { start, end, kind: 'power', quantity: '0 W', role: 'in', derived: `no input: "${m[0]}"` };
       // Keep the drafts in order of their place in the text.
       const at = drafts.findIndex((d) => d.start > start);
       if (at < 0) drafts.push(draft);
@@ -768,19 +882,56 @@ function relate(text: string, drafts: Draft[]): void {
     const tSi = siOf(t);
     const dSi = siOf(diff);
     if (tSi !== null && dSi !== null) {
-      const hot = t.role === 'hot';
-      const other = hot ? tSi - dSi : tSi + dSi;
+      // "30 °C below a 25 °C room": the other lies below; "40 degrees above the 20 °C ambient": above;
+      // else by the stated temperature's role (hot → the other is colder).
+      const down = diff.direction === 'down' || (diff.direction === undefined && t.role === 'hot');
+      const other = down ? tSi - dSi : tSi + dSi;
       const anchor = diff.start > t.start ? diff : t;
       insertAfter(anchor, {
         start: Math.min(t.start, diff.start),
         end: Math.max(t.end, diff.end),
         kind: 'temperature',
         quantity: typedSi(other, 'K'),
-        role: hot ? 'cold' : 'hot',
-        derived: hot ? `cold side = hot side − difference` : `hot side = cold side + difference`,
-        assumption: t.role === null ? `The stated temperature is read as the cold side and the difference is added to it; mark it as hot if it is the hot side.` : undefined,
+        role: down ? 'cold' : 'hot',
+        derived: down ? `the colder side = ${formatQuantity(tSi, 'K')} − ${formatQuantity(dSi, 'K')}` : `the hotter side = ${formatQuantity(tSi, 'K')} + ${formatQuantity(dSi, 'K')}`,
+        assumption:
+          t.role === null && diff.direction === undefined
+            ? 'The stated temperature is read as the cold side and the difference is added to it; mark it as hot if it is the hot side.'
+            : undefined,
       });
-      if (t.role === null) t.role = 'cold';
+      t.role = down ? 'hot' : 'cold';
     }
   }
+
+  // Two or more temperatures of the same machine: the highest is the hot side, the lowest the cold.
+  const absolute = drafts.filter((d) => d.kind === 'temperature');
+  if (absolute.length >= 2) {
+    const sorted = [...absolute].sort((a, b) => (siOf(b) ?? 0) - (siOf(a) ?? 0));
+    sorted[0].role = 'hot';
+    sorted[sorted.length - 1].role = 'cold';
+  }
+
+  // Powers and energies over a stated run: energy = power × time.
+  const duration = drafts.filter((d) => d.kind === 'duration').sort((a, b) => (siOf(b) ?? 0) - (siOf(a) ?? 0))[0];
+  const tRun = duration ? siOf(duration) : null;
+  if (duration && tRun) {
+    for (const p of drafts.filter((d) => d.kind === 'power' && (d.role === 'in' || d.role === 'out'))) {
+      const w = siOf(p);
+      if (!w) continue;
+      if (drafts.some((d) => d.kind === 'energy' && d.role === p.role && !d.derived)) continue;
+      if (drafts.some((d) => d.kind === 'energy' && d.role === p.role && d.derived?.startsWith('energy = power'))) continue;
+      const wu = upperSiOf(p);
+      const last = p.start > duration.start ? p : duration;
+      insertAfter(last, {
+        start: Math.min(p.start, duration.start),
+        end: Math.max(p.end, duration.end),
+        kind: 'energy',
+        quantity: typedSi(w * tRun, 'J'),
+        upper: wu !== null ? typedSi(wu * tRun, 'J') : undefined,
+        role: p.role,
+        derived: `energy = power × time (${formatQuantity(w, 'W')} × ${formatQuantity(tRun, 's')})`,
+      });
+    }
+  }
+
 }
