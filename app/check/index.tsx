@@ -3,6 +3,9 @@ import { ClaimCheckScreen } from '@/components/claims/ClaimCheckScreen';
 
 export default function ClaimCheckRoute() {
   // `?from=<token>`: a saved check opened to be re-run ("Open in the claim check").
-  const { from } = useLocalSearchParams<{ from?: string }>();
-  return <ClaimCheckScreen key={from ?? ''} from={typeof from === 'string' && from ? from : undefined} />;
+  // `?resume=1`: back from signing in to save; the check kept in this tab comes back.
+  const { from, resume } = useLocalSearchParams<{ from?: string; resume?: string }>();
+  const token = typeof from === 'string' && from ? from : undefined;
+  const back = resume === '1';
+  return <ClaimCheckScreen key={`${token ?? ''}|${back ? 'resume' : ''}`} from={token} resume={back} />;
 }

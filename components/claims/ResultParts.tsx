@@ -1,22 +1,38 @@
 /**
  * The parts of a claim check's result that read the same whether the check was just run or opened
- * from a share link: the notes, the matching entries, the checks run and the referee paragraph.
+ * from a share link: the paste-ready paragraph (with its variants), the notes, the matching entries,
+ * the figures, the checks run (each finding in words, with a neutral mark) and the checks that need
+ * a figure the text does not give.
  */
 import { Link } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
+import Svg, { Circle, Line } from 'react-native-svg';
 import { checks as kit } from '@/shared/checks';
-import { FIGURE_KIND_LABEL } from '@/shared/claims/types';
+import {
+  FIGURE_KIND_LABEL,
+  PARAGRAPH_VARIANT_LABEL,
+  PARAGRAPH_VARIANTS,
+  type ClaimCheckNeed,
+  type ClaimParagraph,
+  type ParagraphVariant,
+} from '@/shared/claims/types';
+import { ChoiceChips } from '../admin/ChoiceChips';
 import { colors, focusRing, radius, space, type } from '../theme';
 import { Notice } from '../ui/Notice';
 import { TextLink } from '../ui/TextLink';
+import { dataAttributes } from '../worksheet/dataAttributes';
 import { ResultList, ResultRow } from '../worksheet/ResultRow';
-import { Verdict } from '../worksheet/Verdict';
-import type { ClaimCheckResult, ClaimCheckRun, ClaimMatch, Figure } from './api';
+import { CLAIM_STYLE_LABEL, CLAIM_STYLES, type ClaimCheckResult, type ClaimCheckRun, type ClaimMatch, type ClaimStyle, type Figure } from './api';
 import { CopyButton } from './CopyButton';
-import { roleWords } from './figures';
+import { figureDisplay, HEDGE_WORDS, roleWords } from './figures';
 
 /** The path of an entry's permanent version, for a link inside the app. */
 export const versionPath = (m: Pick<ClaimMatch, 'slug' | 'version'>) => `/entries/${encodeURIComponent(m.slug)}/v/${m.version}`;
+
+/** The paragraph of a variant; a check saved before there were variants has only its one paragraph. */
+export function paragraphFor(result: ClaimCheckResult, variant: ParagraphVariant): ClaimParagraph {
+  return (result.paragraphs as ClaimCheckResult['paragraphs'] | undefined)?.[variant] ?? result.paragraph;
+}
 
 export function ClaimNotes({ notes }: { notes: string[] }) {
   if (notes.length === 0) return null;
@@ -67,6 +83,29 @@ export function MatchList({ matches }: { matches: ClaimMatch[] }) {
 
 const formatScore = (score: number) => (score >= 10 ? score.toFixed(0) : score.toPrecision(2));
 
+/** How a figure was read beyond its value: the hedge said with it, how it was got, what was assumed. */
+export function FigureReadingNotes({ figure, testID }: { figure: Pick<Figure, 'hedge' | 'derived' | 'assumption'>; testID: string }) {
+  return (
+    <>
+      {figure.hedge ? (
+        <Text testID={`${testID}-hedge`} style={type.caption}>
+          Said as “{HEDGE_WORDS[figure.hedge]}”: the text gives it as a bound, not an exact value.
+        </Text>
+      ) : null}
+      {figure.derived ? (
+        <Text testID={`${testID}-derived`} style={type.caption}>
+          Worked out from the text: <Text style={styles.value}>{figure.derived}</Text>
+        </Text>
+      ) : null}
+      {figure.assumption ? (
+        <Text testID={`${testID}-assumption`} style={type.caption}>
+          Read with an assumption you can change: {figure.assumption}
+        </Text>
+      ) : null}
+    </>
+  );
+}
+
 /** The figures as the result read them, not editable (a shared check). */
 export function FigureTable({ figures }: { figures: Figure[] }) {
   if (figures.length === 0) return <Text style={type.body}>No figures with units were found.</Text>;
@@ -76,71 +115,191 @@ export function FigureTable({ figures }: { figures: Figure[] }) {
         <View role="listitem" key={f.id} testID={`claim-figure-${f.id}`} style={styles.row}>
           <Text style={type.uiStrong}>
             {f.id} · {FIGURE_KIND_LABEL[f.kind]}
+            {f.upper ? ' · a range' : ''}
           </Text>
           <Text style={type.caption}>
             {f.start === null ? 'Typed by hand' : 'As written'}: <Text style={styles.words}>{f.text}</Text> · read as{' '}
-            <Text style={styles.value}>{f.display}</Text> · role: {roleWords(f.role)}
+            <Text testID={`claim-figure-${f.id}-value`} style={styles.value}>
+              {figureDisplay(f)}
+            </Text>{' '}
+            · role: {roleWords(f.role)}
           </Text>
+          <FigureReadingNotes figure={f} testID={`claim-figure-${f.id}`} />
         </View>
       ))}
     </View>
   );
 }
 
-/** Each check run: why it applies, the verdict, the computed figures, what was assumed, and a link to explore it. */
+/** The finding in a referee's words: "Breaks conservation of linear momentum". */
+export function findingWords(run: Pick<ClaimCheckRun, 'finding' | 'law' | 'verdict' | 'title'>): string {
+  const finding = (run.finding as ClaimCheckRun['finding'] | undefined) ?? (run.verdict.holds ? 'consistent' : 'breaks');
+  const law = (run.law as string | undefined) || `the condition of ${run.title}`;
+  return finding === 'breaks' ? `Breaks ${law}` : `Consistent with ${law}`;
+}
+
+/**
+ * A neutral mark in graphite beside the words: a plain ring for a claim consistent with the law, a
+ * struck ring for one that breaks it. Never a colour code (DESIGN.md §6); the words carry the finding.
+ */
+function FindingMark({ breaks }: { breaks: boolean }) {
+  return (
+    <Svg width={22} height={22} aria-hidden>
+      <Circle cx={11} cy={11} r={8} fill="none" stroke={colors.ink} strokeWidth={1.6} />
+      {breaks ? <Line x1={5.3} y1={16.7} x2={16.7} y2={5.3} stroke={colors.ink} strokeWidth={1.6} /> : null}
+    </Svg>
+  );
+}
+
+/** Each check run: the finding in words, its sentence, the computed figures, what was assumed, and a link to explore it. */
 export function CheckRuns({ runs }: { runs: ClaimCheckRun[] }) {
   if (runs.length === 0) {
     return (
       <Notice testID="claim-checks-none" title="No check could be run on these figures.">
-        The notes above say what is missing. Add a figure by hand and re-run to run the checks it allows.
+        The notes and the list of missing figures say what is needed. Add a figure under Figures found and the checks
+        it allows run at once.
       </Notice>
     );
   }
   return (
     <View style={styles.runs}>
-      {runs.map((run) => (
-        <View key={run.check} testID={`claim-check-${run.check}`} style={styles.run}>
-          <Text role="heading" aria-level={3} style={type.heading}>
-            {run.title}
-          </Text>
-          <Text style={type.body}>{run.why}</Text>
-          <Text style={type.caption}>Figures used: {run.uses.length ? run.uses.join(', ') : 'none from the text'}</Text>
-          <Verdict
-            testID={`claim-check-${run.check}-verdict`}
-            holds={run.verdict.holds}
-            condition={kit[run.check]?.condition ?? ''}
-            message={run.verdict.message}
-          />
-          <ResultList label={`Computed figures of ${run.title}`}>
-            {run.outputs.map((o) => (
-              <ResultRow key={o.name} testID={`claim-check-${run.check}-output-${o.name}`} label={o.label} value={o} />
-            ))}
-          </ResultList>
-          {run.assumptions.length > 0 ? (
-            <View style={styles.assumptions}>
-              <Text style={type.uiStrong}>Assumed beyond the text</Text>
-              {run.assumptions.map((a, i) => (
-                <Text key={i} style={type.caption}>
-                  • {a}
+      {runs.map((run) => {
+        const breaks = ((run.finding as ClaimCheckRun['finding'] | undefined) ?? (run.verdict.holds ? 'consistent' : 'breaks')) === 'breaks';
+        return (
+          <View key={run.check} testID={`claim-check-${run.check}`} style={styles.run}>
+            <Text role="heading" aria-level={3} style={type.heading}>
+              {run.title}
+            </Text>
+            <View
+              testID={`claim-check-${run.check}-finding`}
+              {...dataAttributes({ finding: breaks ? 'breaks' : 'consistent', holds: String(run.verdict.holds) })}
+              style={styles.finding}
+            >
+              <View style={styles.findingHead}>
+                <FindingMark breaks={breaks} />
+                <Text testID={`claim-check-${run.check}-finding-words`} style={styles.findingWords}>
+                  {findingWords(run)}
                 </Text>
-              ))}
+              </View>
+              {run.sentence ? (
+                <Text testID={`claim-check-${run.check}-sentence`} style={type.body}>
+                  {run.sentence}
+                </Text>
+              ) : null}
+              <Text style={styles.condition}>
+                Condition: {kit[run.check]?.condition ?? run.title}. {run.verdict.message}
+              </Text>
             </View>
-          ) : null}
-          <TextLink href={run.permalink} testID={`claim-check-${run.check}-explore`}>
-            Explore this check with these figures
-          </TextLink>
-        </View>
-      ))}
+            <Text style={type.body}>{run.why}</Text>
+            <Text style={type.caption}>Figures used: {run.uses.length ? run.uses.join(', ') : 'none from the text'}</Text>
+            <ResultList label={`Computed figures of ${run.title}`}>
+              {run.outputs.map((o) => (
+                <ResultRow key={o.name} testID={`claim-check-${run.check}-output-${o.name}`} label={o.label} value={o} />
+              ))}
+            </ResultList>
+            {run.assumptions.length > 0 ? (
+              <View testID={`claim-check-${run.check}-assumptions`} style={styles.assumptions}>
+                <Text style={type.uiStrong}>Assumed beyond the text</Text>
+                {run.assumptions.map((a, i) => (
+                  <Text key={i} style={type.caption}>
+                    • {a}
+                  </Text>
+                ))}
+              </View>
+            ) : null}
+            <TextLink href={run.permalink} testID={`claim-check-${run.check}-explore`}>
+              Explore this check with these figures
+            </TextLink>
+          </View>
+        );
+      })}
     </View>
   );
 }
 
-/** The paste-ready paragraph with its numbered references, and a button that copies both. */
-export function ParagraphPanel({ paragraph }: { paragraph: ClaimCheckResult['paragraph'] }) {
+/** The heading of the checks that could not be run: the same words as each item. */
+export const NEEDS_TITLE = 'Needs a figure the text does not give';
+
+/** Checks the figures point to but the text cannot run: what is missing, plainly; never a result. */
+export function NeedsList({ needs, editable }: { needs: ClaimCheckNeed[]; editable: boolean }) {
+  return (
+    <View role="list" aria-label={NEEDS_TITLE} testID="claim-needs" style={styles.list}>
+      {needs.map((need) => (
+        <View role="listitem" key={need.check} testID={`claim-need-${need.check}`} style={styles.row}>
+          <Text style={type.uiStrong}>{need.title}</Text>
+          <Text testID={`claim-need-${need.check}-missing`} style={type.body}>
+            {NEEDS_TITLE}: {need.missing.join('; ')}.
+          </Text>
+          <Text style={type.caption}>{need.why}</Text>
+        </View>
+      ))}
+      <Text style={[type.caption, styles.afterList]}>
+        {editable
+          ? 'Not run, so no finding. Add the missing figure under Figures found and the check runs at once; or ask the claimant for it.'
+          : 'Not run, so no finding. These are figures to ask the claimant for.'}
+      </Text>
+    </View>
+  );
+}
+
+interface ParagraphPanelProps {
+  result: ClaimCheckResult;
+  variant: ParagraphVariant;
+  onVariant: (variant: ParagraphVariant) => void;
+  /** The style chosen; with `onStyle`, choosing another runs the check again. */
+  style?: ClaimStyle;
+  onStyle?: (style: ClaimStyle) => void;
+  /** A re-run for another style is on its way. */
+  restyling?: boolean;
+}
+
+/**
+ * The paste-ready paragraph with its numbered references: whom it is written for (switched at once,
+ * all four are in the result), the reference style, and one button that copies paragraph and references.
+ */
+export function ParagraphPanel({ result, variant, onVariant, style, onStyle, restyling = false }: ParagraphPanelProps) {
+  const paragraph = paragraphFor(result, variant);
+  const hasVariants = Boolean((result.paragraphs as ClaimCheckResult['paragraphs'] | undefined)?.[variant]);
   return (
     <View style={styles.paragraphBox}>
-      <View testID="claim-paragraph" style={styles.paragraph}>
-        <Text selectable style={type.body}>
+      {hasVariants ? (
+        <>
+          <Text style={type.ui}>Written as</Text>
+          <ChoiceChips
+            label="Whom the paragraph is written for"
+            testID="claim-variant"
+            options={PARAGRAPH_VARIANTS.map((value) => ({ value, label: PARAGRAPH_VARIANT_LABEL[value] }))}
+            value={variant}
+            onChange={onVariant}
+          />
+        </>
+      ) : null}
+      {onStyle && style ? (
+        <>
+          <Text style={type.ui}>References in</Text>
+          <ChoiceChips
+            label="Reference style"
+            testID="claim-style"
+            options={CLAIM_STYLES.map((value) => ({ value, label: CLAIM_STYLE_LABEL[value] }))}
+            value={style}
+            onChange={onStyle}
+          />
+          {restyling ? (
+            <Text testID="claim-style-pending" style={type.caption}>
+              Setting the references in {CLAIM_STYLE_LABEL[style]}; the paragraph below is in {CLAIM_STYLE_LABEL[paragraph.style]} until
+              they arrive…
+            </Text>
+          ) : null}
+        </>
+      ) : (
+        <Text style={type.caption}>References in {CLAIM_STYLE_LABEL[paragraph.style]}.</Text>
+      )}
+      <View
+        testID="claim-paragraph"
+        {...dataAttributes({ variant: paragraph.variant ?? variant, style: paragraph.style })}
+        style={styles.paragraph}
+      >
+        <Text testID="claim-paragraph-body" selectable style={type.body}>
           {paragraph.body}
         </Text>
         {paragraph.references.length > 0 ? (
@@ -170,6 +329,7 @@ const styles = StyleSheet.create({
   },
   list: { borderTopColor: colors.rule, borderTopWidth: 1 },
   row: { gap: space.xxs, paddingVertical: space.sm, borderBottomColor: colors.rule, borderBottomWidth: 1 },
+  afterList: { marginTop: space.xs },
   matchHead: { flexDirection: 'row', gap: space.xs, alignItems: 'baseline' },
   rank: { ...type.uiStrong, color: colors.inkMuted },
   matchTitle: { ...type.uiStrong, ...focusRing, color: colors.teal, textDecorationLine: 'underline', flexShrink: 1 },
@@ -177,6 +337,19 @@ const styles = StyleSheet.create({
   value: { ...type.mono, fontSize: 13, color: colors.ink },
   runs: { gap: space.lg },
   run: { gap: space.sm },
+  finding: {
+    gap: space.xs,
+    backgroundColor: colors.surface,
+    borderColor: colors.ruleStrong,
+    borderWidth: 1,
+    borderLeftColor: colors.ink,
+    borderLeftWidth: 3,
+    borderRadius: radius.sm,
+    padding: space.md,
+  },
+  findingHead: { flexDirection: 'row', alignItems: 'flex-start', gap: space.xs },
+  findingWords: { ...type.uiStrong, flexShrink: 1 },
+  condition: { ...type.caption },
   assumptions: { gap: space.xxs },
   paragraphBox: { gap: space.sm },
   paragraph: {

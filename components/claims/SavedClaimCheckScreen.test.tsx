@@ -1,6 +1,8 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
-import { savedDto, token } from './fixtures';
+import { PARAGRAPH_VARIANT_LABEL } from '@/shared/claims/types';
+import { formatQuantity } from '@/shared/worksheet/quantity';
+import { LBF, savedDto, token } from './fixtures';
 import { SavedClaimCheckScreen } from './SavedClaimCheckScreen';
 
 jest.mock('expo-router', () => require('../testing/expoRouter'));
@@ -14,14 +16,24 @@ beforeEach(() => setWindowWidth(390));
 
 describe('SavedClaimCheckScreen', () => {
   it('shows the saved result read only, with a way to open it in the claim check, and no Delete for others', async () => {
-    mockFetch({ ...session(null), [`/api/claim-checks/saved/${token}`]: () => jsonResponse(200, { saved: savedDto(false) }) });
+    mockFetch({ ...session(null), [`/api/claim-checks/saved/${token}`]: () => jsonResponse(200, { saved: savedDto(false, 'examiner') }) });
     renderWithProviders(<SavedClaimCheckScreen token={token} />);
     expect(await screen.findByTestId('claim-match-resonant-cavity-thruster')).toBeTruthy();
-    expect(screen.getByTestId('claim-check-photon-bound-verdict').getAttribute('data-holds')).toBe('false');
-    expect(screen.getByTestId('claim-figure-f2').textContent).toContain('889.6 mN');
+    expect(screen.getByTestId('claim-check-photon-bound-finding').getAttribute('data-finding')).toBe('breaks');
+    expect(screen.getByTestId('claim-check-photon-bound-finding-words').textContent).toBe('Breaks conservation of linear momentum');
+    // The range with both ends, and the hedge said with the power.
+    const [lo, hi] = [formatQuantity(0.1 * LBF, 'N'), formatQuantity(0.2 * LBF, 'N')];
+    expect(screen.getByTestId('claim-figure-f2-value').textContent).toBe(`${lo.replace(' mN', '')}–${hi}`);
+    expect(screen.getByTestId('claim-figure-f1-value').textContent).toBe('up to 1.5 kW');
     expect(screen.queryByTestId('claim-figure-f2-quantity')).toBeNull();
-    expect(screen.queryByTestId('claim-rerun')).toBeNull();
-    expect(screen.getByTestId('claim-paragraph').textContent).toContain('(saved)');
+    expect(screen.getByTestId('claim-need-break-even-speed-missing').textContent).toContain('Needs a figure the text does not give: ');
+    expect(screen.queryByTestId('claim-check-break-even-speed')).toBeNull();
+    // The paragraph comes first, in the variant it was saved with; the others are at hand.
+    expect(screen.getAllByRole('heading', { level: 2 })[0].textContent).toBe('Paragraph to paste');
+    expect(screen.getByTestId('claim-paragraph-body').textContent).toContain(`(saved, ${PARAGRAPH_VARIANT_LABEL.examiner})`);
+    fireEvent.click(screen.getByTestId('claim-variant-journalist'));
+    expect(screen.getByTestId('claim-paragraph-body').textContent).toContain(`(saved, ${PARAGRAPH_VARIANT_LABEL.journalist})`);
+    expect(screen.queryByTestId('claim-style')).toBeNull();
     expect(screen.getByTestId('claim-open').getAttribute('href')).toBe(`/check?from=${token}`);
     expect(screen.queryByTestId('claim-saved-delete')).toBeNull();
     expect(await screen.findByTestId('claim-sign-in-to-save')).toBeTruthy();

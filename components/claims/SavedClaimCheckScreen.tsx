@@ -1,8 +1,10 @@
 /**
  * A saved claim check, opened from its share link (`/check/<token>`): the result as saved, read
- * only, with a way to open it in the claim check and re-run it; its owner may delete it.
+ * only (the paragraph first, its four variants at hand), with a way to open it in the claim check
+ * and re-run it; its owner may delete it.
  */
 import { useState } from 'react';
+import type { ParagraphVariant } from '@/shared/claims/types';
 import { StyleSheet, Text, View } from 'react-native';
 import { confirmChange } from '../admin/confirm';
 import { useSession } from '../api';
@@ -16,7 +18,7 @@ import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
 import { CLAIM_STYLE_LABEL, useDeleteSavedClaimCheck, useSavedClaimCheck } from './api';
 import { ClaimCaution } from './ClaimCheckScreen';
-import { CheckRuns, ClaimNotes, FigureTable, MatchList, ParagraphPanel } from './ResultParts';
+import { CheckRuns, ClaimNotes, FigureTable, MatchList, NEEDS_TITLE, NeedsList, ParagraphPanel } from './ResultParts';
 import { isNotFound, SignInToSave } from './Saving';
 import { WhereInText } from './WhereInText';
 
@@ -25,6 +27,8 @@ export function SavedClaimCheckScreen({ token }: { token: string }) {
   const remove = useDeleteSavedClaimCheck();
   const session = useSession();
   const [deleted, setDeleted] = useState(false);
+  /** The variant chosen here; until then, the one it was saved with. */
+  const [variant, setVariant] = useState<ParagraphVariant | null>(null);
 
   if (query.isPending) {
     return (
@@ -60,6 +64,8 @@ export function SavedClaimCheckScreen({ token }: { token: string }) {
 
   const { saved } = query.data;
   const { result } = saved;
+  const shownVariant = variant ?? (result.variant as ParagraphVariant | undefined) ?? 'referee';
+  const needs = (result.needs as typeof result.needs | undefined) ?? [];
   const onDelete = () =>
     confirmChange('Delete this saved check?', 'Its link will stop working for everyone you shared it with.', 'Delete', () =>
       remove.mutate(token, { onSuccess: () => setDeleted(true) }),
@@ -84,6 +90,9 @@ export function SavedClaimCheckScreen({ token }: { token: string }) {
       {!session.data?.user ? <SignInToSave next={`/check/${token}`} /> : null}
 
       <View testID="claim-result">
+        <Section title="Paragraph to paste">
+          <ParagraphPanel result={result} variant={shownVariant} onVariant={setVariant} />
+        </Section>
         <Section title="The claim">
           <Text testID="claim-saved-text" selectable numberOfLines={12} style={[type.body, styles.text]}>
             {saved.text}
@@ -100,9 +109,11 @@ export function SavedClaimCheckScreen({ token }: { token: string }) {
         <Section title="Checks run">
           <CheckRuns runs={result.checks} />
         </Section>
-        <Section title="Referee paragraph">
-          <ParagraphPanel paragraph={result.paragraph} />
-        </Section>
+        {needs.length > 0 ? (
+          <Section title={NEEDS_TITLE}>
+            <NeedsList needs={needs} editable={false} />
+          </Section>
+        ) : null}
       </View>
     </Screen>
   );

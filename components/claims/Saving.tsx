@@ -1,7 +1,8 @@
 /**
- * Saving a claim check and sharing it by link (signed in), and the account's own saved checks with
- * a way to delete each; signed out, a line on how to get there.
+ * Saving a claim check and sharing it by link, and the account's own saved checks with a way to
+ * delete each. Signed out, Save goes by the sign-in screen and comes back to the same check.
  */
+import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { confirmChange } from '../admin/confirm';
 import { ApiError } from '../api';
@@ -31,30 +32,64 @@ interface SavePanelProps {
   request: ClaimCheckRequest;
   /** The figures were changed since that result; saving keeps the result on screen. */
   unsavedEdits: boolean;
+  signedIn: boolean;
+  /**
+   * Signed out: keep the check and go to the sign-in screen, which comes back here. Answers false
+   * when the browser would not keep it (storage turned off), and nothing happens.
+   */
+  onSignInToSave: () => boolean;
+  /** Saved: the kept copy is no longer needed. */
+  onSaved?: () => void;
+  /** The reader just came back from signing in to save this check. */
+  resumed?: boolean;
 }
 
-/** "Save and get a link", then the link with a copy button. */
-export function SavePanel({ request, unsavedEdits }: SavePanelProps) {
+/** "Save and get a link", then the link with a copy button; signed out, the same button goes by the sign-in screen. */
+export function SavePanel({ request, unsavedEdits, signedIn, onSignInToSave, onSaved, resumed = false }: SavePanelProps) {
   const save = useSaveClaimCheck();
+  const [notKept, setNotKept] = useState(false);
   const saved = save.data?.saved;
   // A link for another request than the one on screen is not this check's.
   const current = saved && save.variables === request ? saved : undefined;
+  const onSave = () => {
+    if (!signedIn) {
+      setNotKept(!onSignInToSave());
+      return;
+    }
+    save.mutate(request, { onSuccess: () => onSaved?.() });
+  };
 
   return (
     <View style={styles.root}>
+      {resumed && signedIn && !current ? (
+        <Text testID="claim-resumed" role="status" style={type.uiStrong}>
+          You are signed in, and your check is as you left it. Save it to get its link.
+        </Text>
+      ) : null}
       <Text style={type.caption}>
         Saving stores the text, the figures and this result under a link that only those you give it to can find.
-        {unsavedEdits ? ' It saves the result shown; re-run first to save the figures as you changed them.' : ''}
+        {signedIn ? '' : ' It needs an account: you sign in, and come back to this check to save it.'}
+        {unsavedEdits ? ' It saves the result shown; the figures you are changing are not in it until the checks have run again.' : ''}
       </Text>
       <Button
         testID="claim-save"
-        label="Save and get a link"
+        label={signedIn ? 'Save and get a link' : 'Sign in and save'}
         busy={save.isPending}
         busyLabel="Saving…"
-        onPress={() => save.mutate(request)}
+        onPress={onSave}
       />
+      {notKept ? (
+        <Text testID="claim-save-not-kept" role="alert" style={type.body}>
+          This browser would not keep the check while you sign in (its site storage is turned off), so it would be lost.
+          Copy the paragraph first, or{' '}
+          <TextLink inline href="/sign-in?next=%2Fcheck" testID="claim-sign-in">
+            sign in
+          </TextLink>{' '}
+          and run the check again.
+        </Text>
+      ) : null}
       {save.error && save.variables === request ? (
-        <ErrorNotice testID="claim-save-error" error={save.error} what="the saved check" onRetry={() => save.mutate(request)} />
+        <ErrorNotice testID="claim-save-error" error={save.error} what="the saved check" onRetry={onSave} />
       ) : null}
       {current ? (
         <View testID="claim-share" style={styles.share}>

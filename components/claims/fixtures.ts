@@ -1,72 +1,100 @@
 /**
  * Invented test data for the claim-check component tests: a made-up pitch for a sealed microwave
- * cavity, the figures in it, and results built with the real planner (shared/claims/plan.ts), so the
- * checks carry the kit's own outputs and verdicts.
+ * cavity (a hedged power and a thrust given as a range), a made-up heat-pump advertisement that
+ * keeps within its bound, and results built with the real figure reader (shared/claims/reader.ts)
+ * and planner (shared/claims/plan.ts), so the figures, checks, findings, sentences and needs are
+ * theirs; only the matches and the paragraphs are made up here (they come from the server).
  */
 import { runClaimChecks } from '@/shared/claims/plan';
-import type { ClaimCheckResult, Figure, SavedClaimCheckDto } from './api';
+import { extractFigures } from '@/shared/claims/reader';
+import {
+  PARAGRAPH_VARIANT_LABEL,
+  PARAGRAPH_VARIANTS,
+  type ClaimParagraph,
+  type ParagraphVariant,
+} from '@/shared/claims/types';
+import { formatQuantity } from '@/shared/worksheet/quantity';
+import type { ClaimCheckResult, ClaimMatch, Figure, SavedClaimCheckDto } from './api';
 
 // Invented test data: no real device, company or person.
 export const pitch =
-  'Our sealed copper cavity, fed 1.5 kW of microwaves, produced a steady 0.2 lbf of thrust with no propellant at all.';
+  'Our sealed copper cavity, fed up to 1.5 kW of microwaves, produced a steady 0.1–0.2 lbf of thrust with no propellant at all.';
 
 // 1 lbf = 0.453 592 37 kg × 9.806 65 m/s² exactly (NIST SP 811, 2008, appendix B.8).
 export const LBF = 0.45359237 * 9.80665;
 
-export function figure(partial: Partial<Figure> & Pick<Figure, 'id' | 'kind' | 'quantity' | 'si' | 'unit' | 'display'>): Figure {
-  return { text: partial.quantity, start: null, end: null, role: null, ...partial };
+/** A figure typed by hand (or changed), as the server reads it back. */
+export function figure(partial: Partial<Figure> & Pick<Figure, 'id' | 'kind' | 'quantity' | 'si' | 'unit'>): Figure {
+  return { text: partial.quantity, start: null, end: null, role: null, display: formatQuantity(partial.si, partial.unit), ...partial };
 }
 
-const at = (text: string) => ({ start: pitch.indexOf(text), end: pitch.indexOf(text) + text.length, text });
+/** The pitch's figures as the reader finds them: f1 the power ("up to"), f2 the thrust (a range). */
+export const figures: Figure[] = extractFigures(pitch);
 
-export const figures: Figure[] = [
-  figure({ id: 'f1', kind: 'power', quantity: '1.5 kW', ...at('1.5 kW'), si: 1500, unit: 'W', display: '1.5 kW', role: 'in' }),
-  figure({ id: 'f2', kind: 'thrust', quantity: '0.2 lbf', ...at('0.2 lbf'), si: 0.2 * LBF, unit: 'N', display: '889.6 mN' }),
+/** Invented: an ordinary heat pump, advertised by its heating COP as a percentage, well within Carnot. */
+export const heatPumpText =
+  'Invented advertisement: our heat pump is 350% efficient, heating the house at 35 °C from outside air at 5 °C.';
+export const heatPumpFigures: Figure[] = extractFigures(heatPumpText);
+
+const entryUrl = 'http://127.0.0.1:8080/entries/resonant-cavity-thruster/v/1';
+const reference = 'Counterweight. (2026). Thrust from microwaves in a closed cavity (Version 1).';
+
+/** A paragraph of each variant, marked with `label` so that a test can tell them apart. */
+function paragraphOf(variant: ParagraphVariant, style: ClaimCheckResult['style'], label: string): ClaimParagraph {
+  const body = `(${label}, ${PARAGRAPH_VARIANT_LABEL[variant]}) The device belongs to a class set out in the Counterweight entry “Thrust from microwaves in a closed cavity”, version 1 (${entryUrl}) [1].`;
+  const ref = style === 'vancouver' ? `Counterweight. Thrust from microwaves in a closed cavity [Version 1]. 2026.` : reference;
+  return { variant, style, body, references: [{ n: 1, id: 'resonant-cavity-thruster-v1', counterweight: true, text: ref }], text: `${body}\n\nReferences\n1. ${ref}\n` };
+}
+
+const matches: ClaimMatch[] = [
+  {
+    slug: 'resonant-cavity-thruster',
+    title: 'Thrust from microwaves in a closed cavity',
+    version: 1,
+    score: 31.4,
+    terms: ['seal', 'caviti', 'microwav'],
+    words: ['sealed', 'cavity', 'microwaves'],
+    url: entryUrl,
+    inBrief: 'Radiation kept inside a closed box cannot push the box.',
+  },
+  {
+    slug: 'photon-rocket',
+    title: 'The photon rocket',
+    version: 3,
+    score: 4.2,
+    terms: ['propel'],
+    words: ['propellant'],
+    url: 'http://127.0.0.1:8080/entries/photon-rocket/v/3',
+    inBrief: 'Light carries momentum E/c.',
+  },
 ];
 
-export function resultFor(figs: Figure[], style: ClaimCheckResult['style'] = 'apa', label = 'first'): ClaimCheckResult {
-  const { checks, notes } = runClaimChecks(figs);
-  const url = 'http://127.0.0.1:8080/entries/resonant-cavity-thruster/v/1';
+export function resultFor(
+  figs: Figure[],
+  style: ClaimCheckResult['style'] = 'apa',
+  label = 'first',
+  variant: ParagraphVariant = 'referee',
+  text = pitch,
+): ClaimCheckResult {
+  const { checks, needs, notes } = runClaimChecks(figs, { text });
+  const paragraphs = Object.fromEntries(PARAGRAPH_VARIANTS.map((v) => [v, paragraphOf(v, style, label)])) as Record<ParagraphVariant, ClaimParagraph>;
   return {
     style,
-    textLength: pitch.length,
-    matches: [
-      {
-        slug: 'resonant-cavity-thruster',
-        title: 'Thrust from microwaves in a closed cavity',
-        version: 1,
-        score: 31.4,
-        terms: ['seal', 'caviti', 'microwav'],
-        words: ['sealed', 'cavity', 'microwaves'],
-        url,
-        inBrief: 'Radiation kept inside a closed box cannot push the box.',
-      },
-      {
-        slug: 'photon-rocket',
-        title: 'The photon rocket',
-        version: 3,
-        score: 4.2,
-        terms: ['propel'],
-        words: ['propellant'],
-        url: 'http://127.0.0.1:8080/entries/photon-rocket/v/3',
-        inBrief: 'Light carries momentum E/c.',
-      },
-    ],
+    textLength: text.length,
+    matches,
     figures: figs,
     checks,
-    paragraph: {
-      style,
-      body: `(${label}) The device belongs to a class set out in the Counterweight entry “Thrust from microwaves in a closed cavity”, version 1 (${url}) [1].`,
-      references: [{ n: 1, id: 'resonant-cavity-thruster-v1', counterweight: true, text: 'Counterweight. (2026). Thrust from microwaves in a closed cavity (Version 1).' }],
-      text: `(${label}) The device belongs to a class set out in the Counterweight entry “Thrust from microwaves in a closed cavity”, version 1 (${url}) [1].\n\nReferences\n1. Counterweight. (2026). Thrust from microwaves in a closed cavity (Version 1).\n`,
-    },
+    needs,
+    paragraph: paragraphs[variant],
+    paragraphs,
+    variant,
     notes: [...notes, 'Invented note: the text names no measurement conditions.'],
   };
 }
 
 export const token = 'tok_ABCDEFGHIJKLMNOPQRSTUV';
 
-export function savedDto(mine: boolean): SavedClaimCheckDto {
+export function savedDto(mine: boolean, variant: ParagraphVariant = 'referee'): SavedClaimCheckDto {
   return {
     token,
     url: `http://127.0.0.1:8080/check/${token}`,
@@ -74,7 +102,7 @@ export function savedDto(mine: boolean): SavedClaimCheckDto {
     text: pitch,
     style: 'apa',
     figures: null,
-    result: resultFor(figures, 'apa', 'saved'),
+    result: resultFor(figures, 'apa', 'saved', variant),
     mine,
   };
 }
