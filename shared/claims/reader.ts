@@ -251,6 +251,8 @@ function unitAt(text: string, at: number): { form: UnitForm; end: number } | nul
 
 function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
   const u = unitAt(text, at);
+  // "5 N·m", "6 N-m", "2 K-type", "3 W-h": a compound or a name, not a figure.
+  if (u && /^(?:[-·⋅][^\S\n]*(?:type|class(?!\p{L})|[mhs](?!\p{L})|m²|m2))/iu.test(text.slice(u.end, u.end + 8))) return { suffix: null, end: at };
   if (u) {
     // A compound: thrust per power, power per mass; any other compound is not a figure.
     COMPOUND_RE.lastIndex = u.end;
@@ -568,18 +570,16 @@ export function extractFigures(text: string): Figure[] {
         upperNum = next.num;
         end = next.end;
         next.consumed = true;
-      } else if (
-        !next.plusMinus &&
-        isRangeGap(text, gapStart, next.start, t.start) &&
-        (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) &&
-        next.suffix &&
+      } else if (!next.plusMinus && isRangeGap(text, gapStart, next.start, t.start) && (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) && next.suffix) {
         // Two temperatures "between 600 °C and 30 °C" or "from 10 °C to 55 °C" are the two sides, not a range.
-        !(suffixKind(next.suffix) === 'temperature' && !/^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start)) && !isDifference(text, t.start, next.end, floor))
-      ) {
+        const twoSides =
+          suffixKind(next.suffix) === 'temperature' && !/^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start)) && !isDifference(text, t.start, next.end, floor);
         suffix = next.suffix;
-        upperNum = next.num;
-        end = next.end;
-        next.consumed = true;
+        if (!twoSides) {
+          upperNum = next.num;
+          end = next.end;
+          next.consumed = true;
+        }
       }
     }
     if (t.words && !suffix && !bareKind(text, t.start, t.numEnd, floor)) continue;
