@@ -31,7 +31,9 @@ function expectWellFormed(text: string, figures: Figure[]) {
     // si and display are parseQuantity and formatQuantity of the quantity (the contract, types.ts).
     expect(f.si).toBe(parseQuantity(f.quantity, f.unit));
     expect(f.display).toBe(formatQuantity(f.si, f.unit));
-    if (i > 0) expect(f.start!).toBeGreaterThanOrEqual(figures[i - 1].end!);
+    // Figures read from the text come in order and do not overlap; a derived figure spans the figures it comes from.
+    const prior = figures.slice(0, i).filter((p) => !p.derived);
+    if (!f.derived && prior.length) expect(f.start!).toBeGreaterThanOrEqual(prior[prior.length - 1].end!);
   });
 }
 
@@ -529,5 +531,100 @@ describe('readFigure', () => {
 
   test('an unknown kind throws QuantityError too', () => {
     expect(() => readFigure({ kind: 'luminance' as FigureKind, quantity: '3 cd' }, 'f1')).toThrow(QuantityError);
+  });
+});
+
+/**
+ * The phrasing families of issue 11, item 1, each read right. Every text is invented test data.
+ * Conversion factors: NIST SP 811 (2008), Appendix B.8/B.9; metric horsepower 735.498 75 W and
+ * mechanical horsepower 745.699 9 W (B.8); kgf 9.806 65 N (B.8); BTU_IT 1 055.056 J, BTU_IT/h
+ * 0.293 071 1 W (B.8); °F → K: (t + 459.67)·5/9 (SP 811 §4.2.1.1 and B.9); c = 299 792 458 m/s (SI Brochure).
+ */
+describe('phrasing families (issue 11)', () => {
+  const read = (text: string) => {
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    return figures;
+  };
+  const pick = (figures: Figure[], kind: FigureKind) => figures.filter((f) => f.kind === kind);
+
+  test('percentages by context: a heat pump is a COP, an engine an efficiency, a quantum efficiency is neither', () => {
+    expect(read('The ground-source heat pump runs at 420 % efficiency.')).toMatchObject([{ kind: 'cop', role: 'heating', si: 4.2 }]);
+    expect(read('The marine diesel is 38 % efficient.')).toMatchObject([{ kind: 'efficiency', si: 0.38 }]);
+    expect(read('It turns 41 % of the fuel heat into shaft work.')).toMatchObject([{ kind: 'efficiency', si: expect.closeTo(0.41, 12) }]);
+    expect(read('An internal quantum efficiency of 140 % was measured.')).toMatchObject([{ kind: 'quantum-efficiency', si: 1.4 }]);
+    expect(read('The cell reaches 115 % EQE.')).toMatchObject([{ kind: 'quantum-efficiency', si: 1.15 }]);
+    expect(read('Sales rose 35 % last year.')).toEqual([]);
+  });
+
+  test('ranges and hedges', () => {
+    expect(read('It gave 3–6 mN.')).toMatchObject([{ kind: 'thrust', si: 0.003, upper: { si: 0.006 } }]);
+    expect(read('It drew between 0.5 and 1.5 kW.')).toMatchObject([{ kind: 'power', si: 500, upper: { si: 1500 }, role: 'in' }]);
+    expect(read('It gives up to 5 mN.')).toMatchObject([{ kind: 'thrust', si: 0.005, hedge: 'up-to' }]);
+    expect(read('It draws about 2 kW.')).toMatchObject([{ kind: 'power', si: 2000, hedge: 'about' }]);
+    expect(read('It draws ~3 W.')).toMatchObject([{ kind: 'power', si: 3, hedge: 'about' }]);
+    expect(read('It delivers more than 3 kW.')).toMatchObject([{ kind: 'power', si: 3000, hedge: 'more-than', role: 'out' }]);
+    expect(read('A COP between 3.2 and 4.1.')).toMatchObject([{ kind: 'cop', si: 3.2, upper: { si: 4.1 } }]);
+  });
+
+  test('temperature differences are differences, and a cold side is derived from the hot one', () => {
+    expect(read('It works across a 20 °C temperature difference.')).toMatchObject([{ kind: 'temperature-difference', si: 20 }]);
+    expect(read('A ΔT of 20 K is enough.')).toMatchObject([{ kind: 'temperature-difference', si: 20 }]);
+    const f = read('The hot plate sits at 80 °C and the fins run 36 °F cooler.');
+    expect(pick(f, 'temperature-difference')[0].si).toBeCloseTo(20, 9); // a difference of 36 °F is 20 K
+    const cold = pick(f, 'temperature').find((x) => x.role === 'cold')!;
+    expect(cold.si).toBeCloseTo(353.15 - 20, 9);
+    expect(cold.derived).toMatch(/colder side/);
+    const up = read('Its collector runs 40 degrees above the 20 °C ambient.');
+    expect(pick(up, 'temperature').find((x) => x.role === 'hot')!.si).toBeCloseTo(333.15, 9);
+  });
+
+  test('figures given through relations', () => {
+    const iv = read('The coil draws 12 A at 24 V and lights a 300 W lamp.');
+    expect(pick(iv, 'power').find((x) => x.derived)).toMatchObject({ si: 288, role: 'in' });
+    expect(pick(iv, 'power').find((x) => !x.derived)).toMatchObject({ si: 300, role: 'out' });
+    const ex = read('The reactor gives 4 W more heat than the 20 W it draws.');
+    expect(pick(ex, 'power').map((x) => [x.role, x.si])).toEqual([['excess', 4], ['in', 20], ['out', 24]]);
+    expect(read('Thrust-to-power of 1.2 mN per kW.')).toMatchObject([{ kind: 'thrust-per-power', si: 1.2e-6 }]);
+    expect(read('It gives 5 µN/W.')[0].si).toBeCloseTo(5e-6, 18);
+    expect(read('A specific power of 2 kW/kg.')).toMatchObject([{ kind: 'specific-power', si: 2000 }]);
+    const self = read('The self-running motor drives a 1.5 kW pump.');
+    expect(pick(self, 'power').map((x) => [x.role, x.si])).toEqual([['in', 0], ['out', 1500]]);
+    expect(read('It gives back 1.3 units for every unit it takes.')).toMatchObject([{ kind: 'efficiency', si: 1.3 }]);
+    expect(read('Its output is three times its input.')).toMatchObject([{ kind: 'efficiency', si: 3 }]);
+    const run = read('Over a 72-hour run it drew 400 W.');
+    expect(pick(run, 'duration')[0].si).toBe(72 * 3600);
+    expect(pick(run, 'energy')[0]).toMatchObject({ role: 'in', si: 400 * 72 * 3600 });
+    expect(read('It ran for two weeks.')).toMatchObject([{ kind: 'duration', si: 14 * 86400 }]);
+  });
+
+  test('units as people write them', () => {
+    expectRelClose(read('It lifts 20 pounds of lift.')[0].si, 20 * 4.448222, SEVEN); // lbf
+    expect(read('It gives 3 kilograms of thrust.')[0].si).toBeCloseTo(3 * 9.80665, 12); // kgf
+    expect(read('It shows 12 grams of thrust.')[0].si).toBeCloseTo(0.012 * 9.80665, 12); // gf
+    expect(read('A thrust of 40 micronewtons.')[0].si).toBeCloseTo(40e-6, 18);
+    expect(read('A thrust of 40 uN.')[0].si).toBeCloseTo(40e-6, 18);
+    expect(read('A 90 PS engine.')[0].si).toBeCloseTo(90 * 735.49875, 9); // metric horsepower
+    expectRelClose(read('A 150 hp engine.')[0].si, 150 * 745.6999, SEVEN); // mechanical horsepower
+    expectRelClose(read('It puts out 12,000 BTU/h.')[0].si, 12000 * 0.2930711, SEVEN);
+    expect(read('Outdoor air at 41 °F.')[0].si).toBeCloseTo(278.15, 9);
+    expect(read('F = 2.4e-3 N.')[0].si).toBeCloseTo(2.4e-3, 15);
+    expect(read('F = 2.4 × 10⁻³ N.')[0].si).toBeCloseTo(2.4e-3, 15);
+    expect(read('It needs three kilowatts.')).toMatchObject([{ kind: 'power', si: 3000 }]);
+    expect(read('Rated for 5K hours.')).toMatchObject([{ kind: 'duration', si: 5000 * 3600 }]);
+  });
+
+  test('rocket claims: wet and propellant masses, Isp, Δv; the dry mass derived', () => {
+    const f = read('The stage has a wet mass of 1200 kg, carries 800 kg of propellant at an Isp of 320 s and claims a Δv of 6 km/s.');
+    expect(pick(f, 'mass').map((x) => [x.role, x.si])).toEqual([['wet', 1200], ['propellant', 800], ['dry', 400]]);
+    expect(pick(f, 'specific-impulse')[0].si).toBe(320);
+    expect(pick(f, 'speed')[0]).toMatchObject({ role: 'delta-v', si: 6000 });
+    expect(read('Exhaust velocity of 4.4 km/s.')).toMatchObject([{ kind: 'speed', role: 'exhaust', si: 4400 }]);
+  });
+
+  test('speeds above c are read as stated', () => {
+    expect(read('It reaches 450,000 km/s.')).toMatchObject([{ kind: 'speed', si: 4.5e8 }]);
+    expect(read('It reaches 1.5c.')[0].si).toBeCloseTo(1.5 * 299_792_458, 3);
+    expect(read('It reaches 30 % of the speed of light.')[0].si).toBeCloseTo(0.3 * 299_792_458, 3);
   });
 });

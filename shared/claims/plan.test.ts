@@ -1,139 +1,214 @@
 /**
- * Which checks a claim's figures allow, and their results: compared with the check kit (runCheck on
- * the same typed inputs) and with textbook formulas. The figures are invented test data.
+ * Which checks a claim's figures allow, and their results (issue 11, item 2): compared with the
+ * check kit (runCheck on the same typed inputs) and with textbook formulas. Verdicts a referee can
+ * stand behind: nothing run on a default the text never gave, ranges at their ends most favourable
+ * to the claim, lawful devices reported as consistent. The figures are invented test data.
  */
 import { runCheck } from '../checks/run';
 import { formatQuantity, parseQuantity } from '../worksheet/quantity';
-import { planChecks, runClaimChecks } from './plan';
+import { planChecks, readSignals, runClaimChecks, signalledClasses } from './plan';
+import { extractFigures } from './reader';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from './types';
 
 let n = 0;
-function fig(kind: FigureKind, quantity: string, role: FigureRole = null): Figure {
+function fig(kind: FigureKind, quantity: string, role: FigureRole = null, upper?: string): Figure {
   const unit = FIGURE_SI_UNIT[kind];
   const si = parseQuantity(quantity, unit);
   n += 1;
-  return { id: `f${n}`, kind, quantity, text: quantity, start: null, end: null, si, unit, display: formatQuantity(si, unit), role };
+  const f: Figure = { id: `f${n}`, kind, quantity, text: quantity, start: null, end: null, si, unit, display: formatQuantity(si, unit), role };
+  if (upper) {
+    const u = parseQuantity(upper, unit);
+    f.upper = { quantity: upper, si: u, display: formatQuantity(u, unit) };
+  }
+  return f;
 }
 beforeEach(() => (n = 0));
 
-// c = 299 792 458 m/s exactly (BIPM SI Brochure, 9th ed., §2.2, the defining constant).
+// c = 299 792 458 m/s exactly (BIPM SI Brochure, 9th ed., §2.2, a defining constant).
 const C = 299_792_458;
+// g0 = 9.806 65 m/s² exactly (3rd CGPM, 1901; NIST SP 811 Appendix B.8 footnote).
+const G0 = 9.80665;
+const out = (run: { outputs: { name: string; si: number }[] }, name: string) => run.outputs.find((o) => o.name === name)!.si;
+const FREE = { text: 'A sealed, propellant-free drive (invented test data).' };
 
-describe('thrust with power', () => {
-  const figures = () => [fig('thrust', '0.2 lbf'), fig('power', '1.5 kW', 'in')];
-
-  it('plans the photon bound and the break-even speed on those figures', () => {
-    const { planned } = planChecks(figures());
-    expect(planned.map((p) => p.check)).toEqual(['photon-bound', 'break-even-speed']);
-    expect(planned[0]).toMatchObject({ inputs: { F_claimed: '0.2 lbf', P: '1.5 kW' }, uses: ['f1', 'f2'], assumptions: [] });
-    // The break-even check also takes a mass and a speed; the text gave neither, and that is said.
-    expect(planned[1].assumptions.join(' ')).toMatch(/default/);
+describe('nothing is run on a default', () => {
+  it('plans nothing for no figures', () => {
+    expect(planChecks([])).toEqual({ planned: [], needs: [], notes: [] });
   });
 
-  it('gives the same results as the check kit and as P/c', () => {
-    const { checks } = runClaimChecks(figures());
-    const photon = checks.find((c) => c.check === 'photon-bound')!;
+  it('a propellant-free thrust and power: the photon bound runs; the break-even speed needs a speed the text does not give', () => {
+    const { checks, needs } = runClaimChecks([fig('thrust', '0.2 lbf'), fig('power', '1.5 kW', 'in')], FREE);
+    expect(checks.map((c) => c.check)).toEqual(['photon-bound']);
+    const photon = checks[0];
     const kit = runCheck('photon-bound', { F_claimed: '0.2 lbf', P: '1.5 kW' });
     expect(photon.outputs).toEqual(kit.outputs.map(({ name, label, si, unit, display }) => ({ name, label, si, unit, display })));
-    expect(photon.verdict).toEqual(kit.verdict);
-    const bound = photon.outputs.find((o) => o.name === 'F_bound')!.si;
-    expect(bound).toBeCloseTo(1500 / C, 15); // photon-rocket bound F = P/c (any mechanics text; from memory)
-    // 1 lbf = 4.448 222 N (NIST SP 811, Appendix B.8); ratio = 0.2 lbf / (P/c).
-    expect(photon.outputs.find((o) => o.name === 'ratio')!.si / ((0.2 * 4.4482216152605) / (1500 / C))).toBeCloseTo(1, 12);
-    expect(photon.verdict.holds).toBe(false);
+    // Photon-rocket bound F = P/c (any text on radiation pressure, e.g. Jackson, Classical Electrodynamics, §6.7; from memory);
+    // 1 lbf = 4.448 221 615 260 5 N (NIST SP 811, Appendix B.8).
+    expect(out(photon, 'ratio')).toBeCloseTo((0.2 * 4.4482216152605) / (1500 / C), 6);
+    expect(photon).toMatchObject({ finding: 'breaks', law: 'conservation of linear momentum' });
+    expect(photon.sentence).toMatch(/^Conflicts with conservation of linear momentum: /);
+    expect(photon.sentence).not.toMatch(/\^|e\+/); // numbers as in print
+    expect(needs).toEqual([expect.objectContaining({ check: 'break-even-speed', missing: ['a speed of the craft in some inertial frame'] })]);
+  });
+
+  it('runs the break-even speed when the text gives a speed, and takes no mass it was not given', () => {
+    const { checks } = runClaimChecks([fig('thrust', '2 mN'), fig('power', '1 kW', 'in'), fig('speed', '30 km/s')], FREE);
     const be = checks.find((c) => c.check === 'break-even-speed')!;
-    // Break-even speed v = P/F (kinetic power F·v equals the input power).
-    expect(be.outputs.find((o) => o.name === 'v_break_even')!.si).toBeCloseTo(1500 / (0.2 * 4.4482216152605), 9);
-    expect(be.permalink).toBe('/checks/break-even-speed?F=0.2%20lbf&P=1.5%20kW');
+    // Break-even speed v = P/F: the kinetic power F·v equals the input power.
+    expect(out(be, 'v_break_even')).toBeCloseTo(1000 / 0.002, 6);
+    expect(be.inputs).toMatchObject({ F: '2 mN', P: '1 kW', v: '30 km/s', m: '0 kg' });
   });
 
-  it('uses a mass and a speed when the text gives them', () => {
-    const { planned } = planChecks([...figures(), fig('mass', '250 kg'), fig('speed', '8 km/s')]);
-    expect(planned[1].inputs).toEqual({ F: '0.2 lbf', P: '1.5 kW', m: '250 kg', v: '8 km/s' });
-    expect(planned[1].assumptions).toEqual([]);
-  });
-
-  it('notes a thrust without a power', () => {
-    const { planned, notes } = planChecks([fig('thrust', '3 mN')]);
-    expect(planned).toEqual([]);
-    expect(notes.join(' ')).toMatch(/no input power/);
-  });
-
-  it('sizes the bench artifacts when a current is given', () => {
-    const { checks } = runClaimChecks([fig('thrust', '40 uN'), fig('current', '3 A'), fig('power', '60 W', 'in')]);
-    const art = checks.find((c) => c.check === 'artifact-budget')!;
-    expect(art.inputs).toMatchObject({ F_claimed: '40 uN', I: '3 A', P_heat: '60 W' });
-    const lorentz = art.outputs.find((o) => o.name === 'F_lorentz')!.si;
-    // Lorentz force on a straight wire across a field, F = I·L·B (any electromagnetism text; from memory),
-    // with the check's defaults L = 10 cm and B = 50 µT (a typical value of the Earth's field, shared/checks/constants.ts).
-    const kit = runCheck('artifact-budget', art.inputs);
-    expect(lorentz).toBe(kit.outputs.find((o) => o.name === 'F_lorentz')!.si);
-    expect(lorentz).toBeCloseTo(3 * 0.1 * 50e-6, 15);
-    expect(art.assumptions.join(' ')).toMatch(/heat/);
-  });
-});
-
-describe('temperatures with an efficiency or a COP', () => {
-  it('runs Carnot with the higher temperature as the hot one', () => {
-    const { checks } = runClaimChecks([fig('temperature', '20 degC'), fig('temperature', '90 degC'), fig('efficiency', '45 %')]);
-    const carnot = checks.find((c) => c.check === 'carnot')!;
-    expect(carnot.inputs).toEqual({ Th: '90 degC', Tc: '20 degC', eta_claimed: '45 %', cop_heating_claimed: '0', cop_cooling_claimed: '0' });
-    // Carnot efficiency 1 − Tc/Th with T/K = t/°C + 273.15 (NIST SP 811 §4.2.1.1).
-    expect(carnot.outputs.find((o) => o.name === 'eta_max')!.si).toBeCloseTo(1 - 293.15 / 363.15, 12);
-    expect(carnot.verdict.holds).toBe(false);
-    expect(carnot.assumptions.join(' ')).toMatch(/higher temperature/);
-  });
-
-  it('reads a cooling COP as one', () => {
-    const { planned } = planChecks([fig('temperature', '-18 degC', 'cold'), fig('temperature', '25 degC', 'hot'), fig('cop', '9', 'cooling')]);
-    expect(planned[0].inputs).toEqual({ Th: '25 degC', Tc: '-18 degC', eta_claimed: '0', cop_heating_claimed: '0', cop_cooling_claimed: '9' });
-    expect(planned[0].assumptions).toEqual([]);
-  });
-
-  it('says so when only one temperature is given', () => {
-    const { planned, notes } = planChecks([fig('temperature', '60 degC'), fig('efficiency', '0.7')]);
-    expect(planned).toEqual([]);
-    expect(notes.join(' ')).toMatch(/only one temperature/);
-  });
-
-  it('turns a Tc above Th given as roles into a note, not a crash', () => {
-    const { checks, notes } = runClaimChecks([fig('temperature', '400 K', 'cold'), fig('temperature', '300 K', 'hot'), fig('efficiency', '0.2')]);
+  it('a thrust with no word of propellant either way: the photon bound needs to know, and is not run', () => {
+    const { checks, needs } = runClaimChecks([fig('thrust', '90 mN'), fig('power', '1.5 kW', 'in')], { text: 'The thruster gives 90 mN on 1.5 kW.' });
     expect(checks).toEqual([]);
-    expect(notes.join(' ')).toMatch(/could not be run/);
+    expect(needs[0].check).toBe('photon-bound');
+  });
+
+  it('a device that expels propellant never gets the photon bound (an ion thruster is lawful)', () => {
+    const text = 'Our xenon ion thruster gives 90 mN on 1.5 kW of input power (invented test data).';
+    const { checks } = runClaimChecks(extractFigures(text), { text, classes: ['enclosed-radiation'] });
+    expect(checks.find((c) => c.check === 'photon-bound')).toBeUndefined();
+  });
+
+  it('a thrust with no power: the photon bound is listed as needing the input power', () => {
+    const { checks, needs } = runClaimChecks([fig('thrust', '3 mN')], FREE);
+    expect(checks).toEqual([]);
+    expect(needs).toEqual([expect.objectContaining({ check: 'photon-bound', missing: ['the input power'] })]);
+  });
+
+  it('a heat-pump COP with no temperatures needs them; it is never judged over-unity', () => {
+    const { checks, needs, notes } = runClaimChecks([fig('cop', '3.5', 'heating')], { text: 'The heat pump has a COP of 3.5.' });
+    expect(checks).toEqual([]);
+    expect(needs[0]).toMatchObject({ check: 'carnot', missing: ['the temperature of the hot side', 'the temperature of the cold side'] });
+    expect(notes.join(' ')).toMatch(/without breaking any law/);
+  });
+
+  it('an engine efficiency with one temperature needs the other', () => {
+    const { needs } = runClaimChecks([fig('efficiency', '45 %'), fig('temperature', '600 degC', 'hot')], { text: 'The engine is 45 % efficient at 600 °C.' });
+    expect(needs[0]).toMatchObject({ check: 'carnot', missing: ['the temperature of the cold side'] });
   });
 });
 
-describe('energy in and out', () => {
-  it('balances energies with their roles', () => {
-    const { checks } = runClaimChecks([fig('energy', '2 kWh', 'in'), fig('energy', '5 kWh', 'out')]);
-    const fl = checks.find((c) => c.check === 'first-law')!;
-    // 1 kWh = 3.6 × 10^6 J (NIST SP 811, Appendix B.8); over-unity ratio out/in = 2.5.
-    expect(fl.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(2.5, 12);
-    expect(fl.outputs.find((o) => o.name === 'balance')!.si).toBeCloseTo(-3 * 3.6e6, 3);
-    expect(fl.verdict.holds).toBe(false);
+describe('ranges: the end most favourable to the claim, and said', () => {
+  it('photon bound: the lowest thrust and the highest power', () => {
+    const { checks } = runClaimChecks([fig('thrust', '3 mN', null, '6 mN'), fig('power', '0.5 kW', 'in', '1.5 kW')], FREE);
+    const photon = checks[0];
+    expect(photon.inputs).toEqual({ F_claimed: '3 mN', P: '1.5 kW' });
+    expect(out(photon, 'ratio')).toBeCloseTo(0.003 / (1500 / C), 6); // F/(P/c)
+    expect(photon.assumptions.join(' ')).toMatch(/end most favourable to the claim, 3 mN/);
+    expect(photon.assumptions.join(' ')).toMatch(/end most favourable to the claim, 1.5 kW/);
   });
 
-  it('balances powers in and out over one hour, and says so', () => {
-    const { checks } = runClaimChecks([fig('power', '120 W', 'in'), fig('power', '0.5 hp', 'out')]);
-    const fl = checks.find((c) => c.check === 'first-law')!;
-    // 1 hp (550 ft·lbf/s) = 745.699 9 W (NIST SP 811, Appendix B.8).
-    expect(fl.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo((0.5 * 745.69987158227) / 120, 9);
-    expect(fl.assumptions[0]).toMatch(/one hour/);
-  });
-
-  it('reads an efficiency above 1 as energy out over energy in', () => {
-    const { checks } = runClaimChecks([fig('efficiency', '300 %')]);
-    expect(checks.map((c) => c.check)).toEqual(['first-law']);
-    expect(checks[0].outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(3, 12);
-  });
-
-  it('takes two energies without roles as in, then out, and says so', () => {
-    const { planned } = planChecks([fig('energy', '10 kJ'), fig('energy', '14 kJ')]);
-    expect(planned[0].inputs).toMatchObject({ E_in: '10 kJ', W_out: '14 kJ' });
-    expect(planned[0].assumptions[0]).toMatch(/swap/);
+  it('Carnot: the lowest claimed COP', () => {
+    const figures = [fig('cop', '3.2', 'heating', '4.1'), fig('temperature', '35 degC', 'hot'), fig('temperature', '8 degC', 'cold')];
+    const carnot = runClaimChecks(figures, { text: 'heat pump' }).checks[0];
+    // Carnot heating COP Th/(Th − Tc) with T/K = t/°C + 273.15 (NIST SP 811 §4.2.1.1).
+    expect(out(carnot, 'cop_heating_ratio')).toBeCloseTo(3.2 / (308.15 / 27), 9);
+    expect(carnot.finding).toBe('consistent');
   });
 });
 
-it('plans nothing for no figures', () => {
-  expect(runClaimChecks([])).toEqual({ checks: [], notes: [] });
+describe('lawful devices are reported as consistent with the law', () => {
+  it('a heat pump below its Carnot COP', () => {
+    const text = 'The air-source heat pump is 350 % efficient, heating water to 45 °C when it is 5 °C outside (invented test data).';
+    const { checks } = runClaimChecks(extractFigures(text), { text });
+    const carnot = checks.find((c) => c.check === 'carnot')!;
+    expect(carnot.inputs).toMatchObject({ cop_heating_claimed: '3.5', eta_claimed: '0' });
+    expect(out(carnot, 'cop_heating_ratio')).toBeCloseTo(3.5 / (318.15 / 40), 9);
+    expect(carnot).toMatchObject({ finding: 'consistent', law: 'the second law of thermodynamics' });
+    expect(carnot.sentence).toMatch(/^Consistent with the second law of thermodynamics/);
+    expect(checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+
+  it('a thermoelectric harvester below Carnot', () => {
+    const text = 'The thermoelectric generator converts 5 % of the heat into electricity between a 300 °C exhaust and 80 °C coolant (invented test data).';
+    const { checks } = runClaimChecks(extractFigures(text), { text });
+    const carnot = checks.find((c) => c.check === 'carnot')!;
+    // Carnot efficiency 1 − Tc/Th.
+    expect(out(carnot, 'eta_ratio')).toBeCloseTo(0.05 / (1 - 353.15 / 573.15), 9);
+    expect(carnot.finding).toBe('consistent');
+  });
+
+  it('a rocket that carries propellant and keeps to its equation', () => {
+    const text = 'The stage has a wet mass of 1,200 kg with 800 kg of propellant at an Isp of 320 s, and claims a delta-v of 3 km/s (invented test data).';
+    const { checks } = runClaimChecks(extractFigures(text), { text });
+    const rocket = checks.find((c) => c.check === 'rocket-equation')!;
+    // Tsiolkovsky: Δv = Isp·g0·ln(m0/m1) (Sutton & Biblarz, Rocket Propulsion Elements, eq. 4-7; from memory).
+    expect(out(rocket, 'dv')).toBeCloseTo(320 * G0 * Math.log(1200 / 400), 6);
+    expect(rocket.finding).toBe('consistent');
+    expect(checks.find((c) => c.check === 'photon-bound')).toBeUndefined();
+  });
+
+  it('a rocket that claims more than its propellant allows breaks it', () => {
+    const text = 'A 4 kg CubeSat carrying 200 g of propellant at a specific impulse of 70 s will achieve 300 m/s of delta-v (invented test data).';
+    const { checks } = runClaimChecks(extractFigures(text), { text });
+    const rocket = checks.find((c) => c.check === 'rocket-equation')!;
+    expect(out(rocket, 'dv')).toBeCloseTo(70 * G0 * Math.log(4 / 3.8), 6);
+    expect(rocket.finding).toBe('breaks');
+  });
+
+  it('a quantum efficiency above 100 % is not an energy claim', () => {
+    const text = 'Our LED shows an external quantum efficiency of 130 % (invented test data).';
+    const { checks, notes } = runClaimChecks(extractFigures(text), { text });
+    expect(checks).toEqual([]);
+    expect(notes.join(' ')).toMatch(/counts particles/);
+  });
+});
+
+describe('first-law balances', () => {
+  it('powers in and out: the ratio, over one second of steady running (said)', () => {
+    const { checks } = runClaimChecks([fig('power', '500 W', 'in'), fig('power', '2 kW', 'out')], { text: 'coil' });
+    const fl = checks[0];
+    expect(out(fl, 'over_unity')).toBeCloseTo(4, 12);
+    expect(fl.finding).toBe('breaks');
+    expect(fl.assumptions.join(' ')).toMatch(/does not depend on how long/);
+  });
+
+  it('a power in and an energy out over a stated run', () => {
+    const text = 'Over a 72-hour run the generator delivered 90 kWh while its controller drew 400 W (invented test data).';
+    const { checks } = runClaimChecks(extractFigures(text), { text });
+    const fl = checks.find((c) => c.check === 'first-law')!;
+    // 1 kWh = 3.6 × 10^6 J (NIST SP 811 Appendix B.8); E_in = 400 W × 72 h.
+    expect(out(fl, 'over_unity')).toBeCloseTo((90 * 3.6e6) / (400 * 72 * 3600), 9);
+  });
+
+  it('a self-running device with an output breaks it; a self-powered harvester does not get an input of 0', () => {
+    const text = 'The self-running generator delivers 2 kW to the house (invented test data).';
+    const fl = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')!;
+    expect(fl.finding).toBe('breaks');
+    const lawful = 'A self-powered sensor harvests 50 µW from vibrations and delivers 20 µW to its radio (invented test data).';
+    expect(runClaimChecks(extractFigures(lawful), { text: lawful }).checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+  });
+
+  it('an excess over the input: out = in + excess', () => {
+    const text = 'The cell gives off 4 W more heat than the 20 W it draws (invented test data).';
+    const fl = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')!;
+    expect(out(fl, 'over_unity')).toBeCloseTo(24 / 20, 12);
+  });
+
+  it('a gain in words', () => {
+    const text = 'For every unit of electricity we put in, the amplifier gives back 1.3 (invented test data).';
+    const fl = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')!;
+    expect(out(fl, 'over_unity')).toBeCloseTo(1.3, 12);
+  });
+});
+
+describe('speeds against c', () => {
+  it('a speed above c is a finding; ordinary speeds are not checked', () => {
+    const text = 'The capsule will reach 450,000 km/s (invented test data).';
+    const ls = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'light-speed')!;
+    expect(out(ls, 'ratio')).toBeCloseTo(4.5e8 / C, 12);
+    expect(ls.finding).toBe('breaks');
+    expect(runClaimChecks([fig('speed', '30 m/s')]).checks).toEqual([]);
+  });
+});
+
+describe('signals for the matcher', () => {
+  it('a thrust with a power and no propellant points to the propellant-free classes; an over-unity balance to over-unity', () => {
+    expect(signalledClasses([fig('thrust', '1 mN'), fig('power', '1 kW')], 'a drive')).toEqual(['propellant-free-thrust']);
+    expect(signalledClasses([fig('thrust', '1 mN'), fig('power', '1 kW')], 'a xenon thruster')).toEqual([]);
+    expect(signalledClasses([fig('power', '1 kW', 'in'), fig('power', '3 kW', 'out')], 'a coil')).toEqual(['over-unity']);
+    expect(readSignals({ text: 'without expelling any propellant' })).toMatchObject({ propellantFree: true, propellant: false });
+  });
 });
