@@ -58,8 +58,10 @@ describe('POST /api/claim-checks', () => {
     expect(power.si).toBe(1500);
   });
 
-  it('runs the checks that apply, with the results of the check kit', () => {
-    expect(body.checks.map((c) => c.check)).toEqual(expect.arrayContaining(['photon-bound', 'break-even-speed']));
+  it('runs the checks that apply, with the results of the check kit, and lists what needs a figure the text does not give', () => {
+    expect(body.checks.map((c) => c.check)).toEqual(['photon-bound']);
+    // No speed in the text: the break-even speed is not run on a default but listed as needing one.
+    expect(body.needs).toEqual([expect.objectContaining({ check: 'break-even-speed', missing: ['a speed of the craft in some inertial frame'] })]);
     for (const c of body.checks) {
       expect(c.outputs).toEqual(kitOutputs(c.check, c.inputs));
       expect(c.verdict).toEqual(runCheck(c.check, c.inputs).verdict);
@@ -69,9 +71,13 @@ describe('POST /api/claim-checks', () => {
     expect(photon.outputs.find((o) => o.name === 'F_bound')!.si).toBeCloseTo(1500 / 299_792_458, 15);
   });
 
-  it('writes the paragraph: the entry with its URL and version, the result, numbered APA references', () => {
+  it('writes the paragraph: the entry with its URL and version, the result, numbered APA references, in four variants', () => {
     const p = body.paragraph;
     expect(p.style).toBe('apa');
+    expect(body.variant).toBe('referee');
+    expect(p).toEqual(body.paragraphs.referee);
+    expect(Object.keys(body.paragraphs).sort()).toEqual(['examiner', 'grant', 'journalist', 'referee']);
+    expect(body.paragraphs.examiner.body).toMatch(/inoperable/);
     expect(p.body).toContain(body.matches[0].url);
     expect(p.body).toContain('version 1');
     expect(p.body).toMatch(/times the photon-rocket bound/);
@@ -101,6 +107,26 @@ describe('POST /api/claim-checks', () => {
     // Carnot efficiency 1 − Tc/Th, T/K = t/°C + 273.15 (NIST SP 811 §4.2.1.1).
     expect(carnot.outputs.find((o: { name: string }) => o.name === 'eta_max').si).toBeCloseTo(1 - 293.15 / 363.15, 12);
     expect(carnot.verdict.holds).toBe(false);
+  });
+
+  it('reports a lawful heat pump as consistent with the second law, never as breaking it, and answers in the variant asked for', async () => {
+    const text = 'Example Climate Ltd says its air-source heat pump is 350 % efficient, heating a 35 °C underfloor loop from 2 °C outdoor air (invented test data).';
+    const r = await run({ text, variant: 'journalist' });
+    expect(r.status).toBe(200);
+    const carnot = r.body.checks.find((c: { check: string }) => c.check === 'carnot');
+    // Carnot heating COP Th/(Th − Tc) = 308.15/33 = 9.34 (NIST SP 811 §4.2.1.1 for the kelvins); 3.5 is within it.
+    expect(carnot.outputs.find((o: { name: string }) => o.name === 'cop_heating_ratio').si).toBeCloseTo(3.5 / (308.15 / 33), 9);
+    expect(carnot.finding).toBe('consistent');
+    expect(r.body.checks.filter((c: { finding: string }) => c.finding === 'breaks')).toEqual([]);
+    expect(r.body.variant).toBe('journalist');
+    expect(r.body.paragraph).toEqual(r.body.paragraphs.journalist);
+    expect(r.body.paragraph.body).toMatch(/consistent with the second law of thermodynamics/);
+  });
+
+  it('answers 400 naming the field for an unknown variant', async () => {
+    const r = await run({ text: CAVITY, variant: 'tabloid' });
+    expect(r.status).toBe(400);
+    expect(Object.keys(r.body.error.fields)).toEqual(['body.variant']);
   });
 
   it('re-runs on figures the reader fixed, without reading the text again', async () => {
