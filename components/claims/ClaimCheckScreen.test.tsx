@@ -263,6 +263,35 @@ describe('ClaimCheckScreen', () => {
     expect(checkCalls(fetchMock)).toHaveLength(2);
   });
 
+  it('does not re-run the old figures while a new text is being checked', async () => {
+    let release: (r: Response) => void = () => undefined;
+    const other = `${pitch} It was also run for a week.`;
+    const fetchMock = mockFetch({
+      ...signedOut,
+      '/api/claim-checks': (init) => (bodyOf(init).text === other ? new Promise<Response>((resolve) => (release = resolve)) : answer(init)),
+    });
+    renderWithProviders(<ClaimCheckScreen />);
+    paste(pitch);
+    ctrlEnter();
+    await screen.findByTestId('claim-figure-f2');
+    fireEvent.change(screen.getByTestId('claim-figure-f2-quantity'), { target: { value: '20 mN' } });
+    paste(other);
+    expect(screen.getByTestId('claim-text-changed')).toBeTruthy();
+    ctrlEnter();
+    await pause(RERUN_DELAY_MS + 150);
+    expect(checkCalls(fetchMock).map(([, init]) => bodyOf(init))).toEqual([
+      { text: pitch, style: 'apa', variant: 'referee' },
+      { text: other, style: 'apa', variant: 'referee' },
+    ]);
+    expect(screen.getByTestId('claim-status').textContent).toContain('Checking the claim');
+    await act(async () => release(jsonResponse(200, resultFor(figures, 'apa', 'other'))));
+    await waitFor(() => expect(screen.getByTestId('claim-paragraph-body').textContent).toContain('(other,'));
+    expect((screen.getByTestId('claim-figure-f2-quantity') as HTMLInputElement).value).toBe(figures[1].quantity);
+    expect(screen.queryByTestId('claim-text-changed')).toBeNull();
+    await pause(RERUN_DELAY_MS + 150);
+    expect(checkCalls(fetchMock)).toHaveLength(2);
+  });
+
   it('marks a figure that cannot be read at once and sends nothing until it is fixed; an added figure runs once typed', async () => {
     const fetchMock = mockFetch({ ...signedOut, '/api/claim-checks': answer });
     renderWithProviders(<ClaimCheckScreen />);

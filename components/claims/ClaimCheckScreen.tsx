@@ -169,9 +169,10 @@ export function ClaimCheckScreen({ from, resume = false }: ClaimCheckScreenProps
   const resultKey = useMemo(() => (shown ? figuresKey(draftsOf(shown.result.figures)) : null), [shown]);
   const edited = shown !== null && key !== resultKey;
   useEffect(() => {
-    if (!shown || !edited || !readable || settledKey !== key || key === lastSentKey.current) return;
+    // Not while the text is being read afresh: its answer brings figures of its own.
+    if (!shown || checking || !edited || !readable || settledKey !== key || key === lastSentKey.current) return;
     send({ text: shown.request.text, style, variant, figures: toInputs(drafts) }, drafts);
-  }, [settledKey, key, edited, readable, shown, style, variant, drafts, send]);
+  }, [settledKey, key, checking, edited, readable, shown, style, variant, drafts, send]);
 
   /** Another reference style: the check runs again (the figures as they stand). */
   const onStyle = (next: ClaimStyle) => {
