@@ -235,7 +235,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
-      'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
+      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump)', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
   },
 ];
 

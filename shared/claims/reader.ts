@@ -139,7 +139,7 @@ const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_W
 const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|cy|cies)(?!\p{L})/iuy;
 /** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */
 const PERCENT_OF_HEAT_RE =
-  /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat)(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
+  /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:light|radiation|power)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
 const SPEED_OF_LIGHT_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light|[^\S\n]*of[^\S\n]+c(?!\p{L})|[^\S\n]*(?:the[^\S\n]+)?light[- ]speed/iuy;
 const TEMPERATURE_CONTEXT_RE = /(?<!\p{L})(?:temperatures?|heat(?:ed|s|ing)?|hot|hotter|warm(?:er|s|ed)?|cold|colder|cool(?:er|s|ed)?|ambient|boil\w*|freez\w*|Celsius|Fahrenheit|thermal|room|outdoor|outside|air|water|collector)(?!\p{L})/iu;
 const HEAT_PUMP_RE = new RegExp(`(?<!\\p{L})(?:${alt(HEAT_PUMP_WORDS)})(?!\\p{L})`, 'iu');
@@ -157,6 +157,18 @@ const GAIN_BEFORE_RE =
 const TIMES_AFTER_RE =
   /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical)[^\S\n]+)?(?:input|consumption|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in)/iuy;
 const TIMES_BEFORE_RE = /(?<!\p{L})(?:output|yield|gain|returns?|delivers?|produces?|generates?)(?:[^\S\n]+(?:is|of|was|are|reaches|reached|power|energy|exactly|about|roughly|some|nearly))*[^\S\n]*$/iu;
+/** "the output exceeds the input by a factor of 1.5", "output is higher than input by a factor of 2". */
+const FACTOR_BEFORE_RE =
+  /(?<!\p{L})(?:output|out|yield|production)[^.;!?\n]{0,40}(?:exceeds?|exceeding|is (?:higher|greater|larger|more) than|surpass\w*|outstrips?)[^.;!?\n]{0,30}(?:input|consumption|supply)[^.;!?\n]{0,20}by (?:a factor of|a ratio of)(?:[^\S\n]+(?:at least|about|roughly|some|nearly|over))?[^\S\n]*$/iu;
+/** "150 % of its input power", "120 % of the energy supplied": an output as a share of the input. */
+const PERCENT_OF_INPUT_RE =
+  /[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|energy (?:in|supplied|consumed|drawn)|power (?:in|supplied|consumed|drawn)|supply|electrical input)(?!\p{L})/iuy;
+/** "1.3 W for each watt in", "1.3 J back per joule supplied": a gain written with a unit. */
+const GAIN_PER_UNIT_RE =
+  /[^\S\n]*(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+)?(?:(?:back|out|returned)[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(?:watt|joule|kWh|kilowatt-hour|unit|W|J)s?(?!\p{L})/iuy;
+/** Multiples in words: "twice the energy it consumes", "three-fold its input". */
+const MULTIPLE_WORD_RE = /(?<!\p{L})(twice|double|triple|thrice|quadruple|two-?fold|three-?fold|four-?fold|five-?fold|ten-?fold)(?!\p{L})/giu;
+const MULTIPLE_VALUE: Record<string, number> = { twice: 2, double: 2, triple: 3, thrice: 3, quadruple: 4, twofold: 2, threefold: 3, fourfold: 4, fivefold: 5, tenfold: 10 };
 const RATIO_BEFORE_RE = /(?<!\p{L})(?:over-?unity|output[- ]to[- ]input|out(?:put)?\/in(?:put)?|energy gain|power gain|gain|amplification|multiplication)(?:[^\S\n]+(?:ratio|factor|coefficient))?(?:[^\S\n]*(?:[=:≈~]|of|is|was|reaching|about|around|approximately|roughly|near|up to|over|above|exceeding))*[^\S\n]*$/iu;
 
 /** Words that may stand between a figure and the role word after it ("2 kW of electrical input"). */
@@ -448,6 +460,8 @@ function readPercent(text: string, start: number, end: number, floor: number): P
   QE_AFTER_RE.lastIndex = end;
   const qe = QE_BEFORE_RE.exec(before);
   if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };
+  PERCENT_OF_INPUT_RE.lastIndex = end;
+  if (PERCENT_OF_INPUT_RE.test(text)) return { kind: 'efficiency', factor: 1, unit: '%' };
   EFFICIENCY_AFTER_RE.lastIndex = end;
   PERCENT_OF_HEAT_RE.lastIndex = end;
   const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text);
@@ -473,6 +487,7 @@ function bareKind(text: string, start: number, end: number, floor: number): { ki
   if (QE_BEFORE_RE.test(before) && /(?:[=:]|of|is|was|reaching|above|over|exceeding)[^\S\n]*$/i.test(before)) return { kind: 'quantum-efficiency' };
   if (EFFICIENCY_BARE_BEFORE_RE.test(before)) return { kind: 'efficiency' };
   if (RATIO_BEFORE_RE.test(before)) return { kind: 'efficiency', derived: 'a ratio of output to input' };
+  if (FACTOR_BEFORE_RE.test(before)) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
   GAIN_AFTER_RE.lastIndex = end;
   if (GAIN_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'units out for each unit in' };
   if (GAIN_BEFORE_RE.test(text.slice(windowStart(text, start, floor, 160), start))) return { kind: 'efficiency', derived: 'units out for each unit in' };
@@ -636,6 +651,30 @@ export function extractFigures(text: string): Figure[] {
       }
     }
     if (kind === null) continue;
+    if ((kind === 'power' || kind === 'energy') && suffix?.type === 'unit' && !suffix.per) {
+      GAIN_PER_UNIT_RE.lastIndex = end;
+      const g = GAIN_PER_UNIT_RE.exec(text);
+      if (g) {
+        kind = 'efficiency';
+        quantity = t.num;
+        upper = upperNum;
+        derived = 'units out for each unit in';
+      }
+    }
+    // "12 kW (16 hp)": a restatement in other units, not a second figure.
+    const prev = drafts[drafts.length - 1];
+    if (prev && prev.kind === kind && /^[^\S\n]*[(\[][^\S\n]*(?:about|approx\.?|~|≈|or)?[^\S\n]*$/.test(text.slice(prev.end, start))) {
+      try {
+        const a = parseQuantity(prev.quantity, FIGURE_SI_UNIT[kind]);
+        const b = parseQuantity(quantity, FIGURE_SI_UNIT[kind]);
+        if (Math.abs(a - b) <= 0.05 * Math.max(Math.abs(a), Math.abs(b))) {
+          floor = end;
+          continue;
+        }
+      } catch {
+        /* not comparable: keep it */
+      }
+    }
     if (role === undefined) role = roleFor(text, kind, start, end, floor);
     let hedge = hedgeBefore(text, start);
     // "over two weeks", "for over 3 hours" speak of the time the claim covers.
@@ -651,6 +690,25 @@ export function extractFigures(text: string): Figure[] {
     }
     drafts.push({ start, end, kind, quantity, upper, role, hedge, derived, assumption, direction });
     floor = end;
+  }
+
+  // "twice the energy it consumes", "a threefold output over its input": a gain in words.
+  MULTIPLE_WORD_RE.lastIndex = 0;
+  for (let m = MULTIPLE_WORD_RE.exec(text); m; m = MULTIPLE_WORD_RE.exec(text)) {
+    const at = m.index + m[0].length;
+    const after = text.slice(at, at + 90);
+    if (!/^[^\S\n]+(?:the|its|as much|as many|more)[^.;!?\n]{0,60}(?:input|consum\w*|draws?|uses?|takes?|supplied|put in|fed|it gets|goes in)/iu.test(after)) continue;
+    if (drafts.some((d) => d.start <= m!.index && m!.index < d.end)) continue;
+    const value = MULTIPLE_VALUE[m[1].toLowerCase().replace('-', '')];
+    if (!value) continue;
+    const sentence = sentenceAround(text, m.index, at);
+    const heatPump = HEAT_PUMP_RE.test(sentence);
+    const d: Draft = heatPump
+      ? { start: m.index, end: at, kind: 'cop', quantity: String(value), role: 'heating', assumption: 'A heat pump\'s heat out as a multiple of its work in: read as a heating COP.' }
+      : { start: m.index, end: at, kind: 'efficiency', quantity: String(value), role: null, derived: 'output as a multiple of the input' };
+    const pos = drafts.findIndex((x) => x.start > m!.index);
+    if (pos < 0) drafts.push(d);
+    else drafts.splice(pos, 0, d);
   }
 
   relate(text, drafts);
