@@ -5,6 +5,7 @@ import { initClaimChecks } from './claim-checks';
 import { initSubmissions } from './submissions';
 import { initEntries } from './entries';
 import { initOutbox } from './outbox';
+import { initSynonyms } from './synonyms';
 import { initTaxonomy } from './taxonomy';
 
 export { ConservationLaw, MechanismClass } from './taxonomy';
@@ -13,6 +14,7 @@ export { AuditEvent, audit } from './audit';
 export { SavedClaimCheck } from './claim-checks';
 export { Attachment, Submission, SubmissionEntry, SubmissionEvent } from './submissions';
 export { OutboxMessage } from './outbox';
+export { SynonymGroup, SynonymPhrase } from './synonyms';
 export { Entry, EntryLaw, EntryVersion, PublishedVersionImmutable, ENTRY_STATUSES, VERSION_STATES, type EntryStatus, type VersionState } from './entries';
 
 /** Binds every model to this Sequelize instance. Call once per instance, before any query. */
@@ -24,4 +26,5 @@ export function initModels(sequelize: Sequelize): void {
   initEntries(sequelize);
   initClaimChecks(sequelize);
   initSubmissions(sequelize);
+  initSynonyms(sequelize);
 }

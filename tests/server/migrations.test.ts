@@ -39,18 +39,21 @@ const accounts = ['audit_events', 'dev_outbox', 'email_tokens', 'sessions', 'use
 const entries = ['entries', 'entry_laws', 'entry_versions'];
 const claimChecks = ['saved_claim_checks'];
 const submissions = ['attachments', 'submission_entries', 'submission_events', 'submissions'];
+const synonyms = ['synonym_groups', 'synonym_phrases'];
 
 it('applies every migration, rolls all back, and applies them again', async () => {
   expect(await migrateUp(t.sequelize)).toEqual(migrations.map((m) => m.name));
-  expect(await tables()).toEqual([...taxonomy, ...accounts, ...entries, ...claimChecks, ...submissions].sort());
+  expect(await tables()).toEqual([...taxonomy, ...accounts, ...entries, ...claimChecks, ...submissions, ...synonyms].sort());
   expect(await migrateUp(t.sequelize)).toEqual([]);
   expect(await migrateDown(t.sequelize)).toEqual([migrations[migrations.length - 1].name]);
-  expect(await tables()).toEqual([...taxonomy, ...accounts, ...entries, ...claimChecks].sort());
+  expect(await tables()).toEqual([...taxonomy, ...accounts, ...entries, ...claimChecks, ...submissions].sort());
   expect(await migrateDown(t.sequelize)).toEqual([migrations[migrations.length - 2].name]);
-  expect(await tables()).toEqual([...taxonomy, ...accounts, ...entries].sort());
+  expect(await tables()).toEqual([...taxonomy, ...accounts, ...entries, ...claimChecks].sort());
   expect(await migrateDown(t.sequelize)).toEqual([migrations[migrations.length - 3].name]);
-  expect(await tables()).toEqual([...taxonomy, ...accounts].sort());
+  expect(await tables()).toEqual([...taxonomy, ...accounts, ...entries].sort());
   expect(await migrateDown(t.sequelize)).toEqual([migrations[migrations.length - 4].name]);
+  expect(await tables()).toEqual([...taxonomy, ...accounts].sort());
+  expect(await migrateDown(t.sequelize)).toEqual([migrations[migrations.length - 5].name]);
   expect(await tables()).toEqual(taxonomy);
   await migrateDown(t.sequelize, 0);
   expect(await tables()).toEqual([]);

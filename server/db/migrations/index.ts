@@ -4,6 +4,7 @@ import * as m0002 from './0002-accounts';
 import * as m0003 from './0003-entries';
 import * as m0004 from './0004-claim-checks';
 import * as m0005 from './0005-submissions';
+import * as m0006 from './0006-synonyms';
 
 export const migrations = [
   { name: '0001-taxonomy', ...m0001 },
@@ -11,4 +12,5 @@ export const migrations = [
   { name: '0003-entries', ...m0003 },
   { name: '0004-claim-checks', ...m0004 },
   { name: '0005-submissions', ...m0005 },
+  { name: '0006-synonyms', ...m0006 },
 ];
