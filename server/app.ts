@@ -33,6 +33,8 @@ import { claimCheckRoutes } from './routes/claim-checks';
 import { ClaimChecks } from './services/claim-checks';
 import { submissionRoutes } from './routes/submissions';
 import { Submissions } from './services/submissions';
+import { synonymRoutes } from './routes/synonyms';
+import { Synonyms } from './services/synonyms';
 import { S3Store, storageFromEnv, type ObjectStore } from './storage';
 import { taxonomyRoutes } from './routes/taxonomy';
 import { worksheetRoutes } from './routes/worksheets';
@@ -179,6 +181,8 @@ export function createApp(opts: AppOptions): express.Express {
     later,
     digestMs: opts.submissionDigestMs ?? 60_000,
     logger,
+    // An accepted sighting is indexed as part of the entries it is linked to (issue 11).
+    linked: (slugs) => Promise.all(slugs.map((slug) => search.update(slug).catch((err) => logger.error({ err, slug }, 'search index update failed')))).then(() => undefined),
   });
   if (opts.publicUrl) submissions.origin = opts.publicUrl;
   // Items that arrived before a restart and were never listed in a digest.
@@ -201,6 +205,7 @@ export function createApp(opts: AppOptions): express.Express {
   api.use(deskRoutes(allow, entries));
   api.use(citationRoutes(allow));
   api.use(searchRoutes(allow, search));
+  api.use(synonymRoutes(allow, new Synonyms({ sequelize: opts.sequelize, changed: () => search.rebuild().catch((err) => logger.error({ err }, 'search index rebuild failed')) })));
   api.use(submissionRoutes({ allow, submissions, store, origin, limits }));
   api.use(claimCheckRoutes(allow, new ClaimChecks({ sequelize: opts.sequelize, index: search, entries }), origin));
   api.use(apiNotFound);

@@ -55,6 +55,8 @@ export const policies = {
   desk: { read: EDITOR, corrections: EDITOR },
   citations: { parse: EDITOR },
   search: { query: PUBLIC },
+  /** The trade's synonym groups the claim matcher expands through: anyone reads them, editors change them. */
+  synonyms: { list: PUBLIC, create: EDITOR, update: EDITOR, delete: EDITOR },
   /** The claim check; a saved one is read by anyone holding its link and deleted by its owner only (checked in the service). */
   /** Sightings and corrections; who sees one (submitter, moderators, the editors it was passed to) is checked in the service. */
   submissions: { sighting: SIGNED_IN, correction: SIGNED_IN, mine: SIGNED_IN, read: SIGNED_IN, answer: SIGNED_IN },

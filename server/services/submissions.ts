@@ -166,6 +166,8 @@ export interface SubmissionsDeps {
   /** How long new items are gathered before the moderators' digest goes out (ms). */
   digestMs: number;
   logger?: { error(obj: object, msg: string): void };
+  /** After a sighting is accepted: the slugs of the entries it was linked to (the search index indexes its text with them). */
+  linked?: (slugs: string[]) => Promise<void>;
 }
 
 export class Submissions {
@@ -480,6 +482,7 @@ export class Submissions {
 
   async decide(actor: User, id: number, input: DecideInput, origin: string): Promise<SubmissionDto> {
     const notify: OutgoingMessage[] = [];
+    let linkedSlugs: string[] = [];
     await this.deps.sequelize.transaction(async (transaction) => {
       const s = await this.forModerator(actor, id, transaction);
       if (s.status !== 'claimed' || s.claimedById !== actor.id) {
@@ -501,7 +504,8 @@ export class Submissions {
           if (missing.length) throw new HttpError(400, 'validation_failed', `Check body.entries: no published entry “${missing[0]}”.`, { 'body.entries': `no published entry “${missing[0]}”` });
           for (const e of entries) await SubmissionEntry.findOrCreate({ where: { submissionId: s.id, entryId: e.id }, transaction });
           linked = entries.map((e) => e.title);
-          after = { entries: entries.map((e) => e.slug) };
+          linkedSlugs = entries.map((e) => e.slug);
+          after = { entries: linkedSlugs };
         } else {
           if (input.entries.length) throw new HttpError(400, 'validation_failed', 'Check body.entries: a correction belongs to its own entry; send no entries.', { 'body.entries': 'not for a correction' });
           const entry = (await Entry.findByPk(s.entryId!, { transaction }))!;
@@ -551,6 +555,8 @@ export class Submissions {
       notify.push(submissionDecidedMessage(submitter.email, submitter.displayName, s, input.decision, note, linked, link));
     });
     this.mail('submission decision mail', notify);
+    // Accepted sightings teach the claim matcher: re-index the linked entries before answering.
+    if (linkedSlugs.length) await this.deps.linked?.(linkedSlugs);
     return this.dto(await this.load(id));
   }
 

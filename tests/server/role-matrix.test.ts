@@ -92,6 +92,11 @@ const expected: Record<string, Expectation> = {
   'GET /api/entries/:slug/sightings': { who: 'public' },
   'GET /api/desk/corrections': { who: 'editor' },
   'POST /api/citations/parse': { who: 'editor', try: () => ({ path: '/api/citations/parse', body: { text: '@book{matrix, title = {A book}, year = 2000}' } }) },
+  // The trade's synonyms (issue 11). Create tries an invalid body (allowed means 400); change and delete aim at a group that does not exist.
+  'GET /api/synonyms': { who: 'public' },
+  'POST /api/synonyms': { who: 'editor', try: () => ({ path: '/api/synonyms', body: { terms: ['matrix'] } }) },
+  'PUT /api/synonyms/:id': { who: 'editor', try: () => ({ path: '/api/synonyms/4000000000', body: { terms: ['matrix one', 'matrix two'], version: 1 } }) },
+  'DELETE /api/synonyms/:id': { who: 'editor', try: () => ({ path: '/api/synonyms/4000000000', body: {} }) },
 };
 
 interface FoundRoute {
