@@ -36,20 +36,35 @@
  * one of `terms`, or its beginning when matched as a prefix.
  */
 import { COMMON_WORDS, fold, normaliseTerm } from './normalise';
+import { conceptTerm, isConceptTerm, tokensOf, wordKey } from './synonyms';
 import type { IndexedEntry, SearchIndex, TermsHit } from './index';
 
 export interface ClaimHit {
   entry: IndexedEntry;
   score: number;
-  /** The normalised index terms that matched. */
+  /** The normalised index terms that matched (words; the synonym groups' concept terms are left out). */
   terms: string[];
-  /** The words of the text whose normalised form matched (as written, each once, in order of first appearance). */
+  /**
+   * The words of the text that matched (as written, each once, in order of first appearance): its
+   * own words found in the entry, and the words of a synonym phrase whose group the entry holds.
+   */
   words: string[];
+  /** Those of `words` that matched only through a synonym group (the entry uses another word of the group). */
+  synonyms: string[];
+  /** True when the entry's class is one the figures point to (opts.classes) and it was boosted. */
+  classSignalled: boolean;
 }
 
 export interface MatchClaimOptions {
   /** Most hits returned (default 5). */
   limit?: number;
+  /**
+   * Mechanism classes (slugs of content/taxonomy.yml) that the claim's figures point to, e.g.
+   * 'propellant-free-thrust' for a thrust with a power and no propellant. Entries in these classes
+   * or below them get a moderate boost (CLASS_BOOST) and need one strong term fewer; unknown
+   * slugs are ignored.
+   */
+  classes?: readonly string[];
 }
 
 /** Most distinct terms searched for one text. */
@@ -60,10 +75,32 @@ export const PREFIX_MIN = 5;
 export const PREFIX_MAX_TERMS = 150;
 /** Least score of a hit (the sum of its BM25+ term scores with the field and term boosts). */
 export const MIN_SCORE = 15;
-/** Least number of the text's terms a hit must match in its title, aliases or brief. */
-export const MIN_STRONG_TERMS = 4;
+/**
+ * Strong evidence a hit needs: at least this many of the text's terms matched in the entry's title,
+ * aliases, brief or accepted sightings, one for every STRONG_TERMS_PER of the text's distinct
+ * terms, and no fewer than MIN_STRONG_TERMS_SHORT nor more than MIN_STRONG_TERMS (a long text
+ * touches more words of an entry by chance than a sentence does).
+ */
+export const MIN_STRONG_TERMS = 5;
+export const MIN_STRONG_TERMS_SHORT = 2;
+export const STRONG_TERMS_PER = 7;
+/**
+ * …and their idf weights added up (a term only one entry holds weighs 1, one that most entries
+ * hold next to nothing) at least STRONG_WEIGHT_PER_TERM for each of the text's distinct terms,
+ * between MIN_STRONG_WEIGHT_SHORT and MIN_STRONG_WEIGHT: a few words every entry uses ("energy",
+ * "power", "battery", "deliver") are not enough for an abstract about something else.
+ */
+export const MIN_STRONG_WEIGHT = 2;
+export const MIN_STRONG_WEIGHT_SHORT = 1;
+export const STRONG_WEIGHT_PER_TERM = 0.05;
+/** An entry in a class the figures point to needs one strong term fewer and this fraction of the weight. */
+export const CLASS_WEIGHT_FACTOR = 0.75;
 /** Least score of a hit as a fraction of the best hit's. */
 export const RELATIVE_FLOOR = 0.4;
+/** Weight of a synonym group's concept term, relative to a word of the same rarity (the word itself always weighs more). */
+export const SYNONYM_WEIGHT = 0.5;
+/** Score factor for an entry in a class the figures point to (1 + CLASS_BOOST). */
+export const CLASS_BOOST = 0.25;
 
 interface QueryTerm {
   term: string;
@@ -72,6 +109,11 @@ interface QueryTerm {
   first: number;
   /** The words (as written) that normalise to it, each once (case-insensitively), with the offset of its first appearance. */
   words: { word: string; at: number }[];
+}
+
+/** A synonym group's concept term in the text: also the word terms of the phrases that gave it. */
+interface ConceptQueryTerm extends QueryTerm {
+  sources: Set<string>;
 }
 
 const WORD = /[\p{L}\p{M}\p{N}]+/gu;
@@ -104,6 +146,36 @@ export function claimTerms(text: string): QueryTerm[] {
   return [...byTerm.values()].map(({ seen: _seen, ...q }) => q);
 }
 
+/**
+ * The synonym groups the text names (index.synonyms), one concept term per group, each with the
+ * words of its phrases as written and the word terms they normalise to. `first` continues after
+ * `after` (the number of word terms).
+ */
+export function claimConcepts(index: SearchIndex, text: string, after = 0): ConceptQueryTerm[] {
+  if (!index.synonyms.size) return [];
+  const tokens = tokensOf(text);
+  const byTerm = new Map<string, ConceptQueryTerm & { seen: Set<string> }>();
+  let i = after;
+  for (const hit of index.synonyms.find(tokens.map((t) => t.token))) {
+    const term = conceptTerm(hit.group);
+    let q = byTerm.get(term);
+    if (!q) byTerm.set(term, (q = { term, count: 0, first: i++, words: [], seen: new Set(), sources: new Set() }));
+    q.count += 1;
+    for (const { token, at } of tokens.slice(hit.start, hit.end)) {
+      const folded = fold(token);
+      // Figures, stop words and the common words of prose are not shown as matched words.
+      if (/\p{N}/u.test(token) || wordKey(token) === null || COMMON_WORDS.has(folded)) continue;
+      const t = normaliseTerm(folded);
+      if (t) q.sources.add(t);
+      if (!q.seen.has(folded)) {
+        q.seen.add(folded);
+        q.words.push({ word: token, at });
+      }
+    }
+  }
+  return [...byTerm.values()].map(({ seen: _seen, ...q }) => q);
+}
+
 /** Weight of a term by how few entries hold it: BM25's idf over whole entries, as a fraction of that of a term only one entry holds (0 when none does). */
 function idfWeight(index: SearchIndex, term: string): number {
   const n = Math.max(1, index.size);
@@ -113,22 +185,84 @@ function idfWeight(index: SearchIndex, term: string): number {
   return idf(df) / idf(1);
 }
 
-/** The fields that say what an entry is about. */
-const STRONG_FIELDS = new Set(['title', 'aliases', 'inBrief']);
+/** The fields that say what an entry is about (its accepted sightings say how such claims are put). */
+const STRONG_FIELDS = new Set(['title', 'aliases', 'inBrief', 'sightings']);
 
-/** How many of the hit's query terms matched in its title, aliases or brief. */
-function strongTerms(h: TermsHit): number {
-  const strong = Object.entries(h.match).filter(([, fields]) => fields.some((f) => STRONG_FIELDS.has(f))).map(([t]) => t);
-  return h.queryTerms.filter((q) => strong.some((t) => t.startsWith(q))).length;
+/** How much a hit rests on what the entry is about: its terms matched in a strong field. */
+export interface StrongEvidence {
+  /** How many of the text's terms matched in a strong field. */
+  count: number;
+  /** Their idf weights (idfWeight) added up, a synonym group's at SYNONYM_WEIGHT. */
+  weight: number;
 }
 
-/** The entries the text describes, best first, weak hits left out. */
-export function matchClaim(index: SearchIndex, text: string, opts: MatchClaimOptions = {}): ClaimHit[] {
-  const limit = opts.limit ?? 5;
-  if (limit <= 0) return [];
-  let terms = claimTerms(text);
+/**
+ * The text's terms the hit matched in a strong field: its words, and each synonym group unless
+ * every word of its phrases already counted (so that "cavity" matching "cavity" is not counted
+ * again through the group that holds both "cavity" and "resonator", while "isothermal engine"
+ * meeting "single-reservoir engine" counts though "engine" did).
+ */
+function strongEvidence(index: SearchIndex, h: TermsHit, concepts: Map<string, ConceptQueryTerm>): StrongEvidence {
+  const strong = Object.entries(h.match)
+    .filter(([, fields]) => fields.some((f) => STRONG_FIELDS.has(f)))
+    .map(([t]) => t);
+  const strongWordTerms = strong.filter((t) => !isConceptTerm(t));
+  const strongWords = new Set<string>();
+  let count = 0;
+  let weight = 0;
+  for (const q of h.queryTerms) {
+    if (isConceptTerm(q)) continue;
+    const matched = strongWordTerms.filter((t) => t.startsWith(q));
+    if (!matched.length) continue;
+    strongWords.add(q);
+    count += 1;
+    weight += Math.max(...matched.map((t) => idfWeight(index, t)));
+  }
+  for (const q of h.queryTerms) {
+    const c = concepts.get(q);
+    if (!c || !strong.includes(q) || [...c.sources].every((t) => strongWords.has(t))) continue;
+    count += 1;
+    weight += SYNONYM_WEIGHT * idfWeight(index, q);
+  }
+  return { count, weight };
+}
+
+/** The strong evidence a hit needs for a text of `terms` distinct word terms (less for a sentence than for an abstract). */
+export function strongNeeded(terms: number, classSignalled = false): StrongEvidence {
+  const count = Math.min(MIN_STRONG_TERMS, Math.max(MIN_STRONG_TERMS_SHORT, Math.ceil(terms / STRONG_TERMS_PER)));
+  const weight = Math.min(MIN_STRONG_WEIGHT, Math.max(MIN_STRONG_WEIGHT_SHORT, terms * STRONG_WEIGHT_PER_TERM));
+  return classSignalled
+    ? { count: Math.max(MIN_STRONG_TERMS_SHORT, count - 1), weight: weight * CLASS_WEIGHT_FACTOR }
+    : { count, weight };
+}
+
+/** One entry the text's terms reach, before weak hits are left out (see matchClaim; for diagnostics and tests). */
+export interface ClaimCandidate {
+  hit: TermsHit;
+  /** The score without the class boost. */
+  raw: number;
+  /** The score the hits are ranked by. */
+  score: number;
+  strong: StrongEvidence;
+  /** The strong evidence it needs (strongNeeded). */
+  needed: StrongEvidence;
+  /** The entry's class is one the figures point to. */
+  classSignalled: boolean;
+  /** Whether it passes MIN_SCORE and the strong-evidence rules (the relative floor aside). */
+  passes: boolean;
+}
+
+interface Prepared {
+  terms: QueryTerm[];
+  candidates: ClaimCandidate[];
+}
+
+function prepare(index: SearchIndex, text: string, opts: MatchClaimOptions): Prepared {
+  const words = claimTerms(text);
+  const concepts = claimConcepts(index, text, words.length);
+  let terms: QueryTerm[] = [...words, ...concepts];
   const prefixOk = terms.length <= PREFIX_MAX_TERMS;
-  const weight = new Map(terms.map((q) => [q.term, (1 + Math.log(q.count)) * idfWeight(index, q.term)]));
+  const weight = new Map(terms.map((q) => [q.term, (isConceptTerm(q.term) ? SYNONYM_WEIGHT : 1) * (1 + Math.log(q.count)) * idfWeight(index, q.term)]));
   if (terms.length > MAX_TERMS) {
     // Keep the terms that weigh most; a term no entry holds weighs nothing, and without prefix
     // search it could not match anyway.
@@ -137,32 +271,78 @@ export function matchClaim(index: SearchIndex, text: string, opts: MatchClaimOpt
       .sort((a, b) => weight.get(b.term)! - weight.get(a.term)! || b.term.length - a.term.length || a.first - b.first)
       .slice(0, MAX_TERMS);
   }
-  if (!terms.length) return [];
+  // A concept term no entry holds cannot match.
+  terms = terms.filter((q) => !isConceptTerm(q.term) || weight.get(q.term)! > 0);
+  if (!terms.length) return { terms, candidates: [] };
+  const conceptOf = new Map(concepts.map((c) => [c.term, c]));
+  const signalled = new Set<string>();
+  for (const c of opts.classes ?? []) if (index.classes.has(c)) for (const s of index.classAndChildren(c)) signalled.add(s);
+
   const hits = index.searchTerms(
     terms.map((q) => q.term),
     {
-      prefix: prefixOk ? (t) => t.length >= PREFIX_MIN : false,
+      prefix: prefixOk ? (t) => t.length >= PREFIX_MIN && !isConceptTerm(t) : false,
       fuzzy: false,
       // A term no entry holds exactly can still match as a prefix: weigh it as one only one entry holds.
       boostTerm: (t) => weight.get(t) || 1,
     },
   );
-  const scored = hits
-    .map((h) => ({ h, score: h.score / Math.max(1, h.queryTerms.length) }))
-    .filter((s) => s.score >= MIN_SCORE && strongTerms(s.h) >= MIN_STRONG_TERMS)
-    .sort((a, b) => b.score - a.score || a.h.entry.slug.localeCompare(b.h.entry.slug));
+  const candidates = hits.map((hit): ClaimCandidate => {
+    const raw = hit.score / Math.max(1, hit.queryTerms.length);
+    const classSignalled = hit.entry.mechanismClass !== null && signalled.has(hit.entry.mechanismClass);
+    const strong = strongEvidence(index, hit, conceptOf);
+    const needed = strongNeeded(words.length, classSignalled);
+    return {
+      hit,
+      raw,
+      score: classSignalled ? raw * (1 + CLASS_BOOST) : raw,
+      strong,
+      needed,
+      classSignalled,
+      passes: (classSignalled ? raw * (1 + CLASS_BOOST) : raw) >= MIN_SCORE && strong.count >= needed.count && strong.weight >= needed.weight,
+    };
+  });
+  candidates.sort((a, b) => b.score - a.score || a.hit.entry.slug.localeCompare(b.hit.entry.slug));
+  return { terms, candidates };
+}
+
+/** Every entry the text's terms reach, best first, with the evidence matchClaim judges (for diagnostics and tests). */
+export function claimCandidates(index: SearchIndex, text: string, opts: MatchClaimOptions = {}): ClaimCandidate[] {
+  return prepare(index, text, opts).candidates;
+}
+
+/** The entries the text describes, best first, weak hits left out. */
+export function matchClaim(index: SearchIndex, text: string, opts: MatchClaimOptions = {}): ClaimHit[] {
+  const limit = opts.limit ?? 5;
+  if (limit <= 0) return [];
+  const { terms, candidates } = prepare(index, text, opts);
+  const scored = candidates.filter((c) => c.passes);
   if (!scored.length) return [];
   const floor = scored[0].score * RELATIVE_FLOOR;
   return scored
     .filter((s) => s.score >= floor)
     .slice(0, limit)
-    .map(({ h, score }) => {
+    .map(({ hit: h, score, classSignalled }) => {
       const matched = new Set(h.queryTerms);
-      const words = terms
-        .filter((q) => matched.has(q.term))
-        .flatMap((q) => q.words)
-        .sort((a, b) => a.at - b.at)
-        .map((w) => w.word);
-      return { entry: h.entry, score, terms: h.terms, words };
+      const direct = new Set<string>();
+      const all = new Map<string, { word: string; at: number }>();
+      for (const q of terms) {
+        if (!matched.has(q.term)) continue;
+        for (const w of q.words) {
+          const key = fold(w.word);
+          if (!isConceptTerm(q.term)) direct.add(key);
+          const seen = all.get(key);
+          if (!seen || w.at < seen.at) all.set(key, w);
+        }
+      }
+      const ordered = [...all.values()].sort((a, b) => a.at - b.at);
+      return {
+        entry: h.entry,
+        score,
+        terms: h.terms.filter((t) => !isConceptTerm(t)),
+        words: ordered.map((w) => w.word),
+        synonyms: ordered.filter((w) => !direct.has(fold(w.word))).map((w) => w.word),
+        classSignalled,
+      };
     });
 }

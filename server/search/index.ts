@@ -2,13 +2,24 @@
  * The full-text index (issue 6): minisearch over the current published version of every entry
  * that is not retired. Built from MariaDB at app start, updated at once when this server publishes
  * or retires an entry, and rebuilt whenever the change watermark in the database (published
- * versions, retired entries, the newest entries.updated_at) moves, so that what another app server
- * published is found here within one refresh period.
+ * versions, retired entries, the newest entries.updated_at, the sightings linked to entries, the
+ * synonym groups) moves, so that what another app server published is found here within one
+ * refresh period.
+ *
+ * Issue 11 adds two things the claim matcher uses:
+ *  - the text (title and summary) of every sighting a moderator accepted and linked to an entry,
+ *    indexed as that entry's `sightings` field (the newest SIGHTINGS_PER_ENTRY), so that each
+ *    decision teaches the matcher how such claims are worded;
+ *  - the trade's synonym groups (server/search/synonyms.ts): every field also holds a concept
+ *    term for each group phrase found in it. A change of the groups rebuilds the index.
+ * Builds and updates run one at a time, so that a slow rebuild cannot overwrite a newer update.
  */
 import MiniSearch, { type SearchOptions, type SearchResult } from 'minisearch';
+import { col, fn } from 'sequelize';
 import type { Logger } from 'pino';
-import { ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass } from '../models';
+import { ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass, Submission, SubmissionEntry, SynonymGroup, SynonymPhrase } from '../models';
 import { fold, normaliseTerm, plainText } from './normalise';
+import { isConceptTerm, SynonymSet } from './synonyms';
 
 export interface SearchDoc {
   id: number;
@@ -22,6 +33,8 @@ export interface SearchDoc {
   mechanism: string;
   laws: string;
   citations: string;
+  /** Title and summary of the accepted sightings linked to the entry, newest first. */
+  sightings: string;
 }
 
 export interface IndexedEntry {
@@ -63,9 +76,12 @@ export type TermsSearchOptions = Omit<SearchOptions, 'tokenize' | 'processTerm' 
 const WORD_CACHE_SIZE = 2000;
 const WORD_CACHE_HITS = 1_000_000;
 
-const FIELDS = ['title', 'aliases', 'inBrief', 'taxonomy', 'body'] as const;
-type Field = (typeof FIELDS)[number];
-const BOOST: Record<Field, number> = { title: 5, aliases: 4, inBrief: 2.5, taxonomy: 1.5, body: 1 };
+export const FIELDS = ['title', 'aliases', 'inBrief', 'sightings', 'taxonomy', 'body'] as const;
+export type Field = (typeof FIELDS)[number];
+/** Sightings weigh below what the entry says of itself, above its long sections. */
+export const BOOST: Record<Field, number> = { title: 5, aliases: 4, inBrief: 2.5, sightings: 2, taxonomy: 1.5, body: 1 };
+/** Most accepted sightings indexed with one entry (the newest links). */
+export const SIGHTINGS_PER_ENTRY = 50;
 
 function fieldText(doc: SearchDoc, field: Field): string {
   if (field === 'taxonomy') return `${doc.mechanism} · ${doc.laws}`;
@@ -73,13 +89,24 @@ function fieldText(doc: SearchDoc, field: Field): string {
   return doc[field];
 }
 
-const newMiniSearch = () =>
+/** A field's index tokens: its words, then a concept term for each synonym phrase found in them. */
+function docTokens(text: string, synonyms: SynonymSet): string[] {
+  const tokens = tokenize(text);
+  const concepts = synonyms.conceptTerms(tokens);
+  return concepts.length ? tokens.concat(concepts) : tokens;
+}
+
+/** Concept terms pass as they are; words are normalised. */
+const processDocTerm = (t: string) => (isConceptTerm(t) ? t : normaliseTerm(t));
+
+const newMiniSearch = (synonyms: SynonymSet) =>
   new MiniSearch<SearchDoc>({
     fields: [...FIELDS],
     // The id stays a number (results are looked up by it).
     extractField: (doc, field) => (field === 'id' ? (doc.id as unknown as string) : fieldText(doc, field as Field)),
     storeFields: [],
-    processTerm: normaliseTerm,
+    tokenize: (text) => docTokens(text, synonyms),
+    processTerm: processDocTerm,
     searchOptions: { boost: BOOST, prefix: true, fuzzy: 0.2, processTerm: normaliseTerm, combineWith: 'OR' },
   });
 
@@ -90,7 +117,8 @@ export interface SearchIndexOptions {
 }
 
 export class SearchIndex {
-  private ms = newMiniSearch();
+  private syn = new SynonymSet();
+  private ms = newMiniSearch(this.syn);
   private docs = new Map<number, SearchDoc>();
   private entries = new Map<number, IndexedEntry>();
   /** Law slug → name; mechanism slug → { name, parent slug }. */
@@ -107,6 +135,8 @@ export class SearchIndex {
   private built = false;
   private timer: NodeJS.Timeout | undefined;
   private ticking = false;
+  /** The build or update under way: the next one waits for it. */
+  private queue: Promise<unknown> = Promise.resolve();
 
   constructor(private readonly opts: SearchIndexOptions) {}
 
@@ -155,13 +185,70 @@ export class SearchIndex {
     }
   }
 
+  /**
+   * What changes whenever the indexed data does. Sightings: links are only ever added (with the
+   * acceptance), so their count moves. Synonym groups: a new group raises the highest id, a
+   * removed one lowers the count, an edit raises the sum of the versions.
+   */
   private async currentWatermark(): Promise<string> {
-    const [published, retired, newest] = await Promise.all([
+    const [published, retired, newest, links, groups] = await Promise.all([
       EntryVersion.count({ where: { state: 'published' } }),
       Entry.count({ where: { status: 'retired' } }),
       Entry.max('updatedAt') as Promise<Date | string | null>,
+      SubmissionEntry.count(),
+      SynonymGroup.findOne({
+        attributes: [
+          [fn('COUNT', col('id')), 'n'],
+          [fn('MAX', col('id')), 'top'],
+          [fn('SUM', col('version')), 'edits'],
+        ],
+        raw: true,
+      }) as unknown as Promise<{ n: number | string; top: number | null; edits: number | string | null } | null>,
     ]);
-    return `${published}/${retired}/${newest ? new Date(newest).getTime() : 0}`;
+    const syn = groups ? `${Number(groups.n)}.${Number(groups.top ?? 0)}.${Number(groups.edits ?? 0)}` : '0';
+    return `${published}/${retired}/${newest ? new Date(newest).getTime() : 0}/${links}/${syn}`;
+  }
+
+  /** The synonym groups as the index uses them. */
+  get synonyms(): SynonymSet {
+    return this.syn;
+  }
+
+  private async loadSynonyms(): Promise<SynonymSet> {
+    const phrases = await SynonymPhrase.findAll({ attributes: ['groupId', 'phrase', 'position', 'id'], order: [['groupId', 'ASC'], ['position', 'ASC'], ['id', 'ASC']], raw: true });
+    const byGroup = new Map<number, string[]>();
+    for (const p of phrases) {
+      const list = byGroup.get(p.groupId) ?? [];
+      list.push(p.phrase);
+      byGroup.set(p.groupId, list);
+    }
+    return new SynonymSet([...byGroup].map(([id, terms]) => ({ id, terms })));
+  }
+
+  /** Entry id → the text of its accepted sightings (title and summary, newest link first, at most SIGHTINGS_PER_ENTRY). */
+  private async loadSightings(entryIds: number[] | undefined): Promise<Map<number, string>> {
+    const links = await SubmissionEntry.findAll({
+      where: entryIds ? { entryId: entryIds } : {},
+      attributes: ['entryId', 'submissionId', 'createdAt'],
+      order: [['createdAt', 'DESC'], ['submissionId', 'DESC']],
+      raw: true,
+    });
+    if (!links.length) return new Map();
+    const subs = await Submission.findAll({
+      where: { id: [...new Set(links.map((l) => l.submissionId))], kind: 'sighting', status: 'accepted' },
+      attributes: ['id', 'title', 'summary'],
+      raw: true,
+    });
+    const text = new Map(subs.map((s) => [s.id, `${s.title}. ${s.summary ?? ''}`.trim()]));
+    const out = new Map<number, string[]>();
+    for (const l of links) {
+      const t = text.get(l.submissionId);
+      if (!t) continue;
+      const list = out.get(l.entryId) ?? [];
+      if (list.length < SIGHTINGS_PER_ENTRY) list.push(t);
+      out.set(l.entryId, list);
+    }
+    return new Map([...out].map(([id, list]) => [id, list.join(' · ')]));
   }
 
   private async loadTaxonomy(): Promise<{ lawById: Map<number, ConservationLaw>; classById: Map<number, MechanismClass> }> {
@@ -180,6 +267,7 @@ export class SearchIndex {
       include: [{ model: EntryVersion, as: 'currentVersion' }],
     });
     const links = rows.length ? await EntryLaw.findAll({ where: { entryId: rows.map((r) => r.id) }, attributes: ['entryId', 'lawId'], raw: true }) : [];
+    const sightings = rows.length ? await this.loadSightings(ids ? rows.map((r) => r.id) : undefined) : new Map<number, string>();
     // Grouped once: filtering the links per entry is quadratic at 10,000 entries.
     const lawsOf = new Map<number, Set<string | undefined>>();
     for (const l of links) {
@@ -208,6 +296,7 @@ export class SearchIndex {
           mechanism: cls?.name ?? '',
           laws: laws.map((s) => this.laws.get(s) ?? s).join(' · '),
           citations: (c.sources ?? []).map((s) => String(s.csl.title)).join(' · '),
+          sightings: sightings.get(e.id) ?? '',
         };
         const entry: IndexedEntry = {
           id: e.id,
@@ -224,14 +313,27 @@ export class SearchIndex {
       });
   }
 
-  /** Builds the whole index again from the database. */
-  async rebuild(): Promise<void> {
+  /** Runs index work one piece at a time. */
+  private serial<T>(work: () => Promise<T>): Promise<T> {
+    const run = this.queue.then(work, work);
+    this.queue = run.catch(() => {});
+    return run;
+  }
+
+  /** Builds the whole index again from the database (also after a change of the synonym groups). */
+  rebuild(): Promise<void> {
+    return this.serial(() => this.doRebuild());
+  }
+
+  private async doRebuild(): Promise<void> {
     const mark = await this.currentWatermark();
+    const syn = await this.loadSynonyms();
     const loaded = await this.load();
-    const ms = newMiniSearch();
+    const ms = newMiniSearch(syn);
     ms.addAll(loaded.map((l) => l.doc));
     const df = new Map<string, number>();
-    for (const l of loaded) countTerms(df, l.doc, 1);
+    for (const l of loaded) countTerms(df, l.doc, 1, syn);
+    this.syn = syn;
     this.ms = ms;
     this.df = df;
     this.clearWordCache();
@@ -241,22 +343,27 @@ export class SearchIndex {
     this.built = true;
   }
 
-  /** Re-reads one entry after this server published or retired it. */
+  /** Re-reads one entry after this server published or retired it, or linked a sighting to it. */
   async update(slug: string): Promise<void> {
     if (!this.built) return this.ready();
+    return this.serial(() => this.doUpdate(slug));
+  }
+
+  private async doUpdate(slug: string): Promise<void> {
     const row = await Entry.findOne({ where: { slug }, attributes: ['id'] });
     if (!row) return;
+    const loaded = await this.load([row.id]);
     const old = this.docs.get(row.id);
     if (old) {
       this.ms.remove(old);
-      countTerms(this.df, old, -1);
+      countTerms(this.df, old, -1, this.syn);
       this.clearWordCache();
       this.docs.delete(row.id);
       this.entries.delete(row.id);
     }
-    for (const { doc, entry } of await this.load([row.id])) {
+    for (const { doc, entry } of loaded) {
       this.ms.add(doc);
-      countTerms(this.df, doc, 1);
+      countTerms(this.df, doc, 1, this.syn);
       this.clearWordCache();
       this.docs.set(doc.id, doc);
       this.entries.set(entry.id, entry);
@@ -373,12 +480,12 @@ export class SearchIndex {
 
 const tokenize = MiniSearch.getDefault('tokenize') as (text: string) => string[];
 
-/** Adds `by` to the document frequency of each distinct term of the doc, as the index tokenises and normalises it. */
-function countTerms(df: Map<string, number>, doc: SearchDoc, by: 1 | -1): void {
+/** Adds `by` to the document frequency of each distinct term of the doc (concept terms too), as the index tokenises and normalises it. */
+function countTerms(df: Map<string, number>, doc: SearchDoc, by: 1 | -1, synonyms: SynonymSet): void {
   const terms = new Set<string>();
   for (const field of FIELDS) {
-    for (const token of tokenize(fieldText(doc, field))) {
-      const t = normaliseTerm(token);
+    for (const token of docTokens(fieldText(doc, field), synonyms)) {
+      const t = processDocTerm(token);
       if (t) terms.add(t);
     }
   }
