@@ -8,6 +8,7 @@ import { Link } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import Svg, { Circle, Line } from 'react-native-svg';
 import { checks as kit } from '@/shared/checks';
+import { printText } from '@/shared/claims/print';
 import {
   FIGURE_KIND_LABEL,
   PARAGRAPH_VARIANT_LABEL,
@@ -139,6 +140,17 @@ export function findingWords(run: Pick<ClaimCheckRun, 'finding' | 'law' | 'verdi
 }
 
 /**
+ * The run's sentence without the finding it may open with ("Conflicts with conservation of linear
+ * momentum: The claimed thrust …"), which the heading above it already says; as it is otherwise.
+ */
+export function sentenceAfterFinding(run: Pick<ClaimCheckRun, 'sentence' | 'law'>): string {
+  const law = ((run.law as string | undefined) ?? '').replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+  const m = new RegExp(`^(?:Consistent with|Conflicts with|In conflict with|Breaks) ${law}\\s*[:;,.—–-]\\s*`, 'i').exec(run.sentence);
+  const rest = m ? run.sentence.slice(m[0].length) : run.sentence;
+  return rest.length > 0 ? rest.charAt(0).toUpperCase() + rest.slice(1) : run.sentence;
+}
+
+/**
  * A neutral mark in graphite beside the words: a plain ring for a claim consistent with the law, a
  * struck ring for one that breaks it. Never a colour code (DESIGN.md §6); the words carry the finding.
  */
@@ -181,20 +193,21 @@ export function CheckRuns({ runs }: { runs: ClaimCheckRun[] }) {
                   {findingWords(run)}
                 </Text>
               </View>
-              {run.sentence ? (
-                <Text testID={`claim-check-${run.check}-sentence`} style={type.body}>
-                  {run.sentence}
-                </Text>
-              ) : null}
-              <Text style={styles.condition}>
-                Condition: {kit[run.check]?.condition ?? run.title}. {run.verdict.message}
+              <Text testID={`claim-check-${run.check}-sentence`} style={type.body}>
+                {run.sentence ? sentenceAfterFinding(run) : printText(run.verdict.message)}
               </Text>
+              <Text style={styles.condition}>Condition: {kit[run.check]?.condition ?? run.title}.</Text>
             </View>
             <Text style={type.body}>{run.why}</Text>
             <Text style={type.caption}>Figures used: {run.uses.length ? run.uses.join(', ') : 'none from the text'}</Text>
             <ResultList label={`Computed figures of ${run.title}`}>
               {run.outputs.map((o) => (
-                <ResultRow key={o.name} testID={`claim-check-${run.check}-output-${o.name}`} label={o.label} value={o} />
+                <ResultRow
+                  key={o.name}
+                  testID={`claim-check-${run.check}-output-${o.name}`}
+                  label={o.label}
+                  value={{ si: o.si, display: printText(o.display) }}
+                />
               ))}
             </ResultList>
             {run.assumptions.length > 0 ? (

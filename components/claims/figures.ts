@@ -4,6 +4,7 @@
  * same reader the server uses, so a mistyped unit is marked before anything is sent.
  */
 import { readQuantityOf, type FigureReading } from '@/shared/claims/figures';
+import { printText } from '@/shared/claims/print';
 import {
   FIGURE_KINDS,
   type Figure,
@@ -108,10 +109,13 @@ export const EXAMPLE_FOR: Record<FigureKind, string> = {
 
 /**
  * A range written as people write it: "3–6 mN" when both ends are in the same unit, else
- * "800 µN – 1.2 mN"; a single value when there is no upper end.
+ * "800 µN – 1.2 mN"; a single value when there is no upper end. Powers of ten are printed.
  */
-export function rangeDisplay(lower: string, upper?: string): string {
-  if (upper === undefined) return lower;
+export function rangeDisplay(rawLower: string, rawUpper?: string): string {
+  // Powers of ten as in print ("2.6 × 10⁵ s"), not as typed ("2.6 × 10^5 s").
+  const lower = printText(rawLower);
+  if (rawUpper === undefined) return lower;
+  const upper = printText(rawUpper);
   const split = (s: string) => {
     const m = /^(\S+)(?:\s+(.+))?$/.exec(s.trim());
     return m ? { number: m[1], unit: m[2] ?? '' } : { number: s, unit: '' };
