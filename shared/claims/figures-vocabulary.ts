@@ -210,9 +210,10 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'in',
     before: [
-      'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'suppl(?:y|ies|ied|ying)', 'fed',
+      '(?:battery|batteries|supply|mains|grid|source|pack|cell|socket|outlet) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|giving|gives)',
+      'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied(?: with| by)?', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
-      'put in', 'charged with', 'feeds?', 'feeding', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
+      'put in', 'charged (?:with|at)', 'charging at', 'charged', 'feeds?', 'feeding', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
       'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'burn(?:s|ed|ing)?', 'dissipat(?:e|es|ed|ing)',
@@ -220,7 +221,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires)',
-      'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s+(?:and|,|to))', 'of input', 'of supply', 'supply'],
+      '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power', 'of drive(?: power)?', 'uptake',
+      'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply'],
   },
   {
     role: 'out',
@@ -228,14 +230,15 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
       'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
-      'drives?', 'driving', 'powers', 'powering', 'lights?', 'lighting', 'heats?', 'heating', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
+      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'lights?', 'lighting', 'heats?', 'heating', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
       'puts', 'put', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
-      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump)', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
+      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
+      'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
   },
 ];
 
@@ -248,7 +251,10 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
       'radiators?', 'underfloor', 'warm', 'warmer', 'warm (?:end|side)', 'to a', 'into a', 'hot water', 'condensing', 'up to', 'to heat', 'heats? (?:\\w+ )?to', 'heating to',
       'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper', 'firing', 'firing temperature',
     ],
-    after: ['source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor', 'loop', 'tank', 'radiators?'],
+    after: [
+      'source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor',
+      'loop', 'tank', 'radiators?', '(?:turbine|compressor) inlet', 'firing', 'combustion', 'hot gas', 'heater head', 'collector', 'hot end',
+    ],
   },
   {
     role: 'cold',
@@ -290,7 +296,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
 export const SPEED_ROLES: readonly RoleWords[] = [
   {
     role: 'exhaust',
-    before: ['exhaust', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'ion', 'beam', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at'],
+    before: ['v_?e(?:x|xh)?', 'u_?e', 'c_?e', 'exhaust', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'ion', 'beam', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at'],
     after: ['exhaust', 'jet', 'exhaust velocity', 'exhaust speed'],
   },
   {
@@ -308,7 +314,10 @@ export const QUANTUM_EFFICIENCY_WORDS = [
 ];
 
 /** Words that make "350 % efficient" a heating COP (heat pumps deliver more heat than the work they take). */
-export const HEAT_PUMP_WORDS = ['heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?'];
+export const HEAT_PUMP_WORDS = [
+  'heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
+  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', '(?:moves?|pumps?|lifts?) heat (?:from|out of|up)',
+];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
 export const COOLING_MACHINE_WORDS = ['refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling'];
 
@@ -317,7 +326,7 @@ export const DIFFERENCE_BEFORE = [
   'ΔT', 'Δ T', 'delta[- ]?T', 'dT', 'temperature (?:difference|gradient|drop|rise|lift|span|spread|differential|swing|excursion|change|increase)s?',
   'differences? of', 'differential of', 'gradient of', 'rise of', 'drop of', 'lift of', 'spread of', 'span of', 'increase of', 'swing of', 'change of',
   'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
-  'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
+  '(?:colder|cooler|hotter|warmer|lower|higher) than (?:the |its )?(?:[\\w-]+ ){0,3}by', 'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
 ];
 export const DIFFERENCE_AFTER = [
   '(?:temperature )?(?:difference|differential|gradient|drop|rise|lift|span|spread|swing|excursion|delta|split|increase|decrease)s?',
@@ -330,7 +339,8 @@ export const ISP_WORDS = ['I_?sp', 'Isp', 'ISP', 'I sp', 'specific impulses?', '
 
 /** Words that say a device is a heat engine (so an efficiency is a Carnot claim). */
 export const HEAT_ENGINE_WORDS = [
-  'heat engines?', 'engines?', 'turbines?', 'thermoelectric\\w*', 'thermo-?electric\\w*', 'thermionic', 'thermophotovoltaic\\w*', 'TPV', 'Stirling',
+  'heat engines?', 'engines?', 'turbines?', 'Stirling\\w*', '\\w*motoren?', 'cooling water', 'condenser', 'heat sink', 'hot side', 'cold side', 'reservoirs?',
+  'source temperature', 'thermoelectric\\w*', 'thermo-?electric\\w*', 'thermionic', 'thermophotovoltaic\\w*', 'TPV', 'Stirling',
   'Rankine', 'ORC', 'steam', 'heat to (?:work|power|electricity)', 'converts? (?:\\w+ )?heat', 'waste[- ]heat', 'thermal (?:to|into) (?:electric|mechanical)',
   'Seebeck', 'Peltier', 'generators? running on heat', 'heat-driven', 'thermal generator', 'TEG', 'heat recovery', 'power plant', 'power station', 'combustion',
   'diesel', 'petrol', 'gasoline', 'ambient heat', 'heat of the (?:air|sea|room|surroundings)', 'temperature difference', 'thermal gradient',
@@ -341,7 +351,9 @@ export const PROPELLANT_FREE_WORDS = [
   'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless',
   'without (?:any )?(?:expelling|ejecting|emitting|throwing|shedding|venting)(?: (?:out )?(?:any )?(?:propellant|mass|reaction mass|material|matter|exhaust|gas))?',
   'without (?:any )?(?:propellant|reaction mass|exhaust)', 'nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)', 'photon (?:thruster|rocket|drive|propulsion)',
-  'laser (?:thruster|diode|light|propulsion)', 'recoil', 'collimated', 'light (?:alone|only)',
+  'laser[- ](?:thrusters?|diodes?|light|propulsion|arrays?|bars?|beams?)', 'recoil', 'collimated', 'light (?:alone|only)', 'radiators?',
+  'thermal (?:radiation|recoil|photons?)', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
+  'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)',
   'no (?:propellant|reaction mass|exhaust|moving parts|expelled mass|mass is expelled)', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
   'closed (?:cavity|resonator|system|box|container|frame|vessel|frustum)', 'sealed (?:cavity|resonator|box|unit|container|device|chamber|frustum|drum|housing|case|enclosure)',
   'inertial (?:propulsion|drive|thrust)', 'field propulsion', 'unidirectional (?:force|thrust)', 'net thrust from inside', 'fuel-?less (?:thruster|drive|propulsion)',
@@ -355,7 +367,8 @@ export const PROPELLANT_WORDS = [
   'propellant', 'xenon', 'krypton', 'argon', 'hydrazine', 'kerosene', 'oxidi[sz]er', 'fuel tanks?', 'exhaust (?:velocity|speed)', 'Isp', 'specific impulse',
   'ion (?:thruster|engine|drive)', 'Hall(?:-effect)? (?:thruster|effect thruster)', 'rocket', 'reaction mass', 'mass flow', 'nozzle', 'ejects?', 'expels?',
   'plasma thruster', 'resistojet', 'arcjet', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
-  'fan', 'air-breathing', 'sail', 'laser-pushed', 'beamed', 'tether',
+  'fans?', 'air-breathing', 'solar sails?', '(?:pushed|driven|propelled|illuminated|accelerated) by (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:lasers?|beams?|sunlight|light)',
+  'ground(?:-based)? lasers?', 'laser-pushed', 'beamed', 'tether',
 ];
 
 /** Phrases that say a device needs no input (the input power is then 0). */
@@ -363,15 +376,16 @@ export const SELF_RUNNING_WORDS = [
   'self-?running', 'self-?sustain(?:ing|ed|s)', 'self-?powered', 'self-?looped', 'self-?looping', 'self-?feeding', 'self-?charging', 'self-?perpetuating',
   'needs? no (?:external )?(?:power|energy|input|supply|fuel|battery|electricity|source)', 'requires? no (?:external )?(?:power|energy|input|supply|fuel|electricity|source)',
   'without (?:any )?(?:external )?(?:power|energy|input|supply|fuel|electricity)(?: source| supply| input)?', 'no (?:external )?(?:power|energy) (?:input|source|supply)',
-  'no (?:external )?input', 'powers? itself', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
+  'no (?:external )?input', 'powers? itself', '(?:drawing|draws|consuming|consumes|using|uses|taking|takes) nothing', 'with nothing (?:going )?in',
+  'no connection to (?:the )?(?:grid|mains|supply|power)', 'not connected to (?:the )?(?:grid|mains|any (?:supply|source))', 'zero input', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
   'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
   'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
-  'no fuel', 'fuel-?less', 'free energy', 'zero input',
+  'no fuel', 'fuel-?less', 'free energy',
 ];
 /** Where "self-powered" is lawful: the device harvests an outside flow of energy. */
 export const HARVEST_WORDS = [
   'harvest\\w*', 'solar', 'photovoltaic', 'sunlight', 'light', 'vibrations?', 'body heat', 'thermal gradient', 'temperature difference', 'wind', 'tides?',
-  'waves?', 'radio waves', 'RF energy', 'ambient (?:light|RF|vibration)', 'battery', 'batteries', 'capacitor', 'supercapacitor', 'piezo\\w*', 'triboelectric',
+  'waves?', 'radio waves', 'RF energy', 'ambient (?:light|RF|vibration)', 'piezo\\w*', 'triboelectric',
   'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell',
 ];
 
@@ -395,7 +409,7 @@ export const HEDGES: readonly { hedge: 'up-to' | 'about' | 'at-least' | 'at-most
 
 /** COP: cooling words are looked for first, then heating words (within COP_WINDOW characters). */
 export const COP_COOLING = ['cool(?:s|ed|ing|er|ers)?', 'refrigerat\\w*', 'chillers?', 'freezers?', 'fridges?', 'air[- ]condition\\w*', 'cryocoolers?'];
-export const COP_HEATING = ['heating', 'heat[- ]pumps?', 'heaters?', 'warming'];
+export const COP_HEATING = ['heating', 'heat[- ]pumps?', 'heaters?', 'warming', 'heat output', 'flow temperature', 'hot water', 'DHW', 'underfloor', 'radiators?'];
 
 /** Words before a number that make it a label, not a figure ("Figure 2 A", "Section 3.2", "p. 12"). */
 export const LABEL_WORDS = [

@@ -78,7 +78,10 @@ const PROPELLANT_RE = compile(PROPELLANT_WORDS);
 const HEAT_ENGINE_RE = compile(HEAT_ENGINE_WORDS);
 const HEAT_PUMP_RE = compile(HEAT_PUMP_WORDS);
 const COOLING_RE = compile(COOLING_MACHINE_WORDS);
-const OVER_UNITY_RE = /(?<!\p{L})(?:over-?unity|free energy|self-?running|self-?sustaining|perpetual|more (?:energy|power) (?:out )?than|generator|alternator|magnet motor|output exceeds|exceeds (?:the|its) input|COP of|gain)(?!\p{L})/iu;
+const OVER_UNITY_RE =
+  /(?<!\p{L})(?:over-?unity|overunity|free energy|self-?running|self-?sustaining|self-?charging|perpetual|more (?:energy|power) (?:out )?than|generators?|alternators?|magnet(?:ic)? motors?|motors?|output exceeds|exceeds (?:the|its) input|circuits?|coils?|lamps?|LEDs?|bulbs?|(?:solar|fuel|photovoltaic) cells?|panels?|batter(?:y|ies)|zero-?point|ZPE|vacuum|electrolys\w*|HHO|oxyhydrogen|wheels?|amplifiers?|converters?|inverters?|electrical (?:output|energy|power))(?!\p{L})/iu;
+/** A machine that moves heat is said to: cooling words name a fridge or chiller the text may only mention as a load. */
+const COOLING_ACTION_RE = /(?<!\p{L})(?:(?:removes?|extracts?|pumps?|draws?|takes?|moves?|lifts?|rejects?)(?: \S+){0,3} (?:of )?heat|cooling (?:capacity|power|output|load|duty|COP)|refrigeration (?:capacity|effect)|cooling COP)(?!\p{L})/iu;
 
 /** What the words of the text (and the matched classes) say about the device. */
 export interface Signals {
@@ -100,7 +103,7 @@ export function readSignals(ctx: PlanContext): Signals {
     propellant: PROPELLANT_RE.test(withoutFree),
     heatEngine: HEAT_ENGINE_RE.test(text),
     heatPump: HEAT_PUMP_RE.test(text),
-    cooling: COOLING_RE.test(text),
+    cooling: COOLING_RE.test(text) && COOLING_ACTION_RE.test(text),
     overUnity: OVER_UNITY_RE.test(text) || (top !== undefined && OVER_UNITY_CLASSES.includes(top)),
   };
 }
@@ -147,6 +150,26 @@ const largest = (fs: Figure[]) => [...fs].sort((a, b) => (b.upper?.si ?? b.si) -
 
 function uniq<T>(xs: (T | undefined)[]): T[] {
   return [...new Set(xs.filter((x): x is T => x !== undefined))];
+}
+
+/** Heat out over work in, for a machine that moves heat: a COP (heating, or cooling with cooling words), as a figure of its own. */
+function heatMoverCop(input: Figure | undefined, output: Figure | undefined, s: Signals): Figure | undefined {
+  if (!input || !output || input.kind !== output.kind || !(input.si > 0)) return undefined;
+  const value = output.si / input.si;
+  const cooling = s.cooling && !s.heatPump;
+  return {
+    id: output.id,
+    kind: 'cop',
+    quantity: String(Number(value.toPrecision(12))),
+    text: output.text,
+    start: output.start,
+    end: output.end,
+    si: value,
+    unit: '',
+    display: formatPrint(value),
+    role: cooling ? 'cooling' : 'heating',
+    derived: `COP = heat out / work in (${output.display} / ${input.display})`,
+  };
 }
 
 export interface PlanResult {
@@ -269,8 +292,11 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
   // ---- Carnot
   const temps = ofKind(figures, 'temperature');
   const efficiency = ofKind(figures, 'efficiency').find((f) => !f.derived);
-  const gain = ofKind(figures, 'efficiency').find((f) => f.derived);
-  const cop = ofKind(figures, 'cop')[0];
+  // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
+  const movesHeat = s.heatPump || s.cooling || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
+  const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, pOut ?? eOut, s) : undefined;
+  const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
+  const cop = ofKind(figures, 'cop')[0] ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);
   const engineEfficiency = efficiency && (s.heatEngine || temps.length >= 2) && !(efficiency.si > 1 && temps.length < 2);
   const copForCarnot = cop && (cop.role !== null || s.heatPump || s.cooling || temps.length >= 2 || !s.overUnity);
   if ((engineEfficiency || copForCarnot) && temps.length >= 2) {
@@ -309,7 +335,9 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
 
   // ---- First law
   const firstLawWhy = 'The text gives the energy put in and the energy got out.';
-  if ((eIn || pIn) && (eOut || pOut) && !(thrust && photonApplies && !eOut && !pOut)) {
+  if (movesHeat && (eIn || pIn) && (eOut || pOut)) {
+    notes.push('A heat pump or refrigerator moves heat rather than making it: the heat it delivers may exceed the work it takes without breaking any law. Its bound is the Carnot COP of the temperatures it works between.');
+  } else if ((eIn || pIn) && (eOut || pOut) && !(thrust && photonApplies && !eOut && !pOut)) {
     const inF = eIn ?? pIn!;
     const outF = eOut ?? pOut!;
     const bothPower = !eIn && !eOut;
@@ -336,6 +364,16 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
         assumptions: [...extra, 'Stored energy: unchanged over the run (the text does not say it ran down).'],
       });
     }
+  } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop && !s.overUnity && !s.heatEngine) {
+    // "480 % efficient" with nothing said of the machine: a heat pump can say that lawfully.
+    needs.push(
+      need(
+        'carnot',
+        ['what the machine is (an efficiency above 100 % is a heat pump\'s COP, or a claim of more energy out than in)', 'the temperatures it works between'],
+        'An efficiency above 100 % is lawful for a heat pump (it moves heat) and impossible for anything that converts energy.',
+        [efficiency!],
+      ),
+    );
   } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop) {
     plans.push({
       check: 'first-law',

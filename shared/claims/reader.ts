@@ -112,7 +112,8 @@ const COMPOUND_AFTER_RE = /[^\S\n]*(?:[/·⋅][^\S\n]*[\p{L}\p{N}]|per[^\S\n]+\p
 const C_SUFFIX_RE = /(?:c|[^\S\n]c)(?![\p{L}\p{N}_°])/uy;
 /** "5K cycles", "5 k hours": a thousand before a counted noun or a unit word. */
 const THOUSAND_RE = new RegExp(`(?:[^\\S\\n]?[kK](?=[^\\S\\n]+(?:${alt(THOUSAND_NOUNS)})(?![\\p{L}]))|[^\\S\\n]+thousand(?!\\p{L}))`, 'uy');
-const MILLION_RE = /[^\S\n]+(?:million|M(?=[^\S\n]+(?:cycles?|hours?|miles?|km|units?)))(?!\p{L})/uy;
+const MILLION_RE = /[^\S\n]+(million|billion|trillion|M(?=[^\S\n]+(?:cycles?|hours?|miles?|km|units?)))(?!\p{L})/uy;
+const MULTIPLIER: Record<string, number> = { million: 1e6, M: 1e6, billion: 1e9, trillion: 1e12 };
 
 /**
  * A number in digits: sign, digits (English thousands separators), decimals (a point, or a comma
@@ -150,7 +151,7 @@ const ISP_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})${CO
 const ISP_AFTER_RE = new RegExp(`[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})`, 'uy');
 /** Gains: "1.3 units back for every unit", "three times the energy it takes", "output is 3 times the input". */
 const GAIN_AFTER_RE =
-  /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|work)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input))?[^\S\n]+(?:in|put in|supplied|consumed|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested)/iuy;
+  /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|work)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input|work|fuel))?(?:[^\S\n]+(?:in|put in|supplied|consumed|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested)|(?<=electricity|input|work|fuel|energy|power)(?!\p{L}))/iuy;
 /** "For every unit of electricity we put in, the amplifier gives back 1.3." */
 const GAIN_BEFORE_RE =
   /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
@@ -169,7 +170,10 @@ const GAIN_PER_UNIT_RE =
 /** Multiples in words: "twice the energy it consumes", "three-fold its input". */
 const MULTIPLE_WORD_RE = /(?<!\p{L})(twice|double|triple|thrice|quadruple|two-?fold|three-?fold|four-?fold|five-?fold|ten-?fold)(?!\p{L})/giu;
 const MULTIPLE_VALUE: Record<string, number> = { twice: 2, double: 2, triple: 3, thrice: 3, quadruple: 4, twofold: 2, threefold: 3, fourfold: 4, fivefold: 5, tenfold: 10 };
-const RATIO_BEFORE_RE = /(?<!\p{L})(?:over-?unity|output[- ]to[- ]input|out(?:put)?\/in(?:put)?|energy gain|power gain|gain|amplification|multiplication)(?:[^\S\n]+(?:ratio|factor|coefficient))?(?:[^\S\n]*(?:[=:≈~]|of|is|was|reaching|about|around|approximately|roughly|near|up to|over|above|exceeding))*[^\S\n]*$/iu;
+/** "a power gain of 2.4": only over an input, or in a text about free energy (not an amplifier's gain in dB). */
+const POWER_GAIN_BEFORE_RE = /(?<!\p{L})(?:power|energy)[^\S\n]+gain(?:[^\S\n]*(?:[=:]|of|is|was|reaching|about|around|approximately|roughly|near|up to|over|above|exceeding))*[^\S\n]*$/iu;
+const OVER_UNITY_WORDS_RE = /(?<!\p{L})(?:over-?unity|free energy|zero-?point|ZPE|vacuum energy|self-?running|perpetual|magnet motor|more energy than)(?!\p{L})/iu;
+const RATIO_BEFORE_RE = /(?<!\p{L})(?:over-?unity|overunity|output[- ]to[- ]input|out(?:put)?\/in(?:put)?|output\/input|energy (?:out|return)[- ]to[- ](?:energy )?in(?:put)?)(?:[^\S\n]+(?:ratio|factor|coefficient))?(?:[^\S\n]*(?:[=:≈~]|of|is|was|reaching|about|around|approximately|roughly|near|up to|over|above|exceeding))*[^\S\n]*$/iu;
 
 /** Words that may stand between a figure and the role word after it ("2 kW of electrical input"). */
 const AFTER_FILLER =
@@ -270,10 +274,16 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
     COMPOUND_RE.lastIndex = u.end;
     const c = COMPOUND_RE.exec(text);
     if (c && c[0].trim() !== '-') {
+      // "230 V / 6.5 A": a number after the slash starts another figure.
+      if (/^[-−+]?\d/.test(text.slice(u.end + c[0].length, u.end + c[0].length + 2))) return { suffix: { type: 'unit', form: u.form }, end: u.end };
       const per = unitAt(text, u.end + c[0].length);
       if (per && !per.form.factor && !u.form.factor) {
         if (u.form.kind === 'thrust' && per.form.kind === 'power') return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
         if (u.form.kind === 'power' && per.form.kind === 'mass') return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
+      }
+      // "230 V / 6.5 A", "12 V × 1 A": a voltage and a current side by side, each a figure.
+      if (per && ((u.form.kind === 'voltage' && per.form.kind === 'current') || (u.form.kind === 'current' && per.form.kind === 'voltage'))) {
+        return { suffix: { type: 'unit', form: u.form }, end: u.end };
       }
       COMPOUND_AFTER_RE.lastIndex = u.end;
       if (COMPOUND_AFTER_RE.test(text) && !/^[^\S\n]*-/.test(text.slice(u.end))) return { suffix: null, end: at };
@@ -328,7 +338,7 @@ function tokenize(text: string): NumberToken[] {
       MILLION_RE.lastIndex = numEnd;
       const mm = MILLION_RE.exec(text);
       if (mm) {
-        value = String(Number(num) * 1e6);
+        value = String(Number((Number(num) * MULTIPLIER[mm[1]]).toPrecision(15)));
         numEnd += mm[0].length;
       }
     }
@@ -347,6 +357,12 @@ function tokenize(text: string): NumberToken[] {
     tokens.push({ start, numEnd, end, num: value, suffix, skip, plusMinus: PLUS_MINUS_RE.test(before), consumed: false, words });
   };
   for (let m = NUMBER_RE.exec(text); m; m = NUMBER_RE.exec(text)) push(m.index, m.index + m[0].length, cleanNumber(m), false);
+  // "for an hour", "over a day": one of the unit.
+  for (const m of text.matchAll(/(?<=(?:for|over|in|during|within|after|across|lasting|running)[^\S\n]+)(?:an?|one)(?=[^\S\n]+(?:full[^\S\n]+|whole[^\S\n]+|single[^\S\n]+)?(?:hour|day|week|month|year|minute)(?!\p{L}))/giu)) {
+    if (tokens.some((t) => t.start <= m.index! && m.index! < t.end)) continue;
+    const gap = /^[^\S\n]+(?:(?:full|whole|single)[^\S\n]+)?/u.exec(text.slice(m.index! + m[0].length))![0];
+    push(m.index!, m.index! + m[0].length + gap.length - 1, '1', true);
+  }
   for (const w of wordNumbers(text)) {
     if (tokens.some((t) => t.start < w.end && w.start < t.end)) continue;
     push(w.start, w.end, String(w.value), true);
@@ -436,6 +452,9 @@ function roleFor(text: string, kind: FigureKind, start: number, end: number, flo
   const roles = ROLES[kind];
   if (roles) return roleFromWords(text, roles, start, end, floor);
   if (kind === 'cop') {
+    // "a heating COP of 4.1", "cooling COP 5.0": said right before it.
+    const near = /(heating|cooling)[^\S\n]+(?:COP|coefficient of performance)[^.;!?\n]{0,25}$/iu.exec(text.slice(Math.max(0, start - 60), start));
+    if (near) return near[1].toLowerCase() === 'cooling' ? 'cooling' : 'heating';
     const around = text.slice(Math.max(0, start - COP_WINDOW), Math.min(text.length, end + COP_WINDOW));
     if (COP_COOLING_RE.test(around)) return 'cooling';
     if (COP_HEATING_RE.test(around)) return 'heating';
@@ -449,7 +468,12 @@ function hedgeBefore(text: string, start: number): FigureHedge | undefined {
   return undefined;
 }
 
-type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; unit: string; assumption?: string } | null;
+/** For "60 % more energy out than in": the percentage is added to 1. */
+type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; unit: string; assumption?: string; more?: boolean } | null;
+
+/** "60 % more electrical energy out than in", "30 % more power than it draws": a gain of 1 + p. */
+const PERCENT_MORE_RE =
+  /[^\S\n]*(?:more|extra)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over)[^\S\n]+(?:(?:it|the device|the unit)[^\S\n]+)?(?:in|input|it (?:takes|uses|consumes|draws)|(?:takes|uses|consumes|draws|is fed|goes in)|(?:the|its)[^\S\n]+(?:input|consumption|supply))(?!\p{L})/iuy;
 
 /** What a percentage is, by its context. */
 function readPercent(text: string, start: number, end: number, floor: number): PercentReading {
@@ -462,6 +486,8 @@ function readPercent(text: string, start: number, end: number, floor: number): P
   if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };
   PERCENT_OF_INPUT_RE.lastIndex = end;
   if (PERCENT_OF_INPUT_RE.test(text)) return { kind: 'efficiency', factor: 1, unit: '%' };
+  PERCENT_MORE_RE.lastIndex = end;
+  if (PERCENT_MORE_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '', more: true };
   EFFICIENCY_AFTER_RE.lastIndex = end;
   PERCENT_OF_HEAT_RE.lastIndex = end;
   const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text);
@@ -488,6 +514,12 @@ function bareKind(text: string, start: number, end: number, floor: number): { ki
   if (EFFICIENCY_BARE_BEFORE_RE.test(before)) return { kind: 'efficiency' };
   if (RATIO_BEFORE_RE.test(before)) return { kind: 'efficiency', derived: 'a ratio of output to input' };
   if (FACTOR_BEFORE_RE.test(before)) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
+  if (POWER_GAIN_BEFORE_RE.test(before) && !/^[^\S\n]*(?:dB|decibels?)(?!\p{L})/iu.test(text.slice(end, end + 12))) {
+    const rest = text.slice(end, end + 60);
+    if (/^[^\S\n]*(?:over|above|relative to|compared (?:with|to)|against)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:input|drive|driving|supply|electronics|power in|consumption)/iu.test(rest) || OVER_UNITY_WORDS_RE.test(sentenceAround(text, start, end))) {
+      return { kind: 'efficiency', derived: 'a power gain over the input' };
+    }
+  }
   GAIN_AFTER_RE.lastIndex = end;
   if (GAIN_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'units out for each unit in' };
   if (GAIN_BEFORE_RE.test(text.slice(windowStart(text, start, floor, 160), start))) return { kind: 'efficiency', derived: 'units out for each unit in' };
@@ -629,7 +661,15 @@ export function extractFigures(text: string): Figure[] {
         kind = reading.kind;
         role = reading.role;
         assumption = reading.assumption;
-        const q = (n: string) => (reading.unit === '%' ? `${n} %` : reading.unit ? `${scaled(n, reading.factor)} ${reading.unit}` : scaled(n, reading.factor));
+        const q = (n: string) =>
+          reading.more
+            ? String(Number((1 + Number(n) * reading.factor).toPrecision(15)))
+            : reading.unit === '%'
+              ? `${n} %`
+              : reading.unit
+                ? `${scaled(n, reading.factor)} ${reading.unit}`
+                : scaled(n, reading.factor);
+        if (reading.more) derived = 'output = input + the percentage more';
         quantity = q(t.num);
         if (upperNum !== undefined) upper = q(upperNum);
       }
@@ -676,6 +716,8 @@ export function extractFigures(text: string): Figure[] {
       }
     }
     if (role === undefined) role = roleFor(text, kind, start, end, floor);
+    // "10 kWe", "3 MWe": electrical output.
+    if (role === null && kind === 'power' && suffix?.type === 'unit' && /[kMG]?We$/.test(text.slice(t.numEnd, end).trim())) role = 'out';
     let hedge = hedgeBefore(text, start);
     // "over two weeks", "for over 3 hours" speak of the time the claim covers.
     if (kind === 'duration' && (hedge === 'more-than' || hedge === 'less-than')) hedge = undefined;
@@ -751,6 +793,12 @@ export function extractFigures(text: string): Figure[] {
 
 // ---------------------------------------------------------------------------------------------
 // Pass 3: relations between figures
+
+/** Abbreviations whose full stop ends no sentence ("max. current", "approx. 3 kW"). */
+const ABBREVIATIONS_RE = /(?<!\p{L})(?:max|min|approx|nom|avg|ca|cf|e\.g|i\.e|no|vs|incl|excl|resp|est|typ|cont|spec|ref|fig|eq)\./giu;
+
+/** Devices whose "COP" is an output-over-input ratio, not a heat pump's. */
+const ELECTRICAL_GAIN_RE = /(?<!\p{L})(?:circuits?|coils?|generators?|alternators?|motors?|batter(?:y|ies)|electrical energy|electricity out|electrical output|magnets?|over-?unity|free energy|zero-?point|ZPE|self-charging|self-running|transformers?|capacitors?|resonators?|electrolys\w*|HHO|oxyhydrogen)(?!\p{L})/iu;
 
 const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|lander|probe|satellite|CubeSat|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines? (?:fire|burn))(?!\p{L})/iu;
 
@@ -844,7 +892,11 @@ function relate(text: string, drafts: Draft[]): void {
   };
   const sameSentence = (a: Draft, b: Draft) => {
     const [x, y] = a.start < b.start ? [a, b] : [b, a];
-    return !/[.!?;](?:\s|$)|\n/.test(text.slice(x.end, y.start));
+    return !/[.!?;](?:\s|$)|\n/.test(text.slice(x.end, y.start).replace(ABBREVIATIONS_RE, ''));
+  };
+  const sameClause = (a: Draft, b: Draft) => {
+    const [x, y] = a.start < b.start ? [a, b] : [b, a];
+    return !/[.!?](?:\s|$)|\n/.test(text.slice(x.end, y.start).replace(ABBREVIATIONS_RE, ''));
   };
 
   // "4 W more heat than the 20 W it draws": the first is an excess, the second the input.
@@ -861,7 +913,10 @@ function relate(text: string, drafts: Draft[]): void {
 
   // Power from a current and a voltage in the same clause: "12 A at 24 V", "3 amps from a 48-volt pack".
   for (const cur of drafts.filter((d) => d.kind === 'current')) {
-    const volt = drafts.find((d) => d.kind === 'voltage' && sameSentence(d, cur) && Math.abs(d.start - cur.start) < 120);
+    // The voltage nearest the current in its sentence ("steps 230 V down to 12 V and delivers 5 A": 12 V).
+    const volt = drafts
+      .filter((d) => d.kind === 'voltage' && sameClause(d, cur) && Math.abs(d.start - cur.start) < 120)
+      .sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0];
     if (!volt) continue;
     const i = siOf(cur);
     const v = siOf(volt);
@@ -888,6 +943,15 @@ function relate(text: string, drafts: Draft[]): void {
     });
   }
 
+  // A "COP" of a circuit, a motor or a generator, where nothing moves heat: its output over its input.
+  if (!HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) && ELECTRICAL_GAIN_RE.test(text) && !drafts.some((d) => d.kind === 'temperature')) {
+    for (const d of drafts) {
+      if (d.kind === 'cop' && d.role === null) {
+        d.kind = 'efficiency';
+        d.derived = 'a "COP" of a device that moves no heat: output over input';
+      }
+    }
+  }
   rolesByContext(text, drafts);
 
   // out = in + excess, when the text gives no output itself.
@@ -961,12 +1025,29 @@ function relate(text: string, drafts: Draft[]): void {
     }
   }
 
-  // Two or more temperatures of the same machine: the highest is the hot side, the lowest the cold.
+  // Two or more temperatures of the same machine: the higher is the hot side. Pairs said together
+  // ("between 7 °C and 35 °C", "from 10 to 55 °C") are ordered within the pair; otherwise the
+  // highest is hot and the lowest cold.
   const absolute = drafts.filter((d) => d.kind === 'temperature');
-  if (absolute.length >= 2) {
+  let paired = false;
+  for (let i = 0; i + 1 < absolute.length; i++) {
+    const a = absolute[i];
+    const b = absolute[i + 1];
+    if (!/^[^\S\n]*(?:and|to|–|-|—|\/)[^\S\n]*$/iu.test(text.slice(a.end, b.start))) continue;
+    const [hi, lo] = (siOf(a) ?? 0) >= (siOf(b) ?? 0) ? [a, b] : [b, a];
+    hi.role = 'hot';
+    lo.role = 'cold';
+    paired = true;
+    i++;
+  }
+  if (absolute.length >= 2 && !paired) {
     const sorted = [...absolute].sort((a, b) => (siOf(b) ?? 0) - (siOf(a) ?? 0));
     sorted[0].role = 'hot';
     sorted[sorted.length - 1].role = 'cold';
+  } else if (absolute.length === 1 && absolute[0].role === null) {
+    // One temperature kept by a freezer or a chiller is its cold side; by a heat pump, its hot side.
+    if (COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text)) absolute[0].role = 'cold';
+    else if (HEAT_PUMP_RE.test(text)) absolute[0].role = 'hot';
   }
 
   // Powers and energies over a stated run: energy = power × time.
@@ -975,7 +1056,7 @@ function relate(text: string, drafts: Draft[]): void {
   if (duration && tRun) {
     for (const p of drafts.filter((d) => d.kind === 'power' && (d.role === 'in' || d.role === 'out'))) {
       const w = siOf(p);
-      if (!w) continue;
+      if (w === null || (w === 0 && p.role !== 'in')) continue;
       if (drafts.some((d) => d.kind === 'energy' && d.role === p.role && !d.derived)) continue;
       if (drafts.some((d) => d.kind === 'energy' && d.role === p.role && d.derived?.startsWith('energy = power'))) continue;
       const wu = upperSiOf(p);
