@@ -93,8 +93,12 @@ export const STRONG_TERMS_PER = 7;
 export const MIN_STRONG_WEIGHT = 2;
 export const MIN_STRONG_WEIGHT_SHORT = 1;
 export const STRONG_WEIGHT_PER_TERM = 0.05;
-/** An entry in a class the figures point to needs one strong term fewer and this fraction of the weight. */
-export const CLASS_WEIGHT_FACTOR = 0.75;
+/**
+ * An entry in a class the figures point to needs one strong term fewer (at least one) and about one
+ * term's weight less (never under CLASS_MIN_WEIGHT): the figures are evidence of their own.
+ */
+export const CLASS_WEIGHT_RELIEF = 0.4;
+export const CLASS_MIN_WEIGHT = 0.6;
 /** Least score of a hit as a fraction of the best hit's. */
 export const RELATIVE_FLOOR = 0.4;
 /** Weight of a synonym group's concept term, relative to a word of the same rarity (the word itself always weighs more). */
@@ -114,6 +118,8 @@ interface QueryTerm {
 /** A synonym group's concept term in the text: also the word terms of the phrases that gave it. */
 interface ConceptQueryTerm extends QueryTerm {
   sources: Set<string>;
+  /** Some phrase that gave it has several words ("zero-point", "reaction mass"). */
+  phrase: boolean;
 }
 
 const WORD = /[\p{L}\p{M}\p{N}]+/gu;
@@ -159,8 +165,9 @@ export function claimConcepts(index: SearchIndex, text: string, after = 0): Conc
   for (const hit of index.synonyms.find(tokens.map((t) => t.token))) {
     const term = conceptTerm(hit.group);
     let q = byTerm.get(term);
-    if (!q) byTerm.set(term, (q = { term, count: 0, first: i++, words: [], seen: new Set(), sources: new Set() }));
+    if (!q) byTerm.set(term, (q = { term, count: 0, first: i++, words: [], seen: new Set(), sources: new Set(), phrase: false }));
     q.count += 1;
+    if (tokens.slice(hit.start, hit.end).filter((t) => wordKey(t.token) !== null).length > 1) q.phrase = true;
     for (const { token, at } of tokens.slice(hit.start, hit.end)) {
       const folded = fold(token);
       // Figures, stop words and the common words of prose are not shown as matched words.
@@ -198,9 +205,10 @@ export interface StrongEvidence {
 
 /**
  * The text's terms the hit matched in a strong field: its words, and each synonym group unless
- * every word of its phrases already counted (so that "cavity" matching "cavity" is not counted
- * again through the group that holds both "cavity" and "resonator", while "isothermal engine"
- * meeting "single-reservoir engine" counts though "engine" did).
+ * it came from single words that all counted already (so that "cavity" matching "cavity" is not
+ * counted again through the group that holds both "cavity" and "resonator", while "isothermal
+ * engine" meeting "single-reservoir engine" counts though "engine" did, and so does the phrase
+ * "zero-point", which says more than "zero" and "point" apart).
  */
 function strongEvidence(index: SearchIndex, h: TermsHit, concepts: Map<string, ConceptQueryTerm>): StrongEvidence {
   const strong = Object.entries(h.match)
@@ -220,9 +228,12 @@ function strongEvidence(index: SearchIndex, h: TermsHit, concepts: Map<string, C
   }
   for (const q of h.queryTerms) {
     const c = concepts.get(q);
-    if (!c || !strong.includes(q) || [...c.sources].every((t) => strongWords.has(t))) continue;
+    if (!c || !strong.includes(q)) continue;
+    const allWords = [...c.sources].every((t) => strongWords.has(t));
+    if (!c.phrase && allWords) continue;
     count += 1;
-    weight += SYNONYM_WEIGHT * idfWeight(index, q);
+    // A phrase whose words all matched is most likely the entry's own phrase: it weighs as a word.
+    weight += (c.phrase && allWords ? 1 : SYNONYM_WEIGHT) * idfWeight(index, q);
   }
   return { count, weight };
 }
@@ -232,7 +243,7 @@ export function strongNeeded(terms: number, classSignalled = false): StrongEvide
   const count = Math.min(MIN_STRONG_TERMS, Math.max(MIN_STRONG_TERMS_SHORT, Math.ceil(terms / STRONG_TERMS_PER)));
   const weight = Math.min(MIN_STRONG_WEIGHT, Math.max(MIN_STRONG_WEIGHT_SHORT, terms * STRONG_WEIGHT_PER_TERM));
   return classSignalled
-    ? { count: Math.max(MIN_STRONG_TERMS_SHORT, count - 1), weight: weight * CLASS_WEIGHT_FACTOR }
+    ? { count: Math.max(1, count - 1), weight: Math.max(CLASS_MIN_WEIGHT, weight - CLASS_WEIGHT_RELIEF) }
     : { count, weight };
 }
 

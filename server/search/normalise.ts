@@ -37,6 +37,12 @@ export const COMMON_WORDS = new Set(
     'study suggest suggests thereof therein thereto today wherein whereby whereupon',
     // addresses
     'com contact details example http https info information mailto net org press www',
+    // the common verbs, nouns and adjectives of running prose, which say nothing of a mechanism
+    // (issue 11: "puts out", "takes in", "test point" must not carry a match; common practice, no source)
+    'able again around came come comes coming day days gave get gets getting give given gives giving go goes going gone',
+    'good got great hour hours keep keeps kept kind last likely long made make makes making measured minute minutes month',
+    'months nearly new next part parts point points put puts putting result results saw see seen set sets setting take',
+    'taken takes taking test tested testing tests time times took way ways week weeks went year years',
   ]
     .join(' ')
     .split(' '),
