@@ -246,7 +246,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
   {
     role: 'hot',
     before: [
-      'hot', 'hotter', 'hottest', 'source', 'flames?', 'steam', 'boiler', 'furnace', 'combustion', 'burner', 'heated to', 'high-temperature',
+      'T_?(?:h|hot|H)', 'hot', 'hotter', 'hottest', 'source', 'flames?', 'steam', 'boiler', 'furnace', 'combustion', 'burner', 'heated to', 'high-temperature',
       'exhaust', 'waste heat', 'geothermal', 'deliver(?:s|ed|ing)? (?:water |air |heat )?at', 'supply temperature', 'flow temperature', 'output temperature',
       'radiators?', 'underfloor', 'warm', 'warmer', 'warm (?:end|side)', 'to a', 'into a', 'hot water', 'condensing', 'up to', 'to heat', 'heats? (?:\\w+ )?to', 'heating to',
       'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper', 'firing', 'firing temperature',
@@ -259,7 +259,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
   {
     role: 'cold',
     before: [
-      'cold', 'colder', 'coldest', 'ambient', 'room', 'sink', 'outside', 'outdoors?', 'river', 'sea', 'seawater', 'lake', 'ocean',
+      'T_?(?:c|cold|C|0|amb)', 'cold', 'colder', 'coldest', 'ambient', 'room', 'sink', 'outside', 'outdoors?', 'river', 'sea', 'seawater', 'lake', 'ocean',
       'ground', 'environment', 'surroundings', 'atmosphere', 'cooling water', 'ice', 'condenser', 'low-temperature', 'air', 'outside air', 'outdoor air',
       'from', 'freezer', 'fridge', 'inside the fridge', 'cabinet', 'cold store', 'evaporator', 'extract(?:s|ed|ing)? heat from', 'draw(?:s|n|ing)? heat from',
       'well water', 'groundwater', 'borehole', 'winter', 'bottom', 'lower', 'rejects? heat (?:to|at)', 'reject(?:s|ed|ing)?', 'cooled to', 'chilled to',
@@ -326,7 +326,7 @@ export const DIFFERENCE_BEFORE = [
   'ΔT', 'Δ T', 'delta[- ]?T', 'dT', 'temperature (?:difference|gradient|drop|rise|lift|span|spread|differential|swing|excursion|change|increase)s?',
   'differences? of', 'differential of', 'gradient of', 'rise of', 'drop of', 'lift of', 'spread of', 'span of', 'increase of', 'swing of', 'change of',
   'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
-  '(?:colder|cooler|hotter|warmer|lower|higher) than (?:the |its )?(?:[\\w-]+ ){0,3}by', 'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
+  '(?:colder|cooler|hotter|warmer|lower|higher) than (?:the |its )?(?:[\\w-]+ ){0,3}by', 'differ(?:s|ing)? by', 'apart by', 'separated by', 'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
 ];
 export const DIFFERENCE_AFTER = [
   '(?:temperature )?(?:difference|differential|gradient|drop|rise|lift|span|spread|swing|excursion|delta|split|increase|decrease)s?',

@@ -130,7 +130,7 @@ const PLUS_MINUS_RE = /(?:±|\+\/-|\+-)[^\S\n]*$/u;
 const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
 const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
 const COP_WORDS_BEFORE_RE = new RegExp(`(?<!\\p{L})coefficients?[\\s-]+of[\\s-]+performance(?:[^\\S\\n]*\\(COP\\))?${CONNECT}$`, 'iu');
-const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|η)(?!\\p{L})${CONNECT}$`, 'iu');
+const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|η(?:_?(?:th|thermal|c|Carnot))?|eta(?:_?(?:th|thermal))?)(?!\\p{L})${CONNECT}$`, 'iu');
 const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})([^\\d.;!?\\n]{0,60})$`, 'iu');
 const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');
 /** "efficiency … 45%": the keyword, then up to 60 characters without digits or a sentence break. */
@@ -156,7 +156,7 @@ const GAIN_AFTER_RE =
 const GAIN_BEFORE_RE =
   /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
 const TIMES_AFTER_RE =
-  /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical)[^\S\n]+)?(?:input|consumption|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in)/iuy;
+  /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical)[^\S\n]+)?(?:input|consumption|in(?!\p{L})|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in)/iuy;
 const TIMES_BEFORE_RE = /(?<!\p{L})(?:output|yield|gain|returns?|delivers?|produces?|generates?)(?:[^\S\n]+(?:is|of|was|are|reaches|reached|power|energy|exactly|about|roughly|some|nearly))*[^\S\n]*$/iu;
 /** "the output exceeds the input by a factor of 1.5", "output is higher than input by a factor of 2". */
 const FACTOR_BEFORE_RE =
@@ -274,6 +274,8 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
     COMPOUND_RE.lastIndex = u.end;
     const c = COMPOUND_RE.exec(text);
     if (c && c[0].trim() !== '-') {
+      // "100 W / output: 130 W": a slash between spaces before a word that is no unit separates two items.
+      if (/^[^\S\n]+\/[^\S\n]+$/.test(c[0]) && !unitAt(text, u.end + c[0].length)) return { suffix: { type: 'unit', form: u.form }, end: u.end };
       // "230 V / 6.5 A": a number after the slash starts another figure.
       if (/^[-−+]?\d/.test(text.slice(u.end + c[0].length, u.end + c[0].length + 2))) return { suffix: { type: 'unit', form: u.form }, end: u.end };
       const per = unitAt(text, u.end + c[0].length);
@@ -473,7 +475,7 @@ type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; uni
 
 /** "60 % more electrical energy out than in", "30 % more power than it draws": a gain of 1 + p. */
 const PERCENT_MORE_RE =
-  /[^\S\n]*(?:more|extra)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over)[^\S\n]+(?:(?:it|the device|the unit)[^\S\n]+)?(?:in|input|it (?:takes|uses|consumes|draws)|(?:takes|uses|consumes|draws|is fed|goes in)|(?:the|its)[^\S\n]+(?:input|consumption|supply))(?!\p{L})/iuy;
+  /[^\S\n]*(?:above|over|more than|in excess of|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:electrical|electric)[^\S\n]+)?(?:input|consumption|power in|energy in|supply)(?!\p{L})|[^\S\n]*(?:more|extra)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over)[^\S\n]+(?:(?:it|the device|the unit)[^\S\n]+)?(?:in|input|it (?:takes|uses|consumes|draws)|(?:takes|uses|consumes|draws|is fed|goes in)|(?:the|its)[^\S\n]+(?:input|consumption|supply))(?!\p{L})/iuy;
 
 /** What a percentage is, by its context. */
 function readPercent(text: string, start: number, end: number, floor: number): PercentReading {
