@@ -23,6 +23,9 @@ export function DeskScreen() {
     >
       <RoleGate section="desk">
         <Button testID="new-entry" label="New entry" onPress={() => router.push('/desk/new')} />
+        <TextLink href="/desk/synonyms" testID="desk-synonyms">
+          Synonyms the claim check uses
+        </TextLink>
         <DeskLists />
       </RoleGate>
     </Screen>

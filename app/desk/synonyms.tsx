@@ -1,0 +1,3 @@
+import { SynonymsScreen } from '@/components/desk/SynonymsScreen';
+
+export default SynonymsScreen;
