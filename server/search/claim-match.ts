@@ -1,14 +1,22 @@
 /**
- * The claim matcher (issue 6): which library entries a pasted claim — a paragraph of a manuscript,
- * a press release or a patent, 50 to 20,000 characters — describes.
+ * The claim matcher (issues 6 and 11): which library entries a pasted claim — a sentence, a
+ * paragraph of a manuscript, a press release or a patent, up to 20,000 characters — describes.
  *
- * The text becomes a weighted bag of index terms, searched through the same minisearch index as
- * GET /api/search (same normalisation, same field boosts, BM25+ per field), with other options:
+ * `matchClaim(index, text, { limit, classes })`. The text becomes a weighted bag of index terms,
+ * searched through the same minisearch index as GET /api/search (same normalisation, same field
+ * boosts, BM25+ per field), with other options:
  *
  *  - Terms: each word of the text through normaliseTerm (the index's own folding and stemmer);
  *    left out are words with a digit (figures and units: "800", "2.45", "mN"), terms of fewer than
  *    three letters, and the common words of running prose (COMMON_WORDS in normalise.ts: function
- *    words, numbers in words, the stock phrases of abstracts, press releases and patent claims).
+ *    words, numbers in words, the stock phrases of abstracts, press releases and patent claims, and
+ *    verbs and nouns such as "put", "take", "point", "test" that say nothing of a mechanism).
+ *  - Synonyms (issue 11): the trade's synonym groups (content/synonyms.yml, edited by editors; see
+ *    synonyms.ts) are concept terms of the index. Each group the text names, by a word or a phrase
+ *    of several words (the longest at each place), is one more query term, weighted SYNONYM_WEIGHT
+ *    of a word of the same rarity: "frustum" in the text finds "cavity" in an entry, and an entry
+ *    holding the text's own word scores that word as well as the group, so the word itself always
+ *    weighs more. Words that matched only through a group are reported in `synonyms`.
  *  - Weights: each distinct term is searched once, boosted by (1 + ln n) for n uses in the text
  *    (said five times counts more than once, not five times more) times its idf over whole entries
  *    (SearchIndex.documentFrequency) relative to a term only one entry holds. Minisearch's own idf
@@ -18,22 +26,41 @@
  *    weighs nothing). A 20,000-character text costs about what a long paragraph does.
  *  - Word forms: while the text has at most PREFIX_MAX_TERMS distinct terms, a term of PREFIX_MIN
  *    letters or more also matches the index terms it begins ("gyroscop" finds "gyroscopic"), at
- *    minisearch's reduced prefix weight; beyond that only exact terms (prefix search on hundreds of
- *    terms is slow on a large library). No fuzzy matching: a pasted text is spelled as published,
- *    and edit-distance search over hundreds of terms is slow and noisy ("heat" ~ "head").
+ *    minisearch's reduced prefix weight; beyond that only exact terms. No fuzzy matching: a pasted
+ *    text is spelled as published, and edit-distance search over hundreds of terms is slow and
+ *    noisy ("heat" ~ "head").
  *  - Score: minisearch multiplies its sum by the number of query terms matched, which favours the
  *    longest entries when the query has a hundred terms; the matcher takes that factor out and
  *    uses the weighted sum of the term scores itself.
- *  - Weak hits are left out: a hit needs at least MIN_STRONG_TERMS of the text's terms in the
- *    entry's title, aliases or brief (what the entry is about, not words its long sections happen
- *    to use), a score of at least MIN_SCORE, and at least RELATIVE_FLOOR of the best hit's score.
- *    These are rules of thumb (common practice, no source), set on the invented texts of
- *    tests/fixtures/claim-texts.ts: there the 36 claims' top hits score 59–371 and match 6–18
- *    strong terms, while a recipe, a weather report and a match report match at most 3.
+ *  - Accepted sightings (issue 11): the index holds the title and summary of every sighting a
+ *    moderator accepted and linked to an entry as that entry's `sightings` field (boost 2, below
+ *    the brief); it counts as a strong field, so a claim worded like an accepted sighting finds
+ *    its entry even when it shares few words with the entry itself.
+ *  - Classes (issue 11): `opts.classes` are mechanism classes the claim's figures point to (a
+ *    thrust with a power and no propellant → 'propellant-free-thrust'). An entry in one of them or
+ *    below it scores (1 + CLASS_BOOST) times as much and needs one strong term and about one term's
+ *    weight less (strongNeeded): enough to break a near-tie or admit an entry one strong term
+ *    short, never enough for one whose words do not match (the boost multiplies its own score).
+ *  - Weak hits are left out, and a text about nothing in the library gets an empty list, never a
+ *    fall-back on stray words: a hit needs strong evidence — enough of the text's terms in the
+ *    entry's title, aliases, brief or accepted sightings (what the entry is about, not words its
+ *    long sections happen to use), one for every STRONG_TERMS_PER terms of the text, between
+ *    MIN_STRONG_TERMS_SHORT and MIN_STRONG_TERMS, whose idf weights add up to STRONG_WEIGHT_PER_TERM
+ *    a term of the text, between MIN_STRONG_WEIGHT_SHORT and MIN_STRONG_WEIGHT (a few words every
+ *    entry uses, "energy", "power", "battery", are not enough for an abstract about something
+ *    else; a sentence needs less than an abstract, which touches more words by chance); a score of
+ *    at least MIN_SCORE; and at least RELATIVE_FLOOR of the best hit's score. A group counts as a
+ *    strong term unless it came from single words that already counted; a phrase of several words
+ *    whose words all matched counts at a word's weight. These are rules of thumb (common practice,
+ *    no source), set on the invented texts of tests/fixtures/claim-texts.ts, the paraphrases and
+ *    off-topic texts of tests/server/claim-match.test.ts and the tuning parts of the claim corpus
+ *    (never its held-out part). `claimCandidates` returns every entry reached with the evidence
+ *    judged, for diagnostics.
  *
- * `terms` of a hit are the index terms that matched; `words` the words of the text (as written, each
- * once, in order of first appearance) whose normalised form is a query term that matched — equal to
- * one of `terms`, or its beginning when matched as a prefix.
+ * `terms` of a hit are the index terms that matched (concept terms left out); `words` the words of
+ * the text (as written, each once, in order of first appearance) whose normalised form is a query
+ * term that matched — equal to one of `terms`, or its beginning when matched as a prefix — or that
+ * belong to a synonym phrase whose group matched (those also in `synonyms`).
  */
 import { COMMON_WORDS, fold, normaliseTerm } from './normalise';
 import { conceptTerm, isConceptTerm, tokensOf, wordKey } from './synonyms';
