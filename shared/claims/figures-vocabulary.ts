@@ -276,16 +276,22 @@ export const MASS_ROLES: readonly RoleWords[] = [
       'wet', 'fuell?ed', 'fully fuell?ed', 'initial', 'starting', 'start', 'launch', 'lift-?off', 'lifts? off (?:at|with)', 'take-?off', 'gross', 'total', 'loaded', 'full',
       'at launch', 'at ignition', 'before the burn',
     ],
-    after: ['wet', 'fuell?ed', 'at launch', 'at lift-?off', 'at the start', 'initially', 'fully loaded', 'loaded', 'in all', 'all told', 'gross', 'total'],
+    after: [
+      '(?:lift-?off|launch|initial|gross|total|wet|fuell?ed|starting|ignition|take-?off) mass', 'wet', 'fuell?ed', 'at launch', 'at lift-?off', 'at the start',
+      'initially', 'fully loaded', 'loaded', 'in all', 'all told', 'gross', 'total',
+    ],
   },
   {
     role: 'dry',
     before: ['dry', 'empty', 'final', 'burn-?out', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert'],
-    after: ['dry', 'empty', 'at burn-?out', 'after the burn', 'when empty', 'at the end'],
+    after: ['(?:dry|empty|final|burn-?out|structural) mass', 'dry', 'empty', 'at burn-?out', 'after the burn', 'when empty', 'at the end'],
   },
   {
     role: 'propellant',
-    before: ['propellant', 'fuel', 'reaction mass', 'xenon', 'krypton', 'argon', 'hydrazine', 'oxidi[sz]er', 'kerosene', 'hydrogen', 'methane', 'water'],
+    before: [
+      'propellants?', 'fuel', 'reaction mass', 'propellant (?:mass|load|loading)', 'mass of (?:propellant|fuel|reaction mass)', 'fuel (?:mass|load)', 'propellant[:=]', 'reaction mass (?:of|is)',
+      '(?:carries|carrying|loaded with|tanks? (?:hold|holds|of)|burns?|burning|expels?|expelling)',
+    ],
     after: [
       '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass)', 'of cold-gas propellant', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
       'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
@@ -355,7 +361,7 @@ export const PROPELLANT_FREE_WORDS = [
   'thermal (?:radiation|recoil|photons?)', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
   'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)',
   'no (?:propellant|reaction mass|exhaust|moving parts|expelled mass|mass is expelled)', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
-  'closed (?:cavity|resonator|system|box|container|frame|vessel|frustum)', 'sealed (?:cavity|resonator|box|unit|container|device|chamber|frustum|drum|housing|case|enclosure)',
+  'closed[- ](?:cavity|resonator|system|box|container|frame|vessel|frustum|loop drive)', '(?:hermetically )?sealed', 'enclosed', 'cavity', 'EM ?drive',
   'inertial (?:propulsion|drive|thrust)', 'field propulsion', 'unidirectional (?:force|thrust)', 'net thrust from inside', 'fuel-?less (?:thruster|drive|propulsion)',
   'pushes? (?:itself|against nothing)', 'self-propell\\w*', 'frustum', 'tapered (?:cavity|resonator|copper)',
   'microwave (?:thruster|drive|cavity|resonator)', 'resonant cavity', 'RF (?:thruster|cavity)', 'gyroscopic (?:thrust|lift|propulsion|drive|thruster)',

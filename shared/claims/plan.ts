@@ -264,7 +264,7 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
     const twoMasses = [wet, dry, prop].filter(Boolean).length >= 2;
     if (!twoMasses) missing.push(!wet && !dry ? 'the masses of the craft with and without its propellant' : 'the propellant mass (or the mass with or without it)');
     if (missing.length) {
-      if (dv || twoMasses || isp || exhaust) needs.push(need('rocket-equation', missing, 'A craft that throws out propellant can change its speed by at most v_e·ln(m0/m1).', uniq([isp, exhaust, wet, dry, prop, dv])));
+      if ([isp, exhaust, wet, dry, prop, dv].filter(Boolean).length >= 2) needs.push(need('rocket-equation', missing, 'A craft that throws out propellant can change its speed by at most v_e·ln(m0/m1).', uniq([isp, exhaust, wet, dry, prop, dv])));
     } else {
       const m0 = (e: (f: Figure) => End): string =>
         wet ? at(wet, e(wet)) : typed(siAt(dry!, e(dry!)) + siAt(prop!, e(prop!)), 'kg');

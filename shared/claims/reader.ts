@@ -424,6 +424,9 @@ function sentenceAround(text: string, start: number, end: number): string {
 /** "warm end", "cold side", "hot junction" just before a temperature outweigh the words after it. */
 const STRONG_SIDE_RE = /(?<!\p{L})(hot|warm|cold|cool)(?:er)?[- ](?:end|side|junction|plate|face|reservoir)s?(?:[^\S\n]+(?:\p{L}+))?[^\S\n]+(?:in|at|of|is|sits at|held at|kept at|runs at|near)?[^\S\n]*(?:(?:a|an|the)[^\S\n]+)?$/iu;
 
+/** End of the words after the last figure that gave it its role ("… 3.2 km/s exhaust velocity"): the next figure's words start after them. */
+let afterRoleEnd = 0;
+
 function roleFromWords(text: string, roles: CompiledRoles, start: number, end: number, floor: number): FigureRole {
   if (roles === ROLES.temperature) {
     const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start));
@@ -432,7 +435,12 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   roles.after.lastIndex = end;
   const a = roles.after.exec(text);
   if (a?.groups) {
-    for (let i = 0; i < roles.groups.length; i++) if (a.groups[`r${i}`] !== undefined) return roles.groups[i].role;
+    for (let i = 0; i < roles.groups.length; i++) {
+      if (a.groups[`r${i}`] !== undefined) {
+        afterRoleEnd = end + a[0].length;
+        return roles.groups[i].role;
+      }
+    }
   }
   const from = windowStart(text, start, floor, BEFORE_WINDOW);
   const slice = text.slice(from, start);
@@ -590,6 +598,7 @@ function isDifference(text: string, start: number, end: number, floor: number): 
  * follow the figures they come from. See the file's comment for what is read.
  */
 export function extractFigures(text: string): Figure[] {
+  afterRoleEnd = 0;
   const tokens = tokenize(text);
   const drafts: Draft[] = [];
   let floor = 0;
@@ -652,6 +661,9 @@ export function extractFigures(text: string): Figure[] {
         if (upperNum !== undefined) upper = differenceQuantity(upperNum, suffix.form.unit);
       } else if (kind === 'duration' && suffix.form.unit === 's' && (ISP_BEFORE_RE.test(text.slice(Math.max(floor, start - BEFORE_WINDOW), start)) || ((ISP_AFTER_RE.lastIndex = end), ISP_AFTER_RE.test(text)))) {
         kind = 'specific-impulse';
+      } else if (kind === 'duration' && /(?:(?<!\p{L})at|@)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 4), start))) {
+        // "at 10 h": a time of day.
+        continue;
       } else if (kind === 'temperature' && suffix.form.ambiguous) {
         // "degrees" alone: a temperature where the sentence speaks of one, else an angle (not a figure).
         if (!TEMPERATURE_CONTEXT_RE.test(sentenceAround(text, start, end))) continue;
@@ -733,7 +745,7 @@ export function extractFigures(text: string): Figure[] {
       }
     }
     drafts.push({ start, end, kind, quantity, upper, role, hedge, derived, assumption, direction });
-    floor = end;
+    floor = Math.max(end, afterRoleEnd);
   }
 
   // "twice the energy it consumes", "a threefold output over its input": a gain in words.
