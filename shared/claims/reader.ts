@@ -40,6 +40,7 @@
  */
 import nlp from 'compromise';
 import { QuantityError, formatQuantity, parseQuantity } from '../worksheet/quantity';
+import { formatPrint } from './print';
 import {
   BARE_CONNECTORS,
   COOLING_MACHINE_WORDS,
@@ -814,6 +815,10 @@ const ABBREVIATIONS_RE = /(?<!\p{L})(?:max|min|approx|nom|avg|ca|cf|e\.g|i\.e|no
 /** Devices whose "COP" is an output-over-input ratio, not a heat pump's. */
 const ELECTRICAL_GAIN_RE = /(?<!\p{L})(?:circuits?|coils?|generators?|alternators?|motors?|batter(?:y|ies)|electrical energy|electricity out|electrical output|magnets?|over-?unity|free energy|zero-?point|ZPE|self-charging|self-running|transformers?|capacitors?|resonators?|electrolys\w*|HHO|oxyhydrogen)(?!\p{L})/iu;
 
+/** A propellant mass fraction: "propellant is 90 % of the mass", "90 % propellant by mass", "a propellant fraction of 85 %". */
+const PROPELLANT_FRACTION_RE =
+  /(?<!\p{L})propellant(?:[^\S\n]+mass)?(?:[^\S\n]+fraction)?[^\S\n]+(?:is|of|=|:|makes up|accounts for)?[^\S\n]*(\d+(?:\.\d+)?)[^\S\n]*%[^\S\n]+of|(\d+(?:\.\d+)?)[^\S\n]*%[^\S\n]+(?:of[^\S\n]+(?:its|the)[^\S\n]+(?:[\p{L}\d-]+[^\S\n]+){0,3})?(?:mass[^\S\n]+)?(?:is[^\S\n]+)?propellant|(?<!\p{L})propellant(?:[^\S\n]+mass)?[^\S\n]+fraction[^\S\n]+(?:of|is|=)[^\S\n]*(\d+(?:\.\d+)?)[^\S\n]*%/iu;
+
 const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|lander|probe|satellite|CubeSat|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines? (?:fire|burn))(?!\p{L})/iu;
 
 /** Roles the words leave open, read from the other figures (see the file's comment). */
@@ -830,6 +835,26 @@ function rolesByContext(text: string, drafts: Draft[]): void {
     if (named.every((d) => d.role === 'in')) open[0].role = 'out';
     else if (named.every((d) => d.role === 'out')) open[0].role = 'in';
   }
+  // "propellant is 90 % of the vehicle's mass", "90 % propellant by mass": the propellant from a fraction.
+  const fraction = PROPELLANT_FRACTION_RE.exec(text);
+  const massDrafts = drafts.filter((d) => d.kind === 'mass');
+  const whole = massDrafts.length === 1 ? massDrafts[0] : massDrafts.find((d) => d.role === null || d.role === 'wet');
+  if (fraction && whole && !massDrafts.some((d) => d !== whole && d.role === 'propellant')) {
+    const p = Number(fraction[1] ?? fraction[2] ?? fraction[3]) / 100;
+    const m = siOf(whole);
+    if (p > 0 && p < 1 && m !== null) {
+      whole.role = 'wet';
+      drafts.splice(drafts.indexOf(whole) + 1, 0, {
+        start: Math.min(whole.start, fraction.index),
+        end: Math.max(whole.end, fraction.index + fraction[0].length),
+        kind: 'mass',
+        quantity: typedSi(p * m, 'kg'),
+        role: 'propellant',
+        derived: `propellant = ${formatPrint(p * 100)} % of ${formatQuantity(m, 'kg')}`,
+      });
+    }
+  }
+
   // A rocket: masses and speeds.
   const masses = drafts.filter((d) => d.kind === 'mass');
   const rocket =
