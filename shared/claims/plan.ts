@@ -109,20 +109,30 @@ export function readSignals(ctx: PlanContext): Signals {
 }
 
 /**
- * The mechanism classes a claim's figures point to, for the matcher: a thrust with a power (or a
- * thrust per power) and no word of propellant → the propellant-free classes; an energy or power
- * out with an input (or none, for a self-running device), or a gain above 1 → the over-unity classes.
+ * The mechanism classes a claim's figures point to, for the matcher:
+ *  - a thrust with a power (or a thrust per power) and no word of propellant → the propellant-free classes;
+ *  - an energy or power out with an input (or none, for a self-running device), or a gain above 1,
+ *    from no heat pump → the over-unity classes;
+ *  - and whatever the text's own words and figures already break, run once without any match:
+ *    the first law → over-unity; the Carnot bound → engines on one reservoir; the photon bound →
+ *    propellant-free thrust.
  */
 export function signalledClasses(figures: Figure[], text: string): string[] {
   const s = readSignals({ text });
   const has = (kind: FigureKind) => figures.some((f) => f.kind === kind);
-  const out: string[] = [];
-  if (((has('thrust') && has('power')) || has('thrust-per-power')) && !s.propellant) out.push('propellant-free-thrust');
+  const out = new Set<string>();
+  if (((has('thrust') && has('power')) || has('thrust-per-power')) && !s.propellant) out.add('propellant-free-thrust');
   const energyOut = figures.some((f) => (f.kind === 'power' || f.kind === 'energy') && f.role === 'out');
   const energyIn = figures.some((f) => (f.kind === 'power' || f.kind === 'energy') && f.role === 'in');
   const gain = figures.some((f) => f.kind === 'efficiency' && f.si > 1);
-  if ((energyOut && energyIn) || gain) if (!s.heatPump && !s.cooling && !has('thrust')) out.push('over-unity');
-  return out;
+  if ((energyOut && energyIn) || gain) if (!s.heatPump && !s.cooling && !has('thrust')) out.add('over-unity');
+  for (const run of runClaimChecks(figures, { text }).checks) {
+    if (run.finding !== 'breaks') continue;
+    if (run.check === 'first-law') out.add('over-unity');
+    if (run.check === 'carnot') out.add('single-reservoir-engine');
+    if (run.check === 'photon-bound') out.add('propellant-free-thrust');
+  }
+  return [...out];
 }
 
 // ---------------------------------------------------------------------------------------------
