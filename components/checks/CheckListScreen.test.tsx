@@ -1,5 +1,5 @@
 import { screen, within } from '@testing-library/react';
-import { checkList } from '@/shared/checks';
+import { CHECK_NAMES, checkList } from '@/shared/checks';
 import { jsonResponse, mockFetch, renderWithProviders } from '../testing/render';
 import { CheckListScreen } from './CheckListScreen';
 
@@ -16,7 +16,7 @@ describe('CheckListScreen', () => {
     renderWithProviders(<CheckListScreen />);
     const root = screen.getByTestId('screen-checks');
     expect(within(root).getByRole('heading', { level: 1 }).textContent).toBe('Check kit');
-    expect(checkList).toHaveLength(8);
+    expect(checkList).toHaveLength(CHECK_NAMES.length);
     for (const def of checkList) {
       const link = screen.getByTestId(`check-link-${def.name}`);
       expect(link.getAttribute('href')).toBe(`/checks/${def.name}`);
