@@ -51,6 +51,7 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'thrust', unit: 'uN', symbols: micro('N'), words: ['micronewton', 'micronewtons', 'micro-newton', 'micro-newtons'] },
   { kind: 'thrust', unit: 'nN', symbols: ['nN'], words: ['nanonewton', 'nanonewtons'] },
   { kind: 'thrust', unit: 'kN', symbols: ['kN'], words: ['kilonewton', 'kilonewtons'] },
+  { kind: 'thrust', unit: 'MN', symbols: ['MN'], words: ['meganewton', 'meganewtons'] },
   {
     kind: 'thrust',
     unit: 'lbf',
@@ -210,7 +211,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'in',
     before: [
-      '(?:battery|batteries|supply|mains|grid|source|pack|cell|socket|outlet) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|giving|gives)',
+      '(?:battery|batteries|supply|mains|grid|source|pack|cell|socket|outlet|rail|bus|line|adapter|charger) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|giving|gives|gave(?: up)?|gives up)',
+      'meter (?:read|reads|recorded|records|showed|shows|measured|logged)',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied(?: with| by)?', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
       'put in', 'charged (?:with|at)', 'charging at', 'charged', 'feeds?', 'feeding', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
@@ -221,7 +223,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires)',
-      '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power', 'of drive(?: power)?', 'uptake',
+      '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
+      '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
       'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply'],
   },
   {
@@ -233,11 +236,12 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'lights?', 'lighting', 'heats?', 'heating', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
-      'puts', 'put', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
+      'puts', 'put', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
       'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
+      'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the shaft', 'of shaft power', 'of (?:AC |DC |electrical )?electricity', 'on its output terminals',
       'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
   },
 ];
@@ -293,7 +297,8 @@ export const MASS_ROLES: readonly RoleWords[] = [
       '(?:carries|carrying|loaded with|tanks? (?:hold|holds|of)|burns?|burning|expels?|expelling)',
     ],
     after: [
-      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass)', 'of cold-gas propellant', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
+      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass)', 'of cold-gas propellant',
+      'of (?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
       'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
     ],
   },
@@ -302,7 +307,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
 export const SPEED_ROLES: readonly RoleWords[] = [
   {
     role: 'exhaust',
-    before: ['v_?e(?:x|xh)?', 'u_?e', 'c_?e', 'exhaust', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'ion', 'beam', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at'],
+    before: ['v_?e(?:x|xh)?', 'u_?e', 'c_?e', 'exhausts? at', 'exhausts?', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'ion', 'beam', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at'],
     after: ['exhaust', 'jet', 'exhaust velocity', 'exhaust speed'],
   },
   {
@@ -325,7 +330,7 @@ export const HEAT_PUMP_WORDS = [
   'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', '(?:moves?|pumps?|lifts?) heat (?:from|out of|up)',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
-export const COOLING_MACHINE_WORDS = ['refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling'];
+export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling'];
 
 /** Words that make a temperature a difference: before ("ΔT of 20 K") or after ("a 20 K difference"). */
 export const DIFFERENCE_BEFORE = [
@@ -336,7 +341,7 @@ export const DIFFERENCE_BEFORE = [
 ];
 export const DIFFERENCE_AFTER = [
   '(?:temperature )?(?:difference|differential|gradient|drop|rise|lift|span|spread|swing|excursion|delta|split|increase|decrease)s?',
-  '(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)(?: than)?', 'ΔT', 'delta[- ]?T', 'of (?:temperature )?(?:difference|gradient|lift|rise|drop)',
+  '(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)(?: than)?', 'by which', 'ΔT', 'delta[- ]?T', 'of (?:temperature )?(?:difference|gradient|lift|rise|drop)',
   'between', 'apart', 'across', 'of heating', 'of warming', 'of cooling',
 ];
 
@@ -357,7 +362,8 @@ export const PROPELLANT_FREE_WORDS = [
   'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless',
   'without (?:any )?(?:expelling|ejecting|emitting|throwing|shedding|venting)(?: (?:out )?(?:any )?(?:propellant|mass|reaction mass|material|matter|exhaust|gas))?',
   'without (?:any )?(?:propellant|reaction mass|exhaust)', 'nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)', 'photon (?:thruster|rocket|drive|propulsion)',
-  'laser[- ](?:thrusters?|diodes?|light|propulsion|arrays?|bars?|beams?)', 'recoil', 'collimated', 'light (?:alone|only)', 'radiators?',
+  'lasers?', 'laser[- ](?:thrusters?|diodes?|light|propulsion|arrays?|bars?|beams?)', 'photons?', 'beam leaving', 'quantum vacuum', 'virtual particles',
+  'pushes? (?:against|on|off) (?:the )?(?:quantum )?vacuum', 'pushing (?:against|on|off) (?:the )?(?:[\\w-]+ ){0,3}?vacuum', 'recoil', 'collimated', 'light (?:alone|only)', 'radiators?',
   'thermal (?:radiation|recoil|photons?)', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
   'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)',
   'no (?:propellant|reaction mass|exhaust|moving parts|expelled mass|mass is expelled)', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
@@ -366,15 +372,15 @@ export const PROPELLANT_FREE_WORDS = [
   'pushes? (?:itself|against nothing)', 'self-propell\\w*', 'frustum', 'tapered (?:cavity|resonator|copper)',
   'microwave (?:thruster|drive|cavity|resonator)', 'resonant cavity', 'RF (?:thruster|cavity)', 'gyroscopic (?:thrust|lift|propulsion|drive|thruster)',
   'precession (?:drive|thruster|lift)', 'anti-?gravity', 'space drive', 'inertia drive', 'oscillation thruster', 'shuttl\\w+ masses', 'internal masses',
-  'no (?:external )?reaction', 'momentum from nothing', 'lifter', 'Dean drive', 'stationary thruster',
+  'no (?:external )?reaction', 'momentum from nothing', 'stationary thruster',
 ];
 /** A device said to carry and expel propellant: the photon-rocket bound does not apply, the rocket equation does. */
 export const PROPELLANT_WORDS = [
   'propellant', 'xenon', 'krypton', 'argon', 'hydrazine', 'kerosene', 'oxidi[sz]er', 'fuel tanks?', 'exhaust (?:velocity|speed)', 'Isp', 'specific impulse',
   'ion (?:thruster|engine|drive)', 'Hall(?:-effect)? (?:thruster|effect thruster)', 'rocket', 'reaction mass', 'mass flow', 'nozzle', 'ejects?', 'expels?',
   'plasma thruster', 'resistojet', 'arcjet', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
-  'fans?', 'air-breathing', 'solar sails?', '(?:pushed|driven|propelled|illuminated|accelerated) by (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:lasers?|beams?|sunlight|light)',
-  'ground(?:-based)? lasers?', 'laser-pushed', 'beamed', 'tether',
+  'fans?', 'air-breathing', 'solar sails?', 'ion[- ]wind', 'ionic wind', 'corona(?: discharge)?', 'electrohydrodynamic', 'EHD', 'ionocraft', 'ablation', 'ablative', '(?:pushed|driven|propelled|illuminated|accelerated) by (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:lasers?|beams?|sunlight|light)',
+  'ground(?:-based)? lasers?', 'laser-pushed', 'beamed (?:power|energy) from', 'tether',
 ];
 
 /** Phrases that say a device needs no input (the input power is then 0). */
@@ -385,6 +391,7 @@ export const SELF_RUNNING_WORDS = [
   'no (?:external )?input', 'powers? itself', '(?:drawing|draws|consuming|consumes|using|uses|taking|takes) nothing', 'with nothing (?:going )?in',
   'no connection to (?:the )?(?:grid|mains|supply|power)', 'not connected to (?:the )?(?:grid|mains|any (?:supply|source))', 'zero input', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
   'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
+  'with nothing (?:plugged in|connected|attached)(?: to drive it)?', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',
   'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
   'no fuel', 'fuel-?less', 'free energy',
 ];
@@ -429,6 +436,6 @@ export const EFFICIENCY_CHANGE_WORDS = ['by', 'increas\\w*', 'improv\\w*', 'gain
 
 /** Words allowed between "efficiency"/"COP" and a bare number ("an efficiency of 0.62", "COP = 4"). */
 export const BARE_CONNECTORS = [
-  'of', 'is', 'was', 'were', 'be', 'between', 'from', 'ranging from', 'in the range', 'range', 'reaching', 'reached', 'reaches', 'near', 'about', 'around', 'approximately', 'roughly',
+  'of', 'is', 'was', 'were', 'be', 'between', 'from', 'ranging from', 'ranges? from', 'in the range', 'range', 'reaching', 'ca\\.?', 'approx\\.?', 'c\\.', '~', '≈', 'reached', 'reaches', 'near', 'about', 'around', 'approximately', 'roughly',
   'up to', 'above', 'over', 'exceeding', 'as high as', 'equal to', 'rated', 'value', 'measured', 'a', 'an', 'the',
 ];

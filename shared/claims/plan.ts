@@ -79,7 +79,10 @@ const HEAT_ENGINE_RE = compile(HEAT_ENGINE_WORDS);
 const HEAT_PUMP_RE = compile(HEAT_PUMP_WORDS);
 const COOLING_RE = compile(COOLING_MACHINE_WORDS);
 const OVER_UNITY_RE =
-  /(?<!\p{L})(?:over-?unity|overunity|free energy|self-?running|self-?sustaining|self-?charging|perpetual|more (?:energy|power) (?:out )?than|generators?|alternators?|magnet(?:ic)? motors?|motors?|output exceeds|exceeds (?:the|its) input|circuits?|coils?|lamps?|LEDs?|bulbs?|(?:solar|fuel|photovoltaic) cells?|panels?|batter(?:y|ies)|zero-?point|ZPE|vacuum|electrolys\w*|HHO|oxyhydrogen|wheels?|amplifiers?|converters?|inverters?|electrical (?:output|energy|power))(?!\p{L})/iu;
+  /(?<!\p{L})(?:power conversion efficiency|wall-?plug efficiency|conversion efficiency|electrical efficiency|over-?unity|overunity|free energy|self-?running|self-?sustaining|self-?charging|perpetual|more (?:energy|power) (?:out )?than|generators?|alternators?|magnet(?:ic)? motors?|motors?|output exceeds|exceeds (?:the|its) input|circuits?|coils?|lamps?|LEDs?|bulbs?|(?:solar|fuel|photovoltaic) cells?|panels?|batter(?:y|ies)|zero-?point|ZPE|vacuum|electrolys\w*|HHO|oxyhydrogen|wheels?|amplifiers?|converters?|inverters?|electrical (?:output|energy|power))(?!\p{L})/iu;
+const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
+/** Boiler efficiencies on the net (lower) calorific value may exceed 100 % by convention. */
+const NET_CALORIFIC_RE = /(?<!\p{L})(?:condensing|net (?:CV|calorific|heating)|LHV|lower heating value|lower calorific)(?!\p{L})/iu;
 /** A machine that moves heat is said to: cooling words name a fridge or chiller the text may only mention as a load. */
 const COOLING_ACTION_RE = /(?<!\p{L})(?:(?:removes?|extracts?|pumps?|draws?|takes?|moves?|lifts?|rejects?)(?: \S+){0,3} (?:of )?heat|cooling (?:capacity|power|output|load|duty|COP)|refrigeration (?:capacity|effect)|cooling COP)(?!\p{L})/iu;
 
@@ -89,7 +92,10 @@ export interface Signals {
   propellant: boolean;
   heatEngine: boolean;
   heatPump: boolean;
+  /** A machine that cools is said to do so (not only named as a load). */
   cooling: boolean;
+  /** A refrigerator, chiller or cooler is named. */
+  coolingWords: boolean;
   overUnity: boolean;
 }
 
@@ -104,6 +110,7 @@ export function readSignals(ctx: PlanContext): Signals {
     heatEngine: HEAT_ENGINE_RE.test(text),
     heatPump: HEAT_PUMP_RE.test(text),
     cooling: COOLING_RE.test(text) && COOLING_ACTION_RE.test(text),
+    coolingWords: COOLING_RE.test(text),
     overUnity: OVER_UNITY_RE.test(text) || (top !== undefined && OVER_UNITY_CLASSES.includes(top)),
   };
 }
@@ -182,6 +189,50 @@ function heatMoverCop(input: Figure | undefined, output: Figure | undefined, s: 
   };
 }
 
+/** The form of an energy said right after a figure ("35 kW of electricity", "50 kW of useful heat"). */
+function formOf(f: Figure, text: string): string | null {
+  if (f.end === null) return null;
+  const after = text.slice(f.end, f.end + 40).toLowerCase();
+  if (/^[^.;,]{0,25}?(?:heat|thermal)/.test(after)) return 'heat';
+  if (/^[^.;,]{0,25}?(?:electric|electricity|\bdc\b|\bac\b|\bac\b|kwe|we\b)/.test(after)) return 'electric';
+  if (/^[^.;,]{0,25}?(?:shaft|mechanical|work)/.test(after)) return 'mechanical';
+  if (/^[^.;,]{0,25}?(?:signal)/.test(after)) return 'signal';
+  return null;
+}
+
+/**
+ * Several figures on one side: all that goes in is added up (a supply and a signal; counting more in is
+ * kinder to the claim); what comes out is added up only where the text names different forms of it
+ * (electricity and heat), else the largest is taken (a repeated figure is not counted twice).
+ */
+function combine(figs: Figure[], side: 'in' | 'out', text: string): Figure | undefined {
+  const distinct = figs.filter((f, i) => !figs.slice(0, i).some((g) => Math.abs(g.si - f.si) <= 0.01 * Math.max(Math.abs(g.si), Math.abs(f.si))));
+  if (distinct.length <= 1) return distinct[0];
+  let parts = distinct;
+  if (side === 'out') {
+    const forms = distinct.map((f) => formOf(f, text));
+    const allNamed = forms.every((x) => x !== null) && new Set(forms).size === forms.length;
+    if (!allNamed) return [...distinct].sort((a, b) => b.si - a.si)[0];
+  } else {
+    // A derived input (a power from a current and a voltage) that equals the others added up repeats them.
+    parts = distinct.filter((f) => !(f.derived && Math.abs(f.si - distinct.filter((g) => g !== f).reduce((a, g) => a + g.si, 0)) <= 0.01 * f.si));
+  }
+  const si = parts.reduce((a, f) => a + f.si, 0);
+  const up = parts.reduce((a, f) => a + (f.upper?.si ?? f.si), 0);
+  const first = parts[0];
+  const sum: Figure = {
+    ...first,
+    quantity: typed(si, first.unit),
+    si,
+    text: parts.map((f) => f.text).join(' + '),
+    display: parts.map((f) => f.display).join(' + '),
+    derived: `${side === 'in' ? 'all that goes in' : 'all that comes out'}, added up (${parts.map((f) => f.display).join(' + ')})`,
+  };
+  if (parts.some((f) => f.upper)) sum.upper = { quantity: typed(up, first.unit), si: up, display: formatPrint(up) };
+  else delete sum.upper;
+  return sum;
+}
+
 export interface PlanResult {
   plans: Plan[];
   needs: ClaimCheckNeed[];
@@ -200,10 +251,11 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
 
   const power = ofKind(figures, 'power');
   const energy = ofKind(figures, 'energy');
-  const pIn = power.find((f) => f.role === 'in');
-  const pOut = power.find((f) => f.role === 'out');
-  const eIn = energy.find((f) => f.role === 'in');
-  const eOut = energy.find((f) => f.role === 'out');
+  const text = ctx.text ?? '';
+  const pIn = combine(power.filter((f) => f.role === 'in'), 'in', text);
+  const pOut = combine(power.filter((f) => f.role === 'out'), 'out', text);
+  const eIn = combine(energy.filter((f) => f.role === 'in'), 'in', text);
+  const eOut = combine(energy.filter((f) => f.role === 'out'), 'out', text);
   const duration = largest(ofKind(figures, 'duration'));
 
   // ---- Thrust
@@ -303,8 +355,9 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
   const temps = ofKind(figures, 'temperature');
   const efficiency = ofKind(figures, 'efficiency').find((f) => !f.derived);
   // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
-  const movesHeat = s.heatPump || s.cooling || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
-  const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, pOut ?? eOut, s) : undefined;
+  const cooling = s.coolingWords && (s.cooling || COMPRESSOR_RE.test(text) || ofKind(figures, 'cop').length > 0 || temps.length >= 2);
+  const movesHeat = s.heatPump || cooling || (COMPRESSOR_RE.test(text) && !s.overUnity) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
+  const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, pOut ?? eOut, { ...s, cooling }) : undefined;
   const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
   const cop = ofKind(figures, 'cop')[0] ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);
   const engineEfficiency = efficiency && (s.heatEngine || temps.length >= 2) && !(efficiency.si > 1 && temps.length < 2);
@@ -374,6 +427,15 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
         assumptions: [...extra, 'Stored energy: unchanged over the run (the text does not say it ran down).'],
       });
     }
+  } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop && NET_CALORIFIC_RE.test(text)) {
+    needs.push(
+      need(
+        'first-law',
+        ['the efficiency on the gross (higher) calorific value, or the fuel energy and the heat delivered, measured'],
+        'A condensing boiler\'s efficiency on the net (lower) calorific value can exceed 100 % by that convention without more energy out than in.',
+        [efficiency!],
+      ),
+    );
   } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop && !s.overUnity && !s.heatEngine) {
     // "480 % efficient" with nothing said of the machine: a heat pump can say that lawfully.
     needs.push(

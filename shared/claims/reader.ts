@@ -130,12 +130,16 @@ const PLUS_MINUS_RE = /(?:±|\+\/-|\+-)[^\S\n]*$/u;
 
 const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
 const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
+/** An energy efficiency ratio (EER or SEER, in BTU/h of cooling per watt): a cooling COP × 3.412. */
+const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
+/** 1 BTU_IT/h = 0.293 071 1 W (NIST SP 811, Appendix B.8). */
+const BTU_PER_H_IN_W = 0.29307107;
 const COP_WORDS_BEFORE_RE = new RegExp(`(?<!\\p{L})coefficients?[\\s-]+of[\\s-]+performance(?:[^\\S\\n]*\\(COP\\))?${CONNECT}$`, 'iu');
 const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|η(?:_?(?:th|thermal|c|Carnot))?|eta(?:_?(?:th|thermal))?)(?!\\p{L})${CONNECT}$`, 'iu');
 const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})([^\\d.;!?\\n]{0,60})$`, 'iu');
 const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');
 /** "efficiency … 45%": the keyword, then up to 60 characters without digits or a sentence break. */
-const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient)(?!\p{L})([^\d.;!?\n]{0,60})$/iu;
+const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning)(?!\p{L})([^\d.;!?\n]{0,60})$/iu;
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
 const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|cy|cies)(?!\p{L})/iuy;
@@ -152,7 +156,7 @@ const ISP_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})${CO
 const ISP_AFTER_RE = new RegExp(`[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})`, 'uy');
 /** Gains: "1.3 units back for every unit", "three times the energy it takes", "output is 3 times the input". */
 const GAIN_AFTER_RE =
-  /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|work)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input|work|fuel))?(?:[^\S\n]+(?:in|put in|supplied|consumed|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested)|(?<=electricity|input|work|fuel|energy|power)(?!\p{L}))/iuy;
+  /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|work)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input|work|fuel))?(?:[^\S\n]+(?:in|put in|supplied|consumed|used|spent|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested)|(?<=electricity|input|work|fuel|energy|power)(?!\p{L}))/iuy;
 /** "For every unit of electricity we put in, the amplifier gives back 1.3." */
 const GAIN_BEFORE_RE =
   /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
@@ -164,7 +168,7 @@ const FACTOR_BEFORE_RE =
   /(?<!\p{L})(?:output|out|yield|production)[^.;!?\n]{0,40}(?:exceeds?|exceeding|is (?:higher|greater|larger|more) than|surpass\w*|outstrips?)[^.;!?\n]{0,30}(?:input|consumption|supply)[^.;!?\n]{0,20}by (?:a factor of|a ratio of)(?:[^\S\n]+(?:at least|about|roughly|some|nearly|over))?[^\S\n]*$/iu;
 /** "150 % of its input power", "120 % of the energy supplied": an output as a share of the input. */
 const PERCENT_OF_INPUT_RE =
-  /[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|energy (?:in|supplied|consumed|drawn)|power (?:in|supplied|consumed|drawn)|supply|electrical input)(?!\p{L})/iuy;
+  /[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|energy (?:in|supplied|consumed|drawn|fed|put)|power (?:in|supplied|consumed|drawn|fed|put)|supply|electrical input)(?!\p{L})/iuy;
 /** "1.3 W for each watt in", "1.3 J back per joule supplied": a gain written with a unit. */
 const GAIN_PER_UNIT_RE =
   /[^\S\n]*(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+)?(?:(?:back|out|returned)[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(?:watt|joule|kWh|kilowatt-hour|unit|W|J)s?(?!\p{L})/iuy;
@@ -295,7 +299,8 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
   }
   C_SUFFIX_RE.lastIndex = at;
   const cm = C_SUFFIX_RE.exec(text);
-  if (cm && !/^[^\S\n]c[^\S\n]*[.,;]?[^\S\n]*$/.test(text.slice(at, at + cm[0].length + 2)) && /^c/.test(cm[0])) {
+  const speedContext = /(?<!\p{L})(?:cruis\w*|speeds?|velocit\w*|travel\w*|reach\w*|fl(?:y|ies|ying)|moves?|moving|accelerat\w*|goes|going|at)(?!\p{L})[^.;!?\n]{0,30}$/iu.test(text.slice(Math.max(0, at - 50), at).replace(/[-−+]?[\d.,]+$/, ''));
+  if (cm && (/^c/.test(cm[0]) || speedContext) && !/^[^\S\n]c(?:[^\S\n]*\p{L})/u.test(text.slice(at, at + cm[0].length + 2))) {
     return { suffix: { type: 'unit', form: SPEED_OF_LIGHT }, end: at + cm[0].length };
   }
   PERCENT_RE.lastIndex = at;
@@ -306,7 +311,13 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
 
 const SPEED_OF_LIGHT: UnitForm = { kind: 'speed', unit: 'm/s', factor: C_M_PER_S };
 
-const WORD_NUMBER_HINT = /(?<!\p{L})(?:one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|sixteen|seventeen|eighteen|nineteen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|thousand|half|dozen|a quarter)(?!\p{L})/iu;
+const WORD_NUMBER_HINT = /(?<!\p{L})(?:billion|million|quarter|third|tenth|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|sixteen|seventeen|eighteen|nineteen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|thousand|half|dozen|a quarter)(?!\p{L})/iu;
+
+const FRACTION_WORDS_RE = /(?<!\p{L})(half|a quarter|one quarter|three quarters|a third|one third|two thirds|a tenth|one tenth|a hundred|a thousand|a million|a billion|a trillion)(?:[^\S\n]+of)?(?:[^\S\n]+an?)?(?=[^\S\n]+\p{L})/giu;
+const FRACTION_VALUE: Record<string, number> = {
+  half: 0.5, 'a quarter': 0.25, 'one quarter': 0.25, 'three quarters': 0.75, 'a third': 1 / 3, 'one third': 1 / 3, 'two thirds': 2 / 3,
+  'a tenth': 0.1, 'one tenth': 0.1, 'a hundred': 100, 'a thousand': 1000, 'a million': 1e6, 'a billion': 1e9, 'a trillion': 1e12,
+};
 
 /** Numbers in words, through compromise: start, end and value of each. */
 function wordNumbers(text: string): { start: number; end: number; value: number }[] {
@@ -322,7 +333,12 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     const trimmed = raw.replace(/[\s-]+$/u, '');
     out.push({ start: n.offset.start, end: n.offset.start + trimmed.length, value });
   }
-  // "a dozen", "half an hour": compromise leaves these; they are rare in claims with figures.
+  // "half a kilowatt", "a quarter of a kilowatt", "a billion km/h": compromise leaves these.
+  for (const m of text.matchAll(FRACTION_WORDS_RE)) {
+    const value = FRACTION_VALUE[m[1].toLowerCase()];
+    if (value === undefined || out.some((o) => o.start <= m.index! && m.index! < o.end)) continue;
+    out.push({ start: m.index!, end: m.index! + m[0].length, value });
+  }
   return out;
 }
 
@@ -484,7 +500,7 @@ type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; uni
 
 /** "60 % more electrical energy out than in", "30 % more power than it draws": a gain of 1 + p. */
 const PERCENT_MORE_RE =
-  /[^\S\n]*(?:above|over|more than|in excess of|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:electrical|electric)[^\S\n]+)?(?:input|consumption|power in|energy in|supply)(?!\p{L})|[^\S\n]*(?:more|extra)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over)[^\S\n]+(?:(?:it|the device|the unit)[^\S\n]+)?(?:in|input|it (?:takes|uses|consumes|draws)|(?:takes|uses|consumes|draws|is fed|goes in)|(?:the|its)[^\S\n]+(?:input|consumption|supply))(?!\p{L})/iuy;
+  /[^\S\n]*(?:above|over|more than|in excess of|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:electrical|electric)[^\S\n]+)?(?:input|consumption|power in|energy in|supply)(?!\p{L})|[^\S\n]*(?:more|extra)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over)[^\S\n]+(?:(?:it|the|its)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:in|input|takes|uses|consumes|draws|is fed|goes in|consumption|supply)(?!\p{L})/iuy;
 
 /** What a percentage is, by its context. */
 function readPercent(text: string, start: number, end: number, floor: number): PercentReading {
@@ -518,16 +534,23 @@ function readPercent(text: string, start: number, end: number, floor: number): P
 }
 
 /** The kind of a bare number, from the words before it; a gain or ratio from the words after. */
-function bareKind(text: string, start: number, end: number, floor: number): { kind: FigureKind; role?: FigureRole; derived?: string } | null {
+function bareKind(text: string, start: number, end: number, floor: number): { kind: FigureKind; role?: FigureRole; derived?: string; factor?: number } | null {
   const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start);
   if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before)) return { kind: 'cop' };
+  if (EER_BEFORE_RE.test(before)) return { kind: 'cop', role: 'cooling', factor: BTU_PER_H_IN_W, derived: 'COP = EER × 0.293 071 (BTU/h per watt to watts per watt)' };
   if (QE_BEFORE_RE.test(before) && /(?:[=:]|of|is|was|reaching|above|over|exceeding)[^\S\n]*$/i.test(before)) return { kind: 'quantum-efficiency' };
   if (EFFICIENCY_BARE_BEFORE_RE.test(before)) return { kind: 'efficiency' };
   if (RATIO_BEFORE_RE.test(before)) return { kind: 'efficiency', derived: 'a ratio of output to input' };
   if (FACTOR_BEFORE_RE.test(before)) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
   if (POWER_GAIN_BEFORE_RE.test(before) && !/^[^\S\n]*(?:dB|decibels?)(?!\p{L})/iu.test(text.slice(end, end + 12))) {
     const rest = text.slice(end, end + 60);
-    if (/^[^\S\n]*(?:over|above|relative to|compared (?:with|to)|against)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:input|drive|driving|supply|electronics|power in|consumption)/iu.test(rest) || OVER_UNITY_WORDS_RE.test(sentenceAround(text, start, end))) {
+    const sentence = sentenceAround(text, start, end);
+    if (
+      !/(?<!\p{L})(?:amplifiers?|transistors?|antennas?|dB|decibels?|op-?amps?|preamp\w*)(?!\p{L})/iu.test(text) &&
+      (/^[^\S\n]*(?:over|above|relative to|compared (?:with|to)|against)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:input|drive|driving|supply|electronics|power in|consumption)/iu.test(rest) ||
+        OVER_UNITY_WORDS_RE.test(sentence) ||
+        /(?<!\p{L})(?:generators?|motor-?generators?|alternators?)(?!\p{L})/iu.test(sentence))
+    ) {
       return { kind: 'efficiency', derived: 'a power gain over the input' };
     }
   }
@@ -588,7 +611,7 @@ function isDifference(text: string, start: number, end: number, floor: number): 
   if (/^(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)/.test(word)) {
     const rest = text.slice(end + a[0].length, end + a[0].length + 40);
     if (/^(?:warmer|hotter|cooler|colder)/.test(word) && /^[^\S\n]*(?:[,.;:)!?]|and\b|$)/.test(rest)) return true;
-    return /^[^\S\n]*(?:than[^\S\n]+)?(?:(?:the|a|an|its|their)[^\S\n]+)?(?:ambient|room|outside|outdoor|surroundings|environment|air|water|inlet|sink|source|cold|hot|other|freezing|surface|\p{N}|[-−])/iu.test(rest) || /^\s*than/.test(rest);
+    return /^[^\S\n]*(?:than[^\S\n]+)?(?:(?:the|a|an|its|their)[^\S\n]+)?(?:ambient|room|outside|outdoor|surrounding|environment|air|water|inlet|sink|source|cold|hot|other|freezing|surface|\p{N}|[-−])/iu.test(rest) || /^\s*than/.test(rest);
   }
   if (/^between|^apart|^across/.test(word)) return /^[^\S\n]*(?:the|its|two|both|hot|cold|plates|sides|ends|junctions|reservoirs)/i.test(text.slice(end + a[0].length, end + a[0].length + 20));
   return true;
@@ -694,8 +717,8 @@ export function extractFigures(text: string): Figure[] {
         kind = bare.kind;
         role = bare.role;
         derived = bare.derived;
-        quantity = t.num;
-        if (upperNum !== undefined) upper = upperNum;
+        quantity = scaled(t.num, bare.factor);
+        if (upperNum !== undefined) upper = scaled(upperNum, bare.factor);
         // "three times as much heat as the electricity it uses", for a heat pump: a heating COP.
         if (kind === 'efficiency' && derived && HEAT_PUMP_RE.test(sentenceAround(text, start, end))) {
           kind = 'cop';
@@ -818,6 +841,9 @@ const ELECTRICAL_GAIN_RE = /(?<!\p{L})(?:circuits?|coils?|generators?|alternator
 /** A propellant mass fraction: "propellant is 90 % of the mass", "90 % propellant by mass", "a propellant fraction of 85 %". */
 const PROPELLANT_FRACTION_RE =
   /(?<!\p{L})propellant(?:[^\S\n]+mass)?(?:[^\S\n]+fraction)?[^\S\n]+(?:is|of|=|:|makes up|accounts for)?[^\S\n]*(\d+(?:\.\d+)?)[^\S\n]*%[^\S\n]+of|(\d+(?:\.\d+)?)[^\S\n]*%[^\S\n]+(?:of[^\S\n]+(?:its|the)[^\S\n]+(?:[\p{L}\d-]+[^\S\n]+){0,3})?(?:mass[^\S\n]+)?(?:is[^\S\n]+)?propellant|(?<!\p{L})propellant(?:[^\S\n]+mass)?[^\S\n]+fraction[^\S\n]+(?:of|is|=)[^\S\n]*(\d+(?:\.\d+)?)[^\S\n]*%/iu;
+
+/** Between a temperature and a difference that describes it: "−18 °C, a full 50 K below …", "34 °C, 5 K warmer than …". */
+const APPOSITION_RE = /^[\s,;(–—-]*(?:(?:a|an|some|about|roughly|nearly|just|only|full|fully|which is|that is|i\.e\.|or|thus|so|still|at least|at most|over|under)[\s,]+)*$/iu;
 
 const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|lander|probe|satellite|CubeSat|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines? (?:fire|burn))(?!\p{L})/iu;
 
@@ -1045,7 +1071,11 @@ function relate(text: string, drafts: Draft[]): void {
     if (tSi !== null && dSi !== null) {
       // "30 °C below a 25 °C room": the other lies below; "40 degrees above the 20 °C ambient": above;
       // else by the stated temperature's role (hot → the other is colder).
-      const down = diff.direction === 'down' || (diff.direction === undefined && t.role === 'hot');
+      // "held at −18 °C, a full 50 K below the room": the difference describes the stated temperature
+      // itself (said right after it), so the other side lies the other way.
+      const apposition = t.end <= diff.start && APPOSITION_RE.test(text.slice(t.end, diff.start));
+      const said = apposition && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
+      const down = said === 'down' || (said === undefined && t.role === 'hot');
       const other = down ? tSi - dSi : tSi + dSi;
       const anchor = diff.start > t.start ? diff : t;
       insertAfter(anchor, {
@@ -1056,7 +1086,7 @@ function relate(text: string, drafts: Draft[]): void {
         role: down ? 'cold' : 'hot',
         derived: down ? `the colder side = ${formatQuantity(tSi, 'K')} − ${formatQuantity(dSi, 'K')}` : `the hotter side = ${formatQuantity(tSi, 'K')} + ${formatQuantity(dSi, 'K')}`,
         assumption:
-          t.role === null && diff.direction === undefined
+          t.role === null && said === undefined
             ? 'The stated temperature is read as the cold side and the difference is added to it; mark it as hot if it is the hot side.'
             : undefined,
       });
@@ -1090,10 +1120,18 @@ function relate(text: string, drafts: Draft[]): void {
   }
 
   // Powers and energies over a stated run: energy = power × time.
-  const duration = drafts.filter((d) => d.kind === 'duration').sort((a, b) => (siOf(b) ?? 0) - (siOf(a) ?? 0))[0];
-  const tRun = duration ? siOf(duration) : null;
-  if (duration && tRun) {
-    for (const p of drafts.filter((d) => d.kind === 'power' && (d.role === 'in' || d.role === 'out'))) {
+  const durations = drafts.filter((d) => d.kind === 'duration');
+  const longest = [...durations].sort((a, b) => (siOf(b) ?? 0) - (siOf(a) ?? 0))[0];
+  if (longest) {
+    const powers = drafts.filter((d) => d.kind === 'power' && (d.role === 'in' || d.role === 'out'));
+    for (const p of powers) {
+      // Each power over the time said with it ("charged at 2 kW for 5 hours, then discharged at 1.5 kW
+      // for 6 hours"): the nearest duration in its clause, before the next power; else the longest run.
+      const nextPower = powers.find((q) => q.start > p.start);
+      const own = durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && sameClause(d, p) && d.start - p.end < 80);
+      const duration = durations.length > 1 && own ? own : longest;
+      const tRun = siOf(duration);
+      if (!tRun) continue;
       const w = siOf(p);
       if (w === null || (w === 0 && p.role !== 'in')) continue;
       if (drafts.some((d) => d.kind === 'energy' && d.role === p.role && !d.derived)) continue;
