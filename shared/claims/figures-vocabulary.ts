@@ -212,7 +212,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     role: 'in',
     before: [
       '(?:battery|batteries|supply|mains|grid|source|pack|cell|socket|outlet|rail|bus|line|adapter|charger) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|giving|gives|gave(?: up)?|gives up)',
-      'meter (?:read|reads|recorded|records|showed|shows|measured|logged)',
+      'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied(?: with| by)?', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
       'put in', 'charged (?:with|at)', 'charging at', 'charged', 'feeds?', 'feeding', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
@@ -236,12 +236,12 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'lights?', 'lighting', 'heats?', 'heating', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
-      'puts', 'put', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
+      '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts', 'put', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
       'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
-      'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the shaft', 'of shaft power', 'of (?:AC |DC |electrical )?electricity', 'on its output terminals',
+      'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the shaft', 'of shaft power', 'on its output terminals',
       'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
   },
 ];

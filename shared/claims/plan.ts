@@ -261,7 +261,11 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
   // ---- Thrust
   const thrust = ofKind(figures, 'thrust')[0];
   const perPower = ofKind(figures, 'thrust-per-power')[0];
-  const drivePower = pIn ?? power.find((f) => f.role === null) ?? power.find((f) => f.role !== 'out' && f.role !== 'excess') ?? pOut;
+  // The power that drives the thrust: the input nearest the thrust in the text (not a reference lamp's).
+  const thrustAt = ofKind(figures, 'thrust')[0]?.start ?? null;
+  const nearThrust = (fs: Figure[]) => (thrustAt === null ? fs[0] : [...fs].sort((a, b) => Math.abs((a.start ?? 0) - thrustAt) - Math.abs((b.start ?? 0) - thrustAt))[0]);
+  const drivePower =
+    nearThrust(power.filter((f) => f.role === 'in')) ?? power.find((f) => f.role === null) ?? power.find((f) => f.role !== 'out' && f.role !== 'excess') ?? pOut;
   const speeds = ofKind(figures, 'speed');
   const craftSpeed = speeds.find((f) => f.role === null);
   const photonApplies = s.propellantFree && !s.propellant;

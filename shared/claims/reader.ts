@@ -121,14 +121,14 @@ const MULTIPLIER: Record<string, number> = { million: 1e6, M: 1e6, billion: 1e9,
  * that cannot be a thousands separator), then e-notation or × 10^n.
  */
 const NUMBER_RE =
-  /(?<![\p{L}\p{N}_.,/^])([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?!\p{L})|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
+  /(?<![\p{L}\p{N}_.,/^])([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d{1,3}(?:[ \u00A0\u2009\u202F]\d{3})+(?![\d]|[^\S\n]\d)(?:,\d+)?|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?!\p{L})|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
 
 const SUPERSCRIPT_DIGITS: Record<string, string> = { '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-', '⁺': '' };
 
 const LABEL_RE = new RegExp(`(?:(?<!\\p{L})(?:${alt(LABEL_WORDS)})|[§#¶])[^\\S\\n]*$`, 'iu');
 const PLUS_MINUS_RE = /(?:±|\+\/-|\+-)[^\S\n]*$/u;
 
-const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
+const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
 const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
 /** An energy efficiency ratio (EER or SEER, in BTU/h of cooling per watt): a cooling COP × 3.412. */
 const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
@@ -188,6 +188,8 @@ interface CompiledRoles {
   groups: readonly RoleWords[];
   before: RegExp;
   after: RegExp;
+  /** Each group's before-words alone, sticky: which group's words run longest at a place ("battery side" over "battery"). */
+  beforeAt: RegExp[];
 }
 
 function compileRoles(groups: readonly RoleWords[]): CompiledRoles {
@@ -196,6 +198,7 @@ function compileRoles(groups: readonly RoleWords[]): CompiledRoles {
     groups,
     before: new RegExp(`(?<!\\p{L})(?:${named('before')})(?!\\p{L})`, 'giu'),
     after: new RegExp(`[^\\S\\n]*-?[^\\S\\n]*${AFTER_FILLER}(?:${named('after')})(?!\\p{L})`, 'iuy'),
+    beforeAt: groups.map((g) => new RegExp(`(?:${alt(g.before)})(?!\\p{L})`, 'iuy')),
   };
 }
 
@@ -248,7 +251,8 @@ function cleanNumber(m: RegExpExecArray): string {
   let exp: string | undefined = m[4] ?? m[5];
   if (exp !== undefined) exp = exp.replace('−', '-');
   else if (m[6] !== undefined) exp = [...m[6]].map((c) => SUPERSCRIPT_DIGITS[c]).join('');
-  let int = m[2];
+  // Digits grouped by spaces ("1 500", SI style) are one number.
+  let int = m[2].replace(/[ \u00A0\u2009\u202F]/g, '');
   let frac = m[3] ?? '';
   if (/^\d{1,3}(?:,\d{3})+$/.test(int)) int = int.replace(/,/g, '');
   else if (int.includes(',')) {
@@ -330,14 +334,18 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     if (/\d/.test(raw)) continue; // digits are read by NUMBER_RE
     const value = n.number?.num;
     if (typeof value !== 'number' || !Number.isFinite(value)) continue;
+    if (value === 0 && !/(?<!\p{L})(?:zero|nought|naught|nil)(?!\p{L})/iu.test(raw)) continue; // "half an", read as 0
     const trimmed = raw.replace(/[\s-]+$/u, '');
     out.push({ start: n.offset.start, end: n.offset.start + trimmed.length, value });
   }
   // "half a kilowatt", "a quarter of a kilowatt", "a billion km/h": compromise leaves these.
   for (const m of text.matchAll(FRACTION_WORDS_RE)) {
     const value = FRACTION_VALUE[m[1].toLowerCase()];
-    if (value === undefined || out.some((o) => o.start <= m.index! && m.index! < o.end)) continue;
-    out.push({ start: m.index!, end: m.index! + m[0].length, value });
+    if (value === undefined) continue;
+    // Longer than what compromise read there ("half" of "half a newton"): this reading replaces it.
+    const end = m.index! + m[0].length;
+    for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
+    out.push({ start: m.index!, end, value });
   }
   return out;
 }
@@ -464,10 +472,18 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   roles.before.lastIndex = 0;
   let last: RegExpExecArray | null = null;
   for (let m = roles.before.exec(slice); m; m = roles.before.exec(slice)) last = m;
-  if (last?.groups) {
-    for (let i = 0; i < roles.groups.length; i++) if (last.groups[`r${i}`] !== undefined) return roles.groups[i].role;
-  }
-  return null;
+  if (!last) return null;
+  let best: FigureRole = null;
+  let longest = 0;
+  roles.beforeAt.forEach((re, i) => {
+    re.lastIndex = last!.index;
+    const m = re.exec(slice);
+    if (m && m[0].length > longest) {
+      longest = m[0].length;
+      best = roles.groups[i].role;
+    }
+  });
+  return best;
 }
 
 function roleFor(text: string, kind: FigureKind, start: number, end: number, floor: number): FigureRole {
@@ -854,6 +870,14 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   if (drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power')) {
     for (const d of drafts) if (d.kind === 'power' && d.role === null) d.role = 'in';
   }
+  // "35 kW of electricity plus 50 kW of useful heat": the second takes the first's side.
+  const flows = drafts.filter(energyLike);
+  for (let i = 0; i + 1 < flows.length; i++) {
+    const [a, b] = [flows[i], flows[i + 1]];
+    if (a.role !== null && b.role === null && a.kind === b.kind && /^[^\S\n]*(?:of[^\S\n]+[\p{L} -]{0,30}?)?[^\S\n]*(?:,[^\S\n]*)?(?:plus|as well as|along with|together with|and also|on top of)[^\S\n]+$/iu.test(text.slice(a.end, b.start))) {
+      b.role = a.role;
+    }
+  }
   // One side named, one figure left: the other side.
   const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
   const open = drafts.filter((d) => energyLike(d) && d.role === null);
@@ -1128,7 +1152,10 @@ function relate(text: string, drafts: Draft[]): void {
       // Each power over the time said with it ("charged at 2 kW for 5 hours, then discharged at 1.5 kW
       // for 6 hours"): the nearest duration in its clause, before the next power; else the longest run.
       const nextPower = powers.find((q) => q.start > p.start);
-      const own = durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && sameClause(d, p) && d.start - p.end < 80);
+      const prevPower = [...powers].reverse().find((q) => q.start < p.start);
+      const own =
+        durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && sameClause(d, p) && d.start - p.end < 80) ??
+        [...durations].reverse().find((d) => d.end <= p.start && (!prevPower || d.start > prevPower.end) && sameClause(d, p) && p.start - d.end < 60);
       const duration = durations.length > 1 && own ? own : longest;
       const tRun = siOf(duration);
       if (!tRun) continue;
