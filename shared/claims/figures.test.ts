@@ -628,3 +628,57 @@ describe('phrasing families (issue 11)', () => {
     expect(read('It reaches 30 % of the speed of light.')[0].si).toBeCloseTo(0.3 * 299_792_458, 3);
   });
 });
+
+describe('more ways claims are written (issue 11)', () => {
+  const read = (text: string) => {
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    return figures;
+  };
+
+  test('digits grouped by spaces and table rows pasted as text', () => {
+    // NIST SP 811 §10.5.3: digits may be grouped by threes with a space.
+    const f = read('P_in | 1 500 W\nP_out | 1 234,5 W');
+    expect(f.map((x) => [x.role, x.si])).toEqual([['in', 1500], ['out', 1234.5]]);
+    const r = read('COP (cooling) | 1.8');
+    expect(r).toMatchObject([{ kind: 'cop', si: 1.8 }]);
+  });
+
+  test('fractions and large numbers in words', () => {
+    expect(read('It draws a quarter of a kilowatt.')).toMatchObject([{ kind: 'power', si: 250 }]);
+    expect(read('It lifts half a newton per watt.')).toMatchObject([{ kind: 'thrust-per-power', si: 0.5 }]);
+    expect(read('It moves at a billion km/h.')[0].si).toBeCloseTo(1e9 / 3.6, 3);
+    expect(read('It reaches 1.2 billion km/h.')[0].si).toBeCloseTo(1.2e9 / 3.6, 3);
+  });
+
+  test('an EER is a cooling COP in BTU/h per watt', () => {
+    // 1 BTU_IT/h = 0.293 071 1 W (NIST SP 811, Appendix B.8), so EER 11.5 is a COP of 3.370.
+    const [f] = read('Cooling capacity 3.5 kW; EER: 11.5.').filter((x) => x.kind === 'cop');
+    expect(f.role).toBe('cooling');
+    expectRelClose(f.si, 11.5 * 0.2930711, SEVEN);
+  });
+
+  test('a voltage and a current side by side give the power, from the nearest voltage', () => {
+    const f = read('The transformer steps 230 V down to 12 V and delivers 5 A.');
+    expect(f.find((x) => x.kind === 'power')).toMatchObject({ si: 60, role: 'out' });
+    const g = read('Output 230 V / 6.5 A; supply 12 V × 1 A.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['out', 1495], ['in', 12]]);
+  });
+
+  test('a difference said of the stated temperature itself', () => {
+    const f = read('Freezer compartment held at −18 °C, a full 50 K below the room.');
+    expect(f.find((x) => x.kind === 'temperature' && x.derived)).toMatchObject({ role: 'hot', si: expect.closeTo(305.15, 9) });
+    const g = read('The skin sits at 34 °C, 5 K warmer than the surrounding air.');
+    expect(g.find((x) => x.kind === 'temperature' && x.derived)).toMatchObject({ role: 'cold', si: expect.closeTo(302.15, 9) });
+  });
+
+  test('a propellant mass fraction', () => {
+    const f = read('Propellant is 90 % of the 20 t vehicle\'s mass.');
+    expect(f.filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([['wet', 20000], ['dry', 2000], ['propellant', 18000]]);
+  });
+
+  test('each power over the time said with it', () => {
+    const f = read('Charged at 2 kW for 5 hours, then discharged at 1.5 kW for 6 hours.');
+    expect(f.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([['in', 2000 * 5 * 3600], ['out', 1500 * 6 * 3600]]);
+  });
+});

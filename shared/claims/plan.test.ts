@@ -212,3 +212,36 @@ describe('signals for the matcher', () => {
     expect(readSignals({ text: 'without expelling any propellant' })).toMatchObject({ propellantFree: true, propellant: false });
   });
 });
+
+describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
+  const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
+  it.each([
+    'The heat pump uses 1 kW of electricity to deliver 4 kW of heat.',
+    'Heat output 1.5E+3 W from a 4.0E+2 W compressor; source 5 °C, sink 35 °C.',
+    'The beverage cooler removes 2,400 BTU/h from a 35 °F box in a 75 °F room while its compressor draws 200 W.',
+    'The 40 dB power amplifier turns a 10 mW input signal into 100 W of output, drawing 180 W from its 48 V supply.',
+    'The amplifier has a gain of 30 dB.',
+    'An ion-wind lifter (corona discharge in room air) raises 12 gf of payload using 150 W.',
+    'The ion engine produces 236 mN on 6.9 kW with an Isp of 4,100 s.',
+    'Condensing boiler: 108 % efficient (net CV).',
+    'Our 3 kW electric kettle boils 1.5 litres in 2 minutes.',
+    'During the outage our 5 kWh home battery ran the 250 W fridge for 18 hours before cutting out.',
+  ])('"%s" (invented test data) breaks no law', (text) => {
+    expect(breaks(text)).toEqual([]);
+  });
+
+  it('a heat pump given as heat out and electricity in is judged by its Carnot COP', () => {
+    const text = 'Heat output 1.5E+3 W from a 4.0E+2 W compressor; source 5 °C, sink 35 °C (invented test data).';
+    const carnot = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot')!;
+    // COP = 1500/400 = 3.75 against the Carnot heating COP Th/(Th − Tc) = 308.15/30 (NIST SP 811 §4.2.1.1 for the kelvins).
+    expect(out(carnot, 'cop_heating_ratio')).toBeCloseTo(3.75 / (308.15 / 30), 9);
+    expect(carnot.finding).toBe('consistent');
+  });
+
+  it('a supply and a signal going in are added up; outputs of different forms too', () => {
+    const amp = 'The power amplifier turns a 10 mW input signal into 100 W of output, drawing 180 W from its supply (invented test data).';
+    expect(out(runClaimChecks(extractFigures(amp), { text: amp }).checks.find((c) => c.check === 'first-law')!, 'over_unity')).toBeCloseTo(100 / 180.01, 9);
+    const chp = 'The gas engine burns 100 kW of fuel and supplies 35 kW of electricity plus 50 kW of useful heat (invented test data).';
+    expect(out(runClaimChecks(extractFigures(chp), { text: chp }).checks.find((c) => c.check === 'first-law')!, 'over_unity')).toBeCloseTo(0.85, 9);
+  });
+});
