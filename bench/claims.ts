@@ -13,19 +13,9 @@
  * part prints its totals only: nobody changes code to suit a held-out sentence.
  * mariadbd is stopped and the temp dir removed at the end, on error and on Ctrl-C.
  */
-import crypto from 'node:crypto';
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import type { Sequelize } from 'sequelize';
-import { ROOT } from '../server/config';
-import { ensureMariaDbInstalled, freePort, MariaDbServer } from '../server/db/mariadb';
-import { migrateUp } from '../server/db/migrate';
-import { seedIfEmpty } from '../server/db/seed';
-import { seedDemoAccounts } from '../server/db/seed-accounts';
+import type { MariaDbServer } from '../server/db/mariadb';
 import { importEntriesIfEmpty } from '../server/db/seed-entries';
-import { createSequelize } from '../server/db/sequelize';
-import { initModels } from '../server/models';
 import { SearchIndex } from '../server/search';
 import { matchClaim } from '../server/search/claim-match';
 import { signalledClasses } from '../shared/claims/plan';
@@ -35,9 +25,9 @@ import { claims as tuning1 } from '../tests/fixtures/claims-corpus/tuning';
 import { claims as tuning2 } from '../tests/fixtures/claims-corpus/tuning-2';
 import { claims as tuning3 } from '../tests/fixtures/claims-corpus/tuning-3';
 import type { CorpusClaim } from '../tests/fixtures/claims-corpus/types';
+import { CONTENT, startBenchDatabase } from './db';
 import { measureClaim, pct, summarise, type ClaimOutcome, type Matched } from './claims/measure';
 
-const CONTENT = path.join(ROOT, 'content');
 /** The tuning part: every tuning file of the corpus (each written without reading the code). */
 const tuning: CorpusClaim[] = [...tuning1, ...tuning2, ...tuning3];
 /** Issue 11's aims on the held-out part. */
@@ -94,17 +84,8 @@ function printPart(name: string, outcomes: ClaimOutcome[], ms: number, withAims:
 
 async function main() {
   const t0 = performance.now();
-  const bins = ensureMariaDbInstalled(say);
-  db = new MariaDbServer({ baseDir: fs.mkdtempSync(path.join(os.tmpdir(), 'cw-bench-claims-')), port: await freePort() });
-  db.initialise(bins.installDb);
-  await db.start(bins.mariadbd);
-  const cfg = { host: '127.0.0.1', port: db.port, name: 'cw_claims', user: 'cw_claims', password: crypto.randomBytes(12).toString('hex') };
-  await db.provision({ database: cfg.name, user: cfg.user, password: cfg.password });
-  sequelize = createSequelize(cfg);
-  initModels(sequelize);
-  await migrateUp(sequelize);
-  await seedIfEmpty(sequelize, CONTENT);
-  await seedDemoAccounts(sequelize, CONTENT, 'development');
+  const started = await startBenchDatabase('claims', say, (server) => (db = server));
+  sequelize = started.sequelize;
   const entries = await importEntriesIfEmpty(sequelize, CONTENT);
   const index = new SearchIndex({ refreshMs: 0 });
   await index.ready();

@@ -20,22 +20,17 @@
  * mariadbd is stopped and the temp dir removed at the end, on error and on Ctrl-C.
  */
 import { fork, spawn, type ChildProcess } from 'node:child_process';
-import crypto from 'node:crypto';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import autocannon from 'autocannon';
 import type { Sequelize } from 'sequelize';
-import { ROOT } from '../server/config';
-import { ensureMariaDbInstalled, freePort, MariaDbServer } from '../server/db/mariadb';
-import { migrateUp } from '../server/db/migrate';
-import { seedIfEmpty } from '../server/db/seed';
-import { seedDemoAccounts } from '../server/db/seed-accounts';
-import { createSequelize } from '../server/db/sequelize';
-import { ConservationLaw, Entry, EntryLaw, EntryVersion, initModels, MechanismClass, User } from '../server/models';
+import type { MariaDbServer } from '../server/db/mariadb';
+import { ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass, User } from '../server/models';
 import { SearchIndex } from '../server/search';
 import { normaliseTerm, plainText } from '../server/search/normalise';
 import { entryContentSchema } from '../shared/entries/schema';
+import { startBenchDatabase } from './db';
 import { generateLibrary, makeQueries, type BenchQuery } from './search/synthetic';
 
 const ENTRIES = 10_000;
@@ -48,7 +43,6 @@ const AIM_P95_MS = 5;
 const AIM_RATIO = 5;
 const AIM_TYPO_FIRST = 0.9;
 
-const CONTENT = path.join(ROOT, 'content');
 const say = (m: string) => console.log(`search: ${m}`);
 const ms = (t: number) => (t < 10 ? t.toFixed(3) : t.toFixed(1));
 const mb = (b: number) => `${(b / 1024 / 1024).toFixed(1)} MB`;
@@ -181,19 +175,13 @@ async function main() {
   if (!(globalThis as { gc?: unknown }).gc) console.log('(no --expose-gc: heap figures include garbage)');
 
   // 1. The database.
-  const bins = ensureMariaDbInstalled(say);
-  db = new MariaDbServer({ baseDir: fs.mkdtempSync(path.join(os.tmpdir(), 'cw-bench-db-')), port: await freePort() });
-  db.initialise(bins.installDb);
-  await db.start(bins.mariadbd);
-  startWatchdog(db.pid!, db.baseDir);
-  const cfg = { host: '127.0.0.1', port: db.port, name: 'cw_bench', user: 'cw_bench', password: crypto.randomBytes(12).toString('hex') };
-  await db.provision({ database: cfg.name, user: cfg.user, password: cfg.password });
-  sequelize = createSequelize(cfg);
-  initModels(sequelize);
-  await migrateUp(sequelize);
-  await seedIfEmpty(sequelize, CONTENT);
-  await seedDemoAccounts(sequelize, CONTENT, 'development');
-  say(`throwaway MariaDB on 127.0.0.1:${db.port} in ${db.baseDir}, migrated, taxonomy and demo accounts seeded (${((performance.now() - t0) / 1000).toFixed(1)} s)`);
+  const started = await startBenchDatabase('bench', say, (server) => {
+    db = server;
+    startWatchdog(server.pid!, server.baseDir);
+  });
+  const seq = (sequelize = started.sequelize);
+  const cfg = started.cfg;
+  say(`throwaway MariaDB on 127.0.0.1:${started.db.port} in ${started.db.baseDir}, migrated, taxonomy and demo accounts seeded (${((performance.now() - t0) / 1000).toFixed(1)} s)`);
 
   // 2. The synthetic library.
   let t = performance.now();
@@ -202,12 +190,12 @@ async function main() {
   const words = lib.reduce((n, e) => n + (Object.values(e.content).join(' ').match(/\S+/g) ?? []).length, 0);
   say(`generated ${lib.length.toLocaleString('en-US')} SYNTHETIC entries (seeded, valid against entryContentSchema; ${Math.round(words / lib.length)} words each on average) in ${(performance.now() - t).toFixed(0)} ms`);
   t = performance.now();
-  const { classes, laws } = await insertLibrary(sequelize, lib);
+  const { classes, laws } = await insertLibrary(seq, lib);
   say(`inserted them as published entries + versions + law links in one transaction in ${((performance.now() - t) / 1000).toFixed(1)} s`);
 
   // The same text in a bench table with MariaDB's FULLTEXT index.
   t = performance.now();
-  await sequelize.query(
+  await seq.query(
     'CREATE TABLE bench_fulltext (id INT UNSIGNED PRIMARY KEY, slug VARCHAR(80) NOT NULL, title VARCHAR(160) NOT NULL, body MEDIUMTEXT NOT NULL) ENGINE=InnoDB DEFAULT CHARSET=utf8mb4 COLLATE=utf8mb4_unicode_ci',
   );
   const lawName = new Map([...laws.values()].map((l) => [l.slug, l.name]));
@@ -221,11 +209,11 @@ async function main() {
       ].join('\n');
       return [e.n, e.slug, e.title, body];
     });
-    await sequelize.query(`INSERT INTO bench_fulltext (id, slug, title, body) VALUES ${rows.map(() => '(?, ?, ?, ?)').join(', ')}`, { replacements: rows.flat() });
+    await seq.query(`INSERT INTO bench_fulltext (id, slug, title, body) VALUES ${rows.map(() => '(?, ?, ?, ?)').join(', ')}`, { replacements: rows.flat() });
   }
   const tFill = performance.now() - t;
   t = performance.now();
-  await sequelize.query('ALTER TABLE bench_fulltext ADD FULLTEXT INDEX bench_fulltext_ft (title, body)');
+  await seq.query('ALTER TABLE bench_fulltext ADD FULLTEXT INDEX bench_fulltext_ft (title, body)');
   say(`bench_fulltext filled in ${(tFill / 1000).toFixed(1)} s; FULLTEXT(title, body) index built in ${((performance.now() - t) / 1000).toFixed(1)} s`);
 
   // 3. The SearchIndex build.

@@ -4,6 +4,7 @@
  * ("×10⁻²² kg m / s"); logarithmic axes run over whole decades and are labelled 10ⁿ.
  */
 import { scaleLinear, scaleLog } from 'd3-scale';
+import { superscript } from '@/shared/claims/print';
 
 export type ScaleKind = 'linear' | 'log';
 
@@ -21,22 +22,8 @@ export interface Axis {
   factor: string;
 }
 
-const superscripts: Record<string, string> = {
-  '-': '⁻',
-  '0': '⁰',
-  '1': '¹',
-  '2': '²',
-  '3': '³',
-  '4': '⁴',
-  '5': '⁵',
-  '6': '⁶',
-  '7': '⁷',
-  '8': '⁸',
-  '9': '⁹',
-};
-
 export function powerOfTen(exponent: number): string {
-  return `10${String(exponent).replace(/[-0-9]/g, (c) => superscripts[c])}`;
+  return `10${superscript(exponent)}`;
 }
 
 /** Drops floating-point noise from a tick such as 0.30000000000000004. */
