@@ -213,18 +213,18 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     before: [
       '(?:battery|batteries|supply|mains|grid|source|pack|cell|socket|outlet|rail|bus|line|adapter|charger) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|giving|gives|gave(?: up)?|gives up)',
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
-      'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied(?: with| by)?', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
+      'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
       'put in', 'charged (?:with|at)', 'charging at', 'charged', 'feeds?', 'feeding', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
       'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
-      'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'burn(?:s|ed|ing)?', 'dissipat(?:e|es|ed|ing)',
+      'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
       'took', 'turned by', 'by a', 'fuel', 'containing', 'P_?\\{?in\\}?', 'E_?\\{?in\\}?', 'Pin', 'invest(?:s|ed|ing)?', 'gas input', 'fuel input',
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires)',
       '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
-      '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
+      '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
       'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply'],
   },
   {
@@ -233,7 +233,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
       'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
-      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'lights?', 'lighting', 'heats?', 'heating', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
+      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
+      'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats?', 'heating', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
       '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts', 'put', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
@@ -327,7 +328,7 @@ export const QUANTUM_EFFICIENCY_WORDS = [
 /** Words that make "350 % efficient" a heating COP (heat pumps deliver more heat than the work they take). */
 export const HEAT_PUMP_WORDS = [
   'heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
-  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', '(?:moves?|pumps?|lifts?) heat (?:from|out of|up)',
+  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:moves?|pumps?|lifts?) heat (?:from|out of|up)',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
 export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling'];
@@ -392,6 +393,7 @@ export const SELF_RUNNING_WORDS = [
   'no connection to (?:the )?(?:grid|mains|supply|power)', 'not connected to (?:the )?(?:grid|mains|any (?:supply|source))', 'zero input', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
   'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
   'with nothing (?:plugged in|connected|attached)(?: to drive it)?', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',
+  '(?:with )?nothing (?:driving|powering|feeding|turning|running) it', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
   'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
   'no fuel', 'fuel-?less', 'free energy',
 ];
@@ -436,6 +438,7 @@ export const EFFICIENCY_CHANGE_WORDS = ['by', 'increas\\w*', 'improv\\w*', 'gain
 
 /** Words allowed between "efficiency"/"COP" and a bare number ("an efficiency of 0.62", "COP = 4"). */
 export const BARE_CONNECTORS = [
-  'of', 'is', 'was', 'were', 'be', 'between', 'from', 'ranging from', 'ranges? from', 'in the range', 'range', 'reaching', 'ca\\.?', 'approx\\.?', 'c\\.', '~', '≈', 'reached', 'reaches', 'near', 'about', 'around', 'approximately', 'roughly',
+  'of', 'is', 'was', 'were', 'be', 'between', 'from', 'ranging from', 'ranges? from', 'lies', 'lay', 'sits', 'stands', 'varies', 'comes? (?:in )?(?:at|to)',
+  'came (?:in )?(?:at|to)', 'works? out (?:at|to)', 'measured at', 'rated at', 'runs at', 'ran at', 'reached', 'in the range', 'range', 'reaching', 'ca\\.?', 'approx\\.?', 'c\\.', '~', '≈', 'reached', 'reaches', 'near', 'about', 'around', 'approximately', 'roughly',
   'up to', 'above', 'over', 'exceeding', 'as high as', 'equal to', 'rated', 'value', 'measured', 'a', 'an', 'the',
 ];

@@ -80,6 +80,7 @@ const HEAT_PUMP_RE = compile(HEAT_PUMP_WORDS);
 const COOLING_RE = compile(COOLING_MACHINE_WORDS);
 const OVER_UNITY_RE =
   /(?<!\p{L})(?:power conversion efficiency|wall-?plug efficiency|conversion efficiency|electrical efficiency|over-?unity|overunity|free energy|self-?running|self-?sustaining|self-?charging|perpetual|more (?:energy|power) (?:out )?than|generators?|alternators?|magnet(?:ic)? motors?|motors?|output exceeds|exceeds (?:the|its) input|circuits?|coils?|lamps?|LEDs?|bulbs?|(?:solar|fuel|photovoltaic) cells?|panels?|batter(?:y|ies)|zero-?point|ZPE|vacuum|electrolys\w*|HHO|oxyhydrogen|wheels?|amplifiers?|converters?|inverters?|electrical (?:output|energy|power))(?!\p{L})/iu;
+const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|brine|well water|borehole|source temperature|outdoors?)(?!\p{L})/iu;
 const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
 /** Boiler efficiencies on the net (lower) calorific value may exceed 100 % by convention. */
 const NET_CALORIFIC_RE = /(?<!\p{L})(?:condensing|net (?:CV|calorific|heating)|LHV|lower heating value|lower calorific)(?!\p{L})/iu;
@@ -360,7 +361,13 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
   const efficiency = ofKind(figures, 'efficiency').find((f) => !f.derived);
   // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
   const cooling = s.coolingWords && (s.cooling || COMPRESSOR_RE.test(text) || ofKind(figures, 'cop').length > 0 || temps.length >= 2);
-  const movesHeat = s.heatPump || cooling || (COMPRESSOR_RE.test(text) && !s.overUnity) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
+  // Heat delivered by a machine that names an outdoor, ground or brine source: a heat pump.
+  const heatFromSource = HEAT_SOURCE_RE.test(text) && [...power, ...energy].some(
+      (f) =>
+        f.role === 'out' &&
+        (/^[^.;,]{0,30}?(?:heat|heating)/i.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)) || /(?:heat|heating)(?:[^\S\n]+(?:output|delivered|capacity))?[^.;,]{0,12}$/i.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0))),
+    );
+  const movesHeat = s.heatPump || cooling || heatFromSource || (COMPRESSOR_RE.test(text) && !s.overUnity) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
   const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, pOut ?? eOut, { ...s, cooling }) : undefined;
   const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
   const cop = ofKind(figures, 'cop')[0] ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);
@@ -465,6 +472,14 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
       inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(gain!, e(gain!)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
       why: 'The text gives the output as a multiple of the input.',
       assumptions: ['Run on 1 J supplied: the over-unity ratio does not depend on the amount.'],
+    });
+  } else if (efficiency && (efficiency.upper?.si ?? efficiency.si) <= 1 && !s.heatEngine && !movesHeat && temps.length < 2 && !plans.some((p) => p.check === 'carnot')) {
+    plans.push({
+      check: 'first-law',
+      uses: [efficiency],
+      inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(efficiency, e(efficiency)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
+      why: 'An efficiency is the energy got out over the energy put in.',
+      assumptions: ['Run on 1 J supplied: the ratio does not depend on the amount.'],
     });
   } else if (cop && !copForCarnot && cop.si > 1 && temps.length < 2) {
     plans.push({

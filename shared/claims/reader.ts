@@ -146,14 +146,20 @@ const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?!(?:less|more|higher|lower|b
 /** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */
 const PERCENT_OF_HEAT_RE =
   /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:light|radiation|power)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
-const SPEED_OF_LIGHT_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light|[^\S\n]*of[^\S\n]+c(?!\p{L})|[^\S\n]*(?:the[^\S\n]+)?light[- ]speed/iuy;
+/** "5 % conversion", "61 % net", ", 25 %, leaves as shaft work": a share turned into work or electricity. */
+const SHARE_AS_WORK_RE =
+  /[^\S\n]*(?:(?:net|gross|conversion|thermal|electrical|electric|overall|cycle|first-law|brake)(?!\p{L})|[,)]?[^\S\n]*(?:leaves|comes out|emerges|is delivered|is returned|appears|ends up)[^\S\n]+as[^\S\n]+(?:useful[^\S\n]+)?(?:shaft[^\S\n]+|mechanical[^\S\n]+|electrical[^\S\n]+)?(?:work|electricity|power|motion))/iuy;
+const SPEED_OF_LIGHT_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light|[^\S\n]*of[^\S\n]+c(?!\p{L})|[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?light[- ]speed/iuy;
 const TEMPERATURE_CONTEXT_RE = /(?<!\p{L})(?:temperatures?|heat(?:ed|s|ing)?|hot|hotter|warm(?:er|s|ed)?|cold|colder|cool(?:er|s|ed)?|ambient|boil\w*|freez\w*|Celsius|Fahrenheit|thermal|room|outdoor|outside|air|water|collector)(?!\p{L})/iu;
 const HEAT_PUMP_RE = new RegExp(`(?<!\\p{L})(?:${alt(HEAT_PUMP_WORDS)})(?!\\p{L})`, 'iu');
 const COOLING_MACHINE_RE = new RegExp(`(?<!\\p{L})(?:${alt(COOLING_MACHINE_WORDS)})(?!\\p{L})`, 'iu');
 const DIFF_BEFORE_RE = new RegExp(`(?<![\\p{L}])(?:${alt(DIFFERENCE_BEFORE)})(?!\\p{L})(?:[^\\S\\n]*(?:[=:≈~]|of|is|was|by|about|around|only|just|a|an|some|up to|nearly|roughly|approximately|just over|just under|over|under))*[^\\S\\n]*$`, 'iu');
 const DIFF_AFTER_RE = new RegExp(`[^\\S\\n]*(?:\\)[^\\S\\n]*)?(?:(?:temperature|thermal|of|the)[^\\S\\n]+){0,2}(?:${alt(DIFFERENCE_AFTER)})(?!\\p{L})`, 'iuy');
 const ISP_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})${CONNECT}$`, 'u');
-const ISP_AFTER_RE = new RegExp(`[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})`, 'uy');
+const ISP_AFTER_RE = new RegExp(
+  `[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})|(?:-|[^\\S\\n]+)(?:[\\p{L}-]+[^\\S\\n]+){0,2}?(?:engines?|thrusters?|rocket motors?|motors?)(?!\\p{L})`,
+  'iuy',
+);
 /** Gains: "1.3 units back for every unit", "three times the energy it takes", "output is 3 times the input". */
 const GAIN_AFTER_RE =
   /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|work)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input|work|fuel))?(?:[^\S\n]+(?:in|put in|supplied|consumed|used|spent|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested)|(?<=electricity|input|work|fuel|energy|power)(?!\p{L}))/iuy;
@@ -168,7 +174,7 @@ const FACTOR_BEFORE_RE =
   /(?<!\p{L})(?:output|out|yield|production)[^.;!?\n]{0,40}(?:exceeds?|exceeding|is (?:higher|greater|larger|more) than|surpass\w*|outstrips?)[^.;!?\n]{0,30}(?:input|consumption|supply)[^.;!?\n]{0,20}by (?:a factor of|a ratio of)(?:[^\S\n]+(?:at least|about|roughly|some|nearly|over))?[^\S\n]*$/iu;
 /** "150 % of its input power", "120 % of the energy supplied": an output as a share of the input. */
 const PERCENT_OF_INPUT_RE =
-  /[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|energy (?:in|supplied|consumed|drawn|fed|put)|power (?:in|supplied|consumed|drawn|fed|put)|supply|electrical input)(?!\p{L})/iuy;
+  /[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|(?:energy|power) (?:in|supplied|consumed|drawn|fed|put|(?:it|they) (?:receives?|takes?|gets?|draws?|consumes?)|received|taken in)|supply|electrical input)(?!\p{L})/iuy;
 /** "1.3 W for each watt in", "1.3 J back per joule supplied": a gain written with a unit. */
 const GAIN_PER_UNIT_RE =
   /[^\S\n]*(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+)?(?:(?:back|out|returned)[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(?:watt|joule|kWh|kilowatt-hour|unit|W|J)s?(?!\p{L})/iuy;
@@ -288,7 +294,7 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
       // "230 V / 6.5 A": a number after the slash starts another figure.
       if (/^[-−+]?\d/.test(text.slice(u.end + c[0].length, u.end + c[0].length + 2))) return { suffix: { type: 'unit', form: u.form }, end: u.end };
       const per = unitAt(text, u.end + c[0].length);
-      if (per && !per.form.factor && !u.form.factor) {
+      if (per && !per.form.factor) {
         if (u.form.kind === 'thrust' && per.form.kind === 'power') return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
         if (u.form.kind === 'power' && per.form.kind === 'mass') return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
       }
@@ -304,7 +310,7 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
   C_SUFFIX_RE.lastIndex = at;
   const cm = C_SUFFIX_RE.exec(text);
   const speedContext = /(?<!\p{L})(?:cruis\w*|speeds?|velocit\w*|travel\w*|reach\w*|fl(?:y|ies|ying)|moves?|moving|accelerat\w*|goes|going|at)(?!\p{L})[^.;!?\n]{0,30}$/iu.test(text.slice(Math.max(0, at - 50), at).replace(/[-−+]?[\d.,]+$/, ''));
-  if (cm && (/^c/.test(cm[0]) || speedContext) && !/^[^\S\n]c(?:[^\S\n]*\p{L})/u.test(text.slice(at, at + cm[0].length + 2))) {
+  if (cm && (/^c/.test(cm[0]) || speedContext)) {
     return { suffix: { type: 'unit', form: SPEED_OF_LIGHT }, end: at + cm[0].length };
   }
   PERCENT_RE.lastIndex = at;
@@ -384,9 +390,16 @@ function tokenize(text: string): NumberToken[] {
     tokens.push({ start, numEnd, end, num: value, suffix, skip, plusMinus: PLUS_MINUS_RE.test(before), consumed: false, words });
   };
   for (let m = NUMBER_RE.exec(text); m; m = NUMBER_RE.exec(text)) push(m.index, m.index + m[0].length, cleanNumber(m), false);
+  // "an hour and a half", "a day and a half": one and a half of the unit.
+  for (const m of text.matchAll(/(?<!\p{L})(?:an?|one)[^\S\n]+(hour|day|week|month|year|minute)[^\S\n]+and[^\S\n]+a[^\S\n]+half(?!\p{L})/giu)) {
+    const unit = unitAt(text, m.index! + m[0].indexOf(m[1]) - 1);
+    if (!unit) continue;
+    tokens.push({ start: m.index!, numEnd: m.index!, end: m.index! + m[0].length, num: '1.5', suffix: { type: 'unit', form: unit.form }, skip: false, plusMinus: false, consumed: false, words: true });
+  }
   // "for an hour", "over a day": one of the unit.
   for (const m of text.matchAll(/(?<=(?:for|over|in|during|within|after|across|lasting|running)[^\S\n]+)(?:an?|one)(?=[^\S\n]+(?:full[^\S\n]+|whole[^\S\n]+|single[^\S\n]+)?(?:hour|day|week|month|year|minute)(?!\p{L}))/giu)) {
     if (tokens.some((t) => t.start <= m.index! && m.index! < t.end)) continue;
+    if (/^[^\S\n]+(?:hour|day|week|month|year|minute)[^\S\n]+and[^\S\n]+a[^\S\n]+half/iu.test(text.slice(m.index! + m[0].length))) continue;
     const gap = /^[^\S\n]+(?:(?:full|whole|single)[^\S\n]+)?/u.exec(text.slice(m.index! + m[0].length))![0];
     push(m.index!, m.index! + m[0].length + gap.length - 1, '1', true);
   }
@@ -456,6 +469,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   if (roles === ROLES.temperature) {
     const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start));
     if (strong) return /^(?:hot|warm)/i.test(strong[1]) ? 'hot' : 'cold';
+    // "the heat it draws from 25 °C room air": where the heat comes from is the hot side.
+    if (/(?<!\p{L})(?:heat|energy)(?:[^\S\n]+(?:it|that it|they))?[^\S\n]+(?:draws?|takes?|extracts?|absorbs?|gets?|pulls?|harvests?|collects?)[^\S\n]+from[^\S\n]+(?:(?:the|a|an)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
   }
   roles.after.lastIndex = end;
   const a = roles.after.exec(text);
@@ -500,7 +515,7 @@ function roleFor(text: string, kind: FigureKind, start: number, end: number, flo
     if (near) return near[1].toLowerCase() === 'cooling' ? 'cooling' : 'heating';
     const around = text.slice(Math.max(0, start - COP_WINDOW), Math.min(text.length, end + COP_WINDOW));
     if (COP_COOLING_RE.test(around)) return 'cooling';
-    if (COP_HEATING_RE.test(around)) return 'heating';
+    if (COP_HEATING_RE.test(around) || HEAT_PUMP_RE.test(text)) return 'heating';
   }
   return null;
 }
@@ -533,11 +548,13 @@ function readPercent(text: string, start: number, end: number, floor: number): P
   if (PERCENT_MORE_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '', more: true };
   EFFICIENCY_AFTER_RE.lastIndex = end;
   PERCENT_OF_HEAT_RE.lastIndex = end;
-  const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text);
+  SHARE_AS_WORK_RE.lastIndex = end;
+  const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text);
   const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before);
   const efficiency = after || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1]));
   if (!efficiency) return null;
-  const sentence = sentenceAround(text, start, end);
+  // The machine is named anywhere in the claim ("Had our air-to-water unit fitted. … '350 % efficient'").
+  const sentence = text;
   const value = Number(text.slice(start, end).replace(/[^\d.,eE+-]/g, '').replace(',', '.'));
   if (HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
     if (!(value <= 100)) return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump said to be more than 100 % efficient: read as a heating COP (heat delivered over work put in).' };
@@ -590,7 +607,7 @@ function scaled(num: string, factor: number | undefined): string {
 function unitQuantity(num: string, s: Extract<Suffix, { type: 'unit' }>): { kind: FigureKind; quantity: string } {
   if (s.per) {
     const kind: FigureKind = s.form.kind === 'thrust' ? 'thrust-per-power' : 'specific-power';
-    return { kind, quantity: `${num} ${s.form.unit} / ${s.per.unit}` };
+    return { kind, quantity: `${scaled(num, s.form.factor)} ${s.form.unit} / ${s.per.unit}` };
   }
   return { kind: s.form.kind, quantity: `${scaled(num, s.form.factor)} ${s.form.unit}` };
 }
@@ -626,8 +643,8 @@ function isDifference(text: string, start: number, end: number, floor: number): 
   // "20 °C above ambient", "heated 40 K over room temperature"; "between" only as "20 K between the plates".
   if (/^(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)/.test(word)) {
     const rest = text.slice(end + a[0].length, end + a[0].length + 40);
-    if (/^(?:warmer|hotter|cooler|colder)/.test(word) && /^[^\S\n]*(?:[,.;:)!?]|and\b|$)/.test(rest)) return true;
-    return /^[^\S\n]*(?:than[^\S\n]+)?(?:(?:the|a|an|its|their)[^\S\n]+)?(?:ambient|room|outside|outdoor|surrounding|environment|air|water|inlet|sink|source|cold|hot|other|freezing|surface|\p{N}|[-−])/iu.test(rest) || /^\s*than/.test(rest);
+    if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|and\b|$)/.test(rest)) return true;
+    return /^[^\S\n]*(?:than[^\S\n]+)?(?:(?:the|a|an|its|their)[^\S\n]+)?(?:(?:mean|average|outside|outdoor|surrounding|local|daytime|night-?time|cooling|inlet|room|deep|surface)[^\S\n]+){0,2}(?:ambient|room|outside|outdoor|surrounding|environment|air|water|inlet|sink|source|cold|hot|other|freezing|surface|\p{N}|[-−])/iu.test(rest) || /^\s*than/.test(rest);
   }
   if (/^between|^apart|^across/.test(word)) return /^[^\S\n]*(?:the|its|two|both|hot|cold|plates|sides|ends|junctions|reservoirs)/i.test(text.slice(end + a[0].length, end + a[0].length + 20));
   return true;
@@ -671,7 +688,8 @@ export function extractFigures(text: string): Figure[] {
       } else if (!next.plusMinus && isRangeGap(text, gapStart, next.start, t.start) && (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) && next.suffix) {
         // Two temperatures "between 600 °C and 30 °C" or "from 10 °C to 55 °C" are the two sides, not a range.
         const twoSides =
-          suffixKind(next.suffix) === 'temperature' && !/^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start)) && !isDifference(text, t.start, next.end, floor);
+          (suffixKind(next.suffix) === 'voltage' && !/^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start))) ||
+          (suffixKind(next.suffix) === 'temperature' && !/^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start)) && !isDifference(text, t.start, next.end, floor));
         suffix = next.suffix;
         if (!twoSides) {
           upperNum = next.num;
@@ -793,6 +811,17 @@ export function extractFigures(text: string): Figure[] {
   for (let m = MULTIPLE_WORD_RE.exec(text); m; m = MULTIPLE_WORD_RE.exec(text)) {
     const at = m.index + m[0].length;
     const after = text.slice(at, at + 90);
+    const light = /^[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light(?!\p{L})/iu.exec(after);
+    if (light && !drafts.some((d) => d.start <= m!.index && m!.index < d.end)) {
+      const value = MULTIPLE_VALUE[m[1].toLowerCase().replace('-', '')];
+      if (value) {
+        const d: Draft = { start: m.index, end: at + light[0].length, kind: 'speed', quantity: `${value * C_M_PER_S} m/s`, role: null };
+        const pos = drafts.findIndex((x) => x.start > m!.index);
+        if (pos < 0) drafts.push(d);
+        else drafts.splice(pos, 0, d);
+      }
+      continue;
+    }
     if (!/^[^\S\n]+(?:the|its|as much|as many|more)[^.;!?\n]{0,60}(?:input|consum\w*|draws?|uses?|takes?|supplied|put in|fed|it gets|goes in)/iu.test(after)) continue;
     if (drafts.some((d) => d.start <= m!.index && m!.index < d.end)) continue;
     const value = MULTIPLE_VALUE[m[1].toLowerCase().replace('-', '')];
@@ -874,7 +903,7 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   const flows = drafts.filter(energyLike);
   for (let i = 0; i + 1 < flows.length; i++) {
     const [a, b] = [flows[i], flows[i + 1]];
-    if (a.role !== null && b.role === null && a.kind === b.kind && /^[^\S\n]*(?:of[^\S\n]+[\p{L} -]{0,30}?)?[^\S\n]*(?:,[^\S\n]*)?(?:plus|as well as|along with|together with|and also|on top of)[^\S\n]+$/iu.test(text.slice(a.end, b.start))) {
+    if (a.role !== null && b.role === null && a.kind === b.kind && /^[^\S\n]*(?:(?:of|as)[^\S\n]+[\p{L} -]{0,30}?)?[^\S\n]*(?:,[^\S\n]*)?(?:plus|as well as|along with|together with|and also|on top of|and)[^\S\n]+$/iu.test(text.slice(a.end, b.start))) {
       b.role = a.role;
     }
   }
@@ -1073,7 +1102,8 @@ function relate(text: string, drafts: Draft[]): void {
     const m = SELF_RUNNING_RE.exec(text);
     const hasThrust = drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power');
     const out = drafts.find((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust)));
-    if (m && out && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {
+    const inputUnknown = /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data))?[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text);
+    if (m && out && !inputUnknown && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {
       const start = m.index;
       const end = m.index + m[0].length;
       const draft: Draft = { start, end, kind: 'power', quantity: '0 W', role: 'in', derived: `no input: "${m[0]}"` };
