@@ -233,7 +233,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
       'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
-      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
+      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'logged', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
       'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats?', 'heating', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
@@ -299,7 +299,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
     ],
     after: [
       '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass)', 'of cold-gas propellant',
-      'of (?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
+      'of (?:[\\w-]+ )?(?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
       'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
     ],
   },
@@ -328,7 +328,7 @@ export const QUANTUM_EFFICIENCY_WORDS = [
 /** Words that make "350 % efficient" a heating COP (heat pumps deliver more heat than the work they take). */
 export const HEAT_PUMP_WORDS = [
   'heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
-  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:moves?|pumps?|lifts?) heat (?:from|out of|up)',
+  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:moves?|pumps?|lifts?) heat (?:from|out of|up|through|by)',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
 export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling'];
@@ -337,7 +337,7 @@ export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?
 export const DIFFERENCE_BEFORE = [
   'ΔT', 'Δ T', 'delta[- ]?T', 'dT', 'temperature (?:difference|gradient|drop|rise|lift|span|spread|differential|swing|excursion|change|increase)s?',
   'differences? of', 'differential of', 'gradient of', 'rise of', 'drop of', 'lift of', 'spread of', 'span of', 'increase of', 'swing of', 'change of',
-  'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
+  'lifts? (?:the )?heat (?:by|through)', 'through', 'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
   '(?:colder|cooler|hotter|warmer|lower|higher) than (?:the |its )?(?:[\\w-]+ ){0,3}by', 'differ(?:s|ing)? by', 'apart by', 'separated by', 'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
 ];
 export const DIFFERENCE_AFTER = [
@@ -366,7 +366,8 @@ export const PROPELLANT_FREE_WORDS = [
   'lasers?', 'laser[- ](?:thrusters?|diodes?|light|propulsion|arrays?|bars?|beams?)', 'photons?', 'beam leaving', 'quantum vacuum', 'virtual particles',
   'pushes? (?:against|on|off) (?:the )?(?:quantum )?vacuum', 'pushing (?:against|on|off) (?:the )?(?:[\\w-]+ ){0,3}?vacuum', 'recoil', 'collimated', 'light (?:alone|only)', 'radiators?',
   'thermal (?:radiation|recoil|photons?)', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
-  'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)',
+  'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
+  'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
   'no (?:propellant|reaction mass|exhaust|moving parts|expelled mass|mass is expelled)', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
   'closed[- ](?:cavity|resonator|system|box|container|frame|vessel|frustum|loop drive)', '(?:hermetically )?sealed', 'enclosed', 'cavity', 'EM ?drive',
   'inertial (?:propulsion|drive|thrust)', 'field propulsion', 'unidirectional (?:force|thrust)', 'net thrust from inside', 'fuel-?less (?:thruster|drive|propulsion)',
@@ -393,7 +394,8 @@ export const SELF_RUNNING_WORDS = [
   'no connection to (?:the )?(?:grid|mains|supply|power)', 'not connected to (?:the )?(?:grid|mains|any (?:supply|source))', 'zero input', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
   'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
   'with nothing (?:plugged in|connected|attached)(?: to drive it)?', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',
-  '(?:with )?nothing (?:driving|powering|feeding|turning|running) it', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
+  '(?:with )?nothing (?:driving|powering|feeding|turning|running) it', '(?:turns|spins|runs|keeps going|keeps turning|goes|turning|spinning) (?:on )?by itself',
+  '(?:battery|supply|mains|power|source) (?:is |was |being )?disconnected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
   'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
   'no fuel', 'fuel-?less', 'free energy',
 ];
@@ -406,7 +408,7 @@ export const HARVEST_WORDS = [
 
 /** Nouns after "5K" that make the K a thousand ("5K cycles"), not kelvins. */
 export const THOUSAND_NOUNS = [
-  'cycles?', 'hours?', 'hrs?', 'rpm', 'RPM', 'revolutions?', 'rotations?', 'runs?', 'tests?', 'trials?', 'units?', 'miles?', 'km', 'steps?', 'iterations?',
+  'start(?:s|[–-]stop)?', 'charges?', 'discharges?', 'operations?', 'actuations?', 'revs?', 'kilomet(?:re|er)s?', 'cycles?', 'hours?', 'hrs?', 'rpm', 'RPM', 'revolutions?', 'rotations?', 'runs?', 'tests?', 'trials?', 'units?', 'miles?', 'km', 'steps?', 'iterations?',
   'shots?', 'pulses?', 'seconds?', 'minutes?', 'days?', 'cells?', 'orders?', 'customers?', 'users?', 'dollars?', 'euros?', 'pounds?', 'USD', 'EUR',
   'homes?', 'households?', 'devices?', 'vehicles?', 'cars?', 'operating hours', 'loops?', 'turns?', 'strokes?', 'rounds?', 'samples?', 'subscribers?',
   'watts?', 'W\\b', 'volts?', 'amps?', 'joules?', 'newtons?', 'feet', 'ft',

@@ -105,13 +105,15 @@ export function readSignals(ctx: PlanContext): Signals {
   const classes = ctx.classes ?? [];
   const top = classes[0];
   const withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ');
+  // "no heat pump, no outdoor coil": a machine said not to be one.
+  const notDenied = text.replace(/(?<!\p{L})(?:no|not an?|without an?|isn't an?|is not an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|refrigerators?|chillers?|compressors?)(?!\p{L})/giu, ' ');
   return {
     propellantFree: PROPELLANT_FREE_RE.test(text) || (top !== undefined && PROPELLANT_FREE_CLASSES.includes(top)),
     propellant: PROPELLANT_RE.test(withoutFree),
     heatEngine: HEAT_ENGINE_RE.test(text),
-    heatPump: HEAT_PUMP_RE.test(text),
-    cooling: COOLING_RE.test(text) && COOLING_ACTION_RE.test(text),
-    coolingWords: COOLING_RE.test(text),
+    heatPump: HEAT_PUMP_RE.test(notDenied),
+    cooling: COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied),
+    coolingWords: COOLING_RE.test(notDenied),
     overUnity: OVER_UNITY_RE.test(text) || (top !== undefined && OVER_UNITY_CLASSES.includes(top)),
   };
 }
@@ -362,12 +364,12 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
   // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
   const cooling = s.coolingWords && (s.cooling || COMPRESSOR_RE.test(text) || ofKind(figures, 'cop').length > 0 || temps.length >= 2);
   // Heat delivered by a machine that names an outdoor, ground or brine source: a heat pump.
-  const heatFromSource = HEAT_SOURCE_RE.test(text) && [...power, ...energy].some(
+  const heatFromSource = HEAT_SOURCE_RE.test(text) && !/(?<!\p{L})no[^\S\n]+(?:heat[- ]pump|outdoor (?:coil|unit))/iu.test(text) && [...power, ...energy].some(
       (f) =>
         f.role === 'out' &&
         (/^[^.;,]{0,30}?(?:heat|heating)/i.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)) || /(?:heat|heating)(?:[^\S\n]+(?:output|delivered|capacity))?[^.;,]{0,12}$/i.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0))),
     );
-  const movesHeat = s.heatPump || cooling || heatFromSource || (COMPRESSOR_RE.test(text) && !s.overUnity) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
+  const movesHeat = s.heatPump || cooling || heatFromSource || (COMPRESSOR_RE.test(text) && !s.overUnity && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
   const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, pOut ?? eOut, { ...s, cooling }) : undefined;
   const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
   const cop = ofKind(figures, 'cop')[0] ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);

@@ -142,7 +142,7 @@ const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${a
 const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning)(?!\p{L})([^\d.;!?\n]{0,60})$/iu;
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
-const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|cy|cies)(?!\p{L})/iuy;
+const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)(?!\p{L})/iuy;
 /** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */
 const PERCENT_OF_HEAT_RE =
   /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:light|radiation|power)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
@@ -230,7 +230,7 @@ const SENTENCE_BREAK_RE = /[.!?;](?:\s|$)|\n/g;
 // Pass 1: numbers and what follows them
 
 type Suffix =
-  | { type: 'unit'; form: UnitForm; per?: UnitForm }
+  | { type: 'unit'; form: UnitForm; per?: UnitForm; perCount?: number }
   | { type: 'percent' }
   | null;
 
@@ -288,6 +288,16 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
     // A compound: thrust per power, power per mass; any other compound is not a figure.
     COMPOUND_RE.lastIndex = u.end;
     const c = COMPOUND_RE.exec(text);
+    if (c && /per/i.test(c[0])) {
+      // "1 mN per 100 W": a ratio with a number under it.
+      const under = /^([\d.]+)(?=[^\S\n]*\p{L})/u.exec(text.slice(u.end + c[0].length));
+      if (under) {
+        const per = unitAt(text, u.end + c[0].length + under[1].length);
+        if (per && !per.form.factor && u.form.kind === 'thrust' && per.form.kind === 'power' && Number(under[1]) > 0) {
+          return { suffix: { type: 'unit', form: u.form, per: per.form, perCount: Number(under[1]) }, end: per.end };
+        }
+      }
+    }
     if (c && c[0].trim() !== '-') {
       // "100 W / output: 130 W": a slash between spaces before a word that is no unit separates two items.
       if (/^[^\S\n]+\/[^\S\n]+$/.test(c[0]) && !unitAt(text, u.end + c[0].length)) return { suffix: { type: 'unit', form: u.form }, end: u.end };
@@ -309,7 +319,7 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
   }
   C_SUFFIX_RE.lastIndex = at;
   const cm = C_SUFFIX_RE.exec(text);
-  const speedContext = /(?<!\p{L})(?:cruis\w*|speeds?|velocit\w*|travel\w*|reach\w*|fl(?:y|ies|ying)|moves?|moving|accelerat\w*|goes|going|at)(?!\p{L})[^.;!?\n]{0,30}$/iu.test(text.slice(Math.max(0, at - 50), at).replace(/[-−+]?[\d.,]+$/, ''));
+  const speedContext = /(?<!\p{L})(?:cruis\w*|speeds?|velocit\w*|travel\w*|reach\w*|fl(?:y|ies|ying)|moves?|moving|accelerat\w*|pushed|boosted|driven|goes|going|at|to)(?!\p{L})[^.;!?\n]{0,30}$/iu.test(text.slice(Math.max(0, at - 50), at).replace(/[-−+]?[\d.,]+$/, ''));
   if (cm && (/^c/.test(cm[0]) || speedContext)) {
     return { suffix: { type: 'unit', form: SPEED_OF_LIGHT }, end: at + cm[0].length };
   }
@@ -323,7 +333,7 @@ const SPEED_OF_LIGHT: UnitForm = { kind: 'speed', unit: 'm/s', factor: C_M_PER_S
 
 const WORD_NUMBER_HINT = /(?<!\p{L})(?:billion|million|quarter|third|tenth|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|sixteen|seventeen|eighteen|nineteen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|thousand|half|dozen|a quarter)(?!\p{L})/iu;
 
-const FRACTION_WORDS_RE = /(?<!\p{L})(half|a quarter|one quarter|three quarters|a third|one third|two thirds|a tenth|one tenth|a hundred|a thousand|a million|a billion|a trillion)(?:[^\S\n]+of)?(?:[^\S\n]+an?)?(?=[^\S\n]+\p{L})/giu;
+const FRACTION_WORDS_RE = /(?<!\p{L})(half|a quarter|one quarter|three quarters|a third|one third|two thirds|a tenth|one tenth|a hundred|a thousand|a million|a billion|a trillion)(?:[^\S\n]+of)?(?:[^\S\n]+an?)?(?=[^\S\n]+\p{L}|-\p{L})/giu;
 const FRACTION_VALUE: Record<string, number> = {
   half: 0.5, 'a quarter': 0.25, 'one quarter': 0.25, 'three quarters': 0.75, 'a third': 1 / 3, 'one third': 1 / 3, 'two thirds': 2 / 3,
   'a tenth': 0.1, 'one tenth': 0.1, 'a hundred': 100, 'a thousand': 1000, 'a million': 1e6, 'a billion': 1e9, 'a trillion': 1e12,
@@ -460,7 +470,7 @@ function sentenceAround(text: string, start: number, end: number): string {
 }
 
 /** "warm end", "cold side", "hot junction" just before a temperature outweigh the words after it. */
-const STRONG_SIDE_RE = /(?<!\p{L})(hot|warm|cold|cool)(?:er)?[- ](?:end|side|junction|plate|face|reservoir)s?(?:[^\S\n]+(?:\p{L}+))?[^\S\n]+(?:in|at|of|is|sits at|held at|kept at|runs at|near)?[^\S\n]*(?:(?:a|an|the)[^\S\n]+)?$/iu;
+const STRONG_SIDE_RE = /(?<!\p{L})(hot|warm|cold|cool|sunlit|sunny|heated|shaded|shady|cooled)(?:er)?[- ](?:end|side|junction|plate|face|reservoir|panel)s?(?:[^\S\n]+(?:\p{L}+))?[^\S\n]+(?:in|at|of|is|sits at|held at|kept at|runs at|near)?[^\S\n]*(?:(?:a|an|the)[^\S\n]+)?$/iu;
 
 /** End of the words after the last figure that gave it its role ("… 3.2 km/s exhaust velocity"): the next figure's words start after them. */
 let afterRoleEnd = 0;
@@ -468,7 +478,7 @@ let afterRoleEnd = 0;
 function roleFromWords(text: string, roles: CompiledRoles, start: number, end: number, floor: number): FigureRole {
   if (roles === ROLES.temperature) {
     const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start));
-    if (strong) return /^(?:hot|warm)/i.test(strong[1]) ? 'hot' : 'cold';
+    if (strong) return /^(?:hot|warm|sun|heated)/i.test(strong[1]) ? 'hot' : 'cold';
     // "the heat it draws from 25 °C room air": where the heat comes from is the hot side.
     if (/(?<!\p{L})(?:heat|energy)(?:[^\S\n]+(?:it|that it|they))?[^\S\n]+(?:draws?|takes?|extracts?|absorbs?|gets?|pulls?|harvests?|collects?)[^\S\n]+from[^\S\n]+(?:(?:the|a|an)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
   }
@@ -546,6 +556,9 @@ function readPercent(text: string, start: number, end: number, floor: number): P
   if (PERCENT_OF_INPUT_RE.test(text)) return { kind: 'efficiency', factor: 1, unit: '%' };
   PERCENT_MORE_RE.lastIndex = end;
   if (PERCENT_MORE_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '', more: true };
+  if (/(?<!\p{L})(?:output|out|production|yield)[^.;!?\n]{0,40}(?:exceeds?|exceeding|surpass\w*|is higher than|is greater than|beats?|tops?)[^.;!?\n]{0,40}(?:input|consumption|supply)[^.;!?\n]{0,15}?by[^\S\n]*(?:about|some|roughly|nearly|over|fully)?[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 120), start))) {
+    return { kind: 'efficiency', factor: 0.01, unit: '', more: true };
+  }
   EFFICIENCY_AFTER_RE.lastIndex = end;
   PERCENT_OF_HEAT_RE.lastIndex = end;
   SHARE_AS_WORK_RE.lastIndex = end;
@@ -589,6 +602,8 @@ function bareKind(text: string, start: number, end: number, floor: number): { ki
   }
   GAIN_AFTER_RE.lastIndex = end;
   if (GAIN_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'units out for each unit in' };
+  PERCENT_OF_HEAT_RE.lastIndex = end;
+  if (PERCENT_OF_HEAT_RE.test(text)) return { kind: 'efficiency' };
   if (GAIN_BEFORE_RE.test(text.slice(windowStart(text, start, floor, 160), start))) return { kind: 'efficiency', derived: 'units out for each unit in' };
   TIMES_AFTER_RE.lastIndex = end;
   if (TIMES_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
@@ -607,7 +622,8 @@ function scaled(num: string, factor: number | undefined): string {
 function unitQuantity(num: string, s: Extract<Suffix, { type: 'unit' }>): { kind: FigureKind; quantity: string } {
   if (s.per) {
     const kind: FigureKind = s.form.kind === 'thrust' ? 'thrust-per-power' : 'specific-power';
-    return { kind, quantity: `${scaled(num, s.form.factor)} ${s.form.unit} / ${s.per.unit}` };
+    const n = s.perCount ? String(Number((Number(scaled(num, s.form.factor)) / s.perCount).toPrecision(15))) : scaled(num, s.form.factor);
+    return { kind, quantity: `${n} ${s.form.unit} / ${s.per.unit}` };
   }
   return { kind: s.form.kind, quantity: `${scaled(num, s.form.factor)} ${s.form.unit}` };
 }
@@ -687,7 +703,9 @@ export function extractFigures(text: string): Figure[] {
         next.consumed = true;
       } else if (!next.plusMinus && isRangeGap(text, gapStart, next.start, t.start) && (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) && next.suffix) {
         // Two temperatures "between 600 °C and 30 °C" or "from 10 °C to 55 °C" are the two sides, not a range.
+        const thirdTemperature = suffixKind(next.suffix) === 'temperature' && tokens.some((o) => o !== t && o !== next && !o.skip && o.suffix?.type === 'unit' && o.suffix.form.kind === 'temperature' && !o.suffix.form.ambiguous);
         const twoSides =
+          !thirdTemperature &&
           (suffixKind(next.suffix) === 'voltage' && !/^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start))) ||
           (suffixKind(next.suffix) === 'temperature' && !/^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start)) && !isDifference(text, t.start, next.end, floor));
         suffix = next.suffix;
@@ -712,6 +730,8 @@ export function extractFigures(text: string): Figure[] {
       kind = q.kind;
       quantity = q.quantity;
       if (upperNum !== undefined) upper = unitQuantity(upperNum, suffix).quantity;
+      // "degrees" alone: a temperature where the sentence speaks of one, else an angle (not a figure).
+      if (kind === 'temperature' && suffix.form.ambiguous && !TEMPERATURE_CONTEXT_RE.test(sentenceAround(text, start, end))) continue;
       if (kind === 'temperature' && isDifference(text, start, end, floor)) {
         kind = 'temperature-difference';
         quantity = differenceQuantity(scaled(t.num, suffix.form.factor), suffix.form.unit);
@@ -723,8 +743,6 @@ export function extractFigures(text: string): Figure[] {
         // "at 10 h": a time of day.
         continue;
       } else if (kind === 'temperature' && suffix.form.ambiguous) {
-        // "degrees" alone: a temperature where the sentence speaks of one, else an angle (not a figure).
-        if (!TEMPERATURE_CONTEXT_RE.test(sentenceAround(text, start, end))) continue;
         assumption = '"Degrees" read as degrees Celsius.';
       }
     } else if (suffix?.type === 'percent') {
@@ -898,6 +916,8 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   // A thrust and a power: the power drives it.
   if (drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power')) {
     for (const d of drafts) if (d.kind === 'power' && d.role === null) d.role = 'in';
+    // "emits 8 kW as a collimated beam": what a thruster puts out is what drives it.
+    if (!drafts.some((d) => d.kind === 'power' && d.role === 'in')) for (const d of drafts) if (d.kind === 'power' && d.role === 'out') d.role = 'in';
   }
   // "35 kW of electricity plus 50 kW of useful heat": the second takes the first's side.
   const flows = drafts.filter(energyLike);
@@ -1071,6 +1091,31 @@ function relate(text: string, drafts: Draft[]): void {
     }
   }
   rolesByContext(text, drafts);
+
+  // "every kilowatt fed to it gives four hundred millinewtons": a thrust per power.
+  for (const d of drafts) {
+    if (d.kind !== 'thrust') continue;
+    const m = /(?<!\p{L})(?:every|each|per|a)[^\S\n]+(kilowatt|watt|kW|W|megawatt|MW)(?!\p{L})[^.;!?\n]{0,60}?(?:gives?|yields?|produces?|makes?|delivers?|buys?|brings?|returns?)[^\S\n]+(?:(?:about|roughly|some|nearly|over|at least)[^\S\n]+)?$/iu.exec(text.slice(Math.max(0, d.start - 120), d.start));
+    if (!m) continue;
+    const unit = /^(?:kilowatt|kW)$/i.test(m[1]) ? 'kW' : /^(?:megawatt|MW)$/.test(m[1]) ? 'MW' : 'W';
+    d.kind = 'thrust-per-power';
+    d.quantity = `${d.quantity} / ${unit}`;
+    d.derived = `thrust for each ${unit} of power`;
+  }
+  // "reduces its weight on the scale by 120 g", "reads 40 g lighter": a force, in grams-force.
+  for (const d of drafts) {
+    if (d.kind !== 'mass') continue;
+    const before = text.slice(Math.max(0, d.start - 60), d.start);
+    const after = text.slice(d.end, d.end + 30);
+    if (/(?:weight|reading|reads|scale|balance)[^.;!?\n]{0,40}(?:by|of)[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) || /^[^\S\n]*(?:lighter|heavier|less weight|of (?:lift|weight loss|apparent weight))/iu.test(after)) {
+      const kg = siOf(d);
+      if (kg === null) continue;
+      d.kind = 'thrust';
+      d.quantity = `${Number(kg.toPrecision(15))} kgf`;
+      d.role = null;
+      d.derived = 'a change of weight on a scale, as a force (kilograms-force)';
+    }
+  }
 
   // out = in + excess, when the text gives no output itself.
   for (const kind of ['power', 'energy'] as const) {
