@@ -211,7 +211,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'in',
     before: [
-      '(?:battery|batteries|supply|mains|grid|source|pack|cell|socket|outlet|rail|bus|line|adapter|charger) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|giving|gives|gave(?: up)?|gives up)',
+      '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line|adapter|charger) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|giving|gives|gave(?: up)?|gives up)',
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
@@ -234,7 +234,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
       'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'logged', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
-      'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats?', 'heating', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
+      'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
       '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts', 'put', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
@@ -264,7 +264,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
   {
     role: 'cold',
     before: [
-      'T_?(?:c|cold|C|0|amb)', 'cold', 'colder', 'coldest', 'ambient', 'room', 'sink', 'outside', 'outdoors?', 'river', 'sea', 'seawater', 'lake', 'ocean',
+      'T_?(?:c|cold|C|0|amb)', 'brine', 'ground ?water', 'cold', 'colder', 'coldest', 'ambient', 'room', 'sink', 'outside', 'outdoors?', 'river', 'sea', 'seawater', 'lake', 'ocean',
       'ground', 'environment', 'surroundings', 'atmosphere', 'cooling water', 'ice', 'condenser', 'low-temperature', 'air', 'outside air', 'outdoor air',
       'from', 'freezer', 'fridge', 'inside the fridge', 'cabinet', 'cold store', 'evaporator', 'extract(?:s|ed|ing)? heat from', 'draw(?:s|n|ing)? heat from',
       'well water', 'groundwater', 'borehole', 'winter', 'bottom', 'lower', 'rejects? heat (?:to|at)', 'reject(?:s|ed|ing)?', 'cooled to', 'chilled to',
@@ -308,7 +308,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
 export const SPEED_ROLES: readonly RoleWords[] = [
   {
     role: 'exhaust',
-    before: ['v_?e(?:x|xh)?', 'u_?e', 'c_?e', 'exhausts? at', 'exhausts?', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'ion', 'beam', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at'],
+    before: ['v_?e(?:x|xh)?', 'u_?e', 'c_?e', 'exhausts? at', 'exhausts?', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at'],
     after: ['exhaust', 'jet', 'exhaust velocity', 'exhaust speed'],
   },
   {
@@ -328,7 +328,7 @@ export const QUANTUM_EFFICIENCY_WORDS = [
 /** Words that make "350 % efficient" a heating COP (heat pumps deliver more heat than the work they take). */
 export const HEAT_PUMP_WORDS = [
   'heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
-  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:moves?|pumps?|lifts?) heat (?:from|out of|up|through|by)',
+  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:moves?|pumps?|lifts?) heat',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
 export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling'];
@@ -351,7 +351,7 @@ export const ISP_WORDS = ['I_?sp', 'Isp', 'ISP', 'I sp', 'specific impulses?', '
 
 /** Words that say a device is a heat engine (so an efficiency is a Carnot claim). */
 export const HEAT_ENGINE_WORDS = [
-  'heat engines?', 'engines?', 'turbines?', 'Stirling\\w*', '\\w*motoren?', 'cooling water', 'condenser', 'heat sink', 'hot side', 'cold side', 'reservoirs?',
+  'heat motors?', 'of the heat (?:it|that)', 'heat (?:it|that it) (?:draws|takes|absorbs|collects|gathers)', 'heat engines?', 'engines?', 'turbines?', 'Stirling\\w*', '\\w*motoren?', 'cooling water', 'condenser', 'heat sink', 'hot side', 'cold side', 'reservoirs?',
   'source temperature', 'thermoelectric\\w*', 'thermo-?electric\\w*', 'thermionic', 'thermophotovoltaic\\w*', 'TPV', 'Stirling',
   'Rankine', 'ORC', 'steam', 'heat to (?:work|power|electricity)', 'converts? (?:\\w+ )?heat', 'waste[- ]heat', 'thermal (?:to|into) (?:electric|mechanical)',
   'Seebeck', 'Peltier', 'generators? running on heat', 'heat-driven', 'thermal generator', 'TEG', 'heat recovery', 'power plant', 'power station', 'combustion',

@@ -704,10 +704,10 @@ export function extractFigures(text: string): Figure[] {
       } else if (!next.plusMinus && isRangeGap(text, gapStart, next.start, t.start) && (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) && next.suffix) {
         // Two temperatures "between 600 °C and 30 °C" or "from 10 °C to 55 °C" are the two sides, not a range.
         const thirdTemperature = suffixKind(next.suffix) === 'temperature' && tokens.some((o) => o !== t && o !== next && !o.skip && o.suffix?.type === 'unit' && o.suffix.form.kind === 'temperature' && !o.suffix.form.ambiguous);
+        const dash = /^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start));
         const twoSides =
-          !thirdTemperature &&
-          (suffixKind(next.suffix) === 'voltage' && !/^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start))) ||
-          (suffixKind(next.suffix) === 'temperature' && !/^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start)) && !isDifference(text, t.start, next.end, floor));
+          (suffixKind(next.suffix) === 'voltage' && !dash) ||
+          (!thirdTemperature && suffixKind(next.suffix) === 'temperature' && !dash && !isDifference(text, t.start, next.end, floor));
         suffix = next.suffix;
         if (!twoSides) {
           upperNum = next.num;
@@ -1157,6 +1157,29 @@ function relate(text: string, drafts: Draft[]): void {
       if (at < 0) drafts.push(draft);
       else drafts.splice(at, 0, draft);
       if (out.role === null) out.role = 'out';
+    }
+  }
+
+  // A heat pump's heat out over its work in: its heating COP, as a figure of its own.
+  const denied = /(?<!\p{L})(?:no|not an?|without an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?heat[- ]pumps?(?!\p{L})/iu.test(text);
+  if (HEAT_PUMP_RE.test(text) && !denied && !drafts.some((d) => d.kind === 'cop')) {
+    for (const kind of ['energy', 'power'] as const) {
+      const ins = drafts.filter((d) => d.kind === kind && d.role === 'in' && !d.derived);
+      const outs = drafts.filter((d) => d.kind === kind && d.role === 'out' && !d.derived);
+      if (ins.length !== 1 || outs.length !== 1) continue;
+      const w = siOf(ins[0]);
+      const q = siOf(outs[0]);
+      if (!w || q === null || q <= w) continue;
+      const last = ins[0].start > outs[0].start ? ins[0] : outs[0];
+      insertAfter(last, {
+        start: Math.min(ins[0].start, outs[0].start),
+        end: Math.max(ins[0].end, outs[0].end),
+        kind: 'cop',
+        quantity: String(Number((q / w).toPrecision(12))),
+        role: 'heating',
+        derived: `COP = heat out / work in (${formatQuantity(q, FIGURE_SI_UNIT[kind])} / ${formatQuantity(w, FIGURE_SI_UNIT[kind])})`,
+      });
+      break;
     }
   }
 
