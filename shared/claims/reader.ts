@@ -919,6 +919,16 @@ function rolesByContext(text: string, drafts: Draft[]): void {
     // "emits 8 kW as a collimated beam": what a thruster puts out is what drives it.
     if (!drafts.some((d) => d.kind === 'power' && d.role === 'in')) for (const d of drafts) if (d.kind === 'power' && d.role === 'out') d.role = 'in';
   }
+  // "turns 3 kW of shaft power into 2.7 kW of electricity": the first goes in, the second comes out.
+  const flowsInto = drafts.filter(energyLike);
+  for (let i = 0; i + 1 < flowsInto.length; i++) {
+    const [a, b] = [flowsInto[i], flowsInto[i + 1]];
+    if (a.kind !== b.kind) continue;
+    if (!/^[^.;!?\n]{0,50}?(?<!\p{L})into[^\S\n]+(?:(?:a|an|the|about|some|roughly|up to)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) continue;
+    if (!/(?<!\p{L})(?:turns?|turning|turned|converts?|converting|converted|transforms?|transforming|transformed|changes?|changing|changed|makes?)[^\S\n]+(?:(?:the|its|their|a|an|about|some|roughly|up to)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, a.start - 40), a.start))) continue;
+    a.role = 'in';
+    b.role = 'out';
+  }
   // "35 kW of electricity plus 50 kW of useful heat": the second takes the first's side.
   const flows = drafts.filter(energyLike);
   for (let i = 0; i + 1 < flows.length; i++) {
