@@ -37,6 +37,13 @@
  *     - one temperature and a difference → the other temperature (hot = cold + ΔT, or cold = hot − ΔT).
  *  Numbers after a label ("Figure 2 A", "Section 3.2", "p. 12", "Eq. 4", "§ 3") and years before an
  *  initial ("in 2019 A. N. Other") are not figures.
+ *
+ * Which recogniser: `@microsoft/recognizers-text-number-with-unit` (1.3.1) was tried on the claim
+ * families and left aside: it found no dimension in "3–6 mN", "1.5 kW" or "40 kWh", read "20 pounds of
+ * thrust" as a mass, has no range recogniser in its JavaScript port, and weighs 13 MB with half a second
+ * of first call. `compromise` (14.x, kept up to date, MIT) reads numbers in words well ("three and a
+ * half", "twenty-four") and is used for that alone; units are our vocabulary (figures-vocabulary.ts,
+ * the trade's spellings) converted by mathjs, ranges and relations are ours, as no library reads them.
  */
 import nlp from 'compromise';
 import { QuantityError, formatQuantity, parseQuantity } from '../worksheet/quantity';
