@@ -211,11 +211,11 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'in',
     before: [
-      '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line|adapter|charger) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|giving|gives|gave(?: up)?|gives up)',
+      '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line|adapter|charger) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|gave up|gives up)',
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
-      'put in', 'charged (?:with|at)', 'charging at', 'charged', 'feeds?', 'feeding', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
+      'put in', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
       'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
@@ -233,7 +233,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
       'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
-      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'logged', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
+      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
       'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
@@ -241,7 +241,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
-      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
+      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump)', 'into the (?:battery|grid|load|bank|network|mains|store)(?: bank)?', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
       'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the shaft', 'of shaft power', 'on its output terminals',
       'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
   },
@@ -251,7 +251,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
   {
     role: 'hot',
     before: [
-      'T_?(?:h|hot|H)', 'hot', 'hotter', 'hottest', 'source', 'flames?', 'steam', 'boiler', 'furnace', 'combustion', 'burner', 'heated to', 'high-temperature',
+      'T_?(?:h|hot|H)', 'surface(?: water)?', 'warm surface', '(?:to )?deliver(?:s|ed|ing)?', 'hot', 'hotter', 'hottest', 'source', 'flames?', 'steam', 'boiler', 'furnace', 'combustion', 'burner', 'heated to', 'high-temperature',
       'exhaust', 'waste heat', 'geothermal', 'deliver(?:s|ed|ing)? (?:water |air |heat )?at', 'supply temperature', 'flow temperature', 'output temperature',
       'radiators?', 'underfloor', 'warm', 'warmer', 'warm (?:end|side)', 'to a', 'into a', 'hot water', 'condensing', 'up to', 'to heat', 'heats? (?:\\w+ )?to', 'heating to',
       'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper', 'firing', 'firing temperature',
@@ -264,7 +264,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
   {
     role: 'cold',
     before: [
-      'T_?(?:c|cold|C|0|amb)', 'brine', 'ground ?water', 'cold', 'colder', 'coldest', 'ambient', 'room', 'sink', 'outside', 'outdoors?', 'river', 'sea', 'seawater', 'lake', 'ocean',
+      'T_?(?:c|cold|C|0|amb)', 'brine', 'ground ?water', 'deep(?: water)?', 'bottom water', 'cold', 'colder', 'coldest', 'ambient', 'room', 'sink', 'outside', 'outdoors?', 'river', 'sea', 'seawater', 'lake', 'ocean',
       'ground', 'environment', 'surroundings', 'atmosphere', 'cooling water', 'ice', 'condenser', 'low-temperature', 'air', 'outside air', 'outdoor air',
       'from', 'freezer', 'fridge', 'inside the fridge', 'cabinet', 'cold store', 'evaporator', 'extract(?:s|ed|ing)? heat from', 'draw(?:s|n|ing)? heat from',
       'well water', 'groundwater', 'borehole', 'winter', 'bottom', 'lower', 'rejects? heat (?:to|at)', 'reject(?:s|ed|ing)?', 'cooled to', 'chilled to',
@@ -289,7 +289,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
   {
     role: 'dry',
     before: ['dry', 'empty', 'final', 'burn-?out', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert'],
-    after: ['(?:dry|empty|final|burn-?out|structural) mass', 'dry', 'empty', 'at burn-?out', 'after the burn', 'when empty', 'at the end'],
+    after: ['(?:dry|empty|final|burn-?out|structural) mass', 'dry', 'empty', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end'],
   },
   {
     role: 'propellant',
@@ -298,7 +298,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
       '(?:carries|carrying|loaded with|tanks? (?:hold|holds|of)|burns?|burning|expels?|expelling)',
     ],
     after: [
-      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass)', 'of cold-gas propellant',
+      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass)', 'of (?:that|it|which)(?: being| is| was)? (?:propellant|fuel)', 'of cold-gas propellant',
       'of (?:[\\w-]+ )?(?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
       'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
     ],
@@ -337,7 +337,7 @@ export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?
 export const DIFFERENCE_BEFORE = [
   'ΔT', 'Δ T', 'delta[- ]?T', 'dT', 'temperature (?:difference|gradient|drop|rise|lift|span|spread|differential|swing|excursion|change|increase)s?',
   'differences? of', 'differential of', 'gradient of', 'rise of', 'drop of', 'lift of', 'spread of', 'span of', 'increase of', 'swing of', 'change of',
-  'lifts? (?:the )?heat (?:by|through)', 'through', 'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
+  '(?:pump(?:s|ing)?|lift(?:s|ing)?|rais(?:es|ing)|mov(?:es|ing)) (?:the )?heat(?: up)?(?: by| through| across)?', 'through', 'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
   '(?:colder|cooler|hotter|warmer|lower|higher) than (?:the |its )?(?:[\\w-]+ ){0,3}by', 'differ(?:s|ing)? by', 'apart by', 'separated by', 'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
 ];
 export const DIFFERENCE_AFTER = [
@@ -351,7 +351,7 @@ export const ISP_WORDS = ['I_?sp', 'Isp', 'ISP', 'I sp', 'specific impulses?', '
 
 /** Words that say a device is a heat engine (so an efficiency is a Carnot claim). */
 export const HEAT_ENGINE_WORDS = [
-  'heat motors?', 'of the heat (?:it|that)', 'heat (?:it|that it) (?:draws|takes|absorbs|collects|gathers)', 'heat engines?', 'engines?', 'turbines?', 'Stirling\\w*', '\\w*motoren?', 'cooling water', 'condenser', 'heat sink', 'hot side', 'cold side', 'reservoirs?',
+  'heat motors?', 'thermoacoustic', 'of the heat', 'of the heat (?:it|that)', 'heat (?:it|that it) (?:draws|takes|absorbs|collects|gathers)', 'heat engines?', 'engines?', 'turbines?', 'Stirling\\w*', '\\w*motoren?', 'cooling water', 'condenser', 'heat sink', 'hot side', 'cold side', 'reservoirs?',
   'source temperature', 'thermoelectric\\w*', 'thermo-?electric\\w*', 'thermionic', 'thermophotovoltaic\\w*', 'TPV', 'Stirling',
   'Rankine', 'ORC', 'steam', 'heat to (?:work|power|electricity)', 'converts? (?:\\w+ )?heat', 'waste[- ]heat', 'thermal (?:to|into) (?:electric|mechanical)',
   'Seebeck', 'Peltier', 'generators? running on heat', 'heat-driven', 'thermal generator', 'TEG', 'heat recovery', 'power plant', 'power station', 'combustion',
@@ -360,12 +360,13 @@ export const HEAT_ENGINE_WORDS = [
 
 /** A device said to throw out nothing: the photon-rocket bound applies to its thrust. */
 export const PROPELLANT_FREE_WORDS = [
-  'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless',
+  'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless', 'without (?:spending|using|burning|consuming|expending) (?:any )?(?:propellant|fuel|reaction mass)',
+  '(?:ion(?:ic)? wind|air currents?|convection) (?:cannot|can ?not|can\'t|could not|is not|isn\'t) (?:be )?(?:the )?(?:cause|explanation|source)', 'rul(?:e|es|ed|ing) out (?:ion(?:ic)? wind|air currents?|convection)',
   'without (?:any )?(?:expelling|ejecting|emitting|throwing|shedding|venting)(?: (?:out )?(?:any )?(?:propellant|mass|reaction mass|material|matter|exhaust|gas))?',
   'without (?:any )?(?:propellant|reaction mass|exhaust)', 'nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)', 'photon (?:thruster|rocket|drive|propulsion)',
   'lasers?', 'laser[- ](?:thrusters?|diodes?|light|propulsion|arrays?|bars?|beams?)', 'photons?', 'beam leaving', 'quantum vacuum', 'virtual particles',
   'pushes? (?:against|on|off) (?:the )?(?:quantum )?vacuum', 'pushing (?:against|on|off) (?:the )?(?:[\\w-]+ ){0,3}?vacuum', 'recoil', 'collimated', 'light (?:alone|only)', 'radiators?',
-  'thermal (?:radiation|recoil|photons?)', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
+  'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
   'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
   'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
   'no (?:propellant|reaction mass|exhaust|moving parts|expelled mass|mass is expelled)', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
@@ -395,7 +396,8 @@ export const SELF_RUNNING_WORDS = [
   'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
   'with nothing (?:plugged in|connected|attached)(?: to drive it)?', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',
   '(?:with )?nothing (?:driving|powering|feeding|turning|running) it', '(?:turns|spins|runs|keeps going|keeps turning|goes|turning|spinning) (?:on )?by itself',
-  '(?:battery|supply|mains|power|source) (?:is |was |being )?disconnected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
+  '(?:battery|supply|mains|power|source) (?:is |was |being )?(?:disconnected|taken out|removed|unplugged)', '(?:turning|running|spinning|going) on its own', '(?:battery|supply) (?:taken out|removed)',
+  'nothing connected to it', 'with nothing connected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
   'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
   'no fuel', 'fuel-?less', 'free energy',
 ];

@@ -369,9 +369,11 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
         f.role === 'out' &&
         (/^[^.;,]{0,30}?(?:heat|heating)/i.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)) || /(?:heat|heating)(?:[^\S\n]+(?:output|delivered|capacity))?[^.;,]{0,12}$/i.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0))),
     );
-  const movesHeat = s.heatPump || cooling || heatFromSource || (COMPRESSOR_RE.test(text) && !s.overUnity && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
+  const movesHeat = s.heatPump || cooling || heatFromSource || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
   const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, pOut ?? eOut, { ...s, cooling }) : undefined;
   const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
+  /** Any efficiency or output-over-input ratio the text states (for one at most 1: a consistent balance). */
+  const share = efficiency ?? ofKind(figures, 'efficiency')[0];
   const cop = ofKind(figures, 'cop')[0] ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);
   const engineEfficiency = efficiency && (s.heatEngine || temps.length >= 2) && !(efficiency.si > 1 && temps.length < 2);
   const copForCarnot = cop && (cop.role !== null || s.heatPump || s.cooling || temps.length >= 2 || !s.overUnity);
@@ -475,11 +477,11 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
       why: 'The text gives the output as a multiple of the input.',
       assumptions: ['Run on 1 J supplied: the over-unity ratio does not depend on the amount.'],
     });
-  } else if (efficiency && (efficiency.upper?.si ?? efficiency.si) <= 1 && !s.heatEngine && !movesHeat && temps.length < 2 && !plans.some((p) => p.check === 'carnot')) {
+  } else if (share && (share.upper?.si ?? share.si) <= 1 && !s.heatEngine && !movesHeat && temps.length < 2 && !plans.some((p) => p.check === 'carnot')) {
     plans.push({
       check: 'first-law',
-      uses: [efficiency],
-      inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(efficiency, e(efficiency)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
+      uses: [share],
+      inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(share, e(share)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
       why: 'An efficiency is the energy got out over the energy put in.',
       assumptions: ['Run on 1 J supplied: the ratio does not depend on the amount.'],
     });

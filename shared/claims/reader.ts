@@ -152,7 +152,7 @@ const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_W
 const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)(?!\p{L})/iuy;
 /** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */
 const PERCENT_OF_HEAT_RE =
-  /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:light|radiation|power)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
+  /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:[\p{L}-]+[^\S\n]+)?(?:light|radiation|power|energy)|radiant (?:power|energy|heat)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
 /** "5 % conversion", "61 % net", ", 25 %, leaves as shaft work": a share turned into work or electricity. */
 const SHARE_AS_WORK_RE =
   /[^\S\n]*(?:(?:net|gross|conversion|thermal|electrical|electric|overall|cycle|first-law|brake)(?!\p{L})|[,)]?[^\S\n]*(?:leaves|comes out|emerges|is delivered|is returned|appears|ends up)[^\S\n]+as[^\S\n]+(?:useful[^\S\n]+)?(?:shaft[^\S\n]+|mechanical[^\S\n]+|electrical[^\S\n]+)?(?:work|electricity|power|motion))/iuy;
@@ -162,14 +162,14 @@ const HEAT_PUMP_RE = new RegExp(`(?<!\\p{L})(?:${alt(HEAT_PUMP_WORDS)})(?!\\p{L}
 const COOLING_MACHINE_RE = new RegExp(`(?<!\\p{L})(?:${alt(COOLING_MACHINE_WORDS)})(?!\\p{L})`, 'iu');
 const DIFF_BEFORE_RE = new RegExp(`(?<![\\p{L}])(?:${alt(DIFFERENCE_BEFORE)})(?!\\p{L})(?:[^\\S\\n]*(?:[=:≈~]|of|is|was|by|about|around|only|just|a|an|some|up to|nearly|roughly|approximately|just over|just under|over|under))*[^\\S\\n]*$`, 'iu');
 const DIFF_AFTER_RE = new RegExp(`[^\\S\\n]*(?:\\)[^\\S\\n]*)?(?:(?:temperature|thermal|of|the)[^\\S\\n]+){0,2}(?:${alt(DIFFERENCE_AFTER)})(?!\\p{L})`, 'iuy');
-const ISP_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})${CONNECT}$`, 'u');
+const ISP_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})${CONNECT}$`, 'iu');
 const ISP_AFTER_RE = new RegExp(
-  `[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})|(?:-|[^\\S\\n]+)(?:[\\p{L}-]+[^\\S\\n]+){0,2}?(?:engines?|thrusters?|rocket motors?|motors?)(?!\\p{L})`,
+  `[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})|(?:-|[^\\S\\n]+)(?:[\\p{L}–-]+[^\\S\\n]+){0,2}?(?:engines?|thrusters?|rocket motors?|motors?)(?!\\p{L})`,
   'iuy',
 );
 /** Gains: "1.3 units back for every unit", "three times the energy it takes", "output is 3 times the input". */
 const GAIN_AFTER_RE =
-  /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|work)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input|work|fuel))?(?:[^\S\n]+(?:in|put in|supplied|consumed|used|spent|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested)|(?<=electricity|input|work|fuel|energy|power)(?!\p{L}))/iuy;
+  /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:(?:to|into|at)[^\S\n]+(?:the|its|a)[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input|work|fuel))?(?:[^\S\n]+(?:in|put in|supplied|consumed|used|spent|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested|taken (?:at|from|in) [^.;!?\n]{0,30}|(?:the|its)[^\S\n]+[\p{L}-]+[^\S\n]+(?:takes|uses|draws|consumes|gets|receives))|(?<=electricity|input|work|fuel|energy|power)(?!\p{L}))/iuy;
 /** "For every unit of electricity we put in, the amplifier gives back 1.3." */
 const GAIN_BEFORE_RE =
   /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
@@ -186,8 +186,8 @@ const PERCENT_OF_INPUT_RE =
 const GAIN_PER_UNIT_RE =
   /[^\S\n]*(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+)?(?:(?:back|out|returned)[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(?:watt|joule|kWh|kilowatt-hour|unit|W|J)s?(?!\p{L})/iuy;
 /** Multiples in words: "twice the energy it consumes", "three-fold its input". */
-const MULTIPLE_WORD_RE = /(?<!\p{L})(twice|double|triple|thrice|quadruple|two-?fold|three-?fold|four-?fold|five-?fold|ten-?fold)(?!\p{L})/giu;
-const MULTIPLE_VALUE: Record<string, number> = { twice: 2, double: 2, triple: 3, thrice: 3, quadruple: 4, twofold: 2, threefold: 3, fourfold: 4, fivefold: 5, tenfold: 10 };
+const MULTIPLE_WORD_RE = /(?<!\p{L})(half|twice|double|triple|thrice|quadruple|two-?fold|three-?fold|four-?fold|five-?fold|ten-?fold)(?!\p{L})/giu;
+const MULTIPLE_VALUE: Record<string, number> = { half: 0.5, twice: 2, double: 2, triple: 3, thrice: 3, quadruple: 4, twofold: 2, threefold: 3, fourfold: 4, fivefold: 5, tenfold: 10 };
 /** "a power gain of 2.4": only over an input, or in a text about free energy (not an amplifier's gain in dB). */
 const POWER_GAIN_BEFORE_RE = /(?<!\p{L})(?:power|energy)[^\S\n]+gain(?:[^\S\n]*(?:[=:]|of|is|was|reaching|about|around|approximately|roughly|near|up to|over|above|exceeding))*[^\S\n]*$/iu;
 const OVER_UNITY_WORDS_RE = /(?<!\p{L})(?:over-?unity|free energy|zero-?point|ZPE|vacuum energy|self-?running|perpetual|magnet motor|more energy than)(?!\p{L})/iu;
@@ -223,7 +223,7 @@ const ROLES: Partial<Record<FigureKind, CompiledRoles>> = {
   speed: compileRoles(SPEED_ROLES),
 };
 /** "1.5 kW in, 3 kW out": a bare in/out right after the figure, ending the clause. */
-const IN_OUT_AFTER_RE = /[^\S\n]*(in|out)(?=[^\S\n]*(?:[,;.!?)\]\n]|and\b|$))/iy;
+const IN_OUT_AFTER_RE = /[^\S\n]*(in|out)(?=[^\S\n]*(?:[,;.!?)\]\n]|(?:and|for|from|with|while|against|versus|vs)\b|$))/iy;
 const COP_COOLING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_COOLING)})(?!\\p{L})`, 'iu');
 const COP_HEATING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_HEATING)})(?!\\p{L})`, 'iu');
 const HEDGE_RES = HEDGES.map((h) => ({ hedge: h.hedge, re: new RegExp(`(?:(?<!\\p{L})(?:${alt(h.words.filter((w) => /^\p{L}/u.test(w)))})|${h.words.filter((w) => !/^\p{L}/u.test(w)).map(escapeRe).join('|') || '(?!)'})[^\\S\\n]*$`, 'iu') }));
@@ -365,6 +365,8 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
   for (const m of text.matchAll(FRACTION_WORDS_RE)) {
     const value = FRACTION_VALUE[m[1].toLowerCase()];
     if (value === undefined) continue;
+    // Part of a number compromise read ("two and a half"): leave it.
+    if (out.some((o) => o.start < m.index! && m.index! < o.end)) continue;
     // Longer than what compromise read there ("half" of "half a newton"): this reading replaces it.
     const end = m.index! + m[0].length;
     for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
@@ -412,6 +414,12 @@ function tokenize(text: string): NumberToken[] {
     const unit = unitAt(text, m.index! + m[0].indexOf(m[1]) - 1);
     if (!unit) continue;
     tokens.push({ start: m.index!, numEnd: m.index!, end: m.index! + m[0].length, num: '1.5', suffix: { type: 'unit', form: unit.form }, skip: false, plusMinus: false, consumed: false, words: true });
+  }
+  // "3 kWh each day", "1.8·10⁴ J each minute": a rate over one of the unit.
+  for (const m of text.matchAll(/(?<!\p{L})(?:each|every|per|a)(?=[^\S\n]+(?:day|hour|week|month|year|minute)(?!\p{L}))/giu)) {
+    if (tokens.some((t) => t.start <= m.index! && m.index! < t.end)) continue;
+    if (!/(?<!\p{L})(?:kWh|MWh|Wh|J|kJ|MJ|GJ|BTU|joules?|kilowatt-hours?)[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,4}$/iu.test(text.slice(Math.max(0, m.index! - 40), m.index!))) continue;
+    push(m.index!, m.index! + m[0].length, '1', true);
   }
   // "for an hour", "over a day": one of the unit.
   for (const m of text.matchAll(/(?<=(?:for|over|in|during|within|after|across|lasting|running)[^\S\n]+)(?:an?|one)(?=[^\S\n]+(?:full[^\S\n]+|whole[^\S\n]+|single[^\S\n]+)?(?:hour|day|week|month|year|minute)(?!\p{L}))/giu)) {
@@ -487,8 +495,11 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start));
     if (strong) return /^(?:hot|warm|sun|heated)/i.test(strong[1]) ? 'hot' : 'cold';
     // "the heat it draws from 25 °C room air": where the heat comes from is the hot side.
+    // (see below for power and energy)
     if (/(?<!\p{L})(?:heat|energy)(?:[^\S\n]+(?:it|that it|they))?[^\S\n]+(?:draws?|takes?|extracts?|absorbs?|gets?|pulls?|harvests?|collects?)[^\S\n]+from[^\S\n]+(?:(?:the|a|an)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
   }
+  // "filled a 5 kWh battery", "charged the 10 kWh pack": what is filled is what came out.
+  if (roles === ROLES.power && /(?<!\p{L})(?:fill(?:s|ed|ing)?|charg(?:es|ed|ing)|tops? up|topped up)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their)[^\S\n]+$/iu.test(text.slice(Math.max(floor, start - 40), start))) return 'out';
   roles.after.lastIndex = end;
   const a = roles.after.exec(text);
   if (a?.groups) {
@@ -666,10 +677,11 @@ function isDifference(text: string, start: number, end: number, floor: number): 
   // "20 °C above ambient", "heated 40 K over room temperature"; "between" only as "20 K between the plates".
   if (/^(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)/.test(word)) {
     const rest = text.slice(end + a[0].length, end + a[0].length + 40);
-    if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|and\b|$)/.test(rest)) return true;
+    if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|(?:and|with|at|in|for|while|but|so|when)\b|$)/.test(rest)) return true;
     return /^[^\S\n]*(?:than[^\S\n]+)?(?:(?:the|a|an|its|their)[^\S\n]+)?(?:(?:mean|average|outside|outdoor|surrounding|local|daytime|night-?time|cooling|inlet|room|deep|surface)[^\S\n]+){0,2}(?:ambient|room|outside|outdoor|surrounding|environment|air|water|inlet|sink|source|cold|hot|other|freezing|surface|\p{N}|[-−])/iu.test(rest) || /^\s*than/.test(rest);
   }
-  if (/^between|^apart|^across/.test(word)) return /^[^\S\n]*(?:the|its|two|both|hot|cold|plates|sides|ends|junctions|reservoirs)/i.test(text.slice(end + a[0].length, end + a[0].length + 20));
+  if (/^apart/.test(word)) return true;
+  if (/^between|^across/.test(word)) return /^[^\S\n]*(?:the|its|two|both|hot|cold|plates|sides|ends|junctions|reservoirs)/i.test(text.slice(end + a[0].length, end + a[0].length + 20));
   return true;
 }
 
@@ -1124,7 +1136,7 @@ function relate(text: string, drafts: Draft[]): void {
     if (d.kind !== 'mass') continue;
     const before = text.slice(Math.max(0, d.start - 60), d.start);
     const after = text.slice(d.end, d.end + 30);
-    if (/(?:weight|reading|reads|scale|balance)[^.;!?\n]{0,40}(?:by|of)[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) || /^[^\S\n]*(?:lighter|heavier|less weight|of (?:lift|weight loss|apparent weight))/iu.test(after)) {
+    if (/(?:weight|reading|reads|scale|balance)[^.;!?\n]{0,40}(?:by|of)[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) || /^[^\S\n]*(?:lighter|heavier|less weight|of (?:lift|weight loss|apparent weight)|off (?:its|the) (?:weight|reading))/iu.test(after)) {
       const kg = siOf(d);
       if (kg === null) continue;
       d.kind = 'thrust';
@@ -1132,6 +1144,19 @@ function relate(text: string, drafts: Draft[]): void {
       d.role = null;
       d.derived = 'a change of weight on a scale, as a force (kilograms-force)';
     }
+  }
+
+  // "It delivers 5 W less than the 65 W it draws": out = in − the shortfall.
+  for (let i = 0; i + 1 < drafts.length; i++) {
+    const [a, b] = [drafts[i], drafts[i + 1]];
+    if (!(a.kind === b.kind && (a.kind === 'power' || a.kind === 'energy'))) continue;
+    if (!/^[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,2}?(?:less|lower|short of)[^\S\n]+(?:than[^\S\n]+)?(?:the[^\S\n]+|its[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) continue;
+    const x = siOf(a);
+    const y = siOf(b);
+    if (x === null || y === null || x >= y) continue;
+    a.role = null;
+    b.role = 'in';
+    insertAfter(b, { start: a.start, end: b.end, kind: a.kind, quantity: typedSi(y - x, FIGURE_SI_UNIT[a.kind]), role: 'out', derived: `output = input − the shortfall (${formatQuantity(y, FIGURE_SI_UNIT[a.kind])} − ${formatQuantity(x, FIGURE_SI_UNIT[a.kind])})` });
   }
 
   // out = in + excess, when the text gives no output itself.
