@@ -211,7 +211,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'in',
     before: [
-      '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line|adapter|charger) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|gave up|gives up)',
+      '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line|adapter|charger) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|gave up|gives up|feeding|feeds|fed|powering|powers|driving|drives|shows|showed|reads|read)',
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
@@ -236,7 +236,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
       'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
-      'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
+      'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran (?:a|an|the)', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
       '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts', 'put', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [

@@ -499,7 +499,7 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     if (/(?<!\p{L})(?:heat|energy)(?:[^\S\n]+(?:it|that it|they))?[^\S\n]+(?:draws?|takes?|extracts?|absorbs?|gets?|pulls?|harvests?|collects?)[^\S\n]+from[^\S\n]+(?:(?:the|a|an)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
   }
   // "filled a 5 kWh battery", "charged the 10 kWh pack": what is filled is what came out.
-  if (roles === ROLES.power && /(?<!\p{L})(?:fill(?:s|ed|ing)?|charg(?:es|ed|ing)|tops? up|topped up)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their)[^\S\n]+$/iu.test(text.slice(Math.max(floor, start - 40), start))) return 'out';
+  if (roles.groups === POWER_ENERGY_ROLES && /(?<!\p{L})(?:fill(?:s|ed|ing)?|charg(?:es|ed|ing)|tops? up|topped up)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their)[^\S\n]+$/iu.test(text.slice(Math.max(floor, start - 40), start))) return 'out';
   roles.after.lastIndex = end;
   const a = roles.after.exec(text);
   if (a?.groups) {
@@ -559,7 +559,7 @@ type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; uni
 
 /** "60 % more electrical energy out than in", "30 % more power than it draws": a gain of 1 + p. */
 const PERCENT_MORE_RE =
-  /[^\S\n]*(?:above|over|more than|in excess of|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:electrical|electric)[^\S\n]+)?(?:input|consumption|power in|energy in|supply)(?!\p{L})|[^\S\n]*(?:more|extra)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over)[^\S\n]+(?:(?:it|the|its)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:in|input|takes|uses|consumes|draws|is fed|goes in|consumption|supply)(?!\p{L})/iuy;
+  /[^\S\n]*(?:above|over|more than|in excess of|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:electrical|electric)[^\S\n]+)?(?:input|consumption|power in|energy in|supply)(?!\p{L})|[^\S\n]*(?:more|extra)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over)[^\S\n]+(?:(?:it|the|its)[^\S\n]+)?(?:[\p{L}\d.,-]+[^\S\n]+){0,4}?(?:in|input|takes|uses|consumes|draws|is fed|goes in|consumption|supply)(?!\p{L})/iuy;
 
 /** What a percentage is, by its context. */
 function readPercent(text: string, start: number, end: number, floor: number): PercentReading {
@@ -952,7 +952,7 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   const flows = drafts.filter(energyLike);
   for (let i = 0; i + 1 < flows.length; i++) {
     const [a, b] = [flows[i], flows[i + 1]];
-    if (a.role !== null && b.role === null && a.kind === b.kind && /^[^\S\n]*(?:(?:of|as)[^\S\n]+[\p{L} -]{0,30}?)?[^\S\n]*(?:,[^\S\n]*)?(?:plus|as well as|along with|together with|and also|on top of|and)[^\S\n]+$/iu.test(text.slice(a.end, b.start))) {
+    if (a.role !== null && b.role === null && a.kind === b.kind && /^[^\S\n]*(?:(?:of|as)[^\S\n]+[\p{L} -]{0,30}?[^\S\n]*(?:,[^\S\n]*)?(?:plus|as well as|along with|together with|and also|on top of|and)|(?:,[^\S\n]*)?(?:plus|as well as|along with|together with|and also|on top of))[^\S\n]+$/iu.test(text.slice(a.end, b.start))) {
       b.role = a.role;
     }
   }
