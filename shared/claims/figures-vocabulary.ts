@@ -211,11 +211,11 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'in',
     before: [
-      '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line|adapter|charger) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|gave up|gives up|feeding|feeds|fed|powering|powers|driving|drives|shows|showed|reads|read)',
+      '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|gave up|gives up|feeding|feeds|fed|powering|powers|driving|drives|shows|showed|reads|read)',
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
-      'put in', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
+      '(?:for|per) (?:every|each)', 'put in', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
       'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
@@ -224,7 +224,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires)',
       '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
-      '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
+      '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
       'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply'],
   },
   {
@@ -233,7 +233,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
       'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
-      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
+      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'turning (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
       'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran (?:a|an|the)', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
@@ -241,8 +241,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
-      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump)', 'into the (?:battery|grid|load|bank|network|mains|store)(?: bank)?', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
-      'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the shaft', 'of shaft power', 'on its output terminals',
+      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump|phone|device|string|bulb|lamps|wheel)', 'into the (?:battery|grid|load|bank|network|mains|store)(?: bank)?', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
+      'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the (?:output )?terminals', 'at the shaft', 'of shaft power', 'on its output terminals',
       'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
   },
 ];
@@ -257,7 +257,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
       'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper', 'firing', 'firing temperature',
     ],
     after: [
-      'source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor',
+      'surface(?: water| layer)?', 'source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor',
       'loop', 'tank', 'radiators?', '(?:turbine|compressor) inlet', 'firing', 'combustion', 'hot gas', 'heater head', 'collector', 'hot end',
     ],
   },
@@ -270,7 +270,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
       'well water', 'groundwater', 'borehole', 'winter', 'bottom', 'lower', 'rejects? heat (?:to|at)', 'reject(?:s|ed|ing)?', 'cooled to', 'chilled to',
       'cool(?:s|ed|ing)? (?:\\w+ )?to', 'keeps? (?:\\w+ )?at', 'frozen',
     ],
-    after: ['sink', 'ambient', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater', 'cold side', 'air', 'outdoor', 'ground'],
+    after: ['deep(?:er)? (?:water|layer)', 'sink', 'ambient', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater', 'cold side', 'air', 'outdoor', 'ground'],
   },
 ];
 
@@ -283,7 +283,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
     ],
     after: [
       '(?:lift-?off|launch|initial|gross|total|wet|fuell?ed|starting|ignition|take-?off) mass', 'wet', 'fuell?ed', 'at launch', 'at lift-?off', 'at the start',
-      'initially', 'fully loaded', 'loaded', 'in all', 'all told', 'gross', 'total',
+      'initially', 'fully loaded', 'loaded', 'in all', 'in total', 'all told', 'gross', 'total',
     ],
   },
   {
@@ -298,7 +298,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
       '(?:carries|carrying|loaded with|tanks? (?:hold|holds|of)|burns?|burning|expels?|expelling)',
     ],
     after: [
-      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass)', 'of (?:that|it|which)(?: being| is| was)? (?:propellant|fuel)', 'of cold-gas propellant',
+      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass|nitrogen|helium|butane|propane|iodine|argon|ammonia)', 'of (?:that|it|which)(?: being| is| was)? (?:propellant|fuel)', 'of cold-gas propellant',
       'of (?:[\\w-]+ )?(?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
       'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
     ],

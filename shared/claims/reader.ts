@@ -223,7 +223,7 @@ const ROLES: Partial<Record<FigureKind, CompiledRoles>> = {
   speed: compileRoles(SPEED_ROLES),
 };
 /** "1.5 kW in, 3 kW out": a bare in/out right after the figure, ending the clause. */
-const IN_OUT_AFTER_RE = /[^\S\n]*(in|out)(?=[^\S\n]*(?:[,;.!?)\]\n]|(?:and|for|from|with|while|against|versus|vs)\b|$))/iy;
+const IN_OUT_AFTER_RE = /[^\S\n]*(in|out)(?!\p{L})(?=[^\S\n]*(?:[,;.!?)\]\n:—–]|(?:and|for|from|with|while|against|versus|vs|on|at|to|into|onto|across|through)(?!\p{L})|$))/iuy;
 const COP_COOLING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_COOLING)})(?!\\p{L})`, 'iu');
 const COP_HEATING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_HEATING)})(?!\\p{L})`, 'iu');
 const HEDGE_RES = HEDGES.map((h) => ({ hedge: h.hedge, re: new RegExp(`(?:(?<!\\p{L})(?:${alt(h.words.filter((w) => /^\p{L}/u.test(w)))})|${h.words.filter((w) => !/^\p{L}/u.test(w)).map(escapeRe).join('|') || '(?!)'})[^\\S\\n]*$`, 'iu') }));
@@ -943,6 +943,12 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   for (let i = 0; i + 1 < flowsInto.length; i++) {
     const [a, b] = [flowsInto[i], flowsInto[i + 1]];
     if (a.kind !== b.kind) continue;
+    // "3–5 W of electricity from roughly 100 W of heat": the first came out of the second.
+    if (/^[^\S\n]*(?:of[^\S\n]+[\p{L} -]{0,30}?)?[^\S\n]*from[^\S\n]+(?:(?:a|an|the|about|some|roughly|only|just|up to)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
+      a.role = 'out';
+      b.role = 'in';
+      continue;
+    }
     if (!/^[^.;!?\n]{0,50}?(?<!\p{L})into[^\S\n]+(?:(?:a|an|the|about|some|roughly|up to)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) continue;
     if (!/(?<!\p{L})(?:turns?|turning|turned|converts?|converting|converted|transforms?|transforming|transformed|changes?|changing|changed|makes?)[^\S\n]+(?:(?:the|its|their|a|an|about|some|roughly|up to)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, a.start - 40), a.start))) continue;
     a.role = 'in';
@@ -1081,9 +1087,12 @@ function relate(text: string, drafts: Draft[]): void {
   // Power from a current and a voltage in the same clause: "12 A at 24 V", "3 amps from a 48-volt pack".
   for (const cur of drafts.filter((d) => d.kind === 'current')) {
     // The voltage nearest the current in its sentence ("steps 230 V down to 12 V and delivers 5 A": 12 V).
-    const volt = drafts
-      .filter((d) => d.kind === 'voltage' && sameClause(d, cur) && Math.abs(d.start - cur.start) < 120)
-      .sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0];
+    const candidates = drafts.filter((d) => d.kind === 'voltage' && sameClause(d, cur) && Math.abs(d.start - cur.start) < 120);
+    // "0.9 A at 24 V": the voltage said with the current, right after or right before it; else the nearest.
+    const volt =
+      candidates.find((d) => d.start >= cur.end && /^[^\S\n]*(?:at|@|from|on|×|x|\*|\/|,)?[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
+      candidates.find((d) => d.end <= cur.start && /^[^\S\n]*(?:at|@|,|×|x|\*|\/)?[^\S\n]*$/iu.test(text.slice(d.end, cur.start))) ??
+      candidates.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0];
     if (!volt) continue;
     const i = siOf(cur);
     const v = siOf(volt);
