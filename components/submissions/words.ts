@@ -30,7 +30,7 @@ export const SECTION_LABEL: Record<CorrectionSection, string> = {
   howItIsPitched: 'How it is pitched',
   whyItFails: 'Why it fails',
   worksheets: 'Run the numbers (worksheets)',
-  whatFakesTheEffect: 'What fakes the effect',
+  whatFakesTheEffect: 'Artifacts that can look like the effect',
   repliesAndAnswers: 'Replies and answers',
   questionsToAsk: 'Questions to ask',
   cautions: 'Cautions',

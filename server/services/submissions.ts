@@ -127,7 +127,7 @@ const SECTION_WORDS: Record<string, string> = {
   howItIsPitched: 'how it is pitched',
   whyItFails: 'why it fails',
   worksheets: 'run the numbers',
-  whatFakesTheEffect: 'what fakes the effect',
+  whatFakesTheEffect: 'artifacts that can look like the effect',
   repliesAndAnswers: 'replies and answers',
   questionsToAsk: 'questions to ask',
   cautions: 'cautions',

@@ -302,7 +302,7 @@ describe('parseEntryFile on malformed files', () => {
     expect(err.line).toBe(29);
     expect(err.field).toBe('body');
     expect(err.message).toBe(
-      `unknown-heading.md:29: body: unknown section heading "## Background"; the sections are "In brief", "How it is pitched", "Why it fails", "What fakes the effect", "Cautions" (use "###" for a sub-heading)`,
+      `unknown-heading.md:29: body: unknown section heading "## Background"; the sections are "In brief", "How it is pitched", "Why it fails", "Artifacts that can look like the effect", "Cautions" (use "###" for a sub-heading)`,
     );
   });
 
@@ -381,7 +381,7 @@ describe('parseEntryFile on malformed files', () => {
     expect(err.line).toBe(29);
     expect(err.message).toContain('appears twice (first on line 17)');
     const order = fixture();
-    order.push('## Cautions', '', 'Careful.', '', '## What fakes the effect', '', 'Drift.'); // lines 29, 33
+    order.push('## Cautions', '', 'Careful.', '', '## Artifacts that can look like the effect', '', 'Drift.'); // lines 29, 33
     err = refusal(() => parseEntryFile(join_(order), 'order.md'));
     expect(err.line).toBe(33);
     expect(err.message).toContain('out of order');

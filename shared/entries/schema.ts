@@ -73,6 +73,6 @@ export const BODY_SECTIONS = {
   inBrief: 'In brief',
   howItIsPitched: 'How it is pitched',
   whyItFails: 'Why it fails',
-  whatFakesTheEffect: 'What fakes the effect',
+  whatFakesTheEffect: 'Artifacts that can look like the effect',
   cautions: 'Cautions',
 } as const;
