@@ -14,3 +14,30 @@ export const CAUTION_ROTATING =
 export const CAUTION_RADIATION =
   'Particle beams: accelerated charges and the targets they strike produce ionizing radiation. Work only under ' +
   'a licensed radiation-safety programme and local regulations.';
+export const CAUTION_SPARK_GAP =
+  'Spark gaps and arcs: they make ozone and nitrogen oxides, ultraviolet light and broadband RF interference, and ' +
+  'they run at high voltage. Ventilate, shield and enclose them, and follow local electrical codes, radio-emission ' +
+  'rules and licensed practice.';
+export const CAUTION_HYDROGEN =
+  'Hydrogen and oxyhydrogen gas: hydrogen burns in air over a wide range of mixtures, and a hydrogen–oxygen mixture ' +
+  'ignites with a very small spark and can detonate. Never store the mixed gas, vent it away from sparks, use ' +
+  'flashback arrestors, and follow local gas-safety codes and licensed practice.';
+export const CAUTION_MAINS =
+  'Mains electricity: heaters, heat pumps, chargers and bench supplies on the mains can kill. Work on them only ' +
+  'isolated and to your local wiring codes, with a residual-current device, or leave it to a licensed electrician.';
+export const CAUTION_HEAT =
+  'Heat and working fluids: boilers, steam, hot surfaces and refrigerant circuits burn and scald, and some working ' +
+  'fluids are flammable, toxic or displace air. Follow local rules for pressure equipment and refrigerants and ' +
+  'licensed practice.';
+export const CAUTION_BATTERIES =
+  'Batteries and capacitor banks: short-circuit currents melt tools and wiring, lead-acid cells give off hydrogen, ' +
+  'and lithium cells can burn when abused; capacitors stay charged after the supply is off. Fuse every lead, ' +
+  'discharge stores before touching, and follow local electrical codes and licensed practice.';
+export const CAUTION_PROPELLANTS =
+  'Propellants and pressurised tanks: rocket propellants burn or explode, some are toxic, and their tanks and lines ' +
+  'are pressure vessels. Test only at licensed sites, under local explosives and pressure-equipment regulations ' +
+  'and licensed practice.';
+export const CAUTION_LASER =
+  'Lasers and intense light: a laser beam, direct or reflected, can injure the eye, and powerful ones burn skin and ' +
+  'start fires. Use eye protection rated for the wavelength, enclose the beam path, and follow your local laser-safety ' +
+  'rules and licensed practice.';
