@@ -18,7 +18,8 @@ describe('exact SI defining constants (BIPM SI Brochure, 9th edition, 2019, Tabl
     expect(k('h').value).toBe(6.62607015e-34); // h = 6.626 070 15 × 10^-34 J s exact
     expect(k('e').value).toBe(1.602176634e-19); // e = 1.602 176 634 × 10^-19 C exact
     expect(k('k_B').value).toBe(1.380649e-23); // k = 1.380 649 × 10^-23 J K^-1 exact
-    for (const name of ['c', 'h', 'e', 'k_B']) {
+    expect(k('N_A').value).toBe(6.02214076e23); // N_A = 6.022 140 76 × 10^23 mol^-1 exact
+    for (const name of ['c', 'h', 'e', 'k_B', 'N_A']) {
       expect(k(name).exact).toBe(true);
       expect(k(name).source).toContain('SI Brochure), 9th edition (2019)');
     }
@@ -65,6 +66,7 @@ describe('against mathjs 15 built-in physical constants', () => {
     expect(si('planckConstant')).toBe(k('h').value);
     expect(si('elementaryCharge')).toBe(k('e').value);
     expect(si('boltzmann')).toBe(k('k_B').value);
+    expect(si('avogadro')).toBe(k('N_A').value);
     expect(si('gravitationConstant')).toBe(k('G').value);
     expect(si('gravity')).toBe(k('g0').value);
   });
@@ -97,7 +99,7 @@ describe('constants in expressions', () => {
   const run = (expression: string) => evaluateWorksheet(sheet(expression)).steps[0];
 
   test('every name in the table is usable, with its unit', () => {
-    expect(CONSTANT_NAMES).toEqual(['c', 'h', 'e', 'k_B', 'G', 'm_e', 'm_p', 'g0', 'mu0', 'eps0']);
+    expect(CONSTANT_NAMES).toEqual(['c', 'h', 'e', 'k_B', 'N_A', 'G', 'm_e', 'm_p', 'g0', 'mu0', 'eps0']);
     for (const c of CONSTANTS) {
       const r = run(c.name);
       expect(r.error).toBeUndefined();
@@ -112,6 +114,15 @@ describe('constants in expressions', () => {
     expect(run('e').value?.unit).toBe('C');
     expect(run('exp(1)').value?.si).toBeCloseTo(Math.E, 15);
     expect(run('E').error?.message).toContain("Euler's number write exp(1)");
+  });
+
+  test('N_A in expressions: e N_A is the Faraday constant 96 485.332 12 C/mol, k_B N_A the gas constant 8.314 462 618 J/(mol K) (CODATA 2018, both exact)', () => {
+    expect(run('N_A').value?.unit).toBe('mol^-1');
+    const F = run('e * N_A');
+    expect(F.error).toBeUndefined();
+    expect(Math.abs(F.value!.si / 96485.33212 - 1)).toBeLessThan(1e-10);
+    const R = run('k_B * N_A');
+    expect(Math.abs(R.value!.si / 8.314462618 - 1)).toBeLessThan(1e-10);
   });
 
   test('h is the Planck constant in expressions; hours are written hour', () => {

@@ -1,7 +1,7 @@
 /**
  * The vetted table of physical constants that worksheet expressions can use (DESIGN.md §4).
  *
- * Names in expressions: c, h, e, k_B, G, m_e, m_p, g0, mu0, eps0.
+ * Names in expressions: c, h, e, k_B, N_A, G, m_e, m_p, g0, mu0, eps0.
  *
  *  - `e` is the ELEMENTARY CHARGE, as a physicist reads it. Euler's number is not available under a
  *    name in worksheets (mathjs's own `e` and `E` are shadowed or refused); write `exp(1)` or `exp(x)`.
@@ -12,8 +12,11 @@
  *    input or a step after a constant.
  *
  * Sources:
- *  - c, h, e, k_B: exact defining constants of the SI, BIPM "The International System of Units (SI)",
- *    SI Brochure, 9th edition (2019), section 2.2, Table 1.
+ *  - c, h, e, k_B, N_A: exact defining constants of the SI, BIPM "The International System of Units (SI)",
+ *    SI Brochure, 9th edition (2019), section 2.2, Table 1. Products of them are exact too: the
+ *    Faraday constant F = e·N_A = 96 485.332 12… C/mol and the molar gas constant R = k_B·N_A =
+ *    8.314 462 618… J/(mol K) (CODATA 2018 lists both as exact); the check kit derives them in
+ *    shared/checks/constants.ts rather than naming them here, since F and R are common input names.
  *  - G, m_e, m_p, mu0, eps0: CODATA 2022 recommended values (NIST, physics.nist.gov/constants). These
  *    digits are from memory; before committing them they were compared with several independent
  *    public transcriptions of NIST's CODATA 2022 listing (allascii.txt), which agree digit for digit.
@@ -61,6 +64,8 @@ export const CONSTANTS: readonly PhysicalConstant[] = Object.freeze([
   { name: 'e', symbol: 'e', label: 'elementary charge', value: 1.602176634e-19, unit: 'C', exact: true, source: SI_BROCHURE },
   // k = 1.380 649 × 10^-23 J/K, exact — SI Brochure 9th ed. (2019), Table 1.
   { name: 'k_B', symbol: 'k_B', label: 'Boltzmann constant', value: 1.380649e-23, unit: 'J / K', exact: true, source: SI_BROCHURE },
+  // N_A = 6.022 140 76 × 10^23 mol^-1, exact — SI Brochure 9th ed. (2019), Table 1.
+  { name: 'N_A', symbol: 'N_A', label: 'Avogadro constant', value: 6.02214076e23, unit: 'mol^-1', exact: true, source: SI_BROCHURE },
   // G = 6.674 30(15) × 10^-11 m^3 kg^-1 s^-2 — CODATA 2022 (unchanged from 2018); from memory, cross-checked.
   {
     name: 'G',
@@ -130,6 +135,9 @@ export const CONSTANT_HINTS: Readonly<Record<string, string>> = Object.freeze({
   boltzmann: 'k_B',
   k: 'k_B',
   kB: 'k_B',
+  avogadro: 'N_A',
+  NA: 'N_A',
+  N_a: 'N_A',
   gravitationConstant: 'G',
   electronMass: 'm_e',
   me: 'm_e',
