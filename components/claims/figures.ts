@@ -42,16 +42,16 @@ export const ROLES_FOR: Record<FigureKind, readonly Role[]> = {
   thrust: [],
   power: ['in', 'out', 'excess'],
   energy: ['in', 'out', 'excess'],
-  temperature: ['hot', 'cold'],
+  temperature: ['hot', 'cold', 'aside'],
   'temperature-difference': [],
   efficiency: [],
   cop: ['heating', 'cooling'],
   'quantum-efficiency': [],
-  mass: ['wet', 'dry', 'propellant'],
+  mass: ['wet', 'dry', 'propellant', 'aside'],
   speed: ['exhaust', 'delta-v'],
   current: [],
   voltage: [],
-  duration: [],
+  duration: ['aside'],
   'specific-impulse': [],
   'thrust-per-power': [],
   'specific-power': [],
@@ -70,6 +70,7 @@ export const ROLE_LABEL: Record<Role, string> = {
   propellant: 'The propellant alone',
   exhaust: 'Exhaust speed',
   'delta-v': 'Change of speed claimed',
+  aside: 'Of something else (not used)',
 };
 
 /** Short words for a role beside a figure. */

@@ -84,7 +84,7 @@ export const artifactBudget: CheckDefinition = {
   name: 'artifact-budget',
   title: 'Artifact budget for a thrust measurement',
   summary:
-    'Small thrusts on a balance are easily faked by ordinary forces: the Earth\'s magnetic field pushing on the ' +
+    'Small thrusts on a balance are easily mimicked by ordinary forces: the Earth\'s magnetic field pushing on the ' +
     'supply current (I·L·B), waste heat radiated more one way than the other (f·P/c), the balance drifting as it ' +
     'warms, and gas boiling off warm parts (ṁ·v). Each is worked out here as a force to set against the claimed ' +
     'thrust. Use it for any thrust claim from a balance, pendulum or scale.',

@@ -1,4 +1,5 @@
 import { carnotCopCooling, carnotCopHeating, carnotEfficiency } from './formulas';
+import { CAUTION_HEAT, CAUTION_MAINS, CAUTION_VACUUM } from './cautions';
 import { fmt, fmtQ } from './format';
 import { readInputs, requirePositive } from './inputs';
 import { linspace, mapSeries, constantSeries } from './series';
@@ -46,7 +47,7 @@ export const carnot: CheckDefinition = {
     'of efficiency or COP with stated temperatures.',
   condition: 'claimed efficiency ≤ 1 − Tc/Th; claimed heating COP ≤ Th/(Th − Tc); claimed cooling COP ≤ Tc/(Th − Tc)',
   inputs,
-  cautions: [],
+  cautions: [CAUTION_HEAT, CAUTION_VACUUM, CAUTION_MAINS],
   run(si) {
     const x = readInputs(inputs, si);
     requirePositive('Th', 'The hot temperature', x.Th);

@@ -1,6 +1,6 @@
 /** Standard safety cautions (DESIGN.md §8), worded once. */
 export const CAUTION_HIGH_VOLTAGE =
-  'High voltage: thruster test rigs, RF amplifiers and beam sources run at voltages that can kill. Work only to ' +
+  'High voltage: thruster test rigs, RF amplifiers, pulsed coils and beam sources run at voltages that can kill. Work only to ' +
   'your local electrical codes and your institution\'s licensed practice (interlocks, lock-out, discharge of stored energy).';
 export const CAUTION_RF =
   'Microwave and RF exposure: resonant cavities and amplifiers can leak power above exposure limits, and ' +

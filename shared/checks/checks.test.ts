@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { create, all, type Unit } from 'mathjs';
+import * as cautionTexts from './cautions';
 import { C_LIGHT, E_CHARGE, M_ELECTRON } from './constants';
 import { CheckRangeError, checkList, checks, isCheckRangeError, validateCheckInputs } from './index';
 import { CHECK_NAMES, type CheckDefinition, type CheckResult } from './types';
@@ -98,12 +99,69 @@ describe('the kit', () => {
   });
 
   test('cautions where the work can hurt', () => {
-    expect(checks['artifact-budget'].cautions.join(' ')).toMatch(/high voltage/i);
-    expect(checks['artifact-budget'].cautions.join(' ')).toMatch(/RF/);
-    expect(checks['artifact-budget'].cautions.join(' ')).toMatch(/vacuum/i);
-    expect(checks['sideways-beam'].cautions.join(' ')).toMatch(/high voltage/i);
-    expect(checks['momentum-ledger'].cautions.join(' ')).toMatch(/rotating|reciprocating/i);
-    for (const c of checkList) for (const text of c.cautions) expect(text).toMatch(/local|licensed/i);
+    const of = (name: keyof typeof checks) => checks[name].cautions.join(' ');
+    expect(of('artifact-budget')).toMatch(/high voltage/i);
+    expect(of('artifact-budget')).toMatch(/RF/);
+    expect(of('artifact-budget')).toMatch(/vacuum/i);
+    expect(of('sideways-beam')).toMatch(/high voltage/i);
+    expect(of('sideways-beam')).toMatch(/ionizing radiation/i);
+    expect(of('sideways-beam')).toMatch(/vacuum/i);
+    expect(of('momentum-ledger')).toMatch(/rotating|reciprocating/i);
+    // radiation-only thrusters: microwave cavities, lasers, the supplies that drive them, test chambers
+    expect(of('photon-bound')).toMatch(/microwave/i);
+    expect(of('photon-bound')).toMatch(/laser/i);
+    expect(of('photon-bound')).toMatch(/high voltage/i);
+    expect(of('photon-bound')).toMatch(/vacuum/i);
+    // heat engines, heat pumps and refrigerators: hot parts and working fluids, pressure, mains
+    expect(of('carnot')).toMatch(/refrigerant/i);
+    expect(of('carnot')).toMatch(/pressure/i);
+    expect(of('carnot')).toMatch(/mains/i);
+    // "free energy" circuits and generators: mains, pulsed high voltage, spark gaps (ozone, RF), batteries, rotors
+    expect(of('first-law')).toMatch(/mains/i);
+    expect(of('first-law')).toMatch(/high voltage/i);
+    expect(of('first-law')).toMatch(/spark gap/i);
+    expect(of('first-law')).toMatch(/ozone/i);
+    expect(of('first-law')).toMatch(/batter/i);
+    expect(of('first-law')).toMatch(/rotating/i);
+    // craft that carry propellant
+    expect(of('rocket-equation')).toMatch(/propellant/i);
+    expect(of('rocket-equation')).toMatch(/pressure/i);
+    // pure kinematics: nothing to build
+    expect(checks['break-even-speed'].cautions).toEqual([]);
+    expect(checks['light-speed'].cautions).toEqual([]);
+  });
+
+  test('a check that names a hazard in its title or summary carries the caution for it', () => {
+    // hazard named in the check's words -> what its cautions must mention (DESIGN.md §8, issue 12)
+    const rules: [RegExp, RegExp][] = [
+      [/electroly|hydrogen/i, /hydrogen/i],
+      [/microwave|\bRF\b|resonant cavit/i, /microwave|\bRF\b/i],
+      [/spark gap/i, /spark gap/i],
+      [/neutron|gamma|x-ray|ionizing|charged particle|particle beam/i, /ionizing radiation/i],
+      [/heat engine|heat pump|refrigerat/i, /pressure/i],
+      [/rocket equation|carry propellant/i, /propellant/i],
+    ];
+    for (const c of checkList) {
+      const words = `${c.title} ${c.summary}`;
+      const cautions = c.cautions.join(' ');
+      for (const [hazard, caution] of rules) {
+        if (hazard.test(words)) expect([c.name, cautions]).toEqual([c.name, expect.stringMatching(caution)]);
+      }
+    }
+  });
+
+  test('cautions are worded once, in cautions.ts, and defer to local codes and licensed practice', () => {
+    const texts = Object.entries(cautionTexts).filter(([name]) => name.startsWith('CAUTION_'));
+    expect(texts.length).toBeGreaterThanOrEqual(12);
+    for (const [name, text] of texts) {
+      expect([name, text]).toEqual([name, expect.stringMatching(/\blocal\b/i)]);
+      expect([name, text]).toEqual([name, expect.stringMatching(/licensed/i)]);
+    }
+    const worded = new Set(texts.map(([, text]) => text));
+    for (const c of checkList) {
+      for (const text of c.cautions) expect([c.name, worded.has(text)]).toEqual([c.name, true]);
+      expect(new Set(c.cautions).size).toBe(c.cautions.length);
+    }
   });
 
   test('validateCheckInputs: integers, bounds, missing fields', () => {

@@ -1,4 +1,5 @@
 import { firstLawBalance, overUnityRatio } from './formulas';
+import { CAUTION_BATTERIES, CAUTION_HIGH_VOLTAGE, CAUTION_MAINS, CAUTION_ROTATING, CAUTION_SPARK_GAP } from './cautions';
 import { fmt, fmtQ } from './format';
 import { readInputs } from './inputs';
 import type { CheckDefinition, CheckInputSpec, CheckOutput } from './types';
@@ -44,7 +45,7 @@ export const firstLaw: CheckDefinition = {
     'generators, motors and "free energy" devices with stated inputs and outputs.',
   condition: `energy out ≤ energy in − increase of stored energy (to ${FIRST_LAW_TOLERANCE} relative, round-off only)`,
   inputs,
-  cautions: [],
+  cautions: [CAUTION_MAINS, CAUTION_HIGH_VOLTAGE, CAUTION_SPARK_GAP, CAUTION_BATTERIES, CAUTION_ROTATING],
   run(si) {
     const x = readInputs(inputs, si);
     const out = x.W_out + x.Q_out;

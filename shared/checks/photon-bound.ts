@@ -1,4 +1,5 @@
 import { photonThrustBound } from './formulas';
+import { CAUTION_HIGH_VOLTAGE, CAUTION_LASER, CAUTION_RF, CAUTION_VACUUM } from './cautions';
 import { fmt, fmtQ } from './format';
 import { readInputs, requirePositive } from './inputs';
 import type { CheckDefinition, CheckInputSpec } from './types';
@@ -35,7 +36,7 @@ export const photonBound: CheckDefinition = {
     'Use it for any "propellant-free" thruster whose only exhaust could be light, microwaves or heat.',
   condition: 'claimed thrust ≤ P/c',
   inputs,
-  cautions: [],
+  cautions: [CAUTION_HIGH_VOLTAGE, CAUTION_RF, CAUTION_LASER, CAUTION_VACUUM],
   run(si) {
     const v = readInputs(inputs, si);
     requirePositive('P', 'The radiated power', v.P);

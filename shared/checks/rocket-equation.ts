@@ -1,5 +1,6 @@
 import { CheckRangeError } from './errors';
 import { exhaustSpeedFromIsp, tsiolkovskyDv } from './formulas';
+import { CAUTION_PROPELLANTS, CAUTION_VACUUM } from './cautions';
 import { fmt, fmtQ } from './format';
 import { readInputs, requirePositive } from './inputs';
 import { constantSeries, linspace, mapSeries } from './series';
@@ -49,7 +50,7 @@ export const rocketEquation: CheckDefinition = {
     'Use it for claims that do carry propellant, to see whether the stated propellant allows the stated velocity change.',
   condition: 'claimed Δv ≤ v_e ln(m0/m1)',
   inputs,
-  cautions: [],
+  cautions: [CAUTION_PROPELLANTS, CAUTION_VACUUM],
   run(si) {
     const x = readInputs(inputs, si);
     requirePositive('m1', 'The final mass', x.m1);

@@ -7,7 +7,7 @@
  * γ rises and v_z = p_z/(γm) falls, while p_z changes only by the impulse q E_z t.
  */
 import { runBoris, createBeam, launchAlongZ, uFromGamma, type BorisFields } from './boris';
-import { CAUTION_HIGH_VOLTAGE, CAUTION_RADIATION } from './cautions';
+import { CAUTION_HIGH_VOLTAGE, CAUTION_RADIATION, CAUTION_VACUUM } from './cautions';
 import { C_LIGHT, E_CHARGE, M_ELECTRON, M_PROTON } from './constants';
 import { CheckRangeError } from './errors';
 import { gammaFromKineticEnergy, gyroFrequency } from './formulas';
@@ -111,7 +111,7 @@ export const sidewaysBeam: CheckDefinition = {
     'or on moving charges yields a net push along the beam.',
   condition: `p_z changes only by the impulse of the force along z, q E_z t (within ${BEAM_TOLERANCE} relative)`,
   inputs,
-  cautions: [CAUTION_HIGH_VOLTAGE, CAUTION_RADIATION],
+  cautions: [CAUTION_HIGH_VOLTAGE, CAUTION_RADIATION, CAUTION_VACUUM],
   run(si) {
     const x = readInputs(inputs, si);
     requirePositive('duration', 'The duration', x.duration);

@@ -681,4 +681,20 @@ describe('more ways claims are written (issue 11)', () => {
     const f = read('Charged at 2 kW for 5 hours, then discharged at 1.5 kW for 6 hours.');
     expect(f.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([['in', 2000 * 5 * 3600], ['out', 1500 * 6 * 3600]]);
   });
+
+  test('numbers in words after a colon, capitalised', () => {
+    const f = read('In a 2021 preprint the authors write: Twenty watts in, sixty watts out.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['in', 20], ['out', 60]]);
+  });
+
+  test('figures of something else are set aside: a test stand, a room, the time it took to build', () => {
+    const rocket = read('The 500 kg probe, which includes 200 kg of propellant, exhausts at 3.0 km/s. The test stand itself weighs 85 kg.');
+    expect(rocket.filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([['wet', 500], ['propellant', 200], ['dry', 300], ['aside', 85]]);
+    // 212 °F = 373.15 K and 68 °F = 293.15 K (NIST SP 811 §4.2.1.1 and B.8: T/K = (t/°F + 459.67)/1.8).
+    const engine = read('Between 212 °F and 68 °F the engine reaches 35 % efficiency. The room was held at 21 °C for the whole series.');
+    expect(engine.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si])).toEqual([['hot', 373.15], ['cold', 293.15], ['aside', 294.15]].map(([r, t]) => [r, expect.closeTo(t as number, 9)]));
+    const build = read('Over a 5-hour shift the pump motor drew 2.2 kW and delivered 1.8 kW. The prototype took 18 months to build.');
+    expect(build.filter((x) => x.kind === 'duration').map((x) => x.role)).toEqual([null, 'aside']);
+    expect(build.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([['in', 2200 * 5 * 3600], ['out', 1800 * 5 * 3600]]);
+  });
 });

@@ -165,7 +165,8 @@ interface Plan {
   assumptions: string[];
 }
 
-const ofKind = (figures: Figure[], kind: FigureKind) => figures.filter((f) => f.kind === kind);
+/** The figures of one kind that are the device's (a figure set aside is of something else). */
+const ofKind = (figures: Figure[], kind: FigureKind) => figures.filter((f) => f.kind === kind && f.role !== 'aside');
 const largest = (fs: Figure[]) => [...fs].sort((a, b) => (b.upper?.si ?? b.si) - (a.upper?.si ?? a.si))[0];
 
 function uniq<T>(xs: (T | undefined)[]): T[] {

@@ -350,7 +350,9 @@ const FRACTION_VALUE: Record<string, number> = {
 function wordNumbers(text: string): { start: number; end: number; value: number }[] {
   if (!WORD_NUMBER_HINT.test(text)) return [];
   const out: { start: number; end: number; value: number }[] = [];
-  const doc = nlp(text);
+  // compromise takes a capital mid-sentence ("… write: Twenty watts") for a name: read a lower-case
+  // copy of the same length, so that the offsets hold.
+  const doc = nlp(Array.from(text, (c) => (c.toLowerCase().length === c.length ? c.toLowerCase() : c)).join(''));
   const found = doc.numbers().json({ offset: true }) as { text: string; offset: { start: number; length: number }; number?: { num?: number } }[];
   for (const n of found) {
     const raw = text.slice(n.offset.start, n.offset.start + n.offset.length);
@@ -722,7 +724,10 @@ export function extractFigures(text: string): Figure[] {
         next.consumed = true;
       } else if (!next.plusMinus && isRangeGap(text, gapStart, next.start, t.start) && (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) && next.suffix) {
         // Two temperatures "between 600 °C and 30 °C" or "from 10 °C to 55 °C" are the two sides, not a range.
-        const thirdTemperature = suffixKind(next.suffix) === 'temperature' && tokens.some((o) => o !== t && o !== next && !o.skip && o.suffix?.type === 'unit' && o.suffix.form.kind === 'temperature' && !o.suffix.form.ambiguous);
+        // (A third temperature in the same sentence makes it a range of one side.)
+        const thirdTemperature =
+          suffixKind(next.suffix) === 'temperature' &&
+          tokens.some((o) => o !== t && o !== next && !o.skip && o.suffix?.type === 'unit' && o.suffix.form.kind === 'temperature' && !o.suffix.form.ambiguous && windowStart(text, o.start, 0, 400) === windowStart(text, t.start, 0, 400));
         const dash = /^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start));
         const twoSides =
           (suffixKind(next.suffix) === 'voltage' && !dash) ||
@@ -929,6 +934,14 @@ const APPOSITION_RE = /^[\s,;(–—-]*(?:(?:a|an|some|about|roughly|nearly|just
 
 const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|lander|probe|satellite|CubeSat|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines? (?:fire|burn))(?!\p{L})/iu;
 
+/** Words that make a sentence's mass the craft's: the craft itself, its propellant, its engine. */
+const CRAFT_RE =
+  /(?<!\p{L})(?:rockets?|propellants?|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|craft|landers?|probes?|satellites?|CubeSats?|smallsats?|microsat\w*|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines?|vehicles?|tugs?|stacks?|ships?|modules?|capsules?|boosters?|orbiters?|missiles?|payloads?|tanks?|fuel\w*|oxidi[sz]ers?|xenon|krypton|hydrazine|kerosene|methane|hydrogen|oxygen|nitrogen|argon|exhaust|wet|dry|m[01f]|masses)(?!\p{L})/iu;
+
+/** Words of a time that is not how long the device ran. */
+const NOT_A_RUN_RE =
+  /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline)(?!\p{L})/iu;
+
 /** Roles the words leave open, read from the other figures (see the file's comment). */
 function rolesByContext(text: string, drafts: Draft[]): void {
   const energyLike = (d: Draft) => d.kind === 'power' || d.kind === 'energy';
@@ -995,6 +1008,10 @@ function rolesByContext(text: string, drafts: Draft[]): void {
     drafts.some((d) => d.kind === 'specific-impulse' || (d.kind === 'speed' && (d.role === 'exhaust' || d.role === 'delta-v')) || (d.kind === 'mass' && d.role === 'propellant')) ||
     (masses.length > 0 && ROCKET_RE.test(text));
   if (!rocket) return;
+  // A mass in a sentence that speaks of no craft and no propellant ("the test stand weighs 85 kg") is
+  // not one of the craft's, when the craft's masses are given elsewhere.
+  const craftish = masses.filter((m) => m.role !== null || CRAFT_RE.test(sentenceAround(text, m.start, m.end)));
+  if (craftish.length > 0) for (const m of masses) if (!craftish.includes(m)) m.role = 'aside';
   const has = (role: FigureRole) => masses.find((m) => m.role === role);
   const nulls = masses.filter((m) => m.role === null);
   if (has('propellant') && !has('wet') && !has('dry') && nulls.length === 1) nulls[0].role = 'wet';
@@ -1234,8 +1251,27 @@ function relate(text: string, drafts: Draft[]): void {
     }
   }
 
+  // The surroundings said apart from the machine: when one sentence gives the machine's two sides
+  // (two temperatures, or one and a difference), a temperature alone in another sentence, with no
+  // efficiency, COP or difference beside it ("the room was held at 21 °C"), is set aside.
+  const sentenceOf = (d: Draft) => windowStart(text, d.start, 0, 400);
+  const thermal = drafts.filter((d) => d.kind === 'temperature' && !d.derived);
+  const sides = new Set(
+    thermal
+      .map(sentenceOf)
+      .filter((k) => thermal.reduce((n, t) => n + (sentenceOf(t) === k ? (t.upper ? 2 : 1) : 0), 0) >= 2 || drafts.some((d) => d.kind === 'temperature-difference' && sentenceOf(d) === k)),
+  );
+  if (sides.size > 0) {
+    for (const t of thermal) {
+      const k = sentenceOf(t);
+      if (sides.has(k)) continue;
+      const company = drafts.filter((d) => d !== t && sentenceOf(d) === k && (d.kind === 'temperature' || d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop'));
+      if (company.length === 0) t.role = 'aside';
+    }
+  }
+
   // One temperature and a difference: the other temperature.
-  const temps = drafts.filter((d) => d.kind === 'temperature' && !d.derived);
+  const temps = drafts.filter((d) => d.kind === 'temperature' && !d.derived && d.role !== 'aside');
   const diff = drafts.find((d) => d.kind === 'temperature-difference');
   if (diff && temps.length === 1) {
     const t = temps[0];
@@ -1270,7 +1306,7 @@ function relate(text: string, drafts: Draft[]): void {
   // Two or more temperatures of the same machine: the higher is the hot side. Pairs said together
   // ("between 7 °C and 35 °C", "from 10 to 55 °C") are ordered within the pair; otherwise the
   // highest is hot and the lowest cold.
-  const absolute = drafts.filter((d) => d.kind === 'temperature');
+  const absolute = drafts.filter((d) => d.kind === 'temperature' && d.role !== 'aside');
   let paired = false;
   for (let i = 0; i + 1 < absolute.length; i++) {
     const a = absolute[i];
@@ -1292,8 +1328,16 @@ function relate(text: string, drafts: Draft[]): void {
     else if (HEAT_PUMP_RE.test(text)) absolute[0].role = 'hot';
   }
 
+  // Times that are not the run's ("took 18 months to build", "pays for itself in 3 years"), said in a
+  // sentence with no power or energy: set aside.
+  for (const d of drafts) {
+    if (d.kind !== 'duration' || d.role !== null) continue;
+    const sentence = sentenceAround(text, d.start, d.end);
+    if (NOT_A_RUN_RE.test(sentence) && !drafts.some((e) => (e.kind === 'power' || e.kind === 'energy') && sentenceOf(e) === sentenceOf(d))) d.role = 'aside';
+  }
+
   // Powers and energies over a stated run: energy = power × time.
-  const durations = drafts.filter((d) => d.kind === 'duration');
+  const durations = drafts.filter((d) => d.kind === 'duration' && d.role !== 'aside');
   const longest = [...durations].sort((a, b) => (siOf(b) ?? 0) - (siOf(a) ?? 0))[0];
   if (longest) {
     const powers = drafts.filter((d) => d.kind === 'power' && (d.role === 'in' || d.role === 'out'));

@@ -106,7 +106,12 @@ export const FIGURE_KIND_LABEL: Record<FigureKind, string> = {
  *  - speed: 'exhaust' (exhaust or jet speed) or 'delta-v' (a claimed change of speed);
  *  - null when the words do not say.
  */
-export const FIGURE_ROLES = ['in', 'out', 'excess', 'hot', 'cold', 'heating', 'cooling', 'wet', 'dry', 'propellant', 'exhaust', 'delta-v'] as const;
+/**
+ * What a figure is to the device. 'aside': a figure of something else the text mentions (the time it
+ * took to build, the mass of the test stand, the room's temperature when the machine's own sides are
+ * given): kept and shown, never used by a check.
+ */
+export const FIGURE_ROLES = ['in', 'out', 'excess', 'hot', 'cold', 'heating', 'cooling', 'wet', 'dry', 'propellant', 'exhaust', 'delta-v', 'aside'] as const;
 export type FigureRole = (typeof FIGURE_ROLES)[number] | null;
 
 /** Words said before or around a figure that qualify it ("up to", "about", "±"). */
