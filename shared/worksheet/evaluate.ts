@@ -7,7 +7,9 @@
  *
  * Semantics:
  *  - Inputs: a missing (or blank) value takes the input's default. Values are typed quantities
- *    (quantity.ts). A value outside [min, max] is an error at that input, kind 'range'.
+ *    (quantity.ts). A value outside [min, max] is an error at that input, kind 'range'. An input of
+ *    kind "difference" (a temperature rise, a ΔT) reads offset units by their size only: "2 degC"
+ *    is 2 K, "3.6 degF" is 2 K; it is shown the same way.
  *  - Steps run in order; a step may use inputs, constants (constants.ts), the steps above it and
  *    the kit functions. A step whose result does not match its declared unit is a dimension error
  *    at that step. A step that uses a failed input or step reports, kind 'value', which one it
@@ -41,6 +43,7 @@ import type {
 } from './types';
 import {
   QuantityError,
+  asDifference,
   describeDims,
   describeValue,
   fromSI,
@@ -102,6 +105,9 @@ interface CInput {
   name: string;
   label: string;
   unit: string;
+  /** A difference (kind "difference"): offset units count only their size, "2 degC" is 2 K. */
+  difference: boolean;
+  /** The input's unit, read as a difference for a difference input (no offset). */
   info?: UnitInfo;
   staticError?: EvaluationError;
   defaultText: string;
@@ -401,7 +407,8 @@ export function compileWorksheet(ws: Worksheet, opts: CompileOptions = {}): Comp
 
   // ---- inputs
   const inputs: CInput[] = ws.inputs.map((def, index) => {
-    const ci: CInput = { index, name: def.name, label: def.label, unit: def.unit, defaultText: def.default };
+    const difference = def.kind === 'difference';
+    const ci: CInput = { index, name: def.name, label: def.label, unit: def.unit, difference, defaultText: def.default };
     const bad = nameProblem(def.name);
     if (bad) {
       ci.staticError = label('Input', def.name, bad);
@@ -409,7 +416,7 @@ export function compileWorksheet(ws: Worksheet, opts: CompileOptions = {}): Comp
       return ci;
     }
     try {
-      ci.info = unitInfo(def.unit);
+      ci.info = difference ? asDifference(unitInfo(def.unit)) : unitInfo(def.unit);
     } catch (e) {
       ci.staticError = label('Input', def.name, quantityErrorOf(e));
       problems.push({ path: ['inputs', index, 'unit'], error: ci.staticError });
@@ -419,7 +426,7 @@ export function compileWorksheet(ws: Worksheet, opts: CompileOptions = {}): Comp
       const text = def[which];
       if (text === undefined) continue;
       try {
-        const si = parseQuantity(text, def.unit);
+        const si = parseQuantity(text, def.unit, { difference });
         if (which === 'min') ci.minSi = si;
         else ci.maxSi = si;
       } catch (e) {
@@ -556,12 +563,12 @@ export function compileWorksheet(ws: Worksheet, opts: CompileOptions = {}): Comp
     let from: number;
     let to: number;
     try {
-      from = parseQuantity(def.sweep.from, input.unit);
+      from = parseQuantity(def.sweep.from, input.unit, { difference: input.difference });
     } catch (e) {
       return fail(['sweep', 'from'], { ...quantityErrorOf(e), message: `from: ${quantityErrorOf(e).message}` });
     }
     try {
-      to = parseQuantity(def.sweep.to, input.unit);
+      to = parseQuantity(def.sweep.to, input.unit, { difference: input.difference });
     } catch (e) {
       return fail(['sweep', 'to'], { ...quantityErrorOf(e), message: `to: ${quantityErrorOf(e).message}` });
     }
@@ -601,7 +608,7 @@ export function compileWorksheet(ws: Worksheet, opts: CompileOptions = {}): Comp
     if (ci.lastOutcome && ci.lastRaw === text) return ci.lastOutcome;
     let outcome: Outcome;
     try {
-      const si = parseQuantity(text, ci.unit);
+      const si = parseQuantity(text, ci.unit, { difference: ci.difference });
       const info = ci.info as UnitInfo;
       if (ci.minSi !== undefined && si < ci.minSi) {
         outcome = {
@@ -826,17 +833,19 @@ export function compileWorksheet(ws: Worksheet, opts: CompileOptions = {}): Comp
       }
     }
     let axisText = firstDims ? siUnitFor(firstDims) : '';
+    let axisIsDifference = false;
     const first = p.series[0];
     if (first.kind === 'input') {
       const ci = inputByName.get(first.name);
       if (ci && ci.unit !== '') axisText = ci.unit;
+      axisIsDifference = !!ci?.difference;
     } else {
       const st = steps[stepIndex.get(first.name) as number];
       if (st.declared && st.declaredText) axisText = st.declaredText;
     }
     let axis: UnitInfo;
     try {
-      axis = unitInfo(axisText);
+      axis = axisIsDifference ? asDifference(unitInfo(axisText)) : unitInfo(axisText);
     } catch {
       axis = unitInfo('');
     }

@@ -53,6 +53,11 @@ export class ExpressionError extends Error {
 
 const instance = create(all, { number: 'number', matrix: 'Matrix', predictable: false });
 
+// Metric horsepower (Pferdestärke, cheval-vapeur) beside mathjs's mechanical horsepower "hp":
+// 1 PS = 75 kgf·m/s = 735.49875 W exactly (NIST SP 811 (2008), App. B.8, "horsepower, metric").
+// Without it mathjs reads "PS" as a petasiemens. Made before the instance is locked; no prefixes.
+instance.createUnit('PS', { definition: '735.49875 W', prefixes: 'none' });
+
 // Capture what this module needs before the instance is locked.
 const parseText: (text: string) => MathNode = instance.parse;
 const unitClass = instance.Unit;

@@ -6,7 +6,7 @@
  *  - One number, then optionally a unit expression: "2.5e-3 N", "3.4 × 10^5 W", "9.81 m/s^2",
  *    "1 kWh", "450 degC" (also "450 °C"), "80 %". Nothing else: no arithmetic, no function calls and
  *    no constants (write "299792458 m/s", not "1 c"). Units are mathjs's (lbf, hp, BTU, psi, inch,
- *    lbm, degF, kWh, …); in a typed quantity "h" is the hour.
+ *    lbm, degF, kWh, …) and PS, the metric horsepower (math.ts); in a typed quantity "h" is the hour.
  *  - Thousands separators are refused with a message that says how to write the number ("1,200 W"
  *    → write 1200 W): a comma may be a decimal mark in the writer's locale, and a guess could be
  *    off by a factor of a thousand. Spaces inside a number ("1 200 W") are refused the same way.
@@ -16,11 +16,17 @@
  *    "K") is 723.15 (K).
  *
  * The display strings formatQuantity makes are accepted back by parseQuantity (µ, Ω, °C, ×, 10^n).
+ *
+ * Differences: an input that is a temperature difference (a rise, a ΔT) is read with
+ * { difference: true }. Then a unit with an offset counts only its size, as the SI Brochure (9th ed.,
+ * 2.3.1) has it for Celsius: "2 degC" is 2 K (not 275.15 K), "3.6 degF" is 2 K, "2 K" is 2 K; and
+ * formatQuantity / toQuantityValue with the same option show the value without the offset.
  */
 import { MAX_QUANTITY_LENGTH } from './schema';
 import type { QuantityValue } from './types';
 import {
   QuantityError,
+  asDifference,
   describeDims,
   formatAuto,
   formatIn,
@@ -45,6 +51,12 @@ function mismatch(typed: string, got: UnitInfo, want: UnitInfo): QuantityError {
   return new QuantityError('dimension', `${quote(typed)} is ${describeDims(got.dims)}, but this needs ${describeDims(want.dims)}`);
 }
 
+/** How a typed value is read: as a value on its unit's scale (the default) or as a difference. */
+export interface QuantityOptions {
+  /** A difference (a temperature rise, a ΔT): units with an offset (degC, degF) count only their size. */
+  difference?: boolean;
+}
+
 function targetInfo(unit: string): UnitInfo {
   try {
     return unitInfo(unit);
@@ -59,15 +71,16 @@ function targetInfo(unit: string): UnitInfo {
  * Throws QuantityError (kind syntax, unknown_symbol, dimension, refused or value) with a message in
  * plain words.
  */
-export function parseQuantity(input: string | { value: number; unit: string }, unit: string): number {
+export function parseQuantity(input: string | { value: number; unit: string }, unit: string, opts: QuantityOptions = {}): number {
   const want = targetInfo(unit);
+  const read = (info: UnitInfo) => (opts.difference ? asDifference(info) : info);
   if (typeof input === 'object' && input !== null) {
     if (typeof input.value !== 'number' || !Number.isFinite(input.value)) {
       throw new QuantityError('value', `${String(input.value)} is not a finite number`);
     }
     const got = unitInfo(input.unit ?? '');
     if (!sameDims(got.dims, want.dims)) throw mismatch(`${input.value} ${input.unit}`.trim(), got, want);
-    return toSI(input.value, got);
+    return toSI(input.value, read(got));
   }
   if (typeof input !== 'string') throw new QuantityError('syntax', 'a value is needed, such as "0.25 lbf"');
   const typed = input.trim();
@@ -116,7 +129,7 @@ export function parseQuantity(input: string | { value: number; unit: string }, u
   }
   let si: number;
   if (unitText === '') {
-    si = toSI(n, want);
+    si = toSI(n, read(want));
   } else {
     let got: UnitInfo;
     try {
@@ -126,7 +139,7 @@ export function parseQuantity(input: string | { value: number; unit: string }, u
       throw err;
     }
     if (!sameDims(got.dims, want.dims)) throw mismatch(typed, got, want);
-    si = toSI(n, got);
+    si = toSI(n, read(got));
   }
   if (!Number.isFinite(si)) throw new QuantityError('value', `${quote(typed)} is too large to compute with`);
   return si;
@@ -138,7 +151,7 @@ export function parseQuantity(input: string | { value: number; unit: string }, u
  * trailing zeros trimmed; very large or small numbers in scientific notation ("3.4 × 10^5");
  * NaN and infinities in words.
  */
-export function formatQuantity(si: number, unit: string, opts: { displayUnit?: string; digits?: number } = {}): string {
+export function formatQuantity(si: number, unit: string, opts: { displayUnit?: string; digits?: number } & QuantityOptions = {}): string {
   const digits = opts.digits ?? 4;
   const info = unitInfo(unit);
   if (opts.displayUnit !== undefined && opts.displayUnit !== null) {
@@ -149,15 +162,18 @@ export function formatQuantity(si: number, unit: string, opts: { displayUnit?: s
         `${quote(opts.displayUnit)} is ${describeDims(shown.dims)}, but the value is ${describeDims(info.dims)}`,
       );
     }
-    return formatIn(si, shown, digits);
+    return formatIn(si, opts.difference ? asDifference(shown) : shown, digits);
   }
   return formatAuto(si, info.dims, digits);
 }
 
-/** A QuantityValue: the SI value, the SI unit of its dimension (mathjs syntax) and a display string. */
-export function toQuantityValue(si: number, unit: string, displayUnit?: string): QuantityValue {
+/**
+ * A QuantityValue: the SI value, the SI unit of its dimension (mathjs syntax) and a display string
+ * (a difference shown without its unit's offset, e.g. 2 K in degC as "2 °C").
+ */
+export function toQuantityValue(si: number, unit: string, displayUnit?: string, opts: QuantityOptions = {}): QuantityValue {
   const info = unitInfo(unit);
-  return { si, unit: siUnitFor(info.dims), display: formatQuantity(si, unit, { displayUnit }) };
+  return { si, unit: siUnitFor(info.dims), display: formatQuantity(si, unit, { displayUnit, difference: opts.difference }) };
 }
 
 /** The kind of quantity and its dimension in SI base units, e.g. "a force (kg m s^-2)". */

@@ -27,6 +27,12 @@ export const worksheetInputSchema = z.object({
   /** The unit the input is shown in and must be convertible to; "" for a pure number. */
   unit: z.string().max(40),
   default: quantityTextSchema,
+  /**
+   * What the value is: "absolute" (the default when absent) reads "20 degC" as the temperature
+   * 293.15 K; "difference" is for a rise or a ΔT and reads "2 degC" as 2 K and "3.6 degF" as 2 K
+   * (the default, min, max and a sweep's from/to are read the same way).
+   */
+  kind: z.enum(['absolute', 'difference']).optional(),
   /** Inclusive bounds, as typed quantities in any compatible unit. */
   min: quantityTextSchema.optional(),
   max: quantityTextSchema.optional(),

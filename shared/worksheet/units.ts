@@ -266,6 +266,14 @@ export function unitInfo(raw: string): UnitInfo {
   return info;
 }
 
+/**
+ * The same unit read as a difference: its size without its offset (a step of 1 degC is 1 K, of
+ * 1 degF is 5/9 K; SI Brochure, 9th ed., 2.3.1). Units without an offset come back unchanged.
+ */
+export function asDifference(info: UnitInfo): UnitInfo {
+  return info.offsetSI === 0 ? info : Object.freeze({ ...info, offsetSI: 0 });
+}
+
 export function toSI(n: number, info: UnitInfo): number {
   return n * info.factor + info.offsetSI;
 }
