@@ -44,7 +44,11 @@ const inputs: CheckInputSpec[] = [
     default: '0.1',
     min: 0,
     max: 1,
-    help: 'The fraction of the radiated power that, on balance, leaves in one direction: 0 for a uniform glow, 1 for a perfect beam.',
+    help:
+      'The fraction of the radiated power that, on balance, leaves in one direction: 0 for emission that is the same ' +
+      'in every direction, 2/3 for a single flat face radiating diffusely (Lambertian) and the rest of the device dark, ' +
+      '1 for a collimated beam. 0.1 is only a placeholder for a device that glows more on one side; take it from the ' +
+      'device\'s own temperatures and emissivities.',
   },
   {
     name: 'k_drift',
@@ -58,7 +62,16 @@ const inputs: CheckInputSpec[] = [
       'The apparent force the balance reads per kelvin of warming (from its calibration, or a null run with a dummy ' +
       'load). 1 µN/K is only a placeholder for a torsion balance (common practice, no source).',
   },
-  { name: 'dT', label: 'Temperature rise during the run', unit: 'K', default: '2 K', min: 0, max: 1e4 },
+  {
+    name: 'dT',
+    label: 'Temperature rise during the run',
+    unit: 'K',
+    kind: 'difference',
+    default: '2 K',
+    min: 0,
+    max: 1e4,
+    help: 'A difference: "2 degC" of rise is 2 K, "3.6 degF" is 2 K.',
+  },
   {
     name: 'mdot',
     label: 'Outgassing mass rate',
@@ -73,10 +86,13 @@ const inputs: CheckInputSpec[] = [
     name: 'v_gas',
     label: 'Speed of the outgassed molecules',
     unit: 'm / s',
-    default: '300 m / s',
+    default: '500 m / s',
     min: 0,
     max: 1e5,
-    help: 'Of the order of the thermal speed, a few hundred m/s near room temperature (from memory).',
+    help:
+      'The mean speed away from the surface of the molecules leaving it, √(πkT/2m) by the kinetic theory of gases: ' +
+      'about 470 m/s for water vapour, the commonest outgassed species, at 300 K and about 500 m/s at 340 K. Lighter gases ' +
+      'and hotter parts are faster.',
   },
 ];
 

@@ -108,8 +108,8 @@ describe('Carnot bounds', () => {
       ),
     );
   });
-  test('Tc ≥ Th and T ≤ 0 are refused, naming the field', () => {
-    expect(fieldOf(() => f.carnotEfficiency(300, 300))).toBe('Tc');
+  test('Tc > Th and T ≤ 0 are refused, naming the field (Tc = Th is one reservoir: see corrections.test.ts)', () => {
+    expect(fieldOf(() => f.carnotEfficiency(300, 300.001))).toBe('Tc');
     expect(fieldOf(() => f.carnotCopHeating(300, 400))).toBe('Tc');
     expect(fieldOf(() => f.carnotCopCooling(0, -1))).toBe('Th');
     expect(fieldOf(() => f.carnotEfficiency(300, 0))).toBe('Tc');

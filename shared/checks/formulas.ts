@@ -39,30 +39,35 @@ export function kineticPower(F: number, v: number): number {
   return F * v;
 }
 
+/**
+ * Both temperatures above zero and Tc ≤ Th. Tc = Th is allowed: a single reservoir, where a heat
+ * engine can do no work (bound 0, the Kelvin–Planck statement) and moving heat needs no work in the
+ * reversible limit (the COP bounds are infinite).
+ */
 function carnotTemperatures(Th: number, Tc: number): void {
   positive('Th', Th);
   positive('Tc', Tc);
-  if (!(Tc < Th)) {
-    throw new CheckRangeError('Tc', `The cold temperature (${fmt(Tc)} K) must be below the hot one (${fmt(Th)} K).`);
+  if (Tc > Th) {
+    throw new CheckRangeError('Tc', `The cold temperature (${fmt(Tc)} K) must not be above the hot one (${fmt(Th)} K).`);
   }
 }
 
-/** Carnot's bound on the efficiency of a heat engine between Th and Tc (K): 1 − Tc/Th. */
+/** Carnot's bound on the efficiency of a heat engine between Th and Tc (K): 1 − Tc/Th; 0 when Tc = Th. */
 export function carnotEfficiency(Th: number, Tc: number): number {
   carnotTemperatures(Th, Tc);
   return 1 - Tc / Th;
 }
 
-/** Carnot's bound on a heat pump's heating COP (heat delivered at Th per unit work): Th/(Th − Tc). */
+/** Carnot's bound on a heat pump's heating COP (heat delivered at Th per unit work): Th/(Th − Tc); infinite when Tc = Th. */
 export function carnotCopHeating(Th: number, Tc: number): number {
   carnotTemperatures(Th, Tc);
-  return Th / (Th - Tc);
+  return Tc === Th ? Number.POSITIVE_INFINITY : Th / (Th - Tc);
 }
 
-/** Carnot's bound on a refrigerator's cooling COP (heat drawn at Tc per unit work): Tc/(Th − Tc). */
+/** Carnot's bound on a refrigerator's cooling COP (heat drawn at Tc per unit work): Tc/(Th − Tc); infinite when Tc = Th. */
 export function carnotCopCooling(Th: number, Tc: number): number {
   carnotTemperatures(Th, Tc);
-  return Tc / (Th - Tc);
+  return Tc === Th ? Number.POSITIVE_INFINITY : Tc / (Th - Tc);
 }
 
 /** Exhaust speed (m/s) from a specific impulse Isp (s): Isp·g0. */
@@ -81,6 +86,51 @@ export function tsiolkovskyDv(v_e: number, m0: number, m1: number): number {
 }
 
 /**
+ * The relativistic rocket equation (Ackeret 1946): the speed (m/s) gained from rest, relative to the
+ * starting frame, by a rocket whose exhaust leaves at v_e (m/s, 0 ≤ v_e ≤ c, in the rocket's frame)
+ * while its rest mass falls from m0 to m1: c·tanh((v_e/c)·ln(m0/m1)). Always below c; for a photon
+ * exhaust (v_e = c) it gives m0/m1 = √((1 + β)/(1 − β)). It is always the correct form; Tsiolkovsky's
+ * v_e ln(m0/m1) is its limit for v_e ln(m0/m1) ≪ c (see newtonianRocketExcess).
+ */
+export function relativisticRocketDv(v_e: number, m0: number, m1: number): number {
+  if (v_e > C_LIGHT) throw new CheckRangeError('v_e', `The exhaust speed (${fmt(v_e)} m/s) cannot exceed the speed of light.`);
+  const newtonian = tsiolkovskyDv(v_e, m0, m1); // checks v_e, m0, m1
+  return C_LIGHT * Math.tanh(newtonian / C_LIGHT);
+}
+
+/**
+ * How much Tsiolkovsky's Newtonian Δv overstates the relativistic one, as a fraction:
+ * x/tanh(x) − 1 with x = v_e ln(m0/m1)/c (0 when no propellant is spent). About x²/3 for small x.
+ */
+export function newtonianRocketExcess(v_e: number, m0: number, m1: number): number {
+  const newtonian = tsiolkovskyDv(v_e, m0, m1);
+  const x = newtonian / C_LIGHT;
+  if (x === 0) return 0;
+  // For small x, x/tanh(x) − 1 loses digits to cancellation: the series x²/3 − x⁴/45 + 2x⁶/945 instead.
+  if (x < 1e-3) return (x * x) / 3 - (x ** 4) / 45 + (2 * x ** 6) / 945;
+  return x / Math.tanh(x) - 1;
+}
+
+/**
+ * The Newtonian Δv over c, x = v_e ln(m0/m1)/c, below which Tsiolkovsky's form agrees with the
+ * relativistic one to within `fraction` (x/tanh(x) − 1 ≤ fraction), found by bisection:
+ * 0.0548 for 0.1 % (about 16 400 km/s of v_e ln(m0/m1)).
+ */
+export function rocketAgreementLimit(fraction: number): number {
+  positive('fraction', fraction);
+  const excess = (x: number) => (x < 1e-3 ? (x * x) / 3 - (x ** 4) / 45 : x / Math.tanh(x) - 1);
+  let lo = 0;
+  let hi = 1;
+  while (excess(hi) < fraction) hi *= 2;
+  for (let i = 0; i < 200 && hi - lo > 1e-15 * hi; i++) {
+    const mid = (lo + hi) / 2;
+    if (excess(mid) > fraction) hi = mid;
+    else lo = mid;
+  }
+  return lo;
+}
+
+/**
  * Force (N) on a straight lead of length L (m) carrying current I (A) across a field B (T), at its
  * largest (lead perpendicular to the field): |I·L·B|.
  */
@@ -91,7 +141,11 @@ export function leadLorentzForce(I: number, L: number, B: number): number {
   return Math.abs(I * L * B);
 }
 
-/** Recoil (N) of radiating power P (W) with a net asymmetry fraction f (0…1) in one direction: f·P/c. */
+/**
+ * Recoil (N) of radiating power P (W) with a net asymmetry fraction f (0…1) in one direction: f·P/c.
+ * f is 1 for a collimated beam, 2/3 for a flat face radiating diffusely (Lambertian: the mean of
+ * cos θ over the emitted power, ∫cos²θ sinθ dθ / ∫cosθ sinθ dθ on [0, π/2]), 0 for isotropic emission.
+ */
 export function radiationRecoilForce(P: number, f: number): number {
   nonNegative('P', P);
   nonNegative('f', f);

@@ -23,7 +23,10 @@ const inputs: CheckInputSpec[] = [
     default: '1 kW',
     min: 0,
     max: 1e18,
-    help: 'A device that only emits radiation can at best turn all its input power into one collimated beam.',
+    help:
+      'A device that only emits radiation can at best turn all its input power into one collimated beam, which ' +
+      'pushes with P/c. Other patterns push less, f·P/c: f = 1 for a collimated beam, 2/3 for a flat face ' +
+      'radiating diffusely (Lambertian, the rest of the device dark) and 0 for emission that is the same in every direction.',
   },
 ];
 
@@ -32,7 +35,9 @@ export const photonBound: CheckDefinition = {
   title: 'Propellant-free thrust against the photon-rocket bound',
   summary:
     'A device that throws out nothing but radiation gets its push from the momentum of that radiation, and ' +
-    'light of power P carries momentum at the rate P/c. So the thrust can be at most P/c: about 3.3 µN per kilowatt. ' +
+    'light of power P carries momentum at the rate P/c. So the thrust can be at most P/c: about 3.3 µN per kilowatt, ' +
+    'reached only by one collimated beam (a flat face radiating diffusely gets 2/3 of it, an even glow in every ' +
+    'direction none). ' +
     'Use it for any "propellant-free" thruster whose only exhaust could be light, microwaves or heat.',
   condition: 'claimed thrust ≤ P/c',
   inputs,

@@ -42,10 +42,11 @@ export function runCheck(name: CheckName, raw: Partial<Record<string, RawInput>>
   for (const spec of def.inputs) {
     const given = raw[spec.name];
     try {
-      const value = parseQuantity(given === undefined || given === '' ? spec.default : given, spec.unit);
+      const difference = spec.kind === 'difference'; // "2 degC" of rise is 2 K, not 275.15 K
+      const value = parseQuantity(given === undefined || given === '' ? spec.default : given, spec.unit, { difference });
       readInputs([spec], { [spec.name]: value }); // bounds and whole numbers, as the check itself reads them
       si[spec.name] = value;
-      inputs[spec.name] = toQuantityValue(value, spec.unit, spec.displayUnit);
+      inputs[spec.name] = toQuantityValue(value, spec.unit, spec.displayUnit, { difference });
     } catch (err) {
       if (err instanceof QuantityError) fields[`inputs.${spec.name}`] = `${spec.label}: ${err.message}`;
       else if (err instanceof CheckRangeError) fields[`inputs.${spec.name}`] = err.message;

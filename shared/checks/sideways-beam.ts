@@ -4,7 +4,8 @@
  * azimuth) and are pushed by the steered sideways field of boris.ts — a transverse E of fixed
  * magnitude along each particle's own transverse motion, exactly zero along z — optionally in a
  * uniform B along z (which only turns them) and a uniform E_z (the one force along z).
- * γ rises and v_z = p_z/(γm) falls, while p_z changes only by the impulse q E_z t.
+ * γ rises, and with it the particle's speed; v_z = p_z/(γm), the velocity component along the original
+ * axis, falls, while p_z changes only by the impulse q E_z t.
  */
 import { runBoris, createBeam, launchAlongZ, uFromGamma, type BorisFields } from './boris';
 import { CAUTION_HIGH_VOLTAGE, CAUTION_RADIATION, CAUTION_VACUUM } from './cautions';
@@ -104,9 +105,10 @@ export const sidewaysBeam: CheckDefinition = {
   name: 'sideways-beam',
   title: 'Relativistic beam under sideways forces only',
   summary:
-    'Push a fast charged particle sideways and it gains energy, so its Lorentz factor γ rises and — since it ' +
-    'cannot go faster than light — its speed along its path, v_z, falls. That can look like a "drag" or a ' +
-    'longitudinal kick, but its momentum along z, p_z = γ m v_z, does not change at all without a force along z. ' +
+    'Push a fast charged particle sideways and it gains energy: its Lorentz factor γ rises, and so does its speed. ' +
+    'What falls is v_z, the component of its velocity along the original axis, because the velocity turns sideways ' +
+    'and p_z = γ m v_z stays fixed while γ grows. That can look like a "drag" or a longitudinal kick, but its ' +
+    'momentum along z, p_z, does not change at all without a force along z. ' +
     'Integrated here with the Boris pusher for a small beam. Use it for claims that a sideways force on a beam ' +
     'or on moving charges yields a net push along the beam.',
   condition: `p_z changes only by the impulse of the force along z, q E_z t (within ${BEAM_TOLERANCE} relative)`,
@@ -136,10 +138,13 @@ export const sidewaysBeam: CheckDefinition = {
     const holds = run.pzDriftMaxRel <= BEAM_TOLERANCE;
     const omegaDt = x.B_z !== 0 ? gyroFrequency(x.q, x.B_z, x.m, Math.max(g0, g1)) * dt : 0;
     const beta = (v: number) => fmt(v / C_LIGHT, 6);
+    /** Speed over c from the Lorentz factor: √(1 − 1/γ²), written (γ² − 1)/γ² to keep digits near γ = 1. */
+    const betaOf = (g: number) => Math.sqrt((g - 1) * (g + 1)) / g;
     let message =
       (x.K0 > 0 ? `A kinetic energy of ${fmtQ(x.K0 / E_CHARGE, 'eV')} gives γ0 = ${fmt(gammaStart, 6)}. ` : '') +
       `Over ${fmtQ(x.duration, 's')} (${x.steps} Boris steps, ${x.particles} particles) the sideways field took γ from ` +
-      `${fmt(g0, 6)} to ${fmt(g1, 6)} and v_z from ${beta(vz0)} c to ${beta(vz1)} c. ` +
+      `${fmt(g0, 6)} to ${fmt(g1, 6)}, so the speed rose from ${fmt(betaOf(g0), 6)} c to ${fmt(betaOf(g1), 6)} c, ` +
+      `while v_z, the velocity along the original axis, went from ${beta(vz0)} c to ${beta(vz1)} c. ` +
       (x.E_z === 0
         ? `With no force along z, p_z = γ m v_z stayed at ${fmt(pz0, 6)} kg m/s ` +
           (run.pzDriftMaxRel === 0
@@ -168,6 +173,8 @@ export const sidewaysBeam: CheckDefinition = {
         { name: 'z_impulse', label: 'Impulse of the z force q E_z t', si: impulse, unit: 'N s' },
         { name: 'pz_drift_rel', label: 'Largest relative departure of p_z from p_z0 + q E_z t', si: run.pzDriftMaxRel, unit: '' },
         { name: 'p_start', label: 'Starting momentum |p|', si: x.m * uFromGamma(gammaStart), unit: 'kg m / s' },
+        { name: 'speed_start', label: 'Speed |v| at the start', si: C_LIGHT * betaOf(g0), unit: 'm / s', displayUnit: 'km / s' },
+        { name: 'speed_end', label: 'Speed |v| at the end (it rises with γ)', si: C_LIGHT * betaOf(g1), unit: 'm / s', displayUnit: 'km / s' },
       ],
       verdict: { holds, message },
       plots: [

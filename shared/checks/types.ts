@@ -25,6 +25,11 @@ export interface CheckInputSpec {
   displayUnit?: string;
   /** A typed quantity, e.g. "1 mN", "1.5 kW", "300 K". */
   default: string;
+  /**
+   * What the value is: "absolute" (the default when absent) reads "20 degC" as 293.15 K; "difference"
+   * is for a temperature rise or a ΔT and reads "2 degC" as 2 K and "3.6 degF" as 2 K (DESIGN.md §4).
+   */
+  kind?: 'absolute' | 'difference';
   /** Inclusive bounds in SI (the `unit` above). */
   min?: number;
   max?: number;
