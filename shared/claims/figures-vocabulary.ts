@@ -81,10 +81,11 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'thrust', unit: 'kgf', factor: 1e-6, symbols: ['mgf'], words: ['milligram-force', 'milligrams-force', 'mg of thrust', 'milligrams of thrust'] },
 
   // Power
-  { kind: 'power', unit: 'W', symbols: ['W', 'We', 'Wt', 'Wth'], words: ['watt', 'watts'] },
+  // Lower-case symbols as forum posts write them ("500w", "2kw", "12v"); "mw" and "a" stay out: mW or MW, and the article.
+  { kind: 'power', unit: 'W', symbols: ['W', 'We', 'Wt', 'Wth', 'w'], words: ['watt', 'watts'] },
   { kind: 'power', unit: 'uW', symbols: micro('W'), words: ['microwatt', 'microwatts'] },
   { kind: 'power', unit: 'mW', symbols: ['mW'], words: ['milliwatt', 'milliwatts'] },
-  { kind: 'power', unit: 'kW', symbols: ['kW', 'KW', 'kWe', 'kWt', 'kWth'], words: ['kilowatt', 'kilowatts'] },
+  { kind: 'power', unit: 'kW', symbols: ['kW', 'KW', 'kWe', 'kWt', 'kWth', 'kw'], words: ['kilowatt', 'kilowatts'] },
   { kind: 'power', unit: 'MW', symbols: ['MW', 'MWe', 'MWt', 'MWth'], words: ['megawatt', 'megawatts'] },
   { kind: 'power', unit: 'GW', symbols: ['GW', 'GWe', 'GWt', 'GWth'], words: ['gigawatt', 'gigawatts'] },
   { kind: 'power', unit: 'hp', symbols: ['hp', 'HP', 'bhp', 'BHP', 'shp'], words: ['horsepower', 'horse power', 'mechanical horsepower', 'brake horsepower'] },
@@ -108,8 +109,8 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'energy', unit: 'kJ', symbols: ['kJ'], words: ['kilojoule', 'kilojoules'] },
   { kind: 'energy', unit: 'MJ', symbols: ['MJ'], words: ['megajoule', 'megajoules'] },
   { kind: 'energy', unit: 'GJ', symbols: ['GJ'], words: ['gigajoule', 'gigajoules'] },
-  { kind: 'energy', unit: 'Wh', symbols: ['Wh', 'W·h', 'W⋅h'], words: ['watt-hour', 'watt-hours'] },
-  { kind: 'energy', unit: 'kWh', symbols: ['kWh', 'KWh', 'kW·h', 'kW⋅h'], words: ['kilowatt-hour', 'kilowatt-hours'] },
+  { kind: 'energy', unit: 'Wh', symbols: ['Wh', 'W·h', 'W⋅h', 'wh'], words: ['watt-hour', 'watt-hours'] },
+  { kind: 'energy', unit: 'kWh', symbols: ['kWh', 'KWh', 'kW·h', 'kW⋅h', 'kwh'], words: ['kilowatt-hour', 'kilowatt-hours'] },
   { kind: 'energy', unit: 'MWh', symbols: ['MWh', 'MW·h', 'MW⋅h'], words: ['megawatt-hour', 'megawatt-hours'] },
   { kind: 'energy', unit: 'GWh', symbols: ['GWh'], words: ['gigawatt-hour', 'gigawatt-hours'] },
   { kind: 'energy', unit: 'BTU', symbols: ['BTU', 'Btu', 'btu', 'BTUs', 'Btus'], words: ['British thermal unit', 'British thermal units'] },
@@ -170,9 +171,9 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   },
 
   // Voltage
-  { kind: 'voltage', unit: 'V', symbols: ['V', 'VDC', 'VAC', 'Vdc', 'Vac', 'V DC', 'V AC', 'Vrms', 'V rms'], words: ['volt', 'volts'] },
+  { kind: 'voltage', unit: 'V', symbols: ['V', 'VDC', 'VAC', 'Vdc', 'Vac', 'V DC', 'V AC', 'Vrms', 'V rms', 'v', 'vdc', 'vac'], words: ['volt', 'volts'] },
   { kind: 'voltage', unit: 'mV', symbols: ['mV'], words: ['millivolt', 'millivolts'] },
-  { kind: 'voltage', unit: 'kV', symbols: ['kV'], words: ['kilovolt', 'kilovolts'] },
+  { kind: 'voltage', unit: 'kV', symbols: ['kV', 'kv'], words: ['kilovolt', 'kilovolts'] },
 
   // Duration ("s" alone is left out: seconds are written out, or read as Isp after "Isp"/"specific impulse")
   { kind: 'duration', unit: 's', symbols: ['s', 'sec', 'secs'], words: ['second', 'seconds'] },
@@ -288,7 +289,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
   },
   {
     role: 'dry',
-    before: ['dry', 'empty', 'final', 'burn-?out', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert'],
+    before: ['dry', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert'],
     after: ['(?:dry|empty|final|burn-?out|structural) mass', 'dry', 'empty', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end'],
   },
   {
@@ -331,7 +332,7 @@ export const HEAT_PUMP_WORDS = [
   'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:moves?|pumps?|lifts?) heat',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
-export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling'];
+export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini-?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?'];
 
 /** Words that make a temperature a difference: before ("ΔT of 20 K") or after ("a 20 K difference"). */
 export const DIFFERENCE_BEFORE = [

@@ -55,6 +55,11 @@ export const CHECK_LAW: Record<CheckName, string> = {
   'artifact-budget': 'conservation of linear momentum',
   'rocket-equation': 'conservation of linear momentum (the rocket equation)',
   'light-speed': 'special relativity',
+  'faraday-yield': "conservation of charge (Faraday's law of electrolysis)",
+  'nuclear-signature': 'conservation of energy (chemistry gives a few electronvolts per atom; more needs nuclear reactions and their radiation)',
+  'road-load': 'conservation of energy',
+  'light-converter-limits': 'the second law of thermodynamics (the radiative limits of light conversion)',
+  landauer: "the second law of thermodynamics (Landauer's bound)",
 };
 
 /**
@@ -82,6 +87,10 @@ const OVER_UNITY_RE =
   /(?<!\p{L})(?:power conversion efficiency|wall-?plug efficiency|conversion efficiency|electrical efficiency|over-?unity|overunity|free energy|self-?running|self-?sustaining|self-?charging|perpetual|more (?:energy|power) (?:out )?than|generators?|alternators?|magnet(?:ic)? motors?|motors?|output exceeds|exceeds (?:the|its) input|circuits?|coils?|lamps?|LEDs?|bulbs?|(?:solar|fuel|photovoltaic) cells?|panels?|batter(?:y|ies)|zero-?point|ZPE|vacuum|electrolys\w*|HHO|oxyhydrogen|wheels?|amplifiers?|converters?|inverters?|electrical (?:output|energy|power))(?!\p{L})/iu;
 const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|brine|well water|borehole|source temperature|outdoors?)(?!\p{L})/iu;
 const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
+/** A device whose output is heat (a solar collector, a boiler, a heater): its efficiency is heat over heat. */
+const HEAT_ONLY_RE = /(?<!\p{L})(?:(?:delivered|given|supplied|collected|recovered|available|comes? out|output) as (?:useful )?heat|heat output|thermal output|(?:solar|flat-?plate|evacuated-?tube) (?:thermal )?collectors?|solar thermal|collector efficiency|water heaters?|boilers?|furnaces?|space heaters?)(?!\p{L})/iu;
+/** A converter of electricity (its operating temperatures are no reservoirs). */
+const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
 /** Boiler efficiencies on the net (lower) calorific value may exceed 100 % by convention. */
 const NET_CALORIFIC_RE = /(?<!\p{L})(?:condensing|net (?:CV|calorific|heating)|LHV|lower heating value|lower calorific)(?!\p{L})/iu;
 /** A machine that moves heat is said to: cooling words name a fridge or chiller the text may only mention as a load. */
@@ -370,13 +379,17 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
         f.role === 'out' &&
         (/^[^.;,]{0,30}?(?:heat|heating)/i.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)) || /(?:heat|heating)(?:[^\S\n]+(?:output|delivered|capacity))?[^.;,]{0,12}$/i.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0))),
     );
-  const movesHeat = s.heatPump || cooling || heatFromSource || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
+  const statedCop = ofKind(figures, 'cop').some((f) => !f.derived && (f.role === 'heating' || f.role === 'cooling'));
+  const movesHeat = s.heatPump || cooling || heatFromSource || statedCop || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
   const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, pOut ?? eOut, { ...s, cooling }) : undefined;
   const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
   /** Any efficiency or output-over-input ratio the text states (for one at most 1: a consistent balance). */
   const share = efficiency ?? ofKind(figures, 'efficiency')[0];
   const cop = ofKind(figures, 'cop')[0] ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);
-  const engineEfficiency = efficiency && (s.heatEngine || temps.length >= 2) && !(efficiency.si > 1 && temps.length < 2);
+  // An efficiency is a heat engine's only where the text speaks of work or electricity got from heat:
+  // a collector, boiler or heater that delivers heat, or a converter of electricity, is not bounded by Carnot.
+  const notAnEngine = !s.heatEngine && (HEAT_ONLY_RE.test(text) || ELECTRICAL_CONVERTER_RE.test(text));
+  const engineEfficiency = efficiency && !notAnEngine && (s.heatEngine || temps.length >= 2) && !(efficiency.si > 1 && temps.length < 2);
   const copForCarnot = cop && (cop.role !== null || s.heatPump || s.cooling || temps.length >= 2 || !s.overUnity);
   if ((engineEfficiency || copForCarnot) && temps.length >= 2) {
     const hot = temps.find((t) => t.role === 'hot') ?? [...temps].sort((a, b) => b.si - a.si)[0];

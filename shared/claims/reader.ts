@@ -680,7 +680,7 @@ function isDifference(text: string, start: number, end: number, floor: number): 
   if (/^(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)/.test(word)) {
     const rest = text.slice(end + a[0].length, end + a[0].length + 40);
     if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|(?:and|with|at|in|for|while|but|so|when)\b|$)/.test(rest)) return true;
-    return /^[^\S\n]*(?:than[^\S\n]+)?(?:(?:the|a|an|its|their)[^\S\n]+)?(?:(?:mean|average|outside|outdoor|surrounding|local|daytime|night-?time|cooling|inlet|room|deep|surface)[^\S\n]+){0,2}(?:ambient|room|outside|outdoor|surrounding|environment|air|water|inlet|sink|source|cold|hot|other|freezing|surface|\p{N}|[-−])/iu.test(rest) || /^\s*than/.test(rest);
+    return /^[^\S\n]*(?:than[^\S\n]+)?(?:(?:the|a|an|its|their)[^\S\n]+)?(?:(?:mean|average|outside|outdoor|surrounding|local|daytime|night-?time|cooling|inlet|room|deep|surface)[^\S\n]+){0,2}(?:ambient|room|outside|outdoor|surrounding|environment|air|water|inlet|sink|source|cold|hot|other|freezing|surface|\p{N}|[-−])/iu.test(rest) || /^\s*than/.test(rest) || /^[^\S\n]*(?:it|that|this|them)(?!\p{L})/iu.test(rest);
   }
   if (/^apart/.test(word)) return true;
   if (/^between|^across/.test(word)) return /^[^\S\n]*(?:the|its|two|both|hot|cold|plates|sides|ends|junctions|reservoirs)/i.test(text.slice(end + a[0].length, end + a[0].length + 20));
@@ -937,6 +937,9 @@ const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thruste
 /** Words that make a sentence's mass the craft's: the craft itself, its propellant, its engine. */
 const CRAFT_RE =
   /(?<!\p{L})(?:rockets?|propellants?|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|craft|landers?|probes?|satellites?|CubeSats?|smallsats?|microsat\w*|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines?|vehicles?|tugs?|stacks?|ships?|modules?|capsules?|boosters?|orbiters?|missiles?|payloads?|tanks?|fuel\w*|oxidi[sz]ers?|xenon|krypton|hydrazine|kerosene|methane|hydrogen|oxygen|nitrogen|argon|exhaust|wet|dry|m[01f]|masses)(?!\p{L})/iu;
+
+/** Words before the temperatures a device is rated for. */
+const OPERATING_RANGE_RE = /(?<!\p{L})(?:operating|operation|storage|ambient|rated|permitted|allowed|working) (?:temperature )?(?:range|temperatures?|limits?|conditions?)(?: (?:of|is|from|between))?[:=]?[^\S\n]*(?:from|between)?[^\S\n]*$/iu;
 
 /** Words of a time that is not how long the device ran. */
 const NOT_A_RUN_RE =
@@ -1261,6 +1264,11 @@ function relate(text: string, drafts: Draft[]): void {
       .map(sentenceOf)
       .filter((k) => thermal.reduce((n, t) => n + (sentenceOf(t) === k ? (t.upper ? 2 : 1) : 0), 0) >= 2 || drafts.some((d) => d.kind === 'temperature-difference' && sentenceOf(d) === k)),
   );
+  // "operating range −40 to 85 °C", "storage temperature": the conditions it is rated for, not its sides.
+  thermal.forEach((t, i) => {
+    const prev = thermal[i - 1];
+    if (OPERATING_RANGE_RE.test(text.slice(Math.max(0, t.start - 40), t.start)) || (prev?.role === 'aside' && /^[^\S\n]*(?:°[CF]?[^\S\n]*)?(?:to|and|[-–—…])[^\S\n]*$/u.test(text.slice(prev.end, t.start)))) t.role = 'aside';
+  });
   if (sides.size > 0) {
     for (const t of thermal) {
       const k = sentenceOf(t);
