@@ -70,6 +70,7 @@ function KnownCheck({ def, query }: { def: CheckDefinition; query: Record<string
               onChangeText={(text) => setText(spec.name, text)}
               defaultText={spec.default}
               unit={spec.unit}
+              difference={spec.kind === 'difference'}
               help={spec.help}
               presets={spec.presets}
               error={fieldError(spec.name)}

@@ -36,6 +36,7 @@ const groups: { group: Group; key: 'input' | 'step' | 'check'; title: string; ad
       { field: 'label', label: 'Label' },
       { field: 'unit', label: 'Unit ("" for a pure number)', mono: true },
       { field: 'default', label: 'Default', mono: true },
+      { field: 'kind', label: 'Kind (optional): "difference" for a rise or a ΔT, so that 2 degC reads as 2 K', optional: true, mono: true },
       { field: 'min', label: 'Least value (optional)', optional: true, mono: true },
       { field: 'max', label: 'Greatest value (optional)', optional: true, mono: true },
       { field: 'help', label: 'Help (optional)', optional: true, lines: 2 },

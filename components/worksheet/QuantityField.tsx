@@ -13,6 +13,8 @@ interface QuantityFieldProps {
   defaultText: string;
   /** The unit a number typed without one is read in; "" for a pure number. */
   unit: string;
+  /** A difference (a temperature rise, a ΔT): "2 degC" is read as 2 K, not as the temperature 275.15 K. */
+  difference?: boolean;
   help?: string;
   /** Values the reader can put in with one press, e.g. the electron's mass. */
   presets?: readonly { label: string; value: string }[];
@@ -26,12 +28,15 @@ interface QuantityFieldProps {
  * One typed quantity — a number and a unit in one field ("0.2 lbf", "450 degC") — with its label,
  * a hint at the unit, presets where there are any, and its error right beneath it.
  */
-export function QuantityField({ name, label, value, onChangeText, defaultText, unit, help, presets, error, reading }: QuantityFieldProps) {
+export function QuantityField({ name, label, value, onChangeText, defaultText, unit, difference, help, presets, error, reading }: QuantityFieldProps) {
   const [focused, setFocused] = useState(false);
   const id = useId();
   const hintId = `${id}-hint`;
   const errorId = `${id}-error`;
-  const hint = `${unit ? `A number and a unit; a number alone is read in ${unit}.` : 'A pure number.'} Left empty, the default applies.`;
+  const hint =
+    `${unit ? `A number and a unit; a number alone is read in ${unit}.` : 'A pure number.'}` +
+    `${difference ? ' A difference: °C and °F count only their size (2 °C of rise is 2 K, 3.6 °F is 2 K).' : ''}` +
+    ' Left empty, the default applies.';
 
   return (
     <View style={styles.field}>

@@ -56,6 +56,7 @@ export function WorksheetView({ worksheet, initialValues = {}, onValuesChange }:
                 onChangeText={(text) => setText(input.name, text)}
                 defaultText={input.default}
                 unit={input.unit}
+                difference={input.kind === 'difference'}
                 help={input.help}
                 error={inputResult.get(input.name)?.error?.message}
                 reading={inputResult.get(input.name)?.value?.display}

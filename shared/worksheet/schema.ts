@@ -32,7 +32,7 @@ export const worksheetInputSchema = z.object({
    * 293.15 K; "difference" is for a rise or a ΔT and reads "2 degC" as 2 K and "3.6 degF" as 2 K
    * (the default, min, max and a sweep's from/to are read the same way).
    */
-  kind: z.enum(['absolute', 'difference']).optional(),
+  kind: z.enum(['absolute', 'difference'], { error: 'either "absolute" or "difference" (for a rise or a ΔT)' }).optional(),
   /** Inclusive bounds, as typed quantities in any compatible unit. */
   min: quantityTextSchema.optional(),
   max: quantityTextSchema.optional(),
