@@ -41,3 +41,15 @@ export const CAUTION_LASER =
   'Lasers and intense light: a laser beam, direct or reflected, can injure the eye, and powerful ones burn skin and ' +
   'start fires. Use eye protection rated for the wavelength, enclose the beam path, and follow your local laser-safety ' +
   'rules and licensed practice.';
+export const CAUTION_CHEMICALS =
+  'Chemicals: electrolytes such as potassium and sodium hydroxide burn skin and eyes, fine metal powders and metal ' +
+  'hydrides can catch fire in air, and some salts and solvents are toxic. Wear eye and skin protection, keep the safety ' +
+  'data sheets at hand, and follow local rules for hazardous substances and licensed practice.';
+export const CAUTION_RADIOACTIVE =
+  'Ionizing radiation: nuclear reactions, neutron sources, radioactive materials and tritium give off neutrons, gamma ' +
+  'rays or charged particles that harm people nearby, and neutrons make materials radioactive. Work only under a ' +
+  'licensed radiation-safety programme, with calibrated detectors, and follow local regulations.';
+export const CAUTION_VEHICLES =
+  'Vehicles under test: moving vehicles, rotating wheels and drivelines, and traction batteries at hundreds of volts ' +
+  'can kill. Test on a closed track or a dynamometer, not on public roads, and follow local road-traffic, vehicle-safety ' +
+  'and electrical codes and licensed practice.';

@@ -6,9 +6,14 @@ import { artifactBudget } from './artifact-budget';
 import { breakEvenSpeedCheck } from './break-even-speed';
 import { carnot } from './carnot';
 import { firstLaw } from './first-law';
+import { faradayYield } from './faraday-yield';
+import { landauer } from './landauer';
+import { lightConverterLimits } from './light-converter-limits';
 import { lightSpeed } from './light-speed';
 import { momentumLedger } from './momentum-ledger';
+import { nuclearSignature } from './nuclear-signature';
 import { photonBound } from './photon-bound';
+import { roadLoadCheck } from './road-load';
 import { rocketEquation } from './rocket-equation';
 import { sidewaysBeam } from './sideways-beam';
 import { CHECK_NAMES, type CheckDefinition, type CheckName } from './types';
@@ -23,6 +28,11 @@ export const checks: Record<CheckName, CheckDefinition> = {
   'artifact-budget': artifactBudget,
   'rocket-equation': rocketEquation,
   'light-speed': lightSpeed,
+  'faraday-yield': faradayYield,
+  'nuclear-signature': nuclearSignature,
+  'road-load': roadLoadCheck,
+  'light-converter-limits': lightConverterLimits,
+  landauer,
 };
 
 export const checkList: CheckDefinition[] = CHECK_NAMES.map((name) => checks[name]);

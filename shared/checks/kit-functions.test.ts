@@ -64,6 +64,19 @@ describe('kit functions for worksheets', () => {
     { fn: 'carnot_efficiency', args: [500, 300], expr: '1 - 300 K / 500 K' },
     { fn: 'carnot_cop_heating', args: [500, 300], expr: '500 K / (500 K - 300 K)' },
     { fn: 'carnot_cop_cooling', args: [500, 300], expr: '300 K / (500 K - 300 K)' },
+    // Faraday's law n = I t/(z F) and the ideal-gas law V = n R T/p, with mathjs's CODATA 2018 faraday and gasConstant.
+    { fn: 'faraday_moles', args: [10, 3600, 2], expr: '10 A * 3600 s / (2 * faraday)' },
+    { fn: 'ideal_gas_volume', args: [1, 273.15, 101325], expr: '1 mol * gasConstant * 273.15 K / 101325 Pa' },
+    { fn: 'atoms_in_mass', args: [1e-3, 58.6934e-3], expr: '1 g * avogadro / (58.6934 g/mol)' },
+    { fn: 'reaction_rate', args: [10, 5.2e-13], expr: '10 W / 5.2e-13 J' },
+    { fn: 'isotropic_fluence_rate', args: [1e6, 2], expr: '1e6 Hz / (4 * pi * (2 m)^2)' },
+    { fn: 'aerodynamic_drag', args: [1.225, 0.3, 2.2, 27.5], expr: '0.5 * 1.225 kg/m^3 * 0.3 * 2.2 m^2 * (27.5 m/s)^2' },
+    { fn: 'rolling_resistance', args: [0.01, 1500], expr: '0.01 * 1500 kg * gravity' },
+    { fn: 'road_load', args: [1.225, 0.3, 2.2, 27.5, 0.01, 1500], expr: '0.5 * 1.225 kg/m^3 * 0.3 * 2.2 m^2 * (27.5 m/s)^2 + 0.01 * 1500 kg * gravity' },
+    { fn: 'generator_drag', args: [5000, 27.5], expr: '5000 W / (27.5 m/s)' },
+    { fn: 'landsberg_efficiency', args: [6000, 300], expr: '1 - 4/3 * (300 K / 6000 K) + 1/3 * (300 K / 6000 K)^4' },
+    { fn: 'photon_conversion_bound', args: [0.9, 0.8, 2.2e-19], expr: '0.9 * elementaryCharge * 0.8 V / 2.2e-19 J' },
+    { fn: 'landauer_bound', args: [300], expr: 'boltzmann * 300 K * log(2)' },
   ];
   test.each(cases)('$fn agrees with mathjs on quantities with units', ({ fn, args, expr }) => {
     const k = kitFunctions[fn];

@@ -161,4 +161,118 @@ export const kitFunctions: Record<string, KitFunction> = {
     unit: '',
     fn: f.overUnityRatio,
   },
+  faraday_moles: {
+    summary: "Amount of substance a current I turns over in a time t at z electrons per formula unit (Faraday's law): I·t/(z·F).",
+    args: [
+      { name: 'I', unit: 'A' },
+      { name: 't', unit: 's' },
+      { name: 'z', unit: '' },
+    ],
+    unit: 'mol',
+    fn: f.faradayMoles,
+  },
+  ideal_gas_volume: {
+    summary: 'Volume of n moles of an ideal gas at temperature T and pressure p: n·R·T/p.',
+    args: [
+      { name: 'n', unit: 'mol' },
+      { name: 'T', unit: 'K' },
+      { name: 'p', unit: 'Pa' },
+    ],
+    unit: 'm^3',
+    fn: f.idealGasVolume,
+  },
+  atoms_in_mass: {
+    summary: 'Number of atoms in a mass m of an element of molar mass M: m·N_A/M.',
+    args: [
+      { name: 'm', unit: 'kg' },
+      { name: 'M', unit: 'kg / mol' },
+    ],
+    unit: '',
+    fn: f.atomsInMass,
+  },
+  reaction_rate: {
+    summary: 'Reactions per second that give a power P when each releases an energy Q: P/Q.',
+    args: [
+      { name: 'P', unit: 'W' },
+      { name: 'Q', unit: 'J' },
+    ],
+    unit: 'Hz',
+    fn: f.reactionRate,
+  },
+  isotropic_fluence_rate: {
+    summary: 'Particles per area and time at a distance r from a source emitting S per second in all directions alike: S/(4πr²).',
+    args: [
+      { name: 'S', unit: 'Hz' },
+      { name: 'r', unit: 'm' },
+    ],
+    unit: 'm^-2 s^-1',
+    fn: f.isotropicFluenceRate,
+  },
+  aerodynamic_drag: {
+    summary: 'Aerodynamic drag at speed v in air of density rho: ½·rho·Cd·A·v².',
+    args: [
+      { name: 'rho', unit: 'kg / m^3' },
+      { name: 'Cd', unit: '' },
+      { name: 'A', unit: 'm^2' },
+      { name: 'v', unit: 'm / s' },
+    ],
+    unit: 'N',
+    fn: f.aerodynamicDrag,
+  },
+  rolling_resistance: {
+    summary: 'Rolling resistance of a vehicle of mass m on level ground: Crr·m·g0.',
+    args: [
+      { name: 'Crr', unit: '' },
+      { name: 'm', unit: 'kg' },
+    ],
+    unit: 'N',
+    fn: f.rollingResistance,
+  },
+  road_load: {
+    summary: 'Road load on level ground at a steady speed v, energy per metre: ½·rho·Cd·A·v² + Crr·m·g0.',
+    args: [
+      { name: 'rho', unit: 'kg / m^3' },
+      { name: 'Cd', unit: '' },
+      { name: 'A', unit: 'm^2' },
+      { name: 'v', unit: 'm / s' },
+      { name: 'Crr', unit: '' },
+      { name: 'm', unit: 'kg' },
+    ],
+    unit: 'N',
+    fn: f.roadLoad,
+  },
+  generator_drag: {
+    summary: "Least drag an on-board generator delivering P_gen from the vehicle's own motion adds at speed v: P_gen/v.",
+    args: [
+      { name: 'P_gen', unit: 'W' },
+      { name: 'v', unit: 'm / s' },
+    ],
+    unit: 'N',
+    fn: f.generatorDrag,
+  },
+  landsberg_efficiency: {
+    summary: "Landsberg's bound on converting blackbody radiation at Ts with a converter at Ta: 1 − 4/3·(Ta/Ts) + 1/3·(Ta/Ts)⁴.",
+    args: [
+      { name: 'Ts', unit: 'K' },
+      { name: 'Ta', unit: 'K' },
+    ],
+    unit: '',
+    fn: f.landsbergEfficiency,
+  },
+  photon_conversion_bound: {
+    summary: 'Largest power efficiency of a converter of light of photon energy E_photon giving QE carriers per photon at voltage V: QE·q·V/E_photon.',
+    args: [
+      { name: 'QE', unit: '' },
+      { name: 'V', unit: 'V' },
+      { name: 'E_photon', unit: 'J' },
+    ],
+    unit: '',
+    fn: f.photonConversionBound,
+  },
+  landauer_bound: {
+    summary: "Landauer's bound: the least heat given off for each bit erased with surroundings at T, k_B·T·ln 2.",
+    args: [{ name: 'T', unit: 'K' }],
+    unit: 'J',
+    fn: f.landauerBound,
+  },
 };

@@ -1,5 +1,5 @@
 /**
- * The standard check kit (DESIGN.md §4): eight typed functions, each returning its outputs in SI, a
+ * The standard check kit (DESIGN.md §4): typed functions, each returning its outputs in SI, a
  * verdict in plain words with the numbers, and series for plots where they help.
  */
 
@@ -13,6 +13,11 @@ export const CHECK_NAMES = [
   'artifact-budget',
   'rocket-equation',
   'light-speed',
+  'faraday-yield',
+  'nuclear-signature',
+  'road-load',
+  'light-converter-limits',
+  'landauer',
 ] as const;
 export type CheckName = (typeof CHECK_NAMES)[number];
 
