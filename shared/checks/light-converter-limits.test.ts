@@ -157,6 +157,11 @@ describe('light-converter-limits check', () => {
     expect(run({ eta_claimed: '0.55', E_photon: '1.55 eV', QE: '0.9', V: '1 V' }).verdict.holds).toBe(true);
     // Without a voltage the bound is the quantum efficiency.
     expect(out(run({ eta_claimed: '0.5', E_photon: '1.55 eV', QE: '0.8' })).eta_mono_bound).toBe(0.8);
+    // A quantum efficiency of zero gives no power at all: no ratio, a plain sentence.
+    const dead = run({ eta_claimed: '0.2', E_photon: '1.55 eV', QE: '0' });
+    expect(dead.verdict.holds).toBe(false);
+    expect(out(dead).ratio).toBeUndefined();
+    expect(dead.verdict.message).toMatch(/gives no power/);
   });
 
   test('an efficiency above 100 % is also said to break energy conservation', () => {

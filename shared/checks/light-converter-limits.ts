@@ -135,7 +135,10 @@ export const lightConverterLimits: CheckDefinition = {
         ? `QE·qV/E_photon = ${fmt(x.QE)} × ${fmtQ(x.V, 'V')} / ${fmt(x.E_photon / eV)} eV = ${pct(bound)}`
         : `the quantum efficiency, ${fmt(x.QE)}, since a cell's voltage stays below the photon energy it absorbs (qV < E_photon)`;
       message =
-        claimed <= bound
+        bound === 0
+          ? `With ${x.QE === 0 ? 'a quantum efficiency of 0' : 'no voltage'} a converter of light of ${fmt(x.E_photon / eV)} eV photons gives no power; ` +
+            `the claimed efficiency, ${pct(claimed)}, ${claimed > 0 ? 'is above that' : 'agrees'}.`
+          : claimed <= bound
           ? `The claimed efficiency, ${pct(claimed)}, is within the bound for light of ${fmt(x.E_photon / eV)} eV photons: ${basis}.`
           : `The claimed efficiency, ${pct(claimed)}, is ${fmt(claimed / bound)} times the bound for light of ${fmt(x.E_photon / eV)} eV ` +
             `photons: ${basis}. Each photon can give at most its quantum efficiency's worth of carriers, each at most q·V of energy.`;
