@@ -408,8 +408,11 @@ export function shockleyQueisserEfficiency(Eg: number, Ts: number, Ta: number, X
 }
 
 /**
- * The band gap (J) that gives the highest Shockley–Queisser efficiency for these conditions, and that
- * efficiency: a scan of Eg/kTs from 0.4 to 6 in steps of 0.1, refined by a golden-section search.
+ * The band gap (J) that gives the highest Shockley–Queisser efficiency for these conditions, to the
+ * nearest meV, and the efficiency there: a scan of Eg/kTs from 0.4 to 6 in steps of 0.1, refined by a
+ * golden-section search. The maximum is flat, so the last digits of an unrounded optimum would depend
+ * on rounding in the arithmetic (browser and server would differ); a millielectronvolt changes the
+ * efficiency by less than 10^-6 of itself.
  */
 export function bestBandGap(Ts: number, Ta: number, X: number): { Eg: number; eta: number } {
   positive('Ts', Ts);
@@ -447,7 +450,8 @@ export function bestBandGap(Ts: number, Ta: number, X: number): { Eg: number; et
       fd = eta(d);
     }
   }
-  const Eg = (a + b) / 2;
+  const meV = 1e-3 * E_CHARGE;
+  const Eg = Math.round((a + b) / 2 / meV) * meV;
   return { Eg, eta: eta(Eg) };
 }
 
