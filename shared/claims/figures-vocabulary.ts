@@ -234,7 +234,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
       'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
-      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'turning (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
+      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'turning (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its) (?:[\\w-]+ ){0,2}(?:batter(?:y|ies)|cells?|capacitors?|accumulators?)(?: (?:bank|pack|stack))?(?: (?:at|with|to))?', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
       'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran (?:a|an|the)', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
@@ -329,7 +329,7 @@ export const QUANTUM_EFFICIENCY_WORDS = [
 /** Words that make "350 % efficient" a heating COP (heat pumps deliver more heat than the work they take). */
 export const HEAT_PUMP_WORDS = [
   'heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
-  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:moves?|pumps?|lifts?) heat',
+  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:mov(?:es?|ing|ed)|pump(?:s|ing|ed)?|lift(?:s|ing|ed)?) heat',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
 export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini-?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?'];
@@ -377,6 +377,9 @@ export const PROPELLANT_FREE_WORDS = [
   'microwave (?:thruster|drive|cavity|resonator)', 'resonant cavity', 'RF (?:thruster|cavity)', 'gyroscopic (?:thrust|lift|propulsion|drive|thruster)',
   'precession (?:drive|thruster|lift)', 'anti-?gravity', 'space drive', 'inertia drive', 'oscillation thruster', 'shuttl\\w+ masses', 'internal masses',
   'no (?:external )?reaction', 'momentum from nothing', 'stationary thruster',
+  // "with nothing ejected", "no mass leaving it", "nothing escaping": said after the noun as well.
+  '(?:with )?nothing (?:being )?(?:ejected|expelled|emitted|escaping|vented|thrown out|leaving(?: it| the \\w+)?)',
+  '(?:with )?no (?:mass|matter|material|gas|propellant|particles?) (?:being )?(?:leaving|escaping|ejected|expelled|emitted|vented|thrown out|leaves|escapes)',
 ];
 /** A device said to carry and expel propellant: the photon-rocket bound does not apply, the rocket equation does. */
 export const PROPELLANT_WORDS = [

@@ -389,7 +389,9 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
   // An efficiency is a heat engine's only where the text speaks of work or electricity got from heat:
   // a collector, boiler or heater that delivers heat, or a converter of electricity, is not bounded by Carnot.
   const notAnEngine = !s.heatEngine && (HEAT_ONLY_RE.test(text) || ELECTRICAL_CONVERTER_RE.test(text));
-  const engineEfficiency = efficiency && !notAnEngine && (s.heatEngine || temps.length >= 2) && !(efficiency.si > 1 && temps.length < 2);
+  // An efficiency said with a temperature difference is one of a machine working across it.
+  const acrossDifference = ofKind(figures, 'temperature-difference').length > 0;
+  const engineEfficiency = efficiency && !notAnEngine && (s.heatEngine || temps.length >= 2 || acrossDifference) && !(efficiency.si > 1 && temps.length < 2);
   const copForCarnot = cop && (cop.role !== null || s.heatPump || s.cooling || temps.length >= 2 || !s.overUnity);
   if ((engineEfficiency || copForCarnot) && temps.length >= 2) {
     const hot = temps.find((t) => t.role === 'hot') ?? [...temps].sort((a, b) => b.si - a.si)[0];
@@ -491,7 +493,7 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
       why: 'The text gives the output as a multiple of the input.',
       assumptions: ['Run on 1 J supplied: the over-unity ratio does not depend on the amount.'],
     });
-  } else if (share && (share.upper?.si ?? share.si) <= 1 && !s.heatEngine && !movesHeat && temps.length < 2 && !plans.some((p) => p.check === 'carnot')) {
+  } else if (share && (share.upper?.si ?? share.si) <= 1 && !s.heatEngine && !acrossDifference && !movesHeat && temps.length < 2 && !plans.some((p) => p.check === 'carnot')) {
     plans.push({
       check: 'first-law',
       uses: [share],

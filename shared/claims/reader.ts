@@ -463,6 +463,8 @@ function suffixKind(s: Suffix): string | null {
 
 function isRangeGap(text: string, gapStart: number, gapEnd: number, firstStart: number): boolean {
   const gap = text.slice(gapStart, gapEnd);
+  // "4 °C — 21 °C below the kitchen": a dash set off by spaces on both sides opens an aside.
+  if (/^[^\S\n]+—[^\S\n]+$/u.test(gap)) return false;
   if (/^[^\S\n]*(?:[-–—]|to|or|and up to|up to|through|-to-)[^\S\n]*$/i.test(gap)) return !/^[^\S\n]+or[^\S\n]+$/i.test(gap) || /between|from/i.test(text.slice(Math.max(0, firstStart - 12), firstStart));
   return /^[^\S\n]+and[^\S\n]+$/i.test(gap) && /(?:between|from)[^\S\n]+$/i.test(text.slice(Math.max(0, firstStart - 12), firstStart));
 }
@@ -680,6 +682,10 @@ function isDifference(text: string, start: number, end: number, floor: number): 
   if (/^(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)/.test(word)) {
     const rest = text.slice(end + a[0].length, end + a[0].length + 40);
     if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|(?:and|with|at|in|for|while|but|so|when)\b|$)/.test(rest)) return true;
+    // "5 °C below zero", "above freezing": a temperature, not a difference.
+    if (/^[^\S\n]*(?:zero|freezing|nought|the freezing point)(?!\p{L})/iu.test(rest)) return false;
+    // "21 °C below the kitchen", "38 K above it": measured from something named.
+    if (/^[^\S\n]*(?:than[^\S\n]+)?(?:the|a|an|its|their|our|his|her|this|that|it|them)(?!\p{L})/iu.test(rest)) return true;
     return /^[^\S\n]*(?:than[^\S\n]+)?(?:(?:the|a|an|its|their)[^\S\n]+)?(?:(?:mean|average|outside|outdoor|surrounding|local|daytime|night-?time|cooling|inlet|room|deep|surface)[^\S\n]+){0,2}(?:ambient|room|outside|outdoor|surrounding|environment|air|water|inlet|sink|source|cold|hot|other|freezing|surface|\p{N}|[-−])/iu.test(rest) || /^\s*than/.test(rest) || /^[^\S\n]*(?:it|that|this|them)(?!\p{L})/iu.test(rest);
   }
   if (/^apart/.test(word)) return true;
@@ -931,6 +937,9 @@ const PROPELLANT_FRACTION_RE =
 
 /** Between a temperature and a difference that describes it: "−18 °C, a full 50 K below …", "34 °C, 5 K warmer than …". */
 const APPOSITION_RE = /^[\s,;(–—-]*(?:(?:a|an|some|about|roughly|nearly|just|only|full|fully|which is|that is|i\.e\.|or|thus|so|still|at least|at most|over|under)[\s,]+)*$/iu;
+
+/** After a difference: the side it is measured from, named ("… over its source", "… below the kitchen"), not a pronoun. */
+const NAMED_OTHER_SIDE_RE = /^[^\S\n]*(?:\p{L}+[^\S\n]+)?(?:above|over|below|under|(?:warmer|hotter|colder|cooler|higher|lower)[^\S\n]+than)[^\S\n]+(?:the|its|their|our|a|an)[^\S\n]+(?!\p{N})/iu;
 
 const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|lander|probe|satellite|CubeSat|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines? (?:fire|burn))(?!\p{L})/iu;
 
@@ -1291,7 +1300,10 @@ function relate(text: string, drafts: Draft[]): void {
       // "held at −18 °C, a full 50 K below the room": the difference describes the stated temperature
       // itself (said right after it), so the other side lies the other way.
       const apposition = t.end <= diff.start && APPOSITION_RE.test(text.slice(t.end, diff.start));
-      const said = apposition && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
+      // "supplies 55 °C water; with a 50 K lift over its source": the difference is measured from another
+      // side, named after it, so the stated temperature is the one above (or below) that side.
+      const fromNamedOther = t.end <= diff.start && NAMED_OTHER_SIDE_RE.test(text.slice(diff.end, diff.end + 60));
+      const said = (apposition || fromNamedOther) && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
       const down = said === 'down' || (said === undefined && t.role === 'hot');
       const other = down ? tSi - dSi : tSi + dSi;
       const anchor = diff.start > t.start ? diff : t;
