@@ -216,7 +216,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
-      '(?:for|per) (?:every|each)', 'put in', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'driven by', 'driven with', 'excited by', 'excited with',
+      '(?:for|per) (?:every|each)', 'put in', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'comes? from (?:its|the|a|an)', 'powered by (?:its|the|a|an)', 'pumped by (?:its|the|a|an)', 'driven by', 'driven with', 'excited by', 'excited with',
       'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
@@ -302,6 +302,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
       '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass|nitrogen|helium|butane|propane|iodine|argon|ammonia)', 'of (?:that|it|which)(?: being| is| was)? (?:propellant|fuel)', 'of cold-gas propellant',
       'of (?:[\\w-]+ )?(?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
       'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
+      'of (?:[\\w-]+ )?(?:deuterium|tritium|helium-3|lithium|boron|uranium|plutonium|antimatter|fusion fuel|fissile fuel|pellets|solid fuel|solid propellant|grain|ice)(?: pellets| fuel| propellant)?',
     ],
   },
 ];

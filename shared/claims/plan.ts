@@ -91,6 +91,8 @@ const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L}
 const HEAT_ONLY_RE = /(?<!\p{L})(?:(?:delivered|given|supplied|collected|recovered|available|comes? out|output) as (?:useful )?heat|heat output|thermal output|(?:solar|flat-?plate|evacuated-?tube) (?:thermal )?collectors?|solar thermal|collector efficiency|water heaters?|boilers?|furnaces?|space heaters?)(?!\p{L})/iu;
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
+/** After a heat input: where the heat comes from ("3.6 kW from the borehole"). */
+const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+(?:low-grade[^\S\n]+|ambient[^\S\n]+)?heat[^\S\n]+)?(?:from|out of|drawn from|taken from|extracted from)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:borehole|ground|earth|soil|outside|outdoor|ambient|air|source|environment|surroundings|well|river|lake|sea|brine|loop)(?!\p{L})/iu;
 /** Boiler efficiencies on the net (lower) calorific value may exceed 100 % by convention. */
 const NET_CALORIFIC_RE = /(?<!\p{L})(?:condensing|net (?:CV|calorific|heating)|LHV|lower heating value|lower calorific)(?!\p{L})/iu;
 /** A machine that moves heat is said to: cooling words name a fridge or chiller the text may only mention as a load. */
@@ -370,7 +372,8 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
 
   // ---- Carnot
   const temps = ofKind(figures, 'temperature');
-  const efficiency = ofKind(figures, 'efficiency').find((f) => !f.derived);
+  // A stated efficiency, or one stated as a share of the Carnot efficiency of the stated temperatures.
+  const efficiency = ofKind(figures, 'efficiency').find((f) => !f.derived || / of the Carnot efficiency /.test(f.derived));
   // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
   const cooling = s.coolingWords && (s.cooling || COMPRESSOR_RE.test(text) || ofKind(figures, 'cop').length > 0 || temps.length >= 2);
   // Heat delivered by a machine that names an outdoor, ground or brine source: a heat pump.
@@ -429,7 +432,13 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
 
   // ---- First law
   const firstLawWhy = 'The text gives the energy put in and the energy got out.';
-  if (movesHeat && (eIn || pIn) && (eOut || pOut)) {
+  // A heat pump that states the heat it draws from its source beside the work it takes: its whole
+  // balance is a first-law ledger (what it delivers is at most the two added up).
+  const sourceHeatIn =
+    movesHeat &&
+    [...power, ...energy].filter((f) => f.role === 'in').length >= 2 &&
+    [...power, ...energy].some((f) => f.role === 'in' && HEAT_SOURCE_AFTER_RE.test(text.slice(f.end ?? 0, (f.end ?? 0) + 50)));
+  if (movesHeat && (eIn || pIn) && (eOut || pOut) && !sourceHeatIn) {
     notes.push('A heat pump or refrigerator moves heat rather than making it: the heat it delivers may exceed the work it takes without breaking any law. Its bound is the Carnot COP of the temperatures it works between.');
   } else if ((eIn || pIn) && (eOut || pOut) && !(thrust && photonApplies && !eOut && !pOut)) {
     const inF = eIn ?? pIn!;

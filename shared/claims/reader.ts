@@ -175,7 +175,7 @@ const GAIN_BEFORE_RE =
   /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
 const TIMES_AFTER_RE =
   /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical)[^\S\n]+)?(?:input|consumption|in(?!\p{L})|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in)/iuy;
-const TIMES_BEFORE_RE = /(?<!\p{L})(?:output|yield|gain|returns?|delivers?|produces?|generates?)(?:[^\S\n]+(?:is|of|was|are|reaches|reached|power|energy|exactly|about|roughly|some|nearly))*[^\S\n]*$/iu;
+const TIMES_BEFORE_RE = /(?<!\p{L})(?:output|yield|gain|returns?|delivers?|produces?|generates?|puts? out|gives?(?: back| out)?|makes|provides|supplies|sends? back)(?:[^\S\n]+(?:is|of|was|are|reaches|reached|power|energy|exactly|about|roughly|some|nearly))*[^\S\n]*$/iu;
 /** "the output exceeds the input by a factor of 1.5", "output is higher than input by a factor of 2". */
 const FACTOR_BEFORE_RE =
   /(?<!\p{L})(?:output|out|yield|production)[^.;!?\n]{0,40}(?:exceeds?|exceeding|is (?:higher|greater|larger|more) than|surpass\w*|outstrips?)[^.;!?\n]{0,30}(?:input|consumption|supply)[^.;!?\n]{0,20}by (?:a factor of|a ratio of)(?:[^\S\n]+(?:at least|about|roughly|some|nearly|over))?[^\S\n]*$/iu;
@@ -559,14 +559,20 @@ function hedgeBefore(text: string, start: number): FigureHedge | undefined {
 }
 
 /** For "60 % more energy out than in": the percentage is added to 1. */
-type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; unit: string; assumption?: string; more?: boolean } | null;
+type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; unit: string; assumption?: string; more?: boolean; derived?: string } | null;
 
 /** "60 % more electrical energy out than in", "30 % more power than it draws": a gain of 1 + p. */
 const PERCENT_MORE_RE =
-  /[^\S\n]*(?:above|over|more than|in excess of|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:electrical|electric)[^\S\n]+)?(?:input|consumption|power in|energy in|supply)(?!\p{L})|[^\S\n]*(?:more|extra)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over)[^\S\n]+(?:(?:it|the|its)[^\S\n]+)?(?:[\p{L}\d.,-]+[^\S\n]+){0,4}?(?:in|input|takes|uses|consumes|draws|is fed|goes in|consumption|supply)(?!\p{L})/iuy;
+  /[^\S\n]*(?:above|over|more than|in excess of|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:electrical|electric)[^\S\n]+)?(?:input|consumption|power in|energy in|supply)(?!\p{L})|[^\S\n]*(?:more|extra|excess|surplus|additional)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over|above|beyond)[^\S\n]+(?:(?:it|the|its)[^\S\n]+)?(?:[\p{L}\d.,-]+[^\S\n]+){0,4}?(?:in|input|takes|uses|consumes|draws|is fed|goes in|consumption|supply)(?!\p{L})/iuy;
+
+/** "70 % of the Carnot efficiency": a share of the bound, made an efficiency once the temperatures are known. */
+const CARNOT_SHARE_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:Carnot|ideal Carnot|reversible)(?:[^\S\n]+(?:efficiency|limit|bound|value|maximum|figure))?(?!\p{L})/iuy;
+const CARNOT_SHARE = 'a share of the Carnot efficiency';
 
 /** What a percentage is, by its context. */
 function readPercent(text: string, start: number, end: number, floor: number): PercentReading {
+  CARNOT_SHARE_AFTER_RE.lastIndex = end;
+  if (CARNOT_SHARE_AFTER_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '', derived: CARNOT_SHARE };
   SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
   const light = SPEED_OF_LIGHT_AFTER_RE.exec(text);
   if (light) return { kind: 'speed', factor: C_M_PER_S / 100, unit: 'm/s' };
@@ -715,10 +721,12 @@ export function extractFigures(text: string): Figure[] {
     if (next && !next.skip) {
       const gapStart = t.suffix ? t.end : t.numEnd;
       const pmGap = /^[^\S\n]*(?:±|\+\/-|\+-)[^\S\n]*$/.test(text.slice(gapStart, next.start));
-      if (pmGap && next.plusMinus && (!t.suffix || suffixKind(t.suffix) === suffixKind(next.suffix) || !next.suffix)) {
-        const unc = Number(next.num);
+      // "96 W ± 3 %": an uncertainty in per cent of the figure.
+      const relative = pmGap && next.plusMinus && t.suffix !== null && t.suffix.type === 'unit' && next.suffix?.type === 'percent';
+      if (pmGap && next.plusMinus && (relative || !t.suffix || suffixKind(t.suffix) === suffixKind(next.suffix) || !next.suffix)) {
         const mid = Number(t.num);
-        suffix = t.suffix ?? next.suffix;
+        const unc = relative ? (mid * Number(next.num)) / 100 : Number(next.num);
+        suffix = relative ? t.suffix : (t.suffix ?? next.suffix);
         upperNum = String(Number((mid + unc).toPrecision(15)));
         t.num = String(Number((mid - unc).toPrecision(15)));
         end = t.suffix && !next.suffix ? next.numEnd : next.end;
@@ -790,6 +798,7 @@ export function extractFigures(text: string): Figure[] {
                 ? `${scaled(n, reading.factor)} ${reading.unit}`
                 : scaled(n, reading.factor);
         if (reading.more) derived = 'output = input + the percentage more';
+        if (reading.derived) derived = reading.derived;
         quantity = q(t.num);
         if (upperNum !== undefined) upper = q(upperNum);
       }
@@ -947,6 +956,9 @@ const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thruste
 const CRAFT_RE =
   /(?<!\p{L})(?:rockets?|propellants?|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|craft|landers?|probes?|satellites?|CubeSats?|smallsats?|microsat\w*|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines?|vehicles?|tugs?|stacks?|ships?|modules?|capsules?|boosters?|orbiters?|missiles?|payloads?|tanks?|fuel\w*|oxidi[sz]ers?|xenon|krypton|hydrazine|kerosene|methane|hydrogen|oxygen|nitrogen|argon|exhaust|wet|dry|m[01f]|masses)(?!\p{L})/iu;
 
+/** A verb that makes a signal bigger, just before the first of two figures ("amplifies a 1 mW signal to 100 mW"). */
+const AMPLIFY_BEFORE_RE = /(?<!\p{L})(?:amplif(?:y|ies|ied|ying)|boost(?:s|ed|ing)?|lift(?:s|ed|ing)?|rais(?:e|es|ed|ing)|steps? up|stepped up|stepping up)[^\S\n]+(?:(?:a|an|the|its|their)[^\S\n]+)?(?:(?:input|incoming|weak|small|faint|signal)[^\S\n]+){0,2}(?:(?:signal|input|power|level)[^\S\n]+)?(?:from[^\S\n]+)?$/iu;
+
 /** Words before the temperatures a device is rated for. */
 const OPERATING_RANGE_RE = /(?<!\p{L})(?:operating|operation|storage|ambient|rated|permitted|allowed|working) (?:temperature )?(?:range|temperatures?|limits?|conditions?)(?: (?:of|is|from|between))?[:=]?[^\S\n]*(?:from|between)?[^\S\n]*$/iu;
 
@@ -1101,13 +1113,26 @@ function relate(text: string, drafts: Draft[]): void {
     return !/[.!?](?:\s|$)|\n/.test(text.slice(x.end, y.start).replace(ABBREVIATIONS_RE, ''));
   };
 
+  // "lifts a 1 mW signal to 100 mW", "boosts the input from 2 W to 40 W": what goes in and what comes out.
+  for (let i = 0; i + 1 < drafts.length; i++) {
+    const [a, b] = [drafts[i], drafts[i + 1]];
+    if (!(a.kind === b.kind && (a.kind === 'power' || a.kind === 'energy'))) continue;
+    const lead = text.slice(Math.max(0, a.start - 50), a.start);
+    if (AMPLIFY_BEFORE_RE.test(lead) && /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,3}?(?:in)?to[^\S\n]+(?:about[^\S\n]+|some[^\S\n]+|roughly[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
+      a.role = 'in';
+      b.role = 'out';
+    }
+  }
+
   // "4 W more heat than the 20 W it draws": the first is an excess, the second the input.
   for (let i = 0; i + 1 < drafts.length; i++) {
     const a = drafts[i];
     const b = drafts[i + 1];
     if (!(a.kind === b.kind && (a.kind === 'power' || a.kind === 'energy'))) continue;
     const gap = text.slice(a.end, b.start);
-    if (/^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:more|extra|additional|over and above|above|beyond|in excess of|on top of)(?:[^\S\n]+[\p{L}-]+){0,4}?[^\S\n]+(?:than|over|of|on|above)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|an[^\S\n]+|a[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}$/iu.test(gap) || /^[^\S\n]+(?:more|extra)[^\S\n]+than[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?$/iu.test(gap)) {
+    if (/^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:more|extra|additional|over and above|above|beyond|in excess of|on top of)(?:[^\S\n]+[\p{L}-]+){0,4}?[^\S\n]+(?:than|over|of|on|above)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|an[^\S\n]+|a[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}$/iu.test(gap) ||
+      // "1.3 MJ of heat came out beyond the 4.1 MJ supplied"
+      /^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,4}?(?:beyond|over and above|in excess of|on top of)[^\S\n]+(?:the|its|an|a|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?$/iu.test(gap) || /^[^\S\n]+(?:more|extra)[^\S\n]+than[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?$/iu.test(gap)) {
       a.role = 'excess';
       b.role = 'in';
     }
@@ -1218,6 +1243,27 @@ function relate(text: string, drafts: Draft[]): void {
         role: 'out',
         derived: `output = input + excess (${formatQuantity(n, unit)} + ${formatQuantity(e, unit)})`,
       });
+    }
+  }
+
+  // "25 % more power than its 2 kW input", "five times the 20 W it takes in": with the input stated,
+  // the excess and the output as figures.
+  const GAINS = ['output = input + the percentage more', 'output as a multiple of the input', 'units out for each unit in'];
+  const more = drafts.find((d) => d.kind === 'efficiency' && d.derived !== undefined && GAINS.includes(d.derived));
+  if (more) {
+    const g = siOf(more);
+    for (const kind of ['power', 'energy'] as const) {
+      const inputs = drafts.filter((d) => d.kind === kind && d.role === 'in' && !d.derived && sameClause(d, more));
+      if (g === null || g <= 1 || inputs.length !== 1 || drafts.some((d) => d.kind === kind && (d.role === 'out' || d.role === 'excess'))) continue;
+      const input = inputs[0];
+      const n = siOf(input);
+      if (n === null) continue;
+      const unit = FIGURE_SI_UNIT[kind];
+      const anchor = more.start > input.start ? more : input;
+      const span = { start: Math.min(more.start, input.start), end: Math.max(more.end, input.end), kind };
+      insertAfter(anchor, { ...span, quantity: typedSi(n * g, unit), role: 'out', derived: `output = input × ${formatPrint(g)} (${formatQuantity(n, unit)} × ${formatPrint(g)})` });
+      insertAfter(anchor, { ...span, quantity: typedSi(n * (g - 1), unit), role: 'excess', derived: `excess = input × ${formatPrint(g - 1)} (${formatQuantity(n, unit)} × ${formatPrint(g - 1)})` });
+      break;
     }
   }
 
@@ -1346,6 +1392,22 @@ function relate(text: string, drafts: Draft[]): void {
     // One temperature kept by a freezer or a chiller is its cold side; by a heat pump, its hot side.
     if (COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text)) absolute[0].role = 'cold';
     else if (HEAT_PUMP_RE.test(text)) absolute[0].role = 'hot';
+  }
+
+  // "70 % of the Carnot efficiency" between two stated temperatures: that share of 1 − Tc/Th.
+  const share = drafts.find((d) => d.kind === 'efficiency' && d.derived === CARNOT_SHARE);
+  if (share) {
+    const hot = drafts.find((d) => d.kind === 'temperature' && d.role === 'hot');
+    const cold = drafts.find((d) => d.kind === 'temperature' && d.role === 'cold');
+    const [p, th, tc] = [siOf(share), hot && siOf(hot), cold && siOf(cold)];
+    if (p !== null && th && tc !== null && tc !== undefined && th > tc) {
+      const carnot = 1 - tc / th;
+      share.quantity = typedSi(p * carnot, '');
+      share.derived = `${formatPrint(p * 100)} % of the Carnot efficiency 1 − Tc/Th = 1 − ${formatQuantity(tc, 'K')}/${formatQuantity(th, 'K')}`;
+    } else {
+      // Without both temperatures it states no efficiency of its own.
+      share.role = 'aside';
+    }
   }
 
   // Times that are not the run's ("took 18 months to build", "pays for itself in 3 years"), said in a
