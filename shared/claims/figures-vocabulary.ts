@@ -163,6 +163,9 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   },
   { kind: 'speed', unit: 'mi/h', symbols: ['mph', 'MPH', 'mi/h', 'mi/hr'], words: ['mile per hour', 'miles per hour'] },
   { kind: 'speed', unit: 'mi/s', symbols: ['mi/s'], words: ['mile per second', 'miles per second'] },
+  { kind: 'speed', unit: 'ft/s', symbols: ['ft/s', 'ft/sec', 'fps', 'ft s^-1', 'ft s⁻¹'], words: ['foot per second', 'feet per second'] },
+  { kind: 'speed', unit: 'cm/s', symbols: ['cm/s', 'cm s^-1', 'cm s⁻¹'], words: ['centimetre per second', 'centimetres per second', 'centimeter per second', 'centimeters per second'] },
+  { kind: 'speed', unit: 'mm/s', symbols: ['mm/s'], words: ['millimetre per second', 'millimetres per second', 'millimeter per second', 'millimeters per second'] },
   {
     kind: 'speed',
     unit: 'm/s',
@@ -234,7 +237,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
       'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
-      'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'turning (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its) (?:[\\w-]+ ){0,2}(?:batter(?:y|ies)|cells?|capacitors?|accumulators?)(?: (?:bank|pack|stack))?(?: (?:at|with|to))?', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
+      '(?:lights?|lighting|lit|powers?|powering|runs?|running|drives?|driving|feeds?|feeding) (?:a|an|the|its|two|three|four|several)? ?(?:[\\w-]+ ){0,4}?(?:taking|drawing|using|consuming|rated at|that (?:take|takes|draw|draws|use|uses|consume|consumes))', 'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'turning (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its) (?:[\\w-]+ ){0,2}(?:batter(?:y|ies)|cells?|capacitors?|accumulators?)(?: (?:bank|pack|stack))?(?: (?:at|with|to))?', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
       'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran (?:a|an|the)', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
@@ -242,7 +245,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
-      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump|phone|device|string|bulb|lamps|wheel)', 'into the (?:battery|grid|load|bank|network|mains|store)(?: bank)?', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
+      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump|phone|device|string|bulb|lamps|wheel)', 'into the (?:[\\w-]+ )?(?:battery|grid|load|bank|network|mains|store|tank|reservoir|pond|basin)(?: bank)?', 'net(?= (?:output|from|at|to|into|of electricity|electrical)|[,.;]|$)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
       'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the (?:output )?terminals', 'at the shaft', 'of shaft power', 'on its output terminals',
       'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
   },
@@ -252,7 +255,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
   {
     role: 'hot',
     before: [
-      'T_?(?:h|hot|H)', 'surface(?: water)?', 'warm surface', '(?:to )?deliver(?:s|ed|ing)?', 'hot', 'hotter', 'hottest', 'source', 'flames?', 'steam', 'boiler', 'furnace', 'combustion', 'burner', 'heated to', 'high-temperature',
+      'T_?(?:h|hot|H)', 'surface(?: water)?', 'warm surface', '(?:to )?deliver(?:s|ed|ing)?', 'suppl(?:y|ies|ied|ying)', 'provid(?:es|ed|ing)', 'makes', 'produc(?:es|ed|ing)', 'hot', 'hotter', 'hottest', 'source', 'flames?', 'steam', 'boiler', 'furnace', 'combustion', 'burner', 'heated to', 'high-temperature',
       'exhaust', 'waste heat', 'geothermal', 'deliver(?:s|ed|ing)? (?:water |air |heat )?at', 'supply temperature', 'flow temperature', 'output temperature',
       'radiators?', 'underfloor', 'warm', 'warmer', 'warm (?:end|side)', 'to a', 'into a', 'hot water', 'condensing', 'up to', 'to heat', 'heats? (?:\\w+ )?to', 'heating to',
       'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper', 'firing', 'firing temperature',
@@ -271,7 +274,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
       'well water', 'groundwater', 'borehole', 'winter', 'bottom', 'lower', 'rejects? heat (?:to|at)', 'reject(?:s|ed|ing)?', 'cooled to', 'chilled to',
       'cool(?:s|ed|ing)? (?:\\w+ )?to', 'keeps? (?:\\w+ )?at', 'frozen',
     ],
-    after: ['deep(?:er)? (?:water|layer)', 'sink', 'ambient', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater', 'cold side', 'air', 'outdoor', 'ground'],
+    after: ['deep(?:er)? (?:water|layer)', 'sink', 'ambient', 'borehole', 'brine', 'ground loop', 'ground water', 'groundwater', 'well water', 'chilled water', 'cold water', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater', 'cold side', 'air', 'outdoor', 'ground'],
   },
 ];
 
@@ -404,7 +407,7 @@ export const SELF_RUNNING_WORDS = [
   '(?:battery|supply|mains|power|source) (?:is |was |being )?(?:disconnected|taken out|removed|unplugged)', '(?:turning|running|spinning|going) on its own', '(?:battery|supply) (?:taken out|removed)',
   'nothing connected to it', 'with nothing connected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
   'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
-  'no fuel', 'fuel-?less', 'free energy',
+  'no fuel', 'fuel-?less', 'free energy', 'no (?:motor|engine|drive|battery) and no (?:other )?(?:input|supply|power)', 'no other (?:input|supply|power source|energy source|source of (?:power|energy))',
 ];
 /** Where "self-powered" is lawful: the device harvests an outside flow of energy. */
 export const HARVEST_WORDS = [

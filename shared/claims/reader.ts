@@ -314,6 +314,8 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
       if (per && !per.form.factor) {
         if (u.form.kind === 'thrust' && per.form.kind === 'power') return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
         if (u.form.kind === 'power' && per.form.kind === 'mass') return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
+        // "3.6 MJ per day": the energy, over the time said after it (read as a rate below).
+        if (u.form.kind === 'energy' && per.form.kind === 'duration') return { suffix: { type: 'unit', form: u.form }, end: u.end };
       }
       // "230 V / 6.5 A", "12 V × 1 A": a voltage and a current side by side, each a figure.
       if (per && ((u.form.kind === 'voltage' && per.form.kind === 'current') || (u.form.kind === 'current' && per.form.kind === 'voltage'))) {
@@ -399,7 +401,7 @@ function tokenize(text: string): NumberToken[] {
     const { suffix, end } = readSuffix(text, numEnd);
     const before = text.slice(Math.max(0, start - 16), start);
     let skip = LABEL_RE.test(before);
-    if (!skip && /^\d{4}$/.test(num) && numEnd === numEndRaw) {
+    if (!skip && /^\d{4}$/.test(num) && /^\d{4}$/.test(text.slice(start, numEndRaw)) && numEnd === numEndRaw) {
       const year = Number(num);
       const after = text.slice(numEnd, end);
       if (year >= 1800 && year <= 2100) {
@@ -1349,20 +1351,28 @@ function relate(text: string, drafts: Draft[]): void {
       // "supplies 55 °C water; with a 50 K lift over its source": the difference is measured from another
       // side, named after it, so the stated temperature is the one above (or below) that side.
       const fromNamedOther = t.end <= diff.start && NAMED_OTHER_SIDE_RE.test(text.slice(diff.end, diff.end + 60));
-      const said = (apposition || fromNamedOther) && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
-      const down = said === 'down' || (said === undefined && t.role === 'hot');
-      const other = down ? tSi - dSi : tSi + dSi;
+      // "between the 25 °C air and the cooler soil": the other side said to be cooler or warmer than this one.
+      const other = /^[^\S\n,]*(?:[\p{L}-]+[^\S\n,]+){0,2}?and[^\S\n]+(?:the|a|an|its)[^\S\n]+(cooler|colder|lower|warmer|hotter|higher)(?!\p{L})/iu.exec(text.slice(t.end, t.end + 50));
+      const said = other
+        ? /^(?:cooler|colder|lower)/i.test(other[1]) ? 'down' : 'up'
+        : (apposition || fromNamedOther) && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
+      // A heat pump's one stated temperature is what it supplies (the hot side); a fridge's is what it keeps (the cold side).
+      const side = t.role ?? (HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) ? 'hot' : COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text) ? 'cold' : null);
+      const down = said === 'down' || (said === undefined && side === 'hot');
+      const otherSi = down ? tSi - dSi : tSi + dSi;
       const anchor = diff.start > t.start ? diff : t;
       insertAfter(anchor, {
         start: Math.min(t.start, diff.start),
         end: Math.max(t.end, diff.end),
         kind: 'temperature',
-        quantity: typedSi(other, 'K'),
+        quantity: typedSi(otherSi, 'K'),
         role: down ? 'cold' : 'hot',
         derived: down ? `the colder side = ${formatQuantity(tSi, 'K')} − ${formatQuantity(dSi, 'K')}` : `the hotter side = ${formatQuantity(tSi, 'K')} + ${formatQuantity(dSi, 'K')}`,
         assumption:
           t.role === null && said === undefined
-            ? 'The stated temperature is read as the cold side and the difference is added to it; mark it as hot if it is the hot side.'
+            ? side === 'hot'
+              ? 'The stated temperature is read as the hot side (what a heat pump supplies) and the difference is taken from it; mark it as cold if it is the source.'
+              : 'The stated temperature is read as the cold side and the difference is added to it; mark it as hot if it is the hot side.'
             : undefined,
       });
       t.role = down ? 'hot' : 'cold';
