@@ -171,6 +171,7 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     unit: 'm/s',
     factor: C_M_PER_S,
     words: ['times the speed of light', 'times light speed', 'times the velocity of light', 'times faster than light', 'times c'],
+    symbols: ['× the speed of light', 'x the speed of light', '× light speed', '×c', '× c'],
   },
 
   // Voltage
@@ -219,13 +220,14 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
-      '(?:for|per) (?:every|each)', 'put in', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'comes? from (?:its|the|a|an)', 'powered by (?:its|the|a|an)', 'pumped by (?:its|the|a|an)', 'driven by', 'driven with', 'excited by', 'excited with',
+      '(?:for|per) (?:every|each)', 'put in', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'from (?:about|around|roughly|some|nearly|approximately|approx\\.|ca\\.|~)', 'for (?:only |just |a mere |about |roughly )?(?=$)', '(?<![\\w-])charge(?=[^\\S\\n]*$)', 'comes? from (?:its|the|a|an)', 'powered by (?:its|the|a|an)', 'pumped by (?:its|the|a|an)', 'driven by', 'driven with', 'excited by', 'excited with',
       'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
       'took', 'turned by', 'by a', 'fuel', 'containing', 'P_?\\{?in\\}?', 'E_?\\{?in\\}?', 'Pin', 'invest(?:s|ed|ing)?', 'gas input', 'fuel input',
     ],
     after: [
+      'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 'from the (?:wall|mains|socket|outlet|plug|grid)',
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires)',
       '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
       '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
@@ -261,7 +263,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
       'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper', 'firing', 'firing temperature',
     ],
     after: [
-      'surface(?: water| layer)?', 'source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor',
+      'surface(?: water| layer)?', 'source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor', 'receiver', 'absorber', 'heater head', 'hot plate', 'hot junction',
       'loop', 'tank', 'radiators?', '(?:turbine|compressor) inlet', 'firing', 'combustion', 'hot gas', 'heater head', 'collector', 'hot end',
     ],
   },
@@ -343,7 +345,7 @@ export const DIFFERENCE_BEFORE = [
   'ΔT', 'Δ T', 'delta[- ]?T', 'dT', 'temperature (?:difference|gradient|drop|rise|lift|span|spread|differential|swing|excursion|change|increase)s?',
   'differences? of', 'differential of', 'gradient of', 'rise of', 'drop of', 'lift of', 'spread of', 'span of', 'increase of', 'swing of', 'change of',
   '(?:pump(?:s|ing)?|lift(?:s|ing)?|rais(?:es|ing)|mov(?:es|ing)) (?:the )?heat(?: up)?(?: by| through| across)?', 'through', 'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
-  '(?:colder|cooler|hotter|warmer|lower|higher) than (?:the |its )?(?:[\\w-]+ ){0,3}by', 'differ(?:s|ing)? by', 'apart by', 'separated by', 'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
+  '(?:only |just )?across(?: (?:only|just|a|an))*', 'spanning', '(?:colder|cooler|hotter|warmer|lower|higher) than (?:the |its )?(?:[\\w-]+ ){0,3}by', 'differ(?:s|ing)? by', 'apart by', 'separated by', 'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
 ];
 export const DIFFERENCE_AFTER = [
   '(?:temperature )?(?:difference|differential|gradient|drop|rise|lift|span|spread|swing|excursion|delta|split|increase|decrease)s?',

@@ -91,8 +91,10 @@ const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L}
 const HEAT_ONLY_RE = /(?<!\p{L})(?:(?:delivered|given|supplied|collected|recovered|available|comes? out|output) as (?:useful )?heat|heat output|thermal output|(?:solar|flat-?plate|evacuated-?tube) (?:thermal )?collectors?|solar thermal|collector efficiency|water heaters?|boilers?|furnaces?|space heaters?)(?!\p{L})/iu;
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
+/** An engine said to work on one reservoir: nothing colder to reject heat to. */
+const SINGLE_RESERVOIR_RE = /(?<!\p{L})(?:no (?:cold|colder|cooler) (?:sink|side|reservoir|body|end)|(?:single|one|a single) (?:heat )?reservoir|(?:air|heat|water|sea|ocean|atmosphere|room air|ambient air|ambient heat) alone|nothing colder|without (?:a |any )?(?:cold|colder|cooler) (?:sink|side|reservoir|body))(?!\p{L})/iu;
 /** After a heat input: where the heat comes from ("3.6 kW from the borehole"). */
-const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+(?:low-grade[^\S\n]+|ambient[^\S\n]+)?heat[^\S\n]+)?(?:from|out of|drawn from|taken from|extracted from)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:borehole|ground|earth|soil|outside|outdoor|ambient|air|source|environment|surroundings|well|river|lake|sea|brine|loop)(?!\p{L})/iu;
+const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:(?:is|are|was|were|being)[^\S\n]+)?(?:of[^\S\n]+(?:low-grade[^\S\n]+|ambient[^\S\n]+)?heat[^\S\n]+)?(?:from|out of|drawn from|taken from|extracted from)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:borehole|ground|earth|soil|outside|outdoor|ambient|air|source|environment|surroundings|well|river|lake|sea|brine|loop)(?!\p{L})/iu;
 /** Boiler efficiencies on the net (lower) calorific value may exceed 100 % by convention. */
 const NET_CALORIFIC_RE = /(?<!\p{L})(?:condensing|net (?:CV|calorific|heating)|LHV|lower heating value|lower calorific)(?!\p{L})/iu;
 /** A machine that moves heat is said to: cooling words name a fridge or chiller the text may only mention as a load. */
@@ -328,6 +330,9 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
     }
   } else if (thrust && photonApplies) {
     needs.push(need('photon-bound', ['the input power'], 'A propellant-free thrust is bounded by the power that produces it (F ≤ P/c).', [thrust]));
+  } else if (!thrust && photonApplies && (pIn || pOut) && /(?<!\p{L})(?:thrust|push|force|propulsion|thruster|drive)(?!\p{L})/iu.test(text)) {
+    // "Sealed thruster, 1 kW input. Thrust figures to follow."
+    needs.push(need('photon-bound', ['the thrust measured'], 'A propellant-free thrust is bounded by the power that produces it (F ≤ P/c).', uniq([pIn, pOut])));
   }
 
   // ---- Rocket equation
@@ -396,7 +401,17 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
   const acrossDifference = ofKind(figures, 'temperature-difference').length > 0;
   const engineEfficiency = efficiency && !notAnEngine && (s.heatEngine || temps.length >= 2 || acrossDifference) && !(efficiency.si > 1 && temps.length < 2);
   const copForCarnot = cop && (cop.role !== null || s.heatPump || s.cooling || temps.length >= 2 || !s.overUnity);
-  if ((engineEfficiency || copForCarnot) && temps.length >= 2) {
+  if (engineEfficiency && temps.length === 1 && SINGLE_RESERVOIR_RE.test(text)) {
+    // "15 % efficiency from 20 °C room air alone, no cold sink": an engine on one reservoir (Th = Tc).
+    const only = temps[0];
+    plans.push({
+      check: 'carnot',
+      uses: uniq([only, efficiency]),
+      inputs: (e) => ({ Th: at(only, e(only)), Tc: at(only, e(only)), eta_claimed: at(efficiency!, e(efficiency!)), cop_heating_claimed: '0', cop_cooling_claimed: '0' }),
+      why: 'The text gives an engine working on one reservoir, with nothing colder to reject heat to.',
+      assumptions: [`Both sides at ${only.display}: the text names no colder body.`],
+    });
+  } else if ((engineEfficiency || copForCarnot) && temps.length >= 2) {
     const hot = temps.find((t) => t.role === 'hot') ?? [...temps].sort((a, b) => b.si - a.si)[0];
     const cold = temps.find((t) => t.role === 'cold' && t !== hot) ?? [...temps].filter((t) => t !== hot).sort((a, b) => a.si - b.si)[0];
     const extra: string[] = [];

@@ -128,7 +128,7 @@ const MULTIPLIER: Record<string, number> = { million: 1e6, M: 1e6, billion: 1e9,
  * that cannot be a thousands separator), then e-notation or × 10^n.
  */
 const NUMBER_RE =
-  /(?<![\p{L}\p{N}_.,/^])([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d{1,3}(?:[ \u00A0\u2009\u202F]\d{3})+(?![\d]|[^\S\n]\d)(?:,\d+)?|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?!\p{L})|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
+  /(?<![\p{L}\p{N}_.,^])(?<![\p{N}.,]\/)([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d{1,3}(?:[ \u00A0\u2009\u202F]\d{3})+(?![\d]|[^\S\n]\d)(?:,\d+)?|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?!\p{L})|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
 
 const SUPERSCRIPT_DIGITS: Record<string, string> = { '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-', '⁺': '' };
 
@@ -136,7 +136,7 @@ const LABEL_RE = new RegExp(`(?:(?<!\\p{L})(?:${alt(LABEL_WORDS)})|[§#¶])[^\\S
 const PLUS_MINUS_RE = /(?:±|\+\/-|\+-)[^\S\n]*$/u;
 
 const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
-const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
+const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
 /** An energy efficiency ratio (EER or SEER, in BTU/h of cooling per watt): a cooling COP × 3.412. */
 const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
 /** 1 BTU_IT/h = 0.293 071 1 W (NIST SP 811, Appendix B.8). */
@@ -146,7 +146,7 @@ const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|�
 const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})([^\\d.;!?\\n]{0,60})$`, 'iu');
 const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');
 /** "efficiency … 45%": the keyword, then up to 60 characters without digits or a sentence break. */
-const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning)(?!\p{L})([^\d.;!?\n]{0,60})$/iu;
+const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip)(?!\p{L})([^\d.;!?\n]{0,60})$/iu;
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
 const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)(?!\p{L})/iuy;
@@ -223,7 +223,7 @@ const ROLES: Partial<Record<FigureKind, CompiledRoles>> = {
   speed: compileRoles(SPEED_ROLES),
 };
 /** "1.5 kW in, 3 kW out": a bare in/out right after the figure, ending the clause. */
-const IN_OUT_AFTER_RE = /[^\S\n]*(in|out)(?!\p{L})(?=[^\S\n]*(?:[,;.!?)\]\n:—–]|(?:and|for|from|with|while|against|versus|vs|on|at|to|into|onto|across|through)(?!\p{L})|$))/iuy;
+const IN_OUT_AFTER_RE = /[^\S\n]*(?:of[^\S\n]+(?:electricity|electrical power|heat|power|work|energy|light|gas|fuel)[^\S\n]+)?(in|out)(?!\p{L})(?=[^\S\n]*(?:[,;.!?)\]\n:—–]|(?:and|for|from|with|while|against|versus|vs|on|at|to|into|onto|across|through)(?!\p{L})|$))/iuy;
 const COP_COOLING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_COOLING)})(?!\\p{L})`, 'iu');
 const COP_HEATING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_HEATING)})(?!\\p{L})`, 'iu');
 const HEDGE_RES = HEDGES.map((h) => ({ hedge: h.hedge, re: new RegExp(`(?:(?<!\\p{L})(?:${alt(h.words.filter((w) => /^\p{L}/u.test(w)))})|${h.words.filter((w) => !/^\p{L}/u.test(w)).map(escapeRe).join('|') || '(?!)'})[^\\S\\n]*$`, 'iu') }));
@@ -547,6 +547,9 @@ function roleFor(text: string, kind: FigureKind, start: number, end: number, flo
     // "a heating COP of 4.1", "cooling COP 5.0": said right before it.
     const near = /(heating|cooling)[^\S\n]+(?:COP|coefficient of performance)[^.;!?\n]{0,25}$/iu.exec(text.slice(Math.max(0, start - 60), start));
     if (near) return near[1].toLowerCase() === 'cooling' ? 'cooling' : 'heating';
+    // "COP_h ≈ 4.5", "COP_c = 3".
+    const symbol = /COP_?\{?(h|c|heat|heating|cool|cooling)\}?(?!\p{L})[^.;!?\n]{0,12}$/iu.exec(text.slice(Math.max(0, start - 30), start));
+    if (symbol) return /^c/i.test(symbol[1]) ? 'cooling' : 'heating';
     const around = text.slice(Math.max(0, start - COP_WINDOW), Math.min(text.length, end + COP_WINDOW));
     if (COP_COOLING_RE.test(around)) return 'cooling';
     if (COP_HEATING_RE.test(around) || HEAT_PUMP_RE.test(text)) return 'heating';
@@ -958,6 +961,9 @@ const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thruste
 const CRAFT_RE =
   /(?<!\p{L})(?:rockets?|propellants?|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|craft|landers?|probes?|satellites?|CubeSats?|smallsats?|microsat\w*|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines?|vehicles?|tugs?|stacks?|ships?|modules?|capsules?|boosters?|orbiters?|missiles?|payloads?|tanks?|fuel\w*|oxidi[sz]ers?|xenon|krypton|hydrazine|kerosene|methane|hydrogen|oxygen|nitrogen|argon|exhaust|wet|dry|m[01f]|masses)(?!\p{L})/iu;
 
+/** "P_out/P_in =", "output/input:": a ratio of two labelled figures about to be given. */
+const RATIO_LABELS_RE = /(?<!\p{L})([PEW]_?\{?(?:out|in|o|i)\}?|outputs?|inputs?|out|in)[^\S\n]*\/[^\S\n]*([PEW]_?\{?(?:out|in|o|i)\}?|outputs?|inputs?|out|in)(?!\p{L})[^\S\n]*[=:≈~][^\S\n]*/giu;
+
 /** A verb that makes a signal bigger, just before the first of two figures ("amplifies a 1 mW signal to 100 mW"). */
 const AMPLIFY_BEFORE_RE = /(?<!\p{L})(?:amplif(?:y|ies|ied|ying)|boost(?:s|ed|ing)?|lift(?:s|ed|ing)?|rais(?:e|es|ed|ing)|steps? up|stepped up|stepping up)[^\S\n]+(?:(?:a|an|the|its|their)[^\S\n]+)?(?:(?:input|incoming|weak|small|faint|signal)[^\S\n]+){0,2}(?:(?:signal|input|power|level)[^\S\n]+)?(?:from[^\S\n]+)?$/iu;
 
@@ -1114,6 +1120,16 @@ function relate(text: string, drafts: Draft[]): void {
     const [x, y] = a.start < b.start ? [a, b] : [b, a];
     return !/[.!?](?:\s|$)|\n/.test(text.slice(x.end, y.start).replace(ABBREVIATIONS_RE, ''));
   };
+
+  // "P_out/P_in = 3.2 kW / 0.8 kW": the roles in the order the labels give them.
+  for (const m of text.matchAll(RATIO_LABELS_RE)) {
+    const from = m.index! + m[0].length;
+    const [a, b] = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.start >= from);
+    if (!a || !b || a.kind !== b.kind || a.start - from > 12 || !/^[^\S\n]*(?:\/|:|to|vs\.?|versus)[^\S\n]*$/iu.test(text.slice(a.end, b.start))) continue;
+    const side = (label: string): FigureRole => (/out|_\{?o\}?$/i.test(label) ? 'out' : 'in');
+    a.role = side(m[1]);
+    b.role = side(m[2]);
+  }
 
   // "lifts a 1 mW signal to 100 mW", "boosts the input from 2 W to 40 W": what goes in and what comes out.
   for (let i = 0; i + 1 < drafts.length; i++) {
@@ -1332,6 +1348,15 @@ function relate(text: string, drafts: Draft[]): void {
       if (sides.has(k)) continue;
       const company = drafts.filter((d) => d !== t && sentenceOf(d) === k && (d.kind === 'temperature' || d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop'));
       if (company.length === 0) t.role = 'aside';
+    }
+  }
+
+  // A heat pump's source is its cold side ("source side sits at 10 °C"), not an engine's hot source.
+  if ((HEAT_PUMP_RE.test(text) || drafts.some((d) => d.kind === 'cop' && d.role === 'heating')) && !/(?<!\p{L})(?:engines?|turbines?|generators?)(?!\p{L})/iu.test(text)) {
+    for (const t of thermal) {
+      if (t.role !== 'hot') continue;
+      const near = text.slice(Math.max(0, t.start - 30), t.start) + '|' + text.slice(t.end, t.end + 12);
+      if (/(?<!\p{L})source(?!\p{L})/iu.test(near) && !/(?<!\p{L})(?:supply|flow|delivery|output)(?!\p{L})/iu.test(near)) t.role = 'cold';
     }
   }
 
