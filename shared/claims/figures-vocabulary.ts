@@ -163,6 +163,10 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   },
   { kind: 'speed', unit: 'mi/h', symbols: ['mph', 'MPH', 'mi/h', 'mi/hr'], words: ['mile per hour', 'miles per hour'] },
   { kind: 'speed', unit: 'mi/s', symbols: ['mi/s'], words: ['mile per second', 'miles per second'] },
+  // The light-year: 9 460 730 472 580 800 m exactly (IAU 2012 Resolution B2 with the Julian year, as mathjs has none).
+  { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 3600, words: ['light-year per hour', 'light-years per hour', 'light years per hour', 'lightyears per hour'] },
+  { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 86400, words: ['light-year per day', 'light-years per day', 'light years per day', 'lightyears per day'] },
+  { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 31557600, words: ['light-year per year', 'light-years per year', 'light years per year', 'lightyears per year'] },
   { kind: 'speed', unit: 'ft/s', symbols: ['ft/s', 'ft/sec', 'fps', 'ft s^-1', 'ft s⁻¹'], words: ['foot per second', 'feet per second'] },
   { kind: 'speed', unit: 'cm/s', symbols: ['cm/s', 'cm s^-1', 'cm s⁻¹'], words: ['centimetre per second', 'centimetres per second', 'centimeter per second', 'centimeters per second'] },
   { kind: 'speed', unit: 'mm/s', symbols: ['mm/s'], words: ['millimetre per second', 'millimetres per second', 'millimeter per second', 'millimeters per second'] },
@@ -210,7 +214,7 @@ export interface RoleWords {
 export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'excess',
-    before: ['excess', 'surplus', 'extra', 'net gain', 'net surplus', 'anomalous', 'unexplained', 'over-unity', 'overunity'],
+    before: ['excess', 'surplus', 'extra', 'net gain', 'net surplus', 'anomalous', 'unexplained', 'over-unity', 'overunity', '(?:output|out) exceeds? (?:the |its )?(?:input|consumption|supply) by', 'exceeds? (?:the |its )?(?:input|consumption|supply) by'],
     after: ['excess', 'surplus', 'extra', 'more(?= than)', 'above(?= (?:the|its) input)', 'in excess', 'net gain'],
   },
   {
@@ -227,7 +231,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'took', 'turned by', 'by a', 'fuel', 'containing', 'P_?\\{?in\\}?', 'E_?\\{?in\\}?', 'Pin', 'invest(?:s|ed|ing)?', 'gas input', 'fuel input',
     ],
     after: [
-      'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 'from the (?:wall|mains|socket|outlet|plug|grid)',
+      'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 'from the (?:wall|mains|socket|outlet|plug|grid)', 'compressors?',
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires)',
       '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
       '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
@@ -247,7 +251,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     ],
     after: [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
-      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump|phone|device|string|bulb|lamps|wheel)', 'into the (?:[\\w-]+ )?(?:battery|grid|load|bank|network|mains|store|tank|reservoir|pond|basin)(?: bank)?', 'net(?= (?:output|from|at|to|into|of electricity|electrical)|[,.;]|$)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
+      'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump|phone|device|string|bulb|lamps|wheel|laptop|computer|tablet|appliance|consumer|user|bank|lights?|heating|tank)', 'into the (?:[\\w-]+ )?(?:battery|grid|load|bank|network|mains|store|tank|reservoir|pond|basin)(?: bank)?', 'net(?= (?:output|from|at|to|into|of electricity|electrical)|[,.;]|$)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
       'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the (?:output )?terminals', 'at the shaft', 'of shaft power', 'on its output terminals',
       'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
   },
@@ -382,7 +386,7 @@ export const PROPELLANT_FREE_WORDS = [
   'pushes? (?:itself|against nothing)', 'self-propell\\w*', 'frustum', 'tapered (?:cavity|resonator|copper)',
   'microwave (?:thruster|drive|cavity|resonator)', 'resonant cavity', 'RF (?:thruster|cavity)', 'gyroscopic (?:thrust|lift|propulsion|drive|thruster)',
   'precession (?:drive|thruster|lift)', 'anti-?gravity', 'space drive', 'inertia drive', 'oscillation thruster', 'shuttl\\w+ masses', 'internal masses',
-  'no (?:external )?reaction', 'momentum from nothing', 'stationary thruster',
+  'no (?:external )?reaction', 'momentum from nothing', 'stationary thruster', '(?:reaction mass|propellant|exhaust|mass expelled)[:,]? (?:none|zero|nil|0 kg)',
   // "with nothing ejected", "no mass leaving it", "nothing escaping": said after the noun as well.
   '(?:with )?nothing (?:being )?(?:ejected|expelled|emitted|escaping|vented|thrown out|leaving(?: it| the \\w+)?)',
   '(?:with )?no (?:mass|matter|material|gas|propellant|particles?) (?:being )?(?:leaving|escaping|ejected|expelled|emitted|vented|thrown out|leaves|escapes)',
@@ -454,5 +458,5 @@ export const EFFICIENCY_CHANGE_WORDS = ['by', 'increas\\w*', 'improv\\w*', 'gain
 export const BARE_CONNECTORS = [
   'of', 'is', 'was', 'were', 'be', 'between', 'from', 'ranging from', 'ranges? from', 'lies', 'lay', 'sits', 'stands', 'varies', 'comes? (?:in )?(?:at|to)',
   'came (?:in )?(?:at|to)', 'works? out (?:at|to)', 'measured at', 'rated at', 'runs at', 'ran at', 'reached', 'in the range', 'range', 'reaching', 'ca\\.?', 'approx\\.?', 'c\\.', '~', '≈', 'reached', 'reaches', 'near', 'about', 'around', 'approximately', 'roughly',
-  'up to', 'above', 'over', 'exceeding', 'as high as', 'equal to', 'rated', 'value', 'measured', 'a', 'an', 'the',
+  'up to', 'above', 'over', 'exceeding', 'as high as', 'equal to', 'rated', 'value', 'measured', 'a', 'an', 'the', 'somewhere', 'anywhere', 'of the order of', 'on the order of',
 ];

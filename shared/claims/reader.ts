@@ -135,7 +135,7 @@ const SUPERSCRIPT_DIGITS: Record<string, string> = { '⁰': '0', '¹': '1', '²'
 const LABEL_RE = new RegExp(`(?:(?<!\\p{L})(?:${alt(LABEL_WORDS)})|[§#¶])[^\\S\\n]*$`, 'iu');
 const PLUS_MINUS_RE = /(?:±|\+\/-|\+-)[^\S\n]*$/u;
 
-const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
+const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|)»”"'’]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
 const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
 /** An energy efficiency ratio (EER or SEER, in BTU/h of cooling per watt): a cooling COP × 3.412. */
 const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
@@ -174,7 +174,7 @@ const GAIN_AFTER_RE =
 const GAIN_BEFORE_RE =
   /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
 const TIMES_AFTER_RE =
-  /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical)[^\S\n]+)?(?:input|consumption|in(?!\p{L})|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in)/iuy;
+  /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical)[^\S\n]+)?(?:input|consumption|in(?!\p{L})|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in|what (?:it|the [\p{L}-]+) (?:is fed|takes|draws|uses|consumes|gets|receives|is given))/iuy;
 const TIMES_BEFORE_RE = /(?<!\p{L})(?:output|yield|gain|returns?|delivers?|produces?|generates?|puts? out|gives?(?: back| out)?|makes|provides|supplies|sends? back)(?:[^\S\n]+(?:is|of|was|are|reaches|reached|power|energy|exactly|about|roughly|some|nearly))*[^\S\n]*$/iu;
 /** "the output exceeds the input by a factor of 1.5", "output is higher than input by a factor of 2". */
 const FACTOR_BEFORE_RE =
@@ -297,11 +297,13 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
     const c = COMPOUND_RE.exec(text);
     if (c && /per/i.test(c[0])) {
       // "1 mN per 100 W": a ratio with a number under it.
-      const under = /^([\d.]+)(?=[^\S\n]*\p{L})/u.exec(text.slice(u.end + c[0].length));
+      // "one newton per hundred watts": the count in words.
+      const under = /^(?:([\d.]+)|(?:(?:a|one)[^\S\n]+)?(ten|hundred|thousand))(?=[^\S\n]*\p{L})/iu.exec(text.slice(u.end + c[0].length));
       if (under) {
-        const per = unitAt(text, u.end + c[0].length + under[1].length);
-        if (per && !per.form.factor && u.form.kind === 'thrust' && per.form.kind === 'power' && Number(under[1]) > 0) {
-          return { suffix: { type: 'unit', form: u.form, per: per.form, perCount: Number(under[1]) }, end: per.end };
+        const count = under[1] !== undefined ? Number(under[1]) : { ten: 10, hundred: 100, thousand: 1000 }[under[2].toLowerCase() as 'ten' | 'hundred' | 'thousand'];
+        const per = unitAt(text, u.end + c[0].length + under[0].length);
+        if (per && !per.form.factor && u.form.kind === 'thrust' && per.form.kind === 'power' && count > 0) {
+          return { suffix: { type: 'unit', form: u.form, per: per.form, perCount: count }, end: per.end };
         }
       }
     }
@@ -436,6 +438,14 @@ function tokenize(text: string): NumberToken[] {
     if (tokens.some((t) => t.start < w.end && w.start < t.end)) continue;
     push(w.start, w.end, String(w.value), true);
   }
+  // "a 3/4 hp motor", "1/2 W": a simple fraction before a unit replaces the number before its slash.
+  for (const m of text.matchAll(/(?<![\p{N}.,\/])(\d{1,2})\/(\d{1,2})(?![\p{N}.,\/])/gu)) {
+    const [a, b] = [Number(m[1]), Number(m[2])];
+    const end = m.index! + m[0].length;
+    if (!(b > 1 && a < b) || !unitAt(text, end)) continue;
+    for (let i = tokens.length - 1; i >= 0; i--) if (tokens[i].start >= m.index! && tokens[i].start < end) tokens.splice(i, 1);
+    push(m.index!, end, String(a / b), false);
+  }
   tokens.sort((a, b) => a.start - b.start);
   return tokens;
 }
@@ -568,7 +578,7 @@ type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; uni
 
 /** "60 % more electrical energy out than in", "30 % more power than it draws": a gain of 1 + p. */
 const PERCENT_MORE_RE =
-  /[^\S\n]*(?:above|over|more than|in excess of|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:electrical|electric)[^\S\n]+)?(?:input|consumption|power in|energy in|supply)(?!\p{L})|[^\S\n]*(?:more|extra|excess|surplus|additional)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over|above|beyond)[^\S\n]+(?:(?:it|the|its)[^\S\n]+)?(?:[\p{L}\d.,-]+[^\S\n]+){0,4}?(?:in|input|takes|uses|consumes|draws|is fed|goes in|consumption|supply)(?!\p{L})/iuy;
+  /[^\S\n]*(?:above|over|more than|in excess of|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:electrical|electric)[^\S\n]+)?(?:input|consumption|power in|energy in|supply)(?!\p{L})|[^\S\n]*(?:more|extra|excess|surplus|additional)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over|above|beyond)[^\S\n]+(?:(?:it|the|its)[^\S\n]+)?(?:[\p{L}\d.,-]+[^\S\n]+){0,4}?(?:in|input|takes|uses|consumes|draws|is fed|goes in|consumption|supply)(?!\p{L})|[^\S\n]*(?:more|extra)[^\S\n]+than[^\S\n]+(?:that|this|it)(?!\p{L})/iuy;
 
 /** "70 % of the Carnot efficiency": a share of the bound, made an efficiency once the temperatures are known. */
 const CARNOT_SHARE_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:Carnot|ideal Carnot|reversible)(?:[^\S\n]+(?:efficiency|limit|bound|value|maximum|figure))?(?!\p{L})/iuy;
@@ -597,7 +607,12 @@ function readPercent(text: string, start: number, end: number, floor: number): P
   SHARE_AS_WORK_RE.lastIndex = end;
   const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text);
   const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before);
-  const efficiency = after || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1]));
+  // "Ammonia–water cycle engine, 19 % at a 120 °C heat source": a percentage said right after a heat
+  // engine named, with a temperature in the same sentence, is its efficiency.
+  const engineSaid =
+    /(?<!\p{L})(?:engines?|turbines?|Stirling|thermoelectric (?:generators?|modules?)|TEGs?|power (?:plants?|stations?|cycles?)|(?:Rankine|Brayton|ORC|steam|Kalina) cycles?)[^\S\n]*[,:–—-]?[^\S\n]*(?:(?:at|of|reaches|reached|achieves|achieved|claims|claimed|with|about|around|roughly|only|just)[^\S\n]+)*$/iu.test(before) &&
+    /°|kelvin|(?<!\p{L})K(?!\p{L})/u.test(sentenceAround(text, start, end));
+  const efficiency = after || engineSaid || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1]));
   if (!efficiency) return null;
   // The machine is named anywhere in the claim ("Had our air-to-water unit fitted. … '350 % efficient'").
   const sentence = text;
