@@ -43,6 +43,10 @@ export const COMMON_WORDS = new Set(
     'good got great hour hours keep keeps kept kind last likely long made make makes making measured minute minutes month',
     'months nearly new next part parts point points put puts putting result results saw see seen set sets setting take',
     'taken takes taking test tested testing tests time times took way ways week weeks went year years',
+    // words of any claim of more out than in, or of any gadget, which name no mechanism (issue 12: with
+    // an entry on excess heat from metal–hydrogen cells, "excess" alone must not carry a match)
+    'excess surplus extra module modules unit units box boxes device devices prototype prototypes',
+    'once twice place places placed half second third fourth small smaller hard harder first common',
   ]
     .join(' ')
     .split(' '),

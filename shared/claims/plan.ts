@@ -140,6 +140,9 @@ export function readSignals(ctx: PlanContext): Signals {
  *    the first law → over-unity; the Carnot bound → engines on one reservoir; the photon bound →
  *    propellant-free thrust.
  */
+/** The classes signalledClasses can return (the matcher boosts them and every class below them). */
+export const SIGNALLABLE_CLASSES = ['propellant-free-thrust', 'over-unity', 'single-reservoir-engine'] as const;
+
 export function signalledClasses(figures: Figure[], text: string): string[] {
   const s = readSignals({ text });
   const has = (kind: FigureKind) => figures.some((f) => f.kind === kind);

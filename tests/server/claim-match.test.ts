@@ -12,7 +12,10 @@
  * sighting, claim and decision routes), at once on this server and through the watermark on
  * another. The invented texts below are ours: invented devices and organisations, no real ones.
  */
+import fs from 'node:fs';
+import path from 'node:path';
 import request from 'supertest';
+import { SIGNALLABLE_CLASSES } from '../../shared/claims/plan';
 import { CLAIM_TEXT_MAX } from '../../shared/claims/types';
 import { seedIfEmpty } from '../../server/db/seed';
 import { SynonymGroup } from '../../server/models';
@@ -56,8 +59,9 @@ const firstAt = (text: string, word: string) => {
 };
 
 describe('the fixtures', () => {
-  it('hold three texts of 60–200 words, one of each kind, for every starter entry', () => {
-    expect(index.size).toBe(12);
+  it('hold three texts of 60–200 words, one of each kind, for each of the twelve first entries', () => {
+    // Every entry in content/entries is published; the fixture texts cover the twelve first ones.
+    expect(index.size).toBe(fs.readdirSync(path.join(CONTENT_DIR, 'entries')).filter((f) => f.endsWith('.md')).length);
     const slugs = [...new Set(claimTexts.map((t) => t.slug))].sort();
     expect(slugs).toHaveLength(12);
     for (const slug of slugs) expect(claimTexts.filter((t) => t.slug === slug).map((t) => t.kind).sort()).toEqual(['abstract', 'patent', 'press']);
@@ -170,8 +174,9 @@ describe('texts about nothing in the library', () => {
 
   it('match nothing whatever class the figures point to, when they are longer than a sentence', () => {
     // (For a sentence, the class its figures point to may admit an entry on one strong word.)
+    // The figures point to SIGNALLABLE_CLASSES only (each boosts the classes below it too).
     for (const { text } of [...unrelatedTexts, ...offTopic].filter((t) => t.text.length > 300)) {
-      for (const c of index.classes.keys()) expect(matchClaim(index, text, { classes: [c] })).toEqual([]);
+      for (const c of SIGNALLABLE_CLASSES) expect(matchClaim(index, text, { classes: [c] })).toEqual([]);
     }
   });
 
@@ -244,7 +249,8 @@ const paraphrases: { slug: string; through?: boolean; text: string }[] = [
   { slug: 'sideways-beam-thruster', text: 'An electron beam is bent by a sideways force and caught in a beam dump on board; the designers claim forward thrust from the lost axial speed.' },
   { slug: 'self-spinning-body', text: 'A self-rotating satellite that can spin itself up with an internal torque and keep turning after its wheel stops.' },
   { slug: 'permanent-magnet-motor', text: 'A magnet wheel of neodymium magnets on a stator ring keeps turning past the sticking point and lights a lamp without a supply.' },
-  { slug: 'over-unity-circuit', through: true, text: 'A bifilar coil and a bank of supercapacitors make this overunity device self-sustaining: it recharges itself and powers a lamp.' },
+  // (Not "it recharges itself": since issue 12 an entry of its own covers self-charging loops.)
+  { slug: 'over-unity-circuit', through: true, text: 'A bifilar coil and a bank of supercapacitors make this overunity device self-sustaining: it keeps a lamp lit.' },
   { slug: 'buoyancy-wheel', text: 'Pontoons on a belt rise through a column of water by upthrust and come back down through the air, driving a generator forever.' },
 ];
 
