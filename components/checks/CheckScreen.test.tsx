@@ -109,8 +109,8 @@ describe('CheckScreen, other checks', () => {
     expect(notice.textContent).toContain('Local codes and licensed practice come first.');
   });
 
-  it('has no cautions notice where a check has none', () => {
-    render(<CheckScreen name="photon-bound" query={{}} />);
+  it("has no cautions notice where a check has none (Landauer's bound is pen and paper)", () => {
+    render(<CheckScreen name="landauer" query={{}} />);
     expect(screen.queryByTestId('check-cautions')).toBeNull();
   });
 
