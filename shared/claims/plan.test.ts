@@ -248,3 +248,35 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     expect(out(runClaimChecks(extractFigures(chp), { text: chp }).checks.find((c) => c.check === 'first-law')!, 'over_unity')).toBeCloseTo(0.85, 9);
   });
 });
+
+describe('the checks of issue 12, planned from a claim (invented test data)', () => {
+  const run = (text: string, classes: string[] = []) => runClaimChecks(extractFigures(text), { text, classes });
+
+  it("Landauer's bound for an energy per bit at a stated temperature", () => {
+    const r = run('Our logic gate erases a bit with 1e-22 J per bit at 300 K.');
+    const l = r.checks.find((c) => c.check === 'landauer')!;
+    // k_B·T·ln 2 with k_B = 1.380649e-23 J/K exactly (SI Brochure, 9th ed., 2019) and T = 300 K.
+    expect(out(l, 'E_min')).toBeCloseTo(1.380649e-23 * 300 * Math.LN2, 30);
+    expect(l.finding).toBe('breaks');
+    // Without a temperature: what it needs, not a default.
+    expect(run('Our logic gate erases a bit with 1e-22 J per bit.').needs.map((n) => n.check)).toContain('landauer');
+  });
+
+  it('the radiative limits for a solar cell; Shockley–Queisser only where one junction is said', () => {
+    const single = run('The single-junction perovskite film converts 52 percent of plain sunlight to electricity.').checks.find((c) => c.check === 'light-converter-limits')!;
+    // Landsberg 1 − 4/3·(Ta/Ts) + 1/3·(Ta/Ts)⁴ with Ts = 6000 K, Ta = 300 K (Landsberg and Tonge 1980).
+    expect(out(single, 'eta_landsberg')).toBeCloseTo(1 - (4 / 3) * 0.05 + (1 / 3) * 0.05 ** 4, 12);
+    expect(single.finding).toBe('breaks'); // above the one-junction limit of about 31 % at one sun
+    const any = run('Our solar panel converts 52 percent of plain sunlight to electricity.').checks.find((c) => c.check === 'light-converter-limits')!;
+    expect(any.finding).toBe('consistent'); // junctions not said: Landsberg and Carnot only
+    expect(any.assumptions.join(' ')).toMatch(/junctions/);
+  });
+
+  it('says what electrolysis, excess-heat and self-charging-vehicle claims need', () => {
+    expect(run('The HHO cell runs on 20 A at 13.8 V and doubles the mileage.').needs.map((n) => n.check)).toContain('faraday-yield');
+    expect(run('The palladium cell gave 5 W of excess heat over its 20 W input.').needs.map((n) => n.check)).toContain('nuclear-signature');
+    expect(run('This self-charging electric car never needs to be plugged in; its roof turbine gives 3 kW.').needs.map((n) => n.check)).toContain('road-load');
+    // And not for a lawful electrolyser or an ordinary car.
+    expect(run('The car drew 15 kW on the motorway.').needs.map((n) => n.check)).not.toContain('road-load');
+  });
+});

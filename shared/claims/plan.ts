@@ -91,6 +91,24 @@ const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L}
 const HEAT_ONLY_RE = /(?<!\p{L})(?:(?:delivered|given|supplied|collected|recovered|available|comes? out|output) as (?:useful )?heat|heat output|thermal output|(?:solar|flat-?plate|evacuated-?tube) (?:thermal )?collectors?|solar thermal|collector efficiency|water heaters?|boilers?|furnaces?|space heaters?)(?!\p{L})/iu;
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
+/** A converter of sunlight to electricity. */
+const SOLAR_CELL_RE = /(?<!\p{L})(?:solar (?:cells?|panels?|modules?|films?|arrays?)|photovoltaic\w*|PV|perovskites?|(?:silicon|GaAs|gallium arsenide|CdTe|CIGS|organic) (?:cells?|films?|modules?)|single-junction|multi-junction|tandem cells?|(?:of|from) (?:plain |the )?sunlight (?:in)?to electricity)(?!\p{L})/iu;
+/** "single-junction", "triple-junction", "a 4-junction cell". */
+const JUNCTIONS_RE = /(?<!\p{L})(single|one|double|dual|two|triple|three|four|five|six|\d{1,2})[- ]junction(?!\p{L})|(?<!\p{L})(tandem)(?!\p{L})/iu;
+const JUNCTION_COUNT: Record<string, number> = { single: 1, one: 1, double: 2, dual: 2, two: 2, tandem: 2, triple: 3, three: 3, four: 4, five: 5, six: 6 };
+/** "under 500 suns", "at 1,000× concentration". */
+const SUNS_RE = /(\d[\d,]*(?:\.\d+)?)[^\S\n]*(?:suns|×[^\S\n]*concentrat\w*|x[^\S\n]+concentrat\w*|-sun(?!\p{L}))/iu;
+const ONE_SUN_RE = /(?<!\p{L})(?:one sun|1 sun|unconcentrated|no concentrators?|non-concentrat\w*|plain sunlight|AM ?1\.5|standard test conditions|STC)(?!\p{L})/iu;
+/** The most concentrated sunlight (the sun filling the whole sky), as the light-converter check takes it. */
+const MAX_SUNS = 46200;
+/** Splitting water by a current. */
+const ELECTROLYSIS_RE = /(?<!\p{L})(?:electroly[sz]\w*|HHO|oxyhydrogen|Brown'?s gas|hydroxy gas|hydrogen-on-demand|water cells?|water-splitting)(?!\p{L})/iu;
+/** Cells of hydrogen or deuterium in a metal. */
+const EXCESS_HEAT_CELL_RE = /(?<!\p{L})(?:palladium|deuterium|deuteride|LENR|cold fusion|low-energy nuclear|nickel[–-]hydrogen|metal hydrides?|heavy water)(?!\p{L})/iu;
+/** A vehicle said to charge itself. */
+const SELF_CHARGING_VEHICLE_RE = /(?<!\p{L})(?:self-?(?:re)?charging|charges? (?:it|them)sel(?:f|ves)|never needs? (?:to be )?(?:charging|charged|plugging in)|infinite range|unlimited range)(?!\p{L})[^.;!?\n]{0,80}(?<!\p{L})(?:cars?|vehicles?|EVs?|trucks?|lorr(?:y|ies)|bus(?:es)?|scooters?|bikes?)(?!\p{L})|(?<!\p{L})(?:cars?|vehicles?|EVs?|trucks?|bus(?:es)?|scooters?)(?!\p{L})[^.;!?\n]{0,80}(?<!\p{L})(?:self-?(?:re)?charging|charges? itself|recharges? itself|never needs? (?:to be )?(?:charging|charged|plugging in)|infinite range|unlimited range)(?!\p{L})/iu;
+/** "… J per bit", "for each bit erased", "per logic operation". */
+const PER_BIT_RE = /^[^\S\n]*(?:(?:of energy|of work)[^\S\n]+)?(?:per|for each|for every|each|a)[^\S\n]+(?:erased[^\S\n]+|logical[^\S\n]+|logic[^\S\n]+)?(?:bit|bits|operation|erasure|switching event|gate operation|flip)(?!\p{L})/iu;
 /** An engine said to work on one reservoir: nothing colder to reject heat to. */
 const SINGLE_RESERVOIR_RE = /(?<!\p{L})(?:no (?:cold|colder|cooler) (?:sink|side|reservoir|body|end)|(?:single|one|a single) (?:heat )?reservoir|(?:air|heat|water|sea|ocean|atmosphere|room air|ambient air|ambient heat) alone|nothing colder|without (?:a |any )?(?:cold|colder|cooler) (?:sink|side|reservoir|body))(?!\p{L})/iu;
 /** After a heat input: where the heat comes from ("3.6 kW from the borehole"). */
@@ -552,6 +570,75 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
       why: 'The text states a speed that is a sizeable fraction of the speed of light, or more.',
       assumptions: [],
     });
+  }
+
+  // ---- Converters of sunlight: the Landsberg and Carnot bounds, and Shockley–Queisser for one junction
+  const solarEfficiency = ofKind(figures, 'efficiency').find((f) => !f.derived);
+  if (solarEfficiency && SOLAR_CELL_RE.test(text) && !s.heatEngine && !HEAT_ONLY_RE.test(text)) {
+    const junction = JUNCTIONS_RE.exec(text);
+    const junctions = junction ? (JUNCTION_COUNT[junction[1].toLowerCase()] ?? Number(junction[1])) : 0;
+    const suns = SUNS_RE.exec(text);
+    const oneSun = ONE_SUN_RE.test(text);
+    const X = suns ? Math.min(Number(suns[1].replace(',', '')), MAX_SUNS) : oneSun ? 1 : MAX_SUNS;
+    const extra: string[] = ['The sun as a 6000 K blackbody and the cell at 300 K, as Shockley and Queisser took them.'];
+    if (!junction) extra.push('The text does not say how many junctions the cell has: only the Landsberg and Carnot bounds, which hold for any converter, are applied.');
+    if (!suns && !oneSun) extra.push('The text does not say how concentrated the sunlight is: the most concentrated (the sun filling the whole sky), the end most favourable to the claim.');
+    plans.push({
+      check: 'light-converter-limits',
+      uses: [solarEfficiency],
+      inputs: (e) => ({ eta_claimed: at(solarEfficiency, e(solarEfficiency)), junctions: String(junctions), X: String(X) }),
+      why: 'The text gives the efficiency of a converter of sunlight.',
+      assumptions: extra,
+    });
+  }
+
+  // ---- Checks whose figures claims seldom give: say what they need
+  const flows = [...power, ...energy];
+  if (ELECTROLYSIS_RE.test(text) && (ofKind(figures, 'current').length || flows.length)) {
+    needs.push(
+      need(
+        'faraday-yield',
+        ['the gas flow measured (litres per minute, at a stated temperature and pressure)', 'the current through the cells and how many cells are in series'],
+        "Faraday's law sets the most gas a current can split from water: a claimed flow above it was not made by electrolysis.",
+        uniq([ofKind(figures, 'current')[0], pIn]),
+      ),
+    );
+  }
+  const excessHeat = (ctx.classes ?? []).includes('excess-heat-cell') || EXCESS_HEAT_CELL_RE.test(text);
+  if (excessHeat && flows.length) {
+    needs.push(
+      need(
+        'nuclear-signature',
+        ['the reaction proposed (its energy per reaction)', 'the mass of metal and hydrogen taking part'],
+        'Chemistry gives a few electronvolts per atom; more needs nuclear reactions, whose rate and radiation follow from the power claimed.',
+        uniq(flows.filter((f) => f.role === 'excess' || f.role === 'out')),
+      ),
+    );
+  }
+  if ((ctx.classes ?? []).includes('self-charging-loop') || SELF_CHARGING_VEHICLE_RE.test(text)) {
+    needs.push(
+      need(
+        'road-load',
+        ["the vehicle's mass and speed", 'its drag coefficient and frontal area', "the generator's power"],
+        'A generator driven by the vehicle adds at least its power over the speed to the drag the motor must overcome.',
+        uniq([pOut, pIn, ...speeds]),
+      ),
+    );
+  }
+  const perBit = ofKind(figures, 'energy').find((f) => PER_BIT_RE.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)));
+  if (perBit) {
+    const temp = temps.length === 1 ? temps[0] : undefined;
+    if (temp) {
+      plans.push({
+        check: 'landauer',
+        uses: [perBit, temp],
+        inputs: (e) => ({ T: at(temp, e(temp)), E_op: at(perBit, e(perBit)), bits: '1' }),
+        why: 'The text gives the energy of one operation on a bit and the temperature it works at.',
+        assumptions: ['One bit erased per operation.'],
+      });
+    } else {
+      needs.push(need('landauer', ['the temperature at which it works'], "Erasing a bit costs at least k_B·T·ln 2 (Landauer's bound).", [perBit]));
+    }
   }
 
   // ---- Quantum efficiency

@@ -323,6 +323,8 @@ function readSuffix(text: string, at: number): { suffix: Suffix; end: number } {
       if (per && ((u.form.kind === 'voltage' && per.form.kind === 'current') || (u.form.kind === 'current' && per.form.kind === 'voltage'))) {
         return { suffix: { type: 'unit', form: u.form }, end: u.end };
       }
+      // "1e-22 J per bit", "5 kWh per cycle", "3 min per batch": the figure of one of them.
+      if (/per/i.test(c[0]) && PER_COUNT_RE.test(text.slice(u.end + c[0].length, u.end + c[0].length + 30))) return { suffix: { type: 'unit', form: u.form }, end: u.end };
       COMPOUND_AFTER_RE.lastIndex = u.end;
       if (COMPOUND_AFTER_RE.test(text) && !/^[^\S\n]*-/.test(text.slice(u.end))) return { suffix: null, end: at };
     }
@@ -975,6 +977,9 @@ const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thruste
 /** Words that make a sentence's mass the craft's: the craft itself, its propellant, its engine. */
 const CRAFT_RE =
   /(?<!\p{L})(?:rockets?|propellants?|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|craft|landers?|probes?|satellites?|CubeSats?|smallsats?|microsat\w*|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines?|vehicles?|tugs?|stacks?|ships?|modules?|capsules?|boosters?|orbiters?|missiles?|payloads?|tanks?|fuel\w*|oxidi[sz]ers?|xenon|krypton|hydrazine|kerosene|methane|hydrogen|oxygen|nitrogen|argon|exhaust|wet|dry|m[01f]|masses)(?!\p{L})/iu;
+
+/** After "per": one of a counted thing, not a unit ("per bit", "per cycle"). */
+const PER_COUNT_RE = /^(?:(?:erased|logical|logic|single|full|complete|charge|working)[^\S\n]+)?(?:bits?|operations?|erasures?|cycles?|batch(?:es)?|pulses?|shots?|flips?|events?|strokes?|revolutions?|turns?|runs?|trips?|laps?|charges?|discharges?|fills?|loads?|sessions?)(?!\p{L})/iu;
 
 /** "P_out/P_in =", "output/input:": a ratio of two labelled figures about to be given. */
 const RATIO_LABELS_RE = /(?<!\p{L})([PEW]_?\{?(?:out|in|o|i)\}?|outputs?|inputs?|out|in)[^\S\n]*\/[^\S\n]*([PEW]_?\{?(?:out|in|o|i)\}?|outputs?|inputs?|out|in)(?!\p{L})[^\S\n]*[=:≈~][^\S\n]*/giu;
