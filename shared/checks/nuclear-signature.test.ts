@@ -75,7 +75,7 @@ describe('nuclear-signature check', () => {
     expect(rel(o.atoms_n, atoms)).toBeLessThan(1e-12);
     expect(o.E_per_atom / E_CHARGE).toBeCloseTo(1e6 / atoms / 1.602176634e-19, 6); // 608.3 eV
     expect(o.E_per_atom / E_CHARGE).toBeCloseTo(608.3, 1);
-    // "10 eV" parses through mathjs's eV (CODATA 2010 digits, 1.602 176 565e-19 J): 4e-8 from ours.
+    // "10 eV" parses at the exact electronvolt (shared/worksheet/math.ts).
     expect(o.chem_ratio).toBeCloseTo(60.83, 2);
     expect(r.verdict.holds).toBe(false);
     expect(r.verdict.message).toMatch(/^The claimed excess energy, 1\.00 MJ from 1\.03 × 10\^22 atoms .* is 608 eV per atom, 60\.8 times the most chemistry gives/);
@@ -100,7 +100,7 @@ describe('nuclear-signature check', () => {
   test('10 W through D + D → ³He + n: 1.91 × 10^13 neutrons a second, 1.52 × 10^8 per cm² per second at 1 m', () => {
     const r = run({ E_excess: '0 J', P_excess: '10 W', Q: '3.269 MeV', r: '1 m' });
     const o = out(r);
-    const q = 3.269 * 1.602176565e-13; // mathjs's MeV, as the typed input is read
+    const q = 3.269 * 1.602176634e-13; // MeV exactly (SI Brochure 2019), as the typed input is read
     expect(rel(o.reaction_rate, 10 / q)).toBeLessThan(1e-12);
     expect(o.emission_rate).toBe(o.reaction_rate);
     expect(rel(o.fluence_rate, o.reaction_rate / (4 * Math.PI))).toBeLessThan(1e-12);
@@ -128,7 +128,7 @@ describe('nuclear-signature check', () => {
   test('an unnamed Q-value is described as one penetrating particle per reaction', () => {
     const r = run({ P_excess: '1 W', Q: '10 MeV' });
     expect(r.verdict.message).toMatch(/if each gave off one penetrating particle/);
-    expect(out(r).reactions_total).toBeCloseTo(1e6 / (10 * 1.602176565e-13), -6);
+    expect(out(r).reactions_total).toBeCloseTo(1e6 / (10 * 1.602176634e-13), -6); // 1 MeV = 1.602176634e-13 J exactly (SI Brochure 2019)
   });
 
   test('without a mass or a count of atoms the energy cannot be put on the scale', () => {

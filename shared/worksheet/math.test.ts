@@ -170,3 +170,18 @@ describe('a time budget bounds hostile worksheets', () => {
     expect(r.plots[0].series[0].values).toHaveLength(200);
   });
 });
+
+describe('units and comparisons at atomic scales', () => {
+  test('the electronvolt is exact: e = 1.602176634e-19 C (SI Brochure, 9th ed., 2019, Table 8)', () => {
+    expect(math.unit('1 eV').toNumber('J')).toBe(1.602176634e-19);
+    expect(math.unit('1 MeV').toNumber('J')).toBeCloseTo(1.602176634e-13, 25);
+    expect(math.unit('3 electronvolt').toNumber('eV')).toBeCloseTo(3, 12);
+  });
+
+  test('quantities below 1e-15 in SI units compare by value (no absolute tolerance)', () => {
+    // 135 eV and 10 eV are about 2.2e-17 J and 1.6e-18 J: mathjs's default absTol of 1e-15 made them equal.
+    expect(math.smallerEq(math.unit('135 eV'), math.unit('10 eV'))).toBe(false);
+    expect(math.larger(math.unit('2e-21 J'), math.unit('1e-21 J'))).toBe(true);
+    expect(math.equal(math.unit('1 eV'), math.unit('1.602176634e-19 J'))).toBe(true);
+  });
+});

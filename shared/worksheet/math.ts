@@ -51,7 +51,14 @@ export class ExpressionError extends Error {
   }
 }
 
-const instance = create(all, { number: 'number', matrix: 'Matrix', predictable: false });
+// absTol 0: comparisons are relative only (relTol 1e-12). mathjs's default absolute tolerance of
+// 1e-15 made any two quantities below 1e-15 in SI units equal, so "135 eV <= 10 eV" (about 1e-17 J
+// each) held.
+const instance = create(all, { number: 'number', matrix: 'Matrix', predictable: false, absTol: 0 });
+
+// The electronvolt at its exact value, e × 1 J/C with e = 1.602176634e-19 C (SI Brochure, 9th ed.,
+// 2019, Table 8); mathjs carries the CODATA 2010 value 1.602176565e-19 J. Keeps its prefixes (keV, MeV).
+instance.createUnit('eV', { definition: '1.602176634e-19 J', prefixes: 'short', aliases: ['electronvolt', 'electronvolts'] }, { override: true });
 
 // Metric horsepower (Pferdestärke, cheval-vapeur) beside mathjs's mechanical horsepower "hp":
 // 1 PS = 75 kgf·m/s = 735.49875 W exactly (NIST SP 811 (2008), App. B.8, "horsepower, metric").
