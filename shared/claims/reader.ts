@@ -979,7 +979,7 @@ const CRAFT_RE =
   /(?<!\p{L})(?:rockets?|propellants?|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|craft|landers?|probes?|satellites?|CubeSats?|smallsats?|microsat\w*|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines?|vehicles?|tugs?|stacks?|ships?|modules?|capsules?|boosters?|orbiters?|missiles?|payloads?|tanks?|fuel\w*|oxidi[sz]ers?|xenon|krypton|hydrazine|kerosene|methane|hydrogen|oxygen|nitrogen|argon|exhaust|wet|dry|m[01f]|masses)(?!\p{L})/iu;
 
 /** After "per": one of a counted thing, not a unit ("per bit", "per cycle"). */
-const PER_COUNT_RE = /^(?:(?:erased|logical|logic|single|full|complete|charge|working)[^\S\n]+)?(?:bits?|operations?|erasures?|cycles?|batch(?:es)?|pulses?|shots?|flips?|events?|strokes?|revolutions?|turns?|runs?|trips?|laps?|charges?|discharges?|fills?|loads?|sessions?)(?!\p{L})/iu;
+const PER_COUNT_RE = /^(?:(?:erased|logical|logic|single|full|complete|charge|working)[^\S\n]+)?(?:bits?|operations?|erasures?|cycles?|batch(?:es)?|flips?|runs?|trips?|laps?|charges?|discharges?|fills?|sessions?)(?!\p{L})/iu;
 
 /** "P_out/P_in =", "output/input:": a ratio of two labelled figures about to be given. */
 const RATIO_LABELS_RE = /(?<!\p{L})([PEW]_?\{?(?:out|in|o|i)\}?|outputs?|inputs?|out|in)[^\S\n]*\/[^\S\n]*([PEW]_?\{?(?:out|in|o|i)\}?|outputs?|inputs?|out|in)(?!\p{L})[^\S\n]*[=:≈~][^\S\n]*/giu;

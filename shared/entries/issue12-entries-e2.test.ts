@@ -16,9 +16,8 @@ const KB = 1.380649e-23; // J/K, exact (SI Brochure 2019)
 const NA = 6.02214076e23; // 1/mol, exact (SI Brochure 2019)
 const R = KB * NA; // J/(mol K)
 const G0 = 9.80665; // m/s², exact (3rd CGPM 1901; NIST SP 811 App. B)
-// mathjs defines the electronvolt with the older CODATA value 1.602176565e-19 J; the exact SI value is
-// 1.602176634e-19 J (SI Brochure 2019). The two differ by 4e-8 relative, so energies in eV are compared
-// to 1e-6 relative below.
+// The electronvolt, exact: e × 1 V = 1.602176634e-19 J (SI Brochure 2019), as worksheets read "eV"
+// (shared/worksheet/math.ts).
 const EV = 1.602176634e-19;
 
 const entry = (slug: string): EntryFile => parseEntryFile(readFileSync(join(DIR, `${slug}.md`), 'utf8'), `${slug}.md`);

@@ -86,11 +86,10 @@ describe('excess heat from metal–hydrogen cells', () => {
     const { step } = run('metal-hydrogen-excess-heat', 'excess-heat-ledger', { P_heat: '2.2594 W' });
     const pExcess = step('P_excess');
     expect(pExcess).toBeCloseTo(1, 3);
-    // MeV in a worksheet is mathjs's electronvolt, 1.602176565e-19 J (CODATA 2010), which differs from
-    // the exact e × 1 V (SI Brochure 2019) by 4.3e-8 relative; hence 1e-7 here, not 1e-12.
-    expect(rel(step('n_rate_dd'), pExcess / (7.3e6 * E))).toBeLessThan(1e-7);
+    // MeV in a worksheet is the exact e × 1 V × 10⁶ (SI Brochure 2019; shared/worksheet/math.ts).
+    expect(rel(step('n_rate_dd'), pExcess / (7.3e6 * E))).toBeLessThan(1e-12);
     expect(step('n_rate_dd') / pExcess).toBeCloseTo(8.55e11, -9);
-    expect(rel(step('R_reactions'), pExcess / (23.8e6 * E))).toBeLessThan(1e-7);
+    expect(rel(step('R_reactions'), pExcess / (23.8e6 * E))).toBeLessThan(1e-12);
   });
 
   test('energy per metal atom is compared at the eV scale, where SI joules are ~1e-18 (mathjs absolute tolerance 1e-15)', () => {
