@@ -55,6 +55,7 @@ export const ROLES_FOR: Record<FigureKind, readonly Role[]> = {
   'specific-impulse': [],
   'thrust-per-power': [],
   'specific-power': [],
+  'gas-flow': [],
 };
 
 export const ROLE_LABEL: Record<Role, string> = {
@@ -106,6 +107,7 @@ export const EXAMPLE_FOR: Record<FigureKind, string> = {
   'specific-impulse': '300 s',
   'thrust-per-power': '2 mN/kW',
   'specific-power': '500 W/kg',
+  'gas-flow': '1.5 L/min',
 };
 
 /**

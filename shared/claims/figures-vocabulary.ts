@@ -194,6 +194,20 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'duration', unit: 'year', symbols: ['yr', 'yrs'], words: ['year', 'years'] },
 
   // Electric current
+  // Gas flow (electrolysers): mathjs reads "L/min", "L/h", "mL/min", "cm^3/min".
+  {
+    kind: 'gas-flow',
+    unit: 'L/min',
+    symbols: ['L/min', 'l/min', 'L/minute', 'LPM', 'lpm', 'SLPM', 'slpm', 'L min^-1', 'L min⁻¹', 'l min⁻¹'],
+    words: ['litre per minute', 'litres per minute', 'liter per minute', 'liters per minute'],
+  },
+  { kind: 'gas-flow', unit: 'L/h', symbols: ['L/h', 'l/h', 'L/hr', 'l/hr', 'LPH', 'lph'], words: ['litre per hour', 'litres per hour', 'liter per hour', 'liters per hour'] },
+  {
+    kind: 'gas-flow',
+    unit: 'mL/min',
+    symbols: ['mL/min', 'ml/min', 'cc/min', 'ccm', 'sccm', 'SCCM'],
+    words: ['millilitre per minute', 'millilitres per minute', 'milliliter per minute', 'milliliters per minute', 'cc per minute'],
+  },
   { kind: 'current', unit: 'A', symbols: ['A'], words: ['amp', 'amps', 'ampere', 'amperes'] },
   { kind: 'current', unit: 'mA', symbols: ['mA'], words: ['milliamp', 'milliamps', 'milliampere', 'milliamperes'] },
   { kind: 'current', unit: 'uA', symbols: micro('A'), words: ['microamp', 'microamps', 'microampere', 'microamperes'] },

@@ -697,4 +697,10 @@ describe('more ways claims are written (issue 11)', () => {
     expect(build.filter((x) => x.kind === 'duration').map((x) => x.role)).toEqual([null, 'aside']);
     expect(build.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([['in', 2200 * 5 * 3600], ['out', 1800 * 5 * 3600]]);
   });
+
+  test('gas flows of electrolysers: litres per minute or hour, millilitres per minute', () => {
+    // 1 L = 10⁻³ m³ exactly (NIST SP 811 (2008), App. B.8, "liter"); 1 min = 60 s, 1 h = 3600 s.
+    const f = read('It makes 3 L/min, then 90 litres per hour, and 250 mL/min of hydrogen at idle.').filter((x) => x.kind === 'gas-flow');
+    expect(f.map((x) => x.si)).toEqual([3e-3 / 60, 90e-3 / 3600, 250e-6 / 60].map((v) => expect.closeTo(v, 15)));
+  });
 });

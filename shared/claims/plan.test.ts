@@ -280,3 +280,22 @@ describe('the checks of issue 12, planned from a claim (invented test data)', ()
     expect(run('The car drew 15 kW on the motorway.').needs.map((n) => n.check)).not.toContain('road-load');
   });
 });
+
+describe("Faraday's law for an electrolyser's gas flow (invented test data)", () => {
+  it('runs with the cells stated, and says what it needs without them', () => {
+    const text = 'The 6-cell HHO generator makes 3 L/min of gas from 20 A at 13.8 V.';
+    const f = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'faraday-yield')!;
+    // 6 × 20 A / (2F) mol/s of hydrogen, × 1.5 for the mixture, × RT/p at 25 °C and 101.325 kPa;
+    // F = e·N_A and R = k_B·N_A exactly (SI Brochure, 9th ed., 2019).
+    const F = 1.602176634e-19 * 6.02214076e23;
+    const R = 1.380649e-23 * 6.02214076e23;
+    const flowMax = ((6 * 20) / (2 * F)) * 1.5 * ((R * 298.15) / 101325);
+    expect(out(f, 'flow_max')).toBeCloseTo(flowMax, 12);
+    expect(out(f, 'ratio')).toBeCloseTo(3 / 60_000 / flowMax, 9);
+    expect(f.finding).toBe('breaks');
+    const without = 'The HHO cell makes 3 L/min of gas from 20 A at 13.8 V.';
+    const r = runClaimChecks(extractFigures(without), { text: without });
+    expect(r.checks.map((c) => c.check)).not.toContain('faraday-yield');
+    expect(r.needs.find((n) => n.check === 'faraday-yield')!.missing).toEqual(['how many cells are in series']);
+  });
+});

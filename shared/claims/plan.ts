@@ -103,6 +103,11 @@ const ONE_SUN_RE = /(?<!\p{L})(?:one sun|1 sun|unconcentrated|no concentrators?|
 const MAX_SUNS = 46200;
 /** Splitting water by a current. */
 const ELECTROLYSIS_RE = /(?<!\p{L})(?:electroly[sz]\w*|HHO|oxyhydrogen|Brown'?s gas|hydroxy gas|hydrogen-on-demand|water cells?|water-splitting)(?!\p{L})/iu;
+/** "a 6-cell stack", "eight cells in series", "a single cell". */
+const CELLS_RE = /(?<!\p{L})(\d{1,3}|single|one|two|three|four|five|six|seven|eight|nine|ten|twelve)[- ](?:cells?|plates? pairs?)(?!\p{L})(?:[^.;!?\n]{0,20}in series)?/iu;
+const CELL_WORDS: Record<string, number> = { single: 1, one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, twelve: 12 };
+/** The flow is hydrogen alone (a cell that separates the gases). */
+const HYDROGEN_ONLY_RE = /(?<!\p{L})(?:of (?:pure |separated )?hydrogen(?! and)|hydrogen only|H2 only|hydrogen alone)(?!\p{L})/iu;
 /** Cells of hydrogen or deuterium in a metal. */
 const EXCESS_HEAT_CELL_RE = /(?<!\p{L})(?:palladium|deuterium|deuteride|LENR|cold fusion|low-energy nuclear|nickel[–-]hydrogen|metal hydrides?|heavy water)(?!\p{L})/iu;
 /** A vehicle said to charge itself. */
@@ -594,13 +599,40 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
 
   // ---- Checks whose figures claims seldom give: say what they need
   const flows = [...power, ...energy];
-  if (ELECTROLYSIS_RE.test(text) && (ofKind(figures, 'current').length || flows.length)) {
+  const gasFlow = ofKind(figures, 'gas-flow')[0];
+  const current = ofKind(figures, 'current')[0];
+  const cellCount = CELLS_RE.exec(text);
+  const cellsIn = cellCount ? (CELL_WORDS[cellCount[1].toLowerCase()] ?? Number(cellCount[1])) : undefined;
+  if (gasFlow && (current || pIn) && cellsIn && cellsIn > 0) {
+    // Faraday's law: at most N·I/(2F) moles of hydrogen a second, 1.5 times that of mixed gas.
+    const drive = current ?? pIn!;
+    plans.push({
+      check: 'faraday-yield',
+      uses: uniq([gasFlow, drive]),
+      inputs: (e) => ({
+        I: current ? at(current, e(current)) : '0 A',
+        P: current ? '0 W' : at(pIn!, e(pIn!)),
+        cells: String(cellsIn),
+        gas: HYDROGEN_ONLY_RE.test(text) ? '1' : '1.5',
+        flow_claimed: at(gasFlow, e(gasFlow)),
+      }),
+      why: 'The text gives a gas flow from an electrolyser and the current (or power) that drives it.',
+      assumptions: [
+        'The gas volume is read at 25 °C and one standard atmosphere (101.325 kPa): the text does not say where it was measured.',
+        ...(HYDROGEN_ONLY_RE.test(text) ? [] : ['The gas is counted as the oxyhydrogen mixture (1.5 times the hydrogen), the reading most favourable to the claim.']),
+      ],
+    });
+  } else if (ELECTROLYSIS_RE.test(text) && (current || gasFlow || flows.length)) {
     needs.push(
       need(
         'faraday-yield',
-        ['the gas flow measured (litres per minute, at a stated temperature and pressure)', 'the current through the cells and how many cells are in series'],
+        [
+          ...(gasFlow ? [] : ['the gas flow measured (litres per minute, at a stated temperature and pressure)']),
+          ...(current || pIn ? [] : ['the current through the cells (or the power drawn)']),
+          ...(cellsIn ? [] : ['how many cells are in series']),
+        ],
         "Faraday's law sets the most gas a current can split from water: a claimed flow above it was not made by electrolysis.",
-        uniq([ofKind(figures, 'current')[0], pIn]),
+        uniq([gasFlow, current, pIn]),
       ),
     );
   }

@@ -30,6 +30,7 @@ export const FIGURE_KINDS = [
   'specific-impulse',
   'thrust-per-power',
   'specific-power',
+  'gas-flow',
 ] as const;
 export type FigureKind = (typeof FIGURE_KINDS)[number];
 
@@ -53,6 +54,8 @@ export const FIGURE_SI_UNIT: Record<FigureKind, string> = {
   'specific-impulse': 's',
   'thrust-per-power': 'N / W',
   'specific-power': 'W / kg',
+  // A volume of gas per unit time ("3 L/min of HHO"), at the conditions the text states.
+  'gas-flow': 'm^3 / s',
 };
 
 /** Short names for each kind, for choice chips. */
@@ -73,6 +76,7 @@ export const FIGURE_KIND_SHORT: Record<FigureKind, string> = {
   'specific-impulse': 'Isp',
   'thrust-per-power': 'Thrust/power',
   'specific-power': 'Power/mass',
+  'gas-flow': 'Gas flow',
 };
 
 /** Words for each kind, for the screen. */
@@ -93,6 +97,7 @@ export const FIGURE_KIND_LABEL: Record<FigureKind, string> = {
   'specific-impulse': 'Specific impulse',
   'thrust-per-power': 'Thrust per unit power',
   'specific-power': 'Power per unit mass',
+  'gas-flow': 'Flow of gas (volume per unit time)',
 };
 
 /**
