@@ -335,7 +335,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
 export const SPEED_ROLES: readonly RoleWords[] = [
   {
     role: 'exhaust',
-    before: ['v_?e(?:x|xh)?', 'u_?e', 'c_?e', 'exhausts? at', 'exhausts?', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at'],
+    before: ['v_?e(?:x|xh)?', 'u_?e', 'c_?e', 'exhausts? at', 'exhausts?', '(?:is|are|was|were|being) exhausted at', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at'],
     after: ['exhaust', 'jet', 'exhaust velocity', 'exhaust speed'],
   },
   {
@@ -396,7 +396,8 @@ export const PROPELLANT_FREE_WORDS = [
   'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
   'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
   'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
-  'no (?:propellant|reaction mass|exhaust|moving parts|expelled mass|mass is expelled)', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
+  'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', 'expels? no (?:propellant|mass|gas|reaction mass|matter)',
+  '(?:hard |high )?vacuum,? where no (?:ion(?:ic)? wind|air)', 'no ion(?:ic)? wind (?:can|could) (?:form|arise|act)', 'radiating (?:panel|face|surface|plate)', 'thermal emission', '(?:transient )?mass fluctuations?', 'Mach effect', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
   'closed[- ](?:cavity|resonator|system|box|container|frame|vessel|frustum|loop drive)', '(?:hermetically )?sealed', 'enclosed', 'cavity', 'EM ?drive',
   'inertial (?:propulsion|drive|thrust)', 'field propulsion', 'unidirectional (?:force|thrust)', 'net thrust from inside', 'fuel-?less (?:thruster|drive|propulsion)',
   'pushes? (?:itself|against nothing)', 'self-propell\\w*', 'frustum', 'tapered (?:cavity|resonator|copper)',
@@ -414,6 +415,10 @@ export const PROPELLANT_WORDS = [
   'plasma thruster', 'resistojet', 'arcjet', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
   'fans?', 'air-breathing', 'solar sails?', 'ion[- ]wind', 'ionic wind', 'corona(?: discharge)?', 'electrohydrodynamic', 'EHD', 'ionocraft', 'ablation', 'ablative', '(?:pushed|driven|propelled|illuminated|accelerated) by (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:lasers?|beams?|sunlight|light)',
   'ground(?:-based)? lasers?', 'laser-pushed', 'beamed (?:power|energy) from', 'tether',
+  // Things that push on air or water (lawfully far above P/c).
+  '(?:drone|quadcopter|multicopter|multirotor) (?:makers?|motors?|propellers?|rotors?|arms?|props?)', 'quadcopters?', 'multicopters?', 'multirotors?', 'helicopters?',
+  'rotor blades?', 'propellers?', 'outboards?', 'boats?', 'water jets?', '(?:balsa|foil|ion|ionic|corona|EHD|high-voltage)[\\w-]*(?: [\\w-]+)? lifters?',
+  'pushes? (?:on|against) (?:the )?(?:air|water)', 'tractors?', 'wheels? on the ground',
 ];
 
 /** Phrases that say a device needs no input (the input power is then 0). */

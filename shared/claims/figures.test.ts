@@ -703,4 +703,13 @@ describe('more ways claims are written (issue 11)', () => {
     const f = read('It makes 3 L/min, then 90 litres per hour, and 250 mL/min of hydrogen at idle.').filter((x) => x.kind === 'gas-flow');
     expect(f.map((x) => x.si)).toEqual([3e-3 / 60, 90e-3 / 3600, 250e-6 / 60].map((v) => expect.closeTo(v, 15)));
   });
+
+  test('an uncertainty in the last digits, in brackets, is a range', () => {
+    const f = read('The balance gave 2.31(4) mN at 410(5) W; the probe moved at 163.0(5) km/s.');
+    expect(f.map((x) => [x.kind, x.si, x.upper?.si])).toEqual([
+      ['thrust', expect.closeTo(0.00227, 15), expect.closeTo(0.00235, 15)],
+      ['power', 405, 415],
+      ['speed', 162500, 163500],
+    ]);
+  });
 });

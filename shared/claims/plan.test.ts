@@ -229,6 +229,13 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     '5-day endurance test of the motor-generator set: mean input 410 W, mean output 395 W. The prototype cost 3,000 € and took 18 months to build.',
     'A temperature difference of 10 K, with the warm side at 300 K, drives the demonstration engine at 2 % efficiency. The room was held at 21 °C for the whole series.',
     'The 12 kg CubeSat carries 1.5 kg of propellant with a specific impulse of 220 s, enough for 280 m/s. The test stand itself weighs 85 kg.',
+    'A drone maker advertises 12 g of thrust per watt. Is that beyond the photon limit?',
+    'The RF amplifier has 30 dB of gain, 1 mW in and 1 W out, with its 12 V supply drawing 2.5 A.',
+    'In the waveguide the phase velocity is 1.3 c, while the group velocity that carries the signal stays at 0.77 c.',
+    'The balsa-and-foil lifter raises 9 g (88 mN) at 32 kV and 0.6 mA in room air, with no moving parts.',
+    'Datasheet: DC/DC module, input 250 W, output 240 W, efficiency 96 %. Operating range −40 to 85 °C.',
+    'The compartment is held at 4 °C while the condenser runs 38 K above it; the measured cooling COP is 2.8.',
+    'Bike dynamo: 6 V, 0.5 A for the lamps, from about 10 W of pedalling.',
   ])('"%s" (invented test data) breaks no law', (text) => {
     expect(breaks(text)).toEqual([]);
   });

@@ -91,6 +91,8 @@ const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L}
 const HEAT_ONLY_RE = /(?<!\p{L})(?:(?:delivered|given|supplied|collected|recovered|available|comes? out|output) as (?:useful )?heat|heat output|thermal output|(?:solar|flat-?plate|evacuated-?tube) (?:thermal )?collectors?|solar thermal|collector efficiency|water heaters?|boilers?|furnaces?|space heaters?)(?!\p{L})/iu;
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
+/** Before a speed that is no signal's: a phase velocity, a spot or shadow swept across a screen. */
+const NO_SIGNAL_SPEED_RE = /(?<!\p{L})(?:phase (?:velocity|speed)|phase front|spot|shadow|sweep(?:s|ing)?|apparent (?:velocity|speed|motion))(?!\p{L})[^.;!?\n]{0,25}$/iu;
 /** A converter of sunlight to electricity. */
 const SOLAR_CELL_RE = /(?<!\p{L})(?:solar (?:cells?|panels?|modules?|films?|arrays?)|photovoltaic\w*|PV|perovskites?|(?:silicon|GaAs|gallium arsenide|CdTe|CIGS|organic) (?:cells?|films?|modules?)|single-junction|multi-junction|tandem cells?|(?:of|from) (?:plain |the )?sunlight (?:in)?to electricity)(?!\p{L})/iu;
 /** "single-junction", "triple-junction", "a 4-junction cell". */
@@ -566,7 +568,13 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
   }
 
   // ---- Speeds against c
-  const fastest = speeds.filter((f) => f.role !== 'delta-v' || f.si >= C_LIGHT).sort((a, b) => b.si - a.si)[0] ?? largest(speeds);
+  // A phase velocity (or a spot swept across a screen) above c carries no signal: not a speed to judge.
+  const noSignal = (f: Figure) => NO_SIGNAL_SPEED_RE.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0));
+  for (const f of speeds.filter((x) => noSignal(x) && (x.upper?.si ?? x.si) >= C_LIGHT)) {
+    notes.push(`${f.display.trim()} is said of a phase velocity or an apparent motion: such speeds may exceed c without carrying a signal or energy, so special relativity does not forbid them.`);
+  }
+  const signalSpeeds = speeds.filter((f) => !noSignal(f));
+  const fastest = signalSpeeds.filter((f) => f.role !== 'delta-v' || f.si >= C_LIGHT).sort((a, b) => b.si - a.si)[0] ?? largest(signalSpeeds);
   if (fastest && (fastest.upper?.si ?? fastest.si) >= LIGHT_SPEED_FROM) {
     plans.push({
       check: 'light-speed',

@@ -254,6 +254,8 @@ interface NumberToken {
   skip: boolean;
   /** Written after "±": an uncertainty. */
   plusMinus: boolean;
+  /** "2.31(4) mN": the standard uncertainty in the last digits (here 0.04). */
+  unc?: number;
   consumed: boolean;
   /** Written in words ("two weeks"): kept only with a unit. */
   words: boolean;
@@ -416,7 +418,19 @@ function tokenize(text: string): NumberToken[] {
     }
     tokens.push({ start, numEnd, end, num: value, suffix, skip, plusMinus: PLUS_MINUS_RE.test(before), consumed: false, words });
   };
-  for (let m = NUMBER_RE.exec(text); m; m = NUMBER_RE.exec(text)) push(m.index, m.index + m[0].length, cleanNumber(m), false);
+  for (let m = NUMBER_RE.exec(text); m; m = NUMBER_RE.exec(text)) {
+    // "2.31(4) mN", "410(5) W", "163.0(5) km/s": the uncertainty in the last digits, in brackets.
+    const end = m.index + m[0].length;
+    const u = /^\((\d{1,3})\)/.exec(text.slice(end));
+    if (u && /^[\d.]+$/.test(m[0])) {
+      const decimals = (m[0].split('.')[1] ?? '').length;
+      push(m.index, end + u[0].length, cleanNumber(m), false);
+      tokens[tokens.length - 1].unc = Number(u[1]) / 10 ** decimals;
+      NUMBER_RE.lastIndex = end + u[0].length;
+      continue;
+    }
+    push(m.index, end, cleanNumber(m), false);
+  }
   // "an hour and a half", "a day and a half": one and a half of the unit.
   for (const m of text.matchAll(/(?<!\p{L})(?:an?|one)[^\S\n]+(hour|day|week|month|year|minute)[^\S\n]+and[^\S\n]+a[^\S\n]+half(?!\p{L})/giu)) {
     const unit = unitAt(text, m.index! + m[0].indexOf(m[1]) - 1);
@@ -739,8 +753,12 @@ export function extractFigures(text: string): Figure[] {
     const start = t.start;
     let upperNum: string | undefined;
     const next: NumberToken | undefined = tokens[i + 1];
-    // Ranges and uncertainties: "3–6 mN", "3 mN to 6 mN", "between 0.5 and 1.5 kW", "1.2 ± 0.3 mN".
-    if (next && !next.skip) {
+    // Ranges and uncertainties: "3–6 mN", "3 mN to 6 mN", "between 0.5 and 1.5 kW", "1.2 ± 0.3 mN", "2.31(4) mN".
+    if (t.unc !== undefined) {
+      const mid = Number(t.num);
+      upperNum = String(Number((mid + t.unc).toPrecision(15)));
+      t.num = String(Number((mid - t.unc).toPrecision(15)));
+    } else if (next && !next.skip) {
       const gapStart = t.suffix ? t.end : t.numEnd;
       const pmGap = /^[^\S\n]*(?:±|\+\/-|\+-)[^\S\n]*$/.test(text.slice(gapStart, next.start));
       // "96 W ± 3 %": an uncertainty in per cent of the figure.
@@ -1196,7 +1214,9 @@ function relate(text: string, drafts: Draft[]): void {
     const first = cur.start < volt.start ? cur : volt;
     const last = first === cur ? volt : cur;
     // The role: the words around the current or the voltage ("draws 3 A" → in, "delivers 10 A" → out).
-    const wordsRole = roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
+    // Words between the two ("12 V supply drawing 2.5 A") are the closest; then those around the pair.
+    const between = /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
+    const wordsRole = between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
     const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null);
     const role: FigureRole = wordsRole ?? (others.length && others.every((d) => d.role === 'in') ? 'out' : null);
     insertAfter(last, {
