@@ -332,6 +332,8 @@ export async function createBackup(opts: BackupOptions): Promise<BackupResult> {
     const members = ['manifest.json', 'SHA256SUMS', 'database.sql', ...(attachments.length ? ['objects'] : [])];
     const tarred = await run('tar', ['--create', '--gzip', '--file', tmpArchive, '--directory', staging, '--owner=0', '--group=0', '--numeric-owner', '--', ...members], {}, TAR_HINT);
     if (tarred.code !== 0) throw new Error(`tar failed (exit ${tarred.code}): ${tarred.stderr}`);
+    // It holds password hashes and sessions: readable by its owner only, like the datadir.
+    await fs.promises.chmod(tmpArchive, 0o600);
     await fsyncPath(tmpArchive);
     await fs.promises.rename(tmpArchive, file);
     tmpArchive = null;

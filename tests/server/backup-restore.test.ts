@@ -184,6 +184,7 @@ describe('backup and restore', () => {
     expect(stamp).toBeGreaterThanOrEqual(Math.floor(before / 1000) * 1000);
     expect(stamp).toBeLessThanOrEqual(Date.now());
     archive = path.join(backups, files[0]);
+    expect(fs.statSync(archive).mode & 0o777).toBe(0o600); // password hashes and sessions inside
     expect(r.stdout).toContain(files[0]);
 
     // The source did not change while it was backed up: the comparison below is against what was saved.
