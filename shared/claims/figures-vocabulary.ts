@@ -254,7 +254,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'out',
     before: [
-      'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
+      '(?:loads?|load resistors?|resistors?|dummy loads?|lamps?|heaters?|heating elements?) (?:is |was |are |were )?(?:said to |reported to |measured to )?(?:dissipat\\w*|consum\\w*|absorb\\w*|tak(?:e|es|ing))', 'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
       'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
       '(?:lights?|lighting|lit|powers?|powering|runs?|running|drives?|driving|feeds?|feeding) (?:a|an|the|its|two|three|four|several)? ?(?:[\\w-]+ ){0,4}?(?:taking|drawing|using|consuming|rated at|that (?:take|takes|draw|draws|use|uses|consume|consumes))', 'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'turning (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its) (?:[\\w-]+ ){0,2}(?:batter(?:y|ies)|cells?|capacitors?|accumulators?)(?: (?:bank|pack|stack))?(?: (?:at|with|to))?', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
@@ -315,7 +315,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
   {
     role: 'dry',
     before: ['dry', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert'],
-    after: ['(?:dry|empty|final|burn-?out|structural) mass', 'dry', 'empty', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end'],
+    after: ['(?:dry|empty|final|burn-?out|structural) mass', '\\((?:empty|dry|unfuell?ed|when empty)\\)', 'dry', 'empty', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end'],
   },
   {
     role: 'propellant',
@@ -390,7 +390,7 @@ export const PROPELLANT_FREE_WORDS = [
   'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless', 'without (?:spending|using|burning|consuming|expending) (?:any )?(?:propellant|fuel|reaction mass)',
   '(?:ion(?:ic)? wind|air currents?|convection) (?:cannot|can ?not|can\'t|could not|is not|isn\'t) (?:be )?(?:the )?(?:cause|explanation|source)', 'rul(?:e|es|ed|ing) out (?:ion(?:ic)? wind|air currents?|convection)',
   'without (?:any )?(?:expelling|ejecting|emitting|throwing|shedding|venting)(?: (?:out )?(?:any )?(?:propellant|mass|reaction mass|material|matter|exhaust|gas))?',
-  'without (?:any )?(?:propellant|reaction mass|exhaust)', 'nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)', 'photon (?:thruster|rocket|drive|propulsion)',
+  'without (?:any )?(?:propellant|reaction mass|exhaust)', 'nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)', 'photon[- ](?:thruster|rocket|drive|propulsion)(?: (?:bound|limit))?', '(?:no air|nothing) to push (?:on|against)',
   'lasers?', 'laser[- ](?:thrusters?|diodes?|light|propulsion|arrays?|bars?|beams?)', 'photons?', 'beam leaving', 'quantum vacuum', 'virtual particles',
   'pushes? (?:against|on|off) (?:the )?(?:quantum )?vacuum', 'pushing (?:against|on|off) (?:the )?(?:[\\w-]+ ){0,3}?vacuum', 'recoil', 'collimated', 'light (?:alone|only)', 'radiators?',
   'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',

@@ -306,3 +306,15 @@ describe("Faraday's law for an electrolyser's gas flow (invented test data)", ()
     expect(r.needs.find((n) => n.check === 'faraday-yield')!.missing).toEqual(['how many cells are in series']);
   });
 });
+
+describe('the energy per atom of a metal–hydrogen cell (invented test data)', () => {
+  it('puts the claimed excess heat on the chemical scale, per atom of the named metal', () => {
+    const text = 'The cell is said to have released 4.2 MJ of excess heat over 6 days from 12 g of palladium.';
+    const n = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'nuclear-signature')!;
+    // Atoms: 12 g / 106.42 g/mol (IUPAC standard atomic weight of Pd) × N_A (6.02214076e23, exact).
+    const atoms = (12 / 106.42) * 6.02214076e23;
+    expect(out(n, 'atoms_n')).toBeCloseTo(atoms, -10);
+    expect(out(n, 'E_per_atom')).toBeCloseTo(4.2e6 / atoms, 25);
+    expect(n.finding).toBe('breaks'); // hundreds of electronvolts per atom: beyond chemistry
+  });
+});

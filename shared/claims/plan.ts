@@ -111,7 +111,10 @@ const CELL_WORDS: Record<string, number> = { single: 1, one: 1, two: 2, three: 3
 /** The flow is hydrogen alone (a cell that separates the gases). */
 const HYDROGEN_ONLY_RE = /(?<!\p{L})(?:of (?:pure |separated )?hydrogen(?! and)|hydrogen only|H2 only|hydrogen alone)(?!\p{L})/iu;
 /** Cells of hydrogen or deuterium in a metal. */
-const EXCESS_HEAT_CELL_RE = /(?<!\p{L})(?:palladium|deuterium|deuteride|LENR|cold fusion|low-energy nuclear|nickel[–-]hydrogen|metal hydrides?|heavy water)(?!\p{L})/iu;
+const EXCESS_HEAT_CELL_RE = /(?<!\p{L})(?:palladium|deuterium|deuteride|LENR|cold fusion|low-energy nuclear|nickel[–-]hydrogen|metal hydrides?|heavy water|loaded with (?:hydrogen|deuterium)|lattice-assisted|lattice[- ]enabled)(?!\p{L})/iu;
+/** The metals of metal–hydrogen cells, and their standard atomic weights (IUPAC, CIAAW 2021). */
+const METAL_RE = /(?<!\p{L})(palladium|nickel|titanium|lithium)(?!\p{L})/iu;
+const MOLAR_MASS: Record<string, number> = { palladium: 106.42, nickel: 58.6934, titanium: 47.867, lithium: 6.94 };
 /** A vehicle said to charge itself. */
 const SELF_CHARGING_VEHICLE_RE = /(?<!\p{L})(?:self-?(?:re)?charging|charges? (?:it|them)sel(?:f|ves)|never needs? (?:to be )?(?:charging|charged|plugging in)|infinite range|unlimited range)(?!\p{L})[^.;!?\n]{0,80}(?<!\p{L})(?:cars?|vehicles?|EVs?|trucks?|lorr(?:y|ies)|bus(?:es)?|scooters?|bikes?)(?!\p{L})|(?<!\p{L})(?:cars?|vehicles?|EVs?|trucks?|bus(?:es)?|scooters?)(?!\p{L})[^.;!?\n]{0,80}(?<!\p{L})(?:self-?(?:re)?charging|charges? itself|recharges? itself|never needs? (?:to be )?(?:charging|charged|plugging in)|infinite range|unlimited range)(?!\p{L})/iu;
 /** "… J per bit", "for each bit erased", "per logic operation". */
@@ -645,7 +648,20 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
     );
   }
   const excessHeat = (ctx.classes ?? []).includes('excess-heat-cell') || EXCESS_HEAT_CELL_RE.test(text);
-  if (excessHeat && flows.length) {
+  const metal = METAL_RE.exec(text);
+  const excessEnergy = ofKind(figures, 'energy').find((f) => f.role === 'excess' || f.role === 'out') ?? ofKind(figures, 'energy').find((f) => f.role === null);
+  const metalMass = ofKind(figures, 'mass')[0];
+  if (excessHeat && metal && excessEnergy && metalMass) {
+    // The claimed energy per atom of the named metal, against the few electronvolts chemistry gives.
+    const molar = MOLAR_MASS[metal[1].toLowerCase()];
+    plans.push({
+      check: 'nuclear-signature',
+      uses: [excessEnergy, metalMass],
+      inputs: (e) => ({ E_excess: at(excessEnergy, e(excessEnergy)), mass: at(metalMass, e(metalMass)), molar_mass: `${molar} g/mol`, atoms: '0', P_excess: '0 W' }),
+      why: `The text gives the excess energy and the mass of ${metal[1].toLowerCase()} it came from.`,
+      assumptions: [`Every atom of the ${formatPrint(metalMass.si * 1000)} g of ${metal[1].toLowerCase()} (${molar} g/mol, IUPAC standard atomic weight) takes part, the reading most favourable to the claim.`],
+    });
+  } else if (excessHeat && flows.length) {
     needs.push(
       need(
         'nuclear-signature',

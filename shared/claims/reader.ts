@@ -1382,10 +1382,14 @@ function relate(text: string, drafts: Draft[]): void {
     const prev = thermal[i - 1];
     if (OPERATING_RANGE_RE.test(text.slice(Math.max(0, t.start - 40), t.start)) || (prev?.role === 'aside' && /^[^\S\n]*(?:°[CF]?[^\S\n]*)?(?:to|and|[-–—…])[^\S\n]*$/u.test(text.slice(prev.end, t.start)))) t.role = 'aside';
   });
+  // (Not one that the stated difference puts on the other side: "−18 °C; … at 32 °C (a 50 K difference)".)
+  const differences = drafts.filter((d) => d.kind === 'temperature-difference').map((d) => siOf(d) ?? NaN);
+  const otherSide = (t: Draft) =>
+    thermal.some((u) => u !== t && sides.has(sentenceOf(u)) && differences.some((dT) => Math.abs(Math.abs((siOf(u) ?? NaN) - (siOf(t) ?? NaN)) - dT) <= 0.5));
   if (sides.size > 0) {
     for (const t of thermal) {
       const k = sentenceOf(t);
-      if (sides.has(k)) continue;
+      if (sides.has(k) || otherSide(t)) continue;
       const company = drafts.filter((d) => d !== t && sentenceOf(d) === k && (d.kind === 'temperature' || d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop'));
       if (company.length === 0) t.role = 'aside';
     }
