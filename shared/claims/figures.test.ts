@@ -712,4 +712,11 @@ describe('more ways claims are written (issue 11)', () => {
       ['speed', 162500, 163500],
     ]);
   });
+
+  test('a distance covered in a time is a speed', () => {
+    // 1 light-year = 9 460 730 472 580 800 m (c × Julian year, IAU); 30 d = 2 592 000 s.
+    const f = read('The drive covers 4.2 light years in 30 days.').find((x) => x.kind === 'speed')!;
+    expect(f.si).toBeCloseTo((4.2 * 9460730472580800) / 2592000, 0);
+    expect(f.derived).toMatch(/distance \/ time/);
+  });
 });

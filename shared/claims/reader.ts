@@ -1005,6 +1005,11 @@ const RATIO_LABELS_RE = /(?<!\p{L})([PEW]_?\{?(?:out|in|o|i)\}?|outputs?|inputs?
 /** A verb that makes a signal bigger, just before the first of two figures ("amplifies a 1 mW signal to 100 mW"). */
 const AMPLIFY_BEFORE_RE = /(?<!\p{L})(?:amplif(?:y|ies|ied|ying)|boost(?:s|ed|ing)?|lift(?:s|ed|ing)?|rais(?:e|es|ed|ing)|steps? up|stepped up|stepping up)[^\S\n]+(?:(?:a|an|the|its|their)[^\S\n]+)?(?:(?:input|incoming|weak|small|faint|signal)[^\S\n]+){0,2}(?:(?:signal|input|power|level)[^\S\n]+)?(?:from[^\S\n]+)?$/iu;
 
+/** A distance covered in a time: "4.2 light years in 30 days", "1 AU in 2 hours". */
+const TRAVEL_RE = /(?<![\p{L}\p{N}.,])(\d[\d,]*(?:\.\d+)?)[^\S\n]*(light[- ]years?|lightyears?|parsecs?|astronomical units?|AU)[^\S\n]+in[^\S\n]+(?:(?:just|only|about|under|less than|roughly)[^\S\n]+)?(\d[\d,]*(?:\.\d+)?|an?|one)[^\S\n]*(seconds?|minutes?|hours?|days?|weeks?|months?|years?)(?!\p{L})/giu;
+const TRAVEL_LENGTH: Record<string, number> = { lightyear: 9460730472580800, parsec: 3.0856775814913673e16, astronomicalunit: 149597870700, au: 149597870700 };
+const TRAVEL_TIME: Record<string, number> = { second: 1, minute: 60, hour: 3600, day: 86400, week: 604800, month: 2629800, year: 31557600 };
+
 /** Words before the temperatures a device is rated for. */
 const OPERATING_RANGE_RE = /(?<!\p{L})(?:operating|operation|storage|ambient|rated|permitted|allowed|working) (?:temperature )?(?:range|temperatures?|limits?|conditions?)(?: (?:of|is|from|between))?[:=]?[^\S\n]*(?:from|between)?[^\S\n]*$/iu;
 
@@ -1014,6 +1019,25 @@ const NOT_A_RUN_RE =
 
 /** Roles the words leave open, read from the other figures (see the file's comment). */
 function rolesByContext(text: string, drafts: Draft[]): void {
+  // "covers 4.2 light years in 30 days": a speed, distance over time (IAU 2012 B2 astronomical unit,
+  // IAU 2015 B2 parsec, the light-year of the Julian year).
+  for (const m of text.matchAll(TRAVEL_RE)) {
+    const distance = Number(m[1].replace(/,/g, '')) * (TRAVEL_LENGTH[m[2].toLowerCase().replace(/s$/, '').replace(/[- ]/g, '')] ?? NaN);
+    const count = /^(?:a|an|one)$/i.test(m[3]) ? 1 : Number(m[3].replace(/,/g, ''));
+    const time = count * (TRAVEL_TIME[m[4].toLowerCase().replace(/s$/, '')] ?? NaN);
+    if (!(distance > 0) || !(time > 0) || drafts.some((d) => d.kind === 'speed' && d.start >= m.index! && d.start < m.index! + m[0].length)) continue;
+    const d: Draft = {
+      start: m.index!,
+      end: m.index! + m[0].length,
+      kind: 'speed',
+      quantity: typedSi(distance / time, 'm/s'),
+      role: null,
+      derived: `speed = distance / time (${m[1]} ${m[2]} in ${m[3]} ${m[4]})`,
+    };
+    const at = drafts.findIndex((x) => x.start > d.start);
+    if (at < 0) drafts.push(d);
+    else drafts.splice(at, 0, d);
+  }
   const energyLike = (d: Draft) => d.kind === 'power' || d.kind === 'energy';
   // A thrust and a power: the power drives it.
   if (drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power')) {
