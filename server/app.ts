@@ -15,6 +15,7 @@ import pino, { type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import { createPassport, sessionMiddleware } from './auth/session';
+import { bodyDepthLimit } from './http/depth';
 import { apiNotFound, errorHandler } from './http/errors';
 import { rateLimiters, type RateLimits } from './http/rate-limit';
 import { createMailer, type Mailer } from './mail/mailer';
@@ -190,6 +191,7 @@ export function createApp(opts: AppOptions): express.Express {
 
   const api = express.Router();
   api.use(express.json({ limit: opts.jsonLimit ?? '256kb' }));
+  api.use(bodyDepthLimit());
   api.use(sessions.middleware);
   api.use(passport.initialize());
   api.use(passport.session());

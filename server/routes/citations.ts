@@ -2,7 +2,8 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { parseCitations } from '../../shared/entries/citations';
-import { HttpError } from '../http/errors';
+import { MAX_TEXT_NESTING, bracketDepth } from '../http/depth';
+import { HttpError, fieldsError } from '../http/errors';
 import type { Allow } from '../policies';
 import { validateSized } from '../services/entries';
 
@@ -12,6 +13,8 @@ export function citationRoutes(allow: Allow): Router {
   const r = Router();
   r.post('/citations/parse', allow('citations.parse'), (req, res) => {
     const { text } = validateSized(parseBodySchema, req.body ?? {}, 'body');
+    // The parsers recurse into nested CSL-JSON and BibTeX braces: refuse what no citation needs.
+    if (bracketDepth(text) > MAX_TEXT_NESTING) throw fieldsError('too_deep', { 'body.text': `brackets or braces nested more than ${MAX_TEXT_NESTING} levels deep` });
     const { items, problems } = parseCitations(text);
     if (!items.length) {
       const first = problems[0];
