@@ -719,4 +719,10 @@ describe('more ways claims are written (issue 11)', () => {
     expect(f.si).toBeCloseTo((4.2 * 9460730472580800) / 2592000, 0);
     expect(f.derived).toMatch(/distance \/ time/);
   });
+
+  test('amperes glued to the number as forum posts write them, and units glued after e-notation', () => {
+    const f = read('Drawing 350ma from a 12v battery, it lights a 60w lamp (see claim 1a). Thrust 4.0E-6N.');
+    expect(f.filter((x) => x.kind === 'current').map((x) => x.si)).toEqual([expect.closeTo(0.35, 12)]);
+    expect(f.find((x) => x.kind === 'thrust')!.si).toBeCloseTo(4e-6, 15);
+  });
 });

@@ -128,7 +128,7 @@ const MULTIPLIER: Record<string, number> = { million: 1e6, M: 1e6, billion: 1e9,
  * that cannot be a thousands separator), then e-notation or × 10^n.
  */
 const NUMBER_RE =
-  /(?<![\p{L}\p{N}_.,^])(?<![\p{N}.,]\/)([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d{1,3}(?:[ \u00A0\u2009\u202F]\d{3})+(?![\d]|[^\S\n]\d)(?:,\d+)?|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?!\p{L})|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
+  /(?<![\p{L}\p{N}_.,^])(?<![\p{N}.,]\/)([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d{1,3}(?:[ \u00A0\u2009\u202F]\d{3})+(?![\d]|[^\S\n]\d)(?:,\d+)?|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?![\p{N}])|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
 
 const SUPERSCRIPT_DIGITS: Record<string, string> = { '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-', '⁺': '' };
 
@@ -279,7 +279,19 @@ function cleanNumber(m: RegExpExecArray): string {
   return `${sign}${int}${frac}${exp !== undefined ? `e${exp}` : ''}`;
 }
 
+/** "2.5a", "350ma" glued to the number, as forum posts write amperes (never spaced: "a" is the article). */
+const GLUED_AMPERE_RE = /(m?)a(?![\p{L}\p{N}_])/uy;
+
 function unitAt(text: string, at: number): { form: UnitForm; end: number } | null {
+  GLUED_AMPERE_RE.lastIndex = at;
+  const amp =
+    /\d$/.test(text.slice(Math.max(0, at - 1), at)) && !/(?<!\p{L})(?:claims?|items?|fig\.?|figures?|tables?|steps?|sections?|pages?|rows?|no\.?|parts?|points?|version|rev\.?)[^\S\n]*[\d.]+$/iu.test(text.slice(Math.max(0, at - 24), at))
+      ? GLUED_AMPERE_RE.exec(text)
+      : null;
+  if (amp) {
+    const form = SYMBOLS.get(symbolKey(amp[1] ? 'mA' : 'A'));
+    if (form) return { form, end: at + amp[0].length };
+  }
   SYMBOL_RE.lastIndex = at;
   const s = SYMBOL_RE.exec(text);
   WORD_RE.lastIndex = at;
