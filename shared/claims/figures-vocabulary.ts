@@ -441,6 +441,8 @@ export const HARVEST_WORDS = [
   'harvest\\w*', 'solar', 'photovoltaic', 'sunlight', 'light', 'vibrations?', 'body heat', 'thermal gradient', 'temperature difference', 'wind', 'tides?',
   'waves?', 'radio waves', 'RF energy', 'ambient (?:light|RF|vibration)', 'piezo\\w*', 'triboelectric',
   'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell',
+  // A vehicle or set that burns fuel (a "self-charging" hybrid charges from its engine).
+  'petrol', 'gasoline', 'diesel', 'combustion engine', '(?:petrol|diesel|gas) engine', 'burns? (?:fuel|petrol|diesel|gas)', 'regenerative braking', 'braking',
 ];
 
 /** Nouns after "5K" that make the K a thousand ("5K cycles"), not kelvins. */

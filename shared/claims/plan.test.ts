@@ -236,6 +236,9 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'Datasheet: DC/DC module, input 250 W, output 240 W, efficiency 96 %. Operating range −40 to 85 °C.',
     'The compartment is held at 4 °C while the condenser runs 38 K above it; the measured cooling COP is 2.8.',
     'Bike dynamo: 6 V, 0.5 A for the lamps, from about 10 W of pedalling.',
+    'The "self-charging" hybrid recovers about 60 kJ per braking stop; its petrol engine makes 72 kW and does all the real charging.',
+    "The jet's blob appears to move at 4c across the sky: apparent superluminal motion, a projection effect.",
+    'The bench supply delivers 5 A at 13.8 V to the winch motor, which raises its load at a steady 52 W of mechanical power.',
   ])('"%s" (invented test data) breaks no law', (text) => {
     expect(breaks(text)).toEqual([]);
   });

@@ -92,7 +92,7 @@ const HEAT_ONLY_RE = /(?<!\p{L})(?:(?:delivered|given|supplied|collected|recover
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
 /** Before a speed that is no signal's: a phase velocity, a spot or shadow swept across a screen. */
-const NO_SIGNAL_SPEED_RE = /(?<!\p{L})(?:phase (?:velocity|speed)|phase front|spot|shadow|sweep(?:s|ing)?|apparent (?:velocity|speed|motion))(?!\p{L})[^.;!?\n]{0,25}$/iu;
+const NO_SIGNAL_SPEED_RE = /(?<!\p{L})(?:phase (?:velocity|speed)|phase front|spot|shadow|sweep(?:s|ing)?|apparent (?:velocity|speed|motion)|appears? to (?:move|travel|go|run)|seems? to (?:move|travel|go))(?!\p{L})[^.;!?\n]{0,25}$/iu;
 /** A converter of sunlight to electricity. */
 const SOLAR_CELL_RE = /(?<!\p{L})(?:solar (?:cells?|panels?|modules?|films?|arrays?)|photovoltaic\w*|PV|perovskites?|(?:silicon|GaAs|gallium arsenide|CdTe|CIGS|organic) (?:cells?|films?|modules?)|single-junction|multi-junction|tandem cells?|(?:of|from) (?:plain |the )?sunlight (?:in)?to electricity)(?!\p{L})/iu;
 /** "single-junction", "triple-junction", "a 4-junction cell". */

@@ -195,7 +195,7 @@ const RATIO_BEFORE_RE = /(?<!\p{L})(?:over-?unity|overunity|output[- ]to[- ]inpu
 
 /** Words that may stand between a figure and the role word after it ("2 kW of electrical input"). */
 const AFTER_FILLER =
-  '(?:(?:of|the|its|electrical|electric|thermal|mechanical|heat|net|total|useful|shaft|continuous|peak|rated|gross|average|mean|power|energy|DC|AC|battery|mains|grid)[\\s-]+){0,3}';
+  '(?:(?:per|each|every|a)[\\s-]+(?:day|hour|week|month|year|minute|second|cycle)[\\s-]+)?(?:(?:of|the|its|electrical|electric|thermal|mechanical|heat|net|total|useful|shaft|continuous|peak|rated|gross|average|mean|power|energy|DC|AC|battery|mains|grid)[\\s-]+){0,3}';
 
 interface CompiledRoles {
   groups: readonly RoleWords[];
@@ -534,6 +534,10 @@ const STRONG_SIDE_RE = /(?<!\p{L})(hot|warm|cold|cool|sunlit|sunny|heated|shaded
 /** End of the words after the last figure that gave it its role ("… 3.2 km/s exhaust velocity"): the next figure's words start after them. */
 let afterRoleEnd = 0;
 
+const IMMEDIATE_HEDGE = '(?:(?:only|just|about|some|roughly|nearly|around|approximately|up to|a mere|a steady|an average of)[^\\S\\n]+)*';
+const IMMEDIATE_IN_RE = new RegExp(`(?<!\\p{L})(?:takes|took|draws|drew|consumes|consumed|uses|used|needs|requires|required|absorbs|absorbed|is fed|was fed|pulls|pulled)[^\\S\\n]+${IMMEDIATE_HEDGE}$`, 'iu');
+const IMMEDIATE_OUT_RE = new RegExp(`(?<!\\p{L})(?:delivers|delivered|produces|produced|generates|generated|returns|returned|puts out|put out|yields|yielded|outputs)[^\\S\\n]+${IMMEDIATE_HEDGE}$`, 'iu');
+
 function roleFromWords(text: string, roles: CompiledRoles, start: number, end: number, floor: number): FigureRole {
   if (roles === ROLES.temperature) {
     const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start));
@@ -544,6 +548,16 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   }
   // "filled a 5 kWh battery", "charged the 10 kWh pack": what is filled is what came out.
   if (roles.groups === POWER_ENERGY_ROLES && /(?<!\p{L})(?:fill(?:s|ed|ing)?|charg(?:es|ed|ing)|tops? up|topped up)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their)[^\S\n]+$/iu.test(text.slice(Math.max(floor, start - 40), start))) return 'out';
+  // A verb right before the figure ("takes 50 PS of shaft power", "generates 40 kW") outweighs the
+  // words after it.
+  if (roles.groups === POWER_ENERGY_ROLES) {
+    const lead = text.slice(Math.max(floor, start - 40), start);
+    // (Not when a supply is the subject: "the bench supply delivers 5 A" is what the device takes.)
+    if (!/(?<!\p{L})(?:suppl(?:y|ies)|batter(?:y|ies)|mains|grid|sources?|sockets?|packs?|alternators?|chargers?|PSUs?|adapters?)[^\S\n]+\p{L}+[^\S\n]+[^.;!?\n]{0,12}$/iu.test(lead)) {
+      if (IMMEDIATE_IN_RE.test(lead)) return 'in';
+      if (IMMEDIATE_OUT_RE.test(lead)) return 'out';
+    }
+  }
   roles.after.lastIndex = end;
   const a = roles.after.exec(text);
   if (a?.groups) {
@@ -1357,6 +1371,29 @@ function relate(text: string, drafts: Draft[]): void {
       const span = { start: Math.min(more.start, input.start), end: Math.max(more.end, input.end), kind };
       insertAfter(anchor, { ...span, quantity: typedSi(n * g, unit), role: 'out', derived: `output = input × ${formatPrint(g)} (${formatQuantity(n, unit)} × ${formatPrint(g)})` });
       insertAfter(anchor, { ...span, quantity: typedSi(n * (g - 1), unit), role: 'excess', derived: `excess = input × ${formatPrint(g - 1)} (${formatQuantity(n, unit)} × ${formatPrint(g - 1)})` });
+      break;
+    }
+  }
+
+  // "96 % of its input … draws 250 W", "80,000 BTU/h input, 95 % efficiency": the output the stated
+  // efficiency gives, where the text states only the input.
+  const eta = drafts.find((d) => d.kind === 'efficiency' && !d.derived && (siOf(d) ?? 2) <= 1);
+  if (eta && !more) {
+    for (const kind of ['power', 'energy'] as const) {
+      const inputs = drafts.filter((d) => d.kind === kind && d.role === 'in' && !d.derived);
+      if (inputs.length !== 1 || drafts.some((d) => d.kind === kind && (d.role === 'out' || d.role === 'excess'))) continue;
+      const [input, e, n] = [inputs[0], siOf(eta)!, siOf(inputs[0])];
+      if (n === null || n === 0) continue;
+      const unit = FIGURE_SI_UNIT[kind];
+      const anchor = eta.start > input.start ? eta : input;
+      insertAfter(anchor, {
+        start: Math.min(eta.start, input.start),
+        end: Math.max(eta.end, input.end),
+        kind,
+        quantity: typedSi(n * e, unit),
+        role: 'out',
+        derived: `output = efficiency × input (${formatPrint(e)} × ${formatQuantity(n, unit)})`,
+      });
       break;
     }
   }
