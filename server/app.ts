@@ -137,7 +137,7 @@ export function createApp(opts: AppOptions): express.Express {
   const sessions = sessionMiddleware({
     sequelize: opts.sequelize,
     secret: opts.sessionSecret ?? crypto.randomBytes(32).toString('base64url'),
-    secure: env === 'production',
+    secure: env === 'production' ? true : 'auto',
     cleanupIntervalMs: opts.sessionCleanupMs,
   });
   const passport = createPassport();

@@ -19,8 +19,11 @@ const SequelizeStore = connectSessionSequelize(session.Store);
 export interface SessionOptions {
   sequelize: Sequelize;
   secret: string | string[];
-  /** Secure cookies (HTTPS only): in production. */
-  secure: boolean;
+  /**
+   * Secure cookies (HTTPS only): true in production; 'auto' elsewhere, which marks the cookie Secure
+   * whenever the request came over https (directly, or through a trusted proxy's X-Forwarded-Proto).
+   */
+  secure: boolean | 'auto';
   /** How often expired sessions are deleted; 0 never. */
   cleanupIntervalMs?: number;
 }
