@@ -1,8 +1,10 @@
 /**
  * Sightings, corrections and the moderators' queue over HTTP (issue 7; contract in
- * shared/submissions/types.ts). A sighting is multipart/form-data: its text fields are checked
- * first, then each file's type by its content, then the files are stored and the row written in
- * one transaction (the files are removed again if that fails).
+ * shared/submissions/types.ts). A sighting is multipart/form-data: its files are streamed to
+ * temporary files and hashed as they arrive; its text fields are checked first, then each file's
+ * type by its content, then the files are copied into the store and the row written in one
+ * transaction (the stored files are removed again if that fails); the temporary files are removed
+ * before the answer, whatever it is.
  */
 import { Router, type Request, type RequestHandler } from 'express';
 import { z } from 'zod';
@@ -11,7 +13,7 @@ import { HttpError } from '../http/errors';
 import { validate } from '../http/validate';
 import type { Allow } from '../policies';
 import type { ObjectStore } from '../storage';
-import { acceptFiles, inspectFiles, storeFiles, uploadedFiles } from '../uploads/attachments';
+import { acceptFiles, discardUploads, inspectFiles, storeFiles, uploadedFiles } from '../uploads/attachments';
 import {
   answerSchema,
   correctionSchema,
@@ -54,11 +56,17 @@ export function submissionRoutes({ allow, submissions, store, origin, limits }: 
   };
 
   r.post('/sightings', allow('submissions.sighting'), verified, limits.submitAddress, limits.submitAccount, acceptFiles(), async (req, res) => {
-    const input = validate(sightingSchema, sightingFields(req.body), 'body');
-    const figures = readClaimedFigures(input.figures);
-    const inspected = await inspectFiles(uploadedFiles(req));
-    const stored = await storeFiles(store, inspected);
-    res.status(201).json({ submission: await submissions.createSighting(req.user!, input, figures, stored, origin(req)) });
+    let submission;
+    try {
+      const input = validate(sightingSchema, sightingFields(req.body), 'body');
+      const figures = readClaimedFigures(input.figures);
+      const inspected = await inspectFiles(uploadedFiles(req));
+      const stored = await storeFiles(store, inspected);
+      submission = await submissions.createSighting(req.user!, input, figures, stored, origin(req));
+    } finally {
+      await discardUploads(req);
+    }
+    res.status(201).json({ submission });
   });
 
   r.post('/corrections', allow('submissions.correction'), limits.submitAddress, limits.submitAccount, async (req, res) => {

@@ -39,6 +39,12 @@ export interface StoredObject {
 export interface ObjectStore {
   /** Stores the bytes under the key (replacing any object there); resolves once they are durable. */
   put(key: string, body: Buffer, meta: ObjectMeta): Promise<void>;
+  /**
+   * Stores the bytes of a local file (an upload's temporary file) under the key, streamed, never
+   * read into memory; rejects, storing nothing, when the bytes' SHA-256 differs from meta.sha256.
+   * The file is left where it is. Resolves once the object is durable.
+   */
+  putFile(key: string, file: string, meta: ObjectMeta): Promise<void>;
   /** Streams the object; rejects with ObjectNotFoundError when the key is not stored. */
   get(key: string): Promise<StoredObject>;
   /** Removes the object; a missing key is not an error. */

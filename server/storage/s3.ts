@@ -12,6 +12,8 @@ import {
   PutObjectCommand,
   S3Client,
 } from '@aws-sdk/client-s3';
+import fs from 'node:fs';
+import path from 'node:path';
 import type { Readable } from 'node:stream';
 import type { ObjectMeta, ObjectStore, S3StorageConfig, StoredObject } from './index';
 import { assertKey, ObjectNotFoundError, SHA256_HEX } from './keys';
@@ -60,6 +62,31 @@ export class S3Store implements ObjectStore {
         ChecksumSHA256: Buffer.from(meta.sha256, 'hex').toString('base64'),
       }),
     );
+  }
+
+  /** Streams the file to S3; S3 checks ChecksumSHA256 against the bytes it received and refuses a mismatch. */
+  async putFile(key: string, file: string, meta: ObjectMeta): Promise<void> {
+    assertKey(key);
+    if (typeof file !== 'string' || !path.isAbsolute(file)) throw new TypeError('putFile() takes the absolute path of a file');
+    if (!meta.contentType) throw new TypeError('put() needs a contentType');
+    if (!SHA256_HEX.test(meta.sha256)) throw new TypeError('put() needs the SHA-256 as 64 lowercase hex digits');
+    const { size } = await fs.promises.stat(file);
+    const body = fs.createReadStream(file);
+    try {
+      await this.client.send(
+        new PutObjectCommand({
+          Bucket: this.bucket,
+          Key: key,
+          Body: body,
+          ContentLength: size,
+          ContentType: meta.contentType,
+          Metadata: { sha256: meta.sha256 },
+          ChecksumSHA256: Buffer.from(meta.sha256, 'hex').toString('base64'),
+        }),
+      );
+    } finally {
+      body.destroy();
+    }
   }
 
   async get(key: string): Promise<StoredObject> {

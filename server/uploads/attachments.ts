@@ -1,20 +1,26 @@
 /**
  * The upload pipeline for attachments (issue 7), in three steps the route runs in order:
  *
- *   acceptFiles()   multipart parsing with hard limits (multer, in memory): 413 / 400 naming `files`
- *   inspectFiles()  the type decided from the bytes (file-type), never from the client's name or
- *                   Content-Type; only PDF, PNG, JPEG and WebP: 415 naming `files.<i>`
- *   storeFiles()    each file under a new random key; all or nothing
+ *   acceptFiles()   multipart parsing with hard limits (multer): each file is streamed into a
+ *                   temporary file and hashed as it arrives (./temp-files.ts), never held in memory;
+ *                   413 / 400 naming `files`
+ *   inspectFiles()  the type decided from the file's bytes (file-type), never from the client's name
+ *                   or Content-Type; only PDF, PNG, JPEG and WebP: 415 naming `files.<i>`
+ *   storeFiles()    each file copied from its temporary file into the store under a new random key;
+ *                   all or nothing
  *
- * and removeStored() to take the objects back when the database transaction that records them fails.
+ * then discardUploads() removes the temporary files (the route calls it whatever happened; acceptFiles
+ * also does when the response closes, and multer does when it refuses the body or the client goes
+ * away), and removeStored() takes stored objects back when the transaction that records them fails.
  */
-import crypto from 'node:crypto';
+import fs from 'node:fs';
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
-import { fileTypeFromBuffer } from 'file-type/core';
+import { fileTypeFromBlob } from 'file-type/core';
 import multer, { MulterError } from 'multer';
 import { ATTACHMENT_MAX_BYTES, ATTACHMENT_TYPES, ATTACHMENTS_MAX, type AttachmentType } from '../../shared/submissions/types';
 import { HttpError } from '../http/errors';
 import { newAttachmentKey, type ObjectStore } from '../storage';
+import { HashingTempStorage, removeTempFile, sweepStaleTempFiles, uploadTempDir, type UploadedTempFile } from './temp-files';
 
 export interface AcceptFilesOptions {
   /** The multipart field that carries the files (default "files"). */
@@ -26,6 +32,8 @@ export interface AcceptFilesOptions {
   maxFields?: number;
   /** Per text field, in bytes (default 64 kB). */
   maxFieldBytes?: number;
+  /** Where files wait while the request is handled (default UPLOAD_TMP_DIR, else the system's temporary directory). */
+  tmpDir?: string;
 }
 
 export interface InspectedFile {
@@ -33,9 +41,10 @@ export interface InspectedFile {
   name: string;
   mediaType: AttachmentType;
   size: number;
-  /** Of the bytes, 64 lowercase hex digits. */
+  /** Of the bytes, 64 lowercase hex digits (hashed as they arrived). */
   sha256: string;
-  buffer: Buffer;
+  /** The temporary file that holds the bytes. */
+  path: string;
 }
 
 export interface StoredFile {
@@ -60,8 +69,11 @@ export function acceptFiles(opts: AcceptFilesOptions = {}): RequestHandler {
   const maxBytes = opts.maxBytes ?? ATTACHMENT_MAX_BYTES;
   const maxFields = opts.maxFields ?? 20;
   const maxFieldBytes = opts.maxFieldBytes ?? 64 * 1024;
+  const storage = new HashingTempStorage(opts.tmpDir ?? uploadTempDir());
+  // Files left by an app process that was killed mid-upload (never throws).
+  void sweepStaleTempFiles(storage.dir);
   const upload = multer({
-    storage: multer.memoryStorage(),
+    storage,
     // Browsers send file names as raw UTF-8 (WHATWG multipart/form-data), not Latin-1.
     defParamCharset: 'utf8',
     limits: {
@@ -109,16 +121,24 @@ export function acceptFiles(opts: AcceptFilesOptions = {}): RequestHandler {
 
   return (req: Request, res: Response, next: NextFunction) => {
     upload(req, res, (err?: unknown) => {
+      // On an error multer has removed every file it wrote.
       if (err) return next(translate(err));
       if (!Array.isArray(req.files)) req.files = [];
+      // Whatever the route does, no temporary file outlives the response.
+      if (req.files.length) res.once('close', () => void discardUploads(req));
       next();
     });
   };
 }
 
-/** The files acceptFiles() left on the request (always an array). */
-export function uploadedFiles(req: Request): Express.Multer.File[] {
+/** The files acceptFiles() left on the request (always an array), each in its temporary file. */
+export function uploadedFiles(req: Request): UploadedTempFile[] {
   return Array.isArray(req.files) ? req.files : [];
+}
+
+/** Removes the request's temporary files (idempotent; never throws). Routes call it before answering. */
+export async function discardUploads(req: Request): Promise<void> {
+  await Promise.all(uploadedFiles(req).map((f) => (f.path ? removeTempFile(f.path).catch(() => {}) : undefined)));
 }
 
 const TYPE_NAMES = 'a PDF, PNG, JPEG or WebP image';
@@ -143,9 +163,10 @@ export function displayName(original: string | undefined): string {
   return chars.slice(0, MAX_NAME_LENGTH - 1).join('') + '…';
 }
 
-async function detect(buffer: Buffer): Promise<{ ext: string; mime: string } | undefined> {
+/** The type of a file from its content; file-type reads only as far into the file as it needs. */
+async function detect(file: string): Promise<{ ext: string; mime: string } | undefined> {
   try {
-    return await fileTypeFromBuffer(buffer);
+    return await fileTypeFromBlob(await fs.openAsBlob(file));
   } catch {
     return undefined; // a file-type parser choking on malformed bytes: not a file we recognise
   }
@@ -156,17 +177,17 @@ async function detect(buffer: Buffer): Promise<{ ext: string; mime: string } | u
  * named): an empty file → 400 'empty_file'; a type other than PDF, PNG, JPEG, WebP → 415
  * 'unsupported_media_type', each keyed files.<i> and saying what the content was.
  */
-export async function inspectFiles(files: readonly Express.Multer.File[]): Promise<InspectedFile[]> {
+export async function inspectFiles(files: readonly UploadedTempFile[]): Promise<InspectedFile[]> {
   const empty: Record<string, string> = {};
   const unsupported: Record<string, string> = {};
   const out: InspectedFile[] = [];
   for (const [i, file] of files.entries()) {
-    const buffer = file.buffer;
-    if (!buffer || buffer.length === 0) {
+    if (!file.path || !file.sha256) throw new Error('inspectFiles: each file must come from acceptFiles() (a temporary file and its SHA-256)');
+    if (file.size === 0) {
       empty[`files.${i}`] = 'this file is empty';
       continue;
     }
-    const found = await detect(buffer);
+    const found = await detect(file.path);
     if (!found || !ALLOWED.has(found.mime)) {
       const what = found ? `${found.mime} (.${found.ext})` : 'not a recognised file';
       unsupported[`files.${i}`] = `this file is ${what}, not ${TYPE_NAMES}`;
@@ -175,9 +196,9 @@ export async function inspectFiles(files: readonly Express.Multer.File[]): Promi
     out.push({
       name: displayName(file.originalname),
       mediaType: found.mime as AttachmentType,
-      size: buffer.length,
-      sha256: crypto.createHash('sha256').update(buffer).digest('hex'),
-      buffer,
+      size: file.size,
+      sha256: file.sha256,
+      path: file.path,
     });
   }
   if (Object.keys(empty).length) {
@@ -199,7 +220,9 @@ export interface StoreFilesOptions {
 }
 
 /**
- * Puts each file under a new key (attachments/<yyyy>/<mm>/<32 hex>), one after the other. If a put
+ * Copies each file from its temporary file into the store under a new key
+ * (attachments/<yyyy>/<mm>/<32 hex>), one after the other; the store checks the SHA-256 of what it
+ * wrote against the one taken as the bytes arrived. If a put
  * fails, the objects already put (and the failed key, in case the store kept it) are deleted and the
  * error is rethrown: nothing is left half-stored.
  */
@@ -208,7 +231,7 @@ export async function storeFiles(store: ObjectStore, files: readonly InspectedFi
   for (const file of files) {
     const key = newAttachmentKey(opts.now);
     try {
-      await store.put(key, file.buffer, { contentType: file.mediaType, sha256: file.sha256 });
+      await store.putFile(key, file.path, { contentType: file.mediaType, sha256: file.sha256 });
     } catch (err) {
       await removeStored(store, [...stored, { key }], opts.onOrphan);
       throw err;

@@ -70,10 +70,11 @@ it('leaves no object in the bucket when the database write fails', async () => {
   const before = await Attachment.count();
   const spy = jest.spyOn(Submission, 'create').mockRejectedValueOnce(new Error('simulated database failure'));
   const putKeys: string[] = [];
-  const put = store.put.bind(store);
-  const putSpy = jest.spyOn(store, 'put').mockImplementation(async (key, body, meta) => {
+  // Uploads reach the store from their temporary files (putFile).
+  const putFile = store.putFile.bind(store);
+  const putSpy = jest.spyOn(store, 'putFile').mockImplementation(async (key, file, meta) => {
     putKeys.push(key);
-    return put(key, body, meta);
+    return putFile(key, file, meta);
   });
   const { res } = await post([minimalPdf(), minimalPdf()]);
   spy.mockRestore();
