@@ -725,4 +725,30 @@ describe('more ways claims are written (issue 11)', () => {
     expect(f.filter((x) => x.kind === 'current').map((x) => x.si)).toEqual([expect.closeTo(0.35, 12)]);
     expect(f.find((x) => x.kind === 'thrust')!.si).toBeCloseTo(4e-6, 15);
   });
+
+  test('a hedge between a verb and its figure leaves the role to the verb', () => {
+    const f = read('The magnet motor gives 1.12 kW mechanical out while the supply delivers approximately 1 kW.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['out', 'in']);
+    const g = read('The heat pump gives 5 kW of heat for about 1.5 kW of electricity.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['out', 'in']);
+  });
+
+  test('a restatement in other units, in brackets, is no figure and does not hide the words after it', () => {
+    // 1 hp = 745.69987158227 W (NIST SP 811 (2008), App. B.8): 2 kW = 2.68 hp, 5 hp = 3.73 kW.
+    const f = read('Delivers 5 hp at the shaft from 2 kW (2.7 hp) of electrical input.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['out', expect.closeTo(5 * 745.69987158227, 6)], // (mathjs's hp agrees to 6e-11)
+      ['in', 2000],
+    ]);
+    // °F → K = (F − 32)·5/9 + 273.15 (NIST SP 811, App. B.9): 302 °F = 150 °C, the upper end of the range.
+    const g = read('Brine at 120–150 °C (302 °F) feeds the turbine; it rejects heat to a 20 °C river.');
+    expect(g.filter((x) => x.kind === 'temperature').map((x) => [x.si, x.upper?.si])).toEqual([
+      [expect.closeTo(393.15, 9), expect.closeTo(423.15, 9)],
+      [expect.closeTo(293.15, 9), undefined],
+    ]);
+    // A difference of 36 °F is 20 K (5/9 K per °F).
+    const h = read('A heat engine on a 20 °C (36 °F) temperature difference, cold side 15 °C, claims 12 % efficiency.');
+    expect(h.filter((x) => x.kind === 'temperature-difference').map((x) => x.si)).toEqual([20]);
+    expect(h.find((x) => x.kind === 'temperature' && x.role === 'hot')!.si).toBeCloseTo(308.15, 9);
+  });
 });

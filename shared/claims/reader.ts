@@ -609,6 +609,27 @@ function roleFor(text: string, kind: FigureKind, start: number, end: number, flo
   return null;
 }
 
+/** Hedges that leave a figure's role to the words before them ("delivers approximately 1 kW", "for about 3 kW of electricity"). */
+const ROLE_TRANSPARENT_HEDGES = HEDGE_RES.filter((h) => h.hedge === 'about' || h.hedge === 'up-to' || h.hedge === 'at-least' || h.hedge === 'at-most');
+
+/** Where the words that give a figure its role end: before any hedge said right before the figure. */
+function roleContextStart(text: string, start: number, floor: number): number {
+  let at = start;
+  for (let again = true; again; ) {
+    again = false;
+    const before = text.slice(Math.max(floor, at - 24), at);
+    for (const h of ROLE_TRANSPARENT_HEDGES) {
+      const m = h.re.exec(before);
+      if (m && m.index > 0 && /[^\S\n]$/.test(before.slice(0, m.index))) {
+        at -= before.length - m.index;
+        again = true;
+        break;
+      }
+    }
+  }
+  return at;
+}
+
 function hedgeBefore(text: string, start: number): FigureHedge | undefined {
   const before = text.slice(Math.max(0, start - 24), start);
   for (const h of HEDGE_RES) if (h.re.test(before)) return h.hedge;
@@ -766,6 +787,17 @@ function isDifference(text: string, start: number, end: number, floor: number): 
  * follow the figures they come from. See the file's comment for what is read.
  */
 export function extractFigures(text: string): Figure[] {
+  const restated: [number, number][] = [];
+  const figures = readFigures(text, restated);
+  if (restated.length === 0) return figures;
+  // "2 kW (2.7 hp) of electrical input": read again with the restatements blanked out (offsets kept),
+  // so that the words after a restatement reach the figure it restates.
+  let blanked = text;
+  for (const [a, b] of restated) blanked = blanked.slice(0, a) + ' '.repeat(b - a) + blanked.slice(b);
+  return readFigures(blanked, []).map((f) => (f.start === null || f.end === null ? f : { ...f, text: text.slice(f.start, f.end) }));
+}
+
+function readFigures(text: string, restated: [number, number][]): Figure[] {
   afterRoleEnd = 0;
   const tokens = tokenize(text);
   const drafts: Draft[] = [];
@@ -898,11 +930,24 @@ export function extractFigures(text: string): Figure[] {
     }
     // "12 kW (16 hp)": a restatement in other units, not a second figure.
     const prev = drafts[drafts.length - 1];
-    if (prev && prev.kind === kind && /^[^\S\n]*[(\[][^\S\n]*(?:about|approx\.?|~|≈|or)?[^\S\n]*$/.test(text.slice(prev.end, start))) {
+    // (A temperature and a difference are one kind here: "4 °C (39 °F)", "a 20 °C (36 °F) lift".)
+    const temperatures = suffix?.type === 'unit' && suffix.form.kind === 'temperature' && prev && (prev.kind === 'temperature' || prev.kind === 'temperature-difference');
+    if (prev && (prev.kind === kind || temperatures) && /^[^\S\n]*[(\[][^\S\n]*(?:about|approx\.?|~|≈|or)?[^\S\n]*$/.test(text.slice(prev.end, start))) {
       try {
-        const a = parseQuantity(prev.quantity, FIGURE_SI_UNIT[kind]);
-        const b = parseQuantity(quantity, FIGURE_SI_UNIT[kind]);
-        if (Math.abs(a - b) <= 0.05 * Math.max(Math.abs(a), Math.abs(b))) {
+        const b = parseQuantity(temperatures && suffix?.type === 'unit' && prev.kind === 'temperature' ? unitQuantity(t.num, suffix).quantity : quantity, FIGURE_SI_UNIT[prev.kind]);
+        // (Either end of a range: "120–150 °C (302 °F)".)
+        const near = (a: number, c = b) => Math.abs(a - c) <= 0.05 * Math.max(Math.abs(a), Math.abs(c));
+        // Both read as differences: "a 20 °C (36 °F) temperature difference".
+        const asDifference = (q: string) => {
+          const m = /^(-?[\d.e+-]+) (degC|degF|K|mK)$/.exec(q);
+          return m ? parseQuantity(differenceQuantity(m[1], m[2]), 'K') : NaN;
+        };
+        const bothDifferences =
+          temperatures && suffix?.type === 'unit' && prev.kind === 'temperature' && prev.upper === undefined &&
+          near(asDifference(prev.quantity), parseQuantity(differenceQuantity(scaled(t.num, suffix.form.factor), suffix.form.unit), 'K'));
+        if (bothDifferences || near(parseQuantity(prev.quantity, FIGURE_SI_UNIT[prev.kind])) || (prev.upper !== undefined && near(parseQuantity(prev.upper, FIGURE_SI_UNIT[prev.kind])))) {
+          const close = /^[^\S\n]*[)\]]/.exec(text.slice(end));
+          if (close && upper === undefined) restated.push([prev.end, end + close[0].length]);
           floor = end;
           continue;
         }
@@ -910,7 +955,7 @@ export function extractFigures(text: string): Figure[] {
         /* not comparable: keep it */
       }
     }
-    if (role === undefined) role = roleFor(text, kind, start, end, floor);
+    if (role === undefined) role = roleFor(text, kind, roleContextStart(text, start, floor), end, floor);
     // "10 kWe", "3 MWe": electrical output.
     if (role === null && kind === 'power' && suffix?.type === 'unit' && /[kMG]?We$/.test(text.slice(t.numEnd, end).trim())) role = 'out';
     let hedge = hedgeBefore(text, start);
