@@ -1,13 +1,14 @@
 import { StyleSheet, Text, View } from 'react-native';
-import type { Citation } from '@/shared/entries/schema';
+import { isWebAddress, type Citation } from '@/shared/entries/schema';
 import { colors, space, type } from '../theme';
 import { TextLink } from '../ui/TextLink';
 import { citationLine } from './sections';
 
 /** Where a source can be found: its DOI as an address, or its own URL. */
 function addressOf(csl: Citation['csl']): string | undefined {
-  if (typeof csl.DOI === 'string' && csl.DOI) return `https://doi.org/${csl.DOI}`;
-  return typeof csl.URL === 'string' && csl.URL ? csl.URL : undefined;
+  if (typeof csl.DOI === 'string' && csl.DOI) return `https://doi.org/${encodeURI(csl.DOI)}`;
+  // The server accepts only http(s) addresses; anything else that reaches here is not made a link.
+  return typeof csl.URL === 'string' && isWebAddress(csl.URL) ? csl.URL : undefined;
 }
 
 /** The sources of a version, numbered in the editors' order, each with what it supports. */

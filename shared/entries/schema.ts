@@ -15,11 +15,44 @@ export const slugSchema = z
 /** Markdown with TeX math ($…$, $$…$$), rendered by shared/markdown.ts and sanitised. */
 const markdown = (max: number) => z.string().max(max, `at most ${max} characters`);
 
+/** True for an absolute http: or https: address with a host: the only addresses a reader is ever sent to. */
+export function isWebAddress(s: string): boolean {
+  try {
+    const u = new URL(s);
+    return (u.protocol === 'http:' || u.protocol === 'https:') && u.hostname !== '';
+  } catch {
+    return false;
+  }
+}
+
+/** A web address someone typed: http(s) only — javascript:, data:, file:, ftp: and the rest are refused. */
+export const webAddressSchema = z
+  .string()
+  .trim()
+  .max(2000, 'at most 2000 characters')
+  .refine(isWebAddress, 'a web address starting with http:// or https://');
+
+/**
+ * A DOI as the DOI Handbook writes it: "10.", the registrant code (digits, maybe subdivided by "."),
+ * "/", a suffix without spaces. Pasted as a resolver address or with "doi:" in front, it is kept bare.
+ */
+export const DOI_PATTERN = /^10\.\d{4,}(?:\.\d+)*\/\S+$/;
+export const doiSchema = z.preprocess(
+  (v) => (typeof v === 'string' ? v.trim().replace(/^(?:https?:\/\/(?:dx\.)?doi\.org\/|doi:\s*)/i, '') : v),
+  z.string().max(300, 'at most 300 characters').regex(DOI_PATTERN, 'a DOI such as 10.1103/PhysRevLett.78.5'),
+);
+
 /** A citation as CSL-JSON (what citation-js produces), with a short note on what it supports. */
 export const citationSchema = z.object({
-  /** CSL-JSON item: at least an id, a type and a title. */
+  /** CSL-JSON item: at least an id, a type and a title; its address (URL) http(s) only, its DOI a DOI. */
   csl: z
-    .object({ id: z.string().min(1).max(200), type: z.string().min(1).max(40), title: z.string().min(1).max(500) })
+    .object({
+      id: z.string().min(1).max(200),
+      type: z.string().min(1).max(40),
+      title: z.string().min(1).max(500),
+      URL: webAddressSchema.optional(),
+      DOI: doiSchema.optional(),
+    })
     .passthrough(),
   note: z.string().max(500).default(''),
 });
