@@ -2,8 +2,10 @@
  * Protection of state-changing requests: the session's synchronizer token in X-CSRF-Token, an
  * Origin that is not ours refused, and the session cookie's attributes.
  */
+import { QueryTypes } from 'sequelize';
 import request from 'supertest';
 import { createApp } from '../../server/app';
+import type { PolicyMiddleware } from '../../server/policies';
 import { demo, startTestApp, type TestApp } from '../support/app';
 
 let h: TestApp;
@@ -119,5 +121,91 @@ describe('the session cookie', () => {
     expect(cookie).toMatch(/; Secure/);
     expect(cookie).toMatch(/; HttpOnly/);
     expect(() => createApp({ sequelize: h.t.sequelize, version: 'test', env: 'production' })).toThrow(/secret/);
+  });
+});
+
+describe('every state-changing route of the router (issue 13, item 7)', () => {
+  type Layer = { route?: { path: string; methods: Record<string, boolean>; stack: { handle: unknown }[] }; handle: { stack?: Layer[] }; rawPath?: unknown };
+  type Found = { method: string; path: string; csrf: boolean };
+  /** Every route with its method, read from the Express router as the role matrix and the fuzz test do, with its policy's csrf flag. */
+  function routesOf(app: unknown): Found[] {
+    const found: Found[] = [];
+    const walk = (stack: Layer[], prefix: string) => {
+      for (const layer of stack) {
+        if (layer.route) {
+          const policy = layer.route.stack.map((l) => (l.handle as Partial<PolicyMiddleware>).policy).find(Boolean);
+          for (const m of Object.keys(layer.route.methods).filter((k) => layer.route!.methods[k] && k !== '_all')) {
+            found.push({ method: m.toUpperCase(), path: prefix + String(layer.route.path), csrf: policy?.csrf !== false });
+          }
+        } else if (Array.isArray(layer.handle?.stack)) {
+          walk(layer.handle.stack, prefix + (typeof layer.rawPath === 'string' && layer.rawPath !== '/' ? layer.rawPath : ''));
+        }
+      }
+    };
+    walk((app as { router: { stack: Layer[] } }).router.stack, '');
+    return found;
+  }
+  const concrete = (p: string) =>
+    p.replace(/:(\w+)/g, (_m, name: string) => ({ id: '4000000000', slug: 'no-such-entry', check: 'carnot', token: 'A'.repeat(32) })[name] ?? 'x');
+  const writes = () => routesOf(h.app).filter((r) => r.path.startsWith('/api/') && !['GET', 'HEAD', 'OPTIONS'].includes(r.method));
+
+  /**
+   * Row counts and checksums of every table but the sessions (whose expiry a request may touch) and
+   * the rate limiter's counters (which count every request, refused or not, by design).
+   */
+  async function snapshot(): Promise<Record<string, unknown>> {
+    const tables = await h.t.sequelize.query<{ name: string }>(
+      "SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE() AND table_name NOT IN ('sessions', 'rate_limits') ORDER BY table_name",
+      { type: QueryTypes.SELECT },
+    );
+    const out: Record<string, unknown> = {};
+    for (const { name } of tables) {
+      const [sum] = await h.t.sequelize.query<{ Checksum: unknown }>(`CHECKSUM TABLE \`${name}\``, { type: QueryTypes.SELECT });
+      const [count] = await h.t.sequelize.query<{ n: unknown }>(`SELECT COUNT(*) AS n FROM \`${name}\``, { type: QueryTypes.SELECT });
+      out[name] = [String(sum.Checksum), String(count.n)];
+    }
+    return out;
+  }
+
+  it('the only routes without the token are the documented pure computations', () => {
+    expect(writes().length).toBeGreaterThanOrEqual(25);
+    // policies.ts: checks.run, worksheets.evaluate and claimChecks.run (a check not saved) are `csrf: false`.
+    expect(writes().filter((r) => !r.csrf).map((r) => `${r.method} ${r.path}`).sort()).toEqual(
+      ['POST /api/checks/:check', 'POST /api/claim-checks', 'POST /api/worksheets/evaluate'].sort(),
+    );
+  });
+
+  it('refuses each of the others without the token, and with a wrong one (403 JSON), signed in as an admin, changing nothing', async () => {
+    const admin = await h.signedIn(demo.admin.email);
+    const before = await snapshot();
+    for (const r of writes().filter((x) => x.csrf)) {
+      const method = r.method.toLowerCase() as 'post' | 'put' | 'patch' | 'delete';
+      const path = concrete(r.path);
+      for (const token of [undefined, 'x'.repeat(43)]) {
+        let req = admin.agent[method](path);
+        if (token) req = req.set('X-CSRF-Token', token);
+        const res = await req.send({ displayName: 'Changed without a token', role: 'admin', email: demo.admin.email, password: demo.password });
+        expect([r.method, r.path, res.status, res.headers['content-type'], res.body?.error?.code]).toEqual([r.method, r.path, 403, expect.stringMatching(/^application\/json/), 'csrf_failed']);
+      }
+    }
+    // The session is still the admin's, and no table other than the sessions changed.
+    expect((await admin.session()).user).toMatchObject({ email: demo.admin.email });
+    expect(await snapshot()).toEqual(before);
+  });
+
+  it('the exempt computations change no state: no row anywhere, no session, no cookie', async () => {
+    const sessionsBefore = (await h.t.sequelize.query<{ n: unknown }>('SELECT COUNT(*) AS n FROM sessions', { type: QueryTypes.SELECT }))[0].n;
+    const before = await snapshot();
+    const bodies: Record<string, object> = {
+      'POST /api/checks/:check': { inputs: { Th: '600 K', Tc: '300 K', eta_claimed: '0.6' } },
+      'POST /api/worksheets/evaluate': { worksheet: { name: 'w', title: 'W', inputs: [], steps: [], checks: [] } },
+      'POST /api/claim-checks': { text: 'A sealed box is said to push itself with 2 mN from 1 kW of microwaves, with no propellant.' },
+    };
+    for (const r of writes().filter((x) => !x.csrf)) {
+      const res = await request(h.app).post(concrete(r.path)).send(bodies[`${r.method} ${r.path}`] ?? {});
+      expect([r.path, res.status < 500, res.headers['set-cookie']]).toEqual([r.path, true, undefined]);
+    }
+    expect(await snapshot()).toEqual(before);
+    expect((await h.t.sequelize.query<{ n: unknown }>('SELECT COUNT(*) AS n FROM sessions', { type: QueryTypes.SELECT }))[0].n).toEqual(sessionsBefore);
   });
 });

@@ -10,6 +10,9 @@ import type * as SequelizeModule from '../../server/db/sequelize';
 import { Session, User } from '../../server/models';
 import { demo, startTestApp, type TestApp } from '../support/app';
 
+// Building a second and third app with their own copy of every module takes seconds on a busy machine.
+jest.setTimeout(60_000);
+
 const SECRET = 'shared-by-every-app-server-'.padEnd(48, 'x');
 
 let h: TestApp;
@@ -85,4 +88,65 @@ it('is not accepted by a server with another secret', async () => {
   const res = await request(foreign).get('/api/session').set('Cookie', cookie).expect(200);
   expect(res.body.user).toBeNull();
   await close();
+});
+
+describe('session fixation (issue 13, item 7)', () => {
+  const sidOf = (cookie: string) => decodeURIComponent(cookie.slice('cw.sid='.length)).replace(/^s:/, '').split('.')[0];
+
+  it('gives a new session id at sign-in and at sign-out; the id from before is worth nothing after', async () => {
+    // The session an attacker might plant: one started without signing in.
+    const before = await request(h.app).get('/api/session').expect(200);
+    const planted = cookieOf(before);
+    const token = before.body.csrfToken as string;
+
+    const signIn = await request(h.app)
+      .post('/api/auth/sign-in')
+      .set('Cookie', planted)
+      .set('X-CSRF-Token', token)
+      .send({ email: demo.contributor.email, password: demo.password })
+      .expect(200);
+    const signedIn = cookieOf(signIn);
+    expect(sidOf(signedIn)).not.toBe(sidOf(planted));
+    // The planted id does not carry the sign-in, and its row is gone.
+    expect((await request(h.app).get('/api/session').set('Cookie', planted)).body.user).toBeNull();
+    expect(await Session.findByPk(sidOf(planted))).toBeNull();
+    expect((await request(h.app).get('/api/session').set('Cookie', signedIn)).body.user).toMatchObject({ email: demo.contributor.email });
+
+    const signOut = await request(h.app).post('/api/auth/sign-out').set('Cookie', signedIn).set('X-CSRF-Token', token).expect(204);
+    const after = (signOut.headers['set-cookie'] as unknown as string[] | undefined)?.find((c) => c.startsWith('cw.sid='))?.split(';')[0];
+    if (after) expect(sidOf(after)).not.toBe(sidOf(signedIn));
+    expect((await request(h.app).get('/api/session').set('Cookie', signedIn)).body.user).toBeNull();
+    expect(await Session.findByPk(sidOf(signedIn))).toBeNull();
+  });
+
+  it('ignores a session id the server never issued (unsigned, or signed with another secret)', async () => {
+    for (const forged of ['cw.sid=attacker-chosen-id', `cw.sid=${encodeURIComponent('s:attacker-chosen-id.bm90LWEtc2lnbmF0dXJl')}`]) {
+      const res = await request(h.app).get('/api/session').set('Cookie', forged).expect(200);
+      expect(res.body.user).toBeNull();
+      expect(sidOf(cookieOf(res))).not.toBe('attacker-chosen-id');
+    }
+    expect(await Session.findByPk('attacker-chosen-id')).toBeNull();
+  });
+});
+
+describe('the session cookie flags', () => {
+  const flagsOf = (res: request.Response) => (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('cw.sid='))!;
+
+  it('HttpOnly, SameSite=Lax, Path=/, and an expiry 14 days ahead', async () => {
+    const started = Date.now();
+    const cookie = flagsOf(await request(h.app).get('/api/session').expect(200));
+    expect(cookie).toMatch(/; HttpOnly(;|$)/);
+    expect(cookie).toMatch(/; SameSite=Lax(;|$)/);
+    expect(cookie).toMatch(/; Path=\/(;|$)/);
+    const expires = Date.parse(/; Expires=([^;]+)/.exec(cookie)![1]);
+    // Fourteen days (SESSION_MAX_AGE_MS); the cookie date has whole seconds.
+    expect(Math.abs(expires - (started + 14 * 24 * 3600_000))).toBeLessThan(60_000);
+  });
+
+  it('Secure when the request came over https (a trusted proxy says so), not over plain http, outside production', async () => {
+    const viaTls = flagsOf(await request(h.app).get('/api/session').set('X-Forwarded-Proto', 'https').expect(200));
+    expect(viaTls).toMatch(/; Secure(;|$)/);
+    const plain = flagsOf(await request(h.app).get('/api/session').expect(200));
+    expect(plain).not.toMatch(/; Secure/);
+  });
 });
