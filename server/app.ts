@@ -17,7 +17,9 @@ import type { Sequelize } from 'sequelize';
 import { createPassport, sessionMiddleware } from './auth/session';
 import { bodyDepthLimit } from './http/depth';
 import { apiNotFound, errorHandler } from './http/errors';
-import { rateLimiters, type RateLimits } from './http/rate-limit';
+import { rateLimiters, rateLimitsFromEnv, type RateLimits } from './http/rate-limit';
+import { ComputePool, type ComputeOptions } from './compute/pool';
+import { computeConfig } from './config';
 import { createMailer, type Mailer } from './mail/mailer';
 import { policyGuard } from './policies';
 import { accountRoutes } from './routes/account';
@@ -80,6 +82,10 @@ export interface AppOptions {
   store?: ObjectStore;
   /** How long new submissions are gathered before the moderators' digest mail goes out (ms). Default 60 000. */
   submissionDigestMs?: number;
+  /** The compute pool's settings (server/compute/pool.ts); default from the environment (COMPUTE_*). */
+  compute?: Partial<ComputeOptions>;
+  /** How often expired rate-limit counts are deleted (ms); 0 never. Default 10 minutes. */
+  rateLimitCleanupMs?: number;
 }
 
 /** What createApp leaves in app.locals for its owner. */
@@ -88,6 +94,8 @@ export interface AppLocals {
   settle(): Promise<void>;
   /** Stops the session store's cleanup timer. */
   close(): Promise<void>;
+  /** The worker threads that compute worksheets, checks and claim checks. */
+  compute: ComputePool;
 }
 
 export function createApp(opts: AppOptions): express.Express {
@@ -133,7 +141,11 @@ export function createApp(opts: AppOptions): express.Express {
   const mailer = opts.mailer ?? createMailer({ url: null, from: 'Counterweight <no-reply@example.org>' });
   const accounts = new Accounts({ sequelize: opts.sequelize, mailer });
   const allow = policyGuard({ publicUrl: opts.publicUrl });
-  const limits = rateLimiters(opts.rateLimits);
+  const rateLimits = rateLimiters({ ...rateLimitsFromEnv(), ...opts.rateLimits }, { sequelize: opts.sequelize, cleanupMs: opts.rateLimitCleanupMs, logger });
+  const limits = rateLimits.handlers;
+  // Worksheets, checks and claim checks run in worker threads, never on the event loop (issue 13).
+  const compute = new ComputePool({ ...computeConfig(), ...opts.compute }, logger);
+  void compute.start();
   const sessions = sessionMiddleware({
     sequelize: opts.sequelize,
     secret: opts.sessionSecret ?? crypto.randomBytes(32).toString('base64url'),
@@ -156,11 +168,14 @@ export function createApp(opts: AppOptions): express.Express {
     },
     close: async () => {
       sessions.store.stopExpiringSessions();
+      rateLimits.stop();
+      await compute.close();
       await search.stop();
       submissions.stop();
       if (!opts.store && store instanceof S3Store) store.close();
       await locals.settle();
     },
+    compute,
   };
   Object.assign(app.locals, locals);
   const origin = (req: express.Request) => opts.publicUrl ?? `${req.protocol}://${req.get('host')}`;
@@ -197,8 +212,8 @@ export function createApp(opts: AppOptions): express.Express {
   api.use(passport.session());
   api.use(healthRoutes(allow, opts.sequelize, opts.version));
   api.use(taxonomyRoutes(allow));
-  api.use(checkRoutes(allow));
-  api.use(worksheetRoutes(allow));
+  api.use(checkRoutes(allow, { compute, limit: limits.compute }));
+  api.use(worksheetRoutes(allow, { compute, limit: limits.compute }));
   api.use(authRoutes({ allow, accounts, passport, limits, origin, later, logger }));
   api.use(accountRoutes(allow, accounts));
   api.use(adminRoutes(allow, accounts, env));
@@ -209,7 +224,7 @@ export function createApp(opts: AppOptions): express.Express {
   api.use(searchRoutes(allow, search));
   api.use(synonymRoutes(allow, new Synonyms({ sequelize: opts.sequelize, changed: () => search.rebuild().catch((err) => logger.error({ err }, 'search index rebuild failed')) })));
   api.use(submissionRoutes({ allow, submissions, store, origin, limits }));
-  api.use(claimCheckRoutes(allow, new ClaimChecks({ sequelize: opts.sequelize, index: search, entries }), origin));
+  api.use(claimCheckRoutes(allow, new ClaimChecks({ sequelize: opts.sequelize, index: search, entries, compute }), origin, limits.claimCheck));
   api.use(apiNotFound);
   app.use('/api', api);
 

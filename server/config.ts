@@ -4,6 +4,7 @@
  */
 import crypto from 'node:crypto';
 import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 
 export const ROOT = path.resolve(__dirname, '..');
@@ -38,6 +39,41 @@ export interface Config {
   mailFrom: string;
   /** Express's `trust proxy`: which proxies' X-Forwarded-* headers to believe. */
   trustProxy: string | number;
+  /** The compute pool (server/compute/pool.ts): COMPUTE_THREADS, COMPUTE_TIMEOUT_MS, COMPUTE_QUEUE_MAX, COMPUTE_MEMORY_MB, COMPUTE_INLINE. */
+  compute: ComputeConfig;
+}
+
+export interface ComputeConfig {
+  threads: number;
+  timeoutMs: number;
+  queueMax: number;
+  memoryMb: number;
+  inline: boolean;
+}
+
+const positive = (name: string, fallback: number, max: number): number => {
+  const raw = process.env[name];
+  if (raw === undefined || raw === '') return fallback;
+  const n = Number(raw);
+  if (!Number.isInteger(n) || n < 1 || n > max) throw new Error(`${name} must be a whole number from 1 to ${max}, got "${raw}"`);
+  return n;
+};
+
+/**
+ * The compute pool's settings from the environment. Threads default to one fewer than the cores
+ * (at least one, at most four), so that the main thread keeps a core for health checks and reads.
+ */
+export function computeConfig(): ComputeConfig {
+  const cores = os.availableParallelism();
+  const inline = process.env.COMPUTE_INLINE ?? '';
+  if (!['', '0', '1'].includes(inline)) throw new Error(`COMPUTE_INLINE must be 1 (debugging: compute on the main thread) or 0, got "${inline}"`);
+  return {
+    threads: positive('COMPUTE_THREADS', Math.min(4, Math.max(1, cores - 1)), 64),
+    timeoutMs: positive('COMPUTE_TIMEOUT_MS', 2000, 600_000),
+    queueMax: positive('COMPUTE_QUEUE_MAX', 16, 10_000),
+    memoryMb: positive('COMPUTE_MEMORY_MB', 512, 16_384),
+    inline: inline === '1',
+  };
 }
 
 /** The app user's password: DB_PASSWORD, or one generated on first start and kept in the datadir. */
@@ -141,6 +177,7 @@ export function loadConfig(): Config {
     smtpPort: process.env.SMTP_PORT && process.env.SMTP_PORT !== '0' ? int('SMTP_PORT', 0) : 0,
     mailFrom: process.env.MAIL_FROM ?? 'Counterweight <no-reply@example.org>',
     trustProxy: trustProxy(),
+    compute: computeConfig(),
   };
 }
 

@@ -1,8 +1,9 @@
 /** The standard check kit over HTTP: the same functions the check screens run in the browser. */
-import { Router } from 'express';
+import { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { checkList } from '../../shared/checks';
-import { CheckInputError, isCheckName, runCheck } from '../../shared/checks/run';
+import { isCheckName } from '../../shared/checks/run';
+import { computeFor, type ComputePool } from '../compute/pool';
 import { HttpError } from '../http/errors';
 import { validate } from '../http/validate';
 import type { Allow } from '../policies';
@@ -13,7 +14,14 @@ const rawInput = z.union([
 ]);
 export const checkRequestSchema = z.object({ inputs: z.record(z.string().max(40), rawInput).default({}) }).strict();
 
-export function checkRoutes(allow: Allow): Router {
+export interface ComputeRouteDeps {
+  /** The worker threads the checks run in. */
+  compute: ComputePool;
+  /** The per-address limit on computations. */
+  limit: RequestHandler;
+}
+
+export function checkRoutes(allow: Allow, { compute, limit }: ComputeRouteDeps): Router {
   const r = Router();
 
   r.get('/checks', allow('checks.list'), (_req, res) => {
@@ -24,21 +32,14 @@ export function checkRoutes(allow: Allow): Router {
     });
   });
 
-  r.post('/checks/:check', allow('checks.run'), (req, res) => {
-    const name = req.params.check;
+  r.post('/checks/:check', allow('checks.run'), limit, async (req, res) => {
+    const name = String(req.params.check);
     if (!isCheckName(name)) {
       throw new HttpError(404, 'unknown_check', `There is no check "${name}". The kit has: ${checkList.map((c) => c.name).join(', ')}.`);
     }
     const { inputs } = validate(checkRequestSchema, req.body ?? {}, 'body');
-    try {
-      res.json(runCheck(name, inputs));
-    } catch (err) {
-      if (err instanceof CheckInputError) {
-        const fields = Object.fromEntries(Object.entries(err.fields).map(([k, v]) => [`body.${k}`, v]));
-        throw new HttpError(400, 'invalid_input', err.message, fields);
-      }
-      throw err;
-    }
+    // In a worker thread (a bad input comes back as a 400 naming the field).
+    res.json(await computeFor(res, compute, { kind: 'check', check: name, inputs }));
   });
   return r;
 }

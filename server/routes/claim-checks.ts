@@ -3,7 +3,7 @@
  * computation over the published library), and signed-in readers save a check and share it by an
  * unguessable link; only the owner deletes it.
  */
-import { Router, type Request } from 'express';
+import { Router, type Request, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { validate } from '../http/validate';
 import type { Allow } from '../policies';
@@ -11,15 +11,16 @@ import { readClaimCheckBody, type ClaimChecks } from '../services/claim-checks';
 
 const tokenParams = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{16,64}$/, 'a saved-check token from a share link') });
 
-export function claimCheckRoutes(allow: Allow, claims: ClaimChecks, origin: (req: Request) => string): Router {
+/** `limit`: the per-address limit on claim checks (run or saved: each reads, searches and computes). */
+export function claimCheckRoutes(allow: Allow, claims: ClaimChecks, origin: (req: Request) => string, limit: RequestHandler): Router {
   const r = Router();
 
-  r.post('/claim-checks', allow('claimChecks.run'), async (req, res) => {
-    res.json(await claims.run(readClaimCheckBody(req.body), origin(req)));
+  r.post('/claim-checks', allow('claimChecks.run'), limit, async (req, res) => {
+    res.json(await claims.run(readClaimCheckBody(req.body), origin(req), res));
   });
 
-  r.post('/claim-checks/saved', allow('claimChecks.save'), async (req, res) => {
-    res.status(201).json({ saved: await claims.save(req.user!, readClaimCheckBody(req.body), origin(req)) });
+  r.post('/claim-checks/saved', allow('claimChecks.save'), limit, async (req, res) => {
+    res.status(201).json({ saved: await claims.save(req.user!, readClaimCheckBody(req.body), origin(req), res) });
   });
 
   r.get('/claim-checks/saved', allow('claimChecks.listMine'), async (req, res) => {

@@ -1,12 +1,13 @@
 /** Worksheets over HTTP: the starter worksheets, and evaluation of any worksheet with given values. */
 import { Router } from 'express';
 import { z } from 'zod';
-import { evaluateWorksheetWithKit } from '../../shared/compute';
+import { computeFor } from '../compute/pool';
 import { quantityTextSchema, worksheetSchema } from '../../shared/worksheet/schema';
 import { HttpError } from '../http/errors';
 import { validate } from '../http/validate';
 import type { Allow } from '../policies';
 import { starterWorksheets } from '../services/worksheets';
+import type { ComputeRouteDeps } from './checks';
 
 export const evaluateRequestSchema = z
   .object({
@@ -15,7 +16,7 @@ export const evaluateRequestSchema = z
   })
   .strict();
 
-export function worksheetRoutes(allow: Allow): Router {
+export function worksheetRoutes(allow: Allow, { compute, limit }: ComputeRouteDeps): Router {
   const r = Router();
 
   r.get('/worksheets', allow('worksheets.list'), (_req, res) => {
@@ -30,9 +31,10 @@ export function worksheetRoutes(allow: Allow): Router {
     res.json({ worksheet: ws });
   });
 
-  r.post('/worksheets/evaluate', allow('worksheets.evaluate'), (req, res) => {
+  r.post('/worksheets/evaluate', allow('worksheets.evaluate'), limit, async (req, res) => {
     const { worksheet, values } = validate(evaluateRequestSchema, req.body ?? {}, 'body');
-    res.json(evaluateWorksheetWithKit(worksheet, values));
+    // In a worker thread, with a hard time limit: a legal worksheet can take many seconds.
+    res.json(await computeFor(res, compute, { kind: 'worksheet', worksheet, values }));
   });
   return r;
 }

@@ -5,12 +5,10 @@
  * adds the search index, the entry versions being cited, and the table of saved checks.
  */
 import crypto from 'node:crypto';
+import type { Response } from 'express';
 import type { Sequelize } from 'sequelize';
 import { z } from 'zod';
-import { readFigure } from '../../shared/claims/figures';
-import { buildParagraphs, type ParagraphEntry } from '../../shared/claims/paragraph';
-import { runClaimChecks, signalledClasses } from '../../shared/claims/plan';
-import { extractFigures } from '../../shared/claims/reader';
+import type { ParagraphEntry } from '../../shared/claims/paragraph';
 import {
   CLAIM_FIGURES_MAX,
   CLAIM_TEXT_MAX,
@@ -19,14 +17,13 @@ import {
   PARAGRAPH_VARIANTS,
   type ClaimCheckResult,
   type ClaimMatch,
-  type Figure,
   type FigureInput,
   type SavedClaimCheckDto,
   type SavedClaimCheckSummaryDto,
 } from '../../shared/claims/types';
 import { CITATION_STYLES, type CitationStyle, type CslItem } from '../../shared/entries/citations';
-import { QuantityError } from '../../shared/worksheet/quantity';
-import { fieldsError, HttpError } from '../http/errors';
+import { computeFor, type ComputePool } from '../compute/pool';
+import { HttpError } from '../http/errors';
 import { validate } from '../http/validate';
 import { SavedClaimCheck, type User } from '../models';
 import { citedItem, permalink } from '../routes/entries';
@@ -81,32 +78,26 @@ export interface ClaimChecksDeps {
   sequelize: Sequelize;
   index: SearchIndex;
   entries: Entries;
+  /** The worker threads that read the text and run the checks (issue 13). */
+  compute: ComputePool;
 }
 
 export class ClaimChecks {
   constructor(private readonly deps: ClaimChecksDeps) {}
 
-  /** Figures from the reader's list (each checked, 400 naming the one that fails), or from the text. */
-  private figures(input: ClaimCheckInput): Figure[] {
-    if (!input.figures) return extractFigures(input.text);
-    const fields: Record<string, string> = {};
-    const out: Figure[] = [];
-    input.figures.forEach((f, i) => {
-      try {
-        out.push(readFigure(f as FigureInput, `f${i + 1}`));
-      } catch (err) {
-        if (!(err instanceof QuantityError)) throw err;
-        fields[`body.figures.${i}.quantity`] = err.message;
-      }
+  /**
+   * Runs the check. Reading the figures (from the reader's list, each checked, 400 naming the one
+   * that fails, or from the text) and running the checks happen in the compute pool's worker
+   * threads (`res` gets Retry-After when its queue is full); matching runs here, on the index.
+   */
+  async run(input: ClaimCheckInput, origin: string, res: Response): Promise<ClaimCheckResult> {
+    const { figures, signalled } = await computeFor(res, this.deps.compute, {
+      kind: 'claimRead',
+      text: input.text,
+      ...(input.figures ? { figures: input.figures as FigureInput[] } : {}),
     });
-    if (Object.keys(fields).length) throw fieldsError('invalid_figure', fields);
-    return out;
-  }
-
-  async run(input: ClaimCheckInput, origin: string): Promise<ClaimCheckResult> {
-    const figures = this.figures(input);
     await this.deps.index.ready();
-    const hits = matchClaim(this.deps.index, input.text, { classes: signalledClasses(figures, input.text) });
+    const hits = matchClaim(this.deps.index, input.text, { classes: signalled });
     const cited: (ParagraphEntry | null)[] = await Promise.all(
       hits.map(async (h): Promise<ParagraphEntry | null> => {
         const { slug, version: n } = h.entry;
@@ -132,10 +123,16 @@ export class ClaimChecks {
     );
     const entries = cited.filter((e): e is ParagraphEntry => e !== null);
     const classes = hits.filter((h) => entries.some((e) => e.match.slug === h.entry.slug)).map((h) => h.entry.mechanismClass).filter((c): c is string => c !== null);
-    const { checks, needs, notes } = runClaimChecks(figures, { text: input.text, classes });
+    const { checks, needs, notes, paragraphs } = await computeFor(res, this.deps.compute, {
+      kind: 'claimPlan',
+      text: input.text,
+      figures,
+      classes,
+      entries: entries.slice(0, PARAGRAPH_ENTRIES),
+      style: input.style,
+    });
     if (!figures.length) notes.unshift('No figures with units were found in the text; add them by hand to run the checks.');
     if (!entries.length) notes.unshift('No entry of the library matched this text closely.');
-    const paragraphs = buildParagraphs({ entries: entries.slice(0, PARAGRAPH_ENTRIES), checks, needs, figures, text: input.text, style: input.style });
     return {
       style: input.style,
       variant: input.variant,
@@ -163,8 +160,8 @@ export class ClaimChecks {
     };
   }
 
-  async save(owner: User, input: ClaimCheckInput, origin: string): Promise<SavedClaimCheckDto> {
-    const result = await this.run(input, origin);
+  async save(owner: User, input: ClaimCheckInput, origin: string, res: Response): Promise<SavedClaimCheckDto> {
+    const result = await this.run(input, origin, res);
     const row = await this.deps.sequelize.transaction((transaction) =>
       SavedClaimCheck.create(
         {

@@ -40,10 +40,11 @@ const entries = ['entries', 'entry_laws', 'entry_versions'];
 const claimChecks = ['saved_claim_checks'];
 const submissions = ['attachments', 'submission_entries', 'submission_events', 'submissions'];
 const synonyms = ['synonym_groups', 'synonym_phrases'];
+const rateLimits = ['rate_limits'];
 
 it('applies every migration, rolls all back, and applies them again', async () => {
   expect(await migrateUp(t.sequelize)).toEqual(migrations.map((m) => m.name));
-  expect(await tables()).toEqual([...taxonomy, ...accounts, ...entries, ...claimChecks, ...submissions, ...synonyms].sort());
+  expect(await tables()).toEqual([...taxonomy, ...accounts, ...entries, ...claimChecks, ...submissions, ...synonyms, ...rateLimits].sort());
   expect(await migrateUp(t.sequelize)).toEqual([]);
   // The migrations after 0006 first, all at once, then the earlier ones one by one with their tables.
   const later = migrations.slice(migrations.findIndex((m) => m.name === '0006-synonyms') + 1).map((m) => m.name);

@@ -5,6 +5,7 @@ import * as m0003 from './0003-entries';
 import * as m0004 from './0004-claim-checks';
 import * as m0005 from './0005-submissions';
 import * as m0006 from './0006-synonyms';
+import * as m0007 from './0007-rate-limits';
 import * as m0008 from './0008-audit-append-only';
 
 export const migrations = [
@@ -14,5 +15,6 @@ export const migrations = [
   { name: '0004-claim-checks', ...m0004 },
   { name: '0005-submissions', ...m0005 },
   { name: '0006-synonyms', ...m0006 },
+  { name: '0007-rate-limits', ...m0007 },
   { name: '0008-audit-append-only', ...m0008 },
 ];
