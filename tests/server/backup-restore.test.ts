@@ -220,7 +220,8 @@ describe('backup and restore', () => {
     expect(Object.keys(restored.tables).sort()).toEqual(Object.keys(source.tables).sort());
     for (const t of Object.keys(source.tables)) expect({ t, ...restored.tables[t] }).toEqual({ t, ...source.tables[t] });
     expect(restored.triggers).toEqual(source.triggers);
-    expect(source.triggers.length).toBe(2); // the published-version guards of migration 0003
+    // The published-version guards of migration 0003 and the audit log's of 0008.
+    expect(source.triggers.length).toBe(4);
 
     // Every attachment file (and its metadata file) has the same bytes.
     const was = filesOf(sourceUploads);
