@@ -41,7 +41,8 @@ export const DEFAULT_RATE_LIMITS: RateLimits = {
   submitAccount: { limit: 20, windowMs: minutes(60) },
   submitAddress: { limit: 60, windowMs: minutes(60) },
   // Worksheet evaluations and check runs over the API (issue 13; the screens compute in the browser).
-  compute: { limit: 120, windowMs: minutes(1) },
+  // Each job ended at the time limit costs a worker thread, which takes seconds of CPU to replace.
+  compute: { limit: 60, windowMs: minutes(1) },
   // Claim checks, run or saved: each reads a text, searches the library and runs checks.
   claimCheck: { limit: 20, windowMs: minutes(1) },
 };

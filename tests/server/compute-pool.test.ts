@@ -1,0 +1,177 @@
+/**
+ * The compute pool (issue 13, item 1) under jest: computations run in worker threads that load our
+ * TypeScript with tsx; a job over the wall-clock limit is ended (422) and the pool goes on; a full
+ * queue answers 503 with Retry-After; a pool that cannot start answers 503 and computes nothing on
+ * the main thread; and health checks and searches keep answering while four clients hammer the
+ * slowest legal worksheet. No timed assertions: how fast they answer is `npm run bench`'s figure.
+ */
+import fs from 'node:fs';
+import type http from 'node:http';
+import os from 'node:os';
+import path from 'node:path';
+import request from 'supertest';
+import type { AppLocals } from '../../server/app';
+import { startTestApp, type TestApp } from '../support/app';
+
+jest.setTimeout(240_000);
+
+/**
+ * The slowest legal worksheet we found: 60 steps (the schema's most), each the product of 20
+ * copies of the step before, so that each step raises the units' exponents twentyfold. The
+ * evaluator's own budget is checked only between steps, and one such step runs inside mathjs for
+ * many seconds (about 30 s for the whole sheet on the development machine, measured, uncapped).
+ */
+export function slowWorksheet() {
+  const steps = [{ name: 's0', label: 's0', expression: 'x' }];
+  for (let i = 1; i < 60; i++) steps.push({ name: `s${i}`, label: `s${i}`, expression: Array(20).fill(`s${i - 1}`).join(' * ') });
+  return { name: 'slow-chain', title: 'A slow chain', inputs: [{ name: 'x', label: 'x', unit: 'm', default: '1.0001 m' }], steps };
+}
+
+// F = P / c for 1 kW: 3.3356 µN (c exact, BIPM SI Brochure, 9th ed., 2019, Table 1).
+const quick = {
+  worksheet: {
+    name: 'quick',
+    title: 'Quick',
+    inputs: [{ name: 'P', label: 'P', unit: 'W', default: '1 kW' }],
+    steps: [{ name: 'F', label: 'F', expression: 'P / c', unit: 'uN' }],
+  },
+};
+const F_1kW = 1000 / 299_792_458;
+
+const evaluate = (target: Parameters<typeof request>[0], body: object) => request(target).post('/api/worksheets/evaluate').send(body);
+const pool = (h: TestApp) => (h.app.locals as unknown as AppLocals).compute;
+
+describe('a pool with a 1 s limit per job', () => {
+  let h: TestApp;
+  let server: http.Server;
+  beforeAll(async () => {
+    h = await startTestApp({ starterEntries: true, searchRefreshMs: 0, compute: { timeoutMs: 1000, threads: 1, queueMax: 16 } });
+    server = h.app.listen(0, '127.0.0.1');
+    await pool(h).ready();
+  });
+  afterAll(async () => {
+    await new Promise((r) => server?.close(r));
+    await h?.close();
+  });
+
+  it('computes in a worker thread, not on the main thread', async () => {
+    expect(pool(h).opts.inline).toBe(false);
+    expect(pool(h).startError).toBeNull();
+    const res = await evaluate(server, quick).expect(200);
+    expect(res.body.steps[0].value.si).toBeCloseTo(F_1kW, 18);
+  });
+
+  it('ends a job over the limit with 422 in our error shape, and computes the next one', async () => {
+    const res = await evaluate(server, { worksheet: slowWorksheet() });
+    expect(res.status).toBe(422);
+    expect(res.body).toEqual({ error: { code: 'computation_too_long', message: expect.stringMatching(/^The computation took longer than 1 s and was stopped\. Use fewer steps/) } });
+    // The worker was ended; a new one takes the next job.
+    const next = await evaluate(server, quick).expect(200);
+    expect(next.body.steps[0].value.si).toBeCloseTo(F_1kW, 18);
+  });
+
+  it('answers health checks and searches while four clients hammer the slowest legal worksheet', async () => {
+    let hammering = true;
+    // Each job ended at the limit costs its thread, and a new one loads for seconds: one job per client keeps the test short.
+    const hammer = async () => (await evaluate(server, { worksheet: slowWorksheet() })).status;
+    const clients = Promise.all([hammer(), hammer(), hammer(), hammer()]).finally(() => {
+      hammering = false;
+    });
+    const health: number[] = [];
+    const search: number[] = [];
+    const reads = (async () => {
+      while (hammering) {
+        health.push((await request(server).get('/api/health')).status);
+        search.push((await request(server).get('/api/search').query({ q: 'propellant-free thrust' })).status);
+      }
+    })();
+    const hammered = await clients;
+    await reads;
+    // Every slow job was ended at the limit (422) or, with the queue full, refused (503); none ran on.
+    expect(hammered).toHaveLength(4);
+    for (const s of hammered) expect([422, 503]).toContain(s);
+    expect(hammered).toContain(422);
+    // Four jobs of at least 1 s each on one thread: the reads went on meanwhile, every one answered.
+    expect(health.length).toBeGreaterThanOrEqual(4);
+    expect(new Set(health)).toEqual(new Set([200]));
+    expect(new Set(search)).toEqual(new Set([200]));
+  });
+});
+
+describe('a full queue', () => {
+  let h: TestApp;
+  let server: http.Server;
+  beforeAll(async () => {
+    h = await startTestApp({ demoAccounts: false, compute: { timeoutMs: 1000, threads: 1, queueMax: 1 } });
+    server = h.app.listen(0, '127.0.0.1');
+    await pool(h).ready();
+  });
+  afterAll(async () => {
+    await new Promise((r) => server?.close(r));
+    await h?.close();
+  });
+
+  it('answers 503 with Retry-After and a message in our shape when one job runs and one waits', async () => {
+    const all = await Promise.all([0, 1, 2, 3].map(() => evaluate(server, { worksheet: slowWorksheet() })));
+    const busy = all.filter((r) => r.status === 503);
+    // At most one job waits: of four sent at once, at least two are refused.
+    expect(busy.length).toBeGreaterThanOrEqual(2);
+    for (const r of busy) {
+      expect(r.body).toEqual({ error: { code: 'compute_busy', message: expect.stringMatching(/^The server is busy with other computations .* Try again in \d+ seconds?\.$/) } });
+      expect(Number(r.headers['retry-after'])).toBeGreaterThanOrEqual(1);
+    }
+    for (const r of all.filter((x) => x.status !== 503)) expect(r.status).toBe(422);
+  });
+});
+
+describe('a pool that cannot start', () => {
+  let h: TestApp;
+  let dir: string;
+  beforeAll(async () => {
+    dir = fs.mkdtempSync(path.join(os.tmpdir(), 'cw-broken-worker-'));
+    const filename = path.join(dir, 'worker.mjs');
+    fs.writeFileSync(filename, "throw new Error('this worker cannot load');\n");
+    h = await startTestApp({ demoAccounts: false, compute: { filename, threads: 1 } });
+    await pool(h).ready();
+  });
+  afterAll(async () => {
+    await h?.close();
+    fs.rmSync(dir, { recursive: true, force: true });
+  });
+
+  it('answers 503 and does not compute on the main thread instead', async () => {
+    expect(pool(h).startError?.message).toMatch(/this worker cannot load/);
+    const res = await evaluate(h.app, quick);
+    expect(res.status).toBe(503);
+    expect(res.body).toEqual({ error: { code: 'compute_unavailable', message: expect.stringMatching(/worker threads could not start/) } });
+    const check = await request(h.app).post('/api/checks/photon-bound').send({ inputs: { F_claimed: '3 uN', P: '1 kW' } });
+    expect(check.status).toBe(503);
+  });
+});
+
+describe('the claim check and the check kit', () => {
+  let h: TestApp;
+  beforeAll(async () => {
+    h = await startTestApp({ demoAccounts: false, compute: { threads: 1, timeoutMs: 5000 } });
+  });
+  afterAll(() => h?.close());
+
+  it('read figures and run checks in the pool, with 4xx for bad input as before', async () => {
+    // Invented claim text. 0.2 lbf = 0.889644 N (NIST SP 811, 2008, Appendix B.8).
+    const res = await request(h.app).post('/api/claim-checks').send({ text: 'An invented sealed cavity gives 0.2 lbf of thrust from 1.5 kW with no propellant.' }).expect(200);
+    expect(res.body.figures.find((f: { kind: string }) => f.kind === 'thrust').si).toBeCloseTo(0.45359237 * 9.80665 * 0.2, 9);
+    expect(res.body.checks.map((c: { check: string }) => c.check)).toContain('photon-bound');
+    const bad = await request(h.app).post('/api/claim-checks').send({ text: 'x', figures: [{ kind: 'thrust', quantity: '2 kWh' }] }).expect(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['body.figures.0.quantity']);
+    const wrong = await request(h.app).post('/api/checks/photon-bound').send({ inputs: { F_claimed: '3 kWh', P: '1 kW' } }).expect(400);
+    expect(Object.keys(wrong.body.error.fields)).toEqual(['body.inputs.F_claimed']);
+  });
+
+  it('answers 503 once the app has closed its pool, and the pool ends its threads', async () => {
+    const compute = pool(h);
+    await compute.close();
+    const res = await evaluate(h.app, quick);
+    expect(res.status).toBe(503);
+    expect(res.body.error.code).toBe('compute_unavailable');
+  });
+});
