@@ -153,21 +153,21 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     kind: 'speed',
     unit: 'km/s',
     symbols: ['km/s', 'km s^-1', 'km s⁻¹', 'km·s⁻¹'],
-    words: ['kilometre per second', 'kilometres per second', 'kilometer per second', 'kilometers per second', 'km per second', 'km a second', 'kilometres a second'],
+    words: ['kilometre per second', 'kilometres per second', 'kilometer per second', 'kilometers per second', 'km per second', 'km a second', 'kilometres a second', 'kilometers a second'],
   },
   {
     kind: 'speed',
     unit: 'km/h',
     symbols: ['km/h', 'km/hr', 'kph', 'km h^-1', 'km h⁻¹'],
-    words: ['kilometre per hour', 'kilometres per hour', 'kilometer per hour', 'kilometers per hour', 'km per hour', 'km an hour'],
+    words: ['kilometre per hour', 'kilometres per hour', 'kilometer per hour', 'kilometers per hour', 'km per hour', 'km an hour', 'kilometres an hour', 'kilometers an hour'],
   },
-  { kind: 'speed', unit: 'mi/h', symbols: ['mph', 'MPH', 'mi/h', 'mi/hr'], words: ['mile per hour', 'miles per hour'] },
-  { kind: 'speed', unit: 'mi/s', symbols: ['mi/s'], words: ['mile per second', 'miles per second'] },
+  { kind: 'speed', unit: 'mi/h', symbols: ['mph', 'MPH', 'mi/h', 'mi/hr'], words: ['mile per hour', 'miles per hour', 'miles an hour', 'mile an hour'] },
+  { kind: 'speed', unit: 'mi/s', symbols: ['mi/s'], words: ['mile per second', 'miles per second', 'miles a second', 'mile a second'] },
   // The light-year: 9 460 730 472 580 800 m exactly (IAU 2012 Resolution B2 with the Julian year, as mathjs has none).
   { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 3600, words: ['light-year per hour', 'light-years per hour', 'light years per hour', 'lightyears per hour'] },
   { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 86400, words: ['light-year per day', 'light-years per day', 'light years per day', 'lightyears per day'] },
   { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 31557600, words: ['light-year per year', 'light-years per year', 'light years per year', 'lightyears per year'] },
-  { kind: 'speed', unit: 'ft/s', symbols: ['ft/s', 'ft/sec', 'fps', 'ft s^-1', 'ft s⁻¹'], words: ['foot per second', 'feet per second'] },
+  { kind: 'speed', unit: 'ft/s', symbols: ['ft/s', 'ft/sec', 'fps', 'ft s^-1', 'ft s⁻¹'], words: ['foot per second', 'feet per second', 'feet a second'] },
   { kind: 'speed', unit: 'cm/s', symbols: ['cm/s', 'cm s^-1', 'cm s⁻¹'], words: ['centimetre per second', 'centimetres per second', 'centimeter per second', 'centimeters per second'] },
   { kind: 'speed', unit: 'mm/s', symbols: ['mm/s'], words: ['millimetre per second', 'millimetres per second', 'millimeter per second', 'millimeters per second'] },
   {
@@ -285,6 +285,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
     after: [
       'surface(?: water| layer)?', 'source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor', 'receiver', 'absorber', 'heater head', 'hot plate', 'hot junction',
       'loop', 'tank', 'radiators?', '(?:turbine|compressor) inlet', 'firing', 'combustion', 'hot gas', 'heater head', 'collector', 'hot end',
+      '(?:as|for|is|being) (?:the |its |our |a )?(?:hot|warm|hotter|warmer|heat) (?:side|end|source|reservoir|bath)',
     ],
   },
   {
@@ -296,7 +297,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
       'well water', 'groundwater', 'borehole', 'winter', 'bottom', 'lower', 'rejects? heat (?:to|at)', 'reject(?:s|ed|ing)?', 'cooled to', 'chilled to',
       'cool(?:s|ed|ing)? (?:\\w+ )?to', 'keeps? (?:\\w+ )?at', 'frozen',
     ],
-    after: ['deep(?:er)? (?:water|layer)', 'sink', 'ambient', 'borehole', 'brine', 'ground loop', 'ground water', 'groundwater', 'well water', 'chilled water', 'cold water', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater', 'cold side', 'air', 'outdoor', 'ground'],
+    after: ['deep(?:er)? (?:water|layer)', 'sink', 'ambient', 'borehole', 'brine', 'ground loop', 'ground water', 'groundwater', 'well water', 'chilled water', 'cold water', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater', 'cold side', 'air', 'outdoor', 'ground', '(?:as|for|is|being) (?:the |its |our |a )?(?:cold|cool|colder|cooler) (?:side|end|sink|reservoir|bath)'],
   },
 ];
 
@@ -358,7 +359,7 @@ export const HEAT_PUMP_WORDS = [
   'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:mov(?:es?|ing|ed)|pump(?:s|ing|ed)?|lift(?:s|ing|ed)?) heat',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
-export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini-?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?'];
+export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini-?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?', '(?:window|portable|room|wall|ducted|rooftop|car|central) (?:AC|A/C)', 'A/C', 'air ?cons?', 'aircons?'];
 
 /** Words that make a temperature a difference: before ("ΔT of 20 K") or after ("a 20 K difference"). */
 export const DIFFERENCE_BEFORE = [

@@ -68,6 +68,8 @@ export const CHECK_LAW: Record<CheckName, string> = {
  * A rule of thumb (common practice, no source).
  */
 export const LIGHT_SPEED_FROM = 100_000;
+/** From 1 km/s, a speed said of a craft itself (not an exhaust or a speed change) is also checked: no wind, train or runner goes so fast. Common practice, no source. */
+export const SPACE_SPEED_FROM = 1_000;
 
 /** What the planner knows beyond the figures: the text, and the classes of the entries it matched. */
 export interface PlanContext {
@@ -126,7 +128,7 @@ const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:(?:is|are|was|were|being)[^\S\n]+)?(?:
 /** Boiler efficiencies on the net (lower) calorific value may exceed 100 % by convention. */
 const NET_CALORIFIC_RE = /(?<!\p{L})(?:condensing|net (?:CV|calorific|heating)|LHV|lower heating value|lower calorific)(?!\p{L})/iu;
 /** A machine that moves heat is said to: cooling words name a fridge or chiller the text may only mention as a load. */
-const COOLING_ACTION_RE = /(?<!\p{L})(?:(?:removes?|extracts?|pumps?|draws?|takes?|moves?|lifts?|rejects?)(?: \S+){0,3} (?:of )?heat|cooling (?:capacity|power|output|load|duty|COP)|refrigeration (?:capacity|effect)|cooling COP)(?!\p{L})/iu;
+const COOLING_ACTION_RE = /(?<!\p{L})(?:(?:removes?|extracts?|pumps?|draws?|takes?|moves?|lifts?|rejects?)(?: \S+){0,3} (?:of )?heat|cooling (?:capacity|power|output|load|duty|COP)|refrigeration (?:capacity|effect)|cooling COP|(?:of|for) (?:cooling|refrigeration)(?! (?:water|fans?|fluids?|oil|air|towers?|jackets?|loops?|circuits?)))(?!\p{L})/iu;
 
 /** What the words of the text (and the matched classes) say about the device. */
 export interface Signals {
@@ -578,7 +580,9 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
   }
   const signalSpeeds = speeds.filter((f) => !noSignal(f));
   const fastest = signalSpeeds.filter((f) => f.role !== 'delta-v' || f.si >= C_LIGHT).sort((a, b) => b.si - a.si)[0] ?? largest(signalSpeeds);
-  if (fastest && (fastest.upper?.si ?? fastest.si) >= LIGHT_SPEED_FROM) {
+  // (A craft's own speed from 1 km/s, where the text is about a speed and not a rocket's budget: "a probe at 17 km/s".)
+  const speedFrom = fastest && fastest.role === null && !plans.some((p) => p.check === 'rocket-equation') ? SPACE_SPEED_FROM : LIGHT_SPEED_FROM;
+  if (fastest && (fastest.upper?.si ?? fastest.si) >= speedFrom) {
     plans.push({
       check: 'light-speed',
       uses: [fastest],

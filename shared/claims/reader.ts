@@ -281,6 +281,12 @@ function cleanNumber(m: RegExpExecArray): string {
 
 /** "2.5a", "350ma" glued to the number, as forum posts write amperes (never spaced: "a" is the article). */
 const GLUED_AMPERE_RE = /(m?)a(?![\p{L}\p{N}_])/uy;
+/** "water at 20C", "110F outside", as forum posts write them: a temperature where the sentence speaks of one. */
+const GLUED_TEMPERATURE_RE = /([CF])(?![\p{L}\p{N}_/'’-])/uy;
+const GLUED_CELSIUS: UnitForm = { kind: 'temperature', unit: 'degC', ambiguous: true };
+const GLUED_FAHRENHEIT: UnitForm = { kind: 'temperature', unit: 'degF', ambiguous: true };
+/** Words of a battery's charge rate ("charges at 2C") or a capacitance, which a glued C or F may be. */
+const NOT_GLUED_TEMPERATURE_RE = /(?<!\p{L})(?:charg\w*|discharg\w*|C-?rates?|rate|batter(?:y|ies)|cells?|capacit\w*|supercap\w*|farads?|coulombs?|ultracap\w*)(?!\p{L})/iu;
 
 function unitAt(text: string, at: number): { form: UnitForm; end: number } | null {
   GLUED_AMPERE_RE.lastIndex = at;
@@ -291,6 +297,11 @@ function unitAt(text: string, at: number): { form: UnitForm; end: number } | nul
   if (amp) {
     const form = SYMBOLS.get(symbolKey(amp[1] ? 'mA' : 'A'));
     if (form) return { form, end: at + amp[0].length };
+  }
+  GLUED_TEMPERATURE_RE.lastIndex = at;
+  const glued = /\d$/.test(text.slice(Math.max(0, at - 1), at)) ? GLUED_TEMPERATURE_RE.exec(text) : null;
+  if (glued && !NOT_GLUED_TEMPERATURE_RE.test(sentenceAround(text, at, at + 1))) {
+    return { form: glued[1] === 'C' ? GLUED_CELSIUS : GLUED_FAHRENHEIT, end: at + glued[0].length };
   }
   SYMBOL_RE.lastIndex = at;
   const s = SYMBOL_RE.exec(text);
@@ -360,8 +371,9 @@ const SPEED_OF_LIGHT: UnitForm = { kind: 'speed', unit: 'm/s', factor: C_M_PER_S
 
 const WORD_NUMBER_HINT = /(?<!\p{L})(?:billion|million|quarter|third|tenth|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|sixteen|seventeen|eighteen|nineteen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|thousand|half|dozen|a quarter)(?!\p{L})/iu;
 
-const FRACTION_WORDS_RE = /(?<!\p{L})(half|a quarter|one quarter|three quarters|a third|one third|two thirds|a tenth|one tenth|a hundred|a thousand|a million|a billion|a trillion)(?:[^\S\n]+of)?(?:[^\S\n]+an?)?(?=[^\S\n]+\p{L}|-\p{L})/giu;
+const FRACTION_WORDS_RE = /(?<!\p{L})(half a dozen|half|a quarter|one quarter|three quarters|a third|one third|two thirds|a tenth|one tenth|a dozen|a hundred|a thousand|a million|a billion|a trillion)(?:[^\S\n]+of)?(?:[^\S\n]+an?)?(?=[^\S\n]+\p{L}|-\p{L})/giu;
 const FRACTION_VALUE: Record<string, number> = {
+  'half a dozen': 6, 'a dozen': 12,
   half: 0.5, 'a quarter': 0.25, 'one quarter': 0.25, 'three quarters': 0.75, 'a third': 1 / 3, 'one third': 1 / 3, 'two thirds': 2 / 3,
   'a tenth': 0.1, 'one tenth': 0.1, 'a hundred': 100, 'a thousand': 1000, 'a million': 1e6, 'a billion': 1e9, 'a trillion': 1e12,
 };
@@ -394,8 +406,20 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
     out.push({ start: m.index!, end, value });
   }
+  // "four and a half," where compromise stops at "four and a".
+  for (const m of text.matchAll(AND_A_HALF_RE)) {
+    const whole = SMALL_NUMBER_WORDS.indexOf(m[1].toLowerCase());
+    if (whole < 0) continue;
+    const end = m.index! + m[0].length;
+    for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
+    out.push({ start: m.index!, end, value: whole + (m[2].toLowerCase() === 'half' ? 0.5 : 0.25) });
+  }
+  out.sort((a, b) => a.start - b.start);
   return out;
 }
+
+const SMALL_NUMBER_WORDS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six', 'seven', 'eight', 'nine', 'ten', 'eleven', 'twelve'];
+const AND_A_HALF_RE = new RegExp(`(?<!\\p{L})(${SMALL_NUMBER_WORDS.join('|')})[^\\S\\n]+and[^\\S\\n]+an?[^\\S\\n]+(half|quarter)(?!\\p{L})`, 'giu');
 
 function tokenize(text: string): NumberToken[] {
   const tokens: NumberToken[] = [];
@@ -659,7 +683,13 @@ function readPercent(text: string, start: number, end: number, floor: number): P
   const qe = QE_BEFORE_RE.exec(before);
   if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };
   PERCENT_OF_INPUT_RE.lastIndex = end;
-  if (PERCENT_OF_INPUT_RE.test(text)) return { kind: 'efficiency', factor: 1, unit: '%' };
+  if (PERCENT_OF_INPUT_RE.test(text)) {
+    // "A heat-pump dryer gives 250 % of its electrical input as heat": a heating COP.
+    if (HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text.replace(HEAT_PUMP_RE, '')) && /(?<!\p{L})(?:heat|warmth|heating)(?!\p{L})/iu.test(sentenceAround(text, start, end))) {
+      return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: "A heat pump's heat out as a percentage of its work in: read as a heating COP." };
+    }
+    return { kind: 'efficiency', factor: 1, unit: '%' };
+  }
   PERCENT_MORE_RE.lastIndex = end;
   if (PERCENT_MORE_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '', more: true };
   if (/(?<!\p{L})(?:output|out|production|yield)[^.;!?\n]{0,40}(?:exceeds?|exceeding|surpass\w*|is higher than|is greater than|beats?|tops?)[^.;!?\n]{0,40}(?:input|consumption|supply)[^.;!?\n]{0,15}?by[^\S\n]*(?:about|some|roughly|nearly|over|fully)?[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 120), start))) {
@@ -879,7 +909,7 @@ function readFigures(text: string, restated: [number, number][]): Figure[] {
         // "at 10 h": a time of day.
         continue;
       } else if (kind === 'temperature' && suffix.form.ambiguous) {
-        assumption = '"Degrees" read as degrees Celsius.';
+        assumption = suffix.form === GLUED_CELSIUS ? '"C" read as degrees Celsius.' : suffix.form === GLUED_FAHRENHEIT ? '"F" read as degrees Fahrenheit.' : '"Degrees" read as degrees Celsius.';
       }
     } else if (suffix?.type === 'percent') {
       const reading = readPercent(text, start, end, floor);
@@ -1149,6 +1179,16 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   }
   // "propellant is 90 % of the vehicle's mass", "90 % propellant by mass": the propellant from a fraction.
   const fraction = PROPELLANT_FRACTION_RE.exec(text);
+  // "puts 3 W into a little cell for 2 hours, and the cell ends up holding 5 Wh": a charging ledger,
+  // what went into the store is the input and what it holds at the end the output.
+  const held = drafts.find((d) => d.kind === 'energy' && ENDS_UP_HOLDING_RE.test(text.slice(Math.max(0, d.start - 40), d.start)));
+  if (held) {
+    const into = drafts.filter((d) => energyLike(d) && d.start < held.start && !d.derived && STORE_INTO_RE.test(text.slice(d.end, d.end + 80)));
+    if (into.length > 0) {
+      held.role = 'out';
+      for (const d of into) d.role = 'in';
+    }
+  }
   const massDrafts = drafts.filter((d) => d.kind === 'mass');
   const whole = massDrafts.length === 1 ? massDrafts[0] : massDrafts.find((d) => d.role === null || d.role === 'wet');
   if (fraction && whole && !massDrafts.some((d) => d !== whole && d.role === 'propellant')) {
@@ -1220,6 +1260,12 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   }
   for (const d of drafts) if (d.kind === 'speed' && d.role === null && (siOf(d) ?? 0) < 299_792_458) d.role = 'delta-v';
 }
+
+/** Before what a store holds at the end of a charge: "the cell ends up holding 5 Wh". */
+const ENDS_UP_HOLDING_RE = /(?<!\p{L})(?:ends?|ended|ending)[^\S\n]+up[^\S\n]+(?:holding|with|storing|containing|at)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere)[^\S\n]+)?$/iu;
+/** After a power or energy put into a store: "3 W into a little cell", "12 kWh into the pack" (not "back into"). */
+const STORE_INTO_RE =
+  /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?into[^\S\n]+(?:(?:a|an|the|its|our|my|their)[^\S\n]+)?(?:[\p{L}\d-]+[^\S\n]+){0,2}?(?:cells?|batter(?:y|ies)|packs?|capacitors?|supercaps?|supercapacitors?|accumulators?|flywheels?)(?!\p{L})/iu;
 
 const typedSi = (si: number, unit: string) => `${Number(si.toPrecision(12))} ${unit}`.trim();
 
