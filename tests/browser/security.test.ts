@@ -50,7 +50,8 @@ async function api(email: string) {
 }
 
 const expectOk = (res: request.Response, status = 200) => {
-  if (res.status !== status) throw new Error(`${res.req?.method} ${res.req?.path}: ${res.status} ${JSON.stringify(res.body).slice(0, 500)}`);
+  const sent = (res as unknown as { req?: { method?: string; path?: string } }).req;
+  if (res.status !== status) throw new Error(`${sent?.method} ${sent?.path}: ${res.status} ${JSON.stringify(res.body).slice(0, 500)}`);
   return res;
 };
 
