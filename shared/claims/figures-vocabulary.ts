@@ -229,7 +229,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'excess',
     before: ['excess', 'surplus', 'extra', 'net gain', 'net surplus', 'anomalous', 'unexplained', 'over-unity', 'overunity', '(?:output|out) exceeds? (?:the |its )?(?:input|consumption|supply) by', 'exceeds? (?:the |its )?(?:input|consumption|supply) by'],
-    after: ['excess', 'surplus', 'extra', 'more(?= than)', 'above(?= (?:the|its) input)', 'in excess', 'net gain'],
+    after: ['excess', 'surplus', 'extra', 'more(?= than)', 'more(?= (?:[\\p{L}-]+ ){1,3}?than (?:that|this|it|what (?:it|they) (?:draws?|takes?|uses?|consumes?|gets?))(?!\\p{L}))', 'above(?= (?:the|its) input)', 'in excess', 'net gain'],
   },
   {
     role: 'in',
@@ -255,7 +255,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     role: 'out',
     before: [
       '(?:loads?|load resistors?|resistors?|dummy loads?|lamps?|heaters?|heating elements?) (?:is |was |are |were )?(?:said to |reported to |measured to )?(?:dissipat\\w*|consum\\w*|absorb\\w*|tak(?:e|es|ing))', '(?:the |its )?(?:batter(?:y|ies)|cells?|capacitors?|water|tank|store|flywheel|load)(?: bank| pack)? (?:accepted|absorbed|received|took up|takes up|stored|gained|was given)', 'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
-      '(?:burns?|burned|burnt|burning) (?:for|to give|to yield|to release)', 'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
+      '(?:burns?|burned|burnt|burning) (?:for|to give|to yield|to release)', '(?:powers?|powered|powering|lights?|lit|lighting|keeps?|kept|drives?|drove|driving) (?:a|an|the|our|my|their|two|three|four|several)', 'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
       '(?:lights?|lighting|lit|powers?|powering|runs?|running|drives?|driving|feeds?|feeding) (?:a|an|the|its|two|three|four|several)? ?(?:[\\w-]+ ){0,4}?(?:taking|drawing|using|consuming|rated at|that (?:take|takes|draw|draws|use|uses|consume|consumes))', 'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'turning (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its) (?:[\\w-]+ ){0,2}(?:batter(?:y|ies)|cells?|capacitors?|accumulators?)(?: (?:bank|pack|stack))?(?: (?:at|with|to))?', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
       'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
@@ -269,7 +269,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
       'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump|phone|device|string|bulb|lamps|wheel|laptop|computer|tablet|appliance|consumer|user|bank|lights?|heating|tank)', 'into the (?:[\\w-]+ )?(?:battery|grid|load|bank|network|mains|store|tank|reservoir|pond|basin)(?: bank)?', 'net(?= (?:output|from|at|to|into|of electricity|electrical)|[,.;]|$)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
       'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the (?:output )?terminals', 'at the shaft', 'of shaft power', 'on its output terminals',
-      'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output'],
+      'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output', 'back(?! (?:in|into|to (?:the|its) (?:input|supply|source)))'],
   },
 ];
 

@@ -751,4 +751,52 @@ describe('more ways claims are written (issue 11)', () => {
     expect(h.filter((x) => x.kind === 'temperature-difference').map((x) => x.si)).toEqual([20]);
     expect(h.find((x) => x.kind === 'temperature' && x.role === 'hot')!.si).toBeCloseTo(308.15, 9);
   });
+  test('forum numbers and units: a dozen, four and a half, miles a second, glued 20C', () => {
+    expect(read('input is a dozen volts at 3 A').find((x) => x.kind === 'voltage')!.si).toBe(12);
+    expect(read('a heat pump with a COP of four and a half, ground at 8 °C').find((x) => x.kind === 'cop')!.si).toBe(4.5);
+    // 1 mi = 1609.344 m exactly (NIST SP 811 (2008), App. B.8).
+    expect(read('the probe would go a million miles a second').find((x) => x.kind === 'speed')!.si).toBeCloseTo(1.609344e9, 3);
+    const t = read('the pond water at 20C as the hot side, the air at 50F');
+    expect(t.map((x) => [x.kind, x.role])).toEqual([['temperature', 'hot'], ['temperature', 'cold']]);
+    // °F → K = (F − 32)·5/9 + 273.15 (NIST SP 811, App. B.9).
+    expect(t.map((x) => x.si)).toEqual([expect.closeTo(293.15, 9), expect.closeTo(283.15, 9)]);
+    // A battery's charge rate is no temperature.
+    expect(read('The pack charges at 2C in a warm room.')).toEqual([]);
+  });
+
+  test('what a store takes and holds in a charge, and holds before it runs a load', () => {
+    const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
+    expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
+      ['in', 3 * 7200],
+      ['out', 5 * 3600], // 1 Wh = 3600 J
+    ]);
+    const discharge = read('The bank holds 50 kJ and it powered a 2 kW heater for five minutes.');
+    expect(discharge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
+      ['in', 50000],
+      ['out', 2000 * 300],
+    ]);
+  });
+
+  test('a percentage of what it draws, and in/out said of a voltage with its current', () => {
+    const f = read('The coil board "returns 140% of what it draws", input is 12 V at 3 A.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual(
+      expect.arrayContaining([
+        ['in', 36],
+        ['out', expect.closeTo(36 * 1.4, 9)],
+      ]),
+    );
+    const g = read('Boost converter: 5 V in at 2 A, 12 V out at 0.75 A.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 10],
+      ['out', 9],
+    ]);
+  });
+
+  test('a weight a propellant-free drive is said to lift is a force', () => {
+    // 1 lb = 0.45359237 kg and g0 = 9.80665 m/s² (NIST SP 811 (2008), App. B.8): 3 lbf = 13.3447 N.
+    const f = read('The saucer model lifts 3 lbs off the scale with no exhaust using 250 watts.');
+    expect(f.find((x) => x.kind === 'thrust')!.si).toBeCloseTo(3 * 4.4482216152605, 6);
+    // A crane's load stays a mass.
+    expect(read('The crane lifts 3 t with a 20 kW motor.').some((x) => x.kind === 'thrust')).toBe(false);
+  });
 });

@@ -181,7 +181,7 @@ const FACTOR_BEFORE_RE =
   /(?<!\p{L})(?:output|out|yield|production)[^.;!?\n]{0,40}(?:exceeds?|exceeding|is (?:higher|greater|larger|more) than|surpass\w*|outstrips?)[^.;!?\n]{0,30}(?:input|consumption|supply)[^.;!?\n]{0,20}by (?:a factor of|a ratio of)(?:[^\S\n]+(?:at least|about|roughly|some|nearly|over))?[^\S\n]*$/iu;
 /** "150 % of its input power", "120 % of the energy supplied": an output as a share of the input. */
 const PERCENT_OF_INPUT_RE =
-  /[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|(?:energy|power) (?:in|supplied|consumed|drawn|fed|put|(?:it|they) (?:receives?|takes?|gets?|draws?|consumes?)|received|taken in)|supply|electrical input)(?!\p{L})/iuy;
+  /[^\S\n]*of[^\S\n]+what[^\S\n]+(?:it|they|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:draws?|takes?|consumes?|uses?|gets?|is (?:given|fed|supplied)|(?:is )?put in|puts? in|pulls?)(?!\p{L})|[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|(?:energy|power) (?:in|supplied|consumed|drawn|fed|put|(?:it|they) (?:receives?|takes?|gets?|draws?|consumes?)|received|taken in)|supply|electrical input)(?!\p{L})/iuy;
 /** "1.3 W for each watt in", "1.3 J back per joule supplied": a gain written with a unit. */
 const GAIN_PER_UNIT_RE =
   /[^\S\n]*(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+)?(?:(?:back|out|returned)[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(?:watt|joule|kWh|kilowatt-hour|unit|W|J)s?(?!\p{L})/iuy;
@@ -517,6 +517,8 @@ interface Draft {
   assumption?: string;
   /** For a temperature difference: which way the other temperature lies ("30 °C below a 25 °C room"). */
   direction?: 'up' | 'down';
+  /** A percentage of the input ("returns 140 % of what it draws"). */
+  ofInput?: boolean;
 }
 
 function suffixKind(s: Suffix): string | null {
@@ -661,7 +663,7 @@ function hedgeBefore(text: string, start: number): FigureHedge | undefined {
 }
 
 /** For "60 % more energy out than in": the percentage is added to 1. */
-type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; unit: string; assumption?: string; more?: boolean; derived?: string } | null;
+type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; unit: string; assumption?: string; more?: boolean; derived?: string; ofInput?: boolean } | null;
 
 /** "60 % more electrical energy out than in", "30 % more power than it draws": a gain of 1 + p. */
 const PERCENT_MORE_RE =
@@ -683,12 +685,12 @@ function readPercent(text: string, start: number, end: number, floor: number): P
   const qe = QE_BEFORE_RE.exec(before);
   if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };
   PERCENT_OF_INPUT_RE.lastIndex = end;
-  if (PERCENT_OF_INPUT_RE.test(text)) {
+  if (PERCENT_OF_INPUT_RE.test(text) && !QE_BEFORE_RE.test(before)) {
     // "A heat-pump dryer gives 250 % of its electrical input as heat": a heating COP.
     if (HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text.replace(HEAT_PUMP_RE, '')) && /(?<!\p{L})(?:heat|warmth|heating)(?!\p{L})/iu.test(sentenceAround(text, start, end))) {
       return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: "A heat pump's heat out as a percentage of its work in: read as a heating COP." };
     }
-    return { kind: 'efficiency', factor: 1, unit: '%' };
+    return { kind: 'efficiency', factor: 1, unit: '%', ofInput: true };
   }
   PERCENT_MORE_RE.lastIndex = end;
   if (PERCENT_MORE_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '', more: true };
@@ -748,7 +750,11 @@ function bareKind(text: string, start: number, end: number, floor: number): { ki
   if (GAIN_BEFORE_RE.test(text.slice(windowStart(text, start, floor, 160), start))) return { kind: 'efficiency', derived: 'units out for each unit in' };
   TIMES_AFTER_RE.lastIndex = end;
   if (TIMES_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
-  if (/^[^\S\n]*(?:times|x|×)(?!\p{L})/iu.test(text.slice(end, end + 8)) && TIMES_BEFORE_RE.test(before) && /input|consum|draw|put in|supplied|takes|uses/i.test(text.slice(end, end + 60))) {
+  if (
+    /^[^\S\n]*(?:times|x|×)(?!\p{L})/iu.test(text.slice(end, end + 8)) &&
+    TIMES_BEFORE_RE.test(before) &&
+    (/input|consum|draw|put in|supplied|takes|uses/i.test(text.slice(end, end + 60)) || /^[^\S\n]*(?:times|x|×)[^\S\n]+(?:that|this)(?!\p{L})/iu.test(text.slice(end, end + 16)))
+  ) {
     return { kind: 'efficiency', derived: 'output as a multiple of the input' };
   }
   return null;
@@ -891,6 +897,7 @@ function readFigures(text: string, restated: [number, number][]): Figure[] {
     let derived: string | undefined;
     let assumption: string | undefined;
     let direction: Draft['direction'];
+    let ofInput: boolean | undefined;
     if (suffix?.type === 'unit') {
       const q = unitQuantity(t.num, suffix);
       kind = q.kind;
@@ -917,6 +924,7 @@ function readFigures(text: string, restated: [number, number][]): Figure[] {
         kind = reading.kind;
         role = reading.role;
         assumption = reading.assumption;
+        ofInput = reading.ofInput;
         const q = (n: string) =>
           reading.more
             ? String(Number((1 + Number(n) * reading.factor).toPrecision(15)))
@@ -1000,7 +1008,7 @@ function readFigures(text: string, restated: [number, number][]): Figure[] {
         /* left to the final pass */
       }
     }
-    drafts.push({ start, end, kind, quantity, upper, role, hedge, derived, assumption, direction });
+    drafts.push({ start, end, kind, quantity, upper, role, hedge, derived, assumption, direction, ofInput });
     floor = Math.max(end, afterRoleEnd);
   }
 
@@ -1020,7 +1028,9 @@ function readFigures(text: string, restated: [number, number][]): Figure[] {
       }
       continue;
     }
-    if (!/^[^\S\n]+(?:the|its|as much|as many|more)[^.;!?\n]{0,60}(?:input|consum\w*|draws?|uses?|takes?|supplied|put in|fed|it gets|goes in)/iu.test(after)) continue;
+    // ("draws 200 W and … puts out three times that": a multiple of the input just stated.)
+    const ofThat = /^[^\S\n]+(?:that|this)(?!\p{L})/iu.test(after) && drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in' && d.end <= m!.index && d.start >= windowStart(text, m!.index, 0, 400));
+    if (!ofThat && !/^[^\S\n]+(?:the|its|as much|as many|more)[^.;!?\n]{0,60}(?:input|consum\w*|draws?|uses?|takes?|supplied|put in|fed|it gets|goes in)/iu.test(after)) continue;
     if (drafts.some((d) => d.start <= m!.index && m!.index < d.end)) continue;
     const value = MULTIPLE_VALUE[m[1].toLowerCase().replace('-', '')];
     if (!value) continue;
@@ -1079,7 +1089,7 @@ function readFigures(text: string, restated: [number, number][]): Figure[] {
 const ABBREVIATIONS_RE = /(?<!\p{L})(?:max|min|approx|nom|avg|ca|cf|e\.g|i\.e|no|vs|incl|excl|resp|est|typ|cont|spec|ref|fig|eq)\./giu;
 
 /** Devices whose "COP" is an output-over-input ratio, not a heat pump's. */
-const ELECTRICAL_GAIN_RE = /(?<!\p{L})(?:circuits?|coils?|generators?|alternators?|motors?|batter(?:y|ies)|electrical energy|electricity out|electrical output|magnets?|over-?unity|free energy|zero-?point|ZPE|self-charging|self-running|transformers?|capacitors?|resonators?|electrolys\w*|HHO|oxyhydrogen)(?!\p{L})/iu;
+const ELECTRICAL_GAIN_RE = /(?<!\p{L})(?:circuits?|coils?|generators?|alternators?|motors?|batter(?:y|ies)|electrical energy|electricity out|electrical output|magnets?|over-?unity|free energy|zero-?point|ZPE|self-charging|self-running|transformers?|capacitors?|resonators?|electrolys\w*|HHO|oxyhydrogen|palladium|deuterium|deuteride|LENR|cold fusion|low-energy nuclear|nickel[–-]hydrogen|excess heat)(?!\p{L})/iu;
 
 /** A propellant mass fraction: "propellant is 90 % of the mass", "90 % propellant by mass", "a propellant fraction of 85 %". */
 const PROPELLANT_FRACTION_RE =
@@ -1189,6 +1199,13 @@ function rolesByContext(text: string, drafts: Draft[]): void {
       for (const d of into) d.role = 'in';
     }
   }
+  // "The supercap bank holds 50 kJ … it powered a 2 kW heater for five minutes": what a store holds
+  // before it runs a load is what it has to give.
+  const stored = drafts.filter((d) => d.kind === 'energy' && !d.derived && d.role !== 'in' && STORE_HOLDS_RE.test(text.slice(Math.max(0, d.start - 30), d.start)));
+  if (stored.length === 1 && !held && !drafts.some((d) => energyLike(d) && d.role === 'in')) {
+    const later = drafts.filter((d) => energyLike(d) && d !== stored[0] && d.start > stored[0].end && d.role === 'out');
+    if (later.length > 0) stored[0].role = 'in';
+  }
   const massDrafts = drafts.filter((d) => d.kind === 'mass');
   const whole = massDrafts.length === 1 ? massDrafts[0] : massDrafts.find((d) => d.role === null || d.role === 'wet');
   if (fraction && whole && !massDrafts.some((d) => d !== whole && d.role === 'propellant')) {
@@ -1261,6 +1278,12 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   for (const d of drafts) if (d.kind === 'speed' && d.role === null && (siOf(d) ?? 0) < 299_792_458) d.role = 'delta-v';
 }
 
+/** A verb of lifting right before a mass: "lifts 3 lbs", "lifted its own 2 kg frame", "levitates a 40 g disc". */
+const LIFTS_BEFORE_RE = /(?<!\p{L})(?:lifts?|lifted|lifting|levitat(?:es?|ed|ing)|raises?|raised|hoists?|hoisted|holds? up|held up|hold(?:s|ing)? aloft|carr(?:y|ies|ied) aloft|hover(?:s|ed|ing)? with)[^\S\n]+(?:(?:its|their|his|her|our|my|the|a|an)[^\S\n]+)?(?:own[^\S\n]+)?(?:(?:about|some|roughly|nearly|over|up to|almost)[^\S\n]+)?$/iu;
+/** Machines that lift loads lawfully by pushing on the ground (their lifted mass is no thrust). */
+const HOIST_RE = /(?<!\p{L})(?:cranes?|hoists?|winch(?:es)?|forklifts?|lift trucks?|elevators?|lifts? (?:shaft|car)|jacks?|pulleys?|block and tackle|levers?|hydraulic|pistons?|arms?|robots?|weightlift\w*|athletes?|balloons?|airships?|blimps?|buoyan\w*|helium|hydrogen|lifters?|ion(?:ic)?[- ]wind|corona|EHD|electrohydrodynamic|drones?|quadcopters?|multicopters?|propellers?|rotors?|helicopters?)(?!\p{L})/iu;
+/** Before the energy a store holds: "the bank holds 50 kJ", "stores 13.5 kWh", "a capacity of 10 kWh". */
+const STORE_HOLDS_RE = /(?<!\p{L})(?:holds?|holding|stores?|stored|storing|contains?|capacity(?:[^\S\n]+of)?|rated(?:[^\S\n]+at)?|packs?)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere|up to)[^\S\n]+)?$/iu;
 /** Before what a store holds at the end of a charge: "the cell ends up holding 5 Wh". */
 const ENDS_UP_HOLDING_RE = /(?<!\p{L})(?:ends?|ended|ending)[^\S\n]+up[^\S\n]+(?:holding|with|storing|containing|at)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere)[^\S\n]+)?$/iu;
 /** After a power or energy put into a store: "3 W into a little cell", "12 kWh into the pack" (not "back into"). */
@@ -1340,9 +1363,12 @@ function relate(text: string, drafts: Draft[]): void {
     // The voltage nearest the current in its sentence ("steps 230 V down to 12 V and delivers 5 A": 12 V).
     const candidates = drafts.filter((d) => d.kind === 'voltage' && sameClause(d, cur) && Math.abs(d.start - cur.start) < 120);
     // "0.9 A at 24 V": the voltage said with the current, right after or right before it; else the nearest.
+    // ("5 V in at 2 A, 12 V out at 0.75 A": a comma parts two pairs.)
     const volt =
-      candidates.find((d) => d.start >= cur.end && /^[^\S\n]*(?:at|@|from|on|×|x|\*|\/|,)?[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
-      candidates.find((d) => d.end <= cur.start && /^[^\S\n]*(?:at|@|,|×|x|\*|\/)?[^\S\n]*$/iu.test(text.slice(d.end, cur.start))) ??
+      candidates.find((d) => d.start >= cur.end && /^[^\S\n]*(?:at|@|from|on|×|x|\*|\/)?[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
+      candidates.find((d) => d.end <= cur.start && /^[^\S\n]*(?:(?:in|out|input|output|DC|AC)[^\S\n]+)?(?:at|@|×|x|\*|\/)?[^\S\n]*$/iu.test(text.slice(d.end, cur.start))) ??
+      candidates.find((d) => d.start >= cur.end && /^[^\S\n]*,[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
+      candidates.find((d) => d.end <= cur.start && /^[^\S\n]*,[^\S\n]*$/iu.test(text.slice(d.end, cur.start))) ??
       candidates.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0];
     if (!volt) continue;
     const i = siOf(cur);
@@ -1356,7 +1382,9 @@ function relate(text: string, drafts: Draft[]): void {
     const last = first === cur ? volt : cur;
     // The role: the words around the current or the voltage ("draws 3 A" → in, "delivers 10 A" → out).
     // Words between the two ("12 V supply drawing 2.5 A") are the closest; then those around the pair.
-    const between = /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
+    // "5 V in at 2 A", "12 V out at 0.75 A": in or out said right after either of the two.
+    const said = [volt, cur].map((d) => /^[^\S\n]*(in|out|input|output)(?!\p{L})/iu.exec(text.slice(d.end, d.end + 12))).find((x) => x !== null);
+    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
     const wordsRole = between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
     const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null);
     const role: FigureRole = wordsRole ?? (others.length && others.every((d) => d.role === 'in') ? 'out' : null);
@@ -1398,13 +1426,15 @@ function relate(text: string, drafts: Draft[]): void {
     if (d.kind !== 'mass') continue;
     const before = text.slice(Math.max(0, d.start - 60), d.start);
     const after = text.slice(d.end, d.end + 30);
-    if (/(?:weight|reading|reads|scale|balance)[^.;!?\n]{0,40}(?:by|of)[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) || /^[^\S\n]*(?:lighter|heavier|less weight|of (?:lift|weight loss|apparent weight)|off (?:its|the) (?:weight|reading))/iu.test(after)) {
+    // "lifts 3 lbs off the scale", "lifted its own 2 kg frame": a weight held up, for a drive (not a rocket's or a crane's load).
+    const lifted = LIFTS_BEFORE_RE.test(before) && !ROCKET_RE.test(text) && !HOIST_RE.test(text);
+    if (lifted || /(?:weight|reading|reads|scale|balance)[^.;!?\n]{0,40}(?:by|of)[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) || /^[^\S\n]*(?:lighter|heavier|less weight|of (?:lift|weight loss|apparent weight)|off (?:its|the) (?:weight|reading))/iu.test(after)) {
       const kg = siOf(d);
       if (kg === null) continue;
       d.kind = 'thrust';
       d.quantity = `${Number(kg.toPrecision(15))} kgf`;
       d.role = null;
-      d.derived = 'a change of weight on a scale, as a force (kilograms-force)';
+      d.derived = lifted ? 'a weight held up, as a force (kilograms-force)' : 'a change of weight on a scale, as a force (kilograms-force)';
     }
   }
 
@@ -1448,11 +1478,12 @@ function relate(text: string, drafts: Draft[]): void {
   // "25 % more power than its 2 kW input", "five times the 20 W it takes in": with the input stated,
   // the excess and the output as figures.
   const GAINS = ['output = input + the percentage more', 'output as a multiple of the input', 'units out for each unit in'];
-  const more = drafts.find((d) => d.kind === 'efficiency' && d.derived !== undefined && GAINS.includes(d.derived));
+  // ("returns 140 % of what it draws": a percentage of the input above 100 %.)
+  const more = drafts.find((d) => d.kind === 'efficiency' && ((d.derived !== undefined && GAINS.includes(d.derived)) || (d.ofInput && (siOf(d) ?? 0) > 1)));
   if (more) {
     const g = siOf(more);
     for (const kind of ['power', 'energy'] as const) {
-      const inputs = drafts.filter((d) => d.kind === kind && d.role === 'in' && !d.derived && sameClause(d, more));
+      const inputs = drafts.filter((d) => d.kind === kind && d.role === 'in' && (!d.derived || d.derived.startsWith('power = current × voltage')) && sameClause(d, more));
       if (g === null || g <= 1 || inputs.length !== 1 || drafts.some((d) => d.kind === kind && (d.role === 'out' || d.role === 'excess'))) continue;
       const input = inputs[0];
       const n = siOf(input);
