@@ -85,6 +85,8 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'power', unit: 'W', symbols: ['W', 'We', 'Wt', 'Wth', 'w'], words: ['watt', 'watts'] },
   { kind: 'power', unit: 'uW', symbols: micro('W'), words: ['microwatt', 'microwatts'] },
   { kind: 'power', unit: 'mW', symbols: ['mW'], words: ['milliwatt', 'milliwatts'] },
+  { kind: 'power', unit: 'nW', symbols: ['nW'], words: ['nanowatt', 'nanowatts'] },
+  { kind: 'power', unit: 'pW', symbols: ['pW'], words: ['picowatt', 'picowatts'] },
   { kind: 'power', unit: 'kW', symbols: ['kW', 'KW', 'kWe', 'kWt', 'kWth', 'kw'], words: ['kilowatt', 'kilowatts'] },
   { kind: 'power', unit: 'MW', symbols: ['MW', 'MWe', 'MWt', 'MWth'], words: ['megawatt', 'megawatts'] },
   { kind: 'power', unit: 'GW', symbols: ['GW', 'GWe', 'GWt', 'GWth'], words: ['gigawatt', 'gigawatts'] },
@@ -106,6 +108,8 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   // Energy
   { kind: 'energy', unit: 'J', symbols: ['J'], words: ['joule', 'joules'] },
   { kind: 'energy', unit: 'mJ', symbols: ['mJ'], words: ['millijoule', 'millijoules'] },
+  { kind: 'energy', unit: 'uJ', symbols: micro('J'), words: ['microjoule', 'microjoules'] },
+  { kind: 'energy', unit: 'nJ', symbols: ['nJ'], words: ['nanojoule', 'nanojoules'] },
   { kind: 'energy', unit: 'kJ', symbols: ['kJ'], words: ['kilojoule', 'kilojoules'] },
   { kind: 'energy', unit: 'MJ', symbols: ['MJ'], words: ['megajoule', 'megajoules'] },
   { kind: 'energy', unit: 'GJ', symbols: ['GJ'], words: ['gigajoule', 'gigajoules'] },
@@ -238,7 +242,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
-      '(?:for|per) (?:every|each)', 'put in', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'from (?:about|around|roughly|some|nearly|approximately|approx\\.|ca\\.|~)', 'for (?:only |just |a mere |about |roughly )?(?=$)', '(?<![\\w-])charge(?=[^\\S\\n]*$)', 'comes? from (?:its|the|a|an)', 'powered by (?:its|the|a|an)', 'pumped by (?:its|the|a|an)', 'driven by', 'driven with', 'excited by', 'excited with',
+      '(?:for|per) (?:every|each)', 'put in', '(?:electricity|electric(?:al)?(?: power| energy)?|power|energy|work|fuel|gas|drive) in[:=]?(?=[^\\S\\n]*$)', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'from (?:about|around|roughly|some|nearly|approximately|approx\\.|ca\\.|~)', 'for (?:only |just |a mere |about |roughly )?(?=$)', '(?<![\\w-])charge(?=[^\\S\\n]*$)', 'comes? from (?:its|the|a|an)', 'powered by (?:its|the|a|an)', 'pumped by (?:its|the|a|an)', 'driven by', 'driven with', 'excited by', 'excited with',
       'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
@@ -255,7 +259,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     role: 'out',
     before: [
       '(?:loads?|load resistors?|resistors?|dummy loads?|lamps?|heaters?|heating elements?) (?:is |was |are |were )?(?:said to |reported to |measured to )?(?:dissipat\\w*|consum\\w*|absorb\\w*|tak(?:e|es|ing))', '(?:the |its )?(?:batter(?:y|ies)|cells?|capacitors?|water|tank|store|flywheel|load)(?: bank| pack)? (?:accepted|absorbed|received|took up|takes up|stored|gained|was given)', 'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
-      '(?:burns?|burned|burnt|burning) (?:for|to give|to yield|to release)', '(?:powers?|powered|powering|lights?|lit|lighting|keeps?|kept|drives?|drove|driving) (?:a|an|the|our|my|their|two|three|four|several)', 'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
+      '(?:burns?|burned|burnt|burning) (?:for|to give|to yield|to release)', '(?:electricity|electric(?:al)?(?: power| energy)?|power|energy|work|heat|light|shaft power) out[:=]?(?=[^\\S\\n]*$)', '(?:powers?|powered|powering|lights?|lit|lighting|keeps?|kept|drives?|drove|driving) (?:a|an|the|our|my|their|two|three|four|several)', 'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
       'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
       '(?:lights?|lighting|lit|powers?|powering|runs?|running|drives?|driving|feeds?|feeding) (?:a|an|the|its|two|three|four|several)? ?(?:[\\w-]+ ){0,4}?(?:taking|drawing|using|consuming|rated at|that (?:take|takes|draw|draws|use|uses|consume|consumes))', 'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'turning (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its) (?:[\\w-]+ ){0,2}(?:batter(?:y|ies)|cells?|capacitors?|accumulators?)(?: (?:bank|pack|stack))?(?: (?:at|with|to))?', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
       'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
@@ -268,8 +272,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?<!(?:of|from|off|by|on)[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+|a[^\\S\\n]+|an[^\\S\\n]+)?)(?:(?!(?:from|off|of|to|by|at|in|on|into|onto|with|for|the|a|an|its|their|our|and|or|per)\\b)[\\w-]+ ){0,2}(?:power plants?|power stations?|plants?|(?:coal|steam|gas|nuclear|geothermal|hydro|wind|solar|CCGT|generating) units?|gensets?|generating sets?|generators?|turbines?)(?! (?:draws?|takes?|consumes?|uses?|needs?|is fed|was fed|runs? on))',
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
       'to the (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump|phone|device|string|bulb|lamps|wheel|laptop|computer|tablet|appliance|consumer|user|bank|lights?|heating|tank)', 'into the (?:[\\w-]+ )?(?:battery|grid|load|bank|network|mains|store|tank|reservoir|pond|basin)(?: bank)?', 'net(?= (?:output|from|at|to|into|of electricity|electrical)|[,.;]|$)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
-      'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the (?:output )?terminals', 'at the shaft', 'of shaft power', 'on its output terminals',
-      'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output', 'back(?! (?:in|into|to (?:the|its) (?:input|supply|source)))'],
+      'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at the (?:output )?terminals', 'at the (?:crank|output |drive |propeller |main )?shaft', 'at the (?:wheels?|axles?|flywheel|crank)', 'of shaft power', 'on its output terminals',
+      'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output', '(?:reached|reaches|reach|went to|goes to|got to|arrived at|made it to) (?:the |its )?(?:wheels?|shaft|axles?|load|output|grid|battery|house|motor)', 'back(?! (?:in|into|to (?:the|its) (?:input|supply|source)))'],
   },
 ];
 

@@ -799,4 +799,30 @@ describe('more ways claims are written (issue 11)', () => {
     // A crane's load stays a mass.
     expect(read('The crane lifts 3 t with a 20 kW motor.').some((x) => x.kind === 'thrust')).toBe(false);
   });
+  test('data-sheet lines: units in a column label, labels before the figure, small prefixes', () => {
+    const f = read('Drive FD-2 — Thrust [mN]: 12.3(4); Power [W]: 250; P_in / W: 1.5E+3; P_out / W: 1.62e3.');
+    expect(f.map((x) => [x.kind, x.si])).toEqual([
+      ['thrust', expect.closeTo(0.0119, 12)],
+      ['power', 250],
+      ['power', 1500],
+      ['power', 1620],
+    ]);
+    expect(f.slice(2).map((x) => x.role)).toEqual(['in', 'out']);
+    const g = read('electricity in 1.5 kW, heat out 4.8 kW; a cell gives 100 nW; a 40 pW detector.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual(
+      expect.arrayContaining([
+        ['in', 1500],
+        ['out', 4800],
+        [expect.anything(), expect.closeTo(1e-7, 20)],
+        [null, expect.closeTo(4e-11, 22)],
+      ]),
+    );
+  });
+
+  test("a heat pump's source is its cold side and its sink the warm one; fuel burnt for electricity", () => {
+    const f = read('Heat pump: heating COP 4 with the air source at 2 °C and the sink water at 45 °C.');
+    expect(f.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['cold', 'hot']);
+    const g = read('Diesel genset: 640 MJ of fuel (18 L) for 60 kWh of electricity over 10 h.');
+    expect(g.filter((x) => x.kind === 'energy').map((x) => x.role)).toEqual(['in', 'out']);
+  });
 });

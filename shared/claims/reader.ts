@@ -421,6 +421,9 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
 const SMALL_NUMBER_WORDS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six', 'seven', 'eight', 'nine', 'ten', 'eleven', 'twelve'];
 const AND_A_HALF_RE = new RegExp(`(?<!\\p{L})(${SMALL_NUMBER_WORDS.join('|')})[^\\S\\n]+and[^\\S\\n]+an?[^\\S\\n]+(half|quarter)(?!\\p{L})`, 'giu');
 
+/** A unit given in a label just before a number: "[mN]:", "(kW) =", "/ W:". */
+const HEADER_UNIT_RE = /(?:[\[(][^\S\n]*([^\s\])]{1,8})[^\S\n]*[\])]|(?<![\p{L}\d])[\p{L}_{}]+[^\S\n]*\/[^\S\n]*([^\s:=\/]{1,8}))[^\S\n]*[:=][^\S\n]*$/u;
+
 function tokenize(text: string): NumberToken[] {
   const tokens: NumberToken[] = [];
   NUMBER_RE.lastIndex = 0;
@@ -440,7 +443,15 @@ function tokenize(text: string): NumberToken[] {
         numEnd += mm[0].length;
       }
     }
-    const { suffix, end } = readSuffix(text, numEnd);
+    const read = readSuffix(text, numEnd);
+    let { suffix } = read;
+    const { end } = read;
+    // A unit in a column label: "Thrust [mN]: 12.3", "P_in / W: 1.5E+3", "Power (kW) = 2".
+    if (suffix === null && !words) {
+      const label = HEADER_UNIT_RE.exec(text.slice(Math.max(0, start - 40), start));
+      const u = label ? unitAt(label[1] ?? label[2], 0) : null;
+      if (u && u.end === (label![1] ?? label![2]).length) suffix = { type: 'unit', form: u.form };
+    }
     const before = text.slice(Math.max(0, start - 16), start);
     let skip = LABEL_RE.test(before);
     if (!skip && /^\d{4}$/.test(num) && /^\d{4}$/.test(text.slice(start, numEndRaw)) && numEnd === numEndRaw) {
@@ -566,6 +577,12 @@ const IMMEDIATE_OUT_RE = new RegExp(`(?<!\\p{L})(?:delivers|delivered|produces|p
 
 function roleFromWords(text: string, roles: CompiledRoles, start: number, end: number, floor: number): FigureRole {
   if (roles === ROLES.temperature) {
+    // A heat pump's or fridge's source is its cold side and its sink the warm one (the other way round for an engine).
+    if (HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text)) {
+      const lead = text.slice(Math.max(floor, start - 40), start);
+      if (/(?<!\p{L})(?:heat[^\S\n]+)?sink(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'hot';
+      if (/(?<!\p{L})(?:(?:air|ground|water|brine|heat|outdoor)[- ])?source(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'cold';
+    }
     const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start));
     if (strong) return /^(?:hot|warm|sun|heated)/i.test(strong[1]) ? 'hot' : 'cold';
     // "the heat it draws from 25 °C room air": where the heat comes from is the hot side.
@@ -1161,6 +1178,12 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   for (let i = 0; i + 1 < flowsInto.length; i++) {
     const [a, b] = [flowsInto[i], flowsInto[i + 1]];
     if (a.kind !== b.kind) continue;
+    // "640 MJ of fuel for 60 kWh of electricity": what was burnt, and what it gave.
+    if (/^[^\S\n]*of[^\S\n]+(?:fuel|diesel|petrol|gasoline|coal|hydrogen|wood|biomass|propane|kerosene|natural gas|gas)(?!\p{L})[^.;!?\n]{0,25}?(?<!\p{L})for[^\S\n]+(?:(?:a|an|the|about|some|roughly)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
+      a.role = 'in';
+      b.role = 'out';
+      continue;
+    }
     // "3–5 W of electricity from roughly 100 W of heat": the first came out of the second.
     if (/^[^\S\n]*(?:of[^\S\n]+[\p{L} -]{0,30}?)?[^\S\n]*from[^\S\n]+(?:(?:a|an|the|about|some|roughly|only|just|up to)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
       a.role = 'out';
