@@ -402,7 +402,7 @@ export const PROPELLANT_FREE_WORDS = [
   'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
   'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
   'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', 'expels? no (?:propellant|mass|gas|reaction mass|matter)',
-  '(?:hard |high )?vacuum,? where no (?:ion(?:ic)? wind|air)', 'no ion(?:ic)? wind (?:can|could) (?:form|arise|act)', 'radiating (?:panel|face|surface|plate)', 'thermal emission', '(?:transient )?mass fluctuations?', 'Mach effect', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
+  '(?:hard |high )?vacuum,? where no (?:ion(?:ic)? wind|air)', 'no ion(?:ic)? wind (?:can|could) (?:form|arise|act)', 'radiating (?:panel|face|surface|plate)', 'thermal emission', '(?:transient )?mass[- ]fluctuations?', 'Mach effect', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
   'closed[- ](?:cavity|resonator|system|box|container|frame|vessel|frustum|loop drive)', '(?:hermetically )?sealed', 'enclosed', 'cavity', 'EM ?drive',
   'inertial (?:propulsion|drive|thrust)', 'field propulsion', 'unidirectional (?:force|thrust)', 'net thrust from inside', 'fuel-?less (?:thruster|drive|propulsion)',
   'pushes? (?:itself|against nothing)', 'self-propell\\w*', 'frustum', 'tapered (?:cavity|resonator|copper)',

@@ -825,4 +825,13 @@ describe('more ways claims are written (issue 11)', () => {
     const g = read('Diesel genset: 640 MJ of fuel (18 L) for 60 kWh of electricity over 10 h.');
     expect(g.filter((x) => x.kind === 'energy').map((x) => x.role)).toEqual(['in', 'out']);
   });
+  test("a craft's mass before and after a burn, and a percentage in quotes", () => {
+    const f = read('The first stage has a specific impulse of 311 s and burns from 25 t to 9 t.');
+    expect(f.filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([
+      ['wet', 25000],
+      ['dry', 9000],
+    ]);
+    const g = read('The lab puts its single-junction cell at "about 29 %" efficiency.');
+    expect(g.map((x) => [x.kind, x.si, x.hedge])).toEqual([['efficiency', 0.29, 'about']]);
+  });
 });

@@ -321,3 +321,14 @@ describe('the energy per atom of a metal–hydrogen cell (invented test data)', 
     expect(n.finding).toBe('breaks'); // hundreds of electronvolts per atom: beyond chemistry
   });
 });
+
+describe('the operation named before its energy (issue 11)', () => {
+  test("'each switching event dissipates 1e-18 J at 77 K' runs Landauer's bound", () => {
+    const text = 'Each switching event in the cryogenic chip dissipates 1.0 × 10⁻¹⁸ J at 77 K.';
+    const { checks } = runClaimChecks(extractFigures(text), { text });
+    const c = checks.find((x) => x.check === 'landauer')!;
+    // k_B·T·ln 2 with k_B = 1.380649e-23 J/K exactly (SI Brochure, 9th ed., 2019): 7.3688e-22 J at 77 K.
+    expect(c.outputs.find((o) => o.name === 'E_min')!.si).toBeCloseTo(1.380649e-23 * 77 * Math.LN2, 30);
+    expect(c.finding).toBe('consistent');
+  });
+});

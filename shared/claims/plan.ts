@@ -118,8 +118,10 @@ const EXCESS_HEAT_CELL_RE = /(?<!\p{L})(?:palladium|deuterium|deuteride|LENR|col
 const METAL_RE = /(?<!\p{L})(palladium|nickel|titanium|lithium)(?!\p{L})/iu;
 const MOLAR_MASS: Record<string, number> = { palladium: 106.42, nickel: 58.6934, titanium: 47.867, lithium: 6.94 };
 /** A vehicle said to charge itself. */
-const SELF_CHARGING_VEHICLE_RE = /(?<!\p{L})(?:self-?(?:re)?charging|charges? (?:it|them)sel(?:f|ves)|never needs? (?:to be )?(?:charging|charged|plugging in)|infinite range|unlimited range)(?!\p{L})[^.;!?\n]{0,80}(?<!\p{L})(?:cars?|vehicles?|EVs?|trucks?|lorr(?:y|ies)|bus(?:es)?|scooters?|bikes?)(?!\p{L})|(?<!\p{L})(?:cars?|vehicles?|EVs?|trucks?|bus(?:es)?|scooters?)(?!\p{L})[^.;!?\n]{0,80}(?<!\p{L})(?:self-?(?:re)?charging|charges? itself|recharges? itself|never needs? (?:to be )?(?:charging|charged|plugging in)|infinite range|unlimited range)(?!\p{L})/iu;
+const SELF_CHARGING_VEHICLE_RE = /(?<!\p{L})(?:self-?(?:re)?charging|charges? (?:it|them)sel(?:f|ves)|never needs? (?:to be )?(?:charging|charged|plugging in)|infinite range|unlimited range)(?!\p{L})[^.;!?\n]{0,80}(?<!\p{L})(?:cars?|vehicles?|EVs?|trucks?|lorr(?:y|ies)|bus(?:es)?|scooters?|bikes?|sedans?|saloons?|hatchbacks?|SUVs?|vans?)(?!\p{L})|(?<!\p{L})(?:cars?|vehicles?|EVs?|trucks?|bus(?:es)?|scooters?|sedans?|saloons?|hatchbacks?|SUVs?|vans?)(?!\p{L})[^.;!?\n]{0,80}(?<!\p{L})(?:self-?(?:re)?charging|charges? itself|recharges? itself|never needs? (?:to be )?(?:charging|charged|plugging in)|infinite range|unlimited range)(?!\p{L})/iu;
 /** "… J per bit", "for each bit erased", "per logic operation". */
+/** "Each switching event in the chip dissipates 1e-18 J": the operation named before the energy. */
+const PER_BIT_BEFORE_RE = /(?<!\p{L})(?:each|every|per|a single|one)[^\S\n]+(?:erased[^\S\n]+|logical[^\S\n]+|logic[^\S\n]+)?(?:bit|operation|erasure|switching event|switch|gate operation|logic operation|flip)(?:[^\S\n]+(?:erasure|flip))?(?!\p{L})[^.;!?\n]{0,70}$/iu;
 const PER_BIT_RE = /^[^\S\n]*(?:(?:of energy|of work)[^\S\n]+)?(?:per|for each|for every|each|a)[^\S\n]+(?:erased[^\S\n]+|logical[^\S\n]+|logic[^\S\n]+)?(?:bit|bits|operation|erasure|switching event|gate operation|flip)(?!\p{L})/iu;
 /** An engine said to work on one reservoir: nothing colder to reject heat to. */
 const SINGLE_RESERVOIR_RE = /(?<!\p{L})(?:no (?:cold|colder|cooler) (?:sink|side|reservoir|body|end)|(?:single|one|a single) (?:heat )?reservoir|(?:air|heat|water|sea|ocean|atmosphere|room air|ambient air|ambient heat) alone|nothing colder|without (?:a |any )?(?:cold|colder|cooler) (?:sink|side|reservoir|body))(?!\p{L})/iu;
@@ -685,7 +687,7 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
       ),
     );
   }
-  const perBit = ofKind(figures, 'energy').find((f) => PER_BIT_RE.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)));
+  const perBit = ofKind(figures, 'energy').find((f) => PER_BIT_RE.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)) || PER_BIT_BEFORE_RE.test(text.slice(Math.max(0, (f.start ?? 0) - 90), f.start ?? 0)));
   if (perBit) {
     const temp = temps.length === 1 ? temps[0] : undefined;
     if (temp) {

@@ -692,6 +692,8 @@ const CARNOT_SHARE = 'a share of the Carnot efficiency';
 
 /** What a percentage is, by its context. */
 function readPercent(text: string, start: number, end: number, floor: number): PercentReading {
+  // 'at "about 29 %" efficiency': the words after a closing quote.
+  end += /^["”’'»]*/u.exec(text.slice(end, end + 3))![0].length;
   CARNOT_SHARE_AFTER_RE.lastIndex = end;
   if (CARNOT_SHARE_AFTER_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '', derived: CARNOT_SHARE };
   SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
@@ -894,7 +896,17 @@ function readFigures(text: string, restated: [number, number][]): Figure[] {
           suffixKind(next.suffix) === 'temperature' &&
           tokens.some((o) => o !== t && o !== next && !o.skip && o.suffix?.type === 'unit' && o.suffix.form.kind === 'temperature' && !o.suffix.form.ambiguous && windowStart(text, o.start, 0, 400) === windowStart(text, t.start, 0, 400));
         const dash = /^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start));
+        // "burns from 25 t to 9 t": a craft's mass before and after, not a range.
+        let fallingMass = false;
+        if (suffixKind(next.suffix) === 'mass' && t.suffix?.type === 'unit' && next.suffix?.type === 'unit' && /(?<!\p{L})from[^\S\n]+$/iu.test(text.slice(Math.max(0, t.start - 6), t.start))) {
+          try {
+            fallingMass = parseQuantity(unitQuantity(t.num, t.suffix).quantity, 'kg') > parseQuantity(unitQuantity(next.num, next.suffix).quantity, 'kg');
+          } catch {
+            /* not comparable */
+          }
+        }
         const twoSides =
+          fallingMass ||
           (suffixKind(next.suffix) === 'voltage' && !dash) ||
           (!thirdTemperature && suffixKind(next.suffix) === 'temperature' && !dash && !isDifference(text, t.start, next.end, floor));
         suffix = next.suffix;
@@ -1253,6 +1265,15 @@ function rolesByContext(text: string, drafts: Draft[]): void {
     drafts.some((d) => d.kind === 'specific-impulse' || (d.kind === 'speed' && (d.role === 'exhaust' || d.role === 'delta-v')) || (d.kind === 'mass' && d.role === 'propellant')) ||
     (masses.length > 0 && ROCKET_RE.test(text));
   if (!rocket) return;
+  // "burns from 25 t to 9 t", "goes from 100 t down to 33 t": the mass at the start and at the end.
+  for (let i = 0; i + 1 < masses.length; i++) {
+    const [a, b] = [masses[i], masses[i + 1]];
+    if (!/(?<!\p{L})from[^\S\n]+$/iu.test(text.slice(Math.max(0, a.start - 6), a.start))) continue;
+    if (!/^[^\S\n]*(?:(?:down[^\S\n]+)?to|→|->)[^\S\n]*$/iu.test(text.slice(a.end, b.start))) continue;
+    if ((siOf(a) ?? 0) <= (siOf(b) ?? Infinity)) continue;
+    a.role = 'wet';
+    b.role = 'dry';
+  }
   // A mass in a sentence that speaks of no craft and no propellant ("the test stand weighs 85 kg") is
   // not one of the craft's, when the craft's masses are given elsewhere.
   const craftish = masses.filter((m) => m.role !== null || CRAFT_RE.test(sentenceAround(text, m.start, m.end)));
