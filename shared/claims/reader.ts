@@ -1242,7 +1242,13 @@ function rolesByContext(text: string, drafts: Draft[]): void {
     if (later.length > 0) stored[0].role = 'in';
   }
   const massDrafts = drafts.filter((d) => d.kind === 'mass');
-  const whole = massDrafts.length === 1 ? massDrafts[0] : massDrafts.find((d) => d.role === null || d.role === 'wet');
+  // "The test stand itself weighs 85 kg": a mass of the apparatus, in a sentence that names no craft.
+  for (const m of massDrafts) {
+    const sentence = sentenceAround(text, m.start, m.end);
+    if (m.role === null && APPARATUS_RE.test(sentence) && !CRAFT_RE.test(sentence.replace(APPARATUS_RE, ''))) m.role = 'aside';
+  }
+  const craftMasses = massDrafts.filter((d) => d.role !== 'aside');
+  const whole = craftMasses.length === 1 ? craftMasses[0] : craftMasses.find((d) => d.role === null || d.role === 'wet');
   if (fraction && whole && !massDrafts.some((d) => d !== whole && d.role === 'propellant')) {
     const p = Number(fraction[1] ?? fraction[2] ?? fraction[3]) / 100;
     const m = siOf(whole);
@@ -1263,7 +1269,7 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   const masses = drafts.filter((d) => d.kind === 'mass');
   const rocket =
     drafts.some((d) => d.kind === 'specific-impulse' || (d.kind === 'speed' && (d.role === 'exhaust' || d.role === 'delta-v')) || (d.kind === 'mass' && d.role === 'propellant')) ||
-    (masses.length > 0 && ROCKET_RE.test(text));
+    (masses.some((m) => m.role !== 'aside') && ROCKET_RE.test(text));
   if (!rocket) return;
   // "burns from 25 t to 9 t", "goes from 100 t down to 33 t": the mass at the start and at the end.
   for (let i = 0; i + 1 < masses.length; i++) {
@@ -1322,10 +1328,12 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   for (const d of drafts) if (d.kind === 'speed' && d.role === null && (siOf(d) ?? 0) < 299_792_458) d.role = 'delta-v';
 }
 
+/** The apparatus a device is tested on, whose mass is no craft's. */
+const APPARATUS_RE = /(?<!\p{L})(?:test[- ]stands?|stands?|test rigs?|rigs?|benches|bench|balances?|pendulums?|mounts?|mounting|tables?|jigs?|fixtures?|housings?|enclosures?|vacuum chambers?|chambers?|counterweights?|scales?)(?!\p{L})/iu;
 /** A verb of lifting right before a mass: "lifts 3 lbs", "lifted its own 2 kg frame", "levitates a 40 g disc". */
 const LIFTS_BEFORE_RE = /(?<!\p{L})(?:lifts?|lifted|lifting|levitat(?:es?|ed|ing)|raises?|raised|hoists?|hoisted|holds? up|held up|hold(?:s|ing)? aloft|carr(?:y|ies|ied) aloft|hover(?:s|ed|ing)? with)[^\S\n]+(?:(?:its|their|his|her|our|my|the|a|an)[^\S\n]+)?(?:own[^\S\n]+)?(?:(?:about|some|roughly|nearly|over|up to|almost)[^\S\n]+)?$/iu;
 /** Machines that lift loads lawfully by pushing on the ground (their lifted mass is no thrust). */
-const HOIST_RE = /(?<!\p{L})(?:cranes?|hoists?|winch(?:es)?|forklifts?|lift trucks?|elevators?|lifts? (?:shaft|car)|jacks?|pulleys?|block and tackle|levers?|hydraulic|pistons?|arms?|robots?|weightlift\w*|athletes?|balloons?|airships?|blimps?|buoyan\w*|helium|hydrogen|lifters?|ion(?:ic)?[- ]wind|corona|EHD|electrohydrodynamic|drones?|quadcopters?|multicopters?|propellers?|rotors?|helicopters?)(?!\p{L})/iu;
+const HOIST_RE = /(?<!\p{L})(?:cranes?|hoists?|winch(?:es)?|forklifts?|lift trucks?|elevators?|lifts? (?:shaft|car)|jacks?|pulleys?|block and tackle|levers?|hydraulic|pistons?|arms?|robots?|weightlift\w*|athletes?|balloons?|airships?|blimps?|buoyan\w*|helium|hydrogen|lifters?|ion(?:ic)?[- ]wind|corona|EHD|electrohydrodynamic|drones?|quadcopters?|multicopters?|propellers?|rotor blades?|helicopters?)(?!\p{L})/iu;
 /** Before the energy a store holds: "the bank holds 50 kJ", "stores 13.5 kWh", "a capacity of 10 kWh". */
 const STORE_HOLDS_RE = /(?<!\p{L})(?:holds?|holding|stores?|stored|storing|contains?|capacity(?:[^\S\n]+of)?|rated(?:[^\S\n]+at)?|packs?)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere|up to)[^\S\n]+)?$/iu;
 /** Before what a store holds at the end of a charge: "the cell ends up holding 5 Wh". */
