@@ -834,4 +834,16 @@ describe('more ways claims are written (issue 11)', () => {
     const g = read('The lab puts its single-junction cell at "about 29 %" efficiency.');
     expect(g.map((x) => [x.kind, x.si, x.hedge])).toEqual([['efficiency', 0.29, 'about']]);
   });
+  test('a percentage spelled out is read as the sign is; list dashes and quoted claims', () => {
+    const f = read('In cooling mode the chiller is rated 420 percent efficient while holding a 7 °C loop against 35 °C air.');
+    expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'cooling', si: 4.2 });
+    const g = read('- Twenty watts in, sixty watts out, says the inventor.');
+    expect(g.map((x) => [x.role, x.si])).toEqual([
+      ['in', 20],
+      ['out', 60],
+    ]);
+    const h = read('The claim reads: "A probe of 500 kg fuelled and 450 kg empty, at Isp 220 s, gains 2 km/s."');
+    expect(h.filter((x) => x.kind === 'mass').map((x) => x.role)).toEqual(['wet', 'dry']);
+    expect(h.some((x) => x.kind === 'thrust')).toBe(false);
+  });
 });

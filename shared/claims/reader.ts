@@ -387,7 +387,9 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
   const doc = nlp(Array.from(text, (c) => (c.toLowerCase().length === c.length ? c.toLowerCase() : c)).join(''));
   const found = doc.numbers().json({ offset: true }) as { text: string; offset: { start: number; length: number }; number?: { num?: number } }[];
   for (const n of found) {
-    const raw = text.slice(n.offset.start, n.offset.start + n.offset.length);
+    // "- twenty watts" (a list item): compromise counts the dash in the length, not in the start.
+    const dash = /^[-–—][^\S\n]*/u.exec(n.text)?.[0].length ?? 0;
+    const raw = text.slice(n.offset.start, n.offset.start + n.offset.length - dash);
     if (/\d/.test(raw)) continue; // digits are read by NUMBER_RE
     const value = n.number?.num;
     if (typeof value !== 'number' || !Number.isFinite(value)) continue;
@@ -725,12 +727,12 @@ function readPercent(text: string, start: number, end: number, floor: number): P
   // engine named, with a temperature in the same sentence, is its efficiency.
   const engineSaid =
     /(?<!\p{L})(?:engines?|turbines?|Stirling|thermoelectric (?:generators?|modules?)|TEGs?|power (?:plants?|stations?|cycles?)|(?:Rankine|Brayton|ORC|steam|Kalina) cycles?)[^\S\n]*[,:–—-]?[^\S\n]*(?:(?:at|of|reaches|reached|achieves|achieved|claims|claimed|with|about|around|roughly|only|just)[^\S\n]+)*$/iu.test(before) &&
-    /°|kelvin|(?<!\p{L})K(?!\p{L})/u.test(sentenceAround(text, start, end));
+    /°|kelvin|degrees|Celsius|Fahrenheit|(?<!\p{L})K(?!\p{L})/iu.test(sentenceAround(text, start, end));
   const efficiency = after || engineSaid || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1]));
   if (!efficiency) return null;
   // The machine is named anywhere in the claim ("Had our air-to-water unit fitted. … '350 % efficient'").
   const sentence = text;
-  const value = Number(text.slice(start, end).replace(/[^\d.,eE+-]/g, '').replace(',', '.'));
+  const value = Number((/^[\d.,]+/.exec(text.slice(start, end))?.[0] ?? '').replace(',', '.'));
   if (HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
     if (!(value <= 100)) return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump said to be more than 100 % efficient: read as a heating COP (heat delivered over work put in).' };
     return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump\'s percentage read as a heating COP (heat delivered over work put in).' };
@@ -1480,7 +1482,7 @@ function relate(text: string, drafts: Draft[]): void {
     const after = text.slice(d.end, d.end + 30);
     // "lifts 3 lbs off the scale", "lifted its own 2 kg frame": a weight held up, for a drive (not a rocket's or a crane's load).
     const lifted = LIFTS_BEFORE_RE.test(before) && !ROCKET_RE.test(text) && !HOIST_RE.test(text);
-    if (lifted || /(?:weight|reading|reads|scale|balance)[^.;!?\n]{0,40}(?:by|of)[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) || /^[^\S\n]*(?:lighter|heavier|less weight|of (?:lift|weight loss|apparent weight)|off (?:its|the) (?:weight|reading))/iu.test(after)) {
+    if (lifted || /(?:weight|reading|reads|scale|balance)[^.;!?\n:"“”]{0,40}(?:by|of)[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) || /^[^\S\n]*(?:lighter|heavier|less weight|of (?:lift|weight loss|apparent weight)|off (?:its|the) (?:weight|reading))/iu.test(after)) {
       const kg = siOf(d);
       if (kg === null) continue;
       d.kind = 'thrust';
