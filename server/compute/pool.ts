@@ -3,10 +3,14 @@
  * a worker thread, so that the event loop stays free for health checks, reads and searches.
  *
  * Why piscina: it is the well-known pool for Node's worker_threads (MIT, engines node >= 20, no
- * dependencies and no install script; its one optional native package only serves `niceIncrement`,
- * which we do not use). It queues, restarts ended threads, and ends the thread that runs a job when
- * the job's AbortSignal fires, which is how a job that runs too long is stopped: a worksheet can
- * legally take many seconds inside one mathjs call, where no cooperative deadline is checked.
+ * dependencies and no install script; its one optional package, @napi-rs/nice, ships prebuilt
+ * binaries and serves `niceIncrement`). It queues, restarts ended threads, and ends the thread that
+ * runs a job when the job's AbortSignal fires, which is how a job that runs too long is stopped: a
+ * worksheet can legally take many seconds inside one mathjs call, where no cooperative deadline is
+ * checked. Node's own Worker would need all of that written here.
+ *
+ * The workers run at a lower CPU priority (nice +10, Linux threads have their own): on a small
+ * machine the main thread, which answers health checks and reads, goes first.
  *
  * - A hard wall-clock limit per job (`timeoutMs`), counted from the moment a worker begins the job
  *   (the worker says so on a MessagePort), not from when it was queued: the thread is ended and the
@@ -94,6 +98,7 @@ export class ComputePool {
       // The same in every host process (tsx under npm start, jest): the worker entry loads tsx itself.
       execArgv: [],
       resourceLimits: { maxOldGenerationSizeMb: this.opts.memoryMb },
+      niceIncrement: 10,
     });
     this.readyPromise = this.pool
       .run({ job: { kind: 'ping' } satisfies ComputeJob })

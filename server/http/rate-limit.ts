@@ -157,8 +157,8 @@ export class MariaDbStore implements Store {
 
 /** Deletes the rows of windows that have ended; returns how many. */
 export async function deleteExpiredRateLimits(sequelize: Sequelize): Promise<number> {
-  const [, meta] = await sequelize.query(`DELETE FROM rate_limits WHERE reset_ms <= ${NOW_MS}`);
-  return Number((meta as { affectedRows?: number } | undefined)?.affectedRows ?? 0);
+  const deleted = await sequelize.query(`DELETE FROM rate_limits WHERE reset_ms <= ${NOW_MS}`, { type: QueryTypes.BULKDELETE });
+  return Number(deleted);
 }
 
 export interface RateLimitersOptions {
