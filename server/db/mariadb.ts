@@ -242,7 +242,8 @@ export class MariaDbServer {
     let exitCode: number | null = null;
     child.once('exit', (code) => {
       exitCode = code ?? -1;
-      this.child = null;
+      // (Only if no newer child was started since: a late exit of the old one must not forget the new.)
+      if (this.child === child) this.child = null;
     });
     const deadline = Date.now() + 60_000;
     while (Date.now() < deadline) {
@@ -281,7 +282,7 @@ export class MariaDbServer {
     const timer = setTimeout(() => child.kill('SIGKILL'), timeoutMs);
     await this.exited;
     clearTimeout(timer);
-    this.child = null;
+    if (this.child === child) this.child = null;
   }
 
   /** Removes everything under baseDir (throwaway instances in tests). */

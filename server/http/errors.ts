@@ -144,7 +144,9 @@ export function errorHandler(log: { error: (obj: unknown, msg?: string) => void 
       res.status(status).json(body(code, message));
       return;
     }
-    if (err?.name?.startsWith?.('Sequelize') && /Connection|Timeout|HostNotReachable|AccessDenied/.test(err.name)) {
+    // (Also a query the server's shutdown cut off: SQLSTATE class 08, connection exception, or a fatal driver error.)
+    const lostConnection = err?.name?.startsWith?.('Sequelize') && (/^08/.test(String(err?.parent?.sqlState ?? err?.original?.sqlState ?? '')) || err?.parent?.fatal === true);
+    if (lostConnection || (err?.name?.startsWith?.('Sequelize') && /Connection|Timeout|HostNotReachable|AccessDenied/.test(err.name))) {
       res.status(503).json(body('db_unavailable', 'The database cannot be reached right now. Try again in a moment.'));
       return;
     }
