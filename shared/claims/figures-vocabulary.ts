@@ -422,7 +422,7 @@ export const PROPELLANT_WORDS = [
   'ground(?:-based)? lasers?', 'laser-pushed', 'beamed (?:power|energy) from', 'tether',
   // Things that push on air or water (lawfully far above P/c).
   '(?:drone|quadcopter|multicopter|multirotor) (?:makers?|motors?|propellers?|rotors?|arms?|props?)', 'quadcopters?', 'multicopters?', 'multirotors?', 'helicopters?',
-  'rotor blades?', 'propellers?', 'outboards?', 'boats?', 'water jets?', '(?:balsa|foil|ion|ionic|corona|EHD|high-voltage)[\\w-]*(?: [\\w-]+)? lifters?',
+  'rotor blades?', 'propellers?', 'props?', '(?:RC|R/C|radio[- ]controlled|model) (?:planes?|aircraft|airplanes?|aeroplanes?|helis?|gliders?|boats?)', '(?:air|aero)planes?', 'aircraft', 'paramotors?', 'hovercraft', 'ducted fans?', 'EDFs?', 'outboards?', 'boats?', 'water jets?', '(?:balsa|foil|ion|ionic|corona|EHD|high-voltage)[\\w-]*(?: [\\w-]+)? lifters?',
   'pushes? (?:on|against) (?:the )?(?:air|water)', 'tractors?', 'wheels? on the ground',
 ];
 
