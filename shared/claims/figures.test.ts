@@ -846,4 +846,9 @@ describe('more ways claims are written (issue 11)', () => {
     expect(h.filter((x) => x.kind === 'mass').map((x) => x.role)).toEqual(['wet', 'dry']);
     expect(h.some((x) => x.kind === 'thrust')).toBe(false);
   });
+  test('a round-trip percentage, and the temperature a machine is rated to work down to', () => {
+    expect(read('I put 13.5 kWh in and got 12.8 kWh back out, so ~95% round trip.').find((x) => x.kind === 'efficiency')!.si).toBeCloseTo(0.95, 12);
+    const f = read('The heat pump delivers 55 °C water from 7 °C air, works down to -20 °C, COP 3.1.');
+    expect(f.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['hot', 'cold', 'aside']);
+  });
 });

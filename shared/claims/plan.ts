@@ -96,7 +96,7 @@ const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|in
 /** Before a speed that is no signal's: a phase velocity, a spot or shadow swept across a screen. */
 const NO_SIGNAL_SPEED_RE = /(?<!\p{L})(?:phase (?:velocity|speed)|phase front|spot|shadow|sweep(?:s|ing)?|apparent (?:velocity|speed|motion)|appears? to (?:move|travel|go|run)|seems? to (?:move|travel|go))(?!\p{L})[^.;!?\n]{0,25}$/iu;
 /** A converter of sunlight to electricity. */
-const SOLAR_CELL_RE = /(?<!\p{L})(?:solar (?:cells?|panels?|modules?|films?|arrays?)|photovoltaic\w*|PV|perovskites?|(?:silicon|GaAs|gallium arsenide|CdTe|CIGS|organic) (?:cells?|films?|modules?)|single-junction|multi-junction|tandem cells?|(?:of|from) (?:plain |the )?sunlight (?:in)?to electricity)(?!\p{L})/iu;
+const SOLAR_CELL_RE = /(?<!\p{L})(?:solar (?:cells?|panels?|modules?|films?|arrays?)|(?:rooftop|roof-?top|home|residential) solar|solar(?:[^\S\n]+[\p{L}-]+){0,3}[^\S\n]*[,:;–—-][^\S\n]*(?:the[^\S\n]+)?(?:panels?|modules?)|PV (?:panels?|modules?|arrays?)|photovoltaic\w*|PV|perovskites?|(?:silicon|GaAs|gallium arsenide|CdTe|CIGS|organic) (?:cells?|films?|modules?)|single-junction|multi-junction|tandem cells?|(?:of|from) (?:plain |the )?sunlight (?:in)?to electricity)(?!\p{L})/iu;
 /** "single-junction", "triple-junction", "a 4-junction cell". */
 const JUNCTIONS_RE = /(?<!\p{L})(single|one|double|dual|two|triple|three|four|five|six|\d{1,2})[- ]junction(?!\p{L})|(?<!\p{L})(tandem)(?!\p{L})/iu;
 const JUNCTION_COUNT: Record<string, number> = { single: 1, one: 1, double: 2, dual: 2, two: 2, tandem: 2, triple: 3, three: 3, four: 4, five: 5, six: 6 };

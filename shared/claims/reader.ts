@@ -149,7 +149,7 @@ const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${a
 const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip)(?!\p{L})([^\d.;!?\n]{0,60})$/iu;
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
-const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)(?!\p{L})/iuy;
+const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)|round[- ]?trip(?:[^\S\n]+efficiency)?)(?!\p{L})/iuy;
 /** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */
 const PERCENT_OF_HEAT_RE =
   /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:[\p{L}-]+[^\S\n]+)?(?:light|radiation|power|energy)|radiant (?:power|energy|heat)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
@@ -1153,7 +1153,8 @@ const TRAVEL_LENGTH: Record<string, number> = { lightyear: 9460730472580800, par
 const TRAVEL_TIME: Record<string, number> = { second: 1, minute: 60, hour: 3600, day: 86400, week: 604800, month: 2629800, year: 31557600 };
 
 /** Words before the temperatures a device is rated for. */
-const OPERATING_RANGE_RE = /(?<!\p{L})(?:operating|operation|storage|ambient|rated|permitted|allowed|working) (?:temperature )?(?:range|temperatures?|limits?|conditions?)(?: (?:of|is|from|between))?[:=]?[^\S\n]*(?:from|between)?[^\S\n]*$/iu;
+const OPERATING_RANGE_RE =
+  /(?<!\p{L})(?:(?:operating|operation|storage|ambient|rated|permitted|allowed|working) (?:temperature )?(?:range|temperatures?|limits?|conditions?)(?: (?:of|is|from|between))?[:=]?[^\S\n]*(?:from|between)?|(?:rated|designed|built|certified|specified|guaranteed|able)? ?(?:to )?(?:keep )?(?:work(?:s|ing)?|run(?:s|ning)?|operat(?:e|es|ing)|function(?:s|ing)?|start(?:s|ing)?) (?:(?:reliably|fine|normally|properly|well) )?(?:down|up) to|(?:rated|certified|specified|good) (?:down|up) to|(?:survives?|withstands?|tolerates?)(?: temperatures?)?(?: (?:down|up) to| of)?)[^\S\n]*$/iu;
 
 /** Words of a time that is not how long the device ran. */
 const NOT_A_RUN_RE =
