@@ -851,4 +851,14 @@ describe('more ways claims are written (issue 11)', () => {
     const f = read('The heat pump delivers 55 °C water from 7 °C air, works down to -20 °C, COP 3.1.');
     expect(f.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['hot', 'cold', 'aside']);
   });
+  test('the room a test ran in is set aside when the sides are given across sentences', () => {
+    const f = read('The heat pump supplies 55 °C water; with a 50 K lift over its source, the maker quotes a heating COP of 4.6. The room was held at 21 °C for the whole series.');
+    expect(f.filter((x) => x.kind === 'temperature' && !x.derived).map((x) => [x.si, x.role])).toEqual([
+      [expect.closeTo(328.15, 9), 'hot'],
+      [expect.closeTo(294.15, 9), 'aside'],
+    ]);
+    // A side said alone in its own sentence stays ("Heat is rejected to cooling water at 20 °C.").
+    const g = read('A Stirling engine converts heat supplied at 90 °C into work with an efficiency of 38 %. Heat is rejected to cooling water at 20 °C.');
+    expect(g.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['hot', 'cold']);
+  });
 });

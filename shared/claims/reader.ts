@@ -1331,6 +1331,10 @@ function rolesByContext(text: string, drafts: Draft[]): void {
   for (const d of drafts) if (d.kind === 'speed' && d.role === null && (siOf(d) ?? 0) < 299_792_458) d.role = 'delta-v';
 }
 
+/** Words of the place a test was run ("the room was held at 21 °C", "lab temperature 22 °C"). */
+const SURROUNDINGS_RE = /(?<!\p{L})(?:room|lab|laboratory|test hall|workshop|building|office|test cell|weather|day|night)(?!\p{L})/iu;
+/** Words that make a lone temperature one of the machine's sides, not its surroundings. */
+const MACHINE_SIDE_RE = /(?<!\p{L})(?:source|sink|sides?|hot|cold|warm|cool|reservoirs?|ends?|junctions?|plates?|faces?|inlet|outlet|flow|supply|delivery|evaporat\w*|condens\w*|cabinet|compartment|chamber|tank|boiler|emitter|heater|collector|brine|ground|outdoor|outside|exhaust|turbine|T_?[ch]|deep|surface)(?!\p{L})/iu;
 /** The apparatus a device is tested on, whose mass is no craft's. */
 const APPARATUS_RE = /(?<!\p{L})(?:test[- ]stands?|stands?|test rigs?|rigs?|benches|bench|balances?|pendulums?|mounts?|mounting|tables?|jigs?|fixtures?|housings?|enclosures?|vacuum chambers?|chambers?|counterweights?|scales?)(?!\p{L})/iu;
 /** A verb of lifting right before a mass: "lifts 3 lbs", "lifted its own 2 kg frame", "levitates a 40 g disc". */
@@ -1642,6 +1646,22 @@ function relate(text: string, drafts: Draft[]): void {
       if (sides.has(k) || otherSide(t)) continue;
       const company = drafts.filter((d) => d !== t && sentenceOf(d) === k && (d.kind === 'temperature' || d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop'));
       if (company.length === 0) t.role = 'aside';
+    }
+  } else {
+    // The sides given across sentences ("supplies 55 °C water; with a 50 K lift over its source, …"):
+    // a temperature alone in a sentence of its own that names no side of the machine ("The room was
+    // held at 21 °C for the whole series.") is the surroundings, set aside.
+    const differenceGiven = drafts.some((d) => d.kind === 'temperature-difference');
+    for (const t of thermal) {
+      if (t.role === 'aside' || otherSide(t)) continue;
+      const others = thermal.filter((u) => u !== t && u.role !== 'aside' && sentenceOf(u) !== sentenceOf(t));
+      if (!(others.length >= 2 || (others.length >= 1 && differenceGiven))) continue;
+      const k = sentenceOf(t);
+      const company = drafts.filter((d) => d !== t && sentenceOf(d) === k && d.kind !== 'duration');
+      if (company.length > 0) continue;
+      const sentence = sentenceAround(text, t.start, t.end);
+      if (MACHINE_SIDE_RE.test(sentence) || !SURROUNDINGS_RE.test(sentence)) continue;
+      t.role = 'aside';
     }
   }
 
