@@ -4,6 +4,7 @@
  */
 import os from 'node:os';
 import { runBorisBench } from './boris';
+import { benchComputePool } from './compute-pool';
 import { benchWorksheets } from './worksheets';
 
 async function main() {
@@ -11,6 +12,9 @@ async function main() {
   await benchWorksheets();
   console.log('');
   await runBorisBench();
+  console.log('');
+  // Health and search while the compute pool is saturated (its own throwaway MariaDB and app process).
+  await benchComputePool();
 }
 
 main().catch((e) => {
