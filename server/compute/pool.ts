@@ -52,7 +52,7 @@ const seconds = (ms: number) => `${+(ms / 1000).toFixed(1)} s`;
 const simplerAdvice: Record<ComputeJob['kind'], string> = {
   ping: '',
   warm: '',
-  worksheet: 'Use fewer steps or plot points, or expressions whose units stay small (each step squaring the units of the one before makes the units grow very fast), and try again.',
+  worksheet: 'Use fewer steps or plot points, or expressions whose units stay small (a chain of steps that each multiply the one before by itself makes the units grow very fast), and try again.',
   check: 'Use fewer steps or particles, and try again.',
   claimRead: 'Paste only the part of the text that states the claim and its figures, and try again.',
   claimPlan: 'Give fewer figures, or narrower ranges, and try again.',
