@@ -861,4 +861,15 @@ describe('more ways claims are written (issue 11)', () => {
     const g = read('A Stirling engine converts heat supplied at 90 °C into work with an efficiency of 38 %. Heat is rejected to cooling water at 20 °C.');
     expect(g.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['hot', 'cold']);
   });
+  test("figures of what the claim is compared with are set aside, not the claim's own", () => {
+    const f = read('Fridge: 4 °C inside, 22 °C kitchen, cooling COP of 3. For comparison, conventional designs of this kind reach about 35 % efficiency.');
+    expect(f.find((x) => x.kind === 'efficiency')!.role).toBe('aside');
+    const g = read('The tapered cavity produced 8 mN of thrust without propellant. A typical household kettle, by comparison, draws 2 kW. Our previous prototype reached 35 % at 800 W.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['aside', 'aside']);
+    const h = read('Our engine reaches 45 % efficiency, against 35 % for conventional engines.');
+    expect(h.map((x) => x.role)).toEqual([null, 'aside']);
+    // The claim's own input named after "vs" stays.
+    const k = read('Output 1.5×10³ W vs input 1.2×10³ W (bench log #14).');
+    expect(k.map((x) => x.role)).toEqual(['out', 'in']);
+  });
 });

@@ -231,7 +231,7 @@ const SELF_RUNNING_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!
 const HARVEST_RE = new RegExp(`(?<!\\p{L})(?:${alt(HARVEST_WORDS)})(?!\\p{L})`, 'iu');
 const COP_WINDOW = 120;
 const BEFORE_WINDOW = 80;
-const SENTENCE_BREAK_RE = /[.!?;](?:\s|$)|\n/g;
+const SENTENCE_BREAK_RE = /[.!?;]["”’')\]]*(?:\s|$)|\n/g;
 
 // ---------------------------------------------------------------------------------------------
 // Pass 1: numbers and what follows them
@@ -563,7 +563,7 @@ function windowStart(text: string, at: number, floor: number, max: number): numb
 function sentenceAround(text: string, start: number, end: number): string {
   const from = windowStart(text, start, 0, 400);
   const rest = text.slice(end, end + 400);
-  const m = /[.!?;](?:\s|$)|\n/.exec(rest);
+  const m = /[.!?;]["”’')\]]*(?:\s|$)|\n/.exec(rest);
   return text.slice(from, m ? end + m.index : end + rest.length);
 }
 
@@ -1368,7 +1368,60 @@ function upperSiOf(d: Draft): number | null {
 }
 
 /** Derived figures, inserted after the figures they come from (see the file's comment). */
+/**
+ * Figures said of something the claim is compared with ("For comparison, conventional designs reach
+ * about 35 % efficiency.", "A typical household kettle, by comparison, draws 2 kW.", "45 %, against
+ * 35 % for conventional engines"): set aside before the relations are read, so that no check and no
+ * derived figure uses them.
+ */
 function relate(text: string, drafts: Draft[]): void {
+  const compared = drafts.filter((d) => d.role !== 'aside' && saidInComparison(text, d));
+  if (compared.length === 0) return relateFigures(text, drafts);
+  const rest = drafts.filter((d) => !compared.includes(d));
+  relateFigures(text, rest);
+  drafts.length = 0;
+  drafts.push(...rest);
+  for (const d of compared) {
+    d.role = 'aside';
+    const at = drafts.findIndex((x) => x.start > d.start);
+    if (at < 0) drafts.push(d);
+    else drafts.splice(at, 0, d);
+  }
+}
+
+/** A sentence that speaks of the claim's own device (so its figures are not merely a comparison). */
+const OWN_DEVICE_RE = /(?<!\p{L})(?:our|we|us|my|this (?:device|machine|unit|engine|motor|generator|design|cell|module|drive|thruster|system|invention|prototype)|the (?:claimed|invention|inventors?|applicants?|authors?|prototype)|claims?|claimed|invention)(?!\p{L})/iu;
+/** A sentence given over to a comparison or a reference value. */
+const COMPARISON_SENTENCE_RE =
+  /(?<!\p{L})(?:for|by|in) comparison(?!\p{L})|(?<!\p{L})for reference(?!\p{L})|(?<!\p{L})as (?:a )?(?:reference|benchmark|yardstick)(?!\p{L})|^[\s"“(]*(?:(?:a|an|the)[^\S\n]+)?(?:typical|conventional|ordinary|standard(?![^\S\n]+(?:test|conditions?|deviation|atmosphere|temperature|pressure|rating))|commercial|existing|competing|comparable|today's|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|best commercial|best available)(?!\p{L})/iu;
+/** Right after a figure: whose it is, when it is another machine's ("35 % for conventional engines"). */
+const OTHERS_AFTER_RE =
+  /^[^\S\n]*(?:\p{L}+[^\S\n]+){0,2}?(?:for|of|in|from|by)[^\S\n]+(?:(?:a|an|the|most|many|all)[^\S\n]+)?(?:typical|conventional|ordinary|standard|commercial|existing|competing|comparable|today's|current|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|other|rival|ordinary)(?!\p{L})/iu;
+/** Right before a figure, in its clause: "compared with", "against", "versus", "whereas typical ones reach". */
+const COMPARED_BEFORE_RE =
+  /(?<!\p{L})(?:compared (?:with|to)|in comparison (?:with|to)|as against|as opposed to|versus|vs\.?|whereas|while (?:typical|conventional|ordinary|standard|commercial|existing)|unlike)(?!\p{L})[^.;!?\n]{0,50}$/iu;
+/** Right after a comparison's figure: what it was compared with is the input or output of the claim itself ("compared with 1 kW of input"). */
+const OWN_FLOW_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|heat|shaft)[^\S\n]+)?(?:input|output|in|out|consumed|drawn|supplied|delivered|it (?:draws|takes|uses|consumes|needs|gives|delivers))(?!\p{L})/iu;
+
+const DEVICE_NOUNS = '(?:prototypes?|models?|versions?|designs?|generations?|units?|builds?|rigs?|devices?|machines?|iterations?|systems?)';
+const EARLIER_DEVICE_RE = new RegExp(`(?<!\\p{L})(?:previous|earlier|older|former|first-generation|last year's|original|old|predecessor)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?${DEVICE_NOUNS}(?!\\p{L})`, 'iu');
+const LATEST_DEVICE_RE = new RegExp(`(?<!\\p{L})(?:new|this|latest|present|current|improved|second|next)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?${DEVICE_NOUNS}(?!\\p{L})`, 'iu');
+const OWN_FLOW_BETWEEN_RE = /(?<!\p{L})(?:input|output|inputs|outputs|in|out|consumption|supply|P_?\{?(?:in|out)\}?|E_?\{?(?:in|out)\}?)(?!\p{L})/iu;
+
+function saidInComparison(text: string, d: Draft): boolean {
+  if (d.derived) return false;
+  const sentence = sentenceAround(text, d.start, d.end);
+  if (COMPARISON_SENTENCE_RE.test(sentence) && !OWN_DEVICE_RE.test(sentence)) return true;
+  // "Our previous prototype reached 35 % at 800 W": an earlier device, not the one claimed.
+  if (EARLIER_DEVICE_RE.test(sentence) && !LATEST_DEVICE_RE.test(sentence)) return true;
+  if (OTHERS_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
+  const clauseBefore = text.slice(windowStart(text, d.start, 0, 120), d.start);
+  const m = COMPARED_BEFORE_RE.exec(clauseBefore);
+  // ("Output 1.5 kW vs input 1.2 kW": the claim's own input, named between.)
+  return m !== null && !OWN_FLOW_BETWEEN_RE.test(m[0]) && !OWN_FLOW_AFTER_RE.test(text.slice(d.end, d.end + 40));
+}
+
+function relateFigures(text: string, drafts: Draft[]): void {
   const insertAfter = (anchor: Draft, d: Draft) => {
     const at = drafts.indexOf(anchor);
     drafts.splice(at + 1, 0, d);
