@@ -100,13 +100,32 @@ export class ComputePool {
       resourceLimits: { maxOldGenerationSizeMb: this.opts.memoryMb },
       niceIncrement: 10,
     });
-    this.readyPromise = this.pool
-      .run({ job: { kind: 'ping' } satisfies ComputeJob })
-      .then(() => undefined)
-      .catch((err: Error) => {
-        this.failure = err;
-        this.logger.fatal({ err }, 'the compute pool could not start: worksheets, checks and claim checks will answer 503 until the server is restarted');
+    const pool = this.pool;
+    let started = false;
+    const fail = (err: Error) => {
+      if (this.failure) return;
+      this.failure = err;
+      this.logger.fatal({ err }, 'the compute pool could not start: worksheets, checks and claim checks will answer 503 until the server is restarted');
+      // Its workers fail while loading: piscina starts no more of them; end the pool.
+      if (this.pool === pool) this.pool = null;
+      void pool.destroy().catch(() => {});
+    };
+    // A worker that fails with no job of ours (while loading, or between jobs) is reported here.
+    const failedStart = new Promise<void>((resolve) => {
+      pool.on('error', (err: Error) => {
+        if (!started) {
+          fail(err);
+          resolve();
+        } else this.logger.error({ err }, 'a compute worker failed outside a job; the pool replaces it');
       });
+    });
+    const ping = pool.run({ job: { kind: 'ping' } satisfies ComputeJob }).then(
+      () => {
+        started = true;
+      },
+      (err: Error) => fail(err),
+    );
+    this.readyPromise = Promise.race([ping, failedStart]);
     return this.readyPromise;
   }
 
