@@ -872,4 +872,26 @@ describe('more ways claims are written (issue 11)', () => {
     const k = read('Output 1.5×10³ W vs input 1.2×10³ W (bench log #14).');
     expect(k.map((x) => x.role)).toEqual(['out', 'in']);
   });
+  test('an energy per day over a longer run is a rate; a store given energy; charging a battery; expelled at', () => {
+    // 30 kWh per day = 30 × 3.6e6 J / 86 400 s = 1250 W; a fortnight = 14 × 86 400 s.
+    const f = read('Burning wood at 30 kWh a day, the cabin stove supplied 380 kWh of heat over a fortnight.');
+    expect(f.find((x) => x.kind === 'power')).toMatchObject({ role: 'in', si: 1250 });
+    expect(f.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
+      ['out', 380 * 3.6e6],
+      ['in', 1250 * 14 * 86400],
+    ]);
+    const g = read('A flywheel rig given 500 kJ at spin-up then drove a 2 kW load for 6 minutes.');
+    expect(g.filter((x) => x.kind === 'energy').map((x) => x.role)).toEqual(['in', 'out']);
+    const h = read('A pulse circuit drawing 0.5 A at 24 V is said to charge a second battery with 2 A at 14 V.');
+    expect(h.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 12],
+      ['out', 28],
+    ]);
+    const k = read('The cold-gas system carries 12 kg of nitrogen in a 40 kg total mass and expels it at 700 m/s.');
+    expect(k.find((x) => x.kind === 'speed')!.role).toBe('exhaust');
+  });
+
+  test('the place a test ran in is no side of a machine', () => {
+    expect(read('The test lasted 45 minutes in a room held at 21 °C.').find((x) => x.kind === 'temperature')!.role).toBe('aside');
+  });
 });

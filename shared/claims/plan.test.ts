@@ -332,3 +332,26 @@ describe('the operation named before its energy (issue 11)', () => {
     expect(c.finding).toBe('consistent');
   });
 });
+
+describe('what a claim lacks, named (issue 11)', () => {
+  test('a speed change alone, said of a stage, asks for the rocket equation inputs', () => {
+    const text = 'The upper stage is claimed to give its payload 11 km/s of Δv.';
+    const { checks, needs } = runClaimChecks(extractFigures(text), { text });
+    expect(checks).toEqual([]);
+    expect(needs.map((n) => n.check)).toEqual(['rocket-equation']);
+  });
+
+  test('a current alone in an over-unity claim asks for the voltage and the output', () => {
+    const text = 'The pulse motor is said to return more energy than it takes while drawing 1.8 A from its battery.';
+    const { needs } = runClaimChecks(extractFigures(text), { text });
+    expect(needs.find((n) => n.check === 'first-law')!.missing.join(' ')).toMatch(/voltage/);
+  });
+
+  test('a plate radiating from one face in vacuum is held to the photon bound', () => {
+    const text = 'A hot plate radiating 2 kW from one face in vacuum gives its mount a push of 4 µN.';
+    const c = runClaimChecks(extractFigures(text), { text }).checks.find((x) => x.check === 'photon-bound')!;
+    // F ≤ P/c with c = 299 792 458 m/s exactly (SI Brochure, 9th ed.): 4 µN / (2 kW / c) = 0.5996.
+    expect(c.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo((4e-6 * 299792458) / 2000, 9);
+    expect(c.finding).toBe('consistent');
+  });
+});

@@ -96,6 +96,8 @@ const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|in
 /** Before a speed that is no signal's: a phase velocity, a spot or shadow swept across a screen. */
 const NO_SIGNAL_SPEED_RE = /(?<!\p{L})(?:phase (?:velocity|speed)|phase front|spot|shadow|sweep(?:s|ing)?|apparent (?:velocity|speed|motion)|appears? to (?:move|travel|go|run)|seems? to (?:move|travel|go))(?!\p{L})[^.;!?\n]{0,25}$/iu;
 /** A converter of sunlight to electricity. */
+/** A craft that carries what it throws out: a stage, a launcher, a spacecraft. */
+const CRAFT_WORDS_RE = /(?<!\p{L})(?:stages?|launchers?|rockets?|spacecraft|space probes?|probes?|satellites?|cubesats?|landers?|boosters?|kick motors?|payloads?|tugs?)(?!\p{L})/iu;
 const SOLAR_CELL_RE = /(?<!\p{L})(?:solar (?:cells?|panels?|modules?|films?|arrays?)|(?:rooftop|roof-?top|home|residential) solar|solar(?:[^\S\n]+[\p{L}-]+){0,3}[^\S\n]*[,:;–—-][^\S\n]*(?:the[^\S\n]+)?(?:panels?|modules?)|PV (?:panels?|modules?|arrays?)|photovoltaic\w*|PV|perovskites?|(?:silicon|GaAs|gallium arsenide|CdTe|CIGS|organic) (?:cells?|films?|modules?)|single-junction|multi-junction|tandem cells?|(?:of|from) (?:plain |the )?sunlight (?:in)?to electricity)(?!\p{L})/iu;
 /** "single-junction", "triple-junction", "a 4-junction cell". */
 const JUNCTIONS_RE = /(?<!\p{L})(single|one|double|dual|two|triple|three|four|five|six|\d{1,2})[- ]junction(?!\p{L})|(?<!\p{L})(tandem)(?!\p{L})/iu;
@@ -379,13 +381,14 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
   const exhaust = speeds.find((f) => f.role === 'exhaust');
   const dv = speeds.find((f) => f.role === 'delta-v');
   const rocketish = isp || exhaust || dv || wet || dry || prop;
-  if (rocketish && (s.propellant || isp || exhaust || prop || (dv && (wet || dry)))) {
+  if (rocketish && (s.propellant || isp || exhaust || prop || (dv && (wet || dry || CRAFT_WORDS_RE.test(text))))) {
     const missing: string[] = [];
     if (!isp && !exhaust) missing.push('the exhaust speed or the specific impulse');
     const twoMasses = [wet, dry, prop].filter(Boolean).length >= 2;
     if (!twoMasses) missing.push(!wet && !dry ? 'the masses of the craft with and without its propellant' : 'the propellant mass (or the mass with or without it)');
     if (missing.length) {
-      if ([isp, exhaust, wet, dry, prop, dv].filter(Boolean).length >= 2) needs.push(need('rocket-equation', missing, 'A craft that throws out propellant can change its speed by at most v_e·ln(m0/m1).', uniq([isp, exhaust, wet, dry, prop, dv])));
+      // (A speed change alone, said of a stage or a rocket, names the check too: "gives its payload 11 km/s of Δv".)
+      if ([isp, exhaust, wet, dry, prop, dv].filter(Boolean).length >= 2 || (dv && (s.propellant || CRAFT_WORDS_RE.test(text)))) needs.push(need('rocket-equation', missing, 'A craft that throws out propellant can change its speed by at most v_e·ln(m0/m1).', uniq([isp, exhaust, wet, dry, prop, dv])));
     } else {
       const m0 = (e: (f: Figure) => End): string =>
         wet ? at(wet, e(wet)) : typed(siAt(dry!, e(dry!)) + siAt(prop!, e(prop!)), 'kg');
@@ -572,6 +575,16 @@ export function planFor(figures: Figure[], ctx: PlanContext = {}): PlanResult {
     needs.push(need('first-law', ['the energy or power put in (all of it: electrical, mechanical, chemical, heat)'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eOut, pOut])));
   } else if ((eIn || pIn) && !(eOut || pOut) && s.overUnity && !thrust) {
     needs.push(need('first-law', ['the energy or power got out'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eIn, pIn])));
+  } else if (!(eIn || pIn || eOut || pOut) && s.overUnity && !thrust && (ofKind(figures, 'current').length > 0 || ofKind(figures, 'voltage').length > 0)) {
+    // "returns more energy than it takes while drawing 1.8 A": a current alone is no power.
+    needs.push(
+      need(
+        'first-law',
+        ['the voltage with each current (or the powers themselves)', 'the energy or power got out'],
+        'Over a full cycle a machine delivers no more energy than it is given.',
+        uniq([...ofKind(figures, 'current'), ...ofKind(figures, 'voltage')]),
+      ),
+    );
   }
 
   // ---- Speeds against c

@@ -493,7 +493,7 @@ function tokenize(text: string): NumberToken[] {
     push(m.index!, m.index! + m[0].length, '1', true);
   }
   // "for an hour", "over a day": one of the unit.
-  for (const m of text.matchAll(/(?<=(?:for|over|in|during|within|after|across|lasting|running)[^\S\n]+)(?:an?|one)(?=[^\S\n]+(?:full[^\S\n]+|whole[^\S\n]+|single[^\S\n]+)?(?:hour|day|week|month|year|minute)(?!\p{L}))/giu)) {
+  for (const m of text.matchAll(/(?<=(?:for|over|in|during|within|after|across|lasting|running)[^\S\n]+)(?:an?|one)(?=[^\S\n]+(?:full[^\S\n]+|whole[^\S\n]+|single[^\S\n]+)?(?:hour|day|week|fortnight|month|year|minute)(?!\p{L}))/giu)) {
     if (tokens.some((t) => t.start <= m.index! && m.index! < t.end)) continue;
     if (/^[^\S\n]+(?:hour|day|week|month|year|minute)[^\S\n]+and[^\S\n]+a[^\S\n]+half/iu.test(text.slice(m.index! + m[0].length))) continue;
     const gap = /^[^\S\n]+(?:(?:full|whole|single)[^\S\n]+)?/u.exec(text.slice(m.index! + m[0].length))![0];
@@ -1332,7 +1332,9 @@ function rolesByContext(text: string, drafts: Draft[]): void {
 }
 
 /** Words of the place a test was run ("the room was held at 21 °C", "lab temperature 22 °C"). */
-const SURROUNDINGS_RE = /(?<!\p{L})(?:room|lab|laboratory|test hall|workshop|building|office|test cell|weather|day|night)(?!\p{L})/iu;
+const SURROUNDINGS_RE = /(?<!\p{L})(?:room|lab|laboratory|test hall|hall|workshop|building|office|test cell|weather|day|night)(?!\p{L})/iu;
+/** A sentence about the test itself ("The test lasted 45 minutes in a room held at 21 °C."). */
+const TEST_SETTING_RE = /(?<!\p{L})(?:tests?|trials?|experiments?|measurements?|runs?|demonstrations?|lasted|shown|presented|held|kept|conditioned)(?!\p{L})/iu;
 /** Words that make a lone temperature one of the machine's sides, not its surroundings. */
 const MACHINE_SIDE_RE = /(?<!\p{L})(?:source|sink|sides?|hot|cold|warm|cool|reservoirs?|ends?|junctions?|plates?|faces?|inlet|outlet|flow|supply|delivery|evaporat\w*|condens\w*|cabinet|compartment|chamber|tank|boiler|emitter|heater|collector|brine|ground|outdoor|outside|exhaust|turbine|T_?[ch]|deep|surface)(?!\p{L})/iu;
 /** The apparatus a device is tested on, whose mass is no craft's. */
@@ -1396,7 +1398,7 @@ const COMPARISON_SENTENCE_RE =
   /(?<!\p{L})(?:for|by|in) comparison(?!\p{L})|(?<!\p{L})for reference(?!\p{L})|(?<!\p{L})as (?:a )?(?:reference|benchmark|yardstick)(?!\p{L})|^[\s"“(]*(?:(?:a|an|the)[^\S\n]+)?(?:typical|conventional|ordinary|standard(?![^\S\n]+(?:test|conditions?|deviation|atmosphere|temperature|pressure|rating))|commercial|existing|competing|comparable|today's|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|best commercial|best available)(?!\p{L})/iu;
 /** Right after a figure: whose it is, when it is another machine's ("35 % for conventional engines"). */
 const OTHERS_AFTER_RE =
-  /^[^\S\n]*(?:\p{L}+[^\S\n]+){0,2}?(?:for|of|in|from|by)[^\S\n]+(?:(?:a|an|the|most|many|all)[^\S\n]+)?(?:typical|conventional|ordinary|standard|commercial|existing|competing|comparable|today's|current|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|other|rival|ordinary)(?!\p{L})/iu;
+  /^[^\S\n]*(?:\p{L}+[^\S\n]+){0,2}?(?:for|of|in|from|by)[^\S\n]+(?:(?:a|an|the|most|many|all)[^\S\n]+)?(?:typical|conventional|ordinary|standard|commercial|existing|competing|comparable|today's|current|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|other|rival)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:engines?|motors?|units?|designs?|models?|devices?|machines?|thrusters?|cells?|panels?|modules?|pumps?|fridges?|refrigerators?|freezers?|systems?|generators?|turbines?|plants?|cars?|vehicles?|batter(?:y|ies)|boilers?|lamps?|bulbs?|LEDs?|rockets?|drives?|ones|counterparts?|technolog(?:y|ies)|products?|heaters?|chargers?|converters?|inverters?|coolers?|chillers?|conditioners?)(?!\p{L})/iu;
 /** Right before a figure, in its clause: "compared with", "against", "versus", "whereas typical ones reach". */
 const COMPARED_BEFORE_RE =
   /(?<!\p{L})(?:compared (?:with|to)|in comparison (?:with|to)|as against|as opposed to|versus|vs\.?|whereas|while (?:typical|conventional|ordinary|standard|commercial|existing)|unlike)(?!\p{L})[^.;!?\n]{0,50}$/iu;
@@ -1656,7 +1658,8 @@ function relateFigures(text: string, drafts: Draft[]): void {
   if (HEAT_PUMP_RE.test(text) && !denied && !drafts.some((d) => d.kind === 'cop')) {
     for (const kind of ['energy', 'power'] as const) {
       const ins = drafts.filter((d) => d.kind === kind && d.role === 'in' && !d.derived);
-      const outs = drafts.filter((d) => d.kind === kind && d.role === 'out' && !d.derived);
+      // (The heat out may be the input plus a stated excess: "3 kW more heat than the 1 kW it uses".)
+      const outs = drafts.filter((d) => d.kind === kind && d.role === 'out' && (!d.derived || d.derived.startsWith('output = input + excess')));
       if (ins.length !== 1 || outs.length !== 1) continue;
       const w = siOf(ins[0]);
       const q = siOf(outs[0]);
@@ -1700,6 +1703,11 @@ function relateFigures(text: string, drafts: Draft[]): void {
       const company = drafts.filter((d) => d !== t && sentenceOf(d) === k && (d.kind === 'temperature' || d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop'));
       if (company.length === 0) t.role = 'aside';
     }
+  } else if (thermal.length === 1 && !drafts.some((d) => d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop' || d.kind === 'power' || d.kind === 'energy')) {
+    // A lone temperature of the place a test ran in, and nothing a machine's sides would serve: aside.
+    const t = thermal[0];
+    const sentence = sentenceAround(text, t.start, t.end);
+    if ((t.role === null || t.role === 'cold') && SURROUNDINGS_RE.test(sentence) && TEST_SETTING_RE.test(sentence) && !MACHINE_SIDE_RE.test(sentence)) t.role = 'aside';
   } else {
     // The sides given across sentences ("supplies 55 °C water; with a 50 K lift over its source, …"):
     // a temperature alone in a sentence of its own that names no side of the machine ("The room was
@@ -1818,6 +1826,27 @@ function relateFigures(text: string, drafts: Draft[]): void {
     if (d.kind !== 'duration' || d.role !== null) continue;
     const sentence = sentenceAround(text, d.start, d.end);
     if (NOT_A_RUN_RE.test(sentence) && !drafts.some((e) => (e.kind === 'power' || e.kind === 'energy') && sentenceOf(e) === sentenceOf(d))) d.role = 'aside';
+  }
+
+  // "30 kWh a day … over a fortnight": an energy per day, where the text states a longer run, is a
+  // rate (a power) over that run; the "a day" is no run of its own.
+  for (let i = 0; i + 1 < drafts.length; i++) {
+    const [e, per] = [drafts[i], drafts[i + 1]];
+    if (e.kind !== 'energy' || e.derived || per.kind !== 'duration' || per.role !== null) continue;
+    if (!/^[^\S\n]*(?:a|an|per|each|every|\/)[^\S\n]*$/iu.test(text.slice(e.end, per.start)) && !/^(?:a|an|per|each|every)(?!\p{L})/iu.test(text.slice(per.start, per.end))) continue;
+    if (!/^[^\S\n]*(?:(?:a|an|per|each|every)[^\S\n]+)?(?:day|hour|week|month|year|minute)s?(?!\p{L})/iu.test(text.slice(e.end, per.end + 1).replace(/^[^\S\n]*\//, ' per '))) continue;
+    const unitTime = siOf(per);
+    const run = drafts.filter((d) => d.kind === 'duration' && d !== per && d.role !== 'aside' && (siOf(d) ?? 0) > (unitTime ?? Infinity));
+    const energy = siOf(e);
+    if (run.length === 0 || !unitTime || energy === null) continue;
+    e.kind = 'power';
+    e.quantity = typedSi(energy / unitTime, 'W');
+    if (e.upper !== undefined) {
+      const u = upperSiOf(e);
+      e.upper = u !== null ? typedSi(u / unitTime, 'W') : undefined;
+    }
+    e.derived = `power = energy per ${formatQuantity(unitTime, 's')} (${formatQuantity(energy, 'J')} / ${formatQuantity(unitTime, 's')})`;
+    per.role = 'aside';
   }
 
   // Powers and energies over a stated run: energy = power × time.
