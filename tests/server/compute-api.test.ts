@@ -4,6 +4,9 @@ import { createApp } from '../../server/app';
 import { CHECK_NAMES } from '../../shared/checks';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 
+// The first computation in an app waits for a worker thread to load (seconds on a busy machine).
+jest.setTimeout(60_000);
+
 let t: TestDatabase;
 let app: ReturnType<typeof createApp>;
 beforeAll(async () => {

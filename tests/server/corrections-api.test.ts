@@ -8,6 +8,9 @@ import request from 'supertest';
 import { createApp } from '../../server/app';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 
+// The first computation in an app waits for a worker thread to load (seconds on a busy machine).
+jest.setTimeout(60_000);
+
 let t: TestDatabase;
 let app: ReturnType<typeof createApp>;
 beforeAll(async () => {

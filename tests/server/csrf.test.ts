@@ -8,6 +8,9 @@ import { createApp } from '../../server/app';
 import type { PolicyMiddleware } from '../../server/policies';
 import { demo, startTestApp, type TestApp } from '../support/app';
 
+// The first computation in an app waits for a worker thread to load (seconds on a busy machine).
+jest.setTimeout(60_000);
+
 let h: TestApp;
 beforeAll(async () => {
   h = await startTestApp({ publicUrl: 'https://counterweight.example.org' });
@@ -120,6 +123,7 @@ describe('the session cookie', () => {
     const cookie = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('cw.sid='))!;
     expect(cookie).toMatch(/; Secure/);
     expect(cookie).toMatch(/; HttpOnly/);
+    await (prod.locals as unknown as { close(): Promise<void> }).close();
     expect(() => createApp({ sequelize: h.t.sequelize, version: 'test', env: 'production' })).toThrow(/secret/);
   });
 });

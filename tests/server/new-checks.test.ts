@@ -6,6 +6,9 @@
 import { CHECK_NAMES } from '../../shared/checks';
 import { startTestApp, type Client, type TestApp } from '../support/app';
 
+// The first computation in an app waits for a worker thread to load (seconds on a busy machine).
+jest.setTimeout(60_000);
+
 let h: TestApp;
 let c: Client;
 beforeAll(async () => {
