@@ -47,7 +47,10 @@ export function sessionMiddleware(opts: SessionOptions) {
     store,
     resave: false,
     saveUninitialized: false,
-    unset: 'destroy',
+    // 'keep', not 'destroy': a request whose session could not be read (the database down) ends with
+    // no req.session, and 'destroy' then deleted the session as the answer went out — once the
+    // database was back, that signed the user out (found by the outage test under load).
+    unset: 'keep',
     cookie: { httpOnly: true, sameSite: 'lax', secure: opts.secure, maxAge: SESSION_MAX_AGE_MS, path: '/' },
   });
   return { middleware, store };

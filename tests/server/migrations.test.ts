@@ -4,6 +4,9 @@ import { migrateDown, migrateUp } from '../../server/db/migrate';
 import { migrations } from '../../server/db/migrations';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 
+// Eight migrations up, down and up again, with triggers: seconds on a busy machine.
+jest.setTimeout(60_000);
+
 let t: TestDatabase;
 beforeAll(async () => {
   t = await createTestDatabase({ migrate: false });
