@@ -145,7 +145,9 @@ export function createApp(opts: AppOptions): express.Express {
   const limits = rateLimits.handlers;
   // Worksheets, checks and claim checks run in worker threads, never on the event loop (issue 13).
   const compute = new ComputePool({ ...computeConfig(), ...opts.compute }, logger);
-  void compute.start();
+  // Started at once (a server that cannot compute says so in its first log lines); under tests only
+  // when first needed, so that the many test apps that never compute load no worker thread.
+  if (env !== 'test') void compute.start();
   const sessions = sessionMiddleware({
     sequelize: opts.sequelize,
     secret: opts.sessionSecret ?? crypto.randomBytes(32).toString('base64url'),
