@@ -11,6 +11,7 @@ import { MailError, type Mailer } from '../mail/mailer';
 import { resetMessage, verificationMessage } from '../mail/messages';
 import { audit, EmailToken, User, type TokenPurpose } from '../models';
 import type { Role } from '../../shared/schemas/auth';
+import { can } from '../../shared/policies';
 
 export const TOKEN_TTL_MS: Record<TokenPurpose, number> = {
   verify: 24 * 3600_000,
@@ -241,7 +242,7 @@ export class Accounts {
       });
       const actor = rows.find((u) => u.id === actorId);
       const target = rows.find((u) => u.id === targetId);
-      if (!actor || actor.role !== 'admin') throw new HttpError(403, 'forbidden', 'Only an account with the admin role may change roles.');
+      if (!actor || !can(actor, 'users.setRole')) throw new HttpError(403, 'forbidden', 'Only an account with the admin role may change roles.');
       if (!target) throw new HttpError(404, 'user_not_found', `There is no user with id ${targetId}.`);
       if (target.id === actor.id && role !== 'admin') {
         throw new HttpError(400, 'cannot_demote_self', 'You cannot take the admin role away from yourself; another admin can.', {

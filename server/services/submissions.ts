@@ -23,6 +23,7 @@ import {
   type SubmissionStatus,
   type SubmissionSummaryDto,
 } from '../../shared/submissions/types';
+import { can, rolesOf } from '../../shared/policies';
 import { fieldsError, HttpError } from '../http/errors';
 import type { Mailer, OutgoingMessage } from '../mail/mailer';
 import { correctionForwardedMessage, queueDigestMessage, submissionDecidedMessage } from '../mail/messages';
@@ -115,8 +116,6 @@ export function readClaimedFigures(figures: z.infer<typeof figureSchema>[], wher
 
 const person = (u: User | null | undefined): PersonRef | null => (u ? { id: u.id, displayName: u.displayName } : null);
 const notFound = (id: number) => new HttpError(404, 'not_found', `There is no submission ${id}, or it is not yours to see.`);
-const isModerator = (u: User) => u.role === 'moderator' || u.role === 'admin';
-const isEditor = (u: User) => u.role === 'editor' || u.role === 'admin';
 
 /** A claim older than this may be taken over by another moderator. */
 export const CLAIM_TTL_MS = 2 * 60 * 60 * 1000;
@@ -253,8 +252,8 @@ export class Submissions {
 
   /** Who may see a submission (and its attachments): the submitter, moderators and admins, and editors it was passed to. */
   private async maySee(viewer: User, s: Submission): Promise<boolean> {
-    if (viewer.id === s.submitterId || isModerator(viewer)) return true;
-    if (!isEditor(viewer)) return false;
+    if (can(viewer, 'submissions.see', { userId: viewer.id, ownerId: s.submitterId })) return true;
+    if (!can(viewer, 'submissions.seePassedOn')) return false;
     if (s.kind === 'correction' && s.status === 'accepted' && s.entryId) return (await this.editorsOf(s.entryId)).some((u) => u.id === viewer.id);
     if (s.kind === 'sighting' && s.status === 'drafted' && s.draftEntryId) {
       return (await EntryVersion.count({ where: { entryId: s.draftEntryId, authorId: viewer.id } })) > 0;
@@ -328,7 +327,7 @@ export class Submissions {
 
   /** Who can own a draft made from a sighting: editors and admins, by name. */
   async editors(): Promise<(PersonRef & { role: string })[]> {
-    const rows = await User.findAll({ where: { role: ['editor', 'admin'] }, attributes: ['id', 'displayName', 'role'], order: [['displayName', 'ASC']] });
+    const rows = await User.findAll({ where: { role: [...rolesOf('drafts.own')] }, attributes: ['id', 'displayName', 'role'], order: [['displayName', 'ASC']] });
     return rows.map((u) => ({ id: u.id, displayName: u.displayName, role: u.role }));
   }
 
@@ -469,7 +468,7 @@ export class Submissions {
       const s = await Submission.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
       if (!s) throw notFound(id);
       if (s.status !== 'claimed') throw new HttpError(409, 'not_claimed', 'Nobody holds this submission.');
-      if (s.claimedById !== actor.id && actor.role !== 'admin') throw new HttpError(409, 'claimed_by_other', 'Another moderator holds this submission; only they (or an admin) can release it.');
+      if (!can(actor, 'queue.releaseHeld', { userId: actor.id, ownerId: s.claimedById })) throw new HttpError(409, 'claimed_by_other', 'Another moderator holds this submission; only they (or an admin) can release it.');
       s.status = 'open';
       s.claimedById = null;
       s.claimedAt = null;
@@ -518,7 +517,7 @@ export class Submissions {
       } else if (input.decision === 'draft') {
         if (s.kind !== 'sighting') throw new HttpError(400, 'validation_failed', 'Check body.decision: only a sighting can be turned into a draft entry.', { 'body.decision': 'only for sightings' });
         const editor = await User.findByPk(input.editorId, { transaction });
-        if (!editor || !isEditor(editor)) throw new HttpError(400, 'validation_failed', 'Check body.editorId: choose an editor to own the draft.', { 'body.editorId': 'not an editor' });
+        if (!editor || !can(editor, 'drafts.own')) throw new HttpError(400, 'validation_failed', 'Check body.editorId: choose an editor to own the draft.', { 'body.editorId': 'not an editor' });
         const where = [s.seenAtUrl, s.seenAtCitation].filter(Boolean).join(' — ');
         const figures = (s.figures ?? []).map((f) => `- ${f.label ? `${f.label}: ` : ''}${f.quantity} (${f.display})`).join('\n');
         const content = draftContentSchema.parse({
