@@ -3,6 +3,7 @@
  * dependencies of steps and checks found and each plot's sweep laid out (plot.ts). Problems found
  * here are reported by field path before any value is typed.
  */
+import { ALLOWED_FUNCTIONS, RESERVED_WORDS } from './allowed';
 import { CONSTANTS, CONSTANT_HINTS, getConstant } from './constants';
 import {
   err,
@@ -18,12 +19,14 @@ import {
   type Program,
 } from './compiled';
 import { makeKitWrapper } from './kit-call';
-import { ALLOWED_FUNCTIONS, ExpressionError, RESERVED_WORDS, vetExpression } from './math';
+import { ExpressionError } from './math';
+import { vetExpression } from './vet';
 import { compilePlot } from './plot';
 import { parseQuantity } from './quantity';
 import type { Worksheet } from './schema';
 import type { EvaluationError } from './types';
-import { asDifference, makeUnit, unitInfo, type UnitInfo } from './units';
+import { asDifference, unitInfo, type UnitInfo } from './units';
+import { makeUnit } from './values';
 
 export function compileProgram(ws: Worksheet, opts: CompileOptions = {}): Program {
   const kit = opts.functions ?? {};

@@ -6,7 +6,8 @@ import type { MathNode } from 'mathjs';
 import { KitCallError, err } from './compiled';
 import { ExpressionError } from './math';
 import type { EvaluationError, EvaluationErrorKind } from './types';
-import { describeValue, isComplexValue, isMatrixValue, isUnitValue, sameDims, siOfUnit, type Dims } from './units';
+import { sameDims, type Dims } from './units';
+import { describeValue, isComplexValue, isMatrixValue, isUnitValue, siOfUnit } from './values';
 
 // mathjs's node classes are a wide union whose fields (fn, args, params, content …) differ by type;
 // these walkers read them by `node.type`, so the nodes are typed loosely here.

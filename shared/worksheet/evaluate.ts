@@ -43,7 +43,8 @@ import { runPlot } from './plot';
 import { dependencyError, displayOf, inputDisplayInfo, readInput, runStep } from './run';
 import { worksheetSchema, type Worksheet } from './schema';
 import type { CheckResultRow, EvaluationError, InputResult, PlotResult, QuantityValue, StepResult, WorksheetResult } from './types';
-import { describeValue, formatAuto, unitInfo } from './units';
+import { formatAuto, unitInfo } from './units';
+import { describeValue } from './values';
 
 export { EVALUATION_BUDGET_MS, type CompileOptions, type CompiledWorksheet, type EvaluateOptions } from './compiled';
 

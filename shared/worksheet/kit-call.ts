@@ -1,7 +1,8 @@
 /** Kit functions (the check kit's formulas) as mathjs functions: arguments in, quantity out. */
 import { KitCallError } from './compiled';
 import type { KitFunction } from './types';
-import { describeDims, describeValue, fromSI, isDimensionless, isUnitValue, makeUnit, sameDims, siOfUnit, toSI, unitInfo, type UnitInfo } from './units';
+import { describeDims, fromSI, isDimensionless, sameDims, toSI, unitInfo, type UnitInfo } from './units';
+import { describeValue, isUnitValue, makeUnit, siOfUnit } from './values';
 
 /** Converts an argument of a kit function to a number in the declared unit. */
 function kitArgument(fnName: string, argName: string, value: unknown, info: UnitInfo): number {

@@ -3,7 +3,8 @@
  * process stays up and keeps evaluating. (The mathjs "Security" page names import, createUnit,
  * evaluate, parse, simplify and derivative as the main risks; the rest follow from them.)
  */
-import { ExpressionError, MAX_ELEMENTS, MAX_NESTING, math, vetExpression } from './math';
+import { ExpressionError, MAX_ELEMENTS, MAX_NESTING, math } from './math';
+import { vetExpression } from './vet';
 import { compileWorksheet, evaluateWorksheet } from './evaluate';
 import type { Worksheet } from './schema';
 

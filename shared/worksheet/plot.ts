@@ -8,7 +8,8 @@ import { parseQuantity } from './quantity';
 import { runStep } from './run';
 import type { Worksheet } from './schema';
 import type { EvaluationError, PlotResult, PlotSeries } from './types';
-import { asDifference, describeDims, fromSI, makeUnit, sameDims, siUnitFor, unitInfo, type Dims, type UnitInfo } from './units';
+import { asDifference, describeDims, fromSI, sameDims, siUnitFor, unitInfo, type Dims, type UnitInfo } from './units';
+import { makeUnit } from './values';
 
 type PlotDef = Worksheet['plots'][number];
 

@@ -7,7 +7,8 @@ import { DIGITS, err, label, quantityErrorOf, type CInput, type CStep, type Outc
 import { explainRuntime, quantityOf } from './diagnose';
 import { parseQuantity } from './quantity';
 import type { EvaluationError, QuantityValue } from './types';
-import { describeDims, formatAuto, formatIn, makeUnit, sameDims, siUnitFor, type Dims, type UnitInfo } from './units';
+import { describeDims, formatAuto, formatIn, sameDims, siUnitFor, type Dims, type UnitInfo } from './units';
+import { makeUnit } from './values';
 
 /** Reads one input's typed value (or its default); remembers the last text and outcome. */
 export function readInput(ci: CInput, raw: string | undefined): Outcome {
