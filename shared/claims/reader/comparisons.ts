@@ -1,0 +1,62 @@
+/**
+ * Comparisons set aside (the claim reader, shared/claims/reader.ts, pass 3): figures said of
+ * something the claim is compared with — a sentence given over to a comparison or a reference value,
+ * an earlier prototype, "35 % for conventional engines", "compared with …" — are set aside before
+ * the relations are read, so that no check and no derived figure uses them.
+ */
+import { sentenceAround, windowStart } from './context';
+import type { Draft } from './draft';
+import { relateFigures } from './relations';
+
+/**
+ * Figures said of something the claim is compared with ("For comparison, conventional designs reach
+ * about 35 % efficiency.", "A typical household kettle, by comparison, draws 2 kW.", "45 %, against
+ * 35 % for conventional engines"): set aside before the relations are read, so that no check and no
+ * derived figure uses them.
+ */
+export function relate(text: string, drafts: Draft[]): void {
+  const compared = drafts.filter((d) => d.role !== 'aside' && saidInComparison(text, d));
+  if (compared.length === 0) return relateFigures(text, drafts);
+  const rest = drafts.filter((d) => !compared.includes(d));
+  relateFigures(text, rest);
+  drafts.length = 0;
+  drafts.push(...rest);
+  for (const d of compared) {
+    d.role = 'aside';
+    const at = drafts.findIndex((x) => x.start > d.start);
+    if (at < 0) drafts.push(d);
+    else drafts.splice(at, 0, d);
+  }
+}
+
+/** A sentence that speaks of the claim's own device (so its figures are not merely a comparison). */
+const OWN_DEVICE_RE = /(?<!\p{L})(?:our|we|us|my|this (?:device|machine|unit|engine|motor|generator|design|cell|module|drive|thruster|system|invention|prototype)|the (?:claimed|invention|inventors?|applicants?|authors?|prototype)|claims?|claimed|invention)(?!\p{L})/iu;
+/** A sentence given over to a comparison or a reference value. */
+const COMPARISON_SENTENCE_RE =
+  /(?<!\p{L})(?:for|by|in) comparison(?!\p{L})|(?<!\p{L})for reference(?!\p{L})|(?<!\p{L})as (?:a )?(?:reference|benchmark|yardstick)(?!\p{L})|^[\s"“(]*(?:(?:a|an|the)[^\S\n]+)?(?:typical|conventional|ordinary|standard(?![^\S\n]+(?:test|conditions?|deviation|atmosphere|temperature|pressure|rating))|commercial|existing|competing|comparable|today's|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|best commercial|best available)(?!\p{L})/iu;
+/** Right after a figure: whose it is, when it is another machine's ("35 % for conventional engines"). */
+const OTHERS_AFTER_RE =
+  /^[^\S\n]*(?:\p{L}+[^\S\n]+){0,2}?(?:for|of|in|from|by)[^\S\n]+(?:(?:a|an|the|most|many|all)[^\S\n]+)?(?:typical|conventional|ordinary|standard|commercial|existing|competing|comparable|today's|current|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|other|rival)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:engines?|motors?|units?|designs?|models?|devices?|machines?|thrusters?|cells?|panels?|modules?|pumps?|fridges?|refrigerators?|freezers?|systems?|generators?|turbines?|plants?|cars?|vehicles?|batter(?:y|ies)|boilers?|lamps?|bulbs?|LEDs?|rockets?|drives?|ones|counterparts?|technolog(?:y|ies)|products?|heaters?|chargers?|converters?|inverters?|coolers?|chillers?|conditioners?)(?!\p{L})/iu;
+/** Right before a figure, in its clause: "compared with", "against", "versus", "whereas typical ones reach". */
+const COMPARED_BEFORE_RE =
+  /(?<!\p{L})(?:compared (?:with|to)|in comparison (?:with|to)|as against|as opposed to|versus|vs\.?|whereas|while (?:typical|conventional|ordinary|standard|commercial|existing)|unlike)(?!\p{L})[^.;!?\n]{0,50}$/iu;
+/** Right after a comparison's figure: what it was compared with is the input or output of the claim itself ("compared with 1 kW of input"). */
+const OWN_FLOW_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|heat|shaft)[^\S\n]+)?(?:input|output|in|out|consumed|drawn|supplied|delivered|it (?:draws|takes|uses|consumes|needs|gives|delivers))(?!\p{L})/iu;
+
+const DEVICE_NOUNS = '(?:prototypes?|models?|versions?|designs?|generations?|units?|builds?|rigs?|devices?|machines?|iterations?|systems?)';
+const EARLIER_DEVICE_RE = new RegExp(`(?<!\\p{L})(?:previous|earlier|older|former|first-generation|last year's|original|old|predecessor)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?${DEVICE_NOUNS}(?!\\p{L})`, 'iu');
+const LATEST_DEVICE_RE = new RegExp(`(?<!\\p{L})(?:new|this|latest|present|current|improved|second|next)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?${DEVICE_NOUNS}(?!\\p{L})`, 'iu');
+const OWN_FLOW_BETWEEN_RE = /(?<!\p{L})(?:input|output|inputs|outputs|in|out|consumption|supply|P_?\{?(?:in|out)\}?|E_?\{?(?:in|out)\}?)(?!\p{L})/iu;
+
+function saidInComparison(text: string, d: Draft): boolean {
+  if (d.derived) return false;
+  const sentence = sentenceAround(text, d.start, d.end);
+  if (COMPARISON_SENTENCE_RE.test(sentence) && !OWN_DEVICE_RE.test(sentence)) return true;
+  // "Our previous prototype reached 35 % at 800 W": an earlier device, not the one claimed.
+  if (EARLIER_DEVICE_RE.test(sentence) && !LATEST_DEVICE_RE.test(sentence)) return true;
+  if (OTHERS_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
+  const clauseBefore = text.slice(windowStart(text, d.start, 0, 120), d.start);
+  const m = COMPARED_BEFORE_RE.exec(clauseBefore);
+  // ("Output 1.5 kW vs input 1.2 kW": the claim's own input, named between.)
+  return m !== null && !OWN_FLOW_BETWEEN_RE.test(m[0]) && !OWN_FLOW_AFTER_RE.test(text.slice(d.end, d.end + 40));
+}

@@ -1,0 +1,78 @@
+/**
+ * Durations (the claim reader, shared/claims/reader.ts): times that are not the run's set aside
+ * ("took 18 months to build"), an energy "a day" over a longer run read as a power, and the energy
+ * of each power over the time said with it (energy = power × time).
+ */
+import { formatQuantity } from '../../worksheet/quantity';
+import { sentenceAround } from './context';
+import { insertAfter, sameClause, sentenceOf, siOf, typedSi, upperSiOf, type Draft } from './draft';
+
+/** Words of a time that is not how long the device ran. */
+const NOT_A_RUN_RE =
+  /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline)(?!\p{L})/iu;
+
+/** Times, rates and energies over a run, among the figures read (see the file's comment). */
+export function relateDurations(text: string, drafts: Draft[]): void {
+  // Times that are not the run's ("took 18 months to build", "pays for itself in 3 years"), said in a
+  // sentence with no power or energy: set aside.
+  for (const d of drafts) {
+    if (d.kind !== 'duration' || d.role !== null) continue;
+    const sentence = sentenceAround(text, d.start, d.end);
+    if (NOT_A_RUN_RE.test(sentence) && !drafts.some((e) => (e.kind === 'power' || e.kind === 'energy') && sentenceOf(text, e) === sentenceOf(text, d))) d.role = 'aside';
+  }
+
+  // "30 kWh a day … over a fortnight": an energy per day, where the text states a longer run, is a
+  // rate (a power) over that run; the "a day" is no run of its own.
+  for (let i = 0; i + 1 < drafts.length; i++) {
+    const [e, per] = [drafts[i], drafts[i + 1]];
+    if (e.kind !== 'energy' || e.derived || per.kind !== 'duration' || per.role !== null) continue;
+    if (!/^[^\S\n]*(?:a|an|per|each|every|\/)[^\S\n]*$/iu.test(text.slice(e.end, per.start)) && !/^(?:a|an|per|each|every)(?!\p{L})/iu.test(text.slice(per.start, per.end))) continue;
+    if (!/^[^\S\n]*(?:(?:a|an|per|each|every)[^\S\n]+)?(?:day|hour|week|month|year|minute)s?(?!\p{L})/iu.test(text.slice(e.end, per.end + 1).replace(/^[^\S\n]*\//, ' per '))) continue;
+    const unitTime = siOf(per);
+    const run = drafts.filter((d) => d.kind === 'duration' && d !== per && d.role !== 'aside' && (siOf(d) ?? 0) > (unitTime ?? Infinity));
+    const energy = siOf(e);
+    if (run.length === 0 || !unitTime || energy === null) continue;
+    e.kind = 'power';
+    e.quantity = typedSi(energy / unitTime, 'W');
+    if (e.upper !== undefined) {
+      const u = upperSiOf(e);
+      e.upper = u !== null ? typedSi(u / unitTime, 'W') : undefined;
+    }
+    e.derived = `power = energy per ${formatQuantity(unitTime, 's')} (${formatQuantity(energy, 'J')} / ${formatQuantity(unitTime, 's')})`;
+    per.role = 'aside';
+  }
+
+  // Powers and energies over a stated run: energy = power × time.
+  const durations = drafts.filter((d) => d.kind === 'duration' && d.role !== 'aside');
+  const longest = [...durations].sort((a, b) => (siOf(b) ?? 0) - (siOf(a) ?? 0))[0];
+  if (longest) {
+    const powers = drafts.filter((d) => d.kind === 'power' && (d.role === 'in' || d.role === 'out'));
+    for (const p of powers) {
+      // Each power over the time said with it ("charged at 2 kW for 5 hours, then discharged at 1.5 kW
+      // for 6 hours"): the nearest duration in its clause, before the next power; else the longest run.
+      const nextPower = powers.find((q) => q.start > p.start);
+      const prevPower = [...powers].reverse().find((q) => q.start < p.start);
+      const own =
+        durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && sameClause(text, d, p) && d.start - p.end < 80) ??
+        [...durations].reverse().find((d) => d.end <= p.start && (!prevPower || d.start > prevPower.end) && sameClause(text, d, p) && p.start - d.end < 60);
+      const duration = durations.length > 1 && own ? own : longest;
+      const tRun = siOf(duration);
+      if (!tRun) continue;
+      const w = siOf(p);
+      if (w === null || (w === 0 && p.role !== 'in')) continue;
+      if (drafts.some((d) => d.kind === 'energy' && d.role === p.role && !d.derived)) continue;
+      if (drafts.some((d) => d.kind === 'energy' && d.role === p.role && d.derived?.startsWith('energy = power'))) continue;
+      const wu = upperSiOf(p);
+      const last = p.start > duration.start ? p : duration;
+      insertAfter(drafts, last, {
+        start: Math.min(p.start, duration.start),
+        end: Math.max(p.end, duration.end),
+        kind: 'energy',
+        quantity: typedSi(w * tRun, 'J'),
+        upper: wu !== null ? typedSi(wu * tRun, 'J') : undefined,
+        role: p.role,
+        derived: `energy = power × time (${formatQuantity(w, 'W')} × ${formatQuantity(tRun, 's')})`,
+      });
+    }
+  }
+}

@@ -1,0 +1,300 @@
+/**
+ * The figures of a text (the claim reader, shared/claims/reader.ts, pass 2): each number with its
+ * unit made a figure of a kind (units.ts, kinds.ts, temperatures.ts), ranges and uncertainties made
+ * one figure with an upper end, restatements in other units ("12 kW (16 hp)") dropped, roles and
+ * hedges read (roles.ts, ranges-hedges.ts), multiples in words ("twice the energy it consumes", "half
+ * the speed of light") added; then the relations (comparisons.ts, relations.ts) and the SI values.
+ */
+import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
+import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
+import { C_M_PER_S } from '../figures-vocabulary';
+import { HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
+import { relate } from './comparisons';
+import type { Draft } from './draft';
+import { bareKind, GAIN_PER_UNIT_RE, ISP_AFTER_RE, ISP_BEFORE_RE, MULTIPLE_VALUE, MULTIPLE_WORD_RE, readPercent, TEMPERATURE_CONTEXT_RE } from './kinds';
+import { BEFORE_WINDOW } from './context';
+import { tokenize, type NumberToken } from './numbers';
+import { hedgeBefore, isRangeGap, roleContextStart } from './ranges-hedges';
+import { lastRoleWords, roleFor } from './roles';
+import { differenceDirection, differenceQuantity, isDifference } from './temperatures';
+import { GLUED_CELSIUS, GLUED_FAHRENHEIT, type Suffix } from './units';
+
+function suffixKind(s: Suffix): string | null {
+  if (s === null) return null;
+  if (s.type === 'percent') return '%';
+  return s.per ? `${s.form.kind}/${s.per.kind}` : s.form.kind;
+}
+
+/** The number × factor, written so that parseQuantity reads it back. */
+function scaled(num: string, factor: number | undefined): string {
+  if (factor === undefined) return num;
+  return String(Number((Number(num) * factor).toPrecision(15)));
+}
+
+function unitQuantity(num: string, s: Extract<Suffix, { type: 'unit' }>): { kind: FigureKind; quantity: string } {
+  if (s.per) {
+    const kind: FigureKind = s.form.kind === 'thrust' ? 'thrust-per-power' : 'specific-power';
+    const n = s.perCount ? String(Number((Number(scaled(num, s.form.factor)) / s.perCount).toPrecision(15))) : scaled(num, s.form.factor);
+    return { kind, quantity: `${n} ${s.form.unit} / ${s.per.unit}` };
+  }
+  return { kind: s.form.kind, quantity: `${scaled(num, s.form.factor)} ${s.form.unit}` };
+}
+
+export function readFigures(text: string, restated: [number, number][]): Figure[] {
+  lastRoleWords.end = 0;
+  const tokens = tokenize(text);
+  const drafts: Draft[] = [];
+  let floor = 0;
+
+  for (let i = 0; i < tokens.length; i++) {
+    const t = tokens[i];
+    if (t.skip || t.consumed || t.plusMinus) continue;
+    let suffix = t.suffix;
+    let end = t.end;
+    const start = t.start;
+    let upperNum: string | undefined;
+    const next: NumberToken | undefined = tokens[i + 1];
+    // Ranges and uncertainties: "3–6 mN", "3 mN to 6 mN", "between 0.5 and 1.5 kW", "1.2 ± 0.3 mN", "2.31(4) mN".
+    if (t.unc !== undefined) {
+      const mid = Number(t.num);
+      upperNum = String(Number((mid + t.unc).toPrecision(15)));
+      t.num = String(Number((mid - t.unc).toPrecision(15)));
+    } else if (next && !next.skip) {
+      const gapStart = t.suffix ? t.end : t.numEnd;
+      const pmGap = /^[^\S\n]*(?:±|\+\/-|\+-)[^\S\n]*$/.test(text.slice(gapStart, next.start));
+      // "96 W ± 3 %": an uncertainty in per cent of the figure.
+      const relative = pmGap && next.plusMinus && t.suffix !== null && t.suffix.type === 'unit' && next.suffix?.type === 'percent';
+      if (pmGap && next.plusMinus && (relative || !t.suffix || suffixKind(t.suffix) === suffixKind(next.suffix) || !next.suffix)) {
+        const mid = Number(t.num);
+        const unc = relative ? (mid * Number(next.num)) / 100 : Number(next.num);
+        suffix = relative ? t.suffix : (t.suffix ?? next.suffix);
+        upperNum = String(Number((mid + unc).toPrecision(15)));
+        t.num = String(Number((mid - unc).toPrecision(15)));
+        end = t.suffix && !next.suffix ? next.numEnd : next.end;
+        next.consumed = true;
+      } else if (!t.suffix && !next.suffix && !t.words && !next.words && !next.plusMinus && isRangeGap(text, t.numEnd, next.start, t.start) && bareKind(text, t.start, t.numEnd, floor)) {
+        // "a COP between 3.2 and 4.1", "an efficiency of 0.3–0.4".
+        upperNum = next.num;
+        end = next.end;
+        next.consumed = true;
+      } else if (!next.plusMinus && isRangeGap(text, gapStart, next.start, t.start) && (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) && next.suffix) {
+        // Two temperatures "between 600 °C and 30 °C" or "from 10 °C to 55 °C" are the two sides, not a range.
+        // (A third temperature in the same sentence makes it a range of one side.)
+        const thirdTemperature =
+          suffixKind(next.suffix) === 'temperature' &&
+          tokens.some((o) => o !== t && o !== next && !o.skip && o.suffix?.type === 'unit' && o.suffix.form.kind === 'temperature' && !o.suffix.form.ambiguous && windowStart(text, o.start, 0, 400) === windowStart(text, t.start, 0, 400));
+        const dash = /^[^\S\n]*[-–—][^\S\n]*$/.test(text.slice(gapStart, next.start));
+        // "burns from 25 t to 9 t": a craft's mass before and after, not a range.
+        let fallingMass = false;
+        if (suffixKind(next.suffix) === 'mass' && t.suffix?.type === 'unit' && next.suffix?.type === 'unit' && /(?<!\p{L})from[^\S\n]+$/iu.test(text.slice(Math.max(0, t.start - 6), t.start))) {
+          try {
+            fallingMass = parseQuantity(unitQuantity(t.num, t.suffix).quantity, 'kg') > parseQuantity(unitQuantity(next.num, next.suffix).quantity, 'kg');
+          } catch {
+            /* not comparable */
+          }
+        }
+        const twoSides =
+          fallingMass ||
+          (suffixKind(next.suffix) === 'voltage' && !dash) ||
+          (!thirdTemperature && suffixKind(next.suffix) === 'temperature' && !dash && !isDifference(text, t.start, next.end, floor));
+        suffix = next.suffix;
+        if (!twoSides) {
+          upperNum = next.num;
+          end = next.end;
+          next.consumed = true;
+        }
+      }
+    }
+    if (t.words && !suffix && !bareKind(text, t.start, t.numEnd, floor)) continue;
+
+    let kind: FigureKind | null = null;
+    let quantity = '';
+    let upper: string | undefined;
+    let role: FigureRole | undefined;
+    let derived: string | undefined;
+    let assumption: string | undefined;
+    let direction: Draft['direction'];
+    let ofInput: boolean | undefined;
+    if (suffix?.type === 'unit') {
+      const q = unitQuantity(t.num, suffix);
+      kind = q.kind;
+      quantity = q.quantity;
+      if (upperNum !== undefined) upper = unitQuantity(upperNum, suffix).quantity;
+      // "degrees" alone: a temperature where the sentence speaks of one, else an angle (not a figure).
+      if (kind === 'temperature' && suffix.form.ambiguous && !TEMPERATURE_CONTEXT_RE.test(sentenceAround(text, start, end))) continue;
+      if (kind === 'temperature' && isDifference(text, start, end, floor)) {
+        kind = 'temperature-difference';
+        quantity = differenceQuantity(scaled(t.num, suffix.form.factor), suffix.form.unit);
+        direction = differenceDirection(text, end);
+        if (upperNum !== undefined) upper = differenceQuantity(upperNum, suffix.form.unit);
+      } else if (kind === 'duration' && suffix.form.unit === 's' && (ISP_BEFORE_RE.test(text.slice(Math.max(floor, start - BEFORE_WINDOW), start)) || ((ISP_AFTER_RE.lastIndex = end), ISP_AFTER_RE.test(text)))) {
+        kind = 'specific-impulse';
+      } else if (kind === 'duration' && /(?:(?<!\p{L})at|@)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 4), start))) {
+        // "at 10 h": a time of day.
+        continue;
+      } else if (kind === 'temperature' && suffix.form.ambiguous) {
+        assumption = suffix.form === GLUED_CELSIUS ? '"C" read as degrees Celsius.' : suffix.form === GLUED_FAHRENHEIT ? '"F" read as degrees Fahrenheit.' : '"Degrees" read as degrees Celsius.';
+      }
+    } else if (suffix?.type === 'percent') {
+      const reading = readPercent(text, start, end, floor);
+      if (reading) {
+        kind = reading.kind;
+        role = reading.role;
+        assumption = reading.assumption;
+        ofInput = reading.ofInput;
+        const q = (n: string) =>
+          reading.more
+            ? String(Number((1 + Number(n) * reading.factor).toPrecision(15)))
+            : reading.unit === '%'
+              ? `${n} %`
+              : reading.unit
+                ? `${scaled(n, reading.factor)} ${reading.unit}`
+                : scaled(n, reading.factor);
+        if (reading.more) derived = 'output = input + the percentage more';
+        if (reading.derived) derived = reading.derived;
+        quantity = q(t.num);
+        if (upperNum !== undefined) upper = q(upperNum);
+      }
+    } else {
+      const bare = bareKind(text, start, t.numEnd, floor);
+      if (bare) {
+        kind = bare.kind;
+        role = bare.role;
+        derived = bare.derived;
+        quantity = scaled(t.num, bare.factor);
+        if (upperNum !== undefined) upper = scaled(upperNum, bare.factor);
+        // "three times as much heat as the electricity it uses", for a heat pump: a heating COP.
+        if (kind === 'efficiency' && derived && HEAT_PUMP_RE.test(sentenceAround(text, start, end))) {
+          kind = 'cop';
+          role = 'heating';
+          derived = undefined;
+          assumption = 'A heat pump\'s heat out as a multiple of its work in: read as a heating COP.';
+        }
+      }
+    }
+    if (kind === null) continue;
+    if ((kind === 'power' || kind === 'energy') && suffix?.type === 'unit' && !suffix.per) {
+      GAIN_PER_UNIT_RE.lastIndex = end;
+      const g = GAIN_PER_UNIT_RE.exec(text);
+      if (g) {
+        kind = 'efficiency';
+        quantity = t.num;
+        upper = upperNum;
+        derived = 'units out for each unit in';
+      }
+    }
+    // "12 kW (16 hp)": a restatement in other units, not a second figure.
+    const prev = drafts[drafts.length - 1];
+    // (A temperature and a difference are one kind here: "4 °C (39 °F)", "a 20 °C (36 °F) lift".)
+    const temperatures = suffix?.type === 'unit' && suffix.form.kind === 'temperature' && prev && (prev.kind === 'temperature' || prev.kind === 'temperature-difference');
+    if (prev && (prev.kind === kind || temperatures) && /^[^\S\n]*[(\[][^\S\n]*(?:about|approx\.?|~|≈|or)?[^\S\n]*$/.test(text.slice(prev.end, start))) {
+      try {
+        const b = parseQuantity(temperatures && suffix?.type === 'unit' && prev.kind === 'temperature' ? unitQuantity(t.num, suffix).quantity : quantity, FIGURE_SI_UNIT[prev.kind]);
+        // (Either end of a range: "120–150 °C (302 °F)".)
+        const near = (a: number, c = b) => Math.abs(a - c) <= 0.05 * Math.max(Math.abs(a), Math.abs(c));
+        // Both read as differences: "a 20 °C (36 °F) temperature difference".
+        const asDifference = (q: string) => {
+          const m = /^(-?[\d.e+-]+) (degC|degF|K|mK)$/.exec(q);
+          return m ? parseQuantity(differenceQuantity(m[1], m[2]), 'K') : NaN;
+        };
+        const bothDifferences =
+          temperatures && suffix?.type === 'unit' && prev.kind === 'temperature' && prev.upper === undefined &&
+          near(asDifference(prev.quantity), parseQuantity(differenceQuantity(scaled(t.num, suffix.form.factor), suffix.form.unit), 'K'));
+        if (bothDifferences || near(parseQuantity(prev.quantity, FIGURE_SI_UNIT[prev.kind])) || (prev.upper !== undefined && near(parseQuantity(prev.upper, FIGURE_SI_UNIT[prev.kind])))) {
+          const close = /^[^\S\n]*[)\]]/.exec(text.slice(end));
+          if (close && upper === undefined) restated.push([prev.end, end + close[0].length]);
+          floor = end;
+          continue;
+        }
+      } catch {
+        /* not comparable: keep it */
+      }
+    }
+    if (role === undefined) role = roleFor(text, kind, roleContextStart(text, start, floor), end, floor);
+    // "10 kWe", "3 MWe": electrical output.
+    if (role === null && kind === 'power' && suffix?.type === 'unit' && /[kMG]?We$/.test(text.slice(t.numEnd, end).trim())) role = 'out';
+    let hedge = hedgeBefore(text, start);
+    // "over two weeks", "for over 3 hours" speak of the time the claim covers.
+    if (kind === 'duration' && (hedge === 'more-than' || hedge === 'less-than')) hedge = undefined;
+    // A range's lower end must be the lower number ("6–3 mN" is read as 3 to 6).
+    if (upper !== undefined) {
+      try {
+        const unit = FIGURE_SI_UNIT[kind];
+        if (parseQuantity(upper, unit) < parseQuantity(quantity, unit)) [quantity, upper] = [upper, quantity];
+      } catch {
+        /* left to the final pass */
+      }
+    }
+    drafts.push({ start, end, kind, quantity, upper, role, hedge, derived, assumption, direction, ofInput });
+    floor = Math.max(end, lastRoleWords.end);
+  }
+
+  // "twice the energy it consumes", "a threefold output over its input": a gain in words.
+  MULTIPLE_WORD_RE.lastIndex = 0;
+  for (let m = MULTIPLE_WORD_RE.exec(text); m; m = MULTIPLE_WORD_RE.exec(text)) {
+    const at = m.index + m[0].length;
+    const after = text.slice(at, at + 90);
+    const light = /^[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light(?!\p{L})/iu.exec(after);
+    if (light && !drafts.some((d) => d.start <= m!.index && m!.index < d.end)) {
+      const value = MULTIPLE_VALUE[m[1].toLowerCase().replace('-', '')];
+      if (value) {
+        const d: Draft = { start: m.index, end: at + light[0].length, kind: 'speed', quantity: `${value * C_M_PER_S} m/s`, role: null };
+        const pos = drafts.findIndex((x) => x.start > m!.index);
+        if (pos < 0) drafts.push(d);
+        else drafts.splice(pos, 0, d);
+      }
+      continue;
+    }
+    // ("draws 200 W and … puts out three times that": a multiple of the input just stated.)
+    const ofThat = /^[^\S\n]+(?:that|this)(?!\p{L})/iu.test(after) && drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in' && d.end <= m!.index && d.start >= windowStart(text, m!.index, 0, 400));
+    if (!ofThat && !/^[^\S\n]+(?:the|its|as much|as many|more)[^.;!?\n]{0,60}(?:input|consum\w*|draws?|uses?|takes?|supplied|put in|fed|it gets|goes in)/iu.test(after)) continue;
+    if (drafts.some((d) => d.start <= m!.index && m!.index < d.end)) continue;
+    const value = MULTIPLE_VALUE[m[1].toLowerCase().replace('-', '')];
+    if (!value) continue;
+    const sentence = sentenceAround(text, m.index, at);
+    const heatPump = HEAT_PUMP_RE.test(sentence);
+    const d: Draft = heatPump
+      ? { start: m.index, end: at, kind: 'cop', quantity: String(value), role: 'heating', assumption: 'A heat pump\'s heat out as a multiple of its work in: read as a heating COP.' }
+      : { start: m.index, end: at, kind: 'efficiency', quantity: String(value), role: null, derived: 'output as a multiple of the input' };
+    const pos = drafts.findIndex((x) => x.start > m!.index);
+    if (pos < 0) drafts.push(d);
+    else drafts.splice(pos, 0, d);
+  }
+
+  relate(text, drafts);
+
+  const figures: Figure[] = [];
+  for (const d of drafts) {
+    const unit = FIGURE_SI_UNIT[d.kind];
+    let si: number;
+    let up: Figure['upper'];
+    try {
+      si = parseQuantity(d.quantity, unit);
+      if (d.upper !== undefined) {
+        const u = parseQuantity(d.upper, unit);
+        up = { quantity: d.upper, si: u, display: formatQuantity(u, unit) };
+      }
+    } catch (err) {
+      if (err instanceof QuantityError) continue; // not a figure after all (kept out rather than guessed)
+      throw err;
+    }
+    const f: Figure = {
+      id: `f${figures.length + 1}`,
+      kind: d.kind,
+      quantity: d.quantity,
+      text: text.slice(d.start, d.end),
+      start: d.start,
+      end: d.end,
+      si,
+      unit,
+      display: formatQuantity(si, unit),
+      role: d.role,
+    };
+    if (up) f.upper = up;
+    if (d.hedge) f.hedge = d.hedge;
+    if (d.derived) f.derived = d.derived;
+    if (d.assumption) f.assumption = d.assumption;
+    figures.push(f);
+  }
+  return figures;
+}

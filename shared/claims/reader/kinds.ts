@@ -1,0 +1,164 @@
+/**
+ * What a percentage or a bare number is, by its context (the claim reader, shared/claims/reader.ts,
+ * pass 2): an efficiency, a COP (heating or cooling, or from an EER), a quantum efficiency, a share
+ * of the speed of light or of the Carnot efficiency, a gain ("1.3 units back for every unit", "three
+ * times the energy it takes", "60 % more out than in", "150 % of its input"); and the words that make
+ * seconds a specific impulse and "degrees" a temperature.
+ */
+import { BARE_CONNECTORS, C_M_PER_S, EFFICIENCY_CHANGE_WORDS, ISP_WORDS, QUANTUM_EFFICIENCY_WORDS } from '../figures-vocabulary';
+import type { FigureKind, FigureRole } from '../types';
+import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
+
+const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|)»”"'’]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
+const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
+/** An energy efficiency ratio (EER or SEER, in BTU/h of cooling per watt): a cooling COP × 3.412. */
+const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
+/** 1 BTU_IT/h = 0.293 071 1 W (NIST SP 811, Appendix B.8). */
+const BTU_PER_H_IN_W = 0.29307107;
+const COP_WORDS_BEFORE_RE = new RegExp(`(?<!\\p{L})coefficients?[\\s-]+of[\\s-]+performance(?:[^\\S\\n]*\\(COP\\))?${CONNECT}$`, 'iu');
+const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|η(?:_?(?:th|thermal|c|Carnot))?|eta(?:_?(?:th|thermal))?)(?!\\p{L})${CONNECT}$`, 'iu');
+const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})([^\\d.;!?\\n]{0,60})$`, 'iu');
+const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');
+/** "efficiency … 45%": the keyword, then up to 60 characters without digits or a sentence break. */
+const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip)(?!\p{L})([^\d.;!?\n]{0,60})$/iu;
+const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
+/** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
+const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)|round[- ]?trip(?:[^\S\n]+efficiency)?)(?!\p{L})/iuy;
+/** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */
+const PERCENT_OF_HEAT_RE =
+  /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:[\p{L}-]+[^\S\n]+)?(?:light|radiation|power|energy)|radiant (?:power|energy|heat)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
+/** "5 % conversion", "61 % net", ", 25 %, leaves as shaft work": a share turned into work or electricity. */
+const SHARE_AS_WORK_RE =
+  /[^\S\n]*(?:(?:net|gross|conversion|thermal|electrical|electric|overall|cycle|first-law|brake)(?!\p{L})|[,)]?[^\S\n]*(?:leaves|comes out|emerges|is delivered|is returned|appears|ends up)[^\S\n]+as[^\S\n]+(?:useful[^\S\n]+)?(?:shaft[^\S\n]+|mechanical[^\S\n]+|electrical[^\S\n]+)?(?:work|electricity|power|motion))/iuy;
+const SPEED_OF_LIGHT_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light|[^\S\n]*of[^\S\n]+c(?!\p{L})|[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?light[- ]speed/iuy;
+export const TEMPERATURE_CONTEXT_RE = /(?<!\p{L})(?:temperatures?|heat(?:ed|s|ing)?|hot|hotter|warm(?:er|s|ed)?|cold|colder|cool(?:er|s|ed)?|ambient|boil\w*|freez\w*|Celsius|Fahrenheit|thermal|room|outdoor|outside|air|water|collector)(?!\p{L})/iu;
+export const ISP_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})${CONNECT}$`, 'iu');
+export const ISP_AFTER_RE = new RegExp(
+  `[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})|(?:-|[^\\S\\n]+)(?:[\\p{L}–-]+[^\\S\\n]+){0,2}?(?:engines?|thrusters?|rocket motors?|motors?)(?!\\p{L})`,
+  'iuy',
+);
+/** Gains: "1.3 units back for every unit", "three times the energy it takes", "output is 3 times the input". */
+const GAIN_AFTER_RE =
+  /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:(?:to|into|at)[^\S\n]+(?:the|its|a)[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input|work|fuel))?(?:[^\S\n]+(?:in|put in|supplied|consumed|used|spent|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested|taken (?:at|from|in) [^.;!?\n]{0,30}|(?:the|its)[^\S\n]+[\p{L}-]+[^\S\n]+(?:takes|uses|draws|consumes|gets|receives))|(?<=electricity|input|work|fuel|energy|power)(?!\p{L}))/iuy;
+/** "For every unit of electricity we put in, the amplifier gives back 1.3." */
+const GAIN_BEFORE_RE =
+  /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
+const TIMES_AFTER_RE =
+  /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical)[^\S\n]+)?(?:input|consumption|in(?!\p{L})|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in|what (?:it|the [\p{L}-]+) (?:is fed|takes|draws|uses|consumes|gets|receives|is given))/iuy;
+const TIMES_BEFORE_RE = /(?<!\p{L})(?:output|yield|gain|returns?|delivers?|produces?|generates?|puts? out|gives?(?: back| out)?|makes|provides|supplies|sends? back)(?:[^\S\n]+(?:is|of|was|are|reaches|reached|power|energy|exactly|about|roughly|some|nearly))*[^\S\n]*$/iu;
+/** "the output exceeds the input by a factor of 1.5", "output is higher than input by a factor of 2". */
+const FACTOR_BEFORE_RE =
+  /(?<!\p{L})(?:output|out|yield|production)[^.;!?\n]{0,40}(?:exceeds?|exceeding|is (?:higher|greater|larger|more) than|surpass\w*|outstrips?)[^.;!?\n]{0,30}(?:input|consumption|supply)[^.;!?\n]{0,20}by (?:a factor of|a ratio of)(?:[^\S\n]+(?:at least|about|roughly|some|nearly|over))?[^\S\n]*$/iu;
+/** "150 % of its input power", "120 % of the energy supplied": an output as a share of the input. */
+const PERCENT_OF_INPUT_RE =
+  /[^\S\n]*of[^\S\n]+what[^\S\n]+(?:it|they|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:draws?|takes?|consumes?|uses?|gets?|is (?:given|fed|supplied)|(?:is )?put in|puts? in|pulls?)(?!\p{L})|[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|(?:energy|power) (?:in|supplied|consumed|drawn|fed|put|(?:it|they) (?:receives?|takes?|gets?|draws?|consumes?)|received|taken in)|supply|electrical input)(?!\p{L})/iuy;
+/** "1.3 W for each watt in", "1.3 J back per joule supplied": a gain written with a unit. */
+export const GAIN_PER_UNIT_RE =
+  /[^\S\n]*(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+)?(?:(?:back|out|returned)[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(?:watt|joule|kWh|kilowatt-hour|unit|W|J)s?(?!\p{L})/iuy;
+/** Multiples in words: "twice the energy it consumes", "three-fold its input". */
+export const MULTIPLE_WORD_RE = /(?<!\p{L})(half|twice|double|triple|thrice|quadruple|two-?fold|three-?fold|four-?fold|five-?fold|ten-?fold)(?!\p{L})/giu;
+export const MULTIPLE_VALUE: Record<string, number> = { half: 0.5, twice: 2, double: 2, triple: 3, thrice: 3, quadruple: 4, twofold: 2, threefold: 3, fourfold: 4, fivefold: 5, tenfold: 10 };
+/** "a power gain of 2.4": only over an input, or in a text about free energy (not an amplifier's gain in dB). */
+const POWER_GAIN_BEFORE_RE = /(?<!\p{L})(?:power|energy)[^\S\n]+gain(?:[^\S\n]*(?:[=:]|of|is|was|reaching|about|around|approximately|roughly|near|up to|over|above|exceeding))*[^\S\n]*$/iu;
+const OVER_UNITY_WORDS_RE = /(?<!\p{L})(?:over-?unity|free energy|zero-?point|ZPE|vacuum energy|self-?running|perpetual|magnet motor|more energy than)(?!\p{L})/iu;
+const RATIO_BEFORE_RE = /(?<!\p{L})(?:over-?unity|overunity|output[- ]to[- ]input|out(?:put)?\/in(?:put)?|output\/input|energy (?:out|return)[- ]to[- ](?:energy )?in(?:put)?)(?:[^\S\n]+(?:ratio|factor|coefficient))?(?:[^\S\n]*(?:[=:≈~]|of|is|was|reaching|about|around|approximately|roughly|near|up to|over|above|exceeding))*[^\S\n]*$/iu;
+
+/** For "60 % more energy out than in": the percentage is added to 1. */
+type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; unit: string; assumption?: string; more?: boolean; derived?: string; ofInput?: boolean } | null;
+
+/** "60 % more electrical energy out than in", "30 % more power than it draws": a gain of 1 + p. */
+const PERCENT_MORE_RE =
+  /[^\S\n]*(?:above|over|more than|in excess of|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:electrical|electric)[^\S\n]+)?(?:input|consumption|power in|energy in|supply)(?!\p{L})|[^\S\n]*(?:more|extra|excess|surplus|additional)[^\S\n]+(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)?[^\S\n]*(?:out[^\S\n]+)?(?:than|over|above|beyond)[^\S\n]+(?:(?:it|the|its)[^\S\n]+)?(?:[\p{L}\d.,-]+[^\S\n]+){0,4}?(?:in|input|takes|uses|consumes|draws|is fed|goes in|consumption|supply)(?!\p{L})|[^\S\n]*(?:more|extra)[^\S\n]+than[^\S\n]+(?:that|this|it)(?!\p{L})/iuy;
+
+/** "70 % of the Carnot efficiency": a share of the bound, made an efficiency once the temperatures are known. */
+const CARNOT_SHARE_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:Carnot|ideal Carnot|reversible)(?:[^\S\n]+(?:efficiency|limit|bound|value|maximum|figure))?(?!\p{L})/iuy;
+export const CARNOT_SHARE = 'a share of the Carnot efficiency';
+
+/** What a percentage is, by its context. */
+export function readPercent(text: string, start: number, end: number, floor: number): PercentReading {
+  // 'at "about 29 %" efficiency': the words after a closing quote.
+  end += /^["”’'»]*/u.exec(text.slice(end, end + 3))![0].length;
+  CARNOT_SHARE_AFTER_RE.lastIndex = end;
+  if (CARNOT_SHARE_AFTER_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '', derived: CARNOT_SHARE };
+  SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
+  const light = SPEED_OF_LIGHT_AFTER_RE.exec(text);
+  if (light) return { kind: 'speed', factor: C_M_PER_S / 100, unit: 'm/s' };
+  const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start);
+  QE_AFTER_RE.lastIndex = end;
+  const qe = QE_BEFORE_RE.exec(before);
+  if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };
+  PERCENT_OF_INPUT_RE.lastIndex = end;
+  if (PERCENT_OF_INPUT_RE.test(text) && !QE_BEFORE_RE.test(before)) {
+    // "A heat-pump dryer gives 250 % of its electrical input as heat": a heating COP.
+    if (HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text.replace(HEAT_PUMP_RE, '')) && /(?<!\p{L})(?:heat|warmth|heating)(?!\p{L})/iu.test(sentenceAround(text, start, end))) {
+      return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: "A heat pump's heat out as a percentage of its work in: read as a heating COP." };
+    }
+    return { kind: 'efficiency', factor: 1, unit: '%', ofInput: true };
+  }
+  PERCENT_MORE_RE.lastIndex = end;
+  if (PERCENT_MORE_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '', more: true };
+  if (/(?<!\p{L})(?:output|out|production|yield)[^.;!?\n]{0,40}(?:exceeds?|exceeding|surpass\w*|is higher than|is greater than|beats?|tops?)[^.;!?\n]{0,40}(?:input|consumption|supply)[^.;!?\n]{0,15}?by[^\S\n]*(?:about|some|roughly|nearly|over|fully)?[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 120), start))) {
+    return { kind: 'efficiency', factor: 0.01, unit: '', more: true };
+  }
+  EFFICIENCY_AFTER_RE.lastIndex = end;
+  PERCENT_OF_HEAT_RE.lastIndex = end;
+  SHARE_AS_WORK_RE.lastIndex = end;
+  const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text);
+  const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before);
+  // "Ammonia–water cycle engine, 19 % at a 120 °C heat source": a percentage said right after a heat
+  // engine named, with a temperature in the same sentence, is its efficiency.
+  const engineSaid =
+    /(?<!\p{L})(?:engines?|turbines?|Stirling|thermoelectric (?:generators?|modules?)|TEGs?|power (?:plants?|stations?|cycles?)|(?:Rankine|Brayton|ORC|steam|Kalina) cycles?)[^\S\n]*[,:–—-]?[^\S\n]*(?:(?:at|of|reaches|reached|achieves|achieved|claims|claimed|with|about|around|roughly|only|just)[^\S\n]+)*$/iu.test(before) &&
+    /°|kelvin|degrees|Celsius|Fahrenheit|(?<!\p{L})K(?!\p{L})/iu.test(sentenceAround(text, start, end));
+  const efficiency = after || engineSaid || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1]));
+  if (!efficiency) return null;
+  // The machine is named anywhere in the claim ("Had our air-to-water unit fitted. … '350 % efficient'").
+  const sentence = text;
+  const value = Number((/^[\d.,]+/.exec(text.slice(start, end))?.[0] ?? '').replace(',', '.'));
+  if (HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
+    if (!(value <= 100)) return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump said to be more than 100 % efficient: read as a heating COP (heat delivered over work put in).' };
+    return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump\'s percentage read as a heating COP (heat delivered over work put in).' };
+  }
+  if (COOLING_MACHINE_RE.test(sentence) && value > 100) {
+    return { kind: 'cop', role: 'cooling', factor: 0.01, unit: '', assumption: 'A refrigerator or air conditioner said to be more than 100 % efficient: read as a cooling COP (heat drawn out over work put in).' };
+  }
+  return { kind: 'efficiency', factor: 1, unit: '%' };
+}
+
+/** The kind of a bare number, from the words before it; a gain or ratio from the words after. */
+export function bareKind(text: string, start: number, end: number, floor: number): { kind: FigureKind; role?: FigureRole; derived?: string; factor?: number } | null {
+  const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start);
+  if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before)) return { kind: 'cop' };
+  if (EER_BEFORE_RE.test(before)) return { kind: 'cop', role: 'cooling', factor: BTU_PER_H_IN_W, derived: 'COP = EER × 0.293 071 (BTU/h per watt to watts per watt)' };
+  if (QE_BEFORE_RE.test(before) && /(?:[=:]|of|is|was|reaching|above|over|exceeding)[^\S\n]*$/i.test(before)) return { kind: 'quantum-efficiency' };
+  if (EFFICIENCY_BARE_BEFORE_RE.test(before)) return { kind: 'efficiency' };
+  if (RATIO_BEFORE_RE.test(before)) return { kind: 'efficiency', derived: 'a ratio of output to input' };
+  if (FACTOR_BEFORE_RE.test(before)) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
+  if (POWER_GAIN_BEFORE_RE.test(before) && !/^[^\S\n]*(?:dB|decibels?)(?!\p{L})/iu.test(text.slice(end, end + 12))) {
+    const rest = text.slice(end, end + 60);
+    const sentence = sentenceAround(text, start, end);
+    if (
+      !/(?<!\p{L})(?:amplifiers?|transistors?|antennas?|dB|decibels?|op-?amps?|preamp\w*)(?!\p{L})/iu.test(text) &&
+      (/^[^\S\n]*(?:over|above|relative to|compared (?:with|to)|against)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:input|drive|driving|supply|electronics|power in|consumption)/iu.test(rest) ||
+        OVER_UNITY_WORDS_RE.test(sentence) ||
+        /(?<!\p{L})(?:generators?|motor-?generators?|alternators?)(?!\p{L})/iu.test(sentence))
+    ) {
+      return { kind: 'efficiency', derived: 'a power gain over the input' };
+    }
+  }
+  GAIN_AFTER_RE.lastIndex = end;
+  if (GAIN_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'units out for each unit in' };
+  PERCENT_OF_HEAT_RE.lastIndex = end;
+  if (PERCENT_OF_HEAT_RE.test(text)) return { kind: 'efficiency' };
+  if (GAIN_BEFORE_RE.test(text.slice(windowStart(text, start, floor, 160), start))) return { kind: 'efficiency', derived: 'units out for each unit in' };
+  TIMES_AFTER_RE.lastIndex = end;
+  if (TIMES_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
+  if (
+    /^[^\S\n]*(?:times|x|×)(?!\p{L})/iu.test(text.slice(end, end + 8)) &&
+    TIMES_BEFORE_RE.test(before) &&
+    (/input|consum|draw|put in|supplied|takes|uses/i.test(text.slice(end, end + 60)) || /^[^\S\n]*(?:times|x|×)[^\S\n]+(?:that|this)(?!\p{L})/iu.test(text.slice(end, end + 16)))
+  ) {
+    return { kind: 'efficiency', derived: 'output as a multiple of the input' };
+  }
+  return null;
+}

@@ -1,0 +1,213 @@
+/**
+ * Numbers (the claim reader, shared/claims/reader.ts, pass 1): digits with signs, decimals, English
+ * thousands separators, decimal commas, e-notation and "× 10⁻³"; "5K cycles", "2 million"; numbers
+ * in words through `compromise` ("three and a half hours", "half a kilowatt"); "an hour and a half";
+ * "3/4 hp"; uncertainties in brackets ("2.31(4) mN"); and the numbers that are never figures (labels
+ * such as "Figure 2", "§ 3", years before an initial). Each number comes with the unit or percent
+ * sign after it (units.ts).
+ */
+import nlp from 'compromise';
+import { THOUSAND_NOUNS, LABEL_WORDS } from '../figures-vocabulary';
+import { alt } from './context';
+import { readSuffix, unitAt, type Suffix } from './units';
+
+/** "5K cycles", "5 k hours": a thousand before a counted noun or a unit word. */
+const THOUSAND_RE = new RegExp(`(?:[^\\S\\n]?[kK](?=[^\\S\\n]+(?:${alt(THOUSAND_NOUNS)})(?![\\p{L}]))|[^\\S\\n]+thousand(?!\\p{L}))`, 'uy');
+const MILLION_RE = /[^\S\n]+(million|billion|trillion|M(?=[^\S\n]+(?:cycles?|hours?|miles?|km|units?)))(?!\p{L})/uy;
+const MULTIPLIER: Record<string, number> = { million: 1e6, M: 1e6, billion: 1e9, trillion: 1e12 };
+
+/**
+ * A number in digits: sign, digits (English thousands separators), decimals (a point, or a comma
+ * that cannot be a thousands separator), then e-notation or × 10^n.
+ */
+const NUMBER_RE =
+  /(?<![\p{L}\p{N}_.,^])(?<![\p{N}.,]\/)([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d{1,3}(?:[ \u00A0\u2009\u202F]\d{3})+(?![\d]|[^\S\n]\d)(?:,\d+)?|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?![\p{N}])|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
+
+const SUPERSCRIPT_DIGITS: Record<string, string> = { '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-', '⁺': '' };
+
+const LABEL_RE = new RegExp(`(?:(?<!\\p{L})(?:${alt(LABEL_WORDS)})|[§#¶])[^\\S\\n]*$`, 'iu');
+const PLUS_MINUS_RE = /(?:±|\+\/-|\+-)[^\S\n]*$/u;
+
+export interface NumberToken {
+  start: number;
+  /** End of the number itself (a thousand multiplier included). */
+  numEnd: number;
+  /** End of the number and its unit or percent sign. */
+  end: number;
+  /** The number as parseQuantity reads it: "-40", "1500", "3.4e5". */
+  num: string;
+  suffix: Suffix;
+  /** A label's number, a year before an initial: never a figure. */
+  skip: boolean;
+  /** Written after "±": an uncertainty. */
+  plusMinus: boolean;
+  /** "2.31(4) mN": the standard uncertainty in the last digits (here 0.04). */
+  unc?: number;
+  consumed: boolean;
+  /** Written in words ("two weeks"): kept only with a unit. */
+  words: boolean;
+}
+
+function cleanNumber(m: RegExpExecArray): string {
+  const sign = m[1] === undefined || m[1] === '+' ? '' : '-';
+  let exp: string | undefined = m[4] ?? m[5];
+  if (exp !== undefined) exp = exp.replace('−', '-');
+  else if (m[6] !== undefined) exp = [...m[6]].map((c) => SUPERSCRIPT_DIGITS[c]).join('');
+  // Digits grouped by spaces ("1 500", SI style) are one number.
+  let int = m[2].replace(/[ \u00A0\u2009\u202F]/g, '');
+  let frac = m[3] ?? '';
+  if (/^\d{1,3}(?:,\d{3})+$/.test(int)) int = int.replace(/,/g, '');
+  else if (int.includes(',')) {
+    // A decimal comma: "2,5", "0,75", "3,14159".
+    const [a, b] = int.split(',');
+    int = a;
+    frac = `.${b}`;
+  }
+  return `${sign}${int}${frac}${exp !== undefined ? `e${exp}` : ''}`;
+}
+
+const WORD_NUMBER_HINT = /(?<!\p{L})(?:billion|million|quarter|third|tenth|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|sixteen|seventeen|eighteen|nineteen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|thousand|half|dozen|a quarter)(?!\p{L})/iu;
+
+const FRACTION_WORDS_RE = /(?<!\p{L})(half a dozen|half|a quarter|one quarter|three quarters|a third|one third|two thirds|a tenth|one tenth|a dozen|a hundred|a thousand|a million|a billion|a trillion)(?:[^\S\n]+of)?(?:[^\S\n]+an?)?(?=[^\S\n]+\p{L}|-\p{L})/giu;
+const FRACTION_VALUE: Record<string, number> = {
+  'half a dozen': 6, 'a dozen': 12,
+  half: 0.5, 'a quarter': 0.25, 'one quarter': 0.25, 'three quarters': 0.75, 'a third': 1 / 3, 'one third': 1 / 3, 'two thirds': 2 / 3,
+  'a tenth': 0.1, 'one tenth': 0.1, 'a hundred': 100, 'a thousand': 1000, 'a million': 1e6, 'a billion': 1e9, 'a trillion': 1e12,
+};
+
+/** Numbers in words, through compromise: start, end and value of each. */
+function wordNumbers(text: string): { start: number; end: number; value: number }[] {
+  if (!WORD_NUMBER_HINT.test(text)) return [];
+  const out: { start: number; end: number; value: number }[] = [];
+  // compromise takes a capital mid-sentence ("… write: Twenty watts") for a name: read a lower-case
+  // copy of the same length, so that the offsets hold.
+  const doc = nlp(Array.from(text, (c) => (c.toLowerCase().length === c.length ? c.toLowerCase() : c)).join(''));
+  const found = doc.numbers().json({ offset: true }) as { text: string; offset: { start: number; length: number }; number?: { num?: number } }[];
+  for (const n of found) {
+    // "- twenty watts" (a list item): compromise counts the dash in the length, not in the start.
+    const dash = /^[-–—][^\S\n]*/u.exec(n.text)?.[0].length ?? 0;
+    const raw = text.slice(n.offset.start, n.offset.start + n.offset.length - dash);
+    if (/\d/.test(raw)) continue; // digits are read by NUMBER_RE
+    const value = n.number?.num;
+    if (typeof value !== 'number' || !Number.isFinite(value)) continue;
+    if (value === 0 && !/(?<!\p{L})(?:zero|nought|naught|nil)(?!\p{L})/iu.test(raw)) continue; // "half an", read as 0
+    const trimmed = raw.replace(/[\s-]+$/u, '');
+    out.push({ start: n.offset.start, end: n.offset.start + trimmed.length, value });
+  }
+  // "half a kilowatt", "a quarter of a kilowatt", "a billion km/h": compromise leaves these.
+  for (const m of text.matchAll(FRACTION_WORDS_RE)) {
+    const value = FRACTION_VALUE[m[1].toLowerCase()];
+    if (value === undefined) continue;
+    // Part of a number compromise read ("two and a half"): leave it.
+    if (out.some((o) => o.start < m.index! && m.index! < o.end)) continue;
+    // Longer than what compromise read there ("half" of "half a newton"): this reading replaces it.
+    const end = m.index! + m[0].length;
+    for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
+    out.push({ start: m.index!, end, value });
+  }
+  // "four and a half," where compromise stops at "four and a".
+  for (const m of text.matchAll(AND_A_HALF_RE)) {
+    const whole = SMALL_NUMBER_WORDS.indexOf(m[1].toLowerCase());
+    if (whole < 0) continue;
+    const end = m.index! + m[0].length;
+    for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
+    out.push({ start: m.index!, end, value: whole + (m[2].toLowerCase() === 'half' ? 0.5 : 0.25) });
+  }
+  out.sort((a, b) => a.start - b.start);
+  return out;
+}
+
+const SMALL_NUMBER_WORDS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six', 'seven', 'eight', 'nine', 'ten', 'eleven', 'twelve'];
+const AND_A_HALF_RE = new RegExp(`(?<!\\p{L})(${SMALL_NUMBER_WORDS.join('|')})[^\\S\\n]+and[^\\S\\n]+an?[^\\S\\n]+(half|quarter)(?!\\p{L})`, 'giu');
+
+/** A unit given in a label just before a number: "[mN]:", "(kW) =", "/ W:". */
+const HEADER_UNIT_RE = /(?:[\[(][^\S\n]*([^\s\])]{1,8})[^\S\n]*[\])]|(?<![\p{L}\d])[\p{L}_{}]+[^\S\n]*\/[^\S\n]*([^\s:=\/]{1,8}))[^\S\n]*[:=][^\S\n]*$/u;
+
+export function tokenize(text: string): NumberToken[] {
+  const tokens: NumberToken[] = [];
+  NUMBER_RE.lastIndex = 0;
+  const push = (start: number, numEndRaw: number, num: string, words: boolean) => {
+    let numEnd = numEndRaw;
+    let value = num;
+    THOUSAND_RE.lastIndex = numEnd;
+    const k = THOUSAND_RE.exec(text);
+    if (k) {
+      value = String(Number(num) * 1000);
+      numEnd += k[0].length;
+    } else {
+      MILLION_RE.lastIndex = numEnd;
+      const mm = MILLION_RE.exec(text);
+      if (mm) {
+        value = String(Number((Number(num) * MULTIPLIER[mm[1]]).toPrecision(15)));
+        numEnd += mm[0].length;
+      }
+    }
+    const read = readSuffix(text, numEnd);
+    let { suffix } = read;
+    const { end } = read;
+    // A unit in a column label: "Thrust [mN]: 12.3", "P_in / W: 1.5E+3", "Power (kW) = 2".
+    if (suffix === null && !words) {
+      const label = HEADER_UNIT_RE.exec(text.slice(Math.max(0, start - 40), start));
+      const u = label ? unitAt(label[1] ?? label[2], 0) : null;
+      if (u && u.end === (label![1] ?? label![2]).length) suffix = { type: 'unit', form: u.form };
+    }
+    const before = text.slice(Math.max(0, start - 16), start);
+    let skip = LABEL_RE.test(before);
+    if (!skip && /^\d{4}$/.test(num) && /^\d{4}$/.test(text.slice(start, numEndRaw)) && numEnd === numEndRaw) {
+      const year = Number(num);
+      const after = text.slice(numEnd, end);
+      if (year >= 1800 && year <= 2100) {
+        // "in 2019 A. N. Other" (an initial), "the 1990s", "in 2025 s" is not a time.
+        if (suffix?.type === 'unit' && after.trim().length === 1 && /^[.,]/.test(text.slice(end, end + 1))) skip = true;
+        if (suffix?.type === 'unit' && /^s$/.test(after)) skip = true;
+      }
+    }
+    tokens.push({ start, numEnd, end, num: value, suffix, skip, plusMinus: PLUS_MINUS_RE.test(before), consumed: false, words });
+  };
+  for (let m = NUMBER_RE.exec(text); m; m = NUMBER_RE.exec(text)) {
+    // "2.31(4) mN", "410(5) W", "163.0(5) km/s": the uncertainty in the last digits, in brackets.
+    const end = m.index + m[0].length;
+    const u = /^\((\d{1,3})\)/.exec(text.slice(end));
+    if (u && /^[\d.]+$/.test(m[0])) {
+      const decimals = (m[0].split('.')[1] ?? '').length;
+      push(m.index, end + u[0].length, cleanNumber(m), false);
+      tokens[tokens.length - 1].unc = Number(u[1]) / 10 ** decimals;
+      NUMBER_RE.lastIndex = end + u[0].length;
+      continue;
+    }
+    push(m.index, end, cleanNumber(m), false);
+  }
+  // "an hour and a half", "a day and a half": one and a half of the unit.
+  for (const m of text.matchAll(/(?<!\p{L})(?:an?|one)[^\S\n]+(hour|day|week|month|year|minute)[^\S\n]+and[^\S\n]+a[^\S\n]+half(?!\p{L})/giu)) {
+    const unit = unitAt(text, m.index! + m[0].indexOf(m[1]) - 1);
+    if (!unit) continue;
+    tokens.push({ start: m.index!, numEnd: m.index!, end: m.index! + m[0].length, num: '1.5', suffix: { type: 'unit', form: unit.form }, skip: false, plusMinus: false, consumed: false, words: true });
+  }
+  // "3 kWh each day", "1.8·10⁴ J each minute": a rate over one of the unit.
+  for (const m of text.matchAll(/(?<!\p{L})(?:each|every|per|a)(?=[^\S\n]+(?:day|hour|week|month|year|minute)(?!\p{L}))/giu)) {
+    if (tokens.some((t) => t.start <= m.index! && m.index! < t.end)) continue;
+    if (!/(?<!\p{L})(?:kWh|MWh|Wh|J|kJ|MJ|GJ|BTU|joules?|kilowatt-hours?)[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,4}$/iu.test(text.slice(Math.max(0, m.index! - 40), m.index!))) continue;
+    push(m.index!, m.index! + m[0].length, '1', true);
+  }
+  // "for an hour", "over a day": one of the unit.
+  for (const m of text.matchAll(/(?<=(?:for|over|in|during|within|after|across|lasting|running)[^\S\n]+)(?:an?|one)(?=[^\S\n]+(?:full[^\S\n]+|whole[^\S\n]+|single[^\S\n]+)?(?:hour|day|week|fortnight|month|year|minute)(?!\p{L}))/giu)) {
+    if (tokens.some((t) => t.start <= m.index! && m.index! < t.end)) continue;
+    if (/^[^\S\n]+(?:hour|day|week|month|year|minute)[^\S\n]+and[^\S\n]+a[^\S\n]+half/iu.test(text.slice(m.index! + m[0].length))) continue;
+    const gap = /^[^\S\n]+(?:(?:full|whole|single)[^\S\n]+)?/u.exec(text.slice(m.index! + m[0].length))![0];
+    push(m.index!, m.index! + m[0].length + gap.length - 1, '1', true);
+  }
+  for (const w of wordNumbers(text)) {
+    if (tokens.some((t) => t.start < w.end && w.start < t.end)) continue;
+    push(w.start, w.end, String(w.value), true);
+  }
+  // "a 3/4 hp motor", "1/2 W": a simple fraction before a unit replaces the number before its slash.
+  for (const m of text.matchAll(/(?<![\p{N}.,\/])(\d{1,2})\/(\d{1,2})(?![\p{N}.,\/])/gu)) {
+    const [a, b] = [Number(m[1]), Number(m[2])];
+    const end = m.index! + m[0].length;
+    if (!(b > 1 && a < b) || !unitAt(text, end)) continue;
+    for (let i = tokens.length - 1; i >= 0; i--) if (tokens[i].start >= m.index! && tokens[i].start < end) tokens.splice(i, 1);
+    push(m.index!, end, String(a / b), false);
+  }
+  tokens.sort((a, b) => a.start - b.start);
+  return tokens;
+}

@@ -1,0 +1,281 @@
+/**
+ * Relations between figures (the claim reader, shared/claims/reader.ts, pass 3), as derived figures
+ * with the words they came from: the roles labels give ("P_out/P_in ="), an amplifier's in and out,
+ * an excess over an input, a power from a current and a voltage in one clause (I·V), a "COP" of a
+ * device that moves no heat, a thrust per power in words, a change of weight as a force, an output
+ * short of the input, out = in + excess, the output of a stated gain or efficiency, a self-running
+ * device's zero input and a heat pump's COP; then temperatures.ts and durations.ts.
+ */
+import { HARVEST_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
+import { formatQuantity } from '../../worksheet/quantity';
+import { formatPrint } from '../print';
+import { FIGURE_SI_UNIT, type FigureRole } from '../types';
+import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, windowStart } from './context';
+import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
+import { relateDurations } from './durations';
+import { roleFor } from './roles';
+import { ROCKET_RE, rolesByContext } from './roles-by-context';
+import { relateTemperatures } from './temperatures';
+
+const SELF_RUNNING_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'giu');
+const HARVEST_RE = new RegExp(`(?<!\\p{L})(?:${alt(HARVEST_WORDS)})(?!\\p{L})`, 'iu');
+
+/** Devices whose "COP" is an output-over-input ratio, not a heat pump's. */
+const ELECTRICAL_GAIN_RE = /(?<!\p{L})(?:circuits?|coils?|generators?|alternators?|motors?|batter(?:y|ies)|electrical energy|electricity out|electrical output|magnets?|over-?unity|free energy|zero-?point|ZPE|self-charging|self-running|transformers?|capacitors?|resonators?|electrolys\w*|HHO|oxyhydrogen|palladium|deuterium|deuteride|LENR|cold fusion|low-energy nuclear|nickel[–-]hydrogen|excess heat)(?!\p{L})/iu;
+
+/** "P_out/P_in =", "output/input:": a ratio of two labelled figures about to be given. */
+const RATIO_LABELS_RE = /(?<!\p{L})([PEW]_?\{?(?:out|in|o|i)\}?|outputs?|inputs?|out|in)[^\S\n]*\/[^\S\n]*([PEW]_?\{?(?:out|in|o|i)\}?|outputs?|inputs?|out|in)(?!\p{L})[^\S\n]*[=:≈~][^\S\n]*/giu;
+
+/** A verb that makes a signal bigger, just before the first of two figures ("amplifies a 1 mW signal to 100 mW"). */
+const AMPLIFY_BEFORE_RE = /(?<!\p{L})(?:amplif(?:y|ies|ied|ying)|boost(?:s|ed|ing)?|lift(?:s|ed|ing)?|rais(?:e|es|ed|ing)|steps? up|stepped up|stepping up)[^\S\n]+(?:(?:a|an|the|its|their)[^\S\n]+)?(?:(?:input|incoming|weak|small|faint|signal)[^\S\n]+){0,2}(?:(?:signal|input|power|level)[^\S\n]+)?(?:from[^\S\n]+)?$/iu;
+
+/** A verb of lifting right before a mass: "lifts 3 lbs", "lifted its own 2 kg frame", "levitates a 40 g disc". */
+const LIFTS_BEFORE_RE = /(?<!\p{L})(?:lifts?|lifted|lifting|levitat(?:es?|ed|ing)|raises?|raised|hoists?|hoisted|holds? up|held up|hold(?:s|ing)? aloft|carr(?:y|ies|ied) aloft|hover(?:s|ed|ing)? with)[^\S\n]+(?:(?:its|their|his|her|our|my|the|a|an)[^\S\n]+)?(?:own[^\S\n]+)?(?:(?:about|some|roughly|nearly|over|up to|almost)[^\S\n]+)?$/iu;
+/** Machines that lift loads lawfully by pushing on the ground (their lifted mass is no thrust). */
+const HOIST_RE = /(?<!\p{L})(?:cranes?|hoists?|winch(?:es)?|forklifts?|lift trucks?|elevators?|lifts? (?:shaft|car)|jacks?|pulleys?|block and tackle|levers?|hydraulic|pistons?|arms?|robots?|weightlift\w*|athletes?|balloons?|airships?|blimps?|buoyan\w*|helium|hydrogen|lifters?|ion(?:ic)?[- ]wind|corona|EHD|electrohydrodynamic|drones?|quadcopters?|multicopters?|propellers?|rotor blades?|helicopters?)(?!\p{L})/iu;
+
+/** Relations between the figures read, in this order (see the file's comment). */
+export function relateFigures(text: string, drafts: Draft[]): void {
+  // "P_out/P_in = 3.2 kW / 0.8 kW": the roles in the order the labels give them.
+  for (const m of text.matchAll(RATIO_LABELS_RE)) {
+    const from = m.index! + m[0].length;
+    const [a, b] = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.start >= from);
+    if (!a || !b || a.kind !== b.kind || a.start - from > 12 || !/^[^\S\n]*(?:\/|:|to|vs\.?|versus)[^\S\n]*$/iu.test(text.slice(a.end, b.start))) continue;
+    const side = (label: string): FigureRole => (/out|_\{?o\}?$/i.test(label) ? 'out' : 'in');
+    a.role = side(m[1]);
+    b.role = side(m[2]);
+  }
+
+  // "lifts a 1 mW signal to 100 mW", "boosts the input from 2 W to 40 W": what goes in and what comes out.
+  for (let i = 0; i + 1 < drafts.length; i++) {
+    const [a, b] = [drafts[i], drafts[i + 1]];
+    if (!(a.kind === b.kind && (a.kind === 'power' || a.kind === 'energy'))) continue;
+    const lead = text.slice(Math.max(0, a.start - 50), a.start);
+    if (AMPLIFY_BEFORE_RE.test(lead) && /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,3}?(?:in)?to[^\S\n]+(?:about[^\S\n]+|some[^\S\n]+|roughly[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
+      a.role = 'in';
+      b.role = 'out';
+    }
+  }
+
+  // "4 W more heat than the 20 W it draws": the first is an excess, the second the input.
+  for (let i = 0; i + 1 < drafts.length; i++) {
+    const a = drafts[i];
+    const b = drafts[i + 1];
+    if (!(a.kind === b.kind && (a.kind === 'power' || a.kind === 'energy'))) continue;
+    const gap = text.slice(a.end, b.start);
+    if (/^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:more|extra|additional|over and above|above|beyond|in excess of|on top of)(?:[^\S\n]+[\p{L}-]+){0,4}?[^\S\n]+(?:than|over|of|on|above)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|an[^\S\n]+|a[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}$/iu.test(gap) ||
+      // "1.3 MJ of heat came out beyond the 4.1 MJ supplied"
+      /^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,4}?(?:beyond|over and above|in excess of|on top of)[^\S\n]+(?:the|its|an|a|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?$/iu.test(gap) || /^[^\S\n]+(?:more|extra)[^\S\n]+than[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?$/iu.test(gap)) {
+      a.role = 'excess';
+      b.role = 'in';
+    }
+  }
+
+  // Power from a current and a voltage in the same clause: "12 A at 24 V", "3 amps from a 48-volt pack".
+  for (const cur of drafts.filter((d) => d.kind === 'current')) {
+    // The voltage nearest the current in its sentence ("steps 230 V down to 12 V and delivers 5 A": 12 V).
+    const candidates = drafts.filter((d) => d.kind === 'voltage' && sameClause(text, d, cur) && Math.abs(d.start - cur.start) < 120);
+    // "0.9 A at 24 V": the voltage said with the current, right after or right before it; else the nearest.
+    // ("5 V in at 2 A, 12 V out at 0.75 A": a comma parts two pairs.)
+    const volt =
+      candidates.find((d) => d.start >= cur.end && /^[^\S\n]*(?:at|@|from|on|×|x|\*|\/)?[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
+      candidates.find((d) => d.end <= cur.start && /^[^\S\n]*(?:(?:in|out|input|output|DC|AC)[^\S\n]+)?(?:at|@|×|x|\*|\/)?[^\S\n]*$/iu.test(text.slice(d.end, cur.start))) ??
+      candidates.find((d) => d.start >= cur.end && /^[^\S\n]*,[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
+      candidates.find((d) => d.end <= cur.start && /^[^\S\n]*,[^\S\n]*$/iu.test(text.slice(d.end, cur.start))) ??
+      candidates.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0];
+    if (!volt) continue;
+    const i = siOf(cur);
+    const v = siOf(volt);
+    if (i === null || v === null) continue;
+    // The text states that power itself already.
+    if (drafts.some((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= 0.01 * i * v)) continue;
+    const iu = upperSiOf(cur);
+    const vu = upperSiOf(volt);
+    const first = cur.start < volt.start ? cur : volt;
+    const last = first === cur ? volt : cur;
+    // The role: the words around the current or the voltage ("draws 3 A" → in, "delivers 10 A" → out).
+    // Words between the two ("12 V supply drawing 2.5 A") are the closest; then those around the pair.
+    // "5 V in at 2 A", "12 V out at 0.75 A": in or out said right after either of the two.
+    const said = [volt, cur].map((d) => /^[^\S\n]*(in|out|input|output)(?!\p{L})/iu.exec(text.slice(d.end, d.end + 12))).find((x) => x !== null);
+    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
+    const wordsRole = between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
+    const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null);
+    const role: FigureRole = wordsRole ?? (others.length && others.every((d) => d.role === 'in') ? 'out' : null);
+    insertAfter(drafts, last, {
+      start: first.start,
+      end: last.end,
+      kind: 'power',
+      quantity: typedSi(i * v, 'W'),
+      upper: iu !== null || vu !== null ? typedSi((iu ?? i) * (vu ?? v), 'W') : undefined,
+      role: role === 'excess' ? 'out' : (role ?? 'in'),
+      derived: `power = current × voltage (${formatQuantity(i, 'A')} × ${formatQuantity(v, 'V')})`,
+      assumption: role === null ? 'The power of this current and voltage is read as the power supplied to the device.' : undefined,
+    });
+  }
+
+  // A "COP" of a circuit, a motor or a generator, where nothing moves heat: its output over its input.
+  if (!HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) && ELECTRICAL_GAIN_RE.test(text) && !drafts.some((d) => d.kind === 'temperature')) {
+    for (const d of drafts) {
+      if (d.kind === 'cop' && d.role === null) {
+        d.kind = 'efficiency';
+        d.derived = 'a "COP" of a device that moves no heat: output over input';
+      }
+    }
+  }
+  rolesByContext(text, drafts);
+
+  // "every kilowatt fed to it gives four hundred millinewtons": a thrust per power.
+  for (const d of drafts) {
+    if (d.kind !== 'thrust') continue;
+    const m = /(?<!\p{L})(?:every|each|per|a)[^\S\n]+(kilowatt|watt|kW|W|megawatt|MW)(?!\p{L})[^.;!?\n]{0,60}?(?:gives?|yields?|produces?|makes?|delivers?|buys?|brings?|returns?)[^\S\n]+(?:(?:about|roughly|some|nearly|over|at least)[^\S\n]+)?$/iu.exec(text.slice(Math.max(0, d.start - 120), d.start));
+    if (!m) continue;
+    const unit = /^(?:kilowatt|kW)$/i.test(m[1]) ? 'kW' : /^(?:megawatt|MW)$/.test(m[1]) ? 'MW' : 'W';
+    d.kind = 'thrust-per-power';
+    d.quantity = `${d.quantity} / ${unit}`;
+    d.derived = `thrust for each ${unit} of power`;
+  }
+  // "reduces its weight on the scale by 120 g", "reads 40 g lighter": a force, in grams-force.
+  for (const d of drafts) {
+    if (d.kind !== 'mass') continue;
+    const before = text.slice(Math.max(0, d.start - 60), d.start);
+    const after = text.slice(d.end, d.end + 30);
+    // "lifts 3 lbs off the scale", "lifted its own 2 kg frame": a weight held up, for a drive (not a rocket's or a crane's load).
+    const lifted = LIFTS_BEFORE_RE.test(before) && !ROCKET_RE.test(text) && !HOIST_RE.test(text);
+    if (lifted || /(?:weight|reading|reads|scale|balance)[^.;!?\n:"“”]{0,40}(?:by|of)[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) || /^[^\S\n]*(?:lighter|heavier|less weight|of (?:lift|weight loss|apparent weight)|off (?:its|the) (?:weight|reading))/iu.test(after)) {
+      const kg = siOf(d);
+      if (kg === null) continue;
+      d.kind = 'thrust';
+      d.quantity = `${Number(kg.toPrecision(15))} kgf`;
+      d.role = null;
+      d.derived = lifted ? 'a weight held up, as a force (kilograms-force)' : 'a change of weight on a scale, as a force (kilograms-force)';
+    }
+  }
+
+  // "It delivers 5 W less than the 65 W it draws": out = in − the shortfall.
+  for (let i = 0; i + 1 < drafts.length; i++) {
+    const [a, b] = [drafts[i], drafts[i + 1]];
+    if (!(a.kind === b.kind && (a.kind === 'power' || a.kind === 'energy'))) continue;
+    if (!/^[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,2}?(?:less|lower|short of)[^\S\n]+(?:than[^\S\n]+)?(?:the[^\S\n]+|its[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) continue;
+    const x = siOf(a);
+    const y = siOf(b);
+    if (x === null || y === null || x >= y) continue;
+    a.role = null;
+    b.role = 'in';
+    insertAfter(drafts, b, { start: a.start, end: b.end, kind: a.kind, quantity: typedSi(y - x, FIGURE_SI_UNIT[a.kind]), role: 'out', derived: `output = input − the shortfall (${formatQuantity(y, FIGURE_SI_UNIT[a.kind])} − ${formatQuantity(x, FIGURE_SI_UNIT[a.kind])})` });
+  }
+
+  // out = in + excess, when the text gives no output itself.
+  for (const kind of ['power', 'energy'] as const) {
+    const excess = drafts.find((d) => d.kind === kind && d.role === 'excess' && !d.derived);
+    const input = drafts.find((d) => d.kind === kind && d.role === 'in');
+    const output = drafts.find((d) => d.kind === kind && d.role === 'out');
+    if (excess && input && !output) {
+      const e = siOf(excess);
+      const n = siOf(input);
+      if (e === null || n === null) continue;
+      const unit = FIGURE_SI_UNIT[kind];
+      const eu = upperSiOf(excess);
+      const anchor = excess.start > input.start ? excess : input;
+      insertAfter(drafts, anchor, {
+        start: Math.min(excess.start, input.start),
+        end: Math.max(excess.end, input.end),
+        kind,
+        quantity: typedSi(n + e, unit),
+        upper: eu !== null ? typedSi(n + eu, unit) : undefined,
+        role: 'out',
+        derived: `output = input + excess (${formatQuantity(n, unit)} + ${formatQuantity(e, unit)})`,
+      });
+    }
+  }
+
+  // "25 % more power than its 2 kW input", "five times the 20 W it takes in": with the input stated,
+  // the excess and the output as figures.
+  const GAINS = ['output = input + the percentage more', 'output as a multiple of the input', 'units out for each unit in'];
+  // ("returns 140 % of what it draws": a percentage of the input above 100 %.)
+  const more = drafts.find((d) => d.kind === 'efficiency' && ((d.derived !== undefined && GAINS.includes(d.derived)) || (d.ofInput && (siOf(d) ?? 0) > 1)));
+  if (more) {
+    const g = siOf(more);
+    for (const kind of ['power', 'energy'] as const) {
+      const inputs = drafts.filter((d) => d.kind === kind && d.role === 'in' && (!d.derived || d.derived.startsWith('power = current × voltage')) && sameClause(text, d, more));
+      if (g === null || g <= 1 || inputs.length !== 1 || drafts.some((d) => d.kind === kind && (d.role === 'out' || d.role === 'excess'))) continue;
+      const input = inputs[0];
+      const n = siOf(input);
+      if (n === null) continue;
+      const unit = FIGURE_SI_UNIT[kind];
+      const anchor = more.start > input.start ? more : input;
+      const span = { start: Math.min(more.start, input.start), end: Math.max(more.end, input.end), kind };
+      insertAfter(drafts, anchor, { ...span, quantity: typedSi(n * g, unit), role: 'out', derived: `output = input × ${formatPrint(g)} (${formatQuantity(n, unit)} × ${formatPrint(g)})` });
+      insertAfter(drafts, anchor, { ...span, quantity: typedSi(n * (g - 1), unit), role: 'excess', derived: `excess = input × ${formatPrint(g - 1)} (${formatQuantity(n, unit)} × ${formatPrint(g - 1)})` });
+      break;
+    }
+  }
+
+  // "96 % of its input … draws 250 W", "80,000 BTU/h input, 95 % efficiency": the output the stated
+  // efficiency gives, where the text states only the input.
+  const eta = drafts.find((d) => d.kind === 'efficiency' && !d.derived && (siOf(d) ?? 2) <= 1);
+  if (eta && !more) {
+    for (const kind of ['power', 'energy'] as const) {
+      const inputs = drafts.filter((d) => d.kind === kind && d.role === 'in' && !d.derived);
+      if (inputs.length !== 1 || drafts.some((d) => d.kind === kind && (d.role === 'out' || d.role === 'excess'))) continue;
+      const [input, e, n] = [inputs[0], siOf(eta)!, siOf(inputs[0])];
+      if (n === null || n === 0) continue;
+      const unit = FIGURE_SI_UNIT[kind];
+      const anchor = eta.start > input.start ? eta : input;
+      insertAfter(drafts, anchor, {
+        start: Math.min(eta.start, input.start),
+        end: Math.max(eta.end, input.end),
+        kind,
+        quantity: typedSi(n * e, unit),
+        role: 'out',
+        derived: `output = efficiency × input (${formatPrint(e)} × ${formatQuantity(n, unit)})`,
+      });
+      break;
+    }
+  }
+
+  // "Self-running", "needs no supply": the input is 0 (not where the device harvests a flow from outside).
+  if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in')) {
+    SELF_RUNNING_RE.lastIndex = 0;
+    const m = SELF_RUNNING_RE.exec(text);
+    const hasThrust = drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power');
+    const out = drafts.find((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust)));
+    const inputUnknown = /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data))?[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text);
+    if (m && out && !inputUnknown && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {
+      const start = m.index;
+      const end = m.index + m[0].length;
+      const draft: Draft = { start, end, kind: 'power', quantity: '0 W', role: 'in', derived: `no input: "${m[0]}"` };
+      // Keep the drafts in order of their place in the text.
+      const at = drafts.findIndex((d) => d.start > start);
+      if (at < 0) drafts.push(draft);
+      else drafts.splice(at, 0, draft);
+      if (out.role === null) out.role = 'out';
+    }
+  }
+
+  // A heat pump's heat out over its work in: its heating COP, as a figure of its own.
+  const denied = /(?<!\p{L})(?:no|not an?|without an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?heat[- ]pumps?(?!\p{L})/iu.test(text);
+  if (HEAT_PUMP_RE.test(text) && !denied && !drafts.some((d) => d.kind === 'cop')) {
+    for (const kind of ['energy', 'power'] as const) {
+      const ins = drafts.filter((d) => d.kind === kind && d.role === 'in' && !d.derived);
+      // (The heat out may be the input plus a stated excess: "3 kW more heat than the 1 kW it uses".)
+      const outs = drafts.filter((d) => d.kind === kind && d.role === 'out' && (!d.derived || d.derived.startsWith('output = input + excess')));
+      if (ins.length !== 1 || outs.length !== 1) continue;
+      const w = siOf(ins[0]);
+      const q = siOf(outs[0]);
+      if (!w || q === null || q <= w) continue;
+      const last = ins[0].start > outs[0].start ? ins[0] : outs[0];
+      insertAfter(drafts, last, {
+        start: Math.min(ins[0].start, outs[0].start),
+        end: Math.max(ins[0].end, outs[0].end),
+        kind: 'cop',
+        quantity: String(Number((q / w).toPrecision(12))),
+        role: 'heating',
+        derived: `COP = heat out / work in (${formatQuantity(q, FIGURE_SI_UNIT[kind])} / ${formatQuantity(w, FIGURE_SI_UNIT[kind])})`,
+      });
+      break;
+    }
+  }
+
+  relateTemperatures(text, drafts);
+  relateDurations(text, drafts);
+}

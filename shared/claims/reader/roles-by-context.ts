@@ -1,0 +1,209 @@
+/**
+ * Roles the words leave open, read from the other figures (the claim reader, shared/claims/reader.ts,
+ * pass 3): a distance in a time as a speed; the power that drives a thrust; what is turned into
+ * what, what comes from what, a store charged and what it then holds; a test stand's mass set aside;
+ * a propellant from its mass fraction; and a rocket's masses (wet, dry, propellant, the one missing
+ * derived) and speeds.
+ */
+import { formatQuantity } from '../../worksheet/quantity';
+import { formatPrint } from '../print';
+import type { FigureRole } from '../types';
+import { sentenceAround } from './context';
+import { siOf, typedSi, type Draft } from './draft';
+
+/** A propellant mass fraction: "propellant is 90 % of the mass", "90 % propellant by mass", "a propellant fraction of 85 %". */
+const PROPELLANT_FRACTION_RE =
+  /(?<!\p{L})propellant(?:[^\S\n]+mass)?(?:[^\S\n]+fraction)?[^\S\n]+(?:is|of|=|:|makes up|accounts for)?[^\S\n]*(\d+(?:\.\d+)?)[^\S\n]*%[^\S\n]+of|(\d+(?:\.\d+)?)[^\S\n]*%[^\S\n]+(?:of[^\S\n]+(?:its|the)[^\S\n]+(?:[\p{L}\d-]+[^\S\n]+){0,3})?(?:mass[^\S\n]+)?(?:is[^\S\n]+)?propellant|(?<!\p{L})propellant(?:[^\S\n]+mass)?[^\S\n]+fraction[^\S\n]+(?:of|is|=)[^\S\n]*(\d+(?:\.\d+)?)[^\S\n]*%/iu;
+
+export const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|lander|probe|satellite|CubeSat|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines? (?:fire|burn))(?!\p{L})/iu;
+
+/** Words that make a sentence's mass the craft's: the craft itself, its propellant, its engine. */
+const CRAFT_RE =
+  /(?<!\p{L})(?:rockets?|propellants?|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|craft|landers?|probes?|satellites?|CubeSats?|smallsats?|microsat\w*|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines?|vehicles?|tugs?|stacks?|ships?|modules?|capsules?|boosters?|orbiters?|missiles?|payloads?|tanks?|fuel\w*|oxidi[sz]ers?|xenon|krypton|hydrazine|kerosene|methane|hydrogen|oxygen|nitrogen|argon|exhaust|wet|dry|m[01f]|masses)(?!\p{L})/iu;
+
+/** A distance covered in a time: "4.2 light years in 30 days", "1 AU in 2 hours". */
+const TRAVEL_RE = /(?<![\p{L}\p{N}.,])(\d[\d,]*(?:\.\d+)?)[^\S\n]*(light[- ]years?|lightyears?|parsecs?|astronomical units?|AU)[^\S\n]+in[^\S\n]+(?:(?:just|only|about|under|less than|roughly)[^\S\n]+)?(\d[\d,]*(?:\.\d+)?|an?|one)[^\S\n]*(seconds?|minutes?|hours?|days?|weeks?|months?|years?)(?!\p{L})/giu;
+const TRAVEL_LENGTH: Record<string, number> = { lightyear: 9460730472580800, parsec: 3.0856775814913673e16, astronomicalunit: 149597870700, au: 149597870700 };
+const TRAVEL_TIME: Record<string, number> = { second: 1, minute: 60, hour: 3600, day: 86400, week: 604800, month: 2629800, year: 31557600 };
+
+/** The apparatus a device is tested on, whose mass is no craft's. */
+const APPARATUS_RE = /(?<!\p{L})(?:test[- ]stands?|stands?|test rigs?|rigs?|benches|bench|balances?|pendulums?|mounts?|mounting|tables?|jigs?|fixtures?|housings?|enclosures?|vacuum chambers?|chambers?|counterweights?|scales?)(?!\p{L})/iu;
+/** Before the energy a store holds: "the bank holds 50 kJ", "stores 13.5 kWh", "a capacity of 10 kWh". */
+const STORE_HOLDS_RE = /(?<!\p{L})(?:holds?|holding|stores?|stored|storing|contains?|capacity(?:[^\S\n]+of)?|rated(?:[^\S\n]+at)?|packs?)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere|up to)[^\S\n]+)?$/iu;
+/** Before what a store holds at the end of a charge: "the cell ends up holding 5 Wh". */
+const ENDS_UP_HOLDING_RE = /(?<!\p{L})(?:ends?|ended|ending)[^\S\n]+up[^\S\n]+(?:holding|with|storing|containing|at)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere)[^\S\n]+)?$/iu;
+/** After a power or energy put into a store: "3 W into a little cell", "12 kWh into the pack" (not "back into"). */
+const STORE_INTO_RE =
+  /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?into[^\S\n]+(?:(?:a|an|the|its|our|my|their)[^\S\n]+)?(?:[\p{L}\d-]+[^\S\n]+){0,2}?(?:cells?|batter(?:y|ies)|packs?|capacitors?|supercaps?|supercapacitors?|accumulators?|flywheels?)(?!\p{L})/iu;
+
+
+/** Roles the words leave open, read from the other figures (see the file's comment). */
+export function rolesByContext(text: string, drafts: Draft[]): void {
+  // "covers 4.2 light years in 30 days": a speed, distance over time (IAU 2012 B2 astronomical unit,
+  // IAU 2015 B2 parsec, the light-year of the Julian year).
+  for (const m of text.matchAll(TRAVEL_RE)) {
+    const distance = Number(m[1].replace(/,/g, '')) * (TRAVEL_LENGTH[m[2].toLowerCase().replace(/s$/, '').replace(/[- ]/g, '')] ?? NaN);
+    const count = /^(?:a|an|one)$/i.test(m[3]) ? 1 : Number(m[3].replace(/,/g, ''));
+    const time = count * (TRAVEL_TIME[m[4].toLowerCase().replace(/s$/, '')] ?? NaN);
+    if (!(distance > 0) || !(time > 0) || drafts.some((d) => d.kind === 'speed' && d.start >= m.index! && d.start < m.index! + m[0].length)) continue;
+    const d: Draft = {
+      start: m.index!,
+      end: m.index! + m[0].length,
+      kind: 'speed',
+      quantity: typedSi(distance / time, 'm/s'),
+      role: null,
+      derived: `speed = distance / time (${m[1]} ${m[2]} in ${m[3]} ${m[4]})`,
+    };
+    const at = drafts.findIndex((x) => x.start > d.start);
+    if (at < 0) drafts.push(d);
+    else drafts.splice(at, 0, d);
+  }
+  const energyLike = (d: Draft) => d.kind === 'power' || d.kind === 'energy';
+  // A thrust and a power: the power drives it.
+  if (drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power')) {
+    for (const d of drafts) if (d.kind === 'power' && d.role === null) d.role = 'in';
+    // "emits 8 kW as a collimated beam": what a thruster puts out is what drives it.
+    if (!drafts.some((d) => d.kind === 'power' && d.role === 'in')) for (const d of drafts) if (d.kind === 'power' && d.role === 'out') d.role = 'in';
+  }
+  // "turns 3 kW of shaft power into 2.7 kW of electricity": the first goes in, the second comes out.
+  const flowsInto = drafts.filter(energyLike);
+  for (let i = 0; i + 1 < flowsInto.length; i++) {
+    const [a, b] = [flowsInto[i], flowsInto[i + 1]];
+    if (a.kind !== b.kind) continue;
+    // "640 MJ of fuel for 60 kWh of electricity": what was burnt, and what it gave.
+    if (/^[^\S\n]*of[^\S\n]+(?:fuel|diesel|petrol|gasoline|coal|hydrogen|wood|biomass|propane|kerosene|natural gas|gas)(?!\p{L})[^.;!?\n]{0,25}?(?<!\p{L})for[^\S\n]+(?:(?:a|an|the|about|some|roughly)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
+      a.role = 'in';
+      b.role = 'out';
+      continue;
+    }
+    // "3–5 W of electricity from roughly 100 W of heat": the first came out of the second.
+    if (/^[^\S\n]*(?:of[^\S\n]+[\p{L} -]{0,30}?)?[^\S\n]*from[^\S\n]+(?:(?:a|an|the|about|some|roughly|only|just|up to)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
+      a.role = 'out';
+      b.role = 'in';
+      continue;
+    }
+    if (!/^[^.;!?\n]{0,50}?(?<!\p{L})into[^\S\n]+(?:(?:a|an|the|about|some|roughly|up to)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) continue;
+    if (!/(?<!\p{L})(?:turns?|turning|turned|converts?|converting|converted|transforms?|transforming|transformed|changes?|changing|changed|makes?)[^\S\n]+(?:(?:the|its|their|a|an|about|some|roughly|up to)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, a.start - 40), a.start))) continue;
+    a.role = 'in';
+    b.role = 'out';
+  }
+  // "35 kW of electricity plus 50 kW of useful heat": the second takes the first's side.
+  const flows = drafts.filter(energyLike);
+  for (let i = 0; i + 1 < flows.length; i++) {
+    const [a, b] = [flows[i], flows[i + 1]];
+    if (a.role !== null && b.role === null && a.kind === b.kind && /^[^\S\n]*(?:(?:of|as)[^\S\n]+[\p{L} -]{0,30}?[^\S\n]*(?:,[^\S\n]*)?(?:plus|as well as|along with|together with|and also|on top of|and)|(?:,[^\S\n]*)?(?:plus|as well as|along with|together with|and also|on top of))[^\S\n]+$/iu.test(text.slice(a.end, b.start))) {
+      b.role = a.role;
+    }
+  }
+  // One side named, one figure left: the other side.
+  const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
+  const open = drafts.filter((d) => energyLike(d) && d.role === null);
+  if (named.length && open.length === 1) {
+    if (named.every((d) => d.role === 'in')) open[0].role = 'out';
+    else if (named.every((d) => d.role === 'out')) open[0].role = 'in';
+  }
+  // "propellant is 90 % of the vehicle's mass", "90 % propellant by mass": the propellant from a fraction.
+  const fraction = PROPELLANT_FRACTION_RE.exec(text);
+  // "puts 3 W into a little cell for 2 hours, and the cell ends up holding 5 Wh": a charging ledger,
+  // what went into the store is the input and what it holds at the end the output.
+  const held = drafts.find((d) => d.kind === 'energy' && ENDS_UP_HOLDING_RE.test(text.slice(Math.max(0, d.start - 40), d.start)));
+  if (held) {
+    const into = drafts.filter((d) => energyLike(d) && d.start < held.start && !d.derived && STORE_INTO_RE.test(text.slice(d.end, d.end + 80)));
+    if (into.length > 0) {
+      held.role = 'out';
+      for (const d of into) d.role = 'in';
+    }
+  }
+  // "The supercap bank holds 50 kJ … it powered a 2 kW heater for five minutes": what a store holds
+  // before it runs a load is what it has to give.
+  const stored = drafts.filter((d) => d.kind === 'energy' && !d.derived && d.role !== 'in' && STORE_HOLDS_RE.test(text.slice(Math.max(0, d.start - 30), d.start)));
+  if (stored.length === 1 && !held && !drafts.some((d) => energyLike(d) && d.role === 'in')) {
+    const later = drafts.filter((d) => energyLike(d) && d !== stored[0] && d.start > stored[0].end && d.role === 'out');
+    if (later.length > 0) stored[0].role = 'in';
+  }
+  const massDrafts = drafts.filter((d) => d.kind === 'mass');
+  // "The test stand itself weighs 85 kg": a mass of the apparatus, in a sentence that names no craft.
+  for (const m of massDrafts) {
+    const sentence = sentenceAround(text, m.start, m.end);
+    if (m.role === null && APPARATUS_RE.test(sentence) && !CRAFT_RE.test(sentence.replace(APPARATUS_RE, ''))) m.role = 'aside';
+  }
+  const craftMasses = massDrafts.filter((d) => d.role !== 'aside');
+  const whole = craftMasses.length === 1 ? craftMasses[0] : craftMasses.find((d) => d.role === null || d.role === 'wet');
+  if (fraction && whole && !massDrafts.some((d) => d !== whole && d.role === 'propellant')) {
+    const p = Number(fraction[1] ?? fraction[2] ?? fraction[3]) / 100;
+    const m = siOf(whole);
+    if (p > 0 && p < 1 && m !== null) {
+      whole.role = 'wet';
+      drafts.splice(drafts.indexOf(whole) + 1, 0, {
+        start: Math.min(whole.start, fraction.index),
+        end: Math.max(whole.end, fraction.index + fraction[0].length),
+        kind: 'mass',
+        quantity: typedSi(p * m, 'kg'),
+        role: 'propellant',
+        derived: `propellant = ${formatPrint(p * 100)} % of ${formatQuantity(m, 'kg')}`,
+      });
+    }
+  }
+
+  // A rocket: masses and speeds.
+  const masses = drafts.filter((d) => d.kind === 'mass');
+  const rocket =
+    drafts.some((d) => d.kind === 'specific-impulse' || (d.kind === 'speed' && (d.role === 'exhaust' || d.role === 'delta-v')) || (d.kind === 'mass' && d.role === 'propellant')) ||
+    (masses.some((m) => m.role !== 'aside') && ROCKET_RE.test(text));
+  if (!rocket) return;
+  // "burns from 25 t to 9 t", "goes from 100 t down to 33 t": the mass at the start and at the end.
+  for (let i = 0; i + 1 < masses.length; i++) {
+    const [a, b] = [masses[i], masses[i + 1]];
+    if (!/(?<!\p{L})from[^\S\n]+$/iu.test(text.slice(Math.max(0, a.start - 6), a.start))) continue;
+    if (!/^[^\S\n]*(?:(?:down[^\S\n]+)?to|→|->)[^\S\n]*$/iu.test(text.slice(a.end, b.start))) continue;
+    if ((siOf(a) ?? 0) <= (siOf(b) ?? Infinity)) continue;
+    a.role = 'wet';
+    b.role = 'dry';
+  }
+  // A mass in a sentence that speaks of no craft and no propellant ("the test stand weighs 85 kg") is
+  // not one of the craft's, when the craft's masses are given elsewhere.
+  const craftish = masses.filter((m) => m.role !== null || CRAFT_RE.test(sentenceAround(text, m.start, m.end)));
+  if (craftish.length > 0) for (const m of masses) if (!craftish.includes(m)) m.role = 'aside';
+  const has = (role: FigureRole) => masses.find((m) => m.role === role);
+  const nulls = masses.filter((m) => m.role === null);
+  if (has('propellant') && !has('wet') && !has('dry') && nulls.length === 1) nulls[0].role = 'wet';
+  else if (!has('wet') && !has('dry') && nulls.length === 2) {
+    const [a, b] = [...nulls].sort((x, y) => (siOf(y) ?? 0) - (siOf(x) ?? 0));
+    a.role = 'wet';
+    b.role = 'dry';
+  } else if (has('wet') && !has('dry') && !has('propellant') && nulls.length === 1) nulls[0].role = 'dry';
+  else if (has('dry') && !has('wet') && !has('propellant') && nulls.length === 1) nulls[0].role = 'wet';
+  const wet = has('wet');
+  const dry = has('dry');
+  const prop = has('propellant');
+  if (wet && prop && !dry) {
+    const w = siOf(wet);
+    const p = siOf(prop);
+    if (w !== null && p !== null && p < w) {
+      const last = wet.start > prop.start ? wet : prop;
+      drafts.splice(drafts.indexOf(last) + 1, 0, {
+        start: Math.min(wet.start, prop.start),
+        end: Math.max(wet.end, prop.end),
+        kind: 'mass',
+        quantity: typedSi(w - p, 'kg'),
+        role: 'dry',
+        derived: `dry mass = starting mass − propellant (${formatQuantity(w, 'kg')} − ${formatQuantity(p, 'kg')})`,
+      });
+    }
+  } else if (dry && prop && !wet) {
+    const d = siOf(dry);
+    const p = siOf(prop);
+    if (d !== null && p !== null) {
+      const last = dry.start > prop.start ? dry : prop;
+      drafts.splice(drafts.indexOf(last) + 1, 0, {
+        start: Math.min(dry.start, prop.start),
+        end: Math.max(dry.end, prop.end),
+        kind: 'mass',
+        quantity: typedSi(d + p, 'kg'),
+        role: 'wet',
+        derived: `starting mass = dry mass + propellant (${formatQuantity(d, 'kg')} + ${formatQuantity(p, 'kg')})`,
+      });
+    }
+  }
+  for (const d of drafts) if (d.kind === 'speed' && d.role === null && (siOf(d) ?? 0) < 299_792_458) d.role = 'delta-v';
+}

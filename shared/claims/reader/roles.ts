@@ -1,0 +1,135 @@
+/**
+ * Roles from the words around a figure (the claim reader, shared/claims/reader.ts, pass 2): in, out
+ * and excess for a power or an energy, hot and cold for a temperature, heating and cooling for a
+ * COP, wet, dry and propellant for a mass, exhaust and delta-v for a speed (the role words of
+ * figures-vocabulary.ts). A verb right before the figure outweighs the words after it; those after
+ * it outweigh those before.
+ */
+import { COP_COOLING, COP_HEATING, MASS_ROLES, POWER_ENERGY_ROLES, SPEED_ROLES, TEMPERATURE_ROLES, type RoleWords } from '../figures-vocabulary';
+import type { FigureKind, FigureRole } from '../types';
+import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, windowStart } from './context';
+
+/** Words that may stand between a figure and the role word after it ("2 kW of electrical input"). */
+const AFTER_FILLER =
+  '(?:(?:per|each|every|a)[\\s-]+(?:day|hour|week|month|year|minute|second|cycle)[\\s-]+)?(?:(?:of|the|its|electrical|electric|thermal|mechanical|heat|net|total|useful|shaft|continuous|peak|rated|gross|average|mean|power|energy|DC|AC|battery|mains|grid)[\\s-]+){0,3}';
+
+interface CompiledRoles {
+  groups: readonly RoleWords[];
+  before: RegExp;
+  after: RegExp;
+  /** Each group's before-words alone, sticky: which group's words run longest at a place ("battery side" over "battery"). */
+  beforeAt: RegExp[];
+}
+
+function compileRoles(groups: readonly RoleWords[]): CompiledRoles {
+  const named = (key: 'before' | 'after') => groups.map((g, i) => `(?<r${i}>${alt(g[key])})`).join('|');
+  return {
+    groups,
+    before: new RegExp(`(?<!\\p{L})(?:${named('before')})(?!\\p{L})`, 'giu'),
+    after: new RegExp(`[^\\S\\n]*-?[^\\S\\n]*${AFTER_FILLER}(?:${named('after')})(?!\\p{L})`, 'iuy'),
+    beforeAt: groups.map((g) => new RegExp(`(?:${alt(g.before)})(?!\\p{L})`, 'iuy')),
+  };
+}
+
+const ROLES: Partial<Record<FigureKind, CompiledRoles>> = {
+  power: compileRoles(POWER_ENERGY_ROLES),
+  energy: compileRoles(POWER_ENERGY_ROLES),
+  temperature: compileRoles(TEMPERATURE_ROLES),
+  mass: compileRoles(MASS_ROLES),
+  speed: compileRoles(SPEED_ROLES),
+};
+/** "1.5 kW in, 3 kW out": a bare in/out right after the figure, ending the clause. */
+const IN_OUT_AFTER_RE = /[^\S\n]*(?:of[^\S\n]+(?:electricity|electrical power|heat|power|work|energy|light|gas|fuel)[^\S\n]+)?(in|out)(?!\p{L})(?=[^\S\n]*(?:[,;.!?)\]\n:—–]|(?:and|for|from|with|while|against|versus|vs|on|at|to|into|onto|across|through)(?!\p{L})|$))/iuy;
+const COP_COOLING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_COOLING)})(?!\\p{L})`, 'iu');
+const COP_HEATING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_HEATING)})(?!\\p{L})`, 'iu');
+const COP_WINDOW = 120;
+
+/** "warm end", "cold side", "hot junction" just before a temperature outweigh the words after it. */
+const STRONG_SIDE_RE = /(?<!\p{L})(hot|warm|cold|cool|sunlit|sunny|heated|shaded|shady|cooled)(?:er)?[- ](?:end|side|junction|plate|face|reservoir|panel)s?(?:[^\S\n]+(?:\p{L}+))?[^\S\n]+(?:in|at|of|is|sits at|held at|kept at|runs at|near)?[^\S\n]*(?:(?:a|an|the)[^\S\n]+)?$/iu;
+
+/**
+ * End of the words after the last figure that gave it its role ("… 3.2 km/s exhaust velocity"): the
+ * next figure's words start after them. Reset by each reading (figures.ts).
+ */
+export const lastRoleWords = { end: 0 };
+
+const IMMEDIATE_HEDGE = '(?:(?:only|just|about|some|roughly|nearly|around|approximately|up to|a mere|a steady|an average of)[^\\S\\n]+)*';
+const IMMEDIATE_IN_RE = new RegExp(`(?<!\\p{L})(?:takes|took|draws|drew|consumes|consumed|uses|used|needs|requires|required|absorbs|absorbed|is fed|was fed|pulls|pulled)[^\\S\\n]+${IMMEDIATE_HEDGE}$`, 'iu');
+const IMMEDIATE_OUT_RE = new RegExp(`(?<!\\p{L})(?:delivers|delivered|produces|produced|generates|generated|returns|returned|puts out|put out|yields|yielded|outputs)[^\\S\\n]+${IMMEDIATE_HEDGE}$`, 'iu');
+
+function roleFromWords(text: string, roles: CompiledRoles, start: number, end: number, floor: number): FigureRole {
+  if (roles === ROLES.temperature) {
+    // A heat pump's or fridge's source is its cold side and its sink the warm one (the other way round for an engine).
+    if (HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text)) {
+      const lead = text.slice(Math.max(floor, start - 40), start);
+      if (/(?<!\p{L})(?:heat[^\S\n]+)?sink(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'hot';
+      if (/(?<!\p{L})(?:(?:air|ground|water|brine|heat|outdoor)[- ])?source(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'cold';
+    }
+    const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start));
+    if (strong) return /^(?:hot|warm|sun|heated)/i.test(strong[1]) ? 'hot' : 'cold';
+    // "the heat it draws from 25 °C room air": where the heat comes from is the hot side.
+    // (see below for power and energy)
+    if (/(?<!\p{L})(?:heat|energy)(?:[^\S\n]+(?:it|that it|they))?[^\S\n]+(?:draws?|takes?|extracts?|absorbs?|gets?|pulls?|harvests?|collects?)[^\S\n]+from[^\S\n]+(?:(?:the|a|an)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
+  }
+  // "filled a 5 kWh battery", "charged the 10 kWh pack": what is filled is what came out.
+  if (roles.groups === POWER_ENERGY_ROLES && /(?<!\p{L})(?:fill(?:s|ed|ing)?|charg(?:es|ed|ing)|tops? up|topped up)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their)[^\S\n]+$/iu.test(text.slice(Math.max(floor, start - 40), start))) return 'out';
+  // A verb right before the figure ("takes 50 PS of shaft power", "generates 40 kW") outweighs the
+  // words after it.
+  if (roles.groups === POWER_ENERGY_ROLES) {
+    const lead = text.slice(Math.max(floor, start - 40), start);
+    // (Not when a supply is the subject: "the bench supply delivers 5 A" is what the device takes.)
+    if (!/(?<!\p{L})(?:suppl(?:y|ies)|batter(?:y|ies)|mains|grid|sources?|sockets?|packs?|alternators?|chargers?|PSUs?|adapters?)[^\S\n]+\p{L}+[^\S\n]+[^.;!?\n]{0,12}$/iu.test(lead)) {
+      if (IMMEDIATE_IN_RE.test(lead)) return 'in';
+      if (IMMEDIATE_OUT_RE.test(lead)) return 'out';
+    }
+  }
+  roles.after.lastIndex = end;
+  const a = roles.after.exec(text);
+  if (a?.groups) {
+    for (let i = 0; i < roles.groups.length; i++) {
+      if (a.groups[`r${i}`] !== undefined) {
+        lastRoleWords.end = end + a[0].length;
+        return roles.groups[i].role;
+      }
+    }
+  }
+  const from = windowStart(text, start, floor, BEFORE_WINDOW);
+  const slice = text.slice(from, start);
+  roles.before.lastIndex = 0;
+  let last: RegExpExecArray | null = null;
+  for (let m = roles.before.exec(slice); m; m = roles.before.exec(slice)) last = m;
+  if (!last) return null;
+  let best: FigureRole = null;
+  let longest = 0;
+  roles.beforeAt.forEach((re, i) => {
+    re.lastIndex = last!.index;
+    const m = re.exec(slice);
+    if (m && m[0].length > longest) {
+      longest = m[0].length;
+      best = roles.groups[i].role;
+    }
+  });
+  return best;
+}
+
+export function roleFor(text: string, kind: FigureKind, start: number, end: number, floor: number): FigureRole {
+  if (kind === 'power' || kind === 'energy') {
+    IN_OUT_AFTER_RE.lastIndex = end;
+    const io = IN_OUT_AFTER_RE.exec(text);
+    if (io) return io[1].toLowerCase() === 'in' ? 'in' : 'out';
+  }
+  const roles = ROLES[kind];
+  if (roles) return roleFromWords(text, roles, start, end, floor);
+  if (kind === 'cop') {
+    // "a heating COP of 4.1", "cooling COP 5.0": said right before it.
+    const near = /(heating|cooling)[^\S\n]+(?:COP|coefficient of performance)[^.;!?\n]{0,25}$/iu.exec(text.slice(Math.max(0, start - 60), start));
+    if (near) return near[1].toLowerCase() === 'cooling' ? 'cooling' : 'heating';
+    // "COP_h ≈ 4.5", "COP_c = 3".
+    const symbol = /COP_?\{?(h|c|heat|heating|cool|cooling)\}?(?!\p{L})[^.;!?\n]{0,12}$/iu.exec(text.slice(Math.max(0, start - 30), start));
+    if (symbol) return /^c/i.test(symbol[1]) ? 'cooling' : 'heating';
+    const around = text.slice(Math.max(0, start - COP_WINDOW), Math.min(text.length, end + COP_WINDOW));
+    if (COP_COOLING_RE.test(around)) return 'cooling';
+    if (COP_HEATING_RE.test(around) || HEAT_PUMP_RE.test(text)) return 'heating';
+  }
+  return null;
+}

@@ -1,0 +1,221 @@
+/**
+ * Temperatures (the claim reader, shared/claims/reader.ts): a temperature read as a difference ("a
+ * 20 °C temperature difference", "ΔT of 20 K", "40 degrees above ambient") and which way it points;
+ * then, among the figures read, the surroundings and rated ranges set aside, a heat pump's source
+ * as its cold side, the other side from one temperature and a difference, hot and cold by order,
+ * and a share of the Carnot efficiency between the two sides.
+ */
+import { DIFFERENCE_AFTER, DIFFERENCE_BEFORE } from '../figures-vocabulary';
+import { formatQuantity } from '../../worksheet/quantity';
+import { formatPrint } from '../print';
+import { alt, COOLING_MACHINE_RE, HEAT_PUMP_RE, sentenceAround } from './context';
+import { insertAfter, sentenceOf, siOf, typedSi, type Draft } from './draft';
+import { CARNOT_SHARE } from './kinds';
+
+const DIFF_BEFORE_RE = new RegExp(`(?<![\\p{L}])(?:${alt(DIFFERENCE_BEFORE)})(?!\\p{L})(?:[^\\S\\n]*(?:[=:≈~]|of|is|was|by|about|around|only|just|a|an|some|up to|nearly|roughly|approximately|just over|just under|over|under))*[^\\S\\n]*$`, 'iu');
+const DIFF_AFTER_RE = new RegExp(`[^\\S\\n]*(?:\\)[^\\S\\n]*)?(?:(?:temperature|thermal|of|the)[^\\S\\n]+){0,2}(?:${alt(DIFFERENCE_AFTER)})(?!\\p{L})`, 'iuy');
+
+/** A temperature read as a difference: "20 degC" of difference is "20 K"; "36 degF" is 20 K. */
+export function differenceQuantity(num: string, unit: string): string {
+  const n = Number(num);
+  if (unit === 'degC' || unit === 'K') return `${num} K`;
+  if (unit === 'mK') return `${num} mK`;
+  if (unit === 'degF') return `${Number(((n * 5) / 9).toPrecision(15))} K`;
+  return `${num} K`;
+}
+
+/** Which way a difference points: "30 °C below …", "9 °F cooler" → down; "40 degrees above …" → up. */
+export function differenceDirection(text: string, end: number): 'up' | 'down' | undefined {
+  const after = text.slice(end, end + 30);
+  if (/^[^\S\n]*(?:\p{L}+[^\S\n]+)?(?:below|under|cooler|colder|lower)(?!\p{L})/iu.test(after)) return 'down';
+  if (/^[^\S\n]*(?:\p{L}+[^\S\n]+)?(?:above|over|warmer|hotter|higher)(?!\p{L})/iu.test(after)) return 'up';
+  return undefined;
+}
+
+export function isDifference(text: string, start: number, end: number, floor: number): boolean {
+  const before = text.slice(Math.max(floor, start - 60), start);
+  if (DIFF_BEFORE_RE.test(before)) {
+    // "only 20 °C" / "just 20 °C" alone are not differences: the clause must speak of one.
+    const m = DIFF_BEFORE_RE.exec(before)!;
+    if (!/^(?:only|a mere|just)/i.test(m[0].trim()) || /differen|gradient|ΔT|delta|lift|rise/i.test(sentenceAround(text, start, end))) return true;
+  }
+  DIFF_AFTER_RE.lastIndex = end;
+  const a = DIFF_AFTER_RE.exec(text);
+  if (!a) return false;
+  const word = a[0].trim().toLowerCase();
+  // "20 °C above ambient", "heated 40 K over room temperature"; "between" only as "20 K between the plates".
+  if (/^(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)/.test(word)) {
+    const rest = text.slice(end + a[0].length, end + a[0].length + 40);
+    if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|(?:and|with|at|in|for|while|but|so|when)\b|$)/.test(rest)) return true;
+    // "5 °C below zero", "above freezing": a temperature, not a difference.
+    if (/^[^\S\n]*(?:zero|freezing|nought|the freezing point)(?!\p{L})/iu.test(rest)) return false;
+    // "21 °C below the kitchen", "38 K above it": measured from something named.
+    if (/^[^\S\n]*(?:than[^\S\n]+)?(?:the|a|an|its|their|our|his|her|this|that|it|them)(?!\p{L})/iu.test(rest)) return true;
+    return /^[^\S\n]*(?:than[^\S\n]+)?(?:(?:the|a|an|its|their)[^\S\n]+)?(?:(?:mean|average|outside|outdoor|surrounding|local|daytime|night-?time|cooling|inlet|room|deep|surface)[^\S\n]+){0,2}(?:ambient|room|outside|outdoor|surrounding|environment|air|water|inlet|sink|source|cold|hot|other|freezing|surface|\p{N}|[-−])/iu.test(rest) || /^\s*than/.test(rest) || /^[^\S\n]*(?:it|that|this|them)(?!\p{L})/iu.test(rest);
+  }
+  if (/^apart/.test(word)) return true;
+  if (/^between|^across/.test(word)) return /^[^\S\n]*(?:the|its|two|both|hot|cold|plates|sides|ends|junctions|reservoirs)/i.test(text.slice(end + a[0].length, end + a[0].length + 20));
+  return true;
+}
+
+/** Between a temperature and a difference that describes it: "−18 °C, a full 50 K below …", "34 °C, 5 K warmer than …". */
+const APPOSITION_RE = /^[\s,;(–—-]*(?:(?:a|an|some|about|roughly|nearly|just|only|full|fully|which is|that is|i\.e\.|or|thus|so|still|at least|at most|over|under)[\s,]+)*$/iu;
+
+/** After a difference: the side it is measured from, named ("… over its source", "… below the kitchen"), not a pronoun. */
+const NAMED_OTHER_SIDE_RE = /^[^\S\n]*(?:\p{L}+[^\S\n]+)?(?:above|over|below|under|(?:warmer|hotter|colder|cooler|higher|lower)[^\S\n]+than)[^\S\n]+(?:the|its|their|our|a|an)[^\S\n]+(?!\p{N})/iu;
+
+/** Words before the temperatures a device is rated for. */
+const OPERATING_RANGE_RE =
+  /(?<!\p{L})(?:(?:operating|operation|storage|ambient|rated|permitted|allowed|working) (?:temperature )?(?:range|temperatures?|limits?|conditions?)(?: (?:of|is|from|between))?[:=]?[^\S\n]*(?:from|between)?|(?:rated|designed|built|certified|specified|guaranteed|able)? ?(?:to )?(?:keep )?(?:work(?:s|ing)?|run(?:s|ning)?|operat(?:e|es|ing)|function(?:s|ing)?|start(?:s|ing)?) (?:(?:reliably|fine|normally|properly|well) )?(?:down|up) to|(?:rated|certified|specified|good) (?:down|up) to|(?:survives?|withstands?|tolerates?)(?: temperatures?)?(?: (?:down|up) to| of)?)[^\S\n]*$/iu;
+
+/** Words of the place a test was run ("the room was held at 21 °C", "lab temperature 22 °C"). */
+const SURROUNDINGS_RE = /(?<!\p{L})(?:room|lab|laboratory|test hall|hall|workshop|building|office|test cell|weather|day|night)(?!\p{L})/iu;
+/** A sentence about the test itself ("The test lasted 45 minutes in a room held at 21 °C."). */
+const TEST_SETTING_RE = /(?<!\p{L})(?:tests?|trials?|experiments?|measurements?|runs?|demonstrations?|lasted|shown|presented|held|kept|conditioned)(?!\p{L})/iu;
+/** Words that make a lone temperature one of the machine's sides, not its surroundings. */
+const MACHINE_SIDE_RE = /(?<!\p{L})(?:source|sink|sides?|hot|cold|warm|cool|reservoirs?|ends?|junctions?|plates?|faces?|inlet|outlet|flow|supply|delivery|evaporat\w*|condens\w*|cabinet|compartment|chamber|tank|boiler|emitter|heater|collector|brine|ground|outdoor|outside|exhaust|turbine|T_?[ch]|deep|surface)(?!\p{L})/iu;
+
+/** Sides, surroundings and the other temperature, among the figures read (see the file's comment). */
+export function relateTemperatures(text: string, drafts: Draft[]): void {
+  // The surroundings said apart from the machine: when one sentence gives the machine's two sides
+  // (two temperatures, or one and a difference), a temperature alone in another sentence, with no
+  // efficiency, COP or difference beside it ("the room was held at 21 °C"), is set aside.
+  const thermal = drafts.filter((d) => d.kind === 'temperature' && !d.derived);
+  const sides = new Set(
+    thermal
+      .map((d) => sentenceOf(text, d))
+      .filter((k) => thermal.reduce((n, t) => n + (sentenceOf(text, t) === k ? (t.upper ? 2 : 1) : 0), 0) >= 2 || drafts.some((d) => d.kind === 'temperature-difference' && sentenceOf(text, d) === k)),
+  );
+  // "operating range −40 to 85 °C", "storage temperature": the conditions it is rated for, not its sides.
+  thermal.forEach((t, i) => {
+    const prev = thermal[i - 1];
+    if (OPERATING_RANGE_RE.test(text.slice(Math.max(0, t.start - 40), t.start)) || (prev?.role === 'aside' && /^[^\S\n]*(?:°[CF]?[^\S\n]*)?(?:to|and|[-–—…])[^\S\n]*$/u.test(text.slice(prev.end, t.start)))) t.role = 'aside';
+  });
+  // (Not one that the stated difference puts on the other side: "−18 °C; … at 32 °C (a 50 K difference)".)
+  const differences = drafts.filter((d) => d.kind === 'temperature-difference').map((d) => siOf(d) ?? NaN);
+  const otherSide = (t: Draft) =>
+    thermal.some((u) => u !== t && sides.has(sentenceOf(text, u)) && differences.some((dT) => Math.abs(Math.abs((siOf(u) ?? NaN) - (siOf(t) ?? NaN)) - dT) <= 0.5));
+  if (sides.size > 0) {
+    for (const t of thermal) {
+      const k = sentenceOf(text, t);
+      if (sides.has(k) || otherSide(t)) continue;
+      const company = drafts.filter((d) => d !== t && sentenceOf(text, d) === k && (d.kind === 'temperature' || d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop'));
+      if (company.length === 0) t.role = 'aside';
+    }
+  } else if (thermal.length === 1 && !drafts.some((d) => d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop' || d.kind === 'power' || d.kind === 'energy')) {
+    // A lone temperature of the place a test ran in, and nothing a machine's sides would serve: aside.
+    const t = thermal[0];
+    const sentence = sentenceAround(text, t.start, t.end);
+    if ((t.role === null || t.role === 'cold') && SURROUNDINGS_RE.test(sentence) && TEST_SETTING_RE.test(sentence) && !MACHINE_SIDE_RE.test(sentence)) t.role = 'aside';
+  } else {
+    // The sides given across sentences ("supplies 55 °C water; with a 50 K lift over its source, …"):
+    // a temperature alone in a sentence of its own that names no side of the machine ("The room was
+    // held at 21 °C for the whole series.") is the surroundings, set aside.
+    const differenceGiven = drafts.some((d) => d.kind === 'temperature-difference');
+    for (const t of thermal) {
+      if (t.role === 'aside' || otherSide(t)) continue;
+      const others = thermal.filter((u) => u !== t && u.role !== 'aside' && sentenceOf(text, u) !== sentenceOf(text, t));
+      if (!(others.length >= 2 || (others.length >= 1 && differenceGiven))) continue;
+      const k = sentenceOf(text, t);
+      const company = drafts.filter((d) => d !== t && sentenceOf(text, d) === k && d.kind !== 'duration');
+      if (company.length > 0) continue;
+      const sentence = sentenceAround(text, t.start, t.end);
+      if (MACHINE_SIDE_RE.test(sentence) || !SURROUNDINGS_RE.test(sentence)) continue;
+      t.role = 'aside';
+    }
+  }
+
+  // A heat pump's source is its cold side ("source side sits at 10 °C"), not an engine's hot source.
+  if ((HEAT_PUMP_RE.test(text) || drafts.some((d) => d.kind === 'cop' && d.role === 'heating')) && !/(?<!\p{L})(?:engines?|turbines?|generators?)(?!\p{L})/iu.test(text)) {
+    for (const t of thermal) {
+      if (t.role !== 'hot') continue;
+      const near = text.slice(Math.max(0, t.start - 30), t.start) + '|' + text.slice(t.end, t.end + 12);
+      if (/(?<!\p{L})source(?!\p{L})/iu.test(near) && !/(?<!\p{L})(?:supply|flow|delivery|output)(?!\p{L})/iu.test(near)) t.role = 'cold';
+    }
+  }
+
+  // One temperature and a difference: the other temperature.
+  const temps = drafts.filter((d) => d.kind === 'temperature' && !d.derived && d.role !== 'aside');
+  const diff = drafts.find((d) => d.kind === 'temperature-difference');
+  if (diff && temps.length === 1) {
+    const t = temps[0];
+    const tSi = siOf(t);
+    const dSi = siOf(diff);
+    if (tSi !== null && dSi !== null) {
+      // "30 °C below a 25 °C room": the other lies below; "40 degrees above the 20 °C ambient": above;
+      // else by the stated temperature's role (hot → the other is colder).
+      // "held at −18 °C, a full 50 K below the room": the difference describes the stated temperature
+      // itself (said right after it), so the other side lies the other way.
+      const apposition = t.end <= diff.start && APPOSITION_RE.test(text.slice(t.end, diff.start));
+      // "supplies 55 °C water; with a 50 K lift over its source": the difference is measured from another
+      // side, named after it, so the stated temperature is the one above (or below) that side.
+      const fromNamedOther = t.end <= diff.start && NAMED_OTHER_SIDE_RE.test(text.slice(diff.end, diff.end + 60));
+      // "between the 25 °C air and the cooler soil": the other side said to be cooler or warmer than this one.
+      const other = /^[^\S\n,]*(?:[\p{L}-]+[^\S\n,]+){0,2}?and[^\S\n]+(?:the|a|an|its)[^\S\n]+(cooler|colder|lower|warmer|hotter|higher)(?!\p{L})/iu.exec(text.slice(t.end, t.end + 50));
+      const said = other
+        ? /^(?:cooler|colder|lower)/i.test(other[1]) ? 'down' : 'up'
+        : (apposition || fromNamedOther) && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
+      // A heat pump's one stated temperature is what it supplies (the hot side); a fridge's is what it keeps (the cold side).
+      const side = t.role ?? (HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) ? 'hot' : COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text) ? 'cold' : null);
+      const down = said === 'down' || (said === undefined && side === 'hot');
+      const otherSi = down ? tSi - dSi : tSi + dSi;
+      const anchor = diff.start > t.start ? diff : t;
+      insertAfter(drafts, anchor, {
+        start: Math.min(t.start, diff.start),
+        end: Math.max(t.end, diff.end),
+        kind: 'temperature',
+        quantity: typedSi(otherSi, 'K'),
+        role: down ? 'cold' : 'hot',
+        derived: down ? `the colder side = ${formatQuantity(tSi, 'K')} − ${formatQuantity(dSi, 'K')}` : `the hotter side = ${formatQuantity(tSi, 'K')} + ${formatQuantity(dSi, 'K')}`,
+        assumption:
+          t.role === null && said === undefined
+            ? side === 'hot'
+              ? 'The stated temperature is read as the hot side (what a heat pump supplies) and the difference is taken from it; mark it as cold if it is the source.'
+              : 'The stated temperature is read as the cold side and the difference is added to it; mark it as hot if it is the hot side.'
+            : undefined,
+      });
+      t.role = down ? 'hot' : 'cold';
+    }
+  }
+
+  // Two or more temperatures of the same machine: the higher is the hot side. Pairs said together
+  // ("between 7 °C and 35 °C", "from 10 to 55 °C") are ordered within the pair; otherwise the
+  // highest is hot and the lowest cold.
+  const absolute = drafts.filter((d) => d.kind === 'temperature' && d.role !== 'aside');
+  let paired = false;
+  for (let i = 0; i + 1 < absolute.length; i++) {
+    const a = absolute[i];
+    const b = absolute[i + 1];
+    if (!/^[^\S\n]*(?:and|to|–|-|—|\/)[^\S\n]*$/iu.test(text.slice(a.end, b.start))) continue;
+    const [hi, lo] = (siOf(a) ?? 0) >= (siOf(b) ?? 0) ? [a, b] : [b, a];
+    hi.role = 'hot';
+    lo.role = 'cold';
+    paired = true;
+    i++;
+  }
+  if (absolute.length >= 2 && !paired) {
+    const sorted = [...absolute].sort((a, b) => (siOf(b) ?? 0) - (siOf(a) ?? 0));
+    sorted[0].role = 'hot';
+    sorted[sorted.length - 1].role = 'cold';
+  } else if (absolute.length === 1 && absolute[0].role === null) {
+    // One temperature kept by a freezer or a chiller is its cold side; by a heat pump, its hot side.
+    if (COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text)) absolute[0].role = 'cold';
+    else if (HEAT_PUMP_RE.test(text)) absolute[0].role = 'hot';
+  }
+
+  // "70 % of the Carnot efficiency" between two stated temperatures: that share of 1 − Tc/Th.
+  const share = drafts.find((d) => d.kind === 'efficiency' && d.derived === CARNOT_SHARE);
+  if (share) {
+    const hot = drafts.find((d) => d.kind === 'temperature' && d.role === 'hot');
+    const cold = drafts.find((d) => d.kind === 'temperature' && d.role === 'cold');
+    const [p, th, tc] = [siOf(share), hot && siOf(hot), cold && siOf(cold)];
+    if (p !== null && th && tc !== null && tc !== undefined && th > tc) {
+      const carnot = 1 - tc / th;
+      share.quantity = typedSi(p * carnot, '');
+      share.derived = `${formatPrint(p * 100)} % of the Carnot efficiency 1 − Tc/Th = 1 − ${formatQuantity(tc, 'K')}/${formatQuantity(th, 'K')}`;
+    } else {
+      // Without both temperatures it states no efficiency of its own.
+      share.role = 'aside';
+    }
+  }
+}
