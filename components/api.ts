@@ -5,37 +5,83 @@
  *  - ApiUnreachableError: no answer at all (server down, network gone).
  */
 import { keepPreviousData, QueryClient, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { z } from 'zod';
 import type {
   ApiErrorBody,
   AuditListResponse,
-  EntryHtml,
-  EntryStateDto,
-  EntryVersionDto,
+  ChangePasswordBody,
+  CitationParseResponse,
+  CiteFormat,
+  CiteResponse,
+  DeskResponse,
+  DraftDto,
+  DraftResponse,
+  EmailOnlyBody,
+  EntryListQuery,
+  EntryListResponse,
+  EntryResponse,
   HealthResponse,
   OutboxResponse,
-  PersonDto,
-  SessionResponse,
-  TaxonomyResponse,
-  UserDto,
-  UserListResponse,
-} from '@/shared/api-types';
-
-export type { EntryHtml, EntryStateDto, EntryVersionDto, PersonDto };
-import type {
-  changePasswordSchema,
-  emailOnlySchema,
-  pageQuerySchema,
-  resetSchema,
+  PageQuery,
+  ResetBody,
+  RetireBody,
+  RetireResponse,
   Role,
-  signInSchema,
-  signUpSchema,
-  updateAccountSchema,
-  userListQuerySchema,
-  verifySchema,
-} from '@/shared/schemas/auth';
-import type { Citation, EntryContent } from '@/shared/entries/schema';
-import type { Worksheet } from '@/shared/worksheet/schema';
+  SearchParams,
+  SearchResponse,
+  SessionResponse,
+  SignInBody,
+  SignUpBody,
+  TaxonomyResponse,
+  UpdateAccountBody,
+  UserListQuery,
+  UserListResponse,
+  UserResponse,
+  VerifyBody,
+  VersionListResponse,
+  WorksheetListResponse,
+  WorksheetResponse,
+} from '@/shared/api-types';
+import type { EntryContent } from '@/shared/entries/schema';
+
+export type {
+  ChangePasswordBody,
+  CitationParseResponse,
+  CitationProblem,
+  CiteFormat,
+  CiteResponse,
+  DeskResponse,
+  DraftDto,
+  DraftResponse,
+  DraftState,
+  EmailOnlyBody,
+  EntryHtml,
+  EntryListQuery,
+  EntryListResponse,
+  EntryResponse,
+  EntryStateDto,
+  EntrySummaryDto as EntrySummary,
+  EntryVersionDto,
+  DraftSummaryDto as DraftSummary,
+  PageQuery,
+  PersonDto,
+  PublishedSummaryDto,
+  ResetBody,
+  SearchParams,
+  SearchResponse,
+  SearchResult,
+  SignInBody,
+  SignUpBody,
+  UpdateAccountBody,
+  UserListQuery,
+  UserResponse,
+  VerifyBody,
+  VersionListResponse,
+  VersionSummaryDto as VersionSummary,
+  WorksheetListResponse,
+  WorksheetResponse,
+  WorksheetSummary,
+} from '@/shared/api-types';
+export { CITE_FORMATS } from '@/shared/api/constants';
 
 export class ApiError extends Error {
   override readonly name = 'ApiError';
@@ -211,22 +257,6 @@ export const queryKeys = {
   search: (params: SearchParams) => ['search', params] as const,
 };
 
-/** One starter worksheet as `GET /api/worksheets` lists it. */
-export interface WorksheetSummary {
-  name: string;
-  title: string;
-  summary: string;
-}
-
-/** `GET /api/worksheets` */
-export interface WorksheetListResponse {
-  worksheets: WorksheetSummary[];
-}
-
-/** `GET /api/worksheets/:name` */
-export interface WorksheetResponse {
-  worksheet: Worksheet;
-}
 
 /** `GET /api/health`; a degraded server (503) is data here, not an error. */
 export function useHealth() {
@@ -265,20 +295,6 @@ export function useWorksheet(name: string) {
 
 /* Accounts (the contract in shared/schemas/auth.ts and shared/api-types.ts). */
 
-export type SignUpBody = z.output<typeof signUpSchema>;
-export type SignInBody = z.output<typeof signInSchema>;
-export type VerifyBody = z.output<typeof verifySchema>;
-export type EmailOnlyBody = z.output<typeof emailOnlySchema>;
-export type ResetBody = z.output<typeof resetSchema>;
-export type ChangePasswordBody = z.output<typeof changePasswordSchema>;
-export type UpdateAccountBody = z.output<typeof updateAccountSchema>;
-export type UserListQuery = z.output<typeof userListQuerySchema>;
-export type PageQuery = z.output<typeof pageQuerySchema>;
-
-/** What sign-up, verify, sign-in, the account and a role change answer with. */
-export interface UserResponse {
-  user: UserDto;
-}
 
 /** A query string from the values that are set, in a fixed order: `?q=ada&limit=25&offset=0`. */
 function queryString(query: Record<string, string | number | undefined>): string {
@@ -417,110 +433,6 @@ export function useOutbox() {
 /* Entries (the contract of issue 5; content as in shared/entries/schema.ts). */
 
 
-/** One published entry as `GET /api/entries` lists it. */
-export interface EntrySummary {
-  slug: string;
-  title: string;
-  version: number;
-  publishedAt: string;
-  laws: string[];
-  mechanismClass: string;
-  inBrief: string;
-}
-
-/** `GET /api/entries` */
-export interface EntryListResponse {
-  entries: EntrySummary[];
-  total: number;
-}
-
-export interface EntryListQuery {
-  law?: string;
-  mechanism?: string;
-  limit?: number;
-  offset?: number;
-}
-
-
-
-
-/** `GET /api/entries/:slug` and `GET /api/entries/:slug/versions/:n` */
-export interface EntryResponse {
-  entry: EntryStateDto;
-  version: EntryVersionDto;
-}
-
-export interface VersionSummary {
-  number: number;
-  changeNote: string;
-  publishedAt: string;
-  author: { displayName: string };
-  reviewer: { displayName: string } | null;
-}
-
-/** `GET /api/entries/:slug/versions` */
-export interface VersionListResponse {
-  versions: VersionSummary[];
-}
-
-export const CITE_FORMATS = ['apa', 'vancouver', 'harvard', 'bibtex', 'ris', 'csl-json'] as const;
-export type CiteFormat = (typeof CITE_FORMATS)[number];
-
-/** `GET /api/entries/:slug/cite` */
-export interface CiteResponse {
-  format: CiteFormat;
-  text: string;
-  url: string;
-  version: number;
-  date: string;
-}
-
-export type DraftState = 'draft' | 'in_review';
-
-export interface DraftSummary {
-  id: number;
-  slug: string;
-  title: string;
-  state: DraftState;
-  updatedAt: string;
-  author: { displayName: string };
-  lockVersion: number;
-}
-
-/** `GET /api/desk` */
-export interface DeskResponse {
-  mine: DraftSummary[];
-  toReview: DraftSummary[];
-  recent: EntrySummary[];
-}
-
-export interface DraftDto {
-  id: number;
-  slug: string;
-  state: DraftState;
-  lockVersion: number;
-  content: EntryContent;
-  author: PersonDto;
-  reviewer: PersonDto | null;
-  updatedAt: string;
-}
-
-/** What every draft route answers with. */
-export interface DraftResponse {
-  draft: DraftDto;
-}
-
-export interface CitationProblem {
-  index: number;
-  input: string;
-  reason: string;
-}
-
-/** `POST /api/citations/parse` */
-export interface CitationParseResponse {
-  items: Citation[];
-  problems: CitationProblem[];
-}
 
 const entryPath = (slug: string) => `/api/entries/${encodeURIComponent(slug)}`;
 
@@ -602,7 +514,7 @@ export function useReviseEntry() {
 export function useRetireEntry(slug: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (body: { reason: string; successor?: string }) => apiSend<{ entry: unknown }>('POST', `${entryPath(slug)}/retire`, body),
+    mutationFn: (body: RetireBody) => apiSend<RetireResponse>('POST', `${entryPath(slug)}/retire`, body),
     onSuccess: () => client.invalidateQueries({ queryKey: queryKeys.entries }),
   });
 }
@@ -655,42 +567,6 @@ export function useParseCitations() {
 
 /* Search (issue 6; the contract of `GET /api/search`). */
 
-export interface SearchParams {
-  /** Up to 500 characters; empty lists every published entry, newest first. */
-  q: string;
-  /** A conservation-law slug. */
-  law?: string;
-  /** A mechanism-class slug (matches that class and its children). */
-  mechanism?: string;
-  /** 1–50, 20 when not given. */
-  limit?: number;
-  offset?: number;
-}
-
-/** One ranked result of `GET /api/search`. */
-export interface SearchResult {
-  slug: string;
-  title: string;
-  version: number;
-  score: number;
-  /** The index terms that matched (normalised, so possibly stems: "microwav"). */
-  terms: string[];
-  /** Plain text, HTML-escaped, with the matched words wrapped in `<mark>…</mark>`. */
-  excerpt: string;
-  laws: string[];
-  mechanismClass: string;
-  /** Plain text. */
-  inBrief: string;
-}
-
-/** `GET /api/search` */
-export interface SearchResponse {
-  query: string;
-  total: number;
-  results: SearchResult[];
-  /** Counts over the results of q, each ignoring its own facet's filter. */
-  facets: { laws: Record<string, number>; mechanisms: Record<string, number> };
-}
 
 /** `GET /api/search?q=&law=&mechanism=&limit=&offset=`; the previous results stay while the next ones load. */
 export function useSearch(params: SearchParams, { enabled = true }: { enabled?: boolean } = {}) {

@@ -43,20 +43,5 @@ export const synonymFileSchema = z.object({ groups: z.array(z.object({ terms: sy
 export type SynonymGroupInput = z.output<typeof synonymGroupCreateSchema>;
 export type SynonymGroupUpdate = z.output<typeof synonymGroupUpdateSchema>;
 
-export interface SynonymGroupDto {
-  id: number;
-  terms: string[];
-  note: string | null;
-  version: number;
-  updatedAt: string;
-}
-
-/** `GET /api/synonyms`: every group, in the order of the list. */
-export interface SynonymListResponse {
-  groups: SynonymGroupDto[];
-}
-
-/** `POST` and `PUT`: the group as stored. */
-export interface SynonymGroupResponse {
-  group: SynonymGroupDto;
-}
+// The DTOs are part of the API contract (shared/api/synonyms.ts).
+export type { SynonymGroupDto, SynonymGroupResponse, SynonymListResponse } from './api/synonyms';

@@ -24,11 +24,12 @@ import { TextLink } from '../ui/TextLink';
 import { dataAttributes } from '../worksheet/dataAttributes';
 import { ResultList, ResultRow } from '../worksheet/ResultRow';
 import { CLAIM_STYLE_LABEL, CLAIM_STYLES, type ClaimCheckResult, type ClaimCheckRun, type ClaimMatch, type ClaimStyle, type Figure } from './api';
+import { entryVersionPath } from '@/shared/permalink';
 import { CopyButton } from './CopyButton';
 import { figureDisplay, HEDGE_WORDS, roleWords } from './figures';
 
 /** The path of an entry's permanent version, for a link inside the app. */
-export const versionPath = (m: Pick<ClaimMatch, 'slug' | 'version'>) => `/entries/${encodeURIComponent(m.slug)}/v/${m.version}`;
+export const versionPath = (m: Pick<ClaimMatch, 'slug' | 'version'>) => entryVersionPath(m.slug, m.version);
 
 /** The paragraph of a variant; a check saved before there were variants has only its one paragraph. */
 export function paragraphFor(result: ClaimCheckResult, variant: ParagraphVariant): ClaimParagraph {

@@ -25,10 +25,12 @@ export type {
   SavedClaimCheckSummaryDto,
 } from '@/shared/claims/types';
 
-/** The citation styles the referee paragraph comes in (shared/entries/citations.ts CITATION_STYLES). */
-export const CLAIM_STYLES = ['apa', 'vancouver', 'harvard'] as const;
-export type ClaimStyle = (typeof CLAIM_STYLES)[number];
-export const CLAIM_STYLE_LABEL: Record<ClaimStyle, string> = { apa: 'APA', vancouver: 'Vancouver', harvard: 'Harvard' };
+/** The citation styles the referee paragraph comes in (the API contract's CITATION_STYLES). */
+export {
+  CITATION_STYLES as CLAIM_STYLES,
+  CITATION_STYLE_LABEL as CLAIM_STYLE_LABEL,
+  type CitationStyle as ClaimStyle,
+} from '@/shared/api/constants';
 
 export const claimKeys = {
   /** Everything of the claim check that belongs to the signed-in account or a link. */

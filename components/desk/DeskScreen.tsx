@@ -2,7 +2,7 @@ import { router } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { RoleGate } from '../account/RoleGate';
 import { formatWhen } from '../admin/format';
-import { useDesk, type DraftSummary, type EntrySummary } from '../api';
+import { useDesk, type DraftSummary, type PublishedSummaryDto } from '../api';
 import { formatDay } from '../entry/format';
 import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
@@ -90,7 +90,7 @@ function DraftList({ testID, drafts, empty }: { testID: string; drafts: DraftSum
   );
 }
 
-function RecentList({ entries }: { entries: EntrySummary[] }) {
+function RecentList({ entries }: { entries: PublishedSummaryDto[] }) {
   if (entries.length === 0) {
     return (
       <Notice testID="desk-recent-empty" title="Nothing published yet.">
@@ -101,7 +101,8 @@ function RecentList({ entries }: { entries: EntrySummary[] }) {
   return (
     <View role="list" testID="desk-recent" style={styles.list}>
       {entries.map((entry) => (
-        <View role="listitem" key={entry.slug} style={styles.row}>
+        // One entry may be listed once per recent version: the version is part of the key.
+        <View role="listitem" key={`${entry.slug}/v/${entry.version}`} style={styles.row}>
           <TextLink href={`/entries/${entry.slug}`} testID={`entry-link-${entry.slug}`}>
             {entry.title}
           </TextLink>

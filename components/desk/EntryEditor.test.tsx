@@ -22,6 +22,9 @@ const draft: DraftDto = {
   author: { id: 3, displayName: 'Imre Castellanos' },
   reviewer: null,
   updatedAt: '2026-03-01T10:00:00.000Z',
+  basedOn: null,
+  reviewNote: null,
+  entryStatus: 'draft',
 };
 
 const taxonomy = { laws: [], classes: [] };

@@ -1,3 +1,4 @@
+import { entryVersionPath } from '@/shared/permalink';
 import { StyleSheet, Text, View } from 'react-native';
 import type { EntryContent } from '@/shared/entries/schema';
 import { useTaxonomy, type EntryVersionDto } from '../api';
@@ -15,7 +16,7 @@ interface EntryMetaProps {
 /** What the entry is about (laws broken, mechanism class, other names) and which version this is, by whom. */
 export function EntryMeta({ slug, version, pinned }: EntryMetaProps) {
   const { content } = version;
-  const permalink = `/entries/${slug}/v/${version.number}`;
+  const permalink = entryVersionPath(slug, version.number);
   return (
     <View style={styles.root}>
       <Classification content={content} />

@@ -1,3 +1,4 @@
+import { entryVersionPath } from '@/shared/permalink';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { ChoiceChips } from '../admin/ChoiceChips';
@@ -21,7 +22,7 @@ export function VersionsPanel({ slug, shown }: { slug: string; shown: number }) 
       <View role="list" testID="versions-list" style={styles.list}>
         {versions.map((v) => (
           <View role="listitem" key={v.number} testID={`version-${v.number}`} style={styles.row}>
-            <TextLink href={`/entries/${slug}/v/${v.number}`} testID={`version-link-${v.number}`}>
+            <TextLink href={entryVersionPath(slug, v.number)} testID={`version-link-${v.number}`}>
               {`Version ${v.number}${v.number === shown ? ' (this page)' : ''}`}
             </TextLink>
             <Text style={type.caption}>

@@ -2,35 +2,15 @@
  * The sections of an entry in reading order (DESIGN.md §3), with the titles readers see. The
  * entry page, the diff between versions and the Desk's editor all go by this one list.
  */
-import { BODY_SECTIONS, type EntryContent } from '@/shared/entries/schema';
+import { SECTION_ORDER, SECTION_TITLES, type SectionField } from '@/shared/api/constants';
+import type { EntryContent } from '@/shared/entries/schema';
 
-export type SectionField = Exclude<keyof EntryContent, 'title' | 'aliases' | 'mechanismClass' | 'laws'>;
+export type { SectionField };
 
-export const sectionTitles: Record<SectionField, string> = {
-  inBrief: BODY_SECTIONS.inBrief,
-  howItIsPitched: BODY_SECTIONS.howItIsPitched,
-  whyItFails: BODY_SECTIONS.whyItFails,
-  worksheets: 'Run the numbers',
-  whatFakesTheEffect: BODY_SECTIONS.whatFakesTheEffect,
-  repliesAndAnswers: 'Replies and answers',
-  questionsToAsk: 'Questions to ask the claimant',
-  cautions: BODY_SECTIONS.cautions,
-  sources: 'Sources',
-  related: 'Related entries',
-};
+/** The titles readers see (declared once in the API contract). */
+export const sectionTitles = SECTION_TITLES;
 
-export const readingOrder: readonly SectionField[] = [
-  'inBrief',
-  'howItIsPitched',
-  'whyItFails',
-  'worksheets',
-  'whatFakesTheEffect',
-  'repliesAndAnswers',
-  'questionsToAsk',
-  'cautions',
-  'sources',
-  'related',
-];
+export const readingOrder: readonly SectionField[] = SECTION_ORDER;
 
 /** A citation in one line, for the diff and for a source whose formatted text is not at hand. */
 export function citationLine({ csl, note }: EntryContent['sources'][number]): string {

@@ -31,7 +31,7 @@ interface EntryListProps {
 export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore }: EntryListProps) {
   const { data, error, isPending, isFetching, refetch } = useEntryList({ ...filters, limit: PAGE * pages });
   const lawName = (slug: string) => taxonomy?.laws.find((l) => l.slug === slug)?.name ?? slug;
-  const className = (slug: string) => taxonomy?.classes.find((c) => c.slug === slug)?.name ?? slug;
+  const className = (slug: string | null) => (slug === null ? '' : (taxonomy?.classes.find((c) => c.slug === slug)?.name ?? slug));
   const filtered = Boolean(filters.law || filters.mechanism);
 
   return (
@@ -70,7 +70,7 @@ export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore }:
   );
 }
 
-function EntryRow({ entry, lawName, className }: { entry: EntrySummary; lawName: (s: string) => string; className: (s: string) => string }) {
+function EntryRow({ entry, lawName, className }: { entry: EntrySummary; lawName: (s: string) => string; className: (s: string | null) => string }) {
   const brief = useMemo(() => renderMarkdown(entry.inBrief), [entry.inBrief]);
   return (
     <View role="listitem" testID={`entry-${entry.slug}`} style={styles.row}>

@@ -32,7 +32,7 @@ interface SearchResultsProps {
 export function SearchResults(props: SearchResultsProps) {
   const { data, error, fetching, filters, taxonomy } = props;
   const lawName = (slug: string) => taxonomy?.laws.find((l) => l.slug === slug)?.name ?? slug;
-  const className = (slug: string) => taxonomy?.classes.find((c) => c.slug === slug)?.name ?? slug;
+  const className = (slug: string | null) => (slug === null ? '' : (taxonomy?.classes.find((c) => c.slug === slug)?.name ?? slug));
   const filtered = Boolean(filters.law || filters.mechanism);
 
   return (
@@ -88,7 +88,7 @@ function ResultRow(props: {
   result: SearchResult;
   highlighted: boolean;
   lawName: (slug: string) => string;
-  className: (slug: string) => string;
+  className: (slug: string | null) => string;
 }) {
   const { result } = props;
   return (

@@ -2,6 +2,7 @@
  * What issue 7 adds to an entry page: "Seen in the wild" (accepted sightings linked to the entry,
  * hidden while there are none) and "Report an error" (a correction against the version on screen).
  */
+import { entryVersionPath } from '@/shared/permalink';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { CORRECTION_SECTIONS, type CorrectionSection, type SubmissionDto } from '@/shared/submissions/types';
@@ -94,7 +95,7 @@ export function ReportError({ slug, version, title }: { slug: string; version: n
         testID="correction-sign-in"
         title="Sign in to report an error."
         action={
-          <TextLink href={`/sign-in?next=${encodeURIComponent(`/entries/${slug}/v/${version}`)}`} testID="correction-sign-in-link">
+          <TextLink href={`/sign-in?next=${encodeURIComponent(entryVersionPath(slug, version))}`} testID="correction-sign-in-link">
             Sign in
           </TextLink>
         }

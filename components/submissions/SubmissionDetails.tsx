@@ -3,6 +3,7 @@
  * it plain text, never read as HTML), its figures, its attachments as downloads, the decision and
  * the history of what happened to it.
  */
+import { entryVersionPath } from '@/shared/permalink';
 import type { ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { FIGURE_KIND_LABEL } from '@/shared/claims/types';
@@ -133,7 +134,7 @@ function CorrectionBody({ submission: s }: { submission: SubmissionDto }) {
     <>
       {s.entry ? (
         <Fact label="Entry">
-          <TextLink href={`/entries/${s.entry.slug}/v/${s.entry.version}`} testID="submission-entry">
+          <TextLink href={entryVersionPath(s.entry.slug, s.entry.version)} testID="submission-entry">
             {s.entry.title}, version {s.entry.version}
           </TextLink>
         </Fact>

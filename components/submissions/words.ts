@@ -2,7 +2,8 @@
  * The words the submission screens use for states, sections, kinds and events, and the age of an
  * item, in one place so the submitter's view, the account, the Desk and the queue say the same.
  */
-import type { CorrectionSection, SubmissionKind, SubmissionStatus } from '@/shared/submissions/types';
+import { CORRECTION_SECTION_LABEL } from '@/shared/api/constants';
+import type { SubmissionKind, SubmissionStatus } from '@/shared/submissions/types';
 import { ApiError, ApiUnreachableError } from '../api';
 
 export const STATUS_WORDS: Record<SubmissionStatus, string> = {
@@ -24,19 +25,8 @@ export const QUEUE_STATUS_WORDS: Record<SubmissionStatus, string> = {
 
 export const KIND_WORDS: Record<SubmissionKind, string> = { sighting: 'Sighting', correction: 'Correction' };
 
-export const SECTION_LABEL: Record<CorrectionSection, string> = {
-  title: 'Title',
-  inBrief: 'In brief',
-  howItIsPitched: 'How it is pitched',
-  whyItFails: 'Why it fails',
-  worksheets: 'Run the numbers (worksheets)',
-  whatFakesTheEffect: 'Artifacts that can look like the effect',
-  repliesAndAnswers: 'Replies and answers',
-  questionsToAsk: 'Questions to ask',
-  cautions: 'Cautions',
-  sources: 'Sources',
-  other: 'Something else',
-};
+/** A correction's section as a label (declared once in the API contract). */
+export const SECTION_LABEL = CORRECTION_SECTION_LABEL;
 
 const EVENT_WORDS: Record<string, string> = {
   submitted: 'Sent in',

@@ -17,9 +17,10 @@ import '@citation-js/plugin-ris';
 import '@citation-js/plugin-csl';
 import { citationSchema, type Citation } from './schema';
 
-export type CitationStyle = 'apa' | 'vancouver' | 'harvard';
+// The styles are part of the API contract (declared once in shared/api/constants.ts).
+import type { CitationStyle } from '../api/constants';
+export { CITATION_STYLES, type CitationStyle } from '../api/constants';
 export type CitationFormat = 'text' | 'html';
-export const CITATION_STYLES: readonly CitationStyle[] = ['apa', 'vancouver', 'harvard'];
 
 /** A CSL-JSON item (loosely typed: citation-js accepts the whole CSL-JSON schema). */
 export type CslItem = Record<string, unknown> & { id: string; type: string; title: string };

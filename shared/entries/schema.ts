@@ -3,6 +3,7 @@
  * starter files in content/entries/ (YAML front matter + Markdown body), drafts sent by the Desk, and
  * what the API returns for a version.
  */
+import { SECTION_TITLES } from '../api/constants';
 import { z } from 'zod';
 import { worksheetSchema } from '../worksheet/schema';
 
@@ -103,9 +104,9 @@ export type EntryFile = z.infer<typeof entryFileSchema>;
  * exact titles (in this order); front matter holds everything else.
  */
 export const BODY_SECTIONS = {
-  inBrief: 'In brief',
-  howItIsPitched: 'How it is pitched',
-  whyItFails: 'Why it fails',
-  whatFakesTheEffect: 'Artifacts that can look like the effect',
-  cautions: 'Cautions',
+  inBrief: SECTION_TITLES.inBrief,
+  howItIsPitched: SECTION_TITLES.howItIsPitched,
+  whyItFails: SECTION_TITLES.whyItFails,
+  whatFakesTheEffect: SECTION_TITLES.whatFakesTheEffect,
+  cautions: SECTION_TITLES.cautions,
 } as const;
