@@ -11,6 +11,7 @@ import type * as ModelsModule from '../../server/models';
 import type * as SequelizeModule from '../../server/db/sequelize';
 import { deleteExpiredRateLimits, MariaDbStore } from '../../server/http/rate-limit';
 import { Client, HIGH_LIMITS, demo, startTestApp, type TestApp } from '../support/app';
+import { until } from '../support/poll';
 
 jest.setTimeout(120_000);
 
@@ -77,12 +78,17 @@ it('starts a new window when the old one has ended, and deletes the rows of ende
   expect(second.resetTime!.getTime()).toBeGreaterThan(Date.now() - 5_000);
   await store.decrement('10.0.0.1');
   expect((await store.get('10.0.0.1'))?.totalHits).toBe(1);
-  await new Promise((r) => setTimeout(r, 600));
+  // No fixed wait: poll until the window has ended on the database's clock (400 ms after the first hit).
+  await until('the window of 10.0.0.1 has ended', async () => (await store.get('10.0.0.1')) === undefined, 30_000);
   // The window has ended: it reads as empty, and the next hit counts from one.
   expect(await store.get('10.0.0.1')).toBeUndefined();
   await store.increment('10.0.0.2');
-  await new Promise((r) => setTimeout(r, 600));
-  expect((await store.increment('10.0.0.1')).totalHits).toBe(1);
+  await until('the window of 10.0.0.2 has ended', async () => (await store.get('10.0.0.2')) === undefined, 30_000);
+  // 10.0.0.1's new window is counted by a store of the same name with a 60 s window, so that it cannot
+  // also end before the deletion below, however slow the machine.
+  const long = new MariaDbStore(other, 'probe');
+  long.init({ windowMs: 60_000 } as Parameters<MariaDbStore['init']>[0]);
+  expect((await long.increment('10.0.0.1')).totalHits).toBe(1);
   // 10.0.0.2's window has ended and 10.0.0.1's has not: only the first row is deleted.
   const before = (await rows(other)).map((r) => r.rate_key).filter((k) => k.startsWith('probe:'));
   expect(before.sort()).toEqual(['probe:10.0.0.1', 'probe:10.0.0.2']);

@@ -14,6 +14,7 @@ import { Attachment, AuditEvent, Submission } from '../../server/models';
 import { LocalStore } from '../../server/storage';
 import { elfHeader, largePdf, minimalPdf, minimalPng, plainText } from '../fixtures/files/samples';
 import { demo, HIGH_LIMITS, startTestApp, type Client, type TestApp } from '../support/app';
+import { claimSubmission } from '../support/workflow';
 
 jest.setTimeout(120_000);
 
@@ -61,16 +62,26 @@ const good: SightingFields = {
 describe('a sighting, from submission to the entry', () => {
   let contributor: Client;
   let moderator: Client;
-  let id: number;
 
   beforeAll(async () => {
     contributor = await h.signedIn(demo.contributor.email);
     moderator = await h.signedIn(demo.moderator.email);
   });
 
+  /** Each test submits its own sighting (the invented one above, under its own title), with a PDF and a PNG. */
+  const submitOwn = async (title: string) => {
+    const res = await sighting(contributor, { ...good, title }, [
+      { name: 'brochure.pdf', bytes: minimalPdf() },
+      { name: 'photo.bin', bytes: minimalPng(), type: 'application/octet-stream' },
+    ]);
+    expect(res.status).toBe(201);
+    return res.body.submission.id as number;
+  };
+
   it('is submitted with attachments whose type, size and SHA-256 are kept', async () => {
     const pdf = minimalPdf();
     const png = minimalPng();
+    const filesBefore = storedFiles().length;
     const res = await sighting(contributor, good, [
       { name: 'brochure.pdf', bytes: pdf },
       // The type comes from the bytes, not from the name or the header the client sends.
@@ -78,19 +89,20 @@ describe('a sighting, from submission to the entry', () => {
     ]);
     expect(res.status).toBe(201);
     const s = res.body.submission;
-    id = s.id;
     expect(s).toMatchObject({ kind: 'sighting', status: 'open', title: good.title, seenAtUrl: good.seenAtUrl });
     expect(s.figures.map((f: { quantity: string }) => f.quantity)).toEqual(['0.2 lbf', '1.5 kW']);
     // 1 lbf = 4.448 222 N (NIST SP 811, Appendix B.8).
     expect(s.figures[0].si).toBeCloseTo(0.2 * 4.4482216152605, 9);
+    // SHA-256 from Node's crypto (OpenSSL), not from the server's own hashing code.
     expect(s.attachments.map((a: { name: string; mediaType: string; size: number; sha256: string }) => [a.name, a.mediaType, a.size, a.sha256])).toEqual([
       ['brochure.pdf', 'application/pdf', pdf.length, crypto.createHash('sha256').update(pdf).digest('hex')],
       ['photo.bin', 'image/png', png.length, crypto.createHash('sha256').update(png).digest('hex')],
     ]);
-    expect(storedFiles()).toHaveLength(2);
+    expect(storedFiles()).toHaveLength(filesBefore + 2);
   });
 
   it('shows on the submitter’s own list, and not to another contributor', async () => {
+    const id = await submitOwn('Sealed resonator drive, seen on a stand');
     const mine = await contributor.get('/api/submissions/mine');
     expect(mine.body.items.map((i: { id: number; status: string }) => [i.id, i.status])).toContainEqual([id, 'open']);
     const other = await h.signedIn(demo.editor.email);
@@ -99,11 +111,14 @@ describe('a sighting, from submission to the entry', () => {
   });
 
   it('tells the moderators in one digest', async () => {
-    const mail = await h.mail.next(demo.moderator.email, { subject: /queue/i });
-    expect(mail.text).toContain(good.title!);
+    const title = 'Sealed resonator drive, for the digest';
+    await submitOwn(title);
+    const mail = await h.mail.next(demo.moderator.email, { subject: /queue/i, text: title });
+    expect(mail.text).toContain(title);
   });
 
   it('serves attachments as downloads with a restrictive policy, to the moderator', async () => {
+    const id = await submitOwn('Sealed resonator drive, with a brochure');
     const s = (await moderator.get(`/api/submissions/${id}`)).body.submission;
     const res = await moderator.get(s.attachments[0].url).buffer(true).parse((r, cb) => {
       const chunks: Buffer[] = [];
@@ -120,6 +135,7 @@ describe('a sighting, from submission to the entry', () => {
   });
 
   it('is listed in the queue, oldest first, with counts', async () => {
+    const id = await submitOwn('Sealed resonator drive, in the queue');
     const q = await moderator.get('/api/queue');
     expect(q.status).toBe(200);
     expect(q.body.items.map((i: { id: number }) => i.id)).toContain(id);
@@ -131,6 +147,7 @@ describe('a sighting, from submission to the entry', () => {
   });
 
   it('is claimed by one moderator at a time, and decided only by the holder', async () => {
+    const id = await submitOwn('Sealed resonator drive, claimed once');
     const admin = await h.signedIn(demo.admin.email);
     expect((await moderator.post(`/api/submissions/${id}/decide`, { decision: 'reject', note: 'No.' })).body.error.code).toBe('not_claimed');
     const claimed = await moderator.post(`/api/submissions/${id}/claim`);
@@ -143,6 +160,8 @@ describe('a sighting, from submission to the entry', () => {
   });
 
   it('is accepted onto an entry: it shows there, the submitter is told, and the decision is audited', async () => {
+    const id = await submitOwn(good.title!);
+    await claimSubmission(moderator, id);
     const bad = await moderator.post(`/api/submissions/${id}/decide`, { decision: 'accept', entries: ['no-such-entry'] });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields).toHaveProperty(['body.entries']);
@@ -155,7 +174,7 @@ describe('a sighting, from submission to the entry', () => {
     expect(onEntry.status).toBe(200);
     expect(onEntry.body.sightings[0]).toMatchObject({ id, title: good.title, seenAtUrl: good.seenAtUrl });
 
-    const mail = await h.mail.next(demo.contributor.email, { subject: /Accepted/ });
+    const mail = await h.mail.next(demo.contributor.email, { subject: /Accepted/, text: `/submissions/${id}` });
     expect(mail.text).toContain('Thrust from microwaves or light trapped in a closed cavity');
     expect(mail.text).toContain(`/submissions/${id}`);
 
@@ -281,13 +300,16 @@ describe('corrections', () => {
 describe('the moderators’ digest', () => {
   it('gathers items that arrive together into one message per moderator', async () => {
     const c = await h.signedIn(demo.contributor.email);
-    await new Promise((r) => setTimeout(r, 600)); // let any earlier digest go out
-    const before = (await h.mail.all()).filter((m) => m.to.includes(demo.moderator.email)).length;
-    for (const n of [1, 2, 3]) expect((await sighting(c, { ...good, title: `Batch item ${n}` })).status).toBe(201);
-    const mail = await h.mail.next(demo.moderator.email, { subject: /3 new submissions/ });
-    for (const n of [1, 2, 3]) expect(mail.text).toContain(`Batch item ${n}`);
-    await new Promise((r) => setTimeout(r, 800));
-    expect((await h.mail.all()).filter((m) => m.to.includes(demo.moderator.email)).length).toBe(before + 1);
+    const titles = [1, 2, 3].map((n) => `Batch item ${n}`);
+    for (const title of titles) expect((await sighting(c, { ...good, title })).status).toBe(201);
+    const mail = await h.mail.next(demo.moderator.email, { subject: /3 new submissions/, text: 'Batch item 1' });
+    for (const title of titles) expect(mail.text).toContain(title);
+    // No fixed wait for a second message: a digest marks the items it lists (in the same transaction
+    // that reads them) before it is sent, so once all three are marked, no later digest can list them.
+    const batch = await Submission.findAll({ where: { title: titles } });
+    expect(batch.map((s) => s.moderatorsNotifiedAt)).toEqual([expect.any(Date), expect.any(Date), expect.any(Date)]);
+    const toModerator = (await h.mail.all()).filter((m) => m.to.includes(demo.moderator.email));
+    expect(toModerator.filter((m) => titles.some((t) => m.text.includes(t)))).toHaveLength(1);
   });
 });
 

@@ -16,8 +16,8 @@ export interface TestMail {
   mailer: Mailer;
   /** Every message caught so far, oldest first. */
   all(): Promise<OutboxMessageDto[]>;
-  /** The next message to `to` not returned before (waits up to 10 s). */
-  next(to: string, opts?: { subject?: RegExp; timeoutMs?: number }): Promise<OutboxMessageDto>;
+  /** The next message to `to` not returned before, whose subject matches and whose text contains `text` (waits up to 10 s). */
+  next(to: string, opts?: { subject?: RegExp; text?: string | RegExp; timeoutMs?: number }): Promise<OutboxMessageDto>;
   stop(): Promise<void>;
 }
 
@@ -32,19 +32,20 @@ export async function startTestMail(from = 'Counterweight <no-reply@example.org>
     async all() {
       return (await OutboxMessage.findAll({ order: [['id', 'ASC']] })).map((m) => m.toDto());
     },
-    async next(to, { subject, timeoutMs = 10_000 } = {}) {
+    async next(to, { subject, text, timeoutMs = 10_000 } = {}) {
+      const hasText = (body: string) => text === undefined || (typeof text === 'string' ? body.includes(text) : text.test(body));
       const deadline = Date.now() + timeoutMs;
       for (;;) {
         const rows = await OutboxMessage.findAll({
           where: { to: { [Op.like]: `%${to}%` }, ...(seen.size ? { id: { [Op.notIn]: [...seen] } } : {}) },
           order: [['id', 'ASC']],
         });
-        const hit = rows.find((m) => !subject || subject.test(m.subject));
+        const hit = rows.find((m) => (!subject || subject.test(m.subject)) && hasText(m.text));
         if (hit) {
           seen.add(hit.id);
           return hit.toDto();
         }
-        if (Date.now() > deadline) throw new Error(`no mail to ${to}${subject ? ` with subject ${subject}` : ''} within ${timeoutMs} ms`);
+        if (Date.now() > deadline) throw new Error(`no mail to ${to}${subject ? ` with subject ${subject}` : ''}${text !== undefined ? ` containing ${text}` : ''} within ${timeoutMs} ms`);
         await new Promise((r) => setTimeout(r, 50));
       }
     },
