@@ -2,7 +2,8 @@
  * The role matrix, built from the server's own route table: every route of the real app (found by
  * walking the Express router) must appear in the hand-written table below and carry a policy
  * (`allow(action)` from server/policies.ts), and every state-changing route is tried as a reader
- * and as each role — signing in as the seeded demo users — expecting 401, 403 or neither.
+ * and as each role — signing in as the seeded demo users — expecting 401, 403 or neither (and, for
+ * the queue's routes, which act on a real submission made for each cell, the route's success).
  * A new route without an entry here, or without a policy, fails this test.
  */
 import request from 'supertest';
@@ -11,6 +12,7 @@ import { allActions, type PolicyMiddleware } from '../../server/policies';
 import { User } from '../../server/models';
 import { hashPassword } from '../../server/auth/passwords';
 import { demo, startTestApp, type Client, type TestApp } from '../support/app';
+import { claimSubmission, submitSighting } from '../support/workflow';
 
 jest.setTimeout(120_000);
 
@@ -22,7 +24,14 @@ type Who = 'public' | 'signed-in' | 'editor' | 'moderator' | 'admin';
 interface Expectation {
   who: Who;
   /** For state-changing routes: the request to send (a concrete path and a body). */
-  try?: (ctx: { targetId: number }) => { path: string; body: object };
+  try?: (ctx: { targetId: number; id: number }) => { path: string; body: object };
+  /**
+   * Makes, for each cell, a real record in the state the route needs (its id reaches `try` as `id`), so
+   * that an allowed viewer must get `ok` — the route's real success — rather than a 404 or a 400.
+   */
+  prepare?: (viewer: Viewer) => Promise<number>;
+  /** With `prepare`: the status an allowed viewer gets. */
+  ok?: number;
   /** For read routes with path parameters and a policy beyond public: a concrete path that answers 200. */
   read?: (ctx: { draftId: number }) => string;
   /** What an allowed viewer gets from `read` when not 200 (a record that is not theirs or not there: 404, never 401/403). */
@@ -77,7 +86,7 @@ const expected: Record<string, Expectation> = {
   'GET /api/claim-checks/saved': { who: 'signed-in' },
   'GET /api/claim-checks/saved/:token': { who: 'public' },
   'DELETE /api/claim-checks/saved/:token': { who: 'signed-in', try: () => ({ path: `/api/claim-checks/saved/${'A'.repeat(32)}`, body: {} }) },
-  // Sightings, corrections and the queue (issue 7). Tries aim at submissions that do not exist.
+  // Sightings, corrections and the queue (issue 7). Tries aim at submissions that do not exist, except the queue's own routes below.
   'POST /api/sightings': { who: 'signed-in', try: () => ({ path: '/api/sightings', body: {} }) },
   'POST /api/corrections': { who: 'signed-in', try: () => ({ path: '/api/corrections', body: {} }) },
   'GET /api/submissions/mine': { who: 'signed-in' },
@@ -86,9 +95,16 @@ const expected: Record<string, Expectation> = {
   'GET /api/attachments/:id': { who: 'signed-in', read: () => '/api/attachments/4000000000', allowedStatus: 404 },
   'GET /api/queue': { who: 'moderator' },
   'GET /api/queue/editors': { who: 'moderator' },
-  'POST /api/submissions/:id/claim': { who: 'moderator', try: () => ({ path: '/api/submissions/4000000000/claim', body: {} }) },
-  'POST /api/submissions/:id/release': { who: 'moderator', try: () => ({ path: '/api/submissions/4000000000/release', body: {} }) },
-  'POST /api/submissions/:id/decide': { who: 'moderator', try: () => ({ path: '/api/submissions/4000000000/decide', body: { decision: 'reject', note: 'Matrix test.' } }) },
+  // The queue's own routes act on a real submission: open for claim; claimed (by the viewer when the
+  // viewer may hold it, else by the moderator) for release and decide. Allowed means 200.
+  'POST /api/submissions/:id/claim': { who: 'moderator', prepare: (v) => queuedSighting(v, 'open'), ok: 200, try: ({ id }) => ({ path: `/api/submissions/${id}/claim`, body: {} }) },
+  'POST /api/submissions/:id/release': { who: 'moderator', prepare: (v) => queuedSighting(v, 'claimed'), ok: 200, try: ({ id }) => ({ path: `/api/submissions/${id}/release`, body: {} }) },
+  'POST /api/submissions/:id/decide': {
+    who: 'moderator',
+    prepare: (v) => queuedSighting(v, 'claimed'),
+    ok: 200,
+    try: ({ id }) => ({ path: `/api/submissions/${id}/decide`, body: { decision: 'reject', note: 'Matrix test.' } }),
+  },
   'GET /api/entries/:slug/sightings': { who: 'public' },
   'GET /api/desk/corrections': { who: 'editor' },
   'POST /api/citations/parse': { who: 'editor', try: () => ({ path: '/api/citations/parse', body: { text: '@book{matrix, title = {A book}, year = 2000}' } }) },
@@ -169,6 +185,20 @@ const accountOf: Record<Exclude<Viewer, 'reader'>, string> = {
 /** A fresh client for each cell: a reader's own session, or a real sign-in as the seeded user. */
 const clientFor = (viewer: Viewer): Promise<Client> => (viewer === 'reader' ? h.client() : h.signedIn(accountOf[viewer]));
 
+/**
+ * A sighting by the demo contributor (invented text), open or claimed: claimed by the viewer when the
+ * viewer is one who may hold it (moderator, admin), else by the demo moderator.
+ */
+async function queuedSighting(viewer: Viewer, state: 'open' | 'claimed'): Promise<number> {
+  const id = await submitSighting(await clientFor('contributor'), {
+    title: `Matrix sighting for the ${viewer}`,
+    seenAtUrl: 'https://news.example.org/matrix-sighting',
+    summary: 'An invented wheel said to turn for ever on a stand at a fair.',
+  });
+  if (state === 'claimed') await claimSubmission(await clientFor(viewer === 'admin' ? 'admin' : 'moderator'), id);
+  return id;
+}
+
 const outcome = (who: Who, viewer: Viewer): 'allowed' | 401 | 403 => {
   if (who === 'public') return 'allowed';
   if (viewer === 'reader') return 401;
@@ -205,13 +235,15 @@ describe('the matrix: every state-changing route × reader, contributor, editor,
 
   it.each(cells)('%s as %s', async (key, viewer, e) => {
     const method = key.split(' ')[0].toLowerCase() as 'post' | 'patch' | 'put' | 'delete';
-    const { path, body } = e.try!({ targetId });
+    const id = e.prepare ? await e.prepare(viewer) : 0;
+    const { path, body } = e.try!({ targetId, id });
     const c = await clientFor(viewer);
     const res = await c.send(method, path, body);
     const want = outcome(e.who, viewer);
     const got = { status: res.status, code: res.body?.error?.code };
     if (want === 401) expect(got).toEqual({ status: 401, code: 'sign_in_required' });
     else if (want === 403) expect(got).toEqual({ status: 403, code: 'forbidden' });
+    else if (e.ok !== undefined) expect(got).toEqual({ status: e.ok, code: undefined });
     else {
       // Allowed: success, or a 4xx about the request itself — never a refusal of the viewer, never a 5xx.
       expect(got.status).toBeLessThan(500);
