@@ -1,0 +1,148 @@
+/**
+ * What every per-check planner of shared/claims/plan.ts starts from: the figures of one kind, each
+ * side's power and energy (several figures on one side added up or the largest taken), the longest
+ * duration, the signals of the words; a figure at one end of its range; a plan and a need.
+ */
+import { checks } from '../../checks';
+import type { CheckName } from '../../checks/types';
+import { formatPrint } from '../print';
+import type { ClaimCheckNeed, Figure, FigureKind } from '../types';
+import { readSignals, type PlanContext, type Signals } from './signals';
+
+export type End = 'low' | 'high';
+/** A figure's typed quantity at one end of its range (the figure itself when it is no range). */
+export const at = (f: Figure, end: End) => (end === 'high' && f.upper ? f.upper.quantity : f.quantity);
+export const siAt = (f: Figure, end: End) => (end === 'high' && f.upper ? f.upper.si : f.si);
+/** A typed quantity for an SI value, exact enough to read back (15 significant figures). */
+export const typed = (si: number, unit: string) => `${Number(si.toPrecision(15))} ${unit}`.trim();
+
+export interface Plan {
+  check: CheckName;
+  /** The figures used; those with an upper end are tried at both ends. */
+  uses: Figure[];
+  /** The inputs for one choice of ends. */
+  inputs: (end: (f: Figure) => End) => Record<string, string>;
+  why: string;
+  assumptions: string[];
+}
+
+/** The figures of one kind that are the device's (a figure set aside is of something else). */
+export const ofKind = (figures: Figure[], kind: FigureKind) => figures.filter((f) => f.kind === kind && f.role !== 'aside');
+export const largest = (fs: Figure[]) => [...fs].sort((a, b) => (b.upper?.si ?? b.si) - (a.upper?.si ?? a.si))[0];
+
+export function uniq<T>(xs: (T | undefined)[]): T[] {
+  return [...new Set(xs.filter((x): x is T => x !== undefined))];
+}
+
+/** Heat out over work in, for a machine that moves heat: a COP (heating, or cooling with cooling words), as a figure of its own. */
+export function heatMoverCop(input: Figure | undefined, output: Figure | undefined, s: Signals): Figure | undefined {
+  if (!input || !output || input.kind !== output.kind || !(input.si > 0)) return undefined;
+  const value = output.si / input.si;
+  const cooling = s.cooling && !s.heatPump;
+  return {
+    id: output.id,
+    kind: 'cop',
+    quantity: String(Number(value.toPrecision(12))),
+    text: output.text,
+    start: output.start,
+    end: output.end,
+    si: value,
+    unit: '',
+    display: formatPrint(value),
+    role: cooling ? 'cooling' : 'heating',
+    derived: `COP = heat out / work in (${output.display} / ${input.display})`,
+  };
+}
+
+/** The form of an energy said right after a figure ("35 kW of electricity", "50 kW of useful heat"). */
+function formOf(f: Figure, text: string): string | null {
+  if (f.end === null) return null;
+  const after = text.slice(f.end, f.end + 40).toLowerCase();
+  if (/^[^.;,]{0,25}?(?:heat|thermal)/.test(after)) return 'heat';
+  if (/^[^.;,]{0,25}?(?:electric|electricity|\bdc\b|\bac\b|\bac\b|kwe|we\b)/.test(after)) return 'electric';
+  if (/^[^.;,]{0,25}?(?:shaft|mechanical|work)/.test(after)) return 'mechanical';
+  if (/^[^.;,]{0,25}?(?:signal)/.test(after)) return 'signal';
+  return null;
+}
+
+/**
+ * Several figures on one side: all that goes in is added up (a supply and a signal; counting more in is
+ * kinder to the claim); what comes out is added up only where the text names different forms of it
+ * (electricity and heat), else the largest is taken (a repeated figure is not counted twice).
+ */
+function combine(figs: Figure[], side: 'in' | 'out', text: string): Figure | undefined {
+  const distinct = figs.filter((f, i) => !figs.slice(0, i).some((g) => Math.abs(g.si - f.si) <= 0.01 * Math.max(Math.abs(g.si), Math.abs(f.si))));
+  if (distinct.length <= 1) return distinct[0];
+  let parts = distinct;
+  if (side === 'out') {
+    const forms = distinct.map((f) => formOf(f, text));
+    const allNamed = forms.every((x) => x !== null) && new Set(forms).size === forms.length;
+    if (!allNamed) return [...distinct].sort((a, b) => b.si - a.si)[0];
+  } else {
+    // A derived input (a power from a current and a voltage) that equals the others added up repeats them.
+    parts = distinct.filter((f) => !(f.derived && Math.abs(f.si - distinct.filter((g) => g !== f).reduce((a, g) => a + g.si, 0)) <= 0.01 * f.si));
+  }
+  const si = parts.reduce((a, f) => a + f.si, 0);
+  const up = parts.reduce((a, f) => a + (f.upper?.si ?? f.si), 0);
+  const first = parts[0];
+  const sum: Figure = {
+    ...first,
+    quantity: typed(si, first.unit),
+    si,
+    text: parts.map((f) => f.text).join(' + '),
+    display: parts.map((f) => f.display).join(' + '),
+    derived: `${side === 'in' ? 'all that goes in' : 'all that comes out'}, added up (${parts.map((f) => f.display).join(' + ')})`,
+  };
+  if (parts.some((f) => f.upper)) sum.upper = { quantity: typed(up, first.unit), si: up, display: formatPrint(up) };
+  else delete sum.upper;
+  return sum;
+}
+
+export interface PlanResult {
+  plans: Plan[];
+  needs: ClaimCheckNeed[];
+  notes: string[];
+}
+
+export function need(check: CheckName, missing: string[], why: string, uses: Figure[]): ClaimCheckNeed {
+  return { check, title: checks[check].title, missing, why, uses: uses.map((f) => f.id) };
+}
+
+/** The figures and words every planner reads, and the plans, needs and notes they add to. */
+export interface Basis {
+  figures: Figure[];
+  ctx: PlanContext;
+  s: Signals;
+  plans: Plan[];
+  needs: ClaimCheckNeed[];
+  notes: string[];
+  power: Figure[];
+  energy: Figure[];
+  text: string;
+  pIn: Figure | undefined;
+  pOut: Figure | undefined;
+  eIn: Figure | undefined;
+  eOut: Figure | undefined;
+  duration: Figure | undefined;
+  speeds: Figure[];
+  temps: Figure[];
+}
+
+export function basisFor(figures: Figure[], ctx: PlanContext): Basis {
+  const s = readSignals(ctx);
+  const plans: Plan[] = [];
+  const needs: ClaimCheckNeed[] = [];
+  const notes: string[] = [];
+
+  const power = ofKind(figures, 'power');
+  const energy = ofKind(figures, 'energy');
+  const text = ctx.text ?? '';
+  const pIn = combine(power.filter((f) => f.role === 'in'), 'in', text);
+  const pOut = combine(power.filter((f) => f.role === 'out'), 'out', text);
+  const eIn = combine(energy.filter((f) => f.role === 'in'), 'in', text);
+  const eOut = combine(energy.filter((f) => f.role === 'out'), 'out', text);
+  const duration = largest(ofKind(figures, 'duration'));
+  const speeds = ofKind(figures, 'speed');
+  const temps = ofKind(figures, 'temperature');
+  return { figures, ctx, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, duration, speeds, temps };
+}

@@ -1,0 +1,99 @@
+/**
+ * The Carnot check (shared/claims/plan.ts): two temperatures (or one and a difference) with a heat
+ * engine's efficiency or a heat pump's or refrigerator's COP; an engine on one reservoir; what is
+ * missing otherwise. It also reads what the first-law planner needs: whether the machine moves heat,
+ * its COP, the efficiency or gain the text states.
+ */
+import type { Figure } from '../types';
+import { at, heatMoverCop, need, ofKind, uniq, type Basis } from './basis';
+import { HEAT_ONLY_RE } from './signals';
+
+const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|brine|well water|borehole|source temperature|outdoors?)(?!\p{L})/iu;
+const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
+/** A converter of electricity (its operating temperatures are no reservoirs). */
+const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
+/** An engine said to work on one reservoir: nothing colder to reject heat to. */
+const SINGLE_RESERVOIR_RE = /(?<!\p{L})(?:no (?:cold|colder|cooler) (?:sink|side|reservoir|body|end)|(?:single|one|a single) (?:heat )?reservoir|(?:air|heat|water|sea|ocean|atmosphere|room air|ambient air|ambient heat) alone|nothing colder|without (?:a |any )?(?:cold|colder|cooler) (?:sink|side|reservoir|body))(?!\p{L})/iu;
+
+/** What the text says of heat and efficiency, for the first-law planner. */
+export interface HeatReading {
+  efficiency: Figure | undefined;
+  movesHeat: boolean;
+  gain: Figure | undefined;
+  share: Figure | undefined;
+  cop: Figure | undefined;
+  acrossDifference: boolean;
+  copForCarnot: boolean | undefined;
+}
+
+export function planCarnot(b: Basis): HeatReading {
+  const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, temps } = b;
+  // A stated efficiency, or one stated as a share of the Carnot efficiency of the stated temperatures.
+  const efficiency = ofKind(figures, 'efficiency').find((f) => !f.derived || / of the Carnot efficiency /.test(f.derived));
+  // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
+  const cooling = s.coolingWords && (s.cooling || COMPRESSOR_RE.test(text) || ofKind(figures, 'cop').length > 0 || temps.length >= 2);
+  // Heat delivered by a machine that names an outdoor, ground or brine source: a heat pump.
+  const heatFromSource = HEAT_SOURCE_RE.test(text) && !/(?<!\p{L})no[^\S\n]+(?:heat[- ]pump|outdoor (?:coil|unit))/iu.test(text) && [...power, ...energy].some(
+      (f) =>
+        f.role === 'out' &&
+        (/^[^.;,]{0,30}?(?:heat|heating)/i.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)) || /(?:heat|heating)(?:[^\S\n]+(?:output|delivered|capacity))?[^.;,]{0,12}$/i.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0))),
+    );
+  const statedCop = ofKind(figures, 'cop').some((f) => !f.derived && (f.role === 'heating' || f.role === 'cooling'));
+  const movesHeat = s.heatPump || cooling || heatFromSource || statedCop || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
+  const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, pOut ?? eOut, { ...s, cooling }) : undefined;
+  const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
+  /** Any efficiency or output-over-input ratio the text states (for one at most 1: a consistent balance). */
+  const share = efficiency ?? ofKind(figures, 'efficiency')[0];
+  const cop = ofKind(figures, 'cop')[0] ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);
+  // An efficiency is a heat engine's only where the text speaks of work or electricity got from heat:
+  // a collector, boiler or heater that delivers heat, or a converter of electricity, is not bounded by Carnot.
+  const notAnEngine = !s.heatEngine && (HEAT_ONLY_RE.test(text) || ELECTRICAL_CONVERTER_RE.test(text));
+  // An efficiency said with a temperature difference is one of a machine working across it.
+  const acrossDifference = ofKind(figures, 'temperature-difference').length > 0;
+  const engineEfficiency = efficiency && !notAnEngine && (s.heatEngine || temps.length >= 2 || acrossDifference) && !(efficiency.si > 1 && temps.length < 2);
+  const copForCarnot = cop && (cop.role !== null || s.heatPump || s.cooling || temps.length >= 2 || !s.overUnity);
+  if (engineEfficiency && temps.length === 1 && SINGLE_RESERVOIR_RE.test(text)) {
+    // "15 % efficiency from 20 °C room air alone, no cold sink": an engine on one reservoir (Th = Tc).
+    const only = temps[0];
+    plans.push({
+      check: 'carnot',
+      uses: uniq([only, efficiency]),
+      inputs: (e) => ({ Th: at(only, e(only)), Tc: at(only, e(only)), eta_claimed: at(efficiency!, e(efficiency!)), cop_heating_claimed: '0', cop_cooling_claimed: '0' }),
+      why: 'The text gives an engine working on one reservoir, with nothing colder to reject heat to.',
+      assumptions: [`Both sides at ${only.display}: the text names no colder body.`],
+    });
+  } else if ((engineEfficiency || copForCarnot) && temps.length >= 2) {
+    const hot = temps.find((t) => t.role === 'hot') ?? [...temps].sort((a, b) => b.si - a.si)[0];
+    const cold = temps.find((t) => t.role === 'cold' && t !== hot) ?? [...temps].filter((t) => t !== hot).sort((a, b) => a.si - b.si)[0];
+    const extra: string[] = [];
+    if (hot.role !== 'hot' || cold.role !== 'cold') extra.push(`The higher temperature (${hot.display}) is taken as the hot side and ${cold.display} as the cold side.`);
+    const cooling = cop?.role === 'cooling' || (cop?.role === null && s.cooling && !s.heatPump);
+    if (cop && cop.role === null) extra.push(cooling ? 'The COP is read as a cooling COP (heat drawn out over work in).' : 'The COP is read as a heating COP (heat delivered over work in); mark it as cooling if the machine is a refrigerator or chiller.');
+    const claimed = [engineEfficiency ? efficiency : undefined, copForCarnot ? cop : undefined];
+    plans.push({
+      check: 'carnot',
+      uses: uniq([hot, cold, ...claimed]),
+      inputs: (e) => ({
+        Th: at(hot, e(hot)),
+        Tc: at(cold, e(cold)),
+        eta_claimed: engineEfficiency ? at(efficiency!, e(efficiency!)) : '0',
+        cop_heating_claimed: copForCarnot && !cooling ? at(cop!, e(cop!)) : '0',
+        cop_cooling_claimed: copForCarnot && cooling ? at(cop!, e(cop!)) : '0',
+      }),
+      why: 'The text gives the temperatures the machine works between and what it claims to achieve there.',
+      assumptions: extra,
+    });
+  } else if ((engineEfficiency || (copForCarnot && (cop.role !== null || s.heatPump || s.cooling))) && temps.length < 2) {
+    const missing = temps.length === 0 ? ['the temperature of the hot side', 'the temperature of the cold side'] : [temps[0].role === 'hot' ? 'the temperature of the cold side' : temps[0].role === 'cold' ? 'the temperature of the hot side' : 'the temperature of the other side'];
+    needs.push(
+      need(
+        'carnot',
+        missing,
+        cop ? 'A heat pump or refrigerator is bounded by the Carnot COP of the temperatures it works between.' : 'A heat engine is bounded by the Carnot efficiency of the temperatures it works between.',
+        uniq([efficiency, cop, ...temps]),
+      ),
+    );
+    if (cop && cop.si > 1) notes.push('A heat pump or refrigerator moves more heat than the work it takes (a COP above 1) without breaking any law; whether its COP is possible depends on the temperatures.');
+  }
+  return { efficiency, movesHeat, gain, share, cop, acrossDifference, copForCarnot };
+}

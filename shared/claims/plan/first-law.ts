@@ -1,0 +1,120 @@
+/**
+ * The first law (shared/claims/plan.ts): energies (or powers) in and out; an input of 0 for a
+ * self-running device; an efficiency or gain above 1 that is not a heat pump's COP nor a quantum
+ * efficiency; a boiler's efficiency on the net calorific value; what is missing otherwise.
+ */
+import type { Figure } from '../types';
+import { at, need, ofKind, siAt, typed, uniq, type Basis, type End } from './basis';
+import type { HeatReading } from './carnot';
+import type { ThrustReading } from './thrust';
+
+/** After a heat input: where the heat comes from ("3.6 kW from the borehole"). */
+const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:(?:is|are|was|were|being)[^\S\n]+)?(?:of[^\S\n]+(?:low-grade[^\S\n]+|ambient[^\S\n]+)?heat[^\S\n]+)?(?:from|out of|drawn from|taken from|extracted from)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:borehole|ground|earth|soil|outside|outdoor|ambient|air|source|environment|surroundings|well|river|lake|sea|brine|loop)(?!\p{L})/iu;
+/** Boiler efficiencies on the net (lower) calorific value may exceed 100 % by convention. */
+const NET_CALORIFIC_RE = /(?<!\p{L})(?:condensing|net (?:CV|calorific|heating)|LHV|lower heating value|lower calorific)(?!\p{L})/iu;
+
+export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading, { efficiency, movesHeat, gain, share, cop, acrossDifference, copForCarnot }: HeatReading): void {
+  const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, duration, temps } = b;
+  const firstLawWhy = 'The text gives the energy put in and the energy got out.';
+  // A heat pump that states the heat it draws from its source beside the work it takes: its whole
+  // balance is a first-law ledger (what it delivers is at most the two added up).
+  const sourceHeatIn =
+    movesHeat &&
+    [...power, ...energy].filter((f) => f.role === 'in').length >= 2 &&
+    [...power, ...energy].some((f) => f.role === 'in' && HEAT_SOURCE_AFTER_RE.test(text.slice(f.end ?? 0, (f.end ?? 0) + 50)));
+  if (movesHeat && (eIn || pIn) && (eOut || pOut) && !sourceHeatIn) {
+    notes.push('A heat pump or refrigerator moves heat rather than making it: the heat it delivers may exceed the work it takes without breaking any law. Its bound is the Carnot COP of the temperatures it works between.');
+  } else if ((eIn || pIn) && (eOut || pOut) && !(thrust && photonApplies && !eOut && !pOut)) {
+    const inF = eIn ?? pIn!;
+    const outF = eOut ?? pOut!;
+    const bothPower = !eIn && !eOut;
+    const t = duration?.si;
+    const extra: string[] = ['Heat out: counted in the output (0 J apart; any heat rejected only adds to the output).'];
+    const toEnergy = (f: Figure, e: End): string | null => {
+      if (f.kind === 'energy') return at(f, e);
+      if (siAt(f, e) === 0) return '0 J'; // no input at all, however long it ran
+      if (t !== undefined) return typed(siAt(f, e) * t, 'J');
+      if (bothPower) return typed(siAt(f, e), 'J'); // one second of steady running
+      return null;
+    };
+    if (duration && !bothPower) extra.push(`Over the stated ${duration.display}: power × time.`);
+    else if (bothPower && !duration) extra.push('Powers compared over one second of steady running: the ratio does not depend on how long.');
+    else if (bothPower && duration) extra.push(`Powers over the stated ${duration.display}.`);
+    if (toEnergy(inF, 'low') === null || toEnergy(outF, 'low') === null) {
+      needs.push(need('first-law', ['how long the device ran (to compare a power with an energy)'], 'The text gives a power on one side and an energy on the other.', [inF, outF]));
+    } else {
+      plans.push({
+        check: 'first-law',
+        uses: uniq([inF, outF, t !== undefined && !bothPower ? duration : undefined]),
+        inputs: (e) => ({ E_in: toEnergy(inF, e(inF))!, W_out: toEnergy(outF, e(outF))!, Q_out: '0 J', dE_stored: '0 J' }),
+        why: bothPower ? 'The text gives the power drawn and the power delivered.' : firstLawWhy,
+        assumptions: [...extra, 'Stored energy: unchanged over the run (the text does not say it ran down).'],
+      });
+    }
+  } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop && NET_CALORIFIC_RE.test(text)) {
+    needs.push(
+      need(
+        'first-law',
+        ['the efficiency on the gross (higher) calorific value, or the fuel energy and the heat delivered, measured'],
+        'A condensing boiler\'s efficiency on the net (lower) calorific value can exceed 100 % by that convention without more energy out than in.',
+        [efficiency!],
+      ),
+    );
+  } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop && !s.overUnity && !s.heatEngine) {
+    // "480 % efficient" with nothing said of the machine: a heat pump can say that lawfully.
+    needs.push(
+      need(
+        'carnot',
+        ['what the machine is (an efficiency above 100 % is a heat pump\'s COP, or a claim of more energy out than in)', 'the temperatures it works between'],
+        'An efficiency above 100 % is lawful for a heat pump (it moves heat) and impossible for anything that converts energy.',
+        [efficiency!],
+      ),
+    );
+  } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop) {
+    plans.push({
+      check: 'first-law',
+      uses: [efficiency!],
+      inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(efficiency!, e(efficiency!)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
+      why: 'An efficiency above 1 claims more energy out than in.',
+      assumptions: ['Run on 1 J supplied: the over-unity ratio does not depend on the amount.'],
+    });
+  } else if ((gain?.si ?? 0) > 1 && !cop) {
+    plans.push({
+      check: 'first-law',
+      uses: [gain!],
+      inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(gain!, e(gain!)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
+      why: 'The text gives the output as a multiple of the input.',
+      assumptions: ['Run on 1 J supplied: the over-unity ratio does not depend on the amount.'],
+    });
+  } else if (share && (share.upper?.si ?? share.si) <= 1 && !s.heatEngine && !acrossDifference && !movesHeat && temps.length < 2 && !plans.some((p) => p.check === 'carnot')) {
+    plans.push({
+      check: 'first-law',
+      uses: [share],
+      inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(share, e(share)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
+      why: 'An efficiency is the energy got out over the energy put in.',
+      assumptions: ['Run on 1 J supplied: the ratio does not depend on the amount.'],
+    });
+  } else if (cop && !copForCarnot && cop.si > 1 && temps.length < 2) {
+    plans.push({
+      check: 'first-law',
+      uses: [cop],
+      inputs: (e) => ({ E_in: '1 J', W_out: typed(siAt(cop, e(cop)), 'J'), Q_out: '0 J', dE_stored: '0 J' }),
+      why: 'The text gives a "COP" for a device that is no heat pump: its output over its input.',
+      assumptions: ['The COP is read as electrical or mechanical output over input, since the text describes no heat pump; run on 1 J supplied.'],
+    });
+  } else if ((eOut || pOut) && !(eIn || pIn) && s.overUnity) {
+    needs.push(need('first-law', ['the energy or power put in (all of it: electrical, mechanical, chemical, heat)'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eOut, pOut])));
+  } else if ((eIn || pIn) && !(eOut || pOut) && s.overUnity && !thrust) {
+    needs.push(need('first-law', ['the energy or power got out'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eIn, pIn])));
+  } else if (!(eIn || pIn || eOut || pOut) && s.overUnity && !thrust && (ofKind(figures, 'current').length > 0 || ofKind(figures, 'voltage').length > 0)) {
+    // "returns more energy than it takes while drawing 1.8 A": a current alone is no power.
+    needs.push(
+      need(
+        'first-law',
+        ['the voltage with each current (or the powers themselves)', 'the energy or power got out'],
+        'Over a full cycle a machine delivers no more energy than it is given.',
+        uniq([...ofKind(figures, 'current'), ...ofKind(figures, 'voltage')]),
+      ),
+    );
+  }
+}

@@ -1,0 +1,52 @@
+/**
+ * The rocket equation (shared/claims/plan.ts): an exhaust speed or Isp, the masses (wet and dry, or
+ * either with the propellant) and a claimed Δv when there is one; what is missing otherwise.
+ */
+import type { Figure } from '../types';
+import { at, need, ofKind, siAt, typed, uniq, type Basis, type End } from './basis';
+
+/** A craft that carries what it throws out: a stage, a launcher, a spacecraft. */
+const CRAFT_WORDS_RE = /(?<!\p{L})(?:stages?|launchers?|rockets?|spacecraft|space probes?|probes?|satellites?|cubesats?|landers?|boosters?|kick motors?|payloads?|tugs?)(?!\p{L})/iu;
+
+export function planRocket(b: Basis): void {
+  const { figures, s, plans, needs, text, speeds } = b;
+  const masses = ofKind(figures, 'mass');
+  const wet = masses.find((f) => f.role === 'wet');
+  const dry = masses.find((f) => f.role === 'dry');
+  const prop = masses.find((f) => f.role === 'propellant');
+  const isp = ofKind(figures, 'specific-impulse')[0];
+  const exhaust = speeds.find((f) => f.role === 'exhaust');
+  const dv = speeds.find((f) => f.role === 'delta-v');
+  const rocketish = isp || exhaust || dv || wet || dry || prop;
+  if (rocketish && (s.propellant || isp || exhaust || prop || (dv && (wet || dry || CRAFT_WORDS_RE.test(text))))) {
+    const missing: string[] = [];
+    if (!isp && !exhaust) missing.push('the exhaust speed or the specific impulse');
+    const twoMasses = [wet, dry, prop].filter(Boolean).length >= 2;
+    if (!twoMasses) missing.push(!wet && !dry ? 'the masses of the craft with and without its propellant' : 'the propellant mass (or the mass with or without it)');
+    if (missing.length) {
+      // (A speed change alone, said of a stage or a rocket, names the check too: "gives its payload 11 km/s of Δv".)
+      if ([isp, exhaust, wet, dry, prop, dv].filter(Boolean).length >= 2 || (dv && (s.propellant || CRAFT_WORDS_RE.test(text)))) needs.push(need('rocket-equation', missing, 'A craft that throws out propellant can change its speed by at most v_e·ln(m0/m1).', uniq([isp, exhaust, wet, dry, prop, dv])));
+    } else {
+      const m0 = (e: (f: Figure) => End): string =>
+        wet ? at(wet, e(wet)) : typed(siAt(dry!, e(dry!)) + siAt(prop!, e(prop!)), 'kg');
+      const m1 = (e: (f: Figure) => End): string =>
+        dry ? at(dry, e(dry)) : typed(siAt(wet!, e(wet!)) - siAt(prop!, e(prop!)), 'kg');
+      const extra: string[] = [];
+      if (!wet) extra.push('Starting mass = dry mass + propellant.');
+      if (!dry) extra.push('Final mass = starting mass − propellant.');
+      plans.push({
+        check: 'rocket-equation',
+        uses: uniq([isp, exhaust, wet, dry, prop, dv]),
+        inputs: (e) => ({
+          v_e: exhaust ? at(exhaust, e(exhaust)) : '0 m/s',
+          Isp: isp && !exhaust ? at(isp, e(isp)) : '0 s',
+          m0: m0(e),
+          m1: m1(e),
+          dv_claimed: dv ? at(dv, e(dv)) : '0 m/s',
+        }),
+        why: 'The text gives what the rocket equation needs: the exhaust speed (or Isp) and the masses with and without propellant.',
+        assumptions: dv ? extra : [...extra, 'No velocity change is claimed: the check gives the Δv the propellant allows.'],
+      });
+    }
+  }
+}

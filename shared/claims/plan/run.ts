@@ -1,0 +1,122 @@
+/**
+ * Running the planned checks (shared/claims/plan.ts): each through runCheck, the same function as
+ * the check screens, at the ends of its ranges most favourable to the claim, with the law it rests
+ * on and its first sentence headed by the finding.
+ */
+import { checks } from '../../checks';
+import { CheckInputError, runCheck, type CheckRun } from '../../checks/run';
+import type { CheckName } from '../../checks/types';
+import { printText } from '../print';
+import type { ClaimCheckNeed, ClaimCheckRun, Figure, PlannedCheck } from '../types';
+import type { End } from './basis';
+import { planFor } from './planner';
+import type { PlanContext } from './signals';
+
+/** The law each check rests on, in words. */
+const CHECK_LAW: Record<CheckName, string> = {
+  'photon-bound': 'conservation of linear momentum',
+  'break-even-speed': 'conservation of energy',
+  carnot: 'the second law of thermodynamics',
+  'first-law': 'conservation of energy (the first law of thermodynamics)',
+  'momentum-ledger': 'conservation of linear momentum',
+  'sideways-beam': 'conservation of linear momentum',
+  'artifact-budget': 'conservation of linear momentum',
+  'rocket-equation': 'conservation of linear momentum (the rocket equation)',
+  'light-speed': 'special relativity',
+  'faraday-yield': "conservation of charge (Faraday's law of electrolysis)",
+  'nuclear-signature': 'conservation of energy (chemistry gives a few electronvolts per atom; more needs nuclear reactions and their radiation)',
+  'road-load': 'conservation of energy',
+  'light-converter-limits': 'the second law of thermodynamics (the radiative limits of light conversion)',
+  landauer: "the second law of thermodynamics (Landauer's bound)",
+};
+
+/** How bad a run is for the claim (larger is worse): the check's ratio of claim to bound. */
+function severity(run: CheckRun): number {
+  const o = (name: string) => run.outputs.find((x) => x.name === name)?.si;
+  switch (run.check) {
+    case 'photon-bound':
+    case 'light-speed':
+      return o('ratio') ?? 0;
+    case 'break-even-speed':
+      return o('power_ratio') ?? 0;
+    case 'carnot':
+      return Math.max(0, ...run.outputs.filter((x) => x.name.endsWith('_ratio')).map((x) => x.si));
+    case 'first-law': {
+      const r = o('over_unity');
+      if (r !== undefined) return r;
+      return -(o('balance') ?? 0);
+    }
+    case 'rocket-equation':
+      return o('dv_ratio') ?? -(o('dv') ?? 0);
+    default:
+      return run.verdict.holds ? 0 : 1;
+  }
+}
+
+/** The first sentence of a verdict, numbers as in print, headed by the finding and its law. */
+function sentenceOf(check: CheckName, run: CheckRun): string {
+  const law = CHECK_LAW[check];
+  const head = run.verdict.holds ? `Consistent with ${law}` : `Conflicts with ${law}`;
+  const first = /^(.*?[.:;])(?:\s+[A-Z]|$)/s.exec(run.verdict.message)?.[1] ?? run.verdict.message;
+  return `${head}: ${printText(first.replace(/[:;]$/, '.'), { bigIntegers: true })}`;
+}
+
+/** Plans, run: each at the ends of its ranges most favourable to the claim. */
+export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { checks: ClaimCheckRun[]; needs: ClaimCheckNeed[]; notes: string[] } {
+  const { plans, needs, notes } = planFor(figures, ctx);
+  const out: ClaimCheckRun[] = [];
+  for (const p of plans) {
+    const def = checks[p.check];
+    const ranged = p.uses.filter((f) => f.upper);
+    let best: { run: CheckRun; inputs: Record<string, string>; ends: Map<Figure, End> } | null = null;
+    let lastError: CheckInputError | null = null;
+    const combos = 1 << Math.min(ranged.length, 5);
+    for (let mask = 0; mask < combos; mask++) {
+      const ends = new Map<Figure, End>(ranged.map((f, i) => [f, mask & (1 << i) ? 'high' : 'low']));
+      const inputs = p.inputs((f) => ends.get(f) ?? 'low');
+      try {
+        const run = runCheck(p.check, inputs);
+        if (!best || severity(run) < severity(best.run)) best = { run, inputs, ends };
+      } catch (err) {
+        if (!(err instanceof CheckInputError)) throw err;
+        lastError = err;
+      }
+    }
+    if (!best) {
+      notes.push(`${def.title} could not be run on these figures: ${lastError?.message ?? 'the inputs are not valid'}`);
+      continue;
+    }
+    const assumptions = [...p.assumptions];
+    for (const [f, end] of best.ends) {
+      const chosen = end === 'high' ? f.upper!.display : f.display;
+      assumptions.push(`The text gives a range, ${f.display} to ${f.upper!.display} ("${f.text}"); the end most favourable to the claim, ${chosen}, is used.`);
+    }
+    const { run, inputs } = best;
+    out.push({
+      check: p.check,
+      inputs,
+      uses: p.uses.map((f) => f.id),
+      why: p.why,
+      assumptions,
+      title: def.title,
+      outputs: run.outputs.map(({ name, label, si, unit, display }) => ({ name, label, si, unit, display })),
+      verdict: run.verdict,
+      inputsUsed: run.inputs,
+      permalink: `/checks/${p.check}?${Object.entries(inputs).map(([k, v]) => `${encodeURIComponent(k)}=${encodeURIComponent(v)}`).join('&')}`,
+      law: CHECK_LAW[p.check],
+      finding: run.verdict.holds ? 'consistent' : 'breaks',
+      sentence: sentenceOf(p.check, run),
+    });
+  }
+  return { checks: out, needs, notes };
+}
+
+/** The plans as the contract's PlannedCheck (inputs at the lower ends): for tests and the screen. */
+export function planChecks(figures: Figure[], ctx: PlanContext = {}): { planned: PlannedCheck[]; needs: ClaimCheckNeed[]; notes: string[] } {
+  const { plans, needs, notes } = planFor(figures, ctx);
+  return {
+    planned: plans.map((p) => ({ check: p.check, inputs: p.inputs(() => 'low'), uses: p.uses.map((f) => f.id), why: p.why, assumptions: p.assumptions })),
+    needs,
+    notes,
+  };
+}

@@ -1,0 +1,62 @@
+/**
+ * What the words of a claim (and the classes of the entries it matched) say about the device, for
+ * the planner (shared/claims/plan.ts): it throws out no propellant, or does; it is a heat engine, a
+ * heat pump or a machine that cools; it is said to give more energy than it takes.
+ */
+import { COOLING_MACHINE_WORDS, HEAT_ENGINE_WORDS, HEAT_PUMP_WORDS, PROPELLANT_FREE_WORDS, PROPELLANT_WORDS } from '../figures-vocabulary';
+
+/** Mechanism classes (content/taxonomy.yml) whose devices throw out nothing. */
+const PROPELLANT_FREE_CLASSES = ['propellant-free-thrust', 'internal-mass-motion', 'enclosed-radiation', 'sideways-beams', 'gyroscopic-drive'];
+/** Mechanism classes of machines said to give more energy than they take. */
+const OVER_UNITY_CLASSES = ['over-unity', 'overbalanced-wheel', 'magnet-motor', 'over-unity-circuit', 'vacuum-energy'];
+
+/** What the planner knows beyond the figures: the text, and the classes of the entries it matched. */
+export interface PlanContext {
+  text?: string;
+  /** Mechanism class slugs of the matched entries (the best first). */
+  classes?: string[];
+}
+
+const compile = (words: readonly string[]) => new RegExp(`(?<!\\p{L})(?:${words.join('|')})(?!\\p{L})`, 'iu');
+const PROPELLANT_FREE_RE = compile(PROPELLANT_FREE_WORDS);
+const PROPELLANT_FREE_ALL_RE = new RegExp(PROPELLANT_FREE_RE.source, 'giu');
+const PROPELLANT_RE = compile(PROPELLANT_WORDS);
+const HEAT_ENGINE_RE = compile(HEAT_ENGINE_WORDS);
+const HEAT_PUMP_RE = compile(HEAT_PUMP_WORDS);
+const COOLING_RE = compile(COOLING_MACHINE_WORDS);
+const OVER_UNITY_RE =
+  /(?<!\p{L})(?:power conversion efficiency|wall-?plug efficiency|conversion efficiency|electrical efficiency|over-?unity|overunity|free energy|self-?running|self-?sustaining|self-?charging|perpetual|more (?:energy|power) (?:out )?than|generators?|alternators?|magnet(?:ic)? motors?|motors?|output exceeds|exceeds (?:the|its) input|circuits?|coils?|lamps?|LEDs?|bulbs?|(?:solar|fuel|photovoltaic) cells?|panels?|batter(?:y|ies)|zero-?point|ZPE|vacuum|electrolys\w*|HHO|oxyhydrogen|wheels?|amplifiers?|converters?|inverters?|electrical (?:output|energy|power))(?!\p{L})/iu;
+/** A device whose output is heat (a solar collector, a boiler, a heater): its efficiency is heat over heat. */
+export const HEAT_ONLY_RE = /(?<!\p{L})(?:(?:delivered|given|supplied|collected|recovered|available|comes? out|output) as (?:useful )?heat|heat output|thermal output|(?:solar|flat-?plate|evacuated-?tube) (?:thermal )?collectors?|solar thermal|collector efficiency|water heaters?|boilers?|furnaces?|space heaters?)(?!\p{L})/iu;
+/** A machine that moves heat is said to: cooling words name a fridge or chiller the text may only mention as a load. */
+const COOLING_ACTION_RE = /(?<!\p{L})(?:(?:removes?|extracts?|pumps?|draws?|takes?|moves?|lifts?|rejects?)(?: \S+){0,3} (?:of )?heat|cooling (?:capacity|power|output|load|duty|COP)|refrigeration (?:capacity|effect)|cooling COP|(?:of|for) (?:cooling|refrigeration)(?! (?:water|fans?|fluids?|oil|air|towers?|jackets?|loops?|circuits?)))(?!\p{L})/iu;
+
+export interface Signals {
+  propellantFree: boolean;
+  propellant: boolean;
+  heatEngine: boolean;
+  heatPump: boolean;
+  /** A machine that cools is said to do so (not only named as a load). */
+  cooling: boolean;
+  /** A refrigerator, chiller or cooler is named. */
+  coolingWords: boolean;
+  overUnity: boolean;
+}
+
+export function readSignals(ctx: PlanContext): Signals {
+  const text = ctx.text ?? '';
+  const classes = ctx.classes ?? [];
+  const top = classes[0];
+  const withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ');
+  // "no heat pump, no outdoor coil": a machine said not to be one.
+  const notDenied = text.replace(/(?<!\p{L})(?:no|not an?|without an?|isn't an?|is not an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|refrigerators?|chillers?|compressors?)(?!\p{L})/giu, ' ');
+  return {
+    propellantFree: PROPELLANT_FREE_RE.test(text) || (top !== undefined && PROPELLANT_FREE_CLASSES.includes(top)),
+    propellant: PROPELLANT_RE.test(withoutFree),
+    heatEngine: HEAT_ENGINE_RE.test(text),
+    heatPump: HEAT_PUMP_RE.test(notDenied),
+    cooling: COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied),
+    coolingWords: COOLING_RE.test(notDenied),
+    overUnity: OVER_UNITY_RE.test(text) || (top !== undefined && OVER_UNITY_CLASSES.includes(top)),
+  };
+}

@@ -1,0 +1,41 @@
+/**
+ * Speeds against c (shared/claims/plan.ts): the light-speed check on a stated speed from 100 km/s
+ * (from 1 km/s for a craft's own speed); a phase velocity or an apparent motion noted, not judged.
+ */
+import { C_LIGHT } from '../../checks/constants';
+import type { Figure } from '../types';
+import { at, largest, type Basis } from './basis';
+
+/**
+ * Speeds from which the light-speed check is run: 100 km/s, beyond anything on or near the Earth
+ * (orbital and escape speeds are about 8–11 km/s), so that ordinary speeds do not clutter the result.
+ * A rule of thumb (common practice, no source).
+ */
+const LIGHT_SPEED_FROM = 100_000;
+/** From 1 km/s, a speed said of a craft itself (not an exhaust or a speed change) is also checked: no wind, train or runner goes so fast. Common practice, no source. */
+const SPACE_SPEED_FROM = 1_000;
+
+/** Before a speed that is no signal's: a phase velocity, a spot or shadow swept across a screen. */
+const NO_SIGNAL_SPEED_RE = /(?<!\p{L})(?:phase (?:velocity|speed)|phase front|spot|shadow|sweep(?:s|ing)?|apparent (?:velocity|speed|motion)|appears? to (?:move|travel|go|run)|seems? to (?:move|travel|go))(?!\p{L})[^.;!?\n]{0,25}$/iu;
+
+export function planSpeeds(b: Basis): void {
+  const { plans, notes, text, speeds } = b;
+  // A phase velocity (or a spot swept across a screen) above c carries no signal: not a speed to judge.
+  const noSignal = (f: Figure) => NO_SIGNAL_SPEED_RE.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0));
+  for (const f of speeds.filter((x) => noSignal(x) && (x.upper?.si ?? x.si) >= C_LIGHT)) {
+    notes.push(`${f.display.trim()} is said of a phase velocity or an apparent motion: such speeds may exceed c without carrying a signal or energy, so special relativity does not forbid them.`);
+  }
+  const signalSpeeds = speeds.filter((f) => !noSignal(f));
+  const fastest = signalSpeeds.filter((f) => f.role !== 'delta-v' || f.si >= C_LIGHT).sort((a, b) => b.si - a.si)[0] ?? largest(signalSpeeds);
+  // (A craft's own speed from 1 km/s, where the text is about a speed and not a rocket's budget: "a probe at 17 km/s".)
+  const speedFrom = fastest && fastest.role === null && !plans.some((p) => p.check === 'rocket-equation') ? SPACE_SPEED_FROM : LIGHT_SPEED_FROM;
+  if (fastest && (fastest.upper?.si ?? fastest.si) >= speedFrom) {
+    plans.push({
+      check: 'light-speed',
+      uses: [fastest],
+      inputs: (e) => ({ v: at(fastest, e(fastest)) }),
+      why: 'The text states a speed that is a sizeable fraction of the speed of light, or more.',
+      assumptions: [],
+    });
+  }
+}

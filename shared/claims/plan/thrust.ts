@@ -1,0 +1,75 @@
+/**
+ * The thrust checks (shared/claims/plan.ts): the photon-rocket bound for a thrust and the power that
+ * produces it (or a thrust per power), for a device that throws out no propellant; the break-even
+ * speed when the text gives the craft's speed; what is missing otherwise.
+ */
+import type { Figure } from '../types';
+import { at, need, ofKind, siAt, typed, uniq, type Basis } from './basis';
+
+/** What the first-law planner needs to know of the thrust. */
+export interface ThrustReading {
+  thrust: Figure | undefined;
+  photonApplies: boolean;
+}
+
+export function planThrust(b: Basis): ThrustReading {
+  const { figures, s, plans, needs, notes, power, text, pIn, pOut, speeds } = b;
+  const thrust = ofKind(figures, 'thrust')[0];
+  const perPower = ofKind(figures, 'thrust-per-power')[0];
+  // The power that drives the thrust: the input nearest the thrust in the text (not a reference lamp's).
+  const thrustAt = ofKind(figures, 'thrust')[0]?.start ?? null;
+  const nearThrust = (fs: Figure[]) => (thrustAt === null ? fs[0] : [...fs].sort((a, b) => Math.abs((a.start ?? 0) - thrustAt) - Math.abs((b.start ?? 0) - thrustAt))[0]);
+  const drivePower =
+    nearThrust(power.filter((f) => f.role === 'in')) ?? power.find((f) => f.role === null) ?? power.find((f) => f.role !== 'out' && f.role !== 'excess') ?? pOut;
+  const craftSpeed = speeds.find((f) => f.role === null);
+  const photonApplies = s.propellantFree && !s.propellant;
+  if ((thrust && drivePower) || perPower) {
+    if (photonApplies) {
+      if (thrust && drivePower) {
+        plans.push({
+          check: 'photon-bound',
+          uses: [thrust, drivePower],
+          inputs: (e) => ({ F_claimed: at(thrust, e(thrust)), P: at(drivePower, e(drivePower)) }),
+          why: 'The text gives a thrust and the power that produces it, for a device that throws out no propellant.',
+          assumptions: [],
+        });
+        if (craftSpeed) {
+          plans.push({
+            check: 'break-even-speed',
+            uses: [thrust, drivePower, craftSpeed],
+            inputs: (e) => ({ F: at(thrust, e(thrust)), P: at(drivePower, e(drivePower)), v: at(craftSpeed, e(craftSpeed)), m: '0 kg' }),
+            why: 'A constant thrust on a constant power: the kinetic power F·v passes the input power at v = P/F.',
+            assumptions: ['Mass of the craft: not used (the text gives none; only the time to reach the break-even speed would need it).'],
+          });
+        } else {
+          needs.push(need('break-even-speed', ['a speed of the craft in some inertial frame'], 'A constant thrust on a constant power gains kinetic energy faster than it is fed above v = P/F.', [thrust, drivePower]));
+        }
+      } else if (perPower) {
+        plans.push({
+          check: 'photon-bound',
+          uses: [perPower],
+          inputs: (e) => ({ F_claimed: typed(siAt(perPower, e(perPower)), 'N'), P: '1 W' }),
+          why: 'The text gives the thrust per unit power of a device that throws out no propellant.',
+          assumptions: ['Run per watt of input: the ratio to the bound does not depend on the power.'],
+        });
+      }
+    } else if (s.propellant) {
+      notes.push('The text says the device expels propellant, so the photon-rocket bound (for devices that throw out nothing) does not apply; the rocket equation does.');
+    } else {
+      needs.push(
+        need(
+          'photon-bound',
+          ['whether the device throws out propellant or anything else (the photon-rocket bound applies only if it does not)'],
+          'The text gives a thrust and a power but does not say whether the device expels anything.',
+          uniq([thrust, drivePower, perPower]),
+        ),
+      );
+    }
+  } else if (thrust && photonApplies) {
+    needs.push(need('photon-bound', ['the input power'], 'A propellant-free thrust is bounded by the power that produces it (F ≤ P/c).', [thrust]));
+  } else if (!thrust && photonApplies && (pIn || pOut) && /(?<!\p{L})(?:thrust|push|force|propulsion|thruster|drive)(?!\p{L})/iu.test(text)) {
+    // "Sealed thruster, 1 kW input. Thrust figures to follow."
+    needs.push(need('photon-bound', ['the thrust measured'], 'A propellant-free thrust is bounded by the power that produces it (F ≤ P/c).', uniq([pIn, pOut])));
+  }
+  return { thrust, photonApplies };
+}
