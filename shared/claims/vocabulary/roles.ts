@@ -1,0 +1,134 @@
+/** The role words of the figure reader's vocabulary (shared/claims/figures-vocabulary.ts). */
+import type { FigureRole } from '../types';
+
+/**
+ * Words that give a figure its role. `before`: read in the words before the figure (the nearest one
+ * wins); `after`: read in the first words after it ("2 kW of input", "20 °C ambient"). Regex
+ * fragments, matched in any case as whole words.
+ */
+export interface RoleWords {
+  role: Exclude<FigureRole, null>;
+  before: readonly string[];
+  after: readonly string[];
+}
+
+export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
+  {
+    role: 'excess',
+    before: ['excess', 'surplus', 'extra', 'net gain', 'net surplus', 'anomalous', 'unexplained', 'over-unity', 'overunity', '(?:output|out) exceeds? (?:the |its )?(?:input|consumption|supply) by', 'exceeds? (?:the |its )?(?:input|consumption|supply) by'],
+    after: ['excess', 'surplus', 'extra', 'more(?= than)', 'more(?= (?:[\\p{L}-]+ ){1,3}?than (?:that|this|it|what (?:it|they) (?:draws?|takes?|uses?|consumes?|gets?))(?!\\p{L}))', 'above(?= (?:the|its) input)', 'in excess', 'net gain'],
+  },
+  {
+    role: 'in',
+    before: [
+      '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line) (?:supplying|supplies|supplied|providing|provides|delivering|delivers|gave up|gives up|feeding|feeds|fed|powering|powers|driving|drives|shows|showed|reads|read)',
+      'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
+      'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
+      'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
+      '(?:for|per) (?:every|each)', 'put in', '(?:is|was|were|being)? ?given(?= *$)', '(?:electricity|electric(?:al)?(?: power| energy)?|power|energy|work|fuel|gas|drive) in[:=]?(?=[^\\S\\n]*$)', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', 'from a', 'from the', 'from (?:about|around|roughly|some|nearly|approximately|approx\\.|ca\\.|~)', 'for (?:only |just |a mere |about |roughly )?(?=$)', '(?<![\\w-])charge(?=[^\\S\\n]*$)', 'comes? from (?:its|the|a|an)', 'powered by (?:its|the|a|an)', 'pumped by (?:its|the|a|an)', 'driven by', 'driven with', 'excited by', 'excited with',
+      'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
+      'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
+      'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
+      'took', 'turned by', 'by a', 'fuel', 'containing', 'P_?\\{?in\\}?', 'E_?\\{?in\\}?', 'Pin', 'invest(?:s|ed|ing)?', 'gas input', 'fuel input',
+    ],
+    after: [
+      'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 'from the (?:wall|mains|socket|outlet|plug|grid)', 'compressors?',
+      '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires)',
+      '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
+      '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
+      'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply'],
+  },
+  {
+    role: 'out',
+    before: [
+      '(?:loads?|load resistors?|resistors?|dummy loads?|lamps?|heaters?|heating elements?) (?:is |was |are |were )?(?:said to |reported to |measured to )?(?:dissipat\\w*|consum\\w*|absorb\\w*|tak(?:e|es|ing))', '(?:the |its )?(?:batter(?:y|ies)|cells?|capacitors?|water|tank|store|flywheel|load)(?: bank| pack)? (?:accepted|absorbed|received|took up|takes up|stored|gained|was given)', 'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
+      '(?:burns?|burned|burnt|burning) (?:for|to give|to yield|to release)', '(?:raised|raises|increased|increases|boosted|added to) (?:the |its )?(?:heat|energy|enthalpy|charge|temperature)(?: [\\w-]+){0,5}? by', '(?:electricity|electric(?:al)?(?: power| energy)?|power|energy|work|heat|light|shaft power) out[:=]?(?=[^\\S\\n]*$)', '(?:powers?|powered|powering|lights?|lit|lighting|keeps?|kept|drives?|drove|driving|driven|ran|run) (?:a|an|the|our|my|their|two|three|four|several)', '(?:shone|shines|shining|glow(?:s|ed|ing)?|burn(?:s|ed|ing)|lit) (?:at|with)(?= *$)', 'charg(?:e|es|ed|ing) (?:a|an|the|its|their|our) (?:[\\w-]+ ){0,2}(?:batter(?:y|ies)|cells?|packs?|capacitors?|banks?) (?:with|at)', 'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
+      'emit(?:s|ted|ting)?', 'harvest(?:s|ed|ing)?', 'recover(?:s|ed|ing)?', 'puts? out', 'pumps? out', 'sends? back', 'feeds? back',
+      '(?:lights?|lighting|lit|powers?|powering|runs?|running|drives?|driving|feeds?|feeding) (?:a|an|the|its|two|three|four|several)? ?(?:[\\w-]+ ){0,4}?(?:taking|drawing|using|consuming|rated at|that (?:take|takes|draw|draws|use|uses|consume|consumes))', 'drives? (?:a|an|the|its)', 'driving (?:a|an|the|its)', 'running (?:a|an|the|its)', 'turning (?:a|an|the|its)', 'logged', 'feeds', 'feeding', 'sells?', 'sold', 'fill(?:s|ed|ing)? (?:a|an|the)', 'charg(?:es|ed|ing) (?:a|an|the|its) (?:[\\w-]+ ){0,2}(?:batter(?:y|ies)|cells?|capacitors?|accumulators?)(?: (?:bank|pack|stack))?(?: (?:at|with|to))?', 'charg(?:es|ed|ing) (?:a|an|the|its)', 'powers', 'powering', 'export(?:s|ed|ing)?', 'made', 'makes', 'supplies', 'supplying', 'supplied', 'putting out', 'holds',
+      'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
+      'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
+      'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran (?:a|an|the)', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
+      '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts', 'put', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
+    ],
+    after: [
+      // A rating said before what makes power: "the 600 MW coal unit", "a 5 kW genset" (not a motor or engine, which may be what drives the device).
+      '(?<!(?:of|from|off|by|on)[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+|a[^\\S\\n]+|an[^\\S\\n]+)?)(?:(?!(?:from|off|of|to|by|at|in|on|into|onto|with|for|the|a|an|its|their|our|and|or|per)\\b)[\\w-]+ ){0,2}(?:power plants?|power stations?|plants?|(?:coal|steam|gas|nuclear|geothermal|hydro|wind|solar|CCGT|generating) units?|gensets?|generating sets?|generators?|turbines?)(?! (?:draws?|takes?|consumes?|uses?|needs?|is fed|was fed|runs? on))',
+      '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
+      'to (?:the|its|their|a|an) (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump|phone|device|string|bulb|lamps|wheel|laptop|computer|tablet|appliance|consumer|user|bank|lights?|heating|tank)', 'into the (?:[\\w-]+ )?(?:battery|grid|load|bank|network|mains|store|tank|reservoir|pond|basin)(?: bank)?', 'net(?= (?:output|from|at|to|into|of electricity|electrical)|[,.;]|$)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
+      'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at (?:the|its) (?:output )?terminals', 'at the (?:crank|output |drive |propeller |main )?shaft', 'at the (?:wheels?|axles?|flywheel|crank)', 'of shaft power', 'on its output terminals',
+      'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output', '(?:reached|reaches|reach|went to|goes to|got to|arrived at|made it to) (?:the |its )?(?:wheels?|shaft|axles?|load|output|grid|battery|house|motor)', 'back(?! (?:in|into|to (?:the|its) (?:input|supply|source)))'],
+  },
+];
+
+export const TEMPERATURE_ROLES: readonly RoleWords[] = [
+  {
+    role: 'hot',
+    before: [
+      'T_?(?:h|hot|H)', 'surface(?: water)?', 'warm surface', '(?:to )?deliver(?:s|ed|ing)?', 'suppl(?:y|ies|ied|ying)', 'provid(?:es|ed|ing)', 'makes', 'produc(?:es|ed|ing)', 'hot', 'hotter', 'hottest', 'source', 'flames?', 'steam', 'boiler', 'furnace', 'combustion', 'burner', 'heated to', 'high-temperature',
+      'exhaust', 'waste heat', 'geothermal', 'deliver(?:s|ed|ing)? (?:water |air |heat )?at', 'supply temperature', 'flow temperature', 'output temperature',
+      'radiators?', 'underfloor', 'warm', 'warmer', 'warm (?:end|side)', 'to a', 'into a', 'hot water', 'condensing', 'up to', 'to heat', 'heats? (?:\\w+ )?to', 'heating to',
+      'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper', 'firing', 'firing temperature',
+    ],
+    after: [
+      'surface(?: water| layer)?', 'source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor', 'receiver', 'absorber', 'heater head', 'hot plate', 'hot junction',
+      'loop', 'tank', 'radiators?', '(?:turbine|compressor) inlet', 'firing', 'combustion', 'hot gas', 'heater head', 'collector', 'hot end',
+      '(?:as|for|is|being) (?:the |its |our |a )?(?:hot|warm|hotter|warmer|heat) (?:side|end|source|reservoir|bath)',
+    ],
+  },
+  {
+    role: 'cold',
+    before: [
+      'T_?(?:c|cold|C|0|amb)', 'brine', 'ground ?water', 'deep(?: water)?', 'bottom water', 'cold', 'colder', 'coldest', 'ambient', 'room', 'sink', 'outside', 'outdoors?', 'river', 'sea', 'seawater', 'lake', 'ocean',
+      'ground', 'environment', 'surroundings', 'atmosphere', 'cooling water', 'ice', 'condenser', 'low-temperature', 'air', 'outside air', 'outdoor air',
+      'from', 'freezer', 'fridge', 'inside the fridge', 'cabinet', 'cold store', 'evaporator', 'extract(?:s|ed|ing)? heat from', 'draw(?:s|n|ing)? heat from',
+      'well water', 'groundwater', 'borehole', 'winter', 'bottom', 'lower', 'rejects? heat (?:to|at)', 'reject(?:s|ed|ing)?', 'cooled to', 'chilled to',
+      'cool(?:s|ed|ing)? (?:\\w+ )?to', 'keeps? (?:\\w+ )?at', 'frozen',
+    ],
+    after: ['deep(?:er)? (?:water|layer)', 'sink', 'ambient', 'borehole', 'brine', 'ground loop', 'ground water', 'groundwater', 'well water', 'chilled water', 'cold water', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater', 'cold side', 'air', 'outdoor', 'ground', '(?:as|for|is|being) (?:the |its |our |a )?(?:cold|cool|colder|cooler) (?:side|end|sink|reservoir|bath)'],
+  },
+];
+
+export const MASS_ROLES: readonly RoleWords[] = [
+  {
+    role: 'wet',
+    before: [
+      'wet', 'fuell?ed', 'fully fuell?ed', 'initial', 'starting', 'start', 'launch', 'lift-?off', 'lifts? off (?:at|with)', 'take-?off', 'gross', 'total', 'loaded', 'full',
+      'at launch', 'at ignition', 'before the burn',
+    ],
+    after: [
+      '(?:lift-?off|launch|initial|gross|total|wet|fuell?ed|starting|ignition|take-?off) mass', 'wet', 'fuell?ed', 'at launch', 'at lift-?off', 'at the start',
+      'initially', 'fully loaded', 'loaded', 'in all', 'in total', 'all told', 'gross', 'total',
+    ],
+  },
+  {
+    role: 'dry',
+    before: ['dry', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert'],
+    after: ['(?:dry|empty|final|burn-?out|structural) mass', '\\((?:empty|dry|unfuell?ed|when empty)\\)', 'dry', 'empty', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end'],
+  },
+  {
+    role: 'propellant',
+    before: [
+      'propellants?', 'fuel', 'reaction mass', 'propellant (?:mass|load|loading)', 'mass of (?:propellant|fuel|reaction mass)', 'fuel (?:mass|load)', 'propellant[:=]', 'reaction mass (?:of|is)',
+      '(?:carries|carrying|loaded with|tanks? (?:hold|holds|of)|burns?|burning|expels?|expelling)',
+    ],
+    after: [
+      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass|nitrogen|helium|butane|propane|iodine|argon|ammonia)', 'of (?:that|it|which)(?: being| is| was)? (?:propellant|fuel)', 'of cold-gas propellant',
+      'of (?:[\\w-]+ )?(?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
+      'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
+      'of (?:[\\w-]+ )?(?:deuterium|tritium|helium-3|lithium|boron|uranium|plutonium|antimatter|fusion fuel|fissile fuel|pellets|solid fuel|solid propellant|grain|ice)(?: pellets| fuel| propellant)?',
+    ],
+  },
+];
+
+export const SPEED_ROLES: readonly RoleWords[] = [
+  {
+    role: 'exhaust',
+    before: ['v_?e(?:x|xh)?', 'u_?e', 'c_?e', 'exhausts? at', 'exhausts?', '(?:is|are|was|were|being) exhausted at', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at', '(?:expels?|expelling|ejects?|ejecting|vents?|venting|throws?|fires?|firing|shoots?)(?: (?:it|them|its [\\w-]+|the [\\w-]+|[\\w-]+ ions|propellant|gas|mass|xenon|nitrogen|ions|plasma))?(?: out)? at', 'leaves? the (?:nozzle|thruster|engine) at'],
+    after: ['exhaust', 'jet', 'exhaust velocity', 'exhaust speed'],
+  },
+  {
+    role: 'delta-v',
+    before: ['Δv', 'Δ-v', 'delta-?v', 'delta v', 'dv', 'velocity change', 'change in velocity', 'change of velocity', 'speed change', 'change in speed', 'velocity increment', 'Δ ?V'],
+    after: ['of Δv', 'of delta-?v', 'of velocity change', 'Δv', 'delta-?v', 'of Δ-v'],
+  },
+];

@@ -1,0 +1,219 @@
+/**
+ * The units of the figure reader's vocabulary (shared/claims/figures-vocabulary.ts): the written forms
+ * of each unit a claim uses, with the mathjs unit and the kind of figure.
+ *
+ * Symbols are matched with their case ("mW" is not "MW"); words in any case, with a space or a
+ * hyphen between their parts ("kilowatt-hours", "kilowatt hours"). Where mathjs has no unit for a
+ * form (it has no calorie and no gram-force), `factor` converts the number into `unit`.
+ */
+import type { FigureKind } from '../types';
+
+export interface UnitForm {
+  kind: FigureKind;
+  /** The unit written in the figure's quantity, in mathjs syntax (parseQuantity reads it). */
+  unit: string;
+  /** Written forms matched with case, e.g. "kW", "µN", "°C". */
+  symbols?: readonly string[];
+  /** Written forms matched in any case, e.g. "kilowatts", "pounds of thrust". */
+  words?: readonly string[];
+  /** When set, the quantity is (number × factor) in `unit`: for forms that mathjs does not know. */
+  factor?: number;
+  /** "degrees" alone: a temperature only where the sentence speaks of one (not an angle), read as Celsius. */
+  ambiguous?: boolean;
+}
+
+const MICRO = ['µ', 'μ', 'u'];
+const micro = (rest: string) => MICRO.map((m) => m + rest);
+
+/**
+ * Calories: mathjs 15 has no calorie, so "cal" is converted here with the thermochemical calorie,
+ * 4.184 J exactly (NIST SP 811, Appendix B.8, "calorie_th"); the International Table calorie is
+ * 4.1868 J. The thermochemical one is the one of chemistry and of food labels' kilocalories.
+ */
+const CALORIE_J = 4.184;
+
+/** Gram-force: mathjs knows kgf (9.80665 N) but not gf, so grams of thrust are written in kgf. */
+const GRAM_IN_KG = 0.001;
+
+/**
+ * Metric horsepower (PS, CV, ch): 75 kgf·m/s = 735.498 75 W exactly (NIST SP 811, Appendix B.8,
+ * "horsepower, metric"). mathjs's "hp" is the mechanical one, 550 ft·lbf/s ≈ 745.70 W.
+ */
+const METRIC_HP_W = 735.49875;
+
+/** The speed of light in vacuum, m/s (exact; SI Brochure, 9th ed.), for "1.3 times the speed of light". */
+export const C_M_PER_S = 299_792_458;
+
+export const UNIT_FORMS: readonly UnitForm[] = [
+  // Thrust (force)
+  { kind: 'thrust', unit: 'N', symbols: ['N'], words: ['newton', 'newtons'] },
+  { kind: 'thrust', unit: 'mN', symbols: ['mN'], words: ['millinewton', 'millinewtons', 'milli-newton', 'milli-newtons'] },
+  { kind: 'thrust', unit: 'uN', symbols: micro('N'), words: ['micronewton', 'micronewtons', 'micro-newton', 'micro-newtons'] },
+  { kind: 'thrust', unit: 'nN', symbols: ['nN'], words: ['nanonewton', 'nanonewtons'] },
+  { kind: 'thrust', unit: 'kN', symbols: ['kN'], words: ['kilonewton', 'kilonewtons'] },
+  { kind: 'thrust', unit: 'MN', symbols: ['MN'], words: ['meganewton', 'meganewtons'] },
+  {
+    kind: 'thrust',
+    unit: 'lbf',
+    symbols: ['lbf'],
+    words: [
+      'pound-force', 'pounds-force', 'pound of force', 'pounds of force', 'pound of thrust', 'pounds of thrust', 'lb of thrust', 'lbs of thrust',
+      'lbf of thrust', 'pound of lift', 'pounds of lift', 'lb of lift', 'lbs of lift', 'pounds of push', 'pounds of pull', 'lbs of force', 'lb of force',
+      'pounds thrust', 'lbs thrust', 'lb thrust',
+    ],
+  },
+  {
+    kind: 'thrust',
+    unit: 'kgf',
+    symbols: ['kgf', 'kp'],
+    words: [
+      'kilogram-force', 'kilograms-force', 'kg of thrust', 'kilogram of thrust', 'kilograms of thrust', 'kg of lift', 'kilogram of lift',
+      'kilograms of lift', 'kilos of thrust', 'kilos of lift', 'kg of force', 'kilopond', 'kiloponds',
+    ],
+  },
+  {
+    kind: 'thrust',
+    unit: 'kgf',
+    factor: GRAM_IN_KG,
+    symbols: ['gf'],
+    words: ['gram-force', 'grams-force', 'g of thrust', 'gram of thrust', 'grams of thrust', 'g of lift', 'gram of lift', 'grams of lift', 'g of force', 'grams of force'],
+  },
+  { kind: 'thrust', unit: 'kgf', factor: 1e-6, symbols: ['mgf'], words: ['milligram-force', 'milligrams-force', 'mg of thrust', 'milligrams of thrust'] },
+
+  // Power
+  // Lower-case symbols as forum posts write them ("500w", "2kw", "12v"); "mw" and "a" stay out: mW or MW, and the article.
+  { kind: 'power', unit: 'W', symbols: ['W', 'We', 'Wt', 'Wth', 'w'], words: ['watt', 'watts'] },
+  { kind: 'power', unit: 'uW', symbols: micro('W'), words: ['microwatt', 'microwatts'] },
+  { kind: 'power', unit: 'mW', symbols: ['mW'], words: ['milliwatt', 'milliwatts'] },
+  { kind: 'power', unit: 'nW', symbols: ['nW'], words: ['nanowatt', 'nanowatts'] },
+  { kind: 'power', unit: 'pW', symbols: ['pW'], words: ['picowatt', 'picowatts'] },
+  { kind: 'power', unit: 'kW', symbols: ['kW', 'KW', 'kWe', 'kWt', 'kWth', 'kw'], words: ['kilowatt', 'kilowatts'] },
+  { kind: 'power', unit: 'MW', symbols: ['MW', 'MWe', 'MWt', 'MWth'], words: ['megawatt', 'megawatts'] },
+  { kind: 'power', unit: 'GW', symbols: ['GW', 'GWe', 'GWt', 'GWth'], words: ['gigawatt', 'gigawatts'] },
+  { kind: 'power', unit: 'hp', symbols: ['hp', 'HP', 'bhp', 'BHP', 'shp'], words: ['horsepower', 'horse power', 'mechanical horsepower', 'brake horsepower'] },
+  {
+    kind: 'power',
+    unit: 'W',
+    factor: METRIC_HP_W,
+    symbols: ['PS', 'CV', 'hp(M)', 'hp (M)'],
+    words: ['metric horsepower', 'metric horse power', 'Pferdestärke', 'cheval-vapeur', 'chevaux-vapeur', 'cavalli vapore', 'caballos de vapor'],
+  },
+  {
+    kind: 'power',
+    unit: 'BTU/h',
+    symbols: ['BTU/h', 'Btu/h', 'BTU/hr', 'Btu/hr', 'BTUh', 'Btuh', 'BTU/H'],
+    words: ['BTU per hour', 'BTUs per hour', 'Btu per hour', 'British thermal units per hour', 'British thermal unit per hour'],
+  },
+
+  // Energy
+  { kind: 'energy', unit: 'J', symbols: ['J'], words: ['joule', 'joules'] },
+  { kind: 'energy', unit: 'mJ', symbols: ['mJ'], words: ['millijoule', 'millijoules'] },
+  { kind: 'energy', unit: 'uJ', symbols: micro('J'), words: ['microjoule', 'microjoules'] },
+  { kind: 'energy', unit: 'nJ', symbols: ['nJ'], words: ['nanojoule', 'nanojoules'] },
+  { kind: 'energy', unit: 'kJ', symbols: ['kJ'], words: ['kilojoule', 'kilojoules'] },
+  { kind: 'energy', unit: 'MJ', symbols: ['MJ'], words: ['megajoule', 'megajoules'] },
+  { kind: 'energy', unit: 'GJ', symbols: ['GJ'], words: ['gigajoule', 'gigajoules'] },
+  { kind: 'energy', unit: 'Wh', symbols: ['Wh', 'W·h', 'W⋅h', 'wh'], words: ['watt-hour', 'watt-hours'] },
+  { kind: 'energy', unit: 'kWh', symbols: ['kWh', 'KWh', 'kW·h', 'kW⋅h', 'kwh'], words: ['kilowatt-hour', 'kilowatt-hours'] },
+  { kind: 'energy', unit: 'MWh', symbols: ['MWh', 'MW·h', 'MW⋅h'], words: ['megawatt-hour', 'megawatt-hours'] },
+  { kind: 'energy', unit: 'GWh', symbols: ['GWh'], words: ['gigawatt-hour', 'gigawatt-hours'] },
+  { kind: 'energy', unit: 'BTU', symbols: ['BTU', 'Btu', 'btu', 'BTUs', 'Btus'], words: ['British thermal unit', 'British thermal units'] },
+  { kind: 'energy', unit: 'J', factor: CALORIE_J, symbols: ['cal'], words: ['calorie', 'calories'] },
+  { kind: 'energy', unit: 'kJ', factor: CALORIE_J, symbols: ['kcal'], words: ['kilocalorie', 'kilocalories'] },
+
+  // Temperature
+  { kind: 'temperature', unit: 'K', symbols: ['K', '°K'], words: ['kelvin', 'kelvins', 'degrees kelvin', 'degree kelvin'] },
+  { kind: 'temperature', unit: 'mK', symbols: ['mK'], words: ['millikelvin', 'millikelvins'] },
+  {
+    kind: 'temperature',
+    unit: 'degC',
+    symbols: ['°C', '° C', 'ºC', '℃', 'degC', 'deg C'],
+    words: ['degree Celsius', 'degrees Celsius', 'degree C', 'degrees C', 'degree centigrade', 'degrees centigrade', 'Celsius', 'centigrade'],
+  },
+  {
+    kind: 'temperature',
+    unit: 'degF',
+    symbols: ['°F', '° F', 'ºF', '℉', 'degF', 'deg F'],
+    words: ['degree Fahrenheit', 'degrees Fahrenheit', 'degree F', 'degrees F', 'Fahrenheit'],
+  },
+
+  { kind: 'temperature', unit: 'degC', ambiguous: true, symbols: ['°', 'º'], words: ['degree', 'degrees', 'deg'] },
+
+  // Mass ("pounds" is a mass unless "of thrust"/"of force"/"-force" follows: the longer form wins)
+  { kind: 'mass', unit: 'kg', symbols: ['kg'], words: ['kilogram', 'kilograms', 'kilogramme', 'kilogrammes', 'kilo', 'kilos'] },
+  { kind: 'mass', unit: 'g', symbols: ['g'], words: ['gram', 'grams', 'gramme', 'grammes'] },
+  { kind: 'mass', unit: 'mg', symbols: ['mg'], words: ['milligram', 'milligrams'] },
+  { kind: 'mass', unit: 'tonne', symbols: ['t'], words: ['tonne', 'tonnes', 'metric ton', 'metric tons'] },
+  { kind: 'mass', unit: 'lb', symbols: ['lb', 'lbs', 'lbm'], words: ['pound', 'pounds'] },
+
+  // Speed (mathjs has no "mph": miles per hour are written "mi/h")
+  {
+    kind: 'speed',
+    unit: 'm/s',
+    symbols: ['m/s', 'm s^-1', 'm s⁻¹', 'm·s⁻¹', 'ms⁻¹', 'ms^-1'],
+    words: ['metre per second', 'metres per second', 'meter per second', 'meters per second', 'm per second'],
+  },
+  {
+    kind: 'speed',
+    unit: 'km/s',
+    symbols: ['km/s', 'km s^-1', 'km s⁻¹', 'km·s⁻¹'],
+    words: ['kilometre per second', 'kilometres per second', 'kilometer per second', 'kilometers per second', 'km per second', 'km a second', 'kilometres a second', 'kilometers a second'],
+  },
+  {
+    kind: 'speed',
+    unit: 'km/h',
+    symbols: ['km/h', 'km/hr', 'kph', 'km h^-1', 'km h⁻¹'],
+    words: ['kilometre per hour', 'kilometres per hour', 'kilometer per hour', 'kilometers per hour', 'km per hour', 'km an hour', 'kilometres an hour', 'kilometers an hour'],
+  },
+  { kind: 'speed', unit: 'mi/h', symbols: ['mph', 'MPH', 'mi/h', 'mi/hr'], words: ['mile per hour', 'miles per hour', 'miles an hour', 'mile an hour'] },
+  { kind: 'speed', unit: 'mi/s', symbols: ['mi/s'], words: ['mile per second', 'miles per second', 'miles a second', 'mile a second'] },
+  // The light-year: 9 460 730 472 580 800 m exactly (IAU 2012 Resolution B2 with the Julian year, as mathjs has none).
+  { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 3600, words: ['light-year per hour', 'light-years per hour', 'light years per hour', 'lightyears per hour'] },
+  { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 86400, words: ['light-year per day', 'light-years per day', 'light years per day', 'lightyears per day'] },
+  { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 31557600, words: ['light-year per year', 'light-years per year', 'light years per year', 'lightyears per year'] },
+  { kind: 'speed', unit: 'ft/s', symbols: ['ft/s', 'ft/sec', 'fps', 'ft s^-1', 'ft s⁻¹'], words: ['foot per second', 'feet per second', 'feet a second'] },
+  { kind: 'speed', unit: 'cm/s', symbols: ['cm/s', 'cm s^-1', 'cm s⁻¹'], words: ['centimetre per second', 'centimetres per second', 'centimeter per second', 'centimeters per second'] },
+  { kind: 'speed', unit: 'mm/s', symbols: ['mm/s'], words: ['millimetre per second', 'millimetres per second', 'millimeter per second', 'millimeters per second'] },
+  {
+    kind: 'speed',
+    unit: 'm/s',
+    factor: C_M_PER_S,
+    words: ['times the speed of light', 'times light speed', 'times the velocity of light', 'times faster than light', 'times c'],
+    symbols: ['× the speed of light', 'x the speed of light', '× light speed', '×c', '× c'],
+  },
+
+  // Voltage
+  { kind: 'voltage', unit: 'V', symbols: ['V', 'VDC', 'VAC', 'Vdc', 'Vac', 'V DC', 'V AC', 'Vrms', 'V rms', 'v', 'vdc', 'vac'], words: ['volt', 'volts'] },
+  { kind: 'voltage', unit: 'mV', symbols: ['mV'], words: ['millivolt', 'millivolts'] },
+  { kind: 'voltage', unit: 'kV', symbols: ['kV', 'kv'], words: ['kilovolt', 'kilovolts'] },
+
+  // Duration ("s" alone is left out: seconds are written out, or read as Isp after "Isp"/"specific impulse")
+  { kind: 'duration', unit: 's', symbols: ['s', 'sec', 'secs'], words: ['second', 'seconds'] },
+  { kind: 'duration', unit: 'min', symbols: ['min', 'mins'], words: ['minute', 'minutes'] },
+  { kind: 'duration', unit: 'h', symbols: ['h', 'hr', 'hrs'], words: ['hour', 'hours'] },
+  { kind: 'duration', unit: 'day', symbols: ['d'], words: ['day', 'days'] },
+  { kind: 'duration', unit: 'week', words: ['week', 'weeks'] },
+  { kind: 'duration', unit: 'day', factor: 14, words: ['fortnight', 'fortnights'] },
+  { kind: 'duration', unit: 'month', words: ['month', 'months'] },
+  { kind: 'duration', unit: 'year', symbols: ['yr', 'yrs'], words: ['year', 'years'] },
+
+  // Electric current
+  // Gas flow (electrolysers): mathjs reads "L/min", "L/h", "mL/min", "cm^3/min".
+  {
+    kind: 'gas-flow',
+    unit: 'L/min',
+    symbols: ['L/min', 'l/min', 'L/minute', 'LPM', 'lpm', 'SLPM', 'slpm', 'L min^-1', 'L min⁻¹', 'l min⁻¹'],
+    words: ['litre per minute', 'litres per minute', 'liter per minute', 'liters per minute'],
+  },
+  { kind: 'gas-flow', unit: 'L/h', symbols: ['L/h', 'l/h', 'L/hr', 'l/hr', 'LPH', 'lph'], words: ['litre per hour', 'litres per hour', 'liter per hour', 'liters per hour'] },
+  {
+    kind: 'gas-flow',
+    unit: 'mL/min',
+    symbols: ['mL/min', 'ml/min', 'cc/min', 'ccm', 'sccm', 'SCCM'],
+    words: ['millilitre per minute', 'millilitres per minute', 'milliliter per minute', 'milliliters per minute', 'cc per minute'],
+  },
+  { kind: 'current', unit: 'A', symbols: ['A'], words: ['amp', 'amps', 'ampere', 'amperes'] },
+  { kind: 'current', unit: 'mA', symbols: ['mA'], words: ['milliamp', 'milliamps', 'milliampere', 'milliamperes'] },
+  { kind: 'current', unit: 'uA', symbols: micro('A'), words: ['microamp', 'microamps', 'microampere', 'microamperes'] },
+  { kind: 'current', unit: 'kA', symbols: ['kA'], words: ['kiloamp', 'kiloamps', 'kiloampere', 'kiloamperes'] },
+];

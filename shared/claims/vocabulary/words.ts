@@ -1,0 +1,146 @@
+/**
+ * The other words of the figure reader's vocabulary (shared/claims/figures-vocabulary.ts): what makes
+ * a number a quantum efficiency, a COP, a difference, a specific impulse or a label; what says a
+ * device is a heat engine, a heat pump or a cooler, throws out propellant or not, runs by itself or
+ * harvests an outside flow; hedges; the connectors before a bare number.
+ */
+
+/** Words that make a percentage (or a bare ratio) a quantum efficiency: particles out per particle in. */
+export const QUANTUM_EFFICIENCY_WORDS = [
+  'quantum efficienc(?:y|ies)', 'quantum yields?', 'EQEs?', 'IQEs?', 'QEs?', 'photon yields?', 'photons? per electrons?', 'electrons? per photons?',
+  'carrier multiplication', 'exciton multiplication', 'multiple exciton generation', 'singlet fission', 'photon upconversion', 'quantum-cutting', 'quantum cutting',
+  'photons? per (?:injected |absorbed )?(?:electrons?|carriers?)', 'electrons? per (?:incident |absorbed )?photons?', 'external quantum', 'internal quantum',
+];
+
+/** Words that make "350 % efficient" a heating COP (heat pumps deliver more heat than the work they take). */
+export const HEAT_PUMP_WORDS = [
+  'heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
+  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:mov(?:es?|ing|ed)|pump(?:s|ing|ed)?|lift(?:s|ing|ed)?) heat',
+];
+/** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
+export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini-?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?', '(?:window|portable|room|wall|ducted|rooftop|car|central) (?:AC|A/C)', 'A/C', 'air ?cons?', 'aircons?'];
+
+/** Words that make a temperature a difference: before ("ΔT of 20 K") or after ("a 20 K difference"). */
+export const DIFFERENCE_BEFORE = [
+  'ΔT', 'Δ T', 'delta[- ]?T', 'dT', 'temperature (?:difference|gradient|drop|rise|lift|span|spread|differential|swing|excursion|change|increase)s?',
+  'differences? of', 'differential of', 'gradient of', 'rise of', 'drop of', 'lift of', 'spread of', 'span of', 'increase of', 'swing of', 'change of',
+  '(?:pump(?:s|ing)?|lift(?:s|ing)?|rais(?:es|ing)|mov(?:es|ing)) (?:the )?heat(?: up)?(?: by| through| across)?', 'through', 'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
+  '(?:only |just )?across(?: (?:only|just|a|an))*', 'spanning', '(?:rais|lower|increas|decreas|heat|warm|cool|drop|lift)(?:e|es|ed|ing|s)? (?:the )?temperature (?:of )?(?:[\\w-]+ ){0,3}by', '(?:colder|cooler|hotter|warmer|lower|higher) than (?:the |its )?(?:[\\w-]+ ){0,3}by', 'differ(?:s|ing)? by', 'apart by', 'separated by', 'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
+];
+export const DIFFERENCE_AFTER = [
+  '(?:temperature )?(?:difference|differential|gradient|drop|rise|lift|span|spread|swing|excursion|delta|split|increase|decrease)s?',
+  '(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)(?: than)?', 'by which', 'ΔT', 'delta[- ]?T', 'of (?:temperature )?(?:difference|gradient|lift|rise|drop)',
+  'between', 'apart', 'across', 'of heating', 'of warming', 'of cooling',
+];
+
+/** Words before a number of seconds that make it a specific impulse. */
+export const ISP_WORDS = ['I_?sp', 'Isp', 'ISP', 'I sp', 'specific impulses?', 'specific impulse \\(Isp\\)'];
+
+/** Words that say a device is a heat engine (so an efficiency is a Carnot claim). */
+export const HEAT_ENGINE_WORDS = [
+  'heat motors?', 'thermoacoustic', 'of the heat', 'of the heat (?:it|that)', 'heat (?:it|that it) (?:draws|takes|absorbs|collects|gathers)', 'heat engines?', 'engines?', 'turbines?', 'Stirling\\w*', '\\w*motoren?', 'cooling water', 'condenser', 'heat sink', 'hot side', 'cold side', 'reservoirs?',
+  'source temperature', 'thermoelectric\\w*', 'thermo-?electric\\w*', 'thermionic', 'thermophotovoltaic\\w*', 'TPV', 'Stirling',
+  'Rankine', 'ORC', 'steam', 'heat to (?:work|power|electricity)', 'converts? (?:\\w+ )?heat', 'waste[- ]heat', 'thermal (?:to|into) (?:electric|mechanical)',
+  'Seebeck', 'Peltier', 'generators? running on heat', 'heat-driven', 'thermal generator', 'TEG', 'heat recovery', 'power plant', 'power station', 'combustion',
+  'diesel', 'petrol', 'gasoline', 'ambient heat', 'heat of the (?:air|sea|room|surroundings)', 'temperature difference', 'thermal gradient',
+];
+
+/** A device said to throw out nothing: the photon-rocket bound applies to its thrust. */
+export const PROPELLANT_FREE_WORDS = [
+  'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless', 'without (?:spending|using|burning|consuming|expending) (?:any )?(?:propellant|fuel|reaction mass)',
+  '(?:ion(?:ic)? wind|air currents?|convection) (?:cannot|can ?not|can\'t|could not|is not|isn\'t) (?:be )?(?:the )?(?:cause|explanation|source)', 'rul(?:e|es|ed|ing) out (?:ion(?:ic)? wind|air currents?|convection)',
+  'without (?:any )?(?:expelling|ejecting|emitting|throwing|shedding|venting)(?: (?:out )?(?:any )?(?:propellant|mass|reaction mass|material|matter|exhaust|gas))?',
+  'without (?:any )?(?:propellant|reaction mass|exhaust)', 'nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)', 'photon[- ](?:thruster|rocket|drive|propulsion)(?: (?:bound|limit))?', '(?:no air|nothing) to push (?:on|against)',
+  'lasers?', 'laser[- ](?:thrusters?|diodes?|light|propulsion|arrays?|bars?|beams?)', 'photons?', 'beam leaving', 'quantum vacuum', 'virtual particles',
+  'pushes? (?:against|on|off) (?:the )?(?:quantum )?vacuum', 'pushing (?:against|on|off) (?:the )?(?:[\\w-]+ ){0,3}?vacuum', 'recoil', 'collimated', 'light (?:alone|only)', 'radiators?',
+  'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
+  'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
+  'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
+  'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', 'expels? no (?:propellant|mass|gas|reaction mass|matter)',
+  '(?:hard |high )?vacuum,? where no (?:ion(?:ic)? wind|air)', 'no ion(?:ic)? wind (?:can|could) (?:form|arise|act)', 'radiating (?:panel|face|surface|plate)', 'radiat(?:es?|ing|ed)(?: [\\w-]+){0,4}? (?:out of|from|off) (?:one|a single|its|the) (?:face|side|surface)', '(?:infrared|IR|heat) lamps?', 'flashlights?', 'LEDs?(?= [^.;!?]{0,60}(?:push|thrust|recoil))', 'thermal emission', '(?:transient )?mass[- ]fluctuations?', 'mass(?: is (?:said|claimed) to| that)? (?:swings?|fluctuates?|oscillates?|varies)', 'Mach effect', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
+  'closed[- ](?:cavity|resonator|system|box|container|frame|vessel|frustum|loop drive)', '(?:hermetically )?sealed', 'enclosed', 'cavity', 'EM ?drive',
+  'inertial (?:propulsion|drive|thrust)', 'field propulsion', 'unidirectional (?:force|thrust)', 'net thrust from inside', 'fuel-?less (?:thruster|drive|propulsion)',
+  'pushes? (?:itself|against nothing)', 'self-propell\\w*', 'frustum', 'tapered (?:cavity|resonator|copper)',
+  'microwave (?:thruster|drive|cavity|resonator)', 'resonant cavity', 'RF (?:thruster|cavity)', 'gyroscopic (?:thrust|lift|propulsion|drive|thruster)',
+  'precession (?:drive|thruster|lift)', 'anti-?gravity', 'space drive', 'inertia drive', 'oscillation thruster', 'shuttl\\w+ masses', 'internal masses',
+  'no (?:external )?reaction', 'momentum from nothing', 'stationary thruster', '(?:reaction mass|propellant|exhaust|mass expelled)[:,]? (?:none|zero|nil|0 kg)',
+  // "with nothing ejected", "no mass leaving it", "nothing escaping": said after the noun as well.
+  '(?:with )?nothing (?:being )?(?:ejected|expelled|emitted|escaping|vented|thrown out|leaving(?: it| the \\w+)?)',
+  '(?:with )?no (?:mass|matter|material|gas|propellant|particles?) (?:being )?(?:leaving|escaping|ejected|expelled|emitted|vented|thrown out|leaves|escapes)',
+];
+/** A device said to carry and expel propellant: the photon-rocket bound does not apply, the rocket equation does. */
+export const PROPELLANT_WORDS = [
+  'propellant', 'xenon', 'krypton', 'argon', 'hydrazine', 'kerosene', 'oxidi[sz]er', 'fuel tanks?', 'exhaust (?:velocity|speed)', 'Isp', 'specific impulse',
+  'ion (?:thruster|engine|drive)', 'Hall(?:-effect)? (?:thruster|effect thruster)', 'rocket', 'reaction mass', 'mass flow', 'nozzle', 'ejects?', 'expels?',
+  'plasma thruster', 'resistojet', 'arcjet', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
+  'fans?', 'air-breathing', 'solar sails?', 'ion[- ]wind', 'ionic wind', 'corona(?: discharge)?', 'electrohydrodynamic', 'EHD', 'ionocraft', 'ablation', 'ablative', '(?:pushed|driven|propelled|illuminated|accelerated) by (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:lasers?|beams?|sunlight|light)',
+  'ground(?:-based)? lasers?', 'laser-pushed', 'beamed (?:power|energy) from', 'tether',
+  // Things that push on air or water (lawfully far above P/c).
+  '(?:drone|quadcopter|multicopter|multirotor) (?:makers?|motors?|propellers?|rotors?|arms?|props?)', 'quadcopters?', 'multicopters?', 'multirotors?', 'helicopters?',
+  'lifters?(?=[^.;!?]{0,80}(?:\\d ?kV|kilovolts?))', 'in (?:the )?(?:open|room|ambient|free|still|ordinary) air', 'rotor blades?', 'propellers?', 'props?', '(?:RC|R/C|radio[- ]controlled|model) (?:planes?|aircraft|airplanes?|aeroplanes?|helis?|gliders?|boats?)', '(?:air|aero)planes?', 'aircraft', 'paramotors?', 'hovercraft', 'ducted fans?', 'EDFs?', 'outboards?', 'boats?', 'water jets?', '(?:balsa|foil|ion|ionic|corona|EHD|high-voltage)[\\w-]*(?: [\\w-]+)? lifters?',
+  'pushes? (?:on|against) (?:the )?(?:air|water)', 'tractors?', 'wheels? on the ground',
+];
+
+/** Phrases that say a device needs no input (the input power is then 0). */
+export const SELF_RUNNING_WORDS = [
+  'self-?running', 'self-?sustain(?:ing|ed|s)', 'self-?powered', 'self-?looped', 'self-?looping', 'self-?feeding', 'self-?charging', 'self-?perpetuating',
+  'needs? no (?:external )?(?:power|energy|input|supply|fuel|battery|electricity|source)', 'requires? no (?:external )?(?:power|energy|input|supply|fuel|electricity|source)',
+  'without (?:any )?(?:external )?(?:power|energy|input|supply|fuel|electricity)(?: source| supply| input)?', 'no (?:external )?(?:power|energy) (?:input|source|supply)',
+  'no (?:external )?input', 'powers? itself', '(?:drawing|draws|consuming|consumes|using|uses|taking|takes) nothing', 'with nothing (?:going )?in',
+  'no connection to (?:the )?(?:grid|mains|supply|power)', 'not connected to (?:the )?(?:grid|mains|any (?:supply|source))', 'zero input', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
+  'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
+  'with nothing (?:plugged in|connected|attached)(?: to drive it)?', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',
+  '(?:with )?nothing (?:driving|powering|feeding|turning|running) it', '(?:turns|spins|runs|keeps going|keeps turning|goes|turning|spinning) (?:on )?by itself',
+  '(?:battery|supply|mains|power|source) (?:is |was |being )?(?:disconnected|taken out|removed|unplugged)', '(?:turning|running|spinning|going) on its own', '(?:battery|supply) (?:taken out|removed)',
+  'nothing connected to it', 'with nothing connected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
+  'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
+  'no fuel', 'fuel-?less', 'free energy', 'no (?:motor|engine|drive|battery) and no (?:other )?(?:input|supply|power)', 'no other (?:input|supply|power source|energy source|source of (?:power|energy))',
+];
+/** Where "self-powered" is lawful: the device harvests an outside flow of energy. */
+export const HARVEST_WORDS = [
+  'harvest\\w*', 'solar', 'photovoltaic', 'sunlight', 'light', 'vibrations?', 'body heat', 'thermal gradient', 'temperature difference', 'wind', 'tides?',
+  'waves?', 'radio waves', 'RF energy', 'ambient (?:light|RF|vibration)', 'piezo\\w*', 'triboelectric',
+  'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell',
+  // A vehicle or set that burns fuel (a "self-charging" hybrid charges from its engine).
+  'petrol', 'gasoline', 'diesel', 'combustion engine', '(?:petrol|diesel|gas) engine', 'burns? (?:fuel|petrol|diesel|gas)', 'regenerative braking', 'braking',
+];
+
+/** Nouns after "5K" that make the K a thousand ("5K cycles"), not kelvins. */
+export const THOUSAND_NOUNS = [
+  'start(?:s|[–-]stop)?', 'charges?', 'discharges?', 'operations?', 'actuations?', 'revs?', 'kilomet(?:re|er)s?', 'cycles?', 'hours?', 'hrs?', 'rpm', 'RPM', 'revolutions?', 'rotations?', 'runs?', 'tests?', 'trials?', 'units?', 'miles?', 'km', 'steps?', 'iterations?',
+  'shots?', 'pulses?', 'seconds?', 'minutes?', 'days?', 'cells?', 'orders?', 'customers?', 'users?', 'dollars?', 'euros?', 'pounds?', 'USD', 'EUR',
+  'homes?', 'households?', 'devices?', 'vehicles?', 'cars?', 'operating hours', 'loops?', 'turns?', 'strokes?', 'rounds?', 'samples?', 'subscribers?',
+  'watts?', 'W\\b', 'volts?', 'amps?', 'joules?', 'newtons?', 'feet', 'ft',
+];
+
+/** Hedges before a figure, and what they mean. */
+export const HEDGES: readonly { hedge: 'up-to' | 'about' | 'at-least' | 'at-most' | 'more-than' | 'less-than'; words: readonly string[] }[] = [
+  { hedge: 'up-to', words: ['up to', 'as much as', 'as high as', 'peaks? of', 'peaking at', 'maximum of', 'max(?:imum)?\\.?', 'a peak'] },
+  { hedge: 'about', words: ['about', 'around', 'approximately', 'approx\\.?', 'roughly', 'nearly', 'almost', 'close to', 'some', 'circa', 'ca\\.', 'of order', '~', '≈', '∼', 'c\\.'] },
+  { hedge: 'at-least', words: ['at least', 'no less than', 'not less than', 'a minimum of', 'minimum', '≥', '>='] },
+  { hedge: 'at-most', words: ['at most', 'no more than', 'not more than', '≤', '<='] },
+  { hedge: 'more-than', words: ['more than', 'over', 'above', 'in excess of', 'exceeding', 'upwards of', 'greater than', 'better than', 'beyond', '>'] },
+  { hedge: 'less-than', words: ['less than', 'under', 'below', 'fewer than', 'lower than', '<'] },
+];
+
+/** COP: cooling words are looked for first, then heating words (within COP_WINDOW characters). */
+export const COP_COOLING = ['cool(?:s|ed|ing|er|ers)?', 'refrigerat\\w*', 'chillers?', 'freezers?', 'fridges?', 'air[- ]condition\\w*', 'cryocoolers?'];
+export const COP_HEATING = ['heating', 'heat[- ]pumps?', 'heaters?', 'warming', 'heat output', 'flow temperature', 'hot water', 'DHW', 'underfloor', 'radiators?'];
+
+/** Words before a number that make it a label, not a figure ("Figure 2 A", "Section 3.2", "p. 12"). */
+export const LABEL_WORDS = [
+  'fig(?:ure)?s?\\.?', 'tables?', 'tab\\.', 'sections?', 'sec\\.', 'eqs?\\.?', 'equations?', 'refs?\\.?', 'references?',
+  'pp?\\.', 'pages?', 'chapters?', 'ch\\.', 'nos?\\.', 'nr\\.', 'appendix', 'items?', 'lines?', 'col\\.', 'vol\\.', 'volume',
+  'issue', 'step', 'example', 'grant',
+];
+
+/** Words between the efficiency keyword and a percentage that say it is a change, not an efficiency. */
+export const EFFICIENCY_CHANGE_WORDS = ['by', 'increas\\w*', 'improv\\w*', 'gains?', 'drops?', 'dropped', 'loss(?:es)?', 'rais\\w*', 'boost\\w*', 'points?'];
+
+/** Words allowed between "efficiency"/"COP" and a bare number ("an efficiency of 0.62", "COP = 4"). */
+export const BARE_CONNECTORS = [
+  'of', 'is', 'was', 'were', 'be', 'between', 'from', 'ranging from', 'ranges? from', 'lies', 'lay', 'sits', 'stands', 'varies', 'comes? (?:in )?(?:at|to)',
+  'came (?:in )?(?:at|to)', 'works? out (?:at|to)', 'measured at', 'rated at', 'runs at', 'ran at', 'reached', 'in the range', 'range', 'reaching', 'ca\\.?', 'approx\\.?', 'c\\.', '~', '≈', 'reached', 'reaches', 'near', 'about', 'around', 'approximately', 'roughly',
+  'up to', 'above', 'over', 'exceeding', 'as high as', 'equal to', 'rated', 'value', 'measured', 'a', 'an', 'the', 'somewhere', 'anywhere', 'of the order of', 'on the order of',
+  'stated as', 'given as', 'quoted as', 'reported as', '(?:measured|found|determined|reported|estimated|calculated|said|claimed|shown) to be', 'at (?:this|that|the|full|part|rated) (?:operating point|load|conditions?|speed)',
+];
