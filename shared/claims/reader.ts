@@ -44,6 +44,11 @@
  * of first call. `compromise` (14.x, kept up to date, MIT) reads numbers in words well ("three and a
  * half", "twenty-four") and is used for that alone; units are our vocabulary (figures-vocabulary.ts,
  * the trade's spellings) converted by mathjs, ranges and relations are ours, as no library reads them.
+ *
+ * The passes, in shared/claims/reader/: numbers.ts and units.ts (1, 2), kinds.ts, temperatures.ts,
+ * ranges-hedges.ts and roles.ts (3–5), figures.ts (a text's figures, pass by pass), comparisons.ts,
+ * relations.ts, roles-by-context.ts, temperatures.ts and durations.ts (6); context.ts and draft.ts
+ * hold what the passes share.
  */
 import type { Figure } from './types';
 import { readFigures } from './reader/figures';

@@ -36,7 +36,6 @@ const ENDS_UP_HOLDING_RE = /(?<!\p{L})(?:ends?|ended|ending)[^\S\n]+up[^\S\n]+(?
 const STORE_INTO_RE =
   /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?into[^\S\n]+(?:(?:a|an|the|its|our|my|their)[^\S\n]+)?(?:[\p{L}\d-]+[^\S\n]+){0,2}?(?:cells?|batter(?:y|ies)|packs?|capacitors?|supercaps?|supercapacitors?|accumulators?|flywheels?)(?!\p{L})/iu;
 
-
 /** Roles the words leave open, read from the other figures (see the file's comment). */
 export function rolesByContext(text: string, drafts: Draft[]): void {
   // "covers 4.2 light years in 30 days": a speed, distance over time (IAU 2012 B2 astronomical unit,
