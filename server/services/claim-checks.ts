@@ -7,72 +7,32 @@
 import crypto from 'node:crypto';
 import type { Response } from 'express';
 import type { Sequelize } from 'sequelize';
-import { z } from 'zod';
 import type { ParagraphEntry } from '../../shared/claims/paragraph';
 import {
-  CLAIM_FIGURES_MAX,
-  CLAIM_TEXT_MAX,
-  FIGURE_KINDS,
-  FIGURE_ROLES,
-  PARAGRAPH_VARIANTS,
   type ClaimCheckResult,
   type ClaimMatch,
   type FigureInput,
   type SavedClaimCheckDto,
   type SavedClaimCheckSummaryDto,
 } from '../../shared/claims/types';
-import { CITATION_STYLES, type CitationStyle, type CslItem } from '../../shared/entries/citations';
+import type { CitationStyle, CslItem } from '../../shared/entries/citations';
 import { computeFor, type ComputePool } from '../compute/pool';
 import { HttpError } from '../http/errors';
-import { validate } from '../http/validate';
 import { SavedClaimCheck, type User } from '../models';
-import { citedItem, permalink } from '../routes/entries';
+import { permalink } from '../../shared/permalink';
+import { citedItem } from '../presenters/citation';
+import type { ClaimCheckInput } from '../routes/claim-checks/schema';
 import { matchClaim } from '../search/claim-match';
 import type { SearchIndex } from '../search';
 import type { Entries } from './entries';
 
-export const figureInputSchema = z
-  .object({
-    kind: z.enum(FIGURE_KINDS),
-    quantity: z.string().trim().min(1, 'type the figure with its unit, such as "0.2 lbf"').max(80, 'at most 80 characters'),
-    upper: z.string().trim().max(80, 'at most 80 characters').nullable().optional(),
-    role: z.enum(FIGURE_ROLES).nullable().optional(),
-    text: z.string().max(200).optional(),
-    start: z.number().int().min(0).max(CLAIM_TEXT_MAX).nullable().optional(),
-    end: z.number().int().min(0).max(CLAIM_TEXT_MAX).nullable().optional(),
-  })
-  .strict();
-
-export const claimCheckSchema = z
-  .object({
-    text: z.string({ error: 'paste the text of the claim' }).trim().min(1, 'paste the text of the claim'),
-    style: z.enum(CITATION_STYLES).default('apa'),
-    variant: z.enum(PARAGRAPH_VARIANTS).default('referee'),
-    figures: z.array(figureInputSchema).max(CLAIM_FIGURES_MAX, `at most ${CLAIM_FIGURES_MAX} figures`).optional(),
-  })
-  .strict();
-
-export type ClaimCheckInput = z.infer<typeof claimCheckSchema>;
+export type { ClaimCheckInput };
 
 /** The share link of a saved check (the screen's route). */
 const shareUrl = (origin: string, token: string) => `${origin}/check/${token}`;
 
 /** Entries the paragraph names: the best match and up to two related ones. */
 const PARAGRAPH_ENTRIES = 3;
-
-/** Validates a claim-check body: 413 for a text over the limit (before anything else), else 400s naming the field. */
-export function readClaimCheckBody(body: unknown): ClaimCheckInput {
-  const text = (body as { text?: unknown } | null)?.text;
-  if (typeof text === 'string' && text.length > CLAIM_TEXT_MAX) {
-    throw new HttpError(
-      413,
-      'text_too_long',
-      `The text is ${text.length.toLocaleString('en-US')} characters long; the claim check takes at most ${CLAIM_TEXT_MAX.toLocaleString('en-US')}. Paste the part that states the claim and its figures.`,
-      { 'body.text': `at most ${CLAIM_TEXT_MAX} characters` },
-    );
-  }
-  return validate(claimCheckSchema, body ?? {}, 'body');
-}
 
 export interface ClaimChecksDeps {
   sequelize: Sequelize;

@@ -9,9 +9,8 @@
  * checked when the draft is submitted.
  */
 import { Op, UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
-import { z, type ZodType } from 'zod';
 import { kitFunctions } from '../../shared/checks/kit-functions';
-import { entryContentSchema, IN_BRIEF_MAX_WORDS, slugSchema, wordCount, type EntryContent } from '../../shared/entries/schema';
+import { entryContentSchema, IN_BRIEF_MAX_WORDS, wordCount, type EntryContent } from '../../shared/entries/schema';
 import { validateWorksheet } from '../../shared/worksheet/evaluate';
 import { worksheetSchema } from '../../shared/worksheet/schema';
 import { fieldsError, HttpError, validationError } from '../http/errors';
@@ -21,49 +20,6 @@ import { audit, ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass, 
 import { renderHtml } from './render';
 import type { EntryHtml, EntryStateDto, EntryVersionDto, PersonDto } from '../../shared/api-types';
 export type { EntryHtml, EntryStateDto, EntryVersionDto, PersonDto };
-
-// ---------------------------------------------------------------------------------------------
-// Request bodies
-
-const md = (max: number) => z.string().max(max, `at most ${max} characters`);
-
-/**
- * A draft as saved while it is written: the same fields and limits as entryContentSchema, but the
- * sections and the laws may still be empty (the full schema is checked at submit).
- */
-export const draftContentSchema = entryContentSchema.extend({
-  inBrief: md(1200).default(''),
-  howItIsPitched: md(6000).default(''),
-  whyItFails: md(20000).default(''),
-  laws: z.array(slugSchema).max(5).default([]),
-});
-
-const lockVersion = z.number({ error: 'the lockVersion you last read (a whole number)' }).int().min(0);
-export const createDraftSchema = z.object({ slug: slugSchema, content: draftContentSchema }).strict();
-export const updateDraftSchema = z.object({ content: draftContentSchema, lockVersion }).strict();
-export const submitSchema = z.object({ lockVersion }).strict();
-export const approveSchema = z.object({ changeNote: z.string().trim().min(1, 'say in a sentence what this version changes').max(500) }).strict();
-export const sendBackSchema = z.object({ reason: z.string().trim().min(1, 'say what needs changing').max(4000) }).strict();
-export const retireSchema = z
-  .object({ reason: z.string().trim().min(1, 'say why the entry is retired').max(4000), successor: slugSchema.optional() })
-  .strict();
-
-/**
- * Like validate(), but a field over its size limit answers 413 (too_large) naming the field; any
- * other problem 400 naming each field.
- */
-export function validateSized<T>(schema: ZodType<T>, data: unknown, where: 'body' | 'query' | 'params'): T {
-  const parsed = schema.safeParse(data);
-  if (parsed.success) return parsed.data;
-  const big = parsed.error.issues.filter((i) => i.code === 'too_big');
-  if (big.length) {
-    const fields: Record<string, string> = {};
-    for (const i of big) fields[[where, ...i.path.map(String)].join('.')] ??= i.message;
-    const names = Object.keys(fields);
-    throw new HttpError(413, 'too_large', `Too large: ${names.join(', ')} (${fields[names[0]]}).`, fields);
-  }
-  throw validationError(where, parsed.error);
-}
 
 // ---------------------------------------------------------------------------------------------
 // What the API returns (the shared DTOs live in shared/api-types.ts)

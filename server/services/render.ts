@@ -5,7 +5,7 @@
  */
 import type { EntryContent } from '../../shared/entries/schema';
 import { renderMarkdown } from '../../shared/markdown';
-import type { EntryHtml } from './entries';
+import type { EntryHtml } from '../../shared/api-types';
 
 const MAX = 500;
 

@@ -6,14 +6,8 @@
  * goes after the commit.
  */
 import { Op, type Sequelize, type Transaction, type WhereOptions } from 'sequelize';
-import { z } from 'zod';
-import { readQuantityOf } from '../../shared/claims/figures';
-import { FIGURE_KINDS } from '../../shared/claims/types';
-import { slugSchema } from '../../shared/entries/schema';
 import {
-  CORRECTION_SECTIONS,
   OPEN_STATUSES,
-  SUBMISSION_KINDS,
   type AttachmentDto,
   type ClaimedFigureDto,
   type EntrySightingDto,
@@ -24,93 +18,18 @@ import {
   type SubmissionSummaryDto,
 } from '../../shared/submissions/types';
 import { can, rolesOf } from '../../shared/policies';
-import { fieldsError, HttpError } from '../http/errors';
+import { HttpError } from '../http/errors';
 import type { Mailer, OutgoingMessage } from '../mail/mailer';
 import { correctionForwardedMessage, queueDigestMessage, submissionDecidedMessage } from '../mail/messages';
 import { Attachment, audit, Entry, EntryVersion, Submission, SubmissionEntry, SubmissionEvent, User } from '../models';
 import { ObjectNotFoundError, type ObjectStore } from '../storage';
 import { removeStored, type StoredFile } from '../uploads/attachments';
-import { draftContentSchema, type Entries } from './entries';
-
-// ---------------------------------------------------------------------------------------------
-// Request schemas
-
-const text = (min: number, max: number, what: string) => z.string({ error: what }).trim().min(min, min > 1 ? `at least ${min} characters` : what).max(max, `at most ${max} characters`);
-
-export const figureSchema = z
-  .object({
-    kind: z.enum(FIGURE_KINDS),
-    quantity: z.string().trim().min(1, 'the figure with its unit, such as "0.2 lbf"').max(80),
-    label: z.string().trim().max(120).default(''),
-  })
-  .strict();
-
-export const sightingSchema = z
-  .object({
-    title: text(3, 200, 'a short title for what was seen'),
-    seenAtUrl: z
-      .string()
-      .trim()
-      .max(2000)
-      .transform((s) => s || undefined)
-      .pipe(z.url({ protocol: /^https?$/, error: 'a web address starting with http:// or https://' }).optional())
-      .optional(),
-    seenAtCitation: z
-      .string()
-      .trim()
-      .max(1000)
-      .transform((s) => s || undefined)
-      .optional(),
-    summary: text(10, 5000, 'a summary of the claim in your own words'),
-    figures: z.array(figureSchema).max(20, 'at most 20 figures').default([]),
-  })
-  .strict()
-  .refine((s) => s.seenAtUrl || s.seenAtCitation, { path: ['seenAtUrl'], message: 'say where it was seen: a web address or a citation' });
-
-export const correctionSchema = z
-  .object({
-    entry: slugSchema,
-    version: z.number({ error: 'the version number the error is in' }).int().min(1),
-    section: z.enum(CORRECTION_SECTIONS),
-    whatIsWrong: text(10, 5000, 'what is wrong'),
-    suggestedFix: text(1, 5000, 'the fix you suggest'),
-    sources: z.string().trim().max(3000).default(''),
-  })
-  .strict();
-
-export const answerSchema = z.object({ message: text(1, 5000, 'your answer') }).strict();
-
-export const decideSchema = z.discriminatedUnion('decision', [
-  z.object({ decision: z.literal('accept'), entries: z.array(slugSchema).max(10).default([]) }).strict(),
-  z.object({ decision: z.literal('draft'), slug: slugSchema, mechanismClass: slugSchema, editorId: z.number().int().min(1) }).strict(),
-  z.object({ decision: z.literal('ask'), note: text(1, 2000, 'the question for the submitter') }).strict(),
-  z.object({ decision: z.literal('reject'), note: text(1, 2000, 'the reason') }).strict(),
-]);
-
-export const queueQuerySchema = z.object({
-  kind: z.enum(SUBMISSION_KINDS).optional(),
-  status: z.enum(['open', 'claimed', 'waiting']).optional(),
-  mine: z.enum(['1', 'true']).optional(),
-  limit: z.coerce.number().int().min(1).max(100).default(50),
-  offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
-});
-
-export type SightingInput = z.infer<typeof sightingSchema>;
-export type CorrectionInput = z.infer<typeof correctionSchema>;
-export type DecideInput = z.infer<typeof decideSchema>;
-
-/** The figures of a sighting, each checked with parseQuantity for its kind (400 naming the one that fails). */
-export function readClaimedFigures(figures: z.infer<typeof figureSchema>[], where = 'body.figures'): ClaimedFigureDto[] {
-  const fields: Record<string, string> = {};
-  const out: ClaimedFigureDto[] = [];
-  figures.forEach((f, i) => {
-    const read = readQuantityOf(f.kind, f.quantity);
-    if (read.ok) out.push({ kind: f.kind, quantity: f.quantity, si: read.si, display: read.display, label: f.label });
-    else fields[`${where}.${i}.quantity`] = read.message;
-  });
-  if (Object.keys(fields).length) throw fieldsError('invalid_figure', fields);
-  return out;
-}
+import { draftContentSchema } from '../../shared/schemas/drafts';
+import type { CorrectionInput } from '../routes/corrections/schema';
+import type { QueueQueryInput } from '../routes/queue/schema';
+import type { SightingInput } from '../routes/sightings/schema';
+import type { DecideInput } from '../routes/submissions/schema';
+import type { Entries } from './entries';
 
 // ---------------------------------------------------------------------------------------------
 
@@ -272,7 +191,7 @@ export class Submissions {
     return rows.map((s) => this.summary(s));
   }
 
-  async queue(viewer: User, q: z.infer<typeof queueQuerySchema>): Promise<QueueResponse> {
+  async queue(viewer: User, q: QueueQueryInput): Promise<QueueResponse> {
     const where: WhereOptions<Submission> = { status: q.status ? q.status : [...OPEN_STATUSES] };
     if (q.kind) Object.assign(where, { kind: q.kind });
     if (q.mine) Object.assign(where, { claimedById: viewer.id, status: 'claimed' });

@@ -4,6 +4,7 @@
  * judged on the server, which answers 400 naming the field.
  */
 import { z } from 'zod';
+import { paging } from './paging';
 
 export const ROLES = ['contributor', 'editor', 'moderator', 'admin'] as const;
 export type Role = (typeof ROLES)[number];
@@ -49,15 +50,11 @@ export const userListQuerySchema = z
   .object({
     q: z.string().trim().max(100).optional(),
     role: z.enum(ROLES).optional(),
-    limit: z.coerce.number().int().min(1).max(100).default(25),
-    offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
+    ...paging(100, 25),
   })
   .strict();
 export const pageQuerySchema = z
-  .object({
-    limit: z.coerce.number().int().min(1).max(200).default(50),
-    offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
-  })
+  .object(paging(200, 50))
   .strict();
 
 /** Turns a zod error into `{ field: message }` for a form (paths without the `body.` prefix). */

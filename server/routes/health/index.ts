@@ -1,8 +1,12 @@
+/**
+ * GET /api/health: is the database up, and which version runs.
+ * Tests: tests/server/api.test.ts, outage.test.ts, start.test.ts (and the role matrix, the fuzzer).
+ */
 import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
-import type { HealthResponse } from '../../shared/api-types';
-import { databaseIsUp } from '../db/sequelize';
-import type { Allow } from '../policies';
+import type { HealthResponse } from '../../../shared/api-types';
+import { databaseIsUp } from '../../db/sequelize';
+import type { Allow } from '../../policies';
 
 export function healthRoutes(allow: Allow, sequelize: Sequelize, version: string): Router {
   const r = Router();

@@ -1,18 +1,20 @@
-/** Pasted BibTeX, RIS or CSL-JSON → CSL-JSON citations, with each unreadable item reported by position. */
+/**
+ * POST /api/citations/parse: pasted BibTeX, RIS or CSL-JSON → CSL-JSON citations, with each
+ * unreadable item reported by position.
+ * Tests: tests/server/citations.test.ts (and the role matrix, csrf.test.ts, the fuzzer).
+ */
 import { Router } from 'express';
-import { z } from 'zod';
-import { parseCitations } from '../../shared/entries/citations';
-import { MAX_TEXT_NESTING, bracketDepth } from '../http/depth';
-import { HttpError, fieldsError } from '../http/errors';
-import type { Allow } from '../policies';
-import { validateSized } from '../services/entries';
-
-const parseBodySchema = z.object({ text: z.string().min(1, 'paste BibTeX, RIS or CSL-JSON').max(200_000) }).strict();
+import { parseCitations } from '../../../shared/entries/citations';
+import { MAX_TEXT_NESTING, bracketDepth } from '../../http/depth';
+import { HttpError, fieldsError } from '../../http/errors';
+import { validated } from '../../http/validate';
+import type { Allow } from '../../policies';
+import { parseBodySchema } from './schema';
 
 export function citationRoutes(allow: Allow): Router {
   const r = Router();
-  r.post('/citations/parse', allow('citations.parse'), (req, res) => {
-    const { text } = validateSized(parseBodySchema, req.body ?? {}, 'body');
+  r.post('/citations/parse', allow('citations.parse'), validated({ body: parseBodySchema, tooLarge: true }), (_req, res) => {
+    const { text } = res.locals.valid.body;
     // The parsers recurse into nested CSL-JSON and BibTeX braces: refuse what no citation needs.
     if (bracketDepth(text) > MAX_TEXT_NESTING) throw fieldsError('too_deep', { 'body.text': `brackets or braces nested more than ${MAX_TEXT_NESTING} levels deep` });
     const { items, problems } = parseCitations(text);

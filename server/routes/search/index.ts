@@ -1,27 +1,22 @@
-/** GET /api/search: the full-text index, ranked, with facets (see server/search/index.ts). */
+/**
+ * GET /api/search: the full-text index, ranked, with facets (see server/search/index.ts).
+ * Tests: tests/server/search.test.ts, search-cluster.test.ts, claim-match.test.ts (and the role
+ * matrix, the fuzzer).
+ */
 import { Router } from 'express';
-import { z } from 'zod';
-import { slugSchema } from '../../shared/entries/schema';
-import { HttpError } from '../http/errors';
-import { validate } from '../http/validate';
-import type { Allow } from '../policies';
-import { excerpt, type SearchHit, type SearchIndex } from '../search';
-
-export const searchQuerySchema = z.object({
-  q: z.string().max(500, 'at most 500 characters').default(''),
-  law: slugSchema.optional(),
-  mechanism: slugSchema.optional(),
-  limit: z.coerce.number().int().min(1).max(50).default(20),
-  offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
-});
+import { HttpError } from '../../http/errors';
+import { validated } from '../../http/validate';
+import type { Allow } from '../../policies';
+import { excerpt, type SearchHit, type SearchIndex } from '../../search';
+import { searchQuerySchema } from './schema';
 
 const unknown = (field: string, what: string, slug: string) =>
   new HttpError(400, 'validation_failed', `Check ${field}: no ${what} “${slug}” in the taxonomy.`, { [field]: `no ${what} “${slug}” in the taxonomy` });
 
 export function searchRoutes(allow: Allow, index: SearchIndex): Router {
   const r = Router();
-  r.get('/search', allow('search.query'), async (req, res) => {
-    const q = validate(searchQuerySchema, req.query, 'query');
+  r.get('/search', allow('search.query'), validated({ query: searchQuerySchema }), async (_req, res) => {
+    const q = res.locals.valid.query;
     await index.ready();
     if (q.law && !index.laws.has(q.law)) throw unknown('query.law', 'conservation law', q.law);
     if (q.mechanism && !index.classes.has(q.mechanism)) throw unknown('query.mechanism', 'mechanism class', q.mechanism);

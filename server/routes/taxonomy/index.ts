@@ -1,7 +1,11 @@
+/**
+ * GET /api/taxonomy: the conservation laws and the tree of mechanism classes.
+ * Tests: tests/server/api.test.ts (and the role matrix, the fuzzer).
+ */
 import { Router } from 'express';
-import type { TaxonomyResponse } from '../../shared/api-types';
-import { ConservationLaw, MechanismClass } from '../models';
-import type { Allow } from '../policies';
+import type { TaxonomyResponse } from '../../../shared/api-types';
+import { ConservationLaw, MechanismClass } from '../../models';
+import type { Allow } from '../../policies';
 
 export function taxonomyRoutes(allow: Allow): Router {
   const r = Router();

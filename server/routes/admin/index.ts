@@ -1,16 +1,16 @@
-/** Admin: users and their roles, the audit log, and the development outbox. */
+/**
+ * Admin: users and their roles, the audit log, and the development outbox. /api/admin/*.
+ * Tests: tests/server/admin.test.ts, start.test.ts (and the role matrix, csrf.test.ts).
+ */
 import { Router, type RequestHandler } from 'express';
 import { Op, type WhereOptions } from 'sequelize';
-import { z } from 'zod';
-import type { AuditListResponse, OutboxResponse, UserListResponse } from '../../shared/api-types';
-import { pageQuerySchema, setRoleSchema, userListQuerySchema } from '../../shared/schemas/auth';
-import { HttpError } from '../http/errors';
-import { validate } from '../http/validate';
-import { AuditEvent, OutboxMessage, User } from '../models';
-import type { Allow } from '../policies';
-import type { Accounts } from '../services/accounts';
-
-const idParams = z.object({ id: z.coerce.number().int().min(1, 'a user id (a positive whole number)').max(4_294_967_295) });
+import type { AuditListResponse, OutboxResponse, UserListResponse } from '../../../shared/api-types';
+import { HttpError } from '../../http/errors';
+import { validated } from '../../http/validate';
+import { AuditEvent, OutboxMessage, User } from '../../models';
+import type { Allow } from '../../policies';
+import type { Accounts } from '../../services/accounts';
+import { pageQuerySchema, setRoleSchema, userIdParams, userListQuerySchema } from './schema';
 
 /** `%` and `_` in a search are letters, not wildcards. */
 const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
@@ -29,8 +29,8 @@ const developmentOnly =
 export function adminRoutes(allow: Allow, accounts: Accounts, env: string): Router {
   const r = Router();
 
-  r.get('/admin/users', allow('users.list'), async (req, res) => {
-    const { q, role, limit, offset } = validate(userListQuerySchema, req.query, 'query');
+  r.get('/admin/users', allow('users.list'), validated({ query: userListQuerySchema }), async (_req, res) => {
+    const { q, role, limit, offset } = res.locals.valid.query;
     const where: WhereOptions<User>[] = [];
     if (q) {
       const like = `%${likeEscape(q.toLowerCase())}%`;
@@ -47,15 +47,14 @@ export function adminRoutes(allow: Allow, accounts: Accounts, env: string): Rout
     res.set('Cache-Control', 'no-store').json(payload);
   });
 
-  r.patch('/admin/users/:id/role', allow('users.setRole'), async (req, res) => {
-    const { id } = validate(idParams, req.params, 'params');
-    const { role } = validate(setRoleSchema, req.body ?? {}, 'body');
+  r.patch('/admin/users/:id/role', allow('users.setRole'), validated({ params: userIdParams, body: setRoleSchema }), async (req, res) => {
+    const { params: { id }, body: { role } } = res.locals.valid;
     const user = await accounts.setRole(req.user!.id, id, role);
     res.json({ user: user.toDto() });
   });
 
-  r.get('/admin/audit', allow('audit.list'), async (req, res) => {
-    const { limit, offset } = validate(pageQuerySchema, req.query, 'query');
+  r.get('/admin/audit', allow('audit.list'), validated({ query: pageQuerySchema }), async (_req, res) => {
+    const { limit, offset } = res.locals.valid.query;
     const { rows, count } = await AuditEvent.findAndCountAll({
       include: [{ model: User, as: 'actor', attributes: ['id', 'displayName'] }],
       order: [['createdAt', 'DESC'], ['id', 'DESC']],

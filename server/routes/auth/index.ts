@@ -1,17 +1,18 @@
-/** The session (who is signed in, and the CSRF token), sign-up, verification, sign-in and out, password reset. */
-import { Router, type Request } from 'express';
+/**
+ * Sign-up, verification, sign-in and out, password reset: /api/auth/*.
+ * Tests: tests/server/accounts.test.ts, sessions.test.ts, rate-limit.test.ts, security.test.ts (and
+ * the role matrix, csrf.test.ts, the fuzzer).
+ */
+import { Router, type Request, type RequestHandler } from 'express';
 import type { Logger } from 'pino';
 import type { PassportStatic } from 'passport';
-import type { SessionResponse } from '../../shared/api-types';
-import { emailOnlySchema, resetSchema, signInSchema, signUpSchema, verifySchema } from '../../shared/schemas/auth';
-import { newToken } from '../auth/tokens';
-import { HttpError } from '../http/errors';
-import type { LimitName } from '../http/rate-limit';
-import { validate } from '../http/validate';
-import type { User } from '../models';
-import type { Allow } from '../policies';
-import type { Accounts } from '../services/accounts';
-import type { RequestHandler } from 'express';
+import { HttpError } from '../../http/errors';
+import type { LimitName } from '../../http/rate-limit';
+import { validated } from '../../http/validate';
+import type { User } from '../../models';
+import type { Allow } from '../../policies';
+import type { Accounts } from '../../services/accounts';
+import { emailOnlySchema, resetSchema, signInSchema, signUpSchema, verifySchema } from './schema';
 
 export interface AuthRouteDeps {
   allow: Allow;
@@ -31,34 +32,28 @@ export function authRoutes(d: AuthRouteDeps): Router {
   const r = Router();
   const { allow, accounts, limits } = d;
 
-  r.get('/session', allow('session.read'), (req, res) => {
-    req.session.csrfToken ??= newToken();
-    const payload: SessionResponse = { user: req.user ? req.user.toDto() : null, csrfToken: req.session.csrfToken };
-    res.set('Cache-Control', 'no-store').json(payload);
-  });
-
-  r.post('/auth/sign-up', allow('auth.signUp'), limits.signUp, async (req, res) => {
-    const input = validate(signUpSchema, req.body ?? {}, 'body');
+  r.post('/auth/sign-up', allow('auth.signUp'), limits.signUp, validated({ body: signUpSchema }), async (req, res) => {
+    const input = res.locals.valid.body;
     const user = await accounts.signUp(input, d.origin(req));
     res.status(201).json({ user: user.toDto() });
   });
 
-  r.post('/auth/verify', allow('auth.verify'), async (req, res) => {
-    const { token } = validate(verifySchema, req.body ?? {}, 'body');
+  r.post('/auth/verify', allow('auth.verify'), validated({ body: verifySchema }), async (_req, res) => {
+    const { token } = res.locals.valid.body;
     const user = await accounts.verify(token);
     res.json({ user: user.toDto() });
   });
 
-  r.post('/auth/resend-verification', allow('auth.resendVerification'), limits.resend, (req, res) => {
-    const { email } = validate(emailOnlySchema, req.body ?? {}, 'body');
+  r.post('/auth/resend-verification', allow('auth.resendVerification'), limits.resend, validated({ body: emailOnlySchema }), (req, res) => {
+    const { email } = res.locals.valid.body;
     const origin = d.origin(req);
     d.later('resend verification', () => accounts.resendVerification(email, origin));
     res.status(202).json({});
   });
 
-  r.post('/auth/sign-in', allow('auth.signIn'), limits.signIn, (req, res, next) => {
+  r.post('/auth/sign-in', allow('auth.signIn'), limits.signIn, validated({ body: signInSchema }), (req, res, next) => {
     // Validated (and the address lower-cased) before passport-local reads the body.
-    req.body = validate(signInSchema, req.body ?? {}, 'body');
+    req.body = res.locals.valid.body;
     d.passport.authenticate('local', (err: unknown, user: User | false) => {
       if (err) return next(err);
       if (!user) return next(new HttpError(401, 'bad_credentials', BAD_CREDENTIALS));
@@ -90,15 +85,15 @@ export function authRoutes(d: AuthRouteDeps): Router {
     });
   });
 
-  r.post('/auth/forgot', allow('auth.forgotPassword'), limits.forgot, (req, res) => {
-    const { email } = validate(emailOnlySchema, req.body ?? {}, 'body');
+  r.post('/auth/forgot', allow('auth.forgotPassword'), limits.forgot, validated({ body: emailOnlySchema }), (req, res) => {
+    const { email } = res.locals.valid.body;
     const origin = d.origin(req);
     d.later('password reset mail', () => accounts.forgotPassword(email, origin));
     res.status(202).json({});
   });
 
-  r.post('/auth/reset', allow('auth.resetPassword'), limits.reset, async (req, res) => {
-    const { token, password } = validate(resetSchema, req.body ?? {}, 'body');
+  r.post('/auth/reset', allow('auth.resetPassword'), limits.reset, validated({ body: resetSchema }), async (req, res) => {
+    const { token, password } = res.locals.valid.body;
     const user = await accounts.resetPassword(token, password);
     // Every session of that user has been ended; this request's, if it was one of them, too.
     if (req.user && req.user.id === user.id) {

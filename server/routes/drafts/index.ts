@@ -1,14 +1,17 @@
-/** Drafts (editors): write, save with optimistic locking, submit, approve (never one's own), send back. */
+/**
+ * Drafts (editors): write, save with optimistic locking, submit, approve (never one's own), send
+ * back. /api/drafts/*.
+ * Tests: tests/server/entries.test.ts, citations.test.ts, security.test.ts (and the role matrix,
+ * csrf.test.ts, the fuzzer).
+ */
 import { Router, type Request } from 'express';
-import { z } from 'zod';
-import type { EntryContent } from '../../shared/entries/schema';
-import { MAX_MARKDOWN_NESTING, markdownNesting } from '../http/depth';
-import { fieldsError } from '../http/errors';
-import { validate } from '../http/validate';
-import type { Allow } from '../policies';
-import { approveSchema, createDraftSchema, sendBackSchema, submitSchema, updateDraftSchema, validateSized, type Entries } from '../services/entries';
-
-const idParams = z.object({ id: z.coerce.number().int().min(1, 'a draft id (a positive whole number)').max(4_294_967_295) });
+import type { EntryContent } from '../../../shared/entries/schema';
+import { MAX_MARKDOWN_NESTING, markdownNesting } from '../../http/depth';
+import { fieldsError } from '../../http/errors';
+import { validated } from '../../http/validate';
+import type { Allow } from '../../policies';
+import type { Entries } from '../../services/entries';
+import { approveSchema, createDraftSchema, draftIdParams, sendBackSchema, submitSchema, updateDraftSchema } from './schema';
 
 /**
  * The Markdown sections are rendered on the server once published (services/render.ts), by a
@@ -37,40 +40,36 @@ function checkMarkdownNesting(content: EntryContent): void {
 export function draftRoutes(allow: Allow, entries: Entries, origin: (req: Request) => string): Router {
   const r = Router();
 
-  r.post('/drafts', allow('drafts.create'), async (req, res) => {
-    const { slug, content } = validateSized(createDraftSchema, req.body ?? {}, 'body');
+  r.post('/drafts', allow('drafts.create'), validated({ body: createDraftSchema, tooLarge: true }), async (req, res) => {
+    const { slug, content } = res.locals.valid.body;
     checkMarkdownNesting(content as EntryContent);
     res.status(201).json({ draft: await entries.createDraft(req.user!, slug, content as EntryContent) });
   });
 
-  r.get('/drafts/:id', allow('drafts.read'), async (req, res) => {
-    const { id } = validate(idParams, req.params, 'params');
+  r.get('/drafts/:id', allow('drafts.read'), validated({ params: draftIdParams }), async (_req, res) => {
+    const { id } = res.locals.valid.params;
     res.set('Cache-Control', 'no-store').json({ draft: await entries.getDraft(id) });
   });
 
-  r.put('/drafts/:id', allow('drafts.update'), async (req, res) => {
-    const { id } = validate(idParams, req.params, 'params');
-    const { content, lockVersion } = validateSized(updateDraftSchema, req.body ?? {}, 'body');
+  r.put('/drafts/:id', allow('drafts.update'), validated({ params: draftIdParams, body: updateDraftSchema, tooLarge: true }), async (req, res) => {
+    const { params: { id }, body: { content, lockVersion } } = res.locals.valid;
     checkMarkdownNesting(content as EntryContent);
     res.json({ draft: await entries.updateDraft(req.user!, id, content as EntryContent, lockVersion) });
   });
 
-  r.post('/drafts/:id/submit', allow('drafts.submit'), async (req, res) => {
-    const { id } = validate(idParams, req.params, 'params');
-    const { lockVersion } = validate(submitSchema, req.body ?? {}, 'body');
+  r.post('/drafts/:id/submit', allow('drafts.submit'), validated({ params: draftIdParams, body: submitSchema }), async (req, res) => {
+    const { params: { id }, body: { lockVersion } } = res.locals.valid;
     res.json({ draft: await entries.submit(req.user!, id, lockVersion, origin(req)) });
   });
 
-  r.post('/drafts/:id/approve', allow('drafts.approve'), async (req, res) => {
-    const { id } = validate(idParams, req.params, 'params');
-    const { changeNote } = validateSized(approveSchema, req.body ?? {}, 'body');
+  r.post('/drafts/:id/approve', allow('drafts.approve'), validated({ params: draftIdParams, body: approveSchema, tooLarge: true }), async (req, res) => {
+    const { params: { id }, body: { changeNote } } = res.locals.valid;
     const { slug, version } = await entries.approve(req.user!, id, changeNote, origin(req));
     res.json(await entries.read(slug, version));
   });
 
-  r.post('/drafts/:id/send-back', allow('drafts.sendBack'), async (req, res) => {
-    const { id } = validate(idParams, req.params, 'params');
-    const { reason } = validateSized(sendBackSchema, req.body ?? {}, 'body');
+  r.post('/drafts/:id/send-back', allow('drafts.sendBack'), validated({ params: draftIdParams, body: sendBackSchema, tooLarge: true }), async (req, res) => {
+    const { params: { id }, body: { reason } } = res.locals.valid;
     res.json({ draft: await entries.sendBack(req.user!, id, reason, origin(req)) });
   });
 
