@@ -11,7 +11,7 @@ import { Slot } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
 import { useState } from 'react';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
-import { createQueryClient } from '@/components/api';
+import { createQueryClient } from '@/components/queries/client';
 import { installKatexFonts } from '@/components/markdown/katexFonts';
 import { Shell } from '@/components/Shell';
 import { fonts } from '@/components/theme';

@@ -2,7 +2,7 @@ import { usePathname } from 'expo-router';
 import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
-import { useHealth } from './api';
+import { useHealth } from './queries/health';
 import { Navigation } from './nav/Navigation';
 import { Wordmark } from './nav/Wordmark';
 import { colors, layout, space, type } from './theme';

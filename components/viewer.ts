@@ -1,7 +1,7 @@
 /** Who is looking at the app, as far as the client needs to know: which sections to offer. */
 import type { UserDto } from '@/shared/api-types';
 import type { Viewer as ViewerRole } from '@/shared/schemas/auth';
-import { useSession } from './api';
+import { useSession } from './queries/accounts';
 
 /** A role, or `reader` for a visitor without an account (shared/schemas/auth.ts). */
 export type Role = ViewerRole;

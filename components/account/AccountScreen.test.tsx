@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { UserDto } from '@/shared/api-types';
-import { forgetCsrfToken } from '../api';
+import { forgetCsrfToken } from '../http/client';
 import { jsonResponse, mockFetch, renderWithProviders } from '../testing/render';
 import { AccountScreen } from './AccountScreen';
 

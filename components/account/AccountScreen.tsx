@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { UserDto } from '@/shared/api-types';
 import { changePasswordSchema, updateAccountSchema } from '@/shared/schemas/auth';
-import { useChangePassword, useSession, useSignOut, useUpdateAccount } from '../api';
+import { useChangePassword, useSession, useSignOut, useUpdateAccount } from '../queries/accounts';
 import { Form, ProblemNotice } from '../auth/Form';
 import { newPasswordHint } from '../auth/passwordHint';
 import { problemOf, useForm } from '../auth/useForm';

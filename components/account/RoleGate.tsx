@@ -1,7 +1,7 @@
 import { usePathname } from 'expo-router';
 import type { ReactNode } from 'react';
 import type { Role } from '@/shared/schemas/auth';
-import { useSession } from '../api';
+import { useSession } from '../queries/accounts';
 import { sectionFor, type RoleSectionKey } from '../nav/sections';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';

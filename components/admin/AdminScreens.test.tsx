@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { AuditListResponse, OutboxResponse, UserDto, UserListResponse } from '@/shared/api-types';
-import { forgetCsrfToken } from '../api';
+import { forgetCsrfToken } from '../http/client';
 import { setPathname } from '../testing/expoRouter';
 import { jsonResponse, mockFetch, renderWithProviders } from '../testing/render';
 import { AuditScreen } from './AuditScreen';

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { AuditEventDto } from '@/shared/api-types';
 import { pageQuerySchema } from '@/shared/schemas/auth';
-import { useAuditLog } from '../api';
+import { useAuditLog } from '../queries/admin';
 import { colors, space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';

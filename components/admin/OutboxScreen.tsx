@@ -1,6 +1,7 @@
 import { Platform, StyleSheet, Text, View, type TextStyle } from 'react-native';
 import type { OutboxMessageDto } from '@/shared/api-types';
-import { ApiError, useOutbox } from '../api';
+import { ApiError } from '../http/client';
+import { useOutbox } from '../queries/admin';
 import { colors, radius, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { ErrorNotice } from '../ui/ErrorNotice';

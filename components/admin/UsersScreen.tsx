@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { UserDto } from '@/shared/api-types';
 import { fieldErrors, ROLES, userListQuerySchema, type Role } from '@/shared/schemas/auth';
-import { useSetRole, useUserList } from '../api';
+import { useSetRole, useUserList } from '../queries/admin';
 import { problemOf } from '../auth/useForm';
 import { colors, space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';

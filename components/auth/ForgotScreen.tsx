@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { emailOnlySchema } from '@/shared/schemas/auth';
-import { useForgotPassword } from '../api';
+import { useForgotPassword } from '../queries/accounts';
 import { space, type } from '../theme';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';

@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { emailOnlySchema } from '@/shared/schemas/auth';
-import { useResendVerification } from '../api';
+import { useResendVerification } from '../queries/accounts';
 import { space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { TextField } from '../ui/TextField';

@@ -1,5 +1,5 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
-import { forgetCsrfToken } from '../api';
+import { forgetCsrfToken } from '../http/client';
 import { jsonResponse, mockFetch, renderWithProviders } from '../testing/render';
 import { ResetScreen } from './ResetScreen';
 import { VerifyScreen } from './VerifyScreen';

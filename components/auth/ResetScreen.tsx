@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { resetSchema, tokenSchema } from '@/shared/schemas/auth';
-import { useResetPassword } from '../api';
+import { useResetPassword } from '../queries/accounts';
 import { space, type } from '../theme';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';

@@ -1,7 +1,7 @@
 import { router } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { signInSchema } from '@/shared/schemas/auth';
-import { useSignIn } from '../api';
+import { useSignIn } from '../queries/accounts';
 import { space, type } from '../theme';
 import { Screen } from '../ui/Screen';
 import { TextField } from '../ui/TextField';

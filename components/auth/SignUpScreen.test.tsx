@@ -1,7 +1,7 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { UserDto } from '@/shared/api-types';
 import { fieldErrors, signUpSchema } from '@/shared/schemas/auth';
-import { forgetCsrfToken } from '../api';
+import { forgetCsrfToken } from '../http/client';
 import { jsonResponse, mockFetch, renderWithProviders } from '../testing/render';
 import { SignUpScreen } from './SignUpScreen';
 

@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { signUpSchema } from '@/shared/schemas/auth';
-import { useSignUp } from '../api';
+import { useSignUp } from '../queries/accounts';
 import { space, type } from '../theme';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';

@@ -1,7 +1,8 @@
 import { useEffect, useRef } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { verifySchema } from '@/shared/schemas/auth';
-import { ApiError, useVerify } from '../api';
+import { ApiError } from '../http/client';
+import { useVerify } from '../queries/accounts';
 import { space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { Loading } from '../ui/Loading';

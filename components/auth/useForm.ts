@@ -2,7 +2,7 @@ import type { UseMutationResult } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { z } from 'zod';
 import { fieldErrors } from '@/shared/schemas/auth';
-import { ApiError, ApiUnreachableError } from '../api';
+import { ApiError, ApiUnreachableError } from '../http/client';
 
 /** What went wrong with a form as a whole (not with one of its fields), to show above its button. */
 export interface FormProblem {

@@ -2,7 +2,7 @@ import { Link } from 'expo-router';
 import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { checkList } from '@/shared/checks';
-import { useWorksheetList } from '../api';
+import { useWorksheetList } from '../queries/worksheets';
 import { colors, focusRing, space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';

@@ -3,7 +3,7 @@ import { CLAIM_TEXT_MAX, PARAGRAPH_VARIANT_LABEL } from '@/shared/claims/types';
 import { formatQuantity } from '@/shared/worksheet/quantity';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 import { colors } from '../theme';
-import type { ClaimCheckRequest } from './api';
+import type { ClaimCheckRequest } from '@/shared/api-types';
 import { ClaimCheckScreen, RERUN_DELAY_MS } from './ClaimCheckScreen';
 import { figure, figures, heatPumpFigures, heatPumpText, LBF, pitch, resultFor, savedDto, token } from './fixtures';
 

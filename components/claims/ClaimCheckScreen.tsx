@@ -9,7 +9,10 @@ import { router } from 'expo-router';
 import { useCallback, useEffect, useId, useMemo, useRef, useState } from 'react';
 import { StyleSheet, Text, TextInput, View, type NativeSyntheticEvent, type TextInputKeyPressEventData } from 'react-native';
 import { CLAIM_TEXT_MAX, type ParagraphVariant } from '@/shared/claims/types';
-import { ApiError, useSession } from '../api';
+import { ApiError } from '../http/client';
+import { useSession } from '../queries/accounts';
+import { CITATION_STYLE_LABEL, type CitationStyle, type ClaimCheckRequest, type ClaimCheckResult } from '@/shared/api-types';
+import { useRunClaimCheck, useSavedClaimCheck } from '../queries/claimChecks';
 import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { ErrorNotice } from '../ui/ErrorNotice';
@@ -19,14 +22,6 @@ import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { useDebounced } from '../ui/useDebounced';
 import { FieldError } from '../worksheet/QuantityField';
-import {
-  CLAIM_STYLE_LABEL,
-  useRunClaimCheck,
-  useSavedClaimCheck,
-  type ClaimCheckRequest,
-  type ClaimCheckResult,
-  type ClaimStyle,
-} from './api';
 import { FigureEditor, type FigureServerErrors } from './FigureEditor';
 import { allReadable, draftOf, draftsOf, figuresKey, toInputs, type FigureDraft } from './figures';
 import { CheckRuns, ClaimNotes, MatchList, NEEDS_TITLE, NeedsList, ParagraphPanel } from './ResultParts';
@@ -73,7 +68,7 @@ interface ClaimCheckScreenProps {
 
 export function ClaimCheckScreen({ from, resume = false }: ClaimCheckScreenProps) {
   const [text, setText] = useState('');
-  const [style, setStyle] = useState<ClaimStyle>('apa');
+  const [style, setStyle] = useState<CitationStyle>('apa');
   const [variant, setVariant] = useState<ParagraphVariant>('referee');
   const [drafts, setDrafts] = useState<FigureDraft[]>([]);
   const [shown, setShown] = useState<Shown | null>(null);
@@ -175,7 +170,7 @@ export function ClaimCheckScreen({ from, resume = false }: ClaimCheckScreenProps
   }, [settledKey, key, checking, edited, readable, shown, style, variant, drafts, send]);
 
   /** Another reference style: the check runs again (the figures as they stand). */
-  const onStyle = (next: ClaimStyle) => {
+  const onStyle = (next: CitationStyle) => {
     setStyle(next);
     if (!shown) return;
     const base = { text: shown.request.text, style: next, variant };
@@ -367,13 +362,13 @@ interface StatusArgs {
   shown: Shown | null;
   edited: boolean;
   readable: boolean;
-  style: ClaimStyle;
+  style: CitationStyle;
 }
 
 /** One line of what is happening, read out by assistive technology as it changes. */
 function status({ checking, rerunning, restyling, pendingRequest, shown, edited, readable, style }: StatusArgs): string {
   if (checking) return 'Checking the claim: finding the entries, reading the figures, running the checks…';
-  if (restyling) return `Setting the references in ${CLAIM_STYLE_LABEL[style]}…`;
+  if (restyling) return `Setting the references in ${CITATION_STYLE_LABEL[style]}…`;
   if (rerunning) {
     const n = pendingRequest?.figures?.length ?? shown?.result.figures.length ?? 0;
     return `Running the checks again with ${n} ${n === 1 ? 'figure' : 'figures'}; the result below is the previous one until the new one arrives…`;

@@ -14,7 +14,7 @@ import { Button } from '../ui/Button';
 import { inputBox } from '../ui/inputBox';
 import { dataAttributes } from '../worksheet/dataAttributes';
 import { FieldError } from '../worksheet/QuantityField';
-import type { Figure } from './api';
+import type { Figure } from '@/shared/api-types';
 import { EXAMPLE_FOR, FIGURE_KINDS, rangeDisplay, readDraftFully, ROLE_LABEL, ROLES_FOR, withKind, type FigureDraft } from './figures';
 import { FigureReadingNotes } from './ResultParts';
 

@@ -23,7 +23,7 @@ import { Notice } from '../ui/Notice';
 import { TextLink } from '../ui/TextLink';
 import { dataAttributes } from '../worksheet/dataAttributes';
 import { ResultList, ResultRow } from '../worksheet/ResultRow';
-import { CLAIM_STYLE_LABEL, CLAIM_STYLES, type ClaimCheckResult, type ClaimCheckRun, type ClaimMatch, type ClaimStyle, type Figure } from './api';
+import { CITATION_STYLE_LABEL, CITATION_STYLES, type CitationStyle, type ClaimCheckResult, type ClaimCheckRun, type ClaimMatch, type Figure } from '@/shared/api-types';
 import { entryVersionPath } from '@/shared/permalink';
 import { CopyButton } from './CopyButton';
 import { figureDisplay, HEDGE_WORDS, roleWords } from './figures';
@@ -261,8 +261,8 @@ interface ParagraphPanelProps {
   variant: ParagraphVariant;
   onVariant: (variant: ParagraphVariant) => void;
   /** The style chosen; with `onStyle`, choosing another runs the check again. */
-  style?: ClaimStyle;
-  onStyle?: (style: ClaimStyle) => void;
+  style?: CitationStyle;
+  onStyle?: (style: CitationStyle) => void;
   /** A re-run for another style is on its way. */
   restyling?: boolean;
 }
@@ -294,19 +294,19 @@ export function ParagraphPanel({ result, variant, onVariant, style, onStyle, res
           <ChoiceChips
             label="Reference style"
             testID="claim-style"
-            options={CLAIM_STYLES.map((value) => ({ value, label: CLAIM_STYLE_LABEL[value] }))}
+            options={CITATION_STYLES.map((value) => ({ value, label: CITATION_STYLE_LABEL[value] }))}
             value={style}
             onChange={onStyle}
           />
           {restyling ? (
             <Text testID="claim-style-pending" style={type.caption}>
-              Setting the references in {CLAIM_STYLE_LABEL[style]}; the paragraph below is in {CLAIM_STYLE_LABEL[paragraph.style]} until
+              Setting the references in {CITATION_STYLE_LABEL[style]}; the paragraph below is in {CITATION_STYLE_LABEL[paragraph.style]} until
               they arrive…
             </Text>
           ) : null}
         </>
       ) : (
-        <Text style={type.caption}>References in {CLAIM_STYLE_LABEL[paragraph.style]}.</Text>
+        <Text style={type.caption}>References in {CITATION_STYLE_LABEL[paragraph.style]}.</Text>
       )}
       <View
         testID="claim-paragraph"

@@ -7,7 +7,9 @@ import { useState } from 'react';
 import type { ParagraphVariant } from '@/shared/claims/types';
 import { StyleSheet, Text, View } from 'react-native';
 import { confirmChange } from '../admin/confirm';
-import { useSession } from '../api';
+import { useSession } from '../queries/accounts';
+import { CITATION_STYLE_LABEL } from '@/shared/api-types';
+import { useDeleteSavedClaimCheck, useSavedClaimCheck } from '../queries/claimChecks';
 import { formatDay } from '../entry/format';
 import { colors, radius, space, type } from '../theme';
 import { Button } from '../ui/Button';
@@ -16,7 +18,6 @@ import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
-import { CLAIM_STYLE_LABEL, useDeleteSavedClaimCheck, useSavedClaimCheck } from './api';
 import { ClaimCaution } from './ClaimCheckScreen';
 import { CheckRuns, ClaimNotes, FigureTable, MatchList, NEEDS_TITLE, NeedsList, ParagraphPanel } from './ResultParts';
 import { isNotFound, SignInToSave } from './Saving';
@@ -75,7 +76,7 @@ export function SavedClaimCheckScreen({ token }: { token: string }) {
     <Screen
       testID="screen-claim-saved"
       title="Saved claim check"
-      lead={`Saved ${formatDay(saved.createdAt)}. The result as it was computed then, with the paragraph in ${CLAIM_STYLE_LABEL[saved.style]}.`}
+      lead={`Saved ${formatDay(saved.createdAt)}. The result as it was computed then, with the paragraph in ${CITATION_STYLE_LABEL[saved.style]}.`}
     >
       <ClaimCaution />
       <View style={styles.actions}>

@@ -5,14 +5,15 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { confirmChange } from '../admin/confirm';
-import { ApiError } from '../api';
+import { ApiError } from '../http/client';
+import { useDeleteSavedClaimCheck, useMySavedClaimChecks, useSaveClaimCheck } from '../queries/claimChecks';
+import type { ClaimCheckRequest } from '@/shared/api-types';
 import { formatDay } from '../entry/format';
 import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
 import { TextLink } from '../ui/TextLink';
-import { useDeleteSavedClaimCheck, useMySavedClaimChecks, useSaveClaimCheck, type ClaimCheckRequest } from './api';
 import { CopyButton } from './CopyButton';
 
 /** Signed out: where saving would be. */

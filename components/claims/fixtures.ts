@@ -14,7 +14,7 @@ import {
   type ParagraphVariant,
 } from '@/shared/claims/types';
 import { formatQuantity } from '@/shared/worksheet/quantity';
-import type { ClaimCheckResult, ClaimMatch, Figure, SavedClaimCheckDto } from './api';
+import type { ClaimCheckResult, ClaimMatch, Figure, SavedClaimCheckDto } from '@/shared/api-types';
 
 // Invented test data: no real device, company or person.
 export const pitch =

@@ -6,7 +6,7 @@
  */
 import { Platform } from 'react-native';
 import { PARAGRAPH_VARIANTS, type ParagraphVariant } from '@/shared/claims/types';
-import { CLAIM_STYLES, type ClaimCheckRequest, type ClaimCheckResult, type ClaimStyle } from './api';
+import { CITATION_STYLES, type CitationStyle, type ClaimCheckRequest, type ClaimCheckResult } from '@/shared/api-types';
 import type { FigureDraft } from './figures';
 
 const KEY = 'counterweight.claim-check.resume';
@@ -15,7 +15,7 @@ const VERSION = 1;
 export interface ResumeState {
   /** The text in the box (may differ from the text the result is for). */
   text: string;
-  style: ClaimStyle;
+  style: CitationStyle;
   variant: ParagraphVariant;
   drafts: FigureDraft[];
   /** The request that produced the result: what a save stores. */
@@ -82,13 +82,13 @@ export function readKept(): ResumeState | null {
     const v: unknown = JSON.parse(raw);
     if (!isObject(v) || v.v !== VERSION) return null;
     const { text, style, variant, drafts, request, result } = v;
-    if (typeof text !== 'string' || !CLAIM_STYLES.includes(style as ClaimStyle)) return null;
+    if (typeof text !== 'string' || !CITATION_STYLES.includes(style as CitationStyle)) return null;
     if (!PARAGRAPH_VARIANTS.includes(variant as ParagraphVariant) || !Array.isArray(drafts)) return null;
     if (!isObject(request) || typeof request.text !== 'string') return null;
     if (result !== null && !(isObject(result) && Array.isArray(result.figures) && isObject(result.paragraph))) return null;
     return {
       text,
-      style: style as ClaimStyle,
+      style: style as CitationStyle,
       variant: variant as ParagraphVariant,
       drafts: drafts as FigureDraft[],
       request: request as unknown as ClaimCheckRequest,

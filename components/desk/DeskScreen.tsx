@@ -2,7 +2,8 @@ import { router } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { RoleGate } from '../account/RoleGate';
 import { formatWhen } from '../admin/format';
-import { useDesk, type DraftSummary, type PublishedSummaryDto } from '../api';
+import { useDesk } from '../queries/drafts';
+import type { DraftSummaryDto, PublishedSummaryDto } from '@/shared/api-types';
 import { formatDay } from '../entry/format';
 import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
@@ -64,7 +65,7 @@ function DeskLists() {
 
 const stateWords = { draft: 'Being written', in_review: 'Waiting for review' } as const;
 
-function DraftList({ testID, drafts, empty }: { testID: string; drafts: DraftSummary[]; empty: string }) {
+function DraftList({ testID, drafts, empty }: { testID: string; drafts: DraftSummaryDto[]; empty: string }) {
   if (drafts.length === 0) {
     return (
       <View testID={testID}>

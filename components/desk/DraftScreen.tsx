@@ -1,7 +1,9 @@
 import { Text } from 'react-native';
 import { RoleGate } from '../account/RoleGate';
 import { formatWhen } from '../admin/format';
-import { ApiError, useDraft, type DraftDto } from '../api';
+import { ApiError } from '../http/client';
+import { useDraft } from '../queries/drafts';
+import type { DraftDto } from '@/shared/api-types';
 import { type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';

@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { SessionResponse } from '@/shared/api-types';
-import type { DraftDto } from '../api';
+import type { DraftDto } from '@/shared/api-types';
 import { version1 } from '../entry/fixtures';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 import { DeskScreen } from './DeskScreen';

@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { EntryContent } from '@/shared/entries/schema';
 import { renderMarkdown } from '@/shared/markdown';
-import type { EntryHtml } from '../api';
+import type { EntryHtml } from '@/shared/api-types';
 import { EntryBody } from '../entry/EntryBody';
 import { colors, radius, space, type } from '../theme';
 

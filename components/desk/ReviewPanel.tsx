@@ -1,7 +1,8 @@
 import { router } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { useDraftAction, type DraftDto } from '../api';
+import { useDraftAction } from '../queries/drafts';
+import type { DraftDto } from '@/shared/api-types';
 import { ProblemNotice } from '../auth/Form';
 import { problemOf } from '../auth/useForm';
 import { space, type } from '../theme';

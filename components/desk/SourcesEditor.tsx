@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { Citation } from '@/shared/entries/schema';
-import { useParseCitations } from '../api';
+import { useParseCitations } from '../queries/drafts';
 import { ProblemNotice } from '../auth/Form';
 import { problemOf } from '../auth/useForm';
 import { citationLine } from '../entry/sections';

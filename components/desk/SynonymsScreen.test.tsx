@@ -1,7 +1,7 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import type { UserDto } from '@/shared/api-types';
 import type { SynonymGroupDto } from '@/shared/synonyms';
-import { forgetCsrfToken } from '../api';
+import { forgetCsrfToken } from '../http/client';
 import { setPathname } from '../testing/expoRouter';
 import { jsonResponse, mockFetch, renderWithProviders } from '../testing/render';
 import { SynonymsScreen } from './SynonymsScreen';

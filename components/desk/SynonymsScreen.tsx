@@ -3,13 +3,14 @@
  * one another ("resonator", "cavity", "frustum"). Editors add, change and remove groups; a change
  * reaches the matcher at once. Contract: shared/synonyms.ts, `/api/synonyms`.
  */
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import type { SynonymGroupDto, SynonymGroupResponse, SynonymListResponse } from '@/shared/synonyms';
+import type { SynonymGroupDto } from '@/shared/api-types';
 import { RoleGate } from '../account/RoleGate';
 import { confirmChange } from '../admin/confirm';
-import { ApiError, apiGet, apiSend } from '../api';
+import { ApiError } from '../http/client';
+import { serverFieldErrors } from '../http/fieldErrors';
+import { useRemoveSynonymGroup, useSaveSynonymGroup, useSynonymGroups } from '../queries/synonyms';
 import { ProblemNotice } from '../auth/Form';
 import { problemOf } from '../auth/useForm';
 import { Field } from '../submissions/Field';
@@ -21,7 +22,6 @@ import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
 
-const KEY = ['synonyms'] as const;
 
 /** One word or phrase a line; blank lines dropped. */
 export const termsOf = (text: string) =>
@@ -35,7 +35,7 @@ export const termsOf = (text: string) =>
  * the message for the terms box, the one for the note, and whether any was placed.
  */
 export function formErrors(error: unknown, terms: string[]): { terms?: string; note?: string; placed: boolean } {
-  const fields = error instanceof ApiError ? (error.fields ?? {}) : {};
+  const fields = serverFieldErrors(error);
   const lines: string[] = [];
   let note: string | undefined;
   for (const [key, message] of Object.entries(fields)) {
@@ -69,7 +69,7 @@ export function SynonymsScreen() {
 }
 
 function GroupList() {
-  const { data, error, isPending, refetch } = useQuery({ queryKey: KEY, queryFn: ({ signal }) => apiGet<SynonymListResponse>('/api/synonyms', { signal }) });
+  const { data, error, isPending, refetch } = useSynonymGroups();
   if (isPending) return <Loading testID="synonyms-loading" label="Loading the synonym groups…" />;
   if (error) return <ErrorNotice testID="synonyms-error" error={error} what="the synonym groups" onRetry={() => void refetch()} />;
   if (!data.groups.length) {
@@ -89,12 +89,8 @@ function GroupList() {
 }
 
 function GroupRow({ group }: { group: SynonymGroupDto }) {
-  const client = useQueryClient();
   const [editing, setEditing] = useState(false);
-  const remove = useMutation({
-    mutationFn: () => apiSend('DELETE', `/api/synonyms/${group.id}`),
-    onSuccess: () => client.invalidateQueries({ queryKey: KEY }),
-  });
+  const remove = useRemoveSynonymGroup(group.id);
   if (editing) {
     return (
       <View role="listitem" testID={`synonyms-group-${group.id}`} style={styles.row}>
@@ -133,19 +129,13 @@ function GroupRow({ group }: { group: SynonymGroupDto }) {
 
 /** The form for a new group, or for changing `group`. */
 function GroupForm({ testID, group, onDone }: { testID: string; group?: SynonymGroupDto; onDone?: () => void }) {
-  const client = useQueryClient();
   const [text, setText] = useState(group ? group.terms.join('\n') : '');
   const [note, setNote] = useState(group?.note ?? '');
   const [version, setVersion] = useState(group?.version ?? 1);
   const [saved, setSaved] = useState(false);
   const terms = termsOf(text);
-  const save = useMutation({
-    mutationFn: () =>
-      group
-        ? apiSend<SynonymGroupResponse>('PUT', `/api/synonyms/${group.id}`, { terms, note: note.trim() || null, version })
-        : apiSend<SynonymGroupResponse>('POST', '/api/synonyms', { terms, note: note.trim() || null }),
-    onSuccess: async () => {
-      await client.invalidateQueries({ queryKey: KEY });
+  const save = useSaveSynonymGroup(group?.id, {
+    onSaved: () => {
       if (group) onDone?.();
       else {
         setText('');
@@ -199,7 +189,7 @@ function GroupForm({ testID, group, onDone }: { testID: string; group?: SynonymG
           busyLabel="Saving…"
           busy={save.isPending}
           disabled={terms.length < 2}
-          onPress={() => save.mutate()}
+          onPress={() => save.mutate({ terms, note: note.trim() || null, ...(group ? { version } : {}) })}
         />
         {group ? <Button testID={`${testID}-cancel`} variant="quiet" label="Cancel" onPress={() => onDone?.()} /> : null}
       </View>

@@ -1,7 +1,8 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { EntryContent } from '@/shared/entries/schema';
-import { createDraft, draftOfConflict, queryKeys, saveDraft, type DraftDto } from '../api';
+import { createDraft, deskKeys, draftOfConflict, saveDraft } from '../queries/drafts';
+import type { DraftDto } from '@/shared/api-types';
 import { problemOf, type FormProblem } from '../auth/useForm';
 
 /** Where the draft stands against the server. */
@@ -46,8 +47,8 @@ export function useAutosave({ draft, slug, content, delayMs = 800 }: AutosaveOpt
           ? await saveDraft(base.id, next, base.lockVersion)
           : await createDraft(slug, next);
         setSaved({ id: answer.id, lockVersion: answer.lockVersion, content: next });
-        client.setQueryData(queryKeys.draft(answer.id), { draft: { ...answer, content: next } });
-        void client.invalidateQueries({ queryKey: queryKeys.desk, exact: true });
+        client.setQueryData(deskKeys.draft(answer.id), { draft: { ...answer, content: next } });
+        void client.invalidateQueries({ queryKey: deskKeys.all, exact: true });
         setState({ kind: 'saved', at: new Date() });
       } catch (error) {
         const theirs = draftOfConflict(error);

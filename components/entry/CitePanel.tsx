@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { ChoiceChips } from '../admin/ChoiceChips';
-import { CITE_FORMATS, useCite, type CiteFormat } from '../api';
+import { CITE_FORMATS, type CiteFormat } from '@/shared/api-types';
+import { useCite } from '../queries/entries';
 import { colors, radius, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { ErrorNotice } from '../ui/ErrorNotice';

@@ -1,6 +1,6 @@
 import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import type { EntryContent } from '@/shared/entries/schema';
-import type { EntryHtml } from '../api';
+import type { EntryHtml } from '@/shared/api-types';
 import { Markdown } from '../markdown/Markdown';
 import { colors, layout, space, type } from '../theme';
 import { Notice } from '../ui/Notice';

@@ -1,7 +1,8 @@
 import { entryVersionPath } from '@/shared/permalink';
 import { StyleSheet, Text, View } from 'react-native';
 import type { EntryContent } from '@/shared/entries/schema';
-import { useTaxonomy, type EntryVersionDto } from '../api';
+import { useTaxonomy } from '../queries/taxonomy';
+import type { EntryVersionDto } from '@/shared/api-types';
 import { colors, radius, space, type } from '../theme';
 import { TextLink } from '../ui/TextLink';
 import { formatDay } from './format';

@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { SessionResponse } from '@/shared/api-types';
-import type { CiteFormat } from '../api';
+import type { CiteFormat } from '@/shared/api-types';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 import { DiffView } from './DiffView';
 import { EntryScreen } from './EntryScreen';

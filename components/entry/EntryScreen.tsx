@@ -1,5 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
-import { ApiError, useEntry, type EntryResponse } from '../api';
+import { ApiError } from '../http/client';
+import { useEntry } from '../queries/entries';
+import type { EntryResponse } from '@/shared/api-types';
 import { space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';

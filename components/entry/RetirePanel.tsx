@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { ApiError, useRetireEntry } from '../api';
+import { ApiError } from '../http/client';
+import { useRetireEntry } from '../queries/entries';
 import { ProblemNotice } from '../auth/Form';
 import { problemOf } from '../auth/useForm';
 import { Field } from '../submissions/Field';

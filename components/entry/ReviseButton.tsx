@@ -2,7 +2,7 @@ import { router } from 'expo-router';
 import { View } from 'react-native';
 import { problemOf } from '../auth/useForm';
 import { ProblemNotice } from '../auth/Form';
-import { openDraftOf, useReviseEntry } from '../api';
+import { openDraftOf, useReviseEntry } from '../queries/drafts';
 import { Button } from '../ui/Button';
 import { useViewer } from '../viewer';
 

@@ -2,7 +2,7 @@ import { entryVersionPath } from '@/shared/permalink';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { ChoiceChips } from '../admin/ChoiceChips';
-import { useEntry, useEntryVersions } from '../api';
+import { useEntry, useEntryVersions } from '../queries/entries';
 import { colors, space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';

@@ -1,7 +1,7 @@
 /** An invented entry for component tests: two versions of one objection, with a worksheet. */
 import { renderMarkdown } from '@/shared/markdown';
 import { entryContentSchema, type EntryContent } from '@/shared/entries/schema';
-import type { EntryResponse, EntryVersionDto } from '../api';
+import type { EntryResponse, EntryVersionDto } from '@/shared/api-types';
 
 export const version1: EntryContent = entryContentSchema.parse({
   title: 'Thrust from light kept in a box',

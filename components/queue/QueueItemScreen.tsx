@@ -9,8 +9,13 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { UserDto } from '@/shared/api-types';
 import { slugSchema } from '@/shared/entries/schema';
 import { RoleGate } from '../account/RoleGate';
-import { ApiError, useSearch, useSession, useTaxonomy } from '../api';
-import { useSubmission, type Decision, type SubmissionDto } from '../submissions/api';
+import { ApiError } from '../http/client';
+import { useSearch } from '../queries/search';
+import { useSession } from '../queries/accounts';
+import { useTaxonomy } from '../queries/taxonomy';
+import { useSubmission } from '../queries/submissions';
+import type { DecideBody, Decision, SubmissionDto } from '@/shared/api-types';
+import { useClaim, useDecide, useEditors, useRelease } from '../queries/queue';
 import { Field } from '../submissions/Field';
 import { DecisionPart, History, StatusMark, SubmissionBody } from '../submissions/SubmissionDetails';
 import { problemWords, QUEUE_STATUS_WORDS } from '../submissions/words';
@@ -24,7 +29,6 @@ import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
 import { useDebounced } from '../ui/useDebounced';
 import { FieldError } from '../worksheet/QuantityField';
-import { useClaim, useDecide, useEditors, useRelease, type DecideBody } from './api';
 
 export function QueueItemScreen({ id }: { id: number }) {
   const { data } = useSession();

@@ -8,7 +8,8 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { UserDto } from '@/shared/api-types';
 import type { SubmissionKind } from '@/shared/submissions/types';
 import { RoleGate } from '../account/RoleGate';
-import { useSession } from '../api';
+import { useSession } from '../queries/accounts';
+import { type QueueFilters, useQueue } from '../queries/queue';
 import { ageWords, KIND_WORDS, QUEUE_STATUS_WORDS } from '../submissions/words';
 import { colors, space, type } from '../theme';
 import { Chip, chipGroupStyle } from '../ui/Chip';
@@ -17,7 +18,6 @@ import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
-import { useQueue, type QueueFilters } from './api';
 
 export function QueueScreen() {
   return (

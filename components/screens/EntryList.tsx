@@ -2,7 +2,8 @@ import { useMemo } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { renderMarkdown } from '@/shared/markdown';
 import type { TaxonomyResponse } from '@/shared/api-types';
-import { useEntryList, type EntrySummary } from '../api';
+import { useEntryList } from '../queries/entries';
+import type { EntrySummaryDto } from '@/shared/api-types';
 import { formatDay } from '../entry/format';
 import { Markdown } from '../markdown/Markdown';
 import { FilterChips, type LawClassFilters } from '../search/FilterChips';
@@ -70,7 +71,7 @@ export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore }:
   );
 }
 
-function EntryRow({ entry, lawName, className }: { entry: EntrySummary; lawName: (s: string) => string; className: (s: string | null) => string }) {
+function EntryRow({ entry, lawName, className }: { entry: EntrySummaryDto; lawName: (s: string) => string; className: (s: string | null) => string }) {
   const brief = useMemo(() => renderMarkdown(entry.inBrief), [entry.inBrief]);
   return (
     <View role="listitem" testID={`entry-${entry.slug}`} style={styles.row}>

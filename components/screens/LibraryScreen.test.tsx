@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { TaxonomyResponse } from '@/shared/api-types';
-import type { SearchResponse } from '../api';
+import type { SearchResponse } from '@/shared/api-types';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 import { LibraryScreen } from './LibraryScreen';
 

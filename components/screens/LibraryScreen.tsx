@@ -11,7 +11,8 @@ import {
   type TextInputKeyPressEventData,
 } from 'react-native';
 import type { ConservationLawDto, MechanismClassDto } from '@/shared/api-types';
-import { useSearch, useTaxonomy } from '../api';
+import { useSearch } from '../queries/search';
+import { useTaxonomy } from '../queries/taxonomy';
 import { SearchResults } from '../search/SearchResults';
 import { useDebounced } from '../ui/useDebounced';
 import { colors, focusRing, layout, radius, space, type } from '../theme';

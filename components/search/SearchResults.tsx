@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { TaxonomyResponse } from '@/shared/api-types';
-import type { SearchResponse, SearchResult } from '../api';
+import type { SearchResponse, SearchResult } from '@/shared/api-types';
 import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { ErrorNotice } from '../ui/ErrorNotice';

@@ -11,7 +11,7 @@ import { formatWhen } from '../admin/format';
 import { colors, focusRing, radius, space, type } from '../theme';
 import { Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
-import type { AttachmentDto, SubmissionDto } from './api';
+import type { AttachmentDto, SubmissionDto } from '@/shared/api-types';
 import { mediaTypeWords as fileTypeWords } from './sighting';
 import { bytesWords, eventWords, KIND_WORDS, SECTION_LABEL } from './words';
 

@@ -9,7 +9,8 @@ import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { TextLink } from '../ui/TextLink';
-import { useDeskCorrections, useMySubmissions, type SubmissionSummaryDto } from './api';
+import { useDeskCorrections, useMySubmissions } from '../queries/submissions';
+import type { SubmissionSummaryDto } from '@/shared/api-types';
 import { KIND_WORDS, STATUS_WORDS } from './words';
 
 export function MySubmissions({ userId }: { userId: number }) {

@@ -5,7 +5,10 @@
  */
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { ApiError, useSession } from '../api';
+import { ApiError } from '../http/client';
+import { useSession } from '../queries/accounts';
+import { useAnswerSubmission, useSubmission } from '../queries/submissions';
+import type { SubmissionDto } from '@/shared/api-types';
 import { space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { ErrorNotice } from '../ui/ErrorNotice';
@@ -13,7 +16,6 @@ import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
-import { useAnswerSubmission, useSubmission, type SubmissionDto } from './api';
 import { Field } from './Field';
 import { DecisionPart, History, StatusMark, SubmissionBody } from './SubmissionDetails';
 import { problemWords, STATUS_WORDS } from './words';

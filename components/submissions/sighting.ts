@@ -6,7 +6,7 @@
 import { readQuantityOf, type FigureReading } from '@/shared/claims/figures';
 import type { FigureKind } from '@/shared/claims/types';
 import { ATTACHMENT_MAX_BYTES, ATTACHMENT_TYPES, ATTACHMENTS_MAX } from '@/shared/submissions/types';
-import type { PickedFile } from './api';
+import type { PickedFile } from '../queries/submissions';
 import { bytesWords } from './words';
 
 export interface FigureRow {

@@ -4,7 +4,7 @@
  */
 import { CORRECTION_SECTION_LABEL } from '@/shared/api/constants';
 import type { SubmissionKind, SubmissionStatus } from '@/shared/submissions/types';
-import { ApiError, ApiUnreachableError } from '../api';
+import { ApiError, ApiUnreachableError } from '../http/client';
 
 export const STATUS_WORDS: Record<SubmissionStatus, string> = {
   open: 'Waiting for a moderator',

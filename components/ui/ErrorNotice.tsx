@@ -1,5 +1,5 @@
 import { StyleSheet, Text } from 'react-native';
-import { ApiError, ApiUnreachableError } from '../api';
+import { ApiError, ApiUnreachableError } from '../http/client';
 import { colors, type } from '../theme';
 import { Button } from './Button';
 import { Notice } from './Notice';

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, Text } from 'react-native';
-import { ApiError, useWorksheet } from '../api';
+import { ApiError } from '../http/client';
+import { useWorksheet } from '../queries/worksheets';
 import { type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';

@@ -1,5 +1,5 @@
-import { ApiError, ApiUnreachableError, apiGet, apiSend, forgetCsrfToken } from './api';
-import { jsonResponse, mockFetch } from './testing/render';
+import { ApiError, apiGet, apiSend, ApiUnreachableError, forgetCsrfToken } from './client';
+import { jsonResponse, mockFetch } from '../testing/render';
 
 describe('apiGet', () => {
   it('returns the JSON body of a 2xx answer', async () => {

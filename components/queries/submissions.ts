@@ -1,59 +1,41 @@
 /**
- * The submitters' requests of issue 7 (contract: shared/submissions/types.ts, /api/sightings,
- * /api/corrections, /api/submissions/*): sending a sighting (multipart, with attachments) or a
- * correction, reading one's own submissions, answering a moderator's question; and the public
- * "seen in the wild" list of an entry. JSON goes through the app's one client (components/api.ts);
- * the multipart sighting needs a FormData body, sent by `sendForm` below with the same CSRF header
- * and the same two kinds of error.
+ * The submitters' requests (contract: shared/api/submissions.ts; /api/sightings, /api/corrections,
+ * /api/submissions/*): sending a sighting (multipart, with attachments) or a correction, reading
+ * one's own submissions, answering a moderator's question; the public "seen in the wild" list of an
+ * entry; and the editors' accepted corrections on the Desk.
  */
 import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type {
-  CorrectionSection,
-  EntrySightingDto,
+  CorrectionBody,
+  EntrySightingsResponse,
   SubmissionDto,
-  SubmissionSummaryDto,
-} from '@/shared/submissions/types';
-import { apiGet, apiSend } from '../api';
-
-export type {
-  AttachmentDto,
-  ClaimedFigureDto,
-  CorrectionSection,
-  Decision,
-  EntrySightingDto,
-  PersonRef,
-  SubmissionDto,
-  SubmissionEventDto,
-  SubmissionKind,
-  SubmissionStatus,
-  SubmissionSummaryDto,
-} from '@/shared/submissions/types';
+  SubmissionListResponse,
+  SubmissionResponse,
+} from '@/shared/api-types';
+import { apiGet, apiSend } from '../http/client';
+import { USER_SCOPE, userKey } from './client';
+import { staleTimes } from './staleTimes';
 
 export const submissionKeys = {
-  /** Everything about submissions, the queue's lists included: dropped together after a change. */
-  all: ['submissions'] as const,
-  /** Keyed by who is signed in, so that another account never sees the last one's list. */
-  mine: (userId: number) => ['submissions', 'mine', userId] as const,
-  one: (id: number) => ['submissions', 'one', id] as const,
-  queue: (userId: number) => ['submissions', 'queue', userId] as const,
-  deskCorrections: ['submissions', 'desk-corrections'] as const,
-  entrySightings: (slug: string) => ['submissions', 'entry-sightings', slug] as const,
+  /** Everything about submissions that the signed-in account sees, the queue's lists included: dropped together after a change. */
+  all: userKey('submissions'),
+  /** Keyed by who is signed in too, so that another account never sees the last one's list. */
+  mine: (userId: number) => userKey('submissions', 'mine', userId),
+  one: (id: number) => userKey('submissions', 'one', id),
+  queue: (userId: number) => userKey('submissions', 'queue', userId),
+  editors: (isAdmin: boolean) => userKey('submissions', 'editors', isAdmin),
+  deskCorrections: userKey('submissions', 'desk-corrections'),
+  /** Public: the accepted sightings of an entry. */
+  entrySightings: (slug: string) => ['entry-sightings', slug] as const,
 };
-
-export interface SubmissionResponse {
-  submission: SubmissionDto;
-}
 
 /** Puts a changed submission in the cache and has every list that may show it fetched again. */
 export async function submissionChanged(client: QueryClient, submission: SubmissionDto) {
   client.setQueryData<SubmissionResponse>(submissionKeys.one(submission.id), { submission });
-  await client.invalidateQueries({ queryKey: submissionKeys.all, predicate: (q) => q.queryKey[1] !== 'one' });
-}
-
-
-/** POSTs a FormData body (files and fields) with the session's CSRF token, like every other write. */
-export function sendForm<T>(path: string, form: FormData): Promise<T> {
-  return apiSend<T>('POST', path, form);
+  await Promise.all([
+    client.invalidateQueries({ queryKey: submissionKeys.all, predicate: (q) => q.queryKey[0] === USER_SCOPE && q.queryKey[2] !== 'one' }),
+    client.invalidateQueries({ queryKey: ['entry-sightings'] }),
+  ]);
 }
 
 /** A picked file as the sighting form holds it: on the web a File, on a phone a URI. */
@@ -91,29 +73,20 @@ export function sightingForm(input: SightingInput): FormData {
   return form;
 }
 
-/** `POST /api/sightings` (signed in, e-mail confirmed): multipart, up to 5 files of 10 MB. */
+/** `POST /api/sightings` (signed in, e-mail confirmed): multipart (the client sends a FormData body as it is), up to 5 files of 10 MB. */
 export function useSubmitSighting() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: SightingInput) => sendForm<SubmissionResponse>('/api/sightings', sightingForm(input)),
+    mutationFn: (input: SightingInput) => apiSend<SubmissionResponse>('POST', '/api/sightings', sightingForm(input)),
     onSuccess: ({ submission }) => submissionChanged(client, submission),
   });
-}
-
-export interface CorrectionInput {
-  entry: string;
-  version: number;
-  section: CorrectionSection;
-  whatIsWrong: string;
-  suggestedFix: string;
-  sources?: string;
 }
 
 /** `POST /api/corrections` (signed in): a reported error against one entry version. */
 export function useSubmitCorrection() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (body: CorrectionInput) => apiSend<SubmissionResponse>('POST', '/api/corrections', body),
+    mutationFn: (body: CorrectionBody) => apiSend<SubmissionResponse>('POST', '/api/corrections', body),
     onSuccess: ({ submission }) => submissionChanged(client, submission),
   });
 }
@@ -122,7 +95,7 @@ export function useSubmitCorrection() {
 export function useMySubmissions(userId: number) {
   return useQuery({
     queryKey: submissionKeys.mine(userId),
-    queryFn: ({ signal }) => apiGet<{ items: SubmissionSummaryDto[] }>('/api/submissions/mine', { signal }),
+    queryFn: ({ signal }) => apiGet<SubmissionListResponse>('/api/submissions/mine', { signal }),
   });
 }
 
@@ -147,9 +120,8 @@ export function useAnswerSubmission(id: number) {
 export function useEntrySightings(slug: string) {
   return useQuery({
     queryKey: submissionKeys.entrySightings(slug),
-    queryFn: ({ signal }) =>
-      apiGet<{ sightings: EntrySightingDto[] }>(`/api/entries/${encodeURIComponent(slug)}/sightings`, { signal }),
-    staleTime: 60 * 1000,
+    queryFn: ({ signal }) => apiGet<EntrySightingsResponse>(`/api/entries/${encodeURIComponent(slug)}/sightings`, { signal }),
+    staleTime: staleTimes.entrySightings,
   });
 }
 
@@ -157,6 +129,6 @@ export function useEntrySightings(slug: string) {
 export function useDeskCorrections() {
   return useQuery({
     queryKey: submissionKeys.deskCorrections,
-    queryFn: ({ signal }) => apiGet<{ items: SubmissionSummaryDto[] }>('/api/desk/corrections', { signal }),
+    queryFn: ({ signal }) => apiGet<SubmissionListResponse>('/api/desk/corrections', { signal }),
   });
 }

@@ -1,20 +1,14 @@
 /**
- * The moderators' requests of issue 7 (contract: shared/submissions/types.ts): the queue, claiming
- * and releasing an item, deciding it, and the editors a new draft may be given to.
+ * The moderators' requests (contract: shared/api/submissions.ts): the queue, claiming and
+ * releasing an item, deciding it, and the editors a new draft may be given to.
  */
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { UserListResponse } from '@/shared/api-types';
-import type { QueueResponse, SubmissionKind } from '@/shared/submissions/types';
-import { ApiError, apiGet, apiSend } from '../api';
-import { submissionChanged, submissionKeys, type PersonRef, type SubmissionResponse } from '../submissions/api';
+import type { DecideBody, EditorsResponse, PersonRef, QueueQuery, QueueResponse, SubmissionResponse, UserListResponse } from '@/shared/api-types';
+import { ApiError, apiGet, apiSend } from '../http/client';
+import { staleTimes } from './staleTimes';
+import { submissionChanged, submissionKeys } from './submissions';
 
-export type { QueueResponse };
-
-export interface QueueFilters {
-  kind?: SubmissionKind;
-  status?: 'open' | 'claimed' | 'waiting';
-  mine?: boolean;
-}
+export type QueueFilters = QueueQuery;
 
 export function queuePath({ kind, status, mine }: QueueFilters): string {
   const params = new URLSearchParams();
@@ -51,12 +45,6 @@ export const useClaim = (id: number) => useItemAction<void>(id, () => ({ action:
 /** `POST /api/submissions/:id/release`: put it back in the queue. */
 export const useRelease = (id: number) => useItemAction<void>(id, () => ({ action: 'release' }));
 
-export type DecideBody =
-  | { decision: 'accept'; entries?: string[] }
-  | { decision: 'draft'; slug: string; mechanismClass: string; editorId: number }
-  | { decision: 'ask'; note: string }
-  | { decision: 'reject'; note: string };
-
 /** `POST /api/submissions/:id/decide` (the holder of the claim). */
 export const useDecide = (id: number) => useItemAction<DecideBody>(id, (body) => ({ action: 'decide', body }));
 
@@ -71,12 +59,12 @@ export interface EditorsAnswer {
  */
 export function useEditors(isAdmin: boolean, enabled: boolean) {
   return useQuery({
-    queryKey: ['submissions', 'editors', isAdmin],
+    queryKey: submissionKeys.editors(isAdmin),
     enabled,
-    staleTime: 5 * 60 * 1000,
+    staleTime: staleTimes.editors,
     queryFn: async ({ signal }): Promise<EditorsAnswer> => {
       try {
-        const answer = await apiGet<PersonRef[] | { editors: PersonRef[] }>('/api/queue/editors', { signal });
+        const answer = await apiGet<PersonRef[] | EditorsResponse>('/api/queue/editors', { signal });
         return { editors: Array.isArray(answer) ? answer : answer.editors };
       } catch (error) {
         if (!(error instanceof ApiError && (error.status === 404 || error.status === 403))) throw error;
