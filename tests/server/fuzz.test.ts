@@ -16,7 +16,9 @@ import vm from 'node:vm';
 import fc from 'fast-check';
 import type { Express } from 'express';
 import request from 'supertest';
+import type { AppLocals } from '../../server/app';
 import { demo, startTestApp, type Client, type TestApp } from '../support/app';
+import { until } from '../support/poll';
 
 jest.setTimeout(180_000);
 
@@ -253,7 +255,8 @@ describe('fuzzing every route as every role', () => {
     for (const l of others) realProcess.off('unhandledRejection', l);
     try {
       void Promise.reject(new Error('a rejection left unhandled on purpose'));
-      await new Promise((resolve) => setTimeout(resolve, 20));
+      // Wait for the report itself, not for a fixed time.
+      await until('the rejection is reported', async () => rejections.length > 0);
     } finally {
       for (const l of others) realProcess.on('unhandledRejection', l);
     }
@@ -350,7 +353,11 @@ describe('fuzzing every route as every role', () => {
   });
 
   it('still answers /api/health with 200, and no rejection went unhandled after the last answer', async () => {
-    await new Promise((resolve) => setTimeout(resolve, 200));
+    // No fixed wait: let the app's work after its answers finish (mail and other jobs run after the
+    // answer), then one turn of the event loop, after which Node has reported every rejection left
+    // unhandled so far (it reports them once the microtask queue is empty, before the next turn).
+    await (h.app.locals as unknown as AppLocals).settle();
+    await new Promise((resolve) => setImmediate(resolve));
     expect(rejections).toEqual([]);
     const res = await request(h.app).get('/api/health');
     expect(res.status).toBe(200);
