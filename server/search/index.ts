@@ -14,59 +14,16 @@
  *    term for each group phrase found in it. A change of the groups rebuilds the index.
  * Builds and updates run one at a time, so that a slow rebuild cannot overwrite a newer update.
  */
-import MiniSearch, { type SearchOptions, type SearchResult } from 'minisearch';
-import { col, fn } from 'sequelize';
+import MiniSearch, { type SearchResult } from 'minisearch';
 import type { Logger } from 'pino';
-import { ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass, Submission, SubmissionEntry, SynonymGroup, SynonymPhrase } from '../models';
-import { fold, normaliseTerm, plainText } from './normalise';
+import { findEntryId, loadEntries, loadSynonyms, readWatermark, type LoadedEntry } from './load';
+import { normaliseTerm } from './normalise';
 import { isConceptTerm, SynonymSet } from './synonyms';
+import type { IndexedEntry, SearchDoc, SearchHit, TermsHit, TermsSearchOptions } from './types';
 
-export interface SearchDoc {
-  id: number;
-  slug: string;
-  title: string;
-  aliases: string;
-  inBrief: string;
-  howItIsPitched: string;
-  whyItFails: string;
-  whatFakesTheEffect: string;
-  mechanism: string;
-  laws: string;
-  citations: string;
-  /** Title and summary of the accepted sightings linked to the entry, newest first. */
-  sightings: string;
-}
-
-export interface IndexedEntry {
-  id: number;
-  slug: string;
-  title: string;
-  version: number;
-  publishedAt: number;
-  laws: string[];
-  mechanismClass: string | null;
-  /** Plain text of the brief. */
-  inBrief: string;
-  /** Plain text used for the excerpt: the brief, then why it fails. */
-  excerptText: string;
-}
-
-export interface SearchHit {
-  entry: IndexedEntry;
-  score: number;
-  terms: string[];
-}
-
-/** A hit of {@link SearchIndex.searchTerms}: also the query terms it matched and the index terms each field matched. */
-export interface TermsHit extends SearchHit {
-  /** The query terms (as given) that matched. */
-  queryTerms: string[];
-  /** Index term → the fields it matched in. */
-  match: Record<string, string[]>;
-}
-
-/** Minisearch options that {@link SearchIndex.searchTerms} takes (the terms come already normalised). */
-export type TermsSearchOptions = Omit<SearchOptions, 'tokenize' | 'processTerm' | 'filter'>;
+export { excerpt } from './excerpt';
+export { SIGHTINGS_PER_ENTRY } from './load';
+export type { IndexedEntry, SearchDoc, SearchHit, TermsHit, TermsSearchOptions } from './types';
 
 /**
  * The indexed fields. The long sections are one field, `body`, and class and laws another: each
@@ -80,8 +37,6 @@ export const FIELDS = ['title', 'aliases', 'inBrief', 'sightings', 'taxonomy', '
 export type Field = (typeof FIELDS)[number];
 /** Sightings weigh below what the entry says of itself, above its long sections. */
 export const BOOST: Record<Field, number> = { title: 5, aliases: 4, inBrief: 2.5, sightings: 2, taxonomy: 1.5, body: 1 };
-/** Most accepted sightings indexed with one entry (the newest links). */
-export const SIGHTINGS_PER_ENTRY = 50;
 
 function fieldText(doc: SearchDoc, field: Field): string {
   if (field === 'taxonomy') return `${doc.mechanism} · ${doc.laws}`;
@@ -176,7 +131,7 @@ export class SearchIndex {
     if (this.ticking) return;
     this.ticking = true;
     try {
-      const mark = await this.currentWatermark();
+      const mark = await readWatermark();
       if (mark !== this.watermark) await this.rebuild();
     } catch (err) {
       this.opts.logger?.warn({ err }, 'search index refresh failed');
@@ -185,132 +140,17 @@ export class SearchIndex {
     }
   }
 
-  /**
-   * What changes whenever the indexed data does. Sightings: links are only ever added (with the
-   * acceptance), so their count moves. Synonym groups: a new group raises the highest id, a
-   * removed one lowers the count, an edit raises the sum of the versions.
-   */
-  private async currentWatermark(): Promise<string> {
-    const [published, retired, newest, links, groups] = await Promise.all([
-      EntryVersion.count({ where: { state: 'published' } }),
-      Entry.count({ where: { status: 'retired' } }),
-      Entry.max('updatedAt') as Promise<Date | string | null>,
-      SubmissionEntry.count(),
-      SynonymGroup.findOne({
-        attributes: [
-          [fn('COUNT', col('id')), 'n'],
-          [fn('MAX', col('id')), 'top'],
-          [fn('SUM', col('version')), 'edits'],
-        ],
-        raw: true,
-      }) as unknown as Promise<{ n: number | string; top: number | null; edits: number | string | null } | null>,
-    ]);
-    const syn = groups ? `${Number(groups.n)}.${Number(groups.top ?? 0)}.${Number(groups.edits ?? 0)}` : '0';
-    return `${published}/${retired}/${newest ? new Date(newest).getTime() : 0}/${links}/${syn}`;
-  }
-
   /** The synonym groups as the index uses them. */
   get synonyms(): SynonymSet {
     return this.syn;
   }
 
-  private async loadSynonyms(): Promise<SynonymSet> {
-    const phrases = await SynonymPhrase.findAll({ attributes: ['groupId', 'phrase', 'position', 'id'], order: [['groupId', 'ASC'], ['position', 'ASC'], ['id', 'ASC']], raw: true });
-    const byGroup = new Map<number, string[]>();
-    for (const p of phrases) {
-      const list = byGroup.get(p.groupId) ?? [];
-      list.push(p.phrase);
-      byGroup.set(p.groupId, list);
-    }
-    return new SynonymSet([...byGroup].map(([id, terms]) => ({ id, terms })));
-  }
-
-  /** Entry id → the text of its accepted sightings (title and summary, newest link first, at most SIGHTINGS_PER_ENTRY). */
-  private async loadSightings(entryIds: number[] | undefined): Promise<Map<number, string>> {
-    const links = await SubmissionEntry.findAll({
-      where: entryIds ? { entryId: entryIds } : {},
-      attributes: ['entryId', 'submissionId', 'createdAt'],
-      order: [['createdAt', 'DESC'], ['submissionId', 'DESC']],
-      raw: true,
-    });
-    if (!links.length) return new Map();
-    const subs = await Submission.findAll({
-      where: { id: [...new Set(links.map((l) => l.submissionId))], kind: 'sighting', status: 'accepted' },
-      attributes: ['id', 'title', 'summary'],
-      raw: true,
-    });
-    const text = new Map(subs.map((s) => [s.id, `${s.title}. ${s.summary ?? ''}`.trim()]));
-    const out = new Map<number, string[]>();
-    for (const l of links) {
-      const t = text.get(l.submissionId);
-      if (!t) continue;
-      const list = out.get(l.entryId) ?? [];
-      if (list.length < SIGHTINGS_PER_ENTRY) list.push(t);
-      out.set(l.entryId, list);
-    }
-    return new Map([...out].map(([id, list]) => [id, list.join(' · ')]));
-  }
-
-  private async loadTaxonomy(): Promise<{ lawById: Map<number, ConservationLaw>; classById: Map<number, MechanismClass> }> {
-    const [laws, classes] = await Promise.all([ConservationLaw.findAll(), MechanismClass.findAll()]);
-    const classById = new Map(classes.map((c) => [c.id, c]));
-    this.laws = new Map(laws.map((l) => [l.slug, l.name]));
-    this.classes = new Map(classes.map((c) => [c.slug, { name: c.name, parent: c.parentId ? (classById.get(c.parentId)?.slug ?? null) : null }]));
-    return { lawById: new Map(laws.map((l) => [l.id, l])), classById };
-  }
-
-  /** Reads entries (all, or those with these ids) that are published, with what the index needs. */
-  private async load(ids?: number[]): Promise<{ doc: SearchDoc; entry: IndexedEntry }[]> {
-    const { lawById, classById } = await this.loadTaxonomy();
-    const rows = await Entry.findAll({
-      where: ids ? { id: ids, status: 'published' } : { status: 'published' },
-      include: [{ model: EntryVersion, as: 'currentVersion' }],
-    });
-    const links = rows.length ? await EntryLaw.findAll({ where: { entryId: rows.map((r) => r.id) }, attributes: ['entryId', 'lawId'], raw: true }) : [];
-    const sightings = rows.length ? await this.loadSightings(ids ? rows.map((r) => r.id) : undefined) : new Map<number, string>();
-    // Grouped once: filtering the links per entry is quadratic at 10,000 entries.
-    const lawsOf = new Map<number, Set<string | undefined>>();
-    for (const l of links) {
-      const set = lawsOf.get(l.entryId) ?? new Set();
-      set.add(lawById.get(l.lawId)?.slug);
-      lawsOf.set(l.entryId, set);
-    }
-    return rows
-      .filter((e) => e.currentVersion)
-      .map((e) => {
-        const v = e.currentVersion!;
-        const c = v.content;
-        const own = lawsOf.get(e.id) ?? new Set();
-        const laws = c.laws.filter((s) => own.has(s));
-        const cls = e.mechanismClassId ? classById.get(e.mechanismClassId) : undefined;
-        const inBrief = plainText(c.inBrief);
-        const doc: SearchDoc = {
-          id: e.id,
-          slug: e.slug,
-          title: c.title,
-          aliases: (c.aliases ?? []).join(' · '),
-          inBrief,
-          howItIsPitched: plainText(c.howItIsPitched),
-          whyItFails: plainText(c.whyItFails),
-          whatFakesTheEffect: plainText(c.whatFakesTheEffect ?? ''),
-          mechanism: cls?.name ?? '',
-          laws: laws.map((s) => this.laws.get(s) ?? s).join(' · '),
-          citations: (c.sources ?? []).map((s) => String(s.csl.title)).join(' · '),
-          sightings: sightings.get(e.id) ?? '',
-        };
-        const entry: IndexedEntry = {
-          id: e.id,
-          slug: e.slug,
-          title: c.title,
-          version: v.number!,
-          publishedAt: (v.publishedAt ?? e.lastPublishedAt ?? new Date(0)).getTime(),
-          laws,
-          mechanismClass: cls?.slug ?? null,
-          inBrief,
-          excerptText: `${inBrief} ${doc.whyItFails}`.trim(),
-        };
-        return { doc, entry };
-      });
+  /** Reads entries (all, or those with these ids) that are published; keeps the taxonomy's names. */
+  private async load(ids?: number[]): Promise<LoadedEntry[]> {
+    const { laws, classes, items } = await loadEntries(ids);
+    this.laws = laws;
+    this.classes = classes;
+    return items;
   }
 
   /** Runs index work one piece at a time. */
@@ -326,8 +166,8 @@ export class SearchIndex {
   }
 
   private async doRebuild(): Promise<void> {
-    const mark = await this.currentWatermark();
-    const syn = await this.loadSynonyms();
+    const mark = await readWatermark();
+    const syn = await loadSynonyms();
     const loaded = await this.load();
     const ms = newMiniSearch(syn);
     ms.addAll(loaded.map((l) => l.doc));
@@ -350,16 +190,16 @@ export class SearchIndex {
   }
 
   private async doUpdate(slug: string): Promise<void> {
-    const row = await Entry.findOne({ where: { slug }, attributes: ['id'] });
-    if (!row) return;
-    const loaded = await this.load([row.id]);
-    const old = this.docs.get(row.id);
+    const id = await findEntryId(slug);
+    if (id === undefined) return;
+    const loaded = await this.load([id]);
+    const old = this.docs.get(id);
     if (old) {
       this.ms.remove(old);
       countTerms(this.df, old, -1, this.syn);
       this.clearWordCache();
-      this.docs.delete(row.id);
-      this.entries.delete(row.id);
+      this.docs.delete(id);
+      this.entries.delete(id);
     }
     for (const { doc, entry } of loaded) {
       this.ms.add(doc);
@@ -494,47 +334,4 @@ function countTerms(df: Map<string, number>, doc: SearchDoc, by: 1 | -1, synonym
     if (n > 0) df.set(t, n);
     else df.delete(t);
   }
-}
-
-// ---------------------------------------------------------------------------------------------
-// The excerpt
-
-const escapeHtml = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
-
-/**
- * About `width` characters of `text` around the first matched word, every matched word in
- * <mark>…</mark>, all else HTML-escaped. A word matches when its normalised form is one of the
- * index terms that matched.
- */
-export function excerpt(text: string, terms: string[], width = 220): string {
-  const matched = new Set(terms);
-  const isMatch = (word: string) => {
-    const t = normaliseTerm(word);
-    return t !== null && (matched.has(t) || matched.has(fold(word)));
-  };
-  const words = [...text.matchAll(/[\p{L}\p{N}]+(?:['’-][\p{L}\p{N}]+)*/gu)];
-  const first = words.find((m) => isMatch(m[0]));
-  let start = 0;
-  if (first && first.index! > width / 3) {
-    start = first.index! - Math.floor(width / 3);
-    const space = text.indexOf(' ', start);
-    if (space >= 0 && space < first.index!) start = space + 1;
-  }
-  let end = Math.min(text.length, start + width);
-  if (end < text.length) {
-    const space = text.lastIndexOf(' ', end);
-    if (space > start) end = space;
-  }
-  let out = start > 0 ? '… ' : '';
-  let at = start;
-  for (const m of words) {
-    const i = m.index!;
-    if (i < start || i + m[0].length > end) continue;
-    if (!isMatch(m[0])) continue;
-    out += escapeHtml(text.slice(at, i)) + `<mark>${escapeHtml(m[0])}</mark>`;
-    at = i + m[0].length;
-  }
-  out += escapeHtml(text.slice(at, end));
-  if (end < text.length) out += ' …';
-  return out;
 }
