@@ -33,7 +33,7 @@ import { lawsPhrase, list, lowerFirst, quoteTitle, uniqueLaws, unstop } from './
 
 export type { ParagraphEntry, ParagraphInput, ParagraphsInput } from './paragraph/input';
 export { PARAGRAPH_WORDS_MAX } from './paragraph/parts';
-export { contentKeys, matchReply, type ReplyMatch } from './paragraph/replies';
+export { contentKeys, matchReply } from './paragraph/replies';
 export { resultSentence } from './paragraph/results';
 export { lawInProse } from './paragraph/words';
 

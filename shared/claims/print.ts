@@ -41,8 +41,8 @@ export function superscript(exponent: number | string): string {
 }
 
 /** Exponents from FIXED_FROM up to (not including) FIXED_TO are printed without a power of ten. */
-export const PRINT_FIXED_FROM = -3;
-export const PRINT_FIXED_TO = 4;
+const PRINT_FIXED_FROM = -3;
+const PRINT_FIXED_TO = 4;
 
 /**
  * A number to `digits` significant figures, as in print. Trailing zeros are kept, since they

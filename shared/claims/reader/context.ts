@@ -10,7 +10,7 @@ export const alt = (words: readonly string[]) => words.join('|');
 export const HEAT_PUMP_RE = new RegExp(`(?<!\\p{L})(?:${alt(HEAT_PUMP_WORDS)})(?!\\p{L})`, 'iu');
 export const COOLING_MACHINE_RE = new RegExp(`(?<!\\p{L})(?:${alt(COOLING_MACHINE_WORDS)})(?!\\p{L})`, 'iu');
 export const BEFORE_WINDOW = 80;
-export const SENTENCE_BREAK_RE = /[.!?;]["”’')\]]*(?:\s|$)|\n/g;
+const SENTENCE_BREAK_RE = /[.!?;]["”’')\]]*(?:\s|$)|\n/g;
 
 /** Start of the window of words before `at`: the previous figure, the sentence start or `at - max`. */
 export function windowStart(text: string, at: number, floor: number, max: number): number {

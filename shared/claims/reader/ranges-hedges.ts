@@ -8,7 +8,7 @@ import { HEDGES } from '../figures-vocabulary';
 import type { FigureHedge } from '../types';
 import { alt, escapeRe } from './context';
 
-export const HEDGE_RES = HEDGES.map((h) => ({ hedge: h.hedge, re: new RegExp(`(?:(?<!\\p{L})(?:${alt(h.words.filter((w) => /^\p{L}/u.test(w)))})|${h.words.filter((w) => !/^\p{L}/u.test(w)).map(escapeRe).join('|') || '(?!)'})[^\\S\\n]*$`, 'iu') }));
+const HEDGE_RES = HEDGES.map((h) => ({ hedge: h.hedge, re: new RegExp(`(?:(?<!\\p{L})(?:${alt(h.words.filter((w) => /^\p{L}/u.test(w)))})|${h.words.filter((w) => !/^\p{L}/u.test(w)).map(escapeRe).join('|') || '(?!)'})[^\\S\\n]*$`, 'iu') }));
 
 export function isRangeGap(text: string, gapStart: number, gapEnd: number, firstStart: number): boolean {
   const gap = text.slice(gapStart, gapEnd);
