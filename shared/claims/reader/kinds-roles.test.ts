@@ -1,0 +1,117 @@
+/**
+ * The figure reader: efficiencies and COPs by their context, and the roles the words give.
+ *
+ * Against outside references: NIST SP 811 (2008), "Guide for the Use of the International System of
+ * Units (SI)", Appendix B.8 and B.9 conversion factors and §4.2.1.1 (Celsius temperature); the SI
+ * prefixes of the BIPM SI Brochure (9th ed., 2019, Table 7). SP 811 prints most factors to seven
+ * significant digits, so those checks allow half a unit in the seventh.
+ *
+ * Every text here is invented test data: invented devices ("QZ-4 cavity", "Helix-7 rig") and an
+ * invented organisation ("Example Dynamics"), no real people or products.
+ */
+import { extractFigures } from '../reader';
+import { EXACT, expectRelClose, expectWellFormed, only } from './test-support';
+
+describe('efficiency and COP', () => {
+  test.each([
+    ['an efficiency of 45%', '45%', 0.45],
+    ['an efficiency of 45 percent', '45 percent', 0.45],
+    ['it is 45 % efficient', '45 %', 0.45],
+    ['a 45%-efficient engine', '45%', 0.45],
+    ['a 45% conversion efficiency', '45%', 0.45],
+    ['the efficiency of the engine is 120 %', '120 %', 1.2],
+    ['an efficiency of 0.62', '0.62', 0.62],
+    ['efficiency η = 0.3', '0.3', 0.3],
+  ])('"%s" (invented test data)', (phrase, written, si) => {
+    const text = `The Helix-7 engine: ${phrase}.`;
+    const f = only(text);
+    expect(f).toMatchObject({ kind: 'efficiency', text: written, unit: '', role: null });
+    expect(f.start).toBe(text.lastIndexOf(written));
+    expectRelClose(f.si, si, EXACT); // a percentage is a hundredth (SI Brochure §5.4.7)
+  });
+
+  test.each([
+    ['The QZ-4 heat pump has a COP of 7.', '7', 7, 'heating'],
+    ['Its coefficient of performance 5.5 beats any heater.', '5.5', 5.5, 'heating'],
+    ['The chiller runs at COP 4.', '4', 4, 'cooling'],
+    ['In refrigeration mode the COP is 3.2.', '3.2', 3.2, 'cooling'],
+    ['A COP of 9 is claimed for the module.', '9', 9, null],
+  ])('"%s" (invented test data)', (text, written, si, role) => {
+    const f = only(text);
+    expect(f).toMatchObject({ kind: 'cop', text: written, quantity: written, role });
+    expect(f.si).toBe(si); // a pure number, as written
+  });
+
+  test('an efficiency range (40–50 %) is one efficiency with an upper end', () => {
+    const text = 'An efficiency of 40–50% is claimed (invented test data).';
+    const f = only(text);
+    expect([f.kind, f.text, f.si, f.upper?.si]).toEqual(['efficiency', '40–50%', 0.4, 0.5]);
+  });
+});
+
+describe('roles', () => {
+  test.each([
+    ['The module draws 2 kW from the mains.', 'in'],
+    ['It consumes 2 kW.', 'in'],
+    ['An input of 2 kW is needed.', 'in'],
+    ['It is supplied with 2 kW.', 'in'],
+    ['It runs on 2 kW of electrical input.', 'in'],
+    ['It uses 2 kW.', 'in'],
+    ['It delivers 2 kW.', 'out'],
+    ['It produces 2 kW.', 'out'],
+    ['Its output is 2 kW.', 'out'],
+    ['It generates 2 kW.', 'out'],
+    ['It yields 2 kW.', 'out'],
+    ['It returns 2 kW to the grid.', 'out'],
+    ['2 kW in, nothing else.', 'in'],
+    ['The rating is 2 kW.', null],
+  ])('power: "%s" (invented test data)', (text, role) => {
+    expect(only(text)).toMatchObject({ kind: 'power', role });
+  });
+
+  test.each([
+    ['The hot side is at 90 °C.', 'hot'],
+    ['Heat comes from a 300 °C source.', 'hot'],
+    ['The flame reaches 1200 K.', 'hot'],
+    ['Steam at 180 °C drives it.', 'hot'],
+    ['Ambient is 20 °C.', 'cold'],
+    ['The room is at 21 °C.', 'cold'],
+    ['The cold side is held at 5 °C.', 'cold'],
+    ['It rejects heat to a 15 °C sink.', 'cold'],
+    ['Outside, it is 2 °C.', 'cold'],
+    ['River water at 12 °C cools it.', 'cold'],
+    ['It was measured at 40 °C.', null],
+  ])('temperature: "%s" (invented test data)', (text, role) => {
+    expect(only(text)).toMatchObject({ kind: 'temperature', role });
+  });
+
+  test('two temperatures of one machine: the higher is the hot side, whatever the order', () => {
+    const text = 'It works between 300 K and 400 K (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.si, f.role])).toEqual([
+      [300, 'cold'],
+      [400, 'hot'],
+    ]);
+  });
+
+  test('each figure takes the nearest words, not those of its neighbour', () => {
+    const text = 'An input of 2 kW yields 5 kW; it uses 1 kW and produces 3 kW (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => f.role)).toEqual(['in', 'out', 'in', 'out']);
+  });
+
+  test('thrust, mass, speed, current and efficiency have no role', () => {
+    const text = 'It draws 2 A, produces 3 mN, weighs 4 kg, moves at 5 m/s and produces 45% efficiency (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.role])).toEqual([
+      ['current', null],
+      ['thrust', null],
+      ['mass', null],
+      ['speed', null],
+      ['efficiency', null],
+    ]);
+  });
+});

@@ -1,0 +1,130 @@
+/**
+ * The figure reader: numbers as claims write them, and numbers that are not figures.
+ *
+ * Against outside references: NIST SP 811 (2008), "Guide for the Use of the International System of
+ * Units (SI)", Appendix B.8 and B.9 conversion factors and §4.2.1.1 (Celsius temperature); the SI
+ * prefixes of the BIPM SI Brochure (9th ed., 2019, Table 7). SP 811 prints most factors to seven
+ * significant digits, so those checks allow half a unit in the seventh.
+ *
+ * Every text here is invented test data: invented devices ("QZ-4 cavity", "Helix-7 rig") and an
+ * invented organisation ("Example Dynamics"), no real people or products.
+ */
+import { parseQuantity, QuantityError } from '../../worksheet/quantity';
+import { extractFigures } from '../reader';
+import { EXACT, expectRelClose, expectWellFormed, only } from './test-support';
+
+describe('numbers', () => {
+  test('English thousands separators are dropped in the quantity (parseQuantity refuses them)', () => {
+    expect(() => parseQuantity('1,500 W', 'W')).toThrow(QuantityError); // the typed-quantity rule (quantity.ts)
+    const text = 'The Example Dynamics stack drew 1,500 W and stored 12,000,000 J (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.text, f.quantity, f.si])).toEqual([
+      ['1,500 W', '1500 W', 1500],
+      ['12,000,000 J', '12000000 J', 12e6],
+    ]);
+  });
+
+  test('a comma as a decimal mark where it cannot separate thousands ("1,5 kW", "0,75 kW", "2,25 kW")', () => {
+    // One or two digits after the comma, or a leading 0, cannot be a thousands group (NIST SP 811 §10.5.3
+    // groups digits by threes); "1,500 W" stays fifteen hundred watts (the test above).
+    for (const [written, si] of [['1,5 kW', 1500], ['0,75 kW', 750], ['2,25 kW', 2250]] as const) {
+      const f = only(`The unit gives ${written} (invented test data).`);
+      expect(f.text).toBe(written);
+      expectRelClose(f.si, si, EXACT);
+    }
+  });
+
+  test.each([
+    ['3.4 × 10^5 W', 3.4e5],
+    ['3.4×10^5 W', 3.4e5],
+    ['3.4 x 10^5 W', 3.4e5],
+    ['3.4e5 W', 3.4e5],
+    ['3.4E5 W', 3.4e5],
+    ['2.5×10⁻³ W', 2.5e-3],
+    ['2.5 × 10^-3 W', 2.5e-3],
+    ['6 × 10⁵ W', 6e5],
+  ])('scientific notation "%s"', (written, si) => {
+    const text = `The array produced ${written} at noon (invented test data).`;
+    const f = only(text);
+    expect(f.text).toBe(written);
+    expect(f.kind).toBe('power');
+    expectRelClose(f.si, si, EXACT); // the number as written (powers of ten), read by hand
+  });
+
+  test('negative temperatures with a minus sign or a hyphen', () => {
+    const text = 'It was tested from −40 °C and again at -20 °C (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => f.quantity)).toEqual(['-40 degC', '-20 degC']);
+    expectRelClose(figures[0].si, 233.15, EXACT); // SP 811 §4.2.1.1: −40 + 273.15
+  });
+
+  test('a range is one figure with an upper end; two temperatures "from … to" are the two sides', () => {
+    const text = 'Thrust of 10–20 mN, between 3 and 4 kW drawn, 6 to 9 W out, and from 5 to 7 °C (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.text, f.quantity, f.upper?.quantity])).toEqual([
+      ['thrust', '10–20 mN', '10 mN', '20 mN'],
+      ['power', '3 and 4 kW', '3 kW', '4 kW'],
+      ['power', '6 to 9 W', '6 W', '9 W'],
+      ['temperature', '5', '5 degC', undefined],
+      ['temperature', '7 °C', '7 degC', undefined],
+    ]);
+    expect(figures[1]).toMatchObject({ role: 'in', upper: { si: 4000 } });
+    expect(figures[2]).toMatchObject({ role: 'out', si: 6, upper: { si: 9 } });
+  });
+
+  test('an uncertainty makes a range (value ± uncertainty), not a figure of its own', () => {
+    const text = 'We saw 1.2 ± 0.3 mN, later 1.5 mN ± 0.2 mN (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.text, f.quantity, f.upper?.quantity])).toEqual([
+      ['1.2 ± 0.3 mN', '0.9 mN', '1.5 mN'],
+      ['1.5 mN ± 0.2 mN', '1.3 mN', '1.7 mN'],
+    ]);
+  });
+});
+
+describe('false positives', () => {
+  test.each([
+    ['a year', 'In 2019 the team at Example Dynamics began the work.'],
+    ['a year before an initial', 'In 2019 A. N. Example and, in 2020, W. Example repeated it.'],
+    ['a figure number with a panel letter', 'As Figure 2 A shows, and Fig. 3 N too.'],
+    ['a citation', 'The result [12] was confirmed [3, 4].'],
+    ['a section number', 'Section 3.2 describes the set-up; see also Sec. 4 and Eq. 5.'],
+    ['a page range', 'See pp. 12–14 and p. 7.'],
+    ['a table number', 'Table 4 N lists the runs.'],
+    ['a chemical formula', 'CO2 and H2O were removed.'],
+    ['a power per area', 'The flux was 5 W/m² at the surface.'],
+    ['a torque', 'The bolts were set to 5 N·m and 6 N-m.'],
+    ['a probe type', 'Two 2 K-type probes were fitted.'],
+    ['a per-unit figure', 'It gives 2 cal per pulse and 3 W per square metre.'],
+    ['a percentage that is not an efficiency', 'Output rose 20% and 45 % of the runs failed.'],
+    ['a change of efficiency', 'The efficiency improved by 12% over the year.'],
+    ['an acceleration', 'It accelerated at 9.81 m/s² and 2 m/s^2.'],
+    ['a ton (short, long or refrigeration: ambiguous)', 'A 5 ton chiller.'],
+    ['a bare number', 'It ran 3 times on 2 rigs with 4 coils.'],
+    ['an angle', 'The arm swings through 90 degrees and back.'],
+    ['a thousand cycles', 'The seal survived 5K cycles and 20k rpm.'],
+  ])('%s (invented test data)', (_what, text) => {
+    expect(extractFigures(text)).toEqual([]);
+  });
+
+  test('"a 2 A current" is a current, "Figure 2 A" is not', () => {
+    const text = 'Figure 2 A shows a 2 A current through the leads (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.text, f.start])).toEqual([['current', '2 A', text.indexOf('2 A current')]]);
+  });
+
+  test('"pounds" is a mass unless it is pounds of thrust', () => {
+    const text = 'The 30 pounds rig made 2 pounds of thrust (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.quantity])).toEqual([
+      ['mass', '30 lb'],
+      ['thrust', '2 lbf'],
+    ]);
+  });
+});

@@ -1,0 +1,376 @@
+/**
+ * The figure reader: the phrasing families of issue 11 and more ways claims are written.
+ *
+ * Against outside references: NIST SP 811 (2008), "Guide for the Use of the International System of
+ * Units (SI)", Appendix B.8 and B.9 conversion factors and §4.2.1.1 (Celsius temperature); the SI
+ * prefixes of the BIPM SI Brochure (9th ed., 2019, Table 7). SP 811 prints most factors to seven
+ * significant digits, so those checks allow half a unit in the seventh.
+ *
+ * Every text here is invented test data: invented devices ("QZ-4 cavity", "Helix-7 rig") and an
+ * invented organisation ("Example Dynamics"), no real people or products.
+ */
+import { extractFigures } from '../reader';
+import { type Figure, type FigureKind } from '../types';
+import { expectRelClose, expectWellFormed, SEVEN } from './test-support';
+
+/**
+ * The phrasing families of issue 11, item 1, each read right. Every text is invented test data.
+ * Conversion factors: NIST SP 811 (2008), Appendix B.8/B.9; metric horsepower 735.498 75 W and
+ * mechanical horsepower 745.699 9 W (B.8); kgf 9.806 65 N (B.8); BTU_IT 1 055.056 J, BTU_IT/h
+ * 0.293 071 1 W (B.8); °F → K: (t + 459.67)·5/9 (SP 811 §4.2.1.1 and B.9); c = 299 792 458 m/s (SI Brochure).
+ */
+describe('phrasing families (issue 11)', () => {
+  const read = (text: string) => {
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    return figures;
+  };
+  const pick = (figures: Figure[], kind: FigureKind) => figures.filter((f) => f.kind === kind);
+
+  test('percentages by context: a heat pump is a COP, an engine an efficiency, a quantum efficiency is neither', () => {
+    expect(read('The ground-source heat pump runs at 420 % efficiency.')).toMatchObject([{ kind: 'cop', role: 'heating', si: 4.2 }]);
+    expect(read('The marine diesel is 38 % efficient.')).toMatchObject([{ kind: 'efficiency', si: 0.38 }]);
+    expect(read('It turns 41 % of the fuel heat into shaft work.')).toMatchObject([{ kind: 'efficiency', si: expect.closeTo(0.41, 12) }]);
+    expect(read('An internal quantum efficiency of 140 % was measured.')).toMatchObject([{ kind: 'quantum-efficiency', si: 1.4 }]);
+    expect(read('The cell reaches 115 % EQE.')).toMatchObject([{ kind: 'quantum-efficiency', si: 1.15 }]);
+    expect(read('Sales rose 35 % last year.')).toEqual([]);
+  });
+
+  test('ranges and hedges', () => {
+    expect(read('It gave 3–6 mN.')).toMatchObject([{ kind: 'thrust', si: 0.003, upper: { si: 0.006 } }]);
+    expect(read('It drew between 0.5 and 1.5 kW.')).toMatchObject([{ kind: 'power', si: 500, upper: { si: 1500 }, role: 'in' }]);
+    expect(read('It gives up to 5 mN.')).toMatchObject([{ kind: 'thrust', si: 0.005, hedge: 'up-to' }]);
+    expect(read('It draws about 2 kW.')).toMatchObject([{ kind: 'power', si: 2000, hedge: 'about' }]);
+    expect(read('It draws ~3 W.')).toMatchObject([{ kind: 'power', si: 3, hedge: 'about' }]);
+    expect(read('It delivers more than 3 kW.')).toMatchObject([{ kind: 'power', si: 3000, hedge: 'more-than', role: 'out' }]);
+    expect(read('A COP between 3.2 and 4.1.')).toMatchObject([{ kind: 'cop', si: 3.2, upper: { si: 4.1 } }]);
+  });
+
+  test('temperature differences are differences, and a cold side is derived from the hot one', () => {
+    expect(read('It works across a 20 °C temperature difference.')).toMatchObject([{ kind: 'temperature-difference', si: 20 }]);
+    expect(read('A ΔT of 20 K is enough.')).toMatchObject([{ kind: 'temperature-difference', si: 20 }]);
+    const f = read('The hot plate sits at 80 °C and the fins run 36 °F cooler.');
+    expect(pick(f, 'temperature-difference')[0].si).toBeCloseTo(20, 9); // a difference of 36 °F is 20 K
+    const cold = pick(f, 'temperature').find((x) => x.role === 'cold')!;
+    expect(cold.si).toBeCloseTo(353.15 - 20, 9);
+    expect(cold.derived).toMatch(/colder side/);
+    const up = read('Its collector runs 40 degrees above the 20 °C ambient.');
+    expect(pick(up, 'temperature').find((x) => x.role === 'hot')!.si).toBeCloseTo(333.15, 9);
+  });
+
+  test('figures given through relations', () => {
+    const iv = read('The coil draws 12 A at 24 V and lights a 300 W lamp.');
+    expect(pick(iv, 'power').find((x) => x.derived)).toMatchObject({ si: 288, role: 'in' });
+    expect(pick(iv, 'power').find((x) => !x.derived)).toMatchObject({ si: 300, role: 'out' });
+    const ex = read('The reactor gives 4 W more heat than the 20 W it draws.');
+    expect(pick(ex, 'power').map((x) => [x.role, x.si])).toEqual([['excess', 4], ['in', 20], ['out', 24]]);
+    expect(read('Thrust-to-power of 1.2 mN per kW.')).toMatchObject([{ kind: 'thrust-per-power', si: 1.2e-6 }]);
+    expect(read('It gives 5 µN/W.')[0].si).toBeCloseTo(5e-6, 18);
+    expect(read('A specific power of 2 kW/kg.')).toMatchObject([{ kind: 'specific-power', si: 2000 }]);
+    const self = read('The self-running motor drives a 1.5 kW pump.');
+    expect(pick(self, 'power').map((x) => [x.role, x.si])).toEqual([['in', 0], ['out', 1500]]);
+    expect(read('It gives back 1.3 units for every unit it takes.')).toMatchObject([{ kind: 'efficiency', si: 1.3 }]);
+    expect(read('Its output is three times its input.')).toMatchObject([{ kind: 'efficiency', si: 3 }]);
+    const run = read('Over a 72-hour run it drew 400 W.');
+    expect(pick(run, 'duration')[0].si).toBe(72 * 3600);
+    expect(pick(run, 'energy')[0]).toMatchObject({ role: 'in', si: 400 * 72 * 3600 });
+    expect(read('It ran for two weeks.')).toMatchObject([{ kind: 'duration', si: 14 * 86400 }]);
+  });
+
+  test('units as people write them', () => {
+    expectRelClose(read('It lifts 20 pounds of lift.')[0].si, 20 * 4.448222, SEVEN); // lbf
+    expect(read('It gives 3 kilograms of thrust.')[0].si).toBeCloseTo(3 * 9.80665, 12); // kgf
+    expect(read('It shows 12 grams of thrust.')[0].si).toBeCloseTo(0.012 * 9.80665, 12); // gf
+    expect(read('A thrust of 40 micronewtons.')[0].si).toBeCloseTo(40e-6, 18);
+    expect(read('A thrust of 40 uN.')[0].si).toBeCloseTo(40e-6, 18);
+    expect(read('A 90 PS engine.')[0].si).toBeCloseTo(90 * 735.49875, 9); // metric horsepower
+    expectRelClose(read('A 150 hp engine.')[0].si, 150 * 745.6999, SEVEN); // mechanical horsepower
+    expectRelClose(read('It puts out 12,000 BTU/h.')[0].si, 12000 * 0.2930711, SEVEN);
+    expect(read('Outdoor air at 41 °F.')[0].si).toBeCloseTo(278.15, 9);
+    expect(read('F = 2.4e-3 N.')[0].si).toBeCloseTo(2.4e-3, 15);
+    expect(read('F = 2.4 × 10⁻³ N.')[0].si).toBeCloseTo(2.4e-3, 15);
+    expect(read('It needs three kilowatts.')).toMatchObject([{ kind: 'power', si: 3000 }]);
+    expect(read('Rated for 5K hours.')).toMatchObject([{ kind: 'duration', si: 5000 * 3600 }]);
+  });
+
+  test('rocket claims: wet and propellant masses, Isp, Δv; the dry mass derived', () => {
+    const f = read('The stage has a wet mass of 1200 kg, carries 800 kg of propellant at an Isp of 320 s and claims a Δv of 6 km/s.');
+    expect(pick(f, 'mass').map((x) => [x.role, x.si])).toEqual([['wet', 1200], ['propellant', 800], ['dry', 400]]);
+    expect(pick(f, 'specific-impulse')[0].si).toBe(320);
+    expect(pick(f, 'speed')[0]).toMatchObject({ role: 'delta-v', si: 6000 });
+    expect(read('Exhaust velocity of 4.4 km/s.')).toMatchObject([{ kind: 'speed', role: 'exhaust', si: 4400 }]);
+  });
+
+  test('speeds above c are read as stated', () => {
+    expect(read('It reaches 450,000 km/s.')).toMatchObject([{ kind: 'speed', si: 4.5e8 }]);
+    expect(read('It reaches 1.5c.')[0].si).toBeCloseTo(1.5 * 299_792_458, 3);
+    expect(read('It reaches 30 % of the speed of light.')[0].si).toBeCloseTo(0.3 * 299_792_458, 3);
+  });
+});
+
+describe('more ways claims are written (issue 11)', () => {
+  const read = (text: string) => {
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    return figures;
+  };
+
+  test('digits grouped by spaces and table rows pasted as text', () => {
+    // NIST SP 811 §10.5.3: digits may be grouped by threes with a space.
+    const f = read('P_in | 1 500 W\nP_out | 1 234,5 W');
+    expect(f.map((x) => [x.role, x.si])).toEqual([['in', 1500], ['out', 1234.5]]);
+    const r = read('COP (cooling) | 1.8');
+    expect(r).toMatchObject([{ kind: 'cop', si: 1.8 }]);
+  });
+
+  test('fractions and large numbers in words', () => {
+    expect(read('It draws a quarter of a kilowatt.')).toMatchObject([{ kind: 'power', si: 250 }]);
+    expect(read('It lifts half a newton per watt.')).toMatchObject([{ kind: 'thrust-per-power', si: 0.5 }]);
+    expect(read('It moves at a billion km/h.')[0].si).toBeCloseTo(1e9 / 3.6, 3);
+    expect(read('It reaches 1.2 billion km/h.')[0].si).toBeCloseTo(1.2e9 / 3.6, 3);
+  });
+
+  test('an EER is a cooling COP in BTU/h per watt', () => {
+    // 1 BTU_IT/h = 0.293 071 1 W (NIST SP 811, Appendix B.8), so EER 11.5 is a COP of 3.370.
+    const [f] = read('Cooling capacity 3.5 kW; EER: 11.5.').filter((x) => x.kind === 'cop');
+    expect(f.role).toBe('cooling');
+    expectRelClose(f.si, 11.5 * 0.2930711, SEVEN);
+  });
+
+  test('a voltage and a current side by side give the power, from the nearest voltage', () => {
+    const f = read('The transformer steps 230 V down to 12 V and delivers 5 A.');
+    expect(f.find((x) => x.kind === 'power')).toMatchObject({ si: 60, role: 'out' });
+    const g = read('Output 230 V / 6.5 A; supply 12 V × 1 A.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['out', 1495], ['in', 12]]);
+  });
+
+  test('a difference said of the stated temperature itself', () => {
+    const f = read('Freezer compartment held at −18 °C, a full 50 K below the room.');
+    expect(f.find((x) => x.kind === 'temperature' && x.derived)).toMatchObject({ role: 'hot', si: expect.closeTo(305.15, 9) });
+    const g = read('The skin sits at 34 °C, 5 K warmer than the surrounding air.');
+    expect(g.find((x) => x.kind === 'temperature' && x.derived)).toMatchObject({ role: 'cold', si: expect.closeTo(302.15, 9) });
+  });
+
+  test('a propellant mass fraction', () => {
+    const f = read('Propellant is 90 % of the 20 t vehicle\'s mass.');
+    expect(f.filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([['wet', 20000], ['dry', 2000], ['propellant', 18000]]);
+  });
+
+  test('each power over the time said with it', () => {
+    const f = read('Charged at 2 kW for 5 hours, then discharged at 1.5 kW for 6 hours.');
+    expect(f.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([['in', 2000 * 5 * 3600], ['out', 1500 * 6 * 3600]]);
+  });
+
+  test('numbers in words after a colon, capitalised', () => {
+    const f = read('In a 2021 preprint the authors write: Twenty watts in, sixty watts out.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['in', 20], ['out', 60]]);
+  });
+
+  test('figures of something else are set aside: a test stand, a room, the time it took to build', () => {
+    const rocket = read('The 500 kg probe, which includes 200 kg of propellant, exhausts at 3.0 km/s. The test stand itself weighs 85 kg.');
+    expect(rocket.filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([['wet', 500], ['propellant', 200], ['dry', 300], ['aside', 85]]);
+    // 212 °F = 373.15 K and 68 °F = 293.15 K (NIST SP 811 §4.2.1.1 and B.8: T/K = (t/°F + 459.67)/1.8).
+    const engine = read('Between 212 °F and 68 °F the engine reaches 35 % efficiency. The room was held at 21 °C for the whole series.');
+    expect(engine.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si])).toEqual([['hot', 373.15], ['cold', 293.15], ['aside', 294.15]].map(([r, t]) => [r, expect.closeTo(t as number, 9)]));
+    const build = read('Over a 5-hour shift the pump motor drew 2.2 kW and delivered 1.8 kW. The prototype took 18 months to build.');
+    expect(build.filter((x) => x.kind === 'duration').map((x) => x.role)).toEqual([null, 'aside']);
+    expect(build.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([['in', 2200 * 5 * 3600], ['out', 1800 * 5 * 3600]]);
+  });
+
+  test('gas flows of electrolysers: litres per minute or hour, millilitres per minute', () => {
+    // 1 L = 10⁻³ m³ exactly (NIST SP 811 (2008), App. B.8, "liter"); 1 min = 60 s, 1 h = 3600 s.
+    const f = read('It makes 3 L/min, then 90 litres per hour, and 250 mL/min of hydrogen at idle.').filter((x) => x.kind === 'gas-flow');
+    expect(f.map((x) => x.si)).toEqual([3e-3 / 60, 90e-3 / 3600, 250e-6 / 60].map((v) => expect.closeTo(v, 15)));
+  });
+
+  test('an uncertainty in the last digits, in brackets, is a range', () => {
+    const f = read('The balance gave 2.31(4) mN at 410(5) W; the probe moved at 163.0(5) km/s.');
+    expect(f.map((x) => [x.kind, x.si, x.upper?.si])).toEqual([
+      ['thrust', expect.closeTo(0.00227, 15), expect.closeTo(0.00235, 15)],
+      ['power', 405, 415],
+      ['speed', 162500, 163500],
+    ]);
+  });
+
+  test('a distance covered in a time is a speed', () => {
+    // 1 light-year = 9 460 730 472 580 800 m (c × Julian year, IAU); 30 d = 2 592 000 s.
+    const f = read('The drive covers 4.2 light years in 30 days.').find((x) => x.kind === 'speed')!;
+    expect(f.si).toBeCloseTo((4.2 * 9460730472580800) / 2592000, 0);
+    expect(f.derived).toMatch(/distance \/ time/);
+  });
+
+  test('amperes glued to the number as forum posts write them, and units glued after e-notation', () => {
+    const f = read('Drawing 350ma from a 12v battery, it lights a 60w lamp (see claim 1a). Thrust 4.0E-6N.');
+    expect(f.filter((x) => x.kind === 'current').map((x) => x.si)).toEqual([expect.closeTo(0.35, 12)]);
+    expect(f.find((x) => x.kind === 'thrust')!.si).toBeCloseTo(4e-6, 15);
+  });
+
+  test('a hedge between a verb and its figure leaves the role to the verb', () => {
+    const f = read('The magnet motor gives 1.12 kW mechanical out while the supply delivers approximately 1 kW.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['out', 'in']);
+    const g = read('The heat pump gives 5 kW of heat for about 1.5 kW of electricity.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['out', 'in']);
+  });
+
+  test('a restatement in other units, in brackets, is no figure and does not hide the words after it', () => {
+    // 1 hp = 745.69987158227 W (NIST SP 811 (2008), App. B.8): 2 kW = 2.68 hp, 5 hp = 3.73 kW.
+    const f = read('Delivers 5 hp at the shaft from 2 kW (2.7 hp) of electrical input.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['out', expect.closeTo(5 * 745.69987158227, 6)], // (mathjs's hp agrees to 6e-11)
+      ['in', 2000],
+    ]);
+    // °F → K = (F − 32)·5/9 + 273.15 (NIST SP 811, App. B.9): 302 °F = 150 °C, the upper end of the range.
+    const g = read('Brine at 120–150 °C (302 °F) feeds the turbine; it rejects heat to a 20 °C river.');
+    expect(g.filter((x) => x.kind === 'temperature').map((x) => [x.si, x.upper?.si])).toEqual([
+      [expect.closeTo(393.15, 9), expect.closeTo(423.15, 9)],
+      [expect.closeTo(293.15, 9), undefined],
+    ]);
+    // A difference of 36 °F is 20 K (5/9 K per °F).
+    const h = read('A heat engine on a 20 °C (36 °F) temperature difference, cold side 15 °C, claims 12 % efficiency.');
+    expect(h.filter((x) => x.kind === 'temperature-difference').map((x) => x.si)).toEqual([20]);
+    expect(h.find((x) => x.kind === 'temperature' && x.role === 'hot')!.si).toBeCloseTo(308.15, 9);
+  });
+  test('forum numbers and units: a dozen, four and a half, miles a second, glued 20C', () => {
+    expect(read('input is a dozen volts at 3 A').find((x) => x.kind === 'voltage')!.si).toBe(12);
+    expect(read('a heat pump with a COP of four and a half, ground at 8 °C').find((x) => x.kind === 'cop')!.si).toBe(4.5);
+    // 1 mi = 1609.344 m exactly (NIST SP 811 (2008), App. B.8).
+    expect(read('the probe would go a million miles a second').find((x) => x.kind === 'speed')!.si).toBeCloseTo(1.609344e9, 3);
+    const t = read('the pond water at 20C as the hot side, the air at 50F');
+    expect(t.map((x) => [x.kind, x.role])).toEqual([['temperature', 'hot'], ['temperature', 'cold']]);
+    // °F → K = (F − 32)·5/9 + 273.15 (NIST SP 811, App. B.9).
+    expect(t.map((x) => x.si)).toEqual([expect.closeTo(293.15, 9), expect.closeTo(283.15, 9)]);
+    // A battery's charge rate is no temperature.
+    expect(read('The pack charges at 2C in a warm room.')).toEqual([]);
+  });
+
+  test('what a store takes and holds in a charge, and holds before it runs a load', () => {
+    const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
+    expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
+      ['in', 3 * 7200],
+      ['out', 5 * 3600], // 1 Wh = 3600 J
+    ]);
+    const discharge = read('The bank holds 50 kJ and it powered a 2 kW heater for five minutes.');
+    expect(discharge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
+      ['in', 50000],
+      ['out', 2000 * 300],
+    ]);
+  });
+
+  test('a percentage of what it draws, and in/out said of a voltage with its current', () => {
+    const f = read('The coil board "returns 140% of what it draws", input is 12 V at 3 A.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual(
+      expect.arrayContaining([
+        ['in', 36],
+        ['out', expect.closeTo(36 * 1.4, 9)],
+      ]),
+    );
+    const g = read('Boost converter: 5 V in at 2 A, 12 V out at 0.75 A.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 10],
+      ['out', 9],
+    ]);
+  });
+
+  test('a weight a propellant-free drive is said to lift is a force', () => {
+    // 1 lb = 0.45359237 kg and g0 = 9.80665 m/s² (NIST SP 811 (2008), App. B.8): 3 lbf = 13.3447 N.
+    const f = read('The saucer model lifts 3 lbs off the scale with no exhaust using 250 watts.');
+    expect(f.find((x) => x.kind === 'thrust')!.si).toBeCloseTo(3 * 4.4482216152605, 6);
+    // A crane's load stays a mass.
+    expect(read('The crane lifts 3 t with a 20 kW motor.').some((x) => x.kind === 'thrust')).toBe(false);
+  });
+  test('data-sheet lines: units in a column label, labels before the figure, small prefixes', () => {
+    const f = read('Drive FD-2 — Thrust [mN]: 12.3(4); Power [W]: 250; P_in / W: 1.5E+3; P_out / W: 1.62e3.');
+    expect(f.map((x) => [x.kind, x.si])).toEqual([
+      ['thrust', expect.closeTo(0.0119, 12)],
+      ['power', 250],
+      ['power', 1500],
+      ['power', 1620],
+    ]);
+    expect(f.slice(2).map((x) => x.role)).toEqual(['in', 'out']);
+    const g = read('electricity in 1.5 kW, heat out 4.8 kW; a cell gives 100 nW; a 40 pW detector.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual(
+      expect.arrayContaining([
+        ['in', 1500],
+        ['out', 4800],
+        [expect.anything(), expect.closeTo(1e-7, 20)],
+        [null, expect.closeTo(4e-11, 22)],
+      ]),
+    );
+  });
+
+  test("a heat pump's source is its cold side and its sink the warm one; fuel burnt for electricity", () => {
+    const f = read('Heat pump: heating COP 4 with the air source at 2 °C and the sink water at 45 °C.');
+    expect(f.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['cold', 'hot']);
+    const g = read('Diesel genset: 640 MJ of fuel (18 L) for 60 kWh of electricity over 10 h.');
+    expect(g.filter((x) => x.kind === 'energy').map((x) => x.role)).toEqual(['in', 'out']);
+  });
+  test("a craft's mass before and after a burn, and a percentage in quotes", () => {
+    const f = read('The first stage has a specific impulse of 311 s and burns from 25 t to 9 t.');
+    expect(f.filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([
+      ['wet', 25000],
+      ['dry', 9000],
+    ]);
+    const g = read('The lab puts its single-junction cell at "about 29 %" efficiency.');
+    expect(g.map((x) => [x.kind, x.si, x.hedge])).toEqual([['efficiency', 0.29, 'about']]);
+  });
+  test('a percentage spelled out is read as the sign is; list dashes and quoted claims', () => {
+    const f = read('In cooling mode the chiller is rated 420 percent efficient while holding a 7 °C loop against 35 °C air.');
+    expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'cooling', si: 4.2 });
+    const g = read('- Twenty watts in, sixty watts out, says the inventor.');
+    expect(g.map((x) => [x.role, x.si])).toEqual([
+      ['in', 20],
+      ['out', 60],
+    ]);
+    const h = read('The claim reads: "A probe of 500 kg fuelled and 450 kg empty, at Isp 220 s, gains 2 km/s."');
+    expect(h.filter((x) => x.kind === 'mass').map((x) => x.role)).toEqual(['wet', 'dry']);
+    expect(h.some((x) => x.kind === 'thrust')).toBe(false);
+  });
+  test('a round-trip percentage, and the temperature a machine is rated to work down to', () => {
+    expect(read('I put 13.5 kWh in and got 12.8 kWh back out, so ~95% round trip.').find((x) => x.kind === 'efficiency')!.si).toBeCloseTo(0.95, 12);
+    const f = read('The heat pump delivers 55 °C water from 7 °C air, works down to -20 °C, COP 3.1.');
+    expect(f.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['hot', 'cold', 'aside']);
+  });
+  test('the room a test ran in is set aside when the sides are given across sentences', () => {
+    const f = read('The heat pump supplies 55 °C water; with a 50 K lift over its source, the maker quotes a heating COP of 4.6. The room was held at 21 °C for the whole series.');
+    expect(f.filter((x) => x.kind === 'temperature' && !x.derived).map((x) => [x.si, x.role])).toEqual([
+      [expect.closeTo(328.15, 9), 'hot'],
+      [expect.closeTo(294.15, 9), 'aside'],
+    ]);
+    // A side said alone in its own sentence stays ("Heat is rejected to cooling water at 20 °C.").
+    const g = read('A Stirling engine converts heat supplied at 90 °C into work with an efficiency of 38 %. Heat is rejected to cooling water at 20 °C.');
+    expect(g.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['hot', 'cold']);
+  });
+  test("figures of what the claim is compared with are set aside, not the claim's own", () => {
+    const f = read('Fridge: 4 °C inside, 22 °C kitchen, cooling COP of 3. For comparison, conventional designs of this kind reach about 35 % efficiency.');
+    expect(f.find((x) => x.kind === 'efficiency')!.role).toBe('aside');
+    const g = read('The tapered cavity produced 8 mN of thrust without propellant. A typical household kettle, by comparison, draws 2 kW. Our previous prototype reached 35 % at 800 W.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['aside', 'aside']);
+    const h = read('Our engine reaches 45 % efficiency, against 35 % for conventional engines.');
+    expect(h.map((x) => x.role)).toEqual([null, 'aside']);
+    // The claim's own input named after "vs" stays.
+    const k = read('Output 1.5×10³ W vs input 1.2×10³ W (bench log #14).');
+    expect(k.map((x) => x.role)).toEqual(['out', 'in']);
+  });
+  test('an energy per day over a longer run is a rate; a store given energy; charging a battery; expelled at', () => {
+    // 30 kWh per day = 30 × 3.6e6 J / 86 400 s = 1250 W; a fortnight = 14 × 86 400 s.
+    const f = read('Burning wood at 30 kWh a day, the cabin stove supplied 380 kWh of heat over a fortnight.');
+    expect(f.find((x) => x.kind === 'power')).toMatchObject({ role: 'in', si: 1250 });
+    expect(f.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
+      ['out', 380 * 3.6e6],
+      ['in', 1250 * 14 * 86400],
+    ]);
+    const g = read('A flywheel rig given 500 kJ at spin-up then drove a 2 kW load for 6 minutes.');
+    expect(g.filter((x) => x.kind === 'energy').map((x) => x.role)).toEqual(['in', 'out']);
+    const h = read('A pulse circuit drawing 0.5 A at 24 V is said to charge a second battery with 2 A at 14 V.');
+    expect(h.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 12],
+      ['out', 28],
+    ]);
+    const k = read('The cold-gas system carries 12 kg of nitrogen in a 40 kg total mass and expels it at 700 m/s.');
+    expect(k.find((x) => x.kind === 'speed')!.role).toBe('exhaust');
+  });
+
+  test('the place a test ran in is no side of a machine', () => {
+    expect(read('The test lasted 45 minutes in a room held at 21 °C.').find((x) => x.kind === 'temperature')!.role).toBe('aside');
+  });
+});

@@ -1,0 +1,163 @@
+/**
+ * The figure reader: each unit converted as the references give it, and each kind read in symbols and in words.
+ *
+ * Against outside references: NIST SP 811 (2008), "Guide for the Use of the International System of
+ * Units (SI)", Appendix B.8 and B.9 conversion factors and §4.2.1.1 (Celsius temperature); the SI
+ * prefixes of the BIPM SI Brochure (9th ed., 2019, Table 7). SP 811 prints most factors to seven
+ * significant digits, so those checks allow half a unit in the seventh.
+ *
+ * Every text here is invented test data: invented devices ("QZ-4 cavity", "Helix-7 rig") and an
+ * invented organisation ("Example Dynamics"), no real people or products.
+ */
+import { parseQuantity, QuantityError } from '../../worksheet/quantity';
+import { extractFigures } from '../reader';
+import { type FigureKind } from '../types';
+import { EXACT, expectRelClose, expectWellFormed, only, SEVEN } from './test-support';
+
+describe('unit conversions (NIST SP 811 Appendix B)', () => {
+  test('pound-force: 1 lbf = 4.448 222 N (SP 811 B.8)', () => {
+    const f = only('The QZ-4 cavity gave 0.2 lbf on the stand (invented test data).');
+    expect(f).toMatchObject({ kind: 'thrust', text: '0.2 lbf', quantity: '0.2 lbf', unit: 'N' });
+    expectRelClose(f.si, 0.2 * 4.448222, SEVEN); // SP 811 B.8, pound-force → newton 4.448 222 E+00
+    expect(f.display).toBe('889.6 mN'); // 0.2 × 4.448 222 N = 0.889 644 N, to 4 digits (the display rule)
+  });
+
+  test('horsepower: 1 hp (550 ft·lbf/s) = 745.699 9 W (SP 811 B.8)', () => {
+    const f = only('A 3 hp motor turns the Helix-7 rig (invented test data).');
+    expectRelClose(f.si, 3 * 745.6999, SEVEN); // SP 811 B.8, horsepower (550 ft·lbf/s) → watt 7.456 999 E+02
+  });
+
+  test('kilowatt hour: 1 kWh = 3.6 × 10^6 J (SP 811 B.8)', () => {
+    const f = only('It stored 3 kWh overnight (invented test data).');
+    expectRelClose(f.si, 3 * 3.6e6, EXACT); // SP 811 B.8, kilowatt hour → joule 3.6 E+06 (exact)
+  });
+
+  test('British thermal unit (IT): 1 Btu = 1 055.056 J (SP 811 B.8)', () => {
+    const f = only('Each cycle released 10 Btu (invented test data).');
+    expect(f.quantity).toBe('10 BTU'); // mathjs spells it BTU
+    expectRelClose(f.si, 10 * 1055.056, SEVEN); // SP 811 B.8, British thermal unit_IT → joule 1.055 056 E+03
+  });
+
+  test('calorie: mathjs has no "cal", so the extractor uses the thermochemical calorie, 4.184 J (SP 811 B.8)', () => {
+    // mathjs 15 knows no calorie at all (so neither the thermochemical nor the IT one): parseQuantity refuses it.
+    expect(() => parseQuantity('1 cal', 'J')).toThrow(QuantityError);
+    const f = only('The cell gave off 2 cal with each pulse (invented test data).');
+    expect(f.text).toBe('2 cal');
+    expectRelClose(f.si, 2 * 4.184, EXACT); // SP 811 B.8, calorie_th → joule 4.184 E+00 (exact)
+    // and not the International Table calorie, 4.1868 J (SP 811 B.8, calorie_IT): that is 0.07 % off.
+    expect(Math.abs(f.si - 2 * 4.1868)).toBeGreaterThan(1e-3);
+    const k = only('The pellet holds 3 kcal (invented test data).');
+    expectRelClose(k.si, 3 * 4184, EXACT); // SP 811 B.8, kilocalorie_th → joule 4.184 E+03 (exact)
+  });
+
+  test('pound (avoirdupois): 1 lb = 0.453 592 37 kg (SP 811 B.8)', () => {
+    const f = only('The frame weighs 10 lb (invented test data).');
+    expectRelClose(f.si, 10 * 0.45359237, EXACT); // SP 811 B.8, pound (avoirdupois) → kilogram 4.535 924 E-01; exact by definition
+  });
+
+  test('mile per hour: 1 mi/h = 0.447 04 m/s (SP 811 B.8); "mph" is written "mi/h" for mathjs', () => {
+    expect(() => parseQuantity('1 mph', 'm / s')).toThrow(QuantityError); // mathjs knows no "mph"
+    const f = only('The cart reached 60 mph (invented test data).');
+    expect(f.quantity).toBe('60 mi/h');
+    expectRelClose(f.si, 60 * 0.44704, EXACT); // SP 811 B.8, mile per hour → meter per second 4.4704 E-01 (exact)
+  });
+
+  test('Celsius and Fahrenheit: t/°C = T/K − 273.15, t/°F = 1.8·(T/K) − 459.67 (SP 811 §4.2.1.1, B.9)', () => {
+    const c = only('The boiler runs at 300 °C (invented test data).');
+    expectRelClose(c.si, 300 + 273.15, EXACT); // SP 811 §4.2.1.1: T/K = t/°C + 273.15
+    const f = only('The vent reads 100 degrees Fahrenheit (invented test data).');
+    expectRelClose(f.si, (100 + 459.67) / 1.8, EXACT); // SP 811 B.9: T/K = (t/°F + 459.67)/1.8
+    const m = only('The cold plate sits at −40 °F (invented test data).');
+    expectRelClose(m.si, (-40 + 459.67) / 1.8, EXACT); // SP 811 B.9; −40 °F = −40 °C = 233.15 K (from memory)
+  });
+});
+
+describe('each kind, in symbols and in words (invented test data)', () => {
+  // Expected SI values: SI prefixes from the BIPM SI Brochure (9th ed.) Table 7 (m = 10^-3, µ = 10^-6,
+  // k = 10^3, M = 10^6, G = 10^9); other factors from NIST SP 811 B.8/B.9 as in the block above.
+  const LBF = 4.448222; // SP 811 B.8
+  const HP = 745.6999; // SP 811 B.8
+  const cases: [string, FigureKind, number, number][] = [
+    // [written form, kind, SI value, relative tolerance]
+    ['5 N', 'thrust', 5, EXACT],
+    ['5 newtons', 'thrust', 5, EXACT],
+    ['12 mN', 'thrust', 12e-3, EXACT],
+    ['12 millinewtons', 'thrust', 12e-3, EXACT],
+    ['40 µN', 'thrust', 40e-6, EXACT],
+    ['40 μN', 'thrust', 40e-6, EXACT], // Greek mu (U+03BC), as pasted from some editors
+    ['40 uN', 'thrust', 40e-6, EXACT],
+    ['40 micronewtons', 'thrust', 40e-6, EXACT],
+    ['3 kN', 'thrust', 3e3, EXACT],
+    ['3 Kilonewtons', 'thrust', 3e3, EXACT],
+    ['0.2 lbf', 'thrust', 0.2 * LBF, SEVEN],
+    ['0.2 pounds of thrust', 'thrust', 0.2 * LBF, SEVEN],
+    ['0.2 pound-force', 'thrust', 0.2 * LBF, SEVEN],
+    ['75 W', 'power', 75, EXACT],
+    ['75 watts', 'power', 75, EXACT],
+    ['250 mW', 'power', 0.25, EXACT],
+    ['250 milliwatts', 'power', 0.25, EXACT],
+    ['1.5 kW', 'power', 1500, EXACT],
+    ['1.5 kilowatts', 'power', 1500, EXACT],
+    ['2 MW', 'power', 2e6, EXACT],
+    ['2 Megawatts', 'power', 2e6, EXACT],
+    ['1 GW', 'power', 1e9, EXACT],
+    ['3 hp', 'power', 3 * HP, SEVEN],
+    ['3 horsepower', 'power', 3 * HP, SEVEN],
+    ['5 J', 'energy', 5, EXACT],
+    ['5 joules', 'energy', 5, EXACT],
+    ['2 kJ', 'energy', 2e3, EXACT],
+    ['4 MJ', 'energy', 4e6, EXACT],
+    ['10 Wh', 'energy', 10 * 3600, EXACT], // 1 W·h = 3600 J (1 h = 3600 s, SI Brochure Table 8)
+    ['3 kWh', 'energy', 3 * 3.6e6, EXACT], // SP 811 B.8
+    ['3 kilowatt-hours', 'energy', 3 * 3.6e6, EXACT],
+    ['3 kilowatt hours', 'energy', 3 * 3.6e6, EXACT],
+    ['1 MWh', 'energy', 3.6e9, EXACT],
+    ['100 BTU', 'energy', 100 * 1055.056, SEVEN], // SP 811 B.8 (IT)
+    ['100 Btu', 'energy', 100 * 1055.056, SEVEN],
+    ['2 calories', 'energy', 2 * 4.184, EXACT], // SP 811 B.8, calorie_th
+    ['300 K', 'temperature', 300, EXACT],
+    ['300 kelvin', 'temperature', 300, EXACT],
+    ['25 °C', 'temperature', 298.15, EXACT], // SP 811 §4.2.1.1
+    ['25 degC', 'temperature', 298.15, EXACT],
+    ['25 degrees Celsius', 'temperature', 298.15, EXACT],
+    ['77 °F', 'temperature', (77 + 459.67) / 1.8, EXACT], // SP 811 B.9
+    ['77 degrees Fahrenheit', 'temperature', (77 + 459.67) / 1.8, EXACT],
+    ['2 kg', 'mass', 2, EXACT],
+    ['2 kilograms', 'mass', 2, EXACT],
+    ['500 g', 'mass', 0.5, EXACT],
+    ['500 grams', 'mass', 0.5, EXACT],
+    ['20 mg', 'mass', 20e-6, EXACT],
+    ['3 t', 'mass', 3000, EXACT], // 1 t = 1000 kg (SI Brochure Table 8)
+    ['3 tonnes', 'mass', 3000, EXACT],
+    ['10 lbs', 'mass', 10 * 0.45359237, EXACT], // SP 811 B.8
+    ['10 pounds', 'mass', 10 * 0.45359237, EXACT],
+    ['3 m/s', 'speed', 3, EXACT],
+    ['3 metres per second', 'speed', 3, EXACT],
+    ['7.8 km/s', 'speed', 7800, EXACT],
+    ['90 km/h', 'speed', 25, EXACT], // 90 000 m / 3600 s (SI Brochure Table 8: 1 h = 3600 s)
+    ['60 miles per hour', 'speed', 60 * 0.44704, EXACT], // SP 811 B.8
+    ['2 A', 'current', 2, EXACT],
+    ['2 amps', 'current', 2, EXACT],
+    ['2 amperes', 'current', 2, EXACT],
+    ['150 mA', 'current', 0.15, EXACT],
+  ];
+
+  test.each(cases)('"%s" is a %s figure', (written, kind, si, rel) => {
+    const text = `On the bench, the Helix-7 rig showed ${written}, which is the claim.`;
+    const f = only(text);
+    expect(f.kind).toBe(kind);
+    expect(f.text).toBe(written);
+    expect(f.start).toBe(text.indexOf(written));
+    expectRelClose(f.si, si, rel);
+  });
+
+  test('a hyphen between number and unit ("a 500-watt heater") and no space ("5kW")', () => {
+    const text = 'A 500-watt heater and a 5kW pump (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.text, f.si])).toEqual([
+      ['500-watt', 500],
+      ['5kW', 5000],
+    ]);
+  });
+});
