@@ -3,6 +3,7 @@ import { useState } from 'react';
 import type { z } from 'zod';
 import { fieldErrors } from '@/shared/schemas/auth';
 import { ApiError, ApiUnreachableError } from '../http/client';
+import { placeFieldErrors, serverFieldErrors } from '../http/fieldErrors';
 
 /** What went wrong with a form as a whole (not with one of its fields), to show above its button. */
 export interface FormProblem {
@@ -60,18 +61,6 @@ export function problemOf(error: Error, leftover: string[] = []): FormProblem {
   return { code: 'failed', message: error.message };
 }
 
-/** Splits field messages into those the form shows beside a field and the rest. */
-function place<K extends string>(names: readonly K[], messages: Record<string, string>) {
-  const fields: Partial<Record<K, string>> = {};
-  const leftover: string[] = [];
-  for (const [key, message] of Object.entries(messages)) {
-    const name = key.replace(/^body\./, '');
-    if ((names as readonly string[]).includes(name)) fields[name as K] ??= message;
-    else leftover.push(message);
-  }
-  return { fields, leftover };
-}
-
 /**
  * A form checked on the client with the same zod schema the server uses, before anything is
  * sent. Each field's message — from the schema or from the server's `fields` (`body.<field>`) —
@@ -96,7 +85,7 @@ export function useForm<K extends string, Body, Result>({
     if (mutation.isPending) return;
     const parsed = schema.safeParse(body(values));
     const found = { ...(parsed.success ? {} : fieldErrors(parsed.error)), ...check?.(values) } as Record<string, string>;
-    const { fields, leftover } = place(names, found);
+    const { fields, leftover } = placeFieldErrors(names, found);
     setErrors(fields);
     setSucceeded(undefined);
     if (!parsed.success || Object.keys(found).length > 0) {
@@ -111,7 +100,7 @@ export function useForm<K extends string, Body, Result>({
         onSuccess?.(result);
       },
       onError: (error) => {
-        const server = place(names, error instanceof ApiError ? (error.fields ?? {}) : {});
+        const server = placeFieldErrors(names, serverFieldErrors(error));
         setErrors(server.fields);
         const placedAll = Object.keys(server.fields).length > 0 && server.leftover.length === 0;
         setProblem(placedAll ? null : problemOf(error, server.leftover));

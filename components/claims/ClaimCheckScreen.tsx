@@ -9,7 +9,7 @@ import { router } from 'expo-router';
 import { useCallback, useEffect, useId, useMemo, useRef, useState } from 'react';
 import { StyleSheet, Text, TextInput, View, type NativeSyntheticEvent, type TextInputKeyPressEventData } from 'react-native';
 import { CLAIM_TEXT_MAX, type ParagraphVariant } from '@/shared/claims/types';
-import { ApiError } from '../http/client';
+import { serverFieldErrors } from '../http/fieldErrors';
 import { useSession } from '../queries/accounts';
 import { CITATION_STYLE_LABEL, type CitationStyle, type ClaimCheckRequest, type ClaimCheckResult } from '@/shared/api-types';
 import { useRunClaimCheck, useSavedClaimCheck } from '../queries/claimChecks';
@@ -188,7 +188,7 @@ export function ClaimCheckScreen({ from, resume = false }: ClaimCheckScreenProps
   };
 
   const error = run.error;
-  const fields = error instanceof ApiError ? (error.fields ?? {}) : {};
+  const fields = serverFieldErrors(error);
   const textError = fields['body.text'];
   const figureErrors: Record<string, FigureServerErrors> = {};
   for (const [field, message] of Object.entries(fields)) {

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { ApiError } from '../http/client';
+import { serverFieldErrors } from '../http/fieldErrors';
 import { useRetireEntry } from '../queries/entries';
 import { ProblemNotice } from '../auth/Form';
 import { problemOf } from '../auth/useForm';
@@ -23,7 +23,7 @@ export function RetirePanel({ slug, title }: { slug: string; title: string }) {
   if (role !== 'editor' && role !== 'admin') return null;
   if (!open) return <Button testID="retire-open" variant="quiet" label="Retire…" onPress={() => setOpen(true)} />;
 
-  const fields = retire.error instanceof ApiError ? (retire.error.fields ?? {}) : {};
+  const fields = serverFieldErrors(retire.error);
   const send = () => retire.mutate({ reason: reason.trim(), ...(successor.trim() ? { successor: successor.trim() } : {}) });
   return (
     <View testID="retire-panel" style={styles.root}>

@@ -10,6 +10,7 @@ import type { UserDto } from '@/shared/api-types';
 import { slugSchema } from '@/shared/entries/schema';
 import { RoleGate } from '../account/RoleGate';
 import { ApiError } from '../http/client';
+import { serverFieldErrors } from '../http/fieldErrors';
 import { useSearch } from '../queries/search';
 import { useSession } from '../queries/accounts';
 import { useTaxonomy } from '../queries/taxonomy';
@@ -211,7 +212,7 @@ function DecisionPanel({ submission: s, user, onStale }: { submission: Submissio
   );
 }
 
-const fieldOf = (error: Error | null, key: string) => (error instanceof ApiError ? error.fields?.[key] : undefined);
+const fieldOf = (error: Error | null, key: string): string | undefined => serverFieldErrors(error)[key];
 
 function AcceptSighting({ busy, onSend }: { busy: boolean; onSend: (body: DecideBody) => void }) {
   const [q, setQ] = useState('');

@@ -7,7 +7,7 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { CORRECTION_SECTIONS, type CorrectionSection, type SubmissionDto } from '@/shared/submissions/types';
 import { ChoiceChips } from '../admin/ChoiceChips';
-import { ApiError } from '../http/client';
+import { serverFieldErrors } from '../http/fieldErrors';
 import { useSession } from '../queries/accounts';
 import { useEntrySightings, useSubmitCorrection } from '../queries/submissions';
 import { formatDay } from '../entry/format';
@@ -130,7 +130,7 @@ function CorrectionForm({ slug, version, title, onDone, onCancel }: CorrectionFo
   if (suggestedFix.trim().length < 1) local['body.suggestedFix'] = 'Say how it should read instead.';
   else if (suggestedFix.length > 5000) local['body.suggestedFix'] = 'Keep it to 5000 characters.';
   if (sources.length > 3000) local['body.sources'] = `The sources are ${sources.length} characters; keep them to 3000.`;
-  const server = submit.error instanceof ApiError ? (submit.error.fields ?? {}) : {};
+  const server = serverFieldErrors(submit.error);
   const errorFor = (key: string) => (tried ? local[key] : undefined) ?? server[key];
 
   const send = () => {

@@ -11,7 +11,7 @@ import type { UserDto } from '@/shared/api-types';
 import { FIGURE_KIND_LABEL, FIGURE_KIND_SHORT, FIGURE_KINDS, type FigureKind } from '@/shared/claims/types';
 import { ATTACHMENT_TYPES, ATTACHMENTS_MAX, type SubmissionDto } from '@/shared/submissions/types';
 import { ChoiceChips } from '../admin/ChoiceChips';
-import { ApiError } from '../http/client';
+import { serverFieldErrors } from '../http/fieldErrors';
 import { useSession } from '../queries/accounts';
 import { type PickedFile, useSubmitSighting } from '../queries/submissions';
 import { ResendVerification } from '../auth/ResendVerification';
@@ -106,18 +106,16 @@ function SightingForm({ user }: { user: UserDto }) {
   // The server's field errors, mapped onto the rows and files they were sent as.
   const server: Record<string, string> = {};
   const leftover: string[] = [];
-  if (submit.error instanceof ApiError && submit.error.fields) {
-    for (const [key, message] of Object.entries(submit.error.fields)) {
-      const fig = /^body\.figures\.(\d+)(?:\.|$)/.exec(key);
-      const file = /^files\.(\d+)$/.exec(key);
-      if (fig && sent.current.figures[Number(fig[1])]) server[`figure.${sent.current.figures[Number(fig[1])]}`] = message;
-      else if (file) {
-        const at = files.findIndex((f) => f.key === sent.current.files[Number(file[1])]);
-        if (at >= 0) server[`files.${at}`] = message;
-        else leftover.push(message);
-      } else if (['body.title', 'body.seenAtUrl', 'body.seenAtCitation', 'body.summary', 'body.figures', 'files'].includes(key)) server[key] = message;
+  for (const [key, message] of Object.entries(serverFieldErrors(submit.error))) {
+    const fig = /^body\.figures\.(\d+)(?:\.|$)/.exec(key);
+    const file = /^files\.(\d+)$/.exec(key);
+    if (fig && sent.current.figures[Number(fig[1])]) server[`figure.${sent.current.figures[Number(fig[1])]}`] = message;
+    else if (file) {
+      const at = files.findIndex((f) => f.key === sent.current.files[Number(file[1])]);
+      if (at >= 0) server[`files.${at}`] = message;
       else leftover.push(message);
-    }
+    } else if (['body.title', 'body.seenAtUrl', 'body.seenAtCitation', 'body.summary', 'body.figures', 'files'].includes(key)) server[key] = message;
+    else leftover.push(message);
   }
   const errorFor = (key: string) => shown[key] ?? server[key];
 

@@ -6,6 +6,7 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { ApiError } from '../http/client';
+import { serverFieldErrors } from '../http/fieldErrors';
 import { useSession } from '../queries/accounts';
 import { useAnswerSubmission, useSubmission } from '../queries/submissions';
 import type { SubmissionDto } from '@/shared/api-types';
@@ -123,7 +124,7 @@ function AnswerBox({ submission }: { submission: SubmissionDto }) {
   const empty = message.trim() === '';
   const fieldError =
     (tried && empty ? 'Write your answer first.' : undefined) ??
-    (answer.error instanceof ApiError ? answer.error.fields?.['body.message'] : undefined) ??
+    serverFieldErrors(answer.error)['body.message'] ??
     (message.length > 5000 ? `Your answer is ${message.length} characters; keep it to 5000.` : undefined);
   const send = () => {
     setTried(true);
