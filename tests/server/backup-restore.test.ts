@@ -119,12 +119,39 @@ const count = async (seq: Sequelize, sql: string) => Number((await seq.query<{ n
 describe('backup and restore', () => {
   const pdf = minimalPdf();
   const png = minimalPng();
-  let source: Snapshot;
-  let archive: string;
-  let backups: string;
-  let sourceUploads: string;
+  /**
+   * What the tests need is made on first use and kept for the file: the data of every kind, then one
+   * backup of it. Each test asks for what it needs, so that any one of them also passes run alone.
+   */
+  let seeded: Promise<void> | undefined;
+  const dataOfEveryKind = () => (seeded ??= seedEveryKind());
+  let made: Promise<Backup> | undefined;
+  const backupOfIt = () => (made ??= dataOfEveryKind().then(makeBackup));
 
-  it('has data of every kind to back up', async () => {
+  interface Backup {
+    source: Snapshot;
+    archive: string;
+    backups: string;
+    sourceUploads: string;
+    /** The backup command's exit code and output, and the time it started. */
+    r: Awaited<ReturnType<typeof cli>>;
+    before: number;
+  }
+
+  async function makeBackup(): Promise<Backup> {
+    const source = await snapshot(h.t.sequelize);
+    const backups = tmp('cw-backups-');
+    dirs.push(backups);
+    const sourceUploads = (h.store as LocalStore).dir;
+    const data = tmp('cw-backup-data-');
+    dirs.push(data);
+    const before = Date.now();
+    const r = await cli(['backup'], { db: h.t.db, uploads: sourceUploads, backups, data });
+    const files = fs.readdirSync(backups);
+    return { source, archive: path.join(backups, files[0] ?? 'no-archive-written'), backups, sourceUploads, r, before };
+  }
+
+  async function seedEveryKind(): Promise<void> {
     const one = await h.signedIn(demo.editor.email);
     const two = await h.signedIn(demo.editor2.email);
     // A revision of a starter entry, published by the second editor: version 2.
@@ -155,6 +182,10 @@ describe('backup and restore', () => {
     expect(saved.status).toBe(201);
 
     await (h.app.locals as unknown as AppLocals).settle();
+  }
+
+  it('has data of every kind to back up', async () => {
+    await dataOfEveryKind();
     // Each kind is really there, so that the comparison below compares something.
     const seq = h.t.sequelize;
     expect(await count(seq, "SELECT COUNT(*) n FROM entry_versions WHERE state = 'published'")).toBeGreaterThanOrEqual(2);
@@ -166,14 +197,7 @@ describe('backup and restore', () => {
   });
 
   it('backs up into one archive in BACKUP_DIR, named with the UTC time, with the SHA-256 of the dump and of every attachment', async () => {
-    source = await snapshot(h.t.sequelize);
-    backups = tmp('cw-backups-');
-    dirs.push(backups);
-    sourceUploads = (h.store as LocalStore).dir;
-    const data = tmp('cw-backup-data-');
-    dirs.push(data);
-    const before = Date.now();
-    const r = await cli(['backup'], { db: h.t.db, uploads: sourceUploads, backups, data });
+    const { source, backups, r, before } = await backupOfIt();
     expect(r.stderr).toBe('');
     expect(r.code).toBe(0);
     const files = fs.readdirSync(backups);
@@ -183,7 +207,7 @@ describe('backup and restore', () => {
     const stamp = Date.UTC(+y, +mo - 1, +d, +hh, +mi, +ss);
     expect(stamp).toBeGreaterThanOrEqual(Math.floor(before / 1000) * 1000);
     expect(stamp).toBeLessThanOrEqual(Date.now());
-    archive = path.join(backups, files[0]);
+    const archive = path.join(backups, files[0]);
     expect(fs.statSync(archive).mode & 0o777).toBe(0o600); // password hashes and sessions inside
     expect(r.stdout).toContain(files[0]);
 
@@ -206,6 +230,7 @@ describe('backup and restore', () => {
   });
 
   it('restores into an empty database and an empty attachment directory: every table, row, trigger and file identical', async () => {
+    const { source, archive, backups, sourceUploads } = await backupOfIt();
     const uploads = tmp('cw-restored-uploads-');
     dirs.push(uploads);
     const data = tmp('cw-restore-data-');
@@ -233,6 +258,7 @@ describe('backup and restore', () => {
   });
 
   it('refuses to restore into a database that has tables, with a clear message and a non-zero exit, writing nothing', async () => {
+    const { source, archive, backups } = await backupOfIt();
     const uploads = tmp('cw-refused-uploads-');
     dirs.push(uploads);
     const data = tmp('cw-refused-data-');
@@ -245,6 +271,7 @@ describe('backup and restore', () => {
   });
 
   it('refuses a backup whose bytes differ from its manifest before writing anything', async () => {
+    const { archive } = await backupOfIt();
     // Unpack, change one byte of one attachment, pack again with the same manifest.
     const work = tmp('cw-tamper-');
     dirs.push(work);
