@@ -6,13 +6,12 @@
  * the speed of light") added; then the relations (comparisons.ts, relations.ts) and the SI values.
  */
 import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
-import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
 import { C_M_PER_S } from '../figures-vocabulary';
-import { HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
+import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
 import { relate } from './comparisons';
+import { BEFORE_WINDOW, HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
 import type { Draft } from './draft';
 import { bareKind, GAIN_PER_UNIT_RE, ISP_AFTER_RE, ISP_BEFORE_RE, MULTIPLE_VALUE, MULTIPLE_WORD_RE, readPercent, TEMPERATURE_CONTEXT_RE } from './kinds';
-import { BEFORE_WINDOW } from './context';
 import { tokenize, type NumberToken } from './numbers';
 import { hedgeBefore, isRangeGap, roleContextStart } from './ranges-hedges';
 import { lastRoleWords, roleFor } from './roles';
