@@ -2,6 +2,7 @@ import { usePathname } from 'expo-router';
 import type { ReactNode } from 'react';
 import type { Role } from '@/shared/schemas/auth';
 import { useSession } from '../queries/accounts';
+import { can } from '@/shared/policies';
 import { sectionFor, type RoleSectionKey } from '../nav/sections';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
@@ -34,7 +35,8 @@ export function RoleGate({ section, children }: { section: RoleSectionKey; child
   if (error) return <ErrorNotice testID="session-error" error={error} what="who is signed in" onRetry={() => void refetch()} />;
 
   const { user } = data;
-  if (user && roles.includes(user.role)) return <>{children}</>;
+  const { action } = sectionFor(section);
+  if (user && action && can(user, action)) return <>{children}</>;
   if (!user) {
     return (
       <Notice

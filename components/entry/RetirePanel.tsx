@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
+import { can } from '@/shared/policies';
 import { serverFieldErrors } from '../http/fieldErrors';
 import { useRetireEntry } from '../queries/entries';
 import { ProblemNotice } from '../auth/Form';
@@ -20,7 +21,7 @@ export function RetirePanel({ slug, title }: { slug: string; title: string }) {
   const [open, setOpen] = useState(false);
   const [reason, setReason] = useState('');
   const [successor, setSuccessor] = useState('');
-  if (role !== 'editor' && role !== 'admin') return null;
+  if (!can(role, 'entries.retire')) return null;
   if (!open) return <Button testID="retire-open" variant="quiet" label="Retire…" onPress={() => setOpen(true)} />;
 
   const fields = serverFieldErrors(retire.error);

@@ -3,6 +3,7 @@ import { View } from 'react-native';
 import { problemOf } from '../auth/useForm';
 import { ProblemNotice } from '../auth/Form';
 import { openDraftOf, useReviseEntry } from '../queries/drafts';
+import { can } from '@/shared/policies';
 import { Button } from '../ui/Button';
 import { useViewer } from '../viewer';
 
@@ -14,7 +15,7 @@ import { useViewer } from '../viewer';
 export function ReviseButton({ slug }: { slug: string }) {
   const { role } = useViewer();
   const revise = useReviseEntry();
-  if (role !== 'editor' && role !== 'admin') return null;
+  if (!can(role, 'entries.startDraft')) return null;
 
   const start = () =>
     revise.mutate(slug, {

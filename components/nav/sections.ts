@@ -1,8 +1,10 @@
 /**
  * The app's sections, in navigation order, and which roles are offered each (DESIGN.md §5):
  * Desk to editors, Queue to moderators, Admin to admins; admins are offered Desk and Queue too.
- * The server checks the same rights on every route; this table only decides what is shown.
+ * Who is offered a section is the policy of the route its screen opens with (shared/policies.ts),
+ * the same table the server checks on every route; this list only decides what is shown.
  */
+import { can, rolesOf, type Action } from '@/shared/policies';
 import type { Role } from '../viewer';
 
 export type SectionKey = 'library' | 'check' | 'checks' | 'desk' | 'queue' | 'admin' | 'account';
@@ -11,6 +13,9 @@ export interface NavSection {
   key: SectionKey;
   href: '/' | `/${Exclude<SectionKey, 'library'>}`;
   label: string;
+  /** The route action whose policy decides who is offered the section; none: everyone. */
+  action?: Action;
+  /** The roles offered it (from the policy), for words such as "Editors and admins only". */
   roles: readonly Role[];
 }
 
@@ -20,9 +25,9 @@ export const sections: readonly NavSection[] = [
   { key: 'library', href: '/', label: 'Library', roles: everyone },
   { key: 'check', href: '/check', label: 'Claim check', roles: everyone },
   { key: 'checks', href: '/checks', label: 'Check kit', roles: everyone },
-  { key: 'desk', href: '/desk', label: 'Desk', roles: ['editor', 'admin'] },
-  { key: 'queue', href: '/queue', label: 'Queue', roles: ['moderator', 'admin'] },
-  { key: 'admin', href: '/admin', label: 'Admin', roles: ['admin'] },
+  { key: 'desk', href: '/desk', label: 'Desk', action: 'desk.read', roles: rolesOf('desk.read') },
+  { key: 'queue', href: '/queue', label: 'Queue', action: 'queue.list', roles: rolesOf('queue.list') },
+  { key: 'admin', href: '/admin', label: 'Admin', action: 'users.list', roles: rolesOf('users.list') },
   { key: 'account', href: '/account', label: 'Account', roles: everyone },
 ];
 
@@ -34,7 +39,7 @@ export function sectionFor(key: SectionKey): NavSection {
 }
 
 export function sectionsFor(role: Role): NavSection[] {
-  return sections.filter((section) => section.roles.includes(role));
+  return sections.filter((section) => !section.action || can(role, section.action));
 }
 
 /** The section a path belongs to: the Library holds `/` and the entry pages, the others their own subpaths. */

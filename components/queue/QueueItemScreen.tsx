@@ -8,6 +8,7 @@ import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { UserDto } from '@/shared/api-types';
 import { slugSchema } from '@/shared/entries/schema';
+import { can } from '@/shared/policies';
 import { RoleGate } from '../account/RoleGate';
 import { ApiError } from '../http/client';
 import { serverFieldErrors } from '../http/fieldErrors';
@@ -34,7 +35,7 @@ import { FieldError } from '../worksheet/QuantityField';
 export function QueueItemScreen({ id }: { id: number }) {
   const { data } = useSession();
   const role = data?.user?.role;
-  if (role === 'moderator' || role === 'admin') return <SignedInItem id={id} />;
+  if (role && can(role, 'queue.claim')) return <SignedInItem id={id} />;
   // Anyone else (or while the session loads): the gate says who the queue is for and what to do.
   return (
     <Screen testID="screen-queue-item" title="Queue item">
@@ -81,7 +82,6 @@ function Item({ submission: s, user, onStale }: { submission: SubmissionDto; use
   const release = useRelease(s.id);
   const own = s.submitter.id === user.id;
   const heldByMe = s.status === 'claimed' && s.claimedBy?.id === user.id;
-  const heldByOther = s.status === 'claimed' && s.claimedBy && s.claimedBy.id !== user.id;
   const decided = DECIDED.includes(s.status);
   const actionError = claim.error ?? release.error;
   // What the server says of someone else's claim holds more than what this page last showed.
@@ -119,7 +119,7 @@ function Item({ submission: s, user, onStale }: { submission: SubmissionDto; use
               <Button testID="item-claim" label="Take it up" busy={claim.isPending} busyLabel="Taking it up…" onPress={() => claim.mutate(undefined, { onError })} />
             </>
           ) : null}
-          {heldByMe || (heldByOther && user.role === 'admin') ? (
+          {s.status === 'claimed' && s.claimedBy && can(user, 'queue.releaseHeld', { userId: user.id, ownerId: s.claimedBy.id }) ? (
             <Button
               testID="item-release"
               variant="quiet"
@@ -198,7 +198,7 @@ function DecisionPanel({ submission: s, user, onStale }: { submission: Submissio
             <Button testID="item-confirm" label="Accept and forward" busy={decide.isPending} busyLabel="Forwarding…" onPress={() => send({ decision: 'accept' })} />
           </View>
         ) : null}
-        {decision === 'draft' ? <DraftForm isAdmin={user.role === 'admin'} busy={decide.isPending} onSend={send} /> : null}
+        {decision === 'draft' ? <DraftForm isAdmin={can(user, 'users.list')} busy={decide.isPending} onSend={send} /> : null}
         {decision === 'ask' || decision === 'reject' ? (
           <NoteForm key={decision} decision={decision} busy={decide.isPending} serverError={fieldOf(decide.error, 'body.note')} onSend={send} />
         ) : null}
