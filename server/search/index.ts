@@ -215,7 +215,12 @@ export class SearchIndex {
     const out = new Set([slug]);
     for (let grew = true; grew; ) {
       grew = false;
-      for (const [s, c] of this.classes) if (c.parent && out.has(c.parent) && !out.has(s)) (out.add(s), (grew = true));
+      for (const [s, c] of this.classes) {
+        if (c.parent && out.has(c.parent) && !out.has(s)) {
+          out.add(s);
+          grew = true;
+        }
+      }
     }
     return out;
   }
