@@ -41,10 +41,14 @@ describe.each([
     page = await h.open(width, height);
   });
   afterAll(() => page.context().close());
-
-  it('renders the Library in our fonts with the starter taxonomy', async () => {
+  /** Each test opens the Library itself, so that it does not depend on where an earlier one left the page. */
+  const openLibrary = async () => {
     await page.goto(h.base + '/');
     await byTestId(page, 'screen-library').waitFor();
+  };
+
+  it('renders the Library in our fonts with the starter taxonomy', async () => {
+    await openLibrary();
     await page.getByText('Conservation of linear momentum').first().waitFor();
     const families = await loadedFamilies(page);
     for (const family of ['IBMPlexSans_400Regular', 'SourceSerif4_400Regular', 'IBMPlexMono_400Regular']) {
@@ -56,7 +60,9 @@ describe.each([
   });
 
   it(`shows the ${navId === 'nav-bar' ? 'bottom bar' : 'left rail'}`, async () => {
+    await openLibrary();
     const nav = byTestId(page, navId);
+    await nav.waitFor();
     await expect(nav.isVisible()).resolves.toBe(true);
     const box = (await nav.boundingBox())!;
     if (navId === 'nav-bar') {
@@ -71,6 +77,7 @@ describe.each([
   });
 
   it('moves between sections and marks the active one', async () => {
+    await openLibrary();
     const nav = byTestId(page, navId);
     await nav.locator('[data-testid="nav-check"]').click();
     await byTestId(page, 'screen-check').waitFor();
