@@ -20,6 +20,7 @@ import { apiNotFound, errorHandler } from './http/errors';
 import { rateLimiters, rateLimitsFromEnv, type RateLimits } from './http/rate-limit';
 import { ComputePool, type ComputeOptions } from './compute/pool';
 import { computeConfig } from './config';
+import { mailAfterCommit } from './mail/after-commit';
 import { createMailer, type Mailer } from './mail/mailer';
 import { policyGuard } from './policies';
 import { accountRoutes } from './routes/account';
@@ -44,8 +45,8 @@ import { taxonomyRoutes } from './routes/taxonomy';
 import { worksheetRoutes } from './routes/worksheets';
 import { Accounts } from './services/accounts';
 import { ClaimChecks } from './services/claim-checks';
-import { Entries } from './services/entries';
-import { Submissions } from './services/submissions';
+import { createEntries } from './services/entries';
+import { createSubmissions } from './services/submissions';
 import { Synonyms } from './services/synonyms';
 import { S3Store, storageFromEnv, type ObjectStore } from './storage';
 import { SearchIndex } from './search';
@@ -178,7 +179,7 @@ export function createApp(opts: AppOptions): express.Express {
       rateLimits.stop();
       await compute.close();
       await search.stop();
-      submissions.stop();
+      submissions.digest.stop();
       if (!opts.store && store instanceof S3Store) store.close();
       await locals.settle();
     },
@@ -188,28 +189,30 @@ export function createApp(opts: AppOptions): express.Express {
   const origin = (req: express.Request) => opts.publicUrl ?? `${req.protocol}://${req.get('host')}`;
   const search = new SearchIndex({ refreshMs: opts.searchRefreshMs ?? 5000, logger });
   search.start();
-  const entries = new Entries({
+  // Mail that follows a committed change goes after the answer (server/mail/after-commit.ts).
+  const mail = mailAfterCommit({ mailer, later });
+  const entries = createEntries({
     sequelize: opts.sequelize,
-    mailer,
-    later,
+    mail,
     changed: (slug) => search.update(slug).catch((err) => logger.error({ err, slug }, 'search index update failed')),
   });
 
   const store = opts.store ?? storageFromEnv();
-  const submissions = new Submissions({
+  const submissions = createSubmissions({
     sequelize: opts.sequelize,
     store,
     mailer,
-    entries,
+    mail,
+    drafts: entries.drafts,
     later,
     digestMs: opts.submissionDigestMs ?? 60_000,
     logger,
     // An accepted sighting is indexed as part of the entries it is linked to (issue 11).
     linked: (slugs) => Promise.all(slugs.map((slug) => search.update(slug).catch((err) => logger.error({ err, slug }, 'search index update failed')))).then(() => undefined),
   });
-  if (opts.publicUrl) submissions.origin = opts.publicUrl;
+  if (opts.publicUrl) submissions.digest.origin = opts.publicUrl;
   // Items that arrived before a restart and were never listed in a digest.
-  submissions.scheduleDigest();
+  submissions.digest.schedule();
 
   const api = express.Router();
   api.use(express.json({ limit: opts.jsonLimit ?? '256kb' }));
@@ -238,7 +241,7 @@ export function createApp(opts: AppOptions): express.Express {
   api.use(submissionRoutes(allow, submissions, origin));
   api.use(attachmentRoutes(allow, submissions));
   api.use(queueRoutes(allow, submissions));
-  api.use(claimCheckRoutes(allow, new ClaimChecks({ sequelize: opts.sequelize, index: search, entries, compute }), origin, limits.claimCheck));
+  api.use(claimCheckRoutes(allow, new ClaimChecks({ sequelize: opts.sequelize, index: search, library: entries.library, compute }), origin, limits.claimCheck));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -21,15 +21,13 @@ import { HttpError } from '../http/errors';
 import { SavedClaimCheck, type User } from '../models';
 import { permalink } from '../../shared/permalink';
 import { citedItem } from '../presenters/citation';
+import { savedClaimCheck, savedClaimCheckSummary } from '../presenters/claim-checks';
 import type { ClaimCheckInput } from '../routes/claim-checks/schema';
 import { matchClaim } from '../search/claim-match';
 import type { SearchIndex } from '../search';
-import type { Entries } from './entries';
+import type { Library } from './entries';
 
 export type { ClaimCheckInput };
-
-/** The share link of a saved check (the screen's route). */
-const shareUrl = (origin: string, token: string) => `${origin}/check/${token}`;
 
 /** Entries the paragraph names: the best match and up to two related ones. */
 const PARAGRAPH_ENTRIES = 3;
@@ -37,7 +35,8 @@ const PARAGRAPH_ENTRIES = 3;
 export interface ClaimChecksDeps {
   sequelize: Sequelize;
   index: SearchIndex;
-  entries: Entries;
+  /** The published library, for the cited versions. */
+  library: Library;
   /** The worker threads that read the text and run the checks (issue 13). */
   compute: ComputePool;
 }
@@ -63,7 +62,7 @@ export class ClaimChecks {
         const { slug, version: n } = h.entry;
         let version;
         try {
-          ({ version } = await this.deps.entries.versionRow(slug, n));
+          ({ version } = await this.deps.library.versionRow(slug, n));
         } catch (err) {
           // Retired or gone since the index last refreshed: leave it out.
           if (err instanceof HttpError && err.status === 404) return null;
@@ -107,19 +106,6 @@ export class ClaimChecks {
     };
   }
 
-  private dto(row: SavedClaimCheck, viewer: User | undefined, origin: string): SavedClaimCheckDto {
-    return {
-      token: row.token,
-      url: shareUrl(origin, row.token),
-      createdAt: row.createdAt.toISOString(),
-      text: row.text,
-      style: row.style,
-      figures: row.figures,
-      result: row.result,
-      mine: viewer !== undefined && viewer.id === row.ownerId,
-    };
-  }
-
   async save(owner: User, input: ClaimCheckInput, origin: string, res: Response): Promise<SavedClaimCheckDto> {
     const result = await this.run(input, origin, res);
     const row = await this.deps.sequelize.transaction((transaction) =>
@@ -137,7 +123,7 @@ export class ClaimChecks {
         { transaction },
       ),
     );
-    return this.dto(row, owner, origin);
+    return savedClaimCheck(row, owner, origin);
   }
 
   async listMine(owner: User, origin: string): Promise<SavedClaimCheckSummaryDto[]> {
@@ -147,13 +133,7 @@ export class ClaimChecks {
       order: [['createdAt', 'DESC'], ['id', 'DESC']],
       limit: 200,
     });
-    return rows.map((r) => ({
-      token: r.token,
-      url: shareUrl(origin, r.token),
-      createdAt: r.createdAt.toISOString(),
-      preview: r.text.replace(/\s+/g, ' ').trim().slice(0, 120),
-      topMatch: r.topMatch,
-    }));
+    return rows.map((r) => savedClaimCheckSummary(r, origin));
   }
 
   private async find(token: string): Promise<SavedClaimCheck> {
@@ -163,7 +143,7 @@ export class ClaimChecks {
   }
 
   async read(token: string, viewer: User | undefined, origin: string): Promise<SavedClaimCheckDto> {
-    return this.dto(await this.find(token), viewer, origin);
+    return savedClaimCheck(await this.find(token), viewer, origin);
   }
 
   async delete(actor: User, token: string): Promise<void> {

@@ -6,6 +6,7 @@
 import { Router } from 'express';
 import { validated } from '../../http/validate';
 import type { Allow } from '../../policies';
+import * as present from '../../presenters/accounts';
 import type { Accounts } from '../../services/accounts';
 import { changePasswordSchema, updateAccountSchema } from './schema';
 
@@ -15,7 +16,7 @@ export function accountRoutes(allow: Allow, accounts: Accounts): Router {
   r.patch('/account', allow('account.updateProfile'), validated({ body: updateAccountSchema }), async (req, res) => {
     const { displayName } = res.locals.valid.body;
     const user = await accounts.changeDisplayName(req.user!.id, displayName);
-    res.json({ user: user.toDto() });
+    res.json({ user: present.user(user) });
   });
 
   r.post('/account/password', allow('account.changePassword'), validated({ body: changePasswordSchema }), async (req, res) => {

@@ -9,6 +9,7 @@ import { HttpError } from '../../http/errors';
 import { validated } from '../../http/validate';
 import { AuditEvent, OutboxMessage, User } from '../../models';
 import type { Allow } from '../../policies';
+import * as present from '../../presenters/accounts';
 import type { Accounts } from '../../services/accounts';
 import { pageQuerySchema, setRoleSchema, userIdParams, userListQuerySchema } from './schema';
 
@@ -43,14 +44,14 @@ export function adminRoutes(allow: Allow, accounts: Accounts, env: string): Rout
       limit,
       offset,
     });
-    const payload: UserListResponse = { users: rows.map((u) => u.toDto()), total: count };
+    const payload: UserListResponse = { users: rows.map(present.user), total: count };
     res.set('Cache-Control', 'no-store').json(payload);
   });
 
   r.patch('/admin/users/:id/role', allow('users.setRole'), validated({ params: userIdParams, body: setRoleSchema }), async (req, res) => {
     const { params: { id }, body: { role } } = res.locals.valid;
     const user = await accounts.setRole(req.user!.id, id, role);
-    res.json({ user: user.toDto() });
+    res.json({ user: present.user(user) });
   });
 
   r.get('/admin/audit', allow('audit.list'), validated({ query: pageQuerySchema }), async (_req, res) => {
@@ -61,13 +62,13 @@ export function adminRoutes(allow: Allow, accounts: Accounts, env: string): Rout
       limit,
       offset,
     });
-    const payload: AuditListResponse = { events: rows.map((e) => e.toDto()), total: count };
+    const payload: AuditListResponse = { events: rows.map(present.auditEvent), total: count };
     res.set('Cache-Control', 'no-store').json(payload);
   });
 
   r.get('/admin/outbox', developmentOnly(env), allow('outbox.list'), async (_req, res) => {
     const rows = await OutboxMessage.findAll({ order: [['receivedAt', 'DESC'], ['id', 'DESC']], limit: 200 });
-    const payload: OutboxResponse = { messages: rows.map((m) => m.toDto()) };
+    const payload: OutboxResponse = { messages: rows.map(present.outboxMessage) };
     res.set('Cache-Control', 'no-store').json(payload);
   });
 

@@ -12,7 +12,7 @@ import { submissionIdParams } from '../submissions/schema';
 export function attachmentRoutes(allow: Allow, submissions: Submissions): Router {
   const r = Router();
   r.get('/attachments/:id', allow('attachments.read'), validated({ params: submissionIdParams }), async (req, res) => {
-    const { row, body } = await submissions.attachment(req.user!, res.locals.valid.params.id);
+    const { row, body } = await submissions.items.attachment(req.user!, res.locals.valid.params.id);
     const ascii = row.name.replace(/[^\x20-\x7e]/g, '_').replace(/["\\]/g, '_');
     res.set({
       'Content-Type': row.mediaType,

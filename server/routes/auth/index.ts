@@ -11,6 +11,7 @@ import type { LimitName } from '../../http/rate-limit';
 import { validated } from '../../http/validate';
 import type { User } from '../../models';
 import type { Allow } from '../../policies';
+import * as present from '../../presenters/accounts';
 import type { Accounts } from '../../services/accounts';
 import { emailOnlySchema, resetSchema, signInSchema, signUpSchema, verifySchema } from './schema';
 
@@ -35,13 +36,13 @@ export function authRoutes(d: AuthRouteDeps): Router {
   r.post('/auth/sign-up', allow('auth.signUp'), limits.signUp, validated({ body: signUpSchema }), async (req, res) => {
     const input = res.locals.valid.body;
     const user = await accounts.signUp(input, d.origin(req));
-    res.status(201).json({ user: user.toDto() });
+    res.status(201).json({ user: present.user(user) });
   });
 
   r.post('/auth/verify', allow('auth.verify'), validated({ body: verifySchema }), async (_req, res) => {
     const { token } = res.locals.valid.body;
     const user = await accounts.verify(token);
-    res.json({ user: user.toDto() });
+    res.json({ user: present.user(user) });
   });
 
   r.post('/auth/resend-verification', allow('auth.resendVerification'), limits.resend, validated({ body: emailOnlySchema }), (req, res) => {
@@ -69,7 +70,7 @@ export function authRoutes(d: AuthRouteDeps): Router {
       // passport regenerates the session (a new session id); the CSRF token carries over.
       req.login(user, { session: true, keepSessionInfo: true }, (loginErr) => {
         if (loginErr) return next(loginErr);
-        res.json({ user: user.toDto() });
+        res.json({ user: present.user(user) });
       });
     })(req, res, next);
   });

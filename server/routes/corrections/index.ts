@@ -10,7 +10,7 @@ import { correctionSchema } from './schema';
 export function correctionRoutes({ allow, submissions, origin, limits }: SubmitRouteDeps): Router {
   const r = Router();
   r.post('/corrections', allow('submissions.correction'), limits.submitAddress, limits.submitAccount, validated({ body: correctionSchema }), async (req, res) => {
-    res.status(201).json({ submission: await submissions.createCorrection(req.user!, res.locals.valid.body, origin(req)) });
+    res.status(201).json({ submission: await submissions.corrections.create(req.user!, res.locals.valid.body, origin(req)) });
   });
   return r;
 }

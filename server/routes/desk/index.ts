@@ -11,10 +11,10 @@ import type { Submissions } from '../../services/submissions';
 export function deskRoutes(allow: Allow, entries: Entries, submissions: Submissions): Router {
   const r = Router();
   r.get('/desk', allow('desk.read'), async (req, res) => {
-    res.set('Cache-Control', 'no-store').json(await entries.desk(req.user!));
+    res.set('Cache-Control', 'no-store').json(await entries.desk.read(req.user!));
   });
   r.get('/desk/corrections', allow('desk.corrections'), async (req, res) => {
-    res.json({ items: await submissions.deskCorrections(req.user!) });
+    res.json({ items: await submissions.corrections.onDesk(req.user!) });
   });
   return r;
 }

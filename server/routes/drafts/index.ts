@@ -43,34 +43,34 @@ export function draftRoutes(allow: Allow, entries: Entries, origin: (req: Reques
   r.post('/drafts', allow('drafts.create'), validated({ body: createDraftSchema, tooLarge: true }), async (req, res) => {
     const { slug, content } = res.locals.valid.body;
     checkMarkdownNesting(content as EntryContent);
-    res.status(201).json({ draft: await entries.createDraft(req.user!, slug, content as EntryContent) });
+    res.status(201).json({ draft: await entries.drafts.createDraft(req.user!, slug, content as EntryContent) });
   });
 
   r.get('/drafts/:id', allow('drafts.read'), validated({ params: draftIdParams }), async (_req, res) => {
     const { id } = res.locals.valid.params;
-    res.set('Cache-Control', 'no-store').json({ draft: await entries.getDraft(id) });
+    res.set('Cache-Control', 'no-store').json({ draft: await entries.drafts.getDraft(id) });
   });
 
   r.put('/drafts/:id', allow('drafts.update'), validated({ params: draftIdParams, body: updateDraftSchema, tooLarge: true }), async (req, res) => {
     const { params: { id }, body: { content, lockVersion } } = res.locals.valid;
     checkMarkdownNesting(content as EntryContent);
-    res.json({ draft: await entries.updateDraft(req.user!, id, content as EntryContent, lockVersion) });
+    res.json({ draft: await entries.drafts.updateDraft(req.user!, id, content as EntryContent, lockVersion) });
   });
 
   r.post('/drafts/:id/submit', allow('drafts.submit'), validated({ params: draftIdParams, body: submitSchema }), async (req, res) => {
     const { params: { id }, body: { lockVersion } } = res.locals.valid;
-    res.json({ draft: await entries.submit(req.user!, id, lockVersion, origin(req)) });
+    res.json({ draft: await entries.vetting.submit(req.user!, id, lockVersion, origin(req)) });
   });
 
   r.post('/drafts/:id/approve', allow('drafts.approve'), validated({ params: draftIdParams, body: approveSchema, tooLarge: true }), async (req, res) => {
     const { params: { id }, body: { changeNote } } = res.locals.valid;
-    const { slug, version } = await entries.approve(req.user!, id, changeNote, origin(req));
-    res.json(await entries.read(slug, version));
+    const { slug, version } = await entries.vetting.approve(req.user!, id, changeNote, origin(req));
+    res.json(await entries.library.read(slug, version));
   });
 
   r.post('/drafts/:id/send-back', allow('drafts.sendBack'), validated({ params: draftIdParams, body: sendBackSchema, tooLarge: true }), async (req, res) => {
     const { params: { id }, body: { reason } } = res.locals.valid;
-    res.json({ draft: await entries.sendBack(req.user!, id, reason, origin(req)) });
+    res.json({ draft: await entries.vetting.sendBack(req.user!, id, reason, origin(req)) });
   });
 
   return r;

@@ -26,27 +26,27 @@ export function entryRoutes({ allow, entries, submissions, origin }: EntryRouteD
   const r = Router();
 
   r.get('/entries', allow('entries.list'), validated({ query: entryListQuerySchema }), async (_req, res) => {
-    res.json(await entries.list(res.locals.valid.query));
+    res.json(await entries.library.list(res.locals.valid.query));
   });
 
   r.get('/entries/:slug', allow('entries.read'), validated({ params: slugParams }), async (_req, res) => {
-    res.json(await entries.read(res.locals.valid.params.slug));
+    res.json(await entries.library.read(res.locals.valid.params.slug));
   });
 
   r.get('/entries/:slug/versions', allow('entries.versions'), validated({ params: slugParams }), async (_req, res) => {
-    res.json({ versions: await entries.versions(res.locals.valid.params.slug) });
+    res.json({ versions: await entries.library.versions(res.locals.valid.params.slug) });
   });
 
   r.get('/entries/:slug/versions/:n', allow('entries.read'), validated({ params: versionParams }), async (_req, res) => {
     const { slug, n } = res.locals.valid.params;
     // A published version never changes: caches may keep it.
     res.set('Cache-Control', 'public, max-age=3600');
-    res.json(await entries.read(slug, n));
+    res.json(await entries.library.read(slug, n));
   });
 
   r.get('/entries/:slug/cite', allow('entries.cite'), validated({ params: slugParams, query: citeQuerySchema }), async (req, res) => {
     const { params: { slug }, query: { format, version: n } } = res.locals.valid;
-    const { version } = await entries.versionRow(slug, n);
+    const { version } = await entries.library.versionRow(slug, n);
     const url = permalink(origin(req), slug, version.number!);
     const item = citedItem(slug, version, url);
     const date = version.publishedAt!.toISOString().slice(0, 10);
@@ -59,16 +59,16 @@ export function entryRoutes({ allow, entries, submissions, origin }: EntryRouteD
   });
 
   r.get('/entries/:slug/sightings', allow('entries.sightings'), validated({ params: slugParams }), async (_req, res) => {
-    res.json({ sightings: await submissions.entrySightings(res.locals.valid.params.slug) });
+    res.json({ sightings: await submissions.sightings.ofEntry(res.locals.valid.params.slug) });
   });
 
   r.post('/entries/:slug/drafts', allow('entries.startDraft'), validated({ params: slugParams }), async (req, res) => {
-    res.status(201).json({ draft: await entries.startDraft(req.user!, res.locals.valid.params.slug) });
+    res.status(201).json({ draft: await entries.drafts.startDraft(req.user!, res.locals.valid.params.slug) });
   });
 
   r.post('/entries/:slug/retire', allow('entries.retire'), validated({ params: slugParams, body: retireSchema, tooLarge: true }), async (req, res) => {
     const { params: { slug }, body: { reason, successor } } = res.locals.valid;
-    res.json({ entry: await entries.retire(req.user!, slug, reason, successor) });
+    res.json({ entry: await entries.vetting.retire(req.user!, slug, reason, successor) });
   });
 
   return r;

@@ -13,10 +13,10 @@ import { queueQuerySchema } from './schema';
 export function queueRoutes(allow: Allow, submissions: Submissions): Router {
   const r = Router();
   r.get('/queue', allow('queue.list'), validated({ query: queueQuerySchema }), async (req, res) => {
-    res.json(await submissions.queue(req.user!, res.locals.valid.query));
+    res.json(await submissions.queue.list(req.user!, res.locals.valid.query));
   });
   r.get('/queue/editors', allow('queue.editors'), async (_req, res) => {
-    res.json({ editors: await submissions.editors() });
+    res.json({ editors: await submissions.queue.editors() });
   });
   return r;
 }

@@ -7,7 +7,8 @@ import { Router } from 'express';
 import { HttpError } from '../../http/errors';
 import { validated } from '../../http/validate';
 import type { Allow } from '../../policies';
-import { excerpt, type SearchHit, type SearchIndex } from '../../search';
+import { searchResult } from '../../presenters/search';
+import type { SearchHit, SearchIndex } from '../../search';
 import { searchQuerySchema } from './schema';
 
 const unknown = (field: string, what: string, slug: string) =>
@@ -33,17 +34,7 @@ export function searchRoutes(allow: Allow, index: SearchIndex): Router {
     res.json({
       query: q.q,
       total: filtered.length,
-      results: filtered.slice(q.offset, q.offset + q.limit).map((h) => ({
-        slug: h.entry.slug,
-        title: h.entry.title,
-        version: h.entry.version,
-        score: h.score,
-        terms: h.terms,
-        excerpt: excerpt(h.entry.excerptText, h.terms),
-        laws: h.entry.laws,
-        mechanismClass: h.entry.mechanismClass,
-        inBrief: h.entry.inBrief,
-      })),
+      results: filtered.slice(q.offset, q.offset + q.limit).map(searchResult),
       facets: { laws, mechanisms },
     });
   });

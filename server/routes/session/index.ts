@@ -6,12 +6,13 @@ import { Router } from 'express';
 import type { SessionResponse } from '../../../shared/api-types';
 import { newToken } from '../../auth/tokens';
 import type { Allow } from '../../policies';
+import * as present from '../../presenters/accounts';
 
 export function sessionRoutes(allow: Allow): Router {
   const r = Router();
   r.get('/session', allow('session.read'), (req, res) => {
     req.session.csrfToken ??= newToken();
-    const payload: SessionResponse = { user: req.user ? req.user.toDto() : null, csrfToken: req.session.csrfToken };
+    const payload: SessionResponse = { user: req.user ? present.user(req.user) : null, csrfToken: req.session.csrfToken };
     res.set('Cache-Control', 'no-store').json(payload);
   });
   return r;

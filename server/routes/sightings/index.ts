@@ -64,7 +64,7 @@ export function sightingRoutes({ allow, submissions, origin, limits }: SubmitRou
       const figures = readClaimedFigures(input.figures);
       const inspected = await inspectFiles(uploadedFiles(req));
       const stored = await storeFiles(store, inspected);
-      const submission = await submissions.createSighting(req.user!, input, figures, stored, origin(req));
+      const submission = await submissions.sightings.create(req.user!, input, figures, stored, origin(req));
       await discardUploads(req);
       res.status(201).json({ submission });
     },

@@ -6,6 +6,7 @@ import { Router } from 'express';
 import type { TaxonomyResponse } from '../../../shared/api-types';
 import { ConservationLaw, MechanismClass } from '../../models';
 import type { Allow } from '../../policies';
+import { taxonomy } from '../../presenters/taxonomy';
 
 export function taxonomyRoutes(allow: Allow): Router {
   const r = Router();
@@ -14,19 +15,7 @@ export function taxonomyRoutes(allow: Allow): Router {
       ConservationLaw.findAll({ order: [['position', 'ASC']] }),
       MechanismClass.findAll({ order: [['position', 'ASC']] }),
     ]);
-    const slugById = new Map(classes.map((c) => [c.id, c.slug]));
-    const payload: TaxonomyResponse = {
-      laws: laws.map(({ slug, name, quantity, symmetry, summary, position }) => ({
-        slug, name, quantity, symmetry, summary, position,
-      })),
-      classes: classes.map((c) => ({
-        slug: c.slug,
-        name: c.name,
-        parentSlug: c.parentId ? (slugById.get(c.parentId) ?? null) : null,
-        summary: c.summary,
-        position: c.position,
-      })),
-    };
+    const payload: TaxonomyResponse = taxonomy(laws, classes);
     res.json(payload);
   });
   return r;
