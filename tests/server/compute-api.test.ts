@@ -35,6 +35,8 @@ describe('POST /api/checks/:check', () => {
       .send({ inputs: { F_claimed: '0.2 lbf', P: '1.5 hp' } })
       .expect(200);
     const out = Object.fromEntries(res.body.outputs.map((o: { name: string; si: number }) => [o.name, o.si]));
+    // The photon-rocket bound P/c (momentum flux of light, p = E/c: Griffiths, Introduction to Electrodynamics,
+    // 4th ed., §8.2 — from memory) for 1.5 hp, and the claimed thrust over it.
     expect(out.F_bound).toBeCloseTo((1.5 * hp) / c, 15);
     expect(out.ratio).toBeCloseTo((0.2 * lbf) / ((1.5 * hp) / c), 3);
     expect(res.body.verdict.holds).toBe(false);
@@ -123,6 +125,7 @@ describe('worksheets', () => {
   it('evaluates a posted worksheet with the given values, kit functions included', async () => {
     const res = await request(app).post('/api/worksheets/evaluate').send({ worksheet, values: { P: '2 kW' } }).expect(200);
     const steps = Object.fromEntries(res.body.steps.map((s: { name: string; value: { si: number } }) => [s.name, s.value.si]));
+    // P/c for 2 kW (c exact, SI Brochure as above); k is the 1 mN of the worksheet over that bound.
     expect(steps.F_max).toBeCloseTo(2000 / c, 15);
     expect(steps.F_kit).toBe(steps.F_max);
     expect(steps.k).toBeCloseTo(1e-3 / (2000 / c), 6);

@@ -37,6 +37,7 @@ const quick = {
     steps: [{ name: 'F', label: 'F', expression: 'P / c', unit: 'uN' }],
   },
 };
+// P/c for 1 kW, c = 299 792 458 m/s exact (BIPM, SI Brochure, 9th ed., 2019): 3.3356 µN.
 const F_1kW = 1000 / 299_792_458;
 
 const evaluate = (target: Parameters<typeof request>[0], body: object) => request(target).post('/api/worksheets/evaluate').send(body);

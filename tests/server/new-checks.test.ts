@@ -81,6 +81,8 @@ describe('the five new checks over HTTP', () => {
 
   it('light-converter-limits: Landsberg 93.3 % for a 6000 K sun and a 300 K converter; 95 % from any converter is beyond it', async () => {
     const res = await c.post('/api/checks/light-converter-limits', { inputs: { eta_claimed: '95 %', junctions: '0', Ts: '6000 K', Ta: '300 K' } }).expect(200);
+    // Landsberg efficiency 1 − (4/3)(Ta/Ts) + (1/3)(Ta/Ts)^4 with Ta/Ts = 300/6000 = 0.05
+    // (P. T. Landsberg and G. Tonge, J. Appl. Phys., 1980 — from memory): 0.9333.
     expect(out(res.body).eta_landsberg).toBeCloseTo(1 - (4 / 3) * 0.05 + (1 / 3) * 0.05 ** 4, 12);
     expect(res.body.verdict.holds).toBe(false);
   });
