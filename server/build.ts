@@ -6,7 +6,7 @@ import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 
-const SOURCES = ['app', 'components', 'shared', 'assets', 'app.json', 'babel.config.js', 'package.json', 'package-lock.json'];
+const SOURCES = ['app', 'components', 'shared', 'assets', 'public', 'app.json', 'babel.config.js', 'package.json', 'package-lock.json'];
 
 function newestMtime(p: string): number {
   let st: fs.Stats;
