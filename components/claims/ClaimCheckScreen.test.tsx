@@ -5,7 +5,7 @@ import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '..
 import { colors } from '../theme';
 import type { ClaimCheckRequest } from '@/shared/api-types';
 import { ClaimCheckScreen, RERUN_DELAY_MS } from './ClaimCheckScreen';
-import { figure, figures, heatPumpFigures, heatPumpText, LBF, pitch, resultFor, savedDto, token } from './fixtures';
+import { figure, figures, heatPumpFigures, heatPumpText, LBF, pitch, resultFor, savedDto, token, savedResponse } from './fixtures';
 
 const mockPush = jest.fn();
 jest.mock('expo-router', () => ({
@@ -394,7 +394,7 @@ describe('ClaimCheckScreen', () => {
     const fetchMock = mockFetch({
       ...signedIn,
       '/api/claim-checks': answer,
-      '/api/claim-checks/saved': (init) => (init?.method === 'POST' ? jsonResponse(201, { saved: savedDto(true, 'grant') }) : jsonResponse(200, { saved: [] })),
+      '/api/claim-checks/saved': (init) => (init?.method === 'POST' ? jsonResponse(201, savedResponse(true, 'grant')) : jsonResponse(200, { saved: [] })),
     });
     renderWithProviders(<ClaimCheckScreen resume />);
     expect((await screen.findByTestId('claim-resumed')).textContent).toContain('as you left it');
@@ -474,7 +474,7 @@ describe('ClaimCheckScreen', () => {
   });
 
   it('opens a saved check to re-run it, in the variant it was saved with', async () => {
-    mockFetch({ ...signedOut, [`/api/claim-checks/saved/${token}`]: () => jsonResponse(200, { saved: savedDto(false, 'journalist') }) });
+    mockFetch({ ...signedOut, [`/api/claim-checks/saved/${token}`]: () => jsonResponse(200, savedResponse(false, 'journalist')) });
     renderWithProviders(<ClaimCheckScreen from={token} />);
     expect(await screen.findByTestId('claim-result')).toBeTruthy();
     expect((screen.getByTestId('claim-text') as HTMLTextAreaElement).value).toBe(pitch);

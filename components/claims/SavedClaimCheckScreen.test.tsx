@@ -2,7 +2,7 @@ import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 import { PARAGRAPH_VARIANT_LABEL } from '@/shared/claims/types';
 import { formatQuantity } from '@/shared/worksheet/quantity';
-import { LBF, savedDto, token } from './fixtures';
+import { LBF, savedDto, token, savedResponse } from './fixtures';
 import { SavedClaimCheckScreen } from './SavedClaimCheckScreen';
 
 jest.mock('expo-router', () => require('../testing/expoRouter'));
@@ -16,7 +16,7 @@ beforeEach(() => setWindowWidth(390));
 
 describe('SavedClaimCheckScreen', () => {
   it('shows the saved result read only, with a way to open it in the claim check, and no Delete for others', async () => {
-    mockFetch({ ...session(null), [`/api/claim-checks/saved/${token}`]: () => jsonResponse(200, { saved: savedDto(false, 'examiner') }) });
+    mockFetch({ ...session(null), [`/api/claim-checks/saved/${token}`]: () => jsonResponse(200, savedResponse(false, 'examiner')) });
     renderWithProviders(<SavedClaimCheckScreen token={token} />);
     expect(await screen.findByTestId('claim-match-resonant-cavity-thruster')).toBeTruthy();
     expect(screen.getByTestId('claim-check-photon-bound-finding').getAttribute('data-finding')).toBe('breaks');
@@ -48,7 +48,7 @@ describe('SavedClaimCheckScreen', () => {
           gone = true;
           return { ok: true, status: 204, statusText: '', json: async () => undefined } as Response;
         }
-        return gone ? notFound() : jsonResponse(200, { saved: savedDto(true) });
+        return gone ? notFound() : jsonResponse(200, savedResponse(true));
       },
       '/api/claim-checks/saved': () => jsonResponse(200, { saved: [] }),
     });

@@ -14,7 +14,8 @@ import {
   type ParagraphVariant,
 } from '@/shared/claims/types';
 import { formatQuantity } from '@/shared/worksheet/quantity';
-import type { ClaimCheckResult, ClaimMatch, Figure, SavedClaimCheckDto } from '@/shared/api-types';
+import type { ClaimCheckResult, ClaimMatch, Figure, SavedClaimCheckDto, SavedClaimCheckResponse } from '@/shared/api-types';
+import { permalink } from '@/shared/permalink';
 
 // Invented test data: no real device, company or person.
 export const pitch =
@@ -36,7 +37,7 @@ export const heatPumpText =
   'Invented advertisement: our heat pump is 350% efficient, heating the house at 35 °C from outside air at 5 °C.';
 export const heatPumpFigures: Figure[] = extractFigures(heatPumpText);
 
-const entryUrl = 'http://127.0.0.1:8080/entries/resonant-cavity-thruster/v/1';
+const entryUrl = permalink('http://127.0.0.1:8080', 'resonant-cavity-thruster', 1);
 const reference = 'Counterweight. (2026). Thrust from microwaves in a closed cavity (Version 1).';
 
 /** A paragraph of each variant, marked with `label` so that a test can tell them apart. */
@@ -106,3 +107,6 @@ export function savedDto(mine: boolean, variant: ParagraphVariant = 'referee'): 
     mine,
   };
 }
+
+/** What `GET /api/claim-checks/saved/:token` answers with. */
+export const savedResponse = (mine: boolean, variant: ParagraphVariant = 'referee'): SavedClaimCheckResponse => ({ saved: savedDto(mine, variant) });

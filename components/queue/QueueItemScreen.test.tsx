@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import type { SubmissionDto } from '@/shared/submissions/types';
-import { contributor, correction, moderator, session, sighting } from '../submissions/fixtures';
+import { contributor, correction, moderator, session, sighting, submissionResponse } from '../submissions/fixtures';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 import { QueueItemScreen } from './QueueItemScreen';
 
@@ -22,14 +22,14 @@ function serve(start: SubmissionDto, extra: Record<string, (init?: RequestInit) 
   const decided: unknown[] = [];
   const fetchMock = mockFetch({
     ...session(moderator),
-    [`/api/submissions/${start.id}`]: () => jsonResponse(200, { submission: current }),
+    [`/api/submissions/${start.id}`]: () => jsonResponse(200, submissionResponse(current)),
     [`/api/submissions/${start.id}/claim`]: () => {
       current = { ...current, status: 'claimed', claimedBy: me, updatedAt: '2026-03-01T11:00:00.000Z' };
-      return jsonResponse(200, { submission: current });
+      return jsonResponse(200, submissionResponse(current));
     },
     [`/api/submissions/${start.id}/release`]: () => {
       current = { ...current, status: 'open', claimedBy: null, updatedAt: '2026-03-01T12:00:00.000Z' };
-      return jsonResponse(200, { submission: current });
+      return jsonResponse(200, submissionResponse(current));
     },
     [`/api/submissions/${start.id}/decide`]: (init) => {
       const body = JSON.parse(String(init?.body));
@@ -45,7 +45,7 @@ function serve(start: SubmissionDto, extra: Record<string, (init?: RequestInit) 
         decidedAt: '2026-03-01T13:00:00.000Z',
         linkedEntries: (body.entries ?? []).map((slug: string) => ({ slug, title: `Entry ${slug}` })),
       };
-      return jsonResponse(200, { submission: current });
+      return jsonResponse(200, submissionResponse(current));
     },
     '/api/taxonomy': () => jsonResponse(200, taxonomy),
     '/api/search?q=cavity&limit=8': () =>
@@ -90,7 +90,7 @@ describe('QueueItemScreen', () => {
     let claimedByOther = false;
     serve(sighting(), {
       '/api/submissions/41': () =>
-        jsonResponse(200, { submission: claimedByOther ? sighting({ status: 'claimed', claimedBy: other }) : sighting() }),
+        jsonResponse(200, submissionResponse(claimedByOther ? sighting({ status: 'claimed', claimedBy: other }) : sighting())),
       '/api/submissions/41/claim': () => {
         claimedByOther = true;
         return jsonResponse(409, { error: { code: 'claimed_by_other', message: 'Oona Lindqvist holds this submission.' } });

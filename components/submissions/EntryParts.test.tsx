@@ -1,7 +1,7 @@
 import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 import { ReportError, SeenInTheWild } from './EntryParts';
-import { contributor, correction, session } from './fixtures';
+import { contributor, correction, session, submissionResponse } from './fixtures';
 
 jest.mock('expo-router', () => require('../testing/expoRouter'));
 
@@ -47,7 +47,7 @@ describe('ReportError', () => {
       ...session({ ...contributor, verified: false }),
       '/api/corrections': (init) => {
         sent = JSON.parse(String(init?.body));
-        return jsonResponse(201, { submission: correction() });
+        return jsonResponse(201, submissionResponse(correction()));
       },
     });
     renderWithProviders(<ReportError slug="light-in-a-box" version={2} title="Thrust from light kept in a box" />);

@@ -1,7 +1,7 @@
 import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import * as DocumentPicker from 'expo-document-picker';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
-import { contributor, session, sighting } from './fixtures';
+import { contributor, session, sighting, submissionResponse } from './fixtures';
 import { ReportSightingScreen } from './ReportSightingScreen';
 
 jest.mock('expo-router', () => require('../testing/expoRouter'));
@@ -93,7 +93,7 @@ describe('ReportSightingScreen', () => {
       ...session(contributor),
       '/api/sightings': (init) => {
         sent = init;
-        return jsonResponse(201, { submission: sighting({ id: 77 }) });
+        return jsonResponse(201, submissionResponse(sighting({ id: 77 })));
       },
     });
     renderWithProviders(<ReportSightingScreen />);

@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
-import { contributor, moderator, session, sighting } from './fixtures';
+import { contributor, moderator, session, sighting, submissionResponse } from './fixtures';
 import { SubmissionScreen } from './SubmissionScreen';
 
 jest.mock('expo-router', () => require('../testing/expoRouter'));
@@ -11,7 +11,7 @@ const mod = { id: moderator.id, displayName: moderator.displayName };
 
 describe('SubmissionScreen', () => {
   it('shows what was sent as plain text, the attachments as downloads, and the history', async () => {
-    mockFetch({ ...session(contributor), '/api/submissions/41': () => jsonResponse(200, { submission: sighting() }) });
+    mockFetch({ ...session(contributor), '/api/submissions/41': () => jsonResponse(200, submissionResponse(sighting())) });
     const { container } = renderWithProviders(<SubmissionScreen id={41} />);
     expect((await screen.findByTestId('submission-status')).textContent).toBe('Waiting for a moderator');
     // The submitter's words stay words: the <b> is shown, never made an element.
@@ -34,7 +34,7 @@ describe('SubmissionScreen', () => {
       decidedBy: mod,
       decidedAt: '2026-03-02T10:00:00.000Z',
     });
-    mockFetch({ ...session(contributor), '/api/submissions/41': () => jsonResponse(200, { submission: rejected }) });
+    mockFetch({ ...session(contributor), '/api/submissions/41': () => jsonResponse(200, submissionResponse(rejected)) });
     renderWithProviders(<SubmissionScreen id={41} />);
     expect((await screen.findByTestId('submission-status')).textContent).toBe('Not taken');
     expect(screen.getByTestId('submission-decision').textContent).toContain(`Not taken by ${moderator.displayName}`);
@@ -46,11 +46,11 @@ describe('SubmissionScreen', () => {
     let sent: unknown;
     mockFetch({
       ...session(contributor),
-      '/api/submissions/41': () => jsonResponse(200, { submission: current }),
+      '/api/submissions/41': () => jsonResponse(200, submissionResponse(current)),
       '/api/submissions/41/answer': (init) => {
         sent = JSON.parse(String(init?.body));
         current = sighting({ status: 'open', events: [...current.events, { at: '2026-03-03T10:00:00.000Z', what: 'answered', by: { id: 7, displayName: 'Ines Okonkwo' }, note: 'Yes, at 0:42.' }] });
-        return jsonResponse(200, { submission: current });
+        return jsonResponse(200, submissionResponse(current));
       },
     });
     renderWithProviders(<SubmissionScreen id={41} />);

@@ -1,6 +1,5 @@
 /** Invented submissions for the component tests (no real device, company or person). */
-import type { SessionResponse, UserDto } from '@/shared/api-types';
-import type { SubmissionDto, SubmissionSummaryDto } from '@/shared/submissions/types';
+import type { SessionResponse, SubmissionDto, SubmissionResponse, SubmissionSummaryDto, UserDto } from '@/shared/api-types';
 import { jsonResponse } from '../testing/render';
 
 export const contributor: UserDto = {
@@ -89,3 +88,6 @@ export function summaryOf(s: SubmissionDto): SubmissionSummaryDto {
     entry: s.entry,
   };
 }
+
+/** What the routes that answer with one submission send (`GET /api/submissions/:id`, claim, decide …). */
+export const submissionResponse = (s: SubmissionDto): SubmissionResponse => ({ submission: s });
