@@ -4,8 +4,9 @@
  * an earlier prototype, "35 % for conventional engines", "compared with …" — are set aside before
  * the relations are read, so that no check and no derived figure uses them.
  */
-import { sentenceAround, windowStart } from './context';
+import { HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
 import type { Draft } from './draft';
+import type { PercentReading } from './kinds';
 import { relateFigures } from './relations';
 
 /**
@@ -30,13 +31,59 @@ export function relate(text: string, drafts: Draft[]): void {
 }
 
 /** A sentence that speaks of the claim's own device (so its figures are not merely a comparison). */
+/** Words that set the claim's device against what was said before it. */
+const CONTRAST_RE = /(?<!\p{L})(?:in contrast|by contrast|on the other hand|instead|whereas|by comparison|in comparison)(?!\p{L})/iu;
+
+/**
+ * "For a 10 kW laser the photon thrust is 33 µN; our drive, in contrast, gave 4 mN": a figure in a
+ * clause that does not speak of the claim's own device, when another clause of the sentence sets the
+ * claim's device against it.
+ */
+function inContrastedClause(text: string, d: Draft): boolean {
+  const head = text.slice(windowStart(text, d.start, 0, 400), d.start).split(/[.!?]["”’')\]]*\s|\n/u).pop()!;
+  const stop = /[.!?]["”’')\]]*(?:\s|$)|\n/.exec(text.slice(d.end, d.end + 400));
+  const full = head + text.slice(d.start, stop ? d.end + stop.index : d.end + 400);
+  const cuts = [0, ...[...full.matchAll(/[;:]|,[^\S\n]*(?=(?:whereas|while|but)(?!\p{L}))/gu)].map((m) => m.index!), full.length];
+  const clauses = cuts.slice(1).map((e, k) => full.slice(cuts[k], e));
+  const mine = clauses.find((_, k) => cuts[k] <= head.length && head.length < cuts[k + 1]);
+  return clauses.length > 1 && mine !== undefined && !OWN_DEVICE_RE.test(mine) && clauses.some((c) => c !== mine && OWN_DEVICE_RE.test(c) && CONTRAST_RE.test(c));
+}
+
+/** Before a percentage, in its clause: a comparison with the percentage said just before ("38 %, against 33 % for"). */
+const COMPARED_PERCENT_BETWEEN_RE = /(?<!\p{L})(?:against|compared (?:with|to)|in comparison (?:with|to)|as against|versus|vs\.?|whereas|while|unlike|than)(?!\p{L})/iu;
+
+/**
+ * A percentage with no word of its own that is the other side of a comparison with a percentage read
+ * just before ("a power-conversion efficiency of 24.6 %, against 22 % for the reference cell";
+ * "… 38 % efficient. For comparison, the baseline engine reaches 33 %."): the same kind of figure. A
+ * heat pump's COP compared with another machine's percentage of 100 % or less is that machine's
+ * efficiency. (The comparison itself is set aside in `relate`.)
+ */
+export function comparedPercent(text: string, start: number, end: number, drafts: Draft[]): PercentReading {
+  const partner = [...drafts].reverse().find((d) => (d.kind === 'efficiency' || d.kind === 'cop' || d.kind === 'quantum-efficiency') && !d.derived && /%/.test(text.slice(d.start, d.end)));
+  if (!partner) return null;
+  const sentence = sentenceAround(text, start, end);
+  const between = text.slice(partner.end, start);
+  const sameSentence = sentenceAround(text, partner.start, partner.end) === sentence;
+  const compared = sameSentence
+    ? COMPARED_PERCENT_BETWEEN_RE.test(between) || OTHERS_AFTER_RE.test(text.slice(end, end + 60))
+    : COMPARISON_SENTENCE_RE.test(sentence) && !/[.!?]\s[^.!?]*[.!?]\s/.test(between);
+  if (!compared) return null;
+  const value = Number((/^[\d.,]+/.exec(text.slice(start, end))?.[0] ?? '').replace(',', '.'));
+  if (partner.kind === 'cop') {
+    if (HEAT_PUMP_RE.test(text.slice(end, end + 60)) || value > 100) return { kind: 'cop', role: partner.role === 'cooling' ? 'cooling' : 'heating', factor: 0.01, unit: '' };
+    return { kind: 'efficiency', factor: 1, unit: '%' };
+  }
+  return partner.kind === 'quantum-efficiency' ? { kind: 'quantum-efficiency', factor: 0.01, unit: '' } : { kind: 'efficiency', factor: 1, unit: '%' };
+}
+
 const OWN_DEVICE_RE = /(?<!\p{L})(?:our|we|us|my|this (?:device|machine|unit|engine|motor|generator|design|cell|module|drive|thruster|system|invention|prototype)|the (?:claimed|invention|inventors?|applicants?|authors?|prototype)|claims?|claimed|invention)(?!\p{L})/iu;
 /** A sentence given over to a comparison or a reference value. */
 const COMPARISON_SENTENCE_RE =
   /(?<!\p{L})(?:for|by|in) comparison(?!\p{L})|(?<!\p{L})for reference(?!\p{L})|(?<!\p{L})as (?:a )?(?:reference|benchmark|yardstick)(?!\p{L})|^[\s"“(]*(?:(?:a|an|the)[^\S\n]+)?(?:typical|conventional|ordinary|standard(?![^\S\n]+(?:test|conditions?|deviation|atmosphere|temperature|pressure|rating))|commercial|existing|competing|comparable|today's|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|best commercial|best available)(?!\p{L})/iu;
 /** Right after a figure: whose it is, when it is another machine's ("35 % for conventional engines"). */
 const OTHERS_AFTER_RE =
-  /^[^\S\n]*(?:\p{L}+[^\S\n]+){0,2}?(?:for|of|in|from|by)[^\S\n]+(?:(?:a|an|the|most|many|all)[^\S\n]+)?(?:typical|conventional|ordinary|standard|commercial|existing|competing|comparable|today's|current|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|other|rival)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:engines?|motors?|units?|designs?|models?|devices?|machines?|thrusters?|cells?|panels?|modules?|pumps?|fridges?|refrigerators?|freezers?|systems?|generators?|turbines?|plants?|cars?|vehicles?|batter(?:y|ies)|boilers?|lamps?|bulbs?|LEDs?|rockets?|drives?|ones|counterparts?|technolog(?:y|ies)|products?|heaters?|chargers?|converters?|inverters?|coolers?|chillers?|conditioners?)(?!\p{L})/iu;
+  /^[^\S\n]*(?:\p{L}+[^\S\n]+){0,2}?(?:for|of|in|from|by)[^\S\n]+(?:(?:a|an|the|most|many|all)[^\S\n]+)?(?:typical|conventional|ordinary|standard|commercial|existing|competing|comparable|today's|current|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|other|rival|reference|baseline|benchmark|control)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:engines?|motors?|units?|designs?|models?|devices?|machines?|thrusters?|cells?|panels?|modules?|pumps?|fridges?|refrigerators?|freezers?|systems?|generators?|turbines?|plants?|cars?|vehicles?|batter(?:y|ies)|boilers?|lamps?|bulbs?|LEDs?|rockets?|drives?|ones|counterparts?|technolog(?:y|ies)|products?|heaters?|chargers?|converters?|inverters?|coolers?|chillers?|conditioners?)(?!\p{L})/iu;
 /** Right before a figure, in its clause: "compared with", "against", "versus", "whereas typical ones reach". */
 const COMPARED_BEFORE_RE =
   /(?<!\p{L})(?:compared (?:with|to)|in comparison (?:with|to)|as against|as opposed to|versus|vs\.?|whereas|while (?:typical|conventional|ordinary|standard|commercial|existing)|unlike)(?!\p{L})[^.;!?\n]{0,50}$/iu;
@@ -55,6 +102,7 @@ function saidInComparison(text: string, d: Draft): boolean {
   // "Our previous prototype reached 35 % at 800 W": an earlier device, not the one claimed.
   if (EARLIER_DEVICE_RE.test(sentence) && !LATEST_DEVICE_RE.test(sentence)) return true;
   if (OTHERS_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
+  if (inContrastedClause(text, d)) return true;
   const clauseBefore = text.slice(windowStart(text, d.start, 0, 120), d.start);
   const m = COMPARED_BEFORE_RE.exec(clauseBefore);
   // ("Output 1.5 kW vs input 1.2 kW": the claim's own input, named between.)

@@ -8,13 +8,13 @@
 import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
 import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
-import { relate } from './comparisons';
+import { comparedPercent, relate } from './comparisons';
 import { BEFORE_WINDOW, HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
 import type { Draft } from './draft';
-import { bareKind, GAIN_PER_UNIT_RE, ISP_AFTER_RE, ISP_BEFORE_RE, MULTIPLE_VALUE, MULTIPLE_WORD_RE, readPercent, TEMPERATURE_CONTEXT_RE } from './kinds';
+import { bareKind, GAIN_PER_UNIT_RE, PER_UNIT_QUANTITY, ISP_AFTER_RE, ISP_BEFORE_RE, MULTIPLE_VALUE, MULTIPLE_WORD_RE, readPercent, TEMPERATURE_CONTEXT_RE } from './kinds';
 import { tokenize, type NumberToken } from './numbers';
 import { hedgeBefore, isRangeGap, roleContextStart } from './ranges-hedges';
-import { lastRoleWords, roleFor } from './roles';
+import { lastRoleWords, ratingRole, roleFor } from './roles';
 import { differenceDirection, differenceQuantity, isDifference } from './temperatures';
 import { GLUED_CELSIUS, GLUED_FAHRENHEIT, type Suffix } from './units';
 
@@ -114,6 +114,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     let assumption: string | undefined;
     let direction: Draft['direction'];
     let ofInput: boolean | undefined;
+    let perUnitInput: Draft | undefined;
     if (suffix?.type === 'unit') {
       const q = unitQuantity(t.num, suffix);
       kind = q.kind;
@@ -135,7 +136,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         assumption = suffix.form === GLUED_CELSIUS ? '"C" read as degrees Celsius.' : suffix.form === GLUED_FAHRENHEIT ? '"F" read as degrees Fahrenheit.' : '"Degrees" read as degrees Celsius.';
       }
     } else if (suffix?.type === 'percent') {
-      const reading = readPercent(text, start, end, floor);
+      const reading = readPercent(text, start, end, floor) ?? comparedPercent(text, start, end, drafts);
       if (reading) {
         kind = reading.kind;
         role = reading.role;
@@ -175,7 +176,14 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     if ((kind === 'power' || kind === 'energy') && suffix?.type === 'unit' && !suffix.per) {
       GAIN_PER_UNIT_RE.lastIndex = end;
       const g = GAIN_PER_UNIT_RE.exec(text);
-      if (g) {
+      const one = g ? PER_UNIT_QUANTITY[g[1].toLowerCase()] : undefined;
+      if (g && one && one.kind === kind) {
+        // "1.4 kWh back for every kWh it is fed", "920 W for every kilowatt it takes": the output, and one
+        // of that unit as the input.
+        role = 'out';
+        const unitAt = g.index + g[0].length - g[1].length - (/s$/i.test(g[0]) && !/s$/i.test(g[1]) ? 1 : 0);
+        perUnitInput = { start: unitAt, end: g.index + g[0].length, kind, quantity: one.quantity, role: 'in', derived: `one ${g[1]} in, from "for every ${g[1]}"` };
+      } else if (g && !one) {
         kind = 'efficiency';
         quantity = t.num;
         upper = upperNum;
@@ -212,6 +220,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     if (role === undefined) role = roleFor(text, kind, roleContextStart(text, start, floor), end, floor);
     // "10 kWe", "3 MWe": electrical output.
     if (role === null && kind === 'power' && suffix?.type === 'unit' && /[kMG]?We$/.test(text.slice(t.numEnd, end).trim())) role = 'out';
+    if (role === null && kind === 'power' && suffix?.type === 'unit' && !suffix.per) role = ratingRole(text, start, end);
     let hedge = hedgeBefore(text, start);
     // "over two weeks", "for over 3 hours" speak of the time the claim covers.
     if (kind === 'duration' && (hedge === 'more-than' || hedge === 'less-than')) hedge = undefined;
@@ -225,6 +234,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       }
     }
     drafts.push({ start, end, kind, quantity, upper, role, hedge, derived, assumption, direction, ofInput });
+    if (perUnitInput) drafts.push(perUnitInput);
     floor = Math.max(end, lastRoleWords.end);
   }
 

@@ -54,7 +54,20 @@ const PERCENT_OF_INPUT_RE =
   /[^\S\n]*of[^\S\n]+what[^\S\n]+(?:it|they|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:draws?|takes?|consumes?|uses?|gets?|is (?:given|fed|supplied)|(?:is )?put in|puts? in|pulls?)(?!\p{L})|[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|(?:energy|power) (?:in|supplied|consumed|drawn|fed|put|(?:it|they) (?:receives?|takes?|gets?|draws?|consumes?)|received|taken in)|supply|electrical input)(?!\p{L})/iuy;
 /** "1.3 W for each watt in", "1.3 J back per joule supplied": a gain written with a unit. */
 export const GAIN_PER_UNIT_RE =
-  /[^\S\n]*(?:(?:of[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+)?(?:(?:back|out|returned)[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(?:watt|joule|kWh|kilowatt-hour|unit|W|J)s?(?!\p{L})/iuy;
+  /[^\S\n]*(?:(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|useful|shaft)[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+)?(?:(?:back|out|returned)[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?!\p{L})/iuy;
+/** The unit named after "for every": what one of it is, as a quantity (none for a bare "unit"). */
+export const PER_UNIT_QUANTITY: Record<string, { kind: 'power' | 'energy'; quantity: string }> = {
+  watt: { kind: 'power', quantity: '1 W' },
+  w: { kind: 'power', quantity: '1 W' },
+  kilowatt: { kind: 'power', quantity: '1 kW' },
+  kw: { kind: 'power', quantity: '1 kW' },
+  joule: { kind: 'energy', quantity: '1 J' },
+  j: { kind: 'energy', quantity: '1 J' },
+  kwh: { kind: 'energy', quantity: '1 kWh' },
+  'kilowatt-hour': { kind: 'energy', quantity: '1 kWh' },
+  megajoule: { kind: 'energy', quantity: '1 MJ' },
+  mj: { kind: 'energy', quantity: '1 MJ' },
+};
 /** Multiples in words: "twice the energy it consumes", "three-fold its input". */
 export const MULTIPLE_WORD_RE = /(?<!\p{L})(half|twice|double|triple|thrice|quadruple|two-?fold|three-?fold|four-?fold|five-?fold|ten-?fold)(?!\p{L})/giu;
 export const MULTIPLE_VALUE: Record<string, number> = { half: 0.5, twice: 2, double: 2, triple: 3, thrice: 3, quadruple: 4, twofold: 2, threefold: 3, fourfold: 4, fivefold: 5, tenfold: 10 };
@@ -64,7 +77,7 @@ const OVER_UNITY_WORDS_RE = /(?<!\p{L})(?:over-?unity|free energy|zero-?point|ZP
 const RATIO_BEFORE_RE = /(?<!\p{L})(?:over-?unity|overunity|output[- ]to[- ]input|out(?:put)?\/in(?:put)?|output\/input|energy (?:out|return)[- ]to[- ](?:energy )?in(?:put)?)(?:[^\S\n]+(?:ratio|factor|coefficient))?(?:[^\S\n]*(?:[=:≈~]|of|is|was|reaching|about|around|approximately|roughly|near|up to|over|above|exceeding))*[^\S\n]*$/iu;
 
 /** For "60 % more energy out than in": the percentage is added to 1. */
-type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; unit: string; assumption?: string; more?: boolean; derived?: string; ofInput?: boolean } | null;
+export type PercentReading = { kind: FigureKind; role?: FigureRole; factor: number; unit: string; assumption?: string; more?: boolean; derived?: string; ofInput?: boolean } | null;
 
 /** "60 % more electrical energy out than in", "30 % more power than it draws": a gain of 1 + p. */
 const PERCENT_MORE_RE =

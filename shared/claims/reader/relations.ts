@@ -96,7 +96,10 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // The role: the words around the current or the voltage ("draws 3 A" → in, "delivers 10 A" → out).
     // Words between the two ("12 V supply drawing 2.5 A") are the closest; then those around the pair.
     // "5 V in at 2 A", "12 V out at 0.75 A": in or out said right after either of the two.
-    const said = [volt, cur].map((d) => /^[^\S\n]*(in|out|input|output)(?!\p{L})/iu.exec(text.slice(d.end, d.end + 12))).find((x) => x !== null);
+    // ("| in: 5 A at 12 V | out: 2.9 A at 19 V": a label just before the pair.)
+    const said =
+      [volt, cur].map((d) => /^[^\S\n]*(in|out|input|output)(?!\p{L})/iu.exec(text.slice(d.end, d.end + 12))).find((x) => x !== null) ??
+      /(?:^|[|\n•;,(])[^\S\n]*(?:(?:electrical|electric|DC|AC)[^\S\n]+)?(in|out|input|output)[^\S\n]*[:=][^\S\n]*$/iu.exec(text.slice(Math.max(0, first.start - 30), first.start));
     const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
     const wordsRole = between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
     const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null);
@@ -216,7 +219,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   if (eta && !more) {
     for (const kind of ['power', 'energy'] as const) {
       const inputs = drafts.filter((d) => d.kind === kind && d.role === 'in' && !d.derived);
-      if (inputs.length !== 1 || drafts.some((d) => d.kind === kind && (d.role === 'out' || d.role === 'excess'))) continue;
+      // (An output already stated, as a power or an energy, is not derived again.)
+      if (inputs.length !== 1 || drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess'))) continue;
       const [input, e, n] = [inputs[0], siOf(eta)!, siOf(inputs[0])];
       if (n === null || n === 0) continue;
       const unit = FIGURE_SI_UNIT[kind];

@@ -133,3 +133,22 @@ export function roleFor(text: string, kind: FigureKind, start: number, end: numb
   }
   return null;
 }
+
+/** A machine named right after a power, with at most two words between ("150 PS engine", "1 hp rotary compressor"). */
+const RATED_ENGINE_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:engines?|motors?|turbines?)(?!\p{L})(?![^.;!?\n]{0,40}(?<!\p{L})(?:drives?|driving|drove|driven|turns?|turning|turned|powers?|powering|powered|spins?|spinning|spun|runs?|running|ran|pumps?|pumping|feeds?|feeding|coupled|connected|attached|linked)(?!\p{L}))/iu;
+const RATED_DRIVEN_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:cryocoolers?|compressors?|fridges?|refrigerators?|freezers?|chillers?|air[- ]conditioners?|heat pumps?|coolers?)(?!\p{L})/iu;
+
+/**
+ * A machine's rating said before its name, where the name settles which side it is: the rating of an
+ * engine, motor or turbine that is the claim's subject ("The 150 PS engine is 36 % efficient") is its
+ * output; a horsepower rating of a compressor or a cooler ("the 1 hp cryocooler") is its drive, the
+ * input. (A cooler's rating in watts or BTU/h is usually its capacity, a pump's horsepower its motor's
+ * output, and an engine that drives something else is that thing's input: all left to the other rules.)
+ */
+export function ratingRole(text: string, start: number, end: number): FigureRole {
+  const after = text.slice(end, end + 60);
+  const horsepower = /(?:hp|horsepower|PS|CV|bhp)\s*$/iu.test(text.slice(start, end));
+  if (horsepower && RATED_DRIVEN_AFTER_RE.test(after)) return 'in';
+  if (RATED_ENGINE_AFTER_RE.test(after) && /(?:^|[.!?:\n][^\S\n]*)(?:the|a|an|our|this|its|their|each)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 40), start))) return 'out';
+  return null;
+}

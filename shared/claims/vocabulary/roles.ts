@@ -93,7 +93,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
     role: 'wet',
     before: [
       'wet', 'fuell?ed', 'fully fuell?ed', 'initial', 'starting', 'start', 'launch', 'lift-?off', 'lifts? off (?:at|with)', 'take-?off', 'gross', 'total', 'loaded', 'full',
-      'at launch', 'at ignition', 'before the burn',
+      'at launch', 'at ignition', 'before the burn', 'starts? (?:out )?(?:at|with)', 'begins? (?:at|with)',
     ],
     after: [
       '(?:lift-?off|launch|initial|gross|total|wet|fuell?ed|starting|ignition|take-?off) mass', 'wet', 'fuell?ed', 'at launch', 'at lift-?off', 'at the start',
@@ -112,7 +112,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
       '(?:carries|carrying|loaded with|tanks? (?:hold|holds|of)|burns?|burning|expels?|expelling)',
     ],
     after: [
-      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass|nitrogen|helium|butane|propane|iodine|argon|ammonia)', 'of (?:that|it|which)(?: being| is| was)? (?:propellant|fuel)', 'of cold-gas propellant',
+      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass|nitrogen|helium|butane|propane|iodine|argon|ammonia)', 'of (?:that|it|which|this)(?: being| is| was)? (?:propellant|fuel|reaction mass|xenon|krypton|argon|iodine|hydrazine|kerosene|water|nitrogen|helium|methane|hydrogen|ammonia|oxidi[sz]er)', 'of cold-gas propellant',
       'of (?:[\\w-]+ )?(?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
       'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
       'of (?:[\\w-]+ )?(?:deuterium|tritium|helium-3|lithium|boron|uranium|plutonium|antimatter|fusion fuel|fissile fuel|pellets|solid fuel|solid propellant|grain|ice)(?: pellets| fuel| propellant)?',

@@ -15,7 +15,7 @@ export const QUANTUM_EFFICIENCY_WORDS = [
 /** Words that make "350 % efficient" a heating COP (heat pumps deliver more heat than the work they take). */
 export const HEAT_PUMP_WORDS = [
   'heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
-  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', 'radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:mov(?:es?|ing|ed)|pump(?:s|ing|ed)?|lift(?:s|ing|ed)?) heat',
+  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', '(?<!(?:oil-filled|oil|electric|electrical|resistive|resistance|panel|storage|fan|convector|infrared|IR|bar|halogen|quartz)[- ])radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:mov(?:es?|ing|ed)|pump(?:s|ing|ed)?|lift(?:s|ing|ed)?) heat',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
 export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini-?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?', '(?:window|portable|room|wall|ducted|rooftop|car|central) (?:AC|A/C)', 'A/C', 'air ?cons?', 'aircons?'];

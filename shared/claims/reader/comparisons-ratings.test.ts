@@ -1,0 +1,144 @@
+/**
+ * The figure reader on comparisons, ratings, per-unit gains and labelled table rows.
+ *
+ * Against outside references: NIST SP 811 (2008), Appendix B.8: mechanical horsepower
+ * 745.699 87 W, metric horsepower (PS) 735.498 75 W, BTU_IT/h 0.293 071 1 W, kWh 3.6 MJ.
+ * Every text here is invented test data (invented devices, no real people or products).
+ */
+import { extractFigures } from '../reader';
+import type { Figure } from '../types';
+import { expectRelClose, expectWellFormed } from './test-support';
+
+const read = (text: string) => {
+  const figures = extractFigures(text);
+  expectWellFormed(text, figures);
+  return figures;
+};
+const brief = (figures: Figure[]) => figures.map((f) => [f.kind, f.role, f.si]);
+
+describe('a percentage that is the other side of a comparison', () => {
+  test('takes the kind of the percentage it is compared with and is set aside', () => {
+    const f = read('The Tarn-3 turbine reaches 41 % efficiency at its design point, against 36 % for the baseline turbine.');
+    expect(brief(f)).toEqual([
+      ['efficiency', null, expect.closeTo(0.41, 12)],
+      ['efficiency', 'aside', expect.closeTo(0.36, 12)],
+    ]);
+  });
+
+  test('in a sentence of its own that begins "For comparison"', () => {
+    const f = read('Our module converts 21.5 % of the sunlight. For comparison, the older module managed 18 %.');
+    expect(f.map((x) => [x.kind, x.role])).toEqual([
+      ['efficiency', null],
+      ['efficiency', 'aside'],
+    ]);
+    expectRelClose(f[1].si!, 0.18, 1e-12);
+  });
+
+  test("a heat pump's COP compared with a boiler's 100 % makes that 100 % the boiler's efficiency", () => {
+    const f = read('The air-to-water unit is 380 % efficient at 2 °C outside and 40 °C flow, versus 100 % for the gas boiler it replaced.');
+    expect(f.find((x) => x.role === 'aside')).toMatchObject({ kind: 'efficiency', si: 1 });
+    expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'heating', si: 3.8 });
+  });
+
+  test('a percentage with no comparison and no word of its own is still not a figure', () => {
+    expect(read('The drive reached 2 mN. Sales rose 35 % last year.').filter((x) => x.kind !== 'thrust')).toEqual([]);
+  });
+});
+
+describe('a clause that sets the claim against a reference', () => {
+  test("the reference clause is set aside, the claim's own clause is read", () => {
+    const f = read('An ideal 5 kW photon rocket would give about 17 µN; our cavity, by contrast, gave 2 mN from the same 5 kW.');
+    const thrusts = f.filter((x) => x.kind === 'thrust');
+    expect(thrusts.map((x) => [x.role, x.si])).toEqual([
+      ['aside', expect.closeTo(17e-6, 12)],
+      [null, 0.002],
+    ]);
+  });
+
+  test('two clauses without a contrast keep both figures', () => {
+    expect(brief(read('Our rig draws 2 kW; the output is 3 kW.'))).toEqual([
+      ['power', 'in', 2000],
+      ['power', 'out', 3000],
+    ]);
+  });
+});
+
+describe('a gain stated per physical unit', () => {
+  test('"for every kWh" is one kilowatt-hour in', () => {
+    expect(brief(read('The Orrin box is said to return 1.2 kWh for every kWh it is fed.'))).toEqual([
+      ['energy', 'out', 1.2 * 3.6e6],
+      ['energy', 'in', 3.6e6],
+    ]);
+  });
+
+  test('"for every kilowatt of shaft power" is one kilowatt in, in another unit than the output', () => {
+    expect(brief(read('The alternator gives 870 W of electrical power for every kilowatt of shaft power it takes.'))).toEqual([
+      ['power', 'out', 870],
+      ['power', 'in', 1000],
+    ]);
+  });
+
+  test('"units" with no physical unit stay a ratio', () => {
+    expect(read('It gives 1.3 units back for every unit it takes.')).toMatchObject([{ kind: 'efficiency', si: 1.3 }]);
+  });
+});
+
+describe('ratings before the name of a machine', () => {
+  test("an engine's rating as the claim's subject is its output", () => {
+    // 120 PS × 735.498 75 W/PS (NIST SP 811, B.8)
+    const [p] = read('The 120 PS engine is 35 % efficient at full load.');
+    expect(p).toMatchObject({ kind: 'power', role: 'out' });
+    expectRelClose(p.si!, 120 * 735.49875, 1e-12);
+  });
+
+  test('a motor that drives something else is not read as an output', () => {
+    const f = read('A 3 hp motor is said to turn a generator that sends 4 kW back.');
+    expect(f[0].role).not.toBe('out');
+  });
+
+  test("a cooler's horsepower is its drive, the input; its BTU/h are what it removes", () => {
+    // 2 hp × 745.699 87 W/hp; 5000 BTU/h × 0.293 071 1 W (NIST SP 811, B.8)
+    const f = read('The 2 hp cryocooler lifts 5000 BTU/h at 80 K and rejects it at 300 K.');
+    const powers = f.filter((x) => x.kind === 'power');
+    expect(powers[0].role).toBe('in');
+    expectRelClose(powers[0].si!, 2 * 745.69987, 1e-7);
+    expectRelClose(powers[1].si!, 5000 * 0.2930711, 1e-6);
+  });
+
+  test("a pump's horsepower is left to the other rules (its motor's output)", () => {
+    expect(read('A 2 hp pump ran for 3 h.')[0].role).not.toBe('in');
+  });
+});
+
+describe('labels and parts', () => {
+  test('a table row labels each current–voltage pair', () => {
+    const f = read('Unit K7 | in: 4 A at 24 V | out: 3.5 A at 26 V').filter((x) => x.kind === 'power');
+    expect(f.map((x) => [x.role, x.si])).toEqual([
+      ['in', 96],
+      ['out', expect.closeTo(91, 9)],
+    ]);
+  });
+
+  test('"(80 kg of it xenon)" is the propellant of the mass before it', () => {
+    const masses = read('The 600 kg probe (80 kg of it xenon) is to gain 5 km/s at an Isp of 2500 s.').filter((x) => x.kind === 'mass');
+    expect(masses.map((x) => [x.role, x.si])).toEqual([
+      ['wet', 600],
+      ['propellant', 80],
+      ['dry', 520],
+    ]);
+  });
+
+  test('"starts at … and burns out at …" are the wet and dry masses', () => {
+    const masses = read('The exhaust leaves at 3 km/s; the stage starts at 8 t and burns out at 2 t.').filter((x) => x.kind === 'mass');
+    expect(masses.map((x) => [x.role, x.si])).toEqual([
+      ['wet', 8000],
+      ['dry', 2000],
+    ]);
+  });
+
+  test('an electric radiator is not a heat pump: its percentage of the input is an efficiency', () => {
+    const f = read('The panel radiator drew 1.5 kW for 2 hours and gave 3 kWh of heat, 100 % of its input.');
+    expect(f.find((x) => x.text === '100 %')).toMatchObject({ kind: 'efficiency', si: 1 });
+    expect(f.filter((x) => x.role === 'out')).toHaveLength(1);
+  });
+});
