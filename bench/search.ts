@@ -20,7 +20,6 @@
  * mariadbd is stopped and the temp dir removed at the end, on error and on Ctrl-C.
  */
 import { fork, spawn, type ChildProcess } from 'node:child_process';
-import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import autocannon from 'autocannon';
@@ -68,7 +67,6 @@ interface RawConnection {
   query(sql: string, values?: unknown[]): Promise<unknown>;
   end(): Promise<void>;
 }
-// eslint-disable-next-line @typescript-eslint/no-require-imports
 const mariadb = require('mariadb') as { createConnection(opts: object): Promise<RawConnection> };
 let conn: RawConnection | null = null;
 let child: ChildProcess | null = null;

@@ -121,7 +121,7 @@ const SMALL_NUMBER_WORDS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six'
 const AND_A_HALF_RE = new RegExp(`(?<!\\p{L})(${SMALL_NUMBER_WORDS.join('|')})[^\\S\\n]+and[^\\S\\n]+an?[^\\S\\n]+(half|quarter)(?!\\p{L})`, 'giu');
 
 /** A unit given in a label just before a number: "[mN]:", "(kW) =", "/ W:". */
-const HEADER_UNIT_RE = /(?:[\[(][^\S\n]*([^\s\])]{1,8})[^\S\n]*[\])]|(?<![\p{L}\d])[\p{L}_{}]+[^\S\n]*\/[^\S\n]*([^\s:=\/]{1,8}))[^\S\n]*[:=][^\S\n]*$/u;
+const HEADER_UNIT_RE = /(?:[[(][^\S\n]*([^\s\])]{1,8})[^\S\n]*[\])]|(?<![\p{L}\d])[\p{L}_{}]+[^\S\n]*\/[^\S\n]*([^\s:=/]{1,8}))[^\S\n]*[:=][^\S\n]*$/u;
 
 export function tokenize(text: string): NumberToken[] {
   const tokens: NumberToken[] = [];
@@ -201,7 +201,7 @@ export function tokenize(text: string): NumberToken[] {
     push(w.start, w.end, String(w.value), true);
   }
   // "a 3/4 hp motor", "1/2 W": a simple fraction before a unit replaces the number before its slash.
-  for (const m of text.matchAll(/(?<![\p{N}.,\/])(\d{1,2})\/(\d{1,2})(?![\p{N}.,\/])/gu)) {
+  for (const m of text.matchAll(/(?<![\p{N}.,/])(\d{1,2})\/(\d{1,2})(?![\p{N}.,/])/gu)) {
     const [a, b] = [Number(m[1]), Number(m[2])];
     const end = m.index! + m[0].length;
     if (!(b > 1 && a < b) || !unitAt(text, end)) continue;

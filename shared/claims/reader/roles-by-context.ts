@@ -23,7 +23,7 @@ const CRAFT_RE =
 
 /** A distance covered in a time: "4.2 light years in 30 days", "1 AU in 2 hours". */
 const TRAVEL_RE = /(?<![\p{L}\p{N}.,])(\d[\d,]*(?:\.\d+)?)[^\S\n]*(light[- ]years?|lightyears?|parsecs?|astronomical units?|AU)[^\S\n]+in[^\S\n]+(?:(?:just|only|about|under|less than|roughly)[^\S\n]+)?(\d[\d,]*(?:\.\d+)?|an?|one)[^\S\n]*(seconds?|minutes?|hours?|days?|weeks?|months?|years?)(?!\p{L})/giu;
-const TRAVEL_LENGTH: Record<string, number> = { lightyear: 9460730472580800, parsec: 3.0856775814913673e16, astronomicalunit: 149597870700, au: 149597870700 };
+const TRAVEL_LENGTH: Record<string, number> = { lightyear: 9460730472580800, parsec: 3.085677581491367e16, astronomicalunit: 149597870700, au: 149597870700 };
 const TRAVEL_TIME: Record<string, number> = { second: 1, minute: 60, hour: 3600, day: 86400, week: 604800, month: 2629800, year: 31557600 };
 
 /** The apparatus a device is tested on, whose mass is no craft's. */
