@@ -23,7 +23,12 @@ export class Library {
       const ids = new Set([root.id]);
       for (let grew = true; grew; ) {
         grew = false;
-        for (const c of classes) if (c.parentId && ids.has(c.parentId) && !ids.has(c.id)) (ids.add(c.id), (grew = true));
+        for (const c of classes) {
+          if (c.parentId && ids.has(c.parentId) && !ids.has(c.id)) {
+            ids.add(c.id);
+            grew = true;
+          }
+        }
       }
       where.mechanismClassId = { [Op.in]: [...ids] };
     }
