@@ -6,7 +6,7 @@
  */
 import path from 'node:path';
 import type { APIRequestContext, Page } from 'playwright-core';
-import { byTestId, screenshotDir, startHarness, type Harness } from '../support/browser';
+import { byTestId, screenshotDir, settled, startHarness, type Harness } from '../support/browser';
 import { relClose, until } from '../support/poll';
 
 jest.setTimeout(180_000);
@@ -145,7 +145,7 @@ it('renders a published entry full of XSS payloads without running any of them',
   const page = await h.open(390, 844);
   await page.goto(`${h.base}/entries/payload-test-entry`);
   await byTestId(page, 'entry-section-whyItFails').waitFor();
-  await page.waitForTimeout(500);
+  await settled(page);
   for (const link of await page.locator('[data-testid="screen-entry"] a').all()) {
     const href = (await link.getAttribute('href')) ?? '';
     expect(href.toLowerCase().replace(/\s/g, '')).not.toMatch(/^javascript:/);

@@ -105,3 +105,22 @@ export async function signInThroughForm(page: Page, base: string, email: string,
   await byTestId(page, 'submit').click();
   await byTestId(page, 'screen-account').waitFor();
 }
+
+/**
+ * Waits until the page has done what it was going to do, instead of a fixed pause: no request in
+ * flight (network idle), the fonts loaded, two animation frames rendered (React has committed and the
+ * browser painted) and the task queue run through once (event handlers such as `onerror` or
+ * `ontoggle`, which the browser queues as tasks after rendering, have fired). Use it before checking
+ * that something did NOT happen.
+ */
+export async function settled(page: Page): Promise<void> {
+  await page.waitForLoadState('networkidle');
+  // As a string: babel would turn an async function into helpers the page does not have.
+  await page.evaluate(`(async () => {
+    await document.fonts.ready;
+    await new Promise((resolve) => requestAnimationFrame(() => requestAnimationFrame(() => resolve())));
+    await new Promise((resolve) => setTimeout(resolve, 0));
+  })()`);
+  // Anything the first round of tasks started (a fetch from a handler) has also finished.
+  await page.waitForLoadState('networkidle');
+}
