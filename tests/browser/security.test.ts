@@ -20,7 +20,7 @@ import type { ConsoleMessage, Page } from 'playwright-core';
 import request from 'supertest';
 import { XSS_PAYLOADS, payloadText } from '../fixtures/xss-payloads';
 import { demo } from '../support/app';
-import { byTestId, startHarness, signInThroughForm, type Harness } from '../support/browser';
+import { byTestId, settled, startHarness, signInThroughForm, type Harness } from '../support/browser';
 
 jest.setTimeout(300_000);
 
@@ -164,9 +164,8 @@ async function openWatched(): Promise<Page & { problems: string[]; dialogs: stri
 
 /** Waits for the page to settle, then runs the inspection and checks every marker is shown as text. */
 async function expectClean(page: Page & { problems: string[]; dialogs: string[] }, markers: string[]) {
-  await page.waitForLoadState('networkidle');
-  // Give any injected timer or handler a moment to fire (and every hover/focus-less handler none).
-  await page.waitForTimeout(300);
+  // Wait until the page has settled (network idle, painted, queued handlers run), not for a fixed time.
+  await settled(page);
   const seen = await page.evaluate(inspectPage);
   expect(seen.problems).toEqual([]);
   expect(seen.flag).toBeUndefined();
@@ -249,7 +248,7 @@ it('a wrong password: said on the screen, and nothing in the console from our ow
   await byTestId(page, 'submit').click();
   expect((await answer).status()).toBe(401);
   await page.getByText(/password/i).first().waitFor();
-  await page.waitForTimeout(500);
+  await settled(page);
   expect(await page.evaluate(() => location.pathname)).toBe('/sign-in');
   expect(errors.slice(0, beforeSignIn)).toEqual([]);
   // Chromium's own network line for the 401 is the only one allowed (it comes from the browser, not from a script).
