@@ -4,14 +4,13 @@
  * Ctrl+Enter; the paste-ready paragraph is the first thing of the result and is the server's own;
  * another variant is shown at once without asking the server again and is what Copy puts on the
  * clipboard; the figures show the range and the hedge the text gave; a fixed figure runs the checks
- * again by itself, to the numbers runCheck gives in this process. Save, signed out, goes by the
+ * again by itself, to numbers worked out by hand from P/c. Save, signed out, goes by the
  * sign-in screen and comes back to the same text, figures and result, which are then saved; a
  * second, signed-out reader opens the share link; once the owner deletes it the link answers not
  * found. Screenshots go to test-output/screenshots/.
  */
 import path from 'node:path';
 import type { Page } from 'playwright-core';
-import { runCheck } from '../../shared/checks/run';
 import { PARAGRAPH_VARIANT_LABEL, type ClaimCheckResult } from '../../shared/claims/types';
 import { byTestId, screenshotDir, startHarness, type Harness } from '../support/browser';
 import { relClose, until } from '../support/poll';
@@ -126,12 +125,12 @@ describe.each([
     expect(relClose(await si(page, `claim-figure-${thrust.id}-si`, 'data-upper-si'), thrust.upper!.si)).toBe(true);
     expect(await byTestId(page, `claim-figure-${thrust.id}-upper`).inputValue()).toBe(thrust.upper!.quantity);
     expect(await text(page, `claim-figure-${power.id}-hedge`)).toContain('up to');
-    // The check as first run, with the finding in words and the range end it used.
-    const first = runCheck('photon-bound', { F_claimed: thrust.quantity, P: power.quantity });
-    expect(relClose(await si(page, 'claim-check-photon-bound-output-ratio'), first.outputs.find((o) => o.name === 'ratio')!.si)).toBe(true);
-    expect(await text(page, 'claim-check-photon-bound-finding-words')).toBe(
-      first.verdict.holds ? 'Consistent with conservation of linear momentum' : 'Breaks conservation of linear momentum',
-    );
+    // The check as first run, with the finding in words and the range end it used, worked by hand (not by
+    // the kit): the lower end, 0.1 lbf, over P/c for 1.5 kW, c = 299 792 458 m/s exactly (BIPM SI Brochure,
+    // 9th ed.): about 8.9 × 10^4 times the bound, so the law is broken.
+    const firstRatio = (0.1 * LBF) / (1500 / 299_792_458);
+    expect(relClose(await si(page, 'claim-check-photon-bound-output-ratio'), firstRatio)).toBe(true);
+    expect(await text(page, 'claim-check-photon-bound-finding-words')).toBe('Breaks conservation of linear momentum');
     expect(await text(page, 'claim-check-photon-bound-assumptions')).toContain('most favourable to the claim');
     for (const need of api.needs) expect(await text(page, `claim-need-${need.check}-missing`)).toContain('Needs a figure the text does not give: ');
     await page.screenshot({ path: path.join(screenshotDir, `claim-check-result-${name}.png`), fullPage: true });
@@ -140,11 +139,11 @@ describe.each([
     await byTestId(page, 'claim-check-photon-bound').scrollIntoViewIfNeeded();
     await page.screenshot({ path: path.join(screenshotDir, `claim-check-findings-${name}.png`) });
 
-    // 6. Fix the thrust (a single value now): the checks run again by themselves, with runCheck's numbers.
+    // 6. Fix the thrust (a single value now): the checks run again by themselves.
     await byTestId(page, `claim-figure-${thrust.id}-upper`).fill('');
     await byTestId(page, `claim-figure-${thrust.id}-quantity`).fill(fixedThrust);
-    const fixed = runCheck('photon-bound', { F_claimed: fixedThrust, P: power.quantity });
-    const ratio = fixed.outputs.find((o) => o.name === 'ratio')!.si;
+    // By hand: 0.01 lbf over P/c for 1.5 kW (c exact, BIPM SI Brochure, 9th ed.).
+    const ratio = (0.01 * LBF) / (1500 / 299_792_458);
     await until('the photon-bound ratio follows the fixed thrust', async () => relClose(await si(page, 'claim-check-photon-bound-output-ratio'), ratio));
     // No button was pressed: the change alone ran them (once, or twice had the two fields been slow to fill).
     expect(runs.n).toBeGreaterThanOrEqual(2);
