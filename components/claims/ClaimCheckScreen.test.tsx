@@ -5,7 +5,7 @@ import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '..
 import { colors } from '../theme';
 import type { ClaimCheckRequest } from '@/shared/api-types';
 import { ClaimCheckScreen, RERUN_DELAY_MS } from './ClaimCheckScreen';
-import { figure, figures, heatPumpFigures, heatPumpText, LBF, pitch, resultFor, savedDto, token, savedResponse } from './fixtures';
+import { figure, figures, heatPumpFigures, heatPumpText, LBF, pitch, resultFor, token, savedResponse } from './fixtures';
 
 const mockPush = jest.fn();
 jest.mock('expo-router', () => ({

@@ -2,7 +2,7 @@ import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 import { PARAGRAPH_VARIANT_LABEL } from '@/shared/claims/types';
 import { formatQuantity } from '@/shared/worksheet/quantity';
-import { LBF, savedDto, token, savedResponse } from './fixtures';
+import { LBF, token, savedResponse } from './fixtures';
 import { SavedClaimCheckScreen } from './SavedClaimCheckScreen';
 
 jest.mock('expo-router', () => require('../testing/expoRouter'));

@@ -18,7 +18,7 @@ import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
-import { ClaimCaution } from './ClaimCheckScreen';
+import { ClaimCaution } from './ClaimCheckParts';
 import { CheckRuns, ClaimNotes, FigureTable, MatchList, NEEDS_TITLE, NeedsList, ParagraphPanel } from './ResultParts';
 import { isNotFound, SignInToSave } from './Saving';
 import { WhereInText } from './WhereInText';

@@ -8,14 +8,11 @@ import * as DocumentPicker from 'expo-document-picker';
 import { useRef, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { UserDto } from '@/shared/api-types';
-import { FIGURE_KIND_LABEL, FIGURE_KIND_SHORT, FIGURE_KINDS, type FigureKind } from '@/shared/claims/types';
 import { ATTACHMENT_TYPES, ATTACHMENTS_MAX, type SubmissionDto } from '@/shared/submissions/types';
-import { ChoiceChips } from '../admin/ChoiceChips';
 import { serverFieldErrors } from '../http/fieldErrors';
 import { useSession } from '../queries/accounts';
 import { type PickedFile, useSubmitSighting } from '../queries/submissions';
 import { ResendVerification } from '../auth/ResendVerification';
-import { EXAMPLE_FOR } from '../claims/figures';
 import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { ErrorNotice } from '../ui/ErrorNotice';
@@ -23,13 +20,11 @@ import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
-import { dataAttributes } from '../worksheet/dataAttributes';
 import { FieldError } from '../worksheet/QuantityField';
 import { Field } from './Field';
-import { ALLOWED_WORDS, checkSighting, fileProblem, filesProblem, mediaTypeWords, readFigure, type FigureRow } from './sighting';
+import { ALLOWED_WORDS, checkSighting, fileProblem, filesProblem, mediaTypeWords, type FigureRow } from './sighting';
 import { bytesWords, problemWords } from './words';
-
-const KIND_CHIP = FIGURE_KIND_SHORT;
+import { FigureRowEditor } from './FigureRowEditor';
 
 export function ReportSightingScreen() {
   const { data, error, isPending, refetch } = useSession();
@@ -333,70 +328,11 @@ function SightingForm({ user }: { user: UserDto }) {
   );
 }
 
-interface FigureRowEditorProps {
-  index: number;
-  row: FigureRow;
-  error: string | undefined;
-  onChange: (row: FigureRow) => void;
-  onRemove: () => void;
-}
-
-function FigureRowEditor({ index, row, error, onChange, onRemove }: FigureRowEditorProps) {
-  const testID = `sighting-figure-${index}`;
-  const reading = row.quantity.trim() ? readFigure(row.kind, row.quantity) : null;
-  const problem = error ?? (reading && !reading.ok ? reading.message : undefined);
-  return (
-    <View role="listitem" testID={testID} style={styles.row}>
-      <View style={styles.head}>
-        <Text style={type.uiStrong}>
-          Figure {index + 1} · {FIGURE_KIND_LABEL[row.kind]}
-        </Text>
-        <Button testID={`${testID}-remove`} variant="quiet" label="Remove" onPress={onRemove} />
-      </View>
-      <Text style={type.ui}>Kind</Text>
-      <ChoiceChips
-        label={`Figure ${index + 1}: kind`}
-        testID={`${testID}-kind`}
-        options={FIGURE_KINDS.map((value) => ({ value, label: KIND_CHIP[value] }))}
-        value={row.kind}
-        onChange={(kind) => onChange({ ...row, kind })}
-      />
-      <Field
-        label="Quantity with its unit"
-        testID={`${testID}-quantity`}
-        kind="mono"
-        value={row.quantity}
-        onChangeText={(quantity) => onChange({ ...row, quantity })}
-        placeholder={EXAMPLE_FOR[row.kind]}
-        error={problem}
-      />
-      {reading?.ok ? (
-        <Text style={type.small}>
-          In SI:{' '}
-          <Text testID={`${testID}-si`} {...dataAttributes({ si: String(reading.si) })} style={styles.mono}>
-            {reading.display}
-          </Text>
-        </Text>
-      ) : null}
-      <Field
-        label="What it is (optional)"
-        testID={`${testID}-label`}
-        value={row.label}
-        onChangeText={(label) => onChange({ ...row, label })}
-        placeholder="claimed thrust"
-      />
-    </View>
-  );
-}
-
 const styles = StyleSheet.create({
   form: { gap: space.sm },
   fields: { gap: space.md },
   intro: { marginBottom: space.sm },
   list: { borderTopColor: colors.rule, borderTopWidth: 1, marginBottom: space.sm },
-  row: { gap: space.xs, paddingVertical: space.md, borderBottomColor: colors.rule, borderBottomWidth: 1 },
-  head: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'center', gap: space.xs },
-  mono: { ...type.mono, fontSize: 13, color: colors.ink },
   fileRow: {
     flexDirection: 'row',
     flexWrap: 'wrap',
