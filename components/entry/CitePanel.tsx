@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { ChoiceChips } from '../admin/ChoiceChips';
-import { CITE_FORMATS, type CiteFormat } from '@/shared/api-types';
+import { CITE_DATA_FORMATS, CITE_FORMAT_LABEL, CITE_FORMATS, type CiteFormat } from '@/shared/api-types';
 import { useCite } from '../queries/entries';
 import { colors, radius, space, type } from '../theme';
 import { Button } from '../ui/Button';
@@ -9,17 +9,10 @@ import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
 import { formatDay } from './format';
 
-const formatLabels: Record<CiteFormat, string> = {
-  apa: 'APA',
-  vancouver: 'Vancouver',
-  harvard: 'Harvard',
-  bibtex: 'BibTeX',
-  ris: 'RIS',
-  'csl-json': 'CSL-JSON',
-};
+const formatLabels = CITE_FORMAT_LABEL;
 
 /** Formats that are data for a reference manager, shown in the mono face; the rest read as prose. */
-const asData = new Set<CiteFormat>(['bibtex', 'ris', 'csl-json']);
+const asData = new Set<CiteFormat>(CITE_DATA_FORMATS);
 
 type CopyState = 'idle' | 'copied' | 'failed';
 

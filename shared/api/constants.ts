@@ -9,9 +9,12 @@ export const CITATION_STYLES = ['apa', 'vancouver', 'harvard'] as const;
 export type CitationStyle = (typeof CITATION_STYLES)[number];
 export const CITATION_STYLE_LABEL: Record<CitationStyle, string> = { apa: 'APA', vancouver: 'Vancouver', harvard: 'Harvard' };
 
-/** What `GET /api/entries/:slug/cite?format=` accepts: the text styles and three data formats. */
-export const CITE_FORMATS = [...CITATION_STYLES, 'bibtex', 'ris', 'csl-json'] as const;
+/** The data formats a version is cited in: files for a reference manager rather than prose. */
+export const CITE_DATA_FORMATS = ['bibtex', 'ris', 'csl-json'] as const;
+/** What `GET /api/entries/:slug/cite?format=` accepts: the text styles and the data formats. */
+export const CITE_FORMATS = [...CITATION_STYLES, ...CITE_DATA_FORMATS] as const;
 export type CiteFormat = (typeof CITE_FORMATS)[number];
+export const CITE_FORMAT_LABEL: Record<CiteFormat, string> = { ...CITATION_STYLE_LABEL, bibtex: 'BibTeX', ris: 'RIS', 'csl-json': 'CSL-JSON' };
 
 /** The sections of an entry version in reading order: the entry page, the diff and the editor go by it. */
 export const SECTION_ORDER = [
