@@ -5,6 +5,7 @@
  * 745.699 87 W, metric horsepower (PS) 735.498 75 W, BTU_IT/h 0.293 071 1 W, kWh 3.6 MJ.
  * Every text here is invented test data (invented devices, no real people or products).
  */
+import { runClaimChecks } from '../plan';
 import { extractFigures } from '../reader';
 import type { Figure } from '../types';
 import { expectRelClose, expectWellFormed } from './test-support';
@@ -140,5 +141,61 @@ describe('labels and parts', () => {
     const f = read('The panel radiator drew 1.5 kW for 2 hours and gave 3 kWh of heat, 100 % of its input.');
     expect(f.find((x) => x.text === '100 %')).toMatchObject({ kind: 'efficiency', si: 1 });
     expect(f.filter((x) => x.role === 'out')).toHaveLength(1);
+  });
+});
+
+describe('more roles by the words around', () => {
+  test('what a source feeds into a charge controller is its input; the output to the bank is its output', () => {
+    const f = read('The string feeds 6 A at 48 V into the charge controller, whose output to the battery is 270 W.').filter((x) => x.kind === 'power');
+    expect(f.map((x) => [x.role, x.si])).toEqual([
+      ['in', 288],
+      ['out', 270],
+    ]);
+  });
+
+  test('what a pack "is said to have stored" came out of the device that fed it', () => {
+    const f = read('The gadget drew 3 W from a USB port for a day, yet the pack it fed is said to have stored 1 kWh.');
+    expect(f.find((x) => x.text === '1 kWh')).toMatchObject({ kind: 'energy', role: 'out', si: 3.6e6 });
+  });
+
+  test('"than the 2 kW it is supplied with" is the input', () => {
+    const f = read('The unit delivers 10 % more power than the 2 kW it is supplied with.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 2000],
+      ['excess', expect.closeTo(200, 9)],
+      ['out', expect.closeTo(2200, 9)],
+    ]);
+  });
+});
+
+describe('what the text says is not the device', () => {
+  test('a heat pump the device is said to beat does not make it a heat pump', () => {
+    const f = read('The Lumo panel heater turns 1 kWh of electricity into 1.3 kWh of heat, beating any heat pump.');
+    expect(f.some((x) => x.kind === 'cop')).toBe(false);
+    expect(f.map((x) => x.role)).toEqual(['in', 'out']);
+  });
+
+  test('no input is read from "free energy" when the text says the input was not given', () => {
+    const f = read('The seller says the generator gives 500 W of free energy but gives no figure for what it takes in.');
+    expect(f.some((x) => x.role === 'in')).toBe(false);
+  });
+
+  test('"no air flow or propellant" is a device that throws out nothing', () => {
+    const text = 'A bench rig gives 0.2 µN/W, and the builder says no air flow or propellant is involved.';
+    const f = read(text);
+    expect(f).toMatchObject([{ kind: 'thrust-per-power', si: expect.closeTo(2e-7, 18) }]);
+    // The photon-rocket bound: F/P ≤ 1/c (c = 299 792 458 m/s, SI Brochure), so the ratio is (F/P)·c.
+    const photon = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'photon-bound');
+    expect(photon?.finding).toBe('breaks');
+    expectRelClose(photon!.outputs.find((o) => o.name === 'ratio')!.si!, 2e-7 * 299792458, 1e-9);
+  });
+});
+
+describe('machines that push on air', () => {
+  test('a drone whose rotors give its thrust is not judged by the photon-rocket bound, even under a propellant-free class', () => {
+    const text = 'Crop-spraying drone, spec sheet: the six rotors give 30 kilograms of thrust while drawing 6 kW in hover.';
+    const f = read(text);
+    const run = runClaimChecks(f, { text, classes: ['propellant-free-thrust'] });
+    expect(run.checks.filter((c) => c.check === 'photon-bound')).toEqual([]);
   });
 });

@@ -17,6 +17,9 @@ import { roleFor } from './roles';
 import { ROCKET_RE, rolesByContext } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
 
+/** The text says the input was not given: a claim of no input cannot be read from it. */
+const INPUT_NOT_GIVEN_RE =
+  /(?<!\p{L})(?:(?:gives?|gave|states?|stated|reports?|reported|provides?|provided|quotes?|quoted|lists?|listed|offers?|offered)[^\S\n]+no[^\S\n]+(?:figures?|numbers?|values?|data|measurements?|readings?)|(?:does|do|did)[^\S\n]*(?:not|n't)[^\S\n]+(?:say|state|give|report|disclose|quote|list|mention|measure))[^.;!?\n]{0,40}(?:input|takes?(?: in)?|draws?|consumes?|uses?|needs?|supply|feeds? it)(?!\p{L})/iu;
 const SELF_RUNNING_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'giu');
 const HARVEST_RE = new RegExp(`(?<!\\p{L})(?:${alt(HARVEST_WORDS)})(?!\\p{L})`, 'iu');
 
@@ -243,7 +246,10 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const m = SELF_RUNNING_RE.exec(text);
     const hasThrust = drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power');
     const out = drafts.find((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust)));
-    const inputUnknown = /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data))?[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text);
+    const inputUnknown =
+      /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data))?[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text) ||
+      // "The seller gives no figure for what it takes in", "does not say how much it draws".
+      INPUT_NOT_GIVEN_RE.test(text);
     if (m && out && !inputUnknown && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {
       const start = m.index;
       const end = m.index + m[0].length;
@@ -260,7 +266,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   const denied = /(?<!\p{L})(?:no|not an?|without an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?heat[- ]pumps?(?!\p{L})/iu.test(text);
   if (HEAT_PUMP_RE.test(text) && !denied && !drafts.some((d) => d.kind === 'cop')) {
     for (const kind of ['energy', 'power'] as const) {
-      const ins = drafts.filter((d) => d.kind === kind && d.role === 'in' && !d.derived);
+      // (An input of one unit, from "4 kWh of heat for every kWh", counts as stated.)
+      const ins = drafts.filter((d) => d.kind === kind && d.role === 'in' && (!d.derived || d.derived.startsWith('one ')));
       // (The heat out may be the input plus a stated excess: "3 kW more heat than the 1 kW it uses".)
       const outs = drafts.filter((d) => d.kind === kind && d.role === 'out' && (!d.derived || d.derived.startsWith('output = input + excess')));
       if (ins.length !== 1 || outs.length !== 1) continue;

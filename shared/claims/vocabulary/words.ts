@@ -14,7 +14,8 @@ export const QUANTUM_EFFICIENCY_WORDS = [
 
 /** Words that make "350 % efficient" a heating COP (heat pumps deliver more heat than the work they take). */
 export const HEAT_PUMP_WORDS = [
-  'heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
+  // (Not a heat pump the device is said to beat: "beating every heat pump", "better than any heat pump".)
+  '(?<!(?:every|any|all|than|unlike|beat|beats|beating|outperforms?|outperforming|outdoes|outdoing|rivals?|rivall?ing)\\s+(?:(?:a|an|the|any|every|all|most|modern|best)\\s+)?(?:[\\w-]+\\s+)?)heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
   'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', '(?<!(?:oil-filled|oil|electric|electrical|resistive|resistance|panel|storage|fan|convector|infrared|IR|bar|halogen|quartz)[- ])radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:mov(?:es?|ing|ed)|pump(?:s|ing|ed)?|lift(?:s|ing|ed)?) heat',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
@@ -47,6 +48,8 @@ export const HEAT_ENGINE_WORDS = [
 
 /** A device said to throw out nothing: the photon-rocket bound applies to its thrust. */
 export const PROPELLANT_FREE_WORDS = [
+  // ("no air flow or propellant": before the shorter "no air flow" below, so that the propellant is part of the match.)
+  'no (?:[\\w-]+ ){0,2}(?:or|nor) (?:any )?(?:propellant|reaction mass|exhaust)', 'neither (?:[\\w-]+ ){0,2}nor (?:any )?(?:propellant|reaction mass|exhaust)',
   'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless', 'without (?:spending|using|burning|consuming|expending) (?:any )?(?:propellant|fuel|reaction mass)',
   '(?:ion(?:ic)? wind|air currents?|convection) (?:cannot|can ?not|can\'t|could not|is not|isn\'t) (?:be )?(?:the )?(?:cause|explanation|source)', 'rul(?:e|es|ed|ing) out (?:ion(?:ic)? wind|air currents?|convection)',
   'without (?:any )?(?:expelling|ejecting|emitting|throwing|shedding|venting)(?: (?:out )?(?:any )?(?:propellant|mass|reaction mass|material|matter|exhaust|gas))?',
@@ -77,6 +80,8 @@ export const PROPELLANT_WORDS = [
   'ground(?:-based)? lasers?', 'laser-pushed', 'beamed (?:power|energy) from', 'tether',
   // Things that push on air or water (lawfully far above P/c).
   '(?:drone|quadcopter|multicopter|multirotor) (?:makers?|motors?|propellers?|rotors?|arms?|props?)', 'quadcopters?', 'multicopters?', 'multirotors?', 'helicopters?',
+  '(?:agricultural|delivery|camera|racing|crop[- ]spraying|survey|photography|FPV|hobby|consumer|cargo|military|inspection) drones?', 'drone spec(?:ification)?s?',
+  '(?:four|six|eight|main|tail) rotors?(?! (?:inside|in a|in the|within|enclosed|sealed))',
   'lifters?(?=[^.;!?]{0,80}(?:\\d ?kV|kilovolts?))', 'in (?:the )?(?:open|room|ambient|free|still|ordinary) air', 'rotor blades?', 'propellers?', 'props?', '(?:RC|R/C|radio[- ]controlled|model) (?:planes?|aircraft|airplanes?|aeroplanes?|helis?|gliders?|boats?)', '(?:air|aero)planes?', 'aircraft', 'paramotors?', 'hovercraft', 'ducted fans?', 'EDFs?', 'outboards?', 'boats?', 'water jets?', '(?:balsa|foil|ion|ionic|corona|EHD|high-voltage)[\\w-]*(?: [\\w-]+)? lifters?',
   'pushes? (?:on|against) (?:the )?(?:air|water)', 'tractors?', 'wheels? on the ground',
 ];
