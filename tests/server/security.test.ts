@@ -350,7 +350,7 @@ describe('the audit log, append-only in the database', () => {
  * words. (Domain text such as the check kit's may say "at 300 K (…)", so a frame needs its :line:col.)
  */
 const INTERNALS = [
-  /\bat [\w$.<>\[\] ]+ \([^)]*:\d+:\d+\)/, // a stack frame
+  /\bat [\w$.<>[\] ]+ \([^)]*:\d+:\d+\)/, // a stack frame
   /\.(ts|tsx|js|mjs|cjs):\d+/, // a source position
   /\/work\/|\/home\/|\/root\/|node_modules/, // a file path
   /\bSELECT\b[^"]*\bFROM\b|\bINSERT INTO\b|\bDELETE FROM\b|\bUPDATE `?\w+`? SET\b|\bCREATE TABLE\b|`\w+`\.`\w+`/i, // SQL

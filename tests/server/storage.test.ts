@@ -25,7 +25,6 @@ interface S3rverInstance {
   run(): Promise<{ address: string; port: number }>;
   close(): Promise<void>;
 }
-// eslint-disable-next-line @typescript-eslint/no-require-imports
 const S3rver = require('s3rver') as new (opts: Record<string, unknown>) => S3rverInstance;
 
 const sha256 = (b: Buffer) => crypto.createHash('sha256').update(b).digest('hex');

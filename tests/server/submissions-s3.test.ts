@@ -15,7 +15,6 @@ import { demo, startTestApp, type TestApp } from '../support/app';
 jest.setTimeout(120_000);
 
 // s3rver ships no types; the part of its API used here (node_modules/s3rver/README.md).
-// eslint-disable-next-line @typescript-eslint/no-require-imports
 const S3rver = require('s3rver') as new (opts: Record<string, unknown>) => { run(): Promise<{ port: number }>; close(): Promise<void> };
 
 let s3: InstanceType<typeof S3rver>;

@@ -31,7 +31,10 @@ const storedFiles = (): string[] => {
   const out: string[] = [];
   const walk = (d: string) => {
     if (!fs.existsSync(d)) return;
-    for (const e of fs.readdirSync(d, { withFileTypes: true })) (e.isDirectory() ? walk(path.join(d, e.name)) : out.push(path.join(d, e.name)));
+    for (const e of fs.readdirSync(d, { withFileTypes: true })) {
+      if (e.isDirectory()) walk(path.join(d, e.name));
+      else out.push(path.join(d, e.name));
+    }
   };
   walk(uploadDir());
   // The local store keeps each object's type and hash in <key>.meta.json beside it.
