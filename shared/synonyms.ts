@@ -43,5 +43,4 @@ export const synonymFileSchema = z.object({ groups: z.array(z.object({ terms: sy
 export type SynonymGroupInput = z.output<typeof synonymGroupCreateSchema>;
 export type SynonymGroupUpdate = z.output<typeof synonymGroupUpdateSchema>;
 
-// The DTOs are part of the API contract (shared/api/synonyms.ts).
-export type { SynonymGroupDto, SynonymGroupResponse, SynonymListResponse } from './api/synonyms';
+// The DTOs are part of the API contract: shared/api/synonyms.ts.

@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import type { UserDto } from '@/shared/api-types';
-import type { SynonymGroupDto } from '@/shared/synonyms';
+import type { SynonymGroupDto } from '@/shared/api/synonyms';
 import { forgetCsrfToken } from '../http/client';
 import { setPathname } from '../testing/expoRouter';
 import { jsonResponse, mockFetch, renderWithProviders } from '../testing/render';

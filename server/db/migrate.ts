@@ -1,9 +1,9 @@
 /** Migrations with umzug, recorded in the `schema_migrations` table. */
 import type { QueryInterface, Sequelize } from 'sequelize';
-import { SequelizeStorage, Umzug, type MigrationFn } from 'umzug';
+import { SequelizeStorage, Umzug } from 'umzug';
 import { migrations } from './migrations';
 
-export type Migration = MigrationFn<QueryInterface>;
+export type { Migration } from './migrations/types';
 
 export function migrator(sequelize: Sequelize, log: (msg: string) => void = () => {}) {
   return new Umzug<QueryInterface>({

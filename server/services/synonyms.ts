@@ -7,11 +7,7 @@
  * new groups before the answer goes; other app servers see the change through the watermark.
  */
 import { Op, UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
-import {
-  type SynonymGroupDto,
-  type SynonymGroupInput,
-  type SynonymGroupUpdate,
-} from '../../shared/synonyms';
+import type { SynonymGroupDto, SynonymGroupInput, SynonymGroupUpdate } from '../../shared/api/synonyms';
 import { fieldsError, HttpError } from '../http/errors';
 import { audit, SynonymGroup, SynonymPhrase, type User } from '../models';
 import { phraseKey } from '../search/synonyms';

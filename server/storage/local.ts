@@ -15,7 +15,7 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { pipeline } from 'node:stream/promises';
-import type { ObjectMeta, ObjectStore, StoredObject } from './index';
+import type { ObjectMeta, ObjectStore, StoredObject } from './types';
 import { assertKey, ObjectNotFoundError, SHA256_HEX } from './keys';
 
 const isCode = (err: unknown, ...codes: string[]) => codes.includes((err as NodeJS.ErrnoException)?.code ?? '');

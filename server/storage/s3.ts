@@ -15,7 +15,7 @@ import {
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Readable } from 'node:stream';
-import type { ObjectMeta, ObjectStore, S3StorageConfig, StoredObject } from './index';
+import type { ObjectMeta, ObjectStore, S3StorageConfig, StoredObject } from './types';
 import { assertKey, ObjectNotFoundError, SHA256_HEX } from './keys';
 
 type AwsError = { name?: string; Code?: string; $metadata?: { httpStatusCode?: number } };

@@ -68,7 +68,10 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
   // Attachments in a throwaway directory (a test may pass its own store, e.g. S3 on s3rver).
   const uploads = appOpts.store ? null : fs.mkdtempSync(path.join(os.tmpdir(), 'cw-uploads-'));
   const store = appOpts.store ?? new LocalStore(uploads!);
-  const app = createApp({ sequelize: t.sequelize, version: 'test', env: 'test', mailer: mail.mailer, rateLimits: HIGH_LIMITS, ...appOpts, store });
+  // Computations get a generous time limit unless the test sets its own: on two busy cores the first
+  // claim check of an app (a worker thread loading the reader) can pass the 2 s a server allows.
+  const compute = { timeoutMs: 60_000, ...appOpts.compute };
+  const app = createApp({ sequelize: t.sequelize, version: 'test', env: 'test', mailer: mail.mailer, rateLimits: HIGH_LIMITS, ...appOpts, compute, store });
   const client = () => Client.start(app);
   return {
     t,

@@ -1,6 +1,6 @@
 /** The taxonomy that every entry hangs on: conservation laws and the mechanism-class tree. */
 import { DataTypes } from 'sequelize';
-import type { Migration } from '../migrate';
+import type { Migration } from './types';
 
 const timestamps = {
   created_at: { type: DataTypes.DATE, allowNull: false },

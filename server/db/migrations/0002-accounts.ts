@@ -4,7 +4,7 @@
  * the development outbox (messages caught by the local fake SMTP server).
  */
 import { DataTypes } from 'sequelize';
-import type { Migration } from '../migrate';
+import type { Migration } from './types';
 
 const timestamps = {
   created_at: { type: DataTypes.DATE, allowNull: false },

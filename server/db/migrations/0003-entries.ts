@@ -7,7 +7,7 @@
  * model hooks and the service, so that a permalink's text can never change under a citation.
  */
 import { DataTypes } from 'sequelize';
-import type { Migration } from '../migrate';
+import type { Migration } from './types';
 
 const timestamps = {
   created_at: { type: DataTypes.DATE, allowNull: false },

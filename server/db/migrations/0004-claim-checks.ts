@@ -4,7 +4,7 @@
  * show the link again, so the token itself is kept (it grants reading only, never writing).
  */
 import { DataTypes } from 'sequelize';
-import type { Migration } from '../migrate';
+import type { Migration } from './types';
 
 export const up: Migration = async ({ context: qi }) => {
   await qi.createTable('saved_claim_checks', {

@@ -5,7 +5,7 @@
  * the entries an accepted sighting is linked to; and each submission's history.
  */
 import { DataTypes } from 'sequelize';
-import type { Migration } from '../migrate';
+import type { Migration } from './types';
 
 const fk = (table: string, allowNull: boolean, onDelete: 'RESTRICT' | 'CASCADE' | 'SET NULL' = 'RESTRICT') => ({
   type: DataTypes.INTEGER.UNSIGNED,

@@ -6,7 +6,7 @@
  * search index's change watermark.
  */
 import { DataTypes } from 'sequelize';
-import type { Migration } from '../migrate';
+import type { Migration } from './types';
 
 export const up: Migration = async ({ context: qi }) => {
   await qi.createTable('synonym_groups', {

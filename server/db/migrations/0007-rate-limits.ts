@@ -5,7 +5,7 @@
  * database's clock). Rows of ended windows are deleted on a timer, hence the index on reset_ms.
  */
 import { DataTypes } from 'sequelize';
-import type { Migration } from '../migrate';
+import type { Migration } from './types';
 
 export const up: Migration = async ({ context: qi }) => {
   await qi.createTable('rate_limits', {

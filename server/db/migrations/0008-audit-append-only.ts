@@ -7,7 +7,7 @@
  *
  * mariadb-dump writes triggers by default, so a backup restored with `npm run restore` keeps them.
  */
-import type { Migration } from '../migrate';
+import type { Migration } from './types';
 
 export const up: Migration = async ({ context: qi }) => {
   const sequelize = qi.sequelize;

@@ -4,7 +4,7 @@
  * Tests: tests/server/synonyms.test.ts (and the role matrix, csrf.test.ts, the fuzzer).
  */
 import { Router } from 'express';
-import type { SynonymGroupResponse, SynonymListResponse } from '../../../shared/synonyms';
+import type { SynonymGroupResponse, SynonymListResponse } from '../../../shared/api/synonyms';
 import { validated } from '../../http/validate';
 import type { Allow } from '../../policies';
 import type { Synonyms } from '../../services/synonyms';
