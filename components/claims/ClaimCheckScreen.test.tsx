@@ -33,8 +33,14 @@ const bodyOf = (init?: RequestInit) => JSON.parse(String(init?.body)) as ClaimCh
 const paste = (text: string) => fireEvent.change(screen.getByTestId('claim-text'), { target: { value: text } });
 const headings = () => screen.getAllByRole('heading', { level: 2 }).map((h) => h.textContent);
 const ctrlEnter = (mod: 'ctrlKey' | 'metaKey' = 'ctrlKey') => fireEvent.keyDown(screen.getByTestId('claim-text'), { key: 'Enter', [mod]: true });
-/** Lets time pass (the debounce of the figures) inside act, as a reader pausing would. */
-const pause = (ms: number) => act(() => new Promise<void>((r) => setTimeout(r, ms)));
+/**
+ * Lets time pass (the debounce of the figures) as a reader pausing would: the tests run on jest's fake
+ * clock, so this moves it on by exactly `ms` (no real waiting, and a negative check after it is exact).
+ */
+const pause = (ms: number) =>
+  act(async () => {
+    jest.advanceTimersByTime(ms);
+  });
 const checkCalls = (fetchMock: jest.Mock) => fetchMock.mock.calls.filter(([p]) => p === '/api/claim-checks');
 /** Answers the claim check from the request: the figures sent (read as the server would) or the pitch's own. */
 const answer = (init?: RequestInit) => {
@@ -42,10 +48,15 @@ const answer = (init?: RequestInit) => {
   return jsonResponse(200, resultFor(figures, body.style, body.figures ? 'again' : 'first', body.variant));
 };
 
-// Some tests wait, as a reader would, for the figures' debounce to pass (real time, on a shared machine).
+// The figures' debounce runs on jest's fake clock (testing-library's waitFor moves it along too).
 jest.setTimeout(30_000);
 
+afterEach(() => {
+  jest.useRealTimers();
+});
+
 beforeEach(() => {
+  jest.useFakeTimers();
   setWindowWidth(390);
   mockPush.mockClear();
   window.sessionStorage.clear();

@@ -1,4 +1,4 @@
-import { fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { SessionResponse } from '@/shared/api-types';
 import type { DraftDto } from '@/shared/api-types';
 import { version1 } from '../entry/fixtures';
@@ -122,10 +122,18 @@ describe('EntryEditor', () => {
     expect(within(title).getAllByTestId('diff-removed').map((el) => el.textContent!.trim())).toContain('sealed');
     expect(sent).toEqual([2]);
 
-    // Typing more does not save over the other version while the choice is open.
-    type('editor-field-howItIsPitched', 'A sealed copper cavity.');
-    await new Promise((resolve) => setTimeout(resolve, 1000));
-    expect(sent).toEqual([2]);
+    // Typing more does not save over the other version while the choice is open: on jest's fake clock,
+    // well past the autosave's delay (800 ms), nothing is sent.
+    jest.useFakeTimers();
+    try {
+      type('editor-field-howItIsPitched', 'A sealed copper cavity.');
+      await act(async () => {
+        jest.advanceTimersByTime(2000);
+      });
+      expect(sent).toEqual([2]);
+    } finally {
+      jest.useRealTimers();
+    }
 
     fireEvent.click(within(notice).getByTestId('conflict-keep-mine'));
     await waitFor(() => expect(screen.getByTestId('save-status').textContent).toMatch(/^Saved /));

@@ -1,5 +1,6 @@
-import { act, fireEvent, screen, waitFor } from '@testing-library/react';
-import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
+import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { QueryClient } from '@tanstack/react-query';
+import { jsonResponse, mockFetch, renderWithClient, renderWithProviders, setWindowWidth } from '../testing/render';
 import { ReportError, SeenInTheWild } from './EntryParts';
 import { contributor, correction, session, submissionResponse } from './fixtures';
 
@@ -10,9 +11,12 @@ beforeEach(() => setWindowWidth(390));
 describe('SeenInTheWild', () => {
   it('is hidden while no sighting is linked', async () => {
     const fetchMock = mockFetch({ '/api/entries/light-in-a-box/sightings': () => jsonResponse(200, { sightings: [] }) });
-    const { container } = renderWithProviders(<SeenInTheWild slug="light-in-a-box" />);
-    await waitFor(() => expect(fetchMock).toHaveBeenCalled());
-    await act(() => new Promise((r) => setTimeout(r, 30)));
+    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+    const { container } = renderWithClient(client, <SeenInTheWild slug="light-in-a-box" />);
+    // Once the list has arrived (the query has data and nothing is fetching), nothing is shown.
+    await waitFor(() => expect(client.getQueryCache().getAll().some((q) => q.state.status === 'success')).toBe(true));
+    await waitFor(() => expect(client.isFetching()).toBe(0));
+    expect(fetchMock).toHaveBeenCalled();
     expect(container.textContent).toBe('');
   });
 

@@ -12,6 +12,11 @@ const metrics = {
 /** Renders with a fresh query client (no retries, so failures show at once) and safe-area insets. */
 export function renderWithProviders(ui: ReactElement) {
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  return renderWithClient(client, ui);
+}
+
+/** The same, with the query client returned too (to wait until every query has settled). */
+export function renderWithClient(client: QueryClient, ui: ReactElement) {
   return render(
     <QueryClientProvider client={client}>
       <SafeAreaProvider initialMetrics={metrics}>{ui}</SafeAreaProvider>

@@ -33,15 +33,7 @@ export function entrySummary(e: Entry, laws: string[]): EntrySummaryDto {
 
 /** A published version with its rendered Markdown (author and reviewer loaded). */
 export function entryVersion(v: EntryVersion, html: EntryHtml): EntryVersionDto {
-  return {
-    number: v.number!,
-    changeNote: v.changeNote ?? '',
-    publishedAt: v.publishedAt!.toISOString(),
-    author: person(v.author)!,
-    reviewer: person(v.reviewer),
-    content: v.content,
-    html,
-  };
+  return { ...versionSummary(v), content: v.content, html };
 }
 
 /** An entry's state; `retired` only for a retired entry, naming its successor when it has one. */
