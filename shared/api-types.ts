@@ -11,6 +11,7 @@ export * from './api/entries';
 export * from './api/drafts';
 export * from './api/search';
 export * from './api/worksheets';
+export * from './api/checks';
 export * from './api/claim-checks';
 export * from './api/submissions';
 export * from './api/synonyms';

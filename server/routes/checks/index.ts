@@ -11,6 +11,7 @@ import type { CheckName } from '../../../shared/checks/types';
 import { computeFor, type ComputePool } from '../../compute/pool';
 import { HttpError } from '../../http/errors';
 import { validated } from '../../http/validate';
+import { checkList as presentCheckList } from '../../presenters/computations';
 import type { Allow } from '../../policies';
 import { checkRequestSchema } from './schema';
 
@@ -34,11 +35,7 @@ export function checkRoutes(allow: Allow, { compute, limit }: ComputeRouteDeps):
   const r = Router();
 
   r.get('/checks', allow('checks.list'), (_req, res) => {
-    res.json({
-      checks: checkList.map(({ name, title, summary, condition, inputs, cautions }) => ({
-        name, title, summary, condition, inputs, cautions,
-      })),
-    });
+    res.json(presentCheckList(checkList));
   });
 
   r.post('/checks/:check', allow('checks.run'), limit, knownCheck, validated({ body: checkRequestSchema }), async (req, res) => {

@@ -8,6 +8,7 @@ import { Router } from 'express';
 import { computeFor } from '../../compute/pool';
 import { HttpError } from '../../http/errors';
 import { validated } from '../../http/validate';
+import { worksheetList } from '../../presenters/computations';
 import type { Allow } from '../../policies';
 import { starterWorksheets } from '../../services/worksheets';
 import type { ComputeRouteDeps } from '../checks';
@@ -17,9 +18,7 @@ export function worksheetRoutes(allow: Allow, { compute, limit }: ComputeRouteDe
   const r = Router();
 
   r.get('/worksheets', allow('worksheets.list'), (_req, res) => {
-    res.json({
-      worksheets: [...starterWorksheets().values()].map(({ name, title, summary }) => ({ name, title, summary: summary ?? '' })),
-    });
+    res.json(worksheetList(starterWorksheets().values()));
   });
 
   r.get('/worksheets/:name', allow('worksheets.read'), (req, res) => {
