@@ -59,6 +59,18 @@ export default tseslint.config(
     },
   },
   {
+    // Services never import a route: the work runs below the HTTP layer. The parsed input types a
+    // route's schema.ts declares may be named (type-only imports vanish at build, so no code of a
+    // route is loaded by a service).
+    files: ['server/services/**/*.ts', 'server/presenters/**/*.ts', 'server/mail/**/*.ts', 'server/search/**/*.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'warn',
+        { patterns: [{ group: ['**/routes', '**/routes/**'], allowTypeImports: true, message: 'A service does not import a route: move what both need into shared/ or the service.' }] },
+      ],
+    },
+  },
+  {
     // require() is how Metro bundles assets (fonts, images), and how tests load a module inside a
     // jest.mock factory or after jest.resetModules(); neither has an import form.
     files: ['components/**/*.{ts,tsx}', 'app/**/*.{ts,tsx}', '**/*.test.{ts,tsx}', 'tests/**/*.{ts,tsx}', 'bench/**/*.ts'],
