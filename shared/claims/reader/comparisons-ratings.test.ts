@@ -199,3 +199,18 @@ describe('machines that push on air', () => {
     expect(run.checks.filter((c) => c.check === 'photon-bound')).toEqual([]);
   });
 });
+
+describe('a lone temperature no check could use', () => {
+  const roleOf = (text: string) => read(text).find((x) => x.kind === 'temperature')?.role;
+
+  test('is set aside in a text with no heat machine, efficiency, COP, difference or erasure', () => {
+    expect(roleOf('The box drew 90 W for a 48-hour run and gave 5 kWh to the load, measured at 20 °C and 40 % humidity.')).toBe('aside');
+    expect(roleOf('The probe will pass at 150 km/s while its shield faces 1,300 °C.')).toBe('aside');
+  });
+
+  test('is kept where a machine, a COP or a bit erasure could use it', () => {
+    expect(roleOf('The Stirling engine runs its hot head at 650 °C.')).not.toBe('aside');
+    expect(roleOf('Each switching event dissipates 2 × 10⁻¹⁹ J at 4 K.')).not.toBe('aside');
+    expect(roleOf('The heat pump draws from 5 °C brine with a COP of 4.')).not.toBe('aside');
+  });
+});

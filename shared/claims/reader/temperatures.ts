@@ -5,7 +5,7 @@
  * as its cold side, the other side from one temperature and a difference, hot and cold by order,
  * and a share of the Carnot efficiency between the two sides.
  */
-import { DIFFERENCE_AFTER, DIFFERENCE_BEFORE } from '../figures-vocabulary';
+import { DIFFERENCE_AFTER, DIFFERENCE_BEFORE, HEAT_ENGINE_WORDS } from '../figures-vocabulary';
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import { alt, COOLING_MACHINE_RE, HEAT_PUMP_RE, sentenceAround } from './context';
@@ -76,6 +76,12 @@ const TEST_SETTING_RE = /(?<!\p{L})(?:tests?|trials?|experiments?|measurements?|
 const MACHINE_SIDE_RE = /(?<!\p{L})(?:source|sink|sides?|hot|cold|warm|cool|reservoirs?|ends?|junctions?|plates?|faces?|inlet|outlet|flow|supply|delivery|evaporat\w*|condens\w*|cabinet|compartment|chamber|tank|boiler|emitter|heater|collector|brine|ground|outdoor|outside|exhaust|turbine|T_?[ch]|deep|surface)(?!\p{L})/iu;
 
 /** Sides, surroundings and the other temperature, among the figures read (see the file's comment). */
+/** Words of a machine or a bound that a single temperature can serve (its hot or cold side, kT ln 2). */
+const LONE_TEMPERATURE_USED_RE = new RegExp(
+  `(?<!\\p{L})(?:${alt([...HEAT_ENGINE_WORDS, 'hot (?:side|end|junction|reservoir|plate)', 'cold (?:side|end|junction|reservoir|plate)', 'heat sink', 'reservoirs?', 'bits?', 'eras(?:e|es|ed|ing|ure)', 'Landauer', 'logic', 'comput\\w*', 'information', 'memory', 'switch\\w*', 'gates?', 'transistors?', 'chips?', 'operations?', 'flips?', 'qubits?', 'cryogenic'])})(?!\\p{L})`,
+  'iu',
+);
+
 export function relateTemperatures(text: string, drafts: Draft[]): void {
   // The surroundings said apart from the machine: when one sentence gives the machine's two sides
   // (two temperatures, or one and a difference), a temperature alone in another sentence, with no
@@ -123,6 +129,21 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
       if (MACHINE_SIDE_RE.test(sentence) || !SURROUNDINGS_RE.test(sentence)) continue;
       t.role = 'aside';
     }
+  }
+
+  // A lone temperature, of no side, where no check could use one: no heat engine, heat pump or cooler
+  // named, no efficiency, COP or difference, nothing of a bit's erasure ("measured at 21 °C and 40 %
+  // relative humidity", "its heat shield faces 1,400 °C"): set aside. (One said of the surroundings
+  // keeps its side: a text may give the machine's other side later.)
+  if (
+    thermal.length === 1 &&
+    thermal[0].role === null &&
+    !drafts.some((d) => d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop') &&
+    !LONE_TEMPERATURE_USED_RE.test(text) &&
+    !HEAT_PUMP_RE.test(text) &&
+    !COOLING_MACHINE_RE.test(text)
+  ) {
+    thermal[0].role = 'aside';
   }
 
   // A heat pump's source is its cold side ("source side sits at 10 °C"), not an engine's hot source.
