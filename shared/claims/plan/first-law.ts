@@ -10,6 +10,12 @@ import type { ThrustReading } from './thrust';
 
 /** After a heat input: where the heat comes from ("3.6 kW from the borehole"). */
 const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:(?:is|are|was|were|being)[^\S\n]+)?(?:of[^\S\n]+(?:low-grade[^\S\n]+|ambient[^\S\n]+)?heat[^\S\n]+)?(?:from|out of|drawn from|taken from|extracted from)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:borehole|ground|earth|soil|outside|outdoor|ambient|air|source|environment|surroundings|well|river|lake|sea|brine|loop)(?!\p{L})/iu;
+/**
+ * A further input named but not measured: "the rest is sunlight", "the remainder comes from the ambient
+ * air", "solar-assisted", "topped up by heat from the ground".
+ */
+const UNMEASURED_OTHER_INPUT_RE =
+  /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:rest|remainder|balance|difference)[^\S\n]+(?:(?:of[^\S\n]+(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:is|are|comes?|came|being|was)[^\S\n]+)(?:(?:made[^\S\n]+up[^\S\n]+by|made[^\S\n]+up[^\S\n]+from|supplied[^\S\n]+by|provided[^\S\n]+by|drawn[^\S\n]+from|taken[^\S\n]+from|from|by)[^\S\n]+)?(?:the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:sun|sunlight|solar|ambient|air|ground|earth|fuel|gas|wind|environment|surroundings)|(?:solar|sun|wind|ambient)[- ]assisted|(?:plus|together[^\S\n]+with|along[^\S\n]+with|topped[^\S\n]+up[^\S\n]+(?:by|with))[^\S\n]+(?:free[^\S\n]+|unmeasured[^\S\n]+|some[^\S\n]+)?(?:sunlight|solar[^\S\n]+(?:heat|gain|energy)|ambient[^\S\n]+heat|heat[^\S\n]+from[^\S\n]+the[^\S\n]+(?:air|ground|sun)))(?!\p{L})/iu;
 /** Boiler efficiencies on the net (lower) calorific value may exceed 100 % by convention. */
 const NET_CALORIFIC_RE = /(?<!\p{L})(?:condensing|net (?:CV|calorific|heating)|LHV|lower heating value|lower calorific)(?!\p{L})/iu;
 
@@ -22,7 +28,19 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     movesHeat &&
     [...power, ...energy].filter((f) => f.role === 'in').length >= 2 &&
     [...power, ...energy].some((f) => f.role === 'in' && HEAT_SOURCE_AFTER_RE.test(text.slice(f.end ?? 0, (f.end ?? 0) + 50)));
-  if (movesHeat && (eIn || pIn) && (eOut || pOut) && !sourceHeatIn) {
+  // "… only 300 W comes from the wall, the rest is sunlight": a further input the text names but does not
+  // measure; the one stated input is not all that goes in.
+  const otherInput = (eIn || pIn) && (eOut || pOut) && !sourceHeatIn && UNMEASURED_OTHER_INPUT_RE.test(text) && [...power, ...energy].filter((f) => f.role === 'in').length === 1;
+  if (otherInput) {
+    needs.push(
+      need(
+        'first-law',
+        ['the energy of the other input the text names (sunlight, ambient heat, fuel), measured'],
+        'The text says part of what goes in comes from a source it does not measure: the stated input is not the whole input.',
+        [(eIn ?? pIn)!, (eOut ?? pOut)!],
+      ),
+    );
+  } else if (movesHeat && (eIn || pIn) && (eOut || pOut) && !sourceHeatIn) {
     notes.push('A heat pump or refrigerator moves heat rather than making it: the heat it delivers may exceed the work it takes without breaking any law. Its bound is the Carnot COP of the temperatures it works between.');
   } else if ((eIn || pIn) && (eOut || pOut) && !(thrust && photonApplies && !eOut && !pOut)) {
     const inF = eIn ?? pIn!;

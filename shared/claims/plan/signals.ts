@@ -43,6 +43,12 @@ export interface Signals {
   overUnity: boolean;
 }
 
+/** "works just as well in hard vacuum", "no air needed": a claim that the device needs no air. */
+const VACUUM_CLAIM_RE =
+  /(?<!\p{L})(?:no air (?:is )?(?:needed|required)|(?<!(?:not|n't|n’t|never|cannot|nor)[^\S\n]+)(?:works?|working|operates?|operating|functions?|functioning)(?:[^\S\n]+(?!not|never)[\p{L}-]+){0,3}?[^\S\n]+(?:in|under)[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+|deep[^\S\n]+|full[^\S\n]+)?vacuum)(?!\p{L})/iu;
+/** Devices that push on air (and so cannot work in vacuum). */
+const AIR_PUSHER_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?|electrohydrodynamic|EHD|ionocraft|[\p{L}-]*lifters?)(?!\p{L})/giu;
+
 export function readSignals(ctx: PlanContext): Signals {
   const text = ctx.text ?? '';
   const classes = ctx.classes ?? [];
@@ -52,7 +58,9 @@ export function readSignals(ctx: PlanContext): Signals {
   const notDenied = text.replace(/(?<!\p{L})(?:no|not an?|without an?|isn't an?|is not an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|refrigerators?|chillers?|compressors?)(?!\p{L})/giu, ' ');
   return {
     propellantFree: PROPELLANT_FREE_RE.test(text) || (top !== undefined && PROPELLANT_FREE_CLASSES.includes(top)),
-    propellant: PROPELLANT_RE.test(withoutFree),
+    // An air-pusher (a lifter, an ion-wind craft) said to work in vacuum has no air to push: its words no
+    // longer count as propellant.
+    propellant: PROPELLANT_RE.test(VACUUM_CLAIM_RE.test(text) ? withoutFree.replace(AIR_PUSHER_RE, ' ') : withoutFree),
     heatEngine: HEAT_ENGINE_RE.test(text),
     heatPump: HEAT_PUMP_RE.test(notDenied),
     cooling: COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied),

@@ -147,7 +147,12 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const after = text.slice(d.end, d.end + 30);
     // "lifts 3 lbs off the scale", "lifted its own 2 kg frame": a weight held up, for a drive (not a rocket's or a crane's load).
     const lifted = LIFTS_BEFORE_RE.test(before) && !ROCKET_RE.test(text) && !HOIST_RE.test(text);
-    if (lifted || /(?:weight|reading|reads|scale|balance)[^.;!?\n:"“”]{0,40}(?:by|of)[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) || /^[^\S\n]*(?:lighter|heavier|less weight|of (?:lift|weight loss|apparent weight)|off (?:its|the) (?:weight|reading))/iu.test(after)) {
+    // ("its weight by 120 g", "a weight loss of 40 g"; not "a gross lift-off weight of 2400 lb", which is a mass.)
+    const weightChange =
+      /(?:weight|reading|reads|scale|balance)[^.;!?\n:"“”]{0,40}by[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) ||
+      (/(?:weight|reading|reads|scale|balance)[^.;!?\n:"“”]{0,40}of[^\S\n]*(?:about|some|roughly|nearly|up to)?[^\S\n]*$/iu.test(before) &&
+        /(?<!\p{L})(?:reduc\w*|los(?:s|es|t|ing)|drops?|dropped|chang\w*|decreas\w*|lighter|heavier|apparent|shifts?|falls?|fell|difference|deflect\w*)(?!\p{L})/iu.test(before));
+    if (lifted || weightChange || /^[^\S\n]*(?:lighter|heavier|less weight|of (?:lift|weight loss|apparent weight)|off (?:its|the) (?:weight|reading))/iu.test(after)) {
       const kg = siOf(d);
       if (kg === null) continue;
       d.kind = 'thrust';
@@ -190,6 +195,20 @@ export function relateFigures(text: string, drafts: Draft[]): void {
         upper: eu !== null ? typedSi(n + eu, unit) : undefined,
         role: 'out',
         derived: `output = input + excess (${formatQuantity(n, unit)} + ${formatQuantity(e, unit)})`,
+      });
+    } else if (excess && output && !input && !excess.upper && !output.upper && output.start < excess.start) {
+      // "delivers 1.8 kW to the load, which is 0.6 kW more than it consumes": in = out − excess.
+      const e = siOf(excess);
+      const o = siOf(output);
+      if (e === null || o === null || !(o > e)) continue;
+      const unit = FIGURE_SI_UNIT[kind];
+      insertAfter(drafts, excess, {
+        start: output.start,
+        end: excess.end,
+        kind,
+        quantity: typedSi(o - e, unit),
+        role: 'in',
+        derived: `input = output − excess (${formatQuantity(o, unit)} − ${formatQuantity(e, unit)})`,
       });
     }
   }
@@ -247,7 +266,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const hasThrust = drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power');
     const out = drafts.find((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust)));
     const inputUnknown =
-      /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data))?[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text) ||
+      /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data|figure|value|itself|current))*[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text) ||
       // "The seller gives no figure for what it takes in", "does not say how much it draws".
       INPUT_NOT_GIVEN_RE.test(text);
     if (m && out && !inputUnknown && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {

@@ -94,6 +94,21 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
       b.role = a.role;
     }
   }
+  // "the engine develops 25 CV at the shaft and the alternator delivers 22 kW": in a generating set (or a
+  // motor–generator pair) the driving machine's output is the generator's input.
+  const powersOut = drafts.filter((d) => d.kind === 'power' && d.role === 'out' && !d.derived);
+  if (powersOut.length === 2 && drafts.filter((d) => d.kind === 'power' && d.role === 'in').length === 0) {
+    const [a, b] = powersOut;
+    const driver = /(?<!\p{L})(?:engines?|motors?|turbines?|prime movers?|shaft|crank(?:shaft)?)(?!\p{L})/iu;
+    const generator = /(?<!\p{L})(?:alternators?|generators?|dynamos?|electrical output|electric(?:al)? power|electricity)(?!\p{L})/iu;
+    // (a's own clause: what follows the last comma, colon, semicolon or "and" before it.)
+    const aClause = (text.slice(Math.max(0, a.start - 60), a.start).split(/[,;:]|(?<!\p{L})(?:and|while|whereas)(?!\p{L})/iu).pop() ?? '') + text.slice(a.end, a.end + 25);
+    const aDrives = driver.test(aClause) && !generator.test(aClause);
+    // (b's own clause: what follows the last "and", comma or semicolon after a.)
+    const bClause = text.slice(a.end, b.start).split(/[,;]|(?<!\p{L})(?:and|while|whereas)(?!\p{L})/iu).pop() ?? '';
+    const bMakes = generator.test(bClause + text.slice(b.end, b.end + 25)) && !/(?<!\p{L})(?:shaft|crank(?:shaft)?)(?!\p{L})/iu.test(bClause);
+    if (aDrives && bMakes && /(?<!\p{L})(?:alternators?|generators?|dynamos?|gensets?|generating sets?)(?!\p{L})/iu.test(text)) a.role = 'in';
+  }
   // One side named, one figure left: the other side.
   const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
   const open = drafts.filter((d) => energyLike(d) && d.role === null);

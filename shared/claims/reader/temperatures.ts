@@ -46,6 +46,10 @@ export function isDifference(text: string, start: number, end: number, floor: nu
   // "20 °C above ambient", "heated 40 K over room temperature"; "between" only as "20 K between the plates".
   if (/^(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)/.test(word)) {
     const rest = text.slice(end + a[0].length, end + a[0].length + 40);
+    // "between 650 °C heater head and 50 °C cooler": the second of two sides named in parallel, "cooler" the
+    // part (a noun), not a comparison; without "than" a comparative there names no difference.
+    const pairedSide = /between[^\S\n]+[^,;.\n]{0,40}?\p{N}[^,;.\n]{0,40}?[^\S\n]and[^\S\n]+(?:(?:the|a|an|its)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 90), start));
+    if (pairedSide && !/^\s*than/.test(rest)) return false;
     if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|(?:and|with|at|in|for|while|but|so|when)\b|$)/.test(rest)) return true;
     // "5 °C below zero", "above freezing": a temperature, not a difference.
     if (/^[^\S\n]*(?:zero|freezing|nought|the freezing point)(?!\p{L})/iu.test(rest)) return false;
@@ -170,7 +174,12 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
       const apposition = t.end <= diff.start && APPOSITION_RE.test(text.slice(t.end, diff.start));
       // "supplies 55 °C water; with a 50 K lift over its source": the difference is measured from another
       // side, named after it, so the stated temperature is the one above (or below) that side.
-      const fromNamedOther = t.end <= diff.start && NAMED_OTHER_SIDE_RE.test(text.slice(diff.end, diff.end + 60));
+      // But "… and a sink 50 °C cooler than the head", "hot side 40 K above the cold side": a side named
+      // right before the difference is the one it describes, so the direction stands as said.
+      const sideBeforeDiff = /(?<!\p{L})(?:sinks?|reservoirs?|sides?|plates?|ends?|sources?|condensers?|evaporators?|coolers?|heaters?|baths?|loops?|exhaust|outlets?|inlets?|heads?|junctions?|faces?)[^\S\n]+(?:(?:is|sits|runs|at|being|was|lies|stays|kept|held|some|about|only|just|a|full)[^\S\n]+){0,3}$/iu.test(
+        text.slice(Math.max(0, diff.start - 50), diff.start),
+      );
+      const fromNamedOther = t.end <= diff.start && !sideBeforeDiff && NAMED_OTHER_SIDE_RE.test(text.slice(diff.end, diff.end + 60));
       // "between the 25 °C air and the cooler soil": the other side said to be cooler or warmer than this one.
       const other = /^[^\S\n,]*(?:[\p{L}-]+[^\S\n,]+){0,2}?and[^\S\n]+(?:the|a|an|its)[^\S\n]+(cooler|colder|lower|warmer|hotter|higher)(?!\p{L})/iu.exec(text.slice(t.end, t.end + 50));
       const said = other

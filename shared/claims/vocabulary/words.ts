@@ -16,7 +16,7 @@ export const QUANTUM_EFFICIENCY_WORDS = [
 export const HEAT_PUMP_WORDS = [
   // (Not a heat pump the device is said to beat: "beating every heat pump", "better than any heat pump".)
   '(?<!(?:every|any|all|than|unlike|beat|beats|beating|outperforms?|outperforming|outdoes|outdoing|rivals?|rivall?ing)\\s+(?:(?:a|an|the|any|every|all|most|modern|best)\\s+)?(?:[\\w-]+\\s+)?)heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
-  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'flow temperature', '(?<!(?:oil-filled|oil|electric|electrical|resistive|resistance|panel|storage|fan|convector|infrared|IR|bar|halogen|quartz)[- ])radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:mov(?:es?|ing|ed)|pump(?:s|ing|ed)?|lift(?:s|ing|ed)?) heat',
+  'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'ground loops?', 'flow temperature', '(?<!(?:oil-filled|oil|electric|electrical|resistive|resistance|panel|storage|fan|convector|infrared|IR|bar|halogen|quartz)[- ])radiators?', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:mov(?:es?|ing|ed)|pump(?:s|ing|ed)?|lift(?:s|ing|ed)?) heat',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
 export const COOLING_MACHINE_WORDS = ['coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini-?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?', '(?:window|portable|room|wall|ducted|rooftop|car|central) (?:AC|A/C)', 'A/C', 'air ?cons?', 'aircons?'];
@@ -41,7 +41,7 @@ export const ISP_WORDS = ['I_?sp', 'Isp', 'ISP', 'I sp', 'specific impulses?', '
 export const HEAT_ENGINE_WORDS = [
   'heat motors?', 'thermoacoustic', 'of the heat', 'of the heat (?:it|that)', 'heat (?:it|that it) (?:draws|takes|absorbs|collects|gathers)', 'heat engines?', 'engines?', 'turbines?', 'Stirling\\w*', '\\w*motoren?', 'cooling water', 'condenser', 'heat sink', 'hot side', 'cold side', 'reservoirs?',
   'source temperature', 'thermoelectric\\w*', 'thermo-?electric\\w*', 'thermionic', 'thermophotovoltaic\\w*', 'TPV', 'Stirling',
-  'Rankine', 'ORC', 'steam', 'heat to (?:work|power|electricity)', 'converts? (?:\\w+ )?heat', 'waste[- ]heat', 'thermal (?:to|into) (?:electric|mechanical)',
+  'Rankine', 'ORC', 'steam', 'thermal converters?', 'heat converters?', 'heat to (?:work|power|electricity)', 'converts? (?:\\w+ )?heat', 'waste[- ]heat', 'thermal (?:to|into) (?:electric|mechanical)',
   'Seebeck', 'Peltier', 'generators? running on heat', 'heat-driven', 'thermal generator', 'TEG', 'heat recovery', 'power plant', 'power station', 'combustion',
   'diesel', 'petrol', 'gasoline', 'ambient heat', 'heat of the (?:air|sea|room|surroundings)', 'temperature difference', 'thermal gradient',
 ];
@@ -60,6 +60,9 @@ export const PROPELLANT_FREE_WORDS = [
   'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
   'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
   'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', 'expels? no (?:propellant|mass|gas|reaction mass|matter)',
+  // "ejects no reaction mass", "w/o any propellant", "works just as well in hard vacuum (no air needed)".
+  '(?:ejects?|ejecting|expelling|throws? out|throwing out|vents?|venting|sheds?|shedding|carries|carrying) no (?:[\\w-]+ )?(?:propellant|reaction mass|exhaust|mass|matter)', 'w/o?(?:ut)? (?:any )?(?:propellant|reaction mass|exhaust)',
+  'no air (?:is )?(?:needed|required)', '(?<!(?:not|n\x27t|n\u2019t|never|cannot|nor) )(?:works?|working|operates?|operating|functions?|functioning)(?: (?!not|never)[\\w-]+){0,3}? (?:in|under) (?:a |hard |high |deep |full )?vacuum',
   '(?:hard |high )?vacuum,? where no (?:ion(?:ic)? wind|air)', 'no ion(?:ic)? wind (?:can|could) (?:form|arise|act)', 'radiating (?:panel|face|surface|plate)', 'radiat(?:es?|ing|ed)(?: [\\w-]+){0,4}? (?:out of|from|off) (?:one|a single|its|the) (?:face|side|surface)', '(?:infrared|IR|heat) lamps?', 'flashlights?', 'LEDs?(?= [^.;!?]{0,60}(?:push|thrust|recoil))', 'thermal emission', '(?:transient )?mass[- ]fluctuations?', 'mass(?: is (?:said|claimed) to| that)? (?:swings?|fluctuates?|oscillates?|varies)', 'Mach effect', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
   'closed[- ](?:cavity|resonator|system|box|container|frame|vessel|frustum|loop drive)', '(?:hermetically )?sealed', 'enclosed', 'cavity', 'EM ?drive',
   'inertial (?:propulsion|drive|thrust)', 'field propulsion', 'unidirectional (?:force|thrust)', 'net thrust from inside', 'fuel-?less (?:thruster|drive|propulsion)',
@@ -91,7 +94,7 @@ export const SELF_RUNNING_WORDS = [
   'self-?running', 'self-?sustain(?:ing|ed|s)', 'self-?powered', 'self-?looped', 'self-?looping', 'self-?feeding', 'self-?charging', 'self-?perpetuating',
   'needs? no (?:external )?(?:power|energy|input|supply|fuel|battery|electricity|source)', 'requires? no (?:external )?(?:power|energy|input|supply|fuel|electricity|source)',
   'without (?:any )?(?:external )?(?:power|energy|input|supply|fuel|electricity)(?: source| supply| input)?', 'no (?:external )?(?:power|energy) (?:input|source|supply)',
-  'no (?:external )?input', 'powers? itself', '(?:drawing|draws|consuming|consumes|using|uses|taking|takes) nothing', 'with nothing (?:going )?in',
+  'no (?:external )?input', '(?<!(?:input|output|supply|source|the|its|of|rated|electrical|shaft)[^\\S\\n]+)powers? itself', '(?:drawing|draws|consuming|consumes|using|uses|taking|takes) nothing', 'with nothing (?:going )?in',
   'no connection to (?:the )?(?:grid|mains|supply|power)', 'not connected to (?:the )?(?:grid|mains|any (?:supply|source))', 'zero input', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
   'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
   'with nothing (?:plugged in|connected|attached)(?: to drive it)?', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',

@@ -1,0 +1,136 @@
+/**
+ * The figure reader and the planner on which side a temperature or a power is on, and on inputs the
+ * text names without measuring.
+ *
+ * Against outside references: NIST SP 811 (2008), Appendix B.8: metric horsepower (CV, PS)
+ * 735.498 75 W, pound (avoirdupois) 0.453 592 37 kg; the Carnot efficiency 1 − Tc/Th (any
+ * thermodynamics textbook, e.g. Çengel & Boles, Thermodynamics, ch. 6). Every text here is invented
+ * test data (invented devices, no real people or products).
+ */
+import { runClaimChecks } from '../plan';
+import { extractFigures } from '../reader';
+import type { Figure } from '../types';
+import { expectRelClose, expectWellFormed } from './test-support';
+
+const read = (text: string) => {
+  const figures = extractFigures(text);
+  expectWellFormed(text, figures);
+  return figures;
+};
+const temps = (f: Figure[]) => f.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si]);
+const verdicts = (text: string) => runClaimChecks(read(text), { text, classes: [] });
+
+describe('two sides of a heat engine', () => {
+  test('"between 650 °C heater head and 50 °C cooler": the cooler is the cold side, not a difference', () => {
+    const text = 'The Stirling engine converts 25 % of the heat to work between a 650 °C heater head and 50 °C cooler.';
+    const f = read(text);
+    expect(f.some((x) => x.kind === 'temperature-difference')).toBe(false);
+    expect(temps(f)).toEqual([
+      ['hot', expect.closeTo(923.15, 9)],
+      ['cold', expect.closeTo(323.15, 9)],
+    ]);
+    // η_max = 1 − 323.15/923.15 = 0.650; 25 % is lawful.
+    const run = verdicts(text);
+    expect(run.checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+  });
+
+  test('"a sink 50 °C cooler than the head": the side named before the difference is the colder one', () => {
+    const f = read('The engine works between 650 °C and a sink 50 °C cooler than the head.');
+    const cold = f.find((x) => x.kind === 'temperature' && x.role === 'cold');
+    expectRelClose(cold!.si!, 923.15 - 50, 1e-12);
+  });
+
+  test('"hot side 40 K above the cold side", the cold side given: the hot side is above it', () => {
+    const f = read('Cold side at 20 °C, hot side 40 K above the cold side; the converter turns 3 % of the heat into electricity.');
+    const hot = f.find((x) => x.kind === 'temperature' && x.role === 'hot');
+    expectRelClose(hot!.si!, 293.15 + 40, 1e-12);
+  });
+
+  test('a difference measured from another side named after it still puts the stated side above', () => {
+    const f = read('The heat pump supplies 55 °C water, with a 50 K lift over its source, at a COP of 4.');
+    expect(temps(f)).toEqual([
+      ['hot', expect.closeTo(328.15, 9)],
+      ['cold', expect.closeTo(278.15, 9)],
+    ]);
+  });
+
+  test('an efficiency across a ΔT with no absolute temperatures needs them: nothing is run on a default', () => {
+    const run = verdicts('The thermal converter of claim 2 produces 3.2 W at a conversion efficiency of 5 % across a ΔT of 40 K.');
+    expect(run.checks.filter((c) => c.check === 'carnot')).toEqual([]);
+    expect(run.needs.map((n) => n.check)).toContain('carnot');
+  });
+
+  test('a COP set off from its value by a clause between commas', () => {
+    const f = read('Its cooling COP, measured per §7 of the test protocol, is 2.8.');
+    expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'cooling', si: 2.8 });
+  });
+});
+
+describe('inputs', () => {
+  test('"the rest is sunlight": a further input named but not measured, so the first law is not run', () => {
+    const run = verdicts('Our solar-assisted water heater gives 2 kW of heat but only 300 W comes from the wall, the rest is sunlight on the roof collector.');
+    expect(run.checks.filter((c) => c.check === 'first-law')).toEqual([]);
+    expect(run.needs.map((n) => n.check)).toContain('first-law');
+  });
+
+  test('"the rest is free energy from the magnets" is no measured source: the ledger still runs', () => {
+    const run = verdicts('The heater gives 2 kW of heat from 300 W off the wall; the rest is free energy from the magnets.');
+    expect(run.checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+
+  test('"the input power itself is not stated" is not a claim of no input', () => {
+    const text = 'The resonant coil generator produces 5 kW of electrical output, more than its input; the input power itself is not stated.';
+    expect(read(text).some((x) => x.role === 'in')).toBe(false);
+    expect(verdicts(text).checks.filter((c) => c.check === 'first-law')).toEqual([]);
+  });
+
+  test('"the motor powers itself" still is', () => {
+    const f = read('The motor powers itself and delivers 200 W to the pump.');
+    expect(f.find((x) => x.role === 'in')).toMatchObject({ kind: 'power', si: 0 });
+  });
+
+  test('"delivers 1.8 kW, which is 0.6 kW more than it consumes": the input is the output less the excess', () => {
+    const f = read('The resonant transformer circuit delivers 1.8 kW to the load, which is 0.6 kW more than it consumes.');
+    const input = f.find((x) => x.kind === 'power' && x.role === 'in');
+    expectRelClose(input!.si!, 1200, 1e-12);
+    expect(input!.derived).toBeTruthy();
+  });
+
+  test("a generating set: the engine's shaft power is the alternator's input", () => {
+    const f = read('The generator set: the engine develops 25 CV at the shaft and the alternator delivers 2.2 × 10⁴ W of electrical output.');
+    const input = f.find((x) => x.kind === 'power' && x.role === 'in');
+    // 25 CV × 735.49875 W/CV = 18 387.468 75 W (NIST SP 811 B.8).
+    expectRelClose(input!.si!, 25 * 735.49875, 1e-12);
+    expect(f.find((x) => x.kind === 'power' && x.role === 'out')).toMatchObject({ si: 22000 });
+  });
+});
+
+describe('masses and thrust without propellant', () => {
+  test('"a gross lift-off weight of 2400 lb" is a mass, not a change of weight read as a force', () => {
+    const f = read('The vehicle has a gross lift-off weight of 2400 lb, of which 1700 lb is propellant, an Isp of 240 s.');
+    const wet = f.find((x) => x.kind === 'mass' && x.role === 'wet');
+    // 2400 lb × 0.45359237 kg/lb (NIST SP 811 B.8).
+    expectRelClose(wet!.si!, 2400 * 0.45359237, 1e-12);
+    expect(f.some((x) => x.kind === 'thrust')).toBe(false);
+  });
+
+  test('"a weight loss of 40 g" is still a force', () => {
+    const f = read('The scale showed a weight loss of 40 g when the drive was on.');
+    expect(f.find((x) => x.kind === 'thrust')).toBeTruthy();
+  });
+
+  test.each([
+    'The gyroscope propulsion unit, which ejects no reaction mass, reaches a thrust-to-power figure of 85 µN/W.',
+    'up to 5 mN of thrust from just 50 W, w/o any propellant on board',
+    'The ionocraft gives 0.5 lb of lift at 30kV and 2mA, and we say it works just as well in hard vacuum (no air needed).',
+  ])('propellant-free, so the photon bound runs: %s', (text) => {
+    expect(verdicts(text).checks.find((c) => c.check === 'photon-bound')?.finding).toBe('breaks');
+  });
+
+  test.each([
+    'The lifter gives 2 g of lift at 30 kV and 1 mA; it does not work in vacuum.',
+    'The ion engine works in vacuum and gives 90 mN on 2.5 kW of xenon.',
+  ])('an air-pusher or a thruster with propellant is not: %s', (text) => {
+    expect(verdicts(text).checks.filter((c) => c.check === 'photon-bound')).toEqual([]);
+  });
+});
