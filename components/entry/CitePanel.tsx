@@ -1,9 +1,10 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { ChoiceChips } from '../admin/ChoiceChips';
-import { CITE_DATA_FORMATS, CITE_FORMAT_LABEL, CITE_FORMATS, type CiteFormat } from '@/shared/api-types';
-import { useCite } from '../queries/entries';
-import { colors, radius, space, type } from '../theme';
+import { CITE_DATA_FORMATS, CITE_FILE_EXTENSION, CITE_FORMAT_LABEL, CITE_FORMATS, type CiteFormat } from '@/shared/api-types';
+import { queryString } from '../http/client';
+import { entryPath, useCite } from '../queries/entries';
+import { colors, focusRing, radius, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
@@ -16,9 +17,16 @@ const asData = new Set<CiteFormat>(CITE_DATA_FORMATS);
 
 type CopyState = 'idle' | 'copied' | 'failed';
 
+/** "A", "A and B", "A, B and C": names as a sentence lists them. */
+export function nameList(names: readonly string[]): string {
+  if (names.length < 2) return names[0] ?? '';
+  return `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
+}
+
 /**
  * How to cite this version of the entry: a text style or a format for reference managers, with
- * its permanent address, version and date, and a button that copies it.
+ * who wrote it (every editor of a published version up to this one) and who reviewed it, its
+ * permanent address, version and date, a button that copies it, and the data formats as files.
  */
 export function CitePanel({ slug, version }: { slug: string; version: number }) {
   const [format, setFormat] = useState<CiteFormat>('apa');
@@ -60,12 +68,34 @@ export function CitePanel({ slug, version }: { slug: string; version: number }) 
               {copy === 'copied' ? 'Copied.' : copy === 'failed' ? 'This browser refused the copy; select the text and copy it by hand.' : ''}
             </Text>
           </View>
+          {data.authors?.length ? (
+            <Text testID="cite-credits" style={type.caption}>
+              Written by {nameList(data.authors)}
+              {data.reviewer ? `; reviewed by ${data.reviewer}` : ''}.
+            </Text>
+          ) : null}
           <Text testID="cite-permalink" style={type.caption}>
             Permanent address of version {data.version}: <Text style={styles.url}>{data.url}</Text> · published{' '}
             {formatDay(data.date)}
           </Text>
         </>
       ) : null}
+      <View style={styles.downloads} role="group" aria-label="Download this version's citation as a file">
+        <Text style={type.caption}>As a file for a reference manager:</Text>
+        <View style={styles.actions}>
+          {CITE_DATA_FORMATS.map((f) => (
+            <Text
+              key={f}
+              testID={`cite-download-${f}`}
+              role="link"
+              {...{ href: `${entryPath(slug)}/cite${queryString({ format: f, version, download: 1 })}`, hrefAttrs: { download: `${slug}-v${version}.${CITE_FILE_EXTENSION[f]}` } }}
+              style={styles.download}
+            >
+              {formatLabels[f]} (.{CITE_FILE_EXTENSION[f]})
+            </Text>
+          ))}
+        </View>
+      </View>
     </View>
   );
 }
@@ -81,4 +111,19 @@ const styles = StyleSheet.create({
   },
   actions: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
   url: { ...type.mono, fontSize: 12, color: colors.ink },
+  downloads: { gap: space.xxs },
+  // A link that looks like the quiet button beside it, at least 44 px high (WCAG 2.5.5 target size).
+  download: {
+    ...type.uiStrong,
+    ...focusRing,
+    color: colors.teal,
+    textDecorationLine: 'underline',
+    minHeight: 44,
+    paddingHorizontal: space.sm,
+    paddingVertical: space.sm - 1,
+    borderColor: colors.teal,
+    borderWidth: 1,
+    borderRadius: radius.sm,
+    backgroundColor: colors.surface,
+  },
 });

@@ -60,9 +60,9 @@ export class ClaimChecks {
     const cited: (ParagraphEntry | null)[] = await Promise.all(
       hits.map(async (h): Promise<ParagraphEntry | null> => {
         const { slug, version: n } = h.entry;
-        let version;
+        let version, authors;
         try {
-          ({ version } = await this.deps.library.versionRow(slug, n));
+          ({ version, authors } = await this.deps.library.versionRow(slug, n));
         } catch (err) {
           // Retired or gone since the index last refreshed: leave it out.
           if (err instanceof HttpError && err.status === 404) return null;
@@ -72,7 +72,7 @@ export class ClaimChecks {
         const match: ClaimMatch = { slug, title: h.entry.title, version: n, score: h.score, terms: h.terms, words: h.words, url, inBrief: h.entry.inBrief };
         return {
           match,
-          item: citedItem(slug, version, url),
+          item: citedItem(slug, version, url, { authors }),
           sources: (version.content.sources ?? []).map((s) => s.csl as CslItem),
           questions: version.content.questionsToAsk ?? [],
           laws: h.entry.laws.map((l) => this.deps.index.laws.get(l) ?? l),

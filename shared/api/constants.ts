@@ -15,6 +15,19 @@ export const CITE_DATA_FORMATS = ['bibtex', 'ris', 'csl-json'] as const;
 export const CITE_FORMATS = [...CITATION_STYLES, ...CITE_DATA_FORMATS] as const;
 export type CiteFormat = (typeof CITE_FORMATS)[number];
 export const CITE_FORMAT_LABEL: Record<CiteFormat, string> = { ...CITATION_STYLE_LABEL, bibtex: 'BibTeX', ris: 'RIS', 'csl-json': 'CSL-JSON' };
+export type CiteDataFormat = (typeof CITE_DATA_FORMATS)[number];
+/**
+ * The media types `GET /api/entries/:slug/cite` answers a data format with when `Accept` asks for
+ * one (the first is the one it sends): BibTeX's customary types, RIS's, and CSL-JSON's registered
+ * type (IANA media types, "application/vnd.citationstyles.csl+json").
+ */
+export const CITE_MEDIA_TYPES: Record<CiteDataFormat, readonly string[]> = {
+  bibtex: ['application/x-bibtex', 'text/x-bibtex'],
+  ris: ['application/x-research-info-systems'],
+  'csl-json': ['application/vnd.citationstyles.csl+json'],
+};
+/** The file name extension of a downloaded data format: `<slug>-v<n>.<ext>`. */
+export const CITE_FILE_EXTENSION: Record<CiteDataFormat, string> = { bibtex: 'bib', ris: 'ris', 'csl-json': 'json' };
 
 /** The sections of an entry version in reading order: the entry page, the diff and the editor go by it. */
 export const SECTION_ORDER = [

@@ -94,10 +94,14 @@ export interface VersionListResponse {
   versions: VersionSummaryDto[];
 }
 
-/** The query of `GET /api/entries/:slug/cite`: a format (apa when not given) and a version (the latest when not given). */
+/**
+ * The query of `GET /api/entries/:slug/cite`: a format (apa when not given, or the data format
+ * `Accept` names) and a version (the latest when not given); `download` answers with the file itself.
+ */
 export interface CiteQuery {
   format?: CiteFormat;
   version?: number;
+  download?: boolean;
 }
 
 /** `GET /api/entries/:slug/cite` */
@@ -112,6 +116,12 @@ export interface CiteResponse {
   version: number;
   /** The version's publication date, YYYY-MM-DD. */
   date: string;
+  /** The version's authors as cited: every editor who wrote a published version up to it, in order of first contribution. */
+  authors: string[];
+  /** The editor who reviewed and published this version (credited apart from the authors). */
+  reviewer: string | null;
+  /** For the data formats: the file's name when downloaded (`<slug>-v<n>.bib`). */
+  filename?: string;
 }
 
 /** `POST /api/entries/:slug/retire` */

@@ -106,9 +106,9 @@ describe('references', () => {
       if (style === 'apa') {
         expect(cw).toBe(`Quillfeather, A. (2026). ${title}. In Counterweight (Version 2). ${url('resonant-cavity-thruster', 2)}`);
       } else if (style === 'vancouver') {
-        expect(cw).toBe(`Quillfeather A. ${title}. In: Counterweight [Internet]. 2026 [cited 2026 Dec 1]. Available from: ${url('resonant-cavity-thruster', 2)}`);
+        expect(cw).toBe(`Quillfeather A. ${title}. In: Counterweight [Internet]. Version 2. 2026 [cited 2026 Dec 1]. Available from: ${url('resonant-cavity-thruster', 2)}`);
       } else {
-        expect(cw).toMatch(/^Quillfeather, A\. \(2026\) .*Counterweight\. Available at: https:\/\/counterweight\.example\.org\/entries\/resonant-cavity-thruster\/v\/2 \(Accessed: .*2026\)\.$/);
+        expect(cw).toMatch(/^Quillfeather, A\. \(2026\) .*Counterweight\. Version 2\. Available at: https:\/\/counterweight\.example\.org\/entries\/resonant-cavity-thruster\/v\/2 \(Accessed: .*2026\)\.$/);
       }
     });
 

@@ -41,11 +41,34 @@ export interface ParsedCitations {
 // citation-js logs every odd field to the console; the problems list is how we report them.
 (logger as { level?: string }).level = 'silent';
 
-const csl = plugins.config.get('@csl') as {
-  templates: { add(name: string, xml: string): void; get(name: string): string; has(name: string): boolean };
-};
+interface Register {
+  add(name: string, xml: string): void;
+  get(name: string): string;
+  has(name: string): boolean;
+}
+const csl = plugins.config.get('@csl') as { templates: Register; locales: Register };
 
 const TEMPLATE: Record<CitationStyle, string> = { apa: 'apa', vancouver: 'cw-vancouver', harvard: 'harvard1' };
+/** Cite Them Right is a British manual (its CSL style's default locale is en-GB); the other two are American. */
+const LANG: Record<CitationStyle, string> = { apa: 'en-US', vancouver: 'en-US', harvard: 'en-GB' };
+
+if (!csl.locales.has('en-GB')) {
+  // citation-js ships en-US but not en-GB. The CSL project's locales-en-GB.xml differs from en-US in
+  // what a reference list shows in three ways, made here: punctuation outside quotation marks
+  // (punctuation-in-quote="false"), single quotation marks outside and double inside, and dates as
+  // "7 June 2025" (day month year). Cite Them Right's own examples read the same way
+  // ("(Accessed: 28 March 2024)", "'Title of chapter', in ...").
+  const us = csl.locales.get('en-US');
+  const gb = us
+    .replace(/xml:lang="en-US"/, 'xml:lang="en-GB"')
+    .replace(/punctuation-in-quote="true"/, 'punctuation-in-quote="false"')
+    .replace(/<date form="text">[\s\S]*?<\/date>/, '<date form="text"><date-part name="day" suffix=" "/><date-part name="month" suffix=" "/><date-part name="year"/></date>')
+    .replace('<term name="open-quote">“</term>', '<term name="open-quote">‘</term>')
+    .replace('<term name="close-quote">”</term>', '<term name="close-quote">’</term>')
+    .replace('<term name="open-inner-quote">‘</term>', '<term name="open-inner-quote">“</term>')
+    .replace('<term name="close-inner-quote">’</term>', '<term name="close-inner-quote">”</term>');
+  csl.locales.add('en-GB', gb);
+}
 
 if (!csl.templates.has('cw-vancouver')) {
   const xml = csl.templates.get('vancouver');
@@ -183,13 +206,34 @@ export function parseCitations(text: string): ParsedCitations {
 
 const asList = (items: CslItem | CslItem[] | Record<string, unknown>[]) => (Array.isArray(items) ? items : [items]);
 
+/**
+ * An item as a style's manual wants it, where the CSL style alone does not get there:
+ * - a publisher that only repeats the title of the work the item is part of (our own entries:
+ *   "Counterweight", published by Counterweight) is left out by APA 7 (§9.29: a publisher that is
+ *   the same as the author or the work is omitted) and by Cite Them Right's web-page pattern
+ *   ("Author (Year) Title. Available at: URL (Accessed: date)"), which names no publisher;
+ * - a version (CSL `version`, which the APA style prints as "(Version 2)") goes where the Vancouver
+ *   and Harvard styles print an edition: Citing Medicine (2nd ed., ch. 22 "Books on the Internet",
+ *   Edition) takes "Version 2" as given on the site, after "[Internet]";
+ * - an entry of a reference work reads "'Title', in Work" in Cite Them Right (entries in reference
+ *   works are cited like chapters of edited books), which the Harvard CSL style prints for `chapter`.
+ * The item itself (CSL-JSON, BibTeX, RIS) keeps every field.
+ */
+export function itemForStyle(item: Record<string, unknown>, style: CitationStyle): Record<string, unknown> {
+  const out = { ...item };
+  if (style !== 'vancouver' && out.publisher !== undefined && out.publisher === out['container-title']) delete out.publisher;
+  if (style !== 'apa' && out.version !== undefined && out.edition === undefined) out.edition = `Version ${String(out.version)}`;
+  if (style === 'harvard' && out.type === 'entry-encyclopedia') out.type = 'chapter';
+  return out;
+}
+
 /** The reference list in a style, one entry per item, in the order given (Vancouver numbers them). */
 export function formatBibliography(items: Record<string, unknown>[], style: CitationStyle, format: CitationFormat): string {
   if (!items.length) return '';
-  const out = new Cite(asList(items), { forceType: '@csl/list+object' }).format('bibliography', {
+  const out = new Cite(asList(items).map((i) => itemForStyle(i, style)), { forceType: '@csl/list+object' }).format('bibliography', {
     template: TEMPLATE[style],
     format,
-    lang: 'en-US',
+    lang: LANG[style],
   }) as string;
   return format === 'text'
     ? out
@@ -218,4 +262,86 @@ export function toBibtex(items: Record<string, unknown>[]): string {
 
 export function toRis(items: Record<string, unknown>[]): string {
   return (new Cite(items, { forceType: '@csl/list+object' }).format('ris', { format: 'text' }) as string).trim() + '\n';
+}
+
+type DateParts = { 'date-parts'?: (number | string)[][] } | undefined;
+const partsOf = (d: unknown): number[] => ((d as DateParts)?.['date-parts']?.[0] ?? []).map(Number).filter((n) => Number.isFinite(n));
+const pad2 = (n: number) => String(n).padStart(2, '0');
+const isoDay = (p: number[]) => [String(p[0]), ...p.slice(1, 3).map(pad2)].join('-');
+const MONTHS = ['jan', 'feb', 'mar', 'apr', 'may', 'jun', 'jul', 'aug', 'sep', 'oct', 'nov', 'dec'];
+
+/**
+ * One online source (a CSL item with a URL, e.g. an entry version as `server/presenters/citation.ts`
+ * makes it) as a BibTeX `@misc` entry with the fields both BibTeX and biblatex read: author, title,
+ * organization (the CSL publisher), version, year and month, url, urldate (the access date,
+ * YYYY-MM-DD) and note. biblatex's manual (§2.1.1, entry type `misc`) lists exactly these optional
+ * fields for `@misc` (organization, version, url, urldate, note); classic BibTeX styles print author,
+ * title, year, month and note and leave the others, and the natbib styles print url. `@online` would
+ * be biblatex's own type, but BibTeX styles do not know it and would drop the year.
+ *
+ * Values are escaped by citation-js (its biblatex output: TeX specials, accented letters, capitals
+ * kept in braces); citation-js's own BibTeX output is not used as it is, because it writes the day
+ * into `month` ("mar 4") and leaves out urldate and version.
+ */
+export function toOnlineBibtex(item: Record<string, unknown>): string {
+  const key = String(item['citation-key'] ?? item.id).replace(/[^A-Za-z0-9_]/g, '_');
+  const { 'container-title': _container, issued: _issued, ...rest } = item;
+  const latex = (new Cite([{ ...rest, type: 'webpage', 'citation-key': key }], { forceType: '@csl/list+object' }).format('biblatex', { format: 'text' }) as string).split('\n');
+  const fields = new Map<string, string>();
+  for (const line of latex) {
+    const m = /^\s*([a-z]+) = \{(.*)\},?$/.exec(line);
+    if (m) fields.set(m[1], m[2]);
+  }
+  const issued = partsOf(item.issued);
+  const accessed = partsOf(item.accessed);
+  const lines: string[] = [];
+  const add = (name: string, value: string | undefined, braced = true) => {
+    if (value !== undefined && value !== '') lines.push(`\t${name} = ${braced ? `{${value}}` : value},`);
+  };
+  add('author', fields.get('author'));
+  add('title', fields.get('title'));
+  add('organization', fields.get('organization') ?? fields.get('publisher'));
+  add('version', fields.get('version'));
+  add('year', issued[0] ? String(issued[0]) : undefined);
+  // The month as BibTeX's predefined macro (jan … dec), which biblatex reads too.
+  add('month', issued[1] ? MONTHS[issued[1] - 1] : undefined, false);
+  add('url', fields.get('url'));
+  add('urldate', accessed.length ? isoDay(accessed) : undefined);
+  add('note', fields.get('note'));
+  return `@misc{${key},\n${lines.join('\n')}\n}\n`;
+}
+
+/**
+ * One online source as an RIS record of type ELEC (the 2011 RIS specification's "Web Page"), tags
+ * as that specification's table for ELEC gives them (transcribed in @citation-js/plugin-ris,
+ * lib/spec/new.json): AU once per author in order ("Family, Given"), TI title, PB publisher, PY year,
+ * DA date (YYYY/MM/DD/), ET edition (here the version, "Version 2"), UR the URL, Y2 the access date,
+ * N1 notes (the reviewer), ID the record's id. citation-js writes ELEC's access date in M1 and leaves
+ * the version out, so the record is written here; it reads back through citation-js (tested).
+ */
+export function toOnlineRis(item: Record<string, unknown>): string {
+  const one = (v: unknown) => String(v ?? '').replace(/\s+/g, ' ').trim();
+  const lines: string[] = ['TY  - ELEC'];
+  const add = (tag: string, v: unknown) => {
+    const s = one(v);
+    if (s) lines.push(`${tag}  - ${s}`);
+  };
+  for (const a of (item.author as { family?: string; given?: string; literal?: string }[] | undefined) ?? []) {
+    add('AU', a.literal ?? [a.family, a.given].filter(Boolean).join(', '));
+  }
+  add('TI', item.title);
+  add('PB', item.publisher ?? item['container-title']);
+  const issued = partsOf(item.issued);
+  if (issued.length) {
+    add('PY', issued[0]);
+    add('DA', `${[String(issued[0]), ...issued.slice(1, 3).map(pad2)].join('/')}/`);
+  }
+  if (item.version !== undefined) add('ET', `Version ${one(item.version)}`);
+  add('UR', item.URL);
+  const accessed = partsOf(item.accessed);
+  if (accessed.length) add('Y2', `${[String(accessed[0]), ...accessed.slice(1, 3).map(pad2)].join('/')}/`);
+  add('N1', item.note);
+  add('ID', item.id);
+  lines.push('ER  - ');
+  return `${lines.join('\n')}\n`;
 }

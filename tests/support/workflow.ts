@@ -59,3 +59,27 @@ export async function submitSighting(submitter: Client, fields: Record<string, s
 export async function claimSubmission(moderator: Client, id: number): Promise<void> {
   expectStatus(`claiming submission ${id}`, await moderator.post(`/api/submissions/${id}/claim`), 200);
 }
+
+/** Gives the account with this e-mail address the editor role, as `admin` (200): for tests that need a third editor. */
+export async function makeEditor(admin: Client, email: string): Promise<void> {
+  const list = expectStatus(`finding the account ${email}`, await admin.get(`/api/admin/users?q=${encodeURIComponent(email)}`), 200);
+  const user = (list.body.users as { id: number; email: string }[]).find((u) => u.email === email);
+  if (!user) throw new Error(`no account ${email}`);
+  expectStatus(`making ${email} an editor`, await admin.patch(`/api/admin/users/${user.id}/role`, { role: 'editor' }), 200);
+}
+
+/**
+ * An entry with two published versions by two authors: `first` writes version 1, `second` writes
+ * version 2 (a revision of it, with `revised` merged into its content), `reviewer` approves both.
+ */
+export async function publishTwoAuthorEntry(first: Client, second: Client, reviewer: Client, slug: string, content: object, revised: object = {}): Promise<void> {
+  await publishNewEntry(first, reviewer, slug, content);
+  const draft = await startRevision(second, slug);
+  const current = expectStatus(`reading draft ${draft.id}`, await second.get(`/api/drafts/${draft.id}`), 200);
+  const saved = expectStatus(
+    `revising draft ${draft.id}`,
+    await second.put(`/api/drafts/${draft.id}`, { content: { ...current.body.draft.content, ...revised }, lockVersion: draft.lockVersion }),
+    200,
+  );
+  await approveDraft(reviewer, await submitDraft(second, { id: draft.id, lockVersion: saved.body.draft.lockVersion }), 'Second version.');
+}

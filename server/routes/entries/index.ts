@@ -6,11 +6,9 @@
  * (sightings), security.test.ts (and the role matrix, csrf.test.ts, the fuzzer).
  */
 import { Router, type Request } from 'express';
-import { formatCitation, toBibtex, toRis, type CitationStyle } from '../../../shared/entries/citations';
 import { validated } from '../../http/validate';
 import type { Allow } from '../../policies';
-import { permalink } from '../../../shared/permalink';
-import { citedItem } from '../../presenters/citation';
+import { citeHandler } from '../citations/cite';
 import type { Entries } from '../../services/entries';
 import type { Submissions } from '../../services/submissions';
 import { citeQuerySchema, entryListQuerySchema, retireSchema, slugParams, versionParams } from './schema';
@@ -44,19 +42,8 @@ export function entryRoutes({ allow, entries, submissions, origin }: EntryRouteD
     res.json(await entries.library.read(slug, n));
   });
 
-  r.get('/entries/:slug/cite', allow('entries.cite'), validated({ params: slugParams, query: citeQuerySchema }), async (req, res) => {
-    const { params: { slug }, query: { format, version: n } } = res.locals.valid;
-    const { version } = await entries.library.versionRow(slug, n);
-    const url = permalink(origin(req), slug, version.number!);
-    const item = citedItem(slug, version, url);
-    const date = version.publishedAt!.toISOString().slice(0, 10);
-    const base = { format, url, version: version.number!, date };
-    if (format === 'bibtex') return void res.json({ ...base, text: toBibtex([item]) });
-    if (format === 'ris') return void res.json({ ...base, text: toRis([item]) });
-    if (format === 'csl-json') return void res.json({ ...base, text: `${JSON.stringify([item], null, 2)}\n` });
-    const style = format as CitationStyle;
-    res.json({ ...base, text: formatCitation(item, style, 'text'), html: formatCitation(item, style, 'html') });
-  });
+  // JSON, or the citation itself as `Accept` (or ?download=1) asks: server/routes/citations/cite.ts.
+  r.get('/entries/:slug/cite', allow('entries.cite'), validated({ params: slugParams, query: citeQuerySchema }), citeHandler(entries, origin));
 
   r.get('/entries/:slug/sightings', allow('entries.sightings'), validated({ params: slugParams }), async (_req, res) => {
     res.json({ sightings: await submissions.sightings.ofEntry(res.locals.valid.params.slug) });

@@ -1,6 +1,5 @@
 /** Requests of /api/entries: the library's list, its versions, citing a version, and the editors' writes on an entry. */
 import { z } from 'zod';
-import { CITE_FORMATS } from '../../../shared/api/constants';
 import { slugSchema } from '../../../shared/entries/schema';
 import { paging, slugParams } from '../common-schema';
 
@@ -23,13 +22,8 @@ export const entryListQuerySchema = z.object({
   ...paging(100, 20),
 });
 
-/** GET /api/entries/:slug/cite */
-export const citeQuerySchema = z.object({
-  /** A text style (apa, vancouver, harvard) or a data format (bibtex, ris, csl-json). */
-  format: z.enum(CITE_FORMATS).default('apa'),
-  /** The version to cite; the latest when absent. */
-  version: z.coerce.number().int().min(1).max(1_000_000).optional(),
-});
+/** GET /api/entries/:slug/cite: declared beside the citation routes, which answer it. */
+export { citeQuerySchema } from '../citations/schema';
 
 /** POST /api/entries/:slug/retire (413 too_large for a field over its size). */
 export const retireSchema = z

@@ -5,7 +5,7 @@
 import { Op } from 'sequelize';
 import type { EntryHtml, EntryListQuery, EntryListResponse, EntryResponse, VersionSummaryDto } from '../../../shared/api-types';
 import { HttpError } from '../../http/errors';
-import { ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass } from '../../models';
+import { ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass, User } from '../../models';
 import { entryState, entrySummary, entryVersion, versionSummary } from '../../presenters/entries';
 import { renderHtml } from '../render';
 import { PEOPLE, publishedEntry } from './common';
@@ -76,15 +76,26 @@ export class Library {
     };
   }
 
-  /** The published version itself as a model (for citing). */
-  async versionRow(slug: string, n?: number): Promise<{ entry: Entry; version: EntryVersion }> {
+  /**
+   * The published version itself as a model (for citing), with its authors: every editor who wrote
+   * a published version up to and including it, in order of first contribution, each once.
+   */
+  async versionRow(slug: string, n?: number): Promise<{ entry: Entry; version: EntryVersion; authors: User[] }> {
     const entry = await publishedEntry(slug);
     const version = await EntryVersion.findOne({
       where: n === undefined ? { id: entry.currentVersionId! } : { entryId: entry.id, number: n, state: 'published' },
       include: PEOPLE,
     });
     if (!version) throw new HttpError(404, 'not_found', `Entry “${slug}” has no version ${n}.`);
-    return { entry, version };
+    const upTo = await EntryVersion.findAll({
+      where: { entryId: entry.id, state: 'published', number: { [Op.lte]: version.number! } },
+      attributes: ['id', 'number'],
+      include: [{ model: User, as: 'author', attributes: ['id', 'displayName'] }],
+      order: [['number', 'ASC']],
+    });
+    // A Map keeps each key where it was first set: the order of first contribution.
+    const authors = [...new Map(upTo.map((v) => [v.author!.id, v.author!] as const)).values()];
+    return { entry, version, authors };
   }
 
   async versions(slug: string): Promise<VersionSummaryDto[]> {
