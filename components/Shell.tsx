@@ -55,7 +55,7 @@ function DatabaseNotice() {
   const { data } = useHealth();
   if (data?.db !== 'down') return null;
   return (
-    <Notice role="alert" testID="db-down" title="The database is not answering.">
+    <Notice tone="error" role="alert" testID="db-down" title="The database is not answering.">
       Pages that read from the library will fail until it is back. Check that MariaDB is running.
     </Notice>
   );
