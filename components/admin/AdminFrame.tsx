@@ -24,7 +24,9 @@ interface AdminFrameProps {
  * content for admins only.
  */
 export function AdminFrame({ testID, title, lead, children }: AdminFrameProps) {
-  usePageTitle(`${title} — Admin — ${SITE_NAME}`);
+  const pathname = usePathname();
+  // "Users and roles — Admin — Counterweight": the page's name from its tab, the screen titles repeat "Admin".
+  usePageTitle(`${tabs.find((tab) => tab.href === pathname)?.label ?? title} — Admin — ${SITE_NAME}`);
   const { width } = useWindowDimensions();
   return (
     <Screen testID={testID} title={title} lead={lead}>
