@@ -285,24 +285,24 @@ describe.each([
   it('gives each route its own browser title, and a description for link previews', async () => {
     const page = await open(width);
     const titleIs = (want: string) => until(`the title is “${want}”`, async () => (await page.title()) === want);
-    await page.goto(`${h.base}/check`);
-    await titleIs('Claim check — Counterweight');
-    const description = await page.locator('meta[name="description"]').getAttribute('content');
-    expect(description).toMatch(/claim/i);
-    await page.goto(`${h.base}/checks`);
-    await titleIs('Check kit — Counterweight');
-    await page.goto(`${h.base}/sign-in`);
-    await titleIs('Sign in — Counterweight');
-    await page.goto(`${h.base}/sign-up`);
-    await titleIs('Create an account — Counterweight');
-    await page.goto(`${h.base}/no-such-page`);
-    await titleIs('Page not found — Counterweight');
+    /** Opens a path, waits for its screen to render, then for the title it sets. */
+    const visit = async (pathname: string, screen: string, want: string) => {
+      await page.goto(`${h.base}${pathname}`);
+      await byTestId(page, screen).waitFor();
+      await titleIs(want);
+    };
+    await visit('/check', 'screen-check', 'Claim check — Counterweight');
+    const description = await page.locator('meta[name="description"]').evaluateAll((els) => els.map((el) => el.getAttribute('content')));
+    expect(description).toHaveLength(1);
+    expect(description[0]).toMatch(/claim/i);
+    await visit('/checks', 'screen-checks', 'Check kit — Counterweight');
+    await visit('/sign-in', 'screen-sign-in', 'Sign in — Counterweight');
+    await visit('/sign-up', 'screen-sign-up', 'Create an account — Counterweight');
+    await visit('/no-such-page', 'screen-not-found', 'Page not found — Counterweight');
     await signInThroughForm(page, h.base, admin, password);
     await titleIs('Account — Counterweight');
-    await page.goto(`${h.base}/admin/audit`);
-    await titleIs('Audit log — Admin — Counterweight');
-    await page.goto(`${h.base}/queue`);
-    await titleIs('Queue — Counterweight');
+    await visit('/admin/audit', 'screen-audit', 'Audit log — Admin — Counterweight');
+    await visit('/queue', 'screen-queue', 'Queue — Counterweight');
     await page.context().close();
   });
 });
