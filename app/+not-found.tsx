@@ -1,3 +1,7 @@
 import { NotFoundScreen } from '@/components/screens/NotFoundScreen';
+import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
 
-export default NotFoundScreen;
+export default function NotFoundRoute() {
+  usePageTitle(`Page not found — ${SITE_NAME}`);
+  return <NotFoundScreen />;
+}

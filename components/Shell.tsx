@@ -6,6 +6,7 @@ import { useHealth } from './queries/health';
 import { Navigation } from './nav/Navigation';
 import { Wordmark } from './nav/Wordmark';
 import { colors, layout, space, type } from './theme';
+import { ConfirmHost } from './ui/ConfirmDialog';
 import { Notice } from './ui/Notice';
 import { useViewer } from './viewer';
 
@@ -34,6 +35,7 @@ export function Shell({ children }: { children: ReactNode }) {
       <View style={[styles.root, styles.row, { paddingTop: insets.top }]}>
         <Navigation variant="rail" role={role} />
         {page}
+        <ConfirmHost />
       </View>
     );
   }
@@ -46,6 +48,7 @@ export function Shell({ children }: { children: ReactNode }) {
       <View style={[styles.barDock, { paddingBottom: insets.bottom }]}>
         <Navigation variant="bar" role={role} />
       </View>
+      <ConfirmHost />
     </View>
   );
 }
@@ -55,7 +58,7 @@ function DatabaseNotice() {
   const { data } = useHealth();
   if (data?.db !== 'down') return null;
   return (
-    <Notice role="alert" testID="db-down" title="The database is not answering.">
+    <Notice tone="error" role="alert" testID="db-down" title="The database is not answering.">
       Pages that read from the library will fail until it is back. Check that MariaDB is running.
     </Notice>
   );
@@ -82,7 +85,8 @@ const styles = StyleSheet.create({
     borderBottomColor: colors.rule,
     borderBottomWidth: 1,
   },
-  barDock: { backgroundColor: colors.paperDeep },
+  // Above the page, so that the "More" list that opens upwards from the bar covers it.
+  barDock: { backgroundColor: colors.paperDeep, zIndex: 1 },
   scroll: { flex: 1 },
   scrollContent: { flexGrow: 1, padding: space.md, paddingTop: space.lg },
   scrollContentWide: { paddingHorizontal: space.xxl, paddingTop: space.xxl },

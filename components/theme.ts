@@ -2,32 +2,78 @@
  * Counterweight's look in one place: colours, spacing, type and fonts.
  * Results are never coloured on a red-to-green scale; marks stay neutral (DESIGN.md §6).
  */
-import type { TextStyle } from 'react-native';
+import { Platform, type TextStyle } from 'react-native';
 
-export const colors = {
-  /** Warm paper: the page. */
-  paper: '#F7F4EE',
-  /** A shade deeper than the page: the rail, the bars, quiet panels. */
-  paperDeep: '#EFEAE0',
-  /** Lighter than the page: fields and cards that sit on it. */
-  surface: '#FFFDF9',
-  /** Graphite: all reading text. */
-  ink: '#1E232B',
-  /** Secondary text: captions, hints, inactive navigation. */
-  inkMuted: '#596170',
-  /** Hairlines between things. */
-  rule: '#DCD5C8',
-  /** Borders that must be seen: fields, buttons at rest. */
-  ruleStrong: '#B9B0A0',
-  /** The one accent: links, the active section, primary actions. */
-  teal: '#1F6F6B',
-  /** A wash of the accent behind the active section in the rail. */
-  tealWash: '#E3EDEB',
-  /** Highlights and focus. */
-  brass: '#A8782B',
-  /** A wash of brass behind notices. */
-  brassWash: '#F4EBDA',
+/**
+ * The two palettes, light and dark, as hex. Text colours keep at least 4.5:1 against every background
+ * they are set on, and the borders of controls (`ruleStrong`) at least 3:1 (WCAG 2.1, 1.4.3 and 1.4.11),
+ * in both. The dark palette follows the system setting (`prefers-color-scheme`).
+ */
+export const palettes = {
+  light: {
+    /** Warm paper: the page. */
+    paper: '#F7F4EE',
+    /** A shade deeper than the page: the rail, the bars, quiet panels. */
+    paperDeep: '#EFEAE0',
+    /** Lighter than the page: fields and cards that sit on it. */
+    surface: '#FFFDF9',
+    /** Graphite: all reading text. */
+    ink: '#1E232B',
+    /** Secondary text: captions, hints, inactive navigation. */
+    inkMuted: '#596170',
+    /** Hairlines between things. */
+    rule: '#DCD5C8',
+    /** Borders that must be seen: fields, buttons at rest, chips. */
+    ruleStrong: '#8A8272',
+    /** The one accent: links, the active section, primary actions. */
+    teal: '#1F6F6B',
+    /** A wash of the accent behind the active section in the rail, and behind "done" messages. */
+    tealWash: '#E3EDEB',
+    /** Highlights and focus. */
+    brass: '#A8782B',
+    /** A wash of brass behind notes. */
+    brassWash: '#F4EBDA',
+    /** Text in brass where it must be read (a note's word): darker than the brass of rules and focus. */
+    brassInk: '#76531A',
+    /** Problems (a failed request, a refused form): the edge, the word and the wash of an error message. */
+    alarm: '#A63A2B',
+    alarmInk: '#9A3324',
+    alarmWash: '#F8E7E2',
+  },
+  dark: {
+    paper: '#16191E',
+    paperDeep: '#1D2127',
+    surface: '#23282F',
+    ink: '#ECE7DE',
+    inkMuted: '#A7AFBB',
+    rule: '#383E48',
+    ruleStrong: '#7D8592',
+    teal: '#6BC3BA',
+    tealWash: '#1B3331',
+    brass: '#D9A957',
+    brassWash: '#33291A',
+    brassInk: '#E4B86C',
+    alarm: '#E27D6B',
+    alarmInk: '#F2A090',
+    alarmWash: '#3B211D',
+  },
 } as const;
+
+export type ColorName = keyof (typeof palettes)['light'];
+
+/** `inkMuted` → `--cw-ink-muted`: the CSS custom property that carries a colour on the web. */
+export const cssVariableOf = (name: ColorName) => `--cw-${name.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}`;
+
+/**
+ * The colours to style with. On the web each is a CSS custom property (`var(--cw-ink)`), defined for
+ * light and dark in public/index.html, so the whole app follows the system setting without re-rendering
+ * (react-native-web passes `var(...)` through; Chromium resolves it in SVG attributes too). Elsewhere
+ * the light palette's hex values.
+ */
+export const colors: Record<ColorName, string> =
+  Platform.OS === 'web'
+    ? (Object.fromEntries(Object.keys(palettes.light).map((name) => [name, `var(${cssVariableOf(name as ColorName)})`])) as Record<ColorName, string>)
+    : palettes.light;
 
 export const space = {
   xxs: 4,

@@ -1,7 +1,9 @@
 import { useLocalSearchParams } from 'expo-router';
 import { ClaimCheckScreen } from '@/components/claims/ClaimCheckScreen';
+import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
 
 export default function ClaimCheckRoute() {
+  usePageTitle(`Claim check — ${SITE_NAME}`, 'Paste a claim of an impossible machine: the library finds the objections that answer it and checks its figures.');
   // `?from=<token>`: a saved check opened to be re-run ("Open in the claim check").
   // `?resume=1`: back from signing in to save; the check kept in this tab comes back.
   const { from, resume } = useLocalSearchParams<{ from?: string; resume?: string }>();

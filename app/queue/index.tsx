@@ -1,3 +1,7 @@
 import { QueueScreen } from '@/components/queue/QueueScreen';
+import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
 
-export default QueueScreen;
+export default function QueueRoute() {
+  usePageTitle(`Queue — ${SITE_NAME}`);
+  return <QueueScreen />;
+}

@@ -62,11 +62,11 @@ describe('UsersScreen', () => {
       },
       '/api/admin/audit?limit=50&offset=0': () => jsonResponse(200, { events: [], total: 0 }),
     });
-    const confirm = jest.spyOn(window, 'confirm').mockReturnValue(true);
     renderWithProviders(<UsersScreen />);
 
     fireEvent.click(await screen.findByTestId('role-new.referee@example.org-editor'));
-    expect(confirm).toHaveBeenCalledWith(expect.stringContaining('from contributor to editor'));
+    expect((await screen.findByTestId('confirm-dialog')).textContent).toContain('from contributor to editor');
+    fireEvent.click(screen.getByTestId('confirm-dialog-accept'));
     expect((await screen.findByTestId('role-status-new.referee@example.org')).textContent).toBe('Role changed to editor.');
 
     const patches = fetchMock.mock.calls.filter(([path]) => path === '/api/admin/users/12/role');
@@ -82,9 +82,9 @@ describe('UsersScreen', () => {
 
   it('sends nothing when the admin thinks better of it', async () => {
     const fetchMock = mockFetch({ '/api/session': adminSession, [firstPage]: () => jsonResponse(200, { users: [farah], total: 1 }) });
-    jest.spyOn(window, 'confirm').mockReturnValue(false);
     renderWithProviders(<UsersScreen />);
     fireEvent.click(await screen.findByTestId('role-new.referee@example.org-moderator'));
+    fireEvent.click(await screen.findByTestId('confirm-dialog-cancel'));
     expect(fetchMock.mock.calls.map(([path]) => path)).not.toContain('/api/admin/users/12/role');
     const picker = screen.getByTestId('role-new.referee@example.org');
     expect(within(picker).getByRole('radio', { name: 'contributor' }).getAttribute('aria-checked')).toBe('true');
@@ -103,9 +103,9 @@ describe('UsersScreen', () => {
           },
         }),
     });
-    jest.spyOn(window, 'confirm').mockReturnValue(true);
     renderWithProviders(<UsersScreen />);
     fireEvent.click(await screen.findByTestId('role-admin@example.org-editor'));
+    fireEvent.click(await screen.findByTestId('confirm-dialog-accept'));
     expect((await screen.findByTestId('error-role-admin@example.org')).textContent).toBe(
       'You cannot take the admin role away from yourself.',
     );

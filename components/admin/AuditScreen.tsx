@@ -45,7 +45,7 @@ function AuditList() {
   if (error) return <ErrorNotice testID="audit-error" error={error} what="the audit log" onRetry={() => void refetch()} />;
   if (data.events.length === 0) {
     return (
-      <Notice testID="audit-empty" title="Nothing is recorded yet.">
+      <Notice tone="empty" testID="audit-empty" title="Nothing is recorded yet.">
         Changing a user&apos;s role on the Users and roles page writes the first event here.
       </Notice>
     );

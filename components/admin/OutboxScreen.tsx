@@ -49,7 +49,7 @@ function Messages() {
         onPress={() => void refetch()}
       />
       {data.messages.length === 0 ? (
-        <Notice testID="outbox-empty" title="No mail caught yet.">
+        <Notice tone="empty" testID="outbox-empty" title="No mail caught yet.">
           Mail arrives here when someone creates an account, asks for the confirmation link again, or asks to set a new
           password. Try it: create an account at /sign-up, then look for new mail.
         </Notice>

@@ -57,11 +57,11 @@ function UserList() {
   else if (data.users.length === 0) {
     list =
       query.q || query.role ? (
-        <Notice testID="users-empty" title="Nobody matches.">
+        <Notice tone="empty" testID="users-empty" title="Nobody matches.">
           {noMatch(query.q, query.role)} Shorten the search or choose all roles.
         </Notice>
       ) : (
-        <Notice testID="users-empty" title="No accounts yet.">
+        <Notice tone="empty" testID="users-empty" title="No accounts yet.">
           People appear here once they create an account at /sign-up; confirm their address and they can sign in.
         </Notice>
       );

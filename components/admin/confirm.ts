@@ -1,13 +1,10 @@
-import { Alert, Platform } from 'react-native';
+import { askToConfirm } from '../ui/ConfirmDialog';
 
-/** Asks before a change that others will feel: the browser's own dialog on the web, an alert on a phone app. */
+/**
+ * Asks before a change that others will feel, in the page's own confirm dialog (components/ui/ConfirmDialog.tsx),
+ * never the browser's: `question` is its heading, `detail` what follows from it, `action` the verb on the
+ * button that goes ahead. `onConfirm` runs only on that button.
+ */
 export function confirmChange(question: string, detail: string, action: string, onConfirm: () => void) {
-  if (Platform.OS === 'web') {
-    if (window.confirm(`${question}\n\n${detail}`)) onConfirm();
-    return;
-  }
-  Alert.alert(question, detail, [
-    { text: 'Cancel', style: 'cancel' },
-    { text: action, onPress: onConfirm },
-  ]);
+  askToConfirm({ title: question, detail, confirmLabel: action, onConfirm });
 }

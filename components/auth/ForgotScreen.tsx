@@ -20,7 +20,7 @@ export function ForgotScreen() {
       lead="Give the e-mail address of your account and a link to set a new password is sent to it. The link works once, within one hour."
     >
       {form.succeeded ? (
-        <Notice testID="forgot-done" title="Look in your inbox.">
+        <Notice tone="success" testID="forgot-done" title="Look in your inbox.">
           If an account uses {form.values.email.trim()}, a link to set a new password is on its way. Nothing after a
           few minutes? Check the address and the spam folder, then send it again.
         </Notice>

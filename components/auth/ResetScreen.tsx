@@ -25,7 +25,7 @@ export function ResetScreen({ token = '' }: { token?: string }) {
   if (form.succeeded) {
     return (
       <Screen testID="screen-reset" title="Password changed">
-        <Notice testID="reset-done" title="Your new password is set.">
+        <Notice tone="success" testID="reset-done" title="Your new password is set.">
           Every session of this account has been signed out, on every device. Sign in with the new password.
         </Notice>
         <TextLink href="/sign-in" testID="reset-sign-in">

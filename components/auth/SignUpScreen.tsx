@@ -24,7 +24,7 @@ export function SignUpScreen() {
     const { email } = form.succeeded.user;
     return (
       <Screen testID="screen-sign-up" title="Check your e-mail">
-        <Notice testID="sign-up-done" title={`A confirmation link is on its way to ${email}.`}>
+        <Notice tone="success" testID="sign-up-done" title={`A confirmation link is on its way to ${email}.`}>
           Open it within 24 hours to confirm the address; then sign in. Until then the account cannot be used.
         </Notice>
         <View style={styles.more}>

@@ -40,7 +40,7 @@ export function VerifyScreen({ token = '' }: { token?: string }) {
     const { email } = verify.data.user;
     content = (
       <>
-        <Notice testID="verify-done" title="Your e-mail address is verified.">
+        <Notice tone="success" testID="verify-done" title="Your e-mail address is verified.">
           {email} can now sign in and send in sightings and corrections.
         </Notice>
         <TextLink href={`/sign-in?email=${encodeURIComponent(email)}`} testID="verify-sign-in">

@@ -47,7 +47,7 @@ function WorksheetList() {
   }
   if (data.worksheets.length === 0) {
     return (
-      <Notice testID="worksheets-empty" title="No worksheets yet.">
+      <Notice tone="empty" testID="worksheets-empty" title="No worksheets yet.">
         Starter worksheets are read from <Text style={type.mono}>content/worksheets/</Text> when the server starts. Add
         one there and restart, or use the checks above meanwhile.
       </Notice>

@@ -55,7 +55,7 @@ function KnownCheck({ def, query }: { def: CheckDefinition; query: Record<string
         <Text style={styles.conditionText}>{def.condition}</Text>
       </View>
       {def.cautions.length > 0 ? (
-        <Notice testID="check-cautions" title="Safety first">
+        <Notice tone="warning" testID="check-cautions" title="Safety first">
           {['This check touches work that can hurt people. Local codes and licensed practice come first.', ...def.cautions].join('\n\n')}
         </Notice>
       ) : null}

@@ -19,7 +19,7 @@ export const count = (n: number) => n.toLocaleString('en-US');
 /** The caution every claim check carries. */
 export function ClaimCaution() {
   return (
-    <Notice testID="claim-caution" title="What this judges">
+    <Notice tone="warning" testID="claim-caution" title="What this judges">
       The checks judge the claim’s figures and mechanism, not the people making it. Where hardware is involved — high
       voltage, RF, vacuum, rotating machinery — local codes and licensed practice come first.
     </Notice>

@@ -459,13 +459,11 @@ describe('ClaimCheckScreen', () => {
         return { ok: true, status: 204, statusText: '', json: async () => undefined } as Response;
       },
     });
-    const confirm = jest.spyOn(window, 'confirm').mockReturnValue(true);
     renderWithProviders(<ClaimCheckScreen />);
     expect(await screen.findByTestId(`claim-saved-${token}`)).toBeTruthy();
     fireEvent.click(screen.getByTestId(`claim-saved-${token}-delete`));
-    expect(confirm).toHaveBeenCalled();
+    fireEvent.click(await screen.findByTestId('confirm-dialog-accept'));
     expect(await screen.findByTestId('claim-saved-none')).toBeTruthy();
-    confirm.mockRestore();
   });
 
   it("shows the server's message for a text over the limit (413)", async () => {

@@ -191,7 +191,7 @@ export function ClaimCheckScreen({ from, resume = false }: ClaimCheckScreenProps
       {from && opened.isPending ? <Loading testID="claim-opening" label="Opening the saved check…" /> : null}
       {from && opened.error ? (
         isNotFound(opened.error) ? (
-          <Notice testID="claim-opening-not-found" title="That saved check is gone.">
+          <Notice tone="error" testID="claim-opening-not-found" title="That saved check is gone.">
             {opened.error.message} Paste the claim below to check it again.
           </Notice>
         ) : (

@@ -53,7 +53,7 @@ export function ClaimNotes({ notes }: { notes: string[] }) {
 export function MatchList({ matches }: { matches: ClaimMatch[] }) {
   if (matches.length === 0) {
     return (
-      <Notice testID="claim-matches-none" title="No entry matched this text closely.">
+      <Notice tone="empty" testID="claim-matches-none" title="No entry matched this text closely.">
         Try the part of the text that describes the mechanism, or search the Library by its own words.
       </Notice>
     );
@@ -168,7 +168,7 @@ function FindingMark({ breaks }: { breaks: boolean }) {
 export function CheckRuns({ runs }: { runs: ClaimCheckRun[] }) {
   if (runs.length === 0) {
     return (
-      <Notice testID="claim-checks-none" title="No check could be run on these figures.">
+      <Notice tone="empty" testID="claim-checks-none" title="No check could be run on these figures.">
         The notes and the list of missing figures say what is needed. Add a figure under Figures found and the checks
         it allows run at once.
       </Notice>

@@ -52,13 +52,12 @@ describe('SavedClaimCheckScreen', () => {
       },
       '/api/claim-checks/saved': () => jsonResponse(200, { saved: [] }),
     });
-    const confirm = jest.spyOn(window, 'confirm').mockReturnValue(true);
     renderWithProviders(<SavedClaimCheckScreen token={token} />);
     fireEvent.click(await screen.findByTestId('claim-saved-delete'));
+    fireEvent.click(await screen.findByTestId('confirm-dialog-accept'));
     expect(await screen.findByTestId('claim-saved-not-found')).toBeTruthy();
     expect(screen.getByTestId('claim-deleted').textContent).toContain('Deleted.');
     await waitFor(() => expect(gone).toBe(true));
-    confirm.mockRestore();
   });
 
   it('says clearly when there is nothing at the link', async () => {

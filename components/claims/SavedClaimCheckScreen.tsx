@@ -47,7 +47,7 @@ export function SavedClaimCheckScreen({ token }: { token: string }) {
               Deleted. This link now answers “not found” for everyone.
             </Text>
           ) : null}
-          <Notice testID="claim-saved-not-found" title="There is no saved claim check at this link.">
+          <Notice tone="error" testID="claim-saved-not-found" title="There is no saved claim check at this link.">
             It was deleted by the account that saved it, or the link is mistyped. Check the link with whoever sent it.
           </Notice>
           <TextLink href="/check" testID="claim-saved-new">

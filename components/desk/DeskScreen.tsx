@@ -69,7 +69,7 @@ function DraftList({ testID, drafts, empty }: { testID: string; drafts: DraftSum
   if (drafts.length === 0) {
     return (
       <View testID={testID}>
-        <Notice testID={`${testID}-empty`} title="Nothing here.">
+        <Notice tone="empty" testID={`${testID}-empty`} title="Nothing here.">
           {empty}
         </Notice>
       </View>
@@ -94,7 +94,7 @@ function DraftList({ testID, drafts, empty }: { testID: string; drafts: DraftSum
 function RecentList({ entries }: { entries: PublishedSummaryDto[] }) {
   if (entries.length === 0) {
     return (
-      <Notice testID="desk-recent-empty" title="Nothing published yet.">
+      <Notice tone="empty" testID="desk-recent-empty" title="Nothing published yet.">
         Approved drafts appear here as they are published.
       </Notice>
     );

@@ -46,7 +46,7 @@ function DraftLoader({ id }: { id: number }) {
   if (error) {
     if (error instanceof ApiError && error.status === 404) {
       return (
-        <Notice testID="draft-not-found" title="There is no such draft.">
+        <Notice tone="error" testID="draft-not-found" title="There is no such draft.">
           It may have been published or removed since the link was made. The Desk lists the drafts that are open.
         </Notice>
       );

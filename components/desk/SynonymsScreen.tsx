@@ -74,7 +74,7 @@ function GroupList() {
   if (error) return <ErrorNotice testID="synonyms-error" error={error} what="the synonym groups" onRetry={() => void refetch()} />;
   if (!data.groups.length) {
     return (
-      <Notice testID="synonyms-empty" title="No groups yet.">
+      <Notice tone="empty" testID="synonyms-empty" title="No groups yet.">
         Add a group above: two or more words or phrases that mean the same thing in a claim.
       </Notice>
     );
@@ -171,7 +171,7 @@ function GroupForm({ testID, group, onDone }: { testID: string; group?: SynonymG
       />
       <Field label="Note for editors (optional)" testID={`${testID}-note`} value={note} onChangeText={setNote} error={errors.note} />
       {conflict ? (
-        <Notice testID={`${testID}-conflict`} title="Another editor changed this group.">
+        <Notice tone="error" testID={`${testID}-conflict`} title="Another editor changed this group.">
           It now reads: {conflict.terms.join(' · ')}. Your lines are kept; save again to replace it with them.
         </Notice>
       ) : (

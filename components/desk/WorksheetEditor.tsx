@@ -212,7 +212,7 @@ function WorksheetForm({ index: i, worksheet: ws, onChange, onRemove }: { index:
         {run ? (
           <WorksheetView key={run.inputs.map((x) => `${x.name}=${x.default}`).join('|')} worksheet={run} />
         ) : (
-          <Notice testID={`${id}-not-run`} title="Not run yet">
+          <Notice tone="empty" testID={`${id}-not-run`} title="Not run yet">
             It needs a name, a title and at least one step without problems; fix the fields marked above.
           </Notice>
         )}

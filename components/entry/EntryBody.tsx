@@ -77,7 +77,7 @@ export function EntryBody({ content, html }: EntryBodyProps) {
       ) : null}
       {html.cautions ? (
         <EntrySection field="cautions">
-          <Notice testID="entry-cautions" title="Where this work can hurt someone">
+          <Notice tone="warning" testID="entry-cautions" title="Where this work can hurt someone">
             <Markdown html={html.cautions} size="compact" />
           </Notice>
         </EntrySection>

@@ -2,28 +2,32 @@ import { Link } from 'expo-router';
 import { useState } from 'react';
 import { Platform, Pressable, StyleSheet, Text, View } from 'react-native';
 import { colors, focusRing, space, type } from '../theme';
+import { SectionIcon } from './icons';
 import type { NavSection } from './sections';
 
-export type NavVariant = 'bar' | 'rail';
+/** `bar`: the phone's bottom bar; `rail`: the wide screen's left rail; `sheet`: the list behind "More". */
+export type NavVariant = 'bar' | 'rail' | 'sheet';
 
 interface NavItemProps {
   section: NavSection;
   active: boolean;
   variant: NavVariant;
-  /** A bar crowded with sections (an admin has seven): smaller labels, so that each word fits a phone. */
-  compact?: boolean;
+  /** Called after the item is pressed (the "More" list closes). */
+  onNavigate?: () => void;
 }
 
-/** One section in the bottom bar or the rail; the active one is teal and announced as current. */
-export function NavItem({ section, active, variant, compact = false }: NavItemProps) {
+/** One section in the bottom bar, the rail or the "More" list; the active one is teal and announced as current. */
+export function NavItem({ section, active, variant, onNavigate }: NavItemProps) {
   const [hovered, setHovered] = useState(false);
   const current =
     Platform.OS === 'web'
       ? { 'aria-current': active ? ('page' as const) : undefined }
       : { accessibilityState: { selected: active } };
+  const bar = variant === 'bar';
+  const tint = active ? colors.teal : colors.inkMuted;
 
   return (
-    <Link href={section.href} asChild>
+    <Link href={section.href} asChild onPress={onNavigate}>
       <Pressable
         testID={`nav-${section.key}`}
         {...current}
@@ -32,45 +36,62 @@ export function NavItem({ section, active, variant, compact = false }: NavItemPr
         // Link's asChild merges props into its child and takes only a plain style object.
         style={StyleSheet.flatten([
           styles.item,
-          variant === 'bar' ? styles.barItem : styles.railItem,
+          bar ? styles.barItem : variant === 'rail' ? styles.railItem : styles.sheetItem,
           hovered && !active && styles.hovered,
-          active && variant === 'rail' && styles.railActive,
+          active && !bar && styles.railActive,
         ])}
       >
-        <View style={[variant === 'bar' ? styles.barMark : styles.railMark, active && styles.markActive]} />
+        <View style={[bar ? styles.barMark : styles.railMark, active && styles.markActive]} />
+        {variant === 'rail' ? null : <SectionIcon name={section.key} color={tint} size={bar ? 24 : 22} />}
         <Text
-          style={[variant === 'bar' ? styles.barLabel : styles.railLabel, compact && styles.compactLabel, active && styles.labelActive]}
-          // In a crowded bar a label of two words takes a second line.
-          numberOfLines={variant === 'bar' ? 2 : 1}
+          style={[bar ? styles.barLabel : styles.railLabel, active && styles.labelActive]}
+          // One line always: the bar's labels are short words, the rail and the list have room.
+          numberOfLines={1}
         >
-          {section.label}
+          {bar ? section.short : section.label}
         </Text>
       </Pressable>
     </Link>
   );
 }
 
-const styles = StyleSheet.create({
+export const navItemStyles = StyleSheet.create({
   item: { ...focusRing, position: 'relative' },
   barItem: {
     flex: 1,
+    minWidth: 44,
     alignItems: 'center',
     justifyContent: 'center',
+    gap: 2,
     minHeight: 56,
     paddingHorizontal: space.xxs,
+    paddingVertical: space.xxs,
   },
+  hovered: { backgroundColor: colors.paper },
+  barMark: { position: 'absolute', top: 0, left: space.sm, right: space.sm, height: 3 },
+  markActive: { backgroundColor: colors.teal },
+  barLabel: { ...type.small, color: colors.inkMuted, textAlign: 'center' },
+  labelActive: { fontFamily: type.uiStrong.fontFamily, color: colors.teal },
+});
+
+const styles = StyleSheet.create({
+  ...navItemStyles,
   railItem: {
+    minHeight: 44,
+    justifyContent: 'center',
     paddingVertical: space.sm,
     paddingLeft: space.lg,
     paddingRight: space.md,
   },
-  hovered: { backgroundColor: colors.paper },
+  sheetItem: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.sm,
+    minHeight: 48,
+    paddingLeft: space.lg,
+    paddingRight: space.lg,
+  },
   railActive: { backgroundColor: colors.tealWash },
-  barMark: { position: 'absolute', top: 0, left: space.sm, right: space.sm, height: 3 },
   railMark: { position: 'absolute', top: 0, bottom: 0, left: 0, width: 3 },
-  markActive: { backgroundColor: colors.teal },
-  barLabel: { ...type.caption, color: colors.inkMuted, textAlign: 'center' },
-  compactLabel: { fontSize: type.small.fontSize, lineHeight: type.small.lineHeight },
   railLabel: { ...type.ui, color: colors.inkMuted },
-  labelActive: { fontFamily: type.uiStrong.fontFamily, color: colors.teal },
 });

@@ -13,6 +13,8 @@ export interface NavSection {
   key: SectionKey;
   href: '/' | `/${Exclude<SectionKey, 'library'>}`;
   label: string;
+  /** The label in the phone's bottom bar, short enough for one line in a fifth of a phone's width. */
+  short: string;
   /** The route action whose policy decides who is offered the section; none: everyone. */
   action?: Action;
   /** The roles offered it (from the policy), for words such as "Editors and admins only". */
@@ -22,14 +24,27 @@ export interface NavSection {
 const everyone: readonly Role[] = ['reader', 'contributor', 'editor', 'moderator', 'admin'];
 
 export const sections: readonly NavSection[] = [
-  { key: 'library', href: '/', label: 'Library', roles: everyone },
-  { key: 'check', href: '/check', label: 'Claim check', roles: everyone },
-  { key: 'checks', href: '/checks', label: 'Check kit', roles: everyone },
-  { key: 'desk', href: '/desk', label: 'Desk', action: 'desk.read', roles: rolesOf('desk.read') },
-  { key: 'queue', href: '/queue', label: 'Queue', action: 'queue.list', roles: rolesOf('queue.list') },
-  { key: 'admin', href: '/admin', label: 'Admin', action: 'users.list', roles: rolesOf('users.list') },
-  { key: 'account', href: '/account', label: 'Account', roles: everyone },
+  { key: 'library', href: '/', label: 'Library', short: 'Library', roles: everyone },
+  { key: 'check', href: '/check', label: 'Claim check', short: 'Claims', roles: everyone },
+  { key: 'checks', href: '/checks', label: 'Check kit', short: 'Kit', roles: everyone },
+  { key: 'desk', href: '/desk', label: 'Desk', short: 'Desk', action: 'desk.read', roles: rolesOf('desk.read') },
+  { key: 'queue', href: '/queue', label: 'Queue', short: 'Queue', action: 'queue.list', roles: rolesOf('queue.list') },
+  { key: 'admin', href: '/admin', label: 'Admin', short: 'Admin', action: 'users.list', roles: rolesOf('users.list') },
+  { key: 'account', href: '/account', label: 'Account', short: 'Account', roles: everyone },
 ];
+
+/** The most destinations the phone's bottom bar holds, "More" included. */
+export const BAR_MAX = 5;
+
+/**
+ * How a role's sections share the phone's bottom bar: all of them when they fit in `BAR_MAX`, otherwise
+ * the first ones in navigation order and a "More" that lists the rest.
+ */
+export function barSectionsFor(role: Role): { bar: NavSection[]; more: NavSection[] } {
+  const offered = sectionsFor(role);
+  if (offered.length <= BAR_MAX) return { bar: offered, more: [] };
+  return { bar: offered.slice(0, BAR_MAX - 1), more: offered.slice(BAR_MAX - 1) };
+}
 
 /** Sections that only some roles are offered. */
 export type RoleSectionKey = 'desk' | 'queue' | 'admin';

@@ -97,7 +97,7 @@ function QueueList({ user }: { user: UserDto }) {
             In all: {data.counts.open} open, {data.counts.claimed} being decided, {data.counts.waiting} waiting for the submitter.
           </Text>
           {data.items.length === 0 ? (
-            <Notice testID="queue-empty" title={filtered ? 'Nothing matches these filters.' : 'The queue is empty.'}>
+            <Notice tone="empty" testID="queue-empty" title={filtered ? 'Nothing matches these filters.' : 'The queue is empty.'}>
               {filtered
                 ? 'Clear a filter to see the other items.'
                 : 'New sightings and corrections appear here as they are sent in; you get an e-mail digest when they do.'}

@@ -42,11 +42,11 @@ export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore }:
       {error ? <ErrorNotice testID="entries-error" error={error} what="the published entries" onRetry={() => void refetch()} /> : null}
       {data && data.entries.length === 0 ? (
         filtered ? (
-          <Notice testID="entries-none" title="No published entry matches these filters.">
+          <Notice tone="empty" testID="entries-none" title="No published entry matches these filters.">
             Choose “Any” for the law or the class to see more.
           </Notice>
         ) : (
-          <Notice testID="recent-empty" title="No entries are published yet.">
+          <Notice tone="empty" testID="recent-empty" title="No entries are published yet.">
             When editors publish entries and their revisions, the latest appear here, newest first.
           </Notice>
         )

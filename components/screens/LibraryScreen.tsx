@@ -170,7 +170,7 @@ function Taxonomy() {
   }
   if (data.laws.length === 0 && data.classes.length === 0) {
     return (
-      <Notice testID="taxonomy-empty" title="The taxonomy is empty.">
+      <Notice tone="empty" testID="taxonomy-empty" title="The taxonomy is empty.">
         <Text style={type.mono}>npm start</Text> loads the starter laws and classes from{' '}
         <Text style={type.mono}>content/taxonomy.yml</Text> into an empty database. Restart it against a fresh
         database, or ask an editor to add them.
@@ -191,7 +191,7 @@ function Taxonomy() {
 
 function LawList({ laws }: { laws: ConservationLawDto[] }) {
   if (laws.length === 0) {
-    return <Notice title="No conservation laws are listed yet.">An editor can add them to the taxonomy.</Notice>;
+    return <Notice tone="empty" title="No conservation laws are listed yet.">An editor can add them to the taxonomy.</Notice>;
   }
   return (
     <View role="list" testID="law-list" style={styles.list}>
@@ -218,7 +218,7 @@ function LawList({ laws }: { laws: ConservationLawDto[] }) {
 
 function ClassList({ classes }: { classes: MechanismClassDto[] }) {
   if (classes.length === 0) {
-    return <Notice title="No mechanism classes are listed yet.">An editor can add them to the taxonomy.</Notice>;
+    return <Notice tone="empty" title="No mechanism classes are listed yet.">An editor can add them to the taxonomy.</Notice>;
   }
   const ordered = [...classes].sort((a, b) => a.position - b.position);
   const known = new Set(ordered.map((c) => c.slug));

@@ -49,7 +49,7 @@ export function SearchResults(props: SearchResultsProps) {
           </Text>
           {data.results.length === 0 ? (
             <View testID="search-empty" style={styles.empty}>
-              <Notice title={`Nothing in the library matches “${data.query || props.query}”${filtered ? ' with these filters' : ''}.`}>
+              <Notice tone="empty" title={`Nothing in the library matches “${data.query || props.query}”${filtered ? ' with these filters' : ''}.`}>
                 {filtered ? 'Choose “Any” for the law or the class, or try' : 'Try other words: the device, what it is said to do, or'} one
                 of these:
               </Notice>

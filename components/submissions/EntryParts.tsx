@@ -70,6 +70,7 @@ export function ReportError({ slug, version, title }: { slug: string; version: n
   if (done) {
     return (
       <Notice
+        tone="success"
         testID="correction-done"
         title="Thank you: the error is reported."
         action={

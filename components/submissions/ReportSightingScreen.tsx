@@ -53,7 +53,7 @@ export function ReportSightingScreen() {
     );
   } else if (!data.user.verified) {
     content = (
-      <Notice testID="sighting-unverified" title="Confirm your e-mail address first." action={<ResendVerification email={data.user.email} />}>
+      <Notice tone="warning" testID="sighting-unverified" title="Confirm your e-mail address first." action={<ResendVerification email={data.user.email} />}>
         We sent a link to {data.user.email} when you registered. Open it, then come back here. If it has expired or
         gone missing, send it again.
       </Notice>
@@ -66,7 +66,7 @@ export function ReportSightingScreen() {
       title="Report a sighting"
       lead="Met a claim of an impossible machine — a press release, a pitch, a preprint, a video? Send it in. A moderator matches it with the library’s entries or turns it into work for the editors, and you hear what became of it."
     >
-      <Notice testID="sighting-caution" title="What to send">
+      <Notice tone="warning" testID="sighting-caution" title="What to send">
         The claim and its figures, not the people behind it: the library judges mechanisms and claims, never people. No
         personal data of others, please. Attachments are {ALLOWED_WORDS}, at most {ATTACHMENTS_MAX} files of 10 MB each.
       </Notice>
@@ -166,6 +166,7 @@ function SightingForm({ user }: { user: UserDto }) {
   if (done) {
     return (
       <Notice
+        tone="success"
         testID="sighting-done"
         title="Sent. Thank you."
         action={

@@ -23,7 +23,7 @@ export function MySubmissions({ userId }: { userId: number }) {
       {isPending ? <Loading testID="my-submissions-loading" label="Loading your submissions…" /> : null}
       {error ? <ErrorNotice testID="my-submissions-error" error={error} what="your submissions" onRetry={() => void refetch()} /> : null}
       {data && data.items.length === 0 ? (
-        <Notice testID="my-submissions-empty" title="Nothing sent in yet.">
+        <Notice tone="empty" testID="my-submissions-empty" title="Nothing sent in yet.">
           Met a claim of an impossible machine? Report it as a sighting. Found an error in an entry? Open the entry and
           press “Report an error”.
         </Notice>
@@ -56,7 +56,7 @@ export function DeskCorrections() {
   if (error) return <ErrorNotice testID="desk-corrections-error" error={error} what="the corrections" onRetry={() => void refetch()} />;
   if (data.items.length === 0) {
     return (
-      <Notice testID="desk-corrections-empty" title="No corrections.">
+      <Notice tone="empty" testID="desk-corrections-empty" title="No corrections.">
         When a moderator accepts a reported error in an entry you wrote or reviewed, it is listed here and you get an
         e-mail.
       </Notice>

@@ -3,6 +3,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import type { ReactElement } from 'react';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
+import { ConfirmHost } from '../ui/ConfirmDialog';
 
 const metrics = {
   frame: { x: 0, y: 0, width: 390, height: 844 },
@@ -19,7 +20,11 @@ export function renderWithProviders(ui: ReactElement) {
 export function renderWithClient(client: QueryClient, ui: ReactElement) {
   return render(
     <QueryClientProvider client={client}>
-      <SafeAreaProvider initialMetrics={metrics}>{ui}</SafeAreaProvider>
+      <SafeAreaProvider initialMetrics={metrics}>
+        {ui}
+        {/* Where confirmChange asks its questions, as the Shell has one. */}
+        <ConfirmHost />
+      </SafeAreaProvider>
     </QueryClientProvider>,
   );
 }

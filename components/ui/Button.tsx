@@ -46,6 +46,9 @@ const styles = StyleSheet.create({
     borderRadius: radius.sm,
     paddingHorizontal: space.md,
     paddingVertical: space.xs,
+    // A touch target of 44 px at least (WCAG 2.1, 2.5.5).
+    minHeight: 44,
+    minWidth: 44,
   },
   quiet: { backgroundColor: colors.surface },
   pressed: { opacity: 0.85 },

@@ -43,7 +43,9 @@ const styles = StyleSheet.create({
     borderRadius: radius.pill,
     paddingHorizontal: space.sm,
     paddingVertical: space.xxs,
-    minHeight: 32,
+    // A touch target of 44 px at least (WCAG 2.1, 2.5.5).
+    minHeight: 44,
+    minWidth: 44,
     justifyContent: 'center',
     backgroundColor: colors.surface,
   },

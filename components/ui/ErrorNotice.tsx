@@ -18,21 +18,21 @@ export function ErrorNotice({ error, what, onRetry, testID }: ErrorNoticeProps) 
 
   if (error instanceof ApiUnreachableError) {
     return (
-      <Notice role="alert" testID={testID} title="Counterweight's server could not be reached." action={retry}>
+      <Notice tone="error" role="alert" testID={testID} title="Counterweight's server could not be reached." action={retry}>
         Check that <Text style={type.mono}>npm start</Text> is running, then retry.
       </Notice>
     );
   }
   if (error instanceof ApiError) {
     return (
-      <Notice role="alert" testID={testID} title={`The server could not send ${what}.`} action={retry}>
+      <Notice tone="error" role="alert" testID={testID} title={`The server could not send ${what}.`} action={retry}>
         {error.message} <Text style={styles.code}>({error.code}, HTTP {error.status})</Text>{' '}
         If it keeps failing, the server's log says why.
       </Notice>
     );
   }
   return (
-    <Notice role="alert" testID={testID} title={`Something went wrong while loading ${what}.`} action={retry}>
+    <Notice tone="error" role="alert" testID={testID} title={`Something went wrong while loading ${what}.`} action={retry}>
       {error.message} Retry; if it keeps happening, report it with this message.
     </Notice>
   );

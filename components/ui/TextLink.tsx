@@ -22,6 +22,16 @@ export function TextLink({ href, children, testID, inline = false }: TextLinkPro
 }
 
 const styles = StyleSheet.create({
-  block: { ...type.uiStrong, ...focusRing, alignSelf: 'flex-start', color: colors.teal, textDecorationLine: 'underline' },
+  // A link on its own line is a touch target of 44 px at least (WCAG 2.1, 2.5.5): 11 + 22 + 11.
+  // Links inside running text keep the line's height, as the criterion allows.
+  block: {
+    ...type.uiStrong,
+    ...focusRing,
+    alignSelf: 'flex-start',
+    minHeight: 44,
+    paddingVertical: (44 - type.uiStrong.lineHeight) / 2,
+    color: colors.teal,
+    textDecorationLine: 'underline',
+  },
   inline: { ...focusRing, color: colors.teal, textDecorationLine: 'underline' },
 });

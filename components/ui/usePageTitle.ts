@@ -4,6 +4,9 @@ import { Platform } from 'react-native';
 /** The name every page title ends with. */
 export const SITE_NAME = 'Counterweight';
 
+/** The description of the site as a whole (public/index.html): for screens that give none of their own. */
+export const SITE_DESCRIPTION = 'Vetted, citable physics objections to impossible-machine claims.';
+
 function setMeta(selector: string, attr: 'name' | 'property', key: string, content: string): void {
   let el = document.head.querySelector<HTMLMetaElement>(selector);
   if (!el) {
@@ -23,9 +26,9 @@ export function usePageTitle(title: string, description?: string): void {
     if (Platform.OS !== 'web' || typeof document === 'undefined') return;
     document.title = title;
     setMeta('meta[property="og:title"]', 'property', 'og:title', title);
-    if (description) {
-      setMeta('meta[name="description"]', 'name', 'description', description);
-      setMeta('meta[property="og:description"]', 'property', 'og:description', description);
-    }
+    // A screen without a description of its own does not keep the one of the screen before it.
+    const words = description || SITE_DESCRIPTION;
+    setMeta('meta[name="description"]', 'name', 'description', words);
+    setMeta('meta[property="og:description"]', 'property', 'og:description', words);
   }, [title, description]);
 }

@@ -65,8 +65,8 @@ it('signs up, verifies through the Outbox, signs in, and is promoted by an admin
   await byTestId(adminPage, 'screen-admin').waitFor();
   const row = byTestId(adminPage, `user-row-${newUser.email}`);
   await row.waitFor();
-  adminPage.once('dialog', (d) => void d.accept());
   await byTestId(adminPage, `role-${newUser.email}-editor`).click();
+  await byTestId(adminPage, 'confirm-dialog-accept').click();
   await byTestId(adminPage, `role-status-${newUser.email}`).waitFor();
 
   await user.reload();

@@ -211,8 +211,8 @@ describe.each([
     // 9. The owner deletes it from the share page; the link then answers not found, for the reader too.
     await page.goto(shareUrl);
     await byTestId(page, 'claim-saved-delete').waitFor();
-    page.once('dialog', (d) => void d.accept());
     await byTestId(page, 'claim-saved-delete').click();
+    await byTestId(page, 'confirm-dialog-accept').click();
     await byTestId(page, 'claim-saved-not-found').waitFor();
     await reader.reload();
     await byTestId(reader, 'claim-saved-not-found').waitFor();
