@@ -60,6 +60,12 @@ describe('two sides of a heat engine', () => {
     expect(run.needs.map((n) => n.check)).toContain('carnot');
   });
 
+  test('heat rejected "to a cooling loop at 90 °C" is the cold side, and the hot side is then needed', () => {
+    const text = 'The engine rejects its heat to a cooling loop at 90 °C and is 30 % efficient; the hot-side temperature is not given.';
+    expect(temps(read(text))).toEqual([['cold', expect.closeTo(363.15, 9)]]);
+    expect(verdicts(text).checks.filter((c) => c.check === 'carnot')).toEqual([]);
+  });
+
   test('a COP set off from its value by a clause between commas', () => {
     const f = read('Its cooling COP, measured per §7 of the test protocol, is 2.8.');
     expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'cooling', si: 2.8 });
