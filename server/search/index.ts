@@ -18,7 +18,7 @@ import MiniSearch, { type SearchResult } from 'minisearch';
 import type { Logger } from 'pino';
 import { findEntryId, loadEntries, loadSynonyms, readWatermark, type LoadedEntry } from './load';
 import { fold, normaliseTerm } from './normalise';
-import { isConceptTerm, SynonymSet } from './synonyms';
+import { isConceptTerm, SynonymSet, tokensOf } from './synonyms';
 import type { IndexedEntry, SearchDoc, SearchHit, TermsHit, TermsSearchOptions } from './types';
 
 export { excerpt } from './excerpt';
@@ -332,23 +332,32 @@ export class SearchIndex {
     return out;
   }
 
-  /** Index term → the word the entry writes for it: the first written in lower case, else the first written at all. */
+  /**
+   * Index term → the word the entry writes for it: written in lower case if it ever is; else as
+   * written inside a sentence ("Carnot", "RF"); else, when only ever at the start of a sentence,
+   * a title or a name ("Overbalanced wheel"), in lower case.
+   */
   private writtenForms(id: number, terms: Set<string>): Map<string, string> {
     const doc = this.docs.get(id);
-    const found = new Map<string, string>();
-    if (!doc) return found;
-    const lower = new Set<string>();
+    const found = new Map<string, { word: string; rank: number }>();
+    if (!doc) return new Map();
+    let settled = 0;
     for (const field of FIELDS) {
-      for (const word of tokenize(fieldText(doc, field))) {
-        const t = normaliseTerm(word);
-        if (!t || !terms.has(t) || lower.has(t)) continue;
-        const isLower = word === word.toLowerCase();
-        if (isLower) lower.add(t);
-        if (isLower || !found.has(t)) found.set(t, word);
+      const text = fieldText(doc, field);
+      for (const { token, at } of tokensOf(text)) {
+        const t = normaliseTerm(token);
+        if (!t || !terms.has(t)) continue;
+        const had = found.get(t);
+        if (had?.rank === 0) continue;
+        const lower = token.toLowerCase();
+        // 0: in lower case; 1: capitals inside a sentence; 2: a capital at a sentence's start.
+        const rank = token === lower ? 0 : /^\p{Lu}\p{Ll}*$/u.test(token) && SENTENCE_START.test(text.slice(Math.max(0, at - 3), at)) ? 2 : 1;
+        if (!had || rank < had.rank) found.set(t, { word: rank === 2 ? lower : token, rank });
+        if (rank === 0) settled += 1;
       }
-      if (lower.size === terms.size) break;
+      if (settled === terms.size) break;
     }
-    return found;
+    return new Map([...found].map(([t, f]) => [t, f.word]));
   }
 
   private clearWordCache(): void {
@@ -451,6 +460,9 @@ function swapped(typed: string): string[] {
   }
   return [...out];
 }
+
+/** What comes before the first word of a sentence, a field or a list item (the text up to the word's last three characters). */
+const SENTENCE_START = /(?:^|[.!?:;·•\n]\s*|^\s+)$/u;
 
 /** One entry's match of one query word. */
 interface WordHit {
