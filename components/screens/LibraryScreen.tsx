@@ -15,7 +15,6 @@ import { useSearch } from '../queries/search';
 import { useTaxonomy } from '../queries/taxonomy';
 import { activeFilterCount, FilterPanel } from '../search/FilterPanel';
 import { SearchResults } from '../search/SearchResults';
-import { useDebounced } from '../ui/useDebounced';
 import { usePageTitle, SITE_NAME } from '../ui/usePageTitle';
 import { colors, focusRing, layout, radius, space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
@@ -104,7 +103,14 @@ export function LibraryScreen({
   const known = useRef<LibrarySearch>({ q: addressQ.trim(), ...start });
 
   const typed = query.trim().slice(0, MAX_QUERY);
-  const settled = useDebounced(typed, SEARCH_DEBOUNCE_MS);
+  // The query once the typing has rested (a search as you type without a request per key); a query
+  // that comes from the address is searched at once.
+  const [settled, setSettled] = useState(typed);
+  useEffect(() => {
+    if (typed === settled) return;
+    const timer = setTimeout(() => setSettled(typed), SEARCH_DEBOUNCE_MS);
+    return () => clearTimeout(timer);
+  }, [typed, settled]);
   const searching = settled !== '';
   const search = useSearch({ q: settled, law: filters.law, mechanism: filters.mechanism }, { enabled: searching });
   const results = searching ? (search.data?.results ?? []) : [];
@@ -119,6 +125,7 @@ export function LibraryScreen({
     if (addressQuery === undefined || addressQ.trim() === known.current.q) return;
     known.current = { ...known.current, q: addressQ.trim() };
     setQuery(addressQ);
+    setSettled(addressQ.trim());
   }, [addressQuery, addressQ]);
   const hasAddressFilters = addressFilters !== undefined;
   useEffect(() => {
@@ -129,7 +136,11 @@ export function LibraryScreen({
   }, [hasAddressFilters, addressLaw, addressMechanism]);
 
   // Once the typing rests, the address follows the field (replacing, not adding, a history entry).
+  // Only a new settled query is written: not the one on screen while the address changes under it.
+  const lastSettled = useRef(settled);
   useEffect(() => {
+    if (settled === lastSettled.current) return;
+    lastSettled.current = settled;
     if (settled !== typed || settled === known.current.q) return;
     known.current = { ...known.current, q: settled };
     onSearchChange?.({ q: settled, law: filters.law, mechanism: filters.mechanism }, 'replace');
@@ -182,42 +193,60 @@ export function LibraryScreen({
   );
   const narrowed = !wide && activeFilterCount(filters) > 0 && taxonomy ? <FiltersSet filters={filters} taxonomy={taxonomy} /> : null;
 
+  const list = searching ? (
+    <Section title="Results">
+      {narrowed}
+      <SearchResults
+        query={settled}
+        data={search.data}
+        error={search.error}
+        fetching={search.isFetching}
+        onRetry={() => void search.refetch()}
+        filters={filters}
+        onFiltersChange={changeFilters}
+        taxonomy={taxonomy}
+        highlighted={highlighted}
+        onSuggestion={setQuery}
+        showFilters={false}
+      />
+    </Section>
+  ) : (
+    <Section title="Recently revised">
+      {narrowed}
+      <EntryList
+        filters={filters}
+        onFiltersChange={changeFilters}
+        taxonomy={taxonomy}
+        pages={pages}
+        onMore={() => setPages((n) => n + 1)}
+        showFilters={false}
+      />
+    </Section>
+  );
+
   return (
     <Screen testID="screen-library" title="Library" lead={LEAD}>
-      <SearchField value={query} onChange={setQuery} onKeyPress={onKeyPress} keyboard={keyboard} />
-      {searching ? (
-        <Section title="Results">
-          {wide ? panel : narrowed}
-          <SearchResults
-            query={settled}
-            data={search.data}
-            error={search.error}
-            fetching={search.isFetching}
-            onRetry={() => void search.refetch()}
-            filters={filters}
-            onFiltersChange={changeFilters}
-            taxonomy={taxonomy}
-            highlighted={highlighted}
-            onSuggestion={setQuery}
-            showFilters={false}
-          />
-          {wide ? null : panel}
-        </Section>
+      <View style={styles.reading}>
+        <SearchField value={query} onChange={setQuery} onKeyPress={onKeyPress} keyboard={keyboard} />
+      </View>
+      {wide ? (
+        <View style={styles.columns}>
+          <View style={styles.listColumn}>{list}</View>
+          {taxonomy ? (
+            <View style={styles.filterColumn}>
+              <Section title="Filters">{panel}</Section>
+            </View>
+          ) : null}
+        </View>
       ) : (
-        <Section title="Recently revised">
-          {wide ? panel : narrowed}
-          <EntryList
-            filters={filters}
-            onFiltersChange={changeFilters}
-            taxonomy={taxonomy}
-            pages={pages}
-            onMore={() => setPages((n) => n + 1)}
-            showFilters={false}
-          />
-          {wide ? null : panel}
-        </Section>
+        <>
+          {list}
+          {panel}
+        </>
       )}
-      <Taxonomy />
+      <View style={styles.reading}>
+        <Taxonomy />
+      </View>
     </Screen>
   );
 }
@@ -374,6 +403,10 @@ function ClassNode({ node, all, depth }: { node: MechanismClassDto; all: Mechani
 }
 
 const styles = StyleSheet.create({
+  reading: { maxWidth: layout.contentMaxWidth, gap: space.md },
+  columns: { flexDirection: 'row', alignItems: 'flex-start', gap: space.xl },
+  listColumn: { flex: 1, minWidth: 0, maxWidth: layout.contentMaxWidth },
+  filterColumn: { width: 340, flexShrink: 0 },
   search: { gap: space.xs, marginTop: space.sm },
   input: {
     ...type.ui,
