@@ -129,6 +129,11 @@ describe.each([
       expect(await byTestId(page, 'search-count').textContent()).toBe('0 entries');
       expect(await byTestId(page, 'search-results').count()).toBe(0);
     }
+    // An emptied field takes the query out of the address and brings back the recent entries.
+    await byTestId(page, 'library-search').fill('');
+    await until('the address has no query', async () => !param(page, 'q'));
+    await byTestId(page, 'entry-list').waitFor();
+    expect(await page.title()).toBe('Library — Counterweight');
   });
 });
 
