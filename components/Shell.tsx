@@ -17,8 +17,8 @@ export function Shell({ children }: { children: ReactNode }) {
   const insets = useSafeAreaInsets();
   const pathname = usePathname();
   const wide = width >= layout.wideMinWidth;
-  // Entry pages and the Desk put a second column beside the text on a wide screen.
-  const twoColumn = wide && /^\/(entries|desk)(\/|$)/.test(pathname ?? '');
+  // Entry pages, the Desk and the Library (its filters) put a second column beside the text on a wide screen.
+  const twoColumn = wide && (/^\/(entries|desk)(\/|$)/.test(pathname ?? '') || pathname === '/');
 
   const page = (
     <ScrollView style={styles.scroll} contentContainerStyle={[styles.scrollContent, wide && styles.scrollContentWide]}>

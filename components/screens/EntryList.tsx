@@ -26,10 +26,12 @@ interface EntryListProps {
   taxonomy?: TaxonomyResponse;
   pages: number;
   onMore: () => void;
+  /** The law and class chips above the list (default); false when the screen places them itself. */
+  showFilters?: boolean;
 }
 
 /** Published entries, most recently revised first, with chips to narrow them by law and by class. */
-export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore }: EntryListProps) {
+export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore, showFilters = true }: EntryListProps) {
   const { data, error, isPending, isFetching, refetch } = useEntryList({ ...filters, limit: PAGE * pages });
   const lawName = (slug: string) => taxonomy?.laws.find((l) => l.slug === slug)?.name ?? slug;
   const className = (slug: string | null) => (slug === null ? '' : (taxonomy?.classes.find((c) => c.slug === slug)?.name ?? slug));
@@ -37,13 +39,13 @@ export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore }:
 
   return (
     <View style={styles.root}>
-      <FilterChips taxonomy={taxonomy} filters={filters} onChange={onFiltersChange} />
+      {showFilters ? <FilterChips taxonomy={taxonomy} filters={filters} onChange={onFiltersChange} /> : null}
       {isPending ? <Loading testID="entries-loading" label="Loading the published entries…" /> : null}
       {error ? <ErrorNotice testID="entries-error" error={error} what="the published entries" onRetry={() => void refetch()} /> : null}
       {data && data.entries.length === 0 ? (
         filtered ? (
           <Notice tone="empty" testID="entries-none" title="No published entry matches these filters.">
-            Choose “Any” for the law or the class to see more.
+            Choose “Any” for the law or the class under Filters to see more.
           </Notice>
         ) : (
           <Notice tone="empty" testID="recent-empty" title="No entries are published yet.">

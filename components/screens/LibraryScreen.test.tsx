@@ -1,8 +1,9 @@
-import { fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { useState } from 'react';
 import type { TaxonomyResponse } from '@/shared/api-types';
 import type { SearchResponse } from '@/shared/api-types';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
-import { LibraryScreen } from './LibraryScreen';
+import { LibraryScreen, type LibrarySearch } from './LibraryScreen';
 
 jest.mock('expo-router', () => require('../testing/expoRouter'));
 
@@ -147,6 +148,9 @@ describe('LibraryScreen', () => {
     expect(row.querySelector('em')!.textContent).toBe('shuttling weights');
     expect(await within(row).findByText('Conservation of linear momentum · Thrust from masses moving inside')).toBeTruthy();
 
+    // On a phone the filters are folded behind one button below the list.
+    expect(screen.queryByTestId('filter-law-energy')).toBeNull();
+    fireEvent.click(screen.getByTestId('filters-toggle'));
     fireEvent.click(screen.getByTestId('filter-law-energy'));
     await waitFor(() => expect(screen.queryByTestId('entry-shuttling-weights')).toBeNull());
     expect(screen.getByTestId('entry-wheel-of-weights')).toBeTruthy();
@@ -159,12 +163,13 @@ describe('LibraryScreen', () => {
   });
 
   describe('search', () => {
-    const hit = (slug: string, title: string, excerpt: string, terms: string[], laws = ['linear-momentum'], mechanismClass = 'internal-mass-motion') => ({
+    const hit = (slug: string, title: string, excerpt: string, terms: string[], matched: string[], laws = ['linear-momentum'], mechanismClass = 'internal-mass-motion') => ({
       slug,
       title,
       version: 2,
       score: 12.5,
       terms,
+      matched,
       excerpt,
       laws,
       mechanismClass,
@@ -175,8 +180,9 @@ describe('LibraryScreen', () => {
       'Shuttling weights',
       'Weights <mark>shuttled</mark> inside a sealed &amp; rigid <mark>frame</mark> cannot move its centre of mass &lt;at all&gt;.',
       ['shuttl', 'frame'],
+      ['shuttling', 'frame'],
     );
-    const wheel = hit('wheel-of-weights', 'A wheel of weights', 'A <mark>wheel</mark> of weights that turns forever.', ['wheel'], ['energy'], 'over-unity');
+    const wheel = hit('wheel-of-weights', 'A wheel of weights', 'A <mark>wheel</mark> of weights that turns forever.', ['wheel'], ['wheel'], ['energy'], 'over-unity');
     const answer = (query: string, results: ReturnType<typeof hit>[], facets: SearchResponse['facets'] = { laws: { 'linear-momentum': 1, energy: 1 }, mechanisms: { 'internal-mass-motion': 1, 'over-unity': 1 } }) =>
       jsonResponse(200, { query, total: results.length, results, facets });
     const base = { '/api/taxonomy': () => jsonResponse(200, taxonomy), '/api/entries?limit=20': () => jsonResponse(200, { entries: allEntries, total: 2 }) };
@@ -207,8 +213,11 @@ describe('LibraryScreen', () => {
         'Weights shuttled inside a sealed & rigid frame cannot move its centre of mass <at all>.',
       );
       expect(row.querySelector('mark, script')).toBeNull();
-      expect(row.textContent).toContain('Matched: shuttl, frame');
+      // The reader's words, never the index's stems.
+      expect(row.textContent).toContain('Matched: shuttling, frame');
+      expect(row.textContent).not.toContain('shuttl,');
       expect(await within(row).findByText('Conservation of linear momentum · Thrust from masses moving inside')).toBeTruthy();
+      fireEvent.click(screen.getByTestId('filters-toggle'));
       expect(screen.getByTestId('filter-law-energy').textContent).toBe('Conservation of energy (first law) (1)');
       expect(screen.getByTestId('filter-law-entropy').textContent).toBe('Second law of thermodynamics (0)');
 
@@ -249,6 +258,7 @@ describe('LibraryScreen', () => {
       fireEvent.change(screen.getByTestId('library-search'), { target: { value: 'weights' } });
       expect((await screen.findByTestId('search-count')).textContent).toBe('2 entries');
 
+      fireEvent.click(screen.getByTestId('filters-toggle'));
       fireEvent.click(screen.getByTestId('filter-law-energy'));
       await waitFor(() => expect(screen.getByTestId('search-count').textContent).toBe('1 entry'));
       expect(screen.queryByTestId('search-result-shuttling-weights')).toBeNull();
@@ -299,6 +309,111 @@ describe('LibraryScreen', () => {
       expect(selected()).toEqual(['shuttling-weights']);
       fireEvent.keyDown(input, { key: 'Enter' });
       expect(onOpenEntry).toHaveBeenCalledWith('shuttling-weights');
+    });
+    /** The screen as the route renders it: the address in state, written back as expo-router would. */
+    function Routed({ start, onSearchChange }: { start: LibrarySearch; onSearchChange: jest.Mock }) {
+      const [address, setAddress] = useState(start);
+      navigate = setAddress;
+      return (
+        <LibraryScreen
+          query={address.q}
+          filters={{ law: address.law, mechanism: address.mechanism }}
+          onSearchChange={(search, how) => {
+            onSearchChange(search, how);
+            setAddress(search);
+          }}
+        />
+      );
+    }
+    let navigate: (address: LibrarySearch) => void = () => undefined;
+
+    it('starts from the address, writes the settled query back once by replacing, and names it in the page title', async () => {
+      const fetchMock = mockFetch({
+        ...base,
+        '/api/search?q=wheel': () => answer('wheel', [wheel]),
+        '/api/search?q=wheel+weights': () => answer('wheel weights', [wheel, shuttle]),
+      });
+      const onSearchChange = jest.fn();
+      renderWithProviders(<Routed start={{ q: 'wheel' }} onSearchChange={onSearchChange} />);
+      expect((screen.getByTestId('library-search') as HTMLInputElement).value).toBe('wheel');
+      expect(await screen.findByTestId('search-result-wheel-of-weights')).toBeTruthy();
+      expect(document.title).toBe('“wheel” — Library — Counterweight');
+      // Loading the address writes nothing back.
+      expect(onSearchChange).not.toHaveBeenCalled();
+
+      const input = screen.getByTestId('library-search');
+      fireEvent.change(input, { target: { value: 'wheel w' } });
+      fireEvent.change(input, { target: { value: 'wheel weights' } });
+      expect(await screen.findByTestId('search-result-shuttling-weights')).toBeTruthy();
+      expect(onSearchChange.mock.calls).toEqual([[{ q: 'wheel weights', law: undefined, mechanism: undefined }, 'replace']]);
+      expect(searchCalls(fetchMock)).toEqual(['/api/search?q=wheel', '/api/search?q=wheel+weights']);
+      await waitFor(() => expect(document.title).toBe('“wheel weights” — Library — Counterweight'));
+    });
+
+    it('follows the address when it changes from outside (Back, Forward), without writing it back', async () => {
+      mockFetch({
+        ...base,
+        '/api/search?q=weights': () => answer('weights', [shuttle, wheel]),
+        '/api/search?q=wheel&law=energy': () => answer('wheel', [wheel]),
+      });
+      const onSearchChange = jest.fn();
+      renderWithProviders(<Routed start={{ q: 'weights' }} onSearchChange={onSearchChange} />);
+      expect((await screen.findByTestId('search-count')).textContent).toBe('2 entries');
+
+      act(() => navigate({ q: 'wheel', law: 'energy' }));
+      expect((screen.getByTestId('library-search') as HTMLInputElement).value).toBe('wheel');
+      await waitFor(() => expect(screen.getByTestId('search-count').textContent).toBe('1 entry'));
+      expect(screen.getByTestId('filters-set').textContent).toContain('Conservation of energy (first law)');
+      expect(screen.getByTestId('filters-toggle').textContent).toContain('Filters (1 set)');
+
+      act(() => navigate({ q: '' }));
+      expect(await screen.findByTestId('entry-list')).toBeTruthy();
+      expect((screen.getByTestId('library-search') as HTMLInputElement).value).toBe('');
+      expect(document.title).toBe('Library — Counterweight');
+      expect(onSearchChange.mock.calls).toEqual([]);
+    });
+
+    it('adds a history entry when a filter is chosen, with the query as typed', async () => {
+      mockFetch({
+        ...base,
+        '/api/search?q=weights': () => answer('weights', [shuttle, wheel]),
+        '/api/search?q=weights&mechanism=over-unity': () => answer('weights', [wheel]),
+      });
+      const onSearchChange = jest.fn();
+      renderWithProviders(<Routed start={{ q: 'weights' }} onSearchChange={onSearchChange} />);
+      await screen.findByTestId('search-result-shuttling-weights');
+      fireEvent.click(screen.getByTestId('filters-toggle'));
+      fireEvent.click(screen.getByTestId('filter-mechanism-over-unity'));
+      await waitFor(() => expect(screen.queryByTestId('search-result-shuttling-weights')).toBeNull());
+      expect(onSearchChange.mock.calls).toEqual([[{ q: 'weights', law: undefined, mechanism: 'over-unity' }, 'push']]);
+    });
+
+    it('on a phone lists the results before the filters, folded behind one button that says how many are set', async () => {
+      mockFetch({ ...base, '/api/search?q=weights&law=energy': () => answer('weights', [wheel]) });
+      renderWithProviders(<LibraryScreen query="weights" filters={{ law: 'energy' }} />);
+      const result = await screen.findByTestId('search-result-wheel-of-weights');
+      const toggle = screen.getByTestId('filters-toggle');
+      expect(toggle.getAttribute('aria-expanded')).toBe('false');
+      expect(toggle.getAttribute('aria-label')).toBe('Filters, 1 set');
+      expect(screen.queryByTestId('filter-chips')).toBeNull();
+      // In document order the results come first.
+      expect(result.compareDocumentPosition(toggle) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
+
+      fireEvent.click(toggle);
+      expect(toggle.getAttribute('aria-expanded')).toBe('true');
+      const chips = screen.getByTestId('filter-chips');
+      expect(toggle.getAttribute('aria-controls')).toBe(chips.id);
+      expect(within(chips).getByTestId('filter-law-energy').getAttribute('aria-checked')).toBe('true');
+    });
+
+    it('on a wide screen keeps the filters in view beside the results, with no button', async () => {
+      setWindowWidth(1280);
+      mockFetch({ ...base, '/api/search?q=weights': () => answer('weights', [shuttle, wheel]) });
+      renderWithProviders(<LibraryScreen query="weights" />);
+      await screen.findByTestId('search-result-wheel-of-weights');
+      expect(screen.queryByTestId('filters-toggle')).toBeNull();
+      expect(screen.getByTestId('filter-law-energy').textContent).toBe('Conservation of energy (first law) (1)');
+      expect(screen.queryByTestId('filters-set')).toBeNull();
     });
   });
 });

@@ -1,5 +1,5 @@
 import { router } from 'expo-router';
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import {
   Platform,
   StyleSheet,
@@ -10,11 +10,12 @@ import {
   type NativeSyntheticEvent,
   type TextInputKeyPressEventData,
 } from 'react-native';
-import type { ConservationLawDto, MechanismClassDto } from '@/shared/api-types';
+import type { ConservationLawDto, MechanismClassDto, TaxonomyResponse } from '@/shared/api-types';
 import { useSearch } from '../queries/search';
 import { useTaxonomy } from '../queries/taxonomy';
+import { activeFilterCount, FilterPanel } from '../search/FilterPanel';
 import { SearchResults } from '../search/SearchResults';
-import { useDebounced } from '../ui/useDebounced';
+import { usePageTitle, SITE_NAME } from '../ui/usePageTitle';
 import { colors, focusRing, layout, radius, space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
@@ -22,9 +23,27 @@ import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { EntryList, type EntryFilters } from './EntryList';
 
+/** A Library search as the address holds it. */
+export interface LibrarySearch extends EntryFilters {
+  q: string;
+}
+
 interface LibraryScreenProps {
-  /** Filters to start from, e.g. from the address (`/?law=energy`). */
+  /**
+   * The query from the address (`/?q=…`). The field starts from it, and follows it when it changes
+   * from outside (Back, Forward, a link followed).
+   */
+  query?: string;
+  /** The filters from the address (`/?law=…&mechanism=…`), followed likewise. */
+  filters?: EntryFilters;
+  /** Filters to start from when the screen is given no `filters`. */
   initialFilters?: EntryFilters;
+  /**
+   * Called when the reader changes the search: with `replace` once the typing rests (the address
+   * follows the field without a history entry per key), with `push` when a filter is chosen (a new
+   * history entry, so Back returns to the search before it).
+   */
+  onSearchChange?: (search: LibrarySearch, how: 'replace' | 'push') => void;
   /** Called with the filters each time the reader changes them. */
   onFiltersChange?: (filters: EntryFilters) => void;
   /** Opens an entry from the keyboard (Enter on the highlighted result); by default the app's router. */
@@ -34,33 +53,116 @@ interface LibraryScreenProps {
 /** How long the query must rest before it is sent. */
 export const SEARCH_DEBOUNCE_MS = 200;
 
+const LEAD = 'The standard objections to impossible-machine claims: each written once, checked by a second expert, versioned and citable.';
+
 const openWithRouter = (slug: string) => router.push(`/entries/${slug}`);
+
+const searchKey = (s: LibrarySearch) => JSON.stringify([s.q, s.law ?? null, s.mechanism ?? null]);
+
+/**
+ * A new history entry shows the Library afresh. What the reader had open (the filters on a phone)
+ * and where the keyboard was (the chip just chosen) are carried over to the screen of the search
+ * they chose, and to no other.
+ */
+let carried: { key: string; filtersOpen: boolean; focus?: string } | null = null;
+
+function takeCarried(search: LibrarySearch) {
+  const found = carried?.key === searchKey(search) ? carried : null;
+  carried = null;
+  return found;
+}
 
 /**
  * The home: search as you type (ranked results, narrowed by law and class), what was revised lately
- * while the query is empty, and the taxonomy to browse by.
+ * while the query is empty, and the taxonomy to browse by. On a phone the results come first and the
+ * filters fold away behind one button below them; on a wide screen the filters stay in view above.
  */
-export function LibraryScreen({ initialFilters = {}, onFiltersChange, onOpenEntry = openWithRouter }: LibraryScreenProps) {
-  const [filters, setFilters] = useState(initialFilters);
+export function LibraryScreen({
+  query: addressQuery,
+  filters: addressFilters,
+  initialFilters = {},
+  onSearchChange,
+  onFiltersChange,
+  onOpenEntry = openWithRouter,
+}: LibraryScreenProps) {
+  const addressQ = (addressQuery ?? '').slice(0, MAX_QUERY);
+  const addressLaw = addressFilters?.law || undefined;
+  const addressMechanism = addressFilters?.mechanism || undefined;
+  const start = addressFilters ? { law: addressLaw, mechanism: addressMechanism } : initialFilters;
+  const [carry] = useState(() => takeCarried({ q: addressQ.trim(), ...start }));
+  const [filters, setFilters] = useState<EntryFilters>(start);
   const [pages, setPages] = useState(1);
-  const [query, setQuery] = useState('');
+  const [query, setQuery] = useState(addressQ);
   const [highlighted, setHighlighted] = useState(-1);
+  const [filtersOpen, setFiltersOpen] = useState(carry?.filtersOpen ?? false);
   const { width } = useWindowDimensions();
-  const keyboard = Platform.OS === 'web' && width >= layout.wideMinWidth;
+  const wide = width >= layout.wideMinWidth;
+  const keyboard = Platform.OS === 'web' && wide;
   const { data: taxonomy } = useTaxonomy();
+  /** The search as the address holds it, as far as this screen knows (what it sent, or what came in). */
+  const known = useRef<LibrarySearch>({ q: addressQ.trim(), ...start });
 
-  const settled = useDebounced(query.trim().slice(0, MAX_QUERY), SEARCH_DEBOUNCE_MS);
+  const typed = query.trim().slice(0, MAX_QUERY);
+  // The query once the typing has rested (a search as you type without a request per key); a query
+  // that comes from the address is searched at once.
+  const [settled, setSettled] = useState(typed);
+  useEffect(() => {
+    if (typed === settled) return;
+    const timer = setTimeout(() => setSettled(typed), SEARCH_DEBOUNCE_MS);
+    return () => clearTimeout(timer);
+  }, [typed, settled]);
   const searching = settled !== '';
   const search = useSearch({ q: settled, law: filters.law, mechanism: filters.mechanism }, { enabled: searching });
   const results = searching ? (search.data?.results ?? []) : [];
 
+  usePageTitle(settled ? `“${settled}” — Library — ${SITE_NAME}` : `Library — ${SITE_NAME}`, LEAD);
+
   // A new query or new filters start the keyboard from the field again.
   useEffect(() => setHighlighted(-1), [settled, filters.law, filters.mechanism]);
 
+  // The address changed from outside (Back, Forward, a link): the field and the filters follow it.
+  useEffect(() => {
+    if (addressQuery === undefined || addressQ.trim() === known.current.q) return;
+    known.current = { ...known.current, q: addressQ.trim() };
+    setQuery(addressQ);
+    setSettled(addressQ.trim());
+  }, [addressQuery, addressQ]);
+  const hasAddressFilters = addressFilters !== undefined;
+  useEffect(() => {
+    if (!hasAddressFilters || (addressLaw === known.current.law && addressMechanism === known.current.mechanism)) return;
+    known.current = { ...known.current, law: addressLaw, mechanism: addressMechanism };
+    setFilters({ law: addressLaw, mechanism: addressMechanism });
+    setPages(1);
+  }, [hasAddressFilters, addressLaw, addressMechanism]);
+
+  // Once the typing rests, the address follows the field (replacing, not adding, a history entry).
+  // Only a new settled query is written: not the one on screen while the address changes under it.
+  const lastSettled = useRef(settled);
+  useEffect(() => {
+    if (settled === lastSettled.current) return;
+    lastSettled.current = settled;
+    if (settled !== typed || settled === known.current.q) return;
+    known.current = { ...known.current, q: settled };
+    onSearchChange?.({ q: settled, law: filters.law, mechanism: filters.mechanism }, 'replace');
+  }, [settled, typed, filters.law, filters.mechanism, onSearchChange]);
+
+  // After a filter was chosen on the screen before this one, the keyboard stays on that chip.
+  useEffect(() => {
+    if (!carry?.focus || Platform.OS !== 'web' || typeof document === 'undefined') return;
+    const frame = requestAnimationFrame(() => document.querySelector<HTMLElement>(`[data-testid="${carry.focus}"]`)?.focus());
+    return () => cancelAnimationFrame(frame);
+  }, [carry]);
+
   const changeFilters = (next: EntryFilters) => {
+    const focus =
+      next.law !== filters.law ? `filter-law-${next.law ?? 'any'}` : next.mechanism !== filters.mechanism ? `filter-mechanism-${next.mechanism ?? 'any'}` : undefined;
     setFilters(next);
     setPages(1);
     onFiltersChange?.(next);
+    const change = { q: typed, law: next.law, mechanism: next.mechanism };
+    known.current = change;
+    carried = { key: searchKey(change), filtersOpen, focus };
+    onSearchChange?.(change, 'push');
   };
 
   const onKeyPress = (event: NativeSyntheticEvent<TextInputKeyPressEventData>) => {
@@ -78,41 +180,87 @@ export function LibraryScreen({ initialFilters = {}, onFiltersChange, onOpenEntr
     }
   };
 
+  const panel = (
+    <FilterPanel
+      taxonomy={taxonomy}
+      filters={filters}
+      onChange={changeFilters}
+      counts={searching ? search.data?.facets : undefined}
+      collapsible={!wide}
+      open={filtersOpen}
+      onOpenChange={setFiltersOpen}
+    />
+  );
+  const narrowed = !wide && activeFilterCount(filters) > 0 && taxonomy ? <FiltersSet filters={filters} taxonomy={taxonomy} /> : null;
+
+  const list = searching ? (
+    <Section title="Results">
+      {narrowed}
+      <SearchResults
+        query={settled}
+        data={search.data}
+        error={search.error}
+        fetching={search.isFetching}
+        onRetry={() => void search.refetch()}
+        filters={filters}
+        onFiltersChange={changeFilters}
+        taxonomy={taxonomy}
+        highlighted={highlighted}
+        onSuggestion={setQuery}
+        showFilters={false}
+      />
+    </Section>
+  ) : (
+    <Section title="Recently revised">
+      {narrowed}
+      <EntryList
+        filters={filters}
+        onFiltersChange={changeFilters}
+        taxonomy={taxonomy}
+        pages={pages}
+        onMore={() => setPages((n) => n + 1)}
+        showFilters={false}
+      />
+    </Section>
+  );
+
   return (
-    <Screen
-      testID="screen-library"
-      title="Library"
-      lead="The standard objections to impossible-machine claims: each written once, checked by a second expert, versioned and citable."
-    >
-      <SearchField value={query} onChange={setQuery} onKeyPress={onKeyPress} keyboard={keyboard} />
-      {searching ? (
-        <Section title="Results">
-          <SearchResults
-            query={settled}
-            data={search.data}
-            error={search.error}
-            fetching={search.isFetching}
-            onRetry={() => void search.refetch()}
-            filters={filters}
-            onFiltersChange={changeFilters}
-            taxonomy={taxonomy}
-            highlighted={highlighted}
-            onSuggestion={setQuery}
-          />
-        </Section>
+    <Screen testID="screen-library" title="Library" lead={LEAD}>
+      <View style={styles.reading}>
+        <SearchField value={query} onChange={setQuery} onKeyPress={onKeyPress} keyboard={keyboard} />
+      </View>
+      {wide ? (
+        <View style={styles.columns}>
+          <View style={styles.listColumn}>{list}</View>
+          {taxonomy ? (
+            <View style={styles.filterColumn}>
+              <Section title="Filters">{panel}</Section>
+            </View>
+          ) : null}
+        </View>
       ) : (
-        <Section title="Recently revised">
-          <EntryList
-            filters={filters}
-            onFiltersChange={changeFilters}
-            taxonomy={taxonomy}
-            pages={pages}
-            onMore={() => setPages((n) => n + 1)}
-          />
-        </Section>
+        <>
+          {list}
+          {panel}
+        </>
       )}
-      <Taxonomy />
+      <View style={styles.reading}>
+        <Taxonomy />
+      </View>
     </Screen>
+  );
+}
+
+/** On a phone, above the results: which filters narrow them (the filters themselves are below). */
+function FiltersSet({ filters, taxonomy }: { filters: EntryFilters; taxonomy: TaxonomyResponse }) {
+  const names = [
+    filters.law ? (taxonomy.laws.find((l) => l.slug === filters.law)?.name ?? filters.law) : null,
+    filters.mechanism ? (taxonomy.classes.find((c) => c.slug === filters.mechanism)?.name ?? filters.mechanism) : null,
+  ].filter(Boolean);
+  return (
+    <Text testID="filters-set" style={type.caption}>
+      Narrowed to {names.join(' and ')}; change it under Filters, below the list.
+    </Text>
   );
 }
 
@@ -255,6 +403,10 @@ function ClassNode({ node, all, depth }: { node: MechanismClassDto; all: Mechani
 }
 
 const styles = StyleSheet.create({
+  reading: { maxWidth: layout.contentMaxWidth, gap: space.md },
+  columns: { flexDirection: 'row', alignItems: 'flex-start', gap: space.xl },
+  listColumn: { flex: 1, minWidth: 0, maxWidth: layout.contentMaxWidth },
+  filterColumn: { width: 340, flexShrink: 0 },
   search: { gap: space.xs, marginTop: space.sm },
   input: {
     ...type.ui,

@@ -26,6 +26,8 @@ interface SearchResultsProps {
   /** The result the keyboard is on, or -1. */
   highlighted: number;
   onSuggestion: (query: string) => void;
+  /** The law and class chips above the results (default); false when the screen places them itself. */
+  showFilters?: boolean;
 }
 
 /** Ranked results of a query: chips with facet counts, the count, each result with its excerpt and matched terms. */
@@ -37,7 +39,7 @@ export function SearchResults(props: SearchResultsProps) {
 
   return (
     <View style={styles.root} aria-busy={fetching || undefined}>
-      <FilterChips taxonomy={taxonomy} filters={filters} onChange={props.onFiltersChange} counts={data?.facets} />
+      {props.showFilters !== false ? <FilterChips taxonomy={taxonomy} filters={filters} onChange={props.onFiltersChange} counts={data?.facets} /> : null}
       {!data && !error ? <Loading testID="search-loading" label="Searching the library…" /> : null}
       {error ? <ErrorNotice testID="search-error" error={error} what="the search results" onRetry={props.onRetry} /> : null}
       {data ? (
@@ -50,7 +52,7 @@ export function SearchResults(props: SearchResultsProps) {
           {data.results.length === 0 ? (
             <View testID="search-empty" style={styles.empty}>
               <Notice tone="empty" title={`Nothing in the library matches “${data.query || props.query}”${filtered ? ' with these filters' : ''}.`}>
-                {filtered ? 'Choose “Any” for the law or the class, or try' : 'Try other words: the device, what it is said to do, or'} one
+                {filtered ? 'Choose “Any” for the law or the class under Filters, or try' : 'Try other words: the device, what it is said to do, or'} one
                 of these:
               </Notice>
               <View style={styles.suggestions}>
@@ -105,9 +107,9 @@ function ResultRow(props: {
       <Text style={type.caption}>
         {result.laws.map(props.lawName).join(' · ')} · {props.className(result.mechanismClass)}
       </Text>
-      {result.terms.length > 0 ? (
+      {result.matched.length > 0 ? (
         <Text testID={`search-terms-${result.slug}`} style={type.small}>
-          Matched: <Text style={type.mono}>{result.terms.join(', ')}</Text>
+          Matched: <Text style={type.mono}>{result.matched.join(', ')}</Text>
         </Text>
       ) : null}
     </View>

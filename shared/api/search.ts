@@ -19,8 +19,13 @@ export interface SearchResult {
   title: string;
   version: number;
   score: number;
-  /** The index terms that matched (normalised, so possibly stems: "microwav"). */
+  /** The index terms that matched (normalised, so possibly stems: "microwav"); for programs, not for readers. */
   terms: string[];
+  /**
+   * The same matches as a reader reads them, never stems: each as the query typed it ("thrusters"),
+   * else as the entry writes it ("microwave" for the prefix "microw" or the slip "microwve").
+   */
+  matched: string[];
   /** Plain text, HTML-escaped, with the matched words wrapped in `<mark>…</mark>`. */
   excerpt: string;
   laws: string[];
@@ -35,6 +40,9 @@ export interface SearchResponse {
   query: string;
   total: number;
   results: SearchResult[];
-  /** Counts over the results of q, each ignoring its own facet's filter. */
+  /**
+   * Counts over the results of q, each ignoring its own facet's filter. A mechanism class counts its
+   * own entries and those of every class below it, as filtering by it lists them all.
+   */
   facets: { laws: Record<string, number>; mechanisms: Record<string, number> };
 }

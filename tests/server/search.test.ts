@@ -44,6 +44,8 @@ describe('ranking (invented test queries)', () => {
       version: 1,
       score: expect.any(Number),
       terms: expect.arrayContaining(['cavity', 'microwav']),
+      // The reader's own words, as typed (both normalise to a matched term).
+      matched: expect.arrayContaining(['microwave', 'cavity']),
       excerpt: expect.stringContaining('<mark>'),
       laws: ['linear-momentum', 'energy'],
       mechanismClass: 'enclosed-radiation',
@@ -74,13 +76,32 @@ describe('filters and facets', () => {
     // The law facet with a law chosen still counts every law (its own filter ignored) …
     expect(entropy.body.facets.laws).toEqual(all.body.facets.laws);
     // … while the mechanism facet counts only entries under that law.
-    const sum = (o: Record<string, number>) => Object.values(o).reduce((a, b) => a + b, 0);
-    expect(sum(entropy.body.facets.mechanisms)).toBe(entropy.body.total);
+    // (A class counts the entries of its children too: summed over the top classes, each entry once.)
+    const tax = (await (await h.client()).get('/api/taxonomy')).body as { classes: { slug: string; parentSlug: string | null }[] };
+    const tops = tax.classes.filter((c) => c.parentSlug === null).map((c) => c.slug);
+    const sumTops = (o: Record<string, number>) => tops.reduce((a, slug) => a + (o[slug] ?? 0), 0);
+    expect(sumTops(entropy.body.facets.mechanisms)).toBe(entropy.body.total);
 
     const parent = await search({ q: '', mechanism: 'propellant-free-thrust', limit: 50 });
     expect(parent.body.results.map((r: { slug: string }) => r.slug)).toContain('resonant-cavity-thruster');
     expect(parent.body.results.every((r: { mechanismClass: string }) => r.mechanismClass !== 'overbalanced-wheel')).toBe(true);
     expect(parent.body.facets.mechanisms).toEqual(all.body.facets.mechanisms);
+  });
+
+  it.each(['', 'energy', 'thrust'])('counts a parent class with its children, as its filter lists them (q = "%s")', async (q) => {
+    const tax = (await (await h.client()).get('/api/taxonomy')).body as { classes: { slug: string; parentSlug: string | null }[] };
+    const parents = tax.classes.filter((c) => tax.classes.some((d) => d.parentSlug === c.slug));
+    expect(parents.length).toBeGreaterThan(0);
+    const all = await search({ q, limit: 50 });
+    // Every class's chip count is the total that choosing it gives.
+    for (const c of tax.classes) {
+      const chosen = await search({ q, mechanism: c.slug, limit: 50 });
+      expect([c.slug, all.body.facets.mechanisms[c.slug] ?? 0]).toEqual([c.slug, chosen.body.total]);
+    }
+    // A parent holds more than its own entries whenever a child has some.
+    const own = (slug: string) => all.body.results.filter((r: { mechanismClass: string }) => r.mechanismClass === slug).length;
+    const grown = parents.filter((p) => (all.body.facets.mechanisms[p.slug] ?? 0) > own(p.slug));
+    if (q === '') expect(grown.map((p) => p.slug)).toContain('propellant-free-thrust');
   });
 
   it('pages with limit and offset', async () => {
@@ -89,6 +110,64 @@ describe('filters and facets', () => {
     expect(first.body.results).toHaveLength(2);
     expect(second.body.results[0].slug).not.toBe(first.body.results[0].slug);
     expect(second.body.total).toBe(first.body.total);
+  });
+});
+
+describe('what counts as a match', () => {
+  // Invented strings: keyboard runs, filler text, letters at random (from memory, no source).
+  it.each(['xq zz', 'ab', 'zz', 'asdf qwerty', 'qwertyuiop', 'lorem ipsum dolor', 'hello world', 'pqrst', 'xkcdq vbnmz', 'mnbvcx lkjhgf', 'the of and'])(
+    'answers "%s" with nothing, not with stray fragments or far-fetched typos',
+    async (q) => {
+      const res = await search({ q });
+      expect(res.status).toBe(200);
+      expect({ q, total: res.body.total, results: res.body.results }).toEqual({ q, total: 0, results: [] });
+    },
+  );
+
+  it.each([
+    // Two- and one-letter terms of the synonym table (content/synonyms.yml) and a three-letter one.
+    ['RF', 'resonant-cavity-thruster'],
+    ['rf', 'resonant-cavity-thruster'],
+    ['Q factor', 'resonant-cavity-thruster'],
+    ['COP', 'efficiency-above-100-percent'],
+  ])('still finds the short term "%s" (%s)', async (q, slug) => {
+    const res = await search({ q });
+    expect(res.body.results.map((r: { slug: string }) => r.slug)).toContain(slug);
+    for (const r of res.body.results) expect(r.matched.map((w: string) => w.toLowerCase())).toEqual(expect.arrayContaining(q.toLowerCase().split(' ')));
+  });
+
+  it('forgives two letters typed the wrong way round, as one slip', async () => {
+    const res = await search({ q: 'wehel' });
+    expect(res.body.results.map((r: { slug: string }) => r.slug)).toContain('overbalanced-wheel');
+  });
+
+  it.each([
+    ['microwve cavty', ['microwve', 'cavty']],
+    ['cavity microw', ['cavity', 'microw']],
+    ['thrusters', ['thrusters']],
+    ['overbalansed wheal', ['overbalansed', 'wheal']],
+  ])('shows readers the words they typed or the entry writes, never stems ("%s")', async (q, typed) => {
+    const res = await search({ q, limit: 50 });
+    expect(res.body.total).toBeGreaterThan(0);
+    const c = await h.client();
+    const tax = (await c.get('/api/taxonomy')).body as { laws: { name: string }[]; classes: { name: string }[] };
+    const names = JSON.stringify([...tax.laws, ...tax.classes].map((t) => t.name));
+    for (const r of res.body.results as { slug: string; terms: string[]; matched: string[] }[]) {
+      const entry = (await c.get(`/api/entries/${r.slug}`)).body;
+      const text = JSON.stringify(entry) + names;
+      expect(r.matched.length).toBeGreaterThan(0);
+      for (const word of r.matched) {
+        // Each shown word is a match of the index …
+        expect(r.terms).toContain(normaliseTerm(word));
+        // … and either typed by the reader or written so in the entry, its class or its laws (a
+        // capital that only starts a sentence or a name dropped: "Overbalanced wheel" → "overbalanced").
+        if (!typed.includes(word)) expect(text).toMatch(new RegExp(`(?<![\\p{L}])${word}(?![\\p{L}])`, word === word.toLowerCase() ? 'iu' : 'u'));
+      }
+    }
+    // A stem that is not a word is never shown: "microwav", "overbalanc".
+    const shown = res.body.results.flatMap((r: { matched: string[] }) => r.matched);
+    expect(shown).not.toContain('microwav');
+    expect(shown).not.toContain('overbalanc');
   });
 });
 

@@ -25,16 +25,24 @@ export function searchRoutes(allow: Allow, index: SearchIndex): Router {
     const classes = q.mechanism ? index.classAndChildren(q.mechanism) : null;
     const byLaw = (h: SearchHit) => !q.law || h.entry.laws.includes(q.law);
     const byClass = (h: SearchHit) => !classes || (h.entry.mechanismClass !== null && classes.has(h.entry.mechanismClass));
-    // Each facet ignores its own filter, so that a chip shows what choosing it would give.
+    // Each facet ignores its own filter, so that a chip shows what choosing it would give; a class
+    // counts the entries of the classes below it too, as choosing it lists them.
     const laws: Record<string, number> = {};
     for (const h of hits.filter(byClass)) for (const l of h.entry.laws) laws[l] = (laws[l] ?? 0) + 1;
     const mechanisms: Record<string, number> = {};
-    for (const h of hits.filter(byLaw)) if (h.entry.mechanismClass) mechanisms[h.entry.mechanismClass] = (mechanisms[h.entry.mechanismClass] ?? 0) + 1;
+    const lineage = new Map<string, string[]>();
+    for (const h of hits.filter(byLaw)) {
+      const cls = h.entry.mechanismClass;
+      if (!cls) continue;
+      let up = lineage.get(cls);
+      if (!up) lineage.set(cls, (up = index.classAndAncestors(cls)));
+      for (const c of up) mechanisms[c] = (mechanisms[c] ?? 0) + 1;
+    }
     const filtered = hits.filter((h) => byLaw(h) && byClass(h));
     res.json({
       query: q.q,
       total: filtered.length,
-      results: filtered.slice(q.offset, q.offset + q.limit).map(searchResult),
+      results: filtered.slice(q.offset, q.offset + q.limit).map((h) => searchResult(h, index.readerWords(h, q.q))),
       facets: { laws, mechanisms },
     });
   });
