@@ -34,15 +34,17 @@ export function EntryMeta({ slug, version, pinned, onCite }: EntryMetaProps) {
         {version.reviewer ? `, vetted by ${version.reviewer.displayName}` : ''}
       </Text>
       <View style={styles.links}>
-        {pinned ? (
-          <TextLink href={`/entries/${slug}`} testID="entry-latest">
-            Read the latest version
-          </TextLink>
-        ) : (
-          <TextLink href={permalink} testID="entry-permalink">
-            {`Permalink to version ${version.number}`}
-          </TextLink>
-        )}
+        <View>
+          {pinned ? (
+            <TextLink href={`/entries/${slug}`} testID="entry-latest">
+              Read the latest version
+            </TextLink>
+          ) : (
+            <TextLink href={permalink} testID="entry-permalink">
+              {`Permalink to version ${version.number}`}
+            </TextLink>
+          )}
+        </View>
         {onCite ? (
           <Pressable role="button" testID="entry-cite-action" onPress={onCite} style={styles.cite} {...dataAttributes({ print: 'hide' })}>
             <Text style={styles.citeLabel}>Cite this version</Text>

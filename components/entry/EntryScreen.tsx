@@ -75,7 +75,7 @@ function EntryPage({ data, pinned }: { data: EntryResponse; pinned: boolean }) {
   const contents = contentsOf(version.content);
 
   const text = (
-    <View style={styles.text}>
+    <View testID="entry-text" style={styles.text}>
       <EntryBody content={version.content} html={version.html} />
       <View nativeID={sectionAnchor('report')} {...dataAttributes({ print: 'hide' })}>
         <ReportError key={version.number} slug={entry.slug} version={version.number} title={version.content.title} />
@@ -123,7 +123,7 @@ function EntryPage({ data, pinned }: { data: EntryResponse; pinned: boolean }) {
       {wide ? (
         <View testID="entry-columns" style={styles.columns}>
           {text}
-          <View style={styles.aside}>
+          <View style={styles.aside} {...dataAttributes({ print: 'hide' })}>
             <TableOfContents items={contents} />
           </View>
         </View>
