@@ -1,4 +1,4 @@
-import { useInsertionEffect, useState } from 'react';
+import { useEffect, useInsertionEffect, useState } from 'react';
 import { Platform, Pressable, StyleSheet, Text, View, type ViewStyle } from 'react-native';
 import type { EntryContent } from '@/shared/entries/schema';
 import { dataAttributes } from '../worksheet/dataAttributes';
@@ -53,9 +53,43 @@ function useAnchorStyles() {
 /** `position: sticky` is CSS that react-native-web passes through; React Native's types do not list it. */
 const sticky = { position: 'sticky', top: 0 } as unknown as ViewStyle;
 
-/** Wide screens: the table of contents beside the text, staying in view while the page scrolls. */
+/**
+ * The section being read: of the sections crossing a band near the top of the window, the first in
+ * reading order; while none crosses it, the last one marked stays marked. IntersectionObserver sees
+ * through the app's own scrolling box. Undefined off the web, or before anything has been seen.
+ */
+function useSectionInView(anchors: string[]): string | undefined {
+  const [current, setCurrent] = useState<string>();
+  const key = anchors.join(' ');
+  useEffect(() => {
+    if (typeof document === 'undefined' || typeof IntersectionObserver === 'undefined') return;
+    const ids = key.split(' ');
+    const seen = new Set<string>();
+    const observer = new IntersectionObserver(
+      (records) => {
+        for (const r of records) {
+          if (r.isIntersecting) seen.add(r.target.id);
+          else seen.delete(r.target.id);
+        }
+        const first = ids.find((id) => seen.has(id));
+        if (first) setCurrent(first);
+      },
+      // A band just below where a jump puts a section's top (72 px, the anchors' scroll margin) down to a quarter of the window.
+      { rootMargin: '-80px 0px -75% 0px' },
+    );
+    for (const id of ids) {
+      const el = document.getElementById(id);
+      if (el) observer.observe(el);
+    }
+    return () => observer.disconnect();
+  }, [key]);
+  return current;
+}
+
+/** Wide screens: the table of contents beside the text, staying in view while the page scrolls; the section in view is marked. */
 export function TableOfContents({ items }: { items: ContentsItem[] }) {
   useAnchorStyles();
+  const current = useSectionInView(items.map((i) => i.anchor));
   return (
     <View
       role="navigation"
@@ -73,10 +107,11 @@ export function TableOfContents({ items }: { items: ContentsItem[] }) {
             <Pressable
               role="link"
               testID={`toc-${item.key}`}
+              aria-current={current === item.anchor ? 'location' : undefined}
               onPress={() => scrollToAnchor(item.anchor)}
-              style={({ pressed }) => [styles.tocItem, pressed && styles.pressed]}
+              style={({ pressed }) => [styles.tocItem, current === item.anchor && styles.current, pressed && styles.pressed]}
             >
-              <Text style={styles.tocLabel}>{item.label}</Text>
+              <Text style={[styles.tocLabel, current === item.anchor && styles.currentLabel]}>{item.label}</Text>
             </Pressable>
           </View>
         ))}
@@ -140,7 +175,9 @@ const styles = StyleSheet.create({
     borderLeftWidth: 1,
   },
   tocTitle: { ...type.caption, fontFamily: type.uiStrong.fontFamily, textTransform: 'uppercase', letterSpacing: 1 },
-  tocItem: { ...focusRing, paddingVertical: space.xxs, borderRadius: radius.sm },
+  tocItem: { ...focusRing, paddingVertical: space.xxs, paddingHorizontal: space.xs, marginLeft: -space.xs, borderRadius: radius.sm },
+  current: { backgroundColor: colors.tealWash },
+  currentLabel: { fontFamily: type.uiStrong.fontFamily, color: colors.ink },
   pressed: { backgroundColor: colors.tealWash },
   tocLabel: { ...type.ui, fontSize: 15, color: colors.teal },
   jump: {

@@ -129,6 +129,9 @@ describe.each([
         const top = (await box(byTestId(page, 'entry-section-cautions'))).top;
         return top >= -2 && top < 120;
       });
+      // The contents mark the section being read.
+      await until('the contents mark Cautions as the section in view', async () => (await byTestId(page, 'toc-cautions').getAttribute('aria-current')) === 'location');
+      expect(await toc.locator('[aria-current="location"]').count()).toBe(1);
       // Sticky: scrolled to the very end of a long page, the contents are still in view.
       await scrollToEnd(page);
       expect(await inViewport(page, byTestId(page, 'entry-section-whyItFails'))).toBe(false);
