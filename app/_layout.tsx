@@ -6,6 +6,7 @@ import { SourceSerif4_600SemiBold } from '@expo-google-fonts/source-serif-4/600S
 import { QueryClientProvider } from '@tanstack/react-query';
 // KaTeX's rules for the math in entries (Metro bundles CSS on the web); its fonts come from installKatexFonts.
 import 'katex/dist/katex.min.css';
+import '@/components/print/print.css'; // printing entries and claim checks: no navigation or inputs, the permanent address at the end
 import { useFonts } from 'expo-font';
 import { Slot } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';

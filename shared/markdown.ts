@@ -25,10 +25,38 @@ const schema: SanitizeSchema = {
   },
 };
 
+/** The few fields of an mdast node the display-math pass reads. */
+interface MdNode {
+  type: string;
+  position?: { start: { offset?: number } };
+  data?: { hProperties?: Record<string, unknown> };
+  children?: MdNode[];
+}
+
+/**
+ * `$$…$$` written inside a line (on one line, or within a paragraph) is display math, as in TeX:
+ * remark-math parses it as inline math, so it is marked `math-display` here and KaTeX sets it in
+ * display mode (centred, full size). A single `$…$` stays inline.
+ */
+function remarkDollarDisplay() {
+  return (tree: MdNode, file: { value: unknown }) => {
+    const source = String(file.value);
+    const walk = (node: MdNode): void => {
+      const start = node.position?.start.offset;
+      if (node.type === 'inlineMath' && start !== undefined && source.startsWith('$$', start)) {
+        node.data = { ...node.data, hProperties: { ...node.data?.hProperties, className: ['language-math', 'math-display'] } };
+      }
+      node.children?.forEach(walk);
+    };
+    walk(tree);
+  };
+}
+
 const processor = unified()
   .use(remarkParse)
   .use(remarkGfm)
   .use(remarkMath)
+  .use(remarkDollarDisplay)
   // Raw HTML in the Markdown is dropped here, never passed through.
   .use(remarkRehype)
   .use(rehypeSanitize, schema)

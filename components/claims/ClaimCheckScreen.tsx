@@ -205,7 +205,7 @@ export function ClaimCheckScreen({ from, resume = false }: ClaimCheckScreenProps
         </Notice>
       ) : null}
 
-      <View style={styles.form}>
+      <View testID="claim-form" style={styles.form}>
         <Text nativeID={`${textId}-label`} style={type.uiStrong}>
           The claim’s text
         </Text>
@@ -287,7 +287,7 @@ export function ClaimCheckScreen({ from, resume = false }: ClaimCheckScreenProps
             <MatchList matches={shown.result.matches} />
           </Section>
           <Section title="Figures found">
-            <Text style={[type.caption, styles.intro]}>
+            <Text testID="claim-figures-intro" style={[type.caption, styles.intro]}>
               Each figure as the text gives it and in SI. Retype a value, give the upper end of a range, change its kind or
               role, remove it or add one: the checks run again as soon as you stop typing.
             </Text>

@@ -278,7 +278,7 @@ export function ParagraphPanel({ result, variant, onVariant, style, onStyle, res
     <View style={styles.paragraphBox}>
       {hasVariants ? (
         <>
-          <Text style={type.ui}>Written as</Text>
+          <Text testID="claim-variant-label" style={type.ui}>Written as</Text>
           <ChoiceChips
             label="Whom the paragraph is written for"
             testID="claim-variant"
@@ -290,7 +290,7 @@ export function ParagraphPanel({ result, variant, onVariant, style, onStyle, res
       ) : null}
       {onStyle && style ? (
         <>
-          <Text style={type.ui}>References in</Text>
+          <Text testID="claim-style-label" style={type.ui}>References in</Text>
           <ChoiceChips
             label="Reference style"
             testID="claim-style"

@@ -9,7 +9,7 @@ import { useTaxonomy } from '../queries/taxonomy';
 import type { DraftDto } from '@/shared/api-types';
 import { ProblemNotice } from '../auth/Form';
 import { problemOf } from '../auth/useForm';
-import { sectionTitles } from '../entry/sections';
+import { replyLabels, sectionTitles } from '../entry/sections';
 import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { Section } from '../ui/Screen';
@@ -129,8 +129,8 @@ export function EntryEditor({ draft }: { draft?: DraftDto }) {
             error={problem('repliesAndAnswers')}
             renderRow={(row, update, i) => (
               <>
-                <EditorField name={`reply-${i + 1}`} label="They say" lines={2} value={row.reply} onChangeText={(reply) => update({ ...row, reply })} />
-                <EditorField name={`answer-${i + 1}`} label="The answer" lines={4} value={row.answer} onChangeText={(answer) => update({ ...row, answer })} />
+                <EditorField name={`reply-${i + 1}`} label={replyLabels.reply} lines={2} value={row.reply} onChangeText={(reply) => update({ ...row, reply })} />
+                <EditorField name={`answer-${i + 1}`} label={replyLabels.answer} lines={4} value={row.answer} onChangeText={(answer) => update({ ...row, answer })} />
               </>
             )}
           />

@@ -2,7 +2,7 @@ import { diffLines, diffWords, type Change } from 'diff';
 import { StyleSheet, Text, View } from 'react-native';
 import type { EntryContent } from '@/shared/entries/schema';
 import { colors, radius, space, type } from '../theme';
-import { sectionTexts } from './sections';
+import { sectionTexts, sectionTitles } from './sections';
 
 interface DiffViewProps {
   /** The older text, named as the caption says it: "version 2", "the copy saved elsewhere". */
@@ -11,13 +11,31 @@ interface DiffViewProps {
 }
 
 /** Prose is compared word by word; lists and worksheets (one item a line) line by line. */
-const byLine = new Set(['Other names', 'Conservation laws', 'Run the numbers', 'Questions to ask the claimant', 'Sources', 'Related entries']);
+const byLine = new Set([
+  'Other names',
+  'Conservation laws',
+  sectionTitles.worksheets,
+  sectionTitles.questionsToAsk,
+  sectionTitles.sources,
+  sectionTitles.related,
+]);
 
 /** Each line ends in a newline, so that a line added after the last one leaves the last one alone. */
 const closed = (text: string) => (text && !text.endsWith('\n') ? `${text}\n` : text);
 
-function compare(label: string, older: string, newer: string): Change[] {
-  return byLine.has(label) ? diffLines(closed(older), closed(newer)) : diffWords(older, newer);
+/**
+ * Words as Unicode's word boundaries (UAX #29) find them, which keep a number whole ("3.34", "6,000")
+ * where jsdiff's own tokens split it at the point, so "3.3 → 3.34" is one changed word, not "3" and "34".
+ */
+const segmenter = typeof Intl !== 'undefined' && 'Segmenter' in Intl ? new Intl.Segmenter('en', { granularity: 'word' }) : undefined;
+
+/** Line breaks in the Markdown source are not part of the text a reader sees: runs of white space become one space. */
+export const normaliseSpace = (text: string) => text.replace(/\s+/g, ' ').trim();
+
+/** The changes between two texts of one section: word by word for prose, line by line for lists. */
+export function compareSection(label: string, older: string, newer: string): Change[] {
+  if (byLine.has(label)) return diffLines(closed(older), closed(newer));
+  return diffWords(normaliseSpace(older), normaliseSpace(newer), segmenter ? { intlSegmenter: segmenter } : {});
 }
 
 /**
@@ -27,7 +45,7 @@ function compare(label: string, older: string, newer: string): Change[] {
 export function DiffView({ from, to }: DiffViewProps) {
   const before = new Map(sectionTexts(from.content));
   const changed = sectionTexts(to.content)
-    .map(([label, text]) => ({ label, changes: compare(label, before.get(label) ?? '', text) }))
+    .map(([label, text]) => ({ label, changes: compareSection(label, before.get(label) ?? '', text) }))
     .filter(({ changes }) => changes.some((c) => c.added || c.removed));
   const unchanged = sectionTexts(to.content).length - changed.length;
 

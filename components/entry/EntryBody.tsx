@@ -1,12 +1,15 @@
-import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import type { ReactNode } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
 import type { EntryContent } from '@/shared/entries/schema';
 import type { EntryHtml } from '@/shared/api-types';
 import { Markdown } from '../markdown/Markdown';
-import { colors, layout, space, type } from '../theme';
+import { useEntryList } from '../queries/entries';
+import { colors, space, type } from '../theme';
 import { Notice } from '../ui/Notice';
 import { TextLink } from '../ui/TextLink';
 import { EntrySection } from './EntrySection';
 import { EntryWorksheets } from './EntryWorksheets';
+import { presentSections, replyLabels, type SectionField } from './sections';
 import { SourceList } from './SourceList';
 
 interface EntryBodyProps {
@@ -16,105 +19,89 @@ interface EntryBodyProps {
 }
 
 /**
- * The sections of one version in reading order. From about 960 px wide the worksheets and the
- * sources stand in a column beside the text; on a phone everything is one column.
+ * The sections of one version in reading order, in one column at every width: the worksheets right
+ * after the reasoning they run the numbers of ("Why it fails"), at the full width of the text, and
+ * the sources at the end, as references are in print. Sections a version leaves empty are left out.
  */
 export function EntryBody({ content, html }: EntryBodyProps) {
-  const { width } = useWindowDimensions();
-  const wide = width >= layout.wideMinWidth;
-  const worksheets = (
-    <EntrySection field="worksheets">
-      <EntryWorksheets worksheets={content.worksheets} />
-    </EntrySection>
-  );
-  const sources = (
-    <EntrySection field="sources">
-      <SourceList sources={content.sources} />
-    </EntrySection>
-  );
+  const body: Record<SectionField, () => ReactNode> = {
+    inBrief: () => <Markdown html={html.inBrief} />,
+    howItIsPitched: () => <Markdown html={html.howItIsPitched} />,
+    whyItFails: () => <Markdown html={html.whyItFails} />,
+    worksheets: () => <EntryWorksheets worksheets={content.worksheets} />,
+    whatFakesTheEffect: () => <Markdown html={html.whatFakesTheEffect} />,
+    repliesAndAnswers: () => (
+      <View style={styles.replies}>
+        {html.replies.map((pair, i) => (
+          <View key={i} testID={`reply-${i + 1}`} style={styles.reply}>
+            <Text role="heading" aria-level={3} style={styles.replyLabel}>
+              {replyLabels.reply}
+            </Text>
+            <Markdown html={pair.reply} size="compact" />
+            <Text role="heading" aria-level={3} style={[styles.replyLabel, styles.answerLabel]}>
+              {replyLabels.answer}
+            </Text>
+            <Markdown html={pair.answer} size="compact" />
+          </View>
+        ))}
+      </View>
+    ),
+    questionsToAsk: () => (
+      <View role="list" style={styles.questions}>
+        {content.questionsToAsk.map((question, i) => (
+          <Text role="listitem" key={i} style={type.reading}>
+            {i + 1}. {question}
+          </Text>
+        ))}
+      </View>
+    ),
+    cautions: () => (
+      <Notice tone="warning" testID="entry-cautions" title="Where this work can hurt someone">
+        <Markdown html={html.cautions} size="compact" />
+      </Notice>
+    ),
+    sources: () => <SourceList sources={content.sources} />,
+    related: () => <RelatedEntries slugs={content.related} />,
+  };
 
-  const text = (
-    <View style={styles.column}>
-      <EntrySection field="inBrief">
-        <Markdown html={html.inBrief} />
-      </EntrySection>
-      <EntrySection field="howItIsPitched">
-        <Markdown html={html.howItIsPitched} />
-      </EntrySection>
-      <EntrySection field="whyItFails">
-        <Markdown html={html.whyItFails} />
-      </EntrySection>
-      {wide ? null : worksheets}
-      {html.whatFakesTheEffect ? (
-        <EntrySection field="whatFakesTheEffect">
-          <Markdown html={html.whatFakesTheEffect} />
+  return (
+    <View testID="entry-body" style={styles.column}>
+      {presentSections(content).map((field) => (
+        <EntrySection key={field} field={field}>
+          {body[field]()}
         </EntrySection>
-      ) : null}
-      {html.replies.length > 0 ? (
-        <EntrySection field="repliesAndAnswers">
-          <View style={styles.replies}>
-            {html.replies.map((pair, i) => (
-              <View key={i} testID={`reply-${i + 1}`} style={styles.reply}>
-                <Text style={type.uiStrong}>“They say”</Text>
-                <Markdown html={pair.reply} size="compact" />
-                <Text style={type.uiStrong}>The answer</Text>
-                <Markdown html={pair.answer} size="compact" />
-              </View>
-            ))}
-          </View>
-        </EntrySection>
-      ) : null}
-      {content.questionsToAsk.length > 0 ? (
-        <EntrySection field="questionsToAsk">
-          <View role="list" style={styles.questions}>
-            {content.questionsToAsk.map((question, i) => (
-              <Text role="listitem" key={i} style={type.reading}>
-                {i + 1}. {question}
-              </Text>
-            ))}
-          </View>
-        </EntrySection>
-      ) : null}
-      {html.cautions ? (
-        <EntrySection field="cautions">
-          <Notice tone="warning" testID="entry-cautions" title="Where this work can hurt someone">
-            <Markdown html={html.cautions} size="compact" />
-          </Notice>
-        </EntrySection>
-      ) : null}
-      {wide ? null : sources}
-      {content.related.length > 0 ? (
-        <EntrySection field="related">
-          <View style={styles.related}>
-            {content.related.map((slug) => (
-              <TextLink key={slug} href={`/entries/${slug}`} testID={`related-${slug}`}>
-                {slug.replace(/-/g, ' ')}
-              </TextLink>
-            ))}
-          </View>
-        </EntrySection>
-      ) : null}
+      ))}
     </View>
   );
+}
 
-  if (!wide) return text;
+/**
+ * Related entries by their titles, linked. The titles come from the library's list (one query,
+ * shared with the Library screen's cache); a related entry the list does not hold (retired, or not
+ * published yet) is named by its address.
+ */
+function RelatedEntries({ slugs }: { slugs: string[] }) {
+  const { data } = useEntryList({ limit: 100 });
+  const titleOf = (slug: string) => data?.entries.find((e) => e.slug === slug)?.title;
   return (
-    <View style={styles.columns}>
-      {text}
-      <View style={styles.side}>
-        {worksheets}
-        {sources}
-      </View>
+    <View role="list" style={styles.related}>
+      {slugs.map((slug) => (
+        <View role="listitem" key={slug}>
+          <TextLink href={`/entries/${slug}`} testID={`related-${slug}`}>
+            {titleOf(slug) ?? slug.replace(/-/g, ' ')}
+          </TextLink>
+        </View>
+      ))}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  columns: { flexDirection: 'row', alignItems: 'flex-start', gap: space.xl },
-  column: { flex: 3, minWidth: 0 },
-  side: { flex: 2, minWidth: 0, paddingLeft: space.lg, borderLeftColor: colors.rule, borderLeftWidth: 1 },
+  column: { minWidth: 0 },
   replies: { gap: space.lg },
-  reply: { gap: space.xxs },
+  reply: { gap: space.xxs, paddingLeft: space.md, borderLeftColor: colors.rule, borderLeftWidth: 3 },
+  replyLabel: { ...type.uiStrong },
+  answerLabel: { marginTop: space.xs, color: colors.teal },
   questions: { gap: space.xs },
   related: { gap: space.xs },
 });

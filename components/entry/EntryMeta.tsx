@@ -1,9 +1,10 @@
 import { entryVersionPath } from '@/shared/permalink';
-import { StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { EntryContent } from '@/shared/entries/schema';
 import { useTaxonomy } from '../queries/taxonomy';
 import type { EntryVersionDto } from '@/shared/api-types';
-import { colors, radius, space, type } from '../theme';
+import { colors, focusRing, radius, space, type } from '../theme';
+import { dataAttributes } from '../worksheet/dataAttributes';
 import { TextLink } from '../ui/TextLink';
 import { formatDay } from './format';
 
@@ -12,10 +13,12 @@ interface EntryMetaProps {
   version: EntryVersionDto;
   /** True on `/entries/<slug>/v/<n>`: the page of one version, not the latest. */
   pinned: boolean;
+  /** The "Cite this version" action beside the permalink: takes the reader to the citation panel. */
+  onCite?: () => void;
 }
 
 /** What the entry is about (laws broken, mechanism class, other names) and which version this is, by whom. */
-export function EntryMeta({ slug, version, pinned }: EntryMetaProps) {
+export function EntryMeta({ slug, version, pinned, onCite }: EntryMetaProps) {
   const { content } = version;
   const permalink = entryVersionPath(slug, version.number);
   return (
@@ -31,15 +34,22 @@ export function EntryMeta({ slug, version, pinned }: EntryMetaProps) {
         {version.reviewer ? `, vetted by ${version.reviewer.displayName}` : ''}
       </Text>
       <View style={styles.links}>
-        {pinned ? (
-          <TextLink href={`/entries/${slug}`} testID="entry-latest">
-            Read the latest version
-          </TextLink>
-        ) : (
-          <TextLink href={permalink} testID="entry-permalink">
-            {`Permalink to version ${version.number}`}
-          </TextLink>
-        )}
+        <View>
+          {pinned ? (
+            <TextLink href={`/entries/${slug}`} testID="entry-latest">
+              Read the latest version
+            </TextLink>
+          ) : (
+            <TextLink href={permalink} testID="entry-permalink">
+              {`Permalink to version ${version.number}`}
+            </TextLink>
+          )}
+        </View>
+        {onCite ? (
+          <Pressable role="button" testID="entry-cite-action" onPress={onCite} style={styles.cite} {...dataAttributes({ print: 'hide' })}>
+            <Text style={styles.citeLabel}>Cite this version</Text>
+          </Pressable>
+        ) : null}
       </View>
     </View>
   );
@@ -77,5 +87,16 @@ const styles = StyleSheet.create({
     paddingVertical: 2,
   },
   law: { borderColor: colors.teal, backgroundColor: colors.tealWash, color: colors.teal },
-  links: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  links: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md },
+  cite: {
+    ...focusRing,
+    minHeight: 44,
+    justifyContent: 'center',
+    paddingHorizontal: space.md,
+    borderColor: colors.teal,
+    borderWidth: 1,
+    borderRadius: radius.sm,
+    backgroundColor: colors.surface,
+  },
+  citeLabel: { ...type.uiStrong, color: colors.teal },
 });

@@ -42,6 +42,21 @@ function routes() {
         classes: [{ slug: 'enclosed-radiation', name: 'Radiation in a closed cavity', parentSlug: null, summary: '', position: 0 }],
       }),
     '/api/entries/light-in-a-box': () => jsonResponse(200, entryResponse(2, version2)),
+    '/api/entries?limit=100': () =>
+      jsonResponse(200, {
+        total: 1,
+        entries: [
+          {
+            slug: 'photon-rocket',
+            title: 'A rocket that pushes with light',
+            version: 1,
+            publishedAt: '2026-01-10T09:00:00.000Z',
+            laws: ['linear-momentum'],
+            mechanismClass: 'enclosed-radiation',
+            inBrief: 'Light carries momentum.',
+          },
+        ],
+      }),
     '/api/entries/light-in-a-box/versions': () => jsonResponse(200, versions),
     '/api/entries/light-in-a-box/sightings': () => jsonResponse(200, { sightings: [] }),
     '/api/entries/light-in-a-box/versions/1': () => jsonResponse(200, entryResponse(1, version1)),
@@ -70,7 +85,25 @@ describe('EntryScreen', () => {
     expect(screen.getByTestId('entry-version').textContent).toContain('vetted by Talia Verhoeven');
     expect((await screen.findByTestId('entry-law-linear-momentum')).textContent).toBe('Conservation of linear momentum');
     expect(screen.getByTestId('entry-cautions').textContent).toContain('local RF safety rules');
+    // A caution is Markdown: the single newline in its source is a space inside one paragraph, not a line break.
+    const caution = screen.getByTestId('entry-cautions').querySelector('.cw-md')!;
+    expect(caution.querySelectorAll('p')).toHaveLength(1);
+    expect(caution.querySelector('br')).toBeNull();
+    expect(caution.querySelector('strong')!.textContent).toBe('burn');
     expect(screen.getByTestId('related-photon-rocket').getAttribute('href')).toBe('/entries/photon-rocket');
+    // Related entries go by their titles (from the library's list), not by their addresses.
+    await waitFor(() => expect(screen.getByTestId('related-photon-rocket').textContent).toBe('A rocket that pushes with light'));
+
+    // Each counterpoint and its answer under our own two headings.
+    const pair = screen.getByTestId('reply-1');
+    expect(within(pair).getAllByRole('heading', { level: 3 }).map((h) => h.textContent)).toEqual(['Counterpoint', 'Why it does not hold']);
+    expect(screen.getByTestId('entry-section-repliesAndAnswers').querySelector('h2')!.textContent).toBe('Counterpoints, answered');
+
+    // The browser tab names the entry; the description for link previews is its brief in plain words.
+    expect(document.title).toBe('Thrust from light kept in a box — Counterweight');
+    expect(document.head.querySelector('meta[name="description"]')!.getAttribute('content')).toBe(
+      'Light bouncing inside a closed box cannot push the box: its momentum p = E/c stays inside.',
+    );
 
     // P / c for 1 kW: 1000 W / 299 792 458 m/s = 3.3356 uN (c exact, BIPM SI Brochure, 9th ed.).
     const sheet = screen.getByTestId('worksheet-cavity-bound');
@@ -80,14 +113,71 @@ describe('EntryScreen', () => {
     await waitFor(() => expect(Number(within(sheet).getByTestId('step-F_bound').getAttribute('data-si'))).toBeCloseTo(2000 / 299_792_458, 15));
   });
 
-  it('puts the worksheet and the sources beside the text on a wide screen', async () => {
+  it('reads in one text column on a wide screen, with a table of contents beside it and a Cite action at the top', async () => {
     setWindowWidth(1280);
     routes();
+    const scrolled: string[] = [];
+    const scrollIntoView = jest.fn(function (this: HTMLElement) {
+      scrolled.push(this.id);
+    });
+    Object.defineProperty(HTMLElement.prototype, 'scrollIntoView', { configurable: true, value: scrollIntoView });
     renderWithProviders(<EntryScreen slug="light-in-a-box" />);
     const sheets = await screen.findByTestId('entry-section-worksheets');
-    const text = screen.getByTestId('entry-section-whyItFails');
-    expect(sheets.parentElement).toBe(screen.getByTestId('entry-section-sources').parentElement);
-    expect(sheets.parentElement).not.toBe(text.parentElement);
+    const body = screen.getByTestId('entry-body');
+    // The worksheets follow the reasoning they run the numbers of, and the sources close the text, in the one column.
+    expect(sheets.parentElement).toBe(body);
+    expect(screen.getByTestId('entry-section-whyItFails').nextElementSibling).toBe(sheets);
+    expect(screen.getByTestId('entry-section-sources').parentElement).toBe(body);
+
+    const toc = screen.getByTestId('entry-toc');
+    expect(toc.getAttribute('role')).toBe('navigation');
+    expect(within(toc).getAllByRole('link').map((a) => a.textContent)).toEqual([
+      'In brief',
+      'How it is pitched',
+      'Why it fails',
+      'Run the numbers',
+      'Artifacts that can look like the effect',
+      'Counterpoints, answered',
+      'Questions to ask the claimant',
+      'Cautions',
+      'Sources',
+      'Related entries',
+      'Versions',
+      'Cite this version',
+    ]);
+    expect(screen.queryByTestId('entry-jump')).toBeNull();
+
+    fireEvent.click(within(toc).getByTestId('toc-sources'));
+    expect(scrolled).toEqual(['section-sources']);
+    expect(document.activeElement).toBe(document.getElementById('section-sources'));
+
+    fireEvent.click(screen.getByTestId('entry-cite-action'));
+    expect(scrolled).toEqual(['section-sources', 'section-cite']);
+    expect(document.getElementById('section-cite')!.contains(await screen.findByTestId('cite-panel'))).toBe(true);
+  });
+
+  it('gives a phone one jump menu that opens the list of sections and goes to the one chosen', async () => {
+    routes();
+    const scrolled: string[] = [];
+    Object.defineProperty(HTMLElement.prototype, 'scrollIntoView', {
+      configurable: true,
+      value: function (this: HTMLElement) {
+        scrolled.push(this.id);
+      },
+    });
+    renderWithProviders(<EntryScreen slug="light-in-a-box" />);
+    const toggle = await screen.findByTestId('entry-jump-toggle');
+    expect(screen.queryByTestId('entry-toc')).toBeNull();
+    expect(screen.queryByTestId('entry-jump-list')).toBeNull();
+    expect(toggle.getAttribute('aria-expanded')).toBe('false');
+
+    fireEvent.click(toggle);
+    expect(toggle.getAttribute('aria-expanded')).toBe('true');
+    const list = screen.getByTestId('entry-jump-list');
+    expect(within(list).getAllByRole('link')).toHaveLength(12);
+    fireEvent.click(within(list).getByTestId('jump-questionsToAsk'));
+    expect(scrolled).toEqual(['section-questionsToAsk']);
+    expect(screen.queryByTestId('entry-jump-list')).toBeNull();
   });
 
   it('cites the version in each format, with its permanent address, and copies it', async () => {
@@ -143,6 +233,23 @@ describe('DiffView', () => {
     expect(within(questions).getByTestId('diff-added').textContent).toContain('What did a dummy load show?');
     expect(within(questions).queryByTestId('diff-removed')).toBeNull();
     expect(screen.queryByTestId('diff-section-Title')).toBeNull();
+  });
+
+  it('compares by whole words and numbers, and ignores where the source breaks its lines', () => {
+    const before = { ...version1, whyItFails: 'The balance read 3.3 uN, with the\nsupply cables hanging free.' };
+    const after = { ...version1, whyItFails: 'The balance read 3.34 uN, with the supply cables hanging free.' };
+    renderWithProviders(<DiffView from={{ label: 'version 1', content: before }} to={{ label: 'version 2', content: after }} />);
+    const why = screen.getByTestId('diff-section-Why it fails');
+    // One number changed: one word struck, one added; the moved line break is not a change.
+    expect(within(why).getAllByTestId('diff-removed').map((el) => el.textContent)).toEqual(['3.3']);
+    expect(within(why).getAllByTestId('diff-added').map((el) => el.textContent)).toEqual(['3.34']);
+    expect(why.textContent).toContain('with the supply cables');
+  });
+
+  it('says when only the line breaks of the source differ', () => {
+    const rewrapped = { ...version1, whyItFails: version1.whyItFails.replace(/ /g, '\n') };
+    renderWithProviders(<DiffView from={{ label: 'version 1', content: version1 }} to={{ label: 'version 2', content: rewrapped }} />);
+    expect(screen.getByTestId('diff-none')).toBeTruthy();
   });
 
   it('says when nothing changed', () => {

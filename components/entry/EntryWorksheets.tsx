@@ -1,6 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { Worksheet } from '@/shared/worksheet/schema';
 import { colors, radius, space, type } from '../theme';
+import { dataAttributes } from '../worksheet/dataAttributes';
 import { WorksheetView } from '../worksheet/WorksheetView';
 
 /** The entry's worksheets, each runnable in place with the reader's own numbers. */
@@ -16,7 +17,9 @@ export function EntryWorksheets({ worksheets }: { worksheets: Worksheet[] }) {
             {worksheet.title}
           </Text>
           {worksheet.summary ? <Text style={type.body}>{worksheet.summary}</Text> : null}
-          <Text style={type.caption}>Change any input; every step and check follows at once, here in your browser.</Text>
+          <Text style={type.caption} {...dataAttributes({ print: 'hide' })}>
+            Change any input; every step and check follows at once, here in your browser.
+          </Text>
           <WorksheetView worksheet={worksheet} />
         </View>
       ))}

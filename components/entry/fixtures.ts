@@ -22,7 +22,7 @@ export const version1: EntryContent = entryContentSchema.parse({
   whatFakesTheEffect: 'Heating of the balance arm.',
   repliesAndAnswers: [{ reply: 'The cavity is tapered.', answer: 'Tapering changes where the walls are, not the sum.' }],
   questionsToAsk: ['Was the run repeated with the device turned round?'],
-  cautions: 'High-power microwaves burn; follow local RF safety rules.',
+  cautions: 'High-power microwaves **burn**; follow\nlocal RF safety rules.',
   related: ['photon-rocket'],
   sources: [
     {

@@ -59,6 +59,25 @@ describe('renderMarkdown', () => {
     expect(host.querySelector('.katex-display .katex annotation')!.textContent).toBe('F = \\frac{P}{c}');
   });
 
+  it('sets $$…$$ as display math on one line and inside a paragraph, and $…$ inline', () => {
+    const host = document.createElement('div');
+    host.innerHTML = renderMarkdown('$$F = \\frac{P}{c}$$\n\nThe bound $$\\Delta p = 0$$ holds, as $p = mv$ says.');
+    const displays = Array.from(host.querySelectorAll('.katex-display'));
+    // KaTeX marks display mode on the MathML too (<math display="block">), as TeX's $$ does.
+    expect(displays.map((d) => d.querySelector('annotation')!.textContent)).toEqual(['F = \\frac{P}{c}', '\\Delta p = 0']);
+    expect(displays.every((d) => d.querySelector('math')!.getAttribute('display') === 'block')).toBe(true);
+    const inline = Array.from(host.querySelectorAll('.katex')).filter((k) => !k.closest('.katex-display'));
+    expect(inline.map((k) => k.querySelector('annotation')!.textContent)).toEqual(['p = mv']);
+    expect(host.textContent).toContain('holds, as');
+  });
+
+  it('makes a single newline a space and a blank line a new paragraph', () => {
+    const host = document.createElement('div');
+    host.innerHTML = renderMarkdown('Keep clear of the\nrotor.\n\nSwitch off first.');
+    expect(Array.from(host.querySelectorAll('p')).map((p) => p.textContent!.replace(/\s+/g, ' '))).toEqual(['Keep clear of the rotor.', 'Switch off first.']);
+    expect(host.querySelector('br')).toBeNull();
+  });
+
   it('keeps GitHub-flavoured tables and safe links', () => {
     const host = document.createElement('div');
     host.innerHTML = renderMarkdown('| a | b |\n| - | - |\n| 1 | 2 |\n\nSee [the notes](https://example.org/notes).');
@@ -80,6 +99,10 @@ describe('Markdown', () => {
     expect(passage.className).toContain('cw-md');
     expect(passage.querySelector('em')!.textContent).toBe('conserved');
     expect(passage.querySelector('.katex')).not.toBeNull();
-    expect(document.getElementById('cw-markdown-styles')!.textContent).toContain('SourceSerif4_400Regular');
+    const css = document.getElementById('cw-markdown-styles')!.textContent!;
+    expect(css).toContain('SourceSerif4_400Regular');
+    // Inside a react-native-web Text (white-space: pre-wrap) a passage still collapses its source's line breaks.
+    expect(css).toMatch(/\.cw-md\{[^}]*white-space:normal/);
+    expect(css).toMatch(/\.cw-md \.katex-display\{[^}]*text-align:center/);
   });
 });

@@ -12,9 +12,13 @@ interface MarkdownProps {
 
 const CLASS = 'cw-md';
 
-/** The elements editors' Markdown can produce, in the reading face and the app's tokens. */
+/**
+ * The elements editors' Markdown can produce, in the reading face and the app's tokens. White space
+ * is collapsed as in any web page (a single newline in the source is a space, even where the passage
+ * sits inside a react-native-web Text, which would keep it); display math is a centred block.
+ */
 const css = `
-.${CLASS}{font-family:${fonts.serif};color:${colors.ink};overflow-wrap:anywhere}
+.${CLASS}{font-family:${fonts.serif};color:${colors.ink};overflow-wrap:anywhere;white-space:normal}
 .${CLASS}.reading{font-size:${type.reading.fontSize}px;line-height:${type.reading.lineHeight}px}
 .${CLASS}.compact{font-size:${type.body.fontSize}px;line-height:${type.body.lineHeight}px}
 .${CLASS}>:first-child{margin-top:0}
@@ -24,13 +28,13 @@ const css = `
 .${CLASS} a{color:${colors.teal};text-decoration:underline}
 .${CLASS} a:focus-visible{outline:2px solid ${colors.brass};outline-offset:2px}
 .${CLASS} code{font-family:${fonts.mono};font-size:0.85em;background:${colors.paperDeep};border-radius:${radius.sm}px;padding:0 ${space.xxs}px}
-.${CLASS} pre{background:${colors.paperDeep};border-radius:${radius.sm}px;padding:${space.sm}px;overflow-x:auto}
+.${CLASS} pre{background:${colors.paperDeep};border-radius:${radius.sm}px;padding:${space.sm}px;overflow-x:auto;white-space:pre}
 .${CLASS} pre code{padding:0;background:none}
 .${CLASS} blockquote{border-left:3px solid ${colors.rule};padding-left:${space.md}px;color:${colors.inkMuted}}
 .${CLASS} table{border-collapse:collapse;display:block;overflow-x:auto}
 .${CLASS} th,.${CLASS} td{border:1px solid ${colors.rule};padding:${space.xxs}px ${space.xs}px;text-align:left}
 .${CLASS} th{font-family:${fonts.sansSemiBold};font-weight:normal;background:${colors.paperDeep}}
-.${CLASS} .katex-display{overflow-x:auto;overflow-y:hidden;padding:${space.xxs}px 0}
+.${CLASS} .katex-display{display:block;text-align:center;margin:${space.sm}px 0;overflow-x:auto;overflow-y:hidden;padding:${space.xxs}px 0}
 .${CLASS} .katex-error{color:${colors.brass}}
 `;
 

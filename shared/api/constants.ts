@@ -54,7 +54,7 @@ export const SECTION_TITLES: Record<SectionField, string> = {
   whyItFails: 'Why it fails',
   worksheets: 'Run the numbers',
   whatFakesTheEffect: 'Artifacts that can look like the effect',
-  repliesAndAnswers: 'Replies and answers',
+  repliesAndAnswers: 'Counterpoints, answered',
   questionsToAsk: 'Questions to ask the claimant',
   cautions: 'Cautions',
   sources: 'Sources',
