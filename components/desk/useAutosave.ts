@@ -22,6 +22,8 @@ interface AutosaveOptions {
   /** The content to save, or undefined while it does not pass the schema. */
   content?: EntryContent;
   delayMs?: number;
+  /** After the first save of a new entry has made its draft (the editor moves to the draft's own address). */
+  onCreated?: (draft: DraftDto) => void;
 }
 
 const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
@@ -32,7 +34,9 @@ const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b)
  * from; a 409 `edit_conflict` stops saving and keeps the other version for the editor to choose
  * from (`keepMine` saves over it knowingly, `takeTheirs` drops the local changes). Never a silent overwrite.
  */
-export function useAutosave({ draft, slug, content, delayMs = 800 }: AutosaveOptions) {
+export function useAutosave({ draft, slug, content, delayMs = 800, onCreated }: AutosaveOptions) {
+  const created = useRef(onCreated);
+  created.current = onCreated;
   const client = useQueryClient();
   const [state, setState] = useState<SaveState>({ kind: 'unsaved' });
   const [saved, setSaved] = useState(draft);
@@ -50,6 +54,7 @@ export function useAutosave({ draft, slug, content, delayMs = 800 }: AutosaveOpt
         client.setQueryData(deskKeys.draft(answer.id), { draft: { ...answer, content: next } });
         void client.invalidateQueries({ queryKey: deskKeys.all, exact: true });
         setState({ kind: 'saved', at: new Date() });
+        if (!base) created.current?.(answer);
       } catch (error) {
         const theirs = draftOfConflict(error);
         setState(theirs && base ? { kind: 'conflict', theirs } : { kind: 'failed', problem: problemOf(error as Error) });
