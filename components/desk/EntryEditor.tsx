@@ -293,7 +293,7 @@ export function EntryEditor({ draft }: { draft?: DraftDto }) {
         />
         <Text testID="submit-why" style={type.caption}>
           {texBlockers.length
-            ? `Send for review waits until every formula reads: ${texBlockers[0].sentence}`
+            ? 'Send for review is held until KaTeX can read every formula: press a line above to go to it.'
             : ready && waitingForSave
               ? 'Send for review waits until the draft is saved.'
               : 'Another editor checks the draft and approves it or sends it back with a reason. Until then readers see the last published version.'}

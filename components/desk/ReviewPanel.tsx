@@ -27,21 +27,24 @@ export function ReviewPanel({ draft }: { draft: DraftDto }) {
   const approve = () => {
     if (!changeNote.trim()) return setMissing('changeNote');
     setMissing(null);
-    action.mutate(
-      { id: draft.id, action: 'approve', changeNote: changeNote.trim() },
-      {
+    // mutateAsync, not mutate's callbacks: the draft is fetched again once approved (its address now
+    // answers draft_published), which replaces this panel before a callback of mutate() would run.
+    action
+      .mutateAsync({ id: draft.id, action: 'approve', changeNote: changeNote.trim() })
+      .then((result) => {
         // The answer is the version just published: the reviewer lands on its permanent address.
-        onSuccess: (result) => {
-          const number = (result as Partial<EntryResponse> | undefined)?.version?.number;
-          router.replace(number ? `/entries/${draft.slug}/v/${number}` : `/entries/${draft.slug}`);
-        },
-      },
-    );
+        const number = (result as Partial<EntryResponse> | undefined)?.version?.number;
+        router.replace(number ? `/entries/${draft.slug}/v/${number}` : `/entries/${draft.slug}`);
+      })
+      .catch(() => undefined); // shown from action.error
   };
   const sendBack = () => {
     if (!reason.trim()) return setMissing('reason');
     setMissing(null);
-    action.mutate({ id: draft.id, action: 'send-back', reason: reason.trim() }, { onSuccess: () => router.replace('/desk') });
+    action
+      .mutateAsync({ id: draft.id, action: 'send-back', reason: reason.trim() })
+      .then(() => router.replace('/desk'))
+      .catch(() => undefined); // shown from action.error
   };
   const pending = action.isPending ? action.variables?.action : undefined;
 
