@@ -48,9 +48,9 @@ export const citationSchema = z.object({
   /** CSL-JSON item: at least an id, a type and a title; its address (URL) http(s) only, its DOI a DOI. */
   csl: z
     .object({
-      id: z.string({ error: 'an id as text' }).min(1, 'an id is needed').max(200, 'at most 200 characters'),
-      type: z.string({ error: 'a type as text' }).min(1, 'a type (article, book, webpage …) is needed').max(40, 'at most 40 characters'),
-      title: z.string({ error: 'a title as text' }).min(1, 'the source needs a title').max(500, 'at most 500 characters'),
+      id: z.string({ error: (iss) => (iss.input === undefined ? 'missing' : 'an id as text') }).min(1, 'an id is needed').max(200, 'at most 200 characters'),
+      type: z.string({ error: (iss) => (iss.input === undefined ? 'missing' : 'a type as text') }).min(1, 'a type (article, book, webpage …) is needed').max(40, 'at most 40 characters'),
+      title: z.string({ error: (iss) => (iss.input === undefined ? 'missing' : 'a title as text') }).min(1, 'the source needs a title').max(500, 'at most 500 characters'),
       URL: webAddressSchema.optional(),
       DOI: doiSchema.optional(),
     })
