@@ -12,10 +12,12 @@ import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
+import { SITE_NAME, usePageTitle } from '../ui/usePageTitle';
 import { DeskCorrections } from '../submissions/SubmissionLists';
 
 /** Where editors work: their drafts, the drafts waiting for their review, what was published lately. */
 export function DeskScreen() {
+  usePageTitle(`Desk — ${SITE_NAME}`, 'Where editors write, review and publish the entries of Counterweight.');
   return (
     <Screen
       testID="screen-desk"

@@ -46,6 +46,19 @@ describe('DraftScreen', () => {
     expect(screen.getByTestId('draft-back').getAttribute('href')).toBe('/desk');
   });
 
+  it('says where a published draft went, with a link to its version, rather than a bare "not found"', async () => {
+    mockFetch({
+      '/api/session': sessionOf(other),
+      '/api/drafts/7': () =>
+        jsonResponse(404, { error: { code: 'draft_published', message: 'Draft 7 is no longer open.' }, published: { slug: 'light-in-a-box', version: 2, title: version1.title } }),
+    });
+    renderWithProviders(<DraftScreen id={7} />);
+    const notice = await screen.findByTestId('draft-published');
+    expect(notice.textContent).toContain(`version 2 of “${version1.title}”`);
+    expect(screen.getByTestId('draft-published-link').getAttribute('href')).toBe('/entries/light-in-a-box/v/2');
+    expect(screen.queryByTestId('draft-not-found')).toBeNull();
+  });
+
   it('gives another editor the review panel and the preview once the draft is in review', async () => {
     mockFetch({ '/api/session': sessionOf(other), '/api/drafts/7': () => jsonResponse(200, { draft: draftOf({ state: 'in_review' }) }) });
     renderWithProviders(<DraftScreen id={7} />);

@@ -30,6 +30,9 @@ const draft: DraftDto = {
 const taxonomy = { laws: [], classes: [] };
 const type = (testID: string, text: string) => fireEvent.change(screen.getByTestId(testID), { target: { value: text } });
 
+// The editor renders every section: slow on a busy machine, so generous limits (no timing is tested).
+jest.setTimeout(60_000);
+
 beforeEach(() => setWindowWidth(390));
 
 describe('EntryEditor', () => {
@@ -40,16 +43,49 @@ describe('EntryEditor', () => {
     expect(screen.getByTestId('in-brief-count').textContent).toBe('17 of 120 words');
     type('editor-field-inBrief', Array.from({ length: 121 }, (_, i) => `word${i}`).join(' '));
     expect(screen.getByTestId('in-brief-count').textContent).toBe('121 of 120 words');
-    expect(screen.getByTestId('editor-error-inBrief').textContent).toBe('121 words; at most 120');
+    // The problem shows once the field is left, in our words.
+    expect(screen.queryByTestId('editor-error-inBrief')).toBeNull();
+    fireEvent.blur(screen.getByTestId('editor-field-inBrief'));
+    expect(screen.getByTestId('editor-error-inBrief').textContent).toBe('121 words: keep the brief to 120 words at most.');
   });
 
   it('previews the Markdown with the same pipeline readers get', async () => {
     mockFetch({ '/api/session': () => jsonResponse(200, editor('editor')), '/api/taxonomy': () => jsonResponse(200, taxonomy) });
     renderWithProviders(<EntryEditor draft={draft} />);
     type('editor-field-whyItFails', 'Momentum $p = mv$ is kept. <script>window.__pwned = 1</script>');
+    // On a phone the preview is one tap away, in place of the fields.
+    expect(screen.queryByTestId('editor-preview')).toBeNull();
+    fireEvent.click(screen.getByTestId('editor-mode-preview'));
+    expect(screen.getByTestId('editor-mode-preview').getAttribute('aria-selected')).toBe('true');
+    expect(screen.queryByTestId('editor-field-whyItFails')).toBeNull();
     const preview = screen.getByTestId('editor-preview');
     await waitFor(() => expect(within(preview).getByTestId('entry-section-whyItFails').querySelector('.katex annotation')!.textContent).toBe('p = mv'));
     expect(preview.querySelector('script')).toBeNull();
+  });
+
+  it('puts the preview beside the fields on a wide screen', async () => {
+    setWindowWidth(1366);
+    mockFetch({ '/api/session': () => jsonResponse(200, editor('editor')), '/api/taxonomy': () => jsonResponse(200, taxonomy) });
+    renderWithProviders(<EntryEditor draft={draft} />);
+    const columns = screen.getByTestId('editor-columns');
+    expect(within(columns).getByTestId('editor-field-title')).toBeTruthy();
+    expect(within(columns).getByTestId('editor-preview')).toBeTruthy();
+    expect(screen.queryByTestId('editor-mode')).toBeNull();
+  });
+
+  it('blocks "Send for review" while KaTeX cannot read a formula, naming the field and the line', async () => {
+    mockFetch({ '/api/session': () => jsonResponse(200, editor('editor')), '/api/taxonomy': () => jsonResponse(200, taxonomy), '/api/drafts/5': (init) => jsonResponse(200, { draft: { ...draft, content: JSON.parse(String(init?.body)).content, lockVersion: 3 } }) });
+    renderWithProviders(<EntryEditor draft={draft} />);
+    expect(screen.queryByTestId('submit-blocked')).toBeNull();
+    type('editor-field-whyItFails', 'Momentum is kept.\nSo $F = \\fra{P}{c}$ is the bound.');
+    // KaTeX's own words for "\fra" (from katex.renderToString with throwOnError): an undefined control sequence.
+    const blocked = await screen.findByTestId('submit-blocked', {}, { timeout: 3000 });
+    expect(screen.getByTestId('submit-blocked-whyItFails').textContent).toBe('Why it fails, line 2: KaTeX says Undefined control sequence: \\fra.');
+    expect(blocked.getAttribute('role')).toBe('alert');
+    expect(screen.getByTestId('submit-review').getAttribute('aria-disabled')).toBe('true');
+    expect(screen.getByTestId('submit-why').textContent).toContain('held until KaTeX can read every formula');
+    type('editor-field-whyItFails', 'Momentum is kept.\nSo $F = \\frac{P}{c}$ is the bound.');
+    await waitFor(() => expect(screen.queryByTestId('submit-blocked')).toBeNull(), { timeout: 3000 });
   });
 
   it('saves as the editor types, with the lock version it started from', async () => {
@@ -86,8 +122,8 @@ describe('EntryEditor', () => {
 
     // A bad name is marked beside its field, and nothing is saved until it is fixed.
     type('editor-field-ws-0-name', 'Cavity Bound');
-    expect(screen.getByTestId('editor-error-ws-0-name').textContent).toBe('lower-case words joined by hyphens');
-    expect(screen.getByTestId('editor-error-worksheets').textContent).toContain('worksheets[0].name');
+    expect(screen.getByTestId('editor-error-ws-0-name').textContent).toBe('Lower-case words joined by hyphens.');
+    expect(screen.getByTestId('editor-error-worksheets').textContent).toBe('Not saved until this is fixed: Run the numbers, number 1, name: lower-case words joined by hyphens.');
     type('editor-field-ws-0-name', 'cavity-bound');
     expect(screen.queryByTestId('editor-error-worksheets')).toBeNull();
 

@@ -1,5 +1,6 @@
 /** The new-entry screen of the Desk (app/desk/new.tsx renders NewEntryScreen). */
 import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { router } from 'expo-router';
 import NewEntryRoute from '@/app/desk/new';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 
@@ -54,6 +55,8 @@ describe('the new-entry screen', () => {
 
     await waitFor(() => expect(screen.getByTestId('save-status').textContent).toMatch(/^Saved /), { timeout: 30_000 });
     expect(created).toHaveLength(1);
+    // The address becomes the draft's own, replacing /desk/new (no extra history entry).
+    expect(router.replace).toHaveBeenCalledWith('/desk/drafts/21');
     expect(created[0].slug).toBe('light-in-a-sealed-tin');
     expect(created[0].content).toMatchObject({
       title: 'Thrust from light in a sealed tin',
@@ -68,7 +71,26 @@ describe('the new-entry screen', () => {
     renderWithProviders(<NewEntryRoute />);
     await screen.findByTestId('entry-editor');
     type('editor-field-slug', 'Light In A Tin');
-    expect(screen.getByTestId('editor-error-slug')).toBeTruthy();
+    // Not while typing: once the field is left.
+    expect(screen.queryByTestId('editor-error-slug')).toBeNull();
+    fireEvent.blur(screen.getByTestId('editor-field-slug'));
+    expect(screen.getByTestId('editor-error-slug').textContent).toBe('Lower-case words joined by hyphens.');
+    // Our words, never zod's defaults ("Too small: expected string to have >=3 characters").
+    type('editor-field-title', 'ab');
+    fireEvent.blur(screen.getByTestId('editor-field-title'));
+    expect(screen.getByTestId('editor-error-title').textContent).toBe('Give the title at least 3 characters.');
+    expect(screen.getByTestId('entry-editor').textContent).not.toMatch(/expected|Too small|Invalid input|>=/);
+  });
+
+  it('lists what is missing when "Send for review" is pressed too early, each field by name', async () => {
+    mockFetch({ '/api/session': sessionOf('editor'), '/api/taxonomy': () => jsonResponse(200, taxonomy) });
+    renderWithProviders(<NewEntryRoute />);
+    await screen.findByTestId('entry-editor');
+    expect(screen.queryByTestId('editor-error-title')).toBeNull();
+    fireEvent.click(screen.getByTestId('submit-review'));
+    expect(screen.getByTestId('editor-error-title').textContent).toBe('Give the title at least 3 characters.');
+    expect(screen.getByTestId('submit-missing-whyItFails').textContent).toBe('Why it fails: Write the technical objection.');
+    expect(screen.getByTestId('submit-missing').textContent).not.toMatch(/expected|Too small|Invalid input|>=/);
   });
 
   it('is for editors and admins only: a contributor is told so, a reader is offered sign-in', async () => {

@@ -39,16 +39,42 @@ describe('ReviewPanel', () => {
     expect(router.replace).not.toHaveBeenCalled();
   });
 
-  it('approves with the change note, trimmed, and opens the published entry', async () => {
-    const fetchMock = mockFetch({ '/api/session': session, '/api/drafts/11/approve': () => jsonResponse(200, {}) });
+  it('approves with the change note, trimmed, and opens the version just published', async () => {
+    // The answer of an approval is the published version (GET /api/entries/:slug/versions/:n's shape).
+    const published = { entry: { slug: 'light-in-a-box', status: 'published', title: version1.title, latestVersion: 1 }, version: { number: 1 } };
+    const fetchMock = mockFetch({ '/api/session': session, '/api/drafts/11/approve': () => jsonResponse(200, published) });
     renderWithProviders(<ReviewPanel draft={draft} />);
     type('editor-field-change-note', '  First published version.  ');
     fireEvent.click(screen.getByTestId('approve'));
-    await waitFor(() => expect(router.replace).toHaveBeenCalledWith('/entries/light-in-a-box'));
+    await waitFor(() => expect(router.replace).toHaveBeenCalledWith('/entries/light-in-a-box/v/1'));
     const [[, init]] = callsTo(fetchMock, '/api/drafts/11/approve');
     expect(init?.method).toBe('POST');
     expect(JSON.parse(String(init?.body))).toEqual({ changeNote: 'First published version.' });
     expect((init?.headers as Record<string, string>)['X-CSRF-Token']).toBe('csrf-review');
+  });
+
+  it('says a new entry has nothing published to compare with', () => {
+    mockFetch({ '/api/session': session });
+    renderWithProviders(<ReviewPanel draft={draft} />);
+    expect(screen.getByTestId('review-new-entry').textContent).toContain('A new entry');
+    expect(screen.queryByTestId('diff-view')).toBeNull();
+  });
+
+  it('shows a revision’s changes against the published version before the approve button', async () => {
+    const revision: Draft = { ...draft, basedOn: 2, content: { ...version1, title: 'Thrust from light sealed in a box' } };
+    mockFetch({
+      '/api/session': session,
+      '/api/entries/light-in-a-box': () => jsonResponse(200, { entry: { slug: 'light-in-a-box', status: 'published', title: version1.title, latestVersion: 2 }, version: { number: 2, content: version1 } }),
+    });
+    renderWithProviders(<ReviewPanel draft={revision} />);
+    const diff = await screen.findByTestId('diff-view');
+    expect(diff.textContent).toContain('From version 2, as published to this draft');
+    const title = screen.getByTestId('diff-section-Title');
+    expect(title.textContent).toContain('sealed');
+    // The changes come before the approve button in the panel (the reviewer reads them first).
+    const panel = screen.getByTestId('review-panel');
+    const order = Array.from(panel.querySelectorAll('[data-testid="diff-view"], [data-testid="approve"]')).map((el) => el.getAttribute('data-testid'));
+    expect(order).toEqual(['diff-view', 'approve']);
   });
 
   it('wants a reason before sending back, then sends it and returns to the Desk', async () => {

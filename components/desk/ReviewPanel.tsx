@@ -2,7 +2,11 @@ import { router } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { useDraftAction } from '../queries/drafts';
-import type { DraftDto } from '@/shared/api-types';
+import { useEntry } from '../queries/entries';
+import type { DraftDto, EntryResponse } from '@/shared/api-types';
+import { DiffView } from '../entry/DiffView';
+import { ErrorNotice } from '../ui/ErrorNotice';
+import { Loading } from '../ui/Loading';
 import { ProblemNotice } from '../auth/Form';
 import { problemOf } from '../auth/useForm';
 import { space, type } from '../theme';
@@ -10,8 +14,9 @@ import { Button } from '../ui/Button';
 import { EditorField } from './EditorField';
 
 /**
- * For an editor reviewing someone else's draft: approve it with a change note (publishing the next
- * version), or send it back to its author with the reason.
+ * For an editor reviewing someone else's draft: what it changes against the published version (for
+ * a revision), then approve it with a change note (publishing the next version, and going to it), or
+ * send it back to its author with the reason.
  */
 export function ReviewPanel({ draft }: { draft: DraftDto }) {
   const [changeNote, setChangeNote] = useState('');
@@ -22,12 +27,24 @@ export function ReviewPanel({ draft }: { draft: DraftDto }) {
   const approve = () => {
     if (!changeNote.trim()) return setMissing('changeNote');
     setMissing(null);
-    action.mutate({ id: draft.id, action: 'approve', changeNote: changeNote.trim() }, { onSuccess: () => router.replace(`/entries/${draft.slug}`) });
+    // mutateAsync, not mutate's callbacks: the draft is fetched again once approved (its address now
+    // answers draft_published), which replaces this panel before a callback of mutate() would run.
+    action
+      .mutateAsync({ id: draft.id, action: 'approve', changeNote: changeNote.trim() })
+      .then((result) => {
+        // The answer is the version just published: the reviewer lands on its permanent address.
+        const number = (result as Partial<EntryResponse> | undefined)?.version?.number;
+        router.replace(number ? `/entries/${draft.slug}/v/${number}` : `/entries/${draft.slug}`);
+      })
+      .catch(() => undefined); // shown from action.error
   };
   const sendBack = () => {
     if (!reason.trim()) return setMissing('reason');
     setMissing(null);
-    action.mutate({ id: draft.id, action: 'send-back', reason: reason.trim() }, { onSuccess: () => router.replace('/desk') });
+    action
+      .mutateAsync({ id: draft.id, action: 'send-back', reason: reason.trim() })
+      .then(() => router.replace('/desk'))
+      .catch(() => undefined); // shown from action.error
   };
   const pending = action.isPending ? action.variables?.action : undefined;
 
@@ -37,6 +54,7 @@ export function ReviewPanel({ draft }: { draft: DraftDto }) {
         Written by {draft.author.displayName}. Read it through against its sources and run its worksheets; approving
         publishes it as the next version under your name as reviewer.
       </Text>
+      <Changes draft={draft} />
       <View testID="change-note" style={styles.group}>
         <EditorField
           name="change-note"
@@ -64,6 +82,31 @@ export function ReviewPanel({ draft }: { draft: DraftDto }) {
       <ProblemNotice testID="review-error" problem={action.error ? problemOf(action.error) : null} />
     </View>
   );
+}
+
+/** A revision against the version readers see now, section by section; a new entry has nothing to compare with. */
+function Changes({ draft }: { draft: DraftDto }) {
+  return (
+    <View testID="review-changes" style={styles.group}>
+      <Text role="heading" aria-level={2} style={type.title}>
+        What this draft changes
+      </Text>
+      {draft.basedOn === null ? (
+        <Text testID="review-new-entry" style={type.body}>
+          A new entry: nothing of it is published yet, so every section below is new. Read it whole.
+        </Text>
+      ) : (
+        <Published draft={draft} />
+      )}
+    </View>
+  );
+}
+
+function Published({ draft }: { draft: DraftDto }) {
+  const { data, error, isPending, refetch } = useEntry(draft.slug);
+  if (isPending) return <Loading testID="review-diff-loading" label="Loading the published version…" />;
+  if (error) return <ErrorNotice testID="review-diff-error" error={error} what="the published version" onRetry={() => void refetch()} />;
+  return <DiffView from={{ label: `version ${data.version.number}, as published`, content: data.version.content }} to={{ label: 'this draft', content: draft.content }} />;
 }
 
 const styles = StyleSheet.create({

@@ -21,6 +21,7 @@ import { Loading } from '../ui/Loading';
 import { Notice } from '../ui/Notice';
 import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
+import { SITE_NAME, usePageTitle } from '../ui/usePageTitle';
 
 
 /** One word or phrase a line; blank lines dropped. */
@@ -47,6 +48,7 @@ export function formErrors(error: unknown, terms: string[]): { terms?: string; n
 }
 
 export function SynonymsScreen() {
+  usePageTitle(`Synonyms — ${SITE_NAME}`);
   return (
     <Screen
       testID="screen-synonyms"

@@ -65,11 +65,11 @@ describe('WorksheetEditor', () => {
   it('shows the schema message beside a bad name', () => {
     render(<Harness initial={[start]} emitted={[]} />);
     type('ws-0-name', 'Cavity Bound');
-    expect(within(screen.getByTestId('ws-0-name')).getByTestId('editor-error-ws-0-name').textContent).toBe('lower-case words joined by hyphens');
+    expect(within(screen.getByTestId('ws-0-name')).getByTestId('editor-error-ws-0-name').textContent).toBe('Lower-case words joined by hyphens.');
     expect(field('ws-0-name').getAttribute('aria-invalid')).toBe('true');
 
     type('ws-0-step-0-name', '2F');
-    expect(within(screen.getByTestId('ws-0-step-0-name')).getByTestId('editor-error-ws-0-step-0-name').textContent).toMatch(/^a name of letters, digits and _/);
+    expect(within(screen.getByTestId('ws-0-step-0-name')).getByTestId('editor-error-ws-0-step-0-name').textContent).toMatch(/^A name of letters, digits and _/);
     // Nothing else is marked.
     expect(screen.queryByTestId('editor-error-ws-0-step-0-expression')).toBeNull();
     expect(screen.getByTestId('ws-0-not-run')).toBeTruthy();
@@ -86,7 +86,7 @@ describe('WorksheetEditor', () => {
     expect(screen.getByTestId('editor-error-ws-0-check-0-name')).toBeTruthy();
     expect(screen.getByTestId('ws-0-step-0-value').textContent).toMatch(/^= /);
     type('ws-0-check-0-name', 'P');
-    expect(screen.getByTestId('editor-error-ws-0-check-0-name').textContent).toBe('"P" is already used by inputs[0]');
+    expect(screen.getByTestId('editor-error-ws-0-check-0-name').textContent).toBe('"P" is already used by inputs[0].');
   });
 
   it('emits the worksheet array: adds, edits, moves and removes', () => {
@@ -146,6 +146,6 @@ describe('WorksheetEditor', () => {
     const plot = { name: 'sweep', label: 'Bound against power', sweep: { input: 'Q', from: '1 kW', to: '10 kW', points: 5, scale: 'linear' }, series: ['F_bound'], yScale: 'linear' };
     type('ws-0-plots', JSON.stringify([plot]));
     expect(emitted.at(-1)![0].plots).toEqual([plot]);
-    expect(screen.getByTestId('editor-error-ws-0-plots').textContent).toBe('plots[0].sweep.input: "Q" is not an input');
+    expect(screen.getByTestId('editor-error-ws-0-plots').textContent).toBe('plots[0].sweep.input: "Q" is not an input.');
   });
 });

@@ -1,6 +1,7 @@
 import { useEffect, useMemo, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { compileWorksheetWithKit } from '@/shared/compute';
+import { ourWords } from '@/shared/schemas/drafts';
 import { worksheetSchema, type Worksheet } from '@/shared/worksheet/schema';
 import type { WorksheetResult } from '@/shared/worksheet/types';
 import { colors, space, type } from '../theme';
@@ -9,6 +10,7 @@ import { Notice } from '../ui/Notice';
 import { FieldError } from '../worksheet/QuantityField';
 import { WorksheetView } from '../worksheet/WorksheetView';
 import { EditorField } from './EditorField';
+import { asSentence } from './editorValues';
 
 /** At most this many worksheets to an entry (the entry schema's limit). */
 const MAX_WORKSHEETS = 6;
@@ -78,11 +80,12 @@ export const blankWorksheet = (): Worksheet => ({ name: '', title: '', inputs: [
 /** The schema's problems with one worksheet, by path: "steps.1.expression" → its message (the first one). */
 function problemsOf(ws: Worksheet): Map<string, string> {
   const problems = new Map<string, string>();
-  const result = worksheetSchema.safeParse(ws);
+  // In our words (ourWords), never zod's defaults, as sentences like the rest of the editor's.
+  const result = worksheetSchema.safeParse(ws, { error: ourWords });
   if (!result.success) {
     for (const issue of result.error.issues) {
       const key = issue.path.map(String).join('.');
-      if (!problems.has(key)) problems.set(key, issue.message);
+      if (!problems.has(key)) problems.set(key, asSentence(issue.message));
     }
   }
   return problems;

@@ -5,6 +5,7 @@
  * `readValues` turns it into content checked by the same schema the server uses.
  */
 import { entryContentSchema, IN_BRIEF_MAX_WORDS, slugSchema, wordCount, type Citation, type EntryContent } from '@/shared/entries/schema';
+import { fieldSentence, ourWords } from '@/shared/schemas/drafts';
 import { worksheetSchema, type Worksheet } from '@/shared/worksheet/schema';
 
 export interface EditorValues {
@@ -56,17 +57,22 @@ export function editorValues(slug: string, content?: EntryContent): EditorValues
 
 export interface WorksheetsReading {
   worksheets?: EntryContent['worksheets'];
-  /** What is wrong, with the path of the first problem: "worksheets[0].steps: …". */
+  /** What is wrong, as a sentence naming where: "Run the numbers, number 1, steps: add at least one." */
   error?: string;
 }
 
-/** The worksheets as the form holds them, each checked by worksheetSchema. */
+/** A problem as the editor shows it: a sentence that starts with a capital and ends with a stop. */
+export const asSentence = (message: string) => {
+  const text = message.trim().replace(/[.]$/, '');
+  return `${text.charAt(0).toUpperCase()}${text.slice(1)}.`;
+};
+
+/** The worksheets as the form holds them, each checked by worksheetSchema (in our words, not zod's). */
 export function readWorksheets(sheets: Worksheet[]): WorksheetsReading {
-  const result = worksheetSchema.array().max(6, 'at most 6 worksheets').safeParse(sheets);
+  const result = worksheetSchema.array().max(6, 'at most 6 worksheets').safeParse(sheets, { error: ourWords });
   if (!result.success) {
     const issue = result.error.issues[0];
-    const path = issue.path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${String(p)}`)).join('');
-    return { error: `worksheets${path}: ${issue.message}` };
+    return { error: fieldSentence(['worksheets', ...issue.path], issue.message) };
   }
   return { worksheets: result.data };
 }
@@ -74,18 +80,18 @@ export function readWorksheets(sheets: Worksheet[]): WorksheetsReading {
 export interface Reading {
   /** The content, when every field passes. */
   content?: EntryContent;
-  /** What is wrong, by field. */
+  /** What is wrong, by field, as sentences in our words ("Give the title at least 3 characters."). */
   problems: Partial<Record<EditorField, string>>;
 }
 
 export function readValues(values: EditorValues): Reading {
   const problems: Partial<Record<EditorField, string>> = {};
   const slug = slugSchema.safeParse(values.slug);
-  if (!slug.success) problems.slug = slug.error.issues[0].message;
+  if (!slug.success) problems.slug = asSentence(values.slug ? slug.error.issues[0].message : 'choose the address, e.g. photon-box-drive');
   const sheets = readWorksheets(values.worksheets);
   if (sheets.error) problems.worksheets = sheets.error;
   const words = wordCount(values.inBrief);
-  if (words > IN_BRIEF_MAX_WORDS) problems.inBrief = `${words} words; at most ${IN_BRIEF_MAX_WORDS}`;
+  if (words > IN_BRIEF_MAX_WORDS) problems.inBrief = `${words} words: keep the brief to ${IN_BRIEF_MAX_WORDS} words at most.`;
 
   const result = entryContentSchema.safeParse({
     title: values.title,
@@ -102,11 +108,12 @@ export function readValues(values: EditorValues): Reading {
     cautions: values.cautions,
     related: lines(values.related),
     sources: values.sources,
-  });
+  }, { error: ourWords });
   if (!result.success) {
     for (const issue of result.error.issues) {
       const field = issue.path[0] as EditorField;
-      problems[field] ??= issue.path.length > 1 ? `item ${Number(issue.path[1]) + 1}: ${issue.message}` : issue.message;
+      // Nested: "Number 2: write the question, or remove it." (the field's own label is beside it).
+      problems[field] ??= issue.path.length > 1 ? fieldSentence(issue.path.slice(1), issue.message) : asSentence(issue.message);
     }
   }
   return Object.keys(problems).length === 0 && result.success ? { content: result.data, problems } : { problems };

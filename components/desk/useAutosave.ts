@@ -17,11 +17,13 @@ export type SaveState =
 
 interface AutosaveOptions {
   /** The draft being edited; undefined for a new entry, created on its first save. */
-  draft?: { id: number; lockVersion: number; content: EntryContent };
+  draft?: { id: number; lockVersion: number; content: EntryContent; updatedAt?: string };
   slug: string;
   /** The content to save, or undefined while it does not pass the schema. */
   content?: EntryContent;
   delayMs?: number;
+  /** After the first save of a new entry has made its draft (the editor moves to the draft's own address). */
+  onCreated?: (draft: DraftDto) => void;
 }
 
 const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
@@ -32,11 +34,15 @@ const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b)
  * from; a 409 `edit_conflict` stops saving and keeps the other version for the editor to choose
  * from (`keepMine` saves over it knowingly, `takeTheirs` drops the local changes). Never a silent overwrite.
  */
-export function useAutosave({ draft, slug, content, delayMs = 800 }: AutosaveOptions) {
+export function useAutosave({ draft, slug, content, delayMs = 800, onCreated }: AutosaveOptions) {
+  const created = useRef(onCreated);
+  created.current = onCreated;
   const client = useQueryClient();
   const [state, setState] = useState<SaveState>({ kind: 'unsaved' });
   const [saved, setSaved] = useState(draft);
   const inFlight = useRef(false);
+  /** When what is on the server was saved: the draft's own time when opened, then each save's. */
+  const savedAt = useRef(draft?.updatedAt ? new Date(draft.updatedAt) : new Date());
 
   const write = useCallback(
     async (next: EntryContent, base: { id: number; lockVersion: number } | undefined) => {
@@ -49,7 +55,9 @@ export function useAutosave({ draft, slug, content, delayMs = 800 }: AutosaveOpt
         setSaved({ id: answer.id, lockVersion: answer.lockVersion, content: next });
         client.setQueryData(deskKeys.draft(answer.id), { draft: { ...answer, content: next } });
         void client.invalidateQueries({ queryKey: deskKeys.all, exact: true });
-        setState({ kind: 'saved', at: new Date() });
+        savedAt.current = new Date();
+        setState({ kind: 'saved', at: savedAt.current });
+        if (!base) created.current?.(answer);
       } catch (error) {
         const theirs = draftOfConflict(error);
         setState(theirs && base ? { kind: 'conflict', theirs } : { kind: 'failed', problem: problemOf(error as Error) });
@@ -67,7 +75,12 @@ export function useAutosave({ draft, slug, content, delayMs = 800 }: AutosaveOpt
       if (!blocked) setState({ kind: 'incomplete' });
       return;
     }
-    if (blocked || inFlight.current || (saved && same(saved.content, content))) return;
+    if (blocked || inFlight.current) return;
+    // Nothing to save: what is typed is what the server has (a draft just opened, or a change undone).
+    if (saved && same(saved.content, content)) {
+      setState((current) => (current.kind === 'unsaved' || current.kind === 'incomplete' ? { kind: 'saved', at: savedAt.current } : current));
+      return;
+    }
     setState((current) => (current.kind === 'saving' ? current : { kind: 'unsaved' }));
     const timer = setTimeout(() => void write(content, saved), delayMs);
     return () => clearTimeout(timer);

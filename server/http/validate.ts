@@ -11,14 +11,14 @@
  * `tooLarge: true`, a field over its size limit answers 413 `too_large` instead.
  */
 import type { NextFunction, Request, Response } from 'express';
-import type { ZodType } from 'zod';
+import type { core, ZodType } from 'zod';
 import { HttpError, validationError } from './errors';
 
 type Where = 'body' | 'query' | 'params';
 
 /** Parses `data` with `schema`, or throws a 400 naming each offending field under `where`. */
-export function validate<T>(schema: ZodType<T>, data: unknown, where: Where): T {
-  const parsed = schema.safeParse(data);
+export function validate<T>(schema: ZodType<T>, data: unknown, where: Where, error?: core.$ZodErrorMap): T {
+  const parsed = schema.safeParse(data, error && { error });
   if (!parsed.success) throw validationError(where, parsed.error);
   return parsed.data;
 }
@@ -27,8 +27,8 @@ export function validate<T>(schema: ZodType<T>, data: unknown, where: Where): T 
  * Like validate(), but a field over its size limit answers 413 (too_large) naming the field; any
  * other problem 400 naming each field.
  */
-export function validateSized<T>(schema: ZodType<T>, data: unknown, where: Where): T {
-  const parsed = schema.safeParse(data);
+export function validateSized<T>(schema: ZodType<T>, data: unknown, where: Where, error?: core.$ZodErrorMap): T {
+  const parsed = schema.safeParse(data, error && { error });
   if (parsed.success) return parsed.data;
   const big = parsed.error.issues.filter((i) => i.code === 'too_big');
   if (big.length) {
@@ -46,6 +46,8 @@ export interface Schemas<P = unknown, Q = unknown, B = unknown> {
   body?: ZodType<B>;
   /** A body field over its size limit answers 413 too_large (drafts, citations, retiring). */
   tooLarge?: boolean;
+  /** Words for the checks that carry no message of their own (e.g. `ourWords` of shared/schemas/drafts.ts). */
+  error?: core.$ZodErrorMap;
 }
 
 type Out<S, K extends 'params' | 'query' | 'body'> = S extends { [k in K]: ZodType<infer T> } ? T : undefined;
@@ -71,9 +73,9 @@ export function validated<const S extends Schemas>(schemas: S): ValidatedMiddlew
   const middleware = (req: Request, res: Response, next: NextFunction) => {
     try {
       const valid = {
-        params: schemas.params ? validate(schemas.params, req.params, 'params') : undefined,
-        query: schemas.query ? validate(schemas.query, req.query, 'query') : undefined,
-        body: schemas.body ? (schemas.tooLarge ? validateSized : validate)(schemas.body, req.body ?? {}, 'body') : undefined,
+        params: schemas.params ? validate(schemas.params, req.params, 'params', schemas.error) : undefined,
+        query: schemas.query ? validate(schemas.query, req.query, 'query', schemas.error) : undefined,
+        body: schemas.body ? (schemas.tooLarge ? validateSized : validate)(schemas.body, req.body ?? {}, 'body', schemas.error) : undefined,
       };
       res.locals.valid = valid;
       next();

@@ -93,3 +93,8 @@ export type EditConflictExtra = DraftResponse;
 export interface DraftExistsExtra {
   draftId: number;
 }
+
+/** The body of a 404 `draft_published` beside its error: the draft asked for was published as this version. */
+export interface DraftPublishedExtra {
+  published: { slug: string; version: number; title: string };
+}

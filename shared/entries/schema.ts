@@ -8,13 +8,13 @@ import { z } from 'zod';
 import { worksheetSchema } from '../worksheet/schema';
 
 export const slugSchema = z
-  .string()
+  .string({ error: 'lower-case words joined by hyphens, as text' })
   .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'lower-case words joined by hyphens')
-  .min(3)
-  .max(80);
+  .min(3, 'at least 3 characters')
+  .max(80, 'at most 80 characters');
 
 /** Markdown with TeX math ($…$, $$…$$), rendered by shared/markdown.ts and sanitised. */
-const markdown = (max: number) => z.string().max(max, `at most ${max} characters`);
+const markdown = (max: number) => z.string({ error: 'write this part as text (Markdown)' }).max(max, `at most ${max} characters`);
 
 /** True for an absolute http: or https: address with a host: the only addresses a reader is ever sent to. */
 export function isWebAddress(s: string): boolean {
@@ -48,38 +48,44 @@ export const citationSchema = z.object({
   /** CSL-JSON item: at least an id, a type and a title; its address (URL) http(s) only, its DOI a DOI. */
   csl: z
     .object({
-      id: z.string().min(1).max(200),
-      type: z.string().min(1).max(40),
-      title: z.string().min(1).max(500),
+      id: z.string({ error: (iss) => (iss.input === undefined ? 'missing' : 'an id as text') }).min(1, 'an id is needed').max(200, 'at most 200 characters'),
+      type: z.string({ error: (iss) => (iss.input === undefined ? 'missing' : 'a type as text') }).min(1, 'a type (article, book, webpage …) is needed').max(40, 'at most 40 characters'),
+      title: z.string({ error: (iss) => (iss.input === undefined ? 'missing' : 'a title as text') }).min(1, 'the source needs a title').max(500, 'at most 500 characters'),
       URL: webAddressSchema.optional(),
       DOI: doiSchema.optional(),
     })
     .passthrough(),
-  note: z.string().max(500).default(''),
+  note: z.string({ error: 'a note as text' }).max(500, 'at most 500 characters').default(''),
 });
 
 export const replySchema = z.object({
-  reply: markdown(2000).min(1),
-  answer: markdown(4000).min(1),
+  reply: markdown(2000).min(1, 'write what they say, or remove the pair'),
+  answer: markdown(4000).min(1, 'write the answer, or remove the pair'),
 });
 
 /** The content of one version: every section of DESIGN.md §3, in reading order. */
 export const entryContentSchema = z.object({
-  title: z.string().trim().min(3).max(160),
-  aliases: z.array(z.string().trim().min(1).max(120)).max(20).default([]),
+  title: z.string({ error: 'write a title' }).trim().min(3, 'give the title at least 3 characters').max(160, 'keep the title to 160 characters at most'),
+  aliases: z
+    .array(z.string({ error: 'each name as text' }).trim().min(1, 'an empty name').max(120, 'keep each name to 120 characters at most'), { error: 'a list of names' })
+    .max(20, 'list at most 20 other names')
+    .default([]),
   mechanismClass: slugSchema,
-  laws: z.array(slugSchema).min(1, 'name at least one conservation law').max(5),
+  laws: z.array(slugSchema, { error: 'a list of laws' }).min(1, 'name at least one conservation law').max(5, 'name at most 5 laws'),
   /** Plain language, at most 120 words (checked by wordCount). */
-  inBrief: markdown(1200).min(1),
-  howItIsPitched: markdown(6000).min(1),
-  whyItFails: markdown(20000).min(1),
-  worksheets: z.array(worksheetSchema).max(6).default([]),
+  inBrief: markdown(1200).min(1, 'write the brief in plain language'),
+  howItIsPitched: markdown(6000).min(1, 'say how the claim is usually pitched'),
+  whyItFails: markdown(20000).min(1, 'write the technical objection'),
+  worksheets: z.array(worksheetSchema, { error: 'a list of worksheets' }).max(6, 'at most 6 worksheets').default([]),
   whatFakesTheEffect: markdown(12000).default(''),
-  repliesAndAnswers: z.array(replySchema).max(20).default([]),
-  questionsToAsk: z.array(z.string().trim().min(1).max(600)).max(20).default([]),
+  repliesAndAnswers: z.array(replySchema, { error: 'a list of replies' }).max(20, 'at most 20 replies').default([]),
+  questionsToAsk: z
+    .array(z.string({ error: 'each question as text' }).trim().min(1, 'write the question, or remove it').max(600, 'keep each question to 600 characters at most'), { error: 'a list of questions' })
+    .max(20, 'at most 20 questions')
+    .default([]),
   cautions: markdown(4000).default(''),
-  related: z.array(slugSchema).max(20).default([]),
-  sources: z.array(citationSchema).max(60).default([]),
+  related: z.array(slugSchema, { error: 'a list of entry addresses' }).max(20, 'at most 20 related entries').default([]),
+  sources: z.array(citationSchema, { error: 'a list of sources' }).max(60, 'at most 60 sources').default([]),
 });
 
 export type EntryContent = z.infer<typeof entryContentSchema>;

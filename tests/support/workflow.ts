@@ -4,7 +4,7 @@
  * (`npx jest <file> -t '<name>'`) as well as with the rest of its file. Every step checks the status
  * it expects and throws naming the step otherwise.
  */
-import type { Client } from './app';
+import { Client } from './app';
 
 /** Throws naming `what` unless the answer has the expected status. */
 export function expectStatus<T extends { status: number; body: unknown }>(what: string, res: T, status: number): T {
@@ -82,4 +82,18 @@ export async function publishTwoAuthorEntry(first: Client, second: Client, revie
     200,
   );
   await approveDraft(reviewer, await submitDraft(second, { id: draft.id, lockVersion: saved.body.draft.lockVersion }), 'Second version.');
+}
+
+/** A client signed in as `email` on a running server (a browser test's harness at `base`), for steps through the API. */
+export async function signedInAt(base: string, email: string, password: string): Promise<Client> {
+  const client = await Client.start(base);
+  expectStatus(`signing in as ${email}`, await client.post('/api/auth/sign-in', { email, password }), 200);
+  await client.session();
+  return client;
+}
+
+/** Saves a draft's content (200); returns its new lock version. */
+export async function saveDraft(author: Client, draft: DraftRef, content: object): Promise<DraftRef> {
+  const res = expectStatus(`saving draft ${draft.id}`, await author.put(`/api/drafts/${draft.id}`, { content, lockVersion: draft.lockVersion }), 200);
+  return { id: draft.id, lockVersion: res.body.draft.lockVersion };
 }

@@ -6,6 +6,7 @@
  */
 import { Router, type Request } from 'express';
 import type { EntryContent } from '../../../shared/entries/schema';
+import { ourWords } from '../../../shared/schemas/drafts';
 import { MAX_MARKDOWN_NESTING, markdownNesting } from '../../http/depth';
 import { fieldsError } from '../../http/errors';
 import { validated } from '../../http/validate';
@@ -40,7 +41,7 @@ function checkMarkdownNesting(content: EntryContent): void {
 export function draftRoutes(allow: Allow, entries: Entries, origin: (req: Request) => string): Router {
   const r = Router();
 
-  r.post('/drafts', allow('drafts.create'), validated({ body: createDraftSchema, tooLarge: true }), async (req, res) => {
+  r.post('/drafts', allow('drafts.create'), validated({ body: createDraftSchema, tooLarge: true, error: ourWords }), async (req, res) => {
     const { slug, content } = res.locals.valid.body;
     checkMarkdownNesting(content as EntryContent);
     res.status(201).json({ draft: await entries.drafts.createDraft(req.user!, slug, content as EntryContent) });
@@ -51,7 +52,7 @@ export function draftRoutes(allow: Allow, entries: Entries, origin: (req: Reques
     res.set('Cache-Control', 'no-store').json({ draft: await entries.drafts.getDraft(id) });
   });
 
-  r.put('/drafts/:id', allow('drafts.update'), validated({ params: draftIdParams, body: updateDraftSchema, tooLarge: true }), async (req, res) => {
+  r.put('/drafts/:id', allow('drafts.update'), validated({ params: draftIdParams, body: updateDraftSchema, tooLarge: true, error: ourWords }), async (req, res) => {
     const { params: { id }, body: { content, lockVersion } } = res.locals.valid;
     checkMarkdownNesting(content as EntryContent);
     res.json({ draft: await entries.drafts.updateDraft(req.user!, id, content as EntryContent, lockVersion) });

@@ -4,7 +4,7 @@
  * is vetting's, at submit. Every write runs in one transaction with its audit event.
  */
 import { UniqueConstraintError, type Transaction } from 'sequelize';
-import type { DraftDto } from '../../../shared/api-types';
+import type { DraftDto, DraftPublishedExtra } from '../../../shared/api-types';
 import { IN_BRIEF_MAX_WORDS, wordCount, type EntryContent } from '../../../shared/entries/schema';
 import { fieldsError, HttpError } from '../../http/errors';
 import { audit, ConservationLaw, Entry, EntryVersion, MechanismClass, User } from '../../models';
@@ -18,6 +18,17 @@ export async function presentDraft(v: EntryVersion, transaction?: Transaction): 
   const reviewer = v.reviewerId ? (v.reviewer ?? (await User.findByPk(v.reviewerId, { transaction }))) : null;
   const basedOn = v.basedOnId ? await EntryVersion.findByPk(v.basedOnId, { attributes: ['number'], transaction }) : null;
   return draft(v, entry, author, reviewer, basedOn?.number ?? null);
+}
+
+/**
+ * A draft that was approved is the published version itself (the same row, numbered at approval):
+ * its old address answers 404 `draft_published` with the version it became, so that a link in an
+ * old e-mail or a reload after approving leads to the entry rather than to nothing.
+ */
+async function draftPublished(v: EntryVersion): Promise<HttpError> {
+  const entry = (await Entry.findByPk(v.entryId, { attributes: ['slug', 'title'] }))!;
+  const published: DraftPublishedExtra['published'] = { slug: entry.slug, version: v.number!, title: v.content.title };
+  return new HttpError(404, 'draft_published', `Draft ${v.id} is no longer open: it was published as version ${v.number} of “${published.title}”.`, undefined, { published });
 }
 
 /** Mechanism class and laws must name the taxonomy; related entries must exist; the brief at most 120 words. */
@@ -68,6 +79,7 @@ export class Drafts {
 
   async getDraft(id: number): Promise<DraftDto> {
     const v = await EntryVersion.findByPk(id, { include: PEOPLE });
+    if (v && v.number !== null && (v.state === 'published' || v.state === 'superseded')) throw await draftPublished(v);
     if (!v || (v.state !== 'draft' && v.state !== 'in_review')) throw draftNotFound(id);
     return presentDraft(v);
   }

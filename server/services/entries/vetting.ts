@@ -8,7 +8,9 @@ import { Op, type Transaction } from 'sequelize';
 import type { DraftDto, EntryStateDto } from '../../../shared/api-types';
 import { kitFunctions } from '../../../shared/checks/kit-functions';
 import { entryContentSchema, type EntryContent } from '../../../shared/entries/schema';
+import { contentTexProblems, texProblemWords } from '../../../shared/entries/tex-check';
 import { permalink } from '../../../shared/permalink';
+import { fieldSentence, ourWords } from '../../../shared/schemas/drafts';
 import { validateWorksheet } from '../../../shared/worksheet/evaluate';
 import { worksheetSchema } from '../../../shared/worksheet/schema';
 import { HttpError, validationError } from '../../http/errors';
@@ -26,27 +28,34 @@ export const VERSION_STEPS = {
   sendBack: { from: 'in_review', to: 'draft' },
 } as const satisfies Record<string, { from: EntryVersion['state']; to: EntryVersion['state'] }>;
 
-/** The full check of a draft before review: schema, taxonomy, brief, worksheets. */
+/**
+ * The full check of a draft before review: schema (in our words, never zod's defaults), taxonomy,
+ * brief, TeX that KaTeX cannot read (named by field and line), worksheets.
+ */
 async function checkComplete(content: unknown, transaction: Transaction): Promise<EntryContent> {
-  const parsed = entryContentSchema.safeParse(content);
-  if (!parsed.success) {
-    const e = validationError('content', parsed.error);
-    throw new HttpError(400, 'draft_incomplete', `The draft is not ready for review. ${e.message}`, e.fields);
-  }
+  const notReady = (fields: Record<string, string>) => {
+    const [first] = Object.keys(fields);
+    return new HttpError(400, 'draft_incomplete', `The draft is not ready for review. ${fieldSentence(first, fields[first])}`, fields);
+  };
+  const parsed = entryContentSchema.safeParse(content, { error: ourWords });
+  if (!parsed.success) throw notReady(validationError('content', parsed.error).fields!);
   const full = parsed.data;
   try {
     await checkTaxonomy(full, 'content', transaction);
   } catch (err) {
-    if (err instanceof HttpError) throw new HttpError(400, 'draft_incomplete', `The draft is not ready for review. ${err.message}`, err.fields);
+    if (err instanceof HttpError && err.fields) throw notReady(err.fields);
     throw err;
   }
+  const tex: Record<string, string> = {};
+  for (const [path, problem] of Object.entries(contentTexProblems(full))) tex[`content.${path}`] = texProblemWords(problem);
+  if (Object.keys(tex).length) throw notReady(tex);
   const fields: Record<string, string> = {};
   full.worksheets.forEach((ws, i) => {
     const r = validateWorksheet(worksheetSchema.parse(ws), { functions: kitFunctions });
     if (!r.ok) for (const [k, m] of Object.entries(r.fields)) fields[`content.worksheets.${i}.${k}`] ??= m;
   });
   const names = Object.keys(fields);
-  if (names.length) throw new HttpError(400, 'draft_incomplete', `The draft is not ready for review: a worksheet does not run (${names[0]}: ${fields[names[0]]}).`, fields);
+  if (names.length) throw new HttpError(400, 'draft_incomplete', `The draft is not ready for review: a worksheet does not run (${fieldSentence(names[0], fields[names[0]])})`, fields);
   return full;
 }
 
