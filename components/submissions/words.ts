@@ -5,6 +5,9 @@
 import { CORRECTION_SECTION_LABEL } from '@/shared/api/constants';
 import type { SubmissionKind, SubmissionStatus } from '@/shared/submissions/types';
 import { ApiError, ApiUnreachableError } from '../http/client';
+import { fieldWords, messageWords } from '../http/fieldErrors';
+
+const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
 export const STATUS_WORDS: Record<SubmissionStatus, string> = {
   open: 'Waiting for a moderator',
@@ -77,8 +80,12 @@ export function problemWords(error: Error): string {
   if (error instanceof ApiError) {
     const ours = CODE_WORDS[error.code];
     if (ours) return ours;
-    if (error.code === 'validation_failed' && error.fields) return Object.values(error.fields).join(' ');
-    return error.message;
+    if (error.code === 'validation_failed' && error.fields) {
+      return Object.entries(error.fields)
+        .map(([field, message]) => `${capital(fieldWords(field))}: ${messageWords(message)}.`.replace(/\.\.$/, '.'))
+        .join(' ');
+    }
+    return messageWords(error.message);
   }
   return error.message;
 }
