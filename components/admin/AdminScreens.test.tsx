@@ -197,7 +197,7 @@ describe('AuditScreen', () => {
     // The action's code never shows; a title is set apart (italics) from the rest of the sentence.
     expect(screen.queryByText(/user\.role_changed|entry\.imported/)).toBeNull();
     expect(within(events[1]).getByText('Reactionless drives')).toBeTruthy();
-    expect(within(events[1]).getByTestId('audit-change').textContent).toBe('version: (none) → 1draft number: (none) → 4');
+    expect(within(events[1]).getByTestId('audit-change').textContent).toBe('version: (none) → 1');
   });
 
   it('says what writes the first event when the log is empty', async () => {

@@ -3,6 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { AuditEventDto } from '@/shared/api-types';
 import { pageQuerySchema } from '@/shared/schemas/auth';
 import { useAuditLog } from '../queries/admin';
+import { QUEUE_STATUS_WORDS } from '../submissions/words';
 import { colors, space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
@@ -80,7 +81,7 @@ function AuditRow({ event }: { event: AuditEventDto }) {
         </Text>
       </View>
       <View testID="audit-change" style={styles.change}>
-        {describeChange(event.before, event.after).map((line) => (
+        {describeChange(event.before, event.after, event.subjectType).map((line) => (
           <Text key={line.field} style={styles.line}>
             {line.field ? <Text style={type.caption}>{fieldWords(line.field)}: </Text> : null}
             {line.before} <Text style={styles.arrow}>→</Text> {line.after}
@@ -122,14 +123,24 @@ const show = (value: unknown): string =>
             : 'no'
           : JSON.stringify(value);
 
-/** Before → after, field by field where both are records (`role: contributor → editor`), else as a whole. */
-function describeChange(before: unknown, after: unknown): ChangeLine[] {
+/** A submission's state in the queue's words ("in hand"), not its stored value ("claimed"). */
+const stateWords = (subjectType: string, field: string, value: unknown): string =>
+  subjectType === 'submission' && field === 'status' && typeof value === 'string' && value in QUEUE_STATUS_WORDS
+    ? QUEUE_STATUS_WORDS[value as keyof typeof QUEUE_STATUS_WORDS].toLowerCase()
+    : show(value);
+
+/**
+ * Before → after, field by field where both are records (`role: contributor → editor`), else as a
+ * whole. Row numbers (`claimedById`, `draftId`) are left out: the sentence names the people and records.
+ */
+function describeChange(before: unknown, after: unknown, subjectType = ''): ChangeLine[] {
   if (isRecord(before) || isRecord(after)) {
     const b = isRecord(before) ? before : {};
     const a = isRecord(after) ? after : {};
-    const fields = [...new Set([...Object.keys(b), ...Object.keys(a)])];
+    const fields = [...new Set([...Object.keys(b), ...Object.keys(a)])].filter((field) => !/Id$/.test(field));
     const changed = fields.filter((field) => JSON.stringify(b[field]) !== JSON.stringify(a[field]));
-    if (changed.length > 0) return changed.map((field) => ({ field, before: show(b[field]), after: show(a[field]) }));
+    if (changed.length > 0) return changed.map((field) => ({ field, before: stateWords(subjectType, field, b[field]), after: stateWords(subjectType, field, a[field]) }));
+    if (fields.length === 0) return [];
   }
   return [{ field: '', before: show(before), after: show(after) }];
 }

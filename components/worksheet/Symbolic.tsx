@@ -31,8 +31,9 @@ export function symbolText(name: string): string {
 /** One variable as a symbol, its subscript lowered and smaller. */
 export function VarSymbol({ name, style }: { name: string; style?: StyleProp<TextStyle> }) {
   const { base, sub } = symbolParts(name);
+  // A letter is set in italics, as symbols for quantities are (SI Brochure §5.3); a word ("ratio") upright.
   return (
-    <Text style={[styles.symbol, style]} aria-label={symbolText(name)}>
+    <Text style={[[...base].length === 1 ? styles.symbol : null, style]} aria-label={symbolText(name)}>
       {base}
       {sub ? <Text style={styles.sub}>{sub}</Text> : null}
     </Text>
