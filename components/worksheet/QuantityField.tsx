@@ -38,7 +38,7 @@ export function QuantityField({ name, label, showSymbol, value, onChangeText, de
   const hintId = `${id}-hint`;
   const errorId = `${id}-error`;
   const hint =
-    `${unit ? `A number and a unit; a number alone is read in ${unit}.` : 'A pure number.'}` +
+    `${unit ? `A number and a unit; a number alone is read in ${readableText(unit)}.` : 'A pure number.'}` +
     `${difference ? ' A difference: °C and °F count only their size (2 °C of rise is 2 K, 3.6 °F is 2 K).' : ''}` +
     ' Left empty, the default applies.';
 
