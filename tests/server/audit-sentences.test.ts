@@ -5,6 +5,7 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
+import { User } from '../../server/models';
 import { SENTENCES } from '../../server/presenters/audit';
 import { demo, startTestApp, type Client, type TestApp } from '../support/app';
 import { claimSubmission, submitSighting } from '../support/workflow';
@@ -61,6 +62,7 @@ describe('GET /api/admin/audit', () => {
   afterAll(() => h?.close());
 
   const text = (e: { sentence: { text: string }[] }) => e.sentence.map((p) => p.text).join('');
+  const nameOf = async (email: string) => (await User.findOne({ where: { email } }))!.displayName;
 
   it('tells each event as a sentence naming the actor and the record', async () => {
     const contributor = await h.signedIn(demo.contributor.email);
@@ -79,8 +81,8 @@ describe('GET /api/admin/audit', () => {
 
     const log = await admin.get('/api/admin/audit?limit=200').expect(200);
     const events: { action: string; sentence: { text: string; title?: boolean }[] }[] = log.body.events;
-    const mod = (await moderator.session()).user!.displayName;
-    const who = (await contributor.session()).user!.displayName;
+    const mod = await nameOf(demo.moderator.email);
+    const who = await nameOf(demo.contributor.email);
 
     const accept = events.find((e) => e.action === 'submission.accepted')!;
     expect(text(accept)).toBe(`${mod} accepted the sighting “${title}” onto ${entryTitle}.`);
@@ -101,7 +103,7 @@ describe('GET /api/admin/audit', () => {
     const users = (await admin.get('/api/admin/users?q=lindqvist').expect(200)).body.users;
     await admin.patch(`/api/admin/users/${users[0].id}/role`, { role: 'moderator' }).expect(200);
     const [event] = (await admin.get('/api/admin/audit?limit=1').expect(200)).body.events;
-    const me = (await admin.session()).user!.displayName;
+    const me = await nameOf(demo.admin.email);
     expect(text(event)).toBe(`${me} made ${users[0].displayName} a moderator (before: an editor).`);
   });
 });
