@@ -173,20 +173,31 @@ describe('AuditScreen', () => {
           subjectId: '12',
           before: { role: 'contributor' },
           after: { role: 'editor' },
+          sentence: [{ text: 'Ada Okonkwo' }, { text: ' ' }, { text: 'made Farah Nadeem an editor (before: a contributor)' }, { text: '.' }],
         },
-        { id: 3, at: '2026-03-01T08:00:00.000Z', actor: null, action: 'user.seeded', subjectType: 'user', subjectId: '1', before: null, after: 'admin' },
+        {
+          id: 3,
+          at: '2026-03-01T08:00:00.000Z',
+          actor: null,
+          action: 'entry.imported',
+          subjectType: 'entry',
+          subjectId: '1',
+          before: null,
+          after: { version: 1, draftId: 4 },
+          sentence: [{ text: 'The system added version 1 of ' }, { text: 'Reactionless drives', title: true }, { text: ' from the starter library.' }],
+        },
       ],
     };
     mockFetch({ '/api/session': adminSession, '/api/admin/audit?limit=50&offset=0': () => jsonResponse(200, log) });
     renderWithProviders(<AuditScreen />);
     const events = await screen.findAllByTestId('audit-event');
     expect(events).toHaveLength(2);
-    expect(events[0].textContent).toContain('Role changed');
-    expect(events[0].textContent).toContain('By Ada Okonkwo, on user 12');
+    expect(within(events[0]).getByTestId('audit-sentence').textContent).toBe('Ada Okonkwo made Farah Nadeem an editor (before: a contributor).');
     expect(within(events[0]).getByTestId('audit-change').textContent).toBe('role: contributor → editor');
-    expect(events[1].textContent).toContain('user.seeded');
-    expect(events[1].textContent).toContain('the system');
-    expect(within(events[1]).getByTestId('audit-change').textContent).toBe('(none) → admin');
+    // The action's code never shows; a title is set apart (italics) from the rest of the sentence.
+    expect(screen.queryByText(/user\.role_changed|entry\.imported/)).toBeNull();
+    expect(within(events[1]).getByText('Reactionless drives')).toBeTruthy();
+    expect(within(events[1]).getByTestId('audit-change').textContent).toBe('version: (none) → 1');
   });
 
   it('says what writes the first event when the log is empty', async () => {

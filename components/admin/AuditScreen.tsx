@@ -3,6 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { AuditEventDto } from '@/shared/api-types';
 import { pageQuerySchema } from '@/shared/schemas/auth';
 import { useAuditLog } from '../queries/admin';
+import { QUEUE_STATUS_WORDS } from '../submissions/words';
 import { colors, space, type } from '../theme';
 import { ErrorNotice } from '../ui/ErrorNotice';
 import { Loading } from '../ui/Loading';
@@ -12,16 +13,6 @@ import { formatWhen } from './format';
 import { Pager } from './Pager';
 
 const PAGE = 50;
-
-/** What the known actions are called here; any other action shows by its code. */
-const actionNames: Record<string, string> = {
-  'user.signed_up': 'Account created',
-  'user.email_verified': 'E-mail address verified',
-  'user.display_name_changed': 'Display name changed',
-  'user.password_changed': 'Password changed',
-  'user.password_reset': 'Password set from a reset link',
-  'user.role_changed': 'Role changed',
-};
 
 /** Admin: the append-only audit log, newest first: who did what to which record, when, before and after. */
 export function AuditScreen() {
@@ -71,29 +62,43 @@ function AuditList() {
 }
 
 function AuditRow({ event }: { event: AuditEventDto }) {
-  const name = actionNames[event.action];
   return (
     <View role="listitem" testID="audit-event" style={styles.row}>
       <View style={styles.head}>
-        {name ? <Text style={type.uiStrong}>{name}</Text> : <Text style={styles.code}>{event.action}</Text>}
+        <Text testID="audit-sentence" style={styles.sentence}>
+          {event.sentence.map((part, i) =>
+            part.title ? (
+              <Text key={i} style={styles.title}>
+                {part.text}
+              </Text>
+            ) : (
+              part.text
+            ),
+          )}
+        </Text>
         <Text testID="audit-when" style={type.caption}>
           {formatWhen(event.at)}
         </Text>
       </View>
-      <Text style={type.caption}>
-        By <Text style={styles.who}>{event.actor ? event.actor.displayName : 'the system'}</Text>, on {event.subjectType}{' '}
-        <Text style={styles.code}>{event.subjectId}</Text>
-      </Text>
       <View testID="audit-change" style={styles.change}>
-        {describeChange(event.before, event.after).map((line) => (
+        {describeChange(event.before, event.after, event.subjectType).map((line) => (
           <Text key={line.field} style={styles.line}>
-            {line.field ? <Text style={type.caption}>{line.field}: </Text> : null}
+            {line.field ? <Text style={type.caption}>{fieldWords(line.field)}: </Text> : null}
             {line.before} <Text style={styles.arrow}>→</Text> {line.after}
           </Text>
         ))}
       </View>
     </View>
   );
+}
+
+/** A record's field as words: `otherSessionsEnded` → "other sessions ended", `draftId` → "draft number". */
+export function fieldWords(field: string): string {
+  return field
+    .replace(/Id$/, ' number')
+    .replace(/([a-z])([A-Z])/g, '$1 $2')
+    .replace(/_/g, ' ')
+    .toLowerCase();
 }
 
 interface ChangeLine {
@@ -105,16 +110,37 @@ interface ChangeLine {
 const isRecord = (value: unknown): value is Record<string, unknown> =>
   typeof value === 'object' && value !== null && !Array.isArray(value);
 
-const show = (value: unknown) => (value === undefined || value === null ? '(none)' : typeof value === 'string' ? value : JSON.stringify(value));
+const show = (value: unknown): string =>
+  value === undefined || value === null
+    ? '(none)'
+    : typeof value === 'string'
+      ? value
+      : Array.isArray(value)
+        ? value.map(show).join(', ')
+        : typeof value === 'boolean'
+          ? value
+            ? 'yes'
+            : 'no'
+          : JSON.stringify(value);
 
-/** Before → after, field by field where both are records (`role: contributor → editor`), else as a whole. */
-function describeChange(before: unknown, after: unknown): ChangeLine[] {
+/** A submission's state in the queue's words ("in hand"), not its stored value ("claimed"). */
+const stateWords = (subjectType: string, field: string, value: unknown): string =>
+  subjectType === 'submission' && field === 'status' && typeof value === 'string' && value in QUEUE_STATUS_WORDS
+    ? QUEUE_STATUS_WORDS[value as keyof typeof QUEUE_STATUS_WORDS].toLowerCase()
+    : show(value);
+
+/**
+ * Before → after, field by field where both are records (`role: contributor → editor`), else as a
+ * whole. Row numbers (`claimedById`, `draftId`) are left out: the sentence names the people and records.
+ */
+function describeChange(before: unknown, after: unknown, subjectType = ''): ChangeLine[] {
   if (isRecord(before) || isRecord(after)) {
     const b = isRecord(before) ? before : {};
     const a = isRecord(after) ? after : {};
-    const fields = [...new Set([...Object.keys(b), ...Object.keys(a)])];
+    const fields = [...new Set([...Object.keys(b), ...Object.keys(a)])].filter((field) => !/Id$/.test(field));
     const changed = fields.filter((field) => JSON.stringify(b[field]) !== JSON.stringify(a[field]));
-    if (changed.length > 0) return changed.map((field) => ({ field, before: show(b[field]), after: show(a[field]) }));
+    if (changed.length > 0) return changed.map((field) => ({ field, before: stateWords(subjectType, field, b[field]), after: stateWords(subjectType, field, a[field]) }));
+    if (fields.length === 0) return [];
   }
   return [{ field: '', before: show(before), after: show(after) }];
 }
@@ -124,8 +150,8 @@ const styles = StyleSheet.create({
   list: { borderTopColor: colors.rule, borderTopWidth: 1 },
   row: { gap: space.xxs, paddingVertical: space.md, borderBottomColor: colors.rule, borderBottomWidth: 1 },
   head: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'baseline', gap: space.xs },
-  who: { color: colors.ink },
-  code: { ...type.mono, fontSize: 13 },
+  sentence: { ...type.ui, color: colors.ink, flexShrink: 1 },
+  title: { fontStyle: 'italic' },
   change: { gap: 2, marginTop: space.xxs },
   line: { ...type.mono },
   arrow: { color: colors.brass },

@@ -8,7 +8,7 @@ import { Link } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import Svg, { Circle, Line } from 'react-native-svg';
 import { checks as kit } from '@/shared/checks';
-import { printText } from '@/shared/claims/print';
+import { readableText as printText } from '@/shared/format/numbers';
 import {
   FIGURE_KIND_LABEL,
   PARAGRAPH_VARIANT_LABEL,

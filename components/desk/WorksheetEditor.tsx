@@ -8,6 +8,7 @@ import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { FieldError } from '../worksheet/QuantityField';
+import { withLabels } from '../worksheet/Symbolic';
 import { WorksheetView } from '../worksheet/WorksheetView';
 import { EditorField } from './EditorField';
 import { asSentence } from './editorValues';
@@ -276,7 +277,7 @@ function RowsGroup({
               </View>
             ))}
             {rowProblem ? <FieldError testID={`${rowId}-error`} message={rowProblem} /> : null}
-            {group !== 'inputs' ? <Readout testID={`${rowId}-value`} group={group} name={row.name} result={result} /> : null}
+            {group !== 'inputs' ? <Readout testID={`${rowId}-value`} group={group} name={row.name} label={row.label} result={result} /> : null}
             <View style={styles.rowActions}>
               <Button testID={`${rowId}-up`} variant="quiet" label="Move up" disabled={j === 0} onPress={() => move(j, j - 1)} />
               <Button testID={`${rowId}-down`} variant="quiet" label="Move down" disabled={j === rows.length - 1} onPress={() => move(j, j + 1)} />
@@ -292,12 +293,14 @@ function RowsGroup({
 }
 
 /** A step's value or a check's verdict at the defaults, or the error at that row, beside the row. */
-function Readout({ testID, group, name, result }: { testID: string; group: 'steps' | 'checks'; name?: string; result?: WorksheetResult }) {
+function Readout({ testID, group, name, label, result }: { testID: string; group: 'steps' | 'checks'; name?: string; label?: string; result?: WorksheetResult }) {
   if (!result) return null;
+  // The row's error names it by its label, as the run below does.
+  const say = (message: string) => (name && label ? withLabels(message, { [name]: label }) : message);
   if (group === 'steps') {
     const r = result.steps.find((s) => s.name === name);
     if (!r) return <Text testID={testID} style={type.small}>Not run: fix the fields marked above.</Text>;
-    if (r.error) return <FieldError testID={testID} message={r.error.message} />;
+    if (r.error) return <FieldError testID={testID} message={say(r.error.message)} />;
     return (
       <Text testID={testID} style={type.mono}>
         = {r.value?.display}
@@ -306,7 +309,7 @@ function Readout({ testID, group, name, result }: { testID: string; group: 'step
   }
   const r = result.checks.find((c) => c.name === name);
   if (!r) return <Text testID={testID} style={type.small}>Not run: fix the fields marked above.</Text>;
-  if (r.error) return <FieldError testID={testID} message={r.error.message} />;
+  if (r.error) return <FieldError testID={testID} message={say(r.error.message)} />;
   return (
     <Text testID={testID} style={type.caption}>
       {r.holds ? 'Holds' : 'Fails'} at the defaults: {r.message}

@@ -64,12 +64,12 @@ describe('QueueItemScreen', () => {
   it('claims a sighting and accepts it onto entries found by searching the library', async () => {
     const { decided } = serve(sighting());
     renderWithProviders(<QueueItemScreen id={41} />);
-    expect((await screen.findByTestId('item-status')).textContent).toBe('Open');
+    expect((await screen.findByTestId('item-status')).textContent).toBe('Not picked up yet');
     expect(screen.queryByTestId('item-decide-accept')).toBeNull();
     expect(screen.getByTestId('attachment-5').getAttribute('href')).toBe('/api/attachments/5');
     fireEvent.click(screen.getByTestId('item-claim'));
-    await waitFor(() => expect(screen.getByTestId('item-status').textContent).toBe('Being decided'));
-    expect(screen.getByTestId('item-holder').textContent).toContain('You hold it');
+    await waitFor(() => expect(screen.getByTestId('item-status').textContent).toBe('In hand'));
+    expect(screen.getByTestId('item-holder').textContent).toContain('It is in your hands');
     expect(screen.getByTestId('item-release')).toBeTruthy();
 
     fireEvent.click(screen.getByTestId('item-decide-accept'));
@@ -98,8 +98,8 @@ describe('QueueItemScreen', () => {
     });
     renderWithProviders(<QueueItemScreen id={41} />);
     fireEvent.click(await screen.findByTestId('item-claim'));
-    expect((await screen.findByTestId('item-action-error')).textContent).toContain('Another moderator has taken this item up');
-    await waitFor(() => expect(screen.getByTestId('item-holder').textContent).toContain('Oona Lindqvist holds it'));
+    expect((await screen.findByTestId('item-action-error')).textContent).toContain('Another moderator has picked this item up');
+    await waitFor(() => expect(screen.getByTestId('item-holder').textContent).toContain('Oona Lindqvist has it in hand'));
     expect(screen.queryByTestId('item-claim')).toBeNull();
     expect(screen.queryByTestId('item-release')).toBeNull();
     expect(screen.queryByTestId('item-decide-accept')).toBeNull();

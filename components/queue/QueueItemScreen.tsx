@@ -13,7 +13,7 @@ import { useSession } from '../queries/accounts';
 import { useSubmission } from '../queries/submissions';
 import { useClaim, useRelease } from '../queries/queue';
 import { DecisionPart, History, StatusMark, SubmissionBody } from '../submissions/SubmissionDetails';
-import { problemWords, QUEUE_STATUS_WORDS } from '../submissions/words';
+import { HANDLING_WORDS, problemWords, QUEUE_STATUS_WORDS } from '../submissions/words';
 import { space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { ErrorNotice } from '../ui/ErrorNotice';
@@ -89,14 +89,14 @@ function Item({ submission: s, user, onStale }: { submission: SubmissionDto; use
         <StatusMark testID="item-status" status={s.status} words={QUEUE_STATUS_WORDS[s.status]} />
         {s.claimedBy && s.status === 'claimed' ? (
           <Text testID="item-holder" style={type.caption}>
-            {heldByMe ? 'You hold it: it is yours to decide, or to put back.' : `${s.claimedBy.displayName} holds it and is deciding it.`}
+            {heldByMe ? 'It is in your hands: decide it, or hand it back.' : `${s.claimedBy.displayName} has it in hand and is deciding it.`}
           </Text>
         ) : null}
       </View>
 
       {own ? (
         <Notice testID="item-own" title="You sent this in.">
-          A moderator never decides their own submission: another moderator (or an admin) takes it up.
+          A moderator never decides their own submission: another moderator (or an admin) picks it up.
         </Notice>
       ) : null}
 
@@ -105,18 +105,18 @@ function Item({ submission: s, user, onStale }: { submission: SubmissionDto; use
           {s.status === 'open' || s.status === 'waiting' ? (
             <>
               {s.status === 'waiting' ? (
-                <Text style={type.caption}>Waiting for the submitter’s answer; you can still take it up and decide it now.</Text>
+                <Text style={type.caption}>Waiting for the submitter’s answer; you can still pick it up and decide it now.</Text>
               ) : null}
-              <Button testID="item-claim" label="Take it up" busy={claim.isPending} busyLabel="Taking it up…" onPress={() => claim.mutate(undefined, { onError })} />
+              <Button testID="item-claim" label={HANDLING_WORDS.pickUp} busy={claim.isPending} busyLabel={HANDLING_WORDS.pickingUp} onPress={() => claim.mutate(undefined, { onError })} />
             </>
           ) : null}
           {s.status === 'claimed' && s.claimedBy && can(user, 'queue.releaseHeld', { userId: user.id, ownerId: s.claimedBy.id }) ? (
             <Button
               testID="item-release"
               variant="quiet"
-              label={heldByMe ? 'Put it back' : `Put it back for ${s.claimedBy!.displayName}`}
+              label={heldByMe ? HANDLING_WORDS.handBack : HANDLING_WORDS.handBackFor(s.claimedBy!.displayName)}
               busy={release.isPending}
-              busyLabel="Putting it back…"
+              busyLabel={HANDLING_WORDS.handingBack}
               onPress={() => release.mutate(undefined, { onError })}
             />
           ) : null}

@@ -36,7 +36,7 @@ describe('QueueScreen', () => {
     expect(first).toContain('by Ines Okonkwo');
     expect(first).toContain('1 attachment');
     expect(screen.getByTestId('queue-item-41-link').getAttribute('href')).toBe('/queue/41');
-    expect(screen.getByTestId('queue-item-42-holder').textContent).toBe('Held by you');
+    expect(screen.getByTestId('queue-item-42-holder').textContent).toBe('In your hands');
     expect(screen.getByTestId('queue-filter-sighting').textContent).toBe('Sightings (1)');
 
     fireEvent.click(screen.getByTestId('queue-filter-correction'));

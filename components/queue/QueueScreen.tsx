@@ -1,7 +1,7 @@
 /**
  * The moderators' queue (DESIGN.md §5): sightings and corrections waiting for a decision, oldest
- * first, with how many there are, filters by kind, state and "held by me", and for each item its
- * kind, title, age, who sent it, its attachments and who holds it.
+ * first, with how many there are, filters by kind, state and "in my hands", and for each item its
+ * kind, title, age, who sent it, its attachments and in whose hands it is.
  */
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
@@ -10,7 +10,7 @@ import type { SubmissionKind } from '@/shared/submissions/types';
 import { RoleGate } from '../account/RoleGate';
 import { useSession } from '../queries/accounts';
 import { type QueueFilters, useQueue } from '../queries/queue';
-import { ageWords, KIND_WORDS, QUEUE_STATUS_WORDS } from '../submissions/words';
+import { ageWords, HANDLING_WORDS, KIND_WORDS, QUEUE_STATUS_WORDS } from '../submissions/words';
 import { colors, space, type } from '../theme';
 import { Chip, chipGroupStyle } from '../ui/Chip';
 import { ErrorNotice } from '../ui/ErrorNotice';
@@ -68,7 +68,7 @@ function QueueList({ user }: { user: UserDto }) {
           ))}
         </View>
         <View role="radiogroup" aria-label="State" style={chipGroupStyle}>
-          <Chip role="radio" testID="queue-filter-any-status" label="Every open state" checked={!filters.status} onPress={() => set({ status: undefined })} />
+          <Chip role="radio" testID="queue-filter-any-status" label={HANDLING_WORDS.undecided} checked={!filters.status} onPress={() => set({ status: undefined })} />
           {STATUSES.map((status) => (
             <Chip
               key={status}
@@ -81,7 +81,7 @@ function QueueList({ user }: { user: UserDto }) {
           ))}
         </View>
         <View style={chipGroupStyle}>
-          <Chip role="checkbox" tick testID="queue-filter-mine" label="Held by me" checked={Boolean(filters.mine)} onPress={() => set({ mine: !filters.mine })} />
+          <Chip role="checkbox" tick testID="queue-filter-mine" label={HANDLING_WORDS.mine} checked={Boolean(filters.mine)} onPress={() => set({ mine: !filters.mine })} />
         </View>
       </View>
 
@@ -122,7 +122,7 @@ function QueueList({ user }: { user: UserDto }) {
                     </Text>
                     {item.claimedBy ? (
                       <Text testID={`queue-item-${item.id}-holder`} style={mine ? styles.mine : type.caption}>
-                        {mine ? 'Held by you' : `Held by ${item.claimedBy.displayName}`}
+                        {mine ? HANDLING_WORDS.heldByMe : HANDLING_WORDS.heldBy(item.claimedBy.displayName)}
                       </Text>
                     ) : null}
                   </View>

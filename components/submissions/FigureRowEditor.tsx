@@ -3,11 +3,12 @@ import { StyleSheet, Text, View } from 'react-native';
 import { FIGURE_KIND_LABEL, FIGURE_KIND_SHORT, FIGURE_KINDS } from '@/shared/claims/types';
 import { ChoiceChips } from '../admin/ChoiceChips';
 import { EXAMPLE_FOR } from '../claims/figures';
+import { readableText } from '@/shared/format/numbers';
 import { colors, space, type } from '../theme';
 import { Button } from '../ui/Button';
 import { dataAttributes } from '../worksheet/dataAttributes';
 import { Field } from './Field';
-import { readFigure, type FigureRow } from './sighting';
+import { kindsFor, readFigure, withQuantity, type FigureRow } from './sighting';
 
 const KIND_CHIP = FIGURE_KIND_SHORT;
 
@@ -23,6 +24,8 @@ export function FigureRowEditor({ index, row, error, onChange, onRemove }: Figur
   const testID = `sighting-figure-${index}`;
   const reading = row.quantity.trim() ? readFigure(row.kind, row.quantity) : null;
   const problem = error ?? (reading && !reading.ok ? reading.message : undefined);
+  // When the unit fits more than one kind and the reader has not picked, say which others it could be.
+  const others = row.kindPicked ? [] : kindsFor(row.quantity).filter((k) => k !== row.kind);
   return (
     <View role="listitem" testID={testID} style={styles.row}>
       <View style={styles.head}>
@@ -37,14 +40,20 @@ export function FigureRowEditor({ index, row, error, onChange, onRemove }: Figur
         testID={`${testID}-kind`}
         options={FIGURE_KINDS.map((value) => ({ value, label: KIND_CHIP[value] }))}
         value={row.kind}
-        onChange={(kind) => onChange({ ...row, kind })}
+        onChange={(kind) => onChange({ ...row, kind, kindPicked: true })}
       />
+      {others.length ? (
+        <Text testID={`${testID}-kind-question`} style={type.small}>
+          Read as {FIGURE_KIND_LABEL[row.kind].toLowerCase()}; “{row.quantity.trim()}” could also be{' '}
+          {others.map((k) => FIGURE_KIND_LABEL[k].toLowerCase()).join(' or ')}. Pick the kind above if it is.
+        </Text>
+      ) : null}
       <Field
         label="Quantity with its unit"
         testID={`${testID}-quantity`}
         kind="mono"
         value={row.quantity}
-        onChangeText={(quantity) => onChange({ ...row, quantity })}
+        onChangeText={(quantity) => onChange(withQuantity(row, quantity))}
         placeholder={EXAMPLE_FOR[row.kind]}
         error={problem}
       />
@@ -52,7 +61,7 @@ export function FigureRowEditor({ index, row, error, onChange, onRemove }: Figur
         <Text style={type.small}>
           In SI:{' '}
           <Text testID={`${testID}-si`} {...dataAttributes({ si: String(reading.si) })} style={styles.mono}>
-            {reading.display}
+            {readableText(reading.display)}
           </Text>
         </Text>
       ) : null}

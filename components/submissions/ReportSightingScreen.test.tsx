@@ -64,6 +64,32 @@ describe('ReportSightingScreen', () => {
     expect(Number(screen.getByTestId('sighting-figure-0-si').getAttribute('data-si'))).toBe(1500);
   });
 
+  it('lets a figure’s kind follow the unit typed until the reader picks one, and asks when the unit fits two', async () => {
+    mockFetch(session(contributor));
+    renderWithProviders(<ReportSightingScreen />);
+    fireEvent.click(await screen.findByTestId('sighting-figure-add'));
+    fireEvent.click(screen.getByTestId('sighting-figure-add'));
+    const checked = (kind: string) => screen.getByTestId(`sighting-figure-1-kind-${kind}`).getAttribute('aria-checked');
+    type('sighting-figure-1-quantity', '3');
+    expect(checked('thrust')).toBe('true'); // a bare number changes nothing
+    type('sighting-figure-1-quantity', '3 kW');
+    expect(checked('power')).toBe('true');
+    expect(Number(screen.getByTestId('sighting-figure-1-si').getAttribute('data-si'))).toBe(3000);
+    type('sighting-figure-1-quantity', '12 N');
+    expect(checked('thrust')).toBe('true');
+    // A second is a duration or a specific impulse: the form says so and asks.
+    type('sighting-figure-1-quantity', '300 s');
+    expect(checked('duration')).toBe('true');
+    expect(screen.getByTestId('sighting-figure-1-kind-question').textContent).toContain('specific impulse');
+    // Once picked, the kind stays whatever is typed.
+    fireEvent.click(screen.getByTestId('sighting-figure-1-kind-specific-impulse'));
+    expect(screen.queryByTestId('sighting-figure-1-kind-question')).toBeNull();
+    type('sighting-figure-1-quantity', '3 kW');
+    expect(checked('specific-impulse')).toBe('true');
+    // The first row was never typed in and kept its kind.
+    expect(screen.getByTestId('sighting-figure-0-kind-thrust').getAttribute('aria-checked')).toBe('true');
+  });
+
   it('checks the files before sending: too large, too many, removable', async () => {
     mockFetch(session(contributor));
     renderWithProviders(<ReportSightingScreen />);

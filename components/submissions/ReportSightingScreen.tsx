@@ -9,7 +9,7 @@ import { useRef, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { UserDto } from '@/shared/api-types';
 import { ATTACHMENT_TYPES, ATTACHMENTS_MAX, type SubmissionDto } from '@/shared/submissions/types';
-import { serverFieldErrors } from '../http/fieldErrors';
+import { messageWords, serverFieldErrors } from '../http/fieldErrors';
 import { useSession } from '../queries/accounts';
 import { type PickedFile, useSubmitSighting } from '../queries/submissions';
 import { ResendVerification } from '../auth/ResendVerification';
@@ -314,7 +314,7 @@ function SightingForm({ user }: { user: UserDto }) {
         ) : null}
         {submit.error ? (
           <Notice role="alert" testID="sighting-error" title="The sighting was not sent.">
-            {leftover.length ? leftover.join(' ') : problemWords(submit.error)}
+            {leftover.length ? leftover.map((m) => messageWords(m)).join(' ') : problemWords(submit.error)}
           </Notice>
         ) : null}
         <Button

@@ -1,12 +1,14 @@
 /**
  * Everything a submission holds, as its submitter and the moderators read it: what was sent (all of
- * it plain text, never read as HTML), its figures, its attachments as downloads, the decision and
+ * it plain text, never read as HTML), its figures, its attachments as downloads (images shown and
+ * PDFs opened in place for a preview), the decision and
  * the history of what happened to it.
  */
 import { entryVersionPath } from '@/shared/permalink';
 import type { ReactNode } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { Image, StyleSheet, Text, View } from 'react-native';
 import { FIGURE_KIND_LABEL } from '@/shared/claims/types';
+import { readableText } from '@/shared/format/numbers';
 import { formatWhen } from '../admin/format';
 import { colors, focusRing, radius, space, type } from '../theme';
 import { Section } from '../ui/Screen';
@@ -93,7 +95,7 @@ function SightingBody({ submission: s }: { submission: SubmissionDto }) {
                 <Text style={type.mono}>
                   {f.quantity} <Text style={type.caption}>= </Text>
                   <Text {...{ dataSet: { si: String(f.si) } }} testID={`submission-figure-${i}-si`}>
-                    {f.display}
+                    {readableText(f.display)}
                   </Text>
                 </Text>
               </View>
@@ -118,8 +120,9 @@ function Attachments({ items }: { items: AttachmentDto[] }) {
             {a.name}
           </OutLink>
           <Text style={type.caption}>
-            {fileTypeWords(a.mediaType)}, {bytesWords(a.size)} · downloads, never opens in the page
+            {fileTypeWords(a.mediaType)}, {bytesWords(a.size)} · the name downloads it
           </Text>
+          <Preview attachment={a} />
           <Text selectable style={styles.hash}>
             SHA-256 {a.sha256}
           </Text>
@@ -127,6 +130,39 @@ function Attachments({ items }: { items: AttachmentDto[] }) {
       ))}
     </View>
   );
+}
+
+/** Raster images the browser shows as they are (the server says which type each file is, read from its bytes). */
+const IMAGE_TYPES = new Set(['image/png', 'image/jpeg', 'image/webp', 'image/gif']);
+
+/** The address that asks the server for the file to be shown in place. */
+export const previewUrl = (a: AttachmentDto) => `${a.url}${a.url.includes('?') ? '&' : '?'}view=inline`;
+
+/**
+ * A preview: an image is shown (as an image, never as markup), a PDF opens in a new tab in the
+ * browser's viewer; anything else only downloads. Only those allowed to see the submission get its
+ * attachments at all, so only they see a preview.
+ */
+function Preview({ attachment: a }: { attachment: AttachmentDto }) {
+  if (IMAGE_TYPES.has(a.mediaType)) {
+    return (
+      <Image
+        testID={`attachment-${a.id}-preview`}
+        source={{ uri: previewUrl(a) }}
+        accessibilityLabel={`Preview of ${a.name}`}
+        resizeMode="contain"
+        style={styles.preview}
+      />
+    );
+  }
+  if (a.mediaType === 'application/pdf') {
+    return (
+      <OutLink href={previewUrl(a)} testID={`attachment-${a.id}-open`}>
+        Open the PDF in a new tab
+      </OutLink>
+    );
+  }
+  return null;
 }
 
 function CorrectionBody({ submission: s }: { submission: SubmissionDto }) {
@@ -223,6 +259,7 @@ const styles = StyleSheet.create({
   list: { borderTopColor: colors.rule, borderTopWidth: 1 },
   row: { gap: space.xxs, paddingVertical: space.sm, borderBottomColor: colors.rule, borderBottomWidth: 1 },
   hash: { ...type.small, fontFamily: type.mono.fontFamily },
+  preview: { width: '100%', maxWidth: 360, aspectRatio: 4 / 3, backgroundColor: colors.surface, borderColor: colors.rule, borderWidth: 1, borderRadius: radius.sm },
   decision: {
     gap: space.xs,
     padding: space.md,

@@ -4,7 +4,7 @@
  * claim was seen, each figure read with parseQuantity for its kind, and the attachments.
  */
 import { readQuantityOf, type FigureReading } from '@/shared/claims/figures';
-import type { FigureKind } from '@/shared/claims/types';
+import { FIGURE_KINDS, type FigureKind } from '@/shared/claims/types';
 import { ATTACHMENT_MAX_BYTES, ATTACHMENT_TYPES, ATTACHMENTS_MAX } from '@/shared/submissions/types';
 import type { PickedFile } from '../queries/submissions';
 import { bytesWords } from './words';
@@ -14,6 +14,8 @@ export interface FigureRow {
   kind: FigureKind;
   quantity: string;
   label: string;
+  /** The reader picked the kind: it no longer follows what is typed. */
+  kindPicked?: boolean;
 }
 
 export interface SightingValues {
@@ -29,6 +31,28 @@ export type Reading = FigureReading;
 
 /** The typed figure in its kind's SI unit, or what is wrong with it. */
 export const readFigure = readQuantityOf;
+
+/**
+ * The kinds of figure a typed quantity can be, from its unit's dimension ("12 N" → thrust; "300 s"
+ * → duration or specific impulse); none for a bare number or text that is not a quantity yet, so
+ * that typing "3" on the way to "3 kW" changes nothing.
+ */
+export function kindsFor(quantity: string): FigureKind[] {
+  const text = quantity.trim();
+  if (!/\d/.test(text) || !/[A-Za-z°%µΩ]/.test(text.replace(/\d[eE][+-]?\d/g, ''))) return [];
+  return FIGURE_KINDS.filter((kind) => readFigure(kind, text).ok);
+}
+
+/**
+ * A row after its quantity was typed: while the reader has not picked a kind, the kind follows the
+ * unit (the current kind stays when it still fits, so an ambiguous unit does not flip it).
+ */
+export function withQuantity(row: FigureRow, quantity: string): FigureRow {
+  if (row.kindPicked) return { ...row, quantity };
+  const kinds = kindsFor(quantity);
+  const kind = kinds.length === 0 || kinds.includes(row.kind) ? row.kind : kinds[0];
+  return { ...row, quantity, kind };
+}
 
 const TYPE_WORDS: Record<string, string> = {
   'application/pdf': 'PDF',

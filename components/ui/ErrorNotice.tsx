@@ -1,5 +1,6 @@
 import { StyleSheet, Text } from 'react-native';
 import { ApiError, ApiUnreachableError } from '../http/client';
+import { messageWords } from '../http/fieldErrors';
 import { colors, type } from '../theme';
 import { Button } from './Button';
 import { Notice } from './Notice';
@@ -26,7 +27,7 @@ export function ErrorNotice({ error, what, onRetry, testID }: ErrorNoticeProps) 
   if (error instanceof ApiError) {
     return (
       <Notice tone="error" role="alert" testID={testID} title={`The server could not send ${what}.`} action={retry}>
-        {error.message} <Text style={styles.code}>({error.code}, HTTP {error.status})</Text>{' '}
+        {messageWords(error.message)} <Text style={styles.code}>({error.code}, HTTP {error.status})</Text>{' '}
         If it keeps failing, the server's log says why.
       </Notice>
     );

@@ -1,12 +1,16 @@
 import { useId, useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
+import { readableText } from '@/shared/format/numbers';
 import { colors, focusRing, radius, space, type } from '../theme';
 import { inputBox } from '../ui/inputBox';
+import { symbolText, VarSymbol } from './Symbolic';
 
 interface QuantityFieldProps {
   /** The input's name: the field is `input-<name>`, its error `input-<name>-error`. */
   name: string;
   label: string;
+  /** Show the name after the label as a symbol (a worksheet's `P_in` → P with subscript "in"). */
+  showSymbol?: boolean;
   value: string;
   onChangeText: (text: string) => void;
   /** What an empty field stands for, e.g. "1 mN". */
@@ -28,23 +32,31 @@ interface QuantityFieldProps {
  * One typed quantity — a number and a unit in one field ("0.2 lbf", "450 degC") — with its label,
  * a hint at the unit, presets where there are any, and its error right beneath it.
  */
-export function QuantityField({ name, label, value, onChangeText, defaultText, unit, difference, help, presets, error, reading }: QuantityFieldProps) {
+export function QuantityField({ name, label, showSymbol, value, onChangeText, defaultText, unit, difference, help, presets, error, reading }: QuantityFieldProps) {
   const [focused, setFocused] = useState(false);
   const id = useId();
   const hintId = `${id}-hint`;
   const errorId = `${id}-error`;
   const hint =
-    `${unit ? `A number and a unit; a number alone is read in ${unit}.` : 'A pure number.'}` +
+    `${unit ? `A number and a unit; a number alone is read in ${readableText(unit)}.` : 'A pure number.'}` +
     `${difference ? ' A difference: °C and °F count only their size (2 °C of rise is 2 K, 3.6 °F is 2 K).' : ''}` +
     ' Left empty, the default applies.';
 
   return (
     <View style={styles.field}>
-      <Text style={type.uiStrong}>{label}</Text>
+      <Text style={type.uiStrong}>
+        {label}
+        {showSymbol ? (
+          <Text style={styles.symbol}>
+            {', '}
+            <VarSymbol name={name} />
+          </Text>
+        ) : null}
+      </Text>
       {help ? <Text style={type.caption}>{help}</Text> : null}
       <TextInput
         testID={`input-${name}`}
-        aria-label={label}
+        aria-label={showSymbol ? `${label}, ${symbolText(name)}` : label}
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? `${hintId} ${errorId}` : hintId}
         value={value}
@@ -60,7 +72,7 @@ export function QuantityField({ name, label, value, onChangeText, defaultText, u
       />
       {reading && !error && hasUnit(value) && reading !== value.trim() ? (
         <Text testID={`input-${name}-reading`} style={type.small}>
-          Read as <Text style={styles.reading}>{reading}</Text>
+          Read as <Text style={styles.reading}>{readableText(reading)}</Text>
         </Text>
       ) : null}
       <Text nativeID={hintId} style={type.small}>
@@ -97,13 +109,14 @@ function hasUnit(text: string): boolean {
 export function FieldError({ id, testID, message }: { id?: string; testID: string; message: string }) {
   return (
     <Text nativeID={id} testID={testID} style={styles.error}>
-      {message}
+      {readableText(message)}
     </Text>
   );
 }
 
 const styles = StyleSheet.create({
   field: { gap: space.xxs },
+  symbol: { ...type.ui, color: colors.inkMuted },
   input: {
     ...type.mono,
     ...inputBox.box,

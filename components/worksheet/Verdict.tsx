@@ -1,7 +1,9 @@
 import { StyleSheet, Text, View } from 'react-native';
 import Svg, { Circle, Line } from 'react-native-svg';
+import { readableText } from '@/shared/format/numbers';
 import { colors, radius, space, type } from '../theme';
 import { dataAttributes } from './dataAttributes';
+import { Formula } from './Symbolic';
 
 /**
  * A neutral mark in graphite: a ring when the condition holds, a struck ring when it does not,
@@ -26,10 +28,12 @@ interface VerdictProps {
   condition: string;
   /** The verdict in words with the numbers, or why it could not be reached. */
   message: string;
+  /** Names in `condition` to show as symbols (a worksheet's inputs, steps and constants). */
+  symbols?: ReadonlySet<string>;
 }
 
 /** Whether a condition holds, told in words with a neutral mark; `data-holds` carries it for tests. */
-export function Verdict({ testID, holds, title, condition, message }: VerdictProps) {
+export function Verdict({ testID, holds, title, condition, message, symbols }: VerdictProps) {
   const status = holds === undefined ? 'Not evaluated' : holds ? 'Holds' : 'Does not hold';
   return (
     <View testID={testID} {...(holds === undefined ? {} : dataAttributes({ holds: String(holds) }))} style={styles.box}>
@@ -37,8 +41,8 @@ export function Verdict({ testID, holds, title, condition, message }: VerdictPro
         <ConditionMark holds={holds} />
         <Text style={styles.status}>{title ? `${status} · ${title}` : status}</Text>
       </View>
-      <Text style={styles.condition}>{condition}</Text>
-      <Text style={type.body}>{message}</Text>
+      {symbols ? <Formula text={condition} names={symbols} style={styles.condition} /> : <Text style={styles.condition}>{condition}</Text>}
+      <Text style={type.body}>{readableText(message)}</Text>
     </View>
   );
 }

@@ -100,6 +100,25 @@ describe('WorksheetView', () => {
     expect(screen.queryByTestId('step-F_bound')).toBeNull();
   });
 
+  it('labels names, prints symbols and writes powers of ten as print does', async () => {
+    render(<WorksheetView worksheet={sheet} />);
+    // P / c for 1 kW is 3.336 µN (c exact, SI Brochure 9th ed.); typed as 1e-9 W the bound is below the
+    // step's µN prefixes and shows in scientific form: 1e-9 / c = 3.336 × 10⁻¹⁸ N.
+    type('input-P', '1e-9 W');
+    await waitFor(() => expect(relClose(si('step-F_bound'), 1e-9 / c)).toBe(true));
+    const value = screen.getByTestId('step-F_bound').textContent!;
+    expect(value).not.toMatch(/\^|e-\d/);
+    expect(value).toMatch(/× 10[⁰¹²³⁴⁵⁶⁷⁸⁹⁻]+/);
+    // The step's row: its label, its name as a symbol (F with the subscript "bound"), the formula with symbols.
+    const row = screen.getByTestId('step-F_bound').closest('[role="listitem"]') as HTMLElement;
+    expect(within(row).getAllByLabelText('F bound').length).toBeGreaterThan(0);
+    expect(row.textContent).toContain('Photon bound, Fbound');
+    // The slip's message names the step by its label, with the dimensions in words.
+    const slip = screen.getByTestId('step-slip-error').textContent!;
+    expect(slip).toMatch(/^A slip \(slip\): cannot add a power \(watts\) and a force \(newtons\)/);
+    expect(screen.getByLabelText('Radiated power, P')).toBeTruthy();
+  });
+
   it('starts from the values it is given and plots its sweep', () => {
     render(<WorksheetView worksheet={sheet} initialValues={{ F: '1 uN' }} />);
     expect((screen.getByTestId('input-F') as HTMLInputElement).value).toBe('1 uN');

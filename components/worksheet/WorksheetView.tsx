@@ -1,6 +1,7 @@
 import { useEffect, useMemo } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { compileWorksheetWithKit } from '@/shared/compute';
+import { CONSTANT_NAMES } from '@/shared/worksheet/constants';
 import type { Worksheet } from '@/shared/worksheet/schema';
 import type { PlotResult } from '@/shared/worksheet/types';
 import { LinePlot, type LinePlotData } from '../plots/LinePlot';
@@ -9,6 +10,8 @@ import { Notice } from '../ui/Notice';
 import { Section } from '../ui/Screen';
 import { QuantityField } from './QuantityField';
 import { ResultList, ResultRow } from './ResultRow';
+import { withLabels } from './Symbolic';
+import { readableText } from '@/shared/format/numbers';
 import { useTypedInputs } from './useTypedInputs';
 import { Verdict } from './Verdict';
 
@@ -33,6 +36,13 @@ export function WorksheetView({ worksheet, initialValues = {}, onValuesChange }:
   const compiled = useMemo(() => compileWorksheetWithKit(worksheet), [worksheet]);
   const { texts, setText, settled, touched } = useTypedInputs(worksheet.inputs, initialValues);
   const result = useMemo(() => compiled.evaluate(settled), [compiled, settled]);
+  // Names shown as symbols in formulas, and labels for the names in messages.
+  const symbols = useMemo(() => new Set([...worksheet.inputs.map((i) => i.name), ...worksheet.steps.map((s) => s.name), ...CONSTANT_NAMES]), [worksheet]);
+  const labels = useMemo(
+    () => Object.fromEntries([...worksheet.inputs, ...worksheet.steps, ...worksheet.checks].map((x) => [x.name, x.label])),
+    [worksheet],
+  );
+  const say = (message: string | undefined) => (message === undefined ? undefined : withLabels(message, labels));
 
   useEffect(() => {
     if (touched) onValuesChange?.(settled);
@@ -52,13 +62,14 @@ export function WorksheetView({ worksheet, initialValues = {}, onValuesChange }:
                 key={input.name}
                 name={input.name}
                 label={input.label}
+                showSymbol
                 value={texts[input.name]}
                 onChangeText={(text) => setText(input.name, text)}
                 defaultText={input.default}
                 unit={input.unit}
                 difference={input.kind === 'difference'}
                 help={input.help}
-                error={inputResult.get(input.name)?.error?.message}
+                error={say(inputResult.get(input.name)?.error?.message)}
                 reading={inputResult.get(input.name)?.value?.display}
               />
             ))}
@@ -79,9 +90,11 @@ export function WorksheetView({ worksheet, initialValues = {}, onValuesChange }:
                 key={step.name}
                 testID={`step-${step.name}`}
                 label={step.label}
+                symbol={step.name}
+                symbols={symbols}
                 detail={`${step.name} = ${step.expression}`}
                 value={r?.value}
-                error={r?.error?.message}
+                error={say(r?.error?.message)}
               />
             );
           })}
@@ -99,7 +112,8 @@ export function WorksheetView({ worksheet, initialValues = {}, onValuesChange }:
                   holds={r?.holds}
                   title={check.label}
                   condition={check.condition}
-                  message={r?.message ?? r?.error?.message ?? 'Not evaluated: fix the inputs or steps it depends on.'}
+                  symbols={symbols}
+                  message={say(r?.message ?? r?.error?.message) ?? 'Not evaluated: fix the inputs or steps it depends on.'}
                 />
               );
             })}
@@ -112,7 +126,7 @@ export function WorksheetView({ worksheet, initialValues = {}, onValuesChange }:
             {result.plots.map((plot) =>
               plot.error ? (
                 <Notice key={plot.name} testID={`plot-${plot.name}-error`} title={`${plot.label}: not drawn`}>
-                  {plot.error.message}
+                  {readableText(withLabels(plot.error.message, labels))}
                 </Notice>
               ) : (
                 <LinePlot key={plot.name} plot={asLinePlot(plot)} />

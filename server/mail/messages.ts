@@ -140,7 +140,7 @@ export function queueDigestMessage(to: string, displayName: string, items: { kin
     to,
     n === 1 ? `New in the queue: ${items[0].title}` : `${n} new submissions in the queue`,
     `Hello ${displayName},`,
-    [n === 1 ? 'A new submission waits for a decision:' : `${n} new submissions wait for a decision:`, ...shown],
+    [n === 1 ? 'A new submission waits for a moderator to pick it up:' : `${n} new submissions wait for a moderator to pick them up:`, ...shown],
     { href: link, label: 'Open the queue' },
     ['You receive this because you are a moderator on Counterweight. New items are gathered into one message at a time.'],
   );

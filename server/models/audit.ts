@@ -28,7 +28,7 @@ export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreation
   declare createdAt: CreationOptional<Date>;
   declare actor?: NonAttribute<User | null>;
 
-  toDto(): AuditEventDto {
+  toDto(): Omit<AuditEventDto, 'sentence'> {
     return {
       id: Number(this.id),
       at: this.createdAt.toISOString(),

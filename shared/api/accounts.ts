@@ -81,6 +81,14 @@ export interface AuditEventDto {
   subjectId: string;
   before: unknown;
   after: unknown;
+  /** What happened as a sentence naming the actor and the record (parts with `title` are titles, set in italics). */
+  sentence: AuditSentencePart[];
+}
+
+/** A run of an audit sentence; `title` marks an entry's title. */
+export interface AuditSentencePart {
+  text: string;
+  title?: boolean;
 }
 
 /** `GET /api/admin/audit` */

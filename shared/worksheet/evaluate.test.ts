@@ -66,7 +66,7 @@ describe('inputs', () => {
     const r = compileWorksheet(photonSheet()).evaluate({ F: '3 kWh', P: '1 kWW' });
     expect(r.inputs[0].error).toEqual({
       kind: 'dimension',
-      message: 'Input F: "3 kWh" is an energy (kg m^2 s^-2), but this needs a force (kg m s^-2)',
+      message: 'Input F: "3 kWh" is an energy (joules), but this needs a force (newtons)',
     });
     expect(r.inputs[1].error?.kind).toBe('unknown_symbol');
     expect(r.inputs[1].error?.message).toMatch(/^Input P: "kWW" is not a unit/);
@@ -121,7 +121,7 @@ describe('steps', () => {
     const r = evaluateWorksheet(ws);
     expect(r.steps[0].error).toEqual({
       kind: 'dimension',
-      message: 'Step bad: cannot add a power (kg m^2 s^-3) and a force (kg m s^-2) in "P + F"',
+      message: 'Step bad: cannot add a power (watts) and a force (newtons) in "P + F"',
     });
     expect(r.steps[1].error).toEqual({ kind: 'value', message: 'Step later: depends on step bad, which could not be computed' });
     expect(r.steps[2].value?.si).toBeCloseTo(1000 / C, 18);
@@ -130,13 +130,13 @@ describe('steps', () => {
   test('other unit errors inside functions and comparisons are rewritten in plain words', () => {
     const run = (expression: string) =>
       evaluateWorksheet(photonSheet({ steps: [{ name: 's', label: 's', expression }], checks: [] })).steps[0].error;
-    expect(run('sin(P)')).toEqual({ kind: 'dimension', message: 'Step s: sin() needs an angle or a pure number, but was given a power (kg m^2 s^-3) in "sin(P)"' });
-    expect(run('log(F)')?.message).toContain('log() needs a pure number, but was given a force (kg m s^-2)');
-    expect(run('P to N')?.message).toContain('cannot convert a power (kg m^2 s^-3) to N');
+    expect(run('sin(P)')).toEqual({ kind: 'dimension', message: 'Step s: sin() needs an angle or a pure number, but was given a power (watts) in "sin(P)"' });
+    expect(run('log(F)')?.message).toContain('log() needs a pure number, but was given a force (newtons)');
+    expect(run('P to N')?.message).toContain('cannot convert a power (watts) to N');
     expect(run('P ^ F')?.message).toContain('the exponent must be a pure number');
     expect(run('sqrt(-1)')?.message).toContain('complex number');
     expect(run('P > 1 W')?.message).toContain('true, not a quantity');
-    expect(run('P > F')?.message).toContain('cannot compare a power (kg m^2 s^-3) with a force (kg m s^-2)');
+    expect(run('P > F')?.message).toContain('cannot compare a power (watts) with a force (newtons)');
   });
 
   test('a result that does not match the declared unit is a dimension error at that step', () => {
@@ -144,7 +144,7 @@ describe('steps', () => {
     const r = evaluateWorksheet(ws);
     expect(r.steps[0].error).toEqual({
       kind: 'dimension',
-      message: 'Step F_bound: the result is a quantity in kg m^3 s^-4, but the step\'s unit "mN" is a force (kg m s^-2)',
+      message: 'Step F_bound: the result is a quantity in kg·m³·s⁻⁴, but the step\'s unit "mN" is a force (newtons)',
     });
   });
 
@@ -222,7 +222,7 @@ describe('checks', () => {
     const ws = photonSheet({ checks: [{ name: 'k', label: 'k', condition: 'F + 1 mN', holds: 'h', fails: 'f' }] });
     const r = evaluateWorksheet(ws);
     expect(r.ok).toBe(false);
-    expect(r.checks[0].error).toEqual({ kind: 'value', message: 'Check k: the condition gives a force (kg m s^-2), not true or false' });
+    expect(r.checks[0].error).toEqual({ kind: 'value', message: 'Check k: the condition gives a force (newtons), not true or false' });
   });
 
   test('quoting an unknown name is an error at the check', () => {
@@ -319,7 +319,7 @@ describe('kit functions', () => {
     const r = evaluateWorksheet(ws('photon_bound(F)'), {}, { functions: kit });
     expect(r.steps[0].error).toEqual({
       kind: 'dimension',
-      message: 'Step s: photon_bound(): the argument P must be a power (kg m^2 s^-3), but it is a force (kg m s^-2)',
+      message: 'Step s: photon_bound(): the argument P must be a power (watts), but it is a force (newtons)',
     });
   });
 

@@ -67,5 +67,5 @@ test('YAML syntax errors name the file and line', () => {
 test('a dimension error at the defaults is reported at the expression', () => {
   const e = fileError(GOOD.replace('expression: P / c', 'expression: P + c'));
   expect(e.problems[0].field).toBe('worksheet.steps.0.expression');
-  expect(e.problems[0].message).toContain('cannot add a power (kg m^2 s^-3) and a speed (m s^-1)');
+  expect(e.problems[0].message).toContain('cannot add a power (watts) and a speed (m/s)');
 });

@@ -121,9 +121,9 @@ describe('parseQuantity: what may be typed', () => {
   test('a dimension mismatch spells out both dimensions', () => {
     const e = errorOf(() => parseQuantity('3 kWh', 'N'));
     expect(e.kind).toBe('dimension');
-    expect(e.message).toBe('"3 kWh" is an energy (kg m^2 s^-2), but this needs a force (kg m s^-2)');
-    expect(errorOf(() => parseQuantity('0.8 N', '')).message).toBe('"0.8 N" is a force (kg m s^-2), but this needs a pure number');
-    expect(errorOf(() => parseQuantity('1.5 hp', 'K')).message).toContain('a power (kg m^2 s^-3), but this needs a temperature (K)');
+    expect(e.message).toBe('"3 kWh" is an energy (joules), but this needs a force (newtons)');
+    expect(errorOf(() => parseQuantity('0.8 N', '')).message).toBe('"0.8 N" is a force (newtons), but this needs a pure number');
+    expect(errorOf(() => parseQuantity('1.5 hp', 'K')).message).toContain('a power (watts), but this needs a temperature (kelvins)');
   });
 
   test('an unknown unit is named', () => {
@@ -213,15 +213,15 @@ describe('formatQuantity', () => {
 
 describe('describeDimension', () => {
   test('names the kind of quantity and its SI base dimension', () => {
-    expect(describeDimension('N')).toBe('a force (kg m s^-2)');
-    expect(describeDimension('lbf')).toBe('a force (kg m s^-2)');
-    expect(describeDimension('kWh')).toBe('an energy (kg m^2 s^-2)');
-    expect(describeDimension('hp')).toBe('a power (kg m^2 s^-3)');
-    expect(describeDimension('psi')).toBe('a pressure (kg m^-1 s^-2)');
-    expect(describeDimension('km/s')).toBe('a speed (m s^-1)');
-    expect(describeDimension('degF')).toBe('a temperature (K)');
+    expect(describeDimension('N')).toBe('a force (newtons)');
+    expect(describeDimension('lbf')).toBe('a force (newtons)');
+    expect(describeDimension('kWh')).toBe('an energy (joules)');
+    expect(describeDimension('hp')).toBe('a power (watts)');
+    expect(describeDimension('psi')).toBe('a pressure (pascals)');
+    expect(describeDimension('km/s')).toBe('a speed (m/s)');
+    expect(describeDimension('degF')).toBe('a temperature (kelvins)');
     expect(describeDimension('')).toBe('a pure number');
-    expect(describeDimension('m^4')).toBe('a quantity in m^4');
+    expect(describeDimension('m^4')).toBe('a quantity in m⁴');
   });
 });
 

@@ -6,6 +6,7 @@
  * map to coherent SI, si = n * factor + offsetSI (offsetSI is non-zero only for degC and degF, exactly
  * as mathjs applies offsets: only to a single unit with power 1).
  */
+import { unitSymbols, unitWords } from '../format/dimensions';
 import { getConstant } from './constants';
 import { Unit } from './math';
 import type { EvaluationErrorKind } from './types';
@@ -156,12 +157,15 @@ function namedFor(d: Dims): Named | undefined {
   return n ?? undefined;
 }
 
-/** "a force (kg m s^-2)"; "a pure number"; "a quantity in kg^-1 m^3 s^-2 A" for unnamed ones. */
+/**
+ * A dimension in words for a sentence: "a force (newtons)", "a speed (m/s)", "a pure number", and
+ * "a quantity in kg⁻¹·m³·s⁻²" for one without a name (shared/format/dimensions.ts: SI unit names).
+ */
 export function describeDims(d: Dims): string {
   if (isDimensionless(d)) return 'a pure number';
   const n = namedFor(d);
   const ds = dimString(d);
-  return n ? `${n.name} (${ds})` : `a quantity in ${ds}`;
+  return n ? `${n.name} (${unitWords(ds, n.si)})` : `a quantity in ${unitSymbols(ds)}`;
 }
 
 /** The coherent SI unit for a dimension, in mathjs syntax: "N", "m / s", "" for a pure number. */

@@ -139,7 +139,7 @@ it('reports a sighting with a PDF, and a moderator accepts it onto an entry', as
   expect(file.headers()['content-disposition']).toMatch(/^attachment/);
   expect(Buffer.from(await file.body()).equals(pdf)).toBe(true);
 
-  // 4. Take it up and accept it onto the resonant-cavity entry, found by searching the library.
+  // 4. Pick it up and accept it onto the resonant-cavity entry, found by searching the library.
   await byTestId(mod, 'item-claim').click();
   await until('the item is held', async () => (await byTestId(mod, 'item-status').getAttribute('data-status')) === 'claimed');
   await byTestId(mod, 'item-decide-accept').click();

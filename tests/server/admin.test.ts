@@ -65,6 +65,7 @@ describe('roles', () => {
       subjectId: String(target!.id),
       before: { role: 'contributor' },
       after: { role: 'editor' },
+      sentence: expect.any(Array),
     });
     expect(new Date(event.at).getTime()).toBeGreaterThanOrEqual(Math.floor(started / 1000) * 1000);
     expect(new Date(event.at).getTime()).toBeLessThanOrEqual(Date.now());

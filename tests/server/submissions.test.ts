@@ -139,6 +139,44 @@ describe('a sighting, from submission to the entry', () => {
     expect((await request(h.app).get(s.attachments[0].url)).status).toBe(401);
   });
 
+  it('serves an image or a PDF inline for a preview, to the moderator and the submitter only, never scriptable', async () => {
+    const id = await submitOwn('Sealed resonator drive, previewed');
+    const s = (await moderator.get(`/api/submissions/${id}`)).body.submission;
+    const [pdf, png] = s.attachments;
+    const bytes = (c: Client, url: string) =>
+      c.get(url).buffer(true).parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (chunk: Buffer) => chunks.push(chunk));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
+    for (const who of [moderator, contributor]) {
+      const image = await bytes(who, `${png.url}?view=inline`);
+      expect(image.status).toBe(200);
+      // The type read from the bytes at upload (the sender said application/octet-stream).
+      expect(image.headers['content-type']).toBe('image/png');
+      expect(image.headers['content-disposition']).toMatch(/^inline; filename="photo\.bin"/);
+      expect(image.headers['x-content-type-options']).toBe('nosniff');
+      // No script, no frames, nothing loaded but the image itself; sandboxed (CSP Level 3, W3C).
+      expect(image.headers['content-security-policy']).toMatch(/^default-src 'none';/);
+      expect(image.headers['content-security-policy']).toMatch(/sandbox/);
+      expect(image.headers['content-security-policy']).not.toMatch(/script-src|unsafe-eval/);
+      expect(crypto.createHash('sha256').update(image.body as Buffer).digest('hex')).toBe(png.sha256);
+    }
+    const doc = await bytes(moderator, `${pdf.url}?view=inline`);
+    expect([doc.status, doc.headers['content-type']]).toEqual([200, 'application/pdf']);
+    expect(doc.headers['content-disposition']).toMatch(/^inline; filename="brochure\.pdf"/);
+    expect(doc.headers['x-content-type-options']).toBe('nosniff');
+    expect(doc.headers['content-security-policy']).toMatch(/^default-src 'none';/);
+    expect(doc.headers['content-security-policy']).not.toMatch(/script-src/);
+    // The default stays a download; a bad view is a 400 naming the field; others still see nothing.
+    expect((await moderator.get(png.url)).headers['content-disposition']).toMatch(/^attachment;/);
+    const bad = await moderator.get(`${png.url}?view=html`);
+    expect([bad.status, Object.keys(bad.body.error.fields)]).toEqual([400, ['query.view']]);
+    const editor = await h.signedIn(demo.editor.email);
+    expect((await editor.get(`${png.url}?view=inline`)).status).toBe(404);
+    expect((await request(h.app).get(`${png.url}?view=inline`)).status).toBe(401);
+  });
+
   it('is listed in the queue, oldest first, with counts', async () => {
     const id = await submitOwn('Sealed resonator drive, in the queue');
     const q = await moderator.get('/api/queue');

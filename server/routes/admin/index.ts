@@ -10,6 +10,7 @@ import { validated } from '../../http/validate';
 import { AuditEvent, OutboxMessage, User } from '../../models';
 import type { Allow } from '../../policies';
 import * as present from '../../presenters/accounts';
+import { auditEvents } from '../../presenters/audit';
 import type { Accounts } from '../../services/accounts';
 import { pageQuerySchema, setRoleSchema, userIdParams, userListQuerySchema } from './schema';
 
@@ -62,7 +63,7 @@ export function adminRoutes(allow: Allow, accounts: Accounts, env: string): Rout
       limit,
       offset,
     });
-    const payload: AuditListResponse = { events: rows.map(present.auditEvent), total: count };
+    const payload: AuditListResponse = { events: await auditEvents(rows), total: count };
     res.set('Cache-Control', 'no-store').json(payload);
   });
 
