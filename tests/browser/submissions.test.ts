@@ -11,7 +11,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
-import { byTestId, screenshotDir, signInThroughForm, startHarness, type Harness } from '../support/browser';
+import { byTestId, screenshotDir, signInThroughForm, startHarness, widest, type Harness } from '../support/browser';
 import { until } from '../support/poll';
 
 jest.setTimeout(240_000);
@@ -64,13 +64,6 @@ function minimalPdf(): Buffer {
  * The widest right edge of anything on the page, and whether anything was scrolled sideways: nothing
  * may stick out of a phone's 390 px (an overflowing child shows as either).
  */
-const widest = (page: Page) =>
-  page.evaluate(() => {
-    const all = Array.from(document.querySelectorAll('body *'));
-    if (all.some((el) => el.scrollLeft > 0) || window.scrollX > 0) return Infinity;
-    return Math.max(...all.map((el) => el.getBoundingClientRect().right));
-  });
-
 const text = async (page: Page, id: string) => ((await byTestId(page, id).textContent()) ?? '').trim();
 
 it('reports a sighting with a PDF, and a moderator accepts it onto an entry', async () => {

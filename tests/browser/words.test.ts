@@ -9,7 +9,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { minimalPng } from '../fixtures/files/samples';
-import { byTestId, screenshotDir, settled, signInThroughForm, startHarness, type Harness } from '../support/browser';
+import { byTestId, screenshotDir, settled, signInThroughForm, startHarness, widest, type Harness } from '../support/browser';
 import { until } from '../support/poll';
 
 jest.setTimeout(300_000);
@@ -28,13 +28,6 @@ const admin = 'admin@example.org';
 const text = async (page: Page, id: string) => ((await byTestId(page, id).first().textContent()) ?? '').trim();
 
 /** Nothing sticks out sideways at this width. */
-const widest = (page: Page) =>
-  page.evaluate(() => {
-    const all = Array.from(document.querySelectorAll('body *'));
-    if (all.some((el) => el.scrollLeft > 0) || window.scrollX > 0) return Infinity;
-    return Math.max(...all.map((el) => el.getBoundingClientRect().right));
-  });
-
 const shot = (page: Page, screen: string, width: number) => page.screenshot({ path: path.join(screenshotDir, `${screen}-${width}.png`), fullPage: true });
 
 /** Dotted action codes as the services write them (user.role_changed, submission.accepted, …). */

@@ -124,3 +124,21 @@ export async function settled(page: Page): Promise<void> {
   // Anything the first round of tasks started (a fetch from a handler) has also finished.
   await page.waitForLoadState('networkidle');
 }
+
+/**
+ * The right edge of the widest element on the page (a page that fits a phone keeps it within the
+ * viewport); Infinity when anything is scrolled sideways. A display equation wider than the column
+ * scrolls inside its own box (`.katex-display` has `overflow-x: auto`, checked here), so its content
+ * counts by that box, not by the equation's full width.
+ */
+export const widest = (page: Page): Promise<number> =>
+  page.evaluate(() => {
+    const all = Array.from(document.querySelectorAll('body *'));
+    if (all.some((el) => el.scrollLeft > 0) || window.scrollX > 0) return Infinity;
+    const scrollsItself = (el: Element) => el.classList.contains('katex-display') && ['auto', 'scroll'].includes(getComputedStyle(el).overflowX);
+    const measured = all.filter((el) => {
+      const box = el.parentElement?.closest('.katex-display');
+      return !(box && scrollsItself(box));
+    });
+    return Math.max(...measured.map((el) => el.getBoundingClientRect().right));
+  });
