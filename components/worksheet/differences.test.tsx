@@ -97,6 +97,6 @@ describe('the worksheet editor', () => {
     expect(emitted.at(-1)?.[0].inputs[0].kind).toBe('difference');
     expect(screen.getByTestId('ws-0-step-0-value').textContent).toBe('= 2 K');
     fireEvent.change(kind, { target: { value: 'rise' } });
-    expect(within(screen.getByTestId('ws-0-input-0-kind')).getByText('either "absolute" or "difference" (for a rise or a ΔT)')).toBeTruthy();
+    expect(within(screen.getByTestId('ws-0-input-0-kind')).getByText('Either "absolute" or "difference" (for a rise or a ΔT).')).toBeTruthy();
   });
 });
