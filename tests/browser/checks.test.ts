@@ -19,6 +19,9 @@ beforeAll(async () => {
 });
 afterAll(() => h?.close());
 
+// The harness's shared context: the checks need no account, and the app's script stays in the cache.
+const phonePage = () => h.page(390, 844);
+
 /** Every element whose testID starts with `prefix`, as name → exact SI value (data-si). */
 async function siValues(page: Page, prefix: string): Promise<Record<string, number>> {
   return page.evaluate((p) => {
@@ -65,7 +68,7 @@ function changedInput(def: (typeof checkList)[number]): { name: string; text: st
 
 describe.each(checkList.map((c) => [c.name, c] as const))('check %s at phone size', (name, def) => {
   it('computes from its permalink as the server does, updates as the reader types, and the new permalink reproduces it', async () => {
-    const page = await h.open(390, 844);
+    const page = await phonePage();
     const defaults = Object.fromEntries(def.inputs.map((i) => [i.name, i.default]));
     const query = new URLSearchParams(defaults).toString();
     await page.goto(`${h.base}/checks/${name}?${query}`);
@@ -86,14 +89,15 @@ describe.each(checkList.map((c) => [c.name, c] as const))('check %s at phone siz
     });
 
     await until('the permalink carries the typed value', async () => new URL(page.url()).searchParams.get(change.name) === change.text);
-    const again = await h.open(390, 844);
+    const again = await phonePage();
     await again.goto(page.url());
     await byTestId(again, 'verdict').waitFor();
     await until('the permalink shows every output', async () => Object.keys(await siValues(again, 'output-')).length === changed.outputs.length);
     expectSameNumbers(await siValues(again, 'output-'), changed.outputs);
     expect(page.problems).toEqual([]);
-    await page.context().close();
-    await again.context().close();
+    expect(again.problems).toEqual([]);
+    await page.close();
+    await again.close();
   });
 });
 
@@ -108,7 +112,7 @@ it('evaluates a starter worksheet in the browser with the same numbers as the se
       body: JSON.stringify({ worksheet, values: {} }),
     });
     const server = (await res.json()) as { steps: { name: string; value?: { si: number } }[] };
-    const page = await h.open(390, 844);
+    const page = await phonePage();
     await page.goto(`${h.base}/worksheets/${name}`);
     await byTestId(page, 'screen-worksheet').waitFor();
     const expected = server.steps.filter((s) => s.value);
@@ -119,6 +123,7 @@ it('evaluates a starter worksheet in the browser with the same numbers as the se
       if (!relClose(browser[s.name], s.value!.si)) throw new Error(`${name}.${s.name}: browser ${browser[s.name]} vs server ${s.value!.si}`);
     }
     await page.screenshot({ path: path.join(screenshotDir, `worksheet-${name}.png`), fullPage: true });
-    await page.context().close();
+    expect(page.problems).toEqual([]);
+    await page.close();
   }
 });

@@ -15,7 +15,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { demo } from '../support/app';
-import { byTestId, screenshotDir, settled, signInThroughForm, startHarness, type Harness } from '../support/browser';
+import { byTestId, screenshotDir, settled, signInQuickly, startHarness, type Harness } from '../support/browser';
 import { until } from '../support/poll';
 import { saveDraft, signedInAt, startRevision, submitDraft } from '../support/workflow';
 
@@ -41,7 +41,7 @@ const text = async (page: Page, testID: string) => (await byTestId(page, testID)
 describe.each(sizes)('the editor at $width px', ({ width, height }) => {
   it('previews, tells problems in our words after a field is left, moves to the draft’s address, and blocks a bad formula', async () => {
     const page = await h.open(width, height);
-    await signInThroughForm(page, h.base, demo.editor.email);
+    await signInQuickly(page, h.base, demo.editor.email);
     await page.goto(`${h.base}/desk/new`);
     await byTestId(page, 'entry-editor').waitFor();
     expect(await page.title()).toBe('New entry — Counterweight');
@@ -147,7 +147,7 @@ describe.each(sizes)('reviewing a revision at $width px', ({ width, height }) =>
     const draft = await submitDraft(author, await saveDraft(author, started, content));
 
     const page = await h.open(width, height);
-    await signInThroughForm(page, h.base, demo.editor2.email);
+    await signInQuickly(page, h.base, demo.editor2.email);
     await page.goto(`${h.base}/desk/drafts/${draft.id}`);
     const panel = byTestId(page, 'review-panel');
     await panel.waitFor();

@@ -20,7 +20,7 @@ import type { ConsoleMessage, Page } from 'playwright-core';
 import request from 'supertest';
 import { XSS_PAYLOADS, payloadText } from '../fixtures/xss-payloads';
 import { demo } from '../support/app';
-import { byTestId, settled, startHarness, signInThroughForm, type Harness } from '../support/browser';
+import { byTestId, settled, startHarness, signInQuickly, type Harness } from '../support/browser';
 
 jest.setTimeout(300_000);
 
@@ -213,7 +213,7 @@ it('shows every payload as text, runs none of them, on the entry, the library an
 
   // The submission as its submitter: title, where seen, summary, the question and the reply, the moderator's name.
   const own = await openWatched();
-  await signInThroughForm(own, h.base, accounts.contributor, password);
+  await signInQuickly(own, h.base, accounts.contributor, password);
   await own.goto(`${h.base}/submissions/${sightingId}`);
   await own.getByText('summary-marker-0', { exact: false }).first().waitFor();
   const mine = await expectClean(own, ['sighting-title-marker', 'where-seen-marker', ...all('summary-marker'), 'question-note-marker', ...all('answer-note-marker')]);
@@ -221,7 +221,7 @@ it('shows every payload as text, runs none of them, on the entry, the library an
 
   // The same item in the moderator's queue: the submitter's display name.
   const mod = await openWatched();
-  await signInThroughForm(mod, h.base, accounts.moderator, password);
+  await signInQuickly(mod, h.base, accounts.moderator, password);
   await mod.goto(`${h.base}/queue/${sightingId}`);
   await mod.getByText('summary-marker-0', { exact: false }).first().waitFor();
   const queued = await expectClean(mod, ['sighting-title-marker', 'where-seen-marker', ...all('summary-marker'), ...all('answer-note-marker')]);

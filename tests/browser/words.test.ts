@@ -9,7 +9,7 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { minimalPng } from '../fixtures/files/samples';
-import { byTestId, screenshotDir, settled, signInThroughForm, startHarness, widest, type Harness } from '../support/browser';
+import { byTestId, screenshotDir, settled, signInQuickly, startHarness, widest, type Harness } from '../support/browser';
 import { until } from '../support/poll';
 
 jest.setTimeout(300_000);
@@ -63,7 +63,7 @@ describe.each([390, 1366])('at %i px', (width) => {
 
   it('lets the second figure take its kind from the unit, names a refused file in words, and previews an image for a moderator', async () => {
     const page = await h.open(width, height);
-    await signInThroughForm(page, h.base, contributor);
+    await signInQuickly(page, h.base, contributor);
     await page.goto(`${h.base}/report`);
     await byTestId(page, 'screen-report').waitFor();
     await byTestId(page, 'sighting-title').fill(title);
@@ -106,7 +106,7 @@ describe.each([390, 1366])('at %i px', (width) => {
 
     // The moderator sees the picture itself, decoded by the browser from the preview address.
     const mod = await h.open(width, height);
-    await signInThroughForm(mod, h.base, moderator);
+    await signInQuickly(mod, h.base, moderator);
     await mod.goto(`${h.base}/queue/${id}`);
     await byTestId(mod, 'screen-queue-item').waitFor();
     expect(await text(mod, 'item-status')).toBe('Not picked up yet');
@@ -128,7 +128,7 @@ describe.each([390, 1366])('at %i px', (width) => {
 
   it('tells the audit log as sentences, with no action codes', async () => {
     const page = await h.open(width, height);
-    await signInThroughForm(page, h.base, admin);
+    await signInQuickly(page, h.base, admin);
     await page.goto(`${h.base}/admin/audit`);
     await byTestId(page, 'audit-list').waitFor();
     await settled(page);

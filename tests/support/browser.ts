@@ -7,7 +7,7 @@ import fs from 'node:fs';
 import http from 'node:http';
 import os from 'node:os';
 import path from 'node:path';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { createApp, type AppLocals } from '../../server/app';
 import { ROOT } from '../../server/config';
 import { seedIfEmpty } from '../../server/db/seed';
@@ -27,6 +27,13 @@ export interface Harness {
   mail: TestMail;
   /** A new page in its own context at this viewport; page errors are collected in `problems`. */
   open(width: number, height: number): Promise<Page & { problems: string[] }>;
+  /**
+   * A new page in a context shared by every `page()` call at this viewport and colour scheme, signed
+   * out (cookies and the page's storage cleared) but keeping the browser's cache, as a returning
+   * reader's browser does: the app's script is not fetched and compiled anew for every page. Close
+   * the page (not its context) when done; `close()` closes the shared contexts.
+   */
+  page(width: number, height: number, colorScheme?: 'light' | 'dark'): Promise<Page & { problems: string[] }>;
   close(): Promise<void>;
 }
 
@@ -71,18 +78,40 @@ export async function startHarness(): Promise<Harness> {
       '--disable-quic',
     ],
   });
+  const shared = new Map<string, BrowserContext>();
+  const watched = (page: Page) => {
+    const p = page as Page & { problems: string[] };
+    p.problems = [];
+    p.on('pageerror', (e) => p.problems.push(e.message));
+    return p;
+  };
   return {
     base,
     browser,
     mail,
+    async page(width, height, colorScheme = 'light') {
+      const key = `${width}x${height}-${colorScheme}`;
+      let context = shared.get(key);
+      if (!context) {
+        context = await browser.newContext({ viewport: { width, height }, deviceScaleFactor: 1, colorScheme });
+        shared.set(key, context);
+      }
+      await context.clearCookies();
+      // Storage is per origin: clear it from a page of ours before handing a page over.
+      const page = await context.newPage();
+      await page.goto(`${base}/api/health`);
+      await page.evaluate(() => {
+        localStorage.clear();
+        sessionStorage.clear();
+      });
+      return watched(page);
+    },
     async open(width, height) {
       const context = await browser.newContext({ viewport: { width, height }, deviceScaleFactor: 1 });
-      const page = (await context.newPage()) as Page & { problems: string[] };
-      page.problems = [];
-      page.on('pageerror', (e) => page.problems.push(e.message));
-      return page;
+      return watched(await context.newPage());
     },
     async close() {
+      for (const context of shared.values()) await context.close();
       await browser.close();
       server.closeAllConnections();
       await new Promise((r) => server.close(r));
@@ -104,6 +133,20 @@ export async function signInThroughForm(page: Page, base: string, email: string,
   await byTestId(page, 'field-password').fill(password);
   await byTestId(page, 'submit').click();
   await byTestId(page, 'screen-account').waitFor();
+}
+
+/**
+ * Signs the page's context in through the API (GET /api/session for the CSRF token, then POST
+ * /api/auth/sign-in; the browser context's cookie jar keeps the session), without loading a screen:
+ * for tests about something else than the sign-in form, which `signInThroughForm` and
+ * tests/browser/accounts.test.ts cover. The next `goto` opens the app signed in.
+ */
+export async function signInQuickly(page: Page, base: string, email: string, password = 'counterweight-demo-2026'): Promise<void> {
+  const session = await page.request.get(`${base}/api/session`);
+  if (!session.ok()) throw new Error(`GET /api/session answered ${session.status()}`);
+  const { csrfToken } = (await session.json()) as { csrfToken: string };
+  const res = await page.request.post(`${base}/api/auth/sign-in`, { data: { email, password }, headers: { 'X-CSRF-Token': csrfToken } });
+  if (res.status() !== 200) throw new Error(`signing in as ${email} answered ${res.status()}: ${await res.text()}`);
 }
 
 /**
