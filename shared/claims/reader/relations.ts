@@ -13,7 +13,7 @@ import { FIGURE_SI_UNIT, type FigureRole } from '../types';
 import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, windowStart } from './context';
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
-import { roleFor } from './roles';
+import { FILLS_LEAD_RE, roleFor } from './roles';
 import { ROCKET_RE, rolesByContext } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
 
@@ -103,7 +103,9 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const said =
       [volt, cur].map((d) => /^[^\S\n]*(in|out|input|output)(?!\p{L})/iu.exec(text.slice(d.end, d.end + 12))).find((x) => x !== null) ??
       /(?:^|[|\n•;,(])[^\S\n]*(?:(?:electrical|electric|DC|AC)[^\S\n]+)?(in|out|input|output)[^\S\n]*[:=][^\S\n]*$/iu.exec(text.slice(Math.max(0, first.start - 30), first.start));
-    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
+    // "the coil charges a 12 V battery at 3 A": what it charges is its output, whatever the words between.
+    const fills = !said && FILLS_LEAD_RE.test(text.slice(Math.max(0, first.start - 40), first.start));
+    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills ? 'out' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
     const wordsRole = between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
     const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null);
     const role: FigureRole = wordsRole ?? (others.length && others.every((d) => d.role === 'in') ? 'out' : null);

@@ -57,6 +57,9 @@ const IMMEDIATE_HEDGE = '(?:(?:only|just|about|some|roughly|nearly|around|approx
 const IMMEDIATE_IN_RE = new RegExp(`(?<!\\p{L})(?:takes|took|draws|drew|consumes|consumed|uses|used|needs|requires|required|absorbs|absorbed|is fed|was fed|pulls|pulled)[^\\S\\n]+${IMMEDIATE_HEDGE}$`, 'iu');
 const IMMEDIATE_OUT_RE = new RegExp(`(?<!\\p{L})(?:delivers|delivered|produces|produced|generates|generated|returns|returned|puts out|put out|yields|yielded|outputs)[^\\S\\n]+${IMMEDIATE_HEDGE}$`, 'iu');
 
+/** Just before what a device fills or charges: "charges a 12 V battery", "filled the 5 kWh pack". */
+export const FILLS_LEAD_RE = /(?<!\p{L})(?:fill(?:s|ed|ing)?|(?:re)?charg(?:es|ed|ing)|tops? up|topped up)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their)[^\S\n]+$/iu;
+
 function roleFromWords(text: string, roles: CompiledRoles, start: number, end: number, floor: number): FigureRole {
   if (roles === ROLES.temperature) {
     // A heat pump's or fridge's source is its cold side and its sink the warm one (the other way round for an engine).
@@ -72,7 +75,7 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     if (/(?<!\p{L})(?:heat|energy)(?:[^\S\n]+(?:it|that it|they))?[^\S\n]+(?:draws?|takes?|extracts?|absorbs?|gets?|pulls?|harvests?|collects?)[^\S\n]+from[^\S\n]+(?:(?:the|a|an)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
   }
   // "filled a 5 kWh battery", "charged the 10 kWh pack": what is filled is what came out.
-  if (roles.groups === POWER_ENERGY_ROLES && /(?<!\p{L})(?:fill(?:s|ed|ing)?|charg(?:es|ed|ing)|tops? up|topped up)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their)[^\S\n]+$/iu.test(text.slice(Math.max(floor, start - 40), start))) return 'out';
+  if (roles.groups === POWER_ENERGY_ROLES && FILLS_LEAD_RE.test(text.slice(Math.max(floor, start - 40), start))) return 'out';
   // A verb right before the figure ("takes 50 PS of shaft power", "generates 40 kW") outweighs the
   // words after it.
   if (roles.groups === POWER_ENERGY_ROLES) {

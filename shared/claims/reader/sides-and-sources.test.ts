@@ -109,6 +109,21 @@ describe('inputs', () => {
     expectRelClose(input!.si!, 25 * 735.49875, 1e-12);
     expect(f.find((x) => x.kind === 'power' && x.role === 'out')).toMatchObject({ si: 22000 });
   });
+
+  test('"the coil charges a 12 V battery at 3 A" is an output, though a battery is often a source', () => {
+    const f = read('The pulse motor takes 24 V at 1.5 A, and meanwhile its pick-up coil recharges a 12 V battery at 4 A.');
+    const powers = f.filter((x) => x.kind === 'power');
+    // P = V × I (Ohm's-law power, any circuits textbook): 24 × 1.5 = 36 W in, 12 × 4 = 48 W out.
+    expect(powers.map((x) => [x.role, x.si])).toEqual([
+      ['in', 36],
+      ['out', 48],
+    ]);
+  });
+
+  test('"runs from a 12 V battery at 3 A" stays an input', () => {
+    const f = read('The fan runs from a 12 V battery at 3 A and moves 300 litres of air a minute.');
+    expect(f.find((x) => x.kind === 'power')).toMatchObject({ role: 'in', si: 36 });
+  });
 });
 
 describe('masses and thrust without propellant', () => {
