@@ -21,6 +21,25 @@ const temps = (f: Figure[]) => f.filter((x) => x.kind === 'temperature').map((x)
 const verdicts = (text: string) => runClaimChecks(read(text), { text, classes: [] });
 
 describe('two sides of a heat engine', () => {
+  test.each([
+    ['A generator on the stove pipe: hot side 280 °C, cold side 70 °C, 5 % conversion on a 12 °C day.', 553.15, 343.15, 285.15],
+    ['Hot junction 520 K and cold junction 310 K, room temperature 293 K, and 9 % efficient.', 520, 310, 293],
+  ])('with both sides named, the day or the room is set aside: %s', (text, hot, cold, aside) => {
+    const f = read(text);
+    // T(K) = t(°C) + 273.15 (SI Brochure, 9th ed., 2.3.1).
+    expect(temps(f)).toEqual([
+      ['hot', expect.closeTo(hot, 9)],
+      ['cold', expect.closeTo(cold, 9)],
+      ['aside', expect.closeTo(aside, 9)],
+    ]);
+    expect(verdicts(text).checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+  });
+
+  test('a heat pump that names no side keeps its outdoor air as the cold side', () => {
+    const f = read('The heat pump takes heat from outdoor air at 5 °C into 35 °C floor water with a COP of 4.');
+    expect(temps(f).map(([role]) => role)).toEqual(['cold', 'hot']);
+  });
+
   test('"between 650 °C heater head and 50 °C cooler": the cooler is the cold side, not a difference', () => {
     const text = 'The Stirling engine converts 25 % of the heat to work between a 650 °C heater head and 50 °C cooler.';
     const f = read(text);

@@ -76,6 +76,14 @@ const OPERATING_RANGE_RE =
 const SURROUNDINGS_RE = /(?<!\p{L})(?:room|lab|laboratory|test hall|hall|workshop|building|office|test cell|weather|day|night)(?!\p{L})/iu;
 /** A sentence about the test itself ("The test lasted 45 minutes in a room held at 21 °C."). */
 const TEST_SETTING_RE = /(?<!\p{L})(?:tests?|trials?|experiments?|measurements?|runs?|demonstrations?|lasted|shown|presented|held|kept|conditioned)(?!\p{L})/iu;
+/** A side named just before its temperature: "hot side 300 °C", "cold junction at 90 °C", "T_h = 600 K". */
+const NAMED_SIDE_BEFORE_RE = {
+  hot: /(?<!\p{L})(?:(?:hot|warm|heated)[- ](?:side|end|junction|plate|face|reservoir)s?|T_?\{?h(?:ot)?\}?)[^\S\n]*(?:temperature[^\S\n]+)?(?:at|of|is|[:=≈~])?[^\S\n]*(?:about|around|roughly|some)?[^\S\n]*$/iu,
+  cold: /(?<!\p{L})(?:(?:cold|cool|cooled)[- ](?:side|end|junction|plate|face|reservoir)s?|T_?\{?c(?:old)?\}?)[^\S\n]*(?:temperature[^\S\n]+)?(?:at|of|is|[:=≈~])?[^\S\n]*(?:about|around|roughly|some)?[^\S\n]*$/iu,
+};
+/** Said of the day or the surroundings: "on a 15 °C day", "a 30 °C afternoon", "(25 °C ambient)". */
+const DAY_AFTER_RE = /^[^\S\n]*(?:days?|nights?|afternoons?|mornings?|evenings?|ambient|room temperature|outside)(?!\p{L})/iu;
+const AMBIENT_BEFORE_RE = /(?<!\p{L})(?:ambient|room|lab|laboratory|surroundings?)[^\S\n]+(?:air[^\S\n]+)?(?:temperature[^\S\n]+)?(?:was[^\S\n]+|is[^\S\n]+)?(?:at|of|[:=≈~])?[^\S\n]*(?:about|around|roughly|some)?[^\S\n]*$/iu;
 /** Words that make a lone temperature one of the machine's sides, not its surroundings. */
 const MACHINE_SIDE_RE = /(?<!\p{L})(?:source|sink|sides?|hot|cold|warm|cool|reservoirs?|ends?|junctions?|plates?|faces?|inlet|outlet|flow|supply|delivery|evaporat\w*|condens\w*|cabinet|compartment|chamber|tank|boiler|emitter|heater|collector|brine|ground|outdoor|outside|exhaust|turbine|T_?[ch]|deep|surface)(?!\p{L})/iu;
 
@@ -101,6 +109,16 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
     const prev = thermal[i - 1];
     if (OPERATING_RANGE_RE.test(text.slice(Math.max(0, t.start - 40), t.start)) || (prev?.role === 'aside' && /^[^\S\n]*(?:°[CF]?[^\S\n]*)?(?:to|and|[-–—…])[^\S\n]*$/u.test(text.slice(prev.end, t.start)))) t.role = 'aside';
   });
+  // "hot side 300 °C, cold side 90 °C, … on a 15 °C day": with both sides named in so many words, a
+  // third temperature said of the day or the room is the surroundings. (Only then: an outdoor or
+  // room temperature is a heat pump's or a fridge's side when no side is named.)
+  const named = (side: 'hot' | 'cold') => thermal.some((u) => u.role === side && NAMED_SIDE_BEFORE_RE[side].test(text.slice(Math.max(0, u.start - 30), u.start)));
+  if (named('hot') && named('cold')) {
+    for (const t of thermal) {
+      if (NAMED_SIDE_BEFORE_RE.hot.test(text.slice(Math.max(0, t.start - 30), t.start)) || NAMED_SIDE_BEFORE_RE.cold.test(text.slice(Math.max(0, t.start - 30), t.start))) continue;
+      if (DAY_AFTER_RE.test(text.slice(t.end, t.end + 20)) || AMBIENT_BEFORE_RE.test(text.slice(Math.max(0, t.start - 40), t.start))) t.role = 'aside';
+    }
+  }
   // (Not one that the stated difference puts on the other side: "−18 °C; … at 32 °C (a 50 K difference)".)
   const differences = drafts.filter((d) => d.kind === 'temperature-difference').map((d) => siOf(d) ?? NaN);
   const otherSide = (t: Draft) =>
