@@ -282,6 +282,22 @@ describe('the checks of issue 12, planned from a claim (invented test data)', ()
     expect(any.assumptions.join(' ')).toMatch(/junctions/);
   });
 
+  it('a crystalline-silicon cell has one junction; a tandem two; a panel "in full sun" converts sunlight', () => {
+    const mono = run('Our monocrystalline panels are 45 % efficient.').checks.find((c) => c.check === 'light-converter-limits')!;
+    expect(mono.inputs).toMatchObject({ junctions: '1' });
+    // One junction, even at the sun's full concentration: about 41 % at most (Shockley and Queisser 1961,
+    // the detailed-balance limit); 45 % is above it.
+    expect(mono.finding).toBe('breaks');
+    expect(mono.assumptions.join(' ')).toMatch(/one junction/);
+    const tandem = run('Our perovskite-on-silicon tandem panels are 33 % efficient.').checks.find((c) => c.check === 'light-converter-limits')!;
+    expect(tandem.inputs).toMatchObject({ junctions: '2' });
+    expect(tandem.finding).toBe('consistent');
+    const module = run('The module gives 400 W under full sun and is 22 % efficient.').checks.find((c) => c.check === 'light-converter-limits');
+    expect(module?.finding).toBe('consistent');
+    // A panel that is no solar panel.
+    expect(run('The engine panel shows 30 % efficiency at 2000 rpm.').checks.some((c) => c.check === 'light-converter-limits')).toBe(false);
+  });
+
   it('says what electrolysis, excess-heat and self-charging-vehicle claims need', () => {
     expect(run('The HHO cell runs on 20 A at 13.8 V and doubles the mileage.').needs.map((n) => n.check)).toContain('faraday-yield');
     expect(run('The palladium cell gave 5 W of excess heat over its 20 W input.').needs.map((n) => n.check)).toContain('nuclear-signature');

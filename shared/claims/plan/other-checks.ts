@@ -10,9 +10,12 @@ import { at, need, ofKind, uniq, type Basis } from './basis';
 import { HEAT_ONLY_RE } from './signals';
 
 /** A converter of sunlight to electricity. */
-const SOLAR_CELL_RE = /(?<!\p{L})(?:solar (?:cells?|panels?|modules?|films?|arrays?)|(?:rooftop|roof-?top|home|residential) solar|solar(?:[^\S\n]+[\p{L}-]+){0,3}[^\S\n]*[,:;–—-][^\S\n]*(?:the[^\S\n]+)?(?:panels?|modules?)|PV (?:panels?|modules?|arrays?)|photovoltaic\w*|PV|perovskites?|(?:silicon|GaAs|gallium arsenide|CdTe|CIGS|organic) (?:cells?|films?|modules?)|single-junction|multi-junction|tandem cells?|(?:of|from) (?:plain |the )?sunlight (?:in)?to electricity)(?!\p{L})/iu;
+const SOLAR_CELL_RE = /(?<!\p{L})(?:solar (?:cells?|panels?|modules?|films?|arrays?)|(?:rooftop|roof-?top|home|residential) solar|solar(?:[^\S\n]+[\p{L}-]+){0,3}[^\S\n]*[,:;–—-][^\S\n]*(?:the[^\S\n]+)?(?:panels?|modules?)|PV (?:panels?|modules?|arrays?)|photovoltaic\w*|PV|perovskites?|(?:silicon|GaAs|gallium arsenide|CdTe|CIGS|organic) (?:cells?|films?|modules?)|single[- ]junction|multi[- ]junction|triple[- ]junction|tandem cells?|(?:mono|poly)-?(?:c-)?Si|c-Si|a-Si|(?:mono|poly|multi)-?crystalline(?:[^\S\n]+silicon)?|(?:panels?|modules?)(?=[^.;!?\n]{0,60}(?<!\p{L})(?:in|under)[^\S\n]+(?:full|peak|direct|bright|strong|midday|noon|standard)[^\S\n]+(?:sun|sunlight|sunshine)(?!\p{L}))|(?:of|from) (?:plain |the )?sunlight (?:in)?to electricity)(?!\p{L})/iu;
 /** "single-junction", "triple-junction", "a 4-junction cell". */
 const JUNCTIONS_RE = /(?<!\p{L})(single|one|double|dual|two|triple|three|four|five|six|\d{1,2})[- ]junction(?!\p{L})|(?<!\p{L})(tandem)(?!\p{L})/iu;
+/** A plain crystalline-silicon cell, one junction (not a tandem that stacks another cell on silicon). */
+const SILICON_CELL_RE = /(?<!\p{L})(?:(?:mono|poly|multi)-?crystalline(?:[^\S\n]+silicon)?|(?:mono|poly)-?(?:c-)?Si|c-Si|(?:crystalline[^\S\n]+)?silicon[^\S\n]+(?:solar[^\S\n]+)?(?:cells?|panels?|modules?|wafers?))(?!\p{L})/iu;
+const STACKED_CELL_RE = /(?<!\p{L})(?:tandem|multi[- ]?junction|triple[- ]junction|double[- ]junction|dual[- ]junction|perovskites?|stacked|III-V|GaAs|gallium|InGaP|germanium|(?:2|3|4|two|three|four)[- ]junction)(?!\p{L})/iu;
 const JUNCTION_COUNT: Record<string, number> = { single: 1, one: 1, double: 2, dual: 2, two: 2, tandem: 2, triple: 3, three: 3, four: 4, five: 5, six: 6 };
 /** "under 500 suns", "at 1,000× concentration". */
 const SUNS_RE = /(\d[\d,]*(?:\.\d+)?)[^\S\n]*(?:suns|×[^\S\n]*concentrat\w*|x[^\S\n]+concentrat\w*|-sun(?!\p{L}))/iu;
@@ -44,12 +47,14 @@ export function planOtherChecks(b: Basis): void {
   const solarEfficiency = ofKind(figures, 'efficiency').find((f) => !f.derived);
   if (solarEfficiency && SOLAR_CELL_RE.test(text) && !s.heatEngine && !HEAT_ONLY_RE.test(text)) {
     const junction = JUNCTIONS_RE.exec(text);
-    const junctions = junction ? (JUNCTION_COUNT[junction[1].toLowerCase()] ?? Number(junction[1])) : 0;
+    const silicon = !junction && SILICON_CELL_RE.test(text) && !STACKED_CELL_RE.test(text);
+    const junctions = junction ? (JUNCTION_COUNT[(junction[1] ?? junction[2]).toLowerCase()] ?? Number(junction[1])) : silicon ? 1 : 0;
     const suns = SUNS_RE.exec(text);
     const oneSun = ONE_SUN_RE.test(text);
     const X = suns ? Math.min(Number(suns[1].replace(',', '')), MAX_SUNS) : oneSun ? 1 : MAX_SUNS;
     const extra: string[] = ['The sun as a 6000 K blackbody and the cell at 300 K, as Shockley and Queisser took them.'];
-    if (!junction) extra.push('The text does not say how many junctions the cell has: only the Landsberg and Carnot bounds, which hold for any converter, are applied.');
+    if (silicon) extra.push('A crystalline-silicon cell, as the text describes it, has one junction.');
+    else if (!junction) extra.push('The text does not say how many junctions the cell has: only the Landsberg and Carnot bounds, which hold for any converter, are applied.');
     if (!suns && !oneSun) extra.push('The text does not say how concentrated the sunlight is: the most concentrated (the sun filling the whole sky), the end most favourable to the claim.');
     plans.push({
       check: 'light-converter-limits',
