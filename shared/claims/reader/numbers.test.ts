@@ -14,6 +14,25 @@ import { extractFigures } from '../reader';
 import { EXACT, expectRelClose, expectWellFormed, only } from './test-support';
 
 describe('numbers', () => {
+  test.each([
+    ['The Helix-7 thruster gives about 80 mN at approx. 1,35 kW, Isp ~1.600 s.', '1.600 s', 1600],
+    ['Dry mass 1.200 kg, propellant 8.800 kg, and a Δv of 9,5 km/s is claimed.', '8.800 kg', 8800],
+    ['Combustion gas at c. 1.800 K, sea water at 15 °C, and 38,5 % efficient.', '1.800 K', 1800],
+    ['The store holds 1.234,5 kWh after 2,5 h of charging.', '1.234,5 kWh', 1234.5 * 3.6e6],
+  ])('a text that writes decimal commas groups digits by dots: %s', (text, figure, si) => {
+    const f = extractFigures(text).find((x) => x.text === figure);
+    // 1 kWh = 3.6 × 10⁶ J (NIST SP 811, B.8).
+    expectRelClose(f!.si!, si, 1e-12);
+  });
+
+  test.each([
+    ['The engine gives 1.800 kW at 38.5 % efficiency.', '1.800 kW', 1800],
+    ['A mass of 1.200 kg sits on the scale.', '1.200 kg', 1.2],
+  ])('otherwise a point is a decimal point: %s', (text, figure, si) => {
+    const f = extractFigures(text).find((x) => x.text === figure);
+    expectRelClose(f!.si!, si, 1e-12);
+  });
+
   test('English thousands separators are dropped in the quantity (parseQuantity refuses them)', () => {
     expect(() => parseQuantity('1,500 W', 'W')).toThrow(QuantityError); // the typed-quantity rule (quantity.ts)
     const text = 'The Example Dynamics stack drew 1,500 W and stored 12,000,000 J (invented test data).';

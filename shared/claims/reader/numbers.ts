@@ -123,8 +123,25 @@ const AND_A_HALF_RE = new RegExp(`(?<!\\p{L})(${SMALL_NUMBER_WORDS.join('|')})[^
 /** A unit given in a label just before a number: "[mN]:", "(kW) =", "/ W:". */
 const HEADER_UNIT_RE = /(?:[[(][^\S\n]*([^\s\])]{1,8})[^\S\n]*[\])]|(?<![\p{L}\d])[\p{L}_{}]+[^\S\n]*\/[^\S\n]*([^\s:=/]{1,8}))[^\S\n]*[:=][^\S\n]*$/u;
 
+/** A comma that can only be a decimal comma: "1,5 kW", "0,75", "38,5 %", "3,14159". */
+const DECIMAL_COMMA_RE = /(?<![\p{N}.,])(?:\d+,\d{1,2}(?![\p{N}]|,\d)|0,\d+|\d+,\d{4,})(?![\p{N}])/u;
+/** Digits grouped by dots: "1.800", "12.500.000", "1.234,5". */
+const DOT_GROUPED_RE = /(?<![\p{N}.,])\d{1,3}(?:\.\d{3})+(?![\p{N}]|\.\d)/u;
+/** A point that can only be a decimal point: "1.35", "0.5", "3.14159". */
+const DECIMAL_POINT_RE = /(?<![\p{N}.,])\d+\.(?:\d{1,2}|\d{4,})(?![\p{N}])/u;
+/** At a number: its sign, dot-grouped digits and a decimal comma part. */
+const DOT_GROUPED_AT_RE = /([-−–+](?=\d))?(\d{1,3}(?:\.\d{3})+)(,\d+)?(?![\p{N}]|\.\d)/uy;
+
+/**
+ * Whether the text writes numbers the continental way: a decimal comma somewhere ("1,35 kW"), digits
+ * grouped by dots somewhere ("Isp 1.600 s"), and no decimal point anywhere. Only then is "1.600" one
+ * thousand six hundred; otherwise a point is a decimal point, as in English.
+ */
+export const groupsByDots = (text: string): boolean => DECIMAL_COMMA_RE.test(text) && DOT_GROUPED_RE.test(text) && !DECIMAL_POINT_RE.test(text);
+
 export function tokenize(text: string): NumberToken[] {
   const tokens: NumberToken[] = [];
+  const dots = groupsByDots(text);
   NUMBER_RE.lastIndex = 0;
   const push = (start: number, numEndRaw: number, num: string, words: boolean) => {
     let numEnd = numEndRaw;
@@ -165,6 +182,18 @@ export function tokenize(text: string): NumberToken[] {
     tokens.push({ start, numEnd, end, num: value, suffix, skip, plusMinus: PLUS_MINUS_RE.test(before), consumed: false, words });
   };
   for (let m = NUMBER_RE.exec(text); m; m = NUMBER_RE.exec(text)) {
+    if (dots) {
+      // "1.800 K", "12.500.000 km", "1.234,5 kWh" in a text that writes decimal commas.
+      DOT_GROUPED_AT_RE.lastIndex = m.index;
+      const g = DOT_GROUPED_AT_RE.exec(text);
+      if (g) {
+        const sign = g[1] === undefined || g[1] === '+' ? '' : '-';
+        const end = m.index + g[0].length;
+        push(m.index, end, `${sign}${g[2].replace(/\./g, '')}${g[3] ? `.${g[3].slice(1)}` : ''}`, false);
+        NUMBER_RE.lastIndex = end;
+        continue;
+      }
+    }
     // "2.31(4) mN", "410(5) W", "163.0(5) km/s": the uncertainty in the last digits, in brackets.
     const end = m.index + m[0].length;
     const u = /^\((\d{1,3})\)/.exec(text.slice(end));
