@@ -85,6 +85,17 @@ const COMPARISON_SENTENCE_RE =
 const OTHERS_AFTER_RE =
   /^[^\S\n]*(?:\p{L}+[^\S\n]+){0,2}?(?:for|of|in|from|by)[^\S\n]+(?:(?:a|an|the|most|many|all)[^\S\n]+)?(?:typical|conventional|ordinary|standard|commercial|existing|competing|comparable|today's|current|older|earlier|previous|mainstream|off-the-shelf|state-of-the-art|other|rival|reference|baseline|benchmark|control)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:engines?|motors?|units?|designs?|models?|devices?|machines?|thrusters?|cells?|panels?|modules?|pumps?|fridges?|refrigerators?|freezers?|systems?|generators?|turbines?|plants?|cars?|vehicles?|batter(?:y|ies)|boilers?|lamps?|bulbs?|LEDs?|rockets?|drives?|ones|counterparts?|technolog(?:y|ies)|products?|heaters?|chargers?|converters?|inverters?|coolers?|chillers?|conditioners?)(?!\p{L})/iu;
 /** Right before a figure, in its clause: "compared with", "against", "versus", "whereas typical ones reach". */
+/** Before a figure of what the device stands in for: "as much light as a", "replacing the", "instead of a", "equivalent to a". */
+const STANDS_IN_BEFORE_RE = new RegExp(
+  '(?<!\\p{L})(?:' +
+    // ("as much as 5 kW" is a hedge, "a rate equivalent to 60 kW" a restatement: the thing compared with needs its article.)
+    '(?:as[^\\S\\n]+(?:much|bright|strong|warm|powerful|well)(?:[^\\S\\n]+(?:light|heat|warmth|output|brightness|air|lift|thrust))?[^\\S\\n]+as|(?:the[^\\S\\n]+)?same[^\\S\\n]+(?:light|heat|brightness|output|light output)[^\\S\\n]+as|equivalent to)[^\\S\\n]+(?:(?:a|an|the|its|their|our|one)[^\\S\\n]+)' +
+    '|(?:replac(?:es|ed|ing|e)|in place of|instead of|stands? in for|does the (?:job|work) of|matches|rivals)[^\\S\\n]+(?:(?:a|an|the|its|their|our|one)[^\\S\\n]+)?' +
+    ')(?:(?:old|older|typical|standard|conventional|ordinary)[^\\S\\n]+)?(?:[\\p{L}-]+[^\\S\\n]+)?$',
+  'iu',
+);
+/** Right after such a figure: "60 W-equivalent", "60 W equivalent", "a 100 W equiv. bulb". */
+const EQUIVALENT_AFTER_RE = /^[^\S\n]*[-–]?[^\S\n]*(?:equivalent|equiv\.?|replacement)(?!\p{L})/iu;
 const COMPARED_BEFORE_RE =
   /(?<!\p{L})(?:compared (?:with|to)|in comparison (?:with|to)|as against|as opposed to|versus|vs\.?|whereas|while (?:typical|conventional|ordinary|standard|commercial|existing)|unlike)(?!\p{L})[^.;!?\n]{0,50}$/iu;
 /** Right after a comparison's figure: what it was compared with is the input or output of the claim itself ("compared with 1 kW of input"). */
@@ -104,6 +115,9 @@ function saidInComparison(text: string, d: Draft): boolean {
   if (OTHERS_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
   if (inContrastedClause(text, d)) return true;
   const clauseBefore = text.slice(windowStart(text, d.start, 0, 120), d.start);
+  // "as much light as a 60 W bulb", "replacing a 6 kW heater", "a 60 W-equivalent lamp": what the
+  // device stands in for.
+  if (STANDS_IN_BEFORE_RE.test(clauseBefore) || EQUIVALENT_AFTER_RE.test(text.slice(d.end, d.end + 16))) return true;
   const m = COMPARED_BEFORE_RE.exec(clauseBefore);
   // ("Output 1.5 kW vs input 1.2 kW": the claim's own input, named between.)
   return m !== null && !OWN_FLOW_BETWEEN_RE.test(m[0]) && !OWN_FLOW_AFTER_RE.test(text.slice(d.end, d.end + 40));

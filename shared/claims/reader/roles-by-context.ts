@@ -32,6 +32,9 @@ const APPARATUS_RE = /(?<!\p{L})(?:test[- ]stands?|stands?|test rigs?|rigs?|benc
 const STORE_HOLDS_RE = /(?<!\p{L})(?:holds?|holding|stores?|stored|storing|contains?|capacity(?:[^\S\n]+of)?|rated(?:[^\S\n]+at)?|packs?)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere|up to)[^\S\n]+)?$/iu;
 /** Before what a store holds at the end of a charge: "the cell ends up holding 5 Wh". */
 const ENDS_UP_HOLDING_RE = /(?<!\p{L})(?:ends?|ended|ending)[^\S\n]+up[^\S\n]+(?:holding|with|storing|containing|at)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere)[^\S\n]+)?$/iu;
+/** Before what a store gave back: "the pack delivered 168 kWh", "the cells then returned 40 Wh", "we got back 9 kWh". */
+const STORE_GIVES_RE =
+  /(?:(?<!\p{L})(?:cells?|batter(?:y|ies)|packs?|capacitors?|supercaps?|supercapacitors?|accumulators?|flywheels?|store|bank|it|they)[^\S\n]+(?:(?:then|later|afterwards|in turn|on discharge)[^\S\n]+)?(?:delivered|delivers|gave(?:[^\S\n]+back)?|gives(?:[^\S\n]+back)?|returned|returns|released|releases|discharged|supplied|supplies|yielded|put out)|(?:got|get|gets|recovered|recovers)[^\S\n]+back|drew[^\S\n]+back[^\S\n]+out)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere)[^\S\n]+)?$/iu;
 /** After a power or energy put into a store: "3 W into a little cell", "12 kWh into the pack" (not "back into"). */
 const STORE_INTO_RE =
   /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?into[^\S\n]+(?:(?:a|an|the|its|our|my|their)[^\S\n]+)?(?:[\p{L}\d-]+[^\S\n]+){0,2}?(?:cells?|batter(?:y|ies)|packs?|capacitors?|supercaps?|supercapacitors?|accumulators?|flywheels?)(?!\p{L})/iu;
@@ -125,6 +128,16 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     const into = drafts.filter((d) => energyLike(d) && d.start < held.start && !d.derived && STORE_INTO_RE.test(text.slice(d.end, d.end + 80)));
     if (into.length > 0) {
       held.role = 'out';
+      for (const d of into) d.role = 'in';
+    }
+  }
+  // "the charger put 190 kWh into the pack and the pack delivered 168 kWh": a round trip through a
+  // store, what went in is the input and what the store gave back the output.
+  if (!held) {
+    const back = drafts.filter((d) => d.kind === 'energy' && !d.derived && STORE_GIVES_RE.test(text.slice(Math.max(0, d.start - 60), d.start)));
+    const into = drafts.filter((d) => energyLike(d) && !d.derived && back.length > 0 && d.start < back[0].start && STORE_INTO_RE.test(text.slice(d.end, d.end + 80)));
+    if (back.length === 1 && into.length > 0) {
+      back[0].role = 'out';
       for (const d of into) d.role = 'in';
     }
   }

@@ -139,6 +139,31 @@ describe('inputs', () => {
     ]);
   });
 
+  test('a round trip through a store: what went in is the input, what the store gave back the output', () => {
+    const text = 'Over ten days the charger put 150 kWh into the battery pack and the pack delivered 131 kWh.';
+    const f = read(text);
+    // 1 kWh = 3.6 × 10⁶ J (NIST SP 811, B.8).
+    expect(f.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
+      ['in', 150 * 3.6e6],
+      ['out', 131 * 3.6e6],
+    ]);
+    expect(verdicts(text).checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
+    const more = 'We pushed 10 kWh into the flywheel and got back 12 kWh an hour later.';
+    expect(verdicts(more).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+
+  test.each([
+    'Our 9 W LED gives as much light as a 60 W incandescent bulb.',
+    'The 8 W lamp is sold as a 60 W-equivalent.',
+    'It replaces the old 150 kW diesel with a 90 kW electric motor.',
+  ])('what a device stands in for is no output of its own: %s', (text) => {
+    expect(verdicts(text).checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+  });
+
+  test('"as much as 5 kW" is a hedge, not a comparison', () => {
+    expect(verdicts('The motor delivers as much as 5 kW from 1 kW of input.').checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+
   test('"runs from a 12 V battery at 3 A" stays an input', () => {
     const f = read('The fan runs from a 12 V battery at 3 A and moves 300 litres of air a minute.');
     expect(f.find((x) => x.kind === 'power')).toMatchObject({ role: 'in', si: 36 });
