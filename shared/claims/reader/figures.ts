@@ -39,6 +39,12 @@ function unitQuantity(num: string, s: Extract<Suffix, { type: 'unit' }>): { kind
   return { kind: s.form.kind, quantity: `${scaled(num, s.form.factor)} ${s.form.unit}` };
 }
 
+/** Just before a bare number said of a machine's side: "cold end at", "the floor loop at", "inside, about". */
+const SIDE_LEAD_RE =
+  /(?<!\p{L})(?:(?:hot|cold|warm|cool)(?:[- ](?:side|end|junction|plate|head|reservoir|face))?|sink|source|flow|return|loop|inside|outside|outdoors|indoors|condenser|evaporator|cabinet|exhaust|inlet|outlet)(?!\p{L})[^\S\n]*(?:(?:is|was|sits|sat|runs|ran|running|held|kept|stays|stayed|set|goes|went)[^\S\n]+)?(?:at|of|around|[:=])?[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
+/** After such a number: the clause ends ("… at twenty, and …", "… at 20.", "… at thirty-five)"). */
+const BARE_END_RE = /^[^\S\n]*(?:[,;.!?)\]—–]|and(?!\p{L})|$)/u;
+
 export function readFigures(text: string, restated: [number, number][]): Figure[] {
   lastRoleWords.end = 0;
   const tokens = tokenize(text);
@@ -104,6 +110,22 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         }
       }
     }
+    // "hot head at four hundred degrees Celsius, cold end at twenty": a bare number said of the other
+    // side, in the sentence of a temperature, takes that temperature's unit.
+    let carried = false;
+    if (!suffix && upperNum === undefined) {
+      const sibling = [...tokens.slice(0, i)].reverse().find((o) => !o.skip && o.suffix?.type === 'unit' && o.suffix.form.kind === 'temperature');
+      if (
+        sibling &&
+        sentenceAround(text, sibling.start, sibling.end) === sentenceAround(text, start, t.numEnd) &&
+        !isDifference(text, sibling.start, sibling.end, 0) &&
+        SIDE_LEAD_RE.test(text.slice(Math.max(sibling.end, start - 40), start)) &&
+        BARE_END_RE.test(text.slice(t.numEnd, t.numEnd + 12))
+      ) {
+        suffix = sibling.suffix;
+        carried = true;
+      }
+    }
     if (t.words && !suffix && !bareKind(text, t.start, t.numEnd, floor)) continue;
 
     let kind: FigureKind | null = null;
@@ -119,6 +141,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       const q = unitQuantity(t.num, suffix);
       kind = q.kind;
       quantity = q.quantity;
+      if (carried) assumption = 'A number written without a unit, read in the unit of the temperature said before it.';
       if (upperNum !== undefined) upper = unitQuantity(upperNum, suffix).quantity;
       // "degrees" alone: a temperature where the sentence speaks of one, else an angle (not a figure).
       if (kind === 'temperature' && suffix.form.ambiguous && !TEMPERATURE_CONTEXT_RE.test(sentenceAround(text, start, end))) continue;
@@ -136,7 +159,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         assumption = suffix.form === GLUED_CELSIUS ? '"C" read as degrees Celsius.' : suffix.form === GLUED_FAHRENHEIT ? '"F" read as degrees Fahrenheit.' : '"Degrees" read as degrees Celsius.';
       }
     } else if (suffix?.type === 'percent') {
-      const reading = readPercent(text, start, end, floor) ?? comparedPercent(text, start, end, drafts);
+      const reading = readPercent(text, start, end, floor, t.num) ?? comparedPercent(text, start, end, drafts);
       if (reading) {
         kind = reading.kind;
         role = reading.role;

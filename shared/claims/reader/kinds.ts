@@ -90,7 +90,7 @@ const CARNOT_SHARE_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:
 export const CARNOT_SHARE = 'a share of the Carnot efficiency';
 
 /** What a percentage is, by its context. */
-export function readPercent(text: string, start: number, end: number, floor: number): PercentReading {
+export function readPercent(text: string, start: number, end: number, floor: number, num?: string): PercentReading {
   // 'at "about 29 %" efficiency': the words after a closing quote.
   end += /^["”’'»]*/u.exec(text.slice(end, end + 3))![0].length;
   CARNOT_SHARE_AFTER_RE.lastIndex = end;
@@ -129,16 +129,27 @@ export function readPercent(text: string, start: number, end: number, floor: num
   if (!efficiency) return null;
   // The machine is named anywhere in the claim ("Had our air-to-water unit fitted. … '350 % efficient'").
   const sentence = text;
-  const value = Number((/^[\d.,]+/.exec(text.slice(start, end))?.[0] ?? '').replace(',', '.'));
+  // (The number as read, which may have been written in words: "three hundred and fifty percent".)
+  const value = num !== undefined ? Number(num) : Number((/^[\d.,]+/.exec(text.slice(start, end))?.[0] ?? '').replace(',', '.'));
   if (HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
     if (!(value <= 100)) return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump said to be more than 100 % efficient: read as a heating COP (heat delivered over work put in).' };
     return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump\'s percentage read as a heating COP (heat delivered over work put in).' };
+  }
+  // "three hundred and fifty percent efficient … that number is the heating COP", "in cooling mode it
+  // is 300 % efficient": a machine that moves heat, whatever it is called.
+  const moves = value > 100 ? MOVES_HEAT_RE.exec(text) : null;
+  if (moves) {
+    const role = /cool/i.test(moves[1] ?? moves[2] ?? moves[3]) ? 'cooling' : 'heating';
+    return { kind: 'cop', role, factor: 0.01, unit: '', assumption: `More than 100 % "efficient" where the text speaks of ${role}: read as a ${role} COP (heat moved over work put in).` };
   }
   if (COOLING_MACHINE_RE.test(sentence) && value > 100) {
     return { kind: 'cop', role: 'cooling', factor: 0.01, unit: '', assumption: 'A refrigerator or air conditioner said to be more than 100 % efficient: read as a cooling COP (heat drawn out over work put in).' };
   }
   return { kind: 'efficiency', factor: 1, unit: '%' };
 }
+
+/** Words of a machine that moves heat: "heating COP", "COP in cooling", "in heating mode". */
+const MOVES_HEAT_RE = /(?<!\p{L})(heating|cooling)[^\S\n]+(?:COP|C\.O\.P\.|coefficient of performance)(?!\p{L})|(?<!\p{L})(?:COP|coefficient of performance)[^\S\n]+(?:for|in|when|of)[^\S\n]+(heating|cooling)(?!\p{L})|(?<!\p{L})(heating|cooling)[^\S\n]+mode(?!\p{L})/iu;
 
 /** The kind of a bare number, from the words before it; a gain or ratio from the words after. */
 export function bareKind(text: string, start: number, end: number, floor: number): { kind: FigureKind; role?: FigureRole; derived?: string; factor?: number } | null {

@@ -15,6 +15,14 @@ import { EXACT, expectRelClose, expectWellFormed, only } from './test-support';
 
 describe('numbers', () => {
   test.each([
+    ['The heater takes a hundred and fifty watts.', 'a hundred and fifty watts', 150],
+    ['It lifts about a hundred and twenty newtons.', 'a hundred and twenty newtons', 120],
+    ['We pull eight hundred watts off it.', 'eight hundred watts', 800],
+  ])('numbers in words with "a" and "and": %s', (text, figure, si) => {
+    expect(extractFigures(text).map((f) => [f.text, f.si])).toEqual([[figure, si]]);
+  });
+
+  test.each([
     ['The Helix-7 thruster gives about 80 mN at approx. 1,35 kW, Isp ~1.600 s.', '1.600 s', 1600],
     ['Dry mass 1.200 kg, propellant 8.800 kg, and a Δv of 9,5 km/s is claimed.', '8.800 kg', 8800],
     ['Combustion gas at c. 1.800 K, sea water at 15 °C, and 38,5 % efficient.', '1.800 K', 1800],

@@ -91,7 +91,7 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     const value = n.number?.num;
     if (typeof value !== 'number' || !Number.isFinite(value)) continue;
     if (value === 0 && !/(?<!\p{L})(?:zero|nought|naught|nil)(?!\p{L})/iu.test(raw)) continue; // "half an", read as 0
-    const trimmed = raw.replace(/[\s-]+$/u, '');
+    const trimmed = raw.replace(/[\s\-.,;:!?]+$/u, ''); // (compromise may keep a full stop or a comma)
     out.push({ start: n.offset.start, end: n.offset.start + trimmed.length, value });
   }
   // "half a kilowatt", "a quarter of a kilowatt", "a billion km/h": compromise leaves these.
@@ -99,9 +99,15 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     const value = FRACTION_VALUE[m[1].toLowerCase()];
     if (value === undefined) continue;
     // Part of a number compromise read ("two and a half"): leave it.
-    if (out.some((o) => o.start < m.index! && m.index! < o.end)) continue;
-    // Longer than what compromise read there ("half" of "half a newton"): this reading replaces it.
     const end = m.index! + m[0].length;
+    if (out.some((o) => (o.start < m.index! && m.index! < o.end) || (o.start === m.index! && o.end > end))) continue;
+    // "a hundred and fifty", where compromise read "hundred and fifty" (150): its reading, from the "a".
+    const longer = out.find((o) => o.start > m.index! && o.start < end && o.end > end);
+    if (longer && /^an?$/i.test(m[1].split(/\s+/)[0])) {
+      longer.start = m.index!;
+      continue;
+    }
+    // Longer than what compromise read there ("half" of "half a newton"): this reading replaces it.
     for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
     out.push({ start: m.index!, end, value });
   }

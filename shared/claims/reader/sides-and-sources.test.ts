@@ -22,6 +22,33 @@ const verdicts = (text: string) => runClaimChecks(read(text), { text, classes: [
 
 describe('two sides of a heat engine', () => {
   test.each([
+    ['Hot head at four hundred degrees Celsius, cold end at twenty, and eighty-five percent efficient.', 673.15, 293.15, 'breaks'],
+    ['The hot side is held at 400 °C, the cold side at 20, and it is 30 % efficient.', 673.15, 293.15, 'consistent'],
+  ])('a bare number said of the other side takes the unit of the temperature before it: %s', (text, hot, cold, finding) => {
+    const f = read(text);
+    // T(K) = t(°C) + 273.15 (SI Brochure, 9th ed., 2.3.1); η_max = 1 − 293.15/673.15 = 0.5645.
+    expect(temps(f)).toEqual([
+      ['hot', expect.closeTo(hot, 9)],
+      ['cold', expect.closeTo(cold, 9)],
+    ]);
+    expect(f.find((x) => x.si === cold)?.assumption).toMatch(/unit of the temperature said before it/);
+    expect(verdicts(text).checks.find((c) => c.check === 'carnot')?.finding).toBe(finding);
+  });
+
+  test('"twenty units were sold" is no temperature', () => {
+    expect(temps(read('The hot side was 400 °C; 20 units were sold.'))).toHaveLength(1);
+  });
+
+  test('"three hundred and fifty percent efficient", where the text speaks of a heating COP, is that COP', () => {
+    const text = 'In heating mode people call it three hundred and fifty percent efficient; that number is the heating COP. Outside it was two degrees C and the floor loop ran at thirty-five.';
+    const f = read(text);
+    expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'heating', si: 3.5 });
+    expect(f.some((x) => x.kind === 'efficiency')).toBe(false);
+    // COP_max = 308.15 / (308.15 − 275.15) = 9.34 (Carnot, heating); 3.5 is lawful.
+    expect(verdicts(text).checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+  });
+
+  test.each([
     ['A generator on the stove pipe: hot side 280 °C, cold side 70 °C, 5 % conversion on a 12 °C day.', 553.15, 343.15, 285.15],
     ['Hot junction 520 K and cold junction 310 K, room temperature 293 K, and 9 % efficient.', 520, 310, 293],
   ])('with both sides named, the day or the room is set aside: %s', (text, hot, cold, aside) => {
