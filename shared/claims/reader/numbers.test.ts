@@ -23,6 +23,24 @@ describe('numbers', () => {
   });
 
   test.each([
+    ['The stage has an Isp of three thousand seconds.', 'three thousand seconds', 'specific-impulse', 3000],
+    ['It fired for seventy seconds.', 'seventy seconds', 'duration', 70],
+    ['A specific impulse of three-twenty seconds.', 'three-twenty seconds', 'specific-impulse', 320],
+    ['Isp four-fifty seconds in vacuum.', 'four-fifty seconds', 'specific-impulse', 450],
+    ['It ran on twenty-three watts.', 'twenty-three watts', 'power', 23],
+  ])('"seconds" after a number in words is the unit, not a fraction; hundreds said short: %s', (text, figure, kind, si) => {
+    expect(extractFigures(text).map((f) => [f.text, f.kind, f.si])).toEqual([[figure, kind, si]]);
+  });
+
+  test.each([
+    ['The hot plate is at 120 C and the cold one at 20 C.', 2],
+    ['The hot plate sits at one-twenty C.', 1],
+    ['A charge of 120 C passed through the cell.', 0],
+  ])('a spaced capital C is degrees Celsius only where the sentence speaks of a temperature: %s', (text, n) => {
+    expect(extractFigures(text).filter((f) => f.kind === 'temperature')).toHaveLength(n);
+  });
+
+  test.each([
     ['The Helix-7 thruster gives about 80 mN at approx. 1,35 kW, Isp ~1.600 s.', '1.600 s', 1600],
     ['Dry mass 1.200 kg, propellant 8.800 kg, and a Δv of 9,5 km/s is claimed.', '8.800 kg', 8800],
     ['Combustion gas at c. 1.800 K, sea water at 15 °C, and 38,5 % efficient.', '1.800 K', 1800],

@@ -81,7 +81,10 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
   const out: { start: number; end: number; value: number }[] = [];
   // compromise takes a capital mid-sentence ("… write: Twenty watts") for a name: read a lower-case
   // copy of the same length, so that the offsets hold.
-  const doc = nlp(Array.from(text, (c) => (c.toLowerCase().length === c.length ? c.toLowerCase() : c)).join(''));
+  // And "seconds" is a unit, not a fraction: compromise reads "seventy seconds" as seventy halves (35);
+  // it gets a word of the same length that means nothing to it.
+  const lower = Array.from(text, (c) => (c.toLowerCase().length === c.length ? c.toLowerCase() : c)).join('');
+  const doc = nlp(lower.replace(/(?<!\p{L})second(s?)(?!\p{L})/gu, 'secund$1'));
   const found = doc.numbers().json({ offset: true }) as { text: string; offset: { start: number; length: number }; number?: { num?: number } }[];
   for (const n of found) {
     // "- twenty watts" (a list item): compromise counts the dash in the length, not in the start.
@@ -119,10 +122,29 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
     out.push({ start: m.index!, end, value: whole + (m[2].toLowerCase() === 'half' ? 0.5 : 0.25) });
   }
+  // "three-twenty seconds", "four-fifty", "one-twenty C": hundreds said the short way (320, 450, 120).
+  for (const m of text.matchAll(SPOKEN_HUNDREDS_RE)) {
+    const hundreds = SMALL_NUMBER_WORDS.indexOf(m[1].toLowerCase());
+    const tens = TENS_WORDS[m[2].toLowerCase()];
+    const ones = m[3] ? SMALL_NUMBER_WORDS.indexOf(m[3].toLowerCase()) : 0;
+    if (hundreds < 1 || tens === undefined || ones < 0) continue;
+    const end = m.index! + m[0].length;
+    for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
+    out.push({ start: m.index!, end, value: hundreds * 100 + tens + ones });
+  }
   out.sort((a, b) => a.start - b.start);
   return out;
 }
 
+const TENS_WORDS: Record<string, number> = {
+  ten: 10, eleven: 11, twelve: 12, thirteen: 13, fourteen: 14, fifteen: 15, sixteen: 16, seventeen: 17, eighteen: 18, nineteen: 19,
+  twenty: 20, thirty: 30, forty: 40, fifty: 50, sixty: 60, seventy: 70, eighty: 80, ninety: 90,
+};
+/** One to nine, a hyphen, then ten to ninety (and a one to nine): "three-twenty", "four-fifty-five". */
+const SPOKEN_HUNDREDS_RE = new RegExp(
+  `(?<![\\p{L}-])(one|two|three|four|five|six|seven|eight|nine)-(${Object.keys(TENS_WORDS).join('|')})(?:-(one|two|three|four|five|six|seven|eight|nine))?(?![\\p{L}-])`,
+  'giu',
+);
 const SMALL_NUMBER_WORDS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six', 'seven', 'eight', 'nine', 'ten', 'eleven', 'twelve'];
 const AND_A_HALF_RE = new RegExp(`(?<!\\p{L})(${SMALL_NUMBER_WORDS.join('|')})[^\\S\\n]+and[^\\S\\n]+an?[^\\S\\n]+(half|quarter)(?!\\p{L})`, 'giu');
 

@@ -55,6 +55,8 @@ export type Suffix =
 const GLUED_AMPERE_RE = /(m?)a(?![\p{L}\p{N}_])/uy;
 /** "water at 20C", "110F outside", as forum posts write them: a temperature where the sentence speaks of one. */
 const GLUED_TEMPERATURE_RE = /([CF])(?![\p{L}\p{N}_/'’-])/uy;
+/** The same, spaced from the number: "120 C" (read only where the sentence speaks of a temperature). */
+const SPACED_TEMPERATURE_RE = /[^\S\n]+(C|F)(?![\p{L}\p{N}_'’-])/uy;
 export const GLUED_CELSIUS: UnitForm = { kind: 'temperature', unit: 'degC', ambiguous: true };
 export const GLUED_FAHRENHEIT: UnitForm = { kind: 'temperature', unit: 'degF', ambiguous: true };
 /** Words of a battery's charge rate ("charges at 2C") or a capacitance, which a glued C or F may be. */
@@ -74,6 +76,12 @@ export function unitAt(text: string, at: number): { form: UnitForm; end: number 
   const glued = /\d$/.test(text.slice(Math.max(0, at - 1), at)) ? GLUED_TEMPERATURE_RE.exec(text) : null;
   if (glued && !NOT_GLUED_TEMPERATURE_RE.test(sentenceAround(text, at, at + 1))) {
     return { form: glued[1] === 'C' ? GLUED_CELSIUS : GLUED_FAHRENHEIT, end: at + glued[0].length };
+  }
+  // "at 120 C", "one-twenty C", "twenty F outside": a lone capital C or F after a number, spaced.
+  SPACED_TEMPERATURE_RE.lastIndex = at;
+  const spaced = /[\p{N}\p{L}]$/u.test(text.slice(Math.max(0, at - 1), at)) ? SPACED_TEMPERATURE_RE.exec(text) : null;
+  if (spaced && !NOT_GLUED_TEMPERATURE_RE.test(sentenceAround(text, at, at + 1))) {
+    return { form: spaced[1] === 'C' ? GLUED_CELSIUS : GLUED_FAHRENHEIT, end: at + spaced[0].length };
   }
   SYMBOL_RE.lastIndex = at;
   const s = SYMBOL_RE.exec(text);
