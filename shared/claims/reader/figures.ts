@@ -42,6 +42,10 @@ function unitQuantity(num: string, s: Extract<Suffix, { type: 'unit' }>): { kind
 /** Just before a bare number said of a machine's side: "cold end at", "the floor loop at", "inside, about". */
 const SIDE_LEAD_RE =
   /(?<!\p{L})(?:(?:hot|cold|warm|cool)(?:[- ](?:side|end|junction|plate|head|reservoir|face))?|sink|source|flow|return|loop|inside|outside|outdoors|indoors|condenser|evaporator|cabinet|exhaust|inlet|outlet)(?!\p{L})[^\S\n]*(?:(?:is|was|sits|sat|runs|ran|running|held|kept|stays|stayed|set|goes|went)[^\S\n]+)?(?:at|of|around|[:=])?[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
+/** After a bare number, what part of a craft's mass it is: "… and a hundred and fifty dry", "nine hundred is propellant". */
+const MASS_ROLE_AFTER_RE = /^[^\S\n]*(?:(?:dry|empty|wet|fuelled|fueled|full|loaded|unfuelled|unfueled)(?!\p{L})|(?:of (?:it|that|them)[^\S\n]+)?(?:is|are|being)[^\S\n]+(?:the[^\S\n]+)?(?:propellant|fuel|xenon|cold gas|reaction mass|oxidi[sz]er)(?!\p{L}))/iu;
+/** Between a mass and a bare number that is the craft's other mass: "… and ends at", "…, of which", "… down to". */
+const MASS_LEAD_RE = /(?<!\p{L})(?:ends?|ending|ended|finishes|finishing|burns? (?:out|down)|down|of which)(?!\p{L})[^\S\n]*(?:at|to|with)?[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
 /** After such a number: the clause ends ("… at twenty, and …", "… at 20.", "… at thirty-five)"). */
 const BARE_END_RE = /^[^\S\n]*(?:[,;.!?)\]—–]|and(?!\p{L})|$)/u;
 
@@ -125,6 +129,21 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         suffix = sibling.suffix;
         carried = true;
       }
+      // "five hundred kilos wet and a hundred and fifty dry", "twelve hundred kilograms, of which nine
+      // hundred is propellant", "starts at a thousand kilograms and ends at eight hundred": a craft's
+      // other mass, in the unit of the mass before it.
+      const massSibling = [...tokens.slice(0, i)].reverse().find((o) => !o.skip && o.suffix?.type === 'unit' && o.suffix.form.kind === 'mass');
+      if (
+        !carried &&
+        massSibling &&
+        start - massSibling.end < 80 &&
+        !/[\p{N}]/u.test(text.slice(massSibling.end, start)) &&
+        sentenceAround(text, massSibling.start, massSibling.end) === sentenceAround(text, start, t.numEnd) &&
+        (MASS_ROLE_AFTER_RE.test(text.slice(t.numEnd, t.numEnd + 30)) || (MASS_LEAD_RE.test(text.slice(massSibling.end, start)) && BARE_END_RE.test(text.slice(t.numEnd, t.numEnd + 12))))
+      ) {
+        suffix = massSibling.suffix;
+        carried = true;
+      }
     }
     if (t.words && !suffix && !bareKind(text, t.start, t.numEnd, floor)) continue;
 
@@ -141,7 +160,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       const q = unitQuantity(t.num, suffix);
       kind = q.kind;
       quantity = q.quantity;
-      if (carried) assumption = 'A number written without a unit, read in the unit of the temperature said before it.';
+      if (carried) assumption = 'A number written without a unit, read in the unit of the figure said before it.';
       if (upperNum !== undefined) upper = unitQuantity(upperNum, suffix).quantity;
       // "degrees" alone: a temperature where the sentence speaks of one, else an angle (not a figure).
       if (kind === 'temperature' && suffix.form.ambiguous && !TEMPERATURE_CONTEXT_RE.test(sentenceAround(text, start, end))) continue;

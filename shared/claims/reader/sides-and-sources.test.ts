@@ -31,8 +31,20 @@ describe('two sides of a heat engine', () => {
       ['hot', expect.closeTo(hot, 9)],
       ['cold', expect.closeTo(cold, 9)],
     ]);
-    expect(f.find((x) => x.si === cold)?.assumption).toMatch(/unit of the temperature said before it/);
+    expect(f.find((x) => x.si === cold)?.assumption).toMatch(/unit of the figure said before it/);
     expect(verdicts(text).checks.find((c) => c.check === 'carnot')?.finding).toBe(finding);
+  });
+
+  test.each([
+    ['The stage is five hundred kilos wet and a hundred and fifty dry.', 'dry', 150],
+    ['Total mass at launch is twelve hundred kilograms, of which nine hundred is propellant.', 'propellant', 900],
+    ['The probe starts at a thousand kilograms and ends at eight hundred.', 'dry', 800],
+  ])("a bare number that is a craft's other mass takes the unit of the mass before it: %s", (text, role, si) => {
+    expect(read(text).find((x) => x.kind === 'mass' && x.role === role)).toMatchObject({ si });
+  });
+
+  test('"40 kg and 3 of them were built": no mass from a count', () => {
+    expect(read('The rover weighs 40 kg and 3 of them were built.').filter((x) => x.kind === 'mass')).toHaveLength(1);
   });
 
   test('"twenty units were sold" is no temperature', () => {
