@@ -28,6 +28,8 @@ describe('numbers', () => {
     ['A specific impulse of three-twenty seconds.', 'three-twenty seconds', 'specific-impulse', 320],
     ['Isp four-fifty seconds in vacuum.', 'four-fifty seconds', 'specific-impulse', 450],
     ['It ran on twenty-three watts.', 'twenty-three watts', 'power', 23],
+    ['About twenty-three and a half kilowatts ends up in the water.', 'twenty-three and a half kilowatts', 'power', 23500],
+    ['It ran for four and a half hours.', 'four and a half hours', 'duration', 4.5 * 3600],
   ])('"seconds" after a number in words is the unit, not a fraction; hundreds said short: %s', (text, figure, kind, si) => {
     expect(extractFigures(text).map((f) => [f.text, f.kind, f.si])).toEqual([[figure, kind, si]]);
   });

@@ -122,6 +122,13 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
     out.push({ start: m.index!, end, value: whole + (m[2].toLowerCase() === 'half' ? 0.5 : 0.25) });
   }
+  // "twenty-three and a half kilowatts": any number in words, then "and a half" or "and a quarter".
+  for (const o of out) {
+    const m = /^[^\S\n]+and[^\S\n]+an?[^\S\n]+(half|quarter)(?!\p{L})/iu.exec(text.slice(o.end));
+    if (!m || !Number.isInteger(o.value)) continue;
+    o.value += m[1].toLowerCase() === 'half' ? 0.5 : 0.25;
+    o.end += m[0].length;
+  }
   // "three-twenty seconds", "four-fifty", "one-twenty C": hundreds said the short way (320, 450, 120).
   for (const m of text.matchAll(SPOKEN_HUNDREDS_RE)) {
     const hundreds = SMALL_NUMBER_WORDS.indexOf(m[1].toLowerCase());
@@ -146,7 +153,7 @@ const SPOKEN_HUNDREDS_RE = new RegExp(
   'giu',
 );
 const SMALL_NUMBER_WORDS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six', 'seven', 'eight', 'nine', 'ten', 'eleven', 'twelve'];
-const AND_A_HALF_RE = new RegExp(`(?<!\\p{L})(${SMALL_NUMBER_WORDS.join('|')})[^\\S\\n]+and[^\\S\\n]+an?[^\\S\\n]+(half|quarter)(?!\\p{L})`, 'giu');
+const AND_A_HALF_RE = new RegExp(`(?<![\\p{L}-])(${SMALL_NUMBER_WORDS.join('|')})[^\\S\\n]+and[^\\S\\n]+an?[^\\S\\n]+(half|quarter)(?!\\p{L})`, 'giu');
 
 /** A unit given in a label just before a number: "[mN]:", "(kW) =", "/ W:". */
 const HEADER_UNIT_RE = /(?:[[(][^\S\n]*([^\s\])]{1,8})[^\S\n]*[\])]|(?<![\p{L}\d])[\p{L}_{}]+[^\S\n]*\/[^\S\n]*([^\s:=/]{1,8}))[^\S\n]*[:=][^\S\n]*$/u;

@@ -24,6 +24,7 @@ describe('two sides of a heat engine', () => {
   test.each([
     ['Hot head at four hundred degrees Celsius, cold end at twenty, and eighty-five percent efficient.', 673.15, 293.15, 'breaks'],
     ['The hot side is held at 400 °C, the cold side at 20, and it is 30 % efficient.', 673.15, 293.15, 'consistent'],
+    ['The dish heats the engine head to four hundred degrees C, it rejects heat at twenty, and it is thirty percent efficient.', 673.15, 293.15, 'consistent'],
   ])('a bare number said of the other side takes the unit of the temperature before it: %s', (text, hot, cold, finding) => {
     const f = read(text);
     // T(K) = t(°C) + 273.15 (SI Brochure, 9th ed., 2.3.1); η_max = 1 − 293.15/673.15 = 0.5645.
@@ -45,6 +46,10 @@ describe('two sides of a heat engine', () => {
 
   test('"40 kg and 3 of them were built": no mass from a count', () => {
     expect(read('The rover weighs 40 kg and 3 of them were built.').filter((x) => x.kind === 'mass')).toHaveLength(1);
+  });
+
+  test.each(['The heating COP comes out at four point five.', 'Its COP turned out at 4.5 on the day.'])('"comes out at", "turned out at" lead to the COP: %s', (text) => {
+    expect(read(text).find((x) => x.kind === 'cop')).toMatchObject({ si: 4.5 });
   });
 
   test('"twenty units were sold" is no temperature', () => {
