@@ -35,6 +35,17 @@ describe('numbers', () => {
   });
 
   test.each([
+    ['Output, in watts, about four hundred, into the resistor bank.', 'four hundred', 'power', 400],
+    ['Thrust in newtons: 0.2, measured twice.', '0.2', 'thrust', 0.2],
+  ])('the unit named before its number: %s', (text, figure, kind, si) => {
+    expect(extractFigures(text).map((f) => [f.text, f.kind, f.si])).toEqual([[figure, kind, si]]);
+  });
+
+  test('"in March, about 40 W" names no unit', () => {
+    expect(extractFigures('We measured it in March, about 40 W.').map((f) => f.si)).toEqual([40]);
+  });
+
+  test.each([
     ['The hot plate is at 120 C and the cold one at 20 C.', 2],
     ['The hot plate sits at one-twenty C.', 1],
     ['A charge of 120 C passed through the cell.', 0],

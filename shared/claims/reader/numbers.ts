@@ -155,6 +155,8 @@ const SPOKEN_HUNDREDS_RE = new RegExp(
 const SMALL_NUMBER_WORDS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six', 'seven', 'eight', 'nine', 'ten', 'eleven', 'twelve'];
 const AND_A_HALF_RE = new RegExp(`(?<![\\p{L}-])(${SMALL_NUMBER_WORDS.join('|')})[^\\S\\n]+and[^\\S\\n]+an?[^\\S\\n]+(half|quarter)(?!\\p{L})`, 'giu');
 
+/** "in watts, about", "in kilowatts:", "(in newtons) roughly": a unit's name said before its number. */
+const UNIT_NAMED_BEFORE_RE = /(?<!\p{L})in[^\S\n]+(\p{L}+(?:[- ]\p{L}+)?)[^\S\n]*[,:)]?[^\S\n]*(?:(?:about|around|roughly|some|approximately|maybe|say|call it|just under|just over)[^\S\n]+)?$/iu;
 /** A unit given in a label just before a number: "[mN]:", "(kW) =", "/ W:". */
 const HEADER_UNIT_RE = /(?:[[(][^\S\n]*([^\s\])]{1,8})[^\S\n]*[\])]|(?<![\p{L}\d])[\p{L}_{}]+[^\S\n]*\/[^\S\n]*([^\s:=/]{1,8}))[^\S\n]*[:=][^\S\n]*$/u;
 
@@ -202,6 +204,12 @@ export function tokenize(text: string): NumberToken[] {
       const label = HEADER_UNIT_RE.exec(text.slice(Math.max(0, start - 40), start));
       const u = label ? unitAt(label[1] ?? label[2], 0) : null;
       if (u && u.end === (label![1] ?? label![2]).length) suffix = { type: 'unit', form: u.form };
+    }
+    // The unit named first, as people say it: "Output, in watts, about four hundred", "in kilowatts, 2.5".
+    if (suffix === null) {
+      const named = UNIT_NAMED_BEFORE_RE.exec(text.slice(Math.max(0, start - 40), start));
+      const u = named ? unitAt(named[1], 0) : null;
+      if (u && u.end === named![1].length && !u.form.ambiguous) suffix = { type: 'unit', form: u.form };
     }
     const before = text.slice(Math.max(0, start - 16), start);
     let skip = LABEL_RE.test(before);
