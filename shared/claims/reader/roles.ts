@@ -60,6 +60,11 @@ const IMMEDIATE_OUT_RE = new RegExp(`(?<!\\p{L})(?:delivers|delivered|produces|p
 /** Just before what a device fills or charges: "charges a 12 V battery", "filled the 5 kWh pack". */
 export const FILLS_LEAD_RE = /(?<!\p{L})(?:fill(?:s|ed|ing)?|(?:re)?charg(?:es|ed|ing)|tops? up|topped up)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their)[^\S\n]+$/iu;
 
+/** People taking a figure: "we pull", "you can draw", "they got". */
+const PEOPLE_TAKE_LEAD_RE = new RegExp(`(?<!\\p{L})(?:we|you|they|I|one)[^\\S\\n]+(?:(?:can|could|will|do|did)[^\\S\\n]+)?(?:pull|pulls|pulled|take|takes|took|draw|draws|drew|get|gets|got|extract|extracts|extracted|tap|taps|tapped)[^\\S\\n]+${IMMEDIATE_HEDGE}$`, 'iu');
+/** After a figure someone takes: "… off it", "… out of the generator", "… from it" (the device's output). */
+const TAKEN_FROM_IT_RE = /^[^\S\n]*(?:of[^\S\n]+(?:power|electricity|energy)[^\S\n]+)?(?:off|out[^\S\n]+of|from)[^\S\n]+(?:it|them|the[^\S\n]+(?:generator|alternator|rotor|wheel|machine|device|unit|coil|output))(?!\p{L})/iu;
+
 function roleFromWords(text: string, roles: CompiledRoles, start: number, end: number, floor: number): FigureRole {
   if (roles === ROLES.temperature) {
     // A heat pump's or fridge's source is its cold side and its sink the warm one (the other way round for an engine).
@@ -80,6 +85,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   // words after it.
   if (roles.groups === POWER_ENERGY_ROLES) {
     const lead = text.slice(Math.max(floor, start - 40), start);
+    // "we pull 800 W off it", "you can draw 2 kW out of the generator": what people take from the device is its output.
+    if (PEOPLE_TAKE_LEAD_RE.test(lead) && TAKEN_FROM_IT_RE.test(text.slice(end, end + 40))) return 'out';
     // (Not when a supply is the subject: "the bench supply delivers 5 A" is what the device takes.)
     if (!/(?<!\p{L})(?:suppl(?:y|ies)|batter(?:y|ies)|mains|grid|sources?|sockets?|packs?|alternators?|chargers?|PSUs?|adapters?)[^\S\n]+\p{L}+[^\S\n]+[^.;!?\n]{0,12}$/iu.test(lead)) {
       if (IMMEDIATE_IN_RE.test(lead)) return 'in';

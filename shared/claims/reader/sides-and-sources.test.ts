@@ -208,6 +208,14 @@ describe('inputs', () => {
     expect(verdicts('The motor delivers as much as 5 kW from 1 kW of input.').checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
   });
 
+  test('"we pull 800 W off it" is what the device gives; with "needs no supply" the ledger runs', () => {
+    const text = 'It is self-running and needs no supply; we pull eight hundred watts off it for six hours at a time.';
+    expect(read(text).find((x) => x.kind === 'power' && x.si === 800)).toMatchObject({ role: 'out' });
+    expect(verdicts(text).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+    // The device itself drawing from a supply stays an input.
+    expect(read('The heater pulls 2 kW from the wall.').find((x) => x.kind === 'power')).toMatchObject({ role: 'in' });
+  });
+
   test('"runs from a 12 V battery at 3 A" stays an input', () => {
     const f = read('The fan runs from a 12 V battery at 3 A and moves 300 litres of air a minute.');
     expect(f.find((x) => x.kind === 'power')).toMatchObject({ role: 'in', si: 36 });
