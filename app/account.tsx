@@ -1,5 +1,7 @@
-import { AccountScreen } from '@/components/account/AccountScreen';
+import { deferred } from '@/components/lazy/deferred';
 import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
+
+const AccountScreen = deferred('AccountScreen');
 
 export default function AccountRoute() {
   usePageTitle(`Account — ${SITE_NAME}`);

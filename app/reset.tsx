@@ -1,7 +1,9 @@
 import { useLocalSearchParams } from 'expo-router';
-import { ResetScreen } from '@/components/auth/ResetScreen';
+import { deferred } from '@/components/lazy/deferred';
 import { readQuery } from '@/components/worksheet/permalink';
 import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
+
+const ResetScreen = deferred('ResetScreen');
 
 export default function ResetRoute() {
   usePageTitle(`New password — ${SITE_NAME}`);

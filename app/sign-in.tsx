@@ -1,7 +1,9 @@
 import { useLocalSearchParams } from 'expo-router';
-import { SignInScreen } from '@/components/auth/SignInScreen';
+import { deferred } from '@/components/lazy/deferred';
 import { readQuery } from '@/components/worksheet/permalink';
 import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
+
+const SignInScreen = deferred('SignInScreen');
 
 export default function SignInRoute() {
   usePageTitle(`Sign in — ${SITE_NAME}`);

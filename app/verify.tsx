@@ -1,7 +1,9 @@
 import { useLocalSearchParams } from 'expo-router';
-import { VerifyScreen } from '@/components/auth/VerifyScreen';
+import { deferred } from '@/components/lazy/deferred';
 import { readQuery } from '@/components/worksheet/permalink';
 import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
+
+const VerifyScreen = deferred('VerifyScreen');
 
 export default function VerifyRoute() {
   usePageTitle(`Verify your e-mail address — ${SITE_NAME}`);

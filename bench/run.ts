@@ -5,6 +5,7 @@
 import os from 'node:os';
 import { runBorisBench } from './boris';
 import { benchComputePool } from './compute-pool';
+import { benchFirstLoad } from './first-load';
 import { benchWorksheets } from './worksheets';
 
 async function main() {
@@ -15,6 +16,9 @@ async function main() {
   console.log('');
   // Health and search while the compute pool is saturated (its own throwaway MariaDB and app process).
   await benchComputePool();
+  console.log('');
+  // A reader's first visit in Chromium: bytes of JavaScript, first paint, first section (its own throwaway MariaDB and app).
+  await benchFirstLoad();
 }
 
 main().catch((e) => {

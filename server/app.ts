@@ -10,6 +10,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import compression from 'compression';
 import express from 'express';
+import expressStaticGzip from 'express-static-gzip';
 import helmet from 'helmet';
 import pino, { type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
@@ -248,12 +249,20 @@ export function createApp(opts: AppOptions): express.Express {
 
   const index = opts.staticDir ? path.join(opts.staticDir, 'index.html') : null;
   if (opts.staticDir && index && fs.existsSync(index)) {
-    // Hashed bundles may be cached for long; index.html must always be fresh.
+    // The build's brotli and gzip copies (server/build.ts, precompress) are sent as they are, brotli
+    // first, with the original's Content-Type and `Vary: Accept-Encoding`; `compression` above leaves
+    // a response that already has a Content-Encoding alone. Hashed bundles may be cached for long;
+    // index.html must always be fresh (the fallback below sends it).
     app.use(
-      express.static(opts.staticDir, {
+      expressStaticGzip(opts.staticDir, {
+        enableBrotli: true,
+        orderPreference: ['br', 'gzip'],
         index: false,
-        setHeaders: (res, file) => {
-          if (/[\\/]_expo[\\/]|[\\/]assets[\\/]/.test(file)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+        serveStatic: {
+          index: false,
+          setHeaders: (res, file) => {
+            if (/[\\/]_expo[\\/]|[\\/]assets[\\/]/.test(file)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+          },
         },
       }),
     );

@@ -1,10 +1,12 @@
 /**
  * Builds the web app with `expo export` when dist/ is missing or older than its sources, with a
- * readable log (see filterExportLog).
+ * readable log (see filterExportLog), then writes a brotli and a gzip copy beside each text file
+ * (precompress), which the server sends as they are (server/app.ts, express-static-gzip).
  */
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
+import zlib from 'node:zlib';
 
 const SOURCES = ['app', 'components', 'shared', 'assets', 'public', 'app.json', 'babel.config.js', 'package.json', 'package-lock.json'];
 
@@ -89,7 +91,63 @@ export function buildWeb(root: string, distDir: string, log: (m: string) => void
   }
   if (r.error) throw r.error;
   if (r.status !== 0) throw new Error(`expo export failed with exit code ${r.status}`);
+  const kb = (n: number) => `${Math.round(n / 1024)} KB`;
+  const c = precompress(distDir);
+  log(`Precompressed ${c.files} files: ${kb(c.bytes)} → ${kb(c.br)} brotli, ${kb(c.gz)} gzip.`);
   log(`Web app built in ${((Date.now() - started) / 1000).toFixed(0)} s.`);
+}
+
+/** The files worth compressing: text formats (and TrueType, which is not compressed inside). */
+export const COMPRESSIBLE = /\.(js|css|html|json|svg|ttf|woff2)$/;
+/** Below this, a compressed copy saves less than the headers it costs. */
+export const MIN_COMPRESS_BYTES = 1024;
+
+function walk(dir: string): string[] {
+  return fs.readdirSync(dir, { withFileTypes: true }).flatMap((d) => (d.isDirectory() ? walk(path.join(dir, d.name)) : [path.join(dir, d.name)]));
+}
+
+/**
+ * Writes `<file>.br` (brotli, quality 11: the slowest and smallest, paid once at build) and
+ * `<file>.gz` (gzip level 9) beside every compressible file of `distDir` of at least
+ * MIN_COMPRESS_BYTES, unless the copy would not be smaller; drops copies whose original is gone.
+ * Returns the files compressed and the bytes before and after.
+ */
+export function precompress(distDir: string): { files: number; bytes: number; br: number; gz: number } {
+  const all = walk(distDir);
+  const present = new Set(all);
+  const totals = { files: 0, bytes: 0, br: 0, gz: 0 };
+  for (const file of all) {
+    if (/\.(br|gz)$/.test(file)) {
+      if (!present.has(file.replace(/\.(br|gz)$/, ''))) fs.rmSync(file);
+      continue;
+    }
+    if (!COMPRESSIBLE.test(file)) continue;
+    const data = fs.readFileSync(file);
+    if (data.length < MIN_COMPRESS_BYTES) continue;
+    const br = zlib.brotliCompressSync(data, {
+      params: {
+        [zlib.constants.BROTLI_PARAM_QUALITY]: zlib.constants.BROTLI_MAX_QUALITY,
+        [zlib.constants.BROTLI_PARAM_MODE]: /\.(ttf|woff2)$/.test(file) ? zlib.constants.BROTLI_MODE_GENERIC : zlib.constants.BROTLI_MODE_TEXT,
+        [zlib.constants.BROTLI_PARAM_SIZE_HINT]: data.length,
+      },
+    });
+    const gz = zlib.gzipSync(data, { level: 9 });
+    let wrote = false;
+    for (const [ext, out] of [['.br', br], ['.gz', gz]] as const) {
+      if (out.length < data.length) {
+        fs.writeFileSync(file + ext, out);
+        wrote = true;
+      } else {
+        fs.rmSync(file + ext, { force: true });
+      }
+    }
+    if (!wrote) continue;
+    totals.files++;
+    totals.bytes += data.length;
+    totals.br += Math.min(br.length, data.length);
+    totals.gz += Math.min(gz.length, data.length);
+  }
+  return totals;
 }
 
 // `npm run build:web`: build into dist/ now, stale or not, with the same readable log.

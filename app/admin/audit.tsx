@@ -1,3 +1,5 @@
-import { AuditScreen } from '@/components/admin/AuditScreen';
+import { deferred } from '@/components/lazy/deferred';
+
+const AuditScreen = deferred('AuditScreen');
 
 export default AuditScreen;

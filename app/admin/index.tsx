@@ -1,3 +1,5 @@
-import { UsersScreen } from '@/components/admin/UsersScreen';
+import { deferred } from '@/components/lazy/deferred';
+
+const UsersScreen = deferred('UsersScreen');
 
 export default UsersScreen;

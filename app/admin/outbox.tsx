@@ -1,3 +1,5 @@
-import { OutboxScreen } from '@/components/admin/OutboxScreen';
+import { deferred } from '@/components/lazy/deferred';
+
+const OutboxScreen = deferred('OutboxScreen');
 
 export default OutboxScreen;

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
-import { SavedClaimCheckScreen } from '@/components/claims/SavedClaimCheckScreen';
+import { deferred } from '@/components/lazy/deferred';
 import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
+
+const SavedClaimCheckScreen = deferred('SavedClaimCheckScreen');
 
 export default function SavedClaimCheckRoute() {
   usePageTitle(`Saved claim check — ${SITE_NAME}`);

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
-import { ClaimCheckScreen } from '@/components/claims/ClaimCheckScreen';
+import { deferred } from '@/components/lazy/deferred';
 import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
+
+const ClaimCheckScreen = deferred('ClaimCheckScreen');
 
 export default function ClaimCheckRoute() {
   usePageTitle(`Claim check — ${SITE_NAME}`, 'Paste a claim of an impossible machine: the library finds the objections that answer it and checks its figures.');

@@ -1,3 +1,5 @@
-import { DeskScreen } from '@/components/desk/DeskScreen';
+import { deferred } from '@/components/lazy/deferred';
+
+const DeskScreen = deferred('DeskScreen');
 
 export default DeskScreen;

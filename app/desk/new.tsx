@@ -1,3 +1,5 @@
-import { NewEntryScreen } from '@/components/desk/DraftScreen';
+import { deferred } from '@/components/lazy/deferred';
+
+const NewEntryScreen = deferred('NewEntryScreen');
 
 export default NewEntryScreen;

@@ -1,3 +1,5 @@
-import { SynonymsScreen } from '@/components/desk/SynonymsScreen';
+import { deferred } from '@/components/lazy/deferred';
+
+const SynonymsScreen = deferred('SynonymsScreen');
 
 export default SynonymsScreen;

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
-import { QueueItemScreen } from '@/components/queue/QueueItemScreen';
+import { deferred } from '@/components/lazy/deferred';
 import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
+
+const QueueItemScreen = deferred('QueueItemScreen');
 
 export default function QueueItemRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();

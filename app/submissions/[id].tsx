@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
-import { SubmissionScreen } from '@/components/submissions/SubmissionScreen';
+import { deferred } from '@/components/lazy/deferred';
 import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
+
+const SubmissionScreen = deferred('SubmissionScreen');
 
 export default function SubmissionRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,8 +1,10 @@
 import { useLocalSearchParams } from 'expo-router';
 import { readQuery } from '@/components/worksheet/permalink';
-import { WorksheetScreen } from '@/components/worksheet/WorksheetScreen';
+import { deferred } from '@/components/lazy/deferred';
 import { useWorksheet } from '@/components/queries/worksheets';
 import { SITE_NAME, usePageTitle } from '@/components/ui/usePageTitle';
+
+const WorksheetScreen = deferred('WorksheetScreen');
 
 export default function WorksheetRoute() {
   const { name, ...query } = useLocalSearchParams<{ name: string }>();

@@ -4,6 +4,7 @@ import type { EntryContent } from '@/shared/entries/schema';
 import { renderMarkdown } from '@/shared/markdown';
 import type { EntryHtml } from '@/shared/api-types';
 import { EntryBody } from '../entry/EntryBody';
+import { EntryWorksheets } from '../entry/EntryWorksheets';
 import { colors, radius, space, type } from '../theme';
 
 /** The Markdown sections rendered by the same pipeline the server uses for readers. */
@@ -26,7 +27,7 @@ export function EntryPreview({ content }: { content: EntryContent }) {
       <Text role="heading" aria-level={2} style={type.title}>
         {content.title || 'Untitled entry'}
       </Text>
-      <EntryBody content={content} html={html} />
+      <EntryBody content={content} html={html} Worksheets={EntryWorksheets} />
     </View>
   );
 }

@@ -2,9 +2,14 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { router } from 'expo-router';
 import NewEntryRoute from '@/app/desk/new';
+import { loadDeferred } from '../lazy/deferred';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
 
 jest.mock('expo-router', () => ({ ...jest.requireActual('../testing/expoRouter'), router: { push: jest.fn(), replace: jest.fn() } }));
+// The route renders the screen from the deferred part of the app (components/lazy/screens.tsx), which
+// holds the sighting form and its file picker too; loaded once before the tests.
+jest.mock('expo-document-picker', () => ({ getDocumentAsync: jest.fn() }));
+beforeAll(() => loadDeferred(), 60_000);
 
 // An invented editor (DESIGN.md §7).
 const sessionOf = (role: 'editor' | 'contributor' | null) => () =>

@@ -1,14 +1,14 @@
-import type { ReactNode } from 'react';
+import type { ComponentType, ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { EntryContent } from '@/shared/entries/schema';
 import type { EntryHtml } from '@/shared/api-types';
+import type { Worksheet } from '@/shared/worksheet/schema';
 import { Markdown } from '../markdown/Markdown';
 import { useEntryList } from '../queries/entries';
 import { colors, space, type } from '../theme';
 import { Notice } from '../ui/Notice';
 import { TextLink } from '../ui/TextLink';
 import { EntrySection } from './EntrySection';
-import { EntryWorksheets } from './EntryWorksheets';
 import { presentSections, replyLabels, type SectionField } from './sections';
 import { SourceList } from './SourceList';
 
@@ -16,6 +16,12 @@ interface EntryBodyProps {
   content: EntryContent;
   /** The Markdown sections as sanitised HTML (from the API, or rendered here for the Desk's preview). */
   html: EntryHtml;
+  /**
+   * What shows the worksheets (components/entry/EntryWorksheets.tsx, which computes with mathjs):
+   * given by the caller, so that the entry's page can load it apart from the text and the Desk's
+   * preview at once.
+   */
+  Worksheets: ComponentType<{ worksheets: Worksheet[] }>;
 }
 
 /**
@@ -23,12 +29,12 @@ interface EntryBodyProps {
  * after the reasoning they run the numbers of ("Why it fails"), at the full width of the text, and
  * the sources at the end, as references are in print. Sections a version leaves empty are left out.
  */
-export function EntryBody({ content, html }: EntryBodyProps) {
+export function EntryBody({ content, html, Worksheets }: EntryBodyProps) {
   const body: Record<SectionField, () => ReactNode> = {
     inBrief: () => <Markdown html={html.inBrief} />,
     howItIsPitched: () => <Markdown html={html.howItIsPitched} />,
     whyItFails: () => <Markdown html={html.whyItFails} />,
-    worksheets: () => <EntryWorksheets worksheets={content.worksheets} />,
+    worksheets: () => <Worksheets worksheets={content.worksheets} />,
     whatFakesTheEffect: () => <Markdown html={html.whatFakesTheEffect} />,
     repliesAndAnswers: () => (
       <View style={styles.replies}>

@@ -2,11 +2,18 @@ import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { SessionResponse } from '@/shared/api-types';
 import type { CiteFormat } from '@/shared/api-types';
 import { jsonResponse, mockFetch, renderWithProviders, setWindowWidth } from '../testing/render';
+import { loadDeferred } from '../lazy/deferred';
 import { DiffView } from './DiffView';
 import { EntryScreen } from './EntryScreen';
 import { entryResponse, version1, version2 } from './fixtures';
 
 jest.mock('expo-router', () => require('../testing/expoRouter'));
+// The entry's worksheets, forms and versions come with the deferred part of the app
+// (components/lazy/screens.tsx), which holds the sighting form and its file picker too.
+jest.mock('expo-document-picker', () => ({ getDocumentAsync: jest.fn() }));
+// Loaded once before the tests (requiring all of it takes a few seconds under jest), as a browser
+// would have it after the first entry.
+beforeAll(() => loadDeferred(), 60_000);
 
 const reader: SessionResponse = { user: null, csrfToken: 'token-for-tests' };
 const versions = {
@@ -106,7 +113,7 @@ describe('EntryScreen', () => {
     );
 
     // P / c for 1 kW: 1000 W / 299 792 458 m/s = 3.3356 uN (c exact, BIPM SI Brochure, 9th ed.).
-    const sheet = screen.getByTestId('worksheet-cavity-bound');
+    const sheet = await screen.findByTestId('worksheet-cavity-bound');
     const bound = within(sheet).getByTestId('step-F_bound');
     expect(Number(bound.getAttribute('data-si'))).toBeCloseTo(1000 / 299_792_458, 15);
     fireEvent.change(within(sheet).getByTestId('input-P'), { target: { value: '2 kW' } });

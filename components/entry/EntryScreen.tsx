@@ -11,16 +11,22 @@ import { Screen, Section } from '../ui/Screen';
 import { TextLink } from '../ui/TextLink';
 import { SITE_NAME, usePageTitle } from '../ui/usePageTitle';
 import { dataAttributes } from '../worksheet/dataAttributes';
-import { ReportError, SeenInTheWild } from '../submissions/EntryParts';
+import { deferred } from '../lazy/deferred';
 import { CitePanel } from './CitePanel';
 import { EntryBody } from './EntryBody';
 import { contentsOf, JumpMenu, scrollToAnchor, TableOfContents } from './EntryContents';
 import { EntryMeta } from './EntryMeta';
-import { ReviseButton } from './ReviseButton';
-import { RetirePanel } from './RetirePanel';
 import { formatDay } from './format';
 import { plainText, sectionAnchor } from './sections';
-import { VersionsPanel } from './VersionsPanel';
+
+// Loaded with the deferred part of the app (components/lazy/screens.tsx): the worksheets (mathjs), the
+// forms (zod), the versions' differences (diff).
+const EntryWorksheets = deferred('EntryWorksheets');
+const ReportError = deferred('ReportError', 'none');
+const SeenInTheWild = deferred('SeenInTheWild');
+const VersionsPanel = deferred('VersionsPanel');
+const ReviseButton = deferred('ReviseButton', 'none');
+const RetirePanel = deferred('RetirePanel', 'none');
 
 interface EntryScreenProps {
   slug: string;
@@ -76,7 +82,7 @@ function EntryPage({ data, pinned }: { data: EntryResponse; pinned: boolean }) {
 
   const text = (
     <View testID="entry-text" style={styles.text}>
-      <EntryBody content={version.content} html={version.html} />
+      <EntryBody content={version.content} html={version.html} Worksheets={EntryWorksheets} />
       <View nativeID={sectionAnchor('report')} {...dataAttributes({ print: 'hide' })}>
         <ReportError key={version.number} slug={entry.slug} version={version.number} title={version.content.title} />
       </View>

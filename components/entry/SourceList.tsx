@@ -1,5 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
-import { isWebAddress, type Citation } from '@/shared/entries/schema';
+import type { Citation } from '@/shared/entries/schema';
+import { isWebAddress } from '@/shared/entries/web-address';
 import { colors, space, type } from '../theme';
 import { TextLink } from '../ui/TextLink';
 import { citationLine } from './sections';

@@ -1,6 +1,4 @@
-import { useMemo } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { renderMarkdown } from '@/shared/markdown';
 import type { TaxonomyResponse } from '@/shared/api-types';
 import { useEntryList } from '../queries/entries';
 import type { EntrySummaryDto } from '@/shared/api-types';
@@ -74,13 +72,12 @@ export function EntryList({ filters, onFiltersChange, taxonomy, pages, onMore, s
 }
 
 function EntryRow({ entry, lawName, className }: { entry: EntrySummaryDto; lawName: (s: string) => string; className: (s: string | null) => string }) {
-  const brief = useMemo(() => renderMarkdown(entry.inBrief), [entry.inBrief]);
   return (
     <View role="listitem" testID={`entry-${entry.slug}`} style={styles.row}>
       <TextLink href={`/entries/${entry.slug}`} testID={`entry-link-${entry.slug}`}>
         {entry.title}
       </TextLink>
-      <Markdown html={brief} size="compact" />
+      <Markdown html={entry.inBriefHtml} size="compact" />
       <Text style={type.caption}>
         {entry.laws.map(lawName).join(' · ')} · {className(entry.mechanismClass)}
       </Text>

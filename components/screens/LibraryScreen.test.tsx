@@ -51,6 +51,8 @@ const entry = (slug: string, title: string, laws: string[], mechanismClass: stri
   laws,
   mechanismClass,
   inBrief: `Why *${title.toLowerCase()}* cannot work.`,
+  // As the server renders it (shared/markdown.ts).
+  inBriefHtml: `<p>Why <em>${title.toLowerCase()}</em> cannot work.</p>`,
 });
 const allEntries = [
   entry('shuttling-weights', 'Shuttling weights', ['linear-momentum'], 'internal-mass-motion', 3),

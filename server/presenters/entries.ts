@@ -17,8 +17,11 @@ import type {
 import type { Entry, EntryVersion, User } from '../models';
 import { person } from './people';
 
-/** A published entry in the library's list; `laws`: its laws' slugs in the version's own order. */
-export function entrySummary(e: Entry, laws: string[]): EntrySummaryDto {
+/**
+ * A published entry in the library's list; `laws`: its laws' slugs in the version's own order;
+ * `inBriefHtml`: the brief rendered (services/render.ts).
+ */
+export function entrySummary(e: Entry, laws: string[], inBriefHtml: string): EntrySummaryDto {
   const v = e.currentVersion!;
   return {
     slug: e.slug,
@@ -28,6 +31,7 @@ export function entrySummary(e: Entry, laws: string[]): EntrySummaryDto {
     laws,
     mechanismClass: e.mechanismClass?.slug ?? null,
     inBrief: v.content.inBrief,
+    inBriefHtml,
   };
 }
 

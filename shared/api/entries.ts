@@ -55,6 +55,8 @@ export interface EntrySummaryDto {
   mechanismClass: string | null;
   /** Markdown source of the brief. */
   inBrief: string;
+  /** The brief as sanitised HTML (shared/markdown.ts), so that the list needs no Markdown renderer. */
+  inBriefHtml: string;
 }
 
 /** The query of `GET /api/entries` (server: entryListQuerySchema). */

@@ -6,6 +6,9 @@
 import { SECTION_TITLES } from '../api/constants';
 import { z } from 'zod';
 import { worksheetSchema } from '../worksheet/schema';
+import { isWebAddress } from './web-address';
+
+export { isWebAddress };
 
 export const slugSchema = z
   .string({ error: 'lower-case words joined by hyphens, as text' })
@@ -15,16 +18,6 @@ export const slugSchema = z
 
 /** Markdown with TeX math ($…$, $$…$$), rendered by shared/markdown.ts and sanitised. */
 const markdown = (max: number) => z.string({ error: 'write this part as text (Markdown)' }).max(max, `at most ${max} characters`);
-
-/** True for an absolute http: or https: address with a host: the only addresses a reader is ever sent to. */
-export function isWebAddress(s: string): boolean {
-  try {
-    const u = new URL(s);
-    return (u.protocol === 'http:' || u.protocol === 'https:') && u.hostname !== '';
-  } catch {
-    return false;
-  }
-}
 
 /** A web address someone typed: http(s) only — javascript:, data:, file:, ftp: and the rest are refused. */
 export const webAddressSchema = z

@@ -175,6 +175,8 @@ describe('the two-editor workflow', () => {
     expect(list.total).toBe(before.total + 1);
     expect(list.entries.find((e: { slug: string }) => e.slug === 'photon-box-v1')).toEqual({
       slug: 'photon-box-v1', title: 'Thrust from light inside a closed box', version: 1, publishedAt: expect.any(String), laws: ['linear-momentum'], mechanismClass: 'enclosed-radiation', inBrief: content().inBrief,
+      // The brief rendered by the server, as the entry's own page has it.
+      inBriefHtml: latest.body.version.html.inBrief,
     });
     // Filters: by law, and by a parent class in the tree (enclosed-radiation sits under propellant-free-thrust).
     expect((await listed('?law=linear-momentum')).total).toBe(byLaw + 1);

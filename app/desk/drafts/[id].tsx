@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
-import { DraftScreen } from '@/components/desk/DraftScreen';
+import { deferred } from '@/components/lazy/deferred';
 import { NotFoundScreen } from '@/components/screens/NotFoundScreen';
+
+const DraftScreen = deferred('DraftScreen');
 
 export default function DraftRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -55,7 +55,11 @@ export class Library {
       total: count,
       entries: rows.map((e) =>
         // The laws in the version's own order.
-        entrySummary(e, e.currentVersion!.content.laws.filter((s) => laws.some((l) => l.entryId === e.id && lawSlugs.get(l.lawId) === s))),
+        entrySummary(
+          e,
+          e.currentVersion!.content.laws.filter((s) => laws.some((l) => l.entryId === e.id && lawSlugs.get(l.lawId) === s)),
+          renderHtml(this.htmlCache, e.currentVersion!.id, e.currentVersion!.content).inBrief,
+        ),
       ),
     };
   }
