@@ -2,7 +2,7 @@ import { QueryClientProvider } from '@tanstack/react-query';
 // KaTeX's rules for the math in entries (Metro bundles CSS on the web); its fonts come from installKatexFonts.
 import 'katex/dist/katex.min.css';
 import '@/components/print/print.css'; // printing entries and claim checks: no navigation or inputs, the permanent address at the end
-import { useFonts } from 'expo-font';
+import { useFonts, type FontSource } from 'expo-font';
 import { Slot } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
 import { useState } from 'react';
@@ -20,7 +20,7 @@ installKatexFonts();
  * WOFF2 subsets declared in public/index.html (scripts/web-fonts.ts) with `font-display: swap`, so
  * the page never waits for them; the export folds `Platform.OS` to 'web' and drops these files.
  */
-const NATIVE_FONTS =
+const NATIVE_FONTS: Record<string, FontSource> =
   Platform.OS === 'web'
     ? {}
     : {
