@@ -89,7 +89,7 @@ interface ShownVersion {
 }
 
 /** An entry's page: its heading, which version, and its sections in the reading layout of components/entry. */
-export function entryPageHtml(slug: string, v: ShownVersion, pinned: boolean): string {
+export function entryPageHtml(slug: string, v: ShownVersion, pinned: boolean, retired: string | null = null): string {
   const { content: c, html } = v;
   const section = (field: SectionField, inner: string) =>
     `<section class="cw-section" id="section-${field}"><h2 class="cw-title">${esc(SECTION_TITLES[field])}</h2>${inner}</section>`;
@@ -107,7 +107,7 @@ export function entryPageHtml(slug: string, v: ShownVersion, pinned: boolean): s
         )
         .join(''),
     questionsToAsk: () => `<ol class="cw-list cw-lead">${c.questionsToAsk.map((q, i) => `<li>${i + 1}. ${esc(q)}</li>`).join('')}</ol>`,
-    cautions: () => `<div class="cw-note"><p class="cw-link" style="padding:0;color:inherit;text-decoration:none">Where this work can hurt someone</p>${md(html.cautions, true)}</div>`,
+    cautions: () => `<div class="cw-note"><p class="cw-strong">Where this work can hurt someone</p>${md(html.cautions, true)}</div>`,
     sources: () => `<ol class="cw-list">${c.sources.map((s) => `<li class="cw-prose compact">${esc(sourceLine(s))}</li>`).join('')}</ol>`,
     related: () => `<ul class="cw-list">${c.related.map((s) => `<li><a class="cw-link" href="/entries/${esc(s)}">${esc(s.replace(/-/g, ' '))}</a></li>`).join('')}</ul>`,
   };
@@ -127,6 +127,7 @@ export function entryPageHtml(slug: string, v: ShownVersion, pinned: boolean): s
     `<p class="cw-caption">${credit}</p>`,
     `<div>${link}</div>`,
     '</div>',
+    retired === null ? '' : `<div class="cw-note"><p class="cw-strong">This entry is retired.</p><p>${esc(retired)} It stays here, and citable, as it was.</p></div>`,
     '<div class="cw-columns">',
     `<div class="cw-text">${fields.map((f) => section(f, body[f]())).join('')}</div>`,
     toc,
@@ -192,7 +193,7 @@ export function shellPageSender(indexFile: string, origin: (req: Request) => str
   const entryPage = async (req: Request, slug: string, n: string | undefined): Promise<string | null> => {
     const entry = await Entry.findOne({
       where: { slug },
-      attributes: ['id', 'currentVersionId'],
+      attributes: ['id', 'currentVersionId', 'status', 'retiredReason'],
       include: n
         ? []
         : [{ model: EntryVersion, as: 'currentVersion', include: [{ ...PERSON, as: 'author' }, { ...PERSON, as: 'reviewer' }] }],
@@ -219,7 +220,8 @@ export function shellPageSender(indexFile: string, origin: (req: Request) => str
       content: version.content,
       html: renderHtml(htmlCache, version.id, version.content),
     };
-    return withShellPage(html, entryPageHtml(slug, shown, Boolean(n)), true);
+    const retired = entry.status === 'retired' ? (entry.retiredReason ?? '') : null;
+    return withShellPage(html, entryPageHtml(slug, shown, Boolean(n), retired), true);
   };
 
   const libraryPage = async (): Promise<string> => {

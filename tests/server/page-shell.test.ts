@@ -89,6 +89,23 @@ describe('the first paint', () => {
     expect(doc.querySelectorAll('main').length).toBe(1);
   });
 
+  it('says when an entry is retired, as the app does', async () => {
+    const a = await site.signedIn(demo.editor.email);
+    const r = await site.signedIn(demo.editor2.email);
+    await publishNewEntry(a, r, 'shell-retired', {
+      title: 'Wheels retired for good',
+      mechanismClass: 'overbalanced-wheel',
+      laws: ['energy'],
+      inBrief: 'Retired.',
+      howItIsPitched: 'Hinged arms.',
+      whyItFails: 'Gravity is conservative.',
+    });
+    expect((await a.post('/api/entries/shell-retired/retire', { reason: 'Folded into <b>another</b>.' })).status).toBe(200);
+    const shell = (await page('/entries/shell-retired')).doc.querySelector('#cw-shell')!;
+    expect(shell.textContent).toContain('This entry is retired.Folded into <b>another</b>. It stays here, and citable, as it was.');
+    expect(shell.querySelector('b')).toBeNull();
+  });
+
   it('lists the published entries on the Library, escaped', async () => {
     const { doc } = await page('/');
     const links = [...doc.querySelectorAll('#cw-shell .cw-entries a')].map((a) => [a.getAttribute('href'), a.textContent]);
