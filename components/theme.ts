@@ -92,8 +92,9 @@ export const radius = {
 } as const;
 
 /**
- * Family names as registered with expo-font in app/_layout.tsx; on the web they are the CSS
- * font-family names. Each weight is its own family, so styles pick a family, not a fontWeight.
+ * Family names as registered with expo-font in app/_layout.tsx (iOS, Android); on the web they are
+ * the font-family names of the WOFF2 subsets public/index.html declares (scripts/web-fonts.ts).
+ * Each weight is its own family, so styles pick a family, not a fontWeight.
  */
 export const fonts = {
   sans: 'IBMPlexSans_400Regular',

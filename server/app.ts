@@ -17,7 +17,7 @@ import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import { createPassport, sessionMiddleware } from './auth/session';
 import { bodyDepthLimit } from './http/depth';
-import { entryPageSender } from './http/page-meta';
+import { shellPageSender } from './http/page-shell';
 import { apiNotFound, errorHandler } from './http/errors';
 import { rateLimiters, rateLimitsFromEnv, type RateLimits } from './http/rate-limit';
 import { ComputePool, type ComputeOptions } from './compute/pool';
@@ -267,12 +267,13 @@ export function createApp(opts: AppOptions): express.Express {
       }),
     );
     // SPA fallback: every other GET that wants a page gets the app, which routes on the client
-    // (an entry's page with its own title and description for link previews: http/page-meta.ts).
-    const entryPage = entryPageSender(index, origin);
+    // (an entry's page with its own title and description for link previews, and the first paint of
+    // an entry and of the Library filled in by the server: http/page-shell.ts).
+    const shellPage = shellPageSender(index, origin);
     app.get(/.*/, async (req, res, next) => {
       if (!req.accepts('html')) return next();
       res.setHeader('Cache-Control', 'no-cache');
-      if (!(await entryPage(req, res))) res.sendFile(index);
+      if (!(await shellPage(req, res))) res.sendFile(index);
     });
   }
 

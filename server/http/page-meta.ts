@@ -4,16 +4,10 @@
  * `/entries/<slug>` and `/entries/<slug>/v/<n>` the server puts the entry's title and a short
  * description (its "in brief") into the page it sends: `<title>`, `<meta name="description">`,
  * Open Graph's `og:title`, `og:description`, `og:url` and `og:type` (ogp.me), and a canonical link.
- * One small read of the database; on any miss (no such entry or version, a database error) the
- * plain page goes out, as for every other route.
+ * http/page-shell.ts reads the entry (one small read of the database) and sends the page; on any
+ * miss (no such entry or version, a database error) the plain page goes out, as for every other route.
  * Tests: tests/server/citations.test.ts ("link previews").
  */
-import fs from 'node:fs';
-import type { Request, Response } from 'express';
-import { entryVersionPath } from '../../shared/permalink';
-import { Entry, EntryVersion } from '../models';
-
-const SITE_NAME = 'Counterweight';
 /** Link-preview descriptions are cut near this length (common practice for search snippets, no source). */
 const DESCRIPTION_MAX = 200;
 
@@ -64,48 +58,4 @@ export function withPageMeta(html: string, meta: PageMeta): string {
       .replace(/<link\s+rel="canonical"[^>]*>\s*/gi, () => '')
       .replace(/<\/head>/i, () => `    ${tags}\n  </head>`)
   );
-}
-
-/** index.html, read again only when the file changes (a rebuild of dist/ while the server runs). */
-function templateReader(file: string): () => Promise<string> {
-  let cached: { mtimeMs: number; html: string } | null = null;
-  return async () => {
-    const { mtimeMs } = await fs.promises.stat(file);
-    if (!cached || cached.mtimeMs !== mtimeMs) cached = { mtimeMs, html: await fs.promises.readFile(file, 'utf8') };
-    return cached.html;
-  };
-}
-
-const ENTRY_PAGE = /^\/entries\/([a-z0-9][a-z0-9-]{0,79})(?:\/v\/([1-9]\d{0,6}))?\/?$/;
-
-/**
- * Sends an entry page with its own title and description when `req` asks for one that exists;
- * answers false (and sends nothing) otherwise, so the caller sends the plain page.
- */
-export function entryPageSender(indexFile: string, origin: (req: Request) => string): (req: Request, res: Response) => Promise<boolean> {
-  const template = templateReader(indexFile);
-  return async (req, res) => {
-    const m = ENTRY_PAGE.exec(req.path);
-    if (!m) return false;
-    const [, slug, n] = m;
-    try {
-      const entry = await Entry.findOne({ where: { slug }, attributes: ['id', 'currentVersionId'] });
-      if (!entry?.currentVersionId) return false;
-      const version = await EntryVersion.findOne({
-        where: n ? { entryId: entry.id, number: Number(n), state: 'published' } : { id: entry.currentVersionId },
-        attributes: ['number', 'content'],
-      });
-      if (!version) return false;
-      const { title, inBrief } = version.content;
-      const html = withPageMeta(await template(), {
-        title: n ? `${title} (version ${version.number}) — ${SITE_NAME}` : `${title} — ${SITE_NAME}`,
-        description: plainSummary(inBrief ?? '') || `${title}: an entry of ${SITE_NAME}.`,
-        url: n ? `${origin(req)}${entryVersionPath(slug, version.number!)}` : `${origin(req)}/entries/${slug}`,
-      });
-      res.type('html').send(html);
-      return true;
-    } catch {
-      return false;
-    }
-  };
 }
