@@ -261,7 +261,7 @@ export function createApp(opts: AppOptions): express.Express {
         serveStatic: {
           index: false,
           setHeaders: (res, file) => {
-            if (/[\\/]_expo[\\/]|[\\/]assets[\\/]/.test(file)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+            if (/[\\/]_expo[\\/]|[\\/]assets[\\/]|[\\/]fonts[\\/]/.test(file)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
           },
         },
       }),

@@ -144,6 +144,8 @@ describe('the web fonts', () => {
       expect([link.getAttribute('href'), res.status, res.headers['content-type']]).toEqual([link.getAttribute('href'), 200, 'font/woff2']);
       // The WOFF2 signature, "wOF2" (W3C WOFF File Format 2.0, §3 "WOFF2 Header": signature 0x774F4632).
       expect((res.body as Buffer).subarray(0, 4).toString('latin1')).toBe('wOF2');
+      // The names carry a hash of the content, so a browser may keep them for a year.
+      expect(res.headers['cache-control']).toBe('public, max-age=31536000, immutable');
     }
     // Every @font-face shows text in a system font until it loads.
     const faces = doc.querySelector('#cw-fonts')!.textContent!.match(/@font-face\{[^}]*\}/g)!;
