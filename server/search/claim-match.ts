@@ -299,7 +299,8 @@ interface Prepared {
   candidates: ClaimCandidate[];
 }
 
-function prepare(index: SearchIndex, text: string, opts: MatchClaimOptions): Prepared {
+/** `candidatesOnly`: only the candidates that can pass (claimCandidates lists every one reached). */
+function prepare(index: SearchIndex, text: string, opts: MatchClaimOptions, candidatesOnly = false): Prepared {
   const words = claimTerms(text);
   const concepts = claimConcepts(index, text, words.length);
   let terms: QueryTerm[] = [...words, ...concepts];
@@ -324,9 +325,10 @@ function prepare(index: SearchIndex, text: string, opts: MatchClaimOptions): Pre
     terms.map((q) => q.term),
     {
       prefix: prefixOk ? (t) => t.length >= PREFIX_MIN && !isConceptTerm(t) : false,
-      fuzzy: false,
       // A term no entry holds exactly can still match as a prefix: weigh it as one only one entry holds.
       boostTerm: (t) => weight.get(t) || 1,
+      // A hit below MIN_SCORE, even with the class boost, cannot pass: its matches are never worked out.
+      atLeast: candidatesOnly ? (MIN_SCORE / (signalled.size ? 1 + CLASS_BOOST : 1)) * 0.999 : undefined,
     },
   );
   const candidates = hits.map((hit): ClaimCandidate => {
@@ -357,7 +359,7 @@ export function claimCandidates(index: SearchIndex, text: string, opts: MatchCla
 export function matchClaim(index: SearchIndex, text: string, opts: MatchClaimOptions = {}): ClaimHit[] {
   const limit = opts.limit ?? 5;
   if (limit <= 0) return [];
-  const { terms, candidates } = prepare(index, text, opts);
+  const { terms, candidates } = prepare(index, text, opts, true);
   const scored = candidates.filter((c) => c.passes);
   if (!scored.length) return [];
   const floor = scored[0].score * RELATIVE_FLOOR;
