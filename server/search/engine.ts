@@ -59,7 +59,7 @@ export interface RawResults {
   derived: string[];
   /** Which query term each derived term came from (position in the queries), beside derived. */
   source: number[];
-  /** The (derived term, field) pairs matched in the i-th document of docs, in the order scored. */
+  /** The (derived term, field) pairs matched in the i-th document of docs, in the order scored (empty when the search kept no events). */
   events(i: number): { term: number; field: number }[];
 }
 
@@ -180,6 +180,20 @@ export class Engine {
     this.count = c - 1;
   }
 
+  /** The fields (their positions) of the document with internal number n that hold the term, in order. */
+  fieldsOf(n: number, term: string): number[] {
+    const data = this.terms.get(term);
+    const out: number[] = [];
+    if (!data) return out;
+    for (let f = 0; f < this.fieldCount; f++) {
+      const p = data.fields[f];
+      if (!p) continue;
+      const at = bisect(p.docs, n);
+      if (p.docs[at] === n) out.push(f);
+    }
+    return out;
+  }
+
   /** The vocabulary terms that begin with `prefix` (itself included), in sorted order. */
   withPrefix(prefix: string): string[] {
     const sorted = (this.sorted ??= [...this.terms.keys()].sort());
@@ -226,7 +240,8 @@ export class Engine {
    * Scores the documents for these query terms, combined with OR. Expanded terms: prefix ones
    * first, then fuzzy ones that are not also prefix ones (as minisearch expands them).
    */
-  search(queries: readonly TermQuery[]): RawResults {
+  search(queries: readonly TermQuery[], opts: { events?: boolean } = {}): RawResults {
+    const logEvents = opts.events !== false;
     this.grow();
     const epoch = ++this.epoch;
     // A search every 2^31 would wrap the marks: start again from clean arrays.
@@ -235,7 +250,7 @@ export class Engine {
       this.termSeen.fill(0);
       this.epoch = 0;
       this.stamp = 0;
-      return this.search(queries);
+      return this.search(queries, opts);
     }
     const docs: number[] = [];
     const derived: string[] = [];
@@ -291,9 +306,6 @@ export class Engine {
               termAcc[n] = s;
               touched.push(n);
             } else termAcc[n] += s;
-            const e = evTerm.length;
-            evTerm.push(ti);
-            evField.push(f);
             if (seen[n] !== epoch) {
               seen[n] = epoch;
               acc[n] = 0;
@@ -301,8 +313,12 @@ export class Engine {
               head[n] = -1;
               docs.push(n);
             }
-            evNext.push(head[n]);
-            head[n] = e;
+            if (logEvents) {
+              evTerm.push(ti);
+              evField.push(f);
+              evNext.push(head[n]);
+              head[n] = evTerm.length - 1;
+            }
           }
         }
       }

@@ -81,6 +81,8 @@ class IndexState {
   readonly entries = new Map<number, IndexedEntry>();
   /** Internal number of the engine → entry. */
   readonly byNumber: (IndexedEntry | undefined)[] = [];
+  /** Internal number → each field's distinct terms (to tell which terms a claim's hit matched where). */
+  readonly fieldTerms: (string[][] | undefined)[] = [];
   /** Normalised term → number of indexed entries that hold it in any field. */
   readonly df = new Map<string, number>();
   /**
@@ -110,6 +112,7 @@ class IndexState {
     this.docs.set(doc.id, doc);
     this.entries.set(entry.id, entry);
     this.byNumber.push(entry);
+    this.fieldTerms.push(fields.map((f) => [...new Set(f.terms.filter((t): t is string => t !== null))]));
     this.changed();
   }
 
@@ -119,7 +122,10 @@ class IndexState {
     const fields = docFields(doc, this.syn);
     // Internal numbers are never reused: the removed one maps to nothing.
     const n = this.engine.numberOf(id);
-    if (n !== undefined) this.byNumber[n] = undefined;
+    if (n !== undefined) {
+      this.byNumber[n] = undefined;
+      this.fieldTerms[n] = undefined;
+    }
     this.engine.remove(id, fields);
     countTerms(this.df, fields, -1);
     this.docs.delete(id);
@@ -617,28 +623,65 @@ export class SearchIndex {
    * divided by that number) is below it are left out before their matches are worked out.
    */
   searchTerms(terms: string[], options: TermsSearchOptions = {}): TermsHit[] {
-    if (!terms.length) return [];
-    const { prefix = false, boostTerm, atLeast } = options;
-    const r = this.state.engine.search(
-      terms.map((term) => ({ term, prefix: typeof prefix === 'function' ? prefix(term) : prefix, fuzzy: 0, boost: boostTerm ? boostTerm(term) : 1 })),
-    );
-    const byNumber = this.state.byNumber;
+    const found = this.searchTermsLazily(terms, options);
     const out: TermsHit[] = [];
-    for (let i = 0; i < r.docs.length; i++) {
-      const entry = byNumber[r.docs[i]];
-      if (!entry) continue;
-      if (atLeast !== undefined && r.scores[i] / Math.max(1, r.matched[i]) < atLeast) continue;
-      const match: Record<string, string[]> = {};
-      const queryTerms: string[] = [];
-      for (const { term, field } of r.events(i)) {
-        const t = r.derived[term];
-        (match[t] ??= []).push(FIELDS[field]);
-        const q = terms[r.source[term]];
-        if (!queryTerms.includes(q)) queryTerms.push(q);
-      }
-      out.push({ entry, score: r.scores[i], terms: Object.keys(match), queryTerms, match });
-    }
+    for (let i = 0; i < found.length; i++) out.push(found.hit(i));
     return out.sort((a, b) => b.score - a.score);
+  }
+
+  /**
+   * searchTerms' hits before their matches are worked out: entry and score of each (unranked,
+   * `atLeast` applied), and the whole hit on demand (its matched terms and fields, found by a
+   * look-up in each matched term's posting lists). The claim matcher works out only the hits it
+   * may keep. Read it before the index changes.
+   */
+  searchTermsLazily(terms: string[], options: TermsSearchOptions = {}): LazyTermsHits {
+    const state = this.state;
+    if (!terms.length) return { length: 0, entry: () => undefined as never, score: () => 0, matched: () => 0, hit: () => undefined as never };
+    const { prefix = false, boostTerm, atLeast } = options;
+    const r = state.engine.search(
+      terms.map((term) => ({ term, prefix: typeof prefix === 'function' ? prefix(term) : prefix, fuzzy: 0, boost: boostTerm ? boostTerm(term) : 1 })),
+      { events: false },
+    );
+    let derivedAt: Map<string, number> | undefined;
+    const kept: number[] = [];
+    for (let i = 0; i < r.docs.length; i++) {
+      if (!state.byNumber[r.docs[i]]) continue;
+      if (atLeast !== undefined && r.scores[i] / Math.max(1, r.matched[i]) < atLeast) continue;
+      kept.push(i);
+    }
+    return {
+      length: kept.length,
+      entry: (k) => state.byNumber[r.docs[kept[k]]]!,
+      score: (k) => r.scores[kept[k]],
+      matched: (k) => r.matched[kept[k]],
+      hit: (k) => {
+        const i = kept[k];
+        const n = r.docs[i];
+        // The entry's own terms looked up among those searched (fewer than the other way round),
+        // then put in the order scored: by term searched, then by field.
+        derivedAt ??= new Map(r.derived.map((t, ti) => [t, ti]));
+        const pairs: number[] = [];
+        const own = state.fieldTerms[n] ?? [];
+        for (let f = 0; f < own.length; f++) {
+          for (const t of own[f]) {
+            const ti = derivedAt.get(t);
+            if (ti !== undefined) pairs.push(ti * FIELDS.length + f);
+          }
+        }
+        pairs.sort((a, b) => a - b);
+        const match: Record<string, string[]> = {};
+        const queryTerms: string[] = [];
+        for (const p of pairs) {
+          const ti = Math.floor(p / FIELDS.length);
+          const t = r.derived[ti];
+          (match[t] ??= []).push(FIELDS[p % FIELDS.length]);
+          const q = terms[r.source[ti]];
+          if (!queryTerms.includes(q)) queryTerms.push(q);
+        }
+        return { entry: state.byNumber[n]!, score: r.scores[i], terms: Object.keys(match), queryTerms, match };
+      },
+    };
   }
 
   /** How many indexed entries hold this normalised term in any field. */
@@ -660,6 +703,16 @@ async function addInSlices(state: IndexState, loaded: LoadedEntry[]): Promise<vo
     }
     await new Promise<void>((resolve) => setImmediate(resolve));
   }
+}
+
+/** searchTerms' hits, their matches worked out on demand (SearchIndex.searchTermsLazily). */
+export interface LazyTermsHits {
+  length: number;
+  entry(i: number): IndexedEntry;
+  score(i: number): number;
+  /** How many of the query terms it matched. */
+  matched(i: number): number;
+  hit(i: number): TermsHit;
 }
 
 /** How many entries' written forms (readerWords) are kept. */
