@@ -5,6 +5,7 @@
 import os from 'node:os';
 import { runBorisBench } from './boris';
 import { benchComputePool } from './compute-pool';
+import { runSearchBench } from './search';
 import { benchWorksheets } from './worksheets';
 
 async function main() {
@@ -15,6 +16,10 @@ async function main() {
   console.log('');
   // Health and search while the compute pool is saturated (its own throwaway MariaDB and app process).
   await benchComputePool();
+  console.log('');
+  // Search at 10,000 entries beside MariaDB FULLTEXT, the index build, /api/search against
+  // /api/health, and claim-check latency (also alone: `npm run bench:search`).
+  await runSearchBench();
 }
 
 main().catch((e) => {

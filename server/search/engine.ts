@@ -118,14 +118,15 @@ export class Engine {
 
   /**
    * Adds a document: for each field, its tokens as split (their distinct count is the field's
-   * length) and the index terms they give (null: left out).
+   * length) and the index terms they give (null: left out). Returns each field's distinct terms.
    */
-  add(id: number, fields: { tokens: readonly string[]; terms: readonly (string | null)[] }[]): void {
+  add(id: number, fields: { tokens: readonly string[]; terms: readonly (string | null)[] }[]): string[][] {
     if (this.numberOf_.has(id)) throw new Error(`search engine: duplicate id ${id}`);
     const n = this.ids.length;
     this.ids.push(id);
     this.numberOf_.set(id, n);
     const c = this.count;
+    const distinct: string[][] = [];
     for (let f = 0; f < this.fieldCount; f++) {
       const { tokens, terms } = fields[f];
       const length = new Set(tokens).size;
@@ -144,8 +145,10 @@ export class Engine {
         p.docs.push(n);
         p.tfs.push(k);
       }
+      distinct.push([...tf.keys()]);
     }
     this.count = c + 1;
+    return distinct;
   }
 
   /** Removes a document (given the same fields it was added with). */
@@ -375,11 +378,20 @@ function bisectStr(xs: string[], x: string): number {
   return lo;
 }
 
+/** Rows of editDistance, reused (grown when a longer word comes). */
+let rowA = new Int32Array(64);
+let rowB = new Int32Array(64);
+
 /** Levenshtein distance of a and b, or max + 1 as soon as it must exceed max. */
 export function editDistance(a: string, b: string, max: number): number {
   if (Math.abs(a.length - b.length) > max) return max + 1;
-  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
-  let cur = new Array<number>(b.length + 1);
+  if (rowA.length <= b.length) {
+    rowA = new Int32Array(b.length * 2 + 1);
+    rowB = new Int32Array(b.length * 2 + 1);
+  }
+  let prev = rowA;
+  let cur = rowB;
+  for (let j = 0; j <= b.length; j++) prev[j] = j;
   for (let i = 1; i <= a.length; i++) {
     cur[0] = i;
     let best = i;
@@ -390,7 +402,9 @@ export function editDistance(a: string, b: string, max: number): number {
       if (v < best) best = v;
     }
     if (best > max) return max + 1;
-    [prev, cur] = [cur, prev];
+    const swap = prev;
+    prev = cur;
+    cur = swap;
   }
   return prev[b.length] <= max ? prev[b.length] : max + 1;
 }

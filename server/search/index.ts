@@ -106,13 +106,13 @@ class IndexState {
 
   add({ doc, entry }: LoadedEntry): void {
     const fields = docFields(doc, this.syn);
-    this.engine.add(doc.id, fields);
-    countTerms(this.df, fields, 1);
+    const distinct = this.engine.add(doc.id, fields);
+    countTerms(this.df, distinct, 1);
     addShortTerms(this.shortTerms, doc);
     this.docs.set(doc.id, doc);
     this.entries.set(entry.id, entry);
     this.byNumber.push(entry);
-    this.fieldTerms.push(fields.map((f) => [...new Set(f.terms.filter((t): t is string => t !== null))]));
+    this.fieldTerms.push(distinct);
     this.changed();
   }
 
@@ -127,7 +127,11 @@ class IndexState {
       this.fieldTerms[n] = undefined;
     }
     this.engine.remove(id, fields);
-    countTerms(this.df, fields, -1);
+    countTerms(
+      this.df,
+      fields.map((f) => f.terms.filter((t): t is string => t !== null)),
+      -1,
+    );
     this.docs.delete(id);
     this.entries.delete(id);
     this.changed();
@@ -451,10 +455,13 @@ export class SearchIndex {
   }
 
   /** Every entry, newest first (a blank query). */
-  private newest(): SearchHit[] {
+  private newestEntries(): IndexedEntry[] {
     const state = this.state;
-    state.newest ??= [...state.entries.values()].sort((a, b) => b.publishedAt - a.publishedAt || b.id - a.id);
-    return state.newest.map((entry) => ({ entry, score: 0, terms: [] }));
+    return (state.newest ??= [...state.entries.values()].sort((a, b) => b.publishedAt - a.publishedAt || b.id - a.id));
+  }
+
+  private newest(): SearchHit[] {
+    return this.newestEntries().map((entry) => ({ entry, score: 0, terms: [] }));
   }
 
   /** Ranked hits for q (all entries, newest first, when q is blank; none when q holds no word the index searches for, see queryWords). */
@@ -475,37 +482,40 @@ export class SearchIndex {
   search(req: SearchRequest): SearchPage {
     const found = this.hits(req.q);
     const byNumber = this.state.byNumber;
-    const all: { entry: IndexedEntry; score: number; n: number }[] = found
-      ? found.numbers.map((n, i) => ({ entry: byNumber[n]!, score: found.scores[i], n }))
-      : this.newest().map((h) => ({ entry: h.entry, score: 0, n: -1 }));
+    const blank = found ? null : this.newestEntries();
+    const count = found ? found.numbers.length : blank!.length;
+    const entryAt = (i: number) => (found ? byNumber[found.numbers[i]]! : blank![i]);
     const classes = req.mechanism ? this.classAndChildren(req.mechanism) : null;
-    const lawOk = (e: IndexedEntry) => !req.law || e.laws.includes(req.law);
-    const classOk = (e: IndexedEntry) => !classes || (e.mechanismClass !== null && classes.has(e.mechanismClass));
     const laws: Record<string, number> = {};
     const mechanisms: Record<string, number> = {};
     const lineage = new Map<string, string[]>();
-    const kept: typeof all = [];
-    for (const h of all) {
-      const byLaw = lawOk(h.entry);
-      const byClass = classOk(h.entry);
-      if (byClass) for (const l of h.entry.laws) laws[l] = (laws[l] ?? 0) + 1;
-      const cls = h.entry.mechanismClass;
+    const kept: number[] = [];
+    for (let i = 0; i < count; i++) {
+      const e = entryAt(i);
+      const byLaw = !req.law || e.laws.includes(req.law);
+      const byClass = !classes || (e.mechanismClass !== null && classes.has(e.mechanismClass));
+      if (byClass) for (const l of e.laws) laws[l] = (laws[l] ?? 0) + 1;
+      const cls = e.mechanismClass;
       if (byLaw && cls) {
         let up = lineage.get(cls);
         if (!up) lineage.set(cls, (up = this.classAndAncestors(cls)));
         for (const c of up) mechanisms[c] = (mechanisms[c] ?? 0) + 1;
       }
-      if (byLaw && byClass) kept.push(h);
+      if (byLaw && byClass) kept.push(i);
     }
     const end = req.offset + req.limit;
-    // Blank query: already newest first. Otherwise best first, ties by id; only the first `end` are needed.
-    const page = found ? topK(kept, end).slice(req.offset, end) : kept.slice(req.offset, end);
-    return {
-      total: kept.length,
-      hits: page.map((h) => (found ? this.hitOf(h.n, h.score, found.lists) : { entry: h.entry, score: 0, terms: [] })),
-      facets: { laws, mechanisms },
-      partial: !this.built,
-    };
+    let hits: SearchHit[];
+    if (!found) {
+      // Blank query: already newest first.
+      hits = kept.slice(req.offset, end).map((i) => ({ entry: blank![i], score: 0, terms: [] }));
+    } else {
+      // Best first, ties by id; only the first `end` are needed, and only the page gets its terms.
+      const better = (a: number, b: number) => found.scores[b] - found.scores[a] || byNumber[found.numbers[a]]!.id - byNumber[found.numbers[b]]!.id;
+      hits = topK(kept, end, better)
+        .slice(req.offset, end)
+        .map((i) => this.hitOf(found.numbers[i], found.scores[i], found.lists));
+    }
+    return { total: kept.length, hits, facets: { laws, mechanisms }, partial: !this.built };
   }
 
   /**
@@ -774,13 +784,13 @@ function termLists(r: RawResults): (i: number) => string[] {
   };
 }
 
-/** The first k of the hits, best first, ties by entry id (a partial selection: the rest are never sorted). */
-function topK<T extends { entry: IndexedEntry; score: number }>(hits: T[], k: number): T[] {
-  const better = (a: T, b: T) => b.score - a.score || a.entry.id - b.entry.id;
-  if (hits.length <= k || hits.length <= 64) return [...hits].sort(better).slice(0, k);
-  // Keep the k best in a sorted buffer; most hits fall below its last and cost one comparison.
+/** The first k of the items, best first by `better` (a partial selection: the rest are never sorted). */
+function topK<T>(items: T[], k: number, better: (a: T, b: T) => number): T[] {
+  if (k <= 0) return [];
+  if (items.length <= k || items.length <= 64) return [...items].sort(better).slice(0, k);
+  // Keep the k best in a sorted buffer; most items fall below its last and cost one comparison.
   const best: T[] = [];
-  for (const h of hits) {
+  for (const h of items) {
     if (best.length === k && better(h, best[k - 1]) >= 0) continue;
     let lo = 0;
     let hi = best.length;
@@ -847,9 +857,9 @@ function addShortTerms(out: Set<string>, doc: SearchDoc): void {
 }
 
 /** Adds `by` to the document frequency of each distinct term of a doc's fields (concept terms too). */
-function countTerms(df: Map<string, number>, fields: { terms: (string | null)[] }[], by: 1 | -1): void {
+function countTerms(df: Map<string, number>, fields: readonly (readonly string[])[], by: 1 | -1): void {
   const terms = new Set<string>();
-  for (const f of fields) for (const t of f.terms) if (t) terms.add(t);
+  for (const f of fields) for (const t of f) terms.add(t);
   for (const t of terms) {
     const n = (df.get(t) ?? 0) + by;
     if (n > 0) df.set(t, n);
