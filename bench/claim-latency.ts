@@ -72,7 +72,9 @@ export async function benchClaimLatency(index: SearchIndex, sequelize: Sequelize
   const longMatcher = await timed(long, (t) => matchClaim(index, t, { classes: classes.get(t) }));
   say(`claim matcher, ${long.length} long texts of ~${chars(long)} characters: p50 ${fmt(longMatcher.p50)} ms, p95 ${fmt(longMatcher.p95)} ms`);
 
-  const compute = new ComputePool({ ...computeConfig() }, pino({ level: 'silent' }));
+  // The app's pool, with a time limit generous enough for a worker's first job on busy cores (it
+  // loads the figure reader); the warm-up round takes that cost before anything is timed.
+  const compute = new ComputePool({ ...computeConfig(), timeoutMs: 60_000 }, pino({ level: 'silent' }));
   await compute.start();
   try {
     const service = new ClaimChecks({ sequelize, index, library: new Library(), compute });

@@ -593,28 +593,16 @@ export class SearchIndex {
     }
     const fuzzy = known ? 0 : fuzzyDistance(word);
     const direct = (t: string) => t === word || (prefix && t.startsWith(word));
-    const acc = new Map<number, { score: number; terms: string[]; fuzzy: boolean }>();
-    const r = state.engine.search([{ term: word, prefix, fuzzy, boost: 1 }]);
+    const r = state.engine.search([{ term: word, prefix, fuzzy, boost: 1 }], { events: prefix || fuzzy > 0 });
     const termsOf = termLists(r);
-    for (let i = 0; i < r.docs.length; i++) {
-      const terms = termsOf(i);
-      acc.set(r.docs[i], { score: r.scores[i], terms, fuzzy: !terms.some(direct) });
+    const swaps = !known && word.length >= 4;
+    let hits: WordHits;
+    if (!swaps) {
+      // Straight from the engine's arrays, put in ascending order of internal number.
+      hits = wordHitsFrom(r, termsOf, direct);
+    } else {
+      hits = this.withSwaps(r, termsOf, direct, word, typed);
     }
-    // Two letters typed the wrong way round are one slip, not the two edits an edit distance counts.
-    if (!known && word.length >= 4) {
-      const weight = FUZZY_WEIGHT * (word.length / (word.length + 1));
-      for (const variant of swapped(typed)) {
-        if (variant === word || !state.df.has(variant)) continue;
-        const v = state.engine.search([{ term: variant, prefix: false, fuzzy: 0, boost: 1 }]);
-        for (let i = 0; i < v.docs.length; i++) {
-          const n = v.docs[i];
-          const had = acc.get(n);
-          const terms = had ? (had.terms.includes(variant) ? had.terms : [...had.terms, variant]) : [variant];
-          acc.set(n, { score: (had?.score ?? 0) + v.scores[i] * weight, terms, fuzzy: had ? had.fuzzy : true });
-        }
-      }
-    }
-    const hits = wordHitsOf(acc);
     state.wordCache.set(key, hits);
     state.wordCacheHits += hits.numbers.length;
     while (state.wordCache.size > WORD_CACHE_SIZE || state.wordCacheHits > WORD_CACHE_HITS) {
@@ -623,6 +611,29 @@ export class SearchIndex {
       state.wordCacheHits -= dropped.numbers.length;
     }
     return hits;
+  }
+
+  /** A word's hits with those of its forms with two neighbouring letters swapped added (a word the index lacks). */
+  private withSwaps(r: RawResults, termsOf: (i: number) => string[], direct: (t: string) => boolean, word: string, typed: string): WordHits {
+    const state = this.state;
+    const acc = new Map<number, { score: number; terms: string[]; fuzzy: boolean }>();
+    for (let i = 0; i < r.docs.length; i++) {
+      const terms = termsOf(i);
+      acc.set(r.docs[i], { score: r.scores[i], terms, fuzzy: !terms.some(direct) });
+    }
+    // Two letters typed the wrong way round are one slip, not the two edits an edit distance counts.
+    const weight = FUZZY_WEIGHT * (word.length / (word.length + 1));
+    for (const variant of swapped(typed)) {
+      if (variant === word || !state.df.has(variant)) continue;
+      const v = state.engine.search([{ term: variant, prefix: false, fuzzy: 0, boost: 1 }], { events: false });
+      for (let i = 0; i < v.docs.length; i++) {
+        const n = v.docs[i];
+        const had = acc.get(n);
+        const terms = had ? (had.terms.includes(variant) ? had.terms : [...had.terms, variant]) : [variant];
+        acc.set(n, { score: (had?.score ?? 0) + v.scores[i] * weight, terms, fuzzy: had ? had.fuzzy : true });
+      }
+    }
+    return wordHitsOf(acc);
   }
 
   /**
@@ -738,22 +749,31 @@ interface WordHits {
   find(n: number): number;
 }
 
-function wordHitsOf(acc: Map<number, { score: number; terms: string[]; fuzzy: boolean }>): WordHits {
-  const numbers = Int32Array.from(acc.keys()).sort();
-  const scores = new Float64Array(numbers.length);
-  const fuzzy = new Uint8Array(numbers.length);
-  const terms: string[][] = new Array(numbers.length);
-  for (let i = 0; i < numbers.length; i++) {
-    const h = acc.get(numbers[i])!;
-    scores[i] = h.score;
-    fuzzy[i] = h.fuzzy ? 1 : 0;
-    terms[i] = h.terms;
+/** A word's hits from one engine search, in ascending order of internal number (a numeric sort of number and position packed in one float). */
+function wordHitsFrom(r: RawResults, termsOf: (i: number) => string[], direct: (t: string) => boolean): WordHits {
+  const m = r.docs.length;
+  const packed = new Float64Array(m);
+  for (let i = 0; i < m; i++) packed[i] = r.docs[i] * 2 ** 21 + i;
+  packed.sort();
+  const numbers = new Int32Array(m);
+  const scores = new Float64Array(m);
+  const fuzzy = new Uint8Array(m);
+  const terms: string[][] = new Array(m);
+  for (let k = 0; k < m; k++) {
+    const i = packed[k] % 2 ** 21;
+    numbers[k] = r.docs[i];
+    scores[k] = r.scores[i];
+    const ts = termsOf(i);
+    terms[k] = ts;
+    fuzzy[k] = ts.some(direct) ? 0 : 1;
   }
+  return withFind({ numbers, scores, terms, fuzzy });
+}
+
+function withFind(h: Omit<WordHits, 'find'>): WordHits {
+  const numbers = h.numbers;
   return {
-    numbers,
-    scores,
-    terms,
-    fuzzy,
+    ...h,
     find(n) {
       let lo = 0;
       let hi = numbers.length;
@@ -765,6 +785,20 @@ function wordHitsOf(acc: Map<number, { score: number; terms: string[]; fuzzy: bo
       return lo < numbers.length && numbers[lo] === n ? lo : -1;
     },
   };
+}
+
+function wordHitsOf(acc: Map<number, { score: number; terms: string[]; fuzzy: boolean }>): WordHits {
+  const numbers = Int32Array.from(acc.keys()).sort();
+  const scores = new Float64Array(numbers.length);
+  const fuzzy = new Uint8Array(numbers.length);
+  const terms: string[][] = new Array(numbers.length);
+  for (let i = 0; i < numbers.length; i++) {
+    const h = acc.get(numbers[i])!;
+    scores[i] = h.score;
+    fuzzy[i] = h.fuzzy ? 1 : 0;
+    terms[i] = h.terms;
+  }
+  return withFind({ numbers, scores, terms, fuzzy });
 }
 
 /** The matched index terms of each document of a one-word search, in the order matched; documents with the same terms share one array. */
