@@ -6,6 +6,7 @@ import os from 'node:os';
 import { runBorisBench } from './boris';
 import { benchComputePool } from './compute-pool';
 import { benchFirstLoad } from './first-load';
+import { runSearchBench } from './search';
 import { benchWorksheets } from './worksheets';
 
 async function main() {
@@ -19,6 +20,10 @@ async function main() {
   console.log('');
   // A reader's first visit in Chromium: bytes of JavaScript, first paint, first section (its own throwaway MariaDB and app).
   await benchFirstLoad();
+  console.log('');
+  // Search at 10,000 entries beside MariaDB FULLTEXT, the index build, /api/search against
+  // /api/health, and claim-check latency (also alone: `npm run bench:search`).
+  await runSearchBench();
 }
 
 main().catch((e) => {

@@ -10,13 +10,18 @@
  *     physics vocabulary; titles "Synthetic entry NNNNN: …", slugs "synthetic-NNNNN-…"), inserted
  *     in bulk into entries / entry_versions / entry_laws, and the same text into a bench table
  *     `bench_fulltext` with a FULLTEXT(title, body) index;
- *  3. the SearchIndex build (time, heap);
+ *  3. the SearchIndex build: reading the entries from MariaDB, building the index from the rows
+ *     read (time, heap), and the first build as the app runs it (pages read and indexed in slices);
  *  4. 1,000 queries of 2–5 distinctive words of a target entry, 30 % with typing errors, in process
- *     through SearchIndex.query and through MATCH … AGAINST (natural language mode, top 20) on one
- *     connection: latency percentiles, their ratio, and how often the target comes first;
- *  5. the real app (createApp, in a child process) under autocannon, 32 connections × 10 s, on
- *     /api/search with those queries and on /api/health;
- *  6. the aims, each "met" or "not met".
+ *     through SearchIndex.search (what GET /api/search computes: the ranked page of 20, the total
+ *     and the facets; also timed: SearchIndex.query, every hit ranked, and the page with its
+ *     excerpts and reader words) and through MATCH … AGAINST (natural language mode, top 20) on
+ *     one connection: latency percentiles, their ratio, and how often the target comes first;
+ *  5. claim-check latency at 10,000 entries (bench/claim-latency.ts);
+ *  6. the real app (createApp, in a child process): how soon its first /api/search answers (and
+ *     when its answer is complete), then autocannon, 32 connections × 10 s, on /api/search with
+ *     those queries and on /api/health;
+ *  7. the aims, each "met" or "not met".
  * mariadbd is stopped and the temp dir removed at the end, on error and on Ctrl-C.
  */
 import { fork, spawn, type ChildProcess } from 'node:child_process';
@@ -26,9 +31,12 @@ import autocannon from 'autocannon';
 import type { Sequelize } from 'sequelize';
 import type { MariaDbServer } from '../server/db/mariadb';
 import { ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass, User } from '../server/models';
+import { searchResult } from '../server/presenters/search';
 import { SearchIndex } from '../server/search';
+import { loadEntries, loadSynonyms } from '../server/search/load';
 import { normaliseTerm, plainText } from '../server/search/normalise';
 import { entryContentSchema } from '../shared/entries/schema';
+import { AIM_CLAIM_P95_MS, benchClaimLatency } from './claim-latency';
 import { startBenchDatabase } from './db';
 import { generateLibrary, makeQueries, type BenchQuery } from './search/synthetic';
 
@@ -38,9 +46,14 @@ const WARMUP = 200;
 const TYPO_SHARE = 0.3;
 const CONNECTIONS = 32;
 const DURATION_S = 10;
-const AIM_P95_MS = 5;
+const AIM_P95_MS = 2;
+const AIM_P99_MS = 5;
 const AIM_RATIO = 5;
-const AIM_TYPO_FIRST = 0.9;
+const AIM_TYPO_FIRST = 0.95;
+const AIM_BUILD_MS = 2000;
+const AIM_HTTP_RATIO = 0.7;
+/** The page GET /api/search answers by default. */
+const PAGE = 20;
 
 const say = (m: string) => console.log(`search: ${m}`);
 const ms = (t: number) => (t < 10 ? t.toFixed(3) : t.toFixed(1));
@@ -214,23 +227,34 @@ async function main() {
   await seq.query('ALTER TABLE bench_fulltext ADD FULLTEXT INDEX bench_fulltext_ft (title, body)');
   say(`bench_fulltext filled in ${(tFill / 1000).toFixed(1)} s; FULLTEXT(title, body) index built in ${((performance.now() - t) / 1000).toFixed(1)} s`);
 
-  // 3. The SearchIndex build.
+  // 3. The SearchIndex build: the read from MariaDB and the build from the rows read, apart.
   gc();
-  const heap0 = process.memoryUsage().heapUsed;
   t = performance.now();
+  const syn = await loadSynonyms();
+  const read = await loadEntries();
+  const tRead = performance.now() - t;
+  const heap0 = process.memoryUsage().heapUsed;
   const index = new SearchIndex({ refreshMs: 0 });
-  await index.ready();
+  t = performance.now();
+  index.install(read.items, syn, read);
   const tBuild = performance.now() - t;
   gc();
   const heap1 = process.memoryUsage().heapUsed;
   t = performance.now();
-  await index.rebuild();
-  const tRebuild = performance.now() - t;
+  index.install(read.items, syn, read);
+  const tBuild2 = performance.now() - t;
   gc();
   say(
-    `SearchIndex built: ${index.size.toLocaleString('en-US')} entries in ${tBuild.toFixed(0)} ms (again: ${tRebuild.toFixed(0)} ms; both include reading from MariaDB); ` +
-      `heap used ${mb(heap1)} after, ${mb(heap1 - heap0)} for the index`,
+    `SearchIndex: ${index.size.toLocaleString('en-US')} entries read from MariaDB in ${tRead.toFixed(0)} ms; index built from the rows in ${tBuild.toFixed(0)} ms ` +
+      `(again: ${tBuild2.toFixed(0)} ms); heap used ${mb(heap1)} after, ${mb(heap1 - heap0)} for the index and the rows`,
   );
+  // The first build as the app runs it: pages of entries read and indexed in slices that yield.
+  const fresh = new SearchIndex({ refreshMs: 0 });
+  t = performance.now();
+  await fresh.ready();
+  const tFirst = performance.now() - t;
+  say(`the app's first build (pages of 1,000 read, indexed in slices of 250 that yield to the event loop): ${tFirst.toFixed(0)} ms in all, reads included`);
+  await fresh.stop();
 
   // 4. The queries.
   // 200 more for the warm-ups, never timed: the index keeps a cache of single words' hits, and a
@@ -250,29 +274,49 @@ async function main() {
     return { typo: hit((q) => q.typo), clean: hit((q) => !q.typo), all: hit(() => true) };
   };
 
-  for (const q of warmup) index.query(q.q); // warm-up (other queries than those timed)
+  // What GET /api/search computes (SearchIndex.search: the page of 20 ranked, the total, the facets).
+  const page = (q: string) => index.search({ q, offset: 0, limit: PAGE });
+  for (const q of warmup) page(q.q); // warm-up (other queries than those timed)
+  gc(); // each timed loop starts from a collected heap (the build's garbage is not the queries' cost)
   const msTimes: number[] = [];
   const msFirst: (number | undefined)[] = [];
   const msCounts: number[] = [];
   for (const q of queries) {
     const s = performance.now();
-    const hits = index.query(q.q);
+    const res = page(q.q);
     msTimes.push(performance.now() - s);
-    msFirst.push(hits[0]?.entry.id);
-    msCounts.push(hits.length);
+    msFirst.push(res.hits[0]?.entry.id);
+    msCounts.push(res.total);
   }
   const msP = percentiles(msTimes);
   const msTop = first(msFirst, queries);
   say(
-    `minisearch in process (SearchIndex.query, all hits ranked): p50 ${ms(msP.p50)} ms, p95 ${ms(msP.p95)} ms, p99 ${ms(msP.p99)} ms, mean ${ms(msP.mean)} ms; ` +
-      `median ${percentiles(msCounts).p50} hits per query`,
+    `index in process (SearchIndex.search, as GET /api/search: page of ${PAGE} ranked, total, facets): p50 ${ms(msP.p50)} ms, p95 ${ms(msP.p95)} ms, p99 ${ms(msP.p99)} ms, ` +
+      `mean ${ms(msP.mean)} ms; median ${percentiles(msCounts).p50} hits per query`,
   );
+  // The same queries with every hit ranked (SearchIndex.query), and with the page presented as the route presents it.
+  gc();
+  const allTimes: number[] = [];
+  const presentedTimes: number[] = [];
+  for (const q of queries) {
+    let s = performance.now();
+    index.query(q.q);
+    allTimes.push(performance.now() - s);
+    s = performance.now();
+    for (const h of page(q.q).hits) searchResult(h, index.readerWords(h, q.q));
+    presentedTimes.push(performance.now() - s);
+  }
+  const allP = percentiles(allTimes);
+  const presP = percentiles(presentedTimes);
+  say(`  every hit ranked (SearchIndex.query): p50 ${ms(allP.p50)} ms, p95 ${ms(allP.p95)} ms, p99 ${ms(allP.p99)} ms`);
+  say(`  the page with its excerpts and reader words (what the route sends): p50 ${ms(presP.p50)} ms, p95 ${ms(presP.p95)} ms, p99 ${ms(presP.p99)} ms`);
 
   conn = await mariadb.createConnection({ host: cfg.host, port: cfg.port, user: cfg.user, password: cfg.password, database: cfg.name });
   const sql =
     'SELECT id, MATCH(title, body) AGAINST (? IN NATURAL LANGUAGE MODE) AS score FROM bench_fulltext ' +
     'WHERE MATCH(title, body) AGAINST (? IN NATURAL LANGUAGE MODE) ORDER BY score DESC LIMIT 20';
   for (const q of warmup) await conn.query(sql, [q.q, q.q]); // warm-up (other queries than those timed)
+  gc();
   const ftTimes: number[] = [];
   const ftFirst: (number | undefined)[] = [];
   for (const q of queries) {
@@ -285,26 +329,43 @@ async function main() {
   const ftTop = first(ftFirst, queries);
   say(`MariaDB FULLTEXT (MATCH … AGAINST natural language, top 20, one connection over TCP): p50 ${ms(ftP.p50)} ms, p95 ${ms(ftP.p95)} ms, p99 ${ms(ftP.p99)} ms, mean ${ms(ftP.mean)} ms`);
   const ratio = { p50: ftP.p50 / msP.p50, p95: ftP.p95 / msP.p95, p99: ftP.p99 / msP.p99 };
-  say(`FULLTEXT / minisearch: p50 ${ratio.p50.toFixed(1)}×, p95 ${ratio.p95.toFixed(1)}×, p99 ${ratio.p99.toFixed(1)}×`);
-  say(`target entry first — minisearch: typo queries ${pct(msTop.typo)}, clean ${pct(msTop.clean)}, all ${pct(msTop.all)}`);
+  say(`FULLTEXT / index: p50 ${ratio.p50.toFixed(1)}×, p95 ${ratio.p95.toFixed(1)}×, p99 ${ratio.p99.toFixed(1)}×`);
+  say(`target entry first — index:    typo queries ${pct(msTop.typo)}, clean ${pct(msTop.clean)}, all ${pct(msTop.all)}`);
   say(`target entry first — FULLTEXT:   typo queries ${pct(ftTop.typo)}, clean ${pct(ftTop.clean)}, all ${pct(ftTop.all)}`);
   const missed = queries.filter((q, i) => q.typo && msFirst[i] !== q.target).slice(0, 5);
-  if (missed.length) say(`typo queries minisearch did not put first, e.g.: ${missed.map((q) => `“${q.q}” (wanted ${lib[q.target - 1].slug})`).join('; ')}`);
+  if (missed.length) say(`typo queries the index did not put first, e.g.: ${missed.map((q) => `“${q.q}” (wanted ${lib[q.target - 1].slug})`).join('; ')}`);
   await conn.end();
   conn = null;
 
-  // 5. HTTP: the real app in a child process, autocannon here.
+  // 5. Claim checks at 10,000 entries.
+  const claims = await benchClaimLatency(index, seq, say);
+
+  // 6. HTTP: the real app in a child process, autocannon here.
   child = fork(path.join(__dirname, 'search', 'http-server.ts'), [], { env: { ...process.env, CW_BENCH_DB: JSON.stringify(cfg) }, stdio: ['ignore', 'inherit', 'inherit', 'ipc'] });
   const port = await new Promise<number>((resolve, reject) => {
     child!.once('message', (m) => resolve((m as { port: number }).port));
     child!.once('exit', (code) => reject(new Error(`the bench app server exited with code ${code} before listening`)));
   });
   const base = `http://127.0.0.1:${port}`;
+  // The child sent its port as soon as it listened: its index is building now.
   t = performance.now();
-  const warm = await fetch(`${base}/api/search?q=${encodeURIComponent(queries[0].q)}`);
-  if (warm.status !== 200) throw new Error(`GET /api/search answered ${warm.status}: ${await warm.text()}`);
-  const warmBody = (await warm.json()) as { total: number };
-  say(`app (createApp, env production, own process) on ${base}: first /api/search answered after ${(performance.now() - t).toFixed(0)} ms (waits for the app's own index build), total ${warmBody.total}`);
+  const ask = async () => {
+    const res = await fetch(`${base}/api/search?q=${encodeURIComponent(queries[0].q)}`);
+    if (res.status !== 200) throw new Error(`GET /api/search answered ${res.status}: ${await res.text()}`);
+    return (await res.json()) as { total: number; partial?: boolean };
+  };
+  const firstBody = await ask();
+  const tFirstAnswer = performance.now() - t;
+  let complete = firstBody;
+  while (complete.partial) {
+    await new Promise((r) => setTimeout(r, 50));
+    complete = await ask();
+  }
+  const tComplete = performance.now() - t;
+  say(
+    `app (createApp, env production, own process) on ${base}: first /api/search answered after ${tFirstAnswer.toFixed(0)} ms ` +
+      `(${firstBody.partial ? `partial while the index builds: ${firstBody.total} hits so far` : `complete, total ${firstBody.total}`}); complete answers from ${tComplete.toFixed(0)} ms, total ${complete.total}`,
+  );
   const run = (opts: autocannon.Options) =>
     new Promise<autocannon.Result>((resolve, reject) => {
       cannon = autocannon(opts, (err, result) => (err ? reject(err) : resolve(result)));
@@ -324,27 +385,38 @@ async function main() {
   say(`autocannon ${CONNECTIONS} connections × ${DURATION_S} s, no compression asked (the 1,000 queries repeat, so after the first pass the app's cache of single words' hits is warm):`);
   say(line(`  /api/search?q=<the 1,000 queries in turn>`, search));
   say(line(`  /api/health (one SELECT 1)              `, health));
-  say(`  search / health: ${(search.requests.average / health.requests.average).toFixed(2)}× the requests/s, ${(search.latency.p50 / Math.max(health.latency.p50, 0.001)).toFixed(1)}× the p50 latency`);
+  const httpRatio = search.requests.average / health.requests.average;
+  say(`  search / health: ${httpRatio.toFixed(2)}× the requests/s, ${(search.latency.p50 / Math.max(health.latency.p50, 0.001)).toFixed(1)}× the p50 latency`);
 
-  // 6. The aims.
+  // 7. The aims.
   const verdict = (ok: boolean) => (ok ? 'met' : 'not met');
   const ratioOk = [ratio.p50, ratio.p95, ratio.p99].map((r) => r >= AIM_RATIO);
   console.log('');
   say('aims:');
   say(`  p95 ≤ ${AIM_P95_MS} ms in process at ${ENTRIES.toLocaleString('en-US')} entries: p95 ${ms(msP.p95)} ms — ${verdict(msP.p95 <= AIM_P95_MS)}`);
+  say(`  p99 ≤ ${AIM_P99_MS} ms in process at ${ENTRIES.toLocaleString('en-US')} entries: p99 ${ms(msP.p99)} ms — ${verdict(msP.p99 <= AIM_P99_MS)}`);
   say(
-    `  ≥ ${AIM_RATIO}× faster than FULLTEXT: ${ratio.p50.toFixed(1)}× / ${ratio.p95.toFixed(1)}× / ${ratio.p99.toFixed(1)}× at p50 / p95 / p99 — ` +
+    `  ≥ ${AIM_RATIO}× faster than FULLTEXT in the same run: ${ratio.p50.toFixed(1)}× / ${ratio.p95.toFixed(1)}× / ${ratio.p99.toFixed(1)}× at p50 / p95 / p99 — ` +
       (ratioOk.every(Boolean) ? 'met' : ratioOk.some(Boolean) ? `met at ${['p50', 'p95', 'p99'].filter((_, i) => ratioOk[i]).join(', ')} only` : 'not met'),
   );
-  say(`  ≥ ${pct(AIM_TYPO_FIRST)} of typo queries find their entry first: ${pct(msTop.typo)} — ${verdict(msTop.typo >= AIM_TYPO_FIRST)} (FULLTEXT: ${pct(ftTop.typo)})`);
+  say(`  ≥ ${pct(AIM_TYPO_FIRST)} of typo queries find their entry first: ${pct(msTop.typo)} — ${verdict(msTop.typo >= AIM_TYPO_FIRST)} (typo-free: ${pct(msTop.clean)}; FULLTEXT: ${pct(ftTop.typo)} / ${pct(ftTop.clean)})`);
+  say(`  index build ≤ ${AIM_BUILD_MS} ms for ${ENTRIES.toLocaleString('en-US')} entries (from the rows read): ${tBuild.toFixed(0)} ms — ${verdict(tBuild <= AIM_BUILD_MS)} (reading them: ${tRead.toFixed(0)} ms more)`);
+  say(`  searches answered while the index builds: first /api/search after ${tFirstAnswer.toFixed(0)} ms${firstBody.partial ? ', flagged partial' : ''} — ${verdict(tFirstAnswer <= AIM_BUILD_MS)}`);
+  say(`  /api/search ≥ ${AIM_HTTP_RATIO}× the requests/s of /api/health in the same run: ${httpRatio.toFixed(2)}× — ${verdict(httpRatio >= AIM_HTTP_RATIO)}`);
+  say(`  claim check p95 ≤ ${AIM_CLAIM_P95_MS} ms in process at ${ENTRIES.toLocaleString('en-US')} entries: whole check ${claims.check.p95.toFixed(1)} ms — ${verdict(claims.check.p95 <= AIM_CLAIM_P95_MS)} (matcher alone ${claims.matcher.p95.toFixed(1)} ms; on long texts ${claims.long.p95.toFixed(1)} ms)`);
   console.log('');
   say(`run time ${((performance.now() - t0) / 1000).toFixed(1)} s; the library above is SYNTHETIC (bench/search/synthetic.ts), in a throwaway database removed as this run ends`);
 }
 
-main()
-  .catch((e) => {
-    if (interrupted) return; // the work under way failed because cleanup closed what it used
-    console.error(e);
-    process.exitCode = 1;
-  })
-  .finally(() => cleanup());
+/** The whole bench (also part of `npm run bench`, bench/run.ts); cleans up whatever happens. */
+export function runSearchBench(): Promise<void> {
+  return main()
+    .catch((e) => {
+      if (interrupted) return; // the work under way failed because cleanup closed what it used
+      console.error(e);
+      process.exitCode = 1;
+    })
+    .finally(() => cleanup());
+}
+
+if (require.main === module) void runSearchBench();

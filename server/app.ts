@@ -86,6 +86,8 @@ export interface AppOptions {
    * (ms), so that entries published through another app server are found; 0 never. Default 5000.
    */
   searchRefreshMs?: number;
+  /** Searches wait for a first index build of at most this many entries; a larger one answers at once, flagged partial (SearchIndexOptions.waitBelow). */
+  searchWaitBelow?: number;
   /** Where attachments are kept (server/storage); default from the environment (STORAGE, …): .data/uploads. */
   store?: ObjectStore;
   /** How long new submissions are gathered before the moderators' digest mail goes out (ms). Default 60 000. */
@@ -189,7 +191,7 @@ export function createApp(opts: AppOptions): express.Express {
   };
   Object.assign(app.locals, locals);
   const origin = (req: express.Request) => opts.publicUrl ?? `${req.protocol}://${req.get('host')}`;
-  const search = new SearchIndex({ refreshMs: opts.searchRefreshMs ?? 5000, logger });
+  const search = new SearchIndex({ refreshMs: opts.searchRefreshMs ?? 5000, logger, waitBelow: opts.searchWaitBelow });
   search.start();
   // Mail that follows a committed change goes after the answer (server/mail/after-commit.ts).
   const mail = mailAfterCommit({ mailer, later });

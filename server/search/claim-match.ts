@@ -299,7 +299,12 @@ interface Prepared {
   candidates: ClaimCandidate[];
 }
 
-function prepare(index: SearchIndex, text: string, opts: MatchClaimOptions): Prepared {
+/**
+ * The text's query terms and the index's hits for them, unranked, with each hit's score (class
+ * boost included) and, on demand, the candidate judged (its matches worked out).
+ * `candidatesOnly`: leave out hits that cannot reach MIN_SCORE even with the class boost.
+ */
+function search(index: SearchIndex, text: string, opts: MatchClaimOptions, candidatesOnly: boolean) {
   const words = claimTerms(text);
   const concepts = claimConcepts(index, text, words.length);
   let terms: QueryTerm[] = [...words, ...concepts];
@@ -315,37 +320,48 @@ function prepare(index: SearchIndex, text: string, opts: MatchClaimOptions): Pre
   }
   // A concept term no entry holds cannot match.
   terms = terms.filter((q) => !isConceptTerm(q.term) || weight.get(q.term)! > 0);
-  if (!terms.length) return { terms, candidates: [] };
   const conceptOf = new Map(concepts.map((c) => [c.term, c]));
   const signalled = new Set<string>();
   for (const c of opts.classes ?? []) if (index.classes.has(c)) for (const s of index.classAndChildren(c)) signalled.add(s);
 
-  const hits = index.searchTerms(
+  const found = index.searchTermsLazily(
     terms.map((q) => q.term),
     {
       prefix: prefixOk ? (t) => t.length >= PREFIX_MIN && !isConceptTerm(t) : false,
-      fuzzy: false,
       // A term no entry holds exactly can still match as a prefix: weigh it as one only one entry holds.
       boostTerm: (t) => weight.get(t) || 1,
+      // A hit below MIN_SCORE, even with the class boost, cannot pass: its matches are never worked out.
+      atLeast: candidatesOnly ? (MIN_SCORE / (signalled.size ? 1 + CLASS_BOOST : 1)) * 0.999 : undefined,
     },
   );
-  const candidates = hits.map((hit): ClaimCandidate => {
-    const raw = hit.score / Math.max(1, hit.queryTerms.length);
-    const classSignalled = hit.entry.mechanismClass !== null && signalled.has(hit.entry.mechanismClass);
-    const strong = strongEvidence(index, hit, conceptOf);
-    const needed = strongNeeded(words.length, classSignalled);
-    return {
-      hit,
-      raw,
-      score: classSignalled ? raw * (1 + CLASS_BOOST) : raw,
-      strong,
-      needed,
-      classSignalled,
-      passes: (classSignalled ? raw * (1 + CLASS_BOOST) : raw) >= MIN_SCORE && strong.count >= needed.count && strong.weight >= needed.weight,
-    };
-  });
+  const isSignalled = (i: number) => {
+    const cls = found.entry(i).mechanismClass;
+    return cls !== null && signalled.has(cls);
+  };
+  const raw = (i: number) => found.score(i) / Math.max(1, found.matched(i));
+  return {
+    terms,
+    length: found.length,
+    entry: (i: number) => found.entry(i),
+    /** The score hits are ranked by (raw, times the class boost where it applies). */
+    score: (i: number) => (isSignalled(i) ? raw(i) * (1 + CLASS_BOOST) : raw(i)),
+    candidate: (i: number): ClaimCandidate => {
+      const hit = found.hit(i);
+      const r = hit.score / Math.max(1, hit.queryTerms.length);
+      const classSignalled = isSignalled(i);
+      const strong = strongEvidence(index, hit, conceptOf);
+      const needed = strongNeeded(words.length, classSignalled);
+      const score = classSignalled ? r * (1 + CLASS_BOOST) : r;
+      return { hit, raw: r, score, strong, needed, classSignalled, passes: score >= MIN_SCORE && strong.count >= needed.count && strong.weight >= needed.weight };
+    },
+  };
+}
+
+function prepare(index: SearchIndex, text: string, opts: MatchClaimOptions): Prepared {
+  const found = search(index, text, opts, false);
+  const candidates = Array.from({ length: found.length }, (_, i) => found.candidate(i));
   candidates.sort((a, b) => b.score - a.score || a.hit.entry.slug.localeCompare(b.hit.entry.slug));
-  return { terms, candidates };
+  return { terms: found.terms, candidates };
 }
 
 /** Every entry the text's terms reach, best first, with the evidence matchClaim judges (for diagnostics and tests). */
@@ -353,12 +369,26 @@ export function claimCandidates(index: SearchIndex, text: string, opts: MatchCla
   return prepare(index, text, opts).candidates;
 }
 
-/** The entries the text describes, best first, weak hits left out. */
+/**
+ * The entries the text describes, best first, weak hits left out. Hits are judged best first and
+ * only until `limit` have passed or the scores fall below the relative floor: the many weak hits
+ * of a long text are never worked out (the outcome is claimCandidates' passing ones, floored and cut).
+ */
 export function matchClaim(index: SearchIndex, text: string, opts: MatchClaimOptions = {}): ClaimHit[] {
   const limit = opts.limit ?? 5;
   if (limit <= 0) return [];
-  const { terms, candidates } = prepare(index, text, opts);
-  const scored = candidates.filter((c) => c.passes);
+  const found = search(index, text, opts, true);
+  const terms = found.terms;
+  // Best first, ties by slug, as claimCandidates ranks them; each score worked out once.
+  const scores = Array.from({ length: found.length }, (_, i) => found.score(i));
+  const order = scores.map((_, i) => i).filter((i) => scores[i] >= MIN_SCORE * 0.999);
+  order.sort((a, b) => scores[b] - scores[a] || found.entry(a).slug.localeCompare(found.entry(b).slug));
+  const scored: ClaimCandidate[] = [];
+  for (const i of order) {
+    if (scored.length >= limit || (scored.length && scores[i] < scored[0].score * RELATIVE_FLOOR)) break;
+    const c = found.candidate(i);
+    if (c.passes) scored.push(c);
+  }
   if (!scored.length) return [];
   const floor = scored[0].score * RELATIVE_FLOOR;
   return scored

@@ -1,5 +1,5 @@
 /**
- * The full-text index (issue 6): minisearch over the current published version of every entry
+ * The full-text index (issue 6): the current published version of every entry
  * that is not retired. Built from MariaDB at app start, updated at once when this server publishes
  * or retires an entry, and rebuilt whenever the change watermark in the database (published
  * versions, retired entries, the newest entries.updated_at, the sightings linked to entries, the
@@ -13,10 +13,15 @@
  *  - the trade's synonym groups (server/search/synonyms.ts): every field also holds a concept
  *    term for each group phrase found in it. A change of the groups rebuilds the index.
  * Builds and updates run one at a time, so that a slow rebuild cannot overwrite a newer update.
+ *
+ * Issue 16: scored by our own engine (engine.ts: minisearch's BM25+ figures over flat posting
+ * lists and typed-array accumulators, fuzzy expansion bounded); a build works in slices that
+ * yield to the event loop, so the server answers while it builds: a rebuild from the old index,
+ * the first build from the entries indexed so far, flagged `partial` (see search()).
  */
-import MiniSearch, { type SearchResult } from 'minisearch';
 import type { Logger } from 'pino';
-import { findEntryId, loadEntries, loadSynonyms, readWatermark, type LoadedEntry } from './load';
+import { Engine, FUZZY_WEIGHT, type RawResults } from './engine';
+import { findEntryId, loadEntries, loadPublishedIds, loadSynonyms, readWatermark, type LoadedEntry } from './load';
 import { fold, normaliseTerm } from './normalise';
 import { isConceptTerm, SynonymSet, tokensOf } from './synonyms';
 import type { IndexedEntry, SearchDoc, SearchHit, TermsHit, TermsSearchOptions } from './types';
@@ -24,6 +29,11 @@ import type { IndexedEntry, SearchDoc, SearchHit, TermsHit, TermsSearchOptions }
 export { excerpt } from './excerpt';
 export { SIGHTINGS_PER_ENTRY } from './load';
 export type { IndexedEntry, SearchDoc, SearchHit, TermsHit, TermsSearchOptions } from './types';
+
+/** Entries added to the index between two yields to the event loop while it builds. */
+const BUILD_SLICE = 250;
+/** Entries read from the database at a time by the first build (each slice is searchable at once). */
+const READ_PAGE = 1000;
 
 /**
  * The indexed fields. The long sections are one field, `body`, and class and laws another: each
@@ -56,43 +66,126 @@ function docTokens(text: string, synonyms: SynonymSet): string[] {
 /** Concept terms pass as they are; words are normalised. */
 const processDocTerm = (t: string) => (isConceptTerm(t) ? t : normaliseTerm(t));
 
-const newMiniSearch = (synonyms: SynonymSet) =>
-  new MiniSearch<SearchDoc>({
-    fields: [...FIELDS],
-    // The id stays a number (results are looked up by it).
-    extractField: (doc, field) => (field === 'id' ? (doc.id as unknown as string) : fieldText(doc, field as Field)),
-    storeFields: [],
-    tokenize: (text) => docTokens(text, synonyms),
-    processTerm: processDocTerm,
-    searchOptions: { boost: BOOST, prefix: true, fuzzy: 0.2, processTerm: normaliseTerm, combineWith: 'OR' },
+/** A document's fields as the engine takes them: tokens as split (a field's length is their distinct count) and the terms they give. */
+function docFields(doc: SearchDoc, synonyms: SynonymSet): { tokens: string[]; terms: (string | null)[] }[] {
+  return FIELDS.map((field) => {
+    const tokens = docTokens(fieldText(doc, field), synonyms);
+    return { tokens, terms: tokens.map(processDocTerm) };
   });
-
-export interface SearchIndexOptions {
-  /** How often the watermark is checked (ms); 0 never. */
-  refreshMs: number;
-  logger?: Logger;
 }
 
-export class SearchIndex {
-  private syn = new SynonymSet();
-  private ms = newMiniSearch(this.syn);
-  private docs = new Map<number, SearchDoc>();
-  private entries = new Map<number, IndexedEntry>();
-  /** Law slug → name; mechanism slug → { name, parent slug }. */
-  laws = new Map<string, string>();
-  classes = new Map<string, { name: string; parent: string | null }>();
+/** Everything one build of the index holds; a rebuild makes a new one and swaps it in when done. */
+class IndexState {
+  readonly engine = new Engine(FIELDS.map((f) => BOOST[f]));
+  readonly docs = new Map<number, SearchDoc>();
+  readonly entries = new Map<number, IndexedEntry>();
+  /** Internal number of the engine → entry. */
+  readonly byNumber: (IndexedEntry | undefined)[] = [];
+  /** Internal number → each field's distinct terms (to tell which terms a claim's hit matched where). */
+  readonly fieldTerms: (string[][] | undefined)[] = [];
   /** Normalised term → number of indexed entries that hold it in any field. */
-  private df = new Map<string, number>();
+  readonly df = new Map<string, number>();
   /**
    * The one- and two-letter terms a query may search for: the words of the synonym groups' phrases
    * ("RF", the "Q" of "loaded Q") and the abbreviations the entries write in capitals ("EM", "DC").
    * Any other short word of a query is a stray fragment and is left out.
    */
-  private shortTerms = new Set<string>();
+  readonly shortTerms: Set<string>;
   /** Scored hits of single words (see query()); emptied whenever the index changes. */
-  private wordCache = new Map<string, Map<number, WordHit>>();
-  /** Hits held in the word cache in all (bounds its memory: about 100 bytes a hit). */
-  private wordCacheHits = 0;
+  readonly wordCache = new Map<string, WordHits>();
+  /** Hits held in the word cache in all (bounds its memory). */
+  wordCacheHits = 0;
+  /** Every entry, newest first (the answer to a blank query), made when first asked for. */
+  newest: IndexedEntry[] | null = null;
+  /** Index term → the word an entry writes for it, per entry (readerWords), made when first asked for. */
+  readonly forms = new Map<number, Map<string, string>>();
+
+  constructor(readonly syn: SynonymSet) {
+    this.shortTerms = shortTermsOf(syn);
+  }
+
+  add({ doc, entry }: LoadedEntry): void {
+    const fields = docFields(doc, this.syn);
+    const distinct = this.engine.add(doc.id, fields);
+    countTerms(this.df, distinct, 1);
+    addShortTerms(this.shortTerms, doc);
+    this.docs.set(doc.id, doc);
+    this.entries.set(entry.id, entry);
+    this.byNumber.push(entry);
+    this.fieldTerms.push(distinct);
+    this.changed();
+  }
+
+  remove(id: number): void {
+    const doc = this.docs.get(id);
+    if (!doc) return;
+    const fields = docFields(doc, this.syn);
+    // Internal numbers are never reused: the removed one maps to nothing.
+    const n = this.engine.numberOf(id);
+    if (n !== undefined) {
+      this.byNumber[n] = undefined;
+      this.fieldTerms[n] = undefined;
+    }
+    this.engine.remove(id, fields);
+    countTerms(
+      this.df,
+      fields.map((f) => f.terms.filter((t): t is string => t !== null)),
+      -1,
+    );
+    this.docs.delete(id);
+    this.entries.delete(id);
+    this.changed();
+  }
+
+  private changed(): void {
+    this.wordCache.clear();
+    this.wordCacheHits = 0;
+    this.newest = null;
+    this.forms.clear();
+  }
+}
+
+export interface SearchIndexOptions {
+  /** How often the watermark is checked (ms); 0 never. */
+  refreshMs: number;
+  logger?: Logger;
+  /**
+   * Searches wait for a first build of at most this many entries (a moment's work: their answer
+   * is then complete); a larger library is searched at once, its answer covering the entries
+   * indexed so far and flagged partial (default WAIT_BELOW; 0 never waits).
+   */
+  waitBelow?: number;
+}
+
+/** Default of SearchIndexOptions.waitBelow: a first build of this many entries takes a few tenths of a second. */
+export const WAIT_BELOW = 1000;
+
+/** What GET /api/search asks of the index (SearchIndex.search). */
+export interface SearchRequest {
+  q: string;
+  /** Only entries that break this law. */
+  law?: string;
+  /** Only entries of this class or below it. */
+  mechanism?: string;
+  offset: number;
+  limit: number;
+}
+
+export interface SearchPage {
+  total: number;
+  /** The hits from offset, at most limit, ranked. */
+  hits: SearchHit[];
+  /** Counts over the hits of q, each ignoring its own filter; a class counts the classes below it too. */
+  facets: { laws: Record<string, number>; mechanisms: Record<string, number> };
+  /** True while the first build after a start is under way: the hits are those of the entries indexed so far. */
+  partial: boolean;
+}
+
+export class SearchIndex {
+  private state = new IndexState(new SynonymSet());
+  /** Law slug → name; mechanism slug → { name, parent slug }. */
+  laws = new Map<string, string>();
+  classes = new Map<string, { name: string; parent: string | null }>();
   private watermark = '';
   private building: Promise<void> | null = null;
   private built = false;
@@ -101,7 +194,29 @@ export class SearchIndex {
   /** The build or update under way: the next one waits for it. */
   private queue: Promise<unknown> = Promise.resolve();
 
-  constructor(private readonly opts: SearchIndexOptions) {}
+  /** Entries the first build reads (null until it knows). */
+  private expected: number | null = null;
+  /** Resolves when the first build knows how many entries it reads (or has failed). */
+  private sized: Promise<void>;
+  private onSized: () => void = () => {};
+
+  constructor(private readonly opts: SearchIndexOptions) {
+    this.sized = new Promise((resolve) => (this.onSized = resolve));
+  }
+
+  /**
+   * What a search waits for before it reads the index: nothing once it is built, or while a
+   * large first build is under way (the answer is partial, see search()); else the first build.
+   */
+  async searchable(): Promise<void> {
+    const limit = this.opts.waitBelow ?? WAIT_BELOW;
+    if (this.built || limit <= 0) return;
+    const small = () => this.expected === null || this.expected <= limit;
+    if (!small()) return;
+    const build = this.ready();
+    await Promise.race([build, this.sized]);
+    if (!this.built && small()) await build;
+  }
 
   /** Starts the first build and the refresh timer. */
   start(): void {
@@ -123,8 +238,13 @@ export class SearchIndex {
   /** Resolves once the index has been built (a failed build is tried again on the next call). */
   async ready(): Promise<void> {
     if (this.built) return;
-    this.building ??= this.rebuild().finally(() => (this.building = null));
+    this.building ??= this.serial(() => this.firstBuild()).finally(() => (this.building = null));
     await this.building;
+  }
+
+  /** Whether the first build has finished (until then searches answer from the entries indexed so far). */
+  get isReady(): boolean {
+    return this.built;
   }
 
   private tickP: Promise<void> | null = null;
@@ -136,7 +256,7 @@ export class SearchIndex {
   }
 
   private async refresh(): Promise<void> {
-    if (this.ticking) return;
+    if (this.ticking || !this.built) return;
     this.ticking = true;
     try {
       const mark = await readWatermark();
@@ -150,7 +270,7 @@ export class SearchIndex {
 
   /** The synonym groups as the index uses them. */
   get synonyms(): SynonymSet {
-    return this.syn;
+    return this.state.syn;
   }
 
   /** Reads entries (all, or those with these ids) that are published; keeps the taxonomy's names. */
@@ -168,7 +288,34 @@ export class SearchIndex {
     return run;
   }
 
-  /** Builds the whole index again from the database (also after a change of the synonym groups). */
+  /**
+   * The first build: entries read a page at a time and added to the live index in slices, so
+   * that searches meanwhile answer from what is indexed so far (flagged partial).
+   */
+  private async firstBuild(): Promise<void> {
+    if (this.built) return;
+    const mark = await readWatermark();
+    const syn = await loadSynonyms();
+    const state = new IndexState(syn);
+    this.state = state;
+    let ids: number[];
+    try {
+      ids = await loadPublishedIds();
+    } finally {
+      // A failed read lets waiting searches go on to ready(), which fails them or tries again.
+      this.onSized();
+    }
+    this.expected = ids.length;
+    for (let i = 0; i < ids.length; i += READ_PAGE) {
+      const loaded = await this.load(ids.slice(i, i + READ_PAGE));
+      await addInSlices(state, loaded);
+    }
+    if (!ids.length) await this.load([]);
+    this.watermark = mark;
+    this.built = true;
+  }
+
+  /** Builds the whole index again from the database (also after a change of the synonym groups); the old one answers meanwhile. */
   rebuild(): Promise<void> {
     return this.serial(() => this.doRebuild());
   }
@@ -177,22 +324,22 @@ export class SearchIndex {
     const mark = await readWatermark();
     const syn = await loadSynonyms();
     const loaded = await this.load();
-    const ms = newMiniSearch(syn);
-    ms.addAll(loaded.map((l) => l.doc));
-    const df = new Map<string, number>();
-    const short = shortTermsOf(syn);
-    for (const l of loaded) {
-      countTerms(df, l.doc, 1, syn);
-      addShortTerms(short, l.doc);
-    }
-    this.syn = syn;
-    this.ms = ms;
-    this.df = df;
-    this.shortTerms = short;
-    this.clearWordCache();
-    this.docs = new Map(loaded.map((l) => [l.doc.id, l.doc]));
-    this.entries = new Map(loaded.map((l) => [l.entry.id, l.entry]));
+    const state = new IndexState(syn);
+    await addInSlices(state, loaded);
+    this.state = state;
     this.watermark = mark;
+    this.built = true;
+  }
+
+  /** Builds the index at once from entries already read (for benches: the build without the database). */
+  install(loaded: LoadedEntry[], syn: SynonymSet, names?: { laws: Map<string, string>; classes: Map<string, { name: string; parent: string | null }> }): void {
+    const state = new IndexState(syn);
+    for (const l of loaded) state.add(l);
+    if (names) {
+      this.laws = names.laws;
+      this.classes = names.classes;
+    }
+    this.state = state;
     this.built = true;
   }
 
@@ -206,22 +353,9 @@ export class SearchIndex {
     const id = await findEntryId(slug);
     if (id === undefined) return;
     const loaded = await this.load([id]);
-    const old = this.docs.get(id);
-    if (old) {
-      this.ms.remove(old);
-      countTerms(this.df, old, -1, this.syn);
-      this.clearWordCache();
-      this.docs.delete(id);
-      this.entries.delete(id);
-    }
-    for (const { doc, entry } of loaded) {
-      this.ms.add(doc);
-      countTerms(this.df, doc, 1, this.syn);
-      addShortTerms(this.shortTerms, doc);
-      this.clearWordCache();
-      this.docs.set(doc.id, doc);
-      this.entries.set(entry.id, entry);
-    }
+    const state = this.state;
+    state.remove(id);
+    for (const l of loaded) state.add(l);
   }
 
   /** The class and every class below it. */
@@ -256,59 +390,132 @@ export class SearchIndex {
     for (const typed of tokenize(q)) {
       const term = normaliseTerm(typed);
       if (!term) continue;
-      if (term.length < MIN_WORD && !this.shortTerms.has(term)) continue;
+      if (term.length < MIN_WORD && !this.state.shortTerms.has(term)) continue;
       out.push({ typed, term });
     }
     return out;
   }
 
   /**
-   * Ranked hits for q (all entries, newest first, when q is blank; none when q holds no word the
-   * index searches for, see queryWords). Every word must match
-   * (AND), falling back to any word (OR) when that finds nothing. Only the last word matches as a
-   * prefix (it is the one still being typed), and only a word that is not in the index's vocabulary
-   * is matched fuzzily, within an edit distance of about a third of its length (at most 2), so that
-   * a swapped or dropped letter is forgiven and a correct word does not fan out over its neighbours.
+   * The hits of q, unranked: each entry's internal number, score and (through the word lists) its
+   * matched terms; null for a blank query (every entry). Every word must match (AND), falling
+   * back to any word (OR) when that finds nothing. Only the last word matches as a prefix (it is
+   * the one still being typed), and only a word that is not in the index's vocabulary is matched
+   * fuzzily, within an edit distance of about a third of its length (at most 2), so that a swapped
+   * or dropped letter is forgiven and a correct word does not fan out over its neighbours.
    *
-   * Each word is searched on its own and its scored hits are kept in a small cache (most of a
-   * query's time is scoring a common word's long posting list, and common words recur from query
-   * to query); the words' hits are then intersected from the shortest list, their scores summed
-   * and multiplied by the number of words matched, as minisearch itself combines them.
+   * Each word is searched on its own and its scored hits are kept in a small cache (common words
+   * recur from query to query); the words' hits are then intersected from the shortest list,
+   * their scores summed and multiplied by the number of words matched.
    */
-  query(q: string): SearchHit[] {
-    if (!/[\p{L}\p{N}]/u.test(q)) {
-      return [...this.entries.values()].sort((a, b) => b.publishedAt - a.publishedAt || b.id - a.id).map((entry) => ({ entry, score: 0, terms: [] }));
-    }
+  private hits(q: string): { numbers: number[]; scores: number[]; lists: WordHits[] } | null {
+    if (!/[\p{L}\p{N}]/u.test(q)) return null;
     // Split as the index splits ("zero-point" is two words), then normalised as the index normalises.
     const words = this.queryWords(q);
-    if (!words.length) return [];
+    if (!words.length) return { numbers: [], scores: [], lists: [] };
     const lists = words.map((w, i) => this.wordHits(w.term, i === words.length - 1, w.typed));
-    const combine = (ids: Iterable<number>, need: number) => {
-      const out: SearchHit[] = [];
-      for (const id of ids) {
+    const combine = (candidates: Iterable<number>, need: number) => {
+      const numbers: number[] = [];
+      const scores: number[] = [];
+      for (const n of candidates) {
         let score = 0;
         let matched = 0;
-        const terms = new Set<string>();
         for (const list of lists) {
-          const hit = list.get(id);
-          if (!hit) continue;
-          score += hit.score;
+          const at = list.find(n);
+          if (at < 0) continue;
+          score += list.scores[at];
           matched += 1;
-          for (const t of hit.terms) terms.add(t);
         }
-        const entry = this.entries.get(id);
-        if (matched >= need && entry) out.push({ entry, score: score * matched, terms: [...terms] });
+        if (matched >= need && this.state.byNumber[n]) {
+          numbers.push(n);
+          scores.push(score * matched);
+        }
       }
-      return out.sort((a, b) => b.score - a.score || a.entry.id - b.entry.id);
+      return { numbers, scores, lists };
     };
-    const shortest = lists.reduce((a, b) => (b.size < a.size ? b : a));
-    const all = combine(shortest.keys(), lists.length);
-    if (all.length) return all;
+    const shortest = lists.reduce((a, b) => (b.numbers.length < a.numbers.length ? b : a));
+    const all = combine(shortest.numbers, lists.length);
+    if (all.numbers.length) return all;
     // Any word, but only an entry that holds one of them as typed (or as the start of a word): a
     // word reached only through a typing error does not carry a hit alone ("hello world" → "would").
     const any = new Set<number>();
-    for (const list of lists) for (const [id, hit] of list) if (!hit.fuzzy) any.add(id);
-    return combine(any, 1);
+    for (const list of lists) for (let i = 0; i < list.numbers.length; i++) if (!list.fuzzy[i]) any.add(list.numbers[i]);
+    return combine([...any].sort((a, b) => a - b), 1);
+  }
+
+  /** The hit of internal number n with its matched terms (the union over the words' lists). */
+  private hitOf(n: number, score: number, lists: WordHits[]): SearchHit {
+    const terms: string[] = [];
+    for (const list of lists) {
+      const at = list.find(n);
+      if (at < 0) continue;
+      for (const t of list.terms[at]) if (!terms.includes(t)) terms.push(t);
+    }
+    return { entry: this.state.byNumber[n]!, score, terms };
+  }
+
+  /** Every entry, newest first (a blank query). */
+  private newestEntries(): IndexedEntry[] {
+    const state = this.state;
+    return (state.newest ??= [...state.entries.values()].sort((a, b) => b.publishedAt - a.publishedAt || b.id - a.id));
+  }
+
+  private newest(): SearchHit[] {
+    return this.newestEntries().map((entry) => ({ entry, score: 0, terms: [] }));
+  }
+
+  /** Ranked hits for q (all entries, newest first, when q is blank; none when q holds no word the index searches for, see queryWords). */
+  query(q: string): SearchHit[] {
+    const found = this.hits(q);
+    if (!found) return this.newest();
+    const order = found.numbers.map((_, i) => i);
+    const byNumber = this.state.byNumber;
+    order.sort((a, b) => found.scores[b] - found.scores[a] || byNumber[found.numbers[a]]!.id - byNumber[found.numbers[b]]!.id);
+    return order.map((i) => this.hitOf(found.numbers[i], found.scores[i], found.lists));
+  }
+
+  /**
+   * What GET /api/search answers: the number of hits of q under the filters, one page of them
+   * ranked (only the page is sorted and given its terms), and the facet counts, each ignoring its
+   * own filter (a class counts the entries of the classes below it too, as choosing it lists them).
+   */
+  search(req: SearchRequest): SearchPage {
+    const found = this.hits(req.q);
+    const byNumber = this.state.byNumber;
+    const blank = found ? null : this.newestEntries();
+    const count = found ? found.numbers.length : blank!.length;
+    const entryAt = (i: number) => (found ? byNumber[found.numbers[i]]! : blank![i]);
+    const classes = req.mechanism ? this.classAndChildren(req.mechanism) : null;
+    const laws: Record<string, number> = {};
+    const mechanisms: Record<string, number> = {};
+    const lineage = new Map<string, string[]>();
+    const kept: number[] = [];
+    for (let i = 0; i < count; i++) {
+      const e = entryAt(i);
+      const byLaw = !req.law || e.laws.includes(req.law);
+      const byClass = !classes || (e.mechanismClass !== null && classes.has(e.mechanismClass));
+      if (byClass) for (const l of e.laws) laws[l] = (laws[l] ?? 0) + 1;
+      const cls = e.mechanismClass;
+      if (byLaw && cls) {
+        let up = lineage.get(cls);
+        if (!up) lineage.set(cls, (up = this.classAndAncestors(cls)));
+        for (const c of up) mechanisms[c] = (mechanisms[c] ?? 0) + 1;
+      }
+      if (byLaw && byClass) kept.push(i);
+    }
+    const end = req.offset + req.limit;
+    let hits: SearchHit[];
+    if (!found) {
+      // Blank query: already newest first.
+      hits = kept.slice(req.offset, end).map((i) => ({ entry: blank![i], score: 0, terms: [] }));
+    } else {
+      // Best first, ties by id; only the first `end` are needed, and only the page gets its terms.
+      const better = (a: number, b: number) => found.scores[b] - found.scores[a] || byNumber[found.numbers[a]]!.id - byNumber[found.numbers[b]]!.id;
+      hits = topK(kept, end, better)
+        .slice(req.offset, end)
+        .map((i) => this.hitOf(found.numbers[i], found.scores[i], found.lists));
+    }
+    return { total: kept.length, hits, facets: { laws, mechanisms }, partial: !this.built };
   }
 
   /**
@@ -322,8 +529,8 @@ export class SearchIndex {
     const typed = new Map<string, string>();
     for (const { typed: word, term } of this.queryWords(q)) if (!typed.has(term)) typed.set(term, word);
     const terms = hit.terms.filter((t) => !isConceptTerm(t));
-    const rest = new Set(terms.filter((t) => !typed.has(t)));
-    const forms = rest.size ? this.writtenForms(hit.entry.id, rest) : new Map<string, string>();
+    const rest = terms.filter((t) => !typed.has(t));
+    const forms = rest.length ? this.writtenForms(hit.entry.id, rest) : new Map<string, string>();
     const out: string[] = [];
     for (const t of terms) {
       const word = typed.get(t) ?? forms.get(t) ?? t;
@@ -335,108 +542,306 @@ export class SearchIndex {
   /**
    * Index term → the word the entry writes for it: written in lower case if it ever is; else as
    * written inside a sentence ("Carnot", "RF"); else, when only ever at the start of a sentence,
-   * a title or a name ("Overbalanced wheel"), in lower case.
+   * a title or a name ("Overbalanced wheel"), in lower case. Each entry's forms are worked out
+   * once, for all its terms, and kept until the index changes (a bounded number of entries).
    */
-  private writtenForms(id: number, terms: Set<string>): Map<string, string> {
-    const doc = this.docs.get(id);
-    const found = new Map<string, { word: string; rank: number }>();
-    if (!doc) return new Map();
-    let settled = 0;
-    for (const field of FIELDS) {
-      const text = fieldText(doc, field);
-      for (const { token, at } of tokensOf(text)) {
-        const t = normaliseTerm(token);
-        if (!t || !terms.has(t)) continue;
-        const had = found.get(t);
-        if (had?.rank === 0) continue;
-        const lower = token.toLowerCase();
-        // 0: in lower case; 1: capitals inside a sentence; 2: a capital at a sentence's start.
-        const rank = token === lower ? 0 : /^\p{Lu}\p{Ll}*$/u.test(token) && SENTENCE_START.test(text.slice(Math.max(0, at - 3), at)) ? 2 : 1;
-        if (!had || rank < had.rank) found.set(t, { word: rank === 2 ? lower : token, rank });
-        if (rank === 0) settled += 1;
+  private writtenForms(id: number, terms: string[]): Map<string, string> {
+    const state = this.state;
+    let forms = state.forms.get(id);
+    if (!forms) {
+      const doc = state.docs.get(id);
+      if (!doc) return new Map();
+      const found = new Map<string, { word: string; rank: number }>();
+      for (const field of FIELDS) {
+        const text = fieldText(doc, field);
+        for (const { token, at } of tokensOf(text)) {
+          const t = normaliseTerm(token);
+          if (!t) continue;
+          const had = found.get(t);
+          if (had?.rank === 0) continue;
+          const lower = token.toLowerCase();
+          // 0: in lower case; 1: capitals inside a sentence; 2: a capital at a sentence's start.
+          const rank = token === lower ? 0 : /^\p{Lu}\p{Ll}*$/u.test(token) && SENTENCE_START.test(text.slice(Math.max(0, at - 3), at)) ? 2 : 1;
+          if (!had || rank < had.rank) found.set(t, { word: rank === 2 ? lower : token, rank });
+        }
       }
-      if (settled === terms.size) break;
+      forms = new Map([...found].map(([t, f]) => [t, f.word]));
+      if (state.forms.size >= FORMS_CACHE_SIZE) state.forms.delete(state.forms.keys().next().value!);
+      state.forms.set(id, forms);
     }
-    return new Map([...found].map(([t, f]) => [t, f.word]));
-  }
-
-  private clearWordCache(): void {
-    this.wordCache.clear();
-    this.wordCacheHits = 0;
+    return new Map(terms.filter((t) => forms.has(t)).map((t) => [t, forms.get(t)!]));
   }
 
   /**
-   * One word's scored hits (id → score and the index terms it matched), through the cache. A term
-   * reached through a typing error must begin with the word's first letter (people seldom mistype
-   * it, and "lorem" → "more" is no slip); an entry that only such terms reached is a fuzzy hit.
+   * One word's scored hits (entries, scores and the index terms it matched), through the cache. A
+   * term reached through a typing error must begin with the word's first letter (people seldom
+   * mistype it, and "lorem" → "more" is no slip); an entry that only such terms reached is a
+   * fuzzy hit.
    */
-  private wordHits(word: string, last: boolean, typed: string = word): Map<number, WordHit> {
+  private wordHits(word: string, last: boolean, typed: string = word): WordHits {
+    const state = this.state;
     // A word of one or two letters (a known short term) matches only itself: as a prefix it would fan out.
     const prefix = last && word.length >= MIN_WORD;
+    const known = state.df.has(word);
     // A word the index lacks is also tried with letters swapped, which depends on how it was typed.
-    const key = `${prefix ? 'prefix' : 'exact'}:${word}${this.df.has(word) ? '' : `:${fold(typed)}`}`;
-    const cached = this.wordCache.get(key);
+    const key = `${prefix ? 'prefix' : 'exact'}:${word}${known ? '' : `:${fold(typed)}`}`;
+    const cached = state.wordCache.get(key);
     if (cached) {
-      this.wordCache.delete(key); // most recently used last
-      this.wordCache.set(key, cached);
+      state.wordCache.delete(key); // most recently used last
+      state.wordCache.set(key, cached);
       return cached;
     }
-    const known = this.df.has(word);
-    const fuzzy = known ? false : fuzzyDistance(word);
-    const hits = new Map<number, WordHit>();
+    const fuzzy = known ? 0 : fuzzyDistance(word);
     const direct = (t: string) => t === word || (prefix && t.startsWith(word));
-    for (const r of this.ms.search(word, { tokenize: (t) => [t], processTerm: (t) => t, prefix, fuzzy, combineWith: 'OR' })) {
-      const terms = fuzzy ? r.terms.filter((t) => direct(t) || t[0] === word[0]) : r.terms;
-      if (terms.length) hits.set(r.id as number, { score: r.score, terms, fuzzy: !terms.some(direct) });
+    const r = state.engine.search([{ term: word, prefix, fuzzy, boost: 1 }], { events: prefix || fuzzy > 0 });
+    const termsOf = termLists(r);
+    const swaps = !known && word.length >= 4;
+    let hits: WordHits;
+    if (!swaps) {
+      // Straight from the engine's arrays, put in ascending order of internal number.
+      hits = wordHitsFrom(r, termsOf, direct);
+    } else {
+      hits = this.withSwaps(r, termsOf, direct, word, typed);
     }
-    // Two letters typed the wrong way round are one slip, not the two edits minisearch counts.
-    if (!known && word.length >= 4) {
-      const weight = FUZZY_WEIGHT * (word.length / (word.length + 1));
-      for (const variant of swapped(typed)) {
-        if (variant === word || !this.df.has(variant)) continue;
-        for (const r of this.ms.search(variant, { tokenize: (t) => [t], processTerm: (t) => t, prefix: false, fuzzy: false })) {
-          const id = r.id as number;
-          const had = hits.get(id);
-          const terms = had ? [...new Set([...had.terms, ...r.terms])] : r.terms;
-          hits.set(id, { score: (had?.score ?? 0) + r.score * weight, terms, fuzzy: had ? had.fuzzy : true });
-        }
-      }
-    }
-    this.wordCache.set(key, hits);
-    this.wordCacheHits += hits.size;
-    while (this.wordCache.size > WORD_CACHE_SIZE || this.wordCacheHits > WORD_CACHE_HITS) {
-      const [oldest, dropped] = this.wordCache.entries().next().value!;
-      this.wordCache.delete(oldest);
-      this.wordCacheHits -= dropped.size;
+    state.wordCache.set(key, hits);
+    state.wordCacheHits += hits.numbers.length;
+    while (state.wordCache.size > WORD_CACHE_SIZE || state.wordCacheHits > WORD_CACHE_HITS) {
+      const [oldest, dropped] = state.wordCache.entries().next().value!;
+      state.wordCache.delete(oldest);
+      state.wordCacheHits -= dropped.numbers.length;
     }
     return hits;
+  }
+
+  /** A word's hits with those of its forms with two neighbouring letters swapped added (a word the index lacks). */
+  private withSwaps(r: RawResults, termsOf: (i: number) => string[], direct: (t: string) => boolean, word: string, typed: string): WordHits {
+    const state = this.state;
+    const acc = new Map<number, { score: number; terms: string[]; fuzzy: boolean }>();
+    for (let i = 0; i < r.docs.length; i++) {
+      const terms = termsOf(i);
+      acc.set(r.docs[i], { score: r.scores[i], terms, fuzzy: !terms.some(direct) });
+    }
+    // Two letters typed the wrong way round are one slip, not the two edits an edit distance counts.
+    const weight = FUZZY_WEIGHT * (word.length / (word.length + 1));
+    for (const variant of swapped(typed)) {
+      if (variant === word || !state.df.has(variant)) continue;
+      const v = state.engine.search([{ term: variant, prefix: false, fuzzy: 0, boost: 1 }], { events: false });
+      for (let i = 0; i < v.docs.length; i++) {
+        const n = v.docs[i];
+        const had = acc.get(n);
+        const terms = had ? (had.terms.includes(variant) ? had.terms : [...had.terms, variant]) : [variant];
+        acc.set(n, { score: (had?.score ?? 0) + v.scores[i] * weight, terms, fuzzy: had ? had.fuzzy : true });
+      }
+    }
+    return wordHitsOf(acc);
   }
 
   /**
    * Ranked hits for query terms that are already normalised (normaliseTerm), each searched once
    * with these options over the index's field boosts (the claim matcher's way in; GET /api/search
-   * uses query()). Minisearch's score is kept as it gives it: the sum over terms and fields,
-   * times the number of distinct query terms matched.
+   * uses search()). The score is BM25+ as minisearch gives it: the sum over terms and fields,
+   * times the number of distinct query terms matched. With `atLeast`, hits whose sum (the score
+   * divided by that number) is below it are left out before their matches are worked out.
    */
   searchTerms(terms: string[], options: TermsSearchOptions = {}): TermsHit[] {
-    if (!terms.length) return [];
-    return this.ms
-      .search(terms.join(' '), { boost: BOOST, combineWith: 'OR', prefix: false, fuzzy: false, ...options, tokenize: (s) => s.split(' '), processTerm: (t) => t })
-      .map((r: SearchResult) => ({ entry: this.entries.get(r.id as number)!, score: r.score, terms: r.terms, queryTerms: r.queryTerms, match: r.match }))
-      .filter((h) => h.entry);
+    const found = this.searchTermsLazily(terms, options);
+    const out: TermsHit[] = [];
+    for (let i = 0; i < found.length; i++) out.push(found.hit(i));
+    return out.sort((a, b) => b.score - a.score);
+  }
+
+  /**
+   * searchTerms' hits before their matches are worked out: entry and score of each (unranked,
+   * `atLeast` applied), and the whole hit on demand (its matched terms and fields, found by a
+   * look-up in each matched term's posting lists). The claim matcher works out only the hits it
+   * may keep. Read it before the index changes.
+   */
+  searchTermsLazily(terms: string[], options: TermsSearchOptions = {}): LazyTermsHits {
+    const state = this.state;
+    if (!terms.length) return { length: 0, entry: () => undefined as never, score: () => 0, matched: () => 0, hit: () => undefined as never };
+    const { prefix = false, boostTerm, atLeast } = options;
+    const r = state.engine.search(
+      terms.map((term) => ({ term, prefix: typeof prefix === 'function' ? prefix(term) : prefix, fuzzy: 0, boost: boostTerm ? boostTerm(term) : 1 })),
+      { events: false },
+    );
+    let derivedAt: Map<string, number> | undefined;
+    const kept: number[] = [];
+    for (let i = 0; i < r.docs.length; i++) {
+      if (!state.byNumber[r.docs[i]]) continue;
+      if (atLeast !== undefined && r.scores[i] / Math.max(1, r.matched[i]) < atLeast) continue;
+      kept.push(i);
+    }
+    return {
+      length: kept.length,
+      entry: (k) => state.byNumber[r.docs[kept[k]]]!,
+      score: (k) => r.scores[kept[k]],
+      matched: (k) => r.matched[kept[k]],
+      hit: (k) => {
+        const i = kept[k];
+        const n = r.docs[i];
+        // The entry's own terms looked up among those searched (fewer than the other way round),
+        // then put in the order scored: by term searched, then by field.
+        derivedAt ??= new Map(r.derived.map((t, ti) => [t, ti]));
+        const pairs: number[] = [];
+        const own = state.fieldTerms[n] ?? [];
+        for (let f = 0; f < own.length; f++) {
+          for (const t of own[f]) {
+            const ti = derivedAt.get(t);
+            if (ti !== undefined) pairs.push(ti * FIELDS.length + f);
+          }
+        }
+        pairs.sort((a, b) => a - b);
+        const match: Record<string, string[]> = {};
+        const queryTerms: string[] = [];
+        for (const p of pairs) {
+          const ti = Math.floor(p / FIELDS.length);
+          const t = r.derived[ti];
+          (match[t] ??= []).push(FIELDS[p % FIELDS.length]);
+          const q = terms[r.source[ti]];
+          if (!queryTerms.includes(q)) queryTerms.push(q);
+        }
+        return { entry: state.byNumber[n]!, score: r.scores[i], terms: Object.keys(match), queryTerms, match };
+      },
+    };
   }
 
   /** How many indexed entries hold this normalised term in any field. */
   documentFrequency(term: string): number {
-    return this.df.get(term) ?? 0;
+    return this.state.df.get(term) ?? 0;
   }
 
   get size(): number {
-    return this.entries.size;
+    return this.state.entries.size;
   }
 }
 
-const tokenize = MiniSearch.getDefault('tokenize') as (text: string) => string[];
+/** Adds entries to an index state in slices, yielding to the event loop between them. */
+async function addInSlices(state: IndexState, loaded: LoadedEntry[]): Promise<void> {
+  for (let i = 0; i < loaded.length; i += BUILD_SLICE) {
+    for (const l of loaded.slice(i, i + BUILD_SLICE)) {
+      state.remove(l.doc.id);
+      state.add(l);
+    }
+    await new Promise<void>((resolve) => setImmediate(resolve));
+  }
+}
+
+/** searchTerms' hits, their matches worked out on demand (SearchIndex.searchTermsLazily). */
+export interface LazyTermsHits {
+  length: number;
+  entry(i: number): IndexedEntry;
+  score(i: number): number;
+  /** How many of the query terms it matched. */
+  matched(i: number): number;
+  hit(i: number): TermsHit;
+}
+
+/** How many entries' written forms (readerWords) are kept. */
+const FORMS_CACHE_SIZE = 2000;
+
+/** One word's hits: internal numbers ascending, each with its score, matched terms and whether only a typing error reached it. */
+interface WordHits {
+  numbers: Int32Array;
+  scores: Float64Array;
+  terms: string[][];
+  fuzzy: Uint8Array;
+  /** Position of internal number n in numbers, or -1. */
+  find(n: number): number;
+}
+
+/** A word's hits from one engine search, in ascending order of internal number (a numeric sort of number and position packed in one float). */
+function wordHitsFrom(r: RawResults, termsOf: (i: number) => string[], direct: (t: string) => boolean): WordHits {
+  const m = r.docs.length;
+  const packed = new Float64Array(m);
+  for (let i = 0; i < m; i++) packed[i] = r.docs[i] * 2 ** 21 + i;
+  packed.sort();
+  const numbers = new Int32Array(m);
+  const scores = new Float64Array(m);
+  const fuzzy = new Uint8Array(m);
+  const terms: string[][] = new Array(m);
+  for (let k = 0; k < m; k++) {
+    const i = packed[k] % 2 ** 21;
+    numbers[k] = r.docs[i];
+    scores[k] = r.scores[i];
+    const ts = termsOf(i);
+    terms[k] = ts;
+    fuzzy[k] = ts.some(direct) ? 0 : 1;
+  }
+  return withFind({ numbers, scores, terms, fuzzy });
+}
+
+function withFind(h: Omit<WordHits, 'find'>): WordHits {
+  const numbers = h.numbers;
+  return {
+    ...h,
+    find(n) {
+      let lo = 0;
+      let hi = numbers.length;
+      while (lo < hi) {
+        const mid = (lo + hi) >>> 1;
+        if (numbers[mid] < n) lo = mid + 1;
+        else hi = mid;
+      }
+      return lo < numbers.length && numbers[lo] === n ? lo : -1;
+    },
+  };
+}
+
+function wordHitsOf(acc: Map<number, { score: number; terms: string[]; fuzzy: boolean }>): WordHits {
+  const numbers = Int32Array.from(acc.keys()).sort();
+  const scores = new Float64Array(numbers.length);
+  const fuzzy = new Uint8Array(numbers.length);
+  const terms: string[][] = new Array(numbers.length);
+  for (let i = 0; i < numbers.length; i++) {
+    const h = acc.get(numbers[i])!;
+    scores[i] = h.score;
+    fuzzy[i] = h.fuzzy ? 1 : 0;
+    terms[i] = h.terms;
+  }
+  return withFind({ numbers, scores, terms, fuzzy });
+}
+
+/** The matched index terms of each document of a one-word search, in the order matched; documents with the same terms share one array. */
+function termLists(r: RawResults): (i: number) => string[] {
+  if (r.derived.length === 1) {
+    const only = [r.derived[0]];
+    return () => only;
+  }
+  const shared = new Map<string, string[]>();
+  return (i) => {
+    const idx: number[] = [];
+    for (const { term } of r.events(i)) if (!idx.includes(term)) idx.push(term);
+    const key = idx.join(',');
+    let list = shared.get(key);
+    if (!list) shared.set(key, (list = idx.map((t) => r.derived[t])));
+    return list;
+  };
+}
+
+/** The first k of the items, best first by `better` (a partial selection: the rest are never sorted). */
+function topK<T>(items: T[], k: number, better: (a: T, b: T) => number): T[] {
+  if (k <= 0) return [];
+  if (items.length <= k || items.length <= 64) return [...items].sort(better).slice(0, k);
+  // Keep the k best in a sorted buffer; most items fall below its last and cost one comparison.
+  const best: T[] = [];
+  for (const h of items) {
+    if (best.length === k && better(h, best[k - 1]) >= 0) continue;
+    let lo = 0;
+    let hi = best.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (better(best[mid], h) <= 0) lo = mid + 1;
+      else hi = mid;
+    }
+    best.splice(lo, 0, h);
+    if (best.length > k) best.pop();
+  }
+  return best;
+}
+
+/** Splits text as the index always has (minisearch's default tokenizer: spaces and punctuation). */
+const SPACE_OR_PUNCTUATION = /[\n\r\p{Z}\p{P}]+/u;
+const tokenize = (text: string): string[] => text.split(SPACE_OR_PUNCTUATION);
 
 /**
  * How many edits a word not in the index may be from an index term: none below 4 letters, one up
@@ -444,10 +849,7 @@ const tokenize = MiniSearch.getDefault('tokenize') as (text: string) => string[]
  * length, which let five letters in two edits reach words that were never meant ("world" → "work",
  * "pqrst" → "part"); a swap of two letters is found apart (swapped()).
  */
-const fuzzyDistance = (word: string): number | false => (word.length < 4 ? false : word.length < 8 ? 1 : 2);
-
-/** Minisearch's default weight of a fuzzy match, used for the swapped forms of a word. */
-const FUZZY_WEIGHT = 0.45;
+const fuzzyDistance = (word: string): number => (word.length < 4 ? 0 : word.length < 8 ? 1 : 2);
 
 /** The normalised forms of a typed word with two neighbouring letters swapped (the first letter kept). */
 function swapped(typed: string): string[] {
@@ -463,15 +865,6 @@ function swapped(typed: string): string[] {
 
 /** What comes before the first word of a sentence, a field or a list item (the text up to the word's last three characters). */
 const SENTENCE_START = /(?:^|[.!?:;·•\n]\s*|^\s+)$/u;
-
-/** One entry's match of one query word. */
-interface WordHit {
-  score: number;
-  /** The index terms the word matched in the entry. */
-  terms: string[];
-  /** Only through a typing error (no term is the word itself, or, for the last word, begins with it). */
-  fuzzy: boolean;
-}
 
 /** The one- and two-letter words of the synonym groups' phrases, normalised ("rf", "q"). */
 function shortTermsOf(synonyms: SynonymSet): Set<string> {
@@ -497,15 +890,10 @@ function addShortTerms(out: Set<string>, doc: SearchDoc): void {
   }
 }
 
-/** Adds `by` to the document frequency of each distinct term of the doc (concept terms too), as the index tokenises and normalises it. */
-function countTerms(df: Map<string, number>, doc: SearchDoc, by: 1 | -1, synonyms: SynonymSet): void {
+/** Adds `by` to the document frequency of each distinct term of a doc's fields (concept terms too). */
+function countTerms(df: Map<string, number>, fields: readonly (readonly string[])[], by: 1 | -1): void {
   const terms = new Set<string>();
-  for (const field of FIELDS) {
-    for (const token of docTokens(fieldText(doc, field), synonyms)) {
-      const t = processDocTerm(token);
-      if (t) terms.add(t);
-    }
-  }
+  for (const f of fields) for (const t of f) terms.add(t);
   for (const t of terms) {
     const n = (df.get(t) ?? 0) + by;
     if (n > 0) df.set(t, n);

@@ -90,6 +90,12 @@ async function loadTaxonomy(): Promise<TaxonomyNames & { lawById: Map<number, Co
   };
 }
 
+/** The ids of every published entry, ascending. */
+export async function loadPublishedIds(): Promise<number[]> {
+  const rows = await Entry.findAll({ where: { status: 'published' }, attributes: ['id'], order: [['id', 'ASC']], raw: true });
+  return rows.map((r) => r.id);
+}
+
 /** The id of the entry with this slug, if there is one. */
 export async function findEntryId(slug: string): Promise<number | undefined> {
   const row = await Entry.findOne({ where: { slug }, attributes: ['id'] });

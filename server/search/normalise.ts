@@ -68,11 +68,19 @@ export function stem(word: string): string {
 
 export const fold = (s: string) => s.normalize('NFD').replace(/\p{M}+/gu, '').toLowerCase();
 
-/** One term as minisearch sees it: null drops it. */
+/** Words already normalised (most words recur: the index build, excerpts and queries look them up again). */
+const TERMS = new Map<string, string | null>();
+const TERMS_MAX = 200_000;
+
+/** One term as the index sees it: null drops it. */
 export function normaliseTerm(term: string): string | null {
+  let out = TERMS.get(term);
+  if (out !== undefined) return out;
   const t = fold(term).replace(/[^\p{L}\p{N}]+/gu, '');
-  if (!t || STOP.has(t)) return null;
-  return stem(t);
+  out = !t || STOP.has(t) ? null : stem(t);
+  if (TERMS.size >= TERMS_MAX) TERMS.clear();
+  TERMS.set(term, out);
+  return out;
 }
 
 /** Markdown and TeX to plain text: math dropped, links kept as their words, markup removed. */

@@ -1,6 +1,4 @@
 /** The shapes of the full-text index (index.ts): what is indexed and what a search returns. */
-import type { SearchOptions } from 'minisearch';
-
 export interface SearchDoc {
   id: number;
   slug: string;
@@ -45,5 +43,12 @@ export interface TermsHit extends SearchHit {
   match: Record<string, string[]>;
 }
 
-/** Minisearch options that {@link SearchIndex.searchTerms} takes (the terms come already normalised). */
-export type TermsSearchOptions = Omit<SearchOptions, 'tokenize' | 'processTerm' | 'filter'>;
+/** Options of {@link SearchIndex.searchTerms} (the terms come already normalised; no fuzzy matching). */
+export interface TermsSearchOptions {
+  /** Which terms also match the index terms they begin (at the reduced prefix weight). */
+  prefix?: boolean | ((term: string) => boolean);
+  /** A factor for each term's scores. */
+  boostTerm?: (term: string) => number;
+  /** Leave out hits whose summed score (before the factor of terms matched) is below this. */
+  atLeast?: number;
+}

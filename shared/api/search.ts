@@ -45,4 +45,6 @@ export interface SearchResponse {
    * own entries and those of every class below it, as filtering by it lists them all.
    */
   facets: { laws: Record<string, number>; mechanisms: Record<string, number> };
+  /** Present (true) only while a server that just started builds its index: the results cover the entries indexed so far. */
+  partial?: true;
 }

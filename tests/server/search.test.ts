@@ -1,13 +1,17 @@
 /**
  * GET /api/search over the starter entries (supertest, real MariaDB): queries in other words than
  * the entries' own rank the intended entry first, misspellings still find it, filters and facets,
- * validation, and the excerpt's escaping. The query texts are invented test data.
+ * validation, the excerpt's escaping, and answers while the index builds. The query texts are
+ * invented test data.
  */
 import fs from 'node:fs';
 import path from 'node:path';
+import request from 'supertest';
+import { createApp, type AppLocals } from '../../server/app';
 import { excerpt } from '../../server/search';
 import { normaliseTerm, plainText } from '../../server/search/normalise';
 import { CONTENT_DIR, startTestApp, type TestApp } from '../support/app';
+import { until } from '../support/poll';
 
 jest.setTimeout(120_000);
 
@@ -52,6 +56,8 @@ describe('ranking (invented test queries)', () => {
       inBrief: expect.any(String),
     });
     expect(top.inBrief).not.toMatch(/[*_$`]/);
+    // A built index answers in full: no `partial` flag.
+    expect(res.body).not.toHaveProperty('partial');
   });
 
   it('lists every published entry, newest first, for an empty query', async () => {
@@ -212,5 +218,41 @@ describe('excerpts and normalisation', () => {
     expect(normaliseTerm('Émigré')).toBe(normaliseTerm('emigre'));
     expect(normaliseTerm('the')).toBeNull();
     expect(plainText('**Bold** $E = mc^2$ and [a link](https://x.org) $$\\int f$$')).toBe('Bold and a link');
+  });
+});
+
+describe('while the index builds', () => {
+  // A second app over the same database whose first build cannot read the entries yet: another
+  // connection holds a write lock on the table. Searches are answered at once (searchWaitBelow 0:
+  // never wait), flagged partial, in the usual shape; once the lock goes and the build ends, in full.
+  const mariadb = require('mariadb') as { createConnection(opts: object): Promise<{ query(sql: string): Promise<unknown>; end(): Promise<void> }> };
+
+  it('answers at once, flagged partial, and in full once built', async () => {
+    const db = h.t.db;
+    const locker = await mariadb.createConnection({ host: db.host, port: db.port, user: db.user, password: db.password, database: db.name });
+    await locker.query('LOCK TABLES entries WRITE');
+    const second = createApp({ sequelize: h.t.sequelize, version: 'test', env: 'test', sessionCleanupMs: 0, searchRefreshMs: 0, searchWaitBelow: 0 });
+    try {
+      for (const q of ['overbalanced wheel', '']) {
+        const res = await request(second).get('/api/search').query({ q });
+        expect(res.status).toBe(200);
+        expect(res.body).toEqual({ query: q, total: 0, results: [], facets: { laws: {}, mechanisms: {} }, partial: true });
+      }
+      // A filter cannot be checked against a taxonomy not read yet: it is no error meanwhile.
+      expect((await request(second).get('/api/search').query({ q: 'wheel', law: 'energy' })).status).toBe(200);
+      await locker.query('UNLOCK TABLES');
+      // Polled with a generous deadline, never timed.
+      await until('the second app has built its index', async () => !(await request(second).get('/api/search').query({ q: 'wheel' })).body.partial, 60_000);
+      const res = await request(second).get('/api/search').query({ q: 'overbalanced wheel' });
+      expect(res.body.results[0].slug).toBe('overbalanced-wheel');
+      expect(res.body).not.toHaveProperty('partial');
+      const all = await request(h.app).get('/api/search').query({ q: '', limit: 50 });
+      expect((await request(second).get('/api/search').query({ q: '', limit: 50 })).body).toEqual(all.body);
+      expect((await request(second).get('/api/search').query({ q: 'wheel', law: 'conservation-of-luck' })).status).toBe(400);
+    } finally {
+      await locker.query('UNLOCK TABLES').catch(() => {});
+      await locker.end();
+      await (second.locals as unknown as AppLocals).close();
+    }
   });
 });
