@@ -18,7 +18,8 @@ export interface EvaluateOptions {
   /** Compute the plots too (default true). Live typing may skip them and ask again when idle. */
   plots?: boolean;
   /**
-   * Wall-clock budget for one evaluation, in milliseconds (default 1000). Ordinary worksheets take
+   * Time budget for one evaluation, in milliseconds (default 1000): the smaller of wall-clock and
+   * process CPU time where the runtime reports it (evaluate.ts, budgetClock). Ordinary worksheets take
    * well under a millisecond; a hostile one (60 steps of 10 000-element lists, swept by plots) could
    * otherwise run for minutes. Steps, checks and plot points not started within the budget are
    * errors of kind 'refused'. A single expression is bounded by its length and MAX_ELEMENTS.

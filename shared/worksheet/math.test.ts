@@ -169,6 +169,21 @@ describe('a time budget bounds hostile worksheets', () => {
     expect(r.checks[0].error?.kind).toBe('refused');
     expect(r.plots[0].error?.kind).toBe('refused');
     expect(r.plots[0].series[0].values).toHaveLength(200);
+    expect(r.overBudget).toBe(true);
+  });
+
+  test('an ordinary worksheet within its budget is not flagged', () => {
+    const ws: Worksheet = {
+      name: 'light',
+      title: 'light',
+      inputs: [{ name: 'n', label: 'n', unit: '', default: '2' }],
+      steps: [{ name: 's', label: 's', expression: 'n * 3 m' }],
+      checks: [],
+      plots: [],
+    };
+    const r = compileWorksheet(ws).evaluate({});
+    expect(r.ok).toBe(true);
+    expect(r.overBudget).toBeUndefined();
   });
 });
 

@@ -67,6 +67,8 @@ export interface WorksheetResult {
   steps: StepResult[];
   checks: CheckResultRow[];
   plots: PlotResult[];
+  /** Set when the evaluation ran past its time budget (EvaluateOptions.budgetMs) and stopped early. */
+  overBudget?: boolean;
 }
 
 /**
