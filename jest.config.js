@@ -42,6 +42,10 @@ const nodeProject = (name, testMatch, extra = {}) => ({
 });
 
 module.exports = {
+  // Two workers even on a 2-core machine (jest's default there is one): the browser and database
+  // tests spend much of their time waiting on Chromium and MariaDB, so a second worker nearly halves
+  // the run. Every test file has its own database, server port and browser, so files never meet.
+  maxWorkers: Number(process.env.CW_TEST_WORKERS) || Math.max(2, require('node:os').availableParallelism?.() ?? 2),
   projects: [
     nodeProject('shared', ['<rootDir>/shared/**/*.test.ts']),
     nodeProject('server', ['<rootDir>/tests/server/**/*.test.ts', '<rootDir>/server/**/*.test.ts']),
