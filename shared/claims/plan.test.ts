@@ -90,6 +90,29 @@ describe('nothing is run on a default', () => {
   });
 });
 
+describe('texts that say no propellant in other words, or leave out the thrust (invented test data)', () => {
+  const planned = (text: string) => {
+    const { checks, needs } = runClaimChecks(extractFigures(text), { text });
+    return { checks: checks.map((c) => [c.check, c.finding]), needs: needs.map((x) => [x.check, x.missing]) };
+  };
+  it('"no mass was expelled", "independent of any reaction mass", "does not use any propellant" bring the photon bound', () => {
+    for (const text of [
+      'A thrust of 2.4e-3 N was measured at an input power of 500 W. No mass was expelled during the run.',
+      'The drive gives 2 mN from 100 W, independent of any reaction mass.',
+      'The thruster does not use any propellant and gives 2 mN from 100 W.',
+    ]) {
+      expect(planned(text).checks).toContainEqual(['photon-bound', 'breaks']);
+    }
+  });
+  it('a propellant-free thruster with a power and no thrust figure needs the thrust', () => {
+    expect(planned('Without any propellant, our thruster turns 3 kW of electricity into steady thrust.').needs).toContainEqual(['photon-bound', ['the thrust measured']]);
+  });
+  it('a rated motor power is not run over a charging time: no false alarm against the pack', () => {
+    const r = planned('The electric van has a 75 kWh pack and a 150 kW motor, and charges to 80 % in 40 minutes.');
+    expect(r.checks.filter(([, finding]) => finding === 'breaks')).toEqual([]);
+  });
+});
+
 describe('ranges: the end most favourable to the claim, and said', () => {
   it('photon bound: the lowest thrust and the highest power', () => {
     const { checks } = runClaimChecks([fig('thrust', '3 mN', null, '6 mN'), fig('power', '0.5 kW', 'in', '1.5 kW')], FREE);

@@ -3,6 +3,7 @@
  * self-running device; an efficiency or gain above 1 that is not a heat pump's COP nor a quantum
  * efficiency; a boiler's efficiency on the net calorific value; what is missing otherwise.
  */
+import { isChargingTime } from '../reader/durations';
 import type { Figure } from '../types';
 import { at, need, ofKind, siAt, typed, uniq, type Basis, type End } from './basis';
 import type { HeatReading } from './carnot';
@@ -51,7 +52,8 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     const toEnergy = (f: Figure, e: End): string | null => {
       if (f.kind === 'energy') return at(f, e);
       if (siAt(f, e) === 0) return '0 J'; // no input at all, however long it ran
-      if (t !== undefined) return typed(siAt(f, e) * t, 'J');
+      // A charging time is no run of what the device puts out ("a 150 kW motor … charges in 40 minutes").
+      if (t !== undefined && !(f.role === 'out' && !bothPower && duration && isChargingTime(text, duration))) return typed(siAt(f, e) * t, 'J');
       if (bothPower) return typed(siAt(f, e), 'J'); // one second of steady running
       return null;
     };

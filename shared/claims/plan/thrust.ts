@@ -67,9 +67,9 @@ export function planThrust(b: Basis): ThrustReading {
     }
   } else if (thrust && photonApplies) {
     needs.push(need('photon-bound', ['the input power'], 'A propellant-free thrust is bounded by the power that produces it (F ≤ P/c).', [thrust]));
-  } else if (!thrust && photonApplies && (pIn || pOut) && /(?<!\p{L})(?:thrust|push|force|propulsion|thruster|drive)(?!\p{L})/iu.test(text)) {
+  } else if (!thrust && photonApplies && power.length > 0 && /(?<!\p{L})(?:thrust|push|force|propulsion|thruster|drive)(?!\p{L})/iu.test(text)) {
     // "Sealed thruster, 1 kW input. Thrust figures to follow."
-    needs.push(need('photon-bound', ['the thrust measured'], 'A propellant-free thrust is bounded by the power that produces it (F ≤ P/c).', uniq([pIn, pOut])));
+    needs.push(need('photon-bound', ['the thrust measured'], 'A propellant-free thrust is bounded by the power that produces it (F ≤ P/c).', uniq([pIn ?? power[0], pOut])));
   }
   return { thrust, photonApplies };
 }

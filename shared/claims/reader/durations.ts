@@ -11,6 +11,14 @@ import { insertAfter, sameClause, sentenceOf, siOf, typedSi, upperSiOf, type Dra
 const NOT_A_RUN_RE =
   /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline)(?!\p{L})/iu;
 
+/** Just before a charging time: "charges to 80 % in", "recharged in", "a full charge takes", "charging time of". */
+export const CHARGING_TIME_RE =
+  /(?<!\p{L})(?:(?:re)?charg(?:es|ed|ing|e)|fills?[^\S\n]+up|tops?[^\S\n]+up|topped[^\S\n]+up)(?!\p{L})[^.;!?\n]{0,35}?(?:in|takes|took|of|within|under|about|around|just|only)?[^\S\n]*(?:(?:about|around|roughly|just|only|under|less than)[^\S\n]+)?$/iu;
+
+/** A duration said as the time a charge takes. */
+export const isChargingTime = (text: string, d: { start: number | null | undefined }): boolean =>
+  d.start != null && CHARGING_TIME_RE.test(text.slice(Math.max(0, d.start - 50), d.start));
+
 /** Times, rates and energies over a run, among the figures read (see the file's comment). */
 export function relateDurations(text: string, drafts: Draft[]): void {
   // Times that are not the run's ("took 18 months to build", "pays for itself in 3 years"), said in a
@@ -56,6 +64,9 @@ export function relateDurations(text: string, drafts: Draft[]): void {
         durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && sameClause(text, d, p) && d.start - p.end < 80) ??
         [...durations].reverse().find((d) => d.end <= p.start && (!prevPower || d.start > prevPower.end) && sameClause(text, d, p) && p.start - d.end < 60);
       const duration = durations.length > 1 && own ? own : longest;
+      // "… a 150 kW motor, and charges to 80 % in 40 minutes": a charging time is no run of what the
+      // device puts out.
+      if (p.role === 'out' && isChargingTime(text, duration)) continue;
       const tRun = siOf(duration);
       if (!tRun) continue;
       const w = siOf(p);

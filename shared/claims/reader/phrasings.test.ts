@@ -374,3 +374,52 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('The test lasted 45 minutes in a room held at 21 °C.').find((x) => x.kind === 'temperature')!.role).toBe('aside');
   });
 });
+
+/**
+ * Readings added after a blind corpus part with figures beside the claim (invented test data).
+ * °F differences: 1 °F of difference = 5/9 K (NIST SP 811 §4.2.1.1 and Appendix B.9).
+ */
+describe('sides named by the fluid or the delivery, supplies, charging times', () => {
+  const read = (text: string) => {
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    return figures;
+  };
+  const temps = (figures: Figure[]) => figures.filter((f) => f.kind === 'temperature').map((f) => [f.role, Number(f.si.toFixed(6))]);
+
+  test('"hot brine at 85 °C" is the hot side, and the difference gives the cold one', () => {
+    // 85 °C = 358.15 K; 358.15 − 60 = 298.15 K.
+    expect(temps(read('A solar-pond engine runs on a 60 °C temperature difference, with hot brine at 85 °C, and turns 9 % of its heat into work.'))).toEqual([
+      ['hot', 358.15],
+      ['cold', 298.15],
+    ]);
+    expect(temps(read('The engine takes heat from hot water at 90 °C and rejects it to cold water at 10 °C.'))).toEqual([
+      ['hot', 363.15],
+      ['cold', 283.15],
+    ]);
+  });
+
+  test('what a heat pump delivers is its hot side, even when the word after it is "air"', () => {
+    // 95 °F = (95 + 459.67)·5/9 K = 308.15 K; a 36 °F difference is 20 K, so the cold side is 288.15 K.
+    expect(temps(read('The heat pump lifts heat across a 36 °F temperature difference to deliver 95 °F air, at a COP of 4.2.'))).toEqual([
+      ['hot', 308.15],
+      ['cold', 288.15],
+    ]);
+  });
+
+  test('a current and a voltage of a supply are what the device takes', () => {
+    const f = read('From a 24 V supply at 5 A the amplifier delivers 100 W into the speaker.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 120],
+      ['out', 100],
+    ]);
+  });
+
+  test('a charging time is no run of a motor: no energy is made of the two', () => {
+    const f = read('The van has a 75 kWh pack and a 150 kW motor, and charges to 80 % in 40 minutes.');
+    expect(f.filter((x) => x.kind === 'energy').map((x) => x.si)).toEqual([75 * 3.6e6]);
+    // A charging power over the charging time is still an energy: 7 kW × 5 h = 126 MJ.
+    const g = read('The pack was charged at 7 kW for 5 hours.');
+    expect(g.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([['in', 7000 * 5 * 3600]]);
+  });
+});

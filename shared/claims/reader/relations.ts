@@ -105,7 +105,9 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       /(?:^|[|\n•;,(])[^\S\n]*(?:(?:electrical|electric|DC|AC)[^\S\n]+)?(in|out|input|output)[^\S\n]*[:=][^\S\n]*$/iu.exec(text.slice(Math.max(0, first.start - 30), first.start));
     // "the coil charges a 12 V battery at 3 A": what it charges is its output, whatever the words between.
     const fills = !said && FILLS_LEAD_RE.test(text.slice(Math.max(0, first.start - 40), first.start));
-    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills ? 'out' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
+    // "from a 24 V supply at 5 A", "a 12 V power supply drawing 2 A": the pair is a supply's, what the device takes.
+    const supplied = !said && !fills && /^[^\S\n]*(?:(?:DC|AC|bench|lab|power)[^\S\n]+)?(?:supply|supplies|PSU|mains|adapter|source|rail)(?!\p{L})/iu.test(text.slice(first.end, last.start));
+    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills ? 'out' : supplied ? 'in' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
     const wordsRole = between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
     const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null);
     const role: FigureRole = wordsRole ?? (others.length && others.every((d) => d.role === 'in') ? 'out' : null);

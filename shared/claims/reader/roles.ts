@@ -47,6 +47,13 @@ const COP_WINDOW = 120;
 /** "warm end", "cold side", "hot junction" just before a temperature outweigh the words after it. */
 const STRONG_SIDE_RE = /(?<!\p{L})(hot|warm|cold|cool|sunlit|sunny|heated|shaded|shady|cooled)(?:er)?[- ](?:end|side|junction|plate|face|reservoir|panel)s?(?:[^\S\n]+(?:\p{L}+))?[^\S\n]+(?:in|at|of|is|sits at|held at|kept at|runs at|near)?[^\S\n]*(?:(?:a|an|the)[^\S\n]+)?$/iu;
 
+/** "hot brine at 85 °C", "cold water at 8 °C": a fluid said hot or cold just before its temperature. */
+const STRONG_FLUID_RE =
+  /(?<!\p{L})(hot|warm|heated|cold|cool|chilled|cooled)(?:er)?[^\S\n]+(?:brine|water|air|gas|gases|fluid|steam|oil|exhaust|flue gas|coolant)[^\S\n]+(?:at|of|is|near|around)?[^\S\n]*(?:(?:about|around|roughly|some|nearly|only|just)[^\S\n]+)?$/iu;
+/** Just before a temperature a machine delivers: "to deliver", "supplies", "provides water at". */
+const DELIVERS_LEAD_RE =
+  /(?<!\p{L})(?:deliver(?:s|ed|ing)?|suppl(?:y|ies|ied|ying)|provid(?:e|es|ed|ing))[^\S\n]+(?:(?:water|air|heat|hot water|warm air)[^\S\n]+at[^\S\n]+)?(?:(?:about|around|roughly|some|nearly|only|just|up to)[^\S\n]+)?$/iu;
+
 /**
  * End of the words after the last figure that gave it its role ("… 3.2 km/s exhaust velocity"): the
  * next figure's words start after them. Reset by each reading (figures.ts).
@@ -73,8 +80,11 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       if (/(?<!\p{L})(?:heat[^\S\n]+)?sink(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'hot';
       if (/(?<!\p{L})(?:(?:air|ground|water|brine|heat|outdoor)[- ])?source(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'cold';
     }
-    const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start));
+    const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start)) ?? STRONG_FLUID_RE.exec(text.slice(Math.max(floor, start - 40), start));
     if (strong) return /^(?:hot|warm|sun|heated)/i.test(strong[1]) ? 'hot' : 'cold';
+    // "to deliver 95 °F air", "supplies 55 °C water": what a machine delivers is its hot side (the
+    // words after the figure, "air", "water", would say the source).
+    if (DELIVERS_LEAD_RE.test(text.slice(Math.max(floor, start - 40), start))) return 'hot';
     // "the heat it draws from 25 °C room air": where the heat comes from is the hot side.
     // (see below for power and energy)
     if (/(?<!\p{L})(?:heat|energy)(?:[^\S\n]+(?:it|that it|they))?[^\S\n]+(?:draws?|takes?|extracts?|absorbs?|gets?|pulls?|harvests?|collects?)[^\S\n]+from[^\S\n]+(?:(?:the|a|an)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';

@@ -73,6 +73,10 @@ export const PROPELLANT_FREE_WORDS = [
   // "with nothing ejected", "no mass leaving it", "nothing escaping": said after the noun as well.
   '(?:with )?nothing (?:being )?(?:ejected|expelled|emitted|escaping|vented|thrown out|leaving(?: it| the \\w+)?)',
   '(?:with )?no (?:mass|matter|material|gas|propellant|particles?) (?:being )?(?:leaving|escaping|ejected|expelled|emitted|vented|thrown out|leaves|escapes)',
+  // "No mass was expelled during the run", "independent of any reaction mass", "it does not use any propellant".
+  'no (?:mass|matter|material|gas|propellant|reaction mass|exhaust|particles?) (?:was|is|were|are|has been|had been|gets|got) (?:ever )?(?:expelled|ejected|emitted|vented|lost|used|consumed|thrown out|released)',
+  'independent(?:ly)? of (?:any )?(?:propellant|reaction mass|exhaust|expelled mass)', 'free of (?:any )?(?:propellant|reaction mass|exhaust)',
+  '(?:does not|doesn\x27t|doesn\u2019t|do not|don\x27t|never|need not|needn\x27t) (?:need|use|require|expel|eject|consume|carry|burn) (?:any )?(?:propellant|reaction mass|exhaust|mass)',
 ];
 /** A device said to carry and expel propellant: the photon-rocket bound does not apply, the rocket equation does. */
 export const PROPELLANT_WORDS = [
