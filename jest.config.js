@@ -52,6 +52,9 @@ module.exports = {
     {
       displayName: 'app',
       preset: 'jest-expo/web',
+      // A component test loads and renders a whole screen; on a cold transform cache with two workers
+      // on two cores that can pass jest's default of 5 s (a bound on hanging, not a speed check).
+      testTimeout: 30_000,
       // d3-scale and d3-shape ship ES modules as .mjs, which the preset does not transform.
       transform: { '\\.mjs$': ['babel-jest', { caller: { name: 'metro', bundler: 'metro', platform: 'web' } }] },
       testMatch: ['<rootDir>/components/**/*.test.tsx', '<rootDir>/tests/app/**/*.test.tsx'],

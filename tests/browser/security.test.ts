@@ -185,6 +185,8 @@ it('shows every payload as text, runs none of them, on the entry, the library an
   await page.goto(`${h.base}/entries/${SLUG}`);
   await byTestId(page, 'screen-entry').waitFor();
   await page.getByText('pitch-marker-0', { exact: false }).first().waitFor();
+  // The sightings and sources come with the entry's deferred part: wait for them, not for a time.
+  await page.getByText('sighting-title-marker', { exact: false }).first().waitFor();
   const entry = await expectClean(page, [
     'in-brief-marker',
     ...all('pitch-marker'),
