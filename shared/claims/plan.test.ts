@@ -107,6 +107,10 @@ describe('texts that say no propellant in other words, or leave out the thrust (
   it('a propellant-free thruster with a power and no thrust figure needs the thrust', () => {
     expect(planned('Without any propellant, our thruster turns 3 kW of electricity into steady thrust.').needs).toContainEqual(['photon-bound', ['the thrust measured']]);
   });
+  it('a self-running machine with no figure needs its output; a named Shockley–Queisser limit with no efficiency needs the efficiency', () => {
+    expect(planned('The weighted wheel is self-running and has turned for three weeks, its builder says; no output figure is given.').needs.map(([c]) => c)).toEqual(['first-law']);
+    expect(planned("The cell 'breaks the Shockley–Queisser limit' under one sun, the release says, but quotes no efficiency.").needs.map(([c]) => c)).toEqual(['light-converter-limits']);
+  });
   it('a rated motor power is not run over a charging time: no false alarm against the pack', () => {
     const r = planned('The electric van has a 75 kWh pack and a 150 kW motor, and charges to 80 % in 40 minutes.');
     expect(r.checks.filter(([, finding]) => finding === 'breaks')).toEqual([]);

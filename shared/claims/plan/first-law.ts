@@ -3,6 +3,8 @@
  * self-running device; an efficiency or gain above 1 that is not a heat pump's COP nor a quantum
  * efficiency; a boiler's efficiency on the net calorific value; what is missing otherwise.
  */
+import { HARVEST_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
+import { alt } from '../reader/context';
 import { isChargingTime } from '../reader/durations';
 import type { Figure } from '../types';
 import { at, need, ofKind, siAt, typed, uniq, type Basis, type End } from './basis';
@@ -17,6 +19,10 @@ const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:(?:is|are|was|were|being)[^\S\n]+)?(?:
  */
 const UNMEASURED_OTHER_INPUT_RE =
   /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:rest|remainder|balance|difference)[^\S\n]+(?:(?:of[^\S\n]+(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:is|are|comes?|came|being|was)[^\S\n]+)(?:(?:made[^\S\n]+up[^\S\n]+by|made[^\S\n]+up[^\S\n]+from|supplied[^\S\n]+by|provided[^\S\n]+by|drawn[^\S\n]+from|taken[^\S\n]+from|from|by)[^\S\n]+)?(?:the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:sun|sunlight|solar|ambient|air|ground|earth|fuel|gas|wind|environment|surroundings)|(?:solar|sun|wind|ambient)[- ]assisted|(?:plus|together[^\S\n]+with|along[^\S\n]+with|topped[^\S\n]+up[^\S\n]+(?:by|with))[^\S\n]+(?:free[^\S\n]+|unmeasured[^\S\n]+|some[^\S\n]+)?(?:sunlight|solar[^\S\n]+(?:heat|gain|energy)|ambient[^\S\n]+heat|heat[^\S\n]+from[^\S\n]+the[^\S\n]+(?:air|ground|sun)))(?!\p{L})/iu;
+/** A machine said to run by itself. */
+const SELF_RUNNING_CLAIM_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'iu');
+/** A machine that harvests a flow from outside (sunlight, wind, heat) is no self-running one. */
+const HARVEST_CLAIM_RE = new RegExp(`(?<!\\p{L})(?:${alt(HARVEST_WORDS)})(?!\\p{L})`, 'iu');
 /** Boiler efficiencies on the net (lower) calorific value may exceed 100 % by convention. */
 const NET_CALORIFIC_RE = /(?<!\p{L})(?:condensing|net (?:CV|calorific|heating)|LHV|lower heating value|lower calorific)(?!\p{L})/iu;
 
@@ -126,6 +132,9 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     needs.push(need('first-law', ['the energy or power put in (all of it: electrical, mechanical, chemical, heat)'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eOut, pOut])));
   } else if ((eIn || pIn) && !(eOut || pOut) && s.overUnity && !thrust) {
     needs.push(need('first-law', ['the energy or power got out'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eIn, pIn])));
+  } else if (power.length === 0 && energy.length === 0 && !thrust && SELF_RUNNING_CLAIM_RE.test(text) && !HARVEST_CLAIM_RE.test(text)) {
+    // "The weighted wheel is self-running and has turned for three weeks; no output figure is given."
+    needs.push(need('first-law', ['the energy or power got out, measured', 'everything that goes in (a self-running machine is said to take nothing)'], 'Over a full cycle a machine delivers no more energy than it is given.', []));
   } else if (!(eIn || pIn || eOut || pOut) && s.overUnity && !thrust && (ofKind(figures, 'current').length > 0 || ofKind(figures, 'voltage').length > 0)) {
     // "returns more energy than it takes while drawing 1.8 A": a current alone is no power.
     needs.push(

@@ -41,6 +41,9 @@ const PER_BIT_BEFORE_RE = /(?<!\p{L})(?:each|every|per|a single|one)[^\S\n]+(?:e
 /** "… J per bit", "for each bit erased", "per logic operation". */
 const PER_BIT_RE = /^[^\S\n]*(?:(?:of energy|of work)[^\S\n]+)?(?:per|for each|for every|each|a)[^\S\n]+(?:erased[^\S\n]+|logical[^\S\n]+|logic[^\S\n]+)?(?:bit|bits|operation|erasure|switching event|gate operation|flip)(?!\p{L})/iu;
 
+/** A limit of light converters named: "beats the Shockley–Queisser limit", "above the detailed-balance limit". */
+const LIGHT_LIMIT_NAMED_RE = /(?<!\p{L})(?:Shockley[–-]Queisser|SQ limit|detailed[- ]balance limit|Landsberg limit)(?!\p{L})/iu;
+
 export function planOtherChecks(b: Basis): void {
   const { figures, ctx, s, plans, needs, notes, power, energy, text, pIn, pOut, speeds, temps } = b;
   // ---- Converters of sunlight: the Landsberg and Carnot bounds, and Shockley–Queisser for one junction
@@ -63,6 +66,12 @@ export function planOtherChecks(b: Basis): void {
       why: 'The text gives the efficiency of a converter of sunlight.',
       assumptions: extra,
     });
+  }
+
+  // "Our cell breaks the Shockley–Queisser limit … it quotes no efficiency": the limit is named, the
+  // efficiency is not given.
+  if (!solarEfficiency && LIGHT_LIMIT_NAMED_RE.test(text) && !s.heatEngine) {
+    needs.push(need('light-converter-limits', ['the efficiency of the cell, measured (and under how many suns)'], 'A converter of sunlight is bounded by the Landsberg and Carnot limits, and one junction by Shockley–Queisser.', []));
   }
 
   // ---- Checks whose figures claims seldom give: say what they need

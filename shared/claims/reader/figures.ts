@@ -18,6 +18,9 @@ import { lastRoleWords, ratingRole, roleFor } from './roles';
 import { differenceDirection, differenceQuantity, isDifference } from './temperatures';
 import { GLUED_CELSIUS, GLUED_FAHRENHEIT, type Suffix } from './units';
 
+/** Seconds said of an engine: "an ion engine at 3,000 s", "a hydrazine thruster of 220 s" (a specific impulse). */
+const ENGINE_SECONDS_RE = /(?<!\p{L})(?:engines?|thrusters?|rocket motors?|motors?|rockets?|stages?)[^\S\n]+(?:at|of|rated at|running at|giving|with)[^\S\n]+(?:(?:about|around|roughly|some|nearly|an? Isp of)[^\S\n]+)?$/iu;
+
 function suffixKind(s: Suffix): string | null {
   if (s === null) return null;
   if (s.type === 'percent') return '%';
@@ -169,7 +172,14 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         quantity = differenceQuantity(scaled(t.num, suffix.form.factor), suffix.form.unit);
         direction = differenceDirection(text, end);
         if (upperNum !== undefined) upper = differenceQuantity(upperNum, suffix.form.unit);
-      } else if (kind === 'duration' && suffix.form.unit === 's' && (ISP_BEFORE_RE.test(text.slice(Math.max(floor, start - BEFORE_WINDOW), start)) || ((ISP_AFTER_RE.lastIndex = end), ISP_AFTER_RE.test(text)))) {
+      } else if (
+        kind === 'duration' &&
+        suffix.form.unit === 's' &&
+        (ISP_BEFORE_RE.test(text.slice(Math.max(floor, start - BEFORE_WINDOW), start)) ||
+          ((ISP_AFTER_RE.lastIndex = end), ISP_AFTER_RE.test(text)) ||
+          // "an ion engine at 3,000 s", "a hydrazine thruster of 220 s": seconds said of an engine.
+          ENGINE_SECONDS_RE.test(text.slice(Math.max(floor, start - 40), start)))
+      ) {
         kind = 'specific-impulse';
       } else if (kind === 'duration' && /(?:(?<!\p{L})at|@)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 4), start))) {
         // "at 10 h": a time of day.

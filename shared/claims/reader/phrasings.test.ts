@@ -423,3 +423,47 @@ describe('sides named by the fluid or the delivery, supplies, charging times', (
     expect(g.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([['in', 7000 * 5 * 3600]]);
   });
 });
+
+/** More relations said in words (invented test data). g0 = 9.806 65 m/s² (NIST SP 811, Appendix B.8). */
+describe('ratios, masses and seconds said in words', () => {
+  const read = (text: string) => {
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    return figures;
+  };
+  const brief = (figures: Figure[]) => figures.map((f) => [f.kind, f.role, Number(f.si.toPrecision(12))]);
+
+  test('"3.2 µN for every kilowatt" is a thrust per power; "500 W for each kilogram" a power per mass', () => {
+    // 3.2 µN / 1 kW = 3.2e-9 N/W (SI prefixes, BIPM SI Brochure Table 7).
+    expect(brief(read('The laser thruster produces 3.2 µN for every kilowatt of optical power.'))).toEqual([['thrust-per-power', null, 3.2e-9]]);
+    expect(brief(read('The rig gives 500 W for each kilogram of rotor.'))).toEqual([['specific-power', null, 500]]);
+  });
+
+  test('a power per mass said as output, times the one mass given, is the power out', () => {
+    // 500 W/kg × 3 kg = 1500 W.
+    const f = read('The 3 kg flywheel generator is claimed to put out 500 W/kg while its drive motor draws 800 W.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['out', 1500],
+      ['in', 800],
+    ]);
+    // No side said for the ratio: nothing is multiplied ("a 30 W/kg array" says nothing of the array's mass).
+    expect(read('A 500 kg satellite with a 30 W/kg solar array draws 2 kW.').filter((x) => x.kind === 'power').map((x) => x.si)).toEqual([2000]);
+  });
+
+  test('seconds said of an engine are its specific impulse; "burning down to" names the dry mass', () => {
+    expect(brief(read('The probe has an ion engine at 3,000 s.'))).toEqual([['specific-impulse', null, 3000]]);
+    expect(brief(read('Starting at 10 t and burning down to 2 t, the stage reaches 9 km/s.')).filter(([k]) => k === 'mass')).toEqual([
+      ['mass', 'wet', 10000],
+      ['mass', 'dry', 2000],
+    ]);
+  });
+
+  test("an output meter's reading is the energy out", () => {
+    // 150 W × 30 days = 150 × 2 592 000 s = 388.8 MJ in; 250 kWh = 900 MJ out.
+    const f = read('The cabinet averaged 150 W from the wall over a 30-day run, while its output meter logged 250 kWh.');
+    expect(f.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
+      ['in', 388.8e6],
+      ['out', 900e6],
+    ]);
+  });
+});

@@ -123,6 +123,32 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     });
   }
 
+  // "the 3 kg flywheel generator … puts out 500 W/kg": a power per mass times the one mass the text
+  // gives (not a rocket's wet, dry or propellant mass) is a power on the side the words around the
+  // ratio say, when the text states no power on that side.
+  {
+    const sp = drafts.filter((d) => d.kind === 'specific-power');
+    const masses = drafts.filter((d) => d.kind === 'mass');
+    if (sp.length === 1 && masses.length === 1 && masses[0].role === null && sp[0].upper === undefined) {
+      const [ratio, mass] = [sp[0], masses[0]];
+      const w = siOf(ratio);
+      const kg = siOf(mass);
+      // (Only when words give the ratio a side: "a 500 kg satellite with a 30 W/kg array" says nothing of the array's mass.)
+      const role: FigureRole = roleFor(text, 'power', ratio.start, ratio.end, 0);
+      if (w !== null && kg !== null && w > 0 && kg > 0 && (role === 'in' || role === 'out') && !drafts.some((d) => d.kind === 'power' && d.role === role)) {
+        const last = ratio.start > mass.start ? ratio : mass;
+        insertAfter(drafts, last, {
+          start: Math.min(ratio.start, mass.start),
+          end: Math.max(ratio.end, mass.end),
+          kind: 'power',
+          quantity: typedSi(w * kg, 'W'),
+          role,
+          derived: `power = power per mass × mass (${formatQuantity(w, 'W/kg')} × ${formatQuantity(kg, 'kg')})`,
+        });
+      }
+    }
+  }
+
   // A "COP" of a circuit, a motor or a generator, where nothing moves heat: its output over its input.
   if (!HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) && ELECTRICAL_GAIN_RE.test(text) && !drafts.some((d) => d.kind === 'temperature')) {
     for (const d of drafts) {

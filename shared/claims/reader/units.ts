@@ -42,6 +42,7 @@ const WORD_RE = new RegExp(`${SEP}(${wordAlts})(?![\\p{L}\\p{N}_])`, 'iuy');
 const PERCENT_RE = /[^\S\n]{0,2}(?:%|per[ -]?cent(?!\p{L})|pct\.?(?!\p{L}))/iuy;
 /** A compound after a unit: "/kW", " per kilowatt", "·m", "/m²". */
 const COMPOUND_RE = /[^\S\n]*(?:\/|per(?!\p{L})|·|⋅|-(?=[^\S\n]*\p{L}\p{L}?\b))[^\S\n]*/iuy;
+const FOR_EVERY_RE = /[^\S\n]+for[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?/iuy;
 const COMPOUND_AFTER_RE = /[^\S\n]*(?:[/·⋅][^\S\n]*[\p{L}\p{N}]|per[^\S\n]+\p{L})/iuy;
 /** "1.3c", "0.5 c": a multiple of the speed of light (only attached to the number, or spaced before a non-letter). */
 const C_SUFFIX_RE = /(?:c|[^\S\n]c)(?![\p{L}\p{N}_°])/uy;
@@ -98,6 +99,15 @@ export function readSuffix(text: string, at: number): { suffix: Suffix; end: num
   if (u && /^(?:[-·⋅][^\S\n]*(?:type|class(?!\p{L})|[mhs](?!\p{L})|m²|m2))/iu.test(text.slice(u.end, u.end + 8))) return { suffix: null, end: at };
   if (u) {
     // A compound: thrust per power, power per mass; any other compound is not a figure.
+    // "3.2 µN for every kilowatt", "500 W for each kilogram": a ratio said in words.
+    FOR_EVERY_RE.lastIndex = u.end;
+    const every = FOR_EVERY_RE.exec(text);
+    if (every) {
+      const per = unitAt(text, u.end + every[0].length);
+      if (per && !per.form.factor && ((u.form.kind === 'thrust' && per.form.kind === 'power') || (u.form.kind === 'power' && per.form.kind === 'mass'))) {
+        return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
+      }
+    }
     COMPOUND_RE.lastIndex = u.end;
     const c = COMPOUND_RE.exec(text);
     if (c && /per/i.test(c[0])) {

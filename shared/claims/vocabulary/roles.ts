@@ -44,6 +44,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     role: 'out',
     before: [
       // (Before the plain word "output" below: the first alternative that fits wins.)
+      // "its output meter logged 250 kWh" (before the input's plain "meter logged").
+      '(?:output|load|export|generation) (?:meter|counter|logger|log)s? (?:[\\w-]+ )?(?:read|reads|recorded|records|showed|shows|measured|logged|logs|registered|counted|gave)',
       'outputs? (?:to|into) (?:the |its |a |an )?(?:[\\w-]+ ){0,3}?(?:is|was|are|were|of|at|reaches|reached)',
       '(?:loads?|load resistors?|resistors?|dummy loads?|lamps?|heaters?|heating elements?) (?:is |was |are |were )?(?:said to |reported to |measured to )?(?:dissipat\\w*|consum\\w*|absorb\\w*|tak(?:e|es|ing))', '(?:the |its )?(?:batter(?:y|ies)|cells?|capacitors?|water|tank|store|flywheel|load)(?: bank| pack)? (?:accepted|absorbed|received|took up|takes up|stored|gained|was given)', 'deliver(?:s|ed|ing)?', 'produc(?:e|es|ed|ing|tion)', 'outputs?', 'generat(?:e|es|ed|ing|ion)', 'yield(?:s|ed|ing)?',
       '(?:burns?|burned|burnt|burning) (?:for|to give|to yield|to release)', '(?:raised|raises|increased|increases|boosted|added to) (?:the |its )?(?:heat|energy|enthalpy|charge|temperature)(?: [\\w-]+){0,5}? by', '(?:electricity|electric(?:al)?(?: power| energy)?|power|energy|work|heat|light|shaft power) out[:=]?(?=[^\\S\\n]*$)', '(?:powers?|powered|powering|lights?|lit|lighting|keeps?|kept|drives?|drove|driving|driven|ran|run) (?:a|an|the|our|my|their|two|three|four|several)', '(?:shone|shines|shining|glow(?:s|ed|ing)?|burn(?:s|ed|ing)|lit) (?:at|with)(?= *$)', 'charg(?:e|es|ed|ing) (?:a|an|the|its|their|our) (?:[\\w-]+ ){0,2}(?:batter(?:y|ies)|cells?|packs?|capacitors?|banks?) (?:with|at)', 'return(?:s|ed|ing)?', 'provid(?:e|es|ed|ing)', 'releas(?:e|es|ed|ing)', 'gives?', 'giving', 'gave', 'puts? out',
@@ -106,7 +108,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
   },
   {
     role: 'dry',
-    before: ['dry', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert'],
+    before: ['dry', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert', '(?:burn(?:s|ing|ed|t)?|drops?|dropping|dropped|falls?|falling|fell) (?:down )?to', 'ends? (?:up )?(?:at|with)', 'ending (?:up )?(?:at|with)'],
     after: ['(?:dry|empty|final|burn-?out|structural) mass', '\\((?:empty|dry|unfuell?ed|when empty)\\)', 'dry', 'empty', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end'],
   },
   {
