@@ -104,6 +104,11 @@ describe('texts that say no propellant in other words, or leave out the thrust (
       expect(planned(text).checks).toContainEqual(['photon-bound', 'breaks']);
     }
   });
+  it('an electrospray thruster emitting droplets carries propellant, whatever class the matcher names', () => {
+    const text = 'Electrospray thrusters of this design manage 50–70 µN/W while emitting droplets of ionic liquid.';
+    const { checks } = runClaimChecks(extractFigures(text), { text, classes: ['propellant-free-thrust'] });
+    expect(checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+  });
   it('a propellant-free thruster with a power and no thrust figure needs the thrust', () => {
     expect(planned('Without any propellant, our thruster turns 3 kW of electricity into steady thrust.').needs).toContainEqual(['photon-bound', ['the thrust measured']]);
   });

@@ -82,7 +82,8 @@ export const PROPELLANT_FREE_WORDS = [
 export const PROPELLANT_WORDS = [
   'propellant', 'xenon', 'krypton', 'argon', 'hydrazine', 'kerosene', 'oxidi[sz]er', 'fuel tanks?', 'exhaust (?:velocity|speed)', 'Isp', 'specific impulse',
   'ion (?:thruster|engine|drive)', 'Hall(?:-effect)? (?:thruster|effect thruster)', 'rocket', 'reaction mass', 'mass flow', 'nozzle', 'ejects?', 'expels?',
-  'plasma thruster', 'resistojet', 'arcjet', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
+  'plasma thruster', 'resistojet', 'arcjet', 'electrospray(?: thrusters?| propulsion)?', 'colloid thrusters?', 'ionic liquids?', 'FEEP', 'field[- ]emission (?:electric )?(?:propulsion|thrusters?)',
+  '(?:emit(?:s|ting|ted)?|spray(?:s|ing|ed)?|eject(?:s|ing|ed)?|expel(?:s|ling|led)?) (?:charged |tiny |fine )?(?:droplets|ions|charged particles|particles|plasma)', 'pulsed plasma thrusters?', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
   'fans?', 'air-breathing', 'solar sails?', 'ion[- ]wind', 'ionic wind', 'corona(?: discharge)?', 'electrohydrodynamic', 'EHD', 'ionocraft', 'ablation', 'ablative', '(?:pushed|driven|propelled|illuminated|accelerated) by (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:lasers?|beams?|sunlight|light)',
   'ground(?:-based)? lasers?', 'laser-pushed', 'beamed (?:power|energy) from', 'tether',
   // Things that push on air or water (lawfully far above P/c).
