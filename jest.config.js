@@ -34,9 +34,6 @@ const esmOnly = [
 const nodeProject = (name, testMatch, extra = {}) => ({
   displayName: name,
   testEnvironment: 'node',
-  // A bound on hanging, not a speed check: creating and migrating a test database can pass jest's
-  // default of 5 s on a loaded 2-core machine.
-  testTimeout: 30_000,
   testMatch,
   transform: { '^.+\\.[cm]?[jt]sx?$': 'babel-jest' },
   transformIgnorePatterns: ['/node_modules/(?!(' + esmOnly.join('|') + ')/)'],
@@ -49,15 +46,16 @@ module.exports = {
   // tests' Chromium already keeps both cores busy, so the run took as long and timed out more often.
   // CW_TEST_WORKERS sets the number for a larger machine.
   ...(Number(process.env.CW_TEST_WORKERS) > 0 ? { maxWorkers: Number(process.env.CW_TEST_WORKERS) } : {}),
+  // For every project (jest reads it from the top level only): a bound on hanging, not a speed check.
+  // Creating and migrating a test database, or rendering a whole screen on a cold transform cache, can
+  // pass jest's default of 5 s on a loaded 2-core machine. Files that set their own keep theirs.
+  testTimeout: 30_000,
   projects: [
     nodeProject('shared', ['<rootDir>/shared/**/*.test.ts']),
     nodeProject('server', ['<rootDir>/tests/server/**/*.test.ts', '<rootDir>/server/**/*.test.ts']),
     {
       displayName: 'app',
       preset: 'jest-expo/web',
-      // A component test loads and renders a whole screen; on a cold transform cache with two workers
-      // on two cores that can pass jest's default of 5 s (a bound on hanging, not a speed check).
-      testTimeout: 30_000,
       // d3-scale and d3-shape ship ES modules as .mjs, which the preset does not transform.
       transform: { '\\.mjs$': ['babel-jest', { caller: { name: 'metro', bundler: 'metro', platform: 'web' } }] },
       testMatch: ['<rootDir>/components/**/*.test.tsx', '<rootDir>/tests/app/**/*.test.tsx'],
