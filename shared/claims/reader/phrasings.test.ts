@@ -458,6 +458,16 @@ describe('ratios, masses and seconds said in words', () => {
     ]);
   });
 
+  test('what a load the device runs draws is the device\'s output', () => {
+    // 250–300 W × 24 h = 21.6–25.92 MJ out; 10 kWh = 36 MJ in.
+    const f = read('A 10 kWh home battery ran a chest freezer drawing between 250 and 300 W for 24 hours.');
+    expect(f.filter((x) => x.kind === 'power' || x.kind === 'energy').map((x) => [x.kind, x.role, x.si, x.upper?.si])).toEqual([
+      ['energy', 'in', 36e6, undefined],
+      ['power', 'out', 250, 300],
+      ['energy', 'out', 21.6e6, 25.92e6],
+    ]);
+  });
+
   test("an output meter's reading is the energy out", () => {
     // 150 W × 30 days = 150 × 2 592 000 s = 388.8 MJ in; 250 kWh = 900 MJ out.
     const f = read('The cabinet averaged 150 W from the wall over a 30-day run, while its output meter logged 250 kWh.');

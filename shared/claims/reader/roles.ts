@@ -50,6 +50,9 @@ const STRONG_SIDE_RE = /(?<!\p{L})(hot|warm|cold|cool|sunlit|sunny|heated|shaded
 /** "hot brine at 85 °C", "cold water at 8 °C": a fluid said hot or cold just before its temperature. */
 const STRONG_FLUID_RE =
   /(?<!\p{L})(hot|warm|heated|cold|cool|chilled|cooled)(?:er)?[^\S\n]+(?:brine|water|air|gas|gases|fluid|steam|oil|exhaust|flue gas|coolant)[^\S\n]+(?:at|of|is|near|around)?[^\S\n]*(?:(?:about|around|roughly|some|nearly|only|just)[^\S\n]+)?$/iu;
+/** A load the device runs, then what it draws: "ran a chest freezer drawing", "powers two lamps using". */
+const LOAD_IT_RUNS_RE =
+  /(?<!\p{L})(?:ran|runs|run|running|powered|powers|powering|drove|drives|driving|kept|keeps|keeping|supplied|supplies|supplying|fed|feeds|feeding)[^\S\n]+(?:a|an|the|its|our|their|two|three|four|several)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}?(?:drawing|using|consuming|taking|pulling|rated at)[^\S\n]+(?:(?:only|just|about|some|roughly|nearly|around|approximately|up to|between|an average of)[^\S\n]+)*$/iu;
 /** Just before a temperature a machine delivers: "to deliver", "supplies", "provides water at". */
 const DELIVERS_LEAD_RE =
   /(?<!\p{L})(?:deliver(?:s|ed|ing)?|suppl(?:y|ies|ied|ying)|provid(?:e|es|ed|ing))[^\S\n]+(?:(?:water|air|heat|hot water|warm air)[^\S\n]+at[^\S\n]+)?(?:(?:about|around|roughly|some|nearly|only|just|up to)[^\S\n]+)?$/iu;
@@ -99,6 +102,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     if (PEOPLE_TAKE_LEAD_RE.test(lead) && TAKEN_FROM_IT_RE.test(text.slice(end, end + 40))) return 'out';
     // (Not when a supply is the subject: "the bench supply delivers 5 A" is what the device takes.)
     if (!/(?<!\p{L})(?:suppl(?:y|ies)|batter(?:y|ies)|mains|grid|sources?|sockets?|packs?|alternators?|chargers?|PSUs?|adapters?)[^\S\n]+\p{L}+[^\S\n]+[^.;!?\n]{0,12}$/iu.test(lead)) {
+      // "the battery ran a chest freezer drawing 300 W": what a load the device runs draws is its output.
+      if (LOAD_IT_RUNS_RE.test(text.slice(Math.max(floor, start - 70), start))) return 'out';
       if (IMMEDIATE_IN_RE.test(lead)) return 'in';
       if (IMMEDIATE_OUT_RE.test(lead)) return 'out';
     }
