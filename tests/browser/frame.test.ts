@@ -256,7 +256,8 @@ describe.each([
     await page.close();
   });
 
-  it('gives each route its own browser title, and a description for link previews', async () => {
+  // Titles do not depend on the width: checked once, on the wide screen (each visit is a page load).
+  if (!phone) it('gives each route its own browser title, and a description for link previews', async () => {
     const page = await open(width);
     const titleIs = (want: string) => until(`the title is “${want}”`, async () => (await page.title()) === want);
     /** Opens a path, waits for its screen to render, then for the title it sets. */
