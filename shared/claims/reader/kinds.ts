@@ -29,6 +29,19 @@ const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lowe
 /** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */
 const PERCENT_OF_HEAT_RE =
   /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:[\p{L}-]+[^\S\n]+)?(?:light|radiation|power|energy)|radiant (?:power|energy|heat)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
+/**
+ * "0.5 % of the heat that flows through it", said of a machine that turns heat into power (a
+ * harvester, a thermoelectric generator, an engine): its efficiency. Not of a heat exchanger, a
+ * recovery unit or insulation, where the share is heat passed on, not work.
+ */
+const PERCENT_OF_HEAT_THROUGH_RE =
+  /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?heat[^\S\n]+(?:(?:that|which)[^\S\n]+)?(?:flows?|flowing|passes|passing|goes|going|moves|moving)[^\S\n]+(?:through|across)(?!\p{L})/iuy;
+const HEAT_TO_POWER_MACHINE_RE = /(?<!\p{L})(?:harvest\w*|thermoelectric|TEGs?|thermo-?generators?|generators?|engines?|Stirling|turbines?|ORC|Seebeck)(?!\p{L})/iu;
+const HEAT_PASSED_ON_RE = /(?<!\p{L})(?:exchangers?|recover\w*|recuperat\w*|ventilat\w*|insulat\w*|regenerat\w*|heat sinks?|radiators?|HRV|ERV)(?!\p{L})/iu;
+const percentOfHeatThrough = (text: string, end: number): boolean => {
+  PERCENT_OF_HEAT_THROUGH_RE.lastIndex = end;
+  return PERCENT_OF_HEAT_THROUGH_RE.test(text) && HEAT_TO_POWER_MACHINE_RE.test(text) && !HEAT_PASSED_ON_RE.test(text);
+};
 /** "5 % conversion", "61 % net", ", 25 %, leaves as shaft work": a share turned into work or electricity. */
 const SHARE_AS_WORK_RE =
   /[^\S\n]*(?:(?:net|gross|conversion|thermal|electrical|electric|overall|cycle|first-law|brake)(?!\p{L})|[,)]?[^\S\n]*(?:leaves|comes out|emerges|is delivered|is returned|appears|ends up)[^\S\n]+as[^\S\n]+(?:useful[^\S\n]+)?(?:shaft[^\S\n]+|mechanical[^\S\n]+|electrical[^\S\n]+)?(?:work|electricity|power|motion))/iuy;
@@ -118,7 +131,7 @@ export function readPercent(text: string, start: number, end: number, floor: num
   EFFICIENCY_AFTER_RE.lastIndex = end;
   PERCENT_OF_HEAT_RE.lastIndex = end;
   SHARE_AS_WORK_RE.lastIndex = end;
-  const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text);
+  const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text) || percentOfHeatThrough(text, end);
   const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before);
   // "Ammonia–water cycle engine, 19 % at a 120 °C heat source": a percentage said right after a heat
   // engine named, with a temperature in the same sentence, is its efficiency.

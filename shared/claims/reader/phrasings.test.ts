@@ -476,4 +476,18 @@ describe('ratios, masses and seconds said in words', () => {
       ['out', 900e6],
     ]);
   });
+  test('"the motor is a 10 hp unit" is the motor\'s rated output; a heat pump\'s compressor motor is not', () => {
+    // 10 hp × 745.69987158227 W/hp = 7456.9987 W (NIST SP 811 B.8).
+    const f = read('The pump motor is a 10 hp unit drawing 8.2 kW at full load.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, Math.round(x.si)])).toEqual([
+      ['out', 7457],
+      ['in', 8200],
+    ]);
+    expect(read('The heat pump motor is a 2 hp unit.').filter((x) => x.kind === 'power').map((x) => x.role)).not.toContain('out');
+  });
+  test('"0.5 % of the heat that flows through it" is a harvester\'s efficiency, not a heat-recovery unit\'s share', () => {
+    expect(read('The skin harvester collects 30 µW from 34 °C skin into 22 °C air, about 0.5 % of the heat that flows through it.').filter((x) => x.kind === 'efficiency').map((x) => x.si)).toEqual([0.005]);
+    // A ventilator passes heat on: its 85 % is no conversion to work (a Carnot check on it would be a false alarm).
+    expect(read('The heat recovery ventilator recovers 85 % of the heat passing through it, between 20 °C indoors and 0 °C outside.').filter((x) => x.kind === 'efficiency')).toEqual([]);
+  });
 });

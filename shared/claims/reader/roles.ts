@@ -161,6 +161,10 @@ export function roleFor(text: string, kind: FigureKind, start: number, end: numb
 
 /** A machine named right after a power, with at most two words between ("150 PS engine", "1 hp rotary compressor"). */
 const RATED_ENGINE_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:engines?|motors?|turbines?)(?!\p{L})(?![^.;!?\n]{0,40}(?<!\p{L})(?:drives?|driving|drove|driven|turns?|turning|turned|powers?|powering|powered|spins?|spinning|spun|runs?|running|ran|pumps?|pumping|feeds?|feeding|coupled|connected|attached|linked)(?!\p{L}))/iu;
+/** "… motor is a" / "… engine was an" right before a rating (no compressor or cooler word in the name). */
+const RATED_SUBJECT_BEFORE_RE = /(?<!(?:compressor|cooler|fridge|freezer|chiller|conditioner|heat[^\S\n]+pumps?)[^\S\n]+)(?<!\p{L})(?:engine|motor|turbine)[^\S\n]+(?:is|was)[^\S\n]+(?:a|an)[^\S\n]+$/iu;
+/** A rating followed by a word for the machine itself ("unit", "model"), and no word that it drives something. */
+const RATED_UNIT_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:unit|machine|model|design|frame|motor|engine|turbine)(?!\p{L})(?![^.;!?\n]{0,40}(?<!\p{L})(?:drives?|driving|turns?|turning|powers?|powering|spins?|spinning|feeds?|feeding|coupled|connected|attached|linked)(?!\p{L}))/iu;
 const RATED_DRIVEN_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:cryocoolers?|compressors?|fridges?|refrigerators?|freezers?|chillers?|air[- ]conditioners?|heat pumps?|coolers?)(?!\p{L})/iu;
 
 /**
@@ -175,5 +179,8 @@ export function ratingRole(text: string, start: number, end: number): FigureRole
   const horsepower = /(?:hp|horsepower|PS|CV|bhp)\s*$/iu.test(text.slice(start, end));
   if (horsepower && RATED_DRIVEN_AFTER_RE.test(after)) return 'in';
   if (RATED_ENGINE_AFTER_RE.test(after) && /(?:^|[.!?:\n][^\S\n]*)(?:the|a|an|our|this|its|their|each)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 40), start))) return 'out';
+  // "The pump motor is a 10 hp unit drawing 8.2 kW": the rating of the motor, engine or turbine the
+  // sentence is about (not a compressor's or a cooler's drive, not one that drives something named).
+  if (RATED_SUBJECT_BEFORE_RE.test(text.slice(Math.max(0, start - 60), start)) && RATED_UNIT_AFTER_RE.test(after)) return 'out';
   return null;
 }
