@@ -35,6 +35,8 @@
  *     - an excess over a stated input ("4 W more heat than the 20 W it draws") → out = in + excess;
  *     - "self-running", "needs no supply" … (not where the device harvests an outside flow) → in = 0;
  *     - one temperature and a difference → the other temperature (hot = cold + ΔT, or cold = hot − ΔT).
+ *  TeX left in a text ("$\\eta = 0.42$", "1.7 \\times 10^{-6} N", "44.7\\,\\%") is read as written plainly
+ *  (reader/tex.ts), the offsets mapped back to the pasted text.
  *  Numbers after a label ("Figure 2 A", "Section 3.2", "p. 12", "Eq. 4", "§ 3") and years before an
  *  initial ("in 2019 A. N. Other") are not figures.
  *
@@ -52,12 +54,28 @@
  */
 import type { Figure } from './types';
 import { readFigures } from './reader/figures';
+import { detex } from './reader/tex';
 
 /**
  * The figures in a pasted text, in order of appearance, with ids "f1", "f2", …; derived figures
  * follow the figures they come from. See the file's comment for what is read.
  */
 export function extractFigures(text: string): Figure[] {
+  const plain = detex(text);
+  if (plain === null) return readPlain(text);
+  // TeX left in the text ("$\\eta = 0.42$", "1.7 \\times 10^{-6} N"): read as plainly written, then
+  // each figure's offsets and words point back at the pasted text.
+  const { toPasted } = plain;
+  return readPlain(plain.text).map((f) => {
+    if (f.start === null || f.end === null) return f;
+    const start = toPasted[f.start];
+    let end = toPasted[f.end];
+    while (end > start + 1 && /[\s$]/.test(text[end - 1])) end--;
+    return { ...f, start, end, text: text.slice(start, end) };
+  });
+}
+
+function readPlain(text: string): Figure[] {
   const restated: [number, number][] = [];
   const figures = readFigures(text, restated);
   if (restated.length === 0) return figures;
