@@ -37,6 +37,33 @@ const LIFTS_BEFORE_RE = /(?<!\p{L})(?:lifts?|lifted|lifting|levitat(?:es?|ed|ing
 /** Machines that lift loads lawfully by pushing on the ground (their lifted mass is no thrust). */
 const HOIST_RE = /(?<!\p{L})(?:cranes?|hoists?|winch(?:es)?|forklifts?|lift trucks?|elevators?|lifts? (?:shaft|car)|jacks?|pulleys?|block and tackle|levers?|hydraulic|pistons?|arms?|robots?|weightlift\w*|athletes?|balloons?|airships?|blimps?|buoyan\w*|helium|hydrogen|lifters?|ion(?:ic)?[- ]wind|corona|EHD|electrohydrodynamic|drones?|quadcopters?|multicopters?|propellers?|rotor blades?|helicopters?)(?!\p{L})/iu;
 
+/**
+ * A heat pump's rating point written as the standards write it (EN 14511): "A7/W35" is source air at
+ * 7 °C and water leaving at 35 °C, "B0/W35" brine at 0 °C, "W10/W35" source water at 10 °C. With one
+ * such point and no temperature said otherwise, its two temperatures are the cold and the hot side.
+ */
+const RATING_POINT_RE = /(?<![\p{L}\p{N}])([ABW])[^\S\n]?([-−]?\d{1,2}(?:[.,]\d)?)[^\S\n]*\/[^\S\n]*W[^\S\n]?(\d{2}(?:[.,]\d)?)(?![\p{L}\p{N}])/gu;
+const SOURCE_NAME: Record<string, string> = { A: 'source air', B: 'brine', W: 'source water' };
+function ratingPoint(text: string, drafts: Draft[]): void {
+  if (drafts.some((d) => d.kind === 'temperature' || d.kind === 'temperature-difference')) return;
+  if (!HEAT_PUMP_RE.test(text) && !/(?<!\p{L})(?:S?COP|coefficient of performance)(?!\p{L})/iu.test(text)) return;
+  const points = [...text.matchAll(RATING_POINT_RE)];
+  if (points.length === 0 || new Set(points.map((m) => m[0].replace(/\s/g, '').replace('−', '-'))).size > 1) return;
+  const m = points[0];
+  const cold = Number(m[2].replace('−', '-').replace(',', '.'));
+  const hot = Number(m[3].replace(',', '.'));
+  if (!(hot > cold)) return;
+  const start = m.index!;
+  const end = start + m[0].length;
+  const why = `rating point ${m[0].replace(/\s/g, '')}: ${SOURCE_NAME[m[1]]} at ${cold} °C, water out at ${hot} °C`;
+  for (const [t, role] of [[cold, 'cold'], [hot, 'hot']] as const) {
+    const d: Draft = { start, end, kind: 'temperature', quantity: `${t} degC`, role, derived: why };
+    const at = drafts.findIndex((x) => x.start > start);
+    if (at < 0) drafts.push(d);
+    else drafts.splice(at, 0, d);
+  }
+}
+
 /** Relations between the figures read, in this order (see the file's comment). */
 export function relateFigures(text: string, drafts: Draft[]): void {
   // "P_out/P_in = 3.2 kW / 0.8 kW": the roles in the order the labels give them.
@@ -158,6 +185,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       }
     }
   }
+  ratingPoint(text, drafts);
   rolesByContext(text, drafts);
 
   // "every kilowatt fed to it gives four hundred millinewtons": a thrust per power.

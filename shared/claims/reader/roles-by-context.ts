@@ -39,6 +39,14 @@ const STORE_GIVES_RE =
 const STORE_INTO_RE =
   /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?into[^\S\n]+(?:(?:a|an|the|its|our|my|their)[^\S\n]+)?(?:[\p{L}\d-]+[^\S\n]+){0,2}?(?:cells?|batter(?:y|ies)|packs?|capacitors?|supercaps?|supercapacitors?|accumulators?|flywheels?)(?!\p{L})/iu;
 
+/** A store of energy named in the sentence of its energy. */
+const STORE_NOUN_RE = /(?<!\p{L})(?:cells?|batter(?:y|ies)|packs?|accumulators?|power banks?|capacitors?|supercaps?|supercapacitors?)(?!\p{L})/iu;
+/** Just before what a load draws: "Lamp draw:", "draws", "consumption of". */
+const DRAW_LEAD_RE = /(?<!\p{L})(?:draws?|drawing|consumption|consumes|consuming|uses|using|load)(?!\p{L})[^\d\n]{0,15}$/iu;
+/** Anything else that could feed the load or fill the store. */
+const OTHER_SOURCE_RE =
+  /(?<!\p{L})(?:solar|sun|panels?|photovoltaic|PV|charg\w*|recharg\w*|generat\w*|harvest\w*|mains|grid|wind|turbines?|dynamos?|alternators?|cranks?|fuel|engines?|topped up|top up|plugged|self-\w+|free energy|over-?unity)(?!\p{L})/iu;
+
 /** Roles the words leave open, read from the other figures (see the file's comment). */
 export function rolesByContext(text: string, drafts: Draft[]): void {
   // "covers 4.2 light years in 30 days": a speed, distance over time (IAU 2012 B2 astronomical unit,
@@ -111,6 +119,16 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     const bClause = text.slice(a.end, b.start).split(/[,;]|(?<!\p{L})(?:and|while|whereas)(?!\p{L})/iu).pop() ?? '';
     const bMakes = generator.test(bClause + text.slice(b.end, b.end + 25)) && !/(?<!\p{L})(?:shaft|crank(?:shaft)?)(?!\p{L})/iu.test(bClause);
     if (aDrives && bMakes && /(?<!\p{L})(?:alternators?|generators?|dynamos?|gensets?|generating sets?)(?!\p{L})/iu.test(text)) a.role = 'in';
+  }
+  // "Cell: 20 Wh lithium pack / Lamp draw: 0.05 W / ran two weeks": a store of energy drained by a
+  // load over a run. What the store holds is the input and what the load draws from it the output, so
+  // the ledger asks whether the draw over the run fits in the store. Only with one store, one draw, a
+  // run and nothing else of energy; never where the store is being charged or something else feeds the load.
+  const stores = drafts.filter((d) => d.kind === 'energy' && (d.role === null || d.role === 'in') && !d.derived && STORE_NOUN_RE.test(sentenceAround(text, d.start, d.end)));
+  const draws = drafts.filter((d) => d.kind === 'power' && d.role === 'in' && !d.derived && DRAW_LEAD_RE.test(text.slice(Math.max(0, d.start - 30), d.start)));
+  if (stores.length === 1 && draws.length === 1 && drafts.filter(energyLike).length === 2 && drafts.some((d) => d.kind === 'duration') && !OTHER_SOURCE_RE.test(text)) {
+    stores[0].role = 'in';
+    draws[0].role = 'out';
   }
   // One side named, one figure left: the other side.
   const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));

@@ -24,6 +24,11 @@ export function differenceQuantity(num: string, unit: string): string {
   return `${num} K`;
 }
 
+/** A difference's label at the head of a line or a list item, a few words, then ":" or "=". */
+const DIFF_LABEL_RE = new RegExp(
+  `(?:^|[\\n|•·;]|[-*][^\\S\\n])[^\\S\\n]*(?:ΔT|∆T|Δ T|delta[- ]?T|dT|temperature (?:difference|differential|lift|rise|drop|span|spread)|temp\\.? diff\\.?|lift|rise)(?![\\p{L}\\p{N}])[^\\n:=|•;]{0,30}[:=][^\\S\\n]*(?:(?:about|approx\\.?|ca\\.|~|≈|up to)[^\\S\\n]*)?$`,
+  'iu',
+);
 /** Which way a difference points: "30 °C below …", "9 °F cooler" → down; "40 degrees above …" → up. */
 export function differenceDirection(text: string, end: number): 'up' | 'down' | undefined {
   const after = text.slice(end, end + 30);
@@ -34,6 +39,8 @@ export function differenceDirection(text: string, end: number): 'up' | 'down' | 
 
 export function isDifference(text: string, start: number, end: number, floor: number): boolean {
   const before = text.slice(Math.max(floor, start - 60), start);
+  // A label of a sheet or a list: "ΔT source to flow: 40 K", "• Temperature lift (W35): 30 K".
+  if (DIFF_LABEL_RE.test(before)) return true;
   if (DIFF_BEFORE_RE.test(before)) {
     // "only 20 °C" / "just 20 °C" alone are not differences: the clause must speak of one.
     const m = DIFF_BEFORE_RE.exec(before)!;

@@ -107,6 +107,8 @@ export const SELF_RUNNING_WORDS = [
   '(?:battery|supply|mains|power|source) (?:is |was |being )?(?:disconnected|taken out|removed|unplugged)', '(?:turning|running|spinning|going) on its own', '(?:battery|supply) (?:taken out|removed)',
   'nothing connected to it', 'with nothing connected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
   'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
+  // A sheet's label said to be empty: "Input: none", "Power source: nil".
+  '(?:(?:electrical|electric|power|energy|external) )?(?:input|supply|power source|energy source)(?: (?:power|energy))?[^\\S\\n]*[:=][^\\S\\n]*(?:none|nil|nothing|zero|not needed|not required)',
   'no fuel', 'fuel-?less', 'free energy', 'no (?:motor|engine|drive|battery) and no (?:other )?(?:input|supply|power)', 'no other (?:input|supply|power source|energy source|source of (?:power|energy))',
 ];
 /** Where "self-powered" is lawful: the device harvests an outside flow of energy. */

@@ -1,0 +1,69 @@
+/**
+ * Claims pasted from specification sheets, data sheets and bullet lists: labels with a colon, one
+ * figure a line, the trade's notation. Conversions: NIST SP 811 (2008) Appendix B.8 (°C → K adds
+ * 273.15; 1 Wh = 3600 J; 1 week = 604 800 s). Rating points: EN 14511 writes a heat pump's test
+ * condition as source and sink temperatures, "A7/W35" = outdoor air 7 °C, water flow 35 °C.
+ */
+import { runClaimChecks } from '../plan';
+import { extractFigures } from '../reader';
+import { expectWellFormed } from './test-support';
+
+const read = (text: string) => {
+  const f = extractFigures(text);
+  expectWellFormed(text, f);
+  return f;
+};
+const brief = (text: string) => read(text).map((f) => [f.kind, f.role, Math.round(f.si * 1000) / 1000]);
+
+describe('claims pasted from sheets and lists', () => {
+  test('a difference given by its label ("ΔT source to flow: 40 K") is a difference, and the other side follows', () => {
+    // 55 °C = 328.15 K; 328.15 − 40 = 288.15 K.
+    expect(brief('Flow temperature: 55 °C\nΔT source to flow: 40 K\nHeating COP: 3.2')).toEqual([
+      ['temperature', 'hot', 328.15],
+      ['temperature-difference', null, 40],
+      ['temperature', 'cold', 288.15],
+      ['cop', 'heating', 3.2],
+    ]);
+    // Before: 40 K read as an absolute cold side made a lawful heat pump break Carnot (a false alarm).
+    const text = 'Flow temperature: 55 °C\nΔT source to flow: 40 K\nHeating COP: 3.2';
+    const run = runClaimChecks(extractFigures(text), { text, classes: [] });
+    expect(run.checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+  });
+
+  test("a store drained by a load: the store's energy is the input, the load's draw over the run the output", () => {
+    // 20 Wh = 72 000 J; 0.05 W × 2 weeks = 0.05 × 1 209 600 s = 60 480 J ≤ 72 000 J (lawful).
+    const text = 'Cell: 20 Wh lithium pack\nLamp draw: 0.05 W continuous\nRan two weeks before the cell was flat';
+    expect(brief(text)).toEqual([
+      ['energy', 'in', 72000],
+      ['power', 'out', 0.05],
+      ['duration', null, 1209600],
+      ['energy', 'out', 60480],
+    ]);
+    expect(runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
+    // Not where something else feeds the load or the store is charged.
+    expect(read('A 20 Wh pack and a small solar panel keep a lamp drawing 1 W lit for 3 days.').find((f) => f.kind === 'power')?.role).toBe('in');
+    expect(read('The charger draws 60 W and fills a 20 Wh pack in 30 minutes.').find((f) => f.kind === 'power')?.role).toBe('in');
+  });
+
+  test('"Input: none" on a sheet is an input of 0', () => {
+    // 5 hp × 745.69987158227 W/hp = 3728.5 W.
+    expect(brief('Flyer, magnet motor\n• 5 hp continuous\n• Input: none, runs on its magnets')).toEqual([
+      ['power', 'out', 3728.499],
+      ['power', 'in', 0],
+    ]);
+  });
+
+  test('"Isp (vac): 320 s" is a specific impulse', () => {
+    expect(brief('m0 = 1,250 kg; propellant: 800 kg\nIsp (vac): 320 s').find(([k]) => k === 'specific-impulse')).toEqual(['specific-impulse', null, 320]);
+  });
+
+  test('one rating point "A7/W35" gives the two sides; two different points are left alone', () => {
+    // 7 °C = 280.15 K (cold, source air); 35 °C = 308.15 K (hot, water flow).
+    const f = read('Air-to-water heat pump\nHeat output (A7/W35): 9.2 kW\nElectrical input: 2.0 kW\nCOP: 4.6').filter((x) => x.kind === 'temperature');
+    expect(f.map((x) => [x.role, Math.round(x.si * 100) / 100])).toEqual([
+      ['cold', 280.15],
+      ['hot', 308.15],
+    ]);
+    expect(read('Ground source unit, COP 5.1 at B0/W35 and 3.4 at B0/W55.').filter((x) => x.kind === 'temperature')).toEqual([]);
+  });
+});
