@@ -56,6 +56,13 @@ export const ISP_AFTER_RE = new RegExp(
 /** Gains: "1.3 units back for every unit", "three times the energy it takes", "output is 3 times the input". */
 const GAIN_AFTER_RE =
   /[^\S\n]*(?:(?:units?|joules?|watts?|J|W|kWh|times)[^\S\n]+)?(?:(?:of[^\S\n]+)?(?:(?:electrical|electric|useful|mechanical|thermal)[^\S\n]+)?(?:energy|power|output|heat|work|electricity)[^\S\n]+)?(?:(?:back|out|returned|in return|delivered|produced)[^\S\n]+)?(?:(?:to|into|at)[^\S\n]+(?:the|its|a)[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each|one)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:unit|joule|watt|J|W|kWh|kilowatt-hour)s?(?:[^\S\n]+(?:of[^\S\n]+)?(?:energy|power|electricity|input|work|fuel))?(?:[^\S\n]+(?:in|put in|supplied|consumed|used|spent|it (?:takes|uses|consumes|draws|is given|receives)|taken|drawn|of input|invested|taken (?:at|from|in) [^.;!?\n]{0,30}|(?:the|its)[^\S\n]+[\p{L}-]+[^\S\n]+(?:takes|uses|draws|consumes|gets|receives))|(?<=electricity|input|work|fuel|energy|power)(?!\p{L}))/iuy;
+/**
+ * "3 units of energy for every 4 it takes", "0.92 units of electricity and heat for every unit of
+ * fuel": units out for a number of units in (group 1; none for a single unit).
+ */
+const GAIN_FOR_EVERY_RE =
+  /[^\S\n]*units?[^\S\n]+(?:of[^\S\n]+(?:[\p{L}-]+[^\S\n]+){1,4}?)?(?:(?:back|out|returned|delivered)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:(\d+(?:\.\d+)?|two|three|four|five|six|seven|eight|nine|ten)(?![\p{L}\p{N}])|units?(?!\p{L}))(?=[^.;!?\n]{0,40}(?:in|takes?|took|consumes?|uses?|draws?|of (?:fuel|input|energy|electricity|power|work)|put in|supplied|fed)(?!\p{L}))/iuy;
+const SMALL_NUMBER: Record<string, number> = { two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10 };
 /** "For every unit of electricity we put in, the amplifier gives back 1.3." */
 const GAIN_BEFORE_RE =
   /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
@@ -188,6 +195,13 @@ export function bareKind(text: string, start: number, end: number, floor: number
   }
   GAIN_AFTER_RE.lastIndex = end;
   if (GAIN_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'units out for each unit in' };
+  // "returns 3 units of energy for every 4 it takes", "0.92 units of electricity and heat for every unit of fuel".
+  GAIN_FOR_EVERY_RE.lastIndex = end;
+  const every = GAIN_FOR_EVERY_RE.exec(text);
+  if (every) {
+    const per = every[1] === undefined ? 1 : (SMALL_NUMBER[every[1].toLowerCase()] ?? Number(every[1]));
+    if (per > 0) return { kind: 'efficiency', factor: 1 / per, derived: per === 1 ? 'units out for each unit in' : `units out for every ${every[1]} in` };
+  }
   PERCENT_OF_HEAT_RE.lastIndex = end;
   if (PERCENT_OF_HEAT_RE.test(text)) return { kind: 'efficiency' };
   if (GAIN_BEFORE_RE.test(text.slice(windowStart(text, start, floor, 160), start))) return { kind: 'efficiency', derived: 'units out for each unit in' };

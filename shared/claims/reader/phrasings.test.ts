@@ -490,4 +490,29 @@ describe('ratios, masses and seconds said in words', () => {
     // A ventilator passes heat on: its 85 % is no conversion to work (a Carnot check on it would be a false alarm).
     expect(read('The heat recovery ventilator recovers 85 % of the heat passing through it, between 20 °C indoors and 0 °C outside.').filter((x) => x.kind === 'efficiency')).toEqual([]);
   });
+  test('"exceeds the 60 W input by 21 W" is an input and an excess; a load "found to dissipate" is the output', () => {
+    // out = in + excess = 60 + 21 = 81 W.
+    expect(brief(read('The output exceeds the 60 W electrical input by 21 W [8].'))).toEqual([
+      ['power', 'in', 60],
+      ['power', 'excess', 21],
+      ['power', 'out', 81],
+    ]);
+    // 0.35 A × 12 V = 4.2 W in.
+    expect(brief(read('The coil driver consumes 0.35 A at 12 V, while the load resistor is found to dissipate 9.8 W.')).filter(([k]) => k === 'power')).toEqual([
+      ['power', 'in', 4.2],
+      ['power', 'out', 9.8],
+    ]);
+  });
+
+  test('"3 units for every 4 it takes" is an efficiency of 3/4; "units of electricity and heat for every unit of fuel" too', () => {
+    expect(read('The transformer returns 3 units of energy for every 4 it takes.').map((x) => [x.kind, x.si])).toEqual([['efficiency', 0.75]]);
+    expect(read('Overall: 0.92 units of electricity and heat for every unit of fuel').map((x) => [x.kind, x.si])).toEqual([['efficiency', 0.92]]);
+  });
+
+  test("a power-making machine's own mass and specific power give its output; a craft's mass does not", () => {
+    // 800 W/kg × 4.5 kg = 3600 W.
+    const f = read('The generator has a mass of 4.5 kg and a specific power of 800 W/kg.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['out', 3600]]);
+    expect(read('A 500 kg satellite with a 30 W/kg solar array draws 2 kW.').filter((x) => x.kind === 'power').map((x) => x.si)).toEqual([2000]);
+  });
 });

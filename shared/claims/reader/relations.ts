@@ -10,7 +10,7 @@ import { HARVEST_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import { FIGURE_SI_UNIT, type FigureRole } from '../types';
-import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, windowStart } from './context';
+import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor } from './roles';
@@ -64,6 +64,11 @@ function ratingPoint(text: string, drafts: Draft[]): void {
   }
 }
 
+/** Machines whose specific power is what they put out. */
+const POWER_MAKER_RE = /(?<!\p{L})(?:generators?|alternators?|dynamos?|gensets?|engines?|turbines?|fuel cells?|RTGs?|reactors?|motors?)(?!\p{L})/iu;
+/** A craft or vehicle, whose mass is not the mass of a part it carries. */
+const CRAFT_WORDS_RE = /(?<!\p{L})(?:satellites?|spacecraft|probes?|craft|vehicles?|cars?|rockets?|drones?|aircraft|planes?|ships?|boats?|bikes?|trucks?|landers?|rovers?|stages?)(?!\p{L})/iu;
+
 /** Relations between the figures read, in this order (see the file's comment). */
 export function relateFigures(text: string, drafts: Draft[]): void {
   // "P_out/P_in = 3.2 kW / 0.8 kW": the roles in the order the labels give them.
@@ -84,6 +89,20 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     if (AMPLIFY_BEFORE_RE.test(lead) && /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,3}?(?:in)?to[^\S\n]+(?:about[^\S\n]+|some[^\S\n]+|roughly[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
       a.role = 'in';
       b.role = 'out';
+    }
+  }
+
+  // "the output exceeds the 60 W electrical input by 21 W": the first is the input, the second the excess.
+  for (let i = 0; i + 1 < drafts.length; i++) {
+    const [a, b] = [drafts[i], drafts[i + 1]];
+    if (!(a.kind === b.kind && (a.kind === 'power' || a.kind === 'energy'))) continue;
+    const lead = text.slice(Math.max(0, a.start - 40), a.start);
+    if (
+      /(?<!\p{L})(?:exceeds?|exceeded|exceeding|surpass(?:es|ed|ing)?|outstrips?|outstripped|tops?|topped|beats?|beat)[^\S\n]+(?:(?:the|its|their|an?)[^\S\n]+)?$/iu.test(lead) &&
+      /^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,5}?by[^\S\n]+(?:(?:about|some|roughly|nearly|fully|a full|over|more than)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))
+    ) {
+      a.role = 'in';
+      b.role = 'excess';
     }
   }
 
@@ -161,7 +180,12 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       const w = siOf(ratio);
       const kg = siOf(mass);
       // (Only when words give the ratio a side: "a 500 kg satellite with a 30 W/kg array" says nothing of the array's mass.)
-      const role: FigureRole = roleFor(text, 'power', ratio.start, ratio.end, 0);
+      let role: FigureRole = roleFor(text, 'power', ratio.start, ratio.end, 0);
+      // "The generator has a mass of 4.5 kg and a specific power of 800 W/kg": a machine that makes
+      // power, its own mass and its specific power in one sentence — its output (not a craft's mass
+      // beside the ratio of a part it carries).
+      const sentence = sentenceAround(text, Math.min(ratio.start, mass.start), Math.max(ratio.end, mass.end));
+      if (role === null && sentence.includes(text.slice(ratio.start, ratio.end)) && sentence.includes(text.slice(mass.start, mass.end)) && POWER_MAKER_RE.test(sentence) && !CRAFT_WORDS_RE.test(sentence)) role = 'out';
       if (w !== null && kg !== null && w > 0 && kg > 0 && (role === 'in' || role === 'out') && !drafts.some((d) => d.kind === 'power' && d.role === role)) {
         const last = ratio.start > mass.start ? ratio : mass;
         insertAfter(drafts, last, {
