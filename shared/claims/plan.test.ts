@@ -243,6 +243,16 @@ describe('signals for the matcher', () => {
     expect(signalledClasses([fig('power', '1 kW', 'in'), fig('power', '3 kW', 'out')], 'a coil')).toEqual(['over-unity']);
     expect(readSignals({ text: 'without expelling any propellant' })).toMatchObject({ propellantFree: true, propellant: false });
   });
+
+  it('a speed above c, a converter over its limit, and a percentage above 100 % point to their own classes', () => {
+    const classes = (text: string) => signalledClasses(extractFigures(text), text);
+    // 900 million mph × 0.44704 m/s per mph (NIST SP 811 B.8) = 4.02 × 10⁸ m/s > c = 299 792 458 m/s.
+    expect(classes('The craft cruised at 900 million mph.')).toContain('faster-than-light');
+    // Carnot between 40 °C and 20 °C: 20 / 313.15 = 6.4 % < 12 % claimed.
+    expect(classes('With the hot plate at 40 °C and the cold at 20 °C, the thermoelectric module converts 12 % of the heat into electricity.')).toEqual(['converter-beyond-limit']);
+    expect(classes('The EQE reaches 126 % near the absorption peak.')).toEqual(['efficiency-above-unity']);
+    expect(classes('The ordinary heat pump is 350 % efficient.')).toEqual(['efficiency-above-unity']);
+  });
 });
 
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {

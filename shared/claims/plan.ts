@@ -40,6 +40,9 @@ export { readSignals } from './plan/signals';
 /** The classes signalledClasses can return (the matcher boosts them and every class below them). */
 export const SIGNALLABLE_CLASSES = ['propellant-free-thrust', 'over-unity', 'single-reservoir-engine'] as const;
 
+/** Converters of light or heat to electricity with no moving parts (their limits are the Carnot, Landsberg and Shockley–Queisser bounds). */
+const CONVERTER_RE = /(?<!\p{L})(?:thermoelectric|TEGs?|Seebeck|thermophotovoltaic|TPV|thermionic|solar cells?|photovoltaic|PV cells?|PV modules?)(?!\p{L})/iu;
+
 /**
  * The mechanism classes a claim's figures point to, for the matcher:
  *  - a thrust with a power (or a thrust per power) and no word of propellant → the propellant-free classes;
@@ -58,11 +61,18 @@ export function signalledClasses(figures: Figure[], text: string): string[] {
   const energyIn = figures.some((f) => (f.kind === 'power' || f.kind === 'energy') && f.role === 'in');
   const gain = figures.some((f) => f.kind === 'efficiency' && f.si > 1);
   if ((energyOut && energyIn) || gain) if (!s.heatPump && !s.cooling && !has('thrust')) out.add('over-unity');
+  // A percentage above 100 % said of an efficiency ("250 % efficient", a heat pump's "350 %"), or a
+  // quantum efficiency above one: the entry on what such figures mean.
+  const percentOver = figures.some((f) => (f.kind === 'efficiency' || f.kind === 'cop' || f.kind === 'quantum-efficiency') && f.si > 1 && /%|per ?cent/iu.test(f.text));
+  if (percentOver || figures.some((f) => f.kind === 'quantum-efficiency' && f.si > 1)) out.add('efficiency-above-unity');
   for (const run of runClaimChecks(figures, { text }).checks) {
     if (run.finding !== 'breaks') continue;
     if (run.check === 'first-law') out.add('over-unity');
-    if (run.check === 'carnot') out.add('single-reservoir-engine');
+    // A solar cell's or a thermoelectric converter's efficiency over its limit is its own class.
+    if (run.check === 'carnot') out.add(CONVERTER_RE.test(text) ? 'converter-beyond-limit' : 'single-reservoir-engine');
+    if (run.check === 'light-converter-limits') out.add('converter-beyond-limit');
     if (run.check === 'photon-bound') out.add('propellant-free-thrust');
+    if (run.check === 'light-speed') out.add('faster-than-light');
   }
   return [...out];
 }
