@@ -18,7 +18,8 @@ import type { MariaDbServer } from '../server/db/mariadb';
 import { importEntriesIfEmpty } from '../server/db/seed-entries';
 import { SearchIndex } from '../server/search';
 import { matchClaim } from '../server/search/claim-match';
-import { signalledClasses } from '../shared/claims/plan';
+import { withFindingEntries } from '../server/search/claim-findings';
+import { claimSignals } from '../shared/claims/plan';
 import { extractFigures } from '../shared/claims/reader';
 import { claims as heldOut1 } from '../tests/fixtures/claims-corpus/held-out';
 import { claims as heldOut31 } from '../tests/fixtures/claims-corpus/held-out-31';
@@ -92,7 +93,8 @@ const say = (s: string) => console.log(`claims: ${s}`);
 
 async function runPart(name: string, part: CorpusClaim[], index: SearchIndex): Promise<{ outcomes: ClaimOutcome[]; ms: number }> {
   const match = (text: string): Matched => {
-    const hits = matchClaim(index, text, { classes: signalledClasses(extractFigures(text), text) });
+    const { classes, leads } = claimSignals(extractFigures(text), text);
+    const hits = withFindingEntries(index, text, matchClaim(index, text, { classes }), leads);
     return { slugs: hits.map((h) => h.entry.slug), classes: hits.map((h) => h.entry.mechanismClass).filter((c): c is string => c !== null) };
   };
   const t = performance.now();

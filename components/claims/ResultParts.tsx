@@ -69,8 +69,14 @@ export function MatchList({ matches }: { matches: ClaimMatch[] }) {
             </Link>
           </View>
           <Text style={type.caption}>
-            Version {m.version} · match score {formatScore(m.score)}
+            Version {m.version}
+            {m.words.length > 0 || !m.finding ? ` · match score ${formatScore(m.score)}` : ''}
           </Text>
+          {m.finding ? (
+            <Text testID={`claim-match-${m.slug}-finding`} style={type.caption}>
+              Offered because {m.finding}.
+            </Text>
+          ) : null}
           {m.words.length > 0 ? (
             <Text testID={`claim-match-${m.slug}-words`} style={type.caption}>
               Words that matched: <Text style={styles.words}>{m.words.join(', ')}</Text>

@@ -11,7 +11,7 @@
  */
 import { readFigure } from '../../shared/claims/figures';
 import { buildParagraphs, type ParagraphEntry } from '../../shared/claims/paragraph';
-import { runClaimChecks, signalledClasses } from '../../shared/claims/plan';
+import { claimSignals, runClaimChecks, type FindingLead } from '../../shared/claims/plan';
 import { extractFigures } from '../../shared/claims/reader';
 import type { ClaimCheckNeed, ClaimCheckRun, ClaimParagraph, Figure, FigureInput, ParagraphVariant } from '../../shared/claims/types';
 import { CheckInputError, isCheckName, runCheck, type CheckRun, type RawInput } from '../../shared/checks/run';
@@ -36,7 +36,7 @@ export interface ComputeResults {
   warm: { pong: true };
   worksheet: WorksheetResult;
   check: CheckRun;
-  claimRead: { figures: Figure[]; signalled: string[] };
+  claimRead: { figures: Figure[]; signalled: string[]; leads: FindingLead[] };
   claimPlan: { checks: ClaimCheckRun[]; needs: ClaimCheckNeed[]; notes: string[]; paragraphs: Record<ParagraphVariant, ClaimParagraph> };
 }
 
@@ -71,7 +71,8 @@ function claimRead(text: string, figures: FigureInput[] | undefined): JobAnswer<
     });
     if (Object.keys(fields).length) return { ok: false, error: fieldsError('invalid_figure', fields) };
   }
-  return { ok: true, value: { figures: out, signalled: signalledClasses(out, text) } };
+  const { classes, leads } = claimSignals(out, text);
+  return { ok: true, value: { figures: out, signalled: classes, leads } };
 }
 
 /** Invented inputs, one of each kind of job. */

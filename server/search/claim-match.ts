@@ -80,6 +80,8 @@ export interface ClaimHit {
   synonyms: string[];
   /** True when the entry's class is one the figures point to (opts.classes) and it was boosted. */
   classSignalled: boolean;
+  /** Set when the claim's own finding led to the entry (claim-findings.ts), in words: why. */
+  finding?: string;
 }
 
 export interface MatchClaimOptions {

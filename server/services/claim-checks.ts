@@ -24,6 +24,7 @@ import { citedItem } from '../presenters/citation';
 import { savedClaimCheck, savedClaimCheckSummary } from '../presenters/claim-checks';
 import type { ClaimCheckInput } from '../routes/claim-checks/schema';
 import { matchClaim } from '../search/claim-match';
+import { withFindingEntries } from '../search/claim-findings';
 import type { SearchIndex } from '../search';
 import type { Library } from './entries';
 
@@ -50,13 +51,13 @@ export class ClaimChecks {
    * threads (`res` gets Retry-After when its queue is full); matching runs here, on the index.
    */
   async run(input: ClaimCheckInput, origin: string, res: Response): Promise<ClaimCheckResult> {
-    const { figures, signalled } = await computeFor(res, this.deps.compute, {
+    const { figures, signalled, leads } = await computeFor(res, this.deps.compute, {
       kind: 'claimRead',
       text: input.text,
       ...(input.figures ? { figures: input.figures as FigureInput[] } : {}),
     });
     await this.deps.index.ready();
-    const hits = matchClaim(this.deps.index, input.text, { classes: signalled });
+    const hits = withFindingEntries(this.deps.index, input.text, matchClaim(this.deps.index, input.text, { classes: signalled }), leads);
     const cited: (ParagraphEntry | null)[] = await Promise.all(
       hits.map(async (h): Promise<ParagraphEntry | null> => {
         const { slug, version: n } = h.entry;
@@ -69,7 +70,7 @@ export class ClaimChecks {
           throw err;
         }
         const url = permalink(origin, slug, n);
-        const match: ClaimMatch = { slug, title: h.entry.title, version: n, score: h.score, terms: h.terms, words: h.words, url, inBrief: h.entry.inBrief };
+        const match: ClaimMatch = { slug, title: h.entry.title, version: n, score: h.score, terms: h.terms, words: h.words, url, inBrief: h.entry.inBrief, ...(h.finding ? { finding: h.finding } : {}) };
         return {
           match,
           item: citedItem(slug, version, url, { authors }),

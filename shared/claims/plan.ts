@@ -37,8 +37,18 @@ import { readSignals } from './plan/signals';
 export { planChecks, runClaimChecks } from './plan/run';
 export { readSignals } from './plan/signals';
 
+/**
+ * An entry a claim's finding leads to when its words match none: the entry of `mechanismClass`
+ * (exactly that class). Where the words match entries they decide, with the class boost.
+ */
+export interface FindingLead {
+  mechanismClass: string;
+  /** Why, in words for the reader ("it states a speed above the speed of light"). */
+  why: string;
+}
+
 /** The classes signalledClasses can return (the matcher boosts them and every class below them). */
-export const SIGNALLABLE_CLASSES = ['propellant-free-thrust', 'over-unity', 'single-reservoir-engine'] as const;
+export const SIGNALLABLE_CLASSES = ['propellant-free-thrust', 'over-unity', 'single-reservoir-engine', 'converter-beyond-limit', 'faster-than-light', 'efficiency-above-unity'] as const;
 
 /** Converters of light or heat to electricity with no moving parts (their limits are the Carnot, Landsberg and Shockley–Queisser bounds). */
 const CONVERTER_RE = /(?<!\p{L})(?:thermoelectric|TEGs?|Seebeck|thermophotovoltaic|TPV|thermionic|solar cells?|photovoltaic|PV cells?|PV modules?)(?!\p{L})/iu;
@@ -53,6 +63,15 @@ const CONVERTER_RE = /(?<!\p{L})(?:thermoelectric|TEGs?|Seebeck|thermophotovolta
  *    propellant-free thrust.
  */
 export function signalledClasses(figures: Figure[], text: string): string[] {
+  return claimSignals(figures, text).classes;
+}
+
+/**
+ * What a claim's figures point to: the classes to boost (signalledClasses), and the entries its
+ * findings lead to (FindingLead) whatever its words match.
+ */
+export function claimSignals(figures: Figure[], text: string): { classes: string[]; leads: FindingLead[] } {
+  const leads: FindingLead[] = [];
   const s = readSignals({ text });
   const has = (kind: FigureKind) => figures.some((f) => f.kind === kind);
   const out = new Set<string>();
@@ -64,15 +83,31 @@ export function signalledClasses(figures: Figure[], text: string): string[] {
   // A percentage above 100 % said of an efficiency ("250 % efficient", a heat pump's "350 %"), or a
   // quantum efficiency above one: the entry on what such figures mean.
   const percentOver = figures.some((f) => (f.kind === 'efficiency' || f.kind === 'cop' || f.kind === 'quantum-efficiency') && f.si > 1 && /%|per ?cent/iu.test(f.text));
-  if (percentOver || figures.some((f) => f.kind === 'quantum-efficiency' && f.si > 1)) out.add('efficiency-above-unity');
+  if (percentOver || figures.some((f) => f.kind === 'quantum-efficiency' && f.si > 1)) {
+    out.add('efficiency-above-unity');
+    leads.push({ mechanismClass: 'efficiency-above-unity', why: 'a figure above 100 % said of an efficiency' });
+  }
   for (const run of runClaimChecks(figures, { text }).checks) {
     if (run.finding !== 'breaks') continue;
-    if (run.check === 'first-law') out.add('over-unity');
+    if (run.check === 'first-law') {
+      out.add('over-unity');
+      leads.push({ mechanismClass: 'over-unity-circuit', why: 'the first-law ledger of its own figures gives more out than in' });
+    }
     // A solar cell's or a thermoelectric converter's efficiency over its limit is its own class.
-    if (run.check === 'carnot') out.add(CONVERTER_RE.test(text) ? 'converter-beyond-limit' : 'single-reservoir-engine');
-    if (run.check === 'light-converter-limits') out.add('converter-beyond-limit');
+    if (run.check === 'carnot') {
+      const cls = CONVERTER_RE.test(text) ? 'converter-beyond-limit' : 'single-reservoir-engine';
+      out.add(cls);
+      leads.push({ mechanismClass: cls, why: 'its own figures go past the Carnot limit' });
+    }
+    if (run.check === 'light-converter-limits') {
+      out.add('converter-beyond-limit');
+      leads.push({ mechanismClass: 'converter-beyond-limit', why: 'its own figures go past the limits of a light converter' });
+    }
     if (run.check === 'photon-bound') out.add('propellant-free-thrust');
-    if (run.check === 'light-speed') out.add('faster-than-light');
+    if (run.check === 'light-speed') {
+      out.add('faster-than-light');
+      leads.push({ mechanismClass: 'faster-than-light', why: 'it states a speed above the speed of light' });
+    }
   }
-  return [...out];
+  return { classes: [...out], leads };
 }

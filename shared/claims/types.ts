@@ -221,6 +221,11 @@ export interface ClaimMatch {
   /** Permanent URL of this version. */
   url: string;
   inBrief: string;
+  /**
+   * Set when the check's finding on the claim's own figures led to this entry (not, or not only,
+   * its words), saying why: "it states a speed above the speed of light".
+   */
+  finding?: string;
 }
 
 export interface ParagraphReference {
