@@ -449,7 +449,7 @@ export class SearchIndex {
     for (const list of lists) {
       const at = list.find(n);
       if (at < 0) continue;
-      for (const t of list.terms[at]) if (!terms.includes(t)) terms.push(t);
+      for (const t of list.terms(at)) if (!terms.includes(t)) terms.push(t);
     }
     return { entry: this.state.byNumber[n]!, score, terms };
   }
@@ -592,17 +592,14 @@ export class SearchIndex {
       return cached;
     }
     const fuzzy = known ? 0 : fuzzyDistance(word);
-    const direct = (t: string) => t === word || (prefix && t.startsWith(word));
-    const r = state.engine.search([{ term: word, prefix, fuzzy, boost: 1 }], { events: prefix || fuzzy > 0 });
-    const termsOf = termLists(r);
-    const swaps = !known && word.length >= 4;
-    let hits: WordHits;
-    if (!swaps) {
-      // Straight from the engine's arrays, put in ascending order of internal number.
-      hits = wordHitsFrom(r, termsOf, direct);
-    } else {
-      hits = this.withSwaps(r, termsOf, direct, word, typed);
-    }
+    // A word the index lacks (4 letters or more) is also tried with two neighbouring letters
+    // swapped: one slip, not the two edits an edit distance counts, so at a fuzzy weight of one edit.
+    const swaps = !known && word.length >= 4 ? swapped(typed).filter((v) => v !== word) : [];
+    const r = state.engine.search(
+      [{ term: word, prefix, fuzzy, boost: 1, alternatives: swaps, alternativeWeight: FUZZY_WEIGHT * (word.length / (word.length + 1)) }],
+      { ascending: true },
+    );
+    const hits = wordHitsOf(r, state.fieldTerms);
     state.wordCache.set(key, hits);
     state.wordCacheHits += hits.numbers.length;
     while (state.wordCache.size > WORD_CACHE_SIZE || state.wordCacheHits > WORD_CACHE_HITS) {
@@ -611,29 +608,6 @@ export class SearchIndex {
       state.wordCacheHits -= dropped.numbers.length;
     }
     return hits;
-  }
-
-  /** A word's hits with those of its forms with two neighbouring letters swapped added (a word the index lacks). */
-  private withSwaps(r: RawResults, termsOf: (i: number) => string[], direct: (t: string) => boolean, word: string, typed: string): WordHits {
-    const state = this.state;
-    const acc = new Map<number, { score: number; terms: string[]; fuzzy: boolean }>();
-    for (let i = 0; i < r.docs.length; i++) {
-      const terms = termsOf(i);
-      acc.set(r.docs[i], { score: r.scores[i], terms, fuzzy: !terms.some(direct) });
-    }
-    // Two letters typed the wrong way round are one slip, not the two edits an edit distance counts.
-    const weight = FUZZY_WEIGHT * (word.length / (word.length + 1));
-    for (const variant of swapped(typed)) {
-      if (variant === word || !state.df.has(variant)) continue;
-      const v = state.engine.search([{ term: variant, prefix: false, fuzzy: 0, boost: 1 }], { events: false });
-      for (let i = 0; i < v.docs.length; i++) {
-        const n = v.docs[i];
-        const had = acc.get(n);
-        const terms = had ? (had.terms.includes(variant) ? had.terms : [...had.terms, variant]) : [variant];
-        acc.set(n, { score: (had?.score ?? 0) + v.scores[i] * weight, terms, fuzzy: had ? had.fuzzy : true });
-      }
-    }
-    return wordHitsOf(acc);
   }
 
   /**
@@ -662,7 +636,6 @@ export class SearchIndex {
     const { prefix = false, boostTerm, atLeast } = options;
     const r = state.engine.search(
       terms.map((term) => ({ term, prefix: typeof prefix === 'function' ? prefix(term) : prefix, fuzzy: 0, boost: boostTerm ? boostTerm(term) : 1 })),
-      { events: false },
     );
     let derivedAt: Map<string, number> | undefined;
     const kept: number[] = [];
@@ -739,41 +712,33 @@ export interface LazyTermsHits {
 /** How many entries' written forms (readerWords) are kept. */
 const FORMS_CACHE_SIZE = 2000;
 
-/** One word's hits: internal numbers ascending, each with its score, matched terms and whether only a typing error reached it. */
+/**
+ * One word's hits: internal numbers ascending, each with its score and whether only a typing
+ * error reached it; the index terms each matched are worked out on demand (only a page's hits
+ * need them).
+ */
 interface WordHits {
   numbers: Int32Array;
   scores: Float64Array;
-  terms: string[][];
   fuzzy: Uint8Array;
   /** Position of internal number n in numbers, or -1. */
   find(n: number): number;
+  /** The index terms the hit at this position matched, in the order scored. */
+  terms(at: number): string[];
 }
 
-/** A word's hits from one engine search, in ascending order of internal number (a numeric sort of number and position packed in one float). */
-function wordHitsFrom(r: RawResults, termsOf: (i: number) => string[], direct: (t: string) => boolean): WordHits {
-  const m = r.docs.length;
-  const packed = new Float64Array(m);
-  for (let i = 0; i < m; i++) packed[i] = r.docs[i] * 2 ** 21 + i;
-  packed.sort();
-  const numbers = new Int32Array(m);
-  const scores = new Float64Array(m);
-  const fuzzy = new Uint8Array(m);
-  const terms: string[][] = new Array(m);
-  for (let k = 0; k < m; k++) {
-    const i = packed[k] % 2 ** 21;
-    numbers[k] = r.docs[i];
-    scores[k] = r.scores[i];
-    const ts = termsOf(i);
-    terms[k] = ts;
-    fuzzy[k] = ts.some(direct) ? 0 : 1;
-  }
-  return withFind({ numbers, scores, terms, fuzzy });
-}
-
-function withFind(h: Omit<WordHits, 'find'>): WordHits {
-  const numbers = h.numbers;
+/** A word's hits from one engine search (its documents in ascending order). */
+function wordHitsOf(r: RawResults, fieldTerms: readonly (string[][] | undefined)[]): WordHits {
+  const numbers = r.docs;
+  const fuzzy = r.direct.map((d) => 1 - d);
+  // The terms reached, each once, in the order scored.
+  const derived = [...new Set(r.derived)];
+  let order: Map<string, number> | undefined;
+  const only = derived.length === 1 ? [derived[0]] : null;
   return {
-    ...h,
+    numbers,
+    scores: r.scores,
+    fuzzy,
     find(n) {
       let lo = 0;
       let hi = numbers.length;
@@ -784,37 +749,19 @@ function withFind(h: Omit<WordHits, 'find'>): WordHits {
       }
       return lo < numbers.length && numbers[lo] === n ? lo : -1;
     },
-  };
-}
-
-function wordHitsOf(acc: Map<number, { score: number; terms: string[]; fuzzy: boolean }>): WordHits {
-  const numbers = Int32Array.from(acc.keys()).sort();
-  const scores = new Float64Array(numbers.length);
-  const fuzzy = new Uint8Array(numbers.length);
-  const terms: string[][] = new Array(numbers.length);
-  for (let i = 0; i < numbers.length; i++) {
-    const h = acc.get(numbers[i])!;
-    scores[i] = h.score;
-    fuzzy[i] = h.fuzzy ? 1 : 0;
-    terms[i] = h.terms;
-  }
-  return withFind({ numbers, scores, terms, fuzzy });
-}
-
-/** The matched index terms of each document of a one-word search, in the order matched; documents with the same terms share one array. */
-function termLists(r: RawResults): (i: number) => string[] {
-  if (r.derived.length === 1) {
-    const only = [r.derived[0]];
-    return () => only;
-  }
-  const shared = new Map<string, string[]>();
-  return (i) => {
-    const idx: number[] = [];
-    for (const { term } of r.events(i)) if (!idx.includes(term)) idx.push(term);
-    const key = idx.join(',');
-    let list = shared.get(key);
-    if (!list) shared.set(key, (list = idx.map((t) => r.derived[t])));
-    return list;
+    terms(at) {
+      if (only) return only;
+      // The document's own terms looked up among those reached (a hit holds a term it matched in one of its fields).
+      order ??= new Map(derived.map((t, i) => [t, i]));
+      const found: number[] = [];
+      for (const field of fieldTerms[numbers[at]] ?? []) {
+        for (const t of field) {
+          const i = order.get(t);
+          if (i !== undefined && !found.includes(i)) found.push(i);
+        }
+      }
+      return found.sort((x, y) => x - y).map((i) => derived[i]);
+    },
   };
 }
 
