@@ -26,6 +26,12 @@ interface Posting {
   docs: number[];
   /** Term frequency in the field, beside docs. */
   tfs: number[];
+  /**
+   * The list as searched, made when first searched and kept while the engine is unchanged: the
+   * documents in a typed array and each one's impact, its BM25+ figure before the weights
+   * (idf · (d + tf · (k + 1) / (tf + k · (1 − b + b · length / average length)))).
+   */
+  scored?: { version: number; docs: Int32Array; impacts: Float64Array };
 }
 
 interface TermData {
@@ -99,6 +105,8 @@ export class Engine {
   private epoch = 0;
   /** Marks of one query term's total (termSeen). */
   private stamp = 0;
+  /** Counts the changes (adds, removes): a posting list's impacts hold for the version they were worked out for. */
+  private version = 0;
 
   constructor(private readonly boosts: readonly number[]) {
     this.fieldCount = boosts.length;
@@ -136,6 +144,7 @@ export class Engine {
   add(id: number, fields: { tokens: readonly string[]; terms: readonly (string | null)[] }[]): string[][] {
     if (this.numberOf_.has(id)) throw new Error(`search engine: duplicate id ${id}`);
     const n = this.ids.length;
+    this.version++;
     this.ids.push(id);
     this.numberOf_.set(id, n);
     const c = this.count;
@@ -168,6 +177,7 @@ export class Engine {
   remove(id: number, fields: { tokens: readonly string[]; terms: readonly (string | null)[] }[]): void {
     const n = this.numberOf_.get(id);
     if (n === undefined) return;
+    this.version++;
     const c = this.count;
     for (let f = 0; f < this.fieldCount; f++) {
       const length = this.lengths[f][n];
@@ -275,29 +285,68 @@ export class Engine {
     return expansions;
   }
 
+  /** A posting list's documents and impacts, worked out now if the engine changed since they were. */
+  private scored(p: Posting, f: number): { docs: Int32Array; impacts: Float64Array } {
+    if (p.scored?.version === this.version) return p.scored;
+    const N = this.count;
+    const df = p.docs.length;
+    const idf = Math.log(1 + (N - df + 0.5) / (df + 0.5));
+    const avg = this.avg[f];
+    const lengths = this.lengths[f];
+    const docs = Int32Array.from(p.docs);
+    const impacts = new Float64Array(df);
+    for (let j = 0; j < df; j++) {
+      const tf = p.tfs[j];
+      // The same expression, in the same order, as minisearch's (the scores stay exactly its own).
+      impacts[j] = idf * (D + (tf * (K + 1)) / (tf + K * (1 - B + (B * lengths[docs[j]]) / avg)));
+    }
+    p.scored = { version: this.version, docs, impacts };
+    return p.scored;
+  }
+
+  /**
+   * score() for the first query term: a document it reaches has no total yet, so the postings
+   * are added straight to the document's (the same sums, in the same order, with fewer marks).
+   */
+  private scoreFirst(data: TermData, weight: number, direct: boolean, epoch: number): void {
+    const { seen, directSeen, acc, quality, reached } = this;
+    for (let f = 0; f < this.fieldCount; f++) {
+      const p = data.fields[f];
+      if (!p) continue;
+      const { docs: pd, impacts } = this.scored(p, f);
+      const w = weight * this.boosts[f];
+      let nReached = this.nReached;
+      for (let j = 0; j < pd.length; j++) {
+        const n = pd[j];
+        const s = w * 1 * impacts[j];
+        if (seen[n] !== epoch) {
+          seen[n] = epoch;
+          acc[n] = s;
+          quality[n] = 1;
+          reached[nReached++] = n;
+        } else acc[n] += s;
+        if (direct) directSeen[n] = epoch;
+      }
+      this.nReached = nReached;
+    }
+  }
+
   /**
    * Adds one index term's postings, at this weight, to the current query term's totals (termAcc,
    * marked with the stamp); documents reached for the first time in this search are listed.
    */
   private score(data: TermData, weight: number, direct: boolean, epoch: number, stamp: number): void {
     const { termAcc, seen, termSeen, directSeen, acc, quality, reached, touched } = this;
-    const N = this.count;
     for (let f = 0; f < this.fieldCount; f++) {
       const p = data.fields[f];
       if (!p) continue;
-      const df = p.docs.length;
-      const idf = Math.log(1 + (N - df + 0.5) / (df + 0.5));
-      const avg = this.avg[f];
-      const lengths = this.lengths[f];
+      const { docs: pd, impacts } = this.scored(p, f);
       const w = weight * this.boosts[f];
-      const pd = p.docs;
-      const pt = p.tfs;
       let nTouched = this.nTouched;
       let nReached = this.nReached;
       for (let j = 0; j < pd.length; j++) {
         const n = pd[j];
-        const tf = pt[j];
-        const s = w * 1 * (idf * (D + (tf * (K + 1)) / (tf + K * (1 - B + (B * lengths[n]) / avg))));
+        const s = w * 1 * impacts[j];
         if (termSeen[n] !== stamp) {
           termSeen[n] = stamp;
           termAcc[n] = s;
@@ -347,7 +396,8 @@ export class Engine {
         if (!data) continue;
         derived.push(t);
         source.push(qi);
-        this.score(data, weight * q.boost, direct, epoch, stamp);
+        if (qi === 0) this.scoreFirst(data, weight * q.boost, direct, epoch);
+        else this.score(data, weight * q.boost, direct, epoch, stamp);
       }
       // Each query term's total is added to the document's (as minisearch's OR combines them).
       for (let i = 0; i < this.nTouched; i++) {
@@ -371,8 +421,15 @@ export class Engine {
         }
       }
     }
-    const out = this.reached.slice(0, this.nReached);
-    if (opts.ascending) out.sort();
+    let out: Int32Array;
+    if (!opts.ascending) out = this.reached.slice(0, this.nReached);
+    else if (this.nReached * 16 < this.ids.length) out = this.reached.slice(0, this.nReached).sort();
+    else {
+      // Many documents: a pass over the marks gives them in order sooner than a sort would.
+      out = new Int32Array(this.nReached);
+      const seen = this.seen;
+      for (let n = 0, k = 0; k < out.length; n++) if (seen[n] === epoch) out[k++] = n;
+    }
     const scores = new Float64Array(out.length);
     const matched = new Uint16Array(out.length);
     const direct = new Uint8Array(out.length);

@@ -95,8 +95,24 @@ class IndexState {
   readonly wordCache = new Map<string, WordHits>();
   /** Hits held in the word cache in all (bounds its memory). */
   wordCacheHits = 0;
+  /** Dense accumulators of a search for any word (SearchIndex.anyWord), by internal number, reused. */
+  orScore = new Float64Array(0);
+  orCount = new Uint16Array(0);
+  orSeen = new Int32Array(0);
+  orDirect = new Int32Array(0);
+  orEpoch = 0;
   /** Every entry, newest first (the answer to a blank query), made when first asked for. */
   newest: IndexedEntry[] | null = null;
+  /** The internal numbers of newest, beside it. */
+  newestNumbers: Int32Array | null = null;
+  /** Per internal number: the entry's laws and its class (-1: none) as small numbers, for counting facets. */
+  readonly facetLaws: number[][] = [];
+  readonly facetClass: number[] = [];
+  /** Law and class slugs ↔ those numbers. */
+  readonly lawIds = new Map<string, number>();
+  readonly lawSlugs: string[] = [];
+  readonly classIds = new Map<string, number>();
+  readonly classSlugs: string[] = [];
   /** Index term → the word an entry writes for it, per entry (readerWords), made when first asked for. */
   readonly forms = new Map<number, Map<string, string>>();
 
@@ -113,6 +129,8 @@ class IndexState {
     this.entries.set(entry.id, entry);
     this.byNumber.push(entry);
     this.fieldTerms.push(distinct);
+    this.facetLaws.push(entry.laws.map((l) => this.lawId(l)));
+    this.facetClass.push(entry.mechanismClass === null ? -1 : this.classId(entry.mechanismClass));
     this.changed();
   }
 
@@ -137,10 +155,29 @@ class IndexState {
     this.changed();
   }
 
+  lawId(slug: string): number {
+    let id = this.lawIds.get(slug);
+    if (id === undefined) {
+      this.lawIds.set(slug, (id = this.lawSlugs.length));
+      this.lawSlugs.push(slug);
+    }
+    return id;
+  }
+
+  classId(slug: string): number {
+    let id = this.classIds.get(slug);
+    if (id === undefined) {
+      this.classIds.set(slug, (id = this.classSlugs.length));
+      this.classSlugs.push(slug);
+    }
+    return id;
+  }
+
   private changed(): void {
     this.wordCache.clear();
     this.wordCacheHits = 0;
     this.newest = null;
+    this.newestNumbers = null;
     this.forms.clear();
   }
 }
@@ -438,9 +475,65 @@ export class SearchIndex {
     if (all.numbers.length) return all;
     // Any word, but only an entry that holds one of them as typed (or as the start of a word): a
     // word reached only through a typing error does not carry a hit alone ("hello world" → "would").
-    const any = new Set<number>();
-    for (const list of lists) for (let i = 0; i < list.numbers.length; i++) if (!list.fuzzy[i]) any.add(list.numbers[i]);
-    return combine([...any].sort((a, b) => a - b), 1);
+    return this.anyWord(lists);
+  }
+
+  /**
+   * The hits of any of the words' lists (see hits()), summed in one pass over the lists in dense
+   * accumulators (the lists are long when a word matched nothing and the others are common).
+   */
+  private anyWord(lists: WordHits[]): { numbers: number[]; scores: number[]; lists: WordHits[] } {
+    const state = this.state;
+    const size = state.byNumber.length;
+    if (state.orScore.length < size) {
+      state.orScore = new Float64Array(size);
+      state.orCount = new Uint16Array(size);
+      state.orSeen = new Int32Array(size);
+      state.orDirect = new Int32Array(size);
+      state.orEpoch = 0;
+    }
+    const { orScore, orCount, orSeen, orDirect } = state;
+    const epoch = ++state.orEpoch;
+    let reached = 0;
+    for (const list of lists) {
+      const { numbers, scores, fuzzy } = list;
+      for (let i = 0; i < numbers.length; i++) {
+        const n = numbers[i];
+        if (orSeen[n] !== epoch) {
+          orSeen[n] = epoch;
+          orScore[n] = 0;
+          orCount[n] = 0;
+        }
+        orScore[n] += scores[i];
+        orCount[n] += 1;
+        if (!fuzzy[i] && orDirect[n] !== epoch) {
+          orDirect[n] = epoch;
+          reached++;
+        }
+      }
+    }
+    const candidates = new Int32Array(reached);
+    let k = 0;
+    for (const list of lists) {
+      const { numbers, fuzzy } = list;
+      for (let i = 0; i < numbers.length; i++) {
+        const n = numbers[i];
+        if (!fuzzy[i] && orDirect[n] === epoch) {
+          orDirect[n] = -epoch;
+          candidates[k++] = n;
+        }
+      }
+    }
+    candidates.sort();
+    const numbers: number[] = [];
+    const scores: number[] = [];
+    for (let i = 0; i < candidates.length; i++) {
+      const n = candidates[i];
+      if (!state.byNumber[n]) continue;
+      numbers.push(n);
+      scores.push(orScore[n] * orCount[n]);
+    }
+    return { numbers, scores, lists };
   }
 
   /** The hit of internal number n with its matched terms (the union over the words' lists). */
@@ -481,28 +574,39 @@ export class SearchIndex {
    */
   search(req: SearchRequest): SearchPage {
     const found = this.hits(req.q);
-    const byNumber = this.state.byNumber;
+    const state = this.state;
+    const byNumber = state.byNumber;
     const blank = found ? null : this.newestEntries();
-    const count = found ? found.numbers.length : blank!.length;
-    const entryAt = (i: number) => (found ? byNumber[found.numbers[i]]! : blank![i]);
+    const numbers = found ? found.numbers : (state.newestNumbers ??= Int32Array.from(blank!, (e) => state.engine.numberOf(e.id)!));
+    const count = numbers.length;
+    // Laws and classes counted as small numbers, then named in the order first counted.
     const classes = req.mechanism ? this.classAndChildren(req.mechanism) : null;
-    const laws: Record<string, number> = {};
-    const mechanisms: Record<string, number> = {};
-    const lineage = new Map<string, string[]>();
+    const wantLaw = req.law ? (state.lawIds.get(req.law) ?? -2) : -1;
+    const inClasses = classes ? new Uint8Array(state.classSlugs.length) : null;
+    if (inClasses) for (const s of classes!) if (state.classIds.has(s)) inClasses[state.classIds.get(s)!] = 1;
+    // Each class with those above it (which may add numbers for classes no entry has).
+    const lineage: number[][] = [];
+    for (let c = 0; c < state.classSlugs.length; c++) lineage.push(this.classAndAncestors(state.classSlugs[c]).map((s) => state.classId(s)));
+    const lawCount = new Int32Array(state.lawSlugs.length);
+    const classCount = new Int32Array(state.classSlugs.length);
+    const lawOrder: number[] = [];
+    const classOrder: number[] = [];
     const kept: number[] = [];
+    const { facetLaws, facetClass } = state;
     for (let i = 0; i < count; i++) {
-      const e = entryAt(i);
-      const byLaw = !req.law || e.laws.includes(req.law);
-      const byClass = !classes || (e.mechanismClass !== null && classes.has(e.mechanismClass));
-      if (byClass) for (const l of e.laws) laws[l] = (laws[l] ?? 0) + 1;
-      const cls = e.mechanismClass;
-      if (byLaw && cls) {
-        let up = lineage.get(cls);
-        if (!up) lineage.set(cls, (up = this.classAndAncestors(cls)));
-        for (const c of up) mechanisms[c] = (mechanisms[c] ?? 0) + 1;
-      }
+      const n = numbers[i];
+      const ls = facetLaws[n];
+      const cls = facetClass[n];
+      const byLaw = wantLaw === -1 || ls.includes(wantLaw);
+      const byClass = !inClasses || (cls >= 0 && inClasses[cls] === 1);
+      if (byClass) for (const l of ls) if (lawCount[l]++ === 0) lawOrder.push(l);
+      if (byLaw && cls >= 0) for (const c of lineage[cls]) if (classCount[c]++ === 0) classOrder.push(c);
       if (byLaw && byClass) kept.push(i);
     }
+    const laws: Record<string, number> = {};
+    for (const l of lawOrder) laws[state.lawSlugs[l]] = lawCount[l];
+    const mechanisms: Record<string, number> = {};
+    for (const c of classOrder) mechanisms[state.classSlugs[c]] = classCount[c];
     const end = req.offset + req.limit;
     let hits: SearchHit[];
     if (!found) {
