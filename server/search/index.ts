@@ -630,8 +630,23 @@ export class SearchIndex {
    * ("Carnot", "RF"). Concept terms are left out; duplicates are dropped.
    */
   readerWords(hit: SearchHit, q: string): string[] {
+    return this.readerWordsOf(hit, this.typedWords(q));
+  }
+
+  /** readerWords of each hit of a page, the query's words worked out once. */
+  readerWordsOfPage(hits: readonly SearchHit[], q: string): string[][] {
+    const typed = this.typedWords(q);
+    return hits.map((h) => this.readerWordsOf(h, typed));
+  }
+
+  /** Index term → the query's word for it, as typed (the first one typed). */
+  private typedWords(q: string): Map<string, string> {
     const typed = new Map<string, string>();
     for (const { typed: word, term } of this.queryWords(q)) if (!typed.has(term)) typed.set(term, word);
+    return typed;
+  }
+
+  private readerWordsOf(hit: SearchHit, typed: Map<string, string>): string[] {
     const terms = hit.terms.filter((t) => !isConceptTerm(t));
     const rest = terms.filter((t) => !typed.has(t));
     const forms = rest.length ? this.writtenForms(hit.entry.id, rest) : new Map<string, string>();
