@@ -15,7 +15,7 @@ const tax = taxonomyNames();
 const loaded = loadedLibrary(lib, tax);
 const syn = synonymSet();
 const index = new SearchIndex({ refreshMs: 0 });
-let t = performance.now();
+const t = performance.now();
 index.install(loaded, syn, tax);
 console.log(`build ${(performance.now() - t).toFixed(0)} ms`);
 const generated = makeQueries(lib, normaliseTerm, 1200, 0.3);

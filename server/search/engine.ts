@@ -12,6 +12,13 @@
  * expansion is bounded (only terms that begin with the word's first letter, found by an
  * edit-distance check banded to the distance allowed) and the vocabulary is kept sorted for
  * prefix expansion (a binary search instead of a tree walk).
+ *
+ * For the slow tail (issue 16): a posting list, once searched, keeps its documents as a typed
+ * array and each one's impact (the BM25+ figure before the weights) until the index changes, so a
+ * later search multiplies and adds; the first query term is added straight to the totals; a
+ * search returns typed arrays (in ascending order on demand, from one pass over the marks when
+ * most documents were reached) and which documents an exact or prefix expansion reached, instead
+ * of a log per posting. The sums are the same, in the same order: scores do not change.
  */
 
 /** minisearch's defaults (BM25+ parameters and the weights of expanded terms). */
