@@ -341,7 +341,13 @@ async function main() {
   const claims = await benchClaimLatency(index, seq, say);
 
   // 6. HTTP: the real app in a child process, autocannon here.
-  child = fork(path.join(__dirname, 'search', 'http-server.ts'), [], { env: { ...process.env, CW_BENCH_DB: JSON.stringify(cfg) }, stdio: ['ignore', 'inherit', 'inherit', 'ipc'] });
+  // CW_BENCH_PROFILE_APP=<dir>: the app process writes a CPU profile there as it exits (for tuning the route).
+  const profile = process.env.CW_BENCH_PROFILE_APP;
+  child = fork(path.join(__dirname, 'search', 'http-server.ts'), [], {
+    env: { ...process.env, CW_BENCH_DB: JSON.stringify(cfg) },
+    stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
+    ...(profile ? { execArgv: [...process.execArgv, '--cpu-prof', `--cpu-prof-dir=${profile}`] } : {}),
+  });
   const port = await new Promise<number>((resolve, reject) => {
     child!.once('message', (m) => resolve((m as { port: number }).port));
     child!.once('exit', (code) => reject(new Error(`the bench app server exited with code ${code} before listening`)));

@@ -12,6 +12,13 @@
  * expansion is bounded (only terms that begin with the word's first letter, found by an
  * edit-distance check banded to the distance allowed) and the vocabulary is kept sorted for
  * prefix expansion (a binary search instead of a tree walk).
+ *
+ * For the slow tail (issue 16): a posting list, once searched, keeps its documents as a typed
+ * array and each one's impact (the BM25+ figure before the weights) until the index changes, so a
+ * later search multiplies and adds; the first query term is added straight to the totals; a
+ * search returns typed arrays (in ascending order on demand, from one pass over the marks when
+ * most documents were reached) and which documents an exact or prefix expansion reached, instead
+ * of a log per posting. The sums are the same, in the same order: scores do not change.
  */
 
 /** minisearch's defaults (BM25+ parameters and the weights of expanded terms). */
@@ -26,6 +33,12 @@ interface Posting {
   docs: number[];
   /** Term frequency in the field, beside docs. */
   tfs: number[];
+  /**
+   * The list as searched, made when first searched and kept while the engine is unchanged: the
+   * documents in a typed array and each one's impact, its BM25+ figure before the weights
+   * (idf · (d + tf · (k + 1) / (tf + k · (1 − b + b · length / average length)))).
+   */
+  scored?: { version: number; docs: Int32Array; impacts: Float64Array };
 }
 
 interface TermData {
@@ -41,26 +54,32 @@ export interface TermQuery {
   fuzzy: number;
   /** Multiplies the term's scores. */
   boost: number;
+  /**
+   * Other index terms scored on their own after the term's expansions, each one's total (over its
+   * fields, at weight 1) times `alternativeWeight` added to the document's total for this query
+   * term; they reach documents as fuzzy ones do (not direct). The word with two letters swapped.
+   */
+  alternatives?: readonly string[];
+  alternativeWeight?: number;
 }
 
 /**
- * The outcome of one search, read before the next search on the same engine (the accumulators
- * are reused): the documents reached, their score and matched query terms, and, on demand, the
- * index terms and fields each matched.
+ * The outcome of one search: the documents reached, their score, matched query terms and whether
+ * an exact or prefix expansion reached them. Its arrays are its own (the accumulators are copied).
  */
 export interface RawResults {
-  /** Internal numbers of the documents reached, in the order first reached. */
+  /** Internal numbers of the documents reached: in the order first reached, or ascending (search's `ascending`). */
   docs: Int32Array;
   /** Score of each (the sum over terms and fields times the number of query terms matched), beside docs. */
   scores: Float64Array;
   /** How many distinct query terms each matched, beside docs. */
   matched: Uint16Array;
-  /** The index terms reached (exact and expanded), in order; events refer to them by position. */
+  /** 1 where an exact or prefix expansion reached the document, 0 where only fuzzy ones and alternatives did, beside docs. */
+  direct: Uint8Array;
+  /** The index terms reached (exact, expanded, alternatives), in the order scored (a term reached from two query terms is there twice). */
   derived: string[];
   /** Which query term each derived term came from (position in the queries), beside derived. */
   source: number[];
-  /** The (derived term, field) pairs matched in the i-th document of docs, in the order scored (empty when the search kept no events). */
-  events(i: number): { term: number; field: number }[];
 }
 
 export class Engine {
@@ -82,10 +101,19 @@ export class Engine {
   private seen = new Int32Array(0);
   private termSeen = new Int32Array(0);
   private quality = new Uint16Array(0);
-  private head = new Int32Array(0);
+  /** Marks (the search's epoch) of the documents an exact or prefix expansion reached. */
+  private directSeen = new Int32Array(0);
+  /** The documents reached in this search, in order (nReached of them). */
+  private reached = new Int32Array(0);
+  private nReached = 0;
+  /** The documents the current query term reached (nTouched of them). */
+  private touched = new Int32Array(0);
+  private nTouched = 0;
   private epoch = 0;
   /** Marks of one query term's total (termSeen). */
   private stamp = 0;
+  /** Counts the changes (adds, removes): a posting list's impacts hold for the version they were worked out for. */
+  private version = 0;
 
   constructor(private readonly boosts: readonly number[]) {
     this.fieldCount = boosts.length;
@@ -123,6 +151,7 @@ export class Engine {
   add(id: number, fields: { tokens: readonly string[]; terms: readonly (string | null)[] }[]): string[][] {
     if (this.numberOf_.has(id)) throw new Error(`search engine: duplicate id ${id}`);
     const n = this.ids.length;
+    this.version++;
     this.ids.push(id);
     this.numberOf_.set(id, n);
     const c = this.count;
@@ -155,6 +184,7 @@ export class Engine {
   remove(id: number, fields: { tokens: readonly string[]; terms: readonly (string | null)[] }[]): void {
     const n = this.numberOf_.get(id);
     if (n === undefined) return;
+    this.version++;
     const c = this.count;
     for (let f = 0; f < this.fieldCount; f++) {
       const length = this.lengths[f][n];
@@ -233,125 +263,191 @@ export class Engine {
     this.termAcc = new Float64Array(size);
     this.seen = new Int32Array(size);
     this.termSeen = new Int32Array(size);
+    this.directSeen = new Int32Array(size);
     this.quality = new Uint16Array(size);
-    this.head = new Int32Array(size);
+    this.reached = new Int32Array(size);
+    this.touched = new Int32Array(size);
     this.epoch = 0;
     this.stamp = 0;
   }
 
+  /** The expansions of one query term: [index term, weight, direct (exact or prefix)], exact first, then prefix ones, then fuzzy ones that are not also prefix ones (as minisearch expands them). */
+  private expand(q: TermQuery): [string, number, boolean][] {
+    const expansions: [string, number, boolean][] = [[q.term, 1, true]];
+    let prefixed: Set<string> | null = null;
+    if (q.prefix) {
+      prefixed = new Set();
+      for (const t of this.withPrefix(q.term)) {
+        if (t === q.term) continue;
+        prefixed.add(t);
+        expansions.push([t, (PREFIX_WEIGHT * t.length) / (t.length + 0.3 * (t.length - q.term.length)), true]);
+      }
+    }
+    if (q.fuzzy > 0) {
+      for (const [t, d] of this.near(q.term, q.fuzzy)) {
+        if (prefixed?.has(t)) continue;
+        expansions.push([t, (FUZZY_WEIGHT * t.length) / (t.length + d), false]);
+      }
+    }
+    return expansions;
+  }
+
+  /** A posting list's documents and impacts, worked out now if the engine changed since they were. */
+  private scored(p: Posting, f: number): { docs: Int32Array; impacts: Float64Array } {
+    if (p.scored?.version === this.version) return p.scored;
+    const N = this.count;
+    const df = p.docs.length;
+    const idf = Math.log(1 + (N - df + 0.5) / (df + 0.5));
+    const avg = this.avg[f];
+    const lengths = this.lengths[f];
+    const docs = Int32Array.from(p.docs);
+    const impacts = new Float64Array(df);
+    for (let j = 0; j < df; j++) {
+      const tf = p.tfs[j];
+      // The same expression, in the same order, as minisearch's (the scores stay exactly its own).
+      impacts[j] = idf * (D + (tf * (K + 1)) / (tf + K * (1 - B + (B * lengths[docs[j]]) / avg)));
+    }
+    p.scored = { version: this.version, docs, impacts };
+    return p.scored;
+  }
+
   /**
-   * Scores the documents for these query terms, combined with OR. Expanded terms: prefix ones
-   * first, then fuzzy ones that are not also prefix ones (as minisearch expands them).
+   * score() for the first query term: a document it reaches has no total yet, so the postings
+   * are added straight to the document's (the same sums, in the same order, with fewer marks).
    */
-  search(queries: readonly TermQuery[], opts: { events?: boolean } = {}): RawResults {
-    const logEvents = opts.events !== false;
+  private scoreFirst(data: TermData, weight: number, direct: boolean, epoch: number): void {
+    const { seen, directSeen, acc, quality, reached } = this;
+    for (let f = 0; f < this.fieldCount; f++) {
+      const p = data.fields[f];
+      if (!p) continue;
+      const { docs: pd, impacts } = this.scored(p, f);
+      const w = weight * this.boosts[f];
+      let nReached = this.nReached;
+      for (let j = 0; j < pd.length; j++) {
+        const n = pd[j];
+        const s = w * 1 * impacts[j];
+        if (seen[n] !== epoch) {
+          seen[n] = epoch;
+          acc[n] = s;
+          quality[n] = 1;
+          reached[nReached++] = n;
+        } else acc[n] += s;
+        if (direct) directSeen[n] = epoch;
+      }
+      this.nReached = nReached;
+    }
+  }
+
+  /**
+   * Adds one index term's postings, at this weight, to the current query term's totals (termAcc,
+   * marked with the stamp); documents reached for the first time in this search are listed.
+   */
+  private score(data: TermData, weight: number, direct: boolean, epoch: number, stamp: number): void {
+    const { termAcc, seen, termSeen, directSeen, acc, quality, reached, touched } = this;
+    for (let f = 0; f < this.fieldCount; f++) {
+      const p = data.fields[f];
+      if (!p) continue;
+      const { docs: pd, impacts } = this.scored(p, f);
+      const w = weight * this.boosts[f];
+      let nTouched = this.nTouched;
+      let nReached = this.nReached;
+      for (let j = 0; j < pd.length; j++) {
+        const n = pd[j];
+        const s = w * 1 * impacts[j];
+        if (termSeen[n] !== stamp) {
+          termSeen[n] = stamp;
+          termAcc[n] = s;
+          touched[nTouched++] = n;
+        } else termAcc[n] += s;
+        if (seen[n] !== epoch) {
+          seen[n] = epoch;
+          acc[n] = 0;
+          quality[n] = 0;
+          reached[nReached++] = n;
+        }
+        if (direct) directSeen[n] = epoch;
+      }
+      this.nTouched = nTouched;
+      this.nReached = nReached;
+    }
+  }
+
+  /**
+   * Scores the documents for these query terms, combined with OR: each query term's total (over
+   * its expansions and fields) is added to the document's, and the sum is multiplied by the
+   * number of query terms matched. With `ascending`, the documents come in ascending order of
+   * internal number (else in the order first reached).
+   */
+  search(queries: readonly TermQuery[], opts: { ascending?: boolean } = {}): RawResults {
     this.grow();
     const epoch = ++this.epoch;
     // A search every 2^31 would wrap the marks: start again from clean arrays.
     if (epoch > 0x3ffffff0 || this.stamp > 0x3ffffff0) {
       this.seen.fill(0);
       this.termSeen.fill(0);
+      this.directSeen.fill(0);
       this.epoch = 0;
       this.stamp = 0;
       return this.search(queries, opts);
     }
-    const docs: number[] = [];
     const derived: string[] = [];
     const source: number[] = [];
-    // Events: a linked list per document (head → next), holding the derived term and field.
-    const evTerm: number[] = [];
-    const evField: number[] = [];
-    const evNext: number[] = [];
-    const { acc, termAcc, seen, termSeen, quality, head } = this;
-    const N = this.count;
+    const { acc, termAcc, quality, touched } = this;
+    this.nReached = 0;
     for (let qi = 0; qi < queries.length; qi++) {
       const q = queries[qi];
       const stamp = ++this.stamp;
-      const touched: number[] = [];
-      const expansions: [string, number][] = [[q.term, 1]];
-      let prefixed: Set<string> | null = null;
-      if (q.prefix) {
-        prefixed = new Set();
-        for (const t of this.withPrefix(q.term)) {
-          if (t === q.term) continue;
-          prefixed.add(t);
-          expansions.push([t, (PREFIX_WEIGHT * t.length) / (t.length + 0.3 * (t.length - q.term.length))]);
-        }
-      }
-      if (q.fuzzy > 0) {
-        for (const [t, d] of this.near(q.term, q.fuzzy)) {
-          if (prefixed?.has(t)) continue;
-          expansions.push([t, (FUZZY_WEIGHT * t.length) / (t.length + d)]);
-        }
-      }
-      for (const [t, weight] of expansions) {
+      this.nTouched = 0;
+      for (const [t, weight, direct] of this.expand(q)) {
         const data = this.terms.get(t);
         if (!data) continue;
-        const ti = derived.length;
         derived.push(t);
         source.push(qi);
-        for (let f = 0; f < this.fieldCount; f++) {
-          const p = data.fields[f];
-          if (!p) continue;
-          const df = p.docs.length;
-          const idf = Math.log(1 + (N - df + 0.5) / (df + 0.5));
-          const avg = this.avg[f];
-          const lengths = this.lengths[f];
-          const w = weight * q.boost * this.boosts[f];
-          const pd = p.docs;
-          const pt = p.tfs;
-          for (let j = 0; j < pd.length; j++) {
-            const n = pd[j];
-            const tf = pt[j];
-            const s = w * 1 * (idf * (D + (tf * (K + 1)) / (tf + K * (1 - B + (B * lengths[n]) / avg))));
-            if (termSeen[n] !== stamp) {
-              termSeen[n] = stamp;
-              termAcc[n] = s;
-              touched.push(n);
-            } else termAcc[n] += s;
-            if (seen[n] !== epoch) {
-              seen[n] = epoch;
-              acc[n] = 0;
-              quality[n] = 0;
-              head[n] = -1;
-              docs.push(n);
-            }
-            if (logEvents) {
-              evTerm.push(ti);
-              evField.push(f);
-              evNext.push(head[n]);
-              head[n] = evTerm.length - 1;
-            }
-          }
-        }
+        if (qi === 0) this.scoreFirst(data, weight * q.boost, direct, epoch);
+        else this.score(data, weight * q.boost, direct, epoch, stamp);
       }
       // Each query term's total is added to the document's (as minisearch's OR combines them).
-      for (const n of touched) {
+      for (let i = 0; i < this.nTouched; i++) {
+        const n = touched[i];
         acc[n] += termAcc[n];
         quality[n] += 1;
       }
+      // Alternatives: each one's own total, times their weight, added after.
+      const alternativeWeight = q.alternativeWeight ?? 1;
+      for (const t of q.alternatives ?? []) {
+        const data = this.terms.get(t);
+        if (!data) continue;
+        derived.push(t);
+        source.push(qi);
+        const alt = ++this.stamp;
+        this.nTouched = 0;
+        this.score(data, 1, false, epoch, alt);
+        for (let i = 0; i < this.nTouched; i++) {
+          const n = touched[i];
+          acc[n] += termAcc[n] * alternativeWeight;
+        }
+      }
     }
-    const out = Int32Array.from(docs);
+    let out: Int32Array;
+    if (!opts.ascending) out = this.reached.slice(0, this.nReached);
+    else if (this.nReached * 16 < this.ids.length) out = this.reached.slice(0, this.nReached).sort();
+    else {
+      // Many documents: a pass over the marks gives them in order sooner than a sort would.
+      out = new Int32Array(this.nReached);
+      const seen = this.seen;
+      for (let n = 0, k = 0; k < out.length; n++) if (seen[n] === epoch) out[k++] = n;
+    }
     const scores = new Float64Array(out.length);
     const matched = new Uint16Array(out.length);
+    const direct = new Uint8Array(out.length);
+    const { directSeen } = this;
     for (let i = 0; i < out.length; i++) {
       const n = out[i];
       scores[i] = acc[n] * Math.max(1, quality[n]);
       matched[i] = quality[n];
+      direct[i] = directSeen[n] === epoch ? 1 : 0;
     }
-    const heads = Int32Array.from(out, (n) => head[n]);
-    return {
-      docs: out,
-      scores,
-      matched,
-      derived,
-      source,
-      events: (i) => {
-        const list: { term: number; field: number }[] = [];
-        for (let e = heads[i]; e >= 0; e = evNext[e]) list.push({ term: evTerm[e], field: evField[e] });
-        return list.reverse();
-      },
-    };
+    return { docs: out, scores, matched, direct, derived, source };
   }
 }
 

@@ -10,17 +10,14 @@ const escapeHtml = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;')
  */
 export function excerpt(text: string, terms: string[], width = 220): string {
   const matched = new Set(terms);
-  const isMatch = (word: string) => {
-    const t = normaliseTerm(word);
-    return t !== null && (matched.has(t) || matched.has(fold(word)));
-  };
-  const words = [...text.matchAll(/[\p{L}\p{N}]+(?:['’-][\p{L}\p{N}]+)*/gu)];
-  const first = words.find((m) => isMatch(m[0]));
+  const words = wordsOf(text);
+  const isMatch = (w: Word) => w.term !== null && (matched.has(w.term) || matched.has(w.folded));
+  const first = words.find(isMatch);
   let start = 0;
-  if (first && first.index! > width / 3) {
-    start = first.index! - Math.floor(width / 3);
+  if (first && first.index > width / 3) {
+    start = first.index - Math.floor(width / 3);
     const space = text.indexOf(' ', start);
-    if (space >= 0 && space < first.index!) start = space + 1;
+    if (space >= 0 && space < first.index) start = space + 1;
   }
   let end = Math.min(text.length, start + width);
   if (end < text.length) {
@@ -29,14 +26,45 @@ export function excerpt(text: string, terms: string[], width = 220): string {
   }
   let out = start > 0 ? '… ' : '';
   let at = start;
-  for (const m of words) {
-    const i = m.index!;
-    if (i < start || i + m[0].length > end) continue;
-    if (!isMatch(m[0])) continue;
-    out += escapeHtml(text.slice(at, i)) + `<mark>${escapeHtml(m[0])}</mark>`;
-    at = i + m[0].length;
+  for (const w of words) {
+    const i = w.index;
+    if (i < start || i + w.word.length > end) continue;
+    if (!isMatch(w)) continue;
+    out += escapeHtml(text.slice(at, i)) + `<mark>${escapeHtml(w.word)}</mark>`;
+    at = i + w.word.length;
   }
   out += escapeHtml(text.slice(at, end));
   if (end < text.length) out += ' …';
   return out;
+}
+
+/** A word of an excerpt's text: where it is, and its normalised and folded forms (what a matched term is compared with). */
+interface Word {
+  word: string;
+  index: number;
+  term: string | null;
+  folded: string;
+}
+
+/** How many texts' words are kept (the texts of the hits most recently shown; least recently used dropped first). */
+const WORDS_CACHE_SIZE = 2000;
+const wordsCache = new Map<string, Word[]>();
+
+/** The words of a text with their forms, worked out once per text (an entry's excerpt text is shown again and again). */
+function wordsOf(text: string): Word[] {
+  const cached = wordsCache.get(text);
+  if (cached) {
+    wordsCache.delete(text);
+    wordsCache.set(text, cached);
+    return cached;
+  }
+  const words: Word[] = [];
+  for (const m of text.matchAll(/[\p{L}\p{N}]+(?:['’-][\p{L}\p{N}]+)*/gu)) {
+    const word = m[0];
+    const term = normaliseTerm(word);
+    words.push({ word, index: m.index!, term, folded: term === null ? '' : fold(word) });
+  }
+  wordsCache.set(text, words);
+  if (wordsCache.size > WORDS_CACHE_SIZE) wordsCache.delete(wordsCache.keys().next().value!);
+  return words;
 }

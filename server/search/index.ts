@@ -95,8 +95,24 @@ class IndexState {
   readonly wordCache = new Map<string, WordHits>();
   /** Hits held in the word cache in all (bounds its memory). */
   wordCacheHits = 0;
+  /** Dense accumulators of a search for any word (SearchIndex.anyWord), by internal number, reused. */
+  orScore = new Float64Array(0);
+  orCount = new Uint16Array(0);
+  orSeen = new Int32Array(0);
+  orDirect = new Int32Array(0);
+  orEpoch = 0;
   /** Every entry, newest first (the answer to a blank query), made when first asked for. */
   newest: IndexedEntry[] | null = null;
+  /** The internal numbers of newest, beside it. */
+  newestNumbers: Int32Array | null = null;
+  /** Per internal number: the entry's laws and its class (-1: none) as small numbers, for counting facets. */
+  readonly facetLaws: number[][] = [];
+  readonly facetClass: number[] = [];
+  /** Law and class slugs ↔ those numbers. */
+  readonly lawIds = new Map<string, number>();
+  readonly lawSlugs: string[] = [];
+  readonly classIds = new Map<string, number>();
+  readonly classSlugs: string[] = [];
   /** Index term → the word an entry writes for it, per entry (readerWords), made when first asked for. */
   readonly forms = new Map<number, Map<string, string>>();
 
@@ -113,6 +129,8 @@ class IndexState {
     this.entries.set(entry.id, entry);
     this.byNumber.push(entry);
     this.fieldTerms.push(distinct);
+    this.facetLaws.push(entry.laws.map((l) => this.lawId(l)));
+    this.facetClass.push(entry.mechanismClass === null ? -1 : this.classId(entry.mechanismClass));
     this.changed();
   }
 
@@ -137,10 +155,29 @@ class IndexState {
     this.changed();
   }
 
+  lawId(slug: string): number {
+    let id = this.lawIds.get(slug);
+    if (id === undefined) {
+      this.lawIds.set(slug, (id = this.lawSlugs.length));
+      this.lawSlugs.push(slug);
+    }
+    return id;
+  }
+
+  classId(slug: string): number {
+    let id = this.classIds.get(slug);
+    if (id === undefined) {
+      this.classIds.set(slug, (id = this.classSlugs.length));
+      this.classSlugs.push(slug);
+    }
+    return id;
+  }
+
   private changed(): void {
     this.wordCache.clear();
     this.wordCacheHits = 0;
     this.newest = null;
+    this.newestNumbers = null;
     this.forms.clear();
   }
 }
@@ -438,9 +475,65 @@ export class SearchIndex {
     if (all.numbers.length) return all;
     // Any word, but only an entry that holds one of them as typed (or as the start of a word): a
     // word reached only through a typing error does not carry a hit alone ("hello world" → "would").
-    const any = new Set<number>();
-    for (const list of lists) for (let i = 0; i < list.numbers.length; i++) if (!list.fuzzy[i]) any.add(list.numbers[i]);
-    return combine([...any].sort((a, b) => a - b), 1);
+    return this.anyWord(lists);
+  }
+
+  /**
+   * The hits of any of the words' lists (see hits()), summed in one pass over the lists in dense
+   * accumulators (the lists are long when a word matched nothing and the others are common).
+   */
+  private anyWord(lists: WordHits[]): { numbers: number[]; scores: number[]; lists: WordHits[] } {
+    const state = this.state;
+    const size = state.byNumber.length;
+    if (state.orScore.length < size) {
+      state.orScore = new Float64Array(size);
+      state.orCount = new Uint16Array(size);
+      state.orSeen = new Int32Array(size);
+      state.orDirect = new Int32Array(size);
+      state.orEpoch = 0;
+    }
+    const { orScore, orCount, orSeen, orDirect } = state;
+    const epoch = ++state.orEpoch;
+    let reached = 0;
+    for (const list of lists) {
+      const { numbers, scores, fuzzy } = list;
+      for (let i = 0; i < numbers.length; i++) {
+        const n = numbers[i];
+        if (orSeen[n] !== epoch) {
+          orSeen[n] = epoch;
+          orScore[n] = 0;
+          orCount[n] = 0;
+        }
+        orScore[n] += scores[i];
+        orCount[n] += 1;
+        if (!fuzzy[i] && orDirect[n] !== epoch) {
+          orDirect[n] = epoch;
+          reached++;
+        }
+      }
+    }
+    const candidates = new Int32Array(reached);
+    let k = 0;
+    for (const list of lists) {
+      const { numbers, fuzzy } = list;
+      for (let i = 0; i < numbers.length; i++) {
+        const n = numbers[i];
+        if (!fuzzy[i] && orDirect[n] === epoch) {
+          orDirect[n] = -epoch;
+          candidates[k++] = n;
+        }
+      }
+    }
+    candidates.sort();
+    const numbers: number[] = [];
+    const scores: number[] = [];
+    for (let i = 0; i < candidates.length; i++) {
+      const n = candidates[i];
+      if (!state.byNumber[n]) continue;
+      numbers.push(n);
+      scores.push(orScore[n] * orCount[n]);
+    }
+    return { numbers, scores, lists };
   }
 
   /** The hit of internal number n with its matched terms (the union over the words' lists). */
@@ -449,7 +542,7 @@ export class SearchIndex {
     for (const list of lists) {
       const at = list.find(n);
       if (at < 0) continue;
-      for (const t of list.terms[at]) if (!terms.includes(t)) terms.push(t);
+      for (const t of list.terms(at)) if (!terms.includes(t)) terms.push(t);
     }
     return { entry: this.state.byNumber[n]!, score, terms };
   }
@@ -481,28 +574,39 @@ export class SearchIndex {
    */
   search(req: SearchRequest): SearchPage {
     const found = this.hits(req.q);
-    const byNumber = this.state.byNumber;
+    const state = this.state;
+    const byNumber = state.byNumber;
     const blank = found ? null : this.newestEntries();
-    const count = found ? found.numbers.length : blank!.length;
-    const entryAt = (i: number) => (found ? byNumber[found.numbers[i]]! : blank![i]);
+    const numbers = found ? found.numbers : (state.newestNumbers ??= Int32Array.from(blank!, (e) => state.engine.numberOf(e.id)!));
+    const count = numbers.length;
+    // Laws and classes counted as small numbers, then named in the order first counted.
     const classes = req.mechanism ? this.classAndChildren(req.mechanism) : null;
-    const laws: Record<string, number> = {};
-    const mechanisms: Record<string, number> = {};
-    const lineage = new Map<string, string[]>();
+    const wantLaw = req.law ? (state.lawIds.get(req.law) ?? -2) : -1;
+    const inClasses = classes ? new Uint8Array(state.classSlugs.length) : null;
+    if (inClasses) for (const s of classes!) if (state.classIds.has(s)) inClasses[state.classIds.get(s)!] = 1;
+    // Each class with those above it (which may add numbers for classes no entry has).
+    const lineage: number[][] = [];
+    for (let c = 0; c < state.classSlugs.length; c++) lineage.push(this.classAndAncestors(state.classSlugs[c]).map((s) => state.classId(s)));
+    const lawCount = new Int32Array(state.lawSlugs.length);
+    const classCount = new Int32Array(state.classSlugs.length);
+    const lawOrder: number[] = [];
+    const classOrder: number[] = [];
     const kept: number[] = [];
+    const { facetLaws, facetClass } = state;
     for (let i = 0; i < count; i++) {
-      const e = entryAt(i);
-      const byLaw = !req.law || e.laws.includes(req.law);
-      const byClass = !classes || (e.mechanismClass !== null && classes.has(e.mechanismClass));
-      if (byClass) for (const l of e.laws) laws[l] = (laws[l] ?? 0) + 1;
-      const cls = e.mechanismClass;
-      if (byLaw && cls) {
-        let up = lineage.get(cls);
-        if (!up) lineage.set(cls, (up = this.classAndAncestors(cls)));
-        for (const c of up) mechanisms[c] = (mechanisms[c] ?? 0) + 1;
-      }
+      const n = numbers[i];
+      const ls = facetLaws[n];
+      const cls = facetClass[n];
+      const byLaw = wantLaw === -1 || ls.includes(wantLaw);
+      const byClass = !inClasses || (cls >= 0 && inClasses[cls] === 1);
+      if (byClass) for (const l of ls) if (lawCount[l]++ === 0) lawOrder.push(l);
+      if (byLaw && cls >= 0) for (const c of lineage[cls]) if (classCount[c]++ === 0) classOrder.push(c);
       if (byLaw && byClass) kept.push(i);
     }
+    const laws: Record<string, number> = {};
+    for (const l of lawOrder) laws[state.lawSlugs[l]] = lawCount[l];
+    const mechanisms: Record<string, number> = {};
+    for (const c of classOrder) mechanisms[state.classSlugs[c]] = classCount[c];
     const end = req.offset + req.limit;
     let hits: SearchHit[];
     if (!found) {
@@ -526,8 +630,23 @@ export class SearchIndex {
    * ("Carnot", "RF"). Concept terms are left out; duplicates are dropped.
    */
   readerWords(hit: SearchHit, q: string): string[] {
+    return this.readerWordsOf(hit, this.typedWords(q));
+  }
+
+  /** readerWords of each hit of a page, the query's words worked out once. */
+  readerWordsOfPage(hits: readonly SearchHit[], q: string): string[][] {
+    const typed = this.typedWords(q);
+    return hits.map((h) => this.readerWordsOf(h, typed));
+  }
+
+  /** Index term → the query's word for it, as typed (the first one typed). */
+  private typedWords(q: string): Map<string, string> {
     const typed = new Map<string, string>();
     for (const { typed: word, term } of this.queryWords(q)) if (!typed.has(term)) typed.set(term, word);
+    return typed;
+  }
+
+  private readerWordsOf(hit: SearchHit, typed: Map<string, string>): string[] {
     const terms = hit.terms.filter((t) => !isConceptTerm(t));
     const rest = terms.filter((t) => !typed.has(t));
     const forms = rest.length ? this.writtenForms(hit.entry.id, rest) : new Map<string, string>();
@@ -592,17 +711,14 @@ export class SearchIndex {
       return cached;
     }
     const fuzzy = known ? 0 : fuzzyDistance(word);
-    const direct = (t: string) => t === word || (prefix && t.startsWith(word));
-    const r = state.engine.search([{ term: word, prefix, fuzzy, boost: 1 }], { events: prefix || fuzzy > 0 });
-    const termsOf = termLists(r);
-    const swaps = !known && word.length >= 4;
-    let hits: WordHits;
-    if (!swaps) {
-      // Straight from the engine's arrays, put in ascending order of internal number.
-      hits = wordHitsFrom(r, termsOf, direct);
-    } else {
-      hits = this.withSwaps(r, termsOf, direct, word, typed);
-    }
+    // A word the index lacks (4 letters or more) is also tried with two neighbouring letters
+    // swapped: one slip, not the two edits an edit distance counts, so at a fuzzy weight of one edit.
+    const swaps = !known && word.length >= 4 ? swapped(typed).filter((v) => v !== word) : [];
+    const r = state.engine.search(
+      [{ term: word, prefix, fuzzy, boost: 1, alternatives: swaps, alternativeWeight: FUZZY_WEIGHT * (word.length / (word.length + 1)) }],
+      { ascending: true },
+    );
+    const hits = wordHitsOf(r, state.fieldTerms);
     state.wordCache.set(key, hits);
     state.wordCacheHits += hits.numbers.length;
     while (state.wordCache.size > WORD_CACHE_SIZE || state.wordCacheHits > WORD_CACHE_HITS) {
@@ -611,29 +727,6 @@ export class SearchIndex {
       state.wordCacheHits -= dropped.numbers.length;
     }
     return hits;
-  }
-
-  /** A word's hits with those of its forms with two neighbouring letters swapped added (a word the index lacks). */
-  private withSwaps(r: RawResults, termsOf: (i: number) => string[], direct: (t: string) => boolean, word: string, typed: string): WordHits {
-    const state = this.state;
-    const acc = new Map<number, { score: number; terms: string[]; fuzzy: boolean }>();
-    for (let i = 0; i < r.docs.length; i++) {
-      const terms = termsOf(i);
-      acc.set(r.docs[i], { score: r.scores[i], terms, fuzzy: !terms.some(direct) });
-    }
-    // Two letters typed the wrong way round are one slip, not the two edits an edit distance counts.
-    const weight = FUZZY_WEIGHT * (word.length / (word.length + 1));
-    for (const variant of swapped(typed)) {
-      if (variant === word || !state.df.has(variant)) continue;
-      const v = state.engine.search([{ term: variant, prefix: false, fuzzy: 0, boost: 1 }], { events: false });
-      for (let i = 0; i < v.docs.length; i++) {
-        const n = v.docs[i];
-        const had = acc.get(n);
-        const terms = had ? (had.terms.includes(variant) ? had.terms : [...had.terms, variant]) : [variant];
-        acc.set(n, { score: (had?.score ?? 0) + v.scores[i] * weight, terms, fuzzy: had ? had.fuzzy : true });
-      }
-    }
-    return wordHitsOf(acc);
   }
 
   /**
@@ -662,7 +755,6 @@ export class SearchIndex {
     const { prefix = false, boostTerm, atLeast } = options;
     const r = state.engine.search(
       terms.map((term) => ({ term, prefix: typeof prefix === 'function' ? prefix(term) : prefix, fuzzy: 0, boost: boostTerm ? boostTerm(term) : 1 })),
-      { events: false },
     );
     let derivedAt: Map<string, number> | undefined;
     const kept: number[] = [];
@@ -739,41 +831,33 @@ export interface LazyTermsHits {
 /** How many entries' written forms (readerWords) are kept. */
 const FORMS_CACHE_SIZE = 2000;
 
-/** One word's hits: internal numbers ascending, each with its score, matched terms and whether only a typing error reached it. */
+/**
+ * One word's hits: internal numbers ascending, each with its score and whether only a typing
+ * error reached it; the index terms each matched are worked out on demand (only a page's hits
+ * need them).
+ */
 interface WordHits {
   numbers: Int32Array;
   scores: Float64Array;
-  terms: string[][];
   fuzzy: Uint8Array;
   /** Position of internal number n in numbers, or -1. */
   find(n: number): number;
+  /** The index terms the hit at this position matched, in the order scored. */
+  terms(at: number): string[];
 }
 
-/** A word's hits from one engine search, in ascending order of internal number (a numeric sort of number and position packed in one float). */
-function wordHitsFrom(r: RawResults, termsOf: (i: number) => string[], direct: (t: string) => boolean): WordHits {
-  const m = r.docs.length;
-  const packed = new Float64Array(m);
-  for (let i = 0; i < m; i++) packed[i] = r.docs[i] * 2 ** 21 + i;
-  packed.sort();
-  const numbers = new Int32Array(m);
-  const scores = new Float64Array(m);
-  const fuzzy = new Uint8Array(m);
-  const terms: string[][] = new Array(m);
-  for (let k = 0; k < m; k++) {
-    const i = packed[k] % 2 ** 21;
-    numbers[k] = r.docs[i];
-    scores[k] = r.scores[i];
-    const ts = termsOf(i);
-    terms[k] = ts;
-    fuzzy[k] = ts.some(direct) ? 0 : 1;
-  }
-  return withFind({ numbers, scores, terms, fuzzy });
-}
-
-function withFind(h: Omit<WordHits, 'find'>): WordHits {
-  const numbers = h.numbers;
+/** A word's hits from one engine search (its documents in ascending order). */
+function wordHitsOf(r: RawResults, fieldTerms: readonly (string[][] | undefined)[]): WordHits {
+  const numbers = r.docs;
+  const fuzzy = r.direct.map((d) => 1 - d);
+  // The terms reached, each once, in the order scored.
+  const derived = [...new Set(r.derived)];
+  let order: Map<string, number> | undefined;
+  const only = derived.length === 1 ? [derived[0]] : null;
   return {
-    ...h,
+    numbers,
+    scores: r.scores,
+    fuzzy,
     find(n) {
       let lo = 0;
       let hi = numbers.length;
@@ -784,37 +868,19 @@ function withFind(h: Omit<WordHits, 'find'>): WordHits {
       }
       return lo < numbers.length && numbers[lo] === n ? lo : -1;
     },
-  };
-}
-
-function wordHitsOf(acc: Map<number, { score: number; terms: string[]; fuzzy: boolean }>): WordHits {
-  const numbers = Int32Array.from(acc.keys()).sort();
-  const scores = new Float64Array(numbers.length);
-  const fuzzy = new Uint8Array(numbers.length);
-  const terms: string[][] = new Array(numbers.length);
-  for (let i = 0; i < numbers.length; i++) {
-    const h = acc.get(numbers[i])!;
-    scores[i] = h.score;
-    fuzzy[i] = h.fuzzy ? 1 : 0;
-    terms[i] = h.terms;
-  }
-  return withFind({ numbers, scores, terms, fuzzy });
-}
-
-/** The matched index terms of each document of a one-word search, in the order matched; documents with the same terms share one array. */
-function termLists(r: RawResults): (i: number) => string[] {
-  if (r.derived.length === 1) {
-    const only = [r.derived[0]];
-    return () => only;
-  }
-  const shared = new Map<string, string[]>();
-  return (i) => {
-    const idx: number[] = [];
-    for (const { term } of r.events(i)) if (!idx.includes(term)) idx.push(term);
-    const key = idx.join(',');
-    let list = shared.get(key);
-    if (!list) shared.set(key, (list = idx.map((t) => r.derived[t])));
-    return list;
+    terms(at) {
+      if (only) return only;
+      // The document's own terms looked up among those reached (a hit holds a term it matched in one of its fields).
+      order ??= new Map(derived.map((t, i) => [t, i]));
+      const found: number[] = [];
+      for (const field of fieldTerms[numbers[at]] ?? []) {
+        for (const t of field) {
+          const i = order.get(t);
+          if (i !== undefined && !found.includes(i)) found.push(i);
+        }
+      }
+      return found.sort((x, y) => x - y).map((i) => derived[i]);
+    },
   };
 }
 

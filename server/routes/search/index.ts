@@ -24,13 +24,17 @@ export function searchRoutes(allow: Allow, index: SearchIndex): Router {
     if (q.law && index.laws.size && !index.laws.has(q.law)) throw unknown('query.law', 'conservation law', q.law);
     if (q.mechanism && index.classes.size && !index.classes.has(q.mechanism)) throw unknown('query.mechanism', 'mechanism class', q.mechanism);
     const page = index.search({ q: q.q, law: q.law, mechanism: q.mechanism, offset: q.offset, limit: q.limit });
-    res.json({
+    const words = index.readerWordsOfPage(page.hits, q.q);
+    const body = {
       query: q.q,
       total: page.total,
-      results: page.hits.map((h) => searchResult(h, index.readerWords(h, q.q))),
+      results: page.hits.map((h, i) => searchResult(h, words[i])),
       facets: page.facets,
       ...(page.partial ? { partial: true } : {}),
-    });
+    };
+    // Plain JSON.stringify: the answer holds no typed arrays, so the app's 'json replacer' (called
+    // for every key and value) has nothing to do here. Same text and Content-Type as res.json.
+    res.type('json').send(JSON.stringify(body));
   });
   return r;
 }
