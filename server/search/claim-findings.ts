@@ -9,26 +9,24 @@
  * entry of that class is offered. Where the words match entries they decide: a drive claim whose
  * speed runs past c is answered by the drive's entry, with the class boost lifting the
  * faster-than-light entry where the words are about the speed.
- * The entry is the one of exactly that class (not its children) whose words the text comes closest
- * to (claimCandidates' raw score, passing or not), else the class's first entry. The hit carries
- * the finding in words (`finding`) and no matched words: it was not picked for its words.
+ * The entry is the one of exactly that class (not its children) that the text's words rank highest
+ * in a plain search, else the class's first entry. The hit carries the finding in words
+ * (`finding`) and no matched words: it was not picked for its words.
  */
 import type { FindingLead } from '../../shared/claims/plan';
-import { claimCandidates, type ClaimHit } from './claim-match';
+import type { ClaimHit } from './claim-match';
 import type { SearchIndex } from './index';
 import type { IndexedEntry } from './types';
 
 export function withFindingEntries(index: SearchIndex, text: string, hits: ClaimHit[], leads: readonly FindingLead[], limit = 5): ClaimHit[] {
   if (leads.length === 0 || hits.length > 0) return hits;
   let out: ClaimHit[] = [];
-  let candidates: ReturnType<typeof claimCandidates> | null = null;
+  let ranked: IndexedEntry[] | null = null;
   const entryOf = (cls: string): IndexedEntry | null => {
-    const all = index.query('').map((h) => h.entry).filter((e) => e.mechanismClass === cls);
-    if (all.length === 0) return null;
-    if (all.length === 1) return all[0];
-    candidates ??= claimCandidates(index, text);
-    const best = candidates.find((c) => c.hit.entry.mechanismClass === cls);
-    return best ? best.hit.entry : [...all].sort((a, b) => a.id - b.id)[0];
+    const all = index.entriesOfClass(cls);
+    if (all.length <= 1) return all[0] ?? null;
+    ranked ??= index.query(text).map((h) => h.entry);
+    return ranked.find((e) => e.mechanismClass === cls) ?? all[0];
   };
   for (const lead of leads) {
     const entry = entryOf(lead.mechanismClass);

@@ -103,6 +103,8 @@ class IndexState {
   orEpoch = 0;
   /** Every entry, newest first (the answer to a blank query), made when first asked for. */
   newest: IndexedEntry[] | null = null;
+  /** The entries of each mechanism class (exactly that class), oldest first, made when first asked for. */
+  byClass: Map<string, IndexedEntry[]> | null = null;
   /** The internal numbers of newest, beside it. */
   newestNumbers: Int32Array | null = null;
   /** Per internal number: the entry's laws and its class (-1: none) as small numbers, for counting facets. */
@@ -178,6 +180,7 @@ class IndexState {
     this.wordCacheHits = 0;
     this.newest = null;
     this.newestNumbers = null;
+    this.byClass = null;
     this.forms.clear();
   }
 }
@@ -545,6 +548,22 @@ export class SearchIndex {
       for (const t of list.terms(at)) if (!terms.includes(t)) terms.push(t);
     }
     return { entry: this.state.byNumber[n]!, score, terms };
+  }
+
+  /** The entries of exactly this mechanism class (not its children), oldest first. */
+  entriesOfClass(slug: string): readonly IndexedEntry[] {
+    const state = this.state;
+    if (!state.byClass) {
+      const byClass = new Map<string, IndexedEntry[]>();
+      for (const e of [...state.entries.values()].sort((a, b) => a.id - b.id)) {
+        if (e.mechanismClass === null) continue;
+        const list = byClass.get(e.mechanismClass);
+        if (list) list.push(e);
+        else byClass.set(e.mechanismClass, [e]);
+      }
+      state.byClass = byClass;
+    }
+    return state.byClass.get(slug) ?? [];
   }
 
   /** Every entry, newest first (a blank query). */
