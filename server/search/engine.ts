@@ -94,7 +94,7 @@ export class Engine {
   private count = 0;
   /** Sorted vocabulary (prefix expansion) and by first letter (fuzzy expansion); rebuilt when the vocabulary changes. */
   private sorted: string[] | null = null;
-  private byFirst: Map<string, string[]> | null = null;
+  private byFirst: Map<string, { terms: string[]; masks: Int32Array }> | null = null;
   // Accumulators, the size of the internal numbers, reused by every search.
   private acc = new Float64Array(0);
   private termAcc = new Float64Array(0);
@@ -235,20 +235,33 @@ export class Engine {
     return out;
   }
 
-  /** The vocabulary terms with the word's first letter within `max` edits of it (the word itself left out), with their distance. */
+  /**
+   * The vocabulary terms with the word's first letter within `max` edits of it (the word itself left
+   * out), with their distance. A term is only worked out letter by letter when its letters could be
+   * within reach: each edit adds at most one letter the other word lacks and takes away at most one,
+   * so words within `max` edits differ by at most `max` letters either way (letterMask; a cheap test
+   * that never leaves out a term within reach).
+   */
   near(word: string, max: number): [string, number][] {
     if (!this.byFirst) {
-      this.byFirst = new Map();
+      const lists = new Map<string, string[]>();
       for (const t of this.terms.keys()) {
         const k = t[0];
-        const list = this.byFirst.get(k);
+        const list = lists.get(k);
         if (list) list.push(t);
-        else this.byFirst.set(k, [t]);
+        else lists.set(k, [t]);
       }
+      this.byFirst = new Map([...lists].map(([k, terms]) => [k, { terms, masks: Int32Array.from(terms, letterMask) }]));
     }
     const out: [string, number][] = [];
-    for (const t of this.byFirst.get(word[0]) ?? []) {
+    const group = this.byFirst.get(word[0]);
+    if (!group) return out;
+    const { terms, masks } = group;
+    const mine = letterMask(word);
+    for (let i = 0; i < terms.length; i++) {
+      const t = terms[i];
       if (t === word || Math.abs(t.length - word.length) > max) continue;
+      if (bitCount(mine & ~masks[i]) > max || bitCount(masks[i] & ~mine) > max) continue;
       const d = editDistance(word, t, max);
       if (d <= max) out.push([t, d]);
     }
@@ -472,6 +485,20 @@ function bisectStr(xs: string[], x: string): number {
     else hi = mid;
   }
   return lo;
+}
+
+/** The letters of a word as a set of 31 bits (a character's code modulo 31: two letters may share a bit, which only makes near()'s test looser). */
+export function letterMask(word: string): number {
+  let m = 0;
+  for (let i = 0; i < word.length; i++) m |= 1 << (word.charCodeAt(i) % 31);
+  return m;
+}
+
+/** How many bits are set. */
+function bitCount(x: number): number {
+  x -= (x >>> 1) & 0x55555555;
+  x = (x & 0x33333333) + ((x >>> 2) & 0x33333333);
+  return (((x + (x >>> 4)) & 0x0f0f0f0f) * 0x01010101) >>> 24;
 }
 
 /** Rows of editDistance, reused (grown when a longer word comes). */
