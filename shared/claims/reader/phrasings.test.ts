@@ -10,6 +10,7 @@
  * invented organisation ("Example Dynamics"), no real people or products.
  */
 import { extractFigures } from '../reader';
+import { runClaimChecks } from '../plan';
 import { type Figure, type FigureKind } from '../types';
 import { expectRelClose, expectWellFormed, SEVEN } from './test-support';
 
@@ -514,5 +515,29 @@ describe('ratios, masses and seconds said in words', () => {
     const f = read('The generator has a mass of 4.5 kg and a specific power of 800 W/kg.');
     expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['out', 3600]]);
     expect(read('A 500 kg satellite with a 30 W/kg solar array draws 2 kW.').filter((x) => x.kind === 'power').map((x) => x.si)).toEqual([2000]);
+  });
+  test('posts and listings: a role word said absent, "zero propellant", "to make", a difference "below a room", "100k BTU/h"', () => {
+    // "needs no supply" names no input for the 2.5 kW; self-running gives an input of 0.
+    expect(brief(read('Self-running magnet generator, needs no supply once started, 2.5 kW continuous.'))).toEqual([
+      ['power', 'in', 0],
+      ['power', 'out', 2500],
+    ]);
+    const text = 'Our field thruster gives 250 grams-force with zero propellant on 3 kW.';
+    expect(runClaimChecks(extractFigures(text), { text }).checks.map((c) => [c.check, c.finding])).toContainEqual(['photon-bound', 'breaks']);
+    // 40 PS × 735.49875 W/PS = 29 419.95 W in (NIST SP 811 B.8); 25 kW out.
+    expect(brief(read('PTO genset needs 40 PS from the tractor to make 25 kW electric.'))).toEqual([
+      ['power', 'in', 29419.95],
+      ['power', 'out', 25000],
+    ]);
+    // 25 °C room = 298.15 K hot; 298.15 − 30 = 268.15 K cold.
+    expect(brief(read('The cooler box holds a 30 °C temperature difference below a 25 °C room.')).filter(([k]) => k === 'temperature')).toEqual([
+      ['temperature', 'hot', 298.15],
+      ['temperature', 'cold', 268.15],
+    ]);
+    // 100 000 BTU/h × 0.293 071 07 W per BTU/h = 29 307.1 W (NIST SP 811 B.8).
+    expect(read('Condensing boiler: 100k BTU/h input, 95k BTU/h output.').map((x) => [x.role, Math.round(x.si)])).toEqual([
+      ['in', 29307],
+      ['out', 27842],
+    ]);
   });
 });

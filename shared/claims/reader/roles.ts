@@ -124,6 +124,9 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   let last: RegExpExecArray | null = null;
   for (let m = roles.before.exec(slice); m; m = roles.before.exec(slice)) last = m;
   if (!last) return null;
+  // A role word said to be absent ("needs no supply once started, 2.5 kW continuous", "without any
+  // input") names no side for the figure after it.
+  if (NEGATED_LEAD_RE.test(slice.slice(Math.max(0, last.index - 20), last.index))) return null;
   let best: FigureRole = null;
   let longest = 0;
   roles.beforeAt.forEach((re, i) => {
@@ -136,6 +139,9 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   });
   return best;
 }
+
+/** Just before a role word: a word that says it is absent ("no", "without", "zero"). */
+const NEGATED_LEAD_RE = /(?<!\p{L})(?:no|without|zero|never|nor)[^\S\n]+(?:(?:any|external|outside|other|electrical|electric)[^\S\n]+)?$/iu;
 
 export function roleFor(text: string, kind: FigureKind, start: number, end: number, floor: number): FigureRole {
   if (kind === 'power' || kind === 'energy') {

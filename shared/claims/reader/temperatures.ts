@@ -32,8 +32,8 @@ const DIFF_LABEL_RE = new RegExp(
 /** Which way a difference points: "30 °C below …", "9 °F cooler" → down; "40 degrees above …" → up. */
 export function differenceDirection(text: string, end: number): 'up' | 'down' | undefined {
   const after = text.slice(end, end + 30);
-  if (/^[^\S\n]*(?:\p{L}+[^\S\n]+)?(?:below|under|cooler|colder|lower)(?!\p{L})/iu.test(after)) return 'down';
-  if (/^[^\S\n]*(?:\p{L}+[^\S\n]+)?(?:above|over|warmer|hotter|higher)(?!\p{L})/iu.test(after)) return 'up';
+  if (/^[^\S\n]*(?:\p{L}+[^\S\n]+){0,2}?(?:below|under|cooler|colder|lower)(?!\p{L})/iu.test(after)) return 'down';
+  if (/^[^\S\n]*(?:\p{L}+[^\S\n]+){0,2}?(?:above|over|warmer|hotter|higher)(?!\p{L})/iu.test(after)) return 'up';
   return undefined;
 }
 

@@ -59,7 +59,7 @@ export const PROPELLANT_FREE_WORDS = [
   'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
   'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
   'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
-  'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', 'expels? no (?:propellant|mass|gas|reaction mass|matter)',
+  'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', '(?:zero|nil|0) (?:propellant|reaction mass|exhaust)', 'propellant(?: used)?[^\\S\\n]*[:=][^\\S\\n]*(?:none|nil|zero|0 ?(?:g|kg)?)(?![\\w.])', 'expels? no (?:propellant|mass|gas|reaction mass|matter)',
   // "ejects no reaction mass", "w/o any propellant", "works just as well in hard vacuum (no air needed)".
   '(?:ejects?|ejecting|expelling|throws? out|throwing out|vents?|venting|sheds?|shedding|carries|carrying) no (?:[\\w-]+ )?(?:propellant|reaction mass|exhaust|mass|matter)', 'w/o?(?:ut)? (?:any )?(?:propellant|reaction mass|exhaust)',
   'no air (?:is )?(?:needed|required)', '(?<!(?:not|n\x27t|n\u2019t|never|cannot|nor) )(?:works?|working|operates?|operating|functions?|functioning)(?: (?!not|never)[\\w-]+){0,3}? (?:in|under) (?:a |hard |high |deep |full )?vacuum',
@@ -123,6 +123,8 @@ export const HARVEST_WORDS = [
 /** Nouns after "5K" that make the K a thousand ("5K cycles"), not kelvins. */
 export const THOUSAND_NOUNS = [
   'start(?:s|[–-]stop)?', 'charges?', 'discharges?', 'operations?', 'actuations?', 'revs?', 'kilomet(?:re|er)s?', 'cycles?', 'hours?', 'hrs?', 'rpm', 'RPM', 'revolutions?', 'rotations?', 'runs?', 'tests?', 'trials?', 'units?', 'miles?', 'km', 'steps?', 'iterations?',
+  // Units that no temperature comes before ("100k BTU/h", "5K lbs of thrust").
+  'BTUs?', 'lbs?', 'lbf',
   'shots?', 'pulses?', 'seconds?', 'minutes?', 'days?', 'cells?', 'orders?', 'customers?', 'users?', 'dollars?', 'euros?', 'pounds?', 'USD', 'EUR',
   'homes?', 'households?', 'devices?', 'vehicles?', 'cars?', 'operating hours', 'loops?', 'turns?', 'strokes?', 'rounds?', 'samples?', 'subscribers?',
   'watts?', 'W\\b', 'volts?', 'amps?', 'joules?', 'newtons?', 'feet', 'ft',
