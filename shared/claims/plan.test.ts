@@ -244,6 +244,12 @@ describe('signals for the matcher', () => {
     expect(readSignals({ text: 'without expelling any propellant' })).toMatchObject({ propellantFree: true, propellant: false });
   });
 
+  it('a lifter said to lift as much in a pumped-down bell jar as in air is held to the photon bound', () => {
+    // 30 kV × 1.1 mA = 33 W; 3.5 gf = 3.5 × 9.80665e-3 N = 0.0343 N; P/c = 1.1e-7 N.
+    const text = 'A 9 g foil lifter inside a bell jar pumped down to a high vacuum, at 30 kV and 1.1 mA, gives a steady lift of 3.5 grams-force, the same as in air, from a field effect that needs no propellant.';
+    expect(runClaimChecks(extractFigures(text), { text }).checks.map((c) => [c.check, c.finding])).toContainEqual(['photon-bound', 'breaks']);
+  });
+
   it('a speed above c, a converter over its limit, and a percentage above 100 % point to their own classes', () => {
     const classes = (text: string) => signalledClasses(extractFigures(text), text);
     // 900 million mph × 0.44704 m/s per mph (NIST SP 811 B.8) = 4.02 × 10⁸ m/s > c = 299 792 458 m/s.
@@ -259,6 +265,14 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([
     'The heat pump uses 1 kW of electricity to deliver 4 kW of heat.',
+    // A lifter that lifts in air and stops in vacuum pushes on air.
+    'Our ion-wind lifter raised 3 grams-force on 33 W in room air; in a bell jar pumped down to a high vacuum it produced no lift at all.',
+    // A cell that gives back what it draws has no excess for a nuclear question.
+    'A nickel–hydrogen cell with 25 g of nickel gave 20 W of heat for the 20 W of electrical power it drew, over 11 days.',
+    // A thermoelectric fan between a stove and the room takes heat in: "without fuel" is not "without input".
+    'The stove fan carries a thermoelectric module at 250 °C on the stove, its cold face at 25 °C; it makes 1.5 W, and critics said electricity from a stove without fuel must be perpetual motion.',
+    // A battery that carried a 600 W load for 7 hours and was recharged with 5.6 kWh (15.12 MJ out, 20.16 MJ in).
+    'The battery was charged in full and then carried the cabinet, a steady 600 W load, for 7 hours. Recharging from the mains afterwards took 5.6 kWh.',
     'Heat output 1.5E+3 W from a 4.0E+2 W compressor; source 5 °C, sink 35 °C.',
     'The beverage cooler removes 2,400 BTU/h from a 35 °F box in a 75 °F room while its compressor draws 200 W.',
     'The 40 dB power amplifier turns a 10 mW input signal into 100 W of output, drawing 180 W from its 48 V supply.',

@@ -7,10 +7,11 @@
  */
 import { formatPrint } from '../print';
 import { at, need, ofKind, uniq, type Basis } from './basis';
+import { sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE } from './signals';
 
 /** A converter of sunlight to electricity. */
-const SOLAR_CELL_RE = /(?<!\p{L})(?:solar (?:cells?|panels?|modules?|films?|arrays?)|(?:rooftop|roof-?top|home|residential) solar|solar(?:[^\S\n]+[\p{L}-]+){0,3}[^\S\n]*[,:;–—-][^\S\n]*(?:the[^\S\n]+)?(?:panels?|modules?)|PV (?:panels?|modules?|arrays?)|photovoltaic\w*|PV|perovskites?|(?:silicon|GaAs|gallium arsenide|CdTe|CIGS|organic) (?:cells?|films?|modules?)|single[- ]junction|multi[- ]junction|triple[- ]junction|tandem cells?|(?:mono|poly)-?(?:c-)?Si|c-Si|a-Si|(?:mono|poly|multi)-?crystalline(?:[^\S\n]+silicon)?|(?:panels?|modules?)(?=[^.;!?\n]{0,60}(?<!\p{L})(?:in|under)[^\S\n]+(?:full|peak|direct|bright|strong|midday|noon|standard)[^\S\n]+(?:sun|sunlight|sunshine)(?!\p{L}))|(?:of|from) (?:plain |the )?sunlight (?:in)?to electricity)(?!\p{L})/iu;
+const SOLAR_CELL_RE = /(?<!\p{L})(?:solar (?:cells?|panels?|modules?|films?|arrays?)|(?:rooftop|roof-?top|home|residential) solar|solar(?:[^\S\n]+[\p{L}-]+){0,3}[^\S\n]*[,:;–—-][^\S\n]*(?:the[^\S\n]+)?(?:panels?|modules?)|PV (?:panels?|modules?|arrays?)|photovoltaic\w*|PV|perovskites?|(?:silicon|GaAs|gallium arsenide|CdTe|CIGS|organic)(?:[^\S\n]+[\p{L}-]+){0,2}?[^\S\n]+(?:cells?|films?|modules?)|hetero-?junction cells?|(?:one|1)[- ]sun|AM[^\S\n]?1\.5G?|single[- ]junction|multi[- ]junction|triple[- ]junction|tandem cells?|(?:mono|poly)-?(?:c-)?Si|c-Si|a-Si|(?:mono|poly|multi)-?crystalline(?:[^\S\n]+silicon)?|(?:panels?|modules?)(?=[^.;!?\n]{0,60}(?<!\p{L})(?:in|under)[^\S\n]+(?:full|peak|direct|bright|strong|midday|noon|standard)[^\S\n]+(?:sun|sunlight|sunshine)(?!\p{L}))|(?:of|from) (?:plain |the )?sunlight (?:in)?to electricity)(?!\p{L})/iu;
 /** "single-junction", "triple-junction", "a 4-junction cell". */
 const JUNCTIONS_RE = /(?<!\p{L})(single|one|double|dual|two|triple|three|four|five|six|\d{1,2})[- ]junction(?!\p{L})|(?<!\p{L})(tandem)(?!\p{L})/iu;
 /** A plain crystalline-silicon cell, one junction (not a tandem that stacks another cell on silicon). */
@@ -48,7 +49,9 @@ export function planOtherChecks(b: Basis): void {
   const { figures, ctx, s, plans, needs, notes, power, energy, text, pIn, pOut, speeds, temps } = b;
   // ---- Converters of sunlight: the Landsberg and Carnot bounds, and Shockley–Queisser for one junction
   const solarEfficiency = ofKind(figures, 'efficiency').find((f) => !f.derived);
-  if (solarEfficiency && SOLAR_CELL_RE.test(text) && !s.heatEngine && !HEAT_ONLY_RE.test(text)) {
+  // (A heat-only device in the efficiency's own sentence, not a furnace named elsewhere in a long report.)
+  const heatOnly = solarEfficiency && solarEfficiency.start !== null && solarEfficiency.end !== null ? HEAT_ONLY_RE.test(sentenceAround(text, solarEfficiency.start, solarEfficiency.end)) : HEAT_ONLY_RE.test(text);
+  if (solarEfficiency && SOLAR_CELL_RE.test(text) && !s.heatEngine && !heatOnly) {
     const junction = JUNCTIONS_RE.exec(text);
     const silicon = !junction && SILICON_CELL_RE.test(text) && !STACKED_CELL_RE.test(text);
     const junctions = junction ? (JUNCTION_COUNT[(junction[1] ?? junction[2]).toLowerCase()] ?? Number(junction[1])) : silicon ? 1 : 0;
@@ -115,9 +118,26 @@ export function planOtherChecks(b: Basis): void {
   }
   const excessHeat = (ctx.classes ?? []).includes('excess-heat-cell') || EXCESS_HEAT_CELL_RE.test(text);
   const metal = METAL_RE.exec(text);
-  const excessEnergy = ofKind(figures, 'energy').find((f) => f.role === 'excess' || f.role === 'out') ?? ofKind(figures, 'energy').find((f) => f.role === null);
+  const energies = ofKind(figures, 'energy');
+  const excessEnergy = energies.find((f) => f.role === 'excess') ?? energies.find((f) => f.role === 'out') ?? energies.find((f) => f.role === null);
   const metalMass = ofKind(figures, 'mass')[0];
-  if (excessHeat && metal && excessEnergy && metalMass) {
+  // With an energy in and an energy out (and no excess said), the excess is out − in, taken at its
+  // smallest (the low end of out, the high end of in): none at all means no nuclear question.
+  const energyIn = energies.find((f) => f.role === 'in');
+  const outLessIn = excessEnergy?.role === 'out' && energyIn ? excessEnergy.si - (energyIn.upper?.si ?? energyIn.si) : null;
+  if (excessHeat && metal && excessEnergy && metalMass && outLessIn !== null && outLessIn > 0 && energyIn) {
+    const molar = MOLAR_MASS[metal[1].toLowerCase()];
+    plans.push({
+      check: 'nuclear-signature',
+      uses: [excessEnergy, energyIn, metalMass],
+      inputs: (e) => ({ E_excess: `${outLessIn} J`, mass: at(metalMass, e(metalMass)), molar_mass: `${molar} g/mol`, atoms: '0', P_excess: '0 W' }),
+      why: `The text gives the energy out and in, and the mass of ${metal[1].toLowerCase()} the excess came from.`,
+      assumptions: [
+        'The excess is the energy out less the energy in, at its smallest.',
+        `Every atom of the ${formatPrint(metalMass.si * 1000)} g of ${metal[1].toLowerCase()} (${molar} g/mol, IUPAC standard atomic weight) takes part, the reading most favourable to the claim.`,
+      ],
+    });
+  } else if (excessHeat && metal && excessEnergy && metalMass && outLessIn === null) {
     // The claimed energy per atom of the named metal, against the few electronvolts chemistry gives.
     const molar = MOLAR_MASS[metal[1].toLowerCase()];
     plans.push({

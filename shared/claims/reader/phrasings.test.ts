@@ -540,4 +540,18 @@ describe('ratios, masses and seconds said in words', () => {
       ['out', 27842],
     ]);
   });
+  test('long texts: a precision is no flow; a load the device keeps running "that takes 8.5 A at 12 V" is its output', () => {
+    expect(read('Calibration gave the calorimeter constant to within 0.3 W.').map((x) => [x.kind, x.role])).toEqual([['power', 'aside']]);
+    // 0.75 A × 12 V = 9 W in; 8.5 A × 12 V = 102 W out.
+    const f = read('The box draws just 0.75 A at 12 V from its starter battery, yet it keeps a lamp bank running that takes 8.5 A at 12 V.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 9],
+      ['out', 102],
+    ]);
+  });
+
+  test('a solar cell in a long report is checked as one even if a furnace is named elsewhere', () => {
+    const text = 'A furnace repair delayed the work. The best silicon heterojunction cell reached a certified power-conversion efficiency of 24.6 % under one sun.';
+    expect(runClaimChecks(extractFigures(text), { text }).checks.map((c) => c.check)).toContain('light-converter-limits');
+  });
 });

@@ -351,7 +351,9 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data|figure|value|itself|current))*[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text) ||
       // "The seller gives no figure for what it takes in", "does not say how much it draws".
       INPUT_NOT_GIVEN_RE.test(text);
-    if (m && out && !inputUnknown && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {
+    // (A machine between a hot and a cold side takes heat in from the hot one: "without fuel" is not "without input".)
+    const thermal = drafts.some((d) => d.kind === 'temperature' && d.role === 'hot') && drafts.some((d) => d.kind === 'temperature' && d.role === 'cold');
+    if (m && out && !inputUnknown && !thermal && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {
       const start = m.index;
       const end = m.index + m[0].length;
       const draft: Draft = { start, end, kind: 'power', quantity: '0 W', role: 'in', derived: `no input: "${m[0]}"` };

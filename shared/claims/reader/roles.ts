@@ -52,7 +52,15 @@ const STRONG_FLUID_RE =
   /(?<!\p{L})(hot|warm|heated|cold|cool|chilled|cooled)(?:er)?[^\S\n]+(?:brine|water|air|gas|gases|fluid|steam|oil|exhaust|flue gas|coolant)[^\S\n]+(?:at|of|is|near|around)?[^\S\n]*(?:(?:about|around|roughly|some|nearly|only|just)[^\S\n]+)?$/iu;
 /** A load the device runs, then what it draws: "ran a chest freezer drawing", "powers two lamps using". */
 const LOAD_IT_RUNS_RE =
-  /(?<!\p{L})(?:ran|runs|run|running|powered|powers|powering|drove|drives|driving|kept|keeps|keeping|supplied|supplies|supplying|fed|feeds|feeding)[^\S\n]+(?:a|an|the|its|our|their|two|three|four|several)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}?(?:drawing|using|consuming|taking|pulling|rated at)[^\S\n]+(?:(?:only|just|about|some|roughly|nearly|around|approximately|up to|between|an average of)[^\S\n]+)*$/iu;
+  /(?<!\p{L})(?:ran|runs|run|running|powered|powers|powering|drove|drives|driving|kept|keeps|keeping|supplied|supplies|supplying|fed|feeds|feeding)[^\S\n]+(?:a|an|the|its|our|their|two|three|four|several)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,4}?(?:drawing|using|consuming|taking|pulling|rated at|(?:that|which)[^\S\n]+(?:takes|draws|uses|consumes|needs|pulls))[^\S\n]+(?:(?:only|just|about|some|roughly|nearly|around|approximately|up to|between|an average of)[^\S\n]+)*$/iu;
+/** Just before a figure that says how well something was measured. */
+const PRECISION_LEAD_RE = /(?<!\p{L})(?:to within|within ±?|accurate to|accuracy of|uncertainty of|resolution of|precision of|(?:measurement |calibration )?error of|noise (?:floor )?of|drift of|repeatable to|±)[^\S\n]*(?:(?:about|some|roughly|better than|under|below)[^\S\n]+)?$/iu;
+/** Right after a power: the word "load" ("a steady 600 W load", "600 W (resistive load)"). */
+const LOAD_AFTER_RE = /^[^\S\n]*[(,]?[^\S\n]*(?:(?:continuous|steady|constant|resistive|dummy|test|base)[^\S\n]+)?loads?(?!\p{L})/iu;
+/** Earlier in the sentence: a verb saying the device carried or ran something. */
+const LOAD_CARRIED_RE = /(?<!\p{L})(?:carried|carries|carrying|ran|runs|running|powered|powers|powering|supplied|supplies|supplying|fed|feeds|feeding|kept|keeps|held|holds|backed up|backs up|sustained|sustains)(?!\p{L})[^.;!?\n]*$/iu;
+/** Earlier in the clause: a recharge said to take what follows. */
+const RECHARGE_TOOK_RE = /(?<!\p{L})(?:recharg\w*|charging it (?:again|back)|refill\w*)(?!\p{L})[^.;!?\n]{0,60}(?<!\p{L})(?:took|takes|needed|needs|used|uses|drew|draws|required|requires|cost|costs|consumed|consumes)(?!\p{L})[^.;!?\n]{0,40}$/iu;
 /** Just before a temperature a machine delivers: "to deliver", "supplies", "provides water at". */
 const DELIVERS_LEAD_RE =
   /(?<!\p{L})(?:deliver(?:s|ed|ing)?|suppl(?:y|ies|ied|ying)|provid(?:e|es|ed|ing))[^\S\n]+(?:(?:water|air|heat|hot water|warm air)[^\S\n]+at[^\S\n]+)?(?:(?:about|around|roughly|some|nearly|only|just|up to)[^\S\n]+)?$/iu;
@@ -98,12 +106,19 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   // words after it.
   if (roles.groups === POWER_ENERGY_ROLES) {
     const lead = text.slice(Math.max(floor, start - 40), start);
+    // "the calorimeter constant to within 0.3 W", "a resolution of 5 mW": how well it was measured, not a flow.
+    if (PRECISION_LEAD_RE.test(lead)) return 'aside';
     // "we pull 800 W off it", "you can draw 2 kW out of the generator": what people take from the device is its output.
     if (PEOPLE_TAKE_LEAD_RE.test(lead) && TAKEN_FROM_IT_RE.test(text.slice(end, end + 40))) return 'out';
     // (Not when a supply is the subject: "the bench supply delivers 5 A" is what the device takes.)
     if (!/(?<!\p{L})(?:suppl(?:y|ies)|batter(?:y|ies)|mains|grid|sources?|sockets?|packs?|alternators?|chargers?|PSUs?|adapters?)[^\S\n]+\p{L}+[^\S\n]+[^.;!?\n]{0,12}$/iu.test(lead)) {
       // "the battery ran a chest freezer drawing 300 W": what a load the device runs draws is its output.
       if (LOAD_IT_RUNS_RE.test(text.slice(Math.max(floor, start - 70), start))) return 'out';
+      // "then carried the telemetry cabinet, a steady 600 W load, for 7 hours": the load a store or a
+      // supply carried, named as such right after the figure.
+      if (LOAD_AFTER_RE.test(text.slice(end, end + 30)) && LOAD_CARRIED_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'out';
+      // "Recharging from the mains afterwards took 5 hours 40 minutes and 5.6 kWh": what a recharge took is the input.
+      if (RECHARGE_TOOK_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'in';
       if (IMMEDIATE_IN_RE.test(lead)) return 'in';
       if (IMMEDIATE_OUT_RE.test(lead)) return 'out';
     }

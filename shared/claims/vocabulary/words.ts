@@ -113,7 +113,7 @@ export const SELF_RUNNING_WORDS = [
 ];
 /** Where "self-powered" is lawful: the device harvests an outside flow of energy. */
 export const HARVEST_WORDS = [
-  'harvest\\w*', 'solar', 'photovoltaic', 'sunlight', 'light', 'vibrations?', 'body heat', 'thermal gradient', 'temperature difference', 'wind', 'tides?',
+  'harvest\\w*', 'thermoelectric', 'Seebeck', 'TEGs?', 'solar', 'photovoltaic', 'sunlight', 'light', 'vibrations?', 'body heat', 'thermal gradient', 'temperature difference', 'wind', 'tides?',
   'waves?', 'radio waves', 'RF energy', 'ambient (?:light|RF|vibration)', 'piezo\\w*', 'triboelectric',
   'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell',
   // A vehicle or set that burns fuel (a "self-charging" hybrid charges from its engine).
