@@ -244,6 +244,14 @@ describe('signals for the matcher', () => {
     expect(readSignals({ text: 'without expelling any propellant' })).toMatchObject({ propellantFree: true, propellant: false });
   });
 
+  it('a heat store charged with metered heat is held to the first law, an outdoor temperature elsewhere notwithstanding', () => {
+    // 41 000 BTU × 1055.05585262 J/BTU = 43.26 MJ in (NIST SP 811 B.8); 450 W × 20 h = 32.4 MJ out; 0.749.
+    const text = 'The store was charged from the roof collectors with 41,000 BTU of heat. Over the following 20-hour stretch it gave back a steady 450 W of heat to the room. The outdoor temperature fell to −3 °C overnight.';
+    const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+    expect(run?.finding).toBe('consistent');
+    expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(32.4e6 / (41000 * 1055.05585262), 6);
+  });
+
   it('a lifter said to lift as much in a pumped-down bell jar as in air is held to the photon bound', () => {
     // 30 kV × 1.1 mA = 33 W; 3.5 gf = 3.5 × 9.80665e-3 N = 0.0343 N; P/c = 1.1e-7 N.
     const text = 'A 9 g foil lifter inside a bell jar pumped down to a high vacuum, at 30 kV and 1.1 mA, gives a steady lift of 3.5 grams-force, the same as in air, from a field effect that needs no propellant.';
@@ -265,6 +273,8 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([
     'The heat pump uses 1 kW of electricity to deliver 4 kW of heat.',
+    // An unnamed heat pump drawing heat from the outdoor air: its work in is not stated.
+    'The unit collects 3 kW of heat from the outdoor air and delivers 4 kW of heat to the house.',
     // A lifter that lifts in air and stops in vacuum pushes on air.
     'Our ion-wind lifter raised 3 grams-force on 33 W in room air; in a bell jar pumped down to a high vacuum it produced no lift at all.',
     // A cell that gives back what it draws has no excess for a nuclear question.

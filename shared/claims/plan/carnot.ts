@@ -6,6 +6,7 @@
  */
 import type { Figure } from '../types';
 import { at, heatMoverCop, need, ofKind, uniq, type Basis } from './basis';
+import { sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE } from './signals';
 
 const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|brine|well water|borehole|source temperature|outdoors?)(?!\p{L})/iu;
@@ -33,7 +34,19 @@ export function planCarnot(b: Basis): HeatReading {
   // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
   const cooling = s.coolingWords && (s.cooling || COMPRESSOR_RE.test(text) || ofKind(figures, 'cop').length > 0 || temps.length >= 2);
   // Heat delivered by a machine that names an outdoor, ground or brine source: a heat pump.
-  const heatFromSource = HEAT_SOURCE_RE.test(text) && !/(?<!\p{L})no[^\S\n]+(?:heat[- ]pump|outdoor (?:coil|unit))/iu.test(text) && [...power, ...energy].some(
+  // (Not where what goes in is itself heat: "charged with 41,000 BTU of heat … gave back 450 W of heat" is
+  // a store, whose heat out cannot pass its heat in.)
+  // (Heat drawn from the outdoor air, the ground or a well, in its own sentence, is a heat pump's source.)
+  const inIsHeat = [...power, ...energy].some(
+    (f) =>
+      f.role === 'in' &&
+      f.start !== null &&
+      f.end !== null &&
+      /^[^\S\n]*(?:of[^\S\n]+)?(?:heat|thermal energy|solar heat)(?!\p{L})/iu.test(text.slice(f.end, f.end + 25)) &&
+      !HEAT_SOURCE_RE.test(sentenceAround(text, f.start, f.end)) &&
+      !/(?<!\p{L})(?:air|ground|earth|water|river|lake|sea|soil)(?!\p{L})/iu.test(text.slice(f.end, f.end + 60)),
+  );
+  const heatFromSource = !inIsHeat && HEAT_SOURCE_RE.test(text) && !/(?<!\p{L})no[^\S\n]+(?:heat[- ]pump|outdoor (?:coil|unit))/iu.test(text) && [...power, ...energy].some(
       (f) =>
         f.role === 'out' &&
         (/^[^.;,]{0,30}?(?:heat|heating)/i.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)) || /(?:heat|heating)(?:[^\S\n]+(?:output|delivered|capacity))?[^.;,]{0,12}$/i.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0))),
