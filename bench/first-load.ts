@@ -7,8 +7,10 @@
  * wide (1366 × 900), on localhost and over a throttled "slow mobile" link.
  *
  * Per page: the JavaScript transferred (compressed, as sent) and decoded, the number of scripts,
- * first contentful paint (the 'paint' entry), and the time the page's first content is in the
- * document (the entry's first section, `entry-section-inBrief`; the Library's list, `entry-list`).
+ * first contentful paint (the 'paint' entry), and the time the page's first content is on screen: as the
+ * server put it in the HTML (#cw-shell: the entry's `#section-inBrief`, the Library's `.cw-entries`;
+ * the later of its arrival in the viewport and the first paint) and as the app renders it (the entry's
+ * first section, `entry-section-inBrief`; the Library's list, `entry-list`).
  * Times are from the start of navigation, medians of RUNS loads on localhost.
  *
  * CW_BENCH_DIST=<dir> measures another build as it is (no build, no staleness check): to compare
@@ -57,6 +59,8 @@ interface Load {
   scriptsBeforeContent: number;
   fcp: number | null;
   content: number | null;
+  /** The same content as the server put it in the page (#cw-shell), painted: the later of its arrival on screen and the first paint. */
+  shellContent: number | null;
   encodings: string[];
 }
 
@@ -64,8 +68,8 @@ interface Load {
  * Records, from the start of navigation, the first contentful paint and the moment an element with
  * the given testID is in the document (a MutationObserver: no polling delay).
  */
-const WATCH = (testId: string) => `
-  window.__cw = { fcp: null, content: null };
+const WATCH = (testId: string, shellSelector: string) => `
+  window.__cw = { fcp: null, content: null, shell: null };
   new PerformanceObserver((list) => {
     for (const e of list.getEntries()) if (e.name === 'first-contentful-paint') window.__cw.fcp = e.startTime;
   }).observe({ type: 'paint', buffered: true });
@@ -73,9 +77,21 @@ const WATCH = (testId: string) => `
     if (window.__cw.content === null && document.querySelector('[data-testid="${testId}"]')) window.__cw.content = performance.now();
   };
   new MutationObserver(seen).observe(document, { childList: true, subtree: true });
+  // The same content in the server-rendered shell (#cw-shell): when it is in the document, laid out and on
+  // screen (its top inside the viewport, not hidden); it is painted at the first paint after that.
+  const shellSeen = () => {
+    if (window.__cw.shell !== null) return;
+    const el = document.querySelector('#cw-shell ${shellSelector}');
+    if (!el) return;
+    const r = el.getBoundingClientRect();
+    if (r.height === 0 || r.top >= innerHeight || getComputedStyle(el).visibility === 'hidden') return;
+    window.__cw.shell = performance.now();
+  };
+  new MutationObserver(shellSeen).observe(document, { childList: true, subtree: true });
+  document.addEventListener('DOMContentLoaded', shellSeen);
 `;
 
-async function loadOnce(browser: Browser, url: string, testId: string, size: { width: number; height: number }, slow: boolean): Promise<Load> {
+async function loadOnce(browser: Browser, url: string, testId: string, shellSelector: string, size: { width: number; height: number }, slow: boolean): Promise<Load> {
   const context = await browser.newContext({ viewport: { width: size.width, height: size.height }, deviceScaleFactor: 1 });
   try {
     const page: Page = await context.newPage();
@@ -111,7 +127,7 @@ async function loadOnce(browser: Browser, url: string, testId: string, size: { w
     };
     cdp.on('Network.loadingFinished', done);
     cdp.on('Network.loadingFailed', done);
-    await page.addInitScript(WATCH(testId));
+    await page.addInitScript(WATCH(testId, shellSelector));
     await page.goto(url, { waitUntil: 'load', timeout: 120_000 });
     await page.locator(`[data-testid="${testId}"]`).first().waitFor({ timeout: 120_000 });
     // Let what the page fetches after its first content (the deferred chunk, fonts) arrive: nothing in
@@ -122,11 +138,12 @@ async function loadOnce(browser: Browser, url: string, testId: string, size: { w
       await new Promise((r) => setTimeout(r, 50));
     }
     const r = await page.evaluate(() => {
-      const w = window as unknown as { __cw: { fcp: number | null; content: number | null } };
+      const w = window as unknown as { __cw: { fcp: number | null; content: number | null; shell: number | null } };
       const scripts = (performance.getEntriesByType('resource') as PerformanceResourceTiming[]).filter((e) => /\.js(\?|$)/.test(e.name));
       return {
         fcp: w.__cw.fcp,
         content: w.__cw.content,
+        shell: w.__cw.shell,
         scripts: scripts.map((e) => ({ name: e.name, sent: e.encodedBodySize, decoded: e.decodedBodySize, end: e.responseEnd })),
       };
     });
@@ -140,6 +157,7 @@ async function loadOnce(browser: Browser, url: string, testId: string, size: { w
       scriptsBeforeContent: before.length,
       fcp: r.fcp,
       content: r.content,
+      shellContent: r.shell !== null && r.fcp !== null ? Math.max(r.shell, r.fcp) : null,
       encodings: [...encodings],
     };
   } finally {
@@ -157,6 +175,7 @@ function summarise(loads: Load[]): Load {
     ...loads[0],
     fcp: median(loads.map((l) => l.fcp)),
     content: median(loads.map((l) => l.content)),
+    shellContent: median(loads.map((l) => l.shellContent)),
   };
 }
 
@@ -209,22 +228,22 @@ export async function benchFirstLoad(): Promise<void> {
     say(`times from the start of navigation; localhost: median of ${RUNS} loads; slow mobile: one load at ${SLOW.downloadKbps / 1000} Mbps down, ${SLOW.uploadKbps} kbps up, ${SLOW.rttMs} ms RTT (common practice, no source)`);
 
     const pages = [
-      { name: '/', url: `${base}/`, testId: 'entry-list', contentName: 'list' },
-      { name: `/entries/${ENTRY_SLUG}`, url: `${base}/entries/${ENTRY_SLUG}`, testId: 'entry-section-inBrief', contentName: 'first section' },
+      { name: '/', url: `${base}/`, testId: 'entry-list', shell: '.cw-entries', contentName: 'list' },
+      { name: `/entries/${ENTRY_SLUG}`, url: `${base}/entries/${ENTRY_SLUG}`, testId: 'entry-section-inBrief', shell: '#section-inBrief', contentName: 'first section' },
     ];
     const results = new Map<string, Load>();
     for (const p of pages) {
       for (const size of SIZES) {
         for (const slow of [false, true]) {
           const loads: Load[] = [];
-          for (let i = 0; i < (slow ? 1 : RUNS); i++) loads.push(await loadOnce(browser, p.url, p.testId, size, slow));
+          for (let i = 0; i < (slow ? 1 : RUNS); i++) loads.push(await loadOnce(browser, p.url, p.testId, p.shell, size, slow));
           const s = summarise(loads);
           results.set(`${p.name}|${size.name}|${slow ? 'slow' : 'local'}`, s);
           say(
             `${p.name.padEnd(28)} ${size.name.padEnd(5)} ${(slow ? 'slow mobile' : 'localhost').padEnd(11)}: ` +
               `JS ${kb(s.jsSent)} sent (${s.encodings.join('/') || 'none'}), ${kb(s.jsDecoded)} decoded, ${s.scripts} script${s.scripts === 1 ? '' : 's'} ` +
               `(${kb(s.jsSentBeforeContent)} in ${s.scriptsBeforeContent} before the ${p.contentName}); ` +
-              `first contentful paint ${msText(s.fcp)}, ${p.contentName} ${msText(s.content)}`,
+              `first contentful paint ${msText(s.fcp)}, ${p.contentName} from the HTML ${msText(s.shellContent)}, from the app ${msText(s.content)}`,
           );
         }
       }
@@ -237,7 +256,12 @@ export async function benchFirstLoad(): Promise<void> {
     say('aims:');
     say(`  JavaScript of a cold load of / ≤ ${AIM_JS_KB} KB compressed: ${kb(library.jsSent)} — ${verdict(library.jsSent <= AIM_JS_KB * 1024)}`);
     say(`  first contentful paint ≤ ${AIM_FCP_MS} ms cold on localhost at phone size: / ${msText(library.fcp)}, entry ${msText(entry.fcp)} — ${verdict(library.fcp !== null && entry.fcp !== null && Math.max(library.fcp, entry.fcp) <= AIM_FCP_MS)}`);
-    say(`  the entry's first section ≤ ${AIM_SECTION_MS} ms cold on localhost at phone size: ${msText(entry.content)} — ${verdict(entry.content !== null && entry.content <= AIM_SECTION_MS)}`);
+    // The reader sees the section from whichever comes first: the server's copy in the HTML or the app's.
+    const seen = [entry.shellContent, entry.content].filter((x): x is number => x !== null);
+    const first = seen.length ? Math.min(...seen) : null;
+    say(
+      `  the entry's first section ≤ ${AIM_SECTION_MS} ms cold on localhost at phone size: ${msText(first)} (from the HTML ${msText(entry.shellContent)}, the app's own ${msText(entry.content)}) — ${verdict(first !== null && first <= AIM_SECTION_MS)}`,
+    );
   } finally {
     await browser?.close().catch(() => {});
     if (server) {
