@@ -50,7 +50,7 @@ export const TEMPERATURE_CONTEXT_RE = /(?<!\p{L})(?:temperatures?|heat(?:ed|s|in
 /** "Isp 320 s", "Isp (vac): 320 s", "specific impulse (sea level) of 280 s". */
 export const ISP_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})(?:[^\\S\\n]*\\([^()\\n\\d]{1,20}\\))?${CONNECT}$`, 'iu');
 export const ISP_AFTER_RE = new RegExp(
-  `[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})|(?:-|[^\\S\\n]+)(?:[\\p{L}–-]+[^\\S\\n]+){0,2}?(?:engines?|thrusters?|rocket motors?|motors?)(?!\\p{L})`,
+  `[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})|(?:-|[^\\S\\n]+)(?:(?!(?:into|to|for|of|in|over|at|on|the|a|an|from|by|with|after|before|until|while|and|or)(?![\\p{L}–-]))[\\p{L}–-]+[^\\S\\n]+){0,2}?(?:engines?|thrusters?|rocket motors?|motors?)(?!\\p{L})`,
   'iuy',
 );
 /** Gains: "1.3 units back for every unit", "three times the energy it takes", "output is 3 times the input". */

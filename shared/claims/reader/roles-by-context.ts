@@ -47,6 +47,10 @@ const DRAW_LEAD_RE = /(?<!\p{L})(?:draws?|drawing|consumption|consumes|consuming
 const OTHER_SOURCE_RE =
   /(?<!\p{L})(?:solar|sun|panels?|photovoltaic|PV|charg\w*|recharg\w*|generat\w*|harvest\w*|mains|grid|wind|turbines?|dynamos?|alternators?|cranks?|fuel|engines?|topped up|top up|plugged|self-\w+|free energy|over-?unity)(?!\p{L})/iu;
 
+/** A source said to be absent ("with no sun at all", "without recharging"): no other source. */
+const NEGATED_SOURCE_RE =
+  /(?<!\p{L})(?:no|without|never any|not any)[^\S\n]+(?:(?:any|direct|further|other|more)[^\S\n]+)?(?:sun(?:light|shine)?|solar|charg\w*|recharg\w*|mains|grid|fuel|panels?)(?!\p{L})/giu;
+
 /** Roles the words leave open, read from the other figures (see the file's comment). */
 export function rolesByContext(text: string, drafts: Draft[]): void {
   // "covers 4.2 light years in 30 days": a speed, distance over time (IAU 2012 B2 astronomical unit,
@@ -124,9 +128,16 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   // load over a run. What the store holds is the input and what the load draws from it the output, so
   // the ledger asks whether the draw over the run fits in the store. Only with one store, one draw, a
   // run and nothing else of energy; never where the store is being charged or something else feeds the load.
-  const stores = drafts.filter((d) => d.kind === 'energy' && (d.role === null || d.role === 'in') && !d.derived && STORE_NOUN_RE.test(sentenceAround(text, d.start, d.end)));
+  const stores = drafts.filter(
+    (d) =>
+      d.kind === 'energy' &&
+      !d.derived &&
+      STORE_NOUN_RE.test(sentenceAround(text, d.start, d.end)) &&
+      // ("the cell stores 3 Wh": what a store holds, whatever side its verb gave it.)
+      (d.role === null || d.role === 'in' || STORE_HOLDS_RE.test(text.slice(Math.max(0, d.start - 40), d.start))),
+  );
   const draws = drafts.filter((d) => d.kind === 'power' && d.role === 'in' && !d.derived && DRAW_LEAD_RE.test(text.slice(Math.max(0, d.start - 30), d.start)));
-  if (stores.length === 1 && draws.length === 1 && drafts.filter(energyLike).length === 2 && drafts.some((d) => d.kind === 'duration') && !OTHER_SOURCE_RE.test(text)) {
+  if (stores.length === 1 && draws.length === 1 && drafts.filter(energyLike).length === 2 && drafts.some((d) => d.kind === 'duration') && !OTHER_SOURCE_RE.test(text.replace(NEGATED_SOURCE_RE, ' '))) {
     stores[0].role = 'in';
     draws[0].role = 'out';
   }

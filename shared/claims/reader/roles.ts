@@ -53,6 +53,9 @@ const STRONG_FLUID_RE =
 /** A load the device runs, then what it draws: "ran a chest freezer drawing", "powers two lamps using". */
 const LOAD_IT_RUNS_RE =
   /(?<!\p{L})(?:ran|runs|run|running|powered|powers|powering|drove|drives|driving|kept|keeps|keeping|supplied|supplies|supplying|fed|feeds|feeding)[^\S\n]+(?:a|an|the|its|our|their|two|three|four|several)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,4}?(?:drawing|using|consuming|taking|pulling|rated at|(?:that|which)[^\S\n]+(?:takes|draws|uses|consumes|needs|pulls))[^\S\n]+(?:(?:only|just|about|some|roughly|nearly|around|approximately|up to|between|an average of)[^\S\n]+)*$/iu;
+/** People (not a machine) charging a store, right before what they put in. */
+const PEOPLE_CHARGED_RE =
+  /(?<!\p{L})(?:we|I|they|you|he|she|the team|the authors|researchers|one)[^\S\n]+(?:(?:then|first|had|have|fully)[^\S\n]+)?(?:charged|charge|filled|fill|loaded|load|topped up|pumped)[^\S\n]+(?:the|a|an|its|our|their|my)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:cells?|batter(?:y|ies)|packs?|capacitors?|supercapacitors?|supercaps?|accumulators?|flywheels?|store|bank|tank)[^\S\n]+(?:with|to|at|using)[^\S\n]+(?:(?:about|some|roughly|only|just|exactly)[^\S\n]+)?$/iu;
 /** Just before a figure that says how well something was measured. */
 const PRECISION_LEAD_RE = /(?<!\p{L})(?:to within|within ±?|accurate to|accuracy of|uncertainty of|resolution of|precision of|(?:measurement |calibration )?error of|noise (?:floor )?of|drift of|repeatable to|±)[^\S\n]*(?:(?:about|some|roughly|better than|under|below)[^\S\n]+)?$/iu;
 /** Right after a power: the word "load" ("a steady 600 W load", "600 W (resistive load)"). */
@@ -108,6 +111,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     const lead = text.slice(Math.max(floor, start - 40), start);
     // "the calorimeter constant to within 0.3 W", "a resolution of 5 mW": how well it was measured, not a flow.
     if (PRECISION_LEAD_RE.test(lead)) return 'aside';
+    // "We charged the supercapacitor with 500 J": what people put into a store is its input.
+    if (PEOPLE_CHARGED_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'in';
     // "we pull 800 W off it", "you can draw 2 kW out of the generator": what people take from the device is its output.
     if (PEOPLE_TAKE_LEAD_RE.test(lead) && TAKEN_FROM_IT_RE.test(text.slice(end, end + 40))) return 'out';
     // (Not when a supply is the subject: "the bench supply delivers 5 A" is what the device takes.)

@@ -66,4 +66,22 @@ describe('claims pasted from sheets and lists', () => {
     ]);
     expect(read('Ground source unit, COP 5.1 at B0/W35 and 3.4 at B0/W55.').filter((x) => x.kind === 'temperature')).toEqual([]);
   });
+  test('a store that "stores" its energy and a load over a run with "no sun at all"; people charging a store; seconds into a motor', () => {
+    // 3 Wh = 10 800 J in; 0.1 W × 2 weeks = 0.1 × 1 209 600 s = 120 960 J out: more out than the store holds.
+    const lamp = 'The garden lamp\'s cell stores three watt-hours, and the LED draws a tenth of a watt. And it runs two weeks with no sun at all.';
+    expect(brief(lamp).filter(([k]) => k === 'energy' || k === 'power')).toEqual([
+      ['energy', 'in', 10800],
+      ['power', 'out', 0.1],
+      ['energy', 'out', 120960],
+    ]);
+    expect(runClaimChecks(extractFigures(lamp), { text: lamp }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+    // 480 J out of 500 J in: 0.96.
+    const cap = 'We charged the supercapacitor with five hundred joules, and it gave back 480 J over ten seconds into the motor.';
+    expect(brief(cap)).toEqual([
+      ['energy', 'in', 500],
+      ['energy', 'out', 480],
+      ['duration', null, 10],
+    ]);
+    expect(read('The probe has a 3,000 s ion engine.').map((x) => x.kind)).toEqual(['specific-impulse']);
+  });
 });
