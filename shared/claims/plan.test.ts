@@ -275,6 +275,10 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'The heat pump uses 1 kW of electricity to deliver 4 kW of heat.',
     // An unnamed heat pump drawing heat from the outdoor air: its work in is not stated.
     'The unit collects 3 kW of heat from the outdoor air and delivers 4 kW of heat to the house.',
+    // A lifter tested in a vacuum chamber that stopped there pushes on air.
+    'We tested the ion-wind lifter in a vacuum chamber: 3 grams of lift on 30 W, and it stopped at once when the air was gone.',
+    // A photon thruster is a photon rocket: 40 µN from 30 kW of light is under P/c = 100 µN.
+    "It's a photon thruster: a fibre laser firing out the back, about 30 kW of light. We'll get up to forty micronewtons; light is a terrible rocket.",
     // A lifter that lifts in air and stops in vacuum pushes on air.
     'Our ion-wind lifter raised 3 grams-force on 33 W in room air; in a bell jar pumped down to a high vacuum it produced no lift at all.',
     // A cell that gives back what it draws has no excess for a nuclear question.

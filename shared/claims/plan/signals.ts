@@ -47,11 +47,15 @@ export interface Signals {
 const VACUUM_CLAIM_RE =
   /(?<!\p{L})(?:no air (?:is )?(?:needed|required)|(?<!(?:not|n't|n’t|never|cannot|nor)[^\S\n]+)(?:works?|working|operates?|operating|functions?|functioning)(?:[^\S\n]+(?!not|never)[\p{L}-]+){0,3}?[^\S\n]+(?:in|under)[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+|deep[^\S\n]+|full[^\S\n]+)?vacuum)(?!\p{L})/iu;
 /** "inside a bell jar pumped down to a high vacuum": the device was run in vacuum (said of a lift or thrust measured there). */
-const RUN_IN_VACUUM_RE = /(?<!\p{L})(?:pumped(?:[^\S\n]+down)?|evacuated|held|kept)[^\S\n]+to[^\S\n]+(?:a[^\S\n]+)?(?:high|hard|deep|full)[^\S\n]+vacuum(?!\p{L})/iu;
+const RUN_IN_VACUUM_RE =
+  /(?<!\p{L})(?:(?:pumped(?:[^\S\n]+down)?|evacuated|held|kept)[^\S\n]+to[^\S\n]+(?:a[^\S\n]+)?(?:high|hard|deep|full)[^\S\n]+vacuum|(?:ran|run|tested|operated|measured)[^\S\n]+(?:it[^\S\n]+|them[^\S\n]+)?(?:in|inside)[^\S\n]+(?:a[^\S\n]+|the[^\S\n]+)?(?:hard[^\S\n]+|high[^\S\n]+)?vacuum(?:[^\S\n]+chamber)?)(?!\p{L})/iu;
 /** A result that says nothing was left in vacuum ("no lift", "the thrust vanished"): then vacuum is not claimed. */
 const NOTHING_IN_VACUUM_RE = /(?<!\p{L})(?:no (?:measurable )?(?:lift|thrust|force)|nothing|vanish\w*|disappear\w*|ceased|stopped|fell to zero|dropped to zero|did not (?:lift|rise|move))(?!\p{L})/iu;
 const vacuumClaimed = (text: string): boolean => VACUUM_CLAIM_RE.test(text) || (RUN_IN_VACUUM_RE.test(text) && !NOTHING_IN_VACUUM_RE.test(text));
 
+/** A thruster whose exhaust is light: there "rocket" ("light is a terrible rocket") names no propellant. */
+const PHOTON_ROCKET_RE = /(?<!\p{L})(?:photon[- ](?:thrusters?|rockets?|drives?|propulsion)|laser[- ](?:thrusters?|propulsion)|light (?:is|as) (?:its|the|a)[^.;!?\n]{0,20}(?:exhaust|rocket))(?!\p{L})/iu;
+const BARE_ROCKET_RE = /(?<!\p{L})rockets?(?!\p{L})/giu;
 /** Devices that push on air (and so cannot work in vacuum). */
 const AIR_PUSHER_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?|electrohydrodynamic|EHD|ionocraft|[\p{L}-]*lifters?)(?!\p{L})/giu;
 
@@ -66,7 +70,9 @@ export function readSignals(ctx: PlanContext): Signals {
     propellantFree: PROPELLANT_FREE_RE.test(text) || (top !== undefined && PROPELLANT_FREE_CLASSES.includes(top)),
     // An air-pusher (a lifter, an ion-wind craft) said to work in vacuum has no air to push: its words no
     // longer count as propellant.
-    propellant: PROPELLANT_RE.test(vacuumClaimed(text) ? withoutFree.replace(AIR_PUSHER_RE, ' ') : withoutFree),
+    propellant: PROPELLANT_RE.test(
+      (vacuumClaimed(text) ? withoutFree.replace(AIR_PUSHER_RE, ' ') : withoutFree).replace(PHOTON_ROCKET_RE.test(text) ? BARE_ROCKET_RE : /$^/u, ' '),
+    ),
     heatEngine: HEAT_ENGINE_RE.test(text),
     heatPump: HEAT_PUMP_RE.test(notDenied),
     cooling: COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied),
