@@ -244,6 +244,19 @@ describe('signals for the matcher', () => {
     expect(readSignals({ text: 'without expelling any propellant' })).toMatchObject({ propellantFree: true, propellant: false });
   });
 
+  it('long reports: neither propellant nor radiation leaving, "without the emission of any propellant", a restated rating, a fuel\'s energy content "put at"', () => {
+    const checks = (text: string) => runClaimChecks(extractFigures(text), { text });
+    // 2 mN ≫ P/c = 900 / 299 792 458 = 3.0 µN.
+    expect(checks('A steady thrust of between 2 and 5 mN with 900 W of microwave power; nothing, neither propellant nor radiation, leaves the cavity.').checks.map((c) => [c.check, c.finding])).toContainEqual(['photon-bound', 'breaks']);
+    expect(checks('A sealed thruster producing a continuous thrust of 2 mN without the emission of any propellant.').needs.map((n) => n.check)).toContain('photon-bound');
+    // 20 Wh = 72 kJ < 5 W × 30 days = 12.96 MJ; "its rated 5 W" restates the radio's draw.
+    const pack = 'A 20 Wh lithium pack has powered a 5 W radio continuously for 30 days without recharging. The radio may have drawn far less than its rated 5 W.';
+    expect(checks(pack).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+    // 52 kWh of fuel in, 2.5 kW × 6 h = 54 MJ out: 0.288.
+    const genset = 'The 2.5 kW generator ran a stall through a 6-hour event. The fuel, whose energy content the expert put at 52 kWh, gave a steady 2.5 kW output.';
+    expect(checks(genset).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(54e6 / 187.2e6, 6);
+  });
+
   it('a heat store charged with metered heat is held to the first law, an outdoor temperature elsewhere notwithstanding', () => {
     // 41 000 BTU × 1055.05585262 J/BTU = 43.26 MJ in (NIST SP 811 B.8); 450 W × 20 h = 32.4 MJ out; 0.749.
     const text = 'The store was charged from the roof collectors with 41,000 BTU of heat. Over the following 20-hour stretch it gave back a steady 450 W of heat to the room. The outdoor temperature fell to −3 °C overnight.';
@@ -275,6 +288,10 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'The heat pump uses 1 kW of electricity to deliver 4 kW of heat.',
     // An unnamed heat pump drawing heat from the outdoor air: its work in is not stated.
     'The unit collects 3 kW of heat from the outdoor air and delivers 4 kW of heat to the house.',
+    // One temperature said twice is no pair of sides ("gas entering at 500 °C … 62 % from a 500 °C source").
+    'The prototype reaches 62 % thermal efficiency with gas entering at 500 °C. For engines rejecting heat near room temperature, 62 % from a 500 °C source would be close to the limit.',
+    // A drone maker as a hoped-for buyer says nothing of the device; as a claimant, of a drone.
+    'A drone maker advertises 12 g of thrust per watt for its quadcopter.',
     // A lifter tested in a vacuum chamber that stopped there pushes on air.
     'We tested the ion-wind lifter in a vacuum chamber: 3 grams of lift on 30 W, and it stopped at once when the air was gone.',
     // A photon thruster is a photon rocket: 40 µN from 30 kW of light is under P/c = 100 µN.

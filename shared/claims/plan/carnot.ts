@@ -13,6 +13,15 @@ const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop
 const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
+/** An engine said to run on one reservoir, or a difference of nothing ("ΔT = 0 K"): equal sides are the claim. */
+const oneReservoirSaid = (text: string, figures: Figure[]): boolean => SINGLE_RESERVOIR_RE.test(text) || ofKind(figures, 'temperature-difference').some((f) => f.si === 0);
+/** Whether the temperatures give two sides apart: the hot and cold chosen as the Carnot check chooses them, the cold one colder. */
+function sidesApart(temps: Figure[]): boolean {
+  const hot = temps.find((t) => t.role === 'hot') ?? [...temps].sort((a, b) => b.si - a.si)[0];
+  const cold = temps.find((t) => t.role === 'cold' && t !== hot) ?? [...temps].filter((t) => t !== hot).sort((a, b) => a.si - b.si)[0];
+  return !!hot && !!cold && cold.si < (hot.upper?.si ?? hot.si);
+}
+
 /** An engine said to work on one reservoir: nothing colder to reject heat to. */
 const SINGLE_RESERVOIR_RE = /(?<!\p{L})(?:no (?:cold|colder|cooler) (?:sink|side|reservoir|body|end)|(?:single|one|a single) (?:heat )?reservoir|(?:air|heat|water|sea|ocean|atmosphere|room air|ambient air|ambient heat) alone|nothing colder|without (?:a |any )?(?:cold|colder|cooler) (?:sink|side|reservoir|body))(?!\p{L})/iu;
 
@@ -75,6 +84,17 @@ export function planCarnot(b: Basis): HeatReading {
       why: 'The text gives an engine working on one reservoir, with nothing colder to reject heat to.',
       assumptions: [`Both sides at ${only.display}: the text names no colder body.`],
     });
+  } else if ((engineEfficiency || copForCarnot) && temps.length >= 2 && !sidesApart(temps) && !oneReservoirSaid(text, figures)) {
+    // One temperature said twice ("gas entering at 500 °C … 62 % from a 500 °C source"), or a "cold"
+    // side no colder than the hot one: the other side is not given.
+    needs.push(
+      need(
+        'carnot',
+        ['the temperature of the other side (the text gives the same temperature for both, or a cold side that is not colder)'],
+        cop ? 'A heat pump or refrigerator is bounded by the Carnot COP of the temperatures it works between.' : 'A heat engine is bounded by the Carnot efficiency of the temperatures it works between.',
+        uniq([efficiency, cop, ...temps]),
+      ),
+    );
   } else if ((engineEfficiency || copForCarnot) && temps.length >= 2) {
     const hot = temps.find((t) => t.role === 'hot') ?? [...temps].sort((a, b) => b.si - a.si)[0];
     const cold = temps.find((t) => t.role === 'cold' && t !== hot) ?? [...temps].filter((t) => t !== hot).sort((a, b) => a.si - b.si)[0];

@@ -45,7 +45,7 @@ export interface Signals {
 
 /** "works just as well in hard vacuum", "no air needed": a claim that the device needs no air. */
 const VACUUM_CLAIM_RE =
-  /(?<!\p{L})(?:no air (?:is )?(?:needed|required)|(?<!(?:not|n't|n’t|never|cannot|nor)[^\S\n]+)(?:works?|working|operates?|operating|functions?|functioning)(?:[^\S\n]+(?!not|never)[\p{L}-]+){0,3}?[^\S\n]+(?:in|under)[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+|deep[^\S\n]+|full[^\S\n]+)?vacuum)(?!\p{L})/iu;
+  /(?<!\p{L})(?:no air (?:is )?(?:needed|required)|(?:thrust|lift|force|push|effect)(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]+(?:persists?|remains?|continues?|stays?)?[^\S\n]*(?:in|under)[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+|full[^\S\n]+)?vacuum(?![^\S\n]+chambers?)|persists?[^\S\n]+in[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+)?vacuum|(?<!(?:not|n't|n’t|never|cannot|nor)[^\S\n]+)(?:works?|working|operates?|operating|functions?|functioning)(?:[^\S\n]+(?!not|never)[\p{L}-]+){0,3}?[^\S\n]+(?:in|under)[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+|deep[^\S\n]+|full[^\S\n]+)?vacuum)(?!\p{L})/iu;
 /** "inside a bell jar pumped down to a high vacuum": the device was run in vacuum (said of a lift or thrust measured there). */
 const RUN_IN_VACUUM_RE =
   /(?<!\p{L})(?:(?:pumped(?:[^\S\n]+down)?|evacuated|held|kept)[^\S\n]+to[^\S\n]+(?:a[^\S\n]+)?(?:high|hard|deep|full)[^\S\n]+vacuum|(?:ran|run|tested|operated|measured)[^\S\n]+(?:it[^\S\n]+|them[^\S\n]+)?(?:in|inside)[^\S\n]+(?:a[^\S\n]+|the[^\S\n]+)?(?:hard[^\S\n]+|high[^\S\n]+)?vacuum(?:[^\S\n]+chamber)?)(?!\p{L})/iu;
@@ -56,6 +56,9 @@ const vacuumClaimed = (text: string): boolean => VACUUM_CLAIM_RE.test(text) || (
 /** A thruster whose exhaust is light: there "rocket" ("light is a terrible rocket") names no propellant. */
 const PHOTON_ROCKET_RE = /(?<!\p{L})(?:photon[- ](?:thrusters?|rockets?|drives?|propulsion)|laser[- ](?:thrusters?|propulsion)|light (?:is|as) (?:its|the|a)[^.;!?\n]{0,20}(?:exhaust|rocket))(?!\p{L})/iu;
 const BARE_ROCKET_RE = /(?<!\p{L})rockets?(?!\p{L})/giu;
+/** Propellant said not to leave: "nothing, neither propellant nor radiation, leaves", "emits neither propellant nor light". */
+const NEGATED_PROPELLANT_RE = /(?<!\p{L})(?:neither|nor)[^\S\n]+(?:any[^\S\n]+)?(?:propellant|reaction mass|exhaust|gas|matter)(?!\p{L})/iu;
+const NEGATED_PROPELLANT_ALL_RE = new RegExp(NEGATED_PROPELLANT_RE.source, 'giu');
 /** Devices that push on air (and so cannot work in vacuum). */
 const AIR_PUSHER_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?|electrohydrodynamic|EHD|ionocraft|[\p{L}-]*lifters?)(?!\p{L})/giu;
 
@@ -63,11 +66,11 @@ export function readSignals(ctx: PlanContext): Signals {
   const text = ctx.text ?? '';
   const classes = ctx.classes ?? [];
   const top = classes[0];
-  const withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ');
+  const withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ').replace(NEGATED_PROPELLANT_ALL_RE, ' ');
   // "no heat pump, no outdoor coil": a machine said not to be one.
   const notDenied = text.replace(/(?<!\p{L})(?:no|not an?|without an?|isn't an?|is not an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|refrigerators?|chillers?|compressors?)(?!\p{L})/giu, ' ');
   return {
-    propellantFree: PROPELLANT_FREE_RE.test(text) || (top !== undefined && PROPELLANT_FREE_CLASSES.includes(top)),
+    propellantFree: PROPELLANT_FREE_RE.test(text) || NEGATED_PROPELLANT_RE.test(text) || (top !== undefined && PROPELLANT_FREE_CLASSES.includes(top)),
     // An air-pusher (a lifter, an ion-wind craft) said to work in vacuum has no air to push: its words no
     // longer count as propellant.
     propellant: PROPELLANT_RE.test(

@@ -554,4 +554,12 @@ describe('ratios, masses and seconds said in words', () => {
     const text = 'A furnace repair delayed the work. The best silicon heterojunction cell reached a certified power-conversion efficiency of 24.6 % under one sun.';
     expect(runClaimChecks(extractFigures(text), { text }).checks.map((c) => c.check)).toContain('light-converter-limits');
   });
+  test('a power rating in a title does not stand in for the current × voltage said later', () => {
+    // 10.5 A × 48 V = 504 W in; 40 A × 12 V = 480 W out.
+    const f = read('A 500 W buck converter for trucks. The authors report an input of 10.5 A at 48 V and an output of 40 A at 12 V at full load.');
+    expect(f.filter((x) => x.kind === 'power' && x.role !== null).map((x) => [x.role, x.si])).toEqual([
+      ['in', 504],
+      ['out', 480],
+    ]);
+  });
 });

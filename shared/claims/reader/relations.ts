@@ -136,8 +136,10 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const i = siOf(cur);
     const v = siOf(volt);
     if (i === null || v === null) continue;
-    // The text states that power itself already.
-    if (drafts.some((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= 0.01 * i * v)) continue;
+    // The text states that power itself already, in the same sentence (not a rating in a title: "a 500 W
+    // converter" beside "an input of 10.5 A at 48 V").
+    const pairSentence = sentenceAround(text, cur.start, cur.end);
+    if (drafts.some((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= 0.01 * i * v && sentenceAround(text, d.start, d.end) === pairSentence)) continue;
     const iu = upperSiOf(cur);
     const vu = upperSiOf(volt);
     const first = cur.start < volt.start ? cur : volt;

@@ -56,6 +56,13 @@ const LOAD_IT_RUNS_RE =
 /** People (not a machine) charging a store, right before what they put in. */
 const PEOPLE_CHARGED_RE =
   /(?<!\p{L})(?:we|I|they|you|he|she|the team|the authors|researchers|one)[^\S\n]+(?:(?:then|first|had|have|fully)[^\S\n]+)?(?:charged|charge|filled|fill|loaded|load|topped up|pumped)[^\S\n]+(?:the|a|an|its|our|their|my)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:cells?|batter(?:y|ies)|packs?|capacitors?|supercapacitors?|supercaps?|accumulators?|flywheels?|store|bank|tank)[^\S\n]+(?:with|to|at|using)[^\S\n]+(?:(?:about|some|roughly|only|just|exactly)[^\S\n]+)?$/iu;
+/** Right before a figure said again: "its rated", "the claimed", "the stated", "their quoted". */
+const RESTATED_LEAD_RE = /(?<!\p{L})(?:its|the|their|his|her|this|that)[^\S\n]+(?:(?:rated|stated|claimed|quoted|reported|advertised|alleged|supposed|nominal|said|promised|headline)[^\S\n]+)(?:(?:figure|value|output|input|power|of)[^\S\n]+)?$/iu;
+/** Whether the same number and unit were written earlier in the text (as typed: "5 W" … "5 W"). */
+function sameFigureEarlier(text: string, start: number, end: number): boolean {
+  const said = text.slice(start, end).replace(/\s+/g, ' ').trim();
+  return said.length > 0 && text.slice(0, start).replace(/\s+/g, ' ').includes(said);
+}
 /** Just before a figure that says how well something was measured. */
 const PRECISION_LEAD_RE = /(?<!\p{L})(?:to within|within ±?|accurate to|accuracy of|uncertainty of|resolution of|precision of|(?:measurement |calibration )?error of|noise (?:floor )?of|drift of|repeatable to|±)[^\S\n]*(?:(?:about|some|roughly|better than|under|below)[^\S\n]+)?$/iu;
 /** Right after a power: the word "load" ("a steady 600 W load", "600 W (resistive load)"). */
@@ -111,6 +118,9 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     const lead = text.slice(Math.max(floor, start - 40), start);
     // "the calorimeter constant to within 0.3 W", "a resolution of 5 mW": how well it was measured, not a flow.
     if (PRECISION_LEAD_RE.test(lead)) return 'aside';
+    // "drawing far less than its rated 5 W", "the claimed 2 kW": a figure said again, as the claim's, by someone
+    // weighing it (its first mention carries its side).
+    if (RESTATED_LEAD_RE.test(lead) && sameFigureEarlier(text, start, end)) return 'aside';
     // "We charged the supercapacitor with 500 J": what people put into a store is its input.
     if (PEOPLE_CHARGED_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'in';
     // "we pull 800 W off it", "you can draw 2 kW out of the generator": what people take from the device is its output.

@@ -29,7 +29,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
-      'took', 'turned by', 'by a', 'fuel', 'containing', 'P_?\\{?in\\}?', 'E_?\\{?in\\}?', 'Pin', 'invest(?:s|ed|ing)?', 'gas input', 'fuel input',
+      'took', 'turned by', 'by a', 'fuel', '(?:energy|heat|calorific) (?:content|value)(?: of (?:the |its )?(?:fuel|gas|diesel|petrol|coal|wood))?(?:[^\\S\\n]+[\\w\x27\u2019-]+){0,5}?[^\\S\\n]+(?:put|puts|estimated|given|stated|reckoned|calculated|taken) (?:it |them )?(?:at|as)', 'containing', 'P_?\\{?in\\}?', 'E_?\\{?in\\}?', 'Pin', 'invest(?:s|ed|ing)?', 'gas input', 'fuel input',
     ],
     after: [
       'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 'from the (?:wall|mains|socket|outlet|plug|grid)', 'compressors?',
@@ -54,7 +54,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:is |was |are |were )?(?:said|claimed|reported|supposed|meant) to have (?:stored|received|absorbed|gained|taken up|banked)', 'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran (?:a|an|the)', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
-      '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts', 'put', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
+      '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
       // A rating said before what makes power: "the 600 MW coal unit", "a 5 kW genset" (not a motor or engine, which may be what drives the device).

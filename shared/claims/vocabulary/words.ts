@@ -53,7 +53,7 @@ export const PROPELLANT_FREE_WORDS = [
   'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless', 'without (?:spending|using|burning|consuming|expending) (?:any )?(?:propellant|fuel|reaction mass)',
   '(?:ion(?:ic)? wind|air currents?|convection) (?:cannot|can ?not|can\'t|could not|is not|isn\'t) (?:be )?(?:the )?(?:cause|explanation|source)', 'rul(?:e|es|ed|ing) out (?:ion(?:ic)? wind|air currents?|convection)',
   'without (?:any )?(?:expelling|ejecting|emitting|throwing|shedding|venting)(?: (?:out )?(?:any )?(?:propellant|mass|reaction mass|material|matter|exhaust|gas))?',
-  'without (?:any )?(?:propellant|reaction mass|exhaust)', 'nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)', 'photon[- ](?:thruster|rocket|drive|propulsion)(?: (?:bound|limit))?', '(?:no air|nothing) to push (?:on|against)',
+  'without (?:any )?(?:propellant|reaction mass|exhaust)', '(?:without|with no) (?:the |any )?(?:emission|ejection|expulsion|release|loss|use) of (?:any )?(?:propellant|mass|reaction mass|matter|exhaust)', 'nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)', 'photon[- ](?:thruster|rocket|drive|propulsion)(?: (?:bound|limit))?', '(?:no air|nothing) to push (?:on|against)',
   'lasers?', 'laser[- ](?:thrusters?|diodes?|light|propulsion|arrays?|bars?|beams?)', 'photons?', 'beam leaving', 'quantum vacuum', 'virtual particles',
   'pushes? (?:against|on|off) (?:the )?(?:quantum )?vacuum', 'pushing (?:against|on|off) (?:the )?(?:[\\w-]+ ){0,3}?vacuum', 'recoil', 'collimated', 'light (?:alone|only)', 'radiators?',
   'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
@@ -87,7 +87,7 @@ export const PROPELLANT_WORDS = [
   'fans?', 'air-breathing', 'solar sails?', 'ion[- ]wind', 'ionic wind', 'corona(?: discharge)?', 'electrohydrodynamic', 'EHD', 'ionocraft', 'ablation', 'ablative', '(?:pushed|driven|propelled|illuminated|accelerated) by (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:lasers?|beams?|sunlight|light)',
   'ground(?:-based)? lasers?', 'laser-pushed', 'beamed (?:power|energy) from', 'tether',
   // Things that push on air or water (lawfully far above P/c).
-  '(?:drone|quadcopter|multicopter|multirotor) (?:makers?|motors?|propellers?|rotors?|arms?|props?)', 'quadcopters?', 'multicopters?', 'multirotors?', 'helicopters?',
+  '(?:drone|quadcopter|multicopter|multirotor) (?:motors?|propellers?|rotors?|arms?|props?)', '(?:drone|quadcopter|multicopter) makers? (?:advertis|claim|sell|quot|rate|list|say|state|promis|offer)\\w*', 'quadcopters?', 'multicopters?', 'multirotors?', 'helicopters?',
   '(?:agricultural|delivery|camera|racing|crop[- ]spraying|survey|photography|FPV|hobby|consumer|cargo|military|inspection) drones?', 'drone spec(?:ification)?s?',
   '(?:four|six|eight|main|tail) rotors?(?! (?:inside|in a|in the|within|enclosed|sealed))',
   'lifters?(?=[^.;!?]{0,80}(?:\\d ?kV|kilovolts?))', 'in (?:the )?(?:open|room|ambient|free|still|ordinary) air', 'rotor blades?', 'propellers?', 'props?', '(?:RC|R/C|radio[- ]controlled|model) (?:planes?|aircraft|airplanes?|aeroplanes?|helis?|gliders?|boats?)', '(?:air|aero)planes?', 'aircraft', 'paramotors?', 'hovercraft', 'ducted fans?', 'EDFs?', 'outboards?', 'boats?', 'water jets?', '(?:balsa|foil|ion|ionic|corona|EHD|high-voltage)[\\w-]*(?: [\\w-]+)? lifters?',
