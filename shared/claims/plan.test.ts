@@ -288,6 +288,14 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'The heat pump uses 1 kW of electricity to deliver 4 kW of heat.',
     // An unnamed heat pump drawing heat from the outdoor air: its work in is not stated.
     'The unit collects 3 kW of heat from the outdoor air and delivers 4 kW of heat to the house.',
+    // An earlier device in one clause, the new one in the next: the new one is the claim.
+    "The inventor's earlier box was said to give 500 W from 100 W; the new unit, tested by the lab, gave 90 W out for 100 W in.",
+    // A figure corrected in an erratum: the corrected one stands (Carnot 200 °C / 30 °C: 35.9 % > 4.5 %).
+    'The claimed 45 % efficiency was corrected to 4.5 % in the erratum; the thermoelectric module works between 200 °C and 30 °C.',
+    // A critic's supposition beside the measured figures (P/c for 900 W = 3.0 µN ≥ 2.9 µN measured).
+    "Even if all 900 W left the device as a beam, the recoil would be about 3 µN; the team's laser thruster, measured at 2.9 µN on 900 W, is consistent with that.",
+    // An old engine alone is the text's device (Carnot 400 °F / 100 °F: 34.9 % > 18 %).
+    'The old mill engine worked between 400 °F steam and a 100 °F condenser at 18 % efficiency, which was good for its day.',
     // One temperature said twice is no pair of sides ("gas entering at 500 °C … 62 % from a 500 °C source").
     'The prototype reaches 62 % thermal efficiency with gas entering at 500 °C. For engines rejecting heat near room temperature, 62 % from a 500 °C source would be close to the limit.',
     // A drone maker as a hoped-for buyer says nothing of the device; as a claimant, of a drone.

@@ -16,7 +16,17 @@ import { relateFigures } from './relations';
  * derived figure uses them.
  */
 export function relate(text: string, drafts: Draft[]): void {
-  const compared = drafts.filter((d) => d.role !== 'aside' && saidInComparison(text, d));
+  let compared = drafts.filter((d) => d.role !== 'aside' && saidInComparison(text, d));
+  // "The old mill engine worked between 400 °F and 100 °F at 18 %": when every figure is of an earlier
+  // device, there is no other: the text is about that one.
+  const own = drafts.filter((d) => !d.derived && d.role !== 'aside');
+  if (own.length > 0 && own.every((d) => compared.includes(d) && earlierDeviceSaid(text, d))) compared = [];
+  // "Even if all 900 W left as a beam, the recoil would be about 3 µN; the thruster, measured at 2.9 µN
+  // on 900 W, …": figures of a supposition, where the text also states figures of the same kind plainly.
+  const supposed = drafts.filter((d) => d.role !== 'aside' && !d.derived && !compared.includes(d) && SUPPOSITION_RE.test(clauseAround(text, d)) && CONDITIONAL_RE.test(clauseAround(text, d)));
+  for (const d of supposed) {
+    if (drafts.some((o) => o !== d && o.kind === d.kind && !o.derived && !supposed.includes(o) && !compared.includes(o))) compared.push(d);
+  }
   if (compared.length === 0) return relateFigures(text, drafts);
   const rest = drafts.filter((d) => !compared.includes(d));
   relateFigures(text, rest);
@@ -98,10 +108,36 @@ const STANDS_IN_BEFORE_RE = new RegExp(
 const EQUIVALENT_AFTER_RE = /^[^\S\n]*[-–]?[^\S\n]*(?:equivalent|equiv\.?|replacement)(?!\p{L})/iu;
 const COMPARED_BEFORE_RE =
   /(?<!\p{L})(?:compared (?:with|to)|in comparison (?:with|to)|as against|as opposed to|versus|vs\.?|whereas|while (?:typical|conventional|ordinary|standard|commercial|existing)|unlike)(?!\p{L})[^.;!?\n]{0,50}$/iu;
+/**
+ * "Our previous prototype reached 35 % at 800 W": an earlier device, not the one claimed; in a sentence
+ * that names both ("the earlier box gave 500 W from 100 W; the new unit gave 90 W"), the clause of the
+ * earlier one.
+ */
+function earlierDeviceSaid(text: string, d: Draft): boolean {
+  const sentence = sentenceAround(text, d.start, d.end);
+  if (EARLIER_DEVICE_RE.test(sentence) && !LATEST_DEVICE_RE.test(sentence)) return true;
+  const clause = clauseAround(text, d);
+  return EARLIER_DEVICE_RE.test(clause) && !LATEST_DEVICE_RE.test(clause) && LATEST_DEVICE_RE.test(sentence);
+}
+/** The clause of a figure: its sentence cut at semicolons, colons and ", but / while / whereas". */
+function clauseAround(text: string, d: Draft): string {
+  const sentence = sentenceAround(text, d.start, d.end);
+  const at = sentence.indexOf(text.slice(d.start, d.end));
+  const cuts = [0, ...[...sentence.matchAll(/[;:]|,[^\S\n]*(?=(?:but|while|whereas|yet)(?!\p{L}))/gu)].map((m) => m.index! + 1), sentence.length];
+  for (let k = 0; k + 1 < cuts.length; k++) if (at >= cuts[k] && at < cuts[k + 1]) return sentence.slice(cuts[k], cuts[k + 1]);
+  return sentence;
+}
+/** Right after a figure: it was corrected to another ("was corrected to 4.5 %", "since revised down to 2 mN"). */
+const SUPERSEDED_AFTER_RE = /^[^.;!?\n]{0,30}?(?<!\p{L})(?:was|were|has been|have been|had been|since|later|then)?[^\S\n]*(?:corrected|revised|amended|lowered|reduced|cut|changed)[^\S\n]+(?:down[^\S\n]+)?to(?!\p{L})/iu;
+/** A supposition: "if", "even if", "were it", "suppose", "supposing". */
+const SUPPOSITION_RE = /(?<!\p{L})(?:if|even if|were it|suppose|supposing|assuming|had it)(?!\p{L})/iu;
+/** A conditional outcome: "would", "could", "might". */
+const CONDITIONAL_RE = /(?<!\p{L})(?:would|could|might)(?!\p{L})/iu;
+
 /** Right after a comparison's figure: what it was compared with is the input or output of the claim itself ("compared with 1 kW of input"). */
 const OWN_FLOW_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|heat|shaft)[^\S\n]+)?(?:input|output|in|out|consumed|drawn|supplied|delivered|it (?:draws|takes|uses|consumes|needs|gives|delivers))(?!\p{L})/iu;
 
-const DEVICE_NOUNS = '(?:prototypes?|models?|versions?|designs?|generations?|units?|builds?|rigs?|devices?|machines?|iterations?|systems?)';
+const DEVICE_NOUNS = '(?:prototypes?|models?|versions?|designs?|generations?|units?|builds?|rigs?|devices?|machines?|iterations?|systems?|box(?:es)?|cells?|modules?|engines?|motors?|generators?|drives?|thrusters?|heaters?|coils?|wheels?)';
 const EARLIER_DEVICE_RE = new RegExp(`(?<!\\p{L})(?:previous|earlier|older|former|first-generation|last year's|original|old|predecessor)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?${DEVICE_NOUNS}(?!\\p{L})`, 'iu');
 const LATEST_DEVICE_RE = new RegExp(`(?<!\\p{L})(?:new|this|latest|present|current|improved|second|next)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?${DEVICE_NOUNS}(?!\\p{L})`, 'iu');
 const OWN_FLOW_BETWEEN_RE = /(?<!\p{L})(?:input|output|inputs|outputs|in|out|consumption|supply|P_?\{?(?:in|out)\}?|E_?\{?(?:in|out)\}?)(?!\p{L})/iu;
@@ -111,7 +147,9 @@ function saidInComparison(text: string, d: Draft): boolean {
   const sentence = sentenceAround(text, d.start, d.end);
   if (COMPARISON_SENTENCE_RE.test(sentence) && !OWN_DEVICE_RE.test(sentence)) return true;
   // "Our previous prototype reached 35 % at 800 W": an earlier device, not the one claimed.
-  if (EARLIER_DEVICE_RE.test(sentence) && !LATEST_DEVICE_RE.test(sentence)) return true;
+  if (earlierDeviceSaid(text, d)) return true;
+  // "The claimed 45 % efficiency was corrected to 4.5 %": a figure superseded by the one after it.
+  if (SUPERSEDED_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
   if (OTHERS_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
   if (inContrastedClause(text, d)) return true;
   const clauseBefore = text.slice(windowStart(text, d.start, 0, 120), d.start);
