@@ -257,6 +257,14 @@ describe('signals for the matcher', () => {
     expect(checks(genset).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(54e6 / 187.2e6, 6);
   });
 
+  it("an expert's supposed case ('a heater turning 1 kW into 4 kW would break the first law') is not the heat pump's COP", () => {
+    // 3.4 kW / 1 kW = 3.4; Carnot COP at 7 °C / 35 °C = 308.15 / 28 = 11.0.
+    const text = 'Review: the heat pump gave 3.4 kW of heat for 1 kW of electricity with 7 °C outside and 35 °C flow water. Our expert notes that an ordinary electric heater turning 1 kW into 4 kW would break the first law; a heat pump does not.';
+    const carnot = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+    expect(carnot?.finding).toBe('consistent');
+    expect(carnot?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(3.4 / (308.15 / 28), 6);
+  });
+
   it('a heat store charged with metered heat is held to the first law, an outdoor temperature elsewhere notwithstanding', () => {
     // 41 000 BTU × 1055.05585262 J/BTU = 43.26 MJ in (NIST SP 811 B.8); 450 W × 20 h = 32.4 MJ out; 0.749.
     const text = 'The store was charged from the roof collectors with 41,000 BTU of heat. Over the following 20-hour stretch it gave back a steady 450 W of heat to the room. The outdoor temperature fell to −3 °C overnight.';
@@ -294,6 +302,9 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'The claimed 45 % efficiency was corrected to 4.5 % in the erratum; the thermoelectric module works between 200 °C and 30 °C.',
     // A critic's supposition beside the measured figures (P/c for 900 W = 3.0 µN ≥ 2.9 µN measured).
     "Even if all 900 W left the device as a beam, the recoil would be about 3 µN; the team's laser thruster, measured at 2.9 µN on 900 W, is consistent with that.",
+    // Others' claims and a recalled old claim beside the device weighed.
+    'Competitors claim their boxes give 500 W from 100 W. The Harlow inverter we tested turned 1,000 W of DC into 940 W of AC.',
+    'The expert recalled a 1990s claim of a motor giving 5 kW from 1 kW, which was never shown; the present motor gives 0.9 kW from 1 kW.',
     // An old engine alone is the text's device (Carnot 400 °F / 100 °F: 34.9 % > 18 %).
     'The old mill engine worked between 400 °F steam and a 100 °F condenser at 18 % efficiency, which was good for its day.',
     // One temperature said twice is no pair of sides ("gas entering at 500 °C … 62 % from a 500 °C source").

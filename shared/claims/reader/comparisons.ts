@@ -23,7 +23,12 @@ export function relate(text: string, drafts: Draft[]): void {
   if (own.length > 0 && own.every((d) => compared.includes(d) && earlierDeviceSaid(text, d))) compared = [];
   // "Even if all 900 W left as a beam, the recoil would be about 3 µN; the thruster, measured at 2.9 µN
   // on 900 W, …": figures of a supposition, where the text also states figures of the same kind plainly.
-  const supposed = drafts.filter((d) => d.role !== 'aside' && !d.derived && !compared.includes(d) && SUPPOSITION_RE.test(clauseAround(text, d)) && CONDITIONAL_RE.test(clauseAround(text, d)));
+  const supposed = drafts.filter((d) => {
+    if (d.role === 'aside' || d.derived || compared.includes(d)) return false;
+    const clause = clauseAround(text, d);
+    // ("… if it … would", or an expert's "a heater turning 1 kW into 4 kW would break the first law".)
+    return (SUPPOSITION_RE.test(clause) && CONDITIONAL_RE.test(clause)) || SUPPOSED_OUTCOME_RE.test(clause) || OTHERS_CLAIM_RE.test(clause);
+  });
   for (const d of supposed) {
     if (drafts.some((o) => o !== d && o.kind === d.kind && !o.derived && !supposed.includes(o) && !compared.includes(o))) compared.push(d);
   }
@@ -131,6 +136,10 @@ function clauseAround(text: string, d: Draft): string {
 const SUPERSEDED_AFTER_RE = /^[^.;!?\n]{0,30}?(?<!\p{L})(?:was|were|has been|have been|had been|since|later|then)?[^\S\n]*(?:corrected|revised|amended|lowered|reduced|cut|changed)[^\S\n]+(?:down[^\S\n]+)?to(?!\p{L})/iu;
 /** A supposition: "if", "even if", "were it", "suppose", "supposing". */
 const SUPPOSITION_RE = /(?<!\p{L})(?:if|even if|were it|suppose|supposing|assuming|had it)(?!\p{L})/iu;
+/** What a supposed case would do to a law or a bound: "would break the first law", "would beat a photon rocket". */
+const SUPPOSED_OUTCOME_RE = /(?<!\p{L})(?:would|could only)[^\S\n]+(?:(?:clearly|plainly|certainly|then|also)[^\S\n]+)?(?:break|violate|beat|exceed|contradict|defy|outdo|be impossible|need|require|mean)(?!\p{L})/iu;
+/** Others' claims beside the one weighed: "Competitors claim their boxes give …", "rival makers advertise …". */
+const OTHERS_CLAIM_RE = /(?<!\p{L})(?:competitors?|rivals?|rival (?:makers?|firms?|companies|designs?)|other (?:makers?|firms?|companies|inventors?|sellers?|designs?)|others)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:claim|claims|advertise|advertises|promise|promises|say|says|quote|quotes|sell|sells)(?!\p{L})/iu;
 /** A conditional outcome: "would", "could", "might". */
 const CONDITIONAL_RE = /(?<!\p{L})(?:would|could|might)(?!\p{L})/iu;
 
@@ -138,7 +147,10 @@ const CONDITIONAL_RE = /(?<!\p{L})(?:would|could|might)(?!\p{L})/iu;
 const OWN_FLOW_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|heat|shaft)[^\S\n]+)?(?:input|output|in|out|consumed|drawn|supplied|delivered|it (?:draws|takes|uses|consumes|needs|gives|delivers))(?!\p{L})/iu;
 
 const DEVICE_NOUNS = '(?:prototypes?|models?|versions?|designs?|generations?|units?|builds?|rigs?|devices?|machines?|iterations?|systems?|box(?:es)?|cells?|modules?|engines?|motors?|generators?|drives?|thrusters?|heaters?|coils?|wheels?)';
-const EARLIER_DEVICE_RE = new RegExp(`(?<!\\p{L})(?:previous|earlier|older|former|first-generation|last year's|original|old|predecessor)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?${DEVICE_NOUNS}(?!\\p{L})`, 'iu');
+const EARLIER_DEVICE_RE = new RegExp(
+  `(?<![\\p{L}\\p{N}])(?:(?:previous|earlier|older|former|first-generation|last year's|original|old|predecessor)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?|(?:1[89]\\d0s|20[0-2]0s|decades?[- ]old|historic(?:al)?)[^\\S\\n]+(?:claims?[^\\S\\n]+(?:of|for|about)[^\\S\\n]+(?:an?|the)[^\\S\\n]+)?(?:[\\p{L}-]+[^\\S\\n]+)?)${DEVICE_NOUNS}(?!\\p{L})`,
+  'iu',
+);
 const LATEST_DEVICE_RE = new RegExp(`(?<!\\p{L})(?:new|this|latest|present|current|improved|second|next)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?${DEVICE_NOUNS}(?!\\p{L})`, 'iu');
 const OWN_FLOW_BETWEEN_RE = /(?<!\p{L})(?:input|output|inputs|outputs|in|out|consumption|supply|P_?\{?(?:in|out)\}?|E_?\{?(?:in|out)\}?)(?!\p{L})/iu;
 
