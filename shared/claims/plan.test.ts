@@ -302,6 +302,11 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'The claimed 45 % efficiency was corrected to 4.5 % in the erratum; the thermoelectric module works between 200 °C and 30 °C.',
     // A critic's supposition beside the measured figures (P/c for 900 W = 3.0 µN ≥ 2.9 µN measured).
     "Even if all 900 W left the device as a beam, the recoil would be about 3 µN; the team's laser thruster, measured at 2.9 µN on 900 W, is consistent with that.",
+    // Machines that turn electricity or fuel into work, heat or light: the temperatures they run at are no reservoirs.
+    'Our motor is 92 % efficient, and in the test it ran at 80 °C with the workshop at 20 °C.',
+    'The electric kettle is 90 % efficient and heats water from 15 °C to 100 °C in three minutes on 2.2 kW.',
+    'The LED lamp converts 45 % of its electricity into light and runs at 60 °C in a 25 °C room.',
+    'The fuel cell is 60 % efficient at 80 °C, turning hydrogen into electricity; the room is at 20 °C.',
     // Others' claims and a recalled old claim beside the device weighed.
     'Competitors claim their boxes give 500 W from 100 W. The Harlow inverter we tested turned 1,000 W of DC into 940 W of AC.',
     'The expert recalled a 1990s claim of a motor giving 5 kW from 1 kW, which was never shown; the present motor gives 0.9 kW from 1 kW.',

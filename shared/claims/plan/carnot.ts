@@ -13,6 +13,13 @@ const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop
 const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
+/**
+ * Machines whose efficiency is not a heat engine's: they turn electricity or chemical energy into work,
+ * heat or light, and a temperature they run at is no reservoir ("the motor is 92 % efficient and ran at
+ * 80 °C in a 20 °C workshop", "the kettle heats water from 15 °C to 100 °C").
+ */
+const NOT_HEAT_ENGINE_RE =
+  /(?<!\p{L})(?:(?:electric(?:al)?[^\S\n]+)?motors?|kettles?|(?:electric[^\S\n]+|immersion[^\S\n]+|space[^\S\n]+|water[^\S\n]+)?heaters?|heating elements?|lamps?|LEDs?|light bulbs?|bulbs?|fuel cells?|batter(?:y|ies)|electroly[sz]ers?|electrolysis|lasers?|amplifiers?|fans?|(?<!heat[^\S\n]+)pumps?|loudspeakers?|speakers?|cables?|wires?)(?!\p{L})/iu;
 /** An engine said to run on one reservoir, or a difference of nothing ("ΔT = 0 K"): equal sides are the claim. */
 const oneReservoirSaid = (text: string, figures: Figure[]): boolean => SINGLE_RESERVOIR_RE.test(text) || ofKind(figures, 'temperature-difference').some((f) => f.si === 0);
 /** Whether the temperatures give two sides apart: the hot and cold chosen as the Carnot check chooses them, the cold one colder. */
@@ -69,7 +76,7 @@ export function planCarnot(b: Basis): HeatReading {
   const cop = ofKind(figures, 'cop')[0] ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);
   // An efficiency is a heat engine's only where the text speaks of work or electricity got from heat:
   // a collector, boiler or heater that delivers heat, or a converter of electricity, is not bounded by Carnot.
-  const notAnEngine = !s.heatEngine && (HEAT_ONLY_RE.test(text) || ELECTRICAL_CONVERTER_RE.test(text));
+  const notAnEngine = !s.heatEngine && (HEAT_ONLY_RE.test(text) || ELECTRICAL_CONVERTER_RE.test(text) || NOT_HEAT_ENGINE_RE.test(text));
   // An efficiency said with a temperature difference is one of a machine working across it.
   const acrossDifference = ofKind(figures, 'temperature-difference').length > 0;
   const engineEfficiency = efficiency && !notAnEngine && (s.heatEngine || temps.length >= 2 || acrossDifference) && !(efficiency.si > 1 && temps.length < 2);

@@ -39,11 +39,11 @@ export const ISP_WORDS = ['I_?sp', 'Isp', 'ISP', 'I sp', 'specific impulses?', '
 
 /** Words that say a device is a heat engine (so an efficiency is a Carnot claim). */
 export const HEAT_ENGINE_WORDS = [
-  'heat motors?', 'thermoacoustic', 'of the heat', 'of the heat (?:it|that)', 'heat (?:it|that it) (?:draws|takes|absorbs|collects|gathers)', 'heat engines?', 'engines?', 'turbines?', 'Stirling\\w*', '\\w*motoren?', 'cooling water', 'condenser', 'heat sink', 'hot side', 'cold side', 'reservoirs?',
+  'heat motors?', 'thermoacoustic', 'of the heat', 'of the heat (?:it|that)', 'heat (?:it|that it) (?:draws|takes|absorbs|collects|gathers)', 'heat engines?', 'engines?', 'turbines?', 'Stirling\\w*', '\\p{L}+motoren?', 'cooling water', 'condenser', 'heat sink', 'hot side', 'cold side', 'reservoirs?',
   'source temperature', 'thermoelectric\\w*', 'thermo-?electric\\w*', 'thermionic', 'thermophotovoltaic\\w*', 'TPV', 'Stirling',
   'Rankine', 'ORC', 'steam', 'thermal converters?', 'heat converters?', 'heat to (?:work|power|electricity)', 'converts? (?:\\w+ )?heat', 'waste[- ]heat', 'thermal (?:to|into) (?:electric|mechanical)',
   'Seebeck', 'Peltier', 'generators? running on heat', 'heat-driven', 'thermal generator', 'TEG', 'heat recovery', 'power plant', 'power station', 'combustion',
-  'diesel', 'petrol', 'gasoline', 'ambient heat', 'heat of the (?:air|sea|room|surroundings)', 'temperature difference', 'thermal gradient',
+  'diesel', 'petrol', 'gasoline', 'ambient heat', '(?:harvests?|draws?|takes?|extracts?) (?:the )?(?:warmth|heat) (?:of|from)', 'warmth of', 'of (?:the |its )?(?:absorbed |incoming |collected |input )?heat(?: [\\w-]+){0,4}? (?:as|into|to) (?:useful )?(?:work|electricity|power|motion)', '(?:dumps?|rejects?|sheds?|throws? away) (?:the rest|what is left|(?:its |the )?(?:waste )?heat)', 'heat (?:is )?rejected', 'heat of the (?:air|sea|room|surroundings)', 'temperature difference', 'thermal gradient',
 ];
 
 /** A device said to throw out nothing: the photon-rocket bound applies to its thrust. */
