@@ -51,6 +51,9 @@ const OTHER_SOURCE_RE =
 const NEGATED_SOURCE_RE =
   /(?<!\p{L})(?:no|without|never any|not any)[^\S\n]+(?:(?:any|direct|further|other|more)[^\S\n]+)?(?:sun(?:light|shine)?|solar|charg\w*|recharg\w*|mains|grid|fuel|panels?)(?!\p{L})/giu;
 
+/** Right after a rating: a supply, an adapter or a charger named ("100 W bench supply", "65 W USB-C adapter"). */
+const SUPPLY_RATING_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:(?!(?:from|the|a|an|of|by|via|through|at|to|into|on|its|their|our)(?![\p{L}\d-]))[\p{L}\d-]+[^\S\n]+){0,2}?(?:(?:power|bench|lab|laboratory|DC)[^\S\n]+)?(?:supply|supplies|PSUs?|adapters?|chargers?|power bricks?)(?!\p{L})/iu;
+
 /** Roles the words leave open, read from the other figures (see the file's comment). */
 export function rolesByContext(text: string, drafts: Draft[]): void {
   // "covers 4.2 light years in 30 days": a speed, distance over time (IAU 2012 B2 astronomical unit,
@@ -140,6 +143,14 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   if (stores.length === 1 && draws.length === 1 && drafts.filter(energyLike).length === 2 && drafts.some((d) => d.kind === 'duration') && !OTHER_SOURCE_RE.test(text.replace(NEGATED_SOURCE_RE, ' '))) {
     stores[0].role = 'in';
     draws[0].role = 'out';
+  }
+  // "The 100 W bench supply powers a 12 V, 2 A load": a supply's rating is what it can give, not a flow of
+  // the load it feeds, whose own power the text states (current × voltage).
+  const pairs = drafts.filter((d) => d.kind === 'power' && d.derived?.startsWith('power = current × voltage'));
+  if (pairs.length > 0) {
+    for (const d of drafts) {
+      if (d.kind === 'power' && !d.derived && d.role !== 'aside' && SUPPLY_RATING_AFTER_RE.test(text.slice(d.end, d.end + 40))) d.role = 'aside';
+    }
   }
   // One side named, one figure left: the other side.
   const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
