@@ -302,6 +302,9 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'The claimed 45 % efficiency was corrected to 4.5 % in the erratum; the thermoelectric module works between 200 °C and 30 °C.',
     // A critic's supposition beside the measured figures (P/c for 900 W = 3.0 µN ≥ 2.9 µN measured).
     "Even if all 900 W left the device as a beam, the recoil would be about 3 µN; the team's laser thruster, measured at 2.9 µN on 900 W, is consistent with that.",
+    // Light from outside reflected by the craft (up to 2P/c), and a galaxy's recession with the expansion of space.
+    'A 1 kW laser pointed at a mirror on the craft pushes it with 6.7 µN (twice P/c, because the light bounces back).',
+    'The galaxy recedes at 1.5 c because space itself expands; nothing moves through space faster than light.',
     // A supply's rating is no flow of the load it feeds (12 V × 2 A = 24 W drawn).
     'The 100 W bench supply powers a 12 V, 2 A load for 10 hours.',
     // Machines that turn electricity or fuel into work, heat or light: the temperatures they run at are no reservoirs.

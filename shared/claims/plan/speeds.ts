@@ -15,15 +15,15 @@ const LIGHT_SPEED_FROM = 100_000;
 /** From 1 km/s, a speed said of a craft itself (not an exhaust or a speed change) is also checked: no wind, train or runner goes so fast. Common practice, no source. */
 const SPACE_SPEED_FROM = 1_000;
 
-/** Before a speed that is no signal's: a phase velocity, a spot or shadow swept across a screen. */
-const NO_SIGNAL_SPEED_RE = /(?<!\p{L})(?:phase (?:velocity|speed)|phase front|spot|shadow|sweep(?:s|ing)?|apparent (?:velocity|speed|motion)|appears? to (?:move|travel|go|run)|seems? to (?:move|travel|go))(?!\p{L})[^.;!?\n]{0,25}$/iu;
+/** Before a speed that is no signal's: a phase velocity, a spot or shadow swept across a screen, a galaxy's recession (space expanding, nothing moving through it). */
+const NO_SIGNAL_SPEED_RE = /(?<!\p{L})(?:phase (?:velocity|speed)|phase front|spot|shadow|sweep(?:s|ing)?|apparent (?:velocity|speed|motion)|appears? to (?:move|travel|go|run)|seems? to (?:move|travel|go)|recedes?|receding|recession(?: (?:speed|velocity))?)(?!\p{L})[^.;!?\n]{0,25}$/iu;
 
 export function planSpeeds(b: Basis): void {
   const { plans, notes, text, speeds } = b;
   // A phase velocity (or a spot swept across a screen) above c carries no signal: not a speed to judge.
   const noSignal = (f: Figure) => NO_SIGNAL_SPEED_RE.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0));
   for (const f of speeds.filter((x) => noSignal(x) && (x.upper?.si ?? x.si) >= C_LIGHT)) {
-    notes.push(`${f.display.trim()} is said of a phase velocity or an apparent motion: such speeds may exceed c without carrying a signal or energy, so special relativity does not forbid them.`);
+    notes.push(`${f.display.trim()} is said of a phase velocity, an apparent motion or a recession with the expansion of space: such speeds may exceed c without anything carrying a signal or energy through space faster than light, so special relativity does not forbid them.`);
   }
   const signalSpeeds = speeds.filter((f) => !noSignal(f));
   const fastest = signalSpeeds.filter((f) => f.role !== 'delta-v' || f.si >= C_LIGHT).sort((a, b) => b.si - a.si)[0] ?? largest(signalSpeeds);
