@@ -19,7 +19,7 @@ const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|in
  * 80 °C in a 20 °C workshop", "the kettle heats water from 15 °C to 100 °C").
  */
 const NOT_HEAT_ENGINE_RE =
-  /(?<!\p{L})(?:(?:electric(?:al)?[^\S\n]+)?motors?|kettles?|(?:electric[^\S\n]+|immersion[^\S\n]+|space[^\S\n]+|water[^\S\n]+)?heaters?|heating elements?|lamps?|LEDs?|light bulbs?|bulbs?|fuel cells?|batter(?:y|ies)|electroly[sz]ers?|electrolysis|lasers?|amplifiers?|fans?|(?<!heat[^\S\n]+)pumps?|loudspeakers?|speakers?|cables?|wires?)(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:electric(?:al)?[^\S\n]+)?motors?|kettles?|(?:electric[^\S\n]+|immersion[^\S\n]+|space[^\S\n]+|water[^\S\n]+)?heaters?|heating elements?|stoves?|wood[- ]?burners?|fireplaces?|ovens?|kilns?|cookers?|hobs?|burners?|grills?|toasters?|(?:clothes |hair |tumble )?dryers?|irons?|lamps?|LEDs?|light bulbs?|bulbs?|fuel cells?|batter(?:y|ies)|electroly[sz]ers?|electrolysis|lasers?|amplifiers?|fans?|(?<!heat[^\S\n]+)pumps?|loudspeakers?|speakers?|cables?|wires?)(?!\p{L})/iu;
 /** An engine said to run on one reservoir, or a difference of nothing ("ΔT = 0 K"): equal sides are the claim. */
 const oneReservoirSaid = (text: string, figures: Figure[]): boolean => SINGLE_RESERVOIR_RE.test(text) || ofKind(figures, 'temperature-difference').some((f) => f.si === 0);
 /** Whether the temperatures give two sides apart: the hot and cold chosen as the Carnot check chooses them, the cold one colder. */
