@@ -313,6 +313,8 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'The LED lamp converts 45 % of its electricity into light and runs at 60 °C in a 25 °C room.',
     'The fuel cell is 60 % efficient at 80 °C, turning hydrogen into electricity; the room is at 20 °C.',
     'The wood stove is 80 % efficient and heats the room to 21 °C with a flue at 200 °C.',
+    // A 500 Wh pack feeding a 5 W average draw for 72 hours (360 Wh), a solar panel named beside it.
+    '12 Aug: installed the sensor package, 5 W average draw, on the 500 Wh lithium pack. Solar panel left disconnected for the endurance test. 15 Aug: a 72-hour run completed; the pack still shows charge left. Reconnect the panel before the storm.',
     // Others' claims and a recalled old claim beside the device weighed.
     'Competitors claim their boxes give 500 W from 100 W. The Harlow inverter we tested turned 1,000 W of DC into 940 W of AC.',
     'The expert recalled a 1990s claim of a motor giving 5 kW from 1 kW, which was never shown; the present motor gives 0.9 kW from 1 kW.',

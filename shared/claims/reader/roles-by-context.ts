@@ -43,6 +43,8 @@ const STORE_INTO_RE =
 const STORE_NOUN_RE = /(?<!\p{L})(?:cells?|batter(?:y|ies)|packs?|accumulators?|power banks?|capacitors?|supercaps?|supercapacitors?)(?!\p{L})/iu;
 /** Just before what a load draws: "Lamp draw:", "draws", "consumption of". */
 const DRAW_LEAD_RE = /(?<!\p{L})(?:draws?|drawing|consumption|consumes|consuming|uses|using|load)(?!\p{L})[^\d\n]{0,15}$/iu;
+/** Right after what a load draws: "5 W average draw", "2 W continuous consumption". */
+const DRAW_AFTER_RE = /^[^\S\n]*(?:(?:average|continuous|steady|mean|constant|typical)[^\S\n]+)?(?:draw|consumption|load)(?!\p{L})/iu;
 /** Anything else that could feed the load or fill the store. */
 const OTHER_SOURCE_RE =
   /(?<!\p{L})(?:solar|sun|panels?|photovoltaic|PV|charg\w*|recharg\w*|generat\w*|harvest\w*|mains|grid|wind|turbines?|dynamos?|alternators?|cranks?|fuel|engines?|topped up|top up|plugged|self-\w+|free energy|over-?unity)(?!\p{L})/iu;
@@ -130,7 +132,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   // "Cell: 20 Wh lithium pack / Lamp draw: 0.05 W / ran two weeks": a store of energy drained by a
   // load over a run. What the store holds is the input and what the load draws from it the output, so
   // the ledger asks whether the draw over the run fits in the store. Only with one store, one draw, a
-  // run and nothing else of energy; never where the store is being charged or something else feeds the load.
+  // run and nothing else of energy; the draw not where the store is being charged or something else may feed the load.
   const stores = drafts.filter(
     (d) =>
       d.kind === 'energy' &&
@@ -139,10 +141,14 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
       // ("the cell stores 3 Wh": what a store holds, whatever side its verb gave it.)
       (d.role === null || d.role === 'in' || STORE_HOLDS_RE.test(text.slice(Math.max(0, d.start - 40), d.start))),
   );
-  const draws = drafts.filter((d) => d.kind === 'power' && d.role === 'in' && !d.derived && DRAW_LEAD_RE.test(text.slice(Math.max(0, d.start - 30), d.start)));
-  if (stores.length === 1 && draws.length === 1 && drafts.filter(energyLike).length === 2 && drafts.some((d) => d.kind === 'duration') && !OTHER_SOURCE_RE.test(text.replace(NEGATED_SOURCE_RE, ' '))) {
+  const draws = drafts.filter(
+    (d) => d.kind === 'power' && d.role === 'in' && !d.derived && (DRAW_LEAD_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || DRAW_AFTER_RE.test(text.slice(d.end, d.end + 30))),
+  );
+  if (stores.length === 1 && draws.length === 1 && drafts.filter(energyLike).length === 2 && drafts.some((d) => d.kind === 'duration')) {
     stores[0].role = 'in';
-    draws[0].role = 'out';
+    // (Where something else may feed the load, a solar panel named, the draw stays an input: no ledger,
+    // rather than one with a store that is not the whole input.)
+    if (!OTHER_SOURCE_RE.test(text.replace(NEGATED_SOURCE_RE, ' '))) draws[0].role = 'out';
   }
   // "The 100 W bench supply powers a 12 V, 2 A load": a supply's rating is what it can give, not a flow of
   // the load it feeds, whose own power the text states (current × voltage).
