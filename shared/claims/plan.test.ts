@@ -6,7 +6,7 @@
  */
 import { runCheck } from '../checks/run';
 import { formatQuantity, parseQuantity } from '../worksheet/quantity';
-import { planChecks, readSignals, runClaimChecks, signalledClasses } from './plan';
+import { claimSignals, planChecks, readSignals, runClaimChecks, signalledClasses } from './plan';
 import { extractFigures } from './reader';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from './types';
 
@@ -257,6 +257,18 @@ describe('signals for the matcher', () => {
     expect(checks(genset).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(54e6 / 187.2e6, 6);
   });
 
+  it('a drive said to need no propellant is held to the photon bound, though a comparison, a question or an agenda line names a propellant engine', () => {
+    const photon = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound')?.finding;
+    // 1.2 N/kW ≫ 1/c = 3.34 µN/kW.
+    expect(photon('Your deck says the drive makes 1.2 N/kW with no propellant. How does that compare with an ion engine?')).toBe('breaks');
+    // 30 µN from 10 kW of light: under P/c = 33.4 µN.
+    expect(photon('A 10 kW fibre-laser photon thruster gave 30 micronewtons; it needs no propellant at all. Next week: two papers on Hall thruster erosion.')).toBe('consistent');
+    // "Unlike the propellant-free drives …, our Hall thruster uses xenon": the claimant's own sentence counts.
+    expect(photon('Unlike the propellant-free drives in the news, our Hall thruster uses xenon: it produced 80 mN at 1.35 kW. Is that the same as the drives you criticise?')).toBeUndefined();
+    // A thruster that does throw out xenon stays out of the photon bound, whatever else the text says.
+    expect(photon('It needs no propellant? No: it ejects xenon at 2 mg/s and gives 50 mN on 1 kW.')).toBeUndefined();
+  });
+
   it("an expert's supposed case ('a heater turning 1 kW into 4 kW would break the first law') is not the heat pump's COP", () => {
     // 3.4 kW / 1 kW = 3.4; Carnot COP at 7 °C / 35 °C = 308.15 / 28 = 11.0.
     const text = 'Review: the heat pump gave 3.4 kW of heat for 1 kW of electricity with 7 °C outside and 35 °C flow water. Our expert notes that an ordinary electric heater turning 1 kW into 4 kW would break the first law; a heat pump does not.';
@@ -279,14 +291,17 @@ describe('signals for the matcher', () => {
     expect(runClaimChecks(extractFigures(text), { text }).checks.map((c) => [c.check, c.finding])).toContainEqual(['photon-bound', 'breaks']);
   });
 
-  it('a speed above c, a converter over its limit, and a percentage above 100 % point to their own classes', () => {
+  it('a speed above c and a converter over its limit point to their own classes; a percentage above 100 % leads to its entry', () => {
     const classes = (text: string) => signalledClasses(extractFigures(text), text);
     // 900 million mph × 0.44704 m/s per mph (NIST SP 811 B.8) = 4.02 × 10⁸ m/s > c = 299 792 458 m/s.
     expect(classes('The craft cruised at 900 million mph.')).toContain('faster-than-light');
     // Carnot between 40 °C and 20 °C: 20 / 313.15 = 6.4 % < 12 % claimed.
     expect(classes('With the hot plate at 40 °C and the cold at 20 °C, the thermoelectric module converts 12 % of the heat into electricity.')).toEqual(['converter-beyond-limit']);
-    expect(classes('The EQE reaches 126 % near the absorption peak.')).toEqual(['efficiency-above-unity']);
-    expect(classes('The ordinary heat pump is 350 % efficient.')).toEqual(['efficiency-above-unity']);
+    // A figure above 100 % leads to its entry when the words match none (a lead, not a boost).
+    const leads = (text: string) => claimSignals(extractFigures(text), text).leads.map((l) => l.mechanismClass);
+    expect(classes('The EQE reaches 126 % near the absorption peak.')).toEqual([]);
+    expect(leads('The EQE reaches 126 % near the absorption peak.')).toEqual(['efficiency-above-unity']);
+    expect(leads('The ordinary heat pump is 350 % efficient.')).toEqual(['efficiency-above-unity']);
   });
 });
 

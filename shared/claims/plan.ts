@@ -48,7 +48,7 @@ export interface FindingLead {
 }
 
 /** The classes signalledClasses can return (the matcher boosts them and every class below them). */
-export const SIGNALLABLE_CLASSES = ['propellant-free-thrust', 'over-unity', 'single-reservoir-engine', 'converter-beyond-limit', 'faster-than-light', 'efficiency-above-unity'] as const;
+export const SIGNALLABLE_CLASSES = ['propellant-free-thrust', 'over-unity', 'single-reservoir-engine', 'converter-beyond-limit', 'faster-than-light'] as const;
 
 /** Converters of light or heat to electricity with no moving parts (their limits are the Carnot, Landsberg and Shockley–Queisser bounds). */
 const CONVERTER_RE = /(?<!\p{L})(?:thermoelectric|TEGs?|Seebeck|thermophotovoltaic|TPV|thermionic|solar cells?|photovoltaic|PV cells?|PV modules?)(?!\p{L})/iu;
@@ -83,8 +83,9 @@ export function claimSignals(figures: Figure[], text: string): { classes: string
   // A percentage above 100 % said of an efficiency ("250 % efficient", a heat pump's "350 %"), or a
   // quantum efficiency above one: the entry on what such figures mean.
   const percentOver = figures.some((f) => (f.kind === 'efficiency' || f.kind === 'cop' || f.kind === 'quantum-efficiency') && f.si > 1 && /%|per ?cent/iu.test(f.text));
+  // (A lead only, not a boost: the entry's words are common enough that a boost would admit it for a long
+  // text about something else.)
   if (percentOver || figures.some((f) => f.kind === 'quantum-efficiency' && f.si > 1)) {
-    out.add('efficiency-above-unity');
     leads.push({ mechanismClass: 'efficiency-above-unity', why: 'a figure above 100 % said of an efficiency' });
   }
   for (const run of runClaimChecks(figures, { text }).checks) {

@@ -62,6 +62,27 @@ const NEGATED_PROPELLANT_ALL_RE = new RegExp(NEGATED_PROPELLANT_RE.source, 'giu'
 /** Devices that push on air (and so cannot work in vacuum). */
 const AIR_PUSHER_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?|electrohydrodynamic|EHD|ionocraft|[\p{L}-]*lifters?)(?!\p{L})/giu;
 
+/** A plain statement that nothing is thrown out ("with no propellant", "needs no propellant at all"). */
+const EXPLICIT_NO_PROPELLANT_RE =
+  /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected))(?!\p{L})/iu;
+/** The claimant's own voice. */
+const OWN_VOICE_RE = /(?<!\p{L})(?:our|ours|we|us|my|mine)(?!\p{L})/iu;
+/** A sentence that compares, asks, or moves on to another subject: its propulsion words are not the claim's. */
+const ASIDE_SENTENCE_RE = /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|versus|vs\.?|unlike|rather than|instead of)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month)|also on the agenda)/iu;
+/**
+ * Where the text says plainly that nothing is thrown out, the words of propellant that count are those of
+ * the claim's own sentences: not of a comparison ("how does that compare with an ion engine?"), a question,
+ * or an agenda line ("Next week: Hall thruster erosion").
+ */
+function onlyTheClaim(text: string, words: string): string {
+  if (!EXPLICIT_NO_PROPELLANT_RE.test(text)) return words;
+  return words
+    .split(/(?<=[.!?])\s+|\n/u)
+    // (A sentence in the claimant's own voice is never an aside: "Unlike those drives, our thruster uses xenon".)
+    .filter((sentence) => !ASIDE_SENTENCE_RE.test(sentence) || OWN_VOICE_RE.test(sentence))
+    .join(' ');
+}
+
 export function readSignals(ctx: PlanContext): Signals {
   const text = ctx.text ?? '';
   const classes = ctx.classes ?? [];
@@ -74,7 +95,7 @@ export function readSignals(ctx: PlanContext): Signals {
     // An air-pusher (a lifter, an ion-wind craft) said to work in vacuum has no air to push: its words no
     // longer count as propellant.
     propellant: PROPELLANT_RE.test(
-      (vacuumClaimed(text) ? withoutFree.replace(AIR_PUSHER_RE, ' ') : withoutFree).replace(PHOTON_ROCKET_RE.test(text) ? BARE_ROCKET_RE : /$^/u, ' '),
+      onlyTheClaim(text, (vacuumClaimed(text) ? withoutFree.replace(AIR_PUSHER_RE, ' ') : withoutFree).replace(PHOTON_ROCKET_RE.test(text) ? BARE_ROCKET_RE : /$^/u, ' ')),
     ),
     heatEngine: HEAT_ENGINE_RE.test(text),
     heatPump: HEAT_PUMP_RE.test(notDenied),
