@@ -103,16 +103,25 @@ describe('roles', () => {
     expect(figures.map((f) => f.role)).toEqual(['in', 'out', 'in', 'out']);
   });
 
-  test('thrust, mass, speed, current and efficiency have no role', () => {
+  test('thrust, speed, current and efficiency have no role; a mass no check takes is set aside', () => {
     const text = 'It draws 2 A, produces 3 mN, weighs 4 kg, moves at 5 m/s and produces 45% efficiency (invented test data).';
     const figures = extractFigures(text);
     expectWellFormed(text, figures);
     expect(figures.map((f) => [f.kind, f.role])).toEqual([
       ['current', null],
       ['thrust', null],
-      ['mass', null],
+      ['mass', 'aside'],
       ['speed', null],
       ['efficiency', null],
     ]);
+  });
+
+  test('a mass keeps its part where a check takes it: a rocket, or the metal of an excess-heat cell', () => {
+    const rocket = 'The 40 kg probe carries 12 kg of propellant and fires at an Isp of 220 s (invented test data).';
+    expect(extractFigures(rocket).filter((f) => f.kind === 'mass').map((f) => f.role)).toEqual(['wet', 'propellant', 'dry']);
+    const cell = 'A cell with 2 g of palladium loaded with deuterium gave 40 kJ of heat for 25 kJ of electricity (invented test data).';
+    expect(extractFigures(cell).filter((f) => f.kind === 'mass').map((f) => f.role)).toEqual([null]);
+    const pump = 'The outdoor unit weighs 96 kg; the heat pump gives a COP of 3.1 between 2 °C and 45 °C (invented test data).';
+    expect(extractFigures(pump).filter((f) => f.kind === 'mass').map((f) => f.role)).toEqual(['aside']);
   });
 });

@@ -18,6 +18,8 @@ const PROPELLANT_FRACTION_RE =
 export const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|lander|probe|satellite|CubeSat|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines? (?:fire|burn))(?!\p{L})/iu;
 
 /** Words that make a sentence's mass the craft's: the craft itself, its propellant, its engine. */
+/** A metal a text about excess heat names beside a mass (plan/other-checks.ts takes that mass). */
+const METAL_MASS_RE = /(?<!\p{L})(?:palladium|nickel|titanium|lithium|metal|powder|hydride|deuteride)(?!\p{L})/iu;
 const CRAFT_RE =
   /(?<!\p{L})(?:rockets?|propellants?|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|craft|landers?|probes?|satellites?|CubeSats?|smallsats?|microsat\w*|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines?|vehicles?|tugs?|stacks?|ships?|modules?|capsules?|boosters?|orbiters?|missiles?|payloads?|tanks?|fuel\w*|oxidi[sz]ers?|xenon|krypton|hydrazine|kerosene|methane|hydrogen|oxygen|nitrogen|argon|exhaust|wet|dry|m[01f]|masses)(?!\p{L})/iu;
 
@@ -223,7 +225,13 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   const rocket =
     drafts.some((d) => d.kind === 'specific-impulse' || (d.kind === 'speed' && (d.role === 'exhaust' || d.role === 'delta-v')) || (d.kind === 'mass' && d.role === 'propellant')) ||
     (masses.some((m) => m.role !== 'aside') && ROCKET_RE.test(text));
-  if (!rocket) return;
+  if (!rocket) {
+    // No rocket in the text: no check uses a mass the words give no part in ("the outdoor unit weighs
+    // 96 kg", "a 2 kg test article"), so it is kept aside — except a mass of metal in a text about heat
+    // from a loaded metal, which the nuclear-signature check takes.
+    for (const m of masses) if (m.role === null && !METAL_MASS_RE.test(sentenceAround(text, m.start, m.end))) m.role = 'aside';
+    return;
+  }
   // "burns from 25 t to 9 t", "goes from 100 t down to 33 t": the mass at the start and at the end.
   for (let i = 0; i + 1 < masses.length; i++) {
     const [a, b] = [masses[i], masses[i + 1]];
