@@ -129,6 +129,22 @@ describe('two sides of a heat engine', () => {
     expect(verdicts(text).checks.filter((c) => c.check === 'carnot')).toEqual([]);
   });
 
+  test('temperatures in a text of some other working, with no heat moved, are its surroundings: aside', () => {
+    const box = read('The power box drew 150 W for 72 hours and delivered 14 kWh. The room was at 19 °C throughout (invented test data).');
+    expect(temps(box)).toEqual([['aside', 292.15]]);
+    const board = read('The converter took 240 W and gave 226 W; the board reached 47 °C in still air at 23 °C (invented test data).');
+    expect(temps(board)).toEqual([
+      ['aside', 320.15],
+      ['aside', 296.15],
+    ]);
+    // (Heat moved keeps the sides, though no machine is named: a source and a sink.)
+    const pump = read('Heat output 1.5 kW from a 400 W compressor; source 5 °C, sink 35 °C (invented test data).');
+    expect(temps(pump)).toEqual([
+      ['cold', 278.15],
+      ['hot', 308.15],
+    ]);
+  });
+
   test('a COP set off from its value by a clause between commas', () => {
     const f = read('Its cooling COP, measured per §7 of the test protocol, is 2.8.');
     expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'cooling', si: 2.8 });

@@ -101,6 +101,9 @@ const LONE_TEMPERATURE_USED_RE = new RegExp(
   'iu',
 );
 
+/** Words of heat moved or delivered ("heat output", "source 5 °C, sink 35 °C", "a compressor"): a machine's sides may be meant. */
+const HEAT_WORDS_RE = /(?<!\p{L})(?:heat\w*|warmth|compressors?|sources?|sinks?|supply (?:air|water)|flow temperature|BTU\w*|COP|furnaces?|boilers?|kilns?|ovens?)(?!\p{L})/iu;
+
 export function relateTemperatures(text: string, drafts: Draft[]): void {
   // The surroundings said apart from the machine: when one sentence gives the machine's two sides
   // (two temperatures, or one and a difference), a temperature alone in another sentence, with no
@@ -173,6 +176,22 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
     !COOLING_MACHINE_RE.test(text)
   ) {
     thermal[0].role = 'aside';
+  }
+  // Nor any, in a text that names no heat engine, heat pump or cooler, speaks of no heat moved, and
+  // gives no efficiency, COP or difference, but figures of some other working ("drew 150 W … the room
+  // was at 19 °C", "the board reached 47 °C in still air at 23 °C"): a side read from the words around
+  // them serves no check, and is the surroundings of that working. (A text of temperatures alone keeps
+  // its sides: the reader may add the efficiency.)
+  if (
+    thermal.length > 0 &&
+    drafts.some((d) => d.kind !== 'temperature') &&
+    !drafts.some((d) => d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop') &&
+    !LONE_TEMPERATURE_USED_RE.test(text) &&
+    !HEAT_PUMP_RE.test(text) &&
+    !COOLING_MACHINE_RE.test(text) &&
+    !HEAT_WORDS_RE.test(text)
+  ) {
+    for (const t of thermal) t.role = 'aside';
   }
 
   // A heat pump's source is its cold side ("source side sits at 10 °C"), not an engine's hot source.
