@@ -9,7 +9,7 @@ import { insertAfter, sameClause, sentenceOf, siOf, typedSi, upperSiOf, type Dra
 
 /** Words of a time that is not how long the device ran. */
 const NOT_A_RUN_RE =
-  /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline)(?!\p{L})/iu;
+  /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline|install\w*|integrat\w*|spent|calibrat\w*|settl\w*|drills?|swings?|period)(?!\p{L})/iu;
 
 /** Just before a charging time: "charges to 80 % in", "recharged in", "a full charge takes", "charging time of". */
 export const CHARGING_TIME_RE =
@@ -85,5 +85,10 @@ export function relateDurations(text: string, drafts: Draft[]): void {
         derived: `energy = power × time (${formatQuantity(w, 'W')} × ${formatQuantity(tRun, 's')})`,
       });
     }
+  }
+  // With no power or energy in the text, no check takes a time ("the drill took 6 minutes", "the
+  // pendulum swings once every 2 seconds"): it is set aside.
+  if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== 'aside')) {
+    for (const d of drafts) if (d.kind === 'duration' && d.role === null) d.role = 'aside';
   }
 }

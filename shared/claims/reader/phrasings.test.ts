@@ -176,6 +176,11 @@ describe('more ways claims are written (issue 11)', () => {
     const build = read('Over a 5-hour shift the pump motor drew 2.2 kW and delivered 1.8 kW. The prototype took 18 months to build.');
     expect(build.filter((x) => x.kind === 'duration').map((x) => x.role)).toEqual([null, 'aside']);
     expect(build.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([['in', 2200 * 5 * 3600], ['out', 1800 * 5 * 3600]]);
+    // With no power or energy anywhere, no check takes a time; nor one of installing or calibrating.
+    const clock = read('The clock has run since 1921; the pendulum swings once every 2 seconds and a full wind lasts 8 days.');
+    expect(clock.filter((x) => x.kind === 'duration').map((x) => x.role)).toEqual(['aside', 'aside']);
+    const fitted = read('The heater drew 1.2 kW for 3 hours and gave 1.1 kW of heat. Installation took 2 days.');
+    expect(fitted.filter((x) => x.kind === 'duration').map((x) => x.role)).toEqual([null, 'aside']);
   });
 
   test('gas flows of electrolysers: litres per minute or hour, millilitres per minute', () => {
