@@ -183,6 +183,18 @@ describe('more ways claims are written (issue 11)', () => {
     expect(fitted.filter((x) => x.kind === 'duration').map((x) => x.role)).toEqual([null, 'aside']);
   });
 
+  test("a force of the instrument or of a reckoning is set aside, the device's thrust kept", () => {
+    const f = read('The sealed unit gave 48 uN from 40 W of RF input; the balance resolves 2 uN and was calibrated against a 50 mN reference force.');
+    expect(f.filter((x) => x.kind === 'thrust').map((x) => [x.role, x.si])).toEqual([
+      [null, expect.closeTo(48e-6, 12)],
+      ['aside', expect.closeTo(2e-6, 12)],
+      ['aside', expect.closeTo(0.05, 12)],
+    ]);
+    // (The bound worked out beside the claim is no thrust of the device either: P/c = 800 W / c ≈ 2.7 µN.)
+    const g = read('The cavity gave 1.1 mN on 800 W of RF; a perfect photon rocket would give only about 2.7 µN for that power.');
+    expect(g.filter((x) => x.kind === 'thrust').map((x) => x.role)).toEqual([null, 'aside']);
+  });
+
   test('gas flows of electrolysers: litres per minute or hour, millilitres per minute', () => {
     // 1 L = 10⁻³ m³ exactly (NIST SP 811 (2008), App. B.8, "liter"); 1 min = 60 s, 1 h = 3600 s.
     const f = read('It makes 3 L/min, then 90 litres per hour, and 250 mL/min of hydrogen at idle.').filter((x) => x.kind === 'gas-flow');

@@ -18,6 +18,10 @@ const PROPELLANT_FRACTION_RE =
 export const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|lander|probe|satellite|CubeSat|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines? (?:fire|burn))(?!\p{L})/iu;
 
 /** Words that make a sentence's mass the craft's: the craft itself, its propellant, its engine. */
+/** Just before a force of the instrument or of a reckoning: a balance's resolution, a calibration, a bound worked out. */
+const REFERENCE_FORCE_BEFORE_RE =
+  /(?<!\p{L})(?:resol(?:ves?|ution)(?: (?:is|of|was))?|sensitivity(?: (?:is|of|was))?|noise floor(?: (?:is|of|was))?|calibrat\w*(?: \w+){0,3}? (?:with|against|using|to)(?: an?| the)?(?: [\w-]+)?|reference(?: force| weight| mass)?(?: of)?|P ?\/ ?c(?: [\w ]{0,20}?)?(?:=|≈|of|is|would (?:allow|give)|allows|gives|predicts)|photon (?:pressure|rocket)[\w ]{0,30}?(?:predicts|would (?:allow|give)|allows|gives|limit of|bound of)|would give only(?: about)?)[^\S\n]*(?:about |roughly |around |only |just )?$/iu;
+
 /** A metal a text about excess heat names beside a mass (plan/other-checks.ts takes that mass). */
 const METAL_MASS_RE = /(?<!\p{L})(?:palladium|nickel|titanium|lithium|metal|powder|hydride|deuteride)(?!\p{L})/iu;
 const CRAFT_RE =
@@ -80,6 +84,14 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     else drafts.splice(at, 0, d);
   }
   const energyLike = (d: Draft) => d.kind === 'power' || d.kind === 'energy';
+  // A force of the instrument or of a reckoning, not the device's ("the balance resolves 0.05 mN",
+  // "calibrated against a 25 µN reference force", "P/c would allow 33 µN"): set aside, when the text
+  // gives another thrust or thrust per power.
+  for (const d of drafts) {
+    if ((d.kind !== 'thrust' && d.kind !== 'thrust-per-power') || d.role !== null) continue;
+    if (!REFERENCE_FORCE_BEFORE_RE.test(text.slice(Math.max(0, d.start - 60), d.start))) continue;
+    if (drafts.some((o) => o !== d && (o.kind === 'thrust' || o.kind === 'thrust-per-power') && !REFERENCE_FORCE_BEFORE_RE.test(text.slice(Math.max(0, o.start - 60), o.start)))) d.role = 'aside';
+  }
   // A thrust and a power: the power drives it.
   if (drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power')) {
     for (const d of drafts) if (d.kind === 'power' && d.role === null) d.role = 'in';
