@@ -64,6 +64,40 @@ describe('a clause that sets the claim against a reference', () => {
   });
 });
 
+describe("another device's figures, and figures proposed or asked about", () => {
+  const roles = (text: string) => read(text).map((f) => [f.kind, f.role]);
+  test('the device the claimed one replaced, its predecessor, one set against it', () => {
+    expect(roles('The pump motor draws 8.2 kW at full load; the 90 CV diesel it replaced used far more.')).toEqual([
+      ['power', 'in'],
+      ['power', 'aside'],
+    ]);
+    expect(roles('It gives 62 mN per kW on xenon, slightly better than the 58 mN per kW of its predecessor.')).toEqual([
+      ['thrust-per-power', null],
+      ['thrust-per-power', 'aside'],
+    ]);
+    expect(roles('The marine diesel is rated 38 % efficient, against about 25 % for a petrol outboard; its gas peaks near 1,900 K and the sea is at 290 K.')).toEqual([
+      ['efficiency', null],
+      ['efficiency', 'aside'],
+      ['temperature', 'hot'],
+      ['temperature', 'cold'],
+    ]);
+  });
+  test('a figure proposed for a later test, or asked about, beside one measured', () => {
+    expect(roles('Prof. Lindqvist proposed repeating it at 5 kW. The drive gave 2 mN at 1 kW.')).toEqual([
+      ['power', 'aside'],
+      ['thrust', null],
+      ['power', 'in'],
+    ]);
+    expect(roles('A reader asked whether it could do 10 km/s instead. The probe, at an Isp of 300 s, reaches 2 km/s.')).toEqual([
+      ['speed', 'aside'],
+      ['specific-impulse', null],
+      ['speed', 'delta-v'],
+    ]);
+    // (Alone, a proposed figure is still read: nothing else of its kind is given.)
+    expect(roles('We plan to build a 2 kW version next year.')).toEqual([['power', null]]);
+  });
+});
+
 describe('a gain stated per physical unit', () => {
   test('"for every kWh" is one kilowatt-hour in', () => {
     expect(brief(read('The Orrin box is said to return 1.2 kWh for every kWh it is fed.'))).toEqual([

@@ -27,7 +27,11 @@ export function relate(text: string, drafts: Draft[]): void {
     if (d.role === 'aside' || d.derived || compared.includes(d)) return false;
     const clause = clauseAround(text, d);
     // ("… if it … would", or an expert's "a heater turning 1 kW into 4 kW would break the first law".)
-    return (SUPPOSITION_RE.test(clause) && CONDITIONAL_RE.test(clause)) || SUPPOSED_OUTCOME_RE.test(clause) || OTHERS_CLAIM_RE.test(clause);
+    if ((SUPPOSITION_RE.test(clause) && CONDITIONAL_RE.test(clause)) || SUPPOSED_OUTCOME_RE.test(clause) || OTHERS_CLAIM_RE.test(clause)) return true;
+    // "Prof. L. proposed repeating it at 5 kW", "a reader asked whether it could do 10 km/s instead",
+    // "to build a 2 kW version": a figure proposed or asked about, not one measured or claimed.
+    const before = text.slice(windowStart(text, d.start, 0, 80), d.start);
+    return PROPOSED_BEFORE_RE.test(before) || ASKED_BEFORE_RE.test(before);
   });
   for (const d of supposed) {
     if (drafts.some((o) => o !== d && o.kind === d.kind && !o.derived && !supposed.includes(o) && !compared.includes(o))) compared.push(d);
@@ -140,6 +144,23 @@ const SUPPOSITION_RE = /(?<!\p{L})(?:if|even if|were it|suppose|supposing|assumi
 const SUPPOSED_OUTCOME_RE = /(?<!\p{L})(?:would|could only)[^\S\n]+(?:(?:clearly|plainly|certainly|then|also)[^\S\n]+)?(?:break|violate|beat|exceed|contradict|defy|outdo|be impossible|need|require|mean)(?!\p{L})/iu;
 /** Others' claims beside the one weighed: "Competitors claim their boxes give …", "rival makers advertise …". */
 const OTHERS_CLAIM_RE = /(?<!\p{L})(?:competitors?|rivals?|rival (?:makers?|firms?|companies|designs?)|other (?:makers?|firms?|companies|inventors?|sellers?|designs?)|others)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:claim|claims|advertise|advertises|promise|promises|say|says|quote|quotes|sell|sells)(?!\p{L})/iu;
+/** Just before a figure proposed, planned or suggested for a later test or build. */
+const PROPOSED_BEFORE_RE =
+  /(?<!\p{L})(?:propos\w*|suggest\w*|offer\w*|plans?|planned|planning|intends?|hopes?|wants?|raising [^.;!?\n]{0,40}?)[^\S\n]+(?:to[^\S\n]+)?(?:repeat\w*|build\w*|test\w*|try\w*|tried|run\w*|scal\w*|mak\w*|develop\w*)(?:[^\S\n]+(?:it|them|the[^\S\n]+[\p{L}-]+))?(?:[^\S\n]+up)?(?:[^\S\n]+(?:at|with|to|on))?(?:[^\S\n]+(?:an?|the))?[^\S\n]*$/iu;
+/** Just before a figure asked about: "asked whether 3 km/s … was possible", "whether a reduced power of 50 W had been tried". */
+const ASKED_BEFORE_RE = /(?<!\p{L})(?:asked|asks|asking|wondered|wonders|wanted to know)[^\S\n]+(?:(?:us|them|him|her|me|the \p{L}+)[^\S\n]+)?(?:whether|if)(?!\p{L})[^.;!?\n]{0,50}$/iu;
+/** Right after a figure: the device it belongs to was replaced by the one claimed ("the 9 kW oil boiler it replaced"). */
+const REPLACED_AFTER_RE =
+  /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,3}?(?:(?:that|which)[^\S\n]+)?(?:it|they|the (?:new|present) [\p{L}-]+)[^\S\n]+(?:replaced|replaces|will replace|is (?:meant|designed|intended|due) to replace|is to replace|succeeds|supersedes|superseded)(?!\p{L})/iu;
+/** Right after a figure: "of its predecessor", "of the model it succeeds". */
+const PREDECESSOR_AFTER_RE = /^[^\S\n]*(?:of|for|from)[^\S\n]+(?:its|their|the)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:predecessors?|forerunners?)(?!\p{L})/iu;
+/** Just before a figure set against the claim's: "next to the", "against about", "than the", "short of the". */
+const SET_AGAINST_BEFORE_RE = /(?<!\p{L})(?:next to|against|than|beside|alongside|short of|unlike)(?:[^\S\n]+(?:the|about|roughly|some|around|nearly|only|just))*[^\S\n]*$/iu;
+/** Right after such a figure: another device's ("for a petrol outboard", "of a Hall thruster", "for the production engine"). */
+const ANOTHER_DEVICE_AFTER_RE = new RegExp(
+  `^[^\\S\\n]*(?:for|of|from|in)[^\\S\\n]+(?:a|an|the|any)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+){0,2}?(?:${'(?:engines?|motors?|outboards?|thrusters?|pumps?|boilers?|turbines?|rockets?|cells?|panels?|lamps?|bulbs?|batter(?:y|ies)|generators?|heaters?|fridges?|cars?|vehicles?|aircraft|drones?|chargers?|amplifiers?|converters?|lasers?)'})(?!\\p{L})`,
+  'iu',
+);
 /** A conditional outcome: "would", "could", "might". */
 const CONDITIONAL_RE = /(?<!\p{L})(?:would|could|might)(?!\p{L})/iu;
 
@@ -163,6 +184,11 @@ function saidInComparison(text: string, d: Draft): boolean {
   // "The claimed 45 % efficiency was corrected to 4.5 %": a figure superseded by the one after it.
   if (SUPERSEDED_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
   if (OTHERS_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
+  // "the 9 kW oil boiler it replaced", "the 58 mN per kW of its predecessor", "next to the 50 mN/kW of
+  // a Hall thruster", "against 38 % for the production engine": another device's figure.
+  const after = text.slice(d.end, d.end + 80);
+  if (REPLACED_AFTER_RE.test(after) || PREDECESSOR_AFTER_RE.test(after)) return true;
+  if (SET_AGAINST_BEFORE_RE.test(text.slice(windowStart(text, d.start, 0, 50), d.start)) && ANOTHER_DEVICE_AFTER_RE.test(after)) return true;
   if (inContrastedClause(text, d)) return true;
   const clauseBefore = text.slice(windowStart(text, d.start, 0, 120), d.start);
   // "as much light as a 60 W bulb", "replacing a 6 kW heater", "a 60 W-equivalent lamp": what the
