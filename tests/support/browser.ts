@@ -179,6 +179,22 @@ export async function startHarness(): Promise<Harness> {
 
 export const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]`);
 
+/**
+ * Takes a page that already shows the app to another of its addresses (path and query) the way the
+ * app's router follows the browser's own address changes: the address is set, then the popstate event
+ * that going back or forward sends. The router reads the path and query as it does on a fresh load,
+ * but the app is not loaded and started again (about a tenth of a page load). For tests that visit many
+ * addresses; what a fresh load shows (the first paint, a permalink opened anew) still needs `goto`.
+ * Wait for the new screen afterwards, as after a `goto`.
+ */
+export async function goInApp(page: Page, url: string): Promise<void> {
+  if (!/^https?:/.test(page.url())) throw new Error(`goInApp needs a page that shows the app, not ${page.url()}`);
+  await page.evaluate((to) => {
+    history.pushState(null, '', to);
+    dispatchEvent(new PopStateEvent('popstate', { state: null }));
+  }, url);
+}
+
 /** Signs in through the sign-in screen (the demo password unless given) and waits for the account screen. */
 export async function signInThroughForm(page: Page, base: string, email: string, password = 'counterweight-demo-2026'): Promise<void> {
   await page.goto(`${base}/sign-in`);
