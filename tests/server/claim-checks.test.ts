@@ -253,7 +253,7 @@ it('cites with the formatter the entry pages use', async () => {
 
 // Entries led to by a claim's own finding (server/search/claim-findings.ts): a claim that says little in
 // words and everything in figures gets the entry of the class its finding points to, saying why; a claim
-// whose words match entries keeps them; a lawful claim is led to no entry.
+// whose words match entries keeps them (the one of the finding's class lifted); a lawful claim is led to no entry.
 const check = async (text: string): Promise<ClaimCheckResult> => {
   const res = await request(h.app).post('/api/claim-checks').send({ text });
   expect(res.status).toBe(200);
@@ -277,6 +277,18 @@ describe('entries a finding leads to', () => {
     expect(body.checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
     expect(body.matches.map((m) => m.slug)).toContain('over-unity-circuit');
     expect(body.matches.find((m) => m.slug === 'over-unity-circuit')?.finding).toMatch(/more out than in/);
+  });
+
+  it('among matched entries of one family, the one of the class the finding points to is lifted', async () => {
+    // 0.5 A × 12 V = 6 W in < 13.8 V × 0.9 A = 12.42 W out: the first law breaks. The words match the
+    // self-charging loops' entry (same family) about as well as the over-unity circuits'; the finding's
+    // class, the over-unity circuits, comes first.
+    const body = await check('The pulse motor is fed 0.5 A at 12 V, yet its generator coil charges a second battery at 13.8 V and 0.9 A.');
+    expect(body.checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+    expect(body.matches[0].slug).toBe('over-unity-circuit');
+    // A vehicle's words still decide for the vehicle's entry.
+    const van = await check('The van charges itself as it drives: its wheel generator puts 3 kW back into the battery that feeds the 2 kW motor.');
+    expect(van.matches[0].slug).toBe('self-charging-vehicle');
   });
 
   it('words that match an entry decide; a lawful claim is led to no entry', async () => {
