@@ -8,7 +8,7 @@
  */
 import path from 'node:path';
 import type { Page } from 'playwright-core';
-import { byTestId, screenshotDir as shots, settled, signInQuickly, signInThroughForm, startHarness, type Harness } from '../support/browser';
+import { byTestId, goInApp, networkQuiet, screenshotDir as shots, settled, signInQuickly, startHarness, submitSignInForm, type Harness } from '../support/browser';
 import { until } from '../support/poll';
 
 jest.setTimeout(240_000);
@@ -151,12 +151,16 @@ describe.each([
     await byTestId(page, 'screen-sign-in').waitFor();
     await settled(page);
     expect(await smallTargets(page, targets)).toEqual([]);
-    await signInThroughForm(page, h.base, admin, password);
+    // Signed in through the form just measured, then on to the admin screen, in the same page (no load
+    // between screens): each screen is measured once its requests are done, as after a load.
+    await submitSignInForm(page, admin, password);
+    await networkQuiet(page);
     await settled(page);
     expect(await smallTargets(page, targets)).toEqual([]);
-    await page.goto(`${h.base}/admin`);
+    await goInApp(page, `${h.base}/admin`);
     await byTestId(page, 'screen-admin').waitFor();
     await byTestId(page, `user-row-${contributor}`).waitFor();
+    await networkQuiet(page);
     await settled(page);
     expect(await smallTargets(page, targets)).toEqual([]);
     await shot(page, 'targets-admin', width, 'light', true);
@@ -256,17 +260,20 @@ describe.each([
     await page.close();
   });
 
-  // Titles do not depend on the width: checked once, on the wide screen (each visit is a page load).
+  // Titles do not depend on the width: checked once, on the wide screen. A load opens the first route
+  // and the first signed in; the others are reached within the app, where each must set its own title
+  // over the one before (the server's page shell sets none for them).
   if (!phone) it('gives each route its own browser title, and a description for link previews', async () => {
     const page = await open(width);
     const titleIs = (want: string) => until(`the title is “${want}”`, async () => (await page.title()) === want);
-    /** Opens a path, waits for its screen to render, then for the title it sets. */
-    const visit = async (pathname: string, screen: string, want: string) => {
-      await page.goto(`${h.base}${pathname}`);
+    /** Opens a path (loading the page, or within the app), waits for its screen to render, then for the title it sets. */
+    const visit = async (pathname: string, screen: string, want: string, how: 'load' | 'in-app' = 'in-app') => {
+      if (how === 'load') await page.goto(`${h.base}${pathname}`);
+      else await goInApp(page, `${h.base}${pathname}`);
       await byTestId(page, screen).waitFor();
       await titleIs(want);
     };
-    await visit('/check', 'screen-check', 'Claim check — Counterweight');
+    await visit('/check', 'screen-check', 'Claim check — Counterweight', 'load');
     const description = await page.locator('meta[name="description"]').evaluateAll((els) => els.map((el) => el.getAttribute('content')));
     expect(description).toHaveLength(1);
     expect(description[0]).toMatch(/claim/i);
@@ -275,9 +282,10 @@ describe.each([
     await visit('/sign-up', 'screen-sign-up', 'Create an account — Counterweight');
     await visit('/no-such-page', 'screen-not-found', 'Page not found — Counterweight');
     await signInQuickly(page, h.base, admin, password);
-    await visit('/account', 'screen-account', 'Account — Counterweight');
+    await visit('/account', 'screen-account', 'Account — Counterweight', 'load');
     await visit('/admin/audit', 'screen-audit', 'Audit log — Admin — Counterweight');
     await visit('/queue', 'screen-queue', 'Queue — Counterweight');
+    expect(page.problems).toEqual([]);
     await page.close();
   });
 });
@@ -306,6 +314,9 @@ describe('the four message styles', () => {
   ] as const)('are told apart by mark, word, edge and colour, at %i px in the %s theme', async (width, scheme) => {
     const page = await open(width, scheme);
     const seen: Record<string, Awaited<ReturnType<typeof lookOf>>> = {};
+    // Signed in before the one page load, so that the app goes from screen to screen without another
+    // (a notice looks the same whoever reads it).
+    await signInQuickly(page, h.base, contributor, password);
 
     // Error: a load that fails.
     await page.route('**/api/taxonomy**', (route) => route.abort('connectionrefused'));
@@ -316,16 +327,16 @@ describe('the four message styles', () => {
     await page.unroute('**/api/taxonomy**');
 
     // Empty and warning, before anything is sent: the contributor's own list, and the caution on the form.
-    await signInQuickly(page, h.base, contributor, password);
-    await page.goto(`${h.base}/account`);
+    await goInApp(page, `${h.base}/account`);
     await byTestId(page, 'screen-account').waitFor();
+    await networkQuiet(page);
     await settled(page);
     const empty = byTestId(page, 'my-submissions-empty');
     if (await empty.count()) {
       seen.empty = await lookOf(page, 'my-submissions-empty');
       await shot(page, 'empty', width, scheme, true);
     }
-    await page.goto(`${h.base}/report`);
+    await goInApp(page, `${h.base}/report`);
     await byTestId(page, 'sighting-caution').waitFor();
     seen.warning = await lookOf(page, 'sighting-caution');
     await shot(page, 'warning', width, scheme);

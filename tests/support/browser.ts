@@ -150,6 +150,7 @@ export async function startHarness(): Promise<Harness> {
     const p = page as Page & { problems: string[] };
     p.problems = [];
     p.on('pageerror', (e) => p.problems.push(e.message));
+    trackRequests(p);
     return p;
   };
   return {
@@ -198,6 +199,11 @@ export async function goInApp(page: Page, url: string): Promise<void> {
 /** Signs in through the sign-in screen (the demo password unless given) and waits for the account screen. */
 export async function signInThroughForm(page: Page, base: string, email: string, password = 'counterweight-demo-2026'): Promise<void> {
   await page.goto(`${base}/sign-in`);
+  await submitSignInForm(page, email, password);
+}
+
+/** `signInThroughForm` on a page that already shows the sign-in screen (no page load): fills the form in, sends it, waits for the account screen. */
+export async function submitSignInForm(page: Page, email: string, password = 'counterweight-demo-2026'): Promise<void> {
   await byTestId(page, 'screen-sign-in').waitFor();
   await byTestId(page, 'field-email').fill(email);
   await byTestId(page, 'field-password').fill(password);
@@ -236,6 +242,41 @@ export async function settled(page: Page): Promise<void> {
   })()`);
   // Anything the first round of tasks started (a fetch from a handler) has also finished.
   await page.waitForLoadState('networkidle');
+}
+
+/** Per page of the harness: requests in flight, and when the last one started or ended (for `networkQuiet`). */
+const traffic = new WeakMap<Page, { inFlight: number; since: number }>();
+function trackRequests(page: Page): void {
+  const t = { inFlight: 0, since: Date.now() };
+  traffic.set(page, t);
+  page.on('request', () => {
+    t.inFlight += 1;
+    t.since = Date.now();
+  });
+  const ended = () => {
+    t.inFlight = Math.max(0, t.inFlight - 1);
+    t.since = Date.now();
+  };
+  page.on('requestfinished', ended);
+  page.on('requestfailed', ended);
+}
+
+/**
+ * Waits until no request of the page has been in flight for 500 ms: what `waitForLoadState('networkidle')`
+ * waits for after a load, but also after a screen change within the page (Playwright reports network
+ * idle once per document, so `settled` alone does not wait for the requests of a screen reached by
+ * `goInApp` or a click). For pages of the harness (`page`, `open`).
+ */
+export async function networkQuiet(page: Page, timeoutMs = 15_000): Promise<void> {
+  const t = traffic.get(page);
+  if (!t) throw new Error('networkQuiet needs a page of the harness');
+  // Quiet for 500 ms from the call on at least: a request the screen is about to start is seen.
+  const start = Date.now();
+  const deadline = start + timeoutMs;
+  while (t.inFlight > 0 || Date.now() - Math.max(t.since, start) < 500) {
+    if (Date.now() > deadline) throw new Error(`the page still had ${t.inFlight} request(s) in flight after ${timeoutMs} ms`);
+    await new Promise((r) => setTimeout(r, 50));
+  }
 }
 
 /**
