@@ -317,6 +317,12 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'The claimed 45 % efficiency was corrected to 4.5 % in the erratum; the thermoelectric module works between 200 °C and 30 °C.',
     // A critic's supposition beside the measured figures (P/c for 900 W = 3.0 µN ≥ 2.9 µN measured).
     "Even if all 900 W left the device as a beam, the recoil would be about 3 µN; the team's laser thruster, measured at 2.9 µN on 900 W, is consistent with that.",
+    // A thrust per power said with the quantity between (3.1 µN/kW = 3.1e-9 N/W < 1/c = 3.34e-9 N/W).
+    'We measured 3.1 micronewtons of thrust per kilowatt of electrical power; our small satellite gives the laser 20 W.',
+    // A store's rating "up to 5 kW at once", and a week of a supposition, are no run of 5 kW for a week.
+    "The battery gives back 0.91 units for every unit it takes. It stores 13.5 kWh and can deliver up to 5 kW at once. If the panels are covered in snow for a week it will be empty.",
+    // Another machine's power beside a thrust given with none: the photon bound needs the drive's own.
+    "The sealed cone produced 40 mN of thrust with no propellant; its builder will not say the power. The exhibition also includes a ship's diesel rated at 400 hp.",
     // Light from outside reflected by the craft (up to 2P/c), and a galaxy's recession with the expansion of space.
     'A 1 kW laser pointed at a mirror on the craft pushes it with 6.7 µN (twice P/c, because the light bounces back).',
     'The galaxy recedes at 1.5 c because space itself expands; nothing moves through space faster than light.',

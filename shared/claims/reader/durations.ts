@@ -11,6 +11,9 @@ import { insertAfter, sameClause, sentenceOf, siOf, typedSi, upperSiOf, type Dra
 const NOT_A_RUN_RE =
   /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline|install\w*|integrat\w*|spent|calibrat\w*|settl\w*|drills?|swings?|period)(?!\p{L})/iu;
 
+/** A sentence of a supposition: "if …", "unless …", "should it …", "would", "could". */
+const SUPPOSED_TIME_RE = /(?<!\p{L})(?:if|unless|should|would|could|were)(?!\p{L})/iu;
+
 /** Just before a charging time: "charges to 80 % in", "recharged in", "a full charge takes", "charging time of". */
 export const CHARGING_TIME_RE =
   /(?<!\p{L})(?:(?:re)?charg(?:es|ed|ing|e)|fills?[^\S\n]+up|tops?[^\S\n]+up|topped[^\S\n]+up)(?!\p{L})[^.;!?\n]{0,35}?(?:in|takes|took|of|within|under|about|around|just|only)?[^\S\n]*(?:(?:about|around|roughly|just|only|under|less than)[^\S\n]+)?$/iu;
@@ -26,7 +29,8 @@ export function relateDurations(text: string, drafts: Draft[]): void {
   for (const d of drafts) {
     if (d.kind !== 'duration' || d.role !== null) continue;
     const sentence = sentenceAround(text, d.start, d.end);
-    if (NOT_A_RUN_RE.test(sentence) && !drafts.some((e) => (e.kind === 'power' || e.kind === 'energy') && sentenceOf(text, e) === sentenceOf(text, d))) d.role = 'aside';
+    // (Nor a time of a supposition: "if the panels are covered in snow for a week it will be empty".)
+    if ((NOT_A_RUN_RE.test(sentence) || SUPPOSED_TIME_RE.test(sentence)) && !drafts.some((e) => (e.kind === 'power' || e.kind === 'energy') && sentenceOf(text, e) === sentenceOf(text, d))) d.role = 'aside';
   }
 
   // "30 kWh a day … over a fortnight": an energy per day, where the text states a longer run, is a
@@ -67,6 +71,9 @@ export function relateDurations(text: string, drafts: Draft[]): void {
       // "… a 150 kW motor, and charges to 80 % in 40 minutes": a charging time is no run of what the
       // device puts out.
       if (p.role === 'out' && isChargingTime(text, duration)) continue;
+      // "can deliver up to 5 kW at once": the most it can give, not what it gave over the run (the
+      // least output, the end favourable to a claim, is not stated).
+      if (p.role === 'out' && (p.hedge === 'up-to' || p.hedge === 'at-most' || p.hedge === 'less-than')) continue;
       const tRun = siOf(duration);
       if (!tRun) continue;
       const w = siOf(p);

@@ -9,7 +9,7 @@ import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import type { FigureRole } from '../types';
 import { sentenceAround } from './context';
-import { siOf, typedSi, type Draft } from './draft';
+import { sentenceOf, siOf, typedSi, type Draft } from './draft';
 
 /** A propellant mass fraction: "propellant is 90 % of the mass", "90 % propellant by mass", "a propellant fraction of 85 %". */
 const PROPELLANT_FRACTION_RE =
@@ -22,6 +22,12 @@ export const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|
 const REFERENCE_FORCE_BEFORE_RE =
   /(?<!\p{L})(?:resol(?:ves?|ution)(?: (?:is|of|was))?|sensitivity(?: (?:is|of|was))?|noise floor(?: (?:is|of|was))?|calibrat\w*(?: \w+){0,3}? (?:with|against|using|to)(?: an?| the)?(?: [\w-]+)?|reference(?: force| weight| mass)?(?: of)?|P ?\/ ?c(?: [\w ]{0,20}?)?(?:=|≈|of|is|would (?:allow|give)|allows|gives|predicts)|photon (?:pressure|rocket)[\w ]{0,30}?(?:predicts|would (?:allow|give)|allows|gives|limit of|bound of)|would give only(?: about)?)[^\S\n]*(?:about |roughly |around |only |just )?$/iu;
 
+/** Machines that are not a drive: a power said of one is not what drives a thrust beside it. */
+const ANOTHER_MACHINE_RE =
+  /(?<!\p{L})(?:diesels?|petrol|gasoline|locomotives?|tractors?|cars?|trucks?|lorr(?:y|ies)|boilers?|furnaces?|kettles?|heaters?|ovens?|hair ?dryers?|vacuum cleaners?|lawn ?mowers?|motorbikes?|motorcycles?|outboards?|ship's|ships?|ferr(?:y|ies)|generating sets?|gensets?|wind turbines?|power stations?|power plants?)(?!\p{L})/iu;
+/** Words of what feeds a drive: its input, its microwave or light source. */
+const DRIVE_INPUT_RE =
+  /(?<!\p{L})(?:drives?|thrusters?|cavit(?:y|ies)|cones?|frust(?:um|a)|magnetrons?|microwaves?|RF|lasers?|beams?|inputs?|fed|feeds?|draws?|drawn|drawing|supplied|supply|consum\w*|takes|taking|powered|powering)(?!\p{L})/iu;
 /** A metal a text about excess heat names beside a mass (plan/other-checks.ts takes that mass). */
 const METAL_MASS_RE = /(?<!\p{L})(?:palladium|nickel|titanium|lithium|metal|powder|hydride|deuteride)(?!\p{L})/iu;
 const CRAFT_RE =
@@ -94,6 +100,15 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   }
   // A thrust and a power: the power drives it.
   if (drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power')) {
+    // (Not a power said of another machine in a sentence of its own, with no thrust and no word of a
+    // drive's input: "the exhibition also includes a ship's diesel rated at 400 hp".)
+    for (const d of drafts) {
+      if (d.kind !== 'power' || d.role !== null) continue;
+      const k = sentenceOf(text, d);
+      if (drafts.some((o) => (o.kind === 'thrust' || o.kind === 'thrust-per-power') && sentenceOf(text, o) === k)) continue;
+      const sentence = sentenceAround(text, d.start, d.end);
+      if (ANOTHER_MACHINE_RE.test(sentence) && !DRIVE_INPUT_RE.test(sentence)) d.role = 'aside';
+    }
     for (const d of drafts) if (d.kind === 'power' && d.role === null) d.role = 'in';
     // "emits 8 kW as a collimated beam": what a thruster puts out is what drives it.
     if (!drafts.some((d) => d.kind === 'power' && d.role === 'in')) for (const d of drafts) if (d.kind === 'power' && d.role === 'out') d.role = 'in';

@@ -42,7 +42,8 @@ const WORD_RE = new RegExp(`${SEP}(${wordAlts})(?![\\p{L}\\p{N}_])`, 'iuy');
 const PERCENT_RE = /[^\S\n]{0,2}(?:%|per[ -]?cent(?!\p{L})|pct\.?(?!\p{L}))/iuy;
 /** A compound after a unit: "/kW", " per kilowatt", "·m", "/m²". */
 const COMPOUND_RE = /[^\S\n]*(?:\/|per(?!\p{L})|·|⋅|-(?=[^\S\n]*\p{L}\p{L}?\b))[^\S\n]*/iuy;
-const FOR_EVERY_RE = /[^\S\n]+for[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?/iuy;
+// (Also "3.1 micronewtons of thrust per kilowatt": the quantity named between the unit and "per".)
+const FOR_EVERY_RE = /[^\S\n]+(?:(?:of[^\S\n]+(?:thrust|force|push|lift)[^\S\n]+(?:per|for[^\S\n]+(?:every|each)))|for[^\S\n]+(?:every|each))[^\S\n]+(?:single[^\S\n]+)?/iuy;
 const COMPOUND_AFTER_RE = /[^\S\n]*(?:[/·⋅][^\S\n]*[\p{L}\p{N}]|per[^\S\n]+\p{L})/iuy;
 /** "1.3c", "0.5 c": a multiple of the speed of light (only attached to the number, or spaced before a non-letter). */
 const C_SUFFIX_RE = /(?:c|[^\S\n]c)(?![\p{L}\p{N}_°])/uy;
