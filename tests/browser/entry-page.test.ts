@@ -57,11 +57,69 @@ describe.each([
 ])('the entry page at %i px', (width, height) => {
   const wide = width >= 960;
 
-  it('has a table of contents, a Cite action, display math, Markdown cautions, related titles and its own title', async () => {
-    const { version } = await getJson<EntryJson>(`/api/entries/${SLUG}`);
-    const page = await h.open(width, height);
+  // One load of the entry at this size for both tests: the printout is checked first (it only reads
+  // the page), then the screen test puts the page back to screen media and does what a reader does.
+  let page: Page & { problems: string[] };
+  beforeAll(async () => {
+    page = await h.page(width, height);
     await page.goto(`${h.base}/entries/${SLUG}`);
     await byTestId(page, 'entry-section-whyItFails').waitFor();
+    await settled(page);
+  });
+  afterAll(() => page?.close());
+
+  it('prints the entry without navigation or input boxes, values as text, the permanent address and version at the end', async () => {
+    const { version } = await getJson<EntryJson>(`/api/entries/${SLUG}`);
+    const footer = byTestId(page, 'entry-print-footer');
+    // On screen the printout's footer is not shown.
+    expect(await footer.isVisible()).toBe(false);
+
+    await page.emulateMedia({ media: 'print' });
+    await settled(page);
+    for (const nav of ['nav-rail', 'nav-bar', 'entry-toc', 'entry-jump', 'entry-cite-action', 'cite-panel', 'versions-list']) {
+      expect(await byTestId(page, nav).isVisible()).toBe(false);
+    }
+    expect(await page.locator('[role="banner"]').isVisible()).toBe(false);
+    expect(await page.locator('[role="button"]:visible, button:visible, textarea:visible').count()).toBe(0);
+
+    // A worksheet's inputs print their values as plain text: no border, no background, the value kept.
+    const sheet = byTestId(page, `worksheet-${version.content.worksheets[0].name}`);
+    const input = sheet.locator('input').first();
+    const look = await input.evaluate((el) => {
+      const s = getComputedStyle(el);
+      return { border: s.borderTopWidth, background: s.backgroundColor, value: (el as HTMLInputElement).value };
+    });
+    expect(look.border).toBe('0px');
+    expect(look.background).toBe('rgba(0, 0, 0, 0)');
+    expect(look.value).not.toBe('');
+
+    // The text uses the page's width; the sources come after the text (related entries included); the footer
+    // with the version and its permanent address closes the printout.
+    expect((await box(byTestId(page, 'entry-body'))).width).toBeGreaterThan(width * 0.8);
+    expect(await footer.isVisible()).toBe(true);
+    const footerText = (await footer.textContent())!;
+    expect(footerText).toContain(`version ${version.number}`);
+    expect(footerText).toContain(`${h.base}/entries/${SLUG}/v/${version.number}`);
+    const order = await page.evaluate(() =>
+      ['entry-section-whyItFails', 'entry-section-cautions', 'entry-section-related', 'entry-section-sources', 'entry-print-footer'].map(
+        (id) => document.querySelector(`[data-testid="${id}"]`)!.getBoundingClientRect().top,
+      ),
+    );
+    expect([...order].sort((a, b) => a - b)).toEqual(order);
+    await page.screenshot({ path: path.join(screenshotDir, `entry-print-${width}.png`), fullPage: true });
+
+    // A real PDF: the whole entry over several pages, not one screenful of a scrolling box.
+    const pdf = await page.pdf({ format: 'A4', printBackground: true });
+    expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    const pages = pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g)?.length ?? 0;
+    expect(pages).toBeGreaterThanOrEqual(3);
+    if (wide) fs.writeFileSync(path.join(screenshotDir, 'entry-print.pdf'), pdf);
+    expect(page.problems).toEqual([]);
+  });
+
+  it('has a table of contents, a Cite action, display math, Markdown cautions, related titles and its own title', async () => {
+    const { version } = await getJson<EntryJson>(`/api/entries/${SLUG}`);
+    await page.emulateMedia({ media: 'screen' });
     await settled(page);
 
     // The browser tab names the entry; a description for link previews is set from its brief.
@@ -169,61 +227,6 @@ describe.each([
     await cite.click();
     await until('the citation panel is in view', async () => inViewport(page, byTestId(page, 'cite-panel')));
     expect(page.problems).toEqual([]);
-    await page.context().close();
-  });
-
-  it('prints the entry without navigation or input boxes, values as text, the permanent address and version at the end', async () => {
-    const { version } = await getJson<EntryJson>(`/api/entries/${SLUG}`);
-    const page = await h.open(width, height);
-    await page.goto(`${h.base}/entries/${SLUG}`);
-    await byTestId(page, 'entry-section-whyItFails').waitFor();
-    await settled(page);
-    const footer = byTestId(page, 'entry-print-footer');
-    // On screen the printout's footer is not shown.
-    expect(await footer.isVisible()).toBe(false);
-
-    await page.emulateMedia({ media: 'print' });
-    await settled(page);
-    for (const nav of ['nav-rail', 'nav-bar', 'entry-toc', 'entry-jump', 'entry-cite-action', 'cite-panel', 'versions-list']) {
-      expect(await byTestId(page, nav).isVisible()).toBe(false);
-    }
-    expect(await page.locator('[role="banner"]').isVisible()).toBe(false);
-    expect(await page.locator('[role="button"]:visible, button:visible, textarea:visible').count()).toBe(0);
-
-    // A worksheet's inputs print their values as plain text: no border, no background, the value kept.
-    const sheet = byTestId(page, `worksheet-${version.content.worksheets[0].name}`);
-    const input = sheet.locator('input').first();
-    const look = await input.evaluate((el) => {
-      const s = getComputedStyle(el);
-      return { border: s.borderTopWidth, background: s.backgroundColor, value: (el as HTMLInputElement).value };
-    });
-    expect(look.border).toBe('0px');
-    expect(look.background).toBe('rgba(0, 0, 0, 0)');
-    expect(look.value).not.toBe('');
-
-    // The text uses the page's width; the sources come after the text (related entries included); the footer
-    // with the version and its permanent address closes the printout.
-    expect((await box(byTestId(page, 'entry-body'))).width).toBeGreaterThan(width * 0.8);
-    expect(await footer.isVisible()).toBe(true);
-    const footerText = (await footer.textContent())!;
-    expect(footerText).toContain(`version ${version.number}`);
-    expect(footerText).toContain(`${h.base}/entries/${SLUG}/v/${version.number}`);
-    const order = await page.evaluate(() =>
-      ['entry-section-whyItFails', 'entry-section-cautions', 'entry-section-related', 'entry-section-sources', 'entry-print-footer'].map(
-        (id) => document.querySelector(`[data-testid="${id}"]`)!.getBoundingClientRect().top,
-      ),
-    );
-    expect([...order].sort((a, b) => a - b)).toEqual(order);
-    await page.screenshot({ path: path.join(screenshotDir, `entry-print-${width}.png`), fullPage: true });
-
-    // A real PDF: the whole entry over several pages, not one screenful of a scrolling box.
-    const pdf = await page.pdf({ format: 'A4', printBackground: true });
-    expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
-    const pages = pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g)?.length ?? 0;
-    expect(pages).toBeGreaterThanOrEqual(3);
-    if (wide) fs.writeFileSync(path.join(screenshotDir, 'entry-print.pdf'), pdf);
-    expect(page.problems).toEqual([]);
-    await page.context().close();
   });
 });
 
@@ -255,7 +258,7 @@ it('compares two versions word by word: a changed number is one changed word, mo
   expect(await approveDraft(reviewer, submitted, 'A more exact reading.')).toBe(2);
 
   for (const width of [390, 1366]) {
-    const page = await h.open(width, 900);
+    const page = await h.page(width, 900);
     await page.goto(`${h.base}/entries/${slug}`);
     const diff = byTestId(page, 'diff-view');
     await diff.waitFor();
@@ -276,7 +279,7 @@ it('prints a claim check as its result: no form, no switches, no saving, no navi
   // An invented claim with figures the kit can check (a photon-pressure bound; c exact, BIPM SI Brochure 9th ed.).
   const claim = 'A sealed microwave cavity fed with 1 kW of RF produced 2 mN of thrust, the makers say, with nothing leaving it.';
   for (const width of [390, 1366]) {
-    const page = await h.open(width, 900);
+    const page = await h.page(width, 900);
     await page.goto(`${h.base}/check`);
     await byTestId(page, 'claim-text').fill(claim);
     await byTestId(page, 'claim-run').click();
