@@ -61,10 +61,20 @@ describe.each([
   [1366, 900],
 ])('the first paint at %i px', (width, height) => {
   let noScript: BrowserContext;
+  // The entry with the app, loaded once at this size for the three tests that read it (none changes it).
+  let app: Page & { problems: string[] };
   beforeAll(async () => {
     noScript = await h.browser.newContext({ viewport: { width, height }, deviceScaleFactor: 1, javaScriptEnabled: false });
+    app = await h.page(width, height, 'light', { held: true });
+    await app.goto(`${h.base}/entries/${SLUG}`);
+    await byTestId(app, 'entry-section-inBrief').waitFor();
+    await byTestId(app, 'entry-section-whyItFails').waitFor();
+    await settled(app);
   });
-  afterAll(() => noScript?.close());
+  afterAll(async () => {
+    await app?.close();
+    await noScript?.close();
+  });
 
   it('shows an entry’s title and its first section without JavaScript, in the column the app uses', async () => {
     const { version } = await getJson<EntryJson>(`/api/entries/${SLUG}`);
@@ -85,12 +95,7 @@ describe.each([
     await page.close();
 
     // The app's own heading sits where the shell's did (close is fine: a few pixels).
-    const app = await h.page(width, height);
-    await app.goto(`${h.base}/entries/${SLUG}`);
-    await byTestId(app, 'entry-section-inBrief').waitFor();
-    await settled(app);
     expect(Math.abs((await headingLeft(app)) - shellLeft)).toBeLessThanOrEqual(4);
-    await app.close();
   });
 
   it('shows the Library’s entries without JavaScript', async () => {
@@ -116,16 +121,12 @@ describe.each([
 
   it('hands the page over to the app: the same entry once, no page errors', async () => {
     const { version } = await getJson<EntryJson>(`/api/entries/${SLUG}`);
-    const page = await h.page(width, height);
-    await page.goto(`${h.base}/entries/${SLUG}`);
-    await byTestId(page, 'entry-section-whyItFails').waitFor();
-    await settled(page);
+    const page = app;
     expect(await page.locator('#cw-shell').isVisible()).toBe(false);
     // The title as a visible level-1 heading exactly once (the shell's copy is hidden).
     expect(await page.getByRole('heading', { level: 1, name: version.content.title, exact: true }).count()).toBe(1);
     expect(await page.getByRole('heading', { level: 2, name: 'Why it fails', exact: true }).count()).toBe(1);
     expect(page.problems).toEqual([]);
-    await page.close();
   });
 
   it('has the Library working with the app as before', async () => {
@@ -142,10 +143,7 @@ describe.each([
   });
 
   it('sets text in our WOFF2 fonts, loaded with font-display: swap, the preloaded ones among them', async () => {
-    const page = await h.page(width, height);
-    await page.goto(`${h.base}/entries/${SLUG}`);
-    await byTestId(page, 'entry-section-inBrief').waitFor();
-    await settled(page);
+    const page = app;
     const faces = await page.evaluate(() => {
       const out: { family: string; display: string; status: string }[] = [];
       document.fonts.forEach((f) => out.push({ family: f.family.replace(/^"|"$/g, ''), display: f.display, status: f.status }));
@@ -165,6 +163,5 @@ describe.each([
     const fetched = await page.evaluate(() => performance.getEntriesByType('resource').map((r) => r.name));
     expect(fetched.filter((u) => /\/fonts\/source-serif-4-latin-400\.[0-9a-f]{10}\.woff2$/.test(u)).length).toBeGreaterThan(0);
     expect(fetched.filter((u) => /(IBMPlex|SourceSerif4)[^/]*\.ttf$/.test(u))).toEqual([]);
-    await page.close();
   });
 });

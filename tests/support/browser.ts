@@ -31,9 +31,11 @@ export interface Harness {
    * returning reader's browser has them (the app's script is not fetched and compiled anew for every
    * page). Page errors are collected in `problems`. Close the page (or its context) when done, so the
    * profile serves the next page (a page a test leaves open is closed when the next test asks for
-   * one); `close()` ends them all.
+   * one); `close()` ends them all. `{ held: true }`: a page several tests share (opened in a
+   * `beforeAll`), kept until it is closed (jest names no test in a `beforeAll`, or still the last one
+   * run, so the harness cannot tell such a page from one a finished test left open).
    */
-  page(width: number, height: number, colorScheme?: 'light' | 'dark'): Promise<Page & { problems: string[] }>;
+  page(width: number, height: number, colorScheme?: 'light' | 'dark', opts?: { held?: boolean }): Promise<Page & { problems: string[] }>;
   /**
    * A new page in a fresh context of its own (cold caches, its own cookie jar) at this viewport; page
    * errors are collected in `problems`. Close its context when done. (Measured: moving these pages
@@ -91,9 +93,9 @@ export async function startHarness(): Promise<Harness> {
   // half the time it takes in a fresh incognito context.
   const profiles: { context: BrowserContext; dir: string; keeper: Page; busy: boolean; owner: string | undefined }[] = [];
   const testName = (): string | undefined => (typeof expect === 'undefined' ? undefined : expect.getState().currentTestName);
-  const acquire = async (width: number, height: number, colorScheme: 'light' | 'dark') => {
-    // A page a finished test left open: its profile goes back to the pool (pages opened in a
-    // beforeAll belong to no test and stay until their context is closed).
+  const acquire = async (width: number, height: number, colorScheme: 'light' | 'dark', keep: boolean) => {
+    // A page a finished test left open: its profile goes back to the pool (held pages, and pages opened
+    // in a file's first beforeAll, belong to no test and stay until they are closed).
     const now = testName();
     for (const p of profiles) {
       if (p.busy && p.owner !== undefined && p.owner !== now) {
@@ -116,7 +118,7 @@ export async function startHarness(): Promise<Harness> {
     }
     const held = profile;
     held.busy = true;
-    held.owner = now;
+    held.owner = keep ? undefined : now;
     const { context, keeper } = held;
     for (const old of context.pages()) if (old !== keeper) await old.close();
     await context.clearCookies();
@@ -157,7 +159,7 @@ export async function startHarness(): Promise<Harness> {
     base,
     browser,
     mail,
-    page: (width, height, colorScheme = 'light') => acquire(width, height, colorScheme),
+    page: (width, height, colorScheme = 'light', opts = {}) => acquire(width, height, colorScheme, opts.held === true),
     async open(width, height) {
       const context = await browser.newContext({ viewport: { width, height }, deviceScaleFactor: 1 });
       return watched(await context.newPage());
