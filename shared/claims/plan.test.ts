@@ -321,6 +321,14 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'We measured 3.1 micronewtons of thrust per kilowatt of electrical power; our small satellite gives the laser 20 W.',
     // A store's rating "up to 5 kW at once", and a week of a supposition, are no run of 5 kW for a week.
     "The battery gives back 0.91 units for every unit it takes. It stores 13.5 kWh and can deliver up to 5 kW at once. If the panels are covered in snow for a week it will be empty.",
+    // A heat engine's load is not its input (Carnot 33 °C / 28 °C: 1.6 % > 0.25 %).
+    'The thermoelectric module sees skin at 33 °C and air at 28 °C and converts 0.25 % of the heat; it delivers 40 µW, and the sensor node needs 25 µW.',
+    // The same side at another point is no input (Carnot 300 °C / 50 °C: 43.6 % > 4.5 %).
+    'The exhaust generator runs between 300 °C and 50 °C at 4.5 %, delivering 380 W on the motorway, and under 100 W in town traffic.',
+    // A store charged: what it holds was calculated "from the temperature rise", not fed from it (43.2 MJ in, 41 MJ stored).
+    'The element drew 2 kW for six hours, and the heat stored, calculated from the temperature rise of the salt, was 41 MJ: a charging efficiency of about 95 %.',
+    // A report mentioning photovoltaics in passing: no cell's efficiency to hold to the light limits.
+    'The heat store charges at about 95 % efficiency.\n\nA referee asked whether it can be charged from photovoltaic surplus; it can.',
     // Another machine's power beside a thrust given with none: the photon bound needs the drive's own.
     "The sealed cone produced 40 mN of thrust with no propellant; its builder will not say the power. The exhibition also includes a ship's diesel rated at 400 hp.",
     // Light from outside reflected by the craft (up to 2P/c), and a galaxy's recession with the expansion of space.

@@ -26,6 +26,21 @@ const HARVEST_CLAIM_RE = new RegExp(`(?<!\\p{L})(?:${alt(HARVEST_WORDS)})(?!\\p{
 /** Boiler efficiencies on the net (lower) calorific value may exceed 100 % by convention. */
 const NET_CALORIFIC_RE = /(?<!\p{L})(?:condensing|net (?:CV|calorific|heating)|LHV|lower heating value|lower calorific)(?!\p{L})/iu;
 
+/** Words of heat or fuel near a figure: what a heat engine takes in. */
+const HEAT_IN_NEAR_RE = /(?<!\p{L})(?:heat\w*|thermal|fuel|burn\w*|flames?|combustion|exhaust|gas|diesel|petrol|steam|sun\w*|radiat\w*|calorific|LHV|HHV)(?!\p{L})/iu;
+
+/**
+ * A heat engine checked against Carnot (an efficiency between two stated sides), whose only stated
+ * input is no heat ("the sensor node needs 25 µW", "under 100 W in town"): that input is not the
+ * engine's, and a first-law ledger on it would be no result.
+ */
+function heatEngineElectricIn(b: Basis, inF: Figure | undefined): boolean {
+  if (!inF || !b.s.heatEngine || !b.plans.some((p) => p.check === 'carnot')) return false;
+  if (inF.start === null || inF.end === null) return false;
+  const near = b.text.slice(Math.max(0, inF.start - 40), inF.end + 40);
+  return !HEAT_IN_NEAR_RE.test(near);
+}
+
 export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading, { efficiency, movesHeat, gain, share, cop, acrossDifference, copForCarnot }: HeatReading): void {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, duration, temps } = b;
   const firstLawWhy = 'The text gives the energy put in and the energy got out.';
@@ -49,6 +64,8 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     );
   } else if (movesHeat && (eIn || pIn) && (eOut || pOut) && !sourceHeatIn) {
     notes.push('A heat pump or refrigerator moves heat rather than making it: the heat it delivers may exceed the work it takes without breaking any law. Its bound is the Carnot COP of the temperatures it works between.');
+  } else if (heatEngineElectricIn(b, eIn ?? pIn)) {
+    notes.push("A heat engine's input is the heat it takes in: the electrical power the text gives beside its output is a load's or a part's, not what the engine converts. Its bound is the Carnot efficiency between its two sides.");
   } else if ((eIn || pIn) && (eOut || pOut) && !(thrust && photonApplies && !eOut && !pOut)) {
     const inF = eIn ?? pIn!;
     const outF = eOut ?? pOut!;

@@ -45,13 +45,23 @@ const PER_BIT_RE = /^[^\S\n]*(?:(?:of energy|of work)[^\S\n]+)?(?:per|for each|f
 /** A limit of light converters named: "beats the Shockley–Queisser limit", "above the detailed-balance limit". */
 const LIGHT_LIMIT_NAMED_RE = /(?<!\p{L})(?:Shockley[–-]Queisser|SQ limit|detailed[- ]balance limit|Landsberg limit)(?!\p{L})/iu;
 
+/** Up to 300 characters before a figure and 200 after, within its paragraph (a blank line ends one). */
+function paragraphNear(text: string, start: number, end: number): string {
+  const before = text.slice(Math.max(0, start - 300), start).split(/\n[^\S\n]*\n/).pop() ?? '';
+  const after = text.slice(end, end + 200).split(/\n[^\S\n]*\n/)[0];
+  return before + text.slice(start, end) + after;
+}
+
 export function planOtherChecks(b: Basis): void {
   const { figures, ctx, s, plans, needs, notes, power, energy, text, pIn, pOut, speeds, temps } = b;
   // ---- Converters of sunlight: the Landsberg and Carnot bounds, and Shockley–Queisser for one junction
   const solarEfficiency = ofKind(figures, 'efficiency').find((f) => !f.derived);
   // (A heat-only device in the efficiency's own sentence, not a furnace named elsewhere in a long report.)
   const heatOnly = solarEfficiency && solarEfficiency.start !== null && solarEfficiency.end !== null ? HEAT_ONLY_RE.test(sentenceAround(text, solarEfficiency.start, solarEfficiency.end)) : HEAT_ONLY_RE.test(text);
-  if (solarEfficiency && SOLAR_CELL_RE.test(text) && !s.heatEngine && !heatOnly) {
+  // (The cell named near the efficiency, in its paragraph: a report that mentions photovoltaics in
+  // passing gives no cell's efficiency.)
+  const nearEfficiency = solarEfficiency && solarEfficiency.start !== null && solarEfficiency.end !== null ? paragraphNear(text, solarEfficiency.start, solarEfficiency.end) : text;
+  if (solarEfficiency && SOLAR_CELL_RE.test(nearEfficiency) && !s.heatEngine && !heatOnly) {
     const junction = JUNCTIONS_RE.exec(text);
     const silicon = !junction && SILICON_CELL_RE.test(text) && !STACKED_CELL_RE.test(text);
     const junctions = junction ? (JUNCTION_COUNT[(junction[1] ?? junction[2]).toLowerCase()] ?? Number(junction[1])) : silicon ? 1 : 0;

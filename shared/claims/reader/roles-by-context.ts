@@ -22,6 +22,11 @@ export const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|
 const REFERENCE_FORCE_BEFORE_RE =
   /(?<!\p{L})(?:resol(?:ves?|ution)(?: (?:is|of|was))?|sensitivity(?: (?:is|of|was))?|noise floor(?: (?:is|of|was))?|calibrat\w*(?: \w+){0,3}? (?:with|against|using|to)(?: an?| the)?(?: [\w-]+)?|reference(?: force| weight| mass)?(?: of)?|P ?\/ ?c(?: [\w ]{0,20}?)?(?:=|≈|of|is|would (?:allow|give)|allows|gives|predicts)|photon (?:pressure|rocket)[\w ]{0,30}?(?:predicts|would (?:allow|give)|allows|gives|limit of|bound of)|would give only(?: about)?)[^\S\n]*(?:about |roughly |around |only |just )?$/iu;
 
+/** Between two figures of one list: "… on the motorway, and under", "…, or about", "… and up to". */
+const SAME_SIDE_LIST_RE =
+  /^[^.;!?\n]{0,80}?(?:,[^\S\n]*)?(?<!\p{L})(?:and|or|but|while)[^\S\n]+(?:(?:under|over|about|around|nearly|up to|at most|less than|more than|just|only|some|roughly|barely|below|above)[^\S\n]+)*$/iu;
+/** Right after a figure: the condition it holds at ("in town traffic", "at idle", "on a cloudy day", "when cold"). */
+const CONDITION_AFTER_RE = /^[^\S\n]*(?:in|on|at|during|when|while|under)[^\S\n]+(?!(?:the[^\S\n]+)?(?:output|input|load|battery|grid|water|house|tank|port)(?!\p{L}))\p{L}/iu;
 /** Machines that are not a drive: a power said of one is not what drives a thrust beside it. */
 const ANOTHER_MACHINE_RE =
   /(?<!\p{L})(?:diesels?|petrol|gasoline|locomotives?|tractors?|cars?|trucks?|lorr(?:y|ies)|boilers?|furnaces?|kettles?|heaters?|ovens?|hair ?dryers?|vacuum cleaners?|lawn ?mowers?|motorbikes?|motorcycles?|outboards?|ship's|ships?|ferr(?:y|ies)|generating sets?|gensets?|wind turbines?|power stations?|power plants?)(?!\p{L})/iu;
@@ -191,7 +196,13 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
   const open = drafts.filter((d) => energyLike(d) && d.role === null);
   if (named.length && open.length === 1) {
-    if (named.every((d) => d.role === 'in')) open[0].role = 'out';
+    // ("delivers 380 W on the motorway, and under 100 W in town": the same side at another point — a
+    // list going on from the named figure of its own sentence, the new one said with its condition —
+    // not the other side.)
+    const prev = [...named].reverse().find((d) => d.end <= open[0].start && sentenceOf(text, d) === sentenceOf(text, open[0]));
+    const goesOn = prev !== undefined && SAME_SIDE_LIST_RE.test(text.slice(prev.end, open[0].start)) && CONDITION_AFTER_RE.test(text.slice(open[0].end, open[0].end + 30));
+    if (goesOn) open[0].role = prev.role;
+    else if (named.every((d) => d.role === 'in')) open[0].role = 'out';
     else if (named.every((d) => d.role === 'out')) open[0].role = 'in';
   }
   // "propellant is 90 % of the vehicle's mass", "90 % propellant by mass": the propellant from a fraction.
