@@ -305,6 +305,26 @@ describe('signals for the matcher', () => {
   });
 });
 
+describe('figures of one finding said far apart', () => {
+  const filler = 'The work plan, the budget and the ethics review follow the usual form of the programme. '.repeat(6);
+  it('in different paragraphs of a long text: no law is said broken until the reader confirms they belong together', () => {
+    // 200 W in < 350 W out would break the first law, but the two figures are some 550 characters and a paragraph apart.
+    const text = `The bench unit draws 200 W from the mains.\n\n${filler}\n\nIt puts out 350 W.`;
+    const { checks, needs } = runClaimChecks(extractFigures(text), { text });
+    expect(checks.filter((c) => c.check === 'first-law')).toEqual([]);
+    const need = needs.find((n) => n.check === 'first-law');
+    expect(need?.missing[0]).toMatch(/^confirmation that “200 W” and “350 W” are figures of one device/);
+  });
+  it('in one paragraph, or as figures the reader set, the finding stands', () => {
+    const text = `The bench unit draws 200 W from the mains. ${filler} It puts out 350 W.`;
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+    // (Typed by hand: no places in the text.)
+    const apart = `The bench unit draws 200 W from the mains.\n\n${filler}\n\nIt puts out 350 W.`;
+    const typed = extractFigures(apart).map((f) => ({ ...f, start: null, end: null }));
+    expect(runClaimChecks(typed, { text: apart }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

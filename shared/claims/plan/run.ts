@@ -61,6 +61,20 @@ function sentenceOf(check: CheckName, run: CheckRun): string {
   return `${head}: ${printText(first.replace(/[:;]$/, '.'), { bigIntegers: true })}`;
 }
 
+/** Characters a finding's figures may span, across a paragraph break, before they are said apart. */
+const APART_CHARS = 500;
+
+/** The figures' own words, quoted and joined ("“2 kW” and “41 MJ”"), when they are said apart; else null. */
+function saidApart(text: string, uses: Figure[]): string | null {
+  const placed = uses.filter((f) => f.start !== null && f.end !== null && !f.derived);
+  if (placed.length < 2 || !text) return null;
+  const lo = Math.min(...placed.map((f) => f.start!));
+  const hi = Math.max(...placed.map((f) => f.end!));
+  if (hi - lo <= APART_CHARS || !/\n[^\S\n]*\n/.test(text.slice(lo, hi))) return null;
+  const words = placed.map((f) => `“${f.text}”`);
+  return words.length === 2 ? words.join(' and ') : `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`;
+}
+
 /** Plans, run: each at the ends of its ranges most favourable to the claim. */
 export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { checks: ClaimCheckRun[]; needs: ClaimCheckNeed[]; notes: string[] } {
   const { plans, needs, notes } = planFor(figures, ctx);
@@ -92,6 +106,21 @@ export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { chec
       assumptions.push(`The text gives a range, ${f.display} to ${f.upper!.display} ("${f.text}"); the end most favourable to the claim, ${chosen}, is used.`);
     }
     const { run, inputs } = best;
+    // Figures of one finding said far apart, in different paragraphs of a long text, may be of
+    // different things (a report's device and a load it mentions later): a law is not said broken on
+    // them until the reader confirms they belong together (a re-run on figures the reader set has no
+    // places in the text, so this does not apply to it).
+    const apart = !run.verdict.holds ? saidApart(ctx.text ?? '', p.uses) : null;
+    if (apart) {
+      needs.push({
+        check: p.check,
+        title: def.title,
+        missing: [`confirmation that ${apart} are figures of one device: they are said in different paragraphs, far apart`],
+        why: `${p.why} Run on them, the check would find the claim in conflict with ${CHECK_LAW[p.check]}.`,
+        uses: p.uses.map((f) => f.id),
+      });
+      continue;
+    }
     out.push({
       check: p.check,
       inputs,
