@@ -12,12 +12,14 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, sentenceAround, w
 /** ", measured per §7 of the test protocol," between a COP and its value: a clause set off by commas. */
 const ASIDE = '(?:[^\\S\\n]*,[^,;.!?\\n]{3,60},)?';
 const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|)»”"'’]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
-const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${ASIDE}${CONNECT}$`, 'u');
+/** Between a COP and its value: the mode and whose it is ("COP in cooling of", "heating COP of the BW-8 is"). */
+const COP_OWNER = '(?:[^\\S\\n]+(?:in|for|when)[^\\S\\n]+(?:heating|cooling)(?:[^\\S\\n]+mode)?)?(?:[^\\S\\n]+(?:of|for)[^\\S\\n]+(?:the|this|our|its|each|every|a|an)[^\\S\\n]+(?:[\\p{L}\\p{N}-]+[^\\S\\n]+){0,2}?[\\p{L}\\p{N}][\\p{L}\\p{N}-]*(?=[^\\S\\n]+(?:is|was|of|at|=|:)))?';
+const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${COP_OWNER}${ASIDE}${CONNECT}$`, 'u');
 /** An energy efficiency ratio (EER or SEER, in BTU/h of cooling per watt): a cooling COP × 3.412. */
 const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
 /** 1 BTU_IT/h = 0.293 071 1 W (NIST SP 811, Appendix B.8). */
 const BTU_PER_H_IN_W = 0.29307107;
-const COP_WORDS_BEFORE_RE = new RegExp(`(?<!\\p{L})coefficients?[\\s-]+of[\\s-]+performance(?:[^\\S\\n]*\\(COP\\))?${ASIDE}${CONNECT}$`, 'iu');
+const COP_WORDS_BEFORE_RE = new RegExp(`(?<!\\p{L})coefficients?[\\s-]+of[\\s-]+performance(?:[^\\S\\n]*\\(COP\\))?${COP_OWNER}${ASIDE}${CONNECT}$`, 'iu');
 const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|η(?:_?(?:th|thermal|c|Carnot))?|eta(?:_?(?:th|thermal))?)(?!\\p{L})${CONNECT}$`, 'iu');
 const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})([^\\d.;!?\\n]{0,60})$`, 'iu');
 const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');

@@ -145,6 +145,27 @@ describe('two sides of a heat engine', () => {
     ]);
   });
 
+  test("a heat pump's condenser is its warm side, an engine's its cold side", () => {
+    const pump = read('With water leaving the condenser at 35 °C and a 30 °C difference between that flow and the brine entering the evaporator, the heating COP of the BW-8 is 4.6 (invented test data).');
+    expect(temps(pump)).toEqual([
+      ['hot', 308.15],
+      ['cold', 278.15],
+    ]);
+    expect(pump.find((f) => f.kind === 'cop')).toMatchObject({ role: 'heating', si: 4.6 });
+    const turbine = read('The steam turbine exhausts into a condenser at 40 °C; steam enters at 500 °C and the efficiency is 38 % (invented test data).');
+    expect(temps(turbine)).toEqual([
+      ['cold', 313.15],
+      ['hot', 773.15],
+    ]);
+  });
+
+  test('a COP with its mode or its owner between it and its value, or "at least"', () => {
+    const cop = (text: string) => read(text).filter((f) => f.kind === 'cop').map((f) => [f.role, f.si]);
+    expect(cop('The heating COP of the unit is 4.6 (invented test data).')).toEqual([['heating', 4.6]]);
+    expect(cop('The module has a coefficient of performance in cooling of at least 9 (invented test data).')).toEqual([['cooling', 9]]);
+    expect(cop('The COP of each module was 3.2 (invented test data).')).toEqual([[null, 3.2]]);
+  });
+
   test('a COP set off from its value by a clause between commas', () => {
     const f = read('Its cooling COP, measured per §7 of the test protocol, is 2.8.');
     expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'cooling', si: 2.8 });

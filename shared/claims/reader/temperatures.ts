@@ -105,6 +105,15 @@ const LONE_TEMPERATURE_USED_RE = new RegExp(
 const HEAT_WORDS_RE = /(?<!\p{L})(?:heat\w*|warmth|compressors?|sources?|sinks?|supply (?:air|water)|flow temperature|BTU\w*|COP|furnaces?|boilers?|kilns?|ovens?)(?!\p{L})/iu;
 
 export function relateTemperatures(text: string, drafts: Draft[]): void {
+  // A heat pump's condenser is its warm side and its evaporator its cold one ("water leaving the
+  // condenser at 35 °C"); an engine's condenser is its cold side, as the role words read it.
+  if ((HEAT_PUMP_RE.test(text) || drafts.some((d) => d.kind === 'cop' && d.role === 'heating')) && !/(?<!\p{L})(?:engines?|turbines?|generators?|Rankine|steam cycle)(?!\p{L})/iu.test(text)) {
+    for (const d of drafts) {
+      if (d.kind !== 'temperature' || d.derived) continue;
+      const before = text.slice(Math.max(0, d.start - 40), d.start);
+      if (d.role === 'cold' && /(?<!\p{L})condensers?(?:[^\S\n]+(?:outlet|side|water|leaving))?[^\S\n]+(?:at|of|is|=|:)?[^\S\n]*(?:(?:about|around|some)[^\S\n]+)?$/iu.test(before)) d.role = 'hot';
+    }
+  }
   // The surroundings said apart from the machine: when one sentence gives the machine's two sides
   // (two temperatures, or one and a difference), a temperature alone in another sentence, with no
   // efficiency, COP or difference beside it ("the room was held at 21 °C"), is set aside.

@@ -158,6 +158,6 @@ export const EFFICIENCY_CHANGE_WORDS = ['by', 'increas\\w*', 'improv\\w*', 'gain
 export const BARE_CONNECTORS = [
   'of', 'is', 'was', 'were', 'be', 'between', 'from', 'ranging from', 'ranges? from', 'lies', 'lay', 'sits', 'stands', 'varies', 'comes? (?:in |out )?(?:at|to)', 'turns? out (?:at|to)', 'ends? up (?:at|as)',
   'came (?:in |out )?(?:at|to)', 'turned out (?:at|to)', 'works? out (?:at|to)', 'measured at', 'rated at', 'runs at', 'ran at', 'reached', 'in the range', 'range', 'reaching', 'ca\\.?', 'approx\\.?', 'c\\.', '~', '≈', 'reached', 'reaches', 'near', 'about', 'around', 'approximately', 'roughly',
-  'up to', 'above', 'over', 'exceeding', 'as high as', 'equal to', 'rated', 'value', 'measured', 'a', 'an', 'the', 'somewhere', 'anywhere', 'of the order of', 'on the order of',
+  'up to', 'above', 'over', 'exceeding', 'as high as', 'at least', 'no less than', 'not less than', 'more than', 'equal to', 'rated', 'value', 'measured', 'a', 'an', 'the', 'somewhere', 'anywhere', 'of the order of', 'on the order of',
   'stated as', 'given as', 'quoted as', 'reported as', '(?:measured|found|determined|reported|estimated|calculated|said|claimed|shown) to be', 'at (?:this|that|the|full|part|rated) (?:operating point|load|conditions?|speed|point|test point|rating point)', '(?:here|there|then|now|thus|therefore|so)',
 ];
