@@ -93,6 +93,10 @@ describe("another device's figures, and figures proposed or asked about", () => 
       ['specific-impulse', null],
       ['speed', 'delta-v'],
     ]);
+    expect(roles('It delivered 1.5 kW to the heaters. The company plans a 5 kW version for shops.')).toEqual([
+      ['power', 'out'],
+      ['power', 'aside'],
+    ]);
     // (Alone, a proposed figure is still read: nothing else of its kind is given.)
     expect(roles('We plan to build a 2 kW version next year.')).toEqual([['power', null]]);
   });

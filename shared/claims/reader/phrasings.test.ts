@@ -183,6 +183,18 @@ describe('more ways claims are written (issue 11)', () => {
     expect(fitted.filter((x) => x.kind === 'duration').map((x) => x.role)).toEqual([null, 'aside']);
   });
 
+  test("a supply that provided a power gives the device's input; a mass of water with no rocket is no propellant", () => {
+    const f = read('The power delivered to the load was 1.2 ± 0.3 kW, while the bench supply provided 800 W to the primary driver.');
+    expect(f.map((x) => [x.kind, x.role])).toEqual([
+      ['power', 'out'],
+      ['power', 'in'],
+    ]);
+    const tower = read('The floats turn a 2 kW generator; the column holds about 6 tonnes of water.');
+    expect(tower.filter((x) => x.kind === 'mass').map((x) => x.role)).toEqual(['aside']);
+    const rocket = read('The water rocket carries 2 kg of water and weighs 0.5 kg empty; its exhaust leaves at 20 m/s.');
+    expect(rocket.filter((x) => x.kind === 'mass').map((x) => x.role)).toEqual(['propellant', 'dry', 'wet']);
+  });
+
   test("a force of the instrument or of a reckoning is set aside, the device's thrust kept", () => {
     const f = read('The sealed unit gave 48 uN from 40 W of RF input; the balance resolves 2 uN and was calibrated against a 50 mN reference force.');
     expect(f.filter((x) => x.kind === 'thrust').map((x) => [x.role, x.si])).toEqual([

@@ -235,6 +235,11 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     if (later.length > 0) stored[0].role = 'in';
   }
   const massDrafts = drafts.filter((d) => d.kind === 'mass');
+  // "the column holds about 6 tonnes of water", "40 kg of fuel in the car's tank": with nothing of a
+  // rocket in the text (no exhaust, Isp, Δv, craft or thruster), a mass of some fluid is no propellant.
+  if (!ROCKET_RE.test(text) && !drafts.some((d) => d.kind === 'specific-impulse' || (d.kind === 'speed' && (d.role === 'exhaust' || d.role === 'delta-v')))) {
+    for (const m of massDrafts) if (m.role === 'propellant' && !/(?<!\p{L})(?:propellants?|reaction mass)(?!\p{L})/iu.test(text.slice(Math.max(0, m.start - 40), m.end + 40))) m.role = null;
+  }
   // "The test stand itself weighs 85 kg": a mass of the apparatus, in a sentence that names no craft.
   for (const m of massDrafts) {
     const sentence = sentenceAround(text, m.start, m.end);
