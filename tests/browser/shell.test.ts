@@ -38,7 +38,7 @@ describe.each([
 ])('the shell on a %s (%ix%i)', (name, width, height, navId) => {
   let page: Page & { problems: string[] };
   beforeAll(async () => {
-    page = await h.open(width, height);
+    page = await h.page(width, height, 'light', { held: true });
   });
   afterAll(() => page.context().close());
   /** Each test opens the Library itself, so that it does not depend on where an earlier one left the page. */
@@ -103,7 +103,7 @@ describe.each([
 });
 
 it('says clearly when the API cannot be reached, and recovers on retry', async () => {
-  const page = await h.open(390, 844);
+  const page = await h.page(390, 844);
   let block = true;
   await page.route('**/api/**', (route) => (block ? route.abort('connectionrefused') : route.continue()));
   await page.goto(h.base + '/');
