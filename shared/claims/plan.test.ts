@@ -104,6 +104,14 @@ describe('texts that say no propellant in other words, or leave out the thrust (
       expect(planned(text).checks).toContainEqual(['photon-bound', 'breaks']);
     }
   });
+  it('"without throwing anything out", "no tether": the claim is propellant-free though other drives\' propellant is named', () => {
+    // 0.4 N/kW = 4e-4 N/W; × c = 1.2e5 times the photon bound.
+    const text =
+      'A startup says its gyroscope drive will replace rocket engines. It produces 0.4 newtons of thrust for every kilowatt of electricity, without throwing anything out of the back. "Ion engines are lovely, but they have to carry their propellant," the inventor says.';
+    expect(planned(text).checks).toContainEqual(['photon-bound', 'breaks']);
+    const cart = 'The cart gives a steady push of 0.9 N from a 200 W motor swinging two weights; nothing leaves the cart. Try it floating freely, no tether, and see if it accelerates.';
+    expect(planned(cart).checks).toContainEqual(['photon-bound', 'breaks']);
+  });
   it('an electrospray thruster emitting droplets carries propellant, whatever class the matcher names', () => {
     const text = 'Electrospray thrusters of this design manage 50–70 µN/W while emitting droplets of ionic liquid.';
     const { checks } = runClaimChecks(extractFigures(text), { text, classes: ['propellant-free-thrust'] });

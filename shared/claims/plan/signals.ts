@@ -64,11 +64,14 @@ const AIR_PUSHER_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?|ele
 
 /** A plain statement that nothing is thrown out ("with no propellant", "needs no propellant at all"). */
 const EXPLICIT_NO_PROPELLANT_RE =
-  /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected))(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)|without (?:throwing|expelling|ejecting|blowing) (?:anything|anything at all|any mass)(?: out)?|throws? nothing (?:out|away|overboard))(?!\p{L})/iu;
+/** A propulsion word said not to be there: "no tether", "without a fan", "no nozzle". */
+const NEGATED_WORD_ALL_RE = /(?<!\p{L})(?:no|without(?: an?)?|never)[^\S\n]+(?:any[^\S\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?)(?!\p{L})/giu;
 /** The claimant's own voice. */
 const OWN_VOICE_RE = /(?<!\p{L})(?:our|ours|we|us|my|mine)(?!\p{L})/iu;
 /** A sentence that compares, asks, or moves on to another subject: its propulsion words are not the claim's. */
-const ASIDE_SENTENCE_RE = /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|versus|vs\.?|unlike|rather than|instead of)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month)|also on the agenda)/iu;
+const ASIDE_SENTENCE_RE =
+  /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|versus|vs\.?|unlike|rather than|instead of|replaces?|replacing|will replace)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month)|also on the agenda)|^[\s"“'‘>*•-]*(?:(?:most|all|ordinary|conventional|chemical|electric|ion|plasma|Hall|today's|existing|other)[\s-]+)*(?:rockets|engines|thrusters|drives|spacecraft)[^\S\n]+(?:are|have|need|must|carry|use|burn|work|get|throw)(?!\p{L})/iu;
 /**
  * Where the text says plainly that nothing is thrown out, the words of propellant that count are those of
  * the claim's own sentences: not of a comparison ("how does that compare with an ion engine?"), a question,
@@ -87,7 +90,7 @@ export function readSignals(ctx: PlanContext): Signals {
   const text = ctx.text ?? '';
   const classes = ctx.classes ?? [];
   const top = classes[0];
-  const withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ').replace(NEGATED_PROPELLANT_ALL_RE, ' ');
+  const withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ').replace(NEGATED_PROPELLANT_ALL_RE, ' ').replace(NEGATED_WORD_ALL_RE, ' ');
   // "no heat pump, no outdoor coil": a machine said not to be one.
   const notDenied = text.replace(/(?<!\p{L})(?:no|not an?|without an?|isn't an?|is not an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|refrigerators?|chillers?|compressors?)(?!\p{L})/giu, ' ');
   return {
