@@ -50,9 +50,9 @@ describe.each([
 ])('the Library search on a %s (%i px)', (_name, width, height) => {
   let page: TestPage;
   beforeAll(async () => {
-    page = await h.open(width, height);
+    page = await h.page(width, height, 'light', { held: true });
   });
-  afterAll(() => page.context().close());
+  afterAll(() => page.close());
 
   it('puts the query in the address as it is typed, titles the page with it, and a reload gives the same results', async () => {
     await page.goto(`${h.base}/`);
@@ -140,9 +140,9 @@ describe.each([
 describe('on a phone (390 px)', () => {
   let page: TestPage;
   beforeAll(async () => {
-    page = await h.open(390, 844);
+    page = await h.page(390, 844, 'light', { held: true });
   });
-  afterAll(() => page.context().close());
+  afterAll(() => page.close());
 
   /** Elements inside the filter panel that the Tab key stops at. */
   const tabStops = () =>
