@@ -50,7 +50,11 @@ const SHARE_AS_WORK_RE =
 const SPEED_OF_LIGHT_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light|[^\S\n]*of[^\S\n]+c(?!\p{L})|[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?light[- ]speed/iuy;
 export const TEMPERATURE_CONTEXT_RE = /(?<!\p{L})(?:temperatures?|heat(?:ed|s|ing)?|hot|hotter|warm(?:er|s|ed)?|cold|colder|cool(?:er|s|ed)?|ambient|boil\w*|freez\w*|Celsius|Fahrenheit|thermal|room|outdoor|outside|air|water|collector)(?!\p{L})/iu;
 /** "Isp 320 s", "Isp (vac): 320 s", "specific impulse (sea level) of 280 s". */
-export const ISP_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})(?:[^\\S\\n]*\\([^()\\n\\d]{1,20}\\))?${CONNECT}$`, 'iu');
+// ("specific impulse in vacuum is 65 s", "Isp at sea level of 250 s", "the thruster's specific impulse of the system is".)
+export const ISP_BEFORE_RE = new RegExp(
+  `(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})(?:[^\\S\\n]*\\([^()\\n\\d]{1,20}\\))?(?:[^\\S\\n]+(?:in|at)[^\\S\\n]+(?:a[^\\S\\n]+)?(?:vacuum|sea[^\\S\\n]+level|space))?${CONNECT}$`,
+  'iu',
+);
 export const ISP_AFTER_RE = new RegExp(
   `[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})|(?:-|[^\\S\\n]+)(?:(?!(?:into|to|for|of|in|over|at|on|the|a|an|from|by|with|after|before|until|while|and|or)(?![\\p{L}–-]))[\\p{L}–-]+[^\\S\\n]+){0,2}?(?:engines?|thrusters?|rocket motors?|motors?)(?!\\p{L})`,
   'iuy',

@@ -183,6 +183,31 @@ describe('more ways claims are written (issue 11)', () => {
     expect(fitted.filter((x) => x.kind === 'duration').map((x) => x.role)).toEqual([null, 'aside']);
   });
 
+  test('a figure said again is that figure, not the other side: a temperature, a power', () => {
+    const f = read('The pipe surface is at 120 °C and the module keeps a 40 °C difference across it, converting 18 % of the heat. A critic said: "With 120 °C on the hot face, that is beyond Carnot."');
+    expect(f.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si])).toEqual([
+      ['hot', 393.15],
+      ['cold', 353.15],
+      ['aside', 393.15],
+    ]);
+    const p = read('One segment delivers 14 W of electricity. Fourteen watts from a segment is believable.');
+    expect(p.map((x) => [x.kind, x.role])).toEqual([
+      ['power', 'out'],
+      ['power', 'aside'],
+    ]);
+  });
+
+  test('"specific impulse in vacuum is 65 s"; "3.4 kg at lift-off, of which 0.9 kg was propellant"', () => {
+    const f = read('The satellite is 4.0 kg at launch; the thruster\'s specific impulse in vacuum is 65 s.');
+    expect(f.find((x) => x.kind === 'specific-impulse')?.si).toBe(65);
+    const r = read('The rocket weighed 3.4 kg at lift-off, of which 0.9 kg was propellant; its motor gives an Isp of 180 s.');
+    expect(r.filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([
+      ['wet', 3.4],
+      ['propellant', 0.9],
+      ['dry', expect.closeTo(2.5, 12)],
+    ]);
+  });
+
   test("a supply that provided a power gives the device's input; a mass of water with no rocket is no propellant", () => {
     const f = read('The power delivered to the load was 1.2 ± 0.3 kW, while the bench supply provided 800 W to the primary driver.');
     expect(f.map((x) => [x.kind, x.role])).toEqual([

@@ -201,7 +201,10 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     // not the other side.)
     const prev = [...named].reverse().find((d) => d.end <= open[0].start && sentenceOf(text, d) === sentenceOf(text, open[0]));
     const goesOn = prev !== undefined && SAME_SIDE_LIST_RE.test(text.slice(prev.end, open[0].start)) && CONDITION_AFTER_RE.test(text.slice(open[0].end, open[0].end + 30));
-    if (goesOn) open[0].role = prev.role;
+    // ("14 W of electricity … Fourteen watts from a segment is believable": the named figure said again.)
+    const again = named.find((d) => d.kind === open[0].kind && siOf(d) !== null && Math.abs((siOf(d) as number) - (siOf(open[0]) ?? NaN)) <= 1e-9 * Math.abs(siOf(d) as number));
+    if (again) open[0].role = 'aside';
+    else if (goesOn) open[0].role = prev.role;
     else if (named.every((d) => d.role === 'in')) open[0].role = 'out';
     else if (named.every((d) => d.role === 'out')) open[0].role = 'in';
   }

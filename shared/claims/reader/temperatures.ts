@@ -105,6 +105,17 @@ const LONE_TEMPERATURE_USED_RE = new RegExp(
 const HEAT_WORDS_RE = /(?<!\p{L})(?:heat\w*|warmth|compressors?|sources?|sinks?|supply (?:air|water)|flow temperature|BTU\w*|COP|furnaces?|boilers?|kilns?|ovens?)(?!\p{L})/iu;
 
 export function relateTemperatures(text: string, drafts: Draft[]): void {
+  // A temperature said again ("pipes at 120 °C … 'With 120 °C on the hot face …'", a critic quoting the
+  // claim): the same side said twice, not the other side — set aside, the first one read.
+  {
+    const seen: Draft[] = [];
+    for (const d of drafts) {
+      if (d.kind !== 'temperature' || d.derived || d.upper !== undefined) continue;
+      const v = siOf(d);
+      if (v !== null && seen.some((e) => siOf(e) === v && (e.role === d.role || d.role === null || e.role === null))) d.role = 'aside';
+      else seen.push(d);
+    }
+  }
   // A heat pump's condenser is its warm side and its evaporator its cold one ("water leaving the
   // condenser at 35 °C"); an engine's condenser is its cold side, as the role words read it.
   if ((HEAT_PUMP_RE.test(text) || drafts.some((d) => d.kind === 'cop' && d.role === 'heating')) && !/(?<!\p{L})(?:engines?|turbines?|generators?|Rankine|steam cycle)(?!\p{L})/iu.test(text)) {

@@ -78,7 +78,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
       'warm(?:s|ing)? (?:\\w+ )?to', 'raise[sd]? (?:\\w+ )?to', 'body heat', 'skin', 'turbine inlet', 'inlet', 'peak', 'top', 'upper', 'firing', 'firing temperature',
     ],
     after: [
-      'surface(?: water| layer)?', 'source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor', 'receiver', 'absorber', 'heater head', 'hot plate', 'hot junction',
+      '(?:on|at) the hot (?:face|side|end|plate|junction)', 'hot face', 'surface(?: water| layer)?', 'source', 'flames?', 'steam', 'hot', 'boiler', 'furnace', 'exhaust', 'waste heat', 'supply', 'flow', 'output', 'hot side', 'inlet', 'emitter', 'underfloor', 'receiver', 'absorber', 'heater head', 'hot plate', 'hot junction',
       'loop', 'tank', 'radiators?', '(?:turbine|compressor) inlet', 'firing', 'combustion', 'hot gas', 'heater head', 'collector', 'hot end',
       '(?:as|for|is|being) (?:the |its |our |a )?(?:hot|warm|hotter|warmer|heat) (?:side|end|source|reservoir|bath)',
     ],
@@ -120,7 +120,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
       '(?:carries|carrying|loaded with|tanks? (?:hold|holds|of)|burns?|burning|expels?|expelling)',
     ],
     after: [
-      '(?:is|are|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass|nitrogen|helium|butane|propane|iodine|argon|ammonia)', 'of (?:that|it|which|this)(?: being| is| was)? (?:propellant|fuel|reaction mass|xenon|krypton|argon|iodine|hydrazine|kerosene|water|nitrogen|helium|methane|hydrogen|ammonia|oxidi[sz]er)', 'of cold-gas propellant',
+      '(?:is|are|was|were|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass|nitrogen|helium|butane|propane|iodine|argon|ammonia)', 'of (?:that|it|which|this)(?: being| is| was)? (?:propellant|fuel|reaction mass|xenon|krypton|argon|iodine|hydrazine|kerosene|water|nitrogen|helium|methane|hydrogen|ammonia|oxidi[sz]er)', 'of cold-gas propellant',
       'of (?:[\\w-]+ )?(?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
       'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
       'of (?:[\\w-]+ )?(?:deuterium|tritium|helium-3|lithium|boron|uranium|plutonium|antimatter|fusion fuel|fissile fuel|pellets|solid fuel|solid propellant|grain|ice)(?: pellets| fuel| propellant)?',
