@@ -252,6 +252,14 @@ describe('signals for the matcher', () => {
     expect(readSignals({ text: 'without expelling any propellant' })).toMatchObject({ propellantFree: true, propellant: false });
   });
 
+  it("a converter's Carnot check or a speed set against c points to its entry's class whatever it finds, with no lead for a lawful claim", () => {
+    const teg = 'The stove-top thermoelectric generator runs between 180 °C and 40 °C and turns 4.5 % of the heat into electricity.';
+    expect(claimSignals(extractFigures(teg), teg)).toEqual({ classes: ['converter-beyond-limit'], leads: [] });
+    const beam = 'The accelerator hurls electrons at 0.99 c, a hair below the speed of light.';
+    expect(claimSignals(extractFigures(beam), beam).classes).toContain('faster-than-light');
+    expect(claimSignals(extractFigures(beam), beam).leads).toEqual([]);
+  });
+
   it('long reports: neither propellant nor radiation leaving, "without the emission of any propellant", a restated rating, a fuel\'s energy content "put at"', () => {
     const checks = (text: string) => runClaimChecks(extractFigures(text), { text });
     // 2 mN ≫ P/c = 900 / 299 792 458 = 3.0 µN.

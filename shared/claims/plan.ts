@@ -89,6 +89,10 @@ export function claimSignals(figures: Figure[], text: string): { classes: string
     leads.push({ mechanismClass: 'efficiency-above-unity', why: 'a figure above 100 % said of an efficiency' });
   }
   for (const run of runClaimChecks(figures, { text }).checks) {
+    // Run at all, whatever it finds, a converter's Carnot check or a speed set against c points to the
+    // entry that explains that limit (a boost of its class, no lead: a lawful claim is led to no entry).
+    if (run.check === 'carnot' && CONVERTER_RE.test(text)) out.add('converter-beyond-limit');
+    if (run.check === 'light-speed') out.add('faster-than-light');
     if (run.finding !== 'breaks') continue;
     if (run.check === 'first-law') {
       out.add('over-unity');
