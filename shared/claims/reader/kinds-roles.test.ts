@@ -121,6 +121,12 @@ describe('roles', () => {
     expect(extractFigures(rocket).filter((f) => f.kind === 'mass').map((f) => f.role)).toEqual(['wet', 'propellant', 'dry']);
     const cell = 'A cell with 2 g of palladium loaded with deuterium gave 40 kJ of heat for 25 kJ of electricity (invented test data).';
     expect(extractFigures(cell).filter((f) => f.kind === 'mass').map((f) => f.role)).toEqual([null]);
+    // A thruster's datasheet with masses but no speed, nor a mass said wet or dry: no rocket to run.
+    const sheet = 'Thrust: 84 mN. Thrust-to-power: 62 mN per kW. Thruster mass: 4.2 kg; cathode mass 0.4 kg (invented test data).';
+    expect(extractFigures(sheet).filter((f) => f.kind === 'mass').map((f) => f.role)).toEqual(['aside', 'aside']);
+    // An appliance "48 kg empty" is no rocket's dry mass.
+    const fridge = 'The 210-litre cabinet weighs 48 kg empty and draws 90 W (invented test data).';
+    expect(extractFigures(fridge).filter((f) => f.kind === 'mass').map((f) => f.role)).toEqual(['aside']);
     const pump = 'The outdoor unit weighs 96 kg; the heat pump gives a COP of 3.1 between 2 °C and 45 °C (invented test data).';
     expect(extractFigures(pump).filter((f) => f.kind === 'mass').map((f) => f.role)).toEqual(['aside']);
   });

@@ -270,12 +270,14 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   const masses = drafts.filter((d) => d.kind === 'mass');
   const rocket =
     drafts.some((d) => d.kind === 'specific-impulse' || (d.kind === 'speed' && (d.role === 'exhaust' || d.role === 'delta-v')) || (d.kind === 'mass' && d.role === 'propellant')) ||
-    (masses.some((m) => m.role !== 'aside') && ROCKET_RE.test(text));
+    // (Words of a craft alone — "thruster", "satellite" — with masses but no speed at all, nor a mass
+    // said wet or dry, make no rocket: there is nothing the rocket equation could be run on or asked for.)
+    (masses.some((m) => m.role !== 'aside') && ROCKET_RE.test(text) && (drafts.some((d) => d.kind === 'speed' && d.role !== 'aside') || masses.some((m) => m.role === 'wet' || m.role === 'dry')));
   if (!rocket) {
-    // No rocket in the text: no check uses a mass the words give no part in ("the outdoor unit weighs
-    // 96 kg", "a 2 kg test article"), so it is kept aside — except a mass of metal in a text about heat
-    // from a loaded metal, which the nuclear-signature check takes.
-    for (const m of masses) if (m.role === null && !METAL_MASS_RE.test(sentenceAround(text, m.start, m.end))) m.role = 'aside';
+    // No rocket in the text: no check uses a mass ("the outdoor unit weighs 96 kg", "a 2 kg test
+    // article", "48 kg empty"), so it is kept aside — except a mass of metal in a text about heat from a
+    // loaded metal, which the nuclear-signature check takes.
+    for (const m of masses) if ((m.role === null || m.role === 'wet' || m.role === 'dry') && !METAL_MASS_RE.test(sentenceAround(text, m.start, m.end))) m.role = 'aside';
     return;
   }
   // "burns from 25 t to 9 t", "goes from 100 t down to 33 t": the mass at the start and at the end.
