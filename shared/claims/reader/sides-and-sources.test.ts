@@ -145,6 +145,22 @@ describe('two sides of a heat engine', () => {
     ]);
   });
 
+  test('the temperature of a test room, a hall or a workshop, in a sentence that moves no heat, is set aside', () => {
+    const pendulum = read('The drive gave 2 mN from 40 W with no propellant. It was tested hanging from a 3 m pendulum in a room at 20 °C (invented test data).');
+    expect(temps(pendulum)).toEqual([['aside', 293.15]]);
+    const engine = read('The Stirling engine runs between a 90 °C head and a 25 °C jacket at 12 % efficiency. The thermostat says 24 °C in the hall; the cooling water leaves at 27 °C (invented test data).');
+    // (24 °C: the hall's; 27 °C: a third temperature beside the two sides named.)
+    expect(temps(engine)).toEqual([
+      ['hot', 363.15],
+      ['cold', 298.15],
+      ['aside', 297.15],
+      ['aside', 300.15],
+    ]);
+    // (A heat pump's room is its warm side: "heat is drawn from outdoor air at 14 °F and delivered to a room at 70 °F".)
+    const pump = read('The unit delivers 36,000 BTU/h of heat for 0.9 kW. Heat is drawn from outdoor air at 14 °F and delivered to a room at 70 °F (invented test data).');
+    expect(temps(pump).map(([r]) => r)).toEqual(['cold', 'hot']);
+  });
+
   test("a heat pump's condenser is its warm side, an engine's its cold side", () => {
     const pump = read('With water leaving the condenser at 35 °C and a 30 °C difference between that flow and the brine entering the evaporator, the heating COP of the BW-8 is 4.6 (invented test data).');
     expect(temps(pump)).toEqual([

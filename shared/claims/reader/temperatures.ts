@@ -104,6 +104,15 @@ const LONE_TEMPERATURE_USED_RE = new RegExp(
 /** Words of heat moved or delivered ("heat output", "source 5 °C, sink 35 °C", "a compressor"): a machine's sides may be meant. */
 const HEAT_WORDS_RE = /(?<!\p{L})(?:heat\w*|warmth|compressors?|sources?|sinks?|supply (?:air|water)|flow temperature|BTU\w*|COP|furnaces?|boilers?|kilns?|ovens?)(?!\p{L})/iu;
 
+/** Words of heat moved in a sentence: then its temperatures may be a machine's sides. */
+const HEAT_FLOW_RE =
+  /(?<!\p{L})(?:(?:draws?|drawing|drew|takes?|taking|took|extracts?|extracting|pulls?|pulling|absorbs?|collects?|harvests?|pumps?|moves?|rejects?|rejecting|dumps?|sheds?|gives? off|delivers?|supplies|releases?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth)|heat[^\S\n]+(?:(?:is|was|are|were|being)[^\S\n]+)?(?:(?:drawn|taken|extracted|pumped|moved|delivered|rejected|released|dumped|carried)[^\S\n]+)?(?:from|to|into|out of)|(?:hot|cold|warm|cool) (?:side|end|face|plate|junction|reservoir)|source|sink|evaporat\w*|condens\w*|Carnot)(?!\p{L})/iu;
+/** Just before a temperature: the place or the test it was of. */
+const PLACE_CONDITION_BEFORE_RE =
+  /(?<!\p{L})(?:(?:room|hall|lab|laboratory|workshop|building|chamber|gallery|clubroom|kiosk|garage|shed|office|site|field|venue|warehouse|cellar|basement)(?:[^\S\n]+(?:temperature|air))?(?:[^\S\n]+(?:was|is|were|stays?|stayed|must stay|remained|felt))?(?:[^\S\n]+(?:kept|held|heated|cooled|maintained|conditioned|set|air-conditioned))?(?:[^\S\n]+(?:at|to|between|of|:))?|(?:in|inside)[^\S\n]+(?:a|an|the)[^\S\n]+(?:closed[^\S\n]+|cold[^\S\n]+|warm[^\S\n]+|heated[^\S\n]+)?(?:room|hall|lab|workshop|building|chamber|garage|shed)[^\S\n]+(?:at|of|kept at|held at)|thermostat(?:[^\S\n]+(?:says|read|reads|set to|showed|shows))?|thermometer(?:[^\S\n]+(?:said|read|reads|showed|shows))?|outside(?:,)?[^\S\n]+it[^\S\n]+was|(?:outdoor|outside)[^\S\n]+temperature[^\S\n]+(?:was|fell to|rose to|of|reached)|(?:air[- ]conditioning|heating)[^\S\n]+(?:now[^\S\n]+)?holds|weather[^\S\n]+(?:was|of)|(?:at|on)[^\S\n]+(?:a|an)|in[^\S\n]+(?:a|an))[^\S\n]*(?:(?:about|around|roughly|some|nearly|only|just|a steady|a constant)[^\S\n]+)?$/iu;
+/** Right after a temperature: the place it was of ("a 31 °C workshop", "18 °C room temperature", "that evening"). */
+const PLACE_AFTER_RE = /^[^\S\n]*(?:(?:room|hall|lab|laboratory|workshop|building|gallery|clubroom|garage|shed|office)(?:[^\S\n]+temperature)?(?!\p{L})|(?:that|this|the)[^\S\n]+(?:evening|day|morning|night|afternoon)|overnight)/iu;
+
 export function relateTemperatures(text: string, drafts: Draft[]): void {
   // A temperature said again ("pipes at 120 °C … 'With 120 °C on the hot face …'", a critic quoting the
   // claim): the same side said twice, not the other side — set aside, the first one read.
@@ -212,6 +221,32 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
     !HEAT_WORDS_RE.test(text)
   ) {
     for (const t of thermal) t.role = 'aside';
+  }
+
+  // The conditions of a test or a place, in words of the place ("tested in a room at 20 °C", "the hall
+  // is kept at 24 °C", "the thermometer read 4 °C", "a 31 °C workshop", "the room must stay between
+  // 0 °C and 40 °C"), in a sentence that moves no heat and gives no efficiency or COP: the
+  // surroundings, set aside. (Where a heat pump or cooler is named, only when two other temperatures
+  // in other sentences are left to be its sides: its room may be its warm side.)
+  {
+    const movesHeat =
+      HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text) || /(?<!\p{L})(?:BTU\w*|heating (?:output|capacity|power)|heat output|of heating|of heat)(?!\p{L})/iu.test(text) || drafts.some((d) => d.kind === 'cop');
+    // (A text of temperatures alone keeps its sides: "The room is at 21 °C.")
+    const otherWorking = drafts.some((d) => d.kind !== 'temperature' && d.kind !== 'temperature-difference');
+    for (const t of otherWorking ? thermal : []) {
+      if (t.role === 'aside') continue;
+      const sentence = sentenceAround(text, t.start, t.end);
+      if (HEAT_FLOW_RE.test(sentence)) continue;
+      const k = sentenceOf(text, t);
+      if (drafts.some((d) => sentenceOf(text, d) === k && (d.kind === 'efficiency' || d.kind === 'cop' || d.kind === 'temperature-difference'))) continue;
+      const before = text.slice(Math.max(0, t.start - 60), t.start);
+      if (!PLACE_CONDITION_BEFORE_RE.test(before) && !PLACE_AFTER_RE.test(text.slice(t.end, t.end + 30))) continue;
+      if (movesHeat && thermal.filter((u) => u !== t && u.role !== 'aside' && sentenceOf(text, u) !== k).length < 2) continue;
+      t.role = 'aside';
+      // (And the other end of a range said with it: "between 5 °C and 35 °C".)
+      const next = thermal[thermal.indexOf(t) + 1];
+      if (next && /^[^\S\n]*(?:°[CF]?[^\S\n]*)?(?:to|and|[-–—…])[^\S\n]*$/u.test(text.slice(t.end, next.start))) next.role = 'aside';
+    }
   }
 
   // A heat pump's source is its cold side ("source side sits at 10 °C"), not an engine's hot source.
