@@ -161,6 +161,17 @@ describe('two sides of a heat engine', () => {
     expect(temps(pump).map(([r]) => r)).toEqual(['cold', 'hot']);
   });
 
+  test('"ΔT across the engine 170 °C", and a difference corrected to another, are differences', () => {
+    const f = read('Hot cap at 200 °C. ΔT across the engine 170 °C, corrected to 175 °C; shaft 2.4 W from 60 W (invented test data).');
+    expect(f.filter((x) => x.kind === 'temperature-difference').map((x) => [x.role, x.si])).toEqual([
+      ['aside', 170],
+      [null, 175],
+    ]);
+    // (A temperature "on a 35 °C pipe" after a difference named is a temperature.)
+    const pipe = read('It makes 50 mW from a 20 °C temperature difference on a 35 °C hot-water pipe (invented test data).');
+    expect(pipe.filter((x) => x.kind === 'temperature-difference').map((x) => x.si)).toEqual([20]);
+  });
+
   test("a heat pump's condenser is its warm side, an engine's its cold side", () => {
     const pump = read('With water leaving the condenser at 35 °C and a 30 °C difference between that flow and the brine entering the evaporator, the heating COP of the BW-8 is 4.6 (invented test data).');
     expect(temps(pump)).toEqual([

@@ -12,7 +12,13 @@ import { alt, COOLING_MACHINE_RE, HEAT_PUMP_RE, sentenceAround } from './context
 import { insertAfter, sentenceOf, siOf, typedSi, type Draft } from './draft';
 import { CARNOT_SHARE } from './kinds';
 
-const DIFF_BEFORE_RE = new RegExp(`(?<![\\p{L}])(?:${alt(DIFFERENCE_BEFORE)})(?!\\p{L})(?:[^\\S\\n]*(?:[=:≈~]|of|is|was|by|about|around|only|just|a|an|some|up to|nearly|roughly|approximately|just over|just under|over|under))*[^\\S\\n]*$`, 'iu');
+// ("ΔT across the engine 170 °C", "ΔT between the plates of 40 K": what the difference is across, between.)
+const DIFF_BEFORE_RE = new RegExp(
+  `(?<![\\p{L}])(?:${alt(DIFFERENCE_BEFORE)})(?!\\p{L})(?:[^\\S\\n]+(?:across|between|over|on)[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+)(?!(?:a|an)[^\\S\\n])[\\p{L}-]+(?:[^\\S\\n]+(?!(?:a|an)[^\\S\\n])[\\p{L}-]+)?)?(?:[^\\S\\n]*(?:[=:≈~]|~~|of|is|was|by|about|around|only|just|a|an|some|up to|nearly|roughly|approximately|just over|just under|over|under))*[^\\S\\n]*$`,
+  'iu',
+);
+/** Just before a figure that corrects the one before it: "170 °C, corrected to", "~~170 °C~~ corrected to". */
+const CORRECTED_FROM_RE = /(\d[\d.,]*)[^\S\n]*(?:°[^\S\n]*[CF]|K|degrees?(?:[^\S\n]+[CF])?)[^\S\n]*(?:~~)?[^\S\n]*,?[^\S\n]*(?:(?:was|were|since|later|then)[^\S\n]+)?(?:corrected|revised|amended|changed)(?:[^\S\n]+(?:down|up))?[^\S\n]+to[^\S\n]*$/iu;
 const DIFF_AFTER_RE = new RegExp(`[^\\S\\n]*(?:\\)[^\\S\\n]*)?(?:(?:temperature|thermal|of|the)[^\\S\\n]+){0,2}(?:${alt(DIFFERENCE_AFTER)})(?!\\p{L})`, 'iuy');
 
 /** A temperature read as a difference: "20 degC" of difference is "20 K"; "36 degF" is 20 K. */
@@ -41,6 +47,13 @@ export function isDifference(text: string, start: number, end: number, floor: nu
   const before = text.slice(Math.max(floor, start - 60), start);
   // A label of a sheet or a list: "ΔT source to flow: 40 K", "• Temperature lift (W35): 30 K".
   if (DIFF_LABEL_RE.test(before)) return true;
+  // A figure that corrects a difference just before it is a difference.
+  // (Looked for behind the floor: the corrected figure is the one read just before.)
+  const corrected = CORRECTED_FROM_RE.exec(text.slice(Math.max(0, start - 60), start));
+  if (corrected) {
+    const prevStart = Math.max(0, start - 60) + corrected.index;
+    if (isDifference(text, prevStart, prevStart + corrected[0].length, 0)) return true;
+  }
   if (DIFF_BEFORE_RE.test(before)) {
     // "only 20 °C" / "just 20 °C" alone are not differences: the clause must speak of one.
     const m = DIFF_BEFORE_RE.exec(before)!;
