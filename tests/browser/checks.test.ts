@@ -24,20 +24,22 @@ const phonePage = () => h.page(390, 844);
 
 type Watched = Page & { problems: string[] };
 /**
- * The page the last check ended on, which the next one goes on in: each check's own permalink is
- * opened in the running app (`goInApp`: the router reads the query as on a fresh load), while its
- * typed permalink is loaded afresh in a cleared profile, so every check is also computed from a cold
- * start. One page load a check instead of two; the first check loads its permalink.
+ * The page the last check ended on, which the next one goes on in. The first check opened loads both
+ * its permalinks (the typed one afresh in a profile cleared of cookies and storage), as a reader
+ * opening a shared link does; the others open theirs in the running app (`goInApp`: the router reads
+ * the query as on a fresh load), the check's screen left first so that it starts anew from the
+ * address alone. Two page loads for the file instead of two a check.
  */
 let carried: Watched | undefined;
-async function openPermalink(url: string, screen: string): Promise<Watched> {
+async function openPermalink(url: string, screen: string): Promise<{ page: Watched; loaded: boolean }> {
   const page = carried && !carried.isClosed() ? carried : await phonePage();
   carried = undefined;
   // The same path again would keep the screen (and its typed inputs) rather than read the new query.
-  if (page.url().startsWith(h.base) && new URL(page.url()).pathname !== new URL(url).pathname) await goInApp(page, url);
-  else await page.goto(url);
+  const loaded = !page.url().startsWith(h.base) || new URL(page.url()).pathname === new URL(url).pathname;
+  if (loaded) await page.goto(url);
+  else await goInApp(page, url);
   await byTestId(page, screen).waitFor();
-  return page;
+  return { page, loaded };
 }
 
 /** Every element whose testID starts with `prefix`, as name → exact SI value (data-si). */
@@ -88,7 +90,7 @@ describe.each(checkList.map((c) => [c.name, c] as const))('check %s at phone siz
   it('computes from its permalink as the server does, updates as the reader types, and the new permalink reproduces it', async () => {
     const defaults = Object.fromEntries(def.inputs.map((i) => [i.name, i.default]));
     const query = new URLSearchParams(defaults).toString();
-    const page = await openPermalink(`${h.base}/checks/${name}?${query}`, `screen-check-${name}`);
+    const { page, loaded } = await openPermalink(`${h.base}/checks/${name}?${query}`, `screen-check-${name}`);
     await byTestId(page, 'verdict').waitFor();
     const api = await apiCheck(name, defaults);
     await until('every output is shown', async () => Object.keys(await siValues(page, 'output-')).length === api.outputs.length);
@@ -107,10 +109,20 @@ describe.each(checkList.map((c) => [c.name, c] as const))('check %s at phone siz
     await until('the permalink carries the typed value', async () => new URL(page.url()).searchParams.get(change.name) === change.text);
     const permalink = page.url();
     expect(page.problems).toEqual([]);
-    // Closed first: the permalink opens in a profile cleared of cookies and storage, as before in a second one.
-    await page.close();
-    const again = await phonePage();
-    await again.goto(permalink);
+    let again: Watched;
+    if (loaded) {
+      // Closed first: the permalink opens in a profile cleared of cookies and storage, as before in a second one.
+      await page.close();
+      again = await phonePage();
+      await again.goto(permalink);
+    } else {
+      // Away to the kit's list (the check's screen unmounts with its typed inputs), then to the permalink.
+      await goInApp(page, `${h.base}/checks`);
+      await byTestId(page, 'screen-checks').waitFor();
+      await goInApp(page, permalink);
+      again = page;
+    }
+    await byTestId(again, `screen-check-${name}`).waitFor();
     await byTestId(again, 'verdict').waitFor();
     await until('the permalink shows every output', async () => Object.keys(await siValues(again, 'output-')).length === changed.outputs.length);
     expectSameNumbers(await siValues(again, 'output-'), changed.outputs);
@@ -130,7 +142,7 @@ it('evaluates a starter worksheet in the browser with the same numbers as the se
       body: JSON.stringify({ worksheet, values: {} }),
     });
     const server = (await res.json()) as { steps: { name: string; value?: { si: number } }[] };
-    const page = await openPermalink(`${h.base}/worksheets/${name}`, 'screen-worksheet');
+    const { page } = await openPermalink(`${h.base}/worksheets/${name}`, 'screen-worksheet');
     // Every worksheet's screen has the same testID: its title (set once its worksheet is loaded) tells them apart.
     await until(`worksheet ${name} is the one shown`, async () => (await page.title()).startsWith(`${worksheet.title} — `));
     const expected = server.steps.filter((s) => s.value);
