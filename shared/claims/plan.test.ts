@@ -365,6 +365,10 @@ describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
     'The element drew 2 kW for six hours, and the heat stored, calculated from the temperature rise of the salt, was 41 MJ: a charging efficiency of about 95 %.',
     // A report mentioning photovoltaics in passing: no cell's efficiency to hold to the light limits.
     'The heat store charges at about 95 % efficiency.\n\nA referee asked whether it can be charged from photovoltaic surplus; it can.',
+    // A worked example: "η = 3.1/172 = 0.018" is 1.8 %, not 3.1 (Carnot 90 °C / 50 °C: 11 %).
+    'Its hot face sits at 90 °C with a 40 °C difference across the module; it delivers 3.1 W while 172 W of heat passes through it. (b) η = 3.1/172 = 0.018, or 1.8 %.',
+    // The engine's efficiency set off by a clause, and a part's own (Carnot 650 °C / 40 °C: 66 % > 27 %).
+    'Brake thermal efficiency, measured as electrical output over heat absorbed at the head, was about 27 %. The heater head ran at about 650 °C and the rejector at 40 °C. The linear alternator by itself converts at 90 %.',
     // Another machine's power beside a thrust given with none: the photon bound needs the drive's own.
     "The sealed cone produced 40 mN of thrust with no propellant; its builder will not say the power. The exhibition also includes a ship's diesel rated at 400 hp.",
     // Light from outside reflected by the craft (up to 2P/c), and a galaxy's recession with the expansion of space.

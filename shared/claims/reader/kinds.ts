@@ -10,7 +10,7 @@ import type { FigureKind, FigureRole } from '../types';
 import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
 
 /** ", measured per §7 of the test protocol," between a COP and its value: a clause set off by commas. */
-const ASIDE = '(?:[^\\S\\n]*,[^,;.!?\\n]{3,60},)?';
+const ASIDE = '(?:[^\\S\\n]*,[^,;.!?\\n]{3,90},)?';
 const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|)»”"'’]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
 /** Between a COP and its value: the mode and whose it is ("COP in cooling of", "heating COP of the BW-8 is"). */
 const COP_OWNER = '(?:[^\\S\\n]+(?:in|for|when)[^\\S\\n]+(?:heating|cooling)(?:[^\\S\\n]+mode)?)?(?:[^\\S\\n]+(?:of|for)[^\\S\\n]+(?:the|this|our|its|each|every|a|an)[^\\S\\n]+(?:[\\p{L}\\p{N}-]+[^\\S\\n]+){0,2}?[\\p{L}\\p{N}][\\p{L}\\p{N}-]*(?=[^\\S\\n]+(?:is|was|of|at|=|:)))?';
@@ -20,11 +20,14 @@ const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?
 /** 1 BTU_IT/h = 0.293 071 1 W (NIST SP 811, Appendix B.8). */
 const BTU_PER_H_IN_W = 0.29307107;
 const COP_WORDS_BEFORE_RE = new RegExp(`(?<!\\p{L})coefficients?[\\s-]+of[\\s-]+performance(?:[^\\S\\n]*\\(COP\\))?${COP_OWNER}${ASIDE}${CONNECT}$`, 'iu');
-const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|η(?:_?(?:th|thermal|c|Carnot))?|eta(?:_?(?:th|thermal))?)(?!\\p{L})${CONNECT}$`, 'iu');
+/** A worked expression between a symbol and its result: "η = 3.1/172 = 0.018". */
+const EXPRESSION = '(?:[^\\S\\n]*[=≈][^\\S\\n]*[\\d.,]+(?:[^\\S\\n]*[/×*÷][^\\S\\n]*[\\d.,]+)+)?';
+const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|η(?:_?(?:th|thermal|c|Carnot))?|eta(?:_?(?:th|thermal))?)(?!\\p{L})${ASIDE}${EXPRESSION}${CONNECT}$`, 'iu');
 const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})([^\\d.;!?\\n]{0,60})$`, 'iu');
 const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');
 /** "efficiency … 45%": the keyword, then up to 60 characters without digits or a sentence break. */
-const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip)(?!\p{L})([^\d.;!?\n]{0,60})$/iu;
+// (", measured as electrical output over heat absorbed at the head, was about 27 %": a clause set off by commas between.)
+const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip)(?!\p{L})((?:[^\S\n]*,[^,\d.;!?\n]{3,90},)?[^\d.;!?\n]{0,60})$/iu;
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
 const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)|round[- ]?trip(?:[^\S\n]+efficiency)?)(?!\p{L})/iuy;
@@ -146,7 +149,8 @@ export function readPercent(text: string, start: number, end: number, floor: num
   PERCENT_OF_HEAT_RE.lastIndex = end;
   SHARE_AS_WORK_RE.lastIndex = end;
   const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text) || percentOfHeatThrough(text, end);
-  const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before);
+  // (A clause set off by commas may take the efficiency word further back than the usual window.)
+  const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before) ?? EFFICIENCY_PERCENT_BEFORE_RE.exec(text.slice(Math.max(floor, start - BEFORE_WINDOW - 90), start));
   // "Ammonia–water cycle engine, 19 % at a 120 °C heat source": a percentage said right after a heat
   // engine named, with a temperature in the same sentence, is its efficiency.
   const engineSaid =
@@ -181,6 +185,9 @@ const MOVES_HEAT_RE = /(?<!\p{L})(heating|cooling)[^\S\n]+(?:COP|C\.O\.P\.|coeff
 /** The kind of a bare number, from the words before it; a gain or ratio from the words after. */
 export function bareKind(text: string, start: number, end: number, floor: number): { kind: FigureKind; role?: FigureRole; derived?: string; factor?: number } | null {
   const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start);
+  // An operand of a worked division or product ("η = 3.1/172 = 0.018"): a step, not a figure; the
+  // result after "=" is read.
+  if (/^[^\S\n]*[/×*÷][^\S\n]*\d/u.test(text.slice(end, end + 6)) || /\d[^\S\n]*[/×*÷][^\S\n]*$/u.test(before)) return null;
   if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before)) return { kind: 'cop' };
   if (EER_BEFORE_RE.test(before)) return { kind: 'cop', role: 'cooling', factor: BTU_PER_H_IN_W, derived: 'COP = EER × 0.293 071 (BTU/h per watt to watts per watt)' };
   if (QE_BEFORE_RE.test(before) && /(?:[=:]|of|is|was|reaching|above|over|exceeding)[^\S\n]*$/i.test(before)) return { kind: 'quantum-efficiency' };

@@ -27,6 +27,9 @@ const SAME_SIDE_LIST_RE =
   /^[^.;!?\n]{0,80}?(?:,[^\S\n]*)?(?<!\p{L})(?:and|or|but|while)[^\S\n]+(?:(?:under|over|about|around|nearly|up to|at most|less than|more than|just|only|some|roughly|barely|below|above)[^\S\n]+)*$/iu;
 /** Right after a figure: the condition it holds at ("in town traffic", "at idle", "on a cloudy day", "when cold"). */
 const CONDITION_AFTER_RE = /^[^\S\n]*(?:in|on|at|during|when|while|under)[^\S\n]+(?!(?:the[^\S\n]+)?(?:output|input|load|battery|grid|water|house|tank|port)(?!\p{L}))\p{L}/iu;
+/** Just before a part's own efficiency: "the alternator by itself converts at", "the inverter's efficiency is". */
+const PART_EFFICIENCY_BEFORE_RE =
+  /(?<!\p{L})(?:alternators?|inverters?|gearbox(?:es)?|transmissions?|rectifiers?|converters?|controllers?|chargers?|(?:electric |drive )?motors?|pumps?|fans?|bearings?|power electronics)(?:'s?)?(?:[^\S\n]+(?:by itself|alone|on its own|itself))?[^.;!?\n]{0,30}?(?<!\p{L})(?:converts?|converting|runs?|reaches|achieves|manages|has|is|of|efficiency(?:[^\S\n]+(?:is|of|was))?)(?:[^\S\n]+(?:at|about|around|roughly|some|an?))*[^\S\n]*$/iu;
 /** Machines that are not a drive: a power said of one is not what drives a thrust beside it. */
 const ANOTHER_MACHINE_RE =
   /(?<!\p{L})(?:diesels?|petrol|gasoline|locomotives?|tractors?|cars?|trucks?|lorr(?:y|ies)|boilers?|furnaces?|kettles?|heaters?|ovens?|hair ?dryers?|vacuum cleaners?|lawn ?mowers?|motorbikes?|motorcycles?|outboards?|ship's|ships?|ferr(?:y|ies)|generating sets?|gensets?|wind turbines?|power stations?|power plants?)(?!\p{L})/iu;
@@ -95,6 +98,12 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     else drafts.splice(at, 0, d);
   }
   const energyLike = (d: Draft) => d.kind === 'power' || d.kind === 'energy';
+  // "The linear alternator by itself converts at 90 %": the efficiency of a part, beside the machine's
+  // own, is not the machine's.
+  const efficiencies = drafts.filter((d) => d.kind === 'efficiency' && d.role === null && !d.derived);
+  if (efficiencies.length >= 2) {
+    for (const d of efficiencies) if (PART_EFFICIENCY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 70), d.start))) d.role = 'aside';
+  }
   // A force of the instrument or of a reckoning, not the device's ("the balance resolves 0.05 mN",
   // "calibrated against a 25 µN reference force", "P/c would allow 33 µN"): set aside, when the text
   // gives another thrust or thrust per power.
