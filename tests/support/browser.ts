@@ -38,8 +38,10 @@ export interface Harness {
   page(width: number, height: number, colorScheme?: 'light' | 'dark', opts?: { held?: boolean }): Promise<Page & { problems: string[] }>;
   /**
    * A new page in a fresh context of its own (cold caches, its own cookie jar) at this viewport; page
-   * errors are collected in `problems`. Close its context when done. (Measured: moving these pages
-   * into the profile pool as well saved nothing over the whole browser project.)
+   * errors are collected in `problems`. Close its context when done. (Measured, file by file: `page`
+   * is faster where a file opens one page at a time and each loads the app once or more (the entry
+   * page, shell and search tests: 1–4 s a file); where typing and saving take the time (desk, claim
+   * check) or pages are open side by side, each needing a Chromium of its own, no difference showed.)
    */
   open(width: number, height: number): Promise<Page & { problems: string[] }>;
   close(): Promise<void>;
