@@ -205,6 +205,16 @@ describe('first-law balances', () => {
     expect(fl.assumptions.join(' ')).toMatch(/does not depend on how long/);
   });
 
+  it('inputs said in different sentences are statements of one input (the largest taken); named forms, or parts in one sentence, are added', () => {
+    const ledger = (text: string) => out(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')!, 'over_unity');
+    // The claim's 25.2 W in, 32.4 W out; a tester's 28 W drawn in another sentence: the larger input, 28 W.
+    expect(ledger('The manuscript claims 25.2 W in and 32.4 W out. Our calorimeter found the unit drew 28 W from the battery (invented test data).')).toBeCloseTo(32.4 / 28, 9);
+    // Electricity and gas, each named: all that goes in, 2 kW + 3 kW.
+    expect(ledger('It takes 2 kW of electricity. It also burns 3 kW of gas. It delivers 4 kW of heat (invented test data).')).toBeCloseTo(4 / 5, 9);
+    // Two parts in one sentence: added.
+    expect(ledger('It draws 40 W from the mains and draws 60 W from its battery, and delivers 90 W (invented test data).')).toBeCloseTo(90 / 100, 9);
+  });
+
   it('a power in and an energy out over a stated run', () => {
     const text = 'Over a 72-hour run the generator delivered 90 kWh while its controller drew 400 W (invented test data).';
     const { checks } = runClaimChecks(extractFigures(text), { text });

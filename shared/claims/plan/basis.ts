@@ -65,6 +65,21 @@ function formOf(f: Figure, text: string): string | null {
   return null;
 }
 
+/** Which sentence a place in the text is in (its start). */
+function sentenceKey(text: string, at: number): number {
+  const head = text.slice(0, at);
+  const m = /[\s\S]*(?:[.!?]["”’')\]]*\s|\n)/u.exec(head);
+  return m ? m[0].length : 0;
+}
+
+/** The form of an input named after it: electricity, fuel or gas, heat, work. */
+function inputFormOf(f: Figure, text: string): string | null {
+  if (f.end === null || f.start === null) return null;
+  const near = text.slice(Math.max(0, f.start - 30), f.end + 40).toLowerCase();
+  if (/(?:fuel|gas|diesel|petrol|gasoline|propane|wood|coal|hydrogen)/.test(near)) return 'fuel';
+  return formOf(f, text);
+}
+
 /**
  * Several figures on one side: all that goes in is added up (a supply and a signal; counting more in is
  * kinder to the claim); what comes out is added up only where the text names different forms of it
@@ -81,6 +96,13 @@ function combine(figs: Figure[], side: 'in' | 'out', text: string): Figure | und
   } else {
     // A derived input (a power from a current and a voltage) that equals the others added up repeats them.
     parts = distinct.filter((f) => !(f.derived && Math.abs(f.si - distinct.filter((g) => g !== f).reduce((a, g) => a + g.si, 0)) <= 0.01 * f.si));
+    // Inputs said in different sentences, not named as different forms (electricity and gas), are
+    // several statements of one input — the claim's and a tester's, a rating and a reading, one
+    // device's and another's — not parts of it: the largest is taken (still the end kinder to the claim).
+    const sentences = new Set(parts.map((f) => (f.start === null ? null : sentenceKey(text, f.start))));
+    const forms = parts.map((f) => inputFormOf(f, text));
+    const named = forms.every((x) => x !== null) && new Set(forms).size === forms.length;
+    if (parts.length > 1 && !sentences.has(null) && sentences.size === parts.length && !named) return [...parts].sort((a, b) => (b.upper?.si ?? b.si) - (a.upper?.si ?? a.si))[0];
   }
   const si = parts.reduce((a, f) => a + f.si, 0);
   const up = parts.reduce((a, f) => a + (f.upper?.si ?? f.si), 0);
