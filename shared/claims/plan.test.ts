@@ -112,6 +112,16 @@ describe('texts that say no propellant in other words, or leave out the thrust (
     const cart = 'The cart gives a steady push of 0.9 N from a 200 W motor swinging two weights; nothing leaves the cart. Try it floating freely, no tether, and see if it accelerates.';
     expect(planned(cart).checks).toContainEqual(['photon-bound', 'breaks']);
   });
+  it('a run in a chamber pumped to a low pressure is in vacuum; an agenda line or a list of artefacts to rule out names no propellant of the claim', () => {
+    // 85 µN ≫ P/c = 15 W / c = 5.0e-8 N.
+    const vac =
+      'In air the familiar ion wind explains everything. They now report 85 µN from the capacitor at 15 W of input in a chamber pumped to 2 × 10⁻⁵ mbar, and state that nothing leaves the electrodes. They must exclude field emission, which does eject mass.';
+    expect(planned(vac).checks).toContainEqual(['photon-bound', 'breaks']);
+    // 0.44 µN < P/c = 200 W / c = 0.67 µN: consistent, with the photon bound run.
+    const lecture = 'Not all propellant-free forces are exotic: a probe radiating 200 W of waste heat recoils with about 0.44 µN.\nNext lecture: solar radiation pressure, where reflection can give up to twice P/c.';
+    expect(planned(lecture).checks).toContainEqual(['photon-bound', 'consistent']);
+  });
+
   it('an electrospray thruster emitting droplets carries propellant, whatever class the matcher names', () => {
     const text = 'Electrospray thrusters of this design manage 50–70 µN/W while emitting droplets of ionic liquid.';
     const { checks } = runClaimChecks(extractFigures(text), { text, classes: ['propellant-free-thrust'] });

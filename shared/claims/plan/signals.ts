@@ -50,8 +50,11 @@ const VACUUM_CLAIM_RE =
 const RUN_IN_VACUUM_RE =
   /(?<!\p{L})(?:(?:pumped(?:[^\S\n]+down)?|evacuated|held|kept)[^\S\n]+to[^\S\n]+(?:a[^\S\n]+)?(?:high|hard|deep|full)[^\S\n]+vacuum|(?:ran|run|tested|operated|measured)[^\S\n]+(?:it[^\S\n]+|them[^\S\n]+)?(?:in|inside)[^\S\n]+(?:a[^\S\n]+|the[^\S\n]+)?(?:hard[^\S\n]+|high[^\S\n]+)?vacuum(?:[^\S\n]+chamber)?)(?!\p{L})/iu;
 /** A result that says nothing was left in vacuum ("no lift", "the thrust vanished"): then vacuum is not claimed. */
-const NOTHING_IN_VACUUM_RE = /(?<!\p{L})(?:no (?:measurable )?(?:lift|thrust|force)|nothing|vanish\w*|disappear\w*|ceased|stopped|fell to zero|dropped to zero|did not (?:lift|rise|move))(?!\p{L})/iu;
-const vacuumClaimed = (text: string): boolean => VACUUM_CLAIM_RE.test(text) || (RUN_IN_VACUUM_RE.test(text) && !NOTHING_IN_VACUUM_RE.test(text));
+const NOTHING_IN_VACUUM_RE = /(?<!\p{L})(?:no (?:measurable )?(?:lift|thrust|force)|nothing (?:happened|was (?:measured|seen|detected|recorded|left)|moved|registered|showed|remained)|vanish\w*|disappear\w*|ceased|stopped|fell to zero|dropped to zero|did not (?:lift|rise|move))(?!\p{L})/iu;
+/** "a chamber pumped to 2 × 10⁻⁵ mbar": run in vacuum, said as a pressure. */
+const PUMPED_TO_PRESSURE_RE = /(?<!\p{L})(?:pumped|evacuated)(?:[^\S\n]+down)?[^\S\n]+to[^\S\n]+(?:about[^\S\n]+|below[^\S\n]+)?[\d.,]+(?:[^\S\n]*[×x][^\S\n]*10[⁻\-−]?[⁰¹²³⁴⁵⁶⁷⁸⁹\d]+|e-\d+)?[^\S\n]*(?:mbar|millibar|Pa|torr)(?!\p{L})/iu;
+const vacuumClaimed = (text: string): boolean =>
+  VACUUM_CLAIM_RE.test(text) || ((RUN_IN_VACUUM_RE.test(text) || PUMPED_TO_PRESSURE_RE.test(text)) && !NOTHING_IN_VACUUM_RE.test(text));
 
 /** A thruster whose exhaust is light: there "rocket" ("light is a terrible rocket") names no propellant. */
 const PHOTON_ROCKET_RE = /(?<!\p{L})(?:photon[- ](?:thrusters?|rockets?|drives?|propulsion)|laser[- ](?:thrusters?|propulsion)|light (?:is|as) (?:its|the|a)[^.;!?\n]{0,20}(?:exhaust|rocket))(?!\p{L})/iu;
@@ -71,7 +74,7 @@ const NEGATED_WORD_ALL_RE = /(?<!\p{L})(?:no|without(?: an?)?|never)[^\S\n]+(?:a
 const OWN_VOICE_RE = /(?<!\p{L})(?:our|ours|we|us|my|mine)(?!\p{L})/iu;
 /** A sentence that compares, asks, or moves on to another subject: its propulsion words are not the claim's. */
 const ASIDE_SENTENCE_RE =
-  /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|versus|vs\.?|unlike|rather than|instead of|replaces?|replacing|will replace)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month)|also on the agenda)|^[\s"“'‘>*•-]*(?:(?:most|all|ordinary|conventional|chemical|electric|ion|plasma|Hall|today's|existing|other)[\s-]+)*(?:rockets|engines|thrusters|drives|spacecraft)[^\S\n]+(?:are|have|need|must|carry|use|burn|work|get|throw)(?!\p{L})/iu;
+  /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|versus|vs\.?|unlike|rather than|instead of|replaces?|replacing|will replace)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month|lecture|lesson|class|chapter|episode|issue|talk)|also on the agenda)|(?<!\p{L})(?:(?:must|should|need to|needs to|to|first) (?:exclude|rule out)|alternative explanations?|candidate explanations?|artefacts?|artifacts?)(?!\p{L})|^[\s"“'‘>*•-]*(?:(?:most|all|ordinary|conventional|chemical|electric|ion|plasma|Hall|today's|existing|other)[\s-]+)*(?:rockets|engines|thrusters|drives|spacecraft)[^\S\n]+(?:are|have|need|must|carry|use|burn|work|get|throw)(?!\p{L})/iu;
 /**
  * Where the text says plainly that nothing is thrown out, the words of propellant that count are those of
  * the claim's own sentences: not of a comparison ("how does that compare with an ion engine?"), a question,
