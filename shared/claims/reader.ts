@@ -75,7 +75,20 @@ export function extractFigures(text: string): Figure[] {
   });
 }
 
+/** A dotted leader between a label and its value in a table set as text ("Conversion efficiency ...... 5,5 %"). */
+const LEADER_RE = /[^\S\n]*(?:\.{3,}|…+|·{3,}|_{3,})[^\S\n]*(?=[-−+~≈]?\d)/gu;
+
 function readPlain(text: string): Figure[] {
+  // A leader is read as the colon it stands for, blanked to the same length so offsets are kept.
+  if (LEADER_RE.test(text)) {
+    LEADER_RE.lastIndex = 0;
+    const led = text.replace(LEADER_RE, (m) => `:${' '.repeat(m.length - 1)}`);
+    return readUnled(led).map((f) => (f.start === null || f.end === null ? f : { ...f, text: text.slice(f.start, f.end) }));
+  }
+  return readUnled(text);
+}
+
+function readUnled(text: string): Figure[] {
   const restated: [number, number][] = [];
   const figures = readFigures(text, restated);
   if (restated.length === 0) return figures;

@@ -85,3 +85,17 @@ describe('claims pasted from sheets and lists', () => {
     expect(read('The probe has a 3,000 s ion engine.').map((x) => x.kind)).toEqual(['specific-impulse']);
   });
 });
+
+describe('a table set as text with dotted leaders (invented test data)', () => {
+  test('the leader stands for the colon between a label and its value', () => {
+    const text = 'Key data:\n  Thermal power of the heat source ........ 2.0 × 10³ W\n  Electrical output ....................... 1.1e2 W\n  Conversion efficiency ................... 5,5 %\n';
+    const f = extractFigures(text);
+    expect(f.map((x) => [x.kind, x.role, x.text])).toEqual([
+      ['power', 'in', '2.0 × 10³ W'],
+      ['power', 'out', '1.1e2 W'],
+      ['efficiency', null, '5,5 %'],
+    ]);
+    expect(f[2].si).toBeCloseTo(0.055, 12);
+    for (const x of f) expect(text.slice(x.start!, x.end!)).toBe(x.text);
+  });
+});
