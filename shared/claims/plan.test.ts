@@ -109,6 +109,9 @@ describe('texts that say no propellant in other words, or leave out the thrust (
     const text =
       'A startup says its gyroscope drive will replace rocket engines. It produces 0.4 newtons of thrust for every kilowatt of electricity, without throwing anything out of the back. "Ion engines are lovely, but they have to carry their propellant," the inventor says.';
     expect(planned(text).checks).toContainEqual(['photon-bound', 'breaks']);
+    // A mass inside the device that it pushes on is no reaction mass thrown out (0.8 mN ≫ 150 W / c = 0.5 µN).
+    const stack = 'A piezo stack driven with 150 W pushes and pulls on a brass reaction mass, giving a steady thrust of 0.8 mN with no propellant.';
+    expect(planned(stack).checks).toContainEqual(['photon-bound', 'breaks']);
     const cart = 'The cart gives a steady push of 0.9 N from a 200 W motor swinging two weights; nothing leaves the cart. Try it floating freely, no tether, and see if it accelerates.';
     expect(planned(cart).checks).toContainEqual(['photon-bound', 'breaks']);
   });

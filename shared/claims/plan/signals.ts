@@ -68,8 +68,9 @@ const AIR_PUSHER_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?|ele
 /** A plain statement that nothing is thrown out ("with no propellant", "needs no propellant at all"). */
 const EXPLICIT_NO_PROPELLANT_RE =
   /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)|without (?:throwing|expelling|ejecting|blowing) (?:anything|anything at all|any mass)(?: out)?|throws? nothing (?:out|away|overboard))(?!\p{L})/iu;
-/** A propulsion word said not to be there: "no tether", "without a fan", "no nozzle". */
-const NEGATED_WORD_ALL_RE = /(?<!\p{L})(?:no|without(?: an?)?|never)[^\S\n]+(?:any[^\S\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?)(?!\p{L})/giu;
+/** A propulsion word said not to be there ("no tether", "without a fan"), or a mass inside the device pushed on ("on a brass reaction mass"). */
+const NEGATED_WORD_ALL_RE =
+  /(?<!\p{L})(?:(?:no|without(?: an?)?|never)[^\S\n]+(?:any[^\S\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?)|(?:on|against)[^\S\n]+(?:a|an|the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?reaction mass(?:es)?)(?!\p{L})/giu;
 /** The claimant's own voice. */
 const OWN_VOICE_RE = /(?<!\p{L})(?:our|ours|we|us|my|mine)(?!\p{L})/iu;
 /** A sentence that compares, asks, or moves on to another subject: its propulsion words are not the claim's. */
