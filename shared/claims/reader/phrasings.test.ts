@@ -197,6 +197,24 @@ describe('more ways claims are written (issue 11)', () => {
     ]);
   });
 
+  test('"1,450 kg when fuelled and 380 kg when its tanks are empty; the difference is propellant"; "5,000 kg, fuelled;"', () => {
+    const masses = (text: string) => read(text).filter((x) => x.kind === 'mass').map((x) => [x.role, x.si]);
+    expect(masses('The kick stage has a mass of 1,450 kg when fuelled and 380 kg when its tanks are empty; the 1,070 kg difference is propellant. Isp 318 s.')).toEqual([
+      ['wet', 1450],
+      ['dry', 380],
+      ['propellant', 1070],
+    ]);
+    expect(masses('Mass at separation 5,000 kg, fuelled; dry mass 2,400 kg; exhaust velocity 4.4 km/s.')).toEqual([
+      ['wet', 5000],
+      ['dry', 2400],
+    ]);
+    // (In a list, the word after the comma is the next item's: "wet mass 4,200 kg, dry mass 1,100 kg".)
+    expect(masses('Upper stage: wet mass 4,200 kg, dry mass 1,100 kg, Isp 340 s.')).toEqual([
+      ['wet', 4200],
+      ['dry', 1100],
+    ]);
+  });
+
   test('"specific impulse in vacuum is 65 s"; "3.4 kg at lift-off, of which 0.9 kg was propellant"', () => {
     const f = read('The satellite is 4.0 kg at launch; the thruster\'s specific impulse in vacuum is 65 s.');
     expect(f.find((x) => x.kind === 'specific-impulse')?.si).toBe(65);
