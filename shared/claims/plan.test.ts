@@ -7,6 +7,7 @@
 import { runCheck } from '../checks/run';
 import { formatQuantity, parseQuantity } from '../worksheet/quantity';
 import { claimSignals, planChecks, readSignals, runClaimChecks, signalledClasses } from './plan';
+import { LONG_DOCUMENT_NOTE } from './plan/run';
 import { extractFigures } from './reader';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from './types';
 
@@ -361,6 +362,16 @@ describe('figures of one finding said far apart', () => {
     const apart = `The bench unit draws 200 W from the mains.\n\n${filler}\n\nIt puts out 350 W.`;
     const typed = extractFigures(apart).map((f) => ({ ...f, start: null, end: null }));
     expect(runClaimChecks(typed, { text: apart }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+});
+
+describe('a long document with many figures', () => {
+  it('is said to need its figures checked before a result is cited; a short claim is not', () => {
+    const para = (i: number) => `Run ${i}: the rig drew ${100 + i} W and gave ${50 + i} W; the room was at ${20 + i} °C.`;
+    const long = [1, 2, 3, 4].map(para).join('\n\n');
+    expect(runClaimChecks(extractFigures(long), { text: long }).notes[0]).toBe(LONG_DOCUMENT_NOTE);
+    const short = 'The rig drew 100 W and gave 50 W.';
+    expect(runClaimChecks(extractFigures(short), { text: short }).notes).not.toContain(LONG_DOCUMENT_NOTE);
   });
 });
 

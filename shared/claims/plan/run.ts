@@ -137,7 +137,21 @@ export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { chec
       sentence: sentenceOf(p.check, run),
     });
   }
+  // A long document with many figures (a report, a feature, worked examples): measured on such texts
+  // written blind, the reader takes a figure of something else for the claim's far more often than in
+  // a claim stated on its own (README, "How right it is"); the reader is told so, beside the result.
+  if ((out.length > 0 || needs.length > 0) && longDocument(ctx.text ?? '', figures)) notes.unshift(LONG_DOCUMENT_NOTE);
   return { checks: out, needs, notes };
+}
+
+/** Said beside the result of a long document with many figures. */
+export const LONG_DOCUMENT_NOTE =
+  'A long text with many figures: a figure of something else (another device, a test rig, a critic’s estimate, a worked step) may have been read as the claim’s. Check the part each figure plays, and correct it, before citing a result.';
+
+/** Over 1,200 characters or several paragraphs, with eight figures or more read from the text. */
+function longDocument(text: string, figures: Figure[]): boolean {
+  const placed = figures.filter((f) => f.start !== null && !f.derived).length;
+  return placed >= 8 && (text.length > 1200 || (text.match(/\n[^\S\n]*\n/g) ?? []).length >= 2);
 }
 
 /** The plans as the contract's PlannedCheck (inputs at the lower ends): for tests and the screen. */
