@@ -154,7 +154,9 @@ export function createApp(opts: AppOptions): express.Express {
   const rateLimits = rateLimiters({ ...rateLimitsFromEnv(), ...opts.rateLimits }, { sequelize: opts.sequelize, cleanupMs: opts.rateLimitCleanupMs, logger });
   const limits = rateLimits.handlers;
   // Worksheets, checks and claim checks run in worker threads, never on the event loop (issue 13).
-  const compute = new ComputePool({ ...computeConfig(), ...opts.compute }, logger);
+  // Test apps keep no spare thread unless they ask (`compute: { spare: true }`): most compute a few
+  // quick jobs and never end a thread, and loading one more worker only slowed them (server/compute/pool.ts).
+  const compute = new ComputePool({ ...computeConfig(), spare: env !== 'test', ...opts.compute }, logger);
   // Started at once (a server that cannot compute says so in its first log lines); under tests only
   // when first needed, so that the many test apps that never compute load no worker thread.
   if (env !== 'test') void compute.start();

@@ -1,6 +1,7 @@
 /**
  * The compute pool (issue 13, item 1) under jest: computations run in worker threads that load our
- * TypeScript with tsx; a job over the wall-clock limit is ended (422) and the pool goes on; a full
+ * TypeScript with tsx; a job over the wall-clock limit is ended (422) and the pool goes on, its warm
+ * spare thread taking the next job before the ended thread's replacement has loaded; a full
  * queue answers 503 with Retry-After; a pool that cannot start answers 503 and computes nothing on
  * the main thread; and health checks and searches keep answering while four clients hammer the
  * slowest legal worksheet. No timed assertions: how fast they answer is `npm run bench`'s figure.
@@ -11,9 +12,13 @@ import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import type { AppLocals } from '../../server/app';
+import type { ComputePool, ComputePoolState } from '../../server/compute/pool';
 import { startTestApp, type TestApp } from '../support/app';
 
 jest.setTimeout(240_000);
+
+// Every pool here keeps its warm spare thread (`spare: true`), as a server's pool does; test apps
+// elsewhere go without it unless they ask (server/app.ts).
 
 /**
  * The slowest legal worksheet we found: 60 steps (the schema's most), each the product of 100
@@ -43,11 +48,23 @@ const F_1kW = 1000 / 299_792_458;
 const evaluate = (target: Parameters<typeof request>[0], body: object) => request(target).post('/api/worksheets/evaluate').send(body);
 const pool = (h: TestApp) => (h.app.locals as unknown as AppLocals).compute;
 
+/** Resolves once `n` of the pool's threads have loaded and warmed up (the pool's own 'warm' events). */
+const warmed = (p: ComputePool, n: number) =>
+  new Promise<void>((resolve) => {
+    const check = () => {
+      if (p.state().warm.length < n) return;
+      p.events.off('warm', check);
+      resolve();
+    };
+    p.events.on('warm', check);
+    check();
+  });
+
 describe('a pool with a 1 s limit per job', () => {
   let h: TestApp;
   let server: http.Server;
   beforeAll(async () => {
-    h = await startTestApp({ starterEntries: true, searchRefreshMs: 0, compute: { timeoutMs: 1000, threads: 1, queueMax: 16 } });
+    h = await startTestApp({ starterEntries: true, searchRefreshMs: 0, compute: { timeoutMs: 1000, threads: 1, queueMax: 16, spare: true } });
     server = h.app.listen(0, '127.0.0.1');
     await pool(h).ready();
   });
@@ -61,6 +78,40 @@ describe('a pool with a 1 s limit per job', () => {
     expect(pool(h).startError).toBeNull();
     const res = await evaluate(server, quick).expect(200);
     expect(res.body.steps[0].value.si).toBeCloseTo(F_1kW, 18);
+  });
+
+  it('keeps a warm spare thread, which takes the next job at once when a thread is ended at the limit', async () => {
+    const p = pool(h);
+    // threads: 1, and the spare; both loaded and warmed before the slow job.
+    expect(p.state().threads).toHaveLength(2);
+    await warmed(p, 2);
+    const log: string[] = [];
+    let atEnd: ComputePoolState | null = null;
+    const onWarm = (id: number) => log.push(`warm ${id}`);
+    const onBegin = (id: number) => log.push(`begin ${id}`);
+    const onEnded = (id: number, why: string) => {
+      log.push(`ended ${id} ${why}`);
+      atEnd = p.state();
+    };
+    p.events.on('warm', onWarm).on('begin', onBegin).on('ended', onEnded);
+    try {
+      expect((await evaluate(server, { worksheet: slowWorksheet() })).status).toBe(422);
+      const next = await evaluate(server, quick).expect(200);
+      expect(next.body.steps[0].value.si).toBeCloseTo(F_1kW, 18);
+    } finally {
+      p.events.off('warm', onWarm).off('begin', onBegin).off('ended', onEnded);
+    }
+    const [slow, spare] = log.filter((l) => l.startsWith('begin ')).map((l) => Number(l.slice(6)));
+    // In this order, with no thread warming up in between: the next job did not wait for a thread to load.
+    expect(log.slice(0, 3)).toEqual([`begin ${slow}`, `ended ${slow} time`, `begin ${spare}`]);
+    expect(spare).not.toBe(slow);
+    // The moment the slow job's thread was ended: the spare had warmed up and stood idle, and the
+    // pool still held two threads (the ended one gone, its replacement loading), never three.
+    const s = atEnd as ComputePoolState | null;
+    expect(s?.warm).toContain(spare);
+    expect(s?.busy).not.toContain(spare);
+    expect(s?.threads).toHaveLength(2);
+    expect(s?.threads).not.toContain(slow);
   });
 
   it('ends a job over the limit with 422 in our error shape, and computes the next one', async () => {
@@ -81,10 +132,15 @@ describe('a pool with a 1 s limit per job', () => {
     });
     const health: number[] = [];
     const search: number[] = [];
+    let mostThreads = 0;
+    let mostBusy = 0;
     const reads = (async () => {
       while (hammering) {
         health.push((await request(server).get('/api/health')).status);
         search.push((await request(server).get('/api/search').query({ q: 'propellant-free thrust' })).status);
+        const now = pool(h).state();
+        mostThreads = Math.max(mostThreads, now.threads.length);
+        mostBusy = Math.max(mostBusy, now.busy.length);
       }
     })();
     const hammered = await clients;
@@ -97,6 +153,9 @@ describe('a pool with a 1 s limit per job', () => {
     expect(health.length).toBeGreaterThanOrEqual(4);
     expect(new Set(health)).toEqual(new Set([200]));
     expect(new Set(search)).toEqual(new Set([200]));
+    // One thread computing and the spare, while threads were ended and replaced; never two jobs at once.
+    expect(mostThreads).toBe(2);
+    expect(mostBusy).toBe(1);
   });
 });
 
@@ -104,7 +163,7 @@ describe('a full queue', () => {
   let h: TestApp;
   let server: http.Server;
   beforeAll(async () => {
-    h = await startTestApp({ demoAccounts: false, compute: { timeoutMs: 1000, threads: 1, queueMax: 1 } });
+    h = await startTestApp({ demoAccounts: false, compute: { timeoutMs: 1000, threads: 1, queueMax: 1, spare: true } });
     server = h.app.listen(0, '127.0.0.1');
     await pool(h).ready();
   });
@@ -133,7 +192,7 @@ describe('a pool that cannot start', () => {
     dir = fs.mkdtempSync(path.join(os.tmpdir(), 'cw-broken-worker-'));
     const filename = path.join(dir, 'worker.mjs');
     fs.writeFileSync(filename, "throw new Error('this worker cannot load');\n");
-    h = await startTestApp({ demoAccounts: false, compute: { filename, threads: 1 } });
+    h = await startTestApp({ demoAccounts: false, compute: { filename, threads: 1, spare: true } });
     await pool(h).ready();
   });
   afterAll(async () => {
@@ -154,7 +213,7 @@ describe('a pool that cannot start', () => {
 describe('the claim check and the check kit', () => {
   let h: TestApp;
   beforeAll(async () => {
-    h = await startTestApp({ demoAccounts: false, compute: { threads: 1, timeoutMs: 5000 } });
+    h = await startTestApp({ demoAccounts: false, compute: { threads: 1, timeoutMs: 5000, spare: true } });
   });
   afterAll(() => h?.close());
 
@@ -171,7 +230,10 @@ describe('the claim check and the check kit', () => {
 
   it('answers 503 once the app has closed its pool, and the pool ends its threads', async () => {
     const compute = pool(h);
+    // threads: 1 and the spare, both counted and both ended.
+    expect(compute.state().threads).toHaveLength(2);
     await compute.close();
+    expect(compute.state().threads).toEqual([]);
     const res = await evaluate(h.app, quick);
     expect(res.status).toBe(503);
     expect(res.body.error.code).toBe('compute_unavailable');
