@@ -40,7 +40,8 @@ import type { Response } from 'express';
 import { Piscina } from 'piscina';
 import type { Logger } from 'pino';
 import { HttpError } from '../http/errors';
-import { runJob, type ComputeJob, type ComputeResults, type JobAnswer } from './tasks';
+import type * as Tasks from './tasks';
+import type { ComputeJob, ComputeResults, JobAnswer } from './tasks';
 
 export interface ComputeOptions {
   /** Worker threads. */
@@ -241,7 +242,13 @@ export class ComputePool {
   }
 
   private async answer(job: ComputeJob): Promise<JobAnswer> {
-    if (this.opts.inline) return runJob(job);
+    if (this.opts.inline) {
+      // Loaded here, not at the top: tasks.ts brings mathjs and the claim reader, which the main thread
+      // needs only with COMPUTE_INLINE=1 (every test file that starts an app imports this module).
+      // eslint-disable-next-line @typescript-eslint/no-require-imports
+      const { runJob } = require('./tasks') as typeof Tasks;
+      return runJob(job);
+    }
     if (this.closed) throw this.shuttingDown();
     if (!this.pool) this.start();
     if (this.failure) throw this.unavailable();

@@ -13,9 +13,16 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Sequelize } from 'sequelize';
-import { parseEntryFile, serializeEntryFile } from '../../shared/entries/load';
+import type * as EntryLoad from '../../shared/entries/load';
 import type { EntryContent, EntryFile } from '../../shared/entries/schema';
 import { audit, ConservationLaw, Entry, EntryLaw, EntryVersion, MechanismClass, User } from '../models';
+
+/**
+ * shared/entries/load.ts, loaded at first use: it checks each worksheet with the evaluator, which
+ * brings mathjs (about a second to load), and most test apps import this module and seed no entries.
+ */
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const entryLoad = () => require('../../shared/entries/load') as typeof EntryLoad;
 
 export class EntryImportError extends Error {
   override readonly name = 'EntryImportError';
@@ -29,7 +36,7 @@ export function readEntryFiles(contentDir: string): { file: string; entry: Entry
     .readdirSync(dir)
     .filter((f) => f.endsWith('.md'))
     .sort()
-    .map((f) => ({ file: f, entry: parseEntryFile(fs.readFileSync(path.join(dir, f), 'utf8'), f) }));
+    .map((f) => ({ file: f, entry: entryLoad().parseEntryFile(fs.readFileSync(path.join(dir, f), 'utf8'), f) }));
 }
 
 /** The content of a version: every field of the file but the file's own bookkeeping. */
@@ -108,7 +115,7 @@ export async function exportEntries(): Promise<{ file: string; text: string }[]>
       reviewer: v.reviewer?.email ?? v.author!.email,
       changeNote: v.changeNote ?? 'First published version.',
     };
-    out.push({ file: `${e.slug}.md`, text: serializeEntryFile(file) });
+    out.push({ file: `${e.slug}.md`, text: entryLoad().serializeEntryFile(file) });
   }
   return out;
 }

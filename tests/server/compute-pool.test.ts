@@ -48,6 +48,14 @@ const F_1kW = 1000 / 299_792_458;
 const evaluate = (target: Parameters<typeof request>[0], body: object) => request(target).post('/api/worksheets/evaluate').send(body);
 const pool = (h: TestApp) => (h.app.locals as unknown as AppLocals).compute;
 
+// Taken as this file has loaded the app and its test harness, before any app starts: mathjs (about a
+// second to load under jest) is loaded on the main thread at its first use only, never with the app.
+const mathjsAtImport = Object.keys(require.cache).some((file) => file.includes(`${path.sep}node_modules${path.sep}mathjs${path.sep}`));
+
+it('imports the app without loading mathjs on the main thread', () => {
+  expect(mathjsAtImport).toBe(false);
+});
+
 /** Resolves once `n` of the pool's threads have loaded and warmed up (the pool's own 'warm' events). */
 const warmed = (p: ComputePool, n: number) =>
   new Promise<void>((resolve) => {

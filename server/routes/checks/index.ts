@@ -5,8 +5,8 @@
  * (and the role matrix, csrf.test.ts, the fuzzer).
  */
 import { Router, type RequestHandler } from 'express';
-import { checkList } from '../../../shared/checks';
-import { isCheckName } from '../../../shared/checks/run';
+// isCheckName from the kit's list, not from run.ts, which loads mathjs: the checks run in the compute pool.
+import { checkList, isCheckName } from '../../../shared/checks';
 import type { CheckName } from '../../../shared/checks/types';
 import { computeFor, type ComputePool } from '../../compute/pool';
 import { HttpError } from '../../http/errors';

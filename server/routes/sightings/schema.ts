@@ -1,6 +1,6 @@
 /** Requests of /api/sightings: a claim seen in the wild, sent as multipart/form-data with its files. */
 import { z } from 'zod';
-import { readQuantityOf } from '../../../shared/claims/figures';
+import type * as Figures from '../../../shared/claims/figures';
 import { FIGURE_KINDS } from '../../../shared/claims/types';
 import type { ClaimedFigureDto } from '../../../shared/submissions/types';
 import { fieldsError } from '../../http/errors';
@@ -50,6 +50,9 @@ export type SightingInput = z.infer<typeof sightingSchema>;
 
 /** The figures of a sighting, each checked with parseQuantity for its kind (400 naming the one that fails). */
 export function readClaimedFigures(figures: z.infer<typeof figureSchema>[], where = 'body.figures'): ClaimedFigureDto[] {
+  // Loaded at the first sighting, not with the app: figures.ts brings mathjs (about a second to load).
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const { readQuantityOf } = require('../../../shared/claims/figures') as typeof Figures;
   const fields: Record<string, string> = {};
   const out: ClaimedFigureDto[] = [];
   figures.forEach((f, i) => {

@@ -11,7 +11,7 @@ import { entryContentSchema, type EntryContent } from '../../../shared/entries/s
 import { contentTexProblems, texProblemWords } from '../../../shared/entries/tex-check';
 import { permalink } from '../../../shared/permalink';
 import { fieldSentence, ourWords } from '../../../shared/schemas/drafts';
-import { validateWorksheet } from '../../../shared/worksheet/evaluate';
+import type * as Evaluate from '../../../shared/worksheet/evaluate';
 import { worksheetSchema } from '../../../shared/worksheet/schema';
 import { HttpError, validationError } from '../../http/errors';
 import type { OutgoingMessage } from '../../mail/mailer';
@@ -49,6 +49,9 @@ async function checkComplete(content: unknown, transaction: Transaction): Promis
   const tex: Record<string, string> = {};
   for (const [path, problem] of Object.entries(contentTexProblems(full))) tex[`content.${path}`] = texProblemWords(problem);
   if (Object.keys(tex).length) throw notReady(tex);
+  // Loaded at the first submission, not with the app: the evaluator brings mathjs (about a second to load).
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const { validateWorksheet } = require('../../../shared/worksheet/evaluate') as typeof Evaluate;
   const fields: Record<string, string> = {};
   full.worksheets.forEach((ws, i) => {
     const r = validateWorksheet(worksheetSchema.parse(ws), { functions: kitFunctions });
