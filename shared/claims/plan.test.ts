@@ -375,6 +375,29 @@ describe('a long document with many figures', () => {
   });
 });
 
+describe('a document on several devices: the propellant-free one read in its own paragraph (issue 11)', () => {
+  const photon = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
+  it('a bid that says it throws out nothing is held to F ≤ P/c though another bid carries xenon', () => {
+    const text =
+      'Tender evaluation, lot 2 (invented).\n\nBid A. Two Hall thrusters with a xenon tank; 80 mN per thruster at 1.4 kW.\n\n' +
+      "Bid B. A sealed copper cavity giving 'between 2 and 4 mN' from 900 W of microwaves, with no propellant and no plume.\n\nRanking: A first.";
+    const run = photon(text);
+    expect(run?.finding).toBe('breaks');
+    // The least thrust (2 mN) over the bound of 900 W: 2e-3 / (900 / c) (F ≤ P/c, c exact: BIPM SI Brochure).
+    expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(2e-3 / (900 / C), 3);
+  });
+  it('a lawful thruster is not held to the bound because another paragraph speaks of propellant-free drives', () => {
+    const text =
+      'Propellant-free drives are sometimes proposed; none has survived a vacuum test.\n\n' +
+      'Our gridded ion thruster gives 25 mN at 750 W, with xenon from a 12 kg tank.';
+    expect(photon(text)).toBeUndefined();
+  });
+  it('the bound itself, said as a thrust per power (1/c), is no claim', () => {
+    const text = 'Light of power P carries momentum at the rate P/c, so a drive with no propellant gets at best 3.34 nN/W.\n\nA Hall thruster, which uses xenon, gets some 60 mN/kW.';
+    expect(photon(text)?.finding).not.toBe('breaks');
+  });
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

@@ -90,6 +90,28 @@ function onlyTheClaim(text: string, words: string): string {
     .join(' ');
 }
 
+/** A plain statement that the device throws out nothing, as a paragraph's own words ("no exhaust" too). */
+const PLAIN_NO_PROPELLANT_RE = new RegExp(`${EXPLICIT_NO_PROPELLANT_RE.source}|(?<!\\p{L})(?:no|without(?: any)?) (?:exhaust|expelled mass)(?!\\p{L})`, 'iu');
+
+/**
+ * The paragraphs (blank-line separated) of a text that say plainly the device throws out nothing, as
+ * [start, end) places: in a document on several devices (a tender's bids, a fair's stands), the
+ * propellant of the others is not the claimed drive's.
+ */
+export function propellantFreeParagraphs(text: string): [number, number][] {
+  const spans: [number, number][] = [];
+  const re = /\n[^\S\n]*\n/gu;
+  let from = 0;
+  for (let m = re.exec(text); ; m = re.exec(text)) {
+    const end = m ? m.index : text.length;
+    const para = text.slice(from, end);
+    if ((PLAIN_NO_PROPELLANT_RE.test(para) || NEGATED_PROPELLANT_RE.test(para)) && para.trim()) spans.push([from, end]);
+    if (!m) break;
+    from = m.index + m[0].length;
+  }
+  return spans.length === 0 || (spans.length === 1 && spans[0][0] === 0 && spans[0][1] === text.length) ? [] : spans;
+}
+
 export function readSignals(ctx: PlanContext): Signals {
   const text = ctx.text ?? '';
   const classes = ctx.classes ?? [];

@@ -5,6 +5,8 @@
  */
 import type { Figure } from '../types';
 import { at, need, ofKind, siAt, typed, uniq, type Basis } from './basis';
+import { C_LIGHT } from '../../checks/constants';
+import { propellantFreeParagraphs, readSignals, type Signals } from './signals';
 
 /** What the first-law planner needs to know of the thrust. */
 export interface ThrustReading {
@@ -12,10 +14,31 @@ export interface ThrustReading {
   photonApplies: boolean;
 }
 
+/**
+ * In a document on several devices whose words of propellant stop the photon bound, the paragraph that
+ * says plainly a device throws out nothing and gives its thrust: that paragraph's figures and words, read
+ * on their own (its propellant words still count).
+ */
+function propellantFreeParagraph(b: Basis): { figures: Figure[]; s: Signals } | null {
+  if (b.s.propellantFree && !b.s.propellant) return null;
+  const inside = (f: Figure, [from, to]: [number, number]) => f.start !== null && f.start >= from && f.start < to;
+  for (const span of propellantFreeParagraphs(b.text)) {
+    const figures = b.figures.filter((f) => inside(f, span));
+    if (!figures.some((f) => (f.kind === 'thrust' || f.kind === 'thrust-per-power') && f.role !== 'aside')) continue;
+    return { figures, s: readSignals({ ...b.ctx, text: b.text.slice(span[0], span[1]) }) };
+  }
+  return null;
+}
+
 export function planThrust(b: Basis): ThrustReading {
-  const { figures, s, plans, needs, notes, power, text, pIn, pOut, speeds } = b;
+  const { plans, needs, notes, text, pIn, pOut, speeds } = b;
+  const scoped = propellantFreeParagraph(b);
+  const s = scoped?.s ?? b.s;
+  const figures = scoped?.figures ?? b.figures;
+  const power = scoped ? ofKind(figures, 'power') : b.power;
   const thrust = ofKind(figures, 'thrust')[0];
-  const perPower = ofKind(figures, 'thrust-per-power')[0];
+  // A thrust per power of 1/c is the bound itself said in the text ("1/c ≈ 3.34 nN/W"), not a claim.
+  const perPower = ofKind(figures, 'thrust-per-power').find((f) => Math.abs(f.si * C_LIGHT - 1) > 0.01);
   // The power that drives the thrust: the input nearest the thrust in the text (not a reference lamp's).
   const thrustAt = ofKind(figures, 'thrust')[0]?.start ?? null;
   const nearThrust = (fs: Figure[]) => (thrustAt === null ? fs[0] : [...fs].sort((a, b) => Math.abs((a.start ?? 0) - thrustAt) - Math.abs((b.start ?? 0) - thrustAt))[0]);
