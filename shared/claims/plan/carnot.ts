@@ -6,7 +6,7 @@
  */
 import type { Figure } from '../types';
 import { at, heatMoverCop, need, ofKind, uniq, type Basis } from './basis';
-import { sentenceAround } from '../reader/context';
+import { paragraphOfAnotherMachine, sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE } from './signals';
 
 const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|brine|well water|borehole|source temperature|outdoors?)(?!\p{L})/iu;
@@ -68,7 +68,11 @@ export function planCarnot(b: Basis): HeatReading {
         (/^[^.;,]{0,30}?(?:heat|heating)/i.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)) || /(?:heat|heating)(?:[^\S\n]+(?:output|delivered|capacity))?[^.;,]{0,12}$/i.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0))),
     );
   const statedCop = ofKind(figures, 'cop').some((f) => !f.derived && (f.role === 'heating' || f.role === 'cooling'));
-  const movesHeat = s.heatPump || cooling || heatFromSource || statedCop || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity);
+  // In a report on several machines, figures all in paragraphs of another kind of machine (a generator
+  // set, a circuit) with no word of heat: a heat pump named elsewhere is not theirs.
+  const ownFigures = [pIn, pOut, eIn, eOut, ...ofKind(figures, 'efficiency').filter((f) => f.si > 1)].filter((f): f is Figure => f !== undefined && f.start !== null && f.end !== null);
+  const elsewhere = ownFigures.length > 0 && ownFigures.every((f) => paragraphOfAnotherMachine(text, f.start!, f.end!) !== null);
+  const movesHeat = !elsewhere && (s.heatPump || cooling || heatFromSource || statedCop || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity));
   const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, pOut ?? eOut, { ...s, cooling }) : undefined;
   const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
   /** Any efficiency or output-over-input ratio the text states (for one at most 1: a consistent balance). */

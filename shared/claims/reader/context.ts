@@ -30,3 +30,30 @@ export function sentenceAround(text: string, start: number, end: number): string
   const m = /[.!?;]["”’')\]]*(?:\s|$)|\n/.exec(rest);
   return text.slice(from, m ? end + m.index : end + rest.length);
 }
+
+/** The paragraph (blank-line separated) around a place in the text; the whole text when it has one. */
+export function paragraphAround(text: string, start: number, end: number): string {
+  const before = text.slice(0, start);
+  const breakBefore = /\n[^\S\n]*\n(?![\s\S]*\n[^\S\n]*\n)/u.exec(before);
+  const from = breakBefore ? breakBefore.index + breakBefore[0].length : 0;
+  const breakAfter = /\n[^\S\n]*\n/u.exec(text.slice(end));
+  return text.slice(from, breakAfter ? end + breakAfter.index : text.length);
+}
+
+/** Machines whose input and output are electrical or mechanical (no heat pump among them). */
+// (Not motors, inverters or converters: a heat pump has them.)
+const OTHER_MACHINE_RE = /(?<!\p{L})(?:generators?|alternators?|dynamos?|circuits?|amplifiers?|batter(?:y|ies)|lamps?|LEDs?|coils?|transformers?|flywheels?)(?!\p{L})/iu;
+/** Words of heat: a paragraph with them may be about a machine that moves heat. */
+const HEAT_WORDS_RE = /(?<!\p{L})(?:heat\w*|warm\w*|thermal|refrigera\w*|compressors?|cool\w*|chill\w*|°C|°F|kelvin|degrees|temperatures?|COP)(?!\p{L})/iu;
+
+/**
+ * A paragraph of a longer text that is about a machine of another kind (a motor and generator set, a
+ * circuit) and has no word of heat: a heat pump named elsewhere in a report on several stands or bids is
+ * not the one this paragraph's figures are of.
+ */
+export function paragraphOfAnotherMachine(text: string, start: number, end: number): string | null {
+  const paragraph = paragraphAround(text, start, end);
+  if (paragraph.length >= text.length) return null;
+  if (HEAT_PUMP_RE.test(paragraph) || COOLING_MACHINE_RE.test(paragraph) || !OTHER_MACHINE_RE.test(paragraph) || HEAT_WORDS_RE.test(paragraph)) return null;
+  return paragraph;
+}

@@ -7,7 +7,8 @@
  */
 import { BARE_CONNECTORS, C_M_PER_S, EFFICIENCY_CHANGE_WORDS, ISP_WORDS, QUANTUM_EFFICIENCY_WORDS } from '../figures-vocabulary';
 import type { FigureKind, FigureRole } from '../types';
-import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
+import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphOfAnotherMachine, sentenceAround, windowStart } from './context';
+
 
 /** ", measured per §7 of the test protocol," between a COP and its value: a clause set off by commas. */
 const ASIDE = '(?:[^\\S\\n]*,[^,;.!?\\n]{3,90},)?';
@@ -158,8 +159,10 @@ export function readPercent(text: string, start: number, end: number, floor: num
     /°|kelvin|degrees|Celsius|Fahrenheit|(?<!\p{L})K(?!\p{L})/iu.test(sentenceAround(text, start, end));
   const efficiency = after || engineSaid || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1]));
   if (!efficiency) return null;
-  // The machine is named anywhere in the claim ("Had our air-to-water unit fitted. … '350 % efficient'").
-  const sentence = text;
+  // The machine is named anywhere in the claim ("Had our air-to-water unit fitted. … '350 % efficient'") —
+  // unless the percentage's own paragraph is of another machine (a motor and generator set, a circuit) and
+  // has no word of heat: in a report on several stands or bids, a heat pump elsewhere is not this one.
+  const sentence = paragraphOfAnotherMachine(text, start, end) ?? text;
   // (The number as read, which may have been written in words: "three hundred and fifty percent".)
   const value = num !== undefined ? Number(num) : Number((/^[\d.,]+/.exec(text.slice(start, end))?.[0] ?? '').replace(',', '.'));
   if (HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
@@ -168,7 +171,7 @@ export function readPercent(text: string, start: number, end: number, floor: num
   }
   // "three hundred and fifty percent efficient … that number is the heating COP", "in cooling mode it
   // is 300 % efficient": a machine that moves heat, whatever it is called.
-  const moves = value > 100 ? MOVES_HEAT_RE.exec(text) : null;
+  const moves = value > 100 ? MOVES_HEAT_RE.exec(sentence) : null;
   if (moves) {
     const role = /cool/i.test(moves[1] ?? moves[2] ?? moves[3]) ? 'cooling' : 'heating';
     return { kind: 'cop', role, factor: 0.01, unit: '', assumption: `More than 100 % "efficient" where the text speaks of ${role}: read as a ${role} COP (heat moved over work put in).` };

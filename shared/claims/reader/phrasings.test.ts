@@ -635,3 +635,21 @@ describe('ratios, masses and seconds said in words', () => {
     ]);
   });
 });
+
+describe('a report on several machines: a heat pump named in one paragraph is not every paragraph’s (issue 11)', () => {
+  const report = (genset: string) =>
+    'Fair notes (invented test data).\n\nStand 12, Example Thermal: a 9 kW ground-source heat pump, worth a site survey.\n\n' + genset;
+  it("'140 % efficient' said of a motor–generator set in its own paragraph is an efficiency, and breaks the first law", () => {
+    const text = report("Stand 14, Example Dynamics: a motor drives a generator through a magnetic coupling; the poster says the set is '140 % efficient'.");
+    const figures = extractFigures(text);
+    const pct = figures.find((f) => f.text.startsWith('140'));
+    expect(pct?.kind).toBe('efficiency');
+    expect(pct!.si).toBeCloseTo(1.4, 12);
+    const run = runClaimChecks(figures, { text }).checks.find((c) => c.check === 'first-law');
+    expect(run?.finding).toBe('breaks');
+  });
+  it('a percentage in a paragraph with words of heat stays the heat pump’s COP', () => {
+    const text = report("Stand 14, Example Dynamics: its air-to-water unit with a battery buffer is '350 % efficient' at 7 °C outside.").replace('a 9 kW ground-source', 'a 9 kW air-to-water');
+    expect(extractFigures(text).find((f) => f.text.startsWith('350'))).toMatchObject({ kind: 'cop', role: 'heating', si: 3.5 });
+  });
+});

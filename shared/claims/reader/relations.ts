@@ -10,7 +10,7 @@ import { HARVEST_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import { FIGURE_SI_UNIT, type FigureRole } from '../types';
-import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
+import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphOfAnotherMachine, sentenceAround, windowStart } from './context';
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor } from './roles';
@@ -376,6 +376,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       // (The heat out may be the input plus a stated excess: "3 kW more heat than the 1 kW it uses".)
       const outs = drafts.filter((d) => d.kind === kind && d.role === 'out' && (!d.derived || d.derived.startsWith('output = input + excess')));
       if (ins.length !== 1 || outs.length !== 1) continue;
+      // (Not where the figures' paragraph is of another machine, in a text on several.)
+      if (paragraphOfAnotherMachine(text, Math.min(ins[0].start, outs[0].start), Math.max(ins[0].end, outs[0].end))) continue;
       const w = siOf(ins[0]);
       const q = siOf(outs[0]);
       if (!w || q === null || q <= w) continue;
