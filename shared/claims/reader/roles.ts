@@ -109,6 +109,12 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     // "the heat it draws from 25 °C room air": where the heat comes from is the hot side.
     // (see below for power and energy)
     if (/(?<!\p{L})(?:heat|energy)(?:[^\S\n]+(?:it|that it|they))?[^\S\n]+(?:draws?|takes?|extracts?|absorbs?|gets?|pulls?|harvests?|collects?)[^\S\n]+from[^\S\n]+(?:(?:the|a|an)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
+    // "taking heat from water at 30 °C", "draws its heat from the warm return water at 35 °C": the source
+    // of an engine's heat is its hot side; a heat pump's or a fridge's is its cold side.
+    if (/(?<!\p{L})(?:draws?|drawing|drew|takes?|taking|took|extracts?|extracting|absorbs?|absorbing|pulls?|pulling|harvests?|harvesting|collects?|collecting)[^\S\n]+(?:(?:its|the|low-grade|waste)[^\S\n]+)?heat[^\S\n]+from[^\S\n]+(?:(?:the|a|an)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:water|air|brine|gas|gases|steam|exhaust|oil|fluid|ground|soil|river|lake|sea|tank|loop|flue gas)[^\S\n]+(?:at|of)[^\S\n]+(?:(?:about|around|roughly|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 80), start))) {
+      // (A fridge named as such: "the cooler intake water" is no cooler.)
+      return HEAT_PUMP_RE.test(text) || /(?<!\p{L})(?:refrigerators?|fridges?|freezers?|chillers?|air[- ]conditioners?|cryocoolers?)(?!\p{L})/iu.test(text) ? 'cold' : 'hot';
+    }
   }
   // "filled a 5 kWh battery", "charged the 10 kWh pack": what is filled is what came out.
   if (roles.groups === POWER_ENERGY_ROLES && FILLS_LEAD_RE.test(text.slice(Math.max(floor, start - 40), start))) return 'out';

@@ -315,3 +315,32 @@ describe('masses and thrust without propellant', () => {
     expect(verdicts(text).checks.filter((c) => c.check === 'photon-bound')).toEqual([]);
   });
 });
+
+describe('a side said again, and where the heat comes from (issue 11)', () => {
+  test('"230 °C … the hot side at 503 K" is one side said twice; the cold side is derived from the difference', () => {
+    const text = 'Hot plate at 230 °C, with a ΔT of 180 K across the modules (invented test data). For a difference of 180 K with the hot side at 503 K, the limit is several times the 5 % declared.';
+    const f = read(text);
+    // T(K) = t(°C) + 273.15 (SI Brochure, 9th ed., 2.3.1): 503.15 K; cold = 503.15 − 180 = 323.15 K.
+    expect(temps(f).filter(([role]) => role === 'hot' || role === 'cold')).toEqual([
+      ['hot', 503.15],
+      ['cold', expect.closeTo(323.15, 9)],
+    ]);
+    expect(f.find((x) => x.text === '503 K')?.role).toBe('aside');
+  });
+  test('an engine taking heat from water at 30 °C has its hot side there; a heat pump taking heat from the ground has its cold side there', () => {
+    const engine = 'The engine works from a ΔT of just 8 K, taking heat from water at 30 °C and rejecting it to the cooler intake water; it converts 12 % of that heat.';
+    const f = read(engine);
+    expect(temps(f)).toEqual([
+      ['hot', 303.15],
+      ['cold', expect.closeTo(295.15, 9)],
+    ]);
+    // η_max = 8 / 303.15 = 0.02639; 0.12 / 0.02639 = 4.547 (Carnot, 1 − Tc/Th).
+    const run = verdicts(engine).checks.find((c) => c.check === 'carnot');
+    expect(run?.finding).toBe('breaks');
+    expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.12 / (8 / 303.15), 6);
+    expect(temps(read('The heat pump takes heat from the ground at 8 °C and supplies water at 45 °C.'))).toEqual([
+      ['cold', 281.15],
+      ['hot', 318.15],
+    ]);
+  });
+});

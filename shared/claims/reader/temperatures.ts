@@ -134,7 +134,9 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
     for (const d of drafts) {
       if (d.kind !== 'temperature' || d.derived || d.upper !== undefined) continue;
       const v = siOf(d);
-      if (v !== null && seen.some((e) => siOf(e) === v && (e.role === d.role || d.role === null || e.role === null))) d.role = 'aside';
+      // (Within half a kelvin: "230 °C … the hot side at 503 K" rounds the same side. And a side said
+      // again under the other side's name is still the same side: one machine's two sides are not equal.)
+      if (v !== null && seen.some((e) => Math.abs((siOf(e) ?? NaN) - v) <= 0.5)) d.role = 'aside';
       else seen.push(d);
     }
   }
