@@ -120,6 +120,9 @@ const PERCENT_MORE_RE =
 const CARNOT_SHARE_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:Carnot|ideal Carnot|reversible)(?:[^\S\n]+(?:efficiency|limit|bound|value|maximum|figure))?(?!\p{L})/iuy;
 export const CARNOT_SHARE = 'a share of the Carnot efficiency';
 
+/** A heat engine named. */
+const ENGINE_NAMED_RE = /(?<!\p{L})(?:engines?|turbines?|Stirling|power (?:plants?|stations?))(?!\p{L})/iu;
+
 /** What a percentage is, by its context. */
 export function readPercent(text: string, start: number, end: number, floor: number, num?: string): PercentReading {
   // 'at "about 29 %" efficiency': the words after a closing quote.
@@ -165,7 +168,11 @@ export function readPercent(text: string, start: number, end: number, floor: num
   const sentence = paragraphOfAnotherMachine(text, start, end) ?? text;
   // (The number as read, which may have been written in words: "three hundred and fifty percent".)
   const value = num !== undefined ? Number(num) : Number((/^[\d.,]+/.exec(text.slice(start, end))?.[0] ?? '').replace(',', '.'));
-  if (HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
+  // (Not where the percentage's own sentence names an engine and no heat pump: "the marine engine is
+  // '52 % efficient'", in a text that mentions a heat pump's percentage by contrast.)
+  const own = sentenceAround(text, start, end);
+  const engineHere = ENGINE_NAMED_RE.test(own) && !HEAT_PUMP_RE.test(own);
+  if (!engineHere && HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
     if (!(value <= 100)) return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump said to be more than 100 % efficient: read as a heating COP (heat delivered over work put in).' };
     return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump\'s percentage read as a heating COP (heat delivered over work put in).' };
   }

@@ -648,6 +648,16 @@ describe('a report on several machines: a heat pump named in one paragraph is no
     const run = runClaimChecks(figures, { text }).checks.find((c) => c.check === 'first-law');
     expect(run?.finding).toBe('breaks');
   });
+  it("an engine's percentage in its own sentence is its efficiency, though a heat pump is mentioned by contrast", () => {
+    const text =
+      'The brochure for the Example KV-8 marine engine says it is "52 % efficient" with hot gas at 1,500 K and sea water at 15 °C. Unlike the percentage printed on a heat pump, it can never exceed 100 %.';
+    const pct = extractFigures(text).find((f) => f.text.startsWith('52'));
+    expect(pct).toMatchObject({ kind: 'efficiency', si: 0.52 });
+    // η_C = 1 − 288.15/1500 = 0.8079 (Carnot; T = t + 273.15, SI Brochure 2.3.1); 0.52 / 0.8079 = 0.6436.
+    const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+    expect(run?.finding).toBe('consistent');
+    expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.52 / (1 - 288.15 / 1500), 6);
+  });
   it('a percentage in a paragraph with words of heat stays the heat pump’s COP', () => {
     const text = report("Stand 14, Example Dynamics: its air-to-water unit with a battery buffer is '350 % efficient' at 7 °C outside.").replace('a 9 kW ground-source', 'a 9 kW air-to-water');
     expect(extractFigures(text).find((f) => f.text.startsWith('350'))).toMatchObject({ kind: 'cop', role: 'heating', si: 3.5 });
