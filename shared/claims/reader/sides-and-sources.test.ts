@@ -344,3 +344,12 @@ describe('a side said again, and where the heat comes from (issue 11)', () => {
     ]);
   });
 });
+
+test('"36 W for a heat flow of 150 W", "from a thermal input of 150 W": the heat a converter takes is its input (invented test data)', () => {
+  for (const text of ['Measured conversion efficiency was 24 % (electrical output 36 W for a heat flow of 150 W).', 'The module gives 36 W from a thermal input of 150 W.']) {
+    expect(read(text).filter((f) => f.kind === 'power').map((f) => [f.role, f.si])).toEqual([
+      ['out', 36],
+      ['in', 150],
+    ]);
+  }
+});

@@ -32,6 +32,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
       'took', 'turned by', 'by a', 'fuel', '(?:energy|heat|calorific) (?:content|value)(?: of (?:the |its )?(?:fuel|gas|diesel|petrol|coal|wood))?(?:[^\\S\\n]+[\\w\x27\u2019-]+){0,5}?[^\\S\\n]+(?:put|puts|estimated|given|stated|reckoned|calculated|taken) (?:it |them )?(?:at|as)', 'containing', 'P_?\\{?in\\}?', 'E_?\\{?in\\}?', 'Pin', 'invest(?:s|ed|ing)?', 'gas input', 'fuel input',
+      // "36 W for a heat flow of 150 W", "a thermal input of 2 kW": the heat a converter takes.
+      'for (?:a|an|the) (?:heat flow|heat flux|heat input|thermal input|heat supply) of', '(?:heat|thermal) input(?: of| was| is|:)?',
     ],
     after: [
       'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 'from the (?:wall|mains|socket|outlet|plug|grid)', 'compressors?',
