@@ -116,6 +116,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       return HEAT_PUMP_RE.test(text) || /(?<!\p{L})(?:refrigerators?|fridges?|freezers?|chillers?|air[- ]conditioners?|cryocoolers?)(?!\p{L})/iu.test(text) ? 'cold' : 'hot';
     }
   }
+  // "the cooler removes 126 W of heat from the cabinet": what a fridge or cooler removes is its cooling output.
+  if (roles.groups === POWER_ENERGY_ROLES && COOLING_MACHINE_RE.test(text) && /(?<!\p{L})(?:removes|removed|removing|can remove|pulls out|pumps out)[^\S\n]+(?:(?:about|around|roughly|some|nearly|up to|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 40), start)) && /^[^\S\n]*(?:of[^\S\n]+)?heat(?!\p{L})/iu.test(text.slice(end, end + 20))) return 'out';
   // "filled a 5 kWh battery", "charged the 10 kWh pack": what is filled is what came out.
   if (roles.groups === POWER_ENERGY_ROLES && FILLS_LEAD_RE.test(text.slice(Math.max(floor, start - 40), start))) return 'out';
   // A verb right before the figure ("takes 50 PS of shaft power", "generates 40 kW") outweighs the

@@ -353,3 +353,15 @@ test('"36 W for a heat flow of 150 W", "from a thermal input of 150 W": the heat
     ]);
   }
 });
+
+test("what a cooler removes is its cooling output: a cooling COP against the reversed-Carnot bound (invented test data)", () => {
+  const text = 'A student-built wine cooler keeps its cabinet at 4 °C in a kitchen at most 25 K warmer. The compressor draws 60 W and the cooler removes 126 W of heat from the cabinet.';
+  expect(read(text).filter((f) => f.kind === 'power').map((f) => [f.role, f.si])).toEqual([
+    ['in', 60],
+    ['out', 126],
+  ]);
+  // COP = 126/60 = 2.1; COP_max = Tc/(Th − Tc) = 277.15/25 = 11.086 (reversed Carnot; T = t + 273.15).
+  const run = verdicts(text).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'cop_cooling_ratio')!.si).toBeCloseTo(2.1 / (277.15 / 25), 6);
+});
