@@ -398,6 +398,24 @@ describe('a document on several devices: the propellant-free one read in its own
   });
 });
 
+describe('several COPs in a review: the one said with the sides (issue 11)', () => {
+  const carnot = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+  it("a product's COP said with its ΔT and outlet is checked, not the other products' range in an earlier paragraph", () => {
+    const text =
+      'Nine datasheets quote heating COPs between 2.6 and 3.4 at their rating points (invented test data).\n\n' +
+      'The tenth claims a heating COP of 9 while lifting heat across a ΔT of 45 K to an outlet at 55 °C.';
+    const run = carnot(text);
+    expect(run?.finding).toBe('breaks');
+    // Th = 328.15 K, Tc = 283.15 K; COP_max = 328.15/45 = 7.292 (reversed Carnot); 9 / 7.292 = 1.234.
+    expect(run!.outputs.find((o) => o.name === 'cop_heating_ratio')!.si).toBeCloseTo(9 / (328.15 / 45), 6);
+  });
+  it("in one paragraph, the claim's COP said first stands before a test's reading said with the temperatures", () => {
+    const text = 'The box says "up to 350 % efficient" for the heat pump. Our lab ran it at 7 °C outside with a flow at 35 °C and measured a COP of 3.3.';
+    // COP_max = 308.15/28 = 11.005; 3.5 / 11.005 = 0.318.
+    expect(carnot(text)!.outputs.find((o) => o.name === 'cop_heating_ratio')!.si).toBeCloseTo(3.5 / (308.15 / 28), 6);
+  });
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

@@ -66,7 +66,7 @@ function formOf(f: Figure, text: string): string | null {
 }
 
 /** Which sentence a place in the text is in (its start). */
-function sentenceKey(text: string, at: number): number {
+export function sentenceKey(text: string, at: number): number {
   const head = text.slice(0, at);
   const m = /[\s\S]*(?:[.!?]["”’')\]]*\s|\n)/u.exec(head);
   return m ? m[0].length : 0;

@@ -5,7 +5,7 @@
  * its COP, the efficiency or gain the text states.
  */
 import type { Figure } from '../types';
-import { at, heatMoverCop, need, ofKind, uniq, type Basis } from './basis';
+import { at, heatMoverCop, need, ofKind, sentenceKey, uniq, type Basis } from './basis';
 import { paragraphOfAnotherMachine, sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE } from './signals';
 
@@ -43,10 +43,38 @@ export interface HeatReading {
   copForCarnot: boolean | undefined;
 }
 
+/** Which paragraph (blank-line separated) a place is in: the place where it starts. */
+const paragraphKey = (text: string, at: number) => {
+  const m = /[\s\S]*\n[^\S\n]*\n/u.exec(text.slice(0, at));
+  return m ? m[0].length : 0;
+};
+
+/** Words of a bound worked out, not a claim: "the ideal COP … is 7.3", "the Carnot limit is 4.9 %". */
+const BOUND_WORDS_RE = /(?<!\p{L})(?:ideal|Carnot|maximum|max|limit|bound|reversible|at most|theoretical|highest possible)(?!\p{L})/iu;
+
+/**
+ * Of several claimed figures (COPs, efficiencies), the one said in a sentence with the machine's sides (a
+ * temperature or a difference) and no words of a bound: "Nine products quote COPs between 2.6 and 3.4 …
+ * The tenth claims a heating COP of 9 across a ΔT of 45 K to an outlet at 55 °C". Else the first.
+ */
+function withSides(candidates: Figure[], b: Basis): Figure | undefined {
+  if (candidates.length < 2 || !b.text) return candidates[0];
+  const sideSentences = new Set(
+    b.figures.filter((f) => (f.kind === 'temperature' || f.kind === 'temperature-difference') && f.role !== 'aside' && f.start !== null).map((f) => sentenceKey(b.text, f.start!)),
+  );
+  const has = (f: Figure) => f.start !== null && f.end !== null && sideSentences.has(sentenceKey(b.text, f.start)) && !BOUND_WORDS_RE.test(sentenceAround(b.text, f.start, f.end));
+  // (Only where the first is said in a paragraph with no side at all: a test's reading said beside the
+  // sides does not displace the claim's figure said just before them.)
+  const paragraphs = new Set(b.figures.filter((f) => (f.kind === 'temperature' || f.kind === 'temperature-difference') && f.role !== 'aside' && f.start !== null).map((f) => paragraphKey(b.text, f.start!)));
+  const first = candidates[0];
+  if (first.start === null || paragraphs.has(paragraphKey(b.text, first.start))) return first;
+  return candidates.find(has) ?? first;
+}
+
 export function planCarnot(b: Basis): HeatReading {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, temps } = b;
   // A stated efficiency, or one stated as a share of the Carnot efficiency of the stated temperatures.
-  const efficiency = ofKind(figures, 'efficiency').find((f) => !f.derived || / of the Carnot efficiency /.test(f.derived));
+  const efficiency = withSides(ofKind(figures, 'efficiency').filter((f) => !f.derived || / of the Carnot efficiency /.test(f.derived)), b);
   // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
   const cooling = s.coolingWords && (s.cooling || COMPRESSOR_RE.test(text) || ofKind(figures, 'cop').length > 0 || temps.length >= 2);
   // Heat delivered by a machine that names an outdoor, ground or brine source: a heat pump.
@@ -77,7 +105,7 @@ export function planCarnot(b: Basis): HeatReading {
   const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
   /** Any efficiency or output-over-input ratio the text states (for one at most 1: a consistent balance). */
   const share = efficiency ?? ofKind(figures, 'efficiency')[0];
-  const cop = ofKind(figures, 'cop')[0] ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);
+  const cop = withSides(ofKind(figures, 'cop'), b) ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);
   // An efficiency is a heat engine's only where the text speaks of work or electricity got from heat:
   // a collector, boiler or heater that delivers heat, or a converter of electricity, is not bounded by Carnot.
   const notAnEngine = !s.heatEngine && (HEAT_ONLY_RE.test(text) || ELECTRICAL_CONVERTER_RE.test(text) || NOT_HEAT_ENGINE_RE.test(text));
