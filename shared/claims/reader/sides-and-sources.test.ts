@@ -365,3 +365,19 @@ test("what a cooler removes is its cooling output: a cooling COP against the rev
   expect(run?.finding).toBe('consistent');
   expect(run!.outputs.find((o) => o.name === 'cop_cooling_ratio')!.si).toBeCloseTo(2.1 / (277.15 / 25), 6);
 });
+
+test('sides said again in a worked step later ("between 255.15 K and 305.15 K") do not make the first statement of them the surroundings (invented test data)', () => {
+  const text =
+    'The freezer cabinet held steady at −18 °C with the compressor running. The condenser skin temperature was 32 °C. The laboratory air was at 21 °C.\n' +
+    'Heat removed: 112 W; compressor electrical input: 70 W; cooling COP 1.6.\n' +
+    'Analysis. Ideal cooling COP between 255.15 K and 305.15 K: 255.15/50 = 5.10.';
+  const f = read(text);
+  expect(temps(f).filter(([role]) => role === 'hot' || role === 'cold')).toEqual([
+    ['cold', expect.closeTo(255.15, 9)],
+    ['hot', 305.15],
+  ]);
+  // COP_max = 255.15/50 = 5.103 (reversed Carnot); 1.6 / 5.103 = 0.3135.
+  const run = verdicts(text).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'cop_cooling_ratio')!.si).toBeCloseTo(1.6 / (255.15 / 50), 4);
+});

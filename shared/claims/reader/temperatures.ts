@@ -153,10 +153,12 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
   // (two temperatures, or one and a difference), a temperature alone in another sentence, with no
   // efficiency, COP or difference beside it ("the room was held at 21 °C"), is set aside.
   const thermal = drafts.filter((d) => d.kind === 'temperature' && !d.derived);
+  // (Not a sentence whose temperatures only say again sides given before: "Ideal COP between 255.15 K and 305.15 K".)
   const sides = new Set(
     thermal
+      .filter((d) => d.role !== 'aside')
       .map((d) => sentenceOf(text, d))
-      .filter((k) => thermal.reduce((n, t) => n + (sentenceOf(text, t) === k ? (t.upper ? 2 : 1) : 0), 0) >= 2 || drafts.some((d) => d.kind === 'temperature-difference' && sentenceOf(text, d) === k)),
+      .filter((k) => thermal.reduce((n, t) => n + (sentenceOf(text, t) === k && t.role !== 'aside' ? (t.upper ? 2 : 1) : 0), 0) >= 2 || drafts.some((d) => d.kind === 'temperature-difference' && sentenceOf(text, d) === k)),
   );
   // "operating range −40 to 85 °C", "storage temperature": the conditions it is rated for, not its sides.
   thermal.forEach((t, i) => {
