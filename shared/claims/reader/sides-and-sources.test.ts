@@ -381,3 +381,19 @@ test('sides said again in a worked step later ("between 255.15 K and 305.15 K") 
   expect(run?.finding).toBe('consistent');
   expect(run!.outputs.find((o) => o.name === 'cop_cooling_ratio')!.si).toBeCloseTo(1.6 / (255.15 / 50), 4);
 });
+
+test('worked lines "in = … = 4.8 MJ; out = … = 4.05 MJ" and sunlight a collector received are inputs and outputs (invented test data)', () => {
+  const flywheel = 'So: in = 2 kW × 2400 s = 4.8 MJ; out = 1.5 kW × 2700 s = 4.05 MJ.';
+  expect(read(flywheel).filter((f) => f.kind === 'power').map((f) => [f.role, f.si])).toEqual([
+    ['in', 2000],
+    ['out', 1500],
+  ]);
+  // 4.05 / 4.8 = 0.84375 (first law: out over in).
+  expect(verdicts(flywheel).checks.find((c) => c.check === 'first-law')!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(4.05 / 4.8, 9);
+  const collector = 'A flat-plate collector received solar energy on its aperture totalling 27 kWh over the day and delivered 14.2 kWh of heat to the tank.';
+  // kWh = 3.6 MJ (NIST SP 811, B.8).
+  expect(read(collector).filter((f) => f.kind === 'energy').map((f) => [f.role, f.si])).toEqual([
+    ['in', 27 * 3.6e6],
+    ['out', expect.closeTo(14.2 * 3.6e6, 3)],
+  ]);
+});

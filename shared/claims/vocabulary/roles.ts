@@ -34,6 +34,10 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'took', 'turned by', 'by a', 'fuel', '(?:energy|heat|calorific) (?:content|value)(?: of (?:the |its )?(?:fuel|gas|diesel|petrol|coal|wood))?(?:[^\\S\\n]+[\\w\x27\u2019-]+){0,5}?[^\\S\\n]+(?:put|puts|estimated|given|stated|reckoned|calculated|taken) (?:it |them )?(?:at|as)', 'containing', 'P_?\\{?in\\}?', 'E_?\\{?in\\}?', 'Pin', 'invest(?:s|ed|ing)?', 'gas input', 'fuel input',
       // "36 W for a heat flow of 150 W", "a thermal input of 2 kW": the heat a converter takes.
       'for (?:a|an|the) (?:heat flow|heat flux|heat input|thermal input|heat supply) of', '(?:heat|thermal) input(?: of| was| is|:)?',
+      // "received solar energy on its aperture totalling 27 kWh": the sunlight a collector or a cell takes.
+      '(?:received|receives|receiving|intercepted|intercepts) (?:[\\w-]+ ){0,2}?(?:solar |sun |incident )?(?:energy|radiation|irradiation|sunlight|insolation|light)(?: [\\w-]+){0,4}? (?:totalling|totaling|amounting to|of)',
+      // A worked line: "in = 2 kW × 2400 s = 4.8 MJ".
+      '(?<![\\w-])in ?=',
     ],
     after: [
       'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 'from the (?:wall|mains|socket|outlet|plug|grid)', 'compressors?',
@@ -58,7 +62,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:is |was |are |were )?(?:said|claimed|reported|supposed|meant) to have (?:stored|received|absorbed|gained|taken up|banked)', 'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran (?:a|an|the)', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
-      '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
+      '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', '(?<![\\w-])out ?=', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
       // A rating said before what makes power: "the 600 MW coal unit", "a 5 kW genset" (not a motor or engine, which may be what drives the device).
