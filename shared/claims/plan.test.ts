@@ -416,6 +416,13 @@ describe('several COPs in a review: the one said with the sides (issue 11)', () 
   });
 });
 
+test('a ratio said outright is the claim where the energy in and the power out have no time to join them (invented test data)', () => {
+  const text = "The home battery 'gives back 0.91 units for every unit it takes'. The unit stores 13.5 kWh and can deliver up to 5 kW at once.";
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(0.91, 9);
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

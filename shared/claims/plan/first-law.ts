@@ -44,6 +44,10 @@ function heatEngineElectricIn(b: Basis, inF: Figure | undefined): boolean {
 export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading, { efficiency, movesHeat, gain, share, cop, acrossDifference, copForCarnot }: HeatReading): void {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, duration, temps } = b;
   const firstLawWhy = 'The text gives the energy put in and the energy got out.';
+  // An energy on one side and a power on the other with no time to join them, where the text states the
+  // ratio itself ("gives back 0.91 units for every unit it takes … stores 13.5 kWh, up to 5 kW"): the ratio
+  // is the claim, not a ledger that needs a duration.
+  const mixedWithoutTime = !duration && ((!!eIn && !eOut && !pIn && !!pOut) || (!!pIn && !pOut && !eIn && !!eOut));
   // A heat pump that states the heat it draws from its source beside the work it takes: its whole
   // balance is a first-law ledger (what it delivers is at most the two added up).
   const sourceHeatIn =
@@ -66,7 +70,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     notes.push('A heat pump or refrigerator moves heat rather than making it: the heat it delivers may exceed the work it takes without breaking any law. Its bound is the Carnot COP of the temperatures it works between.');
   } else if (heatEngineElectricIn(b, eIn ?? pIn)) {
     notes.push("A heat engine's input is the heat it takes in: the electrical power the text gives beside its output is a load's or a part's, not what the engine converts. Its bound is the Carnot efficiency between its two sides.");
-  } else if ((eIn || pIn) && (eOut || pOut) && !(thrust && photonApplies && !eOut && !pOut)) {
+  } else if ((eIn || pIn) && (eOut || pOut) && !(thrust && photonApplies && !eOut && !pOut) && !(mixedWithoutTime && (gain || share))) {
     const inF = eIn ?? pIn!;
     const outF = eOut ?? pOut!;
     const bothPower = !eIn && !eOut;
