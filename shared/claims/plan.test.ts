@@ -423,6 +423,30 @@ test('a ratio said outright is the claim where the energy in and the power out h
   expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(0.91, 9);
 });
 
+describe('what a text says of its own figures (issue 11, invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  it('"No input figure was given" is an input not known, not an input of nothing', () => {
+    const r = run("The inventor says the generator 'puts out 3 kW, far more than it takes in'. No input figure was given at any point.");
+    expect(r.checks.find((c) => c.check === 'first-law')).toBeUndefined();
+    expect(r.needs.map((n) => n.check)).toContain('first-law');
+  });
+  it('"lift without wings, rotors or propellant" says the device throws out nothing', () => {
+    const text = 'Slide 1. Lift without wings, rotors or propellant.\n\nSlide 3. The bench unit delivers 1.2 N/kW of electrical input.';
+    const photon = run(text).checks.find((c) => c.check === 'photon-bound');
+    expect(photon?.finding).toBe('breaks');
+    // 1.2 N/kW = 1.2e-3 N/W against 1/c (F ≤ P/c; c exact, BIPM SI Brochure): 1.2e-3 × c = 359 751.
+    expect(photon!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(1.2e-3 * C, 0);
+  });
+  it("a CHP unit's total efficiency (heat and electricity over fuel) is not held to Carnot; its electrical efficiency is", () => {
+    const text =
+      "The HL-50 is a gas-engine combined heat and power unit. 'Up to 90 % total efficiency!' Electrical efficiency 41 %. The gas in the cylinders peaks near 1,400 °C; the cooling water leaves at 90 °C.";
+    const carnot = run(text).checks.find((c) => c.check === 'carnot');
+    expect(carnot?.finding).toBe('consistent');
+    // η_C = 1 − 363.15/1673.15 = 0.7830; 0.41 / 0.7830 = 0.5237.
+    expect(carnot!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.41 / (1 - 363.15 / 1673.15), 6);
+  });
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

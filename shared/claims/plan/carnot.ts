@@ -43,6 +43,18 @@ export interface HeatReading {
   copForCarnot: boolean | undefined;
 }
 
+/** A unit that makes heat and power together. */
+const CHP_RE = /(?<!\p{L})(?:combined heat and power|CHP|cogeneration|co-generation|trigeneration|micro-?CHP)(?!\p{L})/iu;
+/**
+ * The "total" efficiency of a combined heat and power unit ("up to 90 % total efficiency"): electricity
+ * and recovered heat added up over the fuel — no engine's efficiency, and not bounded by Carnot.
+ */
+function combinedHeatAndPower(f: Figure, text: string): boolean {
+  if (f.start === null || f.end === null || !CHP_RE.test(text)) return false;
+  const near = text.slice(Math.max(0, f.start - 40), f.end + 40);
+  return /(?<!\p{L})(?:total|overall|combined|fuel utili[sz]ation|system)(?!\p{L})/iu.test(near) && !/(?<!\p{L})electrical(?!\p{L})/iu.test(text.slice(Math.max(0, f.start - 25), f.start));
+}
+
 /** Which paragraph (blank-line separated) a place is in: the place where it starts. */
 const paragraphKey = (text: string, at: number) => {
   const m = /[\s\S]*\n[^\S\n]*\n/u.exec(text.slice(0, at));
@@ -74,7 +86,7 @@ function withSides(candidates: Figure[], b: Basis): Figure | undefined {
 export function planCarnot(b: Basis): HeatReading {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, temps } = b;
   // A stated efficiency, or one stated as a share of the Carnot efficiency of the stated temperatures.
-  const efficiency = withSides(ofKind(figures, 'efficiency').filter((f) => !f.derived || / of the Carnot efficiency /.test(f.derived)), b);
+  const efficiency = withSides(ofKind(figures, 'efficiency').filter((f) => (!f.derived || / of the Carnot efficiency /.test(f.derived)) && !combinedHeatAndPower(f, text)), b);
   // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
   const cooling = s.coolingWords && (s.cooling || COMPRESSOR_RE.test(text) || ofKind(figures, 'cop').length > 0 || temps.length >= 2);
   // Heat delivered by a machine that names an outdoor, ground or brine source: a heat pump.

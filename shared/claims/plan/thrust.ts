@@ -15,6 +15,13 @@ export interface ThrustReading {
 }
 
 /**
+ * A thrust per power within 1 % of 1/c is the bound itself said in the text ("1/c ≈ 3.34 nN/W"), not a
+ * claim; within 5 % ("a lamp's push is about 3.3 µN per kilowatt") it may be either — a perfect photon
+ * thruster's claim or the bound rounded — and does not make a paragraph the claim's.
+ */
+const isTheBound = (f: Figure, within = 0.01) => f.kind === 'thrust-per-power' && Math.abs(f.si * C_LIGHT - 1) <= within;
+
+/**
  * In a document on several devices whose words of propellant stop the photon bound, the paragraph that
  * says plainly a device throws out nothing and gives its thrust: that paragraph's figures and words, read
  * on their own (its propellant words still count).
@@ -24,7 +31,7 @@ function propellantFreeParagraph(b: Basis): { figures: Figure[]; s: Signals } | 
   const inside = (f: Figure, [from, to]: [number, number]) => f.start !== null && f.start >= from && f.start < to;
   for (const span of propellantFreeParagraphs(b.text)) {
     const figures = b.figures.filter((f) => inside(f, span));
-    if (!figures.some((f) => (f.kind === 'thrust' || f.kind === 'thrust-per-power') && f.role !== 'aside')) continue;
+    if (!figures.some((f) => (f.kind === 'thrust' || f.kind === 'thrust-per-power') && f.role !== 'aside' && !isTheBound(f, 0.05))) continue;
     return { figures, s: readSignals({ ...b.ctx, text: b.text.slice(span[0], span[1]) }) };
   }
   return null;
@@ -37,8 +44,7 @@ export function planThrust(b: Basis): ThrustReading {
   const figures = scoped?.figures ?? b.figures;
   const power = scoped ? ofKind(figures, 'power') : b.power;
   const thrust = ofKind(figures, 'thrust')[0];
-  // A thrust per power of 1/c is the bound itself said in the text ("1/c ≈ 3.34 nN/W"), not a claim.
-  const perPower = ofKind(figures, 'thrust-per-power').find((f) => Math.abs(f.si * C_LIGHT - 1) > 0.01);
+  const perPower = ofKind(figures, 'thrust-per-power').find((f) => !isTheBound(f));
   // The power that drives the thrust: the input nearest the thrust in the text (not a reference lamp's).
   const thrustAt = ofKind(figures, 'thrust')[0]?.start ?? null;
   const nearThrust = (fs: Figure[]) => (thrustAt === null ? fs[0] : [...fs].sort((a, b) => Math.abs((a.start ?? 0) - thrustAt) - Math.abs((b.start ?? 0) - thrustAt))[0]);

@@ -20,6 +20,8 @@ import { relateTemperatures } from './temperatures';
 /** The text says the input was not given: a claim of no input cannot be read from it. */
 const INPUT_NOT_GIVEN_RE =
   /(?<!\p{L})(?:(?:gives?|gave|states?|stated|reports?|reported|provides?|provided|quotes?|quoted|lists?|listed|offers?|offered)[^\S\n]+no[^\S\n]+(?:figures?|numbers?|values?|data|measurements?|readings?)|(?:does|do|did)[^\S\n]*(?:not|n't)[^\S\n]+(?:say|state|give|report|disclose|quote|list|mention|measure))[^.;!?\n]{0,40}(?:input|takes?(?: in)?|draws?|consumes?|uses?|needs?|supply|feeds? it)(?!\p{L})/iu;
+/** "No input figure was given": the input is not known, not nil. */
+const NO_INPUT_FIGURE_RE = /(?<!\p{L})no[^\S\n]+(?:input|supply)[^\S\n]+(?:power[^\S\n]+|energy[^\S\n]+)?(?:figures?|numbers?|values?|data|measurements?|readings?)(?!\p{L})/iu;
 const SELF_RUNNING_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'giu');
 const HARVEST_RE = new RegExp(`(?<!\\p{L})(?:${alt(HARVEST_WORDS)})(?!\\p{L})`, 'iu');
 
@@ -352,7 +354,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const inputUnknown =
       /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data|figure|value|itself|current))*[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text) ||
       // "The seller gives no figure for what it takes in", "does not say how much it draws".
-      INPUT_NOT_GIVEN_RE.test(text);
+      INPUT_NOT_GIVEN_RE.test(text) ||
+      NO_INPUT_FIGURE_RE.test(text);
     // (A machine between a hot and a cold side takes heat in from the hot one: "without fuel" is not "without input".)
     const thermal = drafts.some((d) => d.kind === 'temperature' && d.role === 'hot') && drafts.some((d) => d.kind === 'temperature' && d.role === 'cold');
     if (m && out && !inputUnknown && !thermal && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {

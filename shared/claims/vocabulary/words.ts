@@ -49,7 +49,7 @@ export const HEAT_ENGINE_WORDS = [
 /** A device said to throw out nothing: the photon-rocket bound applies to its thrust. */
 export const PROPELLANT_FREE_WORDS = [
   // ("no air flow or propellant": before the shorter "no air flow" below, so that the propellant is part of the match.)
-  'no (?:[\\w-]+ ){0,2}(?:or|nor) (?:any )?(?:propellant|reaction mass|exhaust)', 'neither (?:[\\w-]+ ){0,2}nor (?:any )?(?:propellant|reaction mass|exhaust)',
+  'no (?:[\\w-]+ ){0,2}(?:or|nor) (?:any )?(?:propellant|reaction mass|exhaust)', 'without (?:[\\w-]+,? ){1,3}(?:or|nor) (?:any )?(?:propellant|reaction mass|exhaust)', 'neither (?:[\\w-]+ ){0,2}nor (?:any )?(?:propellant|reaction mass|exhaust)',
   'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless', 'without (?:spending|using|burning|consuming|expending) (?:any )?(?:propellant|fuel|reaction mass)',
   '(?:ion(?:ic)? wind|air currents?|convection) (?:cannot|can ?not|can\'t|could not|is not|isn\'t) (?:be )?(?:the )?(?:cause|explanation|source)', 'rul(?:e|es|ed|ing) out (?:ion(?:ic)? wind|air currents?|convection)',
   'without (?:any )?(?:expelling|ejecting|emitting|throwing|shedding|venting)(?: (?:out )?(?:any )?(?:propellant|mass|reaction mass|material|matter|exhaust|gas))?',
@@ -99,7 +99,7 @@ export const SELF_RUNNING_WORDS = [
   'self-?running', 'self-?sustain(?:ing|ed|s)', 'self-?powered', 'self-?looped', 'self-?looping', 'self-?feeding', 'self-?charging', 'self-?perpetuating',
   'needs? no (?:external )?(?:power|energy|input|supply|fuel|battery|electricity|source)', 'requires? no (?:external )?(?:power|energy|input|supply|fuel|electricity|source)',
   'without (?:any )?(?:external )?(?:power|energy|input|supply|fuel|electricity)(?: source| supply| input)?', 'no (?:external )?(?:power|energy) (?:input|source|supply)',
-  'no (?:external )?input', '(?<!(?:input|output|supply|source|the|its|of|rated|electrical|shaft)[^\\S\\n]+)powers? itself', '(?:drawing|draws|consuming|consumes|using|uses|taking|takes) nothing', 'with nothing (?:going )?in',
+  'no (?:external )?input(?! (?:power |energy )?(?:figures?|numbers?|values?|data|measurements?|readings?))', '(?<!(?:input|output|supply|source|the|its|of|rated|electrical|shaft)[^\\S\\n]+)powers? itself', '(?:drawing|draws|consuming|consumes|using|uses|taking|takes) nothing', 'with nothing (?:going )?in',
   'no connection to (?:the )?(?:grid|mains|supply|power)', 'not connected to (?:the )?(?:grid|mains|any (?:supply|source))', 'zero input', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
   'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
   'with nothing (?:plugged in|connected|attached)(?: to drive it)?', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',
