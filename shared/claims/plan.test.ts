@@ -447,6 +447,16 @@ describe('what a text says of its own figures (issue 11, invented test data)', (
   });
 });
 
+test("a paragraph that gives both sides is the ledger; a rating alone in another paragraph is not set against its input (invented test data)", () => {
+  const text =
+    "Complaint: the motor is sold as '500 W' but feels weak on hills.\n\n" +
+    'Workshop test: at full assist the controller drew 8.5 A at 48 V from the battery, and the roller measured 340 W at the wheel.';
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  // P_in = 8.5 A × 48 V = 408 W; 340 / 408 = 0.8333.
+  expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(340 / 408, 9);
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

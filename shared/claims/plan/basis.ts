@@ -65,6 +65,12 @@ function formOf(f: Figure, text: string): string | null {
   return null;
 }
 
+/** Which paragraph (blank-line separated) a place in the text is in (its start). */
+export function paragraphKey(text: string, at: number): number {
+  const m = /[\s\S]*\n[^\S\n]*\n/u.exec(text.slice(0, at));
+  return m ? m[0].length : 0;
+}
+
 /** Which sentence a place in the text is in (its start). */
 export function sentenceKey(text: string, at: number): number {
   const head = text.slice(0, at);
@@ -120,6 +126,23 @@ function combine(figs: Figure[], side: 'in' | 'out', text: string): Figure | und
   return sum;
 }
 
+/**
+ * In a text of several paragraphs where some paragraph gives both what goes in and what comes out (a
+ * workshop's test: "drew 8.5 A at 48 V … 340 W at the wheel"), the ledger is read from such paragraphs
+ * only: an output alone in another paragraph ("the motor is sold as '500 W'") is a rating or another
+ * device's, not a figure to set against that input.
+ */
+function ledgerParagraphs(figs: Figure[], text: string): [Figure[], Figure[]] {
+  const ins = figs.filter((f) => f.role === 'in');
+  const outs = figs.filter((f) => f.role === 'out');
+  if (!text || ins.length === 0 || outs.length === 0 || [...ins, ...outs].some((f) => f.start === null)) return [ins, outs];
+  const key = (f: Figure) => paragraphKey(text, f.start!);
+  const outKeys = new Set(outs.map(key));
+  const both = new Set(ins.map(key).filter((k) => outKeys.has(k)));
+  if (both.size === 0) return [ins, outs];
+  return [ins.filter((f) => both.has(key(f))), outs.filter((f) => both.has(key(f)))];
+}
+
 export interface PlanResult {
   plans: Plan[];
   needs: ClaimCheckNeed[];
@@ -159,10 +182,12 @@ export function basisFor(figures: Figure[], ctx: PlanContext): Basis {
   const power = ofKind(figures, 'power');
   const energy = ofKind(figures, 'energy');
   const text = ctx.text ?? '';
-  const pIn = combine(power.filter((f) => f.role === 'in'), 'in', text);
-  const pOut = combine(power.filter((f) => f.role === 'out'), 'out', text);
-  const eIn = combine(energy.filter((f) => f.role === 'in'), 'in', text);
-  const eOut = combine(energy.filter((f) => f.role === 'out'), 'out', text);
+  const [pIns, pOuts] = ledgerParagraphs(power, text);
+  const [eIns, eOuts] = ledgerParagraphs(energy, text);
+  const pIn = combine(pIns, 'in', text);
+  const pOut = combine(pOuts, 'out', text);
+  const eIn = combine(eIns, 'in', text);
+  const eOut = combine(eOuts, 'out', text);
   const duration = largest(ofKind(figures, 'duration'));
   const speeds = ofKind(figures, 'speed');
   const temps = ofKind(figures, 'temperature');

@@ -5,7 +5,7 @@
  * its COP, the efficiency or gain the text states.
  */
 import type { Figure } from '../types';
-import { at, heatMoverCop, need, ofKind, sentenceKey, uniq, type Basis } from './basis';
+import { at, heatMoverCop, need, ofKind, paragraphKey, sentenceKey, uniq, type Basis } from './basis';
 import { paragraphOfAnotherMachine, sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE } from './signals';
 
@@ -54,12 +54,6 @@ function combinedHeatAndPower(f: Figure, text: string): boolean {
   const near = text.slice(Math.max(0, f.start - 40), f.end + 40);
   return /(?<!\p{L})(?:total|overall|combined|fuel utili[sz]ation|system)(?!\p{L})/iu.test(near) && !/(?<!\p{L})electrical(?!\p{L})/iu.test(text.slice(Math.max(0, f.start - 25), f.start));
 }
-
-/** Which paragraph (blank-line separated) a place is in: the place where it starts. */
-const paragraphKey = (text: string, at: number) => {
-  const m = /[\s\S]*\n[^\S\n]*\n/u.exec(text.slice(0, at));
-  return m ? m[0].length : 0;
-};
 
 /** Words of a bound worked out, not a claim: "the ideal COP … is 7.3", "the Carnot limit is 4.9 %". */
 const BOUND_WORDS_RE = /(?<!\p{L})(?:ideal|Carnot|maximum|max|limit|bound|reversible|at most|theoretical|highest possible)(?!\p{L})/iu;
