@@ -397,3 +397,16 @@ test('worked lines "in = … = 4.8 MJ; out = … = 4.05 MJ" and sunlight a colle
     ['out', expect.closeTo(14.2 * 3.6e6, 3)],
   ]);
 });
+
+test('"mass after all usable propellant is burned" is the dry mass, and the rocket equation runs on it (invented test data)', () => {
+  const text =
+    'Propulsion annex:\nmass at separation, fully fuelled and with the payload attached: 1450 kg;\nmass after all usable propellant is burned, stage and payload: 520 kg;\nspecific impulse in vacuum: 318 s;\nplanned velocity change: 3.05 km/s.';
+  expect(read(text).filter((f) => f.kind === 'mass').map((f) => [f.role, f.si])).toEqual([
+    ['wet', 1450],
+    ['dry', 520],
+  ]);
+  // Δv = Isp·g0·ln(m0/m1) = 318 × 9.806 65 × ln(1450/520) = 3198 m/s (Tsiolkovsky; g0 exact, NIST SP 811 B.8 note).
+  const run = verdicts(text).checks.find((c) => c.check === 'rocket-equation');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'dv')!.si).toBeCloseTo(318 * 9.80665 * Math.log(1450 / 520), 3);
+});

@@ -117,7 +117,11 @@ export const MASS_ROLES: readonly RoleWords[] = [
   },
   {
     role: 'dry',
-    before: ['dry', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert', '(?:burn(?:s|ing|ed|t)?|drops?|dropping|dropped|falls?|falling|fell) (?:down )?to', 'ends? (?:up )?(?:at|with)', 'ending (?:up )?(?:at|with)'],
+    before: [
+      // "mass after all usable propellant is burned, stage and payload: 520 kg" (before the propellant words,
+      // the longest fitting words win).
+      '(?:mass )?(?:after|once|when) (?:all )?(?:the |its )?(?:usable |useable )?(?:propellant|fuel)s? (?:is|are|has been|have been|was|were) (?:all )?(?:burn(?:ed|t)|used(?: up)?|spent|consumed|expended|gone)(?:[^\\S\\n]*[,:;]?[^\\S\\n]*(?:[\\w-]+ ){0,3}?[\\w-]*[:=,]?)?',
+      'dry', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert', '(?:burn(?:s|ing|ed|t)?|drops?|dropping|dropped|falls?|falling|fell) (?:down )?to', 'ends? (?:up )?(?:at|with)', 'ending (?:up )?(?:at|with)'],
     after: ['(?:dry|empty|final|burn-?out|structural) mass', '\\((?:empty|dry|unfuell?ed|when empty)\\)', 'dry', 'empty',
       'when (?:(?:its|the) tanks? (?:are|is) |it is )?(?:empty|dry)', ',[^\\S\\n]*(?:empty|dry)(?=[^\\S\\n]*(?:[;.)\\n]|$))', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end'],
   },
