@@ -457,6 +457,19 @@ test("a paragraph that gives both sides is the ledger; a rating alone in another
   expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(340 / 408, 9);
 });
 
+describe('a craft whose propulsor is denied (issue 11, invented test data)', () => {
+  const photon = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
+  it('"pushes a small boat with 2.5 pounds of thrust from a 3 hp motor, with no propeller and no water jet", nothing leaving the case, is held to F ≤ P/c', () => {
+    const run = photon("The sheet says the unit 'pushes a small boat with 2.5 pounds of thrust from a 3 hp electric motor, with no propeller and no water jet'. The case is sealed; nothing leaves it.");
+    expect(run?.finding).toBe('breaks');
+    // lbf = 4.448 221 615 260 5 N, hp = 745.699 871 582 27 W (NIST SP 811, B.8): F·c/P.
+    expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo((2.5 * 4.4482216152605 * C) / (3 * 745.69987158227), -2);
+  });
+  it('a boat pushed by a water jet, with no propeller and no exhaust, still throws water out', () => {
+    expect(photon('The electric boat has no propeller: a water jet pushes it with 200 N from 3 kW, and there is no exhaust.')).toBeUndefined();
+  });
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

@@ -70,7 +70,11 @@ const EXPLICIT_NO_PROPELLANT_RE =
   /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected|comes out)|without (?:throwing|expelling|ejecting|blowing) (?:anything|anything at all|any mass)(?: out)?|throws? nothing (?:out|away|overboard))(?!\p{L})/iu;
 /** A propulsion word said not to be there ("no tether", "without a fan"), or a mass inside the device pushed on ("on a brass reaction mass"). */
 const NEGATED_WORD_ALL_RE =
-  /(?<!\p{L})(?:(?:no|without(?: an?)?|never)[^\S\n]+(?:any[^\S\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?)|(?:on|against)[^\S\n]+(?:a|an|the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?reaction mass(?:es)?)(?!\p{L})/giu;
+  /(?<!\p{L})(?:(?:no|without(?: an?)?|never|nor)[^\S\n]+(?:any[^\S\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?|water[- ]?jets?|paddles?|screws?)|(?:on|against)[^\S\n]+(?:a|an|the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?reaction mass(?:es)?)(?!\p{L})/giu;
+/** A propulsor said not to be there. */
+const PROPULSOR_DENIED_RE = /(?<!\p{L})(?:no|without(?: an?)?|nor)[^\S\n]+(?:any[^\S\n]+)?(?:propellers?|water[- ]?jets?|paddles?|screws?|rotors?|fans?)(?!\p{L})/iu;
+/** Craft whose word stands for their propulsor. */
+const CRAFT_ALL_RE = /(?<!\p{L})(?:(?:survey|hobby|model|small|RC|R\/C|radio[- ]controlled)[^\S\n]+)?(?:boats?|ships?|hulls?|outboards?|hovercraft|(?:air|aero)planes?|aircraft|drones?|quadcopters?|multicopters?)(?!\p{L})/giu;
 /** The claimant's own voice. */
 const OWN_VOICE_RE = /(?<!\p{L})(?:our|ours|we|us|my|mine)(?!\p{L})/iu;
 /** A sentence that compares, asks, or moves on to another subject: its propulsion words are not the claim's. */
@@ -116,7 +120,11 @@ export function readSignals(ctx: PlanContext): Signals {
   const text = ctx.text ?? '';
   const classes = ctx.classes ?? [];
   const top = classes[0];
-  const withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ').replace(NEGATED_PROPELLANT_ALL_RE, ' ').replace(NEGATED_WORD_ALL_RE, ' ');
+  let withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ').replace(NEGATED_PROPELLANT_ALL_RE, ' ').replace(NEGATED_WORD_ALL_RE, ' ');
+  // A craft's word stands for its usual propulsor (a boat's screw, an aircraft's propeller): where the text
+  // denies the propulsor and says plainly nothing is thrown out ("pushes a small boat … with no propeller
+  // and no water jet"), the craft's word says nothing of propellant.
+  if (PROPULSOR_DENIED_RE.test(text) && PLAIN_NO_PROPELLANT_RE.test(text)) withoutFree = withoutFree.replace(CRAFT_ALL_RE, ' ');
   // "no heat pump, no outdoor coil": a machine said not to be one.
   const notDenied = text.replace(/(?<!\p{L})(?:no|not an?|without an?|isn't an?|is not an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|refrigerators?|chillers?|compressors?)(?!\p{L})/giu, ' ');
   return {
