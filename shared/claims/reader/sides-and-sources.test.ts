@@ -410,3 +410,20 @@ test('"mass after all usable propellant is burned" is the dry mass, and the rock
   expect(run?.finding).toBe('consistent');
   expect(run!.outputs.find((o) => o.name === 'dv')!.si).toBeCloseTo(318 * 9.80665 * Math.log(1450 / 520), 3);
 });
+
+test('the other side worked out later from the side said with the difference is that derivation said again (invented test data)', () => {
+  const text =
+    'Slide 2. The tile wraps pipes with a surface at 60 °C and holds a ΔT of 20 K across the module.\n\nSlide 3. 12 % conversion efficiency, heat to electricity.\n\n' +
+    'Analyst: with 60 °C on the hot face and 20 K across the tile, the fins are at 40 °C; the limit is about 6 %.';
+  const f = read(text);
+  const sides = temps(f).filter(([role]) => role === 'hot' || role === 'cold');
+  expect(sides).toEqual([
+    ['hot', 333.15],
+    ['cold', expect.closeTo(313.15, 9)],
+  ]);
+  // The cold side is the one derived beside the hot side, not the analyst's (η_C = 20/333.15 = 0.06003; 0.12 / 0.06003 = 1.999).
+  expect(f.find((x) => x.kind === 'temperature' && x.role === 'cold')?.derived).toBeTruthy();
+  const run = verdicts(text).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('breaks');
+  expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.12 / (20 / 333.15), 6);
+});

@@ -276,35 +276,54 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
   }
 
   // One temperature and a difference: the other temperature.
-  const temps = drafts.filter((d) => d.kind === 'temperature' && !d.derived && d.role !== 'aside');
+  let temps = drafts.filter((d) => d.kind === 'temperature' && !d.derived && d.role !== 'aside');
   const diff = drafts.find((d) => d.kind === 'temperature-difference');
-  if (diff && temps.length === 1) {
-    const t = temps[0];
+  /** The other side, from one stated temperature and the difference. */
+  const derivedSide = (t: Draft, diff: Draft) => {
     const tSi = siOf(t);
     const dSi = siOf(diff);
-    if (tSi !== null && dSi !== null) {
-      // "30 °C below a 25 °C room": the other lies below; "40 degrees above the 20 °C ambient": above;
-      // else by the stated temperature's role (hot → the other is colder).
-      // "held at −18 °C, a full 50 K below the room": the difference describes the stated temperature
-      // itself (said right after it), so the other side lies the other way.
-      const apposition = t.end <= diff.start && APPOSITION_RE.test(text.slice(t.end, diff.start));
-      // "supplies 55 °C water; with a 50 K lift over its source": the difference is measured from another
-      // side, named after it, so the stated temperature is the one above (or below) that side.
-      // But "… and a sink 50 °C cooler than the head", "hot side 40 K above the cold side": a side named
-      // right before the difference is the one it describes, so the direction stands as said.
-      const sideBeforeDiff = /(?<!\p{L})(?:sinks?|reservoirs?|sides?|plates?|ends?|sources?|condensers?|evaporators?|coolers?|heaters?|baths?|loops?|exhaust|outlets?|inlets?|heads?|junctions?|faces?)[^\S\n]+(?:(?:is|sits|runs|at|being|was|lies|stays|kept|held|some|about|only|just|a|full)[^\S\n]+){0,3}$/iu.test(
-        text.slice(Math.max(0, diff.start - 50), diff.start),
-      );
-      const fromNamedOther = t.end <= diff.start && !sideBeforeDiff && NAMED_OTHER_SIDE_RE.test(text.slice(diff.end, diff.end + 60));
-      // "between the 25 °C air and the cooler soil": the other side said to be cooler or warmer than this one.
-      const other = /^[^\S\n,]*(?:[\p{L}-]+[^\S\n,]+){0,2}?and[^\S\n]+(?:the|a|an|its)[^\S\n]+(cooler|colder|lower|warmer|hotter|higher)(?!\p{L})/iu.exec(text.slice(t.end, t.end + 50));
-      const said = other
-        ? /^(?:cooler|colder|lower)/i.test(other[1]) ? 'down' : 'up'
-        : (apposition || fromNamedOther) && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
-      // A heat pump's one stated temperature is what it supplies (the hot side); a fridge's is what it keeps (the cold side).
-      const side = t.role ?? (HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) ? 'hot' : COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text) ? 'cold' : null);
-      const down = said === 'down' || (said === undefined && side === 'hot');
-      const otherSi = down ? tSi - dSi : tSi + dSi;
+    if (tSi === null || dSi === null) return null;
+    // "30 °C below a 25 °C room": the other lies below; "40 degrees above the 20 °C ambient": above;
+    // else by the stated temperature's role (hot → the other is colder).
+    // "held at −18 °C, a full 50 K below the room": the difference describes the stated temperature
+    // itself (said right after it), so the other side lies the other way.
+    const apposition = t.end <= diff.start && APPOSITION_RE.test(text.slice(t.end, diff.start));
+    // "supplies 55 °C water; with a 50 K lift over its source": the difference is measured from another
+    // side, named after it, so the stated temperature is the one above (or below) that side.
+    // But "… and a sink 50 °C cooler than the head", "hot side 40 K above the cold side": a side named
+    // right before the difference is the one it describes, so the direction stands as said.
+    const sideBeforeDiff = /(?<!\p{L})(?:sinks?|reservoirs?|sides?|plates?|ends?|sources?|condensers?|evaporators?|coolers?|heaters?|baths?|loops?|exhaust|outlets?|inlets?|heads?|junctions?|faces?)[^\S\n]+(?:(?:is|sits|runs|at|being|was|lies|stays|kept|held|some|about|only|just|a|full)[^\S\n]+){0,3}$/iu.test(
+      text.slice(Math.max(0, diff.start - 50), diff.start),
+    );
+    const fromNamedOther = t.end <= diff.start && !sideBeforeDiff && NAMED_OTHER_SIDE_RE.test(text.slice(diff.end, diff.end + 60));
+    // "between the 25 °C air and the cooler soil": the other side said to be cooler or warmer than this one.
+    const other = /^[^\S\n,]*(?:[\p{L}-]+[^\S\n,]+){0,2}?and[^\S\n]+(?:the|a|an|its)[^\S\n]+(cooler|colder|lower|warmer|hotter|higher)(?!\p{L})/iu.exec(text.slice(t.end, t.end + 50));
+    const said = other
+      ? /^(?:cooler|colder|lower)/i.test(other[1]) ? 'down' : 'up'
+      : (apposition || fromNamedOther) && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
+    // A heat pump's one stated temperature is what it supplies (the hot side); a fridge's is what it keeps (the cold side).
+    const side = t.role ?? (HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) ? 'hot' : COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text) ? 'cold' : null);
+    const down = said === 'down' || (said === undefined && side === 'hot');
+    return { tSi, dSi, said, side, down, otherSi: down ? tSi - dSi : tSi + dSi };
+  };
+  // "a surface at 60 °C and a ΔT of 20 K across the module … the fins are at 40 °C": the other side worked
+  // out later, in another sentence, from the side said with the difference — the first statement stands,
+  // and the worked-out one is set aside (the other side is derived beside its first statement), where
+  // that derivation gives the same temperature.
+  if (diff && temps.length === 2) {
+    const [a, b] = temps;
+    const o = derivedSide(a, diff);
+    const bSi = siOf(b);
+    if (o && bSi !== null && sentenceOf(text, a) === sentenceOf(text, diff) && sentenceOf(text, b) !== sentenceOf(text, a) && Math.abs(o.otherSi - bSi) <= 0.5) {
+      b.role = 'aside';
+      temps = [a];
+    }
+  }
+  if (diff && temps.length === 1) {
+    const t = temps[0];
+    const o = derivedSide(t, diff);
+    if (o) {
+      const { tSi, dSi, said, side, down, otherSi } = o;
       const anchor = diff.start > t.start ? diff : t;
       insertAfter(drafts, anchor, {
         start: Math.min(t.start, diff.start),
