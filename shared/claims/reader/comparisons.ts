@@ -69,7 +69,7 @@ function inContrastedClause(text: string, d: Draft): boolean {
 }
 
 /** Before a percentage, in its clause: a comparison with the percentage said just before ("38 %, against 33 % for"). */
-const COMPARED_PERCENT_BETWEEN_RE = /(?<!\p{L})(?:against|compared (?:with|to)|in comparison (?:with|to)|as against|versus|vs\.?|whereas|while|unlike|than)(?!\p{L})/iu;
+const COMPARED_PERCENT_BETWEEN_RE = /(?<!\p{L})(?:against|compared (?:with|to)|in comparison (?:with|to)|as against|versus|vs(?:\.|(?![-\d]))|whereas|while|unlike|than)(?!\p{L})/iu;
 
 /**
  * A percentage with no word of its own that is the other side of a comparison with a percentage read
@@ -116,7 +116,7 @@ const STANDS_IN_BEFORE_RE = new RegExp(
 /** Right after such a figure: "60 W-equivalent", "60 W equivalent", "a 100 W equiv. bulb". */
 const EQUIVALENT_AFTER_RE = /^[^\S\n]*[-–]?[^\S\n]*(?:equivalent|equiv\.?|replacement)(?!\p{L})/iu;
 const COMPARED_BEFORE_RE =
-  /(?<!\p{L})(?:compared (?:with|to)|in comparison (?:with|to)|as against|as opposed to|versus|vs\.?|whereas|while (?:typical|conventional|ordinary|standard|commercial|existing)|unlike)(?!\p{L})[^.;!?\n]{0,50}$/iu;
+  /(?<!\p{L})(?:compared (?:with|to)|in comparison (?:with|to)|as against|as opposed to|versus|vs(?:\.|(?![-\d]))|whereas|while (?:typical|conventional|ordinary|standard|commercial|existing)|unlike)(?!\p{L})[^.;!?\n]{0,50}$/iu;
 /**
  * "Our previous prototype reached 35 % at 800 W": an earlier device, not the one claimed; in a sentence
  * that names both ("the earlier box gave 500 W from 100 W; the new unit gave 90 W"), the clause of the

@@ -663,3 +663,12 @@ describe('a report on several machines: a heat pump named in one paragraph is no
     expect(extractFigures(text).find((f) => f.text.startsWith('350'))).toMatchObject({ kind: 'cop', role: 'heating', si: 3.5 });
   });
 });
+
+test('a model name "VS-8" is no "vs." of a comparison (invented test data)', () => {
+  for (const text of ['The VS-8 heat pump has a COP of 4.2 at 7 °C outside with water supplied at 35 °C.', 'The VS8 heat pump reaches a COP of 4.2.']) {
+    expect(extractFigures(text).find((f) => f.kind === 'cop')).toMatchObject({ role: 'heating', si: 4.2 });
+  }
+  // A comparison still sets the other figure aside.
+  expect(extractFigures('Our heat pump reaches a COP of 4.2 at 7 °C, vs. a COP of 3.1 for the old unit.').find((f) => f.si === 3.1)?.role).toBe('aside');
+  expect(extractFigures('The new motor is 94 % efficient vs 88 % for the old one.').find((f) => Math.abs(f.si - 0.88) < 1e-9)?.role).toBe('aside');
+});
