@@ -672,3 +672,11 @@ test('a model name "VS-8" is no "vs." of a comparison (invented test data)', () 
   expect(extractFigures('Our heat pump reaches a COP of 4.2 at 7 °C, vs. a COP of 3.1 for the old unit.').find((f) => f.si === 3.1)?.role).toBe('aside');
   expect(extractFigures('The new motor is 94 % efficient vs 88 % for the old one.').find((f) => Math.abs(f.si - 0.88) < 1e-9)?.role).toBe('aside');
 });
+
+test('an efficiency defined in a clause set off before its figure (invented test data)', () => {
+  const pct = (text: string) => extractFigures(text).find((f) => f.text.endsWith('%'));
+  expect(pct('Efficiency, electrical power out over heat flowing through the module: 4.0 %.')).toMatchObject({ kind: 'efficiency', si: 0.04 });
+  expect(pct('Net cycle efficiency — net electrical output divided by the heat taken from the brine — of 11 %.')).toMatchObject({ kind: 'efficiency', si: 0.11 });
+  // "improved by 5 %" is still a change, not an efficiency.
+  expect(pct('The efficiency improved by 5 % after the retrofit.')?.kind).not.toBe('efficiency');
+});

@@ -152,7 +152,7 @@ export const LABEL_WORDS = [
 ];
 
 /** Words between the efficiency keyword and a percentage that say it is a change, not an efficiency. */
-export const EFFICIENCY_CHANGE_WORDS = ['by', 'increas\\w*', 'improv\\w*', 'gains?', 'drops?', 'dropped', 'loss(?:es)?', 'rais\\w*', 'boost\\w*', 'points?'];
+export const EFFICIENCY_CHANGE_WORDS = ['(?<!(?:divided|multiplied)[^\\S\\n]+)by', 'increas\\w*', 'improv\\w*', 'gains?', 'drops?', 'dropped', 'loss(?:es)?', 'rais\\w*', 'boost\\w*', 'points?'];
 
 /** Words allowed between "efficiency"/"COP" and a bare number ("an efficiency of 0.62", "COP = 4"). */
 export const BARE_CONNECTORS = [
