@@ -3,6 +3,7 @@
  * the planner (shared/claims/plan.ts): it throws out no propellant, or does; it is a heat engine, a
  * heat pump or a machine that cools; it is said to give more energy than it takes.
  */
+import { BURNER_RE, NAMED_HEAT_PUMP_RE } from '../reader/context';
 import { COOLING_MACHINE_WORDS, HEAT_ENGINE_WORDS, HEAT_PUMP_WORDS, PROPELLANT_FREE_WORDS, PROPELLANT_WORDS } from '../figures-vocabulary';
 
 /** Mechanism classes (content/taxonomy.yml) whose devices throw out nothing. */
@@ -135,7 +136,8 @@ export function readSignals(ctx: PlanContext): Signals {
       onlyTheClaim(text, (vacuumClaimed(text) ? withoutFree.replace(AIR_PUSHER_RE, ' ') : withoutFree).replace(PHOTON_ROCKET_RE.test(text) ? BARE_ROCKET_RE : /$^/u, ' ')),
     ),
     heatEngine: HEAT_ENGINE_RE.test(text),
-    heatPump: HEAT_PUMP_RE.test(notDenied),
+    // (A boiler's text names radiators and flow temperatures too: those words alone name no heat pump there.)
+    heatPump: HEAT_PUMP_RE.test(notDenied) && !(BURNER_RE.test(text) && !NAMED_HEAT_PUMP_RE.test(notDenied)),
     cooling: COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied),
     coolingWords: COOLING_RE.test(notDenied),
     overUnity: OVER_UNITY_RE.test(text) || (top !== undefined && OVER_UNITY_CLASSES.includes(top)),

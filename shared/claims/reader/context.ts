@@ -57,3 +57,9 @@ export function paragraphOfAnotherMachine(text: string, start: number, end: numb
   if (HEAT_PUMP_RE.test(paragraph) || COOLING_MACHINE_RE.test(paragraph) || !OTHER_MACHINE_RE.test(paragraph) || HEAT_WORDS_RE.test(paragraph)) return null;
   return paragraph;
 }
+
+/** A heater that burns fuel. */
+export const BURNER_RE = /(?<!\p{L})(?:boilers?|furnaces?|stoves?|burners?|pellets?|oil-fired|gas-fired|wood-fired|combustion)(?!\p{L})/iu;
+/** A heat pump named as such (not only by the radiators or the flow temperature it serves). */
+export const NAMED_HEAT_PUMP_RE = /(?<!\p{L})(?:heat[- ]pumps?|air[- ]source|ground[- ]source|water[- ]source|ASHPs?|GSHPs?|air[- ]to[- ](?:water|air)|water[- ]to[- ]water|brine[- ]to[- ]water|heat[- ]pumping)(?!\p{L})/iu;
+

@@ -7,7 +7,7 @@
  */
 import { BARE_CONNECTORS, C_M_PER_S, EFFICIENCY_CHANGE_WORDS, ISP_WORDS, QUANTUM_EFFICIENCY_WORDS } from '../figures-vocabulary';
 import type { FigureKind, FigureRole } from '../types';
-import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphOfAnotherMachine, sentenceAround, windowStart } from './context';
+import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, BURNER_RE, NAMED_HEAT_PUMP_RE, paragraphOfAnotherMachine, sentenceAround, windowStart } from './context';
 
 
 /** ", measured per §7 of the test protocol," between a COP and its value: a clause set off by commas. */
@@ -172,7 +172,9 @@ export function readPercent(text: string, start: number, end: number, floor: num
   // '52 % efficient'", in a text that mentions a heat pump's percentage by contrast.)
   const own = sentenceAround(text, start, end);
   const engineHere = ENGINE_NAMED_RE.test(own) && !HEAT_PUMP_RE.test(own);
-  if (!engineHere && HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
+  // (A boiler's text names radiators and flow temperatures too: those words alone name no heat pump there.)
+  const burnerOnly = BURNER_RE.test(text) && !NAMED_HEAT_PUMP_RE.test(sentence);
+  if (!engineHere && !burnerOnly && HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
     if (!(value <= 100)) return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump said to be more than 100 % efficient: read as a heating COP (heat delivered over work put in).' };
     return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump\'s percentage read as a heating COP (heat delivered over work put in).' };
   }

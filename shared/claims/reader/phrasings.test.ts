@@ -680,3 +680,15 @@ test('an efficiency defined in a clause set off before its figure (invented test
   // "improved by 5 %" is still a change, not an efficiency.
   expect(pct('The efficiency improved by 5 % after the retrofit.')?.kind).not.toBe('efficiency');
 });
+
+test("a boiler's radiators name no heat pump: its percentage is an efficiency (invented test data)", () => {
+  const text = 'Wood-pellet boiler for radiators and underfloor circuits. Heat input (fuel) 16.2 kW; nominal heat output 14.9 kW; boiler efficiency 92 %.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.text.startsWith('92'))).toMatchObject({ kind: 'efficiency', si: 0.92 });
+  const run = runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  // 14.9 / 16.2 = 0.9198 (first law: heat out over fuel in).
+  expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(14.9 / 16.2, 9);
+  // A heat pump named as such keeps its COP beside radiators.
+  expect(extractFigures("The air-to-water heat pump for our radiators is '350 % efficient'.").find((x) => x.kind === 'cop')).toMatchObject({ role: 'heating', si: 3.5 });
+});
