@@ -470,6 +470,22 @@ describe('a craft whose propulsor is denied (issue 11, invented test data)', () 
   });
 });
 
+test('the speed of light said as a reference ("light travels at about 300,000 km/s") is not judged against c (invented test data)', () => {
+  const text = 'The tool shows an effective speed of 156,000 km/s for our fibre link, against about 200,000 km/s for light in glass. In a vacuum light travels at about 300,000 km/s.';
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'light-speed');
+  expect(run?.finding).toBe('consistent');
+  // The fastest speed judged is the 200,000 km/s of light in glass: 2e8 / c = 0.6671 (c exact, BIPM SI Brochure).
+  expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(2e8 / C, 6);
+  // A claim of a speed near c is still judged: "the probe reached 300,500 km/s".
+  const claim = 'The team says its probe reached 300,500 km/s.';
+  expect(runClaimChecks(extractFigures(claim), { text: claim }).checks.find((c) => c.check === 'light-speed')?.finding).toBe('breaks');
+});
+
+test('"how much power the falling water carries, and got 12 W": "power the" there is a noun, no output verb (invented test data)', () => {
+  const f = extractFigures('We worked out how much power the falling water carries, and got 12 W.');
+  expect(f.find((x) => x.kind === 'power')?.role).not.toBe('out');
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

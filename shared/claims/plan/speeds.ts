@@ -18,6 +18,10 @@ const SPACE_SPEED_FROM = 1_000;
 /** Before a speed that is no signal's: a phase velocity, a spot or shadow swept across a screen, a galaxy's recession (space expanding, nothing moving through it). */
 const NO_SIGNAL_SPEED_RE = /(?<!\p{L})(?:phase (?:velocity|speed)|phase front|spot|shadow|sweep(?:s|ing)?|apparent (?:velocity|speed|motion)|appears? to (?:move|travel|go|run)|seems? to (?:move|travel|go)|recedes?|receding|recession(?: (?:speed|velocity))?)(?!\p{L})[^.;!?\n]{0,25}$/iu;
 
+/** Just before the speed of light said as such: "light travels at about", "the speed of light is", "c ≈". */
+const LIGHT_ITSELF_BEFORE_RE =
+  /(?<!\p{L})(?:light(?:[^\S\n]+(?:in[^\S\n]+(?:a[^\S\n]+)?vacuum|itself))?[^\S\n]+(?:travels|moves|goes|propagates|runs)|(?:speed|velocity)[^\S\n]+of[^\S\n]+light(?:[^\S\n]+in[^\S\n]+(?:a[^\S\n]+)?vacuum)?(?:[^\S\n]+(?:is|of|=|,|:))?|(?<!\p{L})c[^\S\n]*(?:=|≈|~|is))[^\S\n]*(?:(?:at|of)[^\S\n]+)?(?:(?:about|roughly|some|nearly|almost|approximately|around|just under|close to)[^\S\n]+)?$/iu;
+
 export function planSpeeds(b: Basis): void {
   const { plans, notes, text, speeds } = b;
   // A phase velocity (or a spot swept across a screen) above c carries no signal: not a speed to judge.
@@ -25,7 +29,11 @@ export function planSpeeds(b: Basis): void {
   for (const f of speeds.filter((x) => noSignal(x) && (x.upper?.si ?? x.si) >= C_LIGHT)) {
     notes.push(`${f.display.trim()} is said of a phase velocity, an apparent motion or a recession with the expansion of space: such speeds may exceed c without anything carrying a signal or energy through space faster than light, so special relativity does not forbid them.`);
   }
-  const signalSpeeds = speeds.filter((f) => !noSignal(f));
+  // "In a vacuum light travels at about 300,000 km/s": the speed of light itself said (within 0.5 % of c), a
+  // reference for the figures around it, not a claim to judge.
+  const lightItself = (f: Figure) =>
+    f.start !== null && Math.abs(f.si / C_LIGHT - 1) <= 0.005 && !f.upper && LIGHT_ITSELF_BEFORE_RE.test(text.slice(Math.max(0, f.start - 60), f.start));
+  const signalSpeeds = speeds.filter((f) => !noSignal(f) && !lightItself(f));
   const fastest = signalSpeeds.filter((f) => f.role !== 'delta-v' || f.si >= C_LIGHT).sort((a, b) => b.si - a.si)[0] ?? largest(signalSpeeds);
   // (A craft's own speed from 1 km/s, where the text is about a speed and not a rocket's budget: "a probe at 17 km/s".)
   const speedFrom = fastest && fastest.role === null && !plans.some((p) => p.check === 'rocket-equation') ? SPACE_SPEED_FROM : LIGHT_SPEED_FROM;
