@@ -78,14 +78,51 @@ export function extractFigures(text: string): Figure[] {
 /** A dotted leader between a label and its value in a table set as text ("Conversion efficiency ...... 5,5 %"). */
 const LEADER_RE = /[^\S\n]*(?:\.{3,}|…+|·{3,}|_{3,})[^\S\n]*(?=[-−+~≈]?\d)/gu;
 
+/** A table's header cell naming the unit column ("Unit", "Units", "Unit of measure"). */
+const UNIT_HEADER_RE = /^[^\S\n]*(?:units?|unit of measure|dimension|UoM)[^\S\n]*$/iu;
+/** A cell that is a unit alone ("kW", "°C", "%", "N/kW", "m/s"): short, no digits but exponents. */
+const UNIT_CELL_RE = /^[^\S\n]*[^\d\s|\t][^\d|\t]{0,11}[^\S\n]*$/u;
+
+/**
+ * A table pasted as text with its units in a column of their own ("Heat through the modules | 1.6 | kW |",
+ * tab-separated likewise, under a header with a "Unit" column): the separator between a value and its
+ * unit is blanked (to the same length, so offsets are kept), and the value is read with its unit.
+ */
+export function joinUnitColumns(text: string): string {
+  const lines = text.split('\n');
+  let unitCol = -1;
+  let sep: string | null = null;
+  const out = lines.map((line) => {
+    const s = line.includes('|') ? '|' : line.includes('\t') ? '\t' : null;
+    if (s === null) {
+      unitCol = -1;
+      return line;
+    }
+    const cells = line.split(s);
+    const header = cells.findIndex((c) => UNIT_HEADER_RE.test(c));
+    if (header > 0) {
+      unitCol = header;
+      sep = s;
+      return line;
+    }
+    if (unitCol < 1 || s !== sep || cells.length <= unitCol) return line;
+    const value = cells[unitCol - 1];
+    const unit = cells[unitCol];
+    if (!/\d[^\S\n]*$/u.test(value) || !UNIT_CELL_RE.test(unit) || /^[^\S\n]*[-—–]+[^\S\n]*$/u.test(unit)) return line;
+    // Blank the separator between the value cell and the unit cell.
+    const at = cells.slice(0, unitCol).join(s).length;
+    return line.slice(0, at) + ' ' + line.slice(at + 1);
+  });
+  return out.join('\n');
+}
+
 function readPlain(text: string): Figure[] {
+  const joined = joinUnitColumns(text);
   // A leader is read as the colon it stands for, blanked to the same length so offsets are kept.
-  if (LEADER_RE.test(text)) {
-    LEADER_RE.lastIndex = 0;
-    const led = text.replace(LEADER_RE, (m) => `:${' '.repeat(m.length - 1)}`);
-    return readUnled(led).map((f) => (f.start === null || f.end === null ? f : { ...f, text: text.slice(f.start, f.end) }));
-  }
-  return readUnled(text);
+  const led = LEADER_RE.test(joined) ? joined.replace((LEADER_RE.lastIndex = 0, LEADER_RE), (m) => `:${' '.repeat(m.length - 1)}`) : joined;
+  LEADER_RE.lastIndex = 0;
+  if (led === text) return readUnled(text);
+  return readUnled(led).map((f) => (f.start === null || f.end === null ? f : { ...f, text: text.slice(f.start, f.end) }));
 }
 
 function readUnled(text: string): Figure[] {

@@ -99,3 +99,24 @@ describe('a table set as text with dotted leaders (invented test data)', () => {
     for (const x of f) expect(text.slice(x.start!, x.end!)).toBe(x.text);
   });
 });
+
+test('a table with its units in a column of their own, pipe- or tab-separated, reads each value with its unit (invented test data)', () => {
+  const piped =
+    'Parameter | Value | Unit | Note\nHot-side surface | 300 | °C | mean\nHeat through the modules | 1.6 | kW | from coolant flow\nElectrical output | 80 | W | DC bus\nConversion efficiency | 5.0 | % | output / heat\nDC bus voltage | 28 | V | —';
+  const f = extractFigures(piped);
+  expect(f.map((x) => [x.kind, x.si])).toEqual([
+    ['temperature', 573.15],
+    ['power', 1600],
+    ['power', 80],
+    ['efficiency', 0.05],
+    ['voltage', 28],
+  ]);
+  // Offsets still point into the pasted text.
+  for (const x of f) expect(piped.slice(x.start!, x.end!)).toBe(x.text);
+  // The 5 % efficiency, not 500 %: η_C = 1 − 353.15/573.15 would need the cold side; with it the check is consistent.
+  const tabbed = 'Item\tValue\tUnit\nThrust\t2.5\tmN\nInput power\t1.2\tkW';
+  expect(extractFigures(tabbed).map((x) => [x.kind, x.si])).toEqual([
+    ['thrust', 0.0025],
+    ['power', 1200],
+  ]);
+});

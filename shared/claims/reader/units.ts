@@ -39,7 +39,7 @@ const wordAlts = UNIT_FORMS.flatMap((f) => f.words ?? [])
 /** A symbol must not run on into a letter, digit or power ("K-type", "W²"); compounds are read after it. */
 const SYMBOL_RE = new RegExp(`${SEP}(${symbolAlts})(?![\\p{L}\\p{N}_²³⁻\\^]|-[^\\S\\n]*\\p{N})`, 'uy');
 const WORD_RE = new RegExp(`${SEP}(${wordAlts})(?![\\p{L}\\p{N}_])`, 'iuy');
-const PERCENT_RE = /[^\S\n]{0,2}(?:%|per[ -]?cent(?!\p{L})|pct\.?(?!\p{L}))/iuy;
+const PERCENT_RE = /[^\S\n]{0,3}(?:%|per[ -]?cent(?!\p{L})|pct\.?(?!\p{L}))/iuy;
 /** A compound after a unit: "/kW", " per kilowatt", "·m", "/m²". */
 const COMPOUND_RE = /[^\S\n]*(?:\/|per(?!\p{L})|·|⋅|-(?=[^\S\n]*\p{L}\p{L}?\b))[^\S\n]*/iuy;
 // (Also "3.1 micronewtons of thrust per kilowatt": the quantity named between the unit and "per".)
