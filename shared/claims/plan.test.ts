@@ -486,6 +486,16 @@ test('"how much power the falling water carries, and got 12 W": "power the" ther
   expect(f.find((x) => x.kind === 'power')?.role).not.toBe('out');
 });
 
+test("a steam turbine's lube-oil cooler is a heat exchanger, not a machine that moves heat (invented test data)", () => {
+  const text =
+    'Cycle. Live steam at the stop valve 480 °C; condenser saturation 40 °C. Gross cycle efficiency is 31 %.\nGenerator rated 6.2 MW at the terminals.\nLube oil. Cooler duty is 95 kW.';
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.map((o) => o.name)).not.toContain('cop_cooling_ratio');
+  // η_C = 1 − 313.15/753.15 = 0.5842; 0.31 / 0.5842 = 0.5306.
+  expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.31 / (1 - 313.15 / 753.15), 6);
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

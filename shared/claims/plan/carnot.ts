@@ -82,7 +82,9 @@ export function planCarnot(b: Basis): HeatReading {
   // A stated efficiency, or one stated as a share of the Carnot efficiency of the stated temperatures.
   const efficiency = withSides(ofKind(figures, 'efficiency').filter((f) => (!f.derived || / of the Carnot efficiency /.test(f.derived)) && !combinedHeatAndPower(f, text)), b);
   // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
-  const cooling = s.coolingWords && (s.cooling || COMPRESSOR_RE.test(text) || ofKind(figures, 'cop').length > 0 || temps.length >= 2);
+  // (In a text about a heat engine, a cooler named beside two temperatures — "lube oil. Cooler duty 95 kW"
+  // at a steam turbine — is a heat exchanger, not a machine that moves heat, unless its cooling is said.)
+  const cooling = s.coolingWords && (s.cooling || ofKind(figures, 'cop').length > 0 || (!s.heatEngine && (COMPRESSOR_RE.test(text) || temps.length >= 2)));
   // Heat delivered by a machine that names an outdoor, ground or brine source: a heat pump.
   // (Not where what goes in is itself heat: "charged with 41,000 BTU of heat … gave back 450 W of heat" is
   // a store, whose heat out cannot pass its heat in.)
