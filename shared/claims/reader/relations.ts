@@ -72,6 +72,23 @@ const POWER_MAKER_RE = /(?<!\p{L})(?:generators?|alternators?|dynamos?|gensets?|
 const CRAFT_WORDS_RE = /(?<!\p{L})(?:satellites?|spacecraft|probes?|craft|vehicles?|cars?|rockets?|drones?|aircraft|planes?|ships?|boats?|bikes?|trucks?|landers?|rovers?|stages?)(?!\p{L})/iu;
 
 /** Relations between the figures read, in this order (see the file's comment). */
+/**
+ * An efficiency worked as a quotient of two powers or energies ("efficiency … It is: 24.1 V × 9.80 A over
+ * 48.0 V × 5.20 A", "η = 36 W / 150 W"): the numerator is what comes out, the denominator what goes in,
+ * whatever the words around each say.
+ */
+function efficiencyQuotient(text: string, drafts: Draft[]): void {
+  const flows = drafts.filter((d) => d.kind === 'power' || d.kind === 'energy');
+  for (let i = 0; i + 1 < flows.length; i++) {
+    const [a, b] = [flows[i], flows[i + 1]];
+    if (a.kind !== b.kind || b.start < a.end) continue;
+    if (!/^[^\S\n]*(?:over|divided[^\S\n]+by|\/|÷)[^\S\n]*$/iu.test(text.slice(a.end, b.start))) continue;
+    if (!/(?<!\p{L})(?:efficienc(?:y|ies)|η|eta)(?!\p{L})/iu.test(text.slice(Math.max(0, a.start - 150), a.start))) continue;
+    a.role = 'out';
+    b.role = 'in';
+  }
+}
+
 export function relateFigures(text: string, drafts: Draft[]): void {
   // "P_out/P_in = 3.2 kW / 0.8 kW": the roles in the order the labels give them.
   for (const m of text.matchAll(RATIO_LABELS_RE)) {
@@ -215,6 +232,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   }
   ratingPoint(text, drafts);
   rolesByContext(text, drafts);
+  efficiencyQuotient(text, drafts);
 
   // "every kilowatt fed to it gives four hundred millinewtons": a thrust per power.
   for (const d of drafts) {

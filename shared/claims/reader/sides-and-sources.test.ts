@@ -427,3 +427,14 @@ test('the other side worked out later from the side said with the difference is 
   expect(run?.finding).toBe('breaks');
   expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.12 / (20 / 333.15), 6);
 });
+
+test('an efficiency worked as a quotient: the numerator is the output, the denominator the input (invented test data)', () => {
+  const text = 'QA asked why efficiency is not shown as output power over input power on the label. It is: 24.1 V × 9.80 A over 48.0 V × 5.20 A.';
+  const powers = read(text).filter((f) => f.kind === 'power');
+  expect(powers.map((f) => [f.role, f.si])).toEqual([
+    ['out', expect.closeTo(24.1 * 9.8, 9)],
+    ['in', expect.closeTo(48 * 5.2, 9)],
+  ]);
+  // 236.18 / 249.6 = 0.9462 (first law: out over in).
+  expect(verdicts(text).checks.find((c) => c.check === 'first-law')!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo((24.1 * 9.8) / (48 * 5.2), 9);
+});
