@@ -496,6 +496,20 @@ test("a steam turbine's lube-oil cooler is a heat exchanger, not a machine that 
   expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.31 / (1 - 313.15 / 753.15), 6);
 });
 
+test('a thrust per power near the bound and said as the limit is passed over for the claimed one; alone it is a photon thruster\'s claim (invented test data)', () => {
+  const photon = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
+  const review =
+    'The presenter said the sealed box gives a net force with no propellant and nothing leaving the box. ' +
+    'The most any device can get from electrical power without expelling mass is about 3.3 µN per kW. The claimed 1.2 N per kW is far beyond that.';
+  const run = photon(review);
+  expect(run?.finding).toBe('breaks');
+  // 1.2 N/kW = 1.2e-3 N/W; × c = 359 751 (F ≤ P/c; c exact, BIPM SI Brochure).
+  expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(1.2e-3 * C, 0);
+  const alone = 'For a laser thruster the ideal is 3.3 µN per kW, and our collimated diode array, which emits nothing but light, reaches that figure.';
+  // 3.3e-9 × c = 0.9893.
+  expect(photon(alone)!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(3.3e-9 * C, 6);
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([
