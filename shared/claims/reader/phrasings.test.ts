@@ -692,3 +692,10 @@ test("a boiler's radiators name no heat pump: its percentage is an efficiency (i
   // A heat pump named as such keeps its COP beside radiators.
   expect(extractFigures("The air-to-water heat pump for our radiators is '350 % efficient'.").find((x) => x.kind === 'cop')).toMatchObject({ role: 'heating', si: 3.5 });
 });
+
+test('a heat pump denied or asked about names none; "a small heat pump" names one (invented test data)', () => {
+  const heater = "The heater was advertised as 160 % efficient. Q. Is it a heat pump, then? A. No: there is no outside part, it is a sealed box with a fan.";
+  expect(extractFigures(heater).find((f) => f.text.startsWith('160'))).toMatchObject({ kind: 'efficiency', si: 1.6 });
+  expect(runClaimChecks(extractFigures(heater), { text: heater }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  expect(extractFigures("It's a small heat pump, '350 % efficient' at 7 °C.").find((f) => f.text.startsWith('350'))).toMatchObject({ kind: 'cop', si: 3.5 });
+});
