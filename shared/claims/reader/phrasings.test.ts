@@ -694,7 +694,7 @@ test("a boiler's radiators name no heat pump: its percentage is an efficiency (i
 });
 
 test('a heat pump denied or asked about names none; "a small heat pump" names one (invented test data)', () => {
-  const heater = "The heater was advertised as 160 % efficient. Q. Is it a heat pump, then? A. No: there is no outside part, it is a sealed box with a fan.";
+  const heater = "The heater was advertised as 160 % efficient: it takes 1 kW from the socket and gives out 1.6 kW of heat. Q. Is it a heat pump, then? A. No: there is no outside part, it is a sealed box with a fan.";
   expect(extractFigures(heater).find((f) => f.text.startsWith('160'))).toMatchObject({ kind: 'efficiency', si: 1.6 });
   expect(runClaimChecks(extractFigures(heater), { text: heater }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
   expect(extractFigures("It's a small heat pump, '350 % efficient' at 7 °C.").find((f) => f.text.startsWith('350'))).toMatchObject({ kind: 'cop', si: 3.5 });
