@@ -510,6 +510,28 @@ test('a thrust per power near the bound and said as the limit is passed over for
   expect(photon(alone)!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(3.3e-9 * C, 6);
 });
 
+describe('a nil input: said of the device, not asked, not harvested (issue 11, invented test data)', () => {
+  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  it('"needs no supply: no fuel, no sun, no wind" denies a harvest; the run with nothing going in breaks the first law', () => {
+    const run = firstLaw('It needs no supply: no fuel, no sun, no wind, no grid connection. It powered a house load of 1.5 kW continuously for two weeks.');
+    expect(run?.finding).toBe('breaks');
+    // balance = 0 − 1.5 kW × 14 d × 86 400 s/d = −1.8144 GJ.
+    expect(run!.outputs.find((o) => o.name === 'balance')!.si).toBeCloseTo(-1500 * 14 * 86400, -3);
+  });
+  it('a buyer\'s answer about a lamp is no harvest of light for a generator said to need no supply', () => {
+    const text = "FOR SALE: magnetic generator, self-running, needs no supply once started. Ran our 300 W freezer for 24 hours straight.\n\nQ: Was the freezer running? A: The light was on whenever we looked.";
+    expect(firstLaw(text)?.finding).toBe('breaks');
+  });
+  it('"So it\'s a perpetual motion machine?" asked by a visitor claims no nil input', () => {
+    const text = "The flywheel held 25 kWh and could deliver 200 kW for a six-minute burst.\n\nVisitor's question: 'So it's a perpetual motion machine?' Curator: not quite, it only stores what the trams recovered.";
+    expect(firstLaw(text)?.finding).not.toBe('breaks');
+  });
+  it('an engine that draws heat from the surrounding air takes heat in: "no fuel" is no nil input', () => {
+    const text = 'A closed-cycle engine draws heat from the surrounding air and converts 35 % of it into shaft work, with no fuel and no sunlight. A unit delivers 3 kW.';
+    expect(firstLaw(text)?.finding).not.toBe('breaks');
+  });
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

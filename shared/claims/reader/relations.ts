@@ -10,7 +10,7 @@ import { HARVEST_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import { FIGURE_SI_UNIT, type FigureRole } from '../types';
-import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphOfAnotherMachine, sentenceAround, windowStart } from './context';
+import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, paragraphOfAnotherMachine, sentenceAround, windowStart } from './context';
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor } from './roles';
@@ -24,6 +24,8 @@ const INPUT_NOT_GIVEN_RE =
 const NO_INPUT_FIGURE_RE = /(?<!\p{L})no[^\S\n]+(?:input|supply)[^\S\n]+(?:power[^\S\n]+|energy[^\S\n]+)?(?:figures?|numbers?|values?|data|measurements?|readings?)(?!\p{L})/iu;
 const SELF_RUNNING_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'giu');
 const HARVEST_RE = new RegExp(`(?<!\\p{L})(?:${alt(HARVEST_WORDS)})(?!\\p{L})`, 'iu');
+/** A harvest said to be absent: "no sun, no wind", "without sunlight". */
+const NEGATED_HARVEST_RE = new RegExp(`(?<!\\p{L})(?:no|without|nor|not)[^\\S\\n]+(?:any[^\\S\\n]+)?(?:${alt(HARVEST_WORDS)})(?!\\p{L})`, 'giu');
 
 /** Devices whose "COP" is an output-over-input ratio, not a heat pump's. */
 const ELECTRICAL_GAIN_RE = /(?<!\p{L})(?:circuits?|coils?|generators?|alternators?|motors?|batter(?:y|ies)|electrical energy|electricity out|electrical output|magnets?|over-?unity|free energy|zero-?point|ZPE|self-charging|self-running|transformers?|capacitors?|resonators?|electrolys\w*|HHO|oxyhydrogen|palladium|deuterium|deuteride|LENR|cold fusion|low-energy nuclear|nickel[–-]hydrogen|excess heat)(?!\p{L})/iu;
@@ -365,8 +367,10 @@ export function relateFigures(text: string, drafts: Draft[]): void {
 
   // "Self-running", "needs no supply": the input is 0 (not where the device harvests a flow from outside).
   if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in')) {
+    // (Not a question: "So it's a perpetual motion machine?" asks; it claims nothing.)
     SELF_RUNNING_RE.lastIndex = 0;
-    const m = SELF_RUNNING_RE.exec(text);
+    let m = SELF_RUNNING_RE.exec(text);
+    while (m && /\?/.test(text.slice(m.index, m.index + 200).split(/(?<=[.!?])\s|\n/u)[0])) m = SELF_RUNNING_RE.exec(text);
     const hasThrust = drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power');
     const out = drafts.find((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust)));
     const inputUnknown =
@@ -376,7 +380,10 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       NO_INPUT_FIGURE_RE.test(text);
     // (A machine between a hot and a cold side takes heat in from the hot one: "without fuel" is not "without input".)
     const thermal = drafts.some((d) => d.kind === 'temperature' && d.role === 'hot') && drafts.some((d) => d.kind === 'temperature' && d.role === 'cold');
-    if (m && out && !inputUnknown && !thermal && !HARVEST_RE.test(text.replace(/self-?powered/giu, ''))) {
+    // (The harvest is looked for in the paragraph of the claim, with harvests said to be absent — "no
+    // sun, no wind" — left out: "The light was on whenever we looked" in a buyer's answer is no harvest.)
+    const harvestText = m ? paragraphAround(text, m.index, m.index + m[0].length).replace(/self-?powered/giu, '').replace(NEGATED_HARVEST_RE, ' ') : '';
+    if (m && out && !inputUnknown && !thermal && !HARVEST_RE.test(harvestText)) {
       const start = m.index;
       const end = m.index + m[0].length;
       const draft: Draft = { start, end, kind: 'power', quantity: '0 W', role: 'in', derived: `no input: "${m[0]}"` };

@@ -115,6 +115,8 @@ export const SELF_RUNNING_WORDS = [
 ];
 /** Where "self-powered" is lawful: the device harvests an outside flow of energy. */
 export const HARVEST_WORDS = [
+  // An engine on the heat of its surroundings takes heat in: "draws heat from the surrounding air".
+  '(?:draws?|drawing|takes?|taking|extracts?|extracting|absorbs?|absorbing|pulls?|pulling) (?:its |the )?(?:low-grade |ambient |waste )?heat from', 'ambient heat', 'heat of the (?:air|sea|surroundings|environment)',
   'harvest\\w*', 'thermoelectric', 'Seebeck', 'TEGs?', 'solar', 'photovoltaic', 'sunlight', 'light', 'vibrations?', 'body heat', 'thermal gradient', 'temperature difference', 'wind', 'tides?',
   'waves?', 'radio waves', 'RF energy', 'ambient (?:light|RF|vibration)', 'piezo\\w*', 'triboelectric',
   'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell',
