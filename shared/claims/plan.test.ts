@@ -532,6 +532,25 @@ describe('a nil input: said of the device, not asked, not harvested (issue 11, i
   });
 });
 
+describe('propellant-free drives described the way letters and posters describe them (issue 11, invented test data)', () => {
+  const photon = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
+  it('light bouncing back and forth inside a sealed box is no light sent out', () => {
+    const run = photon('A sealed, mirrored box with LEDs inside: the light bounces back and forth many times. Measured force 2.4 × 10⁻³ N with 15 W to the LEDs. No light leaves the box, so there is no exhaust.');
+    expect(run?.finding).toBe('breaks');
+    // 2.4e-3 / (15 / c) = 47 966.8 (F ≤ P/c).
+    expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(2.4e-3 / (15 / C), 0);
+  });
+  it('a stack between a brass reaction mass and a cap pushes on a mass inside the device', () => {
+    expect(photon('A stack of piezo discs sandwiched between a brass reaction mass and an aluminium cap produces 0.8 mN at 90 W of drive power. There is no propellant.')?.finding).toBe('breaks');
+  });
+  it('a lifter put into a vacuum bell jar pumped down hard has no air to push', () => {
+    const text = 'We put a sealed lifter into a borrowed vacuum bell jar pumped down hard and measured 45 mN per kW, with nothing coming out of it. In air, lifters work by ion wind.';
+    expect(photon(text)?.finding).toBe('breaks');
+    // In a jar where the lift vanished, nothing is claimed in vacuum.
+    expect(photon('We put the lifter into a vacuum bell jar pumped down hard: the lift vanished. In air it gives 45 mN per kW by ion wind, with nothing coming out of it.')).toBeUndefined();
+  });
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([
