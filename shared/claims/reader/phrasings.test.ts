@@ -699,3 +699,11 @@ test('a heat pump denied or asked about names none; "a small heat pump" names on
   expect(runClaimChecks(extractFigures(heater), { text: heater }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
   expect(extractFigures("It's a small heat pump, '350 % efficient' at 7 °C.").find((f) => f.text.startsWith('350'))).toMatchObject({ kind: 'cop', si: 3.5 });
 });
+
+test('"a side twenty degrees cooler can …" is a difference; "the classroom was at 22 °C" is the surroundings (invented test data)', () => {
+  expect(extractFigures('No engine working between the bath temperature and a side twenty degrees cooler can turn more than a small fraction of the heat into work.')).toMatchObject([
+    { kind: 'temperature-difference', si: 20 },
+  ]);
+  const f = extractFigures('The module produced 0.45 W, converting 30 % of the heat flowing through it. The classroom was at 22 °C during the tests.');
+  expect(f.find((x) => x.kind === 'temperature')?.role).toBe('aside');
+});

@@ -70,7 +70,7 @@ export function isDifference(text: string, start: number, end: number, floor: nu
     // part (a noun), not a comparison; without "than" a comparative there names no difference.
     const pairedSide = /between[^\S\n]+[^,;.\n]{0,40}?\p{N}[^,;.\n]{0,40}?[^\S\n]and[^\S\n]+(?:(?:the|a|an|its)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 90), start));
     if (pairedSide && !/^\s*than/.test(rest)) return false;
-    if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|(?:and|with|at|in|for|while|but|so|when)\b|$)/.test(rest)) return true;
+    if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|(?:and|with|at|in|for|while|but|so|when|or|can|could|would|will|may|might|must|should|is|are|was|were|has|have|had|does|do|did)\b|$)/.test(rest)) return true;
     // "5 °C below zero", "above freezing": a temperature, not a difference.
     if (/^[^\S\n]*(?:zero|freezing|nought|the freezing point)(?!\p{L})/iu.test(rest)) return false;
     // "21 °C below the kitchen", "38 K above it": measured from something named.
@@ -122,9 +122,9 @@ const HEAT_FLOW_RE =
   /(?<!\p{L})(?:(?:draws?|drawing|drew|takes?|taking|took|extracts?|extracting|pulls?|pulling|absorbs?|collects?|harvests?|pumps?|moves?|rejects?|rejecting|dumps?|sheds?|gives? off|delivers?|supplies|releases?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth)|heat[^\S\n]+(?:(?:is|was|are|were|being)[^\S\n]+)?(?:(?:drawn|taken|extracted|pumped|moved|delivered|rejected|released|dumped|carried)[^\S\n]+)?(?:from|to|into|out of)|(?:hot|cold|warm|cool) (?:side|end|face|plate|junction|reservoir)|source|sink|evaporat\w*|condens\w*|Carnot)(?!\p{L})/iu;
 /** Just before a temperature: the place or the test it was of. */
 const PLACE_CONDITION_BEFORE_RE =
-  /(?<!\p{L})(?:(?:room|hall|lab|laboratory|workshop|building|chamber|gallery|clubroom|kiosk|garage|shed|office|site|field|venue|warehouse|cellar|basement)(?:[^\S\n]+(?:temperature|air))?(?:[^\S\n]+(?:was|is|were|stays?|stayed|must stay|remained|felt))?(?:[^\S\n]+(?:kept|held|heated|cooled|maintained|conditioned|set|air-conditioned))?(?:[^\S\n]+(?:at|to|between|of|:))?|(?:in|inside)[^\S\n]+(?:a|an|the)[^\S\n]+(?:closed[^\S\n]+|cold[^\S\n]+|warm[^\S\n]+|heated[^\S\n]+)?(?:room|hall|lab|workshop|building|chamber|garage|shed)[^\S\n]+(?:at|of|kept at|held at)|thermostat(?:[^\S\n]+(?:says|read|reads|set to|showed|shows))?|thermometer(?:[^\S\n]+(?:said|read|reads|showed|shows))?|outside(?:,)?[^\S\n]+it[^\S\n]+was|(?:outdoor|outside)[^\S\n]+temperature[^\S\n]+(?:was|fell to|rose to|of|reached)|(?:air[- ]conditioning|heating)[^\S\n]+(?:now[^\S\n]+)?holds|weather[^\S\n]+(?:was|of)|(?:at|on)[^\S\n]+(?:a|an)|in[^\S\n]+(?:a|an))[^\S\n]*(?:(?:about|around|roughly|some|nearly|only|just|a steady|a constant)[^\S\n]+)?$/iu;
+  /(?<!\p{L})(?:(?:room|hall|lab|laboratory|workshop|building|chamber|gallery|clubroom|classroom|kiosk|garage|shed|office|site|field|venue|warehouse|cellar|basement|studio|hangar|barn|attic|loft)(?:[^\S\n]+(?:temperature|air))?(?:[^\S\n]+(?:was|is|were|stays?|stayed|must stay|remained|felt))?(?:[^\S\n]+(?:kept|held|heated|cooled|maintained|conditioned|set|air-conditioned))?(?:[^\S\n]+(?:at|to|between|of|:))?|(?:in|inside)[^\S\n]+(?:a|an|the)[^\S\n]+(?:closed[^\S\n]+|cold[^\S\n]+|warm[^\S\n]+|heated[^\S\n]+)?(?:room|hall|lab|workshop|building|chamber|garage|shed)[^\S\n]+(?:at|of|kept at|held at)|thermostat(?:[^\S\n]+(?:says|read|reads|set to|showed|shows))?|thermometer(?:[^\S\n]+(?:said|read|reads|showed|shows))?|outside(?:,)?[^\S\n]+it[^\S\n]+was|(?:outdoor|outside)[^\S\n]+temperature[^\S\n]+(?:was|fell to|rose to|of|reached)|(?:air[- ]conditioning|heating)[^\S\n]+(?:now[^\S\n]+)?holds|weather[^\S\n]+(?:was|of)|(?:at|on)[^\S\n]+(?:a|an)|in[^\S\n]+(?:a|an))[^\S\n]*(?:(?:about|around|roughly|some|nearly|only|just|a steady|a constant)[^\S\n]+)?$/iu;
 /** Right after a temperature: the place it was of ("a 31 °C workshop", "18 °C room temperature", "that evening"). */
-const PLACE_AFTER_RE = /^[^\S\n]*(?:(?:room|hall|lab|laboratory|workshop|building|gallery|clubroom|garage|shed|office)(?:[^\S\n]+temperature)?(?!\p{L})|(?:that|this|the)[^\S\n]+(?:evening|day|morning|night|afternoon)|overnight)/iu;
+const PLACE_AFTER_RE = /^[^\S\n]*(?:(?:room|hall|lab|laboratory|workshop|building|gallery|clubroom|classroom|garage|shed|office|studio|hangar)(?:[^\S\n]+temperature)?(?!\p{L})|(?:that|this|the)[^\S\n]+(?:evening|day|morning|night|afternoon)|overnight)/iu;
 
 export function relateTemperatures(text: string, drafts: Draft[]): void {
   // A temperature said again ("pipes at 120 °C … 'With 120 °C on the hot face …'", a critic quoting the
@@ -247,7 +247,7 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
   // in other sentences are left to be its sides: its room may be its warm side.)
   {
     const movesHeat =
-      HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text) || /(?<!\p{L})(?:BTU\w*|heating (?:output|capacity|power)|heat output|of heating|of heat)(?!\p{L})/iu.test(text) || drafts.some((d) => d.kind === 'cop');
+      HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text) || /(?<!\p{L})(?:BTU\w*|heating (?:output|capacity|power)|heat output)(?!\p{L})|(?<![\p{L}])(?:[kKMG]?W|kWh|[kM]?J|watts?|kilowatts?)[^\S\n]+of[^\S\n]+heat(?:ing)?(?!\p{L})/u.test(text) || drafts.some((d) => d.kind === 'cop');
     // (A text of temperatures alone keeps its sides: "The room is at 21 °C.")
     const otherWorking = drafts.some((d) => d.kind !== 'temperature' && d.kind !== 'temperature-difference');
     for (const t of otherWorking ? thermal : []) {
