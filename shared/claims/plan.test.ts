@@ -551,6 +551,28 @@ describe('propellant-free drives described the way letters and posters describe 
   });
 });
 
+describe('labels of a nil input that claim none (issue 11, invented test data)', () => {
+  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  it('"This is not a perpetual motion" denies it', () => {
+    expect(firstLaw('The train gives back up to 30 % of its energy when braking; each has a traction power of 1 200 kW. This is not a perpetual motion: it only returns part of what it used.')?.finding).not.toBe('breaks');
+  });
+  it('"free energy" as a newspaper\'s word for a flywheel bank that stores what it gives is no nil input', () => {
+    const text = 'The flywheel bank delivered 100 kW for 15 minutes. The paper wants to write "spinning wheel powers town with free energy". The bank stores 30 kWh when fully spun up.';
+    expect(firstLaw(text)?.finding).not.toBe('breaks');
+  });
+  it('"free energy" with no store named is still a claim of nothing going in', () => {
+    expect(firstLaw('The free energy generator powered a 300 W load for 24 hours.')?.finding).toBe('breaks');
+  });
+});
+
+test('"the speed of light, which is just under 300 000 km/s" is the reference, not a claim (invented test data)', () => {
+  const text = 'Electrons race around the ring at 299 000 km/s – almost exactly the speed of light, which is just under 300 000 km/s.';
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'light-speed');
+  expect(run?.finding).toBe('consistent');
+  // 2.99e8 / c = 0.99736.
+  expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(2.99e8 / C, 6);
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

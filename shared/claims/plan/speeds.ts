@@ -20,7 +20,7 @@ const NO_SIGNAL_SPEED_RE = /(?<!\p{L})(?:phase (?:velocity|speed)|phase front|sp
 
 /** Just before the speed of light said as such: "light travels at about", "the speed of light is", "c ≈". */
 const LIGHT_ITSELF_BEFORE_RE =
-  /(?<!\p{L})(?:light(?:[^\S\n]+(?:in[^\S\n]+(?:a[^\S\n]+)?vacuum|itself))?[^\S\n]+(?:travels|moves|goes|propagates|runs)|(?:speed|velocity)[^\S\n]+of[^\S\n]+light(?:[^\S\n]+in[^\S\n]+(?:a[^\S\n]+)?vacuum)?(?:[^\S\n]+(?:is|of|=|,|:))?|(?<!\p{L})c[^\S\n]*(?:=|≈|~|is))[^\S\n]*(?:(?:at|of)[^\S\n]+)?(?:(?:about|roughly|some|nearly|almost|approximately|around|just under|close to)[^\S\n]+)?$/iu;
+  /(?<!\p{L})(?:light(?:[^\S\n]+(?:in[^\S\n]+(?:a[^\S\n]+)?vacuum|itself))?[^\S\n]+(?:travels|moves|goes|propagates|runs)|(?:speed|velocity)[^\S\n]+of[^\S\n]+light(?:[^\S\n]+in[^\S\n]+(?:a[^\S\n]+)?vacuum)?(?:,?[^\S\n]*(?:which|that)[^\S\n]+is|[^\S\n]+(?:is|of|=|,|:))?|(?<!\p{L})c[^\S\n]*(?:=|≈|~|is))[^\S\n]*(?:(?:at|of)[^\S\n]+)?(?:(?:about|roughly|some|nearly|almost|approximately|around|just under|just over|a little under|close to)[^\S\n]+)?$/iu;
 
 export function planSpeeds(b: Basis): void {
   const { plans, notes, text, speeds } = b;

@@ -20,6 +20,8 @@ import { relateTemperatures } from './temperatures';
 /** The text says the input was not given: a claim of no input cannot be read from it. */
 const INPUT_NOT_GIVEN_RE =
   /(?<!\p{L})(?:(?:gives?|gave|states?|stated|reports?|reported|provides?|provided|quotes?|quoted|lists?|listed|offers?|offered)[^\S\n]+no[^\S\n]+(?:figures?|numbers?|values?|data|measurements?|readings?)|(?:does|do|did)[^\S\n]*(?:not|n't)[^\S\n]+(?:say|state|give|report|disclose|quote|list|mention|measure))[^.;!?\n]{0,40}(?:input|takes?(?: in)?|draws?|consumes?|uses?|needs?|supply|feeds? it)(?!\p{L})/iu;
+/** A store of energy the text names: a battery, a flywheel, a pack that "stores" or "holds" energy. */
+const STORE_NAMED_RE = /(?<!\p{L})(?:batter(?:y|ies)|flywheels?|accumulators?|supercapacitors?|capacitor banks?|(?:stores|stored|holds|held)[^\S\n]+(?:about[^\S\n]+|up[^\S\n]+to[^\S\n]+)?[\d.,]+[^\S\n]*(?:k|M|G)?(?:Wh|J))(?!\p{L})/u;
 /** "No input figure was given": the input is not known, not nil. */
 const NO_INPUT_FIGURE_RE = /(?<!\p{L})no[^\S\n]+(?:input|supply)[^\S\n]+(?:power[^\S\n]+|energy[^\S\n]+)?(?:figures?|numbers?|values?|data|measurements?|readings?)(?!\p{L})/iu;
 const SELF_RUNNING_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'giu');
@@ -369,8 +371,15 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in')) {
     // (Not a question: "So it's a perpetual motion machine?" asks; it claims nothing.)
     SELF_RUNNING_RE.lastIndex = 0;
-    let m = SELF_RUNNING_RE.exec(text);
-    while (m && /\?/.test(text.slice(m.index, m.index + 200).split(/(?<=[.!?])\s|\n/u)[0])) m = SELF_RUNNING_RE.exec(text);
+    // (Nor denied: "This is not a perpetual motion", "it is never self-running".)
+    const said = (x: RegExpExecArray) =>
+      !/\?/.test(text.slice(x.index, x.index + 200).split(/(?<=[.!?])\s|\n/u)[0]) &&
+      !/(?<!\p{L})(?:not|never|no|isn't|isn’t|wasn't|wasn’t|nor)[^\S\n]+(?:(?:a|an|the|really|quite|truly)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, x.index - 25), x.index));
+    const matches = [...text.matchAll(SELF_RUNNING_RE)].filter(said);
+    // A label alone ("free energy", "perpetual") beside a store the text names ("the bank stores 30 kWh",
+    // "the battery holds 2.4 kWh"): the store explains the output, and the label is someone's word for it.
+    const labelsOnly = matches.length > 0 && matches.every((x) => /^(?:free energy|perpetual)$/iu.test(x[0]));
+    const m = labelsOnly && STORE_NAMED_RE.test(text) ? null : (matches[0] ?? null);
     const hasThrust = drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power');
     const out = drafts.find((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust)));
     const inputUnknown =
