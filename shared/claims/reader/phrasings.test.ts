@@ -707,3 +707,8 @@ test('"a side twenty degrees cooler can …" is a difference; "the classroom was
   const f = extractFigures('The module produced 0.45 W, converting 30 % of the heat flowing through it. The classroom was at 22 °C during the tests.');
   expect(f.find((x) => x.kind === 'temperature')?.role).toBe('aside');
 });
+
+test('a COP and its value with the test it was measured over between them: "heating COP over the test week: 3.9" (invented test data)', () => {
+  expect(extractFigures('Measured heating COP over the test week: 3.9')).toMatchObject([{ kind: 'cop', role: 'heating', si: 3.9 }]);
+  expect(extractFigures('The COP at the rating point: 4.2')).toMatchObject([{ kind: 'cop', si: 4.2 }]);
+});
