@@ -375,16 +375,24 @@ describe('a long document with many figures', () => {
   });
 });
 
+/** The run of one check on a text's own figures (the describe blocks below). */
+const checkRun = (text: string, check: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === check);
+/** A run's finding and one of its outputs, to `digits` decimals. */
+function expectFinding(run: ReturnType<typeof checkRun>, finding: string, output: string, value: number, digits: number): void {
+  expect(run?.finding).toBe(finding);
+  expect(run!.outputs.find((o) => o.name === output)!.si).toBeCloseTo(value, digits);
+}
+const carnot = (text: string) => checkRun(text, 'carnot');
+const firstLaw = (text: string) => checkRun(text, 'first-law');
+const photon = (text: string) => checkRun(text, 'photon-bound');
+
 describe('a document on several devices: the propellant-free one read in its own paragraph (issue 11)', () => {
-  const photon = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
   it('a bid that says it throws out nothing is held to F ≤ P/c though another bid carries xenon', () => {
     const text =
       'Tender evaluation, lot 2 (invented).\n\nBid A. Two Hall thrusters with a xenon tank; 80 mN per thruster at 1.4 kW.\n\n' +
       "Bid B. A sealed copper cavity giving 'between 2 and 4 mN' from 900 W of microwaves, with no propellant and no plume.\n\nRanking: A first.";
-    const run = photon(text);
-    expect(run?.finding).toBe('breaks');
     // The least thrust (2 mN) over the bound of 900 W: 2e-3 / (900 / c) (F ≤ P/c, c exact: BIPM SI Brochure).
-    expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(2e-3 / (900 / C), 3);
+    expectFinding(photon(text), 'breaks', 'ratio', 2e-3 / (900 / C), 3);
   });
   it('a lawful thruster is not held to the bound because another paragraph speaks of propellant-free drives', () => {
     const text =
@@ -399,15 +407,12 @@ describe('a document on several devices: the propellant-free one read in its own
 });
 
 describe('several COPs in a review: the one said with the sides (issue 11)', () => {
-  const carnot = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
   it("a product's COP said with its ΔT and outlet is checked, not the other products' range in an earlier paragraph", () => {
     const text =
       'Nine datasheets quote heating COPs between 2.6 and 3.4 at their rating points (invented test data).\n\n' +
       'The tenth claims a heating COP of 9 while lifting heat across a ΔT of 45 K to an outlet at 55 °C.';
-    const run = carnot(text);
-    expect(run?.finding).toBe('breaks');
     // Th = 328.15 K, Tc = 283.15 K; COP_max = 328.15/45 = 7.292 (reversed Carnot); 9 / 7.292 = 1.234.
-    expect(run!.outputs.find((o) => o.name === 'cop_heating_ratio')!.si).toBeCloseTo(9 / (328.15 / 45), 6);
+    expectFinding(carnot(text), 'breaks', 'cop_heating_ratio', 9 / (328.15 / 45), 6);
   });
   it("in one paragraph, the claim's COP said first stands before a test's reading said with the temperatures", () => {
     const text = 'The box says "up to 350 % efficient" for the heat pump. Our lab ran it at 7 °C outside with a flow at 35 °C and measured a COP of 3.3.';
@@ -418,9 +423,7 @@ describe('several COPs in a review: the one said with the sides (issue 11)', () 
 
 test('a ratio said outright is the claim where the energy in and the power out have no time to join them (invented test data)', () => {
   const text = "The home battery 'gives back 0.91 units for every unit it takes'. The unit stores 13.5 kWh and can deliver up to 5 kW at once.";
-  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
-  expect(run?.finding).toBe('consistent');
-  expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(0.91, 9);
+  expectFinding(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law'), 'consistent', 'over_unity', 0.91, 9);
 });
 
 describe('what a text says of its own figures (issue 11, invented test data)', () => {
@@ -451,14 +454,11 @@ test("a paragraph that gives both sides is the ledger; a rating alone in another
   const text =
     "Complaint: the motor is sold as '500 W' but feels weak on hills.\n\n" +
     'Workshop test: at full assist the controller drew 8.5 A at 48 V from the battery, and the roller measured 340 W at the wheel.';
-  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
-  expect(run?.finding).toBe('consistent');
   // P_in = 8.5 A × 48 V = 408 W; 340 / 408 = 0.8333.
-  expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(340 / 408, 9);
+  expectFinding(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law'), 'consistent', 'over_unity', 340 / 408, 9);
 });
 
 describe('a craft whose propulsor is denied (issue 11, invented test data)', () => {
-  const photon = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
   it('"pushes a small boat with 2.5 pounds of thrust from a 3 hp motor, with no propeller and no water jet", nothing leaving the case, is held to F ≤ P/c', () => {
     const run = photon("The sheet says the unit 'pushes a small boat with 2.5 pounds of thrust from a 3 hp electric motor, with no propeller and no water jet'. The case is sealed; nothing leaves it.");
     expect(run?.finding).toBe('breaks');
@@ -472,10 +472,8 @@ describe('a craft whose propulsor is denied (issue 11, invented test data)', () 
 
 test('the speed of light said as a reference ("light travels at about 300,000 km/s") is not judged against c (invented test data)', () => {
   const text = 'The tool shows an effective speed of 156,000 km/s for our fibre link, against about 200,000 km/s for light in glass. In a vacuum light travels at about 300,000 km/s.';
-  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'light-speed');
-  expect(run?.finding).toBe('consistent');
   // The fastest speed judged is the 200,000 km/s of light in glass: 2e8 / c = 0.6671 (c exact, BIPM SI Brochure).
-  expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(2e8 / C, 6);
+  expectFinding(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'light-speed'), 'consistent', 'ratio', 2e8 / C, 6);
   // A claim of a speed near c is still judged: "the probe reached 300,500 km/s".
   const claim = 'The team says its probe reached 300,500 km/s.';
   expect(runClaimChecks(extractFigures(claim), { text: claim }).checks.find((c) => c.check === 'light-speed')?.finding).toBe('breaks');
@@ -497,26 +495,20 @@ test("a steam turbine's lube-oil cooler is a heat exchanger, not a machine that 
 });
 
 test('a thrust per power near the bound and said as the limit is passed over for the claimed one; alone it is a photon thruster\'s claim (invented test data)', () => {
-  const photon = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
   const review =
     'The presenter said the sealed box gives a net force with no propellant and nothing leaving the box. ' +
     'The most any device can get from electrical power without expelling mass is about 3.3 µN per kW. The claimed 1.2 N per kW is far beyond that.';
-  const run = photon(review);
-  expect(run?.finding).toBe('breaks');
   // 1.2 N/kW = 1.2e-3 N/W; × c = 359 751 (F ≤ P/c; c exact, BIPM SI Brochure).
-  expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(1.2e-3 * C, 0);
+  expectFinding(photon(review), 'breaks', 'ratio', 1.2e-3 * C, 0);
   const alone = 'For a laser thruster the ideal is 3.3 µN per kW, and our collimated diode array, which emits nothing but light, reaches that figure.';
   // 3.3e-9 × c = 0.9893.
   expect(photon(alone)!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(3.3e-9 * C, 6);
 });
 
 describe('a nil input: said of the device, not asked, not harvested (issue 11, invented test data)', () => {
-  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
   it('"needs no supply: no fuel, no sun, no wind" denies a harvest; the run with nothing going in breaks the first law', () => {
-    const run = firstLaw('It needs no supply: no fuel, no sun, no wind, no grid connection. It powered a house load of 1.5 kW continuously for two weeks.');
-    expect(run?.finding).toBe('breaks');
     // balance = 0 − 1.5 kW × 14 d × 86 400 s/d = −1.8144 GJ.
-    expect(run!.outputs.find((o) => o.name === 'balance')!.si).toBeCloseTo(-1500 * 14 * 86400, -3);
+    expectFinding(firstLaw('It needs no supply: no fuel, no sun, no wind, no grid connection. It powered a house load of 1.5 kW continuously for two weeks.'), 'breaks', 'balance', -1500 * 14 * 86400, -3);
   });
   it('a buyer\'s answer about a lamp is no harvest of light for a generator said to need no supply', () => {
     const text = "FOR SALE: magnetic generator, self-running, needs no supply once started. Ran our 300 W freezer for 24 hours straight.\n\nQ: Was the freezer running? A: The light was on whenever we looked.";
@@ -533,12 +525,9 @@ describe('a nil input: said of the device, not asked, not harvested (issue 11, i
 });
 
 describe('propellant-free drives described the way letters and posters describe them (issue 11, invented test data)', () => {
-  const photon = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
   it('light bouncing back and forth inside a sealed box is no light sent out', () => {
-    const run = photon('A sealed, mirrored box with LEDs inside: the light bounces back and forth many times. Measured force 2.4 × 10⁻³ N with 15 W to the LEDs. No light leaves the box, so there is no exhaust.');
-    expect(run?.finding).toBe('breaks');
     // 2.4e-3 / (15 / c) = 47 966.8 (F ≤ P/c).
-    expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(2.4e-3 / (15 / C), 0);
+    expectFinding(photon('A sealed, mirrored box with LEDs inside: the light bounces back and forth many times. Measured force 2.4 × 10⁻³ N with 15 W to the LEDs. No light leaves the box, so there is no exhaust.'), 'breaks', 'ratio', 2.4e-3 / (15 / C), 0);
   });
   it('a stack between a brass reaction mass and a cap pushes on a mass inside the device', () => {
     expect(photon('A stack of piezo discs sandwiched between a brass reaction mass and an aluminium cap produces 0.8 mN at 90 W of drive power. There is no propellant.')?.finding).toBe('breaks');
@@ -552,7 +541,6 @@ describe('propellant-free drives described the way letters and posters describe 
 });
 
 describe('labels of a nil input that claim none (issue 11, invented test data)', () => {
-  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
   it('"This is not a perpetual motion" denies it', () => {
     expect(firstLaw('The train gives back up to 30 % of its energy when braking; each has a traction power of 1 200 kW. This is not a perpetual motion: it only returns part of what it used.')?.finding).not.toBe('breaks');
   });
@@ -567,10 +555,8 @@ describe('labels of a nil input that claim none (issue 11, invented test data)',
 
 test('"the speed of light, which is just under 300 000 km/s" is the reference, not a claim (invented test data)', () => {
   const text = 'Electrons race around the ring at 299 000 km/s – almost exactly the speed of light, which is just under 300 000 km/s.';
-  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'light-speed');
-  expect(run?.finding).toBe('consistent');
   // 2.99e8 / c = 0.99736.
-  expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(2.99e8 / C, 6);
+  expectFinding(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'light-speed'), 'consistent', 'ratio', 2.99e8 / C, 6);
 });
 
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
