@@ -559,6 +559,23 @@ test('"the speed of light, which is just under 300 000 km/s" is the reference, n
   expectFinding(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'light-speed'), 'consistent', 'ratio', 2.99e8 / C, 6);
 });
 
+describe('more ways a text says nothing is thrown out, and an engine\'s conversion efficiency (issue 11, invented test data)', () => {
+  it('"could hold its orbit without carrying any propellant" says the device throws out nothing', () => {
+    const text = 'With 60 W into the sealed cavity the pendulum shows a force of 0,9 mN. A satellite using it could hold its orbit without carrying any propellant.';
+    // 0.9e-3 / (60 / c) = 4 496.9 (F ≤ P/c).
+    expectFinding(photon(text), 'breaks', 'ratio', 0.9e-3 / (60 / C), 0);
+  });
+  it('"no propeller … nothing thrown out of the box" lets the boat of a comparison go', () => {
+    const text = 'The box moves forward by itself, like a person in a boat pulling on the rope. With the motor taking 900 W, the box pushed with 18 N. There is no propeller and nothing thrown out of the box.';
+    expect(photon(text)?.finding).toBe('breaks');
+  });
+  it('"a conversion efficiency of 45 % of the heat" is an engine\'s efficiency though a radiator is named', () => {
+    const text = 'The working fluid is warmed by pipes in the pond at 25 °C and cooled by a radiator in air 20 °C colder. Our engineers calculate a conversion efficiency of 45 % of the heat taken from the pond.';
+    // η_C = 20 / 298.15 = 0.06708; 0.45 / 0.06708 = 6.708.
+    expectFinding(carnot(text), 'breaks', 'eta_ratio', 0.45 / (20 / 298.15), 6);
+  });
+});
+
 describe('false-alarm traps: lawful devices stay consistent (issue 11)', () => {
   const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.filter((c) => c.finding === 'breaks');
   it.each([

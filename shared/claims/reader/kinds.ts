@@ -172,7 +172,11 @@ export function readPercent(text: string, start: number, end: number, floor: num
   // (Not where the percentage's own sentence names an engine and no heat pump: "the marine engine is
   // '52 % efficient'", in a text that mentions a heat pump's percentage by contrast.)
   const own = sentenceAround(text, start, end);
-  const engineHere = ENGINE_NAMED_RE.test(own) && !HEAT_PUMP_RE.test(own);
+  // (Nor a conversion efficiency at most 100 %: "a conversion efficiency of 45 % of the heat taken from the
+  // pond" is an engine's, whatever radiator the text names.)
+  const engineHere =
+    (ENGINE_NAMED_RE.test(own) && !HEAT_PUMP_RE.test(own)) ||
+    (value <= 100 && /(?<!\p{L})(?:conversion|thermal|electrical|cycle|net|gross|brake) efficiency[^.;!?\n]{0,25}$/iu.test(text.slice(Math.max(0, start - 60), start)));
   // (A boiler's text names radiators and flow temperatures too: those words alone name no heat pump there.)
   const burnerOnly = BURNER_RE.test(text) && !NAMED_HEAT_PUMP_RE.test(sentence);
   if (!engineHere && !burnerOnly && HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
