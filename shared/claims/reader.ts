@@ -80,6 +80,8 @@ const LEADER_RE = /[^\S\n]*(?:\.{3,}|…+|·{3,}|_{3,})[^\S\n]*(?=[-−+~≈]?\d
 
 /** A table's header cell naming the unit column ("Unit", "Units", "Unit of measure"). */
 const UNIT_HEADER_RE = /^[^\S\n]*(?:units?|unit of measure|dimension|UoM)[^\S\n]*$/iu;
+/** A header cell that names its column's unit: "Heater head (°C)", "Power [kW]". */
+const HEADER_UNIT_RE = /\p{L}[^|\t\n]*?[(\[]([^()\[\]\d|\t\n]{1,8})[)\]][^\S\n]*$/u;
 /** A cell that is a unit alone ("kW", "°C", "%", "N/kW", "m/s"): short, no digits but exponents. */
 const UNIT_CELL_RE = /^[^\S\n]*[^\d\s|\t][^\d|\t]{0,11}[^\S\n]*$/u;
 
@@ -92,10 +94,13 @@ export function joinUnitColumns(text: string): string {
   const lines = text.split('\n');
   let unitCol = -1;
   let sep: string | null = null;
+  /** Units named in header cells ("Heater head (°C)"), by column, for a pipe table. */
+  let headerUnits: (string | null)[] = [];
   const out = lines.map((line) => {
     const s = line.includes('|') ? '|' : line.includes('\t') ? '\t' : null;
     if (s === null) {
       unitCol = -1;
+      headerUnits = [];
       return line;
     }
     const cells = line.split(s);
@@ -104,6 +109,24 @@ export function joinUnitColumns(text: string): string {
       unitCol = header;
       sep = s;
       return line;
+    }
+    const named = cells.map((c) => HEADER_UNIT_RE.exec(c)?.[1] ?? null);
+    if (s === '|' && named.some((u) => u !== null) && cells.every((c) => !/^[^\S\n]*[-−+]?\d[\d.,]*[^\S\n]*$/u.test(c))) {
+      headerUnits = named;
+      return line;
+    }
+    if (s === '|' && headerUnits.length > 0) {
+      // A bare number under a header that names its unit: the unit written into the cell's own blank
+      // space, when there is room (offsets kept).
+      let at = 0;
+      const filled = cells.map((c, i) => {
+        const unit = headerUnits[i];
+        const m = /^([^\S\n]*[-−+]?\d[\d.,]*)([^\S\n]*)$/u.exec(c);
+        const cell = unit && m && m[2].length >= unit.length + 1 ? `${m[1]} ${unit}${' '.repeat(m[2].length - unit.length - 1)}` : c;
+        at += c.length + 1;
+        return cell;
+      });
+      return filled.join('|');
     }
     if (unitCol < 1 || s !== sep || cells.length <= unitCol) return line;
     const value = cells[unitCol - 1];
@@ -122,7 +145,13 @@ function readPlain(text: string): Figure[] {
   const led = LEADER_RE.test(joined) ? joined.replace((LEADER_RE.lastIndex = 0, LEADER_RE), (m) => `:${' '.repeat(m.length - 1)}`) : joined;
   LEADER_RE.lastIndex = 0;
   if (led === text) return readUnled(text);
-  return readUnled(led).map((f) => (f.start === null || f.end === null ? f : { ...f, text: text.slice(f.start, f.end) }));
+  return readUnled(led).map((f) => {
+    if (f.start === null || f.end === null) return f;
+    // (A unit written into a cell's blank space: the figure's words end where the pasted text's do.)
+    let end = f.end;
+    while (end > f.start + 1 && /\s/u.test(text[end - 1])) end--;
+    return { ...f, end, text: text.slice(f.start, end) };
+  });
 }
 
 function readUnled(text: string): Figure[] {

@@ -120,3 +120,16 @@ test('a table with its units in a column of their own, pipe- or tab-separated, r
     ['power', 1200],
   ]);
 });
+
+test('a padded Markdown table whose headers name the units ("Heater head (°C)") reads its bare numbers with them (invented test data)', () => {
+  const table =
+    '| Run | Heater head (°C) | Cooler jacket (°C) | Notes |\n|-----|------------------|--------------------|-------|\n| 14  | 250              | 20                 | mesh C |';
+  const f = extractFigures(table);
+  // T(K) = t(°C) + 273.15 (SI Brochure, 9th ed., 2.3.1).
+  expect(f.map((x) => [x.kind, x.si])).toEqual([
+    ['temperature', 523.15],
+    ['temperature', 293.15],
+  ]);
+  for (const x of f) expect(table.slice(x.start!, x.end!)).toBe(x.text);
+  expect(f.map((x) => x.text)).toEqual(['250', '20']);
+});
