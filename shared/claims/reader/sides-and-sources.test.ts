@@ -438,3 +438,14 @@ test('an efficiency worked as a quotient: the numerator is the output, the denom
   // 236.18 / 249.6 = 0.9462 (first law: out over in).
   expect(verdicts(text).checks.find((c) => c.check === 'first-law')!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo((24.1 * 9.8) / (48 * 5.2), 9);
 });
+
+test('"Hydrogen feed (lower heating value) | 2.6 kW" is what a fuel cell takes in (invented test data)', () => {
+  const text = '| Hydrogen feed (lower heating value) | 2.6 kW | flow meter |\n| Electrical output | between 0.9 and 1.4 kW | stack temperature |';
+  const powers = read(text).filter((f) => f.kind === 'power');
+  expect(powers.map((f) => [f.role, f.si])).toEqual([
+    ['in', 2600],
+    ['out', 900],
+  ]);
+  // Run at the end of the range least in conflict with the law: 0.9 / 2.6 = 0.3462 (first law).
+  expect(verdicts(text).checks.find((c) => c.check === 'first-law')!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(0.9 / 2.6, 9);
+});

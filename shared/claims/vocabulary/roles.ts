@@ -33,7 +33,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
       'took', 'turned by', 'by a', 'fuel', '(?:energy|heat|calorific) (?:content|value)(?: of (?:the |its )?(?:fuel|gas|diesel|petrol|coal|wood))?(?:[^\\S\\n]+[\\w\x27\u2019-]+){0,5}?[^\\S\\n]+(?:put|puts|estimated|given|stated|reckoned|calculated|taken) (?:it |them )?(?:at|as)', 'containing', 'P_?\\{?in\\}?', 'E_?\\{?in\\}?', 'Pin', 'invest(?:s|ed|ing)?', 'gas input', 'fuel input',
       // "36 W for a heat flow of 150 W", "a thermal input of 2 kW": the heat a converter takes.
-      'for (?:a|an|the) (?:heat flow|heat flux|heat input|thermal input|heat supply) of', '(?:heat|thermal) input(?: of| was| is|:)?',
+      'for (?:a|an|the) (?:heat flow|heat flux|heat input|thermal input|heat supply) of', '(?:fuel|hydrogen|gas|heat|steam|propane|methane|diesel|biogas|natural gas) feed(?: rate)?', '(?:heat|thermal) input(?: of| was| is|:)?',
       // "received solar energy on its aperture totalling 27 kWh": the sunlight a collector or a cell takes.
       '(?:received|receives|receiving|intercepted|intercepts) (?:[\\w-]+ ){0,2}?(?:solar |sun |incident )?(?:energy|radiation|irradiation|sunlight|insolation|light)(?: [\\w-]+){0,4}? (?:totalling|totaling|amounting to|of)',
       // A worked line: "in = 2 kW × 2400 s = 4.8 MJ".
