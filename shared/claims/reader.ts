@@ -81,7 +81,7 @@ const LEADER_RE = /[^\S\n]*(?:\.{3,}|…+|·{3,}|_{3,})[^\S\n]*(?=[-−+~≈]?\d
 /** A table's header cell naming the unit column ("Unit", "Units", "Unit of measure"). */
 const UNIT_HEADER_RE = /^[^\S\n]*(?:units?|unit of measure|dimension|UoM)[^\S\n]*$/iu;
 /** A header cell that names its column's unit: "Heater head (°C)", "Power [kW]". */
-const HEADER_UNIT_RE = /\p{L}[^|\t\n]*?[(\[]([^()\[\]\d|\t\n]{1,8})[)\]][^\S\n]*$/u;
+const HEADER_UNIT_RE = /\p{L}[^|\t\n]*?[([]([^()[\]\d|\t\n]{1,8})[)\]][^\S\n]*$/u;
 /** A cell that is a unit alone ("kW", "°C", "%", "N/kW", "m/s"): short, no digits but exponents. */
 const UNIT_CELL_RE = /^[^\S\n]*[^\d\s|\t][^\d|\t]{0,11}[^\S\n]*$/u;
 
@@ -118,13 +118,10 @@ export function joinUnitColumns(text: string): string {
     if (s === '|' && headerUnits.length > 0) {
       // A bare number under a header that names its unit: the unit written into the cell's own blank
       // space, when there is room (offsets kept).
-      let at = 0;
       const filled = cells.map((c, i) => {
         const unit = headerUnits[i];
         const m = /^([^\S\n]*[-−+]?\d[\d.,]*)([^\S\n]*)$/u.exec(c);
-        const cell = unit && m && m[2].length >= unit.length + 1 ? `${m[1]} ${unit}${' '.repeat(m[2].length - unit.length - 1)}` : c;
-        at += c.length + 1;
-        return cell;
+        return unit && m && m[2].length >= unit.length + 1 ? `${m[1]} ${unit}${' '.repeat(m[2].length - unit.length - 1)}` : c;
       });
       return filled.join('|');
     }
