@@ -365,6 +365,34 @@ describe('figures of one finding said far apart', () => {
   });
 });
 
+describe('a reading the text itself contradicts (issue 11: no false alarm)', () => {
+  it('in and out figures that give more out than in, where the text states its own efficiency of at most 100 %, wait for the reader', () => {
+    // Invented test-sheet: the reader pairs the 24 V nominal rail with the measured current (24 × 10.8 = 259 W)
+    // against 48 V × 5.2 A = 249.6 W, but the sheet says the converter's efficiency is 94.6 %.
+    const text = 'Converter 48 V in / 24 V out. It drew 249.6 W and delivered 259 W into the load. Efficiency 94.6 %.';
+    const { checks, needs } = runClaimChecks(extractFigures(text), { text });
+    expect(checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+    expect(needs.find((n) => n.check === 'first-law')?.missing[0]).toMatch(/^confirmation of which figures are the device's: .*“249\.6 W” and “259 W”.*“94\.6 %”, which is within it$/);
+  });
+  it('the same figures with no efficiency stated, or with one above 100 %, are a conflict', () => {
+    expect(firstLaw('The box drew 249.6 W and delivered 259 W into the load.')?.finding).toBe('breaks');
+    expect(firstLaw('The box drew 249.6 W and delivered 259 W into the load, an efficiency of 104 %.')?.finding).toBe('breaks');
+  });
+  it('an engine whose stated efficiency is within Carnot is not said to break it on another of its efficiencies', () => {
+    // Carnot efficiency between 650 °C and 40 °C: 1 − 313.15/923.15 = 0.661 (textbook formula); the
+    // alternator's 90 % is read as the engine's, but the text states 27 % for the engine.
+    const text = 'Between a 650 °C head and a 40 °C rejector the generator converts 90 % of its shaft work into electricity, and the engine as a whole is about 27 % efficient.';
+    const { checks, needs } = runClaimChecks(extractFigures(text), { text });
+    expect(checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+    expect(needs.some((n) => n.check === 'carnot' && /“27 %”/.test(n.missing[0]))).toBe(true);
+  });
+  it('a critic\'s Carnot bound or a rival\'s figure is no statement of the engine\'s own efficiency', () => {
+    // 1 − 293.15/363.15 = 0.193 (textbook formula): 71 % breaks Carnot; 19 % is that bound, 12 % a rival's.
+    expect(carnot('The engine works between 90 °C and 20 °C and converts 71 % of the heat into electricity. The most any engine can convert there is a little over 19 %.')?.finding).toBe('breaks');
+    expect(carnot('The engine works between 90 °C and 20 °C and converts 71 % of the heat into electricity. Competing units reach 12 %.')?.finding).toBe('breaks');
+  });
+});
+
 describe('a long document with many figures', () => {
   it('is said to need its figures checked before a result is cited; a short claim is not', () => {
     const para = (i: number) => `Run ${i}: the rig drew ${100 + i} W and gave ${50 + i} W; the room was at ${20 + i} °C.`;

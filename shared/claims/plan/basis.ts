@@ -24,6 +24,12 @@ export interface Plan {
   inputs: (end: (f: Figure) => End) => Record<string, string>;
   why: string;
   assumptions: string[];
+  /**
+   * A figure the text itself states of the device that is within the law (an efficiency of 94.6 %) where
+   * this plan's figures would find a conflict: the text contradicts that reading of it, so a conflict
+   * found on them waits for the reader to confirm which figures are the device's.
+   */
+  within?: Figure;
 }
 
 /** The figures of one kind that are the device's (a figure set aside is of something else). */

@@ -77,6 +77,27 @@ function withSides(candidates: Figure[], b: Basis): Figure | undefined {
   return candidates.find(has) ?? first;
 }
 
+/**
+ * Another efficiency the text states (not a bound worked out: "the Carnot limit … is 66 %") that is
+ * within the Carnot efficiency of the sides, beside the one checked: "brake thermal efficiency … about
+ * 27 % … the alternator by itself converts at 90 %". The text's own reading of its engine is within the
+ * law, so a conflict found on the other figure waits for the reader (shared/claims/plan/run.ts).
+ */
+function otherWithin(b: Basis, checked: Figure, hot: Figure, cold: Figure): Figure | undefined {
+  const bound = 1 - cold.si / (hot.upper?.si ?? hot.si);
+  return ofKind(b.figures, 'efficiency').find((f) => {
+    if (f === checked || f.derived || f.start === null || f.end === null || !(f.si > 0) || (f.upper?.si ?? f.si) > bound) return false;
+    // The bound itself, worked out by a critic ("the most any engine can convert is a little over 19 %").
+    if (Math.abs(f.si - bound) <= 0.1 * bound) return false;
+    const before = b.text.slice(sentenceKey(b.text, f.start), f.start);
+    return !BOUND_WORDS_RE.test(b.text.slice(Math.max(0, f.start - 40), f.start)) && !OTHER_MACHINE_BEFORE_RE.test(before) && !combinedHeatAndPower(f, b.text);
+  });
+}
+
+/** Words before a figure that make it another machine's: a rival's, the prior art's, an earlier record. */
+const OTHER_MACHINE_BEFORE_RE =
+  /(?<!\p{L})(?:prior[- ]art|reference|references|cited|previous|earlier|older|competing|competitors?|rivals?|conventional|typical|commercial|ordinary|best anyone|record|literature|state[- ]of[- ]the[- ]art)(?!\p{L})/iu;
+
 export function planCarnot(b: Basis): HeatReading {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, temps } = b;
   // A stated efficiency, or one stated as a share of the Carnot efficiency of the stated temperatures.
@@ -151,6 +172,7 @@ export function planCarnot(b: Basis): HeatReading {
     if (cop && cop.role === null) extra.push(cooling ? 'The COP is read as a cooling COP (heat drawn out over work in).' : 'The COP is read as a heating COP (heat delivered over work in); mark it as cooling if the machine is a refrigerator or chiller.');
     const claimed = [engineEfficiency ? efficiency : undefined, copForCarnot ? cop : undefined];
     plans.push({
+      within: engineEfficiency && !copForCarnot ? otherWithin(b, efficiency!, hot, cold) : undefined,
       check: 'carnot',
       uses: uniq([hot, cold, ...claimed]),
       inputs: (e) => ({

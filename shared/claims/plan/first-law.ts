@@ -90,7 +90,14 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     if (toEnergy(inF, 'low') === null || toEnergy(outF, 'low') === null) {
       needs.push(need('first-law', ['how long the device ran (to compare a power with an energy)'], 'The text gives a power on one side and an energy on the other.', [inF, outF]));
     } else {
+      // An efficiency of at most 100 % that the text states itself ("Efficiency 94.6 %", "a charging
+      // efficiency of about 95 %"), where no efficiency above 100 % is stated: the text says its device
+      // gives back less than it takes, so figures read as its input and output that give more are more
+      // likely another device's or a misreading than the claim (see run.ts).
+      const effs = ofKind(figures, 'efficiency').filter((f) => !f.derived && f.start !== null);
+      const within = effs.some((f) => (f.upper?.si ?? f.si) > 1) ? undefined : effs.find((f) => f.si > 0 && (f.upper?.si ?? f.si) <= 1);
       plans.push({
+        within,
         check: 'first-law',
         uses: uniq([inF, outF, t !== undefined && !bothPower ? duration : undefined]),
         inputs: (e) => ({ E_in: toEnergy(inF, e(inF))!, W_out: toEnergy(outF, e(outF))!, Q_out: '0 J', dE_stored: '0 J' }),

@@ -121,6 +121,21 @@ export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { chec
       });
       continue;
     }
+    // The text states a figure of its device within the law that this reading contradicts: no conflict
+    // is said until the reader confirms which figures are the device's.
+    if (!run.verdict.holds && p.within && ctx.text) {
+      const words = p.uses.filter((f) => !f.derived && f.start !== null).map((f) => `“${f.text}”`);
+      needs.push({
+        check: p.check,
+        title: def.title,
+        missing: [
+          `confirmation of which figures are the device's: read as its own, ${words.length ? words.join(' and ') : 'the figures used'} would find it in conflict with ${CHECK_LAW[p.check]}, but the text also states ${p.within.kind === 'efficiency' ? 'an efficiency of' : ''} “${p.within.text}”, which is within it`.replace(/  +/g, ' '),
+        ],
+        why: p.why,
+        uses: p.uses.map((f) => f.id),
+      });
+      continue;
+    }
     out.push({
       check: p.check,
       inputs,
