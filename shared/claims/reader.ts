@@ -55,6 +55,7 @@
 import type { Figure } from './types';
 import { readFigures } from './reader/figures';
 import { detex } from './reader/tex';
+import { unitAt } from './reader/units';
 
 /**
  * The figures in a pasted text, in order of appearance, with ids "f1", "f2", …; derived figures
@@ -125,7 +126,7 @@ export function joinUnitColumns(text: string): string {
       });
       return filled.join('|');
     }
-    if (unitCol < 1 || s !== sep || cells.length <= unitCol) return line;
+    if (unitCol < 1 || s !== sep || cells.length <= unitCol) return headerlessUnitCells(line, s, cells);
     const value = cells[unitCol - 1];
     const unit = cells[unitCol];
     if (!/\d[^\S\n]*$/u.test(value) || !UNIT_CELL_RE.test(unit) || /^[^\S\n]*[-—–]+[^\S\n]*$/u.test(unit)) return line;
@@ -134,6 +135,31 @@ export function joinUnitColumns(text: string): string {
     return line.slice(0, at) + ' ' + line.slice(at + 1);
   });
   return out.join('\n');
+}
+
+/** A cell that is nothing but a unit the reader knows ("%", "kW", "°C", "N/kW"). */
+function unitOnly(cell: string): boolean {
+  const t = cell.trim();
+  if (t === '%' || t === '') return t === '%';
+  if (/\d/.test(t) || t.length > 12) return false;
+  const u = unitAt(t, 0);
+  return u !== null && u.end === t.length;
+}
+
+/**
+ * A row with no "Unit" header above it whose cell ending in a bare number is followed by a cell holding a unit alone
+ * ("Conversion efficiency | 5.0 | % | output / heat", "Electrical output\t80\tW"): the separator between
+ * them is blanked (offsets kept), and the value is read with its unit.
+ */
+function headerlessUnitCells(line: string, s: string, cells: string[]): string {
+  let out = line;
+  let at = 0;
+  for (let i = 0; i + 1 < cells.length; i++) {
+    at += cells[i].length;
+    if (/(?<![\p{L}\d.,-])[-−+]?\d[\d.,]*[^\S\n]*$/u.test(cells[i]) && unitOnly(cells[i + 1])) out = out.slice(0, at) + ' ' + out.slice(at + 1);
+    at += s.length;
+  }
+  return out;
 }
 
 function readPlain(text: string): Figure[] {

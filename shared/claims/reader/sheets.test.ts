@@ -133,3 +133,19 @@ test('a padded Markdown table whose headers name the units ("Heater head (°C)")
   for (const x of f) expect(table.slice(x.start!, x.end!)).toBe(x.text);
   expect(f.map((x) => x.text)).toEqual(['250', '20']);
 });
+
+test('a row with no "Unit" header whose number is followed by a cell holding a unit alone reads them together (invented test data)', () => {
+  const row = 'Engine between 300 °C and 80 °C | Output 80 W | Efficiency 5.0 | % | rig B';
+  const f = extractFigures(row);
+  // The 5 % efficiency, not 5 (500 %): η_C = 1 − 353.15/573.15 = 0.384 (textbook formula), so 0.05 is within it.
+  expect(f.find((x) => x.kind === 'efficiency')?.si).toBeCloseTo(0.05, 12);
+  for (const x of f) expect(row.slice(x.start!, x.end!)).toBe(x.text);
+  expect(runClaimChecks(f, { text: row }).checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+  const tabbed = 'Thrust\t2.5\tmN\nInput power\t1.2\tkW';
+  expect(extractFigures(tabbed).map((x) => [x.kind, x.si])).toEqual([
+    ['thrust', 0.0025],
+    ['power', 1200],
+  ]);
+  // A cell that is no unit ("Y", "—", a note) is left as it is: a count stays a count.
+  expect(extractFigures('Modules | 24 | — | skutterudite\nPass | 3 | Y')).toEqual([]);
+});
