@@ -393,6 +393,27 @@ describe('a reading the text itself contradicts (issue 11: no false alarm)', () 
   });
 });
 
+describe('outputs in bursts and inputs tied to outputs by an excess (issue 11)', () => {
+  it('an output given only in bursts is not multiplied by a run to set against a stored energy', () => {
+    // Invented flywheel array: 25 kWh stored, "can deliver 2 MW for short periods", one year in service.
+    const text = 'One year in service at the substation.\n\nEach flywheel stores 25 kWh. The array can deliver 2 MW for short periods.';
+    const { checks, needs } = runClaimChecks(extractFigures(text), { text });
+    expect(checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+    expect(needs.find((n) => n.check === 'first-law')?.missing[0]).toMatch(/how long the device ran/);
+  });
+  it('a steady output over the same run is still compared', () => {
+    // 2 kW × 24 h = 48 kWh out against 25 kWh in: ratio 1.92 (energy = power × time, NIST SP 811 §B.8: 1 kWh = 3.6 MJ).
+    const text = 'The unit ran for 24 hours.\n\nIt was charged with 25 kWh and delivered a steady 2 kW throughout.';
+    expectFinding(firstLaw(text), 'breaks', 'over_unity', 48 / 25, 3);
+  });
+  it('an input and an output said paragraphs apart are one device\'s when an excess said with the input ties them', () => {
+    const filler = 'The calorimeter, its calibration and the gas handling are described in the methods section. '.repeat(6);
+    // 20 W in + 4 W excess = 24 W out: over-unity 24/20 = 1.2.
+    const text = `After loading, the cell produced 4 W more heat than the 20 W its heater drew.\n\n${filler}\n\nWe read the 24 W of total heat output as evidence of a new process.`;
+    expectFinding(firstLaw(text), 'breaks', 'over_unity', 1.2, 6);
+  });
+});
+
 describe('a long document with many figures', () => {
   it('is said to need its figures checked before a result is cited; a short claim is not', () => {
     const para = (i: number) => `Run ${i}: the rig drew ${100 + i} W and gave ${50 + i} W; the room was at ${20 + i} °C.`;

@@ -4,8 +4,8 @@
  * efficiency; a boiler's efficiency on the net calorific value; what is missing otherwise.
  */
 import { HARVEST_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
-import { alt } from '../reader/context';
-import { isChargingTime } from '../reader/durations';
+import { alt, sentenceAround } from '../reader/context';
+import { BURST_RE, isChargingTime } from '../reader/durations';
 import type { Figure } from '../types';
 import { at, need, ofKind, siAt, typed, uniq, type Basis, type End } from './basis';
 import type { HeatReading } from './carnot';
@@ -39,6 +39,11 @@ function heatEngineElectricIn(b: Basis, inF: Figure | undefined): boolean {
   if (inF.start === null || inF.end === null) return false;
   const near = b.text.slice(Math.max(0, inF.start - 40), inF.end + 40);
   return !HEAT_IN_NEAR_RE.test(near);
+}
+
+/** An output said as a burst or a peak ("can deliver 2 MW for short periods"): no steady output over a run. */
+function saidInBursts(text: string, f: Figure): boolean {
+  return f.start !== null && f.end !== null && !!text && BURST_RE.test(sentenceAround(text, f.start, f.end));
 }
 
 export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading, { efficiency, movesHeat, gain, share, cop, acrossDifference, copForCarnot }: HeatReading): void {
@@ -79,8 +84,9 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     const toEnergy = (f: Figure, e: End): string | null => {
       if (f.kind === 'energy') return at(f, e);
       if (siAt(f, e) === 0) return '0 J'; // no input at all, however long it ran
-      // A charging time is no run of what the device puts out ("a 150 kW motor … charges in 40 minutes").
-      if (t !== undefined && !(f.role === 'out' && !bothPower && duration && isChargingTime(text, duration))) return typed(siAt(f, e) * t, 'J');
+      // A charging time is no run of what the device puts out ("a 150 kW motor … charges in 40 minutes");
+      // nor is any run the time of an output given only in bursts ("can deliver 2 MW for short periods").
+      if (t !== undefined && !(f.role === 'out' && !bothPower && duration && isChargingTime(text, duration)) && !(f.role === 'out' && !bothPower && saidInBursts(text, f))) return typed(siAt(f, e) * t, 'J');
       if (bothPower) return typed(siAt(f, e), 'J'); // one second of steady running
       return null;
     };

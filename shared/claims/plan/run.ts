@@ -75,6 +75,17 @@ function saidApart(text: string, uses: Figure[]): string | null {
   return words.length === 2 ? words.join(' and ') : `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`;
 }
 
+/**
+ * An input and an output the text ties together itself, wherever each is said: an excess stated with
+ * the input ("4 W more heat than the 20 W it draws … the 24 W of total heat output") that the two differ by.
+ */
+function tiedByExcess(figures: Figure[], uses: Figure[]): boolean {
+  const inF = uses.find((f) => f.role === 'in');
+  const outF = uses.find((f) => f.role === 'out');
+  if (!inF || !outF || inF.kind !== outF.kind) return false;
+  return figures.some((f) => f.role === 'excess' && f.kind === inF.kind && Math.abs(inF.si + f.si - outF.si) <= 0.01 * outF.si);
+}
+
 /** Plans, run: each at the ends of its ranges most favourable to the claim. */
 export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { checks: ClaimCheckRun[]; needs: ClaimCheckNeed[]; notes: string[] } {
   const { plans, needs, notes } = planFor(figures, ctx);
@@ -110,7 +121,7 @@ export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { chec
     // different things (a report's device and a load it mentions later): a law is not said broken on
     // them until the reader confirms they belong together (a re-run on figures the reader set has no
     // places in the text, so this does not apply to it).
-    const apart = !run.verdict.holds ? saidApart(ctx.text ?? '', p.uses) : null;
+    const apart = !run.verdict.holds && !tiedByExcess(figures, p.uses) ? saidApart(ctx.text ?? '', p.uses) : null;
     if (apart) {
       needs.push({
         check: p.check,

@@ -22,6 +22,9 @@ export const CHARGING_TIME_RE =
 export const isChargingTime = (text: string, d: { start: number | null | undefined }): boolean =>
   d.start != null && CHARGING_TIME_RE.test(text.slice(Math.max(0, d.start - 50), d.start));
 
+/** Words of an output given only in bursts or as a rating of what it can do at most. */
+export const BURST_RE = /(?<!\p{L})(?:for short periods|for a short (?:time|period)|briefly|momentarily|in (?:short )?bursts|at peak|peaks? (?:at|of)|peak (?:power|output)|for (?:a few|several) (?:seconds|minutes))(?!\p{L})/iu;
+
 /** Times, rates and energies over a run, among the figures read (see the file's comment). */
 export function relateDurations(text: string, drafts: Draft[]): void {
   // Times that are not the run's ("took 18 months to build", "pays for itself in 3 years"), said in a
@@ -68,6 +71,8 @@ export function relateDurations(text: string, drafts: Draft[]): void {
         durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && sameClause(text, d, p) && d.start - p.end < 80) ??
         [...durations].reverse().find((d) => d.end <= p.start && (!prevPower || d.start > prevPower.end) && sameClause(text, d, p) && p.start - d.end < 60);
       const duration = durations.length > 1 && own ? own : longest;
+      // "can deliver 2 MW for short periods", "peaks at 3 kW": a rating or a burst, not what it gave over the run.
+      if (p.role === 'out' && BURST_RE.test(sentenceAround(text, p.start, p.end))) continue;
       // "… a 150 kW motor, and charges to 80 % in 40 minutes": a charging time is no run of what the
       // device puts out.
       if (p.role === 'out' && isChargingTime(text, duration)) continue;
