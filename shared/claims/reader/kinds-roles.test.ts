@@ -131,3 +131,28 @@ describe('roles', () => {
     expect(extractFigures(pump).filter((f) => f.kind === 'mass').map((f) => f.role)).toEqual(['aside']);
   });
 });
+
+describe('stores and sides across paragraphs (issue 11, invented test data)', () => {
+  const roles = (text: string) => extractFigures(text).filter((f) => f.kind === 'energy' || f.kind === 'power').map((f) => [f.text, f.role]);
+  test('what a store holds is its capacity, not what it gives out, even "of heat"', () => {
+    expect(roles('Its first silo holds 8 MWh of heat at up to 500 °C.')).toEqual([['8 MWh', null]]);
+  });
+  test('a side named in another paragraph does not give an open figure the other side', () => {
+    const text = "The lorry's 300 kWh battery still has to be charged every night.\n\nAnother holding builds containers of 2 MWh.";
+    expect(roles(text)).toEqual([
+      ['300 kWh', 'in'],
+      ['2 MWh', null],
+    ]);
+    // In one paragraph it does.
+    expect(roles("The lorry's 300 kWh battery has to be charged every night, and it delivered 250 kWh.")).toEqual([
+      ['300 kWh', 'in'],
+      ['250 kWh', 'out'],
+    ]);
+  });
+  test('a store drained by a load over a run: the store is what goes in, also where the text says what the load got', () => {
+    const text = 'The lantern holds one cell rated at 2 Wh and an LED drawing a constant 0.5 W. In a run of two weeks it never dimmed; it delivered about 0.6 MJ to the LED.';
+    const f = extractFigures(text);
+    expect(f.find((x) => x.text === '2 Wh')?.role).toBe('in');
+    expect(f.find((x) => x.text === '0.6 MJ')?.role).toBe('out');
+  });
+});

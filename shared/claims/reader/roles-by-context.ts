@@ -8,7 +8,7 @@
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import type { FigureRole } from '../types';
-import { sentenceAround } from './context';
+import { paragraphAround, sentenceAround } from './context';
 import { sentenceOf, siOf, typedSi, type Draft } from './draft';
 
 /** A propellant mass fraction: "propellant is 90 % of the mass", "90 % propellant by mass", "a propellant fraction of 85 %". */
@@ -187,7 +187,9 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   const draws = drafts.filter(
     (d) => d.kind === 'power' && d.role === 'in' && !d.derived && (DRAW_LEAD_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || DRAW_AFTER_RE.test(text.slice(d.end, d.end + 30))),
   );
-  if (stores.length === 1 && draws.length === 1 && drafts.filter(energyLike).length === 2 && drafts.some((d) => d.kind === 'duration')) {
+  // (Other energies only where they are what the load got: "delivered about 0.6 MJ to the LED".)
+  const others = drafts.filter((d) => energyLike(d) && d !== stores[0] && d !== draws[0]);
+  if (stores.length === 1 && draws.length === 1 && others.every((d) => d.derived || (d.role === 'out' && d.kind === 'energy')) && drafts.some((d) => d.kind === 'duration')) {
     stores[0].role = 'in';
     // (Where something else may feed the load, a solar panel named, the draw stays an input: no ledger,
     // rather than one with a store that is not the whole input.)
@@ -201,10 +203,19 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
       if (d.kind === 'power' && !d.derived && d.role !== 'aside' && SUPPLY_RATING_AFTER_RE.test(text.slice(d.end, d.end + 40))) d.role = 'aside';
     }
   }
+  // "its first silo holds 8 MWh of heat": what a store holds is its capacity, not what it gives out
+  // (the run that drains it, or the charge that fills it, is said apart: see below).
+  for (const d of drafts) {
+    if (d.kind === 'energy' && !d.derived && d.role === 'out' && STORE_HOLDS_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) && !ENDS_UP_HOLDING_RE.test(text.slice(Math.max(0, d.start - 40), d.start))) d.role = null;
+  }
   // One side named, one figure left: the other side.
   const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
   const open = drafts.filter((d) => energyLike(d) && d.role === null);
-  if (named.length && open.length === 1) {
+  // (In a text of several paragraphs, only a side named in the open figure's own paragraph: "the
+  // lorry's 300 kWh battery has to be charged" is no other side of "its first silo holds 8 MWh" in a
+  // paragraph on another holding.)
+  const own = (d: Draft) => paragraphAround(text, d.start, d.end) === paragraphAround(text, open[0].start, open[0].end);
+  if (named.length && open.length === 1 && named.some(own)) {
     // ("delivers 380 W on the motorway, and under 100 W in town": the same side at another point — a
     // list going on from the named figure of its own sentence, the new one said with its condition —
     // not the other side.)
@@ -214,8 +225,8 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     const again = named.find((d) => d.kind === open[0].kind && siOf(d) !== null && Math.abs((siOf(d) as number) - (siOf(open[0]) ?? NaN)) <= 1e-9 * Math.abs(siOf(d) as number));
     if (again) open[0].role = 'aside';
     else if (goesOn) open[0].role = prev.role;
-    else if (named.every((d) => d.role === 'in')) open[0].role = 'out';
-    else if (named.every((d) => d.role === 'out')) open[0].role = 'in';
+    else if (named.filter(own).every((d) => d.role === 'in')) open[0].role = 'out';
+    else if (named.filter(own).every((d) => d.role === 'out')) open[0].role = 'in';
   }
   // "propellant is 90 % of the vehicle's mass", "90 % propellant by mass": the propellant from a fraction.
   const fraction = PROPELLANT_FRACTION_RE.exec(text);
