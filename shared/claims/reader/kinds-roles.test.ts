@@ -156,3 +156,13 @@ describe('stores and sides across paragraphs (issue 11, invented test data)', ()
     expect(f.find((x) => x.text === '0.6 MJ')?.role).toBe('out');
   });
 });
+
+test('a current takes the voltage said with it, not one already said with another current (invented test data)', () => {
+  // P = I × V: 6.1 A × 36 V = 219.6 W in; 17.2 A × 12.6 V = 216.72 W out (ratio 0.987, within the first law).
+  const text = 'The display shows the panel sending 6.1 A at 36 V into the controller, while 17.2 A goes into the batteries at 12.6 V.';
+  const powers = extractFigures(text).filter((f) => f.kind === 'power');
+  expect(powers.map((f) => [f.role, Math.round(f.si * 100) / 100])).toEqual([
+    ['in', 219.6],
+    ['out', 216.72],
+  ]);
+});

@@ -144,17 +144,23 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   }
 
   // Power from a current and a voltage in the same clause: "12 A at 24 V", "3 amps from a 48-volt pack".
-  for (const cur of drafts.filter((d) => d.kind === 'current')) {
+  const currents = drafts.filter((d) => d.kind === 'current');
+  const voltsNear = (cur: Draft) => drafts.filter((d) => d.kind === 'voltage' && sameClause(text, d, cur) && Math.abs(d.start - cur.start) < 120);
+  // "0.9 A at 24 V": the voltage said with the current, right after or right before it.
+  // ("5 V in at 2 A, 12 V out at 0.75 A": a comma parts two pairs.)
+  const saidWith = (cur: Draft, candidates: Draft[]) =>
+    candidates.find((d) => d.start >= cur.end && /^[^\S\n]*(?:at|@|from|on|×|x|\*|\/)?[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
+    candidates.find((d) => d.end <= cur.start && /^[^\S\n]*(?:(?:in|out|input|output|DC|AC)[^\S\n]+)?(?:at|@|×|x|\*|\/)?[^\S\n]*$/iu.test(text.slice(d.end, cur.start))) ??
+    candidates.find((d) => d.start >= cur.end && /^[^\S\n]*,[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
+    candidates.find((d) => d.end <= cur.start && /^[^\S\n]*,[^\S\n]*$/iu.test(text.slice(d.end, cur.start)));
+  for (const cur of currents) {
     // The voltage nearest the current in its sentence ("steps 230 V down to 12 V and delivers 5 A": 12 V).
-    const candidates = drafts.filter((d) => d.kind === 'voltage' && sameClause(text, d, cur) && Math.abs(d.start - cur.start) < 120);
-    // "0.9 A at 24 V": the voltage said with the current, right after or right before it; else the nearest.
-    // ("5 V in at 2 A, 12 V out at 0.75 A": a comma parts two pairs.)
-    const volt =
-      candidates.find((d) => d.start >= cur.end && /^[^\S\n]*(?:at|@|from|on|×|x|\*|\/)?[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
-      candidates.find((d) => d.end <= cur.start && /^[^\S\n]*(?:(?:in|out|input|output|DC|AC)[^\S\n]+)?(?:at|@|×|x|\*|\/)?[^\S\n]*$/iu.test(text.slice(d.end, cur.start))) ??
-      candidates.find((d) => d.start >= cur.end && /^[^\S\n]*,[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
-      candidates.find((d) => d.end <= cur.start && /^[^\S\n]*,[^\S\n]*$/iu.test(text.slice(d.end, cur.start))) ??
-      candidates.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0];
+    const candidates = voltsNear(cur);
+    // Else the nearest — not one said with another current ("6.1 A at 36 V into the controller, while
+    // 17.2 A goes into the batteries at 12.6 V": 17.2 A is at 12.6 V).
+    const taken = new Set(currents.filter((c) => c !== cur).map((c) => saidWith(c, voltsNear(c))));
+    const free = candidates.filter((d) => !taken.has(d));
+    const volt = saidWith(cur, candidates) ?? (free.length ? free : candidates).sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0];
     if (!volt) continue;
     const i = siOf(cur);
     const v = siOf(volt);
