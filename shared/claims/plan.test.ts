@@ -374,6 +374,12 @@ describe('a reading the text itself contradicts (issue 11: no false alarm)', () 
     expect(checks.filter((c) => c.finding === 'breaks')).toEqual([]);
     expect(needs.find((n) => n.check === 'first-law')?.missing[0]).toMatch(/^confirmation of which figures are the device's: .*“249\.6 W” and “259 W”.*“94\.6 %”, which is within it$/);
   });
+  it('an efficiency said in another paragraph, of a device the text cites, does not hold back the finding', () => {
+    // 1.1 kW in, 1.6 ± 0.2 kW out: at the end kinder to the claim, 1.4/1.1 = 1.27 (over-unity ratio).
+    const text =
+      'When the converter is fed 1.1 kW from the bench supply, the resistive load bank receives 1.6 ± 0.2 kW.\n\nThe authors compare it with a grid transformer whose efficiency they give as 98.6 %.';
+    expectFinding(firstLaw(text), 'breaks', 'over_unity', 1.4 / 1.1, 6);
+  });
   it('the same figures with no efficiency stated, or with one above 100 %, are a conflict', () => {
     expect(firstLaw('The box drew 249.6 W and delivered 259 W into the load.')?.finding).toBe('breaks');
     expect(firstLaw('The box drew 249.6 W and delivered 259 W into the load, an efficiency of 104 %.')?.finding).toBe('breaks');
@@ -411,6 +417,14 @@ describe('outputs in bursts and inputs tied to outputs by an excess (issue 11)',
     // 20 W in + 4 W excess = 24 W out: over-unity 24/20 = 1.2.
     const text = `After loading, the cell produced 4 W more heat than the 20 W its heater drew.\n\n${filler}\n\nWe read the 24 W of total heat output as evidence of a new process.`;
     expectFinding(firstLaw(text), 'breaks', 'over_unity', 1.2, 6);
+  });
+});
+
+describe('an excess said with its input, and an output of another paragraph (issue 11)', () => {
+  it('the output is the input plus the excess, not a calibration run\'s output said elsewhere', () => {
+    // 40 W in + 12 W excess = 52 W out: over-unity 52/40 = 1.3.
+    const text = 'In steady operation the cell releases 12 W more heat than the 40 W it draws.\n\nIn calibration, at 40 W the heater was recovered as 39.6 W.';
+    expectFinding(firstLaw(text), 'breaks', 'over_unity', 1.3, 6);
   });
 });
 

@@ -7,7 +7,7 @@ import { HARVEST_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
 import { alt, sentenceAround } from '../reader/context';
 import { BURST_RE, isChargingTime } from '../reader/durations';
 import type { Figure } from '../types';
-import { at, need, ofKind, siAt, typed, uniq, type Basis, type End } from './basis';
+import { at, need, ofKind, paragraphKey, siAt, typed, uniq, type Basis, type End } from './basis';
 import type { HeatReading } from './carnot';
 import type { ThrustReading } from './thrust';
 
@@ -100,7 +100,10 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
       // efficiency of about 95 %"), where no efficiency above 100 % is stated: the text says its device
       // gives back less than it takes, so figures read as its input and output that give more are more
       // likely another device's or a misreading than the claim (see run.ts).
-      const effs = ofKind(figures, 'efficiency').filter((f) => !f.derived && f.start !== null);
+      // (Said in the paragraph of the input or the output: one in a paragraph on devices the text cites
+      // beside the claim — "a grid transformer whose efficiency the authors give as 98.6 %" — is theirs.)
+      const near = (f: Figure) => [inF, outF].some((g) => g.start === null || f.start === null || paragraphKey(text, g.start) === paragraphKey(text, f.start));
+      const effs = ofKind(figures, 'efficiency').filter((f) => !f.derived && f.start !== null && near(f));
       const within = effs.some((f) => (f.upper?.si ?? f.si) > 1) ? undefined : effs.find((f) => f.si > 0 && (f.upper?.si ?? f.si) <= 1);
       plans.push({
         within,

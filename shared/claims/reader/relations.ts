@@ -294,7 +294,11 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const excess = drafts.find((d) => d.kind === kind && d.role === 'excess' && !d.derived);
     const input = drafts.find((d) => d.kind === kind && d.role === 'in');
     const output = drafts.find((d) => d.kind === kind && d.role === 'out');
-    if (excess && input && !output) {
+    // (An output said in another paragraph than the excess and its input — a calibration run's, an
+    // earlier cell's — is not the one they give: "12 W more heat than the 40 W it draws … Section 2:
+    // at 40 W the calibration heater was recovered as 39.6 W".)
+    const ownOutput = drafts.find((d) => d.kind === kind && d.role === 'out' && excess && paragraphAround(text, d.start, d.end) === paragraphAround(text, excess.start, excess.end));
+    if (excess && input && (!output || (!ownOutput && paragraphAround(text, excess.start, excess.end) === paragraphAround(text, input.start, input.end)))) {
       const e = siOf(excess);
       const n = siOf(input);
       if (e === null || n === null) continue;

@@ -133,6 +133,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     if (PEOPLE_CHARGED_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'in';
     // "we pull 800 W off it", "you can draw 2 kW out of the generator": what people take from the device is its output.
     if (PEOPLE_TAKE_LEAD_RE.test(lead) && TAKEN_FROM_IT_RE.test(text.slice(end, end + 40))) return 'out';
+    // "the resistive load bank receives 1.6 kW": what a load receives is what the device gives it.
+    if (LOAD_RECEIVES_RE.test(lead)) return 'out';
     // (Not when a supply is the subject: "the bench supply delivers 5 A" is what the device takes.)
     if (!/(?<!\p{L})(?:suppl(?:y|ies)|batter(?:y|ies)|mains|grid|sources?|sockets?|packs?|alternators?|chargers?|PSUs?|adapters?)[^\S\n]+\p{L}+[^\S\n]+[^.;!?\n]{0,12}$/iu.test(lead)) {
       // "the battery ran a chest freezer drawing 300 W": what a load the device runs draws is its output.
@@ -177,6 +179,10 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   });
   return best;
 }
+
+/** A load as the subject that receives a figure: "the load bank receives", "the heater gets". */
+const LOAD_RECEIVES_RE =
+  /(?<!\p{L})(?:loads?|load[^\S\n]+banks?|dummy[^\S\n]+loads?|resistors?|heaters?|heating[^\S\n]+elements?|lamps?|bulbs?|consumers?)[^\S\n]+(?:receives?|received|receiving|gets|got|sees|saw|absorbs?|absorbed|dissipates?|dissipated)[^\S\n]+(?:(?:about|around|roughly|some|only|just|nearly|a steady|an average of|on average)[^\S\n]+)?$/iu;
 
 /** Just before a role word: a word that says it is absent ("no", "without", "zero"). */
 const NEGATED_LEAD_RE = /(?<!\p{L})(?:no|without|zero|never|nor)[^\S\n]+(?:(?:any|external|outside|other|electrical|electric)[^\S\n]+)?$/iu;
