@@ -428,6 +428,16 @@ describe('an excess said with its input, and an output of another paragraph (iss
   });
 });
 
+describe('the rocket equation in a text on several craft (issue 11)', () => {
+  it('takes the masses and exhaust speed from the paragraph that says the claimed Δv', () => {
+    const text =
+      'Option 1, lander A. Pressure-fed propulsion with a specific impulse of 320 s and a fuelled mass of 900 kg.\n\n' +
+      'Option 3, lander C. An engine with an exhaust velocity of 4.4 km/s. Its fuelled mass is 550 kg, and it would arrive with an empty mass of 410 kg. The supplier claims a total velocity change of 1.3 km/s.';
+    // Tsiolkovsky: Δv = v_e ln(m0/m1) = 4400 ln(550/410) = 1293.5 m/s; 1300 / 1293.5 = 1.005 (breaks, barely).
+    expectFinding(checkRun(text, 'rocket-equation'), 'breaks', 'dv_ratio', 1300 / (4400 * Math.log(550 / 410)), 6);
+  });
+});
+
 describe('a long document with many figures', () => {
   it('is said to need its figures checked before a result is cited; a short claim is not', () => {
     const para = (i: number) => `Run ${i}: the rig drew ${100 + i} W and gave ${50 + i} W; the room was at ${20 + i} °C.`;

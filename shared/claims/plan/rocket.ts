@@ -3,7 +3,7 @@
  * either with the propellant) and a claimed Δv when there is one; what is missing otherwise.
  */
 import type { Figure } from '../types';
-import { at, need, ofKind, siAt, typed, uniq, type Basis, type End } from './basis';
+import { at, need, ofKind, paragraphKey, siAt, typed, uniq, type Basis, type End } from './basis';
 
 /** A craft that carries what it throws out: a stage, a launcher, a spacecraft. */
 const CRAFT_WORDS_RE = /(?<!\p{L})(?:stages?|launchers?|rockets?|spacecraft|space probes?|probes?|satellites?|cubesats?|landers?|boosters?|kick motors?|payloads?|tugs?)(?!\p{L})/iu;
@@ -11,12 +11,22 @@ const CRAFT_WORDS_RE = /(?<!\p{L})(?:stages?|launchers?|rockets?|spacecraft|spac
 export function planRocket(b: Basis): void {
   const { figures, s, plans, needs, text, speeds } = b;
   const masses = ofKind(figures, 'mass');
-  const wet = masses.find((f) => f.role === 'wet');
-  const dry = masses.find((f) => f.role === 'dry');
-  const prop = masses.find((f) => f.role === 'propellant');
-  const isp = ofKind(figures, 'specific-impulse')[0];
-  const exhaust = speeds.find((f) => f.role === 'exhaust');
-  const dv = speeds.find((f) => f.role === 'delta-v');
+  // In a text on several craft, each figure from the paragraph that says the claimed Δv (else the one
+  // that says most of what the check needs), and only then from elsewhere: "Option 1 … a fuelled mass
+  // of 900 kg … Option 3 … fuelled mass 550 kg, empty 410 kg, Δv 1.3 km/s" is checked on 550 and 410.
+  const pieces = [...masses.filter((f) => f.role === 'wet' || f.role === 'dry' || f.role === 'propellant'), ...ofKind(figures, 'specific-impulse'), ...speeds.filter((f) => f.role === 'exhaust' || f.role === 'delta-v')];
+  const key = (f: Figure) => (f.start === null || !text ? -1 : paragraphKey(text, f.start));
+  const claimed = speeds.find((f) => f.role === 'delta-v');
+  const counts = new Map<number, number>();
+  for (const f of pieces) counts.set(key(f), (counts.get(key(f)) ?? 0) + 1);
+  const home = claimed && key(claimed) !== -1 ? key(claimed) : [...counts].sort((a, b) => b[1] - a[1])[0]?.[0];
+  const pick = (fs: Figure[]) => fs.find((f) => key(f) === home) ?? fs[0];
+  const wet = pick(masses.filter((f) => f.role === 'wet'));
+  const dry = pick(masses.filter((f) => f.role === 'dry'));
+  const prop = pick(masses.filter((f) => f.role === 'propellant'));
+  const isp = pick(ofKind(figures, 'specific-impulse'));
+  const exhaust = pick(speeds.filter((f) => f.role === 'exhaust'));
+  const dv = claimed;
   const rocketish = isp || exhaust || dv || wet || dry || prop;
   if (rocketish && (s.propellant || isp || exhaust || prop || (dv && (wet || dry || CRAFT_WORDS_RE.test(text))))) {
     const missing: string[] = [];
@@ -36,7 +46,7 @@ export function planRocket(b: Basis): void {
       if (!dry) extra.push('Final mass = starting mass − propellant.');
       plans.push({
         check: 'rocket-equation',
-        uses: uniq([isp, exhaust, wet, dry, prop, dv]),
+        uses: uniq([exhaust ? undefined : isp, exhaust, wet, dry, prop, dv]),
         inputs: (e) => ({
           v_e: exhaust ? at(exhaust, e(exhaust)) : '0 m/s',
           Isp: isp && !exhaust ? at(isp, e(isp)) : '0 s',
