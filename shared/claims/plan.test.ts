@@ -428,6 +428,16 @@ describe('an excess said with its input, and an output of another paragraph (iss
   });
 });
 
+describe('powers in and out said together, an energy of something else said apart (issue 11)', () => {
+  it('the ledger is the powers, not a stated energy of another paragraph against one worked out from them', () => {
+    const text =
+      "A listener's own figures, a battery charged with five kilowatt-hours, were the worked example.\n\n" +
+      'The gadget: it takes in two kilowatts and puts out three point one kilowatts, tested through 10K hours of operation.';
+    // 3.1 kW / 2 kW = 1.55 (over-unity ratio); not 3.1 kW × 10 000 h against 5 kWh.
+    expectFinding(firstLaw(text), 'breaks', 'over_unity', 1.55, 6);
+  });
+});
+
 describe('the rocket equation in a text on several craft (issue 11)', () => {
   it('takes the masses and exhaust speed from the paragraph that says the claimed Δv', () => {
     const text =

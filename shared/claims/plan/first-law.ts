@@ -76,8 +76,14 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
   } else if (heatEngineElectricIn(b, eIn ?? pIn)) {
     notes.push("A heat engine's input is the heat it takes in: the electrical power the text gives beside its output is a load's or a part's, not what the engine converts. Its bound is the Carnot efficiency between its two sides.");
   } else if ((eIn || pIn) && (eOut || pOut) && !(thrust && photonApplies && !eOut && !pOut) && !(mixedWithoutTime && (gain || share))) {
-    const inF = eIn ?? pIn!;
-    const outF = eOut ?? pOut!;
+    // (Powers in and out said in one paragraph, where the energies are not and one of them is stated in
+    // another paragraph: "Takes in two kilowatts, puts out three point one kilowatts" beside a
+    // listener's "battery of five kilowatt-hours" elsewhere.)
+    const together = (a: Figure | undefined, c: Figure | undefined) => !!a && !!c && (a.start === null || c.start === null || paragraphKey(text, a.start) === paragraphKey(text, c.start));
+    const statedApart = [eIn, eOut].some((e) => e && !e.derived && !together(e, pIn) && !together(e, pOut));
+    const powersOnly = !!text && together(pIn, pOut) && statedApart && !together(eIn ?? pIn, eOut ?? pOut);
+    const inF = powersOnly ? pIn! : (eIn ?? pIn!);
+    const outF = powersOnly ? pOut! : (eOut ?? pOut!);
     const bothPower = !eIn && !eOut;
     const t = duration?.si;
     const extra: string[] = ['Heat out: counted in the output (0 J apart; any heat rejected only adds to the output).'];

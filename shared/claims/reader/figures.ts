@@ -18,6 +18,9 @@ import { lastRoleWords, ratingRole, roleFor } from './roles';
 import { differenceDirection, differenceQuantity, isDifference } from './temperatures';
 import { GLUED_CELSIUS, GLUED_FAHRENHEIT, type Suffix } from './units';
 
+/** Words of a temperature in a sentence: what a glued "4K" needs beside it to be read in kelvin. */
+const TEMPERATURE_WORDS_RE = /(?<!\p{L})(?:temperatures?|kelvin|cold\w*|hot\w*|cool\w*|warm\w*|heat\w*|cryo\w*|helium|nitrogen|freez\w*|degrees?|thermal|sides?|sinks?|reservoirs?|ΔT|deltaT|superconduct\w*|absolute zero)(?!\p{L})/iu;
+
 /** Seconds said of an engine: "an ion engine at 3,000 s", "a hydrazine thruster of 220 s" (a specific impulse). */
 const ENGINE_SECONDS_RE = /(?<!\p{L})(?:engines?|thrusters?|rocket motors?|motors?|rockets?|stages?)[^\S\n]+(?:at|of|rated at|running at|giving|with)[^\S\n]+(?:(?:about|around|roughly|some|nearly|an? Isp of)[^\S\n]+)?$/iu;
 
@@ -183,6 +186,10 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         kind = 'specific-impulse';
       } else if (kind === 'duration' && /(?:(?<!\p{L})at|@)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 4), start))) {
         // "at 10 h": a time of day.
+        continue;
+      } else if (kind === 'temperature' && suffix.form.unit === 'K' && /^\d+K$/u.test(text.slice(start, end)) && !TEMPERATURE_WORDS_RE.test(sentenceAround(text, start, end))) {
+        // "rated for 4K", "a 4K display": a glued K with no word of temperature in its sentence is a
+        // thousand or a name, not a kelvin temperature.
         continue;
       } else if (kind === 'temperature' && suffix.form.ambiguous) {
         assumption = suffix.form === GLUED_CELSIUS ? '"C" read as degrees Celsius.' : suffix.form === GLUED_FAHRENHEIT ? '"F" read as degrees Fahrenheit.' : '"Degrees" read as degrees Celsius.';

@@ -165,8 +165,15 @@ describe('false positives', () => {
     ['a bare number', 'It ran 3 times on 2 rigs with 4 coils.'],
     ['an angle', 'The arm swings through 90 degrees and back.'],
     ['a thousand cycles', 'The seal survived 5K cycles and 20k rpm.'],
+    ['a thousand with a word of its kind between', 'One wall unit is rated for 6K full cycles, the other for 10K charge cycles.'],
+    ['a glued K with no word of temperature in its sentence', 'The other unit is rated for 4K, and a 4K display is fitted.'],
   ])('%s (invented test data)', (_what, text) => {
     expect(extractFigures(text)).toEqual([]);
+  });
+
+  test('a glued K beside a word of temperature is still a kelvin temperature (invented test data)', () => {
+    // T = 4 K (SI Brochure, 9th ed., 2.3.1: the kelvin).
+    expect(extractFigures('The cryocooler holds the stage at 4K.').map((f) => [f.kind, f.si])).toEqual([['temperature', 4]]);
   });
 
   test('"a 2 A current" is a current, "Figure 2 A" is not', () => {

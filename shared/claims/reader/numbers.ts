@@ -11,8 +11,8 @@ import { THOUSAND_NOUNS, LABEL_WORDS } from '../figures-vocabulary';
 import { alt } from './context';
 import { readSuffix, unitAt, type Suffix } from './units';
 
-/** "5K cycles", "5 k hours": a thousand before a counted noun or a unit word. */
-const THOUSAND_RE = new RegExp(`(?:[^\\S\\n]?[kK](?=[^\\S\\n]+(?:${alt(THOUSAND_NOUNS)})(?![\\p{L}]))|[^\\S\\n]+thousand(?!\\p{L}))`, 'uy');
+/** "5K cycles", "5 k hours", "6K full cycles": a thousand before a counted noun or a unit word (a word of its kind between). */
+const THOUSAND_RE = new RegExp(`(?:[^\\S\\n]?[kK](?=[^\\S\\n]+(?:(?:full|charge|charging|operating|running|test|duty|load|power|flight|service|life|deep|complete|partial)[^\\S\\n]+)?(?:${alt(THOUSAND_NOUNS)})(?![\\p{L}]))|[^\\S\\n]+thousand(?!\\p{L}))`, 'uy');
 const MILLION_RE = /[^\S\n]+(million|billion|trillion|M(?=[^\S\n]+(?:cycles?|hours?|miles?|km|units?)))(?!\p{L})/uy;
 const MULTIPLIER: Record<string, number> = { million: 1e6, M: 1e6, billion: 1e9, trillion: 1e12 };
 
