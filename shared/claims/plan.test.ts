@@ -648,6 +648,13 @@ describe('more ways a text says nothing is thrown out, and an engine\'s conversi
     // 0.9e-3 / (60 / c) = 4 496.9 (F ≤ P/c).
     expectFinding(photon(text), 'breaks', 'ratio', 0.9e-3 / (60 / C), 0);
   });
+  it('"needing no working fluid", "with nothing leaving it": a poster among other contributions that carry propellant', () => {
+    const text =
+      'Contribution B presented an electrospray thruster that uses an ionic liquid as propellant, 1.2e-4 N per array.\n\n' +
+      "Contribution C reports that a flat capacitor produced a thrust of 2.4 × 10⁻³ N while drawing 1.5 × 10² W in a vacuum chamber, 'needing no working fluid'. If it pushes itself with nothing leaving it, it is bound by P/c.";
+    // 2.4e-3 / (150 / c) = 4 796.7 (F ≤ P/c, c exact: BIPM SI Brochure).
+    expectFinding(photon(text), 'breaks', 'ratio', 2.4e-3 / (150 / C), 0);
+  });
   it('"no propeller … nothing thrown out of the box" lets the boat of a comparison go', () => {
     const text = 'The box moves forward by itself, like a person in a boat pulling on the rope. With the motor taking 900 W, the box pushed with 18 N. There is no propeller and nothing thrown out of the box.';
     expect(photon(text)?.finding).toBe('breaks');
