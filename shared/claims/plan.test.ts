@@ -655,6 +655,11 @@ describe('more ways a text says nothing is thrown out, and an engine\'s conversi
     // 2.4e-3 / (150 / c) = 4 796.7 (F ≤ P/c, c exact: BIPM SI Brochure).
     expectFinding(photon(text), 'breaks', 'ratio', 2.4e-3 / (150 / C), 0);
   });
+  it('a general sentence on propulsion ("Electric propulsion is limited by its propellant supply") is no propellant of the device', () => {
+    const text = 'Electric propulsion is limited by its propellant supply. We report a closed cavity which needs no propellant; at the 250 W used this gave 0.3 N.';
+    // 0.3 / (250 / c) = 359 751 (F ≤ P/c).
+    expectFinding(photon(text), 'breaks', 'ratio', 0.3 / (250 / C), 0);
+  });
   it('"no propeller … nothing thrown out of the box" lets the boat of a comparison go', () => {
     const text = 'The box moves forward by itself, like a person in a boat pulling on the rope. With the motor taking 900 W, the box pushed with 18 N. There is no propeller and nothing thrown out of the box.';
     expect(photon(text)?.finding).toBe('breaks');
