@@ -438,6 +438,22 @@ describe('powers in and out said together, an energy of something else said apar
   });
 });
 
+describe('no input said in one paragraph, an output in another (issue 11)', () => {
+  it('a label for one model is no nil input of another model\'s stored energy', () => {
+    const text =
+      'Model S: stored energy 5 kWh; rated power 20 kW.\n\nModel M: stored energy 25 kWh; rated power 50 kW.\n\n' +
+      "Notes on model M. Journalists call it 'perpetual motion in a box', because a video of a spinning rotor with its cable unplugged circulated. The description is wrong: the rotor slows whenever energy is taken out.\n\nMaintenance: vacuum pump service every three years.";
+    const { checks } = runClaimChecks(extractFigures(text), { text });
+    expect(checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+  });
+  it('a manuscript whose apparatus section says it needs no supply and whose results give its output still breaks the first law', () => {
+    const text =
+      'Apparatus. The machine is self-running: once started by hand it needs no supply of any kind.\n\nResults. After a hand start it ran for 48 hours without interruption, delivering 250 W to the load bank throughout.';
+    // Balance = in − out = 0 − 250 W × 48 h = −4.32 × 10⁷ J (energy = power × time).
+    expectFinding(firstLaw(text), 'breaks', 'balance', -250 * 48 * 3600, 0);
+  });
+});
+
 describe('the rocket equation in a text on several craft (issue 11)', () => {
   it('takes the masses and exhaust speed from the paragraph that says the claimed Δv', () => {
     const text =

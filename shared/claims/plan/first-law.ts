@@ -114,7 +114,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
       plans.push({
         within,
         check: 'first-law',
-        uses: uniq([inF, outF, t !== undefined && !bothPower ? duration : undefined]),
+        uses: uniq([inF, outF, t !== undefined && !bothPower && (inF.kind === 'power' || outF.kind === 'power') ? duration : undefined]),
         inputs: (e) => ({ E_in: toEnergy(inF, e(inF))!, W_out: toEnergy(outF, e(outF))!, Q_out: '0 J', dE_stored: '0 J' }),
         why: bothPower ? 'The text gives the power drawn and the power delivered.' : firstLawWhy,
         assumptions: [...extra, 'Stored energy: unchanged over the run (the text does not say it ran down).'],

@@ -389,9 +389,21 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // A label alone ("free energy", "perpetual") beside a store the text names ("the bank stores 30 kWh",
     // "the battery holds 2.4 kWh"): the store explains the output, and the label is someone's word for it.
     const labelsOnly = matches.length > 0 && matches.every((x) => /^(?:free energy|perpetual)$/iu.test(x[0]));
-    const m = labelsOnly && STORE_NAMED_RE.test(text) ? null : (matches[0] ?? null);
     const hasThrust = drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power');
-    const out = drafts.find((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust)));
+    const outLike = (d: Draft) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust));
+    // In a text of several paragraphs, the words and the output in one paragraph: "perpetual motion in a
+    // box" in a note on one model is no nil input of another model's "stored energy 5 kWh" above it.
+    const several = /\n[^\S\n]*\n/u.test(text.trim());
+    const inParagraph = (x: RegExpExecArray) => {
+      const para = paragraphAround(text, x.index, x.index + x[0].length);
+      return drafts.find((d) => outLike(d) && d.role !== null && paragraphAround(text, d.start, d.end) === para);
+    };
+    // (Else, as in a manuscript whose apparatus section says "needs no supply" and whose results give
+    // "delivering 250 W", an output named as such anywhere; not a figure of no side.)
+    const paired = several ? matches.find((x) => inParagraph(x)) : undefined;
+    const first = paired ?? matches[0] ?? null;
+    const m = labelsOnly && STORE_NAMED_RE.test(text) ? null : first;
+    const out = m && paired ? inParagraph(m) : several ? drafts.find((d) => outLike(d) && d.role !== null) : drafts.find(outLike);
     const inputUnknown =
       /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data|figure|value|itself|current))*[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text) ||
       // "The seller gives no figure for what it takes in", "does not say how much it draws".

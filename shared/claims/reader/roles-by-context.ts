@@ -49,7 +49,7 @@ const TRAVEL_TIME: Record<string, number> = { second: 1, minute: 60, hour: 3600,
 /** The apparatus a device is tested on, whose mass is no craft's. */
 const APPARATUS_RE = /(?<!\p{L})(?:test[- ]stands?|stands?|test rigs?|rigs?|benches|bench|balances?|pendulums?|mounts?|mounting|tables?|jigs?|fixtures?|housings?|enclosures?|vacuum chambers?|chambers?|counterweights?|scales?)(?!\p{L})/iu;
 /** Before the energy a store holds: "the bank holds 50 kJ", "stores 13.5 kWh", "a capacity of 10 kWh". */
-const STORE_HOLDS_RE = /(?<!\p{L})(?:holds?|holding|stores?|stored|storing|contains?|capacity(?:[^\S\n]+of)?|rated(?:[^\S\n]+at)?|packs?)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere|up to)[^\S\n]+)?$/iu;
+const STORE_HOLDS_RE = /(?<!\p{L})(?:holds?|holding|stores?|stored|storing|contains?|capacity(?:[^\S\n]+of)?|rated(?:[^\S\n]+at)?|packs?|(?:stored|storable|usable|nominal)[^\S\n]+energy(?:[^\S\n]*[:=])?|energy[^\S\n]+stored(?:[^\S\n]*[:=])?)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere|up to)[^\S\n]+)?$/iu;
 /** Before what a store holds at the end of a charge: "the cell ends up holding 5 Wh". */
 const ENDS_UP_HOLDING_RE = /(?<!\p{L})(?:ends?|ended|ending)[^\S\n]+up[^\S\n]+(?:holding|with|storing|containing|at)[^\S\n]+(?:(?:about|some|roughly|only|just|a mere)[^\S\n]+)?$/iu;
 /** Before what a store gave back: "the pack delivered 168 kWh", "the cells then returned 40 Wh", "we got back 9 kWh". */
