@@ -438,6 +438,29 @@ describe('powers in and out said together, an energy of something else said apar
   });
 });
 
+describe('the rocket equation on masses said together (issue 11)', () => {
+  it('a wet mass and its propellant on one slide, not that wet mass against a dry mass in a later memo', () => {
+    const text =
+      "Slide 2. Vehicle: 2.2 t at lift-off, of which 1.6 t is propellant. Engine specific impulse 320 s.\n\nSlide 3. Performance: 9.5 km/s of Δv.\n\n" +
+      'Memo. With 2.2 t at lift-off and 0.6 t once the propellant is spent, the mass ratio is 3.67; the rocket equation gives about 4.1 km/s.';
+    // Tsiolkovsky: Δv = Isp·g0·ln(m0/m1) = 320 × 9.80665 × ln(2.2/0.6) = 4077 m/s; 9500/4077 = 2.33.
+    expectFinding(checkRun(text, 'rocket-equation'), 'breaks', 'dv_ratio', 9500 / (320 * 9.80665 * Math.log(2.2 / 0.6)), 4);
+  });
+  it('"12 kg fully fuelled and 10.5 kg once the propellant is spent" are the wet and dry masses', () => {
+    const masses = extractFigures('The proposal gives the mass as 12 kg fully fuelled and 10.5 kg once the propellant is spent.').filter((f) => f.kind === 'mass');
+    expect(masses.map((f) => [f.role, f.si])).toEqual([
+      ['wet', 12],
+      ['dry', 10.5],
+    ]);
+    const stage = extractFigures('The stage weighs 24 tonnes fully fuelled, of which 18 tonnes is liquid oxygen and methane.').filter((f) => f.kind === 'mass');
+    expect(stage.map((f) => [f.role, f.si])).toEqual([
+      ['wet', 24000],
+      ['propellant', 18000],
+      ['dry', 6000], // worked out: 24 t − 18 t
+    ]);
+  });
+});
+
 describe('no input said in one paragraph, an output in another (issue 11)', () => {
   it('a label for one model is no nil input of another model\'s stored energy', () => {
     const text =

@@ -20,10 +20,17 @@ export function planRocket(b: Basis): void {
   const counts = new Map<number, number>();
   for (const f of pieces) counts.set(key(f), (counts.get(key(f)) ?? 0) + 1);
   const home = claimed && key(claimed) !== -1 ? key(claimed) : [...counts].sort((a, b) => b[1] - a[1])[0]?.[0];
-  const pick = (fs: Figure[]) => fs.find((f) => key(f) === home) ?? fs[0];
-  const wet = pick(masses.filter((f) => f.role === 'wet'));
-  const dry = pick(masses.filter((f) => f.role === 'dry'));
-  const prop = pick(masses.filter((f) => f.role === 'propellant'));
+  const pick = (fs: Figure[]): Figure | undefined => fs.find((f) => key(f) === home) ?? fs[0];
+  let wet = pick(masses.filter((f) => f.role === 'wet'));
+  let dry = pick(masses.filter((f) => f.role === 'dry'));
+  let prop = pick(masses.filter((f) => f.role === 'propellant'));
+  // Two masses said together before two said apart: "2.2 t at lift-off, of which 1.6 t is propellant"
+  // on a slide, rather than that 2.2 t against "0.6 t once the propellant is spent" in a later memo.
+  if (wet && dry && prop && key(wet) !== key(dry)) {
+    if (key(wet) === key(prop)) dry = undefined;
+    else if (key(dry) === key(prop)) wet = undefined;
+  }
+  if (wet && dry) prop = undefined;
   const isp = pick(ofKind(figures, 'specific-impulse'));
   const exhaust = pick(speeds.filter((f) => f.role === 'exhaust'));
   const dv = claimed;

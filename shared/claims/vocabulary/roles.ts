@@ -112,7 +112,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
     after: [
       '(?:lift-?off|launch|initial|gross|total|wet|fuell?ed|starting|ignition|take-?off) mass', 'wet', 'fuell?ed', 'at launch', 'at lift-?off', 'at the start',
       'when (?:fully )?(?:fuell?ed|loaded)', ',[^\\S\\n]*(?:fully[^\\S\\n]+)?(?:fuell?ed|wet)(?=[^\\S\\n]*(?:[;.)\\n]|$))', 'at separation',
-      'initially', 'fully loaded', 'loaded', 'in all', 'in total', 'all told', 'gross', 'total',
+      'initially', 'fully loaded', 'fully fuell?ed', 'loaded', 'in all', 'in total', 'all told', 'gross', 'total',
     ],
   },
   {
@@ -123,7 +123,8 @@ export const MASS_ROLES: readonly RoleWords[] = [
       '(?:mass )?(?:after|once|when) (?:all )?(?:the |its )?(?:usable |useable )?(?:propellant|fuel)s? (?:is|are|has been|have been|was|were) (?:all )?(?:burn(?:ed|t)|used(?: up)?|spent|consumed|expended|gone)(?:[^\\S\\n]*[,:;]?[^\\S\\n]*(?:[\\w-]+ ){0,3}?[\\w-]*[:=,]?)?',
       'dry', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert', '(?:burn(?:s|ing|ed|t)?|drops?|dropping|dropped|falls?|falling|fell) (?:down )?to', 'ends? (?:up )?(?:at|with)', 'ending (?:up )?(?:at|with)'],
     after: ['(?:dry|empty|final|burn-?out|structural) mass', '\\((?:empty|dry|unfuell?ed|when empty)\\)', 'dry', 'empty',
-      'when (?:(?:its|the) tanks? (?:are|is) |it is )?(?:empty|dry)', ',[^\\S\\n]*(?:empty|dry)(?=[^\\S\\n]*(?:[;.)\\n]|$))', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end'],
+      'when (?:(?:its|the) tanks? (?:are|is) |it is )?(?:empty|dry)', ',[^\\S\\n]*(?:empty|dry)(?=[^\\S\\n]*(?:[;.)\\n]|$))', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end',
+      '(?:once|when|after) (?:all )?(?:the |its )?(?:usable |useable )?(?:propellant|fuel)s? (?:is|are|has been|have been|was|were) (?:all )?(?:burn(?:ed|t)|used(?: up)?|spent|consumed|expended|gone)'],
   },
   {
     role: 'propellant',
@@ -133,7 +134,8 @@ export const MASS_ROLES: readonly RoleWords[] = [
     ],
     after: [
       '(?:is|are|was|were|of) (?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass|nitrogen|helium|butane|propane|iodine|argon|ammonia)',
-      '(?:difference|rest|remainder|balance) (?:is|being|was) (?:propellant|fuel)', 'of (?:that|it|which|this)(?: being| is| was)? (?:propellant|fuel|reaction mass|xenon|krypton|argon|iodine|hydrazine|kerosene|water|nitrogen|helium|methane|hydrogen|ammonia|oxidi[sz]er)', 'of cold-gas propellant',
+      '(?:difference|rest|remainder|balance) (?:is|being|was) (?:propellant|fuel)', 'of (?:that|it|which|this)(?: being| is| was)? (?:propellant|fuel|reaction mass|xenon|krypton|argon|iodine|hydrazine|kerosene|water|nitrogen|helium|methane|hydrogen|ammonia|oxidi[sz]er)',
+      '(?:is|are|was|were) (?:liquid oxygen|LOX|liquid hydrogen|methane|oxidi[sz]er)', 'of cold-gas propellant',
       'of (?:[\\w-]+ )?(?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
       'of water', 'of oxidi[sz]er', 'of liquid', 'propellant', 'fuel', 'of bipropellant', 'of monopropellant',
       'of (?:[\\w-]+ )?(?:deuterium|tritium|helium-3|lithium|boron|uranium|plutonium|antimatter|fusion fuel|fissile fuel|pellets|solid fuel|solid propellant|grain|ice)(?: pellets| fuel| propellant)?',
