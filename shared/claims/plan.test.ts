@@ -699,6 +699,11 @@ describe('more ways a text says nothing is thrown out, and an engine\'s conversi
     // 0.3 / (250 / c) = 359 751 (F ≤ P/c).
     expectFinding(photon(text), 'breaks', 'ratio', 0.3 / (250 / C), 0);
   });
+  it('"pushes with pure light — no fuel", "never runs out of propellant": a lawful photon thruster below P/c is consistent', () => {
+    const text = "The module 'pushes a satellite with pure light — no fuel, no moving parts'. The datasheet gives a thrust of 1.1 µN at an electrical input of 400 W. A module that never runs out of propellant suits long missions.";
+    // 1.1e-6 / (400 / c) = 0.8244 (F ≤ P/c).
+    expectFinding(photon(text), 'consistent', 'ratio', 1.1e-6 / (400 / C), 4);
+  });
   it('"no propeller … nothing thrown out of the box" lets the boat of a comparison go', () => {
     const text = 'The box moves forward by itself, like a person in a boat pulling on the rope. With the motor taking 900 W, the box pushed with 18 N. There is no propeller and nothing thrown out of the box.';
     expect(photon(text)?.finding).toBe('breaks');
