@@ -317,8 +317,10 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     const ofThat = /^[^\S\n]+(?:that|this)(?!\p{L})/iu.test(after) && drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in' && d.end <= m!.index && d.start >= windowStart(text, m!.index, 0, 400));
     if (!ofThat && !/^[^\S\n]+(?:the|its|as much|as many|more)[^.;!?\n]{0,60}(?:input|consum\w*|draws?|uses?|takes?|supplied|put in|fed|it gets|goes in)/iu.test(after)) continue;
     if (drafts.some((d) => d.start <= m!.index && m!.index < d.end)) continue;
-    const value = MULTIPLE_VALUE[m[1].toLowerCase().replace('-', '')];
-    if (!value) continue;
+    const times = MULTIPLE_VALUE[m[1].toLowerCase().replace('-', '')];
+    if (!times) continue;
+    // "half as much again as the input": the input and half of it again (1.5), not half of it.
+    const value = /^[^\S\n]+as[^\S\n]+(?:much|many)(?:[^\S\n]+[\p{L}-]+)?[^\S\n]+again(?!\p{L})/iu.test(after) ? 1 + times : times;
     const sentence = sentenceAround(text, m.index, at);
     const heatPump = HEAT_PUMP_RE.test(sentence);
     const d: Draft = heatPump

@@ -166,3 +166,10 @@ test('a current takes the voltage said with it, not one already said with anothe
     ['out', 216.72],
   ]);
 });
+
+test('"half as much again as the input" is an output 1.5 times the input, not half of it (invented test data)', () => {
+  const gain = (text: string) => extractFigures(text).find((f) => f.kind === 'efficiency')?.si;
+  expect(gain('The claimed heat output is nearly half as much again as the input.')).toBeCloseTo(1.5, 12);
+  expect(gain('It gives twice as much as the input.')).toBeCloseTo(2, 12);
+  expect(gain('It gives half as much as the input.')).toBeCloseTo(0.5, 12);
+});
