@@ -704,6 +704,13 @@ describe('more ways a text says nothing is thrown out, and an engine\'s conversi
     // 1.1e-6 / (400 / c) = 0.8244 (F ≤ P/c).
     expectFinding(photon(text), 'consistent', 'ratio', 1.1e-6 / (400 / C), 4);
   });
+  it('a "laser-ablation-free" photon thruster that "does not need propellant": F ≤ P/c, and one figure said twice is no first-law ledger', () => {
+    const text =
+      "'Laser-ablation-free photon thruster demonstrator'. The demonstrator emits a beam with a total optical output of 2.0e3 W and recorded a force of 6.5e-6 N.\n\nTable 2: optical power 2.0e3 W; measured force 6.5e-6 N.\n\nSuch a thruster does not need propellant in the usual sense.";
+    // 6.5e-6 / (2000 / c) = 0.9743 (F ≤ P/c).
+    expectFinding(photon(text), 'consistent', 'ratio', 6.5e-6 / (2000 / C), 4);
+    expect(firstLaw(text)).toBeUndefined();
+  });
   it('"no propeller … nothing thrown out of the box" lets the boat of a comparison go', () => {
     const text = 'The box moves forward by itself, like a person in a boat pulling on the rope. With the motor taking 900 W, the box pushed with 18 N. There is no propeller and nothing thrown out of the box.';
     expect(photon(text)?.finding).toBe('breaks');

@@ -99,7 +99,12 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     if (duration && !bothPower) extra.push(`Over the stated ${duration.display}: power × time.`);
     else if (bothPower && !duration) extra.push('Powers compared over one second of steady running: the ratio does not depend on how long.');
     else if (bothPower && duration) extra.push(`Powers over the stated ${duration.display}.`);
-    if (toEnergy(inF, 'low') === null || toEnergy(outF, 'low') === null) {
+    // (One figure said twice, read once as what goes in and once as what comes out — "a total optical
+    // output of 2.0e3 W … Table 2: optical power 2.0e3 W" — is no ledger.)
+    const saidTwice = !inF.derived && !outF.derived && inF.text === outF.text && inF.si === outF.si && inF.start !== outF.start;
+    if (saidTwice) {
+      notes.push(`The same figure, “${inF.text}”, is read both as what goes in and as what comes out; check the part it plays before comparing the two.`);
+    } else if (toEnergy(inF, 'low') === null || toEnergy(outF, 'low') === null) {
       needs.push(need('first-law', ['how long the device ran (to compare a power with an energy)'], 'The text gives a power on one side and an energy on the other.', [inF, outF]));
     } else {
       // An efficiency of at most 100 % that the text states itself ("Efficiency 94.6 %", "a charging

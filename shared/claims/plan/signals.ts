@@ -68,7 +68,7 @@ const AIR_PUSHER_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?|ele
 
 /** A plain statement that nothing is thrown out ("with no propellant", "needs no propellant at all"). */
 const EXPLICIT_NO_PROPELLANT_RE =
-  /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected|comes out|(?:is )?thrown out)|without (?:throwing|expelling|ejecting|blowing) (?:anything|anything at all|any mass)(?: out)?|throws? nothing (?:out|away|overboard)|(?:needing |needs |requires |requiring |uses |using |with )?no working fluid|with nothing leaving(?: it)?|nothing leaving (?:it|the (?:device|craft|capacitor|box|drive)))(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected|comes out|(?:is )?thrown out)|without (?:throwing|expelling|ejecting|blowing) (?:anything|anything at all|any mass)(?: out)?|throws? nothing (?:out|away|overboard)|(?:does|do|did) not (?:need|use|require|carry|expel) (?:any )?propellant|(?:needing |needs |requires |requiring |uses |using |with )?no working fluid|with nothing leaving(?: it)?|nothing leaving (?:it|the (?:device|craft|capacitor|box|drive)))(?!\p{L})/iu;
 /** A propulsion word said not to be there ("no tether", "without a fan"), or a mass inside the device pushed on ("on a brass reaction mass"). */
 const NEGATED_WORD_ALL_RE =
   /(?<!\p{L})(?:(?:no|without(?: an?)?|never|nor)[^\S\n]+(?:any[^\S\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?|water[- ]?jets?|paddles?|screws?)|(?:on|against|between|onto)[^\S\n]+(?:a|an|the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?reaction mass(?:es)?)(?!\p{L})/giu;
@@ -121,7 +121,8 @@ export function readSignals(ctx: PlanContext): Signals {
   const text = ctx.text ?? '';
   const classes = ctx.classes ?? [];
   const top = classes[0];
-  let withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ').replace(NEGATED_PROPELLANT_ALL_RE, ' ').replace(NEGATED_WORD_ALL_RE, ' ');
+  // ("laser-ablation-free", "xenon-free": a word made free of is not there.)
+  let withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ').replace(NEGATED_PROPELLANT_ALL_RE, ' ').replace(NEGATED_WORD_ALL_RE, ' ').replace(/(?<![\p{L}-])[\p{L}-]+-free(?!\p{L})/giu, ' ');
   // A craft's word stands for its usual propulsor (a boat's screw, an aircraft's propeller): where the text
   // denies the propulsor and says plainly nothing is thrown out ("pushes a small boat … with no propeller
   // and no water jet"), the craft's word says nothing of propellant.
