@@ -477,6 +477,16 @@ describe('no input said in one paragraph, an output in another (issue 11)', () =
   });
 });
 
+describe('a heat pump checked on its stated COP (issue 11)', () => {
+  it('a gas boiler\'s efficiency in another paragraph is not checked as the heat pump\'s engine efficiency', () => {
+    const text =
+      "Two heating seasons of a wastewater heat pump with a 1.1 MW compressor. The board calls it 'a machine that gives back 3.1 units of heat for every unit of electricity it takes'; it is a heating COP of 3.1, measured with the outfall water leaving the evaporator at 8 °C and the network supplied at 45 °C, about a third of the Carnot limit.\n\n" +
+      "Comparison. A river-source heat pump elsewhere supplies water at 60 °C and achieves a COP of 2.7. A gas boiler, which the installation replaced, turns about 90 % of the fuel's heating value into heat.";
+    // Carnot heating COP = Th / (Th − Tc) = 318.15 / 37 = 8.599; 3.1 / 8.599 = 0.3605.
+    expectFinding(carnot(text), 'consistent', 'cop_heating_ratio', 3.1 / (318.15 / 37), 4);
+  });
+});
+
 describe('the rocket equation in a text on several craft (issue 11)', () => {
   it('takes the masses and exhaust speed from the paragraph that says the claimed Δv', () => {
     const text =

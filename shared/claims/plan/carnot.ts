@@ -140,8 +140,12 @@ export function planCarnot(b: Basis): HeatReading {
   const notAnEngine = !s.heatEngine && (HEAT_ONLY_RE.test(text) || ELECTRICAL_CONVERTER_RE.test(text) || NOT_HEAT_ENGINE_RE.test(text));
   // An efficiency said with a temperature difference is one of a machine working across it.
   const acrossDifference = ofKind(figures, 'temperature-difference').length > 0;
-  const engineEfficiency = efficiency && !notAnEngine && (s.heatEngine || temps.length >= 2 || acrossDifference) && !(efficiency.si > 1 && temps.length < 2);
   const copForCarnot = cop && (cop.role !== null || s.heatPump || s.cooling || temps.length >= 2 || !s.overUnity);
+  // (A heat pump checked on a COP above 1 that the text states is no heat engine: an efficiency beside it —
+  // "a gas boiler, which the installation replaced, turns about 90 % of the fuel's heating value into
+  // heat" — is another machine's.)
+  const engineEfficiency =
+    efficiency && !notAnEngine && (s.heatEngine || temps.length >= 2 || acrossDifference) && !(efficiency.si > 1 && temps.length < 2) && !(copForCarnot && movesHeat && cop !== undefined && cop.role !== null && !cop.derived && cop.si > 1);
   if (engineEfficiency && temps.length === 1 && SINGLE_RESERVOIR_RE.test(text)) {
     // "15 % efficiency from 20 °C room air alone, no cold sink": an engine on one reservoir (Th = Tc).
     const only = temps[0];
