@@ -487,6 +487,16 @@ describe('a heat pump checked on its stated COP (issue 11)', () => {
   });
 });
 
+describe('a store drained by a load, in a comparison of several stations (issue 11)', () => {
+  it('the draw over the run said as an energy is what came out; another station\'s solar panel is no source of this one', () => {
+    const text =
+      'Station A has an 18 kg mast kit with a 100 W solar panel and a small battery.\n\n' +
+      "Station C claims it will 'run for two weeks with no sun and no charging at all'. Its battery stores 2.4 kWh when full. The sensors and radio together draw an average of 6 W. Over two weeks at that rate the station uses a little over 2 kWh, which is less than the battery holds.";
+    // 2 kWh out of 2.4 kWh stored: over-unity ratio 2/2.4 = 0.833 (within the first law).
+    expectFinding(firstLaw(text), 'consistent', 'over_unity', 2 / 2.4, 6);
+  });
+});
+
 describe('the rocket equation in a text on several craft (issue 11)', () => {
   it('takes the masses and exhaust speed from the paragraph that says the claimed Δv', () => {
     const text =

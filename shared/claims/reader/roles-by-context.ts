@@ -176,7 +176,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   // load over a run. What the store holds is the input and what the load draws from it the output, so
   // the ledger asks whether the draw over the run fits in the store. Only with one store, one draw, a
   // run and nothing else of energy; the draw not where the store is being charged or something else may feed the load.
-  const stores = drafts.filter(
+  const storesSaid = drafts.filter(
     (d) =>
       d.kind === 'energy' &&
       !d.derived &&
@@ -188,12 +188,24 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     (d) => d.kind === 'power' && d.role === 'in' && !d.derived && (DRAW_LEAD_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || DRAW_AFTER_RE.test(text.slice(d.end, d.end + 30))),
   );
   // (Other energies only where they are what the load got: "delivered about 0.6 MJ to the LED".)
-  const others = drafts.filter((d) => energyLike(d) && d !== stores[0] && d !== draws[0]);
-  if (stores.length === 1 && draws.length === 1 && others.every((d) => d.derived || (d.role === 'out' && d.kind === 'energy')) && drafts.some((d) => d.kind === 'duration')) {
+  // (Not the draw over the run, said as an energy beside the word of the store: "over two weeks the station
+  // uses a little over 2 kWh, which is less than the battery holds".)
+  const runs = drafts.filter((d) => d.kind === 'duration' && d.role !== 'aside').map(siOf).filter((x): x is number => x !== null);
+  const drawn = draws.length === 1 ? (siOf(draws[0]) ?? NaN) : NaN;
+  const drawOverRun = (d: Draft) => d.kind === 'energy' && runs.some((t) => Math.abs((siOf(d) ?? NaN) - drawn * t) <= 0.05 * drawn * t);
+  const stores = storesSaid.filter((d) => !drawOverRun(d) || STORE_HOLDS_RE.test(text.slice(Math.max(0, d.start - 40), d.start)));
+  // (In a text of several paragraphs, what is said in the store's and the draw's paragraphs: another
+  // station's "100 W solar panel" in a paragraph of its own neither feeds this load nor is its energy.)
+  const ownParagraphs = new Set([...stores.slice(0, 1), ...draws.slice(0, 1)].map((d) => paragraphAround(text, d.start, d.end)));
+  const ofStore = (d: Draft) => ownParagraphs.has(paragraphAround(text, d.start, d.end));
+  const others = drafts.filter((d) => energyLike(d) && d !== stores[0] && d !== draws[0] && ofStore(d));
+  // (Or the draw over the run said as an energy: "6 W … over two weeks the station uses a little over 2 kWh".)
+  if (stores.length === 1 && draws.length === 1 && others.every((d) => d.derived || (d.role === 'out' && d.kind === 'energy') || drawOverRun(d)) && drafts.some((d) => d.kind === 'duration')) {
+    for (const d of others) if (drawOverRun(d)) d.role = 'out';
     stores[0].role = 'in';
     // (Where something else may feed the load, a solar panel named, the draw stays an input: no ledger,
     // rather than one with a store that is not the whole input.)
-    if (!OTHER_SOURCE_RE.test(text.replace(NEGATED_SOURCE_RE, ' '))) draws[0].role = 'out';
+    if (![...ownParagraphs].some((para) => OTHER_SOURCE_RE.test(para.replace(NEGATED_SOURCE_RE, ' ')))) draws[0].role = 'out';
   }
   // "The 100 W bench supply powers a 12 V, 2 A load": a supply's rating is what it can give, not a flow of
   // the load it feeds, whose own power the text states (current × voltage).
