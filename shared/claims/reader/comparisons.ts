@@ -36,6 +36,13 @@ export function relate(text: string, drafts: Draft[]): void {
   for (const d of supposed) {
     if (drafts.some((o) => o !== d && o.kind === d.kind && !o.derived && !supposed.includes(o) && !compared.includes(o))) compared.push(d);
   }
+  // "the shaft output … was printed as 105 hp. It should read 150 hp": the figure put in place of a
+  // superseded one takes its side where its own words give none.
+  for (const d of compared) {
+    if (d.role === null || d.role === 'aside' || !SUPERSEDED_AFTER_RE.test(text.slice(d.end, d.end + 60))) continue;
+    const next = drafts.find((y) => y.start >= d.end && y.start - d.end < 120 && y.kind === d.kind && !compared.includes(y));
+    if (next && next.role === null) next.role = d.role;
+  }
   if (compared.length === 0) return relateFigures(text, drafts);
   const rest = drafts.filter((d) => !compared.includes(d));
   relateFigures(text, rest);
@@ -136,8 +143,13 @@ function clauseAround(text: string, d: Draft): string {
   for (let k = 0; k + 1 < cuts.length; k++) if (at >= cuts[k] && at < cuts[k + 1]) return sentence.slice(cuts[k], cuts[k + 1]);
   return sentence;
 }
-/** Right after a figure: it was corrected to another ("was corrected to 4.5 %", "since revised down to 2 mN"). */
-const SUPERSEDED_AFTER_RE = /^[^.;!?\n]{0,30}?(?<!\p{L})(?:was|were|has been|have been|had been|since|later|then)?[^\S\n]*(?:corrected|revised|amended|lowered|reduced|cut|changed)[^\S\n]+(?:down[^\S\n]+)?to(?!\p{L})/iu;
+/**
+ * Right after a figure: it was corrected to another ("was corrected to 4.5 %", "since revised down to 2 mN"),
+ * or an erratum puts another in its place ("the value 2.4 W in Table 2 should read 4.2 W", "was printed as
+ * 0.30. It should read 3.0").
+ */
+const SUPERSEDED_AFTER_RE =
+  /^(?:[^.;!?\n]{0,30}?(?<!\p{L})(?:was|were|has been|have been|had been|since|later|then)?[^\S\n]*(?:corrected|revised|amended|lowered|reduced|cut|changed)[^\S\n]+(?:down[^\S\n]+)?to(?!\p{L})|(?:[^.;!?\n\d]|(?:Table|Fig\.?|Figure|Eq\.?|row|line|page|p\.)[^\S\n]*[\dA-Z]+){0,30}?(?:[.;][^\S\n]+(?:it|this|that|the (?:value|figure|number))[^\S\n]+)?(?<!\p{L})should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be)(?!\p{L}))/iu;
 /** A supposition: "if", "even if", "were it", "suppose", "supposing". */
 const SUPPOSITION_RE = /(?<!\p{L})(?:if|even if|were it|suppose|supposing|assuming|had it)(?!\p{L})/iu;
 /** What a supposed case would do to a law or a bound: "would break the first law", "would beat a photon rocket". */

@@ -55,6 +55,17 @@ const MASS_LEAD_RE = /(?<!\p{L})(?:ends?|ending|ended|finishes|finishing|burns? 
 /** After such a number: the clause ends ("… at twenty, and …", "… at 20.", "… at thirty-five)"). */
 const BARE_END_RE = /^[^\S\n]*(?:[,;.!?)\]—–]|and(?!\p{L})|$)/u;
 
+/** Just before an erratum's figure: "It should read", "should have read", "should be". */
+const SHOULD_READ_BEFORE_RE = /(?<!\p{L})should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be)[^\S\n]*[:"“'‘]?[^\S\n]*$/iu;
+
+/** A percentage an erratum puts in place of the one before it ("was printed as 45 %. It should read 4.5 %"): that one's kind. */
+function erratumPercent(text: string, start: number, drafts: Draft[]): { kind: FigureKind; role: FigureRole; factor: number; unit: string; assumption?: string; ofInput?: boolean; more?: boolean; derived?: string } | null {
+  if (!SHOULD_READ_BEFORE_RE.test(text.slice(Math.max(0, start - 40), start))) return null;
+  const prev = [...drafts].reverse().find((d) => d.end <= start && start - d.end < 120 && /%\s*$/u.test(text.slice(d.start, d.end)));
+  if (!prev || !(prev.kind === 'efficiency' || prev.kind === 'cop' || prev.kind === 'quantum-efficiency')) return null;
+  return { kind: prev.kind, role: prev.role ?? null, factor: 0.01, unit: '', assumption: 'A corrected figure, read as the kind of the one it replaces.' };
+}
+
 export function readFigures(text: string, restated: [number, number][]): Figure[] {
   lastRoleWords.end = 0;
   const tokens = tokenize(text);
@@ -195,7 +206,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         assumption = suffix.form === GLUED_CELSIUS ? '"C" read as degrees Celsius.' : suffix.form === GLUED_FAHRENHEIT ? '"F" read as degrees Fahrenheit.' : '"Degrees" read as degrees Celsius.';
       }
     } else if (suffix?.type === 'percent') {
-      const reading = readPercent(text, start, end, floor, t.num) ?? comparedPercent(text, start, end, drafts);
+      const reading = readPercent(text, start, end, floor, t.num) ?? comparedPercent(text, start, end, drafts) ?? erratumPercent(text, start, drafts);
       if (reading) {
         kind = reading.kind;
         role = reading.role;

@@ -173,3 +173,30 @@ test('"half as much again as the input" is an output 1.5 times the input, not ha
   expect(gain('It gives twice as much as the input.')).toBeCloseTo(2, 12);
   expect(gain('It gives half as much as the input.')).toBeCloseTo(0.5, 12);
 });
+
+describe('errata (invented test data)', () => {
+  test('"the value 2.4 W in Table 2 should read 4.2 W": the corrected figure counts, the misprint is set aside', () => {
+    const f = extractFigures('Erratum: the input power 2.4 W in Table 2 should read 4.2 W; the output stays 3.9 W.');
+    expect(f.map((x) => [x.text, x.role])).toEqual([
+      ['2.4 W', 'aside'],
+      ['4.2 W', 'in'],
+      ['3.9 W', 'out'],
+    ]);
+  });
+  test('"was printed as 45 %. It should read 4.5 %": the correction keeps the kind of the figure it replaces', () => {
+    const f = extractFigures('The engine between 300 °C and 40 °C: its efficiency was printed as 45 %. It should read 4.5 %.');
+    expect(f.filter((x) => x.kind === 'efficiency').map((x) => [x.role, x.si])).toEqual([
+      ['aside', 0.45],
+      [null, 0.045],
+    ]);
+    // The cold side stays a side: only the figure right before "should read" is superseded.
+    expect(f.find((x) => x.text === '40 °C')?.role).toBe('cold');
+  });
+  test('"the shaft output … was printed as 105 hp. It should read 150 hp": the correction takes the side of the misprint', () => {
+    // 150 hp × 745.699 872 W/hp = 111 855 W (NIST SP 811 Appendix B.8, horsepower, mechanical).
+    const f = extractFigures('The shaft output at the continuous rating was printed as 105 hp. It should read 150 hp.');
+    const out = f.find((x) => x.text === '150 hp');
+    expect(out?.role).toBe('out');
+    expect(out?.si).toBeCloseTo(150 * 745.6999, 1); // SP 811 prints the factor to seven digits
+  });
+});
