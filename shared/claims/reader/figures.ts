@@ -66,6 +66,14 @@ function erratumPercent(text: string, start: number, drafts: Draft[]): { kind: F
   return { kind: prev.kind, role: prev.role ?? null, factor: 0.01, unit: '', assumption: 'A corrected figure, read as the kind of the one it replaces.' };
 }
 
+/** A bare number an erratum puts in place of the one before it ("printed as 0.30. It should read 3.0"): that one's kind. */
+function erratumBare(text: string, start: number, drafts: Draft[]): { kind: FigureKind; role?: FigureRole; derived?: string; factor?: number } | null {
+  if (!SHOULD_READ_BEFORE_RE.test(text.slice(Math.max(0, start - 40), start))) return null;
+  const prev = [...drafts].reverse().find((d) => d.end <= start && start - d.end < 120);
+  if (!prev || !(prev.kind === 'efficiency' || prev.kind === 'cop' || prev.kind === 'quantum-efficiency') || /%\s*$/u.test(text.slice(prev.start, prev.end))) return null;
+  return { kind: prev.kind, role: prev.role === 'aside' ? undefined : (prev.role ?? undefined) };
+}
+
 export function readFigures(text: string, restated: [number, number][]): Figure[] {
   lastRoleWords.end = 0;
   const tokens = tokenize(text);
@@ -226,7 +234,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         if (upperNum !== undefined) upper = q(upperNum);
       }
     } else {
-      const bare = bareKind(text, start, t.numEnd, floor);
+      const bare = bareKind(text, start, t.numEnd, floor) ?? erratumBare(text, start, drafts);
       if (bare) {
         kind = bare.kind;
         role = bare.role;

@@ -192,6 +192,14 @@ describe('errata (invented test data)', () => {
     // The cold side stays a side: only the figure right before "should read" is superseded.
     expect(f.find((x) => x.text === '40 °C')?.role).toBe('cold');
   });
+  test('"the mean heating COP … (…) was printed as 0.30. It should read 3.0": the subject names the printed figure, the correction keeps its kind', () => {
+    const text = 'The mean heating COP of the water heaters at the rating point (air at 20 °C, water heated to 55 °C) was printed as 0.30. It should read 3.0.';
+    const cops = extractFigures(text).filter((x) => x.kind === 'cop');
+    expect(cops.map((x) => [x.role, x.si])).toEqual([
+      ['aside', 0.3],
+      ['heating', 3],
+    ]);
+  });
   test('"the shaft output … was printed as 105 hp. It should read 150 hp": the correction takes the side of the misprint', () => {
     // 150 hp × 745.699 872 W/hp = 111 855 W (NIST SP 811 Appendix B.8, horsepower, mechanical).
     const f = extractFigures('The shaft output at the continuous rating was printed as 105 hp. It should read 150 hp.');

@@ -200,12 +200,27 @@ export function readPercent(text: string, start: number, end: number, floor: num
 const MOVES_HEAT_RE = /(?<!\p{L})(heating|cooling)[^\S\n]+(?:COP|C\.O\.P\.|coefficient of performance)(?!\p{L})|(?<!\p{L})(?:COP|coefficient of performance)[^\S\n]+(?:for|in|when|of)[^\S\n]+(heating|cooling)(?!\p{L})|(?<!\p{L})(heating|cooling)[^\S\n]+mode(?!\p{L})/iu;
 
 /** The kind of a bare number, from the words before it; a gain or ratio from the words after. */
+/** Just before a figure as it was printed, given or stated: "was printed as", "is given as". */
+const PRINTED_AS_BEFORE_RE = /(?<!\p{L})(?:was|were|is|are|had been|has been)[^\S\n]+(?:printed|given|stated|reported|quoted|shown|typeset)[^\S\n]+as[^\S\n]*$/iu;
+/** Where the sentence of a place starts. */
+function sentenceStart(text: string, at: number): number {
+  const m = /[\s\S]*(?:[.!?]["”’')\]]*\s|\n)/u.exec(text.slice(0, at));
+  return m ? m[0].length : 0;
+}
+
 export function bareKind(text: string, start: number, end: number, floor: number): { kind: FigureKind; role?: FigureRole; derived?: string; factor?: number } | null {
   const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start);
   // An operand of a worked division or product ("η = 3.1/172 = 0.018"): a step, not a figure; the
   // result after "=" is read.
   if (/^[^\S\n]*[/×*÷][^\S\n]*\d/u.test(text.slice(end, end + 6)) || /\d[^\S\n]*[/×*÷][^\S\n]*$/u.test(before)) return null;
   if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before)) return { kind: 'cop' };
+  // "The mean heating COP of the units at the rating point (…) was printed as 0.30": the subject of the
+  // sentence names what a printed, given or stated figure is.
+  if (PRINTED_AS_BEFORE_RE.test(text.slice(Math.max(0, start - 30), start))) {
+    const subject = text.slice(sentenceStart(text, start), Math.min(start, sentenceStart(text, start) + 80));
+    if (/(?<!\p{L})(?:COP|coefficient of performance)(?!\p{L})/u.test(subject)) return { kind: 'cop', role: /cooling/iu.test(subject) ? 'cooling' : /heating/iu.test(subject) ? 'heating' : undefined };
+    if (/(?<!\p{L})efficiency(?!\p{L})/iu.test(subject)) return { kind: 'efficiency' };
+  }
   if (EER_BEFORE_RE.test(before)) return { kind: 'cop', role: 'cooling', factor: BTU_PER_H_IN_W, derived: 'COP = EER × 0.293 071 (BTU/h per watt to watts per watt)' };
   if (QE_BEFORE_RE.test(before) && /(?:[=:]|of|is|was|reaching|above|over|exceeding)[^\S\n]*$/i.test(before)) return { kind: 'quantum-efficiency' };
   if (EFFICIENCY_BARE_BEFORE_RE.test(before)) return { kind: 'efficiency' };
