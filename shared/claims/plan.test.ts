@@ -497,6 +497,24 @@ describe('a store drained by a load, in a comparison of several stations (issue 
   });
 });
 
+describe('a product family: the model said with its run, and the fuel it brings in (issue 11)', () => {
+  it('the power said with its own run is the one taken over it; "a chemical energy of 120 MJ" is what goes in', () => {
+    const text =
+      'H-500: continuous output 500 W.\n\nH-1100: continuous output 1.1 kW.\n\n' +
+      'A full cylinder pack holds hydrogen with a chemical energy of 120 MJ. At full output of 1.1 kW, the H-1100 runs for 15 hours on one pack.';
+    // 1.1 kW × 15 h = 59.4 MJ out of 120 MJ: over-unity ratio 0.495 (energy = power × time).
+    expectFinding(firstLaw(text), 'consistent', 'over_unity', (1100 * 15 * 3600) / 120e6, 6);
+  });
+  it('masses that cannot be one craft\'s are asked for, not run', () => {
+    const text =
+      'A support company delivered a trailer which carries 9 tonnes of liquid oxygen. A 300 g flight computer passed qualification.\n\n' +
+      'The upper stage is said to provide a velocity change of 9 km/s with an engine of specific impulse 450 s.';
+    const { checks, needs } = runClaimChecks(extractFigures(text), { text });
+    expect(checks.find((c) => c.check === 'rocket-equation')).toBeUndefined();
+    expect(needs.find((n) => n.check === 'rocket-equation')?.missing.join(' ')).toMatch(/masses of the craft/);
+  });
+});
+
 describe('the rocket equation in a text on several craft (issue 11)', () => {
   it('takes the masses and exhaust speed from the paragraph that says the claimed Δv', () => {
     const text =

@@ -39,7 +39,10 @@ export function planRocket(b: Basis): void {
     const missing: string[] = [];
     if (!isp && !exhaust) missing.push('the exhaust speed or the specific impulse');
     const twoMasses = [wet, dry, prop].filter(Boolean).length >= 2;
-    if (!twoMasses) missing.push(!wet && !dry ? 'the masses of the craft with and without its propellant' : 'the propellant mass (or the mass with or without it)');
+    // (Masses that cannot be one craft's — "a trailer carries 9 tonnes of liquid oxygen" and "a 300 g flight
+    // computer" in paragraphs on other companies — are no masses of the craft: they are asked for.)
+    const impossible = (wet && prop && siAt(prop, 'low') >= siAt(wet, 'high')) || (wet && dry && siAt(dry, 'low') >= siAt(wet, 'high'));
+    if (!twoMasses || impossible) missing.push(!wet && !dry ? 'the masses of the craft with and without its propellant' : impossible ? 'the masses of the craft with and without its propellant (the masses the text gives cannot be one craft\'s)' : 'the propellant mass (or the mass with or without it)');
     if (missing.length) {
       // (A speed change alone, said of a stage or a rocket, names the check too: "gives its payload 11 km/s of Δv".)
       if ([isp, exhaust, wet, dry, prop, dv].filter(Boolean).length >= 2 || (dv && (s.propellant || CRAFT_WORDS_RE.test(text)))) needs.push(need('rocket-equation', missing, 'A craft that throws out propellant can change its speed by at most v_e·ln(m0/m1).', uniq([isp, exhaust, wet, dry, prop, dv])));

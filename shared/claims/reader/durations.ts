@@ -62,14 +62,21 @@ export function relateDurations(text: string, drafts: Draft[]): void {
   const longest = [...durations].sort((a, b) => (siOf(b) ?? 0) - (siOf(a) ?? 0))[0];
   if (longest) {
     const powers = drafts.filter((d) => d.kind === 'power' && (d.role === 'in' || d.role === 'out'));
-    for (const p of powers) {
-      // Each power over the time said with it ("charged at 2 kW for 5 hours, then discharged at 1.5 kW
-      // for 6 hours"): the nearest duration in its clause, before the next power; else the longest run.
+    // Each power over the time said with it ("charged at 2 kW for 5 hours, then discharged at 1.5 kW
+    // for 6 hours"): the nearest duration in its clause, before the next power; else the longest run.
+    const ownOf = (p: Draft): Draft | undefined => {
       const nextPower = powers.find((q) => q.start > p.start);
       const prevPower = [...powers].reverse().find((q) => q.start < p.start);
-      const own =
+      return (
         durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && sameClause(text, d, p) && d.start - p.end < 80) ??
-        [...durations].reverse().find((d) => d.end <= p.start && (!prevPower || d.start > prevPower.end) && sameClause(text, d, p) && p.start - d.end < 60);
+        [...durations].reverse().find((d) => d.end <= p.start && (!prevPower || d.start > prevPower.end) && sameClause(text, d, p) && p.start - d.end < 60)
+      );
+    };
+    // (Powers said with their own time first: "At full output of 1.1 kW, the H-1100 runs for 15 hours"
+    // is the run's energy, not the "500 W" of another model listed above it, taken over those hours.)
+    const ordered = [...powers.filter((p) => ownOf(p)), ...powers.filter((p) => !ownOf(p))];
+    for (const p of ordered) {
+      const own = ownOf(p);
       const duration = durations.length > 1 && own ? own : longest;
       // "can deliver 2 MW for short periods", "peaks at 3 kW": a rating or a burst, not what it gave over the run.
       if (p.role === 'out' && BURST_RE.test(sentenceAround(text, p.start, p.end))) continue;
