@@ -749,6 +749,16 @@ describe('more ways a text says nothing is thrown out, and an engine\'s conversi
     expectFinding(photon(text), 'consistent', 'ratio', 6.5e-6 / (2000 / C), 4);
     expect(firstLaw(text)).toBeUndefined();
   });
+  it('a paragraph on a photon thruster is read on its own beside sails and tethers; a lifter pushing air is not a light source', () => {
+    const text =
+      'Solar sails. A sail pushes against sunlight.\n\nElectrodynamic tethers. A tape pushes against the magnetic field when a current flows.\n\n' +
+      'Photon thrusters. The module uses a bank of infrared lasers and is rated at 1.5 µN per kilowatt of electrical input.';
+    // 1.5e-6 N per 1000 W against 1/c per watt: 1.5e-9 / (1 / c) = 0.4497 (F ≤ P/c).
+    expectFinding(photon(text), 'consistent', 'ratio', 1.5e-9 * C, 4);
+    const lifter =
+      'The kettle draws 2.2 kW.\n\nThe lifter kit rises on its 30 kV supply; the manual gives 6 mN per watt and calls it field propulsion.\n\nThe lifter is pushing air, like a silent fan: an ion wind.';
+    expect(runClaimChecks(extractFigures(lifter), { text: lifter }).checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+  });
   it('"no propeller … nothing thrown out of the box" lets the boat of a comparison go', () => {
     const text = 'The box moves forward by itself, like a person in a boat pulling on the rope. With the motor taking 900 W, the box pushed with 18 N. There is no propeller and nothing thrown out of the box.';
     expect(photon(text)?.finding).toBe('breaks');

@@ -98,6 +98,11 @@ function onlyTheClaim(text: string, words: string): string {
 /** A plain statement that the device throws out nothing, as a paragraph's own words ("no exhaust" too). */
 const PLAIN_NO_PROPELLANT_RE = new RegExp(`${EXPLICIT_NO_PROPELLANT_RE.source}|(?<!\\p{L})(?:no|without(?: any)?) (?:exhaust|expelled mass)(?!\\p{L})`, 'iu');
 
+/** A device whose push is its own light: a photon thruster, lasers or emitters shining out of it. */
+const LIGHT_SOURCE_RE = /(?<!\p{L})(?:photon[- ](?:thrusters?|rockets?|drives?|propulsion)|lasers?|laser diodes?|light sources?|infrared emitters?|shines? (?:a|its) beam|beam of light)(?!\p{L})/iu;
+/** Words of a push on air (an ion wind, a breeze), anywhere in the text: no device of it is a light source's. */
+const AIR_WORDS_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|(?:pushing|pushes|push|moving|moves|drag(?:s|ging)?) (?:the )?(?:neutral )?air|breeze|downwash)(?!\p{L})/iu;
+
 /**
  * The paragraphs (blank-line separated) of a text that say plainly the device throws out nothing, as
  * [start, end) places: in a document on several devices (a tender's bids, a fair's stands), the
@@ -110,7 +115,10 @@ export function propellantFreeParagraphs(text: string): [number, number][] {
   for (let m = re.exec(text); ; m = re.exec(text)) {
     const end = m ? m.index : text.length;
     const para = text.slice(from, end);
-    if ((PLAIN_NO_PROPELLANT_RE.test(para) || NEGATED_PROPELLANT_RE.test(para)) && para.trim()) spans.push([from, end]);
+    // (Or a paragraph on a device that throws out nothing but light — "Photon thrusters … a bank of
+    // infrared lasers … 1.5 µN per kilowatt" — with no word of propellant of its own.)
+    const lightOnly = () => LIGHT_SOURCE_RE.test(para) && !AIR_WORDS_RE.test(text) && !readSignals({ text: para }).propellant;
+    if ((PLAIN_NO_PROPELLANT_RE.test(para) || NEGATED_PROPELLANT_RE.test(para) || lightOnly()) && para.trim()) spans.push([from, end]);
     if (!m) break;
     from = m.index + m[0].length;
   }
