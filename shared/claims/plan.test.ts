@@ -515,6 +515,20 @@ describe('a product family: the model said with its run, and the fuel it brings 
   });
 });
 
+describe('bounds worked out and stores\' rates (issue 11)', () => {
+  it('"for one kilowatt this is 3.34 µN" is the bound worked out; the claimed 3.1 µN per kW is checked', () => {
+    const text = 'The satellite steers by the recoil of its infrared laser diodes. Claim 3 recites a thrust of at least 3.1 µN per kW of optical power emitted. A beam pushes back on its source with P/c: for one kilowatt this is 3.34 µN.';
+    // 3.1e-6 / (1000 / c) = 0.9294 (F ≤ P/c).
+    expectFinding(photon(text), 'consistent', 'ratio', 3.1e-9 * C, 4);
+  });
+  it('a flywheel charged at 20 kW that can release 250 kW is asked for its energies, not said to break the first law', () => {
+    const text = 'The flywheel stores 50 kWh and can release it at 250 kW. It is charged from the grid overnight at a modest rate of 20 kW.';
+    const { checks, needs } = runClaimChecks(extractFigures(text), { text });
+    expect(checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+    expect(needs.find((n) => n.check === 'first-law')?.missing[0]).toMatch(/energy put into the store/);
+  });
+});
+
 describe('the rocket equation in a text on several craft (issue 11)', () => {
   it('takes the masses and exhaust speed from the paragraph that says the claimed Δv', () => {
     const text =

@@ -41,6 +41,9 @@ function heatEngineElectricIn(b: Basis, inF: Figure | undefined): boolean {
   return !HEAT_IN_NEAR_RE.test(near);
 }
 
+/** An energy store named: what it gives out over a cycle is bounded, not the rate it gives it at. */
+const STORE_RE = /(?<!\p{L})(?:flywheels?|batter(?:y|ies)|accumulators?|supercapacitors?|capacitor banks?|energy stores?|storage units?)(?!\p{L})/iu;
+
 /** An output said as a burst or a peak ("can deliver 2 MW for short periods"): no steady output over a run. */
 function saidInBursts(text: string, f: Figure): boolean {
   return f.start !== null && f.end !== null && !!text && BURST_RE.test(sentenceAround(text, f.start, f.end));
@@ -102,7 +105,12 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     // (One figure said twice, read once as what goes in and once as what comes out — "a total optical
     // output of 2.0e3 W … Table 2: optical power 2.0e3 W" — is no ledger.)
     const saidTwice = !inF.derived && !outF.derived && inF.text === outF.text && inF.si === outF.si && inF.start !== outF.start;
-    if (saidTwice) {
+    // A store (a flywheel, a battery) gives out what it took in at any rate: its discharge power above its
+    // charge power ("charged overnight at 20 kW … can release it at 250 kW") is no claim of more out than in.
+    const storeRates = bothPower && !duration && STORE_RE.test(text) && energy.some((f) => f.role !== 'aside');
+    if (storeRates) {
+      needs.push(need('first-law', ['the energy put into the store and the energy got out of it (or how long it charged and how long it gave out power)'], 'A store can give out power faster than it takes it in; only the energies over a full cycle are bounded.', [inF, outF]));
+    } else if (saidTwice) {
       notes.push(`The same figure, “${inF.text}”, is read both as what goes in and as what comes out; check the part it plays before comparing the two.`);
     } else if (toEnergy(inF, 'low') === null || toEnergy(outF, 'low') === null) {
       needs.push(need('first-law', ['how long the device ran (to compare a power with an energy)'], 'The text gives a power on one side and an energy on the other.', [inF, outF]));

@@ -55,7 +55,17 @@ export function planThrust(b: Basis): ThrustReading {
   const s = scoped?.s ?? b.s;
   const figures = scoped?.figures ?? b.figures;
   const power = scoped ? ofKind(figures, 'power') : b.power;
-  const thrust = ofKind(figures, 'thrust')[0];
+  // (A thrust within 1 % of P/c for a power said in its sentence is the bound worked out — "for one
+  // kilowatt this is 3.34 µN" — not a claim, where the text gives the claim another way.)
+  const thrusts = ofKind(figures, 'thrust');
+  const worked = (t: Figure) =>
+    t.start !== null &&
+    t.end !== null &&
+    power.some((p) => p.start !== null && p.si > 0 && Math.abs((t.si * C_LIGHT) / p.si - 1) <= 0.01 && windowStartOf(text, p.start) === windowStartOf(text, t.start!));
+  const claimedThrusts = thrusts.filter((t) => !worked(t));
+  // (And where the text works out the bound so, a thrust per power it gives is the claim before any other thrust.)
+  const boundWorked = claimedThrusts.length < thrusts.length && ofKind(figures, 'thrust-per-power').some((f) => !isTheBound(f));
+  const thrust = boundWorked ? undefined : (claimedThrusts[0] ?? thrusts[0]);
   // (A figure at the bound and said as one is passed over for another thrust per power the text gives;
   // alone, it may be a perfect photon thruster's claim: "the ideal is 3.3 µN per kW, and our array reaches it".)
   const perPowers = ofKind(figures, 'thrust-per-power').filter((f) => !isTheBound(f));
