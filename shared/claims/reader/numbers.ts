@@ -75,6 +75,9 @@ const FRACTION_VALUE: Record<string, number> = {
   'a tenth': 0.1, 'one tenth': 0.1, 'a hundred': 100, 'a thousand': 1000, 'a million': 1e6, 'a billion': 1e9, 'a trillion': 1e12,
 };
 
+/** Words of an unstated quantity that compromise reads as a number ("a few" as 3). */
+const VAGUE_QUANTITY_RE = /^(?:an?[^\S\n]+)?(?:few|several|couple|handful|some|many|numerous|various|multiple)(?:[^\S\n]+of)?[\s.,;:!?]*$/iu;
+
 /** Numbers in words, through compromise: start, end and value of each. */
 function wordNumbers(text: string): { start: number; end: number; value: number }[] {
   if (!WORD_NUMBER_HINT.test(text)) return [];
@@ -94,6 +97,8 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     const value = n.number?.num;
     if (typeof value !== 'number' || !Number.isFinite(value)) continue;
     if (value === 0 && !/(?<!\p{L})(?:zero|nought|naught|nil)(?!\p{L})/iu.test(raw)) continue; // "half an", read as 0
+    // "a few micronewtons", "several watts": compromise gives these a number (3) the text never gave.
+    if (VAGUE_QUANTITY_RE.test(raw.trim())) continue;
     const trimmed = raw.replace(/[\s\-.,;:!?]+$/u, ''); // (compromise may keep a full stop or a comma)
     out.push({ start: n.offset.start, end: n.offset.start + trimmed.length, value });
   }

@@ -1,0 +1,103 @@
+/**
+ * Figures of other business (the claim reader, shared/claims/reader.ts): in a document of several
+ * items — minutes with agenda items, a newsletter with several stories, a report with sections — the
+ * figures of an item that says nothing of a claim (the car park's 7 kW charging points, the new
+ * boiler's 18 kW, a freezer at −80 °C) are set aside, so that they are not taken for the claimed
+ * device's input, output or sides.
+ */
+import { windowStart } from './context';
+import { siOf, type Draft } from './draft';
+
+/** Words of a claim a check can be run on, or of the device's working. */
+const CLAIM_WORDS_RE =
+  /(?<!\p{L})(?:efficien\w*|COP|coefficients? of performance|thrust\w*|propel\w*|propulsion|reactionless|over-?unity|free energy|perpetual|self-(?:running|powered|sustaining|charging|looping)|Carnot|speed of light|faster than light|superluminal|delta-v|Δv|Δ-v|specific impulse|Isp|excess (?:heat|power|energy)|more (?:energy|power|heat|electricity) (?:out|than)|puts? out more|gives? (?:back|out) more|heat pumps?|engines?|motors?|generators?|thrusters?|drives?|harvesters?|rockets?|craft|spacecraft|stages?|Peltier|thermoelectric|Stirling|claims?|claimed|claiming|inputs?|outputs?|breakthrough|prototype|invent\w*|device)(?!\p{L})/giu;
+
+/** Nouns of machines: an item that names the same machine as an item with a claim is about it too. */
+const MACHINE_NOUNS = [
+  'pump', 'engine', 'motor', 'generator', 'alternator', 'dynamo', 'fridge', 'refrigerator', 'freezer', 'cooler', 'chiller',
+  'module', 'thruster', 'drive', 'toroid', 'transformer', 'circuit', 'coil', 'battery', 'batteries', 'cell', 'panel', 'heater',
+  'boiler', 'stove', 'furnace', 'turbine', 'wheel', 'flywheel', 'reactor', 'cavity', 'resonator', 'lifter', 'craft', 'rocket',
+  'stage', 'probe', 'vehicle', 'car', 'bike', 'lamp', 'LED', 'laser', 'converter', 'inverter', 'harvester', 'device', 'unit',
+  'machine', 'prototype', 'rig', 'apparatus', 'box', 'plant', 'kit', 'array', 'stack', 'loop', 'magnet', 'rotor', 'emitter',
+  'beam', 'antenna', 'capacitor', 'charger', 'compressor', 'collector', 'element', 'plate', 'bank', 'tank', 'sail', 'satellite', 'charging point', 'carport', 'solar', 'photovoltaic', 'PV', 'lift', 'elevator', 'ventilation', 'lighting', 'fan',
+];
+const MACHINE_NOUN_RE = new RegExp(`(?<!\\p{L})(?:${MACHINE_NOUNS.join('|')})(?:e?s)?(?!\\p{L})`, 'giu');
+const machineNouns = (block: string) => new Set([...block.matchAll(MACHINE_NOUN_RE)].map((m) => m[0].toLowerCase().replace(/(?<=[^s])e?s$|(?<=ss)es$/u, '')));
+
+/** Kinds of figure that only a claim's device has (a thrust, a COP, a Δv…). */
+const CLAIM_KINDS = new Set(['thrust', 'cop', 'efficiency', 'thrust-per-power', 'quantum-efficiency', 'specific-impulse', 'temperature-difference', 'speed', 'specific-power', 'gas-flow']);
+
+/** Kinds set aside when said in an item of other business. */
+const ASIDE_KINDS = new Set(['power', 'energy', 'temperature', 'mass', 'duration', 'current', 'voltage']);
+
+/** Where the blocks of the text start: after a blank line, or at a numbered item or a heading line. */
+function blockStarts(text: string): number[] {
+  const starts = [0];
+  const re = /\n[^\S\n]*\n+|\n(?=[^\S\n]*(?:(?:item|agenda item|point)[^\S\n]+)?\d{1,2}[.)][^\S\n]+\p{Lu})/giu;
+  for (const m of text.matchAll(re)) starts.push(m.index! + m[0].length);
+  return [...new Set(starts)].sort((a, b) => a - b);
+}
+
+export function asideOtherTopics(text: string, drafts: Draft[]): void {
+  const starts = blockStarts(text);
+  if (starts.length < 3) return;
+  const blockOf = (at: number) => {
+    let k = 0;
+    while (k + 1 < starts.length && starts[k + 1] <= at) k++;
+    return k;
+  };
+  const score = starts.map(() => 0);
+  for (let k = 0; k < starts.length; k++) {
+    const block = text.slice(starts[k], starts[k + 1] ?? text.length);
+    score[k] += [...block.matchAll(CLAIM_WORDS_RE)].length;
+  }
+  for (const d of drafts) if (d.role !== 'aside' && CLAIM_KINDS.has(d.kind)) score[blockOf(d.start)] += 2;
+  // (A block that states both what goes in and what comes out is a ledger of a device's working.)
+  for (let k = 0; k < starts.length; k++) {
+    const own = drafts.filter((d) => blockOf(d.start) === k);
+    if (own.some((d) => d.role === 'in') && own.some((d) => d.role === 'out')) score[k] += 2;
+  }
+  if (!score.some((s) => s > 0)) return;
+  const nouns = starts.map((from, k) => machineNouns(text.slice(from, starts[k + 1] ?? text.length)));
+  const claimNouns = new Set(nouns.flatMap((n, k) => (score[k] > 0 ? [...n] : [])));
+  // An item of other business: no word of a claim, no figure only a claim's device has, and a machine of
+  // its own, none of those named in an item that has them.
+  const other = score.map((s, k) => s === 0 && nouns[k].size > 0 && ![...nouns[k]].some((n) => claimNouns.has(n)));
+  for (const d of drafts) {
+    if (d.role !== null || !ASIDE_KINDS.has(d.kind) || d.derived) continue;
+    if (other[blockOf(d.start)]) d.role = 'aside';
+  }
+}
+
+/** c in m/s (BIPM SI Brochure, 9th edition: exact). */
+const C = 299792458;
+/** Words of a limit said before a figure in its sentence ("at most", "the ideal", "would be limited to"). */
+const LIMIT_BEFORE_RE =
+  /(?<!\p{L})(?:the most|at most|at best|no more than|limit(?:ed)?|bound|maximum|ceiling|ideal|perfect|expected|predicts?|would (?:be|give|get|allow)|could (?:only )?(?:give|get|produce)|can only|allows?|P\/c|1\/c|light|photons?)(?!\p{L})/iu;
+
+/** Words of a measured or claimed figure before it in its sentence ("the measured thrust … was 16 µN"). */
+const MEASURED_BEFORE_RE = /(?<!\p{L})(?:measur\w*|recorded|observed|readings?|reported|claim\w*|achiev\w*|reach\w*|demonstrat\w*|obtained|we (?:got|saw|found))(?!\p{L})/iu;
+
+/**
+ * The photon bound worked out in the text ("10 kW of light can give at most 33.4 µN", "1/c newtons per
+ * watt, about 3.3 µN per kW"): a thrust within 1 % of P/c for a power said in its sentence, or a thrust
+ * per power within 1 % of 1/c (within 5 % when said as a limit), is set aside where the text gives another
+ * thrust or thrust per power — that one is the claim.
+ */
+export function asideWorkedBounds(text: string, drafts: Draft[]): void {
+  const sentenceStart = (at: number) => windowStart(text, at, 0, 400);
+  const near = (x: number, y: number, within: number) => y > 0 && Math.abs(x / y - 1) <= within;
+  const bound = (d: Draft): boolean => {
+    const si = siOf(d);
+    if (si === null || d.role === 'aside') return false;
+    const said = LIMIT_BEFORE_RE.test(text.slice(sentenceStart(d.start), d.start));
+    if (d.kind === 'thrust-per-power') return near(si, 1 / C, 0.01) || (said && near(si, 1 / C, 0.05));
+    if (d.kind !== 'thrust' || MEASURED_BEFORE_RE.test(text.slice(sentenceStart(d.start), d.start))) return false;
+    const from = sentenceStart(d.start);
+    return drafts.some((p) => p.kind === 'power' && p.role !== 'aside' && sentenceStart(p.start) === from && near(si, (siOf(p) ?? 0) / C, said ? 0.02 : 0.01));
+  };
+  const thrusts = drafts.filter((d) => (d.kind === 'thrust' || d.kind === 'thrust-per-power') && d.role !== 'aside');
+  const bounds = thrusts.filter(bound);
+  if (bounds.length === 0 || bounds.length === thrusts.length) return;
+  for (const d of bounds) d.role = 'aside';
+}
