@@ -9,7 +9,7 @@ import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/qu
 import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
 import { comparedPercent, relate } from './comparisons';
-import { BEFORE_WINDOW, HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
+import { BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
 import { asideOtherTopics, asideWorkedBounds } from './topics';
 import type { Draft } from './draft';
 import { bareKind, GAIN_PER_UNIT_RE, PER_UNIT_QUANTITY, ISP_AFTER_RE, ISP_BEFORE_RE, MULTIPLE_VALUE, MULTIPLE_WORD_RE, readPercent, TEMPERATURE_CONTEXT_RE } from './kinds';
@@ -73,6 +73,29 @@ function erratumBare(text: string, start: number, drafts: Draft[]): { kind: Figu
   const prev = [...drafts].reverse().find((d) => d.end <= start && start - d.end < 120);
   if (!prev || !(prev.kind === 'efficiency' || prev.kind === 'cop' || prev.kind === 'quantum-efficiency') || /%\s*$/u.test(text.slice(prev.start, prev.end))) return null;
   return { kind: prev.kind, role: prev.role === 'aside' ? undefined : (prev.role ?? undefined) };
+}
+
+/** Words of heat moved rather than made ("moves three times more heat than it uses"). */
+const MOVES_HEAT_RE = /(?<!\p{L})(?:mov|pump|shift|remov|extract|transferr?|lift|draw|pull)(?:s|es|ed|ing)?[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}?heat(?!\p{L})/iu;
+
+/**
+ * A gain of heat over work ("three times as much heat as the electricity it uses") is a COP: a heating
+ * COP for a heat pump named in its sentence, or where the sentence speaks of heat moved and the paragraph
+ * names a heat pump; a cooling COP where it speaks of heat moved and the paragraph names a fridge or a
+ * cooler (and no heat pump).
+ */
+function gainAsCop(text: string, start: number, end: number): { role: 'heating' | 'cooling'; assumption: string } | null {
+  const sentence = sentenceAround(text, start, end);
+  const heating = { role: 'heating' as const, assumption: "A heat pump's heat out as a multiple of its work in: read as a heating COP." };
+  if (HEAT_PUMP_RE.test(sentence)) return heating;
+  if (!MOVES_HEAT_RE.test(sentence)) return null;
+  const paragraph = paragraphAround(text, start, end);
+  const pump = HEAT_PUMP_RE.test(paragraph);
+  const cooler = COOLING_MACHINE_RE.test(paragraph);
+  if (pump && !cooler) return heating;
+  if (cooler && !pump) return { role: 'cooling', assumption: 'The heat a cooling machine moves as a multiple of its work in: read as a cooling COP.' };
+  // (Heat moved by a machine the text does not name: not energy made, so not an efficiency either.)
+  return { role: 'heating', assumption: 'Heat moved as a multiple of the work in, by a machine the text does not name: read as a heating COP.' };
 }
 
 export function readFigures(text: string, restated: [number, number][]): Figure[] {
@@ -243,11 +266,12 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         quantity = scaled(t.num, bare.factor);
         if (upperNum !== undefined) upper = scaled(upperNum, bare.factor);
         // "three times as much heat as the electricity it uses", for a heat pump: a heating COP.
-        if (kind === 'efficiency' && derived && HEAT_PUMP_RE.test(sentenceAround(text, start, end))) {
+        const asCop = kind === 'efficiency' && derived ? gainAsCop(text, start, end) : null;
+        if (asCop) {
           kind = 'cop';
-          role = 'heating';
+          role = asCop.role;
           derived = undefined;
-          assumption = 'A heat pump\'s heat out as a multiple of its work in: read as a heating COP.';
+          assumption = asCop.assumption;
         }
       }
     }
@@ -341,11 +365,10 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     if (!times) continue;
     // "half as much again as the input": the input and half of it again (1.5), not half of it.
     const value = /^[^\S\n]+as[^\S\n]+(?:much|many)(?:[^\S\n]+[\p{L}-]+)?[^\S\n]+again(?!\p{L})/iu.test(after) ? 1 + times : times;
-    const sentence = sentenceAround(text, m.index, at);
-    const heatPump = HEAT_PUMP_RE.test(sentence);
-    const d: Draft = heatPump
-      ? { start: m.index, end: at, kind: 'cop', quantity: String(value), role: 'heating', assumption: 'A heat pump\'s heat out as a multiple of its work in: read as a heating COP.' }
-      : { start: m.index, end: at, kind: 'efficiency', quantity: String(value), role: null, derived: 'output as a multiple of the input' };
+    const asCop = gainAsCop(text, m.index, at);
+    const d: Draft = asCop
+      ? { start: m.index, end: at, kind: 'cop', quantity: String(value), role: asCop.role, assumption: asCop.assumption }
+        : { start: m.index, end: at, kind: 'efficiency', quantity: String(value), role: null, derived: 'output as a multiple of the input' };
     const pos = drafts.findIndex((x) => x.start > m!.index);
     if (pos < 0) drafts.push(d);
     else drafts.splice(pos, 0, d);

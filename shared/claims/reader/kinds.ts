@@ -29,10 +29,12 @@ const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})
 const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');
 /** "efficiency … 45%": the keyword, then up to 60 characters without digits or a sentence break. */
 // (", measured as electrical output over heat absorbed at the head, was about 27 %": a clause set off by commas between.)
-const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip)(?!\p{L})((?:[^\S\n]*,[^,\d.;!?\n]{3,90}[,:]|[^\S\n]*[—–][^—–\d.;!?\n]{3,100}[—–])?[^\d.;!?\n]{0,60})$/iu;
+const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip|AFUE)(?!\p{L})((?:[^\S\n]*,[^,\d.;!?\n]{3,90}[,:]|[^\S\n]*[—–][^—–\d.;!?\n]{3,100}[—–])?[^\d.;!?\n]{0,60})$/iu;
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
 const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)|round[- ]?trip(?:[^\S\n]+efficiency)?)(?!\p{L})/iuy;
+/** "26.1 % for a lab silicon cell", "24 % from the new perovskite tandem module": a photovoltaic cell's efficiency. */
+const PV_CELL_AFTER_RE = /[^\S\n]*(?:for|from|by|on)[^\S\n]+(?:(?:an?|the|its|our|their)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:solar|silicon|photovoltaic|PV|perovskite|tandem|thin-film|organic)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,1}?(?:cells?|modules?|panels?)(?!\p{L})/iuy;
 /** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */
 const PERCENT_OF_HEAT_RE =
   /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:[\p{L}-]+[^\S\n]+)?(?:light|radiation|power|energy)|radiant (?:power|energy|heat)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
@@ -53,7 +55,7 @@ const percentOfHeatThrough = (text: string, end: number): boolean => {
 const SHARE_AS_WORK_RE =
   /[^\S\n]*(?:(?:net|gross|conversion|thermal|electrical|electric|overall|cycle|first-law|brake)(?!\p{L})|[,)]?[^\S\n]*(?:leaves|comes out|emerges|is delivered|is returned|appears|ends up)[^\S\n]+as[^\S\n]+(?:useful[^\S\n]+)?(?:shaft[^\S\n]+|mechanical[^\S\n]+|electrical[^\S\n]+)?(?:work|electricity|power|motion))/iuy;
 const SPEED_OF_LIGHT_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light|[^\S\n]*of[^\S\n]+c(?!\p{L})|[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?light[- ]speed/iuy;
-export const TEMPERATURE_CONTEXT_RE = /(?<!\p{L})(?:temperatures?|heat(?:ed|s|ing)?|hot|hotter|warm(?:er|s|ed)?|cold|colder|cool(?:er|s|ed)?|ambient|boil\w*|freez\w*|Celsius|Fahrenheit|thermal|room|outdoor|outside|air|water|collector)(?!\p{L})/iu;
+export const TEMPERATURE_CONTEXT_RE = /(?<!\p{L})(?:temperatures?|heat(?:ed|s|ing)?|hot|hotter|warm(?:er|s|ed)?|cold|colder|cool(?:er|s|ed)?|ambient|boil\w*|freez\w*|Celsius|Fahrenheit|thermal|room|outdoor|outside|indoor|inside|air|water|collector|cooling|chill\w*|COP|radiators?|ground|loop|cabinet|kitchen|brine|evaporat\w*|condens\w*|pond|lake|river|fridge|refrigerat\w*)(?!\p{L})/iu;
 /** "Isp 320 s", "Isp (vac): 320 s", "specific impulse (sea level) of 280 s". */
 // ("specific impulse in vacuum is 65 s", "Isp at sea level of 250 s", "the thruster's specific impulse of the system is".)
 export const ISP_BEFORE_RE = new RegExp(
@@ -78,7 +80,7 @@ const SMALL_NUMBER: Record<string, number> = { two: 2, three: 3, four: 4, five: 
 const GAIN_BEFORE_RE =
   /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
 const TIMES_AFTER_RE =
-  /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical)[^\S\n]+)?(?:input|consumption|in(?!\p{L})|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in|what (?:it|the [\p{L}-]+) (?:is fed|takes|draws|uses|consumes|gets|receives|is given))/iuy;
+  /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical|electricity|electric power|work)[^\S\n]+)?(?:input|consumption|in(?!\p{L})|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in|what (?:it|the [\p{L}-]+) (?:is fed|takes|draws|uses|consumes|gets|receives|is given))/iuy;
 const TIMES_BEFORE_RE = /(?<!\p{L})(?:output|yield|gain|returns?|delivers?|produces?|generates?|puts? out|gives?(?: back| out)?|makes|provides|supplies|sends? back)(?:[^\S\n]+(?:is|of|was|are|reaches|reached|power|energy|exactly|about|roughly|some|nearly))*[^\S\n]*$/iu;
 /** "the output exceeds the input by a factor of 1.5", "output is higher than input by a factor of 2". */
 const FACTOR_BEFORE_RE =
@@ -153,7 +155,8 @@ export function readPercent(text: string, start: number, end: number, floor: num
   EFFICIENCY_AFTER_RE.lastIndex = end;
   PERCENT_OF_HEAT_RE.lastIndex = end;
   SHARE_AS_WORK_RE.lastIndex = end;
-  const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text) || percentOfHeatThrough(text, end);
+  PV_CELL_AFTER_RE.lastIndex = end;
+  const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text) || PV_CELL_AFTER_RE.test(text) || percentOfHeatThrough(text, end);
   // (A clause set off by commas may take the efficiency word further back than the usual window.)
   const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before) ?? EFFICIENCY_PERCENT_BEFORE_RE.exec(text.slice(Math.max(floor, start - BEFORE_WINDOW - 90), start));
   // "Ammonia–water cycle engine, 19 % at a 120 °C heat source": a percentage said right after a heat

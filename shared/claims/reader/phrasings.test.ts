@@ -712,3 +712,54 @@ test('a COP and its value with the test it was measured over between them: "heat
   expect(extractFigures('Measured heating COP over the test week: 3.9')).toMatchObject([{ kind: 'cop', role: 'heating', si: 3.9 }]);
   expect(extractFigures('The COP at the rating point: 4.2')).toMatchObject([{ kind: 'cop', si: 4.2 }]);
 });
+
+describe('short and clipped claims (invented test data)', () => {
+  const read = (text: string) => extractFigures(text).map((f) => [f.kind, f.role, f.si]);
+
+  test('a glued "C" read as Celsius where the words are of a heating or cooling loop ("ground loop ~8C, radiators at 40C"); not a charge rate', () => {
+    // T(K) = t(°C) + 273.15 (SI Brochure, 9th ed., 2.3.1).
+    expect(read('Expect a COP of about 4.2 once it settles, ground loop ~8C, radiators at 40C.')).toEqual([
+      ['cop', 'heating', 4.2],
+      ['temperature', 'cold', expect.closeTo(281.15, 9)],
+      ['temperature', 'hot', expect.closeTo(313.15, 9)],
+    ]);
+    expect(read('The pack charges at 2C and holds 4C discharge for a minute.').filter(([k]) => k === 'temperature')).toEqual([]);
+  });
+
+  test('heat moved as a multiple of the work: a cooling COP on a fridge, a heating COP where no machine is named, never an efficiency', () => {
+    expect(read('Fridge spec card | Cabinet 4C, kitchen 25C | Draws 90 W running. Moves three times more heat than the power it uses.')).toContainEqual(['cop', 'cooling', 3]);
+    expect(read('The unit moves three times more heat than the electricity it uses.')).toEqual([['cop', 'heating', 3]]);
+    expect(read('The box gives three times more energy than it uses.')).toEqual([['efficiency', null, 3]]);
+  });
+
+  test('"Annual use 160 kWh" is what it takes in; "from its 2 kWh cells" is the store it runs from', () => {
+    // 1 kWh = 3.6 MJ (SI Brochure, Table 8).
+    expect(read('Draws 90 W running | Annual use 160 kWh')).toEqual([
+      ['power', 'in', 90],
+      ['energy', 'in', 576e6],
+    ]);
+    expect(read('It runs a 5 W lantern nonstop from its 2 kWh cells.')).toContainEqual(['energy', 'in', 7.2e6]);
+  });
+
+  test('"a 5 °C gap" is a temperature difference, and gives the other side', () => {
+    const f = read("Pond engine runs on a 5 °C gap\nIt sits between pond water at 18 °C and the cooler air above it.");
+    expect(f[0]).toEqual(['temperature-difference', null, 5]);
+    expect(f).toContainEqual(['temperature', 'cold', expect.closeTo(286.15, 9)]);
+    expect(read('The air gap of 5 mm at 20 °C.').filter(([k]) => k === 'temperature-difference')).toEqual([]);
+  });
+
+  test('percentages of efficiency by their words: AFUE, a photovoltaic cell\'s record', () => {
+    expect(read('Hearthmark 95 gas furnace | AFUE 95% | Two-stage burner')).toEqual([['efficiency', null, expect.closeTo(0.95, 12)]]);
+    // (A store the energy goes into is no input the efficiency is a share of: no output is worked out from it.)
+    expect(read('The converter is 90 % efficient and sends the energy into its 60 kWh pack.').filter(([, role]) => role === 'out')).toEqual([]);
+    expect(read('The converter is 90 % efficient and draws 60 kWh a day.')).toContainEqual(['energy', 'out', expect.closeTo(194.4e6, 3)]);
+    expect(read('Record 26.1% for lab silicon cell')).toEqual([['efficiency', null, expect.closeTo(0.261, 12)]]);
+    expect(read('Battery cell at 80% charge.')).toEqual([]);
+  });
+
+  test('"a 600 MW coal-fired unit" is a generating rating (out); "9 W from nowhere" is the excess claimed', () => {
+    expect(read('Retrofitting a 600 MW coal-fired unit to 565 °C main steam')[0]).toEqual(['power', 'out', 6e8]);
+    expect(read("Input 12V/3A from the bench supply, output lights a 45 W halogen. That's 9 W from nowhere.")).toContainEqual(['power', 'excess', 9]);
+    expect(read('The panel gives 5 W of free electricity from the sun.')).toEqual([['power', 'out', 5]]);
+  });
+});

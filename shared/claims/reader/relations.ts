@@ -363,6 +363,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       if (inputs.length !== 1 || drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess'))) continue;
       const [input, e, n] = [inputs[0], siOf(eta)!, siOf(inputs[0])];
       if (n === null || n === 0) continue;
+      // (Not a store the share goes into: "recovers 70 % of the braking energy back into its 60 kWh pack".)
+      if (/(?<!\p{L})into[^\S\n]+(?:(?:the|its|their|a|an)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, input.start - 20), input.start))) continue;
       const unit = FIGURE_SI_UNIT[kind];
       const anchor = eta.start > input.start ? eta : input;
       insertAfter(drafts, anchor, {

@@ -16,7 +16,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'excess',
     before: ['excess', 'surplus', 'extra', 'net gain', 'net surplus', 'anomalous', 'unexplained', 'over-unity', 'overunity', '(?:output|out) exceeds? (?:the |its )?(?:input|consumption|supply) by', 'exceeds? (?:the |its )?(?:input|consumption|supply) by'],
-    after: ['excess', 'surplus', 'extra', 'more(?= than)', 'more(?= (?:[\\p{L}-]+ ){1,3}?than (?:that|this|it|what (?:it|they) (?:draws?|takes?|uses?|consumes?|gets?))(?!\\p{L}))', 'above(?= (?:the|its) input)', 'in excess', 'net gain'],
+    after: ['excess', 'surplus', 'extra', '(?:from|out of) (?:nowhere|thin air|nothing)', 'more(?= than)', 'more(?= (?:[\\p{L}-]+ ){1,3}?than (?:that|this|it|what (?:it|they) (?:draws?|takes?|uses?|consumes?|gets?))(?!\\p{L}))', 'above(?= (?:the|its) input)', 'in excess', 'net gain'],
   },
   {
     role: 'in',
@@ -27,9 +27,9 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?',
       // "hydrogen with a chemical energy of 120 MJ", "fuel energy: 40 MJ": what the fuel brings in.
       '(?:chemical|fuel) energy(?: content)?(?: of| is| was|:)?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
-      'mains', 'uses', 'used', 'using', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
+      'mains', 'uses', 'used', 'using', '(?:annual|yearly|daily|weekly|monthly|energy|electricity|power|standby) use(?: of| is| was|:)?', 'requir(?:e|es|ed|ing)', 'absorb(?:s|ed|ing)?', 'takes', 'taking', 'powered by',
       '(?:for|per) (?:every|each)', 'put in', '(?:is|was|were|being)? ?given(?= *$)', '(?:electricity|electric(?:al)?(?: power| energy)?|power|energy|work|fuel|gas|drive) in[:=]?(?=[^\\S\\n]*$)', 'charged (?:with|at)', 'charging at', 'charged', 'fed (?:with|by|from)', '(?:is|are|was|were|being) fed', 'drive power', 'driving power', 'uptake', 'power uptake', 'intake', 'fed with', 'fed by', // ("from the 2 kW supply", not "calculated from the temperature rise of the salt, was 41 MJ".)
-      'from a(?=(?:[^\\S\\n]+[\\p{L}\\d.,-]+){0,2}[^\\S\\n]*$)', 'from the(?=(?:[^\\S\\n]+[\\p{L}\\d.,-]+){0,2}[^\\S\\n]*$)', 'from (?:about|around|roughly|some|nearly|approximately|approx\\.|ca\\.|~)', 'for (?:only |just |a mere |about |roughly )?(?=$)', '(?<![\\w-])charge(?=[^\\S\\n]*$)', '(?:start-?up|initial|one-?time|priming|first) charge of', 'comes? from (?:its|the|a|an)', 'powered by (?:its|the|a|an)', 'pumped by (?:its|the|a|an)', 'driven by', 'driven with', 'excited by', 'excited with',
+      'from a(?=(?:[^\\S\\n]+[\\p{L}\\d.,-]+){0,2}[^\\S\\n]*$)', 'from the(?=(?:[^\\S\\n]+[\\p{L}\\d.,-]+){0,2}[^\\S\\n]*$)', 'from (?:its|their|our|your)(?=(?:[^\\S\\n]+[\\p{L}\\d.,-]+){0,2}[^\\S\\n]*$)', 'from (?:about|around|roughly|some|nearly|approximately|approx\\.|ca\\.|~)', 'for (?:only |just |a mere |about |roughly )?(?=$)', '(?<![\\w-])charge(?=[^\\S\\n]*$)', '(?:start-?up|initial|one-?time|priming|first) charge of', 'comes? from (?:its|the|a|an)', 'powered by (?:its|the|a|an)', 'pumped by (?:its|the|a|an)', 'driven by', 'driven with', 'excited by', 'excited with',
       'pumped with', 'pumping', 'pump power', 'at the input', 'on the input', 'input side', 'electrical input', 'energy cost', 'costs?', 'needs?',
       'needing', 'eats?', 'pulls?', 'pulling', 'runs? (?:on|off)', 'running (?:on|off)', 'operat(?:es|ing|ed) (?:on|at|from)', 'supply of', 'battery',
       'wall socket', 'socket', 'plug', 'in:', 'with only', 'on only', 'on just', 'with just', 'spent', 'spends?', 'dissipat(?:e|es|ed|ing)',
@@ -68,7 +68,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     ],
     after: [
       // A rating said before what makes power: "the 600 MW coal unit", "a 5 kW genset" (not a motor or engine, which may be what drives the device).
-      '(?<!(?:of|from|off|by|on)[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+|a[^\\S\\n]+|an[^\\S\\n]+)?)(?:(?!(?:from|off|of|to|by|at|in|on|into|onto|with|for|the|a|an|its|their|our|and|or|per)\\b)[\\w-]+ ){0,2}(?:power plants?|power stations?|plants?|(?:coal|steam|gas|nuclear|geothermal|hydro|wind|solar|CCGT|generating) units?|gensets?|generating sets?|generators?|turbines?)(?! (?:draws?|takes?|consumes?|uses?|needs?|is fed|was fed|runs? on))',
+      '(?<!(?:of|from|off|by|on)[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+|a[^\\S\\n]+|an[^\\S\\n]+)?)(?:(?!(?:from|off|of|to|by|at|in|on|into|onto|with|for|the|a|an|its|their|our|and|or|per)\\b)[\\w-]+ ){0,2}(?:power plants?|power stations?|plants?|(?:coal|steam|gas|nuclear|geothermal|hydro|wind|solar|CCGT|generating|(?:coal|gas|oil|lignite|biomass)-fired) units?|gensets?|generating sets?|generators?|turbines?)(?! (?:draws?|takes?|consumes?|uses?|needs?|is fed|was fed|runs? on))',
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
       'to (?:the|its|their|a|an) (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump|phone|device|string|bulb|lamps|wheel|laptop|computer|tablet|appliance|consumer|user|bank|lights?|heating|tank)', 'into the (?:[\\w\\x27\\u2019-]+ )?(?:battery|grid|load|bank|network|mains|store|tank|reservoir|pond|basin)(?: bank)?', 'net(?= (?:output|from|at|to|into|of electricity|electrical)|[,.;]|$)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
       'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at (?:the|its) (?:output )?terminals', 'at the (?:crank|output |drive |propeller |main )?shaft', 'at the (?:wheels?|axles?|flywheel|crank)', 'of shaft power', 'on its output terminals',

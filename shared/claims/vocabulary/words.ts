@@ -25,13 +25,13 @@ export const COOLING_MACHINE_WORDS = [
 
 /** Words that make a temperature a difference: before ("ΔT of 20 K") or after ("a 20 K difference"). */
 export const DIFFERENCE_BEFORE = [
-  'ΔT', 'Δ T', 'delta[- ]?T', 'dT', 'temperature (?:difference|gradient|drop|rise|lift|span|spread|differential|swing|excursion|change|increase)s?',
+  'ΔT', 'Δ T', 'delta[- ]?T', 'dT', 'temperature (?:difference|gradient|drop|rise|lift|span|spread|differential|swing|excursion|change|increase|gap)s?', 'gap of',
   'differences? of', 'differential of', 'gradient of', 'rise of', 'drop of', 'lift of', 'spread of', 'span of', 'increase of', 'swing of', 'change of',
   '(?:pump(?:s|ing)?|lift(?:s|ing)?|rais(?:es|ing)|mov(?:es|ing)) (?:the )?heat(?: up)?(?: by| through| across)?', 'through', 'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
   '(?:only |just )?across(?: (?:only|just|a|an))*', 'spanning', '(?:rais|lower|increas|decreas|heat|warm|cool|drop|lift)(?:e|es|ed|ing|s)? (?:the )?temperature (?:of )?(?:[\\w-]+ ){0,3}by', '(?:colder|cooler|hotter|warmer|lower|higher) than (?:the |its )?(?:[\\w-]+ ){0,3}by', 'differ(?:s|ing)? by', 'apart by', 'separated by', 'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
 ];
 export const DIFFERENCE_AFTER = [
-  '(?:temperature )?(?:difference|differential|gradient|drop|rise|lift|span|spread|swing|excursion|delta|split|increase|decrease)s?',
+  '(?:temperature )?(?:difference|differential|gradient|drop|rise|lift|span|spread|swing|excursion|delta|split|increase|decrease|gap)s?',
   '(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)(?: than)?', 'by which', 'ΔT', 'delta[- ]?T', 'of (?:temperature )?(?:difference|gradient|lift|rise|drop)',
   'between', 'apart', 'across', 'of heating', 'of warming', 'of cooling',
 ];
