@@ -33,8 +33,13 @@ export function relate(text: string, drafts: Draft[]): void {
     const before = text.slice(windowStart(text, d.start, 0, 80), d.start);
     return PROPOSED_BEFORE_RE.test(before) || ASKED_BEFORE_RE.test(before);
   });
+  // ("The heater takes 140 W; the tube gives off 175 W. If that held for a month, it would have delivered
+  // 91 MJ more": an energy or a run supposed over powers stated plainly is the writer's sum, not a figure.)
+  const plain = (role: string) => drafts.some((o) => o.kind === 'power' && o.role === role && !o.derived && !supposed.includes(o) && !compared.includes(o));
+  const powerLedger = plain('in') && (plain('out') || plain('excess'));
   for (const d of supposed) {
     if (drafts.some((o) => o !== d && o.kind === d.kind && !o.derived && !supposed.includes(o) && !compared.includes(o))) compared.push(d);
+    else if (powerLedger && (d.kind === 'energy' || d.kind === 'duration') && CONDITIONAL_RE.test(clauseAround(text, d))) compared.push(d);
   }
   // "the shaft output … was printed as 105 hp. It should read 150 hp": the figure put in place of a
   // superseded one takes its side where its own words give none.

@@ -10,7 +10,7 @@ import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
 import { comparedPercent, relate } from './comparisons';
 import { BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
-import { asideOtherTopics, asideWorkedBounds } from './topics';
+import { asideApparentSpeeds, asideOtherTopics, asideWorkedBounds } from './topics';
 import type { Draft } from './draft';
 import { bareKind, GAIN_PER_UNIT_RE, PER_UNIT_QUANTITY, ISP_AFTER_RE, ISP_BEFORE_RE, MULTIPLE_VALUE, MULTIPLE_WORD_RE, readPercent, TEMPERATURE_CONTEXT_RE } from './kinds';
 import { tokenize, type NumberToken } from './numbers';
@@ -74,6 +74,11 @@ function erratumBare(text: string, start: number, drafts: Draft[]): { kind: Figu
   if (!prev || !(prev.kind === 'efficiency' || prev.kind === 'cop' || prev.kind === 'quantum-efficiency') || /%\s*$/u.test(text.slice(prev.start, prev.end))) return null;
   return { kind: prev.kind, role: prev.role === 'aside' ? undefined : (prev.role ?? undefined) };
 }
+
+/** "for every watt going in," before a figure: the unit in, said first. */
+const PER_UNIT_BEFORE_RE = /(?<!\p{L})(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){0,3}?[^\S\n]*[,:;]?[^\S\n]*(?:about|roughly|some|nearly|only|just)?[^\S\n]*$/iu;
+/** After a figure: it is what comes out ("1.25 watts would come out", "1.4 J come back"). */
+const COMES_OUT_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:(?:would|will|should|could|does|do|can|did|must)[^\S\n]+)?(?:come|comes|came|go|goes|went|get|gets|got)[^\S\n]+(?:out|back)(?!\p{L})/iu;
 
 /** Words of heat moved rather than made ("moves three times more heat than it uses"). */
 const MOVES_HEAT_RE = /(?<!\p{L})(?:mov|pump|shift|remov|extract|transferr?|lift|draw|pull)(?:s|es|ed|ing)?[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}?heat(?!\p{L})/iu;
@@ -291,6 +296,16 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         quantity = t.num;
         upper = upperNum;
         derived = 'units out for each unit in';
+      } else if (!g) {
+        // "for every watt going in, 1.25 watts would come out": the unit in said first, then what comes out of it.
+        const per = PER_UNIT_BEFORE_RE.exec(text.slice(windowStart(text, start, floor, 120), start));
+        const first = per ? PER_UNIT_QUANTITY[per[1].toLowerCase()] : undefined;
+        if (per && (!first || first.kind === kind) && COMES_OUT_AFTER_RE.test(text.slice(end, end + 40))) {
+          kind = 'efficiency';
+          quantity = t.num;
+          upper = upperNum;
+          derived = 'units out for each unit in';
+        }
       }
     }
     // "12 kW (16 hp)": a restatement in other units, not a second figure.
@@ -377,6 +392,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   relate(text, drafts);
   asideOtherTopics(text, drafts);
   asideWorkedBounds(text, drafts);
+  asideApparentSpeeds(text, drafts);
 
   const figures: Figure[] = [];
   for (const d of drafts) {

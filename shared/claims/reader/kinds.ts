@@ -37,7 +37,7 @@ const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lowe
 const PV_CELL_AFTER_RE = /[^\S\n]*(?:for|from|by|on)[^\S\n]+(?:(?:an?|the|its|our|their)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:solar|silicon|photovoltaic|PV|perovskite|tandem|thin-film|organic)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,1}?(?:cells?|modules?|panels?)(?!\p{L})/iuy;
 /** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */
 const PERCENT_OF_HEAT_RE =
-  /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:[\p{L}-]+[^\S\n]+)?(?:light|radiation|power|energy)|radiant (?:power|energy|heat)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
+  /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|this[^\S\n]+|your[^\S\n]+|their[^\S\n]+|our[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(?:heat|thermal energy|fuel energy|fuel's energy|energy in the fuel|heat input|incoming heat|absorbed heat|collected heat|sunlight|light|incident (?:light|radiation|power)|absorbed (?:[\p{L}-]+[^\S\n]+)?(?:light|radiation|power|energy)|radiant (?:power|energy|heat)|solar (?:energy|power|radiation)|input (?:energy|power)|electrical (?:input|energy|power)|energy (?:it|they) (?:takes|draws|consumes))(?!\p{L})(?=[^.;!?\n]{0,80}(?:into|to|as|comes out|becomes|is turned|is converted)[^.;!?\n]{0,40}(?:work|electric|power|motion|mechanical))/iuy;
 /**
  * "0.5 % of the heat that flows through it", said of a machine that turns heat into power (a
  * harvester, a thermoelectric generator, an engine): its efficiency. Not of a heat exchanger, a
@@ -156,7 +156,10 @@ export function readPercent(text: string, start: number, end: number, floor: num
   PERCENT_OF_HEAT_RE.lastIndex = end;
   SHARE_AS_WORK_RE.lastIndex = end;
   PV_CELL_AFTER_RE.lastIndex = end;
-  const after = EFFICIENCY_AFTER_RE.test(text) || PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text) || PV_CELL_AFTER_RE.test(text) || percentOfHeatThrough(text, end);
+  const efficientSaid = EFFICIENCY_AFTER_RE.test(text);
+  // ("turn 9 % of your radiator's heat into electricity": a share of heat made work, an engine's whatever radiator is named.)
+  const heatToWork = PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text) || percentOfHeatThrough(text, end);
+  const after = efficientSaid || heatToWork || PV_CELL_AFTER_RE.test(text);
   // (A clause set off by commas may take the efficiency word further back than the usual window.)
   const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before) ?? EFFICIENCY_PERCENT_BEFORE_RE.exec(text.slice(Math.max(floor, start - BEFORE_WINDOW - 90), start));
   // "Ammonia–water cycle engine, 19 % at a 120 °C heat source": a percentage said right after a heat
@@ -178,6 +181,7 @@ export function readPercent(text: string, start: number, end: number, floor: num
   // (Nor a conversion efficiency at most 100 %: "a conversion efficiency of 45 % of the heat taken from the
   // pond" is an engine's, whatever radiator the text names.)
   const engineHere =
+    (heatToWork && value <= 100 && /(?<!\p{L})(?:electricity|electrical|work|power)(?!\p{L})/iu.test(text.slice(end, end + 90))) ||
     (ENGINE_NAMED_RE.test(own) && !HEAT_PUMP_RE.test(own)) ||
     (value <= 100 && /(?<!\p{L})(?:conversion|thermal|electrical|cycle|net|gross|brake) efficiency[^.;!?\n]{0,25}$/iu.test(text.slice(Math.max(0, start - 60), start)));
   // (A boiler's text names radiators and flow temperatures too: those words alone name no heat pump there.)
@@ -216,6 +220,9 @@ export function bareKind(text: string, start: number, end: number, floor: number
   // An operand of a worked division or product ("η = 3.1/172 = 0.018"): a step, not a figure; the
   // result after "=" is read.
   if (/^[^\S\n]*[/×*÷][^\S\n]*\d/u.test(text.slice(end, end + 6)) || /\d[^\S\n]*[/×*÷][^\S\n]*$/u.test(before)) return null;
+  // "about 0.97 of the speed of light": a speed as a fraction of c.
+  SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
+  if (SPEED_OF_LIGHT_AFTER_RE.test(text)) return { kind: 'speed', factor: C_M_PER_S };
   if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before)) return { kind: 'cop' };
   // "The mean heating COP of the units at the rating point (…) was printed as 0.30": the subject of the
   // sentence names what a printed, given or stated figure is.

@@ -78,6 +78,9 @@ const FRACTION_VALUE: Record<string, number> = {
 /** Words of an unstated quantity that compromise reads as a number ("a few" as 3). */
 const VAGUE_QUANTITY_RE = /^(?:an?[^\S\n]+)?(?:few|several|couple|handful|some|many|numerous|various|multiple)(?:[^\S\n]+of)?[\s.,;:!?]*$/iu;
 
+/** "a few hundred watts", "several thousand": a round number made vague, which is no figure either. */
+const VAGUE_BEFORE_RE = /(?<!\p{L})(?:a[^\S\n]+few|few|several|a[^\S\n]+couple[^\S\n]+of|some|many)[^\S\n]+(?:hundreds?|thousands?|millions?|dozens?|tens)(?!\p{L})/iu;
+
 /** Numbers in words, through compromise: start, end and value of each. */
 function wordNumbers(text: string): { start: number; end: number; value: number }[] {
   if (!WORD_NUMBER_HINT.test(text)) return [];
@@ -98,7 +101,7 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     if (typeof value !== 'number' || !Number.isFinite(value)) continue;
     if (value === 0 && !/(?<!\p{L})(?:zero|nought|naught|nil)(?!\p{L})/iu.test(raw)) continue; // "half an", read as 0
     // "a few micronewtons", "several watts": compromise gives these a number (3) the text never gave.
-    if (VAGUE_QUANTITY_RE.test(raw.trim())) continue;
+    if (VAGUE_QUANTITY_RE.test(raw.trim()) || VAGUE_BEFORE_RE.test(text.slice(Math.max(0, n.offset.start - 12), n.offset.start) + raw)) continue;
     const trimmed = raw.replace(/[\s\-.,;:!?]+$/u, ''); // (compromise may keep a full stop or a comma)
     out.push({ start: n.offset.start, end: n.offset.start + trimmed.length, value });
   }

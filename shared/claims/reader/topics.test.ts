@@ -96,3 +96,53 @@ describe('words of an unstated quantity', () => {
     expect(read('It draws two kilowatts.').map((f) => f.si)).toEqual([2000]);
   });
 });
+
+describe('speeds above c that carry nothing', () => {
+  test('an apparent motion or a phase velocity above c is set aside; a craft said to travel so is kept', () => {
+    // 4c = 4 × 299 792 458 m/s = 1.199 × 10⁹ m/s (c exact, SI Brochure 2.2).
+    expect(read('A bright knot in the jet appears to have moved sideways across the sky at four times the speed of light.')).toMatchObject([{ kind: 'speed', role: 'aside', si: 4 * 299792458 }]);
+    expect(read('The phase velocity in the guide is 1.3c.')[0].role).toBe('aside');
+    expect(read('The craft travels at four times the speed of light.')[0].role).not.toBe('aside');
+    // ("appeared at the receiving station sooner than light" is no apparent motion.)
+    expect(read('A change at the sender appeared at the receiver sooner than light could cross, corresponding to signalling at 4.2 times the speed of light.')[0].role).not.toBe('aside');
+  });
+  test('"about 0.97 of the speed of light" is a speed', () => {
+    expect(read('The knot really moves at about 0.97 of the speed of light.')).toMatchObject([{ kind: 'speed', si: 0.97 * 299792458 }]);
+  });
+});
+
+describe('the power a bound asks for, worked backwards from the claimed thrust', () => {
+  test('"would need about 330 kW" for 1.1 mN at P/c is set aside; a stated 330 kW is the device\'s', () => {
+    // F·c = 1.1e-3 N × 299 792 458 m/s = 329.8 kW.
+    const f = read('The cavity produced a thrust of 1.1 mN. For that thrust to sit at the photon limit, the device would need about 330 kW of power going out as a beam.');
+    expect(roleOf(f, '330 kW')).toBe('aside');
+    expect(roleOf(read('Our 330 kW searchlight gives 1.1 mN of recoil.'), '330 kW')).toBe('in');
+    // (A plain "needs" may be the claim itself: "1 N of thrust needs 300 MW of beam".)
+    expect(roleOf(read('Photon rocket study note: 1 N of thrust needs 300 MW of collimated beam power.'), '300 MW')).not.toBe('aside');
+  });
+  test('"a few hundred watts", "several hundred watts" are no figures', () => {
+    expect(read('If the cavity was driven by an amplifier of a few hundred watts, the thrust is far above the ceiling.')).toEqual([]);
+    expect(read('It is driven by several hundred watts.')).toEqual([]);
+    expect(read('It is driven by two hundred watts.').map((x) => x.si)).toEqual([200]);
+  });
+});
+
+describe('explainers that work the numbers', () => {
+  test('"turn 9 % of your radiator\'s heat into electricity" is an efficiency, whatever radiator is named', () => {
+    expect(read("Can the charger really turn 9 % of your radiator's heat into electricity?")).toMatchObject([{ kind: 'efficiency', si: 0.09 }]);
+  });
+  test('"for every watt going in, 1.25 watts would come out" is a gain of 1.25', () => {
+    expect(read('So for every watt going in, 1.25 watts would come out.')).toMatchObject([{ kind: 'efficiency', si: 1.25 }]);
+    expect(read('For every watt, the lamp gives 0.3 W of light.')).toMatchObject([{ kind: 'power', si: 0.3 }]);
+  });
+  test('a month supposed over powers stated plainly is the writer\'s sum: the first law is checked on the powers', () => {
+    const text = 'The heater takes 140 W; the company says the tube gives off 175 W of heat in steady operation. If that held for a month of 30 days, the tube would have delivered about 91 megajoules more than it received.';
+    const f = read(text);
+    expect(roleOf(f, '91 megajoules')).toBe('aside');
+    expect(roleOf(f, '30 days')).toBe('aside');
+    // 175/140 = 1.25 > 1: more out than in.
+    const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'first-law');
+    expect(run?.finding).toBe('breaks');
+    expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.25, 9);
+  });
+});

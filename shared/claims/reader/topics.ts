@@ -98,6 +98,32 @@ export function asideWorkedBounds(text: string, drafts: Draft[]): void {
   };
   const thrusts = drafts.filter((d) => (d.kind === 'thrust' || d.kind === 'thrust-per-power') && d.role !== 'aside');
   const bounds = thrusts.filter(bound);
-  if (bounds.length === 0 || bounds.length === thrusts.length) return;
-  for (const d of bounds) d.role = 'aside';
+  if (bounds.length > 0 && bounds.length < thrusts.length) for (const d of bounds) d.role = 'aside';
+  // "for that thrust to sit at the photon limit, the device would need about 330 kW": the power the bound
+  // asks for, worked backwards from the claimed thrust — no power of the device.
+  const claimed = drafts.filter((d) => d.kind === 'thrust' && d.role !== 'aside');
+  for (const p of drafts) {
+    if (p.kind !== 'power' || p.role === 'aside' || p.derived) continue;
+    const si = siOf(p);
+    if (si === null || !claimed.some((t) => near(si, (siOf(t) ?? 0) * C, 0.02))) continue;
+    if (WOULD_NEED_BEFORE_RE.test(text.slice(sentenceStart(p.start), p.start))) p.role = 'aside';
+  }
+}
+/** Words of a power supposed, before it in its sentence ("would need about 330 kW"; not a plain "needs", which may be the claim). */
+const WOULD_NEED_BEFORE_RE = /(?<!\p{L})(?:would|could|should|must|might|limit|ceiling|bound)(?!\p{L})/iu;
+
+/** Words of a speed above c that carries nothing: an apparent motion, a phase, a recession, a spot or shadow. */
+const APPARENT_SPEED_RE =
+  /(?<!\p{L})(?:apparent(?:ly)?[^\S\n]+(?:speed|velocity|motion|movement)|(?:appear|seem)(?:s|ed)?[^\S\n]+to[^\S\n]+(?:have[^\S\n]+)?(?:move|moved|travel|travelled|traveled|go|gone|outrun|race|raced|sweep|swept|shoot|shot|cross|crossed|jump|jumped)|looks? (?:like|as if) it|phase (?:velocit\w*|speed)|group (?:velocit\w*|speed)|reced\w*|recession|expansion|expanding|spot|shadow|superluminal motion)(?!\p{L})/iu;
+
+/**
+ * "A knot in the jet appears to move at four times the speed of light", "the spot sweeps across the Moon
+ * faster than light", "galaxies receding faster than light": a speed above c said as an appearance, a
+ * phase or a recession carries no object or signal past c, and is set aside (no finding on it).
+ */
+export function asideApparentSpeeds(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (d.kind !== 'speed' || d.role === 'aside' || (siOf(d) ?? 0) <= C) continue;
+    if (APPARENT_SPEED_RE.test(text.slice(windowStart(text, d.start, 0, 400), d.start))) d.role = 'aside';
+  }
 }
