@@ -116,6 +116,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     let end = t.end;
     const start = t.start;
     let upperNum: string | undefined;
+    /** A bare range's kind, read from the words after its upper end. */
+    let bareFromUpper: ReturnType<typeof bareKind> = null;
     const next: NumberToken | undefined = tokens[i + 1];
     // Ranges and uncertainties: "3–6 mN", "3 mN to 6 mN", "between 0.5 and 1.5 kW", "1.2 ± 0.3 mN", "2.31(4) mN".
     if (t.unc !== undefined) {
@@ -135,8 +137,17 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         t.num = String(Number((mid - unc).toPrecision(15)));
         end = t.suffix && !next.suffix ? next.numEnd : next.end;
         next.consumed = true;
-      } else if (!t.suffix && !next.suffix && !t.words && !next.words && !next.plusMinus && isRangeGap(text, t.numEnd, next.start, t.start) && bareKind(text, t.start, t.numEnd, floor)) {
-        // "a COP between 3.2 and 4.1", "an efficiency of 0.3–0.4".
+      } else if (
+        !t.suffix &&
+        !next.suffix &&
+        !t.words &&
+        !next.words &&
+        !next.plusMinus &&
+        isRangeGap(text, t.numEnd, next.start, t.start) &&
+        (bareKind(text, t.start, t.numEnd, floor) || (bareFromUpper = bareKind(text, next.start, next.numEnd, floor)))
+      ) {
+        // "a COP between 3.2 and 4.1", "an efficiency of 0.3–0.4"; "between 3.2 and 3.8 units of heat for
+        // every unit of electricity", where the words after the upper end say what both are.
         upperNum = next.num;
         end = next.end;
         next.consumed = true;
@@ -263,7 +274,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         if (upperNum !== undefined) upper = q(upperNum);
       }
     } else {
-      const bare = bareKind(text, start, t.numEnd, floor) ?? erratumBare(text, start, drafts);
+      const bare = bareKind(text, start, t.numEnd, floor) ?? bareFromUpper ?? erratumBare(text, start, drafts);
       if (bare) {
         kind = bare.kind;
         role = bare.role;

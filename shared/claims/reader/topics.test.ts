@@ -146,3 +146,16 @@ describe('explainers that work the numbers', () => {
     expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.25, 9);
   });
 });
+
+describe('a bare range whose words come after its upper end', () => {
+  test('"between 3.2 and 3.8 units of heat for every unit of electricity" is one range, and the check takes its lower end', () => {
+    expect(read("It delivers 'between 3.2 and 3.8 units of heat for every unit of electricity'.")).toMatchObject([{ kind: 'efficiency', si: 3.2, upper: { si: 3.8 } }]);
+    const text = 'The box returns between 1.2 and 1.4 units of energy for every unit it takes.';
+    const run = runClaimChecks(read(text), { text, classes: [] }).checks.find((c) => c.check === 'first-law');
+    // The end most favourable to the claim (issue 11, item 1): 1.2, not 1.4.
+    expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.2, 9);
+    // (A range reaching below 1 is no finding of more out than in.)
+    const lawful = 'The box returns between 0.9 and 1.1 units of energy for every unit it takes.';
+    expect(runClaimChecks(read(lawful), { text: lawful, classes: [] }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+});
