@@ -1002,3 +1002,26 @@ describe('what a claim lacks, named (issue 11)', () => {
     expect(c.finding).toBe('consistent');
   });
 });
+
+describe('an engine efficiency checked on a guess the text does not make (invented test data)', () => {
+  const plan = (text: string) => runClaimChecks(extractFigures(text), { text, classes: [] });
+  test('an efficiency and two temperatures with no heat engine named ask for confirmation instead of a conflict', () => {
+    // Carnot bound 1 − 323.15/363.15 = 11.0 %: a 90 % heating plant would "break" it only if it were a heat engine.
+    const r = plan('The district heating plant is 90 % efficient, sending water at 90 °C and getting it back at 50 °C.');
+    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+    expect(r.needs.find((n) => n.check === 'carnot')?.missing[0]).toMatch(/turns heat into work/);
+    // (Within the bound, the result stands: 10 % against 19.3 %.)
+    expect(plan('The box is 10 % efficient between 90 °C and 20 °C.').checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+  });
+  test("a combustion engine's coolant is not its hot side; an engine said to work between two temperatures is checked", () => {
+    const r = plan('Our car engine is 40 % efficient; coolant at 90 °C, air at 20 °C.');
+    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+    expect(r.needs.find((n) => n.check === 'carnot')?.missing[0]).toMatch(/burning gas/);
+    // 1 − 293.15/363.15 = 19.3 % < 40 %: an engine between those temperatures breaks Carnot.
+    expect(plan('The engine is 40 % efficient between 90 °C and 20 °C.').checks.find((c) => c.check === 'carnot')?.finding).toBe('breaks');
+  });
+  test('an LED on a heat sink is no heat engine', () => {
+    const r = plan('The LED converts 60 % of its electrical input into light and runs at 50 °C on a 25 °C heat sink.');
+    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+});

@@ -30,6 +30,12 @@ export interface Plan {
    * found on them waits for the reader to confirm which figures are the device's.
    */
   within?: Figure;
+  /**
+   * What the reader must confirm before a conflict found on this plan is said: the reading rests on a
+   * guess the text does not make (two temperatures taken as a heat engine's reservoirs where it names no
+   * heat engine; an engine's coolant taken as its hot side).
+   */
+  confirmIfBreaks?: string;
 }
 
 /** The figures of one kind that are the device's (a figure set aside is of something else). */

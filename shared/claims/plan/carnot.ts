@@ -7,7 +7,7 @@
 import type { Figure } from '../types';
 import { at, heatMoverCop, need, ofKind, paragraphKey, sentenceKey, uniq, type Basis } from './basis';
 import { paragraphOfAnotherMachine, sentenceAround } from '../reader/context';
-import { HEAT_ONLY_RE } from './signals';
+import { HEAT_ONLY_RE, heatEngineBeyondSink } from './signals';
 
 const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|brine|well water|borehole|source temperature|outdoors?)(?!\p{L})/iu;
 const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
@@ -98,6 +98,28 @@ function otherWithin(b: Basis, checked: Figure, hot: Figure, cold: Figure): Figu
 const OTHER_MACHINE_BEFORE_RE =
   /(?<!\p{L})(?:prior[- ]art|reference|references|cited|previous|earlier|older|competing|competitors?|rivals?|conventional|typical|commercial|ordinary|best anyone|record|literature|state[- ]of[- ]the[- ]art)(?!\p{L})/iu;
 
+/** Words before a temperature that make it a combustion engine's coolant, oil, exhaust or casing, not its hot gases. */
+const NOT_THE_HOT_GASES_RE = /(?<!\p{L})(?:coolant|cooling water|jacket water|oil|lubricant|exhaust|casing|block|cylinder head|radiator|surface|bonnet|hood|engine bay)(?!\p{L})[^.;!?\n]{0,30}$/iu;
+/** A combustion engine named: its hot side is the burning gas, not a temperature of its cooling. */
+const COMBUSTION_ENGINE_RE = /(?<!\p{L})(?:(?:car|diesel|petrol|gasoline|gas|truck|lorry|marine|ship's|boat|motorbike|motorcycle|lawnmower|combustion|piston|outboard|aero|jet) engines?|diesels?|gensets?|generating sets?|diesel generators?|gas turbines?|internal[- ]combustion|combustion engines?)(?!\p{L})/iu;
+
+/**
+ * Where an engine's efficiency is checked against temperatures on a guess the text does not make, what
+ * the reader must confirm before a conflict is said: the text names no heat engine (a heating plant, a
+ * lamp or a motor run at two temperatures turns electricity or fuel into heat, light or motion, and is not
+ * bounded by Carnot), or the hot side is a combustion engine's coolant, oil or exhaust rather than its
+ * burning gas.
+ */
+function engineGuess(b: Basis, hot: Figure): string | undefined {
+  if (!b.s.heatEngine && !ofKind(b.figures, 'temperature-difference').length) {
+    return 'confirmation that the device turns heat into work between these temperatures: the text names no heat engine, and a machine that turns electricity or fuel into heat, light or motion (a boiler, a heating network, a lamp, a motor) is not bounded by Carnot';
+  }
+  if (hot.start !== null && COMBUSTION_ENGINE_RE.test(b.text) && NOT_THE_HOT_GASES_RE.test(b.text.slice(sentenceKey(b.text, hot.start), hot.start))) {
+    return `the temperature of the burning gas the engine works from: ${hot.display} (“${hot.text}”) is a temperature of its cooling, oil or exhaust, not its hot side`;
+  }
+  return undefined;
+}
+
 export function planCarnot(b: Basis): HeatReading {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, temps } = b;
   // A stated efficiency, or one stated as a share of the Carnot efficiency of the stated temperatures.
@@ -137,7 +159,8 @@ export function planCarnot(b: Basis): HeatReading {
   const cop = withSides(ofKind(figures, 'cop'), b) ?? inOut ?? (movesHeat ? ofKind(figures, 'efficiency').find((f) => f.derived && f.si > 1) : undefined);
   // An efficiency is a heat engine's only where the text speaks of work or electricity got from heat:
   // a collector, boiler or heater that delivers heat, or a converter of electricity, is not bounded by Carnot.
-  const notAnEngine = !s.heatEngine && (HEAT_ONLY_RE.test(text) || ELECTRICAL_CONVERTER_RE.test(text) || NOT_HEAT_ENGINE_RE.test(text));
+  // (A heat sink alone makes no heat engine of an LED, a laser or a motor: "runs at 50 °C on a 25 °C heat sink".)
+  const notAnEngine = (!s.heatEngine || (!heatEngineBeyondSink(text) && NOT_HEAT_ENGINE_RE.test(text))) && (HEAT_ONLY_RE.test(text) || ELECTRICAL_CONVERTER_RE.test(text) || NOT_HEAT_ENGINE_RE.test(text));
   // An efficiency said with a temperature difference is one of a machine working across it.
   const acrossDifference = ofKind(figures, 'temperature-difference').length > 0;
   const copForCarnot = cop && (cop.role !== null || s.heatPump || s.cooling || temps.length >= 2 || !s.overUnity);
@@ -175,8 +198,10 @@ export function planCarnot(b: Basis): HeatReading {
     const cooling = cop?.role === 'cooling' || (cop?.role === null && s.cooling && !s.heatPump);
     if (cop && cop.role === null) extra.push(cooling ? 'The COP is read as a cooling COP (heat drawn out over work in).' : 'The COP is read as a heating COP (heat delivered over work in); mark it as cooling if the machine is a refrigerator or chiller.');
     const claimed = [engineEfficiency ? efficiency : undefined, copForCarnot ? cop : undefined];
+    const engineOnly = engineEfficiency && !copForCarnot;
     plans.push({
-      within: engineEfficiency && !copForCarnot ? otherWithin(b, efficiency!, hot, cold) : undefined,
+      within: engineOnly ? otherWithin(b, efficiency!, hot, cold) : undefined,
+      confirmIfBreaks: engineOnly ? engineGuess(b, hot) : undefined,
       check: 'carnot',
       uses: uniq([hot, cold, ...claimed]),
       inputs: (e) => ({

@@ -147,6 +147,10 @@ export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { chec
       });
       continue;
     }
+    if (!run.verdict.holds && p.confirmIfBreaks) {
+      needs.push({ check: p.check, title: def.title, missing: [p.confirmIfBreaks], why: `${p.why} Run on them, the check would find the claim in conflict with ${CHECK_LAW[p.check]}.`, uses: p.uses.map((f) => f.id) });
+      continue;
+    }
     out.push({
       check: p.check,
       inputs,

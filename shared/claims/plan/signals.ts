@@ -23,6 +23,11 @@ const PROPELLANT_FREE_RE = compile(PROPELLANT_FREE_WORDS);
 const PROPELLANT_FREE_ALL_RE = new RegExp(PROPELLANT_FREE_RE.source, 'giu');
 const PROPELLANT_RE = compile(PROPELLANT_WORDS);
 const HEAT_ENGINE_RE = compile(HEAT_ENGINE_WORDS);
+/**
+ * Words of a heat engine other than a heat sink alone: an LED, a laser or a motor has a heat sink too, and
+ * is no heat engine for it.
+ */
+export const heatEngineBeyondSink = (text: string): boolean => HEAT_ENGINE_RE.test(text.replace(/(?<!\p{L})heat[- ]?sinks?(?!\p{L})/giu, ' '));
 const HEAT_PUMP_RE = compile(HEAT_PUMP_WORDS);
 const COOLING_RE = compile(COOLING_MACHINE_WORDS);
 const OVER_UNITY_RE =
