@@ -27,6 +27,7 @@ export const BURST_RE = /(?<!\p{L})(?:for short periods|for a short (?:time|peri
 
 /** Times, rates and energies over a run, among the figures read (see the file's comment). */
 export function relateDurations(text: string, drafts: Draft[]): void {
+  joinCompoundDurations(text, drafts);
   // Times that are not the run's ("took 18 months to build", "pays for itself in 3 years"), said in a
   // sentence with no power or energy: set aside.
   for (const d of drafts) {
@@ -109,5 +110,25 @@ export function relateDurations(text: string, drafts: Draft[]): void {
   // pendulum swings once every 2 seconds"): it is set aside.
   if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== 'aside')) {
     for (const d of drafts) if (d.kind === 'duration' && d.role === null) d.role = 'aside';
+  }
+}
+
+/**
+ * "1 h 40 min", "3 hours 20 minutes", "2 days and 6 hours": one run said in two units is one duration
+ * (the larger unit first, the smaller part less than one of the larger).
+ */
+function joinCompoundDurations(text: string, drafts: Draft[]): void {
+  for (let i = 0; i + 1 < drafts.length; i++) {
+    const [a, b] = [drafts[i], drafts[i + 1]];
+    if (a.kind !== 'duration' || b.kind !== 'duration' || a.derived || b.derived || a.upper !== undefined || b.upper !== undefined) continue;
+    if (!/^[^\S\n]*(?:,[^\S\n]*|and[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) continue;
+    const [x, y] = [siOf(a), siOf(b)];
+    if (x === null || y === null || !(y < x)) continue;
+    // The larger part's unit: a whole number of hours, days or minutes, and the smaller part less than one of it.
+    const unit = [86400, 3600, 60].find((u) => x >= u && Math.abs(x / u - Math.round(x / u)) < 1e-9);
+    if (unit === undefined || !(y < unit)) continue;
+    a.quantity = typedSi(x + y, 's');
+    a.end = b.end;
+    drafts.splice(i + 1, 1);
   }
 }

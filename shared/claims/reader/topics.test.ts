@@ -159,3 +159,33 @@ describe('a bare range whose words come after its upper end', () => {
     expect(runClaimChecks(read(lawful), { text: lawful, classes: [] }).checks.some((c) => c.finding === 'breaks')).toBe(false);
   });
 });
+
+describe('lawful devices that sound impossible', () => {
+  const checks = (text: string) => runClaimChecks(read(text), { text, classes: [] }).checks;
+  test('the same speed said again as a headline is the same appearance; a phase velocity named in the next sentence', () => {
+    const jet = 'Poster: "Quasar jet caught moving at four and a half times the speed of light". From its shift across the sky the blob appears to move sideways at 4.5 c. Its real speed comes out at about 0.98 c.';
+    expect(checks(jet).some((c) => c.finding === 'breaks')).toBe(false);
+    const guide = 'The crests of the wave inside the guide move along it at about 1.4 times the speed of light. This is the phase velocity, and nothing is carried by it.';
+    expect(read(guide)[0].role).toBe('aside');
+  });
+  test("an amplifier's signal is no input where the text says what it draws from the mains", () => {
+    const text = 'My amplifier turns the 1 W signal from my preamp into 100 W at the speakers. Its rating plate says it draws 180 W from the mains at full volume.';
+    expect(roleOf(read(text), '1 W')).toBe('aside');
+    // 100 W out of 180 W in: 0.556, within the first law.
+    expect(checks(text).find((c) => c.check === 'first-law')?.finding).toBe('consistent');
+    // (With no supply named, the signal stays the input: the claim is then more out than in.)
+    expect(roleOf(read('The box turns a 1 W signal into 100 W.'), '1 W')).toBe('in');
+  });
+  test("a current and a voltage \"at the charger's output\" are its output; sunlight falling on a panel is its input", () => {
+    const text = "We measured 1.1 A at 18 V at the charger's output going into a power bank. The maker says about 120 W of sunlight falls on its folds.";
+    const f = read(text);
+    expect(f.find((x) => x.derived?.startsWith('power = current × voltage'))).toMatchObject({ role: 'out', si: expect.closeTo(19.8, 9) });
+    expect(roleOf(f, '120 W')).toBe('in');
+    expect(checks(text).some((c) => c.finding === 'breaks')).toBe(false);
+  });
+  test('"1 h 40 min" is one run of 6,000 s', () => {
+    // 1 h = 3600 s, 1 min = 60 s (SI Brochure, Table 8): 3600 + 40 × 60 = 6000 s.
+    expect(read('It delivered 1.25 kW for 1 h 40 min.').filter((x) => x.kind === 'duration').map((x) => x.si)).toEqual([6000]);
+    expect(read('Tests of 3 hours, 2 hours and 1 hour.').map((x) => x.si)).toEqual([10800, 7200, 3600]);
+  });
+});

@@ -114,7 +114,7 @@ const WOULD_NEED_BEFORE_RE = /(?<!\p{L})(?:would|could|should|must|might|limit|c
 
 /** Words of a speed above c that carries nothing: an apparent motion, a phase, a recession, a spot or shadow. */
 const APPARENT_SPEED_RE =
-  /(?<!\p{L})(?:apparent(?:ly)?[^\S\n]+(?:speed|velocity|motion|movement)|(?:appear|seem)(?:s|ed)?[^\S\n]+to[^\S\n]+(?:have[^\S\n]+)?(?:move|moved|travel|travelled|traveled|go|gone|outrun|race|raced|sweep|swept|shoot|shot|cross|crossed|jump|jumped)|looks? (?:like|as if) it|phase (?:velocit\w*|speed)|group (?:velocit\w*|speed)|reced\w*|recession|expansion|expanding|spot|shadow|superluminal motion)(?!\p{L})/iu;
+  /(?<!\p{L})(?:apparent(?:ly)?[^\S\n]+(?:speed|velocity|motion|movement)|(?:appear|seem)(?:s|ed)?[^\S\n]+to[^\S\n]+(?:have[^\S\n]+)?(?:move|moved|travel|travelled|traveled|go|gone|outrun|race|raced|sweep|swept|shoot|shot|cross|crossed|jump|jumped)|looks? (?:like|as if) it|phase (?:velocit\w*|speed)|reced\w*|recession|expansion|expanding|spot|shadow|superluminal motion)(?!\p{L})/iu;
 
 /**
  * "A knot in the jet appears to move at four times the speed of light", "the spot sweeps across the Moon
@@ -122,8 +122,39 @@ const APPARENT_SPEED_RE =
  * phase or a recession carries no object or signal past c, and is set aside (no finding on it).
  */
 export function asideApparentSpeeds(text: string, drafts: Draft[]): void {
+  const apparent: number[] = [];
   for (const d of drafts) {
-    if (d.kind !== 'speed' || d.role === 'aside' || (siOf(d) ?? 0) <= C) continue;
-    if (APPARENT_SPEED_RE.test(text.slice(windowStart(text, d.start, 0, 400), d.start))) d.role = 'aside';
+    const si = siOf(d) ?? 0;
+    if (d.kind !== 'speed' || d.role === 'aside' || si <= C) continue;
+    // (Said before it in its sentence, or in the sentence right after: "… at about 1.4 times the speed of
+    // light. This is the phase velocity".)
+    const next = /^[^.!?\n]*[.!?]["”’')\]]*[^\S\n]+([^.!?\n]{0,120})/u.exec(text.slice(d.end))?.[1] ?? '';
+    if (APPARENT_SPEED_RE.test(text.slice(windowStart(text, d.start, 0, 400), d.start)) || /^(?:this|that|it|the (?:crest|pattern|spot|knot|blob))[^.!?\n]{0,40}(?:phase (?:velocit|speed)|apparent|illusion|not real|no real)/iu.test(next)) {
+      d.role = 'aside';
+      apparent.push(si);
+    }
   }
+  // The same speed said elsewhere ("Quasar jet caught moving at four and a half times the speed of light"
+  // in a headline, "appears to move sideways at 4.5 c" below) is the same appearance.
+  for (const d of drafts) {
+    const si = siOf(d) ?? 0;
+    if (d.kind === 'speed' && d.role !== 'aside' && apparent.some((a) => Math.abs(si / a - 1) <= 0.001)) d.role = 'aside';
+  }
+}
+
+/** Words of a signal that an amplifier steers, not a supply it draws from. */
+const SIGNAL_NEAR_RE = /(?<!\p{L})(?:signals?|preamp\w*|drive level|input level)(?!\p{L})/iu;
+/** Words of a supply a device draws from: the mains, a wall socket, a supply or a battery. */
+const SUPPLY_NEAR_RE = /(?<!\p{L})(?:mains|wall|socket|outlet|supply|supplies|grid|draws?|drew|drawing|consum\w*|battery|batteries)(?!\p{L})/iu;
+
+/**
+ * "turns the 1 W signal from my preamp into 100 W at the speakers … it draws 180 W from the mains": where
+ * the text states what the device draws from a supply, a signal it amplifies is no input of its energy.
+ */
+export function asideSignals(text: string, drafts: Draft[]): void {
+  const around = (d: Draft) => text.slice(Math.max(0, d.start - 40), Math.min(text.length, d.end + 30));
+  const inputs = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in' && !d.derived);
+  const signals = inputs.filter((d) => SIGNAL_NEAR_RE.test(around(d)));
+  if (signals.length === 0 || !inputs.some((d) => !signals.includes(d) && SUPPLY_NEAR_RE.test(around(d)))) return;
+  for (const d of signals) d.role = 'aside';
 }

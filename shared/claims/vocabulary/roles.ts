@@ -46,7 +46,9 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires|is supplied with|was supplied with|is fed with|was fed with|runs on|ran on)',
       '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
       '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
-      'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply',
+      'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 
+      // "about 120 W of sunlight falls on its folds": the light a panel takes.
+      'of (?:sun)?light (?:falls|falling|fell|lands|landing|shines|shining|arrives|arriving|strikes|striking|hits|hitting)', 'of (?:incident |incoming )?(?:sunlight|solar (?:power|radiation|energy)|irradiance)', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply',
       // "the array feeds 8.2 A at 36 V into the charge controller": what goes into a converter is its input.
       'into (?:the|its|a|an) (?:[\\w\\x27\\u2019-]+ )?(?:controllers?|inverters?|converters?|regulators?|MPPTs?|chargers?|rectifiers?|electroly[sz]ers?)'],
   },
