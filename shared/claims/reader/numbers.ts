@@ -147,9 +147,26 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
     out.push({ start: m.index!, end, value: hundreds * 100 + tens + ones });
   }
+  // "nought point five", "point eight", "oh point two five": a decimal said digit by digit with no whole
+  // number (or a nought), which compromise reads as the digits after the point alone.
+  for (const m of text.matchAll(SPOKEN_DECIMAL_RE)) {
+    const before = text.slice(Math.max(0, m.index! - 12), m.index!);
+    if (!m[1] && /(?:\p{L}|\d)[^\S\n]*$/u.test(before) && NUMBER_WORD_BEFORE_RE.test(before)) continue; // "two point one": compromise's
+    const digits = m[2].toLowerCase().split(/[^\S\n]+/u).map((w) => DIGIT_WORDS[w]);
+    if (digits.some((d) => d === undefined)) continue;
+    const end = m.index! + m[0].length;
+    for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
+    out.push({ start: m.index!, end, value: Number(`0.${digits.join('')}`) });
+  }
   out.sort((a, b) => a.start - b.start);
   return out;
 }
+
+const DIGIT_WORDS: Record<string, number> = { zero: 0, nought: 0, naught: 0, oh: 0, one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9 };
+/** "nought point five", "point eight", "oh point two five" (a leading nought, or none). */
+const SPOKEN_DECIMAL_RE = /(?<![\p{L}-])(?:(nought|naught|zero|oh)[^\S\n]+)?point[^\S\n]+((?:zero|nought|naught|oh|one|two|three|four|five|six|seven|eight|nine)(?:[^\S\n]+(?:zero|nought|naught|oh|one|two|three|four|five|six|seven|eight|nine))*)(?![\p{L}-])/giu;
+/** A number word right before "point": "two point one" is compromise's to read. */
+const NUMBER_WORD_BEFORE_RE = /(?<![\p{L}-])(?:one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|\w+teen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|thousand)[^\S\n]*$/iu;
 
 const TENS_WORDS: Record<string, number> = {
   ten: 10, eleven: 11, twelve: 12, thirteen: 13, fourteen: 14, fifteen: 15, sixteen: 16, seventeen: 17, eighteen: 18, nineteen: 19,

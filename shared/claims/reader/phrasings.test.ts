@@ -763,3 +763,21 @@ describe('short and clipped claims (invented test data)', () => {
     expect(read('The panel gives 5 W of free electricity from the sun.')).toEqual([['power', 'out', 5]]);
   });
 });
+
+describe('numbers and units as people say them (invented test data)', () => {
+  const read = (text: string) => extractFigures(text).map((f) => [f.kind, f.si]);
+  test('a decimal said with no whole number, or with a nought: "point eight millinewtons", "nought point five watts"', () => {
+    expect(read('Steady point eight millinewtons on the stand.')).toEqual([['thrust', expect.closeTo(8e-4, 15)]]);
+    expect(read('It gives nought point five watts.')).toEqual([['power', 0.5]]);
+    expect(read('It draws one point two five kilowatts.')).toEqual([['power', 1250]]);
+    expect(read('The point is five watts.')).toEqual([['power', 5]]);
+  });
+  test('"BTU an hour" is a power (NIST SP 811 B.8: 1 BTU_IT/h = 0.293 071 1 W)', () => {
+    const [[kind, si]] = read('The burner takes in a hundred thousand BTU an hour of gas.');
+    expect(kind).toBe('power');
+    expectRelClose(si as number, 29307.11, SEVEN);
+  });
+  test('"nothing like a heat pump" names none: a furnace\'s "ninety-five percent" is an efficiency', () => {
+    expect(read("So ninety-five percent efficient, as good as a gas furnace gets. It's nothing like a heat pump, just very little waste.")).toEqual([['efficiency', expect.closeTo(0.95, 12)]]);
+  });
+});

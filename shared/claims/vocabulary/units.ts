@@ -102,7 +102,7 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     kind: 'power',
     unit: 'BTU/h',
     symbols: ['BTU/h', 'Btu/h', 'BTU/hr', 'Btu/hr', 'BTUh', 'Btuh', 'BTU/H'],
-    words: ['BTU per hour', 'BTUs per hour', 'Btu per hour', 'British thermal units per hour', 'British thermal unit per hour'],
+    words: ['BTU per hour', 'BTUs per hour', 'Btu per hour', 'British thermal units per hour', 'British thermal unit per hour', 'BTU an hour', 'BTUs an hour', 'Btu an hour', 'BTU a hour', 'British thermal units an hour'],
   },
 
   // Energy
