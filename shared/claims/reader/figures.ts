@@ -48,7 +48,7 @@ function unitQuantity(num: string, s: Extract<Suffix, { type: 'unit' }>): { kind
 
 /** Just before a bare number said of a machine's side: "cold end at", "the floor loop at", "inside, about". */
 const SIDE_LEAD_RE =
-  /(?<!\p{L})(?:(?:hot|cold|warm|cool)(?:[- ](?:side|end|junction|plate|head|reservoir|face))?|sink|source|flow|return|loop|inside|outside|outdoors|indoors|condenser|evaporator|cabinet|exhaust|inlet|outlet|floor|house|room|water|tank|kitchen|head|plate|(?:rejects?|rejecting|dumps?|dumping|sheds?|shedding)(?:[^\S\n]+(?:its[^\S\n]+|the[^\S\n]+)?(?:waste[^\S\n]+)?heat)?)(?!\p{L})[^\S\n]*(?:(?:is|was|sits|sat|runs|ran|running|held|kept|stays|stayed|set|goes|went)[^\S\n]+)?(?:at|of|to|around|[:=])?[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
+  /(?<!\p{L})(?:(?:hot|cold|warm|cool)(?:[- ](?:side|end|junction|plate|head|reservoir|face))?|sink|source|flow|return|loop|inside|outside|outdoors|indoors|condenser|evaporator|cabinet|exhaust|inlet|outlet|floor|house|room|water|tank|kitchen|head|plate|(?:rejects?|rejecting|dumps?|dumping|sheds?|shedding)(?:[^\S\n]+(?:its[^\S\n]+|the[^\S\n]+)?(?:waste[^\S\n]+)?heat)?)(?!\p{L})[^\S\n]*(?:(?!(?:is|was|at|with|COP|SCOP|EER|efficiency|of|rated|power|output|input)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}?(?:(?:is|was|sits|sat|runs|ran|running|held|kept|stays|stayed|set|goes|went)[^\S\n]+)?(?:at|of|to|around|[:=])(?:[^\S\n]+(?:about|around|roughly|some|nearly))??[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
 /** After a bare number, what part of a craft's mass it is: "… and a hundred and fifty dry", "nine hundred is propellant". */
 const MASS_ROLE_AFTER_RE = /^[^\S\n]*(?:(?:dry|empty|wet|fuelled|fueled|full|loaded|unfuelled|unfueled)(?!\p{L})|(?:of (?:it|that|them)[^\S\n]+)?(?:is|are|being)[^\S\n]+(?:the[^\S\n]+)?(?:propellant|fuel|xenon|cold gas|reaction mass|oxidi[sz]er)(?!\p{L}))/iu;
 /** Between a mass and a bare number that is the craft's other mass: "… and ends at", "…, of which", "… down to". */
@@ -186,7 +186,10 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       const sibling = [...tokens.slice(0, i)].reverse().find((o) => !o.skip && o.suffix?.type === 'unit' && o.suffix.form.kind === 'temperature');
       if (
         sibling &&
-        sentenceAround(text, sibling.start, sibling.end) === sentenceAround(text, start, t.numEnd) &&
+        // (In its sentence, or the one before in its paragraph: "Inside, the box holds five degrees C, and
+        // the hot-side heatsink runs at about thirty.")
+        (sentenceAround(text, sibling.start, sibling.end) === sentenceAround(text, start, t.numEnd) ||
+          (start - sibling.end < 160 && !/\n/.test(text.slice(sibling.end, start)))) &&
         !isDifference(text, sibling.start, sibling.end, 0) &&
         SIDE_LEAD_RE.test(text.slice(Math.max(sibling.end, start - 40), start)) &&
         BARE_END_RE.test(text.slice(t.numEnd, t.numEnd + 12))

@@ -781,3 +781,16 @@ describe('numbers and units as people say them (invented test data)', () => {
     expect(read("So ninety-five percent efficient, as good as a gas furnace gets. It's nothing like a heat pump, just very little waste.")).toEqual([['efficiency', expect.closeTo(0.95, 12)]]);
   });
 });
+
+test('a bare number said of the other side in the next sentence takes the temperature\'s unit: "…five degrees C, and the hot-side heatsink runs at about thirty" (invented test data)', () => {
+  // T(K) = t(°C) + 273.15 (SI Brochure, 9th ed., 2.3.1).
+  expect(extractFigures('Inside, the box holds five degrees C. The hot-side heatsink runs at about thirty.').map((f) => [f.kind, f.role, f.si])).toEqual([
+    ['temperature', 'cold', expect.closeTo(278.15, 9)],
+    ['temperature', 'hot', expect.closeTo(303.15, 9)],
+  ]);
+  expect(extractFigures('Ground loop returning at eight degrees C, eight. Flow to the underfloor at forty.').map((f) => f.si)).toEqual([expect.closeTo(281.15, 9), expect.closeTo(313.15, 9)]);
+  // (Not a COP said after the water: "into 35 °C floor water with a COP of 4".)
+  expect(extractFigures('The heat pump takes heat from outdoor air at 5 °C into 35 °C floor water with a COP of 4.').filter((f) => f.kind === 'temperature')).toHaveLength(2);
+  // (Nor a number of another paragraph.)
+  expect(extractFigures('The boiler is at 60 °C.\nWe ran it 20 minutes at about thirty.').filter((f) => f.kind === 'temperature')).toHaveLength(1);
+});
