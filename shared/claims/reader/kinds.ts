@@ -15,7 +15,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, BURNER_RE, NAMED_
 const ASIDE = '(?:[^\\S\\n]*,[^,;.!?\\n]{3,90},|[^\\S\\n]+(?:over|during|across|for|in|at)[^\\S\\n]+(?:the|a|an|its|our|this)[^\\S\\n]+[^\\d,;:.!?\\n]{2,40}(?=:))?';
 const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|)»”"'’]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
 /** Between a COP and its value: the mode and whose it is ("COP in cooling of", "heating COP of the BW-8 is"). */
-const COP_OWNER = '(?:[^\\S\\n]+(?:in|for|when)[^\\S\\n]+(?:heating|cooling)(?:[^\\S\\n]+mode)?)?(?:[^\\S\\n]+(?:of|for)[^\\S\\n]+(?:the|this|our|its|each|every|a|an)[^\\S\\n]+(?:[\\p{L}\\p{N}-]+[^\\S\\n]+){0,2}?[\\p{L}\\p{N}][\\p{L}\\p{N}-]*(?=[^\\S\\n]+(?:is|was|of|at|=|:)))?';
+const COP_OWNER = '(?:[^\\S\\n]+(?:in|for|when)[^\\S\\n]+(?:heating|cooling)(?:[^\\S\\n]+mode)?)?(?:[^\\S\\n]+(?:of|for)[^\\S\\n]+(?:the|this|our|its|each|every|a|an)[^\\S\\n]+(?:[\\p{L}\\p{N}-]+[^\\S\\n]+){0,2}?[\\p{L}\\p{N}][\\p{L}\\p{N}-]*(?=[^\\S\\n]+(?:is|was|were|of|at|lay|lies|sits|sat|stands|stood|ranged|ranges|varied|varies|came|comes|=|:)))?';
 const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${COP_OWNER}${ASIDE}${CONNECT}$`, 'u');
 /** An energy efficiency ratio (EER or SEER, in BTU/h of cooling per watt): a cooling COP × 3.412. */
 const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
@@ -215,11 +215,16 @@ function sentenceStart(text: string, at: number): number {
   return m ? m[0].length : 0;
 }
 
+/** After a number: the things it counts ("six units", "12 houses", "three of the machines"). */
+const COUNTED_AFTER_RE = /^[^\S\n]+(?:of[^\S\n]+the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:units(?![^\S\n]+(?:of|for|back|out|per|in|returned|delivered|produced|to)(?!\p{L}))|houses|homes|flats|buildings|machines|models|devices|prototypes|sites|customers|households|people|students|tests|trials|samples|sessions|rows|columns|pages)(?!\p{L})(?![^\S\n]+(?:of|for)[^\S\n]+(?:every|each|one)(?!\p{L}))/iu;
+
 export function bareKind(text: string, start: number, end: number, floor: number): { kind: FigureKind; role?: FigureRole; derived?: string; factor?: number } | null {
   const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start);
   // An operand of a worked division or product ("η = 3.1/172 = 0.018"): a step, not a figure; the
   // result after "=" is read.
   if (/^[^\S\n]*[/×*÷][^\S\n]*\d/u.test(text.slice(end, end + 6)) || /\d[^\S\n]*[/×*÷][^\S\n]*$/u.test(before)) return null;
+  // "the heating COP of the six units lay between 3.8 and 4.4": a count of things, not the figure.
+  if (/(?<!\p{L})(?:the|these|those|all|our|its|their|your|its)[^\S\n]+$/iu.test(text.slice(Math.max(0, start - 8), start)) && COUNTED_AFTER_RE.test(text.slice(end, end + 30))) return null;
   // "about 0.97 of the speed of light": a speed as a fraction of c.
   SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
   if (SPEED_OF_LIGHT_AFTER_RE.test(text)) return { kind: 'speed', factor: C_M_PER_S };

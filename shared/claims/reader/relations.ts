@@ -21,7 +21,9 @@ import { relateTemperatures } from './temperatures';
 const INPUT_NOT_GIVEN_RE =
   /(?<!\p{L})(?:(?:gives?|gave|states?|stated|reports?|reported|provides?|provided|quotes?|quoted|lists?|listed|offers?|offered)[^\S\n]+no[^\S\n]+(?:figures?|numbers?|values?|data|measurements?|readings?)|(?:does|do|did)[^\S\n]*(?:not|n't)[^\S\n]+(?:say|state|give|report|disclose|quote|list|mention|measure))[^.;!?\n]{0,40}(?:input|takes?(?: in)?|draws?|consumes?|uses?|needs?|supply|feeds? it)(?!\p{L})/iu;
 /** A store of energy the text names: a battery, a flywheel, a pack that "stores" or "holds" energy. */
-const STORE_NAMED_RE = /(?<!\p{L})(?:batter(?:y|ies)|flywheels?|accumulators?|supercapacitors?|capacitor banks?|(?:stores|stored|holds|held)[^\S\n]+(?:about[^\S\n]+|up[^\S\n]+to[^\S\n]+)?[\d.,]+[^\S\n]*(?:k|M|G)?(?:Wh|J))(?!\p{L})/u;
+/** A store said to be absent: "no battery", "without any batteries", "no fuel, battery or mains". */
+const NO_STORE_RE = /(?<!\p{L})(?:no|without(?:[^\S\n]+any)?|nor|not a)[^\S\n]+(?:[\p{L}-]+,?[^\S\n]+(?:(?:or|nor|and)[^\S\n]+)?){0,3}(?:batter(?:y|ies)|packs?|flywheels?|accumulators?|(?:super)?capacitors?)(?!\p{L})/giu;
+const STORE_NAMED_RE = /(?<!\p{L})(?:batter(?:y|ies)|Batter(?:y|ies)|(?:battery |EV |traction )?[Pp]acks?|flywheels?|accumulators?|supercapacitors?|capacitor banks?|(?:stores|stored|holds|held)[^\S\n]+(?:about[^\S\n]+|up[^\S\n]+to[^\S\n]+)?[\d.,]+[^\S\n]*(?:k|M|G)?(?:Wh|J))(?!\p{L})/u;
 /** "No input figure was given": the input is not known, not nil. */
 const NO_INPUT_FIGURE_RE = /(?<!\p{L})no[^\S\n]+(?:input|supply)[^\S\n]+(?:power[^\S\n]+|energy[^\S\n]+)?(?:figures?|numbers?|values?|data|measurements?|readings?)(?!\p{L})/iu;
 const SELF_RUNNING_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'giu');
@@ -392,7 +394,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const matches = [...text.matchAll(SELF_RUNNING_RE)].filter(said);
     // A label alone ("free energy", "perpetual") beside a store the text names ("the bank stores 30 kWh",
     // "the battery holds 2.4 kWh"): the store explains the output, and the label is someone's word for it.
-    const labelsOnly = matches.length > 0 && matches.every((x) => /^(?:free energy|perpetual)$/iu.test(x[0]));
+    // ("No fuel!" of a battery pack: a store needs no fuel either.)
+    const labelsOnly = matches.length > 0 && matches.every((x) => /^(?:free energy|perpetual|(?:needs? |requires? |takes |uses |with |without )?no (?:external )?fuel(?: at all| ever)?|without (?:any )?fuel)$/iu.test(x[0]));
     const hasThrust = drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power');
     const outLike = (d: Draft) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust));
     // In a text of several paragraphs, the words and the output in one paragraph: "perpetual motion in a
@@ -406,7 +409,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // "delivering 250 W", an output named as such anywhere; not a figure of no side.)
     const paired = several ? matches.find((x) => inParagraph(x)) : undefined;
     const first = paired ?? matches[0] ?? null;
-    const m = labelsOnly && STORE_NAMED_RE.test(text) ? null : first;
+    // (A store said to be absent — "No battery, no mains, no fuel" — explains nothing.)
+    const m = labelsOnly && STORE_NAMED_RE.test(text.replace(NO_STORE_RE, ' ')) ? null : first;
     const out = m && paired ? inParagraph(m) : several ? drafts.find((d) => outLike(d) && d.role !== null) : drafts.find(outLike);
     const inputUnknown =
       /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data|figure|value|itself|current))*[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text) ||

@@ -94,6 +94,13 @@ const PEOPLE_TAKE_LEAD_RE = new RegExp(`(?<!\\p{L})(?:we|you|they|I|one)[^\\S\\n
 const TAKEN_FROM_IT_RE = /^[^\S\n]*(?:of[^\S\n]+(?:power|electricity|energy)[^\S\n]+)?(?:off|out[^\S\n]+of|from)[^\S\n]+(?:it|them|the[^\S\n]+(?:generator|alternator|rotor|wheel|machine|device|unit|coil|output))(?!\p{L})/iu;
 
 function roleFromWords(text: string, roles: CompiledRoles, start: number, end: number, floor: number): FigureRole {
+  // "the dry mass, including the payload adapter and residual propellant, is 610 kg", "at burnout, with the
+  // landing propellant reserve on board, the stack weighs 148 t": the mass left after the burn, whatever
+  // propellant a clause set off between names.
+  if (roles === ROLES.mass) {
+    const lead = text.slice(Math.max(floor, start - 220), start);
+    if (DRY_MASS_LEAD_RE.test(lead) || BURNOUT_LEAD_RE.test(lead)) return 'dry';
+  }
   if (roles === ROLES.temperature) {
     // A heat pump's or fridge's source is its cold side and its sink the warm one (the other way round for an engine).
     if (HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text)) {
@@ -186,6 +193,13 @@ const LOAD_RECEIVES_RE =
 
 /** Just before a role word: a word that says it is absent ("no", "without", "zero"). */
 const NEGATED_LEAD_RE = /(?<!\p{L})(?:no|without|zero|never|nor)[^\S\n]+(?:(?:any|external|outside|other|electrical|electric)[^\S\n]+)?$/iu;
+
+/** "dry mass, including …, is", "empty mass:": the words of a craft's mass after the burn, a clause set off by commas allowed between. */
+const DRY_MASS_LEAD_RE =
+  /(?<!\p{L})(?:dry|empty|burn-?out|final)[^\S\n]+mass(?:[^\S\n]*,[^,;.!?\n]{0,120},)?[^\S\n]*(?:(?:is|was|of|at|comes to|totals?|totalling|:|=)[^\S\n]*)?(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
+/** "at burnout, with …, the stack weighs": the mass at the end of the burn. */
+const BURNOUT_LEAD_RE =
+  /(?<!\p{L})at[^\S\n]+(?:burn-?out|engine cut-?off|cut-?off|MECO|shut-?down|the end of the burn)(?:[^\S\n]*,[^;.!?\n]{0,160},)?[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,4}?(?:weighs?|weighed|is|was|masses|has a mass of|comes to)[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
 
 export function roleFor(text: string, kind: FigureKind, start: number, end: number, floor: number): FigureRole {
   if (kind === 'power' || kind === 'energy') {

@@ -189,3 +189,42 @@ describe('lawful devices that sound impossible', () => {
     expect(read('Tests of 3 hours, 2 hours and 1 hour.').map((x) => x.si)).toEqual([10800, 7200, 3600]);
   });
 });
+
+describe('from technical notes near their limits (invented test data)', () => {
+  const checks = (text: string) => runClaimChecks(read(text), { text, classes: [] }).checks;
+  test('"the dry mass, including … residual propellant, is 610 kg" is the dry mass; the rocket equation then holds', () => {
+    const text = 'The engine has a vacuum specific impulse of 452 s. The loaded stage has a wet mass of 2,450 kg; after the burns the dry mass, including the payload adapter and residual propellant, is 610 kg. The mission requires a total Δv of 6.05 km/s.';
+    expect(roleOf(read(text), '610 kg')).toBe('dry');
+    // Δv = 452 × 9.80665 × ln(2450/610) = 6163 m/s (Tsiolkovsky; g0 exact, SI Brochure): 6.05 km/s is within it.
+    expect(checks(text).find((c) => c.check === 'rocket-equation')?.finding).toBe('consistent');
+  });
+  test('"at burnout, with the landing propellant reserve on board, the stack weighs 148 t" is the mass after the burn', () => {
+    const text = 'The engines give an effective exhaust speed of 3.1 km/s. The stage lifts off at 540 t, and at burnout, with the landing propellant reserve on board, the stack weighs 148 t. It must deliver a Δv of 3.95 km/s.';
+    expect(roleOf(read(text), '148 t')).toBe('dry');
+    // 3100 × ln(540/148) = 4012 m/s ≥ 3950 m/s.
+    expect(checks(text).find((c) => c.check === 'rocket-equation')?.finding).toBe('consistent');
+  });
+  test('"the heating COP of the six units lay between 3.8 and 4.4": six is a count; the COP is the range', () => {
+    expect(read('At that point the daily heating COP of the six units lay between 3.8 and 4.4.')).toMatchObject([{ kind: 'cop', si: 3.8, upper: { si: 4.4 } }]);
+    expect(read('For every unit of energy it takes, the converter gives back 1.3 units, says the maker.')).toMatchObject([{ kind: 'efficiency', si: 1.3 }]);
+  });
+  test('"No fuel!" of a battery pack is no nil input; "no battery, no mains, no fuel" of a module is', () => {
+    const pack = 'Pack 75 kWh, 290 kg\nPeak discharge 1.2 kW/kg for ten seconds\n"Instant torque, silent, no fuel!" The energy comes from the charger.';
+    expect(checks(pack).some((c) => c.finding === 'breaks')).toBe(false);
+    const module = 'No battery, no mains, no fuel: the zero-point module has kept a 2 kW heater going for three weeks.';
+    expect(checks(module).find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+  test('a line opening with "P_in (…) =" gives its figure the input side; "P_in = 48 V × 10 A" gives it through a voltage and a current', () => {
+    const log = 'P_in (electrolysis, logged) = 40 ± 0.5 W\nP_out (flow calorimetry) = 48–55 W over the steady section';
+    const f = read(log);
+    expect(roleOf(f, '40 ± 0.5 W')).toBe('in');
+    expect(roleOf(f, '48–55 W')).toBe('out');
+    // Least output over most input: 48/40.5 = 1.185 > 1.
+    expect(checks(log).find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(48 / 40.5, 9);
+    expect(roleOf(read('P_in = 48 V × 10 A; P_out = 520 W at the shaft.'), '520 W')).toBe('out');
+  });
+  test('energy "drawn from the vacuum" is no input', () => {
+    expect(roleOf(read('In the test it powered a 100 W load for 48 hours, that is 4.8 kWh "drawn from the vacuum".'), '4.8 kWh')).not.toBe('in');
+    expect(roleOf(read('It used 4.8 kWh drawn from the grid.'), '4.8 kWh')).toBe('in');
+  });
+});

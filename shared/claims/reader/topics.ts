@@ -158,3 +158,25 @@ export function asideSignals(text: string, drafts: Draft[]): void {
   if (signals.length === 0 || !inputs.some((d) => !signals.includes(d) && SUPPLY_NEAR_RE.test(around(d)))) return;
   for (const d of signals) d.role = 'aside';
 }
+
+/** A line's label of an input or an output: "P_in (electrolysis, logged) = 40 ± 0.5 W", "E_out: 12 kWh". */
+const LINE_LABEL_RE = /^[^\S\n]*[-•*]?[^\S\n]*(?:P|E|W|Q̇|Q)_?\{?(in|out)\}?(?![\p{L}\d])[^=:\n]{0,50}?[=:]/imu;
+
+/**
+ * A figure of power or energy on a line that opens with an input or output label takes that label's side,
+ * whatever word the label's note in brackets holds ("(electrolysis, logged)" is no "logged" output).
+ */
+export function rolesFromLineLabels(text: string, drafts: Draft[]): void {
+  let at = 0;
+  for (const line of text.split('\n')) {
+    const m = LINE_LABEL_RE.exec(line);
+    if (m) {
+      const from = at + m[0].length;
+      // (The label's own figure: the first read after it, if it is a power or an energy — "P_in = 48 V × 10 A;
+      // P_out = 520 W" gives its input as a voltage and a current.)
+      const first = drafts.find((d) => d.start >= from && d.start < at + line.length && !d.derived);
+      if (first && (first.kind === 'power' || first.kind === 'energy') && first.role !== 'aside') first.role = m[1].toLowerCase() === 'in' ? 'in' : 'out';
+    }
+    at += line.length + 1;
+  }
+}

@@ -46,7 +46,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires|is supplied with|was supplied with|is fed with|was fed with|runs on|ran on)',
       '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
       '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
-      'inputs?', 'drawn', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 
+      'inputs?', '(?:"|“)?drawn(?! from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point|a?ether|nowhere|nothing|thin air))', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 
       // "about 120 W of sunlight falls on its folds": the light a panel takes.
       'of (?:sun)?light (?:falls|falling|fell|lands|landing|shines|shining|arrives|arriving|strikes|striking|hits|hitting)', 'of (?:incident |incoming )?(?:sunlight|solar (?:power|radiation|energy)|irradiance)', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply',
       // "the array feeds 8.2 A at 36 V into the charge controller": what goes into a converter is its input.
@@ -74,6 +74,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
       'to (?:the|its|their|a|an) (?:house|home|grid|load|network|building|car|motor|lamp|heater|pump|phone|device|string|bulb|lamps|wheel|laptop|computer|tablet|appliance|consumer|user|bank|lights?|heating|tank)', 'into the (?:[\\w\\x27\\u2019-]+ )?(?:battery|grid|load|bank|network|mains|store|tank|reservoir|pond|basin)(?: bank)?', 'net(?= (?:output|from|at|to|into|of electricity|electrical)|[,.;]|$)', '(?:was|were|is|are) (?:delivered|produced|generated|returned|exported|recovered)',
       'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at (?:the|its) (?:output )?terminals', 'at the (?:crank|output |drive |propeller |main )?shaft', 'at the (?:wheels?|axles?|flywheel|crank)', 'of shaft power', 'on its output terminals',
+      // "4.8 kWh 'drawn from the vacuum'": what a claimed source gives, not what it takes.
+      '(?:"|“|\x27|‘)?(?:drawn|taken|extracted|harvested|pulled|pumped|tapped) from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point(?: field| energy)?|a?ether|nowhere|nothing|thin air)',
       'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output', '(?:reached|reaches|reach|went to|goes to|got to|arrived at|made it to) (?:the |its )?(?:wheels?|shaft|axles?|load|output|grid|battery|house|motor)', 'back(?! (?:in|into|to (?:the|its) (?:input|supply|source)))'],
   },
 ];
