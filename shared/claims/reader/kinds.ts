@@ -12,7 +12,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, BURNER_RE, NAMED_
 
 /** ", measured per §7 of the test protocol," between a COP and its value: a clause set off by commas. */
 // (Or a span of time or a test it was measured over, before a colon: "heating COP over the test week: 3.9".)
-const ASIDE = '(?:[^\\S\\n]*,[^,;.!?\\n]{3,90},|[^\\S\\n]+(?:over|during|across|for|in|at)[^\\S\\n]+(?:the|a|an|its|our|this)[^\\S\\n]+[^\\d,;:.!?\\n]{2,40}(?=:))?';
+const ASIDE = '(?:(?:[^\\S\\n]+(?:over|during|across|for|in|at)[^\\S\\n]+(?:the|a|an|its|our|this)[^\\S\\n]+[^\\d,;:.!?\\n]{2,40}(?=[:,]))?(?:[^\\S\\n]*,[^,;.!?\\n]{3,140},)?)';
 const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|)»”"'’]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
 /** Between a COP and its value: the mode and whose it is ("COP in cooling of", "heating COP of the BW-8 is"). */
 const COP_OWNER = '(?:[^\\S\\n]+(?:in|for|when)[^\\S\\n]+(?:heating|cooling)(?:[^\\S\\n]+mode)?)?(?:[^\\S\\n]+(?:of|for)[^\\S\\n]+(?:the|this|our|its|each|every|a|an)[^\\S\\n]+(?:[\\p{L}\\p{N}-]+[^\\S\\n]+){0,2}?[\\p{L}\\p{N}][\\p{L}\\p{N}-]*(?=[^\\S\\n]+(?:is|was|were|of|at|lay|lies|sits|sat|stands|stood|ranged|ranges|varied|varies|came|comes|=|:)))?';
@@ -29,7 +29,7 @@ const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})
 const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');
 /** "efficiency … 45%": the keyword, then up to 60 characters without digits or a sentence break. */
 // (", measured as electrical output over heat absorbed at the head, was about 27 %": a clause set off by commas between.)
-const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip|AFUE)(?!\p{L})((?:[^\S\n]*,[^,\d.;!?\n]{3,90}[,:]|[^\S\n]*[—–][^—–\d.;!?\n]{3,100}[—–])?[^\d.;!?\n]{0,60})$/iu;
+const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip|AFUE)(?!\p{L})((?:[^,\d.;!?\n]{0,25}?,[^,\d.;!?\n]{3,140}[,:]|[^\S\n]*[—–][^—–\d.;!?\n]{3,100}[—–])?[^\d.;!?\n]{0,60})$/iu;
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
 const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)|round[- ]?trip(?:[^\S\n]+efficiency)?)(?!\p{L})/iuy;
@@ -228,7 +228,9 @@ export function bareKind(text: string, start: number, end: number, floor: number
   // "about 0.97 of the speed of light": a speed as a fraction of c.
   SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
   if (SPEED_OF_LIGHT_AFTER_RE.test(text)) return { kind: 'speed', factor: C_M_PER_S };
-  if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before)) return { kind: 'cop' };
+  // (A clause set off by commas may take the COP further back than the usual window.)
+  const wide = text.slice(Math.max(floor, start - BEFORE_WINDOW - 160), start);
+  if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before) || COP_SYMBOL_BEFORE_RE.test(wide) || COP_WORDS_BEFORE_RE.test(wide)) return { kind: 'cop' };
   // "The mean heating COP of the units at the rating point (…) was printed as 0.30": the subject of the
   // sentence names what a printed, given or stated figure is.
   if (PRINTED_AS_BEFORE_RE.test(text.slice(Math.max(0, start - 30), start))) {

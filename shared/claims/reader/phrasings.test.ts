@@ -794,3 +794,9 @@ test('a bare number said of the other side in the next sentence takes the temper
   // (Nor a number of another paragraph.)
   expect(extractFigures('The boiler is at 60 °C.\nWe ran it 20 minutes at about thirty.').filter((f) => f.kind === 'temperature')).toHaveLength(1);
 });
+
+test('an efficiency or a COP whose value comes after a long clause set off by commas (invented test data)', () => {
+  expect(extractFigures('The net efficiency of the unit, corrected to the reference conditions of the contract, was 61 %, from the gas.')).toMatchObject([{ kind: 'efficiency', si: 0.61 }]);
+  expect(extractFigures("The unit's net efficiency, electrical output after the feed pump and condenser fans divided by the heat taken from the brine, averaged 14.5 %.")).toMatchObject([{ kind: 'efficiency', si: 0.145 }]);
+  expect(extractFigures("The heating COP over the week, from metered heat delivered to the depot's underfloor and hot-water circuits divided by metered electricity, was 4.9.")).toMatchObject([{ kind: 'cop', role: 'heating', si: 4.9 }]);
+});
