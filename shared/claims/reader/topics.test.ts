@@ -228,3 +228,14 @@ describe('from technical notes near their limits (invented test data)', () => {
     expect(roleOf(read('It used 4.8 kWh drawn from the grid.'), '4.8 kWh')).toBe('in');
   });
 });
+
+test('"a 20 kWh flywheel bank fed 500 W into the local line for 30 hours": the power fed into a line is the output, the store what went in (invented test data)', () => {
+  const text = 'Grid support trial: a 20 kWh flywheel bank fed 500 W into the local line for 30 hours before it had to be spun up again.';
+  const f = read(text);
+  expect(roleOf(f, '20 kWh')).toBe('in');
+  expect(roleOf(f, '500 W')).toBe('out');
+  // 500 W × 30 h = 15 kWh = 54 MJ out of 20 kWh = 72 MJ: 0.75, within the first law.
+  const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.75, 9);
+});
