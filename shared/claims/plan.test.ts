@@ -1025,3 +1025,16 @@ describe('an engine efficiency checked on a guess the text does not make (invent
     expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
   });
 });
+
+test("a heat pump's COP past the Carnot bound leads to the entry on figures above 100 %, an engine's efficiency to the engines' (invented test data)", () => {
+  // Carnot COP between −10 °C and 55 °C: 328.15/65 = 5.05 < 6.2 claimed (breaks).
+  const pump = 'The Orrin 9 heat pump keeps a house on 55 °C radiator water even at −10 °C outdoors, and there it is 620 % efficient.';
+  const leads = claimSignals(extractFigures(pump), pump).leads.map((l) => l.mechanismClass);
+  expect(leads).toContain('efficiency-above-unity');
+  expect(leads).not.toContain('single-reservoir-engine');
+  const engine = 'The engine is 40 % efficient between 90 °C and 20 °C.';
+  expect(claimSignals(extractFigures(engine), engine).leads.map((l) => l.mechanismClass)).toContain('single-reservoir-engine');
+  // (Heat "flowing through it" made electricity: a converter's.)
+  const stove = 'The stovepipe generator works across a 20 °C temperature difference, its hot plate at 90 °C, and converts 6 % of the heat flowing through it into electricity.';
+  expect(claimSignals(extractFigures(stove), stove).leads.map((l) => l.mechanismClass)).toContain('converter-beyond-limit');
+});

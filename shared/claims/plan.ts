@@ -51,7 +51,7 @@ export interface FindingLead {
 export const SIGNALLABLE_CLASSES = ['propellant-free-thrust', 'over-unity', 'single-reservoir-engine', 'converter-beyond-limit', 'faster-than-light'] as const;
 
 /** Converters of light or heat to electricity with no moving parts (their limits are the Carnot, Landsberg and Shockley–Queisser bounds). */
-const CONVERTER_RE = /(?<!\p{L})(?:thermoelectric|TEGs?|Seebeck|thermophotovoltaic|TPV|thermionic|solar cells?|photovoltaic|PV cells?|PV modules?)(?!\p{L})/iu;
+const CONVERTER_RE = /(?<!\p{L})(?:thermoelectric|TEGs?|Seebeck|Peltier|thermophotovoltaic|TPV|thermionic|solar cells?|photovoltaic|PV cells?|PV modules?|(?:of )?the heat (?:flowing|passing) through(?: it)?)(?!\p{L})/iu;
 
 /**
  * The mechanism classes a claim's figures point to, for the matcher:
@@ -100,6 +100,12 @@ export function claimSignals(figures: Figure[], text: string): { classes: string
     }
     // A solar cell's or a thermoelectric converter's efficiency over its limit is its own class.
     if (run.check === 'carnot') {
+      // (A heat pump's or a fridge's COP past its bound is what the entry on figures above 100 % answers.)
+      const cop = run.outputs.some((o) => o.name === 'cop_heating_ratio' || o.name === 'cop_cooling_ratio') && !run.outputs.some((o) => o.name === 'eta_ratio');
+      if (cop) {
+        leads.push({ mechanismClass: 'efficiency-above-unity', why: "its own figures put a heat pump's or a refrigerator's COP past the Carnot bound" });
+        continue;
+      }
       const cls = CONVERTER_RE.test(text) ? 'converter-beyond-limit' : 'single-reservoir-engine';
       out.add(cls);
       leads.push({ mechanismClass: cls, why: 'its own figures go past the Carnot limit' });
