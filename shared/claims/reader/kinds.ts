@@ -227,7 +227,8 @@ export function bareKind(text: string, start: number, end: number, floor: number
   if (/(?<!\p{L})(?:the|these|those|all|our|its|their|your|its)[^\S\n]+$/iu.test(text.slice(Math.max(0, start - 8), start)) && COUNTED_AFTER_RE.test(text.slice(end, end + 30))) return null;
   // "about 0.97 of the speed of light": a speed as a fraction of c.
   SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
-  if (SPEED_OF_LIGHT_AFTER_RE.test(text)) return { kind: 'speed', factor: C_M_PER_S };
+  // ("a tenth of the speed of light": the fraction in words took its "of" with it.)
+  if (SPEED_OF_LIGHT_AFTER_RE.test(text) || (/of$/iu.test(text.slice(start, end)) && /^[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light(?!\p{L})/iu.test(text.slice(end, end + 30)))) return { kind: 'speed', factor: C_M_PER_S };
   // (A clause set off by commas may take the COP further back than the usual window.)
   const wide = text.slice(Math.max(floor, start - BEFORE_WINDOW - 160), start);
   if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before) || COP_SYMBOL_BEFORE_RE.test(wide) || COP_WORDS_BEFORE_RE.test(wide)) return { kind: 'cop' };

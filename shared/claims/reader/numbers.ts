@@ -68,10 +68,11 @@ function cleanNumber(m: RegExpExecArray): string {
 
 const WORD_NUMBER_HINT = /(?<!\p{L})(?:billion|million|quarter|third|tenth|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|sixteen|seventeen|eighteen|nineteen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|thousand|half|dozen|a quarter)(?!\p{L})/iu;
 
-const FRACTION_WORDS_RE = /(?<!\p{L})(half a dozen|half|a quarter|one quarter|three quarters|a third|one third|two thirds|a tenth|one tenth|a dozen|a hundred|a thousand|a million|a billion|a trillion)(?:[^\S\n]+of)?(?:[^\S\n]+an?)?(?=[^\S\n]+\p{L}|-\p{L})/giu;
+const FRACTION_WORDS_RE = /(?<!\p{L})(a ten-thousandth|one ten-thousandth|a hundred-thousandth|a millionth|one millionth|a thousandth|one thousandth|a hundredth|one hundredth|half a dozen|half|a quarter|one quarter|three quarters|a third|one third|two thirds|a tenth|one tenth|a dozen|a hundred|a thousand|a million|a billion|a trillion)(?:[^\S\n]+of)?(?:[^\S\n]+an?)?(?=[^\S\n]+\p{L}|-\p{L})/giu;
 const FRACTION_VALUE: Record<string, number> = {
   'half a dozen': 6, 'a dozen': 12,
   half: 0.5, 'a quarter': 0.25, 'one quarter': 0.25, 'three quarters': 0.75, 'a third': 1 / 3, 'one third': 1 / 3, 'two thirds': 2 / 3,
+  'a ten-thousandth': 1e-4, 'one ten-thousandth': 1e-4, 'a hundred-thousandth': 1e-5, 'a millionth': 1e-6, 'one millionth': 1e-6, 'a thousandth': 1e-3, 'one thousandth': 1e-3, 'a hundredth': 0.01, 'one hundredth': 0.01,
   'a tenth': 0.1, 'one tenth': 0.1, 'a hundred': 100, 'a thousand': 1000, 'a million': 1e6, 'a billion': 1e9, 'a trillion': 1e12,
 };
 

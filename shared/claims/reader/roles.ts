@@ -107,6 +107,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       const lead = text.slice(Math.max(floor, start - 40), start);
       if (/(?<!\p{L})(?:heat[^\S\n]+)?sink(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'hot';
       if (/(?<!\p{L})(?:(?:air|ground|water|brine|heat|outdoor)[- ])?source(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'cold';
+      // "rejecting heat on deck at 32 °C": where a fridge or a heat pump rejects its heat is its warm side.
+      if (/(?<!\p{L})(?:reject(?:s|ed|ing)?|dump(?:s|ed|ing)?|shed(?:s|ding)?|discharg(?:es|ed|ing))[^\S\n]+(?:(?:its|the)[^\S\n]+)?(?:waste[^\S\n]+)?heat(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]+(?:at|of)[^\S\n]*(?:(?:about|around|roughly|some)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
     }
     const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start)) ?? STRONG_FLUID_RE.exec(text.slice(Math.max(floor, start - 40), start));
     if (strong) return /^(?:hot|warm|sun|heated)/i.test(strong[1]) ? 'hot' : 'cold';

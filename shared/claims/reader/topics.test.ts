@@ -239,3 +239,31 @@ test('"a 20 kWh flywheel bank fed 500 W into the local line for 30 hours": the p
   expect(run?.finding).toBe('consistent');
   expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.75, 9);
 });
+
+describe("from examiners' and reviewers' prose (invented test data)", () => {
+  test('a chiller "rejecting heat on deck at 32 °C with a lift of 30 K": 32 °C is its warm side, the cold one 30 K below', () => {
+    const f = read('The chiller removes 11.5 units of heat for every unit of electricity (a cooling COP of 11.5), rejecting heat on deck at 32 °C with a lift of 30 K across the machine.');
+    const temps = f.filter((x) => x.kind === 'temperature');
+    expect(temps.map((x) => [x.role, x.si])).toEqual([
+      ['hot', expect.closeTo(305.15, 9)],
+      ['cold', expect.closeTo(275.15, 9)],
+    ]);
+    // (An engine's rejected heat stays its cold side.)
+    expect(read('The engine rejects heat to the river at 15 °C.')[0].role).toBe('cold');
+  });
+  test('"an electric motor of 5 hp drives, through a gearbox, a generator delivering 6.2 kW": the motor is the input', () => {
+    const text = 'The set is one in which an electric motor of 5 hp drives, through a flywheel and a step-up gearbox, a generator delivering 6.2 kW.';
+    const f = read(text);
+    expect(roleOf(f, '5 hp')).toBe('in');
+    // 5 hp = 3728.5 W (NIST SP 811 B.8); 6200/3728.5 = 1.66 > 1.
+    expect(runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+  test('"well under a ten-thousandth of the speed of light" is a bound beside the stated speed; "a tenth of the speed of light" is a speed', () => {
+    const f = read('The claim recites a probe reaching 40,000 mph. It is well under a ten-thousandth of the speed of light.');
+    expect(f.map((x) => [x.kind, x.role])).toEqual([
+      ['speed', null],
+      ['speed', 'aside'],
+    ]);
+    expect(read('The craft flies at a tenth of the speed of light.')).toMatchObject([{ kind: 'speed', si: expect.closeTo(29979245.8, 3) }]);
+  });
+});

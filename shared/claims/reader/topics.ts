@@ -134,6 +134,14 @@ export function asideApparentSpeeds(text: string, drafts: Draft[]): void {
       apparent.push(si);
     }
   }
+  // "well under a ten-thousandth of the speed of light": a bound the speed is said to keep under, where the
+  // text states the speed itself ("40,000 mph").
+  const plainSpeeds = drafts.filter((d) => d.kind === 'speed' && d.role !== 'aside' && !UNDER_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)));
+  for (const d of drafts) {
+    if (d.kind !== 'speed' || d.role === 'aside' || !UNDER_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start))) continue;
+    const ofLight = /^[^\S\n]*(?:of[^\S\n]+)?(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light/iu.test(text.slice(d.end, d.end + 30)) || /(?:speed|velocity) of light|c$/iu.test(text.slice(d.start, d.end));
+    if (ofLight && plainSpeeds.some((o) => o !== d)) d.role = 'aside';
+  }
   // The same speed said elsewhere ("Quasar jet caught moving at four and a half times the speed of light"
   // in a headline, "appears to move sideways at 4.5 c" below) is the same appearance.
   for (const d of drafts) {
@@ -141,6 +149,9 @@ export function asideApparentSpeeds(text: string, drafts: Draft[]): void {
     if (d.kind === 'speed' && d.role !== 'aside' && apparent.some((a) => Math.abs(si / a - 1) <= 0.001)) d.role = 'aside';
   }
 }
+
+/** Words of a bound a speed keeps under, right before it ("well under a", "less than", "below"). */
+const UNDER_BEFORE_RE = /(?<!\p{L})(?:(?:well|far|way|just|still)[^\S\n]+)?(?:under|below|less than|short of|no more than|not even)[^\S\n]+(?:(?:a|an|the)[^\S\n]+)?$/iu;
 
 /** Words of a signal that an amplifier steers, not a supply it draws from. */
 const SIGNAL_NEAR_RE = /(?<!\p{L})(?:signals?|preamp\w*|drive level|input level)(?!\p{L})/iu;

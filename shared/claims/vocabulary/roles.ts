@@ -42,7 +42,9 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?<![\\w-])in ?=',
     ],
     after: [
-      'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 'from the (?:wall|mains|socket|outlet|plug|grid|(?:bench |power |lab |DC |AC )?supply|battery|batteries)', 'compressors?',
+      'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 
+      // "an electric motor of 5 hp drives, through a gearbox, a generator": what drives the generator is the set's input.
+      '(?:drives|driving|drove|turns|turning|spins|spinning)(?:,[^.;!?\\n]{0,60},)? (?:a|the|its) (?:[\\w-]+ )?(?:generators?|alternators?|dynamos?)', 'from the (?:wall|mains|socket|outlet|plug|grid|(?:bench |power |lab |DC |AC )?supply|battery|batteries)', 'compressors?',
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires|is supplied with|was supplied with|is fed with|was fed with|runs on|ran on)',
       '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
       '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
