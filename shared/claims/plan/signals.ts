@@ -115,7 +115,9 @@ const AIR_WORDS_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|(?:pushing|pushes|push|mov
  */
 export function propellantFreeParagraphs(text: string): [number, number][] {
   const spans: [number, number][] = [];
-  const re = /\n[^\S\n]*\n/gu;
+  // (A transcript's turns — "HOST: …", "FOUNDER (R. A.): …" on lines of their own — are its paragraphs.)
+  const turns = !/\n[^\S\n]*\n/u.test(text) && (text.match(/^[^\S\n]*[\p{Lu}][\p{L} .'’()-]{0,40}:[^\S\n]/gmu) ?? []).length >= 3;
+  const re = turns ? /\n/gu : /\n[^\S\n]*\n/gu;
   let from = 0;
   for (let m = re.exec(text); ; m = re.exec(text)) {
     const end = m ? m.index : text.length;

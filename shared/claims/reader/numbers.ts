@@ -148,6 +148,17 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     for (let i = out.length - 1; i >= 0; i--) if (out[i].start < end && m.index! < out[i].end) out.splice(i, 1);
     out.push({ start: m.index!, end, value: hundreds * 100 + tens + ones });
   }
+  // "two point four times ten to the minus three": scientific notation said aloud.
+  for (const o of [...out]) {
+    const m = SPOKEN_POWER_OF_TEN_RE.exec(text.slice(o.end));
+    if (!m) continue;
+    const exp = /^\d+$/u.test(m[2]) ? Number(m[2]) : SMALL_NUMBER_WORDS.indexOf(m[2].toLowerCase());
+    if (!(exp >= 0)) continue;
+    const end = o.end + m[0].length;
+    o.value *= 10 ** (m[1] ? -exp : exp);
+    for (let i = out.length - 1; i >= 0; i--) if (out[i] !== o && out[i].start < end && o.start < out[i].end) out.splice(i, 1);
+    o.end = end;
+  }
   // "nought point five", "point eight", "oh point two five": a decimal said digit by digit with no whole
   // number (or a nought), which compromise reads as the digits after the point alone.
   for (const m of text.matchAll(SPOKEN_DECIMAL_RE)) {
@@ -162,6 +173,9 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
   out.sort((a, b) => a.start - b.start);
   return out;
 }
+
+/** After a number said aloud: "times ten to the minus three", "times ten to the power of six". */
+const SPOKEN_POWER_OF_TEN_RE = /^[^\S\n]+times[^\S\n]+ten[^\S\n]+to[^\S\n]+the[^\S\n]+(?:power[^\S\n]+of[^\S\n]+)?(minus[^\S\n]+|negative[^\S\n]+)?(\d+|zero|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve)(?![\p{L}\d])/iu;
 
 const DIGIT_WORDS: Record<string, number> = { zero: 0, nought: 0, naught: 0, oh: 0, one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9 };
 /** "nought point five", "point eight", "oh point two five" (a leading nought, or none). */

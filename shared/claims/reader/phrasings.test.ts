@@ -800,3 +800,21 @@ test('an efficiency or a COP whose value comes after a long clause set off by co
   expect(extractFigures("The unit's net efficiency, electrical output after the feed pump and condenser fans divided by the heat taken from the brine, averaged 14.5 %.")).toMatchObject([{ kind: 'efficiency', si: 0.145 }]);
   expect(extractFigures("The heating COP over the week, from metered heat delivered to the depot's underfloor and hot-water circuits divided by metered electricity, was 4.9.")).toMatchObject([{ kind: 'cop', role: 'heating', si: 4.9 }]);
 });
+
+test('scientific notation said aloud: "two point four times ten to the minus three newtons" (invented test data)', () => {
+  expect(extractFigures('The measured thrust is two point four times ten to the minus three newtons.').map((f) => [f.kind, f.si])).toEqual([['thrust', expect.closeTo(2.4e-3, 15)]]);
+  expect(extractFigures('It gives three times ten to the power of six joules.').map((f) => f.si)).toEqual([3e6]);
+});
+
+test("a transcript's turns are its paragraphs: a founder's \"no propellant\" is read for the photon bound beside the host's ion engines (invented test data)", () => {
+  const text = [
+    'HOST: Give me the number.',
+    'FOUNDER (R. Achterberg): One point two newtons of thrust for every kilowatt of electricity, and nothing comes out of the back. No propellant, no exhaust.',
+    'HOST: What do the ion engines get?',
+    'FOUNDER: Tiny fractions of that, and they burn through xenon.',
+  ].join('\n');
+  // 1.2 N/kW against 1/c = 3.34 µN/kW: 3.6 × 10⁵ times the photon bound (c exact, SI Brochure).
+  const run = runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === 'photon-bound');
+  expect(run?.finding).toBe('breaks');
+  expect(run?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(1.2e-3 * 299792458, 0);
+});
