@@ -32,7 +32,7 @@ const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${a
 const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip|AFUE)(?!\p{L})((?:[^,\d.;!?\n]{0,25}?,[^,\d.;!?\n]{3,140}[,:]|[^\S\n]*[—–][^—–\d.;!?\n]{3,100}[—–])?[^\d.;!?\n]{0,60})$/iu;
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
-const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)|round[- ]?trip(?:[^\S\n]+efficiency)?)(?!\p{L})/iuy;
+const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)|round[- ]?trip(?:[^\S\n]+efficiency)?|AFUE)(?!\p{L})/iuy;
 /** "26.1 % for a lab silicon cell", "24 % from the new perovskite tandem module": a photovoltaic cell's efficiency. */
 const PV_CELL_AFTER_RE = /[^\S\n]*(?:for|from|by|on)[^\S\n]+(?:(?:an?|the|its|our|their)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:solar|silicon|photovoltaic|PV|perovskite|tandem|thin-film|organic)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,1}?(?:cells?|modules?|panels?)(?!\p{L})/iuy;
 /** "38 % of its fuel heat into shaft work", "25 % of the heat flowing through it": a share of heat turned into work. */

@@ -267,3 +267,11 @@ describe("from examiners' and reviewers' prose (invented test data)", () => {
     expect(read('The craft flies at a tenth of the speed of light.')).toMatchObject([{ kind: 'speed', si: expect.closeTo(29979245.8, 3) }]);
   });
 });
+
+test('"OVER 100% EFFICIENT SOLAR???" is a threshold, not a figure: the cell is checked on the 18.5 % it is said to reach; "95 % AFUE" is an efficiency (invented test data)', () => {
+  const text = 'TITLE: OVER 100% EFFICIENT SOLAR??? SURELY NOT\nClaimed performance: "Internal quantum efficiency of 135 % in the blue." The same note says the finished cell turns 18.5 % of the sunlight falling on it into electricity.';
+  const f = read(text);
+  expect(roleOf(f, '100%')).toBe('aside');
+  expect(runClaimChecks(f, { text, classes: [] }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+  expect(read('Claimed performance: 80,000 BTU/h input, 76,000 BTU/h output, "95 % AFUE".').find((x) => x.kind === 'efficiency')?.si).toBeCloseTo(0.95, 12);
+});

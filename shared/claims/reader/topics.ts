@@ -191,3 +191,14 @@ export function rolesFromLineLabels(text: string, drafts: Draft[]): void {
     at += line.length + 1;
   }
 }
+
+/**
+ * "OVER 100% EFFICIENT SOLAR???", "efficiency above 100 % was the classic sign of a perpetual motion claim":
+ * 100 % said as a threshold passed is no figure of the device — how far past it is not said — and is set
+ * aside, so that a check is run on the figures the text does give (the cell's 18.5 %).
+ */
+export function asideThresholds(drafts: Draft[]): void {
+  for (const d of drafts) {
+    if ((d.kind === 'efficiency' || d.kind === 'quantum-efficiency') && d.role !== 'aside' && d.hedge === 'more-than' && Math.abs((siOf(d) ?? 0) - 1) < 1e-9) d.role = 'aside';
+  }
+}
