@@ -153,6 +153,10 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       if (LOAD_AFTER_RE.test(text.slice(end, end + 30)) && LOAD_CARRIED_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'out';
       // "Recharging from the mains afterwards took 5 hours 40 minutes and 5.6 kWh": what a recharge took is the input.
       if (RECHARGE_TOOK_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'in';
+      // "the engine gave the dynamo about two kilowatts of shaft power": what a generator is given is its input;
+      // "the dynamo turned it into one and a half kilowatts": what it is turned into is the output.
+      if (GIVEN_TO_GENERATOR_RE.test(lead)) return 'in';
+      if (TURNED_INTO_RE.test(lead)) return 'out';
       if (IMMEDIATE_IN_RE.test(lead)) return 'in';
       if (IMMEDIATE_OUT_RE.test(lead)) return 'out';
     }
@@ -202,6 +206,11 @@ const DRY_MASS_LEAD_RE =
 /** "at burnout, with …, the stack weighs": the mass at the end of the burn. */
 const BURNOUT_LEAD_RE =
   /(?<!\p{L})at[^\S\n]+(?:burn-?out|engine cut-?off|cut-?off|MECO|shut-?down|the end of the burn)(?:[^\S\n]*,[^;.!?\n]{0,160},)?[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,4}?(?:weighs?|weighed|is|was|masses|has a mass of|comes to)[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
+
+/** "gave the dynamo about", "fed the generator with": right before what a generator is given. */
+const GIVEN_TO_GENERATOR_RE = /(?<!\p{L})(?:gave|gives|give|delivered|delivers|supplied|supplies|fed|feeds|feeding)[^\S\n]+(?:the|its|a|an)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:dynamos?|generators?|alternators?)(?:[^\S\n]+with)?(?:[^\S\n]+(?:about|some|roughly|nearly|around))?[^\S\n]*$/iu;
+/** "turned it into about": right before what a machine turns its input into. */
+const TURNED_INTO_RE = /(?<!\p{L})(?:turn(?:s|ed|ing)?|convert(?:s|ed|ing)?)[^\S\n]+(?:it|this|that|them|these|those)[^\S\n]+into(?:[^\S\n]+(?:about|some|roughly|nearly|around))?[^\S\n]*$/iu;
 
 export function roleFor(text: string, kind: FigureKind, start: number, end: number, floor: number): FigureRole {
   if (kind === 'power' || kind === 'energy') {

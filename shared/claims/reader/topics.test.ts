@@ -275,3 +275,27 @@ test('"OVER 100% EFFICIENT SOLAR???" is a threshold, not a figure: the cell is c
   expect(runClaimChecks(f, { text, classes: [] }).checks.some((c) => c.finding === 'breaks')).toBe(false);
   expect(read('Claimed performance: 80,000 BTU/h input, 76,000 BTU/h output, "95 % AFUE".').find((x) => x.kind === 'efficiency')?.si).toBeCloseTo(0.95, 12);
 });
+
+describe('from historical notes (invented test data)', () => {
+  const checks = (text: string) => runClaimChecks(read(text), { text, classes: [] }).checks;
+  test('"the engine gave the dynamo about two kilowatts …, and the dynamo turned it into one and a half kilowatts": 2 kW in, 1.5 kW out', () => {
+    const text = 'The engine gave the dynamo about two kilowatts of shaft power, and the dynamo turned it into one and a half kilowatts of electricity.';
+    const f = read(text);
+    expect(roleOf(f, 'two kilowatts')).toBe('in');
+    expect(roleOf(f, 'one and a half kilowatts')).toBe('out');
+    expect(checks(text).find((c) => c.check === 'first-law')?.finding).toBe('consistent');
+  });
+  test('"a fuelled mass of 12 tonnes, of which 9 tonnes would be propellant, leaving 3 tonnes": propellant 9 t, dry 3 t', () => {
+    const f = read('A vehicle with a fuelled mass of 12 tonnes, of which 9 tonnes would be propellant, leaving 3 tonnes for structure, engines and payload.');
+    expect(f.filter((x) => x.kind === 'mass' && !x.derived).map((x) => [x.role, x.si])).toEqual([
+      ['wet', 12000],
+      ['propellant', 9000],
+      ['dry', 3000],
+    ]);
+  });
+  test('"flew three times in 1998" is no gain', () => {
+    const text = 'The Gannet had a loaded mass of 28 kg and an empty mass of 11 kg. It flew three times in 1998 from a coastal range.';
+    expect(read(text).some((x) => x.kind === 'efficiency')).toBe(false);
+    expect(checks(text).some((c) => c.finding === 'breaks')).toBe(false);
+  });
+});
