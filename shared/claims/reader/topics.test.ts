@@ -18,6 +18,9 @@ const read = (text: string) => {
   return figures;
 };
 const roleOf = (figures: Figure[], words: string) => figures.find((f) => f.text === words)?.role;
+/** The first-law run on a text's own figures, and its ratio of out to in. */
+const firstLaw = (text: string) => runClaimChecks(read(text), { text, classes: [] }).checks.find((c) => c.check === 'first-law');
+const overUnity = (text: string) => firstLaw(text)?.outputs.find((o) => o.name === 'over_unity')?.si;
 
 describe('items of other business in a document of several items', () => {
   const minutes = [
@@ -135,16 +138,6 @@ describe('explainers that work the numbers', () => {
     expect(read('So for every watt going in, 1.25 watts would come out.')).toMatchObject([{ kind: 'efficiency', si: 1.25 }]);
     expect(read('For every watt, the lamp gives 0.3 W of light.')).toMatchObject([{ kind: 'power', si: 0.3 }]);
   });
-  test('a month supposed over powers stated plainly is the writer\'s sum: the first law is checked on the powers', () => {
-    const text = 'The heater takes 140 W; the company says the tube gives off 175 W of heat in steady operation. If that held for a month of 30 days, the tube would have delivered about 91 megajoules more than it received.';
-    const f = read(text);
-    expect(roleOf(f, '91 megajoules')).toBe('aside');
-    expect(roleOf(f, '30 days')).toBe('aside');
-    // 175/140 = 1.25 > 1: more out than in.
-    const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'first-law');
-    expect(run?.finding).toBe('breaks');
-    expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.25, 9);
-  });
 });
 
 describe('a bare range whose words come after its upper end', () => {
@@ -229,17 +222,6 @@ describe('from technical notes near their limits (invented test data)', () => {
   });
 });
 
-test('"a 20 kWh flywheel bank fed 500 W into the local line for 30 hours": the power fed into a line is the output, the store what went in (invented test data)', () => {
-  const text = 'Grid support trial: a 20 kWh flywheel bank fed 500 W into the local line for 30 hours before it had to be spun up again.';
-  const f = read(text);
-  expect(roleOf(f, '20 kWh')).toBe('in');
-  expect(roleOf(f, '500 W')).toBe('out');
-  // 500 W × 30 h = 15 kWh = 54 MJ out of 20 kWh = 72 MJ: 0.75, within the first law.
-  const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'first-law');
-  expect(run?.finding).toBe('consistent');
-  expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.75, 9);
-});
-
 describe("from examiners' and reviewers' prose (invented test data)", () => {
   test('a chiller "rejecting heat on deck at 32 °C with a lift of 30 K": 32 °C is its warm side, the cold one 30 K below', () => {
     const f = read('The chiller removes 11.5 units of heat for every unit of electricity (a cooling COP of 11.5), rejecting heat on deck at 32 °C with a lift of 30 K across the machine.');
@@ -297,5 +279,28 @@ describe('from historical notes (invented test data)', () => {
     const text = 'The Gannet had a loaded mass of 28 kg and an empty mass of 11 kg. It flew three times in 1998 from a coastal range.';
     expect(read(text).some((x) => x.kind === 'efficiency')).toBe(false);
     expect(checks(text).some((c) => c.finding === 'breaks')).toBe(false);
+  });
+});
+
+describe('first-law ledgers read from explanations and trials (invented test data)', () => {
+  test.each([
+    [
+      // A month supposed over powers stated plainly is the writer's sum: 175/140 = 1.25 > 1, more out than in.
+      'The heater takes 140 W; the company says the tube gives off 175 W of heat in steady operation. If that held for a month of 30 days, the tube would have delivered about 91 megajoules more than it received.',
+      [['91 megajoules', 'aside'], ['30 days', 'aside']],
+      'breaks',
+      1.25,
+    ],
+    [
+      // The power fed into a line is the output, the store what went in: 500 W × 30 h = 54 MJ of 72 MJ = 0.75.
+      'Grid support trial: a 20 kWh flywheel bank fed 500 W into the local line for 30 hours before it had to be spun up again.',
+      [['20 kWh', 'in'], ['500 W', 'out']],
+      'consistent',
+      0.75,
+    ],
+  ])('%s', (text, roles, finding, ratio) => {
+    expect(roles.map(([words]) => roleOf(read(text), words))).toEqual(roles.map(([, role]) => role));
+    expect(firstLaw(text)?.finding).toBe(finding);
+    expect(overUnity(text)).toBeCloseTo(ratio, 9);
   });
 });
