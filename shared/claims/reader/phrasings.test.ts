@@ -818,3 +818,12 @@ test("a transcript's turns are its paragraphs: a founder's \"no propellant\" is 
   expect(run?.finding).toBe('breaks');
   expect(run?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(1.2e-3 * 299792458, 0);
 });
+
+test('"a condenser in the water 15 K colder near the bottom" is a difference of 15 K, not a side at 15 K (invented test data)', () => {
+  const f = extractFigures('An evaporator sits in the warm surface water at about 30 °C, and a hose leads to a condenser in the water 15 K colder near the bottom.');
+  expect(f.map((x) => [x.kind, x.role, x.si])).toEqual([
+    ['temperature', 'hot', expect.closeTo(303.15, 9)],
+    ['temperature-difference', null, 15],
+    ['temperature', 'cold', expect.closeTo(288.15, 9)],
+  ]);
+});
