@@ -142,6 +142,17 @@ describe('numbers', () => {
       ['1.5 mN ± 0.2 mN', '1.3 mN', '1.7 mN'],
     ]);
   });
+
+  test('"plus or minus" said in words is an uncertainty too, and "minus two" after it is no number below zero', () => {
+    const text = "The engine's efficiency was twelve percent, plus or minus three; the COP 3.1 plus or minus 0.2; efficiency 40 percent plus or minus two percent (invented test data).";
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.si, f.upper?.si])).toEqual([
+      ['efficiency', expect.closeTo(0.09, 12), expect.closeTo(0.15, 12)],
+      ['cop', expect.closeTo(2.9, 12), expect.closeTo(3.3, 12)],
+      ['efficiency', expect.closeTo(0.38, 12), expect.closeTo(0.42, 12)],
+    ]);
+  });
 });
 
 describe('false positives', () => {

@@ -26,7 +26,8 @@ const NUMBER_RE =
 const SUPERSCRIPT_DIGITS: Record<string, string> = { '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-', '⁺': '' };
 
 const LABEL_RE = new RegExp(`(?:(?<!\\p{L})(?:${alt(LABEL_WORDS)})|[§#¶])[^\\S\\n]*$`, 'iu');
-const PLUS_MINUS_RE = /(?:±|\+\/-|\+-)[^\S\n]*$/u;
+/** "±", "+/-", and said in words: "twelve per cent, plus or minus three". */
+const PLUS_MINUS_RE = /(?:±|\+\/-|\+-|(?<!\p{L})plus[^\S\n]+or[^\S\n]+minus)[^\S\n]*$/iu;
 
 export interface NumberToken {
   start: number;
@@ -104,6 +105,12 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
     // "a few micronewtons", "several watts": compromise gives these a number (3) the text never gave.
     if (VAGUE_QUANTITY_RE.test(raw.trim()) || VAGUE_BEFORE_RE.test(text.slice(Math.max(0, n.offset.start - 12), n.offset.start) + raw)) continue;
     const trimmed = raw.replace(/[\s\-.,;:!?]+$/u, ''); // (compromise may keep a full stop or a comma)
+    // "plus or minus two": an uncertainty of two, not a number below zero.
+    const sign = /^(?:minus|negative)[^\S\n]+/iu.exec(raw);
+    if (sign && value < 0 && /(?<!\p{L})plus[^\S\n]+or[^\S\n]+$/iu.test(text.slice(Math.max(0, n.offset.start - 10), n.offset.start))) {
+      out.push({ start: n.offset.start + sign[0].length, end: n.offset.start + trimmed.length, value: -value });
+      continue;
+    }
     out.push({ start: n.offset.start, end: n.offset.start + trimmed.length, value });
   }
   // "half a kilowatt", "a quarter of a kilowatt", "a billion km/h": compromise leaves these.
@@ -251,7 +258,7 @@ export function tokenize(text: string): NumberToken[] {
       const u = named ? unitAt(named[1], 0) : null;
       if (u && u.end === named![1].length && !u.form.ambiguous) suffix = { type: 'unit', form: u.form };
     }
-    const before = text.slice(Math.max(0, start - 16), start);
+    const before = text.slice(Math.max(0, start - 24), start);
     let skip = LABEL_RE.test(before);
     if (!skip && /^\d{4}$/.test(num) && /^\d{4}$/.test(text.slice(start, numEndRaw)) && numEnd === numEndRaw) {
       const year = Number(num);

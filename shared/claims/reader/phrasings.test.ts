@@ -827,3 +827,10 @@ test('"a condenser in the water 15 K colder near the bottom" is a difference of 
     ['temperature', 'cold', expect.closeTo(288.15, 9)],
   ]);
 });
+
+test('shaft or brake power is what an engine gives (invented test data)', () => {
+  expect(extractFigures("Hot end at ninety degrees C, cold end at twenty. Shaft power's about forty watts.").find((f) => f.kind === 'power')).toMatchObject({ role: 'out', si: 40 });
+  expect(extractFigures('The brake power is 12 kW.')).toMatchObject([{ kind: 'power', role: 'out', si: 12000 }]);
+  // (A verb before the figure still says what a generator is given.)
+  expect(extractFigures('The generator takes 50 kW of shaft power and gives 48 kW.').map((f) => f.role)).toEqual(['in', 'out']);
+});

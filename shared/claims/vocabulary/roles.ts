@@ -71,7 +71,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:is |was |are |were )?(?:said|claimed|reported|supposed|meant) to have (?:stored|received|absorbed|gained|taken up|banked)', 'on the (?:dummy )?load', 'into the (?:dummy )?load', 'lights?', 'lighting', 'heats (?:up |the |a |an |our |your )', 'heating (?:up |the |a |an |our |your )', 'load of', 'into a load', 'came out', 'comes out', 'out of it',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
       'supplies a', 'supplying a', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran (?:a|an|the)', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
-      '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', 'dump(?:s|ed)?', '(?<![\\w-])out ?=', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
+      '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', 'gave back', 'on the shaft', 'at the shaft', '(?:shaft|brake) (?:power|output)(?:\x27s|\u2019s)?', 'dump(?:s|ed)?', '(?<![\\w-])out ?=', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
       // A rating said before what makes power: "the 600 MW coal unit", "a 5 kW genset" (not a motor or engine, which may be what drives the device).
