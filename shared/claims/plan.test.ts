@@ -1020,6 +1020,16 @@ describe('an engine efficiency checked on a guess the text does not make (invent
     // 1 − 293.15/363.15 = 19.3 % < 40 %: an engine between those temperatures breaks Carnot.
     expect(plan('The engine is 40 % efficient between 90 °C and 20 °C.').checks.find((c) => c.check === 'carnot')?.finding).toBe('breaks');
   });
+  test("the text's own words putting the device within its bound ask for confirmation of a reading that breaks it", () => {
+    // 1 − 293.15/363.15 = 19.3 % < 40 %: read alone, the check finds the engine past the Carnot bound.
+    const text = 'The engine is 40 % efficient between 90 °C and 20 °C, comfortably below the Carnot limit.';
+    const r = plan(text);
+    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+    expect(r.needs.find((n) => n.check === 'carnot')?.missing[0]).toMatch(/says it is “below the Carnot limit”/);
+    // (A denial or a claim to be within it changes nothing.)
+    expect(plan('The engine is 40 % efficient between 90 °C and 20 °C, which is not below the Carnot limit.').checks.find((c) => c.check === 'carnot')?.finding).toBe('breaks');
+    expect(plan('The engine is 40 % efficient between 90 °C and 20 °C, claimed to be within the Carnot limit.').checks.find((c) => c.check === 'carnot')?.finding).toBe('breaks');
+  });
   test('an LED on a heat sink is no heat engine', () => {
     const r = plan('The LED converts 60 % of its electrical input into light and runs at 50 °C on a 25 °C heat sink.');
     expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
