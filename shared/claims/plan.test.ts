@@ -1048,3 +1048,11 @@ test("a heat pump's COP past the Carnot bound leads to the entry on figures abov
   const stove = 'The stovepipe generator works across a 20 °C temperature difference, its hot plate at 90 °C, and converts 6 % of the heat flowing through it into electricity.';
   expect(claimSignals(extractFigures(stove), stove).leads.map((l) => l.mechanismClass)).toContain('converter-beyond-limit');
 });
+
+test('a water heater whose compressor "pumps warmth out of the air" is a heat pump, whatever entry its words match (invented test data)', () => {
+  const text = "Instead of heating water with an element, the unit's small compressor pumps warmth out of the surrounding air. It puts 2.9 kW more heat into your tank than the 1.1 kW of electricity it draws, tested with 5 °C outdoor air and water heated to 45 °C.";
+  // COP 4.0/1.1 = 3.636 against the Carnot heating COP 318.15/40 = 7.954 (textbook formula): 0.457 of it.
+  const r = runClaimChecks(extractFigures(text), { text, classes: ['overbalanced-wheel'] });
+  expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  expect(r.checks.find((c) => c.check === 'carnot')?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(4 / 1.1 / (318.15 / 40), 6);
+});
