@@ -1056,3 +1056,10 @@ test('a water heater whose compressor "pumps warmth out of the air" is a heat pu
   expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
   expect(r.checks.find((c) => c.check === 'carnot')?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(4 / 1.1 / (318.15 / 40), 6);
 });
+
+test('a power bank that "refills in about two hours" has not delivered its rated power for those hours (invented test data)', () => {
+  const text = 'The power bank can deliver 3 A at 20 V through its USB-C port. Its cells hold 100 Wh, and the pack refills in about two hours from a suitable adapter.';
+  const r = runClaimChecks(extractFigures(text), { text });
+  expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  expect(extractFigures(text).some((f) => f.kind === 'energy' && f.derived)).toBe(false);
+});

@@ -14,9 +14,9 @@ const NOT_A_RUN_RE =
 /** A sentence of a supposition: "if …", "unless …", "should it …", "would", "could". */
 const SUPPOSED_TIME_RE = /(?<!\p{L})(?:if|unless|should|would|could|were)(?!\p{L})/iu;
 
-/** Just before a charging time: "charges to 80 % in", "recharged in", "a full charge takes", "charging time of". */
+/** Just before a charging time: "charges to 80 % in", "recharged in", "refills in", "back to full in", "a full charge takes", "charging time of". */
 export const CHARGING_TIME_RE =
-  /(?<!\p{L})(?:(?:re)?charg(?:es|ed|ing|e)|fills?[^\S\n]+up|tops?[^\S\n]+up|topped[^\S\n]+up)(?!\p{L})[^.;!?\n]{0,35}?(?:in|takes|took|of|within|under|about|around|just|only)?[^\S\n]*(?:(?:about|around|roughly|just|only|under|less than)[^\S\n]+)?$/iu;
+  /(?<!\p{L})(?:(?:re)?charg(?:es|ed|ing|e)|refill(?:s|ed|ing)?|fills?[^\S\n]+up|tops?[^\S\n]+up|topped[^\S\n]+up|(?:back[^\S\n]+)?to[^\S\n]+full)(?!\p{L})[^.;!?\n]{0,35}?(?:in|takes|took|of|within|under|about|around|just|only)?[^\S\n]*(?:(?:about|around|roughly|just|only|under|less than)[^\S\n]+)?$/iu;
 
 /** A duration said as the time a charge takes. */
 export const isChargingTime = (text: string, d: { start: number | null | undefined }): boolean =>

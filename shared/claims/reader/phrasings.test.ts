@@ -834,3 +834,9 @@ test('shaft or brake power is what an engine gives (invented test data)', () => 
   // (A verb before the figure still says what a generator is given.)
   expect(extractFigures('The generator takes 50 kW of shaft power and gives 48 kW.').map((f) => f.role)).toEqual(['in', 'out']);
 });
+
+test('a COP takes the nearer of a word of heating and one of cooling (invented test data)', () => {
+  const text = 'Its sheet says "COP 2.9, heating water to 60 °C with 25 °C intake air". He says it will also cool the kitchen down a bit in summer.';
+  expect(extractFigures(text).find((f) => f.kind === 'cop')).toMatchObject({ role: 'heating', si: 2.9 });
+  expect(extractFigures('The chiller cools the server hall with a COP of 4.1, and its waste heat warms the offices next door.').find((f) => f.kind === 'cop')).toMatchObject({ role: 'cooling' });
+});

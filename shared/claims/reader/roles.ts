@@ -227,9 +227,21 @@ export function roleFor(text: string, kind: FigureKind, start: number, end: numb
     // "COP_h ≈ 4.5", "COP_c = 3".
     const symbol = /COP_?\{?(h|c|heat|heating|cool|cooling)\}?(?!\p{L})[^.;!?\n]{0,12}$/iu.exec(text.slice(Math.max(0, start - 30), start));
     if (symbol) return /^c/i.test(symbol[1]) ? 'cooling' : 'heating';
-    const around = text.slice(Math.max(0, start - COP_WINDOW), Math.min(text.length, end + COP_WINDOW));
-    if (COP_COOLING_RE.test(around)) return 'cooling';
-    if (COP_HEATING_RE.test(around) || HEAT_PUMP_RE.test(text)) return 'heating';
+    // The nearer of a word of cooling and one of heating ("COP 2.9, heating water to 60 °C … it will also
+    // cool the kitchen a bit": heating).
+    const from = Math.max(0, start - COP_WINDOW);
+    const around = text.slice(from, Math.min(text.length, end + COP_WINDOW));
+    const nearest = (re: RegExp): number => {
+      let best = Infinity;
+      for (const m of around.matchAll(new RegExp(re.source, 'giu'))) {
+        const at = from + m.index!;
+        best = Math.min(best, at < start ? start - (at + m[0].length) : at - end);
+      }
+      return best;
+    };
+    const [cool, heat] = [nearest(COP_COOLING_RE), nearest(COP_HEATING_RE)];
+    if (cool < Infinity && cool <= heat) return 'cooling';
+    if (heat < Infinity || HEAT_PUMP_RE.test(text)) return 'heating';
   }
   return null;
 }
