@@ -61,5 +61,5 @@ export function paragraphOfAnotherMachine(text: string, start: number, end: numb
 /** A heater that burns fuel. */
 export const BURNER_RE = /(?<!\p{L})(?:boilers?|furnaces?|stoves?|burners?|pellets?|oil-fired|gas-fired|wood-fired|combustion)(?!\p{L})/iu;
 /** A heat pump named as such (not only by the radiators or the flow temperature it serves). */
-export const NAMED_HEAT_PUMP_RE = /(?<!\p{L})(?:heat[- ]pumps?|air[- ]source|ground[- ]source|water[- ]source|ASHPs?|GSHPs?|air[- ]to[- ](?:water|air)|water[- ]to[- ]water|brine[- ]to[- ]water|heat[- ]pumping)(?!\p{L})/iu;
+export const NAMED_HEAT_PUMP_RE = /(?<!\p{L})(?:heat[- ]pumps?|air[- ]source|ground[- ]source|ground[- ]loops?|water[- ]source|ASHPs?|GSHPs?|air[- ]to[- ](?:water|air)|water[- ]to[- ]water|brine[- ]to[- ]water|heat[- ]pumping)(?!\p{L})/iu;
 

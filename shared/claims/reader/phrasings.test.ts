@@ -840,3 +840,11 @@ test('a COP takes the nearer of a word of heating and one of cooling (invented t
   expect(extractFigures(text).find((f) => f.kind === 'cop')).toMatchObject({ role: 'heating', si: 2.9 });
   expect(extractFigures('The chiller cools the server hall with a COP of 4.1, and its waste heat warms the offices next door.').find((f) => f.kind === 'cop')).toMatchObject({ role: 'cooling' });
 });
+
+test('"self-running … will power 800 W" in one paragraph of a letter is a nil input with its output, as in a text of one paragraph (invented test data)', () => {
+  const text = 'Dear Energy Desk,\n\nMy neighbour has bought a home generator. The brochure says it is self-running and needs no supply once it has been started with a hand crank, and that it will power 800 W of appliances indefinitely.\n\nIs there a hidden battery in there?';
+  expect(extractFigures(text).map((f) => [f.kind, f.role, f.si])).toEqual([
+    ['power', 'in', 0],
+    ['power', 'out', 800],
+  ]);
+});

@@ -403,7 +403,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const several = /\n[^\S\n]*\n/u.test(text.trim());
     const inParagraph = (x: RegExpExecArray) => {
       const para = paragraphAround(text, x.index, x.index + x[0].length);
-      return drafts.find((d) => outLike(d) && d.role !== null && paragraphAround(text, d.start, d.end) === para);
+      // (An output of no stated side counts in the same paragraph, as it does in a text of one.)
+      return drafts.find((d) => outLike(d) && paragraphAround(text, d.start, d.end) === para);
     };
     // (Else, as in a manuscript whose apparatus section says "needs no supply" and whose results give
     // "delivering 250 W", an output named as such anywhere; not a figure of no side.)
