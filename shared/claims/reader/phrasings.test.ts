@@ -848,3 +848,11 @@ test('"self-running … will power 800 W" in one paragraph of a letter is a nil 
     ['power', 'out', 800],
   ]);
 });
+
+test('"a 12 V battery that supplies a current of 0.8 A" is the input, as "the battery supplies" is (invented test data)', () => {
+  const f = extractFigures('The coil is connected to an ordinary 12 V car battery that supplies a current of 0.8 A, while a 60 W bulb on the output side glows at full brightness.');
+  expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+    ['in', expect.closeTo(9.6, 9)],
+    ['out', 60],
+  ]);
+});
