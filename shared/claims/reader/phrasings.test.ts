@@ -856,3 +856,11 @@ test('"a 12 V battery that supplies a current of 0.8 A" is the input, as "the ba
     ['out', 60],
   ]);
 });
+
+test('what a device "can supply" is its output; its stored energy is what goes in (invented test data)', () => {
+  const text = 'The Homestead Cell, a wall-mounted home battery, can supply two kilowatts for three hours from its 7.5 kWh of storage.';
+  // 2 kW × 3 h = 6 kWh = 2.16 × 10⁷ J out of 7.5 kWh = 2.7 × 10⁷ J (kWh = 3.6 MJ, NIST SP 811 B.8): 0.8.
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.8, 9);
+});
