@@ -864,3 +864,11 @@ test('what a device "can supply" is its output; its stored energy is what goes i
   expect(run?.finding).toBe('consistent');
   expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.8, 9);
 });
+
+test('what a store "can discharge at" is its output; "a standard discharge" is no verb (invented test data)', () => {
+  const text = 'The flywheel array stores 25 kWh in carbon-fibre rotors spinning in vacuum, and can discharge at 100 kW for 10 minutes to steady the local grid.';
+  // 100 kW × 600 s = 6 × 10⁷ J out of 25 kWh = 9 × 10⁷ J (kWh = 3.6 MJ, NIST SP 811 B.8): 0.667.
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(2 / 3, 9);
+  expect(extractFigures('The capacity, measured by a standard discharge when new, is 150 Wh.')[0].role).not.toBe('out');
+});
