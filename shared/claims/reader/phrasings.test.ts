@@ -872,3 +872,12 @@ test('what a store "can discharge at" is its output; "a standard discharge" is n
   expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(2 / 3, 9);
   expect(extractFigures('The capacity, measured by a standard discharge when new, is 150 Wh.')[0].role).not.toBe('out');
 });
+
+test('"a 9 kW ground-source heat pump" is rated by the heat it gives (invented test data)', () => {
+  expect(extractFigures('The project replaced an old oil boiler with a 9 kW ground-source heat pump, which runs at a COP of 5.2.')).toMatchObject([
+    { kind: 'power', role: 'out', si: 9000 },
+    { kind: 'cop', role: 'heating', si: 5.2 },
+  ]);
+  // (A compressor's horsepower is still its drive.)
+  expect(extractFigures('The 2 hp heat pump compressor hums.')[0].role).toBe('in');
+});
