@@ -881,3 +881,8 @@ test('"a 9 kW ground-source heat pump" is rated by the heat it gives (invented t
   // (A compressor's horsepower is still its drive.)
   expect(extractFigures('The 2 hp heat pump compressor hums.')[0].role).toBe('in');
 });
+
+test('an engine "is rated at" what it gives; an LED "driven at" a power takes it in (invented test data)', () => {
+  expect(extractFigures('The two-stroke main engine for the bulk carriers is rated at 12,000 PS and reaches a thermal efficiency of 52 %.')[0]).toMatchObject({ kind: 'power', role: 'out' });
+  expect(extractFigures('Driven at 3 W, a single die lights a desk lamp.')).toMatchObject([{ kind: 'power', role: 'in', si: 3 }]);
+});
