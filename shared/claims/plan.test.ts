@@ -1063,3 +1063,11 @@ test('a power bank that "refills in about two hours" has not delivered its rated
   expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
   expect(extractFigures(text).some((f) => f.kind === 'energy' && f.derived)).toBe(false);
 });
+
+test('"needs nothing to push against" says plainly nothing is thrown out: the rockets it is to replace are no propellant of its own (invented test data)', () => {
+  const text = "A gyroscopic unit precesses a pair of flywheels. Its builder quotes 0.45 mN per W of motor power, maintains that the unit needs nothing to push against, and expects it to replace rocket engines on satellites.";
+  // 0.45 mN/W × c = 1.349 × 10⁵ times the photon bound (c exact, SI Brochure).
+  const run = runClaimChecks(extractFigures(text), { text, classes: ['gyroscopic-drive'] }).checks.find((c) => c.check === 'photon-bound');
+  expect(run?.finding).toBe('breaks');
+  expect(run?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(0.45e-3 * 299792458, 3);
+});
