@@ -1071,3 +1071,27 @@ test('"needs nothing to push against" says plainly nothing is thrown out: the ro
   expect(run?.finding).toBe('breaks');
   expect(run?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(0.45e-3 * 299792458, 3);
 });
+
+test('a distance covered in a stated time, in a text about a signal, is the speed it implies (invented test data)', () => {
+  // 12 km / 20 µs = 6 × 10⁸ m/s = 2.001 c (c exact, SI Brochure).
+  const text = 'A telecoms company says its new microwave relay sends a pulse across a 12 km link in 20 µs.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.kind === 'speed')).toMatchObject({ si: expect.closeTo(6e8, 0), derived: expect.stringMatching(/^speed = distance \/ time/) });
+  const run = runClaimChecks(f, { text }).checks.find((c) => c.check === 'light-speed');
+  expect(run?.finding).toBe('breaks');
+  expect(run?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(6e8 / 299792458, 9);
+  // 1,000 km / 2.1 ms; "about 5 ms" for the same distance in ordinary fibre gives no speed of its own.
+  const fibre = extractFigures('A light pulse sent through 1,000 km of its new fibre arrived after 2.1 ms. Ordinary telecom fibre would need about 5 ms for the same distance.');
+  expect(fibre.filter((x) => x.kind === 'speed').map((x) => x.si)).toEqual([expect.closeTo(1e6 / 2.1e-3, 0)]);
+  // (A car's trip is no signal: no speed is made of it.)
+  expect(extractFigures('The car drove 100 km in 1 hour.').some((x) => x.kind === 'speed')).toBe(false);
+});
+
+test("a pulse's length is no run of a power said apart from it (invented test data)", () => {
+  const text = 'The pulsed laser emits 2 J in 10 ns, a peak power of 200 MW, from a flashlamp supply that draws 1.5 kW from the wall.';
+  const r = runClaimChecks(extractFigures(text), { text });
+  expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  // (A power right beside its pulse still is: 300 kW × 2 ms = 600 J out of 500 J stored.)
+  const coil = 'A capacitor bank stores 500 J and the coil then gives 300 kW for 2 ms.';
+  expect(runClaimChecks(extractFigures(coil), { text: coil }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.2, 9);
+});

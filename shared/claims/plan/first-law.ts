@@ -49,6 +49,13 @@ function saidInBursts(text: string, f: Figure): boolean {
   return f.start !== null && f.end !== null && !!text && BURST_RE.test(sentenceAround(text, f.start, f.end));
 }
 
+/** A power said right beside a time, with no other figure between ("200 W for 5 ms", "a 5 ms pulse of 200 W"). */
+function pulseOf(text: string, f: Figure, d: Figure): boolean {
+  if (f.start === null || f.end === null || d.start === null || d.end === null) return false;
+  const gap = f.end <= d.start ? text.slice(f.end, d.start) : d.end <= f.start ? text.slice(d.end, f.start) : '';
+  return gap.length < 40 && !/\d/u.test(gap);
+}
+
 export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading, { efficiency, movesHeat, gain, share, cop, acrossDifference, copForCarnot }: HeatReading): void {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, duration, temps } = b;
   const firstLawWhy = 'The text gives the energy put in and the energy got out.';
@@ -95,7 +102,10 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
       if (siAt(f, e) === 0) return '0 J'; // no input at all, however long it ran
       // A charging time is no run of what the device puts out ("a 150 kW motor … charges in 40 minutes");
       // nor is any run the time of an output given only in bursts ("can deliver 2 MW for short periods").
-      if (t !== undefined && !(f.role === 'out' && !bothPower && duration && isChargingTime(text, duration)) && !(f.role === 'out' && !bothPower && saidInBursts(text, f))) return typed(siAt(f, e) * t, 'J');
+      // Nor is a pulse's length (under a second) the run of a power said apart from it ("emits 2 J in 10 ns
+      // … from a supply that draws 1.5 kW").
+      const pulseApart = t !== undefined && t < 1 && !bothPower && duration !== undefined && !pulseOf(text, f, duration);
+      if (t !== undefined && !pulseApart && !(f.role === 'out' && !bothPower && duration && isChargingTime(text, duration)) && !(f.role === 'out' && !bothPower && saidInBursts(text, f))) return typed(siAt(f, e) * t, 'J');
       if (bothPower) return typed(siAt(f, e), 'J'); // one second of steady running
       return null;
     };

@@ -25,13 +25,64 @@ export const isChargingTime = (text: string, d: { start: number | null | undefin
 /** Words of an output given only in bursts or as a rating of what it can do at most. */
 export const BURST_RE = /(?<!\p{L})(?:for short periods|for a short (?:time|period)|briefly|momentarily|in (?:short )?bursts|at peak|peaks? (?:at|of)|peak (?:power|output)|for (?:a few|several) (?:seconds|minutes))(?!\p{L})/iu;
 
+/** A length said as a distance covered: "across a 12 km link", "through 1,000 km of fibre". */
+const DISTANCE_RE =
+  /(?<![\p{L}\p{N}.,])(\d{1,3}(?:,\d{3})+|\d+(?:\.\d+)?)[^\S\n]*(km|kilomet(?:re|er)s?|m|met(?:re|er)s?|miles?|light[- ]?years?|ly|AU|astronomical units?)(?![\p{L}\p{N}/²³])/giu;
+const METRES_PER: Record<string, number> = {
+  km: 1000, kilometre: 1000, kilometer: 1000, m: 1, metre: 1, meter: 1, mile: 1609.344,
+  // The light-year (IAU 2012 Resolution B2, Julian year) and the astronomical unit (IAU 2012 Resolution B2), both exact.
+  'light-year': 9460730472580800, 'light year': 9460730472580800, lightyear: 9460730472580800, ly: 9460730472580800, au: 149597870700, 'astronomical unit': 149597870700,
+};
+/** Words of something that travels at a speed worth setting against c: light, a signal, a pulse, a message. */
+const SIGNAL_CONTEXT_RE = /(?<!\p{L})(?:light|superluminal|faster[- ]than[- ]light|FTL|signals?|pulses?|photons?|latency|message|transmission|transmits?|beam|wave(?:front)?|speed of light)(?!\p{L})/iu;
+/** Just before the time a distance took: "in", "after", "within", "arrived after", "taking". */
+const TOOK_BEFORE_RE = /(?<!\p{L})(?:in|after|within|taking|took|takes|in (?:just|only|under|about))[^\S\n]+(?:(?:just|only|about|around|roughly|some|a mere)[^\S\n]+)?$/iu;
+
+/**
+ * A distance covered in a stated time, in a text about light or a signal ("sends a pulse across a 12 km
+ * link in 20 µs"): the speed it implies, as a figure of its own (speed = distance / time), for the
+ * light-speed check. The time is the claim's, not set aside.
+ */
+function speedsFromDistances(text: string, drafts: Draft[]): Set<Draft> {
+  const used = new Set<Draft>();
+  if (!SIGNAL_CONTEXT_RE.test(text)) return used;
+  for (const d of [...drafts]) {
+    if (d.kind !== 'duration' || d.role === 'aside' || d.derived) continue;
+    const sentenceStart = Math.max(text.lastIndexOf('\n', d.start - 1) + 1, ...['. ', '! ', '? '].map((p) => { const i = text.lastIndexOf(p, d.start - 1); return i < 0 ? 0 : i + 2; }));
+    const before = text.slice(sentenceStart, d.start);
+    if (!TOOK_BEFORE_RE.test(before)) continue;
+    const lengths = [...before.matchAll(DISTANCE_RE)];
+    const last = lengths[lengths.length - 1];
+    if (!last) continue;
+    const unit = last[2].toLowerCase().replace(/s$/u, '').replace(/^lightyear$/u, 'lightyear').replace(/^light[- ]year$/u, 'light-year');
+    const per = METRES_PER[unit] ?? METRES_PER[unit.replace(/-/gu, ' ')];
+    const t = siOf(d);
+    if (per === undefined || !t) continue;
+    const metres = Number(last[1].replace(/,/gu, '')) * per;
+    const start = sentenceStart + last.index!;
+    if (drafts.some((o) => o !== d && o.start < start + last[0].length && start < o.end)) continue; // (read as something else)
+    const v = metres / t;
+    insertAfter(drafts, d, {
+      start,
+      end: d.end,
+      kind: 'speed',
+      quantity: typedSi(v, 'm/s'),
+      role: null,
+      derived: `speed = distance / time (${formatQuantity(metres, 'm')} / ${formatQuantity(t, 's')})`,
+    });
+    used.add(d);
+  }
+  return used;
+}
+
 /** Times, rates and energies over a run, among the figures read (see the file's comment). */
 export function relateDurations(text: string, drafts: Draft[]): void {
   joinCompoundDurations(text, drafts);
+  const timed = speedsFromDistances(text, drafts);
   // Times that are not the run's ("took 18 months to build", "pays for itself in 3 years"), said in a
   // sentence with no power or energy: set aside.
   for (const d of drafts) {
-    if (d.kind !== 'duration' || d.role !== null) continue;
+    if (d.kind !== 'duration' || d.role !== null || timed.has(d)) continue;
     const sentence = sentenceAround(text, d.start, d.end);
     // (Nor a time of a supposition: "if the panels are covered in snow for a week it will be empty".)
     if ((NOT_A_RUN_RE.test(sentence) || SUPPOSED_TIME_RE.test(sentence)) && !drafts.some((e) => (e.kind === 'power' || e.kind === 'energy') && sentenceOf(text, e) === sentenceOf(text, d))) d.role = 'aside';
@@ -89,6 +140,8 @@ export function relateDurations(text: string, drafts: Draft[]): void {
       if (p.role === 'out' && (p.hedge === 'up-to' || p.hedge === 'at-most' || p.hedge === 'less-than')) continue;
       const tRun = siOf(duration);
       if (!tRun) continue;
+      // "emits 2 J in 10 ns … from a supply that draws 1.5 kW": a pulse's length is no run of a power said apart from it.
+      if (tRun < 1 && (duration !== own || drafts.some((o) => o !== p && o !== duration && o.start > Math.min(p.end, duration.end) && o.end < Math.max(p.start, duration.start)))) continue;
       const w = siOf(p);
       if (w === null || (w === 0 && p.role !== 'in')) continue;
       if (drafts.some((d) => d.kind === 'energy' && d.role === p.role && !d.derived)) continue;
@@ -109,7 +162,7 @@ export function relateDurations(text: string, drafts: Draft[]): void {
   // With no power or energy in the text, no check takes a time ("the drill took 6 minutes", "the
   // pendulum swings once every 2 seconds"): it is set aside.
   if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== 'aside')) {
-    for (const d of drafts) if (d.kind === 'duration' && d.role === null) d.role = 'aside';
+    for (const d of drafts) if (d.kind === 'duration' && d.role === null && !timed.has(d)) d.role = 'aside';
   }
 }
 

@@ -189,6 +189,9 @@ export const UNIT_FORMS: readonly UnitForm[] = [
 
   // Duration ("s" alone is left out: seconds are written out, or read as Isp after "Isp"/"specific impulse")
   { kind: 'duration', unit: 's', symbols: ['s', 'sec', 'secs'], words: ['second', 'seconds'] },
+  { kind: 'duration', unit: 'ms', symbols: ['ms', 'msec'], words: ['millisecond', 'milliseconds'] },
+  { kind: 'duration', unit: 'us', symbols: ['µs', 'μs'], words: ['microsecond', 'microseconds'] },
+  { kind: 'duration', unit: 'ns', symbols: ['ns'], words: ['nanosecond', 'nanoseconds'] },
   { kind: 'duration', unit: 'min', symbols: ['min', 'mins'], words: ['minute', 'minutes'] },
   { kind: 'duration', unit: 'h', symbols: ['h', 'hr', 'hrs'], words: ['hour', 'hours'] },
   { kind: 'duration', unit: 'day', symbols: ['d'], words: ['day', 'days'] },
