@@ -143,6 +143,18 @@ describe('numbers', () => {
     ]);
   });
 
+  test('a value and its uncertainty in brackets, the unit and a power of ten after them: "(3.1 ± 0.4) × 10⁻⁵ N"', () => {
+    const text = 'The efficiency was (5.1 ± 0.4) %, the force per unit power (3.1 ± 0.15) µN/kW, the thrust (3.1 ± 0.4) × 10⁻⁵ N, later (2.2 +/- 0.3) x 10^-3 N (invented test data).';
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures.map((f) => [f.kind, f.si, f.upper?.si])).toEqual([
+      ['efficiency', expect.closeTo(0.047, 12), expect.closeTo(0.055, 12)],
+      ['thrust-per-power', expect.closeTo(2.95e-9, 20), expect.closeTo(3.25e-9, 20)],
+      ['thrust', expect.closeTo(2.7e-5, 15), expect.closeTo(3.5e-5, 15)],
+      ['thrust', expect.closeTo(1.9e-3, 15), expect.closeTo(2.5e-3, 15)],
+    ]);
+  });
+
   test('"plus or minus" said in words is an uncertainty too, and "minus two" after it is no number below zero', () => {
     const text = "The engine's efficiency was twelve percent, plus or minus three; the COP 3.1 plus or minus 0.2; efficiency 40 percent plus or minus two percent (invented test data).";
     const figures = extractFigures(text);

@@ -23,6 +23,10 @@ const MULTIPLIER: Record<string, number> = { million: 1e6, M: 1e6, billion: 1e9,
 const NUMBER_RE =
   /(?<![\p{L}\p{N}_.,^])(?<![\p{N}.,]\/)([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d{1,3}(?:[ \u00A0\u2009\u202F]\d{3})+(?![\d]|[^\S\n]\d)(?:,\d+)?|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?![\p{N}])|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
 
+/** "(5.1 ± 0.4)", "(3.1 ± 0.4) × 10⁻⁵", "(2.2 +/- 0.3) x 10^-3": a value and its uncertainty in brackets. */
+const BRACKETED_UNCERTAINTY_RE =
+  /(?<![\p{L}\p{N}])\([^\S\n]*([-−+]?\d+(?:\.\d+)?)[^\S\n]*(?:±|\+\/-|\+-)[^\S\n]*(\d+(?:\.\d+)?)[^\S\n]*\)(?:[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
+
 const SUPERSCRIPT_DIGITS: Record<string, string> = { '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-', '⁺': '' };
 
 const LABEL_RE = new RegExp(`(?:(?<!\\p{L})(?:${alt(LABEL_WORDS)})|[§#¶])[^\\S\\n]*$`, 'iu');
@@ -271,7 +275,21 @@ export function tokenize(text: string): NumberToken[] {
     }
     tokens.push({ start, numEnd, end, num: value, suffix, skip, plusMinus: PLUS_MINUS_RE.test(before), consumed: false, words });
   };
+  // "(5.1 ± 0.4) %", "(3.1 ± 0.15) µN/kW", "(3.1 ± 0.4) × 10⁻⁵ N": a value and its uncertainty in brackets,
+  // the unit (and a power of ten) after them.
+  const bracketed: [number, number][] = [];
+  for (const m of text.matchAll(BRACKETED_UNCERTAINTY_RE)) {
+    const sup = m[4] !== undefined ? Number([...m[4]].map((c) => SUPERSCRIPT_DIGITS[c]).join('')) : undefined;
+    const exp = m[3] !== undefined ? Number(m[3].replace('−', '-')) : sup;
+    const scale = exp === undefined ? 1 : 10 ** exp;
+    const mid = Number(m[1].replace('−', '-')) * scale;
+    const end = m.index! + m[0].length;
+    push(m.index!, end, String(Number(mid.toPrecision(15))), false);
+    tokens[tokens.length - 1].unc = Number((Number(m[2]) * scale).toPrecision(15));
+    bracketed.push([m.index!, end]);
+  }
   for (let m = NUMBER_RE.exec(text); m; m = NUMBER_RE.exec(text)) {
+    if (bracketed.some(([a, b]) => m!.index >= a && m!.index < b)) continue;
     if (dots) {
       // "1.800 K", "12.500.000 km", "1.234,5 kWh" in a text that writes decimal commas.
       DOT_GROUPED_AT_RE.lastIndex = m.index;
