@@ -162,8 +162,16 @@ function headerlessUnitCells(line: string, s: string, cells: string[]): string {
   return out;
 }
 
+/**
+ * A pointer to a figure, a table, an equation or a reference in brackets ("(see Table 2)", "(Fig. 3b)",
+ * "[12]", "[3, 7–9]"): blanked to the same length, so that the words before it reach the figure after it
+ * ("The output (Fig. 3) was 40 W").
+ */
+const POINTER_RE =
+  /\((?:(?:see|cf\.?|compare)[^\S\n]+)?(?:Fig(?:ure)?s?\.?|Tables?|Tab\.|Eqs?\.?|Equations?|Refs?\.?|Sections?|Sec\.|§|Appendix|Supplementary|Suppl?\.|Methods|Note)[^\S\n]*[^()\n]{0,30}\)|\[\d{1,3}(?:[^\S\n]*[,–-][^\S\n]*\d{1,3})*\]/gu;
+
 function readPlain(text: string): Figure[] {
-  const joined = joinUnitColumns(text);
+  const joined = joinUnitColumns(text).replace(POINTER_RE, (m) => ' '.repeat(m.length));
   // A leader is read as the colon it stands for, blanked to the same length so offsets are kept.
   const led = LEADER_RE.test(joined) ? joined.replace((LEADER_RE.lastIndex = 0, LEADER_RE), (m) => `:${' '.repeat(m.length - 1)}`) : joined;
   LEADER_RE.lastIndex = 0;

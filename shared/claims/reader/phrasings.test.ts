@@ -886,3 +886,9 @@ test('an engine "is rated at" what it gives; an LED "driven at" a power takes it
   expect(extractFigures('The two-stroke main engine for the bulk carriers is rated at 12,000 PS and reaches a thermal efficiency of 52 %.')[0]).toMatchObject({ kind: 'power', role: 'out' });
   expect(extractFigures('Driven at 3 W, a single die lights a desk lamp.')).toMatchObject([{ kind: 'power', role: 'in', si: 3 }]);
 });
+
+test('a pointer in brackets to a figure, a table or a reference does not part a figure from its words (invented test data)', () => {
+  expect(extractFigures('Efficiency (see Table 2) was 5 %.')).toMatchObject([{ kind: 'efficiency', si: 0.05, text: '5 %' }]);
+  expect(extractFigures('The output (Fig. 3) was 40 W.')).toMatchObject([{ kind: 'power', role: 'out', si: 40 }]);
+  expect(extractFigures('A thrust of 2 mN was reported [12].').map((f) => f.si)).toEqual([0.002]);
+});
