@@ -892,3 +892,14 @@ test('a pointer in brackets to a figure, a table or a reference does not part a 
   expect(extractFigures('The output (Fig. 3) was 40 W.')).toMatchObject([{ kind: 'power', role: 'out', si: 40 }]);
   expect(extractFigures('A thrust of 2 mN was reported [12].').map((f) => f.si)).toEqual([0.002]);
 });
+
+test('a mean said beside an energy has its side; a load on the secondary dissipates the output; a burner releases the input (invented test data)', () => {
+  expect(extractFigures('The module delivered 2.4 kWh to a resistive load, a mean of 300 W.').map((f) => f.role)).toEqual(['out', 'out']);
+  expect(extractFigures('Without any external input, the module delivered 2.4 kWh to a resistive load, a mean of 300 W.').map((f) => [f.role, f.si])).toEqual([
+    ['in', 0],
+    ['out', 8.64e6],
+    ['out', 300],
+  ]);
+  expect(extractFigures('A resistive load on the secondary dissipated 48 W.')).toMatchObject([{ role: 'out', si: 48 }]);
+  expect(extractFigures('It supplied a steady 1.1 kW of electricity to the station while the burner released 4.0 kW of heat.').map((f) => f.role)).toEqual(['out', 'in']);
+});

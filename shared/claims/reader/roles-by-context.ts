@@ -235,8 +235,10 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     const goesOn = prev !== undefined && SAME_SIDE_LIST_RE.test(text.slice(prev.end, open[0].start)) && CONDITION_AFTER_RE.test(text.slice(open[0].end, open[0].end + 30));
     // ("14 W of electricity … Fourteen watts from a segment is believable": the named figure said again.)
     const again = named.find((d) => d.kind === open[0].kind && siOf(d) !== null && Math.abs((siOf(d) as number) - (siOf(open[0]) ?? NaN)) <= 1e-9 * Math.abs(siOf(d) as number));
+    // ("delivered 2.4 kWh to a resistive load, a mean of 300 W": the named figure's rate, said beside it.)
+    const meanOf = prev !== undefined && /,[^\S\n]*(?:(?:a|an|the)[^\S\n]+)?(?:mean|average|steady|rate|equivalent)[^\S\n]+(?:rate[^\S\n]+|power[^\S\n]+)?(?:of[^\S\n]+)?(?:(?:about|around|roughly|some|nearly)[^\S\n]+)?$/iu.test(text.slice(prev.end, open[0].start)) && text.slice(prev.end, open[0].start).length < 60;
     if (again) open[0].role = 'aside';
-    else if (goesOn) open[0].role = prev.role;
+    else if (goesOn || meanOf) open[0].role = prev.role;
     else if (named.filter(own).every((d) => d.role === 'in')) open[0].role = 'out';
     else if (named.filter(own).every((d) => d.role === 'out')) open[0].role = 'in';
   }

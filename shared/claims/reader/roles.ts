@@ -198,7 +198,7 @@ const LOAD_RECEIVES_RE =
   /(?<!\p{L})(?:loads?|load[^\S\n]+banks?|dummy[^\S\n]+loads?|resistors?|heaters?|heating[^\S\n]+elements?|lamps?|bulbs?|consumers?)[^\S\n]+(?:receives?|received|receiving|gets|got|sees|saw|absorbs?|absorbed|dissipates?|dissipated)[^\S\n]+(?:(?:about|around|roughly|some|only|just|nearly|a steady|an average of|on average)[^\S\n]+)?$/iu;
 
 /** Just before a role word: a word that says it is absent ("no", "without", "zero"). */
-const NEGATED_LEAD_RE = /(?<!\p{L})(?:no|without|zero|never|nor)[^\S\n]+(?:(?:any|external|outside|other|electrical|electric)[^\S\n]+)?$/iu;
+const NEGATED_LEAD_RE = /(?<!\p{L})(?:no|without|zero|never|nor)[^\S\n]+(?:(?:any|external|outside|other|electrical|electric)[^\S\n]+){0,2}$/iu;
 
 /** "dry mass, including …, is", "empty mass:": the words of a craft's mass after the burn, a clause set off by commas allowed between. */
 const DRY_MASS_LEAD_RE =
