@@ -218,6 +218,9 @@ function printPart(name: string, outcomes: ClaimOutcome[], ms: number, withAims:
     `  right entry first          ${pct(s.entries).padStart(8)}  (${s.entries.right}/${s.entries.of})`,
     `  false alarms               ${String(s.falseAlarms).padStart(8)}  (of ${outcomes.filter((o) => !(o.verdict === 'breaks' && o.verdictRight) || o.falseAlarm).length} claims that should not break a law)`,
   ];
+  if (s.nilInputLabels > 0) {
+    lines.push(`    of which the nil-input labelling ${String(s.nilInputLabels).padStart(2)}  (labelled 'needs': nothing in and no run stated; the check finds power out of nothing against the first law)`);
+  }
   if (withAims) {
     const met = (r: { right: number; of: number }) => (r.of === 0 || r.right / r.of >= AIM ? 'met' : 'not met');
     lines.push(

@@ -38,6 +38,13 @@ export interface ClaimOutcome {
   entryRight: boolean | null;
   topEntry: string | null;
   falseAlarm: boolean;
+  /**
+   * A "false alarm" on a claim labelled 'needs' whose figures give nothing in (a device said to need no
+   * supply) and no run: the writers of parts 37 on were asked to label these as needing the run's
+   * length, where the check finds power out with nothing in against the first law at any length of
+   * run. Counted apart, from the labels alone (no text read), so the report can say how many there are.
+   */
+  nilInputLabel: boolean;
 }
 
 const close = (a: number, b: number, rel = VALUE_TOLERANCE) => (b === 0 ? Math.abs(a) <= 1e-9 : Math.abs(a - b) <= rel * Math.abs(b));
@@ -57,6 +64,15 @@ function verdictOf(claim: CorpusClaim, runs: ClaimCheckRun[], needs: { check: st
   if (run) return run.finding;
   if (needs.some((n) => n.check === claim.check)) return 'needs';
   return 'none';
+}
+
+/** The corpus's nil-input convention: a first-law claim labelled 'needs', its input 0, no duration among its figures. */
+export function isNilInputLabel(claim: CorpusClaim): boolean {
+  return (
+    claim.check === 'first-law' &&
+    claim.figures.some((f) => (f.kind === 'power' || f.kind === 'energy') && f.role === 'in' && f.si === 0) &&
+    !claim.figures.some((f) => f.kind === 'duration' && f.role !== 'aside')
+  );
 }
 
 export async function measureClaim(claim: CorpusClaim, match: Matcher): Promise<ClaimOutcome> {
@@ -88,6 +104,7 @@ export async function measureClaim(claim: CorpusClaim, match: Matcher): Promise<
     entryRight: claim.entry === null ? null : matched.slugs[0] === claim.entry,
     topEntry: matched.slugs[0] ?? null,
     falseAlarm: claim.verdict !== 'breaks' && breaks,
+    nilInputLabel: claim.verdict === 'needs' && breaks && isNilInputLabel(claim),
   };
 }
 
@@ -98,6 +115,8 @@ export interface PartSummary {
   verdicts: { right: number; of: number };
   entries: { right: number; of: number };
   falseAlarms: number;
+  /** Of those, the nil-input labelling (ClaimOutcome.nilInputLabel). */
+  nilInputLabels: number;
   /** Claims that should not break a law (verdict other than 'breaks'). */
   lawful: number;
 }
@@ -111,6 +130,7 @@ export function summarise(outcomes: ClaimOutcome[]): PartSummary {
     verdicts: { right: count((o) => o.verdictRight), of: outcomes.length },
     entries: { right: count((o) => o.entryRight === true), of: count((o) => o.entryRight !== null) },
     falseAlarms: count((o) => o.falseAlarm),
+    nilInputLabels: count((o) => o.falseAlarm && o.nilInputLabel),
     lawful: outcomes.length - count((o) => o.verdict === 'breaks' && o.verdictRight),
   };
 }
