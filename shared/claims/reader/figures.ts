@@ -81,7 +81,7 @@ const PER_UNIT_BEFORE_RE = /(?<!\p{L})(?:for|per)[^\S\n]+(?:each|every|one)[^\S\
 const COMES_OUT_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:(?:would|will|should|could|does|do|can|did|must)[^\S\n]+)?(?:come|comes|came|go|goes|went|get|gets|got)[^\S\n]+(?:out|back)(?!\p{L})/iu;
 
 /** Words of heat moved rather than made ("moves three times more heat than it uses"). */
-const MOVES_HEAT_RE = /(?<!\p{L})(?:mov|pump|shift|remov|extract|transferr?|lift|draw|pull)(?:s|es|ed|ing)?[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}?heat(?!\p{L})/iu;
+const MOVES_HEAT_RE = /(?<!\p{L})(?:mov|pump|shift|remov|extract|transferr?|lift|draw|pull)(?:s|es|ed|ing)?[^\S\n]+(?:[\p{L}\p{N}.,-]+[^\S\n]+){0,4}?heat(?!\p{L})/iu;
 
 /**
  * A gain of heat over work ("three times as much heat as the electricity it uses") is a COP: a heating
@@ -96,7 +96,8 @@ function gainAsCop(text: string, start: number, end: number): { role: 'heating' 
   if (!MOVES_HEAT_RE.test(sentence)) return null;
   const paragraph = paragraphAround(text, start, end);
   const pump = HEAT_PUMP_RE.test(paragraph);
-  const cooler = COOLING_MACHINE_RE.test(paragraph);
+  // (A "cooling module", "it cools": a machine that cools, by whatever name.)
+  const cooler = COOLING_MACHINE_RE.test(paragraph) || /(?<!\p{L})cool(?:s|ed|ing|er|ers)?(?!\p{L})/iu.test(paragraph);
   if (pump && !cooler) return heating;
   if (cooler && !pump) return { role: 'cooling', assumption: 'The heat a cooling machine moves as a multiple of its work in: read as a cooling COP.' };
   // (Heat moved by a machine the text does not name: not energy made, so not an efficiency either.)

@@ -903,3 +903,10 @@ test('a mean said beside an energy has its side; a load on the secondary dissipa
   expect(extractFigures('A resistive load on the secondary dissipated 48 W.')).toMatchObject([{ role: 'out', si: 48 }]);
   expect(extractFigures('It supplied a steady 1.1 kW of electricity to the station while the burner released 4.0 kW of heat.').map((f) => f.role)).toEqual(['out', 'in']);
 });
+
+test('"moving 1.9 units of heat out of the cabinet for each unit of electricity" is a COP; "1.45 units for every unit the battery spends" a gain (invented test data)', () => {
+  expect(extractFigures('The freezer held its compartment at −18 °C with the air around it at 32 °C, moving 1.9 units of heat out of the cabinet for each unit of electricity.').find((f) => f.kind === 'cop')).toMatchObject({ role: 'cooling', si: 1.9 });
+  expect(extractFigures('The system returns 1.45 units of energy for every unit the battery spends splitting the water.')).toMatchObject([{ kind: 'efficiency', si: 1.45 }]);
+  // (A "cooling module" that "moves twelve times as much heat as the electricity it uses" moves it to cool.)
+  expect(extractFigures('The thermoelectric cooling module moves twelve times as much heat as the electricity it uses.')).toMatchObject([{ kind: 'cop', role: 'cooling', si: 12 }]);
+});
