@@ -136,7 +136,12 @@ const COMPARED_BEFORE_RE =
  */
 function earlierDeviceSaid(text: string, d: Draft): boolean {
   const sentence = sentenceAround(text, d.start, d.end);
-  if (EARLIER_DEVICE_RE.test(sentence) && !LATEST_DEVICE_RE.test(sentence)) return true;
+  // "85 mN …, far more than earlier devices of the same kind": the earlier devices are what the
+  // claim's figure, said before them, is set above; they have no figure of their own here.
+  const earlier = EARLIER_DEVICE_RE.exec(sentence);
+  const at = text.lastIndexOf(sentence, d.start);
+  if (earlier && at >= 0 && d.start - at < earlier.index && ABOVE_BEFORE_RE.test(sentence.slice(0, earlier.index)) && !/\d/u.test(sentence.slice(earlier.index))) return false;
+  if (earlier && !LATEST_DEVICE_RE.test(sentence)) return true;
   const clause = clauseAround(text, d);
   return EARLIER_DEVICE_RE.test(clause) && !LATEST_DEVICE_RE.test(clause) && LATEST_DEVICE_RE.test(sentence);
 }
@@ -189,6 +194,8 @@ const EARLIER_DEVICE_RE = new RegExp(
   `(?<![\\p{L}\\p{N}])(?:(?:previous|earlier|older|former|first-generation|last year's|original|old|predecessor)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?|(?:1[89]\\d0s|20[0-2]0s|decades?[- ]old|historic(?:al)?)[^\\S\\n]+(?:claims?[^\\S\\n]+(?:of|for|about)[^\\S\\n]+(?:an?|the)[^\\S\\n]+)?(?:[\\p{L}-]+[^\\S\\n]+)?)${DEVICE_NOUNS}(?!\\p{L})`,
   'iu',
 );
+/** Right before a device the claim is set above: "far more than", "better than any", "outperforming the". */
+const ABOVE_BEFORE_RE = /(?<!\p{L})(?:than|over|beyond|outperform\w*|beat\w*|surpass\w*|exceed\w*)[^\S\n]+(?:(?:all|any|the|most|its|their)[^\S\n]+)?$/iu;
 const LATEST_DEVICE_RE = new RegExp(`(?<!\\p{L})(?:new|this|latest|present|current|improved|second|next)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?${DEVICE_NOUNS}(?!\\p{L})`, 'iu');
 const OWN_FLOW_BETWEEN_RE = /(?<!\p{L})(?:input|output|inputs|outputs|in|out|consumption|supply|P_?\{?(?:in|out)\}?|E_?\{?(?:in|out)\}?)(?!\p{L})/iu;
 

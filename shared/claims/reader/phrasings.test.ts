@@ -910,3 +910,12 @@ test('"moving 1.9 units of heat out of the cabinet for each unit of electricity"
   // (A "cooling module" that "moves twelve times as much heat as the electricity it uses" moves it to cool.)
   expect(extractFigures('The thermoelectric cooling module moves twelve times as much heat as the electricity it uses.')).toMatchObject([{ kind: 'cop', role: 'cooling', si: 12 }]);
 });
+
+test('"85 mN …, far more than earlier devices of the same kind": the claim set above earlier devices is still the claim (invented test data)', () => {
+  const text = 'The company says its cavity produced 85 mN of thrust when fed with 1.2 kW of microwaves, far more than earlier devices of the same kind.\n\nA physicist said that 1.2 kW of light would push with about 4 micronewtons.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.text === '85 mN')?.role).not.toBe('aside');
+  expect(f.find((x) => x.text === '4 micronewtons')?.role).toBe('aside');
+  // (An earlier device's own figure stays set aside.)
+  expect(extractFigures('Our previous prototype reached 35 % at 800 W. The new engine reaches 41 % at 900 W.').find((x) => x.text === '800 W')?.role).toBe('aside');
+});
