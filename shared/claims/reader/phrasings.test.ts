@@ -919,3 +919,11 @@ test('"85 mN …, far more than earlier devices of the same kind": the claim set
   // (An earlier device's own figure stays set aside.)
   expect(extractFigures('Our previous prototype reached 35 % at 800 W. The new engine reaches 41 % at 900 W.').find((x) => x.text === '800 W')?.role).toBe('aside');
 });
+
+test('a heat pump "on a −10 °C winter day" has its cold side there, and the difference it lifts gives the warm side (invented test data)', () => {
+  const f = extractFigures('The heat pump delivers nine units of heat for every unit of electricity on a −10 °C winter day, while lifting that heat across a 45 °C difference to the radiators.');
+  expect(f.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si])).toEqual([
+    ['cold', expect.closeTo(263.15, 9)],
+    ['hot', expect.closeTo(308.15, 9)],
+  ]);
+});

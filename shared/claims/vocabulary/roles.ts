@@ -109,7 +109,7 @@ export const TEMPERATURE_ROLES: readonly RoleWords[] = [
       'well water', 'groundwater', 'borehole', 'winter', 'bottom', 'lower', 'rejects? heat (?:to|at)', 'reject(?:s|ed|ing)?', 'cooled to', 'chilled to',
       'cool(?:s|ed|ing)? (?:\\w+ )?to', 'keeps? (?:\\w+ )?at', 'frozen',
     ],
-    after: ['deep(?:er)? (?:water|layer)', 'sink', 'ambient', 'borehole', 'brine', 'ground loop', 'ground water', 'groundwater', 'well water', 'chilled water', 'cold water', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater', 'cold side', 'air', 'outdoor', 'ground', '(?:as|for|is|being) (?:the |its |our |a )?(?:cold|cool|colder|cooler) (?:side|end|sink|reservoir|bath)'],
+    after: ['deep(?:er)? (?:water|layer)', 'sink', 'ambient', 'borehole', 'brine', 'ground loop', 'ground water', 'groundwater', 'well water', 'chilled water', 'cold water', 'room', 'outside', 'outdoors?', 'environment', 'surroundings', 'cold', 'river', 'seawater', 'cold side', 'air', 'outdoor', 'ground', '(?:winter|wintry|frosty|freezing|January|February|December)[- ](?:day|night|morning|evening|spell)s?', '(?:as|for|is|being) (?:the |its |our |a )?(?:cold|cool|colder|cooler) (?:side|end|sink|reservoir|bath)'],
   },
 ];
 
