@@ -927,3 +927,18 @@ test('a heat pump "on a −10 °C winter day" has its cold side there, and the d
     ['hot', expect.closeTo(308.15, 9)],
   ]);
 });
+
+test('"propellant making up 80 per cent of its lift-off mass"; what a generator sends back is its output (invented test data)', () => {
+  expect(extractFigures('The 30-tonne vehicle will carry propellant making up 80 per cent of its lift-off mass.').filter((f) => f.kind === 'mass').map((f) => [f.role, f.si])).toEqual([
+    ['wet', 30000],
+    ['propellant', 24000],
+    ['dry', 6000],
+  ]);
+  const f = extractFigures('The traction motor draws 35 A at 48 V from the pack, while a generator driven by the rear axle sends 40 A at 52 V back into it.');
+  expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+    ['in', 1680],
+    ['out', 2080],
+  ]);
+  // (An alternator that "is fed" takes it in.)
+  expect(extractFigures('The alternator is fed 1.2 kW by its drive motor.')[0].role).not.toBe('out');
+});
