@@ -942,3 +942,13 @@ test('"propellant making up 80 per cent of its lift-off mass"; what a generator 
   // (An alternator that "is fed" takes it in.)
   expect(extractFigures('The alternator is fed 1.2 kW by its drive motor.')[0].role).not.toBe('out');
 });
+
+test('"returns 86 kilowatt-hours for every 100 it takes in": the input in the output\'s unit (invented test data)', () => {
+  const text = 'The flywheel store returns 86 kilowatt-hours for every 100 it takes in.';
+  expect(extractFigures(text).map((f) => [f.kind, f.role, f.si])).toEqual([
+    ['energy', 'out', 86 * 3.6e6],
+    ['energy', 'in', 100 * 3.6e6],
+  ]);
+  // 86/100 (kWh = 3.6 MJ, NIST SP 811 B.8, cancels).
+  expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.86, 9);
+});

@@ -95,7 +95,30 @@ function efficiencyQuotient(text: string, drafts: Draft[]): void {
   }
 }
 
+/** After an output: "… for every 100 it takes in", "… for each 10 the battery gives it": how much goes in for it, in its unit. */
+const FOR_EVERY_IN_AFTER_RE =
+  /^[^\S\n]+(?:(?:back|out)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(\d+(?:\.\d+)?)(?![\p{N}.,]|[^\S\n]*[\p{L}%°])|^[^\S\n]+(?:(?:back|out)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(\d+(?:\.\d+)?)(?=[^\S\n]+(?:(?:it|they|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:takes?|took|draws?|drew|uses?|used|consumes?|consumed|receives?|received|gets?|got|is given|was given|puts? in|goes in|went in|absorbs?|absorbed|stores?|stored)(?!\p{L}))/iu;
+
+/**
+ * "returns 86 kilowatt-hours for every 100 it takes in": the input, in the output's unit, said as a bare
+ * number after "for every" (a figure of its own where the unit is written: "for every 100 kWh").
+ */
+function inputForEvery(text: string, drafts: Draft[]): void {
+  for (const d of [...drafts]) {
+    if ((d.kind !== 'energy' && d.kind !== 'power') || d.role === 'in' || d.role === 'aside' || d.derived) continue;
+    const m = FOR_EVERY_IN_AFTER_RE.exec(text.slice(d.end, d.end + 80));
+    const n = m?.[1] ?? m?.[2];
+    const unit = /^[-\d.e+]+[^\S\n]*(.+)$/u.exec(d.quantity)?.[1];
+    if (!m || !n || !unit) continue;
+    const start = d.end + m[0].lastIndexOf(n);
+    if (drafts.some((o) => o.start <= start && start < o.end)) continue;
+    if (d.role === null) d.role = 'out';
+    insertAfter(drafts, d, { start, end: start + n.length, kind: d.kind, quantity: `${n} ${unit}`, role: 'in' });
+  }
+}
+
 export function relateFigures(text: string, drafts: Draft[]): void {
+  inputForEvery(text, drafts);
   // "P_out/P_in = 3.2 kW / 0.8 kW": the roles in the order the labels give them.
   for (const m of text.matchAll(RATIO_LABELS_RE)) {
     const from = m.index! + m[0].length;
