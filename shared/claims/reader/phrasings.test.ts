@@ -952,3 +952,11 @@ test('"returns 86 kilowatt-hours for every 100 it takes in": the input in the ou
   // 86/100 (kWh = 3.6 MJ, NIST SP 811 B.8, cancels).
   expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.86, 9);
 });
+
+test('a COP or an efficiency "over the winter was", "was measured as", "varied between", "averaged" (invented test data)', () => {
+  expect(extractFigures('The mean metered heating COP over the winter was 2.9.')).toMatchObject([{ kind: 'cop', role: 'heating', si: 2.9 }]);
+  expect(extractFigures('Its cooling COP was measured as 5.8.')).toMatchObject([{ kind: 'cop', role: 'cooling', si: 5.8 }]);
+  expect(extractFigures('The heating COP varied between 2.8 and 3.4.')).toMatchObject([{ kind: 'cop', si: 2.8, upper: { si: 3.4 } }]);
+  expect(extractFigures('Its efficiency was measured as 0.31.')).toMatchObject([{ kind: 'efficiency', si: 0.31 }]);
+  expect(extractFigures('The COP averaged 3.1 over the season.')).toMatchObject([{ kind: 'cop', si: 3.1 }]);
+});
