@@ -960,3 +960,11 @@ test('a COP or an efficiency "over the winter was", "was measured as", "varied b
   expect(extractFigures('Its efficiency was measured as 0.31.')).toMatchObject([{ kind: 'efficiency', si: 0.31 }]);
   expect(extractFigures('The COP averaged 3.1 over the season.')).toMatchObject([{ kind: 'cop', si: 3.1 }]);
 });
+
+test('a stage "burned … down to 190 t at separation" ends at its dry mass; "500 kg of it storable bipropellant" is propellant (invented test data)', () => {
+  expect(extractFigures('The rocket stage burned from a lift-off mass of 540 t down to 190 t at separation.').map((f) => [f.role, f.si])).toEqual([
+    ['wet', 540000],
+    ['dry', 190000],
+  ]);
+  expect(extractFigures('The orbital-transfer rocket has a wet mass of 800 kg, 500 kg of it storable bipropellant, and an exhaust velocity of 2.9 km/s.').filter((f) => f.kind === 'mass').map((f) => f.role)).toContain('propellant');
+});

@@ -100,6 +100,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   if (roles === ROLES.mass) {
     const lead = text.slice(Math.max(floor, start - 220), start);
     if (DRY_MASS_LEAD_RE.test(lead) || BURNOUT_LEAD_RE.test(lead)) return 'dry';
+    // "burned from a lift-off mass of 540 t down to 190 t (at separation)": what a burn brings it down to.
+    if (/(?<!\p{L})(?:burn(?:s|ed|t|ing)?|drops?|dropped|dropping|falls?|fell|falling|goes|went|came)[^.;!?\n]{0,60}(?<!\p{L})down[^\S\n]+to[^\S\n]+(?:(?:about|around|roughly|some|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 120), start))) return 'dry';
   }
   if (roles === ROLES.temperature) {
     // A heat pump's or fridge's source is its cold side and its sink the warm one (the other way round for an engine).
