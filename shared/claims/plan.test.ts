@@ -1095,3 +1095,11 @@ test("a pulse's length is no run of a power said apart from it (invented test da
   const coil = 'A capacitor bank stores 500 J and the coil then gives 300 kW for 2 ms.';
   expect(runClaimChecks(extractFigures(coil), { text: coil }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.2, 9);
 });
+
+test('"your torch is a rocket!", light that carries the momentum with nothing thrown out: held to the photon bound, and within it (invented test data)', () => {
+  const text = 'Fun fact Friday: your torch is a rocket! A torch putting out 1 W of light pushes back on your hand with about 1 nanonewton, because light carries momentum. No fuel, no exhaust.';
+  // 1 nN against 1 W / c = 3.336 nN (c exact, SI Brochure): 0.2998.
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
+  expect(run?.finding).toBe('consistent');
+  expect(run?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(1e-9 * 299792458, 9);
+});

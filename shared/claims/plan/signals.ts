@@ -65,6 +65,13 @@ const vacuumClaimed = (text: string): boolean =>
 /** A thruster whose exhaust is light: there "rocket" ("light is a terrible rocket") names no propellant. */
 const PHOTON_ROCKET_RE = /(?<!\p{L})(?:photon[- ](?:thrusters?|rockets?|drives?|propulsion)|laser[- ](?:thrusters?|propulsion)|light (?:is|as) (?:its|the|a)[^.;!?\n]{0,20}(?:exhaust|rocket))(?!\p{L})/iu;
 const BARE_ROCKET_RE = /(?<!\p{L})rockets?(?!\p{L})/giu;
+/**
+ * "Your torch is a rocket!", "a rocket with no fuel: the light itself carries the momentum": light said to
+ * push, where the text also says plainly that nothing is thrown out — "rocket" is a figure of speech.
+ */
+function lightAsRocket(text: string): boolean {
+  return /(?<!\p{L})(?:light(?:[^\S\n]+itself)?[^\S\n]+carries[^\S\n]+(?:the[^\S\n]+)?momentum|torch(?:es)?|flashlights?|laser(?:s|[- ]beams?)?|(?:a|the|its)[^\S\n]+beam[^\S\n]+(?:shines|of light))(?!\p{L})/iu.test(text) && PLAIN_NO_PROPELLANT_RE.test(text);
+}
 /** Propellant said not to leave: "nothing, neither propellant nor radiation, leaves", "emits neither propellant nor light". */
 const NEGATED_PROPELLANT_RE = /(?<!\p{L})(?:neither|nor)[^\S\n]+(?:any[^\S\n]+)?(?:propellant|reaction mass|exhaust|gas|matter)(?!\p{L})/iu;
 const NEGATED_PROPELLANT_ALL_RE = new RegExp(NEGATED_PROPELLANT_RE.source, 'giu');
@@ -149,7 +156,7 @@ export function readSignals(ctx: PlanContext): Signals {
     // An air-pusher (a lifter, an ion-wind craft) said to work in vacuum has no air to push: its words no
     // longer count as propellant.
     propellant: PROPELLANT_RE.test(
-      onlyTheClaim(text, (vacuumClaimed(text) ? withoutFree.replace(AIR_PUSHER_RE, ' ') : withoutFree).replace(PHOTON_ROCKET_RE.test(text) ? BARE_ROCKET_RE : /$^/u, ' ')),
+      onlyTheClaim(text, (vacuumClaimed(text) ? withoutFree.replace(AIR_PUSHER_RE, ' ') : withoutFree).replace(PHOTON_ROCKET_RE.test(text) || lightAsRocket(text) ? BARE_ROCKET_RE : /$^/u, ' ')),
     ),
     heatEngine: HEAT_ENGINE_RE.test(text),
     // (A boiler's text names radiators and flow temperatures too: those words alone name no heat pump there.)

@@ -968,3 +968,10 @@ test('a stage "burned … down to 190 t at separation" ends at its dry mass; "50
   ]);
   expect(extractFigures('The orbital-transfer rocket has a wet mass of 800 kg, 500 kg of it storable bipropellant, and an exhaust velocity of 2.9 km/s.').filter((f) => f.kind === 'mass').map((f) => f.role)).toContain('propellant');
 });
+
+test('"throws out xenon at 30 km/s", "empty of propellant, 3.6 kg", power "going into the battery" or that "reaches the radiators" (invented test data)', () => {
+  expect(extractFigures("The probe's ion engine throws out xenon at 30 km/s.")).toMatchObject([{ kind: 'speed', role: 'exhaust', si: 30000 }]);
+  expect(extractFigures('Fuelled, the rocket weighs 4.2 kg; empty of propellant, 3.6 kg.').map((f) => f.role)).toEqual(['wet', 'dry']);
+  expect(extractFigures('The dashboard shows 7.0 kW going into the battery.')).toMatchObject([{ role: 'out', si: 7000 }]);
+  expect(extractFigures('So 8 kW reaches the radiators.')).toMatchObject([{ role: 'out', si: 8000 }]);
+});

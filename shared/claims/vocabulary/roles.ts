@@ -81,7 +81,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at (?:the|its) (?:output )?terminals', 'at the (?:crank|output |drive |propeller |main )?shaft', 'at the (?:wheels?|axles?|flywheel|crank)', 'of shaft power', 'on its output terminals',
       // "4.8 kWh 'drawn from the vacuum'": what a claimed source gives, not what it takes.
       '(?:"|“|\x27|‘)?(?:drawn|taken|extracted|harvested|pulled|pumped|tapped) from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point(?: field| energy)?|a?ether|nowhere|nothing|thin air)',
-      'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output', '(?:reached|reaches|reach|went to|goes to|got to|arrived at|made it to) (?:the |its )?(?:wheels?|shaft|axles?|load|output|grid|battery|house|motor)', 'back(?! (?:in|into|to (?:the|its) (?:input|supply|source)))'],
+      'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', 'exported', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output', '(?:reached|reaches|reach|went to|goes to|got to|arrived at|made it to) (?:the |its )?(?:wheels?|shaft|axles?|load|output|grid|battery|house|home|motor|radiators?|rooms?|floors?|tanks?|cylinders?|pool|building)', '(?:going|flowing|goes|flows|went|flowed) (?:in)?to (?:the |its )?(?:battery|grid|load|tank|house|home|radiators?)', 'back(?! (?:in|into|to (?:the|its) (?:input|supply|source)))'],
   },
 ];
 
@@ -132,7 +132,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
       // "mass after all usable propellant is burned, stage and payload: 520 kg" (before the propellant words,
       // the longest fitting words win).
       '(?:mass )?(?:after|once|when) (?:all )?(?:the |its )?(?:usable |useable )?(?:propellant|fuel)s? (?:is|are|has been|have been|was|were) (?:all )?(?:burn(?:ed|t)|used(?: up)?|spent|consumed|expended|gone)(?:[^\\S\\n]*[,:;]?[^\\S\\n]*(?:[\\w-]+ ){0,3}?[\\w-]*[:=,]?)?',
-      'dry', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', '(?:,[^\\S\\n]*)?leaving(?: (?:only|just|about|some))?', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert', '(?:burn(?:s|ing|ed|t)?|drops?|dropping|dropped|falls?|falling|fell) (?:down )?to', 'ends? (?:up )?(?:at|with)', 'ending (?:up )?(?:at|with)'],
+      'dry', 'empty of (?:propellant|fuel)', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', '(?:,[^\\S\\n]*)?leaving(?: (?:only|just|about|some))?', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert', '(?:burn(?:s|ing|ed|t)?|drops?|dropping|dropped|falls?|falling|fell) (?:down )?to', 'ends? (?:up )?(?:at|with)', 'ending (?:up )?(?:at|with)'],
     after: ['(?:dry|empty|final|burn-?out|structural) mass', '\\((?:empty|dry|unfuell?ed|when empty)\\)', 'dry', 'empty',
       'when (?:(?:its|the) tanks? (?:are|is) |it is )?(?:empty|dry)', ',[^\\S\\n]*(?:empty|dry)(?=[^\\S\\n]*(?:[;.)\\n]|$))', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end',
       '(?:once|when|after) (?:all )?(?:the |its )?(?:usable |useable )?(?:propellant|fuel)s? (?:is|are|has been|have been|was|were) (?:all )?(?:burn(?:ed|t)|used(?: up)?|spent|consumed|expended|gone)'],
@@ -158,7 +158,7 @@ export const MASS_ROLES: readonly RoleWords[] = [
 export const SPEED_ROLES: readonly RoleWords[] = [
   {
     role: 'exhaust',
-    before: ['v_?e(?:x|xh)?', 'u_?e', 'c_?e', 'exhausts? at', 'exhausts?', '(?:is|are|was|were|being) exhausted at', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at', '(?:expels?|expelling|ejects?|ejecting|vents?|venting|throws?|fires?|firing|shoots?)(?: (?:it|them|its [\\w-]+|the [\\w-]+|[\\w-]+ ions|propellant|gas|mass|xenon|nitrogen|ions|plasma))?(?: out)? at', 'leaves? the (?:nozzle|thruster|engine) at'],
+    before: ['v_?e(?:x|xh)?', 'u_?e', 'c_?e', 'exhausts? at', 'exhausts?', '(?:is|are|was|were|being) exhausted at', 'jet', 'ejection', 'effective exhaust', 'exit', 'nozzle', 'expelled at', 'ejected at', 'thrown out at', 'leaves? at', '(?:expels?|expelling|ejects?|ejecting|vents?|venting|throws?|fires?|firing|shoots?)(?: (?:it|them|its [\\w-]+|the [\\w-]+|[\\w-]+ ions|propellant|gas|mass|xenon|nitrogen|ions|plasma))?(?: out)? at', 'leaves? the (?:nozzle|thruster|engine) at', '(?:throws?|throwing|threw|spits?|spitting|blows?|blowing|pushes|pushing|shoots?|shooting) out (?:its |the )?[\\w-]+ at'],
     after: ['exhaust', 'jet', 'exhaust velocity', 'exhaust speed'],
   },
   {
