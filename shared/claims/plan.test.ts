@@ -1103,3 +1103,13 @@ test('"your torch is a rocket!", light that carries the momentum with nothing th
   expect(run?.finding).toBe('consistent');
   expect(run?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(1e-9 * 299792458, 9);
 });
+
+test('"a minute of winding at twenty watts gives forty minutes of listening at a quarter of a watt": each power over its own time (invented test data)', () => {
+  const text = 'One minute of winding, which the maker reckons at roughly twenty watts of effort, gives forty minutes of listening at a quarter of a watt.';
+  // 0.25 W × 2400 s = 600 J out of 20 W × 60 s = 1200 J in: 0.5.
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.5, 9);
+  // (A log's "for 5 hours, then discharged at 1.5 kW" keeps its hours: 1.5 kW × 6 h over 2 kW × 5 h = 0.9.)
+  const log = 'Battery log: charged at 2 kW for 5 hours, then discharged at 1.5 kW for 6 hours.';
+  expect(runClaimChecks(extractFigures(log), { text: log }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.9, 9);
+});

@@ -119,8 +119,11 @@ export function relateDurations(text: string, drafts: Draft[]): void {
     const ownOf = (p: Draft): Draft | undefined => {
       const nextPower = powers.find((q) => q.start > p.start);
       const prevPower = [...powers].reverse().find((q) => q.start < p.start);
+      // ("twenty watts of effort, gives forty minutes of listening at a quarter of a watt": the forty
+      // minutes are the next power's, said right before it.)
+      const nextPowers = (d: Draft) => nextPower !== undefined && nextPower.start > d.end && nextPower.start - d.end < 40 && /^[^\S\n]+of[^\S\n]+[\p{L}-]+(?:[^\S\n]+[\p{L}-]+)?[^\S\n]+(?:at|drawing|using)[^\S\n]+(?:(?:about|around|roughly|some|just|only|a steady)[^\S\n]+)?$/iu.test(text.slice(d.end, nextPower.start));
       return (
-        durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && sameClause(text, d, p) && d.start - p.end < 80) ??
+        durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && !nextPowers(d) && sameClause(text, d, p) && d.start - p.end < 80) ??
         [...durations].reverse().find((d) => d.end <= p.start && (!prevPower || d.start > prevPower.end) && sameClause(text, d, p) && p.start - d.end < 60)
       );
     };
