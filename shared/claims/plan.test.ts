@@ -1113,3 +1113,10 @@ test('"a minute of winding at twenty watts gives forty minutes of listening at a
   const log = 'Battery log: charged at 2 kW for 5 hours, then discharged at 1.5 kW for 6 hours.';
   expect(runClaimChecks(extractFigures(log), { text: log }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.9, 9);
 });
+
+test("a mini-split's stated heating capacity over its draw is a heating COP, whatever cooling words its name has (invented test data)", () => {
+  const text = 'Calloway MiniSplit ductless system. Heating capacity 36,000 BTU/h at 47 °F outdoors with 95 °F supply air, drawing 3.1 kW.';
+  // 36,000 BTU/h = 10.55 kW (BTU/h = 0.29307107 W, NIST SP 811 B.8); COP 3.403 against 308.15/26.667 = 11.556.
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+  expect(run?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo((36000 * 0.29307107) / 3100 / (308.15 / (308.15 - 281.4833333)), 4);
+});

@@ -152,7 +152,10 @@ export function planCarnot(b: Basis): HeatReading {
   const ownFigures = [pIn, pOut, eIn, eOut, ...ofKind(figures, 'efficiency').filter((f) => f.si > 1)].filter((f): f is Figure => f !== undefined && f.start !== null && f.end !== null);
   const elsewhere = ownFigures.length > 0 && ownFigures.every((f) => paragraphOfAnotherMachine(text, f.start!, f.end!) !== null);
   const movesHeat = !elsewhere && (s.heatPump || cooling || heatFromSource || statedCop || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity));
-  const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, pOut ?? eOut, { ...s, cooling }) : undefined;
+  // ("Heating capacity 36,000 BTU/h … drawing 3.1 kW" of a mini-split: heat delivered, whatever cooling words the name has.)
+  const outFigure = pOut ?? eOut;
+  const outHeating = outFigure?.start != null && /(?<!\p{L})heating(?:[^\S\n]+(?:capacity|output|power|duty))?[^\S\n]*[:=]?[^\S\n]*(?:(?:of|is|was|about|up to)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, outFigure.start - 40), outFigure.start));
+  const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, outFigure, { ...s, cooling: cooling && !outHeating }) : undefined;
   const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
   /** Any efficiency or output-over-input ratio the text states (for one at most 1: a consistent balance). */
   const share = efficiency ?? ofKind(figures, 'efficiency')[0];

@@ -109,6 +109,19 @@ export function relateDurations(text: string, drafts: Draft[]): void {
     per.role = 'aside';
   }
 
+  // "burns 40,000 BTU of pellets an hour": an energy of something per hour is a power, run or no run.
+  for (const e of drafts) {
+    if (e.kind !== 'energy' || e.derived) continue;
+    const m = /^[^\S\n]+of[^\S\n]+(?:[\p{L}-]+[^\S\n]+){1,2}?(?:an?|per|each|every)[^\S\n]+(hour|minute|day)(?!\p{L})/iu.exec(text.slice(e.end, e.end + 50));
+    const energy = siOf(e);
+    if (!m || energy === null) continue;
+    const unitTime = { hour: 3600, minute: 60, day: 86400 }[m[1].toLowerCase() as 'hour' | 'minute' | 'day'];
+    e.kind = 'power';
+    e.quantity = typedSi(energy / unitTime, 'W');
+    e.derived = `power = energy per ${m[1].toLowerCase()} (${formatQuantity(energy, 'J')} / ${formatQuantity(unitTime, 's')})`;
+    for (const d of drafts) if (d.kind === 'duration' && d.start >= e.end && d.start < e.end + m[0].length) d.role = 'aside';
+  }
+
   // Powers and energies over a stated run: energy = power × time.
   const durations = drafts.filter((d) => d.kind === 'duration' && d.role !== 'aside');
   const longest = [...durations].sort((a, b) => (siOf(b) ?? 0) - (siOf(a) ?? 0))[0];

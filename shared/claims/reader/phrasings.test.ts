@@ -975,3 +975,9 @@ test('"throws out xenon at 30 km/s", "empty of propellant, 3.6 kg", power "going
   expect(extractFigures('The dashboard shows 7.0 kW going into the battery.')).toMatchObject([{ role: 'out', si: 7000 }]);
   expect(extractFigures('So 8 kW reaches the radiators.')).toMatchObject([{ role: 'out', si: 8000 }]);
 });
+
+test('"burns 40,000 BTU of pellets an hour" is a power; "gives back 94 % of whatever the panels put in" a share of the input (invented test data)', () => {
+  // 40,000 BTU_IT = 4.22 × 10⁷ J (BTU_IT = 1055.05585262 J, NIST SP 811 B.8), over 3600 s.
+  expect(extractFigures('It burns 40,000 BTU of pellets an hour and puts 34,000 BTU/h of heat into your living room.')[0]).toMatchObject({ kind: 'power', role: 'in', si: expect.closeTo((40000 * 1055.05585262) / 3600, 6) });
+  expect(extractFigures('The battery bank gives back 94 % of whatever the panels put in.')).toMatchObject([{ kind: 'efficiency', si: expect.closeTo(0.94, 12) }]);
+});
