@@ -1120,3 +1120,12 @@ test("a mini-split's stated heating capacity over its draw is a heating COP, wha
   const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
   expect(run?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo((36000 * 0.29307107) / 3100 / (308.15 / (308.15 - 281.4833333)), 4);
 });
+
+test('"130 % efficiency" of a solar cell in a text that says the figure counts electrons per photon is a quantum efficiency: no energy claim (invented test data)', () => {
+  const text = "The headline says a lab built a solar cell with 130 % efficiency. Read past it and the figure is an external quantum efficiency: the cell delivers 1.3 electrons to the circuit for each photon that lands on it.";
+  const f = extractFigures(text);
+  expect(f).toMatchObject([{ kind: 'quantum-efficiency', si: 1.3 }]);
+  expect(runClaimChecks(f, { text }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+  // (Alone, "130 % efficiency" of a solar cell is an energy claim.)
+  expect(extractFigures('The solar cell reached 130 % efficiency, the startup says.')).toMatchObject([{ kind: 'efficiency', si: 1.3 }]);
+});

@@ -981,3 +981,11 @@ test('"burns 40,000 BTU of pellets an hour" is a power; "gives back 94 % of what
   expect(extractFigures('It burns 40,000 BTU of pellets an hour and puts 34,000 BTU/h of heat into your living room.')[0]).toMatchObject({ kind: 'power', role: 'in', si: expect.closeTo((40000 * 1055.05585262) / 3600, 6) });
   expect(extractFigures('The battery bank gives back 94 % of whatever the panels put in.')).toMatchObject([{ kind: 'efficiency', si: expect.closeTo(0.94, 12) }]);
 });
+
+test('"9 kg on the pad, of which 5.4 kg is nitrous and paraffin": the propellant (invented test data)', () => {
+  expect(extractFigures('Rocket logbook: 9 kg on the pad, of which 5.4 kg is nitrous and paraffin, and an effective exhaust speed of 2.1 km/s.').filter((f) => f.kind === 'mass').map((f) => [f.role, f.si])).toEqual([
+    ['wet', 9],
+    ['propellant', 5.4],
+    ['dry', expect.closeTo(3.6, 9)],
+  ]);
+});

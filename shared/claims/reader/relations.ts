@@ -6,7 +6,7 @@
  * short of the input, out = in + excess, the output of a stated gain or efficiency, a self-running
  * device's zero input and a heat pump's COP; then temperatures.ts and durations.ts.
  */
-import { HARVEST_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
+import { HARVEST_WORDS, QUANTUM_EFFICIENCY_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import { FIGURE_SI_UNIT, type FigureRole } from '../types';
@@ -117,8 +117,35 @@ function inputForEvery(text: string, drafts: Draft[]): void {
   }
 }
 
+/** A text's own words that a figure above 100 % counts particles: "the figure is an external quantum efficiency", "1.3 electrons for each photon". */
+const COUNTS_PARTICLES_RE = new RegExp(
+  `(?<!\\p{L})(?:${QUANTUM_EFFICIENCY_WORDS.join('|')})(?!\\p{L})|(?<!\\p{L})electrons?(?:[^\\S\\n]+[\\p{L}-]+){0,4}?[^\\S\\n]+(?:for|per)[^\\S\\n]+(?:each|every|one|an?)?[^\\S\\n]*(?:incident[^\\S\\n]+|absorbed[^\\S\\n]+)?photons?(?!\\p{L})`,
+  'iu',
+);
+/** A power conversion efficiency named as such: a figure of energy, whatever else the text counts. */
+const POWER_EFFICIENCY_RE = /(?<!\p{L})(?:power[- ]conversion|wall-?plug|energy[- ]conversion)[^\S\n]+efficiency[^.;!?\n]{0,30}?(\d+(?:\.\d+)?)[^\S\n]*%/iu;
+
+/**
+ * "A solar cell with 130 % efficiency … the figure is an external quantum efficiency: 1.3 electrons for
+ * each photon": a percentage above 100 said of an efficiency, in a text whose own words say it counts
+ * particles (and that gives no power conversion efficiency above 100 %), is a quantum efficiency.
+ */
+function quantumRestated(text: string, drafts: Draft[]): void {
+  if (!COUNTS_PARTICLES_RE.test(text)) return;
+  const power = POWER_EFFICIENCY_RE.exec(text);
+  if (power && Number(power[1]) > 100) return;
+  for (const d of drafts) {
+    if (d.kind !== 'efficiency' || d.derived || !/%|per ?cent/iu.test(text.slice(d.start, d.end))) continue;
+    const si = siOf(d);
+    if (si === null || si <= 1) continue;
+    d.kind = 'quantum-efficiency';
+    d.assumption = 'A figure above 100 % in a text that says it counts particles (electrons per photon): read as a quantum efficiency, no energy claim.';
+  }
+}
+
 export function relateFigures(text: string, drafts: Draft[]): void {
   inputForEvery(text, drafts);
+  quantumRestated(text, drafts);
   // "P_out/P_in = 3.2 kW / 0.8 kW": the roles in the order the labels give them.
   for (const m of text.matchAll(RATIO_LABELS_RE)) {
     const from = m.index! + m[0].length;
