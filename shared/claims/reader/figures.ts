@@ -10,7 +10,7 @@ import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
 import { comparedPercent, relate } from './comparisons';
 import { BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
-import { asideApparentSpeeds, asideOtherTopics, asideSignals, asideThresholds, asideWorkedBounds, rolesFromLineLabels } from './topics';
+import { asideApparentSpeeds, asideIdealDeltaV, asideOtherTopics, asideSignals, asideThresholds, asideWorkedBounds, rolesFromLineLabels } from './topics';
 import type { Draft } from './draft';
 import { bareKind, GAIN_PER_UNIT_RE, PER_UNIT_QUANTITY, ISP_AFTER_RE, ISP_BEFORE_RE, MULTIPLE_VALUE, MULTIPLE_WORD_RE, readPercent, TEMPERATURE_CONTEXT_RE } from './kinds';
 import { tokenize, type NumberToken } from './numbers';
@@ -408,6 +408,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   relate(text, drafts);
   asideOtherTopics(text, drafts);
   asideWorkedBounds(text, drafts);
+  asideIdealDeltaV(text, drafts);
   asideApparentSpeeds(text, drafts);
   asideSignals(text, drafts);
   asideThresholds(drafts);

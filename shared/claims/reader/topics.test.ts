@@ -304,3 +304,14 @@ describe('first-law ledgers read from explanations and trials (invented test dat
     expect(overUnity(text)).toBeCloseTo(ratio, 9);
   });
 });
+
+test('an "ideal delta-v" worked out beside the flight\'s own speed change is the writer\'s bound; a claimed one is the claim (invented test data)', () => {
+  const text = 'Liftoff mass 1.8 kg, 1.25 kg once the rocket motor has burned out, and a specific impulse of 180 s. That gives an ideal delta-v a bit over 640 m/s. The altimeter showed a peak delta-v of 210 m/s.';
+  const f = extractFigures(text);
+  expect(f.filter((x) => x.kind === 'speed').map((x) => [x.role, x.si])).toEqual([
+    ['aside', 640],
+    ['delta-v', 210],
+  ]);
+  const claimed = extractFigures('Claimed ideal burnout delta-v of the rocket: 2.8 km/s. Check: 80/32 = 2.5, ln 2.5 ≈ 0.92, times 3.1 km/s gives a delta-v of 2.84 km/s.');
+  expect(claimed.find((x) => x.si === 2800)?.role).not.toBe('aside');
+});

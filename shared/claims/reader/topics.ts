@@ -109,6 +109,21 @@ export function asideWorkedBounds(text: string, drafts: Draft[]): void {
     if (WOULD_NEED_BEFORE_RE.test(text.slice(sentenceStart(p.start), p.start))) p.role = 'aside';
   }
 }
+/** Before a speed change worked out from the rocket equation: "that gives an ideal delta-v a bit over", "the theoretical Δv is". */
+const IDEAL_DV_BEFORE_RE = /(?<!\p{L})(?:ideal|theoretical|rocket[- ]equation|on paper)(?:[^\S\n]+(?:delta-?v|Δv|Δ-v|speed change|velocity change))?[^.;!?\n]{0,30}$/iu;
+
+/**
+ * "That gives an ideal delta-v a bit over 640 m/s … the altimeter showed 210 m/s": a speed change worked
+ * out from the rocket equation, beside one the text states as the claim's or the flight's, is the
+ * writer's bound, set aside.
+ */
+export function asideIdealDeltaV(text: string, drafts: Draft[]): void {
+  const dvs = drafts.filter((d) => d.kind === 'speed' && d.role === 'delta-v');
+  // (Not one the text calls the claim: "Claimed ideal burnout Δv, 2.8 km/s".)
+  const ideal = dvs.filter((d) => IDEAL_DV_BEFORE_RE.test(text.slice(Math.max(0, d.start - 60), d.start)) && !/(?<!\p{L})claim(?:s|ed)?(?!\p{L})/iu.test(text.slice(Math.max(0, d.start - 60), d.start)));
+  if (ideal.length > 0 && ideal.length < dvs.length) for (const d of ideal) d.role = 'aside';
+}
+
 /** Words of a power supposed, before it in its sentence ("would need about 330 kW"; not a plain "needs", which may be the claim). */
 const WOULD_NEED_BEFORE_RE = /(?<!\p{L})(?:would|could|should|must|might|limit|ceiling|bound)(?!\p{L})/iu;
 
