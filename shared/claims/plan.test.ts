@@ -1047,6 +1047,10 @@ test("a heat pump's COP past the Carnot bound leads to the entry on figures abov
   // (Heat "flowing through it" made electricity: a converter's.)
   const stove = 'The stovepipe generator works across a 20 °C temperature difference, its hot plate at 90 °C, and converts 6 % of the heat flowing through it into electricity.';
   expect(claimSignals(extractFigures(stove), stove).leads.map((l) => l.mechanismClass)).toContain('converter-beyond-limit');
+  // (A heat pump within its bound leads there too: the entry explains why its figure is above 100 %.
+  // 4.0 against 318.15/40 = 7.95.)
+  const lawful = 'On a 5 °C day the air-source heat pump puts 3 kW more heat into the house than the 1 kW of electricity it draws, with 45 °C flow.';
+  expect(claimSignals(extractFigures(lawful), lawful).leads.map((l) => l.mechanismClass)).toEqual(['efficiency-above-unity']);
 });
 
 test('a water heater whose compressor "pumps warmth out of the air" is a heat pump, whatever entry its words match (invented test data)', () => {

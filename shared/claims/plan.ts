@@ -93,6 +93,11 @@ export function claimSignals(figures: Figure[], text: string): { classes: string
     // entry that explains that limit (a boost of its class, no lead: a lawful claim is led to no entry).
     if (run.check === 'carnot' && CONVERTER_RE.test(text)) out.add('converter-beyond-limit');
     if (run.check === 'light-speed') out.add('faster-than-light');
+    // A heat pump's or a fridge's COP set against its Carnot bound, whatever it finds: the entry on
+    // figures above 100 % is the one that explains it (not the engines that run on ambient heat).
+    if (run.check === 'carnot' && run.finding !== 'breaks' && run.outputs.some((o) => o.name === 'cop_heating_ratio' || o.name === 'cop_cooling_ratio') && !run.outputs.some((o) => o.name === 'eta_ratio')) {
+      leads.push({ mechanismClass: 'efficiency-above-unity', why: "its own figures give a heat pump's or a refrigerator's COP, set against the Carnot bound" });
+    }
     if (run.finding !== 'breaks') continue;
     if (run.check === 'first-law') {
       out.add('over-unity');
