@@ -273,7 +273,14 @@ export function tokenize(text: string): NumberToken[] {
         if (suffix?.type === 'unit' && /^s$/.test(after)) skip = true;
       }
     }
-    tokens.push({ start, numEnd, end, num: value, suffix, skip, plusMinus: PLUS_MINUS_RE.test(before), consumed: false, words });
+    // "minus 15 deg C", "negative 40 °F": a temperature below zero with its sign in words.
+    let from = start;
+    const minus = !words && !value.startsWith('-') && suffix?.type === 'unit' && suffix.form.kind === 'temperature' ? /(?<!\p{L})(?:minus|negative)[^\S\n]+$/iu.exec(text.slice(Math.max(0, start - 12), start)) : null;
+    if (minus && !/(?<!\p{L})plus[^\S\n]+or[^\S\n]+$/iu.test(text.slice(Math.max(0, start - 20), start - minus[0].length))) {
+      value = `-${value}`;
+      from = start - minus[0].length;
+    }
+    tokens.push({ start: from, numEnd, end, num: value, suffix, skip, plusMinus: PLUS_MINUS_RE.test(before), consumed: false, words });
   };
   // "(5.1 ± 0.4) %", "(3.1 ± 0.15) µN/kW", "(3.1 ± 0.4) × 10⁻⁵ N": a value and its uncertainty in brackets,
   // the unit (and a power of ten) after them.

@@ -989,3 +989,15 @@ test('"9 kg on the pad, of which 5.4 kg is nitrous and paraffin": the propellant
     ['dry', expect.closeTo(3.6, 9)],
   ]);
 });
+
+test('"minus 15 deg C" is below zero; "a cold side 3 K below" is a difference, not a side at 3 K (invented test data)', () => {
+  expect(extractFigures('The radiators are fed at 55 deg C even at minus 15 deg C outside.').map((f) => [f.role, f.si])).toEqual([
+    ['hot', expect.closeTo(328.15, 9)],
+    ['cold', expect.closeTo(258.15, 9)],
+  ]);
+  const f = extractFigures('With a hot side at 21 °C and a cold side 3 K below, the most any engine can convert is about 1 %.');
+  expect(f.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si])).toEqual([
+    ['hot', expect.closeTo(294.15, 9)],
+    ['cold', expect.closeTo(291.15, 9)],
+  ]);
+});

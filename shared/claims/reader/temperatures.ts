@@ -71,6 +71,8 @@ export function isDifference(text: string, start: number, end: number, floor: nu
     const pairedSide = /between[^\S\n]+[^,;.\n]{0,40}?\p{N}[^,;.\n]{0,40}?[^\S\n]and[^\S\n]+(?:(?:the|a|an|its)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 90), start));
     if (pairedSide && !/^\s*than/.test(rest)) return false;
     if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|(?:and|with|at|in|for|while|but|so|when|or|can|could|would|will|may|might|must|should|is|are|was|were|has|have|had|does|do|did|near|nearer|by|on|down|up|deeper|further|underneath|beneath|inside|there|here)\b|$)/.test(rest)) return true;
+    // "a cold side 3 K below, the most …": the side it is measured from left unsaid, as just named.
+    if (/^(?:above|below)$/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|(?:and|while|but)\b|$)/.test(rest)) return true;
     // "5 °C below zero", "above freezing": a temperature, not a difference.
     if (/^[^\S\n]*(?:zero|freezing|nought|the freezing point)(?!\p{L})/iu.test(rest)) return false;
     // "21 °C below the kitchen", "38 K above it": measured from something named.
