@@ -1001,3 +1001,12 @@ test('"minus 15 deg C" is below zero; "a cold side 3 K below" is a difference, n
     ['cold', expect.closeTo(291.15, 9)],
   ]);
 });
+
+test('"produced 12.5 W of excess heat" is an excess over the input, not the whole output (invented test data)', () => {
+  const f = extractFigures('The nickel–hydrogen cell consumed 48.0 W of electrical input and produced 12.5 W of excess heat.');
+  expect(f.map((x) => [x.kind, x.role, x.si])).toEqual([
+    ['power', 'in', 48],
+    ['power', 'excess', 12.5],
+    ['power', 'out', 60.5],
+  ]);
+});

@@ -160,6 +160,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       if (GIVEN_TO_GENERATOR_RE.test(lead)) return 'in';
       if (TURNED_INTO_RE.test(lead)) return 'out';
       if (IMMEDIATE_IN_RE.test(lead)) return 'in';
+      // "produced 12.5 W of excess heat": an excess said of what it produced.
+      if (IMMEDIATE_OUT_RE.test(lead) && /^[^\S\n]*(?:of[^\S\n]+)?(?:excess|surplus|extra|anomalous)(?!\p{L})/iu.test(text.slice(end, end + 20))) return 'excess';
       if (IMMEDIATE_OUT_RE.test(lead)) return 'out';
     }
   }
