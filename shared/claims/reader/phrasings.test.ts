@@ -1010,3 +1010,10 @@ test('"produced 12.5 W of excess heat" is an excess over the input, not the whol
     ['power', 'out', 60.5],
   ]);
 });
+
+test('"every watt you pay for turns into nearly two watts of warmth" is a gain, not a power of two watts (invented test data)', () => {
+  expect(extractFigures('Every watt you pay for turns into nearly two watts of warmth. The box gives the rated input as 1.2 kW.').map((f) => [f.kind, f.si])).toEqual([
+    ['efficiency', 2],
+    ['power', 1200],
+  ]);
+});
