@@ -1133,3 +1133,14 @@ test('"130 % efficiency" of a solar cell in a text that says the figure counts e
   // (Alone, "130 % efficiency" of a solar cell is an energy claim.)
   expect(extractFigures('The solar cell reached 130 % efficiency, the startup says.')).toMatchObject([{ kind: 'efficiency', si: 1.3 }]);
 });
+
+test('a heat engine with the heat it takes and the work it gives is held to Carnot on work out over heat in (invented test data)', () => {
+  const text = 'A low-temperature heat engine driven by waste hot water. Hot water at 180 °F enters the heat exchanger, and heat is rejected through a cooling tower at 70 °F. From 10,000 BTU of waste heat per hour the engine delivers 2.5 hp at the shaft.';
+  // η = 2.5 hp (745.69987158227 W) / (10,000 BTU_IT/h = 2930.71 W) = 0.6361 (NIST SP 811 B.8);
+  // Carnot 1 − 294.261/355.372 = 0.1720 (°F → K = (F − 32)·5/9 + 273.15); ratio 3.699.
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('breaks');
+  const eta = (2.5 * 745.69987158227) / ((10000 * 1055.05585262) / 3600);
+  const carnot = 1 - ((70 - 32) * 5 / 9 + 273.15) / ((180 - 32) * 5 / 9 + 273.15);
+  expect(run?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(eta / carnot, 6);
+});

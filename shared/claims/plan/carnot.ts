@@ -5,6 +5,7 @@
  * its COP, the efficiency or gain the text states.
  */
 import type { Figure } from '../types';
+import { formatPrint } from '../print';
 import { at, heatMoverCop, need, ofKind, paragraphKey, sentenceKey, uniq, type Basis } from './basis';
 import { paragraphOfAnotherMachine, sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE, heatEngineBeyondSink } from './signals';
@@ -120,10 +121,38 @@ function engineGuess(b: Basis, hot: Figure): string | undefined {
   return undefined;
 }
 
+/**
+ * "From 10,000 BTU of waste heat per hour the engine delivers 2.5 hp at the shaft": a heat engine named,
+ * with the heat it takes and the work it gives, has the efficiency work out / heat in, as a figure of its
+ * own (the temperatures it works between are checked by the caller).
+ */
+function engineRatio(b: Basis): Figure | undefined {
+  const { s, text, pIn, pOut, eIn, eOut, temps } = b;
+  const heatIn = pIn ?? eIn;
+  const workOut = pOut ?? eOut;
+  if (!s.heatEngine || temps.length < 2 || !heatIn || !workOut || heatIn.kind !== workOut.kind || !(heatIn.si > 0) || heatIn.end === null) return undefined;
+  // (The input must be heat: "of waste heat", "of heat", BTU, fuel.)
+  if (!/^[^.;!?\n]{0,25}?(?<!\p{L})(?:heat|thermal|fuel|steam)(?!\p{L})/iu.test(text.slice(heatIn.end, heatIn.end + 40)) && !/BTU/u.test(heatIn.text)) return undefined;
+  const value = workOut.si / heatIn.si;
+  return {
+    id: workOut.id,
+    kind: 'efficiency',
+    quantity: String(Number(value.toPrecision(12))),
+    text: workOut.text,
+    start: workOut.start,
+    end: workOut.end,
+    si: value,
+    unit: '',
+    display: formatPrint(value),
+    role: null,
+    derived: `efficiency = work out / heat in (${workOut.display} / ${heatIn.display})`,
+  };
+}
+
 export function planCarnot(b: Basis): HeatReading {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, temps } = b;
   // A stated efficiency, or one stated as a share of the Carnot efficiency of the stated temperatures.
-  const efficiency = withSides(ofKind(figures, 'efficiency').filter((f) => (!f.derived || / of the Carnot efficiency /.test(f.derived)) && !combinedHeatAndPower(f, text)), b);
+  const stated = withSides(ofKind(figures, 'efficiency').filter((f) => (!f.derived || / of the Carnot efficiency /.test(f.derived)) && !combinedHeatAndPower(f, text)), b);
   // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
   // (In a text about a heat engine, a cooler named beside two temperatures — "lube oil. Cooler duty 95 kW"
   // at a steam turbine — is a heat exchanger, not a machine that moves heat, unless its cooling is said.)
@@ -156,6 +185,7 @@ export function planCarnot(b: Basis): HeatReading {
   const outFigure = pOut ?? eOut;
   const outHeating = outFigure?.start != null && /(?<!\p{L})heating(?:[^\S\n]+(?:capacity|output|power|duty))?[^\S\n]*[:=]?[^\S\n]*(?:(?:of|is|was|about|up to)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, outFigure.start - 40), outFigure.start));
   const inOut = movesHeat ? heatMoverCop(pIn ?? eIn, outFigure, { ...s, cooling: cooling && !outHeating }) : undefined;
+  const efficiency = stated ?? (movesHeat ? undefined : engineRatio(b));
   const gain = ofKind(figures, 'efficiency').find((f) => f.derived && !movesHeat);
   /** Any efficiency or output-over-input ratio the text states (for one at most 1: a consistent balance). */
   const share = efficiency ?? ofKind(figures, 'efficiency')[0];
