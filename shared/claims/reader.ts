@@ -164,11 +164,11 @@ function headerlessUnitCells(line: string, s: string, cells: string[]): string {
 
 /**
  * A pointer to a figure, a table, an equation or a reference in brackets ("(see Table 2)", "(Fig. 3b)",
- * "[12]", "[3, 7–9]"): blanked to the same length, so that the words before it reach the figure after it
+ * "[12]", "[3, 7–9]"), or a patent's reference sign after a part's name ("the drive motor (1406)"): blanked to the same length, so that the words before it reach the figure after it
  * ("The output (Fig. 3) was 40 W").
  */
 const POINTER_RE =
-  /\((?:(?:see|cf\.?|compare)[^\S\n]+)?(?:Fig(?:ure)?s?\.?|Tables?|Tab\.|Eqs?\.?|Equations?|Refs?\.?|Sections?|Sec\.|§|Appendix|Supplementary|Suppl?\.|Methods|Note)[^\S\n]*[^()\n]{0,30}\)|\[\d{1,3}(?:[^\S\n]*[,–-][^\S\n]*\d{1,3})*\]/gu;
+  /(?<=\p{L})[^\S\n]*\(\d{1,4}[a-z]?(?:[^\S\n]*[,–-][^\S\n]*\d{1,4}[a-z]?)*\)(?![^\S\n]*(?:%|°|(?:[kMGmµu]?(?:W|J|N|V|A|Wh|K|Hz|s|g|m|t)|kg|hp|PS|BTU|lbf?)(?!\p{L})))|\((?:(?:see|cf\.?|compare)[^\S\n]+)?(?:Fig(?:ure)?s?\.?|Tables?|Tab\.|Eqs?\.?|Equations?|Refs?\.?|Sections?|Sec\.|§|Appendix|Supplementary|Suppl?\.|Methods|Note)[^\S\n]*[^()\n]{0,30}\)|\[\d{1,3}(?:[^\S\n]*[,–-][^\S\n]*\d{1,3})*\]/gu;
 
 function readPlain(text: string): Figure[] {
   const joined = joinUnitColumns(text).replace(POINTER_RE, (m) => ' '.repeat(m.length));

@@ -1017,3 +1017,8 @@ test('"every watt you pay for turns into nearly two watts of warmth" is a gain, 
     ['power', 1200],
   ]);
 });
+
+test("a patent's reference signs after a part's name are no figures and part nothing (invented test data)", () => {
+  expect(extractFigures('The charging system gives back 1.4 units of electrical energy to the battery (1404) for every unit the drive motor (1406) takes from it.')).toMatchObject([{ kind: 'efficiency', si: 1.4 }]);
+  expect(extractFigures('The rotor (12) turns and the coil (14a) gives 40 W.')).toMatchObject([{ kind: 'power', role: 'out', si: 40 }]);
+});
