@@ -49,11 +49,16 @@ export function uniq<T>(xs: (T | undefined)[]): T[] {
 /** Heat out over work in, for a machine that moves heat: a COP (heating, or cooling with cooling words), as a figure of its own. */
 export function heatMoverCop(input: Figure | undefined, output: Figure | undefined, s: Signals): Figure | undefined {
   if (!input || !output || input.kind !== output.kind || !(input.si > 0)) return undefined;
-  const value = output.si / input.si;
   const cooling = s.cooling && !s.heatPump;
+  return outOverIn(output, input, 'cop', cooling ? 'cooling' : 'heating', 'COP = heat out / work in');
+}
+
+/** Output over input as a ratio figure of its own, at the output's place in the text (a COP, an engine's efficiency). */
+export function outOverIn(output: Figure, input: Figure, kind: 'cop' | 'efficiency', role: Figure['role'], what: string): Figure {
+  const value = output.si / input.si;
   return {
     id: output.id,
-    kind: 'cop',
+    kind,
     quantity: String(Number(value.toPrecision(12))),
     text: output.text,
     start: output.start,
@@ -61,8 +66,8 @@ export function heatMoverCop(input: Figure | undefined, output: Figure | undefin
     si: value,
     unit: '',
     display: formatPrint(value),
-    role: cooling ? 'cooling' : 'heating',
-    derived: `COP = heat out / work in (${output.display} / ${input.display})`,
+    role,
+    derived: `${what} (${output.display} / ${input.display})`,
   };
 }
 

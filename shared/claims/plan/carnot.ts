@@ -5,8 +5,7 @@
  * its COP, the efficiency or gain the text states.
  */
 import type { Figure } from '../types';
-import { formatPrint } from '../print';
-import { at, heatMoverCop, need, ofKind, paragraphKey, sentenceKey, uniq, type Basis } from './basis';
+import { at, heatMoverCop, need, ofKind, outOverIn, paragraphKey, sentenceKey, uniq, type Basis } from './basis';
 import { paragraphOfAnotherMachine, sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE, heatEngineBeyondSink } from './signals';
 
@@ -133,20 +132,7 @@ function engineRatio(b: Basis): Figure | undefined {
   if (!s.heatEngine || temps.length < 2 || !heatIn || !workOut || heatIn.kind !== workOut.kind || !(heatIn.si > 0) || heatIn.end === null) return undefined;
   // (The input must be heat: "of waste heat", "of heat", BTU, fuel.)
   if (!/^[^.;!?\n]{0,25}?(?<!\p{L})(?:heat|thermal|fuel|steam)(?!\p{L})/iu.test(text.slice(heatIn.end, heatIn.end + 40)) && !/BTU/u.test(heatIn.text)) return undefined;
-  const value = workOut.si / heatIn.si;
-  return {
-    id: workOut.id,
-    kind: 'efficiency',
-    quantity: String(Number(value.toPrecision(12))),
-    text: workOut.text,
-    start: workOut.start,
-    end: workOut.end,
-    si: value,
-    unit: '',
-    display: formatPrint(value),
-    role: null,
-    derived: `efficiency = work out / heat in (${workOut.display} / ${heatIn.display})`,
-  };
+  return outOverIn(workOut, heatIn, 'efficiency', null, 'efficiency = work out / heat in');
 }
 
 export function planCarnot(b: Basis): HeatReading {

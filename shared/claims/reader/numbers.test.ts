@@ -143,27 +143,30 @@ describe('numbers', () => {
     ]);
   });
 
-  test('a value and its uncertainty in brackets, the unit and a power of ten after them: "(3.1 ± 0.4) × 10⁻⁵ N"', () => {
-    const text = 'The efficiency was (5.1 ± 0.4) %, the force per unit power (3.1 ± 0.15) µN/kW, the thrust (3.1 ± 0.4) × 10⁻⁵ N, later (2.2 +/- 0.3) x 10^-3 N (invented test data).';
+  test.each([
+    [
+      // A value and its uncertainty in brackets, the unit and a power of ten after them.
+      'The efficiency was (5.1 ± 0.4) %, the force per unit power (3.1 ± 0.15) µN/kW, the thrust (3.1 ± 0.4) × 10⁻⁵ N, later (2.2 +/- 0.3) x 10^-3 N (invented test data).',
+      [
+        ['efficiency', 0.047, 0.055],
+        ['thrust-per-power', 2.95e-9, 3.25e-9],
+        ['thrust', 2.7e-5, 3.5e-5],
+        ['thrust', 1.9e-3, 2.5e-3],
+      ],
+    ],
+    [
+      // "Plus or minus" said in words; "minus two" after it is no number below zero.
+      "The engine's efficiency was twelve percent, plus or minus three; the COP 3.1 plus or minus 0.2; efficiency 40 percent plus or minus two percent (invented test data).",
+      [
+        ['efficiency', 0.09, 0.15],
+        ['cop', 2.9, 3.3],
+        ['efficiency', 0.38, 0.42],
+      ],
+    ],
+  ] as [string, [string, number, number][]][])('an uncertainty in brackets or in words makes a range: %s', (text, want) => {
     const figures = extractFigures(text);
     expectWellFormed(text, figures);
-    expect(figures.map((f) => [f.kind, f.si, f.upper?.si])).toEqual([
-      ['efficiency', expect.closeTo(0.047, 12), expect.closeTo(0.055, 12)],
-      ['thrust-per-power', expect.closeTo(2.95e-9, 20), expect.closeTo(3.25e-9, 20)],
-      ['thrust', expect.closeTo(2.7e-5, 15), expect.closeTo(3.5e-5, 15)],
-      ['thrust', expect.closeTo(1.9e-3, 15), expect.closeTo(2.5e-3, 15)],
-    ]);
-  });
-
-  test('"plus or minus" said in words is an uncertainty too, and "minus two" after it is no number below zero', () => {
-    const text = "The engine's efficiency was twelve percent, plus or minus three; the COP 3.1 plus or minus 0.2; efficiency 40 percent plus or minus two percent (invented test data).";
-    const figures = extractFigures(text);
-    expectWellFormed(text, figures);
-    expect(figures.map((f) => [f.kind, f.si, f.upper?.si])).toEqual([
-      ['efficiency', expect.closeTo(0.09, 12), expect.closeTo(0.15, 12)],
-      ['cop', expect.closeTo(2.9, 12), expect.closeTo(3.3, 12)],
-      ['efficiency', expect.closeTo(0.38, 12), expect.closeTo(0.42, 12)],
-    ]);
+    expect(figures.map((f) => [f.kind, f.si, f.upper?.si])).toEqual(want.map(([kind, lo, hi]) => [kind, expect.closeTo(lo, 15), expect.closeTo(hi, 15)]));
   });
 });
 
