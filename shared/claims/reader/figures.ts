@@ -8,6 +8,7 @@
 import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
 import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
+import { asideStatedBounds, statedBound } from './bounds';
 import { comparedPercent, relate } from './comparisons';
 import { BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
 import { asideApparentSpeeds, asideIdealDeltaV, asideOtherTopics, asideSignals, asideThresholds, asideWorkedBounds, rolesFromLineLabels } from './topics';
@@ -108,6 +109,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   lastRoleWords.end = 0;
   const tokens = tokenize(text);
   const drafts: Draft[] = [];
+  /** Figures said as the writer's ceiling (bounds.ts). */
+  const bounds = new Set<Draft>();
   let floor = 0;
 
   for (let i = 0; i < tokens.length; i++) {
@@ -214,7 +217,9 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         carried = true;
       }
     }
-    if (t.words && !suffix && !bareKind(text, t.start, t.numEnd, floor)) continue;
+    // "a perfect engine would only reach about 14 %", "the ideal COP … is about 11": the writer's ceiling.
+    const bound = !carried && (!suffix || suffix.type === 'percent') ? statedBound(text, start, suffix ? end : t.numEnd, suffix !== null, Number(t.num)) : null;
+    if (t.words && !suffix && !bound && !bareKind(text, t.start, t.numEnd, floor)) continue;
 
     let kind: FigureKind | null = null;
     let quantity = '';
@@ -295,6 +300,13 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         }
       }
     }
+    if (kind === null && bound) {
+      kind = bound.kind;
+      role = 'aside';
+      const factor = suffix ? 0.01 : 1;
+      quantity = scaled(t.num, factor);
+      if (upperNum !== undefined) upper = scaled(upperNum, factor);
+    }
     if (kind === null) continue;
     if ((kind === 'power' || kind === 'energy') && suffix?.type === 'unit' && !suffix.per) {
       GAIN_PER_UNIT_RE.lastIndex = end;
@@ -368,7 +380,9 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         /* left to the final pass */
       }
     }
-    drafts.push({ start, end, kind, quantity, upper, role, hedge, derived, assumption, direction, ofInput });
+    const draft: Draft = { start, end, kind, quantity, upper, role, hedge, derived, assumption, direction, ofInput };
+    drafts.push(draft);
+    if (bound && (kind === 'efficiency' || kind === 'cop')) bounds.add(draft);
     if (perUnitInput) drafts.push(perUnitInput);
     floor = Math.max(end, lastRoleWords.end);
   }
@@ -410,6 +424,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   relate(text, drafts);
   asideOtherTopics(text, drafts);
   asideWorkedBounds(text, drafts);
+  asideStatedBounds(bounds);
   asideIdealDeltaV(text, drafts);
   asideApparentSpeeds(text, drafts);
   asideSignals(text, drafts);

@@ -487,7 +487,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
 
   // A heat pump's heat out over its work in: its heating COP, as a figure of its own.
   const denied = /(?<!\p{L})(?:no|not an?|without an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?heat[- ]pumps?(?!\p{L})/iu.test(text);
-  if (HEAT_PUMP_RE.test(text) && !denied && !drafts.some((d) => d.kind === 'cop')) {
+  if (HEAT_PUMP_RE.test(text) && !denied && !drafts.some((d) => d.kind === 'cop' && d.role !== 'aside')) {
     for (const kind of ['energy', 'power'] as const) {
       // (An input of one unit, from "4 kWh of heat for every kWh", counts as stated.)
       const ins = drafts.filter((d) => d.kind === kind && d.role === 'in' && (!d.derived || d.derived.startsWith('one ')));

@@ -125,6 +125,9 @@ const HEAT_FLOW_RE =
 /** Just before a temperature: the place or the test it was of. */
 const PLACE_CONDITION_BEFORE_RE =
   /(?<!\p{L})(?:(?:room|hall|lab|laboratory|workshop|building|chamber|gallery|clubroom|classroom|kiosk|garage|shed|office|site|field|venue|warehouse|cellar|basement|studio|hangar|barn|attic|loft)(?:[^\S\n]+(?:temperature|air))?(?:[^\S\n]+(?:was|is|were|stays?|stayed|must stay|remained|felt))?(?:[^\S\n]+(?:kept|held|heated|cooled|maintained|conditioned|set|air-conditioned))?(?:[^\S\n]+(?:at|to|between|of|:))?|(?:in|inside)[^\S\n]+(?:a|an|the)[^\S\n]+(?:closed[^\S\n]+|cold[^\S\n]+|warm[^\S\n]+|heated[^\S\n]+)?(?:room|hall|lab|workshop|building|chamber|garage|shed)[^\S\n]+(?:at|of|kept at|held at)|thermostat(?:[^\S\n]+(?:says|read|reads|set to|showed|shows))?|thermometer(?:[^\S\n]+(?:said|read|reads|showed|shows))?|outside(?:,)?[^\S\n]+it[^\S\n]+was|(?:outdoor|outside)[^\S\n]+temperature[^\S\n]+(?:was|fell to|rose to|of|reached)|(?:air[- ]conditioning|heating)[^\S\n]+(?:now[^\S\n]+)?holds|weather[^\S\n]+(?:was|of)|(?:at|on)[^\S\n]+(?:a|an)|in[^\S\n]+(?:a|an))[^\S\n]*(?:(?:about|around|roughly|some|nearly|only|just|a steady|a constant)[^\S\n]+)?$/iu;
+/** An efficiency or a COP of the device (not one set aside: a part's, a writer's ceiling), which its sides serve. */
+const ratioOfDevice = (d: Draft) => (d.kind === 'efficiency' || d.kind === 'cop') && d.role !== 'aside';
+
 /** Right after a temperature: the place it was of ("a 31 °C workshop", "18 °C room temperature", "that evening"). */
 const PLACE_AFTER_RE = /^[^\S\n]*(?:(?:room|hall|lab|laboratory|workshop|building|gallery|clubroom|classroom|garage|shed|office|studio|hangar)(?:[^\S\n]+temperature)?(?!\p{L})|(?:that|this|the)[^\S\n]+(?:evening|day|morning|night|afternoon)|overnight)/iu;
 
@@ -185,10 +188,10 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
     for (const t of thermal) {
       const k = sentenceOf(text, t);
       if (sides.has(k) || otherSide(t)) continue;
-      const company = drafts.filter((d) => d !== t && sentenceOf(text, d) === k && (d.kind === 'temperature' || d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop'));
+      const company = drafts.filter((d) => d !== t && sentenceOf(text, d) === k && (d.kind === 'temperature' || d.kind === 'temperature-difference' || ratioOfDevice(d)));
       if (company.length === 0) t.role = 'aside';
     }
-  } else if (thermal.length === 1 && !drafts.some((d) => d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop' || d.kind === 'power' || d.kind === 'energy')) {
+  } else if (thermal.length === 1 && !drafts.some((d) => d.kind === 'temperature-difference' || ratioOfDevice(d) || d.kind === 'power' || d.kind === 'energy')) {
     // A lone temperature of the place a test ran in, and nothing a machine's sides would serve: aside.
     const t = thermal[0];
     const sentence = sentenceAround(text, t.start, t.end);
@@ -218,7 +221,7 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
   if (
     thermal.length === 1 &&
     thermal[0].role === null &&
-    !drafts.some((d) => d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop') &&
+    !drafts.some((d) => d.kind === 'temperature-difference' || ratioOfDevice(d)) &&
     !LONE_TEMPERATURE_USED_RE.test(text) &&
     !HEAT_PUMP_RE.test(text) &&
     !COOLING_MACHINE_RE.test(text)
@@ -233,7 +236,7 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
   if (
     thermal.length > 0 &&
     drafts.some((d) => d.kind !== 'temperature') &&
-    !drafts.some((d) => d.kind === 'temperature-difference' || d.kind === 'efficiency' || d.kind === 'cop') &&
+    !drafts.some((d) => d.kind === 'temperature-difference' || ratioOfDevice(d)) &&
     !LONE_TEMPERATURE_USED_RE.test(text) &&
     !HEAT_PUMP_RE.test(text) &&
     !COOLING_MACHINE_RE.test(text) &&
@@ -257,7 +260,7 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
       const sentence = sentenceAround(text, t.start, t.end);
       if (HEAT_FLOW_RE.test(sentence)) continue;
       const k = sentenceOf(text, t);
-      if (drafts.some((d) => sentenceOf(text, d) === k && (d.kind === 'efficiency' || d.kind === 'cop' || d.kind === 'temperature-difference'))) continue;
+      if (drafts.some((d) => sentenceOf(text, d) === k && (ratioOfDevice(d) || d.kind === 'temperature-difference'))) continue;
       const before = text.slice(Math.max(0, t.start - 60), t.start);
       if (!PLACE_CONDITION_BEFORE_RE.test(before) && !PLACE_AFTER_RE.test(text.slice(t.end, t.end + 30))) continue;
       if (movesHeat && thermal.filter((u) => u !== t && u.role !== 'aside' && sentenceOf(text, u) !== k).length < 2) continue;
