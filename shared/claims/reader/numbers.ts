@@ -263,7 +263,8 @@ export function tokenize(text: string): NumberToken[] {
       if (u && u.end === named![1].length && !u.form.ambiguous) suffix = { type: 'unit', form: u.form };
     }
     const before = text.slice(Math.max(0, start - 24), start);
-    let skip = LABEL_RE.test(before);
+    // ("R-448A", "R-410A": a refrigerant's designation, not 448 amperes.)
+    let skip = LABEL_RE.test(before) || /(?<![\p{L}\p{N}])R-$/u.test(before);
     if (!skip && /^\d{4}$/.test(num) && /^\d{4}$/.test(text.slice(start, numEndRaw)) && numEnd === numEndRaw) {
       const year = Number(num);
       const after = text.slice(numEnd, end);

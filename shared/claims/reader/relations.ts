@@ -143,6 +143,9 @@ function quantumRestated(text: string, drafts: Draft[]): void {
   }
 }
 
+/** Words of the heat a cooling machine removes, said before its figure ("Refrigerating capacity ....", "cooling output:"). */
+const COOLING_DUTY_BEFORE_RE = /(?<!\p{L})(?:cooling|refrigerat(?:ing|ion)|freezing)[^\S\n]+(?:capacity|output|power|duty|effect)[^\n\p{N}]{0,30}$/iu;
+
 export function relateFigures(text: string, drafts: Draft[]): void {
   inputForEvery(text, drafts);
   quantumRestated(text, drafts);
@@ -485,9 +488,14 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     }
   }
 
-  // A heat pump's heat out over its work in: its heating COP, as a figure of its own.
+  // A heat pump's heat out over its work in: its heating COP, as a figure of its own. A cooling
+  // machine's heat removed ("Refrigerating capacity 5,000 BTU/h … Power input 780 W") over its work in:
+  // its cooling COP.
   const denied = /(?<!\p{L})(?:no|not an?|without an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?heat[- ]pumps?(?!\p{L})/iu.test(text);
-  if (HEAT_PUMP_RE.test(text) && !denied && !drafts.some((d) => d.kind === 'cop' && d.role !== 'aside')) {
+  const pump = HEAT_PUMP_RE.test(text) && !denied;
+  const coolingOut = (d: Draft) => COOLING_DUTY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start));
+  const cooler = !pump && COOLING_MACHINE_RE.test(text);
+  if ((pump || cooler) && !drafts.some((d) => d.kind === 'cop' && d.role !== 'aside')) {
     for (const kind of ['energy', 'power'] as const) {
       // (An input of one unit, from "4 kWh of heat for every kWh", counts as stated.)
       const ins = drafts.filter((d) => d.kind === kind && d.role === 'in' && (!d.derived || d.derived.startsWith('one ')));
@@ -498,15 +506,16 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       if (paragraphOfAnotherMachine(text, Math.min(ins[0].start, outs[0].start), Math.max(ins[0].end, outs[0].end))) continue;
       const w = siOf(ins[0]);
       const q = siOf(outs[0]);
-      if (!w || q === null || q <= w) continue;
+      if (cooler && !coolingOut(outs[0])) continue;
+      if (!w || q === null || q <= 0 || (!cooler && q <= w)) continue;
       const last = ins[0].start > outs[0].start ? ins[0] : outs[0];
       insertAfter(drafts, last, {
         start: Math.min(ins[0].start, outs[0].start),
         end: Math.max(ins[0].end, outs[0].end),
         kind: 'cop',
         quantity: String(Number((q / w).toPrecision(12))),
-        role: 'heating',
-        derived: `COP = heat out / work in (${formatQuantity(q, FIGURE_SI_UNIT[kind])} / ${formatQuantity(w, FIGURE_SI_UNIT[kind])})`,
+        role: cooler ? 'cooling' : 'heating',
+        derived: `COP = ${cooler ? 'heat removed' : 'heat out'} / work in (${formatQuantity(q, FIGURE_SI_UNIT[kind])} / ${formatQuantity(w, FIGURE_SI_UNIT[kind])})`,
       });
       break;
     }

@@ -149,3 +149,27 @@ test('a row with no "Unit" header whose number is followed by a cell holding a u
   // A cell that is no unit ("Y", "—", a note) is left as it is: a count stays a count.
   expect(extractFigures('Modules | 24 | — | skutterudite\nPass | 3 | Y')).toEqual([]);
 });
+
+test("a condensing unit's rating block: the refrigerant's designation is no current, and heat removed over power in is a cooling COP (invented test data)", () => {
+  const sheet = [
+    'Refrigerating capacity .......... 5,000 BTU/h',
+    'Box (evaporator) temperature .... 0 °F',
+    'Ambient air at condenser ........ 90 °F',
+    'Power input ..................... 780 W',
+    'Refrigerant ..................... R-448A',
+    'For walk-in freezers.',
+  ].join('\n');
+  const f = read(sheet);
+  expect(f.some((x) => x.kind === 'current')).toBe(false);
+  // 5,000 BTU/h × 0.29307107 W per BTU/h (NIST SP 811 B.8) = 1465.355 W; / 780 W = 1.8787.
+  const cop = f.find((x) => x.kind === 'cop');
+  expect(cop?.role).toBe('cooling');
+  expect(cop!.si).toBeCloseTo((5000 * 0.29307107) / 780, 4);
+  // Heat removed beyond the power in is no first-law breach: the bound is the Carnot cooling COP,
+  // Tc/(Th − Tc) with 0 °F = 255.372 K and 90 °F = 305.372 K (°F → K per SP 811), = 5.107.
+  const run = runClaimChecks(f, { text: sheet, classes: [] });
+  expect(run.checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
+  const carnot = run.checks.find((c) => c.check === 'carnot');
+  expect(carnot?.finding).toBe('consistent');
+  expect(carnot!.outputs.find((o) => o.name === 'cop_cooling_max')!.si).toBeCloseTo(255.3722222 / 50, 3);
+});

@@ -21,7 +21,7 @@ export const HEAT_PUMP_WORDS = [
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
 export const COOLING_MACHINE_WORDS = [
   // (Not a heat exchanger called a cooler: "lube-oil cooler", "charge-air cooler", "water cooler" of a circuit.)
-  '(?<!(?:oil|lube|lube-oil|lubricating oil|air|charge-air|charge air|water|fluid|EGR|gas|liquid|process|coolant|jacket|exhaust|steam|condensate|hydraulic|transformer)[- ])coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini-?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?', '(?:window|portable|room|wall|ducted|rooftop|car|central) (?:AC|A/C)', 'A/C', 'air ?cons?', 'aircons?'];
+  '(?<!(?:oil|lube|lube-oil|lubricating oil|air|charge-air|charge air|water|fluid|EGR|gas|liquid|process|coolant|jacket|exhaust|steam|condensate|hydraulic|transformer)[- ])coolers?', 'cold (?:room|store|storage)s?', 'ice makers?', 'refrigerators?', 'refrigeration (?:units?|systems?|plants?|machines?)', '(?:refrigeration |freezer )?condensing units?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini-?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?', '(?:window|portable|room|wall|ducted|rooftop|car|central) (?:AC|A/C)', 'A/C', 'air ?cons?', 'aircons?'];
 
 /** Words that make a temperature a difference: before ("ΔT of 20 K") or after ("a 20 K difference"). */
 export const DIFFERENCE_BEFORE = [
