@@ -173,3 +173,19 @@ test("a condensing unit's rating block: the refrigerant's designation is no curr
   expect(carnot?.finding).toBe('consistent');
   expect(carnot!.outputs.find((o) => o.name === 'cop_cooling_max')!.si).toBeCloseTo(255.3722222 / 50, 3);
 });
+
+test('a lift in kelvin beside temperatures in degrees is a difference, not a side colder than liquid nitrogen (invented test data)', () => {
+  // Engineering practice writes temperatures in °C and their differences in K.
+  const text = 'The consortium proposes a 4 MW heat pump drawing on river water at 10 °C and lifting it by 45 K, with a heating COP of 3.4.';
+  const f = read(text);
+  expect(f.find((x) => x.text === '45 K')?.kind).toBe('temperature-difference');
+  // 10 °C = 283.15 K (SP 811); hot side 328.15 K; Carnot COP = 328.15/45 = 7.292; 3.4 is within it.
+  const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'cop_heating_max')!.si).toBeCloseTo(328.15 / 45, 3);
+  // Where the text speaks of the very cold, a few tens of kelvin is a temperature.
+  const cryo = read('The cryocooler holds its cold head at 40 K while the room is at 20 °C.');
+  expect(cryo.find((x) => x.text === '40 K')?.kind).toBe('temperature');
+  // A thousands point in a text of decimal commas is no small kelvin figure: "1.800 K" is 1800 K.
+  expect(read('A marine diesel is quoted as 38,5 % efficient, with combustion gas at c. 1.800 K and sea water at 15 °C.').find((x) => x.kind === 'temperature' && x.role === 'hot')?.si).toBe(1800);
+});

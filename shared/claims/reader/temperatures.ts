@@ -43,6 +43,25 @@ export function differenceDirection(text: string, end: number): 'up' | 'down' | 
   return undefined;
 }
 
+/** Words of the very cold or of space, where a temperature of a few tens of kelvin is a temperature. */
+const CRYOGENIC_RE = /(?<!\p{L})(?:cryo\w*|liquid (?:nitrogen|helium|hydrogen|oxygen|air)|LN2|superconduct\w*|millikelvin|mK|absolute zero|cosmic|interstellar|deep space|outer space|in space|orbit\w*|planet\w*|moons?|Mars|Pluto|comets?|dilution|cold head|Joule-Thomson)(?!\p{L})/iu;
+/** A temperature in degrees Celsius or Fahrenheit. */
+const DEGREES_RE = /\d[^\S\n]*(?:°[^\S\n]*[CF]|deg(?:rees)?\.?[^\S\n]*(?:C|F|Celsius|Fahrenheit)(?!\p{L}))/iu;
+
+/**
+ * "Temperature lift (sink outlet minus source inlet): 40 K", "lifting it by 45 K", beside a source "at
+ * 10 °C": engineering practice (and EN standards) write temperatures in °C and their differences in
+ * kelvin, so a figure of a few tens of kelvin in a text whose temperatures are in degrees is a
+ * difference, not a side colder than liquid nitrogen — unless the text speaks of the very cold.
+ */
+function kelvinBesideCelsius(text: string, start: number, end: number): boolean {
+  const m = /^([\d.,]+)[^\S\n]*(?:K|kelvins?)$/u.exec(text.slice(start, end).trim());
+  // (Not "1.800 K" in a text of decimal commas: a thousand and eight hundred.)
+  if (!m || /^\d{1,3}(?:[.,]\d{3})+$/u.test(m[1])) return false;
+  const value = Number(m[1].replace(/,/g, ''));
+  return value > 0 && value < 200 && DEGREES_RE.test(text) && !CRYOGENIC_RE.test(text);
+}
+
 export function isDifference(text: string, start: number, end: number, floor: number): boolean {
   const before = text.slice(Math.max(floor, start - 60), start);
   // A label of a sheet or a list: "ΔT source to flow: 40 K", "• Temperature lift (W35): 30 K".
@@ -59,6 +78,7 @@ export function isDifference(text: string, start: number, end: number, floor: nu
     const m = DIFF_BEFORE_RE.exec(before)!;
     if (!/^(?:only|a mere|just)/i.test(m[0].trim()) || /differen|gradient|ΔT|delta|lift|rise/i.test(sentenceAround(text, start, end))) return true;
   }
+  if (kelvinBesideCelsius(text, start, end)) return true;
   DIFF_AFTER_RE.lastIndex = end;
   const a = DIFF_AFTER_RE.exec(text);
   if (!a) return false;
