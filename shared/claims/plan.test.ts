@@ -927,6 +927,11 @@ describe('the checks of issue 12, planned from a claim (invented test data)', ()
     expect(module?.finding).toBe('consistent');
     // A panel that is no solar panel.
     expect(run('The engine panel shows 30 % efficiency at 2000 rpm.').checks.some((c) => c.check === 'light-converter-limits')).toBe(false);
+    // The efficiency of an electrical converter behind a panel is no light converter's (invented test data):
+    // 9.0 A × 5.0 V = 45 W out for 2.0 A × 24 V = 48 W in, a ratio of 0.9375 and a first-law matter.
+    const buck = run('A 94 %-efficient converter for small solar panels: 2.0 A drawn at 24 V on the input side and 9.0 A delivered at 5.0 V on the output side.');
+    expect(buck.checks.some((c) => c.check === 'light-converter-limits')).toBe(false);
+    expect(buck.checks.some((c) => c.finding === 'breaks')).toBe(false);
   });
 
   it('says what electrolysis, excess-heat and self-charging-vehicle claims need', () => {

@@ -45,6 +45,10 @@ const PER_BIT_RE = /^[^\S\n]*(?:(?:of energy|of work)[^\S\n]+)?(?:per|for each|f
 /** A limit of light converters named: "beats the Shockley–Queisser limit", "above the detailed-balance limit". */
 const LIGHT_LIMIT_NAMED_RE = /(?<!\p{L})(?:Shockley[–-]Queisser|SQ limit|detailed[- ]balance limit|Landsberg limit)(?!\p{L})/iu;
 
+/** Converters of electricity to electricity: their efficiency is no light converter's. */
+const ELECTRICAL_CONVERTER_RE =
+  /(?<!\p{L})(?:buck|boost|buck-boost|DC[- ]?(?:to[- ])?DC|switching (?:regulators?|converters?|supply|supplies)|(?:voltage |linear )?regulators?|inverters?|micro-?inverters?|charge controllers?|MPPT|chargers?|power suppl(?:y|ies)|transformers?|(?:power|voltage|electronic) converters?|converters? (?:for|on|behind|after) (?:the |a |small |its )?(?:solar |PV )?(?:panels?|modules?|arrays?))(?!\p{L})/iu;
+
 /** Up to 300 characters before a figure and 200 after, within its paragraph (a blank line ends one). */
 function paragraphNear(text: string, start: number, end: number): string {
   const before = text.slice(Math.max(0, start - 300), start).split(/\n[^\S\n]*\n/).pop() ?? '';
@@ -61,7 +65,12 @@ export function planOtherChecks(b: Basis): void {
   // (The cell named near the efficiency, in its paragraph: a report that mentions photovoltaics in
   // passing gives no cell's efficiency.)
   const nearEfficiency = solarEfficiency && solarEfficiency.start !== null && solarEfficiency.end !== null ? paragraphNear(text, solarEfficiency.start, solarEfficiency.end) : text;
-  if (solarEfficiency && SOLAR_CELL_RE.test(nearEfficiency) && !s.heatEngine && !heatOnly) {
+  // (Nor the efficiency of an electrical converter the text names with the panel: "a 94 %-efficient
+  // converter for small solar panels", an inverter's or a charge controller's: electricity in,
+  // electricity out, a first-law matter.)
+  const ofElectricalConverter =
+    solarEfficiency && solarEfficiency.start !== null && solarEfficiency.end !== null && ELECTRICAL_CONVERTER_RE.test(sentenceAround(text, solarEfficiency.start, solarEfficiency.end));
+  if (solarEfficiency && SOLAR_CELL_RE.test(nearEfficiency) && !s.heatEngine && !heatOnly && !ofElectricalConverter) {
     const junction = JUNCTIONS_RE.exec(text);
     const silicon = !junction && SILICON_CELL_RE.test(text) && !STACKED_CELL_RE.test(text);
     const junctions = junction ? (JUNCTION_COUNT[(junction[1] ?? junction[2]).toLowerCase()] ?? Number(junction[1])) : silicon ? 1 : 0;
