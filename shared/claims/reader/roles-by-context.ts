@@ -22,6 +22,10 @@ export const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|
 const REFERENCE_FORCE_BEFORE_RE =
   /(?<!\p{L})(?:resol(?:ves?|ution)(?: (?:is|of|was))?|sensitivity(?: (?:is|of|was))?|noise floor(?: (?:is|of|was))?|calibrat\w*(?: \w+){0,3}? (?:with|against|using|to)(?: an?| the)?(?: [\w-]+)?|reference(?: force| weight| mass)?(?: of)?|P ?\/ ?c(?: [\w ]{0,20}?)?(?:=|≈|of|is|would (?:allow|give)|allows|gives|predicts)|photon (?:pressure|rocket)[\w ]{0,30}?(?:predicts|would (?:allow|give)|allows|gives|limit of|bound of)|would give only(?: about)?)[^\S\n]*(?:about |roughly |around |only |just )?$/iu;
 
+/** Words of a force that holds or presses, said just before it (a label or a phrase): no thrust. */
+const STATIC_FORCE_BEFORE_RE =
+  /(?<!\p{L})(?:clamping|clamp|contact|holding|hold-down|retaining|gripping|grip|pull-?off|breakaway|preload|pre-load|bolt|spring|mounting|compressive|compression|tensile|tension|bearing|axial|radial|normal|pressing|press|closing|seating|crushing|breaking|burst|peel|shear|insertion|extraction)(?:[^\S\n]+force|[^\S\n]+load|[^\S\n]+strength|[^\S\n]+rating)(?:[^\S\n]+\((?:[^)\n]{0,20})\))?[^\S\n]*(?:of|is|was|:|\||=|at|up to|rated at)?[^\S\n.:|]*[.:|=]*[^\S\n]*(?:about|around|up to|max\.?|min\.?|approx\.?)?[^\S\n]*$/iu;
+
 /** Between two figures of one list: "… on the motorway, and under", "…, or about", "… and up to". */
 const SAME_SIDE_LIST_RE =
   /^[^.;!?\n]{0,80}?(?:,[^\S\n]*)?(?<!\p{L})(?:and|or|but|while)[^\S\n]+(?:(?:under|over|about|around|nearly|up to|at most|less than|more than|just|only|some|roughly|barely|below|above)[^\S\n]+)*$/iu;
@@ -112,8 +116,14 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     if (!REFERENCE_FORCE_BEFORE_RE.test(text.slice(Math.max(0, d.start - 60), d.start))) continue;
     if (drafts.some((o) => o !== d && (o.kind === 'thrust' || o.kind === 'thrust-per-power') && !REFERENCE_FORCE_BEFORE_RE.test(text.slice(Math.max(0, o.start - 60), o.start)))) d.role = 'aside';
   }
+  // A force that pushes nothing anywhere: a clamp's, a spring's, a bolt's, a magnet's pull on its keeper,
+  // a load on a bearing ("Hot-side clamping force | 2.2 kN", "a holding force of 400 N"). Set aside.
+  for (const d of drafts) {
+    if (d.kind !== 'thrust' || d.role !== null) continue;
+    if (STATIC_FORCE_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start))) d.role = 'aside';
+  }
   // A thrust and a power: the power drives it.
-  if (drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power')) {
+  if (drafts.some((d) => (d.kind === 'thrust' || d.kind === 'thrust-per-power') && d.role !== 'aside')) {
     // (Not a power said of another machine in a sentence of its own, with no thrust and no word of a
     // drive's input: "the exhibition also includes a ship's diesel rated at 400 hp".)
     for (const d of drafts) {

@@ -189,3 +189,21 @@ test('a lift in kelvin beside temperatures in degrees is a difference, not a sid
   // A thousands point in a text of decimal commas is no small kelvin figure: "1.800 K" is 1800 K.
   expect(read('A marine diesel is quoted as 38,5 % efficient, with combustion gas at c. 1.800 K and sea water at 15 °C.').find((x) => x.kind === 'temperature' && x.role === 'hot')?.si).toBe(1800);
 });
+
+test("a clamping force on a thermoelectric module's data block is no thrust, and the matched-load output stays an output (invented test data)", () => {
+  const sheet = ['Hot-side temperature | 350 °C', 'Temperature difference across module | ΔT = 300 K', 'Matched-load output | 21.5 W', 'Conversion efficiency | 6.5 %', 'Hot-side clamping force | 2.2 kN'].join('\n');
+  const f = read(sheet);
+  expect(f.find((x) => x.text === '2.2 kN')?.role).toBe('aside');
+  expect(f.find((x) => x.text === '21.5 W')?.role).toBe('out');
+  const run = runClaimChecks(f, { text: sheet, classes: [] });
+  // No photon bound on a clamp: nothing here claims propulsion.
+  expect(run.checks.some((c) => c.check === 'photon-bound')).toBe(false);
+  // Carnot: 1 − 323.15/623.15 = 0.4814 (hot 350 °C = 623.15 K, cold 300 K below); 6.5 % is within it.
+  expect(run.checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+  // A thrust beside the holding force keeps its own reading.
+  expect(read('The magnet has a holding force of 400 N and the drive gives 2 mN of thrust from 1 kW.').map((x) => [x.text, x.role])).toEqual([
+    ['400 N', 'aside'],
+    ['2 mN', null],
+    ['1 kW', 'in'],
+  ]);
+});
