@@ -23,7 +23,7 @@ const INPUT_NOT_GIVEN_RE =
 /** A store of energy the text names: a battery, a flywheel, a pack that "stores" or "holds" energy. */
 /** A store said to be absent: "no battery", "without any batteries", "no fuel, battery or mains". */
 const NO_STORE_RE = /(?<!\p{L})(?:no|without(?:[^\S\n]+any)?|nor|not a)[^\S\n]+(?:[\p{L}-]+,?[^\S\n]+(?:(?:or|nor|and)[^\S\n]+)?){0,3}(?:batter(?:y|ies)|packs?|flywheels?|accumulators?|(?:super)?capacitors?)(?!\p{L})/giu;
-const STORE_NAMED_RE = /(?<!\p{L})(?:batter(?:y|ies)|Batter(?:y|ies)|(?:battery |EV |traction )?[Pp]acks?|flywheels?|accumulators?|supercapacitors?|capacitor banks?|(?:stores|stored|holds|held)[^\S\n]+(?:about[^\S\n]+|up[^\S\n]+to[^\S\n]+)?[\d.,]+[^\S\n]*(?:k|M|G)?(?:Wh|J))(?!\p{L})/u;
+const STORE_NAMED_RE = /(?<!\p{L})(?:batter(?:y|ies)|Batter(?:y|ies)|(?:battery |EV |traction )?[Pp]acks?|flywheels?|accumulators?|supercapacitors?|capacitor banks?|(?:stores|stored|holds|held)[^\S\n]+(?:about[^\S\n]+|up[^\S\n]+to[^\S\n]+)?[\d.,]+[^\S\n]*(?:k|M|G)?(?:Wh|J)|(?:[Cc]apacity|[Uu]sable energy|[Ee]nergy capacity|[Rr]ated energy)[^\n\d]{0,25}[\d.,]+[^\S\n]*(?:k|M)?Wh|LiFePO4|LFP|[Ll]ithium[- ](?:ion|iron)|Li-ion|[Pp]ortable power stations?)(?!\p{L})/u;
 /** "No input figure was given": the input is not known, not nil. */
 const NO_INPUT_FIGURE_RE = /(?<!\p{L})no[^\S\n]+(?:input|supply)[^\S\n]+(?:power[^\S\n]+|energy[^\S\n]+)?(?:figures?|numbers?|values?|data|measurements?|readings?)(?!\p{L})/iu;
 const SELF_RUNNING_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'giu');

@@ -207,3 +207,10 @@ test("a clamping force on a thermoelectric module's data block is no thrust, and
     ['1 kW', 'in'],
   ]);
 });
+
+test('"no fuel" of a portable power station whose sheet gives its capacity is no claim of nothing in (invented test data)', () => {
+  const sheet = ['Cell chemistry | LiFePO4', 'Capacity | 2,048 Wh', 'AC output rating | 2,000 W continuous', 'Runtime test (250 W AC load) | 7.1 h', '"A whole weekend of camping power with no fuel."'].join('\n');
+  const f = read(sheet);
+  expect(f.some((x) => x.role === 'in' && x.si === 0)).toBe(false);
+  expect(runClaimChecks(f, { text: sheet, classes: [] }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+});
