@@ -109,6 +109,10 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       const lead = text.slice(Math.max(floor, start - 40), start);
       if (/(?<!\p{L})(?:heat[^\S\n]+)?sink(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'hot';
       if (/(?<!\p{L})(?:(?:air|ground|water|brine|heat|outdoor)[- ])?source(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'cold';
+      // A sheet's line labelled with the side: "Source: process cooling water, inlet 10 °C", "Sink | flow 45 °C".
+      const line = text.slice(text.lastIndexOf('\n', start - 1) + 1, start);
+      const label = /^[^\S\n]*(?:[-•*·][^\S\n]*)?(?:(?:heat|air|ground|water|brine)[^\S\n]+)?(source|sink)(?!\p{L})[^:|\n.]{0,30}(?:[:|]|\.{2,})/iu.exec(line);
+      if (label && !/\p{N}/u.test(line.slice(label[0].length))) return label[1].toLowerCase() === 'sink' ? 'hot' : 'cold';
       // "rejecting heat on deck at 32 °C": where a fridge or a heat pump rejects its heat is its warm side.
       if (/(?<!\p{L})(?:reject(?:s|ed|ing)?|dump(?:s|ed|ing)?|shed(?:s|ding)?|discharg(?:es|ed|ing))[^\S\n]+(?:(?:its|the)[^\S\n]+)?(?:waste[^\S\n]+)?heat(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]+(?:at|of)[^\S\n]*(?:(?:about|around|roughly|some)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
     }
@@ -216,7 +220,12 @@ const GIVEN_TO_GENERATOR_RE = /(?<!\p{L})(?:gave|gives|give|delivered|delivers|s
 /** "turned it into about": right before what a machine turns its input into. */
 const TURNED_INTO_RE = /(?<!\p{L})(?:turn(?:s|ed|ing)?|convert(?:s|ed|ing)?)[^\S\n]+(?:it|this|that|them|these|those)[^\S\n]+into(?:[^\S\n]+(?:about|some|roughly|nearly|around))?[^\S\n]*$/iu;
 
+/** A rating condition, not a role: "Fuel energy input (LHV) at rated output | 2.6 kW", "input at full load". */
+const RATING_CONDITION_RE = /(?<!\p{L})(?:at|under)[^\S\n]+(?:the[^\S\n]+)?(?:rated|full|nominal|maximum|max\.?|peak|continuous|part)[^\S\n]+(?:output|load|power|capacity)(?!\p{L})(?![^\S\n]*(?:of|is|was|=|:)?[^\S\n]*(?:about|around|roughly|some)?[^\S\n]*\p{N})/giu;
+
 export function roleFor(text: string, kind: FigureKind, start: number, end: number, floor: number): FigureRole {
+  // (Blanked, places kept.)
+  if ((kind === 'power' || kind === 'energy') && RATING_CONDITION_RE.test(text)) text = text.replace(RATING_CONDITION_RE, (m) => ' '.repeat(m.length));
   if (kind === 'power' || kind === 'energy') {
     IN_OUT_AFTER_RE.lastIndex = end;
     const io = IN_OUT_AFTER_RE.exec(text);

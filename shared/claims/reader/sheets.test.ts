@@ -214,3 +214,27 @@ test('"no fuel" of a portable power station whose sheet gives its capacity is no
   expect(f.some((x) => x.role === 'in' && x.si === 0)).toBe(false);
   expect(runClaimChecks(f, { text: sheet, classes: [] }).checks.some((c) => c.finding === 'breaks')).toBe(false);
 });
+
+test('a rating condition in a label is no role ("Fuel energy input (LHV) at rated output"), and "no battery for start-up" is no claim of nothing in (invented test data)', () => {
+  const sheet = ['PEM fuel cell module', 'Rated electrical output | 1.35 kW', 'Fuel energy input (LHV) at rated output | 2.6 kW', 'The module needs no battery for start-up beyond the controller’s own.'].join('\n');
+  const f = read(sheet);
+  expect(f.map((x) => [x.text, x.role])).toEqual([
+    ['1.35 kW', 'out'],
+    ['2.6 kW', 'in'],
+  ]);
+  // 1.35 / 2.6 = 0.519: less out than in, consistent with the first law.
+  const run = runClaimChecks(f, { text: sheet, classes: [] }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(1.35 / 2.6, 9);
+  // The condition said with its own figure keeps its role: "at the rated output of 310 kW".
+  expect(read('A brake thermal efficiency of 44 % at the rated output of 310 kW.').find((x) => x.text === '310 kW')?.role).toBe('out');
+});
+
+test("a heat pump sheet's line labelled with the side: the source is the cold side (invented test data)", () => {
+  expect(brief('Industrial heat pump\nSource: process cooling water, inlet 10 °C\nTemperature lift: 40 K\nHeating COP: 3.1')).toEqual([
+    ['temperature', 'cold', 283.15],
+    ['temperature-difference', null, 40],
+    ['temperature', 'hot', 323.15],
+    ['cop', 'heating', 3.1],
+  ]);
+});
