@@ -11,6 +11,11 @@ import { insertAfter, sameClause, sentenceOf, siOf, typedSi, upperSiOf, type Dra
 const NOT_A_RUN_RE =
   /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline|install\w*|integrat\w*|spent|calibrat\w*|settl\w*|drills?|swings?|period)(?!\p{L})/iu;
 
+/** A sentence that is a label of a term: "Duration: five months", "Project duration | 24 months". */
+const TERM_LABEL_RE = /^[\s•*-]*(?:(?:project|proposed|planned|total|expected)[^\S\n]+)?(?:duration|term|timescale|time ?frame|period)[^\S\n]*(?:[:|]|\.{2,})/iu;
+/** Words of a funder or an application. */
+const FUNDING_RE = /(?<!\p{L})(?:grants?|funding|funders?|voucher|proposals?|applicants?|application|requested|budget|award|fund|work packages?|milestones?|backers?|campaign)(?!\p{L})/iu;
+
 /** A sentence of a supposition: "if …", "unless …", "should it …", "would", "could". */
 const SUPPOSED_TIME_RE = /(?<!\p{L})(?:if|unless|should|would|could|were)(?!\p{L})/iu;
 
@@ -85,7 +90,9 @@ export function relateDurations(text: string, drafts: Draft[]): void {
     if (d.kind !== 'duration' || d.role !== null || timed.has(d)) continue;
     const sentence = sentenceAround(text, d.start, d.end);
     // (Nor a time of a supposition: "if the panels are covered in snow for a week it will be empty".)
-    if ((NOT_A_RUN_RE.test(sentence) || SUPPOSED_TIME_RE.test(sentence)) && !drafts.some((e) => (e.kind === 'power' || e.kind === 'energy') && sentenceOf(text, e) === sentenceOf(text, d))) d.role = 'aside';
+    // ("Amount requested: EUR 7,200. Duration: five months.": the length of the work a funder pays for.)
+    const termOfWork = TERM_LABEL_RE.test(sentence) && FUNDING_RE.test(text);
+    if ((NOT_A_RUN_RE.test(sentence) || SUPPOSED_TIME_RE.test(sentence) || termOfWork) && !drafts.some((e) => (e.kind === 'power' || e.kind === 'energy') && sentenceOf(text, e) === sentenceOf(text, d))) d.role = 'aside';
   }
 
   // "30 kWh a day … over a fortnight": an energy per day, where the text states a longer run, is a

@@ -1022,3 +1022,14 @@ test("a patent's reference signs after a part's name are no figures and part not
   expect(extractFigures('The charging system gives back 1.4 units of electrical energy to the battery (1404) for every unit the drive motor (1406) takes from it.')).toMatchObject([{ kind: 'efficiency', si: 1.4 }]);
   expect(extractFigures('The rotor (12) turns and the coil (14a) gives 40 W.')).toMatchObject([{ kind: 'power', role: 'out', si: 40 }]);
 });
+
+test("a grant application's 'Duration: five months' is no run, and a current at a voltage 'into the distribution board' is given out (invented test data)", () => {
+  const text = 'Our pico-hydro set was measured at 5 A at 230 V into the farm’s distribution board.\n\nAmount requested: EUR 7,200. Duration: five months.';
+  const f = extractFigures(text);
+  // 5 A × 230 V = 1150 W (P = IV).
+  expect(f.find((x) => x.derived?.startsWith('power = current × voltage'))).toMatchObject({ si: 1150, role: 'out' });
+  expect(f.find((x) => x.kind === 'duration')?.role).toBe('aside');
+  expect(f.some((x) => x.kind === 'energy')).toBe(false);
+  // A test's duration keeps its place: a run of the device.
+  expect(extractFigures('Test duration: 72 hours, at 400 W out.').find((x) => x.kind === 'duration')?.role).not.toBe('aside');
+});

@@ -146,6 +146,10 @@ function quantumRestated(text: string, drafts: Draft[]): void {
 /** Words of the heat a cooling machine removes, said before its figure ("Refrigerating capacity ....", "cooling output:"). */
 const COOLING_DUTY_BEFORE_RE = /(?<!\p{L})(?:cooling|refrigerat(?:ing|ion)|freezing)[^\S\n]+(?:capacity|output|power|duty|effect)[^\n\p{N}]{0,30}$/iu;
 
+/** After a figure: the load or network it goes into ("into the farm's distribution board", "to the grid"). */
+const INTO_LOAD_AFTER_RE =
+  /^[^\S\n]*,?[^\S\n]*(?:in)?to[^\S\n]+(?:(?:the|a|an|its|our|their)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(?:grid|distribution board|board|mains|loads?|dump load|battery|batteries|network|house|home|consumer unit|resistor|heater element)(?!\p{L})/iu;
+
 export function relateFigures(text: string, drafts: Draft[]): void {
   inputForEvery(text, drafts);
   quantumRestated(text, drafts);
@@ -241,7 +245,9 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const fills = !said && FILLS_LEAD_RE.test(text.slice(Math.max(0, first.start - 40), first.start));
     // "from a 24 V supply at 5 A", "a 12 V power supply drawing 2 A": the pair is a supply's, what the device takes.
     const supplied = !said && !fills && /^[^\S\n]*(?:(?:DC|AC|bench|lab|power)[^\S\n]+)?(?:supply|supplies|PSU|mains|adapter|source|rail)(?!\p{L})/iu.test(text.slice(first.end, last.start));
-    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills ? 'out' : supplied ? 'in' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
+    // "5 A at 230 V into the farm's distribution board", "… to the grid": what goes into a load or a grid is given out.
+    const intoLoad = !said && !fills && INTO_LOAD_AFTER_RE.test(text.slice(last.end, last.end + 60));
+    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills || intoLoad ? 'out' : supplied ? 'in' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
     const wordsRole = between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
     const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null);
     const role: FigureRole = wordsRole ?? (others.length && others.every((d) => d.role === 'in') ? 'out' : null);
