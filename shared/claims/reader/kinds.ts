@@ -127,6 +127,13 @@ export const CARNOT_SHARE = 'a share of the Carnot efficiency';
 const ENGINE_NAMED_RE = /(?<!\p{L})(?:engines?|turbines?|Stirling|power (?:plants?|stations?))(?!\p{L})/iu;
 
 /** What a percentage is, by its context. */
+/** In a sheet's label: a bracketed test point and leader dots. */
+const LABEL_FILLER_RE = /\([^()\n]{0,20}\)|\.{2,}|…+/gu;
+/** A compressor or a refrigerant named (a machine that moves heat). */
+const COMPRESSOR_OR_REFRIGERANT_RE = /(?<!\p{L})(?:compressors?|refrigerants?|R-?(?:32|290|410A|407C|134a|744|1234\w+|454B|513A))(?!\p{L})/iu;
+/** A heating output or capacity named. */
+const HEATING_OUTPUT_RE = /(?<!\p{L})(?:heating (?:output|capacity|power)|heat output|flow water|flow temperature)(?!\p{L})/iu;
+
 export function readPercent(text: string, start: number, end: number, floor: number, num?: string): PercentReading {
   // 'at "about 29 %" efficiency': the words after a closing quote.
   end += /^["”’'»]*/u.exec(text.slice(end, end + 3))![0].length;
@@ -135,7 +142,8 @@ export function readPercent(text: string, start: number, end: number, floor: num
   SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
   const light = SPEED_OF_LIGHT_AFTER_RE.exec(text);
   if (light) return { kind: 'speed', factor: C_M_PER_S / 100, unit: 'm/s' };
-  const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start);
+  // (A sheet's label: "Heating efficiency (A2/W35) ............ 380 %" — the rating point and the leader dots are no words of it.)
+  const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start).replace(LABEL_FILLER_RE, ' ');
   QE_AFTER_RE.lastIndex = end;
   const qe = QE_BEFORE_RE.exec(before);
   if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };
@@ -186,7 +194,11 @@ export function readPercent(text: string, start: number, end: number, floor: num
     (value <= 100 && /(?<!\p{L})(?:conversion|thermal|electrical|cycle|net|gross|brake) efficiency[^.;!?\n]{0,25}$/iu.test(text.slice(Math.max(0, start - 60), start)));
   // (A boiler's text names radiators and flow temperatures too: those words alone name no heat pump there.)
   const burnerOnly = BURNER_RE.test(text) && !NAMED_HEAT_PUMP_RE.test(sentence);
-  if (!engineHere && !burnerOnly && HEAT_PUMP_RE.test(sentence) && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
+  // (A sheet that names a compressor or a refrigerant and a heating output describes a heat pump, whatever its name.)
+  // ("no compressor, no outdoor unit": said to be absent.)
+  const named = sentence.replace(/(?<!\p{L})(?:no|without(?:[^\S\n]+an?)?|not[^\S\n]+an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:compressors?|refrigerants?)(?!\p{L})/giu, ' ');
+  const heatPump = HEAT_PUMP_RE.test(sentence) || (COMPRESSOR_OR_REFRIGERANT_RE.test(named) && HEATING_OUTPUT_RE.test(sentence) && !BURNER_RE.test(sentence));
+  if (!engineHere && !burnerOnly && heatPump && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
     if (!(value <= 100)) return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump said to be more than 100 % efficient: read as a heating COP (heat delivered over work put in).' };
     return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump\'s percentage read as a heating COP (heat delivered over work put in).' };
   }

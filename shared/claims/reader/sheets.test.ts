@@ -238,3 +238,15 @@ test("a heat pump sheet's line labelled with the side: the source is the cold si
     ['cop', 'heating', 3.1],
   ]);
 });
+
+test("a sheet's percentage after a label with a test point and leader dots, and a machine with a compressor and a heating output, read as a heating COP (invented test data)", () => {
+  // "Heating efficiency (A2/W35) ... 380 %": heat delivered over electricity used = COP 3.8; A2/W35 = air 2 °C, water 35 °C (EN 14511 notation).
+  expect(brief('Air-to-water heat pump\nHeating efficiency (A2/W35) ............ 380 %')).toEqual([
+    ['temperature', 'cold', 275.15],
+    ['temperature', 'hot', 308.15],
+    ['cop', 'heating', 3.8],
+  ]);
+  expect(brief('Compressor: twin rotary\nHeating output ...... 14.1 kW\nEfficiency ...... 910 %')).toContainEqual(['cop', 'heating', 9.1]);
+  // A heater said to have no compressor is no heat pump: its 250 % stays an efficiency (more out than in).
+  expect(brief('Infrared panel heater (no compressor, no outdoor unit)\n• 250 % efficient\n• Heat output: 2.5 kW')).toContainEqual(['efficiency', null, 2.5]);
+});
