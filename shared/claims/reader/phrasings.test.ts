@@ -1033,3 +1033,17 @@ test("a grant application's 'Duration: five months' is no run, and a current at 
   // A test's duration keeps its place: a run of the device.
   expect(extractFigures('Test duration: 72 hours, at 400 W out.').find((x) => x.kind === 'duration')?.role).not.toBe('aside');
 });
+
+test("phrasings of writers whose first language is not English: 'kcal/h', 'more heat as the', 'the specific impulse in our vacuum test is', '2 kg is the water' (invented test data)", () => {
+  // 2 500 kcal/h × 4186.8 J / 3600 s (calorie_IT, NIST SP 811 B.8) = 2907.5 W removed; / 1.1 kW = cooling COP 2.643.
+  const cold = extractFigures('The refrigeration unit removes 2 500 kcal/h of heat from the room at 2 °C inside, when the outside air at the condenser is 32 °C. The electric consumption in this condition is 1,1 kW.');
+  expect(cold.find((x) => x.kind === 'power' && x.role === 'out')?.si).toBeCloseTo(2907.5, 6);
+  expect(cold.find((x) => x.kind === 'cop')).toMatchObject({ role: 'cooling' });
+  expect(cold.find((x) => x.kind === 'cop')!.si).toBeCloseTo(2907.5 / 1100, 9);
+  // "more … as the" for "more … than the": an excess over the input (out = 1 + 3 = 4 kW, COP 4).
+  const pump = extractFigures("'It gives out 3 kW more heat as the 1 kW of current it takes,' says the owner of the heat pump.");
+  expect(pump.map((x) => [x.kind, x.role, x.si])).toEqual(expect.arrayContaining([['power', 'excess', 3000], ['power', 'in', 1000], ['power', 'out', 4000], ['cop', 'heating', 4]]));
+  // A rocket's figures: Δv = Isp·g0·ln(m0/mf) (Tsiolkovsky) with g0 = 9.80665 m/s² (SI Brochure): 150 × 9.80665 × ln(12/10) = 268.2 m/s.
+  const rocket = extractFigures('The specific impulse in our vacuum test is 150 s. Of the satellite mass at launch, 2 kg is the water. It gives 2 km/s to a 12 kg CubeSat.');
+  expect(rocket.map((x) => [x.kind, x.role, x.si])).toEqual(expect.arrayContaining([['specific-impulse', null, 150], ['mass', 'propellant', 2], ['mass', 'wet', 12], ['mass', 'dry', 10]]));
+});

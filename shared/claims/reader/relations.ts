@@ -194,7 +194,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const b = drafts[i + 1];
     if (!(a.kind === b.kind && (a.kind === 'power' || a.kind === 'energy'))) continue;
     const gap = text.slice(a.end, b.start);
-    if (/^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:more|extra|additional|over and above|above|beyond|in excess of|on top of)(?:[^\S\n]+[\p{L}-]+){0,4}?[^\S\n]+(?:than|over|of|on|above)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|an[^\S\n]+|a[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}$/iu.test(gap) ||
+    if (/^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:more|extra|additional|over and above|above|beyond|in excess of|on top of)(?:[^\S\n]+[\p{L}-]+){0,4}?[^\S\n]+(?:than|over|of|on|above|as(?=[^\S\n]+(?:the|its)[^\S\n]))[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|an[^\S\n]+|a[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}$/iu.test(gap) ||
       // "1.3 MJ of heat came out beyond the 4.1 MJ supplied"
       /^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,4}?(?:beyond|over and above|in excess of|on top of)[^\S\n]+(?:the|its|an|a|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?$/iu.test(gap) || /^[^\S\n]+(?:more|extra)[^\S\n]+than[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?$/iu.test(gap)) {
       a.role = 'excess';
@@ -501,7 +501,11 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   // its cooling COP.
   const denied = /(?<!\p{L})(?:no|not an?|without an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?heat[- ]pumps?(?!\p{L})/iu.test(text);
   const pump = HEAT_PUMP_RE.test(text) && !denied;
-  const coolingOut = (d: Draft) => COOLING_DUTY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start));
+  const coolingOut = (d: Draft) =>
+    COOLING_DUTY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start)) ||
+    // "It removes 2 500 kcal/h of heat from the room".
+    (/(?<!\p{L})(?:removes?|removed|removing|extracts?|extracted|takes? (?:away|out)|took (?:away|out)|pumps? out|pulls? out)[^\S\n]+(?:(?:about|around|up to|some|nearly)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, d.start - 40), d.start)) &&
+      /^[^\S\n]*of[^\S\n]+heat(?!\p{L})/iu.test(text.slice(d.end, d.end + 20)));
   const cooler = !pump && COOLING_MACHINE_RE.test(text);
   if ((pump || cooler) && !drafts.some((d) => d.kind === 'cop' && d.role !== 'aside')) {
     for (const kind of ['energy', 'power'] as const) {

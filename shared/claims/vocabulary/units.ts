@@ -31,6 +31,8 @@ const micro = (rest: string) => MICRO.map((m) => m + rest);
  * 4.1868 J. The thermochemical one is the one of chemistry and of food labels' kilocalories.
  */
 const CALORIE_J = 4.184;
+/** kcal_IT/h in W: 4186.8 / 3600 (NIST SP 811 Appendix B.8, calorie_IT = 4.1868 J). */
+const KCAL_IT_PER_HOUR_W = 4186.8 / 3600;
 
 /** Gram-force: mathjs knows kgf (9.80665 N) but not gf, so grams of thrust are written in kgf. */
 const GRAM_IN_KG = 0.001;
@@ -103,6 +105,16 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     unit: 'BTU/h',
     symbols: ['BTU/h', 'Btu/h', 'BTU/hr', 'Btu/hr', 'BTUh', 'Btuh', 'BTU/H'],
     words: ['BTU per hour', 'BTUs per hour', 'Btu per hour', 'British thermal units per hour', 'British thermal unit per hour', 'BTU an hour', 'BTUs an hour', 'Btu an hour', 'BTU a hour', 'British thermal units an hour'],
+  },
+
+  {
+    // Kilocalories per hour, the heating and refrigeration duty of metric practice: the International
+    // Table calorie (4.1868 J, NIST SP 811 Appendix B.8), so 1 kcal/h = 4186.8 J / 3600 s = 1.163 W.
+    kind: 'power',
+    unit: 'W',
+    factor: KCAL_IT_PER_HOUR_W,
+    symbols: ['kcal/h', 'kcal/hr', 'kcal/hour', 'Kcal/h', 'kcal h⁻¹'],
+    words: ['kilocalories per hour', 'kilocalorie per hour', 'kcal per hour', 'kilocalories an hour'],
   },
 
   // Energy
