@@ -53,7 +53,7 @@ const percentOfHeatThrough = (text: string, end: number): boolean => {
 };
 /** "5 % conversion", "61 % net", ", 25 %, leaves as shaft work": a share turned into work or electricity. */
 const SHARE_AS_WORK_RE =
-  /[^\S\n]*(?:(?:net|gross|conversion|thermal|electrical|electric|overall|cycle|first-law|brake)(?!\p{L})|[,)]?[^\S\n]*(?:leaves|comes out|emerges|is delivered|is returned|appears|ends up)[^\S\n]+as[^\S\n]+(?:useful[^\S\n]+)?(?:shaft[^\S\n]+|mechanical[^\S\n]+|electrical[^\S\n]+)?(?:work|electricity|power|motion))/iuy;
+  /[^\S\n]*(?:(?:net|gross|conversion|thermal|electrical|electric|overall|cycle|first-law|brake)(?!\p{L})|(?:of[^\S\n]+)?(?:electricity|electrical energy|electric power|shaft work|work)[^\S\n]+(?:from|out of)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:gas|fuel|heat|diesel|petrol|oil|coal|wood|pellets|biomass|hydrogen|steam|sunlight|light)(?!\p{L})|[,)]?[^\S\n]*(?:leaves|comes out|emerges|is delivered|is returned|appears|ends up)[^\S\n]+as[^\S\n]+(?:useful[^\S\n]+)?(?:shaft[^\S\n]+|mechanical[^\S\n]+|electrical[^\S\n]+)?(?:work|electricity|power|motion))/iuy;
 const SPEED_OF_LIGHT_AFTER_RE = /[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light|[^\S\n]*of[^\S\n]+c(?!\p{L})|[^\S\n]*of[^\S\n]+(?:the[^\S\n]+)?light[- ]speed/iuy;
 export const TEMPERATURE_CONTEXT_RE = /(?<!\p{L})(?:temperatures?|heat(?:ed|s|ing)?|hot|hotter|warm(?:er|s|ed)?|cold|colder|cool(?:er|s|ed)?|ambient|boil\w*|freez\w*|Celsius|Fahrenheit|thermal|room|outdoor|outside|indoor|inside|air|water|collector|cooling|chill\w*|COP|radiators?|ground|loop|cabinet|kitchen|brine|evaporat\w*|condens\w*|pond|lake|river|fridge|refrigerat\w*)(?!\p{L})/iu;
 /** "Isp 320 s", "Isp (vac): 320 s", "specific impulse (sea level) of 280 s". */

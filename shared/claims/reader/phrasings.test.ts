@@ -1047,3 +1047,12 @@ test("phrasings of writers whose first language is not English: 'kcal/h', 'more 
   const rocket = extractFigures('The specific impulse in our vacuum test is 150 s. Of the satellite mass at launch, 2 kg is the water. It gives 2 km/s to a 12 kg CubeSat.');
   expect(rocket.map((x) => [x.kind, x.role, x.si])).toEqual(expect.arrayContaining([['specific-impulse', null, 150], ['mass', 'propellant', 2], ['mass', 'wet', 12], ['mass', 'dry', 10]]));
 });
+
+test("'travel one light-year in 3 days', '15 % electricity from the gas', 'I give it 12 A at 24 V' (invented test data)", () => {
+  // One light-year (9 460 730 472 580 800 m, IAU 2012 B2 with the Julian year) in 3 days = 3.65 × 10¹⁰ m/s, above c.
+  const ship = extractFigures('My ship can travel one light-year in 3 days.');
+  expect(ship.find((x) => x.kind === 'speed')!.si).toBeCloseTo(9460730472580800 / (3 * 86400), 0);
+  expect(extractFigures('Our Stirling micro-CHP makes only 15 % electricity from the gas.')).toMatchObject([{ kind: 'efficiency', si: 0.15 }]);
+  // 12 A × 24 V = 288 W, given to the device.
+  expect(extractFigures('From a battery bank I give it 12 A at 24 V.').find((x) => x.kind === 'power')).toMatchObject({ role: 'in', si: 288 });
+});

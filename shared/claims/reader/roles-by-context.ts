@@ -46,8 +46,9 @@ const CRAFT_RE =
   /(?<!\p{L})(?:rockets?|propellants?|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|craft|landers?|probes?|satellites?|CubeSats?|smallsats?|microsat\w*|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines?|vehicles?|tugs?|stacks?|ships?|modules?|capsules?|boosters?|orbiters?|missiles?|payloads?|tanks?|fuel\w*|oxidi[sz]ers?|xenon|krypton|hydrazine|kerosene|methane|hydrogen|oxygen|nitrogen|argon|exhaust|wet|dry|m[01f]|masses)(?!\p{L})/iu;
 
 /** A distance covered in a time: "4.2 light years in 30 days", "1 AU in 2 hours". */
-const TRAVEL_RE = /(?<![\p{L}\p{N}.,])(\d[\d,]*(?:\.\d+)?)[^\S\n]*(light[- ]years?|lightyears?|parsecs?|astronomical units?|AU)[^\S\n]+in[^\S\n]+(?:(?:just|only|about|under|less than|roughly)[^\S\n]+)?(\d[\d,]*(?:\.\d+)?|an?|one)[^\S\n]*(seconds?|minutes?|hours?|days?|weeks?|months?|years?)(?!\p{L})/giu;
+const TRAVEL_RE = /(?<![\p{L}\p{N}.,])(\d[\d,]*(?:\.\d+)?|an?|one|two|three|four|five|six|seven|eight|nine|ten|twelve|twenty|a hundred)[^\S\n]*(light[- ]years?|lightyears?|parsecs?|astronomical units?|AU)[^\S\n]+in[^\S\n]+(?:(?:just|only|about|under|less than|roughly)[^\S\n]+)?(\d[\d,]*(?:\.\d+)?|an?|one)[^\S\n]*(seconds?|minutes?|hours?|days?|weeks?|months?|years?)(?!\p{L})/giu;
 const TRAVEL_LENGTH: Record<string, number> = { lightyear: 9460730472580800, parsec: 3.085677581491367e16, astronomicalunit: 149597870700, au: 149597870700 };
+const WORD_COUNT: Record<string, number> = { a: 1, an: 1, one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, twelve: 12, twenty: 20, 'a hundred': 100 };
 const TRAVEL_TIME: Record<string, number> = { second: 1, minute: 60, hour: 3600, day: 86400, week: 604800, month: 2629800, year: 31557600 };
 
 /** The apparatus a device is tested on, whose mass is no craft's. */
@@ -85,7 +86,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   // "covers 4.2 light years in 30 days": a speed, distance over time (IAU 2012 B2 astronomical unit,
   // IAU 2015 B2 parsec, the light-year of the Julian year).
   for (const m of text.matchAll(TRAVEL_RE)) {
-    const distance = Number(m[1].replace(/,/g, '')) * (TRAVEL_LENGTH[m[2].toLowerCase().replace(/s$/, '').replace(/[- ]/g, '')] ?? NaN);
+    const distance = (WORD_COUNT[m[1].toLowerCase()] ?? Number(m[1].replace(/,/g, ''))) * (TRAVEL_LENGTH[m[2].toLowerCase().replace(/s$/, '').replace(/[- ]/g, '')] ?? NaN);
     const count = /^(?:a|an|one)$/i.test(m[3]) ? 1 : Number(m[3].replace(/,/g, ''));
     const time = count * (TRAVEL_TIME[m[4].toLowerCase().replace(/s$/, '')] ?? NaN);
     if (!(distance > 0) || !(time > 0) || drafts.some((d) => d.kind === 'speed' && d.start >= m.index! && d.start < m.index! + m[0].length)) continue;

@@ -25,6 +25,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:bench |lab |laboratory |power |mains )?(?:supply|mains|grid|socket|outlet) (?:provided|delivered|gave|powered|drove)',
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?',
+      // "From a battery bank I give it 12 A at 24 V": what the writer gives the device goes in.
+      '(?:I|we|you) (?:give|gave|feed|fed|supply|supplied|put in|apply|applied) (?:it|them|the (?:device|unit|machine|heater|motor|coil|circuit|cell|prototype))(?: with)?',
       // "hydrogen with a chemical energy of 120 MJ", "fuel energy: 40 MJ": what the fuel brings in.
       '(?:chemical|fuel) energy(?: content)?(?: of| is| was|:)?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       // "the engine gave the dynamo about two kilowatts": what a generator is given is its input.
