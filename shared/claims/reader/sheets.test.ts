@@ -250,3 +250,15 @@ test("a sheet's percentage after a label with a test point and leader dots, and 
   // A heater said to have no compressor is no heat pump: its 250 % stays an efficiency (more out than in).
   expect(brief('Infrared panel heater (no compressor, no outdoor unit)\n• 250 % efficient\n• Heat output: 2.5 kW')).toContainEqual(['efficiency', null, 2.5]);
 });
+
+test('a test card\'s row "Propellant ....... none" says the thruster throws out nothing: the photon bound applies (invented test data)', () => {
+  const card = ['RF input power ........... 0.5–1.5 kW', 'Measured thrust .......... 3–6 mN', 'Propellant ............... none (closed copper cavity)'].join('\n');
+  const run = runClaimChecks(read(card), { text: card, classes: [] }).checks.find((c) => c.check === 'photon-bound');
+  // The end most favourable to the claim: the least thrust over the most power, 3 mN against 1.5 kW / c
+  // (c = 299 792 458 m/s exactly, SI Brochure 2.2) = 5.0035 µN: 599.6 times the bound.
+  expect(run?.finding).toBe('breaks');
+  expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(0.003 / (1500 / 299792458), 3);
+  // A row that names a propellant is no such claim.
+  const ion = ['Input power | 1.5 kW', 'Thrust | 60 mN', 'Propellant | xenon, 3 mg/s'].join('\n');
+  expect(runClaimChecks(read(ion), { text: ion, classes: [] }).checks.some((c) => c.check === 'photon-bound' && c.finding === 'breaks')).toBe(false);
+});

@@ -62,7 +62,9 @@ export const PROPELLANT_FREE_WORDS = [
   'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
   'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
   'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
-  'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', '(?:zero|nil|0) (?:propellant|reaction mass|exhaust)', 'propellant(?: used)?[^\\S\\n]*[:=][^\\S\\n]*(?:none|nil|zero|0 ?(?:g|kg)?)(?![\\w.])', 'expels? no (?:propellant|mass|gas|reaction mass|matter)',
+  'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', '(?:zero|nil|0) (?:propellant|reaction mass|exhaust)', 'propellant(?: used)?[^\\S\\n]*[:=][^\\S\\n]*(?:none|nil|zero|0 ?(?:g|kg)?)(?![\\w.])',
+  // A sheet's row: "Propellant ............... none", "Propellant / exhaust | none", "Propellant\tnot required".
+  '(?:propellant|reaction mass|exhaust)s?(?:[^\\S\\n]*(?:/|and|or)[^\\S\\n]*(?:propellant|exhaust|reaction mass))?(?:[^\\S\\n]+(?:used|required|consumption|mass|flow))?[^\\S\\n]*(?:\\.{2,}|…+|[|\\t:=])[^\\S\\n]*(?:none|nil|zero|not (?:required|needed|used)|n/a)(?!\\p{L})', 'expels? no (?:propellant|mass|gas|reaction mass|matter)',
   // "ejects no reaction mass", "w/o any propellant", "works just as well in hard vacuum (no air needed)".
   '(?:ejects?|ejecting|expelling|throws? out|throwing out|vents?|venting|sheds?|shedding|carries|carrying) no (?:[\\w-]+ )?(?:propellant|reaction mass|exhaust|mass|matter)', 'w/o?(?:ut)? (?:any )?(?:propellant|reaction mass|exhaust)',
   'no air (?:is )?(?:needed|required)', '(?<!(?:not|n\x27t|n\u2019t|never|cannot|nor) )(?:works?|working|operates?|operating|functions?|functioning)(?: (?!not|never)[\\w-]+){0,3}? (?:in|under) (?:a |hard |high |deep |full )?vacuum',
