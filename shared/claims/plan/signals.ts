@@ -139,6 +139,9 @@ export function propellantFreeParagraphs(text: string): [number, number][] {
   return spans.length === 0 || (spans.length === 1 && spans[0][0] === 0 && spans[0][1] === text.length) ? [] : spans;
 }
 
+/** Where the device may be fitted: "bolt it to a cart, a boat or a satellite", "mount one on any small boat". */
+const FIT_TO_RE = /(?<!\p{L})(?:bolt|fit|mount|attach|strap|install|put)(?:s|ed|ing)?[^\S\n]+(?:it|them|one|two|several|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:to|on|onto|in|into)[^\S\n]+[^.;!?\n]{0,80}/giu;
+
 export function readSignals(ctx: PlanContext): Signals {
   const text = ctx.text ?? '';
   const classes = ctx.classes ?? [];
@@ -149,6 +152,9 @@ export function readSignals(ctx: PlanContext): Signals {
   // denies the propulsor and says plainly nothing is thrown out ("pushes a small boat … with no propeller
   // and no water jet"), the craft's word says nothing of propellant.
   if (PROPULSOR_DENIED_RE.test(text) && PLAIN_NO_PROPELLANT_RE.test(text)) withoutFree = withoutFree.replace(CRAFT_ALL_RE, ' ');
+  // "Bolt it to a cart, a boat or a satellite": craft the device could be fitted to, in a text that says it
+  // throws out nothing, are no propulsor of its own.
+  if (PROPELLANT_FREE_RE.test(text)) withoutFree = withoutFree.replace(FIT_TO_RE, ' ');
   // "no heat pump, no outdoor coil": a machine said not to be one.
   const notDenied = text.replace(/(?<!\p{L})(?:no|not an?|without an?|isn't an?|is not an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|refrigerators?|chillers?|compressors?)(?!\p{L})/giu, ' ');
   return {

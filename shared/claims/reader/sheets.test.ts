@@ -258,6 +258,12 @@ test('a test card\'s row "Propellant ....... none" says the thruster throws out 
   // (c = 299 792 458 m/s exactly, SI Brochure 2.2) = 5.0035 µN: 599.6 times the bound.
   expect(run?.finding).toBe('breaks');
   expect(run!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(0.003 / (1500 / 299792458), 3);
+  // Craft it could be bolted to are no propulsor of its own: 3.5 lbf (4.4482216152605 N each, SP 811 B.8)
+  // against 1.5 hp (745.69987 W each) / c.
+  const gyro = ['Drive motor ...... 1.5 hp, 115 V AC', 'Net unidirectional thrust .. 3.5 lbf', 'Propellant / exhaust ....... none', '', 'Bolt it to a cart, a boat or a satellite.'].join('\n');
+  const g = runClaimChecks(read(gyro), { text: gyro, classes: [] }).checks.find((c) => c.check === 'photon-bound');
+  expect(g?.finding).toBe('breaks');
+  expect(g!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo((3.5 * 4.4482216152605) / ((1.5 * 745.69987158227) / 299792458), -3);
   // A row that names a propellant is no such claim.
   const ion = ['Input power | 1.5 kW', 'Thrust | 60 mN', 'Propellant | xenon, 3 mg/s'].join('\n');
   expect(runClaimChecks(read(ion), { text: ion, classes: [] }).checks.some((c) => c.check === 'photon-bound' && c.finding === 'breaks')).toBe(false);
