@@ -150,6 +150,46 @@ const COOLING_DUTY_BEFORE_RE = /(?<!\p{L})(?:cooling|refrigerat(?:ing|ion)|freez
 const INTO_LOAD_AFTER_RE =
   /^[^\S\n]*,?[^\S\n]*(?:in)?to[^\S\n]+(?:(?:the|a|an|its|our|their)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(?:grid|distribution board|board|mains|loads?|dump load|battery|batteries|network|house|home|consumer unit|resistor|heater element)(?!\p{L})/iu;
 
+/** A sheet's heading line of a side: "INPUT", "Output:", "Input side (DC)". */
+const SIDE_HEADING_RE = /^[^\S\n]*(?:electrical[^\S\n]+)?(input|output)(?:[^\S\n]+(?:side|ratings?|data|characteristics))?(?:[^\S\n]*\([^()\n]{0,20}\))?[^\S\n]*:?[^\S\n]*$/iu;
+
+/**
+ * A sheet that gives each side under a heading, one figure a line ("INPUT / Voltage .... 36 V DC /
+ * Current .... 2.5 A / OUTPUT / Voltage .... 24 V / Current .... 14 A"): the side's voltage and current
+ * make its power, on the side the heading names. Only where the section has one of each and no power.
+ */
+function sectionPowers(text: string, drafts: Draft[]): void {
+  const lines = text.split('\n');
+  let at = 0;
+  const sections: { role: 'in' | 'out'; from: number; to: number }[] = [];
+  for (const line of lines) {
+    const m = SIDE_HEADING_RE.exec(line);
+    if (sections.length && sections[sections.length - 1].to < 0 && (m || line.trim() === '')) sections[sections.length - 1].to = at;
+    if (m) sections.push({ role: m[1].toLowerCase() === 'input' ? 'in' : 'out', from: at + line.length, to: -1 });
+    at += line.length + 1;
+  }
+  if (sections.length && sections[sections.length - 1].to < 0) sections[sections.length - 1].to = text.length;
+  for (const sec of sections) {
+    // (The section ends at the first line that is not indented or labelled like its rows: a new label block.)
+    const inside = drafts.filter((d) => d.start >= sec.from && d.end <= sec.to);
+    const volts = inside.filter((d) => d.kind === 'voltage');
+    const amps = inside.filter((d) => d.kind === 'current');
+    if (volts.length !== 1 || amps.length !== 1 || inside.some((d) => d.kind === 'power')) continue;
+    const i = siOf(amps[0]);
+    const v = siOf(volts[0]);
+    if (i === null || v === null) continue;
+    const [first, last] = volts[0].start < amps[0].start ? [volts[0], amps[0]] : [amps[0], volts[0]];
+    insertAfter(drafts, last, {
+      start: first.start,
+      end: last.end,
+      kind: 'power',
+      quantity: typedSi(i * v, 'W'),
+      role: sec.role,
+      derived: `power = current × voltage (${formatQuantity(i, 'A')} × ${formatQuantity(v, 'V')})`,
+    });
+  }
+}
+
 export function relateFigures(text: string, drafts: Draft[]): void {
   inputForEvery(text, drafts);
   quantumRestated(text, drafts);
@@ -202,6 +242,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     }
   }
 
+  sectionPowers(text, drafts);
   // Power from a current and a voltage in the same clause: "12 A at 24 V", "3 amps from a 48-volt pack".
   const currents = drafts.filter((d) => d.kind === 'current');
   const voltsNear = (cur: Draft) => drafts.filter((d) => d.kind === 'voltage' && sameClause(text, d, cur) && Math.abs(d.start - cur.start) < 120);

@@ -268,3 +268,16 @@ test('a test card\'s row "Propellant ....... none" says the thruster throws out 
   const ion = ['Input power | 1.5 kW', 'Thrust | 60 mN', 'Propellant | xenon, 3 mg/s'].join('\n');
   expect(runClaimChecks(read(ion), { text: ion, classes: [] }).checks.some((c) => c.check === 'photon-bound' && c.finding === 'breaks')).toBe(false);
 });
+
+test("a sheet giving each side under its heading ('INPUT' / 'OUTPUT', one figure a line): each side's voltage and current make its power (invented test data)", () => {
+  const sheet = ['FLUX-CELL FC-24', '', 'INPUT', '  Voltage ............ 36 V DC', '  Current ............ 2.5 A', 'OUTPUT', '  Voltage ............ 24 V DC (regulated)', '  Current ............ 14 A continuous', 'Weight ............... 3.8 kg'].join('\n');
+  const f = read(sheet);
+  // P = IV: 2.5 A × 36 V = 90 W in, 14 A × 24 V = 336 W out; 336 / 90 = 3.73 times the input.
+  expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+    ['in', 90],
+    ['out', 336],
+  ]);
+  const run = runClaimChecks(f, { text: sheet, classes: [] }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('breaks');
+  expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(336 / 90, 9);
+});
