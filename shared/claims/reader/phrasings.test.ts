@@ -1056,3 +1056,14 @@ test("'travel one light-year in 3 days', '15 % electricity from the gas', 'I giv
   // 12 A × 24 V = 288 W, given to the device.
   expect(extractFigures('From a battery bank I give it 12 A at 24 V.').find((x) => x.kind === 'power')).toMatchObject({ role: 'in', si: 288 });
 });
+
+test("a store drained by a load, in a text that says it 'never needs charging' and names the cell's self-discharge: the store goes in, the draw comes out (invented test data)", () => {
+  const text = 'A 400-day ocean beacon that never needs charging? One such beacon, whose single cell stores 20 Wh, was logged. The mean consumption was 2 mW, so the advertised life uses nearly all of the stored energy. No energy harvesting is involved; the claim holds provided self-discharge stays low.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.text === '20 Wh')?.role).toBe('in');
+  expect(f.find((x) => x.text === '2 mW')?.role).toBe('out');
+  // 2 mW × 400 d × 86 400 s/d = 69 120 J out of 20 Wh = 72 000 J: 0.96 of the store (first law, consistent).
+  const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo((0.002 * 400 * 86400) / 72000, 9);
+});

@@ -72,11 +72,11 @@ const DRAW_LEAD_RE = /(?<!\p{L})(?:draws?|drawing|consumption|consumes|consuming
 const DRAW_AFTER_RE = /^[^\S\n]*(?:(?:average|continuous|steady|mean|constant|typical)[^\S\n]+)?(?:draw|consumption|load)(?!\p{L})/iu;
 /** Anything else that could feed the load or fill the store. */
 const OTHER_SOURCE_RE =
-  /(?<!\p{L})(?:solar|sun|panels?|photovoltaic|PV|charg\w*|recharg\w*|generat\w*|harvest\w*|mains|grid|wind|turbines?|dynamos?|alternators?|cranks?|fuel|engines?|topped up|top up|plugged|self-\w+|free energy|over-?unity)(?!\p{L})/iu;
+  /(?<!\p{L})(?:solar|sun|panels?|photovoltaic|PV|charg\w*|recharg\w*|generat\w*|harvest\w*|mains|grid|wind|turbines?|dynamos?|alternators?|cranks?|fuel|engines?|topped up|top up|plugged|self-(?!discharg)\w+|free energy|over-?unity)(?!\p{L})/iu;
 
 /** A source said to be absent ("with no sun at all", "without recharging"): no other source. */
 const NEGATED_SOURCE_RE =
-  /(?<!\p{L})(?:no|without|never any|not any)[^\S\n]+(?:(?:any|direct|further|other|more)[^\S\n]+)?(?:sun(?:light|shine)?|solar|charg\w*|recharg\w*|mains|grid|fuel|panels?)(?!\p{L})/giu;
+  /(?<!\p{L})(?:no|without|never any|not any|never (?:needs?|needed|requires?|required|uses?|used))[^\S\n]+(?:(?:any|direct|further|other|more|energy|external)[^\S\n]+)?(?:sun(?:light|shine)?|solar|charg\w*|recharg\w*|mains|grid|fuel|panels?|harvest\w*)(?!\p{L})/giu;
 
 /** Right after a rating: a supply, an adapter or a charger named ("100 W bench supply", "65 W USB-C adapter"). */
 const SUPPLY_RATING_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:(?!(?:from|the|a|an|of|by|via|through|at|to|into|on|its|their|our)(?![\p{L}\d-]))[\p{L}\d-]+[^\S\n]+){0,2}?(?:(?:power|bench|lab|laboratory|DC)[^\S\n]+)?(?:supply|supplies|PSUs?|adapters?|chargers?|power bricks?)(?!\p{L})/iu;
