@@ -171,10 +171,12 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
             /* not comparable */
           }
         }
+        // ("Outdoor air temperatures ranged from 18 to 33 °C": one quantity's spread, not two sides.)
+        const spread = /(?<!\p{L})(?:rang(?:e|es|ed|ing)|var(?:y|ies|ied|ying)|fluctuat(?:e|es|ed|ing)|swung|swings?|drift(?:s|ed|ing)?)[^\S\n]+(?:(?:anywhere|somewhere)[^\S\n]+)?(?:from|between)[^\S\n]+$/iu.test(text.slice(Math.max(0, t.start - 40), t.start));
         const twoSides =
           fallingMass ||
           (suffixKind(next.suffix) === 'voltage' && !dash) ||
-          (!thirdTemperature && suffixKind(next.suffix) === 'temperature' && !dash && !isDifference(text, t.start, next.end, floor));
+          (!thirdTemperature && !spread && suffixKind(next.suffix) === 'temperature' && !dash && !isDifference(text, t.start, next.end, floor));
         suffix = next.suffix;
         if (!twoSides) {
           upperNum = next.num;
@@ -246,7 +248,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       } else if (
         kind === 'duration' &&
         suffix.form.unit === 's' &&
-        (ISP_BEFORE_RE.test(text.slice(Math.max(floor, start - BEFORE_WINDOW), start)) ||
+        (ISP_BEFORE_RE.test(text.slice(Math.max(floor, start - BEFORE_WINDOW - 90), start)) ||
           ((ISP_AFTER_RE.lastIndex = end), ISP_AFTER_RE.test(text)) ||
           // "an ion engine at 3,000 s", "a hydrazine thruster of 220 s": seconds said of an engine.
           ENGINE_SECONDS_RE.test(text.slice(Math.max(floor, start - 40), start)))

@@ -207,7 +207,8 @@ const SMALL_NUMBER_WORDS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six'
 const AND_A_HALF_RE = new RegExp(`(?<![\\p{L}-])(${SMALL_NUMBER_WORDS.join('|')})[^\\S\\n]+and[^\\S\\n]+an?[^\\S\\n]+(half|quarter)(?!\\p{L})`, 'giu');
 
 /** "in watts, about", "in kilowatts:", "(in newtons) roughly": a unit's name said before its number. */
-const UNIT_NAMED_BEFORE_RE = /(?<!\p{L})in[^\S\n]+(\p{L}+(?:[- ]\p{L}+)?)[^\S\n]*[,:)]?[^\S\n]*(?:(?:about|around|roughly|some|approximately|maybe|say|call it|just under|just over)[^\S\n]+)?$/iu;
+// (A mark or a hedge between: "in month 14" is a point in a project, not fourteen months.)
+const UNIT_NAMED_BEFORE_RE = /(?<!\p{L})in[^\S\n]+(\p{L}+(?:[- ]\p{L}+)?)(?:[^\S\n]*[,:)][^\S\n]*(?:(?:about|around|roughly|some|approximately|maybe|say|call it|just under|just over)[^\S\n]+)?|[^\S\n]+(?:about|around|roughly|some|approximately|maybe|say|call it|just under|just over)[^\S\n]+)$/iu;
 /** A unit given in a label just before a number: "[mN]:", "(kW) =", "/ W:". */
 const HEADER_UNIT_RE = /(?:[[(][^\S\n]*([^\s\])]{1,8})[^\S\n]*[\])]|(?<![\p{L}\d])[\p{L}_{}]+[^\S\n]*\/[^\S\n]*([^\s:=/]{1,8}))[^\S\n]*[:=][^\S\n]*$/u;
 

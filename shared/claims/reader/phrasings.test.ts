@@ -1067,3 +1067,24 @@ test("a store drained by a load, in a text that says it 'never needs charging' a
   expect(run?.finding).toBe('consistent');
   expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo((0.002 * 400 * 86400) / 72000, 9);
 });
+
+test("funding and review texts: 'in month 14' is no duration, a '20-kg class' no mass of this craft, a specific impulse said with a clause set off, 'at an average of 15 °C over the period' a temperature (invented test data)", () => {
+  expect(extractFigures('One technician left in month 14 and was replaced in month 16. The dryer drew 1.5 kW.').map((x) => x.kind)).toEqual(['power']);
+  // "Output, in watts, about four hundred": the unit named before its number still reads.
+  expect(extractFigures('Output, in watts, about four hundred.')).toMatchObject([{ kind: 'power', si: 400 }]);
+  const craft = extractFigures("A module for 20-kg class satellites. The reference satellite has a wet mass of 24 kg including 4.5 kg of propellant; the thruster's specific impulse, measured by the applicant in vacuum at the partner facility, is 250 s. The requirement is 450 m/s.");
+  expect(craft.find((x) => x.text === '20-kg')?.role).toBe('aside');
+  expect(craft.find((x) => x.kind === 'specific-impulse')?.si).toBe(250);
+  // Tsiolkovsky: 250 s × 9.80665 m/s² × ln(24 / 19.5) = 509.1 m/s ≥ 450 m/s (g0 exact, SI Brochure).
+  const text = "The reference satellite has a wet mass of 24 kg including 4.5 kg of propellant; the thruster's specific impulse, measured by the applicant in vacuum at the partner facility, is 250 s. The requirement is 450 m/s of Δv.";
+  const run = runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === 'rocket-equation');
+  expect(run?.finding).toBe('consistent');
+  const plant = extractFigures('With brine arriving at 120 °C and the air-cooled condenser at an average of 15 °C over the period, the unit delivered 1.9 MW at a net thermal efficiency of 10.5 %.');
+  expect(plant.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si])).toEqual([
+    ['hot', 393.15],
+    ['cold', 288.15],
+  ]);
+  // A spread of the surroundings is one temperature's range, set aside, not two sides.
+  const spread = extractFigures('The Stirling engine gives 1.2 kW; its heater head ran at about 650 °C and the rejector at 40 °C. Outdoor air temperatures ranged from 18 to 33 °C over the campaign.');
+  expect(spread.find((x) => x.text === '18 to 33 °C')?.role).toBe('aside');
+});

@@ -288,6 +288,8 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   if (!ROCKET_RE.test(text) && !drafts.some((d) => d.kind === 'specific-impulse' || (d.kind === 'speed' && (d.role === 'exhaust' || d.role === 'delta-v')))) {
     for (const m of massDrafts) if (m.role === 'propellant' && !/(?<!\p{L})(?:propellants?|reaction mass)(?!\p{L})/iu.test(text.slice(Math.max(0, m.start - 40), m.end + 40))) m.role = null;
   }
+  // "a module for 20-kg class satellites": a class of craft, no mass of this one.
+  for (const m of massDrafts) if (/^[^\S\n]*(?:-[^\S\n]*)?class(?!\p{L})/iu.test(text.slice(m.end, m.end + 10))) m.role = 'aside';
   // "The test stand itself weighs 85 kg": a mass of the apparatus, in a sentence that names no craft.
   for (const m of massDrafts) {
     const sentence = sentenceAround(text, m.start, m.end);

@@ -43,6 +43,9 @@ export function differenceDirection(text: string, end: number): 'up' | 'down' | 
   return undefined;
 }
 
+/** After "over": a stretch of time ("over the period", "over the winter", "over a week"). */
+const OVER_A_TIME_RE = /^[^\S\n]*(?:the|a|an|its|this|that|each|every|one|two|three|several)[^\S\n]+(?:(?:whole|entire|full|test|trial|heating|cooling|first|last|same|following|next|past|reporting)[^\S\n]+)?(?:period|year|season|winter|summer|spring|autumn|day|night|week|fortnight|month|test|run|trial|campaign|hours?|days?|weeks?|months?|years?|decade|lifetime|duration|course|quarter)(?!\p{L})/iu;
+
 /** Words of the very cold or of space, where a temperature of a few tens of kelvin is a temperature. */
 const CRYOGENIC_RE = /(?<!\p{L})(?:cryo\w*|liquid (?:nitrogen|helium|hydrogen|oxygen|air)|LN2|superconduct\w*|millikelvin|mK|absolute zero|cosmic|interstellar|deep space|outer space|in space|orbit\w*|planet\w*|moons?|Mars|Pluto|comets?|dilution|cold head|Joule-Thomson)(?!\p{L})/iu;
 /** A temperature in degrees Celsius or Fahrenheit. */
@@ -86,6 +89,8 @@ export function isDifference(text: string, start: number, end: number, floor: nu
   // "20 °C above ambient", "heated 40 K over room temperature"; "between" only as "20 K between the plates".
   if (/^(?:warmer|hotter|cooler|colder|higher|lower|above|below|over|under)/.test(word)) {
     const rest = text.slice(end + a[0].length, end + a[0].length + 40);
+    // "at an average of 15 °C over the period": a time, not a reference temperature.
+    if (/^(?:over|under)$/.test(word) && OVER_A_TIME_RE.test(rest)) return false;
     // "between 650 °C heater head and 50 °C cooler": the second of two sides named in parallel, "cooler" the
     // part (a noun), not a comparison; without "than" a comparative there names no difference.
     const pairedSide = /between[^\S\n]+[^,;.\n]{0,40}?\p{N}[^,;.\n]{0,40}?[^\S\n]and[^\S\n]+(?:(?:the|a|an|its)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 90), start));
@@ -144,7 +149,7 @@ const HEAT_FLOW_RE =
   /(?<!\p{L})(?:(?:draws?|drawing|drew|takes?|taking|took|extracts?|extracting|pulls?|pulling|absorbs?|collects?|harvests?|pumps?|moves?|rejects?|rejecting|dumps?|sheds?|gives? off|delivers?|supplies|releases?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth)|heat[^\S\n]+(?:(?:is|was|are|were|being)[^\S\n]+)?(?:(?:drawn|taken|extracted|pumped|moved|delivered|rejected|released|dumped|carried)[^\S\n]+)?(?:from|to|into|out of)|(?:hot|cold|warm|cool) (?:side|end|face|plate|junction|reservoir)|source|sink|evaporat\w*|condens\w*|Carnot)(?!\p{L})/iu;
 /** Just before a temperature: the place or the test it was of. */
 const PLACE_CONDITION_BEFORE_RE =
-  /(?<!\p{L})(?:(?:room|hall|lab|laboratory|workshop|building|chamber|gallery|clubroom|classroom|kiosk|garage|shed|office|site|field|venue|warehouse|cellar|basement|studio|hangar|barn|attic|loft)(?:[^\S\n]+(?:temperature|air))?(?:[^\S\n]+(?:was|is|were|stays?|stayed|must stay|remained|felt))?(?:[^\S\n]+(?:kept|held|heated|cooled|maintained|conditioned|set|air-conditioned))?(?:[^\S\n]+(?:at|to|between|of|:))?|(?:in|inside)[^\S\n]+(?:a|an|the)[^\S\n]+(?:closed[^\S\n]+|cold[^\S\n]+|warm[^\S\n]+|heated[^\S\n]+)?(?:room|hall|lab|workshop|building|chamber|garage|shed)[^\S\n]+(?:at|of|kept at|held at)|thermostat(?:[^\S\n]+(?:says|read|reads|set to|showed|shows))?|thermometer(?:[^\S\n]+(?:said|read|reads|showed|shows))?|outside(?:,)?[^\S\n]+it[^\S\n]+was|(?:outdoor|outside)[^\S\n]+temperature[^\S\n]+(?:was|fell to|rose to|of|reached)|(?:air[- ]conditioning|heating)[^\S\n]+(?:now[^\S\n]+)?holds|weather[^\S\n]+(?:was|of)|(?:at|on)[^\S\n]+(?:a|an)|in[^\S\n]+(?:a|an))[^\S\n]*(?:(?:about|around|roughly|some|nearly|only|just|a steady|a constant)[^\S\n]+)?$/iu;
+  /(?<!\p{L})(?:(?:room|hall|lab|laboratory|workshop|building|chamber|gallery|clubroom|classroom|kiosk|garage|shed|office|site|field|venue|warehouse|cellar|basement|studio|hangar|barn|attic|loft)(?:[^\S\n]+(?:temperature|air))?(?:[^\S\n]+(?:was|is|were|stays?|stayed|must stay|remained|felt))?(?:[^\S\n]+(?:kept|held|heated|cooled|maintained|conditioned|set|air-conditioned))?(?:[^\S\n]+(?:at|to|between|of|:))?|(?:in|inside)[^\S\n]+(?:a|an|the)[^\S\n]+(?:closed[^\S\n]+|cold[^\S\n]+|warm[^\S\n]+|heated[^\S\n]+)?(?:room|hall|lab|workshop|building|chamber|garage|shed)[^\S\n]+(?:at|of|kept at|held at)|thermostat(?:[^\S\n]+(?:says|read|reads|set to|showed|shows))?|thermometer(?:[^\S\n]+(?:said|read|reads|showed|shows))?|outside(?:,)?[^\S\n]+it[^\S\n]+was|(?:outdoor|outside|ambient)[^\S\n]+(?:air[^\S\n]+)?temperatures?[^\S\n]+(?:was|were|fell to|rose to|of|reached|(?:ranged|varied|lay|stayed)[^\S\n]+(?:from|between))|(?:air[- ]conditioning|heating)[^\S\n]+(?:now[^\S\n]+)?holds|weather[^\S\n]+(?:was|of)|(?:at|on)[^\S\n]+(?:a|an)|in[^\S\n]+(?:a|an))[^\S\n]*(?:(?:about|around|roughly|some|nearly|only|just|a steady|a constant)[^\S\n]+)?$/iu;
 /** An efficiency or a COP of the device (not one set aside: a part's, a writer's ceiling), which its sides serve. */
 const ratioOfDevice = (d: Draft) => (d.kind === 'efficiency' || d.kind === 'cop') && d.role !== 'aside';
 

@@ -86,7 +86,7 @@ export const PROPELLANT_FREE_WORDS = [
 /** A device said to carry and expel propellant: the photon-rocket bound does not apply, the rocket equation does. */
 export const PROPELLANT_WORDS = [
   'propellant', 'xenon', 'krypton', 'argon', 'hydrazine', 'kerosene', 'oxidi[sz]er', 'fuel tanks?', 'exhaust (?:velocity|speed)', 'Isp', 'specific impulse',
-  'ion (?:thruster|engine|drive)', 'Hall(?:-effect)? (?:thruster|effect thruster)', 'rocket', 'reaction mass', 'mass flow', 'nozzle', 'ejects?', 'expels?',
+  'ion (?:thruster|engine|drive)', 'Hall(?:-effect)? (?:thruster|effect thruster)', 'rocket', '(?<!(?:brass|steel|tungsten|lead|copper|internal|inner|oscillating|moving|shuttling|vibrating|sliding|rotating|enclosed|sealed|on-board|onboard)[- ])reaction mass(?! (?:with|inside|within|in the (?:housing|box|case|enclosure)|back and forth|to and fro))', 'mass flow', 'nozzle', 'ejects?', 'expels?',
   'plasma thruster', 'resistojet', 'arcjet', 'electrospray(?: thrusters?| propulsion)?', 'colloid thrusters?', 'ionic liquids?', 'FEEP', 'field[- ]emission (?:electric )?(?:propulsion|thrusters?)',
   '(?:emit(?:s|ting|ted)?|spray(?:s|ing|ed)?|eject(?:s|ing|ed)?|expel(?:s|ling|led)?) (?:charged |tiny |fine )?(?:droplets|ions|charged particles|particles|plasma)', 'pulsed plasma thrusters?', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
   'fans?', 'air-breathing', 'solar sails?', 'ion[- ]wind', 'ionic wind', 'corona(?: discharge)?', 'electrohydrodynamic', 'EHD', 'ionocraft', 'ablation', 'ablative', '(?:pushed|driven|propelled|illuminated|accelerated) by (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:lasers?|beams?|sunlight|light)',
