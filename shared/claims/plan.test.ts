@@ -1149,3 +1149,26 @@ test('a heat engine with the heat it takes and the work it gives is held to Carn
   const carnot = 1 - ((70 - 32) * 5 / 9 + 273.15) / ((180 - 32) * 5 / 9 + 273.15);
   expect(run?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(eta / carnot, 6);
 });
+
+describe('review texts (invented test data)', () => {
+  const runOf = (text: string, check: string) => runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === check);
+  it('"if … the efficiency comes out below the Carnot value" is a condition, not a statement that the device is within it', () => {
+    // 24 °C = 297.15 K, 12 K lower = 285.15 K; Carnot 1 − 285.15/297.15 = 0.0404 (textbook); 9 % is 2.23 times it.
+    const r = runOf('The engine works on a temperature difference of only 12 K, with surface water at 24 °C, and the manuscript reports that it converts 9 % of the heat it draws. If the heat input is re-measured and the efficiency comes out below the Carnot value, I would consider a new submission.', 'carnot');
+    expect(r?.finding).toBe('breaks');
+    expect(r!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.09 / (1 - 285.15 / 297.15), 6);
+  });
+  it('a binary geothermal plant is a heat engine; a pumped store with a pump-turbine is not', () => {
+    expect(runOf('A binary-cycle plant: brine at 140 °C, condensers cooled by air at 25 °C, pumps and fans. The net thermal efficiency is reported as 11 %.', 'carnot')?.finding).toBe('consistent');
+    // A gain of 0.78 with a reservoir and a reversible pump-turbine named: the first law on the ratio, consistent.
+    const store = runOf("The quarry reservoir, the penstock and the reversible pump-turbine are sound. The summary says the scheme 'gives back 0.78 units for every unit it takes — almost perpetual motion'.", 'first-law');
+    expect(store?.finding).toBe('consistent');
+    expect(store!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(0.78, 12);
+  });
+  it('a thrust in vacuum "where no ion wind is possible" is held to the photon bound', () => {
+    // 25 W / c = 8.339e-8 N (c exact, SI Brochure); 1.1 mN is 13 191 times that.
+    const r = runOf('Our device produces 1.1 mN in high vacuum with 25 W of input power, where no ion wind is possible.', 'photon-bound');
+    expect(r?.finding).toBe('breaks');
+    expect(r!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(0.0011 / (25 / 299792458), 0);
+  });
+});

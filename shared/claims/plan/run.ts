@@ -96,10 +96,17 @@ function tiedByExcess(figures: Figure[], uses: Figure[]): boolean {
 const WITHIN_BOUND_RE =
   /(?<!(?:not|n't|never|cannot|can't|no longer|supposedly|claim(?:s|ed)? to (?:be|run|stay)|said to (?:be|run|stay))[^\S\n]+(?:(?:well|comfortably|safely|still|clearly|far|just|only)[^\S\n]+)?)(?:below|under|beneath|within|short of|inside)[^\S\n]+(?:(?:the|its|their|that|this|an?)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(?:Carnot|ideal|theoretical|thermodynamic|reversible|photon)(?![^\S\n]+gas)(?:[^\S\n]+(?:limit|ceiling|bound|maximum|max|value|efficiency|COP|machine|engine|figure|one|cycle))?(?!\p{L})/iu;
 
+const WITHIN_BOUND_ALL_RE = new RegExp(WITHIN_BOUND_RE.source, 'giu');
+/** Before the words in their sentence: a condition or a demand, not a statement ("If … the efficiency comes out below the Carnot value"). */
+const CONDITION_BEFORE_RE = /(?<!\p{L})(?:if|unless|once|until|whether|should|would|must|needs? to|has to|have to|required to|expected to|ought to|to show|to demonstrate)(?!\p{L})/iu;
+
 function saidWithin(text: string, check: CheckName): string | null {
   if (check !== 'carnot' && check !== 'photon-bound' && check !== 'rocket-equation') return null;
-  const m = WITHIN_BOUND_RE.exec(text);
-  return m ? m[0] : null;
+  for (const m of text.matchAll(WITHIN_BOUND_ALL_RE)) {
+    const from = Math.max(0, text.slice(0, m.index).search(/[^.!?\n]*$/u));
+    if (!CONDITION_BEFORE_RE.test(text.slice(from, m.index))) return m[0];
+  }
+  return null;
 }
 
 export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { checks: ClaimCheckRun[]; needs: ClaimCheckNeed[]; notes: string[] } {

@@ -142,6 +142,10 @@ export function propellantFreeParagraphs(text: string): [number, number][] {
 /** Where the device may be fitted: "bolt it to a cart, a boat or a satellite", "mount one on any small boat". */
 const FIT_TO_RE = /(?<!\p{L})(?:bolt|fit|mount|attach|strap|install|put)(?:s|ed|ing)?[^\S\n]+(?:it|them|one|two|several|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:to|on|onto|in|into)[^\S\n]+[^.;!?\n]{0,80}/giu;
 
+/** Machines of falling water, wind and tide, and their reservoirs: their turbines take in no heat. */
+const WATER_OR_WIND_MACHINE_RE =
+  /(?<!\p{L})(?:pump[- ]turbines?|(?:hydro|hydraulic|water|wind|tidal|Pelton|Kaplan|Francis|cross[- ]flow|Turgo|reversible|run-of-river|river|stream|low-head|micro-hydro|pico-hydro)[- ]turbines?|(?:upper|lower|storage|pumped[- ]storage|hydro|water|quarry|head|tail)[- ](?:reservoirs?|ponds?)|(?:quarry|pumped[- ]hydro|pumped) reservoirs?|penstocks?)(?!\p{L})/giu;
+
 export function readSignals(ctx: PlanContext): Signals {
   const text = ctx.text ?? '';
   const classes = ctx.classes ?? [];
@@ -164,7 +168,8 @@ export function readSignals(ctx: PlanContext): Signals {
     propellant: PROPELLANT_RE.test(
       onlyTheClaim(text, (vacuumClaimed(text) ? withoutFree.replace(AIR_PUSHER_RE, ' ') : withoutFree).replace(PHOTON_ROCKET_RE.test(text) || lightAsRocket(text) ? BARE_ROCKET_RE : /$^/u, ' ')),
     ),
-    heatEngine: HEAT_ENGINE_RE.test(text),
+    // (Water and wind machines are no heat engines: "the reversible pump-turbine", "the upper reservoir".)
+    heatEngine: HEAT_ENGINE_RE.test(text.replace(WATER_OR_WIND_MACHINE_RE, ' ')),
     // (A boiler's text names radiators and flow temperatures too: those words alone name no heat pump there.)
     heatPump: HEAT_PUMP_RE.test(notDenied) && !(BURNER_RE.test(text) && !NAMED_HEAT_PUMP_RE.test(notDenied)),
     cooling: COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied),
