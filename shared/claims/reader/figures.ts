@@ -366,7 +366,13 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         /* not comparable: keep it */
       }
     }
-    if (role === undefined) role = roleFor(text, kind, roleContextStart(text, start, floor), end, floor);
+    if (role === undefined) {
+      // A sheet's row ("Cooling capacity at +5 °C coolant ........ 1,200 W"): its whole label is the
+      // figure's words, whatever figure of a test condition the label holds.
+      const lineStart = text.lastIndexOf('\n', start - 1) + 1;
+      const rowFloor = lineStart < floor && /(?:\.{3,}|…|\||\t|[^\S\n]{3,})[^\S\n]*$/u.test(text.slice(lineStart, start)) ? lineStart : floor;
+      role = roleFor(text, kind, roleContextStart(text, start, rowFloor), end, rowFloor);
+    }
     // "10 kWe", "3 MWe": electrical output.
     if (role === null && kind === 'power' && suffix?.type === 'unit' && /[kMG]?We$/.test(text.slice(t.numEnd, end).trim())) role = 'out';
     if (role === null && kind === 'power' && suffix?.type === 'unit' && !suffix.per) role = ratingRole(text, start, end);

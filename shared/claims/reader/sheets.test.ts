@@ -281,3 +281,10 @@ test("a sheet giving each side under its heading ('INPUT' / 'OUTPUT', one figure
   expect(run?.finding).toBe('breaks');
   expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(336 / 90, 9);
 });
+
+test("a sheet's one data block beside a blurb is the device's own data, and a row's whole label gives its figure's side (invented test data)", () => {
+  const sheet = ['RC-1200 recirculating chiller', 'Specifications at 30 °C ambient', '', 'Cooling capacity at +5 °C coolant ........ 1,200 W', 'Power consumption (at +5 °C point) ....... 450 W', 'Refrigerant .............................. R290, 150 g', '', 'Pulls more heat out of your rotary evaporator than it takes from the wall.'].join('\n');
+  const f = read(sheet);
+  expect(f.find((x) => x.text === '1,200 W')?.role).not.toBe('aside');
+  expect(f.find((x) => x.text === '450 W')?.role).toBe('in');
+});

@@ -24,6 +24,9 @@ const MACHINE_NOUNS = [
 const MACHINE_NOUN_RE = new RegExp(`(?<!\\p{L})(?:${MACHINE_NOUNS.join('|')})(?:e?s)?(?!\\p{L})`, 'giu');
 const machineNouns = (block: string) => new Set([...block.matchAll(MACHINE_NOUN_RE)].map((m) => m[0].toLowerCase().replace(/(?<=[^s])e?s$|(?<=ss)es$/u, '')));
 
+/** A sheet's row: a label, then leader dots, a bar, a tab, wide spaces or a colon, then a number. */
+const SHEET_ROW_RE = /^[^\n]{2,70}?(?:\.{3,}|…|\||\t|[^\S\n]{3,}|:)[^\S\n]*[-−+]?\d/u;
+
 /** Kinds of figure that only a claim's device has (a thrust, a COP, a Δv…). */
 const CLAIM_KINDS = new Set(['thrust', 'cop', 'efficiency', 'thrust-per-power', 'quantum-efficiency', 'specific-impulse', 'temperature-difference', 'speed', 'specific-power', 'gas-flow']);
 
@@ -62,7 +65,11 @@ export function asideOtherTopics(text: string, drafts: Draft[]): void {
   const claimNouns = new Set(nouns.flatMap((n, k) => (score[k] > 0 ? [...n] : [])));
   // An item of other business: no word of a claim, no figure only a claim's device has, and a machine of
   // its own, none of those named in an item that has them.
-  const other = score.map((s, k) => s === 0 && nouns[k].size > 0 && ![...nouns[k]].some((n) => claimNouns.has(n)));
+  // (Nor the one data block of a sheet, "Cooling capacity at +5 °C coolant ........ 1,200 W" line after
+  // line, beside a blurb: the sheet is the device's own data, whatever the blurb names.)
+  const sheetBlocks = starts.map((from, k) => text.slice(from, starts[k + 1] ?? text.length).split('\n').filter((line) => SHEET_ROW_RE.test(line)).length >= 3);
+  const oneSheet = sheetBlocks.filter(Boolean).length === 1;
+  const other = score.map((s, k) => s === 0 && !(oneSheet && sheetBlocks[k]) && nouns[k].size > 0 && ![...nouns[k]].some((n) => claimNouns.has(n)));
   for (const d of drafts) {
     if (d.role !== null || !ASIDE_KINDS.has(d.kind) || d.derived) continue;
     if (other[blockOf(d.start)]) d.role = 'aside';
