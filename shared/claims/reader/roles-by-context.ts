@@ -76,7 +76,7 @@ const OTHER_SOURCE_RE =
 
 /** A source said to be absent ("with no sun at all", "without recharging"): no other source. */
 const NEGATED_SOURCE_RE =
-  /(?<!\p{L})(?:no|without|never any|not any|never (?:needs?|needed|requires?|required|uses?|used))[^\S\n]+(?:(?:any|direct|further|other|more|energy|external)[^\S\n]+)?(?:sun(?:light|shine)?|solar|charg\w*|recharg\w*|mains|grid|fuel|panels?|harvest\w*)(?!\p{L})/giu;
+  /(?<!\p{L})(?:no|without|never any|not any|never (?:needs?|needed|requires?|required|uses?|used))[^\S\n]+(?:(?:any|direct|further|other|more|energy|external)[^\S\n]+)?(?:sun(?:light|shine)?|solar|charg\w*|recharg\w*|mains|grid|fuel|panels?|harvest\w*)(?!\p{L})|(?<!\p{L})(?:per|on (?:one|a single|a full|each)|between|each|a) (?:full )?charges?(?!\p{L})/giu;
 
 /** Right after a rating: a supply, an adapter or a charger named ("100 W bench supply", "65 W USB-C adapter"). */
 const SUPPLY_RATING_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:(?!(?:from|the|a|an|of|by|via|through|at|to|into|on|its|their|our)(?![\p{L}\d-]))[\p{L}\d-]+[^\S\n]+){0,2}?(?:(?:power|bench|lab|laboratory|DC)[^\S\n]+)?(?:supply|supplies|PSUs?|adapters?|chargers?|power bricks?)(?!\p{L})/iu;
@@ -196,7 +196,14 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
       (d.role === null || d.role === 'in' || STORE_HOLDS_RE.test(text.slice(Math.max(0, d.start - 40), d.start))),
   );
   const draws = drafts.filter(
-    (d) => d.kind === 'power' && d.role === 'in' && !d.derived && (DRAW_LEAD_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || DRAW_AFTER_RE.test(text.slice(d.end, d.end + 30))),
+    (d) =>
+      d.kind === 'power' &&
+      d.role === 'in' &&
+      !d.derived &&
+      // (A sheet's label: "Average load on battery (recording, GPS timing on) ... 55 mW".)
+      (DRAW_LEAD_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) ||
+        DRAW_LEAD_RE.test(text.slice(Math.max(0, d.start - 90), d.start).replace(/\([^()\n]{0,50}\)|\.{2,}|…+/gu, ' ').replace(/[^\S\n]+/gu, ' ')) ||
+        DRAW_AFTER_RE.test(text.slice(d.end, d.end + 30))),
   );
   // (Other energies only where they are what the load got: "delivered about 0.6 MJ to the LED".)
   // (Not the draw over the run, said as an energy beside the word of the store: "over two weeks the station

@@ -116,6 +116,12 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       // "rejecting heat on deck at 32 °C": where a fridge or a heat pump rejects its heat is its warm side.
       if (/(?<!\p{L})(?:reject(?:s|ed|ing)?|dump(?:s|ed|ing)?|shed(?:s|ding)?|discharg(?:es|ed|ing))[^\S\n]+(?:(?:its|the)[^\S\n]+)?(?:waste[^\S\n]+)?heat(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]+(?:at|of)[^\S\n]*(?:(?:about|around|roughly|some)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
     }
+    else {
+      // An engine's sheet: "Heat source ....... surrounding air, 20 °C" is its hot side, "Heat sink" its cold one.
+      const line = text.slice(text.lastIndexOf('\n', start - 1) + 1, start);
+      const label = /^[^\S\n]*(?:[-•*·][^\S\n]*)?heat[^\S\n]+(source|sink)(?!\p{L})[^:|\n.]{0,30}(?:[:|]|\.{2,})/iu.exec(line);
+      if (label && !/\p{N}/u.test(line.slice(label[0].length))) return label[1].toLowerCase() === 'sink' ? 'cold' : 'hot';
+    }
     const strong = STRONG_SIDE_RE.exec(text.slice(Math.max(floor, start - 40), start)) ?? STRONG_FLUID_RE.exec(text.slice(Math.max(floor, start - 40), start));
     if (strong) return /^(?:hot|warm|sun|heated)/i.test(strong[1]) ? 'hot' : 'cold';
     // "to deliver 95 °F air", "supplies 55 °C water": what a machine delivers is its hot side (the

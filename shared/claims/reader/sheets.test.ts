@@ -288,3 +288,16 @@ test("a sheet's one data block beside a blurb is the device's own data, and a ro
   expect(f.find((x) => x.text === '1,200 W')?.role).not.toBe('aside');
   expect(f.find((x) => x.text === '450 W')?.role).toBe('in');
 });
+
+test("an engine's label: 'Heat source ..... surrounding air, 20 °C' is its hot side, and 'Working temperature difference .. 5 °C' a difference (invented test data)", () => {
+  const label = ['Heat source ..................... surrounding air, 20 °C', 'Working temperature difference .. 5 °C', 'Shaft power ..................... 450 W', 'Conversion efficiency ........... 12 %'].join('\n');
+  expect(brief(label).filter(([k]) => k === 'temperature' || k === 'temperature-difference')).toEqual([
+    ['temperature', 'hot', 293.15],
+    ['temperature-difference', null, 5],
+    ['temperature', 'cold', 288.15],
+  ]);
+  // Carnot: 1 − 288.15/293.15 = 0.01706; 12 % is 7.04 times it.
+  const run = runClaimChecks(read(label), { text: label, classes: [] }).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('breaks');
+  expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.12 / (1 - 288.15 / 293.15), 6);
+});

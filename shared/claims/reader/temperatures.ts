@@ -66,7 +66,8 @@ function kelvinBesideCelsius(text: string, start: number, end: number): boolean 
 }
 
 export function isDifference(text: string, start: number, end: number, floor: number): boolean {
-  const before = text.slice(Math.max(floor, start - 60), start);
+  // (A sheet's leader dots are no words: "Working temperature difference .. 5 °C".)
+  const before = text.slice(Math.max(floor, start - 60), start).replace(/\.{2,}|…+/gu, ' ');
   // A label of a sheet or a list: "ΔT source to flow: 40 K", "• Temperature lift (W35): 30 K".
   if (DIFF_LABEL_RE.test(before)) return true;
   // A figure that corrects a difference just before it is a difference.
