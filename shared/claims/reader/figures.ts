@@ -77,7 +77,7 @@ function erratumBare(text: string, start: number, drafts: Draft[]): { kind: Figu
 }
 
 /** "for every watt going in," before a figure: the unit in, said first. */
-const PER_UNIT_BEFORE_RE = /(?<!\p{L})(?:(?:for|per)[^\S\n]+(?:each|every|one)|each|every)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){0,6}?[^\S\n]*[,:;]?[^\S\n]*(?:about|roughly|some|nearly|only|just)?[^\S\n]*$/iu;
+const PER_UNIT_BEFORE_RE = /(?<!\p{L})(?:(?:for|per)[^\S\n]+(?:each|every|one)|each|every)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?:(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){1,6}?,(?:[^\S\n]+[\p{L}-]+){1,3}?|(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){0,6}?)[^\S\n]*[,:;]?[^\S\n]*(?:about|roughly|some|nearly|only|just)?[^\S\n]*$/iu;
 /** After a figure: it is what comes out ("1.25 watts would come out", "1.4 J come back"). */
 const COMES_OUT_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:(?:would|will|should|could|does|do|can|did|must)[^\S\n]+)?(?:come|comes|came|go|goes|went|get|gets|got)[^\S\n]+(?:out|back)(?!\p{L})/iu;
 
@@ -330,7 +330,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         const per = PER_UNIT_BEFORE_RE.exec(text.slice(windowStart(text, start, floor, 120), start));
         const first = per ? PER_UNIT_QUANTITY[per[1].toLowerCase()] : undefined;
         // ("Every watt you pay for turns into nearly two watts of warmth": what each unit in becomes.)
-        const becomes = /(?<!\p{L})(?:(?:turns?|turned|converts?|converted)[^\S\n]+into|becomes?|became|gives?|yields?|returns?|produces?)[^\S\n]+(?:(?:back|nearly|about|roughly|almost|some|over|more than|up to)[^\S\n]+)*$/iu.test(text.slice(Math.max(0, start - 40), start));
+        const becomes = /(?<!\p{L})(?:(?:turns?|turned|converts?|converted)[^\S\n]+into|becomes?|became|gives?|yields?|returns?|produces?|puts?|delivers?)[^\S\n]+(?:(?:back|nearly|about|roughly|almost|some|over|more than|up to)[^\S\n]+)*$/iu.test(text.slice(Math.max(0, start - 40), start));
         if (per && (!first || first.kind === kind) && (COMES_OUT_AFTER_RE.test(text.slice(end, end + 40)) || becomes)) {
           kind = 'efficiency';
           quantity = t.num;

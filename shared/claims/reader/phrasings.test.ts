@@ -1088,3 +1088,12 @@ test("funding and review texts: 'in month 14' is no duration, a '20-kg class' no
   const spread = extractFigures('The Stirling engine gives 1.2 kW; its heater head ran at about 650 °C and the rejector at 40 °C. Outdoor air temperatures ranged from 18 to 33 °C over the campaign.');
   expect(spread.find((x) => x.text === '18 to 33 °C')?.role).toBe('aside');
 });
+
+test('"For every kWh it takes from the socket, it puts 3.2 kWh of heat into the tank": the gain said with the unit in first and a clause between (invented test data)', () => {
+  const text = 'Heat pump water heater, intake air 15 °C, water heated to 55 °C. For every kWh it takes from the socket, it puts 3.2 kWh of heat into the tank.';
+  expect(extractFigures(text).find((x) => x.text === '3.2 kWh')).toMatchObject({ si: 3.2, derived: 'units out for each unit in' });
+  // Carnot heating COP 328.15/40 = 8.204 (textbook); 3.2 is 0.390 of it: consistent.
+  const run = runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'cop_heating_ratio')!.si).toBeCloseTo(3.2 / (328.15 / 40), 6);
+});
