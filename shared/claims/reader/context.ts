@@ -10,7 +10,8 @@ export const alt = (words: readonly string[]) => words.join('|');
 export const HEAT_PUMP_RE = new RegExp(`(?<!\\p{L})(?:${alt(HEAT_PUMP_WORDS)})(?!\\p{L})`, 'iu');
 export const COOLING_MACHINE_RE = new RegExp(`(?<!\\p{L})(?:${alt(COOLING_MACHINE_WORDS)})(?!\\p{L})`, 'iu');
 export const BEFORE_WINDOW = 80;
-const SENTENCE_BREAK_RE = /[.!?;]["”’')\]]*(?:\s|$)|\n/g;
+// (A sheet's leader dots, four or more, end no sentence: "Power input .... between 2.9 and 3.2 kW".)
+const SENTENCE_BREAK_RE = /(?:(?<!\.{3})\.|[!?;])["”’')\]]*(?:\s|$)|\n/g;
 
 /** Start of the window of words before `at`: the previous figure, the sentence start or `at - max`. */
 export function windowStart(text: string, at: number, floor: number, max: number): number {

@@ -17,7 +17,7 @@ import { bareKind, GAIN_PER_UNIT_RE, PER_UNIT_QUANTITY, ISP_AFTER_RE, ISP_BEFORE
 import { tokenize, type NumberToken } from './numbers';
 import { hedgeBefore, isRangeGap, roleContextStart } from './ranges-hedges';
 import { lastRoleWords, ratingRole, roleFor } from './roles';
-import { differenceDirection, differenceQuantity, isDifference } from './temperatures';
+import { differenceDirection, differenceQuantity, isDifference, OPERATING_RANGE_RE } from './temperatures';
 import { GLUED_CELSIUS, GLUED_FAHRENHEIT, type Suffix } from './units';
 
 /** Words of a temperature in a sentence: what a glued "4K" needs beside it to be read in kelvin. */
@@ -105,6 +105,26 @@ function gainAsCop(text: string, start: number, end: number): { role: 'heating' 
   return { role: 'heating', assumption: 'Heat moved as a multiple of the work in, by a machine the text does not name: read as a heating COP.' };
 }
 
+/** Between a sheet's label and its value: leader dots, a pipe, a tab or wide spaces, then perhaps a hedge ("between", "approx."). */
+const ROW_SEPARATOR_RE = /(?:\.{3,}|…|\||\t|[^\S\n]{3,})[^\S\n]*(?:(?:between|about|approx\.?|ca\.|up to|typ\.?|typically|min\.?|max\.?|[~≈<>≤≥])[^\S\n]*)?$/iu;
+/** A test condition in a sheet's label: "(Vin = 12 V)", "@ 121.6 nm", "at 25 °C". */
+const LABEL_CONDITION_RE = /\([^()\n]{0,30}\)|(?:@|(?<!\p{L})at)[^\S\n]*[-−+]?\d[\d.,]*[^\S\n]*[^\s\d|]{0,5}/giu;
+
+/**
+ * A sheet's row ("Cooling capacity at +5 °C coolant ........ 1,200 W", "Full-load efficiency (Vin = 12 V)⇥89.3 %"):
+ * its whole label is the figure's words, whatever figure of a test condition the label holds. Where the
+ * value follows a row separator, the floor goes back to the line's start; for reading a figure's kind, only
+ * when the label's own numbers are test conditions (not another cell's value).
+ */
+function sheetRowFloor(text: string, start: number, floor: number, labelOnly: boolean): number {
+  const lineStart = text.lastIndexOf('\n', start - 1) + 1;
+  if (lineStart >= floor) return floor;
+  const sep = ROW_SEPARATOR_RE.exec(text.slice(lineStart, start));
+  if (!sep) return floor;
+  if (labelOnly && /\d/u.test(text.slice(lineStart, lineStart + sep.index).replace(LABEL_CONDITION_RE, ' '))) return floor;
+  return lineStart;
+}
+
 export function readFigures(text: string, restated: [number, number][]): Figure[] {
   lastRoleWords.end = 0;
   const tokens = tokenize(text);
@@ -173,10 +193,12 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         }
         // ("Outdoor air temperatures ranged from 18 to 33 °C": one quantity's spread, not two sides.)
         const spread = /(?<!\p{L})(?:rang(?:e|es|ed|ing)|var(?:y|ies|ied|ying)|fluctuat(?:e|es|ed|ing)|swung|swings?|drift(?:s|ed|ing)?)[^\S\n]+(?:(?:anywhere|somewhere)[^\S\n]+)?(?:from|between)[^\S\n]+$/iu.test(text.slice(Math.max(0, t.start - 40), t.start));
+        // ("Operating temperature | −20 to +60 °C": the range it is rated for, one figure set aside.)
+        const rated = suffixKind(next.suffix) === 'temperature' && OPERATING_RANGE_RE.test(text.slice(Math.max(0, t.start - 40), t.start));
         const twoSides =
           fallingMass ||
           (suffixKind(next.suffix) === 'voltage' && !dash) ||
-          (!thirdTemperature && !spread && suffixKind(next.suffix) === 'temperature' && !dash && !isDifference(text, t.start, next.end, floor));
+          (!thirdTemperature && !spread && !rated && suffixKind(next.suffix) === 'temperature' && !dash && !isDifference(text, t.start, next.end, floor));
         suffix = next.suffix;
         if (!twoSides) {
           upperNum = next.num;
@@ -265,7 +287,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         assumption = suffix.form === GLUED_CELSIUS ? '"C" read as degrees Celsius.' : suffix.form === GLUED_FAHRENHEIT ? '"F" read as degrees Fahrenheit.' : '"Degrees" read as degrees Celsius.';
       }
     } else if (suffix?.type === 'percent') {
-      const reading = readPercent(text, start, end, floor, t.num) ?? comparedPercent(text, start, end, drafts) ?? erratumPercent(text, start, drafts);
+      const reading = readPercent(text, start, end, sheetRowFloor(text, start, floor, true), t.num) ?? comparedPercent(text, start, end, drafts) ?? erratumPercent(text, start, drafts);
       if (reading) {
         kind = reading.kind;
         role = reading.role;
@@ -285,7 +307,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         if (upperNum !== undefined) upper = q(upperNum);
       }
     } else {
-      const bare = bareKind(text, start, t.numEnd, floor) ?? bareFromUpper ?? erratumBare(text, start, drafts);
+      const bare = bareKind(text, start, t.numEnd, sheetRowFloor(text, start, floor, true)) ?? bareFromUpper ?? erratumBare(text, start, drafts);
       if (bare) {
         kind = bare.kind;
         role = bare.role;
@@ -369,8 +391,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     if (role === undefined) {
       // A sheet's row ("Cooling capacity at +5 °C coolant ........ 1,200 W"): its whole label is the
       // figure's words, whatever figure of a test condition the label holds.
-      const lineStart = text.lastIndexOf('\n', start - 1) + 1;
-      const rowFloor = lineStart < floor && /(?:\.{3,}|…|\||\t|[^\S\n]{3,})[^\S\n]*$/u.test(text.slice(lineStart, start)) ? lineStart : floor;
+      const rowFloor = sheetRowFloor(text, start, floor, false);
       role = roleFor(text, kind, roleContextStart(text, start, rowFloor), end, rowFloor);
     }
     // "10 kWe", "3 MWe": electrical output.

@@ -128,7 +128,7 @@ const ENGINE_NAMED_RE = /(?<!\p{L})(?:engines?|turbines?|Stirling|power (?:plant
 
 /** What a percentage is, by its context. */
 /** In a sheet's label: a bracketed test point and leader dots. */
-const LABEL_FILLER_RE = /\([^()\n]{0,20}\)|\.{2,}|…+/gu;
+const LABEL_FILLER_RE = /\([^()\n]{0,20}\)|\.{2,}|…+|@[^\S\n]*[-−+]?\d[\d.,]*[^\S\n]*[^\s\d|]{0,5}/gu;
 /** A compressor or a refrigerant named (a machine that moves heat). */
 const COMPRESSOR_OR_REFRIGERANT_RE = /(?<!\p{L})(?:compressors?|refrigerants?|R-?(?:32|290|410A|407C|134a|744|1234\w+|454B|513A))(?!\p{L})/iu;
 /** A heating output or capacity named. */
@@ -231,7 +231,8 @@ function sentenceStart(text: string, at: number): number {
 const COUNTED_AFTER_RE = /^[^\S\n]+(?:of[^\S\n]+the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:units(?![^\S\n]+(?:of|for|back|out|per|in|returned|delivered|produced|to)(?!\p{L}))|houses|homes|flats|buildings|machines|models|devices|prototypes|sites|customers|households|people|students|tests|trials|samples|sessions|rows|columns|pages)(?!\p{L})(?![^\S\n]+(?:of|for)[^\S\n]+(?:every|each|one)(?!\p{L}))/iu;
 
 export function bareKind(text: string, start: number, end: number, floor: number): { kind: FigureKind; role?: FigureRole; derived?: string; factor?: number } | null {
-  const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start);
+  // (A sheet's label: "COP (B0/W35) ........ between 4.3 and 4.7" — the rating point and the leader dots are no words of it.)
+  const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start).replace(LABEL_FILLER_RE, ' ');
   // An operand of a worked division or product ("η = 3.1/172 = 0.018"): a step, not a figure; the
   // result after "=" is read.
   if (/^[^\S\n]*[/×*÷][^\S\n]*\d/u.test(text.slice(end, end + 6)) || /\d[^\S\n]*[/×*÷][^\S\n]*$/u.test(before)) return null;

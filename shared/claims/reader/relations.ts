@@ -52,11 +52,16 @@ const HOIST_RE = /(?<!\p{L})(?:cranes?|hoists?|winch(?:es)?|forklifts?|lift truc
  */
 const RATING_POINT_RE = /(?<![\p{L}\p{N}])([ABW])[^\S\n]?([-−]?\d{1,2}(?:[.,]\d)?)[^\S\n]*\/[^\S\n]*W[^\S\n]?(\d{2}(?:[.,]\d)?)(?![\p{L}\p{N}])/gu;
 const SOURCE_NAME: Record<string, string> = { A: 'source air', B: 'brine', W: 'source water' };
+/** Words of the room a test was run in, just before its temperature ("Ambient in test room ...... 20 ± 2 °C", "lab temperature: 22 °C"). */
+const TEST_ROOM_BEFORE_RE = /(?<!\p{L})(?:ambient|room|test (?:room|hall|cell|chamber)|laborator(?:y|ies)|lab)(?!\p{L})[^\d\n]{0,40}$/iu;
 function ratingPoint(text: string, drafts: Draft[]): void {
-  if (drafts.some((d) => d.kind === 'temperature' || d.kind === 'temperature-difference')) return;
   if (!HEAT_PUMP_RE.test(text) && !/(?<!\p{L})(?:S?COP|coefficient of performance)(?!\p{L})/iu.test(text)) return;
   const points = [...text.matchAll(RATING_POINT_RE)];
   if (points.length === 0 || new Set(points.map((m) => m[0].replace(/\s/g, '').replace('−', '-'))).size > 1) return;
+  // (With the rating point written, the test room's own temperature is the surroundings, no side.)
+  const room = drafts.filter((d) => d.kind === 'temperature' && d.role !== 'aside' && TEST_ROOM_BEFORE_RE.test(text.slice(text.lastIndexOf('\n', d.start - 1) + 1, d.start)));
+  if (drafts.some((d) => (d.kind === 'temperature' || d.kind === 'temperature-difference') && !room.includes(d) && d.role !== 'aside')) return;
+  for (const d of room) d.role = 'aside';
   const m = points[0];
   const cold = Number(m[2].replace('−', '-').replace(',', '.'));
   const hot = Number(m[3].replace(',', '.'));

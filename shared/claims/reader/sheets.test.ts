@@ -301,3 +301,51 @@ test("an engine's label: 'Heat source ..... surrounding air, 20 °C' is its hot 
   expect(run?.finding).toBe('breaks');
   expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.12 / (1 - 288.15 / 293.15), 6);
 });
+
+describe("a sheet's row whose label holds a test condition (invented test data)", () => {
+  test("'@ 121.6 nm' and '(Vin = 12 V)' in a label leave the label's words to the value after the separator", () => {
+    // 145 % = 1.45 carriers per photon; 89.3 % = 0.893.
+    expect(brief('Active area | 10 mm²\nExternal quantum efficiency @ 121.6 nm | 145 %\nExternal quantum efficiency @ 254 nm | 82 %').filter(([k]) => k === 'quantum-efficiency')).toEqual([
+      ['quantum-efficiency', null, 1.45],
+      ['quantum-efficiency', null, 0.82],
+    ]);
+    expect(brief('Output voltage\t48 V\nFull-load efficiency (Vin = 12 V)\t89.3 %').find(([k]) => k === 'efficiency')).toEqual(['efficiency', null, 0.893]);
+    // (Not where the label holds another cell's value: "DC input | 48.0 V | 65.0 A | 93 %" keeps its floor.)
+    expect(brief('DC input | 48.0 V | 65.0 A | 93 %').filter(([k]) => k === 'efficiency')).toEqual([]);
+  });
+
+  test("leader dots end no sentence: 'COP ....... between 4.3 and 4.7' and 'Electrical power input .... between 2.9 and 3.2 kW' keep their labels", () => {
+    const sheet = ['GS-14 brine-to-water heat pump — results block', 'Test point ................ B0/W35', 'Heating capacity .......... 13.6–14.2 kW', 'Electrical power input .... between 2.9 and 3.2 kW', 'COP ....................... between 4.3 and 4.7', 'Ambient in test room ...... 20 ± 2 °C'].join('\n');
+    const f = read(sheet);
+    // B0/W35 (EN 14511): brine 0 °C = 273.15 K, water out 35 °C = 308.15 K; the test room's 20 ± 2 °C = 291.15–295.15 K is set aside.
+    expect(f.map((x) => [x.kind, x.role, Math.round(x.si * 100) / 100, x.upper === undefined ? null : Math.round(x.upper.si * 100) / 100])).toEqual([
+      ['temperature', 'cold', 273.15, null],
+      ['temperature', 'hot', 308.15, null],
+      ['power', 'out', 13600, 14200],
+      ['power', 'in', 2900, 3200],
+      ['cop', 'heating', 4.3, 4.7],
+      ['temperature', 'aside', 291.15, 295.15],
+    ]);
+    // Carnot heating COP = 308.15 / 35 = 8.804; 4.3 / 8.804 = 0.4884 (lawful).
+    const run = runClaimChecks(f, { text: sheet, classes: [] }).checks.find((c) => c.check === 'carnot');
+    expect(run?.finding).toBe('consistent');
+  });
+
+  test("an operating range in a row is one figure set aside; 'derate above 60 °C' is no side", () => {
+    // −20 °C = 253.15 K, +60 °C = 333.15 K.
+    expect(brief('Operating temperature | −20 to +60 °C')).toEqual([['temperature', 'aside', 253.15]]);
+    expect(read('Operating temperature ........ −20 to +60 °C')[0].upper?.si).toBeCloseTo(333.15, 9);
+    expect(brief('Output is short-circuit proof; derate above 60 °C case temperature.')).toEqual([['temperature', 'aside', 333.15]]);
+    // (Sides said in prose stay two: "between 5 and 35 °C".)
+    expect(brief('The engine runs between 5 and 35 °C.').map(([, r]) => r)).toEqual(['cold', 'hot']);
+  });
+
+  test("a chiller's 'Cooling capacity at +5 °C coolant' is its output at its cold side", () => {
+    const f = read('RC-1200 recirculating chiller\nSpecifications at 30 °C ambient\nCooling capacity at +5 °C coolant ........ 1,200 W\nPower consumption (at +5 °C point) ....... 450 W');
+    expect(f.slice(0, 3).map((x) => [x.kind, x.role, Math.round(x.si * 100) / 100])).toEqual([
+      ['temperature', 'hot', 303.15],
+      ['temperature', 'cold', 278.15],
+      ['power', 'out', 1200],
+    ]);
+  });
+});

@@ -117,8 +117,8 @@ const APPOSITION_RE = /^[\s,;(–—-]*(?:(?:a|an|some|about|roughly|nearly|just
 const NAMED_OTHER_SIDE_RE = /^[^\S\n]*(?:\p{L}+[^\S\n]+)?(?:above|over|below|under|(?:warmer|hotter|colder|cooler|higher|lower)[^\S\n]+than)[^\S\n]+(?:the|its|their|our|a|an)[^\S\n]+(?!\p{N})/iu;
 
 /** Words before the temperatures a device is rated for. */
-const OPERATING_RANGE_RE =
-  /(?<!\p{L})(?:(?:operating|operation|storage|ambient|rated|permitted|allowed|working) (?:temperature )?(?:range|temperatures?|limits?|conditions?)(?: (?:of|is|from|between))?[:=]?[^\S\n]*(?:from|between)?|(?:rated|designed|built|certified|specified|guaranteed|able)? ?(?:to )?(?:keep )?(?:work(?:s|ing)?|run(?:s|ning)?|operat(?:e|es|ing)|function(?:s|ing)?|start(?:s|ing)?) (?:(?:reliably|fine|normally|properly|well) )?(?:down|up) to|(?:rated|certified|specified|good) (?:down|up) to|(?:survives?|withstands?|tolerates?)(?: temperatures?)?(?: (?:down|up) to| of)?)[^\S\n]*$/iu;
+export const OPERATING_RANGE_RE =
+  /(?<!\p{L})(?:(?:operating|operation|storage|ambient|rated|permitted|allowed|working) (?:temperature )?(?:range|temperatures?|limits?|conditions?)(?: (?:of|is|from|between))?(?:[^\S\n]*(?:[:=|]|\.{2,}|…|\t))*[^\S\n]*(?:from|between)?|derat(?:e|es|ed|ing)(?: (?:linearly|output|power|current))? (?:above|over|from)|(?:rated|designed|built|certified|specified|guaranteed|able)? ?(?:to )?(?:keep )?(?:work(?:s|ing)?|run(?:s|ning)?|operat(?:e|es|ing)|function(?:s|ing)?|start(?:s|ing)?) (?:(?:reliably|fine|normally|properly|well) )?(?:down|up) to|(?:rated|certified|specified|good) (?:down|up) to|(?:survives?|withstands?|tolerates?)(?: temperatures?)?(?: (?:down|up) to| of)?)[^\S\n]*$/iu;
 
 /** Words of the place a test was run ("the room was held at 21 °C", "lab temperature 22 °C"). */
 const SURROUNDINGS_RE = /(?<!\p{L})(?:room|lab|laboratory|test hall|hall|workshop|building|office|test cell|weather|day|night)(?!\p{L})/iu;
