@@ -55,25 +55,38 @@ const SOURCE_NAME: Record<string, string> = { A: 'source air', B: 'brine', W: 's
 /** Words of the room a test was run in, just before its temperature ("Ambient in test room ...... 20 ± 2 °C", "lab temperature: 22 °C"). */
 const TEST_ROOM_BEFORE_RE = /(?<!\p{L})(?:ambient|room|test (?:room|hall|cell|chamber)|laborator(?:y|ies)|lab)(?!\p{L})[^\d\n]{0,40}$/iu;
 function ratingPoint(text: string, drafts: Draft[]): void {
-  if (!HEAT_PUMP_RE.test(text) && !/(?<!\p{L})(?:S?COP|coefficient of performance)(?!\p{L})/iu.test(text)) return;
+  if (!HEAT_PUMP_RE.test(text) && !/(?<!\p{L})(?:S?COP|coefficient of performance)(?!\p{L})/iu.test(text) && !drafts.some((d) => d.kind === 'cop')) return;
   const points = [...text.matchAll(RATING_POINT_RE)];
-  if (points.length === 0 || new Set(points.map((m) => m[0].replace(/\s/g, '').replace('−', '-'))).size > 1) return;
+  const distinct = new Set(points.map((m) => m[0].replace(/\s/g, '').replace('−', '-')));
+  if (points.length === 0) return;
   // (With the rating point written, the test room's own temperature is the surroundings, no side.)
   const room = drafts.filter((d) => d.kind === 'temperature' && d.role !== 'aside' && TEST_ROOM_BEFORE_RE.test(text.slice(text.lastIndexOf('\n', d.start - 1) + 1, d.start)));
-  if (drafts.some((d) => (d.kind === 'temperature' || d.kind === 'temperature-difference') && !room.includes(d) && d.role !== 'aside')) return;
+  const thermal = drafts.filter((d) => (d.kind === 'temperature' || d.kind === 'temperature-difference') && !room.includes(d) && d.role !== 'aside');
+  if (distinct.size > 1) {
+    // A sheet with a row or a heading for each rating point ("Heating output A7/W35 .... 8,2 kW", "COP A-7/W35 .... 3,1",
+    // "Operating point A7/W35" over its rows): each point's temperatures where it is written, a side said
+    // before at the same temperature not said again. (Not where temperatures are said in words, except a
+    // point's own gloss: "Operating point A-7/W55 (outdoor air −7 °C, flow water 55 °C)".)
+    const lineOf = (at: number) => text.slice(text.lastIndexOf('\n', at - 1) + 1, text.indexOf('\n', at) < 0 ? text.length : text.indexOf('\n', at));
+    if (!points.every((m) => /\n/u.test(text) && /(?:\.{3,}|…|\||\t|[^\S\n]{3,}|:|^[^\S\n]*(?:operating|test|rating)[^\S\n]+(?:point|condition))/iu.test(lineOf(m.index!)))) return;
+    if (thermal.some((d) => !points.some((m) => lineOf(m.index!) === lineOf(d.start)))) return;
+  } else if (thermal.length > 0) return;
   for (const d of room) d.role = 'aside';
-  const m = points[0];
-  const cold = Number(m[2].replace('−', '-').replace(',', '.'));
-  const hot = Number(m[3].replace(',', '.'));
-  if (!(hot > cold)) return;
-  const start = m.index!;
-  const end = start + m[0].length;
-  const why = `rating point ${m[0].replace(/\s/g, '')}: ${SOURCE_NAME[m[1]]} at ${cold} °C, water out at ${hot} °C`;
-  for (const [t, role] of [[cold, 'cold'], [hot, 'hot']] as const) {
-    const d: Draft = { start, end, kind: 'temperature', quantity: `${t} degC`, role, derived: why };
-    const at = drafts.findIndex((x) => x.start > start);
-    if (at < 0) drafts.push(d);
-    else drafts.splice(at, 0, d);
+  const said = (t: number, role: string) => drafts.some((x) => x.kind === 'temperature' && (x.role === role || x.role === null || x.role === undefined) && Math.abs((siOf(x) ?? NaN) - (t + 273.15)) < 0.01);
+  for (const m of distinct.size > 1 ? points : points.slice(0, 1)) {
+    const cold = Number(m[2].replace('−', '-').replace(',', '.'));
+    const hot = Number(m[3].replace(',', '.'));
+    if (!(hot > cold)) continue;
+    const start = m.index!;
+    const end = start + m[0].length;
+    const why = `rating point ${m[0].replace(/\s/g, '')}: ${SOURCE_NAME[m[1]]} at ${cold} °C, water out at ${hot} °C`;
+    for (const [t, role] of [[cold, 'cold'], [hot, 'hot']] as const) {
+      if (distinct.size > 1 && said(t, role)) continue;
+      const d: Draft = { start, end, kind: 'temperature', quantity: `${t} degC`, role, derived: why };
+      const at = drafts.findIndex((x) => x.start > start);
+      if (at < 0) drafts.push(d);
+      else drafts.splice(at, 0, d);
+    }
   }
 }
 

@@ -349,3 +349,29 @@ describe("a sheet's row whose label holds a test condition (invented test data)"
     ]);
   });
 });
+
+test("a sheet with a row for each rating point: each point's temperatures where it is written, a side said before not said again (invented test data)", () => {
+  const sheet = ['LWP 8 air/water heat pump', 'Heating output A7/W35 ............. 8,2 kW', 'Power input A7/W35 ................ 1,9 kW', 'COP A7/W35 ........................ 4,32', 'Heating output A-7/W35 ............ 6,1 kW'].join('\n');
+  // EN 14511: A7/W35 = air 7 °C (280.15 K), water 35 °C (308.15 K); A-7/W35 adds air −7 °C (266.15 K).
+  expect(brief(sheet)).toEqual([
+    ['temperature', 'cold', 280.15],
+    ['temperature', 'hot', 308.15],
+    ['power', 'out', 8200],
+    ['power', 'in', 1900],
+    ['cop', 'heating', 4.32],
+    ['temperature', 'cold', 266.15],
+    ['power', 'out', 6100],
+  ]);
+  // Carnot heating COP at A7/W35 = 308.15 / 28 = 11.005; 4.32 / 11.005 = 0.3925 (lawful).
+  const run = runClaimChecks(read(sheet), { text: sheet, classes: [] }).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'cop_heating_ratio')!.si).toBeCloseTo(4.32 / (308.15 / 28), 6);
+  // A heading per point, the first glossed in words: the gloss's temperatures are that point's.
+  const headed = ['Operating point A-7/W55 (outdoor air −7 °C, flow water 55 °C)', '  Heating output ............ 11.8 kW', '  COP ....................... 2.6', 'Operating point A7/W35', '  Heating output ............ 14.1 kW', '  COP ....................... 4.9'].join('\n');
+  expect(brief(headed).filter(([k]) => k === 'temperature')).toEqual([
+    ['temperature', 'cold', 266.15],
+    ['temperature', 'hot', 328.15],
+    ['temperature', 'cold', 280.15],
+    ['temperature', 'hot', 308.15],
+  ]);
+});
