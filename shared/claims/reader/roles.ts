@@ -261,6 +261,8 @@ export function roleFor(text: string, kind: FigureKind, start: number, end: numb
     const [cool, heat] = [nearest(COP_COOLING_RE), nearest(COP_HEATING_RE)];
     if (cool < Infinity && cool <= heat) return 'cooling';
     if (heat < Infinity || HEAT_PUMP_RE.test(text)) return 'heating';
+    // (A cooler's sheet with its COP far below the name: "Frostline thermoelectric cooler module … COP …… 0.35".)
+    if (COOLING_MACHINE_RE.test(text)) return 'cooling';
   }
   return null;
 }

@@ -375,3 +375,12 @@ test("a sheet with a row for each rating point: each point's temperatures where 
     ['temperature', 'hot', 308.15],
   ]);
 });
+
+test("a cooler's sheet with its COP row far below the name: a cooling COP (invented test data)", () => {
+  const sheet = ['TEC1-127 thermoelectric cooler module', 'Performance at hot-side temperature Th = 50 °C (dry nitrogen)', '', 'Operating point shown on p. 2:', '  ΔT (hot side minus cold side) ... 30 K', '  Heat pumped, Qc ................. 12 W', '  Drive ........................... 4.2 A at 8.1 V', '  COP ............................. 0.35'].join('\n');
+  expect(read(sheet).find((f) => f.kind === 'cop')?.role).toBe('cooling');
+  // Carnot cooling COP: Tc = 323.15 − 30 = 293.15 K; 293.15 / 30 = 9.772; 0.35 / 9.772 = 0.0358 (lawful).
+  const run = runClaimChecks(read(sheet), { text: sheet, classes: [] }).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'cop_cooling_ratio')!.si).toBeCloseTo(0.35 / (293.15 / 30), 6);
+});
