@@ -384,3 +384,13 @@ test("a cooler's sheet with its COP row far below the name: a cooling COP (inven
   expect(run?.finding).toBe('consistent');
   expect(run!.outputs.find((o) => o.name === 'cop_cooling_ratio')!.si).toBeCloseTo(0.35 / (293.15 / 30), 6);
 });
+
+test("a runtime row: the test's AC load is what the store gives, over the row's own time (invented test data)", () => {
+  const sheet = ['PS-2000 portable power station — spec list', 'Capacity | 2,048 Wh', 'AC output rating | 2,000 W continuous, pure sine', 'Runtime test (250 W AC load, 25 °C) | 7.1 h to shutdown'].join('\n');
+  const f = read(sheet);
+  expect(f.find((x) => x.text === '250 W')?.role).toBe('out');
+  // 250 W × 7.1 h = 250 × 25 560 s = 6.39 MJ out of 2,048 Wh = 7.3728 MJ (NIST SP 811: 1 Wh = 3600 J): 0.8667.
+  const run = runClaimChecks(f, { text: sheet, classes: [] }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo((250 * 7.1 * 3600) / (2048 * 3600), 6);
+});
