@@ -252,3 +252,34 @@ describe('a lone temperature no check could use', () => {
     expect(roleOf('The heat pump draws from 5 °C brine with a COP of 4.')).not.toBe('aside');
   });
 });
+
+describe('errata and corrections: the figure put right is set aside, the right one takes its side (invented test data)', () => {
+  test('"stated … an average load of 4 kW …. The correct average load was 400 W"', () => {
+    const text = "Erratum. Our test of the HB-30 home battery stated that it supplied an average load of 4 kW throughout its 72-hour run. The correct average load was 400 W. The battery held 30 kWh at the start.";
+    const f = read(text);
+    expect(f.find((x) => x.text === '4 kW')?.role).toBe('aside');
+    expect(f.find((x) => x.text === '400 W')?.role).toBe('out');
+    // 400 W × 72 h = 400 × 259 200 s = 103.68 MJ out of 30 kWh = 108 MJ (NIST SP 811: 1 kWh = 3.6 MJ): 0.96, lawful.
+    const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'first-law');
+    expect(run?.finding).toBe('consistent');
+    expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, (400 * 72 * 3600) / (30 * 3.6e6), 1e-9);
+  });
+
+  test('"That was our error. The preprint reports 299,700 km/s" and "wrong by a factor of a thousand: the study gives 30 mN"', () => {
+    const speeds = read('Corrections. A news brief said the preprint reported protons travelling at 310,000 km/s. That was our error. The preprint reports 299,700 km/s, just under the speed of light.');
+    expect(speeds.filter((x) => x.role !== 'aside').map((x) => x.si)).toEqual([299_700_000]);
+    const thrust = read("Erratum. We wrote that a 10 MW laser aboard the probe would produce 30 N of thrust. That is wrong by a factor of a thousand: the study gives 30 mN.");
+    expect(thrust.filter((x) => x.kind === 'thrust' && x.role !== 'aside').map((x) => x.si)).toEqual([0.03]);
+  });
+
+  test('"An earlier version of this story gave the output as 32 kW" withdraws that figure', () => {
+    const f = read('Updated. The generator delivers 3.2 kW from a 4 kW diesel input. An earlier version of this story gave the output as 32 kW.');
+    expect(f.find((x) => x.text === '32 kW')?.role).toBe('aside');
+    expect(f.find((x) => x.text === '3.2 kW')?.role).toBe('out');
+  });
+
+  test('an error asked about is no correction: "asked whether this was a misprint"', () => {
+    const f = read('The leaflet calls the heat pump "410 % efficient". A councillor asked whether this was a misprint; roughly four units of heat reach the radiators for each unit of electricity.');
+    expect(f.find((x) => x.text === '410 %')?.role).not.toBe('aside');
+  });
+});

@@ -5,7 +5,7 @@
  * the relations are read, so that no check and no derived figure uses them.
  */
 import { HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
-import type { Draft } from './draft';
+import { siOf, type Draft } from './draft';
 import type { PercentReading } from './kinds';
 import { relateFigures } from './relations';
 
@@ -41,6 +41,17 @@ export function relate(text: string, drafts: Draft[]): void {
     if (drafts.some((o) => o !== d && o.kind === d.kind && !o.derived && !supposed.includes(o) && !compared.includes(o))) compared.push(d);
     else if (powerLedger && (d.kind === 'energy' || d.kind === 'duration') && CONDITIONAL_RE.test(clauseAround(text, d))) compared.push(d);
   }
+  // Errata and corrections: the figure put right is superseded, the correct one takes its side where
+  // its own words give none.
+  for (const [wrong, right] of corrections(text, drafts)) {
+    if (!compared.includes(wrong)) compared.push(wrong);
+    if (right.role === null && wrong.role !== null && wrong.role !== 'aside') right.role = wrong.role;
+  }
+  // "An earlier version of this story gave the output as 32 kW": a figure withdrawn.
+  for (const d of drafts) {
+    if (d.role === 'aside' || d.derived || compared.includes(d)) continue;
+    if (EARLIER_VERSION_BEFORE_RE.test(text.slice(windowStart(text, d.start, 0, 160), d.start))) compared.push(d);
+  }
   // "the shaft output … was printed as 105 hp. It should read 150 hp": the figure put in place of a
   // superseded one takes its side where its own words give none.
   for (const d of compared) {
@@ -59,6 +70,44 @@ export function relate(text: string, drafts: Draft[]): void {
     if (at < 0) drafts.push(d);
     else drafts.splice(at, 0, d);
   }
+}
+
+/** A text that corrects itself: an erratum, a correction notice, an update, or its writer owning an error. */
+const ERRATUM_CONTEXT_RE =
+  /(?<!\p{L})(?:errat(?:um|a)|corrections?|clarifications?|updated?|amended|(?:an?|the)[^\S\n]+(?:earlier|previous|original)[^\S\n]+version|(?:our|my)[^\S\n]+(?:error|mistake|typo|misprint)|we[^\S\n]+(?:wrongly|mistakenly|incorrectly|erroneously))(?!\p{L})/iu;
+/** Just before a corrected figure: "The correct average load was", "the correct figure is", "should have read", "corrected to". */
+const CORRECT_BEFORE_RE =
+  /(?<!\p{L})(?:(?:the[^\S\n]+)?correct(?:ed)?(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]*(?:is|was|were|are|reads?|should be|of|:)|should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be)|(?:corrected|revised|amended|changed)(?:[^\S\n]+(?:down|up))?[^\S\n]+to)[^\S\n]*(?:[:"“'‘][^\S\n]*)?(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
+/** Between a wrong figure and the right one: the error owned ("That was our error.", "That is wrong by a factor of a thousand:"). */
+const ERROR_SAID_RE =
+  /(?<!\p{L})(?:(?:was|is|were|are)[^\S\n]+(?:our|my|an?|the)[^\S\n]+(?:error|mistake|typo|misprint)|(?:was|is|were|are)[^\S\n]+(?:wrong|incorrect|in error|mistaken)|wrong[^\S\n]+by[^\S\n]+a[^\S\n]+factor|(?:our|my)[^\S\n]+(?:error|mistake)|wrongly|mistakenly|incorrectly|erroneously|in error)(?!\p{L})/iu;
+/** Before a figure withdrawn: "An earlier version of this story gave the output as". */
+const EARLIER_VERSION_BEFORE_RE =
+  /(?<!\p{L})(?:an?|the)[^\S\n]+(?:earlier|previous|original|first)[^\S\n]+(?:version|edition|draft)(?:[^\S\n]+of[^\S\n]+(?:this|the)[^\S\n]+[\p{L}-]+)?[^\S\n]+(?:gave|said|stated|put|reported|had|listed|quoted|printed|showed|(?:incorrectly|wrongly|mistakenly)[^\S\n]+\p{L}+)[^.;!?\n]{0,80}$/iu;
+
+/**
+ * Pairs of a wrong figure and the figure that puts it right, of the same kind and another value, the
+ * right one after: "stated … an average load of 4 kW …. The correct average load was 400 W" (the words
+ * of a correction just before the right one), or in a text that corrects itself "said … 310,000 km/s.
+ * That was our error. The preprint reports 299,700 km/s" (the error owned between the two).
+ */
+function corrections(text: string, drafts: Draft[]): [Draft, Draft][] {
+  const pairs: [Draft, Draft][] = [];
+  const erratum = ERRATUM_CONTEXT_RE.test(text);
+  for (const right of drafts) {
+    if (right.derived || right.role === 'aside') continue;
+    const wrong = [...drafts].reverse().find((x) => x.end <= right.start && x.kind === right.kind && !x.derived && x.role !== 'aside');
+    if (!wrong || right.start - wrong.end > 400) continue;
+    const a = siOf(wrong);
+    const b = siOf(right);
+    if (a === null || b === null || Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b))) continue;
+    const between = text.slice(wrong.end, right.start);
+    // (An error asked about is none owned: "asked whether this was a misprint".)
+    const owned = ERROR_SAID_RE.exec(between);
+    const asked = owned !== null && /(?<!\p{L})(?:whether|if)(?!\p{L})[^.;!?\n]{0,30}$/iu.test(between.slice(0, owned.index));
+    if (CORRECT_BEFORE_RE.test(text.slice(windowStart(text, right.start, wrong.end, 80), right.start)) || (erratum && owned && !asked)) pairs.push([wrong, right]);
+  }
+  return pairs;
 }
 
 /** A sentence that speaks of the claim's own device (so its figures are not merely a comparison). */
