@@ -283,3 +283,16 @@ describe('errata and corrections: the figure put right is set aside, the right o
     expect(f.find((x) => x.text === '410 %')?.role).not.toBe('aside');
   });
 });
+
+test("a cited work's finding beside the text's own measurement is set aside: 'The original report … had found an output of 57 W' (invented test data)", () => {
+  const text = 'At the operating point of ref. [3], the electrical input was 50.0 W and the heat output 49.1 W, averaged over five runs. The original report, with a calorimeter of another type, had found an output of 57 W at this input.';
+  const f = read(text);
+  expect(f.find((x) => x.text === '57 W')?.role).toBe('aside');
+  expect(f.find((x) => x.text === '50.0 W')?.role).toBe('in');
+  // 49.1 / 50.0 = 0.982: lawful (57 / 50 = 1.14 would have been a false alarm).
+  const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, 49.1 / 50, 1e-9);
+  // (Alone, the cited finding is the claim: no other output is stated.)
+  expect(read('Ref. [3] reported an output of 57 W for an input of 50 W.').find((x) => x.text === '57 W')?.role).toBe('out');
+});

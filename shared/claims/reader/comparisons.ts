@@ -31,7 +31,9 @@ export function relate(text: string, drafts: Draft[]): void {
     // "Prof. L. proposed repeating it at 5 kW", "a reader asked whether it could do 10 km/s instead",
     // "to build a 2 kW version": a figure proposed or asked about, not one measured or claimed.
     const before = text.slice(windowStart(text, d.start, 0, 80), d.start);
-    return PROPOSED_BEFORE_RE.test(before) || ASKED_BEFORE_RE.test(before);
+    // "The original report, with a calorimeter of the isoperibolic type, had found an output of 57 W",
+    // "Ref. [3] reported 2.4 mN": a cited work's finding, beside the text's own measurement.
+    return PROPOSED_BEFORE_RE.test(before) || ASKED_BEFORE_RE.test(before) || CITED_FINDING_BEFORE_RE.test(text.slice(windowStart(text, d.start, 0, 200), d.start));
   });
   // ("The heater takes 140 W; the tube gives off 175 W. If that held for a month, it would have delivered
   // 91 MJ more": an energy or a run supposed over powers stated plainly is the writer's sum, not a figure.)
@@ -72,6 +74,9 @@ export function relate(text: string, drafts: Draft[]): void {
   }
 }
 
+/** Before a cited work's finding: the work named ("the original report", "ref. [3]", "Bergsten et al. (2019)"), then a verb of finding. */
+const CITED_FINDING_BEFORE_RE =
+  /(?:(?<!\p{L})(?:[Tt]he|[Tt]heir|[Ii]ts|[Tt]hat)[^\S\n]+(?:original|earlier|previous|first|prior|cited)[^\S\n]+(?:reports?|papers?|stud(?:y|ies)|publications?|articles?|work|experiments?|measurements?|authors?|team|group)(?!\p{L})|(?<!\p{L})[Rr]ef(?:erence)?s?\.?[^\S\n]*\[?\d+\]?|\[\d+(?:[,–-][^\S\n]*\d+)*\]|(?<!\p{L})\p{Lu}\p{L}+(?:[^\S\n]+(?:and|&)[^\S\n]+\p{Lu}\p{L}+|[^\S\n]+et[^\S\n]+al\.?)[^\S\n]*(?:\(\d{4}\)|\[\d+\]))[^.;!?\n]{0,90}?(?<!\p{L})(?:(?:had|have|has)[^\S\n]+)?(?:found|reported|claimed|gave|measured|observed|obtained|quoted|stated|saw|recorded|reached|achieved)(?!\p{L})[^.;!?\n]{0,60}$/u;
 /** A text that corrects itself: an erratum, a correction notice, an update, or its writer owning an error. */
 const ERRATUM_CONTEXT_RE =
   /(?<!\p{L})(?:errat(?:um|a)|corrections?|clarifications?|updated?|amended|(?:an?|the)[^\S\n]+(?:earlier|previous|original)[^\S\n]+version|(?:our|my)[^\S\n]+(?:error|mistake|typo|misprint)|we[^\S\n]+(?:wrongly|mistakenly|incorrectly|erroneously))(?!\p{L})/iu;
