@@ -449,3 +449,16 @@ test('"Hydrogen feed (lower heating value) | 2.6 kW" is what a fuel cell takes i
   // Run at the end of the range least in conflict with the law: 0.9 / 2.6 = 0.3462 (first law).
   expect(verdicts(text).checks.find((c) => c.check === 'first-law')!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo(0.9 / 2.6, 9);
 });
+
+test("a heat engine's two temperatures, one of them room air: the room is its cold side, not the surroundings (invented test data)", () => {
+  const text = "A kit catalogue says its tabletop Stirling engine turns up to 12 % of the heat from a hot plate into shaft work. The plate runs at about 90 °C and the engine's top fins sit in room air at roughly 20 °C.";
+  const f = extractFigures(text);
+  expect(f.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si])).toEqual([
+    ['hot', 363.15],
+    ['cold', 293.15],
+  ]);
+  // Carnot: 1 − 293.15/363.15 = 0.1928; 0.12 / 0.1928 = 0.6225 (lawful).
+  const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('consistent');
+  expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.12 / (1 - 293.15 / 363.15), 6);
+});

@@ -281,6 +281,7 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
       HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text) || /(?<!\p{L})(?:BTU\w*|heating (?:output|capacity|power)|heat output)(?!\p{L})|(?<![\p{L}])(?:[kKMG]?W|kWh|[kM]?J|watts?|kilowatts?)[^\S\n]+of[^\S\n]+heat(?:ing)?(?!\p{L})/u.test(text) || drafts.some((d) => d.kind === 'cop');
     // (A text of temperatures alone keeps its sides: "The room is at 21 °C.")
     const otherWorking = drafts.some((d) => d.kind !== 'temperature' && d.kind !== 'temperature-difference');
+    const engineEfficiency = drafts.some((d) => d.kind === 'efficiency' && d.role !== 'aside' && !d.derived) && LONE_TEMPERATURE_USED_RE.test(text) && !movesHeat;
     for (const t of otherWorking ? thermal : []) {
       if (t.role === 'aside') continue;
       const sentence = sentenceAround(text, t.start, t.end);
@@ -290,6 +291,10 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
       const before = text.slice(Math.max(0, t.start - 60), t.start);
       if (!PLACE_CONDITION_BEFORE_RE.test(before) && !PLACE_AFTER_RE.test(text.slice(t.end, t.end + 30))) continue;
       if (movesHeat && thermal.filter((u) => u !== t && u.role !== 'aside' && sentenceOf(text, u) !== k).length < 2) continue;
+      // (Nor where a heat engine's efficiency is given and this is one of its two temperatures: "turns 12 %
+      // of the heat from a hot plate into work. The plate runs at about 90 °C and the fins sit in room air
+      // at roughly 20 °C" — the room is its cold side.)
+      if (engineEfficiency && thermal.filter((u) => u !== t && u.role !== 'aside').length === 1) continue;
       t.role = 'aside';
       // (And the other end of a range said with it: "between 5 °C and 35 °C".)
       const next = thermal[thermal.indexOf(t) + 1];
