@@ -68,6 +68,19 @@ function erratumPercent(text: string, start: number, drafts: Draft[]): { kind: F
   return { kind: prev.kind, role: prev.role ?? null, factor: 0.01, unit: '', assumption: 'A corrected figure, read as the kind of the one it replaces.' };
 }
 
+/**
+ * A percentage in a list after another ("coefficients of 118 % and 121 %", "efficiencies of 18 %, 19 % and
+ * 21 %"): the kind, side and scale of the one before it.
+ */
+function listedPercent(text: string, start: number, drafts: Draft[]): ReturnType<typeof erratumPercent> {
+  const prev = drafts[drafts.length - 1];
+  if (!prev || prev.derived || prev.ofInput || prev.upper !== undefined || !/%\s*$/u.test(text.slice(prev.start, prev.end))) return null;
+  if (!/^[^\S\n]*(?:,[^\S\n]*(?:and[^\S\n]+|or[^\S\n]+)?|and[^\S\n]+|or[^\S\n]+)$/u.test(text.slice(prev.end, start))) return null;
+  if (!(prev.kind === 'efficiency' || prev.kind === 'cop' || prev.kind === 'quantum-efficiency')) return null;
+  if (prev.kind === 'efficiency' && !/%$/u.test(prev.quantity)) return null;
+  return prev.kind === 'efficiency' ? { kind: 'efficiency', role: prev.role ?? null, factor: 1, unit: '%' } : { kind: prev.kind, role: prev.role ?? null, factor: 0.01, unit: '' };
+}
+
 /** A bare number an erratum puts in place of the one before it ("printed as 0.30. It should read 3.0"): that one's kind. */
 function erratumBare(text: string, start: number, drafts: Draft[]): { kind: FigureKind; role?: FigureRole; derived?: string; factor?: number } | null {
   if (!SHOULD_READ_BEFORE_RE.test(text.slice(Math.max(0, start - 40), start))) return null;
@@ -287,7 +300,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         assumption = suffix.form === GLUED_CELSIUS ? '"C" read as degrees Celsius.' : suffix.form === GLUED_FAHRENHEIT ? '"F" read as degrees Fahrenheit.' : '"Degrees" read as degrees Celsius.';
       }
     } else if (suffix?.type === 'percent') {
-      const reading = readPercent(text, start, end, sheetRowFloor(text, start, floor, true), t.num) ?? comparedPercent(text, start, end, drafts) ?? erratumPercent(text, start, drafts);
+      const reading = readPercent(text, start, end, sheetRowFloor(text, start, floor, true), t.num) ?? comparedPercent(text, start, end, drafts) ?? erratumPercent(text, start, drafts) ?? listedPercent(text, start, drafts);
       if (reading) {
         kind = reading.kind;
         role = reading.role;

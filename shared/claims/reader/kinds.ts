@@ -29,7 +29,7 @@ const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})
 const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');
 /** "efficiency … 45%": the keyword, then up to 60 characters without digits or a sentence break. */
 // (", measured as electrical output over heat absorbed at the head, was about 27 %": a clause set off by commas between.)
-const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip|AFUE)(?!\p{L})((?:[^,\d.;!?\n]{0,25}?,[^,\d.;!?\n]{3,140}[,:]|[^\S\n]*[—–][^—–\d.;!?\n]{3,100}[—–])?[^\d.;!?\n]{0,60})$/iu;
+const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip|AFUE|(?<!(?:temperature|drag|friction|loss|absorption|transmission|reflection|discharge|transfer|expansion|correlation|variation|Seebeck|Peltier)[^\S\n]+)coefficients?(?![^\S\n]+of[^\S\n]+(?:performance|friction|drag|variation|thermal|determination|restitution|expansion|correlation)))(?!\p{L})((?:[^,\d.;!?\n]{0,25}?,[^,\d.;!?\n]{3,140}[,:]|[^\S\n]*[—–][^—–\d.;!?\n]{3,100}[—–])?[^\d.;!?\n]{0,60})$/iu;
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
 const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)|round[- ]?trip(?:[^\S\n]+efficiency)?|AFUE)(?!\p{L})/iuy;

@@ -1097,3 +1097,23 @@ test('"For every kWh it takes from the socket, it puts 3.2 kWh of heat into the 
   expect(run?.finding).toBe('consistent');
   expect(run!.outputs.find((o) => o.name === 'cop_heating_ratio')!.si).toBeCloseTo(3.2 / (328.15 / 40), 6);
 });
+
+describe("a manuscript's results paragraph (invented test data)", () => {
+  test("'the supply battery delivered 2.5 A while the load took 4.1 A at 9.0 V': the voltage is the load's, not the other current's", () => {
+    const f = extractFigures('During the main run the supply battery delivered 2.5 A while the load took 4.1 A at 9.0 V, as the meters showed.');
+    // 4.1 A × 9.0 V = 36.9 W; no power is made of 2.5 A × 9.0 V.
+    expect(f.filter((x) => x.kind === 'power').map((x) => x.si)).toEqual([36.9]);
+  });
+
+  test('"a coefficient of 123 %", "coefficients of 118 % and 121 %": ratios of output to input, each of a list read alike', () => {
+    const f = extractFigures('That is 30 W in and 36.9 W out, a coefficient of 123 %. Two shorter runs gave coefficients of 118 % and 121 %.');
+    expect(f.filter((x) => x.kind === 'efficiency').map((x) => x.si)).toEqual([1.23, 1.18, 1.21]);
+    expect(extractFigures('Two runs gave efficiencies of 18 %, 19 % and 21 %.').map((x) => [x.kind, x.si])).toEqual([
+      ['efficiency', 0.18],
+      ['efficiency', 0.19],
+      ['efficiency', 0.21],
+    ]);
+    // (Not a temperature coefficient.)
+    expect(extractFigures("The module's temperature coefficient of -0.35 % per kelvin.").filter((x) => x.kind === 'efficiency')).toEqual([]);
+  });
+});

@@ -278,7 +278,9 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // 17.2 A goes into the batteries at 12.6 V": 17.2 A is at 12.6 V).
     const taken = new Set(currents.filter((c) => c !== cur).map((c) => saidWith(c, voltsNear(c))));
     const free = candidates.filter((d) => !taken.has(d));
-    const volt = saidWith(cur, candidates) ?? (free.length ? free : candidates).sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0];
+    // (Not a voltage said with another current: "the supply battery delivered 2.5 A while the load took
+    // 4.1 A at 9.0 V" — 9.0 V is the load's, and the 2.5 A has no voltage of its own here.)
+    const volt = saidWith(cur, candidates) ?? free.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0];
     if (!volt) continue;
     const i = siOf(cur);
     const v = siOf(volt);
