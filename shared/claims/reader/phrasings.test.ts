@@ -1117,3 +1117,11 @@ describe("a manuscript's results paragraph (invented test data)", () => {
     expect(extractFigures("The module's temperature coefficient of -0.35 % per kelvin.").filter((x) => x.kind === 'efficiency')).toEqual([]);
   });
 });
+
+test("'The energy meter recorded 12.0 kWh', where the methods put the meter at the output terminals: the output (invented test data)", () => {
+  const methods = 'The external load was a bank of lamps, with power measured by a DC energy meter at the output terminals.';
+  const f = extractFigures(`${methods} The generator delivered 250 W to the lamps for the 48-hour run. The energy meter recorded 12.0 kWh over the run.`);
+  expect(f.find((x) => x.text === '12.0 kWh')?.role).toBe('out');
+  // (A meter on the supply reads the input.)
+  expect(extractFigures('Input was logged by an energy meter on the supply side. The meter recorded 3.1 kWh.').find((x) => x.text === '3.1 kWh')?.role).toBe('in');
+});

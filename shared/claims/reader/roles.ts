@@ -147,6 +147,9 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     const lead = text.slice(Math.max(floor, start - 40), start);
     // "the calorimeter constant to within 0.3 W", "a resolution of 5 mW": how well it was measured, not a flow.
     if (PRECISION_LEAD_RE.test(lead)) return 'aside';
+    // "The energy meter recorded 12.0 kWh", where the methods put the one meter at the output ("power
+    // measured by a DC energy meter at the output terminals"): what that meter read is the output.
+    if (/(?<!\p{L})meters?[^\S\n]+(?:read|reads|recorded|records|showed|shows|measured|logged|registered)[^\S\n]+(?:(?:about|some|roughly|only|just|a total of)[^\S\n]+)?$/iu.test(lead) && METER_AT_OUTPUT_RE.test(text) && !METER_AT_INPUT_RE.test(text)) return 'out';
     // "drawing far less than its rated 5 W", "the claimed 2 kW": a figure said again, as the claim's, by someone
     // weighing it (its first mention carries its side).
     if (RESTATED_LEAD_RE.test(lead) && sameFigureEarlier(text, start, end)) return 'aside';
@@ -206,6 +209,11 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   });
   return best;
 }
+
+/** A meter placed at the output in a text's methods ("measured by a DC energy meter at the output terminals", "a wattmeter on the load"). */
+const METER_AT_OUTPUT_RE = /(?<!\p{L})(?:(?:energy|power|watt-?hour|kWh)[^\S\n]*)?(?:wattmeters?|meters?)[^.;!?\n]{0,40}?(?<!\p{L})(?:at|on|across|in)[^\S\n]+the[^\S\n]+(?:output|load)(?:[^\S\n]+(?:terminals|side|circuit|cables?))?(?!\p{L})/iu;
+/** A meter placed at the input ("a meter on the supply", "wattmeter at the input"). */
+const METER_AT_INPUT_RE = /(?<!\p{L})(?:wattmeters?|meters?)[^.;!?\n]{0,40}?(?<!\p{L})(?:at|on|across|in)[^\S\n]+the[^\S\n]+(?:input|supply|mains|source)(?:[^\S\n]+(?:terminals|side|circuit|cables?))?(?!\p{L})/iu;
 
 /** A load as the subject that receives a figure: "the load bank receives", "the heater gets". */
 const LOAD_RECEIVES_RE =
