@@ -1125,3 +1125,13 @@ test("'The energy meter recorded 12.0 kWh', where the methods put the meter at t
   // (A meter on the supply reads the input.)
   expect(extractFigures('Input was logged by an energy meter on the supply side. The meter recorded 3.1 kWh.').find((x) => x.text === '3.1 kWh')?.role).toBe('in');
 });
+
+test("'released 5.1 W more heat than the alumina dummy at the same input': an excess over a control run (invented test data)", () => {
+  const text = 'With 32.0 W supplied to the heater, the active reactor released 5.1 W more heat than the alumina dummy at the same input.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.text === '5.1 W')?.role).toBe('excess');
+  // Output = 32.0 + 5.1 = 37.1 W; 37.1 / 32.0 = 1.159 (more out than in: breaks the first law as claimed).
+  const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('breaks');
+  expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, 37.1 / 32, 1e-9);
+});
