@@ -296,3 +296,23 @@ test("a cited work's finding beside the text's own measurement is set aside: 'Th
   // (Alone, the cited finding is the claim: no other output is stated.)
   expect(read('Ref. [3] reported an output of 57 W for an input of 50 W.').find((x) => x.text === '57 W')?.role).toBe('out');
 });
+
+describe("a manuscript's calibrations and control runs beside its runs (invented test data)", () => {
+  test("'calibrated beforehand with a 25.0 W reference heater' and 'A control with the switch held open drew 1.9 W' are set aside", () => {
+    const text = 'It is powered from a bench supply at about 48 W. The oil bath was calibrated beforehand with a 25.0 W reference heater. In the runs the load dissipated between 62 and 75 W. A control with the switch held permanently open drew 1.9 W.';
+    const f = read(text);
+    expect(f.find((x) => x.text === '25.0 W')?.role).toBe('aside');
+    expect(f.find((x) => x.text === '1.9 W')?.role).toBe('aside');
+    expect(f.find((x) => x.text === '48 W')?.role).toBe('in');
+    // (Not "the controller drew 8.5 A": a controller is no control run.)
+    expect(read('At full assist the controller drew 350 W from the battery, and the roller measured 300 W at the wheel.').find((x) => x.text === '350 W')?.role).toBe('in');
+  });
+
+  test("'calibrated with an electrostatic comb delivering 1.0 mN' and 'replaced by a dummy load absorbing 1.2 kW'; 'for forward powers between 0.6 and 1.4 kW' is the drive's input", () => {
+    const text = 'The force scale was calibrated with an electrostatic comb delivering 1.0 mN. Across 14 runs the thrust was 2.5–5 mN, for forward microwave powers between 0.6 and 1.4 kW. With the cavity replaced by a water-cooled dummy load absorbing 1.2 kW, no deflection was seen.';
+    const f = read(text);
+    expect(f.find((x) => x.text === '1.0 mN')?.role).toBe('aside');
+    expect(f.find((x) => x.text === '1.2 kW')?.role).toBe('aside');
+    expect(f.find((x) => x.text.startsWith('0.6'))?.role).toBe('in');
+  });
+});

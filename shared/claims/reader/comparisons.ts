@@ -33,7 +33,11 @@ export function relate(text: string, drafts: Draft[]): void {
     const before = text.slice(windowStart(text, d.start, 0, 80), d.start);
     // "The original report, with a calorimeter of the isoperibolic type, had found an output of 57 W",
     // "Ref. [3] reported 2.4 mN": a cited work's finding, beside the text's own measurement.
-    return PROPOSED_BEFORE_RE.test(before) || ASKED_BEFORE_RE.test(before) || CITED_FINDING_BEFORE_RE.test(text.slice(windowStart(text, d.start, 0, 200), d.start));
+    // "the bath was calibrated beforehand with a 25.0 W reference heater", "A control with the switch held
+    // open drew 1.9 W", "With the cavity replaced by a water-cooled dummy load absorbing 1.2 kW": a
+    // calibration's or a control run's figure, beside the runs' own.
+    const sentenceBefore = text.slice(windowStart(text, d.start, 0, 200), d.start);
+    return PROPOSED_BEFORE_RE.test(before) || ASKED_BEFORE_RE.test(before) || CITED_FINDING_BEFORE_RE.test(sentenceBefore) || CALIBRATION_BEFORE_RE.test(before) || CONTROL_RUN_BEFORE_RE.test(sentenceBefore);
   });
   // ("The heater takes 140 W; the tube gives off 175 W. If that held for a month, it would have delivered
   // 91 MJ more": an energy or a run supposed over powers stated plainly is the writer's sum, not a figure.)
@@ -77,6 +81,12 @@ export function relate(text: string, drafts: Draft[]): void {
 /** Before a cited work's finding: the work named ("the original report", "ref. [3]", "Bergsten et al. (2019)"), then a verb of finding. */
 const CITED_FINDING_BEFORE_RE =
   /(?:(?<!\p{L})(?:[Tt]he|[Tt]heir|[Ii]ts|[Tt]hat)[^\S\n]+(?:original|earlier|previous|first|prior|cited)[^\S\n]+(?:reports?|papers?|stud(?:y|ies)|publications?|articles?|work|experiments?|measurements?|authors?|team|group)(?!\p{L})|(?<!\p{L})[Rr]ef(?:erence)?s?\.?[^\S\n]*\[?\d+\]?|\[\d+(?:[,–-][^\S\n]*\d+)*\]|(?<!\p{L})\p{Lu}\p{L}+(?:[^\S\n]+(?:and|&)[^\S\n]+\p{Lu}\p{L}+|[^\S\n]+et[^\S\n]+al\.?)[^\S\n]*(?:\(\d{4}\)|\[\d+\]))[^.;!?\n]{0,90}?(?<!\p{L})(?:(?:had|have|has)[^\S\n]+)?(?:found|reported|claimed|gave|measured|observed|obtained|quoted|stated|saw|recorded|reached|achieved)(?!\p{L})[^.;!?\n]{0,60}$/u;
+/** Just before a calibration's figure: "calibrated beforehand with a", "calibrated with an electrostatic comb delivering". */
+const CALIBRATION_BEFORE_RE =
+  /(?<!\p{L})(?:calibrat(?:ed|ing|ion)|cross-checked|checked|verified)(?:[^\S\n]+[\p{L}-]+){0,5}?[^\S\n]+(?:with|against|using|by)[^\S\n]+(?:an?|the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,4}?(?:(?:delivering|giving|producing|dissipating|of|rated at|at)[^\S\n]+)?(?:(?:about|some|exactly|nominally)[^\S\n]+)?$/iu;
+/** Before a control run's figure: "A control with the switch held open drew", "replaced by a water-cooled dummy load absorbing". */
+const CONTROL_RUN_BEFORE_RE =
+  /(?<!\p{L})(?:(?:an?|the|in[^\S\n]+(?:an?|the))[^\S\n]+(?:control|blank|null|sham)(?!\p{L})(?:[^\S\n]+(?:run|test|experiment|measurement|series|cell)(?!\p{L}))?(?![^\S\n]+(?:electronics|units?|boards?|circuits?|box(?:es)?|systems?|panels?|valves?|loops?|modules?|software|logic|room|stick|signals?|lines?)(?!\p{L}))|(?:replaced|substituted|swapped)[^\S\n]+(?:by|with|for)[^\S\n]+(?:an?|the)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}?(?:dummy|blank|inactive|inert|control|sham)(?!\p{L}))[^.;!?\n]{0,90}$/iu;
 /** A text that corrects itself: an erratum, a correction notice, an update, or its writer owning an error. */
 const ERRATUM_CONTEXT_RE =
   /(?<!\p{L})(?:errat(?:um|a)|corrections?|clarifications?|updated?|amended|(?:an?|the)[^\S\n]+(?:earlier|previous|original)[^\S\n]+version|(?:our|my)[^\S\n]+(?:error|mistake|typo|misprint)|we[^\S\n]+(?:wrongly|mistakenly|incorrectly|erroneously))(?!\p{L})/iu;
