@@ -394,3 +394,15 @@ test("a runtime row: the test's AC load is what the store gives, over the row's 
   expect(run?.finding).toBe('consistent');
   expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo((250 * 7.1 * 3600) / (2048 * 3600), 6);
 });
+
+test("a flattened table's 'lift 35 °C' is a temperature difference (a heat pump's temperature lift), not an absolute temperature (invented test data)", () => {
+  const text = 'The unit supplied an underfloor circuit at 40 °C. Point A: lift 35 °C, COP 5.2. Point B: lift 30 °C, COP 5.9.';
+  // 40 °C = 313.15 K; 313.15 − 35 = 278.15 K.
+  expect(brief(text).filter(([k]) => k === 'temperature' || k === 'temperature-difference').slice(0, 3)).toEqual([
+    ['temperature', 'hot', 313.15],
+    ['temperature-difference', null, 35],
+    ['temperature', 'cold', 278.15],
+  ]);
+  // (A crane's lift is no temperature: "can lift 35 kg".)
+  expect(brief('The crane can lift 35 kg.').map(([k]) => k)).toEqual(['mass']);
+});
