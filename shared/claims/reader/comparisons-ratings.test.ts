@@ -316,3 +316,16 @@ describe("a manuscript's calibrations and control runs beside its runs (invented
     expect(f.find((x) => x.text.startsWith('0.6'))?.role).toBe('in');
   });
 });
+
+test("an exercise's figure said to be out of reach ('why no accelerator, however powerful, could ever make the label read 3.1 × 10⁸ m/s') is set aside beside the stated one (invented test data)", () => {
+  const text = "A museum label says the tube's electron gun fired electrons at 2.9 × 10⁸ m/s. (c) Explain why no accelerator, however powerful, could ever make the label read 3.1 × 10⁸ m/s.";
+  const f = read(text);
+  expect(f.map((x) => [x.si, x.role])).toEqual([
+    [2.9e8, null],
+    [3.1e8, 'aside'],
+  ]);
+  // c = 299 792 458 m/s (SI Brochure, 9th ed., defining constant): 2.9e8 / c = 0.9673, below c (lawful).
+  const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'light-speed');
+  expect(run?.finding).toBe('consistent');
+  expectRelClose(run!.outputs[0].si, 2.9e8 / 299_792_458, 1e-9);
+});

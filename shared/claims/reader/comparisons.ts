@@ -37,7 +37,9 @@ export function relate(text: string, drafts: Draft[]): void {
     // open drew 1.9 W", "With the cavity replaced by a water-cooled dummy load absorbing 1.2 kW": a
     // calibration's or a control run's figure, beside the runs' own.
     const sentenceBefore = text.slice(windowStart(text, d.start, 0, 200), d.start);
-    return PROPOSED_BEFORE_RE.test(before) || ASKED_BEFORE_RE.test(before) || CITED_FINDING_BEFORE_RE.test(sentenceBefore) || CALIBRATION_BEFORE_RE.test(before) || CONTROL_RUN_BEFORE_RE.test(sentenceBefore);
+    // ("Explain why no accelerator, however powerful, could ever make the label read 3.1 × 10⁸ m/s": a figure
+    // said to be out of reach.)
+    return PROPOSED_BEFORE_RE.test(before) || ASKED_BEFORE_RE.test(before) || CITED_FINDING_BEFORE_RE.test(sentenceBefore) || CALIBRATION_BEFORE_RE.test(before) || CONTROL_RUN_BEFORE_RE.test(sentenceBefore) || OUT_OF_REACH_BEFORE_RE.test(sentenceBefore);
   });
   // ("The heater takes 140 W; the tube gives off 175 W. If that held for a month, it would have delivered
   // 91 MJ more": an energy or a run supposed over powers stated plainly is the writer's sum, not a figure.)
@@ -87,6 +89,9 @@ const CALIBRATION_BEFORE_RE =
 /** Before a control run's figure: "A control with the switch held open drew", "replaced by a water-cooled dummy load absorbing". */
 const CONTROL_RUN_BEFORE_RE =
   /(?<!\p{L})(?:(?:an?|the|in[^\S\n]+(?:an?|the))[^\S\n]+(?:control|blank|null|sham)(?!\p{L})(?:[^\S\n]+(?:run|test|experiment|measurement|series|cell)(?!\p{L}))?(?![^\S\n]+(?:electronics|units?|boards?|circuits?|box(?:es)?|systems?|panels?|valves?|loops?|modules?|software|logic|room|stick|signals?|lines?)(?!\p{L}))|(?:replaced|substituted|swapped)[^\S\n]+(?:by|with|for)[^\S\n]+(?:an?|the)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}?(?:dummy|blank|inactive|inert|control|sham)(?!\p{L}))[^.;!?\n]{0,90}$/iu;
+/** Before a figure said to be out of reach: "no accelerator, however powerful, could ever make it read", "can never reach". */
+const OUT_OF_REACH_BEFORE_RE =
+  /(?:(?<!\p{L})(?:no|nothing)(?:[^\S\n]+[\p{L}-]+){0,3}?(?:[^\S\n]*,[^,;.!?\n]{1,40},)?[^\S\n]+(?:can|could|will|would)(?:[^\S\n]+ever)?|(?<!\p{L})(?:can|could|will)[^\S\n]+never)(?!\p{L})[^.;!?\n]{0,50}?(?<!\p{L})(?:reach|read|exceed|achieve|attain|hit|travel(?:[^\S\n]+at)?|go|surpass|beat|top)(?:[^\S\n]+(?:as[^\S\n]+(?:high|fast|far)[^\S\n]+as|beyond|past|above|over))?[^\S\n]*$/iu;
 /** A text that corrects itself: an erratum, a correction notice, an update, or its writer owning an error. */
 const ERRATUM_CONTEXT_RE =
   /(?<!\p{L})(?:errat(?:um|a)|corrections?|clarifications?|updated?|amended|(?:an?|the)[^\S\n]+(?:earlier|previous|original)[^\S\n]+version|(?:our|my)[^\S\n]+(?:error|mistake|typo|misprint)|we[^\S\n]+(?:wrongly|mistakenly|incorrectly|erroneously))(?!\p{L})/iu;
