@@ -1135,3 +1135,8 @@ test("'released 5.1 W more heat than the alumina dummy at the same input': an ex
   expect(run?.finding).toBe('breaks');
   expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, 37.1 / 32, 1e-9);
 });
+
+test("'Turning the handle briskly puts about 6 W into the little generator inside': a person's effort is the machine's input; 'the rotor puts 1.2 kW into the generator' stays the rotor's output (invented test data)", () => {
+  expect(extractFigures('Turning the handle briskly puts about 6 W into the little generator inside.')[0].role).toBe('in');
+  expect(extractFigures("The motor's winding takes 1.5 A at 36 V; after that the rotor puts 1.2 kW into the generator on its shaft.").find((x) => x.text === '1.2 kW')?.role).toBe('out');
+});

@@ -145,6 +145,9 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   // words after it.
   if (roles.groups === POWER_ENERGY_ROLES) {
     const lead = text.slice(Math.max(floor, start - 40), start);
+    // "Turning the handle briskly puts about 6 W into the little generator inside": what a person's effort
+    // puts into the machine is its input (not "the rotor puts 1.2 kW into the generator on its shaft").
+    if (MUSCLE_LEAD_RE.test(text.slice(Math.max(floor, start - 70), start)) && /^[^\S\n]+(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?into[^\S\n]+(?:the|its|a|an)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:generators?|dynamos?|alternators?|machines?|devices?|units?|mechanisms?|flywheels?|springs?)(?!\p{L})/iu.test(text.slice(end, end + 60))) return 'in';
     // "the calorimeter constant to within 0.3 W", "a resolution of 5 mW": how well it was measured, not a flow.
     if (PRECISION_LEAD_RE.test(lead)) return 'aside';
     // "The energy meter recorded 12.0 kWh", where the methods put the one meter at the output ("power
@@ -209,6 +212,9 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   });
   return best;
 }
+
+/** A person's effort as the subject: "Turning the handle briskly puts about", "pedalling at a steady pace gives". */
+const MUSCLE_LEAD_RE = /(?<!\p{L})(?:turning|cranking|winding|pedall?ing|shaking|pumping|pushing|pulling)[^\S\n]+(?:the[^\S\n]+)?(?:handle|crank|pedals?|lever|key|spring)?[^.;!?\n]{0,30}?(?<!\p{L})(?:puts?|gives?|delivers?|feeds?|sends?)[^\S\n]+(?:(?:about|some|roughly|nearly|around)[^\S\n]+)?$/iu;
 
 /** A meter placed at the output in a text's methods ("measured by a DC energy meter at the output terminals", "a wattmeter on the load"). */
 const METER_AT_OUTPUT_RE = /(?<!\p{L})(?:(?:energy|power|watt-?hour|kWh)[^\S\n]*)?(?:wattmeters?|meters?)[^.;!?\n]{0,40}?(?<!\p{L})(?:at|on|across|in)[^\S\n]+the[^\S\n]+(?:output|load)(?:[^\S\n]+(?:terminals|side|circuit|cables?))?(?!\p{L})/iu;
