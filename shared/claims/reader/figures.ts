@@ -81,6 +81,12 @@ function listedPercent(text: string, start: number, drafts: Draft[]): ReturnType
   return prev.kind === 'efficiency' ? { kind: 'efficiency', role: prev.role ?? null, factor: 1, unit: '%' } : { kind: prev.kind, role: prev.role ?? null, factor: 0.01, unit: '' };
 }
 
+/** Between two figures of a list: a comma or "and", perhaps after the first one's condition ("at 540 rpm (Run A), "). */
+const LISTED_AFTER_RE = /^(?:[^\S\n]+(?:at|@|in|for|on|with)[^\S\n]+[^,;.()\n]{1,25}?)?(?:[^\S\n]*\([^()\n]{1,20}\))?[^\S\n]*(?:,[^\S\n]*(?:and[^\S\n]+)?|and[^\S\n]+)$/u;
+
+/** After a figure of such a list: its condition, then the list's next separator or the clause's end (not "28 kWh of it ended up in …"). */
+const LIST_GOES_ON_RE = /^(?:[^\S\n]+(?:at|@|in|for|on|with)[^\S\n]+[^,;.()\n]{1,25}?)?(?:[^\S\n]*\([^()\n]{1,20}\))?[^\S\n]*(?:[,;.)]|and(?!\p{L})|$)/u;
+
 /** A bare number an erratum puts in place of the one before it ("printed as 0.30. It should read 3.0"): that one's kind. */
 function erratumBare(text: string, start: number, drafts: Draft[]): { kind: FigureKind; role?: FigureRole; derived?: string; factor?: number } | null {
   if (!SHOULD_READ_BEFORE_RE.test(text.slice(Math.max(0, start - 40), start))) return null;
@@ -406,6 +412,12 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       // figure's words, whatever figure of a test condition the label holds.
       const rowFloor = sheetRowFloor(text, start, floor, false);
       role = roleFor(text, kind, roleContextStart(text, start, rowFloor), end, rowFloor);
+    }
+    // A list of runs after a figure with its side ("The dynamometer absorbed 102 W at 540 rpm (Run A), 99 W at
+    // 610 rpm (Run B) and 95 W at 480 rpm (Run C)", "daily means of 117 W, 121 W and 122 W"): the same side.
+    if (role === null && (kind === 'power' || kind === 'energy')) {
+      const prev = drafts[drafts.length - 1];
+      if (prev && prev.kind === kind && !prev.derived && (prev.role === 'in' || prev.role === 'out') && LISTED_AFTER_RE.test(text.slice(prev.end, start)) && LIST_GOES_ON_RE.test(text.slice(end, end + 60))) role = prev.role;
     }
     // "10 kWe", "3 MWe": electrical output.
     if (role === null && kind === 'power' && suffix?.type === 'unit' && /[kMG]?We$/.test(text.slice(t.numEnd, end).trim())) role = 'out';

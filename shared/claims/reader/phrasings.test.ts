@@ -1140,3 +1140,16 @@ test("'Turning the handle briskly puts about 6 W into the little generator insid
   expect(extractFigures('Turning the handle briskly puts about 6 W into the little generator inside.')[0].role).toBe('in');
   expect(extractFigures("The motor's winding takes 1.5 A at 36 V; after that the rotor puts 1.2 kW into the generator on its shaft.").find((x) => x.text === '1.2 kW')?.role).toBe('out');
 });
+
+test("a results list: 'The dynamometer absorbed 102 W at 540 rpm (Run A), 99 W at 610 rpm (Run B) and 95 W …' are all the output; 'the heat supplied to the engine was 250 W' its input (invented test data)", () => {
+  const text = 'After subtraction of the bath loss, the heat supplied to the engine was 250 W. The dynamometer absorbed 102 W at 540 rpm (Run A), 99 W at 610 rpm (Run B) and 95 W at 480 rpm (Run C).';
+  expect(extractFigures(text).map((x) => [x.si, x.role])).toEqual([
+    [250, 'in'],
+    [102, 'out'],
+    [99, 'out'],
+    [95, 'out'],
+  ]);
+  expect(extractFigures('The daily means of shaft power were 117 W, 121 W and 122 W.').map((x) => x.role)).toEqual(['out', 'out', 'out']);
+  // (Not a figure with words of its own after it: "fuel holding 90 kWh, and 28 kWh of it ended up in the battery".)
+  expect(extractFigures('The engine burned fuel holding 90 kWh, and 28 kWh of it ended up in the traction battery.').map((x) => x.role)).toEqual(['in', 'out']);
+});

@@ -223,7 +223,7 @@ const METER_AT_INPUT_RE = /(?<!\p{L})(?:wattmeters?|meters?)[^.;!?\n]{0,40}?(?<!
 
 /** A load as the subject that receives a figure: "the load bank receives", "the heater gets". */
 const LOAD_RECEIVES_RE =
-  /(?<!\p{L})(?:loads?|load[^\S\n]+banks?|dummy[^\S\n]+loads?|resistors?|heaters?|heating[^\S\n]+elements?|lamps?|bulbs?|consumers?)[^\S\n]+(?:receives?|received|receiving|gets|got|sees|saw|absorbs?|absorbed|dissipates?|dissipated)[^\S\n]+(?:(?:about|around|roughly|some|only|just|nearly|a steady|an average of|on average)[^\S\n]+)?$/iu;
+  /(?<!\p{L})(?:loads?|load[^\S\n]+banks?|dummy[^\S\n]+loads?|resistors?|heaters?|heating[^\S\n]+elements?|lamps?|bulbs?|consumers?|dynamometers?|dynos?|brakes?|brake[- ]bands?)[^\S\n]+(?:receives?|received|receiving|gets|got|sees|saw|absorbs?|absorbed|dissipates?|dissipated)[^\S\n]+(?:(?:about|around|roughly|some|only|just|nearly|a steady|an average of|on average)[^\S\n]+)?$/iu;
 
 /** Just before a role word: a word that says it is absent ("no", "without", "zero"). */
 const NEGATED_LEAD_RE = /(?<!\p{L})(?:no|without|zero|never|nor)[^\S\n]+(?:(?:any|external|outside|other|electrical|electric)[^\S\n]+){0,2}$/iu;

@@ -46,6 +46,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:received|receives|receiving|intercepted|intercepts) (?:[\\w-]+ ){0,2}?(?:solar |sun |incident )?(?:energy|radiation|irradiation|sunlight|insolation|light)(?: [\\w-]+){0,4}? (?:totalling|totaling|amounting to|of)',
       // A worked line: "in = 2 kW × 2400 s = 4.8 MJ".
       '(?<![\\w-])in ?=',
+      // "the heat supplied to the engine was 250 W": what is supplied to the machine is its input.
+      '(?:heat|power|energy|electricity|fuel|current|work) (?:supplied|fed|given) (?:in)?to (?:the|its|a|an) (?:[\\w-]+ ){0,2}?(?:engines?|motors?|devices?|machines?|heaters?|converters?|modules?|cells?|reactors?|thrusters?|coils?|generators?|prototypes?|rigs?)(?: (?:was|is|were|of|came to|amounted to|totall?ed))?',
     ],
     after: [
       'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 
