@@ -363,6 +363,11 @@ describe('figures of one finding said far apart', () => {
     const typed = extractFigures(apart).map((f) => ({ ...f, start: null, end: null }));
     expect(runClaimChecks(typed, { text: apart }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
   });
+  it("in a paper's sections (methods, then results), the apparatus and the findings are one study's", () => {
+    // Invented manuscript: 200 W in (methods) < 350 W out (results) breaks the first law.
+    const text = `2 Methods\n\nThe bench unit draws 200 W from the mains.\n\n${filler}\n\n3 Results\n\nIt puts out 350 W.`;
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
 });
 
 describe('a reading the text itself contradicts (issue 11: no false alarm)', () => {

@@ -65,12 +65,22 @@ function sentenceOf(check: CheckName, run: CheckRun): string {
 const APART_CHARS = 500;
 
 /** The figures' own words, quoted and joined ("“2 kW” and “41 MJ”"), when they are said apart; else null. */
+/** A paper's section heading on a line of its own: "2 Experimental setup", "3. Results", "II. EXPERIMENTAL SETUP", "Methods". */
+const PAPER_SECTION_RE =
+  /^[^\S\n]*(?:(?:\d+(?:\.\d+)*\.?|[IVX]+\.)[^\S\n]+)?(?:abstract|introduction|methods?|materials and methods|experimental(?:[^\S\n]+(?:setup|set-up|details|arrangement|procedure))?|apparatus(?:[^\S\n]+and[^\S\n]+methods?)?|test[^\S\n]+(?:arrangement|set-?up|procedure)|(?:[\p{L}-]+[^\S\n]+)?results(?:[^\S\n]+and[^\S\n]+discussion)?|discussion|conclusions?)[^\S\n]*$/gimu;
+function paperSections(text: string): number {
+  return new Set([...text.matchAll(PAPER_SECTION_RE)].map((m) => m[0].trim().toLowerCase().replace(/^[\dIVX.]+\s+/iu, ''))).size;
+}
+
 function saidApart(text: string, uses: Figure[]): string | null {
   const placed = uses.filter((f) => f.start !== null && f.end !== null && !f.derived);
   if (placed.length < 2 || !text) return null;
   const lo = Math.min(...placed.map((f) => f.start!));
   const hi = Math.max(...placed.map((f) => f.end!));
   if (hi - lo <= APART_CHARS || !/\n[^\S\n]*\n/.test(text.slice(lo, hi))) return null;
+  // (A paper's sections — methods, then results — report one study: its apparatus and its findings are
+  // far apart by the paper's own order.)
+  if (paperSections(text) >= 2) return null;
   const words = placed.map((f) => `“${f.text}”`);
   return words.length === 2 ? words.join(' and ') : `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`;
 }
