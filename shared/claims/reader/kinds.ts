@@ -128,7 +128,7 @@ const ENGINE_NAMED_RE = /(?<!\p{L})(?:engines?|turbines?|Stirling|power (?:plant
 
 /** What a percentage is, by its context. */
 /** In a sheet's label: a bracketed test point and leader dots. */
-const LABEL_FILLER_RE = /\([^()\n]{0,20}\)|\.{2,}|…+|@[^\S\n]*[-−+]?\d[\d.,]*[^\S\n]*[^\s\d|]{0,5}|(?<![\p{L}\p{N}])[ABW][-−]?\d{1,2}\/W\d{2}(?![\p{L}\p{N}])/gu;
+const LABEL_FILLER_RE = /\([^()\n]{0,20}\)|\.{2,}|…+|@[^\S\n]*[-−+]?\d[\d.,]*[^\S\n]*[^\s\d|]{0,5}|(?<![\p{L}\p{N}])[ABW][-−]?\d{1,2}\/W\d{2}(?![\p{L}\p{N}])|(?<!\p{L})(?:[Rr]uns?|Table|Fig\.?|Figure|[Ss]ample|[Tt]est|[Mm]odule|[Pp]oint|[Dd]ay|[Ss]eries|Eq\.?)[^\S\n]*[A-Z]?\d+[a-z]?(?![\p{L}\p{N}.,])/gu;
 /** A compressor or a refrigerant named (a machine that moves heat). */
 const COMPRESSOR_OR_REFRIGERANT_RE = /(?<!\p{L})(?:compressors?|refrigerants?|R-?(?:32|290|410A|407C|134a|744|1234\w+|454B|513A))(?!\p{L})/iu;
 /** A heating output or capacity named. */

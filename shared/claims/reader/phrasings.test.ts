@@ -1153,3 +1153,8 @@ test("a results list: 'The dynamometer absorbed 102 W at 540 rpm (Run A), 99 W a
   // (Not a figure with words of its own after it: "fuel holding 90 kWh, and 28 kWh of it ended up in the battery".)
   expect(extractFigures('The engine burned fuel holding 90 kWh, and 28 kWh of it ended up in the traction battery.').map((x) => x.role)).toEqual(['in', 'out']);
 });
+
+test("a run's or a table's label between a word and its figure ('The conversion efficiency of Run 2 is therefore 1.4 %', 'the COP of Run 3 was 4.1') leaves the word to the figure (invented test data)", () => {
+  expect(extractFigures('The conversion efficiency of Run 2 is therefore 1.4 %.').map((x) => [x.kind, Math.round(x.si * 1e6) / 1e6])).toEqual([['efficiency', 0.014]]);
+  expect(extractFigures('The heat pump COP of Run 3 was 4.1.').map((x) => [x.kind, x.si])).toEqual([['cop', 4.1]]);
+});
