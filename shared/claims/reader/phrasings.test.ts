@@ -1158,3 +1158,8 @@ test("a run's or a table's label between a word and its figure ('The conversion 
   expect(extractFigures('The conversion efficiency of Run 2 is therefore 1.4 %.').map((x) => [x.kind, Math.round(x.si * 1e6) / 1e6])).toEqual([['efficiency', 0.014]]);
   expect(extractFigures('The heat pump COP of Run 3 was 4.1.').map((x) => [x.kind, x.si])).toEqual([['cop', 4.1]]);
 });
+
+test("'it delivers a steady 250 W with nothing supplied to it': a nil input (invented test data)", () => {
+  const f = extractFigures('The exhibitor states that the float wheel delivers a steady 250 W with nothing supplied to it after the first filling of the tank.');
+  expect(f.find((x) => x.role === 'in')).toMatchObject({ kind: 'power', si: 0 });
+});

@@ -107,7 +107,7 @@ export const SELF_RUNNING_WORDS = [
   'no (?:external )?input(?! (?:power |energy )?(?:figures?|numbers?|values?|data|measurements?|readings?))', '(?<!(?:input|output|supply|source|the|its|of|rated|electrical|shaft)[^\\S\\n]+)powers? itself', '(?:drawing|draws|consuming|consumes|using|uses|taking|takes) nothing', 'with nothing (?:going )?in',
   'no connection to (?:the )?(?:grid|mains|supply|power)', 'not connected to (?:the )?(?:grid|mains|any (?:supply|source))', 'zero input', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
   'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
-  'with nothing (?:plugged in|connected|attached)(?: to drive it)?', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',
+  'with nothing (?:plugged in|connected|attached)(?: to drive it)?', '(?:with )?nothing (?:else )?(?:supplied|fed|put in|added|given) to it', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',
   '(?:with )?nothing (?:driving|powering|feeding|turning|running) it', '(?:turns|spins|runs|keeps going|keeps turning|goes|turning|spinning) (?:on )?by itself',
   '(?:battery|supply|mains|power|source) (?:is |was |being )?(?:disconnected|taken out|removed|unplugged)', '(?:turning|running|spinning|going) on its own', '(?:battery|supply) (?:taken out|removed)',
   'nothing connected to it', 'with nothing connected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
