@@ -1163,3 +1163,13 @@ test("'it delivers a steady 250 W with nothing supplied to it': a nil input (inv
   const f = extractFigures('The exhibitor states that the float wheel delivers a steady 250 W with nothing supplied to it after the first filling of the tank.');
   expect(f.find((x) => x.role === 'in')).toMatchObject({ kind: 'power', si: 0 });
 });
+
+test("'An immersion heater rated at 2 kW is switched on for 90 minutes … the water has gained 9.5 MJ': the rating is the input (invented test data)", () => {
+  const text = 'An immersion heater rated at 2 kW is switched on for 90 minutes to heat a tank of water. Afterwards the water has gained 9.5 MJ of thermal energy.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.text === '2 kW')?.role).toBe('in');
+  // 2 kW × 5400 s = 10.8 MJ in; 9.5 / 10.8 = 0.8796 (lawful).
+  const run = runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, 9.5e6 / 10.8e6, 1e-9);
+});
