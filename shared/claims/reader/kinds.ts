@@ -197,7 +197,9 @@ export function readPercent(text: string, start: number, end: number, floor: num
   // (A sheet that names a compressor or a refrigerant and a heating output describes a heat pump, whatever its name.)
   // ("no compressor, no outdoor unit": said to be absent.)
   const named = sentence.replace(/(?<!\p{L})(?:no|without(?:[^\S\n]+an?)?|not[^\S\n]+an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:compressors?|refrigerants?)(?!\p{L})/giu, ' ');
-  const heatPump = HEAT_PUMP_RE.test(sentence) || (COMPRESSOR_OR_REFRIGERANT_RE.test(named) && HEATING_OUTPUT_RE.test(sentence) && !BURNER_RE.test(sentence));
+  // (Heat pumps spoken of in general, or set against the device, name no heat pump here: "Heat pumps are
+  // routinely described as more than 100 % efficient, and we see no reason why a solid-state emitter …".)
+  const heatPump = HEAT_PUMP_RE.test(sentence.replace(GENERIC_HEAT_PUMPS_RE, ' ')) || (COMPRESSOR_OR_REFRIGERANT_RE.test(named) && HEATING_OUTPUT_RE.test(sentence) && !BURNER_RE.test(sentence));
   if (!engineHere && !burnerOnly && heatPump && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
     if (!(value <= 100)) return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump said to be more than 100 % efficient: read as a heating COP (heat delivered over work put in).' };
     return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump\'s percentage read as a heating COP (heat delivered over work put in).' };
@@ -214,6 +216,10 @@ export function readPercent(text: string, start: number, end: number, floor: num
   }
   return { kind: 'efficiency', factor: 1, unit: '%' };
 }
+
+/** A sentence on heat pumps in general ("Heat pumps are routinely described as …", "Like heat pumps, …") or one set against them ("unlike a heat pump"). */
+const GENERIC_HEAT_PUMPS_RE =
+  /(?:^|(?<=[.!?]["”’)]*\s+))(?:(?:like|as with)[^\S\n]+)?(?:(?:modern|most|all|many|ordinary|conventional|domestic)[^\S\n]+)?heat[- ]pumps[^\S\n]+(?:are|can|have|routinely|often|commonly|typically|usually|normally|may|do|reach|achieve|get)(?!\p{L})[^.!?]*[.!?]?|(?<!\p{L})unlike[^\S\n]+(?:a[^\S\n]+|the[^\S\n]+)?heat[- ]pumps?(?!\p{L})/giu;
 
 /** Words of a machine that moves heat: "heating COP", "COP in cooling", "in heating mode". */
 const MOVES_HEAT_RE = /(?<!\p{L})(heating|cooling)[^\S\n]+(?:COP|C\.O\.P\.|coefficient of performance)(?!\p{L})|(?<!\p{L})(?:COP|coefficient of performance)[^\S\n]+(?:for|in|when|of)[^\S\n]+(heating|cooling)(?!\p{L})|(?<!\p{L})(heating|cooling)[^\S\n]+mode(?!\p{L})/iu;

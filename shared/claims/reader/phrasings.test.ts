@@ -1173,3 +1173,12 @@ test("'An immersion heater rated at 2 kW is switched on for 90 minutes … the w
   expect(run?.finding).toBe('consistent');
   expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, 9.5e6 / 10.8e6, 1e-9);
 });
+
+test("heat pumps spoken of in general name no heat pump here: a panel heater's '250 % efficient' stays an efficiency; 'kW of heat leaving the box' is the output (invented test data)", () => {
+  const text = 'The heater examined is a ceramic infrared panel that its maker calls "250 % efficient". The calorimeter reported 3.0 kW of heat leaving the box for 1.20 kW in. Heat pumps are routinely described as more than 100 % efficient, and we see no reason why a solid-state emitter should be held to a stricter standard.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.text.startsWith('250'))).toMatchObject({ kind: 'efficiency', si: 2.5 });
+  expect(f.find((x) => x.text === '3.0 kW')?.role).toBe('out');
+  // (A heat pump named as the device still reads its percentage as a COP.)
+  expect(extractFigures('Our air-source heat pump is "400 % efficient".')[0]).toMatchObject({ kind: 'cop', si: 4 });
+});
