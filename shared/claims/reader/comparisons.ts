@@ -49,6 +49,12 @@ export function relate(text: string, drafts: Draft[]): void {
     if (drafts.some((o) => o !== d && o.kind === d.kind && !o.derived && !supposed.includes(o) && !compared.includes(o))) compared.push(d);
     else if (powerLedger && (d.kind === 'energy' || d.kind === 'duration') && CONDITIONAL_RE.test(clauseAround(text, d))) compared.push(d);
   }
+  // A unit conversion said in passing ("One BTU per hour is about 0.293 W, so …"): no figure of the device.
+  for (const m of text.matchAll(UNIT_CONVERSION_RE)) {
+    const from = m.index!;
+    const to = from + m[0].length;
+    for (const d of drafts) if (!d.derived && d.start >= from && d.end <= to && !compared.includes(d)) compared.push(d);
+  }
   // Errata and corrections: the figure put right is superseded, the correct one takes its side where
   // its own words give none.
   for (const [wrong, right] of corrections(text, drafts)) {
@@ -92,6 +98,9 @@ const CONTROL_RUN_BEFORE_RE =
 /** Before a figure said to be out of reach: "no accelerator, however powerful, could ever make it read", "can never reach". */
 const OUT_OF_REACH_BEFORE_RE =
   /(?:(?<!\p{L})(?:no|nothing)(?:[^\S\n]+[\p{L}-]+){0,3}?(?:[^\S\n]*,[^,;.!?\n]{1,40},)?[^\S\n]+(?:can|could|will|would)(?:[^\S\n]+ever)?|(?<!\p{L})(?:can|could|will)[^\S\n]+never)(?!\p{L})[^.;!?\n]{0,50}?(?<!\p{L})(?:reach|read|exceed|achieve|attain|hit|travel(?:[^\S\n]+at)?|go|surpass|beat|top)(?:[^\S\n]+(?:as[^\S\n]+(?:high|fast|far)[^\S\n]+as|beyond|past|above|over))?[^\S\n]*$/iu;
+/** A unit conversion: "One BTU per hour is about 0.293 W", "1 kWh equals 3.6 MJ", "a horsepower is roughly 746 W". */
+const UNIT_CONVERSION_RE =
+  /(?<![\p{L}\p{N}])(?:[Oo]ne|1|[Aa](?:[^\S\n]+single)?)[^\S\n]+(?:BTUs?|British thermal units?|kWh|kilowatt-hours?|calories?|kcal|horsepower|hp|PS|therms?|watt-hours?|Wh|foot-pounds?|pounds?-force|lbf|electronvolts?|eV)(?:[^\S\n]+(?:per|an?|each)[^\S\n]+(?:hour|second|minute))?[^\S\n]+(?:is|equals|=|≈|is equal to|corresponds to|comes to)[^\S\n]+(?:(?:about|roughly|around|approximately|some|close to)[^\S\n]+)?[\d.,]+(?:[^\S\n]*[×x][^\S\n]*10[⁰-⁹⁻]+)?[^\S\n]*[\p{L}/·°]+/gu;
 /** A text that corrects itself: an erratum, a correction notice, an update, or its writer owning an error. */
 const ERRATUM_CONTEXT_RE =
   /(?<!\p{L})(?:errat(?:um|a)|corrections?|clarifications?|updated?|amended|(?:an?|the)[^\S\n]+(?:earlier|previous|original)[^\S\n]+version|(?:our|my)[^\S\n]+(?:error|mistake|typo|misprint)|we[^\S\n]+(?:wrongly|mistakenly|incorrectly|erroneously))(?!\p{L})/iu;

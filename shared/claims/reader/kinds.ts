@@ -23,7 +23,7 @@ const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?
 const BTU_PER_H_IN_W = 0.29307107;
 const COP_WORDS_BEFORE_RE = new RegExp(`(?<!\\p{L})coefficients?[\\s-]+of[\\s-]+performance(?:[^\\S\\n]*\\(COP\\))?${COP_OWNER}${ASIDE}${CONNECT}$`, 'iu');
 /** A worked expression between a symbol and its result: "η = 3.1/172 = 0.018". */
-const EXPRESSION = '(?:[^\\S\\n]*[=≈][^\\S\\n]*[\\d.,]+(?:[^\\S\\n]*[/×*÷][^\\S\\n]*[\\d.,]+)+)?';
+const EXPRESSION = '(?:[^\\S\\n]*(?:[=≈]|(?:is|was)(?:[^\\S\\n]+(?:therefore|then|thus|so|hence))?)[^\\S\\n]*[\\d.,]+(?:[^\\S\\n]*[/×*÷][^\\S\\n]*[\\d.,]+)+[^\\S\\n]*,?)?';
 const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|η(?:_?(?:th|thermal|c|Carnot))?|eta(?:_?(?:th|thermal))?)(?!\\p{L})${ASIDE}${EXPRESSION}${CONNECT}$`, 'iu');
 const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})([^\\d.;!?\\n]{0,60})$`, 'iu');
 const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');

@@ -1182,3 +1182,15 @@ test("heat pumps spoken of in general name no heat pump here: a panel heater's '
   // (A heat pump named as the device still reads its percentage as a COP.)
   expect(extractFigures('Our air-source heat pump is "400 % efficient".')[0]).toMatchObject({ kind: 'cop', si: 4 });
 });
+
+test("a worked answer: 'The efficiency is therefore 78/96, about 0.81' reads the result; 'One BTU per hour is about 0.293 W' is a unit conversion, no figure of the device (invented test data)", () => {
+  expect(extractFigures('The efficiency is therefore 78/96, about 0.81, and the rest leaves as heat.').map((x) => [x.kind, x.si])).toEqual([['efficiency', 0.81]]);
+  const f = extractFigures('The label says 95,000 BTU/h input and the brochure 25.6 kW of heat into the house. One BTU per hour is about 0.293 W, so the input is roughly 27.8 kW.');
+  // NIST SP 811 B.8: 1 BTU_IT/h = 0.293 071 1 W; 95 000 BTU/h = 27 841.75 W.
+  expect(f.filter((x) => x.kind === 'power' && x.role !== 'aside' && x.role !== null).map((x) => [x.role, Math.round(x.si)])).toEqual([
+    ['in', 27842],
+    ['out', 25600],
+    ['in', 27800],
+  ]);
+  expect(f.filter((x) => x.kind === 'duration' || x.kind === 'energy').every((x) => x.role === 'aside')).toBe(true);
+});
