@@ -406,3 +406,10 @@ test("a flattened table's 'lift 35 °C' is a temperature difference (a heat pump
   // (A crane's lift is no temperature: "can lift 35 kg".)
   expect(brief('The crane can lift 35 kg.').map(([k]) => k)).toEqual(['mass']);
 });
+
+test("a spacecraft's radiator ('Radiator area: 0.8 m²', 'Unit mass incl. radiator') names no heat pump: the array's 61 % stays an efficiency (invented test data)", () => {
+  const sheet = ['PR-2 photon recoil thruster — spec list', 'Electrical input power: 2.0 kW', 'Wall-plug efficiency of array: 61 %', 'Radiator area: 0.8 m²', 'Unit mass incl. radiator: 17 kg'].join('\n');
+  expect(brief(sheet).find(([, , si]) => si === 0.61)).toEqual(['efficiency', null, 0.61]);
+  // (A house's radiators still speak of space heating: "Our heat pump feeds the radiators … '350 % efficient'".)
+  expect(brief('It feeds the radiators at 45 °C and is "350 % efficient".').find(([k]) => k === 'cop')).toEqual(['cop', 'heating', 3.5]);
+});
