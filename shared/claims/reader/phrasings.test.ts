@@ -1194,3 +1194,17 @@ test("a worked answer: 'The efficiency is therefore 78/96, about 0.81' reads the
   ]);
   expect(f.filter((x) => x.kind === 'duration' || x.kind === 'energy').every((x) => x.role === 'aside')).toBe(true);
 });
+
+test("a flattened table of runs near the stated output ('(Run 1: 2.85 kW; Run 2: 3.15 kW; Run 3: 3.00 kW)') holds the output's runs (invented test data)", () => {
+  const f = extractFigures('Electrical input was steady at 1.20 kW. The calorimeter reported 3.0 kW of heat leaving the box (Run 1: 2.85 kW; Run 2: 3.15 kW; Run 3: 3.00 kW).');
+  expect(f.map((x) => [x.si, x.role])).toEqual([
+    [1200, 'in'],
+    [3000, 'out'],
+    [2850, 'out'],
+    [3150, 'out'],
+    [3000, 'out'],
+  ]);
+  // (Values near both an input and an output are left unread: "in 100 W, out 95 W; run 1, 98 W; run 2, 97 W".)
+  const both = extractFigures('It took in 100 W and put out 95 W (run 1, 98 W; run 2, 97 W).');
+  expect(both.filter((x) => x.si === 98 || x.si === 97).map((x) => x.role)).toEqual([null, null]);
+});

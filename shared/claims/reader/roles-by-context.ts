@@ -82,6 +82,9 @@ const NEGATED_SOURCE_RE =
 const SUPPLY_RATING_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:(?!(?:from|the|a|an|of|by|via|through|at|to|into|on|its|their|our)(?![\p{L}\d-]))[\p{L}\d-]+[^\S\n]+){0,2}?(?:(?:power|bench|lab|laboratory|DC)[^\S\n]+)?(?:supply|supplies|PSUs?|adapters?|chargers?|power bricks?)(?!\p{L})/iu;
 
 /** Roles the words leave open, read from the other figures (see the file's comment). */
+/** Between two values of a flattened table of runs: "; Run 2: ", ", run 3, ", "; hour 24, ", ", and ". */
+const RUN_TABLE_GAP_RE = /^[^\S\n]*[;,][^\S\n]*(?:(?:and[^\S\n]+)?(?:[Rr]un|[Dd]ay|[Hh]our|[Tt]est|[Ss]ample|[Pp]oint|[Uu]nit|[Ww]eek|[Mm]onth|[Tt]rial)[^\S\n]*[\w.-]{1,4}[^\S\n]*[:,]?[^\S\n]*|and[^\S\n]+)?$/u;
+
 export function rolesByContext(text: string, drafts: Draft[]): void {
   // "covers 4.2 light years in 30 days": a speed, distance over time (IAU 2012 B2 astronomical unit,
   // IAU 2015 B2 parsec, the light-year of the Julian year).
@@ -237,6 +240,22 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   // (the run that drains it, or the charge that fills it, is said apart: see below).
   for (const d of drafts) {
     if (d.kind === 'energy' && !d.derived && d.role === 'out' && STORE_HOLDS_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) && !ENDS_UP_HOLDING_RE.test(text.slice(Math.max(0, d.start - 40), d.start))) d.role = null;
+  }
+  // A flattened table of runs ("(Run 1: 2.85 kW; Run 2: 3.15 kW; Run 3: 3.00 kW)", "hour 1, 251 W; hour 24,
+  // 249 W"): its values, each near one stated figure with a side and near no figure of another side, are
+  // that figure's runs.
+  {
+    const flows = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && !d.derived);
+    const inList = (d: Draft): boolean =>
+      flows.some((o) => o !== d && o.kind === d.kind && o.role === null && Math.abs(o.start - d.start) < 60 && RUN_TABLE_GAP_RE.test(text.slice(Math.min(o.end, d.end), Math.max(o.start, d.start))));
+    const members = flows.filter((d) => d.role === null && inList(d));
+    for (const d of members) {
+      const v = siOf(d);
+      if (v === null || v <= 0) continue;
+      const near = flows.filter((o) => o.kind === d.kind && (o.role === 'in' || o.role === 'out') && Math.abs((siOf(o) ?? Infinity) - v) <= 0.25 * v);
+      const sides = new Set(near.map((o) => o.role));
+      if (sides.size === 1) d.role = near[0].role;
+    }
   }
   // One side named, one figure left: the other side.
   const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
