@@ -342,6 +342,11 @@ export function tokenize(text: string): NumberToken[] {
     const gap = /^[^\S\n]+(?:(?:full|whole|single)[^\S\n]+)?/u.exec(text.slice(m.index! + m[0].length))![0];
     push(m.index!, m.index! + m[0].length + gap.length - 1, '1', true);
   }
+  // "a minute of cranking", "an hour of charging": one of the unit, spent doing something.
+  for (const m of text.matchAll(/(?<!\p{L})(?<!(?:half|quarter|third)[^\S\n]+)an?(?=[^\S\n]+(?:hour|day|week|fortnight|month|year|minute)[^\S\n]+of[^\S\n]+\p{L}+ing(?!\p{L}))/giu)) {
+    if (tokens.some((t) => t.start <= m.index! && m.index! < t.end)) continue;
+    push(m.index!, m.index! + m[0].length, '1', true);
+  }
   for (const w of wordNumbers(text)) {
     if (tokens.some((t) => t.start < w.end && w.start < t.end)) continue;
     push(w.start, w.end, String(w.value), true);

@@ -327,6 +327,17 @@ describe('more ways claims are written (issue 11)', () => {
       ['in', 50000],
       ['out', 2000 * 300],
     ]);
+    // A hand crank fills the store first, the radio then drains it: 6 W × 60 s = 360 J (the crank's power
+    // times its minute is what the store holds), 0.15 W × 1800 s = 270 J (the draw over half an hour).
+    const crank =
+      'Turning the handle briskly puts about 6 W into the little generator inside. The radio playing at moderate volume uses about 0.15 W. ' +
+      'So a minute of cranking stores roughly 360 J in the battery, and half an hour of listening uses 270 J.';
+    expect(read(crank).filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
+      ['in', 360],
+      ['out', 270],
+    ]);
+    const run = runClaimChecks(extractFigures(crank), { text: crank }).checks.find((c) => c.check === 'first-law');
+    expect(run?.finding).not.toBe('breaks');
   });
 
   test('a percentage of what it draws, and in/out said of a voltage with its current', () => {

@@ -219,7 +219,12 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   // station's "100 W solar panel" in a paragraph of its own neither feeds this load nor is its energy.)
   const ownParagraphs = new Set([...stores.slice(0, 1), ...draws.slice(0, 1)].map((d) => paragraphAround(text, d.start, d.end)));
   const ofStore = (d: Draft) => ownParagraphs.has(paragraphAround(text, d.start, d.end));
-  const others = drafts.filter((d) => energyLike(d) && d !== stores[0] && d !== draws[0] && ofStore(d));
+  // (Nor the power that filled the store beforehand, its product with a stated time the store's energy:
+  // "a minute of cranking puts about 6 W in … so a minute of cranking stores roughly 360 J".)
+  const storeHolds = stores.length === 1 ? (siOf(stores[0]) ?? NaN) : NaN;
+  const chargedStore = (d: Draft) =>
+    d.kind === 'power' && d.role === 'in' && d !== draws[0] && runs.some((t) => Math.abs((siOf(d) ?? NaN) * t - storeHolds) <= 0.05 * storeHolds);
+  const others = drafts.filter((d) => energyLike(d) && d !== stores[0] && d !== draws[0] && ofStore(d) && !chargedStore(d));
   // (Or the draw over the run said as an energy: "6 W … over two weeks the station uses a little over 2 kWh".)
   if (stores.length === 1 && draws.length === 1 && others.every((d) => d.derived || (d.role === 'out' && d.kind === 'energy') || drawOverRun(d)) && drafts.some((d) => d.kind === 'duration')) {
     for (const d of others) if (drawOverRun(d)) d.role = 'out';
