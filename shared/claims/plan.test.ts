@@ -717,6 +717,25 @@ describe('propellant-free drives described the way letters and posters describe 
     // In a jar where the lift vanished, nothing is claimed in vacuum.
     expect(photon('We put the lifter into a vacuum bell jar pumped down hard: the lift vanished. In air it gives 45 mN per kW by ion wind, with nothing coming out of it.')).toBeUndefined();
   });
+  it('a lifter said to keep its lift with the air pumped out, or not to need air, or run at 10⁻⁵ mbar', () => {
+    // 12 mN against 30 W / c: 0.012 × c / 30 = 119 917 (F ≤ P/c).
+    const pumpedOut = 'Ion-wind lifters hover in air. The makers say that in a vacuum chamber their lifter gave 12 mN of thrust from 30 W. "The air was pumped out and the lift remained: it is a true space drive."';
+    expectFinding(photon(pumpedOut), 'breaks', 'ratio', (0.012 * C) / 30, 0);
+    const noAir = 'Lifters rise in air by ion wind, most say. Ours does not need air at all: in a bell jar it drew 180 W and gave 0.2 N, close to what it gives in open air.';
+    expect(photon(noAir)?.finding).toBe('breaks');
+    const lowPressure = "Asymmetric capacitor 'lifters' are usually explained by ion wind. In a chamber pumped to 10⁻⁵ mbar we recorded 4 mN at 1 kW, with no ablation of the electrodes and no reaction mass expelled.";
+    expect(photon(lowPressure)?.finding).toBe('breaks');
+    // The same words, the lift gone in the chamber: nothing is claimed in vacuum.
+    expect(photon("Asymmetric capacitor 'lifters' are explained by ion wind: in a chamber pumped to 10⁻⁵ mbar the 4 mN at 1 kW vanished.")?.finding).not.toBe('breaks');
+  });
+  it('an analogy or a use proposed for the drive names no propellant of its own', () => {
+    const rowing = 'The device gives 0.4 N of thrust from 250 W without expelling any propellant. "It\'s like rowing a boat where the oar gets heavier on the stroke," he said.';
+    expectFinding(photon(rowing), 'breaks', 'ratio', (0.4 * C) / 250, 0);
+    const uses = 'The brochure claimed 1.2 N per kilowatt and proposed the drive for road vehicles, boats and spacecraft, which would need no propellant at all.';
+    expect(photon(uses)?.finding).toBe('breaks');
+    // A boat's own propeller is still a propellant word where the text says no more than that.
+    expect(photon('Our boat thruster gives 0.4 N of thrust from 250 W, pushing on the water.')?.finding).not.toBe('breaks');
+  });
 });
 
 describe('labels of a nil input that claim none (issue 11, invented test data)', () => {

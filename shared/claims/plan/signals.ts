@@ -51,14 +51,14 @@ export interface Signals {
 
 /** "works just as well in hard vacuum", "no air needed": a claim that the device needs no air. */
 const VACUUM_CLAIM_RE =
-  /(?<!\p{L})(?:no air (?:is )?(?:needed|required)|(?:thrust|lift|force|push|effect)(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]+(?:persists?|remains?|continues?|stays?)?[^\S\n]*(?:in|under)[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+|full[^\S\n]+)?vacuum(?![^\S\n]+chambers?)|persists?[^\S\n]+in[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+)?vacuum|(?<!(?:not|n't|n’t|never|cannot|nor)[^\S\n]+)(?:works?|working|operates?|operating|functions?|functioning)(?:[^\S\n]+(?!not|never)[\p{L}-]+){0,3}?[^\S\n]+(?:in|under)[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+|deep[^\S\n]+|full[^\S\n]+)?vacuum)(?!\p{L})/iu;
+  /(?<!\p{L})(?:no air (?:is )?(?:needed|required)|(?:does not|doesn't|doesn’t|do not|don't|don’t|did not|didn't|didn’t) need (?:any )?air|(?:thrust|lift|force|push|effect)(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]+(?:persists?|remains?|continues?|stays?)?[^\S\n]*(?:in|under)[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+|full[^\S\n]+)?vacuum(?![^\S\n]+chambers?)|persists?[^\S\n]+in[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+)?vacuum|(?<!(?:not|n't|n’t|never|cannot|nor)[^\S\n]+)(?:works?|working|operates?|operating|functions?|functioning)(?:[^\S\n]+(?!not|never)[\p{L}-]+){0,3}?[^\S\n]+(?:in|under)[^\S\n]+(?:a[^\S\n]+|hard[^\S\n]+|high[^\S\n]+|deep[^\S\n]+|full[^\S\n]+)?vacuum)(?!\p{L})/iu;
 /** "inside a bell jar pumped down to a high vacuum": the device was run in vacuum (said of a lift or thrust measured there). */
 const RUN_IN_VACUUM_RE =
-  /(?<!\p{L})(?:(?:pumped(?:[^\S\n]+down)?|evacuated|held|kept)[^\S\n]+to[^\S\n]+(?:a[^\S\n]+)?(?:high|hard|deep|full)[^\S\n]+vacuum|(?:ran|run|tested|operated|measured)[^\S\n]+(?:it[^\S\n]+|them[^\S\n]+)?(?:in|inside)[^\S\n]+(?:a[^\S\n]+|the[^\S\n]+)?(?:hard[^\S\n]+|high[^\S\n]+)?vacuum(?:[^\S\n]+chamber)?|(?:put|placed|set|hung|mounted|ran|run|tested|operated|measured)[^\S\n]+[^.;!?\n]{0,80}?(?:into|inside|in)[^\S\n]+(?:a|the)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?vacuum[^\S\n]+(?:bell[^\S\n]+jar|chamber|vessel|tank)[^.;!?\n]{0,40}?pumped[^\S\n]+(?:down[^\S\n]+)?(?:hard|fully|to[^\S\n]+(?:a[^\S\n]+)?(?:high|hard|deep|good)))(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:air|gas)[^\S\n]+(?:was|had[^\S\n]+been|has[^\S\n]+been|is)[^\S\n]+(?:pumped|evacuated|sucked)[^\S\n]+(?:out|away)|(?:pumped(?:[^\S\n]+down)?|evacuated|held|kept)[^\S\n]+to[^\S\n]+(?:a[^\S\n]+)?(?:high|hard|deep|full)[^\S\n]+vacuum|(?:ran|run|tested|operated|measured)[^\S\n]+(?:it[^\S\n]+|them[^\S\n]+)?(?:in|inside)[^\S\n]+(?:a[^\S\n]+|the[^\S\n]+)?(?:hard[^\S\n]+|high[^\S\n]+)?vacuum(?:[^\S\n]+chamber)?|(?:put|placed|set|hung|mounted|ran|run|tested|operated|measured)[^\S\n]+[^.;!?\n]{0,80}?(?:into|inside|in)[^\S\n]+(?:a|the)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?vacuum[^\S\n]+(?:bell[^\S\n]+jar|chamber|vessel|tank)[^.;!?\n]{0,40}?pumped[^\S\n]+(?:down[^\S\n]+)?(?:hard|fully|to[^\S\n]+(?:a[^\S\n]+)?(?:high|hard|deep|good)))(?!\p{L})/iu;
 /** A result that says nothing was left in vacuum ("no lift", "the thrust vanished"): then vacuum is not claimed. */
 const NOTHING_IN_VACUUM_RE = /(?<!\p{L})(?:no (?:measurable )?(?:lift|thrust|force)|nothing (?:happened|was (?:measured|seen|detected|recorded|left)|moved|registered|showed|remained)|vanish\w*|disappear\w*|ceased|stopped|fell to zero|dropped to zero|did not (?:lift|rise|move))(?!\p{L})/iu;
 /** "a chamber pumped to 2 × 10⁻⁵ mbar": run in vacuum, said as a pressure. */
-const PUMPED_TO_PRESSURE_RE = /(?<!\p{L})(?:pumped|evacuated)(?:[^\S\n]+down)?[^\S\n]+to[^\S\n]+(?:about[^\S\n]+|below[^\S\n]+)?[\d.,]+(?:[^\S\n]*[×x][^\S\n]*10[⁻\-−]?[⁰¹²³⁴⁵⁶⁷⁸⁹\d]+|e-\d+)?[^\S\n]*(?:mbar|millibar|Pa|torr)(?!\p{L})/iu;
+const PUMPED_TO_PRESSURE_RE = /(?<!\p{L})(?:pumped|evacuated)(?:[^\S\n]+down)?[^\S\n]+to[^\S\n]+(?:about[^\S\n]+|below[^\S\n]+)?(?:10[⁻\-−][⁰¹²³⁴⁵⁶⁷⁸⁹\d]+|[\d.,]+(?:[^\S\n]*[×x][^\S\n]*10[⁻\-−]?[⁰¹²³⁴⁵⁶⁷⁸⁹\d]+|e-\d+)?)[^\S\n]*(?:mbar|millibar|Pa|torr)(?!\p{L})/iu;
 const vacuumClaimed = (text: string): boolean =>
   VACUUM_CLAIM_RE.test(text) || ((RUN_IN_VACUUM_RE.test(text) || PUMPED_TO_PRESSURE_RE.test(text)) && !NOTHING_IN_VACUUM_RE.test(text));
 
@@ -76,14 +76,16 @@ function lightAsRocket(text: string): boolean {
 const NEGATED_PROPELLANT_RE = /(?<!\p{L})(?:neither|nor)[^\S\n]+(?:any[^\S\n]+)?(?:propellant|reaction mass|exhaust|gas|matter)(?!\p{L})/iu;
 const NEGATED_PROPELLANT_ALL_RE = new RegExp(NEGATED_PROPELLANT_RE.source, 'giu');
 /** Devices that push on air (and so cannot work in vacuum). */
-const AIR_PUSHER_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?|electrohydrodynamic|EHD|ionocraft|[\p{L}-]*lifters?)(?!\p{L})/giu;
+const AIR_PUSHER_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?|electrohydrodynamic|EHD|ionocraft|[\p{L}-]*lifters?|in (?:the )?(?:open|room|ambient|free|still|ordinary) air)(?!\p{L})/giu;
+/** A machine that pushes air (not a place it works in). */
+const AIR_PUSHER_ONE_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?|electrohydrodynamic|EHD|ionocraft|[\p{L}-]*lifters?)(?!\p{L})/iu;
 
 /** A plain statement that nothing is thrown out ("with no propellant", "needs no propellant at all"). */
 const EXPLICIT_NO_PROPELLANT_RE =
-  /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected|comes out|(?:is )?thrown out)|without (?:throwing|expelling|ejecting|blowing) (?:anything|anything at all|any mass)(?: out)?|throws? nothing (?:out|away|overboard)|(?:does|do|did) not (?:need|use|require|carry|expel) (?:any )?propellant|(?:needing |needs |requires |requiring |uses |using |with )?no working fluid|with nothing leaving(?: it)?|(?:no air|nothing) to push (?:on|against)|nothing leaving (?:it|the (?:device|craft|capacitor|box|drive)))(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected|comes out|(?:is )?thrown out)|without (?:throwing|expelling|ejecting|blowing) (?:anything|anything at all|any mass|any propellant|any reaction mass)(?: out)?|throws? nothing (?:out|away|overboard)|(?:does|do|did) not (?:need|use|require|carry|expel) (?:any )?propellant|(?:needing |needs |requires |requiring |uses |using |with )?no working fluid|with nothing leaving(?: it)?|(?:no air|nothing) to push (?:on|against)|nothing leaving (?:it|the (?:device|craft|capacitor|box|drive)))(?!\p{L})/iu;
 /** A propulsion word said not to be there ("no tether", "without a fan"), or a mass inside the device pushed on ("on a brass reaction mass"). */
 const NEGATED_WORD_ALL_RE =
-  /(?<!\p{L})(?:(?:no|without(?: an?)?|never|nor)[^\S\n]+(?:any[^\S\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?|water[- ]?jets?|paddles?|screws?)|(?:on|against|between|onto)[^\S\n]+(?:a|an|the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?reaction mass(?:es)?)(?!\p{L})/giu;
+  /(?<!\p{L})(?:(?:no|without(?: an?)?|never|nor)[^\S\n]+(?:any[^\S\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?|water[- ]?jets?|paddles?|screws?|ablation|ablative loss)|(?:on|against|between|onto)[^\S\n]+(?:a|an|the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?reaction mass(?:es)?)(?!\p{L})/giu;
 /** A propulsor said not to be there. */
 const PROPULSOR_DENIED_RE = /(?<!\p{L})(?:no|without(?: an?)?|nor)[^\S\n]+(?:any[^\S\n]+)?(?:propellers?|water[- ]?jets?|paddles?|screws?|rotors?|fans?)(?!\p{L})/iu;
 /** Craft whose word stands for their propulsor. */
@@ -92,7 +94,7 @@ const CRAFT_ALL_RE = /(?<!\p{L})(?:(?:survey|hobby|model|small|RC|R\/C|radio[- ]
 const OWN_VOICE_RE = /(?<!\p{L})(?:our|ours|we|us|my|mine)(?!\p{L})/iu;
 /** A sentence that compares, asks, or moves on to another subject: its propulsion words are not the claim's. */
 const ASIDE_SENTENCE_RE =
-  /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|versus|vs(?:\.|(?![-\d]))|unlike|rather than|instead of|replaces?|replacing|will replace)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month|lecture|lesson|class|chapter|episode|issue|talk)|also on the agenda)|(?<!\p{L})(?:(?:must|should|need to|needs to|to|first) (?:exclude|rule out)|alternative explanations?|candidate explanations?|artefacts?|artifacts?)(?!\p{L})|^[\s"“'‘>*•-]*(?:(?:most|all|ordinary|conventional|chemical|electric|ion|plasma|Hall|today's|existing|other)[\s-]+)*(?:rockets|engines|thrusters|drives|spacecraft|propulsion(?:[^\S\n]+systems?)?|satellites)[^\S\n]+(?:are|is|have|has|need|needs|must|carry|carries|use|uses|burn|work|get|throw|depend|depends|rel(?:y|ies)|require|requires)(?!\p{L})/iu;
+  /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|versus|vs(?:\.|(?![-\d]))|unlike|rather than|instead of|replaces?|replacing|will replace|(?:it's|it is|it’s|that's|that is|that’s|much|just|rather|a bit|somewhat) like|as if|akin to|analog(?:y|ous)|imagine)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month|lecture|lesson|class|chapter|episode|issue|talk)|also on the agenda)|(?<!\p{L})(?:(?:must|should|need to|needs to|to|first) (?:exclude|rule out)|alternative explanations?|candidate explanations?|artefacts?|artifacts?)(?!\p{L})|^[\s"“'‘>*•-]*(?:(?:most|all|ordinary|conventional|chemical|electric|ion|plasma|Hall|today's|existing|other)[\s-]+)*(?:rockets|engines|thrusters|drives|spacecraft|propulsion(?:[^\S\n]+systems?)?|satellites)[^\S\n]+(?:are|is|have|has|need|needs|must|carry|carries|use|uses|burn|work|get|throw|depend|depends|rel(?:y|ies)|require|requires)(?!\p{L})/iu;
 /**
  * Where the text says plainly that nothing is thrown out, the words of propellant that count are those of
  * the claim's own sentences: not of a comparison ("how does that compare with an ion engine?"), a question,
@@ -140,7 +142,7 @@ export function propellantFreeParagraphs(text: string): [number, number][] {
 }
 
 /** Where the device may be fitted: "bolt it to a cart, a boat or a satellite", "mount one on any small boat". */
-const FIT_TO_RE = /(?<!\p{L})(?:bolt|fit|mount|attach|strap|install|put)(?:s|ed|ing)?[^\S\n]+(?:it|them|one|two|several|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:to|on|onto|in|into)[^\S\n]+[^.;!?\n]{0,80}/giu;
+const FIT_TO_RE = /(?<!\p{L})(?:(?:bolt|fit|mount|attach|strap|install|put)(?:s|ed|ing)?[^\S\n]+(?:it|them|one|two|several|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:to|on|onto|in|into)|(?:propos|pitch|market|offer|intend|recommend|suggest)(?:e|es|ed|ing|s)?[^\S\n]+(?:it|them|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:for|as[^\S\n]+a[^\S\n]+drive[^\S\n]+for))[^\S\n]+[^.;!?\n]{0,80}/giu;
 
 /** Machines of falling water, wind and tide, and their reservoirs: their turbines take in no heat. */
 const WATER_OR_WIND_MACHINE_RE =
@@ -162,7 +164,12 @@ export function readSignals(ctx: PlanContext): Signals {
   // "no heat pump, no outdoor coil": a machine said not to be one.
   const notDenied = text.replace(/(?<!\p{L})(?:no|not an?|without an?|isn't an?|is not an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|refrigerators?|chillers?|compressors?)(?!\p{L})/giu, ' ');
   return {
-    propellantFree: PROPELLANT_FREE_RE.test(text) || NEGATED_PROPELLANT_RE.test(text) || (top !== undefined && PROPELLANT_FREE_CLASSES.includes(top)),
+    propellantFree:
+      PROPELLANT_FREE_RE.test(text) ||
+      NEGATED_PROPELLANT_RE.test(text) ||
+      (top !== undefined && PROPELLANT_FREE_CLASSES.includes(top)) ||
+      // (An air-pusher said to work in vacuum, where it has no air to push: "Ours does not need air at all".)
+      (vacuumClaimed(text) && AIR_PUSHER_ONE_RE.test(text)),
     // An air-pusher (a lifter, an ion-wind craft) said to work in vacuum has no air to push: its words no
     // longer count as propellant.
     propellant: PROPELLANT_RE.test(
