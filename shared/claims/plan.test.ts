@@ -1174,6 +1174,17 @@ test('a heat engine with the heat it takes and the work it gives is held to Carn
   expect(run?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(eta / carnot, 6);
 });
 
+test('a dish engine with the sunlight brought to its receiver and the electricity it gives is held to Carnot on their ratio (invented test data)', () => {
+  const text = 'Our Stirling dish delivered two kilowatts of electricity from six point five kilowatts of concentrated sunlight on the receiver. The hot head of the engine was at 650 °C and the cooler at 40 °C.';
+  // η = 2/6.5 = 0.3077; Carnot 1 − 313.15/923.15 = 0.6608 (°C → K = C + 273.15); ratio 0.4656.
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('consistent');
+  expect(run?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(2 / 6.5 / (1 - 313.15 / 923.15), 6);
+  // A panel's sunlight is no engine's heat: no Carnot check on a solar cell's output over its light.
+  const panel = 'The panel delivered 200 W from 1 kW of sunlight at a cell temperature of 45 °C on a 25 °C day.';
+  expect(runClaimChecks(extractFigures(panel), { text: panel }).checks.find((c) => c.check === 'carnot')).toBeUndefined();
+});
+
 describe('review texts (invented test data)', () => {
   const runOf = (text: string, check: string) => runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === check);
   it('"if … the efficiency comes out below the Carnot value" is a condition, not a statement that the device is within it', () => {

@@ -130,8 +130,9 @@ function engineRatio(b: Basis): Figure | undefined {
   const heatIn = pIn ?? eIn;
   const workOut = pOut ?? eOut;
   if (!s.heatEngine || temps.length < 2 || !heatIn || !workOut || heatIn.kind !== workOut.kind || !(heatIn.si > 0) || heatIn.end === null) return undefined;
-  // (The input must be heat: "of waste heat", "of heat", BTU, fuel.)
-  if (!/^[^.;!?\n]{0,25}?(?<!\p{L})(?:heat|thermal|fuel|steam)(?!\p{L})/iu.test(text.slice(heatIn.end, heatIn.end + 40)) && !/BTU/u.test(heatIn.text)) return undefined;
+  // (The input must be heat: "of waste heat", "of heat", BTU, fuel; or sunlight brought to its hot side: "of
+  // concentrated sunlight on the receiver".)
+  if (!/^[^.;!?\n]{0,25}?(?<!\p{L})(?:heat|thermal|fuel|steam|sunlight|solar (?:heat|power|radiation|energy))(?!\p{L})/iu.test(text.slice(heatIn.end, heatIn.end + 40)) && !/BTU/u.test(heatIn.text)) return undefined;
   return outOverIn(workOut, heatIn, 'efficiency', null, 'efficiency = work out / heat in');
 }
 

@@ -985,6 +985,9 @@ test('"throws out xenon at 30 km/s", "empty of propellant, 3.6 kg", power "going
   expect(extractFigures('Fuelled, the rocket weighs 4.2 kg; empty of propellant, 3.6 kg.').map((f) => f.role)).toEqual(['wet', 'dry']);
   expect(extractFigures('The dashboard shows 7.0 kW going into the battery.')).toMatchObject([{ role: 'out', si: 7000 }]);
   expect(extractFigures('So 8 kW reaches the radiators.')).toMatchObject([{ role: 'out', si: 8000 }]);
+  // A charger's output said as the current and voltage it sends into the pack: 2 A × 42 V = 84 W out.
+  const charger = extractFigures('The charger takes 0.45 A from the 230 V mains and sends 2 A at 42 V into the pack.').filter((f) => f.kind === 'power');
+  expect(charger.map((f) => [f.role, f.si])).toEqual([['in', expect.closeTo(103.5, 9)], ['out', expect.closeTo(84, 9)]]);
 });
 
 test('"burns 40,000 BTU of pellets an hour" is a power; "gives back 94 % of whatever the panels put in" a share of the input (invented test data)', () => {
