@@ -278,6 +278,27 @@ describe('errata and corrections: the figure put right is set aside, the right o
     expect(f.find((x) => x.text === '3.2 kW')?.role).toBe('out');
   });
 
+  test("a log's correction: 'correction: forgot the 2.0 ns delay … 2.86 × 10⁸ m/s', 'read 3.2 A not 0.32 A'", () => {
+    const text = '15:02 edge at the far end 12.0 ns after trigger: 4.00 m / 12.0 ns = 3.33 × 10⁸ m/s ??\n15:30 correction: forgot the 2.0 ns trigger delay. Transit is 14.0 ns, so 2.86 × 10⁸ m/s.';
+    const f = read(text);
+    expect(f.filter((x) => x.kind === 'speed' && x.role !== 'aside').map((x) => x.si)).toEqual([2.86e8]);
+    // 2.86e8 / 299 792 458 = 0.954 (c exact, BIPM SI Brochure): below c, no finding against it.
+    expect(runClaimChecks(f, { text, classes: [] }).checks.find((c) => c.check === 'light-speed')?.finding).not.toBe('breaks');
+    const amps = read('14:02 clamp meter shows 0.32 A at 12 V. 14:20 correction: the meter was on the wrong range, so read 3.2 A not 0.32 A.');
+    expect(amps.filter((x) => x.kind === 'current' && x.si < 1).map((x) => x.role)).toEqual(['aside', 'aside']);
+    expect(amps.find((x) => x.text === '3.2 A')?.role).not.toBe('aside');
+  });
+
+  test("a figure explained away: 'The 3.5 kgf on the swing arm was the stand creeping on its rollers'", () => {
+    const text = 'Hung from wires: 1.2 kW in, rotors at 9,000 rpm. Result: no steady deflection. The 3.5 kgf on the swing arm was the stand creeping on its rollers.';
+    expect(read(text).find((x) => x.kind === 'thrust')?.role).toBe('aside');
+    expect(runClaimChecks(read(text), { text, classes: [] }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+    // Said not to be an artefact, it stands.
+    expect(read('The 3.5 kgf on the swing arm was not the stand creeping: the rig takes 1.2 kW.').find((x) => x.kind === 'thrust')?.role).not.toBe('aside');
+    // Nor is a reading "measured with the ground loop at 0 °C" explained away.
+    expect(read('Efficiency of the brine heat pump, 290 %, was measured with the ground loop at 0 °C and the radiators at 35 °C.').find((x) => x.kind === 'cop')?.role).toBe('heating');
+  });
+
   test('an error asked about is no correction: "asked whether this was a misprint"', () => {
     const f = read('The leaflet calls the heat pump "410 % efficient". A councillor asked whether this was a misprint; roughly four units of heat reach the radiators for each unit of electricity.');
     expect(f.find((x) => x.text === '410 %')?.role).not.toBe('aside');

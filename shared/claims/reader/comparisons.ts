@@ -61,6 +61,19 @@ export function relate(text: string, drafts: Draft[]): void {
     if (!compared.includes(wrong)) compared.push(wrong);
     if (right.role === null && wrong.role !== null && wrong.role !== 'aside') right.role = wrong.role;
   }
+  // "so read 3.2 A not 0.32 A", "2.86 × 10⁸ m/s rather than 3.33 × 10⁸": the figure put aside just after the right one.
+  for (const d of drafts) {
+    if (d.role === 'aside' || d.derived || compared.includes(d)) continue;
+    const prev = [...drafts].reverse().find((x) => x.end <= d.start && x.kind === d.kind && !x.derived);
+    if (prev && d.start - prev.end <= 30 && NOT_THIS_BETWEEN_RE.test(text.slice(prev.end, d.start))) compared.push(d);
+  }
+  // "The 3.5 kgf on the swing arm was the stand creeping on its rollers", "the 40 mN turned out to be a
+  // thermal artefact": a figure explained away as an artefact of the set-up.
+  for (const d of drafts) {
+    if (d.role === 'aside' || d.derived || compared.includes(d)) continue;
+    const after = EXPLAINED_AWAY_AFTER_RE.exec(text.slice(d.end, d.end + 120));
+    if (after && !/(?<!\p{L})(?:not|no|never|nor|rule[sd]?[^\S\n]+out|ruling[^\S\n]+out|excluded?)(?!\p{L})|n[’']t(?!\p{L})/iu.test(after[0])) compared.push(d);
+  }
   // "An earlier version of this story gave the output as 32 kW": a figure withdrawn.
   for (const d of drafts) {
     if (d.role === 'aside' || d.derived || compared.includes(d)) continue;
@@ -109,7 +122,12 @@ const CORRECT_BEFORE_RE =
   /(?<!\p{L})(?:(?:the[^\S\n]+)?correct(?:ed)?(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]*(?:is|was|were|are|reads?|should be|of|:)|should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be)|(?:corrected|revised|amended|changed)(?:[^\S\n]+(?:down|up))?[^\S\n]+to)[^\S\n]*(?:[:"“'‘][^\S\n]*)?(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
 /** Between a wrong figure and the right one: the error owned ("That was our error.", "That is wrong by a factor of a thousand:"). */
 const ERROR_SAID_RE =
-  /(?<!\p{L})(?:(?:was|is|were|are)[^\S\n]+(?:our|my|an?|the)[^\S\n]+(?:error|mistake|typo|misprint)|(?:was|is|were|are)[^\S\n]+(?:wrong|incorrect|in error|mistaken)|wrong[^\S\n]+by[^\S\n]+a[^\S\n]+factor|(?:our|my)[^\S\n]+(?:error|mistake)|wrongly|mistakenly|incorrectly|erroneously|in error)(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:was|is|were|are)[^\S\n]+(?:our|my|an?|the)[^\S\n]+(?:error|mistake|typo|misprint)|(?:was|is|were|are)[^\S\n]+(?:wrong|incorrect|in error|mistaken)|wrong[^\S\n]+by[^\S\n]+a[^\S\n]+factor|(?:our|my)[^\S\n]+(?:error|mistake)|wrongly|mistakenly|incorrectly|erroneously|in error|correction[^\S\n]*[:—–-]|(?:I|we|had|they|he|she)[^\S\n]+(?:forgot|overlooked|misread|left[^\S\n]+out)|(?:on|read[^\S\n]+off)[^\S\n]+the[^\S\n]+wrong[^\S\n]+(?:range|scale|setting|channel))(?!\p{L})/iu;
+/** Between the right figure and the one it replaces, said just after: "3.2 A not 0.32 A", ", instead of". */
+const NOT_THIS_BETWEEN_RE = /^[^\S\n]*[,;(]?[^\S\n]*(?:and[^\S\n]+)?(?:not|instead[^\S\n]+of|rather[^\S\n]+than|in[^\S\n]+place[^\S\n]+of)[^\S\n]+(?:the[^\S\n]+)?$/iu;
+/** After a figure, in its sentence: the figure explained away ("was the stand creeping", "turned out to be a thermal artefact"). */
+const EXPLAINED_AWAY_AFTER_RE =
+  /^[^.;!?\n]{0,60}?(?<!\p{L})(?:was|were|is|are|turned[^\S\n]+out[^\S\n]+to[^\S\n]+be|came[^\S\n]+from|was[^\S\n]+caused[^\S\n]+by|was[^\S\n]+due[^\S\n]+to|(?:was|were)[^\S\n]+traced[^\S\n]+to|traced[^\S\n]+to)[^\S\n]+(?:(?:just|only|simply|all|entirely|really|actually|in[^\S\n]+fact)[^\S\n]+)?(?:(?:an?|the|our|its)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:artefacts?|artifacts?|spurious|creep(?:ing|s)?|drift(?:ing|s)?|thermal[^\S\n]+(?:expansion|drift|bowing)|air[^\S\n]+currents?|convection|buoyancy|interference|pick-?up|(?:cable|lead|wire)[^\S\n]+(?:forces?|drag|tension|pull)|magnetic[^\S\n]+(?:interaction|coupling)|misreading|mis-?calibration)(?!\p{L})/iu;
 /** Before a figure withdrawn: "An earlier version of this story gave the output as". */
 const EARLIER_VERSION_BEFORE_RE =
   /(?<!\p{L})(?:an?|the)[^\S\n]+(?:earlier|previous|original|first)[^\S\n]+(?:version|edition|draft)(?:[^\S\n]+of[^\S\n]+(?:this|the)[^\S\n]+[\p{L}-]+)?[^\S\n]+(?:gave|said|stated|put|reported|had|listed|quoted|printed|showed|(?:incorrectly|wrongly|mistakenly)[^\S\n]+\p{L}+)[^.;!?\n]{0,80}$/iu;
