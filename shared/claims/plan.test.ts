@@ -728,6 +728,20 @@ describe('propellant-free drives described the way letters and posters describe 
     // The same words, the lift gone in the chamber: nothing is claimed in vacuum.
     expect(photon("Asymmetric capacitor 'lifters' are explained by ion wind: in a chamber pumped to 10⁻⁵ mbar the 4 mN at 1 kW vanished.")?.finding).not.toBe('breaks');
   });
+  it('a body said to hover with nothing to push on is held up by its weight, m·g0', () => {
+    // 12 g × 9.80665 m/s² (g0 exact, BIPM SI Brochure) = 0.11768 N against 9 W / c: ratio 0.11768 × c / 9 = 3.92 × 10⁶.
+    const disc = 'No magnets, no base, no strings. The 12-gram disc floats 3 cm above any desk. Its 9 W board cancels the disc\'s own weight, so nothing pushes on the desk and nothing is blown downwards.';
+    expectFinding(photon(disc), 'breaks', 'ratio', (0.012 * 9.80665 * C) / 9, 0);
+    // A magnet holds a body up lawfully: no thrust is read from its weight.
+    const maglev = 'The 50 g globe floats above its magnetic base, drawing 3 W, with no strings and nothing touching it.';
+    expect(extractFigures(maglev).some((f) => f.kind === 'thrust')).toBe(false);
+    expect(photon(maglev)).toBeUndefined();
+  });
+  it("'Ours doesn't': a comparison with engines that need propellant names none of the claim's", () => {
+    // 1.2 N/kW = 1.2 × 10⁻³ N/W; × c = 359 751 (F/P ≤ 1/c).
+    const text = 'The cavity drive has shown 1.2 N/kW on our torsion balance. For comparison, the best ion engines manage around 0.06 N/kW, and they need propellant. Ours doesn\'t: the microwaves stay in the cavity.';
+    expectFinding(photon(text), 'breaks', 'ratio', 1.2e-3 * C, 0);
+  });
   it('an analogy or a use proposed for the drive names no propellant of its own', () => {
     const rowing = 'The device gives 0.4 N of thrust from 250 W without expelling any propellant. "It\'s like rowing a boat where the oar gets heavier on the stroke," he said.';
     expectFinding(photon(rowing), 'breaks', 'ratio', (0.4 * C) / 250, 0);

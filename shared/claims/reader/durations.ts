@@ -21,7 +21,7 @@ const SUPPOSED_TIME_RE = /(?<!\p{L})(?:if|unless|should|would|could|were)(?!\p{L
 
 /** Just before a charging time: "charges to 80 % in", "recharged in", "refills in", "back to full in", "a full charge takes", "charging time of". */
 export const CHARGING_TIME_RE =
-  /(?<!\p{L})(?:(?:re)?charg(?:es|ed|ing|e)|refill(?:s|ed|ing)?|fills?[^\S\n]+up|tops?[^\S\n]+up|topped[^\S\n]+up|(?:back[^\S\n]+)?to[^\S\n]+full)(?!\p{L})[^.;!?\n]{0,35}?(?:in|takes|took|of|within|under|about|around|just|only)?[^\S\n]*(?:(?:about|around|roughly|just|only|under|less than)[^\S\n]+)?$/iu;
+  /(?<!\p{L})(?<!self[- ])(?:(?:re)?charg(?:es|ed|ing|e)|refill(?:s|ed|ing)?|fills?[^\S\n]+up|tops?[^\S\n]+up|topped[^\S\n]+up|(?:back[^\S\n]+)?to[^\S\n]+full)(?!\p{L})[^.;!?\n]{0,35}?(?:in|takes|took|of|within|under|about|around|just|only)?[^\S\n]*(?:(?:about|around|roughly|just|only|under|less than)[^\S\n]+)?$/iu;
 
 /** A duration said as the time a charge takes. */
 export const isChargingTime = (text: string, d: { start: number | null | undefined }): boolean =>
@@ -157,7 +157,8 @@ export function relateDurations(text: string, drafts: Draft[]): void {
       if (p.role === 'out' && BURST_RE.test(sentenceAround(text, p.start, p.end))) continue;
       // "… a 150 kW motor, and charges to 80 % in 40 minutes": a charging time is no run of what the
       // device puts out.
-      if (p.role === 'out' && isChargingTime(text, duration)) continue;
+      // (Nor of a power drawn but not to charge: "charges in 5–6 h … Controller limits the draw to 15 A at 48 V".)
+      if (isChargingTime(text, duration) && (p.role === 'out' || !/(?<!\p{L})(?:re)?charg\w*/iu.test(sentenceAround(text, p.start, p.end)))) continue;
       // "can deliver up to 5 kW at once": the most it can give, not what it gave over the run (the
       // least output, the end favourable to a claim, is not stated).
       if (p.role === 'out' && (p.hedge === 'up-to' || p.hedge === 'at-most' || p.hedge === 'less-than')) continue;

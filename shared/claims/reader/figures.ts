@@ -12,7 +12,8 @@ import { asideStatedBounds, statedBound } from './bounds';
 import { comparedPercent, relate } from './comparisons';
 import { BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
 import { asideApparentSpeeds, asideIdealDeltaV, asideOtherTopics, asideSignals, asideThresholds, asideWorkedBounds, rolesFromLineLabels } from './topics';
-import type { Draft } from './draft';
+import { insertAfter, siOf, typedSi, type Draft } from './draft';
+import { G0 } from '../../checks/constants';
 import { bareKind, GAIN_PER_UNIT_RE, PER_UNIT_QUANTITY, ISP_AFTER_RE, ISP_BEFORE_RE, MULTIPLE_VALUE, MULTIPLE_WORD_RE, readPercent, TEMPERATURE_CONTEXT_RE } from './kinds';
 import { tokenize, type NumberToken } from './numbers';
 import { hedgeBefore, isRangeGap, roleContextStart } from './ranges-hedges';
@@ -483,6 +484,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   asideApparentSpeeds(text, drafts);
   asideSignals(text, drafts);
   asideThresholds(drafts);
+  weightHeldUp(text, drafts);
 
   const figures: Figure[] = [];
   for (const d of drafts) {
@@ -518,4 +520,35 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     figures.push(f);
   }
   return figures;
+}
+
+/** Said of a body held up with nothing under it: "The 12-gram disc floats 3 cm above any desk", "cancels its own weight". */
+const HOVERS_RE =
+  /(?<!\p{L})(?:floats?|floating|hovers?|hovering|levitat(?:es?|ing|ed)|cancels?[^\S\n]+(?:(?:the|its)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+)?(?:own[^\S\n]+)?weight|holds?[^\S\n]+(?:itself|it)[^\S\n]+(?:up|aloft)|lifts?[^\S\n]+(?:itself|its[^\S\n]+own[^\S\n]+weight))(?!\p{L})/iu;
+/** Words that deny anything the body could push on or hang from ("no base, no strings", "nothing is blown downwards"). */
+const NO_SUPPORT_RE =
+  /(?<!\p{L})(?:no[^\S\n]+(?:base|stand|strings?|wires?|threads?|magnets?|support|air[- ]?flow|fans?|propellers?|downwash)|nothing[^\S\n]+(?:pushes|presses|rests|is[^\S\n]+blown|blows)|without[^\S\n]+(?:any[^\S\n]+)?(?:support|magnets|strings|wires)|anti-?gravity|gravity[- ](?:field|shield|cancell?(?:er|ing|ation))|weightless)(?!\p{L})/iu;
+/** A lawful way of holding a body up: a magnet (not denied), a jet of air, sound, a balloon. */
+const LAWFUL_HOLD_RE =
+  /(?<!\p{L})(?<!no[^\S\n]+)(?:magnets?|magnetic(?:ally)?|electromagnets?|superconduct\w*|maglev|diamagnetic|air[- ]?(?:jets?|cushion|bearing)|acoustic|ultrasonic|balloons?|helium|buoyan\w*)(?!\p{L})/iu;
+
+/**
+ * "The 12-gram disc floats 3 cm above any desk. Its 9 W board cancels the disc's own weight … nothing
+ * pushes on the desk": a body said to hover with nothing to push on is held up by a force equal to its
+ * weight, m·g0 — the thrust the claim rests on, where the text gives no other.
+ */
+function weightHeldUp(text: string, drafts: Draft[]): void {
+  if (drafts.some((d) => d.kind === 'thrust' && d.role !== 'aside') || !NO_SUPPORT_RE.test(text) || LAWFUL_HOLD_RE.test(text)) return;
+  const held = drafts.filter((d) => d.kind === 'mass' && !d.derived && d.role !== 'propellant' && HOVERS_RE.test(sentenceAround(text, d.start, d.end)));
+  if (held.length !== 1) return;
+  const m = siOf(held[0]);
+  if (m === null || !(m > 0)) return;
+  insertAfter(drafts, held[0], {
+    start: held[0].start,
+    end: held[0].end,
+    kind: 'thrust',
+    quantity: typedSi(m * G0, 'N'),
+    role: null,
+    derived: `thrust = the weight held up (${formatQuantity(m, 'kg')} × g0)`,
+  });
 }

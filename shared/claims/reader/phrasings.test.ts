@@ -316,6 +316,16 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('The pack charges at 2C in a warm room.')).toEqual([]);
   });
 
+  test("a charging time is no run of a power drawn for something else; 'self-charging' names no charging time", () => {
+    const bike = '• Removable 48 V frame battery, charges in 5–6 h\n• Rear hub motor, 500 W rated output\n• Controller limits the draw to 15 A at 48 V';
+    expect(read(bike).filter((x) => x.kind === 'energy')).toEqual([]);
+    // A charger's own power over its charging time is the energy it put in: 2 kW × 5 h = 36 MJ.
+    expect(read('The charger draws 2 kW and charges the pack in 5 hours.').find((x) => x.kind === 'energy')).toMatchObject({ role: 'in', si: 2000 * 5 * 3600 });
+    // 25 W over 72 h = 6.48 MJ in: "self-charging" is no charge said of the run, and what is taken from the wall goes in.
+    const hub = 'Subject: Test log of the self-charging hub, 72-hour bench run. Average power taken from the wall: 25 W.';
+    expect(read(hub).find((x) => x.kind === 'energy')).toMatchObject({ role: 'in', si: 25 * 72 * 3600 });
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([

@@ -60,7 +60,7 @@ export const PROPELLANT_FREE_WORDS = [
   'lasers?', 'laser[- ](?:thrusters?|diodes?|light|propulsion|arrays?|bars?|beams?)', 'photons?', 'beam leaving', 'quantum vacuum', 'virtual particles',
   'pushes? (?:against|on|off) (?:the )?(?:quantum )?vacuum', 'pushing (?:against|on|off) (?:the )?(?:[\\w-]+ ){0,3}?vacuum', 'recoil', 'collimated', 'light (?:alone|only)', 'radiators?',
   'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
-  'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
+  'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'nothing (?:is |gets )?(?:blown|pushed|thrown|forced) (?:down(?:wards?)?|out|back(?:wards?)?)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
   'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
   'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', '(?:zero|nil|0) (?:propellant|reaction mass|exhaust)', 'propellant(?: used)?[^\\S\\n]*[:=][^\\S\\n]*(?:none|nil|zero|0 ?(?:g|kg)?)(?![\\w.])',
   // A sheet's row: "Propellant ............... none", "Propellant / exhaust | none", "Propellant\tnot required".
