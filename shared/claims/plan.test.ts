@@ -1199,6 +1199,26 @@ test('a dish engine with the sunlight brought to its receiver and the electricit
   expect(runClaimChecks(extractFigures(panel), { text: panel }).checks.find((c) => c.check === 'carnot')).toBeUndefined();
 });
 
+test("a stove's 'Fuel efficiency 92 %' beside its thermoelectric module's 5 % is no engine's efficiency (invented test data)", () => {
+  const text = 'Fuel efficiency 92 %. The fan needs no batteries: a thermoelectric module turns about 5 % of the heat flowing through it into electricity (hot side 230 °C, fins 45 °C), enough to run the 0.9 W fan.';
+  // 0.05 / (1 − 318.15/503.15) = 0.05 / 0.36768 = 0.13599 (Carnot, °C → K = C + 273.15).
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+  expect(run?.finding).toBe('consistent');
+  expect(run?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(0.05 / (1 - 318.15 / 503.15), 6);
+});
+
+test("'For every kWh from the socket its heat pump gives back about 3.2 kWh of heat' is a gain of 3.2 (invented test data)", () => {
+  const text = 'For every kWh from the socket its heat pump gives back about 3.2 kWh of heat to the drying air. It picks heat up at 20 °C and delivers it at 65 °C. My old vented dryer used 4.5 kWh a load.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.text === '4.5 kWh')?.role).toBe('aside');
+  // 3.2 / (338.15 / 45) = 0.42585 (heating COP against Th/(Th − Tc)).
+  const run = runClaimChecks(f, { text }).checks.find((c) => c.check === 'carnot');
+  expect(run?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(3.2 / (338.15 / 45), 6);
+  // The new machine that replaced an old one keeps its figures.
+  const replaced = extractFigures("The school replaced the old oil boiler with a ground-source heat pump that delivers between 3.2 and 3.8 units of heat for every unit of electricity.");
+  expect(replaced.find((x) => x.si === 3.2)?.role).not.toBe('aside');
+});
+
 describe('review texts (invented test data)', () => {
   const runOf = (text: string, check: string) => runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === check);
   it('"if … the efficiency comes out below the Carnot value" is a condition, not a statement that the device is within it', () => {

@@ -55,6 +55,11 @@ function combinedHeatAndPower(f: Figure, text: string): boolean {
   return /(?<!\p{L})(?:total|overall|combined|fuel utili[sz]ation|system)(?!\p{L})/iu.test(near) && !/(?<!\p{L})electrical(?!\p{L})/iu.test(text.slice(Math.max(0, f.start - 25), f.start));
 }
 
+/** Before a percentage: a heating appliance's share of its fuel's heat ("Fuel efficiency 92 %", "boiler efficiency: 89 %"). */
+const HEATING_SHARE_BEFORE_RE =
+  /(?<!\p{L})(?:fuel|combustion|boiler|burner|stove|cooking|heating|heat[- ]transfer|seasonal|AFUE|appliance)[^\S\n]+efficiency[^\S\n]*(?:rating)?[^\S\n]*(?:of|is|was|:|=)?[^\S\n]*(?:(?:about|around|up to|roughly|over)[^\S\n]+)?$/iu;
+const heatingShare = (f: Figure, text: string): boolean => f.start !== null && HEATING_SHARE_BEFORE_RE.test(text.slice(Math.max(0, f.start - 40), f.start));
+
 /** Words of a bound worked out, not a claim: "the ideal COP … is 7.3", "the Carnot limit is 4.9 %". */
 const BOUND_WORDS_RE = /(?<!\p{L})(?:ideal|Carnot|maximum|max|limit|bound|reversible|at most|theoretical|highest possible)(?!\p{L})/iu;
 
@@ -139,7 +144,11 @@ function engineRatio(b: Basis): Figure | undefined {
 export function planCarnot(b: Basis): HeatReading {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, temps } = b;
   // A stated efficiency, or one stated as a share of the Carnot efficiency of the stated temperatures.
-  const stated = withSides(ofKind(figures, 'efficiency').filter((f) => (!f.derived || / of the Carnot efficiency /.test(f.derived)) && !combinedHeatAndPower(f, text)), b);
+  const candidates = ofKind(figures, 'efficiency').filter((f) => (!f.derived || / of the Carnot efficiency /.test(f.derived)) && !combinedHeatAndPower(f, text));
+  // ("Fuel efficiency 92 % … a thermoelectric module … turns about 5 % of the heat into electricity": a
+  // stove's or boiler's share of heat delivered is no engine's efficiency, beside one that is.)
+  const engineLike = candidates.filter((f) => !heatingShare(f, text));
+  const stated = withSides(engineLike.length > 0 ? engineLike : candidates, b);
   // A heat pump or refrigerator moves heat: its heat out over its work in is a COP, not an over-unity ratio.
   // (In a text about a heat engine, a cooler named beside two temperatures — "lube oil. Cooler duty 95 kW"
   // at a steam turbine — is a heat exchanger, not a machine that moves heat, unless its cooling is said.)

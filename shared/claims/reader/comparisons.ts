@@ -236,6 +236,9 @@ function earlierDeviceSaid(text: string, d: Draft): boolean {
   // claim's figure, said before them, is set above; they have no figure of their own here.
   const earlier = EARLIER_DEVICE_RE.exec(sentence);
   const at = text.lastIndexOf(sentence, d.start);
+  // ("replaced the old oil boiler … with a ground-source heat pump, … it delivers 3.2": the new one's figure.)
+  const replacedWith = /(?<!\p{L})replac(?:ed|es|ing)[^\S\n]+(?:the|its|their|our|my|an?)[^\S\n]+(?:old|previous|earlier|former|original)(?!\p{L})[^.;!?\n]*?[^\S\n]with[^\S\n]/iu.exec(sentence);
+  if (replacedWith && at >= 0 && d.start - at > replacedWith.index + replacedWith[0].length) return false;
   if (earlier && at >= 0 && d.start - at < earlier.index && ABOVE_BEFORE_RE.test(sentence.slice(0, earlier.index)) && !/\d/u.test(sentence.slice(earlier.index))) return false;
   if (earlier && !LATEST_DEVICE_RE.test(sentence)) return true;
   const clause = clauseAround(text, d);
@@ -285,7 +288,7 @@ const CONDITIONAL_RE = /(?<!\p{L})(?:would|could|might)(?!\p{L})/iu;
 /** Right after a comparison's figure: what it was compared with is the input or output of the claim itself ("compared with 1 kW of input"). */
 const OWN_FLOW_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|heat|shaft)[^\S\n]+)?(?:input|output|in|out|consumed|drawn|supplied|delivered|it (?:draws|takes|uses|consumes|needs|gives|delivers))(?!\p{L})/iu;
 
-const DEVICE_NOUNS = '(?:prototypes?|models?|versions?|designs?|generations?|units?|builds?|rigs?|devices?|machines?|iterations?|systems?|box(?:es)?|cells?|modules?|engines?|motors?|generators?|drives?|thrusters?|heaters?|coils?|wheels?)';
+const DEVICE_NOUNS = '(?:prototypes?|models?|versions?|designs?|generations?|units?|builds?|rigs?|devices?|machines?|iterations?|systems?|box(?:es)?|cells?|modules?|engines?|motors?|generators?|drives?|thrusters?|heaters?|coils?|wheels?|dryers?|driers?|boilers?|furnaces?|fridges?|freezers?|coolers?|kettles?|stoves?|ovens?|heat[- ]pumps?|chargers?|cars?|vans?|e-?bikes?)';
 const EARLIER_DEVICE_RE = new RegExp(
   `(?<![\\p{L}\\p{N}])(?:(?:previous|earlier|older|former|first-generation|last year's|original|old|predecessor)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?|(?:1[89]\\d0s|20[0-2]0s|decades?[- ]old|historic(?:al)?)[^\\S\\n]+(?:claims?[^\\S\\n]+(?:of|for|about)[^\\S\\n]+(?:an?|the)[^\\S\\n]+)?(?:[\\p{L}-]+[^\\S\\n]+)?)${DEVICE_NOUNS}(?!\\p{L})`,
   'iu',
