@@ -1219,6 +1219,15 @@ test("'For every kWh from the socket its heat pump gives back about 3.2 kWh of h
   expect(replaced.find((x) => x.si === 3.2)?.role).not.toBe('aside');
 });
 
+test("a log's shorthand result: 'Brake 1.85 kW; heat in 6.9 kW → 27 %' is the engine's efficiency (invented test data)", () => {
+  const text = 'Stirling on the dyno. Heater head 550 °C, cooler water in 35 °C.\nBrake 1.85 kW; heat in 6.9 kW (electric heater head, metered) → 27 %.';
+  // 0.27 / (1 − 308.15/823.15) = 0.27 / 0.62565 = 0.43155 (Carnot, °C → K = C + 273.15).
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+  expect(run?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(0.27 / (1 - 308.15 / 823.15), 6);
+  // A percentage after an arrow with no powers before it is no efficiency of theirs.
+  expect(extractFigures('Humidity in the lab → 45 %.').some((f) => f.kind === 'efficiency')).toBe(false);
+});
+
 describe('review texts (invented test data)', () => {
   const runOf = (text: string, check: string) => runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === check);
   it('"if … the efficiency comes out below the Carnot value" is a condition, not a statement that the device is within it', () => {

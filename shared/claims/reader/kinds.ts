@@ -175,7 +175,11 @@ export function readPercent(text: string, start: number, end: number, floor: num
   const engineSaid =
     /(?<!\p{L})(?:engines?|turbines?|Stirling|thermoelectric (?:generators?|modules?)|TEGs?|power (?:plants?|stations?|cycles?)|(?:Rankine|Brayton|ORC|steam|Kalina) cycles?)[^\S\n]*[,:–—-]?[^\S\n]*(?:(?:at|of|reaches|reached|achieves|achieved|claims|claimed|with|about|around|roughly|only|just)[^\S\n]+)*$/iu.test(before) &&
     /°|kelvin|degrees|Celsius|Fahrenheit|(?<!\p{L})K(?!\p{L})/iu.test(sentenceAround(text, start, end));
-  const efficiency = after || engineSaid || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1]));
+  // "Brake 1.85 kW; heat in 6.9 kW → 27 %", "7.8 W electrical from ~150 W passing through it → 5.2 %": a
+  // percentage worked out from the two powers said just before it, in a log's shorthand.
+  const line = text.slice(Math.max(text.lastIndexOf('\n', start - 1) + 1, start - 160), start);
+  const worked = /(?:→|->|=>|⇒|=)[^\S\n]*(?:(?:about|approx\.?|~|≈|ca\.?)[^\S\n]*)?$/u.test(line) && (line.match(/\d[^\S\n]*(?:[kMG]?W|[kMG]?Wh|[kMG]?J)(?![\p{L}\d])/gu) ?? []).length >= 2;
+  const efficiency = after || engineSaid || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1])) || worked;
   if (!efficiency) return null;
   // The machine is named anywhere in the claim ("Had our air-to-water unit fitted. … '350 % efficient'") —
   // unless the percentage's own paragraph is of another machine (a motor and generator set, a circuit) and
