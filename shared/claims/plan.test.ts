@@ -1228,6 +1228,13 @@ test("a log's shorthand result: 'Brake 1.85 kW; heat in 6.9 kW → 27 %' is the 
   expect(extractFigures('Humidity in the lab → 45 %.').some((f) => f.kind === 'efficiency')).toBe(false);
 });
 
+test("a COP said as such with one side logged asks for the other: 'flow 35 °C, compressor 1.45 kW, heat 9.9 kW → COP 6.8' (invented test data)", () => {
+  const text = 'HP-12 spot reading: flow 35 °C, compressor 1.45 kW, heat 9.9 kW → COP 6.8. Source side not logged.';
+  const r = runClaimChecks(extractFigures(text), { text });
+  expect(r.checks.find((c) => c.check === 'carnot')).toBeUndefined();
+  expect(r.needs.find((n) => n.check === 'carnot')).toBeDefined();
+});
+
 describe('review texts (invented test data)', () => {
   const runOf = (text: string, check: string) => runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === check);
   it('"if … the efficiency comes out below the Carnot value" is a condition, not a statement that the device is within it', () => {

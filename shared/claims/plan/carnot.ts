@@ -243,7 +243,8 @@ export function planCarnot(b: Basis): HeatReading {
       why: 'The text gives the temperatures the machine works between and what it claims to achieve there.',
       assumptions: extra,
     });
-  } else if ((engineEfficiency || (copForCarnot && (cop.role !== null || s.heatPump || s.cooling))) && temps.length < 2) {
+  } else if ((engineEfficiency || (copForCarnot && (cop.role !== null || s.heatPump || s.cooling || (!cop.derived && /(?<!\p{L})COP(?!\p{L})/u.test(cop.text + b.text.slice(Math.max(0, (cop.start ?? 0) - 12), cop.start ?? 0)))))) && temps.length < 2) {
+    // (A COP said as such — "→ COP 6.8" — is a heat mover's, whatever the machine is called.)
     const missing = temps.length === 0 ? ['the temperature of the hot side', 'the temperature of the cold side'] : [temps[0].role === 'hot' ? 'the temperature of the cold side' : temps[0].role === 'cold' ? 'the temperature of the hot side' : 'the temperature of the other side'];
     needs.push(
       need(

@@ -326,6 +326,16 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read(hub).find((x) => x.kind === 'energy')).toMatchObject({ role: 'in', si: 25 * 72 * 3600 });
   });
 
+  test("a log's shorthand labels: 'heat to loop 9.47 kW, compressor + fan 2.31 kW', 'Shaft 3.12 kW', 'Burner heat into the head 10.1 kW', 'Cooling 352 kW'", () => {
+    const roles = (text: string) => read(text).filter((x) => x.kind === 'power').map((x) => [x.role, x.si]);
+    expect(roles('09:45 heat to loop 9.47 kW (flow × ΔT), compressor + fan 2.31 kW on the bench power meter.')).toEqual([['out', 9470], ['in', 2310]]);
+    expect(roles('Shaft 3.12 kW at 1,480 rpm. Burner heat into the head 10.1 kW.')).toEqual([['out', 3120], ['in', 10100]]);
+    expect(roles('Cooling 352 kW, compressor 69 kW → COP 5.1.')).toEqual([['out', 352000], ['in', 69000]]);
+    expect(roles('Brake 1.85 kW; heat in 6.9 kW.')).toEqual([['out', 1850], ['in', 6900]]);
+    // Heat into the water a heater warms is its output, not an engine's heat in.
+    expect(roles('Element input 3.00 kW. Heat into water 3.36 kW.')).toEqual([['in', 3000], ['out', 3360]]);
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
