@@ -279,6 +279,10 @@ export function bareKind(text: string, start: number, end: number, floor: number
       return { kind: 'efficiency', derived: 'a power gain over the input' };
     }
   }
+  // "the meter shows a gain of 1.3, out/in": a gain said to be output over input.
+  if (/(?<!\p{L})gain(?:[^\S\n]*(?:[=:]|of|is|was|about|around|roughly|approximately))*[^\S\n]*$/iu.test(before) && /^[^\S\n]*[,(;]?[^\S\n]*(?:out(?:put)?[^\S\n]*\/[^\S\n]*in(?:put)?|out(?:put)?[^\S\n]+(?:over|to)[^\S\n]+in(?:put)?)(?!\p{L})/iu.test(text.slice(end, end + 30))) {
+    return { kind: 'efficiency', derived: 'a gain of output over input' };
+  }
   GAIN_AFTER_RE.lastIndex = end;
   if (GAIN_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'units out for each unit in' };
   // "returns 3 units of energy for every 4 it takes", "0.92 units of electricity and heat for every unit of fuel".

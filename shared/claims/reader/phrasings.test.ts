@@ -336,6 +336,23 @@ describe('more ways claims are written (issue 11)', () => {
     expect(roles('Element input 3.00 kW. Heat into water 3.36 kW.')).toEqual([['in', 3000], ['out', 3360]]);
   });
 
+  test("a log's words: 'In 10.2 W, out 13.8 W → COP 1.35. Board runs cool.', 'a gain of 1.3, out/in', 'No mains, no battery … Load: 40 W lamp'", () => {
+    // 13.8 / 10.2 = 1.353: a circuit's "COP" is an over-unity ratio, and "runs cool" makes no refrigerator of it.
+    const board = 'In: bench PSU 12.0 V, 0.85 A. Out to the lamp: 15.2 V across it, 0.91 A through it.\nIn 10.2 W, out 13.8 W → COP 1.35. Board runs cool.';
+    expect(read(board).find((x) => x.kind === 'cop')?.role).not.toBe('cooling');
+    expect(runClaimChecks(read(board), { text: board }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+    expect(read("The inventor's meter shows a gain of 1.3, out/in.")).toMatchObject([{ kind: 'efficiency', si: 1.3 }]);
+    expect(read('The amplifier has a gain of 20.').some((x) => x.kind === 'efficiency')).toBe(false);
+    // 40 W × 144 h = 20.736 MJ out, with nothing in.
+    const box = 'Started Monday. No mains, no battery in the box.\nLoad: 40 W lamp, steady.\nSunday: still lit. 6 days continuous, nothing connected but the lamp.';
+    const f = read(box);
+    expect(f.find((x) => x.kind === 'power' && x.si === 40)?.role).toBe('out');
+    expect(f.find((x) => x.kind === 'power' && x.si === 0)?.role).toBe('in');
+    expect(runClaimChecks(f, { text: box }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+    // A firing rate "at rated load" on a rating card is no load's power.
+    expect(read('Firing rate at rated load ....... 420,000 BTU/h').find((x) => x.kind === 'power')?.role).not.toBe('out');
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([

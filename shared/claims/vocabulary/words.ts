@@ -114,6 +114,8 @@ export const SELF_RUNNING_WORDS = [
   'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
   // A sheet's label said to be empty: "Input: none", "Power source: nil".
   '(?:(?:electrical|electric|power|energy|external) )?(?:input|supply|power source|energy source)(?: (?:power|energy))?[^\\S\\n]*[:=][^\\S\\n]*(?:none|nil|nothing|zero|not needed|not required)',
+  // "No mains, no battery in the box", "nothing connected but the lamp".
+  'no mains,? (?:and |or |nor )?no batter(?:y|ies)', 'no batter(?:y|ies),? (?:and |or |nor )?no mains', 'nothing (?:else )?(?:is )?connected (?:but|except) (?:the |its |a )?(?:lamp|load|bulb|fan|motor|sensor|resistor)',
   'no fuel', 'fuel-?less', 'free energy', 'no (?:motor|engine|drive|battery) and no (?:other )?(?:input|supply|power)', 'no other (?:input|supply|power source|energy source|source of (?:power|energy))',
 ];
 /** Where "self-powered" is lawful: the device harvests an outside flow of energy. */
@@ -148,7 +150,9 @@ export const HEDGES: readonly { hedge: 'up-to' | 'about' | 'at-least' | 'at-most
 ];
 
 /** COP: cooling words are looked for first, then heating words (within COP_WINDOW characters). */
-export const COP_COOLING = ['cool(?:s|ed|ing|er|ers)?', 'refrigerat\\w*', 'chillers?', 'freezers?', 'fridges?', 'air[- ]condition\\w*', 'cryocoolers?'];
+export const COP_COOLING = [
+  // (Not the adjective of a device that does not get hot: "Board runs cool", "stays cool to the touch".)
+  'cool(?:s|ed|ing|er|ers)', '(?<!(?:runs?|running|ran|stays?|stayed|staying|keeps?|kept|remains?|remained|feels?|felt|quite|very|fairly|nice and|is|was|are|were) )cool(?! to the touch)', 'refrigerat\\w*', 'chillers?', 'freezers?', 'fridges?', 'air[- ]condition\\w*', 'cryocoolers?'];
 export const COP_HEATING = ['heating', 'heat[- ]pumps?', 'heaters?', 'warming', 'heat output', 'flow temperature', 'hot water', 'DHW', 'underfloor', 'radiators?'];
 
 /** Words before a number that make it a label, not a figure ("Figure 2 A", "Section 3.2", "p. 12"). */
