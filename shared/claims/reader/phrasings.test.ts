@@ -353,6 +353,20 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('Firing rate at rated load ....... 420,000 BTU/h').find((x) => x.kind === 'power')?.role).not.toBe('out');
   });
 
+  test("a log's brackets: 'Isp (sea level, impulse / propellant burned) 212 s', 'gas energy out (HHV, inventor's calc) = 5.9E+03 W'", () => {
+    expect(read('Fire 3: burn 10.0 s. Isp (sea level, impulse / propellant burned) 212 s.').map((x) => [x.kind, x.si])).toEqual([
+      ['duration', 10],
+      ['specific-impulse', 212],
+    ]);
+    const csv = "I = 1.20E+02 A ; U = 3.85E+01 V ; P_in = 4.62E+03 W\ngas energy out (HHV, inventor's calc from his flowmeter) = 5.9E+03 W";
+    const f = read(csv);
+    expect(f.find((x) => x.text === '5.9E+03 W')?.role).toBe('out');
+    // 5900 / 4620 = 1.277: more out than in.
+    const run = runClaimChecks(f, { text: csv }).checks.find((c) => c.check === 'first-law');
+    expect(run?.finding).toBe('breaks');
+    expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, 5900 / 4620, 1e-9);
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([

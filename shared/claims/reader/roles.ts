@@ -246,6 +246,11 @@ const RATING_CONDITION_RE = /(?<!\p{L})(?:at|under)[^\S\n]+(?:the[^\S\n]+)?(?:ra
 export function roleFor(text: string, kind: FigureKind, start: number, end: number, floor: number): FigureRole {
   // (Blanked, places kept.)
   if ((kind === 'power' || kind === 'energy') && RATING_CONDITION_RE.test(text)) text = text.replace(RATING_CONDITION_RE, (m) => ' '.repeat(m.length));
+  // "gas energy out (HHV, inventor's calc from his flowmeter) = 5.9E+03 W": an aside in brackets between a
+  // label and its value is no word of it (blanked, places kept).
+  const from = Math.max(0, start - 120);
+  const aside = /\([^()\n]{1,100}\)(?=[^\S\n]*[=:][^\S\n]*(?:(?:about|approx\.?|~|≈)[^\S\n]*)?$)/u.exec(text.slice(from, start));
+  if (aside && (kind === 'power' || kind === 'energy')) text = text.slice(0, from + aside.index) + ' '.repeat(aside[0].length) + text.slice(from + aside.index + aside[0].length);
   if (kind === 'power' || kind === 'energy') {
     IN_OUT_AFTER_RE.lastIndex = end;
     const io = IN_OUT_AFTER_RE.exec(text);
