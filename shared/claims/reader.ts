@@ -171,7 +171,11 @@ const POINTER_RE =
   /(?<=\p{L})[^\S\n]*\(\d{1,4}[a-z]?(?:[^\S\n]*[,–-][^\S\n]*\d{1,4}[a-z]?)*\)(?![^\S\n]*(?:%|°|(?:[kMGmµu]?(?:W|J|N|V|A|Wh|K|Hz|s|g|m|t)|kg|hp|PS|BTU|lbf?)(?!\p{L})))|\((?:(?:see|cf\.?|compare)[^\S\n]+)?(?:Fig(?:ure)?s?\.?|Tables?|Tab\.|Eqs?\.?|Equations?|Refs?\.?|Sections?|Sec\.|§|Appendix|Supplementary|Suppl?\.|Methods|Note)[^\S\n]*[^()\n]{0,30}\)|\[\d{1,3}(?:[^\S\n]*[,–-][^\S\n]*\d{1,3})*\]/gu;
 
 function readPlain(text: string): Figure[] {
-  const joined = joinUnitColumns(text).replace(POINTER_RE, (m) => ' '.repeat(m.length));
+  // (A middle dot or bullet set between items of a line — "2,1 km/s · propellant 0,35 kg" — is a separator, not
+  // a product of units: read as a semicolon, places kept.)
+  const joined = joinUnitColumns(text)
+    .replace(POINTER_RE, (m) => ' '.repeat(m.length))
+    .replace(/(?<=\S)([^\S\n]+)[·•]([^\S\n]+)(?=\S)(?!(?:m|s|h|min|kg|g|A|V|W|K|mol|rad|sr|N|J|Pa|Hz|°C)(?![\p{L}]))/gu, (_m, a: string, b: string) => `${a};${b}`);
   // A leader is read as the colon it stands for, blanked to the same length so offsets are kept.
   const led = LEADER_RE.test(joined) ? joined.replace((LEADER_RE.lastIndex = 0, LEADER_RE), (m) => `:${' '.repeat(m.length - 1)}`) : joined;
   LEADER_RE.lastIndex = 0;

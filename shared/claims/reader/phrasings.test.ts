@@ -367,6 +367,32 @@ describe('more ways claims are written (issue 11)', () => {
     expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, 5900 / 4620, 1e-9);
   });
 
+  test("items of a line set apart by middle dots: 'Exhaust speed 2,1 km/s · propellant 0,35 kg · dry mass 1,1 kg'", () => {
+    const kit = 'Exhaust speed 2,1 km/s · propellant 0,35 kg (paraffin + N₂O) · dry mass 1,1 kg · burnout speed ~480 m/s · length 1,42 m.';
+    const f = read(kit);
+    expect(f.filter((x) => x.role !== 'aside' && !x.derived).map((x) => [x.kind, x.role, x.si])).toEqual([
+      ['speed', 'exhaust', 2100],
+      ['mass', 'propellant', 0.35],
+      ['mass', 'dry', 1.1],
+      ['speed', 'delta-v', 480],
+    ]);
+    // Δv = 2100 × ln(1.45/1.1) = 580.1 m/s (Tsiolkovsky); 480/580.1 = 0.827.
+    const run = runClaimChecks(f, { text: kit }).checks.find((c) => c.check === 'rocket-equation');
+    expectRelClose(run!.outputs.find((o) => o.name === 'dv_ratio')!.si, 480 / (2100 * Math.log(1.45 / 1.1)), 1e-9);
+    // A product of units written with spaces stays one unit: no thrust is read from a torque.
+    expect(read('The torque is 20 N · m.').some((x) => x.kind === 'thrust')).toBe(false);
+  });
+
+  test("a run on a charged pack: 'compressor averaging 40 W, all from a single fully charged 7.2 kWh battery pack, with 0.48 kWh still left'", () => {
+    const text = 'One week (168 hours) of continuous running, compressor averaging 40 W, all from a single fully charged 7.2 kWh battery pack, with 0.48 kWh still left in the pack at the end.';
+    const f = read(text);
+    expect(f.find((x) => x.text === '0.48 kWh')?.role).toBe('aside');
+    // 40 W × 604 800 s = 24.192 MJ out of 7.2 kWh = 25.92 MJ (1 kWh = 3.6 MJ, NIST SP 811): 0.933.
+    const run = runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law');
+    expect(run?.finding).toBe('consistent');
+    expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, (40 * 604800) / (7.2 * 3.6e6), 1e-9);
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([

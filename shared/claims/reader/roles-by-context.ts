@@ -67,7 +67,7 @@ const STORE_INTO_RE =
 /** A store of energy named in the sentence of its energy. */
 const STORE_NOUN_RE = /(?<!\p{L})(?:cells?|batter(?:y|ies)|packs?|accumulators?|power banks?|capacitors?|supercaps?|supercapacitors?)(?!\p{L})/iu;
 /** Just before what a load draws: "Lamp draw:", "draws", "consumption of". */
-const DRAW_LEAD_RE = /(?<!\p{L})(?:draws?|drawing|consumption|consumes|consuming|uses|using|load)(?!\p{L})[^\d\n]{0,15}$/iu;
+const DRAW_LEAD_RE = /(?<!\p{L})(?:draws?|drawing|consumption|consumes|consuming|uses|using|load|(?:compressors?|motors?|fans?|pumps?|heaters?|lamps?)[^\S\n]+averag(?:ing|ed|es))(?!\p{L})[^\d\n]{0,15}$/iu;
 /** Right after what a load draws: "5 W average draw", "2 W continuous consumption". */
 const DRAW_AFTER_RE = /^[^\S\n]*(?:(?:average|continuous|steady|mean|constant|typical)[^\S\n]+)?(?:draw|consumption|load)(?!\p{L})/iu;
 /** Anything else that could feed the load or fill the store. */
@@ -76,7 +76,7 @@ const OTHER_SOURCE_RE =
 
 /** A source said to be absent ("with no sun at all", "without recharging"): no other source. */
 const NEGATED_SOURCE_RE =
-  /(?<!\p{L})(?:no|without|never any|not any|never (?:needs?|needed|requires?|required|uses?|used))[^\S\n]+(?:(?:any|direct|further|other|more|energy|external)[^\S\n]+)?(?:sun(?:light|shine)?|solar|charg\w*|recharg\w*|mains|grid|fuel|panels?|harvest\w*)(?!\p{L})|(?<!\p{L})(?:per|on (?:one|a single|a full|each)|between|each|a) (?:full )?charges?(?!\p{L})/giu;
+  /(?<!\p{L})(?:no|without|never any|not any|never (?:needs?|needed|requires?|required|uses?|used))[^\S\n]+(?:(?:any|direct|further|other|more|energy|external)[^\S\n]+)?(?:sun(?:light|shine)?|solar|charg\w*|recharg\w*|mains|grid|fuel|panels?|harvest\w*)(?!\p{L})|(?<!\p{L})(?:per|on (?:one|a single|a full|each)|between|each|a) (?:full )?charges?(?!\p{L})|(?<!\p{L})(?:fully|freshly|once|already|previously|pre-?)[^\S\n-]*charged(?!\p{L})/giu;
 
 /** Right after a rating: a supply, an adapter or a charger named ("100 W bench supply", "65 W USB-C adapter"). */
 const SUPPLY_RATING_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:(?!(?:from|the|a|an|of|by|via|through|at|to|into|on|its|their|our)(?![\p{L}\d-]))[\p{L}\d-]+[^\S\n]+){0,2}?(?:(?:power|bench|lab|laboratory|DC)[^\S\n]+)?(?:supply|supplies|PSUs?|adapters?|chargers?|power bricks?)(?!\p{L})/iu;
@@ -190,6 +190,11 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   // load over a run. What the store holds is the input and what the load draws from it the output, so
   // the ledger asks whether the draw over the run fits in the store. Only with one store, one draw, a
   // run and nothing else of energy; the draw not where the store is being charged or something else may feed the load.
+  // ("… from a single 7.2 kWh pack, with 0.48 kWh still left in the pack at the end": what a store still holds
+  // after the run is no output of it.)
+  for (const d of drafts) {
+    if (d.kind === 'energy' && !d.derived && d.role !== 'aside' && /^[^\S\n]*(?:(?:was|were|is|are)[^\S\n]+)?(?:still[^\S\n]+)?(?:left|remaining|remained|left[^\S\n]+over|to[^\S\n]+spare|in[^\S\n]+reserve|unused)(?!\p{L})/iu.test(text.slice(d.end, d.end + 30))) d.role = 'aside';
+  }
   const storesSaid = drafts.filter(
     (d) =>
       d.kind === 'energy' &&
@@ -224,7 +229,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   const storeHolds = stores.length === 1 ? (siOf(stores[0]) ?? NaN) : NaN;
   const chargedStore = (d: Draft) =>
     d.kind === 'power' && d.role === 'in' && d !== draws[0] && runs.some((t) => Math.abs((siOf(d) ?? NaN) * t - storeHolds) <= 0.05 * storeHolds);
-  const others = drafts.filter((d) => energyLike(d) && d !== stores[0] && d !== draws[0] && ofStore(d) && !chargedStore(d));
+  const others = drafts.filter((d) => energyLike(d) && d.role !== 'aside' && d !== stores[0] && d !== draws[0] && ofStore(d) && !chargedStore(d));
   // (Or the draw over the run said as an energy: "6 W … over two weeks the station uses a little over 2 kWh".)
   if (stores.length === 1 && draws.length === 1 && others.every((d) => d.derived || (d.role === 'out' && d.kind === 'energy') || drawOverRun(d)) && drafts.some((d) => d.kind === 'duration')) {
     for (const d of others) if (drawOverRun(d)) d.role = 'out';
