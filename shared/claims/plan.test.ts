@@ -742,6 +742,10 @@ describe('propellant-free drives described the way letters and posters describe 
     const text = 'The cavity drive has shown 1.2 N/kW on our torsion balance. For comparison, the best ion engines manage around 0.06 N/kW, and they need propellant. Ours doesn\'t: the microwaves stay in the cavity.';
     expectFinding(photon(text), 'breaks', 'ratio', 1.2e-3 * C, 0);
   });
+  it("a stack 'whose mass is modulated in step with the push' is a propellant-free claim", () => {
+    // 2.4e-3 N × c / 1100 W = 654.09 (F ≤ P/c).
+    expectFinding(photon('The stack (piezo capacitors whose mass is modulated in step with the push) measured 2.4 × 10⁻³ N at 1.1e3 W input.'), 'breaks', 'ratio', (2.4e-3 * C) / 1100, 0);
+  });
   it('an analogy or a use proposed for the drive names no propellant of its own', () => {
     const rowing = 'The device gives 0.4 N of thrust from 250 W without expelling any propellant. "It\'s like rowing a boat where the oar gets heavier on the stroke," he said.';
     expectFinding(photon(rowing), 'breaks', 'ratio', (0.4 * C) / 250, 0);

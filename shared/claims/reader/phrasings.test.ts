@@ -393,6 +393,15 @@ describe('more ways claims are written (issue 11)', () => {
     expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, (40 * 604800) / (7.2 * 3.6e6), 1e-9);
   });
 
+  test("a model rocket's listing: 'Ready to fly with motor: 1.2 lb; burnout weight 0.95 lb'", () => {
+    const f = read('- Ready to fly with motor: 1.2 lb; burnout weight 0.95 lb\n- Recommended F motor, Isp about 180 s');
+    // 1 lb = 0.45359237 kg exactly (NIST SP 811, App. B.8).
+    expect(f.filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([
+      ['wet', expect.closeTo(1.2 * 0.45359237, 9)],
+      ['dry', expect.closeTo(0.95 * 0.45359237, 9)],
+    ]);
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([

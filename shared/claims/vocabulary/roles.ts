@@ -133,6 +133,8 @@ export const MASS_ROLES: readonly RoleWords[] = [
     before: [
       'wet', 'fuell?ed', 'fully fuell?ed', 'initial', 'starting', 'start', 'launch', 'lift-?off', 'lifts? off (?:at|with)', 'take-?off', 'gross', 'total', 'loaded', 'full',
       'at launch', 'at ignition', 'before the burn', 'starts? (?:out )?(?:at|with)', 'begins? (?:at|with)',
+      // A model rocket's listing: "Ready to fly with motor: 1.2 lb".
+      'ready[- ]to[- ]fly(?: (?:weight|mass))?(?: with (?:the |a )?motor(?: installed| loaded)?)?(?:[^\\S\\n]*[:=])?', 'with (?:the |a )?motor (?:installed|loaded)(?:[^\\S\\n]*[:=])?',
     ],
     after: [
       '(?:lift-?off|launch|initial|gross|total|wet|fuell?ed|starting|ignition|take-?off) mass', 'wet', 'fuell?ed', 'at launch', 'at lift-?off', 'at the start',
