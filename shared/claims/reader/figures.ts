@@ -352,6 +352,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       if (upperNum !== undefined) upper = scaled(upperNum, factor);
     }
     if (kind === null) continue;
+    // "Revenue ×3 year on year": a growth factor over a year, no length of time.
+    if (kind === 'duration' && /^[^\S\n]*(?:-|[^\S\n]+)?on[- ]year(?!\p{L})/iu.test(text.slice(end, end + 12))) continue;
     if ((kind === 'power' || kind === 'energy') && suffix?.type === 'unit' && !suffix.per) {
       GAIN_PER_UNIT_RE.lastIndex = end;
       const g = GAIN_PER_UNIT_RE.exec(text);

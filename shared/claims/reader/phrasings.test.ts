@@ -402,6 +402,17 @@ describe('more ways claims are written (issue 11)', () => {
     ]);
   });
 
+  test("'with 180 W of heat passing through it' is a module's heat in; 'Revenue ×3 year on year' is no length of time", () => {
+    const teg = 'Stove-top thermoelectric module under load: 2.1 A at 3.4 V with 180 W of heat passing through it.';
+    const f = read(teg);
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['out', expect.closeTo(2.1 * 3.4, 9)], ['in', 180]]);
+    // 7.14 / 180 = 0.0397: far below 1.
+    expect(runClaimChecks(f, { text: teg }).checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
+    const deck = 'TRACTION\n• 14 containers deployed (each 1.2 MWh / 500 kW)\n• Revenue ×3 year on year';
+    expect(read(deck).some((x) => x.kind === 'duration' || (x.kind === 'energy' && x.derived))).toBe(false);
+    expect(read('It ran for 3 years.').map((x) => x.kind)).toEqual(['duration']);
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([

@@ -52,6 +52,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:heat|power|energy|electricity|fuel|current|work) (?:supplied|fed|given) (?:in)?to (?:the|its|a|an) (?:[\\w-]+ ){0,2}?(?:engines?|motors?|devices?|machines?|heaters?|converters?|modules?|cells?|reactors?|thrusters?|coils?|generators?|prototypes?|rigs?)(?: (?:was|is|were|of|came to|amounted to|totall?ed))?',
     ],
     after: [
+      // "with 180 W of heat passing through it": the heat a thermoelectric module takes.
+      'of heat (?:passing|flowing|going|moving) (?:through|across) (?:it|them|the (?:module|modules|TEG|device|element|junction))',
       'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 
       // "an electric motor of 5 hp drives, through a gearbox, a generator": what drives the generator is the set's input.
       '(?:drives|driving|drove|turns|turning|spins|spinning)(?:,[^.;!?\\n]{0,60},)? (?:a|the|its) (?:[\\w-]+ )?(?:generators?|alternators?|dynamos?)', 'from the (?:wall|mains|socket|outlet|plug|grid|(?:bench |power |lab |DC |AC )?supply|battery|batteries)', 'compressors?',
