@@ -41,7 +41,7 @@ const METRES_PER: Record<string, number> = {
 /** Words of something that travels at a speed worth setting against c: light, a signal, a pulse, a message. */
 const SIGNAL_CONTEXT_RE = /(?<!\p{L})(?:light|superluminal|faster[- ]than[- ]light|FTL|signals?|pulses?|photons?|latency|message|transmission|transmits?|beam|wave(?:front)?|speed of light)(?!\p{L})/iu;
 /** Just before the time a distance took: "in", "after", "within", "arrived after", "taking". */
-const TOOK_BEFORE_RE = /(?<!\p{L})(?:in|after|within|taking|took|takes|in (?:just|only|under|about))[^\S\n]+(?:(?:just|only|about|around|roughly|some|a mere)[^\S\n]+)?$/iu;
+const TOOK_BEFORE_RE = /(?<!\p{L})(?:in|after|within|taking|took|takes|in (?:just|only|under|about)|arrives?|arrived|arriving|gets? there|got there)[^\S\n]+(?:(?:just|only|about|around|roughly|some|a mere)[^\S\n]+)?$/iu;
 
 /**
  * A distance covered in a stated time, in a text about light or a signal ("sends a pulse across a 12 km
@@ -56,7 +56,18 @@ function speedsFromDistances(text: string, drafts: Draft[]): Set<Draft> {
     const sentenceStart = Math.max(text.lastIndexOf('\n', d.start - 1) + 1, ...['. ', '! ', '? '].map((p) => { const i = text.lastIndexOf(p, d.start - 1); return i < 0 ? 0 : i + 2; }));
     const before = text.slice(sentenceStart, d.start);
     if (!TOOK_BEFORE_RE.test(before)) continue;
-    const lengths = [...before.matchAll(DISTANCE_RE)];
+    let lengths = [...before.matchAll(DISTANCE_RE)];
+    let from = sentenceStart;
+    // ("• 1,200 km between the two stations / • first bit arrives 2.1 ms after sending": a list's item before
+    // gives the length of the link.)
+    if (lengths.length === 0 && /^[^\S\n]*[•*·–-][^\S\n]/u.test(before) && /(?<!\p{L})(?:arriv\w*|reach\w*|receiv\w*|detect\w*|travel\w*|signals?|bits?|pulses?|messages?|packets?|photons?)(?!\p{L})/iu.test(before)) {
+      const prevStart = text.lastIndexOf('\n', sentenceStart - 2) + 1;
+      const prev = text.slice(prevStart, Math.max(prevStart, sentenceStart - 1));
+      if (/^[^\S\n]*[•*·–-][^\S\n]/u.test(prev) && /(?<!\p{L})(?:between|apart|away|link|distance|separat\w*)(?!\p{L})/iu.test(prev)) {
+        lengths = [...prev.matchAll(DISTANCE_RE)];
+        from = prevStart;
+      }
+    }
     const last = lengths[lengths.length - 1];
     if (!last) continue;
     const unit = last[2].toLowerCase().replace(/s$/u, '').replace(/^lightyear$/u, 'lightyear').replace(/^light[- ]year$/u, 'light-year');
@@ -64,7 +75,7 @@ function speedsFromDistances(text: string, drafts: Draft[]): Set<Draft> {
     const t = siOf(d);
     if (per === undefined || !t) continue;
     const metres = Number(last[1].replace(/,/gu, '')) * per;
-    const start = sentenceStart + last.index!;
+    const start = from + last.index!;
     if (drafts.some((o) => o !== d && o.start < start + last[0].length && start < o.end)) continue; // (read as something else)
     const v = metres / t;
     insertAfter(drafts, d, {

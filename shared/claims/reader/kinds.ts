@@ -16,7 +16,7 @@ const ASIDE = '(?:(?:[^\\S\\n]+(?:over|during|across|for|in|at)[^\\S\\n]+(?:the|
 const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|)»”"'’]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
 /** Between a COP and its value: the mode and whose it is ("COP in cooling of", "heating COP of the BW-8 is"). */
 const COP_OWNER = '(?:[^\\S\\n]+(?:in|for|when)[^\\S\\n]+(?:heating|cooling)(?:[^\\S\\n]+mode)?)?(?:[^\\S\\n]+(?:of|for)[^\\S\\n]+(?:the|this|our|its|each|every|a|an)[^\\S\\n]+(?:[\\p{L}\\p{N}-]+[^\\S\\n]+){0,2}?[\\p{L}\\p{N}][\\p{L}\\p{N}-]*(?=[^\\S\\n]+(?:is|was|were|of|at|lay|lies|sits|sat|stands|stood|ranged|ranges|varied|varies|came|comes|=|:)))?';
-const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${COP_OWNER}${ASIDE}${CONNECT}$`, 'u');
+const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${COP_OWNER}${ASIDE}(?:[^\\S\\n]+at)?${CONNECT}$`, 'u');
 /** An energy efficiency ratio (EER or SEER, in BTU/h of cooling per watt): a cooling COP × 3.412. */
 const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
 /** 1 BTU_IT/h = 0.293 071 1 W (NIST SP 811, Appendix B.8). */
@@ -29,7 +29,7 @@ const QE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:${alt(QUANTUM_EFFICIENCY_WORDS)})
 const QE_AFTER_RE = new RegExp(`[^\\S\\n]*(?:(?:\\p{L}+|-)[^\\S\\n]+){0,3}(?:${alt(QUANTUM_EFFICIENCY_WORDS)})(?!\\p{L})`, 'iuy');
 /** "efficiency … 45%": the keyword, then up to 60 characters without digits or a sentence break. */
 // (", measured as electrical output over heat absorbed at the head, was about 27 %": a clause set off by commas between.)
-const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|conversion|converts?|converting|turns?|turning|round[- ]trip|AFUE|(?<!(?:temperature|drag|friction|loss|absorption|transmission|reflection|discharge|transfer|expansion|correlation|variation|Seebeck|Peltier)[^\S\n]+)coefficients?(?![^\S\n]+of[^\S\n]+(?:performance|friction|drag|variation|thermal|determination|restitution|expansion|correlation)))(?!\p{L})((?:[^,\d.;!?\n]{0,25}?,[^,\d.;!?\n]{3,140}[,:]|[^\S\n]*[—–][^—–\d.;!?\n]{3,100}[—–])?[^\d.;!?\n]{0,60})$/iu;
+const EFFICIENCY_PERCENT_BEFORE_RE = /(?<!\p{L})(?:efficienc(?:y|ies)|η|efficient|(?:seasonal|heating|cooling|annual)[^\S\n]+performance(?:[^\S\n]+factor)?|conversion|converts?|converting|turns?|turning|round[- ]trip|AFUE|(?<!(?:temperature|drag|friction|loss|absorption|transmission|reflection|discharge|transfer|expansion|correlation|variation|Seebeck|Peltier)[^\S\n]+)coefficients?(?![^\S\n]+of[^\S\n]+(?:performance|friction|drag|variation|thermal|determination|restitution|expansion|correlation)))(?!\p{L})((?:[^,\d.;!?\n]{0,25}?,[^,\d.;!?\n]{3,140}[,:]|[^\S\n]*[—–][^—–\d.;!?\n]{3,100}[—–])?[^\d.;!?\n]{0,60})$/iu;
 const EFFICIENCY_CHANGE_RE = new RegExp(`(?<!\\p{L})(?:${alt(EFFICIENCY_CHANGE_WORDS)})(?!\\p{L})`, 'iu');
 /** "45 % efficient", "45% conversion efficiency", "45 %-efficient" (not "45% less efficient"). */
 const EFFICIENCY_AFTER_RE = /[^\S\n]*-?[^\S\n]*(?:(?:(?!(?:less|more|higher|lower|better|worse|of)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}efficien(?:t|tly|cy|cies)|round[- ]?trip(?:[^\S\n]+efficiency)?|AFUE)(?!\p{L})/iuy;

@@ -413,6 +413,16 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('It ran for 3 years.').map((x) => x.kind)).toEqual(['duration']);
   });
 
+  test("slides and session notes: 'seasonal performance 410 %' of heat pumps, 'put the day's COP at 3.8', a link's length in the item above its time", () => {
+    expect(read('Results: seasonal performance 410 % at the design point (flow 45 °C, outdoor air 2 °C) of the heat pumps.')[0]).toMatchObject({ kind: 'cop', role: 'heating', si: 4.1 });
+    expect(read("The presenter put the day's COP at 3.8.")).toMatchObject([{ kind: 'cop', si: 3.8 }]);
+    // 1,200 km / 2.1 ms = 5.714 × 10⁸ m/s, 1.906 c (c exact, BIPM SI Brochure).
+    const slide = '• 1,200 km between the two stations\n• first bit arrives 2.1 ms after sending\n• ⇒ signal faster than light';
+    expect(read(slide).find((x) => x.kind === 'speed')?.si).toBeCloseTo(1.2e6 / 2.1e-3, 0);
+    // A clock's agreement "within 50 ns" in the item after a distance is no signal's time.
+    expect(read('• The sites are 41 km apart.\n• Each clock agrees within 50 ns of the other.').some((x) => x.kind === 'speed')).toBe(false);
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
