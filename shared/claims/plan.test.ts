@@ -746,6 +746,16 @@ describe('propellant-free drives described the way letters and posters describe 
     // 2.4e-3 N × c / 1100 W = 654.09 (F ≤ P/c).
     expectFinding(photon('The stack (piezo capacitors whose mass is modulated in step with the push) measured 2.4 × 10⁻³ N at 1.1e3 W input.'), 'breaks', 'ratio', (2.4e-3 * C) / 1100, 0);
   });
+  it("a comparison after a quoted claim, or in a clause apart from the claimant's own, names no propellant of the claim's", () => {
+    // 0.18 N × c / 900 W = 59 958 (F ≤ P/c).
+    const quoted = "'The tube itself is pushed: 0.18 N from 900 W on our pendulum stand, with no propellant.' For comparison, a 900 W Hall thruster gives about 50 mN and needs xenon.";
+    expectFinding(photon(quoted), 'breaks', 'ratio', (0.18 * C) / 900, 0);
+    // 4.7 mN/kW × c = 1409.0.
+    const clause = 'The sealed cavity produces thrust with nothing leaving the spacecraft: 4.7 mN per kW. A Hall thruster gives ~60 mN/kW but burns xenon - and our figure of merit improves every quarter.';
+    expectFinding(photon(clause), 'breaks', 'ratio', 4.7e-6 * C, 0);
+    // The claimant's own thruster that burns xenon keeps its propellant.
+    expect(photon('Our Hall thruster gives 60 mN per kW; it burns xenon, with nothing leaving the spacecraft but the plume.')?.finding).not.toBe('breaks');
+  });
   it('an analogy or a use proposed for the drive names no propellant of its own', () => {
     const rowing = 'The device gives 0.4 N of thrust from 250 W without expelling any propellant. "It\'s like rowing a boat where the oar gets heavier on the stroke," he said.';
     expectFinding(photon(rowing), 'breaks', 'ratio', (0.4 * C) / 250, 0);

@@ -82,7 +82,7 @@ const AIR_PUSHER_ONE_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?
 
 /** A plain statement that nothing is thrown out ("with no propellant", "needs no propellant at all"). */
 const EXPLICIT_NO_PROPELLANT_RE =
-  /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected|comes out|(?:is )?thrown out)|without (?:throwing|expelling|ejecting|blowing) (?:anything|anything at all|any mass|any propellant|any reaction mass)(?: out)?|throws? nothing (?:out|away|overboard)|(?:does|do|did) not (?:need|use|require|carry|expel) (?:any )?propellant|(?:needing |needs |requires |requiring |uses |using |with )?no working fluid|with nothing leaving(?: it)?|(?:no air|nothing) to push (?:on|against)|nothing leaving (?:it|the (?:device|craft|capacitor|box|drive))|(?:ours|our (?:drive|thruster|device|engine|prototype|stack|cavity))(?: (?:certainly|simply))? (?:doesn't|does not|doesn’t)(?= ?[:;.,!—–-]))(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected|comes out|(?:is )?thrown out)|without (?:throwing|expelling|ejecting|blowing) (?:anything|anything at all|any mass|any propellant|any reaction mass)(?: out)?|throws? nothing (?:out|away|overboard)|(?:does|do|did) not (?:need|use|require|carry|expel) (?:any )?propellant|(?:needing |needs |requires |requiring |uses |using |with )?no working fluid|with nothing leaving(?: it)?|(?:no air|nothing) to push (?:on|against)|nothing leaving (?:it|the (?:device|craft|spacecraft|satellite|probe|vehicle|module|capacitor|box|drive|cavity|chamber))|(?:ours|our (?:drive|thruster|device|engine|prototype|stack|cavity))(?: (?:certainly|simply))? (?:doesn't|does not|doesn’t)(?= ?[:;.,!—–-]))(?!\p{L})/iu;
 /** A propulsion word said not to be there ("no tether", "without a fan"), or a mass inside the device pushed on ("on a brass reaction mass"). */
 const NEGATED_WORD_ALL_RE =
   /(?<!\p{L})(?:(?:no|without(?: an?)?|never|nor)[^\S\n]+(?:any[^\S\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?|water[- ]?jets?|paddles?|screws?|ablation|ablative loss)|(?:on|against|between|onto)[^\S\n]+(?:a|an|the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?reaction mass(?:es)?)(?!\p{L})/giu;
@@ -94,7 +94,7 @@ const CRAFT_ALL_RE = /(?<!\p{L})(?:(?:survey|hobby|model|small|RC|R\/C|radio[- ]
 const OWN_VOICE_RE = /(?<!\p{L})(?:our|ours|we|us|my|mine)(?!\p{L})/iu;
 /** A sentence that compares, asks, or moves on to another subject: its propulsion words are not the claim's. */
 const ASIDE_SENTENCE_RE =
-  /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|versus|vs(?:\.|(?![-\d]))|unlike|rather than|instead of|replaces?|replacing|will replace|(?:it's|it is|it’s|that's|that is|that’s|much|just|rather|a bit|somewhat) like|as if|akin to|analog(?:y|ous)|imagine)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month|lecture|lesson|class|chapter|episode|issue|talk)|also on the agenda)|(?<!\p{L})(?:(?:must|should|need to|needs to|to|first) (?:exclude|rule out)|alternative explanations?|candidate explanations?|artefacts?|artifacts?)(?!\p{L})|^[\s"“'‘>*•-]*(?:(?:most|all|ordinary|conventional|chemical|electric|ion|plasma|Hall|today's|existing|other)[\s-]+)*(?:rockets|engines|thrusters|drives|spacecraft|propulsion(?:[^\S\n]+systems?)?|satellites)[^\S\n]+(?:are|is|have|has|need|needs|must|carry|carries|use|uses|burn|work|get|throw|depend|depends|rel(?:y|ies)|require|requires)(?!\p{L})/iu;
+  /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|versus|vs(?:\.|(?![-\d]))|unlike|rather than|instead of|replaces?|replacing|will replace|(?:it's|it is|it’s|that's|that is|that’s|much|just|rather|a bit|somewhat) like|as if|akin to|analog(?:y|ous)|imagine)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month|lecture|lesson|class|chapter|episode|issue|talk)|also on the agenda)|(?<!\p{L})(?:(?:must|should|need to|needs to|to|first) (?:exclude|rule out)|alternative explanations?|candidate explanations?|artefacts?|artifacts?)(?!\p{L})|^[\s"“'‘>*•-]*(?:(?:an?|the)[\s-]+)?(?:(?:most|all|ordinary|conventional|chemical|electric|ion|plasma|Hall|today's|existing|other|typical|standard|commercial)[\s-]+)*(?:rockets?|engines?|thrusters?|drives|spacecraft|propulsion(?:[^\S\n]+systems?)?|satellites)[^\S\n]+(?:are|is|have|has|need|needs|must|carry|carries|use|uses|burn|burns|work|works|get|gets|throw|throws|depend|depends|rel(?:y|ies)|require|requires|gives?|produces?|delivers?|manages?|reach(?:es)?)(?!\p{L})/iu;
 /**
  * Where the text says plainly that nothing is thrown out, the words of propellant that count are those of
  * the claim's own sentences: not of a comparison ("how does that compare with an ion engine?"), a question,
@@ -103,9 +103,17 @@ const ASIDE_SENTENCE_RE =
 function onlyTheClaim(text: string, words: string): string {
   if (!EXPLICIT_NO_PROPELLANT_RE.test(text)) return words;
   return words
-    .split(/(?<=[.!?])\s+|\n/u)
-    // (A sentence in the claimant's own voice is never an aside: "Unlike those drives, our thruster uses xenon".)
-    .filter((sentence) => !ASIDE_SENTENCE_RE.test(sentence) || OWN_VOICE_RE.test(sentence))
+    .split(/(?<=[.!?]["'”’)\]]*)\s+|\n/u)
+    // (A sentence in the claimant's own voice is never an aside: "Unlike those drives, our thruster uses xenon";
+    // of an aside sentence whose own voice is in a clause of its own — "A Hall thruster gives ~60 mN/kW but
+    // burns xenon - and our figure of merit improves" — only that clause.)
+    .map((sentence) => {
+      if (!ASIDE_SENTENCE_RE.test(sentence)) return sentence;
+      if (!OWN_VOICE_RE.test(sentence)) return '';
+      const clauses = sentence.split(/[;—–]|[^\S\n]-[^\S\n]/u);
+      return clauses.length > 1 ? clauses.filter((c) => OWN_VOICE_RE.test(c)).join(' ') : sentence;
+    })
+    .filter((sentence) => sentence !== '')
     .join(' ');
 }
 

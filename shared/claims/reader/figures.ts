@@ -97,7 +97,7 @@ function erratumBare(text: string, start: number, drafts: Draft[]): { kind: Figu
 }
 
 /** "for every watt going in," before a figure: the unit in, said first. */
-const PER_UNIT_BEFORE_RE = /(?<!\p{L})(?:(?:for|per)[^\S\n]+(?:each|every|one)|each|every)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?:(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){1,6}?,(?:[^\S\n]+[\p{L}-]+){1,3}?|(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){0,9}?)[^\S\n]*[,:;]?[^\S\n]*(?:about|roughly|some|nearly|only|just)?[^\S\n]*$/iu;
+const PER_UNIT_BEFORE_RE = /(?<!\p{L})(?:(?:for|per)[^\S\n]+(?:each|every|one)|each|every)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?:(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){1,6}?,(?:[^\S\n]+[\p{L}][\p{L}\p{N}-]*){1,4}?|(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){0,9}?)[^\S\n]*[,:;]?[^\S\n]*(?:about|roughly|some|nearly|only|just)?[^\S\n]*$/iu;
 /** After a figure: it is what comes out ("1.25 watts would come out", "1.4 J come back"). */
 const COMES_OUT_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:(?:would|will|should|could|does|do|can|did|must)[^\S\n]+)?(?:come|comes|came|go|goes|went|get|gets|got)[^\S\n]+(?:out|back)(?!\p{L})/iu;
 
@@ -114,6 +114,9 @@ function gainAsCop(text: string, start: number, end: number): { role: 'heating' 
   const sentence = sentenceAround(text, start, end);
   const heating = { role: 'heating' as const, assumption: "A heat pump's heat out as a multiple of its work in: read as a heating COP." };
   if (HEAT_PUMP_RE.test(sentence)) return heating;
+  // ("For every kWh it draws, the HP-5 puts 3.4 kWh of heat into your home … 10 years on the compressor": heat
+  // given by a machine with a compressor or named a heat pump anywhere in the text.)
+  if (/^[^\S\n]*of[^\S\n]+(?:useful[^\S\n]+)?(?:heat|warmth)(?!\p{L})/iu.test(text.slice(end, end + 20)) && /(?<!\p{L})(?:compressors?|refrigerant)(?!\p{L})/iu.test(text.replace(/(?<!\p{L})(?:no|without|not an?|nor|never)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:compressors?|refrigerant(?:[^\S\n]+circuit)?)(?!\p{L})/giu, ' ')) && !COOLING_MACHINE_RE.test(text)) return heating;
   if (!MOVES_HEAT_RE.test(sentence)) return null;
   const paragraph = paragraphAround(text, start, end);
   const pump = HEAT_PUMP_RE.test(paragraph);
@@ -352,6 +355,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       if (upperNum !== undefined) upper = scaled(upperNum, factor);
     }
     if (kind === null) continue;
+    // "logged every 10 s for 9 days": an interval between readings, no run.
+    if (kind === 'duration' && /(?<!\p{L})(?:logged|sampled|recorded|read|polled|measured|saved|written|averaged)[^\S\n]+(?:once[^\S\n]+)?every[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 30), start))) role = 'aside';
     // "Revenue ×3 year on year": a growth factor over a year, no length of time.
     if (kind === 'duration' && /^[^\S\n]*(?:-|[^\S\n]+)?on[- ]year(?!\p{L})/iu.test(text.slice(end, end + 12))) continue;
     if ((kind === 'power' || kind === 'energy') && suffix?.type === 'unit' && !suffix.per) {
@@ -380,6 +385,13 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
           quantity = t.num;
           upper = upperNum;
           derived = 'units out for each unit in';
+          const asCop = gainAsCop(text, start, end);
+          if (asCop) {
+            kind = 'cop';
+            role = asCop.role;
+            derived = undefined;
+            assumption = asCop.assumption;
+          }
         }
       }
     }

@@ -423,6 +423,21 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('• The sites are 41 km apart.\n• Each clock agrees within 50 ns of the other.').some((x) => x.kind === 'speed')).toBe(false);
   });
 
+  test("a deck's lines: 'For every kWh it draws, the HP-5 puts 3.4 kWh of heat' beside a compressor; 'output into the site battery: 18 A at 48 V, logged every 10 s for 9 days'", () => {
+    const hp = "'For every kWh it draws, the Havlin HP-5 puts 3.4 kWh of heat into your home.'\n• 10 years on the compressor";
+    expect(read(hp)[0]).toMatchObject({ kind: 'cop', role: 'heating', si: 3.4 });
+    // A heater said to have no compressor is no heat pump: its 1.85 per unit is an efficiency.
+    expect(read('For every kWh it draws, the panel puts 1.85 kWh of heat into the room. It has no compressor.')[0]).toMatchObject({ kind: 'efficiency', si: 1.85 });
+    const log = '• drive motor: 6.5 A at 24 V\n• generator output into the site battery: 18 A at 48 V, logged every 10 s for 9 days';
+    const f = read(log);
+    expect(f.find((x) => x.text === '10 s')?.role).toBe('aside');
+    expect(f.find((x) => x.kind === 'power' && x.si === 864)?.role).toBe('out');
+    // 864 W / 156 W = 5.54 over the same 9 days.
+    const run = runClaimChecks(f, { text: log }).checks.find((c) => c.check === 'first-law');
+    expect(run?.finding).toBe('breaks');
+    expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, 864 / 156, 1e-9);
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([

@@ -69,6 +69,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'out',
     before: [
+      // "generator output into the site battery: 18 A at 48 V": what goes into a store is the device's output.
+      '(?:output|delivered|feeds?|fed|sends?|sent|charging current|charge) (?:in)?to (?:the |its |a )?(?:[\\w-]+ )?(?:battery|batteries|pack|bank|grid|store|load)(?:[^\\S\\n]*[:=])?',
       // (Before the plain word "output" below: the first alternative that fits wins.)
       // "its output meter logged 250 kWh" (before the input's plain "meter logged").
       '(?:output|load|export|generation) (?:meter|counter|logger|log)s? (?:[\\w-]+ )?(?:read|reads|recorded|records|showed|shows|measured|logged|logs|registered|counted|gave)',
