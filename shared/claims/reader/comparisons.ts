@@ -74,6 +74,11 @@ export function relate(text: string, drafts: Draft[]): void {
     const after = EXPLAINED_AWAY_AFTER_RE.exec(text.slice(d.end, d.end + 120));
     if (after && !/(?<!\p{L})(?:not|no|never|nor|rule[sd]?[^\S\n]+out|ruling[^\S\n]+out|excluded?)(?!\p{L})|n[’']t(?!\p{L})/iu.test(after[0])) compared.push(d);
   }
+  // "Dashed line: the 2019 unit it replaces (COP 2.6)": the figure of a machine the claim's replaces.
+  for (const d of drafts) {
+    if (d.role === 'aside' || d.derived || compared.includes(d)) continue;
+    if (/(?<!\p{L})(?:it|they|which|that|this one)[^\S\n]+(?:replaces|replaced|will replace|supersedes|superseded|succeeds)[^\S\n]*[(:,][^\S\n]*(?:[\p{L}-]+[^\S\n]*){0,2}[:=]?[^\S\n]*$/iu.test(text.slice(Math.max(0, d.start - 60), d.start))) compared.push(d);
+  }
   // "An earlier version of this story gave the output as 32 kW": a figure withdrawn.
   for (const d of drafts) {
     if (d.role === 'aside' || d.derived || compared.includes(d)) continue;

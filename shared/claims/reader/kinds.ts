@@ -255,6 +255,9 @@ export function bareKind(text: string, start: number, end: number, floor: number
   // (A clause set off by commas may take the COP further back than the usual window.)
   const wide = text.slice(Math.max(floor, start - BEFORE_WINDOW - 160), start);
   if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before) || COP_SYMBOL_BEFORE_RE.test(wide) || COP_WORDS_BEFORE_RE.test(wide)) return { kind: 'cop' };
+  // "Measured COP of the brine-to-water prototype over the six-week trial: between 3.2 and 3.8": a caption
+  // or a line that names the COP before its colon.
+  if (/^[^.;!?\n]{0,30}?(?<!\p{L})(?:COPs?|coefficients?[^\S\n]+of[^\S\n]+performance)(?!\p{L})[^:;!?\n]{0,100}:[^\S\n]*(?:(?:between|about|approx\.?|around|roughly|ca\.?|~|≈)[^\S\n]*)?$/u.test(text.slice(sentenceStart(text, start), start))) return { kind: 'cop' };
   // "The mean heating COP of the units at the rating point (…) was printed as 0.30": the subject of the
   // sentence names what a printed, given or stated figure is.
   if (PRINTED_AS_BEFORE_RE.test(text.slice(Math.max(0, start - 30), start))) {

@@ -438,6 +438,18 @@ describe('more ways claims are written (issue 11)', () => {
     expectRelClose(run!.outputs.find((o) => o.name === 'over_unity')!.si, 864 / 156, 1e-9);
   });
 
+  test("a poster's 'Loaded 1,150 lb, burnt out 410 lb'; a caption's 'Measured COP of … over the trial: between 3.2 and 3.8' beside 'the unit it replaces (COP 2.6)'", () => {
+    // 1 lb = 0.45359237 kg (NIST SP 811, App. B.8).
+    expect(read('Loaded 1,150 lb, burnt out 410 lb; hybrid, Isp 245 s (vac).').filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([
+      ['wet', expect.closeTo(1150 * 0.45359237, 6)],
+      ['dry', expect.closeTo(410 * 0.45359237, 6)],
+    ]);
+    const caption = 'Fig. 5. Measured COP of the brine-to-water prototype over the six-week trial: between 3.2 and 3.8, at a supply temperature of 35 °C and a borehole return of about 10 °C. Dashed line: the 2019 unit it replaces (COP 2.6).';
+    const f = read(caption);
+    expect(f.find((x) => x.kind === 'cop' && x.si === 3.2)).toMatchObject({ role: 'heating', upper: { si: 3.8 } });
+    expect(f.find((x) => x.kind === 'cop' && x.si === 2.6)?.role).toBe('aside');
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
