@@ -289,6 +289,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         kind = 'temperature-difference';
         quantity = differenceQuantity(scaled(t.num, suffix.form.factor), suffix.form.unit);
         direction = differenceDirection(text, end);
+        // ("Temperature drop, head to cooler 580 K": the other side lies below the one given.)
+        if (!direction && /(?<!\p{L})(?:temperature[^\S\n]+(?:drop|fall)|drops?[^\S\n]+(?:by|of)|fell[^\S\n]+by|falls?[^\S\n]+by)(?!\p{L})[^\n\d]{0,40}$/iu.test(text.slice(Math.max(0, text.lastIndexOf('\n', start - 1)), start))) direction = 'down';
         if (upperNum !== undefined) upper = differenceQuantity(upperNum, suffix.form.unit);
       } else if (
         kind === 'duration' &&

@@ -450,6 +450,27 @@ describe('more ways claims are written (issue 11)', () => {
     expect(f.find((x) => x.kind === 'cop' && x.si === 2.6)?.role).toBe('aside');
   });
 
+  test('a table copied off a slide with each value run into its label', () => {
+    const engine = 'ParameterValueUnit\nHeater head temperature650°C\nTemperature drop, head to cooler580K\nBrake efficiency38%\nShaft power3.1kW\nEngine mass61kg';
+    const f = read(engine);
+    expect(f.filter((x) => !x.derived).map((x) => [x.kind, x.si])).toEqual([
+      ['temperature', expect.closeTo(923.15, 9)],
+      ['temperature-difference', 580],
+      ['efficiency', 0.38],
+      ['power', 3100],
+      ['mass', 61],
+    ]);
+    // The cold side lies the drop below the head: 923.15 − 580 = 343.15 K; 0.38 / (1 − 343.15/923.15) = 0.6048.
+    expect(f.find((x) => x.kind === 'temperature' && x.role === 'cold')?.si).toBeCloseTo(343.15, 9);
+    const run = runClaimChecks(f, { text: engine }).checks.find((c) => c.check === 'carnot');
+    expectRelClose(run!.outputs.find((o) => o.name === 'eta_ratio')!.si, 0.38 / (1 - 343.15 / 923.15), 1e-9);
+    // °F → K = (F − 32)·5/9 + 273.15 (NIST SP 811, App. B.9); COP 3.43 against 322.04/40.56.
+    const pump = read('Outdoor47 °F\nSupply water120 °F\nHeating output48,000 BTU/h\nPower input4.1 kW\nCOP3.43');
+    expect(pump.map((x) => x.kind)).toEqual(['temperature', 'temperature', 'power', 'power', 'cop']);
+    // Short codes and chemical formulae stay as they are: no number is read out of "CO2" or "H2O".
+    expect(read('The CO2 and H2O lines were calibrated.')).toEqual([]);
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([

@@ -70,6 +70,8 @@ export function isDifference(text: string, start: number, end: number, floor: nu
   const before = text.slice(Math.max(floor, start - 60), start).replace(/\.{2,}|…+/gu, ' ');
   // A label of a sheet or a list: "ΔT source to flow: 40 K", "• Temperature lift (W35): 30 K".
   if (DIFF_LABEL_RE.test(before)) return true;
+  // A table's row label with no colon: "Temperature drop, head to cooler580K", "ΔT hot to cold 40 K".
+  if (/(?:^|\n)[^\S\n]*(?:ΔT|∆T|temperature[^\S\n]+(?:difference|differential|lift|rise|drop|span|spread))(?![\p{L}\p{N}])[^\n:=|•;\d]{0,40}$/iu.test(text.slice(Math.max(0, text.lastIndexOf('\n', start - 1)), start))) return true;
   // A figure that corrects a difference just before it is a difference.
   // (Looked for behind the floor: the corrected figure is the one read just before.)
   const corrected = CORRECTED_FROM_RE.exec(text.slice(Math.max(0, start - 60), start));
