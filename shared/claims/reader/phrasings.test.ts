@@ -471,6 +471,16 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('The CO2 and H2O lines were calibrated.')).toEqual([]);
   });
 
+  test("a deck's 'Target product: 600 W panels' is no figure of the tile measured; a pump's '1.5 kW of hydraulic power' is its output", () => {
+    const deck = 'The tile gives 4 W more heat than the 20 W it draws from the mains, over six weeks. Target product: 600 W panels for retrofits.';
+    const f = read(deck);
+    expect(f.find((x) => x.text === '600 W')?.role).toBe('aside');
+    // (20 + 4) / 20 = 1.2.
+    expectRelClose(runClaimChecks(f, { text: deck }).checks.find((c) => c.check === 'first-law')!.outputs.find((o) => o.name === 'over_unity')!.si, 1.2, 1e-9);
+    const pump = read("The pump's motor draws 9.2 A from the 230 V supply, and the company states 1.5 kW of hydraulic power at the duty point.");
+    expect(pump.find((x) => x.text === '1.5 kW')?.role).toBe('out');
+  });
+
   test('what a store takes and holds in a charge, and holds before it runs a load', () => {
     const charge = read('The dynamo puts 3 W into a little cell for 2 hours and the cell ends up holding 5 Wh.');
     expect(charge.filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([

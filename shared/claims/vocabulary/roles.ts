@@ -90,6 +90,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', '(?:can|could|will|would|to) discharge(?: at)?', 'gave back', 'on the shaft', 'at the shaft', '(?:generators?|alternators?|dynamos?)(?: (?!(?:is|was|are|were|being|been)\\b)[\\w-]+){0,5}? (?:sends?|sent|pushes|pushed|returns?|returned|puts? back|delivers|supplies)', '(?:shaft|brake) (?:power|output)(?:\x27s|\u2019s)?', 'dump(?:s|ed)?', '(?<![\\w-])out ?=', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
+      // "1.5 kW of hydraulic power at the duty point": what a pump gives the water.
+      'of hydraulic (?:power|output|work)',
       // A rating said before what makes power: "the 600 MW coal unit", "a 5 kW genset" (not a motor or engine, which may be what drives the device).
       '(?<!(?:of|from|off|by|on)[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+|a[^\\S\\n]+|an[^\\S\\n]+)?)(?:(?!(?:from|off|of|to|by|at|in|on|into|onto|with|for|the|a|an|its|their|our|and|or|per)\\b)[\\w-]+ ){0,2}(?:power plants?|power stations?|plants?|(?:coal|steam|gas|nuclear|geothermal|hydro|wind|solar|CCGT|generating|(?:coal|gas|oil|lignite|biomass)-fired) units?|gensets?|generating sets?|generators?|turbines?)(?! (?:draws?|takes?|consumes?|uses?|needs?|is fed|was fed|runs? on))',
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
