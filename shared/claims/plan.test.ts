@@ -1249,6 +1249,17 @@ test("a COP said as such with one side logged asks for the other: 'flow 35 °C, 
   expect(r.needs.find((n) => n.check === 'carnot')).toBeDefined();
 });
 
+test("a test log of an 'air/water HP prototype' is a heat pump's, whatever entry the matcher ranks first (invented test data)", () => {
+  const log = 'Bench 2, air/water HP prototype S/N 0117\n09:10 inlet air 7 °C. Flow setpoint 45 °C.\n09:45 heat to loop 9.47 kW, compressor + fan 2.31 kW on the bench power meter.\nCOP 4.1.';
+  // Even with an over-unity class from the matcher, 9.47 kW of heat from 2.31 kW is a heat pump's COP, not a breach.
+  const r = runClaimChecks(extractFigures(log), { text: log, classes: ['over-unity-circuit'] });
+  expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  // 4.1 / (318.15 / 38) = 0.4897 (heating COP against Th/(Th − Tc)).
+  expect(r.checks.find((c) => c.check === 'carnot')?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(4.1 / (318.15 / 38), 6);
+  // A "10 hp unit" is a motor's rating, no heat pump.
+  expect(readSignals({ text: 'The pump motor is a 10 hp unit drawing 8.2 kW at full load.' }).heatPump).toBe(false);
+});
+
 describe('review texts (invented test data)', () => {
   const runOf = (text: string, check: string) => runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === check);
   it('"if … the efficiency comes out below the Carnot value" is a condition, not a statement that the device is within it', () => {
