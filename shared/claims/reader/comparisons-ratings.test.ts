@@ -350,3 +350,56 @@ test("an exercise's figure said to be out of reach ('why no accelerator, however
   expect(run?.finding).toBe('consistent');
   expectRelClose(run!.outputs[0].si, 2.9e8 / 299_792_458, 1e-9);
 });
+
+describe("another machine's percentage, and an instrument's or a bound's force, beside the device's own (invented test data)", () => {
+  test("a rival's or an old boiler's bare percentage is kept, set aside, of the right kind", () => {
+    const rival = read('Our new marine diesel is 38 % efficient. A rival claims 52 % for a ship engine ten times the size.');
+    expect(brief(rival)).toEqual([
+      ['efficiency', null, expect.closeTo(0.38, 12)],
+      ['efficiency', 'aside', expect.closeTo(0.52, 12)],
+    ]);
+    const boiler = read('Our old oil boiler was rated at 88 %, which at least sounded honest. The heat pump is 400 % efficient.');
+    expect(brief(boiler)).toEqual([
+      ['efficiency', 'aside', expect.closeTo(0.88, 12)],
+      ['cop', 'heating', expect.closeTo(4, 12)],
+    ]);
+    // Above 100 %, beside a heat pump's COP: another heat pump's COP.
+    const older = read('The brochure says the AW-9 heat pump is 350 % efficient. A neighbour\'s older unit was quoted at 250 %.');
+    expect(brief(older)[1]).toEqual(['cop', 'aside', expect.closeTo(2.5, 12)]);
+    // A decade named is an earlier machine.
+    expect(brief(read('The new plant is 42 % efficient; a 1960s plant of the same size managed 32 %.'))[1]).toEqual(['efficiency', 'aside', expect.closeTo(0.32, 12)]);
+  });
+
+  test('a percentage that is no efficiency stays out, and none is made where the text gives no efficiency of its own', () => {
+    expect(read('The engine is 42 % efficient. Sales of the older model rose 20 % on last year.').map((f) => f.si)).toEqual([expect.closeTo(0.42, 12)]);
+    expect(read('The rival unit was quoted at 52 %; ours weighs 12 kg.').filter((f) => f.kind === 'efficiency')).toEqual([]);
+  });
+
+  test("a boiler's percentage in a heat pump text is an efficiency, not a COP", () => {
+    const f = read('We looked at three options. A new oil boiler would have cost least to fit, about 92 % efficient. The heat pump we chose runs at a COP of 3.4.');
+    expect(brief(f)).toEqual([
+      ['efficiency', null, expect.closeTo(0.92, 12)],
+      ['cop', 'heating', expect.closeTo(3.4, 12)],
+    ]);
+  });
+
+  test("a balance's resolution or calibration force, and the photon bound said for the device's power, are set aside", () => {
+    const f = read('The cavity drew 40 W and the balance, with 5 × 10⁻⁷ N resolution, read 2.4 mN. Calibration used a 100 µN electrostatic force.');
+    expect(f.filter((x) => x.kind === 'thrust').map((x) => [x.role, x.si])).toEqual([
+      ['aside', expect.closeTo(5e-7, 15)],
+      [null, expect.closeTo(2.4e-3, 12)],
+      ['aside', expect.closeTo(1e-4, 15)],
+    ]);
+    // P/c for 400 W is 1.334 µN (c = 299 792 458 m/s, exact: BIPM SI Brochure, 9th ed.), said rounded to 1.3 µN.
+    const text = 'The sealed module draws 400 W, uses no propellant, and was reported to push with 31 mN. Light carrying that power would push with at most 1.3 µN.';
+    const g = read(text);
+    expect(g.filter((x) => x.kind === 'thrust').map((x) => x.role)).toEqual([null, 'aside']);
+    // The check runs on the claimed 31 mN: F·c/P = 0.031 × 299 792 458 / 400 = 23 234 (worked by hand).
+    const run = runClaimChecks(g, { text }).checks.find((c) => c.check === 'photon-bound');
+    expect(run?.finding).toBe('breaks');
+    expectRelClose(run!.outputs.find((o) => o.name === 'ratio')!.si, (0.031 * 299792458) / 400, 1e-9);
+    // A laser's own thrust said in an explainer ("would produce about 33 µN") is the device's, not a bound.
+    const h = read('A laser emitting 10 kW would produce a thrust of about 33 micronewtons. That works out at 3.3 micronewtons per kilowatt.');
+    expect(h.find((x) => x.kind === 'thrust')?.role).toBeNull();
+  });
+});

@@ -10,7 +10,7 @@ import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
 import { asideStatedBounds, statedBound } from './bounds';
 import { comparedPercent, relate } from './comparisons';
-import { BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
+import { BEFORE_WINDOW, BURNER_RE, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
 import { asideApparentSpeeds, asideIdealDeltaV, asideOtherTopics, asideSignals, asideThresholds, asideWorkedBounds, rolesFromLineLabels } from './topics';
 import { insertAfter, siOf, typedSi, type Draft } from './draft';
 import { G0 } from '../../checks/constants';
@@ -155,6 +155,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   /** Figures said as the writer's ceiling (bounds.ts). */
   const bounds = new Set<Draft>();
   let floor = 0;
+  /** Percentages no reading took (asideOtherPercents). */
+  const unreadPercents: UnreadPercent[] = [];
 
   for (let i = 0; i < tokens.length; i++) {
     const t = tokens[i];
@@ -356,7 +358,10 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       quantity = scaled(t.num, factor);
       if (upperNum !== undefined) upper = scaled(upperNum, factor);
     }
-    if (kind === null) continue;
+    if (kind === null) {
+      if (suffix?.type === 'percent') unreadPercents.push({ start, end, num: t.num, upperNum });
+      continue;
+    }
     // "logged every 10 s for 9 days": an interval between readings, no run.
     if (kind === 'duration' && /(?<!\p{L})(?:logged|sampled|recorded|read|polled|measured|saved|written|averaged)[^\S\n]+(?:once[^\S\n]+)?every[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 30), start))) role = 'aside';
     // "Revenue ×3 year on year": a growth factor over a year, no length of time.
@@ -501,6 +506,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   asideSignals(text, drafts);
   asideThresholds(drafts);
   weightHeldUp(text, drafts);
+  asideOtherPercents(text, drafts, unreadPercents);
 
   const figures: Figure[] = [];
   for (const d of drafts) {
@@ -536,6 +542,53 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     figures.push(f);
   }
   return figures;
+}
+
+interface UnreadPercent {
+  start: number;
+  end: number;
+  num: string;
+  upperNum?: string;
+}
+
+/** Before a percentage: words of another machine it is set against, or of what that machine managed. */
+const OTHER_MACHINE_BEFORE_RE =
+  /(?<!\p{L})(?:rivals?|competitors?|competing|neighbou?r(?:'s|’s|s)?|older|old|previous|predecessors?|earlier|former|prior|first[^\S\n]+(?:prototype|version|model)|conventional|typical(?:ly)?|commercial|existing|current|replaced|(?:other|another)[^\S\n]+(?:forum|maker|group|firm|company|team|lab|design|unit|engine|cell|panel|model)|fielded|best|record|up[^\S\n]+from|down[^\S\n]+from|compared|comparison|versus|vs\.?|against|(?:1[89]|20)\d0s|reference[^\S\n]*\[|\[\d+\]|ref\.)(?!\p{L})/iu;
+/** Before a percentage: what a machine did or is rated at ("managed 32 %", "was rated at 88 %", "claims 52 %"). */
+const MANAGED_BEFORE_RE =
+  /(?<!\p{L})(?:managed?|manages|reach(?:ed|es)?|achiev(?:ed|es?)|rated(?:[^\S\n]+at)?|quoted(?:[^\S\n]+at)?|claim(?:s|ed)?|gets|got|scored|hit|did|does|at|of)[^\S\n]+(?:(?:about|around|roughly|some|only|just|nearly|almost|perhaps|maybe|over|under|up[^\S\n]+to|~|≈)[^\S\n]+)?$/iu;
+/** After a percentage: what makes it no efficiency ("% of the time", "% load", "% cheaper", "% more"). */
+const NOT_AN_EFFICIENCY_AFTER_RE =
+  /^[^\S\n]*(?:%|per[^\S\n]*cent|percent)?[^\S\n]*(?:of(?![^\S\n]+(?:the[^\S\n]+)?(?:heat|fuel|energy|input|sunlight|light)(?!\p{L}))|load|humidity|RH|discount|off|share|cheaper|dearer|more|less|lower|higher|fewer|savings?|saved|growth|interest|VAT|tax|margin|chance|probability|confidence|duty|throttle|capacity|availability|uptime|charge|charged|full|rebate|deposit|increase|decrease|drop|rise|improvement|better|worse|smaller|larger|bigger|faster|slower|per[^\S\n]+(?:year|annum|month)|a[^\S\n]+year|year[- ]on[- ]year|annually|of[^\S\n]+(?:the[^\S\n]+)?(?:time|rated|nominal|maximum|max|full|market|price|cost))(?!\p{L})/iu;
+
+/**
+ * "A rival claims 52 % for a ship engine ten times the size", "Our old oil boiler was rated at 88 %",
+ * "a 1960s plant of the same size managed 32 %": in a text that gives the device's own efficiency or COP,
+ * a bare percentage said of another machine it is set against is that machine's figure — kept, set aside,
+ * so the reader sees it was read and that no check uses it. (A boiler's is an efficiency; beside a COP, one
+ * above 100 % is another heat pump's COP.)
+ */
+function asideOtherPercents(text: string, drafts: Draft[], unread: UnreadPercent[]): void {
+  const own = drafts.filter((d) => (d.kind === 'efficiency' || d.kind === 'cop') && d.role !== 'aside' && !d.derived);
+  if (own.length === 0) return;
+  const ownCop = own.some((d) => d.kind === 'cop');
+  for (const u of unread) {
+    const value = Number(u.num);
+    const top = u.upperNum !== undefined ? Number(u.upperNum) : value;
+    if (!(value > 0) || !Number.isFinite(top)) continue;
+    if (NOT_AN_EFFICIENCY_AFTER_RE.test(text.slice(u.end, u.end + 30).replace(/^[^\S\n]*%/u, ''))) continue;
+    const sentence = sentenceAround(text, u.start, u.end);
+    const sentenceBefore = text.slice(windowStart(text, u.start, 0, 200), u.start);
+    if (!OTHER_MACHINE_BEFORE_RE.test(sentenceBefore) || !MANAGED_BEFORE_RE.test(text.slice(Math.max(0, u.start - 40), u.start))) continue;
+    const burner = BURNER_RE.test(sentence);
+    const kind: FigureKind = !burner && ownCop && top > 100 ? 'cop' : 'efficiency';
+    if (kind === 'efficiency' && top > 100) continue;
+    const d: Draft = { start: u.start, end: u.end, kind, quantity: String(Number((value / 100).toPrecision(12))), role: 'aside' };
+    if (u.upperNum !== undefined) d.upper = String(Number((top / 100).toPrecision(12)));
+    const pos = drafts.findIndex((x) => x.start > u.start);
+    if (pos < 0) drafts.push(d);
+    else drafts.splice(pos, 0, d);
+  }
 }
 
 /** Said of a body held up with nothing under it: "The 12-gram disc floats 3 cm above any desk", "cancels its own weight". */

@@ -204,7 +204,10 @@ export function readPercent(text: string, start: number, end: number, floor: num
   // (Heat pumps spoken of in general, or set against the device, name no heat pump here: "Heat pumps are
   // routinely described as more than 100 % efficient, and we see no reason why a solid-state emitter …".)
   const heatPump = HEAT_PUMP_RE.test(sentence.replace(GENERIC_HEAT_PUMPS_RE, ' ')) || (COMPRESSOR_OR_REFRIGERANT_RE.test(named) && HEATING_OUTPUT_RE.test(sentence) && !BURNER_RE.test(sentence));
-  if (!engineHere && !burnerOnly && heatPump && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
+  // ("A new oil boiler would have cost least to fit, about 92 % efficient", in a text on the heat pump
+  // chosen instead: the percentage's own sentence names a burner and no heat pump — a burner's efficiency.)
+  const burnerHere = value <= 100 && BURNER_RE.test(own) && !NAMED_HEAT_PUMP_RE.test(own) && !HEAT_PUMP_RE.test(own);
+  if (!engineHere && !burnerOnly && !burnerHere && heatPump && !COOLING_MACHINE_RE.test(sentence.replace(HEAT_PUMP_RE, ''))) {
     if (!(value <= 100)) return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump said to be more than 100 % efficient: read as a heating COP (heat delivered over work put in).' };
     return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A heat pump\'s percentage read as a heating COP (heat delivered over work put in).' };
   }

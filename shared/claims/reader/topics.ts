@@ -82,6 +82,16 @@ const C = 299792458;
 const LIMIT_BEFORE_RE =
   /(?<!\p{L})(?:the most|at most|at best|no more than|limit(?:ed)?|bound|maximum|ceiling|ideal|perfect|expected|predicts?|would (?:be|give|get|allow)|could (?:only )?(?:give|get|produce)|can only|allows?|P\/c|1\/c|light|photons?)(?!\p{L})/iu;
 
+/** Words of light, the thing a sealed device's bound is about ("a torch", "a perfect photon thruster", "P/c"). */
+const PHOTON_WORDS_RE = /(?<!\p{L})(?:light|photons?|photonic|torch|searchlight|lamp|laser|beam|radiation|radiates?|P\/c)(?!\p{L})/iu;
+/** Words of a bound as such (not of light alone: "our photon thruster produced …" is a claim). */
+const BOUND_WORDS_RE = /(?<!\p{L})(?:the most|at most|at best|no more than|limit|bound|maximum|ceiling|ideal|perfect(?:ly)?|can only|P\/c)(?!\p{L})/iu;
+/** Before a force in its sentence: an instrument's resolution, sensitivity or calibration. */
+const INSTRUMENT_BEFORE_RE =
+  /(?<!\p{L})(?:resolution|resolve[sd]?|resolving|sensitivity|noise floor|detection (?:limit|threshold)|calibrat\w*|(?:measurements?|forces?) down to)(?!\p{L})[^.;!?\n,]{0,40}$/iu;
+/** Right after a force: "… resolution", "… calibration force". */
+const INSTRUMENT_AFTER_RE = /^[^\S\n]*(?:\)[^\S\n]*)?(?:resolution|sensitivity|noise floor|calibration)(?!\p{L})/iu;
+
 /** Words of a measured or claimed figure before it in its sentence ("the measured thrust … was 16 µN"). */
 const MEASURED_BEFORE_RE = /(?<!\p{L})(?:measur\w*|recorded|observed|readings?|reported|claim\w*|achiev\w*|reach\w*|demonstrat\w*|obtained|we (?:got|saw|found))(?!\p{L})/iu;
 
@@ -101,10 +111,18 @@ export function asideWorkedBounds(text: string, drafts: Draft[]): void {
     if (d.kind === 'thrust-per-power') return near(si, 1 / C, 0.01) || (said && near(si, 1 / C, 0.05));
     if (d.kind !== 'thrust' || MEASURED_BEFORE_RE.test(text.slice(sentenceStart(d.start), d.start))) return false;
     const from = sentenceStart(d.start);
-    return drafts.some((p) => p.kind === 'power' && p.role !== 'aside' && sentenceStart(p.start) === from && near(si, (siOf(p) ?? 0) / C, said ? 0.02 : 0.01));
+    if (drafts.some((p) => p.kind === 'power' && p.role !== 'aside' && sentenceStart(p.start) === from && near(si, (siOf(p) ?? 0) / C, said ? 0.02 : 0.01))) return true;
+    // ("Light carrying that much power would push with at most 3.34 µN", "at that drive power a light beam
+    // pushes with about 0.3 micronewtons": the bound said as such, for a power the text gives elsewhere,
+    // rounded as writers round.)
+    const before = text.slice(from, d.start);
+    return BOUND_WORDS_RE.test(before) && PHOTON_WORDS_RE.test(before) && drafts.some((p) => p.kind === 'power' && p.role !== 'aside' && !p.derived && near(si, (siOf(p) ?? 0) / C, 0.12));
   };
+  // "a torsion balance with 5 × 10⁻⁷ N resolution", "calibration used a 100 µN electrostatic force": the
+  // instrument's reach or its calibration, no force of the device.
+  const instrument = (d: Draft): boolean => d.kind === 'thrust' && d.role !== 'aside' && !d.derived && (INSTRUMENT_BEFORE_RE.test(text.slice(sentenceStart(d.start), d.start)) || INSTRUMENT_AFTER_RE.test(text.slice(d.end, d.end + 24)));
   const thrusts = drafts.filter((d) => (d.kind === 'thrust' || d.kind === 'thrust-per-power') && d.role !== 'aside');
-  const bounds = thrusts.filter(bound);
+  const bounds = thrusts.filter((d) => bound(d) || instrument(d));
   if (bounds.length > 0 && bounds.length < thrusts.length) for (const d of bounds) d.role = 'aside';
   // "for that thrust to sit at the photon limit, the device would need about 330 kW": the power the bound
   // asks for, worked backwards from the claimed thrust — no power of the device.
