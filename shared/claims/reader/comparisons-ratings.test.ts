@@ -403,3 +403,14 @@ describe("another machine's percentage, and an instrument's or a bound's force, 
     expect(h.find((x) => x.kind === 'thrust')?.role).toBeNull();
   });
 });
+
+describe('a room or the weather, in a text with no machine that works on heat (invented test data)', () => {
+  test('is a condition of the test, set aside', () => {
+    const f = read('Generator set trial: it burned fuel worth 30 kWh and delivered 9.5 kWh to the load bank. Ambient 11 °C, rain.');
+    expect(f.find((x) => x.kind === 'temperature')).toMatchObject({ role: 'aside', si: expect.closeTo(284.15, 9) });
+  });
+  test('but stays the cold side where an engine or a heat pump is named', () => {
+    const f = read('The Stirling engine ran off a 90 °C tank; ambient 11 °C.');
+    expect(f.find((x) => x.kind === 'temperature' && x.si < 290)?.role).toBe('cold');
+  });
+});

@@ -507,6 +507,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   asideThresholds(drafts);
   weightHeldUp(text, drafts);
   asideOtherPercents(text, drafts, unreadPercents);
+  asideLoneAmbient(text, drafts);
 
   const figures: Figure[] = [];
   for (const d of drafts) {
@@ -588,6 +589,26 @@ function asideOtherPercents(text: string, drafts: Draft[], unread: UnreadPercent
     const pos = drafts.findIndex((x) => x.start > u.start);
     if (pos < 0) drafts.push(d);
     else drafts.splice(pos, 0, d);
+  }
+}
+
+/** A machine that works on heat: one whose cold side a room or the outdoor air may be. */
+const THERMAL_MACHINE_RE =
+  /(?<!\p{L})(?:engines?|turbines?|Stirling|thermoelectric\w*|TEGs?|Peltier|Seebeck|thermocouples?|thermophotovoltaic\w*|TPV|Carnot|Rankine|ORC|steam|heat[- ]?(?:engines?|pumps?|exchangers?)|harvest\w*|thermal[- ]to[- ]electric)(?!\p{L})/iu;
+/** Just before a temperature: the room, the weather, the test cell it was taken in. */
+const AMBIENT_LEAD_RE =
+  /(?<!\p{L})(?:room|ambient|outside|outdoors?|outdoor[^\S\n]+(?:air|temperature)|indoors?|lab(?:oratory)?|test[^\S\n]+cell|weather|air[^\S\n]+temperature|overnight|it[^\S\n]+was|gallery|tent|garage|workshop|shed)(?!\p{L})[^.;!?\n\d]{0,30}$/iu;
+
+/**
+ * "Run B … Room at 24 °C", "Ambient 11 °C, rain", "outside it was 28 °C": in a text with no machine that
+ * works on heat and no efficiency, COP or hot side of its own, the room's or the weather's temperature is
+ * a condition of the test, no cold side of anything — set aside.
+ */
+function asideLoneAmbient(text: string, drafts: Draft[]): void {
+  if (THERMAL_MACHINE_RE.test(text) || HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text)) return;
+  if (drafts.some((d) => d.role !== 'aside' && (d.kind === 'efficiency' || d.kind === 'cop' || d.kind === 'temperature-difference' || (d.kind === 'temperature' && d.role === 'hot')))) return;
+  for (const d of drafts) {
+    if (d.kind === 'temperature' && d.role === 'cold' && !d.derived && AMBIENT_LEAD_RE.test(text.slice(Math.max(0, d.start - 50), d.start))) d.role = 'aside';
   }
 }
 

@@ -74,14 +74,18 @@ describe('roles', () => {
     ['Heat comes from a 300 °C source.', 'hot'],
     ['The flame reaches 1200 K.', 'hot'],
     ['Steam at 180 °C drives it.', 'hot'],
-    ['Ambient is 20 °C.', 'cold'],
-    ['The room is at 21 °C.', 'cold'],
+    ['The engine runs off a hot tank; ambient is 20 °C.', 'cold'],
+    ['The heat pump sits in a room at 21 °C.', 'cold'],
     ['The cold side is held at 5 °C.', 'cold'],
     ['It rejects heat to a 15 °C sink.', 'cold'],
-    ['Outside, it is 2 °C.', 'cold'],
+    ['Outside the Stirling engine, it is 2 °C.', 'cold'],
     ['River water at 12 °C cools it.', 'cold'],
     // A lone temperature of no side, in a text that names nothing a check could use it for, is set aside.
     ['It was measured at 40 °C.', 'aside'],
+    // So is the room's or the weather's, with no machine that works on heat and no hot side named.
+    ['Ambient is 20 °C.', 'aside'],
+    ['The room is at 21 °C.', 'aside'],
+    ['Outside, it is 2 °C.', 'aside'],
   ])('temperature: "%s" (invented test data)', (text, role) => {
     expect(only(text)).toMatchObject({ kind: 'temperature', role });
   });
