@@ -117,6 +117,10 @@ function combine(figs: Figure[], side: 'in' | 'out', text: string): Figure | und
     const allNamed = forms.every((x) => x !== null) && new Set(forms).size === forms.length;
     if (!allNamed) return [...distinct].sort((a, b) => b.si - a.si)[0];
   } else {
+    // "moving about 0.6 W of heat out of the box for each watt of electricity": the one unit in that the
+    // text sets against its output is the input of the ratio it states, whatever else it says it draws.
+    const perUnit = distinct.filter((f) => f.derived !== undefined && /^one .+ in, from "for every /u.test(f.derived));
+    if (perUnit.length === 1) return perUnit[0];
     // A derived input (a power from a current and a voltage) that equals the others added up repeats them.
     parts = distinct.filter((f) => !(f.derived && Math.abs(f.si - distinct.filter((g) => g !== f).reduce((a, g) => a + g.si, 0)) <= 0.01 * f.si));
     // Inputs said in different sentences, not named as different forms (electricity and gas), are

@@ -35,7 +35,7 @@ const OVER_UNITY_RE =
 /** A device whose output is heat (a solar collector, a boiler, a heater): its efficiency is heat over heat. */
 export const HEAT_ONLY_RE = /(?<!\p{L})(?:(?:delivered|given|supplied|collected|recovered|available|comes? out|output) as (?:useful )?heat|heat output|thermal output|(?:solar|flat-?plate|evacuated-?tube) (?:thermal )?collectors?|solar thermal|collector efficiency|water heaters?|boilers?|furnaces?|space heaters?)(?!\p{L})/iu;
 /** A machine that moves heat is said to: cooling words name a fridge or chiller the text may only mention as a load. */
-const COOLING_ACTION_RE = /(?<!\p{L})(?:(?:removes?|extracts?|pumps?|draws?|takes?|moves?|lifts?|rejects?)(?: \S+){0,3} (?:of )?heat|cooling (?:capacity|power|output|load|duty|COP)|refrigerat(?:ion|ing) (?:capacity|effect|duty|output)|cooling COP|(?:of|for) (?:cooling|refrigeration)(?! (?:water|fans?|fluids?|oil|air|towers?|jackets?|loops?|circuits?)))(?!\p{L})/iu;
+const COOLING_ACTION_RE = /(?<!\p{L})(?:(?:remov(?:es?|ing|ed)|extract(?:s|ing|ed)?|pump(?:s|ing|ed)?|draws?|drawing|takes?|taking|mov(?:es?|ing)|lift(?:s|ing)?|reject(?:s|ing)?)(?: \S+){0,3} (?:of )?heat|remov(?:es?|ing|ed) [^.;!?\n]{0,40}(?:from|out of) (?:the |a |its )?(?:[\w-]+ ){0,2}(?:loop|room|space|store|cabinet|building|hall|cold room|freezer|water)|chilled[- ]water|tons? of (?:cooling|refrigeration)|refrigeration tons?|kW\/ton|EER|SEER|cooling (?:capacity|power|output|load|duty|COP)|refrigerat(?:ion|ing) (?:capacity|effect|duty|output)|cooling COP|(?:of|for) (?:cooling|refrigeration)(?! (?:water|fans?|fluids?|oil|air|towers?|jackets?|loops?|circuits?)))(?!\p{L})/iu;
 
 export interface Signals {
   propellantFree: boolean;

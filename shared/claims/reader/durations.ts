@@ -11,6 +11,12 @@ import { insertAfter, sameClause, sentenceOf, siOf, typedSi, upperSiOf, type Dra
 const NOT_A_RUN_RE =
   /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline|install\w*|integrat\w*|spent|calibrat\w*|settl\w*|drills?|swings?|period)(?!\p{L})/iu;
 
+/** Right before a time: a payback, a warranty, a guarantee, a life or a lead time ("payback est.", "pays for itself in"). */
+const TERM_NOT_RUN_BEFORE_RE =
+  /(?<!\p{L})(?:payback(?:[^\S\n]+(?:period|time))?|pays?[^\S\n]+(?:for[^\S\n]+)?(?:it|them)sel(?:f|ves)|warrant(?:y|ied|ee)|guarantee[ds]?|(?:service|design|useful|expected|rated)[^\S\n]+life(?:time)?|lifetime|lead[^\S\n]+time|amorti[sz]\w*)(?!\p{L})[^.;!?\n\d]{0,20}$/iu;
+/** Right after a time: "… warranty", "… payback", "… design life". */
+const TERM_NOT_RUN_AFTER_RE = /^[^\S\n]*(?:[-–][^\S\n]*)?(?:warrant(?:y|ies)|guarantee|payback|(?:service|design|useful)[^\S\n]+life|lifetime|lifespan)(?!\p{L})/iu;
+
 /** A sentence that is a label of a term: "Duration: five months", "Project duration | 24 months". */
 const TERM_LABEL_RE = /^[\s•*-]*(?:(?:project|proposed|planned|total|expected)[^\S\n]+)?(?:duration|term|timescale|time ?frame|period)[^\S\n]*(?:[:|]|\.{2,})/iu;
 /** Words of a funder or an application. */
@@ -104,6 +110,9 @@ export function relateDurations(text: string, drafts: Draft[]): void {
     // ("Amount requested: EUR 7,200. Duration: five months.": the length of the work a funder pays for.)
     const termOfWork = TERM_LABEL_RE.test(sentence) && FUNDING_RE.test(text);
     if ((NOT_A_RUN_RE.test(sentence) || SUPPOSED_TIME_RE.test(sentence) || termOfWork) && !drafts.some((e) => (e.kind === 'power' || e.kind === 'energy') && sentenceOf(text, e) === sentenceOf(text, d))) d.role = 'aside';
+    // ("Replacement payback est. 6–7 years", "the 5 kW unit pays for itself in 6 years", "a 10-year warranty"):
+    // a time named right before or after as a payback, a warranty or a life is none, whatever else its sentence holds.
+    else if (TERM_NOT_RUN_BEFORE_RE.test(text.slice(Math.max(0, d.start - 45), d.start).replace(/(?<!\p{L})(?:est|approx|ca|abt)\./giu, ' ')) || TERM_NOT_RUN_AFTER_RE.test(text.slice(d.end, d.end + 30))) d.role = 'aside';
   }
 
   // "30 kWh a day … over a fortnight": an energy per day, where the text states a longer run, is a

@@ -90,7 +90,7 @@ const PERCENT_OF_INPUT_RE =
   /[^\S\n]*of[^\S\n]+(?:what|whatever|all|everything)[^\S\n]+(?:(?:that[^\S\n]+)?(?:it|they|the[^\S\n]+[\p{L}-]+|you|we))[^\S\n]+(?:draws?|takes?|consumes?|uses?|gets?|is (?:given|fed|supplied)|(?:is )?put in|puts? in|pulls?)(?!\p{L})|[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|(?:energy|power) (?:in|supplied|consumed|drawn|fed|put|(?:it|they) (?:receives?|takes?|gets?|draws?|consumes?)|received|taken in)|supply|electrical input)(?!\p{L})/iuy;
 /** "1.3 W for each watt in", "1.3 J back per joule supplied": a gain written with a unit. */
 export const GAIN_PER_UNIT_RE =
-  /[^\S\n]*(?:(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|useful|shaft)[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+)?(?:(?:back|out|returned)[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?!\p{L})/iuy;
+  /[^\S\n]*(?:(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|useful|shaft)[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+)?(?:(?:back|out|returned)(?:[^\S\n]+(?:of|from)[^\S\n]+(?:the|its|a|an)[^\S\n]+[\p{L}-]+)?[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?!\p{L})/iuy;
 /** The unit named after "for every": what one of it is, as a quantity (none for a bare "unit"). */
 export const PER_UNIT_QUANTITY: Record<string, { kind: 'power' | 'energy'; quantity: string }> = {
   watt: { kind: 'power', quantity: '1 W' },

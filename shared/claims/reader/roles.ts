@@ -113,6 +113,10 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       const line = text.slice(text.lastIndexOf('\n', start - 1) + 1, start);
       const label = /^[^\S\n]*(?:[-•*·][^\S\n]*)?(?:(?:heat|air|ground|water|brine)[^\S\n]+)?(source|sink)(?!\p{L})[^:|\n.]{0,30}(?:[:|]|\.{2,})/iu.exec(line);
       if (label && !/\p{N}/u.test(line.slice(label[0].length))) return label[1].toLowerCase() === 'sink' ? 'hot' : 'cold';
+      // "The rooftop condensers run at 30 °C", "evaporating at −25 °C": a refrigerating machine's condenser is
+      // its warm side and its evaporator its cold one (the other way round from an engine's condenser).
+      if (/(?<!\p{L})condens(?:ers?|ing)(?!\p{L})[^.;!?\n\d]{0,25}$/iu.test(lead)) return 'hot';
+      if (/(?<!\p{L})evaporat(?:ors?|ing)(?!\p{L})[^.;!?\n\d]{0,25}$/iu.test(lead)) return 'cold';
       // "rejecting heat on deck at 32 °C": where a fridge or a heat pump rejects its heat is its warm side.
       if (/(?<!\p{L})(?:reject(?:s|ed|ing)?|dump(?:s|ed|ing)?|shed(?:s|ding)?|discharg(?:es|ed|ing))[^\S\n]+(?:(?:its|the)[^\S\n]+)?(?:waste[^\S\n]+)?heat(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]+(?:at|of)[^\S\n]*(?:(?:about|around|roughly|some)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
     }
@@ -148,6 +152,12 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     // "Turning the handle briskly puts about 6 W into the little generator inside": what a person's effort
     // puts into the machine is its input (not "the rotor puts 1.2 kW into the generator on its shaft").
     if (MUSCLE_LEAD_RE.test(text.slice(Math.max(floor, start - 70), start)) && /^[^\S\n]+(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?into[^\S\n]+(?:the|its|a|an)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:generators?|dynamos?|alternators?|machines?|devices?|units?|mechanisms?|flywheels?|springs?)(?!\p{L})/iu.test(text.slice(end, end + 60))) return 'in';
+    // "the heat meter read 8.4 kW": a heat meter counts the heat delivered — the output.
+    // (The figure itself right after the meter's verb: the text up to its end; where words of heat follow
+    // it, they say so themselves.)
+    if (/(?<!\p{L})heat[- ]?meters?[^\S\n]+(?:read|reads|recorded|records|showed|shows|measured|logged|registered|gave|gives|totall?ed|indicated)[^\S\n]+(?:(?:about|some|roughly|only|just|nearly|a total of)[^\S\n]+)?[\d.,]+[^\S\n]*[\p{L}/·]+$/iu.test(text.slice(Math.max(0, end - 90), end)) && !/^[^\S\n]+(?:of[^\S\n]+)?(?:heat|warmth|thermal|useful)(?!\p{L})/iu.test(text.slice(end, end + 20))) return 'out';
+    // "putting 1.5 kW back into the ring main", "exports 3 kW to the grid": what goes back to the supply is the output.
+    if (/(?<!\p{L})(?:putting|puts?|feeding|feeds|fed|sending|sends|sent|exporting|exports?|exported|pushing|pushes|returning|returns|returned)[^\S\n]+(?:(?:about|around|some|roughly|up to|nearly|over)[^\S\n]+)?$/iu.test(lead) && /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:back[^\S\n]+)?(?:in)?to[^\S\n]+(?:the[^\S\n]+|your[^\S\n]+|its[^\S\n]+)?(?:ring[^\S\n]+main|mains|grid|socket|supply|network|house(?:hold)?|home|wiring|circuit)(?!\p{L})/iu.test(text.slice(end, end + 50))) return 'out';
     // "the calorimeter constant to within 0.3 W", "a resolution of 5 mW": how well it was measured, not a flow.
     if (PRECISION_LEAD_RE.test(lead)) return 'aside';
     // "The energy meter recorded 12.0 kWh", where the methods put the one meter at the output ("power

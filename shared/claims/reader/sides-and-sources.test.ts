@@ -462,3 +462,53 @@ test("a heat engine's two temperatures, one of them room air: the room is its co
   expect(run?.finding).toBe('consistent');
   expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.12 / (1 - 293.15 / 363.15), 6);
 });
+
+describe('energy audits: chillers, cold stores, heat meters and the grid (invented test data)', () => {
+  // Carnot COP of cooling Tc/(Th − Tc) (Çengel & Boles, ch. 6); °F → K = (F − 32)·5/9 + 273.15 (NIST SP 811, B.8);
+  // 1 BTU_IT/h = 0.293 071 07 W (NIST SP 811, Appendix B.8).
+  test("a chiller removing heat from its chilled-water loop is checked on its COP, not against the first law, and a payback is no run", () => {
+    const text = 'Chiller 2 was removing 120,000 BTU/h from the chilled-water loop while drawing 9.8 kW, with 44°F supply water and 95°F entering condenser water. Replacement payback est. 6–7 years at $0.14/kWh.';
+    const f = read(text);
+    expect(f.find((x) => x.kind === 'duration')?.role).toBe('aside');
+    expect(f.some((x) => x.kind === 'energy')).toBe(false);
+    const { checks } = verdicts(text);
+    expect(checks.map((c) => c.check)).toEqual(['carnot']);
+    const tc = ((44 - 32) * 5) / 9 + 273.15;
+    const th = ((95 - 32) * 5) / 9 + 273.15;
+    const cop = (120000 * 0.29307107) / 9800;
+    expect(checks[0].finding).toBe('consistent');
+    expectRelClose(checks[0].outputs.find((o) => o.name === 'cop_cooling_ratio')!.si, cop / (tc / (th - tc)), 1e-6);
+  });
+
+  test("a cold store's condensers are its warm side, and the lift down to the freezer gives the cold one", () => {
+    const text = "Cold store audit. The rooftop condensers run at 30 °C and the lift down to the freezer room is 52 K. The plant's cooling COP averages 2.1.";
+    expect(temps(read(text))).toEqual([
+      ['hot', expect.closeTo(303.15, 9)],
+      ['cold', expect.closeTo(251.15, 9)],
+    ]);
+    expect(read(text).find((x) => x.kind === 'cop')).toMatchObject({ role: 'cooling', si: 2.1 });
+    expect(read('The Peltier cooler holds 25 °C in a 40 °C room. Its datasheet COP at that difference is 0.6.').find((x) => x.kind === 'cop')?.si).toBe(0.6);
+  });
+
+  test('what a heat meter read is heat out; what goes back into the ring main is output', () => {
+    const f = read('Ground-source heat pump: loop at 6 °C, flow 35 °C. At steady state the heat meter read 8.4 kW against 1.9 kW electrical input.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['out', 8400],
+      ['in', 1900],
+    ]);
+    // Heat words after the figure still say so themselves, and the input after them keeps its side.
+    const g = read('Over a 30-day test, the heat meter recorded 1,450 kWh of heat delivered against 410 kWh of electricity consumed.');
+    expect(g.filter((x) => x.kind === 'energy').map((x) => x.role)).toEqual(['out', 'in']);
+    const h = read("The rep said the box was 'putting 1.5 kW back into the ring main'. My clamp meter read 3.2 A at 230 V going in.");
+    expect(h.find((x) => x.kind === 'power' && x.si === 1500)?.role).toBe('out');
+    expect(h.find((x) => x.kind === 'power' && x.derived)).toMatchObject({ role: 'in', si: expect.closeTo(736, 9) });
+  });
+
+  test('heat moved out of a box for each watt of electricity is a cooling output per watt in', () => {
+    const text = 'The Peltier cool box holds 5 °C inside with the van at 30 °C. It is moving about 0.6 W of heat out of the box for each watt of electricity.';
+    const { checks } = verdicts(text);
+    const carnot = checks.find((c) => c.check === 'carnot');
+    // COP 0.6 against Tc/(Th − Tc) = 278.15/25.
+    expectRelClose(carnot!.outputs.find((o) => o.name === 'cop_cooling_ratio')!.si, 0.6 / (278.15 / 25), 1e-9);
+  });
+});
