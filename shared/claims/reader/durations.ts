@@ -112,6 +112,7 @@ export function relateDurations(text: string, drafts: Draft[]): void {
     if ((NOT_A_RUN_RE.test(sentence) || SUPPOSED_TIME_RE.test(sentence) || termOfWork) && !drafts.some((e) => (e.kind === 'power' || e.kind === 'energy') && sentenceOf(text, e) === sentenceOf(text, d))) d.role = 'aside';
     // ("Replacement payback est. 6–7 years", "the 5 kW unit pays for itself in 6 years", "a 10-year warranty"):
     // a time named right before or after as a payback, a warranty or a life is none, whatever else its sentence holds.
+    else if (/(?<!\p{L})(?:each|every)[^\S\n]+(?:(?:under|over|about|around|lasting|of|taking|for)[^\S\n]+)?(?:(?:about|around|roughly)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, d.start - 30), d.start))) d.role = 'aside'; // ("Defrost cycles: 3–5 a day, each under four minutes": one cycle's length, no run.)
     else if (TERM_NOT_RUN_BEFORE_RE.test(text.slice(Math.max(0, d.start - 45), d.start).replace(/(?<!\p{L})(?:est|approx|ca|abt)\./giu, ' ')) || TERM_NOT_RUN_AFTER_RE.test(text.slice(d.end, d.end + 30))) d.role = 'aside';
   }
 

@@ -104,6 +104,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     if (/(?<!\p{L})(?:burn(?:s|ed|t|ing)?|drops?|dropped|dropping|falls?|fell|falling|goes|went|came)[^.;!?\n]{0,60}(?<!\p{L})down[^\S\n]+to[^\S\n]+(?:(?:about|around|roughly|some|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 120), start))) return 'dry';
   }
   if (roles === ROLES.temperature) {
+    // "Antifreeze 25 %, freeze point checked at −11 °C", "flash point 62 °C": a property of a fluid, no side of the machine.
+    if (/(?<!\p{L})(?:freez(?:e|ing)|boiling|flash|melting|dew|pour|cloud|fire|smoke)[- ]points?(?!\p{L})[^.;!?\n\d]{0,25}$/iu.test(text.slice(Math.max(floor, start - 50), start))) return 'aside';
     // A heat pump's or fridge's source is its cold side and its sink the warm one (the other way round for an engine).
     if (HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text)) {
       const lead = text.slice(Math.max(floor, start - 40), start);
@@ -155,7 +157,15 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     // "the heat meter read 8.4 kW": a heat meter counts the heat delivered — the output.
     // (The figure itself right after the meter's verb: the text up to its end; where words of heat follow
     // it, they say so themselves.)
-    if (/(?<!\p{L})heat[- ]?meters?[^\S\n]+(?:read|reads|recorded|records|showed|shows|measured|logged|registered|gave|gives|totall?ed|indicated)[^\S\n]+(?:(?:about|some|roughly|only|just|nearly|a total of)[^\S\n]+)?[\d.,]+[^\S\n]*[\p{L}/·]+$/iu.test(text.slice(Math.max(0, end - 90), end)) && !/^[^\S\n]+(?:of[^\S\n]+)?(?:heat|warmth|thermal|useful)(?!\p{L})/iu.test(text.slice(end, end + 20))) return 'out';
+    const upToFigure = text.slice(Math.max(0, end - 110), end);
+    if (/(?<!\p{L})heat[- ]?meters?(?:[^\S\n]+on[^\S\n]+the[^\S\n]+[\p{L}-]+)?(?:[^\S\n]+(?:read|reads|recorded|records|showed|shows|measured|logged|registered|gave|gives|totall?ed|indicated))?[^\S\n]*[:=]?[^\S\n]*(?:(?:about|some|roughly|only|just|nearly|a total of)[^\S\n]+)?[\d.,]+[^\S\n]*[\p{L}/·]+$/iu.test(upToFigure) && !/^[^\S\n]+(?:of[^\S\n]+)?(?:heat|warmth|thermal|useful)(?!\p{L})/iu.test(text.slice(end, end + 20))) return 'out';
+    // "Gas meter: 28.4 kWh", "which at the supplier's calorific value comes to about 28.4 kWh": the fuel's energy, the input.
+    // (Only what a fuel meter read: the heating value of a fuel a device makes — an electrolyser's hydrogen — is its output.)
+    if (/(?<!\p{L})(?:gas|fuel|oil)[- ]meters?(?!\p{L})[^.!?\n]{0,90}?[\d.,]+[^\S\n]*[\p{L}/·]+$/iu.test(upToFigure)) return 'in';
+    // "(heat meter 11.2 kWh, electricity 2.6 kWh)" of a heat pump: the electricity is its input.
+    if (HEAT_PUMP_RE.test(text) && /(?:^|[(,;:][^\S\n]*)(?:electricity|electrical(?:[^\S\n]+(?:input|energy))?|electric(?:[^\S\n]+meter)?|power[^\S\n]+meter)[^\S\n]*[:=]?[^\S\n]*[\d.,]+[^\S\n]*[\p{L}/·]+$/iu.test(upToFigure)) return 'in';
+    // "The replacement chiller is sized for 2.4 kW of heat": a size chosen, not a flow of the device.
+    if (/(?<!\p{L})sized[^\S\n]+(?:for|at)[^\S\n]+(?:(?:about|around|roughly|some)[^\S\n]+)?$/iu.test(lead)) return 'aside';
     // "putting 1.5 kW back into the ring main", "exports 3 kW to the grid": what goes back to the supply is the output.
     if (/(?<!\p{L})(?:putting|puts?|feeding|feeds|fed|sending|sends|sent|exporting|exports?|exported|pushing|pushes|returning|returns|returned)[^\S\n]+(?:(?:about|around|some|roughly|up to|nearly|over)[^\S\n]+)?$/iu.test(lead) && /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:back[^\S\n]+)?(?:in)?to[^\S\n]+(?:the[^\S\n]+|your[^\S\n]+|its[^\S\n]+)?(?:ring[^\S\n]+main|mains|grid|socket|supply|network|house(?:hold)?|home|wiring|circuit)(?!\p{L})/iu.test(text.slice(end, end + 50))) return 'out';
     // "the calorimeter constant to within 0.3 W", "a resolution of 5 mW": how well it was measured, not a flow.
@@ -321,6 +331,13 @@ export function ratingRole(text: string, start: number, end: number): FigureRole
   if (/(?<!\p{L})(?:heaters?|kettles?|heating elements?|elements?|toasters?|hobs?|lamps?|bulbs?)(?!\p{L})[^.;!?\n]{0,20}?(?<!\p{L})rated[^\S\n]+(?:at|for)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 60), start))) return 'in';
   // "a 9 kW ground-source heat pump": a heat pump is rated by the heat it gives.
   if (!horsepower && /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?heat[- ]pumps?(?!\p{L})/iu.test(after) && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end))) return 'out';
+  // "(air-source heat pump, 7 kW)", "a 450 kW screw chiller", "The unit is rated 9 kW" in a heat pump's text:
+  // a machine that moves heat is sized by the heat it moves.
+  if (!horsepower && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end))) {
+    if (/^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:chillers?|heat[- ]pumps?|air[- ]conditioners?|(?:cooling|refrigeration)[^\S\n]+(?:units?|plants?|machines?))(?!\p{L})/iu.test(after)) return 'out';
+    if (/(?<!\p{L})(?:heat[- ]pumps?|chillers?|air[- ]conditioners?)(?!\p{L})[^\S\n]*,[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 40), start)) && /^[^\S\n]*\)/u.test(after)) return 'out';
+    if ((HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text)) && /(?<!\p{L})(?:the|this|our|their|its)[^\S\n]+(?:unit|heat[- ]pump|chiller|machine|system)[^\S\n]+(?:is|was)[^\S\n]+rated(?:[^\S\n]+(?:at|for))?[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 50), start))) return 'out';
+  }
   if (RATED_ENGINE_AFTER_RE.test(after) && /(?:^|[.!?:\n][^\S\n]*)(?:the|a|an|our|this|its|their|each)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 40), start))) return 'out';
   // "The pump motor is a 10 hp unit drawing 8.2 kW": the rating of the motor, engine or turbine the
   // sentence is about (not a compressor's or a cooler's drive, not one that drives something named).

@@ -512,3 +512,38 @@ describe('energy audits: chillers, cold stores, heat meters and the grid (invent
     expectRelClose(carnot!.outputs.find((o) => o.name === 'cop_cooling_ratio')!.si, 0.6 / (278.15 / 25), 1e-9);
   });
 });
+
+describe('energy audits: ratings, meters and times that are no run (invented test data)', () => {
+  test("a heat pump's or a chiller's size is the heat it moves", () => {
+    const power = (text: string) => read(text).find((x) => x.kind === 'power');
+    expect(power('Commissioning narrative, plot 7 (air-source heat pump, 7 kW). Daily COP came out between 3.4 and 3.9.')?.role).toBe('out');
+    expect(power('Chiller witness test — CH-2 (450 kW screw chiller).')?.role).toBe('out');
+    expect(power('The owners have a new air-to-water heat pump. The unit is rated 9 kW.')?.role).toBe('out');
+    // An immersion heater is still rated by what it takes.
+    expect(power('An immersion heater rated at 3 kW.')?.role).toBe('in');
+  });
+
+  test('"COP came out between 3.4 and 3.9" is a COP range', () => {
+    expect(read('Daily COP came out between 3.4 and 3.9 at 7 °C outdoors and 45 °C flow.').find((x) => x.kind === 'cop')).toMatchObject({ si: 3.4, upper: { si: 3.9 } });
+  });
+
+  test("a gas meter's reading is the input and the heat meter's on the flow the output; a hydrogen's heating value made by an electrolyser is not an input", () => {
+    const f = read("Boiler check. Gas meter: 2.61 m³, which at the supplier's stated calorific value comes to about 28.4 kWh. Heat meter on the flow: 26.0 kWh over the same hour.");
+    expect(f.filter((x) => x.kind === 'energy').map((x) => x.role)).toEqual(['in', 'out']);
+    const g = read('Heat pump commissioning: measured COP 4.3 over a two-hour run (heat meter 11.2 kWh, electricity 2.6 kWh).');
+    expect(g.filter((x) => x.kind === 'energy').map((x) => x.role)).toEqual(['out', 'in']);
+    const text = 'The electrolyser drew 500 W for a 10-hour run, which is 18 MJ of electricity. The hydrogen collected has a heating value of 12 MJ.';
+    expect(verdicts(text).checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
+  });
+
+  test("a fluid's freeze point, one cycle's length and a chiller sized for a load are no figures of the run", () => {
+    const f = read('Ground-source system: flow at 40 °C; the unit was lifting across 38 K from the ground loop. Antifreeze 25 % MEG, freeze point checked at −11 °C.');
+    expect(temps(f)).toEqual([
+      ['hot', expect.closeTo(313.15, 9)],
+      ['cold', expect.closeTo(275.15, 9)],
+      ['aside', expect.closeTo(262.15, 9)],
+    ]);
+    expect(read('Defrost cycles: 3–5 a day, each under four minutes.').find((x) => x.kind === 'duration')?.role).toBe('aside');
+    expect(read('The laser draws 2 kW. The replacement chiller is sized for 2.4 kW of heat.').map((x) => x.role)).toEqual(['in', 'aside']);
+  });
+});
