@@ -398,6 +398,9 @@ describe("another machine's percentage, and an instrument's or a bound's force, 
     const run = runClaimChecks(g, { text }).checks.find((c) => c.check === 'photon-bound');
     expect(run?.finding).toBe('breaks');
     expectRelClose(run!.outputs.find((o) => o.name === 'ratio')!.si, (0.031 * 299792458) / 400, 1e-9);
+    // The bound said after the figure: "the 1.7 µN that 500 W could give even as a perfect photon rocket" (500/c = 1.668 µN).
+    const k = read('They shine a 500 W LED array at the vane and report a force of about 1.2 µN. That is below the 1.7 µN that 500 W could give even as a perfect photon rocket.');
+    expect(k.filter((x) => x.kind === 'thrust').map((x) => x.role)).toEqual([null, 'aside']);
     // A laser's own thrust said in an explainer ("would produce about 33 µN") is the device's, not a bound.
     const h = read('A laser emitting 10 kW would produce a thrust of about 33 micronewtons. That works out at 3.3 micronewtons per kilowatt.');
     expect(h.find((x) => x.kind === 'thrust')?.role).toBeNull();

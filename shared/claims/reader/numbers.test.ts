@@ -170,6 +170,20 @@ describe('numbers', () => {
   });
 });
 
+describe('a power of ten written alone', () => {
+  test.each([
+    ["It carries heat into the room 'at 10¹⁰ m/s'.", 1e10],
+    ['The cell stored 10^4 J.', 1e4],
+    ['A force of 10⁻³ N was read.', 1e-3],
+  ])('%s (invented test data)', (text, si) => {
+    expectRelClose(only(text).si, si, EXACT);
+  });
+  test('but a plain 10 stays 10, and a mantissa times ten to a power is read as before', () => {
+    expect(only('a 10 kW heater').si).toBe(10000);
+    expectRelClose(only('It reached 3 × 10⁸ m/s.').si, 3e8, EXACT);
+  });
+});
+
 describe('false positives', () => {
   test.each([
     ['a year', 'In 2019 the team at Example Dynamics began the work.'],

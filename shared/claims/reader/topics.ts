@@ -5,7 +5,7 @@
  * boiler's 18 kW, a freezer at −80 °C) are set aside, so that they are not taken for the claimed
  * device's input, output or sides.
  */
-import { windowStart } from './context';
+import { sentenceAround, windowStart } from './context';
 import { siOf, type Draft } from './draft';
 
 /** Words of a claim a check can be run on, or of the device's working. */
@@ -116,7 +116,10 @@ export function asideWorkedBounds(text: string, drafts: Draft[]): void {
     // pushes with about 0.3 micronewtons": the bound said as such, for a power the text gives elsewhere,
     // rounded as writers round.)
     const before = text.slice(from, d.start);
-    return BOUND_WORDS_RE.test(before) && PHOTON_WORDS_RE.test(before) && drafts.some((p) => p.kind === 'power' && p.role !== 'aside' && !p.derived && near(si, (siOf(p) ?? 0) / C, 0.12));
+    // (Or said after it: "below the 1.7 µN that 500 W could give even as a perfect photon rocket".)
+    const after = sentenceAround(text, d.start, d.end).slice(d.end - from);
+    const boundSaid = (BOUND_WORDS_RE.test(before) && PHOTON_WORDS_RE.test(before)) || (BOUND_WORDS_RE.test(after) && PHOTON_WORDS_RE.test(after));
+    return boundSaid && drafts.some((p) => p.kind === 'power' && p.role !== 'aside' && !p.derived && near(si, (siOf(p) ?? 0) / C, 0.12));
   };
   // "a torsion balance with 5 × 10⁻⁷ N resolution", "calibration used a 100 µN electrostatic force": the
   // instrument's reach or its calibration, no force of the device.
