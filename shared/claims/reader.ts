@@ -54,6 +54,7 @@
  */
 import type { Figure } from './types';
 import { readFigures } from './reader/figures';
+import { unwrapPdfText } from './reader/pdf-text';
 import { detex } from './reader/tex';
 import { unitAt } from './reader/units';
 
@@ -62,6 +63,20 @@ import { unitAt } from './reader/units';
  * follow the figures they come from. See the file's comment for what is read.
  */
 export function extractFigures(text: string): Figure[] {
+  // Text copied out of a PDF ("coeffi-\ncient", lines wrapped mid-sentence, "efﬁciency"): read as written,
+  // then each figure's offsets and words point back at the pasted text.
+  const unwrapped = unwrapPdfText(text);
+  if (unwrapped === null) return readWithTex(text);
+  const { toPasted } = unwrapped;
+  return readWithTex(unwrapped.text).map((f) => {
+    if (f.start === null || f.end === null) return f;
+    const start = toPasted[f.start];
+    const end = f.end > f.start ? toPasted[f.end - 1] + 1 : start;
+    return { ...f, start, end, text: text.slice(start, end) };
+  });
+}
+
+function readWithTex(text: string): Figure[] {
   const plain = detex(text);
   if (plain === null) return readPlain(text);
   // TeX left in the text ("$\\eta = 0.42$", "1.7 \\times 10^{-6} N"): read as plainly written, then

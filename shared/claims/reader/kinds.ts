@@ -144,6 +144,11 @@ export function readPercent(text: string, start: number, end: number, floor: num
   if (light) return { kind: 'speed', factor: C_M_PER_S / 100, unit: 'm/s' };
   // (A sheet's label: "Heating efficiency (A2/W35) ............ 380 %" — the rating point and the leader dots are no words of it.)
   const before = text.slice(Math.max(floor, start - BEFORE_WINDOW), start).replace(LABEL_FILLER_RE, ' ');
+  // "a coefficient of performance of 380 %", "COP: 420 %": a COP written as a percentage.
+  if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before)) {
+    const cooling = COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text);
+    return { kind: 'cop', role: cooling ? 'cooling' : 'heating', factor: 0.01, unit: '', assumption: `A coefficient of performance written as a percentage: read as a ${cooling ? 'cooling' : 'heating'} COP.` };
+  }
   QE_AFTER_RE.lastIndex = end;
   const qe = QE_BEFORE_RE.exec(before);
   if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };

@@ -202,7 +202,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     }
   }
   roles.after.lastIndex = end;
-  const a = roles.after.exec(text);
+  // (Not past a table's column gap: the words there are the next cell's label.)
+  const a = /^(?:[^\S\n]{3,}|\t)[^\S\n]*\p{Lu}/u.test(text.slice(end, end + 40)) ? null : roles.after.exec(text);
   if (a?.groups) {
     for (let i = 0; i < roles.groups.length; i++) {
       if (a.groups[`r${i}`] !== undefined) {

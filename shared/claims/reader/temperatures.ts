@@ -71,6 +71,8 @@ export function isDifference(text: string, start: number, end: number, floor: nu
   // A label of a sheet or a list: "ΔT source to flow: 40 K", "• Temperature lift (W35): 30 K".
   if (DIFF_LABEL_RE.test(before)) return true;
   // A table's row label with no colon: "Temperature drop, head to cooler580K", "ΔT hot to cold 40 K".
+  // (Or a cell's label after a wide gap, in a row collapsed onto one line.)
+  if (/(?:[^\S\n]{3,}|\t)(?:ΔT|∆T|[Tt]emperature[^\S\n]+(?:difference|differential|lift|rise|drop|span|spread))(?![\p{L}\p{N}])[^\n:=|•;,\d]{0,40}$/u.test(text.slice(Math.max(0, text.lastIndexOf('\n', start - 1)), start))) return true;
   if (/(?:^|\n)[^\S\n]*(?:ΔT|∆T|temperature[^\S\n]+(?:difference|differential|lift|rise|drop|span|spread))(?![\p{L}\p{N}])[^\n:=|•;\d]{0,40}$/iu.test(text.slice(Math.max(0, text.lastIndexOf('\n', start - 1)), start))) return true;
   // A figure that corrects a difference just before it is a difference.
   // (Looked for behind the floor: the corrected figure is the one read just before.)
@@ -85,6 +87,8 @@ export function isDifference(text: string, start: number, end: number, floor: nu
     if (!/^(?:only|a mere|just)/i.test(m[0].trim()) || /differen|gradient|ΔT|delta|lift|rise/i.test(sentenceAround(text, start, end))) return true;
   }
   if (kelvinBesideCelsius(text, start, end)) return true;
+  // (Words past a table's column gap are the next cell's: "… temperature   720 °C     Temperature difference to cooler   680 K".)
+  if (/^(?:[^\S\n]{3,}|\t)[^\S\n]*\p{Lu}/u.test(text.slice(end, end + 40))) return false;
   DIFF_AFTER_RE.lastIndex = end;
   const a = DIFF_AFTER_RE.exec(text);
   if (!a) return false;
@@ -336,9 +340,13 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
     const fromNamedOther = t.end <= diff.start && !sideBeforeDiff && NAMED_OTHER_SIDE_RE.test(text.slice(diff.end, diff.end + 60));
     // "between the 25 °C air and the cooler soil": the other side said to be cooler or warmer than this one.
     const other = /^[^\S\n,]*(?:[\p{L}-]+[^\S\n,]+){0,2}?and[^\S\n]+(?:the|a|an|its)[^\S\n]+(cooler|colder|lower|warmer|hotter|higher)(?!\p{L})/iu.exec(text.slice(t.end, t.end + 50));
+    // ("Temperature difference to cooler   680 K", a label naming the other side as the colder or the hotter one.)
+    const label = /(?<!\p{L})(?:difference|ΔT|∆T|drop|lift|rise)[^\S\n]+(?:from[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:to|down to|up to)[^\S\n]+(?:the[^\S\n]+)?(cooler|cold(?:[^\S\n]+(?:side|end|plate|sink))?|sink|ambient|condenser|heater(?:[^\S\n]+head)?|hot(?:[^\S\n]+(?:side|end|plate|source))?|source)(?!\p{L})[^\d\n]{0,12}$/iu.exec(text.slice(Math.max(0, diff.start - 60), diff.start));
     const said = other
       ? /^(?:cooler|colder|lower)/i.test(other[1]) ? 'down' : 'up'
-      : (apposition || fromNamedOther) && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
+      : label && t.end <= diff.start
+        ? /^(?:cooler|cold|sink|ambient|condenser)/i.test(label[1]) ? 'down' : 'up'
+        : (apposition || fromNamedOther) && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
     // A heat pump's one stated temperature is what it supplies (the hot side); a fridge's is what it keeps (the cold side).
     const side = t.role ?? (HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) ? 'hot' : COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text) ? 'cold' : null);
     const down = said === 'down' || (said === undefined && side === 'hot');

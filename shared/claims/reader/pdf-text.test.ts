@@ -1,0 +1,62 @@
+/**
+ * The figure reader on text copied out of a PDF or a scan: words broken at a line's end, sentences wrapped
+ * at the column's edge, ligatures, collapsed table rows and glued footnote markers.
+ *
+ * Against outside references: the Carnot COP of heating Th/(Th − Tc) and efficiency 1 − Tc/Th (Çengel &
+ * Boles, Thermodynamics, ch. 6); °C → K by adding 273.15 (NIST SP 811, §4.2.1.1). Every text here is
+ * invented test data (invented devices and makers, no real people or products).
+ */
+import { runClaimChecks } from '../plan';
+import { extractFigures } from '../reader';
+import { unwrapPdfText } from './pdf-text';
+import { expectRelClose, expectWellFormed } from './test-support';
+
+const read = (text: string) => {
+  const figures = extractFigures(text);
+  expectWellFormed(text, figures);
+  return figures;
+};
+
+describe('unwrapPdfText', () => {
+  test('joins a word broken at a line end, keeps a compound hyphen, reads a wrap as a space and a ligature as letters', () => {
+    const u = unwrapPdfText('The unit reaches a coeffi-\ncient of performance of 3.8 with its air-\nsource coil, i.e. with outdoor air at 2 °C\nand flow water at 45 °C; efﬁciency is fine.')!;
+    expect(u.text).toBe('The unit reaches a coefficient of performance of 3.8 with its air-source coil, i.e. with outdoor air at 2 °C and flow water at 45 °C; efficiency is fine.');
+    // Every offset maps back into the pasted text, in order.
+    expect(u.toPasted).toHaveLength(u.text.length + 1);
+    for (let i = 1; i < u.toPasted.length; i++) expect(u.toPasted[i]).toBeGreaterThanOrEqual(u.toPasted[i - 1]);
+  });
+
+  test('leaves a table row, an indented line and a short heading on their lines, and plain text alone', () => {
+    expect(unwrapPdfText('motor input (clamp meter on mains lead) ..... 500 W\n  output into resistive load bank ....... 700 W')).toBeNull();
+    expect(unwrapPdfText('Conditions\nindoor test cell, doors shut')).toBeNull();
+    expect(unwrapPdfText('A plain sentence. Another one.')).toBeNull();
+  });
+});
+
+describe('figures in text copied from a PDF (invented test data)', () => {
+  test('a COP split across lines and written as a percentage with a footnote mark, with a wrapped rating point', () => {
+    const text = 'Varnley AW-series heat pumps · Product information       7\n\nThe AW-9 reaches a coeffi-\ncient of performance of 380 %2 at A2/W45, i.e. with outdoor air at 2 °C\nand flow water at 45 °C.\n\n2 Measured on our own rig.';
+    const f = read(text);
+    expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'heating', si: 3.8, text: '380 %' });
+    const run = runClaimChecks(f, { text }).checks.find((c) => c.check === 'carnot');
+    // 3.8 / (318.15 / 43) = 0.513594 (worked by hand).
+    expectRelClose(run!.outputs.find((o) => o.name === 'cop_heating_ratio')!.si, 3.8 / (318.15 / 43), 1e-9);
+  });
+
+  test("a collapsed table row: a cell's difference label is the next cell's, and it names the cooler side", () => {
+    const f = read('Table 5.1  Design point\nReceiver (heater head) temperature     720 °C     Temperature differ-\nence to cooler     680 K     Engine efficiency (heat to shaft)     29 %');
+    expect(f.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si])).toEqual([
+      ['hot', expect.closeTo(993.15, 9)],
+      ['cold', expect.closeTo(313.15, 9)],
+    ]);
+    expect(f.find((x) => x.kind === 'temperature-difference')?.si).toBe(680);
+  });
+
+  test('a role word past a column gap is the next cell\'s: "Starter draw 100 W     Output 340 W"', () => {
+    const f = read('The unit — specifications\nStarter draw 100 W     Output 340 W continuous     Weight 38 kg');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 100],
+      ['out', 340],
+    ]);
+  });
+});
