@@ -15,7 +15,7 @@ const NOT_A_RUN_RE =
 const TERM_NOT_RUN_BEFORE_RE =
   /(?<!\p{L})(?:payback(?:[^\S\n]+(?:period|time))?|pays?[^\S\n]+(?:for[^\S\n]+)?(?:it|them)sel(?:f|ves)|warrant(?:y|ied|ee)|guarantee[ds]?|(?:service|design|useful|expected|rated)[^\S\n]+life(?:time)?|lifetime|lead[^\S\n]+time|amorti[sz]\w*)(?!\p{L})[^.;!?\n\d]{0,20}$/iu;
 /** Right after a time: "… warranty", "… payback", "… design life". */
-const TERM_NOT_RUN_AFTER_RE = /^[^\S\n]*(?:[-–][^\S\n]*)?(?:warrant(?:y|ies)|guarantee|payback|(?:service|design|useful)[^\S\n]+life|lifetime|lifespan)(?!\p{L})/iu;
+const TERM_NOT_RUN_AFTER_RE = /^[^\S\n]*(?:[-–][^\S\n]*)?(?:warrant(?:y|ies)|guarantee|payback|(?:service|design|useful)[^\S\n]+life|lifetime|lifespan|between[^\S\n]+(?:over-?[^\S\n]*hauls?|services|servicing|maintenance|inspections|rebuilds|refills|recharges))(?!\p{L})/iu;
 
 /** A sentence that is a label of a term: "Duration: five months", "Project duration | 24 months". */
 const TERM_LABEL_RE = /^[\s•*-]*(?:(?:project|proposed|planned|total|expected)[^\S\n]+)?(?:duration|term|timescale|time ?frame|period)[^\S\n]*(?:[:|]|\.{2,})/iu;

@@ -175,7 +175,9 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       t.num = String(Number((mid - t.unc).toPrecision(15)));
     } else if (next && !next.skip) {
       const gapStart = t.suffix ? t.end : t.numEnd;
-      const pmGap = /^,?[^\S\n]*(?:±|\+\/-|\+-|plus[^\S\n]+or[^\S\n]+minus)[^\S\n]*$/i.test(text.slice(gapStart, next.start));
+      const pmGap = /^,?[^\S\n]*(?:±|\+\/-|\+-|plus[^\S\n]+or[^\S\n]+minus)[^\S\n]*$/i.test(text.slice(gapStart, next.start)) ||
+        // ("1.2 kW (± 5 %)": an uncertainty in per cent, in brackets.)
+        (/^[^\S\n]*\([^\S\n]*(?:±|\+\/-|\+-)[^\S\n]*$/.test(text.slice(gapStart, next.start)) && next.suffix?.type === 'percent');
       // "96 W ± 3 %": an uncertainty in per cent of the figure.
       const relative = pmGap && next.plusMinus && t.suffix !== null && t.suffix.type === 'unit' && next.suffix?.type === 'percent';
       if (pmGap && next.plusMinus && (relative || !t.suffix || suffixKind(t.suffix) === suffixKind(next.suffix) || !next.suffix)) {
@@ -185,6 +187,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         upperNum = String(Number((mid + unc).toPrecision(15)));
         t.num = String(Number((mid - unc).toPrecision(15)));
         end = t.suffix && !next.suffix ? next.numEnd : next.end;
+        if (/\([^\S\n]*(?:±|\+\/-|\+-|plus)/iu.test(text.slice(gapStart, next.start)) && text[end] === ')') end += 1;
         next.consumed = true;
       } else if (
         !t.suffix &&

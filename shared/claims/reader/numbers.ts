@@ -21,7 +21,7 @@ const MULTIPLIER: Record<string, number> = { million: 1e6, M: 1e6, billion: 1e9,
  * that cannot be a thousands separator), then e-notation or × 10^n.
  */
 const NUMBER_RE =
-  /(?:(?<![\p{L}\p{N}_.,^])|(?<=(?<![\p{L}])\p{Lu}?\p{Ll}*\p{Ll}{4})(?=\d)|(?<=(?<!\p{L})COP)(?=\d))(?<![\p{N}.,]\/)([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d{1,3}(?:[ \u00A0\u2009\u202F]\d{3})+(?![\d]|[^\S\n]\d)(?:,\d+)?|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?![\p{N}])|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?(?:(?<=(?<![\d.,])10)(?:\^\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
+  /(?:(?<![\p{L}\p{N}_.,^])|(?<=(?<![\p{L}])\p{Lu}?\p{Ll}*\p{Ll}{4})(?=\d)|(?<=(?<!\p{L})COP)(?=\d))(?<![\p{N}.,]\/)([-−–+](?=\d))?(\d{1,3}(?:,\d{3})+(?![\d,])|\d{1,3}(?:[ \u00A0\u2009\u202F]\d{3})+(?![\d]|[^\S\n]\d)(?:,\d+)?|\d+(?:,\d{1,2}(?!\d)|,\d{4,})|0,\d+|\d+)(\.\d+)?(?:[eE]([-+−]?\d+)(?![\p{N}])|[^\S\n]*[×x·⋅*][^\S\n]*10[^\S\n]*(?:\^[^\S\n]*\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)|(?<=10)[-−–](\d{1,2})(?![\d.,]|[^\S\n]*[-−–]?[^\S\n]*\d)))?(?:(?<=(?<![\d.,])10)(?:\^\(?([-+−]?\d+)\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?/gu;
 
 /** "(5.1 ± 0.4)", "(3.1 ± 0.4) × 10⁻⁵", "(2.2 +/- 0.3) x 10^-3": a value and its uncertainty in brackets. */
 const BRACKETED_UNCERTAINTY_RE =
@@ -58,8 +58,10 @@ function cleanNumber(m: RegExpExecArray): string {
   let exp: string | undefined = m[4] ?? m[5];
   if (exp !== undefined) exp = exp.replace('−', '-');
   else if (m[6] !== undefined) exp = [...m[6]].map((c) => SUPERSCRIPT_DIGITS[c]).join('');
+  // "2.4 x 10-3 N": a superscript flattened by a copy out of a PDF, the minus kept.
+  else if (m[7] !== undefined) exp = `-${m[7]}`;
   // A power of ten written alone ("10¹⁰ m/s", "10^10 J"): one times it.
-  const bare = m[7] !== undefined ? m[7].replace('−', '-') : m[8] !== undefined ? [...m[8]].map((c) => SUPERSCRIPT_DIGITS[c]).join('') : undefined;
+  const bare = m[8] !== undefined ? m[8].replace('−', '-') : m[9] !== undefined ? [...m[9]].map((c) => SUPERSCRIPT_DIGITS[c]).join('') : undefined;
   if (bare !== undefined && m[3] === undefined) return `${sign}1e${bare}`;
   // Digits grouped by spaces ("1 500", SI style) are one number.
   let int = m[2].replace(/[ \u00A0\u2009\u202F]/g, '');

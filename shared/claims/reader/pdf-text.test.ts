@@ -60,3 +60,20 @@ describe('figures in text copied from a PDF (invented test data)', () => {
     ]);
   });
 });
+
+describe('more of what a PDF copy leaves (invented test data)', () => {
+  test('"2.4 x 10-3 N": a flattened superscript with its minus is read as ten to that power', () => {
+    expectRelClose(read('producing a net axial thrust of 2.4 x 10-3 N at an input power of 1.2e1 W.')[0].si, 2.4e-3, 1e-12);
+  });
+  test('"1.2 kW (± 5 %)": an uncertainty in per cent, in brackets, makes a range (1.14–1.26 kW)', () => {
+    const f = read('the load bank dissipated 1.2 kW (± 5 %) for the whole run while the supply side showed about 300 W.')[0];
+    expect(f.text).toBe('1.2 kW (± 5 %)');
+    expectRelClose(f.si, 1140, 1e-12);
+    expectRelClose(f.upper!.si, 1260, 1e-12);
+  });
+  test("an engine's 'rated 10 hp' is its output, and hours 'between overhauls' are no run", () => {
+    const f = read('The restored compound engine runs on steam at 400 °F and exhausts to a condenser at 100 °F; at its rated 10 hp it turns about 12 % of the heat into shaft work, with 5K hrs between over-\nhauls.');
+    expect(f.find((x) => x.kind === 'power')).toMatchObject({ role: 'out', si: expect.closeTo(7456.9987, 3) });
+    expect(f.find((x) => x.kind === 'duration')?.role).toBe('aside');
+  });
+});

@@ -328,6 +328,8 @@ export function ratingRole(text: string, start: number, end: number): FigureRole
   if (horsepower && RATED_DRIVEN_AFTER_RE.test(after)) return 'in';
   // "The main engine … is rated at 12,000 PS": an engine, a turbine or a generator is rated by what it gives.
   if (/(?<!\p{L})(?:engines?|turbines?|generators?|gensets?|generating sets?|alternators?)(?!\p{L})[^.;!?\n]{0,80}?(?<!\p{L})(?:is|was|are|were)[^\S\n]+rated[^\S\n]+(?:at|for)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 120), start))) return 'out';
+  // "The restored compound engine now runs on steam …; at its rated 10 hp it turns …": an engine's own rating.
+  if (/(?<!\p{L})(?:engines?|turbines?|generators?|gensets?|alternators?)(?!\p{L})[^.!?\n]{0,120}?(?<!\p{L})(?:its|their)[^\S\n]+rated[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 160), start))) return 'out';
   // "An immersion heater rated at 2 kW": a heater, a kettle or a lamp is rated by the electricity it takes.
   if (/(?<!\p{L})(?:heaters?|kettles?|heating elements?|elements?|toasters?|hobs?|lamps?|bulbs?)(?!\p{L})[^.;!?\n]{0,20}?(?<!\p{L})rated[^\S\n]+(?:at|for)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 60), start))) return 'in';
   // "a 9 kW ground-source heat pump": a heat pump is rated by the heat it gives.
