@@ -54,7 +54,7 @@
  */
 import type { Figure } from './types';
 import { readFigures } from './reader/figures';
-import { unwrapPdfText } from './reader/pdf-text';
+import { readableLayout } from './reader/pdf-text';
 import { detex } from './reader/tex';
 import { unitAt } from './reader/units';
 
@@ -65,7 +65,7 @@ import { unitAt } from './reader/units';
 export function extractFigures(text: string): Figure[] {
   // Text copied out of a PDF ("coeffi-\ncient", lines wrapped mid-sentence, "efﬁciency"): read as written,
   // then each figure's offsets and words point back at the pasted text.
-  const unwrapped = unwrapPdfText(text);
+  const unwrapped = readableLayout(text);
   if (unwrapped === null) return readWithTex(text);
   const { toPasted } = unwrapped;
   return readWithTex(unwrapped.text).map((f) => {

@@ -13,7 +13,7 @@ const NOT_A_RUN_RE =
 
 /** Right before a time: a payback, a warranty, a guarantee, a life or a lead time ("payback est.", "pays for itself in"). */
 const TERM_NOT_RUN_BEFORE_RE =
-  /(?<!\p{L})(?:payback(?:[^\S\n]+(?:period|time))?|pays?[^\S\n]+(?:for[^\S\n]+)?(?:it|them)sel(?:f|ves)|warrant(?:y|ied|ee)|guarantee[ds]?|(?:service|design|useful|expected|rated)[^\S\n]+life(?:time)?|lifetime|lead[^\S\n]+time|amorti[sz]\w*)(?!\p{L})[^.;!?\n\d]{0,20}$/iu;
+  /(?<!\p{L})(?:payback(?:[^\S\n]+(?:period|time))?|pays?[^\S\n]+(?:for[^\S\n]+)?(?:it|them)sel(?:f|ves)|warrant(?:y|ied|ee)|guarantee[ds]?|(?:service|design|useful|expected|rated)[^\S\n]+life(?:time)?|lifetime|(?:qualified[^\S\n]+)?life(?=[^\S\n]*(?:[>≥:=]|of(?!\p{L})|is(?!\p{L})))|lead[^\S\n]+time|amorti[sz]\w*)(?!\p{L})[^.;!?\n\d]{0,20}$/iu;
 /** Right after a time: "… warranty", "… payback", "… design life". */
 const TERM_NOT_RUN_AFTER_RE = /^[^\S\n]*(?:[-–][^\S\n]*)?(?:warrant(?:y|ies)|guarantee|payback|(?:service|design|useful)[^\S\n]+life|lifetime|lifespan|between[^\S\n]+(?:over-?[^\S\n]*hauls?|services|servicing|maintenance|inspections|rebuilds|refills|recharges))(?!\p{L})/iu;
 

@@ -8,7 +8,7 @@
  */
 import { runClaimChecks } from '../plan';
 import { extractFigures } from '../reader';
-import { unwrapPdfText } from './pdf-text';
+import { labelTableRows, unwrapPdfText } from './pdf-text';
 import { expectRelClose, expectWellFormed } from './test-support';
 
 const read = (text: string) => {
@@ -75,5 +75,47 @@ describe('more of what a PDF copy leaves (invented test data)', () => {
     const f = read('The restored compound engine runs on steam at 400 °F and exhausts to a condenser at 100 °F; at its rated 10 hp it turns about 12 % of the heat into shaft work, with 5K hrs between over-\nhauls.');
     expect(f.find((x) => x.kind === 'power')).toMatchObject({ role: 'out', si: expect.closeTo(7456.9987, 3) });
     expect(f.find((x) => x.kind === 'duration')?.role).toBe('aside');
+  });
+});
+
+describe('a table set as text, its labels in a header row (invented test data)', () => {
+  test("each value is read after its column's label, with the header's unit where the cell gives none", () => {
+    const text = 'Performance at Th = 25 °C\nΔT (K)     Qc (W)     I (A)     U (V)     COP\n40     18.5     4.6     6.7     0.60';
+    const f = read(text);
+    expect(f.find((x) => x.kind === 'temperature-difference')).toMatchObject({ si: 40, text: '40' });
+    expect(f.find((x) => x.kind === 'current')?.si).toBe(4.6);
+    expect(f.find((x) => x.kind === 'voltage')?.si).toBe(6.7);
+    expect(f.find((x) => x.kind === 'cop')?.si).toBe(0.6);
+    // The cold side from the hot side and the difference: 298.15 − 40 K.
+    expect(f.find((x) => x.kind === 'temperature' && x.role === 'cold')?.si).toBeCloseTo(258.15, 9);
+  });
+
+  test("a rocket stage's row: the Isp column is a specific impulse, and the rocket equation runs", () => {
+    const text = 'Stage   Wet mass   Dry mass   Isp (vac)   Δv (claimed)\nUpper     1,250 kg     410 kg     312 s     3.2 km/s';
+    const f = read(text);
+    expect(f.map((x) => [x.kind, x.role])).toEqual([
+      ['mass', 'wet'],
+      ['mass', 'dry'],
+      ['specific-impulse', null],
+      ['speed', 'delta-v'],
+    ]);
+    // Tsiolkovsky: Δv = Isp·g0·ln(m_wet/m_dry) = 312 × 9.80665 × ln(1250/410) (g0 exact, BIPM SI Brochure 9th ed.).
+    const run = runClaimChecks(f, { text }).checks.find((c) => c.check === 'rocket-equation')!;
+    expectRelClose(run.outputs.find((o) => o.name === 'dv')!.si, 312 * 9.80665 * Math.log(1250 / 410), 1e-9);
+  });
+
+  test('a header with a broken word, then its values: a lamp more than 100 % efficient at the wall', () => {
+    const text = 'Table 2   Lamp KL-7\nSupply       Input power      Optical output      Wall-plug effi-\nciency\n230 V AC          5.0 W                7.0 W                  140 %';
+    const f = read(text);
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 5],
+      ['out', 7],
+    ]);
+    expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+
+  test('rows that do not line up with the header, and pipe tables, are left as they are', () => {
+    expect(labelTableRows('Stage   Wet mass   Dry mass\nThe upper stage weighs 1,250 kg wet.')).toBeNull();
+    expect(labelTableRows('| Stage | Wet mass | Dry mass |\n| Upper | 1,250 kg | 410 kg |')).toBeNull();
   });
 });

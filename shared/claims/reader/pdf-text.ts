@@ -78,3 +78,104 @@ export function unwrapPdfText(pasted: string): Unwrapped | null {
   toPasted.push(pasted.length);
   return { text, toPasted };
 }
+
+/** A table's cell separator when set as text: a tab, or two spaces or more. */
+const CELL_GAP_RE = /\t+|[^\S\n\t]{2,}/gu;
+/** A cell that is a value: a number first, with or without its unit ("1,250 kg", "0.60", "−7 °C"). */
+const VALUE_CELL_RE = /^[-−+~≈]?\d/u;
+/** A header cell's unit in brackets: "ΔT (K)", "Qc [W]", "Isp (s)". */
+const HEADER_UNIT_RE = /^(.*?\S)[^\S\n]*[([]([^()[\]\d]{1,8})[)\]]$/u;
+/** Units a header may give its column (a bracket in a header is often a note: "Isp (vac)", "Δv (claimed)"). */
+const HEADER_UNITS = new Set(['K', '°C', '°F', 'W', 'kW', 'MW', 'mW', 'µW', 'J', 'kJ', 'MJ', 'Wh', 'kWh', 'MWh', 'N', 'mN', 'µN', 'kN', 'kg', 'g', 't', 's', 'h', 'min', 'A', 'mA', 'V', 'kV', 'mV', 'm/s', 'km/s', '%', 'hp', 'lbf', 'BTU/h']);
+
+interface Cell {
+  start: number;
+  end: number;
+  text: string;
+}
+
+function cellsOf(line: string, offset: number): Cell[] {
+  const cells: Cell[] = [];
+  let from = 0;
+  for (const m of line.matchAll(CELL_GAP_RE)) {
+    const text = line.slice(from, m.index);
+    if (text.trim()) cells.push({ start: offset + from + (text.length - text.trimStart().length), end: offset + from + text.trimEnd().length, text: text.trim() });
+    from = m.index! + m[0].length;
+  }
+  const rest = line.slice(from);
+  if (rest.trim()) cells.push({ start: offset + from + (rest.length - rest.trimStart().length), end: offset + from + rest.trimEnd().length, text: rest.trim() });
+  return cells;
+}
+
+/**
+ * A table set as text with its labels in a header row and its values in the rows below ("ΔT (K)  Qc (W)
+ * COP" over "40  18.5  0.60"): each value row is read as its cells, each cell after its column's label,
+ * with the header's unit where the cell gives none ("ΔT 40 K; Qc 18.5 W; COP 0.60") — offsets mapped back,
+ * so a figure still points at its cell. Rows separated by pipes are left to the sheet reader.
+ */
+export function labelTableRows(pasted: string): Unwrapped | null {
+  const lines = pasted.split('\n');
+  let offset = 0;
+  const starts = lines.map((l) => {
+    const s = offset;
+    offset += l.length + 1;
+    return s;
+  });
+  /** Replacements: the value row at this line index, as pieces (text, and where each piece maps). */
+  const rows = new Map<number, { text: string; at: number; span?: boolean }[]>();
+  for (let i = 0; i + 1 < lines.length; i++) {
+    if (lines[i].includes('|')) continue;
+    const header = cellsOf(lines[i], starts[i]);
+    if (header.length < 3 || header.some((c) => VALUE_CELL_RE.test(c.text)) || header.some((c) => !/\p{L}/u.test(c.text))) continue;
+    for (let j = i + 1; j < lines.length && !lines[j].includes('|'); j++) {
+      const values = cellsOf(lines[j], starts[j]);
+      if (values.length !== header.length) break;
+      const numeric = values.filter((c) => VALUE_CELL_RE.test(c.text)).length;
+      if (numeric < Math.max(2, Math.ceil(values.length / 2))) break;
+      const pieces: { text: string; at: number; span?: boolean }[] = [];
+      values.forEach((v, k) => {
+        const h = header[k].text;
+        const unitMatch = HEADER_UNIT_RE.exec(h);
+        const unit = unitMatch && HEADER_UNITS.has(unitMatch[2].trim()) ? unitMatch[2].trim() : null;
+        const label = unit ? unitMatch![1] : h;
+        if (k > 0) pieces.push({ text: '; ', at: v.start });
+        pieces.push({ text: `${label} `, at: v.start });
+        pieces.push({ text: v.text, at: v.start, span: true });
+        // (The header's unit, only after a bare number: "40" under "ΔT (K)".)
+        if (unit && /^[-−+~≈]?[\d.,]+$/u.test(v.text)) pieces.push({ text: ` ${unit}`, at: v.end - 1 });
+      });
+      rows.set(j, pieces);
+    }
+  }
+  if (rows.size === 0) return null;
+  let text = '';
+  const toPasted: number[] = [];
+  lines.forEach((line, i) => {
+    if (i > 0) {
+      text += '\n';
+      toPasted.push(starts[i] - 1);
+    }
+    const pieces = rows.get(i);
+    if (!pieces) {
+      for (let k = 0; k < line.length; k++) toPasted.push(starts[i] + k);
+      text += line;
+      return;
+    }
+    for (const p of pieces) {
+      for (let k = 0; k < p.text.length; k++) toPasted.push(p.span ? p.at + k : p.at);
+      text += p.text;
+    }
+  });
+  toPasted.push(pasted.length);
+  return { text, toPasted };
+}
+
+/** Both passes: a PDF's wraps undone, then its tables' rows labelled; the offsets map back through both. */
+export function readableLayout(pasted: string): Unwrapped | null {
+  const first = unwrapPdfText(pasted);
+  const base = first?.text ?? pasted;
+  const second = labelTableRows(base);
+  if (!second) return first;
+  if (!first) return second;
+  return { text: second.text, toPasted: second.toPasted.map((i) => first.toPasted[i]) };
+}
