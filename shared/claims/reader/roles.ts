@@ -7,7 +7,7 @@
  */
 import { COP_COOLING, COP_HEATING, MASS_ROLES, POWER_ENERGY_ROLES, SPEED_ROLES, TEMPERATURE_ROLES, type RoleWords } from '../figures-vocabulary';
 import type { FigureKind, FigureRole } from '../types';
-import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, windowStart } from './context';
+import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
 
 /** Words that may stand between a figure and the role word after it ("2 kW of electrical input"). */
 const AFTER_FILLER =
@@ -117,8 +117,14 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       if (label && !/\p{N}/u.test(line.slice(label[0].length))) return label[1].toLowerCase() === 'sink' ? 'hot' : 'cold';
       // "The rooftop condensers run at 30 °C", "evaporating at −25 °C": a refrigerating machine's condenser is
       // its warm side and its evaporator its cold one (the other way round from an engine's condenser).
-      if (/(?<!\p{L})condens(?:ers?|ing)(?!\p{L})[^.;!?\n\d]{0,25}$/iu.test(lead)) return 'hot';
-      if (/(?<!\p{L})evaporat(?:ors?|ing)(?!\p{L})[^.;!?\n\d]{0,25}$/iu.test(lead)) return 'cold';
+      // (Only where its own sentence names the refrigerating machine and no engine: a text on several plants
+      // may name a power cycle's condenser too.)
+      const sentence = sentenceAround(text, start, end);
+      if (/(?<!\p{L})(?:chillers?|refrigerat\w*|freezers?|cold[^\S\n]+(?:stores?|rooms?)|heat[- ]pumps?|fridges?|air[- ]condition\w*|compressors?|refrigerants?)(?!\p{L})/iu.test(sentence) && !/(?<!\p{L})(?:engines?|turbines?|steam|Rankine|ORC|binary|expanders?|power[^\S\n]+(?:plants?|stations?|cycles?)|generat\w*|electricity)(?!\p{L})/iu.test(paragraphAround(text, start, end))) {
+        // (Not a condensing boiler's water: "condensing boiler … return at 30 °C".)
+        if (/(?<!\p{L})(?:condensers?|condensing(?:[^\S\n]+(?:temperature|pressure|side|point))?(?![^\S\n]+(?:boilers?|gas|units?\b[^.]*boiler)))(?!\p{L})[^.;!?\n\d]{0,25}$/iu.test(lead) && !/(?<!\p{L})boilers?(?!\p{L})/iu.test(lead)) return 'hot';
+        if (/(?<!\p{L})(?:evaporators?|evaporating(?:[^\S\n]+(?:temperature|pressure|side))?)(?!\p{L})[^.;!?\n\d]{0,25}$/iu.test(lead)) return 'cold';
+      }
       // "rejecting heat on deck at 32 °C": where a fridge or a heat pump rejects its heat is its warm side.
       if (/(?<!\p{L})(?:reject(?:s|ed|ing)?|dump(?:s|ed|ing)?|shed(?:s|ding)?|discharg(?:es|ed|ing))[^\S\n]+(?:(?:its|the)[^\S\n]+)?(?:waste[^\S\n]+)?heat(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]+(?:at|of)[^\S\n]*(?:(?:about|around|roughly|some)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'hot';
     }
@@ -161,7 +167,12 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     if (/(?<!\p{L})heat[- ]?meters?(?:[^\S\n]+on[^\S\n]+the[^\S\n]+[\p{L}-]+)?(?:[^\S\n]+(?:read|reads|recorded|records|showed|shows|measured|logged|registered|gave|gives|totall?ed|indicated))?[^\S\n]*[:=]?[^\S\n]*(?:(?:about|some|roughly|only|just|nearly|a total of)[^\S\n]+)?[\d.,]+[^\S\n]*[\p{L}/·]+$/iu.test(upToFigure) && !/^[^\S\n]+(?:of[^\S\n]+)?(?:heat|warmth|thermal|useful)(?!\p{L})/iu.test(text.slice(end, end + 20))) return 'out';
     // "Gas meter: 28.4 kWh", "which at the supplier's calorific value comes to about 28.4 kWh": the fuel's energy, the input.
     // (Only what a fuel meter read: the heating value of a fuel a device makes — an electrolyser's hydrogen — is its output.)
-    if (/(?<!\p{L})(?:gas|fuel|oil)[- ]meters?(?!\p{L})[^.!?\n]{0,90}?[\d.,]+[^\S\n]*[\p{L}/·]+$/iu.test(upToFigure)) return 'in';
+    // (Read right after the meter, or a volume it read turned into energy: "Gas meter: 2.61 m³, which … comes to about 28.4 kWh".)
+    if (
+      /(?<!\p{L})(?:gas|fuel|oil)[- ]meters?(?:[^\S\n]+(?:read|reads|recorded|records|showed|shows|logged|registered|gave))?[^\S\n]*[:=]?[^\S\n]*(?:(?:about|some|roughly|nearly)[^\S\n]+)?[\d.,]+[^\S\n]*[\p{L}/·]+$/iu.test(upToFigure) ||
+      /(?<!\p{L})(?:gas|fuel|oil)[- ]meters?[^.!?\n\d]{0,20}?[\d.,]+[^\S\n]*(?:m³|m3|litres?|liters?|l|ft³|cu\.?[^\S\n]?ft|therms?)(?!\p{L})[^.!?\n\d]{0,70}?[\d.,]+[^\S\n]*[\p{L}/·]+$/iu.test(upToFigure)
+    )
+      return 'in';
     // "(heat meter 11.2 kWh, electricity 2.6 kWh)" of a heat pump: the electricity is its input.
     if (HEAT_PUMP_RE.test(text) && /(?:^|[(,;:][^\S\n]*)(?:electricity|electrical(?:[^\S\n]+(?:input|energy))?|electric(?:[^\S\n]+meter)?|power[^\S\n]+meter)[^\S\n]*[:=]?[^\S\n]*[\d.,]+[^\S\n]*[\p{L}/·]+$/iu.test(upToFigure)) return 'in';
     // "The replacement chiller is sized for 2.4 kW of heat": a size chosen, not a flow of the device.
@@ -334,12 +345,11 @@ export function ratingRole(text: string, start: number, end: number): FigureRole
   if (/(?<!\p{L})(?:heaters?|kettles?|heating elements?|elements?|toasters?|hobs?|lamps?|bulbs?)(?!\p{L})[^.;!?\n]{0,20}?(?<!\p{L})rated[^\S\n]+(?:at|for)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 60), start))) return 'in';
   // "a 9 kW ground-source heat pump": a heat pump is rated by the heat it gives.
   if (!horsepower && /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?heat[- ]pumps?(?!\p{L})/iu.test(after) && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end))) return 'out';
-  // "(air-source heat pump, 7 kW)", "a 450 kW screw chiller", "The unit is rated 9 kW" in a heat pump's text:
-  // a machine that moves heat is sized by the heat it moves.
+  // "(air-source heat pump, 7 kW)", "a 450 kW screw chiller": a machine that moves heat is sized by the heat it
+  // moves. (Not "the unit is rated 2 kW", which in a shop's or a backer's text is as often what it draws.)
   if (!horsepower && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end))) {
     if (/^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:chillers?|heat[- ]pumps?|air[- ]conditioners?|(?:cooling|refrigeration)[^\S\n]+(?:units?|plants?|machines?))(?!\p{L})/iu.test(after)) return 'out';
     if (/(?<!\p{L})(?:heat[- ]pumps?|chillers?|air[- ]conditioners?)(?!\p{L})[^\S\n]*,[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 40), start)) && /^[^\S\n]*\)/u.test(after)) return 'out';
-    if ((HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text)) && /(?<!\p{L})(?:the|this|our|their|its)[^\S\n]+(?:unit|heat[- ]pump|chiller|machine|system)[^\S\n]+(?:is|was)[^\S\n]+rated(?:[^\S\n]+(?:at|for))?[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 50), start))) return 'out';
   }
   if (RATED_ENGINE_AFTER_RE.test(after) && /(?:^|[.!?:\n][^\S\n]*)(?:the|a|an|our|this|its|their|each)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 40), start))) return 'out';
   // "The pump motor is a 10 hp unit drawing 8.2 kW": the rating of the motor, engine or turbine the
