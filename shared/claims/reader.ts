@@ -35,6 +35,9 @@
  *     - an excess over a stated input ("4 W more heat than the 20 W it draws") → out = in + excess;
  *     - "self-running", "needs no supply" … (not where the device harvests an outside flow) → in = 0;
  *     - one temperature and a difference → the other temperature (hot = cold + ΔT, or cold = hot − ΔT).
+ *  Text copied out of a PDF (reader/pdf-text.ts) is read as written: words broken at a line's end joined,
+ *  wrapped lines read as one sentence, ligatures as letters, and a table set as text with a header row
+ *  read cell by cell after its column's label; offsets map back to the pasted text.
  *  TeX left in a text ("$\\eta = 0.42$", "1.7 \\times 10^{-6} N", "44.7\\,\\%") is read as written plainly
  *  (reader/tex.ts), the offsets mapped back to the pasted text.
  *  Numbers after a label ("Figure 2 A", "Section 3.2", "p. 12", "Eq. 4", "§ 3") and years before an
