@@ -1282,3 +1282,30 @@ describe('review texts (invented test data)', () => {
     expect(r!.outputs.find((o) => o.name === 'ratio')!.si).toBeCloseTo(0.0011 / (25 / 299792458), 0);
   });
 });
+
+describe('a headline figure said again beside the sides (invented test data)', () => {
+  // Carnot efficiency 1 − Tc/Th = 1 − 303.15/423.15 = 0.28359 (Çengel & Boles, Thermodynamics, ch. 6).
+  const story = (restated: boolean) =>
+    [
+      "Exhaust generator 'turns 41 per cent of waste heat into electricity'",
+      '',
+      'The firm was founded by two former students of a regional university, who built the first prototypes in a rented workshop and say they spent most of their savings on test equipment before the first investors arrived. The trial will run through the winter on routes between the ports and the inland depots.',
+      '',
+      `A start-up says its thermoelectric module, fitted inside a lorry's exhaust pipe, ${restated ? 'converts 41 per cent of the heat passing through it into electricity' : 'is ready for a fleet trial'}, and it is seeking investors for a trial with a haulier running sixty vehicles across the north of the country.`,
+
+      '',
+      "The company's chief executive told a logistics conference that the module's hot face runs at 150 °C while its cold face, cooled by the engine coolant loop, sits at 30 °C.",
+    ].join('\n');
+  test('the restatement nearest the sides is checked: the claim breaks Carnot', () => {
+    const text = story(true);
+    const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+    expect(run?.finding).toBe('breaks');
+    expect(run!.outputs.find((o) => o.name === 'eta_ratio')!.si).toBeCloseTo(0.41 / (1 - 303.15 / 423.15), 9);
+  });
+  test('said only in the headline, paragraphs from the sides, it waits for the reader to confirm', () => {
+    const text = story(false);
+    const { checks, needs } = runClaimChecks(extractFigures(text), { text });
+    expect(checks.find((c) => c.check === 'carnot')).toBeUndefined();
+    expect(needs.find((n) => n.check === 'carnot')?.missing[0]).toMatch(/far apart/);
+  });
+});

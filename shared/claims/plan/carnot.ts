@@ -79,7 +79,14 @@ function withSides(candidates: Figure[], b: Basis): Figure | undefined {
   const paragraphs = new Set(b.figures.filter((f) => (f.kind === 'temperature' || f.kind === 'temperature-difference') && f.role !== 'aside' && f.start !== null).map((f) => paragraphKey(b.text, f.start!)));
   const first = candidates[0];
   if (first.start === null || paragraphs.has(paragraphKey(b.text, first.start))) return first;
-  return candidates.find(has) ?? first;
+  // ("… converts 41 per cent of waste heat" in a headline, said again in the story's first paragraph,
+  // the sides in the next: the same figure restated nearest the sides is the one said with them.)
+  const sides = b.figures.filter((f) => (f.kind === 'temperature' || f.kind === 'temperature-difference') && f.role !== 'aside' && f.start !== null).map((f) => f.start!);
+  const distance = (f: Figure) => Math.min(...sides.map((at) => Math.abs(at - f.start!)));
+  const restated = candidates
+    .filter((f) => f !== first && f.start !== null && f.role === first.role && f.si === first.si && (f.upper?.si ?? null) === (first.upper?.si ?? null))
+    .sort((x, y) => distance(x) - distance(y))[0];
+  return candidates.find(has) ?? (restated && sides.length > 0 && distance(restated) < distance(first) ? restated : first);
 }
 
 /**
