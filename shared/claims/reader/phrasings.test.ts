@@ -1387,3 +1387,18 @@ test("a flattened table of runs near the stated output ('(Run 1: 2.85 kW; Run 2:
   const both = extractFigures('It took in 100 W and put out 95 W (run 1, 98 W; run 2, 97 W).');
   expect(both.filter((x) => x.si === 98 || x.si === 97).map((x) => x.role)).toEqual([null, null]);
 });
+
+describe('a COP given "as" a range (invented test data)', () => {
+  const read = (text: string) => {
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    return figures;
+  };
+  test('"gave the heating coefficient of performance as "between 2.8 and 3.4""', () => {
+    const f = read('The engineers\' report gave the heating coefficient of performance as "between 2.8 and 3.4" over the winter, with brine at 6 °C and the floor circuit at 35 °C.');
+    expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'heating', si: 2.8, upper: { si: 3.4 } });
+  });
+  test('but "as" after other words is no connector: "twice as 5 kW units"', () => {
+    expect(read('The plant counts twice as 5 kW units in the register.').some((x) => x.kind === 'cop' || x.kind === 'efficiency')).toBe(false);
+  });
+});
