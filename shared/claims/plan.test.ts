@@ -1309,3 +1309,16 @@ describe('a headline figure said again beside the sides (invented test data)', (
     expect(needs.find((n) => n.check === 'carnot')?.missing[0]).toMatch(/far apart/);
   });
 });
+
+describe("an engine's radiator names no heat pump (invented test data)", () => {
+  test('a generator set whose waste heat goes "out through the radiator" is checked against the first law', () => {
+    const text = 'The silent generator delivered 5 kW into the load bank for two weeks, and burnt diesel worth 4,800 kWh of chemical energy. The rest went up the exhaust and out through the radiator.';
+    const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+    expect(run?.finding).toBe('consistent');
+    // 5 kW × 14 days × 86 400 s = 6.048 GJ out, against 4,800 kWh = 17.28 GJ in (1 kWh = 3.6 MJ, NIST SP 811 B.8).
+    expect(run!.outputs.find((o) => o.name === 'over_unity')!.si).toBeCloseTo((5000 * 14 * 86400) / (4800 * 3.6e6), 9);
+  });
+  test("a house's radiators still speak of space heating", () => {
+    expect(readSignals({ text: 'The unit feeds the radiators at 45 °C flow.' }).heatPump).toBe(true);
+  });
+});
