@@ -70,12 +70,9 @@ export function extractFigures(text: string): Figure[] {
   // then each figure's offsets and words point back at the pasted text.
   const unwrapped = readableLayout(text);
   if (unwrapped === null) return readWithTex(text);
-  const { toPasted } = unwrapped;
-  return readWithTex(unwrapped.text).map((f) => {
-    if (f.start === null || f.end === null) return f;
-    const start = toPasted[f.start];
-    const end = f.end > f.start ? toPasted[f.end - 1] + 1 : start;
-    return { ...f, start, end, text: text.slice(start, end) };
+  return pointBack(readWithTex(unwrapped.text), text, (f) => {
+    const start = unwrapped.toPasted[f.start];
+    return [start, f.end > f.start ? unwrapped.toPasted[f.end - 1] + 1 : start];
   });
 }
 
@@ -84,13 +81,20 @@ function readWithTex(text: string): Figure[] {
   if (plain === null) return readPlain(text);
   // TeX left in the text ("$\\eta = 0.42$", "1.7 \\times 10^{-6} N"): read as plainly written, then
   // each figure's offsets and words point back at the pasted text.
-  const { toPasted } = plain;
-  return readPlain(plain.text).map((f) => {
-    if (f.start === null || f.end === null) return f;
-    const start = toPasted[f.start];
-    let end = toPasted[f.end];
+  return pointBack(readPlain(plain.text), text, (f) => {
+    const start = plain.toPasted[f.start];
+    let end = plain.toPasted[f.end];
     while (end > start + 1 && /[\s$]/.test(text[end - 1])) end--;
-    return { ...f, start, end, text: text.slice(start, end) };
+    return [start, end];
+  });
+}
+
+/** Figures read from a rewritten text, their offsets and words moved back to the pasted text. */
+function pointBack(figures: Figure[], pasted: string, place: (f: { start: number; end: number }) => [number, number]): Figure[] {
+  return figures.map((f) => {
+    if (f.start === null || f.end === null) return f;
+    const [start, end] = place({ start: f.start, end: f.end });
+    return { ...f, start, end, text: pasted.slice(start, end) };
   });
 }
 
