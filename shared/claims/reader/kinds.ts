@@ -74,7 +74,7 @@ const GAIN_AFTER_RE =
  * fuel": units out for a number of units in (group 1; none for a single unit).
  */
 const GAIN_FOR_EVERY_RE =
-  /[^\S\n]*units?[^\S\n]+(?:of[^\S\n]+(?:[\p{L}-]+[^\S\n]+){1,4}?)?(?:(?:back|out|returned|delivered)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:(\d+(?:\.\d+)?|two|three|four|five|six|seven|eight|nine|ten)(?![\p{L}\p{N}])|units?(?!\p{L}))(?=[^.;!?\n]{0,40}(?:in|takes?|took|consumes?|uses?|draws?|of (?:fuel|input|energy|electricity|power|work)|put in|supplied|fed)(?!\p{L}))/iuy;
+  /[^\S\n]*units?[^\S\n]+(?:of[^\S\n]+(?:[\p{L}-]+[^\S\n]+){1,4}?)?(?:(?:back|out|returned|delivered)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:(\d+(?:\.\d+)?|two|three|four|five|six|seven|eight|nine|ten)(?![\p{L}\p{N}])|units?(?!\p{L}))(?=[^.;!?\n]{0,40}(?:in|into|enters?|takes?|took|consumes?|uses?|draws?|of (?:fuel|input|energy|electricity|power|work)|put in|supplied|fed)(?!\p{L}))/iuy;
 const SMALL_NUMBER: Record<string, number> = { two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10 };
 /** "For every unit of electricity we put in, the amplifier gives back 1.3." */
 const GAIN_BEFORE_RE =
@@ -174,7 +174,9 @@ export function readPercent(text: string, start: number, end: number, floor: num
   const heatToWork = PERCENT_OF_HEAT_RE.test(text) || SHARE_AS_WORK_RE.test(text) || percentOfHeatThrough(text, end);
   const after = efficientSaid || heatToWork || PV_CELL_AFTER_RE.test(text);
   // (A clause set off by commas may take the efficiency word further back than the usual window.)
-  const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(before) ?? EFFICIENCY_PERCENT_BEFORE_RE.exec(text.slice(Math.max(floor, start - BEFORE_WINDOW - 90), start));
+  // (A model's name between the word and the figure is no figure of its own: "The electrical efficiency of
+  // the Ardoise S2 is 31 %", "efficiency of the GS-12 was 42 %".)
+  const m = EFFICIENCY_PERCENT_BEFORE_RE.exec(maskModelNames(before)) ?? EFFICIENCY_PERCENT_BEFORE_RE.exec(maskModelNames(text.slice(Math.max(floor, start - BEFORE_WINDOW - 90), start)));
   // "Ammonia–water cycle engine, 19 % at a 120 °C heat source": a percentage said right after a heat
   // engine named, with a temperature in the same sentence, is its efficiency.
   const engineSaid =
@@ -184,8 +186,16 @@ export function readPercent(text: string, start: number, end: number, floor: num
   // percentage worked out from the two powers said just before it, in a log's shorthand.
   const line = text.slice(Math.max(text.lastIndexOf('\n', start - 1) + 1, start - 160), start);
   const worked = /(?:→|->|=>|⇒|=)[^\S\n]*(?:(?:about|approx\.?|~|≈|ca\.?)[^\S\n]*)?$/u.test(line) && (line.match(/\d[^\S\n]*(?:[kMG]?W|[kMG]?Wh|[kMG]?J)(?![\p{L}\d])/gu) ?? []).length >= 2;
-  const efficiency = after || engineSaid || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1])) || worked;
+  // ("the conversion efficiency from heat passing through the module to electrical output is 6.5 %": what it
+  // converts from and to, said between the word and the figure.)
+  const fromTo = /(?<!\p{L})efficiency[^\S\n]+from[^\S\n]+[^\d.;!?\n]{3,110}?[^\S\n]+to[^\S\n]+[^\d.;!?\n]{3,60}?[^\S\n]+(?:is|was|of|=|:)[^\S\n]*(?:(?:about|around|roughly|some|only|just|~|≈)[^\S\n]*)?$/iu.test(text.slice(Math.max(floor, start - 200), start));
+  // ("'How much of the heat becomes electricity?' About 11 %.": the answer to a question of efficiency.)
+  const answered = /(?:efficien\w*|how[^\S\n]+much[^\S\n]+of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:heat|fuel|energy|light|sunlight|power|input)(?!\p{L})[^?\n]{0,60})\?[^\S\n]*['’"”]?[^\S\n]*\n+[^\S\n]*(?:(?:A|Answer)[^\S\n]*[:.)][^\S\n]*)?(?:(?:yes|no|well|so)[,.!]?[^\S\n]+)?(?:(?:about|around|roughly|some|only|just|nearly|almost|approximately|~|≈)[^\S\n]*)?$/iu.test(text.slice(Math.max(floor, start - 240), start));
+  const efficiency = after || engineSaid || fromTo || answered || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1].replace(/,[^,\n]{3,140},/u, ' '))) || worked;
   if (!efficiency) return null;
+  // ("95 % AFUE", "AFUE: 96 %": an annual fuel utilisation efficiency is a fuel burner's by definition,
+  // whatever heat pump the text also names.)
+  if (/^[^\S\n]*[\p{Pi}\p{Pf}"']?[^\S\n]*AFUE(?!\p{L})/u.test(text.slice(end, end + 12)) || /(?<!\p{L})AFUE[^\S\n]*(?:\([^)\n]{0,20}\))?[^\S\n]*(?:[:=]|of|is|was|rating(?:[^\S\n]+of)?)?[^\S\n]*$/u.test(before)) return { kind: 'efficiency', factor: 1, unit: '%' };
   // The machine is named anywhere in the claim ("Had our air-to-water unit fitted. … '350 % efficient'") —
   // unless the percentage's own paragraph is of another machine (a motor and generator set, a circuit) and
   // has no word of heat: in a report on several stands or bids, a heat pump elsewhere is not this one.
@@ -228,6 +238,9 @@ export function readPercent(text: string, start: number, end: number, floor: num
   }
   return { kind: 'efficiency', factor: 1, unit: '%' };
 }
+
+/** A model's designation, capital letters with digits ("S2", "GS-12", "Mk3"), with its digits made letters. */
+const maskModelNames = (s: string): string => s.replace(/(?<![\p{L}\p{N}.,])(\p{Lu}[\p{L}]*-?)(\d+)(?=[^\S\n]+(?:is|was|are|were|has|had|reaches|reached|achieves|achieved|of|at|came|comes|runs|ran|gives|gave|rated)(?!\p{L}))/gu, (_, a: string, d: string) => a + 'x'.repeat(d.length));
 
 /** A sentence on heat pumps in general ("Heat pumps are routinely described as …", "Like heat pumps, …") or one set against them ("unlike a heat pump"). */
 const GENERIC_HEAT_PUMPS_RE =

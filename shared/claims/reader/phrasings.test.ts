@@ -1402,3 +1402,64 @@ describe('a COP given "as" a range (invented test data)', () => {
     expect(read('The plant counts twice as 5 kW units in the register.').some((x) => x.kind === 'cop' || x.kind === 'efficiency')).toBe(false);
   });
 });
+
+describe('efficiencies said past a model name, a clause, a "from … to …" or as the answer to a question (invented test data)', () => {
+  const read = (text: string) => {
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    return figures;
+  };
+  const effs = (text: string) => read(text).filter((x) => x.kind === 'efficiency').map((x) => [x.si, x.role]);
+  test('"The electrical efficiency of the Fenwick K2 is 31 %": the model\'s digits are no figure between', () => {
+    expect(effs('The electrical efficiency of the Fenwick K2 is 31 %. Its hot head runs at 600 °C.')).toEqual([[0.31, null]]);
+  });
+  test('"net efficiency, after the power used by the pumps, as 2.5 per cent": a clause\'s "by" is no change of efficiency', () => {
+    expect(effs("The log gave the plant's net efficiency, after the power used by the pumps, as 2.5 per cent.")).toEqual([[0.025, null]]);
+    // (but "improved by 5 %" stays a change, not an efficiency)
+    expect(effs('The efficiency, as the graph shows, improved by 5 %.')).toEqual([]);
+  });
+  test('"the conversion efficiency from heat passing through the module to electrical output is 6.5 %"', () => {
+    const f = read('With the hot plate at 250 °C and 200 K across it, the conversion efficiency from heat passing through the module to electrical output is 6.5 %.');
+    expect(f.find((x) => x.kind === 'efficiency')?.si).toBeCloseTo(0.065, SEVEN);
+    expect(f.find((x) => x.kind === 'temperature-difference')?.si).toBe(200);
+    // Carnot bound between 523.15 K and 323.15 K: 1 − 323.15/523.15 = 0.38230 (textbook Carnot formula; node).
+    const r = runClaimChecks(f, { text: 'the conversion efficiency from heat passing through the module' });
+    expect(r.checks.find((c) => c.check === 'carnot')?.outputs.find((o) => o.name === 'eta_max')?.si).toBeCloseTo(0.3823, 4);
+  });
+  test("\"'How much of the heat becomes electricity?' About 11 %.\": the answer to a question of efficiency", () => {
+    expect(effs("'How much of the heat becomes electricity?'\nAbout 11 %. The rest goes to the condensers.")).toEqual([[0.11, null]]);
+    // (a question of something else makes no efficiency of the answer)
+    expect(effs("'How many homes already signed up?'\nAbout 11 %.")).toEqual([]);
+  });
+  test('"units … for every unit that goes into the motor": a ratio of out to in', () => {
+    expect(effs('The generator gives back 0.86 units of electricity for every unit that goes into the driving motor.')).toEqual([[0.86, null]]);
+  });
+  test('"95 % AFUE" is a fuel burner\'s efficiency even where a heat pump is named beside it', () => {
+    const f = read('Claimed performance: 80,000 BTU/h input, 76,000 BTU/h output, "95 % AFUE". A heat pump was also quoted.');
+    expect(f.find((x) => Math.abs(x.si - 0.95) < 1e-9)?.kind).toBe('efficiency');
+  });
+});
+
+test("a misprint owned as 'a slip' is set aside for the figure that replaces it (invented test data)", () => {
+  const f = extractFigures("Correction: in our guide to heat pumps the seasonal efficiency of the Tarnside HP-9 was printed as 41 %. That was a slip at the layout stage: the test sheet gives a heating coefficient of performance of 4.1, with brine at 0 °C and flow at 35 °C.");
+  expect(f.filter((x) => x.kind === 'cop').map((x) => [x.si, x.role])).toEqual([
+    [0.41, 'aside'],
+    [4.1, 'heating'],
+  ]);
+});
+
+test("a store drained by a load it keeps running: 'our twenty watt-hour cell powered a five watt lamp for two weeks' (invented test data)", () => {
+  const text = 'Our twenty watt-hour cell powered a five watt lamp for two weeks straight, and it was never recharged. Two weeks, five watts, twenty watt-hours.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.kind === 'energy' && x.si === 72000 && x.role === 'in')).toBeDefined();
+  const r = runClaimChecks(f, { text });
+  // 5 W × 14 × 86 400 s = 6 048 000 J out of a 72 000 J store (1 Wh = 3600 J, NIST SP 811 B.8): 84 times over.
+  expect(r.checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(84, SEVEN);
+  // A lawful run inside the store: 5 W for 3 h is 54 kJ of 72 kJ.
+  const lawful = 'Our twenty watt-hour cell powered a five watt lamp for three hours.';
+  const ok = runClaimChecks(extractFigures(lawful), { text: lawful });
+  expect(ok.checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.75, SEVEN);
+  // With a charger named the store is not the whole input: no ledger.
+  const charged = 'Our twenty watt-hour cell, topped up by a small solar panel, powered a five watt lamp for two weeks.';
+  expect(runClaimChecks(extractFigures(charged), { text: charged }).checks.some((c) => c.check === 'first-law' && c.finding === 'breaks')).toBe(false);
+});

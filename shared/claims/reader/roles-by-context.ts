@@ -76,7 +76,21 @@ const OTHER_SOURCE_RE =
 
 /** A source said to be absent ("with no sun at all", "without recharging"): no other source. */
 const NEGATED_SOURCE_RE =
-  /(?<!\p{L})(?:no|without|never any|not any|never (?:needs?|needed|requires?|required|uses?|used))[^\S\n]+(?:(?:any|direct|further|other|more|energy|external)[^\S\n]+)?(?:sun(?:light|shine)?|solar|charg\w*|recharg\w*|mains|grid|fuel|panels?|harvest\w*)(?!\p{L})|(?<!\p{L})(?:per|on (?:one|a single|a full|each)|between|each|a) (?:full )?charges?(?!\p{L})|(?<!\p{L})(?:fully|freshly|once|already|previously|pre-?)[^\S\n-]*charged(?!\p{L})/giu;
+  /(?<!\p{L})(?:no|without|never any|not any|never (?:needs?|needed|requires?|required|uses?|used)|(?:never|not)(?:[^\S\n]+(?:once|been|once[^\S\n]+been))?(?=[^\S\n]+(?:re)?charged))[^\S\n]+(?:(?:any|direct|further|other|more|energy|external)[^\S\n]+)?(?:sun(?:light|shine)?|solar|charg\w*|recharg\w*|mains|grid|fuel|panels?|harvest\w*)(?!\p{L})|(?<!\p{L})(?:per|on (?:one|a single|a full|each)|between|each|a) (?:full )?charges?(?!\p{L})|(?<!\p{L})(?:fully|freshly|once|already|previously|pre-?)[^\S\n-]*charged(?!\p{L})/giu;
+
+/**
+ * A real supply that may feed a load or fill a store, said as one (not denied: "no panel", "never
+ * plugged in"): a solar panel, the mains, a charger, a dynamo, "topped up from", "recharged every night".
+ * Narrower than OTHER_SOURCE_RE: the charge a claimed cell "renews from the environment" is no supply.
+ */
+const FEED_RE =
+  /(?<!\p{L})(?:solar[^\S\n]+(?:panels?|cells?|chargers?|arrays?|modules?)|photovoltaic|PV[^\S\n]+(?:panels?|modules?|arrays?)|panels?|mains(?:[^\S\n]+(?:power|electricity|supply|socket|charger))?|(?:the[^\S\n]+)?grid(?![^\S\n]*-)|(?:wind|water)[^\S\n]+turbines?|dynamos?|alternators?|hand[- ]?cranks?|chargers?|charging[^\S\n]+(?:stations?|cables?|docks?|points?)|plugged[^\S\n]+in|topped[^\S\n]+up[^\S\n]+(?:by|from|with|off|at)|(?:re)?charged[^\S\n]+(?:every|each|daily|nightly|overnight|from|by|with|off|at)|(?:re)?charg(?:es|ing)[^\S\n]+(?:it|them|itself)?[^\S\n]*(?:every|each|daily|nightly|overnight|from|off))(?!\p{L})/giu;
+const namesAFeed = (para: string): boolean => {
+  for (const m of para.matchAll(FEED_RE)) {
+    if (!/(?<!\p{L})(?:no|without|never|nobody|not|nor|n't|or)(?!\p{L})[^.;!?\n]{0,25}$/iu.test(para.slice(Math.max(0, m.index - 30), m.index))) return true;
+  }
+  return false;
+};
 
 /** Right after a rating: a supply, an adapter or a charger named ("100 W bench supply", "65 W USB-C adapter"). */
 const SUPPLY_RATING_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:(?!(?:from|the|a|an|of|by|via|through|at|to|into|on|its|their|our)(?![\p{L}\d-]))[\p{L}\d-]+[^\S\n]+){0,2}?(?:(?:power|bench|lab|laboratory|DC)[^\S\n]+)?(?:supply|supplies|PSUs?|adapters?|chargers?|power bricks?)(?!\p{L})/iu;
@@ -195,6 +209,8 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   for (const d of drafts) {
     if (d.kind === 'energy' && !d.derived && d.role !== 'aside' && /^[^\S\n]*(?:(?:was|were|is|are)[^\S\n]+)?(?:still[^\S\n]+)?(?:left|remaining|remained|left[^\S\n]+over|to[^\S\n]+spare|in[^\S\n]+reserve|unused)(?!\p{L})/iu.test(text.slice(d.end, d.end + 30))) d.role = 'aside';
   }
+  /** A store's energy that is not the whole input (something else named may feed its load): no side. */
+  const partInput = new Set<Draft>();
   const storesSaid = drafts.filter(
     (d) =>
       d.kind === 'energy' &&
@@ -203,6 +219,9 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
       // ("the cell stores 3 Wh": what a store holds, whatever side its verb gave it.)
       (d.role === null || d.role === 'in' || STORE_HOLDS_RE.test(text.slice(Math.max(0, d.start - 40), d.start))),
   );
+  // (Or a load's own power said as what it gives while the store runs it — "our twenty watt-hour cell
+  // powered a five watt lamp for two weeks" — where nothing else is named that could feed it: see below.)
+  const loadsRun = drafts.filter((d) => d.kind === 'power' && d.role === 'out' && !d.derived);
   const draws = drafts.filter(
     (d) =>
       d.kind === 'power' &&
@@ -217,6 +236,8 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   // (Not the draw over the run, said as an energy beside the word of the store: "over two weeks the station
   // uses a little over 2 kWh, which is less than the battery holds".)
   const runs = drafts.filter((d) => d.kind === 'duration' && d.role !== 'aside').map(siOf).filter((x): x is number => x !== null);
+  const asLoad = draws.length === 0 && loadsRun.length >= 1 && loadsRun.every((d) => siOf(d) === siOf(loadsRun[0]));
+  if (asLoad) draws.push(loadsRun[0]);
   const drawn = draws.length === 1 ? (siOf(draws[0]) ?? NaN) : NaN;
   const drawOverRun = (d: Draft) => d.kind === 'energy' && runs.some((t) => Math.abs((siOf(d) ?? NaN) - drawn * t) <= 0.05 * drawn * t);
   const stores = storesSaid.filter((d) => !drawOverRun(d) || STORE_HOLDS_RE.test(text.slice(Math.max(0, d.start - 40), d.start)));
@@ -229,14 +250,29 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   const storeHolds = stores.length === 1 ? (siOf(stores[0]) ?? NaN) : NaN;
   const chargedStore = (d: Draft) =>
     d.kind === 'power' && d.role === 'in' && d !== draws[0] && runs.some((t) => Math.abs((siOf(d) ?? NaN) * t - storeHolds) <= 0.05 * storeHolds);
-  const others = drafts.filter((d) => energyLike(d) && d.role !== 'aside' && d !== stores[0] && d !== draws[0] && ofStore(d) && !chargedStore(d));
+  // (Nor the store's or the load's figure said again: "Two weeks, five watts, twenty watt-hours".)
+  const sameAs = (d: Draft, o: Draft | undefined) => !!o && d.kind === o.kind && d.role !== (o.role === 'in' ? 'out' : 'in') && Math.abs((siOf(d) ?? NaN) - (siOf(o) ?? NaN)) <= 1e-9 * Math.abs(siOf(o) ?? 0);
+  const others = drafts.filter((d) => energyLike(d) && d.role !== 'aside' && d !== stores[0] && d !== draws[0] && ofStore(d) && !chargedStore(d) && !(asLoad && (sameAs(d, stores[0]) || sameAs(d, draws[0]))));
   // (Or the draw over the run said as an energy: "6 W … over two weeks the station uses a little over 2 kWh".)
   if (stores.length === 1 && draws.length === 1 && others.every((d) => d.derived || (d.role === 'out' && d.kind === 'energy') || drawOverRun(d)) && drafts.some((d) => d.kind === 'duration')) {
     for (const d of others) if (drawOverRun(d)) d.role = 'out';
+    const sideBefore = stores[0].role;
     stores[0].role = 'in';
+    // (Not where the energy is itself what was drawn from a supply, "used 1.1 kWh from a battery bank", or
+    // what someone charged it with: then it is the input, whatever else is named.)
+    const drawnFrom = /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?from(?!\p{L})/iu.test(text.slice(stores[0].end, stores[0].end + 30));
+    if (asLoad && sideBefore === null && !drawnFrom) {
+      // (A load that the store alone could not have kept going, where a real supply is named that may have
+      // fed it — "topped up by a small solar panel": the store is not the whole input, no ledger. One the
+      // store covers keeps it: the input was at least that.)
+      if (runs.some((t) => drawn * t > (siOf(stores[0]) ?? Infinity)) && [...ownParagraphs].some(namesAFeed)) {
+        stores[0].role = null;
+        partInput.add(stores[0]);
+      }
+    }
     // (Where something else may feed the load, a solar panel named, the draw stays an input: no ledger,
     // rather than one with a store that is not the whole input.)
-    if (![...ownParagraphs].some((para) => OTHER_SOURCE_RE.test(para.replace(NEGATED_SOURCE_RE, ' ')))) draws[0].role = 'out';
+    else if (![...ownParagraphs].some((para) => OTHER_SOURCE_RE.test(para.replace(NEGATED_SOURCE_RE, ' ')))) draws[0].role = 'out';
   }
   // "The 100 W bench supply powers a 12 V, 2 A load": a supply's rating is what it can give, not a flow of
   // the load it feeds, whose own power the text states (current × voltage).
@@ -269,7 +305,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   }
   // One side named, one figure left: the other side.
   const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
-  const open = drafts.filter((d) => energyLike(d) && d.role === null);
+  const open = drafts.filter((d) => energyLike(d) && d.role === null && !partInput.has(d));
   // (In a text of several paragraphs, only a side named in the open figure's own paragraph: "the
   // lorry's 300 kWh battery has to be charged" is no other side of "its first silo holds 8 MWh" in a
   // paragraph on another holding.)
