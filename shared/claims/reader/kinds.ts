@@ -80,7 +80,7 @@ const SMALL_NUMBER: Record<string, number> = { two: 2, three: 3, four: 4, five: 
 const GAIN_BEFORE_RE =
   /(?<!\p{L})(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:single[^\S\n]+)?(?:unit|joule|watt|kilowatt-hour|kWh|J|W)s?\b[^.;!?\n]{0,80}(?:gives?|returns?|yields?|delivers?|produces?|get|gets|comes? out|back)(?:[^\S\n]+(?:back|out|us|about|roughly|some|nearly))*[^\S\n]*$/iu;
 const TIMES_AFTER_RE =
-  /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical|electricity|electric power|work)[^\S\n]+)?(?:input|consumption|in(?=[^\S\n]*(?:[,.;:)]|$))|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in|what (?:it|the [\p{L}-]+) (?:is fed|takes|draws|uses|consumes|gets|receives|is given))/iuy;
+  /[^\S\n]*(?:times|x|×)[^\S\n]+(?:(?:as[^\S\n]+much|more)[^\S\n]+)?(?:(?:energy|power|electricity|heat|work|output)[^\S\n]+(?:(?:out[^\S\n]+of|into|from|to|in)[^\S\n]+(?:[\p{L}'’-]+[^\S\n]+){1,3}?(?=(?:as|than)[^\S\n]))?)?(?:(?:as|than)[^\S\n]+)?(?:(?:the|its|it)[^\S\n]+)?(?:(?:energy|power|electrical|electricity|electric power|work)[^\S\n]+)?(?:input|consumption|in(?=[^\S\n]*(?:[,.;:)]|$))|it (?:takes|uses|consumes|draws|needs|is fed|receives)|(?:is|was) (?:put in|supplied|fed in)|supplied|consumed|drawn|needed|fed in|put in|what (?:it|the [\p{L}-]+) (?:is fed|takes|draws|uses|consumes|gets|receives|is given))/iuy;
 const TIMES_BEFORE_RE = /(?<!\p{L})(?:output|yield|gain|returns?|delivers?|produces?|generates?|puts? out|gives?(?: back| out)?|makes|provides|supplies|sends? back)(?:[^\S\n]+(?:is|of|was|are|reaches|reached|power|energy|exactly|about|roughly|some|nearly))*[^\S\n]*$/iu;
 /** "the output exceeds the input by a factor of 1.5", "output is higher than input by a factor of 2". */
 const FACTOR_BEFORE_RE =
@@ -276,6 +276,9 @@ export function bareKind(text: string, start: number, end: number, floor: number
   // (A clause set off by commas may take the COP further back than the usual window.)
   const wide = text.slice(Math.max(floor, start - BEFORE_WINDOW - 160), start);
   if (COP_SYMBOL_BEFORE_RE.test(before) || COP_WORDS_BEFORE_RE.test(before) || COP_SYMBOL_BEFORE_RE.test(wide) || COP_WORDS_BEFORE_RE.test(wide)) return { kind: 'cop' };
+  // ("Heat at a coefficient of 4.8", of a heat pump named in its paragraph: its COP, the trade's short form.
+  // A coefficient of anything named — of friction, of drag — has its name between.)
+  if (/(?<!\p{L})coefficient[^\S\n]+of[^\S\n]+(?:(?:about|around|roughly|some|nearly|up[^\S\n]+to)[^\S\n]+)?$/iu.test(before) && HEAT_PUMP_RE.test(text.slice(Math.max(text.lastIndexOf('\n', start) + 1, start - 400), Math.min(text.length, end + 200)))) return { kind: 'cop' };
   // "Measured COP of the brine-to-water prototype over the six-week trial: between 3.2 and 3.8": a caption
   // or a line that names the COP before its colon.
   if (/^[^.;!?\n]{0,30}?(?<!\p{L})(?:COPs?|coefficients?[^\S\n]+of[^\S\n]+performance)(?!\p{L})[^:;!?\n]{0,100}:[^\S\n]*(?:(?:between|about|approx\.?|around|roughly|ca\.?|~|≈)[^\S\n]*)?$/u.test(text.slice(sentenceStart(text, start), start))) return { kind: 'cop' };

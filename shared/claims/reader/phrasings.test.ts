@@ -1463,3 +1463,33 @@ test("a store drained by a load it keeps running: 'our twenty watt-hour cell pow
   const charged = 'Our twenty watt-hour cell, topped up by a small solar panel, powered a five watt lamp for two weeks.';
   expect(runClaimChecks(extractFigures(charged), { text: charged }).checks.some((c) => c.check === 'first-law' && c.finding === 'breaks')).toBe(false);
 });
+
+describe('a COP in the trade\'s short forms, a sheet\'s "none" of reaction mass, a fire under a fan (invented test data)', () => {
+  test('"Heat at a coefficient of 4.8" in a paragraph on a heat pump is its COP; "a coefficient of 0.8" of tyres is not', () => {
+    const f = extractFigures('Each block has a communal heat pump. The installer\'s van says "Heat at a coefficient of 4.8".');
+    expect(f.map((x) => [x.kind, x.role, x.si])).toEqual([['cop', 'heating', 4.8]]);
+    const r = runClaimChecks(f, { text: 'Each block has a communal heat pump.' });
+    expect(r.needs.map((n) => n.check)).toContain('carnot');
+    expect(extractFigures('The tyres on wet tarmac give a coefficient of 0.8.').some((x) => x.kind === 'cop')).toBe(false);
+  });
+  test('"moves three times as much heat out of your food as the electricity it uses": a fridge\'s cooling COP', () => {
+    const f = extractFigures('The Elmbrook fridge moves three times as much heat out of your food as the electricity it uses.');
+    expect(f.map((x) => [x.kind, x.role, x.si])).toEqual([['cop', 'cooling', 3]]);
+  });
+  test('"Reaction mass expelled ....... none": a sheet\'s thrust with no propellant needs the power for the photon bound', () => {
+    const text = 'Net forward thrust ........... 0.45 N\nReaction mass expelled ....... none\nModule mass .................. 7.8 kg';
+    const r = runClaimChecks(extractFigures(text), { text });
+    expect(r.needs.map((n) => n.check)).toContain('photon-bound');
+    // (a sheet that lists its propellant is no such claim)
+    const fed = 'Net forward thrust ........... 0.45 N\nPropellant ................... xenon, 2 mg/s';
+    expect(runClaimChecks(extractFigures(fed), { text: fed }).needs.map((n) => n.check)).not.toContain('photon-bound');
+  });
+  test('a fan on a stove that "starts turning by itself" takes the stove\'s heat: no nil input, no false alarm', () => {
+    const text = 'The stove fan starts turning by itself and gives 5 W.';
+    const f = extractFigures(text);
+    expect(f.some((x) => x.role === 'in' && x.si === 0)).toBe(false);
+    expect(runClaimChecks(f, { text }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+    // (a wheel with no heat source named still says it needs nothing)
+    expect(extractFigures('The wheel turns by itself and gives 5 W.').some((x) => x.role === 'in' && x.si === 0)).toBe(true);
+  });
+});

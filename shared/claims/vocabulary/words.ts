@@ -64,6 +64,8 @@ export const PROPELLANT_FREE_WORDS = [
   'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
   'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'nothing (?:is |gets )?(?:blown|pushed|thrown|forced) (?:down(?:wards?)?|out|back(?:wards?)?)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
   'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
+  // (a sheet's row: "Reaction mass expelled ....... none", "Propellant: nil", "Propellant consumed = 0 g")
+  '(?:propellant|reaction mass|exhaust|working fluid)(?: (?:expelled|used|consumed|ejected|carried|flow|mass|use))?[ \\t.…:=–—-]*(?:none|nil|zero|0 (?:g|kg|mg))(?![\\w.])',
   'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', '(?:zero|nil|0) (?:propellant|reaction mass|exhaust)', 'propellant(?: used)?[^\\S\\n]*[:=][^\\S\\n]*(?:none|nil|zero|0 ?(?:g|kg)?)(?![\\w.])',
   // A sheet's row: "Propellant ............... none", "Propellant / exhaust | none", "Propellant\tnot required".
   '(?:propellant|reaction mass|exhaust)s?(?:[^\\S\\n]*(?:/|and|or)[^\\S\\n]*(?:propellant|exhaust|reaction mass))?(?:[^\\S\\n]+(?:used|required|consumption|mass|flow))?[^\\S\\n]*(?:\\.{2,}|…+|[|\\t:=])[^\\S\\n]*(?:none|nil|zero|not (?:required|needed|used)|n/a)(?!\\p{L})', 'expels? no (?:propellant|mass|gas|reaction mass|matter)',
@@ -126,6 +128,8 @@ export const HARVEST_WORDS = [
   '(?:draws?|drawing|takes?|taking|extracts?|extracting|absorbs?|absorbing|pulls?|pulling) (?:its |the )?(?:low-grade |ambient |waste )?heat from', 'ambient heat', 'heat of the (?:air|sea|surroundings|environment)',
   'harvest\\w*', 'thermoelectric', 'Seebeck', 'TEGs?', 'solar', 'photovoltaic', 'sunlight', 'light', 'vibrations?', 'body heat', 'thermal gradient', 'temperature difference', 'wind', 'tides?',
   'waves?', 'radio waves', 'RF energy', 'ambient (?:light|RF|vibration)', 'piezo\\w*', 'triboelectric',
+  // A device set on or over a fire or a hot surface takes its heat ("sits on the wood stove and starts turning by itself").
+  'stoves?', 'wood-?burners?', 'log[- ]burners?', 'hobs?', 'fireplaces?', 'hearths?', 'candles?', 'flames?', 'hot ?plates?', 'stove ?tops?', 'exhaust (?:pipes?|manifolds?|gas(?:es)?)', 'waste heat',
   'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell',
   // A vehicle or set that burns fuel (a "self-charging" hybrid charges from its engine).
   'petrol', 'gasoline', 'diesel', 'combustion engine', '(?:petrol|diesel|gas) engine', 'burns? (?:fuel|petrol|diesel|gas)', 'regenerative braking', 'braking',
