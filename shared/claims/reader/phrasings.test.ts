@@ -1493,3 +1493,38 @@ describe('a COP in the trade\'s short forms, a sheet\'s "none" of reaction mass,
     expect(extractFigures('The wheel turns by itself and gives 5 W.').some((x) => x.role === 'in' && x.si === 0)).toBe(true);
   });
 });
+
+describe('lawful devices said in words that sound like a free lunch: no false alarm (invented test data)', () => {
+  const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.some((c) => c.finding === 'breaks');
+  test.each([
+    'The amplifier boosts a 1 W input signal to 100 W at the speakers.',
+    'The fibre amplifier gives 10 W out from a 1 W seed laser.',
+    'A 5 W signal from the preamp drives the power stage, which delivers 400 W to the load.',
+    'The relay switches 3 kW with only 0.5 W of coil power.',
+    'The water wheel turns by itself all day and gives 3 kW.',
+    'The self-winding watch keeps running on its own; its mainspring stores 0.3 J.',
+    'Our battery-free remote needs no battery: pressing the button makes 200 µJ.',
+    'The radiator runs on its own with nothing plugged in: hot water from the boiler delivers 1.5 kW into the room.',
+    'A self-powered wristwatch that runs on the warmth of your wrist and makes 20 µW.',
+    'The LED drew 30 pW of electrical power and emitted 69 pW of light, a wall-plug efficiency above 200 %; the extra energy comes from heat in the lattice.',
+  ])('%s', (text) => {
+    expect(breaks(text)).toBe(false);
+  });
+  test('but the same words with nothing else feeding the device still break the first law', () => {
+    expect(breaks('Our magnetic amplifier gives 100 W out for a 1 W input signal, with no other supply.')).toBe(true);
+    expect(breaks('The wheel turns by itself and gives 5 W.')).toBe(true);
+    expect(breaks('The generator drew 30 W and gave 69 W; the extra energy comes from the vacuum.')).toBe(true);
+  });
+  test("an amplifier's signal beside its supply's draw is counted in with it", () => {
+    const text = 'The amplifier board takes 1 W of drive signal, gives 100 W, and draws 160 W from its supply.';
+    const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+    // 100 W out of 160 W + 1 W in: 100/161 (first law, energy out over energy in; node).
+    expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(100 / 161, SEVEN);
+  });
+  test("'5 W of light while drawing 30 W': the lamp's draw goes in", () => {
+    expect(extractFigures('The lamp gives 5 W of light while drawing 30 W.').map((x) => [x.role, x.si])).toEqual([
+      ['out', 5],
+      ['in', 30],
+    ]);
+  });
+});

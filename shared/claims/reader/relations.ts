@@ -14,7 +14,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, 
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor } from './roles';
-import { ROCKET_RE, rolesByContext } from './roles-by-context';
+import { asideControlPowers, ROCKET_RE, rolesByContext } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
 
 /** The text says the input was not given: a claim of no input cannot be read from it. */
@@ -366,6 +366,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   }
   ratingPoint(text, drafts);
   rolesByContext(text, drafts);
+  asideControlPowers(text, drafts);
   efficiencyQuotient(text, drafts);
 
   // "every kilowatt fed to it gives four hundred millinewtons": a thrust per power.
@@ -519,7 +520,9 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // ("No fuel!" of a battery pack: a store needs no fuel either.)
     const labelsOnly = matches.length > 0 && matches.every((x) => /^(?:free energy|perpetual|(?:needs? |requires? |takes |uses |with |without )?no (?:external )?fuel(?: at all| ever)?|without (?:any )?fuel)$/iu.test(x[0]));
     const hasThrust = drafts.some((d) => d.kind === 'thrust' || d.kind === 'thrust-per-power');
-    const outLike = (d: Draft) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust));
+    // (Not what a store holds, "its flywheel stores 300 J": a capacity is no output.)
+    const held = (d: Draft) => d.kind === 'energy' && /(?<!\p{L})(?:holds?|holding|stores?|stored|storing|contains?|capacity(?:[^\S\n]+of)?)[^\S\n]+(?:(?:about|some|roughly|only|just|up[^\S\n]+to)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, d.start - 30), d.start));
+    const outLike = (d: Draft) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'out' || d.role === 'excess' || (d.role === null && !hasThrust && !held(d)));
     // In a text of several paragraphs, the words and the output in one paragraph: "perpetual motion in a
     // box" in a note on one model is no nil input of another model's "stored energy 5 kWh" above it.
     const several = /\n[^\S\n]*\n/u.test(text.trim());

@@ -455,3 +455,31 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   }
   for (const d of drafts) if (d.kind === 'speed' && d.role === null && (siOf(d) ?? 0) < 299_792_458) d.role = 'delta-v';
 }
+
+/** Words that make a power a signal or a control, not what a device is fed with: "a 1 W input signal", "0.5 W of coil power". */
+const CONTROL_BEFORE_RE =
+  /(?<!\p{L})(?:signal|seed|coil|gate|trigger|control|pilot|drive signal|driving signal|input signal|preamp(?:lifier)?|seed laser)(?:[^\S\n]+(?:power|level|drive|input))?[^\S\n]*(?:of|at|is|was|:|=)?[^\S\n]*(?:(?:only|just|about|some|a mere)[^\S\n]+)?$/iu;
+const CONTROL_AFTER_RE =
+  /^[^\S\n]*(?:of[^\S\n]+)?(?:(?:input|drive|driving|control|coil|gate|trigger|pilot|audio|RF|radio|optical)[^\S\n]+)?(?:signal|seed(?:[^\S\n]+(?:laser|beam|light|pulse))?|coil(?:[^\S\n]+power)?|gate[^\S\n]+drive|trigger|control(?:[^\S\n]+(?:power|signal|input|current))?)(?!\p{L})|^[^\S\n]*(?:signal|seed)[^\S\n]+from(?!\p{L})/iu;
+/** A device that switches or amplifies a supply it draws from apart from its signal. */
+const CONTROLLED_DEVICE_RE =
+  /(?<!\p{L})(?:amplifiers?|amps?|power stages?|output stages?|relays?|contactors?|transistors?|MOSFETs?|IGBTs?|thyristors?|triacs?|solenoid valves?|servo[- ]?valves?|switch(?:es|ed|ing)?|dimmers?|valves?|gain)(?!\p{L})/iu;
+/** A claim that nothing else feeds it: then the signal is the only input the claim admits. */
+const NOTHING_ELSE_RE =
+  /(?<!\p{L})(?:no (?:other |external |separate )?(?:supply|power supply|source|input|mains|battery|batteries)|without (?:any |a )?(?:other |external |separate )?(?:supply|power supply|source|mains|battery)|self-?(?:powered|running|sustaining|looped)|free energy|over-?unity|COP|perpetual|nothing else)(?!\p{L})/iu;
+
+/**
+ * "The amplifier boosts a 1 W input signal to 100 W", "a 1 W seed laser", "switches 3 kW with only
+ * 0.5 W of coil power": an amplifier, a relay or a switch hands on power from a supply of its own, which
+ * the signal that controls it is not. Its signal's power is set aside (no input, so no ledger), unless
+ * the text says nothing else feeds it, or gives the supply's draw too (then the signal is counted in
+ * beside it).
+ */
+export function asideControlPowers(text: string, drafts: Draft[]): void {
+  if (!CONTROLLED_DEVICE_RE.test(text) || NOTHING_ELSE_RE.test(text)) return;
+  const control = (d: Draft) => d.kind === 'power' && d.role === 'in' && !d.derived && (CONTROL_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || CONTROL_AFTER_RE.test(text.slice(d.end, d.end + 40)));
+  const signals = drafts.filter(control);
+  // (Where the supply's own draw is given too, the signal is part of what goes in, beside it.)
+  if (drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in' && !signals.includes(d))) return;
+  for (const d of signals) d.role = 'aside';
+}
