@@ -6,6 +6,7 @@
 import type { Figure } from '../types';
 import { at, need, ofKind, siAt, typed, uniq, type Basis } from './basis';
 import { C_LIGHT } from '../../checks/constants';
+import { sentenceAround } from '../reader/context';
 import { propellantFreeParagraphs, readSignals, type Signals } from './signals';
 
 /** What the first-law planner needs to know of the thrust. */
@@ -49,6 +50,15 @@ function propellantFreeParagraph(b: Basis): { figures: Figure[]; s: Signals } | 
   return null;
 }
 
+/** A mirror, a sail or a reflector named as what light falls on and pushes (not a source of light). */
+const REFLECTOR_RE = /(?<!\p{L})(?:mirrors?|(?:solar |light |laser )?sails?|reflectors?|reflecting (?:foil|film|membrane|surface|plate)|lightsails?)(?!\p{L})/iu;
+const LIGHT_FALLS_RE = /(?<!\p{L})(?:sunlight|light|laser|beam|radiation pressure|light pressure|photons?|illuminat\w*|shines?|shone|falls? on|falling on|hits?|strikes?)(?!\p{L})/iu;
+function reflectorPushed(text: string, thrust: Figure): boolean {
+  if (!text || thrust.start === null || thrust.end === null) return false;
+  const sentence = sentenceAround(text, thrust.start, thrust.end);
+  return REFLECTOR_RE.test(sentence) && LIGHT_FALLS_RE.test(sentence) && !/(?<!\p{L})(?:emits?|emitting|emitters?|lamps?|bulbs?|sources?|behind|thrusters?|drives?|engines?|cavit(?:y|ies)|resonat\w*|sealed|closed|enclosed|tubes?|round[- ]trips?|inside)(?!\p{L})/iu.test(sentence);
+}
+
 export function planThrust(b: Basis): ThrustReading {
   const { plans, needs, notes, text, pIn, pOut, speeds } = b;
   const scoped = propellantFreeParagraph(b);
@@ -80,12 +90,15 @@ export function planThrust(b: Basis): ThrustReading {
   if ((thrust && drivePower) || perPower) {
     if (photonApplies) {
       if (thrust && drivePower) {
+        // A mirror, a sail or a reflector that light falls on is pushed by it twice over when it sends the
+        // light back: its bound is 2P/c, not the P/c of a source that only emits.
+        const reflected = reflectorPushed(text, thrust);
         plans.push({
           check: 'photon-bound',
           uses: [thrust, drivePower],
-          inputs: (e) => ({ F_claimed: at(thrust, e(thrust)), P: at(drivePower, e(drivePower)) }),
+          inputs: (e) => ({ F_claimed: at(thrust, e(thrust)), P: reflected ? typed(2 * siAt(drivePower, e(drivePower)), 'W') : at(drivePower, e(drivePower)) }),
           why: 'The text gives a thrust and the power that produces it, for a device that throws out no propellant.',
-          assumptions: [],
+          assumptions: reflected ? ['The light falls on a mirror, a sail or a reflector that sends it back: it passes on at most twice its momentum, so the bound is 2P/c (P doubled here).'] : [],
         });
         if (craftSpeed) {
           plans.push({
