@@ -1507,6 +1507,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The radiator runs on its own with nothing plugged in: hot water from the boiler delivers 1.5 kW into the room.',
     'A self-powered wristwatch that runs on the warmth of your wrist and makes 20 µW.',
     'The LED drew 30 pW of electrical power and emitted 69 pW of light, a wall-plug efficiency above 200 %; the extra energy comes from heat in the lattice.',
+    'Our dehumidifier gives out 2 kW of heat while drawing 600 W.',
+    'The heat pipe carries 200 W from the CPU to the fins with no power input at all.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1514,6 +1516,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     expect(breaks('Our magnetic amplifier gives 100 W out for a 1 W input signal, with no other supply.')).toBe(true);
     expect(breaks('The wheel turns by itself and gives 5 W.')).toBe(true);
     expect(breaks('The generator drew 30 W and gave 69 W; the extra energy comes from the vacuum.')).toBe(true);
+    expect(breaks('The magnet motor transfers 500 W to the load with no input.')).toBe(true);
   });
   test("an amplifier's signal beside its supply's draw is counted in with it", () => {
     const text = 'The amplifier board takes 1 W of drive signal, gives 100 W, and draws 160 W from its supply.';

@@ -475,6 +475,23 @@ const NOTHING_ELSE_RE =
  * the text says nothing else feeds it, or gives the supply's draw too (then the signal is counted in
  * beside it).
  */
+/** Before a flow a passive part passes on: "the heat pipe carries", "can transfer", "conducts about". */
+const PASSES_ON_BEFORE_RE = /(?<!\p{L})(?:carr(?:y|ies|ied|ying)|transfers?|transferr(?:ed|ing)|transports?|transported|transporting|conducts?|conducted|conducting|shifts?|shifted|shifting)(?:[^\S\n]+(?:up[^\S\n]+to|about|around|roughly|some|over|nearly|almost))?[^\S\n]*$/iu;
+/** After it: where it is passed from and to ("from the CPU to the fins", "from the collector into the tank"). */
+const FROM_TO_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+(?:heat|power|energy)[^\S\n]+)?from[^\S\n]+[^.;!?\n]{1,50}?[^\S\n](?:to|into|onto)[^\S\n]/iu;
+
+/**
+ * "The heat pipe carries 200 W from the CPU to the fins", "the loop transfers 4 kW from the collector into
+ * the tank": a flow a passive part passes on from one place to another is neither made by it nor its
+ * input — set aside, so "with no power input" beside it makes no claim of output from nothing.
+ */
+export function asidePassedOn(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (d.kind !== 'power' || d.derived || d.role === 'in') continue;
+    if (PASSES_ON_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) && FROM_TO_AFTER_RE.test(text.slice(d.end, d.end + 80))) d.role = 'aside';
+  }
+}
+
 export function asideControlPowers(text: string, drafts: Draft[]): void {
   if (!CONTROLLED_DEVICE_RE.test(text) || NOTHING_ELSE_RE.test(text)) return;
   const control = (d: Draft) => d.kind === 'power' && d.role === 'in' && !d.derived && (CONTROL_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || CONTROL_AFTER_RE.test(text.slice(d.end, d.end + 40)));
