@@ -111,7 +111,7 @@ const OTHER_MACHINE_BEFORE_RE =
   /(?<!\p{L})(?:prior[- ]art|reference|references|cited|previous|earlier|older|competing|competitors?|rivals?|conventional|typical|commercial|ordinary|best anyone|record|literature|state[- ]of[- ]the[- ]art)(?!\p{L})/iu;
 
 /** Words before a temperature that make it a combustion engine's coolant, oil, exhaust or casing, not its hot gases. */
-const NOT_THE_HOT_GASES_RE = /(?<!\p{L})(?:coolant|cooling water|jacket water|oil|lubricant|exhaust|casing|block|cylinder head|radiator|surface|bonnet|hood|engine bay)(?!\p{L})[^.;!?\n]{0,30}$/iu;
+const NOT_THE_HOT_GASES_RE = /(?<!\p{L})(?:coolant|cooling water|jacket water|oil|lubricant|exhaust|stack|flue|chimney|tailpipe|casing|block|cylinder head|radiator|surface|bonnet|hood|engine bay)(?!\p{L})[^.;!?\n]{0,30}$/iu;
 /** A combustion engine named: its hot side is the burning gas, not a temperature of its cooling. */
 const COMBUSTION_ENGINE_RE = /(?<!\p{L})(?:(?:car|diesel|petrol|gasoline|gas|truck|lorry|marine|ship's|boat|motorbike|motorcycle|lawnmower|combustion|piston|outboard|aero|jet) engines?|diesels?|gensets?|generating sets?|diesel generators?|gas turbines?|internal[- ]combustion|combustion engines?)(?!\p{L})/iu;
 

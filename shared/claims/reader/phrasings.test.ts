@@ -1509,6 +1509,9 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The LED drew 30 pW of electrical power and emitted 69 pW of light, a wall-plug efficiency above 200 %; the extra energy comes from heat in the lattice.',
     'Our dehumidifier gives out 2 kW of heat while drawing 600 W.',
     'The heat pipe carries 200 W from the CPU to the fins with no power input at all.',
+    'The tidal generator runs on its own twice a day producing 1.2 MW.',
+    'The geothermal plant runs continuously with no fuel, producing 45 MW.',
+    'The gas turbine combined cycle plant reaches 62 % efficiency; the stack gas leaves at 90 °C, and the cooling water is 15 °C.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

@@ -139,7 +139,7 @@ export const HARVEST_WORDS = [
   // Water running downhill: a wheel or turbine in a stream takes the stream's power.
   'water ?wheels?', 'waterwheels?', 'mill ?(?:races?|streams?|ponds?|wheels?)', 'streams?', 'rivers?', 'brooks?', 'becks?', 'falling water', 'hydro(?:electric|power)?', 'pico-?hydro', 'micro-?hydro', '(?:water|river|tidal|ocean) currents?', 'weirs?', 'dams?', 'head of water',
   'stoves?', 'wood-?burners?', 'log[- ]burners?', 'hobs?', 'fireplaces?', 'hearths?', 'candles?', 'flames?', 'hot ?plates?', 'stove ?tops?', 'exhaust (?:pipes?|manifolds?|gas(?:es)?)', 'waste heat',
-  'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell',
+  'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell', 'reactors?', 'fission', 'tidal', 'geothermal', 'hot springs?', 'volcan\\w*', 'ocean thermal', 'OTEC', 'hot (?:rock|brine|well)s?',
   // A vehicle or set that burns fuel (a "self-charging" hybrid charges from its engine).
   'petrol', 'gasoline', 'diesel', 'combustion engine', '(?:petrol|diesel|gas) engine', 'burns? (?:fuel|petrol|diesel|gas)', 'regenerative braking', 'braking',
 ];
