@@ -18,7 +18,7 @@ const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:(?:is|are|was|were|being)[^\S\n]+)?(?:
  * air", "solar-assisted", "topped up by heat from the ground".
  */
 const UNMEASURED_OTHER_INPUT_RE =
-  /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:extra|excess|surplus|additional)(?:[^\S\n]+(?:energy|power|light|output))?[^\S\n]+(?:comes?|coming|came|is[^\S\n]+drawn|drawn|taken|supplied)[^\S\n]+from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth|lattice|phonons|surroundings|room|pump(?:[^\S\n]+(?:laser|diodes?|light))?|sunlight)(?!\p{L})|(?:the[^\S\n]+)?(?:rest|remainder|balance|difference)[^\S\n]+(?:(?:of[^\S\n]+(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:is|are|comes?|came|being|was)[^\S\n]+)(?:(?:made[^\S\n]+up[^\S\n]+by|made[^\S\n]+up[^\S\n]+from|supplied[^\S\n]+by|provided[^\S\n]+by|drawn[^\S\n]+from|taken[^\S\n]+from|from|by)[^\S\n]+)?(?:the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:sun|sunlight|solar|ambient|air|ground|earth|fuel|gas|wind|environment|surroundings)|(?:solar|sun|wind|ambient)[- ]assisted|(?:plus|together[^\S\n]+with|along[^\S\n]+with|topped[^\S\n]+up[^\S\n]+(?:by|with))[^\S\n]+(?:free[^\S\n]+|unmeasured[^\S\n]+|some[^\S\n]+)?(?:sunlight|solar[^\S\n]+(?:heat|gain|energy)|ambient[^\S\n]+heat|heat[^\S\n]+from[^\S\n]+the[^\S\n]+(?:air|ground|sun)))(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:extra|excess|surplus|additional)(?:[^\S\n]+(?:energy|power|light|output))?[^\S\n]+(?:comes?|coming|came|is[^\S\n]+drawn|drawn|taken|supplied)[^\S\n]+from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth|lattice|phonons|surroundings|room|pump(?:[^\S\n]+(?:laser|diodes?|light))?|sunlight)(?!\p{L})|(?:the[^\S\n]+)?(?:rest|remainder|balance|difference)[^\S\n]+(?:(?:of[^\S\n]+(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:is|are|comes?|came|coming|being|was)[^\S\n]+)(?:(?:made[^\S\n]+up[^\S\n]+by|made[^\S\n]+up[^\S\n]+from|supplied[^\S\n]+by|provided[^\S\n]+by|drawn[^\S\n]+from|taken[^\S\n]+from|from|by)[^\S\n]+)?(?:the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:sun|sunlight|solar|ambient|air|ground|earth|fuel|gas|wind|environment|surroundings|waste[^\S\n]+heat|process[^\S\n]+heat|steam)|(?:solar|sun|wind|ambient)[- ]assisted|(?:plus|together[^\S\n]+with|along[^\S\n]+with|topped[^\S\n]+up[^\S\n]+(?:by|with))[^\S\n]+(?:free[^\S\n]+|unmeasured[^\S\n]+|some[^\S\n]+)?(?:sunlight|solar[^\S\n]+(?:heat|gain|energy)|ambient[^\S\n]+heat|heat[^\S\n]+from[^\S\n]+the[^\S\n]+(?:air|ground|sun)))(?!\p{L})/iu;
 /** A machine said to run by itself. */
 const SELF_RUNNING_CLAIM_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'iu');
 /** A machine that harvests a flow from outside (sunlight, wind, heat) is no self-running one. */
@@ -162,6 +162,10 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
         [efficiency!],
       ),
     );
+  } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop && UNMEASURED_OTHER_INPUT_RE.test(text)) {
+    // "120 % electrical efficiency, the rest of the energy coming from waste heat": an efficiency over one
+    // input of several, the others unmeasured.
+    needs.push(need('first-law', ['the energy of the other input the text names (heat, sunlight, fuel), measured'], 'The text says part of what goes in comes from a source its efficiency leaves out: over all its inputs the device may give back less than it takes.', [efficiency!]));
   } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop) {
     plans.push({
       check: 'first-law',

@@ -1512,6 +1512,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The tidal generator runs on its own twice a day producing 1.2 MW.',
     'The geothermal plant runs continuously with no fuel, producing 45 MW.',
     'The gas turbine combined cycle plant reaches 62 % efficiency; the stack gas leaves at 90 °C, and the cooling water is 15 °C.',
+    'The high-temperature electrolyser reaches 120 % electrical efficiency, the rest of the energy coming from waste heat at 800 °C.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
