@@ -1513,6 +1513,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The geothermal plant runs continuously with no fuel, producing 45 MW.',
     'The gas turbine combined cycle plant reaches 62 % efficiency; the stack gas leaves at 90 °C, and the cooling water is 15 °C.',
     'The high-temperature electrolyser reaches 120 % electrical efficiency, the rest of the energy coming from waste heat at 800 °C.',
+    'The toy car runs by itself for a minute after you pull it back, giving about 0.5 W.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1521,6 +1522,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     expect(breaks('The wheel turns by itself and gives 5 W.')).toBe(true);
     expect(breaks('The generator drew 30 W and gave 69 W; the extra energy comes from the vacuum.')).toBe(true);
     expect(breaks('The magnet motor transfers 500 W to the load with no input.')).toBe(true);
+    // (a push that starts a wheel is no supply of what it gives after)
+    expect(breaks('Self-running gravity wheel. After one push its shifting weights keep it turning and drive a 200 W alternator, with nothing connected at the input.')).toBe(true);
   });
   test("an amplifier's signal beside its supply's draw is counted in with it", () => {
     const text = 'The amplifier board takes 1 W of drive signal, gives 100 W, and draws 160 W from its supply.';

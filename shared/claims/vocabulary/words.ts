@@ -134,7 +134,7 @@ export const HARVEST_WORDS = [
   // People's muscles, a wound spring, a boiler's hot water, the warmth of a body: each a supply the text names.
   '(?:press(?:ing|es|ed)?|push(?:ing|es|ed)?|click(?:ing|s|ed)?) (?:of )?(?:the |a |its |each )?(?:button|switch|key|lever)s?', 'hand-?(?:cranked|powered|driven)', '(?:by |after |from )cranking', 'pedall?(?:ing|ed|s)?', 'wind-?up',
   'self-?winding', 'winds? (?:itself|up)', 'wound (?:up|by hand)', 'mainsprings?', 'spring-?(?:driven|powered|wound)', '(?:wound|coiled|its|tensioned|compressed) springs?', 'muscle(?: power)?', 'kinetic', 'footsteps?', 'shak(?:e|es|ing|en)', '(?:body|wrist|arm) (?:motion|movement)s?',
-  'runs? on (?:the )?(?:warmth|heat|motion|movement)', 'warmth of (?:your|the|a|its)', 'heat of (?:your|the|a) (?:hand|wrist|body|skin)',
+  'runs? on (?:the )?(?:warmth|heat|motion|movement)', 'pull-?back (?:toys?|cars?|motors?|springs?|mechanisms?)', 'after (?:you |being |it is |it\x27s |one |a )?(?:pull|wind|wound|lift|shak|press|fill)\\w*', 'warmth of (?:your|the|a|its)', 'heat of (?:your|the|a) (?:hand|wrist|body|skin)',
   '(?:from|by) (?:the |a |its |our )?(?:gas |oil |wood |pellet |electric )?(?:boiler|furnace|heating system|central heating|district heating)',
   // Water running downhill: a wheel or turbine in a stream takes the stream's power.
   'water ?wheels?', 'waterwheels?', 'mill ?(?:races?|streams?|ponds?|wheels?)', 'streams?', 'rivers?', 'brooks?', 'becks?', 'falling water', 'hydro(?:electric|power)?', 'pico-?hydro', 'micro-?hydro', '(?:water|river|tidal|ocean) currents?', 'weirs?', 'dams?', 'head of water',
