@@ -323,8 +323,11 @@ export function bareKind(text: string, start: number, end: number, floor: number
   if (PERCENT_OF_HEAT_RE.test(text)) return { kind: 'efficiency' };
   if (GAIN_BEFORE_RE.test(text.slice(windowStart(text, start, floor, 160), start))) return { kind: 'efficiency', derived: 'units out for each unit in' };
   TIMES_AFTER_RE.lastIndex = end;
-  if (TIMES_AFTER_RE.test(text)) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
+  // ("ten times the voltage it takes in", "100 times the force": a multiple of something that is no energy.)
+  const notEnergy = /^[^.;!?\n]{0,25}?(?<!\p{L})(?:voltages?|currents?|forces?|torques?|pressures?|speeds?|velocit(?:y|ies)|intensit(?:y|ies)|brightness|resolution|flow|signals?|amplitudes?|charges?|weights?|loads?)(?!\p{L})/iu.test(text.slice(end, end + 40));
+  if (TIMES_AFTER_RE.test(text) && !notEnergy) return { kind: 'efficiency', derived: 'output as a multiple of the input' };
   if (
+    !notEnergy &&
     /^[^\S\n]*(?:times|x|×)(?!\p{L})/iu.test(text.slice(end, end + 8)) &&
     TIMES_BEFORE_RE.test(before) &&
     (/input|consum|draw|put in|supplied|takes|uses/i.test(text.slice(end, end + 60)) || /^[^\S\n]*(?:times|x|×)[^\S\n]+(?:that|this)(?!\p{L})/iu.test(text.slice(end, end + 16)))

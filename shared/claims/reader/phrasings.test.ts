@@ -1514,11 +1514,16 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The gas turbine combined cycle plant reaches 62 % efficiency; the stack gas leaves at 90 °C, and the cooling water is 15 °C.',
     'The high-temperature electrolyser reaches 120 % electrical efficiency, the rest of the energy coming from waste heat at 800 °C.',
     'The toy car runs by itself for a minute after you pull it back, giving about 0.5 W.',
+    'The audio amplifier gives out 100 times the input power.',
+    "The optical amplifier's gain is 30 dB: 1 mW in, 1 W out.",
+    'The transformer puts out ten times the current it takes in.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
   test('but the same words with nothing else feeding the device still break the first law', () => {
     expect(breaks('Our magnetic amplifier gives 100 W out for a 1 W input signal, with no other supply.')).toBe(true);
+    expect(breaks('My amplifier circuit gives 1 W out for 1 mW in, and it is self-powered.')).toBe(true);
+    expect(breaks('The box puts out ten times the energy it takes in.')).toBe(true);
     expect(breaks('The wheel turns by itself and gives 5 W.')).toBe(true);
     expect(breaks('The generator drew 30 W and gave 69 W; the extra energy comes from the vacuum.')).toBe(true);
     expect(breaks('The magnet motor transfers 500 W to the load with no input.')).toBe(true);

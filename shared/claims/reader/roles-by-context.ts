@@ -464,6 +464,8 @@ const CONTROL_AFTER_RE =
 /** A device that switches or amplifies a supply it draws from apart from its signal. */
 const CONTROLLED_DEVICE_RE =
   /(?<!\p{L})(?:amplifiers?|amps?|power stages?|output stages?|relays?|contactors?|transistors?|MOSFETs?|IGBTs?|thyristors?|triacs?|solenoid valves?|servo[- ]?valves?|switch(?:es|ed|ing)?|dimmers?|valves?|gain)(?!\p{L})/iu;
+/** An amplifier named. */
+const AMPLIFIER_RE = /(?<!\p{L})(?:amplifiers?|amps?|preamps?|preamplifiers?|boosters?|repeaters?|power stages?)(?!\p{L})/iu;
 /** A claim that nothing else feeds it: then the signal is the only input the claim admits. */
 const NOTHING_ELSE_RE =
   /(?<!\p{L})(?:no (?:other |external |separate )?(?:supply|power supply|source|input|mains|battery|batteries)|without (?:any |a )?(?:other |external |separate )?(?:supply|power supply|source|mains|battery)|self-?(?:powered|running|sustaining|looped)|free energy|over-?unity|COP|perpetual|nothing else)(?!\p{L})/iu;
@@ -494,9 +496,14 @@ export function asidePassedOn(text: string, drafts: Draft[]): void {
 
 export function asideControlPowers(text: string, drafts: Draft[]): void {
   if (!CONTROLLED_DEVICE_RE.test(text) || NOTHING_ELSE_RE.test(text)) return;
-  const control = (d: Draft) => d.kind === 'power' && d.role === 'in' && !d.derived && (CONTROL_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || CONTROL_AFTER_RE.test(text.slice(d.end, d.end + 40)));
+  // (An amplifier said with its gain — "gain is 30 dB: 1 mW in, 1 W out" — has a signal for its input.)
+  const amplifier = AMPLIFIER_RE.test(text) && /(?<!\p{L})(?:gain|dB|amplif\w*|boosts?)(?!\p{L})/iu.test(text);
+  const control = (d: Draft) =>
+    d.kind === 'power' && d.role === 'in' && !d.derived && (amplifier || CONTROL_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || CONTROL_AFTER_RE.test(text.slice(d.end, d.end + 40)));
   const signals = drafts.filter(control);
   // (Where the supply's own draw is given too, the signal is part of what goes in, beside it.)
   if (drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in' && !signals.includes(d))) return;
   for (const d of signals) d.role = 'aside';
+  // ("gives out 100 times the input power": an amplifier's gain, of a signal, is no ratio of energy out to in.)
+  if (amplifier) for (const d of drafts) if (d.kind === 'efficiency' && d.derived && (siOf(d) ?? 0) > 1) d.role = 'aside';
 }
