@@ -464,8 +464,9 @@ const CONTROL_AFTER_RE =
 /** A device that switches or amplifies a supply it draws from apart from its signal. */
 const CONTROLLED_DEVICE_RE =
   /(?<!\p{L})(?:amplifiers?|amps?|power stages?|output stages?|relays?|contactors?|transistors?|MOSFETs?|IGBTs?|thyristors?|triacs?|solenoid valves?|servo[- ]?valves?|switch(?:es|ed|ing)?|dimmers?|valves?|gain)(?!\p{L})/iu;
-/** An amplifier named. */
-const AMPLIFIER_RE = /(?<!\p{L})(?:amplifiers?|amps?|preamps?|preamplifiers?|boosters?|repeaters?|power stages?)(?!\p{L})/iu;
+/** An amplifier of a signal named by its kind ("audio amplifier", "erbium-doped fibre amplifier", "op-amp"). */
+const AMPLIFIER_RE =
+  /(?<!\p{L})(?:(?:audio|RF|radio|microwave|optical|fib(?:re|er)|laser|signal|guitar|bass|instrument(?:ation)?|operational|headphone|hi-?fi|stereo|valve|tube|transistor|class[- ]?[A-DH]|erbium(?:-doped)?|Raman|semiconductor|lock-in|charge|low-noise|doped)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?amplifiers?|op-?amps?|preamps?|preamplifiers?|repeaters?)(?!\p{L})/iu;
 /** A claim that nothing else feeds it: then the signal is the only input the claim admits. */
 const NOTHING_ELSE_RE =
   /(?<!\p{L})(?:no (?:other |external |separate )?(?:supply|power supply|source|input|mains|battery|batteries)|without (?:any |a )?(?:other |external |separate )?(?:supply|power supply|source|mains|battery)|self-?(?:powered|running|sustaining|looped)|free energy|over-?unity|COP|perpetual|nothing else)(?!\p{L})/iu;
@@ -497,9 +498,13 @@ export function asidePassedOn(text: string, drafts: Draft[]): void {
 export function asideControlPowers(text: string, drafts: Draft[]): void {
   if (!CONTROLLED_DEVICE_RE.test(text) || NOTHING_ELSE_RE.test(text)) return;
   // (An amplifier said with its gain — "gain is 30 dB: 1 mW in, 1 W out" — has a signal for its input.)
-  const amplifier = AMPLIFIER_RE.test(text) && /(?<!\p{L})(?:gain|dB|amplif\w*|boosts?)(?!\p{L})/iu.test(text);
+  const amplifier = AMPLIFIER_RE.test(text) || (/(?<!\p{L})amplifiers?(?!\p{L})/iu.test(text) && /(?<!\p{L})(?:gain|dB)(?!\p{L})/u.test(text));
+  // (Not what it draws from its supply: "draws 180 W from the mains".)
+  const drawn = (d: Draft) =>
+    /(?<!\p{L})(?:draws?|drawing|drew|consum\w*|uses|using|takes|taking|pulls?)(?:[^\S\n]+(?:about|around|up[^\S\n]+to|some|roughly|nearly))?[^\S\n]*$/iu.test(text.slice(Math.max(0, d.start - 25), d.start)) ||
+    /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|a[^\S\n]+)?(?:mains|supply|wall|socket|grid|batter(?:y|ies)|power[^\S\n]+supply|PSU)(?!\p{L})/iu.test(text.slice(d.end, d.end + 40));
   const control = (d: Draft) =>
-    d.kind === 'power' && d.role === 'in' && !d.derived && (amplifier || CONTROL_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || CONTROL_AFTER_RE.test(text.slice(d.end, d.end + 40)));
+    d.kind === 'power' && d.role === 'in' && !d.derived && ((amplifier && !drawn(d)) || CONTROL_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || CONTROL_AFTER_RE.test(text.slice(d.end, d.end + 40)));
   const signals = drafts.filter(control);
   // (Where the supply's own draw is given too, the signal is part of what goes in, beside it.)
   if (drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in' && !signals.includes(d))) return;
