@@ -538,15 +538,9 @@ describe('the rocket equation in a text on several craft (issue 11)', () => {
   it('takes the masses and exhaust speed from the paragraph that says the claimed Δv', () => {
     const text =
       'Option 1, lander A. Pressure-fed propulsion with a specific impulse of 320 s and a fuelled mass of 900 kg.\n\n' +
-      'Option 3, lander C. An engine with an exhaust velocity of 4.4 km/s. Its fuelled mass is 550 kg, and it would arrive with an empty mass of 410 kg. The supplier claims a total velocity change of 1.4 km/s.';
-    // Tsiolkovsky: Δv = v_e ln(m0/m1) = 4400 ln(550/410) = 1293.5 m/s; 1400 / 1293.5 = 1.082 (breaks).
-    expectFinding(checkRun(text, 'rocket-equation'), 'breaks', 'dv_ratio', 1400 / (4400 * Math.log(550 / 410)), 6);
-    // 1.3 km/s is past 1293.5 m/s by 0.5 %, less than the rounding of "4.4 km/s" (half its last digit, 1.1 %):
-    // no conflict is said on figures that precise.
-    const near = text.replace('1.4 km/s', '1.3 km/s');
-    const r = runClaimChecks(extractFigures(near), { text: near });
-    expect(r.checks.find((c) => c.check === 'rocket-equation')).toBeUndefined();
-    expect(r.needs.find((n) => n.check === 'rocket-equation')?.missing[0]).toMatch(/rounding of/u);
+      'Option 3, lander C. An engine with an exhaust velocity of 4.4 km/s. Its fuelled mass is 550 kg, and it would arrive with an empty mass of 410 kg. The supplier claims a total velocity change of 1.3 km/s.';
+    // Tsiolkovsky: Δv = v_e ln(m0/m1) = 4400 ln(550/410) = 1293.5 m/s; 1300 / 1293.5 = 1.005 (breaks, barely).
+    expectFinding(checkRun(text, 'rocket-equation'), 'breaks', 'dv_ratio', 1300 / (4400 * Math.log(550 / 410)), 6);
   });
 });
 
@@ -1329,7 +1323,7 @@ describe("an engine's radiator names no heat pump (invented test data)", () => {
   });
 });
 
-describe('light pushing a mirror, and a finding inside the rounding of its figures (invented test data)', () => {
+describe('light pushing a mirror (invented test data)', () => {
   const run = (text: string) => runClaimChecks(extractFigures(text), { text });
   test('a mirror or a sail that light falls on is bounded by 2P/c, a source by P/c', () => {
     // Radiation pressure on a perfect reflector at normal incidence: F = 2P/c (textbook result; c exact,
@@ -1343,15 +1337,5 @@ describe('light pushing a mirror, and a finding inside the rounding of its figur
     // Mirrors inside a sealed cavity push on nothing outside: P/c.
     const cavity = run('The closed optical cavity, two mirrors in a sealed tube, produced 2.6 mN at 600 W of laser input. No gas leaves the tube.').checks.find((c) => c.check === 'photon-bound');
     expect(cavity?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo((2.6e-3 * 299792458) / 600, 4);
-  });
-  test('past the bound by less than the last written decimal: no conflict said, the figures asked for', () => {
-    // 2P/c for 1 kW = 6.6713 µN; "6.7 µN" may be 6.65 µN (half its last digit).
-    const r = run('Our 1 kW laser pushes the mirror with 6.7 µN, exactly what light pressure predicts.');
-    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
-    expect(r.needs.find((n) => n.check === 'photon-bound')?.missing[0]).toMatch(/rounding of “6\.7 µN”/u);
-    // Past it by more than that: a conflict. 7.2 µN is 1.079 × 2P/c.
-    expect(run('Our 1 kW laser pushes the mirror with 7.2 µN.').checks.find((c) => c.check === 'photon-bound')?.finding).toBe('breaks');
-    // A whole number is read as meant: 1.005 kW out of 1 kW in is past the first law.
-    expect(run('The motor gave 1.005 kW from 1 kW.').checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
   });
 });

@@ -8,7 +8,7 @@ import { CheckInputError, runCheck, type CheckRun } from '../../checks/run';
 import type { CheckName } from '../../checks/types';
 import { printText } from '../print';
 import type { ClaimCheckNeed, ClaimCheckRun, Figure, PlannedCheck } from '../types';
-import type { End, Plan } from './basis';
+import type { End } from './basis';
 import { planFor } from './planner';
 import type { PlanContext } from './signals';
 
@@ -190,19 +190,6 @@ export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { chec
       });
       continue;
     }
-    // Past the bound only by less than the rounding of the figures it rests on ("6.7 µN" may be 6.65 µN):
-    // the text's own precision does not show the conflict, so none is said.
-    const rounded = !run.verdict.holds ? holdsWithinRounding(p, best.ends) : null;
-    if (rounded) {
-      needs.push({
-        check: p.check,
-        title: def.title,
-        missing: [`the figures stated more precisely: within the rounding of ${rounded} the claim is at the bound, not past it`],
-        why: `${p.why} Run on the figures as written, the check finds the claim just past ${CHECK_LAW[p.check]}, by less than their last stated digit.`,
-        uses: p.uses.map((f) => f.id),
-      });
-      continue;
-    }
     if (!run.verdict.holds && p.confirmIfBreaks) {
       needs.push({ check: p.check, title: def.title, missing: [p.confirmIfBreaks], why: `${p.why} Run on them, the check would find the claim in conflict with ${CHECK_LAW[p.check]}.`, uses: p.uses.map((f) => f.id) });
       continue;
@@ -228,62 +215,6 @@ export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { chec
   // a claim stated on its own (README, "How right it is"); the reader is told so, beside the result.
   if ((out.length > 0 || needs.length > 0) && longDocument(ctx.text ?? '', figures)) notes.unshift(LONG_DOCUMENT_NOTE);
   return { checks: out, needs, notes };
-}
-
-/** Kinds whose figures are written as measured or rated numbers, with a last digit that rounds. */
-const ROUNDED_KINDS = new Set(['power', 'energy', 'thrust', 'efficiency', 'cop', 'speed', 'mass', 'specific-impulse', 'duration', 'thrust-per-power']);
-
-/**
- * The share of a figure its last written decimal may hide: half a unit of that digit over the number
- * ("6.7" → 0.05/6.7), at most 1 %. Nothing for a whole number (a round "1 kW" is read as meant, not as
- * 0.5–1.5 kW), nor for a figure worked out from others or written in words.
- */
-export function roundingShare(f: Figure): number {
-  if (f.derived || !f.text || !ROUNDED_KINDS.has(f.kind)) return 0;
-  const m = /(?<![\d.,])(\d{1,3}(?:,\d{3})+|\d+)(?:\.(\d+))?/u.exec(f.text);
-  if (!m) return 0;
-  // (A whole number is read as meant: "1 kW", "300 W".)
-  if (m[2] === undefined) return 0;
-  const value = Number(`${m[1].replace(/,/g, '')}.${m[2]}`);
-  if (!(value > 0)) return 0;
-  return Math.min(0.01, (0.5 * 10 ** -m[2].length) / value);
-}
-
-const scaledQuantity = (q: string, k: number) => q.replace(/^-?\d+(?:\.\d+)?(?:e[-+]?\d+)?/iu, (n) => String(Number((Number(n) * k).toPrecision(15))));
-
-/**
- * Whether a plan found past its bound holds with its figures moved, each within the rounding of its
- * last written digit: then the figures named, else null.
- */
-function holdsWithinRounding(p: Plan, ends: Map<Figure, End>): string | null {
-  // (Not where a figure is worked out from others: its sources' rounding would move it too.)
-  if (p.uses.some((f) => f.derived)) return null;
-  const rounded = p.uses.filter((f) => roundingShare(f) > 0).slice(0, 4);
-  if (rounded.length === 0) return null;
-  const saved = rounded.map((f) => ({ f, si: f.si, quantity: f.quantity, upper: f.upper ? { ...f.upper } : undefined }));
-  try {
-    for (let mask = 0; mask < 1 << rounded.length; mask++) {
-      rounded.forEach((f, i) => {
-        const k = 1 + (mask & (1 << i) ? 1 : -1) * roundingShare(f);
-        const o = saved[i];
-        f.si = o.si * k;
-        f.quantity = scaledQuantity(o.quantity, k);
-        if (o.upper && f.upper) f.upper = { ...o.upper, si: o.upper.si * k, quantity: scaledQuantity(o.upper.quantity, k) };
-      });
-      try {
-        if (runCheck(p.check, p.inputs((f) => ends.get(f) ?? 'low')).verdict.holds) return rounded.map((f) => `“${f.text}”`).join(' and ');
-      } catch (err) {
-        if (!(err instanceof CheckInputError)) throw err;
-      }
-    }
-    return null;
-  } finally {
-    for (const o of saved) {
-      o.f.si = o.si;
-      o.f.quantity = o.quantity;
-      if (o.upper) o.f.upper = o.upper;
-    }
-  }
 }
 
 /** Said beside the result of a long document with many figures. */
