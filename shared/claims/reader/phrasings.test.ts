@@ -1543,3 +1543,16 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     ]);
   });
 });
+
+test("the speed of light quoted with its value is the constant, set aside: 'just under the speed of light (2.998 × 10^8 m/s)' (invented test data)", () => {
+  const text = 'We clocked cosmic-ray muons at 2.97 × 10^8 m/s between paddles 6 ft apart, just under the speed of light (2.998 × 10^8 m/s).';
+  const f = extractFigures(text);
+  expect(f.filter((x) => x.kind === 'speed').map((x) => [x.si, x.role])).toEqual([
+    [2.97e8, null],
+    [2.998e8, 'aside'],
+  ]);
+  // 2.97e8 / 299 792 458 = 0.99069 (c exact, BIPM SI Brochure 9th ed.).
+  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'light-speed')?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(2.97e8 / 299792458, SEVEN);
+  // (a craft said to fly at it is no quotation)
+  expect(extractFigures('Our probe reached 2.998 × 10^8 m/s.').find((x) => x.kind === 'speed')?.role).not.toBe('aside');
+});

@@ -464,6 +464,24 @@ const CONTROL_AFTER_RE =
 /** A device that switches or amplifies a supply it draws from apart from its signal. */
 const CONTROLLED_DEVICE_RE =
   /(?<!\p{L})(?:amplifiers?|amps?|power stages?|output stages?|relays?|contactors?|transistors?|MOSFETs?|IGBTs?|thyristors?|triacs?|solenoid valves?|servo[- ]?valves?|switch(?:es|ed|ing)?|dimmers?|valves?|gain)(?!\p{L})/iu;
+/** Just before a speed that is c itself, quoted: "the speed of light (2.998 × 10^8 m/s)", "where c = 3.00e8 m/s", "light, which travels at". */
+const LIGHT_SPEED_QUOTED_BEFORE_RE =
+  /(?:(?<!\p{L})(?:speed|velocity)[^\S\n]+of[^\S\n]+light(?:[^\S\n]+in[^\S\n]+(?:a[^\S\n]+)?vacuum)?|(?:where|with|using|taking)[^\S\n]+c(?:_0|₀)?|(?<!\p{L})light[^\S\n]+(?:itself[^\S\n]+)?(?:travels|moves|goes)(?:[^\S\n]+at)?)[^\S\n]*(?:[(,:=≈~]|is|of|at|being)?[^\S\n]*(?:(?:about|roughly|approximately|some|nearly|ca\.?)[^\S\n]*)?$/iu;
+
+/**
+ * "just under the speed of light (2.998 × 10^8 m/s)": the speed of light quoted with its value is the
+ * constant, not a speed of the device — set aside (within 0.5 % of c, so a claim said beside it is not
+ * taken for it).
+ */
+export function asideQuotedLightSpeed(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (d.kind !== 'speed' || d.derived || d.role === 'aside') continue;
+    const v = siOf(d);
+    if (v === null || Math.abs(v / 299_792_458 - 1) > 0.005) continue;
+    if (LIGHT_SPEED_QUOTED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start))) d.role = 'aside';
+  }
+}
+
 /** An amplifier of a signal named by its kind ("audio amplifier", "erbium-doped fibre amplifier", "op-amp"). */
 const AMPLIFIER_RE =
   /(?<!\p{L})(?:(?:audio|RF|radio|microwave|optical|fib(?:re|er)|laser|signal|guitar|bass|instrument(?:ation)?|operational|headphone|hi-?fi|stereo|valve|tube|transistor|class[- ]?[A-DH]|erbium(?:-doped)?|Raman|semiconductor|lock-in|charge|low-noise|doped)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?amplifiers?|op-?amps?|preamps?|preamplifiers?|repeaters?)(?!\p{L})/iu;
