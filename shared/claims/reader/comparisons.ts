@@ -79,10 +79,12 @@ export function relate(text: string, drafts: Draft[]): void {
     if (d.role === 'aside' || d.derived || compared.includes(d)) continue;
     if (/(?<!\p{L})(?:it|they|which|that|this one)[^\S\n]+(?:replaces|replaced|will replace|supersedes|superseded|succeeds)[^\S\n]*[(:,][^\S\n]*(?:[\p{L}-]+[^\S\n]*){0,2}[:=]?[^\S\n]*$/iu.test(text.slice(Math.max(0, d.start - 60), d.start))) compared.push(d);
   }
-  // "An earlier version of this story gave the output as 32 kW": a figure withdrawn.
+  // "An earlier version of this story gave the output as 32 kW": a figure withdrawn. ("Readers pointed out
+  // that the printed figure was nearly ten times faster than light": what the wrong figure amounts to.)
   for (const d of drafts) {
-    if (d.role === 'aside' || d.derived || compared.includes(d)) continue;
-    if (EARLIER_VERSION_BEFORE_RE.test(text.slice(windowStart(text, d.start, 0, 160), d.start))) compared.push(d);
+    if (d.role === 'aside' || compared.includes(d)) continue;
+    if (!d.derived && EARLIER_VERSION_BEFORE_RE.test(text.slice(windowStart(text, d.start, 0, 160), d.start))) compared.push(d);
+    else if (WRONG_FIGURE_SUBJECT_RE.test(text.slice(windowStart(text, d.start, 0, 160), d.start)) && ERRATUM_CONTEXT_RE.test(text)) compared.push(d);
   }
   // "the shaft output … was printed as 105 hp. It should read 150 hp": the figure put in place of a
   // superseded one takes its side where its own words give none.
@@ -133,6 +135,9 @@ const NOT_THIS_BETWEEN_RE = /^[^\S\n]*[,;(]?[^\S\n]*(?:and[^\S\n]+)?(?:not|inste
 /** After a figure, in its sentence: the figure explained away ("was the stand creeping", "turned out to be a thermal artefact"). */
 const EXPLAINED_AWAY_AFTER_RE =
   /^[^.;!?\n]{0,60}?(?<!\p{L})(?:was|were|is|are|turned[^\S\n]+out[^\S\n]+to[^\S\n]+be|came[^\S\n]+from|was[^\S\n]+caused[^\S\n]+by|was[^\S\n]+due[^\S\n]+to|(?:was|were)[^\S\n]+traced[^\S\n]+to|traced[^\S\n]+to)[^\S\n]+(?:(?:just|only|simply|all|entirely|really|actually|in[^\S\n]+fact)[^\S\n]+)?(?:(?:an?|the|our|its)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,3}?(?:artefacts?|artifacts?|spurious|creep(?:ing|s)?|drift(?:ing|s)?|thermal[^\S\n]+(?:expansion|drift|bowing)|air[^\S\n]+currents?|convection|buoyancy|interference|pick-?up|(?:cable|lead|wire)[^\S\n]+(?:forces?|drag|tension|pull)|magnetic[^\S\n]+(?:interaction|coupling)|misreading|mis-?calibration)(?!\p{L})/iu;
+/** Before what a wrong figure amounts to, in its sentence: "the printed figure was nearly", "the misprinted value implied". */
+const WRONG_FIGURE_SUBJECT_RE =
+  /(?<!\p{L})(?:the|that|this)[^\S\n]+(?:printed|misprinted|wrong|erroneous|incorrect|mistaken|withdrawn|original|earlier)[^\S\n]+(?:figure|value|number|speed|reading|result)s?(?!\p{L})[^.;!?\n]{0,80}$/iu;
 /** Before a figure withdrawn: "An earlier version of this story gave the output as". */
 const EARLIER_VERSION_BEFORE_RE =
   /(?<!\p{L})(?:an?|the)[^\S\n]+(?:earlier|previous|original|first)[^\S\n]+(?:version|edition|draft)(?:[^\S\n]+of[^\S\n]+(?:this|the)[^\S\n]+[\p{L}-]+)?[^\S\n]+(?:gave|said|stated|put|reported|had|listed|quoted|printed|showed|(?:incorrectly|wrongly|mistakenly)[^\S\n]+\p{L}+)[^.;!?\n]{0,80}$/iu;

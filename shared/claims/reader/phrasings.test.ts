@@ -1556,3 +1556,22 @@ test("the speed of light quoted with its value is the constant, set aside: 'just
   // (a craft said to fly at it is no quotation)
   expect(extractFigures('Our probe reached 2.998 × 10^8 m/s.').find((x) => x.kind === 'speed')?.role).not.toBe('aside');
 });
+
+test("a cooler 'pulls 18,000 BTU/h out of the box on 2.2 kW': the heat taken out is its output, what it runs on goes in (invented test data)", () => {
+  const text = 'Service notes: the 1-1/2 ton condensing unit on the walk-in cooler pulls 18,000 BTU/h out of the box on 2.2 kW, box at 35°F, condenser air off at 105°F.';
+  const f = extractFigures(text);
+  // NIST SP 811 B.8: 1 BTU_IT/h = 0.293 071 07 W; 18 000 BTU/h = 5 275.28 W; COP = 5 275.28 / 2 200 = 2.3979.
+  expect(f.find((x) => x.kind === 'power' && x.role === 'out')?.si).toBeCloseTo(18000 * 0.29307107, 2);
+  expect(f.find((x) => x.kind === 'power' && x.role === 'in')?.si).toBe(2200);
+  expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'cooling' });
+  const r = runClaimChecks(f, { text });
+  expect(r.checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+  expect(runClaimChecks(extractFigures('The walk-in cooler removes 18,000 BTU/h from the box while drawing 2.2 kW.'), { text: 'The walk-in cooler removes 18,000 BTU/h from the box while drawing 2.2 kW.' }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+});
+
+test("what a misprinted figure amounts to ('the printed figure was nearly ten times faster than light') is set aside with it (invented test data)", () => {
+  const text = 'Correction: the speed of the beam was given as 2.9 × 10⁹ m/s. It should have read 2.9 × 10⁸ m/s. Readers pointed out that the printed figure was nearly ten times faster than light.';
+  const f = extractFigures(text);
+  expect(f.filter((x) => x.kind === 'speed' && x.role !== 'aside').map((x) => x.si)).toEqual([2.9e8]);
+  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'light-speed')?.finding).toBe('consistent');
+});

@@ -14,7 +14,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, 
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor } from './roles';
-import { asideControlPowers, asidePassedOn, asideQuotedLightSpeed, ROCKET_RE, rolesByContext } from './roles-by-context';
+import { asideControlPowers, asidePassedOn, asideQuotedLightSpeed, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
 
 /** The text says the input was not given: a claim of no input cannot be read from it. */
@@ -571,7 +571,9 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     COOLING_DUTY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start)) ||
     // "It removes 2 500 kcal/h of heat from the room".
     (/(?<!\p{L})(?:removes?|removed|removing|extracts?|extracted|takes? (?:away|out)|took (?:away|out)|pumps? out|pulls? out)[^\S\n]+(?:(?:about|around|up to|some|nearly)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, d.start - 40), d.start)) &&
-      /^[^\S\n]*of[^\S\n]+heat(?!\p{L})/iu.test(text.slice(d.end, d.end + 20)));
+      /^[^\S\n]*of[^\S\n]+heat(?!\p{L})/iu.test(text.slice(d.end, d.end + 20))) ||
+    // "pulls 18,000 BTU/h out of the box".
+    (COOLING_VERB_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) && COOLED_SPACE_AFTER_RE.test(text.slice(d.end, d.end + 60)));
   const cooler = !pump && COOLING_MACHINE_RE.test(text);
   if ((pump || cooler) && !drafts.some((d) => d.kind === 'cop' && d.role !== 'aside')) {
     for (const kind of ['energy', 'power'] as const) {

@@ -8,7 +8,7 @@
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import type { FigureRole } from '../types';
-import { paragraphAround, sentenceAround } from './context';
+import { COOLING_MACHINE_RE, paragraphAround, sentenceAround } from './context';
 import { sentenceOf, siOf, typedSi, type Draft } from './draft';
 
 /** A propellant mass fraction: "propellant is 90 % of the mass", "90 % propellant by mass", "a propellant fraction of 85 %". */
@@ -63,6 +63,12 @@ const STORE_GIVES_RE =
 /** After a power or energy put into a store: "3 W into a little cell", "12 kWh into the pack" (not "back into"). */
 const STORE_INTO_RE =
   /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?into[^\S\n]+(?:(?:a|an|the|its|our|my|their)[^\S\n]+)?(?:[\p{L}\d-]+[^\S\n]+){0,2}?(?:cells?|batter(?:y|ies)|packs?|capacitors?|supercaps?|supercapacitors?|accumulators?|flywheels?)(?!\p{L})/iu;
+
+/** Before the heat a cooling machine moves: "pulls", "removes about", "takes". */
+export const COOLING_VERB_BEFORE_RE = /(?<!\p{L})(?:pull(?:s|ed|ing)?|remov(?:es?|ed|ing)|extract(?:s|ed|ing)?|tak(?:es?|ing)|took|draw(?:s|ing)?|drew|pump(?:s|ed|ing)?|mov(?:es?|ed|ing)|lift(?:s|ed|ing)?)(?:[^\S\n]+(?:about|around|up[^\S\n]+to|some|nearly|roughly|a[^\S\n]+good))?[^\S\n]*$/iu;
+/** After it: the space it is taken out of ("out of the box", "of heat from the cold room"). */
+export const COOLED_SPACE_AFTER_RE =
+  /^[^\S\n]*(?:of[^\S\n]+heat[^\S\n]+)?(?:out[^\S\n]+of|from)[^\S\n]+(?:the[^\S\n]+|a[^\S\n]+|its[^\S\n]+|your[^\S\n]+|our[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:box|room|space|cabinet|store|freezer|fridge|cooler|building|house|home|office|food|water|air|loop|hall|interior|compartment|enclosure|container|warehouse|rack|load|cellar|van|truck|trailer|product)(?!\p{L})/iu;
 
 /** A store of energy named in the sentence of its energy. */
 const STORE_NOUN_RE = /(?<!\p{L})(?:cells?|batter(?:y|ies)|packs?|accumulators?|power banks?|capacitors?|supercaps?|supercapacitors?)(?!\p{L})/iu;
@@ -301,6 +307,14 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
       const near = flows.filter((o) => o.kind === d.kind && (o.role === 'in' || o.role === 'out') && Math.abs((siOf(o) ?? Infinity) - v) <= 0.25 * v);
       const sides = new Set(near.map((o) => o.role));
       if (sides.size === 1) d.role = near[0].role;
+    }
+  }
+  // "the condensing unit pulls 18,000 BTU/h out of the box on 2.2 kW": the heat a cooling machine takes out
+  // of the space it cools is its output (whatever its verb said), and then what it runs on goes in.
+  if (COOLING_MACHINE_RE.test(text)) {
+    for (const d of drafts) {
+      if (d.kind !== 'power' || d.derived || d.role === 'aside') continue;
+      if (COOLING_VERB_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) && COOLED_SPACE_AFTER_RE.test(text.slice(d.end, d.end + 60))) d.role = 'out';
     }
   }
   // One side named, one figure left: the other side.
