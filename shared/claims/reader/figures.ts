@@ -102,6 +102,9 @@ const PER_UNIT_BEFORE_RE = /(?<!\p{L})(?:(?:for|per)[^\S\n]+(?:each|every|one)|e
 const COMES_OUT_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:(?:would|will|should|could|does|do|can|did|must)[^\S\n]+)?(?:come|comes|came|go|goes|went|get|gets|got)[^\S\n]+(?:out|back)(?!\p{L})/iu;
 
 /** Words of heat moved rather than made ("moves three times more heat than it uses"). */
+/** Heat said not to be moved: "nothing to pull heat from", "it does not pump heat", "without moving any heat". */
+const NOT_MOVING_HEAT_RE =
+  /(?<!\p{L})(?:nothing|no(?:[^\S\n]+[\p{L}-]+){1,2}|not|never|n['’]t|without)(?:[^\S\n]+(?:to|that[^\S\n]+can|which[^\S\n]+can|able[^\S\n]+to|any))?[^\S\n]+(?:mov|pump|shift|remov|extract|transferr?|lift|draw|pull)(?:s|es|ed|ing)?[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}?heat(?!\p{L})/giu;
 const MOVES_HEAT_RE = /(?<!\p{L})(?:mov|pump|shift|remov|extract|transferr?|lift|draw|pull)(?:s|es|ed|ing)?[^\S\n]+(?:[\p{L}\p{N}.,-]+[^\S\n]+){0,4}?heat(?!\p{L})/iu;
 
 /**
@@ -117,7 +120,8 @@ function gainAsCop(text: string, start: number, end: number): { role: 'heating' 
   // ("For every kWh it draws, the HP-5 puts 3.4 kWh of heat into your home … 10 years on the compressor": heat
   // given by a machine with a compressor or named a heat pump anywhere in the text.)
   if (/^[^\S\n]*of[^\S\n]+(?:useful[^\S\n]+)?(?:heat|warmth)(?!\p{L})/iu.test(text.slice(end, end + 20)) && /(?<!\p{L})(?:compressors?|refrigerant)(?!\p{L})/iu.test(text.replace(/(?<!\p{L})(?:no|without|not an?|nor|never)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:compressors?|refrigerant(?:[^\S\n]+circuit)?)(?!\p{L})/giu, ' ')) && !COOLING_MACHINE_RE.test(text)) return heating;
-  if (!MOVES_HEAT_RE.test(sentence)) return null;
+  // ("from a box with no outdoor unit and nothing to pull heat from": heat said not to be moved.)
+  if (!MOVES_HEAT_RE.test(sentence.replace(NOT_MOVING_HEAT_RE, ' '))) return null;
   const paragraph = paragraphAround(text, start, end);
   const pump = HEAT_PUMP_RE.test(paragraph);
   // (A "cooling module", "it cools": a machine that cools, by whatever name.)

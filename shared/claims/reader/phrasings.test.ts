@@ -1575,3 +1575,26 @@ test("what a misprinted figure amounts to ('the printed figure was nearly ten ti
   expect(f.filter((x) => x.kind === 'speed' && x.role !== 'aside').map((x) => x.si)).toEqual([2.9e8]);
   expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'light-speed')?.finding).toBe('consistent');
 });
+
+describe("'per the cert sheet', a mini-split's output 'on 2,050 W', heat said not to be moved (invented test data)", () => {
+  test('"per" that means "according to" makes no compound unit', () => {
+    expect(extractFigures('Motor is a commercial reload, Isp ~190 s per the cert sheet.').map((x) => [x.kind, x.si])).toEqual([['specific-impulse', 190]]);
+    expect(extractFigures('Propellant load is 8.5 kg per the tank datasheet.').map((x) => [x.kind, x.role, x.si])).toEqual([['mass', 'propellant', 8.5]]);
+    // (a real compound stays one)
+    expect(extractFigures('It gives 3.1 mN per kW.').map((x) => x.kind)).toEqual(['thrust-per-power']);
+  });
+  test('"put out its full rated 24,000 BTU/h on 2,050 W" of a mini-split: the power it runs on goes in, and it moves heat', () => {
+    const text = 'Mini-split in the shop: at 17°F outside the head still put out its full rated 24,000 BTU/h on 2,050 W, holding the shop at 70°F.';
+    const f = extractFigures(text);
+    expect(f.find((x) => x.kind === 'power' && x.si === 2050)?.role).toBe('in');
+    // NIST SP 811 B.8: 24 000 BTU/h = 7 033.71 W; COP 7 033.71 / 2 050 = 3.4311; Carnot 294.26/(294.26 − 264.82) = 9.994.
+    const run = runClaimChecks(f, { text }).checks.find((c) => c.check === 'carnot');
+    expect(run?.finding).toBe('consistent');
+    expect(run?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo((24000 * 0.29307107) / 2050 / (294.2611 / (294.2611 - 264.8167)), 3);
+  });
+  test('"from a box with no outdoor unit and nothing to pull heat from": a multiple of the input is no heat pump\'s COP', () => {
+    const text = 'The coil heater gives out 3 kW of heat while the meter reads 1 kW: close to three times what it takes from the wall, from a box with no outdoor unit and nothing to pull heat from.';
+    expect(extractFigures(text).some((x) => x.kind === 'cop')).toBe(false);
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+});

@@ -317,6 +317,13 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
       if (COOLING_VERB_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) && COOLED_SPACE_AFTER_RE.test(text.slice(d.end, d.end + 60))) d.role = 'out';
     }
   }
+  // "put out its full rated 24,000 BTU/h on 2,050 W": what a machine gives out on a power is its input.
+  for (const d of drafts) {
+    if (d.kind !== 'power' || d.derived || d.role !== null) continue;
+    if (!/(?<!\p{L})on[^\S\n]+(?:(?:just|only|about|around|some|barely|a[^\S\n]+mere)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, d.start - 20), d.start))) continue;
+    const sentence = sentenceOf(text, d);
+    if (drafts.some((o) => o !== d && o.kind === 'power' && o.role === 'out' && o.end <= d.start && sentenceOf(text, o) === sentence)) d.role = 'in';
+  }
   // One side named, one figure left: the other side.
   const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
   const open = drafts.filter((d) => energyLike(d) && d.role === null && !partInput.has(d));

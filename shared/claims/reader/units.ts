@@ -44,6 +44,9 @@ const PERCENT_RE = /[^\S\n]{0,3}(?:%|per[ -]?cent(?!\p{L})|pct\.?(?!\p{L}))/iuy;
 const COMPOUND_RE = /[^\S\n]*(?:\/|per(?!\p{L})|·|⋅|-(?=[^\S\n]*\p{L}\p{L}?\b))[^\S\n]*/iuy;
 // (Also "3.1 micronewtons of thrust per kilowatt": the quantity named between the unit and "per".)
 const FOR_EVERY_RE = /[^\S\n]+(?:(?:of[^\S\n]+(?:thrust|force|push|lift)[^\S\n]+(?:per|for[^\S\n]+(?:every|each)))|for[^\S\n]+(?:every|each))[^\S\n]+(?:single[^\S\n]+)?/iuy;
+/** After "per" that means "according to": a source named ("the cert sheet", "my calc", "spec", "the manufacturer"). */
+const PER_SOURCE_RE =
+  /^(?:(?:the|my|our|their|its|his|her|this|that|your)[^\S\n]+(?:[\p{L}'’-]+[^\S\n]+){0,2}?)?(?:manufacturer|maker|spec(?:ification)?s?|data ?sheets?|labels?|manuals?|cert(?:ificate)?s?|sheets?|nameplates?|rating plates?|sims?|simulations?|calcs?|calculations?|data|records?|reports?|docs?|documentation|instructions|catalog(?:ue)?s?|brochures?|websites?|site|vendors?|suppliers?|sellers?|builders?|inventors?|owners?|tests?|measurements?|meters?|scales?|gauges?|readings?|logs?|listings?|ads?|quotes?|invoices?|contracts?|drawings?|plans?)(?!\p{L})/iu;
 const COMPOUND_AFTER_RE = /[^\S\n]*(?:[/·⋅][^\S\n]*[\p{L}\p{N}]|per[^\S\n]+\p{L})/iuy;
 /** "1.3c", "0.5 c": a multiple of the speed of light (only attached to the number, or spaced before a non-letter). */
 const C_SUFFIX_RE = /(?:c|[^\S\n]c)(?![\p{L}\p{N}_°])/uy;
@@ -139,6 +142,9 @@ export function readSuffix(text: string, at: number): { suffix: Suffix; end: num
       if (per && ((u.form.kind === 'voltage' && per.form.kind === 'current') || (u.form.kind === 'current' && per.form.kind === 'voltage'))) {
         return { suffix: { type: 'unit', form: u.form }, end: u.end };
       }
+      // "Isp ~190 s per the cert sheet", "8.5 kg per the tank datasheet", "5 W per spec": "per" as "according
+      // to", no compound.
+      if (/per/i.test(c[0]) && PER_SOURCE_RE.test(text.slice(u.end + c[0].length, u.end + c[0].length + 40))) return { suffix: { type: 'unit', form: u.form }, end: u.end };
       // "1e-22 J per bit", "5 kWh per cycle", "3 min per batch": the figure of one of them.
       if (/per/i.test(c[0]) && PER_COUNT_RE.test(text.slice(u.end + c[0].length, u.end + c[0].length + 30))) return { suffix: { type: 'unit', form: u.form }, end: u.end };
       COMPOUND_AFTER_RE.lastIndex = u.end;
