@@ -1339,3 +1339,20 @@ describe('light pushing a mirror (invented test data)', () => {
     expect(cavity?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo((2.6e-3 * 299792458) / 600, 4);
   });
 });
+
+describe('a lifter run under a bell jar, a gyro drive with "nothing coming out" (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  test('"Ran the lifter at 30 kV and 0.5 mA under the bell jar and it held 3 gf of lift. No air to push": the photon bound applies', () => {
+    const r = run('Ran the balsa lifter at 30 kV and 0.5 mA under the bell jar and it held 3 gf of lift on the scale. No air to push, so this has to be a field effect.');
+    // 30 kV × 0.5 mA = 15 W; P/c = 5.0035e-8 N; 3 gf = 0.0294200 N (NIST SP 811 B.8: gf = 9.80665e-3 N).
+    expect(r.checks.find((c) => c.check === 'photon-bound')?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo((3 * 9.80665e-3 * 299792458) / 15, 0);
+  });
+  test('but not where the lift is said to vanish in vacuum ("at 10⁻³ mbar it does not leave the table")', () => {
+    const r = run('Triangular lifter driven at 30 kV and 0.8 mA, tested in room air and in a bell jar. In air it hovers with about 25 mN of lift; at 10⁻³ mbar it does not leave the table.');
+    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+  test('"No props, no air blowing, nothing coming out": a thrust with only a motor\'s power', () => {
+    const r = run('Gyro thruster test: 10 lbs of lift from a 2 hp motor driving the gyros. No props, no air blowing, nothing coming out.');
+    expect(r.checks.find((c) => c.check === 'photon-bound')?.finding).toBe('breaks');
+  });
+});

@@ -68,6 +68,7 @@ export const PROPELLANT_FREE_WORDS = [
   'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
   'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'nothing (?:is |gets )?(?:blown|pushed|thrown|forced) (?:down(?:wards?)?|out|back(?:wards?)?)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
   'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
+  'nothing (?:is )?(?:coming|going|being (?:thrown|blown|pushed)) (?:out|down|back)', 'no props?', 'no air (?:blowing|moving|being (?:blown|pushed))',
   // (a sheet's row: "Reaction mass expelled ....... none", "Propellant: nil", "Propellant consumed = 0 g")
   '(?:propellant|reaction mass|exhaust|working fluid)(?: (?:expelled|used|consumed|ejected|carried|flow|mass|use))?[ \\t.…:=–—-]*(?:none|nil|zero|0 (?:g|kg|mg))(?![\\w.])',
   'no (?:propellant|reaction mass|exhaust|expelled mass|mass is expelled)', '(?:zero|nil|0) (?:propellant|reaction mass|exhaust)', 'propellant(?: used)?[^\\S\\n]*[:=][^\\S\\n]*(?:none|nil|zero|0 ?(?:g|kg)?)(?![\\w.])',
