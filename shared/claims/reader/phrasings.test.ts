@@ -1598,3 +1598,14 @@ describe("'per the cert sheet', a mini-split's output 'on 2,050 W', heat said no
     expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
   });
 });
+
+test("a refrigeration plant that 'shall remove not less than 2.1 kW of heat from the 4 °C store for every kW of electrical input': a cooling COP (invented test data)", () => {
+  const text = 'Tender, clause 7.3: the refrigeration plant shall remove not less than 2.1 kW of heat from the 4 °C store for every kW of electrical input, with the condenser at 32 °C.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.kind === 'cop')).toMatchObject({ role: 'cooling', si: 2.1 });
+  // Carnot cooling COP 277.15 / (305.15 − 277.15) = 9.8982; 2.1 / 9.8982 = 0.21216 (textbook Carnot formula; node).
+  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'carnot')?.outputs.find((o) => o.name === 'cop_cooling_ratio')?.si).toBeCloseTo(2.1 / (277.15 / 28), 5);
+  // (heat put "into the house for every kWh" by a machine the text does not name makes no ledger of it)
+  const unnamed = 'The pump puts 3.4 kWh of heat into the house for every kWh it draws.';
+  expect(runClaimChecks(extractFigures(unnamed), { text: unnamed }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+});

@@ -570,7 +570,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   const coolingOut = (d: Draft) =>
     COOLING_DUTY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start)) ||
     // "It removes 2 500 kcal/h of heat from the room".
-    (/(?<!\p{L})(?:removes?|removed|removing|extracts?|extracted|takes? (?:away|out)|took (?:away|out)|pumps? out|pulls? out)[^\S\n]+(?:(?:about|around|up to|some|nearly)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, d.start - 40), d.start)) &&
+    (/(?<!\p{L})(?:removes?|removed|removing|extracts?|extracted|takes? (?:away|out)|took (?:away|out)|pumps? out|pulls? out)[^\S\n]+(?:(?:about|around|up to|some|nearly|not less than|no less than|at least|more than|over)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, d.start - 40), d.start)) &&
       /^[^\S\n]*of[^\S\n]+heat(?!\p{L})/iu.test(text.slice(d.end, d.end + 20))) ||
     // "pulls 18,000 BTU/h out of the box".
     (COOLING_VERB_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) && COOLED_SPACE_AFTER_RE.test(text.slice(d.end, d.end + 60)));
