@@ -1609,3 +1609,20 @@ test("a refrigeration plant that 'shall remove not less than 2.1 kW of heat from
   const unnamed = 'The pump puts 3.4 kWh of heat into the house for every kWh it draws.';
   expect(runClaimChecks(extractFigures(unnamed), { text: unnamed }).checks.some((c) => c.finding === 'breaks')).toBe(false);
 });
+
+describe("a heat engine's one stated temperature beside a difference is the heat it runs on (invented test data)", () => {
+  const sides = (text: string) => extractFigures(text).filter((x) => x.kind === 'temperature').map((x) => [x.role, Math.round(x.si * 100) / 100]);
+  test('"a thermoelectric panel on a hot-water pipe … across a 40 °C difference, with the pipe side at 80 °C"', () => {
+    expect(sides('The thermoelectric panel on a hot-water pipe turns 30 % of the heat into electricity across a 40 °C difference, with the pipe side at 80 °C.')).toEqual([
+      ['hot', 353.15],
+      ['cold', 313.15],
+    ]);
+  });
+  test('but a room, the air or tap water beside it makes it the cold side', () => {
+    expect(sides('The engine works across a 12 K difference, one plate held at 15 °C by tap water.')).toEqual([
+      ['cold', 288.15],
+      ['hot', 300.15],
+    ]);
+    expect(sides('In a 25 °C room the thermoelectric module sees a 30 K difference.')).toEqual(expect.arrayContaining([['hot', 328.15]]));
+  });
+});

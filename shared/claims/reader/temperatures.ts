@@ -116,6 +116,14 @@ export function isDifference(text: string, start: number, end: number, floor: nu
   return true;
 }
 
+/** A machine that turns heat into work or electricity, named. */
+const HEAT_ENGINE_TEXT_RE = /(?<!\p{L})(?:engines?|Stirling|thermoelectric|TEGs?|Seebeck|thermo-?generators?|harvest\w*|turbines?|ORC|Rankine|thermocouples?|(?:free|electric) power from (?:the )?heat)(?!\p{L})/iu;
+/** Just before a temperature of the surroundings or a sink: the room, the air, the weather, cooling water. */
+const SURROUNDINGS_BEFORE_RE = /(?<!\p{L})(?:room|ambient|air|outside|outdoors?|weather|sink|cooling water|cold(?:er)?|cool(?:er)?|surroundings|environment|fins?|radiator|river|sea|lake|ground|soil)(?!\p{L})[^.;!?\n\d]{0,25}$/iu;
+
+/** Just after a temperature: what holds it there, cold water or air ("held at 15 °C by tap water"). */
+const COOLED_BY_AFTER_RE = /^[^\S\n]*(?:by|with|from|in)[^\S\n]+(?:the[^\S\n]+|a[^\S\n]+)?(?:tap|cold|cooling|mains|running|river|sea|ground|well|chilled|ice)?[^\S\n]*(?:water|air|ice|snow|brine)(?!\p{L})/iu;
+
 /** Between a temperature and a difference that describes it: "−18 °C, a full 50 K below …", "34 °C, 5 K warmer than …". */
 const APPOSITION_RE = /^[\s,;(–—-]*(?:(?:a|an|some|about|roughly|nearly|just|only|full|fully|which is|that is|i\.e\.|or|thus|so|still|at least|at most|over|under)[\s,]+)*$/iu;
 
@@ -348,7 +356,12 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
         ? /^(?:cooler|cold|sink|ambient|condenser)/i.test(label[1]) ? 'down' : 'up'
         : (apposition || fromNamedOther) && diff.direction ? (diff.direction === 'down' ? 'up' : 'down') : diff.direction;
     // A heat pump's one stated temperature is what it supplies (the hot side); a fridge's is what it keeps (the cold side).
-    const side = t.role ?? (HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) ? 'hot' : COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text) ? 'cold' : null);
+    // A heat engine's or a harvester's one stated temperature, said of no room, air or sink, is the heat it
+    // runs on (the hot side): "laid along a hot-water pipe … across a 40 °C difference, with the pipe side
+    // at 80 °C", "the 15°F difference between a 105°F summer attic and the house below".
+    const engineSource =
+      HEAT_ENGINE_TEXT_RE.test(text) && !HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) && !SURROUNDINGS_BEFORE_RE.test(text.slice(Math.max(0, t.start - 40), t.start)) && !COOLED_BY_AFTER_RE.test(text.slice(t.end, t.end + 40)) ? 'hot' : null;
+    const side = t.role ?? (HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text) ? 'hot' : COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text) ? 'cold' : engineSource);
     const down = said === 'down' || (said === undefined && side === 'hot');
     return { tSi, dSi, said, side, down, otherSi: down ? tSi - dSi : tSi + dSi };
   };
