@@ -33,6 +33,11 @@ function suffixKind(s: Suffix): string | null {
   return s.per ? `${s.form.kind}/${s.per.kind}` : s.form.kind;
 }
 
+/** A text whose temperatures are said in Fahrenheit and none in Celsius. */
+function fahrenheitText(text: string): boolean {
+  return /\d[^\S\n]*(?:°|º)[^\S\n]*F(?!\p{L})|\d[^\S\n]*degrees?[^\S\n]+F(?:ahrenheit)?(?!\p{L})|Fahrenheit/u.test(text) && !/\d[^\S\n]*(?:°|º)[^\S\n]*C(?!\p{L})|\d[^\S\n]*degrees?[^\S\n]+C(?:elsius)?(?!\p{L})|Celsius|centigrade/iu.test(text);
+}
+
 /** The number × factor, written so that parseQuantity reads it back. */
 function scaled(num: string, factor: number | undefined): string {
   if (factor === undefined) return num;
@@ -286,6 +291,10 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     let direction: Draft['direction'];
     let ofInput: boolean | undefined;
     let perUnitInput: Draft | undefined;
+    // ("At 40 degrees out … the air at the registers around 100°F": "degrees" alone, in a text whose other
+    // temperatures are all in Fahrenheit, is in Fahrenheit too.)
+    const fahrenheitDegrees = suffix?.type === 'unit' && suffix.form.ambiguous && suffix.form !== GLUED_CELSIUS && suffix.form !== GLUED_FAHRENHEIT && fahrenheitText(text);
+    if (fahrenheitDegrees) suffix = { type: 'unit', form: GLUED_FAHRENHEIT };
     if (suffix?.type === 'unit') {
       const q = unitQuantity(t.num, suffix);
       kind = q.kind;
@@ -318,7 +327,9 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         // thousand or a name, not a kelvin temperature.
         continue;
       } else if (kind === 'temperature' && suffix.form.ambiguous) {
-        assumption = suffix.form === GLUED_CELSIUS ? '"C" read as degrees Celsius.' : suffix.form === GLUED_FAHRENHEIT ? '"F" read as degrees Fahrenheit.' : '"Degrees" read as degrees Celsius.';
+        assumption = fahrenheitDegrees
+          ? '"Degrees" read as degrees Fahrenheit, the scale of the text\'s other temperatures.'
+          : suffix.form === GLUED_CELSIUS ? '"C" read as degrees Celsius.' : suffix.form === GLUED_FAHRENHEIT ? '"F" read as degrees Fahrenheit.' : '"Degrees" read as degrees Celsius.';
       }
     } else if (suffix?.type === 'percent') {
       const reading = readPercent(text, start, end, sheetRowFloor(text, start, floor, true), t.num) ?? comparedPercent(text, start, end, drafts) ?? erratumPercent(text, start, drafts) ?? listedPercent(text, start, drafts);

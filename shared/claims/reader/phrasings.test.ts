@@ -1626,3 +1626,12 @@ describe("a heat engine's one stated temperature beside a difference is the heat
     expect(sides('In a 25 °C room the thermoelectric module sees a 30 K difference.')).toEqual(expect.arrayContaining([['hot', 328.15]]));
   });
 });
+
+test("'degrees' alone in a text whose other temperatures are in Fahrenheit is Fahrenheit (invented test data)", () => {
+  const f = extractFigures('At 40 degrees out, the unit gives about 3 BTUs of heat in the house for every BTU of electricity, with the air at the registers around 100°F.');
+  // (40 − 32) × 5/9 + 273.15 = 277.594 K (NIST SP 811 B.8, °F to K).
+  expect(f.find((x) => x.text === '40 degrees')?.si).toBeCloseTo((40 - 32) * (5 / 9) + 273.15, 3);
+  // (with a Celsius figure beside it, or none, "degrees" stays Celsius)
+  expect(extractFigures('At 40 degrees out the water leaves at 55 °C.').find((x) => x.text === '40 degrees')?.si).toBeCloseTo(313.15, 6);
+  expect(extractFigures('The water left the tank at 40 degrees.').find((x) => x.text === '40 degrees')?.si).toBeCloseTo(313.15, 6);
+});
