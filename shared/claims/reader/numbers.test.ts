@@ -233,3 +233,11 @@ describe('false positives', () => {
     ]);
   });
 });
+
+test("a mixed number before a unit: '1-1/2 hp', '2 1/4 kW' (invented test data)", () => {
+  // 1 hp = 745.699 871 582 27 W (NIST SP 811 B.8): 1.5 hp = 1 118.55 W.
+  expect(extractFigures('New one is 1-1/2 hp.').map((x) => x.si)).toEqual([expect.closeTo(1.5 * 745.69987158227, 3)]);
+  expect(extractFigures('The heater is rated 2 1/4 kW.').map((x) => x.si)).toEqual([2250]);
+  // (a bare fraction stays one)
+  expect(extractFigures('a 3/4 hp motor').map((x) => x.si)).toEqual([expect.closeTo(0.75 * 745.69987158227, 3)]);
+});

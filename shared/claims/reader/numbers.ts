@@ -356,13 +356,15 @@ export function tokenize(text: string): NumberToken[] {
     if (tokens.some((t) => t.start < w.end && w.start < t.end)) continue;
     push(w.start, w.end, String(w.value), true);
   }
-  // "a 3/4 hp motor", "1/2 W": a simple fraction before a unit replaces the number before its slash.
-  for (const m of text.matchAll(/(?<![\p{N}.,/])(\d{1,2})\/(\d{1,2})(?![\p{N}.,/])/gu)) {
-    const [a, b] = [Number(m[1]), Number(m[2])];
+  // "a 3/4 hp motor", "1/2 W": a simple fraction before a unit replaces the number before its slash; with a
+  // whole number before it, "1-1/2 hp", "1 1/2 ton", a mixed number (one and a half).
+  for (const m of text.matchAll(/(?<![\p{N}.,/-])(?:(\d{1,3})(?:-|[^\S\n]))?(\d{1,2})\/(\d{1,2})(?![\p{N}.,/])/gu)) {
+    const [a, b] = [Number(m[2]), Number(m[3])];
     const end = m.index! + m[0].length;
     if (!(b > 1 && a < b) || !unitAt(text, end)) continue;
+    const whole = m[1] !== undefined ? Number(m[1]) : 0;
     for (let i = tokens.length - 1; i >= 0; i--) if (tokens[i].start >= m.index! && tokens[i].start < end) tokens.splice(i, 1);
-    push(m.index!, end, String(a / b), false);
+    push(m.index!, end, String(whole + a / b), false);
   }
   tokens.sort((a, b) => a.start - b.start);
   return tokens;
