@@ -140,7 +140,7 @@ const WRONG_FIGURE_SUBJECT_RE =
   /(?<!\p{L})(?:the|that|this)[^\S\n]+(?:printed|misprinted|wrong|erroneous|incorrect|mistaken|withdrawn|original|earlier)[^\S\n]+(?:figure|value|number|speed|reading|result)s?(?!\p{L})[^.;!?\n]{0,80}$/iu;
 /** Before a figure withdrawn: "An earlier version of this story gave the output as". */
 const EARLIER_VERSION_BEFORE_RE =
-  /(?<!\p{L})(?:an?|the)[^\S\n]+(?:earlier|previous|original|first)[^\S\n]+(?:version|edition|draft)(?:[^\S\n]+of[^\S\n]+(?:this|the)[^\S\n]+[\p{L}-]+)?[^\S\n]+(?:gave|said|stated|put|reported|had|listed|quoted|printed|showed|(?:incorrectly|wrongly|mistakenly)[^\S\n]+\p{L}+)[^.;!?\n]{0,80}$/iu;
+  /(?<!\p{L})(?:an?|the)[^\S\n]+(?:earlier|previous|original|first)[^\S\n]+(?:version|edition|draft)(?:[^\S\n]+of[^\S\n]+(?:this|the)[^\S\n]+[\p{L}-]+)?[^\S\n]+(?:gave|said|stated|put|reported|had|listed|quoted|printed|showed|(?:incorrectly|wrongly|mistakenly)[^\S\n]+\p{L}+)(?:[^.;!?\n]|(?<=(?<!\p{L})(?:Mr|Mrs|Ms|Dr|Prof|St|Mt|No|Co|Inc|Ltd|vs|approx|ca))\.){0,80}$/iu;
 
 /**
  * Pairs of a wrong figure and the figure that puts it right, of the same kind and another value, the

@@ -1635,3 +1635,20 @@ test("'degrees' alone in a text whose other temperatures are in Fahrenheit is Fa
   expect(extractFigures('At 40 degrees out the water leaves at 55 °C.').find((x) => x.text === '40 degrees')?.si).toBeCloseTo(313.15, 6);
   expect(extractFigures('The water left the tank at 40 degrees.').find((x) => x.text === '40 degrees')?.si).toBeCloseTo(313.15, 6);
 });
+
+test("a power said for each of several things: 'lights three 60 W bulbs while drawing 0.4 A at 12 V' (invented test data)", () => {
+  const text = 'Once started, the box lights three 60 W bulbs at full brightness while drawing 0.4 A at 12 V.';
+  const f = extractFigures(text);
+  expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+    ['aside', 60],
+    ['out', 180],
+    ['in', 4.8],
+  ]);
+  // 3 × 60 W = 180 W out of 0.4 A × 12 V = 4.8 W in: 37.5 (first law; node).
+  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(37.5, SEVEN);
+});
+
+test("a withdrawn figure after a title's point: 'An earlier version of this report said Mr. Ferreira drew 4 A' (invented test data)", () => {
+  const f = extractFigures('Correction: An earlier version of this report said Mr. Ferreira\'s converter drew 4 A from its 12 V battery. The meter read 0.4 A.');
+  expect(f.find((x) => x.kind === 'current' && x.si === 4)?.role).toBe('aside');
+});

@@ -161,6 +161,39 @@ function quantumRestated(text: string, drafts: Draft[]): void {
   }
 }
 
+const COUNT_WORDS: Record<string, number> = { two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, eleven: 11, twelve: 12, twenty: 20, a: 1, pair: 2, dozen: 12 };
+/** Before a power of one of several things: "three 60 W bulbs", "2 x 75 W heaters", "twelve 400-watt panels". */
+const COUNT_BEFORE_RE = /(?<![\p{L}\p{N}.,])(two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|twenty|[2-9]|[1-9]\d)[^\S\n]*(?:[x×][^\S\n]*)?$/iu;
+/** After it: the things, in the plural. */
+const COUNTED_THINGS_AFTER_RE =
+  /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+)?(?:bulbs|lamps|lights|heaters|panels|modules|motors|fans|LEDs|pumps|radiators|elements|units|cells|resistors|loads|speakers|lasers|emitters|thrusters|turbines|generators|engines|strips|tubes|globes)(?!\p{L})/iu;
+
+/**
+ * "lights three 60 W bulbs", "2 x 75 W heaters": a power said for each of several things — the total is
+ * the count times it, worked out beside it with the side the words gave; the one thing's power is set aside.
+ */
+function countedPowers(text: string, drafts: Draft[]): void {
+  for (const d of [...drafts]) {
+    if (d.kind !== 'power' || d.derived || d.role === 'aside' || d.upper !== undefined) continue;
+    const m = COUNT_BEFORE_RE.exec(text.slice(Math.max(0, d.start - 16), d.start));
+    if (!m || !COUNTED_THINGS_AFTER_RE.test(text.slice(d.end, d.end + 30))) continue;
+    const n = COUNT_WORDS[m[1].toLowerCase()] ?? Number(m[1]);
+    const each = siOf(d);
+    if (!(n >= 2) || each === null) continue;
+    // (Not where the number before is a figure of its own: "at 230 V 60 W bulbs" has no count.)
+    if (drafts.some((o) => o !== d && o.end > d.start - 16 && o.end <= d.start)) continue;
+    insertAfter(drafts, d, {
+      start: d.start - m[0].length,
+      end: d.end,
+      kind: 'power',
+      quantity: typedSi(n * each, 'W'),
+      role: d.role,
+      derived: `total = ${n} × ${formatQuantity(each, 'W')}`,
+    });
+    d.role = 'aside';
+  }
+}
+
 /** Words of the heat a cooling machine removes, said before its figure ("Refrigerating capacity ....", "cooling output:"). */
 const COOLING_DUTY_BEFORE_RE = /(?<!\p{L})(?:cooling|refrigerat(?:ing|ion)|freezing)[^\S\n]+(?:capacity|output|power|duty|effect)[^\n\p{N}]{0,30}$/iu;
 
@@ -364,6 +397,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       }
     }
   }
+  countedPowers(text, drafts);
   ratingPoint(text, drafts);
   rolesByContext(text, drafts);
   asideControlPowers(text, drafts);
