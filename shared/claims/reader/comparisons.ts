@@ -126,7 +126,7 @@ const ERRATUM_CONTEXT_RE =
   /(?<!\p{L})(?:errat(?:um|a)|corrections?|clarifications?|updated?|amended|(?:an?|the)[^\S\n]+(?:earlier|previous|original)[^\S\n]+version|(?:our|my)[^\S\n]+(?:error|mistake|typo|misprint)|we[^\S\n]+(?:wrongly|mistakenly|incorrectly|erroneously))(?!\p{L})/iu;
 /** Just before a corrected figure: "The correct average load was", "the correct figure is", "should have read", "corrected to". */
 const CORRECT_BEFORE_RE =
-  /(?<!\p{L})(?:(?:the[^\S\n]+)?correct(?:ed)?(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]*(?:is|was|were|are|reads?|should be|of|:)|should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be)|(?:corrected|revised|amended|changed)(?:[^\S\n]+(?:down|up))?[^\S\n]+to)[^\S\n]*(?:[:"“'‘][^\S\n]*)?(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
+  /(?<!\p{L})(?:(?:the[^\S\n]+)?correct(?:ed)?(?:[^\S\n]+[\p{L}-]+){0,3}?[^\S\n]*(?:is|was|were|are|reads?|should be|of|:)|the[^\S\n]+(?:real|actual|true)[^\S\n]+(?:output|input|figure|value|power|reading|result|draw|efficiency|speed|thrust)s?[^\S\n]+(?:is|was|were|are|came[^\S\n]+to)|should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be)|(?:corrected|revised|amended|changed)(?:[^\S\n]+(?:down|up))?[^\S\n]+to)[^\S\n]*(?:[:"“'‘][^\S\n]*)?(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
 /** Between a wrong figure and the right one: the error owned ("That was our error.", "That is wrong by a factor of a thousand:"). */
 const ERROR_SAID_RE =
   /(?<!\p{L})(?:(?:was|is|were|are)[^\S\n]+(?:our|my|an?|the)[^\S\n]+(?:error|mistake|typo|misprint|slip(?:-up)?)|(?:was|is|were|are)[^\S\n]+(?:wrong|incorrect|in error|mistaken)|wrong[^\S\n]+by[^\S\n]+a[^\S\n]+factor|(?:our|my)[^\S\n]+(?:error|mistake)|wrongly|mistakenly|incorrectly|erroneously|in error|correction[^\S\n]*[:—–-]|(?:I|we|had|they|he|she)[^\S\n]+(?:forgot|overlooked|misread|left[^\S\n]+out)|(?:on|read[^\S\n]+off)[^\S\n]+the[^\S\n]+wrong[^\S\n]+(?:range|scale|setting|channel))(?!\p{L})/iu;
@@ -153,7 +153,10 @@ function corrections(text: string, drafts: Draft[]): [Draft, Draft][] {
   const erratum = ERRATUM_CONTEXT_RE.test(text);
   for (const right of drafts) {
     if (right.derived || right.role === 'aside') continue;
-    const wrong = [...drafts].reverse().find((x) => x.end <= right.start && x.kind === right.kind && !x.derived && x.role !== 'aside');
+    // (Of the figures before it of its kind, the last with its side, where it has one: "a 2 kW output from a
+    // 500 W input … the real output was 450 W" corrects the output.)
+    const before = [...drafts].reverse().filter((x) => x.end <= right.start && x.kind === right.kind && !x.derived && x.role !== 'aside');
+    const wrong = (right.role !== null && before.find((x) => x.role === right.role)) || before[0];
     if (!wrong || right.start - wrong.end > 400) continue;
     const a = siOf(wrong);
     const b = siOf(right);

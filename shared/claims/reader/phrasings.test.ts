@@ -1517,6 +1517,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The audio amplifier gives out 100 times the input power.',
     "The optical amplifier's gain is 30 dB: 1 mW in, 1 W out.",
     'The transformer puts out ten times the current it takes in.',
+    'Rumours of a 2 kW output from a 500 W input turned out to be a misread meter: the real output was 450 W.',
+    'Had the pump delivered 10 kW of heat on 1 kW with ground at 10 °C and flow at 35 °C, it would still be within Carnot.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
