@@ -1519,6 +1519,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The transformer puts out ten times the current it takes in.',
     'Rumours of a 2 kW output from a 500 W input turned out to be a misread meter: the real output was 450 W.',
     'Had the pump delivered 10 kW of heat on 1 kW with ground at 10 °C and flow at 35 °C, it would still be within Carnot.',
+    'The unit delivers 4 kW of heat on 1 kW, taking ground water at 10 °C up to 35 °C.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
