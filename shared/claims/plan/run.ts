@@ -110,8 +110,14 @@ const WITHIN_BOUND_ALL_RE = new RegExp(WITHIN_BOUND_RE.source, 'giu');
 /** Before the words in their sentence: a condition or a demand, not a statement ("If … the efficiency comes out below the Carnot value"). */
 const CONDITION_BEFORE_RE = /(?<!\p{L})(?:if|unless|once|until|whether|should|would|must|needs? to|has to|have to|required to|expected to|ought to|to show|to demonstrate)(?!\p{L})/iu;
 
+/** The text's own words put the device at its bound, as theory gives it: "exactly as P/c says", "just what light pressure predicts". */
+const AT_BOUND_RE =
+  /(?<!\p{L})(?:exactly|just|precisely|right)[^\S\n]+(?:as|what)[^\S\n]+(?:P[^\S\n]*\/[^\S\n]*c|2P[^\S\n]*\/[^\S\n]*c|(?:the[^\S\n]+)?(?:photon|Carnot|ideal|theoretical)[^\S\n]+(?:limit|bound|value|formula)|light[^\S\n]+pressure|radiation[^\S\n]+pressure|(?:the[^\S\n]+)?theory|the[^\S\n]+rocket[^\S\n]+equation)[^\S\n]+(?:says|predicts|gives|allows|requires|expects)(?!\p{L})/iu;
+
 function saidWithin(text: string, check: CheckName): string | null {
   if (check !== 'carnot' && check !== 'photon-bound' && check !== 'rocket-equation') return null;
+  const at = AT_BOUND_RE.exec(text);
+  if (at) return at[0];
   for (const m of text.matchAll(WITHIN_BOUND_ALL_RE)) {
     const from = Math.max(0, text.slice(0, m.index).search(/[^.!?\n]*$/u));
     if (!CONDITION_BEFORE_RE.test(text.slice(from, m.index))) return m[0];

@@ -272,6 +272,8 @@ export function bareKind(text: string, start: number, end: number, floor: number
   // "about 0.97 of the speed of light": a speed as a fraction of c.
   SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
   // ("a tenth of the speed of light": the fraction in words took its "of" with it.)
+  // ("within 1 part in 10^20 of light speed": a closeness, no speed.)
+  if (/(?<!\p{L})parts?[^\S\n]+(?:in|per)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 12), start))) return null;
   if (SPEED_OF_LIGHT_AFTER_RE.test(text) || (/of$/iu.test(text.slice(start, end)) && /^[^\S\n]+(?:the[^\S\n]+)?(?:speed|velocity)[^\S\n]+of[^\S\n]+light(?!\p{L})/iu.test(text.slice(end, end + 30)))) return { kind: 'speed', factor: C_M_PER_S };
   // (A clause set off by commas may take the COP further back than the usual window.)
   const wide = text.slice(Math.max(floor, start - BEFORE_WINDOW - 160), start);

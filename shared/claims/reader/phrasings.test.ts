@@ -1520,6 +1520,9 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Rumours of a 2 kW output from a 500 W input turned out to be a misread meter: the real output was 450 W.',
     'Had the pump delivered 10 kW of heat on 1 kW with ground at 10 °C and flow at 35 °C, it would still be within Carnot.',
     'The unit delivers 4 kW of heat on 1 kW, taking ground water at 10 °C up to 35 °C.',
+    'If the drive truly made 1 N from 1 kW with nothing leaving it, it would break momentum conservation; the team now says the 1 N was the air heating under the balance, and the true figure is below the 0.1 µN noise floor.',
+    'A 5 W laser pointer recoils with about 17 nN, exactly as P/c says.',
+    'The cosmic ray proton had a speed within 1 part in 10^20 of light speed.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
