@@ -277,6 +277,21 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         suffix = massSibling.suffix;
         carried = true;
       }
+      // "took twelve hundred watts in and gave fifteen hundred out", "drew 1200 W and put out 1500": the other
+      // side, in the unit of the power or energy said just before it.
+      const flowSibling = [...tokens.slice(0, i)].reverse().find((o) => !o.skip && o.suffix?.type === 'unit' && (o.suffix.form.kind === 'power' || o.suffix.form.kind === 'energy') && !o.suffix.per);
+      if (
+        !carried &&
+        flowSibling &&
+        start - flowSibling.end < 80 &&
+        !/[\p{N}]/u.test(text.slice(flowSibling.end, start)) &&
+        sentenceAround(text, flowSibling.start, flowSibling.end) === sentenceAround(text, start, t.numEnd) &&
+        /^[^\S\n]*(?:in|out|back)(?:[^\S\n]*[,.;:!?)"”’']|[^\S\n]+(?:and|at|of|from|to|with|while|for|on)(?!\p{L})|[^\S\n]*$)/iu.test(text.slice(t.numEnd, t.numEnd + 12)) &&
+        /(?<!\p{L})(?:gave|gives|give|put(?:s|ting)?(?:[^\S\n]+out)?|returned|returns|delivered|delivers|produced|produces|yielded|yields|drew|draws|took|takes|used|uses|got|gets|and|with)[^\S\n]+(?:(?:back|about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start))
+      ) {
+        suffix = flowSibling.suffix;
+        carried = true;
+      }
     }
     // "a perfect engine would only reach about 14 %", "the ideal COP … is about 11": the writer's ceiling.
     const bound = !carried && (!suffix || suffix.type === 'percent') ? statedBound(text, start, suffix ? end : t.numEnd, suffix !== null, Number(t.num)) : null;

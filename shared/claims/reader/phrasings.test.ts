@@ -1658,3 +1658,16 @@ test("a withdrawn figure after a title's point: 'An earlier version of this repo
   const f = extractFigures('Correction: An earlier version of this report said Mr. Ferreira\'s converter drew 4 A from its 12 V battery. The meter read 0.4 A.');
   expect(f.find((x) => x.kind === 'current' && x.si === 4)?.role).toBe('aside');
 });
+
+test("the other side said without its unit: 'took twelve hundred watts in and gave fifteen hundred out' (invented test data)", () => {
+  const text = 'He told us the box took "twelve hundred watts in and gave fifteen hundred out".';
+  const f = extractFigures(text);
+  expect(f.map((x) => [x.kind, x.role, x.si])).toEqual([
+    ['power', 'in', 1200],
+    ['power', 'out', 1500],
+  ]);
+  // 1500 / 1200 = 1.25 (first law; node).
+  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.25, SEVEN);
+  // (a bare count after a power is no power: "uses 200 W and 50 of them are lost")
+  expect(extractFigures('The motor uses 200 W and 50 of them are lost as heat.').filter((x) => x.kind === 'power').map((x) => x.si)).toEqual([200]);
+});
