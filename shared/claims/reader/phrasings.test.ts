@@ -1523,6 +1523,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'If the drive truly made 1 N from 1 kW with nothing leaving it, it would break momentum conservation; the team now says the 1 N was the air heating under the balance, and the true figure is below the 0.1 µN noise floor.',
     'A 5 W laser pointer recoils with about 17 nN, exactly as P/c says.',
     'The cosmic ray proton had a speed within 1 part in 10^20 of light speed.',
+    'Contrary to the rumour, the motor does not give 1.5 kW from 1 kW; it gives 0.9 kW.',
+    'The motor does not give 1.5 kW from 1 kW.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1530,6 +1532,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     expect(breaks('Our magnetic amplifier gives 100 W out for a 1 W input signal, with no other supply.')).toBe(true);
     expect(breaks('My amplifier circuit gives 1 W out for 1 mW in, and it is self-powered.')).toBe(true);
     expect(breaks('The box puts out ten times the energy it takes in.')).toBe(true);
+    expect(breaks("It doesn't just give 1 kW, it gives 3 kW from 1 kW.")).toBe(true);
     expect(breaks('The wheel turns by itself and gives 5 W.')).toBe(true);
     expect(breaks('The generator drew 30 W and gave 69 W; the extra energy comes from the vacuum.')).toBe(true);
     expect(breaks('The magnet motor transfers 500 W to the load with no input.')).toBe(true);

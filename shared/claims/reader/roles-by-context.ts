@@ -503,6 +503,22 @@ export function asideQuotedLightSpeed(text: string, drafts: Draft[]): void {
   }
 }
 
+/** Just before a figure said not to be given: "does not give", "never delivered", "no longer claims". */
+const DENIED_BEFORE_RE =
+  /(?<!\p{L})(?:(?:does|did|do|will|would|can|could)[^\S\n]+not|doesn['’]t|didn['’]t|don['’]t|won['’]t|can['’]t|cannot|never|no[^\S\n]+longer)[^\S\n]+(?:(?:really|actually|in[^\S\n]+fact|ever)[^\S\n]+)?(?:gives?|gave|make|makes|made|produces?|produced|delivers?|delivered|put[^\S\n]+out|puts[^\S\n]+out|generates?|generated|returns?|returned|output|reach(?:es|ed)?|achieves?|achieved|claims?|claimed)[^\S\n]+(?:(?:anything[^\S\n]+like|anywhere[^\S\n]+near|about|some|the)[^\S\n]+)?$/iu;
+
+/**
+ * "Contrary to the rumour, the motor does not give 1.5 kW from 1 kW; it gives 0.9 kW": an output said not
+ * to be given is no output of the device — set aside (the text may go on to give the real one).
+ */
+export function asideDenied(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if ((d.kind !== 'power' && d.kind !== 'energy') || d.derived || d.role !== 'out') continue;
+    if (!DENIED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start))) continue;
+    d.role = 'aside';
+  }
+}
+
 /** An amplifier of a signal named by its kind ("audio amplifier", "erbium-doped fibre amplifier", "op-amp"). */
 const AMPLIFIER_RE =
   /(?<!\p{L})(?:(?:audio|RF|radio|microwave|optical|fib(?:re|er)|laser|signal|guitar|bass|instrument(?:ation)?|operational|headphone|hi-?fi|stereo|valve|tube|transistor|class[- ]?[A-DH]|erbium(?:-doped)?|Raman|semiconductor|lock-in|charge|low-noise|doped)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?amplifiers?|op-?amps?|preamps?|preamplifiers?|repeaters?)(?!\p{L})/iu;
