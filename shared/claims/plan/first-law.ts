@@ -15,10 +15,10 @@ import type { ThrustReading } from './thrust';
 const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:(?:is|are|was|were|being)[^\S\n]+)?(?:of[^\S\n]+(?:low-grade[^\S\n]+|ambient[^\S\n]+)?heat[^\S\n]+)?(?:from|out of|drawn from|taken from|extracted from)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:borehole|ground|earth|soil|outside|outdoor|ambient|air|source|environment|surroundings|well|river|lake|sea|brine|loop)(?!\p{L})/iu;
 /**
  * A further input named but not measured: "the rest is sunlight", "the remainder comes from the ambient
- * air", "solar-assisted", "topped up by heat from the ground".
+ * air", "ambient heat supplies the rest", "solar-assisted", "topped up by heat from the ground".
  */
 const UNMEASURED_OTHER_INPUT_RE =
-  /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:extra|excess|surplus|additional)(?:[^\S\n]+(?:energy|power|light|output))?[^\S\n]+(?:comes?|coming|came|is[^\S\n]+drawn|drawn|taken|supplied)[^\S\n]+from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth|lattice|phonons|surroundings|room|pump(?:[^\S\n]+(?:laser|diodes?|light))?|sunlight)(?!\p{L})|(?:the[^\S\n]+)?(?:rest|remainder|balance|difference)[^\S\n]+(?:(?:of[^\S\n]+(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:is|are|comes?|came|coming|being|was)[^\S\n]+)(?:(?:made[^\S\n]+up[^\S\n]+by|made[^\S\n]+up[^\S\n]+from|supplied[^\S\n]+by|provided[^\S\n]+by|drawn[^\S\n]+from|taken[^\S\n]+from|from|by)[^\S\n]+)?(?:the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:sun|sunlight|solar|ambient|air|ground|earth|fuel|gas|wind|environment|surroundings|waste[^\S\n]+heat|process[^\S\n]+heat|steam)|(?:solar|sun|wind|ambient)[- ]assisted|(?:plus|together[^\S\n]+with|along[^\S\n]+with|topped[^\S\n]+up[^\S\n]+(?:by|with))[^\S\n]+(?:free[^\S\n]+|unmeasured[^\S\n]+|some[^\S\n]+)?(?:sunlight|solar[^\S\n]+(?:heat|gain|energy)|ambient[^\S\n]+heat|heat[^\S\n]+from[^\S\n]+the[^\S\n]+(?:air|ground|sun)))(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:extra|excess|surplus|additional)(?:[^\S\n]+(?:energy|power|light|output))?[^\S\n]+(?:comes?|coming|came|is[^\S\n]+drawn|drawn|taken|supplied)[^\S\n]+from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth|lattice|phonons|surroundings|room|pump(?:[^\S\n]+(?:laser|diodes?|light))?|sunlight)(?!\p{L})|(?:the[^\S\n]+)?(?:rest|remainder|balance|difference)[^\S\n]+(?:(?:of[^\S\n]+(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:is|are|comes?|came|coming|being|was)[^\S\n]+)(?:(?:made[^\S\n]+up[^\S\n]+by|made[^\S\n]+up[^\S\n]+from|supplied[^\S\n]+by|provided[^\S\n]+by|drawn[^\S\n]+from|taken[^\S\n]+from|from|by)[^\S\n]+)?(?:the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:sun|sunlight|solar|ambient|air|ground|earth|fuel|gas|wind|environment|surroundings|waste[^\S\n]+heat|process[^\S\n]+heat|steam)|(?:solar|sun|wind|ambient)[- ]assisted|(?:sun|sunlight|solar|ambient|outdoor|outside|air|ground|earth|fuel|gas|wind|environment|surroundings|waste[^\S\n]+heat|process[^\S\n]+heat|steam)(?:[^\S\n]+(?:heat|energy|warmth|air))?[^\S\n]+(?:supplies|supplied|provides|provided|makes[^\S\n]+up|made[^\S\n]+up|covers|covered|contributes|contributed|gives|accounts[^\S\n]+for)[^\S\n]+the[^\S\n]+(?:rest|remainder|balance|difference)|(?:plus|together[^\S\n]+with|along[^\S\n]+with|topped[^\S\n]+up[^\S\n]+(?:by|with))[^\S\n]+(?:free[^\S\n]+|unmeasured[^\S\n]+|some[^\S\n]+)?(?:sunlight|solar[^\S\n]+(?:heat|gain|energy)|ambient[^\S\n]+heat|heat[^\S\n]+from[^\S\n]+the[^\S\n]+(?:air|ground|sun)))(?!\p{L})/iu;
 /** A machine said to run by itself. */
 const SELF_RUNNING_CLAIM_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'iu');
 /** A machine that harvests a flow from outside (sunlight, wind, heat) is no self-running one. */
@@ -43,6 +43,44 @@ function heatEngineElectricIn(b: Basis, inF: Figure | undefined): boolean {
 
 /** An energy store named: what it gives out over a cycle is bounded, not the rate it gives it at. */
 const STORE_RE = /(?<!\p{L})(?:flywheels?|batter(?:y|ies)|accumulators?|supercapacitors?|capacitor banks?|energy stores?|storage units?)(?!\p{L})/iu;
+
+/**
+ * A power taken in while a store is filled, said just before the figure ("charged at 2 kW", "charges
+ * overnight at 7 kW", "pumps at 300 MW", "wound by hand for a minute at about 20 W") or after it ("takes
+ * 100 W from the grid all night", "2 kW to recharge"): a rate of filling, not what goes in while the
+ * output is given.
+ */
+const FILLING_BEFORE_RE =
+  /(?<!\p{L})(?:(?:re)?charg(?:ed|es|ing)|trickle[- ]charg\w*|pumps|pumping|pumped|topped[^\S\n]+up|tops[^\S\n]+up|wound(?:[^\S\n]+up)?(?=[^\S\n]+by[^\S\n]+hand)|winding[^\S\n]+(?:it[^\S\n]+)?(?:up[^\S\n]+)?(?=at))(?:[^\S\n]+[\p{L}-]+){0,4}?[^\S\n]+(?:at|with|on|from)[^\S\n]+(?:(?:a|an|the|rate|of|steady|about|around|roughly|some|only|just|up to)[^\S\n]+)*$/iu;
+const FILLING_AFTER_RE = /^[^.;!?\n]{0,30}?(?<!\p{L})(?:to[^\S\n]+(?:re)?charge|while[^\S\n]+(?:re)?charging|of[^\S\n]+winding|all[^\S\n]+night|overnight)(?!\p{L})/iu;
+/** An average or wall-plug input beside a peak output ("100 MW peak with an average input of 20 kW"). */
+const AVERAGE_IN_RE = /(?<!\p{L})(?:average|mean|wall[- ]plug)(?!\p{L})/iu;
+/** An output given in pulses, peaks or bursts, or while braking: no steady output beside a steady input. */
+const OUT_BURST_RE =
+  /(?<!\p{L})(?:bursts?|peaks?|(?:in|per|each)[^\S\n]+pulse|pulses|flash(?:es)?|sprints?|for[^\S\n]+a[^\S\n]+(?:fraction[^\S\n]+of[^\S\n]+a[^\S\n]+second|millisecond|microsecond|moment|few[^\S\n]+seconds)|(?:when|while)[^\S\n]+(?:slowing|braking)|under[^\S\n]+braking)(?!\p{L})/iu;
+/** A store of energy named: a battery, a capacitor, a flywheel, a spring, a reservoir. */
+const ANY_STORE_RE =
+  /(?<!\p{L})(?:flywheels?|batter(?:y|ies)|accumulators?|(?:super|ultra)?capacitors?|capacitor[^\S\n]+banks?|springs?|mainsprings?|clockwork|wind-up|reservoirs?|pumped[- ](?:storage|hydro)|energy[^\S\n]+stores?|storage|Marx|pulse[- ](?:forming|compressors?|compression)|regenerative[^\S\n]+braking)(?!\p{L})/iu;
+
+/**
+ * A power taken in and a power given out in two phases of a store's cycle ("charged at 2 kW … delivers 50
+ * kW bursts", "pumps at 300 MW and generates at 360 MW", "100 MW peak with an average input of 20 kW"):
+ * the rates are not comparable; only the energies over the cycle are bounded.
+ */
+function phasesApart(text: string, inF: Figure, outF: Figure): boolean {
+  if (!text || inF.start === null || inF.end === null || outF.start === null || outF.end === null || inF.derived || outF.derived) return false;
+  const before = text.slice(Math.max(0, inF.start - 60), inF.start);
+  const after = text.slice(inF.end, inF.end + 40);
+  const outAround = text.slice(Math.max(0, outF.start - 40), outF.end + 40);
+  const sentence = sentenceAround(text, Math.min(inF.start, outF.start), Math.max(inF.end, outF.end));
+  const store = ANY_STORE_RE.test(sentence);
+  const charging = /(?<!\p{L})(?:re)?charg(?:ed|es|ing)(?!\p{L})/iu;
+  const filling = FILLING_BEFORE_RE.test(before) || FILLING_AFTER_RE.test(after);
+  // (A charge verb beside the output is the claim's own: "charges the battery at 5 kW while the motor draws 3 kW".)
+  const outCharges = charging.test(text.slice(Math.max(0, outF.start - 60), outF.start));
+  const burst = OUT_BURST_RE.test(outAround);
+  return (filling && !outCharges && (store || charging.test(before))) || (burst && (store || AVERAGE_IN_RE.test(text.slice(Math.max(0, inF.start - 40), inF.end + 20))));
+}
 
 /** An output said as a burst or a peak ("can deliver 2 MW for short periods"): no steady output over a run. */
 function saidInBursts(text: string, f: Figure): boolean {
@@ -117,7 +155,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     const saidTwice = !inF.derived && !outF.derived && inF.text === outF.text && inF.si === outF.si && inF.start !== outF.start;
     // A store (a flywheel, a battery) gives out what it took in at any rate: its discharge power above its
     // charge power ("charged overnight at 20 kW … can release it at 250 kW") is no claim of more out than in.
-    const storeRates = bothPower && !duration && STORE_RE.test(text) && energy.some((f) => f.role !== 'aside');
+    const storeRates = bothPower && !duration && ((STORE_RE.test(text) && energy.some((f) => f.role !== 'aside')) || phasesApart(text, inF, outF));
     if (storeRates) {
       needs.push(need('first-law', ['the energy put into the store and the energy got out of it (or how long it charged and how long it gave out power)'], 'A store can give out power faster than it takes it in; only the energies over a full cycle are bounded.', [inF, outF]));
     } else if (saidTwice) {

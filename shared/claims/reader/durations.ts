@@ -34,7 +34,7 @@ export const isChargingTime = (text: string, d: { start: number | null | undefin
   d.start != null && CHARGING_TIME_RE.test(text.slice(Math.max(0, d.start - 50), d.start));
 
 /** Words of an output given only in bursts or as a rating of what it can do at most. */
-export const BURST_RE = /(?<!\p{L})(?:for short periods|for a short (?:time|period)|briefly|momentarily|in (?:short )?bursts|at peak|peaks? (?:at|of)|peak (?:power|output)|for (?:a few|several) (?:seconds|minutes))(?!\p{L})/iu;
+export const BURST_RE = /(?<!\p{L})(?:for short periods|for a short (?:time|period)|briefly|momentarily|in (?:short )?bursts|at peak|peaks? (?:at|of)|peak (?:power|output)|for (?:a few|several) (?:seconds|minutes)|for a (?:fraction of a second|split second|moment))(?!\p{L})/iu;
 
 /** A length said as a distance covered: "across a 12 km link", "through 1,000 km of fibre". */
 const DISTANCE_RE =
@@ -160,11 +160,12 @@ export function relateDurations(text: string, drafts: Draft[]): void {
     const ownOf = (p: Draft): Draft | undefined => {
       const nextPower = powers.find((q) => q.start > p.start);
       const prevPower = [...powers].reverse().find((q) => q.start < p.start);
+      // (Not a time said after "after", "before" or "then": "releases 1 kW for a fraction of a second after 30 s".)
       // ("twenty watts of effort, gives forty minutes of listening at a quarter of a watt": the forty
       // minutes are the next power's, said right before it.)
       const nextPowers = (d: Draft) => nextPower !== undefined && nextPower.start > d.end && nextPower.start - d.end < 40 && /^[^\S\n]+of[^\S\n]+[\p{L}-]+(?:[^\S\n]+[\p{L}-]+)?[^\S\n]+(?:at|drawing|using)[^\S\n]+(?:(?:about|around|roughly|some|just|only|a steady)[^\S\n]+)?$/iu.test(text.slice(d.end, nextPower.start));
       return (
-        durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && !nextPowers(d) && sameClause(text, d, p) && d.start - p.end < 80) ??
+        durations.find((d) => d.start > p.end && (!nextPower || d.start < nextPower.start) && !nextPowers(d) && !/(?<!\p{L})(?:after|before|then|until)(?!\p{L})/iu.test(text.slice(p.end, d.start)) && sameClause(text, d, p) && d.start - p.end < 80) ??
         [...durations].reverse().find((d) => d.end <= p.start && (!prevPower || d.start > prevPower.end) && sameClause(text, d, p) && p.start - d.end < 60)
       );
     };

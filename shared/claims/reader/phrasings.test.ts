@@ -1525,6 +1525,16 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The cosmic ray proton had a speed within 1 part in 10^20 of light speed.',
     'Contrary to the rumour, the motor does not give 1.5 kW from 1 kW; it gives 0.9 kW.',
     'The motor does not give 1.5 kW from 1 kW.',
+    'The panels made 412 kWh in June, 30 % more than in May.',
+    'Heat output: 140 % of the electrical input (ambient heat supplies the rest).',
+    "The supercapacitor bank is charged at 2 kW and delivers 50 kW bursts for the crane's lift.",
+    'Our flywheel store takes 100 W from the grid all night and gives back 20 kW peaks during the day.',
+    'The pumped-storage station pumps at 300 MW and generates at 360 MW.',
+    'The Marx generator turns a 500 W supply into 2 GW pulses.',
+    'The battery charges overnight at 7 kW and powers the 150 kW motor during a sprint.',
+    'With regenerative braking the car recovers 60 kW when slowing down, while its motor uses 40 kW cruising.',
+    'The pulse compressor outputs 100 MW peak with an average input of 20 kW.',
+    'The spring-loaded launcher releases 1 kW for a fraction of a second after 30 s of winding at 10 W.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1673,4 +1683,23 @@ test("the other side said without its unit: 'took twelve hundred watts in and ga
   expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.25, SEVEN);
   // (a bare count after a power is no power: "uses 200 W and 50 of them are lost")
   expect(extractFigures('The motor uses 200 W and 50 of them are lost as heat.').filter((x) => x.kind === 'power').map((x) => x.si)).toEqual([200]);
+});
+
+describe('a store filled at one rate and emptied at another, and a comparison with another time, are no ledger (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  test('charge and discharge rates of a store wait for the energies', () => {
+    const r = run("The supercapacitor bank is charged at 2 kW and delivers 50 kW bursts for the crane's lift.");
+    expect(r.checks.find((c) => c.check === 'first-law')).toBeUndefined();
+    expect(r.needs.find((n) => n.check === 'first-law')?.missing.join(' ')).toMatch(/energy put into the store/);
+  });
+  test('a charge said beside the output is the claim itself: still judged', () => {
+    // 5 kW / 3 kW = 1.6667 (first law; node).
+    const r = run('The generator charges the battery at 5 kW while the motor draws only 3 kW from it.');
+    expect(r.checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.6667, 4);
+  });
+  test('"30 % more than in May" is no gain of 1.3', () => {
+    expect(extractFigures('The panels made 412 kWh in June, 30 % more than in May.').some((f) => f.kind === 'efficiency')).toBe(false);
+    // 1 + 0.30 = 1.3 where the comparison is with what goes in (first law; node).
+    expect(extractFigures('It puts out 30 % more than it takes in.').find((f) => f.kind === 'efficiency')?.si).toBeCloseTo(1.3, SEVEN);
+  });
 });
