@@ -1535,6 +1535,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'With regenerative braking the car recovers 60 kW when slowing down, while its motor uses 40 kW cruising.',
     'The pulse compressor outputs 100 MW peak with an average input of 20 kW.',
     'The spring-loaded launcher releases 1 kW for a fraction of a second after 30 s of winding at 10 W.',
+    'The heat recovery ventilator returns 3 kW of heat to the house using only 40 W of fan power.',
+    'Our MVHR unit recovers 90 % of the heat: about 2 kW on a cold day, for 35 W.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

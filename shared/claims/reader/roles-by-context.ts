@@ -541,14 +541,24 @@ const FROM_TO_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+(?:heat|power|energy)[^\S\n]+)?f
 /**
  * "The heat pipe carries 200 W from the CPU to the fins", "the loop transfers 4 kW from the collector into
  * the tank": a flow a passive part passes on from one place to another is neither made by it nor its
- * input — set aside, so "with no power input" beside it makes no claim of output from nothing.
+ * input — set aside, so "with no power input" beside it makes no claim of output from nothing. So is the
+ * heat a heat-recovery ventilator or a recuperator hands back ("returns 3 kW of heat using 40 W of fans").
  */
 export function asidePassedOn(text: string, drafts: Draft[]): void {
+  const recovery = HEAT_RECOVERY_RE.test(text);
   for (const d of drafts) {
     if (d.kind !== 'power' || d.derived || d.role === 'in') continue;
     if (PASSES_ON_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) && FROM_TO_AFTER_RE.test(text.slice(d.end, d.end + 80))) d.role = 'aside';
+    else if (recovery && RECOVERED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 60), d.start).replace(/^[^]*[.!?;\n][^\S\n]/u, ''))) d.role = 'aside';
   }
 }
+
+/** A heat exchanger that hands back heat that would have left: a heat-recovery ventilator, a recuperator. */
+const HEAT_RECOVERY_RE =
+  /(?<!\p{L})(?:heat[- ]recovery|energy[- ]recovery[^\S\n]+ventilat\w*|HRVs?|ERVs?|MVHR|recuperators?|regenerators?|heat[^\S\n]+exchangers?|heat[^\S\n]+wheels?|economi[sz]ers?)(?!\p{L})/iu;
+/** Before the heat it hands back, in its clause: "returns", "recovers … about 2 kW", "reclaims". */
+const RECOVERED_BEFORE_RE =
+  /(?<!\p{L})(?:returns?|returned|returning|recovers?|recovered|recovering|reclaims?|reclaimed|recaptures?|recaptured|brings?[^\S\n]+back|hands?[^\S\n]+back|gives?[^\S\n]+back)(?!\p{L})(?:(?!(?<!\p{L})(?:and|generat|produc|electric|makes?|making|deliver|drives?|turns?))[^.;!?\n]){0,45}$/iu;
 
 export function asideControlPowers(text: string, drafts: Draft[]): void {
   if (!CONTROLLED_DEVICE_RE.test(text) || NOTHING_ELSE_RE.test(text)) return;
