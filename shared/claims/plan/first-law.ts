@@ -82,6 +82,25 @@ function phasesApart(text: string, inF: Figure, outF: Figure): boolean {
   return (filling && !outCharges && (store || charging.test(before))) || (burst && (store || AVERAGE_IN_RE.test(text.slice(Math.max(0, inF.start - 40), inF.end + 20))));
 }
 
+/** What an auxiliary load of a plant is: its controls, fans, pumps, yaw drive, winch, electronics. */
+const AUXILIARY_RE =
+  /(?<!\p{L})(?:controls?|control[^\S\n]+(?:system|electronics|unit|gear)s?|controllers?|electronics|fans?|blowers?|(?:circulat\w+[^\S\n]+)?pumps?|yaw|pitch[^\S\n]+(?:system|drive)s?|auxiliar\w*|parasitic|house[^\S\n]+load|own[^\S\n]+(?:use|consumption)|standby|winch(?:es)?|sensors?|trackers?|tracking|monitoring|lights?|lighting)(?!\p{L})/iu;
+/** An outside flow the plant lives on: wind, sunlight, falling water, fuel burnt, a kite's pull. */
+const OUTSIDE_FLOW_RE =
+  /(?<!\p{L})(?:wind(?:[- ]?turbines?|mills?|[- ]farms?)?|sun(?:light|shine)?|solar|hydro\w*|water[^\S\n]+turbines?|tidal|waves?|geothermal|CHP|combined[^\S\n]+heat[^\S\n]+and[^\S\n]+power|cogeneration|boilers?|gas|fuel|diesel|petrol|gasoline|biomass|wood|kites?|rivers?|streams?|dams?)(?!\p{L})/iu;
+
+/**
+ * The one input stated is an auxiliary load of a plant that lives on an outside flow ("makes 3 MW with
+ * only a 50 kW yaw and pitch system drawing power", "15 kW of heat from the sun while the fans draw 300
+ * W"): not what the plant converts, so no ledger.
+ */
+function auxiliaryInput(text: string, inF: Figure, outF: Figure): boolean {
+  if (!text || inF.start === null || inF.end === null || outF.start === null || inF.derived) return false;
+  const around = sentenceAround(text, inF.start, inF.end);
+  const local = text.slice(Math.max(0, inF.start - 45), inF.end + 45);
+  return AUXILIARY_RE.test(local) && OUTSIDE_FLOW_RE.test(around + ' ' + sentenceAround(text, outF.start, outF.end ?? outF.start));
+}
+
 /** An output said as a burst or a peak ("can deliver 2 MW for short periods"): no steady output over a run. */
 function saidInBursts(text: string, f: Figure): boolean {
   return f.start !== null && f.end !== null && !!text && BURST_RE.test(sentenceAround(text, f.start, f.end));
@@ -156,7 +175,10 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     // A store (a flywheel, a battery) gives out what it took in at any rate: its discharge power above its
     // charge power ("charged overnight at 20 kW … can release it at 250 kW") is no claim of more out than in.
     const storeRates = bothPower && !duration && ((STORE_RE.test(text) && energy.some((f) => f.role !== 'aside')) || phasesApart(text, inF, outF));
-    if (storeRates) {
+    const auxIn = bothPower && !duration && auxiliaryInput(text, inF, outF);
+    if (auxIn) {
+      needs.push(need('first-law', ['the power of the outside flow the plant converts (wind, sunlight, water, fuel)'], 'The input the text gives feeds only the plant’s own controls, fans or pumps, not what it converts.', [inF, outF]));
+    } else if (storeRates) {
       needs.push(need('first-law', ['the energy put into the store and the energy got out of it (or how long it charged and how long it gave out power)'], 'A store can give out power faster than it takes it in; only the energies over a full cycle are bounded.', [inF, outF]));
     } else if (saidTwice) {
       notes.push(`The same figure, “${inF.text}”, is read both as what goes in and as what comes out; check the part it plays before comparing the two.`);

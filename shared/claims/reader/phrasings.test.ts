@@ -1537,6 +1537,11 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The spring-loaded launcher releases 1 kW for a fraction of a second after 30 s of winding at 10 W.',
     'The heat recovery ventilator returns 3 kW of heat to the house using only 40 W of fan power.',
     'Our MVHR unit recovers 90 % of the heat: about 2 kW on a cold day, for 35 W.',
+    'The wind turbine makes 3 MW with only a 50 kW yaw and pitch system drawing power.',
+    'Our greenhouse gets 15 kW of heat from the sun while the fans draw 300 W.',
+    'The hydro turbine delivers 1.2 MW; its control system draws 5 kW.',
+    'Our micro-CHP produces 1 kW of electricity and 6 kW of heat while drawing 150 W for its controls and pump.',
+    "With the kite up, the boat's generator gives 2 kW, while the crew's winch motor uses 200 W.",
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1704,4 +1709,10 @@ describe('a store filled at one rate and emptied at another, and a comparison wi
     // 1 + 0.30 = 1.3 where the comparison is with what goes in (first law; node).
     expect(extractFigures('It puts out 30 % more than it takes in.').find((f) => f.kind === 'efficiency')?.si).toBeCloseTo(1.3, SEVEN);
   });
+});
+
+test("an auxiliary load beside a plant that lives on no outside flow is still its input: 'the magnet generator gives 3 kW while its controller draws only 50 W' (invented test data)", () => {
+  const text = 'The magnet generator gives 3 kW while its controller draws only 50 W.';
+  // 3000 / 50 = 60 (first law; node).
+  expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(60, SEVEN);
 });
