@@ -46,13 +46,14 @@ export interface HeatReading {
 /** A unit that makes heat and power together. */
 const CHP_RE = /(?<!\p{L})(?:combined heat and power|CHP|cogeneration|co-generation|trigeneration|micro-?CHP)(?!\p{L})/iu;
 /**
- * The "total" efficiency of a combined heat and power unit ("up to 90 % total efficiency"): electricity
+ * The "total" efficiency of a combined heat and power unit ("up to 90 % total efficiency", "85 % of the
+ * fuel's energy comes back as power and heat"): electricity
  * and recovered heat added up over the fuel — no engine's efficiency, and not bounded by Carnot.
  */
 function combinedHeatAndPower(f: Figure, text: string): boolean {
   if (f.start === null || f.end === null || !CHP_RE.test(text)) return false;
   const near = text.slice(Math.max(0, f.start - 40), f.end + 40);
-  return /(?<!\p{L})(?:total|overall|combined|fuel utili[sz]ation|system)(?!\p{L})/iu.test(near) && !/(?<!\p{L})electrical(?!\p{L})/iu.test(text.slice(Math.max(0, f.start - 25), f.start));
+  return /(?<!\p{L})(?:total|overall|combined|fuel utili[sz]ation|system|(?:power|electricity)[^\S\n]+and[^\S\n]+(?:usable[^\S\n]+|useful[^\S\n]+)?heat|heat[^\S\n]+and[^\S\n]+(?:power|electricity))(?!\p{L})/iu.test(near) && !/(?<!\p{L})electrical(?!\p{L})/iu.test(text.slice(Math.max(0, f.start - 25), f.start));
 }
 
 /** Before a percentage: a heating appliance's share of its fuel's heat ("Fuel efficiency 92 %", "boiler efficiency: 89 %"). */

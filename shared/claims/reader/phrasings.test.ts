@@ -1716,3 +1716,35 @@ test("an auxiliary load beside a plant that lives on no outside flow is still it
   // 3000 / 50 = 60 (first law; node).
   expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(60, SEVEN);
 });
+
+describe("a share of a mass just given said in words, and a CHP unit's heating water (invented test data)", () => {
+  test("'1,200 kg fully fuelled; 85 % of that is propellant' gives the propellant and the dry mass", () => {
+    const text = 'The stage weighs 1,200 kg fully fuelled; 85 % of that is propellant, burnt at an Isp of 300 s, for 5.5 km/s.';
+    const f = extractFigures(text);
+    expect(f.filter((x) => x.kind === 'mass').map((x) => [x.role, +x.si.toPrecision(6)])).toEqual([
+      ['wet', 1200],
+      ['propellant', 1020],
+      ['dry', 180],
+    ]);
+    // Tsiolkovsky: 300 × 9.80665 × ln(1200/180) = 5581.3 m/s; 5500 / 5581.3 = 0.98543 (node).
+    expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'rocket-equation')?.outputs.find((o) => o.name === 'dv_ratio')?.si).toBeCloseTo(0.98543, 4);
+  });
+  test("'four-fifths of that is propellant' is no mass of 0.8 kg", () => {
+    const f = extractFigures("The club's rocket weighs 25 kg on the pad, and four-fifths of that is propellant.");
+    expect(f.filter((x) => x.kind === 'mass').map((x) => [x.role, +x.si.toPrecision(6)])).toEqual([
+      ['wet', 25],
+      ['propellant', 20],
+      ['dry', 5],
+    ]);
+  });
+  test("a CHP unit's flow and return alone are the circuit it heats, not its engine's two sides", () => {
+    const text = "Gas-engine CHP, fuel input 48 kW. 85 % of the fuel's energy comes back as power and heat. Heating water: return 62 °C, flow 80 °C.";
+    const r = runClaimChecks(extractFigures(text), { text });
+    expect(extractFigures(text).filter((x) => x.kind === 'temperature').every((x) => x.role === 'aside')).toBe(true);
+    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+  test("beside its heater head's temperature, the return water is the cold side", () => {
+    const f = extractFigures("Micro-CHP: the Stirling engine's heater head runs at about 550 °C and rejects heat to the return water at 40 °C.");
+    expect(f.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['hot', 'cold']);
+  });
+});

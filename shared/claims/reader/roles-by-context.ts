@@ -15,6 +15,12 @@ import { sentenceOf, siOf, typedSi, type Draft } from './draft';
 const PROPELLANT_FRACTION_RE =
   /(?<!\p{L})propellant(?:[^\S\n]+mass)?(?:[^\S\n]+fraction)?[^\S\n]+(?:is|of|=|:|makes? up|making up|accounts? for|accounting for|forms?|forming)?[^\S\n]*(\d+(?:\.\d+)?)[^\S\n]*(?:%|per[^\S\n]?cent)[^\S\n]+of|(\d+(?:\.\d+)?)[^\S\n]*(?:%|per[^\S\n]?cent)[^\S\n]+(?:of[^\S\n]+(?:its|the)[^\S\n]+(?:[\p{L}\d-]+[^\S\n]+){0,3})?(?:mass[^\S\n]+)?(?:is[^\S\n]+)?propellant|(?<!\p{L})propellant(?:[^\S\n]+mass)?[^\S\n]+fraction[^\S\n]+(?:of|is|=)[^\S\n]*(\d+(?:\.\d+)?)[^\S\n]*%/iu;
 
+/** A share said in words or as a percentage, of a mass just given, that is propellant: "four-fifths of that is propellant". */
+const SHARE_OF_THAT_PROPELLANT_RE =
+  /(?<![\p{L}\d.])(?:(a|an|one|two|three|four|five|six|seven|eight|nine)[- ](half|third|quarter|fifth|sixth|seventh|eighth|ninth|tenth)s?|(\d+(?:\.\d+)?)[^\S\n]*(?:%|per[^\S\n]?cent))[^\S\n]+of[^\S\n]+(?:that|it|this|which|(?:the|its)[^\S\n]+(?:(?:whole|total|launch|lift-?off|pad|gross)[^\S\n]+)?(?:mass|weight|total))[^\S\n]+(?:is|was|being|are)[^\S\n]+(?:propellants?|fuel|reaction[^\S\n]+mass)(?!\p{L})/iu;
+const COUNT_WORD: Record<string, number> = { a: 1, an: 1, one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9 };
+const PART_WORD: Record<string, number> = { half: 2, third: 3, quarter: 4, fifth: 5, sixth: 6, seventh: 7, eighth: 8, ninth: 9, tenth: 10 };
+
 export const ROCKET_RE = /(?<!\p{L})(?:rockets?|propellant|Isp|specific impulse|thrusters?|burn(?:out)?|stages?|spacecraft|lander|probe|satellite|CubeSat|delta-?v|Δv|manoeuvres?|maneuvers?|launch(?:er)?|orbit\w*|engines? (?:fire|burn))(?!\p{L})/iu;
 
 /** Words that make a sentence's mass the craft's: the craft itself, its propellant, its engine. */
@@ -348,6 +354,14 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   }
   // "propellant is 90 % of the vehicle's mass", "90 % propellant by mass": the propellant from a fraction.
   const fraction = PROPELLANT_FRACTION_RE.exec(text);
+  // "weighs 25 kg on the pad, and four-fifths of that is propellant": the share in words is no mass.
+  const shareOfThat = fraction ? null : SHARE_OF_THAT_PROPELLANT_RE.exec(text);
+  if (shareOfThat) {
+    for (let i = drafts.length - 1; i >= 0; i--) {
+      const d = drafts[i];
+      if (d.start >= shareOfThat.index && d.end <= shareOfThat.index + shareOfThat[0].length && d.kind !== 'efficiency') drafts.splice(i, 1);
+    }
+  }
   // "puts 3 W into a little cell for 2 hours, and the cell ends up holding 5 Wh": a charging ledger,
   // what went into the store is the input and what it holds at the end the output.
   const held = drafts.find((d) => d.kind === 'energy' && ENDS_UP_HOLDING_RE.test(text.slice(Math.max(0, d.start - 40), d.start)));
@@ -390,6 +404,22 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   }
   const craftMasses = massDrafts.filter((d) => d.role !== 'aside');
   const whole = craftMasses.length === 1 ? craftMasses[0] : craftMasses.find((d) => d.role === null || d.role === 'wet');
+  const shareWhole = shareOfThat ? [...craftMasses].reverse().find((d) => d.end <= shareOfThat.index && shareOfThat.index - d.end < 80) : undefined;
+  if (shareOfThat && shareWhole && !craftMasses.some((d) => d !== shareWhole && d.role === 'propellant')) {
+    const p = shareOfThat[3] !== undefined ? Number(shareOfThat[3]) / 100 : COUNT_WORD[shareOfThat[1].toLowerCase()] / PART_WORD[shareOfThat[2].toLowerCase()];
+    const m = siOf(shareWhole);
+    if (p > 0 && p < 1 && m !== null) {
+      shareWhole.role = 'wet';
+      drafts.splice(drafts.indexOf(shareWhole) + 1, 0, {
+        start: shareWhole.start,
+        end: shareOfThat.index + shareOfThat[0].length,
+        kind: 'mass',
+        quantity: typedSi(p * m, 'kg'),
+        role: 'propellant',
+        derived: `propellant = ${formatPrint(p * 100)} % of ${formatQuantity(m, 'kg')}`,
+      });
+    }
+  }
   if (fraction && whole && !massDrafts.some((d) => d !== whole && d.role === 'propellant')) {
     const p = Number(fraction[1] ?? fraction[2] ?? fraction[3]) / 100;
     const m = siOf(whole);

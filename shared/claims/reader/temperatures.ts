@@ -171,6 +171,12 @@ const ratioOfDevice = (d: Draft) => (d.kind === 'efficiency' || d.kind === 'cop'
 /** Right after a temperature: the place it was of ("a 31 °C workshop", "18 °C room temperature", "that evening"). */
 const PLACE_AFTER_RE = /^[^\S\n]*(?:(?:room|hall|lab|laboratory|workshop|building|gallery|clubroom|classroom|garage|shed|office|studio|hangar)(?:[^\S\n]+temperature)?(?!\p{L})|(?:that|this|the)[^\S\n]+(?:evening|day|morning|night|afternoon)|overnight)/iu;
 
+/** A unit that makes heat and power together. */
+const CHP_NAMED_RE = /(?<!\p{L})(?:combined heat and power|CHP|cogeneration|co-generation|trigeneration|micro-?CHP)(?!\p{L})/iu;
+/** Just before a temperature of the circuit such a unit heats: "heating water: return", "flow", "supply water at". */
+const HEATING_CIRCUIT_BEFORE_RE =
+  /(?<!\p{L})(?:heating[^\S\n]+(?:water|circuit|loop)|hot[^\S\n]+water|return|flow|supply[^\S\n]+water|district[^\S\n]+heating)(?!\p{L})[^\d\n]{0,25}$/iu;
+
 export function relateTemperatures(text: string, drafts: Draft[]): void {
   // A temperature said again ("pipes at 120 °C … 'With 120 °C on the hot face …'", a critic quoting the
   // claim): the same side said twice, not the other side — set aside, the first one read.
@@ -405,6 +411,15 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
   // Two or more temperatures of the same machine: the higher is the hot side. Pairs said together
   // ("between 7 °C and 35 °C", "from 10 to 55 °C") are ordered within the pair; otherwise the
   // highest is hot and the lowest cold.
+  // A combined heat and power unit's heating-water flow and return, with no other temperature ("Heating
+  // water: return 62 °C, flow 80 °C"), are the circuit it heats — its engine's sink — not its two sides.
+  // (Beside its heater head's, the return water is its cold side: "heater head at 550 °C … rejects heat
+  // to the return water at 40 °C".)
+  if (CHP_NAMED_RE.test(text)) {
+    const temps = drafts.filter((d) => d.kind === 'temperature' && d.role !== 'aside');
+    const circuit = temps.filter((d) => HEATING_CIRCUIT_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)));
+    if (circuit.length >= 2 && circuit.length === temps.length) for (const d of circuit) d.role = 'aside';
+  }
   const absolute = drafts.filter((d) => d.kind === 'temperature' && d.role !== 'aside');
   let paired = false;
   for (let i = 0; i + 1 < absolute.length; i++) {
