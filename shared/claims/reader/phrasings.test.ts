@@ -1420,7 +1420,7 @@ describe('efficiencies said past a model name, a clause, a "from … to …" or 
   });
   test('"the conversion efficiency from heat passing through the module to electrical output is 6.5 %"', () => {
     const f = read('With the hot plate at 250 °C and 200 K across it, the conversion efficiency from heat passing through the module to electrical output is 6.5 %.');
-    expect(f.find((x) => x.kind === 'efficiency')?.si).toBeCloseTo(0.065, SEVEN);
+    expect(f.find((x) => x.kind === 'efficiency')?.si).toBeCloseTo(0.065, 9);
     expect(f.find((x) => x.kind === 'temperature-difference')?.si).toBe(200);
     // Carnot bound between 523.15 K and 323.15 K: 1 − 323.15/523.15 = 0.38230 (textbook Carnot formula; node).
     const r = runClaimChecks(f, { text: 'the conversion efficiency from heat passing through the module' });
@@ -1454,11 +1454,11 @@ test("a store drained by a load it keeps running: 'our twenty watt-hour cell pow
   expect(f.find((x) => x.kind === 'energy' && x.si === 72000 && x.role === 'in')).toBeDefined();
   const r = runClaimChecks(f, { text });
   // 5 W × 14 × 86 400 s = 6 048 000 J out of a 72 000 J store (1 Wh = 3600 J, NIST SP 811 B.8): 84 times over.
-  expect(r.checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(84, SEVEN);
+  expect(r.checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(84, 9);
   // A lawful run inside the store: 5 W for 3 h is 54 kJ of 72 kJ.
   const lawful = 'Our twenty watt-hour cell powered a five watt lamp for three hours.';
   const ok = runClaimChecks(extractFigures(lawful), { text: lawful });
-  expect(ok.checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.75, SEVEN);
+  expect(ok.checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.75, 9);
   // With a charger named the store is not the whole input: no ledger.
   const charged = 'Our twenty watt-hour cell, topped up by a small solar panel, powered a five watt lamp for two weeks.';
   expect(runClaimChecks(extractFigures(charged), { text: charged }).checks.some((c) => c.check === 'first-law' && c.finding === 'breaks')).toBe(false);
@@ -1560,7 +1560,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     const text = 'The amplifier board takes 1 W of drive signal, gives 100 W, and draws 160 W from its supply.';
     const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
     // 100 W out of 160 W + 1 W in: 100/161 (first law, energy out over energy in; node).
-    expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(100 / 161, SEVEN);
+    expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(100 / 161, 9);
   });
   test("'5 W of light while drawing 30 W': the lamp's draw goes in", () => {
     expect(extractFigures('The lamp gives 5 W of light while drawing 30 W.').map((x) => [x.role, x.si])).toEqual([
@@ -1578,7 +1578,7 @@ test("the speed of light quoted with its value is the constant, set aside: 'just
     [2.998e8, 'aside'],
   ]);
   // 2.97e8 / 299 792 458 = 0.99069 (c exact, BIPM SI Brochure 9th ed.).
-  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'light-speed')?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(2.97e8 / 299792458, SEVEN);
+  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'light-speed')?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(2.97e8 / 299792458, 9);
   // (a craft said to fly at it is no quotation)
   expect(extractFigures('Our probe reached 2.998 × 10^8 m/s.').find((x) => x.kind === 'speed')?.role).not.toBe('aside');
 });
@@ -1671,7 +1671,7 @@ test("a power said for each of several things: 'lights three 60 W bulbs while dr
     ['in', 4.8],
   ]);
   // 3 × 60 W = 180 W out of 0.4 A × 12 V = 4.8 W in: 37.5 (first law; node).
-  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(37.5, SEVEN);
+  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(37.5, 9);
 });
 
 test("a withdrawn figure after a title's point: 'An earlier version of this report said Mr. Ferreira drew 4 A' (invented test data)", () => {
@@ -1687,7 +1687,7 @@ test("the other side said without its unit: 'took twelve hundred watts in and ga
     ['power', 'out', 1500],
   ]);
   // 1500 / 1200 = 1.25 (first law; node).
-  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.25, SEVEN);
+  expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.25, 9);
   // (a bare count after a power is no power: "uses 200 W and 50 of them are lost")
   expect(extractFigures('The motor uses 200 W and 50 of them are lost as heat.').filter((x) => x.kind === 'power').map((x) => x.si)).toEqual([200]);
 });
@@ -1707,14 +1707,14 @@ describe('a store filled at one rate and emptied at another, and a comparison wi
   test('"30 % more than in May" is no gain of 1.3', () => {
     expect(extractFigures('The panels made 412 kWh in June, 30 % more than in May.').some((f) => f.kind === 'efficiency')).toBe(false);
     // 1 + 0.30 = 1.3 where the comparison is with what goes in (first law; node).
-    expect(extractFigures('It puts out 30 % more than it takes in.').find((f) => f.kind === 'efficiency')?.si).toBeCloseTo(1.3, SEVEN);
+    expect(extractFigures('It puts out 30 % more than it takes in.').find((f) => f.kind === 'efficiency')?.si).toBeCloseTo(1.3, 9);
   });
 });
 
 test("an auxiliary load beside a plant that lives on no outside flow is still its input: 'the magnet generator gives 3 kW while its controller draws only 50 W' (invented test data)", () => {
   const text = 'The magnet generator gives 3 kW while its controller draws only 50 W.';
   // 3000 / 50 = 60 (first law; node).
-  expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(60, SEVEN);
+  expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(60, 9);
 });
 
 describe("a share of a mass just given said in words, and a CHP unit's heating water (invented test data)", () => {

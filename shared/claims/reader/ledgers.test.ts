@@ -1,0 +1,62 @@
+/**
+ * Ledgers kept over time: a register's two readings are one figure, what it moved by; an energy per
+ * mile is a rate of use. Conversions: 1 kWh = 3.6 MJ and 1 h = 3600 s (exact; BIPM SI Brochure, 9th
+ * ed., Table 8). Every text here is invented test data.
+ */
+import { runClaimChecks } from '../plan';
+import { extractFigures } from '../reader';
+import { expectWellFormed } from './test-support';
+
+const KWH = 3.6e6;
+
+describe("a register's two readings are what it moved by", () => {
+  test("'the meter read 10,412 kWh on 1 March and 10,874 kWh on 31 March'", () => {
+    const text = "The electricity meter read 10,412 kWh on 1 March and 10,874 kWh on 31 March; the heat pump's heat meter showed 1,520 kWh delivered over the same month.";
+    const f = extractFigures(text);
+    expectWellFormed(text, f);
+    const used = f.find((x) => x.kind === 'energy' && x.derived);
+    // 10,874 − 10,412 = 462 kWh.
+    expect(used?.si).toBe(462 * KWH);
+    expect(used?.role).toBe('in');
+    expect(f.filter((x) => x.kind === 'energy' && x.role === 'aside').map((x) => x.si / KWH)).toEqual([10412, 10874]);
+  });
+
+  test("a bare first reading before an arrow takes the second's unit, and the writer's own difference is kept: '88,240 -> 89,770 kWh (1,530 kWh)'", () => {
+    const text = 'Hour meter 4,118.0 -> 4,236.5 h. Output kWh meter on the board: 88,240 -> 89,770 kWh (1,530 kWh). Fuel energy in = 4,079 kWh.';
+    const f = extractFigures(text);
+    expectWellFormed(text, f);
+    // 4,236.5 − 4,118.0 = 118.5 h = 426,600 s.
+    expect(f.find((x) => x.kind === 'duration' && x.derived)?.si).toBeCloseTo(118.5 * 3600, 6);
+    expect(f.filter((x) => x.kind === 'energy' && x.role !== 'aside').map((x) => [x.role, x.si / KWH])).toEqual([
+      ['out', 1530],
+      ['in', 4079],
+    ]);
+    // 1,530 / 4,079 = 0.375092 (first law; node): no more out than in.
+    const r = runClaimChecks(f, { text });
+    expect(r.checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1530 / 4079, 9);
+  });
+
+  test("the register's name gives the side: a heat meter counts what comes out, a sub-meter what goes in", () => {
+    const text = 'Heat meter: 21,406 kWh on 1 Jan 00:00, 23,248 kWh on 1 Feb 00:00 -> 1,842 kWh of heat.\nElectricity sub-meter: 6,877 -> 7,389 kWh -> 512 kWh. Heat pump flow 40 °C, outdoor average 3 °C.';
+    const f = extractFigures(text);
+    expectWellFormed(text, f);
+    expect(f.filter((x) => x.kind === 'energy' && x.role !== 'aside').map((x) => [x.role, x.si / KWH])).toEqual([
+      ['out', 1842],
+      ['in', 512],
+    ]);
+    // COP 1842/512 = 3.59766 against the Carnot COP 313.15/37 = 8.46351: 0.425078 (node).
+    const carnot = runClaimChecks(f, { text }).checks.find((c) => c.check === 'carnot');
+    expect(carnot?.finding).toBe('consistent');
+    expect(carnot?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(1842 / 512 / (313.15 / 37), 6);
+  });
+
+  test('two figures of like size are no pair of readings', () => {
+    const f = extractFigures('This winter the heat pump used 2,900 kWh and the heat meter says it delivered 10,150 kWh.');
+    expect(f.some((x) => x.kind === 'energy' && x.derived?.includes('register'))).toBe(false);
+  });
+});
+
+test("an energy per mile is a rate of use, not the run's energy: 'Energy per mile from the socket: 0.149 kWh'", () => {
+  const f = extractFigures('Depot charger log: 61.4 kWh over four sessions. Energy per mile from the socket: 0.149 kWh.');
+  expect(f.find((x) => x.si === 0.149 * KWH)?.role).toBe('aside');
+});
