@@ -5,7 +5,7 @@
  * hedges read (roles.ts, ranges-hedges.ts), multiples in words ("twice the energy it consumes", "half
  * the speed of light") added; then the relations (comparisons.ts, relations.ts) and the SI values.
  */
-import { asidePerDistance, meterReadings } from './ledgers';
+import { asideChanges, asidePerDistance, meterReadings, restatedEnergies } from './ledgers';
 import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
 import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
@@ -533,7 +533,9 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   rolesFromLineLabels(text, drafts);
   meterReadings(text, drafts);
   asidePerDistance(text, drafts);
+  asideChanges(text, drafts);
   relate(text, drafts);
+  restatedEnergies(text, drafts);
   asideOtherTopics(text, drafts);
   asideWorkedBounds(text, drafts);
   asideStatedBounds(bounds);

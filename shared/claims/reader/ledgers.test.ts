@@ -60,3 +60,25 @@ test("an energy per mile is a rate of use, not the run's energy: 'Energy per mil
   const f = extractFigures('Depot charger log: 61.4 kWh over four sessions. Energy per mile from the socket: 0.149 kWh.');
   expect(f.find((x) => x.si === 0.149 * KWH)?.role).toBe('aside');
 });
+
+test("a power said as the change of one just given is no side of its own: 'RTG output 212 W, down 0.8 W since launch'", () => {
+  const text = 'Power: RTG output 212 W, down 0.8 W since launch. Data downlinked this week: 1.9 Gbit.';
+  const f = extractFigures(text);
+  expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+    ['out', 212],
+    ['aside', 0.8],
+  ]);
+  expect(runClaimChecks(f, { text }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+});
+
+test("an energy worked out from a power and a time, read on the other side, is the same flow: 'beam power at the dump 45 kW, so about 345 kWh into the dump'", () => {
+  const text = 'Beam on for 7 h 40 min of the 8 h shift. Average beam power at the dump 45 kW, so about 345 kWh into the dump this shift.';
+  const f = extractFigures(text);
+  // 45 kW × 7 h 40 min = 345 kWh.
+  expect(f.find((x) => x.kind === 'energy' && !x.derived && x.si === 345 * KWH)?.role).toBe('aside');
+  expect(runClaimChecks(f, { text }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+});
+
+test("what is sent on to a load is an output: '1.35 kW going out to the pump'", () => {
+  expect(extractFigures('The inverter display said 1.35 kW going out to the pump.').find((x) => x.kind === 'power')?.role).toBe('out');
+});

@@ -109,3 +109,48 @@ export function asidePerDistance(text: string, drafts: Draft[]): void {
     if (PER_DISTANCE_LABEL_RE.test(line) || PER_DISTANCE_AFTER_RE.test(text.slice(d.end, d.end + 30))) d.role = 'aside';
   }
 }
+
+/** Before a change of a figure just given: "down 0.8 W since launch", "up by 12 kWh", "fell by 3 W", "a drop of 5 W". */
+const CHANGE_BEFORE_RE =
+  /(?<!\p{L})(?:(?:down|up)(?:[^\S\n]+by)?|(?:fell|falls?|falling|dropped|drops?|dropping|declined|declines?|decreased|decreases?|increased|increases?|rose|rises?|rising|grew|grows?|slipped|climbed|degraded|lost|gained)[^\S\n]+(?:by[^\S\n]+)?(?:(?:only|just|about|some|roughly|a[^\S\n]+further)[^\S\n]+)?|(?:a|an)[^\S\n]+(?:drop|fall|decline|decrease|loss|increase|rise|gain|change)[^\S\n]+of)[^\S\n]*$/iu;
+/** After it: "… since launch", "… on last month", "… from last year", "… over the year". */
+const CHANGE_AFTER_RE = /^[^\S\n]*(?:since|on[^\S\n]+(?:last|the[^\S\n]+previous)|from[^\S\n]+(?:last|the[^\S\n]+previous|a[^\S\n]+year)|compared[^\S\n]+(?:with|to)|year[- ]on[- ]year|over[^\S\n]+the[^\S\n]+(?:year|month|mission)|a[^\S\n]+year)(?!\p{L})/iu;
+
+/**
+ * A power or an energy said as the change of one just given ("RTG output 212 W, down 0.8 W since
+ * launch"): no side of its own.
+ */
+export function asideChanges(text: string, drafts: Draft[]): void {
+  for (let i = 1; i < drafts.length; i++) {
+    const d = drafts[i];
+    if ((d.kind !== 'power' && d.kind !== 'energy') || d.derived || d.role === 'aside') continue;
+    const before = text.slice(Math.max(0, d.start - 30), d.start);
+    if (!CHANGE_BEFORE_RE.test(before)) continue;
+    // (The figure it changes is said just before, of the same kind: "212 W, down 0.8 W".)
+    const prev = drafts[i - 1];
+    const joined = prev.kind === d.kind && d.start - prev.end < 40 && !/[.;!?\n]/u.test(text.slice(prev.end, d.start));
+    if (joined || CHANGE_AFTER_RE.test(text.slice(d.end, d.end + 30))) d.role = 'aside';
+  }
+}
+
+/** Before an energy worked out from a power just given: "so about", "that is", "i.e.", "which makes". */
+const WORKED_OUT_BEFORE_RE = /(?<!\p{L})(?:so|that(?:'s|’s|[^\S\n]+is)|i\.e\.|which[^\S\n]+(?:is|makes|gives|comes[^\S\n]+to)|making|giving|or)[^\S\n]+(?:(?:about|around|roughly|some|nearly|almost|just[^\S\n]+(?:over|under)|a[^\S\n]+total[^\S\n]+of)[^\S\n]+)?$/iu;
+
+/**
+ * "Average beam power at the dump 45 kW, so about 345 kWh into the dump this shift": an energy the
+ * writer works out from a power and a time the text gives (within 3 %) is that power's flow again: read
+ * on the other side, it is set aside rather than counted as a second flow against the first.
+ */
+export function restatedEnergies(text: string, drafts: Draft[]): void {
+  const durations = drafts.filter((d) => d.kind === 'duration' && d.role !== 'aside').map(siOf).filter((t): t is number => t !== null && t > 0);
+  for (const e of drafts) {
+    if (e.kind !== 'energy' || e.derived || !WORKED_OUT_BEFORE_RE.test(text.slice(Math.max(0, e.start - 25), e.start))) continue;
+    const j = siOf(e);
+    if (j === null || j <= 0) continue;
+    const p = [...drafts].reverse().find((d) => d.kind === 'power' && !d.derived && d.end <= e.start && e.start - d.end < 120 && (d.role === 'in' || d.role === 'out'));
+    const w = p && siOf(p);
+    if (!p || !w || !durations.some((t) => Math.abs(w * t - j) <= 0.03 * j)) continue;
+    // (Read on the other side from the power it restates, it is the same flow counted twice: set aside.)
+    if ((e.role === 'in' || e.role === 'out') && e.role !== p.role) e.role = 'aside';
+  }
+}
