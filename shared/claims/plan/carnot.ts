@@ -145,7 +145,9 @@ function engineRatio(b: Basis): Figure | undefined {
   if (!s.heatEngine || temps.length < 2 || !heatIn || !workOut || heatIn.kind !== workOut.kind || !(heatIn.si > 0) || heatIn.end === null) return undefined;
   // (The input must be heat: "of waste heat", "of heat", BTU, fuel; or sunlight brought to its hot side: "of
   // concentrated sunlight on the receiver".)
-  if (!/^[^.;!?\n]{0,25}?(?<!\p{L})(?:heat|thermal|fuel|steam|sunlight|solar (?:heat|power|radiation|energy))(?!\p{L})/iu.test(text.slice(heatIn.end, heatIn.end + 40)) && !/BTU/u.test(heatIn.text)) return undefined;
+  // (Or said before it, as a station's log labels it: "heat released in the boiler 21.4 GWh".)
+  const heatBefore = heatIn.start !== null && /(?<!\p{L})(?:heat|thermal (?:input|energy|power)|fuel(?: energy| input)?)(?:[^\S\n]+(?:released|liberated|supplied|input|raised)(?:[^\S\n]+(?:in|by|to|from)[^\S\n]+(?:the[^\S\n]+)?[\p{L}-]+)?)?[^\S\n]*[:=]?[^\S\n]*$/iu.test(text.slice(Math.max(0, heatIn.start - 45), heatIn.start));
+  if (!heatBefore && !/^[^.;!?\n]{0,25}?(?<!\p{L})(?:heat|thermal|fuel|steam|sunlight|solar (?:heat|power|radiation|energy))(?!\p{L})/iu.test(text.slice(heatIn.end, heatIn.end + 40)) && !/BTU/u.test(heatIn.text)) return undefined;
   return outOverIn(workOut, heatIn, 'efficiency', null, 'efficiency = work out / heat in');
 }
 

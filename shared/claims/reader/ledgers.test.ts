@@ -82,3 +82,13 @@ test("an energy worked out from a power and a time, read on the other side, is t
 test("what is sent on to a load is an output: '1.35 kW going out to the pump'", () => {
   expect(extractFigures('The inverter display said 1.35 kW going out to the pump.').find((x) => x.kind === 'power')?.role).toBe('out');
 });
+
+test("a station's weekly return: 'heat released in the boiler' is the engine's input, checked against Carnot", () => {
+  const text = 'Weekly return, unit 3 (coal): heat released in the boiler 18.0 GWh; electricity sent out 6.6 GWh; main steam 540 °C; condenser cooling water 18 °C.';
+  const f = extractFigures(text);
+  expect(f.filter((x) => x.kind === 'energy').map((x) => x.role)).toEqual(['in', 'out']);
+  const carnot = runClaimChecks(f, { text }).checks.find((c) => c.check === 'carnot');
+  // η = 6.6/18.0 = 0.366667; Carnot 1 − 291.15/813.15 = 0.641948; ratio 0.571179 (node).
+  expect(carnot?.finding).toBe('consistent');
+  expect(carnot?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(6.6 / 18 / (1 - 291.15 / 813.15), 9);
+});

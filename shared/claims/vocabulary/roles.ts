@@ -48,6 +48,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:received|receives|receiving|intercepted|intercepts) (?:[\\w-]+ ){0,2}?(?:solar |sun |incident )?(?:energy|radiation|irradiation|sunlight|insolation|light)(?: [\\w-]+){0,4}? (?:totalling|totaling|amounting to|of)',
       // A worked line: "in = 2 kW × 2400 s = 4.8 MJ".
       '(?<![\\w-])in ?=',
+      // "heat released in the boiler 21.4 GWh": the heat a station's boiler or a reactor's core gives its steam is the engine's input.
+      '(?:heat|energy) (?:released|liberated|generated|produced|supplied|raised) (?:in|by|from) (?:the |its )?(?:boilers?|furnaces?|burners?|combustion(?: chamber)?|reactor(?: core)?|core|fire ?box)(?:[^\\S\\n]*[:=])?',
       // "the heat supplied to the engine was 250 W": what is supplied to the machine is its input.
       '(?:heat|power|energy|electricity|fuel|current|work) (?:supplied|fed|given) (?:in)?to (?:the|its|a|an) (?:[\\w-]+ ){0,2}?(?:engines?|motors?|devices?|machines?|heaters?|converters?|modules?|cells?|reactors?|thrusters?|coils?|generators?|prototypes?|rigs?)(?: (?:was|is|were|of|came to|amounted to|totall?ed))?',
     ],
