@@ -16,12 +16,12 @@ const ASIDE = '(?:(?:[^\\S\\n]+(?:over|during|across|for|in|at)[^\\S\\n]+(?:the|
 const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|)»”"'’]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
 /** Between a COP and its value: the mode and whose it is ("COP in cooling of", "heating COP of the BW-8 is"). */
 const COP_OWNER = '(?:[^\\S\\n]+(?:in|for|when)[^\\S\\n]+(?:heating|cooling)(?:[^\\S\\n]+mode)?)?(?:[^\\S\\n]+(?:of|for)[^\\S\\n]+(?:the|this|our|its|each|every|a|an)[^\\S\\n]+(?:[\\p{L}\\p{N}-]+[^\\S\\n]+){0,2}?[\\p{L}\\p{N}][\\p{L}\\p{N}-]*(?=[^\\S\\n]+(?:is|was|were|of|at|lay|lies|sits|sat|stands|stood|ranged|ranges|varied|varies|came|comes|=|:)))?';
-const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${COP_OWNER}${ASIDE}(?:[^\\S\\n]+at)?${CONNECT}$`, 'u');
+const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${COP_OWNER}${ASIDE}(?:[^\\S\\n]+at)?${CONNECT}$`, 'u');
 /** An energy efficiency ratio (EER or SEER, in BTU/h of cooling per watt): a cooling COP × 3.412. */
 const EER_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?EER|energy efficiency ratio)(?:[^\\S\\n]*\\([^)]{0,20}\\))?${CONNECT}$`, 'u');
 /** 1 BTU_IT/h = 0.293 071 1 W (NIST SP 811, Appendix B.8). */
 const BTU_PER_H_IN_W = 0.29307107;
-const COP_WORDS_BEFORE_RE = new RegExp(`(?<!\\p{L})coefficients?[\\s-]+of[\\s-]+performance(?:[^\\S\\n]*\\(COP\\))?${COP_OWNER}${ASIDE}${CONNECT}$`, 'iu');
+const COP_WORDS_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:(?:seasonal[\\s-]+)?coefficients?[\\s-]+of[\\s-]+performance(?:[^\\S\\n]*\\(S?COP\\))?|seasonal[\\s-]+performance[\\s-]+factor(?:[^\\S\\n]*\\(SPF\\))?)${COP_OWNER}${ASIDE}${CONNECT}$`, 'iu');
 /** A worked expression between a symbol and its result: "η = 3.1/172 = 0.018". */
 const EXPRESSION = '(?:[^\\S\\n]*(?:[=≈]|(?:is|was)(?:[^\\S\\n]+(?:therefore|then|thus|so|hence))?)[^\\S\\n]*[\\d.,]+(?:[^\\S\\n]*[/×*÷][^\\S\\n]*[\\d.,]+)+[^\\S\\n]*,?)?';
 const EFFICIENCY_BARE_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:efficienc(?:y|ies)|η(?:_?(?:th|thermal|c|Carnot))?|eta(?:_?(?:th|thermal))?)(?!\\p{L})${ASIDE}${EXPRESSION}${CONNECT}$`, 'iu');

@@ -1748,3 +1748,23 @@ describe("a share of a mass just given said in words, and a CHP unit's heating w
     expect(f.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['hot', 'cold']);
   });
 });
+
+describe("a seasonal COP in the trade's words, and a store charged and drawn from (invented test data)", () => {
+  test.each([
+    ['With 5 °C brine and 45 °C flow it gives an SCOP of 4.1.', 4.1],
+    ['The seasonal performance factor was 3.2 with a 50 °C flow and 2 °C air.', 3.2],
+    ['Brine 0 °C, flow 35 °C: SCOP 4,6 on the label.', 4.6],
+  ])('%s', (text, cop) => {
+    expect(extractFigures(text).find((f) => f.kind === 'cop')?.si).toBe(cop);
+  });
+  test("'SPF 30' of a sunscreen is no COP", () => {
+    expect(extractFigures('SPF 30 sunscreen for the roof crew.').some((f) => f.kind === 'cop')).toBe(false);
+  });
+  test("'charge it with 15 kWh and you draw 13.5 kWh': in, then out", () => {
+    const text = 'Charge it with 15 kWh and you draw 13.5 kWh.';
+    const f = extractFigures(text);
+    expect(f.map((x) => x.role)).toEqual(['in', 'out']);
+    // 13.5 / 15 = 0.9 (first law; node).
+    expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.9, 9);
+  });
+});
