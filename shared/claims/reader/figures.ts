@@ -12,7 +12,7 @@ import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '.
 import { asideStatedBounds, statedBound } from './bounds';
 import { comparedPercent, relate } from './comparisons';
 import { BEFORE_WINDOW, BURNER_RE, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
-import { asideApparentSpeeds, asideIdealDeltaV, asideOtherTopics, asideSignals, asideThresholds, asideWorkedBounds, rolesFromLineLabels } from './topics';
+import { asideApparentSpeeds, asideIdealDeltaV, asideOtherTopics, asideSignals, asideThresholds, asideWorkedBounds, rolesFromLineLabels, rolesFromWordLabels } from './topics';
 import { insertAfter, siOf, typedSi, type Draft } from './draft';
 import { G0 } from '../../checks/constants';
 import { bareKind, GAIN_PER_UNIT_RE, PER_UNIT_QUANTITY, ISP_AFTER_RE, ISP_BEFORE_RE, MULTIPLE_VALUE, MULTIPLE_WORD_RE, readPercent, TEMPERATURE_CONTEXT_RE } from './kinds';
@@ -535,6 +535,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   asidePerDistance(text, drafts);
   asideChanges(text, drafts);
   relate(text, drafts);
+  rolesFromWordLabels(text, drafts);
   restatedEnergies(text, drafts);
   asideOtherTopics(text, drafts);
   asideWorkedBounds(text, drafts);

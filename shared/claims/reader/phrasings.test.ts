@@ -1768,3 +1768,15 @@ describe("a seasonal COP in the trade's words, and a store charged and drawn fro
     expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.9, 9);
   });
 });
+
+describe('word labels the writer puts on a side (invented test data)', () => {
+  const overUnity = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si;
+  test("a sentence led by 'Output:' is what comes out, whatever its load's verb", () => {
+    // 48 V × 0.9 A = 43.2 W out of 12 V × 2.1 A = 25.2 W in: 1.714286 (node).
+    expect(overUnity('Input: 2.1 A at 12 V from the battery. Output: the lamp bank runs at 48 V and pulls 0.9 A.')).toBeCloseTo(43.2 / 25.2, 9);
+  });
+  test("a worked product after 'input' or 'output' is that side's power", () => {
+    // 228 W / 249.6 W = 0.913462 (node).
+    expect(overUnity('Bench check: input 48 V × 5.2 A = 249.6 W, output 12 V × 19 A = 228 W.')).toBeCloseTo(228 / 249.6, 9);
+  });
+});

@@ -235,6 +235,37 @@ export function rolesFromLineLabels(text: string, drafts: Draft[]): void {
   }
 }
 
+/** A sentence led by a word label: "Input: 2.1 A at 12 V from the battery.", "Output: the lamp bank runs at 48 V and pulls 0.9 A." */
+const SENTENCE_LABEL_RE = /(?:^|[.!?][^\S\n]+|\n)[^\S\n]*[-•*]?[^\S\n]*(input|output)(?:[^\S\n]+(?:power|side|energy))?[^\S\n]*:/giu;
+/** A label before a worked product: "input 48 V × 5.2 A = 249.6 W". */
+const PRODUCT_LABEL_RE =
+  /(?<!\p{L})(input|output|in|out)(?:[^\S\n]+(?:power|side))?[^\S\n]*[:=]?[^\S\n]*(?=[\d.,]+[^\S\n]*(?:V|A|volts?|amps?)[^\S\n]*[×x*·][^\S\n]*[\d.,]+[^\S\n]*(?:V|A|volts?|amps?)[^\S\n]*=[^\S\n]*[\d.,]+[^\S\n]*[kMm]?W(?![\p{L}]))/giu;
+
+/**
+ * Word labels the writer puts on a side: a sentence that starts "Output:" is about what comes out, whatever
+ * verb its load takes ("Output: the lamp bank runs at 48 V and pulls 0.9 A"); a worked product after
+ * "input" or "output" ("input 48 V × 5.2 A = 249.6 W, output 12 V × 19 A = 228 W") is that side's power.
+ */
+export function rolesFromWordLabels(text: string, drafts: Draft[]): void {
+  const side = (w: string) => (/^in/iu.test(w) ? 'in' : 'out') as 'in' | 'out';
+  for (const m of text.matchAll(SENTENCE_LABEL_RE)) {
+    const from = m.index! + m[0].length;
+    const stop = /[.!?](?:[^\S\n]|$)|\n/u.exec(text.slice(from));
+    const to = stop ? from + stop.index : text.length;
+    const own = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== 'aside' && d.start >= from && d.end <= to + 1);
+    const values = new Set(own.map((d) => siOf(d)));
+    if (own.length > 0 && values.size === 1) for (const d of own) d.role = side(m[1]);
+  }
+  for (const m of text.matchAll(PRODUCT_LABEL_RE)) {
+    const from = m.index! + m[0].length;
+    const eq = text.indexOf('=', from);
+    const result = drafts.find((d) => d.kind === 'power' && d.start > eq && d.start - eq < 6);
+    if (!result || result.role === 'aside') continue;
+    const v = siOf(result);
+    for (const d of drafts) if (d.kind === 'power' && d.start >= from && d.end <= result.end && siOf(d) === v) d.role = side(m[1]);
+  }
+}
+
 /**
  * "OVER 100% EFFICIENT SOLAR???", "efficiency above 100 % was the classic sign of a perpetual motion claim":
  * 100 % said as a threshold passed is no figure of the device — how far past it is not said — and is set
