@@ -119,6 +119,10 @@ const MOVES_HEAT_RE = /(?<!\p{L})(?:mov|pump|shift|remov|extract|transferr?|lift
  * names a heat pump; a cooling COP where it speaks of heat moved and the paragraph names a fridge or a
  * cooler (and no heat pump).
  */
+/** Heat drawn out of a cold space: "pulls heat out of the freezer", "removes heat from the cold box". */
+const HEAT_OUT_OF_COLD_RE =
+  /(?<!\p{L})(?:pulls?|pulling|draws?|drawing|removes?|removing|extracts?|extracting|takes?|taking|pumps?|pumping|moves?|moving)[^\S\n]+heat[^\S\n]+(?:out[^\S\n]+of|from)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?[^.;!?\n]{0,20}?(?:freezer|fridge|refrigerator|cold|chilled|compartment|cabinet|box|inside|interior|food)(?!\p{L})/iu;
+
 function gainAsCop(text: string, start: number, end: number): { role: 'heating' | 'cooling'; assumption: string } | null {
   const sentence = sentenceAround(text, start, end);
   const heating = { role: 'heating' as const, assumption: "A heat pump's heat out as a multiple of its work in: read as a heating COP." };
@@ -134,6 +138,9 @@ function gainAsCop(text: string, start: number, end: number): { role: 'heating' 
   const cooler = COOLING_MACHINE_RE.test(paragraph) || /(?<!\p{L})cool(?:s|ed|ing|er|ers)?(?!\p{L})/iu.test(paragraph);
   if (pump && !cooler) return heating;
   if (cooler && !pump) return { role: 'cooling', assumption: 'The heat a cooling machine moves as a multiple of its work in: read as a cooling COP.' };
+  // (Both named — "a fridge-freezer is a heat pump pointed the other way" — its own sentence says which:
+  // "pulls heat out of the −18 °C freezer at about 1.8 times the rate it uses electricity".)
+  if (pump && cooler && HEAT_OUT_OF_COLD_RE.test(sentence)) return { role: 'cooling', assumption: 'The heat drawn out of the cold space as a multiple of the work in: read as a cooling COP.' };
   // (Heat moved by a machine the text does not name: not energy made, so not an efficiency either.)
   return { role: 'heating', assumption: 'Heat moved as a multiple of the work in, by a machine the text does not name: read as a heating COP.' };
 }

@@ -1780,3 +1780,35 @@ describe('word labels the writer puts on a side (invented test data)', () => {
     expect(overUnity('Bench check: input 48 V × 5.2 A = 249.6 W, output 12 V × 19 A = 228 W.')).toBeCloseTo(228 / 249.6, 9);
   });
 });
+
+describe('relative figures: multiples of the heat a machine draws, shares that reach the grid, a propellant share and a mass ratio (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  test("'three times the heat it draws' of a heat pump is a heating COP of 3", () => {
+    const f = extractFigures('Our heat pump gives you three times the heat it draws.');
+    expect(f.map((x) => [x.kind, x.role, x.si])).toEqual([['cop', 'heating', 3]]);
+  });
+  test("'pulls heat out of the −18 °C freezer at about 1.8 times the rate it uses electricity' is a cooling COP", () => {
+    const text = 'A fridge-freezer is a heat pump pointed the other way. Ours pulls heat out of the −18 °C freezer at about 1.8 times the rate it uses electricity and dumps it into a 25 °C kitchen.';
+    const carnot = run(text).checks.find((c) => c.check === 'carnot');
+    // Carnot cooling COP 255.15/43 = 5.933721; 1.8/5.933721 = 0.303351 (node).
+    expect(carnot?.outputs.find((o) => o.name === 'cop_cooling_ratio')?.si).toBeCloseTo(1.8 / (255.15 / 43), 9);
+  });
+  test("'42 % of the coal's energy reaches the grid' is the station's efficiency", () => {
+    const carnot = run("Steam at 565 °C, condenser at 35 °C, and 42 % of the coal's energy reaches the grid.").checks.find((c) => c.check === 'carnot');
+    // 1 − 308.15/838.15 = 0.632345; 0.42/0.632345 = 0.664194 (node).
+    expect(carnot?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(0.42 / (1 - 308.15 / 838.15), 9);
+  });
+  test("'with propellant making up only a tenth of the wet mass' gives the propellant of the craft's mass", () => {
+    const r = run('Our module adds 12 km/s to a 6 kg cubesat, with propellant making up only a tenth of the wet mass. Isp 300 s.');
+    // Tsiolkovsky: 300 × 9.80665 × ln(6/5.4) = 309.97 m/s; 12000/309.97 = 38.713 (node).
+    expect(r.checks.find((c) => c.check === 'rocket-equation')?.outputs.find((o) => o.name === 'dv_ratio')?.si).toBeCloseTo(12000 / (300 * 9.80665 * Math.log(6 / 5.4)), 6);
+  });
+  test("'Dry mass 1,150 kg; … a mass ratio of 3' gives the wet mass, but 'Mass ratio 4.5 / 3.2' is a worked step", () => {
+    const f = extractFigures('Dry mass 1,150 kg; we load to a mass ratio of 3. Exhaust velocity 3.1 km/s.');
+    expect(f.filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([
+      ['dry', 1150],
+      ['wet', 3450],
+    ]);
+    expect(extractFigures('Liftoff 4.5 kg, burnout 3.2 kg. Mass ratio 4.5 / 3.2, about 1.41.').filter((x) => x.kind === 'mass' && x.derived?.includes('mass ratio'))).toEqual([]);
+  });
+});

@@ -18,6 +18,11 @@ const PROPELLANT_FRACTION_RE =
 /** A share said in words or as a percentage, of a mass just given, that is propellant: "four-fifths of that is propellant". */
 const SHARE_OF_THAT_PROPELLANT_RE =
   /(?<![\p{L}\d.])(?:(a|an|one|two|three|four|five|six|seven|eight|nine)[- ](half|third|quarter|fifth|sixth|seventh|eighth|ninth|tenth)s?|(\d+(?:\.\d+)?)[^\S\n]*(?:%|per[^\S\n]?cent))[^\S\n]+of[^\S\n]+(?:that|it|this|which|(?:the|its)[^\S\n]+(?:(?:whole|total|launch|lift-?off|pad|gross)[^\S\n]+)?(?:mass|weight|total))[^\S\n]+(?:is|was|being|are)[^\S\n]+(?:propellants?|fuel|reaction[^\S\n]+mass)(?!\p{L})/iu;
+/** The same share said of the propellant first: "with propellant making up only a tenth of the wet mass". */
+const PROPELLANT_MAKING_UP_RE =
+  /(?<!\p{L})propellants?(?:[^\S\n]+mass)?[^\S\n]+(?:making[^\S\n]+up|makes?[^\S\n]+up|made[^\S\n]+up|is|being|accounts?[^\S\n]+for|accounting[^\S\n]+for|forms?|forming|comprises?)[^\S\n]+(?:(?:only|just|about|roughly|some|nearly|almost)[^\S\n]+)?(?:(a|an|one|two|three|four|five|six|seven|eight|nine)[- ](half|third|quarter|fifth|sixth|seventh|eighth|ninth|tenth)s?)()[^\S\n]+of[^\S\n]+(?:the|its|that)[^\S\n]+(?:(?:wet|total|launch|lift-?off|gross|fuell?ed|fueled|whole)[^\S\n]+)?(?:mass|weight)(?!\p{L})/iu;
+/** A rocket's mass ratio, wet over dry: "a mass ratio of 3", "mass ratio (wet/dry) = 4.2". */
+const MASS_RATIO_RE = /(?<!\p{L})mass[^\S\n]+ratio(?:[^\S\n]*\((?:wet|m0|full)[^\S\n]*\/[^\S\n]*(?:dry|mf|empty)\))?(?:[^\S\n]+(?:of|is|was|at))?[^\S\n]*[:=]?[^\S\n]*(?:(?:about|around|roughly|some|nearly|just over|just under|~|≈)[^\S\n]*)?(\d+(?:\.\d+)?)(?![\d.,]*[^\S\n]*(?:%|kg|t\b|g\b|lb|\/|÷|:))/iu;
 const COUNT_WORD: Record<string, number> = { a: 1, an: 1, one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9 };
 const PART_WORD: Record<string, number> = { half: 2, third: 3, quarter: 4, fifth: 5, sixth: 6, seventh: 7, eighth: 8, ninth: 9, tenth: 10 };
 
@@ -355,7 +360,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   // "propellant is 90 % of the vehicle's mass", "90 % propellant by mass": the propellant from a fraction.
   const fraction = PROPELLANT_FRACTION_RE.exec(text);
   // "weighs 25 kg on the pad, and four-fifths of that is propellant": the share in words is no mass.
-  const shareOfThat = fraction ? null : SHARE_OF_THAT_PROPELLANT_RE.exec(text);
+  const shareOfThat = fraction ? null : (SHARE_OF_THAT_PROPELLANT_RE.exec(text) ?? PROPELLANT_MAKING_UP_RE.exec(text));
   if (shareOfThat) {
     for (let i = drafts.length - 1; i >= 0; i--) {
       const d = drafts[i];
@@ -406,7 +411,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   const whole = craftMasses.length === 1 ? craftMasses[0] : craftMasses.find((d) => d.role === null || d.role === 'wet');
   const shareWhole = shareOfThat ? [...craftMasses].reverse().find((d) => d.end <= shareOfThat.index && shareOfThat.index - d.end < 80) : undefined;
   if (shareOfThat && shareWhole && !craftMasses.some((d) => d !== shareWhole && d.role === 'propellant')) {
-    const p = shareOfThat[3] !== undefined ? Number(shareOfThat[3]) / 100 : COUNT_WORD[shareOfThat[1].toLowerCase()] / PART_WORD[shareOfThat[2].toLowerCase()];
+    const p = shareOfThat[3] ? Number(shareOfThat[3]) / 100 : COUNT_WORD[shareOfThat[1].toLowerCase()] / PART_WORD[shareOfThat[2].toLowerCase()];
     const m = siOf(shareWhole);
     if (p > 0 && p < 1 && m !== null) {
       shareWhole.role = 'wet';
@@ -432,6 +437,25 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
         quantity: typedSi(p * m, 'kg'),
         role: 'propellant',
         derived: `propellant = ${formatPrint(p * 100)} % of ${formatQuantity(m, 'kg')}`,
+      });
+    }
+  }
+
+  // "Dry mass 1,150 kg; we load to a mass ratio of 3": the other mass from the ratio (wet over dry).
+  const ratio = MASS_RATIO_RE.exec(text);
+  const sided = craftMasses.filter((d) => d.role === 'dry' || d.role === 'wet');
+  if (ratio && sided.length === 1 && !craftMasses.some((d) => d.role === 'propellant')) {
+    const r = Number(ratio[1]);
+    const m = siOf(sided[0]);
+    if (r > 1 && m !== null) {
+      const other = sided[0].role === 'dry' ? m * r : m / r;
+      drafts.splice(drafts.indexOf(sided[0]) + 1, 0, {
+        start: Math.min(sided[0].start, ratio.index),
+        end: Math.max(sided[0].end, ratio.index + ratio[0].length),
+        kind: 'mass',
+        quantity: typedSi(other, 'kg'),
+        role: sided[0].role === 'dry' ? 'wet' : 'dry',
+        derived: sided[0].role === 'dry' ? `wet mass = mass ratio ${formatPrint(r)} × ${formatQuantity(m, 'kg')}` : `dry mass = ${formatQuantity(m, 'kg')} / mass ratio ${formatPrint(r)}`,
       });
     }
   }
