@@ -101,6 +101,34 @@ function auxiliaryInput(text: string, inF: Figure, outF: Figure): boolean {
   return AUXILIARY_RE.test(local) && OUTSIDE_FLOW_RE.test(around + ' ' + sentenceAround(text, outF.start, outF.end ?? outF.start));
 }
 
+/** A harvester of an outside flow named beside an output: solar panels, an inverter, a wind turbine, a water wheel. */
+const HARVESTER_RE =
+  /(?<!\p{L})(?:solar|PV|photovoltaic|panels?|arrays?|inverters?|wind[- ]?turbines?|turbines?|windmills?|hydro\w*|water[- ]?wheels?|collectors?|tidal|wave)(?!\p{L})/iu;
+
+/**
+ * "the inverter counter went from 3,112 to 3,598 kWh. The house used 410 kWh from the grid": what a
+ * harvester of sunlight, wind or water gives, beside an input of something else (the house's import), is
+ * no ledger of one machine.
+ */
+function harvestedOut(text: string, inF: Figure, outF: Figure): boolean {
+  if (!text || inF.start === null || inF.end === null || outF.start === null || outF.end === null) return false;
+  const outNear = text.slice(Math.max(0, outF.start - 50), outF.end + 30);
+  const inSentence = sentenceAround(text, inF.start, inF.end);
+  return (
+    RENEWABLE_RE.test(text) &&
+    HARVESTER_RE.test(outNear) &&
+    HOUSEHOLD_IMPORT_RE.test(text.slice(Math.max(0, inF.start - 50), inF.end + 40)) &&
+    !HARVESTER_RE.test(text.slice(Math.max(0, inF.start - 40), inF.end + 30)) &&
+    !sameSentence(text, inF, outF) &&
+    !HARVESTER_RE.test(inSentence)
+  );
+}
+/** Sunlight, wind or water harvested, named anywhere in the text. */
+const RENEWABLE_RE = /(?<!\p{L})(?:solar|PV|photovoltaic|sun(?:light|shine)?|wind[- ]?turbines?|windmills?|hydro\w*|water[- ]?wheels?|tidal|wave[- ]power)(?!\p{L})/iu;
+/** What a household takes from the grid: "the house used 410 kWh from the grid", "import 3.2 kWh". */
+const HOUSEHOLD_IMPORT_RE = /(?<!\p{L})(?:from[^\S\n]+the[^\S\n]+(?:grid|mains|network)|grid[^\S\n]+import|imports?|imported|the[^\S\n]+(?:house|home|household|building|farm|site)[^\S\n]+(?:used|uses|took|takes|drew|draws|consumed|consumes|needed|needs))(?!\p{L})/iu;
+const sameSentence = (text: string, a: Figure, b: Figure) => sentenceAround(text, a.start!, a.end!) === sentenceAround(text, b.start!, b.end!);
+
 /** An output said as a burst or a peak ("can deliver 2 MW for short periods"): no steady output over a run. */
 function saidInBursts(text: string, f: Figure): boolean {
   return f.start !== null && f.end !== null && !!text && BURST_RE.test(sentenceAround(text, f.start, f.end));
@@ -175,7 +203,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     // A store (a flywheel, a battery) gives out what it took in at any rate: its discharge power above its
     // charge power ("charged overnight at 20 kW … can release it at 250 kW") is no claim of more out than in.
     const storeRates = bothPower && !duration && ((STORE_RE.test(text) && energy.some((f) => f.role !== 'aside')) || phasesApart(text, inF, outF));
-    const auxIn = bothPower && !duration && auxiliaryInput(text, inF, outF);
+    const auxIn = (bothPower && !duration && auxiliaryInput(text, inF, outF)) || harvestedOut(text, inF, outF);
     if (auxIn) {
       needs.push(need('first-law', ['the power of the outside flow the plant converts (wind, sunlight, water, fuel)'], 'The input the text gives feeds only the plant’s own controls, fans or pumps, not what it converts.', [inF, outF]));
     } else if (storeRates) {

@@ -92,3 +92,22 @@ test("a station's weekly return: 'heat released in the boiler' is the engine's i
   expect(carnot?.finding).toBe('consistent');
   expect(carnot?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(6.6 / 18 / (1 - 291.15 / 813.15), 9);
 });
+
+describe('lawful ledgers that once read as more out than in', () => {
+  const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.some((c) => c.finding === 'breaks');
+  test.each([
+    'Solar log, June: the inverter counter went from 3,112 kWh to 3,598 kWh. The house used 410 kWh from the grid over the same month.',
+    'It ran nine days on a single 10 kWh charge, drawing an average of 45 W.',
+  ])('%s', (text) => {
+    expect(breaks(text)).toBe(false);
+  });
+  test("a register's two readings read as a range are what it moved by: 3,598 − 3,112 = 486 kWh", () => {
+    const f = extractFigures('Solar log, June: the inverter counter went from 3,112 kWh to 3,598 kWh.');
+    expect(f.map((x) => [x.role, x.si / KWH, x.upper])).toEqual([['out', 486, undefined]]);
+  });
+  test('a genuine claim on a store is still judged: a single 1 kWh charge powering a 100 W lamp for nine days', () => {
+    // 100 W × 9 × 86,400 s = 77.76 MJ out of 3.6 MJ: 21.6 (first law; node).
+    const text = 'The box ran nine days on a single 1 kWh charge while powering a 100 W lamp.';
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(21.6, 9);
+  });
+});

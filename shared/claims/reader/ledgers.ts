@@ -8,7 +8,7 @@
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import { FIGURE_SI_UNIT } from '../types';
-import { insertAfter, siOf, typedSi, type Draft } from './draft';
+import { insertAfter, siOf, typedSi, upperSiOf, type Draft } from './draft';
 
 /** A register named before the first reading: a meter, a counter, a reading, a totaliser. */
 const REGISTER_BEFORE_RE =
@@ -43,7 +43,7 @@ function readingPairs(text: string, drafts: Draft[]): Array<[Draft, Draft]> {
 }
 
 /** The register's name says which side it counts: a heat meter or a generation meter what comes out, an electricity sub-meter or an import meter what goes in. */
-const REGISTER_OUT_RE = /(?<!\p{L})(?:heat|output|generation|generated|export(?:ed)?|yield|sent[- ]out|delivered)(?:[^\S\n]+(?:kWh|energy))?[^\S\n]+(?:meter|counter|register|totali[sz]er)(?!\p{L})/iu;
+const REGISTER_OUT_RE = /(?<!\p{L})(?:heat|output|generation|generated|export(?:ed)?|yield|sent[- ]out|delivered|inverter|PV|solar)(?:[^\S\n]+(?:kWh|energy))?[^\S\n]+(?:meter|counter|register|totali[sz]er)(?!\p{L})/iu;
 const REGISTER_IN_RE = /(?<!\p{L})(?:(?:electricity|electric|import(?:ed)?|supply|grid|input|consumption)(?:[^\S\n]+(?:kWh|energy))?[^\S\n]+(?:sub-?)?(?:meter|counter|register)|sub-?meter)(?!\p{L})/iu;
 
 /** A bare first reading before an arrow, its unit said only after the second: "88,240 -> 89,770 kWh". */
@@ -66,7 +66,30 @@ function bareFirstReadings(text: string, drafts: Draft[]): void {
   }
 }
 
+/** Before a register's two readings read as one range: "the inverter counter went from", "meter: from". */
+const REGISTER_RANGE_BEFORE_RE =
+  /(?<!\p{L})(?:meters?|counters?|register|totali[sz]ers?|readings?|odometer|index|dial)(?!\p{L})[^.;!?\n\d]{0,30}?(?:went|moved|rose|climbed|ticked|ran|read|reads|reading|showed|shows|from|between)[^.;!?\n\d]{0,12}$/iu;
+
+/** "the inverter counter went from 3,112 kWh to 3,598 kWh": a register's two readings read as a range are what it moved by. */
+function registerRanges(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if ((d.kind !== 'energy' && d.kind !== 'duration') || d.derived || d.upper === undefined || d.role === 'aside') continue;
+    if (!REGISTER_RANGE_BEFORE_RE.test(text.slice(Math.max(0, d.start - 60), d.start))) continue;
+    const [x, y] = [siOf(d), upperSiOf(d)];
+    if (x === null || y === null || !(y > x) || !((y - x) / y < 0.5)) continue;
+    const unit = FIGURE_SI_UNIT[d.kind];
+    const label = text.slice(Math.max(0, d.start - 70), d.start);
+    const named = REGISTER_OUT_RE.test(label) ? 'out' : REGISTER_IN_RE.test(label) ? 'in' : null;
+    d.quantity = typedSi(y - x, unit);
+    d.upper = undefined;
+    d.hedge = undefined;
+    d.derived = `the register's two readings: ${formatQuantity(y, unit)} − ${formatQuantity(x, unit)} = ${formatPrint(y - x)} ${unit}`;
+    if (named && d.kind === 'energy') d.role = named;
+  }
+}
+
 export function meterReadings(text: string, drafts: Draft[]): void {
+  registerRanges(text, drafts);
   bareFirstReadings(text, drafts);
   for (const [a, b] of readingPairs(text, drafts)) {
     const [x, y] = [siOf(a)!, siOf(b)!];

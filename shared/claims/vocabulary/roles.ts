@@ -54,6 +54,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:heat|power|energy|electricity|fuel|current|work) (?:supplied|fed|given) (?:in)?to (?:the|its|a|an) (?:[\\w-]+ ){0,2}?(?:engines?|motors?|devices?|machines?|heaters?|converters?|modules?|cells?|reactors?|thrusters?|coils?|generators?|prototypes?|rigs?)(?: (?:was|is|were|of|came to|amounted to|totall?ed))?',
     ],
     after: [
+      // "ran nine days on a single 10 kWh charge": the store's charge is what the device had to run on.
+      '(?:charge|battery charge|full charge)(?= *(?:[,.;:)]|$|and|of|in|lasts?|lasted|runs?|ran|will|would|gives?|gave|is|was))',
       // "with 180 W of heat passing through it": the heat a thermoelectric module takes.
       'of heat (?:passing|flowing|going|moving) (?:through|across) (?:it|them|the (?:module|modules|TEG|device|element|junction))',
       'of (?:pedall?ing|cranking|muscle power|human power|human effort|effort|shaking|winding)', 
