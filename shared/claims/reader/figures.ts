@@ -123,6 +123,10 @@ const MOVES_HEAT_RE = /(?<!\p{L})(?:mov|pump|shift|remov|extract|transferr?|lift
 const HEAT_OUT_OF_COLD_RE =
   /(?<!\p{L})(?:pulls?|pulling|draws?|drawing|removes?|removing|extracts?|extracting|takes?|taking|pumps?|pumping|moves?|moving)[^\S\n]+heat[^\S\n]+(?:out[^\S\n]+of|from)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?[^.;!?\n]{0,20}?(?:freezer|fridge|refrigerator|cold|chilled|compartment|cabinet|box|inside|interior|food)(?!\p{L})/iu;
 
+/** Words that say a heater makes its heat from nothing or from its electricity alone: then a gain of heat is no COP. */
+const NO_AMBIENT_SOURCE_RE =
+  /(?<!\p{L})(?:over-?unity|free energy|self-?running|perpetual|zero-?point|vacuum energy|resistive|resistance (?:heater|element|wire)|heating elements?|no (?:heat[- ]pump|compressor|outdoor unit|refrigerant)|nothing to (?:pull|draw|take) heat from|without (?:any )?(?:outside|outdoor|ambient) (?:air|heat)|sealed box|from nothing|more energy than)(?!\p{L})/iu;
+
 function gainAsCop(text: string, start: number, end: number): { role: 'heating' | 'cooling'; assumption: string } | null {
   const sentence = sentenceAround(text, start, end);
   const heating = { role: 'heating' as const, assumption: "A heat pump's heat out as a multiple of its work in: read as a heating COP." };
@@ -130,6 +134,16 @@ function gainAsCop(text: string, start: number, end: number): { role: 'heating' 
   // ("For every kWh it draws, the HP-5 puts 3.4 kWh of heat into your home … 10 years on the compressor": heat
   // given by a machine with a compressor or named a heat pump anywhere in the text.)
   if (/^[^\S\n]*of[^\S\n]+(?:useful[^\S\n]+)?(?:heat|warmth)(?!\p{L})/iu.test(text.slice(end, end + 20)) && /(?<!\p{L})(?:compressors?|refrigerant)(?!\p{L})/iu.test(text.replace(/(?<!\p{L})(?:no|without|not an?|nor|never)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:compressors?|refrigerant(?:[^\S\n]+circuit)?)(?!\p{L})/giu, ' ')) && !COOLING_MACHINE_RE.test(text)) return heating;
+  // ("Each kWh of electricity gives 3 kWh of heat": heat out per unit of electricity, by a machine the text
+  // does not name and does not say makes its heat from nothing — a heat pump's figure as much as any.)
+  if (
+    /^[^\S\n]*(?:kWh|kW|W|J|MJ|units?|joules?|watts?)?[^\S\n]*of[^\S\n]+(?:useful[^\S\n]+)?(?:heat|warmth)(?!\p{L})/iu.test(text.slice(end, end + 25)) &&
+    /(?<!\p{L})(?:electricity|electric(?:al)?|kWh of power|you (?:buy|pay for))(?!\p{L})/iu.test(sentence) &&
+    !NO_AMBIENT_SOURCE_RE.test(text) &&
+    !COOLING_MACHINE_RE.test(paragraphAround(text, start, end)) &&
+    !/(?<!\p{L})(?:cool\w*|chill\w*|refrigerat\w*|freez\w*|remov\w*|out[^\S\n]+of)(?!\p{L})/iu.test(sentence)
+  )
+    return { role: 'heating', assumption: 'Heat out as a multiple of the electricity in, from a machine the text does not name: what a heat pump gives, read as a heating COP.' };
   // ("from a box with no outdoor unit and nothing to pull heat from": heat said not to be moved.)
   if (!MOVES_HEAT_RE.test(sentence.replace(NOT_MOVING_HEAT_RE, ' '))) return null;
   const paragraph = paragraphAround(text, start, end);

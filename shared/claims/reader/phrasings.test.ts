@@ -1190,9 +1190,9 @@ test('"produced 12.5 W of excess heat" is an excess over the input, not the whol
   ]);
 });
 
-test('"every watt you pay for turns into nearly two watts of warmth" is a gain, not a power of two watts (invented test data)', () => {
+test('"every watt you pay for turns into nearly two watts of warmth" is a gain (of heat over electricity: a heating COP), not a power of two watts (invented test data)', () => {
   expect(extractFigures('Every watt you pay for turns into nearly two watts of warmth. The box gives the rated input as 1.2 kW.').map((f) => [f.kind, f.si])).toEqual([
-    ['efficiency', 2],
+    ['cop', 2],
     ['power', 1200],
   ]);
 });
@@ -1542,6 +1542,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The hydro turbine delivers 1.2 MW; its control system draws 5 kW.',
     'Our micro-CHP produces 1 kW of electricity and 6 kW of heat while drawing 150 W for its controls and pump.',
     "With the kite up, the boat's generator gives 2 kW, while the crew's winch motor uses 200 W.",
+    'Each kWh of electricity gives 3 kWh of heat, so our bills fell by two thirds.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1811,4 +1812,11 @@ describe('relative figures: multiples of the heat a machine draws, shares that r
     ]);
     expect(extractFigures('Liftoff 4.5 kg, burnout 3.2 kg. Mass ratio 4.5 / 3.2, about 1.41.').filter((x) => x.kind === 'mass' && x.derived?.includes('mass ratio'))).toEqual([]);
   });
+});
+
+test("heat out per unit of electricity from an unnamed machine is a heating COP, unless the text says the heat is made from the electricity alone (invented test data)", () => {
+  expect(extractFigures('Each kWh of electricity gives 3 kWh of heat, so our bills fell by two thirds.').map((f) => [f.kind, f.role, f.si])).toEqual([['cop', 'heating', 3]]);
+  const text = 'Our resistive heater gives 3 kWh of heat for every kWh of electricity.';
+  // 3 kWh out of 1 kWh in: 3 (first law; node).
+  expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(3, 9);
 });
