@@ -151,6 +151,18 @@ function engineRatio(b: Basis): Figure | undefined {
   return outOverIn(workOut, heatIn, 'efficiency', null, 'efficiency = work out / heat in');
 }
 
+/** Words that say a heater makes its heat from its electricity alone, or from nothing. */
+const MADE_HEAT_RE =
+  /(?<!\p{L})(?:over-?unity|free energy|self-?running|perpetual|zero-?point|vacuum energy|resistive|resistance|heating elements?|immersion|kettle|cells?|palladium|nickel|deuterium|hydrogen|excess heat|anomalous|electroly\w+|water heaters?|boilers?|furnaces?|burn\w*|combust\w*|flames?|fuel|gas|diesel|petrol|wood|pellets?|electric (?:heaters?|fires?|radiators?)|(?:fan|convector|panel|bar|oil-filled|storage|space|infrared|patio) heaters?|no (?:heat[- ]pump|compressor|outdoor unit|refrigerant)|nothing to (?:pull|draw|take) heat from|sealed|from nothing|more energy than|plasma|cold fusion|LENR|reactor|magnet)(?!\p{L})/iu;
+
+/** Heat said of the output and electricity of the input: "12 kW of heat for 3 kW of electricity". */
+function unnamedHeatGain(text: string, inF: Figure | undefined, outF: Figure | undefined): boolean {
+  if (!text || !inF || !outF || inF.end === null || outF.end === null || outF.start === null || inF.start === null) return false;
+  const heatOut = /^[^\S\n]*of[^\S\n]+(?:useful[^\S\n]+)?(?:heat|warmth)(?!\p{L})/iu.test(text.slice(outF.end, outF.end + 20)) || /(?<!\p{L})heat(?:ing)?[^\S\n]+output[^\S\n]*[:=]?[^\S\n]*$/iu.test(text.slice(Math.max(0, outF.start - 20), outF.start));
+  const electricIn = /^[^\S\n]*(?:of[^\S\n]+)?(?:electricity|electric(?:al)?(?:[^\S\n]+(?:power|input|energy))?)(?!\p{L})/iu.test(text.slice(inF.end, inF.end + 25));
+  return heatOut && electricIn && !MADE_HEAT_RE.test(text);
+}
+
 export function planCarnot(b: Basis): HeatReading {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, temps } = b;
   // A stated efficiency, or one stated as a share of the Carnot efficiency of the stated temperatures.
@@ -186,7 +198,10 @@ export function planCarnot(b: Basis): HeatReading {
   // set, a circuit) with no word of heat: a heat pump named elsewhere is not theirs.
   const ownFigures = [pIn, pOut, eIn, eOut, ...ofKind(figures, 'efficiency').filter((f) => f.si > 1)].filter((f): f is Figure => f !== undefined && f.start !== null && f.end !== null);
   const elsewhere = ownFigures.length > 0 && ownFigures.every((f) => paragraphOfAnotherMachine(text, f.start!, f.end!) !== null);
-  const movesHeat = !elsewhere && (s.heatPump || cooling || heatFromSource || statedCop || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity));
+  // ("Rated 12 kW of heat for 3 kW of electricity": heat out and electricity in, from a machine the text does
+  // not name and does not say makes its heat from nothing — a heat pump's rating as much as any.)
+  const heatOutElectricIn = unnamedHeatGain(text, pIn ?? eIn, pOut ?? eOut) && !s.overUnity && !s.heatEngine;
+  const movesHeat = !elsewhere && (s.heatPump || cooling || heatFromSource || statedCop || heatOutElectricIn || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity));
   // ("Heating capacity 36,000 BTU/h … drawing 3.1 kW" of a mini-split: heat delivered, whatever cooling words the name has.)
   const outFigure = pOut ?? eOut;
   const outHeating = outFigure?.start != null && /(?<!\p{L})heating(?:[^\S\n]+(?:capacity|output|power|duty))?[^\S\n]*[:=]?[^\S\n]*(?:(?:of|is|was|about|up to)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, outFigure.start - 40), outFigure.start));

@@ -111,3 +111,27 @@ describe('lawful ledgers that once read as more out than in', () => {
     expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(21.6, 9);
   });
 });
+
+describe("a measurement's stated error widens the figures it measured", () => {
+  const overUnity = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  test("'1.1 kW out against 1 kW in, but the meter's error is ±15 %' is within the law at the favourable ends", () => {
+    const r = overUnity("We measured 1.1 kW out against 1 kW in, but the meter's error is ±15 %.");
+    // 1.1 × 0.85 = 0.935 kW out against 1 × 1.15 = 1.15 kW in: 0.813043 (node).
+    expect(r?.finding).toBe('consistent');
+    expect(r?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.935 / 1.15, 9);
+  });
+  test("'1.5 kW out against 1 kW in, accurate to ±2 %' still breaks it", () => {
+    // 1.5 × 0.98 = 1.47 against 1.02: 1.441176 (node).
+    expect(overUnity('We measured 1.5 kW out against 1 kW in, with meters accurate to ±2 %.')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.47 / 1.02, 9);
+  });
+});
+
+test("heat out and electricity in from a machine the text does not name wait for its temperatures: 'Rated 12 kW of heat for 3 kW of electricity'", () => {
+  const text = 'Rated 12 kW of heat for 3 kW of electricity: four times the output of the energy input.';
+  const r = runClaimChecks(extractFigures(text), { text });
+  expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  expect(r.needs.map((n) => n.check)).toContain('carnot');
+  // (A heater said to make its heat is judged: "an electric resistance water heater".)
+  const made = 'An electric resistance water heater gave 12 kW of heat for 3 kW of electricity.';
+  expect(runClaimChecks(extractFigures(made), { text: made }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+});

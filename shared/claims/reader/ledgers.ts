@@ -177,3 +177,28 @@ export function restatedEnergies(text: string, drafts: Draft[]): void {
     if ((e.role === 'in' || e.role === 'out') && e.role !== p.role) e.role = 'aside';
   }
 }
+
+/** A measurement's stated error as a percentage: "the meter's error is ±15 %", "accurate to ±5 %", "uncertainty of 10 %". */
+const STATED_ERROR_RE =
+  /(?<!\p{L})(?:errors?|uncertaint(?:y|ies)|accuracy|accurate|tolerance|precision|good)(?:[^\S\n]+(?:is|was|of|to|within|about|around|roughly|some|bars?|band))*[^\S\n]*[:=]?[^\S\n]*(?:±|\+\/-|\+-|plus[^\S\n]+or[^\S\n]+minus[^\S\n]+)[^\S\n]*(\d+(?:\.\d+)?)[^\S\n]*(?:%|per[^\S\n]?cent)/iu;
+
+/**
+ * "We measured 1.1 kW out against 1 kW in, but the meter's error is ±15 %": a stated error of the
+ * measurement widens each power and energy the text gives without a range of its own, so the check takes
+ * the end most favourable to the claim.
+ */
+export function statedError(text: string, drafts: Draft[]): void {
+  const m = STATED_ERROR_RE.exec(text);
+  if (!m) return;
+  const u = Number(m[1]) / 100;
+  if (!(u > 0 && u < 1)) return;
+  for (const d of drafts) {
+    if ((d.kind !== 'power' && d.kind !== 'energy') || (d.role !== 'in' && d.role !== 'out') || d.upper !== undefined || d.derived) continue;
+    const x = siOf(d);
+    if (x === null || x <= 0) continue;
+    const unit = FIGURE_SI_UNIT[d.kind];
+    d.quantity = typedSi(x * (1 - u), unit);
+    d.upper = typedSi(x * (1 + u), unit);
+    d.assumption = `The text states an error of ±${formatPrint(u * 100)} % for its measurements (“${m[0].trim()}”): ${formatQuantity(x, unit)} is read as ${formatQuantity(x * (1 - u), unit)} to ${formatQuantity(x * (1 + u), unit)}.`;
+  }
+}
