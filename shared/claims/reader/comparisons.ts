@@ -28,6 +28,10 @@ export function relate(text: string, drafts: Draft[]): void {
     const clause = clauseAround(text, d);
     // ("… if it … would", or an expert's "a heater turning 1 kW into 4 kW would break the first law".)
     if ((SUPPOSITION_RE.test(clause) && CONDITIONAL_RE.test(clause)) || SUPPOSED_OUTCOME_RE.test(clause) || OTHERS_CLAIM_RE.test(clause)) return true;
+    // ("Suppose a motor drew 1 kW and gave 1.2 kW; that would break the first law": a sentence that opens
+    // with a supposition and says what it would do.)
+    const sentence = sentenceAround(text, d.start, d.end);
+    if (SUPPOSITION_OPENS_RE.test(sentence) && SUPPOSED_OUTCOME_RE.test(sentence + text.slice(d.end, d.end + 120).split(/[.!?\n]/u)[0])) return true;
     // "Prof. L. proposed repeating it at 5 kW", "a reader asked whether it could do 10 km/s instead",
     // "to build a 2 kW version": a figure proposed or asked about, not one measured or claimed.
     const before = text.slice(windowStart(text, d.start, 0, 80), d.start);
@@ -274,6 +278,8 @@ const SUPERSEDED_AFTER_RE =
   /^(?:[^.;!?\n]{0,30}?(?<!\p{L})(?:was|were|has been|have been|had been|since|later|then)?[^\S\n]*(?:corrected|revised|amended|lowered|reduced|cut|changed)[^\S\n]+(?:down[^\S\n]+)?to(?!\p{L})|(?:[^.;!?\n\d]|(?:Table|Fig\.?|Figure|Eq\.?|row|line|page|p\.)[^\S\n]*[\dA-Z]+){0,30}?(?:[.;][^\S\n]+(?:it|this|that|the (?:value|figure|number))[^\S\n]+)?(?<!\p{L})should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be)(?!\p{L}))/iu;
 /** A supposition: "if", "even if", "were it", "suppose", "supposing". */
 const SUPPOSITION_RE = /(?<!\p{L})(?:if|even if|were it|suppose|supposing|assuming|had it)(?!\p{L})/iu;
+/** A sentence that opens with a supposition: "Suppose …", "Imagine …", "Say …", "Let's say …". */
+const SUPPOSITION_OPENS_RE = /^[^\S\n]*(?:[-–—•*"“‘'(][^\S\n]*)?(?:suppose|supposing|imagine|say|assume|assuming|let(?:'s|’s| us) (?:say|suppose|assume|imagine)|picture|consider)(?!\p{L})/iu;
 /** What a supposed case would do to a law or a bound: "would break the first law", "would beat a photon rocket". */
 const SUPPOSED_OUTCOME_RE = /(?<!\p{L})(?:would|could only)[^\S\n]+(?:(?:clearly|plainly|certainly|then|also)[^\S\n]+)?(?:break|violate|beat|exceed|contradict|defy|outdo|be impossible|need|require|mean)(?!\p{L})/iu;
 /** Others' claims beside the one weighed: "Competitors claim their boxes give …", "rival makers advertise …". */

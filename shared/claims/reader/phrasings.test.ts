@@ -1543,6 +1543,9 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Our micro-CHP produces 1 kW of electricity and 6 kW of heat while drawing 150 W for its controls and pump.',
     "With the kite up, the boat's generator gives 2 kW, while the crew's winch motor uses 200 W.",
     'Each kWh of electricity gives 3 kWh of heat, so our bills fell by two thirds.',
+    'Suppose a motor drew 1 kW and gave 1.2 kW; that would break the first law. Ours gives 0.9 kW.',
+    "We measured 1.1 kW out against 1 kW in, but the meter's error is ±15 %.",
+    'Rated 12 kW of heat for 3 kW of electricity: four times the output of the energy input.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
