@@ -87,7 +87,7 @@ const AUXILIARY_RE =
   /(?<!\p{L})(?:controls?|control[^\S\n]+(?:system|electronics|unit|gear)s?|controllers?|electronics|fans?|blowers?|(?:circulat\w+[^\S\n]+)?pumps?|yaw|pitch[^\S\n]+(?:system|drive)s?|auxiliar\w*|parasitic|house[^\S\n]+load|own[^\S\n]+(?:use|consumption)|standby|winch(?:es)?|sensors?|trackers?|tracking|monitoring|lights?|lighting)(?!\p{L})/iu;
 /** An outside flow the plant lives on: wind, sunlight, falling water, fuel burnt, a kite's pull. */
 const OUTSIDE_FLOW_RE =
-  /(?<!\p{L})(?:wind(?:[- ]?turbines?|mills?|[- ]farms?)?|sun(?:light|shine)?|solar|hydro\w*|water[^\S\n]+turbines?|tidal|waves?|geothermal|CHP|combined[^\S\n]+heat[^\S\n]+and[^\S\n]+power|cogeneration|boilers?|gas|fuel|diesel|petrol|gasoline|biomass|wood|kites?|rivers?|streams?|dams?)(?!\p{L})/iu;
+  /(?<!\p{L})(?:wind(?:[- ]?turbines?|mills?|[- ]farms?)?|sun(?:light|shine)?|solar|hydro\w*|water[^\S\n]+turbines?|tidal|waves?|geothermal|CHP|combined[^\S\n]+heat[^\S\n]+and[^\S\n]+power|cogeneration|boilers?|gas|fuel|diesel|petrol|gasoline|biomass|wood|kites?|rivers?|streams?|dams?|compost\w*|manure|decompos\w*|rotting|ferment\w*)(?!\p{L})/iu;
 
 /**
  * The one input stated is an auxiliary load of a plant that lives on an outside flow ("makes 3 MW with

@@ -1546,6 +1546,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Suppose a motor drew 1 kW and gave 1.2 kW; that would break the first law. Ours gives 0.9 kW.',
     "We measured 1.1 kW out against 1 kW in, but the meter's error is ±15 %.",
     'Rated 12 kW of heat for 3 kW of electricity: four times the output of the energy input.',
+    'The compost heap warms the greenhouse with 500 W while the fan uses 20 W.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1822,4 +1823,11 @@ test("heat out per unit of electricity from an unnamed machine is a heating COP,
   const text = 'Our resistive heater gives 3 kWh of heat for every kWh of electricity.';
   // 3 kWh out of 1 kWh in: 3 (first law; node).
   expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(3, 9);
+});
+
+test("a COP said through its change: 'the heat pump’s COP falls to 2.2 at -10 °C outside with 45 °C flow' (invented test data)", () => {
+  const text = "In winter the heat pump's COP falls to 2.2 at -10 °C outside with 45 °C flow.";
+  const carnot = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+  // Carnot heating COP 318.15/55 = 5.784545; 2.2/5.784545 = 0.380324 (node).
+  expect(carnot?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(2.2 / (318.15 / 55), 9);
 });
