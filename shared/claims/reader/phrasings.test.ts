@@ -1547,6 +1547,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     "We measured 1.1 kW out against 1 kW in, but the meter's error is ±15 %.",
     'Rated 12 kW of heat for 3 kW of electricity: four times the output of the energy input.',
     'The compost heap warms the greenhouse with 500 W while the fan uses 20 W.',
+    'Laser cooling: the crystal is cooled by 20 K with 5 W of pump light, emitting 5.1 W of anti-Stokes fluorescence.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
