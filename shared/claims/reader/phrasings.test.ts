@@ -1548,6 +1548,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Rated 12 kW of heat for 3 kW of electricity: four times the output of the energy input.',
     'The compost heap warms the greenhouse with 500 W while the fan uses 20 W.',
     'Laser cooling: the crystal is cooled by 20 K with 5 W of pump light, emitting 5.1 W of anti-Stokes fluorescence.',
+    'At 100 % of Carnot, the 60 °C / 20 °C engine would give 12 %; the prototype gives 4 %.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

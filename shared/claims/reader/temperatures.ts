@@ -448,7 +448,10 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
     const hot = drafts.find((d) => d.kind === 'temperature' && d.role === 'hot');
     const cold = drafts.find((d) => d.kind === 'temperature' && d.role === 'cold');
     const [p, th, tc] = [siOf(share), hot && siOf(hot), cold && siOf(cold)];
-    if (p !== null && th && tc !== null && tc !== undefined && th > tc) {
+    // ("At 100 % of Carnot, the 60 °C / 20 °C engine would give 12 %": a share supposed, to work out a bound.)
+    const supposed = /(?<!\p{L})(?:would|could|might)(?!\p{L})/iu.test(sentenceAround(text, share.start, share.end) + text.slice(share.end, share.end + 80).split(/[.;!?\n]/u)[0]);
+    if (supposed) share.role = 'aside';
+    else if (p !== null && th && tc !== null && tc !== undefined && th > tc) {
       const carnot = 1 - tc / th;
       share.quantity = typedSi(p * carnot, '');
       share.derived = `${formatPrint(p * 100)} % of the Carnot efficiency 1 − Tc/Th = 1 − ${formatQuantity(tc, 'K')}/${formatQuantity(th, 'K')}`;
