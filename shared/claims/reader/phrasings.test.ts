@@ -1549,6 +1549,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The compost heap warms the greenhouse with 500 W while the fan uses 20 W.',
     'Laser cooling: the crystal is cooled by 20 K with 5 W of pump light, emitting 5.1 W of anti-Stokes fluorescence.',
     'At 100 % of Carnot, the 60 °C / 20 °C engine would give 12 %; the prototype gives 4 %.',
+    'Our company grew revenue from 2 M€ to 5 M€ while staff went from 20 to 35; the office uses 40 MWh a year and the server room 12 kW.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1832,4 +1833,11 @@ test("a COP said through its change: 'the heat pump’s COP falls to 2.2 at -10 
   const carnot = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
   // Carnot heating COP 318.15/55 = 5.784545; 2.2/5.784545 = 0.380324 (node).
   expect(carnot?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(2.2 / (318.15 / 55), 9);
+});
+
+test("a verb said once for two subjects gives both the same side: 'the office uses 40 MWh a year and the server room 12 kW' (invented test data)", () => {
+  const f = extractFigures('The office uses 40 MWh a year and the server room 12 kW.');
+  expect(f.filter((x) => x.kind === 'power' || x.kind === 'energy').map((x) => x.role)).toEqual(['in', 'in']);
+  // (A second subject with its own verb is not: "takes 15 A at 2 V, and the calorimeter reads 45 W of heat".)
+  expect(extractFigures('The cell takes 15 A at 2 V, and the calorimeter reads 45 W of heat.').find((x) => x.si === 45)?.role).toBe('out');
 });

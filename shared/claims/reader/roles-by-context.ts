@@ -40,6 +40,9 @@ const STATIC_FORCE_BEFORE_RE =
 /** Between two figures of one list: "… on the motorway, and under", "…, or about", "… and up to". */
 const SAME_SIDE_LIST_RE =
   /^[^.;!?\n]{0,80}?(?:,[^\S\n]*)?(?<!\p{L})(?:and|or|but|while)[^\S\n]+(?:(?:under|over|about|around|nearly|up to|at most|less than|more than|just|only|some|roughly|barely|below|above)[^\S\n]+)*$/iu;
+/** Between two figures, a second subject with no verb of its own: "… and the server room" (the verb said once for both). */
+const ELIDED_VERB_RE =
+  /^[^.;!?\n\d]{0,40}?(?<!\p{L})and[^\S\n]+(?:the|its|our|their|his|her|a|an)[^\S\n]+(?:(?!(?:gives?|gave|puts?|delivers?|makes?|made|produces?|returns?|yields?|out|outputs?|generates?|draws?|uses?|used|takes?|took|consumes?|needs?|is|was|are|were|at|with|from|into|to|for|of|on|in|only|just|about|around|roughly|some|nearly|over|under|up)(?!\p{L}))(?!\p{L}+(?:ed|ly)[^\S\n])\p{L}[\p{L}-]*(?:[^s\W]|ss)[^\S\n]+){1,3}$/iu;
 /** Right after a figure: the condition it holds at ("in town traffic", "at idle", "on a cloudy day", "when cold"). */
 const CONDITION_AFTER_RE = /^[^\S\n]*(?:in|on|at|during|when|while|under)[^\S\n]+(?!(?:the[^\S\n]+)?(?:output|input|load|battery|grid|water|house|tank|port)(?!\p{L}))\p{L}/iu;
 /** Just before a part's own efficiency: "the alternator by itself converts at", "the inverter's efficiency is". */
@@ -352,8 +355,15 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     const again = named.find((d) => d.kind === open[0].kind && siOf(d) !== null && Math.abs((siOf(d) as number) - (siOf(open[0]) ?? NaN)) <= 1e-9 * Math.abs(siOf(d) as number));
     // ("delivered 2.4 kWh to a resistive load, a mean of 300 W": the named figure's rate, said beside it.)
     const meanOf = prev !== undefined && /,[^\S\n]*(?:(?:a|an|the)[^\S\n]+)?(?:mean|average|steady|rate|equivalent)[^\S\n]+(?:rate[^\S\n]+|power[^\S\n]+)?(?:of[^\S\n]+)?(?:(?:about|around|roughly|some|nearly)[^\S\n]+)?$/iu.test(text.slice(prev.end, open[0].start)) && text.slice(prev.end, open[0].start).length < 60;
+    // ("the office uses 40 MWh a year and the server room 12 kW": the verb said once for both — the same side.)
+    // (Only where the first figure's side comes from that verb, not from its own label: "the label says
+    // 95,000 BTU/h input and the brochure 25.6 kW of heat" elides "says", which gives no side.)
+    const elided =
+      prev !== undefined &&
+      ELIDED_VERB_RE.test(text.slice(prev.end, open[0].start)) &&
+      /(?<!\p{L})(?:uses?|used|using|draws?|drew|drawing|takes?|took|taking|consumes?|consumed|consuming|needs?|needed|gives?|gave|delivers?|delivered|produces?|produced|makes?|made|generates?|generated|puts?[^\S\n]+out)(?:[^\S\n]+(?:about|around|roughly|some|nearly|only|just|up[^\S\n]+to))?[^\S\n]*$/iu.test(text.slice(Math.max(0, prev.start - 30), prev.start));
     if (again) open[0].role = 'aside';
-    else if (goesOn || meanOf) open[0].role = prev.role;
+    else if (goesOn || meanOf || elided) open[0].role = prev.role;
     else if (named.filter(own).every((d) => d.role === 'in')) open[0].role = 'out';
     else if (named.filter(own).every((d) => d.role === 'out')) open[0].role = 'in';
   }
