@@ -103,7 +103,7 @@ function auxiliaryInput(text: string, inF: Figure, outF: Figure): boolean {
 
 /** A harvester of an outside flow named beside an output: solar panels, an inverter, a wind turbine, a water wheel. */
 const HARVESTER_RE =
-  /(?<!\p{L})(?:solar|PV|photovoltaic|panels?|arrays?|inverters?|wind[- ]?turbines?|turbines?|windmills?|hydro\w*|water[- ]?wheels?|collectors?|tidal|wave)(?!\p{L})/iu;
+  /(?<!\p{L})(?:solar|sun(?:light|shine|ny)?|PV|photovoltaic|panels?|arrays?|inverters?|wind[- ]?turbines?|turbines?|windmills?|hydro\w*|water[- ]?wheels?|collectors?|tidal|wave)(?!\p{L})/iu;
 
 /**
  * "the inverter counter went from 3,112 to 3,598 kWh. The house used 410 kWh from the grid": what a
@@ -126,7 +126,7 @@ function harvestedOut(text: string, inF: Figure, outF: Figure): boolean {
 /** Sunlight, wind or water harvested, named anywhere in the text. */
 const RENEWABLE_RE = /(?<!\p{L})(?:solar|PV|photovoltaic|sun(?:light|shine)?|wind[- ]?turbines?|windmills?|hydro\w*|water[- ]?wheels?|tidal|wave[- ]power)(?!\p{L})/iu;
 /** What a household takes from the grid: "the house used 410 kWh from the grid", "import 3.2 kWh". */
-const HOUSEHOLD_IMPORT_RE = /(?<!\p{L})(?:from[^\S\n]+the[^\S\n]+(?:grid|mains|network)|grid[^\S\n]+import|imports?|imported|the[^\S\n]+(?:house|home|household|building|farm|site)[^\S\n]+(?:used|uses|took|takes|drew|draws|consumed|consumes|needed|needs))(?!\p{L})/iu;
+const HOUSEHOLD_IMPORT_RE = /(?<!\p{L})(?:from[^\S\n]+the[^\S\n]+(?:grid|mains|network)|grid[^\S\n]+import|imports?|imported|the[^\S\n]+(?:house|home|household|building|farm|site|cabin|cottage|flat|shed|boat|van|caravan|camper|barn|office|workshop|school|loads?)[^\S\n]+(?:used|uses|took|takes|drew|draws|consumed|consumes|needed|needs))(?!\p{L})/iu;
 const sameSentence = (text: string, a: Figure, b: Figure) => sentenceAround(text, a.start!, a.end!) === sentenceAround(text, b.start!, b.end!);
 
 /** An output said as a burst or a peak ("can deliver 2 MW for short periods"): no steady output over a run. */

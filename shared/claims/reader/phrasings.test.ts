@@ -1550,6 +1550,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Laser cooling: the crystal is cooled by 20 K with 5 W of pump light, emitting 5.1 W of anti-Stokes fluorescence.',
     'At 100 % of Carnot, the 60 °C / 20 °C engine would give 12 %; the prototype gives 4 %.',
     'Our company grew revenue from 2 M€ to 5 M€ while staff went from 20 to 35; the office uses 40 MWh a year and the server room 12 kW.',
+    'Pedalling at 150 W for an hour charged the battery with 0.12 kWh.',
+    'A day of sun put 9 kWh into the battery; the cabin used 6 kWh overnight.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
