@@ -18,7 +18,7 @@ const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:(?:is|are|was|were|being)[^\S\n]+)?(?:
  * air", "ambient heat supplies the rest", "solar-assisted", "topped up by heat from the ground".
  */
 const UNMEASURED_OTHER_INPUT_RE =
-  /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:extra|excess|surplus|additional)(?:[^\S\n]+(?:energy|power|light|output))?[^\S\n]+(?:comes?|coming|came|is[^\S\n]+drawn|drawn|taken|supplied)[^\S\n]+from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth|lattice|phonons|surroundings|room|pump(?:[^\S\n]+(?:laser|diodes?|light))?|sunlight)(?!\p{L})|(?:the[^\S\n]+)?(?:rest|remainder|balance|difference)[^\S\n]+(?:(?:of[^\S\n]+(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:is|are|comes?|came|coming|being|was)[^\S\n]+)(?:(?:made[^\S\n]+up[^\S\n]+by|made[^\S\n]+up[^\S\n]+from|supplied[^\S\n]+by|provided[^\S\n]+by|drawn[^\S\n]+from|taken[^\S\n]+from|from|by)[^\S\n]+)?(?:the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:sun|sunlight|solar|ambient|air|ground|earth|fuel|gas|wind|environment|surroundings|waste[^\S\n]+heat|process[^\S\n]+heat|steam)|(?:solar|sun|wind|ambient)[- ]assisted|anti-?Stokes|laser[^\S\n]+cool(?:ing|ed)|optical[^\S\n]+(?:refrigeration|cooling)|(?:crystal|sample|device|LED|diode|chip|emitter)[^\S\n]+(?:cools|is[^\S\n]+cooled|was[^\S\n]+cooled|cooled)|(?:sun|sunlight|solar|ambient|outdoor|outside|air|ground|earth|fuel|gas|wind|environment|surroundings|waste[^\S\n]+heat|process[^\S\n]+heat|steam)(?:[^\S\n]+(?:heat|energy|warmth|air))?[^\S\n]+(?:supplies|supplied|provides|provided|makes[^\S\n]+up|made[^\S\n]+up|covers|covered|contributes|contributed|gives|accounts[^\S\n]+for)[^\S\n]+the[^\S\n]+(?:rest|remainder|balance|difference)|(?:plus|together[^\S\n]+with|along[^\S\n]+with|topped[^\S\n]+up[^\S\n]+(?:by|with))[^\S\n]+(?:free[^\S\n]+|unmeasured[^\S\n]+|some[^\S\n]+)?(?:sunlight|solar[^\S\n]+(?:heat|gain|energy)|ambient[^\S\n]+heat|heat[^\S\n]+from[^\S\n]+the[^\S\n]+(?:air|ground|sun)))(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:extra|excess|surplus|additional)(?:[^\S\n]+(?:energy|power|light|output))?[^\S\n]+(?:comes?|coming|came|is[^\S\n]+drawn|drawn|taken|supplied)[^\S\n]+from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth|lattice|phonons|surroundings|room|pump(?:[^\S\n]+(?:laser|diodes?|light))?|sunlight)(?!\p{L})|(?:the[^\S\n]+)?(?:rest|remainder|balance|difference)[^\S\n]+(?:(?:of[^\S\n]+(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:is|are|comes?|came|coming|being|was)[^\S\n]+)(?:(?:made[^\S\n]+up[^\S\n]+by|made[^\S\n]+up[^\S\n]+from|supplied[^\S\n]+by|provided[^\S\n]+by|drawn[^\S\n]+from|taken[^\S\n]+from|from|by)[^\S\n]+)?(?:the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:sun|sunlight|solar|ambient|air|ground|earth|fuel|gas|wind|environment|surroundings|waste[^\S\n]+heat|process[^\S\n]+heat|steam)|(?:solar|sun|wind|ambient)[- ]assisted|anti-?Stokes|laser[^\S\n]+cool(?:ing|ed)|optical[^\S\n]+(?:refrigeration|cooling)|(?:crystal|sample|device|LED|diode|chip|emitter)[^\S\n]+(?:cools|is[^\S\n]+cooled|was[^\S\n]+cooled|cooled)|(?:sun|sunlight|solar|ambient|outdoor|outside|air|ground|earth|fuel|gas|wind|environment|surroundings|waste[^\S\n]+heat|process[^\S\n]+heat|steam)(?:[^\S\n]+(?:heat|energy|warmth|air))?[^\S\n]+(?:supplies|supplied|provides|provided|makes[^\S\n]+up|made[^\S\n]+up|covers|covered|contributes|contributed|gives|accounts[^\S\n]+for)[^\S\n]+the[^\S\n]+(?:rest|remainder|balance|difference)|(?:at|on|with)[^\S\n]+(?:the[^\S\n]+)?(?:high|rising|flood)[^\S\n]+tides?|natural[^\S\n]+(?:inflows?|run-?off)|(?:rain(?:fall)?|snow-?melt|river)[^\S\n]+inflows?|(?:plus|together[^\S\n]+with|along[^\S\n]+with|topped[^\S\n]+up[^\S\n]+(?:by|with))[^\S\n]+(?:free[^\S\n]+|unmeasured[^\S\n]+|some[^\S\n]+)?(?:sunlight|solar[^\S\n]+(?:heat|gain|energy)|ambient[^\S\n]+heat|heat[^\S\n]+from[^\S\n]+the[^\S\n]+(?:air|ground|sun)))(?!\p{L})/iu;
 /** A machine said to run by itself. */
 const SELF_RUNNING_CLAIM_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'iu');
 /** A machine that harvests a flow from outside (sunlight, wind, heat) is no self-running one. */
@@ -99,6 +99,31 @@ function auxiliaryInput(text: string, inF: Figure, outF: Figure): boolean {
   const around = sentenceAround(text, inF.start, inF.end);
   const local = text.slice(Math.max(0, inF.start - 45), inF.end + 45);
   return AUXILIARY_RE.test(local) && OUTSIDE_FLOW_RE.test(around + ' ' + sentenceAround(text, outF.start, outF.end ?? outF.start));
+}
+
+/** An engine that burns fuel: its cylinders, crankshaft, fuel, exhaust, a supercharger or turbocharger. */
+const COMBUSTION_ENGINE_RE =
+  /(?<!\p{L})(?:crank(?:shaft)?s?|cylinders?|combustion|petrol|diesel|gasoline|fuel|exhaust|intake|turbo\w*|supercharg\w*|V[68]|V1[02]|ICE|cc|litre[- ]engine|liter[- ]engine|carburett?or|injectors?|alternators?)(?!\p{L})/iu;
+/** An output said as a fuel engine's own ("raises the engine's output from 300 hp to 420 hp", "at the crank", "wheel horsepower"). */
+const ENGINE_OUTPUT_BEFORE_RE =
+  /(?:(?<!\p{L})engine(?:['’]s)?[^\S\n]+(?:output|power)|(?<!\p{L})(?:brake|crank|wheel)[^\S\n]+(?:horse)?power|(?<!\p{L})at[^\S\n]+the[^\S\n]+(?:crank|flywheel|wheels))[^.;!?\n]{0,40}$/iu;
+/** An engine's accessory, or power taken off the engine: "the supercharger takes 60 hp from the crankshaft", "the kit draws 100 W from the alternator". */
+const ACCESSORY_RE =
+  /(?<!\p{L})(?:supercharg\w*|blowers?|compressors?|alternators?|kits?|boosters?|add-?ons?|(?:from|off)[^\S\n]+the[^\S\n]+(?:crank(?:shaft)?|engine|alternator|battery|belt))(?!\p{L})/iu;
+/** A device said to have no fuel ("burns no fuel", "without fuel"): its engine is no fuel engine. */
+const NO_FUEL_RE = /(?<!\p{L})(?:(?:no|without|zero|free[^\S\n]+of)[^\S\n]+(?:extra[^\S\n]+)?fuel|fuel[- ]?(?:free|less))(?!\p{L})/iu;
+
+/**
+ * The output is a fuel engine's ("takes 60 hp from the crankshaft but raises the engine's output from 300
+ * hp to 420 hp"), the only stated input an accessory's drive power: the engine's fuel is its input, and
+ * the text does not measure it, so no ledger.
+ */
+function engineOutputBesideAccessory(text: string, inF: Figure, outF: Figure): boolean {
+  if (!text || inF.start === null || inF.end === null || outF.start === null || inF.derived) return false;
+  if (!COMBUSTION_ENGINE_RE.test(text) || NO_FUEL_RE.test(text) || SELF_RUNNING_CLAIM_RE.test(text)) return false;
+  const beforeOut = text.slice(Math.max(0, outF.start - 60), outF.start);
+  const aroundIn = text.slice(Math.max(0, inF.start - 50), inF.end + 40);
+  return ENGINE_OUTPUT_BEFORE_RE.test(beforeOut) && ACCESSORY_RE.test(aroundIn) && !HEAT_IN_NEAR_RE.test(aroundIn);
 }
 
 /** A harvester of an outside flow named beside an output: solar panels, an inverter, a wind turbine, a water wheel. */
@@ -203,7 +228,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     // A store (a flywheel, a battery) gives out what it took in at any rate: its discharge power above its
     // charge power ("charged overnight at 20 kW … can release it at 250 kW") is no claim of more out than in.
     const storeRates = bothPower && !duration && ((STORE_RE.test(text) && energy.some((f) => f.role !== 'aside')) || phasesApart(text, inF, outF));
-    const auxIn = (bothPower && !duration && auxiliaryInput(text, inF, outF)) || harvestedOut(text, inF, outF);
+    const auxIn = (bothPower && !duration && auxiliaryInput(text, inF, outF)) || harvestedOut(text, inF, outF) || engineOutputBesideAccessory(text, inF, outF);
     if (auxIn) {
       needs.push(need('first-law', ['the power of the outside flow the plant converts (wind, sunlight, water, fuel)'], 'The input the text gives feeds only the plant’s own controls, fans or pumps, not what it converts.', [inF, outF]));
     } else if (storeRates) {

@@ -1552,6 +1552,10 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Our company grew revenue from 2 M€ to 5 M€ while staff went from 20 to 35; the office uses 40 MWh a year and the server room 12 kW.',
     'Pedalling at 150 W for an hour charged the battery with 0.12 kWh.',
     'A day of sun put 9 kWh into the battery; the cabin used 6 kWh overnight.',
+    'The tidal barrage produced 480 GWh last year; its turbines ran as pumps at high tide, costing 35 GWh of grid power but adding 60 GWh of output.',
+    'The pumped-storage station pumped 1.9 TWh and generated 2.1 TWh last year, the difference made up by natural inflow from the catchment.',
+    'The supercharger takes 60 hp from the crankshaft but raises the engine\'s output from 300 hp to 420 hp.',
+    'The HHO kit draws 100 W from the alternator and our engine output went from 90 kW to 110 kW.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1563,6 +1567,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     expect(breaks('The wheel turns by itself and gives 5 W.')).toBe(true);
     expect(breaks('The generator drew 30 W and gave 69 W; the extra energy comes from the vacuum.')).toBe(true);
     expect(breaks('The magnet motor transfers 500 W to the load with no input.')).toBe(true);
+    expect(breaks('The pumped-storage station used 1.9 TWh for pumping and generated 2.1 TWh last year.')).toBe(true);
+    expect(breaks('Our fuel-free engine takes 60 W from the battery and its engine output is 300 W.')).toBe(true);
     // (a push that starts a wheel is no supply of what it gives after)
     expect(breaks('Self-running gravity wheel. After one push its shifting weights keep it turning and drive a 200 W alternator, with nothing connected at the input.')).toBe(true);
   });

@@ -140,6 +140,17 @@ describe('each kind, in symbols and in words (invented test data)', () => {
     ['2 amps', 'current', 2, EXACT],
     ['2 amperes', 'current', 2, EXACT],
     ['150 mA', 'current', 0.15, EXACT],
+    ['2 TW', 'power', 2e12, EXACT], // prefix tera = 10^12 (SI Brochure Table 7)
+    ['2 terawatts', 'power', 2e12, EXACT],
+    ['1.9 TWh', 'energy', 1.9e12 * 3600, EXACT], // SP 811 B.8, kilowatt hour 3.6 E+06 J, with the tera prefix
+    ['3,700 mWh', 'energy', 3.7 * 3600, EXACT], // milli = 10^-3 (SI Brochure Table 7) of 3600 J
+    ['40 TJ', 'energy', 40e12, EXACT],
+    ['35 PJ', 'energy', 35e15, EXACT],
+    ['2 EJ', 'energy', 2e18, EXACT],
+    ['120 therms', 'energy', 120 * 1.05506e8, 5e-6], // SP 811 B.8, therm (EC) → joule 1.055 06 E+08 (six digits printed: half a unit in the sixth)
+    ['1.5 MMBtu', 'energy', 1.5e6 * 1055.056, SEVEN], // a million Btu_IT; SP 811 B.8, Btu_IT 1.055 056 E+03 J
+    ['100 MBH', 'power', 100e3 * 0.2930711, SEVEN], // thousand Btu_IT/h; SP 811 B.8, Btu_IT per hour → watt 2.930 711 E-01
+    ['96 kBtu/h', 'power', 96e3 * 0.2930711, SEVEN],
   ];
 
   test.each(cases)('"%s" is a %s figure', (written, kind, si, rel) => {

@@ -92,6 +92,7 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'power', unit: 'kW', symbols: ['kW', 'KW', 'kWe', 'kWt', 'kWth', 'kw'], words: ['kilowatt', 'kilowatts'] },
   { kind: 'power', unit: 'MW', symbols: ['MW', 'MWe', 'MWt', 'MWth'], words: ['megawatt', 'megawatts'] },
   { kind: 'power', unit: 'GW', symbols: ['GW', 'GWe', 'GWt', 'GWth'], words: ['gigawatt', 'gigawatts'] },
+  { kind: 'power', unit: 'TW', symbols: ['TW'], words: ['terawatt', 'terawatts'] },
   { kind: 'power', unit: 'hp', symbols: ['hp', 'HP', 'bhp', 'BHP', 'shp'], words: ['horsepower', 'horse power', 'mechanical horsepower', 'brake horsepower'] },
   {
     kind: 'power',
@@ -107,6 +108,8 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     words: ['BTU per hour', 'BTUs per hour', 'Btu per hour', 'British thermal units per hour', 'British thermal unit per hour', 'BTU an hour', 'BTUs an hour', 'Btu an hour', 'BTU a hour', 'British thermal units an hour'],
   },
 
+  // Thousands of BTU per hour, as US heating and cooling trade writes them ("MBH", "kBtu/h").
+  { kind: 'power', unit: 'BTU/h', factor: 1000, symbols: ['MBH', 'MBtuh', 'kBtu/h', 'kBTU/h', 'kBtuh', 'kBtu/hr', 'kBTU/hr'], words: ['thousand BTU per hour', 'thousand Btu per hour'] },
   {
     // Kilocalories per hour, the heating and refrigeration duty of metric practice: the International
     // Table calorie (4.1868 J, NIST SP 811 Appendix B.8), so 1 kcal/h = 4186.8 J / 3600 s = 1.163 W.
@@ -129,6 +132,16 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'energy', unit: 'kWh', symbols: ['kWh', 'KWh', 'kW·h', 'kW⋅h', 'kwh'], words: ['kilowatt-hour', 'kilowatt-hours'] },
   { kind: 'energy', unit: 'MWh', symbols: ['MWh', 'MW·h', 'MW⋅h'], words: ['megawatt-hour', 'megawatt-hours'] },
   { kind: 'energy', unit: 'GWh', symbols: ['GWh'], words: ['gigawatt-hour', 'gigawatt-hours'] },
+  { kind: 'energy', unit: 'TWh', symbols: ['TWh'], words: ['terawatt-hour', 'terawatt-hours'] },
+  { kind: 'energy', unit: 'mWh', symbols: ['mWh'], words: ['milliwatt-hour', 'milliwatt-hours'] },
+  { kind: 'energy', unit: 'uWh', symbols: micro('Wh'), words: ['microwatt-hour', 'microwatt-hours'] },
+  { kind: 'energy', unit: 'TJ', symbols: ['TJ'], words: ['terajoule', 'terajoules'] },
+  { kind: 'energy', unit: 'PJ', symbols: ['PJ'], words: ['petajoule', 'petajoules'] },
+  { kind: 'energy', unit: 'EJ', symbols: ['EJ'], words: ['exajoule', 'exajoules'] },
+  // The therm: 100 000 BTU (IT), 1.055 06 × 10⁸ J (NIST SP 811, Appendix B.8, "therm (EC)"; the U.S.
+  // therm, 1.054 804 × 10⁸ J, differs by 0.02 %). MMBtu: a million BTU.
+  { kind: 'energy', unit: 'BTU', factor: 1e5, symbols: ['thm'], words: ['therm', 'therms'] },
+  { kind: 'energy', unit: 'BTU', factor: 1e6, symbols: ['MMBtu', 'MMBTU', 'mmBtu'], words: ['million BTU', 'million Btu', 'million BTUs', 'million British thermal units'] },
   { kind: 'energy', unit: 'BTU', symbols: ['BTU', 'Btu', 'btu', 'BTUs', 'Btus'], words: ['British thermal unit', 'British thermal units'] },
   { kind: 'energy', unit: 'J', factor: CALORIE_J, symbols: ['cal'], words: ['calorie', 'calories'] },
   { kind: 'energy', unit: 'kJ', factor: CALORIE_J, symbols: ['kcal'], words: ['kilocalorie', 'kilocalories'] },
