@@ -89,6 +89,9 @@ const AUXILIARY_RE =
 const OUTSIDE_FLOW_RE =
   /(?<!\p{L})(?:wind(?:[- ]?turbines?|mills?|[- ]farms?)?|sun(?:light|shine)?|solar|hydro\w*|water[^\S\n]+turbines?|tidal|waves?|geothermal|CHP|combined[^\S\n]+heat[^\S\n]+and[^\S\n]+power|cogeneration|boilers?|gas|fuel|diesel|petrol|gasoline|biomass|wood|kites?|rivers?|streams?|dams?|compost\w*|manure|decompos\w*|rotting|ferment\w*)(?!\p{L})/iu;
 
+/** Fuel or heat named at a figure: what it measures is burnt or taken in as heat. */
+const FUEL_AT_RE = /(?<!\p{L})(?:fuel|burn\w*|heat|gas|diesel|petrol|gasoline|coal|wood|biomass|pellets?)(?!\p{L})/iu;
+
 /**
  * The one input stated is an auxiliary load of a plant that lives on an outside flow ("makes 3 MW with
  * only a 50 kW yaw and pitch system drawing power", "15 kW of heat from the sun while the fans draw 300
@@ -98,7 +101,11 @@ function auxiliaryInput(text: string, inF: Figure, outF: Figure): boolean {
   if (!text || inF.start === null || inF.end === null || outF.start === null || inF.derived) return false;
   const around = sentenceAround(text, inF.start, inF.end);
   const local = text.slice(Math.max(0, inF.start - 45), inF.end + 45);
-  return AUXILIARY_RE.test(local) && OUTSIDE_FLOW_RE.test(around + ' ' + sentenceAround(text, outF.start, outF.end ?? outF.start));
+  // (Not fuel or heat said right at the figure: "the standby diesel set burned fuel worth 4,500 kWh" is what the set converts.)
+  // (Read back only to the clause's start: "6 kW of heat while drawing 150 W" names no fuel at its 150 W.)
+  const clause = text.slice(Math.max(0, inF.start - 25), inF.start).split(/[,;:]|(?<!\p{L})(?:and|while|but|whereas|with)(?!\p{L})/iu).pop() ?? '';
+  const atFigure = clause + text.slice(inF.start, inF.end + 12);
+  return AUXILIARY_RE.test(local) && !FUEL_AT_RE.test(atFigure) && OUTSIDE_FLOW_RE.test(around + ' ' + sentenceAround(text, outF.start, outF.end ?? outF.start));
 }
 
 /** An engine that burns fuel: its cylinders, crankshaft, fuel, exhaust, a supercharger or turbocharger. */
@@ -228,7 +235,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     // A store (a flywheel, a battery) gives out what it took in at any rate: its discharge power above its
     // charge power ("charged overnight at 20 kW … can release it at 250 kW") is no claim of more out than in.
     const storeRates = bothPower && !duration && ((STORE_RE.test(text) && energy.some((f) => f.role !== 'aside')) || phasesApart(text, inF, outF));
-    const auxIn = (bothPower && !duration && auxiliaryInput(text, inF, outF)) || harvestedOut(text, inF, outF) || engineOutputBesideAccessory(text, inF, outF);
+    const auxIn = ((bothPower ? !duration : !!eIn && !!eOut) && auxiliaryInput(text, inF, outF)) || harvestedOut(text, inF, outF) || engineOutputBesideAccessory(text, inF, outF);
     if (auxIn) {
       needs.push(need('first-law', ['the power of the outside flow the plant converts (wind, sunlight, water, fuel)'], 'The input the text gives feeds only the plant’s own controls, fans or pumps, not what it converts.', [inF, outF]));
     } else if (storeRates) {

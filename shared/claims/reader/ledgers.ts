@@ -139,16 +139,25 @@ const CHANGE_BEFORE_RE =
 /** After it: "… since launch", "… on last month", "… from last year", "… over the year". */
 const CHANGE_AFTER_RE = /^[^\S\n]*(?:since|on[^\S\n]+(?:last|the[^\S\n]+previous)|from[^\S\n]+(?:last|the[^\S\n]+previous|a[^\S\n]+year)|compared[^\S\n]+(?:with|to)|year[- ]on[- ]year|over[^\S\n]+the[^\S\n]+(?:year|month|mission)|a[^\S\n]+year)(?!\p{L})/iu;
 
+/** Before a saving: "saving 300 kWh a day of gas", "saves about 40 W", "savings of 2 MWh", "cutting its use by 3 kWh". */
+const SAVING_BEFORE_RE =
+  /(?<![\p{L}-])(?:sav(?:es|ed|ing)|(?:a|the|annual|yearly|daily|net|total)?[^\S\n]*savings?[^\S\n]+(?:of|is|was|were|are|:)|(?:cut(?:s|ting)?|reduc(?:es|ed|ing)|lower(?:s|ed|ing)?|trim(?:s|med|ming)?)[^\S\n]+(?:[\p{L}’'-]+[^\S\n]+){0,3}?by)[^\S\n]+(?:(?:about|around|roughly|some|nearly|almost|up[^\S\n]+to|over|a[^\S\n]+further|an[^\S\n]+estimated|a[^\S\n]+good|at[^\S\n]+least)[^\S\n]+)?$/iu;
+
 /**
  * A power or an energy said as the change of one just given ("RTG output 212 W, down 0.8 W since
  * launch"): no side of its own.
  */
 export function asideChanges(text: string, drafts: Draft[]): void {
-  for (let i = 1; i < drafts.length; i++) {
+  for (let i = 0; i < drafts.length; i++) {
     const d = drafts[i];
     if ((d.kind !== 'power' && d.kind !== 'energy') || d.derived || d.role === 'aside') continue;
     const before = text.slice(Math.max(0, d.start - 30), d.start);
-    if (!CHANGE_BEFORE_RE.test(before)) continue;
+    // (A saving is a difference between two devices or two periods, not what either takes or gives.)
+    if (SAVING_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start))) {
+      d.role = 'aside';
+      continue;
+    }
+    if (i === 0 || !CHANGE_BEFORE_RE.test(before)) continue;
     // (The figure it changes is said just before, of the same kind: "212 W, down 0.8 W".)
     const prev = drafts[i - 1];
     const joined = prev.kind === d.kind && d.start - prev.end < 40 && !/[.;!?\n]/u.test(text.slice(prev.end, d.start));

@@ -1556,6 +1556,9 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The pumped-storage station pumped 1.9 TWh and generated 2.1 TWh last year, the difference made up by natural inflow from the catchment.',
     'The supercharger takes 60 hp from the crankshaft but raises the engine\'s output from 300 hp to 420 hp.',
     'The HHO kit draws 100 W from the alternator and our engine output went from 90 kW to 110 kW.',
+    'The greenhouse captures 1,200 kWh of solar heat a month and needs 400 kWh of electricity for fans and lights.',
+    'The bakery\'s heat recovery unit captures 40 kW from the oven flue and preheats the proving room, saving 300 kWh a day of gas.',
+    'The new pump saves about 40 W over the old one, which drew 120 W.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
