@@ -76,6 +76,8 @@ import { claims as heldOut81 } from '../tests/fixtures/claims-corpus/held-out-81
 import { claims as heldOut82 } from '../tests/fixtures/claims-corpus/held-out-82';
 import { claims as heldOut83 } from '../tests/fixtures/claims-corpus/held-out-83';
 import { claims as heldOut84 } from '../tests/fixtures/claims-corpus/held-out-84';
+import { claims as heldOut85 } from '../tests/fixtures/claims-corpus/held-out-85';
+import { claims as heldOut86 } from '../tests/fixtures/claims-corpus/held-out-86';
 import { claims as tuning1 } from '../tests/fixtures/claims-corpus/tuning';
 import { claims as tuning2 } from '../tests/fixtures/claims-corpus/tuning-2';
 import { claims as tuning3 } from '../tests/fixtures/claims-corpus/tuning-3';
@@ -160,15 +162,17 @@ import { claims as tuning81 } from '../tests/fixtures/claims-corpus/tuning-81';
 import { claims as tuning82 } from '../tests/fixtures/claims-corpus/tuning-82';
 import { claims as tuning83 } from '../tests/fixtures/claims-corpus/tuning-83';
 import { claims as tuning84 } from '../tests/fixtures/claims-corpus/tuning-84';
+import { claims as tuning85 } from '../tests/fixtures/claims-corpus/tuning-85';
+import { claims as tuning86 } from '../tests/fixtures/claims-corpus/tuning-86';
 import type { CorpusClaim } from '../tests/fixtures/claims-corpus/types';
 import { CONTENT, startBenchDatabase } from './db';
 import { measureClaim, pct, summarise, type ClaimOutcome, type Matched } from './claims/measure';
 
 /** The tuning part: every tuning file of the corpus (each written without reading the code). */
-const tuning: CorpusClaim[] = [...tuning1, ...tuning2, ...tuning3, ...tuning4, ...tuning5, ...tuning6, ...tuning7, ...tuning8, ...tuning9, ...tuning10, ...tuning11, ...tuning12, ...tuning13, ...tuning14, ...tuning15, ...tuning16, ...tuning17, ...tuning18, ...tuning19, ...tuning20, ...tuning21, ...tuning22, ...tuning23, ...tuning24, ...tuning25, ...tuning26, ...tuning27, ...tuning28, ...tuning29, ...tuning30, ...tuning31, ...tuning32, ...tuning33, ...tuning34, ...tuning35, ...tuning36, ...tuning37, ...tuning38, ...tuning39, ...tuning40, ...tuning41, ...tuning42, ...tuning43, ...tuning44, ...tuning45, ...tuning46, ...tuning47, ...tuning48, ...tuning49, ...tuning50, ...tuning51, ...tuning52, ...tuning53, ...tuning54, ...tuning55, ...tuning56, ...tuning57, ...tuning58, ...tuning59, ...tuning60, ...tuning61, ...tuning62, ...tuning63, ...tuning64, ...tuning65, ...tuning66, ...tuning67, ...tuning68, ...tuning69, ...tuning70, ...tuning71, ...tuning72, ...tuning73, ...tuning74, ...tuning75, ...tuning76, ...tuning77, ...tuning78, ...tuning79, ...tuning80, ...tuning81, ...tuning82, ...tuning83, ...tuning84];
+const tuning: CorpusClaim[] = [...tuning1, ...tuning2, ...tuning3, ...tuning4, ...tuning5, ...tuning6, ...tuning7, ...tuning8, ...tuning9, ...tuning10, ...tuning11, ...tuning12, ...tuning13, ...tuning14, ...tuning15, ...tuning16, ...tuning17, ...tuning18, ...tuning19, ...tuning20, ...tuning21, ...tuning22, ...tuning23, ...tuning24, ...tuning25, ...tuning26, ...tuning27, ...tuning28, ...tuning29, ...tuning30, ...tuning31, ...tuning32, ...tuning33, ...tuning34, ...tuning35, ...tuning36, ...tuning37, ...tuning38, ...tuning39, ...tuning40, ...tuning41, ...tuning42, ...tuning43, ...tuning44, ...tuning45, ...tuning46, ...tuning47, ...tuning48, ...tuning49, ...tuning50, ...tuning51, ...tuning52, ...tuning53, ...tuning54, ...tuning55, ...tuning56, ...tuning57, ...tuning58, ...tuning59, ...tuning60, ...tuning61, ...tuning62, ...tuning63, ...tuning64, ...tuning65, ...tuning66, ...tuning67, ...tuning68, ...tuning69, ...tuning70, ...tuning71, ...tuning72, ...tuning73, ...tuning74, ...tuning75, ...tuning76, ...tuning77, ...tuning78, ...tuning79, ...tuning80, ...tuning81, ...tuning82, ...tuning83, ...tuning84, ...tuning85, ...tuning86];
 /**
  * The held-out parts, each written without reading the code and never opened by whoever changes it:
- * the first (held-out.ts) and one written beside each of tuning parts 31–84 (held-out-NN.ts).
+ * the first (held-out.ts) and one written beside each of tuning parts 31–86 (held-out-NN.ts).
  */
 const heldOutParts: [string, CorpusClaim[]][] = [
   ['held-out.ts', heldOut1],
@@ -226,6 +230,8 @@ const heldOutParts: [string, CorpusClaim[]][] = [
   ['held-out-82.ts (US customary and mixed units: shop forums, contractors\' quotes, build logs)', heldOut82],
   ['held-out-83.ts (relative and comparative figures: multiples, per cent more or less, "for every")', heldOut83],
   ['held-out-84.ts (energy ledgers over time: meter readings, logs, counters and bills)', heldOut84],
+  ['held-out-85.ts (figures to multiply out: torque and speed, volts and amps, flow and head, energy per cycle)', heldOut85],
+  ['held-out-86.ts (ranges, approximations, bounds and uncertainties)', heldOut86],
 ];
 const heldOut: CorpusClaim[] = heldOutParts.flatMap(([, c]) => c);
 /** Issue 11's aims on the held-out part. */
