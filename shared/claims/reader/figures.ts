@@ -5,7 +5,7 @@
  * hedges read (roles.ts, ranges-hedges.ts), multiples in words ("twice the energy it consumes", "half
  * the speed of light") added; then the relations (comparisons.ts, relations.ts) and the SI values.
  */
-import { asideChanges, asidePerDistance, meterReadings, restatedEnergies, statedError } from './ledgers';
+import { asideChanges, asideEmbodied, asidePerDistance, meterReadings, restatedEnergies, statedError } from './ledgers';
 import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
 import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
@@ -555,6 +555,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   meterReadings(text, drafts);
   asidePerDistance(text, drafts);
   asideChanges(text, drafts);
+  asideEmbodied(text, drafts);
   relate(text, drafts);
   rolesFromWordLabels(text, drafts);
   restatedEnergies(text, drafts);

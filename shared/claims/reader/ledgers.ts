@@ -165,6 +165,23 @@ export function asideChanges(text: string, drafts: Draft[]): void {
   }
 }
 
+/** Before an energy spent making a device: "its embodied energy of 1,500 kWh", "grey energy", "the energy used to build it". */
+const EMBODIED_BEFORE_RE =
+  /(?<!\p{L})(?:embodied|embedded|grey|gray|manufactur\w*|production|construction)[^\S\n]+(?:energy|carbon|emissions)(?:[^\S\n]+(?:of|is|was|at|:|about|around|roughly|some|nearly)){0,2}[^\S\n]*$|(?:energy|it)[^\S\n]+(?:(?:used|needed|spent|it[^\S\n]+took|that[^\S\n]+went)[^\S\n]+)?(?:to|in)[^\S\n]+(?:build(?:ing)?|manufactur\w*|construct(?:ing)?|fabricat\w*)[^\S\n]+(?:it|them|the[^\S\n]+[\p{L}-]+)(?:[^\S\n]+(?:was|is|of|:|about|around|roughly|some|nearly)){0,2}[^\S\n]*$/iu;
+/** After it: "1,500 kWh to manufacture", "1,500 kWh of embodied energy", "to build it". */
+const EMBODIED_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+(?:embodied|embedded|grey|gray)[^\S\n]+energy|(?:to|in)[^\S\n]+(?:(?:build|manufacture|construct|fabricate)(?:[^\S\n]+(?:it|them|the|a|an|one|each))?|make[^\S\n]+(?:it|them))(?!\p{L}))/iu;
+
+/**
+ * An energy spent making the device, against which its lifetime output is set as a payback ("pays back its
+ * embodied energy of 1,500 kWh in two years and then makes 9,000 kWh"): not what the device converts.
+ */
+export function asideEmbodied(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (d.kind !== 'energy' || d.derived || d.role === 'aside') continue;
+    if (EMBODIED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start)) || EMBODIED_AFTER_RE.test(text.slice(d.end, d.end + 30))) d.role = 'aside';
+  }
+}
+
 /** Before an energy worked out from a power just given: "so about", "that is", "i.e.", "which makes". */
 const WORKED_OUT_BEFORE_RE = /(?<!\p{L})(?:so|that(?:'s|’s|[^\S\n]+is)|i\.e\.|which[^\S\n]+(?:is|makes|gives|comes[^\S\n]+to)|making|giving|or)[^\S\n]+(?:(?:about|around|roughly|some|nearly|almost|just[^\S\n]+(?:over|under)|a[^\S\n]+total[^\S\n]+of)[^\S\n]+)?$/iu;
 

@@ -1559,6 +1559,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The greenhouse captures 1,200 kWh of solar heat a month and needs 400 kWh of electricity for fans and lights.',
     'The bakery\'s heat recovery unit captures 40 kW from the oven flue and preheats the proving room, saving 300 kWh a day of gas.',
     'The new pump saves about 40 W over the old one, which drew 120 W.',
+    'The solar panel pays back its embodied energy of 1,500 kWh in two years and then makes 9,000 kWh over the rest of its life.',
+    'It took 2,000 kWh to manufacture the turbine, which then generated 80,000 kWh.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1572,6 +1574,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     expect(breaks('The magnet motor transfers 500 W to the load with no input.')).toBe(true);
     expect(breaks('The pumped-storage station used 1.9 TWh for pumping and generated 2.1 TWh last year.')).toBe(true);
     expect(breaks('Our fuel-free engine takes 60 W from the battery and its engine output is 300 W.')).toBe(true);
+    expect(breaks('The machine used 3 kWh to make 10 kWh.')).toBe(true);
     // (a push that starts a wheel is no supply of what it gives after)
     expect(breaks('Self-running gravity wheel. After one push its shifting weights keep it turning and drive a 200 W alternator, with nothing connected at the input.')).toBe(true);
   });
