@@ -5,6 +5,7 @@
  * hedges read (roles.ts, ranges-hedges.ts), multiples in words ("twice the energy it consumes", "half
  * the speed of light") added; then the relations (comparisons.ts, relations.ts) and the SI values.
  */
+import { multipliedOut } from './products';
 import { asideChanges, asideEmbodied, asidePerDistance, meterReadings, restatedEnergies, statedError } from './ledgers';
 import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
 import { C_M_PER_S } from '../figures-vocabulary';
@@ -551,6 +552,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     else drafts.splice(pos, 0, d);
   }
 
+  multipliedOut(text, drafts);
   rolesFromLineLabels(text, drafts);
   meterReadings(text, drafts);
   asidePerDistance(text, drafts);

@@ -1561,6 +1561,11 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The new pump saves about 40 W over the old one, which drew 120 W.',
     'The solar panel pays back its embodied energy of 1,500 kWh in two years and then makes 9,000 kWh over the rest of its life.',
     'It took 2,000 kWh to manufacture the turbine, which then generated 80,000 kWh.',
+    'At 25 V of reverse bias the avalanche photodiode gives a photocurrent of 0.77 mA from 2 mW of light: a quantum efficiency above 100 %.',
+    'Fire pump: 30 L/s at 8 bar, driven by a 37 kW motor.',
+    'The punch press delivers 1.2 kJ per stroke at 40 strokes per minute from a 2.2 kW motor.',
+    'The laser fires 5 mJ pulses at 1 kHz, drawing 60 W from its supply.',
+    'The e-bike\'s 36 V 10 Ah pack took 0.42 kWh from the wall to charge.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

@@ -199,7 +199,7 @@ const COOLING_DUTY_BEFORE_RE = /(?<!\p{L})(?:cooling|refrigerat(?:ing|ion)|freez
 
 /** After a figure: the load or network it goes into ("into the farm's distribution board", "to the grid"). */
 const INTO_LOAD_AFTER_RE =
-  /^[^\S\n]*,?[^\S\n]*(?:in)?to[^\S\n]+(?:(?:the|a|an|its|our|their)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(?:grid|distribution board|board|mains|loads?|dump load|battery|batteries|network|house|home|consumer unit|resistor|heater element)(?!\p{L})/iu;
+  /^[^\S\n]*,?[^\S\n]*(?:in)?to[^\S\n]+(?:(?:the|a|an|its|our|their)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(?:grid|distribution board|board|mains|loads?|dump load|battery|batteries|pack|battery pack|network|house|home|consumer unit|resistor|heater element)(?!\p{L})/iu;
 
 /** A sheet's heading line of a side: "INPUT", "Output:", "Input side (DC)". */
 const SIDE_HEADING_RE = /^[^\S\n]*(?:electrical[^\S\n]+)?(input|output)(?:[^\S\n]+(?:side|ratings?|data|characteristics))?(?:[^\S\n]*\([^()\n]{0,20}\))?[^\S\n]*:?[^\S\n]*$/iu;
@@ -240,6 +240,12 @@ function sectionPowers(text: string, drafts: Draft[]): void {
     });
   }
 }
+
+/** A load the device feeds, said just before the pair: "lights a string of mains lamps at", "runs a 40 W heater on". */
+const LOAD_LEAD_RE =
+  /(?<!\p{L})(?:lights?|lit|lighting|powers|powered|powering|runs|ran|running|feeds|fed|feeding)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their|two|three|four|five|six|several|\d+)[^\S\n]+(?:[\p{L}'’-]+[^\S\n]+){0,4}?(?:lamps?|bulbs?|lights?|loads?|heaters?|resistors?|appliances?|LEDs?|fans?|kettles?)[^\S\n]+(?:at|on|with|of)[^\S\n]+(?:(?:a|an)[^\S\n]+)?(?:measured[^\S\n]+)?$/iu;
+/** A bias voltage: "25 V of reverse bias", "biased at 5 V", "a bias of 30 V". */
+const BIAS_RE = /(?<!\p{L})(?:bias(?:ed|ing)?|reverse[- ]bias(?:ed)?)(?!\p{L})/iu;
 
 export function relateFigures(text: string, drafts: Draft[]): void {
   inputForEvery(text, drafts);
@@ -336,14 +342,17 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       /^[^\S\n]*(?:at|on|across)[^\S\n]+(?:(?:the|its|their)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(input|output)(?!\p{L})/iu.exec(text.slice(last.end, last.end + 40)) ??
       /(?:^|[|\n•;,(])[^\S\n]*(?:(?:electrical|electric|DC|AC)[^\S\n]+)?(in|out|input|output)[^\S\n]*[:=][^\S\n]*$/iu.exec(text.slice(Math.max(0, first.start - 30), first.start));
     // "the coil charges a 12 V battery at 3 A": what it charges is its output, whatever the words between.
-    const fills = !said && FILLS_LEAD_RE.test(text.slice(Math.max(0, first.start - 40), first.start));
+    // ("… which lights a string of mains lamps at 230 V with a measured 0.26 A": the lamps it lights are its load.)
+    const fills = !said && (FILLS_LEAD_RE.test(text.slice(Math.max(0, first.start - 40), first.start)) || LOAD_LEAD_RE.test(text.slice(Math.max(0, first.start - 70), first.start)));
     // "from a 24 V supply at 5 A", "a 12 V power supply drawing 2 A": the pair is a supply's, what the device takes.
     const supplied = !said && !fills && /^[^\S\n]*(?:(?:DC|AC|bench|lab|power)[^\S\n]+)?(?:supply|supplies|PSU|mains|adapter|source|rail)(?!\p{L})/iu.test(text.slice(first.end, last.start));
     // "5 A at 230 V into the farm's distribution board", "… to the grid": what goes into a load or a grid is given out.
     const intoLoad = !said && !fills && INTO_LOAD_AFTER_RE.test(text.slice(last.end, last.end + 60));
-    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills || intoLoad ? 'out' : supplied ? 'in' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
+    // "25 V of reverse bias … a photocurrent of 0.77 mA": a bias supply's voltage, what the supply gives the device.
+    const biased = !said && !fills && BIAS_RE.test(text.slice(Math.max(0, volt.start - 20), volt.end + 25));
+    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills || intoLoad ? 'out' : supplied || biased ? 'in' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
     const wordsRole = between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
-    const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null);
+    const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null && d.role !== 'aside');
     const role: FigureRole = wordsRole ?? (others.length && others.every((d) => d.role === 'in') ? 'out' : null);
     insertAfter(drafts, last, {
       start: first.start,

@@ -187,7 +187,10 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
       continue;
     }
     // "3–5 W of electricity from roughly 100 W of heat": the first came out of the second.
-    if (/^[^\S\n]*(?:of[^\S\n]+[\p{L} -]{0,30}?)?[^\S\n]*from[^\S\n]+(?:(?:a|an|the|about|some|roughly|only|just|up to)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
+    // (Not a bias supply's volts times the current it passes: "at 25 V of reverse bias the photodiode passes
+    // 0.77 mA from 2 mW of light" — that power goes in from the supply.)
+    const biasPower = !!a.derived?.startsWith('power = current × voltage') && /(?<!\p{L})bias(?:ed)?(?!\p{L})/iu.test(text.slice(a.start, a.end));
+    if (!biasPower && /^[^\S\n]*(?:of[^\S\n]+[\p{L} -]{0,30}?)?[^\S\n]*from[^\S\n]+(?:(?:a|an|the|about|some|roughly|only|just|up to)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
       a.role = 'out';
       b.role = 'in';
       continue;

@@ -18,7 +18,9 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     before: ['excess', 'surplus', 'extra', 'net gain', 'net surplus', 'anomalous', 'unexplained', 'over-unity', 'overunity', '(?:output|out) exceeds? (?:the |its )?(?:input|consumption|supply) by', 'exceeds? (?:the |its )?(?:input|consumption|supply) by'],
     after: ['excess', 'surplus', 'extra', '(?:from|out of) (?:nowhere|thin air|nothing)', 'more(?= than)', 'more(?= (?:[\\p{L}-]+ ){1,3}?than (?:that|this|it|what (?:it|they) (?:draws?|takes?|uses?|consumes?|gets?))(?!\\p{L}))', 'above(?= (?:the|its) input)', 'in excess', 'net gain',
       // "released 5.1 W more heat than the alumina dummy at the same input": more than a control run.
-      'more(?= (?:[\\p{L}-]+ ){0,3}?than (?:the|a|an|its) (?:[\\p{L}-]+ ){0,2}?(?:dumm(?:y|ies)|blanks?|controls?|reference|inactive|calibration) )'],
+      'more(?= (?:[\\p{L}-]+ ){0,3}?than (?:the|a|an|its) (?:[\\p{L}-]+ ){0,2}?(?:dumm(?:y|ies)|blanks?|controls?|reference|inactive|calibration) )',
+      // "3.8 W more heat leaving the cell than the electrical power going in": more than what the device takes.
+      'more(?= (?:[\\p{L}-]+ ){0,5}?than (?:the|its) (?:(?:electrical|electric|input|drive|supply) )?(?:power|energy|electricity|work|input)(?: (?:going in|put in|fed in|fed to it|supplied|drawn|consumed|taken|it (?:draws|takes|uses|consumes))|(?=[,.;)]| (?:and|over|during|for|in)\\b)))'],
   },
   {
     role: 'in',
@@ -66,7 +68,9 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
       'inputs?', '(?:"|“)?drawn(?! from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point|a?ether|nowhere|nothing|thin air))', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 
       // "about 120 W of sunlight falls on its folds": the light a panel takes.
-      'of (?:sun)?light (?:falls|falling|fell|lands|landing|shines|shining|arrives|arriving|strikes|striking|hits|hitting)', 'of (?:incident |incoming )?(?:sunlight|solar (?:power|radiation|energy)|irradiance)', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply',
+      'of (?:sun)?light (?:falls|falling|fell|lands|landing|shines|shining|arrives|arriving|strikes|striking|hits|hitting)',
+      // "2.0 mW of 405 nm light on the detector", "5 W of laser light onto the cell": the light a detector or a converter takes.
+      'of (?:[\\w.-]+ ){0,3}?(?:light|laser light|radiation|illumination|beam) (?:on|onto|incident on|into|falling on) (?:the|its|a|an) (?:[\\w-]+ )?(?:detectors?|photodiodes?|diodes?|sensors?|cells?|panels?|photocells?|receivers?|absorbers?|targets?|samples?|chips?|junctions?|modules?|converters?)', 'of (?:incident |incoming )?(?:sunlight|solar (?:power|radiation|energy)|irradiance)', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply',
       // "the array feeds 8.2 A at 36 V into the charge controller": what goes into a converter is its input.
       'into (?:the|its|a|an) (?:[\\w\\x27\\u2019-]+ )?(?:controllers?|inverters?|converters?|regulators?|MPPTs?|chargers?|rectifiers?|electroly[sz]ers?)'],
   },
