@@ -116,6 +116,15 @@ const NOT_THE_HOT_GASES_RE = /(?<!\p{L})(?:coolant|cooling water|jacket water|oi
 /** A combustion engine named: its hot side is the burning gas, not a temperature of its cooling. */
 const COMBUSTION_ENGINE_RE = /(?<!\p{L})(?:(?:car|diesel|petrol|gasoline|gas|truck|lorry|marine|ship's|boat|motorbike|motorcycle|lawnmower|combustion|piston|outboard|aero|jet) engines?|diesels?|gensets?|generating sets?|diesel generators?|gas turbines?|internal[- ]combustion|combustion engines?)(?!\p{L})/iu;
 
+/** A combustion engine named as the text's own, not one it compares with ("about what a car engine manages"). */
+function combustionEngineOwn(text: string): boolean {
+  const all = new RegExp(COMBUSTION_ENGINE_RE.source, 'giu');
+  for (const m of text.matchAll(all)) {
+    if (!/(?<!\p{L})(?:what|like|than|unlike|as|compared[^\S\n]+(?:with|to))[^\S\n]+(?:(?:a|an|any|your|the|most|many|an[^\S\n]+ordinary|a[^\S\n]+typical)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, m.index! - 30), m.index))) return true;
+  }
+  return false;
+}
+
 /**
  * Where an engine's efficiency is checked against temperatures on a guess the text does not make, what
  * the reader must confirm before a conflict is said: the text names no heat engine (a heating plant, a
@@ -127,7 +136,7 @@ function engineGuess(b: Basis, hot: Figure): string | undefined {
   if (!b.s.heatEngine && !ofKind(b.figures, 'temperature-difference').length) {
     return 'confirmation that the device turns heat into work between these temperatures: the text names no heat engine, and a machine that turns electricity or fuel into heat, light or motion (a boiler, a heating network, a lamp, a motor) is not bounded by Carnot';
   }
-  if (hot.start !== null && COMBUSTION_ENGINE_RE.test(b.text) && NOT_THE_HOT_GASES_RE.test(b.text.slice(sentenceKey(b.text, hot.start), hot.start))) {
+  if (hot.start !== null && combustionEngineOwn(b.text) && NOT_THE_HOT_GASES_RE.test(b.text.slice(sentenceKey(b.text, hot.start), hot.start))) {
     return `the temperature of the burning gas the engine works from: ${hot.display} (“${hot.text}”) is a temperature of its cooling, oil or exhaust, not its hot side`;
   }
   return undefined;

@@ -173,6 +173,15 @@ function pulseOf(text: string, f: Figure, d: Figure): boolean {
   return gap.length < 40 && !/\d/u.test(gap);
 }
 
+/**
+ * Volts and amps on both sides ("takes 12 volts at 8 amps … turns it into 48 volts at up to 1.9 amps for
+ * the compressor fridge"): an electrical converter's ledger, whatever machine its output feeds.
+ */
+function electricOnBothSides(inF: Figure | undefined, outF: Figure | undefined): boolean {
+  const vi = (f: Figure | undefined) => !!f?.derived?.startsWith('power = current × voltage');
+  return vi(inF) && vi(outF);
+}
+
 export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading, { efficiency, movesHeat, gain, share, cop, acrossDifference, copForCarnot }: HeatReading): void {
   const { figures, s, plans, needs, notes, power, energy, text, pIn, pOut, eIn, eOut, duration, temps } = b;
   const firstLawWhy = 'The text gives the energy put in and the energy got out.';
@@ -198,7 +207,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
         [(eIn ?? pIn)!, (eOut ?? pOut)!],
       ),
     );
-  } else if (movesHeat && (eIn || pIn) && (eOut || pOut) && !sourceHeatIn) {
+  } else if (movesHeat && (eIn || pIn) && (eOut || pOut) && !sourceHeatIn && !electricOnBothSides(eIn ?? pIn, eOut ?? pOut)) {
     notes.push('A heat pump or refrigerator moves heat rather than making it: the heat it delivers may exceed the work it takes without breaking any law. Its bound is the Carnot COP of the temperatures it works between.');
   } else if (heatEngineElectricIn(b, eIn ?? pIn)) {
     notes.push("A heat engine's input is the heat it takes in: the electrical power the text gives beside its output is a load's or a part's, not what the engine converts. Its bound is the Carnot efficiency between its two sides.");

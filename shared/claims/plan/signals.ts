@@ -170,7 +170,9 @@ export function readSignals(ctx: PlanContext): Signals {
   // throws out nothing, are no propulsor of its own.
   if (PROPELLANT_FREE_RE.test(text)) withoutFree = withoutFree.replace(FIT_TO_RE, ' ');
   // "no heat pump, no outdoor coil": a machine said not to be one.
-  const notDenied = text.replace(/(?<!\p{L})(?:no|not an?|without an?|isn't an?|is not an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|refrigerators?|chillers?|compressors?)(?!\p{L})/giu, ' ');
+  const notDenied = text.replace(/(?<!\p{L})(?:no|not an?|without an?|isn't an?|is not an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|refrigerators?|chillers?|compressors?|outdoor[^\S\n]+units?|refrigerants?|evaporators?)(?!\p{L})/giu, ' ');
+  // (A text that says a heat pump's parts are absent and names no heat pump: its radiators are a heater's.)
+  const deniedPump = notDenied !== text && !NAMED_HEAT_PUMP_RE.test(notDenied);
   return {
     propellantFree:
       PROPELLANT_FREE_RE.test(text) ||
@@ -186,7 +188,7 @@ export function readSignals(ctx: PlanContext): Signals {
     // (Water and wind machines are no heat engines: "the reversible pump-turbine", "the upper reservoir".)
     heatEngine: HEAT_ENGINE_RE.test(text.replace(WATER_OR_WIND_MACHINE_RE, ' ')),
     // (A boiler's text names radiators and flow temperatures too: those words alone name no heat pump there.)
-    heatPump: HEAT_PUMP_RE.test(notDenied) && !(BURNER_RE.test(text) && !NAMED_HEAT_PUMP_RE.test(notDenied)),
+    heatPump: HEAT_PUMP_RE.test(notDenied) && !deniedPump && !(BURNER_RE.test(text) && !NAMED_HEAT_PUMP_RE.test(notDenied)),
     cooling: COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied),
     coolingWords: COOLING_RE.test(notDenied),
     overUnity: OVER_UNITY_RE.test(text) || (top !== undefined && OVER_UNITY_CLASSES.includes(top)),

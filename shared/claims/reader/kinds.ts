@@ -134,6 +134,9 @@ const COMPRESSOR_OR_REFRIGERANT_RE = /(?<!\p{L})(?:compressors?|refrigerants?|R-
 /** A heating output or capacity named. */
 const HEATING_OUTPUT_RE = /(?<!\p{L})(?:heating (?:output|capacity|power)|heat output|flow water|flow temperature)(?!\p{L})/iu;
 
+/** A heat pump or its parts said to be absent: "no outdoor unit", "without a heat pump", "not a heat pump". */
+const NO_HEAT_PUMP_PARTS_RE = /(?<!\p{L})(?:no|without(?:[^\S\n]+an?)?|not[^\S\n]+an?|nor[^\S\n]+an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:outdoor[^\S\n]+units?|heat[- ]pumps?|compressors?|refrigerants?|evaporators?)(?!\p{L})/giu;
+
 export function readPercent(text: string, start: number, end: number, floor: number, num?: string): PercentReading {
   // 'at "about 29 %" efficiency': the words after a closing quote.
   end += /^["”’'»]*/u.exec(text.slice(end, end + 3))![0].length;
@@ -218,7 +221,11 @@ export function readPercent(text: string, start: number, end: number, floor: num
   const named = sentence.replace(/(?<!\p{L})(?:no|without(?:[^\S\n]+an?)?|not[^\S\n]+an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:compressors?|refrigerants?)(?!\p{L})/giu, ' ');
   // (Heat pumps spoken of in general, or set against the device, name no heat pump here: "Heat pumps are
   // routinely described as more than 100 % efficient, and we see no reason why a solid-state emitter …".)
-  const heatPump = HEAT_PUMP_RE.test(sentence.replace(GENERIC_HEAT_PUMPS_RE, ' ')) || (COMPRESSOR_OR_REFRIGERANT_RE.test(named) && HEATING_OUTPUT_RE.test(sentence) && !BURNER_RE.test(sentence));
+  // ("no outdoor unit, no refrigerant": a heat pump's parts said to be absent name none.)
+  // (Where the text says the heat pump's parts are absent and names none, its radiators or flow temperature
+  // are a heater's.)
+  const deniedPump = new RegExp(NO_HEAT_PUMP_PARTS_RE.source, 'iu').test(text) && !NAMED_HEAT_PUMP_RE.test(text.replace(NO_HEAT_PUMP_PARTS_RE, ' '));
+  const heatPump = (!deniedPump && HEAT_PUMP_RE.test(sentence.replace(GENERIC_HEAT_PUMPS_RE, ' ').replace(NO_HEAT_PUMP_PARTS_RE, ' '))) || (COMPRESSOR_OR_REFRIGERANT_RE.test(named) && HEATING_OUTPUT_RE.test(sentence) && !BURNER_RE.test(sentence));
   // ("A new oil boiler would have cost least to fit, about 92 % efficient", in a text on the heat pump
   // chosen instead: the percentage's own sentence names a burner and no heat pump — a burner's efficiency.)
   const burnerHere = value <= 100 && BURNER_RE.test(own) && !NAMED_HEAT_PUMP_RE.test(own) && !HEAT_PUMP_RE.test(own);

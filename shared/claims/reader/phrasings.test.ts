@@ -1566,6 +1566,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The punch press delivers 1.2 kJ per stroke at 40 strokes per minute from a 2.2 kW motor.',
     'The laser fires 5 mJ pulses at 1 kHz, drawing 60 W from its supply.',
     'The e-bike\'s 36 V 10 Ah pack took 0.42 kWh from the wall to charge.',
+    'A small converter takes 12 volts at 8 amps from the van battery and turns it into 48 volts at up to 1.9 amps for the compressor fridge.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

@@ -15,7 +15,7 @@ export interface RoleWords {
 export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'excess',
-    before: ['excess', 'surplus', 'extra', 'net gain', 'net surplus', 'anomalous', 'unexplained', 'over-unity', 'overunity', '(?:output|out) exceeds? (?:the |its )?(?:input|consumption|supply) by', 'exceeds? (?:the |its )?(?:input|consumption|supply) by'],
+    before: ['excess', 'surplus', 'extra', 'net gain', 'net surplus', 'anomalous', 'unexplained', 'over-unity', 'overunity', '(?:output|out) exceed(?:s|ed|ing)? (?:the |its )?(?:input|consumption|supply) by', 'exceed(?:s|ed|ing)? (?:the |its )?(?:(?:electrical|electric|power|drive) )?(?:input|consumption|supply)(?: power)? by(?: (?:about|some|roughly|between|from))?'],
     after: ['excess', 'surplus', 'extra', '(?:from|out of) (?:nowhere|thin air|nothing)', 'more(?= than)', 'more(?= (?:[\\p{L}-]+ ){1,3}?than (?:that|this|it|what (?:it|they) (?:draws?|takes?|uses?|consumes?|gets?))(?!\\p{L}))', 'above(?= (?:the|its) input)', 'in excess', 'net gain',
       // "released 5.1 W more heat than the alumina dummy at the same input": more than a control run.
       'more(?= (?:[\\p{L}-]+ ){0,3}?than (?:the|a|an|its) (?:[\\p{L}-]+ ){0,2}?(?:dumm(?:y|ies)|blanks?|controls?|reference|inactive|calibration) )',
