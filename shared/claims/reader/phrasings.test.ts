@@ -1581,6 +1581,10 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     expect(breaks('The pumped-storage station used 1.9 TWh for pumping and generated 2.1 TWh last year.')).toBe(true);
     expect(breaks('Our fuel-free engine takes 60 W from the battery and its engine output is 300 W.')).toBe(true);
     expect(breaks('The machine used 3 kWh to make 10 kWh.')).toBe(true);
+    // (a reactor is no unnamed heat pump; 'exceeded the input by' is an excess; a car engine compared with is not the device's)
+    expect(breaks('The nickel-hydrogen reactor returns roughly 1.3 units of heat for every unit of electricity; input was 200 W.')).toBe(true);
+    expect(breaks("The pump motor's electrical input was 50.0 W; the heat carried off by the cooling water exceeded the input by 5 to 15 W.")).toBe(true);
+    expect(breaks("Working across a difference of 15 degrees between surface water at 25 °C and deep water, the engine turns 12 per cent of the heat it takes in into electricity, 'about what a car engine manages'.")).toBe(true);
     // (a push that starts a wheel is no supply of what it gives after)
     expect(breaks('Self-running gravity wheel. After one push its shifting weights keep it turning and drive a 200 W alternator, with nothing connected at the input.')).toBe(true);
   });
