@@ -94,14 +94,14 @@ const CRAFT_ALL_RE = /(?<!\p{L})(?:(?:survey|hobby|model|small|RC|R\/C|radio[- ]
 const OWN_VOICE_RE = /(?<!\p{L})(?:our|ours|we|us|my|mine)(?!\p{L})/iu;
 /** A sentence that compares, asks, or moves on to another subject: its propulsion words are not the claim's. */
 const ASIDE_SENTENCE_RE =
-  /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|versus|vs(?:\.|(?![-\d]))|unlike|rather than|instead of|replaces?|replacing|will replace|(?:it's|it is|it’s|that's|that is|that’s|much|just|rather|a bit|somewhat) like|as if|akin to|analog(?:y|ous)|imagine)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month|lecture|lesson|class|chapter|episode|issue|talk)|also on the agenda)|(?<!\p{L})(?:(?:must|should|need to|needs to|to|first) (?:exclude|rule out)|alternative explanations?|candidate explanations?|artefacts?|artifacts?)(?!\p{L})|^[\s"“'‘>*•-]*(?:(?:an?|the)[\s-]+)?(?:(?:most|all|ordinary|conventional|chemical|electric|ion|plasma|Hall|today's|existing|other|typical|standard|commercial)[\s-]+)*(?:rockets?|engines?|thrusters?|drives|spacecraft|propulsion(?:[^\S\n]+systems?)?|satellites)[^\S\n]+(?:are|is|have|has|need|needs|must|carry|carries|use|uses|burn|burns|work|works|get|gets|throw|throws|depend|depends|rel(?:y|ies)|require|requires|gives?|produces?|delivers?|manages?|reach(?:es)?)(?!\p{L})/iu;
+  /(?<!\p{L})(?:compare[sd]?|comparison|than|next to|times (?:an?|that of|those of)|versus|vs(?:\.|(?![-\d]))|unlike|rather than|instead of|replaces?|replacing|will replace|(?:it's|it is|it’s|that's|that is|that’s|much|just|rather|a bit|somewhat) like|as if|akin to|analog(?:y|ous)|imagine)(?!\p{L})|\?[\s"'”’)]*$|^[\s>*•-]*(?:next (?:week|time|session|month|lecture|lesson|class|chapter|episode|issue|talk)|also on the agenda)|(?<!\p{L})(?:(?:must|should|need to|needs to|to|first) (?:exclude|rule out)|alternative explanations?|candidate explanations?|artefacts?|artifacts?)(?!\p{L})|^[\s"“'‘>*•-]*(?:(?:an?|the)[\s-]+)?(?:(?:most|all|ordinary|conventional|chemical|electric|ion|plasma|Hall|today's|existing|other|typical|standard|commercial)[\s-]+)*(?:rockets?|engines?|thrusters?|drives|spacecraft|propulsion(?:[^\S\n]+systems?)?|satellites)[^\S\n]+(?:are|is|have|has|need|needs|must|carry|carries|use|uses|burn|burns|work|works|get|gets|throw|throws|depend|depends|rel(?:y|ies)|require|requires|gives?|produces?|delivers?|manages?|reach(?:es)?)(?!\p{L})/iu;
 /**
  * Where the text says plainly that nothing is thrown out, the words of propellant that count are those of
  * the claim's own sentences: not of a comparison ("how does that compare with an ion engine?"), a question,
  * or an agenda line ("Next week: Hall thruster erosion").
  */
 function onlyTheClaim(text: string, words: string): string {
-  if (!EXPLICIT_NO_PROPELLANT_RE.test(text)) return words;
+  if (!EXPLICIT_NO_PROPELLANT_RE.test(text) && !/(?<!\p{L})(?:no|without(?: any)?) (?:exhaust|expelled mass)(?!\p{L})/iu.test(text)) return words;
   return words
     .split(/(?<=[.!?]["'”’)\]]*)\s+|\n/u)
     // (A sentence in the claimant's own voice is never an aside: "Unlike those drives, our thruster uses xenon";

@@ -467,7 +467,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     const prev = drafts[drafts.length - 1];
     // (A temperature and a difference are one kind here: "4 °C (39 °F)", "a 20 °C (36 °F) lift".)
     const temperatures = suffix?.type === 'unit' && suffix.form.kind === 'temperature' && prev && (prev.kind === 'temperature' || prev.kind === 'temperature-difference');
-    if (prev && (prev.kind === kind || temperatures) && /^[^\S\n]*[([][^\S\n]*(?:about|approx\.?|~|≈|or)?[^\S\n]*$/.test(text.slice(prev.end, start))) {
+    // (Or after a comma and "or": "980 W, or 1,33 PS, of useful work".)
+    if (prev && (prev.kind === kind || temperatures) && /^[^\S\n]*(?:[([][^\S\n]*(?:about|approx\.?|~|≈|or)?|,[^\S\n]*or(?:[^\S\n]+(?:about|roughly|some|nearly))?)[^\S\n]*$/.test(text.slice(prev.end, start))) {
       try {
         const b = parseQuantity(temperatures && suffix?.type === 'unit' && prev.kind === 'temperature' ? unitQuantity(t.num, suffix).quantity : quantity, FIGURE_SI_UNIT[prev.kind]);
         // (Either end of a range: "120–150 °C (302 °F)".)

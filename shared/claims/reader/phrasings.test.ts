@@ -1581,6 +1581,9 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     expect(breaks('The pumped-storage station used 1.9 TWh for pumping and generated 2.1 TWh last year.')).toBe(true);
     expect(breaks('Our fuel-free engine takes 60 W from the battery and its engine output is 300 W.')).toBe(true);
     expect(breaks('The machine used 3 kWh to make 10 kWh.')).toBe(true);
+    // (a restatement after ', or' is one figure; 'of useful work' is what comes out; a thruster compared with an ion engine has none)
+    expect(breaks('The weighted wheel raises a load every 3 seconds, 980 W, or 1,33 PS, of useful work, while its starter motor takes only 2,1 A from the 230 V network.')).toBe(true);
+    expect(breaks('Sealed housing, no exhaust of any kind: 42 mN of steady thrust with 35 W drawn from the onboard pack, roughly twenty times a typical gridded ion engine.')).toBe(true);
     // (a reactor is no unnamed heat pump; 'exceeded the input by' is an excess; a car engine compared with is not the device's)
     expect(breaks('The nickel-hydrogen reactor returns roughly 1.3 units of heat for every unit of electricity; input was 200 W.')).toBe(true);
     expect(breaks("The pump motor's electrical input was 50.0 W; the heat carried off by the cooling water exceeded the input by 5 to 15 W.")).toBe(true);

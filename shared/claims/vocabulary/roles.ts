@@ -104,6 +104,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     after: [
       // "1.5 kW of hydraulic power at the duty point": what a pump gives the water.
       'of hydraulic (?:power|output|work)',
+      // "980 W, or 1.33 PS, of useful work": what the device gives.
+      '(?:,[^\\S\\n]*or[^\\S\\n]+[\\d.,]+[^\\S\\n]*[\\p{L}]{1,4},[^\\S\\n]*)?of useful (?:work|power|output|mechanical (?:work|power)|lifting (?:work|power))',
       // A rating said before what makes power: "the 600 MW coal unit", "a 5 kW genset" (not a motor or engine, which may be what drives the device).
       '(?<!(?:of|from|off|by|on)[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+|a[^\\S\\n]+|an[^\\S\\n]+)?)(?:(?!(?:from|off|of|to|by|at|in|on|into|onto|with|for|the|a|an|its|their|our|and|or|per)\\b)[\\w-]+ ){0,2}(?:power plants?|power stations?|plants?|(?:coal|steam|gas|nuclear|geothermal|hydro|wind|solar|CCGT|generating|(?:coal|gas|oil|lignite|biomass)-fired) units?|gensets?|generating sets?|generators?|turbines?)(?! (?:draws?|takes?|consumes?|uses?|needs?|is fed|was fed|runs? on))',
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:delivers|delivered|produces|produced|gives|gave|generates|generated|puts out|returns|returned|yields|yielded)',
