@@ -135,3 +135,14 @@ test("heat out and electricity in from a machine the text does not name wait for
   const made = 'An electric resistance water heater gave 12 kW of heat for 3 kW of electricity.';
   expect(runClaimChecks(extractFigures(made), { text: made }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
 });
+
+describe("a store's size with its state of charge moved is the energy moved", () => {
+  test("'charging the 75 kWh pack from 10 % to 80 % took 52.5 kWh at the meter': 70 % of 75 kWh went in", () => {
+    const text = 'Charging the 75 kWh pack of the Larch van from 10 % to 80 % took 52.5 kWh at the meter, plus about 10 % losses.';
+    const f = extractFigures(text);
+    expectWellFormed(text, f);
+    // (80 − 10) % × 75 kWh = 52.5 kWh.
+    expect(f.find((x) => x.kind === 'energy' && x.derived)?.si).toBeCloseTo(52.5 * KWH, 3);
+    expect(runClaimChecks(f, { text }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+});

@@ -165,6 +165,28 @@ export function asideChanges(text: string, drafts: Draft[]): void {
   }
 }
 
+/** A store's size, then its state of charge moved: "the 75 kWh pack from 10 % to 80 %", "a 13.5 kWh battery, 20–90 %". */
+const STORE_AFTER_RE = /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+)?(?:packs?|batter(?:y|ies)|banks?|stores?|cells?|accumulators?)(?!\p{L})/iu;
+const CHARGE_SPAN_RE = /^[^.;!?\n]{0,40}?(?<!\p{L})(?:from[^\S\n]+)?(\d{1,3}(?:[.,]\d+)?)[^\S\n]*%?[^\S\n]*(?:to|–|-|—)[^\S\n]*(\d{1,3}(?:[.,]\d+)?)[^\S\n]*%/u;
+
+/**
+ * "Charging the 75 kWh pack from 10 % to 80 % took 52.5 kWh at the meter": the energy that went into or
+ * out of the store is its size times the change of its state of charge (here 70 % of 75 kWh), not its size.
+ */
+export function storeChargeSpans(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (d.kind !== 'energy' || d.derived || d.role === 'aside' || d.upper !== undefined) continue;
+    if (!STORE_AFTER_RE.test(text.slice(d.end, d.end + 30))) continue;
+    const m = CHARGE_SPAN_RE.exec(text.slice(d.end, d.end + 70));
+    if (!m) continue;
+    const [a, b] = [Number(m[1].replace(',', '.')), Number(m[2].replace(',', '.'))];
+    const si = siOf(d);
+    if (si === null || !(a >= 0 && a <= 100 && b >= 0 && b <= 100) || a === b) continue;
+    d.quantity = typedSi((Math.abs(b - a) / 100) * si, 'J');
+    d.derived = `energy moved = ${Math.abs(b - a)} % of the store's ${text.slice(d.start, d.end)} (state of charge from ${a} % to ${b} %)`;
+  }
+}
+
 /** Before an energy spent making a device: "its embodied energy of 1,500 kWh", "grey energy", "the energy used to build it". */
 const EMBODIED_BEFORE_RE =
   /(?<!\p{L})(?:embodied|embedded|grey|gray|manufactur\w*|production|construction)[^\S\n]+(?:energy|carbon|emissions)(?:[^\S\n]+(?:of|is|was|at|:|about|around|roughly|some|nearly)){0,2}[^\S\n]*$|(?:energy|it)[^\S\n]+(?:(?:used|needed|spent|it[^\S\n]+took|that[^\S\n]+went)[^\S\n]+)?(?:to|in)[^\S\n]+(?:build(?:ing)?|manufactur\w*|construct(?:ing)?|fabricat\w*)[^\S\n]+(?:it|them|the[^\S\n]+[\p{L}-]+)(?:[^\S\n]+(?:was|is|of|:|about|around|roughly|some|nearly)){0,2}[^\S\n]*$/iu;

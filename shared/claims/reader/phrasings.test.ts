@@ -1567,6 +1567,9 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The laser fires 5 mJ pulses at 1 kHz, drawing 60 W from its supply.',
     'The e-bike\'s 36 V 10 Ah pack took 0.42 kWh from the wall to charge.',
     'A small converter takes 12 volts at 8 amps from the van battery and turns it into 48 volts at up to 1.9 amps for the compressor fridge.',
+    'The motor is rated 1.1 kW and gives 7.5 N·m at 1,440 rpm at full load.',
+    'Charging the 75 kWh pack from 10 % to 80 % took 52.5 kWh at the meter plus about 10 % losses.',
+    'The compressor delivers 500 L/min of air at 8 bar from an 11 kW motor.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

@@ -92,3 +92,17 @@ describe('a flow against a head or a pressure is a hydraulic power', () => {
     expectRelClose(derivedOf('The Wend booster pump gives 2 m³/h at 3 bar.', 'power')!.si, (2 / 3600) * 3e5, SEVEN);
   });
 });
+
+describe('a stated power within 10 % of the product is the same flow said outright', () => {
+  test("'20 N·m at 300 rpm … the display shows about 630 W' is one power, not an input beside an output", () => {
+    const text = "The Halden gym bike's flywheel turns at 300 rpm against 20 N·m when you pedal hard; the display shows about 600 W.";
+    const f = extractFigures(text);
+    // 20 × 300 × 2π/60 = 628.3 W, within 10 % of 600 W.
+    expect(f.find((x) => x.derived)?.role).toBe('aside');
+    expect(verdictOf(text)).not.toBe('breaks');
+  });
+  test('but a power the words put on the other side is still compared', () => {
+    // 1.65 × 1850 × 2π/60 = 319.7 W against 300 W drawn (within 10 %, but said to be drawn).
+    expect(verdictOf('The Brindle motor draws 300 W; on a band brake it gives 1.65 N·m at 1,850 rpm.')).toBe('breaks');
+  });
+});

@@ -141,6 +141,14 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
     const start = Math.min(a.start, b.start);
     const end = Math.max(a.end, b.end);
     if (overlaps(drafts, start, end, kind)) return;
+    // A stated figure within 10 % of the product, on no other side by its words, is the same flow said
+    // outright ("1.65 N·m at 1,850 rpm … that's 319.7 W on the shaft"; "the display shows about 630 W";
+    // "rated 1.1 kW"): the product is set aside as its working, and the stated one takes its side.
+    const same = drafts.find((d) => d.kind === kind && !d.derived && d.role !== 'aside' && (d.role === null || d.role === role) && Math.abs((siOf(d) ?? NaN) - si) <= 0.1 * Math.max(si, siOf(d) ?? 0));
+    if (same) {
+      if (same.role === null && role !== 'aside') same.role = role;
+      role = 'aside';
+    }
     insertByStart(drafts, { start, end, kind, quantity: typedSi(si, FIGURE_SI_UNIT[kind]), role, derived, assumption });
   };
   const roleAround = (start: number, end: number): FigureRole => {
