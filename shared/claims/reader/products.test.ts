@@ -106,3 +106,13 @@ describe('a stated power within 10 % of the product is the same flow said outrig
     expect(verdictOf('The Brindle motor draws 300 W; on a band brake it gives 1.65 N·m at 1,850 rpm.')).toBe('breaks');
   });
 });
+
+describe('a mass lifted at a speed is a power (P = m g v)', () => {
+  test("'lifts 60 kg at 1 m/s' on roughly 750 W is within the first law; 'raises a 100 kg load at 1 m/s' on 500 W is not", () => {
+    const text = 'The Marram hoist motor uses roughly 750 W and lifts 60 kg at 1 m/s.';
+    // 60 kg × 9.80665 m/s² × 1 m/s = 588.399 W (g_n, SI Brochure).
+    expectRelClose(derivedOf(text, 'power')!.si, 60 * 9.80665, SEVEN);
+    expect(verdictOf(text)).toBe('consistent');
+    expect(verdictOf('The Marram winch motor draws 500 W and raises a 100 kg load at 1 m/s.')).toBe('breaks');
+  });
+});

@@ -87,6 +87,8 @@ const METRE_RE = U('m|met(?:re|er)s?');
 const PER_CYCLE_AFTER_RE = /^[^\S\n]*(?:(?:per|a|each|every|\/)[^\S\n]*(?:cycle|pulse|stroke|shot|discharge|flash|burst|firing|revolution|rev|beat)|(?:laser[^\S\n]+)?(?:pulses|shots|flashes|bursts))(?!\p{L})/iu;
 const PER_CYCLE_BEFORE_RE = /(?<!\p{L})(?:each|every|a[^\S\n]+single|one|per)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:cycle|pulse|stroke|shot|discharge|flash|burst|firing|revolution|beat)[^.;!?\n]{0,30}$/iu;
 
+/** Lifting verbs before a mass: "lifts 60 kg", "raises a 150 kg load", "hoists". */
+const LIFT_BEFORE_RE = /(?<!\p{L})(?:lifts?|lifted|lifting|raises?|raised|raising|hoists?|hoisted|hoisting|hauls?[^\S\n]+up|winch(?:es|ed)?[^\S\n]+up)[^\S\n]+(?:(?:a|an|the|its)[^\S\n]+)?$/iu;
 /** A store's size: "48 V 14 Ah frame battery", "pack is 48 V 17.5 Ah", "a 3,000 mAh cell", "capacity". */
 const STORE_SIZE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|cells?|banks?|capacity|rated|nominal|power[- ]?banks?|accumulators?)(?!\p{L})/iu;
 /** A pump (its water power is what it gives) or a turbine or wheel (what it takes). */
@@ -201,6 +203,22 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
     } else {
       add(f, h, 'power', f.value * h.value, `power = flow × pressure (${formatQuantity(f.value, 'm^3/s')} × ${formatQuantity(h.value, 'Pa')})`, role);
     }
+  }
+
+  // A mass lifted at a speed: P = m g v ("lifts 60 kg at 1 m/s"); the mass is the load's, set aside.
+  for (const m of drafts.filter((d) => d.kind === 'mass' && !d.derived && d.role !== 'aside')) {
+    if (!LIFT_BEFORE_RE.test(text.slice(Math.max(0, m.start - 40), m.start))) continue;
+    const v = drafts.find((d) => d.kind === 'speed' && !d.derived && d.start > m.end && joined(text, m, d) && /^[^\S\n]*(?:at|,)[^\S\n]+(?:(?:about|some|roughly|a[^\S\n]+steady)[^\S\n]+)?$/iu.test(text.slice(m.end, d.start).replace(/^[^\S\n]+(?:load|weight|mass|crate|block|pallet|bucket)s?/iu, '')));
+    const kg = siOf(m);
+    const ms = v ? siOf(v) : null;
+    if (!v || kg === null || ms === null) continue;
+    const role = roleAround(m.start, v.end) ?? 'out';
+    const start = m.start;
+    const end = v.end;
+    if (overlaps(drafts, start, end, 'power')) continue;
+    m.role = 'aside';
+    v.role = 'aside';
+    insertByStart(drafts, { start, end, kind: 'power', quantity: typedSi(kg * G_N * ms, 'W'), role: role === 'in' ? 'out' : role, derived: `power = mass × g × speed (${formatQuantity(kg, 'kg')} × 9.80665 m/s² × ${formatQuantity(ms, 'm/s')})` });
   }
 
   // An energy said per cycle that the reader did not keep ("2 J per pulse at 50 Hz"): P = E f.

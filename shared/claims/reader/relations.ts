@@ -427,7 +427,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   }
   // "reduces its weight on the scale by 120 g", "reads 40 g lighter": a force, in grams-force.
   for (const d of drafts) {
-    if (d.kind !== 'mass') continue;
+    // (Not a load lifted at a stated speed, already a power's factor: "lifts 60 kg at 1 m/s".)
+    if (d.kind !== 'mass' || drafts.some((p) => p.start === d.start && p.derived?.startsWith('power = mass × g × speed'))) continue;
     const before = text.slice(Math.max(0, d.start - 60), d.start);
     const after = text.slice(d.end, d.end + 30);
     // "lifts 3 lbs off the scale", "lifted its own 2 kg frame": a weight held up, for a drive (not a rocket's or a crane's load).
