@@ -146,20 +146,42 @@ function harvestedOut(text: string, inF: Figure, outF: Figure): boolean {
   if (!text || inF.start === null || inF.end === null || outF.start === null || outF.end === null) return false;
   const outNear = text.slice(Math.max(0, outF.start - 50), outF.end + 30);
   const inSentence = sentenceAround(text, inF.start, inF.end);
+  // ("… while their house used 2,400 kWh from the grid", "the village uses 60 kW at peak": a household's or a
+  // community's own use, said of it by name, may share the harvester's sentence.)
+  const consumerSaid = CONSUMER_USE_BEFORE_RE.test(text.slice(Math.max(0, inF.start - 45), inF.start));
   return (
     RENEWABLE_RE.test(text) &&
     HARVESTER_RE.test(outNear) &&
-    HOUSEHOLD_IMPORT_RE.test(text.slice(Math.max(0, inF.start - 50), inF.end + 40)) &&
-    !HARVESTER_RE.test(text.slice(Math.max(0, inF.start - 40), inF.end + 30)) &&
-    !sameSentence(text, inF, outF) &&
-    !HARVESTER_RE.test(inSentence)
+    (consumerSaid || HOUSEHOLD_IMPORT_RE.test(text.slice(Math.max(0, inF.start - 50), inF.end + 40))) &&
+    (consumerSaid || (!HARVESTER_RE.test(text.slice(Math.max(0, inF.start - 40), inF.end + 30)) && !sameSentence(text, inF, outF) && !HARVESTER_RE.test(inSentence)))
   );
 }
 /** Sunlight, wind or water harvested, named anywhere in the text. */
 const RENEWABLE_RE = /(?<!\p{L})(?:solar|PV|photovoltaic|sun(?:light|shine)?|wind[- ]?turbines?|windmills?|hydro\w*|water[- ]?wheels?|tidal|wave[- ]power)(?!\p{L})/iu;
+/** A household's or a community's own use, said of it just before the figure: "their house used", "the village uses". */
+const CONSUMER_USE_BEFORE_RE =
+  /(?<!\p{L})(?:the|their|our|my|your|his|her|a|each)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:village|town|house|home|homes|household|households|farm|school|site|community|island|cabin|cottage|building|office|factory|hamlet|flat)[^\S\n]+(?:uses|used|consumes|consumed|needs|needed|takes|took|draws|drew)(?:[^\S\n]+(?:about|some|roughly|only|just|up[^\S\n]+to|around))?[^\S\n]*$/iu;
 /** What a household takes from the grid: "the house used 410 kWh from the grid", "import 3.2 kWh". */
 const HOUSEHOLD_IMPORT_RE = /(?<!\p{L})(?:from[^\S\n]+the[^\S\n]+(?:grid|mains|network)|grid[^\S\n]+import|imports?|imported|the[^\S\n]+(?:house|home|household|building|farm|site|cabin|cottage|flat|shed|boat|van|caravan|camper|barn|office|workshop|school|loads?)[^\S\n]+(?:used|uses|took|takes|drew|draws|consumed|consumes|needed|needs))(?!\p{L})/iu;
 const sameSentence = (text: string, a: Figure, b: Figure) => sentenceAround(text, a.start!, a.end!) === sentenceAround(text, b.start!, b.end!);
+
+/** An item's label: "Model A", "Fan B", "Unit 2", "Option III". */
+const ITEM_LABEL_RE = /(?<![\p{L}\d])(?:Model|Fan|Unit|Option|Version|Type|Heater|Pump|Device|Product|Sample|Prototype|Panel|Motor|Brand|Design|System|Kit|Rig|Variant|Candidate|Bid|Offer|Quote)[^\S\n]+([A-Z]|\d{1,2}|[IVX]{1,4})(?![\p{L}\d])/gu;
+/** The last item label before a figure in its sentence or line, if any. */
+function itemOf(text: string, f: Figure): string | null {
+  if (f.start === null) return null;
+  const from = Math.max(0, f.start - 80, text.lastIndexOf('\n', f.start - 1) + 1);
+  const before = text.slice(from, f.start).split(/[.!?](?=\s)/u).pop() ?? '';
+  let last: string | null = null;
+  for (const m of before.matchAll(ITEM_LABEL_RE)) last = m[0].replace(/\s+/gu, ' ');
+  return last;
+}
+/** The input and the output are two labelled items' ("Model A uses 1.2 kW …; Model B gives 1.5 kW"): no one device's ledger. */
+function twoItems(text: string, inF: Figure, outF: Figure): boolean {
+  if (!text || inF.derived || outF.derived) return false;
+  const [a, b] = [itemOf(text, inF), itemOf(text, outF)];
+  return a !== null && b !== null && a !== b;
+}
 
 /** An output said as a burst or a peak ("can deliver 2 MW for short periods"): no steady output over a run. */
 function saidInBursts(text: string, f: Figure): boolean {
@@ -245,7 +267,9 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     // charge power ("charged overnight at 20 kW … can release it at 250 kW") is no claim of more out than in.
     const storeRates = bothPower && !duration && ((STORE_RE.test(text) && energy.some((f) => f.role !== 'aside')) || phasesApart(text, inF, outF));
     const auxIn = ((bothPower ? !duration : !!eIn && !!eOut) && auxiliaryInput(text, inF, outF)) || harvestedOut(text, inF, outF) || engineOutputBesideAccessory(text, inF, outF);
-    if (auxIn) {
+    if (twoItems(text, inF, outF)) {
+      notes.push(`The input (“${inF.text}”) and the output (“${outF.text}”) are said of two different items the text names; no ledger of one device is drawn from them.`);
+    } else if (auxIn) {
       needs.push(need('first-law', ['the power of the outside flow the plant converts (wind, sunlight, water, fuel)'], 'The input the text gives feeds only the plant’s own controls, fans or pumps, not what it converts.', [inF, outF]));
     } else if (storeRates) {
       needs.push(need('first-law', ['the energy put into the store and the energy got out of it (or how long it charged and how long it gave out power)'], 'A store can give out power faster than it takes it in; only the energies over a full cycle are bounded.', [inF, outF]));

@@ -6,7 +6,7 @@
  * the speed of light") added; then the relations (comparisons.ts, relations.ts) and the SI values.
  */
 import { multipliedOut } from './products';
-import { asideChanges, asideEmbodied, storeChargeSpans, asidePerDistance, meterReadings, restatedEnergies, statedError } from './ledgers';
+import { asideChanges, asideEmbodied, refills, storeChargeSpans, asidePerDistance, meterReadings, restatedEnergies, statedError } from './ledgers';
 import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
 import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
@@ -565,6 +565,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   asideChanges(text, drafts);
   asideEmbodied(text, drafts);
   storeChargeSpans(text, drafts);
+  refills(text, drafts);
   relate(text, drafts);
   rolesFromWordLabels(text, drafts);
   restatedEnergies(text, drafts);

@@ -187,6 +187,33 @@ export function storeChargeSpans(text: string, drafts: Draft[]): void {
   }
 }
 
+const TIMES_WORDS: Record<string, number> = { once: 1, twice: 2, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, eleven: 11, twelve: 12 };
+const timesValue = (w: string | undefined): number | null => (w === undefined ? null : /^\d+(?:[.,]\d+)?$/u.test(w) ? Number(w.replace(',', '.')) : (TIMES_WORDS[w.toLowerCase()] ?? null));
+/** Before a store filled: "refilled a phone with a", "charges a 15 Wh tablet". */
+const REFILL_BEFORE_RE = /(?<!\p{L})(?:re)?(?:fill(?:s|ed|ing)?|charg(?:es|ed|ing))[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|my|your|our|its)[^\S\n]+[^.;!?\n]{0,30}$/iu;
+/** After it: "… between three and four times", "… about 4.5 times", "… twice". */
+const TIMES_AFTER_RE = /^[^.;!?\n\d]{0,30}?(?<!\p{L})(?:(?:between|about|roughly|around|some|nearly|almost|up[^\S\n]+to)[^\S\n]+)?(\d+(?:[.,]\d+)?|once|twice|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve)(?:[^\S\n]*(?:and|to|or|–|-)[^\S\n]*(\d+(?:[.,]\d+)?|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve))?(?:[^\S\n]+times)?(?!\p{L})/iu;
+
+/**
+ * "refilled a phone with a 15 Wh battery between three and four times": what the store gave is the
+ * other battery's size times the refills (here 45–60 Wh), not the size itself.
+ */
+export function refills(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (d.kind !== 'energy' || d.derived || d.role === 'aside' || d.upper !== undefined) continue;
+    if (!REFILL_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start))) continue;
+    const m = TIMES_AFTER_RE.exec(text.slice(d.end, d.end + 70));
+    if (!m || !(/times/iu.test(m[0]) || /^(?:once|twice)$/iu.test(m[1]))) continue;
+    const [a, b] = [timesValue(m[1]), timesValue(m[2])];
+    const si = siOf(d);
+    if (a === null || si === null || a <= 0) continue;
+    d.quantity = typedSi(a * si, 'J');
+    if (b !== null && b > a) d.upper = typedSi(b * si, 'J');
+    d.role = 'out';
+    d.derived = `energy given = ${text.slice(d.start, d.end)} × ${b !== null && b > a ? `${a} to ${b}` : a} refills`;
+  }
+}
+
 /** Before an energy spent making a device: "its embodied energy of 1,500 kWh", "grey energy", "the energy used to build it". */
 const EMBODIED_BEFORE_RE =
   /(?<!\p{L})(?:embodied|embedded|grey|gray|manufactur\w*|production|construction)[^\S\n]+(?:energy|carbon|emissions)(?:[^\S\n]+(?:of|is|was|at|:|about|around|roughly|some|nearly)){0,2}[^\S\n]*$|(?:energy|it)[^\S\n]+(?:(?:used|needed|spent|it[^\S\n]+took|that[^\S\n]+went)[^\S\n]+)?(?:to|in)[^\S\n]+(?:build(?:ing)?|manufactur\w*|construct(?:ing)?|fabricat\w*)[^\S\n]+(?:it|them|the[^\S\n]+[\p{L}-]+)(?:[^\S\n]+(?:was|is|of|:|about|around|roughly|some|nearly)){0,2}[^\S\n]*$/iu;

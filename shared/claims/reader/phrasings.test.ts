@@ -1570,6 +1570,11 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The motor is rated 1.1 kW and gives 7.5 N·m at 1,440 rpm at full load.',
     'Charging the 75 kWh pack from 10 % to 80 % took 52.5 kWh at the meter plus about 10 % losses.',
     'The compressor delivers 500 L/min of air at 8 bar from an 11 kW motor.',
+    'Model A uses 1.2 kW and heats the room to 21 °C; Model B gives 1.5 kW of heat and costs less to buy.',
+    'Our neighbour\'s 4 kW solar array exported 3,100 kWh last year while their house used 2,400 kWh from the grid.',
+    'The laptop charger is rated 65 W; the laptop\'s battery is 56 Wh and lasts about 10 hours.',
+    'The hydro scheme\'s turbine gives 100 kW; the village uses 60 kW at peak and the rest goes to the grid.',
+    'The 74 Wh power bank refilled a phone with a 15 Wh battery between three and four times.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1584,6 +1589,9 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     expect(breaks('The pumped-storage station used 1.9 TWh for pumping and generated 2.1 TWh last year.')).toBe(true);
     expect(breaks('Our fuel-free engine takes 60 W from the battery and its engine output is 300 W.')).toBe(true);
     expect(breaks('The machine used 3 kWh to make 10 kWh.')).toBe(true);
+    // (one labelled item, not two; a power bank said to refill more than it holds)
+    expect(breaks('Model A uses 1.2 kW and gives 1.5 kW of heat.')).toBe(true);
+    expect(breaks('The 10 Wh power bank took 12 Wh to charge and refilled a phone with a 15 Wh battery four times.')).toBe(true);
     // (a restatement after ', or' is one figure; 'of useful work' is what comes out; a thruster compared with an ion engine has none)
     expect(breaks('The weighted wheel raises a load every 3 seconds, 980 W, or 1,33 PS, of useful work, while its starter motor takes only 2,1 A from the 230 V network.')).toBe(true);
     expect(breaks('Sealed housing, no exhaust of any kind: 42 mN of steady thrust with 35 W drawn from the onboard pack, roughly twenty times a typical gridded ion engine.')).toBe(true);

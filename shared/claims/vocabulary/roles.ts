@@ -48,6 +48,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'for (?:a|an|the) (?:heat flow|heat flux|heat input|thermal input|heat supply) of', '(?:fuel|hydrogen|gas|heat|steam|propane|methane|diesel|biogas|natural gas) feed(?: rate)?', '(?:heat|thermal) input(?: of| was| is|:)?',
       // "received solar energy on its aperture totalling 27 kWh": the sunlight a collector or a cell takes.
       '(?:received|receives|receiving|intercepted|intercepts) (?:[\\w-]+ ){0,2}?(?:solar |sun |incident )?(?:energy|radiation|irradiation|sunlight|insolation|light)(?: [\\w-]+){0,4}? (?:totalling|totaling|amounting to|of)',
+      // "the laptop charger is rated 65 W": what a charger or an adapter gives is what the charged device takes.
+      '(?:charger|adapter|adaptor|PSU|power brick)(?: is| was)?(?: rated)?(?: at| for)?',
       // A worked line: "in = 2 kW × 2400 s = 4.8 MJ".
       '(?<![\\w-])in ?=',
       // "heat released in the boiler 21.4 GWh": the heat a station's boiler or a reactor's core gives its steam is the engine's input.
@@ -67,6 +69,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
       '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
       'inputs?', '(?:"|“)?drawn(?! from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point|a?ether|nowhere|nothing|thin air))', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 
+      // "a 65 W charger": see the same word before the figure.
+      '(?:USB[- ]?C |fast |wall |mains |GaN |travel )?(?:charger|adapter|adaptor|PSU|power brick)(?! (?:delivers|gives|puts|supplies|outputs))',
       // "about 120 W of sunlight falls on its folds": the light a panel takes.
       'of (?:sun)?light (?:falls|falling|fell|lands|landing|shines|shining|arrives|arriving|strikes|striking|hits|hitting)',
       // "2.0 mW of 405 nm light on the detector", "5 W of laser light onto the cell": the light a detector or a converter takes.
