@@ -1575,6 +1575,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The laptop charger is rated 65 W; the laptop\'s battery is 56 Wh and lasts about 10 hours.',
     'The hydro scheme\'s turbine gives 100 kW; the village uses 60 kW at peak and the rest goes to the grid.',
     'The 74 Wh power bank refilled a phone with a 15 Wh battery between three and four times.',
+    'Our OTEC pilot plant works across 22 °C and produces 100 kW gross, 35 kW net after the pumps.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

@@ -108,6 +108,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     after: [
       // "1.5 kW of hydraulic power at the duty point": what a pump gives the water.
       'of hydraulic (?:power|output|work)',
+      // "produces 100 kW gross, 35 kW net after the pumps": a plant's gross and net outputs.
+      '(?:gross|net)(?= *(?:[,.;)]|$|after|of|output|electrical|electric|to the grid|at the|once|when|and))(?! (?:input|consumption|import|draw|gain|surplus|excess))',
       // "980 W, or 1.33 PS, of useful work": what the device gives.
       '(?:,[^\\S\\n]*or[^\\S\\n]+[\\d.,]+[^\\S\\n]*[\\p{L}]{1,4},[^\\S\\n]*)?of useful (?:work|power|output|mechanical (?:work|power)|lifting (?:work|power))',
       // A rating said before what makes power: "the 600 MW coal unit", "a 5 kW genset" (not a motor or engine, which may be what drives the device).
