@@ -1576,6 +1576,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The hydro scheme\'s turbine gives 100 kW; the village uses 60 kW at peak and the rest goes to the grid.',
     'The 74 Wh power bank refilled a phone with a 15 Wh battery between three and four times.',
     'Our OTEC pilot plant works across 22 °C and produces 100 kW gross, 35 kW net after the pumps.',
+    'Spec: Heating capacity 7.0 kW / Power input 1.6 kW (A7/W35).',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

@@ -22,7 +22,9 @@ export const HEAT_PUMP_WORDS = [
   // A ductless split air conditioner, in the trade, is a heat pump that runs either way.
   'mini-?splits?', 'ductless (?:splits?|units?|systems?|heads?)',
   // A log's shorthand: "air/water HP prototype", "brine/water HP", "A/W HP", "HP-12 spot reading" beside a COP.
-  '(?:air|water|brine|ground|A|W|B)\\s*/\\s*(?:water|air|W|A)\\s+HPs?', '(?<![\\w-])(?<![\\d.,]\\s*)(?<!(?:horse ?power|brake|shaft)\\s*)HPs?(?=\\s+(?:prototype|bench|test|rig|install))', 'flow temperature', '(?<!(?:oil-filled|oil|electric|electrical|resistive|resistance|panel|storage|fan|convector|infrared|IR|bar|halogen|quartz)[- ])(?<!(?:incl\\.|including|excluding|plus) )(?<!(?:engine|car|truck|lorry|genset|generator|coolant|motor)(?:\x27s|\u2019s)?[- ])(?<!(?:out|up|away|off) (?:through|via) (?:the|its) )radiators?(?![\\s-]+(?:area|surface|fins?|panels?|emissivity|mass))', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:mov(?:es?|ing|ed)|pump(?:s|ing|ed)?|lift(?:s|ing|ed)?) heat', 'pump(?:s|ing|ed)? (?:the )?warmth',
+  '(?:air|water|brine|ground|A|W|B)\\s*/\\s*(?:water|air|W|A)\\s+HPs?', '(?<![\\w-])(?<![\\d.,]\\s*)(?<!(?:horse ?power|brake|shaft)\\s*)HPs?(?=\\s+(?:prototype|bench|test|rig|install))', 'flow temperature',
+  // A heat pump's rating point (EN 14511 notation): "A7/W35", "B0/W35", "A2/W55", "W10/W35".
+  '(?<![\\p{L}\\d])[ABW][-−]?\\d{1,2}\\s*/\\s*W\\d{2}(?![\\p{L}\\d])', '(?<!(?:oil-filled|oil|electric|electrical|resistive|resistance|panel|storage|fan|convector|infrared|IR|bar|halogen|quartz)[- ])(?<!(?:incl\\.|including|excluding|plus) )(?<!(?:engine|car|truck|lorry|genset|generator|coolant|motor)(?:\x27s|\u2019s)?[- ])(?<!(?:out|up|away|off) (?:through|via) (?:the|its) )radiators?(?![\\s-]+(?:area|surface|fins?|panels?|emissivity|mass))', 'underfloor', 'space heating', 'domestic hot water', 'DHW', '(?:mov(?:es?|ing|ed)|pump(?:s|ing|ed)?|lift(?:s|ing|ed)?) heat', 'pump(?:s|ing|ed)? (?:the )?warmth',
 ];
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
 export const COOLING_MACHINE_WORDS = [
