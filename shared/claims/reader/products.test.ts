@@ -116,3 +116,16 @@ describe('a mass lifted at a speed is a power (P = m g v)', () => {
     expect(verdictOf('The Marram winch motor draws 500 W and raises a 100 kg load at 1 m/s.')).toBe('breaks');
   });
 });
+
+describe('a mass lifted through a height in a time is a power (P = m g h / t)', () => {
+  test("'winds a two-kilogram bag of sand up one metre in one second' on 12 V and 3.5 A", () => {
+    const text = 'The Pennock wiper-motor winch runs on twelve volts and takes three and a half amps, and it winds a two-kilogram bag of sand up one metre in one second.';
+    // 2 kg × 9.80665 m/s² × 1 m ÷ 1 s = 19.6133 W, out of 12 V × 3.5 A = 42 W.
+    expectRelClose(extractFigures(text).find((x) => x.derived?.startsWith('power = mass × g × height'))!.si, 2 * 9.80665, SEVEN);
+    expect(verdictOf(text)).toBe('consistent');
+  });
+  test('and one that lifts more than its motor takes breaks the first law', () => {
+    // 150 kg × 9.80665 × 2 m ÷ 3 s = 980.7 W out of 230 V × 2.1 A = 483 W.
+    expect(verdictOf('The Gravel wheel raises a 150 kg load through 2 m in 3 seconds while its motor takes 2.1 A from the 230 V mains.')).toBe('breaks');
+  });
+});

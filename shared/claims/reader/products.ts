@@ -89,6 +89,10 @@ const PER_CYCLE_BEFORE_RE = /(?<!\p{L})(?:each|every|a[^\S\n]+single|one|per)[^\
 
 /** Lifting verbs before a mass: "lifts 60 kg", "raises a 150 kg load", "hoists". */
 const LIFT_BEFORE_RE = /(?<!\p{L})(?:lifts?|lifted|lifting|raises?|raised|raising|hoists?|hoisted|hoisting|hauls?[^\S\n]+up|winch(?:es|ed)?[^\S\n]+up)[^\S\n]+(?:(?:a|an|the|its)[^\S\n]+)?$/iu;
+/** A lift said around a mass: "takes a 250 kg pallet … up", "winds a bag up", "lifts", "raises", "hoists". */
+const LIFT_IN_SENTENCE_RE = /(?<!\p{L})(?:lifts?|lifted|lifting|raises?|raised|raising|hoists?|hoisted|hoisting|winds?[^.;!?\n]{0,40}?up|wound[^.;!?\n]{0,40}?up|hauls?[^.;!?\n]{0,40}?up|takes?[^.;!?\n]{0,50}?up[^\S\n]+(?:to|the|a|an|one|\d))(?!\p{L})/iu;
+/** A height after a number: "9 m", "one metre", "12 feet" (group 1 set for feet). */
+const HEIGHT_RE = /^[^\S\n]*(?:m|met(?:re|er)s?|(ft|feet|foot))(?![\p{L}\d/²³])/iu;
 /** A store's size: "48 V 14 Ah frame battery", "pack is 48 V 17.5 Ah", "a 3,000 mAh cell", "capacity". */
 const STORE_SIZE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|cells?|banks?|capacity|rated|nominal|power[- ]?banks?|accumulators?)(?!\p{L})/iu;
 /** A pump (its water power is what it gives) or a turbine or wheel (what it takes). */
@@ -219,6 +223,26 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
     m.role = 'aside';
     v.role = 'aside';
     insertByStart(drafts, { start, end, kind: 'power', quantity: typedSi(kg * G_N * ms, 'W'), role: role === 'in' ? 'out' : role, derived: `power = mass × g × speed (${formatQuantity(kg, 'kg')} × 9.80665 m/s² × ${formatQuantity(ms, 'm/s')})` });
+  }
+
+  // A mass lifted through a height in a time: P = m g h / t ("takes a 250 kg pallet up about 9 m in roughly
+  // 40 seconds", "winds a two-kilogram bag up one metre in one second").
+  for (const m of drafts.filter((d) => d.kind === 'mass' && !d.derived && !drafts.some((p) => p.start === d.start && p.derived))) {
+    const sentence = sentenceAround(text, m.start, m.end);
+    const sStart = text.indexOf(sentence);
+    if (sStart < 0 || !LIFT_IN_SENTENCE_RE.test(text.slice(Math.max(sStart, m.start - 60), m.end + 80))) continue;
+    const height = tokenize(sentence)
+      .map((t) => ({ t, u: HEIGHT_RE.exec(sentence.slice(t.numEnd, t.numEnd + 12)) }))
+      .find(({ t, u }) => u !== null && sStart + t.start > m.end && !t.skip);
+    const time = drafts.find((d) => d.kind === 'duration' && d.start > m.end && d.start < sStart + sentence.length && /(?<!\p{L})(?:in|every|each|within|taking)[^\S\n]+(?:(?:about|roughly|some|around|just|under|over|a[^\S\n]+bit[^\S\n]+(?:over|under))[^\S\n]+)?$/iu.test(text.slice(Math.max(0, d.start - 25), d.start)));
+    const [kg, s_] = [siOf(m), time ? siOf(time) : null];
+    if (!height || !time || kg === null || s_ === null || !(s_ > 0)) continue;
+    const h = Number(height.t.num) * (height.u![1] ? 0.3048 : 1);
+    if (!(h > 0)) continue;
+    const end = Math.max(time.end, sStart + height.t.numEnd + height.u![0].length);
+    if (overlaps(drafts, m.start, end, 'power')) continue;
+    m.role = 'aside';
+    insertByStart(drafts, { start: m.start, end, kind: 'power', quantity: typedSi((kg * G_N * h) / s_, 'W'), role: 'out', derived: `power = mass × g × height ÷ time (${formatQuantity(kg, 'kg')} × 9.80665 m/s² × ${formatQuantity(h, 'm')} ÷ ${formatQuantity(s_, 's')})` });
   }
 
   // An energy said per cycle that the reader did not keep ("2 J per pulse at 50 Hz"): P = E f.

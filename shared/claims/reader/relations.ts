@@ -199,7 +199,7 @@ const COOLING_DUTY_BEFORE_RE = /(?<!\p{L})(?:cooling|refrigerat(?:ing|ion)|freez
 
 /** After a figure: the load or network it goes into ("into the farm's distribution board", "to the grid"). */
 const INTO_LOAD_AFTER_RE =
-  /^[^\S\n]*,?[^\S\n]*(?:in)?to[^\S\n]+(?:(?:the|a|an|its|our|their)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(?:grid|distribution board|board|mains|loads?|dump load|battery|batteries|pack|battery pack|network|house|home|consumer unit|resistor|heater element)(?!\p{L})/iu;
+  /^[^\S\n]*,?[^\S\n]*(?:in)?to[^\S\n]+(?:(?:the|a|an|its|our|their)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(?:grid|distribution board|board|mains|loads?|dump load|battery|batteries|pack|battery pack|heaters?|lamps?|bulbs?|appliances?|network|house|home|consumer unit|resistor|heater element)(?!\p{L})/iu;
 
 /** A sheet's heading line of a side: "INPUT", "Output:", "Input side (DC)". */
 const SIDE_HEADING_RE = /^[^\S\n]*(?:electrical[^\S\n]+)?(input|output)(?:[^\S\n]+(?:side|ratings?|data|characteristics))?(?:[^\S\n]*\([^()\n]{0,20}\))?[^\S\n]*:?[^\S\n]*$/iu;
