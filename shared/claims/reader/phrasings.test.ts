@@ -1577,6 +1577,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The 74 Wh power bank refilled a phone with a 15 Wh battery between three and four times.',
     'Our OTEC pilot plant works across 22 °C and produces 100 kW gross, 35 kW net after the pumps.',
     'Spec: Heating capacity 7.0 kW / Power input 1.6 kW (A7/W35).',
+    'The counterweighted lift raises a 1,000 kg car 20 m in 10 s with a 7.5 kW motor.',
+    'The passenger elevator raises 1,000 kg 20 m in 10 s on a 7.5 kW motor.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

@@ -93,6 +93,8 @@ const LIFT_BEFORE_RE = /(?<!\p{L})(?:lifts?|lifted|lifting|raises?|raised|raisin
 const LIFT_IN_SENTENCE_RE = /(?<!\p{L})(?:lifts?|lifted|lifting|raises?|raised|raising|hoists?|hoisted|hoisting|winds?[^.;!?\n]{0,40}?up|wound[^.;!?\n]{0,40}?up|hauls?[^.;!?\n]{0,40}?up|takes?[^.;!?\n]{0,50}?up[^\S\n]+(?:to|the|a|an|one|\d))(?!\p{L})/iu;
 /** A height after a number: "9 m", "one metre", "12 feet" (group 1 set for feet). */
 const HEIGHT_RE = /^[^\S\n]*(?:m|met(?:re|er)s?|(ft|feet|foot))(?![\p{L}\d/²³])/iu;
+/** A counterweight or a balanced load ("counterweighted", "counterbalance"), or a lift or elevator, which nearly always has one. */
+const COUNTERWEIGHT_RE = /(?<!\p{L})(?:counter-?weight\w*|counter-?balanc\w*|balanced[^\S\n]+by|balance[^\S\n]+weights?|elevators?|(?:passenger|goods|service|platform|stair)[^\S\n]+lifts?|lift[^\S\n]+(?:cars?|cabins?|shafts?)|the[^\S\n]+lift(?![^\S\n]+(?:off|of|force)))(?!\p{L})/iu;
 /** A store's size: "48 V 14 Ah frame battery", "pack is 48 V 17.5 Ah", "a 3,000 mAh cell", "capacity". */
 const STORE_SIZE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|cells?|banks?|capacity|rated|nominal|power[- ]?banks?|accumulators?)(?!\p{L})/iu;
 /** A pump (its water power is what it gives) or a turbine or wheel (what it takes). */
@@ -209,8 +211,10 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
     }
   }
 
+  // (Not where a counterweight carries the load: a lift's motor lifts only the imbalance.)
+  const balanced = COUNTERWEIGHT_RE.test(text);
   // A mass lifted at a speed: P = m g v ("lifts 60 kg at 1 m/s"); the mass is the load's, set aside.
-  for (const m of drafts.filter((d) => d.kind === 'mass' && !d.derived && d.role !== 'aside')) {
+  for (const m of drafts.filter((d) => !balanced && d.kind === 'mass' && !d.derived && d.role !== 'aside')) {
     if (!LIFT_BEFORE_RE.test(text.slice(Math.max(0, m.start - 40), m.start))) continue;
     const v = drafts.find((d) => d.kind === 'speed' && !d.derived && d.start > m.end && joined(text, m, d) && /^[^\S\n]*(?:at|,)[^\S\n]+(?:(?:about|some|roughly|a[^\S\n]+steady)[^\S\n]+)?$/iu.test(text.slice(m.end, d.start).replace(/^[^\S\n]+(?:load|weight|mass|crate|block|pallet|bucket)s?/iu, '')));
     const kg = siOf(m);
@@ -227,7 +231,7 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
 
   // A mass lifted through a height in a time: P = m g h / t ("takes a 250 kg pallet up about 9 m in roughly
   // 40 seconds", "winds a two-kilogram bag up one metre in one second").
-  for (const m of drafts.filter((d) => d.kind === 'mass' && !d.derived && !drafts.some((p) => p.start === d.start && p.derived))) {
+  for (const m of drafts.filter((d) => !balanced && d.kind === 'mass' && !d.derived && !drafts.some((p) => p.start === d.start && p.derived))) {
     const sentence = sentenceAround(text, m.start, m.end);
     const sStart = text.indexOf(sentence);
     if (sStart < 0 || !LIFT_IN_SENTENCE_RE.test(text.slice(Math.max(sStart, m.start - 60), m.end + 80))) continue;
