@@ -1579,6 +1579,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Spec: Heating capacity 7.0 kW / Power input 1.6 kW (A7/W35).',
     'The counterweighted lift raises a 1,000 kg car 20 m in 10 s with a 7.5 kW motor.',
     'The passenger elevator raises 1,000 kg 20 m in 10 s on a 7.5 kW motor.',
+    'Motor spec: peak torque 400 N·m (0–6,000 rpm), peak power 150 kW at 8,000 rpm.',
+    'Max torque 400 N·m from 1,500 rpm; rated power 90 kW.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

@@ -95,6 +95,10 @@ const LIFT_IN_SENTENCE_RE = /(?<!\p{L})(?:lifts?|lifted|lifting|raises?|raised|r
 const HEIGHT_RE = /^[^\S\n]*(?:m|met(?:re|er)s?|(ft|feet|foot))(?![\p{L}\d/²³])/iu;
 /** A counterweight or a balanced load ("counterweighted", "counterbalance"), or a lift or elevator, which nearly always has one. */
 const COUNTERWEIGHT_RE = /(?<!\p{L})(?:counter-?weight\w*|counter-?balanc\w*|balanced[^\S\n]+by|balance[^\S\n]+weights?|elevators?|(?:passenger|goods|service|platform|stair)[^\S\n]+lifts?|lift[^\S\n]+(?:cars?|cabins?|shafts?)|the[^\S\n]+lift(?![^\S\n]+(?:off|of|force)))(?!\p{L})/iu;
+/** A torque said as a rating: "peak torque", "max. torque", "rated", "stall", "holding". */
+const RATED_TORQUE_BEFORE_RE = /(?<!\p{L})(?:peak|max(?:imum|\.)?|rated|nominal|continuous|stall|holding|starting|breakaway|up[^\S\n]+to)(?:[^\S\n]+torque)?[^\S\n]*[:=]?[^\S\n]*(?:of[^\S\n]+)?$/iu;
+/** A speed said as part of a range or a bound: "0–4,000 rpm", "from 1,500 rpm", "up to 3,000 rpm", "below 2,000 rpm". */
+const SPEED_SPAN_RE = /(?:[–-][^\S\n]*|(?<!\p{L})(?:from|up[^\S\n]+to|below|above|under|over|between|beyond)[^\S\n]+)$/iu;
 /** A store's size: "48 V 14 Ah frame battery", "pack is 48 V 17.5 Ah", "a 3,000 mAh cell", "capacity". */
 const STORE_SIZE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|cells?|banks?|capacity|rated|nominal|power[- ]?banks?|accumulators?)(?!\p{L})/iu;
 /** A pump (its water power is what it gives) or a turbine or wheel (what it takes). */
@@ -170,10 +174,13 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
   }
 
   // Torque at a shaft speed: P = τω.
+  // (Not a spec sheet's peak or rated torque, nor a speed said as a range or a bound — "peak torque 250 N·m
+  // (0–4,000 rpm)", "400 N·m from 1,500 rpm": those are no one working point.)
   for (const f of factors) {
     if (f.is !== 'torque' || used.has(f)) continue;
+    if (RATED_TORQUE_BEFORE_RE.test(text.slice(Math.max(0, f.start - 30), f.start))) continue;
     const w = pairOf(f, ['spin']);
-    if (!w) continue;
+    if (!w || SPEED_SPAN_RE.test(text.slice(Math.max(0, w.start - 12), w.start)) || /^[^\S\n]*(?:rpm|r\/min|rev\/min)?[^\S\n]*(?:–|-|to|and up|upwards|or more)/iu.test(text.slice(w.end, w.end + 12))) continue;
     used.add(f).add(w);
     const role = roleAround(Math.min(f.start, w.start), Math.max(f.end, w.end)) ?? 'out';
     add(f, w, 'power', f.value * w.value, `power = torque × angular speed (${formatQuantity(f.value, 'N m')} × ${formatQuantity(w.value, 'rad/s')})`, role);
