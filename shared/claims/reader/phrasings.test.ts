@@ -1581,6 +1581,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The passenger elevator raises 1,000 kg 20 m in 10 s on a 7.5 kW motor.',
     'Motor spec: peak torque 400 N·m (0–6,000 rpm), peak power 150 kW at 8,000 rpm.',
     'Max torque 400 N·m from 1,500 rpm; rated power 90 kW.',
+    'Pump spec: max flow 160 L/min, max head 40 m, motor 750 W.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

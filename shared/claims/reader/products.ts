@@ -99,6 +99,8 @@ const COUNTERWEIGHT_RE = /(?<!\p{L})(?:counter-?weight\w*|counter-?balanc\w*|bal
 const RATED_TORQUE_BEFORE_RE = /(?<!\p{L})(?:peak|max(?:imum|\.)?|rated|nominal|continuous|stall|holding|starting|breakaway|up[^\S\n]+to)(?:[^\S\n]+torque)?[^\S\n]*[:=]?[^\S\n]*(?:of[^\S\n]+)?$/iu;
 /** A speed said as part of a range or a bound: "0–4,000 rpm", "from 1,500 rpm", "up to 3,000 rpm", "below 2,000 rpm". */
 const SPEED_SPAN_RE = /(?:[–-][^\S\n]*|(?<!\p{L})(?:from|up[^\S\n]+to|below|above|under|over|between|beyond)[^\S\n]+)$/iu;
+/** A maximum said before a factor: "max flow", "maximum head", "shut-off head", "up to", "peak". */
+const MAX_BEFORE_RE = /(?<!\p{L})(?:max(?:imum|\.)?|peak|shut-?off|up[^\S\n]+to|no[^\S\n]+more[^\S\n]+than|at[^\S\n]+most)(?:[^\S\n]+(?:flow|head|lift|pressure|delivery|output))?[^\S\n]*[:=]?[^\S\n]*(?:of[^\S\n]+)?$/iu;
 /** A store's size: "48 V 14 Ah frame battery", "pack is 48 V 17.5 Ah", "a 3,000 mAh cell", "capacity". */
 const STORE_SIZE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|cells?|banks?|capacity|rated|nominal|power[- ]?banks?|accumulators?)(?!\p{L})/iu;
 /** A pump (its water power is what it gives) or a turbine or wheel (what it takes). */
@@ -204,7 +206,8 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
   for (const f of factors) {
     if (f.is !== 'flow' || used.has(f)) continue;
     const h = pairOf(f, ['head', 'pressure']);
-    if (!h) continue;
+    // (Not a spec's maximum flow and maximum head, which a pump never gives at once: "max flow 60 L/min, max head 40 m".)
+    if (!h || [f, h].some((g) => MAX_BEFORE_RE.test(text.slice(Math.max(0, g.start - 25), g.start)))) continue;
     used.add(f).add(h);
     const sentence = sentenceAround(text, Math.min(f.start, h.start), Math.max(f.end, h.end));
     const pump = PUMP_RE.test(sentence);
