@@ -1582,6 +1582,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Motor spec: peak torque 400 N·m (0–6,000 rpm), peak power 150 kW at 8,000 rpm.',
     'Max torque 400 N·m from 1,500 rpm; rated power 90 kW.',
     'Pump spec: max flow 160 L/min, max head 40 m, motor 750 W.',
+    'Pulse energy up to 2 J per pulse, repetition rate up to 100 Hz, from a 50 W supply.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

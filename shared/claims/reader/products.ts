@@ -263,7 +263,7 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
   for (const f of factors) {
     if (f.is !== 'cycle-energy' || used.has(f) || drafts.some((d) => d.kind === 'energy' && d.start === f.start)) continue;
     const r = pairOf(f, ['per-cycle-rate']);
-    if (!r) continue;
+    if (!r || [f, r].some((g) => MAX_BEFORE_RE.test(text.slice(Math.max(0, g.start - 25), g.start)))) continue;
     used.add(f).add(r);
     const role = roleAround(Math.min(f.start, r.start), Math.max(f.end, r.end)) ?? 'out';
     add(f, r, 'power', f.value * r.value, `power = energy per cycle × cycles per second (${formatQuantity(f.value, 'J')} × ${formatQuantity(r.value, 'Hz')})`, role);
@@ -274,7 +274,7 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
     const perCycle = PER_CYCLE_AFTER_RE.test(text.slice(e.end, e.end + 30)) || PER_CYCLE_BEFORE_RE.test(text.slice(Math.max(0, e.start - 60), e.start));
     if (!perCycle) continue;
     const r = factors.filter((g) => g.is === 'per-cycle-rate' && !used.has(g) && joined(text, e, g)).sort((a, b) => Math.abs(a.start - e.start) - Math.abs(b.start - e.start))[0];
-    if (!r) continue;
+    if (!r || [e, r].some((g) => MAX_BEFORE_RE.test(text.slice(Math.max(0, g.start - 25), g.start)))) continue;
     used.add(r);
     const si = siOf(e);
     if (si === null) continue;
