@@ -183,6 +183,27 @@ function twoItems(text: string, inF: Figure, outF: Figure): boolean {
   return a !== null && b !== null && a !== b;
 }
 
+/** A machine's rating said at a figure: "a 9 kW motor", "the 750 W pump", "rated 1.1 kW", "motor: 3 kW". */
+const RATING_AT_RE = /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+)?(?:motors?|pumps?|drives?|engines?|compressors?|units?|hoists?|winch(?:es)?)(?!\p{L})/iu;
+const RATED_BEFORE_RE = /(?<!\p{L})(?:rated(?:[^\S\n]+(?:at|for))?|nameplate|plate[^\S\n]+says|(?:motor|pump|drive)[^\S\n]*[:=]?)[^\S\n]*$/iu;
+/**
+ * A power worked out from factors (a torque at a speed, a flow at a head, a mass lifted) beside a motor's
+ * or a pump's rating ("a 9 kW motor"): a rating is not what the machine draws at that working point (it
+ * may run over it for a while), so no ledger is drawn from the two.
+ */
+function productBesideRating(text: string, figures: readonly Figure[], inF: Figure, outF: Figure): boolean {
+  if (!text) return false;
+  // (An energy worked out from a power over a run stands for that power.)
+  const base = (f: Figure) => (f.kind === 'energy' && f.derived ? (figures.find((g) => g.kind === 'power' && g.role === f.role && (g.start === f.start || g.end === f.end)) ?? f) : f);
+  const [i, o] = [base(inF), base(outF)];
+  if (i.start === null || i.end === null || i.derived || i.kind !== 'power' || o.kind !== 'power') return false;
+  if (!/^power = (?:torque|ρ g|flow|mass|energy per cycle)/u.test(o.derived ?? '')) return false;
+  // (Only where the product passes the rating by less than twice: below it there is no conflict to doubt,
+  // and far above it no motor runs for a working point.)
+  if (!(o.si > i.si && o.si <= 2 * i.si)) return false;
+  return RATING_AT_RE.test(text.slice(i.end, i.end + 25)) || RATED_BEFORE_RE.test(text.slice(Math.max(0, i.start - 25), i.start));
+}
+
 /** An output said as a burst or a peak ("can deliver 2 MW for short periods"): no steady output over a run. */
 function saidInBursts(text: string, f: Figure): boolean {
   return f.start !== null && f.end !== null && !!text && BURST_RE.test(sentenceAround(text, f.start, f.end));
@@ -269,6 +290,8 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     const auxIn = ((bothPower ? !duration : !!eIn && !!eOut) && auxiliaryInput(text, inF, outF)) || harvestedOut(text, inF, outF) || engineOutputBesideAccessory(text, inF, outF);
     if (twoItems(text, inF, outF)) {
       notes.push(`The input (“${inF.text}”) and the output (“${outF.text}”) are said of two different items the text names; no ledger of one device is drawn from them.`);
+    } else if (productBesideRating(text, figures, inF, outF)) {
+      needs.push(need('first-law', ['the power the machine draws at that working point, measured'], 'The input the text gives is a rating of the machine, not what it draws while giving the output worked out from its factors.', [inF, outF]));
     } else if (auxIn) {
       needs.push(need('first-law', ['the power of the outside flow the plant converts (wind, sunlight, water, fuel)'], 'The input the text gives feeds only the plant’s own controls, fans or pumps, not what it converts.', [inF, outF]));
     } else if (storeRates) {

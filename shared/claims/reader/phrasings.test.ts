@@ -1583,6 +1583,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Max torque 400 N·m from 1,500 rpm; rated power 90 kW.',
     'Pump spec: max flow 160 L/min, max head 40 m, motor 750 W.',
     'Pulse energy up to 2 J per pulse, repetition rate up to 100 Hz, from a 50 W supply.',
+    'Flow 60 L/min, head 40 m, motor 350 W.',
+    'The forklift lifts 1.5 t to 3 m in 4 s with a 9 kW pump motor.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

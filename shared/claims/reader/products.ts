@@ -101,6 +101,12 @@ const RATED_TORQUE_BEFORE_RE = /(?<!\p{L})(?:peak|max(?:imum|\.)?|rated|nominal|
 const SPEED_SPAN_RE = /(?:[–-][^\S\n]*|(?<!\p{L})(?:from|up[^\S\n]+to|below|above|under|over|between|beyond)[^\S\n]+)$/iu;
 /** A maximum said before a factor: "max flow", "maximum head", "shut-off head", "up to", "peak". */
 const MAX_BEFORE_RE = /(?<!\p{L})(?:max(?:imum|\.)?|peak|shut-?off|up[^\S\n]+to|no[^\S\n]+more[^\S\n]+than|at[^\S\n]+most)(?:[^\S\n]+(?:flow|head|lift|pressure|delivery|output))?[^\S\n]*[:=]?[^\S\n]*(?:of[^\S\n]+)?$/iu;
+/** Words joining a flow and its head or pressure as one working point: "at", "against", "to", "through", "with", "into". */
+const POINT_JOIN_RE = /^[^\S\n]*(?:(?:of[^\S\n]+)?(?:water|oil|air|fluid|brine)[^\S\n]+)?(?:at|against|to|through|with|into|up(?:[^\S\n]+to)?|over|on|@)(?!\p{L})/iu;
+function workingPoint(text: string, a: { start: number; end: number }, b: { start: number; end: number }): boolean {
+  const [x, y] = a.start < b.start ? [a, b] : [b, a];
+  return POINT_JOIN_RE.test(text.slice(x.end, y.start).replace(/^[^\S\n]*[)\]]/u, ' ').replace(/^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?=(?:at|against|to|through|with|into|up|over|on|@)(?!\p{L}))/iu, ' '));
+}
 /** A store's size: "48 V 14 Ah frame battery", "pack is 48 V 17.5 Ah", "a 3,000 mAh cell", "capacity". */
 const STORE_SIZE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|cells?|banks?|capacity|rated|nominal|power[- ]?banks?|accumulators?)(?!\p{L})/iu;
 /** A pump (its water power is what it gives) or a turbine or wheel (what it takes). */
@@ -205,9 +211,14 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
   // A flow against a head or a pressure: P = ρgQH, P = QΔp.
   for (const f of factors) {
     if (f.is !== 'flow' || used.has(f)) continue;
-    const h = pairOf(f, ['head', 'pressure']);
+    // (Said as one working point — "40 L/s against 12 m", "at a head of 4 m", "2 m³/h at 3 bar" — not a
+    // list's two entries: "Flow 60 L/min, head 40 m" on a pump's plate gives each at its own extreme.)
+    const h = factors
+      .filter((g) => g !== f && !used.has(g) && (g.is === 'head' || g.is === 'pressure') && joined(text, f, g) && workingPoint(text, f, g))
+      .sort((a, b) => Math.abs(a.start - f.start) - Math.abs(b.start - f.start))[0];
     // (Not a spec's maximum flow and maximum head, which a pump never gives at once: "max flow 60 L/min, max head 40 m".)
-    if (!h || [f, h].some((g) => MAX_BEFORE_RE.test(text.slice(Math.max(0, g.start - 25), g.start)))) continue;
+    // ("Delivers up to 1.8 L/s at 25 m total head" is still one working point: its "up to" bounds the flow there.)
+    if (!h || [f, h].some((g) => MAX_BEFORE_RE.test(text.slice(Math.max(0, g.start - 25), g.start)) && !/up[^\S\n]+to[^\S\n]*$/iu.test(text.slice(Math.max(0, g.start - 10), g.start)))) continue;
     used.add(f).add(h);
     const sentence = sentenceAround(text, Math.min(f.start, h.start), Math.max(f.end, h.end));
     const pump = PUMP_RE.test(sentence);
