@@ -128,9 +128,9 @@ const HEAT_OUT_OF_COLD_RE =
 const NO_AMBIENT_SOURCE_RE =
   /(?<!\p{L})(?:over-?unity|free energy|self-?running|perpetual|zero-?point|vacuum energy|resistive|resistance (?:heater|element|wire)|heating elements?|no (?:heat[- ]pump|compressor|outdoor unit|refrigerant)|nothing to (?:pull|draw|take) heat from|without (?:any )?(?:outside|outdoor|ambient) (?:air|heat)|sealed box|from nothing|more energy than)(?!\p{L})/iu;
 
-/** A machine said to make its heat, not move it: a reactor, an electrolytic cell, a loaded metal, a resistive heater. */
+/** A machine said to make its heat, not move it: a reactor, an electrolytic cell, a loaded metal, a plasma. */
 const HEAT_MAKER_RE =
-  /(?<!\p{L})(?:reactors?|electroly\w*|cathodes?|anodes?|nickel|palladium|deuter\w*|LENR|cold[- ]fusion|fusion|plasma|excess[^\S\n]+heat|catalys\w*|resistive|resistance[^\S\n]+heat\w*|heating[^\S\n]+elements?|infrared[^\S\n]+(?:panels?|heaters?)|magnet\w*|hydrino\w*)(?!\p{L})/iu;
+  /(?<!\p{L})(?:reactors?|electroly\w*|cathodes?|anodes?|nickel|palladium|deuter\w*|LENR|cold[- ]fusion|fusion|plasma|excess[^\S\n]+heat|hydrino\w*)(?!\p{L})/iu;
 
 function gainAsCop(text: string, start: number, end: number): { role: 'heating' | 'cooling'; assumption: string } | null {
   const sentence = sentenceAround(text, start, end);
@@ -144,7 +144,8 @@ function gainAsCop(text: string, start: number, end: number): { role: 'heating' 
   if (
     /^[^\S\n]*(?:kWh|kW|W|J|MJ|units?|joules?|watts?)?[^\S\n]*of[^\S\n]+(?:useful[^\S\n]+)?(?:heat|warmth)(?!\p{L})/iu.test(text.slice(end, end + 25)) &&
     /(?<!\p{L})(?:electricity|electric(?:al)?|kWh of power|you (?:buy|pay for))(?!\p{L})/iu.test(sentence) &&
-    !NO_AMBIENT_SOURCE_RE.test(text) &&
+    // (A heat pump's backup or immersion element, named beside it, is no claim that the heat is made by resistance.)
+    !NO_AMBIENT_SOURCE_RE.test(text.replace(/(?<!\p{L})(?:backup|back-up|booster|auxiliary|immersion|supplementary|emergency|top-up)[^\S\n]+(?:heat(?:ing)?[^\S\n]+)?(?:elements?|heaters?)(?!\p{L})/giu, ' ')) &&
     !HEAT_MAKER_RE.test(text) &&
     !COOLING_MACHINE_RE.test(paragraphAround(text, start, end)) &&
     !/(?<!\p{L})(?:cool\w*|chill\w*|refrigerat\w*|freez\w*|remov\w*|out[^\S\n]+of)(?!\p{L})/iu.test(sentence)

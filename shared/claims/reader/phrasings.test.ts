@@ -1585,6 +1585,8 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Pulse energy up to 2 J per pulse, repetition rate up to 100 Hz, from a 50 W supply.',
     'Flow 60 L/min, head 40 m, motor 350 W.',
     'The forklift lifts 1.5 t to 3 m in 4 s with a 9 kW pump motor.',
+    'Each kWh of electricity gives 3 kWh of heat; the backup heating element is rarely needed.',
+    'Each kWh of electricity gives 3 kWh of heat, and the magnetic filter keeps the system clean.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
