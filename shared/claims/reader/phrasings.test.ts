@@ -1587,6 +1587,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The forklift lifts 1.5 t to 3 m in 4 s with a 9 kW pump motor.',
     'Each kWh of electricity gives 3 kWh of heat; the backup heating element is rarely needed.',
     'Each kWh of electricity gives 3 kWh of heat, and the magnetic filter keeps the system clean.',
+    'The lifter was tested at 1,013 mbar and gave 2 mN at 40 W.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1601,6 +1602,9 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     expect(breaks('The pumped-storage station used 1.9 TWh for pumping and generated 2.1 TWh last year.')).toBe(true);
     expect(breaks('Our fuel-free engine takes 60 W from the battery and its engine output is 300 W.')).toBe(true);
     expect(breaks('The machine used 3 kWh to make 10 kWh.')).toBe(true);
+    // (a lifter run at a pressure written as a negative power of ten, or where no air is present, has nothing to push)
+    expect(breaks('The lifter operated at 10⁻⁶ mbar produced a steady force of 2.4 × 10⁻³ N at an input power of 40 W.')).toBe(true);
+    expect(breaks('The lifter gave a steady force of 2.4 mN at 40 W; as no air is present, ion wind is excluded.')).toBe(true);
     // (one labelled item, not two; a power bank said to refill more than it holds)
     expect(breaks('Model A uses 1.2 kW and gives 1.5 kW of heat.')).toBe(true);
     expect(breaks('The 10 Wh power bank took 12 Wh to charge and refilled a phone with a 15 Wh battery four times.')).toBe(true);
