@@ -1588,6 +1588,7 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Each kWh of electricity gives 3 kWh of heat; the backup heating element is rarely needed.',
     'Each kWh of electricity gives 3 kWh of heat, and the magnetic filter keeps the system clean.',
     'The lifter was tested at 1,013 mbar and gave 2 mN at 40 W.',
+    'The jackhammer hits 30 J per blow at 25 blows a second from a 1.2 kW motor.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

@@ -36,7 +36,7 @@ const U = (body: string) => new RegExp(`^${sp}(?:${body})(?![\\p{L}\\d])`, 'u');
 const UI = (body: string) => new RegExp(`^${sp}(?:${body})(?![\\p{L}\\d])`, 'iu');
 
 /** Units that follow a number, with what they make of it (in SI: N·m, rad/s, 1/s, C, m³/s, m, Pa). */
-const CYCLE = '[^\\S\\n]*(?:per|a|each|every|/)[^\\S\\n]*(?:cycle|pulse|stroke|shot|discharge|flash|burst|firing|revolution|rev|beat)';
+const CYCLE = '[^\\S\\n]*(?:per|a|each|every|/)[^\\S\\n]*(?:cycle|pulse|stroke|shot|discharge|flash|burst|firing|revolution|rev|beat|blow|impact|hit|strike)';
 const FACTOR_UNITS: { re: RegExp; is: Factor['is']; si: (n: number) => number }[] = [
   // "2 J per pulse", "0.6 kJ/stroke": an energy said per cycle (the reader keeps no such figure itself).
   { re: U(`J${CYCLE}`), is: 'cycle-energy', si: (n) => n },
@@ -53,13 +53,13 @@ const FACTOR_UNITS: { re: RegExp; is: Factor['is']; si: (n: number) => number }[
   { re: UI('rad/s|radians?[^\\S\\n]+(?:per|a)[^\\S\\n]+second'), is: 'spin', si: (n) => n },
   { re: UI('rev/s|rps|revolutions?[^\\S\\n]+(?:per|a)[^\\S\\n]+second'), is: 'spin', si: (n) => n * 2 * Math.PI },
   {
-    re: UI('(?:cycles?|pulses?|strokes?|shots?|discharges?|flashes?|bursts?|firings?|times|beats?)[^\\S\\n]+(?:per|a|each|every)[^\\S\\n]+(?:second|sec)|(?:cycles?|pulses?|strokes?|shots?|discharges?)/s'),
+    re: UI('(?:cycles?|pulses?|strokes?|shots?|discharges?|flashes?|bursts?|firings?|times|beats?|blows?|impacts?|hits?|strikes?)[^\\S\\n]+(?:per|a|each|every)[^\\S\\n]+(?:second|sec)|(?:cycles?|pulses?|strokes?|shots?|discharges?)/s'),
     is: 'per-cycle-rate',
     si: (n) => n,
   },
   { re: U('Hz'), is: 'per-cycle-rate', si: (n) => n },
   { re: U('kHz'), is: 'per-cycle-rate', si: (n) => n * 1e3 },
-  { re: UI('(?:cycles?|pulses?|strokes?|shots?|discharges?|flashes?|firings?|times|beats?)[^\\S\\n]+(?:per|a|each|every)[^\\S\\n]+minute|(?:cycles?|pulses?|strokes?)/min'), is: 'per-cycle-rate', si: (n) => n / 60 },
+  { re: UI('(?:cycles?|pulses?|strokes?|shots?|discharges?|flashes?|firings?|times|beats?|blows?|impacts?|hits?|strikes?)[^\\S\\n]+(?:per|a|each|every)[^\\S\\n]+minute|(?:cycles?|pulses?|strokes?)/min'), is: 'per-cycle-rate', si: (n) => n / 60 },
   { re: U('mAh|mA·h|mA h'), is: 'charge', si: (n) => n * 3.6 },
   { re: U('Ah|A·h'), is: 'charge', si: (n) => n * 3600 },
   { re: UI('milliamp(?:ere)?[- ]hours?'), is: 'charge', si: (n) => n * 3.6 },
