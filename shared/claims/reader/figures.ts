@@ -241,7 +241,14 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         upperNum = next.num;
         end = next.end;
         next.consumed = true;
-      } else if (!next.plusMinus && isRangeGap(text, gapStart, next.start, t.start) && (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) && next.suffix) {
+      } else if (
+        !next.plusMinus &&
+        isRangeGap(text, gapStart, next.start, t.start) &&
+        (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) &&
+        next.suffix &&
+        // ("a COP of 2.1 to 70 °F indoor air": a bare number its own words give another kind is no lower end.)
+        !(t.suffix === null && next.suffix.type === 'unit' && (bareKind(text, t.start, t.numEnd, floor)?.kind ?? next.suffix.form.kind) !== next.suffix.form.kind)
+      ) {
         // Two temperatures "between 600 °C and 30 °C" or "from 10 °C to 55 °C" are the two sides, not a range.
         // (A third temperature in the same sentence makes it a range of one side.)
         const thirdTemperature =

@@ -7,6 +7,7 @@
  */
 import { BARE_CONNECTORS, C_M_PER_S, EFFICIENCY_CHANGE_WORDS, ISP_WORDS, QUANTUM_EFFICIENCY_WORDS } from '../figures-vocabulary';
 import type { FigureKind, FigureRole } from '../types';
+import { PER_UNIT_IN_WORDS } from './units';
 import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, BURNER_RE, NAMED_HEAT_PUMP_RE, paragraphOfAnotherMachine, sentenceAround, windowStart } from './context';
 
 
@@ -89,8 +90,10 @@ const FACTOR_BEFORE_RE =
 const PERCENT_OF_INPUT_RE =
   /[^\S\n]*of[^\S\n]+(?:what|whatever|all|everything)[^\S\n]+(?:(?:that[^\S\n]+)?(?:it|they|the[^\S\n]+[\p{L}-]+|you|we))[^\S\n]+(?:draws?|takes?|consumes?|uses?|gets?|is (?:given|fed|supplied)|(?:is )?put in|puts? in|pulls?)(?!\p{L})|[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|(?:energy|power) (?:in|supplied|consumed|drawn|fed|put|(?:it|they) (?:receives?|takes?|gets?|draws?|consumes?)|received|taken in)|supply|electrical input)(?!\p{L})/iuy;
 /** "1.3 W for each watt in", "1.3 J back per joule supplied": a gain written with a unit. */
-export const GAIN_PER_UNIT_RE =
-  /[^\S\n]*(?:(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|useful|shaft)[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+(?:(?:from|out[^\S\n]+of)[^\S\n]+(?:the|its|a|an|your|our)[^\S\n]+(?:[\p{L}\p{N}°.,-]+[^\S\n]+){1,3}?(?=(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]))?)?(?:(?:back|out|returned)(?:[^\S\n]+(?:of|from)[^\S\n]+(?:the|its|a|an)[^\S\n]+[\p{L}-]+)?[^\S\n]+)?(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?!\p{L})/iuy;
+export const GAIN_PER_UNIT_RE = new RegExp(
+  String.raw`[^\S\n]*(?:(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|useful|shaft)[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+(?:(?:from|out[^\S\n]+of)[^\S\n]+(?:the|its|a|an|your|our)[^\S\n]+(?:[\p{L}\p{N}°.,-]+[^\S\n]+){1,3}?(?=(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]))?)?(?:(?:back|out|returned)(?:[^\S\n]+(?:of|from)[^\S\n]+(?:the|its|a|an)[^\S\n]+[\p{L}-]+)?[^\S\n]+)?(?:(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?|per[^\S\n]+(?=(?:watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|W|J)s?[^\S\n]+${PER_UNIT_IN_WORDS}))(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?!\p{L})`,
+  'iuy',
+);
 /** The unit named after "for every": what one of it is, as a quantity (none for a bare "unit"). */
 export const PER_UNIT_QUANTITY: Record<string, { kind: 'power' | 'energy'; quantity: string }> = {
   watt: { kind: 'power', quantity: '1 W' },

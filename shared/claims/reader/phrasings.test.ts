@@ -1589,6 +1589,36 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'Each kWh of electricity gives 3 kWh of heat, and the magnetic filter keeps the system clean.',
     'The lifter was tested at 1,013 mbar and gave 2 mN at 40 W.',
     'The jackhammer hits 30 J per blow at 25 blows a second from a 1.2 kW motor.',
+    'The diesel genset burns fuel worth 30 kW; at 35 % engine and 93 % alternator efficiency it gives about 9.8 kW of electricity.',
+    'Wire-to-water efficiency of the booster set is 62 %: the motor draws 4 kW and the water gets 2.5 kW.',
+    'Our pumped-storage pond returns 75 % round trip: 400 kWh in, 300 kWh back.',
+    'The battery stores 10 kWh and gives back 9.2 kWh, a round-trip efficiency of 92 %.',
+    'Each stage loses a little: inverter 97 %, motor 91 %, gearbox 96 %, so 84.7 % of the 5 kW reaches the wheels, or 4.24 kW.',
+    'The motor-generator set takes 11 kW from the grid and puts out 9.5 kW; the missing 1.5 kW is heat in the windings and bearings.',
+    'Sunlight of 1,000 W/m² on 1.6 m² gives the panel 1.6 kW of light, of which 21 % or 336 W becomes electricity.',
+    'The heat pump, COP 3.2, turns the 2 kW from the PV array into 6.4 kW of heat, the rest drawn from the outdoor air.',
+    'Power flow: 100 kW fuel → 40 kW shaft → 38 kW electric → 36 kW at the motor → 33 kW mechanical. Every stage loses something.',
+    'The hydrogen loop: electrolyser 70 %, storage 90 %, fuel cell 55 %; from 10 kWh of electricity you get 3.5 kWh back.',
+    'Charging the car took 66 kWh from the wall for 60 kWh in the pack (91 %), and the drive used 54 kWh of it over 300 km.',
+    'The regenerative brake recovers 60 % of the braking energy, about 120 kJ per stop from 200 kJ.',
+    'The turbine\'s shaft gives 48 MW to a 98 % generator; 47 MW leaves the station.',
+    'The Stirling engine runs on a 600 °C burner and gives 1 kW of shaft power from 3.5 kW of gas; its generator makes 900 W.',
+    'The pump\'s motor is 88 % efficient and the pump itself 70 %, so of the 1.5 kW it draws, about 920 W goes into the water.',
+    'At 7 °C outside and 35 °C flow, the heat pump reached a COP of 4.1, against a Carnot limit of about 11.',
+    'Our chiller makes 350 kW of cooling from 80 kW of electricity with 6 °C chilled water and 30 °C condenser water.',
+    'The engine runs between 540 °C steam and a 40 °C condenser and turns 36 % of the heat into work.',
+    'A 40-degree lift from 5 °C to 45 °C: the unit\'s COP of 3.4 is well inside the 7.9 that Carnot allows.',
+    'The thermoelectric module across a 150 K difference, hot side 200 °C, converts 5 % of the heat it passes.',
+    'The freezer moves heat from -18 °C to a 25 °C kitchen with a COP of 1.8.',
+    'Flue gas leaves at 180 °C, and our recovery coil takes 12 kW from it to preheat the feedwater.',
+    'The solar collector\'s outlet is 70 °C on a 20 °C day, and it captures 55 % of the 1 kW/m² sunshine.',
+    'Ground loop at 8 °C, floor at 30 °C, and the pump gives 4.5 kWh of heat per kWh of electricity.',
+    'The gas turbine\'s inlet is 1,400 °C and exhaust 550 °C; the combined cycle reaches 60 % overall with a 30 °C sink.',
+    'At 0 °F outdoors the cold-climate heat pump still delivers a COP of 2.1 to 70 °F indoor air.',
+    'A Peltier cooler holds the box 20 K below the 25 °C room, moving 15 W of heat on 40 W.',
+    'The Stirling engine sits between a 650 °C burner head and 60 °C cooling water and makes 28 % shaft efficiency.',
+    'Ocean thermal plant: 26 °C surface water, 5 °C deep water, 2.5 % net efficiency.',
+    'Our absorption chiller uses 90 °C hot water and gives a cooling COP of 0.7 with 29 °C cooling water.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });
@@ -1895,4 +1925,38 @@ test("a verb said once for two subjects gives both the same side: 'the office us
   expect(f.filter((x) => x.kind === 'power' || x.kind === 'energy').map((x) => x.role)).toEqual(['in', 'in']);
   // (A second subject with its own verb is not: "takes 15 A at 2 V, and the calorimeter reads 45 W of heat".)
   expect(extractFigures('The cell takes 15 A at 2 V, and the calorimeter reads 45 W of heat.').find((x) => x.si === 45)?.role).toBe('out');
+});
+
+describe('chains of stages and temperatures said around other figures (invented test data)', () => {
+  const roles = (text: string) => extractFigures(text).filter((f) => f.kind === 'power' || f.kind === 'energy').map((f) => [f.role, f.si]);
+  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  test("'84.7 % of the 5 kW reaches the wheels, or 4.24 kW': the whole a share is taken of goes in, the share comes out", () => {
+    const text = 'Each stage loses a little: inverter 97 %, motor 91 %, gearbox 96 %, so 84.7 % of the 5 kW reaches the wheels, or 4.24 kW.';
+    expect(roles(text)).toEqual([['in', 5000], ['out', 4240]]);
+    // 4.24 / 5 = 0.848 (node).
+    expect(firstLaw(text)?.finding).toBe('consistent');
+    expect(roles('Only 60 % of the 10 kW makes it to the shaft: 6 kW.')).toEqual([['in', 10000], ['out', 6000]]);
+    // (A figure that is not the share keeps its own words: 40 % of 10 kW is 4 kW, not 7 kW.)
+    expect(roles('Only 40 % of the 10 kW reaches the shaft, and the brake reads 7 kW.').find(([, si]) => si === 7000)?.[0]).not.toBe('out');
+  });
+  test("'47 MW leaves the station' is what the plant sends on, not what it takes", () => {
+    expect(roles("The turbine's shaft gives 48 MW to a 98 % generator; 47 MW leaves the station.").map(([r]) => r)).not.toContain('in');
+  });
+  test("'4.5 kWh of heat per kWh of electricity', '1.4 kWh per kWh it takes': units out for each unit in", () => {
+    const hp = 'Ground loop at 8 °C, floor at 30 °C, and the pump gives 4.5 kWh of heat per kWh of electricity.';
+    const carnot = runClaimChecks(extractFigures(hp), { text: hp }).checks.find((c) => c.check === 'carnot');
+    // Carnot heating COP 303.15/22 = 13.779545; 4.5/13.779545 = 0.326571 (node).
+    expect(carnot?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(4.5 / (303.15 / 22), 9);
+    expect(firstLaw('The cell makes 1.4 kWh per kWh it takes.')?.finding).toBe('breaks');
+    expect(firstLaw('The cell makes 0.8 kWh per kWh it takes.')?.finding).toBe('consistent');
+    // ("0.3 kWh per kWh of storage" is no gain: nothing is read as one.)
+    expect(firstLaw('The racking used 0.3 kWh per kWh of storage.')).toBeUndefined();
+  });
+  test("'a COP of 2.1 to 70 °F indoor air' is a COP and a temperature, not a range of temperatures", () => {
+    const f = extractFigures('At 0 °F outdoors the heat pump delivers a COP of 2.1 to 70 °F indoor air.');
+    expect(f.map((x) => x.kind)).toEqual(['temperature', 'cop', 'temperature']);
+    // 70 °F = (70 + 459.67) × 5/9 K = 294.261 K (NIST SP 811 §4.2.1.1).
+    expectRelClose(f[2].si, ((70 + 459.67) * 5) / 9, SEVEN);
+    expect(f[2].upper).toBeUndefined();
+  });
 });

@@ -93,6 +93,35 @@ describe('a flow against a head or a pressure is a hydraulic power', () => {
   });
 });
 
+describe('heads and speeds said in other words', () => {
+  test("'2 N·m at 60 rpm to light the 10 W lamp': a 'to' before a verb is no speed range", () => {
+    const text = 'The hand crank needs 2 N·m at 60 rpm to light the 10 W lamp.';
+    // 2 × 60 × 2π / 60 = 12.566 W at the crank (P = τω), more than the lamp's 10 W.
+    expectRelClose(derivedOf(text, 'power')!.si, 4 * Math.PI, SEVEN);
+    expect(verdictOf(text)).toBe('consistent');
+    // "40 N·m at 1,000 to 3,000 rpm" is still a range: no one working point, no product.
+    expect(derivedOf('The Tarn motor gives 40 N·m at 1,000 to 3,000 rpm.', 'power')).toBeUndefined();
+  });
+  test("a height said after the flow: '40 L/s through 12 m', '0.5 L/s up 30 m', '20 L/s falling 4 m', 'a 4 m fall'", () => {
+    expectRelClose(derivedOf('The Corran pump lifts 40 L/s through 12 m using 7.5 kW.', 'power')!.si, 1000 * 9.80665 * 0.04 * 12, SEVEN);
+    expect(verdictOf('The Corran pump lifts 40 L/s through 12 m using 3 kW.')).toBe('breaks');
+    expectRelClose(derivedOf('It lifts 3 L/s up 20 m on 800 W.', 'power')!.si, 1000 * 9.80665 * 0.003 * 20, SEVEN);
+    const t = derivedOf('The Ashby wheel takes 20 L/s falling 4 m and gives 500 W.', 'power');
+    expectRelClose(t!.si, 1000 * 9.80665 * 0.02 * 4, SEVEN); // 784.532 W
+    expect(t!.role).toBe('in');
+    expect(verdictOf('The Ashby wheel takes 20 L/s falling 4 m and gives 900 W.')).toBe('breaks');
+    expect(verdictOf('The Ashby wheel takes 20 L/s from a 4 m fall and gives 500 W.')).toBe('consistent');
+  });
+  test("a plate's 'Flow 60 L/min, 12 m head' is two entries, not one working point", () => {
+    expect(derivedOf('Flow 60 L/min, 12 m head, 150 W motor.', 'power')).toBeUndefined();
+  });
+  test('a hydraulic ram lifting water with no power runs on the fall of its drive water: no finding', () => {
+    for (const text of ['The hydraulic ram lifts 0.5 L/s up 30 m with no power at all.', 'Our hydram lifts 0.5 L/s up 30 m with no electricity or fuel.']) {
+      expect(verdictOf(text)).toBeUndefined();
+    }
+  });
+});
+
 describe('a stated power within 10 % of the product is the same flow said outright', () => {
   test("'20 N·m at 300 rpm … the display shows about 630 W' is one power, not an input beside an output", () => {
     const text = "The Halden gym bike's flywheel turns at 300 rpm against 20 N·m when you pedal hard; the display shows about 600 W.";

@@ -79,7 +79,11 @@ const FACTOR_UNITS: { re: RegExp; is: Factor['is']; si: (n: number) => number }[
 ];
 
 /** "a head of 12 m", "lifts it 30 m": a height said before its number, for a flow's head. */
-const HEAD_BEFORE_RE = /(?<!\p{L})(?:head(?:[^\S\n]+of)?|lift(?:s|ed|ing)?[^\S\n]+(?:it|them|the[^\S\n]+water)?[^\S\n]*(?:up[^\S\n]+)?(?:to|by|through)?|(?:falls?|drops?)(?:[^\S\n]+(?:of|through))?|height[^\S\n]+of)[^\S\n]*$/iu;
+const HEAD_BEFORE_RE = /(?<!\p{L})(?:head(?:[^\S\n]+of)?|lift(?:s|ed|ing)?[^\S\n]+(?:it|them|the[^\S\n]+water)?[^\S\n]*(?:up[^\S\n]+)?(?:to|by|through)?|(?:falls?|falling|drops?|dropping)(?:[^\S\n]+(?:of|through|by))?|height[^\S\n]+of)[^\S\n]*$/iu;
+/** After a bare metre: "12 m head", "a 4 m fall", "30 m of head", "8 m total head". */
+const HEAD_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+)?(?:(?:total|net|gross|static|dynamic)[^\S\n]+)?(?:head|fall|drop)(?!\p{L})/iu;
+/** Between a flow and a bare metre: "40 L/s through 12 m", "0.5 m³/min of water up 30 m", "against 12 m". */
+const FLOW_TO_HEIGHT_RE = /^[^\S\n]*(?:of[^\S\n]+(?:water|brine|fluid)[^\S\n]+)?(?:up(?:[^\S\n]+to)?|through|against|over|to[^\S\n]+a[^\S\n]+height[^\S\n]+of|by)[^\S\n]*(?:(?:about|some|roughly|around|nearly)[^\S\n]+)?$/iu;
 /** A bare metre after a number: "12 m". */
 const METRE_RE = U('m|met(?:re|er)s?');
 
@@ -97,15 +101,15 @@ const HEIGHT_RE = /^[^\S\n]*(?:m|met(?:re|er)s?|(ft|feet|foot))(?![\p{L}\d/²³]
 const COUNTERWEIGHT_RE = /(?<!\p{L})(?:counter-?weight\w*|counter-?balanc\w*|balanced[^\S\n]+by|balance[^\S\n]+weights?|elevators?|(?:passenger|goods|service|platform|stair)[^\S\n]+lifts?|lift[^\S\n]+(?:cars?|cabins?|shafts?)|the[^\S\n]+lift(?![^\S\n]+(?:off|of|force)))(?!\p{L})/iu;
 /** A torque said as a rating: "peak torque", "max. torque", "rated", "stall", "holding". */
 const RATED_TORQUE_BEFORE_RE = /(?<!\p{L})(?:peak|max(?:imum|\.)?|rated|nominal|continuous|stall|holding|starting|breakaway|up[^\S\n]+to)(?:[^\S\n]+torque)?[^\S\n]*[:=]?[^\S\n]*(?:of[^\S\n]+)?$/iu;
-/** A speed said as part of a range or a bound: "0–4,000 rpm", "from 1,500 rpm", "up to 3,000 rpm", "below 2,000 rpm". */
-const SPEED_SPAN_RE = /(?:[–-][^\S\n]*|(?<!\p{L})(?:from|up[^\S\n]+to|below|above|under|over|between|beyond)[^\S\n]+)$/iu;
+/** A speed said as part of a range or a bound: "0–4,000 rpm", "from 1,500 rpm", "up to 3,000 rpm", "below 2,000 rpm", "1,000 to 3,000 rpm". */
+const SPEED_SPAN_RE = /(?:[–-][^\S\n]*|\d[^\S\n]*(?:to|and|or)[^\S\n]+|(?<!\p{L})(?:from|up[^\S\n]+to|below|above|under|over|between|beyond)[^\S\n]+)$/iu;
 /** A maximum said before a factor: "max flow", "maximum head", "shut-off head", "up to", "peak". */
 const MAX_BEFORE_RE = /(?<!\p{L})(?:max(?:imum|\.)?|peak|shut-?off|up[^\S\n]+to|no[^\S\n]+more[^\S\n]+than|at[^\S\n]+most)(?:[^\S\n]+(?:flow|head|lift|pressure|delivery|output))?[^\S\n]*[:=]?[^\S\n]*(?:of[^\S\n]+)?$/iu;
 /** Words joining a flow and its head or pressure as one working point: "at", "against", "to", "through", "with", "into". */
-const POINT_JOIN_RE = /^[^\S\n]*(?:(?:of[^\S\n]+)?(?:water|oil|air|fluid|brine)[^\S\n]+)?(?:at|against|to|through|with|into|up(?:[^\S\n]+to)?|over|on|@)(?!\p{L})/iu;
+const POINT_JOIN_RE = /^[^\S\n]*(?:(?:of[^\S\n]+)?(?:water|oil|air|fluid|brine)[^\S\n]+)?(?:at|against|to|through|with|into|up(?:[^\S\n]+to)?|over|on|@|falling|dropping|down|from)(?!\p{L})/iu;
 function workingPoint(text: string, a: { start: number; end: number }, b: { start: number; end: number }): boolean {
   const [x, y] = a.start < b.start ? [a, b] : [b, a];
-  return POINT_JOIN_RE.test(text.slice(x.end, y.start).replace(/^[^\S\n]*[)\]]/u, ' ').replace(/^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?=(?:at|against|to|through|with|into|up|over|on|@)(?!\p{L}))/iu, ' '));
+  return POINT_JOIN_RE.test(text.slice(x.end, y.start).replace(/^[^\S\n]*[)\]]/u, ' ').replace(/^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?=(?:at|against|to|through|with|into|up|over|on|@|falling|dropping|down|from)(?!\p{L}))/iu, ' '));
 }
 /** A store's size: "48 V 14 Ah frame battery", "pack is 48 V 17.5 Ah", "a 3,000 mAh cell", "capacity". */
 const STORE_SIZE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|cells?|banks?|capacity|rated|nominal|power[- ]?banks?|accumulators?)(?!\p{L})/iu;
@@ -131,7 +135,11 @@ function factorsOf(text: string): Factor[] {
     // "a head of 12 m", "lifts the water 30 m": a bare metre read as a head where the words before say so.
     if (!hit) {
       const m = METRE_RE.exec(rest);
-      if (m && HEAD_BEFORE_RE.test(text.slice(Math.max(0, t.start - 40), t.start))) out.push({ start: t.start, end: t.numEnd + m[0].length, value: n, is: 'head' });
+      const last = out[out.length - 1];
+      // ("lifts 40 L/s through 12 m", "0.5 m³/min up 30 m", "a 12 m head", "a 4 m fall": a height said with a
+      // flow just before it, or named after it.)
+      const afterFlow = last?.is === 'flow' && FLOW_TO_HEIGHT_RE.test(text.slice(last.end, t.start));
+      if (m && (afterFlow || HEAD_BEFORE_RE.test(text.slice(Math.max(0, t.start - 40), t.start)) || HEAD_AFTER_RE.test(rest.slice(m[0].length)))) out.push({ start: t.start, end: t.numEnd + m[0].length, value: n, is: 'head' });
     }
   }
   return out;
@@ -188,7 +196,7 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
     if (f.is !== 'torque' || used.has(f)) continue;
     if (RATED_TORQUE_BEFORE_RE.test(text.slice(Math.max(0, f.start - 30), f.start))) continue;
     const w = pairOf(f, ['spin']);
-    if (!w || SPEED_SPAN_RE.test(text.slice(Math.max(0, w.start - 12), w.start)) || /^[^\S\n]*(?:rpm|r\/min|rev\/min)?[^\S\n]*(?:–|-|to|and up|upwards|or more)/iu.test(text.slice(w.end, w.end + 12))) continue;
+    if (!w || SPEED_SPAN_RE.test(text.slice(Math.max(0, w.start - 12), w.start)) || /^[^\S\n]*(?:rpm|r\/min|rev\/min)?[^\S\n]*(?:(?:–|-|to)[^\S\n]*[\d.]|and up|upwards|or more)/iu.test(text.slice(w.end, w.end + 16))) continue;
     used.add(f).add(w);
     const role = roleAround(Math.min(f.start, w.start), Math.max(f.end, w.end)) ?? 'out';
     add(f, w, 'power', f.value * w.value, `power = torque × angular speed (${formatQuantity(f.value, 'N m')} × ${formatQuantity(w.value, 'rad/s')})`, role);

@@ -247,9 +247,32 @@ const LOAD_LEAD_RE =
 /** A bias voltage: "25 V of reverse bias", "biased at 5 V", "a bias of 30 V". */
 const BIAS_RE = /(?<!\p{L})(?:bias(?:ed|ing)?|reverse[- ]bias(?:ed)?)(?!\p{L})/iu;
 
+/** Just before a power or an energy: a share of it ("84.7 % of the 5 kW", "60 per cent of its 200 kJ"); group 1 the percentage. */
+const SHARE_OF_BEFORE_RE = /(?<![\d.,])(\d+(?:[.,]\d+)?)[^\S\n]*(?:%|per[^\S\n]?cent|percent)[^\S\n]+of[^\S\n]+(?:(?:the|its|their|this|that|these|those)[^\S\n]+)?(?:(?:about|some|roughly|around|nearly)[^\S\n]+)?$/iu;
+
+/**
+ * "So 84.7 % of the 5 kW reaches the wheels, or 4.24 kW": the whole a share is taken of is what goes in,
+ * and a figure the text gives as that share (within 2.5 % of it, in the same or the next sentence) is
+ * what comes out — whatever the words around them say of the wheels or the load.
+ */
+function shareOfWhole(text: string, drafts: Draft[]): void {
+  for (const whole of drafts) {
+    if ((whole.kind !== 'power' && whole.kind !== 'energy') || whole.derived) continue;
+    const m = SHARE_OF_BEFORE_RE.exec(text.slice(Math.max(0, whole.start - 40), whole.start));
+    const share = m ? Number(m[1].replace(',', '.')) / 100 : NaN;
+    const n = siOf(whole);
+    if (!(share > 0 && share <= 1) || n === null || !(n > 0)) continue;
+    const part = drafts.find((d) => d !== whole && d.kind === whole.kind && !d.derived && d.start > whole.end && d.start - whole.end < 200 && Math.abs((siOf(d) ?? NaN) - share * n) <= 0.025 * share * n);
+    if (!part) continue;
+    whole.role = 'in';
+    part.role = 'out';
+  }
+}
+
 export function relateFigures(text: string, drafts: Draft[]): void {
   inputForEvery(text, drafts);
   quantumRestated(text, drafts);
+  shareOfWhole(text, drafts);
   // "P_out/P_in = 3.2 kW / 0.8 kW": the roles in the order the labels give them.
   for (const m of text.matchAll(RATIO_LABELS_RE)) {
     const from = m.index! + m[0].length;

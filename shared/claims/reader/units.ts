@@ -44,6 +44,9 @@ const PERCENT_RE = /[^\S\n]{0,3}(?:%|per[ -]?cent(?!\p{L})|pct\.?(?!\p{L}))/iuy;
 const COMPOUND_RE = /[^\S\n]*(?:\/|per(?!\p{L})|·|⋅|-(?=[^\S\n]*\p{L}\p{L}?\b))[^\S\n]*/iuy;
 // (Also "3.1 micronewtons of thrust per kilowatt": the quantity named between the unit and "per".)
 const FOR_EVERY_RE = /[^\S\n]+(?:(?:of[^\S\n]+(?:thrust|force|push|lift)[^\S\n]+(?:per|for[^\S\n]+(?:every|each)))|for[^\S\n]+(?:every|each))[^\S\n]+(?:single[^\S\n]+)?/iuy;
+/** After "per" and a unit of energy or power: the input that unit is of ("per kWh of electricity", "per kW it draws"). */
+export const PER_UNIT_IN_WORDS = String.raw`(?:of[^\S\n]+)?(?:electricity|electrical|electric|input|fuel|gas|drive|work|energy[^\S\n]+(?:in|input|supplied|used)|(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:takes|uses|draws|consumes|burns|is[^\S\n]+fed|gets))(?!\p{L})`;
+const PER_UNIT_IN_RE = new RegExp(String.raw`^[^\S\n]*(?:watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|W|J)s?[^\S\n]+${PER_UNIT_IN_WORDS}`, 'iu');
 /** After "per" that means "according to": a source named ("the cert sheet", "my calc", "spec", "the manufacturer"). */
 const PER_SOURCE_RE =
   /^(?:(?:the|my|our|their|its|his|her|this|that|your)[^\S\n]+(?:[\p{L}'’-]+[^\S\n]+){0,2}?)?(?:manufacturer|maker|spec(?:ification)?s?|data ?sheets?|labels?|manuals?|cert(?:ificate)?s?|sheets?|nameplates?|rating plates?|sims?|simulations?|calcs?|calculations?|data|records?|reports?|docs?|documentation|instructions|catalog(?:ue)?s?|brochures?|websites?|site|vendors?|suppliers?|sellers?|builders?|inventors?|owners?|tests?|measurements?|meters?|scales?|gauges?|readings?|logs?|listings?|ads?|quotes?|invoices?|contracts?|drawings?|plans?)(?!\p{L})/iu;
@@ -145,6 +148,8 @@ export function readSuffix(text: string, at: number): { suffix: Suffix; end: num
       // "Isp ~190 s per the cert sheet", "8.5 kg per the tank datasheet", "5 W per spec": "per" as "according
       // to", no compound.
       if (/per/i.test(c[0]) && PER_SOURCE_RE.test(text.slice(u.end + c[0].length, u.end + c[0].length + 40))) return { suffix: { type: 'unit', form: u.form }, end: u.end };
+      // "1.4 kWh per kWh it takes", "3 kW per kW of electricity": units out for each unit in (read as a gain in kinds.ts).
+      if (/per/i.test(c[0]) && per && (u.form.kind === 'energy' || u.form.kind === 'power') && per.form.kind === u.form.kind && PER_UNIT_IN_RE.test(text.slice(u.end + c[0].length, u.end + c[0].length + 60))) return { suffix: { type: 'unit', form: u.form }, end: u.end };
       // "1e-22 J per bit", "5 kWh per cycle", "3 min per batch": the figure of one of them.
       if (/per/i.test(c[0]) && PER_COUNT_RE.test(text.slice(u.end + c[0].length, u.end + c[0].length + 30))) return { suffix: { type: 'unit', form: u.form }, end: u.end };
       COMPOUND_AFTER_RE.lastIndex = u.end;

@@ -122,6 +122,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       // "4.8 kWh 'drawn from the vacuum'": what a claimed source gives, not what it takes.
       '(?:"|“|\x27|‘)?(?:drawn|taken|extracted|harvested|pulled|pumped|tapped) from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point(?: field| energy)?|a?ether|nowhere|nothing|thin air)',
       'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', '(?:of )?heat (?:leaving|coming out of|given off by|emitted by|released by) (?:the|its)', 'exported',
+      // "47 MW leaves the station": what a plant or a converter sends on.
+      '(?:leaves?|left|leaving) (?:the |its )?(?:station|plant|site|unit|generator|alternator|inverter|converter|terminals|building|works|farm|array|stack|module)',
       // "Runtime test (250 W AC load)", "a 600 W resistive load": the load a supply or a store carries (a bare "2 kW load" may be the device).
       '(?:AC|DC|resistive|constant|dummy|test|inverter) load(?! (?:of|on|from) (?:the |its )?(?:grid|mains|supply|network|source))', 'outputs?', 'delivered', 'produced', 'generated', 'comes? out', 'came out', 'out of', 'gained', 'returned', 'yielded', 'recovered', 'released', 'out(?=\\s+of\\s+(?:it|the))', 'of output', 'at the output', '(?:reached|reaches|reach|went to|goes to|got to|arrived at|made it to) (?:the |its )?(?:wheels?|shaft|axles?|load|output|grid|battery|house|home|motor|radiators?|rooms?|floors?|tanks?|cylinders?|pool|building)', '(?:going|flowing|goes|flows|went|flowed) (?:in)?to (?:the |its )?(?:battery|grid|load|tank|house|home|radiators?)', 'back(?! (?:in|into|to (?:the|its) (?:input|supply|source)))'],
   },

@@ -142,7 +142,7 @@ export const HARVEST_WORDS = [
   'runs? on (?:the )?(?:warmth|heat|motion|movement)', 'pull-?back (?:toys?|cars?|motors?|springs?|mechanisms?)', 'after (?:you |being |it is |it\x27s |one |a )?(?:pull|wind|wound|lift|shak|press|fill)\\w*', 'warmth of (?:your|the|a|its)', 'heat of (?:your|the|a) (?:hand|wrist|body|skin)',
   '(?:from|by) (?:the |a |its |our )?(?:gas |oil |wood |pellet |electric )?(?:boiler|furnace|heating system|central heating|district heating)',
   // Water running downhill: a wheel or turbine in a stream takes the stream's power.
-  'water ?wheels?', 'waterwheels?', 'mill ?(?:races?|streams?|ponds?|wheels?)', 'streams?', 'rivers?', 'brooks?', 'becks?', 'falling water', 'hydro(?:electric|power)?', 'pico-?hydro', 'micro-?hydro', '(?:water|river|tidal|ocean) currents?', 'weirs?', 'dams?', 'head of water',
+  'water ?wheels?', 'waterwheels?', 'mill ?(?:races?|streams?|ponds?|wheels?)', 'streams?', 'rivers?', 'brooks?', 'becks?', 'falling water', 'hydraulic rams?', 'ram[- ]pumps?', 'hydrams?', 'water rams?', 'drive (?:water|pipe|flow)', 'sling pumps?', 'spiral pumps?', 'coil pumps?', 'hydro(?:electric|power)?', 'pico-?hydro', 'micro-?hydro', '(?:water|river|tidal|ocean) currents?', 'weirs?', 'dams?', 'head of water',
   'stoves?', 'wood-?burners?', 'log[- ]burners?', 'hobs?', 'fireplaces?', 'hearths?', 'candles?', 'flames?', 'hot ?plates?', 'stove ?tops?', 'exhaust (?:pipes?|manifolds?|gas(?:es)?)', 'waste heat',
   'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell', 'reactors?', 'fission', 'tidal', 'geothermal', 'hot springs?', 'volcan\\w*', 'ocean thermal', 'OTEC', 'hot (?:rock|brine|well)s?',
   // A vehicle or set that burns fuel (a "self-charging" hybrid charges from its engine).
