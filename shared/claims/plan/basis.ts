@@ -103,6 +103,9 @@ function inputFormOf(f: Figure, text: string): string | null {
   return formOf(f, text);
 }
 
+/** After an input: words that it is heat drawn from a source ("20 W is drawn from the ambient air", "of heat from the borehole"). */
+export const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:(?:is|are|was|were|being)[^\S\n]+)?(?:of[^\S\n]+(?:low-grade[^\S\n]+|ambient[^\S\n]+)?heat[^\S\n]+)?(?:from|out of|drawn from|taken from|extracted from)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:borehole|ground|earth|soil|outside|outdoor|ambient|air|source|environment|surroundings|well|river|lake|sea|brine|loop)(?!\p{L})/iu;
+
 /**
  * Several figures on one side: all that goes in is added up (a supply and a signal; counting more in is
  * kinder to the claim); what comes out is added up only where the text names different forms of it
@@ -129,7 +132,15 @@ function combine(figs: Figure[], side: 'in' | 'out', text: string): Figure | und
     const sentences = new Set(parts.map((f) => (f.start === null ? null : sentenceKey(text, f.start))));
     const forms = parts.map((f) => inputFormOf(f, text));
     const named = forms.every((x) => x !== null) && new Set(forms).size === forms.length;
-    if (parts.length > 1 && !sentences.has(null) && sentences.size === parts.length && !named) return [...parts].sort((a, b) => (b.upper?.si ?? b.si) - (a.upper?.si ?? a.si))[0];
+    if (parts.length > 1 && !sentences.has(null) && sentences.size === parts.length && !named) {
+      const largest = (fs: Figure[]) => [...fs].sort((a, b) => (b.upper?.si ?? b.si) - (a.upper?.si ?? a.si))[0];
+      // (Heat said to be drawn from a source — "the remaining 20 W is drawn from the ambient air" — is an
+      // input of another form beside the work, whatever sentence says it: both go in.)
+      const fromSource = parts.filter((f) => f.end !== null && HEAT_SOURCE_AFTER_RE.test(text.slice(f.end, f.end + 50)));
+      const others = parts.filter((f) => !fromSource.includes(f));
+      if (fromSource.length === 0 || others.length === 0) return largest(parts);
+      parts = [largest(others), ...fromSource];
+    }
   }
   const si = parts.reduce((a, f) => a + f.si, 0);
   const up = parts.reduce((a, f) => a + (f.upper?.si ?? f.si), 0);

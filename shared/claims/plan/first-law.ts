@@ -7,12 +7,11 @@ import { HARVEST_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
 import { alt, sentenceAround } from '../reader/context';
 import { BURST_RE, isChargingTime } from '../reader/durations';
 import type { Figure } from '../types';
-import { at, need, ofKind, paragraphKey, siAt, typed, uniq, type Basis, type End } from './basis';
+import { at, HEAT_SOURCE_AFTER_RE, need, ofKind, paragraphKey, siAt, typed, uniq, type Basis, type End } from './basis';
 import type { HeatReading } from './carnot';
 import type { ThrustReading } from './thrust';
 
 /** After a heat input: where the heat comes from ("3.6 kW from the borehole"). */
-const HEAT_SOURCE_AFTER_RE = /^[^\S\n]*(?:(?:is|are|was|were|being)[^\S\n]+)?(?:of[^\S\n]+(?:low-grade[^\S\n]+|ambient[^\S\n]+)?heat[^\S\n]+)?(?:from|out of|drawn from|taken from|extracted from)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:borehole|ground|earth|soil|outside|outdoor|ambient|air|source|environment|surroundings|well|river|lake|sea|brine|loop)(?!\p{L})/iu;
 /**
  * A further input named but not measured: "the rest is sunlight", "the remainder comes from the ambient
  * air", "ambient heat supplies the rest", "solar-assisted", "topped up by heat from the ground".

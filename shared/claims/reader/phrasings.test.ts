@@ -1952,6 +1952,13 @@ describe('chains of stages and temperatures said around other figures (invented 
     // ("0.3 kWh per kWh of storage" is no gain: nothing is read as one.)
     expect(firstLaw('The racking used 0.3 kWh per kWh of storage.')).toBeUndefined();
   });
+  test("a reply that the rest of a heat pump's output 'is drawn from the ambient air' adds that heat to the work, in whatever sentence it is said", () => {
+    const text = 'Reviewer 2, point 3: "The output of 140 W exceeds the 120 W input."\nResponse: The 140 W is heat delivered by the heat pump; the remaining 20 W is drawn from the ambient air at 18 °C. We have added the source temperature (18 °C) and sink (35 °C) to Section 2.';
+    const fl = firstLaw(text);
+    // 140 W out of 120 W + 20 W in: 1 (node).
+    expect(fl?.finding).toBe('consistent');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1, 9);
+  });
   test("'a COP of 2.1 to 70 °F indoor air' is a COP and a temperature, not a range of temperatures", () => {
     const f = extractFigures('At 0 °F outdoors the heat pump delivers a COP of 2.1 to 70 °F indoor air.');
     expect(f.map((x) => x.kind)).toEqual(['temperature', 'cop', 'temperature']);
