@@ -276,6 +276,14 @@ function clauseAround(text: string, d: Draft): string {
  */
 const SUPERSEDED_AFTER_RE =
   /^(?:[^.;!?\n]{0,30}?(?<!\p{L})(?:was|were|has been|have been|had been|since|later|then)?[^\S\n]*(?:corrected|revised|amended|lowered|reduced|cut|changed)[^\S\n]+(?:down[^\S\n]+)?to(?!\p{L})|(?:[^.;!?\n\d]|(?:Table|Fig\.?|Figure|Eq\.?|row|line|page|p\.)[^\S\n]*[\dA-Z]+){0,30}?(?:[.;][^\S\n]+(?:it|this|that|the (?:value|figure|number))[^\S\n]+)?(?<!\p{L})should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be)(?!\p{L}))/iu;
+/** Just before a figure: a verb denied ("does not produce", "is not", "never gave"), with the figure perhaps in quotes. */
+const DENIED_BEFORE_RE = /(?<!\p{L})(?:(?:does|did|do|is|was|were|are|has|have|had)(?:n['’]t|[^\S\n]+not)|not|never)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?["“‘']?(?:about[^\S\n]+)?$/iu;
+/** Right after a denied figure: the right one follows ('", it produces 3.3 µN', "but 300 W", "; rather …", "— only …"). */
+const RIGHTED_AFTER_RE = /^["”’']?[^\S\n]*(?:[,;:—–]|[^\S\n]-)?[^\S\n]*(?:but|rather|instead|only|it(?:['’]s)?|it[^\S\n]+(?:is|was|produces|produced|gives|gave|makes|made|delivers|delivered))(?!\p{L})[^.;!?\n]{0,30}?\d/iu;
+/** Just before a figure put right by the one before it: "300 W, not 3 kW", "3.3 µN — not 3.3 mN". */
+const RIGHTED_BEFORE_RE = /\d[^\S\n]*\p{L}{0,5}[^\S\n]*(?:,|—|–|[^\S\n]-)[^\S\n]*not[^\S\n]+["“‘']?$/iu;
+/** Just before a figure: what a wrong figure said earlier would be ("the first figure is four times"). */
+const WRONG_FIGURE_BEFORE_RE = /(?<!\p{L})(?:the|that|this)[^\S\n]+(?:first|original|earlier|old|printed|wrong|erroneous|incorrect|mistaken|misprinted|published|uncorrected)[^\S\n]+(?:figure|number|value|speed|claim|version|reading)[^\S\n]+(?:is|was|would[^\S\n]+be|would[^\S\n]+have[^\S\n]+been|came[^\S\n]+to|amounts?[^\S\n]+to|equals?)[^\S\n]+(?:(?:about|some|roughly|nearly|over|more[^\S\n]+than)[^\S\n]+)?$/iu;
 /** A supposition: "if", "even if", "were it", "suppose", "supposing". */
 const SUPPOSITION_RE = /(?<!\p{L})(?:if|even if|were it|suppose|supposing|assuming|had it)(?!\p{L})/iu;
 /** A sentence that opens with a supposition: "Suppose …", "Imagine …", "Say …", "Let's say …". */
@@ -325,6 +333,11 @@ function saidInComparison(text: string, d: Draft): boolean {
   if (earlierDeviceSaid(text, d)) return true;
   // "The claimed 45 % efficiency was corrected to 4.5 %": a figure superseded by the one after it.
   if (SUPERSEDED_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
+  // 'Our demonstrator does not produce "3.3 mN", it produces 3.3 µN', 'not 3 kW but 300 W', '300 W, not 3 kW':
+  // a figure denied and put right in the same breath.
+  if ((DENIED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)) && RIGHTED_AFTER_RE.test(text.slice(d.end, d.end + 40))) || RIGHTED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 12), d.start))) return true;
+  // ("… the first figure is four times the speed of light": what the wrong figure would have been.)
+  if (WRONG_FIGURE_BEFORE_RE.test(text.slice(windowStart(text, d.start, 0, 80), d.start))) return true;
   if (OTHERS_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
   // "the 9 kW oil boiler it replaced", "the 58 mN per kW of its predecessor", "next to the 50 mN/kW of
   // a Hall thruster", "against 38 % for the production engine": another device's figure.

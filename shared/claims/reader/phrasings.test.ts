@@ -1967,3 +1967,22 @@ describe('chains of stages and temperatures said around other figures (invented 
     expect(f[2].upper).toBeUndefined();
   });
 });
+
+describe('a figure denied and put right, and what a wrong figure would have been (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text }).checks;
+  test('\'does not produce "3.3 mN", it produces 3.3 µN\': the denied figure is set aside', () => {
+    const text = 'Our demonstrator does not produce "3.3 mN", it produces 3.3 µN — micro, not milli — from 1 kW of laser light leaving the craft.';
+    const f = extractFigures(text).filter((x) => x.kind === 'thrust');
+    expect(f.map((x) => x.role)).toEqual(['aside', null]);
+    // 3.3e-6 N × 299 792 458 m/s / 1000 W = 0.98931 (photon rocket bound F = P/c; c from the SI Brochure).
+    expect(run(text).find((c) => c.check === 'photon-bound')?.finding).toBe('consistent');
+    expect(extractFigures('The rig gives 300 W, not 3 kW, from its 500 W supply.').find((x) => x.si === 3000)?.role).toBe('aside');
+    // (A bound denied with nothing put right keeps its place: "does not exceed 2 kW, and the input is 3 kW".)
+    expect(extractFigures('The output does not exceed 2 kW, and the input is 3 kW.').find((x) => x.si === 2000)?.role).not.toBe('aside');
+  });
+  test("'the first figure is four times the speed of light': what the misprint would have been is no claim", () => {
+    const text = 'The press kit said the sail "will reach 1.2 million km per second". That should read 1.2 million km per hour; the first figure is four times the speed of light.';
+    expect(run(text).find((c) => c.check === 'light-speed')?.finding).toBe('consistent');
+  });
+});
+
