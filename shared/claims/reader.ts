@@ -56,6 +56,8 @@
  * hold what the passes share.
  */
 import type { Figure } from './types';
+import { focusOneItem } from './plan/items';
+import { runClaimChecks } from './plan/run';
 import { readFigures } from './reader/figures';
 import { readableLayout } from './reader/pdf-text';
 import { detex } from './reader/tex';
@@ -66,6 +68,12 @@ import { unitAt } from './reader/units';
  * follow the figures they come from. See the file's comment for what is read.
  */
 export function extractFigures(text: string): Figure[] {
+  // Several devices in one text, each on a line of its own: the figures of all but the one checked are
+  // set aside (plan/items.ts).
+  return focusOneItem(text, readPasted(text), readPasted, runClaimChecks);
+}
+
+function readPasted(text: string): Figure[] {
   // Text copied out of a PDF ("coeffi-\ncient", lines wrapped mid-sentence, "efﬁciency"): read as written,
   // then each figure's offsets and words point back at the pasted text.
   const unwrapped = readableLayout(text);

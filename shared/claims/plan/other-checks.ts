@@ -47,7 +47,7 @@ const LIGHT_LIMIT_NAMED_RE = /(?<!\p{L})(?:Shockley[–-]Queisser|SQ limit|detai
 
 /** Converters of electricity to electricity: their efficiency is no light converter's. */
 const ELECTRICAL_CONVERTER_RE =
-  /(?<!\p{L})(?:buck|boost|buck-boost|DC[- ]?(?:to[- ])?DC|switching (?:regulators?|converters?|supply|supplies)|(?:voltage |linear )?regulators?|inverters?|micro-?inverters?|charge controllers?|MPPT|chargers?|power suppl(?:y|ies)|transformers?|(?:power|voltage|electronic) converters?|converters? (?:for|on|behind|after) (?:the |a |small |its )?(?:solar |PV )?(?:panels?|modules?|arrays?))(?!\p{L})/iu;
+  /(?<!\p{L})(?:buck|boost|buck-boost|DC[- ]?(?:to[- ])?DC|switching (?:regulators?|converters?|supply|supplies)|(?:voltage |linear )?regulators?|inverters?|micro-?inverters?|charge controllers?|MPPT|chargers?|power processing units?|PPUs?|power conditioning (?:units?|electronics)|(?:motor |LED )?(?:controllers?|drivers?)|ballasts?|power suppl(?:y|ies)|transformers?|(?:power|voltage|electronic) converters?|converters? (?:for|on|behind|after) (?:the |a |small |its )?(?:solar |PV )?(?:panels?|modules?|arrays?))(?!\p{L})/iu;
 
 /** Up to 300 characters before a figure and 200 after, within its paragraph (a blank line ends one). */
 function paragraphNear(text: string, start: number, end: number): string {

@@ -243,6 +243,14 @@ export function readPercent(text: string, start: number, end: number, floor: num
     const role = /cool/i.test(moves[1] ?? moves[2] ?? moves[3]) ? 'cooling' : 'heating';
     return { kind: 'cop', role, factor: 0.01, unit: '', assumption: `More than 100 % "efficient" where the text speaks of ${role}: read as a ${role} COP (heat moved over work put in).` };
   }
+  // ("The 380 % on the commissioning sheet is not an efficiency … It is the coefficient of performance, 3.8":
+  // the text itself says what the percentage is.)
+  // (Said of the same percentage anywhere in the text: a subject line's "380 % efficiency??" answered below.)
+  const sameSaid = value > 100 && [...text.matchAll(new RegExp(`(?<![\\d.,])${String(value).replace('.', '[.,]')}[^\\S\\n]*(?:%|per[^\\S\\n]?cent)`, 'giu'))].some((x) => SAID_TO_BE_COP_RE.test(text.slice(x.index! + x[0].length, x.index! + x[0].length + 200)));
+  if (value > 100 && (SAID_TO_BE_COP_RE.test(text.slice(end, end + 300)) || sameSaid)) {
+    const cooling = COOLING_MACHINE_RE.test(text) && !/(?<!\p{L})(?:heat(?:ing)?|warm\w*|radiators?)(?!\p{L})/iu.test(text);
+    return { kind: 'cop', role: cooling ? 'cooling' : 'heating', factor: 0.01, unit: '', assumption: `The text says the percentage is a coefficient of performance: read as a ${cooling ? 'cooling' : 'heating'} COP.` };
+  }
   if (COOLING_MACHINE_RE.test(sentence) && value > 100) {
     return { kind: 'cop', role: 'cooling', factor: 0.01, unit: '', assumption: 'A refrigerator or air conditioner said to be more than 100 % efficient: read as a cooling COP (heat drawn out over work put in).' };
   }
@@ -258,6 +266,9 @@ const GENERIC_HEAT_PUMPS_RE =
 
 /** Words of a machine that moves heat: "heating COP", "COP in cooling", "in heating mode". */
 const MOVES_HEAT_RE = /(?<!\p{L})(heating|cooling)[^\S\n]+(?:COP|C\.O\.P\.|coefficient of performance)(?!\p{L})|(?<!\p{L})(?:COP|coefficient of performance)[^\S\n]+(?:for|in|when|of)[^\S\n]+(heating|cooling)(?!\p{L})|(?<!\p{L})(heating|cooling)[^\S\n]+mode(?!\p{L})/iu;
+
+/** After a percentage: the text says what it is, "it is the coefficient of performance", "that figure is the COP". */
+const SAID_TO_BE_COP_RE = /(?<!\p{L})(?:it|this|that|the[^\S\n]+(?:figure|number|percentage|value))(?:[^\S\n]+(?:is|was)|['’]s)[^\S\n]+(?:really[^\S\n]+|simply[^\S\n]+|actually[^\S\n]+)?(?:the|a|its)[^\S\n]+(?:(?:heating|cooling|seasonal)[^\S\n]+)?(?:coefficient[^\S\n]+of[^\S\n]+performance|COP)(?!\p{L})/iu;
 
 /** The kind of a bare number, from the words before it; a gain or ratio from the words after. */
 /** Just before a figure as it was printed, given or stated: "was printed as", "is given as". */

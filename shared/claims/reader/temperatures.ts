@@ -84,7 +84,9 @@ export function isDifference(text: string, start: number, end: number, floor: nu
   if (DIFF_BEFORE_RE.test(before)) {
     // "only 20 °C" / "just 20 °C" alone are not differences: the clause must speak of one.
     const m = DIFF_BEFORE_RE.exec(before)!;
-    if (!/^(?:only|a mere|just)/i.test(m[0].trim()) || /differen|gradient|ΔT|delta|lift|rise/i.test(sentenceAround(text, start, end))) return true;
+    // ("with the hot face at just 60 °C and a 30 K difference": a side named just before it is that side's.)
+    const sideNamed = /(?<!\p{L})(?:sides?|faces?|plates?|ends?|junctions?|sinks?|sources?|reservoirs?|inlets?|outlets?|heads?|water|air)[^\S\n]+(?:(?:is|was|sits|runs|stays|kept|held|at)[^\S\n]+){0,2}(?:only|just|a[^\S\n]+mere)[^\S\n]*$/iu.test(before);
+    if (!sideNamed && (!/^(?:only|a mere|just)/i.test(m[0].trim()) || /differen|gradient|ΔT|delta|lift|rise/i.test(sentenceAround(text, start, end)))) return true;
   }
   if (kelvinBesideCelsius(text, start, end)) return true;
   // (Words past a table's column gap are the next cell's: "… temperature   720 °C     Temperature difference to cooler   680 K".)

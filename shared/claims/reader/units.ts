@@ -160,7 +160,10 @@ export function readSuffix(text: string, at: number): { suffix: Suffix; end: num
   C_SUFFIX_RE.lastIndex = at;
   const cm = C_SUFFIX_RE.exec(text);
   const speedContext = /(?<!\p{L})(?:cruis\w*|speeds?|velocit\w*|travel\w*|reach\w*|fl(?:y|ies|ying)|moves?|moving|accelerat\w*|pushed|boosted|driven|goes|going|at|to)(?!\p{L})[^.;!?\n]{0,30}$/iu.test(text.slice(Math.max(0, at - 50), at).replace(/[-−+]?[\d.,]+$/, ''));
-  if (cm && (/^c/.test(cm[0]) || speedContext)) {
+  // ("Calderon 24c", "Series 30c": a model's name, a word with a capital just before the number, and no
+  // speed said around it.)
+  const modelName = /(?<!\p{L})\p{Lu}[\p{L}\p{N}&-]*[^\S\n]+$/u.test(text.slice(Math.max(0, at - 50), at).replace(/[-−+]?[\d.,]+$/, '')) && !/(?<![\p{L}])(?:c|speed of light)(?!\p{L})/iu.test(sentenceAround(text, at, at).replace(/\d[\d.,]*c(?!\p{L})/gu, ''));
+  if (cm && ((/^c/.test(cm[0]) && !modelName) || speedContext)) {
     return { suffix: { type: 'unit', form: SPEED_OF_LIGHT }, end: at + cm[0].length };
   }
   PERCENT_RE.lastIndex = at;

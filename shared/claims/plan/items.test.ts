@@ -1,0 +1,76 @@
+/**
+ * Several devices in one text (shared/claims/plan/items.ts): which lines are items of a list, and the
+ * check of one item with the others' figures set aside. Every text here is invented test data: invented
+ * makers and models, example.org addresses.
+ *
+ * References: P = VI (Joule); the first law as output over input; the Carnot efficiency 1 − Tc/Th
+ * (any thermodynamics textbook); °F → K as (t + 459.67)·5/9 (NIST SP 811 §4.2.1.1).
+ */
+import { runClaimChecks } from '../plan';
+import { extractFigures } from '../reader';
+import { listItems } from './items';
+
+const labels = (text: string) => listItems(text).map((i) => i.label);
+const checksOf = (text: string) => runClaimChecks(extractFigures(text), { text }).checks;
+
+describe('which lines are items of a list of devices', () => {
+  test('named lines, lettered options and bullets that name whole devices are items', () => {
+    expect(labels('Small ORC units at the expo\n\nVessa 50: 50 kWe from hot water at 95 °C.\nThermagen T20: 20 kWe, needs at least 120 °C.\n')).toEqual(['Vessa 50', 'Thermagen T20']);
+    expect(labels('A) 3-ton heat pump, 3.1 kW in.\nB) 80,000 BTU/h gas furnace, 96 % AFUE.\nC) Dual fuel: option A with the furnace.\n')).toEqual(['A', 'B', 'C']);
+    expect(labels("- Rob's cargo bike: 48 V 17 Ah pack, 750 W hub.\n- A folding bike with a 250 W motor.\n- A question about chargers; answered.\n")).toEqual(["Rob's cargo bike", 'A folding bike', '']);
+    expect(labels('Calderon 24c. 24 kW to heating.\nCalderon 30c. As above, 30/35 kW.\nMerrowby System 18. 18 kW, 96.5 % gross.\n')).toEqual(['Calderon 24c', 'Calderon 30c', 'Merrowby System 18']);
+  });
+  test("one device's fields, a letter's headers, a conversation's speakers, a patent's claims and numbered steps are no list of devices", () => {
+    for (const text of [
+      'Input: 2 kW\nOutput: 1.7 kW\nEfficiency: 85 %\n',
+      '• 350 % efficient at A2/W35\n• Heat output: 7.35 kW | Electrical input: 2.1 kW\n• Sealed refrigerant circuit\n',
+      '• rated electrical input 1.5 kW\n• shaft output 1.32 kW\n• efficiency 88 %\n',
+      'From: a.reader@example.org\nTo: desk@example.org\nSubject: the 380 % heat pump\n',
+      'PRESENTER: thirty watts into the cavity.\nAUDIENCE MEMBER: and the thrust?\nPRESENTER: 2.4 µN.\nAUDIENCE MEMBER: sealed?\n',
+      'Customer (K. Lind): it drew 2 kW.\nCorvane support (A. Ruiz): that is the heater.\n',
+      '1. A heat pump comprising a compressor of 2 kW.\n2. The heat pump of claim 1, giving 7 kW.\n',
+      'Step 1. Temperatures: 95 °C and 65 °C.\nStep 2. Efficiency 2.1 %.\nStep 3. Carnot 8.2 %.\n',
+      '- Drive motor: 750 W.\n- Hub generator pushing 14 A back into the same pack.\n',
+    ]) {
+      expect(labels(text)).toEqual([]);
+    }
+  });
+});
+
+describe("the check of one item, the others' figures set aside", () => {
+  test('a catalogue line giving a larger output is no output of the motor whose input the first line gives', () => {
+    const text = 'Motor selection, conveyor line 3\n\nSerie M90L, 4 poles: output 1,5 kW, input 1,85 kW, 1.420 rpm.\nSerie M100L: 2,2 kW output.\nSerie M80: 0,75 kW, too small.\nWe order two M90L.';
+    const fl = checksOf(text).find((c) => c.check === 'first-law');
+    // 1.5 kW out of 1.85 kW in: 0.810811 (node).
+    expect(fl?.finding).toBe('consistent');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(1.5 / 1.85, 9);
+    const aside = extractFigures(text).filter((f) => f.role === 'aside').map((f) => f.si);
+    expect(aside).toEqual(expect.arrayContaining([2200, 750]));
+  });
+  test("a round-up's one impossible device is the one checked, each item read with its own words", () => {
+    const text = "Stove-top thermoelectric generators compared\n\n- Flintco TG-5: rated 5 W with the hot plate at 200 °C; the module sheet gives 4.5 % conversion at a 150 K difference.\n- Grisby Ember: 3 W, USB only.\n- Ochre Cell: the seller claims 11 % conversion with the hot face at just 60 °C and a 30 K difference across the module.\nThe Ochre Cell is the one people ask about.";
+    const carnot = checksOf(text).find((c) => c.check === 'carnot');
+    // Th = 333.15 K, Tc = 303.15 K: Carnot 1 − 303.15/333.15 = 0.090050; 0.11 / 0.090050 = 1.22155 (node).
+    expect(carnot?.finding).toBe('breaks');
+    expect(carnot?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(0.11 / (1 - 303.15 / 333.15), 6);
+  });
+  test("a queue's one thread with a loop that feeds itself breaks the first law, whatever other threads give", () => {
+    const text = "Moderator notes, electronics board\n\n• Thread 'Bench PSU recommendations': fine.\n• Thread 'My solid-state generator': the poster measures 1.5 A at 12 V going in and says the output runs a lamp bank at 3.2 A, also at 12 V.\n• Thread 'Cheap 30 V 5 A supply blew up': warned for language.";
+    const fl = checksOf(text).find((c) => c.check === 'first-law');
+    // 3.2 A × 12 V = 38.4 W out of 1.5 A × 12 V = 18 W in: 2.13333 (P = VI; node).
+    expect(fl?.finding).toBe('breaks');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(38.4 / 18, 9);
+  });
+  test('an item that leans on another ("same bus") is not judged alone to break a law; the one named below the list is checked', () => {
+    const text = 'DC-DC converters on the test bench\n\nQuillon QB-100: input 2.1 A at 48 V, output 8 A at 11.5 V. Runs warm.\nHartwell H12: 7.5 A out at 12.0 V for 2.0 A in, same bus.\nLyme D-series: would not start below 40 V.\nThe Quillon is the one we fitted.';
+    const fl = checksOf(text).find((c) => c.check === 'first-law');
+    // 8 × 11.5 = 92 W out of 2.1 × 48 = 100.8 W in: 0.912698 (node).
+    expect(fl?.finding).toBe('consistent');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(92 / 100.8, 9);
+  });
+  test('a list whose items have no check sets the others aside all the same: no ledger across two posts', () => {
+    const text = "Moderation log\n\n- User 'Halvard' posted a video of his magnet wheel, said to give 5 kW at the shaft while a little 12 V battery keeps the controller alive.\n- User 'peat_bog' asks about a 200 W solar panel. Moved.\n- Two duplicate posts removed.";
+    expect(checksOf(text).some((c) => c.finding === 'breaks')).toBe(false);
+    expect(extractFigures(text).find((f) => f.si === 200)?.role).toBe('aside');
+  });
+});
