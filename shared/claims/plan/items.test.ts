@@ -74,3 +74,23 @@ describe("the check of one item, the others' figures set aside", () => {
     expect(extractFigures(text).find((f) => f.si === 200)?.role).toBe('aside');
   });
 });
+
+describe("the item checked is read without the other items' words", () => {
+  test("line A's monopropellant thruster and line B's electrospray say nothing of line C's sealed drive", () => {
+    const text =
+      "Reviewer 2, panel B: notes on the three propulsion proposals\n\nA. Green monopropellant thruster, 1 N class, Isp 235 s. Solid team, fund.\nB. Electrospray array, 0.2 mN per emitter cluster; needs a lifetime plan.\nC. 'Inertial displacement drive': two counter-rotating eccentric masses in a sealed case. The applicants report 3–6 mN of steady thrust for 40–50 W of electrical input, with no propellant and nothing leaving the case.";
+    const pb = checksOf(text).find((c) => c.check === 'photon-bound');
+    // Least severe ends: 3 mN against 50 W; F·c/P = 0.003 × 299 792 458 / 50 = 17 987.5 (c from the SI Brochure).
+    expect(pb?.finding).toBe('breaks');
+    expect(pb?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo((0.003 * 299792458) / 50, 3);
+  });
+  test("a closing remark's figure is not judged with another item: the option recommended is checked", () => {
+    const text =
+      "Replacement quotes (contractor's summary)\n\nA) 3-ton heat pump, 36,000 BTU/h heating at 47 °F outdoor, drawing 3.1 kW from the panel, supply air at 95 °F.\nB) 80,000 BTU/h gas furnace, 96 % AFUE.\nC) Dual fuel: option A with the furnace as back-up below 25 °F.\nWe recommend A; at 47 °F it puts out more than three times the heat it draws.";
+    const checks = checksOf(text);
+    expect(checks.some((c) => c.finding === 'breaks')).toBe(false);
+    // 36,000 BTU/h = 10 550.56 W (BTU_IT/h = 0.293 071 1 W, NIST SP 811 B.8); COP 10 550.56/3 100 = 3.4034;
+    // Carnot heating COP at 95 °F (308.15 K) over 47 °F (281.483 K) = 11.556; ratio 0.29452 (node).
+    expect(checks.find((c) => c.check === 'carnot')?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(0.29452, 4);
+  });
+});

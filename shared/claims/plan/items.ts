@@ -135,8 +135,8 @@ function lineKind(line: string): LineKind {
     if (named && namesDevice(named[1])) return { bullet: marker, label: named[1].trim() };
     // "A) 3-ton heat pump …", "B) 80,000 BTU/h gas furnace …": options by capital letter (not a clause of
     // one claim, "(a) rated electrical output 30 W;").
-    const letter = /^[^\S\n]*\(?([A-H])\)/u.exec(b[0]);
-    if (letter && !/(?:;|,[^\S\n]*(?:and|or))[^\S\n]*$/u.test(line)) return { bullet: marker, label: letter[1] };
+    const letter = /^[^\S\n]*(?:\(?([A-H])\)|([A-H])\.(?=[^\S\n]+['‘“"]?\p{Lu}))/u.exec(line);
+    if (letter && !/(?:;|,[^\S\n]*(?:and|or))[^\S\n]*$/u.test(line)) return { bullet: marker, label: letter[1] ?? letter[2] };
     return { bullet: marker, label: deviceHead(rest) };
   }
   const n = NAMED_RE.exec(line);
@@ -220,6 +220,30 @@ function namedOutside(text: string, items: Item[], item: Item): boolean {
 /** Words of an item that lean on another item's figures: "as above", "same bus", "likewise", "ditto". */
 const LEANS_ON_ANOTHER_RE = /(?<!\p{L})(?:as[^\S\n]+above|as[^\S\n]+before|same[^\S\n]+(?:bus|supply|voltage|conditions?|test|rig|set-?up|source|input|load|as)|likewise|ditto|like[^\S\n]+the[^\S\n]+(?:first|last|previous|other|one[^\S\n]+above))(?!\p{L})/iu;
 
+/** The text with the given items blanked out, their places kept (newlines stay). */
+function blank(text: string, items: Item[]): string {
+  return items.reduce((t, i) => t.slice(0, i.start) + t.slice(i.start, i.end).replace(/[^\n]/gu, ' ') + t.slice(i.end), text);
+}
+
+/** Words set on a figure of an item not checked (see focusOneItem). */
+const OTHER_ITEM_NOTE = 'Said of another item of the list';
+
+/**
+ * The text as the planner should read it for figures focused on one item: the items whose figures were
+ * set aside as another item's blanked out, so that their words (a monopropellant thruster on line A) say
+ * nothing of the item checked (a sealed drive on line C).
+ */
+export function textForFocus(text: string, figures: Figure[]): string {
+  if (!figures.some((f) => f.assumption?.startsWith(OTHER_ITEM_NOTE))) return text;
+  const items = listItems(text);
+  const inItem = (f: Figure, i: Item) => f.start !== null && f.start >= i.start && f.start < i.end;
+  // The item checked is the one with figures of its own; every other item is blanked (one with no figures
+  // at all too: "B. Electrospray array" says nothing of the drive on line C).
+  const checked = items.filter((i) => figures.some((f) => inItem(f, i) && !f.assumption?.startsWith(OTHER_ITEM_NOTE)));
+  const others = checked.length === 1 ? items.filter((i) => i !== checked[0]) : items.filter((i) => figures.some((f) => inItem(f, i) && f.assumption?.startsWith(OTHER_ITEM_NOTE)));
+  return others.length > 0 && others.length < items.length ? blank(text, others) : text;
+}
+
 type Runner = (figures: Figure[], ctx: PlanContext) => { checks: { finding: string; uses: string[] }[]; needs: unknown[] };
 type Reader = (text: string) => Figure[];
 
@@ -237,7 +261,7 @@ export function focusOneItem(text: string, figures: Figure[], read: Reader, run:
   if (withFigures.length < 2) return figures;
   const focused = (item: Item): Figure[] => {
     const others = items.filter((i) => i !== item);
-    const blanked = others.reduce((t, i) => t.slice(0, i.start) + t.slice(i.start, i.end).replace(/[^\n]/gu, ' ') + t.slice(i.end), text);
+    const blanked = blank(text, others);
     const own = read(blanked).filter((f) => !others.some((i) => inItem(f, i)));
     const set = figures
       .filter((f) => others.some((i) => inItem(f, i)))
@@ -245,21 +269,22 @@ export function focusOneItem(text: string, figures: Figure[], read: Reader, run:
         if (f.role === 'aside') return f;
         const other = others.find((i) => inItem(f, i))!;
         const name = other.label ? `“${other.label}”` : 'another line of the list';
-        return { ...f, role: 'aside', assumption: `Said of another item of the list (${name}), not of the one checked: set aside.` };
+        return { ...f, role: 'aside', assumption: `${OTHER_ITEM_NOTE} (${name}), not of the one checked: set aside.` };
       });
     return [...own, ...set].sort((a, b) => (a.start ?? 0) - (b.start ?? 0)).map((f, k) => ({ ...f, id: `f${k + 1}`, text: f.start !== null && f.end !== null ? text.slice(f.start, f.end) : f.text }));
   };
   const wholeBreaks = run(figures, { text }).checks.some((c) => c.finding === 'breaks');
   const runs = withFigures.map((item) => {
     const figs = focused(item);
-    return { item, figures: figs, ...run(figs, { text }) };
+    return { item, figures: figs, ...run(figs, { text: blank(text, items.filter((i) => i !== item)) }) };
   });
   // (An item that leans on another — "same bus", "as above" — is not judged alone to break a law; nor one
-  // whose breaking check takes a figure from outside it, unless the whole text breaks the law too.)
+  // whose breaking check takes a figure from outside it: a closing remark's "three times the heat it
+  // draws" is the heat pump's on line A, not the furnace's on line B.)
   const leans = (i: Item) => LEANS_ON_ANOTHER_RE.test(text.slice(i.start, i.end));
   const ownBreak = (r: (typeof runs)[number]) =>
     !leans(r.item) &&
-    r.checks.some((c) => c.finding === 'breaks' && (wholeBreaks || c.uses.every((id) => { const f = r.figures.find((x) => x.id === id); return !f || f.derived !== undefined || inItem(f, r.item); })));
+    r.checks.some((c) => c.finding === 'breaks' && c.uses.every((id) => { const f = r.figures.find((x) => x.id === id); return !f || inItem(f, r.item); }));
   const pick =
     runs.find(ownBreak) ??
     runs.find((r) => r.checks.length > 0 && namedOutside(text, items, r.item)) ??

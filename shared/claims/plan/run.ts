@@ -3,6 +3,7 @@
  * the check screens, at the ends of its ranges most favourable to the claim, with the law it rests
  * on and its first sentence headed by the finding.
  */
+import { textForFocus } from './items';
 import { checks } from '../../checks';
 import { CheckInputError, runCheck, type CheckRun } from '../../checks/run';
 import type { CheckName } from '../../checks/types';
@@ -126,6 +127,8 @@ function saidWithin(text: string, check: CheckName): string | null {
 }
 
 export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { checks: ClaimCheckRun[]; needs: ClaimCheckNeed[]; notes: string[] } {
+  // (Figures focused on one item of a list: the other items' words are no words of it.)
+  if (ctx.text) ctx = { ...ctx, text: textForFocus(ctx.text, figures) };
   const { plans, needs, notes } = planFor(figures, ctx);
   const out: ClaimCheckRun[] = [];
   for (const p of plans) {

@@ -68,7 +68,7 @@ export const PROPELLANT_FREE_WORDS = [
   'lasers?', 'laser[- ](?:thrusters?|diodes?|light|propulsion|arrays?|bars?|beams?)', 'photons?', 'beam leaving', 'quantum vacuum', 'virtual particles',
   'pushes? (?:against|on|off) (?:the )?(?:quantum )?vacuum', 'pushing (?:against|on|off) (?:the )?(?:[\\w-]+ ){0,3}?vacuum', 'recoil', 'collimated', 'light (?:alone|only)', 'radiators?',
   'thermal (?:radiation|recoil|photons?)', 'nothing but light', 'only light', 'waste heat (?:rejected|radiated)', 'photon (?:limit|pressure|bound)', 'radiation pressure',
-  'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'nothing (?:is |gets )?(?:blown|pushed|thrown|forced) (?:down(?:wards?)?|out|back(?:wards?)?)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
+  'no (?:propellers?|air ?flow|fans?|downwash|rotor wash)', 'no air (?:is )?(?:moved|pushed|blown|displaced|thrown)', 'nothing (?:is |gets )?(?:blown|pushed|thrown|forced) (?:down(?:wards?)?|out|back(?:wards?)?)', 'not (?:a|one) (?:gram|drop|ounce|bit|molecule|atom) of (?:propellant|fuel|reaction mass|gas)',
   'no (?:propellant|fuel|reaction mass|exhaust) (?:at all|whatsoever|of any kind)',
   'nothing (?:is )?(?:coming|going|being (?:thrown|blown|pushed)) (?:out|down|back)', 'no props?', 'no air (?:blowing|moving|being (?:blown|pushed))',
   // (a sheet's row: "Reaction mass expelled ....... none", "Propellant: nil", "Propellant consumed = 0 g")
@@ -105,7 +105,8 @@ export const PROPELLANT_WORDS = [
   // Things that push on air or water (lawfully far above P/c).
   '(?:drone|quadcopter|multicopter|multirotor) (?:motors?|propellers?|rotors?|arms?|props?)', '(?:drone|quadcopter|multicopter) makers? (?:advertis|claim|sell|quot|rate|list|say|state|promis|offer)\\w*', 'quadcopters?', 'multicopters?', 'multirotors?', 'helicopters?',
   '(?:agricultural|delivery|camera|racing|crop[- ]spraying|survey|photography|FPV|hobby|consumer|cargo|military|inspection) drones?', 'drone spec(?:ification)?s?',
-  '(?:four|six|eight|main|tail) rotors?(?! (?:inside|in a|in the|within|enclosed|sealed))',
+  // (Not a gyroscope's spinning masses: "a gyroscope lift module, four rotors at 12,000 rpm".)
+  '(?<!(?:gyro\\w*|flywheels?|precess\\w*|eccentric|counter-rotating)[^.;!?\\n]{0,60})(?:four|six|eight|main|tail) rotors?(?! (?:inside|in a|in the|within|enclosed|sealed))',
   'lifters?(?=[^.;!?]{0,80}(?:\\d ?kV|kilovolts?))', 'in (?:the )?(?:open|room|ambient|free|still|ordinary) air', 'rotor blades?', 'propellers?', 'props?', '(?:RC|R/C|radio[- ]controlled|model) (?:planes?|aircraft|airplanes?|aeroplanes?|helis?|gliders?|boats?)', '(?:air|aero)planes?', 'aircraft', 'paramotors?', 'hovercraft', 'ducted fans?', 'EDFs?', 'outboards?', 'boats?', 'water jets?', '(?:balsa|foil|ion|ionic|corona|EHD|high-voltage)[\\w-]*(?: [\\w-]+)? lifters?',
   'pushes? (?:on|against) (?:the )?(?:air|water)', 'tractors?', 'wheels? on the ground',
 ];
