@@ -6,7 +6,7 @@
  * the speed of light") added; then the relations (comparisons.ts, relations.ts) and the SI values.
  */
 import { multipliedOut } from './products';
-import { asideChanges, asideEmbodied, refills, storeChargeSpans, asidePerDistance, meterReadings, restatedEnergies, statedError } from './ledgers';
+import { asideChanges, asideEmbodied, asideSlips, refills, storeChargeSpans, asidePerDistance, meterReadings, restatedEnergies, statedError } from './ledgers';
 import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
 import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
@@ -377,6 +377,14 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         // "rated for 4K", "a 4K display": a glued K with no word of temperature in its sentence is a
         // thousand or a name, not a kelvin temperature.
         continue;
+      } else if (suffix.form.refrigeration) {
+        // "a 3-ton heat pump", "Chiller 2 carrying about 3 tons": a ton of refrigeration where the text names
+        // a cooling machine or a heat pump, and the ton is no weight ("the unit weighs 2 tons").
+        if (!REFRIGERATION_TEXT_RE.test(text) || /(?<!\p{L})(?:weigh\w*|mass|heavy|load(?:ed)?|payload|lift\w*|haul\w*|trucks?|lorr(?:y|ies)|cranes?|trailers?|ships?|carr(?:y|ies|ied)[^\S\n]+(?:a|the)[^\S\n]+load|of[^\S\n]+(?:steel|concrete|coal|ice|water|cargo|freight))(?!\p{L})/iu.test(text.slice(Math.max(0, start - 30), end + 25))) continue;
+        // ("nominally a 3-ton unit, so 36,000 BTU/h": the same capacity said twice is read once, in BTU/h.)
+        const btu = Number(t.num) * 12000;
+        if ([...text.matchAll(/(\d{1,3}(?:,\d{3})+|\d+(?:\.\d+)?)[^\S\n]*(?:BTU|Btu)[^\S\n]*(?:\/[^\S\n]*hr?|h|per[^\S\n]+hour)/gu)].some((x) => Math.abs(Number(x[1].replace(/,/gu, '')) - btu) <= 0.01 * btu)) continue;
+        assumption = 'A "ton" of a cooling machine read as a ton of refrigeration, 12 000 BTU/h (3.517 kW).';
       } else if (kind === 'temperature' && suffix.form.ambiguous) {
         assumption = fahrenheitDegrees
           ? '"Degrees" read as degrees Fahrenheit, the scale of the text\'s other temperatures.'
@@ -578,6 +586,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   rolesFromWordLabels(text, drafts);
   restatedEnergies(text, drafts);
   statedError(text, drafts);
+  asideSlips(text, drafts);
   asideOtherTopics(text, drafts);
   asideWorkedBounds(text, drafts);
   asideStatedBounds(bounds);
@@ -624,6 +633,9 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   }
   return figures;
 }
+
+/** A cooling machine or a heat pump named, or the trade's figures of one: where a bare "ton" is a ton of refrigeration. */
+const REFRIGERATION_TEXT_RE = /(?<!\p{L})(?:chillers?|air[- ]?condition\w*|AC|A\/C|heat[- ]pumps?|refrigerat\w*|cooling[^\S\n]+(?:capacity|load|tower|plant)|kW\/ton|BTU|Btu|SEER|EER|tonnage|condens\w*|evaporat\w*|compressors?|mini-?splits?|split[^\S\n]+(?:units?|systems?))(?!\p{L})/u;
 
 interface UnreadPercent {
   start: number;

@@ -8,6 +8,7 @@
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import { FIGURE_SI_UNIT } from '../types';
+import { sentenceAround } from './context';
 import { insertAfter, siOf, typedSi, upperSiOf, type Draft } from './draft';
 
 /** A register named before the first reading: a meter, a counter, a reading, a totaliser. */
@@ -275,5 +276,33 @@ export function statedError(text: string, drafts: Draft[]): void {
     d.quantity = typedSi(x * (1 - u), unit);
     d.upper = typedSi(x * (1 + u), unit);
     d.assumption = `The text states an error of ±${formatPrint(u * 100)} % for its measurements (“${m[0].trim()}”): ${formatQuantity(x, unit)} is read as ${formatQuantity(x * (1 - u), unit)} to ${formatQuantity(x * (1 + u), unit)}.`;
+  }
+}
+
+/** Words that put a figure right as a slip: "typo", "should read", "I meant", "correction", "sorry". */
+const SLIP_WORDS_RE = /(?<!\p{L})(?:typo|misprint|slip|should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be|say)|I[^\S\n]+meant|meant[^\S\n]+to[^\S\n]+(?:write|type|say)|correction|corrected|sorry)(?!\p{L})/iu;
+
+/**
+ * "Sorry, typo — that should read 2.1 A, not 21 A": a figure put right as a slip is set aside wherever it
+ * is said (the quoted "21 A at 12 V" above), with what was worked out from it (its 252 W, as a product
+ * or as a figure someone wrote down from it).
+ */
+export function asideSlips(text: string, drafts: Draft[]): void {
+  const wrong = drafts.filter(
+    (d) =>
+      d.role === 'aside' &&
+      !d.derived &&
+      /(?:,|—|–|[^\S\n]-)[^\S\n]*not[^\S\n]+["“‘']?$/u.test(text.slice(Math.max(0, d.start - 10), d.start)) &&
+      SLIP_WORDS_RE.test(sentenceAround(text, d.start, d.end)),
+  );
+  if (wrong.length === 0) return;
+  const same = (a: Draft, b: Draft) => a.kind === b.kind && siOf(a) !== null && siOf(a) === siOf(b);
+  const slipped = drafts.filter((d) => wrong.some((w) => same(w, d) && (d === w || d.start < w.start)));
+  for (const d of slipped) d.role = 'aside';
+  // What was worked out from a slip: a product whose words hold it, and a figure of that product's value.
+  const products = drafts.filter((d) => d.derived && slipped.some((w) => w !== d && w.start >= d.start && w.end <= d.end));
+  for (const p of products) {
+    p.role = 'aside';
+    for (const d of drafts) if (!d.derived && same(d, p) && d.start < wrong[0].start) d.role = 'aside';
   }
 }

@@ -1986,3 +1986,32 @@ describe('a figure denied and put right, and what a wrong figure would have been
   });
 });
 
+
+describe('slips put right, electricity from recovered heat, and tons of refrigeration (invented test data)', () => {
+  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  test("'that should read 2.1 A, not 21 A': the slip is set aside wherever it is quoted, with what was worked out from it", () => {
+    const text =
+      '> > It draws 21 A at 12 V off the bench supply and lights 60 W of lamps.\n> 21 A at 12 V is 252 W in.\n> Sorry, typo — that should read 2.1 A, not 21 A. The display shows 2.1 A at 12.0 V.\nThen about 25 W in lights 60 W of lamps.';
+    const fl = firstLaw(text);
+    // 60 W out of 2.1 A × 12.0 V = 25.2 W in: 2.38095 (P = VI; node).
+    expect(fl?.finding).toBe('breaks');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(60 / 25.2, 9);
+    expect(extractFigures(text).filter((f) => f.si === 252).every((f) => f.role === 'aside')).toBe(true);
+  });
+  test("a heat-recovery module's 'returns 14 kW of electricity' is what it makes, not heat handed back", () => {
+    const text = 'Case study, brick kiln heat recovery. "For every 100 kW of flue heat at 180 °C, the organic Rankine module returns 14 kW of electricity; the rest goes to the river at 12 °C."';
+    const carnot = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+    // η = 0.14; Carnot 1 − 285.15/453.15 = 0.370738; 0.14/0.370738 = 0.377625 (node).
+    expect(carnot?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(0.14 / (1 - 285.15 / 453.15), 6);
+  });
+  test("a bare 'ton' of a cooling machine is a ton of refrigeration; a ton of weight is not", () => {
+    // 1 ton of refrigeration = 12 000 BTU_IT/h = 3 516.853 W (NIST SP 811 Appendix B.8).
+    const f = extractFigures('Chiller 2 carrying about 3 tons, 44 °F leaving chilled water, 85 °F entering condenser water. Compressor 4.1 kW.');
+    expectRelClose(f.find((x) => x.kind === 'power' && x.role === 'out')!.si, 3 * 3516.853, 1e-6);
+    expectRelClose(extractFigures('The plant has 120 tons of refrigeration.').find((x) => x.kind === 'power')!.si, 120 * 3516.853, 1e-6);
+    expect(extractFigures('The chiller weighs 3 tons.').some((x) => x.kind === 'power')).toBe(false);
+    expect(extractFigures('We moved 3 tons of gravel.').some((x) => x.kind === 'power')).toBe(false);
+    // ("a 3-ton unit, so 36,000 BTU/h": one capacity said twice is read once.)
+    expect(extractFigures('RTU-2 is nominally a 3-ton unit, so 36,000 BTU/h of cooling.').filter((x) => x.kind === 'power')).toHaveLength(1);
+  });
+});

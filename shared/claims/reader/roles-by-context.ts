@@ -616,7 +616,8 @@ export function asidePassedOn(text: string, drafts: Draft[]): void {
   for (const d of drafts) {
     if (d.kind !== 'power' || d.derived || d.role === 'in') continue;
     if (PASSES_ON_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) && FROM_TO_AFTER_RE.test(text.slice(d.end, d.end + 80))) d.role = 'aside';
-    else if (recovery && RECOVERED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 60), d.start).replace(/^[^]*[.!?;\n][^\S\n]/u, ''))) d.role = 'aside';
+    // (Not electricity or work the recovered heat is turned into: "the ORC module returns 14 kW of electricity".)
+    else if (recovery && RECOVERED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 60), d.start).replace(/^[^]*[.!?;\n][^\S\n]/u, '')) && !/^[^\S\n]*(?:e(?![\p{L}])|(?:of[^\S\n]+)?(?:electric\w*|shaft|mechanical|work|net[^\S\n]+electric\w*))/iu.test(text.slice(d.end, d.end + 30))) d.role = 'aside';
   }
 }
 

@@ -20,6 +20,8 @@ export interface UnitForm {
   factor?: number;
   /** "degrees" alone: a temperature only where the sentence speaks of one (not an angle), read as Celsius. */
   ambiguous?: boolean;
+  /** A bare "ton": a ton of refrigeration only where the text names a cooling machine or a heat pump. */
+  refrigeration?: boolean;
 }
 
 const MICRO = ['µ', 'μ', 'u'];
@@ -108,6 +110,11 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     words: ['BTU per hour', 'BTUs per hour', 'Btu per hour', 'British thermal units per hour', 'British thermal unit per hour', 'BTU an hour', 'BTUs an hour', 'Btu an hour', 'BTU a hour', 'British thermal units an hour'],
   },
 
+  // A ton of refrigeration, 12 000 BTU_IT/h (NIST SP 811 Appendix B.8: 3.516 853 E+03 W): said outright,
+  // or as a bare "ton" of a cooling machine or a heat pump ("a 3-ton heat pump", "the chiller carries about
+  // 3 tons"), which the reader keeps only where the text names such a machine (`refrigeration`).
+  { kind: 'power', unit: 'BTU/h', factor: 12000, symbols: ['TR'], words: ['ton of refrigeration', 'tons of refrigeration', 'refrigeration ton', 'refrigeration tons', 'ton of cooling', 'tons of cooling'] },
+  { kind: 'power', unit: 'BTU/h', factor: 12000, refrigeration: true, words: ['ton', 'tons'] },
   // Thousands of BTU per hour, as US heating and cooling trade writes them ("MBH", "kBtu/h").
   { kind: 'power', unit: 'BTU/h', factor: 1000, symbols: ['MBH', 'MBtuh', 'kBtu/h', 'kBTU/h', 'kBtuh', 'kBtu/hr', 'kBTU/hr'], words: ['thousand BTU per hour', 'thousand Btu per hour'] },
   {
