@@ -94,3 +94,28 @@ describe("the item checked is read without the other items' words", () => {
     expect(checks.find((c) => c.check === 'carnot')?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(0.29452, 4);
   });
 });
+
+describe('lawful round-ups, quotes and correspondence break no law (invented test data)', () => {
+  test.each([
+    "Heat pumps on show\n\n- Arden AW-7: 7 kW of heat at A7/W35 for 1.6 kW, COP 4.4.\n- Brisk Mono 5: 5 kW heat output, 'up to 480 % efficient'.\n- Corvel Split 9: 9 kW, quiet.\nAll three draw their extra heat from the outdoor air.",
+    "Generator round-up\n\n1. Tamsin 2000i inverter generator: 2 kW continuous, 2.2 kW peak.\n2. Orrin P-3500: 3.5 kW, 30 kg.\n3. Solen Box 1000: a 1 kWh battery box that gives 1,000 W for about an hour, recharged from a 200 W panel.",
+    "Quotes received\nA) Air-source heat pump, 8 kW output, 2.2 kW input at 7 °C.\nB) Condensing gas boiler, 24 kW, 94 % efficient.\nC) Electric flow boiler, 12 kW.\nWe chose A.",
+    "Stand notes, day 2\n\nOrvik E-Drive 3: a 3 kW hub motor, 92 % efficient at 40 km/h.\nLumen Cell X: perovskite-silicon tandem, 31 % in the lab under one sun.\nPell Lifter: an ion-wind lifter, 30 kV at 1 mA, flying on its tether in room air.",
+    "Submissions this week:\n• Thread 'Solar generator review': 500 Wh pack, charges from 100 W panel in 6 hours.\n• Thread 'My heat pump bill': 3,600 kWh of electricity for 12,000 kWh of heat last winter.\n• Thread 'Wind turbine output': 400 W turbine gives 30 kWh a month.",
+    "Motors on test\n\nKell M1: 750 W shaft output, 900 W input.\nKell M2: 1.1 kW output, 1.3 kW input.\nKell M3: 1.5 kW output.",
+    "Options for the workshop\nOption 1: a 9 kW electric heater, 100 % of its input as heat.\nOption 2: a 9 kW air-to-air heat pump using about 3 kW.\nOption 3: a wood stove, 8 kW.",
+    "- Rob's e-bike: 36 V 10 Ah pack, 250 W motor, 60 km range.\n- Jen's cargo bike: 48 V 17 Ah pack, 750 W hub, regenerative braking adds a few per cent.\n- A folding bike with a 250 W motor.",
+    "Hi Dana,\n\nThanks for the data. The pump drew 1.2 kW and lifted 3 L/s through 25 m, so it's about 61 % wire-to-water. Fine for its age.\n\nBest,\nSam Ortiz | Facilities, Example Water Trust | +44 20 7946 0123\nThis e-mail and any attachments are confidential.",
+    "> On 3 May, K. Varga wrote:\n> The heat pump gives 9 kW of heat from 2.5 kW — isn't that over 100 %?\n\nNo: the other 6.5 kW comes from the outside air. A COP of 3.6 at 5 °C outside and 45 °C flow is normal; Carnot would allow about 8.\n\nRegards, L.",
+    "Reviewer 2, point 3: \"The output of 140 W exceeds the 120 W input.\"\nResponse: The 140 W is heat delivered by the heat pump; the remaining 20 W is drawn from the ambient air at 18 °C. We have added the source temperature (18 °C) and sink (35 °C) to Section 2.",
+    "-----Original Message-----\nFrom: press@example.org\nSent: 12 March 2026 09:14\nSubject: RE: your 'free heat' story\n\nThe unit takes 700 W and delivers 2.6 kW of heat to the tank; it is an air-source heat pump, not a free-energy device.",
+    "Dear Examiner,\n\nClaim 1 as amended recites a generator delivering 4.8 kW at 1,500 rpm when driven by a 6 kW motor. We do not assert any gain; the loss of 1.2 kW appears as heat in the windings.\n\nYours faithfully,\nR. Lindqvist, for the applicant",
+    "From: j.mbeki@example.org\nTo: editor@example.org\n\nYour piece says the flywheel 'gives back more than it takes'. My notes say 2.0 kWh in and 1.7 kWh out over the test — 85 %, which is what the maker claimed all along.\n\nJoe",
+    "On Tue, 14 Apr 2026 at 10:02, Priya <priya@example.org> wrote:\n> So the 'overunity' cell really showed 3 W out for 2 W in?\nThe 2 W was only the pump laser; the cell also sat in 40 W of sunlight through the window. So no.",
+    "Hi all — quick update from the test bay. The Stirling ran 6 hours on the 450 °C burner, gave 620 W at the shaft for 2.4 kW of gas. About 26 %. Next week we try a colder sink (12 °C instead of 30 °C).\n--\nMira, Example Engines Ltd",
+    "Thank you for your question. Our solar generator stores 1.5 kWh and recharges from its 400 W panel in about 5 hours of full sun; it does not make energy of its own.\nCustomer care, Example Outdoor Co. (ticket #48211)",
+    "> > Is 250 % efficiency possible?\n> For a heat pump, yes: it moves heat rather than making it.\nRight, and ours measured 2.5 kW heat for 1 kW electricity at 7 °C outdoor, 35 °C water."
+  ])('%#', (text) => {
+    expect(checksOf(text).filter((c) => c.finding === 'breaks')).toEqual([]);
+  });
+});

@@ -10,9 +10,10 @@
  * device ("Input: 2 kW", "Efficiency: 91 %", "Note: …") are no items. Lines before the first item and
  * after the last (a title, a closing remark) belong to all.
  *
- * Which item: one that, read alone, breaks a law (a round-up's one impossible device); else one the text
- * names outside the list ("We order two M90L", "The Ochre Cell is the one people ask about"); else the
- * first with a check that runs. Where no item has a check, nothing is set aside.
+ * Which item: one that, read alone, breaks a law on its own figures (a round-up's one impossible device);
+ * else one the text names outside the list with a check that runs or one it lacks ("We order two M90L",
+ * "The Ochre Cell is the one people ask about"); else the first with a check that runs. Where no item has
+ * a check, nothing is set aside unless the whole text would set one item's figure against another's.
  */
 import type { Figure } from '../types';
 import type { PlanContext } from './signals';
@@ -287,7 +288,7 @@ export function focusOneItem(text: string, figures: Figure[], read: Reader, run:
     r.checks.some((c) => c.finding === 'breaks' && c.uses.every((id) => { const f = r.figures.find((x) => x.id === id); return !f || inItem(f, r.item); }));
   const pick =
     runs.find(ownBreak) ??
-    runs.find((r) => r.checks.length > 0 && namedOutside(text, items, r.item)) ??
+    runs.find((r) => (r.checks.length > 0 || r.needs.length > 0) && namedOutside(text, items, r.item)) ??
     runs.find((r) => r.checks.length > 0);
   if (pick) return pick.figures;
   // No item has a check of its own: where the whole text has none that breaks either, the figures stay as
