@@ -380,6 +380,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       } else if (suffix.form.refrigeration) {
         // "a 3-ton heat pump", "Chiller 2 carrying about 3 tons": a ton of refrigeration where the text names
         // a cooling machine or a heat pump, and the ton is no weight ("the unit weighs 2 tons").
+        // (Nor a ton of something, "2 tons of CO2 a year", "3 tons of pellets": a mass, whatever machine burns or saves it.)
+        if (/^[^\S\n]*(?:of[^\S\n]+(?!refrigeration|cooling)\S|(?:a|per)[^\S\n]+(?:year|month|day|week|annum)|annually|yearly|less|fewer|saved|of[^\S\n]*$)/iu.test(text.slice(end, end + 20)) || /(?<!\p{L})(?:sav\w*|cuts?|avoid\w*|emi\w*|reduc\w*|offset\w*)[^.;!?\n]{0,20}$/iu.test(text.slice(Math.max(0, start - 30), start))) continue;
         if (!REFRIGERATION_TEXT_RE.test(text) || /(?<!\p{L})(?:weigh\w*|mass|heavy|load(?:ed)?|payload|lift\w*|haul\w*|trucks?|lorr(?:y|ies)|cranes?|trailers?|ships?|carr(?:y|ies|ied)[^\S\n]+(?:a|the)[^\S\n]+load|of[^\S\n]+(?:steel|concrete|coal|ice|water|cargo|freight))(?!\p{L})/iu.test(text.slice(Math.max(0, start - 30), end + 25))) continue;
         // ("nominally a 3-ton unit, so 36,000 BTU/h": the same capacity said twice is read once, in BTU/h.)
         const btu = Number(t.num) * 12000;

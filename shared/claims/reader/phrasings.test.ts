@@ -2011,6 +2011,8 @@ describe('slips put right, electricity from recovered heat, and tons of refriger
     expectRelClose(extractFigures('The plant has 120 tons of refrigeration.').find((x) => x.kind === 'power')!.si, 120 * 3516.853, 1e-6);
     expect(extractFigures('The chiller weighs 3 tons.').some((x) => x.kind === 'power')).toBe(false);
     expect(extractFigures('We moved 3 tons of gravel.').some((x) => x.kind === 'power')).toBe(false);
+    // (A ton of something in a heat pump's text is a mass: "saves 2 tons of CO2 a year".)
+    expect(extractFigures('Our 3-ton heat pump saves 2 tons of CO2 a year and draws 3 kW.').filter((x) => x.kind === 'power').map((x) => x.si)).toEqual([3 * 3516.852842, 3000].map((w) => expect.closeTo(w, 2)));
     // ("a 3-ton unit, so 36,000 BTU/h": one capacity said twice is read once.)
     expect(extractFigures('RTU-2 is nominally a 3-ton unit, so 36,000 BTU/h of cooling.').filter((x) => x.kind === 'power')).toHaveLength(1);
   });
