@@ -280,12 +280,13 @@ export function focusOneItem(text: string, figures: Figure[], read: Reader, run:
     return { item, figures: figs, ...run(figs, { text: blank(text, items.filter((i) => i !== item)) }) };
   });
   // (An item that leans on another — "same bus", "as above" — is not judged alone to break a law; nor one
-  // whose breaking check takes a figure from outside it: a closing remark's "three times the heat it
-  // draws" is the heat pump's on line A, not the furnace's on line B.)
+  // whose breaking check takes a figure from another item or from below the list: a closing remark's
+  // "three times the heat it draws" is the heat pump's on line A, not the furnace's on line B. What the
+  // text says above the list, "each unit was fed 2 kW", is said of every item.)
   const leans = (i: Item) => LEANS_ON_ANOTHER_RE.test(text.slice(i.start, i.end));
   const ownBreak = (r: (typeof runs)[number]) =>
     !leans(r.item) &&
-    r.checks.some((c) => c.finding === 'breaks' && c.uses.every((id) => { const f = r.figures.find((x) => x.id === id); return !f || inItem(f, r.item); }));
+    r.checks.some((c) => c.finding === 'breaks' && c.uses.every((id) => { const f = r.figures.find((x) => x.id === id); return !f || inItem(f, r.item) || (f.start !== null && f.start < items[0].start); }));
   const pick =
     runs.find(ownBreak) ??
     runs.find((r) => (r.checks.length > 0 || r.needs.length > 0) && namedOutside(text, items, r.item)) ??
