@@ -420,6 +420,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         derived = bare.derived;
         quantity = scaled(t.num, bare.factor);
         if (upperNum !== undefined) upper = scaled(upperNum, bare.factor);
+        // ("ΔT = 0": no difference, said without a unit.)
+        if (kind === 'temperature-difference') quantity = `${quantity} K`;
         // "three times as much heat as the electricity it uses", for a heat pump: a heating COP.
         const asCop = kind === 'efficiency' && derived ? gainAsCop(text, start, end) : null;
         if (asCop) {

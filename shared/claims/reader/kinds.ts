@@ -290,6 +290,15 @@ export function bareKind(text: string, start: number, end: number, floor: number
   if (/^[^\S\n]*[/×*÷][^\S\n]*\d/u.test(text.slice(end, end + 6)) || /\d[^\S\n]*[/×*÷][^\S\n]*$/u.test(before)) return null;
   // "the heating COP of the six units lay between 3.8 and 4.4": a count of things, not the figure.
   if (/(?<!\p{L})(?:the|these|those|all|our|its|their|your|its)[^\S\n]+$/iu.test(text.slice(Math.max(0, start - 8), start)) && COUNTED_AFTER_RE.test(text.slice(end, end + 30))) return null;
+  // "ΔT = 0", "a temperature difference of 0": no difference at all, in any unit.
+  // (Only in a text of one temperature: beside another difference or two temperatures — "at ΔT = 0 no
+  // engine works; ours runs across 150 K" — it is said of the bound, not of the device.)
+  if (
+    /^0+(?:\.0+)?$/u.test(text.slice(start, end)) &&
+    /(?:ΔT|∆T|(?<!\p{L})delta[- ]?T|temperature[^\S\n]+difference)[^\S\n]*(?:=|:|of|is|was)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 30), start)) &&
+    new Set([...text.matchAll(/(-?\d[\d.,]*)[^\S\n]*(?:°[^\S\n]*[CF]|K(?!\p{L})|kelvin|degrees)/giu)].map((x) => x[0].replace(/\s+/gu, ''))).size <= 1
+  )
+    return { kind: 'temperature-difference' };
   // "about 0.97 of the speed of light": a speed as a fraction of c.
   SPEED_OF_LIGHT_AFTER_RE.lastIndex = end;
   // ("a tenth of the speed of light": the fraction in words took its "of" with it.)

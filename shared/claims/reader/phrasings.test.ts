@@ -2017,3 +2017,17 @@ describe('slips put right, electricity from recovered heat, and tons of refriger
     expect(extractFigures('RTU-2 is nominally a 3-ton unit, so 36,000 BTU/h of cooling.').filter((x) => x.kind === 'power')).toHaveLength(1);
   });
 });
+
+describe("'ΔT = 0': an engine on one temperature (invented test data)", () => {
+  const carnotOf = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+  test('an engine said to turn heat into work with no temperature difference breaks the second law (Carnot: 1 − Tc/Th = 0)', () => {
+    const c = carnotOf('The engine runs with everything at the same 20 °C (ΔT = 0) and turns 30 % of the heat into work.');
+    expect(c?.finding).toBe('breaks');
+    expect(c?.outputs.find((o) => o.name === 'eta_max')?.si).toBe(0);
+  });
+  test("a heat pump at ΔT = 0 breaks nothing; a zero said beside another difference is the bound's, not the device's", () => {
+    expect(carnotOf('The heat pump works at 20 °C with ΔT = 0 and has a COP of 6.')?.finding).toBe('consistent');
+    const f = extractFigures('At ΔT = 0 no engine gives work; ours runs across 150 K with the hot end at 400 °C.');
+    expect(f.filter((x) => x.kind === 'temperature-difference').map((x) => x.si)).toEqual([150]);
+  });
+});
