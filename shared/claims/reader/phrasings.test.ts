@@ -2031,3 +2031,18 @@ describe("'ΔT = 0': an engine on one temperature (invented test data)", () => {
     expect(f.filter((x) => x.kind === 'temperature-difference').map((x) => x.si)).toEqual([150]);
   });
 });
+
+describe('a box shut to every flow (invented test data)', () => {
+  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  test("'Nothing enters or leaves the box - no heat, no light': a difference of temperature made inside is no source from outside", () => {
+    const text =
+      'A membrane lets fast molecules through one way only. In a sealed, insulated box at 21 °C it builds up a 12 K difference, and a thermoelectric strip across it delivers 0.15 W continuously. Nothing enters or leaves the box - no heat, no light, no wires other than the output leads. It has run for two weeks.';
+    const fl = firstLaw(text);
+    // 0.15 W × 14 × 86 400 s = 181 440 J out of nothing (node).
+    expect(fl?.finding).toBe('breaks');
+    expect(fl?.outputs.find((o) => o.name === 'E_out')?.si).toBeCloseTo(0.15 * 14 * 86400, 6);
+  });
+  test('but a box that holds a store of heat may give it out', () => {
+    expect(firstLaw('A sealed, insulated flask of 90 °C water runs the thermoelectric module; nothing enters the flask, and the module gives 0.5 W for an hour.')?.finding).not.toBe('breaks');
+  });
+});

@@ -269,6 +269,10 @@ function shareOfWhole(text: string, drafts: Draft[]): void {
   }
 }
 
+/** A box said to be shut to every flow: "nothing enters", "no heat, no light, no wires", "sealed, insulated … no heat in". */
+const CLOSED_BOX_RE =
+  /(?<!\p{L})(?:nothing[^\S\n]+(?:enters|goes[^\S\n]+in|comes[^\S\n]+in|gets[^\S\n]+in)|no[^\S\n]+heat(?:[^\S\n]+(?:in|input))?,[^\S\n]+no[^\S\n]+(?:light|wires|power|fuel|electricity)|(?:sealed|closed),?[^\S\n]+(?:and[^\S\n]+)?(?:thermally[^\S\n]+)?insulated[^.;!?\n]{0,60}?(?:nothing|no[^\S\n]+(?:heat|power|input)))(?!\p{L})/iu;
+
 export function relateFigures(text: string, drafts: Draft[]): void {
   inputForEvery(text, drafts);
   quantumRestated(text, drafts);
@@ -618,7 +622,11 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // (The harvest is looked for in the paragraph of the claim, with harvests said to be absent — "no
     // sun, no wind" — left out: "The light was on whenever we looked" in a buyer's answer is no harvest.)
     const harvestText = m ? paragraphAround(text, m.index, m.index + m[0].length).replace(/self-?powered/giu, '').replace(NEGATED_HARVEST_RE, ' ') : '';
-    if (m && out && !inputUnknown && !thermal && !HARVEST_RE.test(harvestText)) {
+    // (Unless the text shuts every flow out — "Nothing enters or leaves the box - no heat, no light", "a
+    // sealed, insulated box": a difference of temperature it makes inside it is no source from outside.)
+    // (Not where it holds a store of heat or charge: "a sealed flask of 90 °C water runs the module for an hour".)
+    const closed = CLOSED_BOX_RE.test(text) && !STORE_NAMED_RE.test(text) && !/(?<!\p{L})(?:stor(?:e|ed|es|ing|age)|flasks?|hot[^\S\n]+water|thermal[^\S\n]+mass|phase[- ]change|molten|pre-?heated|charged|batter(?:y|ies)|capacitors?|reservoirs?|tanks?)(?!\p{L})/iu.test(text);
+    if (m && out && !inputUnknown && ((!thermal && !HARVEST_RE.test(harvestText)) || closed)) {
       const start = m.index;
       const end = m.index + m[0].length;
       const draft: Draft = { start, end, kind: 'power', quantity: '0 W', role: 'in', derived: `no input: "${m[0]}"` };

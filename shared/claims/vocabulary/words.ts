@@ -122,7 +122,8 @@ export const SELF_RUNNING_WORDS = [
   'with nothing (?:plugged in|connected|attached)(?: to drive it)?', '(?:with )?nothing (?:else )?(?:supplied|fed|put in|added|given) to it', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',
   '(?:with )?nothing (?:driving|powering|feeding|turning|running) it', '(?:turns|spins|runs|keeps going|keeps turning|goes|turning|spinning) (?:on )?by itself',
   '(?:battery|supply|mains|power|source) (?:is |was |being )?(?:disconnected|taken out|removed|unplugged)', '(?:turning|running|spinning|going) on its own', '(?:battery|supply) (?:taken out|removed)',
-  'nothing connected to it', 'with nothing connected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
+  // "Nothing enters or leaves the box", "nothing goes in": a sealed box said to take in nothing.
+  'nothing (?:enters|goes in(?:to it)?|comes in|is fed in|gets in|enters or leaves|goes in or (?:out|comes out))', 'nothing connected to it', 'with nothing connected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
   'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
   // A sheet's label said to be empty: "Input: none", "Power source: nil".
   '(?:(?:electrical|electric|power|energy|external) )?(?:input|supply|power source|energy source)(?: (?:power|energy))?[^\\S\\n]*[:=][^\\S\\n]*(?:none|nil|nothing|zero|not needed|not required)',
