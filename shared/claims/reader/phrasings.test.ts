@@ -2046,3 +2046,24 @@ describe('a box shut to every flow (invented test data)', () => {
     expect(firstLaw('A sealed, insulated flask of 90 °C water runs the thermoelectric module; nothing enters the flask, and the module gives 0.5 W for an hour.')?.finding).not.toBe('breaks');
   });
 });
+
+describe('a loop said to feed itself: what goes back in and what is spare (invented test data)', () => {
+  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  test("'2.2 kW of that goes back to the VFD, so I'm seeing roughly 0.8 to 1.8 kW spare' in a closed loop breaks the first law", () => {
+    const text =
+      'Finally closed the loop! The 2.2 kW motor (through the VFD) spins a cluster of alternators, and the cluster puts out somewhere around 3–4 kW. 2.2 kW of that goes back to the VFD, so I am seeing roughly 0.8 to 1.8 kW spare. Pulled the mains plug on Sunday and it kept going.';
+    const fl = firstLaw(text);
+    // Least severe end: 3 kW out of 2.2 kW in = 1.36364 (node).
+    expect(fl?.finding).toBe('breaks');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(3 / 2.2, 6);
+  });
+  test("'spare' and 'goes back to the battery' in texts that claim no loop keep their plain sense", () => {
+    for (const text of [
+      'Under braking the motor works as a generator: of the 60 kW of braking power, 20 kW goes back to the battery.',
+      'The 10 kW diesel keeps the drive going, with 2 kW to spare for the lights.',
+      'The solar array turns the pump motor, with 300 W to spare from the 1.2 kW array.',
+    ]) {
+      expect(firstLaw(text)?.finding).not.toBe('breaks');
+    }
+  });
+});

@@ -273,7 +273,28 @@ function shareOfWhole(text: string, drafts: Draft[]): void {
 const CLOSED_BOX_RE =
   /(?<!\p{L})(?:nothing[^\S\n]+(?:enters|goes[^\S\n]+in|comes[^\S\n]+in|gets[^\S\n]+in)|no[^\S\n]+heat(?:[^\S\n]+(?:in|input))?,[^\S\n]+no[^\S\n]+(?:light|wires|power|fuel|electricity)|(?:sealed|closed),?[^\S\n]+(?:and[^\S\n]+)?(?:thermally[^\S\n]+)?insulated[^.;!?\n]{0,60}?(?:nothing|no[^\S\n]+(?:heat|power|input)))(?!\p{L})/iu;
 
+/** A loop said to feed itself: "closed the loop", "turns its own motor", "pulled the mains plug", "self-running". */
+const LOOP_CLAIM_RE =
+  /(?<!\p{L})(?:closed[^\S\n]+the[^\S\n]+loop|(?:turns|drives|runs|powers|keeps)[^\S\n]+its[^\S\n]+own[^\S\n]+(?:motor|drive|input)|pull(?:ed|s|ing)?[^\S\n]+(?:out[^\S\n]+)?the[^\S\n]+(?:mains[^\S\n]+)?(?:plug|starter(?:[^\S\n]+cord)?|cord|battery)(?:[^\S\n]+out)?|runs?[^\S\n]+(?:on|off)[^\S\n]+its[^\S\n]+own[^\S\n]+output|self-?(?:running|looped|looping|sustaining|powered))(?!\p{L})/iu;
+
+/**
+ * "2.2 kW of that goes back to the VFD, so I'm seeing roughly 0.8 to 1.8 kW spare", "keeps the 5 hp motor
+ * going with enough left over for a 1,200 W space heater": in a loop said to feed itself, what is fed back
+ * is what goes in, and what is said to be spare or left over is the excess.
+ */
+function loopParts(text: string, drafts: Draft[]): void {
+  if (!LOOP_CLAIM_RE.test(text)) return;
+  for (const d of drafts) {
+    if (d.kind !== 'power' || d.derived) continue;
+    const after = text.slice(d.end, d.end + 60);
+    const before = text.slice(Math.max(0, d.start - 40), d.start);
+    if (/^[^\S\n]*(?:of[^\S\n]+(?:that|it|this)[^\S\n]+)?(?:goes|is[^\S\n]+fed|is[^\S\n]+sent|is[^\S\n]+returned|returns?|feeds?)[^\S\n]+back[^\S\n]+(?:in)?to[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:VFD|motor|drive|input|controller|inverter)(?!\p{L})/iu.test(after)) d.role = 'in';
+    else if (/^[^\S\n]*(?:(?:to[^\S\n]+)?spare|left[^\S\n]+over|surplus)(?!\p{L})/iu.test(after) || /(?<!\p{L})(?:left[^\S\n]+over|to[^\S\n]+spare|spare)[^\S\n]+(?:for[^\S\n]+)?(?:(?:a|an|the|our|my)[^\S\n]+)?$/iu.test(before)) d.role = 'excess';
+  }
+}
+
 export function relateFigures(text: string, drafts: Draft[]): void {
+  loopParts(text, drafts);
   inputForEvery(text, drafts);
   quantumRestated(text, drafts);
   shareOfWhole(text, drafts);
