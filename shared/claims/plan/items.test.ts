@@ -75,6 +75,28 @@ describe("the check of one item, the others' figures set aside", () => {
   });
 });
 
+describe('a digest with one device named, and a drive said to make no ion wind', () => {
+  test("a moderator's digest is a list though only one line names a device; the member's heater is checked", () => {
+    const text =
+      "Moderator's digest, energy forum, week 19\n\n- A member's cavitation water heater: over two weeks it 'produced 310 kWh of heat against 180 kWh of electricity on the meter'. Pinned for a reply.\n- A question about night-storage heaters (3.4 kW, 7 h charge); answered.\n- A complaint about a 9 kW shower tripping the breaker; moved.";
+    expect(labels(text)).toEqual(["A member's cavitation water heater", '', '']);
+    const fl = checksOf(text).find((c) => c.check === 'first-law');
+    // 310 kWh out of 180 kWh in: 1.72222 (node).
+    expect(fl?.finding).toBe('breaks');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(310 / 180, 9);
+  });
+  test("numbered sections of a report are no list, whatever its heading says", () => {
+    expect(labels('Energy audit summary\n\n1. Existing plant. A gas boiler of 60 kW, 86 % seasonal.\n2. Proposed replacement. An air-source unit, 410 % efficient.\n3. Caveats. Performance falls on cold days.\n')).toEqual([]);
+  });
+  test("'with no ionisation and no ion wind' in high vacuum: no air pushed, the photon bound applies", () => {
+    const text = "Grant round 7\n\nApplication 3: plasma actuator for drones, 12 g of thrust per 10 W stage in air. Plausible.\nApplication 7: a stack of asymmetric capacitors said to produce 40 µN/W in high vacuum 'with no ionisation and no ion wind', at 25 kV. Reviewers note that no propellant or exhaust is identified.\nApplication 9: bearing test rig, no propulsion claim.\nPanel consensus: application 7 cannot be funded as written.";
+    const pb = checksOf(text).find((c) => c.check === 'photon-bound');
+    // 40 µN/W × c = 4e-5 × 299 792 458 = 11 991.7 (F/P against 1/c; c from the SI Brochure).
+    expect(pb?.finding).toBe('breaks');
+    expect(pb?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(4e-5 * 299792458, 1);
+  });
+});
+
 describe("the item checked is read without the other items' words", () => {
   test("line A's monopropellant thruster and line B's electrospray say nothing of line C's sealed drive", () => {
     const text =

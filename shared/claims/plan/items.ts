@@ -34,7 +34,7 @@ const NAMED_RE = /^[^\S\n]*([\p{Lu}\p{N}'‘“"][\p{L}\p{N}&'’‘“”"+/ .,
 const MODEL_STOP_RE = /^[^\S\n]*(\p{Lu}[\p{L}&'’-]*(?:[^\S\n]+[\p{L}\p{N}&'’-]+){0,3}?[^\S\n]+[\p{L}]{0,3}\d[\p{L}\p{N}-]*)\.[^\S\n]+(?=\S)/u;
 /** Words of a field of one device, or of a letter or a report, not of another device: "Input:", "Note:", "From:". */
 const FIELD_WORDS_RE =
-  /(?<!\p{L})(?:input|output|power|efficiency|cop|scop|eer|heat(?:ing)?|cooling|temperature|thrust|mass|weight|speed|voltage|current|energy|flow|pressure|head|rating|rated|measured|claimed|consumption|draw|supply|load|duration|time|date|price|cost|size|dimensions?|notes?|nb|summary|verdict|conclusions?|sources?|updates?|edit|re|subject|from|to|cc|bcc|sent|reply|response|answer|question|q|comments?|disclaimer|tel|phone|e-?mail|web|methods?|results?|abstract|background|aims?|setup|set-up|test|tests|trial|run|day|week|month|year|total|average|mean|peak|max|min|ambient|outdoor|indoor|hot|cold|side|source|sink|battery|pack|motor|engine|pump|fan|panel|cell|stage|step|figure|fig|table|eq|equation|section|page|p|ref|reference|tl;dr|ps|p\.s|edit|status|action|decision|outcome|recommendation|remarks?|caveats?|warning|caution|specs?|specifications?|features?|pros|cons|claims?|isp|Δv|delta-v|dv|eer|seer|scop|hspf|afue|coefficient|conversion|rating|catalogue|catalog|brochure|datasheet|report|memo|minutes|agenda)(?!\p{L})/iu;
+  /(?<!\p{L})(?:input|output|power|efficiency|cop|scop|eer|heat(?:ing)?|cooling|temperature|thrust|mass|weight|speed|voltage|current|energy|flow|pressure|head|rating|rated|measured|claimed|consumption|draw|supply|load|duration|time|date|price|cost|size|dimensions?|notes?|nb|summary|verdict|conclusions?|sources?|updates?|edit|re|subject|from|to|cc|bcc|sent|reply|response|answer|question|q|comments?|disclaimer|tel|phone|e-?mail|web|methods?|results?|abstract|background|aims?|setup|set-up|test|tests|trial|run|day|week|month|year|total|average|mean|peak|max|min|ambient|outdoor|indoor|hot|cold|side|source|sink|battery|pack|motor|engine|pump|fan|panel|cell|stage|step|figure|fig|table|eq|equation|section|page|p|ref|reference|tl;dr|ps|p\.s|edit|status|action|decision|outcome|recommendation|remarks?|caveats?|warning|caution|specs?|specifications?|features?|pros|cons|claims?|isp|Δv|delta-v|dv|eer|seer|scop|hspf|afue|coefficient|conversion|rating|catalogue|catalog|brochure|datasheet|report|memo|minutes|agenda|refrigerant|quantum|excitation|wavelength|sound|noise|warranty|colou?r|finish|material|frequency|resolution|accuracy|range)(?!\p{L})/iu;
 
 function linesOf(text: string): { start: number; end: number; line: string }[] {
   const out: { start: number; end: number; line: string }[] = [];
@@ -147,6 +147,10 @@ function lineKind(line: string): LineKind {
   return { bullet: null, label: null };
 }
 
+/** A heading of a list of several things: a digest, a queue, a round-up, a watch, notes on several. */
+const LIST_HEADING_RE =
+  /(?<!\p{L})(?:digest|queue|round-?up|roundup|watch|batch|submissions?|this[^\S\n]+(?:week|month)|compared|comparison|options|quotes|booths?|stands?|entries|applications|proposals|threads|posts|campaigns|listings|shortlist|line-?up|(?:two|three|four|five|six|several)[^\S\n]+[\p{L}'-]+)(?!\p{L})/iu;
+
 /**
  * The list items of a text, or none where it holds no list of two items or more. Bulleted lines of one
  * list are all items where two of them or more name a device (a queue's other lines, "A question about
@@ -168,7 +172,11 @@ export function listItems(text: string): Item[] {
     // (Not a patent's claims, "The module of claim 1", nor the parts of one device leaning on each other.)
     const claims = group.some((g) => /(?<!\p{L})(?:of[^\S\n]+(?:any[^\S\n]+(?:preceding|previous|one[^\S\n]+of[^\S\n]+the)[^\S\n]+)?claims?|comprising)(?!\p{L})/iu.test(lines[g].line));
     const devices = claims ? 0 : group.filter((g) => lines[g].kind.label !== null).length;
-    if (devices < 2) for (const g of group) lines[g].kind = { bullet: null, label: null };
+    // (One device named is enough under a heading of a list of several things: "Moderator's digest",
+    // "Crowdfunding watch", "three stands worth the walk".)
+    // (Bullets only, of a line or two each: numbered sections of a report are no list of devices.)
+    const headed = devices >= 1 && group.length >= 3 && /^[-•*–·▪◦]$/u.test(marker) && group.every((g) => lines[g].line.length <= 300) && LIST_HEADING_RE.test(text.slice(0, lines[group[0]].start));
+    if (devices < 2 && !headed) for (const g of group) lines[g].kind = { bullet: null, label: null };
     else for (const g of group) lines[g].kind = { bullet: marker, label: lines[g].kind.label ?? '' };
   }
   const items: Item[] = [];
@@ -215,7 +223,7 @@ function namedOutside(text: string, items: Item[], item: Item): boolean {
   // The name, or its first word where that is a proper name of three letters or more ("the Vessa", "M90L").
   const first = name.split(/[^\S\n]+/u)[0];
   const firstRe = first.length >= 3 && /^\p{Lu}/u.test(first) ? `|(?<![\\p{L}\\p{N}])${first.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}(?![\\p{L}\\p{N}])` : '';
-  return new RegExp(`(?<![\\p{L}\\p{N}])${esc}(?![\\p{L}\\p{N}])${firstRe}`, 'u').test(outside);
+  return new RegExp(`(?<![\\p{L}\\p{N}])${esc}(?![\\p{L}\\p{N}])`, 'iu').test(outside) || (firstRe !== '' && new RegExp(firstRe.slice(1), 'u').test(outside));
 }
 
 /** Words of an item that lean on another item's figures: "as above", "same bus", "likewise", "ditto". */
