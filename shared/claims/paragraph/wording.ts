@@ -89,6 +89,10 @@ export function buildParts(c: Context): Part[] {
   const resultsText = (n: number) => c.results.slice(0, n).join(' ');
   const resultsPart = (lead: (body: string) => string) => {
     const forms = c.results.map((_, i) => lead(resultsText(c.results.length - i)));
+    // The shortest form: the one result said up to its first ", and …" (a long sentence of a check that
+    // would otherwise take the paragraph past its limit).
+    const clipped = c.results[0]?.replace(/,[^\S\n]+and[^\S\n][^]*?(?=[.!?]?$)/u, '');
+    if (clipped && clipped !== c.results[0]) forms.push(lead(clipped));
     return part(forms, forms.map(() => COST.results));
   };
 

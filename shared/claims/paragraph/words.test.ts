@@ -44,6 +44,11 @@ describe('words', () => {
     }
   });
 
+  it(`stay within ${PARAGRAPH_WORDS_MAX} with one long result and three needs in an examiner's paragraph (a case fast-check found)`, () => {
+    const p = buildParagraph({ entries: [entry('efficiency-above-100-percent')], checks: [longRun(1)], needs: longNeeds.slice(1), figures, text: CAVITY_TEXT, style: 'apa', variant: 'examiner' });
+    expect(wordCount(p.body)).toBeLessThanOrEqual(PARAGRAPH_WORDS_MAX);
+  });
+
   it(`stay within ${PARAGRAPH_WORDS_MAX} for any mix of entries, results, needs and texts`, () => {
     const runs = [photon, heatPump, hotEngine, overUnity, longRun(0), longRun(1), { ...photon, sentence: '' }];
     fc.assert(
