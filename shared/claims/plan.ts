@@ -27,8 +27,9 @@
  *
  * The parts, in shared/claims/plan/: signals.ts (what the words say of the device), basis.ts (what
  * every planner starts from), one planner per check or group of checks (thrust.ts, rocket.ts,
- * carnot.ts, first-law.ts, speeds.ts, other-checks.ts), planner.ts (them in order) and run.ts
- * (running the plans).
+ * carnot.ts, first-law.ts, speeds.ts, other-checks.ts), planner.ts (them in order), run.ts
+ * (running the plans) and items.ts (a text listing several devices: one item checked, the others'
+ * figures set aside — used by the reader, whose extractFigures calls it).
  */
 import type { Figure, FigureKind } from './types';
 import { runClaimChecks } from './plan/run';

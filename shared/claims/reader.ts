@@ -50,6 +50,10 @@
  * half", "twenty-four") and is used for that alone; units are our vocabulary (figures-vocabulary.ts,
  * the trade's spellings) converted by mathjs, ranges and relations are ours, as no library reads them.
  *
+ * Several devices in one text, each on a line of its own (a round-up, a catalogue page, quotes A to C):
+ * each item is read with the others blanked out and one is checked, the others' figures set aside
+ * (shared/claims/plan/items.ts).
+ *
  * The passes, in shared/claims/reader/: numbers.ts and units.ts (1, 2), kinds.ts, temperatures.ts,
  * ranges-hedges.ts and roles.ts (3–5), figures.ts (a text's figures, pass by pass), comparisons.ts,
  * relations.ts, roles-by-context.ts, temperatures.ts and durations.ts (6); context.ts and draft.ts
