@@ -1927,9 +1927,11 @@ test("a verb said once for two subjects gives both the same side: 'the office us
   expect(extractFigures('The cell takes 15 A at 2 V, and the calorimeter reads 45 W of heat.').find((x) => x.si === 45)?.role).toBe('out');
 });
 
+/** The first-law run of a text's own figures (for the describes below). */
+const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+
 describe('chains of stages and temperatures said around other figures (invented test data)', () => {
   const roles = (text: string) => extractFigures(text).filter((f) => f.kind === 'power' || f.kind === 'energy').map((f) => [f.role, f.si]);
-  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
   test("'84.7 % of the 5 kW reaches the wheels, or 4.24 kW': the whole a share is taken of goes in, the share comes out", () => {
     const text = 'Each stage loses a little: inverter 97 %, motor 91 %, gearbox 96 %, so 84.7 % of the 5 kW reaches the wheels, or 4.24 kW.';
     expect(roles(text)).toEqual([['in', 5000], ['out', 4240]]);
@@ -1988,7 +1990,6 @@ describe('a figure denied and put right, and what a wrong figure would have been
 
 
 describe('slips put right, electricity from recovered heat, and tons of refrigeration (invented test data)', () => {
-  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
   test("'that should read 2.1 A, not 21 A': the slip is set aside wherever it is quoted, with what was worked out from it", () => {
     const text =
       '> > It draws 21 A at 12 V off the bench supply and lights 60 W of lamps.\n> 21 A at 12 V is 252 W in.\n> Sorry, typo — that should read 2.1 A, not 21 A. The display shows 2.1 A at 12.0 V.\nThen about 25 W in lights 60 W of lamps.';
@@ -2033,7 +2034,6 @@ describe("'ΔT = 0': an engine on one temperature (invented test data)", () => {
 });
 
 describe('a box shut to every flow (invented test data)', () => {
-  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
   test("'Nothing enters or leaves the box - no heat, no light': a difference of temperature made inside is no source from outside", () => {
     const text =
       'A membrane lets fast molecules through one way only. In a sealed, insulated box at 21 °C it builds up a 12 K difference, and a thermoelectric strip across it delivers 0.15 W continuously. Nothing enters or leaves the box - no heat, no light, no wires other than the output leads. It has run for two weeks.';
@@ -2048,7 +2048,6 @@ describe('a box shut to every flow (invented test data)', () => {
 });
 
 describe('a loop said to feed itself: what goes back in and what is spare (invented test data)', () => {
-  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
   test("'2.2 kW of that goes back to the VFD, so I'm seeing roughly 0.8 to 1.8 kW spare' in a closed loop breaks the first law", () => {
     const text =
       'Finally closed the loop! The 2.2 kW motor (through the VFD) spins a cluster of alternators, and the cluster puts out somewhere around 3–4 kW. 2.2 kW of that goes back to the VFD, so I am seeing roughly 0.8 to 1.8 kW spare. Pulled the mains plug on Sunday and it kept going.';
