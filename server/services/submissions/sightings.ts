@@ -16,7 +16,8 @@ export class Sightings {
 
   /**
    * A sighting with its stored files. The files are already in the store; if the database write
-   * fails they are removed again, so that nothing is left half-stored.
+   * fails they are removed again, so that nothing is left half-stored — unless the database cannot say
+   * whether the write committed, when they are kept.
    */
   async create(actor: User, input: SightingInput, figures: ClaimedFigureDto[], files: StoredFile[], origin: string): Promise<SubmissionDto> {
     let id: number;
@@ -43,7 +44,12 @@ export class Sightings {
         return s.id;
       });
     } catch (err) {
-      await removeStored(this.deps.store, files, (key, e) => this.deps.logger?.error({ err: e, key }, 'could not remove a file of a failed sighting'));
+      // A write that failed at its commit may still have been committed (the database can commit and die
+      // before it answers): the files are taken back only once the database says no row records them;
+      // while it cannot say, they are kept (an unrecorded file is harmless, a recorded one lost is not).
+      const recorded = files.length === 0 ? false : await Attachment.count({ where: { storageKey: files.map((f) => f.key) } }).then((n) => n > 0, () => null);
+      if (recorded === false) await removeStored(this.deps.store, files, (key, e) => this.deps.logger?.error({ err: e, key }, 'could not remove a file of a failed sighting'));
+      else if (recorded === null) this.deps.logger?.error({ keys: files.map((f) => f.key) }, 'kept the files of a sighting whose write may have committed');
       throw err;
     }
     this.digest.schedule(origin);
