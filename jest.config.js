@@ -59,6 +59,7 @@ module.exports = {
       // d3-scale and d3-shape ship ES modules as .mjs, which the preset does not transform.
       transform: { '\\.mjs$': ['babel-jest', { caller: { name: 'metro', bundler: 'metro', platform: 'web' } }] },
       testMatch: ['<rootDir>/components/**/*.test.tsx', '<rootDir>/tests/app/**/*.test.tsx'],
+      setupFilesAfterEnv: ['<rootDir>/tests/support/app-timeouts.ts'],
       transformIgnorePatterns: ['/node_modules/(?!(' + esmOnly.join('|') + ')/)'],
       moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
     },
