@@ -1356,3 +1356,30 @@ describe('a lifter run under a bell jar, a gyro drive with "nothing coming out" 
     expect(r.checks.find((c) => c.check === 'photon-bound')?.finding).toBe('breaks');
   });
 });
+
+describe("light's own push: a lamp on a vane, a source's recoil (issue 11, invented test data)", () => {
+  const photonRun = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
+  it('a lamp shone on a black vane on a torsion balance is held to P/c though the beam is an outside one', () => {
+    const run = photonRun('In the vacuum tank a 500 W xenon arc lamp was focused on a blackened vane hung from a torsion balance; the radiation pressure measured was 1.4 µN.');
+    expect(run?.finding).toBe('consistent');
+    // F·c/P = 1.4e-6 × 299 792 458 / 500 = 0.8394 (c exact, BIPM SI Brochure).
+    expect(out(run!, 'ratio')).toBeCloseTo((1.4e-6 * C) / 500, 6);
+  });
+  it('a mirror or a foil not said to be black may send the light back: the bound is 2P/c, and said', () => {
+    const run = photonRun('Light pressure demo: a 1 kW lamp lights an aluminised foil in the bell jar, and the push read off the balance is 5 µN.');
+    expect(run?.finding).toBe('consistent');
+    // 2P/c = 2 × 1000 / 299 792 458 = 6.671 µN; 5 µN / 6.671 µN = 0.7495.
+    expect(out(run!, 'ratio')).toBeCloseTo((5e-6 * C) / 2000, 6);
+    expect(run!.assumptions.join(' ')).toMatch(/2P\/c/u);
+  });
+  it("a transmitter's own recoil, beamed one way, is P/c", () => {
+    const run = photonRun("The probe's 50 W transmitter, beaming in one direction, pushes it with about 0.15 micronewtons.");
+    expect(run?.finding).toBe('consistent');
+    // 0.15e-6 × c / 50 = 0.8994.
+    expect(out(run!, 'ratio')).toBeCloseTo((0.15e-6 * C) / 50, 6);
+  });
+  it("a radiometer's vanes, pushed by the gas the light warms, and light recycled between mirrors are not held to light's own push", () => {
+    expect(photonRun("The radiometer's vanes spin in sunlight: not radiation pressure but the warmed gas pushes them, about 2 mN from 100 W of light.")).toBeUndefined();
+    expect(photonRun('Radiation pressure, recycled: the beam bounces back and forth 500 times between two mirrors, so 10 W gives 30 µN.')).toBeUndefined();
+  });
+});

@@ -47,6 +47,12 @@ export interface Signals {
   /** A refrigerator, chiller or cooler is named. */
   coolingWords: boolean;
   overUnity: boolean;
+  /**
+   * The push is light's, from a beam falling on a vane, a foil or a sail, or from a source that shines
+   * (radiation pressure, a lamp on a torsion balance): bounded by P/c, or 2P/c for a mirror, whatever the
+   * words of an outside beam say of "propellant".
+   */
+  lightPush: boolean;
 }
 
 /** "works just as well in hard vacuum", "no air needed": a claim that the device needs no air. */
@@ -123,6 +129,19 @@ function onlyTheClaim(text: string, words: string): string {
 /** A plain statement that the device throws out nothing, as a paragraph's own words ("no exhaust" too). */
 const PLAIN_NO_PROPELLANT_RE = new RegExp(`${EXPLICIT_NO_PROPELLANT_RE.source}|(?<!\\p{L})(?:no|without(?: any)?) (?:exhaust|expelled mass)(?!\\p{L})`, 'iu');
 
+/** Words of a push by light: radiation pressure, a light sail, a lamp on a torsion balance, P/c worked out. */
+const LIGHT_PUSH_RE =
+  /(?<!\p{L})(?:(?:radiation|light|photon|optical)[- ]pressure|pressure of (?:the )?(?:light|radiation|sunlight)|light exerts|(?:light|solar)[- ]?sails?|lightsails?|(?:push|force|momentum) of (?:the )?(?:light|radiation|photons|beam)|radiation balance|P ?\/ ?c(?!\p{L})|(?:power )?divided by the speed of light)(?!\p{L})/iu;
+/** Light sent back and forth between mirrors: its push is lawfully many times P/c. */
+const RECYCLED_LIGHT_RE = /(?<!\p{L})(?:back and forth|to and fro|recycl\w+|multiple (?:reflections|bounces|passes)|round[- ]trips|(?:many|several|\d+) (?:times|reflections|bounces|passes) between|cavit(?:y|ies)|resonat\w*)(?!\p{L})/iu;
+/** An outside beam's words, which count as propellant for the photon-rocket bound of a closed device. */
+const OUTSIDE_LIGHT_WORDS_RE =
+  /(?<!\p{L})(?:solar sails?|(?:pushed|driven|propelled|illuminated|accelerated) by (?:a |an |the )?(?:[\w-]+ ){0,3}?(?:lasers?|beams?|sunlight|light)|ground(?:-based)? lasers?|laser-pushed|(?:lasers?|beams?|light) (?:pointed|aimed|shone|shining|fired|directed) (?:at|on|onto) (?:a |an |the )?(?:[\w-]+ ){0,3}?(?:mirrors?|sails?|reflectors?|craft|probes?|targets?)|(?:light|beam) (?:bounces|is reflected|reflects) back|(?:twice|2 ?×? ?) ?P ?\/ ?c|beamed (?:power|energy) from)(?!\p{L})/giu;
+/** A push by gas the light warms (a radiometer's vanes, thermal creep), lawfully far above light's own. */
+const WARMED_GAS_RE = /(?<!\p{L})(?:radiometers?|thermal (?:transpiration|creep)|photophore\w*|convection|outgass\w*)(?!\p{L})/iu;
+const lightPushed = (text: string): boolean =>
+  LIGHT_PUSH_RE.test(text) && !WARMED_GAS_RE.test(text) && !RECYCLED_LIGHT_RE.test(text) && !PROPELLANT_RE.test(text.replace(OUTSIDE_LIGHT_WORDS_RE, ' ')) && !AIR_WORDS_RE.test(text);
+
 /** A device whose push is its own light: a photon thruster, lasers or emitters shining out of it. */
 const LIGHT_SOURCE_RE = /(?<!\p{L})(?:photon[- ](?:thrusters?|rockets?|drives?|propulsion)|lasers?|laser diodes?|light sources?|infrared emitters?|shines? (?:a|its) beam|beam of light)(?!\p{L})/iu;
 /** Words of a push on air (an ion wind, a breeze), anywhere in the text: no device of it is a light source's. */
@@ -195,5 +214,6 @@ export function readSignals(ctx: PlanContext): Signals {
     cooling: COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied),
     coolingWords: COOLING_RE.test(notDenied),
     overUnity: OVER_UNITY_RE.test(text) || (top !== undefined && OVER_UNITY_CLASSES.includes(top)),
+    lightPush: lightPushed(text),
   };
 }

@@ -45,6 +45,9 @@ function propellantFreeParagraph(b: Basis): { figures: Figure[]; s: Signals } | 
   for (const span of propellantFreeParagraphs(b.text)) {
     const figures = b.figures.filter((f) => inside(f, span));
     if (!figures.some((f) => (f.kind === 'thrust' || f.kind === 'thrust-per-power') && f.role !== 'aside' && !isTheBound(f, 0.05))) continue;
+    // (A text on light's push, whose beam's words count as propellant, is read whole where the paragraph
+    // lacks the power of the light.)
+    if (b.s.lightPush && !figures.some((f) => f.kind === 'power' || f.kind === 'thrust-per-power')) return null;
     return { figures, s: readSignals({ ...b.ctx, text: b.text.slice(span[0], span[1]) }) };
   }
   return null;
@@ -58,6 +61,19 @@ function reflectorPushed(text: string, thrust: Figure): boolean {
   const sentence = sentenceAround(text, thrust.start, thrust.end);
   return REFLECTOR_RE.test(sentence) && LIGHT_FALLS_RE.test(sentence) && !/(?<!\p{L})(?:emits?|emitting|emitters?|lamps?|bulbs?|sources?|behind|thrusters?|drives?|engines?|cavit(?:y|ies)|resonat\w*|sealed|closed|enclosed|tubes?|round[- ]trips?|inside)(?!\p{L})/iu.test(sentence);
 }
+
+/** What light may fall on and be sent back from; a black or absorbing one takes only the light's own momentum. */
+const LIT_TARGET_RE = /(?<!\p{L})(?:vanes?|foils?|targets?|(?:light |solar |laser )?sails?|lightsails?|mirrors?|reflect\w*|membranes?|films?)(?!\p{L})/iu;
+/** Light recycled between mirrors: "bounces back and forth 500 times between two mirrors", "photon recycling". */
+const RECYCLED_BETWEEN_MIRRORS_RE =
+  /(?<!\p{L})(?:recycl\w+|(?:back and forth|to and fro|\d+ times|many times|(?:multiple|repeated) (?:reflections|bounces|passes))[^.;!?\n]{0,40}between[^.;!?\n]{0,30}mirrors?)(?!\p{L})/iu;
+/** A closed device: light recycled inside it pushes nothing out. */
+const CLOSED_RE = /(?<!\p{L})(?:sealed|closed|enclosed|cavit(?:y|ies)|resonat\w*|box(?:es)?|frustum|inside (?:the|a|its) (?:device|drive|case|housing))(?!\p{L})/iu;
+/** A push said at P/c or 2P/c, in print rounded ("6.7 µN for 1 kW, twice P/c"): the bound said, no claim beyond it. */
+const atLightsBound = (thrust: Figure, power: Figure): boolean =>
+  power.si > 0 && [1, 2].some((k) => Math.abs((thrust.si * C_LIGHT) / (k * power.si) - 1) <= 0.01);
+const EMITTER_RE = /(?<!\p{L})(?:recoil\w*|emit\w*|puts? out|shed\w*|radiat\w+|beaming|transmitters?|torch(?:es)?|flashlights?|LEDs?)(?!\p{L})/iu;
+const BLACK_TARGET_RE = /(?<!\p{L})(?:black\w*|flat-black|absorb\w*|soot\w*)(?!\p{L})/iu;
 
 export function planThrust(b: Basis): ThrustReading {
   const { plans, needs, notes, text, pIn, pOut, speeds } = b;
@@ -88,7 +104,18 @@ export function planThrust(b: Basis): ThrustReading {
   const craftSpeed = speeds.find((f) => f.role === null);
   const photonApplies = s.propellantFree && !s.propellant;
   if ((thrust && drivePower) || perPower) {
-    if (photonApplies) {
+    if (photonApplies && RECYCLED_BETWEEN_MIRRORS_RE.test(text) && !CLOSED_RE.test(text)) {
+      // Light sent back and forth between mirrors on two bodies pushes them apart at each pass (lawfully
+      // many times P/c); between mirrors on one body it gains nothing. The text must say which.
+      needs.push(
+        need(
+          'photon-bound',
+          ['whether the mirrors the light passes between are on the device alone (then nothing is gained) or one of them is elsewhere (then each pass pushes)'],
+          'Light recycled between mirrors pushes at each pass only where one mirror is on another body.',
+          uniq([thrust, drivePower, perPower]),
+        ),
+      );
+    } else if (photonApplies) {
       if (thrust && drivePower) {
         // A mirror, a sail or a reflector that light falls on is pushed by it twice over when it sends the
         // light back: its bound is 2P/c, not the P/c of a source that only emits.
@@ -120,6 +147,22 @@ export function planThrust(b: Basis): ThrustReading {
           assumptions: ['Run per watt of input: the ratio to the bound does not depend on the power.'],
         });
       }
+    } else if (s.lightPush && thrust && drivePower && !atLightsBound(thrust, drivePower)) {
+      // Light falling on a vane, a foil or a sail, or shone out by a source: its push is at most P/c, or
+      // 2P/c where it may be sent back (a target not said to be black is given the benefit).
+      // (A source's own recoil — a torch, a transmitter, a radiating panel — is P/c whatever the text's other targets.)
+      const said = thrust.start !== null && thrust.end !== null ? sentenceAround(text, thrust.start, thrust.end) : '';
+      const emitter = EMITTER_RE.test(said) && !LIT_TARGET_RE.test(said);
+      const doubled = LIT_TARGET_RE.test(text) && !BLACK_TARGET_RE.test(text) && !emitter;
+      plans.push({
+        check: 'photon-bound',
+        uses: [thrust, drivePower],
+        inputs: (e) => ({ F_claimed: at(thrust, e(thrust)), P: doubled ? typed(2 * siAt(drivePower, e(drivePower)), 'W') : at(drivePower, e(drivePower)) }),
+        why: 'The text gives a push of light and the power of the light.',
+        assumptions: doubled
+          ? ['The light falls on a target the text does not say is black: it may send the light back and take at most twice its momentum, so the bound is 2P/c (P doubled here).']
+          : [],
+      });
     } else if (s.propellant) {
       notes.push('The text says the device expels propellant, so the photon-rocket bound (for devices that throw out nothing) does not apply; the rocket equation does.');
     } else {

@@ -79,7 +79,7 @@ export const PROPELLANT_FREE_WORDS = [
   // "ejects no reaction mass", "w/o any propellant", "works just as well in hard vacuum (no air needed)".
   '(?:ejects?|ejecting|expelling|throws? out|throwing out|vents?|venting|sheds?|shedding|carries|carrying) no (?:[\\w-]+ )?(?:propellant|reaction mass|exhaust|mass|matter)', 'w/o?(?:ut)? (?:any )?(?:propellant|reaction mass|exhaust)',
   'no air (?:is )?(?:needed|required)', '(?<!(?:not|n\x27t|n\u2019t|never|cannot|nor) )(?:works?|working|operates?|operating|functions?|functioning)(?: (?!not|never)[\\w-]+){0,3}? (?:in|under) (?:a |hard |high |deep |full )?vacuum',
-  '(?:hard |high )?vacuum,? where no (?:ion(?:ic)? wind|air)', 'no ion(?:ic)? wind (?:can|could) (?:form|arise|act)', 'radiating (?:panel|face|surface|plate)', 'radiat(?:es?|ing|ed)(?: [\\w-]+){0,4}? (?:out of|from|off) (?:one|a single|its|the) (?:face|side|surface)', '(?:infrared|IR|heat) lamps?', 'flashlights?', 'LEDs?(?= [^.;!?]{0,60}(?:push|thrust|recoil))', 'thermal emission', '(?:transient )?mass[- ]fluctuations?', 'mass(?: is (?:said|claimed) to| that)? (?:swings?|fluctuates?|oscillates?|varies)', 'mass (?:is |being |gets )?(?:modulated|made to (?:swing|vary|fluctuate))', 'mass[- ]modulat\\w*', 'Mach effect', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
+  '(?:hard |high )?vacuum,? where no (?:ion(?:ic)? wind|air)', 'no ion(?:ic)? wind (?:can|could) (?:form|arise|act)', 'radiating (?:panel|face|surface|plate)s?', 'beam(?:s|ing)? (?:[\\w-]+ ){0,3}?in (?:one|a single) direction', 'radiat(?:es?|ing|ed)(?: [\\w-]+){0,4}? (?:out of|from|off) (?:one|a single|its|the) (?:face|side|surface)', '(?:infrared|IR|heat) lamps?', 'flashlights?', 'LEDs?(?= [^.;!?]{0,60}(?:push|thrust|recoil))', 'thermal emission', '(?:transient )?mass[- ]fluctuations?', 'mass(?: is (?:said|claimed) to| that)? (?:swings?|fluctuates?|oscillates?|varies)', 'mass (?:is |being |gets )?(?:modulated|made to (?:swing|vary|fluctuate))', 'mass[- ]modulat\\w*', 'Mach effect', 'expels? nothing', 'ejects? nothing', 'emits? nothing',
   'closed[- ](?:cavity|resonator|system|box|container|frame|vessel|frustum|loop drive)', '(?:hermetically )?sealed', 'enclosed', 'cavity', 'EM ?drive',
   'inertial (?:propulsion|drive|thrust)', 'field propulsion', 'unidirectional (?:force|thrust)', 'net thrust from inside', 'fuel-?less (?:thruster|drive|propulsion)',
   'pushes? (?:itself|against nothing)', 'self-propell\\w*', 'frustum', 'tapered (?:cavity|resonator|copper)',
@@ -96,7 +96,8 @@ export const PROPELLANT_FREE_WORDS = [
 ];
 /** A device said to carry and expel propellant: the photon-rocket bound does not apply, the rocket equation does. */
 export const PROPELLANT_WORDS = [
-  'propellant', 'xenon', 'krypton', 'argon', 'hydrazine', 'kerosene', 'oxidi[sz]er', 'fuel tanks?', 'exhaust (?:velocity|speed)', 'Isp', 'specific impulse',
+  // (Not a lamp's gas: "a 2.2 kW xenon arc lamp".)
+  'propellant', '(?:xenon|krypton|argon)(?![- ](?:(?:arc|short-arc|flash|discharge|filled)[- ])?(?:lamps?|bulbs?|flash\\w*|headlights?|tubes?|lights?))', 'hydrazine', 'kerosene', 'oxidi[sz]er', 'fuel tanks?', 'exhaust (?:velocity|speed)', 'Isp', 'specific impulse',
   'ion (?:thruster|engine|drive)', 'Hall(?:-effect)? (?:thruster|effect thruster)', 'rocket', '(?<!(?:brass|steel|tungsten|lead|copper|internal|inner|oscillating|moving|shuttling|vibrating|sliding|rotating|enclosed|sealed|on-board|onboard)[- ])reaction mass(?! (?:with|inside|within|in the (?:housing|box|case|enclosure)|back and forth|to and fro))', 'mass flow', 'nozzle', 'ejects?', 'expels?',
   'plasma thruster', 'resistojet', 'arcjet', 'electrospray(?: thrusters?| propulsion)?', 'colloid thrusters?', 'ionic liquids?', 'FEEP', 'field[- ]emission (?:electric )?(?:propulsion|thrusters?)',
   '(?:emit(?:s|ting|ted)?|spray(?:s|ing|ed)?|eject(?:s|ing|ed)?|expel(?:s|ling|led)?) (?:charged |tiny |fine )?(?:droplets|ions|charged particles|particles|plasma)', 'pulsed plasma thrusters?', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
@@ -108,7 +109,9 @@ export const PROPELLANT_WORDS = [
   // (Not a gyroscope's spinning masses: "a gyroscope lift module, four rotors at 12,000 rpm".)
   '(?<!(?:gyro\\w*|flywheels?|precess\\w*|eccentric|counter-rotating)[^.;!?\\n]{0,60})(?:four|six|eight|main|tail) rotors?(?! (?:inside|in a|in the|within|enclosed|sealed))',
   'lifters?(?=[^.;!?]{0,80}(?:\\d ?kV|kilovolts?))', 'in (?:the )?(?:open|room|ambient|free|still|ordinary) air', 'rotor blades?', 'propellers?', 'props?', '(?:RC|R/C|radio[- ]controlled|model) (?:planes?|aircraft|airplanes?|aeroplanes?|helis?|gliders?|boats?)', '(?:air|aero)planes?', 'aircraft', 'paramotors?', 'hovercraft', 'ducted fans?', 'EDFs?', 'outboards?', 'boats?', 'water jets?', '(?:balsa|foil|ion|ionic|corona|EHD|high-voltage)[\\w-]*(?: [\\w-]+)? lifters?',
-  'pushes? (?:on|against) (?:the )?(?:air|water)', 'tractors?', 'wheels? on the ground',
+  'pushes? (?:on|against) (?:the )?(?:air|water)', 'tractors?',
+  // (A radiometer's vanes are pushed by the gas the light warms, not by the light; a critic's "like a radiometer" names none.)
+  '(?:the|a|its|our|this|my) radiometer(?:\'s|’s)? (?:vanes?|spins?|turns?|rotor|mill)', 'radiometer vanes', '(?:warm(?:ed)?|heated|hot) (?:gas|air) (?:pushes|pushing|push|drives)',
 ];
 
 /** Phrases that say a device needs no input (the input power is then 0). */
