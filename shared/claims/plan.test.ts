@@ -1383,3 +1383,28 @@ describe("light's own push: a lamp on a vane, a source's recoil (issue 11, inven
     expect(photonRun('Radiation pressure, recycled: the beam bounces back and forth 500 times between two mirrors, so 10 W gives 30 µN.')).toBeUndefined();
   });
 });
+
+describe('times, totals and sides said in passing (issue 11, invented test data)', () => {
+  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  it('a store charged slowly and emptied fast: each power over the time said with it, not over the other', () => {
+    const run = firstLaw('The unit spins its rotor up over about 10 minutes from a modest ~2 kW motor, then gives up to 500 kW for 1.5-2 seconds.');
+    expect(run?.finding).toBe('consistent');
+    // In: 2 kW × 600 s = 1.2 MJ; out: 500 kW × 1.5 s (the shortest end) = 0.75 MJ; 0.75 / 1.2 = 0.625.
+    expect(out(run!, 'over_unity')).toBeCloseTo(0.625, 9);
+    expect(run!.assumptions.join(' ')).toMatch(/1\.5 s.*shortest end/u);
+  });
+  it('"no supply connected at all", an average output over 30 days and its total: nothing in, the total out', () => {
+    const run = firstLaw('Month report, module ZP-4 (no supply connected at all): 30 days, average output 550 W into the test load, 396 kWh total.');
+    expect(run?.finding).toBe('breaks');
+    // 396 kWh = 396 × 3.6 MJ = 1.4256 GJ out (kWh = 3.6 MJ, NIST SP 811 B.8); nothing in.
+    expect(out(run!, 'E_out')).toBeCloseTo(396 * 3.6e6, 0);
+    expect(out(run!, 'E_net_in')).toBe(0);
+  });
+  it('"650 °C hot head / 45 °C cooler water": the second side named in parallel, not a difference of 45 K', () => {
+    const text = 'Stirling rig: 27.5 % thermal at 650 °C hot head / 45 °C cooler water.';
+    const carnot = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+    expect(carnot?.finding).toBe('consistent');
+    // η_C = 1 − 318.15/923.15 = 0.65536; 0.275 / 0.65536 = 0.4196.
+    expect(out(carnot!, 'eta_ratio')).toBeCloseTo(0.275 / (1 - 318.15 / 923.15), 6);
+  });
+});

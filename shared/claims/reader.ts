@@ -64,6 +64,7 @@ import { focusOneItem } from './plan/items';
 import { runClaimChecks } from './plan/run';
 import { readFigures } from './reader/figures';
 import { readableLayout } from './reader/pdf-text';
+import { repairTyping } from './reader/repair';
 import { detex } from './reader/tex';
 import { unitAt } from './reader/units';
 
@@ -78,6 +79,17 @@ export function extractFigures(text: string): Figure[] {
 }
 
 function readPasted(text: string): Figure[] {
+  // Text damaged on its way ("Â°C", "2O W", "25 ?C"): read as the writer meant it, then each figure's
+  // offsets and words point back at the pasted text.
+  const repaired = repairTyping(text);
+  if (repaired === null) return readLaidOut(text);
+  return pointBack(readLaidOut(repaired.text), text, (f) => {
+    const start = repaired.toPasted[f.start];
+    return [start, f.end > f.start ? repaired.toPasted[f.end - 1] + 1 : start];
+  });
+}
+
+function readLaidOut(text: string): Figure[] {
   // Text copied out of a PDF ("coeffi-\ncient", lines wrapped mid-sentence, "efﬁciency"): read as written,
   // then each figure's offsets and words point back at the pasted text.
   const unwrapped = readableLayout(text);

@@ -208,6 +208,24 @@ function saidInBursts(text: string, f: Figure): boolean {
   return f.start !== null && f.end !== null && !!text && BURST_RE.test(sentenceAround(text, f.start, f.end));
 }
 
+/**
+ * The time said with a power as its own ("up to 500 kW for 1.5–2 seconds"): a duration right after "for",
+ * "over" or "during" in its clause, other than the run the ledger takes.
+ */
+function ownTimeOf(text: string, f: Figure, figures: Figure[], run: Figure): Figure | undefined {
+  if (f.end === null || !text) return undefined;
+  return figures.find(
+    (d) =>
+      d.kind === 'duration' &&
+      d !== run &&
+      d.role !== 'aside' &&
+      d.start !== null &&
+      d.start >= f.end! &&
+      d.start - f.end! < 30 &&
+      /^[^\S\n]*(?:,[^\S\n]*)?(?:for|over|during|lasting)[^\S\n]+(?:(?:about|around|roughly|some|just|up to|nearly)[^\S\n]+)?$/iu.test(text.slice(f.end!, d.start)),
+  );
+}
+
 /** A power said right beside a time, with no other figure between ("200 W for 5 ms", "a 5 ms pulse of 200 W"). */
 function pulseOf(text: string, f: Figure, d: Figure): boolean {
   if (f.start === null || f.end === null || d.start === null || d.end === null) return false;
@@ -268,6 +286,10 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     const toEnergy = (f: Figure, e: End): string | null => {
       if (f.kind === 'energy') return at(f, e);
       if (siAt(f, e) === 0) return '0 J'; // no input at all, however long it ran
+      // (A power said with a time of its own other than the run — "takes ~2 kW for 10 minutes … gives up to
+      // 500 kW for 1.5–2 seconds" — over that time: the shortest for what comes out, the longest for what goes in.)
+      const own = duration ? ownTimeOf(text, f, figures, duration) : undefined;
+      if (own && !bothPower) return typed(siAt(f, e) * (f.role === 'out' ? own.si : (own.upper?.si ?? own.si)), 'J');
       // A charging time is no run of what the device puts out ("a 150 kW motor … charges in 40 minutes");
       // nor is any run the time of an output given only in bursts ("can deliver 2 MW for short periods").
       // Nor is a pulse's length (under a second) the run of a power said apart from it ("emits 2 J in 10 ns
@@ -277,6 +299,11 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
       if (bothPower) return typed(siAt(f, e), 'J'); // one second of steady running
       return null;
     };
+    const ownTimes = duration && !bothPower ? [inF, outF].flatMap((f) => (f.kind === 'power' ? [ownTimeOf(text, f, figures, duration)].filter((d): d is Figure => !!d) : [])) : [];
+    for (const f of [inF, outF]) {
+      const own = f.kind === 'power' && duration && !bothPower ? ownTimeOf(text, f, figures, duration) : undefined;
+      if (own) extra.push(`“${f.text}” over the time said with it, ${own.display}${own.upper ? (f.role === 'out' ? ' (its shortest end)' : ' (its longest end)') : ''}.`);
+    }
     if (duration && !bothPower) extra.push(`Over the stated ${duration.display}: power × time.`);
     else if (bothPower && !duration) extra.push('Powers compared over one second of steady running: the ratio does not depend on how long.');
     else if (bothPower && duration) extra.push(`Powers over the stated ${duration.display}.`);
@@ -312,7 +339,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
       plans.push({
         within,
         check: 'first-law',
-        uses: uniq([inF, outF, t !== undefined && !bothPower && (inF.kind === 'power' || outF.kind === 'power') ? duration : undefined]),
+        uses: uniq([inF, outF, t !== undefined && !bothPower && (inF.kind === 'power' || outF.kind === 'power') ? duration : undefined, ...ownTimes]),
         inputs: (e) => ({ E_in: toEnergy(inF, e(inF))!, W_out: toEnergy(outF, e(outF))!, Q_out: '0 J', dE_stored: '0 J' }),
         why: bothPower ? 'The text gives the power drawn and the power delivered.' : firstLawWhy,
         assumptions: [...extra, 'Stored energy: unchanged over the run (the text does not say it ran down).'],

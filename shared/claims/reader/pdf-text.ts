@@ -36,7 +36,7 @@ const SOFT_WRAP_RE = /([^\s.:;!?|])[^\S\n]*\n(?=\p{Ll})/gu;
 
 /** The pasted text as written, with the offsets back; null when it has nothing of the kind. */
 export function unwrapPdfText(pasted: string): Unwrapped | null {
-  const edits: { at: number; length: number; insert: string }[] = [];
+  const edits: TextEdit[] = [];
   for (const m of pasted.matchAll(BROKEN_WORD_RE)) {
     const hyphen = m.index! + m[1].length;
     const keep = KEEPS_HYPHEN.has(m[2]);
@@ -54,6 +54,18 @@ export function unwrapPdfText(pasted: string): Unwrapped | null {
     edits.push({ at: nl, length: 1, insert: ' ' });
   }
   for (let i = 0; i < pasted.length; i++) if (LIGATURES[pasted[i]]) edits.push({ at: i, length: 1, insert: LIGATURES[pasted[i]] });
+  return applyEdits(pasted, edits);
+}
+
+/** An edit of the pasted text: `length` characters at `at` replaced by `insert`. */
+export interface TextEdit {
+  at: number;
+  length: number;
+  insert: string;
+}
+
+/** The pasted text with its edits made (overlapping ones after the first dropped), and the offsets back; null for no edit. */
+export function applyEdits(pasted: string, edits: TextEdit[]): Unwrapped | null {
   if (edits.length === 0) return null;
   edits.sort((a, b) => a.at - b.at);
   let text = '';

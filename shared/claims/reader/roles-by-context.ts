@@ -365,7 +365,14 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
       prev !== undefined &&
       ELIDED_VERB_RE.test(text.slice(prev.end, open[0].start)) &&
       /(?<!\p{L})(?:uses?|used|using|draws?|drew|drawing|takes?|took|taking|consumes?|consumed|consuming|needs?|needed|gives?|gave|delivers?|delivered|produces?|produced|makes?|made|generates?|generated|puts?[^\S\n]+out)(?:[^\S\n]+(?:about|around|roughly|some|nearly|only|just|up[^\S\n]+to))?[^\S\n]*$/iu.test(text.slice(Math.max(0, prev.start - 30), prev.start));
+    // ("average output 550 W … 30 days … 396 kWh total": a named power over a stated time, totalled — its side.)
+    const e0 = siOf(open[0]);
+    const totalOf =
+      open[0].kind === 'energy' && e0 !== null
+        ? named.find((p) => p.kind === 'power' && drafts.some((t) => t.kind === 'duration' && t.role !== 'aside' && Math.abs((siOf(p) ?? NaN) * (siOf(t) ?? NaN) - e0) <= 0.01 * e0))
+        : undefined;
     if (again) open[0].role = 'aside';
+    else if (totalOf) open[0].role = totalOf.role;
     else if (goesOn || meanOf || elided) open[0].role = prev.role;
     else if (named.filter(own).every((d) => d.role === 'in')) open[0].role = 'out';
     else if (named.filter(own).every((d) => d.role === 'out')) open[0].role = 'in';

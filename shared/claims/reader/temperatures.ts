@@ -102,7 +102,10 @@ export function isDifference(text: string, start: number, end: number, floor: nu
     if (/^(?:over|under)$/.test(word) && OVER_A_TIME_RE.test(rest)) return false;
     // "between 650 °C heater head and 50 °C cooler": the second of two sides named in parallel, "cooler" the
     // part (a noun), not a comparison; without "than" a comparative there names no difference.
-    const pairedSide = /between[^\S\n]+[^,;.\n]{0,40}?\p{N}[^,;.\n]{0,40}?[^\S\n]and[^\S\n]+(?:(?:the|a|an|its)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 90), start));
+    // (Or just after another side's temperature and its name: "65O °C hot head / 45 °C cooler water".)
+    const pairedSide =
+      /between[^\S\n]+[^,;.\n]{0,40}?\p{N}[^,;.\n]{0,40}?[^\S\n]and[^\S\n]+(?:(?:the|a|an|its)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 90), start)) ||
+      /\d[^\S\n]*(?:°[^\S\n]*[CF]|K)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){1,3}?(?:\/|&)[^\S\n]*$/u.test(text.slice(Math.max(0, start - 60), start));
     if (pairedSide && !/^\s*than/.test(rest)) return false;
     if (/^(?:warmer|hotter|cooler|colder|lower|higher)/.test(word) && /^[^\S\n]*(?:[,.;:)!?—–]|(?:and|with|at|in|for|while|but|so|when|or|can|could|would|will|may|might|must|should|is|are|was|were|has|have|had|does|do|did|near|nearer|by|on|down|up|deeper|further|underneath|beneath|inside|there|here)\b|$)/.test(rest)) return true;
     // "a cold side 3 K below, the most …": the side it is measured from left unsaid, as just named.
