@@ -72,7 +72,7 @@ const CLOSED_RE = /(?<!\p{L})(?:sealed|closed|enclosed|cavit(?:y|ies)|resonat\w*
 /** A push said at P/c or 2P/c, in print rounded ("6.7 µN for 1 kW, twice P/c"): the bound said, no claim beyond it. */
 const atLightsBound = (thrust: Figure, power: Figure): boolean =>
   power.si > 0 && [1, 2].some((k) => Math.abs((thrust.si * C_LIGHT) / (k * power.si) - 1) <= 0.01);
-const EMITTER_RE = /(?<!\p{L})(?:recoil\w*|emit\w*|puts? out|shed\w*|radiat\w+|beaming|transmitters?|torch(?:es)?|flashlights?|LEDs?)(?!\p{L})/iu;
+const EMITTER_RE = /(?<!\p{L})(?:recoil\w*|emit\w*|puts? out|shed\w*|radiat(?:es?|ing|ed)|beaming|transmitters?|torch(?:es)?|flashlights?|LEDs?)(?!\p{L})/iu;
 const BLACK_TARGET_RE = /(?<!\p{L})(?:black\w*|flat-black|absorb\w*|soot\w*)(?!\p{L})/iu;
 
 export function planThrust(b: Basis): ThrustReading {

@@ -78,6 +78,11 @@ export function relate(text: string, drafts: Draft[]): void {
     const after = EXPLAINED_AWAY_AFTER_RE.exec(text.slice(d.end, d.end + 120));
     if (after && !/(?<!\p{L})(?:not|no|never|nor|rule[sd]?[^\S\n]+out|ruling[^\S\n]+out|excluded?)(?!\p{L})|n[’']t(?!\p{L})/iu.test(after[0])) compared.push(d);
   }
+  // "Electricity used this year: 2,840 kWh (last year 3,120 kWh)": an earlier period's figure, in brackets.
+  for (const d of drafts) {
+    if (d.role === 'aside' || d.derived || compared.includes(d)) continue;
+    if (EARLIER_PERIOD_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start))) compared.push(d);
+  }
   // "Dashed line: the 2019 unit it replaces (COP 2.6)": the figure of a machine the claim's replaces.
   for (const d of drafts) {
     if (d.role === 'aside' || d.derived || compared.includes(d)) continue;
@@ -109,6 +114,10 @@ export function relate(text: string, drafts: Draft[]): void {
     else drafts.splice(at, 0, d);
   }
 }
+
+/** In brackets before a figure of an earlier period: "(last year 3,120 kWh)", "(previous winter: 4,100 kWh)", "(2023: 2.9)". */
+const EARLIER_PERIOD_BEFORE_RE =
+  /\([^\S\n]*(?:(?:last|previous|prior|the[^\S\n]+previous|the[^\S\n]+prior)[^\S\n]+(?:year|month|week|winter|summer|season|quarter|heating[^\S\n]+season)(?:['’]s)?|(?:a|one)[^\S\n]+year[^\S\n]+(?:ago|earlier|before)|(?:19|20)\d\d(?:\/\d\d)?)[^\S\n]*(?:[:=]|was|were|it[^\S\n]+was)?[^\S\n]*(?:(?:about|around|roughly|some|nearly)[^\S\n]+)?$/iu;
 
 /** Before a cited work's finding: the work named ("the original report", "ref. [3]", "Bergsten et al. (2019)"), then a verb of finding. */
 const CITED_FINDING_BEFORE_RE =

@@ -1619,6 +1619,11 @@ describe('lawful devices said in words that sound like a free lunch: no false al
     'The Stirling engine sits between a 650 °C burner head and 60 °C cooling water and makes 28 % shaft efficiency.',
     'Ocean thermal plant: 26 °C surface water, 5 °C deep water, 2.5 % net efficiency.',
     'Our absorption chiller uses 90 °C hot water and gives a cooling COP of 0.7 with 29 °C cooling water.',
+    'Flat 4 annual statement. Electricity used 1 April–31 March: 2,840 kWh (last year 3,120 kWh). Unit rate 24.5p/kWh, standing charge 53p/day.',
+    'Dairy notes: the new unit takes the heat out of the milk as it cools it and puts it into the wash water. For every kWh it uses it gives back 3.2 kWh of hot water; it uses about 9 kWh a day, so roughly 29 kWh of hot water a day.',
+    'Probe study: its solar panels give 380 W near the Sun; the heaters and radio use about 9 kWh a day.',
+    'The unit spins its rotor up over about 10 minutes from a modest ~2 kW motor, then gives it all back in a hurry: up to 500 kW for 1.5-2 seconds. Peak power is 250 times the charging power.',
+    'A 1 kW lamp lights an aluminised foil in the bell jar; the radiation pressure read off the balance is 5 µN, under the 6.7 µN that 2P/c allows.',
   ])('%s', (text) => {
     expect(breaks(text)).toBe(false);
   });

@@ -652,3 +652,22 @@ export function asideControlPowers(text: string, drafts: Draft[]): void {
   // ("gives out 100 times the input power": an amplifier's gain, of a signal, is no ratio of energy out to in.)
   if (amplifier) for (const d of drafts) if (d.kind === 'efficiency' && d.derived && (siOf(d) ?? 0) > 1) d.role = 'aside';
 }
+
+/** Before a power or an energy a source gives: "its solar panels give", "the turbine makes about". */
+const SOURCE_GIVES_BEFORE_RE =
+  /(?<!\p{L})(?:(?:solar[^\S\n]+)?(?:panels?|arrays?|PV|modules?|cells?)|turbines?|generators?|alternators?|dynamos?|RTGs?|gensets?)[^\S\n]+(?:give|gives|gave|make|makes|made|produce|produces|produced|deliver|delivers|delivered|generate|generates|generated|provide|provides|provided|supply|supplies|supplied|put[^\S\n]+out|puts[^\S\n]+out)(?:[^\S\n]+(?:about|around|roughly|some|up[^\S\n]+to|nearly|only|just))?[^\S\n]*$/iu;
+/** Before what the loads use: "the heaters and radio use about", "the house draws". */
+const LOADS_USE_BEFORE_RE =
+  /(?<!\p{L})(?:heaters?|radios?|lights?|lighting|lamps?|appliances?|loads?|fridges?|freezers?|instruments?|electronics|avionics|payloads?|house|household|home|building|computers?|routers?|TVs?|pumps?)(?:[^\S\n]+(?:and|&)[^\S\n]+(?:the[^\S\n]+)?[\p{L}-]+)?[^\S\n]+(?:use|uses|used|consume|consumes|consumed|need|needs|needed|draw|draws|drew|take|takes|took)(?:[^\S\n]+(?:about|around|roughly|some|up[^\S\n]+to|nearly|only|just))?[^\S\n]*$/iu;
+
+/**
+ * "Its solar panels give 380 W near the Sun; the heaters and radio use about 9 kWh a day": a budget of
+ * supply and demand, where what the loads use is drawn from what the source gives — not the input of the
+ * machine whose output is the source's. The loads' use is set aside.
+ */
+export function asideLoadsOfSource(text: string, drafts: Draft[]): void {
+  const before = (d: Draft, re: RegExp) => re.test(text.slice(Math.max(0, d.start - 60), d.start).replace(/^[^]*[.!?;\n][^\S\n]/u, ''));
+  if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'out' && before(d, SOURCE_GIVES_BEFORE_RE))) return;
+  for (const d of drafts) if ((d.kind === 'power' || d.kind === 'energy') && d.role === 'in' && !d.derived && before(d, LOADS_USE_BEFORE_RE)) d.role = 'aside';
+}
+

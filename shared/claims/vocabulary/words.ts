@@ -21,6 +21,8 @@ export const HEAT_PUMP_WORDS = [
   'dehumidifiers?', 'heat[- ]pump (?:dryers?|driers?|water heaters?|tumble dryers?)',
   // A ductless split air conditioner, in the trade, is a heat pump that runs either way.
   'mini-?splits?', 'ductless (?:splits?|units?|systems?|heads?)',
+  // A machine that moves heat, said so: "takes the heat out of the milk as it cools it and puts it into the wash water".
+  '(?:takes?|taking|took|draws?|drawing|pulls?|pulling|extracts?|extracting|removes?|removing|recovers?|recovering) (?:the )?(?:waste )?heat (?:out of|from) (?:the |its )?[\\w-]+(?: [\\w-]+){0,8}? (?:and )?(?:puts?|putting|pumps?|pumping|moves?|moving|delivers?|delivering|dumps?|dumping|transfers?|transferring|gives?|giving) it (?:in)?to',
   // A log's shorthand: "air/water HP prototype", "brine/water HP", "A/W HP", "HP-12 spot reading" beside a COP.
   '(?:air|water|brine|ground|A|W|B)\\s*/\\s*(?:water|air|W|A)\\s+HPs?', '(?<![\\w-])(?<![\\d.,]\\s*)(?<!(?:horse ?power|brake|shaft)\\s*)HPs?(?=\\s+(?:prototype|bench|test|rig|install))', 'flow temperature',
   // A heat pump's rating point (EN 14511 notation): "A7/W35", "B0/W35", "A2/W55", "W10/W35".
