@@ -1408,3 +1408,23 @@ describe('times, totals and sides said in passing (issue 11, invented test data)
     expect(out(carnot!, 'eta_ratio')).toBeCloseTo(0.275 / (1 - 318.15 / 923.15), 6);
   });
 });
+
+describe("a year's ledger of a plant and a heat pump's proposal (issue 11, invented test data)", () => {
+  const checks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks;
+  it('labels name the forms: electricity and heat recovered are added against the gas in, and the gas is no auxiliary load', () => {
+    const text =
+      "Farm AD plant, notes for the accounts. Gas to the engine over the year, by the analyser's count: 780 MWh. Electricity exported plus own use: 301 MWh. Heat recovered off the jacket and exhaust to the dryer: 340 MWh.";
+    const first = checks(text).find((c) => c.check === 'first-law');
+    expect(first?.finding).toBe('consistent');
+    // (301 + 340) / 780 = 0.8218 (energies in one unit; no conversion).
+    expect(out(first!, 'over_unity')).toBeCloseTo((301 + 340) / 780, 9);
+  });
+  it('"3.4 kWh of heat for every kWh of electricity" is the heating COP, whatever annual totals the proposal gives', () => {
+    const text =
+      'Recommended system: 8 kW air-to-water heat pump. Rated at A7/W35, that is with outdoor air at 7 °C and water leaving at 35 °C it delivers 3.4 kWh of heat for every kWh of electricity. Annual demand is 11,200 kWh; we expect it to use about 3,300 kWh of electricity a year.';
+    const carnot = checks(text).find((c) => c.check === 'carnot');
+    expect(carnot?.finding).toBe('consistent');
+    // COP_max = 308.15 / 28 = 11.005 (Çengel & Boles, ch. 6); 3.4 / 11.005 = 0.3089.
+    expect(out(carnot!, 'cop_heating_ratio')).toBeCloseTo(3.4 / (308.15 / 28), 6);
+  });
+});

@@ -71,9 +71,18 @@ export function outOverIn(output: Figure, input: Figure, kind: 'cop' | 'efficien
   };
 }
 
-/** The form of an energy said right after a figure ("35 kW of electricity", "50 kW of useful heat"). */
+/**
+ * The form of an energy said right after a figure ("35 kW of electricity", "50 kW of useful heat"), or in
+ * the label before it ("Electricity exported plus own use: 301 MWh", "Heat recovered off the jacket: 340 MWh").
+ */
 function formOf(f: Figure, text: string): string | null {
   if (f.end === null) return null;
+  const label = f.start === null ? undefined : /(?:^|[.!?\n])[^\S\n]*([^.!?\n:]{0,80}):[^\S\n]*$/u.exec(text.slice(Math.max(0, f.start - 90), f.start))?.[1].toLowerCase();
+  if (label) {
+    const heat = /(?<!\p{L})(?:heat|thermal)(?!\p{L})/u.test(label);
+    const electric = /(?<!\p{L})(?:electric\w*|power exported|exported)(?!\p{L})/u.test(label);
+    if (heat !== electric) return heat ? 'heat' : 'electric';
+  }
   const after = text.slice(f.end, f.end + 40).toLowerCase();
   if (/^[^.;,]{0,25}?(?:heat|thermal)/.test(after)) return 'heat';
   if (/^[^.;,]{0,25}?(?:electric|electricity|\bdc\b|\bac\b|\bac\b|kwe|we\b)/.test(after)) return 'electric';

@@ -99,10 +99,14 @@ const FUEL_AT_RE = /(?<!\p{L})(?:fuel|burn\w*|heat|gas|diesel|petrol|gasoline|co
 function auxiliaryInput(text: string, inF: Figure, outF: Figure): boolean {
   if (!text || inF.start === null || inF.end === null || outF.start === null || inF.derived) return false;
   const around = sentenceAround(text, inF.start, inF.end);
-  const local = text.slice(Math.max(0, inF.start - 45), inF.end + 45);
-  // (Not fuel or heat said right at the figure: "the standby diesel set burned fuel worth 4,500 kWh" is what the set converts.)
+  // (Within the figure's own sentence: "Gas to the engine: 780 MWh. Electricity exported plus own use: 301 MWh"
+  // names no auxiliary load at its 780 MWh.)
+  const local = text.slice(Math.max(0, inF.start - 45), inF.start).split(/[.!?](?:[^\S\n]|$)|\n/u).pop()! + text.slice(inF.start, inF.end + 45).split(/[.!?](?:[^\S\n]|$)|\n/u)[0];
+  // (Not fuel or heat said right at the figure: "the standby diesel set burned fuel worth 4,500 kWh" is what the set converts;
+  // nor a label's before a colon: "Gas to the engine over the year, by the analyser's count: 780 MWh".)
   // (Read back only to the clause's start: "6 kW of heat while drawing 150 W" names no fuel at its 150 W.)
-  const clause = text.slice(Math.max(0, inF.start - 25), inF.start).split(/[,;:]|(?<!\p{L})(?:and|while|but|whereas|with)(?!\p{L})/iu).pop() ?? '';
+  const label = /(?:^|[.!?\n])[^.!?\n:]{0,80}:[^\S\n]*$/u.exec(text.slice(Math.max(0, inF.start - 90), inF.start))?.[0] ?? '';
+  const clause = label || (text.slice(Math.max(0, inF.start - 25), inF.start).split(/[,;:]|(?<!\p{L})(?:and|while|but|whereas|with)(?!\p{L})/iu).pop() ?? '');
   const atFigure = clause + text.slice(inF.start, inF.end + 12);
   return AUXILIARY_RE.test(local) && !FUEL_AT_RE.test(atFigure) && OUTSIDE_FLOW_RE.test(around + ' ' + sentenceAround(text, outF.start, outF.end ?? outF.start));
 }

@@ -676,9 +676,17 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   if ((pump || cooler) && !drafts.some((d) => d.kind === 'cop' && d.role !== 'aside')) {
     for (const kind of ['energy', 'power'] as const) {
       // (An input of one unit, from "4 kWh of heat for every kWh", counts as stated.)
-      const ins = drafts.filter((d) => d.kind === kind && d.role === 'in' && (!d.derived || d.derived.startsWith('one ')));
+      let ins = drafts.filter((d) => d.kind === kind && d.role === 'in' && (!d.derived || d.derived.startsWith('one ')));
       // (The heat out may be the input plus a stated excess: "3 kW more heat than the 1 kW it uses".)
-      const outs = drafts.filter((d) => d.kind === kind && d.role === 'out' && (!d.derived || d.derived.startsWith('output = input + excess')));
+      let outs = drafts.filter((d) => d.kind === kind && d.role === 'out' && (!d.derived || d.derived.startsWith('output = input + excess')));
+      // ("delivers 3.4 kWh of heat for every kWh of electricity … annual demand 11,200 kWh": the output said
+      // with "for every", of one unit in, is the pair, whatever other totals the text gives.)
+      const perUnit = drafts.find((d) => d.kind === kind && d.role === 'in' && d.derived?.startsWith('one '));
+      const ownOut = perUnit && outs.filter((d) => d.end <= perUnit.start && perUnit.start - d.end < 60).pop();
+      if (perUnit && ownOut && (ins.length !== 1 || outs.length !== 1)) {
+        ins = [perUnit];
+        outs = [ownOut];
+      }
       if (ins.length !== 1 || outs.length !== 1) continue;
       // (Not where the figures' paragraph is of another machine, in a text on several.)
       if (paragraphOfAnotherMachine(text, Math.min(ins[0].start, outs[0].start), Math.max(ins[0].end, outs[0].end))) continue;
