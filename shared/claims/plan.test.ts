@@ -1428,3 +1428,11 @@ describe("a year's ledger of a plant and a heat pump's proposal (issue 11, inven
     expect(out(carnot!, 'cop_heating_ratio')).toBeCloseTo(3.4 / (308.15 / 28), 6);
   });
 });
+
+test('"runs 6 h a day … say 120 days" is a run of 720 h, not of 120 days round the clock; a rating "(output)" in brackets is the output (invented test data)', () => {
+  const text = 'Irrigation pump. Motor plate: 1.1 kW (output), 230 V single phase. Runs 6 h a day from mid-May to mid-September, say 120 days, so about 1,190 kWh on the meter for the season.';
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('consistent');
+  // Out: 1.1 kW × 6 h × 120 = 792 kWh; in: 1,190 kWh; 792 / 1190 = 0.6655.
+  expect(out(run!, 'over_unity')).toBeCloseTo((1.1 * 6 * 120) / 1190, 9);
+});

@@ -100,6 +100,7 @@ function speedsFromDistances(text: string, drafts: Draft[]): Set<Draft> {
 /** Times, rates and energies over a run, among the figures read (see the file's comment). */
 export function relateDurations(text: string, drafts: Draft[]): void {
   joinCompoundDurations(text, drafts);
+  hoursADayOverDays(text, drafts);
   const timed = speedsFromDistances(text, drafts);
   // Times that are not the run's ("took 18 months to build", "pays for itself in 3 years"), said in a
   // sentence with no power or energy: set aside.
@@ -210,6 +211,42 @@ export function relateDurations(text: string, drafts: Draft[]): void {
   if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== 'aside')) {
     for (const d of drafts) if (d.kind === 'duration' && d.role === null && !timed.has(d)) d.role = 'aside';
   }
+}
+
+/** After a time of each day: "6 h a day", "8 hours per day", "4 h/day", "10 hours daily". */
+const EACH_DAY_AFTER_RE = /^[^\S\n]*(?:(?:a|per|each|every)[^\S\n]+day|\/[^\S\n]*day|daily)(?!\p{L})/iu;
+
+/**
+ * "Runs 6 h a day … say 120 days": the run is the hours of each day times the days (720 h), not the 120
+ * days round the clock. The two are set aside for the run worked out from them.
+ */
+function hoursADayOverDays(text: string, drafts: Draft[]): void {
+  const daily = drafts.find((d) => d.kind === 'duration' && d.role === null && !d.derived && (siOf(d) ?? Infinity) < 86400 && EACH_DAY_AFTER_RE.test(text.slice(d.end, d.end + 12)));
+  if (!daily) return;
+  const days = drafts.find(
+    (d) =>
+      d !== daily &&
+      d.kind === 'duration' &&
+      d.role === null &&
+      !d.derived &&
+      (siOf(d) ?? 0) >= 2 * 86400 &&
+      Math.abs(d.start - daily.start) < 200 &&
+      !/^[^\S\n]*(?:a|per|each|every)[^\S\n]+(?:week|month|year)(?!\p{L})/iu.test(text.slice(d.end, d.end + 12)),
+  );
+  const [t, n] = [siOf(daily), siOf(days ?? daily)];
+  if (!days || t === null || n === null) return;
+  const run = t * (n / 86400);
+  const last = days.start > daily.start ? days : daily;
+  insertAfter(drafts, last, {
+    start: Math.min(daily.start, days.start),
+    end: Math.max(daily.end, days.end),
+    kind: 'duration',
+    quantity: typedSi(run, 's'),
+    role: null,
+    derived: `run = hours each day × days (${formatQuantity(t, 's')} × ${formatQuantity(n / 86400, '')})`,
+  });
+  daily.role = 'aside';
+  days.role = 'aside';
 }
 
 /**

@@ -26,7 +26,8 @@ function compileRoles(groups: readonly RoleWords[]): CompiledRoles {
   return {
     groups,
     before: new RegExp(`(?<!\\p{L})(?:${named('before')})(?!\\p{L})`, 'giu'),
-    after: new RegExp(`[^\\S\\n]*-?[^\\S\\n]*${AFTER_FILLER}(?:${named('after')})(?!\\p{L})`, 'iuy'),
+    // (Also in brackets: "1.1 kW (output)".)
+    after: new RegExp(`[^\\S\\n]*-?[^\\S\\n]*(?:[([][^\\S\\n]*(?=[^)\\]\\n]{0,30}[)\\]]))?${AFTER_FILLER}(?:${named('after')})(?!\\p{L})`, 'iuy'),
     beforeAt: groups.map((g) => new RegExp(`(?:${alt(g.before)})(?!\\p{L})`, 'iuy')),
   };
 }
