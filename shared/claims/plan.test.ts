@@ -1436,3 +1436,15 @@ test('"runs 6 h a day … say 120 days" is a run of 720 h, not of 120 days round
   // Out: 1.1 kW × 6 h × 120 = 792 kWh; in: 1,190 kWh; 792 / 1190 = 0.6655.
   expect(out(run!, 'over_unity')).toBeCloseTo((1.1 * 6 * 120) / 1190, 9);
 });
+
+test('a battery that supplies the driver board is the input; "24 hours a day" is how it runs, and a year of savings no run (invented test data)', () => {
+  const text =
+    'It runs from an ordinary 12 V leisure battery, which supplies 8 A to the driver board. Out of the other side you get 230 V at 1.5 A, enough to run a fridge, lights and a TV, 24 hours a day. In a year it saves about €1,100 on electricity.';
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('breaks');
+  // In: 12 V × 8 A = 96 W; out: 230 V × 1.5 A = 345 W; 345 / 96 = 3.594.
+  expect(out(run!, 'over_unity')).toBeCloseTo(345 / 96, 9);
+  // (A store that delivers to the motor it runs gives out what it delivers.)
+  const pack = 'Over eight hours the pack delivered 9.6 kWh to the drive motor; the charger had drawn 11.2 kWh from the grid to fill it.';
+  expect(out(runClaimChecks(extractFigures(pack), { text: pack }).checks.find((c) => c.check === 'first-law')!, 'over_unity')).toBeCloseTo(9.6 / 11.2, 9);
+});

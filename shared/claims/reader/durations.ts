@@ -9,7 +9,7 @@ import { insertAfter, sameClause, sentenceOf, siOf, typedSi, upperSiOf, type Dra
 
 /** Words of a time that is not how long the device ran. */
 const NOT_A_RUN_RE =
-  /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline|install\w*|integrat\w*|spent|calibrat\w*|settl\w*|drills?|swings?|period)(?!\p{L})/iu;
+  /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline|install\w*|integrat\w*|spent|calibrat\w*|settl\w*|drills?|swings?|period|saves?|saving|savings|bills?|income|earns?|costs?)(?!\p{L})/iu;
 
 /** Right before a time: a payback, a warranty, a guarantee, a life or a lead time ("payback est.", "pays for itself in"). */
 const TERM_NOT_RUN_BEFORE_RE =
@@ -102,6 +102,8 @@ export function relateDurations(text: string, drafts: Draft[]): void {
   joinCompoundDurations(text, drafts);
   hoursADayOverDays(text, drafts);
   const timed = speedsFromDistances(text, drafts);
+  // "24 hours a day", "round the clock": how it runs, not how long.
+  for (const d of drafts) if (d.kind === 'duration' && d.role === null && (siOf(d) ?? 0) === 86400 && /^[^\S\n]*(?:a|per|each|every)[^\S\n]+day(?!\p{L})/iu.test(text.slice(d.end, d.end + 10))) d.role = 'aside';
   // Times that are not the run's ("took 18 months to build", "pays for itself in 3 years"), said in a
   // sentence with no power or energy: set aside.
   for (const d of drafts) {

@@ -13,7 +13,7 @@ import { FIGURE_SI_UNIT, type FigureRole } from '../types';
 import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, paragraphOfAnotherMachine, sentenceAround, windowStart } from './context';
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
-import { FILLS_LEAD_RE, roleFor } from './roles';
+import { FILLS_LEAD_RE, roleFor, SUPPLY_GIVES_LEAD_RE, TO_DEVICE_PART_AFTER_RE } from './roles';
 import { asideControlPowers, asideDenied, asideLoadsOfSource, asidePassedOn, asideQuotedLightSpeed, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
 
@@ -393,9 +393,11 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // ("… which lights a string of mains lamps at 230 V with a measured 0.26 A": the lamps it lights are its load.)
     const fills = !said && (FILLS_LEAD_RE.test(text.slice(Math.max(0, first.start - 40), first.start)) || LOAD_LEAD_RE.test(text.slice(Math.max(0, first.start - 70), first.start)));
     // "from a 24 V supply at 5 A", "a 12 V power supply drawing 2 A": the pair is a supply's, what the device takes.
-    const supplied = !said && !fills && /^[^\S\n]*(?:(?:DC|AC|bench|lab|power)[^\S\n]+)?(?:supply|supplies|PSU|mains|adapter|source|rail)(?!\p{L})/iu.test(text.slice(first.end, last.start));
+    // ("a 12 V leisure battery, which supplies 8 A to the driver board": a supply giving the device's parts.)
+    const toPart = !said && !fills && SUPPLY_GIVES_LEAD_RE.test(text.slice(first.end, last.start)) && TO_DEVICE_PART_AFTER_RE.test(text.slice(last.end, last.end + 50));
+    const supplied = !said && !fills && (toPart || /^[^\S\n]*(?:(?:DC|AC|bench|lab|power)[^\S\n]+)?(?:supply|supplies|PSU|mains|adapter|source|rail)(?!\p{L})/iu.test(text.slice(first.end, last.start)));
     // "5 A at 230 V into the farm's distribution board", "… to the grid": what goes into a load or a grid is given out.
-    const intoLoad = !said && !fills && INTO_LOAD_AFTER_RE.test(text.slice(last.end, last.end + 60));
+    const intoLoad = !said && !fills && !toPart && INTO_LOAD_AFTER_RE.test(text.slice(last.end, last.end + 60));
     // "25 V of reverse bias … a photocurrent of 0.77 mA": a bias supply's voltage, what the supply gives the device.
     const biased = !said && !fills && BIAS_RE.test(text.slice(Math.max(0, volt.start - 20), volt.end + 25));
     const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills || intoLoad ? 'out' : supplied || biased ? 'in' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);

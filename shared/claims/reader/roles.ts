@@ -192,6 +192,9 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     if (PEOPLE_CHARGED_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'in';
     // "we pull 800 W off it", "you can draw 2 kW out of the generator": what people take from the device is its output.
     if (PEOPLE_TAKE_LEAD_RE.test(lead) && TAKEN_FROM_IT_RE.test(text.slice(end, end + 40))) return 'out';
+    // "an ordinary 12 V battery, which supplies 8 A to the driver board": what a supply gives the device's
+    // parts is the device's input.
+    if (SUPPLY_GIVES_LEAD_RE.test(lead) && TO_DEVICE_PART_AFTER_RE.test(text.slice(end, end + 50))) return 'in';
     // "the resistive load bank receives 1.6 kW": what a load receives is what the device gives it.
     if (LOAD_RECEIVES_RE.test(lead)) return 'out';
     // (Not when a supply is the subject: "the bench supply delivers 5 A" is what the device takes.)
@@ -253,6 +256,16 @@ const MUSCLE_LEAD_RE = /(?<!\p{L})(?:turning|cranking|winding|pedall?ing|shaking
 const METER_AT_OUTPUT_RE = /(?<!\p{L})(?:(?:energy|power|watt-?hour|kWh)[^\S\n]*)?(?:wattmeters?|meters?)[^.;!?\n]{0,40}?(?<!\p{L})(?:at|on|across|in)[^\S\n]+the[^\S\n]+(?:output|load)(?:[^\S\n]+(?:terminals|side|circuit|cables?))?(?!\p{L})/iu;
 /** A meter placed at the input ("a meter on the supply", "wattmeter at the input"). */
 const METER_AT_INPUT_RE = /(?<!\p{L})(?:wattmeters?|meters?)[^.;!?\n]{0,40}?(?<!\p{L})(?:at|on|across|in)[^\S\n]+the[^\S\n]+(?:input|supply|mains|source)(?:[^\S\n]+(?:terminals|side|circuit|cables?))?(?!\p{L})/iu;
+
+/** A supply as the subject of a verb of giving, right before a figure: "battery, which supplies", "the mains feeds". */
+export const SUPPLY_GIVES_LEAD_RE =
+  /(?<!\p{L})(?:suppl(?:y|ies)|batter(?:y|ies)|mains|grid|sockets?|packs?|PSUs?|adapters?|chargers?)(?:,?[^\S\n]+(?:which|that))?[^\S\n]+(?:supplies|supplied|delivers|delivered|provides|provided|gives|gave|feeds|fed|puts[^\S\n]+out|sends|sent)[^\S\n]+(?:(?:about|around|roughly|some|only|just|a steady)[^\S\n]+)?$/iu;
+/**
+ * After a figure: the part of the device it goes to ("to the driver board", "into the motor controller") —
+ * not a motor or a machine, which a store may run as its load ("the pack delivered 9.6 kWh to the drive motor").
+ */
+export const TO_DEVICE_PART_AFTER_RE =
+  /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:in)?to[^\S\n]+(?:the|its|our|my|his|her|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:boards?|drivers?|units?|devices?|circuits?|circuitry|controllers?|coils?|modules?|electronics|prototypes?|rigs?)(?!\p{L})/iu;
 
 /** A load as the subject that receives a figure: "the load bank receives", "the heater gets". */
 const LOAD_RECEIVES_RE =
