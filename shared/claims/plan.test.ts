@@ -1448,3 +1448,31 @@ test('a battery that supplies the driver board is the input; "24 hours a day" is
   const pack = 'Over eight hours the pack delivered 9.6 kWh to the drive motor; the charger had drawn 11.2 kWh from the grid to fill it.';
   expect(out(runClaimChecks(extractFigures(pack), { text: pack }).checks.find((c) => c.check === 'first-law')!, 'over_unity')).toBeCloseTo(9.6 / 11.2, 9);
 });
+
+describe('what a text totals, compares and labels (issue 11, invented test data)', () => {
+  const checks = (text: string, classes: string[] = []) => runClaimChecks(extractFigures(text), { text, classes }).checks;
+  it('"45 m/s a year for 15 years: 675 m/s in all" — the total is the Δv claimed', () => {
+    const run = checks('Our platform carries 12 kg of green monopropellant (Isp 230 s) on an 88 kg dry bus. That gives it 45 m/s of station-keeping a year for 15 years: 675 m/s in all.').find((c) => c.check === 'rocket-equation');
+    expect(run?.finding).toBe('breaks');
+    // Δv = 230 × 9.80665 × ln(100/88) = 288.33 m/s (Tsiolkovsky; g0 exact, NIST SP 811); 675 / 288.33 = 2.341.
+    expect(out(run!, 'dv_ratio')).toBeCloseTo(675 / (230 * G0 * Math.log(100 / 88)), 4);
+  });
+  it('a helicopter the device is set against ("a hundredth of a helicopter\'s") is no propellant of its own', () => {
+    const run = checks('The four counter-rotating gyros, precessed in sequence, gave 250 N of lift on the load cell while the motors drew 1.5 kW. The energy cost is a hundredth of a helicopter\'s.', ['gyroscopic-drive']).find((c) => c.check === 'photon-bound');
+    expect(run?.finding).toBe('breaks');
+    expect(out(run!, 'ratio')).toBeCloseTo((250 * C) / 1500, -2);
+  });
+  it('"Energy to the driver over a 24-hour run: 0.96 kWh" is the input, its power over the run the power of a propellant-free thrust', () => {
+    const run = checks('Mass-modulation thruster MM-4. Net thrust 25 µN over five runs. Energy to the driver over a 24-hour run: 0.96 kWh. No propellant; the device is sealed in a vacuum can.').find((c) => c.check === 'photon-bound');
+    expect(run?.finding).toBe('breaks');
+    // P = 0.96 × 3.6 MJ / 86 400 s = 40 W; F·c/P = 25e-6 × c / 40 = 187.4.
+    expect(out(run!, 'ratio')).toBeCloseTo((25e-6 * C) / 40, 3);
+  });
+  it('a current drawn from the battery whose voltage another sentence gives makes the input', () => {
+    const text = 'A ten-stage ladder fed from a flyback oscillator, all running off one 9 V PP3 battery. With the corona wire in place the battery draws somewhere between 150 and 180 mA. Output is ~6 kV and I am getting roughly 0.6 W out.';
+    const run = checks(text).find((c) => c.check === 'first-law');
+    expect(run?.finding).toBe('consistent');
+    // In: 9 V × 0.18 A = 1.62 W (the end kinder to the claim); 0.6 / 1.62 = 0.3704.
+    expect(out(run!, 'over_unity')).toBeCloseTo(0.6 / 1.62, 9);
+  });
+});

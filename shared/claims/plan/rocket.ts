@@ -16,7 +16,18 @@ export function planRocket(b: Basis): void {
   // of 900 kg … Option 3 … fuelled mass 550 kg, empty 410 kg, Δv 1.3 km/s" is checked on 550 and 410.
   const pieces = [...masses.filter((f) => f.role === 'wet' || f.role === 'dry' || f.role === 'propellant'), ...ofKind(figures, 'specific-impulse'), ...speeds.filter((f) => f.role === 'exhaust' || f.role === 'delta-v')];
   const key = (f: Figure) => (f.start === null || !text ? -1 : paragraphKey(text, f.start));
-  const claimed = speeds.find((f) => f.role === 'delta-v');
+  // (A Δv said as the total — "45 m/s a year for 15 years: 675 m/s in all" — is the claim, not a year's share.)
+  const dvs = speeds.filter((f) => f.role === 'delta-v');
+  const totalled = dvs.find(
+    (f) =>
+      f.start !== null &&
+      f.end !== null &&
+      !!text &&
+      (/^[^\S\n]*(?:in[^\S\n]+(?:all|total)|all[^\S\n]+told|altogether|overall|in[^\S\n]+sum|total(?!\p{L})|over[^\S\n]+(?:the|its)[^\S\n]+(?:whole[^\S\n]+)?(?:mission|life|lifetime))/iu.test(text.slice(f.end, f.end + 30)) ||
+        /(?<!\p{L})(?:total|cumulative|overall|mission)[^\S\n]+(?:Δv|delta-?v|velocity[^\S\n]+change)[^\S\n]*(?:of|is|was|:|=)?[^\S\n]*(?:(?:about|around|some|roughly)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, f.start - 40), f.start))),
+  );
+  // (Only the total of the first Δv's own paragraph: a "total Δv" of another design set against it is not the claim.)
+  const claimed = totalled && (totalled.start === null || dvs[0].start === null || paragraphKey(text, totalled.start) === paragraphKey(text, dvs[0].start)) ? totalled : dvs[0];
   const counts = new Map<number, number>();
   for (const f of pieces) counts.set(key(f), (counts.get(key(f)) ?? 0) + 1);
   const home = claimed && key(claimed) !== -1 ? key(claimed) : [...counts].sort((a, b) => b[1] - a[1])[0]?.[0];

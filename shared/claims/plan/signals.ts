@@ -99,6 +99,9 @@ const NEGATED_WORD_ALL_RE =
 const PROPULSOR_DENIED_RE = /(?<!\p{L})(?:no|without(?: an?)?|nor)[^\S\n]+(?:any[^\S\n]+)?(?:propellers?|water[- ]?jets?|paddles?|screws?|rotors?|fans?)(?!\p{L})/iu;
 /** Craft whose word stands for their propulsor. */
 const CRAFT_ALL_RE = /(?<!\p{L})(?:(?:survey|hobby|model|small|RC|R\/C|radio[- ]controlled)[^\S\n]+)?(?:boats?|ships?|hulls?|outboards?|hovercraft|(?:air|aero)planes?|aircraft|drones?|quadcopters?|multicopters?)(?!\p{L})/giu;
+/** A craft set against the device: "than a helicopter", "unlike drones", "a hundredth of a helicopter's". */
+const COMPARED_CRAFT_ALL_RE =
+  /(?<!\p{L})(?:(?:than|unlike|compared[^\S\n]+(?:with|to)|versus|vs\.?|beats?|beating|outperforms?)[^\S\n]+(?:(?:a|an|the|any|most|all|every|ordinary|conventional|typical|today['’]s)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:helicopters?|drones?|quadcopters?|multicopters?|(?:air|aero)planes?|aircraft|jets?)(?:['’]s)?|of[^\S\n]+(?:a|an|the|any|most|every)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:helicopter|drone|quadcopter|multicopter|(?:air|aero)plane|aircraft|jet)['’]s)(?!\p{L})/giu;
 /** The claimant's own voice. */
 const OWN_VOICE_RE = /(?<!\p{L})(?:our|ours|we|us|my|mine)(?!\p{L})/iu;
 /** A sentence that compares, asks, or moves on to another subject: its propulsion words are not the claim's. */
@@ -188,6 +191,9 @@ export function readSignals(ctx: PlanContext): Signals {
   // denies the propulsor and says plainly nothing is thrown out ("pushes a small boat … with no propeller
   // and no water jet"), the craft's word says nothing of propellant.
   if (PROPULSOR_DENIED_RE.test(text) && PLAIN_NO_PROPELLANT_RE.test(text)) withoutFree = withoutFree.replace(CRAFT_ALL_RE, ' ');
+  // "a hundredth of a helicopter's", "quieter than any drone": a craft the device is set against pushes air,
+  // the device is not said to.
+  withoutFree = withoutFree.replace(COMPARED_CRAFT_ALL_RE, ' ');
   // "Bolt it to a cart, a boat or a satellite": craft the device could be fitted to, in a text that says it
   // throws out nothing, are no propulsor of its own.
   if (PROPELLANT_FREE_RE.test(text)) withoutFree = withoutFree.replace(FIT_TO_RE, ' ');

@@ -6,6 +6,7 @@
 import type { Figure } from '../types';
 import { at, need, ofKind, siAt, typed, uniq, type Basis } from './basis';
 import { C_LIGHT } from '../../checks/constants';
+import { formatQuantity } from '../../worksheet/quantity';
 import { sentenceAround } from '../reader/context';
 import { propellantFreeParagraphs, readSignals, type Signals } from './signals';
 
@@ -75,6 +76,24 @@ const atLightsBound = (thrust: Figure, power: Figure): boolean =>
 const EMITTER_RE = /(?<!\p{L})(?:recoil\w*|emit\w*|puts? out|shed\w*|radiat(?:es?|ing|ed)|beaming|transmitters?|torch(?:es)?|flashlights?|LEDs?)(?!\p{L})/iu;
 const BLACK_TARGET_RE = /(?<!\p{L})(?:black\w*|flat-black|absorb\w*|soot\w*)(?!\p{L})/iu;
 
+/** "Energy to the driver over a 24-hour run: 0.96 kWh": the power that drives it, the energy in over the run. */
+function powerOverRun(b: Basis): Figure | undefined {
+  const { eIn, duration } = b;
+  if (!eIn || eIn.kind !== 'energy' || !duration || duration.role === 'aside' || !(duration.si > 0)) return undefined;
+  const si = eIn.si / duration.si;
+  const up = eIn.upper ? eIn.upper.si / duration.si : undefined;
+  return {
+    ...eIn,
+    kind: 'power',
+    unit: 'W',
+    si,
+    quantity: typed(si, 'W'),
+    display: formatQuantity(si, 'W'),
+    upper: up === undefined ? undefined : { quantity: typed(up, 'W'), si: up, display: formatQuantity(up, 'W') },
+    derived: `power = energy in over the run (${eIn.display} / ${duration.display})`,
+  };
+}
+
 export function planThrust(b: Basis): ThrustReading {
   const { plans, needs, notes, text, pIn, pOut, speeds } = b;
   const scoped = propellantFreeParagraph(b);
@@ -100,7 +119,7 @@ export function planThrust(b: Basis): ThrustReading {
   const thrustAt = ofKind(figures, 'thrust')[0]?.start ?? null;
   const nearThrust = (fs: Figure[]) => (thrustAt === null ? fs[0] : [...fs].sort((a, b) => Math.abs((a.start ?? 0) - thrustAt) - Math.abs((b.start ?? 0) - thrustAt))[0]);
   const drivePower =
-    nearThrust(power.filter((f) => f.role === 'in')) ?? power.find((f) => f.role === null) ?? power.find((f) => f.role !== 'out' && f.role !== 'excess') ?? pOut;
+    nearThrust(power.filter((f) => f.role === 'in')) ?? power.find((f) => f.role === null) ?? power.find((f) => f.role !== 'out' && f.role !== 'excess') ?? pOut ?? (thrustAt !== null ? powerOverRun(b) : undefined);
   const craftSpeed = speeds.find((f) => f.role === null);
   const photonApplies = s.propellantFree && !s.propellant;
   if ((thrust && drivePower) || perPower) {

@@ -201,6 +201,24 @@ const COOLING_DUTY_BEFORE_RE = /(?<!\p{L})(?:cooling|refrigerat(?:ing|ion)|freez
 const INTO_LOAD_AFTER_RE =
   /^[^\S\n]*,?[^\S\n]*(?:in)?to[^\S\n]+(?:(?:the|a|an|its|our|their)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(?:grid|distribution board|board|mains|loads?|dump load|battery|batteries|pack|battery pack|heaters?|lamps?|bulbs?|appliances?|network|house|home|consumer unit|resistor|heater element)(?!\p{L})/iu;
 
+/** Right after a voltage: the battery or supply it is of ("9 V PP3 battery", "a 48 V pack", "12 V bench supply"). */
+const OF_SUPPLY_AFTER_RE = /^[^\S\n]*(?:[\p{L}\d-]+[^\S\n]+){0,2}?(?:batter(?:y|ies)|packs?|suppl(?:y|ies)|PSUs?|adapters?)(?!\p{L})/iu;
+/** A battery or a supply named as what a current is drawn from. */
+const SUPPLY_NAMED_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|suppl(?:y|ies)|PSUs?|adapters?)(?!\p{L})/iu;
+
+/**
+ * "… all running off one 9 V PP3 battery. With the corona wire in place the battery draws 150 to 180 mA":
+ * a current drawn from the battery or supply whose voltage the text gives once, in another sentence.
+ */
+function batteryVoltage(text: string, drafts: Draft[], cur: Draft): Draft | undefined {
+  // (Named in the current's own clause, as what it is drawn from: not "it drew far more than 2 A … and the battery was flat".)
+  const before = text.slice(Math.max(0, cur.start - 60), cur.start).split(/[.;,!?\n]/u).pop() ?? '';
+  const after = text.slice(cur.end, cur.end + 40).split(/[.;,!?\n]/u)[0];
+  if (!SUPPLY_NAMED_RE.test(before) && !/(?<!\p{L})(?:from|off|of)[^\S\n]+(?:the|its|a|an)[^\S\n]+(?:[\p{L}\d-]+[^\S\n]+)?(?:batter(?:y|ies)|packs?|suppl(?:y|ies)|PSUs?|adapters?)(?!\p{L})/iu.test(after)) return undefined;
+  const volts = drafts.filter((d) => d.kind === 'voltage' && OF_SUPPLY_AFTER_RE.test(text.slice(d.end, d.end + 30)));
+  return new Set(volts.map((d) => siOf(d))).size === 1 ? volts[0] : undefined;
+}
+
 /** A sheet's heading line of a side: "INPUT", "Output:", "Input side (DC)". */
 const SIDE_HEADING_RE = /^[^\S\n]*(?:electrical[^\S\n]+)?(input|output)(?:[^\S\n]+(?:side|ratings?|data|characteristics))?(?:[^\S\n]*\([^()\n]{0,20}\))?[^\S\n]*:?[^\S\n]*$/iu;
 
@@ -367,7 +385,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const free = candidates.filter((d) => !taken.has(d));
     // (Not a voltage said with another current: "the supply battery delivered 2.5 A while the load took
     // 4.1 A at 9.0 V" — 9.0 V is the load's, and the 2.5 A has no voltage of its own here.)
-    const volt = saidWith(cur, candidates) ?? free.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0];
+    const volt = saidWith(cur, candidates) ?? free.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0] ?? batteryVoltage(text, drafts, cur);
     if (!volt) continue;
     const i = siOf(cur);
     const v = siOf(volt);

@@ -192,6 +192,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     if (PEOPLE_CHARGED_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'in';
     // "we pull 800 W off it", "you can draw 2 kW out of the generator": what people take from the device is its output.
     if (PEOPLE_TAKE_LEAD_RE.test(lead) && TAKEN_FROM_IT_RE.test(text.slice(end, end + 40))) return 'out';
+    // "Energy to the driver over a 24-hour run: 0.96 kWh", "Power into the coil: 40 W": a label of what goes in.
+    if (/(?:^|[.!?\n])[^\S\n]*(?:(?:electrical|electric|total)[^\S\n]+)?(?:energy|power|electricity)[^\S\n]+(?:(?:supplied|fed|delivered|put|going)[^\S\n]+)?(?:in)?to[^\S\n]+(?:the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:drivers?|drive[^\S\n]+electronics|coils?|devices?|units?|thrusters?|cavit(?:y|ies)|drives?|modules?|boards?|circuits?|electronics|reactors?|cells?|stacks?|magnetrons?|amplifiers?|prototypes?|rigs?|heaters?|elements?)(?!\p{L})[^.!?\n:]{0,50}:[^\S\n]*(?:(?:about|around|roughly|some)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 100), start))) return 'in';
     // "an ordinary 12 V battery, which supplies 8 A to the driver board": what a supply gives the device's
     // parts is the device's input.
     if (SUPPLY_GIVES_LEAD_RE.test(lead) && TO_DEVICE_PART_AFTER_RE.test(text.slice(end, end + 50))) return 'in';
