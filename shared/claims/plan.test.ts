@@ -1476,3 +1476,15 @@ describe('what a text totals, compares and labels (issue 11, invented test data)
     expect(out(run!, 'over_unity')).toBeCloseTo(0.6 / 1.62, 9);
   });
 });
+
+test('"going into the coil" and "coming out into the cap"; a current and voltage said again as a power with its side (invented test data)', () => {
+  const coil = 'Scope says 2.4e-3 J going into the coil per pulse (integrated V×I on the input channel) and 3.1e-2 J coming out into the cap on the collector side.';
+  const first = runClaimChecks(extractFigures(coil), { text: coil }).checks.find((c) => c.check === 'first-law');
+  expect(first?.finding).toBe('breaks');
+  expect(out(first!, 'over_unity')).toBeCloseTo(3.1e-2 / 2.4e-3, 9);
+  const motor = 'I put the clamp meter on it under a steady cut: 7.2 A at 120 V. That is 864 W going in, for a motor rated at about 560 W out.';
+  const m = runClaimChecks(extractFigures(motor), { text: motor }).checks.find((c) => c.check === 'first-law');
+  expect(m?.finding).toBe('consistent');
+  // 560 / (7.2 × 120) = 0.6481.
+  expect(out(m!, 'over_unity')).toBeCloseTo(560 / 864, 9);
+});

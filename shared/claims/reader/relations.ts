@@ -421,7 +421,20 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills || intoLoad ? 'out' : supplied || biased ? 'in' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
     const wordsRole = between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
     const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null && d.role !== 'aside');
-    const role: FigureRole = wordsRole ?? (others.length && others.every((d) => d.role === 'in') ? 'out' : null);
+    // (The side of the same power said outright — "7.2 A at 120 V. That's 864 W going in" — before words read
+    // further off, where none is said at the pair; where no words give one, beside inputs only, the output.)
+    const restated = others.find(
+      (d) =>
+        d.kind === 'power' &&
+        !d.derived &&
+        (d.role === 'in' || d.role === 'out') &&
+        Math.abs((siOf(d) ?? NaN) - i * v) <= 0.01 * i * v &&
+        d.start >= last.end &&
+        d.start - last.end < 40 &&
+        /(?:that['’]?s|that[^\S\n]+is|that[^\S\n]+makes|which[^\S\n]+is|i\.e\.|so|giving|=)[^\S\n]*(?:(?:about|roughly|some|around|nearly|just[^\S\n]+over|just[^\S\n]+under)[^\S\n]+)?$/iu.test(text.slice(last.end, d.start)),
+    );
+    const plain = !said && !fills && !intoLoad && !supplied && !biased;
+    const role: FigureRole = (plain ? restated?.role : undefined) ?? wordsRole ?? (others.length && others.every((d) => d.role === 'in') ? 'out' : null);
     insertAfter(drafts, last, {
       start: first.start,
       end: last.end,

@@ -291,9 +291,14 @@ const TURNED_INTO_RE = /(?<!\p{L})(?:turn(?:s|ed|ing)?|convert(?:s|ed|ing)?)[^\S
 /** A rating condition, not a role: "Fuel energy input (LHV) at rated output | 2.6 kW", "input at full load". */
 const RATING_CONDITION_RE = /(?<!\p{L})(?:at|under)[^\S\n]+(?:the[^\S\n]+)?(?:rated|full|nominal|maximum|max\.?|peak|continuous|part)[^\S\n]+(?:output|load|power|capacity)(?!\p{L})(?![^\S\n]*(?:of|is|was|=|:)?[^\S\n]*(?:about|around|roughly|some)?[^\S\n]*\p{N})/giu;
 
+/** Idioms with "in" or "out" that name no side: "out of curiosity", "in fact", "in short". */
+const NO_SIDE_IDIOM_RE = /(?<!\p{L})(?:out[^\S\n]+of[^\S\n]+(?:curiosity|interest|habit|caution|respect)|in[^\S\n]+(?:fact|short|theory|practice|turn|particular))(?!\p{L})/giu;
+
 export function roleFor(text: string, kind: FigureKind, start: number, end: number, floor: number): FigureRole {
   // (Blanked, places kept.)
   if ((kind === 'power' || kind === 'energy') && RATING_CONDITION_RE.test(text)) text = text.replace(RATING_CONDITION_RE, (m) => ' '.repeat(m.length));
+  // ("Out of curiosity I put the clamp meter on it": no side.)
+  if ((kind === 'power' || kind === 'energy') && NO_SIDE_IDIOM_RE.test(text)) text = text.replace(NO_SIDE_IDIOM_RE, (m) => ' '.repeat(m.length));
   // "gas energy out (HHV, inventor's calc from his flowmeter) = 5.9E+03 W": an aside in brackets between a
   // label and its value is no word of it (blanked, places kept).
   const from = Math.max(0, start - 120);

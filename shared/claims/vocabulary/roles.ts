@@ -67,6 +67,10 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:drives|driving|drove|turns|turning|spins|spinning)(?:,[^.;!?\\n]{0,60},)? (?:a|the|its) (?:[\\w-]+ )?(?:generators?|alternators?|dynamos?)', 'from the (?:wall|mains|socket|outlet|plug|grid|(?:bench |power |lab |DC |AC )?supply|battery|batteries)', 'compressors?',
       '(?:that |which )?(?:it|the (?:device|unit|rig|machine|system|motor|circuit|cell|coil)) (?:draws|drew|consumes|consumed|uses|used|takes|took|needs|is fed|was fed|receives|received|is given|was given|pulls|requires|is supplied with|was supplied with|is fed with|was fed with|runs on|ran on)',
       '(?:was|were|is|are) (?:consumed|drawn|used|supplied|burned|burnt|fed in|put in)', 'drive power',
+      // "the 960 W the motor is said to draw".
+      '(?:that |which )?(?:it|the (?:[\\w-]+ )?(?:device|unit|rig|machine|system|motor|circuit|cell|coil|heater|pump)) (?:is|was|are|were) (?:said|claimed|reported|supposed|rated) to (?:draw|take|use|consume|need)',
+      // "2.4e-3 J going into the coil per pulse": what goes into the device's own part.
+      '(?:going|goes|went|fed|put|flowing|flows) in(?:to (?:the|its) (?:[\\w-]+ )?(?:coils?|device|unit|circuit|primary|input|driver|cell|stack|drive|cavity|thruster|module|rig|system))?(?! (?:the|a|an) (?:load|grid|battery|cap|capacitor|tank|store|heater))',
       '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
       'inputs?', '(?:"|“)?drawn(?! from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point|a?ether|nowhere|nothing|thin air))', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 
       // "a 65 W charger": see the same word before the figure.
@@ -106,6 +110,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', '(?:can|could|will|would|to) discharge(?: at)?', 'gave back', 'on the shaft', 'at the shaft', '(?:generators?|alternators?|dynamos?)(?: (?!(?:is|was|are|were|being|been)\\b)[\\w-]+){0,5}? (?:sends?|sent|pushes|pushed|returns?|returned|puts? back|delivers|supplies)', '(?:shaft|brake) (?:power|output)(?:\x27s|\u2019s)?', 'dump(?:s|ed)?', '(?<![\\w-])out ?=', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
+      // "3.1e-2 J coming out into the cap on the collector side": what comes out of the device.
+      '(?:coming|comes|came|going|goes|went|flowing|flows) out(?! of (?:the|a|an) (?:wall|mains|socket|supply|grid|battery))',
       // "1.5 kW of hydraulic power at the duty point": what a pump gives the water.
       'of hydraulic (?:power|output|work)',
       // "produces 100 kW gross, 35 kW net after the pumps": a plant's gross and net outputs.
