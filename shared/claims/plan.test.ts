@@ -1488,3 +1488,23 @@ test('"going into the coil" and "coming out into the cap"; a current and voltage
   // 560 / (7.2 × 120) = 0.6481.
   expect(out(m!, 'over_unity')).toBeCloseTo(560 / 864, 9);
 });
+
+describe('a COP said after an aside, a fuel tank said not needed, energies per pulse (issue 11, invented test data)', () => {
+  const checks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks;
+  it('"The compressor\'s cooling COP at that condition, from our calorimeter, is 2.1" is the cooling COP', () => {
+    const run = checks('Chest freezer test: we held the cabinet at −18 °C in a 32 °C test room. The compressor\'s cooling COP at that condition, from our calorimeter, is 2.1.').find((c) => c.check === 'carnot');
+    expect(run?.finding).toBe('consistent');
+    // COP_c,max = 255.15 / 50 = 5.103 (Çengel & Boles, ch. 6); 2.1 / 5.103 = 0.4115.
+    expect(out(run!, 'cop_cooling_ratio')).toBeCloseTo(2.1 / (255.15 / 50), 6);
+  });
+  it('"a satellite need never carry a fuel tank again" names no propellant of the drive', () => {
+    const run = checks('Result: 12 mN per kW, with no propellant and no exhaust. Our 3 kW bench unit pushed 36 mN on the pendulum. A 1,000 kg satellite need never carry a fuel tank again.').find((c) => c.check === 'photon-bound');
+    expect(run?.finding).toBe('breaks');
+    expect(out(run!, 'ratio')).toBeCloseTo((0.036 * C) / 3000, 0);
+  });
+  it('"charges its coil with 50 J per cycle … delivers 600 J per pulse" are the energies in and out of one pulse', () => {
+    const run = checks('Our pulse generator charges its coil with 50 J per cycle and, with a loaded Q of 12, delivers 600 J per pulse to the load bank.').find((c) => c.check === 'first-law');
+    expect(run?.finding).toBe('breaks');
+    expect(out(run!, 'over_unity')).toBeCloseTo(12, 9);
+  });
+});

@@ -197,7 +197,7 @@ describe('false positives', () => {
     ['a power per area', 'The flux was 5 W/m² at the surface.'],
     ['a torque', 'The bolts were set to 5 N·m and 6 N-m.'],
     ['a probe type', 'Two 2 K-type probes were fitted.'],
-    ['a per-unit figure', 'It gives 2 cal per pulse and 3 W per square metre.'],
+    ['a per-unit figure', 'It gives 2 cal per litre and 3 W per square metre.'],
     ['a percentage that is not an efficiency', 'Output rose 20% and 45 % of the runs failed.'],
     ['a change of efficiency', 'The efficiency improved by 12% over the year.'],
     ['an acceleration', 'It accelerated at 9.81 m/s² and 2 m/s^2.'],

@@ -297,9 +297,10 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
     used.add(r);
     const si = siOf(e);
     if (si === null) continue;
-    const role = e.role;
     const start = Math.min(e.start, r.start);
     const end = Math.max(e.end, r.end);
+    // (As said of the energy, else of the pair, else what the pulses give: "35 mJ per pulse at 20 Hz".)
+    const role = e.role ?? roleAround(start, end) ?? 'out';
     if (overlaps(drafts, start, end, 'power')) continue;
     e.role = 'aside';
     insertByStart(drafts, { start, end, kind: 'power', quantity: typedSi(si * r.value, 'W'), role, derived: `power = energy per cycle × cycles per second (${formatQuantity(si, 'J')} × ${formatQuantity(r.value, 'Hz')})` });

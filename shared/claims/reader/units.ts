@@ -175,4 +175,4 @@ export function readSuffix(text: string, at: number): { suffix: Suffix; end: num
 const SPEED_OF_LIGHT: UnitForm = { kind: 'speed', unit: 'm/s', factor: C_M_PER_S };
 
 /** After "per": one of a counted thing, not a unit ("per bit", "per cycle"). */
-const PER_COUNT_RE = /^(?:(?:erased|logical|logic|single|full|complete|charge|working)[^\S\n]+)?(?:bits?|operations?|erasures?|cycles?|batch(?:es)?|flips?|runs?|trips?|laps?|charges?|discharges?|fills?|sessions?)(?!\p{L})/iu;
+const PER_COUNT_RE = /^(?:(?:erased|logical|logic|single|full|complete|charge|working)[^\S\n]+)?(?:bits?|operations?|erasures?|cycles?|batch(?:es)?|flips?|runs?|trips?|laps?|charges?|discharges?|fills?|sessions?|pulses?|shots?|strokes?|revolutions?|turns?|swings?|firings?)(?!\p{L})/iu;

@@ -29,6 +29,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:bench |lab |laboratory |power |mains )?(?:supply|mains|grid|socket|outlet) (?:provided|delivered|gave|powered|drove)',
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
       'draw(?:s|n|ing)?', 'drew', 'consum(?:e|es|ed|ing|ption)', 'inputs?',
+      // "charges its coil with 50 J per cycle": what the device puts into its own coil or capacitor goes in.
+      '(?:charg(?:es|ed|ing)|energi[sz](?:es|ed|ing)|pumps?|pumped|pumping) (?:its|the) (?:[\\w-]+ )?(?:coils?|capacitors?|caps?|inductors?|primary|tank circuit|capacitor bank) (?:up )?with',
       // "From a battery bank I give it 12 A at 24 V": what the writer gives the device goes in.
       '(?:I|we|you) (?:give|gave|feed|fed|supply|supplied|put in|apply|applied) (?:it|them|the (?:device|unit|machine|heater|motor|coil|circuit|cell|prototype))(?: with)?',
       // "hydrogen with a chemical energy of 120 MJ", "fuel energy: 40 MJ": what the fuel brings in.
