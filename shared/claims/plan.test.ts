@@ -1508,3 +1508,11 @@ describe('a COP said after an aside, a fuel tank said not needed, energies per p
     expect(out(run!, 'over_unity')).toBeCloseTo(12, 9);
   });
 });
+
+test('"72 hours later the lamps were still lit" is the run ("were" names no supposition) (invented test data)', () => {
+  const text = 'The 5 kWh battery bank powers the drive motor, which turns the generator, which recharges the bank. Last week we connected a 400 W lamp load and let it run. 72 hours later the lamps were still lit.';
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('breaks');
+  // Out: 400 W × 72 h = 28.8 kWh against the 5 kWh bank: 5.76.
+  expect(out(run!, 'over_unity')).toBeCloseTo((400 * 72) / 5000, 9);
+});

@@ -23,7 +23,8 @@ const TERM_LABEL_RE = /^[\s•*-]*(?:(?:project|proposed|planned|total|expected)
 const FUNDING_RE = /(?<!\p{L})(?:grants?|funding|funders?|voucher|proposals?|applicants?|application|requested|budget|award|fund|work packages?|milestones?|backers?|campaign)(?!\p{L})/iu;
 
 /** A sentence of a supposition: "if …", "unless …", "should it …", "would", "could". */
-const SUPPOSED_TIME_RE = /(?<!\p{L})(?:if|unless|should|would|could|were)(?!\p{L})/iu;
+// ("were" only as a supposition's inversion, "were it to run a week": not "the lamps were still lit".)
+const SUPPOSED_TIME_RE = /(?<!\p{L})(?:if|unless|should|would|could|were[^\S\n]+(?:it|they|we|you|he|she|this|that)(?=[^\S\n]+to(?!\p{L})))(?!\p{L})/iu;
 
 /** Just before a charging time: "charges to 80 % in", "recharged in", "refills in", "back to full in", "a full charge takes", "charging time of". */
 export const CHARGING_TIME_RE =
