@@ -1516,3 +1516,16 @@ test('"72 hours later the lamps were still lit" is the run ("were" names no supp
   // Out: 400 W × 72 h = 28.8 kWh against the 5 kWh bank: 5.76.
   expect(out(run!, 'over_unity')).toBeCloseTo((400 * 72) / 5000, 9);
 });
+
+test('a heater said to have no outdoor unit and no refrigerant gets no COP from its heat over its electricity; an output "added to the engine\'s output" is output (invented test data)', () => {
+  const heater = "Independent test, hydrodynamic heater (no outdoor unit, no refrigerant). During a 72-hour run the electricity meter logged 86.4 kWh. Over the same period the heat meter recorded 105–110 kWh delivered to the radiators.";
+  const first = runClaimChecks(extractFigures(heater), { text: heater }).checks.find((c) => c.check === 'first-law');
+  expect(first?.finding).toBe('breaks');
+  // The lower end of the heat, kinder to the claim: 105 / 86.4 = 1.2153.
+  expect(out(first!, 'over_unity')).toBeCloseTo(105 / 86.4, 9);
+  const booster = "The cell runs from your vehicle's alternator at 14.2 V, drawing about 45 A. The gas it makes is piped into the air intake, where its combustion adds up to 2.1 kW to the engine's output.";
+  const b = runClaimChecks(extractFigures(booster), { text: booster }).checks.find((c) => c.check === 'first-law');
+  expect(b?.finding).toBe('breaks');
+  // 2100 / (14.2 × 45) = 3.2864.
+  expect(out(b!, 'over_unity')).toBeCloseTo(2100 / (14.2 * 45), 9);
+});

@@ -696,7 +696,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   // A heat pump's heat out over its work in: its heating COP, as a figure of its own. A cooling
   // machine's heat removed ("Refrigerating capacity 5,000 BTU/h … Power input 780 W") over its work in:
   // its cooling COP.
-  const denied = /(?<!\p{L})(?:no|not an?|without an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?heat[- ]pumps?(?!\p{L})/iu.test(text);
+  // (Nor where its parts are said to be absent: "no outdoor unit, no refrigerant".)
+  const denied = /(?<!\p{L})(?:no|not an?|without an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:heat[- ]pumps?|outdoor[^\S\n]+units?|refrigerants?|compressors?|evaporators?)(?!\p{L})/iu.test(text);
   const pump = HEAT_PUMP_RE.test(text) && !denied;
   const coolingOut = (d: Draft) =>
     COOLING_DUTY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start)) ||

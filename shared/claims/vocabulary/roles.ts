@@ -112,6 +112,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', '(?:can|could|will|would|to) discharge(?: at)?', 'gave back', 'on the shaft', 'at the shaft', '(?:generators?|alternators?|dynamos?)(?: (?!(?:is|was|are|were|being|been)\\b)[\\w-]+){0,5}? (?:sends?|sent|pushes|pushed|returns?|returned|puts? back|delivers|supplies)', '(?:shaft|brake) (?:power|output)(?:\x27s|\u2019s)?', 'dump(?:s|ed)?', '(?<![\\w-])out ?=', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
+      // "its combustion adds up to 2.1 kW to the engine's output": what is added to an output is output.
+      '(?:to|onto) (?:the |its |an? )?(?:[\\w-]+(?:\'s|’s)? )?(?:output|power output|shaft output|electrical output)',
       // "3.1e-2 J coming out into the cap on the collector side": what comes out of the device.
       '(?:coming|comes|came|going|goes|went|flowing|flows) out(?! of (?:the|a|an) (?:wall|mains|socket|supply|grid|battery))',
       // "1.5 kW of hydraulic power at the duty point": what a pump gives the water.
