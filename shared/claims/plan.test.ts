@@ -1529,3 +1529,12 @@ test('a heater said to have no outdoor unit and no refrigerant gets no COP from 
   // 2100 / (14.2 × 45) = 3.2864.
   expect(out(b!, 'over_unity')).toBeCloseTo(2100 / (14.2 * 45), 9);
 });
+
+test('"with no mains connection and no solar panel" is nothing in (invented test data)', () => {
+  const text = 'The charger keeps its own 12 V gel battery topped up while running a 60 W lamp. We ran it for a 72-hour stretch with no mains connection and no solar panel; the battery read full at the start and still full at the end.';
+  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  expect(run?.finding).toBe('breaks');
+  // 60 W × 72 h = 15.552 MJ out of nothing.
+  expect(out(run!, 'E_out')).toBeCloseTo(60 * 72 * 3600, 0);
+  expect(out(run!, 'E_net_in')).toBe(0);
+});
