@@ -63,7 +63,7 @@ import type { Figure } from './types';
 import { focusOneItem } from './plan/items';
 import { runClaimChecks } from './plan/run';
 import { readFigures } from './reader/figures';
-import { readableLayout } from './reader/pdf-text';
+import { readableLayout, type Unwrapped } from './reader/pdf-text';
 import { repairTyping } from './reader/repair';
 import { detex } from './reader/tex';
 import { unitAt } from './reader/units';
@@ -79,24 +79,21 @@ export function extractFigures(text: string): Figure[] {
 }
 
 function readPasted(text: string): Figure[] {
-  // Text damaged on its way ("Â°C", "2O W", "25 ?C"): read as the writer meant it, then each figure's
-  // offsets and words point back at the pasted text.
-  const repaired = repairTyping(text);
-  if (repaired === null) return readLaidOut(text);
-  return pointBack(readLaidOut(repaired.text), text, (f) => {
-    const start = repaired.toPasted[f.start];
-    return [start, f.end > f.start ? repaired.toPasted[f.end - 1] + 1 : start];
-  });
+  // Text damaged on its way ("Â°C", "2O W", "25 ?C"): read as the writer meant it.
+  return readRewritten(text, repairTyping(text), readLaidOut);
 }
 
 function readLaidOut(text: string): Figure[] {
-  // Text copied out of a PDF ("coeffi-\ncient", lines wrapped mid-sentence, "efﬁciency"): read as written,
-  // then each figure's offsets and words point back at the pasted text.
-  const unwrapped = readableLayout(text);
-  if (unwrapped === null) return readWithTex(text);
-  return pointBack(readWithTex(unwrapped.text), text, (f) => {
-    const start = unwrapped.toPasted[f.start];
-    return [start, f.end > f.start ? unwrapped.toPasted[f.end - 1] + 1 : start];
+  // Text copied out of a PDF ("coeffi-\ncient", lines wrapped mid-sentence, "efﬁciency"): read as written.
+  return readRewritten(text, readableLayout(text), readWithTex);
+}
+
+/** A text read as rewritten (or as pasted, where nothing was), each figure's offsets and words pointing back at the pasted text. */
+function readRewritten(text: string, rewritten: Unwrapped | null, read: (text: string) => Figure[]): Figure[] {
+  if (rewritten === null) return read(text);
+  return pointBack(read(rewritten.text), text, (f) => {
+    const start = rewritten.toPasted[f.start];
+    return [start, f.end > f.start ? rewritten.toPasted[f.end - 1] + 1 : start];
   });
 }
 

@@ -36,3 +36,9 @@ export function only(text: string): Figure {
   expect(figures).toHaveLength(1);
   return figures[0];
 }
+
+/** A rewritten text's offsets: one for each character and one past the end, each into the pasted text, in order. */
+export function expectMapsBack(u: { text: string; toPasted: number[] }) {
+  expect(u.toPasted).toHaveLength(u.text.length + 1);
+  for (let i = 1; i < u.toPasted.length; i++) expect(u.toPasted[i]).toBeGreaterThanOrEqual(u.toPasted[i - 1]);
+}
