@@ -35,6 +35,9 @@
  *     - an excess over a stated input ("4 W more heat than the 20 W it draws") → out = in + excess;
  *     - "self-running", "needs no supply" … (not where the device harvests an outside flow) → in = 0;
  *     - one temperature and a difference → the other temperature (hot = cold + ΔT, or cold = hot − ΔT).
+ *  Text damaged on its way (reader/repair.ts) is read as meant first: UTF-8 read as Windows-1252 ("Â°C"),
+ *  a symbol lost to "?", "O" and "l" typed for 0 and 1 inside numbers, units run together, words in
+ *  capitals, a slip put right at once; offsets map back to the pasted text.
  *  Text copied out of a PDF (reader/pdf-text.ts) is read as written: words broken at a line's end joined,
  *  wrapped lines read as one sentence, ligatures as letters, and a table set as text with a header row
  *  read cell by cell after its column's label; offsets map back to the pasted text.
@@ -54,7 +57,7 @@
  * each item is read with the others blanked out and one is checked, the others' figures set aside
  * (shared/claims/plan/items.ts).
  *
- * The passes, in shared/claims/reader/: numbers.ts and units.ts (1, 2), kinds.ts, temperatures.ts,
+ * The passes, in shared/claims/reader/: repair.ts and pdf-text.ts (before 1), numbers.ts and units.ts (1, 2), kinds.ts, temperatures.ts,
  * ranges-hedges.ts and roles.ts (3–5), figures.ts (a text's figures, pass by pass), comparisons.ts,
  * relations.ts, roles-by-context.ts, temperatures.ts and durations.ts (6); context.ts and draft.ts
  * hold what the passes share.
