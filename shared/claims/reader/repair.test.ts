@@ -26,6 +26,9 @@ describe('repairTyping', () => {
     const u = repairTyping('7Â°C â€“ 12 ÂµN/W, Î”T 4 K, 4.2 Ã— 10^8, â‚¬ 950, Â±5%')!;
     expect(u.text).toBe('7°C – 12 µN/W, ΔT 4 K, 4.2 × 10^8, € 950, ±5%');
     expectMapsBack(u);
+    // A four-byte sequence (F0 9F 94 A5, U+1F525) read back; an overlong or broken one left as it is.
+    expect(repairTyping('hot ðŸ”¥ 3 kW')!.text).toBe('hot \u{1F525} 3 kW');
+    expect(repairTyping('à€€ and Ã')).toBeNull();
   });
 
   test('letters in place of digits are read as digits inside a number only', () => {

@@ -20,7 +20,24 @@ const cp1252Byte = (ch: string): number | null => {
 };
 /** A lead byte of a UTF-8 sequence of two, three or four bytes, seen as its Windows-1252 character (Â … ô). */
 const MOJIBAKE_RE = /[\u00C2-\u00F4][€‚ƒ„…†‡ˆ‰Š‹ŒŽ‘’“”•–—˜™š›œžŸ\u0081\u008D\u008F\u0090\u009D\u00A0-\u00BF]{1,3}/gu;
-const utf8 = new TextDecoder('utf-8', { fatal: true });
+/**
+ * The character a UTF-8 sequence of two to four bytes encodes (RFC 3629, §3: lead and continuation bytes,
+ * no overlong form, no surrogate, nothing past U+10FFFF), or null. (Written out: TextDecoder is not in
+ * every JavaScript engine the app runs on.)
+ */
+function decodeUtf8(bytes: number[]): string | null {
+  const [b0, ...rest] = bytes;
+  if (rest.some((b) => b < 0x80 || b > 0xbf)) return null;
+  const tail = rest.reduce((cp, b) => (cp << 6) | (b & 0x3f), 0);
+  let cp: number;
+  if (bytes.length === 2 && b0 >= 0xc2 && b0 <= 0xdf) cp = ((b0 & 0x1f) << 6) | tail;
+  else if (bytes.length === 3 && b0 >= 0xe0 && b0 <= 0xef) cp = ((b0 & 0x0f) << 12) | tail;
+  else if (bytes.length === 4 && b0 >= 0xf0 && b0 <= 0xf4) cp = ((b0 & 0x07) << 18) | tail;
+  else return null;
+  const least = bytes.length === 2 ? 0x80 : bytes.length === 3 ? 0x800 : 0x10000;
+  if (cp < least || cp > 0x10ffff || (cp >= 0xd800 && cp <= 0xdfff)) return null;
+  return String.fromCodePoint(cp);
+}
 
 /** "Â°" → "°", "â€“" → "–": each run that decodes as one UTF-8 character when read back as Windows-1252 bytes. */
 function mojibakeEdits(pasted: string): TextEdit[] {
@@ -30,12 +47,8 @@ function mojibakeEdits(pasted: string): TextEdit[] {
     const lead = bytes[0]!;
     const need = lead >= 0xf0 ? 4 : lead >= 0xe0 ? 3 : 2;
     if (bytes.length < need || bytes.slice(1, need).some((b) => b === null || b < 0x80 || b > 0xbf)) continue;
-    let decoded: string;
-    try {
-      decoded = utf8.decode(new Uint8Array(bytes.slice(0, need) as number[]));
-    } catch {
-      continue;
-    }
+    const decoded = decodeUtf8(bytes.slice(0, need) as number[]);
+    if (decoded === null) continue;
     // ("Â " — a no-break space come through as "Â" and a space — reads as a space.)
     edits.push({ at: m.index!, length: need, insert: decoded === '\u00A0' ? ' ' : decoded });
   }
