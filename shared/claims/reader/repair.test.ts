@@ -35,6 +35,8 @@ describe('repairTyping', () => {
     expect(repairTyping('2O W, 4O0 W, 14O%, l30 %, O.2 A, l,35 kW, 3l0 s, 1O x 1O mm, 2Omin')!.text).toBe('20 W, 400 W, 140%, 130 %, 0.2 A, 1,35 kW, 310 s, 10 x 10 mm, 20min');
     // Words, formulas and units stay: oxygen, CO2, water, a 2 l bottle, a lot, Oslo, an ordinal.
     expect(repairTyping('an O2 sensor, CO2 and H2O, a 2l bottle, a lot in Oslo, the 2o')).toBeNull();
+    // (Thousands groups and an exponent: "11O,OOO BTU/h", "9.8E+O2 W".)
+    expect(repairTyping('11O,OOO BTU/h and 9.8E+O2 W')!.text).toBe('110,000 BTU/h and 9.8E+02 W');
   });
 
   test('a question mark left for a degree or micro sign, units run together, capitals throughout, a slip put right', () => {

@@ -59,36 +59,24 @@ function mojibakeEdits(pasted: string): TextEdit[] {
 const LOST_SYMBOL_RE = /(?<=[\dO][^\S\n]?)\?(?=([CF]|[NWAVgms]|m[^\S\n]?(?:\/|W|N))(?![\p{L}\p{N}]))/gu;
 
 /**
- * A letter in place of a digit inside a number: "O" or "o" for 0 beside a digit ("2O", "4O0", "1O,5",
- * "O.2"), "l" for 1 before a digit or a decimal point and digit ("l30", "l,35", "3l0"). Only in a run of
- * digits, separators and those letters that holds a real digit, so words ("lot", "Oslo") and units ("2 l",
- * "5l tank") are left alone.
+ * A letter in place of a digit inside a number: "O" (or "o" between digits) for 0 and "l" for 1 — "2O",
+ * "4O0", "7,8OO", "l30", "l,35", "3l0", "O.2", "9.8E+O2". Only where the run of digits, separators and those
+ * letters holds a real digit and reads as a number once they are digits; a leading "O" only before a point
+ * or in an exponent (never "O2"), a trailing "l" never (a litre: "2l"), so words ("lot", "Oslo"), formulas
+ * ("CO2", "H2O") and units are left alone.
  */
 const NUMBER_RUN_RE = /(?<![\p{L}\p{N}_])[\dOol][\dOol.,]*(?![\p{N}])/gu;
+const NUMBER_SHAPE_RE = /^(?:\d{1,3}(?:,\d{3})+|\d+)(?:[.,]\d+)?$/u;
 function letterDigitEdits(pasted: string): TextEdit[] {
   const edits: TextEdit[] = [];
   for (const m of pasted.matchAll(NUMBER_RUN_RE)) {
-    const run = m[0];
-    if (!/\d/u.test(run) || !/[Ool]/u.test(run)) continue;
-    // (The run must end where the number does: a letter right after a trailing "l" or "o" is a word's — "2lo…".)
-    const next = pasted[m.index! + run.length] ?? '';
-    for (let i = 0; i < run.length; i++) {
-      const ch = run[i];
-      if (ch !== 'O' && ch !== 'o' && ch !== 'l') continue;
-      const prev = run[i - 1] ?? '';
-      const after = run[i + 1] ?? '';
-      const digitBeside = /\d/u.test(prev) || /\d/u.test(after) || (/[Ool]/u.test(prev) && /\d/u.test(run[i - 2] ?? '')) || (/[Ool]/u.test(after) && /\d/u.test(run[i + 2] ?? ''));
-      const beforePoint = i === 0 && /[.,]/u.test(after) && /\d/u.test(run[i + 2] ?? '');
-      if (ch === 'l') {
-        // ("l" only before a digit or a decimal point and digit, never last: "2l" is two litres.)
-        if (!(/[\dOo]/u.test(after) || beforePoint) || i === run.length - 1) continue;
-      } else if (ch === 'o') {
-        // ("o" only between digits: "2o" may be an ordinal.)
-        if (!(/\d/u.test(prev) && /[\dO]/u.test(after))) continue;
-      } else if (i === 0 ? !beforePoint : !digitBeside) continue; // (a leading "O" only before a point: "O.2 A", never "O2")
-      if (i === run.length - 1 && /\p{L}/u.test(next) && ch !== 'O') continue;
-      edits.push({ at: m.index! + i, length: 1, insert: ch === 'l' ? '1' : '0' });
-    }
+    const body = m[0].replace(/l+$/u, '').replace(/[.,]+$/u, '');
+    if (!/\d/u.test(body) || !/[Ool]/u.test(body)) continue;
+    const exponent = /\d[eE][+\-−]?$/u.test(pasted.slice(Math.max(0, m.index! - 4), m.index!));
+    if (body[0] === 'O' && !/^O[.,]\d/u.test(body) && !exponent) continue;
+    if ([...body].some((ch, i) => ch === 'o' && !(/\d/u.test(body[i - 1] ?? '') && /[\dO]/u.test(body[i + 1] ?? '')))) continue;
+    if (!NUMBER_SHAPE_RE.test(body.replace(/[Oo]/gu, '0').replace(/l/gu, '1'))) continue;
+    for (let i = 0; i < body.length; i++) if (/[Ool]/u.test(body[i])) edits.push({ at: m.index! + i, length: 1, insert: body[i] === 'l' ? '1' : '0' });
   }
   return edits;
 }
