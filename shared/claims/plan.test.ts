@@ -1538,3 +1538,16 @@ test('"with no mains connection and no solar panel" is nothing in (invented test
   expect(out(run!, 'E_out')).toBeCloseTo(60 * 72 * 3600, 0);
   expect(out(run!, 'E_net_in')).toBe(0);
 });
+
+test('"give or take 10 %" is an uncertainty; a battery\'s size beside what was drawn from it is no input (invented test data)', () => {
+  const unit = 'In our bench runs it draws between 350 and 400 W from the mains and feeds about 3 kW, give or take 10 %, back into the house circuit.';
+  const u = runClaimChecks(extractFigures(unit), { text: unit }).checks.find((c) => c.check === 'first-law');
+  expect(u?.finding).toBe('breaks');
+  // The ends kinder to the claim: 2.7 kW out (3 kW − 10 %) over 400 W in = 6.75.
+  expect(out(u!, 'over_unity')).toBeCloseTo(2700 / 400, 9);
+  const car = "Drove to my sister's, 2 h on the motorway. Car says 18.4 kWh used from the battery; the logger shows an average 7.2 kW at the wheels. Battery is 58 kWh, was at 80 % when I left.";
+  const c = runClaimChecks(extractFigures(car), { text: car }).checks.find((x) => x.check === 'first-law');
+  expect(c?.finding).toBe('consistent');
+  // 7.2 kW × 2 h = 14.4 kWh out of 18.4 kWh: 0.7826.
+  expect(out(c!, 'over_unity')).toBeCloseTo(14.4 / 18.4, 9);
+});

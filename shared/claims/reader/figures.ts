@@ -213,7 +213,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       t.num = String(Number((mid - t.unc).toPrecision(15)));
     } else if (next && !next.skip) {
       const gapStart = t.suffix ? t.end : t.numEnd;
-      const pmGap = /^,?[^\S\n]*(?:±|\+\/-|\+-|plus[^\S\n]+or[^\S\n]+minus)[^\S\n]*$/i.test(text.slice(gapStart, next.start)) ||
+      const pmGap = /^,?[^\S\n]*(?:±|\+\/-|\+-|plus[^\S\n]+or[^\S\n]+minus|give[^\S\n]+or[^\S\n]+take)[^\S\n]*$/i.test(text.slice(gapStart, next.start)) ||
         // ("1.2 kW (± 5 %)": an uncertainty in per cent, in brackets.)
         (/^[^\S\n]*\([^\S\n]*(?:±|\+\/-|\+-)[^\S\n]*$/.test(text.slice(gapStart, next.start)) && next.suffix?.type === 'percent');
       // "96 W ± 3 %": an uncertainty in per cent of the figure.

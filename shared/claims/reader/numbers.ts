@@ -31,7 +31,8 @@ const SUPERSCRIPT_DIGITS: Record<string, string> = { '⁰': '0', '¹': '1', '²'
 
 const LABEL_RE = new RegExp(`(?:(?<!\\p{L})(?:${alt(LABEL_WORDS)})|[§#¶])[^\\S\\n]*$`, 'iu');
 /** "±", "+/-", and said in words: "twelve per cent, plus or minus three". */
-const PLUS_MINUS_RE = /(?:±|\+\/-|\+-|(?<!\p{L})plus[^\S\n]+or[^\S\n]+minus)[^\S\n]*$/iu;
+// ("give or take 10 %" too.)
+const PLUS_MINUS_RE = /(?:±|\+\/-|\+-|(?<!\p{L})plus[^\S\n]+or[^\S\n]+minus|(?<!\p{L})give[^\S\n]+or[^\S\n]+take)[^\S\n]*$/iu;
 
 export interface NumberToken {
   start: number;

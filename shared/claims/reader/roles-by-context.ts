@@ -653,6 +653,21 @@ export function asideControlPowers(text: string, drafts: Draft[]): void {
   if (amplifier) for (const d of drafts) if (d.kind === 'efficiency' && d.derived && (siOf(d) ?? 0) > 1) d.role = 'aside';
 }
 
+/** A store's size said as such: "Battery is 58 kWh", "pack capacity: 75 kWh", "a 58 kWh battery". */
+const CAPACITY_BEFORE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|banks?)(?:['’]s)?[^\S\n]+(?:is|was|capacity(?:[^\S\n]+(?:is|of))?|size(?:[^\S\n]+(?:is|of))?|rated[^\S\n]+at)[^\S\n]*:?[^\S\n]*(?:(?:about|around|roughly|a|an)[^\S\n]+)?$/iu;
+const CAPACITY_AFTER_RE = /^[^\S\n]*(?:usable[^\S\n]+|nominal[^\S\n]+)?(?:(?:lithium|li-ion|lead-acid|traction|gel|home)[^\S\n]+)?(?:batter(?:y|ies)|packs?|capacity)(?!\p{L})/iu;
+
+/**
+ * "car says 18.4 kWh used from the battery … Battery is 58 kWh, was at 80 %": where the text gives what was
+ * drawn from a store, the store's size is no input of the run (set aside).
+ */
+export function asideStoreSize(text: string, drafts: Draft[]): void {
+  const size = (d: Draft) => CAPACITY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)) || CAPACITY_AFTER_RE.test(text.slice(d.end, d.end + 30));
+  const sizes = drafts.filter((d) => d.kind === 'energy' && d.role === 'in' && !d.derived && size(d));
+  if (sizes.length === 0 || !drafts.some((d) => d.kind === 'energy' && d.role === 'in' && !d.derived && !sizes.includes(d))) return;
+  for (const d of sizes) d.role = 'aside';
+}
+
 /** Before a power or an energy a source gives: "its solar panels give", "the turbine makes about". */
 const SOURCE_GIVES_BEFORE_RE =
   /(?<!\p{L})(?:(?:solar[^\S\n]+)?(?:panels?|arrays?|PV|modules?|cells?)|turbines?|generators?|alternators?|dynamos?|RTGs?|gensets?)[^\S\n]+(?:give|gives|gave|make|makes|made|produce|produces|produced|deliver|delivers|delivered|generate|generates|generated|provide|provides|provided|supply|supplies|supplied|put[^\S\n]+out|puts[^\S\n]+out)(?:[^\S\n]+(?:about|around|roughly|some|up[^\S\n]+to|nearly|only|just))?[^\S\n]*$/iu;
