@@ -1551,3 +1551,14 @@ test('"give or take 10 %" is an uncertainty; a battery\'s size beside what was d
   // 7.2 kW × 2 h = 14.4 kWh out of 18.4 kWh: 0.7826.
   expect(out(c!, 'over_unity')).toBeCloseTo(14.4 / 18.4, 9);
 });
+
+test('an output with what went in said to be unknown ("without a charge", "we don\'t have the readings") needs the input, and is not judged (invented test data)', () => {
+  for (const text of [
+    'They sent us one of their cells to try. It has run our 5 W router for three weeks now without a charge.',
+    'The unit makes 1 kW of electricity and 6 kW of heat when it runs, 4,000 running hours last year. The gas bill was paid by the council and we don\'t have the readings.',
+  ]) {
+    const r = runClaimChecks(extractFigures(text), { text });
+    expect(r.checks.find((c) => c.check === 'first-law')).toBeUndefined();
+    expect(r.needs.map((n) => n.check)).toContain('first-law');
+  }
+});
