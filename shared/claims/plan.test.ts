@@ -1357,8 +1357,17 @@ describe('a lifter run under a bell jar, a gyro drive with "nothing coming out" 
   });
 });
 
+/** The run of one check on a text's own figures. */
+const checkOf = (text: string, check: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === check);
+/** That check's finding on a text, and one of its outputs to the digits given. */
+function expectRun(text: string, check: string, finding: string, output: string, value: number, digits = 9) {
+  const run = checkOf(text, check);
+  expect(run?.finding).toBe(finding);
+  expect(out(run!, output)).toBeCloseTo(value, digits);
+}
+
 describe("light's own push: a lamp on a vane, a source's recoil (issue 11, invented test data)", () => {
-  const photonRun = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound');
+  const photonRun = (text: string) => checkOf(text, 'photon-bound');
   it('a lamp shone on a black vane on a torsion balance is held to P/c though the beam is an outside one', () => {
     const run = photonRun('In the vacuum tank a 500 W xenon arc lamp was focused on a blackened vane hung from a torsion balance; the radiation pressure measured was 1.4 µN.');
     expect(run?.finding).toBe('consistent');
@@ -1385,7 +1394,7 @@ describe("light's own push: a lamp on a vane, a source's recoil (issue 11, inven
 });
 
 describe('times, totals and sides said in passing (issue 11, invented test data)', () => {
-  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  const firstLaw = (text: string) => checkOf(text, 'first-law');
   it('a store charged slowly and emptied fast: each power over the time said with it, not over the other', () => {
     const run = firstLaw('The unit spins its rotor up over about 10 minutes from a modest ~2 kW motor, then gives up to 500 kW for 1.5-2 seconds.');
     expect(run?.finding).toBe('consistent');
@@ -1402,7 +1411,7 @@ describe('times, totals and sides said in passing (issue 11, invented test data)
   });
   it('"650 °C hot head / 45 °C cooler water": the second side named in parallel, not a difference of 45 K', () => {
     const text = 'Stirling rig: 27.5 % thermal at 650 °C hot head / 45 °C cooler water.';
-    const carnot = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+    const carnot = checkOf(text, 'carnot');
     expect(carnot?.finding).toBe('consistent');
     // η_C = 1 − 318.15/923.15 = 0.65536; 0.275 / 0.65536 = 0.4196.
     expect(out(carnot!, 'eta_ratio')).toBeCloseTo(0.275 / (1 - 318.15 / 923.15), 6);
@@ -1431,7 +1440,7 @@ describe("a year's ledger of a plant and a heat pump's proposal (issue 11, inven
 
 test('"runs 6 h a day … say 120 days" is a run of 720 h, not of 120 days round the clock; a rating "(output)" in brackets is the output (invented test data)', () => {
   const text = 'Irrigation pump. Motor plate: 1.1 kW (output), 230 V single phase. Runs 6 h a day from mid-May to mid-September, say 120 days, so about 1,190 kWh on the meter for the season.';
-  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  const run = checkOf(text, 'first-law');
   expect(run?.finding).toBe('consistent');
   // Out: 1.1 kW × 6 h × 120 = 792 kWh; in: 1,190 kWh; 792 / 1190 = 0.6655.
   expect(out(run!, 'over_unity')).toBeCloseTo((1.1 * 6 * 120) / 1190, 9);
@@ -1440,13 +1449,13 @@ test('"runs 6 h a day … say 120 days" is a run of 720 h, not of 120 days round
 test('a battery that supplies the driver board is the input; "24 hours a day" is how it runs, and a year of savings no run (invented test data)', () => {
   const text =
     'It runs from an ordinary 12 V leisure battery, which supplies 8 A to the driver board. Out of the other side you get 230 V at 1.5 A, enough to run a fridge, lights and a TV, 24 hours a day. In a year it saves about €1,100 on electricity.';
-  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  const run = checkOf(text, 'first-law');
   expect(run?.finding).toBe('breaks');
   // In: 12 V × 8 A = 96 W; out: 230 V × 1.5 A = 345 W; 345 / 96 = 3.594.
   expect(out(run!, 'over_unity')).toBeCloseTo(345 / 96, 9);
   // (A store that delivers to the motor it runs gives out what it delivers.)
   const pack = 'Over eight hours the pack delivered 9.6 kWh to the drive motor; the charger had drawn 11.2 kWh from the grid to fill it.';
-  expect(out(runClaimChecks(extractFigures(pack), { text: pack }).checks.find((c) => c.check === 'first-law')!, 'over_unity')).toBeCloseTo(9.6 / 11.2, 9);
+  expect(out(checkOf(pack, 'first-law')!, 'over_unity')).toBeCloseTo(9.6 / 11.2, 9);
 });
 
 describe('what a text totals, compares and labels (issue 11, invented test data)', () => {
@@ -1479,11 +1488,11 @@ describe('what a text totals, compares and labels (issue 11, invented test data)
 
 test('"going into the coil" and "coming out into the cap"; a current and voltage said again as a power with its side (invented test data)', () => {
   const coil = 'Scope says 2.4e-3 J going into the coil per pulse (integrated V×I on the input channel) and 3.1e-2 J coming out into the cap on the collector side.';
-  const first = runClaimChecks(extractFigures(coil), { text: coil }).checks.find((c) => c.check === 'first-law');
+  const first = checkOf(coil, 'first-law');
   expect(first?.finding).toBe('breaks');
   expect(out(first!, 'over_unity')).toBeCloseTo(3.1e-2 / 2.4e-3, 9);
   const motor = 'I put the clamp meter on it under a steady cut: 7.2 A at 120 V. That is 864 W going in, for a motor rated at about 560 W out.';
-  const m = runClaimChecks(extractFigures(motor), { text: motor }).checks.find((c) => c.check === 'first-law');
+  const m = checkOf(motor, 'first-law');
   expect(m?.finding).toBe('consistent');
   // 560 / (7.2 × 120) = 0.6481.
   expect(out(m!, 'over_unity')).toBeCloseTo(560 / 864, 9);
@@ -1511,7 +1520,7 @@ describe('a COP said after an aside, a fuel tank said not needed, energies per p
 
 test('"72 hours later the lamps were still lit" is the run ("were" names no supposition) (invented test data)', () => {
   const text = 'The 5 kWh battery bank powers the drive motor, which turns the generator, which recharges the bank. Last week we connected a 400 W lamp load and let it run. 72 hours later the lamps were still lit.';
-  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  const run = checkOf(text, 'first-law');
   expect(run?.finding).toBe('breaks');
   // Out: 400 W × 72 h = 28.8 kWh against the 5 kWh bank: 5.76.
   expect(out(run!, 'over_unity')).toBeCloseTo((400 * 72) / 5000, 9);
@@ -1519,37 +1528,27 @@ test('"72 hours later the lamps were still lit" is the run ("were" names no supp
 
 test('a heater said to have no outdoor unit and no refrigerant gets no COP from its heat over its electricity; an output "added to the engine\'s output" is output (invented test data)', () => {
   const heater = "Independent test, hydrodynamic heater (no outdoor unit, no refrigerant). During a 72-hour run the electricity meter logged 86.4 kWh. Over the same period the heat meter recorded 105–110 kWh delivered to the radiators.";
-  const first = runClaimChecks(extractFigures(heater), { text: heater }).checks.find((c) => c.check === 'first-law');
-  expect(first?.finding).toBe('breaks');
   // The lower end of the heat, kinder to the claim: 105 / 86.4 = 1.2153.
-  expect(out(first!, 'over_unity')).toBeCloseTo(105 / 86.4, 9);
+  expectRun(heater, 'first-law', 'breaks', 'over_unity', 105 / 86.4, 9);
   const booster = "The cell runs from your vehicle's alternator at 14.2 V, drawing about 45 A. The gas it makes is piped into the air intake, where its combustion adds up to 2.1 kW to the engine's output.";
-  const b = runClaimChecks(extractFigures(booster), { text: booster }).checks.find((c) => c.check === 'first-law');
-  expect(b?.finding).toBe('breaks');
   // 2100 / (14.2 × 45) = 3.2864.
-  expect(out(b!, 'over_unity')).toBeCloseTo(2100 / (14.2 * 45), 9);
+  expectRun(booster, 'first-law', 'breaks', 'over_unity', 2100 / (14.2 * 45), 9);
 });
 
 test('"with no mains connection and no solar panel" is nothing in (invented test data)', () => {
   const text = 'The charger keeps its own 12 V gel battery topped up while running a 60 W lamp. We ran it for a 72-hour stretch with no mains connection and no solar panel; the battery read full at the start and still full at the end.';
-  const run = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
-  expect(run?.finding).toBe('breaks');
   // 60 W × 72 h = 15.552 MJ out of nothing.
-  expect(out(run!, 'E_out')).toBeCloseTo(60 * 72 * 3600, 0);
-  expect(out(run!, 'E_net_in')).toBe(0);
+  expectRun(text, 'first-law', 'breaks', 'E_out', 60 * 72 * 3600, 0);
+  expect(out(checkOf(text, 'first-law')!, 'E_net_in')).toBe(0);
 });
 
 test('"give or take 10 %" is an uncertainty; a battery\'s size beside what was drawn from it is no input (invented test data)', () => {
   const unit = 'In our bench runs it draws between 350 and 400 W from the mains and feeds about 3 kW, give or take 10 %, back into the house circuit.';
-  const u = runClaimChecks(extractFigures(unit), { text: unit }).checks.find((c) => c.check === 'first-law');
-  expect(u?.finding).toBe('breaks');
   // The ends kinder to the claim: 2.7 kW out (3 kW − 10 %) over 400 W in = 6.75.
-  expect(out(u!, 'over_unity')).toBeCloseTo(2700 / 400, 9);
+  expectRun(unit, 'first-law', 'breaks', 'over_unity', 2700 / 400, 9);
   const car = "Drove to my sister's, 2 h on the motorway. Car says 18.4 kWh used from the battery; the logger shows an average 7.2 kW at the wheels. Battery is 58 kWh, was at 80 % when I left.";
-  const c = runClaimChecks(extractFigures(car), { text: car }).checks.find((x) => x.check === 'first-law');
-  expect(c?.finding).toBe('consistent');
   // 7.2 kW × 2 h = 14.4 kWh out of 18.4 kWh: 0.7826.
-  expect(out(c!, 'over_unity')).toBeCloseTo(14.4 / 18.4, 9);
+  expectRun(car, 'first-law', 'consistent', 'over_unity', 14.4 / 18.4, 9);
 });
 
 test('an output with what went in said to be unknown ("without a charge", "we don\'t have the readings") needs the input, and is not judged (invented test data)', () => {
