@@ -116,6 +116,16 @@ describe('texts that say no propellant in other words, or leave out the thrust (
     const cart = 'The cart gives a steady push of 0.9 N from a 200 W motor swinging two weights; nothing leaves the cart. Try it floating freely, no tether, and see if it accelerates.';
     expect(planned(cart).checks).toContainEqual(['photon-bound', 'breaks']);
   });
+  it('a list said not to be there counts whole; a tether the device is weighed on pushes nothing; an electrodynamic tether does', () => {
+    // 0.9 N from 1.1 kW: 0.9 / (1100 / c) ≈ 2.5 × 10⁵ times the photon bound.
+    const list = 'Our sealed drive gives 0.9 N of thrust from 1.1 kW. There is no exhaust, propeller or reaction mass: eccentric masses shuttle inside the housing.';
+    expect(planned(list).checks).toContainEqual(['photon-bound', 'breaks']);
+    const gauge = 'Trial note: 400 W from the cart\'s own batteries, and the force gauge on the tether read 12 N throughout. Nothing leaves the cart.';
+    expect(planned(gauge).checks).toContainEqual(['photon-bound', 'breaks']);
+    // A conducting tether pushes on the planet's magnetic field: no photon bound for it.
+    const tether = 'An electrodynamic tether drives 1.5 A along a 5 km tape and gives 0.2 N from 1 kW, with no propellant.';
+    expect(planned(tether).checks.map((c) => c[0])).not.toContain('photon-bound');
+  });
   it('a run in a chamber pumped to a low pressure is in vacuum; an agenda line or a list of artefacts to rule out names no propellant of the claim', () => {
     // 85 µN ≫ P/c = 15 W / c = 5.0e-8 N.
     const vac =

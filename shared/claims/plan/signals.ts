@@ -93,8 +93,17 @@ const AIR_PUSHER_ONE_RE = /(?<!\p{L})(?:ion(?:ic)?[- ]wind|corona(?: discharge)?
 const EXPLICIT_NO_PROPELLANT_RE =
   /(?<!\p{L})(?:(?:with |uses |needs |requires )?no propellant|without (?:any |the use of )?propellant|zero propellant|propellant-?free|propellantless|reactionless|no reaction mass|nothing (?:else )?(?:leaves|is expelled|is ejected|comes out|(?:is )?thrown out)|without (?:throwing|expelling|ejecting|blowing) (?:anything|anything at all|any mass|any propellant|any reaction mass)(?: out)?|throws? nothing (?:out|away|overboard)|(?:does|do|did) not (?:need|use|require|carry|expel) (?:any )?propellant|(?:needing |needs |requires |requiring |uses |using |with )?no working fluid|with nothing leaving(?: it)?|(?:no air|nothing) to push (?:on|against)|nothing leaving (?:it|the (?:device|craft|spacecraft|satellite|probe|vehicle|module|capacitor|box|drive|cavity|chamber))|(?:ours|our (?:drive|thruster|device|engine|prototype|stack|cavity))(?: (?:certainly|simply))? (?:doesn't|does not|doesn’t)(?= ?[:;.,!—–-]))(?!\p{L})/iu;
 /** A propulsion word said not to be there ("no tether", "without a fan"), or a mass inside the device pushed on ("on a brass reaction mass"). */
-const NEGATED_WORD_ALL_RE =
-  /(?<!\p{L})(?:(?:no|without(?: an?)?|never|nor)[^\S\n]+(?:(?:carry|carries|carrying|have|has|having|use|uses|using|need|needs|needing|require|requires)[^\S\n]+)?(?:(?:any|an?)[^\S\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?|water[- ]?jets?|paddles?|screws?|ablation|ablative loss|ion(?:ic)?[- ]wind|ionisation|ionization|corona(?: discharge)?|air ?flow)|(?:on|against|between|onto)[^\S\n]+(?:a|an|the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?reaction mass(?:es)?)(?!\p{L})/giu;
+const NEGATED_ITEM = '(?:(?:any|an?)[^\\S\\n]+)?(?:tethers?|fans?|propellers?|nozzles?|exhaust|fuel tanks?|water[- ]?jets?|paddles?|screws?|ablation|ablative loss|ion(?:ic)?[- ]wind|ionisation|ionization|corona(?: discharge)?|air ?flow|propellant|reaction mass)';
+// (A list said not to be there counts whole: "no exhaust, propeller or reaction mass".)
+const NEGATED_LIST_SEP = '(?:,[^\\S\\n]*(?:(?:or|nor)[^\\S\\n]+)?|[^\\S\\n]+(?:or|nor)[^\\S\\n]+)';
+const NEGATED_LIST_ALL_RE = new RegExp(
+  `(?<!\\p{L})(?:(?:expels?|ejects?|emits?|uses?|needs?|has|have|carr(?:y|ies))[^\\S\\n]+)?(?:no|without(?: an?)?|never|nor)[^\\S\\n]+${NEGATED_ITEM}(?:${NEGATED_LIST_SEP}${NEGATED_ITEM}){1,4}(?!\\p{L})`,
+  'giu',
+);
+const NEGATED_WORD_ALL_RE = new RegExp(
+  `(?<!\\p{L})(?:(?:no|without(?: an?)?|never|nor)[^\\S\\n]+(?:(?:carry|carries|carrying|have|has|having|use|uses|using|need|needs|needing|require|requires)[^\\S\\n]+)?${NEGATED_ITEM}|(?:on|against|between|onto)[^\\S\\n]+(?:a|an|the|its)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+)?reaction mass(?:es)?)(?!\\p{L})`,
+  'giu',
+);
 /** A propulsor said not to be there. */
 const PROPULSOR_DENIED_RE = /(?<!\p{L})(?:no|without(?: an?)?|nor)[^\S\n]+(?:any[^\S\n]+)?(?:propellers?|water[- ]?jets?|paddles?|screws?|rotors?|fans?)(?!\p{L})/iu;
 /** Craft whose word stands for their propulsor. */
@@ -186,7 +195,7 @@ export function readSignals(ctx: PlanContext): Signals {
   const classes = ctx.classes ?? [];
   const top = classes[0];
   // ("laser-ablation-free", "xenon-free": a word made free of is not there.)
-  let withoutFree = text.replace(PROPELLANT_FREE_ALL_RE, ' ').replace(NEGATED_PROPELLANT_ALL_RE, ' ').replace(NEGATED_WORD_ALL_RE, ' ').replace(/(?<![\p{L}-])[\p{L}-]+-free(?!\p{L})/giu, ' ');
+  let withoutFree = text.replace(NEGATED_LIST_ALL_RE, ' ').replace(PROPELLANT_FREE_ALL_RE, ' ').replace(NEGATED_PROPELLANT_ALL_RE, ' ').replace(NEGATED_WORD_ALL_RE, ' ').replace(/(?<![\p{L}-])[\p{L}-]+-free(?!\p{L})/giu, ' ');
   // A craft's word stands for its usual propulsor (a boat's screw, an aircraft's propeller): where the text
   // denies the propulsor and says plainly nothing is thrown out ("pushes a small boat … with no propeller
   // and no water jet"), the craft's word says nothing of propellant.

@@ -104,7 +104,10 @@ export const PROPELLANT_WORDS = [
   'plasma thruster', 'resistojet', 'arcjet', 'electrospray(?: thrusters?| propulsion)?', 'colloid thrusters?', 'ionic liquids?', 'FEEP', 'field[- ]emission (?:electric )?(?:propulsion|thrusters?)',
   '(?:emit(?:s|ting|ted)?|spray(?:s|ing|ed)?|eject(?:s|ing|ed)?|expel(?:s|ling|led)?) (?:charged |tiny |fine )?(?:droplets|ions|charged particles|particles|plasma)', 'pulsed plasma thrusters?', 'cold[- ]gas', 'monopropellant', 'bipropellant', 'solid motor', 'jet engine', 'turbofan', 'propeller',
   'fans?', 'air-breathing', 'solar sails?', 'ion[- ]wind', 'ionic wind', 'corona(?: discharge)?', 'electrohydrodynamic', 'EHD', 'ionocraft', 'ablation', 'ablative', '(?:pushed|driven|propelled|illuminated|accelerated) by (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:lasers?|beams?|sunlight|light)',
-  'ground(?:-based)? lasers?', 'laser-pushed', '(?:lasers?|beams?|light) (?:pointed|aimed|shone|shining|fired|directed) (?:at|on|onto) (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:mirrors?|sails?|reflectors?|craft|probes?|targets?)', '(?:light|beam) (?:bounces|is reflected|reflects) back(?! and forth)', '(?:twice|2 ?×? ?) ?P ?/ ?c', 'beamed (?:power|energy) from', 'tether',
+  'ground(?:-based)? lasers?', 'laser-pushed', '(?:lasers?|beams?|light) (?:pointed|aimed|shone|shining|fired|directed) (?:at|on|onto) (?:a |an |the )?(?:[\\w-]+ ){0,3}?(?:mirrors?|sails?|reflectors?|craft|probes?|targets?)', '(?:light|beam) (?:bounces|is reflected|reflects) back(?! and forth)', '(?:twice|2 ?×? ?) ?P ?/ ?c', 'beamed (?:power|energy) from',
+  // (A tether that pushes — an electrodynamic one — not one the device is held or weighed on: "the force gauge on
+  // the tether read 12 N", "hovers on its tethers".)
+  '(?<!(?:on|to|by|from|under) (?:its |a |an |the |their |his |her )?(?:[\\w-]+ )?)tethers?',
   // Things that push on air or water (lawfully far above P/c).
   '(?:drone|quadcopter|multicopter|multirotor) (?:motors?|propellers?|rotors?|arms?|props?)', '(?:drone|quadcopter|multicopter) makers? (?:advertis|claim|sell|quot|rate|list|say|state|promis|offer)\\w*', 'quadcopters?', 'multicopters?', 'multirotors?', 'helicopters?',
   '(?:agricultural|delivery|camera|racing|crop[- ]spraying|survey|photography|FPV|hobby|consumer|cargo|military|inspection) drones?', 'drone spec(?:ification)?s?',
