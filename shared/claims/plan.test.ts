@@ -126,6 +126,17 @@ describe('texts that say no propellant in other words, or leave out the thrust (
     const tether = 'An electrodynamic tether drives 1.5 A along a 5 km tape and gives 0.2 N from 1 kW, with no propellant.';
     expect(planned(tether).checks.map((c) => c[0])).not.toContain('photon-bound');
   });
+  it('an asymmetric capacitor said to push in vacuum ("held below 10⁻⁵ mbar", "in the vacuum chamber … still produced", "pumped to \'near vacuum\'") is held to the photon bound', () => {
+    // 22 µN/W × c ≈ 6.6 × 10³ times the photon bound.
+    const held = 'In the vacuum chamber, held below 1 × 10⁻⁵ mbar, the asymmetric capacitor stack, charged to 30 kV by a supply drawing 60 W, produced a sustained 22 µN per watt of input.';
+    expect(planned(held).checks).toContainEqual(['photon-bound', 'breaks']);
+    const still = 'In the vacuum chamber (10-5 mbar) the asymmetric capacitor still produced 1.1 mN at 80 W, showing that the force is not ion wind but a field effect.';
+    expect(planned(still).checks).toContainEqual(['photon-bound', 'breaks']);
+    const jar = "The same lifter, still at 30 kV and 0.4 mA, under a bell jar pumped to 'near vacuum': the student reports 50 mN of lift still there.";
+    expect(planned(jar).checks).toContainEqual(['photon-bound', 'breaks']);
+    // In open air it is an ion-wind device: no photon bound.
+    expect(planned('The asymmetric capacitor lifter produced 1.1 mN at 80 W in room air.').checks.map((c) => c[0])).not.toContain('photon-bound');
+  });
   it('a run in a chamber pumped to a low pressure is in vacuum; an agenda line or a list of artefacts to rule out names no propellant of the claim', () => {
     // 85 µN ≫ P/c = 15 W / c = 5.0e-8 N.
     const vac =
