@@ -1582,3 +1582,26 @@ test('an output with what went in said to be unknown ("without a charge", "we do
     expect(r.needs.map((n) => n.check)).toContain('first-law');
   }
 });
+
+describe('a current at a three-phase line voltage (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  it('said three-phase, the current and voltage give √3 × V × I (the most a power factor of 1 allows)', () => {
+    // √3 × 400 V × 10.6 A = 7,344 W (the three-phase power formula, P = √3 V_L I_L cos φ; textbook, from memory).
+    const f = extractFigures('Motor plate: 5.5 kW, 400 V 3~, 10.6 A.').find((x) => x.kind === 'power' && x.derived);
+    expect(f?.si).toBeCloseTo(Math.sqrt(3) * 400 * 10.6, 6);
+    expect(f?.derived).toMatch(/√3/u);
+    // Said single-phase, the plain product stands: 230 V × 7.2 A = 1,656 W.
+    expect(extractFigures('Pump motor, single phase: 7.2 A at 230 V.').find((x) => x.kind === 'power' && x.derived)?.si).toBeCloseTo(1656, 6);
+  });
+  it('an output above current × voltage at 400 V, phases unsaid, but within √3 of it is no claim of more out than in', () => {
+    // 2.2 kW > 4.8 A × 400 V = 1,920 W, but < √3 × 1,920 W = 3,326 W.
+    const r = run('Your 2.2 kW borehole pump motor has a full-load current of 4.8 A at 400 V.');
+    expect(r.checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
+    // Beyond √3 it still breaks: 6 kW out from 4.8 A × 400 V (6,000 / 3,326 = 1.8).
+    const beyond = run('Our generator head gives 6 kW out while its drive motor draws 4.8 A at 400 V.');
+    expect(beyond.checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+    // From a battery at 400 V the product is the power: 1.4 kW from 2.5 A × 400 V = 1 kW breaks.
+    const stack = run('At 400 volts on the battery (the current stays near 2.5 amperes) the discharge engine delivers 1.4 kW.');
+    expect(stack.checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+});

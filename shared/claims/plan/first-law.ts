@@ -186,6 +186,25 @@ function twoItems(text: string, inF: Figure, outF: Figure): boolean {
   return a !== null && b !== null && a !== b;
 }
 
+/** Line voltages of three-phase AC supplies (V). */
+const THREE_PHASE_LINE_VOLTS = [380, 400, 415, 440, 460, 480, 690];
+/** Words that settle a supply's phases or say it is direct current. */
+const PHASES_SAID_RE = /(?<!\p{L})(?:single[- ]phase|one[- ]phase|1[- ]phase|three[- ]phases?|3[- ]?phases?|[13][^\S\n]?~|DC|d\.c\.|direct[^\S\n]+current|batter(?:y|ies)|packs?|bus|rails?|(?:super)?capacitors?|cells?)(?!\p{L})/iu;
+/**
+ * An input worked out as current × voltage at a three-phase line voltage ("FLA of 4.8 A at 400 V"), with
+ * nothing said of the phases, that falls short of the output by no more than √3: a three-phase supply
+ * gives up to √3 × V × I, so the shortfall is no claim of more out than in.
+ */
+function phasesUnsaid(text: string, inF: Figure, outF: Figure): boolean {
+  const m = /^power = current × voltage \([^×]+× ([\d.]+) (k?)V\)/u.exec(inF.derived ?? '');
+  if (!m || PHASES_SAID_RE.test(text)) return false;
+  const v = parseFloat(m[1]) * (m[2] ? 1000 : 1);
+  if (!THREE_PHASE_LINE_VOLTS.some((x) => Math.abs(x - v) < 0.5)) return false;
+  if (inF.kind !== outF.kind) return false;
+  const most = inF.upper?.si ?? inF.si;
+  return outF.si > most && outF.si <= Math.sqrt(3) * most;
+}
+
 /** A machine's rating said at a figure: "a 9 kW motor", "the 750 W pump", "rated 1.1 kW", "motor: 3 kW". */
 const RATING_AT_RE = /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+)?(?:motors?|pumps?|drives?|engines?|compressors?|units?|hoists?|winch(?:es)?)(?!\p{L})/iu;
 const RATED_BEFORE_RE = /(?<!\p{L})(?:rated(?:[^\S\n]+(?:at|for))?|nameplate|plate[^\S\n]+says|(?:motor|pump|drive)[^\S\n]*[:=]?)[^\S\n]*$/iu;
@@ -249,7 +268,7 @@ function pulseOf(text: string, f: Figure, d: Figure): boolean {
  * the compressor fridge"): an electrical converter's ledger, whatever machine its output feeds.
  */
 function electricOnBothSides(inF: Figure | undefined, outF: Figure | undefined): boolean {
-  const vi = (f: Figure | undefined) => !!f?.derived?.startsWith('power = current × voltage');
+  const vi = (f: Figure | undefined) => !!f?.derived?.match(/^power = (?:√3 × )?current × voltage/);
   return vi(inF) && vi(outF);
 }
 
@@ -329,6 +348,15 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
       notes.push(`The input (“${inF.text}”) and the output (“${outF.text}”) are said of two different items the text names; no ledger of one device is drawn from them.`);
     } else if (productBesideRating(text, figures, inF, outF)) {
       needs.push(need('first-law', ['the power the machine draws at that working point, measured'], 'The input the text gives is a rating of the machine, not what it draws while giving the output worked out from its factors.', [inF, outF]));
+    } else if (phasesUnsaid(text, inF, outF)) {
+      needs.push(
+        need(
+          'first-law',
+          ['the power the machine draws, measured (or whether its supply is single- or three-phase, and the power factor)'],
+          `At ${/× ([\d.]+ k?V)\)/u.exec(inF.derived ?? '')?.[1] ?? 'that voltage'} a supply is most often three-phase, and then a current at that line voltage gives up to √3 times current × voltage.`,
+          [inF, outF],
+        ),
+      );
     } else if (auxIn) {
       needs.push(need('first-law', ['the power of the outside flow the plant converts (wind, sunlight, water, fuel)'], 'The input the text gives feeds only the plant’s own controls, fans or pumps, not what it converts.', [inF, outF]));
     } else if (storeRates) {

@@ -259,6 +259,10 @@ function sectionPowers(text: string, drafts: Draft[]): void {
   }
 }
 
+/** A supply said to be three-phase: "three-phase", "3-phase", "3~", "three phases", "3 × 16 A". */
+const THREE_PHASE_RE = /(?<!\p{L})(?:three[- ]phases?|3[- ]?phases?|3[^\S\n]?~|3[^\S\n]?[×x][^\S\n]?\d+(?:[.,]\d+)?[^\S\n]?A)(?!\p{L})/iu;
+const SINGLE_PHASE_RE = /(?<!\p{L})(?:single[- ]phase|one[- ]phase|1[- ]phase|1[^\S\n]?~)(?!\p{L})/iu;
+
 /** A load the device feeds, said just before the pair: "lights a string of mains lamps at", "runs a 40 W heater on". */
 const LOAD_LEAD_RE =
   /(?<!\p{L})(?:lights?|lit|lighting|powers|powered|powering|runs|ran|running|feeds|fed|feeding)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their|two|three|four|five|six|several|\d+)[^\S\n]+(?:[\p{L}'’-]+[^\S\n]+){0,4}?(?:lamps?|bulbs?|lights?|loads?|heaters?|resistors?|appliances?|LEDs?|fans?|kettles?)[^\S\n]+(?:at|on|with|of)[^\S\n]+(?:(?:a|an)[^\S\n]+)?(?:measured[^\S\n]+)?$/iu;
@@ -394,6 +398,11 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // converter" beside "an input of 10.5 A at 48 V").
     const pairSentence = sentenceAround(text, cur.start, cur.end);
     if (drafts.some((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= 0.01 * i * v && sentenceAround(text, d.start, d.end) === pairSentence)) continue;
+    // A three-phase supply ("400 V 3~, 10.6 A", "400 V three-phase, 19 A running current"): its line voltage
+    // and line current give at most √3 × V × I (the power factor is at most 1). Not where the text works
+    // out the power itself in that sentence ("≈ √3 × 400 × 28 × 0.86 = 16.7 kW").
+    const phases = THREE_PHASE_RE.test(pairSentence) && !SINGLE_PHASE_RE.test(pairSentence) && !/√[^\S\n]?3|(?<![\d.])1\.73|root[- ]?(?:of[^\S\n]+)?(?:3|three)|sqrt/iu.test(pairSentence);
+    const k = phases ? Math.sqrt(3) : 1;
     const iu = upperSiOf(cur);
     const vu = upperSiOf(volt);
     const first = cur.start < volt.start ? cur : volt;
@@ -439,11 +448,16 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       start: first.start,
       end: last.end,
       kind: 'power',
-      quantity: typedSi(i * v, 'W'),
-      upper: iu !== null || vu !== null ? typedSi((iu ?? i) * (vu ?? v), 'W') : undefined,
+      quantity: typedSi(k * i * v, 'W'),
+      upper: iu !== null || vu !== null ? typedSi(k * (iu ?? i) * (vu ?? v), 'W') : undefined,
       role: role === 'excess' ? 'out' : (role ?? 'in'),
-      derived: `power = current × voltage (${formatQuantity(i, 'A')} × ${formatQuantity(v, 'V')})`,
-      assumption: role === null ? 'The power of this current and voltage is read as the power supplied to the device.' : undefined,
+      derived: phases
+        ? `power = √3 × current × voltage, three-phase (√3 × ${formatQuantity(i, 'A')} × ${formatQuantity(v, 'V')})`
+        : `power = current × voltage (${formatQuantity(i, 'A')} × ${formatQuantity(v, 'V')})`,
+      assumption: [
+        role === null ? 'The power of this current and voltage is read as the power supplied to the device.' : '',
+        phases ? 'Three-phase: √3 × line voltage × line current is the most it can be (at a power factor of 1).' : '',
+      ].filter(Boolean).join(' ') || undefined,
     });
   }
 
@@ -594,7 +608,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   if (more) {
     const g = siOf(more);
     for (const kind of ['power', 'energy'] as const) {
-      const inputs = drafts.filter((d) => d.kind === kind && d.role === 'in' && (!d.derived || d.derived.startsWith('power = current × voltage')) && sameClause(text, d, more));
+      const inputs = drafts.filter((d) => d.kind === kind && d.role === 'in' && (!d.derived || /^power = (?:√3 × )?current × voltage/.test(d.derived)) && sameClause(text, d, more));
       if (g === null || g <= 1 || inputs.length !== 1 || drafts.some((d) => d.kind === kind && (d.role === 'out' || d.role === 'excess'))) continue;
       const input = inputs[0];
       const n = siOf(input);

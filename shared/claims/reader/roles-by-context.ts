@@ -189,7 +189,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     // "3–5 W of electricity from roughly 100 W of heat": the first came out of the second.
     // (Not a bias supply's volts times the current it passes: "at 25 V of reverse bias the photodiode passes
     // 0.77 mA from 2 mW of light" — that power goes in from the supply.)
-    const biasPower = !!a.derived?.startsWith('power = current × voltage') && /(?<!\p{L})bias(?:ed)?(?!\p{L})/iu.test(text.slice(a.start, a.end));
+    const biasPower = !!a.derived?.match(/^power = (?:√3 × )?current × voltage/) && /(?<!\p{L})bias(?:ed)?(?!\p{L})/iu.test(text.slice(a.start, a.end));
     if (!biasPower && /^[^\S\n]*(?:of[^\S\n]+[\p{L} -]{0,30}?)?[^\S\n]*from[^\S\n]+(?:(?:a|an|the|about|some|roughly|only|just|up to)[^\S\n]+)?$/iu.test(text.slice(a.end, b.start))) {
       a.role = 'out';
       b.role = 'in';
@@ -299,7 +299,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   }
   // "The 100 W bench supply powers a 12 V, 2 A load": a supply's rating is what it can give, not a flow of
   // the load it feeds, whose own power the text states (current × voltage).
-  const pairs = drafts.filter((d) => d.kind === 'power' && d.derived?.startsWith('power = current × voltage'));
+  const pairs = drafts.filter((d) => d.kind === 'power' && d.derived?.match(/^power = (?:√3 × )?current × voltage/));
   if (pairs.length > 0) {
     for (const d of drafts) {
       if (d.kind === 'power' && !d.derived && d.role !== 'aside' && SUPPLY_RATING_AFTER_RE.test(text.slice(d.end, d.end + 40))) d.role = 'aside';
