@@ -1605,3 +1605,26 @@ describe('a current at a three-phase line voltage (invented test data)', () => {
     expect(stack.checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
   });
 });
+
+describe("a store's size, a bracket's own figure, and several temperatures of one side (invented test data)", () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  it("a pack's size read as what it gave is set aside where the device's own powers are given", () => {
+    const text = 'The 1.2 kWh Li-ion pack is sized for one 45-minute firing per orbit. Thruster: 600 W discharge power, 38 mN.';
+    const f = extractFigures(text);
+    expect(f.find((x) => x.text === '1.2 kWh')?.role).not.toBe('out');
+    expect(run(text).checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
+  });
+  it('the words in a bracket that holds its own figure are not the figure before it', () => {
+    const f = extractFigures('Optical output 5.0 kW (draw from the pack about 12 kW).');
+    expect(f.map((x) => [x.text, x.role])).toEqual([
+      ['5.0 kW', 'out'],
+      ['12 kW', 'in'],
+    ]);
+  });
+  it('an engine with two cold temperatures is checked against the colder (most favourable to the claim)', () => {
+    // Carnot: 1 − 313.15 / 838.15 = 0.6264 (textbook); 0.41 / 0.6264 = 0.6546. Against the 290 °C tank it would be 0.41 / 0.3281 = 1.25.
+    const r = run('Hot tank 565 °C, cold tank 290 °C. The steam cycle, condensing at 40 °C, converts 41 % of the heat drawn from the salt into electricity.').checks.find((c) => c.check === 'carnot');
+    expect(r?.finding).toBe('consistent');
+    expect(r?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(0.41 / (1 - 313.15 / 838.15), 6);
+  });
+});

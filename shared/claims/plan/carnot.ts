@@ -254,9 +254,15 @@ export function planCarnot(b: Basis): HeatReading {
       ),
     );
   } else if ((engineEfficiency || copForCarnot) && temps.length >= 2) {
-    const hot = temps.find((t) => t.role === 'hot') ?? [...temps].sort((a, b) => b.si - a.si)[0];
-    const cold = temps.find((t) => t.role === 'cold' && t !== hot) ?? [...temps].filter((t) => t !== hot).sort((a, b) => a.si - b.si)[0];
+    // Of several temperatures said of one side, the one most favourable to the claim: for an engine the
+    // hottest source and the coldest sink ("cold tank 290 °C … condensing at 40 °C": 40 °C).
+    const engineSides = engineEfficiency && !copForCarnot;
+    const hots = temps.filter((t) => t.role === 'hot');
+    const colds = temps.filter((t) => t.role === 'cold');
+    const hot = (engineSides && hots.length > 1 ? [...hots].sort((a, b) => (b.upper?.si ?? b.si) - (a.upper?.si ?? a.si))[0] : hots[0]) ?? [...temps].sort((a, b) => b.si - a.si)[0];
+    const cold = (engineSides && colds.length > 1 ? [...colds].filter((t) => t !== hot).sort((a, b) => a.si - b.si)[0] : colds.find((t) => t !== hot)) ?? [...temps].filter((t) => t !== hot).sort((a, b) => a.si - b.si)[0];
     const extra: string[] = [];
+    if (engineSides && (hots.length > 1 || colds.length > 1)) extra.push(`Of the temperatures given for a side, the check takes the one most favourable to the claim: ${hot.display} hot, ${cold.display} cold.`);
     if (hot.role !== 'hot' || cold.role !== 'cold') extra.push(`The higher temperature (${hot.display}) is taken as the hot side and ${cold.display} as the cold side.`);
     const cooling = cop?.role === 'cooling' || (cop?.role === null && s.cooling && !s.heatPump);
     if (cop && cop.role === null) extra.push(cooling ? 'The COP is read as a cooling COP (heat drawn out over work in).' : 'The COP is read as a heating COP (heat delivered over work in); mark it as cooling if the machine is a refrigerator or chiller.');

@@ -655,7 +655,7 @@ export function asideControlPowers(text: string, drafts: Draft[]): void {
 
 /** A store's size said as such: "Battery is 58 kWh", "pack capacity: 75 kWh", "a 58 kWh battery". */
 const CAPACITY_BEFORE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|banks?)(?:['’]s)?[^\S\n]+(?:is|was|capacity(?:[^\S\n]+(?:is|of))?|size(?:[^\S\n]+(?:is|of))?|rated[^\S\n]+at)[^\S\n]*:?[^\S\n]*(?:(?:about|around|roughly|a|an)[^\S\n]+)?$/iu;
-const CAPACITY_AFTER_RE = /^[^\S\n]*(?:usable[^\S\n]+|nominal[^\S\n]+)?(?:(?:lithium|li-ion|lead-acid|traction|gel|home)[^\S\n]+)?(?:batter(?:y|ies)|packs?|capacity)(?!\p{L})/iu;
+const CAPACITY_AFTER_RE = /^[^\S\n]*(?:usable[^\S\n]+|nominal[^\S\n]+)?(?:(?:lithium(?:-ion)?|li-ion|LiFePO4|LFP|NMC|lead-acid|AGM|traction|gel|home|house|storage)[^\S\n]+)?(?:batter(?:y|ies)|packs?|capacity)(?!\p{L})/iu;
 
 /**
  * "car says 18.4 kWh used from the battery … Battery is 58 kWh, was at 80 %": where the text gives what was
@@ -663,6 +663,11 @@ const CAPACITY_AFTER_RE = /^[^\S\n]*(?:usable[^\S\n]+|nominal[^\S\n]+)?(?:(?:lit
  */
 export function asideStoreSize(text: string, drafts: Draft[]): void {
   const size = (d: Draft) => CAPACITY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)) || CAPACITY_AFTER_RE.test(text.slice(d.end, d.end + 30));
+  // "The 40 kWh traction pack ran the laser array for 20-minute shots", "the 1.2 kWh Li-ion pack is sized for
+  // one firing": a store's size read as what it gave is no output of the run either, where the text gives
+  // other powers or energies of the device.
+  const given = drafts.filter((d) => d.kind === 'energy' && d.role === 'out' && !d.derived && CAPACITY_AFTER_RE.test(text.slice(d.end, d.end + 30)));
+  if (given.length && drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'in' || d.role === 'out') && !given.includes(d))) for (const d of given) d.role = 'aside';
   const sizes = drafts.filter((d) => d.kind === 'energy' && d.role === 'in' && !d.derived && size(d));
   if (sizes.length === 0 || !drafts.some((d) => d.kind === 'energy' && d.role === 'in' && !d.derived && !sizes.includes(d))) return;
   for (const d of sizes) d.role = 'aside';

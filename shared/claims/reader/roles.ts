@@ -220,7 +220,9 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   }
   roles.after.lastIndex = end;
   // (Not past a table's column gap: the words there are the next cell's label.)
-  const a = /^(?:[^\S\n]{3,}|\t)[^\S\n]*\p{Lu}/u.test(text.slice(end, end + 40)) ? null : roles.after.exec(text);
+  // (Nor into a bracket that holds a figure of its own: "Optical output 5.0 kW (draw from the pack about 12 kW)"
+  // — its words are that figure's.)
+  const a = /^(?:[^\S\n]{3,}|\t)[^\S\n]*\p{Lu}/u.test(text.slice(end, end + 40)) || /^[^\S\n]*\([^()\n]*?\d/u.test(text.slice(end, end + 60)) ? null : roles.after.exec(text);
   if (a?.groups) {
     for (let i = 0; i < roles.groups.length; i++) {
       if (a.groups[`r${i}`] !== undefined) {
