@@ -1627,4 +1627,10 @@ describe("a store's size, a bracket's own figure, and several temperatures of on
     expect(r?.finding).toBe('consistent');
     expect(r?.outputs.find((o) => o.name === 'eta_ratio')?.si).toBeCloseTo(0.41 / (1 - 313.15 / 838.15), 6);
   });
+  it('"max." is no end of a sentence: an inverter\'s "max. efficiency" is no solar cell\'s', () => {
+    const text = 'Nameplate on my 5 kW hybrid inverter: 5000 W AC continuous, 6500 W max PV input, max. efficiency 97.6 %.';
+    expect(run(text).checks.map((c) => c.check)).not.toContain('light-converter-limits');
+    // A panel's own efficiency is still checked against the limits of light conversion.
+    expect(run('The PV module is rated at 400 W, with a max. efficiency of 21.3 % under one sun.').checks.map((c) => c.check)).toContain('light-converter-limits');
+  });
 });

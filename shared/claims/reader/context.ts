@@ -12,7 +12,7 @@ export const COOLING_MACHINE_RE = new RegExp(`(?<!\\p{L})(?:${alt(COOLING_MACHIN
 export const BEFORE_WINDOW = 80;
 // (A sheet's leader dots, four or more, end no sentence: "Power input .... between 2.9 and 3.2 kW".)
 // (Not the point of a title or a common abbreviation: "said Mr. Ferreira-Lund", "see Fig. 3", "vs. the old model".)
-const SENTENCE_BREAK_RE = /(?:(?<!\.{3})(?<!(?<![A-Za-z])(?:Mr|Mrs|Ms|Dr|Prof|St|Mt|No|vs|approx|ca|Fig|fig|Eq|eq|Ref|ref|Nr|nr|Inc|Ltd|Co|e\.g|i\.e))\.|[!?;])["”’')\]]*(?:\s|$)|\n/g;
+const SENTENCE_BREAK_RE = /(?:(?<!\.{3})(?<!(?<![A-Za-z])(?:Mr|Mrs|Ms|Dr|Prof|St|Mt|No|vs|approx|ca|Fig|fig|Eq|eq|Ref|ref|Nr|nr|Inc|Ltd|Co|e\.g|i\.e|max|min|nom|typ|avg|cont|est|resp))\.|[!?;])["”’')\]]*(?:\s|$)|\n/g;
 
 /** Start of the window of words before `at`: the previous figure, the sentence start or `at - max`. */
 export function windowStart(text: string, at: number, floor: number, max: number): number {
