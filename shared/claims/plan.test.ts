@@ -1634,3 +1634,30 @@ describe("a store's size, a bracket's own figure, and several temperatures of on
     expect(run('The PV module is rated at 400 W, with a max. efficiency of 21.3 % under one sun.').checks.map((c) => c.check)).toContain('light-converter-limits');
   });
 });
+
+describe("a store's sheet and a store said to run with nothing charging it (invented test data)", () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  it('"Charging …:" and "Discharge …:" label a store\'s two sides; "under charge:" in another label does not', () => {
+    const f = extractFigures('Charging from standstill: 2,04 kWh on the DC side. Discharge into the resistor bank down to standstill: 1,79 kWh.');
+    expect(f.map((x) => [x.text, x.role])).toEqual([
+      ['2,04 kWh', 'in'],
+      ['1,79 kWh', 'out'],
+    ]);
+    // 1.79 / 2.04 = 0.8775: consistent.
+    expect(run('Charge energy: 2.04 kWh. Discharge energy: 1.79 kWh.').checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
+    const charger = extractFigures('Input: 12 V DC, 0.4 A. Output to the battery under charge: 13.8 V at 2.1 A.');
+    expect(charger.find((x) => x.kind === 'power' && x.si > 20)?.role).not.toBe('in');
+  });
+  it("with nothing charging it, a store's size is all that went in", () => {
+    // 350 W × 72 h = 25.2 kWh out of a 5 kWh pack: 5.04 times.
+    const text = 'The pack is only 5 kWh, but over 72 hours it ran the base load, around 350 W, with the panels disconnected and no generator.';
+    const r = run(text).checks.find((c) => c.check === 'first-law');
+    expect(r?.finding).toBe('breaks');
+    expect(r?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo((350 * 72) / 5000, 6);
+    // The same pack over 12 hours: 4.2 kWh of 5 kWh, consistent.
+    expect(run('The pack is only 5 kWh, but over 12 hours it ran the base load, around 350 W, with the panels disconnected.').checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
+    // 12 V × 100 Ah = 1.2 kWh; 5 A × 12 V × 168 h = 10.08 kWh: 8.4 times.
+    const battery = run('Pair any 12 V 100 Ah battery with the board and run a 5 A load for 168 hours without plugging in.').checks.find((c) => c.check === 'first-law');
+    expect(battery?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(8.4, 6);
+  });
+});

@@ -14,7 +14,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, 
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor, SUPPLY_GIVES_LEAD_RE, TO_DEVICE_PART_AFTER_RE } from './roles';
-import { asideControlPowers, asideDenied, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext } from './roles-by-context';
+import { asideControlPowers, asideDenied, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
 
 /** The text says the input was not given: a claim of no input cannot be read from it. */
@@ -508,6 +508,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   asidePassedOn(text, drafts);
   asideLoadsOfSource(text, drafts);
   asideStoreSize(text, drafts);
+  storeAloneIsInput(text, drafts);
   asideQuotedLightSpeed(text, drafts);
   asideDenied(text, drafts);
   efficiencyQuotient(text, drafts);

@@ -654,7 +654,7 @@ export function asideControlPowers(text: string, drafts: Draft[]): void {
 }
 
 /** A store's size said as such: "Battery is 58 kWh", "pack capacity: 75 kWh", "a 58 kWh battery". */
-const CAPACITY_BEFORE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|banks?)(?:['’]s)?[^\S\n]+(?:is|was|capacity(?:[^\S\n]+(?:is|of))?|size(?:[^\S\n]+(?:is|of))?|rated[^\S\n]+at)[^\S\n]*:?[^\S\n]*(?:(?:about|around|roughly|a|an)[^\S\n]+)?$/iu;
+const CAPACITY_BEFORE_RE = /(?<!\p{L})(?:batter(?:y|ies)|packs?|banks?)(?:['’]s)?[^\S\n]+(?:is|was|capacity(?:[^\S\n]+(?:is|of))?|size(?:[^\S\n]+(?:is|of))?|rated[^\S\n]+at)[^\S\n]*:?[^\S\n]*(?:(?:about|around|roughly|only|just|a|an)[^\S\n]+)?$/iu;
 const CAPACITY_AFTER_RE = /^[^\S\n]*(?:usable[^\S\n]+|nominal[^\S\n]+)?(?:(?:lithium(?:-ion)?|li-ion|LiFePO4|LFP|NMC|lead-acid|AGM|traction|gel|home|house|storage)[^\S\n]+)?(?:batter(?:y|ies)|packs?|capacity)(?!\p{L})/iu;
 
 /**
@@ -691,3 +691,31 @@ export function asideLoadsOfSource(text: string, drafts: Draft[]): void {
   for (const d of drafts) if ((d.kind === 'power' || d.kind === 'energy') && d.role === 'in' && !d.derived && before(d, LOADS_USE_BEFORE_RE)) d.role = 'aside';
 }
 
+
+/**
+ * The text says nothing charged the store while it ran its load: "without plugging in", "with the panels
+ * disconnected … and no generator", "never charge again".
+ */
+const NOTHING_CHARGED_RE =
+  /(?<!\p{L})(?:(?:without|with[^\S\n]+no|no)[^\S\n]+(?:(?:any|a)[^\S\n]+)?(?:plugging[^\S\n]+(?:it[^\S\n]+)?in|charging|re-?charging|charger|recharge|generator|mains|grid[^\S\n]+connection)|(?:panels?|PV|array|charger|generator|mains|grid)[^\S\n]+(?:(?:were|was|being|stayed|kept|left)[^\S\n]+)?(?:disconnected|unplugged|switched[^\S\n]+off|turned[^\S\n]+off|covered)|never[^\S\n]+(?:needs?[^\S\n]+(?:to[^\S\n]+be[^\S\n]+)?)?(?:charg\w*|plug\w*[^\S\n]+in)(?:[^\S\n]+again)?)(?!\p{L})/iu;
+/** An energy worked out from a store's charge and voltage ("12 V 100 Ah"). */
+const STORE_CHARGE_DERIVED_RE = /^energy = charge × voltage/u;
+
+/**
+ * "The pack is only 5 kWh, but over 72 hours it ran the base load … with the panels disconnected and no
+ * generator": where the text says nothing charged the store while it gave out an energy, the store's size
+ * is all that went in.
+ */
+export function storeAloneIsInput(text: string, drafts: Draft[]): void {
+  if (!NOTHING_CHARGED_RE.test(text)) return;
+  if (drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'in')) return;
+  if (!drafts.some((d) => (d.kind === 'energy' || d.kind === 'power') && d.role === 'out')) return;
+  const isSize = (d: Draft) =>
+    d.kind === 'energy' &&
+    (d.role === null || d.role === 'aside') &&
+    (d.derived ? STORE_CHARGE_DERIVED_RE.test(d.derived) : CAPACITY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)) || CAPACITY_AFTER_RE.test(text.slice(d.end, d.end + 30)));
+  const sizes = drafts.filter(isSize);
+  if (sizes.length !== 1) return;
+  sizes[0].role = 'in';
+  sizes[0].assumption = 'The text says nothing charged the store while it ran: its stored energy is read as all that went in.';
+}

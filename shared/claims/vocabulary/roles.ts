@@ -25,6 +25,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'in',
     before: [
+      // A store's sheet labels its sides: "Charging from standstill: 2.04 kWh", "Charge energy = 15 kWh".
+      '(?<=(?:^|\\n|[.;|•]) *)(?:re)?charg(?:e|ing)(?: (?:energy|input|side|in))?(?: [\\w-]+){0,8}?[^\\S\\n]*[:=](?=[^\\S\\n]*$)',
       '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line)(?: (?:that|which))? (?:supplying|supplies|supplied|providing|provides|delivering|delivers|gave up|gives up|feeding|feeds|fed|powering|powers|driving|drives|shows|showed|reads|read)',
       '(?:bench |lab |laboratory |power |mains )?(?:supply|mains|grid|socket|outlet) (?:provided|delivered|gave|powered|drove)',
       'meter (?:read|reads|recorded|records|showed|shows|measured|logged)', '(?:panel|input|source|PV|primary|supply|generator) side', 'primary',
@@ -87,6 +89,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'out',
     before: [
+      // "Discharge into the resistor bank down to standstill: 1.79 kWh", "Discharge energy: 13.2 kWh".
+      '(?<=(?:^|\\n|[.;|•]) *)discharg(?:e|ing)(?: (?:energy|output|side|out))?(?: [\\w-]+){0,8}?[^\\S\\n]*[:=](?=[^\\S\\n]*$)',
       // "Pedalling at 150 W for an hour charged the battery with 0.12 kWh": what a device charges a store with is what it gives.
       '(?:re)?charg(?:ed|es|ing) (?:the|its|a|an) (?:[\\w-]+ )?(?:battery|batteries|pack|bank|cells?|store|phone|capacitors?|supercaps?)(?: (?:with|to|by))?(?: (?:about|some|roughly|around|nearly|only|just))?',
       // "charge it with 15 kWh and you draw 13.5 kWh": what the user draws from a store is what it gives.
