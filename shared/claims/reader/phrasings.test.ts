@@ -2061,6 +2061,22 @@ describe('a loop said to feed itself: what goes back in and what is spare (inven
     expect(fl?.finding).toBe('breaks');
     expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(3 / 2.2, 6);
   });
+  test('a motor said to be fed from the machine\'s own output takes what goes in; the generator it turns gives what comes out', () => {
+    // 4 kW (lower end of 4–6 kW) out of the 1 kW motor: 4 times.
+    const turned = firstLaw('A 1 kW induction motor turns our patented alternator, which delivers between 4 and 6 kW of 230 V power continuously, with the motor fed from the output.');
+    expect(turned?.finding).toBe('breaks');
+    expect(turned?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(4, 6);
+    // 12 kW alternator over a 10 HP motor (10 × 745.7 W, NIST SP 811): 1.609.
+    const genset = firstLaw('10 HP electric motor on a common bedplate, belted to a 12 kW alternator head. Once it is running the motor is fed from the alternator and you keep 4.5 kW to spare.');
+    expect(genset?.finding).toBe('breaks');
+    expect(genset?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(12000 / (10 * 745.69987158227), 4);
+    // "Feed it … take out …": the reader's imperatives name the sides.
+    const f = extractFigures('The claim on the box: "Feed it 5 V at 2 A, take out 12 V at 3 A."').filter((x) => x.kind === 'power');
+    expect(f.map((x) => [x.si, x.role])).toEqual([
+      [10, 'in'],
+      [36, 'out'],
+    ]);
+  });
   test("'spare' and 'goes back to the battery' in texts that claim no loop keep their plain sense", () => {
     for (const text of [
       'Under braking the motor works as a generator: of the 60 kW of braking power, 20 kW goes back to the battery.',

@@ -297,7 +297,11 @@ const CLOSED_BOX_RE =
 
 /** A loop said to feed itself: "closed the loop", "turns its own motor", "pulled the mains plug", "self-running". */
 const LOOP_CLAIM_RE =
-  /(?<!\p{L})(?:closed[^\S\n]+the[^\S\n]+loop|(?:turns|drives|runs|powers|keeps)[^\S\n]+its[^\S\n]+own[^\S\n]+(?:motor|drive|input)|pull(?:ed|s|ing)?[^\S\n]+(?:out[^\S\n]+)?the[^\S\n]+(?:mains[^\S\n]+)?(?:plug|starter(?:[^\S\n]+cord)?|cord|battery)(?:[^\S\n]+out)?|runs?[^\S\n]+(?:on|off)[^\S\n]+its[^\S\n]+own[^\S\n]+output|self-?(?:running|looped|looping|sustaining|powered))(?!\p{L})/iu;
+  /(?<!\p{L})(?:closed[^\S\n]+the[^\S\n]+loop|(?:turns|drives|runs|powers|keeps)[^\S\n]+its[^\S\n]+own[^\S\n]+(?:motor|drive|input)|pull(?:ed|s|ing)?[^\S\n]+(?:out[^\S\n]+)?the[^\S\n]+(?:mains[^\S\n]+)?(?:plug|starter(?:[^\S\n]+cord)?|cord|battery)(?:[^\S\n]+out)?|runs?[^\S\n]+(?:on|off)[^\S\n]+its[^\S\n]+own[^\S\n]+output|self-?(?:running|looped|looping|sustaining|powered)|(?:motor|drive)[^.;!?\n]{0,40}?(?<!\p{L})fed[^\S\n]+(?:back[^\S\n]+)?from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|our[^\S\n]+)?(?:[\p{L}\p{N}-]+['’]s[^\S\n]+)?(?:own[^\S\n]+)?(?:output|alternator|generator|dynamo)|feed[^\S\n]+the[^\S\n]+(?:alternator|generator|output)[^\S\n]+back[^\S\n]+(?:in)?to[^\S\n]+the[^\S\n]+motor)(?!\p{L})/iu;
+/** A rating said before a motor's name ("1 kW induction motor", "10 HP electric motor", "4 kW drive motor"). */
+const MOTOR_AFTER_RE = /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,2}?(?:motors?)(?!\p{L})/iu;
+/** A rating said before a generator's name ("12 kW alternator head", "a 3 kW generator"). */
+const GENERATOR_AFTER_RE = /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,2}?(?:alternators?|generators?|dynamos?)(?!\p{L})/iu;
 
 /**
  * "2.2 kW of that goes back to the VFD, so I'm seeing roughly 0.8 to 1.8 kW spare", "keeps the 5 hp motor
@@ -312,6 +316,10 @@ function loopParts(text: string, drafts: Draft[]): void {
     const before = text.slice(Math.max(0, d.start - 40), d.start);
     if (/^[^\S\n]*(?:of[^\S\n]+(?:that|it|this)[^\S\n]+)?(?:goes|is[^\S\n]+fed|is[^\S\n]+sent|is[^\S\n]+returned|returns?|feeds?)[^\S\n]+back[^\S\n]+(?:in)?to[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:VFD|motor|drive|input|controller|inverter)(?!\p{L})/iu.test(after)) d.role = 'in';
     else if (/^[^\S\n]*(?:(?:to[^\S\n]+)?spare|left[^\S\n]+over|surplus)(?!\p{L})/iu.test(after) || /(?<!\p{L})(?:left[^\S\n]+over|to[^\S\n]+spare|spare)[^\S\n]+(?:for[^\S\n]+)?(?:(?:a|an|the|our|my)[^\S\n]+)?$/iu.test(before)) d.role = 'excess';
+    // (The machine that turns the generator takes what the loop feeds back; the generator gives the
+    // output: "A 1 kW induction motor turns our alternator … with the motor fed from the output".)
+    else if (MOTOR_AFTER_RE.test(after)) d.role = 'in';
+    else if (GENERATOR_AFTER_RE.test(after) || /(?<!\p{L})nameplate[^\S\n]*:?[^\S\n]*$/iu.test(before)) d.role = 'out';
   }
 }
 

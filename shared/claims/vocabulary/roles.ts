@@ -25,6 +25,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'in',
     before: [
+      // "Feed it 5 V at 2 A": what a reader is told to give the device.
+      '(?<![\\w-])(?:feed|give|supply) (?:it|them|the (?:unit|device|box|board|module|converter|circuit))(?: with)?',
       // A store's sheet labels its sides: "Charging from standstill: 2.04 kWh", "Charge energy = 15 kWh".
       '(?<=(?:^|\\n|[.;|•]) *)(?:re)?charg(?:e|ing)(?: (?:energy|input|side|in))?(?: [\\w-]+){0,8}?[^\\S\\n]*[:=](?=[^\\S\\n]*$)',
       '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line)(?: (?:that|which))? (?:supplying|supplies|supplied|providing|provides|delivering|delivers|gave up|gives up|feeding|feeds|fed|powering|powers|driving|drives|shows|showed|reads|read)',
@@ -89,6 +91,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'out',
     before: [
+      // "… take out 12 V at 3 A", "you get back 1.3 kWh": what a reader is told to take from the device.
+      '(?<![\\w-])(?:take|get|pull)s? (?:out|back)(?: of it)?',
       // "Discharge into the resistor bank down to standstill: 1.79 kWh", "Discharge energy: 13.2 kWh".
       '(?<=(?:^|\\n|[.;|•]) *)discharg(?:e|ing)(?: (?:energy|output|side|out))?(?: [\\w-]+){0,8}?[^\\S\\n]*[:=](?=[^\\S\\n]*$)',
       // "Pedalling at 150 W for an hour charged the battery with 0.12 kWh": what a device charges a store with is what it gives.
