@@ -1661,3 +1661,19 @@ describe("a store's sheet and a store said to run with nothing charging it (inve
     expect(battery?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(8.4, 6);
   });
 });
+
+describe('an appliance plugged into a store, and what a device pushes out (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  it('"Plug in your 900 W heater … without ever going back on the mains": the heater is the load and the battery all that went in', () => {
+    // 900 W × 8 h = 7.2 kWh from a 1.2 kWh battery: 6 times.
+    const r = run('NightPack: a 1.2 kWh battery with a built-in alternator. Plug in your 900 W heater and it runs 8 hours every night without ever going back on the mains.').checks.find((c) => c.check === 'first-law');
+    expect(r?.finding).toBe('breaks');
+    expect(r?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(6, 6);
+  });
+  it('"pushes 150 W into your appliances" is given out; a battery that pushes a current gives the device its input', () => {
+    expect(extractFigures('Once primed, it draws only 2 A at 12 V from its starter battery and pushes 150 W of clean AC into your appliances.').find((x) => x.text === '150 W')?.role).toBe('out');
+    // 1.2 kW at the wheel of 48 V × 30 A = 1,440 W: 0.83, consistent.
+    const bike = run('Its 48 V battery can push up to 30 A into the hub motor on steep climbs, and the motor turns about 1.2 kW of that into work at the wheel.');
+    expect(bike.checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
+  });
+});

@@ -697,7 +697,7 @@ export function asideLoadsOfSource(text: string, drafts: Draft[]): void {
  * disconnected … and no generator", "never charge again".
  */
 const NOTHING_CHARGED_RE =
-  /(?<!\p{L})(?:(?:without|with[^\S\n]+no|no)[^\S\n]+(?:(?:any|a)[^\S\n]+)?(?:plugging[^\S\n]+(?:it[^\S\n]+)?in|charging|re-?charging|charger|recharge|generator|mains|grid[^\S\n]+connection)|(?:panels?|PV|array|charger|generator|mains|grid)[^\S\n]+(?:(?:were|was|being|stayed|kept|left)[^\S\n]+)?(?:disconnected|unplugged|switched[^\S\n]+off|turned[^\S\n]+off|covered)|never[^\S\n]+(?:needs?[^\S\n]+(?:to[^\S\n]+be[^\S\n]+)?)?(?:charg\w*|plug\w*[^\S\n]+in)(?:[^\S\n]+again)?)(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:without|with[^\S\n]+no|no)[^\S\n]+(?:(?:any|a)[^\S\n]+)?(?:plugging[^\S\n]+(?:it[^\S\n]+)?in|charging|re-?charging|charger|recharge|generator|mains|grid[^\S\n]+connection|ever[^\S\n]+(?:going[^\S\n]+back[^\S\n]+on|touching)[^\S\n]+the[^\S\n]+(?:mains|grid))|(?:panels?|PV|array|charger|generator|mains|grid)[^\S\n]+(?:(?:were|was|being|stayed|kept|left)[^\S\n]+)?(?:disconnected|unplugged|switched[^\S\n]+off|turned[^\S\n]+off|covered)|never[^\S\n]+(?:needs?[^\S\n]+(?:to[^\S\n]+be[^\S\n]+)?)?(?:charg\w*|plug\w*[^\S\n]+in)(?:[^\S\n]+again)?)(?!\p{L})/iu;
 /** An energy worked out from a store's charge and voltage ("12 V 100 Ah"). */
 const STORE_CHARGE_DERIVED_RE = /^energy = charge × voltage/u;
 

@@ -70,6 +70,10 @@ const PRECISION_LEAD_RE = /(?<!\p{L})(?:to within|within ±?|accurate to|accurac
 const LOAD_AFTER_RE = /^[^\S\n]*[(,]?[^\S\n]*(?:(?:continuous|steady|constant|resistive|dummy|test|base)[^\S\n]+)?loads?(?!\p{L})/iu;
 /** Earlier in the sentence: a verb saying the device carried or ran something. */
 const LOAD_CARRIED_RE = /(?<!\p{L})(?:carried|carries|carrying|ran|runs|running|powered|powers|powering|supplied|supplies|supplying|fed|feeds|feeding|kept|keeps|held|holds|backed up|backs up|sustained|sustains)(?!\p{L})[^.;!?\n]*$/iu;
+/** Right before an appliance's rating: "Plug in your", "connect any", "hook up a". */
+const PLUG_IN_LEAD_RE = /(?<!\p{L})(?:plug|plugs|plugged|connect|connects|connected|hook|hooks|hooked)[^\S\n]+(?:(?:in|up)[^\S\n]+)?(?:your|a|an|any|the|our|my)[^\S\n]+$/iu;
+/** An appliance named right after its rating. */
+const APPLIANCE_AFTER_RE = /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+)?(?:heaters?|kettles?|lamps?|lights?|fridges?|freezers?|TVs?|televisions?|appliances?|tools?|drills?|saws?|hair[^\S\n]?dryers?|microwaves?|fans?|pumps?|laptops?|loads?)(?!\p{L})/iu;
 /** Earlier in the clause: a recharge said to take what follows. */
 const RECHARGE_TOOK_RE = /(?<!\p{L})(?:recharg\w*|charging it (?:again|back)|refill\w*)(?!\p{L})[^.;!?\n]{0,60}(?<!\p{L})(?:took|takes|needed|needs|used|uses|drew|draws|required|requires|cost|costs|consumed|consumes)(?!\p{L})[^.;!?\n]{0,40}$/iu;
 /** Just before a temperature a machine delivers: "to deliver", "supplies", "provides water at". */
@@ -206,6 +210,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       // "then carried the telemetry cabinet, a steady 600 W load, for 7 hours": the load a store or a
       // supply carried, named as such right after the figure.
       if (LOAD_AFTER_RE.test(text.slice(end, end + 30)) && LOAD_CARRIED_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'out';
+      // "Plug in your 900 W heater and it runs 8 hours": an appliance the reader plugs into the device is its load.
+      if (PLUG_IN_LEAD_RE.test(text.slice(Math.max(floor, start - 40), start)) && APPLIANCE_AFTER_RE.test(text.slice(end, end + 30))) return 'out';
       // "Recharging from the mains afterwards took 5 hours 40 minutes and 5.6 kWh": what a recharge took is the input.
       if (RECHARGE_TOOK_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'in';
       // "the engine gave the dynamo about two kilowatts of shaft power": what a generator is given is its input;

@@ -93,6 +93,9 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     before: [
       // "… take out 12 V at 3 A", "you get back 1.3 kWh": what a reader is told to take from the device.
       '(?<![\\w-])(?:take|get|pull)s? (?:out|back)(?: of it)?',
+      // "pushes 150 W of clean AC into your appliances".
+      // (Not a supply's: "its 48 V battery can push up to 30 A into the hub motor".)
+      '(?<!(?:batter(?:y|ies)|suppl(?:y|ies)|mains|grid|packs?|sources?|cells?|chargers?) (?:can |could |will |would |may )?)push(?:es|ed|ing)?(?: out)?(?= *(?:about |some |roughly |up to )?$)',
       // "Discharge into the resistor bank down to standstill: 1.79 kWh", "Discharge energy: 13.2 kWh".
       '(?<=(?:^|\\n|[.;|•]) *)discharg(?:e|ing)(?: (?:energy|output|side|out))?(?: [\\w-]+){0,8}?[^\\S\\n]*[:=](?=[^\\S\\n]*$)',
       // "Pedalling at 150 W for an hour charged the battery with 0.12 kWh": what a device charges a store with is what it gives.
