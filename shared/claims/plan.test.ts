@@ -1677,3 +1677,20 @@ describe('an appliance plugged into a store, and what a device pushes out (inven
     expect(bike.checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
   });
 });
+
+describe('a COP that "measures", a wet mass below the dry, "more than you put in" (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  it('"the unit\'s COP measures 1.9" is a COP', () => {
+    expect(extractFigures("With the condenser at 32 °C, the refrigeration unit's COP measures 1.9.").find((x) => x.kind === 'cop')?.si).toBe(1.9);
+  });
+  it('a mass read as wet but below the dry mass is the propellant loaded', () => {
+    // Tsiolkovsky: 1600 m/s × ln(80 / 62) = 407.8 m/s ≥ 350 m/s claimed: consistent.
+    const r = run('Hydrogen-peroxide monopropellant, 18 kg loaded, spacecraft dry mass 62 kg. Exhaust velocity 1.6 km/s. Δv available: up to 350 m/s.').checks.find((c) => c.check === 'rocket-equation');
+    expect(r?.finding).toBe('consistent');
+    expect(r?.outputs.find((o) => o.name === 'dv_ratio')?.si).toBeCloseTo(350 / (1600 * Math.log(80 / 62)), 6);
+  });
+  it('"gives you back more than you put in" with only an output needs the input', () => {
+    const r = run('The flywheel UPS gives you back more than you put in: a full-speed rotor delivers 3.6 MJ to your critical load.');
+    expect(r.needs.map((n) => n.check)).toContain('first-law');
+  });
+});

@@ -323,6 +323,18 @@ function loopParts(text: string, drafts: Draft[]): void {
   }
 }
 
+/**
+ * "Hydrogen peroxide, 18 kg loaded, spacecraft dry mass 62 kg": a mass read as the craft's wet mass that is
+ * less than its dry mass cannot be the whole craft — it is the propellant loaded.
+ */
+function wetBelowDry(drafts: Draft[]): void {
+  const wet = drafts.filter((d) => d.kind === 'mass' && d.role === 'wet');
+  const dry = drafts.filter((d) => d.kind === 'mass' && d.role === 'dry');
+  if (wet.length !== 1 || dry.length !== 1 || drafts.some((d) => d.kind === 'mass' && d.role === 'propellant')) return;
+  const [w, dr] = [siOf(wet[0]), siOf(dry[0])];
+  if (w !== null && dr !== null && w < dr) wet[0].role = 'propellant';
+}
+
 export function relateFigures(text: string, drafts: Draft[]): void {
   loopParts(text, drafts);
   inputForEvery(text, drafts);
@@ -517,6 +529,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   asideLoadsOfSource(text, drafts);
   asideStoreSize(text, drafts);
   storeAloneIsInput(text, drafts);
+  wetBelowDry(drafts);
   asideQuotedLightSpeed(text, drafts);
   asideDenied(text, drafts);
   efficiencyQuotient(text, drafts);

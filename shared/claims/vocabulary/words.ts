@@ -197,7 +197,7 @@ export const EFFICIENCY_CHANGE_WORDS = ['(?<!(?:divided|multiplied)[^\\S\\n]+)by
 
 /** Words allowed between "efficiency"/"COP" and a bare number ("an efficiency of 0.62", "COP = 4"). */
 export const BARE_CONNECTORS = [
-  'of', 'is', 'was', 'were', 'be', 'between', 'from', 'ranging from', 'ranges? from', 'lies', 'lay', 'sits', 'stands', 'varies', 'comes? (?:in |out )?(?:at|to)', 'turns? out (?:at|to)', 'ends? up (?:at|as)',
+  'of', 'is', 'was', 'were', 'be', 'between', 'from', 'ranging from', 'ranges? from', 'lies', 'lay', 'sits', 'stands', 'varies', 'measures', 'measured', 'reads', 'read', 'shows', 'showed', 'comes? (?:in |out )?(?:at|to)', 'turns? out (?:at|to)', 'ends? up (?:at|as)',
   'came (?:in |out )?(?:at|to)', 'came out', 'comes out', 'turned out (?:at|to)', 'works? out (?:at|to)', 'measured at', 'rated at', 'runs at', 'ran at', 'reached', 'in the range', 'range', 'reaching', 'ca\\.?', 'approx\\.?', 'c\\.', '~', '≈', 'reached', 'reaches', 'near', 'about', 'around', 'approximately', 'roughly',
   'up to', 'above', 'over', 'exceeding', 'as high as', 'at least', 'no less than', 'not less than', 'more than', 'equal to', 'rated', 'value', 'measured', 'a', 'an', 'the', 'somewhere', 'anywhere', 'of the order of', 'on the order of',
   // "the COP falls to 2.2 at −10 °C", "efficiency rises to 41 %": a value said through its change.
