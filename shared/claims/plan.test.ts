@@ -1694,3 +1694,23 @@ describe('a COP that "measures", a wet mass below the dry, "more than you put in
     expect(r.needs.map((n) => n.check)).toContain('first-law');
   });
 });
+
+describe('spoken claims: a loop asked about, what a tank holds, a fridge run as a load (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  const firstLaw = (text: string) => run(text).checks.find((c) => c.check === 'first-law');
+  it('a loop someone asked about is no claim of running on nothing', () => {
+    const text = "Output on the genny side he reckons one point eight kilowatts. He asked whether we could loop the output back to the motor and drop the mains; told him no, and why.";
+    expect(firstLaw(text)?.finding).not.toBe('breaks');
+  });
+  it('what a tank holds goes in; what reaches the wheels comes out', () => {
+    // 7 kW × 80 min = 9.33 kWh of 12 kWh: 0.778, consistent.
+    const r = firstLaw('GUEST: The tank holds the equivalent of, say, twelve kilowatt-hours. On the test loop I did eighty minutes at an average of seven kilowatts to the wheels, and then it was empty.');
+    expect(r?.finding).toBe('consistent');
+    expect(r?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo((7 * 80) / 60 / 12, 6);
+  });
+  it('a fridge the battery runs is its load, not a heat mover whose ledger is its Carnot COP', () => {
+    // 150 W × 12 h = 1.8 kWh of 2 kWh: 0.9.
+    const r = firstLaw('The lithium battery holds two kilowatt-hours. Overnight it runs the compressor fridge, which pulls about a hundred and fifty watts, and it ran for twelve hours.');
+    expect(r?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.9, 6);
+  });
+});

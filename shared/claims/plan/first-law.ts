@@ -267,6 +267,12 @@ function pulseOf(text: string, f: Figure, d: Figure): boolean {
  * Volts and amps on both sides ("takes 12 volts at 8 amps … turns it into 48 volts at up to 1.9 amps for
  * the compressor fridge"): an electrical converter's ledger, whatever machine its output feeds.
  */
+/** "Overnight it runs the compressor fridge, which pulls about 150 W": the machine that moves heat is a load the device runs. */
+function heatMoverIsLoad(text: string, out: Figure | undefined): boolean {
+  if (!out || out.start === null || out.end === null) return false;
+  return /(?<!\p{L})(?:runs?|ran|running|powers?|powered|powering|drives?|drove|keeps?|kept)[^\S\n]+(?:the|a|an|our|my|its|your)[^\S\n]+(?:[\p{L}-]+,?[^\S\n]+){0,3}?(?:fridges?|freezers?|refrigerators?|air[- ]conditioners?|heat[- ]pumps?|chillers?|coolers?)(?!\p{L})/iu.test(sentenceAround(text, out.start, out.end));
+}
+
 function electricOnBothSides(inF: Figure | undefined, outF: Figure | undefined): boolean {
   const vi = (f: Figure | undefined) => !!f?.derived?.match(/^power = (?:√3 × )?current × voltage/);
   return vi(inF) && vi(outF);
@@ -297,7 +303,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
         [(eIn ?? pIn)!, (eOut ?? pOut)!],
       ),
     );
-  } else if (movesHeat && (eIn || pIn) && (eOut || pOut) && !sourceHeatIn && !electricOnBothSides(eIn ?? pIn, eOut ?? pOut)) {
+  } else if (movesHeat && (eIn || pIn) && (eOut || pOut) && !sourceHeatIn && !electricOnBothSides(eIn ?? pIn, eOut ?? pOut) && !heatMoverIsLoad(text, pOut ?? eOut)) {
     notes.push('A heat pump or refrigerator moves heat rather than making it: the heat it delivers may exceed the work it takes without breaking any law. Its bound is the Carnot COP of the temperatures it works between.');
   } else if (heatEngineElectricIn(b, eIn ?? pIn)) {
     notes.push("A heat engine's input is the heat it takes in: the electrical power the text gives beside its output is a load's or a part's, not what the engine converts. Its bound is the Carnot efficiency between its two sides.");

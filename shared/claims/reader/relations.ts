@@ -679,7 +679,9 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       !/\?/.test(text.slice(x.index, x.index + 200).split(/(?<=[.!?])\s|\n/u)[0]) &&
       // (Nor for one purpose only: "needs no battery for start-up", "no fuel to start it".)
       !/^[^\S\n]+(?:for|to)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:start(?:-?up|ing)?|ignition|cold[- ]start|standby|back-?up|the controller|its controller|memory|the clock)(?!\p{L})/iu.test(text.slice(x.index + x[0].length, x.index + x[0].length + 40)) &&
-      !/(?<!\p{L})(?:not|never|no|isn't|isn’t|wasn't|wasn’t|nor|almost|nearly|close to|next to)[^\S\n]+(?:(?:a|an|the|really|quite|truly)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, x.index - 25), x.index));
+      !/(?<!\p{L})(?:not|never|no|isn't|isn’t|wasn't|wasn’t|nor|almost|nearly|close to|next to)[^\S\n]+(?:(?:a|an|the|really|quite|truly)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, x.index - 25), x.index)) &&
+      // (Nor asked about: "He asked whether we could loop the output back to the motor — told him no".)
+      !/(?<!\p{L})(?:asked[^\S\n]+(?:whether|if)|whether[^\S\n]+(?:we|I|they|he|she|you|it)[^\S\n]+(?:could|can|might|would)|if[^\S\n]+(?:we|I|they|you)[^\S\n]+could|could[^\S\n]+(?:we|I|they|you)|can[^\S\n]+(?:we|I|they|you))(?!\p{L})[^.;!?\n]{0,40}$/iu.test(text.slice(Math.max(0, x.index - 80), x.index));
     const matches = [...text.matchAll(SELF_RUNNING_RE)].filter(said);
     // A label alone ("free energy", "perpetual") beside a store the text names ("the bank stores 30 kWh",
     // "the battery holds 2.4 kWh"): the store explains the output, and the label is someone's word for it.
