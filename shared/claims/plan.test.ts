@@ -1714,3 +1714,21 @@ describe('spoken claims: a loop asked about, what a tank holds, a fridge run as 
     expect(r?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.9, 6);
   });
 });
+
+describe('a sum that shows its terms, a quotation of parts, a year against two days (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  it('a number with a unit after it is no COP ("COP alone: 12,000 BTU/h per ton ÷ 620 W per ton ≈ 5.7")', () => {
+    const f = extractFigures('Chiller COP alone: 12,000 BTU/h per ton ÷ 620 W per ton ≈ 5.7.');
+    expect(f.some((x) => x.kind === 'cop' && x.si === 12000)).toBe(false);
+  });
+  it("a quotation's battery beside its panels, and a yearly yield against a scaffold's two days, break nothing", () => {
+    const text =
+      'Supply and fit: 16 × 430 W panels (6.88 kWp), one 6 kW hybrid inverter, one 13.5 kWh battery. Scaffold two days. Estimated annual yield 5,900 kWh (standard estimate, not a guarantee).';
+    expect(run(text).checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
+    expect(extractFigures(text).find((x) => x.text === '13.5 kWh')?.role).not.toBe('in');
+  });
+  it('a store beside its panel that ran through days with no sun keeps its size as what went in', () => {
+    const text = 'A small solar panel and a 60 Wh lithium battery. The logger and radio draw only 0.15 W, so after a fortnight of fog with no useful sun at all the station was still reporting.';
+    expect(extractFigures(text).find((x) => x.text === '60 Wh')?.role).toBe('in');
+  });
+});

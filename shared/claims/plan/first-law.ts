@@ -186,6 +186,18 @@ function twoItems(text: string, inF: Figure, outF: Figure): boolean {
   return a !== null && b !== null && a !== b;
 }
 
+/** Words that put an energy over a year: "annual yield 5,900 kWh", "3,100 kWh a year". */
+const YEARLY_RE = /(?<!\p{L})(?:annual(?:ly)?|yearly|per[^\S\n]+(?:year|annum)|a[^\S\n]+year|each[^\S\n]+year|every[^\S\n]+year|\/[^\S\n]?(?:yr|year|a))(?!\p{L})/iu;
+/**
+ * An energy said over a year on one side and, on the other, a power times a time of the text that is no
+ * year ("16 × 430 W panels … scaffold two days … annual yield 5,900 kWh"): no ledger of one period.
+ */
+function periodsApart(text: string, inF: Figure, outF: Figure): boolean {
+  const yearly = (f: Figure) => f.kind === 'energy' && !f.derived && f.start !== null && f.end !== null && YEARLY_RE.test(text.slice(Math.max(0, f.start - 40), f.end + 25).split(/[.;!?\n]/u).filter(Boolean).join(' '));
+  const shortRun = (f: Figure) => f.kind === 'energy' && !!f.derived?.startsWith('energy = power × time') && !YEARLY_RE.test(f.text);
+  return (yearly(outF) && shortRun(inF)) || (yearly(inF) && shortRun(outF));
+}
+
 /** Line voltages of three-phase AC supplies (V). */
 const THREE_PHASE_LINE_VOLTS = [380, 400, 415, 440, 460, 480, 690];
 /** Words that settle a supply's phases or say it is direct current. */
@@ -354,6 +366,8 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
       notes.push(`The input (“${inF.text}”) and the output (“${outF.text}”) are said of two different items the text names; no ledger of one device is drawn from them.`);
     } else if (productBesideRating(text, figures, inF, outF)) {
       needs.push(need('first-law', ['the power the machine draws at that working point, measured'], 'The input the text gives is a rating of the machine, not what it draws while giving the output worked out from its factors.', [inF, outF]));
+    } else if (periodsApart(text, inF, outF)) {
+      needs.push(need('first-law', ['the energy put in over the same period as the energy got out'], 'The text gives one side over a year and the other over a shorter time of its own.', [inF, outF]));
     } else if (phasesUnsaid(text, inF, outF)) {
       needs.push(
         need(

@@ -288,6 +288,9 @@ export function bareKind(text: string, start: number, end: number, floor: number
   // An operand of a worked division or product ("η = 3.1/172 = 0.018"): a step, not a figure; the
   // result after "=" is read.
   if (/^[^\S\n]*[/×*÷][^\S\n]*\d/u.test(text.slice(end, end + 6)) || /\d[^\S\n]*[/×*÷][^\S\n]*$/u.test(before)) return null;
+  // "COP alone: 12,000 BTU/h per ton ÷ 620 W per ton ≈ 5.7": a number with a unit of energy or power after
+  // it is a term of the sum, not the ratio.
+  if (/^[^\S\n]*(?:BTU|Btu|W|kW|MW|J|kJ|MJ|Wh|kWh|tons?)(?![\p{L}\d])/u.test(text.slice(end, end + 8))) return null;
   // "the heating COP of the six units lay between 3.8 and 4.4": a count of things, not the figure.
   if (/(?<!\p{L})(?:the|these|those|all|our|its|their|your|its)[^\S\n]+$/iu.test(text.slice(Math.max(0, start - 8), start)) && COUNTED_AFTER_RE.test(text.slice(end, end + 30))) return null;
   // "ΔT = 0", "a temperature difference of 0": no difference at all, in any unit.

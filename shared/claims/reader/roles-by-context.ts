@@ -669,9 +669,19 @@ export function asideStoreSize(text: string, drafts: Draft[]): void {
   const given = drafts.filter((d) => d.kind === 'energy' && d.role === 'out' && !d.derived && CAPACITY_AFTER_RE.test(text.slice(d.end, d.end + 30)));
   if (given.length && drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && (d.role === 'in' || d.role === 'out') && !given.includes(d))) for (const d of given) d.role = 'aside';
   const sizes = drafts.filter((d) => d.kind === 'energy' && d.role === 'in' && !d.derived && size(d));
-  if (sizes.length === 0 || !drafts.some((d) => d.kind === 'energy' && d.role === 'in' && !d.derived && !sizes.includes(d))) return;
+  // ("16 × 430 W panels, one 13.5 kWh battery … annual yield 5,900 kWh": a store beside the source that
+  // fills it, where nothing says the store ran alone, is no input of what the source yields.)
+  // (The source named in the store's own sentence: "a 200 W panel would refill it", said later, is none.)
+  const filled = (d: Draft) => SOURCE_NAMED_RE.test(sentenceAround(text, d.start, d.end)) && !NOTHING_CHARGED_RE.test(text);
+  if (sizes.length === 0) return;
+  if (!drafts.some((d) => d.kind === 'energy' && d.role === 'in' && !d.derived && !sizes.includes(d))) {
+    for (const d of sizes) if (filled(d)) d.role = 'aside';
+    return;
+  }
   for (const d of sizes) d.role = 'aside';
 }
+/** A source that fills a store: solar panels, a PV array, a wind turbine, a generator. */
+const SOURCE_NAMED_RE = /(?<!\p{L})(?:(?:solar|PV)[^\S\n]+(?:panels?|modules?|arrays?)|\d[^\S\n]*(?:W|Wp)[^\S\n]+panels?|kWp|photovoltaic|wind[^\S\n]+turbines?|gensets?)(?!\p{L})/iu;
 
 /** Before a power or an energy a source gives: "its solar panels give", "the turbine makes about". */
 const SOURCE_GIVES_BEFORE_RE =
@@ -697,7 +707,7 @@ export function asideLoadsOfSource(text: string, drafts: Draft[]): void {
  * disconnected … and no generator", "never charge again".
  */
 const NOTHING_CHARGED_RE =
-  /(?<!\p{L})(?:(?:without|with[^\S\n]+no|no)[^\S\n]+(?:(?:any|a)[^\S\n]+)?(?:plugging[^\S\n]+(?:it[^\S\n]+)?in|charging|re-?charging|charger|recharge|generator|mains|grid[^\S\n]+connection|ever[^\S\n]+(?:going[^\S\n]+back[^\S\n]+on|touching)[^\S\n]+the[^\S\n]+(?:mains|grid))|(?:panels?|PV|array|charger|generator|mains|grid)[^\S\n]+(?:(?:were|was|being|stayed|kept|left)[^\S\n]+)?(?:disconnected|unplugged|switched[^\S\n]+off|turned[^\S\n]+off|covered)|never[^\S\n]+(?:needs?[^\S\n]+(?:to[^\S\n]+be[^\S\n]+)?)?(?:charg\w*|plug\w*[^\S\n]+in)(?:[^\S\n]+again)?)(?!\p{L})/iu;
+  /(?<!\p{L})(?:(?:without|with[^\S\n]+no|no)[^\S\n]+(?:(?:any|a)[^\S\n]+)?(?:plugging[^\S\n]+(?:it[^\S\n]+)?in|charging|re-?charging|charger|recharge|generator|mains|grid[^\S\n]+connection|ever[^\S\n]+(?:going[^\S\n]+back[^\S\n]+on|touching)[^\S\n]+the[^\S\n]+(?:mains|grid))|(?:panels?|PV|array|charger|generator|mains|grid)[^\S\n]+(?:(?:were|was|being|stayed|kept|left)[^\S\n]+)?(?:disconnected|unplugged|switched[^\S\n]+off|turned[^\S\n]+off|covered)|never[^\S\n]+(?:needs?[^\S\n]+(?:to[^\S\n]+be[^\S\n]+)?)?(?:charg\w*|plug\w*[^\S\n]+in)(?:[^\S\n]+again)?|no[^\S\n]+(?:useful[^\S\n]+)?(?:sun|sunshine|sunlight|wind)(?:[^\S\n]+at[^\S\n]+all)?|in[^\S\n]+the[^\S\n]+dark)(?!\p{L})/iu;
 /** An energy worked out from a store's charge and voltage ("12 V 100 Ah"). */
 const STORE_CHARGE_DERIVED_RE = /^energy = charge × voltage/u;
 
