@@ -12,6 +12,7 @@
 import { parseQuantity, QuantityError } from '../../worksheet/quantity';
 import { extractFigures } from '../reader';
 import { EXACT, expectRelClose, expectWellFormed, only } from './test-support';
+import { tokenize } from './numbers';
 
 describe('numbers', () => {
   test.each([
@@ -241,4 +242,11 @@ test("a mixed number before a unit: '1-1/2 hp', '2 1/4 kW' (invented test data)"
   expect(extractFigures('The heater is rated 2 1/4 kW.').map((x) => x.si)).toEqual([2250]);
   // (a bare fraction stays one)
   expect(extractFigures('a 3/4 hp motor').map((x) => x.si)).toEqual([expect.closeTo(0.75 * 745.69987158227, 3)]);
+});
+
+describe('numbers said one after another (invented test data)', () => {
+  it('"one point eight, one point nine kilowatts" are two numbers, not one', () => {
+    const values = tokenize("he reckons 'one point eight, one point nine kilowatts', depending on the meter").map((t) => Number(t.num));
+    expect(values).toEqual([1.8, 1.9]);
+  });
 });

@@ -102,7 +102,10 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
   // And "seconds" is a unit, not a fraction: compromise reads "seventy seconds" as seventy halves (35);
   // it gets a word of the same length that means nothing to it.
   const lower = Array.from(text, (c) => (c.toLowerCase().length === c.length ? c.toLowerCase() : c)).join('');
-  const doc = nlp(lower.replace(/(?<!\p{L})second(s?)(?!\p{L})/gu, 'secund$1'));
+  // ("one point eight, one point nine kilowatts": compromise runs two numbers said in a row into one; a
+  // full stop of the same length keeps them apart.)
+  const apart = lower.replace(/(?<=\p{L}),(?=[^\S\n]+(?:one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|a hundred)(?!\p{L}))/gu, '.');
+  const doc = nlp(apart.replace(/(?<!\p{L})second(s?)(?!\p{L})/gu, 'secund$1'));
   const found = doc.numbers().json({ offset: true }) as { text: string; offset: { start: number; length: number }; number?: { num?: number } }[];
   for (const n of found) {
     // "- twenty watts" (a list item): compromise counts the dash in the length, not in the start.
