@@ -1732,3 +1732,22 @@ describe('a sum that shows its terms, a quotation of parts, a year against two d
     expect(extractFigures(text).find((x) => x.text === '60 Wh')?.role).toBe('in');
   });
 });
+
+describe('a chain: the water power a turbine takes, what the battery sees, an idle draw, people charging (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  const firstLaw = (text: string) => run(text).checks.find((c) => c.check === 'first-law');
+  it('"puts the water power at roughly 1.2 kW … the battery sees 300 to 400 W" is 0.25 to 0.33 of what went in', () => {
+    const r = firstLaw('The bucket test puts the water power at roughly 1.2 kW. After the wheel, the alternator, the cable and the rectifier, the battery sees somewhere between 300 and 400 W.');
+    expect(r?.finding).toBe('consistent');
+    expect(r?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.25, 6);
+    // A pump's delivered hydraulic power is still its output.
+    expect(extractFigures('The delivered hydraulic power was unchanged at 1.1 kW.').find((x) => x.kind === 'power')?.role).not.toBe('in');
+  });
+  it("an inverter's idle draw is set aside; what people charge a unit with goes in", () => {
+    expect(extractFigures('The rest is battery and inverter losses (the inverter alone idles at 25 W).').find((x) => x.kind === 'power')?.role).toBe('aside');
+    expect(extractFigures('We charged the unit with 1.8e4 J of electrical energy in electrolysis mode.').find((x) => x.kind === 'energy')?.role).toBe('in');
+  });
+  it('"two point nine e four metres per second" is 2.9 × 10⁴ m/s', () => {
+    expect(extractFigures('Exhaust velocity two point nine e four metres per second.').find((x) => x.kind === 'speed')?.si).toBeCloseTo(29000, 6);
+  });
+});

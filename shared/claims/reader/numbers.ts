@@ -195,7 +195,8 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
 }
 
 /** After a number said aloud: "times ten to the minus three", "times ten to the power of six". */
-const SPOKEN_POWER_OF_TEN_RE = /^[^\S\n]+times[^\S\n]+ten[^\S\n]+to[^\S\n]+the[^\S\n]+(?:power[^\S\n]+of[^\S\n]+)?(minus[^\S\n]+|negative[^\S\n]+)?(\d+|zero|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve)(?![\p{L}\d])/iu;
+// (Or "two point nine e four", the calculator's "e" said aloud.)
+const SPOKEN_POWER_OF_TEN_RE = /^[^\S\n]+(?:times[^\S\n]+ten[^\S\n]+to[^\S\n]+the[^\S\n]+(?:power[^\S\n]+of[^\S\n]+)?|e[^\S\n]+)(minus[^\S\n]+|negative[^\S\n]+)?(\d+|zero|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve)(?![\p{L}\d])/iu;
 
 const DIGIT_WORDS: Record<string, number> = { zero: 0, nought: 0, naught: 0, oh: 0, one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9 };
 /** "nought point five", "point eight", "oh point two five" (a leading nought, or none). */

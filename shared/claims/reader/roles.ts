@@ -157,6 +157,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
   // "the cooler removes 126 W of heat from the cabinet": what a fridge or cooler removes is its cooling output.
   if (roles.groups === POWER_ENERGY_ROLES && COOLING_MACHINE_RE.test(text) && /(?<!\p{L})(?:removes|removed|removing|can remove|pulls out|pumps out)[^\S\n]+(?:(?:about|around|roughly|some|nearly|up to|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 40), start)) && /^[^\S\n]*(?:of[^\S\n]+)?heat(?!\p{L})/iu.test(text.slice(end, end + 20))) return 'out';
   // "filled a 5 kWh battery", "charged the 10 kWh pack": what is filled is what came out.
+  // ("We charged the unit with 1.8e4 J": what people put in goes in, whatever it fills.)
+  if (roles.groups === POWER_ENERGY_ROLES && /(?<!\p{L})(?:we|I|they|you|the team|the students)[^\S\n]+(?:(?:then|first|had|have|fully)[^\S\n]+)?(?:charged|filled|loaded|topped[^\S\n]+up)[^\S\n]+(?:the|a|an|its|our|their|my)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?with[^\S\n]+(?:(?:about|some|roughly)[^\S\n]+)?$/iu.test(text.slice(Math.max(floor, start - 60), start))) return 'in';
   if (roles.groups === POWER_ENERGY_ROLES && FILLS_LEAD_RE.test(text.slice(Math.max(floor, start - 40), start))) return 'out';
   // A verb right before the figure ("takes 50 PS of shaft power", "generates 40 kW") outweighs the
   // words after it.
@@ -184,6 +186,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     if (/(?<!\p{L})sized[^\S\n]+(?:for|at)[^\S\n]+(?:(?:about|around|roughly|some)[^\S\n]+)?$/iu.test(lead)) return 'aside';
     // "putting 1.5 kW back into the ring main", "exports 3 kW to the grid": what goes back to the supply is the output.
     if (/(?<!\p{L})(?:putting|puts?|feeding|feeds|fed|sending|sends|sent|exporting|exports?|exported|pushing|pushes|returning|returns|returned)[^\S\n]+(?:(?:about|around|some|roughly|up to|nearly|over)[^\S\n]+)?$/iu.test(lead) && /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:back[^\S\n]+)?(?:in)?to[^\S\n]+(?:the[^\S\n]+|your[^\S\n]+|its[^\S\n]+)?(?:ring[^\S\n]+main|mains|grid|socket|supply|network|house(?:hold)?|home|wiring|circuit)(?!\p{L})/iu.test(text.slice(end, end + 50))) return 'out';
+    // "the inverter alone idles at 25 W", "standby draw 3 W": what a part takes doing nothing is a loss, no side of the run.
+    if (/(?<!\p{L})(?:idles?|idling|standby|stand-by|no-load)(?:[^\S\n]+(?:draw|consumption|loss(?:es)?|power))?[^\S\n]+(?:(?:at|of|is|draws?|takes?|uses?)[^\S\n]+)?(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu.test(lead)) return 'aside';
     // "the calorimeter constant to within 0.3 W", "a resolution of 5 mW": how well it was measured, not a flow.
     if (PRECISION_LEAD_RE.test(lead)) return 'aside';
     // "The energy meter recorded 12.0 kWh", where the methods put the one meter at the output ("power

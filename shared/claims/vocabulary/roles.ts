@@ -25,6 +25,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'in',
     before: [
+      // "which puts the water power at roughly 1.2 kW": the power of the flow a turbine or a collector takes.
+      '(?:water|hydro|wind|stream|river) power (?:at|of|is|was|comes to|works out at)',
       // "The tank holds the equivalent of twelve kilowatt-hours": what a store holds is what it has to give.
       '(?:tanks?|batter(?:y|ies)|stores?|packs?|banks?|cylinders?|reservoirs?|capacitors?|accumulators?) holds?(?: (?:the equivalent of|about|some|roughly|up to))?(?:,? say,?)?',
       // "Feed it 5 V at 2 A": what a reader is told to give the device.
@@ -93,6 +95,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
   {
     role: 'out',
     before: [
+      // "the battery sees somewhere between 300 and 400 W": what reaches the store at the end of the chain.
+      '(?:the |its )?(?:batter(?:y|ies)|bank|pack) (?:sees|saw)(?: (?:somewhere|about|around|roughly|only|just))?(?: between)?',
       // "… take out 12 V at 3 A", "you get back 1.3 kWh": what a reader is told to take from the device.
       '(?<![\\w-])(?:take|get|pull)s? (?:out|back)(?: of it)?',
       // "pushes 150 W of clean AC into your appliances".
