@@ -1751,3 +1751,18 @@ describe('a chain: the water power a turbine takes, what the battery sees, an id
     expect(extractFigures('Exhaust velocity two point nine e four metres per second.').find((x) => x.kind === 'speed')?.si).toBeCloseTo(29000, 6);
   });
 });
+
+describe('heat and power from one fuel, said in pairs (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  const firstLaw = (text: string) => run(text).checks.find((c) => c.check === 'first-law');
+  it('"1.0 kW electric and 6.0 kW of heat to your radiators from 7.5 kW of gas" is 7 kW out of 7.5 kW in', () => {
+    const r = firstLaw('Wall-hung micro-CHP. Stirling engine on natural gas: 1.0 kW electric and 6.0 kW of heat to your radiators from 7.5 kW of gas input.');
+    expect(r?.finding).toBe('consistent');
+    // (1.0 + 6.0) / 7.5 = 0.93333 (node).
+    expect(r?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(7 / 7.5, 6);
+  });
+  it('radiators beside a heat pump named keep it a heat pump; radiators beside a sun-heated engine make no fuel engine', () => {
+    expect(run('The air-source heat pump gives 9 kW of heat to the radiators from 3 kW of electricity.').checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
+    expect(extractFigures('The boiler gives 20 kW to the radiators and 4 kW to hot water, using 26 kW of gas.').filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['out', 'out', 'in']);
+  });
+});

@@ -190,6 +190,10 @@ const FIT_TO_RE = /(?<!\p{L})(?:(?:bolt|fit|mount|attach|strap|install|put)(?:s|
 const WATER_OR_WIND_MACHINE_RE =
   /(?<!\p{L})(?:pump[- ]turbines?|(?:hydro|hydraulic|water|wind|tidal|Pelton|Kaplan|Francis|cross[- ]flow|Turgo|reversible|run-of-river|river|stream|low-head|micro-hydro|pico-hydro)[- ]turbines?|(?:upper|lower|storage|pumped[- ]storage|hydro|water|quarry|head|tail)[- ](?:reservoirs?|ponds?)|(?:quarry|pumped[- ]hydro|pumped) reservoirs?|penstocks?)(?!\p{L})/giu;
 
+/** An engine named beside a fuel it burns: a maker of heat and power, not a mover of heat. */
+const FUEL_ENGINE_RE =
+  /(?<!\p{L})(?:(?:gas|diesel|petrol|biogas)[^\S\n]+engines?|engines?[^\S\n]+(?:on|burning|running[^\S\n]+on|fuelled[^\S\n]+(?:by|with)|fired[^\S\n]+by)[^\S\n]+(?:natural[^\S\n]+)?(?:gas|diesel|petrol|biogas|LPG|propane|fuel|oil|wood|pellets|biomass)|(?:micro-?)?CHP|cogeneration|combined[^\S\n]+heat[^\S\n]+and[^\S\n]+power)(?!\p{L})/iu;
+
 export function readSignals(ctx: PlanContext): Signals {
   const text = ctx.text ?? '';
   const classes = ctx.classes ?? [];
@@ -225,7 +229,9 @@ export function readSignals(ctx: PlanContext): Signals {
     // (Water and wind machines are no heat engines: "the reversible pump-turbine", "the upper reservoir".)
     heatEngine: HEAT_ENGINE_RE.test(text.replace(WATER_OR_WIND_MACHINE_RE, ' ')),
     // (A boiler's text names radiators and flow temperatures too: those words alone name no heat pump there.)
-    heatPump: HEAT_PUMP_RE.test(notDenied) && !deniedPump && !(BURNER_RE.test(text) && !NAMED_HEAT_PUMP_RE.test(notDenied)),
+    // (Nor an engine that burns fuel: "Stirling engine on natural gas: 1.0 kW electric and 6.0 kW of heat to
+    // your radiators" is a combined heat and power unit.)
+    heatPump: HEAT_PUMP_RE.test(notDenied) && !deniedPump && !((BURNER_RE.test(text) || FUEL_ENGINE_RE.test(text)) && !NAMED_HEAT_PUMP_RE.test(notDenied)),
     cooling: COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied),
     coolingWords: COOLING_RE.test(notDenied),
     overUnity: OVER_UNITY_RE.test(text) || (top !== undefined && OVER_UNITY_CLASSES.includes(top)),

@@ -40,6 +40,11 @@ const STATIC_FORCE_BEFORE_RE =
 /** Between two figures of one list: "… on the motorway, and under", "…, or about", "… and up to". */
 const SAME_SIDE_LIST_RE =
   /^[^.;!?\n]{0,80}?(?:,[^\S\n]*)?(?<!\p{L})(?:and|or|but|while)[^\S\n]+(?:(?:under|over|about|around|nearly|up to|at most|less than|more than|just|only|some|roughly|barely|below|above)[^\S\n]+)*$/iu;
+/** Between two figures of one side in two forms: "… electric and", "… of electricity and". */
+const FORM_PAIR_GAP_RE =
+  /^[^\S\n]*(?:of[^\S\n]+)?(?:electric(?:al|ity)?|heat|thermal|mechanical|shaft|power|light|cooling|hot[^\S\n]+water|steam|useful[^\S\n]+heat)(?:[^\S\n]+(?:power|output|energy))?[^\S\n]*,?[^\S\n]+(?:and|plus)[^\S\n]+(?:(?:about|around|roughly|some|another|a[^\S\n]+further)[^\S\n]+)?$/iu;
+/** Between two figures of one flow sent to two places: "… to the radiators and", "… into the grid, and". */
+const DESTINATION_LIST_GAP_RE = /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:to|into)[^\S\n]+(?:(?:the|its|your|our|my|their)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?[\p{L}-]+,?[^\S\n]+and[^\S\n]+(?:(?:about|around|roughly|some|another)[^\S\n]+)?$/iu;
 /** Between two figures, a second subject with no verb of its own: "… and the server room" (the verb said once for both). */
 const ELIDED_VERB_RE =
   /^[^.;!?\n\d]{0,40}?(?<!\p{L})and[^\S\n]+(?:the|its|our|their|his|her|a|an)[^\S\n]+(?:(?!(?:gives?|gave|puts?|delivers?|makes?|made|produces?|returns?|yields?|out|outputs?|generates?|draws?|uses?|used|takes?|took|consumes?|needs?|is|was|are|were|at|with|from|into|to|for|of|on|in|only|just|about|around|roughly|some|nearly|over|under|up)(?!\p{L}))(?!\p{L}+(?:ed|ly)[^\S\n])\p{L}[\p{L}-]*(?:[^s\W]|ss)[^\S\n]+){1,3}$/iu;
@@ -340,6 +345,22 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     if (!/(?<!\p{L})on[^\S\n]+(?:(?:just|only|about|around|some|barely|a[^\S\n]+mere)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, d.start - 20), d.start))) continue;
     const sentence = sentenceOf(text, d);
     if (drafts.some((o) => o !== d && o.kind === 'power' && o.role === 'out' && o.end <= d.start && sentenceOf(text, o) === sentence)) d.role = 'in';
+  }
+  // "1.0 kW electric and 6.0 kW of heat to your radiators from 7.5 kW of gas": two forms of one side said
+  // in a pair, the second's side named — the first's too.
+  for (let i = drafts.length - 2; i >= 0; i--) {
+    const d = drafts[i];
+    if (!energyLike(d) || d.derived || d.role !== null) continue;
+    const next = drafts.find((o) => o.start >= d.end && o !== d);
+    if (!next || next.kind !== d.kind || next.derived || (next.role !== 'in' && next.role !== 'out')) continue;
+    if (FORM_PAIR_GAP_RE.test(text.slice(d.end, next.start))) d.role = next.role;
+  }
+  // "gives 20 kW to the radiators and 4 kW to hot water": a list of where one flow goes, its verb said once.
+  for (let i = 1; i < drafts.length; i++) {
+    const d = drafts[i];
+    const prev = drafts[i - 1];
+    if (!energyLike(d) || d.derived || d.role !== null || prev.kind !== d.kind || prev.derived || (prev.role !== 'in' && prev.role !== 'out')) continue;
+    if (DESTINATION_LIST_GAP_RE.test(text.slice(prev.end, d.start)) && /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:to|into)[^\S\n]+\p{L}/iu.test(text.slice(d.end, d.end + 30))) d.role = prev.role;
   }
   // One side named, one figure left: the other side.
   const named = drafts.filter((d) => energyLike(d) && (d.role === 'in' || d.role === 'out'));
