@@ -1766,3 +1766,35 @@ describe('heat and power from one fuel, said in pairs (invented test data)', () 
     expect(extractFigures('The boiler gives 20 kW to the radiators and 4 kW to hot water, using 26 kW of gas.').filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['out', 'out', 'in']);
   });
 });
+
+describe('speeds a signal is said to reach without a speed said (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  const lightSpeed = (text: string) => run(text).checks.find((c) => c.check === 'light-speed');
+  // c = 299,792,458 m/s exactly (BIPM SI Brochure, 9th edition, the defining constants).
+  it('a path over its one-way latency faster than light breaks; a round trip counts the path twice', () => {
+    const r = lightSpeed('Northline Links: 1,200 km between our two exchanges with a guaranteed one-way latency of 3.2 ms.');
+    expect(r?.finding).toBe('breaks');
+    expect(r?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(1_200_000 / 0.0032 / 299_792_458, 6);
+    const trip = lightSpeed('Our route from Arlby to Vesk (640 km) has a round-trip latency of 8.2 ms.');
+    expect(trip?.finding).toBe('consistent');
+    expect(trip?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo((2 * 640_000) / 0.0082 / 299_792_458, 6);
+    // 500 miles (1 mile = 1,609.344 m, NIST SP 811 appendix B) in 2 ms one way: 1.34 c.
+    expect(lightSpeed('The two sites are 500 miles apart and the one-way delay is 2 ms.')?.finding).toBe('breaks');
+  });
+  it("a network's length, a saving and a lower bound on latency give no speed", () => {
+    for (const text of [
+      'Under 1 ms latency across our 1,200 km of motorway coverage.',
+      'Our 2,000 km fibre network delivers latency under 1 ms.',
+      'The new route between the exchanges saves 1.6 ms over 1,200 km.',
+      'The 1,200 km link between the two sites has a latency of more than 6 ms.',
+    ]) {
+      expect(lightSpeed(text)).toBeUndefined();
+    }
+  });
+  it("a cable's velocity of propagation is that fraction of c", () => {
+    const r = lightSpeed('Low-loss coaxial cable. Impedance 50 Ω. Velocity of propagation 83 %. Max. power 1.9 kW at 100 MHz.');
+    expect(r?.finding).toBe('consistent');
+    expect(r?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(0.83, 6);
+    expect(lightSpeed('Our new dielectric gives a velocity factor of 1.2, so signals outrun light.')?.finding).toBe('breaks');
+  });
+});
