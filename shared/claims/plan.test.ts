@@ -1798,3 +1798,28 @@ describe('speeds a signal is said to reach without a speed said (invented test d
     expect(lightSpeed('Our new dielectric gives a velocity factor of 1.2, so signals outrun light.')?.finding).toBe('breaks');
   });
 });
+
+describe("a generator's ratings and the loads it carries (invented test data)", () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  const roles = (text: string) => extractFigures(text).filter((x) => x.kind === 'power').map((x) => [x.si, x.role]);
+  it('"5 kW rated, 5.5 kW max … up to 10 hours at half load (2.5 kW)" are all what the generator gives, and the fuel is wanted', () => {
+    const text = 'Open-frame generator. 5 kW rated, 5.5 kW max. 12-litre tank: up to 10 hours at half load (2.5 kW).';
+    expect(roles(text)).toEqual([
+      [5000, 'out'],
+      [5500, 'out'],
+      [2500, 'out'],
+    ]);
+    expect(run(text).checks.find((c) => c.check === 'first-law')).toBeUndefined();
+    expect(run(text).needs.some((n) => n.check === 'first-law')).toBe(true);
+    // A rating said second keeps the side of the first.
+    expect(roles('It draws 800 W continuous, 1,200 W peak.')).toEqual([
+      [800, 'in'],
+      [1200, 'in'],
+    ]);
+  });
+  it("a fuel input at rated load stays the input; what a generator's loads need breaks nothing", () => {
+    expect(extractFigures('Fuel input at rated load 95,000 BTU/h. Shaft output 9 hp.').find((x) => x.text === '95,000 BTU/h')?.role).toBe('in');
+    const text = 'Your generator is 3,500 W running / 4,000 W starting. The fridge needs about 1,200 W for a second or so to start, then about 200 W running.';
+    expect(run(text).checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
+  });
+});

@@ -46,6 +46,8 @@ const FORM_PAIR_GAP_RE =
   /^[^\S\n]*(?:of[^\S\n]+)?(?:electric(?:al|ity)?|heat|thermal|mechanical|shaft|power|light|cooling|hot[^\S\n]+water|steam|useful[^\S\n]+heat)(?:[^\S\n]+(?:power|output|energy))?[^\S\n]*,?[^\S\n]+(?:and|plus)[^\S\n]+(?:(?:about|around|roughly|some|another|a[^\S\n]+further)[^\S\n]+)?$/iu;
 /** Between two figures of one flow sent to two places: "… to the radiators and", "… into the grid, and". */
 const DESTINATION_LIST_GAP_RE = /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:to|into)[^\S\n]+(?:(?:the|its|your|our|my|their)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?[\p{L}-]+,?[^\S\n]+and[^\S\n]+(?:(?:about|around|roughly|some|another)[^\S\n]+)?$/iu;
+/** Right after a figure: a rating word of its own ("5.5 kW max", "2,400 W surge", "7 kW peak"). */
+const RATING_WORD_AFTER_RE = /^[^\S\n]*(?:max(?:imum)?\.?|peak|surge|continuous|cont\.?|rated|nominal|nom\.?|starting|running|boost|burst)(?!\p{L})/iu;
 /** Between two figures, a second subject with no verb of its own: "… and the server room" (the verb said once for both). */
 const ELIDED_VERB_RE =
   /^[^.;!?\n\d]{0,40}?(?<!\p{L})and[^\S\n]+(?:the|its|our|their|his|her|a|an)[^\S\n]+(?:(?!(?:gives?|gave|puts?|delivers?|makes?|made|produces?|returns?|yields?|out|outputs?|generates?|draws?|uses?|used|takes?|took|consumes?|needs?|is|was|are|were|at|with|from|into|to|for|of|on|in|only|just|about|around|roughly|some|nearly|over|under|up)(?!\p{L}))(?!\p{L}+(?:ed|ly)[^\S\n])\p{L}[\p{L}-]*(?:[^s\W]|ss)[^\S\n]+){1,3}$/iu;
@@ -376,7 +378,13 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     // list going on from the named figure of its own sentence, the new one said with its condition —
     // not the other side.)
     const prev = [...named].reverse().find((d) => d.end <= open[0].start && sentenceOf(text, d) === sentenceOf(text, open[0]));
-    const goesOn = prev !== undefined && SAME_SIDE_LIST_RE.test(text.slice(prev.end, open[0].start)) && CONDITION_AFTER_RE.test(text.slice(open[0].end, open[0].end + 30));
+    // ("gives 5 kW rated, 5.5 kW max": a second rating of the same side, said with its rating word.)
+    const rating =
+      prev !== undefined &&
+      prev.kind === open[0].kind &&
+      /^[^\S\n]*(?:[\p{L}.]+[^\S\n]*)?[,;/][^\S\n]*(?:(?:and|or)[^\S\n]+)?$/iu.test(text.slice(prev.end, open[0].start)) &&
+      RATING_WORD_AFTER_RE.test(text.slice(open[0].end, open[0].end + 25));
+    const goesOn = prev !== undefined && ((SAME_SIDE_LIST_RE.test(text.slice(prev.end, open[0].start)) && CONDITION_AFTER_RE.test(text.slice(open[0].end, open[0].end + 30))) || rating);
     // ("14 W of electricity … Fourteen watts from a segment is believable": the named figure said again.)
     const again = named.find((d) => d.kind === open[0].kind && siOf(d) !== null && Math.abs((siOf(d) as number) - (siOf(open[0]) ?? NaN)) <= 1e-9 * Math.abs(siOf(d) as number));
     // ("delivered 2.4 kWh to a resistive load, a mean of 300 W": the named figure's rate, said beside it.)
@@ -709,6 +717,8 @@ const SOURCE_NAMED_RE = /(?<!\p{L})(?:(?:solar|PV)[^\S\n]+(?:panels?|modules?|ar
 /** Before a power or an energy a source gives: "its solar panels give", "the turbine makes about". */
 const SOURCE_GIVES_BEFORE_RE =
   /(?<!\p{L})(?:(?:solar[^\S\n]+)?(?:panels?|arrays?|PV|modules?|cells?)|turbines?|generators?|alternators?|dynamos?|RTGs?|gensets?)[^\S\n]+(?:give|gives|gave|make|makes|made|produce|produces|produced|deliver|delivers|delivered|generate|generates|generated|provide|provides|provided|supply|supplies|supplied|put[^\S\n]+out|puts[^\S\n]+out)(?:[^\S\n]+(?:about|around|roughly|some|up[^\S\n]+to|nearly|only|just))?[^\S\n]*$/iu;
+/** A generator named. */
+const GENERATOR_TEXT_RE = /(?<!\p{L})(?:generators?|gensets?|generating[^\S\n]+sets?)(?!\p{L})/iu;
 /** Before what the loads use: "the heaters and radio use about", "the house draws". */
 const LOADS_USE_BEFORE_RE =
   /(?<!\p{L})(?:heaters?|radios?|lights?|lighting|lamps?|appliances?|loads?|fridges?|freezers?|instruments?|electronics|avionics|payloads?|house|household|home|building|computers?|routers?|TVs?|pumps?)(?:[^\S\n]+(?:and|&)[^\S\n]+(?:the[^\S\n]+)?[\p{L}-]+)?[^\S\n]+(?:use|uses|used|consume|consumes|consumed|need|needs|needed|draw|draws|drew|take|takes|took)(?:[^\S\n]+(?:about|around|roughly|some|up[^\S\n]+to|nearly|only|just))?[^\S\n]*$/iu;
@@ -720,7 +730,9 @@ const LOADS_USE_BEFORE_RE =
  */
 export function asideLoadsOfSource(text: string, drafts: Draft[]): void {
   const before = (d: Draft, re: RegExp) => re.test(text.slice(Math.max(0, d.start - 60), d.start).replace(/^[^]*[.!?;\n][^\S\n]/u, ''));
-  if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'out' && before(d, SOURCE_GIVES_BEFORE_RE))) return;
+  // (Or a generator's own rating, "your generator is 3,500 W running / 4,000 W starting", beside what its loads need.)
+  const rated = (d: Draft) => GENERATOR_TEXT_RE.test(text) && RATING_WORD_AFTER_RE.test(text.slice(d.end, d.end + 25));
+  if (!drafts.some((d) => (d.kind === 'power' || d.kind === 'energy') && d.role === 'out' && (before(d, SOURCE_GIVES_BEFORE_RE) || rated(d)))) return;
   for (const d of drafts) if ((d.kind === 'power' || d.kind === 'energy') && d.role === 'in' && !d.derived && before(d, LOADS_USE_BEFORE_RE)) d.role = 'aside';
 }
 

@@ -359,6 +359,15 @@ const RATED_SUBJECT_BEFORE_RE = /(?<!(?:compressor|cooler|fridge|freezer|chiller
 const RATED_UNIT_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:unit|machine|model|design|frame|motor|engine|turbine)(?!\p{L})(?![^.;!?\n]{0,40}(?<!\p{L})(?:drives?|driving|turns?|turning|powers?|powering|spins?|spinning|feeds?|feeding|coupled|connected|attached|linked)(?!\p{L}))/iu;
 const RATED_DRIVEN_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:cryocoolers?|compressors?|fridges?|refrigerators?|freezers?|chillers?|air[- ]conditioners?|heat pumps?|coolers?)(?!\p{L})/iu;
 
+/** A generator named as the subject of its paragraph (near its start). */
+const GENERATOR_NAMED_RE = /(?<!\p{L})(?:generators?|gensets?|generating[^\S\n]+sets?|alternators?)(?!\p{L})/iu;
+/** Right after a power: its rating word and nothing else ("5 kW rated,", "5.5 kW max.", "2,800 W running"). */
+const GENERATOR_RATING_AFTER_RE =
+  /^[^\S\n]*(?:rated|continuous|cont\.?|max(?:imum)?\.?|peak|surge|running|starting|prime|standby|nominal|nom\.?)(?:[^\S\n]+(?:power|output))?[^\S\n]*(?:[,.;)\n]|$|and(?!\p{L}))/iu;
+/** Just before a power: a rating's label ("Rated:", "Max output", "Surge power:", "Running watts"). */
+const GENERATOR_RATING_BEFORE_RE =
+  /(?:^|[.;,(\n|][^\S\n]*)(?:rated|continuous|max(?:imum)?|peak|surge|running|starting|prime|standby)(?:[^\S\n]+(?:power|output|watts|rating))?[^\S\n]*[:=]?[^\S\n]*$/iu;
+
 /**
  * A machine's rating said before its name, where the name settles which side it is: the rating of an
  * engine, motor or turbine that is the claim's subject ("The 150 PS engine is 36 % efficient") is its
@@ -383,6 +392,13 @@ export function ratingRole(text: string, start: number, end: number): FigureRole
   if (!horsepower && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end))) {
     if (/^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:chillers?|heat[- ]pumps?|air[- ]conditioners?|(?:cooling|refrigeration)[^\S\n]+(?:units?|plants?|machines?))(?!\p{L})/iu.test(after)) return 'out';
     if (/(?<!\p{L})(?:heat[- ]pumps?|chillers?|air[- ]conditioners?)(?!\p{L})[^\S\n]*,[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 40), start)) && /^[^\S\n]*\)/u.test(after)) return 'out';
+  }
+  // "Portmane G5000 open-frame generator. 5 kW rated, 5.5 kW max.": a generator's ratings in a list of its
+  // own (the figure with its rating word and nothing else said of it) are what it gives.
+  if (GENERATOR_RATING_AFTER_RE.test(after) || GENERATOR_RATING_BEFORE_RE.test(text.slice(Math.max(0, start - 30), start))) {
+    const para = paragraphAround(text, start, end);
+    const head = para.slice(0, 160);
+    if (GENERATOR_NAMED_RE.test(head) && !/(?<!\p{L})(?:motors?|inputs?|draws?|drawing|consum\w*|takes)(?!\p{L})/iu.test(text.slice(Math.max(0, start - 30), end + 30))) return 'out';
   }
   if (RATED_ENGINE_AFTER_RE.test(after) && /(?:^|[.!?:\n][^\S\n]*)(?:the|a|an|our|this|its|their|each)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 40), start))) return 'out';
   // "The pump motor is a 10 hp unit drawing 8.2 kW": the rating of the motor, engine or turbine the

@@ -104,6 +104,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?<!(?:batter(?:y|ies)|suppl(?:y|ies)|mains|grid|packs?|sources?|cells?|chargers?) (?:can |could |will |would |may )?)push(?:es|ed|ing)?(?: out)?(?= *(?:about |some |roughly |up to )?$)',
       // "Discharge into the resistor bank down to standstill: 1.79 kWh", "Discharge energy: 13.2 kWh".
       '(?<=(?:^|\\n|[.;|•]) *)discharg(?:e|ing)(?: (?:energy|output|side|out))?(?: [\\w-]+){0,8}?[^\\S\\n]*[:=](?=[^\\S\\n]*$)',
+      // "up to 10 hours at half load (2.5 kW)": the load a source carries is what it gives.
+      '(?:at|on|under) (?:(?:half|full|quarter|three-quarters?|part|partial|light|low|(?:\\d+ ?%|\\d+ per ?cent)) )load(?: of| \\()',
       // "Pedalling at 150 W for an hour charged the battery with 0.12 kWh": what a device charges a store with is what it gives.
       '(?:re)?charg(?:ed|es|ing) (?:the|its|a|an) (?:[\\w-]+ )?(?:battery|batteries|pack|bank|cells?|store|phone|capacitors?|supercaps?)(?: (?:with|to|by))?(?: (?:about|some|roughly|around|nearly|only|just))?',
       // "charge it with 15 kWh and you draw 13.5 kWh": what the user draws from a store is what it gives.
