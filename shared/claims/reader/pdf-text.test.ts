@@ -113,8 +113,10 @@ describe('a table set as text, its labels in a header row (invented test data)',
     expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
   });
 
-  test('rows that do not line up with the header, and pipe tables, are left as they are', () => {
+  test('rows that do not line up with the header are left as they are; a pipe table and its rule are read like the others', () => {
     expect(labelTableRows('Stage   Wet mass   Dry mass\nThe upper stage weighs 1,250 kg wet.')).toBeNull();
-    expect(labelTableRows('| Stage | Wet mass | Dry mass |\n| Upper | 1,250 kg | 410 kg |')).toBeNull();
+    expect(labelTableRows('| Stage | Wet mass | Dry mass |\n|---|---|---|\n| Upper | 1,250 kg | 410 kg |')?.text).toBe('| Stage | Wet mass | Dry mass |\n|---|---|---|\nStage Upper; Wet mass 1,250 kg; Dry mass 410 kg');
+    // (A table with a unit column of its own is left to the sheet reader.)
+    expect(labelTableRows('Quantity | Value | Unit\nHeat in | 1.6 | kW\nPower out | 80 | W')).toBeNull();
   });
 });

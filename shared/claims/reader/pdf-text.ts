@@ -97,8 +97,17 @@ const CELL_GAP_RE = /\t+|[^\S\n\t]{2,}/gu;
 const VALUE_CELL_RE = /^[-−+~≈]?\d/u;
 /** A header cell's unit in brackets: "ΔT (K)", "Qc [W]", "Isp (s)". */
 const HEADER_UNIT_RE = /^(.*?\S)[^\S\n]*[([]([^()[\]\d]{1,8})[)\]]$/u;
+/** A header cell's unit as its last word, after a space: "T_out °C", "Eff. %", "Heat kWh". */
+const HEADER_TRAILING_UNIT_RE = /^(.*?\p{L}.*?)[^\S\n]+(\S{1,6})$/u;
 /** Units a header may give its column (a bracket in a header is often a note: "Isp (vac)", "Δv (claimed)"). */
-const HEADER_UNITS = new Set(['K', '°C', '°F', 'W', 'kW', 'MW', 'mW', 'µW', 'J', 'kJ', 'MJ', 'Wh', 'kWh', 'MWh', 'N', 'mN', 'µN', 'kN', 'kg', 'g', 't', 's', 'h', 'min', 'A', 'mA', 'V', 'kV', 'mV', 'm/s', 'km/s', '%', 'hp', 'lbf', 'BTU/h']);
+const HEADER_UNITS = new Set([
+  'K', '°C', '°F', 'W', 'kW', 'MW', 'mW', 'µW', 'J', 'kJ', 'MJ', 'GJ', 'Wh', 'kWh', 'MWh', 'N', 'mN', 'µN', 'uN', 'kN', 'kg', 'g', 't', 's', 'h', 'min', 'A', 'mA', 'V', 'kV', 'mV',
+  'm/s', 'km/s', '%', 'hp', 'lbf', 'lb', 'BTU/h', 'Btu/h', 'BTU', 'Btu', 'psi', 'bar',
+]);
+/** A header cell that names a unit column: such tables are read by the sheet reader's unit joining. */
+const UNIT_COLUMN_RE = /^(?:units?|unit of measure|dimension|UoM)$/iu;
+/** A rule under a header: "---|:--:|---", "+-----+------+". */
+const RULE_LINE_RE = /^[^\S\n]*[|+]?(?:[^\S\n]*:?-{2,}:?[^\S\n]*[|+]?)+[^\S\n]*$/u;
 
 interface Cell {
   start: number;
@@ -106,24 +115,47 @@ interface Cell {
   text: string;
 }
 
-function cellsOf(line: string, offset: number): Cell[] {
+/** How a line's cells are set apart: pipes, semicolons (with decimal commas), or tabs and wide spaces. */
+type Separator = '|' | ';' | 'gap';
+
+function separatorOf(line: string): Separator {
+  if (line.includes('|')) return '|';
+  if (!line.includes('\t') && (line.match(/;/g) ?? []).length >= 2) return ';';
+  return 'gap';
+}
+
+function cellsOf(line: string, offset: number, sep: Separator = 'gap'): Cell[] {
   const cells: Cell[] = [];
   let from = 0;
-  for (const m of line.matchAll(CELL_GAP_RE)) {
-    const text = line.slice(from, m.index);
-    if (text.trim()) cells.push({ start: offset + from + (text.length - text.trimStart().length), end: offset + from + text.trimEnd().length, text: text.trim() });
+  const push = (text: string, at: number) => {
+    if (text.trim()) cells.push({ start: offset + at + (text.length - text.trimStart().length), end: offset + at + text.trimEnd().length, text: text.trim() });
+  };
+  const re = sep === '|' ? /\|/gu : sep === ';' ? /;/gu : CELL_GAP_RE;
+  re.lastIndex = 0;
+  for (const m of line.matchAll(re)) {
+    push(line.slice(from, m.index), from);
     from = m.index! + m[0].length;
   }
-  const rest = line.slice(from);
-  if (rest.trim()) cells.push({ start: offset + from + (rest.length - rest.trimStart().length), end: offset + from + rest.trimEnd().length, text: rest.trim() });
+  push(line.slice(from), from);
   return cells;
+}
+
+/** A header cell's label and the unit it gives its column, if any. */
+function headerUnit(h: string): { label: string; unit: string | null } {
+  const bracket = HEADER_UNIT_RE.exec(h);
+  if (bracket && HEADER_UNITS.has(bracket[2].trim())) return { label: bracket[1], unit: bracket[2].trim() };
+  const trailing = HEADER_TRAILING_UNIT_RE.exec(h);
+  if (trailing && HEADER_UNITS.has(trailing[2])) return { label: trailing[1], unit: trailing[2] };
+  return { label: h, unit: null };
 }
 
 /**
  * A table set as text with its labels in a header row and its values in the rows below ("ΔT (K)  Qc (W)
- * COP" over "40  18.5  0.60"): each value row is read as its cells, each cell after its column's label,
- * with the header's unit where the cell gives none ("ΔT 40 K; Qc 18.5 W; COP 0.60") — offsets mapped back,
- * so a figure still points at its cell. Rows separated by pipes are left to the sheet reader.
+ * COP" over "40  18.5  0.60"; "Hot side (°C) | ΔT (°C) | Output"; "T_out °C;Heat kWh;…" with decimal
+ * commas): each value row is read as its cells, each cell after its column's label, with the header's
+ * unit where the cell gives none ("ΔT 40 K; Qc 18.5 W; COP 0.60") — offsets mapped back, so a figure
+ * still points at its cell. A rule under the header is passed over; a table with a unit column of its
+ * own is left to the sheet reader.
  */
 export function labelTableRows(pasted: string): Unwrapped | null {
   const lines = pasted.split('\n');
@@ -136,20 +168,20 @@ export function labelTableRows(pasted: string): Unwrapped | null {
   /** Replacements: the value row at this line index, as pieces (text, and where each piece maps). */
   const rows = new Map<number, { text: string; at: number; span?: boolean }[]>();
   for (let i = 0; i + 1 < lines.length; i++) {
-    if (lines[i].includes('|')) continue;
-    const header = cellsOf(lines[i], starts[i]);
-    if (header.length < 3 || header.some((c) => VALUE_CELL_RE.test(c.text)) || header.some((c) => !/\p{L}/u.test(c.text))) continue;
-    for (let j = i + 1; j < lines.length && !lines[j].includes('|'); j++) {
-      const values = cellsOf(lines[j], starts[j]);
+    if (rows.has(i)) continue;
+    const sep = separatorOf(lines[i]);
+    const header = cellsOf(lines[i], starts[i], sep);
+    if (header.length < 3 || header.some((c) => VALUE_CELL_RE.test(c.text)) || header.some((c) => !/\p{L}|%/u.test(c.text)) || header.some((c) => UNIT_COLUMN_RE.test(c.text))) continue;
+    for (let j = i + 1; j < lines.length; j++) {
+      if (RULE_LINE_RE.test(lines[j]) && lines[j].includes('-')) continue;
+      if (separatorOf(lines[j]) !== sep) break;
+      const values = cellsOf(lines[j], starts[j], sep);
       if (values.length !== header.length) break;
       const numeric = values.filter((c) => VALUE_CELL_RE.test(c.text)).length;
       if (numeric < Math.max(2, Math.ceil(values.length / 2))) break;
       const pieces: { text: string; at: number; span?: boolean }[] = [];
       values.forEach((v, k) => {
-        const h = header[k].text;
-        const unitMatch = HEADER_UNIT_RE.exec(h);
-        const unit = unitMatch && HEADER_UNITS.has(unitMatch[2].trim()) ? unitMatch[2].trim() : null;
-        const label = unit ? unitMatch![1] : h;
+        const { label, unit } = headerUnit(header[k].text);
         if (k > 0) pieces.push({ text: '; ', at: v.start });
         pieces.push({ text: `${label} `, at: v.start });
         pieces.push({ text: v.text, at: v.start, span: true });

@@ -335,6 +335,30 @@ function wetBelowDry(drafts: Draft[]): void {
   if (w !== null && dr !== null && w < dr) wet[0].role = 'propellant';
 }
 
+/**
+ * The words that label a figure's cell in a row read from a table ("Start cell A 0.78 A" → "start cell"):
+ * from the last cell break (";", "|", a line's start) to the figure, less a trailing unit or symbol
+ * ("A", "V", "(V)", "[A]", "U", "I"). Empty where the figure has no label of its own.
+ */
+/** The side a table's column names for the part it measures: "Motor in", "Start cell", "Generator", "Load". */
+function stemSide(stem: string): FigureRole {
+  if (/(?<!\p{L})(?:in|input|supply|supplied|drive|driving|motor|starter|start|source|primary|mains|grid|draw|drawn)(?!\p{L})/iu.test(stem)) return 'in';
+  if (/(?<!\p{L})(?:out|output|load|generator|alternator|dynamo|lamps?|secondary|delivered|harvested)(?!\p{L})/iu.test(stem)) return 'out';
+  return null;
+}
+
+function cellStem(text: string, d: Draft): string {
+  const lead = text.slice(Math.max(0, d.start - 60), d.start);
+  const m = /(?:^|[;|\n\t])([^;|\n\t]*)$/u.exec(lead);
+  if (!m) return '';
+  const words = m[1]
+    .trim()
+    .replace(/[^\S\n]*(?:[([][^\])]{1,6}[\])]|\b(?:V|A|mA|kV|U|I|volts?|amps?|voltage|current)\b)[^\S\n]*:?$/iu, '')
+    .trim()
+    .toLowerCase();
+  return words.length >= 2 && /\p{L}/u.test(words) ? words : '';
+}
+
 export function relateFigures(text: string, drafts: Draft[]): void {
   loopParts(text, drafts);
   inputForEvery(text, drafts);
@@ -409,7 +433,11 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const free = candidates.filter((d) => !taken.has(d));
     // (Not a voltage said with another current: "the supply battery delivered 2.5 A while the load took
     // 4.1 A at 9.0 V" — 9.0 V is the load's, and the 2.5 A has no voltage of its own here.)
-    const volt = saidWith(cur, candidates) ?? free.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0] ?? batteryVoltage(text, drafts, cur);
+    // (In a row of a labelled table — "Start cell V 12.4 V; Start cell A 0.78 A; Generator V 13.1 V" — the
+    // voltage whose column names the same part as the current's.)
+    const stem = cellStem(text, cur);
+    const sameColumn = stem ? free.find((d) => cellStem(text, d) === stem) : undefined;
+    const volt = saidWith(cur, candidates) ?? sameColumn ?? free.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0] ?? batteryVoltage(text, drafts, cur);
     if (!volt) continue;
     const i = siOf(cur);
     const v = siOf(volt);
@@ -448,7 +476,10 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // "25 V of reverse bias … a photocurrent of 0.77 mA": a bias supply's voltage, what the supply gives the device.
     const biased = !said && !fills && BIAS_RE.test(text.slice(Math.max(0, volt.start - 20), volt.end + 25));
     const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills || intoLoad ? 'out' : supplied || biased ? 'in' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
-    const wordsRole = between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0);
+    // (Two cells of a table's row, "Start cell V 12.4 V; Start cell A 0.78 A": the side only as their column
+    // names it, not words from the lines above.)
+    const cells = !said && stem !== '' && stem === cellStem(text, volt) && /;/.test(text.slice(first.end, last.start));
+    const wordsRole = cells ? stemSide(stem) : (between ?? roleFor(text, 'power', first.start, last.end, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? roleFor(text, 'power', cur.start, cur.end, 0));
     const others = drafts.filter((d) => (d.kind === 'power' || d.kind === 'energy') && d.role !== null && d.role !== 'aside');
     // (The side of the same power said outright — "7.2 A at 120 V. That's 864 W going in" — before words read
     // further off, where none is said at the pair; where no words give one, beside inputs only, the output.)
@@ -781,5 +812,41 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   }
 
   relateTemperatures(text, drafts);
+  columnTemperatures(text, drafts);
   relateDurations(text, drafts);
+}
+
+/** A column's label that names the hot side it measures: a receiver, a flow, a heater's head, steam. */
+const HOT_COLUMN_RE = /(?<!\p{L})(?:hot|receiver|absorber|collector|flow|supply|head|heater|steam|boiler|furnace|exhaust|flame|combustion|t_?h|th)(?!\p{L})/iu;
+/** A column's label that names the cold side: outdoor air, ambient, a sink, brine, the ground. */
+const COLD_COLUMN_RE = /(?<!\p{L})(?:cold|ambient|outdoor|outside|air[^\S\n]+in|sink|brine|ground|sea|river|room|t_?c|tc|t_?amb|t_?outdoor|t_?out|oat)(?!\p{L})/iu;
+
+/**
+ * Temperatures read from one column of a table ("Receiver 705 °C", "Receiver 720 °C", row after row)
+ * are one side measured at several times, never a hot side and a cold side of one another: the column's
+ * label gives their side, else the side most of them were given, else none.
+ */
+function columnTemperatures(text: string, drafts: Draft[]): void {
+  const groups = new Map<string, Draft[]>();
+  for (const d of drafts) {
+    if (d.kind !== 'temperature' || d.role === 'aside') continue;
+    const stem = cellStem(text, d);
+    if (!stem || !/;/.test(text.slice(d.end, d.end + 60) + text.slice(Math.max(0, d.start - 60), d.start))) continue;
+    groups.set(stem, [...(groups.get(stem) ?? []), d]);
+  }
+  const lineOf = (d: Draft) => (text.slice(0, d.start).match(/\n/g) ?? []).length;
+  for (const [stem, ds] of groups) {
+    // (Row after row: each on a line of its own.)
+    if (ds.length < 2 || new Set(ds.map(lineOf)).size !== ds.length) continue;
+    const hot = HOT_COLUMN_RE.test(stem);
+    const cold = COLD_COLUMN_RE.test(stem);
+    let role: FigureRole;
+    if (hot !== cold) role = hot ? 'hot' : 'cold';
+    else {
+      const hots = ds.filter((d) => d.role === 'hot').length;
+      const colds = ds.filter((d) => d.role === 'cold').length;
+      role = hots > colds ? 'hot' : colds > hots ? 'cold' : null;
+    }
+    for (const d of ds) d.role = role;
+  }
 }

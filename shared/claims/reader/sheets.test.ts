@@ -413,3 +413,46 @@ test("a spacecraft's radiator ('Radiator area: 0.8 m²', 'Unit mass incl. radiat
   // (A house's radiators still speak of space heating: "Our heat pump feeds the radiators … '350 % efficient'".)
   expect(brief('It feeds the radiators at 45 °C and is "350 % efficient".').find(([k]) => k === 'cop')).toEqual(['cop', 'heating', 3.5]);
 });
+
+describe('tables of readings pasted with pipes, semicolons or tabs, units in the header (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  test('a pipe table is read cell by cell under its header, with the header unit; the light given out bounds the push', () => {
+    const text =
+      'A 500 W LED panel on a ballistic pendulum in the vacuum tank, emitting from one face only: a photon rocket.\n\nRun | Electrical in (W) | Optical out (W) | Thrust (µN)\n1 | 500 | 180 | 0.40\n2 | 500 | 182 | 0.41\n';
+    const f = read(text);
+    const thrusts = f.filter((x) => x.kind === 'thrust').map((x) => x.si);
+    expect(thrusts).toHaveLength(2);
+    expect(thrusts[0]).toBeCloseTo(4e-7, 12);
+    expect(thrusts[1]).toBeCloseTo(4.1e-7, 12);
+    expect(f.find((x) => x.text === '180')).toMatchObject({ kind: 'power', role: 'out', si: 180 });
+    // 0.41 µN against 182 W / c = 0.607 µN (c exact, BIPM SI Brochure): within the photon bound.
+    expect(run(text).checks.find((c) => c.check === 'photon-bound')?.finding).toBe('consistent');
+  });
+  test('a header unit written after a space ("T_out °C", "Eff. %") and a rule line under a markdown header', () => {
+    const f = read('| Hot side °C | Cold side °C | Efficiency % |\n|---|---|---|\n| 90 | 30 | 12 |\n| 90 | 50 | 8 |\n');
+    // (The second row's 90 °C restates the first's and may be set aside.)
+    expect(f.filter((x) => x.kind === 'temperature' && x.role !== 'aside').map((x) => [x.role, Math.round(x.si * 100) / 100])).toEqual([
+      ['hot', 363.15],
+      ['cold', 303.15],
+      ['cold', 323.15],
+    ]);
+    expect(f.filter((x) => x.kind === 'efficiency').map((x) => x.si)).toEqual([0.12, 0.08]);
+  });
+  test("one column's temperatures are one side: a receiver logged hourly is no hot and cold pair", () => {
+    const text =
+      'Field log, dish-Stirling unit:\n\nTime   Receiver °C   Net AC (kW)   Dish-to-grid η\n10:00  705           21.9          29.1 %\n12:00  720           24.6          29.6 %\n\nThe engine converts 38 % of the heat the receiver hands it.';
+    expect(run(text).checks.find((c) => c.check === 'carnot')?.finding).not.toBe('breaks');
+    expect(read(text).filter((x) => x.kind === 'temperature').every((x) => x.role === 'hot')).toBe(true);
+  });
+  test("a row's volts and amps pair by the part their columns name; the column names the side", () => {
+    const text =
+      'A starter cell turns the rotor; the generator coil lights a lamp.\n\nTime | Start cell V | Start cell A | Generator V | Generator A\n0:00 | 12.4 | 0.78 | 13.1 | 1.10\n';
+    const powers = read(text).filter((x) => x.kind === 'power');
+    // 12.4 V × 0.78 A = 9.672 W in; 13.1 V × 1.10 A = 14.41 W out (node).
+    expect(powers.map((x) => [Math.round(x.si * 1000) / 1000, x.role])).toEqual([
+      [9.672, 'in'],
+      [14.41, 'out'],
+    ]);
+    expect(run(text).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+});
