@@ -417,3 +417,18 @@ describe('a room or the weather, in a text with no machine that works on heat (i
     expect(f.find((x) => x.kind === 'temperature' && x.si < 290)?.role).toBe('cold');
   });
 });
+
+describe('another machine a claim is set against in marketing words (invented test data)', () => {
+  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+  test('"the same push as a 9.9 hp petrol outboard" is the rival\'s figure, not what the motor gives', () => {
+    const text = 'The E6 delivers 6 hp at the propeller shaft from 5.2 kW of battery power, which the maker says gives "the same push as a 9.9 hp petrol outboard".';
+    expect(extractFigures(text).find((x) => x.text === '9.9 hp')?.role).toBe('aside');
+    // 6 hp = 4,474.2 W (1 hp = 745.699 87 W, NIST SP 811 appendix B) over 5.2 kW: 0.86.
+    expect(firstLaw(text)?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo((6 * 745.69987158227) / 5200, 6);
+  });
+  test('"more thrust than a 2 kW fan", "better than any 90 % motor" are rivals; "more than the 2 kW it draws" is its own input', () => {
+    expect(extractFigures('It gives more thrust than a 2 kW fan.').find((x) => x.kind === 'power')?.role).toBe('aside');
+    expect(extractFigures('Our motor is 96 % efficient, better than any 90 % induction motor.').find((x) => x.si === 0.9)?.role).toBe('aside');
+    expect(firstLaw('It gives out more than the 2 kW it draws: 2.5 kW.')?.finding).toBe('breaks');
+  });
+});

@@ -242,8 +242,10 @@ const OTHERS_AFTER_RE =
 const STANDS_IN_BEFORE_RE = new RegExp(
   '(?<!\\p{L})(?:' +
     // ("as much as 5 kW" is a hedge, "a rate equivalent to 60 kW" a restatement: the thing compared with needs its article.)
-    '(?:as[^\\S\\n]+(?:much|bright|strong|warm|powerful|well)(?:[^\\S\\n]+(?:light|heat|warmth|output|brightness|air|lift|thrust))?[^\\S\\n]+as|(?:the[^\\S\\n]+)?same[^\\S\\n]+(?:light|heat|brightness|output|light output)[^\\S\\n]+as|equivalent to)[^\\S\\n]+(?:(?:a|an|the|its|their|our|one)[^\\S\\n]+)' +
+    '(?:as[^\\S\\n]+(?:much|bright|strong|warm|powerful|well)(?:[^\\S\\n]+(?:light|heat|warmth|output|brightness|air|lift|thrust))?[^\\S\\n]+as|(?:the[^\\S\\n]+)?same[^\\S\\n]+(?:light|heat|brightness|output|light output|push|thrust|pull|lift|power|torque|performance|speed|range|punch|acceleration|results?|effect|work|cooling|heating)[^\\S\\n]+as|equivalent to)[^\\S\\n]+(?:(?:a|an|the|its|their|our|one)[^\\S\\n]+)' +
     '|(?:replac(?:es|ed|ing|e)|in place of|instead of|stands? in for|does the (?:job|work) of|matches|rivals)[^\\S\\n]+(?:(?:a|an|the|its|their|our|one)[^\\S\\n]+)?' +
+    // ("more push than a 9.9 hp petrol outboard", "quieter than any 2 kW genset", "beats a 40 % diesel": another machine.)
+    '|(?:(?:more|less|[\\p{L}]+er)(?:[^\\S\\n]+[\\p{L}-]+)?[^\\S\\n]+than|beats?|beating|outperforms?|outperforming|outpaces?|outdoes|outruns?)[^\\S\\n]+(?:a|an|any)[^\\S\\n]+' +
     ')(?:(?:old|older|typical|standard|conventional|ordinary)[^\\S\\n]+)?(?:[\\p{L}-]+[^\\S\\n]+)?$',
   'iu',
 );
