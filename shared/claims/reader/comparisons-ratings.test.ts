@@ -432,3 +432,33 @@ describe('another machine a claim is set against in marketing words (invented te
     expect(firstLaw('It gives out more than the 2 kW it draws: 2.5 kW.')?.finding).toBe('breaks');
   });
 });
+
+describe('a claim made as a multiple of another machine\'s figure (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  test('"a good heat pump runs at around 400 % … three times more efficient than that" claims a COP of 12', () => {
+    const text =
+      'A good air-source heat pump runs at around 400 % efficiency. Our vortex stage makes the unit three times more efficient than that. Even at −5 °C outside it feeds your radiators at 45 °C.';
+    const cop = extractFigures(text).find((x) => x.kind === 'cop' && x.role !== 'aside');
+    expect(cop?.si).toBe(12);
+    // Carnot heating COP between 268.15 K and 318.15 K = 318.15 / 50 = 6.363 (node); 12 is beyond it.
+    const c = run(text).checks.find((x) => x.check === 'carnot');
+    expect(c?.finding).toBe('breaks');
+    expect(c?.outputs.find((o) => o.name === 'cop_heating_ratio')?.si).toBeCloseTo(12 / (318.15 / 50), 6);
+  });
+  test('"ten times faster than the 200,000 km/s at which light crosses fibre" is 2 × 10⁹ m/s', () => {
+    const r = run('The start-up says its link carries data ten times faster than the 200,000 km/s at which light crosses optical fibre.').checks.find((c) => c.check === 'light-speed');
+    expect(r?.finding).toBe('breaks');
+    // c = 299,792,458 m/s (BIPM SI Brochure).
+    expect(r?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(2e9 / 299_792_458, 6);
+  });
+  test('a figure that is itself the multiple, a bound, an expectation or a larger count make no new figure', () => {
+    for (const text of [
+      'We report a conversion efficiency of 9 %, about three times that of bismuth telluride modules.',
+      'Light travels at about 300,000 km/s in vacuum. A speed of 1.9 million km/s would be more than six times that.',
+      'Our 3 kW bench unit pushed 36 mN in March, and we expect ten times that from the next case.',
+      'The photon bound is about 2.3 µN for 700 W. The claim is over five hundred times that.',
+    ]) {
+      expect(extractFigures(text).some((x) => x.derived?.includes("another's figure"))).toBe(false);
+    }
+  });
+});

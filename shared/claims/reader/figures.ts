@@ -6,6 +6,7 @@
  * the speed of light") added; then the relations (comparisons.ts, relations.ts) and the SI values.
  */
 import { multipliedOut } from './products';
+import { multiplesOfABase } from './multiples';
 import { asideChanges, asideEmbodied, asideSlips, refills, storeChargeSpans, asidePerDistance, meterReadings, restatedEnergies, statedError } from './ledgers';
 import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
 import { C_M_PER_S } from '../figures-vocabulary';
@@ -587,6 +588,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   storeChargeSpans(text, drafts);
   refills(text, drafts);
   relate(text, drafts);
+  multiplesOfABase(text, drafts);
   rolesFromWordLabels(text, drafts);
   restatedEnergies(text, drafts);
   statedError(text, drafts);
