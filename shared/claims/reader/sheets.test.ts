@@ -456,3 +456,11 @@ describe('tables of readings pasted with pipes, semicolons or tabs, units in the
     expect(run(text).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
   });
 });
+
+describe("a column's side named by its form and 'in' or 'out' (invented test data)", () => {
+  test('"DC in (W) | AC out (W)" and "Battery in: … battery out: …" name the sides', () => {
+    const f = read('Inverter check.\n| Point | DC in (W) | AC out (W) |\n| 1 | 520 | 490 |\n| 2 | 1040 | 995 |');
+    expect(f.filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['in', 'out', 'in', 'out']);
+    expect(read('Battery in: 1,020 Wh, battery out: 950 Wh').map((x) => x.role)).toEqual(['in', 'out']);
+  });
+});
