@@ -93,8 +93,11 @@ export function applyEdits(pasted: string, edits: TextEdit[]): Unwrapped | null 
 
 /** A table's cell separator when set as text: a tab, or two spaces or more. */
 const CELL_GAP_RE = /\t+|[^\S\n\t]{2,}/gu;
-/** A cell that is a value: a number first, with or without its unit ("1,250 kg", "0.60", "−7 °C"). */
-const VALUE_CELL_RE = /^[-−+~≈]?\d/u;
+/** A cell that starts with a digit (no header's). */
+const DIGIT_CELL_RE = /^[-−+~≈]?\d/u;
+/** A cell that is a value: a number first, with or without its unit ("1,250 kg", "0.60", "−7 °C", "two kilowatts"). */
+const VALUE_CELL_RE =
+  /^(?:[-−+~≈]?\d|(?:zero|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|sixteen|seventeen|eighteen|nineteen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|thousand)(?![\p{L}]))/iu;
 /** A header cell's unit in brackets: "ΔT (K)", "Qc [W]", "Isp (s)". */
 const HEADER_UNIT_RE = /^(.*?\S)[^\S\n]*[([]([^()[\]\d]{1,8})[)\]]$/u;
 /** A header cell's unit as its last word, after a space: "T_out °C", "Eff. %", "Heat kWh". */
@@ -116,11 +119,13 @@ interface Cell {
 }
 
 /** How a line's cells are set apart: pipes, semicolons (with decimal commas), or tabs and wide spaces. */
-type Separator = '|' | ';' | 'gap';
+type Separator = '|' | ';' | ',' | 'gap';
 
 function separatorOf(line: string): Separator {
   if (line.includes('|')) return '|';
   if (!line.includes('\t') && (line.match(/;/g) ?? []).length >= 2) return ';';
+  // (Commas with no space after them, as a spreadsheet writes them: "Run,Input (W),Thrust (N)".)
+  if (!line.includes('\t') && (line.match(/,(?=\S)/g) ?? []).length >= 2 && !/,[^\S\n]/u.test(line)) return ',';
   return 'gap';
 }
 
@@ -130,7 +135,7 @@ function cellsOf(line: string, offset: number, sep: Separator = 'gap'): Cell[] {
   const push = (text: string, at: number) => {
     if (text.trim()) cells.push({ start: offset + at + (text.length - text.trimStart().length), end: offset + at + text.trimEnd().length, text: text.trim() });
   };
-  const re = sep === '|' ? /\|/gu : sep === ';' ? /;/gu : CELL_GAP_RE;
+  const re = sep === '|' ? /\|/gu : sep === ';' ? /;/gu : sep === ',' ? /,/gu : CELL_GAP_RE;
   re.lastIndex = 0;
   for (const m of line.matchAll(re)) {
     push(line.slice(from, m.index), from);
@@ -171,7 +176,7 @@ export function labelTableRows(pasted: string): Unwrapped | null {
     if (rows.has(i)) continue;
     const sep = separatorOf(lines[i]);
     const header = cellsOf(lines[i], starts[i], sep);
-    if (header.length < 3 || header.some((c) => VALUE_CELL_RE.test(c.text)) || header.some((c) => !/\p{L}|%/u.test(c.text)) || header.some((c) => UNIT_COLUMN_RE.test(c.text))) continue;
+    if (header.length < 3 || header.some((c) => DIGIT_CELL_RE.test(c.text)) || header.some((c) => !/\p{L}|%/u.test(c.text)) || header.some((c) => UNIT_COLUMN_RE.test(c.text))) continue;
     for (let j = i + 1; j < lines.length; j++) {
       if (RULE_LINE_RE.test(lines[j]) && lines[j].includes('-')) continue;
       if (separatorOf(lines[j]) !== sep) break;

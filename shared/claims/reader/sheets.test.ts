@@ -464,3 +464,34 @@ describe("a column's side named by its form and 'in' or 'out' (invented test dat
     expect(read('Battery in: 1,020 Wh, battery out: 950 Wh').map((x) => x.role)).toEqual(['in', 'out']);
   });
 });
+
+describe('bare "In" and "Out" columns, comma-separated rows, numbers in words (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  test('"In (W)   Out (W)" columns give the sides; a gain above one in the rows breaks the first law', () => {
+    const text = 'Bench supply in, resistor bank out.\nFreq (kHz)   In (W)   Out (W)   Gain\n18.0         60.2     71.0      1.18\n19.5         60.0     78.1      1.30';
+    expect(read(text).filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['in', 'out', 'in', 'out']);
+    expect(run(text).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+  test('a comma-separated table is read under its header; "1,150" in a prose line stays one number', () => {
+    const f = read('Sealed frame on an air track; nothing is expelled.\nRun,Input (W),Thrust (N),Duration (s)\n1,150,0.80,60\n2,148,0.78,60');
+    expect(f.filter((x) => x.kind === 'thrust').map((x) => x.si)).toEqual([0.8, 0.78]);
+    expect(read('The unit drew 1,150 W, then 1,200 W.').map((x) => x.si)).toEqual([1150, 1200]);
+  });
+  test('a table of numbers written in words is read', () => {
+    const text = 'Motor-generator set feeding the arc lamp.\nTrial    Input            Output\nFirst    two kilowatts    one thousand five hundred and twenty watts\nSecond   two kilowatts    fifteen hundred watts';
+    // 1,520 W out of 2,000 W in: 0.76.
+    expect(run(text).checks.find((c) => c.check === 'first-law')?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(0.76, 9);
+  });
+  test('lawful logs of machines in tables break nothing', () => {
+    for (const text of [
+      'Heat pump log, air-to-water unit.\n| Day | Outdoor °C | Flow °C | Electricity (kWh) | Heat (kWh) |\n| Mon | 4 | 40 | 20.1 | 72.3 |\n| Tue | 2 | 42 | 23.0 | 78.1 |\n| Total | | | 43.1 | 150.4 |',
+      'Motor on the dynamometer.\n| Load % | Input (W) | Shaft output (W) | Efficiency % |\n| 25 | 310 | 240 | 77.4 |\n| 100 | 1150 | 1010 | 87.8 |',
+      'Inverter check.\n| Point | DC in (W) | AC out (W) |\n| 1 | 520 | 490 |\n| 2 | 2080 | 1990 |',
+      'Transformer test (step-up, 20:1).\n| Primary V | Primary A | Secondary V | Secondary A |\n| 12 | 8.3 | 240 | 0.39 |\n| 12 | 16.1 | 240 | 0.76 |',
+      'Fridge test.\n| Hour | Power draw (W) | Heat removed (W) | Box °C |\n| 1 | 95 | 180 | 8 |\n| 2 | 88 | 165 | 5 |',
+      'Heat pump water heater.\n| Time | Tank °C | Energy used (kWh) | Heat into water (kWh) |\n| 2 h | 35 | 1.1 | 3.6 |\n| 4 h | 52 | 2.3 | 6.8 |',
+    ]) {
+      expect(run(text).checks.filter((c) => c.finding === 'breaks').map((c) => c.check)).toEqual([]);
+    }
+  });
+});
