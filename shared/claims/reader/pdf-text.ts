@@ -146,7 +146,10 @@ function cellsOf(line: string, offset: number, sep: Separator = 'gap'): Cell[] {
 }
 
 /** A header cell's label and the unit it gives its column, if any. */
-function headerUnit(h: string): { label: string; unit: string | null } {
+function headerUnit(full: string): { label: string; unit: string | null } {
+  // (A note in brackets after the unit — "Outdoor °C (mean)", "Power W (avg.)" — is the label's.)
+  const note = /^(.*?\S)[^\S\n]*\((?:mean|avg\.?|average|measured|typ\.?|nominal|max\.?)\)$/iu.exec(full);
+  const h = note ? note[1] : full;
   const bracket = HEADER_UNIT_RE.exec(h);
   if (bracket && HEADER_UNITS.has(bracket[2].trim())) return { label: bracket[1], unit: bracket[2].trim() };
   const trailing = HEADER_TRAILING_UNIT_RE.exec(h);

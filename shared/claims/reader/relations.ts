@@ -6,6 +6,7 @@
  * short of the input, out = in + excess, the output of a stated gain or efficiency, a self-running
  * device's zero input and a heat pump's COP; then temperatures.ts and durations.ts.
  */
+import { NAMED_HEAT_PUMP_RE } from './context';
 import { HARVEST_WORDS, QUANTUM_EFFICIENCY_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
@@ -813,7 +814,27 @@ export function relateFigures(text: string, drafts: Draft[]): void {
 
   relateTemperatures(text, drafts);
   columnTemperatures(text, drafts);
+  heatPumpColumns(text, drafts);
   relateDurations(text, drafts);
+}
+
+/** A heat pump's log: its columns of electricity and of heat ("Elec kWh", "Heat kWh"). */
+const ELECTRICITY_COLUMN_RE = /^(?:elec\.?|electricity|electrical|electric|power[^\S\n]+(?:used|drawn|in)|energy[^\S\n]+used|consumption|compressor)(?:[^\S\n]+(?:used|in|input|drawn|consumed|meter))?$/iu;
+const HEAT_COLUMN_RE = /^(?:heat|heat[^\S\n]+(?:out|output|delivered|supplied|meter|to[^\S\n]+\S+)|thermal|heat[^\S\n]+into[^\S\n]+\S+)$/iu;
+
+/**
+ * In a heat pump's log read from a table, a column of electricity is what it takes and a column of heat
+ * what it gives: "Elec kWh 812; Heat kWh 3,290" (each cell's label, the unit left off).
+ */
+function heatPumpColumns(text: string, drafts: Draft[]): void {
+  if (!NAMED_HEAT_PUMP_RE.test(text)) return;
+  for (const d of drafts) {
+    if ((d.kind !== 'power' && d.kind !== 'energy') || d.role !== null || d.derived) continue;
+    if (!/;/.test(text.slice(d.end, d.end + 40) + text.slice(Math.max(0, d.start - 40), d.start))) continue;
+    const stem = cellStem(text, d).replace(/[^\S\n]+(?:k?wh|[kmg]?w|mj|gj|kj|j)$/iu, '').trim();
+    if (ELECTRICITY_COLUMN_RE.test(stem)) d.role = 'in';
+    else if (HEAT_COLUMN_RE.test(stem)) d.role = 'out';
+  }
 }
 
 /** A column's label that names the hot side it measures: a receiver, a flow, a heater's head, steam. */

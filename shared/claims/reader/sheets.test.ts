@@ -495,3 +495,19 @@ describe('bare "In" and "Out" columns, comma-separated rows, numbers in words (i
     }
   });
 });
+
+describe("a heat pump's log in a table: electricity in, heat out, a note after the unit (invented test data)", () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  test('"Elec kWh   Heat kWh   Outdoor °C (mean)   Flow °C (mean)" under a heat pump named is a Carnot check', () => {
+    const text =
+      'Village hall heat pump, three weeks on the new controller.\nWeek   Elec kWh   Heat kWh   Outdoor °C (mean)   Flow °C (mean)\n1      212        718        5.2                 42\n2      240        782        3.1                 43';
+    const f = read(text);
+    expect(f.filter((x) => x.kind === 'energy').map((x) => x.role)).toEqual(['in', 'out', 'in', 'out']);
+    expect(f.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['cold', 'hot', 'cold', 'hot']);
+    expect(run(text).checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+  });
+  test('"Time (min)" keeps its unit: the bracket is no note', () => {
+    const f = read('Heat run.\nTime (min)  Winding °C  Frame °C  Ambient °C\n60          96          63        23\n120         104         68        24');
+    expect(f.filter((x) => x.kind === 'duration').map((x) => x.si)).toEqual([3600, 7200]);
+  });
+});
