@@ -827,15 +827,24 @@ const HEAT_COLUMN_RE = /^(?:heat|heat[^\S\n]+(?:out|output|delivered|supplied|me
  * what it gives: "Elec kWh 812; Heat kWh 3,290" (each cell's label, the unit left off).
  */
 function heatPumpColumns(text: string, drafts: Draft[]): void {
-  if (!NAMED_HEAT_PUMP_RE.test(text)) return;
+  const heatPump = NAMED_HEAT_PUMP_RE.test(text);
   for (const d of drafts) {
     if ((d.kind !== 'power' && d.kind !== 'energy') || d.role !== null || d.derived) continue;
-    if (!/;/.test(text.slice(d.end, d.end + 40) + text.slice(Math.max(0, d.start - 40), d.start))) continue;
+    // (A row of a table, "Week 1; Elec 212 kWh; Heat 718 kWh": two cell breaks on its line, a label of a few words.)
+    const from = text.lastIndexOf('\n', d.start - 1) + 1;
+    const to = text.indexOf('\n', d.end);
+    if ((text.slice(from, to < 0 ? text.length : to).match(/;/g) ?? []).length < 2) continue;
     const stem = cellStem(text, d).replace(/[^\S\n]+(?:k?wh|[kmg]?w|mj|gj|kj|j)$/iu, '').trim();
-    if (ELECTRICITY_COLUMN_RE.test(stem)) d.role = 'in';
-    else if (HEAT_COLUMN_RE.test(stem)) d.role = 'out';
+    if (stem.split(/\s+/).length > 4) continue;
+    if (heatPump && ELECTRICITY_COLUMN_RE.test(stem)) d.role = 'in';
+    else if (heatPump && HEAT_COLUMN_RE.test(stem)) d.role = 'out';
+    // (Any table: a column said to be what is drawn or what the load takes — "Supply drawn", "Lamp load".)
+    else if (TABLE_IN_RE.test(stem) !== TABLE_OUT_RE.test(stem)) d.role = TABLE_IN_RE.test(stem) ? 'in' : 'out';
   }
 }
+/** A column's label that names what goes in, or what comes out, whatever the machine. */
+const TABLE_IN_RE = /(?<!\p{L})(?:in|input|supply|supplied|drawn|draw|consumed|consumption|mains|grid)(?!\p{L})/iu;
+const TABLE_OUT_RE = /(?<!\p{L})(?:out|output|load|lamps?|delivered|harvested|exported|yield|generated)(?!\p{L})/iu;
 
 /** A column's label that names the hot side it measures: a receiver, a flow, a heater's head, steam. */
 const HOT_COLUMN_RE = /(?<!\p{L})(?:hot|receiver|absorber|collector|flow|supply|head|heater|steam|boiler|furnace|exhaust|flame|combustion|t_?h|th)(?!\p{L})/iu;

@@ -511,3 +511,12 @@ describe("a heat pump's log in a table: electricity in, heat out, a note after t
     expect(f.filter((x) => x.kind === 'duration').map((x) => x.si)).toEqual([3600, 7200]);
   });
 });
+
+describe("a table's column said to be drawn or to be the load (invented test data)", () => {
+  test('"Supply drawn (W)" goes in and "Lamp load (W)" comes out; words of prose around a semicolon give no side', () => {
+    const f = read('Bench run.\n| Hour | Supply drawn (W) | Lamp load (W) |\n| 1 | 64 | 60 |\n| 2 | 65 | 60 |');
+    expect(f.filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['in', 'out', 'in', 'out']);
+    const prose = read('A wet fortnight in the middle; best day 29.8 kWh on the 21st, worst 4.1 kWh on the 9th; exported approx 310 kWh.');
+    expect(prose.find((x) => x.text === '4.1 kWh')?.role).not.toBe('in');
+  });
+});
