@@ -462,3 +462,25 @@ describe('a claim made as a multiple of another machine\'s figure (invented test
     }
   });
 });
+
+describe('marketing words around a propellant-free claim and a heat pump\'s percentage (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  test('"puts a small ion engine to shame without carrying a gram of propellant" claims no propellant; a rival "of that power" is no propulsor of its own', () => {
+    const text =
+      'Our sealed microwave resonator "puts a small ion engine to shame without carrying a gram of propellant". In vacuum-chamber runs it gives 4–9 mN of thrust for 0.5–1.5 kW of microwave input. A xenon ion engine of that power gives around 30–50 mN.';
+    const r = run(text).checks.find((c) => c.check === 'photon-bound');
+    expect(r?.finding).toBe('breaks');
+    // The end kindest to the claim: 4 mN against 1.5 kW / c (c exact, BIPM SI Brochure) = 799.4.
+    expect(r?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(0.004 / (1500 / 299_792_458), 3);
+  });
+  test('"proving the effect is not ion wind" names no ion wind', () => {
+    const text = 'Our asymmetric-capacitor thruster produced 0.9 mN at 40 W in a vacuum chamber at 10⁻⁶ torr, proving the effect is not ion wind.';
+    expect(run(text).checks.find((c) => c.check === 'photon-bound')?.finding).toBe('breaks');
+  });
+  test('a heat pump that "returned 380 % on our rig" has a heating COP of 3.8; a rival\'s percentage and a saving are not its COP', () => {
+    const text = 'At 7 °C outdoor air and 35 °C flow, the air-to-water heat pump returned 380 % on our rig.';
+    expect(extractFigures(text).find((x) => x.kind === 'cop')).toMatchObject({ si: 3.8, role: 'heating' });
+    expect(run(text).checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+    expect(extractFigures('Since the heat pump went in, our bills showed 120 % more savings than forecast.').some((x) => x.kind === 'cop')).toBe(false);
+  });
+});

@@ -13,7 +13,7 @@ import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
 import { asideStatedBounds, statedBound } from './bounds';
 import { comparedPercent, relate } from './comparisons';
-import { BEFORE_WINDOW, BURNER_RE, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
+import { BEFORE_WINDOW, BURNER_RE, COOLING_MACHINE_RE, HEAT_PUMP_RE, NAMED_HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
 import { asideApparentSpeeds, asideIdealDeltaV, asideOtherTopics, asideSignals, asideThresholds, asideWorkedBounds, rolesFromLineLabels, rolesFromWordLabels } from './topics';
 import { insertAfter, siOf, typedSi, type Draft } from './draft';
 import { G0 } from '../../checks/constants';
@@ -601,6 +601,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   asideSignals(text, drafts);
   asideThresholds(drafts);
   weightHeldUp(text, drafts);
+  heatPumpPercents(text, drafts, unreadPercents);
   asideOtherPercents(text, drafts, unreadPercents);
   asideLoneAmbient(text, drafts);
 
@@ -667,6 +668,35 @@ const NOT_AN_EFFICIENCY_AFTER_RE =
  * so the reader sees it was read and that no check uses it. (A boiler's is an efficiency; beside a COP, one
  * above 100 % is another heat pump's COP.)
  */
+/** Before a percentage: a reading taken or a result given ("returned 380 %", "the report shows 450 %"). */
+const READING_BEFORE_RE =
+  /(?<!\p{L})(?:returned|returns|achieved|achieves|showed|shows|show|delivered|delivers|managed|manages|measured|reached|reaches|hit|hits|gave|gives|recorded|logged|scored|came[^\S\n]+in[^\S\n]+at|runs?[^\S\n]+at|ran[^\S\n]+at|works?[^\S\n]+at|worked[^\S\n]+at|rated[^\S\n]+at|quotes?|quoted|claims?|claimed)[^\S\n]+(?:(?:about|around|roughly|some|nearly|almost|over|just[^\S\n]+over|a[^\S\n]+steady|an?[^\S\n]+average[^\S\n]+of|~|≈)[^\S\n]+)?$/iu;
+
+/**
+ * A percentage over 100 said of a heat pump with no word of what it is ("the AW-9 returned 380 % on our
+ * rig", "the commissioning report shows 450 % at 7 °C outside"): its heating COP written as a percentage,
+ * the trade's loose "efficiency". Another machine's (a rival's, last year's) is set aside by the pass
+ * after this one.
+ */
+function heatPumpPercents(text: string, drafts: Draft[], unread: UnreadPercent[]): void {
+  if (!NAMED_HEAT_PUMP_RE.test(text)) return;
+  for (let k = unread.length - 1; k >= 0; k--) {
+    const u = unread[k];
+    const value = Number(u.num);
+    const top = u.upperNum !== undefined ? Number(u.upperNum) : value;
+    if (!(value >= 100) || !(top <= 1500)) continue;
+    if (NOT_AN_EFFICIENCY_AFTER_RE.test(text.slice(u.end, u.end + 30).replace(/^[^\S\n]*%/u, ''))) continue;
+    if (!READING_BEFORE_RE.test(text.slice(Math.max(0, u.start - 40), u.start)) || BURNER_RE.test(sentenceAround(text, u.start, u.end))) continue;
+    if (OTHER_MACHINE_BEFORE_RE.test(text.slice(windowStart(text, u.start, 0, 60), u.start))) continue;
+    const d: Draft = { start: u.start, end: u.end, kind: 'cop', quantity: String(Number((value / 100).toPrecision(12))), role: 'heating', assumption: 'a percentage over 100 said of a heat pump, read as its heating COP' };
+    if (u.upperNum !== undefined) d.upper = String(Number((top / 100).toPrecision(12)));
+    const pos = drafts.findIndex((x) => x.start > u.start);
+    if (pos < 0) drafts.push(d);
+    else drafts.splice(pos, 0, d);
+    unread.splice(k, 1);
+  }
+}
+
 function asideOtherPercents(text: string, drafts: Draft[], unread: UnreadPercent[]): void {
   const own = drafts.filter((d) => (d.kind === 'efficiency' || d.kind === 'cop') && d.role !== 'aside' && !d.derived);
   if (own.length === 0) return;
