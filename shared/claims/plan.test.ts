@@ -1823,3 +1823,16 @@ describe("a generator's ratings and the loads it carries (invented test data)", 
     expect(run(text).checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
   });
 });
+
+describe('a pair of outputs after a rating, and a cold-gas thruster set against a photon thruster (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  it('"Rated output is 1 kW electric and 6 kW of heat": both are outputs', () => {
+    expect(extractFigures('The Stirling unit sits beside your boiler. Rated output is 1 kW electric and 6 kW of heat.').filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['out', 'out']);
+  });
+  it('"a tiny fraction of what a cold-gas thruster gives" is no propellant of the photon thruster', () => {
+    const r = run('The photon thruster, a flat array of laser diodes firing aft, draws 40 W from the bus and produces 0.08 µN. That is a tiny fraction of what a cold-gas thruster gives.').checks.find((c) => c.check === 'photon-bound');
+    expect(r?.finding).toBe('consistent');
+    // 0.08 µN against 40 W / c (c exact, BIPM SI Brochure): 0.5996.
+    expect(r?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(8e-8 / (40 / 299_792_458), 6);
+  });
+});

@@ -354,10 +354,12 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
   // in a pair, the second's side named — the first's too.
   for (let i = drafts.length - 2; i >= 0; i--) {
     const d = drafts[i];
-    if (!energyLike(d) || d.derived || d.role !== null) continue;
+    if (!energyLike(d) || d.derived) continue;
     const next = drafts.find((o) => o.start >= d.end && o !== d);
-    if (!next || next.kind !== d.kind || next.derived || (next.role !== 'in' && next.role !== 'out')) continue;
-    if (FORM_PAIR_GAP_RE.test(text.slice(d.end, next.start))) d.role = next.role;
+    if (!next || next.kind !== d.kind || next.derived || !FORM_PAIR_GAP_RE.test(text.slice(d.end, next.start))) continue;
+    // ("Rated output is 1 kW electric and 6 kW of heat": the first's side, the second's too.)
+    if (d.role === null && (next.role === 'in' || next.role === 'out')) d.role = next.role;
+    else if (next.role === null && (d.role === 'in' || d.role === 'out')) next.role = d.role;
   }
   // "gives 20 kW to the radiators and 4 kW to hot water": a list of where one flow goes, its verb said once.
   for (let i = 1; i < drafts.length; i++) {
