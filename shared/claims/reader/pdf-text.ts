@@ -179,6 +179,21 @@ export function labelTableRows(pasted: string): Unwrapped | null {
     if (rows.has(i)) continue;
     const sep = separatorOf(lines[i]);
     const header = cellsOf(lines[i], starts[i], sep);
+    // ("Mass item   t" over "Propellant   420": a list of items under a header that gives only the unit.)
+    if (header.length === 2 && HEADER_UNITS.has(header[1].text.replace(/^[([]|[)\]]$/gu, '')) && !DIGIT_CELL_RE.test(header[0].text)) {
+      const unit = header[1].text.replace(/^[([]|[)\]]$/gu, '');
+      for (let j = i + 1; j < lines.length; j++) {
+        if (separatorOf(lines[j]) !== sep) break;
+        const values = cellsOf(lines[j], starts[j], sep);
+        if (values.length !== 2 || !/\p{L}/u.test(values[0].text) || !/^[-−+~≈]?[\d.,]+$/u.test(values[1].text)) break;
+        rows.set(j, [
+          { text: `${values[0].text}: `, at: values[0].start },
+          { text: values[1].text, at: values[1].start, span: true },
+          { text: ` ${unit}`, at: values[1].end - 1 },
+        ]);
+      }
+      continue;
+    }
     if (header.length < 3 || header.some((c) => DIGIT_CELL_RE.test(c.text)) || header.some((c) => !/\p{L}|%/u.test(c.text)) || header.some((c) => UNIT_COLUMN_RE.test(c.text))) continue;
     for (let j = i + 1; j < lines.length; j++) {
       if (RULE_LINE_RE.test(lines[j]) && lines[j].includes('-')) continue;

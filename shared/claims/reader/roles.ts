@@ -290,7 +290,7 @@ const NEGATED_LEAD_RE = /(?<!\p{L})(?:no|without|zero|never|nor)[^\S\n]+(?:(?:an
 
 /** "dry mass, including …, is", "empty mass:": the words of a craft's mass after the burn, a clause set off by commas allowed between. */
 const DRY_MASS_LEAD_RE =
-  /(?<!\p{L})(?:dry|empty|burn-?out|final)[^\S\n]+mass(?:[^\S\n]*,[^,;.!?\n]{0,120},)?[^\S\n]*(?:(?:is|was|of|at|comes to|totals?|totalling|:|=)[^\S\n]*)?(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
+  /(?<!\p{L})(?:dry|empty|burn-?out|final)[^\S\n]+mass(?:[^\S\n]*,[^,;.!?\n]{0,120},|[^\S\n]+(?:incl\.?|including|with|w\/|plus|\+)[^\S\n]+[\p{L}-]+(?:[^\S\n]+[\p{L}-]+){0,2})?[^\S\n]*(?:(?:is|was|of|at|comes to|totals?|totalling|:|=)[^\S\n]*)?(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
 /** "at burnout, with …, the stack weighs": the mass at the end of the burn. */
 const BURNOUT_LEAD_RE =
   /(?<!\p{L})at[^\S\n]+(?:burn-?out|engine cut-?off|cut-?off|MECO|shut-?down|the end of the burn)(?:[^\S\n]*,[^;.!?\n]{0,160},)?[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,4}?(?:weighs?|weighed|is|was|masses|has a mass of|comes to)[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;

@@ -520,3 +520,22 @@ describe("a table's column said to be drawn or to be the load (invented test dat
     expect(prose.find((x) => x.text === '4.1 kWh')?.role).not.toBe('in');
   });
 });
+
+describe("a stage's masses in a list under a unit, a dry mass 'incl. payload' (invented test data)", () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  test('"Mass item   t" over "Propellant   420": tonnes; the rocket equation runs', () => {
+    const text = 'Concept table for an upper stage.\nMass item             t\nPropellant            420\nDry + payload         120\nTotal at ignition     540\nExhaust speed (vacuum): 3.6 km/s. Δv we claim for the stage: 4.4 km/s.';
+    expect(read(text).filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual([
+      ['propellant', 420000],
+      ['dry', 120000],
+      ['wet', 540000],
+    ]);
+    const r = run(text).checks.find((c) => c.check === 'rocket-equation');
+    // Tsiolkovsky: 3,600 × ln(540 / 120) = 5,414.7 m/s (node); 4.4 km/s is within it.
+    expect(r?.finding).toBe('consistent');
+    expect(r?.outputs.find((o) => o.name === 'dv')?.si).toBeCloseTo(3600 * Math.log(540 / 120), 6);
+  });
+  test('"Stage dry mass incl. payload" is the dry mass', () => {
+    expect(read('Stage dry mass incl. payload           1.8 kg').map((x) => x.role)).toEqual(['dry']);
+  });
+});
