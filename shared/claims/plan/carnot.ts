@@ -29,6 +29,14 @@ function sidesApart(temps: Figure[]): boolean {
   return !!hot && !!cold && cold.si < (hot.upper?.si ?? hot.si);
 }
 
+/** Whether every temperature given is said of the same side, 'hot' or 'cold' (and which). */
+function oneSideOnly(temps: Figure[]): 'hot' | 'cold' | null {
+  const roles = new Set(temps.filter((t) => t.role !== 'aside').map((t) => t.role));
+  if (roles.size !== 1) return null;
+  const [role] = [...roles];
+  return role === 'hot' || role === 'cold' ? role : null;
+}
+
 /** An engine said to work on one reservoir: nothing colder to reject heat to. */
 const SINGLE_RESERVOIR_RE = /(?<!\p{L})(?:no (?:cold|colder|cooler) (?:sink|side|reservoir|body|end)|(?:single|one|a single) (?:heat )?reservoir|(?:air|heat|water|sea|ocean|atmosphere|room air|ambient air|ambient heat) alone|nothing colder|without (?:a |any )?(?:cold|colder|cooler) (?:sink|side|reservoir|body))(?!\p{L})/iu;
 
@@ -249,6 +257,18 @@ export function planCarnot(b: Basis): HeatReading {
       need(
         'carnot',
         ['the temperature of the other side (the text gives the same temperature for both, or a cold side that is not colder)'],
+        cop ? 'A heat pump or refrigerator is bounded by the Carnot COP of the temperatures it works between.' : 'A heat engine is bounded by the Carnot efficiency of the temperatures it works between.',
+        uniq([efficiency, cop, ...temps]),
+      ),
+    );
+  } else if ((engineEfficiency || copForCarnot) && temps.length >= 2 && oneSideOnly(temps) !== null) {
+    // Several temperatures all said of one side ("Outdoor temp +7 °C … +2 °C … −7 °C" in a heat pump's
+    // leaflet): the other side is not given, and none of them stands in for it.
+    const side = oneSideOnly(temps);
+    needs.push(
+      need(
+        'carnot',
+        [side === 'cold' ? 'the temperature of the hot side (every temperature the text gives is of the cold side)' : 'the temperature of the cold side (every temperature the text gives is of the hot side)'],
         cop ? 'A heat pump or refrigerator is bounded by the Carnot COP of the temperatures it works between.' : 'A heat engine is bounded by the Carnot efficiency of the temperatures it works between.',
         uniq([efficiency, cop, ...temps]),
       ),

@@ -6,12 +6,11 @@
  * short of the input, out = in + excess, the output of a stated gain or efficiency, a self-running
  * device's zero input and a heat pump's COP; then temperatures.ts and durations.ts.
  */
-import { NAMED_HEAT_PUMP_RE } from './context';
 import { HARVEST_WORDS, QUANTUM_EFFICIENCY_WORDS, SELF_RUNNING_WORDS } from '../figures-vocabulary';
 import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import { FIGURE_SI_UNIT, type FigureRole } from '../types';
-import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, paragraphOfAnotherMachine, sentenceAround, windowStart } from './context';
+import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, NAMED_HEAT_PUMP_RE, paragraphAround, paragraphOfAnotherMachine, sentenceAround, windowStart } from './context';
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor, SUPPLY_GIVES_LEAD_RE, TO_DEVICE_PART_AFTER_RE } from './roles';
@@ -851,6 +850,10 @@ const HOT_COLUMN_RE = /(?<!\p{L})(?:hot|receiver|absorber|collector|flow|supply|
 /** A column's label that names the cold side: outdoor air, ambient, a sink, brine, the ground. */
 const COLD_COLUMN_RE = /(?<!\p{L})(?:cold|ambient|outdoor|outside|air[^\S\n]+in|sink|brine|ground|sea|river|room|t_?c|tc|t_?amb|t_?outdoor|t_?out|oat)(?!\p{L})/iu;
 
+/** A cooling machine's columns: where it rejects heat, and what it cools. */
+const COOLER_HOT_COLUMN_RE = /(?<!\p{L})(?:ambient|outdoor|outside|oat|condens\w*|discharge|heat[^\S\n]+rejection)(?!\p{L})/iu;
+const COOLER_COLD_COLUMN_RE = /(?<!\p{L})(?:chw\w*|chilled|evaporat\w*|box|cabinet|freezer|fridge|room|space|supply|leaving|product|suction|brine|glycol)(?!\p{L})/iu;
+
 /**
  * Temperatures read from one column of a table ("Receiver 705 °C", "Receiver 720 °C", row after row)
  * are one side measured at several times, never a hot side and a cold side of one another: the column's
@@ -868,8 +871,11 @@ function columnTemperatures(text: string, drafts: Draft[]): void {
   for (const [stem, ds] of groups) {
     // (Row after row: each on a line of its own.)
     if (ds.length < 2 || new Set(ds.map(lineOf)).size !== ds.length) continue;
-    const hot = HOT_COLUMN_RE.test(stem);
-    const cold = COLD_COLUMN_RE.test(stem);
+    // (A cooling machine rejects its heat to the ambient or outdoor air: that column is its warm side, and
+    // the chilled water or the box its cold one.)
+    const cooler = COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text);
+    const hot = cooler ? COOLER_HOT_COLUMN_RE.test(stem) : HOT_COLUMN_RE.test(stem);
+    const cold = cooler ? COOLER_COLD_COLUMN_RE.test(stem) : COLD_COLUMN_RE.test(stem);
     let role: FigureRole;
     if (hot !== cold) role = hot ? 'hot' : 'cold';
     else {

@@ -539,3 +539,17 @@ describe("a stage's masses in a list under a unit, a dry mass 'incl. payload' (i
     expect(read('Stage dry mass incl. payload           1.8 kg').map((x) => x.role)).toEqual(['dry']);
   });
 });
+
+describe('a log whose temperatures are all of one side, and a chiller\'s ambient column (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  test("a heat pump's leaflet giving only outdoor temperatures needs the flow temperature", () => {
+    const text = 'Leaflet for an air-to-water heat pump:\nOutdoor temp | Heating output | Power input | COP\n+7 °C | 10.2 kW | 1.76 kW | 5.8\n−7 °C | 7.4 kW | 2.47 kW | 3.0';
+    const r = run(text);
+    expect(r.checks.find((c) => c.check === 'carnot')).toBeUndefined();
+    expect(r.needs.find((n) => n.check === 'carnot')?.missing.join(' ')).toMatch(/hot side/);
+  });
+  test("a chiller's ambient column is its warm side and the chilled water its cold one", () => {
+    const f = read('Trend export, air-cooled chiller. Temperatures in °F.\nTime    CHWS °F   Ambient °F   kW\n14:00   44        95           11.4\n15:00   45        97           12.1');
+    expect(f.filter((x) => x.kind === 'temperature' && x.role !== 'aside').map((x) => x.role)).toEqual(['cold', 'hot', 'cold', 'hot']);
+  });
+});
