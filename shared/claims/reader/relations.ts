@@ -832,7 +832,9 @@ function heatPumpColumns(text: string, drafts: Draft[]): void {
     // (A row of a table, "Week 1; Elec 212 kWh; Heat 718 kWh": two cell breaks on its line, a label of a few words.)
     const from = text.lastIndexOf('\n', d.start - 1) + 1;
     const to = text.indexOf('\n', d.end);
-    if ((text.slice(from, to < 0 ? text.length : to).match(/;/g) ?? []).length < 2) continue;
+    // (Every cell of it a short label and a number: prose with semicolons is no row.)
+    const cellsOfLine = text.slice(from, to < 0 ? text.length : to).split(';');
+    if (cellsOfLine.length < 3 || cellsOfLine.filter((c) => !/\d/u.test(c)).length > 1 || !cellsOfLine.every((c) => c.trim().split(/\s+/u).length <= 7)) continue;
     const stem = cellStem(text, d).replace(/[^\S\n]+(?:k?wh|[kmg]?w|mj|gj|kj|j)$/iu, '').trim();
     if (stem.split(/\s+/).length > 4) continue;
     if (heatPump && ELECTRICITY_COLUMN_RE.test(stem)) d.role = 'in';
