@@ -152,6 +152,9 @@ function harvestedOut(text: string, inF: Figure, outF: Figure): boolean {
   // ("… while their house used 2,400 kWh from the grid", "the village uses 60 kW at peak": a household's or a
   // community's own use, said of it by name, may share the harvester's sentence.)
   const consumerSaid = CONSUMER_USE_BEFORE_RE.test(text.slice(Math.max(0, inF.start - 45), inF.start));
+  // ("Turbine output 12 kWh; Load 9 kWh; Battery change 3 kWh": a harvester's output beside what its
+  // battery took or gave — a store it charges, no supply of it.)
+  if (RENEWABLE_RE.test(text) && HARVESTER_RE.test(clauseBefore(text, outF)) && STORE_NAMED_RE.test(clauseBefore(text, inF)) && !HARVESTER_RE.test(clauseBefore(text, inF))) return true;
   return (
     RENEWABLE_RE.test(text) &&
     HARVESTER_RE.test(outNear) &&
@@ -159,6 +162,13 @@ function harvestedOut(text: string, inF: Figure, outF: Figure): boolean {
     (consumerSaid || (!HARVESTER_RE.test(text.slice(Math.max(0, inF.start - 40), inF.end + 30)) && !sameSentence(text, inF, outF) && !HARVESTER_RE.test(inSentence)))
   );
 }
+/** The words of a figure's own clause before it: back to a full stop, semicolon, pipe, comma or line's end. */
+function clauseBefore(text: string, f: Figure): string {
+  const before = text.slice(Math.max(0, f.start! - 35), f.start!);
+  return before.split(/[;|,\n]|[.!?](?=\s)/u).pop() ?? '';
+}
+/** A store named as the thing a figure is of: "Battery change", "battery charged", "storage in/out". */
+const STORE_NAMED_RE = /(?<!\p{L})(?:batter(?:y|ies)|accumulators?|storage|store|state[^\S\n]+of[^\S\n]+charge|SoC)(?!\p{L})/iu;
 /** Sunlight, wind or water harvested, named anywhere in the text. */
 const RENEWABLE_RE = /(?<!\p{L})(?:solar|PV|photovoltaic|sun(?:light|shine)?|wind[- ]?turbines?|windmills?|hydro\w*|water[- ]?wheels?|tidal|wave[- ]power)(?!\p{L})/iu;
 /** A household's or a community's own use, said of it just before the figure: "their house used", "the village uses". */

@@ -4,6 +4,7 @@
  * on and its first sentence headed by the finding.
  */
 import { textForFocus } from './items';
+import { readableLayout } from '../reader/pdf-text';
 import { checks } from '../../checks';
 import { CheckInputError, runCheck, type CheckRun } from '../../checks/run';
 import type { CheckName } from '../../checks/types';
@@ -126,7 +127,30 @@ function saidWithin(text: string, check: CheckName): string | null {
   return null;
 }
 
-export function runClaimChecks(figures: Figure[], ctx: PlanContext = {}): { checks: ClaimCheckRun[]; needs: ClaimCheckNeed[]; notes: string[] } {
+/**
+ * The text as the reader read it: a table's value rows with each cell after its column's label ("Turbine
+ * output 12 kWh; Load 9 kWh" for "| 12 | 9 |") and a PDF's broken words joined, with the figures' places
+ * moved to match — so the planner's words near a figure are its column's words, as they were the reader's.
+ * The same figures (ids, quantities) otherwise; unchanged where the text has no such layout.
+ */
+export function asReadView(figures: Figure[], ctx: PlanContext): { figures: Figure[]; ctx: PlanContext } {
+  if (!ctx.text) return { figures, ctx };
+  const layout = readableLayout(ctx.text);
+  if (!layout) return { figures, ctx };
+  // (Each pasted offset to the last place of the read text it gave: a cell's value, not its label's words.)
+  const at = new Map<number, number>();
+  layout.toPasted.forEach((p, i) => at.set(p, i));
+  const moved = figures.map((f) => {
+    if (f.start === null || f.end === null) return f;
+    const start = at.get(f.start);
+    if (start === undefined) return f;
+    return { ...f, start, end: start + (f.end - f.start) };
+  });
+  return { figures: moved, ctx: { ...ctx, text: layout.text } };
+}
+
+export function runClaimChecks(pasted: Figure[], pastedCtx: PlanContext = {}): { checks: ClaimCheckRun[]; needs: ClaimCheckNeed[]; notes: string[] } {
+  let { figures, ctx } = asReadView(pasted, pastedCtx);
   // (Figures focused on one item of a list: the other items' words are no words of it.)
   if (ctx.text) ctx = { ...ctx, text: textForFocus(ctx.text, figures) };
   const { plans, needs, notes } = planFor(figures, ctx);
@@ -237,7 +261,8 @@ function longDocument(text: string, figures: Figure[]): boolean {
 }
 
 /** The plans as the contract's PlannedCheck (inputs at the lower ends): for tests and the screen. */
-export function planChecks(figures: Figure[], ctx: PlanContext = {}): { planned: PlannedCheck[]; needs: ClaimCheckNeed[]; notes: string[] } {
+export function planChecks(pasted: Figure[], pastedCtx: PlanContext = {}): { planned: PlannedCheck[]; needs: ClaimCheckNeed[]; notes: string[] } {
+  const { figures, ctx } = asReadView(pasted, pastedCtx);
   const { plans, needs, notes } = planFor(figures, ctx);
   return {
     planned: plans.map((p) => ({ check: p.check, inputs: p.inputs(() => 'low'), uses: p.uses.map((f) => f.id), why: p.why, assumptions: p.assumptions })),
