@@ -1836,3 +1836,24 @@ describe('a pair of outputs after a rating, and a cold-gas thruster set against 
     expect(r?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo(8e-8 / (40 / 299_792_458), 6);
   });
 });
+
+describe('a table pasted with pipes: the planner reads each cell under its column (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  const TABLE = 'Wind turbine and battery, two days.\n| Day | Turbine output (kWh) | Load (kWh) | Battery change (kWh) |\n| 1 | 12 | 9 | 3 |\n| 2 | 5 | 8 | -3 |';
+  it("a turbine's output beside its battery's change is no ledger of one machine", () => {
+    const r = run(TABLE);
+    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+    expect(r.needs.find((n) => n.check === 'first-law')?.missing.join(' ')).toMatch(/outside flow/u);
+  });
+  it('the same words in prose are read alike', () => {
+    const r = run('Day 1: wind turbine output 12 kWh; load 9 kWh; battery change 3 kWh.');
+    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+  it('a sealed box with a battery, set against its own output, still breaks the first law', () => {
+    // 3 kWh in from its battery, 12 kWh out: over-unity ratio 12/3 = 4 (arithmetic).
+    const r = run('The sealed box drew 3 kWh from its battery and gave out 12 kWh over the week.');
+    const fl = r.checks.find((c) => c.check === 'first-law');
+    expect(fl?.finding).toBe('breaks');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(4, 6);
+  });
+});

@@ -150,9 +150,10 @@ export function asReadView(figures: Figure[], ctx: PlanContext): { figures: Figu
 }
 
 export function runClaimChecks(pasted: Figure[], pastedCtx: PlanContext = {}): { checks: ClaimCheckRun[]; needs: ClaimCheckNeed[]; notes: string[] } {
-  let { figures, ctx } = asReadView(pasted, pastedCtx);
+  const view = asReadView(pasted, pastedCtx);
+  const figures = view.figures;
   // (Figures focused on one item of a list: the other items' words are no words of it.)
-  if (ctx.text) ctx = { ...ctx, text: textForFocus(ctx.text, figures) };
+  const ctx = view.ctx.text ? { ...view.ctx, text: textForFocus(view.ctx.text, figures) } : view.ctx;
   const { plans, needs, notes } = planFor(figures, ctx);
   const out: ClaimCheckRun[] = [];
   for (const p of plans) {
