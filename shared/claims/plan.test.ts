@@ -1857,3 +1857,17 @@ describe('a table pasted with pipes: the planner reads each cell under its colum
     expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(4, 6);
   });
 });
+
+describe("a site's generation beside its own use (invented test data)", () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  it('"| PV generation (kWh) | House consumption (kWh) |" is no ledger of one machine', () => {
+    const r = run('Rooftop array, a week in June.\n| Day | PV generation (kWh) | House consumption (kWh) | Surplus (kWh) |\n| Mon | 24 | 10 | 14 |\n| Tue | 20 | 11 | 9 |');
+    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+  it('a generator said to consume less than it generates, with no sun or wind named, still breaks the first law', () => {
+    // 1 kW in, 5 kW out: over-unity ratio 5 (arithmetic).
+    const fl = run('Our generator has a consumption of 1 kW and a generation of 5 kW.').checks.find((c) => c.check === 'first-law');
+    expect(fl?.finding).toBe('breaks');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(5, 6);
+  });
+});

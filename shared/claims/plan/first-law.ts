@@ -154,7 +154,11 @@ function harvestedOut(text: string, inF: Figure, outF: Figure): boolean {
   const consumerSaid = CONSUMER_USE_BEFORE_RE.test(text.slice(Math.max(0, inF.start - 45), inF.start));
   // ("Turbine output 12 kWh; Load 9 kWh; Battery change 3 kWh": a harvester's output beside what its
   // battery took or gave — a store it charges, no supply of it.)
-  if (RENEWABLE_RE.test(text) && HARVESTER_RE.test(clauseBefore(text, outF)) && STORE_NAMED_RE.test(clauseBefore(text, inF)) && !HARVESTER_RE.test(clauseBefore(text, inF))) return true;
+  // ("| PV generation (kWh) | House consumption (kWh) |": a site's own use beside what its array gave.)
+  if (RENEWABLE_RE.test(text) && (HARVESTER_RE.test(clauseBefore(text, outF)) || GENERATION_RE.test(clauseBefore(text, outF)))) {
+    const inClause = clauseBefore(text, inF);
+    if ((STORE_NAMED_RE.test(inClause) || SITE_USE_RE.test(inClause)) && !HARVESTER_RE.test(inClause)) return true;
+  }
   return (
     RENEWABLE_RE.test(text) &&
     HARVESTER_RE.test(outNear) &&
@@ -169,8 +173,12 @@ function clauseBefore(text: string, f: Figure): string {
 }
 /** A store named as the thing a figure is of: "Battery change", "battery charged", "storage in/out". */
 const STORE_NAMED_RE = /(?<!\p{L})(?:batter(?:y|ies)|accumulators?|storage|store|state[^\S\n]+of[^\S\n]+charge|SoC)(?!\p{L})/iu;
+/** What a harvesting site gave, as a label: "Generation", "Yield", "Production". */
+const GENERATION_RE = /(?<!\p{L})(?:generation|generated|yield|yields|production|produced)(?!\p{L})/iu;
+/** What a site or household used, as a label: "Consumption", "House use", "Site load", "Demand". */
+const SITE_USE_RE = /(?<!\p{L})(?:consumption|usage|use|load|loads|demand)(?!\p{L})/iu;
 /** Sunlight, wind or water harvested, named anywhere in the text. */
-const RENEWABLE_RE = /(?<!\p{L})(?:solar|PV|photovoltaic|sun(?:light|shine)?|wind[- ]?turbines?|windmills?|hydro\w*|water[- ]?wheels?|tidal|wave[- ]power)(?!\p{L})/iu;
+const RENEWABLE_RE = /(?<!\p{L})(?:solar|rooftop|PV|photovoltaic|sun(?:light|shine)?|wind[- ]?turbines?|windmills?|hydro\w*|water[- ]?wheels?|tidal|wave[- ]power)(?!\p{L})/iu;
 /** A household's or a community's own use, said of it just before the figure: "their house used", "the village uses". */
 const CONSUMER_USE_BEFORE_RE =
   /(?<!\p{L})(?:the|their|our|my|your|his|her|a|each)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:village|town|house|home|homes|household|households|farm|school|site|community|island|cabin|cottage|building|office|factory|hamlet|flat)[^\S\n]+(?:uses|used|consumes|consumed|needs|needed|takes|took|draws|drew)(?:[^\S\n]+(?:about|some|roughly|only|just|up[^\S\n]+to|around))?[^\S\n]*$/iu;
