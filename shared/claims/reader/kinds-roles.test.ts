@@ -212,3 +212,16 @@ describe('errata (invented test data)', () => {
     expect(out?.si).toBeCloseTo(150 * 745.6999, 1); // SP 811 prints the factor to seven digits
   });
 });
+
+describe('what a store gave back, as a share (issue 11, invented test data)', () => {
+  const eff = (text: string) => extractFigures(text).filter((f) => f.kind === 'efficiency').map((f) => f.si);
+  it('"returned 81 % of what went in" and a table\'s "Returned" column are efficiencies', () => {
+    expect(eff('The Example Dynamics flywheel returned 81 % of what went in.')).toEqual([0.81]);
+    expect(eff('Cycle | E_in (kWh) | E_out (kWh) | Returned\n1 | 1.02 | 0.83 | 81 %\n2 | 1.00 | 0.82 | 82 %')).toEqual([0.81, 0.82]);
+    expect(eff('The box gives back 130 % of what was put into it.')).toEqual([1.3]);
+  });
+  it('a return on money or a heat pump\'s "returned 380 %" is no such efficiency', () => {
+    expect(eff('Investors were promised returns of 12 % a year.')).toEqual([]);
+    expect(extractFigures('On our rig the air-to-water heat pump returned 380 %.').find((f) => f.text.startsWith('380'))?.kind).toBe('cop');
+  });
+});

@@ -88,7 +88,9 @@ const FACTOR_BEFORE_RE =
   /(?<!\p{L})(?:output|out|yield|production)[^.;!?\n]{0,40}(?:exceeds?|exceeding|is (?:higher|greater|larger|more) than|surpass\w*|outstrips?)[^.;!?\n]{0,30}(?:input|consumption|supply)[^.;!?\n]{0,20}by (?:a factor of|a ratio of)(?:[^\S\n]+(?:at least|about|roughly|some|nearly|over))?[^\S\n]*$/iu;
 /** "150 % of its input power", "120 % of the energy supplied": an output as a share of the input. */
 const PERCENT_OF_INPUT_RE =
-  /[^\S\n]*of[^\S\n]+(?:what|whatever|all|everything)[^\S\n]+(?:(?:that[^\S\n]+)?(?:it|they|the[^\S\n]+[\p{L}-]+|you|we))[^\S\n]+(?:draws?|takes?|consumes?|uses?|gets?|is (?:given|fed|supplied)|(?:is )?put in|puts? in|pulls?)(?!\p{L})|[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|(?:energy|power) (?:in|supplied|consumed|drawn|fed|put|(?:it|they) (?:receives?|takes?|gets?|draws?|consumes?)|received|taken in)|supply|electrical input)(?!\p{L})/iuy;
+  /[^\S\n]*of[^\S\n]+(?:what|whatever|all|everything)[^\S\n]+(?:that[^\S\n]+)?(?:went|goes|go|was[^\S\n]+put|is[^\S\n]+put|were[^\S\n]+put|had[^\S\n]+gone)[^\S\n]+in(?:to[^\S\n]+(?:it|them|the[^\S\n]+[\p{L}-]+))?(?!\p{L})|[^\S\n]*of[^\S\n]+(?:what|whatever|all|everything)[^\S\n]+(?:(?:that[^\S\n]+)?(?:it|they|the[^\S\n]+[\p{L}-]+|you|we))[^\S\n]+(?:draws?|takes?|consumes?|uses?|gets?|is (?:given|fed|supplied)|(?:is )?put in|puts? in|pulls?)(?!\p{L})|[^\S\n]*of[^\S\n]+(?:its|the|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:input|consumption|(?:energy|power) (?:in|supplied|consumed|drawn|fed|put|(?:it|they) (?:receives?|takes?|gets?|draws?|consumes?)|received|taken in)|supply|electrical input)(?!\p{L})/iuy;
+/** A label of its own, a table's cell or a list's item, of what a store gave back: "; Returned 81 %", "| Recovered | 74 % |". */
+const RETURNED_LABEL_RE = /(?:^|[;|\n])[^\S\n]*(?:returned|given[^\S\n]+back|recovered|energy[^\S\n]+(?:returned|recovered)|back[^\S\n]+out)[^\S\n]*:?[^\S\n]*$/iu;
 /** "1.3 W for each watt in", "1.3 J back per joule supplied": a gain written with a unit. */
 export const GAIN_PER_UNIT_RE = new RegExp(
   String.raw`[^\S\n]*(?:(?:of[^\S\n]+)?(?:(?:electrical|electric|mechanical|thermal|useful|shaft)[^\S\n]+)?(?:energy|power|output|heat|electricity)[^\S\n]+(?:(?:from|out[^\S\n]+of)[^\S\n]+(?:the|its|a|an|your|our)[^\S\n]+(?:[\p{L}\p{N}°.,-]+[^\S\n]+){1,3}?(?=(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]))?)?(?:(?:back|out|returned)(?:[^\S\n]+(?:of|from)[^\S\n]+(?:the|its|a|an)[^\S\n]+[\p{L}-]+)?[^\S\n]+)?(?:(?:for|per)[^\S\n]+(?:each|every|one)[^\S\n]+(?:single[^\S\n]+)?|per[^\S\n]+(?=(?:watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|W|J)s?[^\S\n]+${PER_UNIT_IN_WORDS}))(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?!\p{L})`,
@@ -166,6 +168,8 @@ export function readPercent(text: string, start: number, end: number, floor: num
     }
     return { kind: 'efficiency', factor: 1, unit: '%', ofInput: true };
   }
+  // ("Cycle 1; E_in 1.02 kWh; E_out 0.83 kWh; Returned 81 %": a store's column of what it gave back.)
+  if (RETURNED_LABEL_RE.test(before) && !HEAT_PUMP_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '' };
   PERCENT_MORE_RE.lastIndex = end;
   if (PERCENT_MORE_RE.test(text)) return { kind: 'efficiency', factor: 0.01, unit: '', more: true };
   if (/(?<!\p{L})(?:output|out|production|yield)[^.;!?\n]{0,40}(?:exceeds?|exceeding|surpass\w*|is higher than|is greater than|beats?|tops?)[^.;!?\n]{0,40}(?:input|consumption|supply)[^.;!?\n]{0,15}?by[^\S\n]*(?:about|some|roughly|nearly|over|fully)?[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 120), start))) {
