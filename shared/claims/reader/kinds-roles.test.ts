@@ -225,3 +225,12 @@ describe('what a store gave back, as a share (issue 11, invented test data)', ()
     expect(extractFigures('On our rig the air-to-water heat pump returned 380 %.').find((f) => f.text.startsWith('380'))?.kind).toBe('cop');
   });
 });
+
+describe('a bracketed note between a label and its colon (issue 11, invented test data)', () => {
+  const role = (text: string) => extractFigures(text).map((f) => f.role);
+  it('"Electricity in (sub-meter): 512 kWh" is what went in, "Heat out (meter):" what came out', () => {
+    expect(role('Electricity in (sub-meter): 512 kWh')).toEqual(['in']);
+    expect(role('Heat out (heat meter): 1,840 kWh')).toEqual(['out']);
+    expect(role('Input (W, measured): 40 W')).toEqual(['in']);
+  });
+});
