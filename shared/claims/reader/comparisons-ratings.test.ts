@@ -484,3 +484,15 @@ describe('marketing words around a propellant-free claim and a heat pump\'s perc
     expect(extractFigures('Since the heat pump went in, our bills showed 120 % more savings than forecast.').some((x) => x.kind === 'cop')).toBe(false);
   });
 });
+
+describe('old machines someone keeps are no earlier device (issue 11, invented test data)', () => {
+  it('"restores old steam engines and says the launch engine is 9 % efficient": the launch engine\'s figures', () => {
+    const f = extractFigures('My grandad restores old steam engines and he says the launch engine he is rebuilding is 9 % efficient, with the boiler at 350 °F and the condenser at 100 °F. He also says it makes 5 PS.');
+    expect(f.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['hot', 'cold']);
+    expect(f.find((x) => x.kind === 'efficiency')?.role).not.toBe('aside');
+  });
+  it('"the older model drew 2.1 kW" is still an earlier device', () => {
+    const f = extractFigures('The older model drew 2.1 kW. This new unit gives 3 kW from 4 kW of input.');
+    expect(f.find((x) => x.text === '2.1 kW')?.role).toBe('aside');
+  });
+});

@@ -258,11 +258,16 @@ const COMPARED_BEFORE_RE =
  * that names both ("the earlier box gave 500 W from 100 W; the new unit gave 90 W"), the clause of the
  * earlier one.
  */
+/** Right before old machines: someone keeps them ("restores", "collects", "repairs", "rebuilds"). */
+const KEEPER_VERB_BEFORE_RE = /(?<!\p{L})(?:restor(?:es|ed|ing|e)|collect(?:s|ed|ing)?|repair(?:s|ed|ing)?|rebuild(?:s|ing)?|rebuilt|fix(?:es|ed|ing)?|maintain(?:s|ed|ing)?|restorer[^\S\n]+of|collector[^\S\n]+of)[^\S\n]+(?:(?:the|some|a[^\S\n]+few|many)[^\S\n]+)?$/iu;
 function earlierDeviceSaid(text: string, d: Draft): boolean {
   const sentence = sentenceAround(text, d.start, d.end);
   // "85 mN …, far more than earlier devices of the same kind": the earlier devices are what the
   // claim's figure, said before them, is set above; they have no figure of their own here.
-  const earlier = EARLIER_DEVICE_RE.exec(sentence);
+  let earlier = EARLIER_DEVICE_RE.exec(sentence);
+  // ("My grandad restores old steam engines and says the launch engine he is rebuilding is 9 % efficient":
+  // old machines someone restores or collects are a pastime, not an earlier device the figures are of.)
+  if (earlier && KEEPER_VERB_BEFORE_RE.test(sentence.slice(Math.max(0, earlier.index - 25), earlier.index))) earlier = null;
   const at = text.lastIndexOf(sentence, d.start);
   // ("replaced the old oil boiler … with a ground-source heat pump, … it delivers 3.2": the new one's figure.)
   const replacedWith = /(?<!\p{L})replac(?:ed|es|ing)[^\S\n]+(?:the|its|their|our|my|an?)[^\S\n]+(?:old|previous|earlier|former|original)(?!\p{L})[^.;!?\n]*?[^\S\n]with[^\S\n]/iu.exec(sentence);
