@@ -172,3 +172,34 @@ describe('each kind, in symbols and in words (invented test data)', () => {
     ]);
   });
 });
+
+describe('old, CGS and trade units (NIST SP 811 Appendix B.8; invented test data)', () => {
+  const one = (text: string) => {
+    const figures = extractFigures(text);
+    expectWellFormed(text, figures);
+    expect(figures).toHaveLength(1);
+    return figures[0];
+  };
+  test.each([
+    // [text, kind, SI value, relative tolerance, source]
+    ['The Example Dynamics pump lifts water at 33,000 ft-lb/min.', 'power', 33_000 * 2.259697e-2, SEVEN], // SP 811 B.8: ft·lbf/min → W 2.259 697 E-02
+    ['Its engine gives 400 foot-pounds per second.', 'power', 400 * 1.355818, SEVEN], // SP 811 B.8: ft·lbf/s → W 1.355 818 E+00
+    ['The launch engine made 2 H.P. on the brake.', 'power', 2 * 745.6999, SEVEN], // SP 811 B.8: horsepower (550 ft·lbf/s) → W
+    ['The pamphlet promises 1e7 erg/s from the wheel.', 'power', 1, EXACT], // SP 811 B.8: erg/s → W 1.0 E-07 (exact)
+    ['The coil pushed with a force of 50,000 dynes.', 'thrust', 0.5, EXACT], // SP 811 B.8: dyne → N 1.0 E-05 (exact)
+    ['The exercise gives a force of 20 poundals.', 'thrust', 20 * 0.138255, SEVEN], // SP 811 B.8: poundal → N 1.382 550 E-01
+    ['Over the shift the engine gave 2 hp-h.', 'energy', 2 * 745.6999 * 3600, SEVEN], // SP 811 B.8 horsepower × 3600 s
+    ['The meter logged 12 kW-hr.', 'energy', 12 * 3.6e6, EXACT], // SP 811 B.8: kW·h → J 3.6 E+06 (exact)
+    ['The boiler burned 300 B.Th.U. per hour.', 'power', 300 * 0.2930711, SEVEN], // SP 811 B.8: Btu_IT/h → W 2.930 711 E-01
+    ['The works used 3 toe last year.', 'energy', 3 * 41.868e9, EXACT], // 10⁷ kcal_IT; SP 811 B.8: calorie_IT → J 4.1868 (exact)
+    ['The winch did 1,200 foot-pounds of work.', 'energy', 1200 * 1.355818, SEVEN], // SP 811 B.8: ft·lbf → J 1.355 818 E+00
+  ] as [string, FigureKind, number, number][])('%s', (text, kind, si, rel) => {
+    const f = one(text);
+    expect(f.kind).toBe(kind);
+    expectRelClose(f.si, si, rel);
+  });
+  test('the work a machine does is its output; a torque in foot-pounds is no energy', () => {
+    expect(one('A small motor does 2.7 × 10¹¹ erg of work each minute.').role).toBe('out');
+    expect(extractFigures('The engine makes 3 ft-lb of torque at idle.')).toEqual([]);
+  });
+});

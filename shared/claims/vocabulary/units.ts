@@ -45,6 +45,11 @@ const GRAM_IN_KG = 0.001;
  */
 const METRIC_HP_W = 735.49875;
 
+/** Foot pound-force in J: 0.3048 m × 4.448 221 615 260 5 N (NIST SP 811 Appendix B.8 prints 1.355 818). */
+const FOOT_POUND_J = 0.3048 * 4.4482216152605;
+/** Mechanical horsepower in W: 550 ft·lbf/s (NIST SP 811 Appendix B.8 prints 745.699 9). */
+const HP_W = 550 * FOOT_POUND_J;
+
 /** The speed of light in vacuum, m/s (exact; SI Brochure, 9th ed.), for "1.3 times the speed of light". */
 export const C_M_PER_S = 299_792_458;
 
@@ -82,6 +87,9 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     symbols: ['gf'],
     words: ['gram-force', 'grams-force', 'g of thrust', 'gram of thrust', 'grams of thrust', 'g of lift', 'gram of lift', 'grams of lift', 'g of force', 'grams of force'],
   },
+  // CGS force and the poundal (NIST SP 811 Appendix B.8: dyne = 1e-5 N; poundal = 0.453 592 37 kg × 0.3048 m/s², 0.138 255 N).
+  { kind: 'thrust', unit: 'N', factor: 1e-5, symbols: ['dyn'], words: ['dyne', 'dynes'] },
+  { kind: 'thrust', unit: 'N', factor: 0.45359237 * 0.3048, symbols: ['pdl'], words: ['poundal', 'poundals'] },
   { kind: 'thrust', unit: 'kgf', factor: 1e-6, symbols: ['mgf'], words: ['milligram-force', 'milligrams-force', 'mg of thrust', 'milligrams of thrust'] },
 
   // Power
@@ -110,6 +118,18 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     words: ['BTU per hour', 'BTUs per hour', 'Btu per hour', 'British thermal units per hour', 'British thermal unit per hour', 'BTU an hour', 'BTUs an hour', 'Btu an hour', 'BTU a hour', 'British thermal units an hour'],
   },
 
+  // Old and specialist notations of the same units: "H.P.", "B.Th.U. per hour".
+  { kind: 'power', unit: 'hp', symbols: ['H.P.', 'h.p.', 'H. P.', 'I.H.P.', 'B.H.P.', 'ihp', 'IHP'], words: ['indicated horsepower', 'indicated horse-power'] },
+  { kind: 'power', unit: 'BTU/h', symbols: ['B.Th.U./h', 'B.Th.U./hr', 'B.t.u./h', 'B.t.u./hr'], words: ['B.Th.U. per hour', 'B.t.u. per hour'] },
+  // Work per unit time in foot-pounds (NIST SP 811 Appendix B.8: ft·lbf/s = 1.355 818 W, ft·lbf/min =
+  // 2.259 697 E-02 W), the power of old engineering texts ("33,000 foot-pounds per minute" is 1 hp).
+  { kind: 'power', unit: 'W', factor: FOOT_POUND_J, symbols: ['ft·lbf/s', 'ft-lbf/s', 'ft lbf/s', 'ft·lb/s', 'ft-lb/s', 'ft-lbs/s', 'ft.lb/s'], words: ['foot-pounds per second', 'foot-pound per second', 'foot pounds per second', 'ft-lb per second', 'ft-lbs per second'] },
+  { kind: 'power', unit: 'W', factor: FOOT_POUND_J / 60, symbols: ['ft·lbf/min', 'ft-lbf/min', 'ft lbf/min', 'ft·lb/min', 'ft-lb/min', 'ft-lbs/min', 'ft.lb/min'], words: ['foot-pounds per minute', 'foot-pound per minute', 'foot pounds per minute', 'ft-lb per minute', 'ft-lbs per minute'] },
+  // Kilogram-force metres per second (the metric horsepower is 75 of them; NIST SP 811 Appendix B.8, kgf = 9.806 65 N).
+  { kind: 'power', unit: 'W', factor: 9.80665, symbols: ['kgf·m/s', 'kgf-m/s', 'kgfm/s', 'kp·m/s', 'kpm/s', 'kp-m/s'], words: ['kilogram-metres per second', 'kilogram-meters per second', 'kilogram-force metres per second'] },
+  // Ergs per second (CGS; 1 erg = 1e-7 J exactly, NIST SP 811 Appendix B.8).
+  { kind: 'power', unit: 'W', factor: 1e-7, symbols: ['erg/s', 'ergs/s', 'erg s⁻¹', 'erg s^-1'], words: ['ergs per second', 'erg per second'] },
+
   // A ton of refrigeration, 12 000 BTU_IT/h (NIST SP 811 Appendix B.8: 3.516 853 E+03 W): said outright,
   // or as a bare "ton" of a cooling machine or a heat pump ("a 3-ton heat pump", "the chiller carries about
   // 3 tons"), which the reader keeps only where the text names such a machine (`refrigeration`).
@@ -136,7 +156,7 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'energy', unit: 'MJ', symbols: ['MJ'], words: ['megajoule', 'megajoules'] },
   { kind: 'energy', unit: 'GJ', symbols: ['GJ'], words: ['gigajoule', 'gigajoules'] },
   { kind: 'energy', unit: 'Wh', symbols: ['Wh', 'W·h', 'W⋅h', 'wh'], words: ['watt-hour', 'watt-hours'] },
-  { kind: 'energy', unit: 'kWh', symbols: ['kWh', 'KWh', 'kW·h', 'kW⋅h', 'kwh'], words: ['kilowatt-hour', 'kilowatt-hours'] },
+  { kind: 'energy', unit: 'kWh', symbols: ['kWh', 'KWh', 'kW·h', 'kW⋅h', 'kwh', 'KWH', 'kW-hr', 'kW-hrs', 'kW hr', 'kWhr', 'kW-h', 'kw-hr', 'KW-hr', 'KWHR', 'kWhrs'], words: ['kilowatt-hour', 'kilowatt-hours'] },
   { kind: 'energy', unit: 'MWh', symbols: ['MWh', 'MW·h', 'MW⋅h'], words: ['megawatt-hour', 'megawatt-hours'] },
   { kind: 'energy', unit: 'GWh', symbols: ['GWh'], words: ['gigawatt-hour', 'gigawatt-hours'] },
   { kind: 'energy', unit: 'TWh', symbols: ['TWh'], words: ['terawatt-hour', 'terawatt-hours'] },
@@ -150,6 +170,13 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'energy', unit: 'BTU', factor: 1e5, symbols: ['thm'], words: ['therm', 'therms'] },
   { kind: 'energy', unit: 'BTU', factor: 1e6, symbols: ['MMBtu', 'MMBTU', 'mmBtu'], words: ['million BTU', 'million Btu', 'million BTUs', 'million British thermal units'] },
   { kind: 'energy', unit: 'BTU', symbols: ['BTU', 'Btu', 'btu', 'BTUs', 'Btus'], words: ['British thermal unit', 'British thermal units'] },
+  // CGS and foot-pound energy (NIST SP 811 Appendix B.8: erg = 1e-7 J; ft·lbf = 1.355 818 J), a horsepower
+  // over an hour (hp × 3600 s), and a tonne of oil equivalent (10⁷ kcal_IT = 41.868 GJ).
+  { kind: 'energy', unit: 'J', factor: 1e-7, symbols: ['erg', 'ergs'], words: ['erg', 'ergs'] },
+  { kind: 'energy', unit: 'J', factor: FOOT_POUND_J, symbols: ['ft·lbf', 'ft-lbf', 'ft lbf', 'ft·lbs', 'ft.lbf'], words: ['foot-pound', 'foot-pounds', 'foot pound', 'foot pounds', 'foot-pound-force', 'foot-pounds-force'] },
+  { kind: 'energy', unit: 'J', factor: HP_W * 3600, symbols: ['hp·h', 'hp-h', 'hp-hr', 'hp·hr', 'hph', 'HP-hr', 'HP-h'], words: ['horsepower-hour', 'horsepower-hours', 'horsepower hour', 'horsepower hours', 'horse-power-hour', 'horse-power-hours'] },
+  { kind: 'energy', unit: 'J', factor: 41.868e9, symbols: ['toe'], words: ['tonne of oil equivalent', 'tonnes of oil equivalent', 'ton of oil equivalent', 'tons of oil equivalent'] },
+  { kind: 'energy', unit: 'BTU', symbols: ['B.Th.U.', 'B.Th.U', 'B.t.u.', 'B.T.U.'], words: ['B.Th.U.s'] },
   { kind: 'energy', unit: 'J', factor: CALORIE_J, symbols: ['cal'], words: ['calorie', 'calories'] },
   { kind: 'energy', unit: 'kJ', factor: CALORIE_J, symbols: ['kcal'], words: ['kilocalorie', 'kilocalories'] },
 
