@@ -371,6 +371,20 @@ export function tokenize(text: string): NumberToken[] {
     for (let i = tokens.length - 1; i >= 0; i--) if (tokens[i].start >= m.index! && tokens[i].start < end) tokens.splice(i, 1);
     push(m.index!, end, String(whole + a / b), false);
   }
+  // "4½ amperes", "1¼ horse-power", "¾ hp": a vulgar fraction, alone or after a whole number.
+  for (const m of text.matchAll(/(?<![\p{N}.,])(\d{1,4})?([½¼¾⅓⅔⅛⅜⅝⅞⅕⅖⅗⅘⅙⅚])(?![\p{N}])/gu)) {
+    const end = m.index! + m[0].length;
+    if (!unitAt(text, end)) continue;
+    const whole = m[1] !== undefined ? Number(m[1]) : 0;
+    for (let i = tokens.length - 1; i >= 0; i--) if (tokens[i].start >= m.index! && tokens[i].start < end) tokens.splice(i, 1);
+    push(m.index!, end, String(whole + VULGAR_FRACTIONS[m[2]]), false);
+  }
   tokens.sort((a, b) => a.start - b.start);
   return tokens;
 }
+
+/** Unicode's vulgar fractions (Number Forms and Latin-1), by value. */
+const VULGAR_FRACTIONS: Record<string, number> = {
+  '½': 1 / 2, '¼': 1 / 4, '¾': 3 / 4, '⅓': 1 / 3, '⅔': 2 / 3, '⅛': 1 / 8, '⅜': 3 / 8, '⅝': 5 / 8, '⅞': 7 / 8,
+  '⅕': 1 / 5, '⅖': 2 / 5, '⅗': 3 / 5, '⅘': 4 / 5, '⅙': 1 / 6, '⅚': 5 / 6,
+};

@@ -203,3 +203,25 @@ describe('old, CGS and trade units (NIST SP 811 Appendix B.8; invented test data
     expect(extractFigures('The engine makes 3 ft-lb of torque at idle.')).toEqual([]);
   });
 });
+
+describe('vulgar fractions and old horsepower (NIST SP 811 Appendix B.8; invented test data)', () => {
+  test('"4½ amperes at 110 volts" and "1¼ horse-power": 495 W in, 1¼ hp out', () => {
+    const f = extractFigures('The motor of the Example Dynamics patent, taking a current of 4½ amperes at a pressure of 110 volts, shall give off at its pulley not less than 1¼ horse-power.');
+    expect(f.find((x) => x.kind === 'current')?.si).toBe(4.5);
+    expect(f.find((x) => x.kind === 'power' && x.role === 'in')?.si).toBeCloseTo(495, 9); // 4.5 A × 110 V
+    expectRelClose(f.find((x) => x.kind === 'power' && x.role === 'out')!.si, 1.25 * 745.6999, SEVEN); // SP 811 B.8 horsepower
+  });
+  test('brake and electrical horse-power: the electric horsepower is 746 W (SP 811 B.8)', () => {
+    const f = extractFigures('It delivered 1.28 brake horse-power at the pulley for 0.8 electrical horse-power taken from the mains.');
+    expectRelClose(f.find((x) => x.role === 'out')!.si, 1.28 * 745.6999, SEVEN); // SP 811 B.8 horsepower (550 ft·lbf/s)
+    expectRelClose(f.find((x) => x.role === 'in')!.si, 0.8 * 746, EXACT); // SP 811 B.8 horsepower (electric) 7.46 E+02 W
+  });
+  test('a fraction with no unit after it is left alone; "The ½ hp motor turns the generator" is its input', () => {
+    expect(extractFigures('Mix ½ of the batch with water.')).toEqual([]);
+    const f = extractFigures('The ½ hp motor turns the generator, and the generator puts out 5 hp.');
+    expect(f.map((x) => [x.si.toFixed(3), x.role])).toEqual([
+      [(0.5 * 745.6999).toFixed(3), 'in'],
+      [(5 * 745.6999).toFixed(3), 'out'],
+    ]);
+  });
+});

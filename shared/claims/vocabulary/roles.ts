@@ -68,6 +68,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:heat|power|energy|electricity|fuel|current|work) (?:supplied|fed|given) (?:in)?to (?:the|its|a|an) (?:[\\w-]+ ){0,2}?(?:engines?|motors?|devices?|machines?|heaters?|converters?|modules?|cells?|reactors?|thrusters?|coils?|generators?|prototypes?|rigs?)(?: (?:was|is|were|of|came to|amounted to|totall?ed))?',
     ],
     after: [
+      // "The ½ hp motor turns the generator": a motor's rating, the motor driving the generator, is what the generator is given.
+      '(?:electric |drive |driving )?motors?(?: (?:that|which))? (?:(?:really|then|just|only) )?(?:turns?|drives?|runs?|run|spins?|powers?) (?:the|a|an|its|our|their|this|that) (?:[\\w-]+ ){0,2}?(?:generators?|alternators?|dynamos?|generator heads?|gensets?)(?!\\p{L})',
       // "ran nine days on a single 10 kWh charge": the store's charge is what the device had to run on.
       '(?:charge|battery charge|full charge)(?= *(?:[,.;:)]|$|and|of|in|lasts?|lasted|runs?|ran|will|would|gives?|gave|is|was))',
       // "with 180 W of heat passing through it": the heat a thermoelectric module takes.
