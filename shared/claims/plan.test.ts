@@ -1871,3 +1871,26 @@ describe("a site's generation beside its own use (invented test data)", () => {
     expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(5, 6);
   });
 });
+
+describe("a vehicle's range against its pack: consumption × distance (invented test data)", () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  const firstLaw = (text: string) => run(text).checks.find((c) => c.check === 'first-law');
+  it('a van said to do 600–700 km per charge from a 38–42 kWh pack at 19–21 kWh/100 km breaks the first law', () => {
+    const fl = firstLaw('The Example Motors van will do "between 600 and 700 km per charge" from a 38–42 kWh battery, its turbine topping the pack up as it drives. The brochure gives 19–21 kWh/100 km laden.');
+    expect(fl?.finding).toBe('breaks');
+    // End most favourable to the claim: 19 kWh/100 km × 600 km = 114 kWh against 42 kWh → 2.714 (arithmetic).
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(114 / 42, 6);
+  });
+  it('miles per kWh: 4 mi/kWh over 280 miles is 70 kWh, within a 75 kWh pack', () => {
+    const fl = firstLaw('The saloon gets 4 miles per kWh and its 75 kWh pack gives a range of 280 miles.');
+    expect(fl?.finding).toBe('consistent');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(70 / 75, 6);
+  });
+  it('an e-bike within its pack is consistent; a solar car in sun is not set against its pack', () => {
+    // 6 Wh/km × 70 km = 420 Wh against 625 Wh → 0.672 (arithmetic).
+    const fl = firstLaw('• 625 Wh battery\n• 250 W mid-drive, assistance to 25 km/h\n• Range: 70–90 km in Eco (about 6 Wh/km average)');
+    expect(fl?.finding).toBe('consistent');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(420 / 625, 6);
+    expect(run('Our 5 m² solar array gave 7.7 kWh over the day. The car used 5.5 kWh per 100 km and we covered 120 km on its 4.9 kWh battery.').checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+});

@@ -157,7 +157,8 @@ function harvestedOut(text: string, inF: Figure, outF: Figure): boolean {
   // ("| PV generation (kWh) | House consumption (kWh) |": a site's own use beside what its array gave.)
   if (RENEWABLE_RE.test(text) && (HARVESTER_RE.test(clauseBefore(text, outF)) || GENERATION_RE.test(clauseBefore(text, outF)))) {
     const inClause = clauseBefore(text, inF);
-    if ((STORE_NAMED_RE.test(inClause) || SITE_USE_RE.test(inClause)) && !HARVESTER_RE.test(inClause)) return true;
+    const storeAfter = /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+)?(?:batter(?:y|ies)|packs?|accumulators?)(?!\p{L})/iu.test(text.slice(inF.end, inF.end + 30));
+    if ((STORE_NAMED_RE.test(inClause) || SITE_USE_RE.test(inClause) || storeAfter) && !HARVESTER_RE.test(inClause)) return true;
   }
   return (
     RENEWABLE_RE.test(text) &&

@@ -11,6 +11,7 @@ import type { FigureRole } from '../types';
 import { COOLING_MACHINE_RE, paragraphAround, sentenceAround } from './context';
 import { sentenceOf, siOf, typedSi, type Draft } from './draft';
 import { signalSpeeds } from './signal-speeds';
+import { vehicleRanges } from './vehicle-ranges';
 
 /** A propellant mass fraction: "propellant is 90 % of the mass", "90 % propellant by mass", "a propellant fraction of 85 %". */
 const PROPELLANT_FRACTION_RE =
@@ -148,6 +149,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     else drafts.splice(at, 0, d);
   }
   signalSpeeds(text, drafts);
+  vehicleRanges(text, drafts);
   const energyLike = (d: Draft) => d.kind === 'power' || d.kind === 'energy';
   // "The linear alternator by itself converts at 90 %": the efficiency of a part, beside the machine's
   // own, is not the machine's.

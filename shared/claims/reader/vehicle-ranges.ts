@@ -1,0 +1,96 @@
+/**
+ * The energy a vehicle's stated range takes (the claim reader, shared/claims/reader.ts, pass 3): a
+ * consumption per distance ("about 6 Wh/km", "19–21 kWh/100 km", "4 miles per kWh") times the range the
+ * text claims ("Range: 70–90 km", "between 600 and 700 km per charge") is the energy the drive must give
+ * over that range — the output the first law sets against the pack's energy. Read only where the text
+ * gives one consumption and one range; ranges multiply end by end (the check takes the end most
+ * favourable to the claim and says so).
+ */
+import { sentenceAround } from './context';
+import { typedSi, type Draft } from './draft';
+
+/** NIST SP 811 Appendix B.8: the international mile is 1,609.344 m. */
+const MILE_M = 1609.344;
+
+const NUM = String.raw`\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?`;
+/** A number or a range of two: "6", "19–21", "between 600 and 700", "70 to 90". */
+const SPAN = String.raw`(?:between[^\S\n]+)?(${NUM})(?:[^\S\n]*(?:–|—|-|to|and)[^\S\n]*(${NUM}))?`;
+
+/** A consumption per distance: "6 Wh/km", "19–21 kWh/100 km", "250 Wh per mile", "18 kWh per 100 miles". */
+const CONSUMPTION_RE = new RegExp(
+  String.raw`(?<![\p{L}\p{N}.,])${SPAN}[^\S\n]*(Wh|kWh|kW·h|kW-h)[^\S\n]*(?:/|per[^\S\n]+|every[^\S\n]+|a[^\S\n]+)[^\S\n]*(100[^\S\n]*)?(km|kilomet(?:re|er)s?|mi|miles?)(?!\p{L})`,
+  'giu',
+);
+/** Distance per energy: "4 miles per kWh", "6.5 km/kWh", "3.8 mi/kWh". */
+const DISTANCE_PER_ENERGY_RE = new RegExp(
+  String.raw`(?<![\p{L}\p{N}.,])${SPAN}[^\S\n]*(km|kilomet(?:re|er)s?|mi|miles?)[^\S\n]*(?:/|per[^\S\n]+|to[^\S\n]+the[^\S\n]+|a[^\S\n]+)[^\S\n]*(kWh|kW·h|kilowatt[- ]hour)(?!\p{L})`,
+  'giu',
+);
+/** A distance: "70–90 km", "600 and 700 km", "310 miles" (not "25 km/h", "km per hour"). */
+const DISTANCE_RE = new RegExp(
+  String.raw`(?<![\p{L}\p{N}.,])${SPAN}[^\S\n]*(km|kilomet(?:re|er)s?|mi|miles?)(?!\p{L})(?![^\S\n]*(?:/|per[^\S\n]+(?:hour|h|kWh|litre|liter|gallon)|an?[^\S\n]+(?:hour|kWh)|to[^\S\n]+the[^\S\n]+(?:kWh|gallon|litre)))`,
+  'giu',
+);
+/** Words of a vehicle's range around a distance: "Range:", "per charge", "on one charge", "will do". */
+const RANGE_WORDS_RE =
+  /(?<!\p{L})(?:range|ranges|per[^\S\n]+charge|(?:on|from)[^\S\n]+(?:a|one|each|every|the|its|a[^\S\n]+single|a[^\S\n]+full)[^\S\n]+(?:full[^\S\n]+)?(?:charge|pack|battery|tank)|will[^\S\n]+do|does|did|goes|went|covers?|covered|travell?ed|drove|driven|ridden)(?!\p{L})/iu;
+
+const km = (n: string, unit: string) => Number(n.replace(/,/g, '')) * (/^mi/iu.test(unit) ? MILE_M / 1000 : 1);
+
+function insert(drafts: Draft[], d: Draft): void {
+  const at = drafts.findIndex((x) => x.start > d.start);
+  if (at < 0) drafts.push(d);
+  else drafts.splice(at, 0, d);
+}
+
+/** Sunlight harvested on board: the pack is then not the only source, and a range beyond it is no conflict. */
+const SUN_ON_BOARD_RE = /(?<!\p{L})(?:solar|photovoltaic|PV|sun(?:light|shine)?|(?:roof|panel)[^\S\n]+array)(?!\p{L})/iu;
+
+export function vehicleRanges(text: string, drafts: Draft[]): void {
+  // (A solar car in sun: what came in from the sun over the day is an input the range may rest on.)
+  if (SUN_ON_BOARD_RE.test(text)) return;
+  // The consumption: Wh per km (low and high ends), from a per-distance or a per-energy form.
+  const rates: { start: number; end: number; low: number; high: number; words: string }[] = [];
+  for (const m of text.matchAll(CONSUMPTION_RE)) {
+    const wh = /^k/iu.test(m[3]) ? 1000 : 1;
+    const per = km(m[4] ? '100' : '1', m[5]);
+    const a = (Number(m[1].replace(/,/g, '')) * wh) / per;
+    const b = m[2] !== undefined ? (Number(m[2].replace(/,/g, '')) * wh) / per : a;
+    rates.push({ start: m.index!, end: m.index! + m[0].length, low: Math.min(a, b), high: Math.max(a, b), words: m[0].trim() });
+  }
+  for (const m of text.matchAll(DISTANCE_PER_ENERGY_RE)) {
+    const a = 1000 / km(m[1], m[3]);
+    const b = m[2] !== undefined ? 1000 / km(m[2], m[3]) : a;
+    rates.push({ start: m.index!, end: m.index! + m[0].length, low: Math.min(a, b), high: Math.max(a, b), words: m[0].trim() });
+  }
+  if (rates.length !== 1) return;
+  const rate = rates[0];
+  // The range: a distance said with words of a range, outside the consumption's own words.
+  const ranges = [...text.matchAll(DISTANCE_RE)].filter((m) => {
+    const [s, e] = [m.index!, m.index! + m[0].length];
+    if (s < rate.end && rate.start < e) return false;
+    const around = text.slice(Math.max(0, s - 40), Math.min(text.length, e + 25));
+    return RANGE_WORDS_RE.test(around) && !/(?<!\p{L})(?:speed|km\/h|mph|top|from[^\S\n]+\d)/iu.test(text.slice(Math.max(0, s - 15, text.lastIndexOf('\n', s - 1) + 1), s));
+  });
+  if (ranges.length !== 1) return;
+  const r = ranges[0];
+  const lowKm = km(r[1], r[3]);
+  const highKm = r[2] !== undefined ? km(r[2], r[3]) : lowKm;
+  if (!(lowKm > 0) || !(rate.low > 0)) return;
+  // (Both in one sentence or one list: a distance said far from the consumption may be another trip's.)
+  const together = sentenceAround(text, r.index!, r.index! + r[0].length) === sentenceAround(text, rate.start, rate.end) || Math.abs(r.index! - rate.start) < 400;
+  if (!together) return;
+  const low = rate.low * Math.min(lowKm, highKm) * 3600;
+  const high = rate.high * Math.max(lowKm, highKm) * 3600;
+  // (The figure points at the consumption's words; the range is said in how it was got.)
+  const [start, end] = [rate.start, rate.end];
+  insert(drafts, {
+    start,
+    end,
+    kind: 'energy',
+    quantity: typedSi(low, 'J'),
+    ...(high > low ? { upper: typedSi(high, 'J') } : {}),
+    role: 'out',
+    derived: `energy the drive gives over the range = consumption × distance (${rate.words} over ${r[0].trim()})`,
+  });
+}
