@@ -234,3 +234,10 @@ describe('a bracketed note between a label and its colon (issue 11, invented tes
     expect(role('Input (W, measured): 40 W')).toEqual(['in']);
   });
 });
+
+describe('what an engine develops or is indicated at (issue 11, invented test data)', () => {
+  it('"it developed 412 indicated horse-power", "indicated 140 H.P. on test" are outputs', () => {
+    expect(extractFigures('On its acceptance trial the Example Works engine developed 412 indicated horse-power.').map((f) => f.role)).toEqual(['out']);
+    expect(extractFigures('Cylinder bore unknown; indicated 140 H.P. on test.').map((f) => f.role)).toEqual(['out']);
+  });
+});
