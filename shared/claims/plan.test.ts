@@ -1894,3 +1894,21 @@ describe("a vehicle's range against its pack: consumption × distance (invented 
     expect(run('Our 5 m² solar array gave 7.7 kWh over the day. The car used 5.5 kWh per 100 km and we covered 120 km on its 4.9 kWh battery.').checks.some((c) => c.finding === 'breaks')).toBe(false);
   });
 });
+
+describe('a rival propeller set against a thrust, and power said to come from the vacuum (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text, classes: ['gyroscopic-drive'] });
+  it('"19 newtons per kilowatt, which beats any propeller": the propeller is a rival, not the cart\'s propellant', () => {
+    const r = run('The Example gyro-cart: four flywheels driven by a 0.8 kW motor, no driven wheels. Its builder says the gyros give a net push of 15 N, "which beats any propeller at walking pace".');
+    const pb = r.checks.find((c) => c.check === 'photon-bound');
+    expect(pb?.finding).toBe('breaks');
+    // F·c/P = 15 × 299 792 458 / 800 (c exact, BIPM SI Brochure).
+    expect(pb?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo((15 * 299_792_458) / 800, 0);
+  });
+  it('"draws 3.2 × 10⁴ W of power from the quantum vacuum for an input of 150 W" is an output of 32 kW', () => {
+    const text = 'The Example zero-point module draws 3.2 × 10⁴ W of continuous power from the quantum vacuum for an electrical input of only 1.5e2 W.';
+    expect(extractFigures(text).map((f) => f.role)).toEqual(['out', 'in']);
+    const fl = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+    expect(fl?.finding).toBe('breaks');
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(32000 / 150, 6);
+  });
+});

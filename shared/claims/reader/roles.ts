@@ -303,6 +303,9 @@ const TURNED_INTO_RE = /(?<!\p{L})(?:turn(?:s|ed|ing)?|convert(?:s|ed|ing)?)[^\S
 /** A rating condition, not a role: "Fuel energy input (LHV) at rated output | 2.6 kW", "input at full load". */
 const RATING_CONDITION_RE = /(?<!\p{L})(?:at|under)[^\S\n]+(?:the[^\S\n]+)?(?:rated|full|nominal|maximum|max\.?|peak|continuous|part)[^\S\n]+(?:output|load|power|capacity)(?!\p{L})(?![^\S\n]*(?:of|is|was|=|:)?[^\S\n]*(?:about|around|roughly|some)?[^\S\n]*\p{N})/giu;
 
+/** Right after a figure: a source that gives nothing ("of power from the quantum vacuum", "out of the aether"). */
+const FROM_NOTHING_AFTER_RE =
+  /^[^\S\n]*(?:of[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:power|energy|electricity)[^\S\n]+)?(?:from|out[^\S\n]+of)[^\S\n]+(?:the[^\S\n]+)?(?:(?:quantum|physical)[^\S\n]+)?(?:vacuum(?:[^\S\n]+(?:field|fluctuations?|energy))?|zero[- ]point(?:[^\S\n]+(?:field|energy|fluctuations?))?|a?ether|aether|void|space[- ]time|fabric[^\S\n]+of[^\S\n]+space)(?!\p{L})/iu;
 /** Idioms with "in" or "out" that name no side: "out of curiosity", "in fact", "in short". */
 const NO_SIDE_IDIOM_RE = /(?<!\p{L})(?:out[^\S\n]+of[^\S\n]+(?:curiosity|interest|habit|caution|respect)|in[^\S\n]+(?:fact|short|theory|practice|turn|particular))(?!\p{L})/giu;
 
@@ -316,6 +319,10 @@ export function roleFor(text: string, kind: FigureKind, start: number, end: numb
   const from = Math.max(0, start - 120);
   const aside = /\([^()\n]{1,100}\)(?=[^\S\n]*[=:][^\S\n]*(?:(?:about|approx\.?|~|≈)[^\S\n]*)?$)/u.exec(text.slice(from, start));
   if (aside && (kind === 'power' || kind === 'energy')) text = text.slice(0, from + aside.index) + ' '.repeat(aside[0].length) + text.slice(from + aside.index + aside[0].length);
+  // "draws 3.2 × 10⁴ W of continuous power from the quantum vacuum": what a device is said to take from a
+  // source that gives nothing (the vacuum, a zero-point field, the aether) is the output it claims, whatever
+  // verb of taking comes before it.
+  if ((kind === 'power' || kind === 'energy') && FROM_NOTHING_AFTER_RE.test(text.slice(end, end + 80))) return 'out';
   if (kind === 'power' || kind === 'energy') {
     IN_OUT_AFTER_RE.lastIndex = end;
     const io = IN_OUT_AFTER_RE.exec(text);
