@@ -1912,3 +1912,21 @@ describe('a rival propeller set against a thrust, and power said to come from th
     expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(32000 / 150, 6);
   });
 });
+
+describe('a sailing drone and a ferry on its shore charger are lawful (invented test data)', () => {
+  const run = (text: string) => runClaimChecks(extractFigures(text), { text });
+  it('a wing sail\'s 400 N beside 120 W of solar panels is no propellant-free thrust', () => {
+    const r = run('The Example SD-7 uncrewed sailing drone has no engine and carries no propellant. Its rigid wing sail gives up to 400 N of drive in 20 km/h winds, and 120 W of solar panels run the sensors.');
+    expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+    expect(r.checks.find((c) => c.check === 'photon-bound')).toBeUndefined();
+  });
+  it("a shore charger's 2 MW is what the ferry's pack takes in, not an output", () => {
+    const text = 'The Example ferry runs on a 1.2 MWh battery. Each crossing takes 20 minutes at an average draw of around 850 kW, plugging in at the 2 MW shore charger for about 40 minutes between runs.';
+    expect(extractFigures(text).find((f) => f.text === '2 MW')?.role).toBe('in');
+    expect(run(text).checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+  it('a light sail is still pushed by light', () => {
+    const r = runClaimChecks(extractFigures('In vacuum, a laser-driven sail recorded 3.1 µN/kW from the light reflected off it.'), { text: 'In vacuum, a laser-driven sail recorded 3.1 µN/kW from the light reflected off it.' });
+    expect(r.checks.find((c) => c.check === 'photon-bound')?.finding).toBe('consistent');
+  });
+});

@@ -68,6 +68,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:heat|power|energy|electricity|fuel|current|work) (?:supplied|fed|given) (?:in)?to (?:the|its|a|an) (?:[\\w-]+ ){0,2}?(?:engines?|motors?|devices?|machines?|heaters?|converters?|modules?|cells?|reactors?|thrusters?|coils?|generators?|prototypes?|rigs?)(?: (?:was|is|were|of|came to|amounted to|totall?ed))?',
     ],
     after: [
+      // "plugging in at the 2 MW shore charger": what a charger gives is what the pack takes in.
+      '(?:(?:shore|fast|rapid|wall|home|mains|onboard|on-board|depot|DC|AC|EV|public|solar|trickle)[- ])?chargers?(?!\\p{L})',
       // "The ½ hp motor turns the generator": a motor's rating, the motor driving the generator, is what the generator is given.
       '(?:electric |drive |driving )?motors?(?: (?:that|which))? (?:(?:really|then|just|only) )?(?:turns?|drives?|runs?|run|spins?|powers?) (?:the|a|an|its|our|their|this|that) (?:[\\w-]+ ){0,2}?(?:generators?|alternators?|dynamos?|generator heads?|gensets?)(?!\\p{L})',
       // "ran nine days on a single 10 kWh charge": the store's charge is what the device had to run on.

@@ -115,6 +115,8 @@ export const PROPELLANT_WORDS = [
   '(?<!(?:gyro\\w*|flywheels?|precess\\w*|eccentric|counter-rotating)[^.;!?\\n]{0,60})(?:four|six|eight|main|tail) rotors?(?! (?:inside|in a|in the|within|enclosed|sealed))',
   'lifters?(?=[^.;!?]{0,80}(?:\\d ?kV|kilovolts?))', 'in (?:the )?(?:open|room|ambient|free|still|ordinary) air', 'rotor blades?', 'propellers?', 'props?', '(?:RC|R/C|radio[- ]controlled|model) (?:planes?|aircraft|airplanes?|aeroplanes?|helis?|gliders?|boats?)', '(?:air|aero)planes?', 'aircraft', 'paramotors?', 'hovercraft', 'ducted fans?', 'EDFs?', 'outboards?', 'boats?', 'water jets?', '(?:balsa|foil|ion|ionic|corona|EHD|high-voltage)[\\w-]*(?: [\\w-]+)? lifters?',
   'pushes? (?:on|against) (?:the )?(?:air|water)', 'tractors?',
+  // Sails and kites push on the wind (a light sail, pushed by light, is above).
+  'wing[- ]?sails?', 'sailing (?:drones?|boats?|ships?|yachts?|dinghies|dinghy|craft|vessels?|cargo ships?)', 'sailboats?', 'sails? (?:catch(?:es|ing)?|fill(?:s|ed|ing)? with|in) (?:the )?wind', '(?:wind|traction|kite)[- ]?kites?', '(?:driven|pushed|propelled) by (?:the )?wind',
   // (A radiometer's vanes are pushed by the gas the light warms, not by the light; a critic's "like a radiometer" names none.)
   '(?:the|a|its|our|this|my) radiometer(?:\'s|’s)? (?:vanes?|spins?|turns?|rotor|mill)', 'radiometer vanes', '(?:warm(?:ed)?|heated|hot) (?:gas|air) (?:pushes|pushing|push|drives)',
 ];
