@@ -225,3 +225,13 @@ describe('vulgar fractions and old horsepower (NIST SP 811 Appendix B.8; invente
     ]);
   });
 });
+
+describe('speeds in CGS and in words of distance each second (c exact, BIPM SI Brochure; invented test data)', () => {
+  test('"4,5 × 10¹⁰ cm/sec" and "420,000 km in each second" are speeds above c', () => {
+    const a = extractFigures('The pamphlet gives the rays a velocity of 4,5 × 10¹⁰ cm/sec.');
+    expect(a.map((f) => [f.kind, f.si])).toEqual([['speed', 4.5e8]]); // 1 cm/s = 0.01 m/s (SI prefix centi, BIPM Table 7)
+    const b = extractFigures('His notebook says the current traversed 420,000 km in each second.');
+    expect(b.map((f) => [f.kind, f.si])).toEqual([['speed', 4.2e8]]);
+    expect(b[0].si).toBeGreaterThan(299_792_458);
+  });
+});

@@ -217,8 +217,8 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   {
     kind: 'speed',
     unit: 'km/s',
-    symbols: ['km/s', 'km s^-1', 'km s⁻¹', 'km·s⁻¹'],
-    words: ['kilometre per second', 'kilometres per second', 'kilometer per second', 'kilometers per second', 'km per second', 'km a second', 'kilometres a second', 'kilometers a second'],
+    symbols: ['km/s', 'km s^-1', 'km s⁻¹', 'km·s⁻¹', 'km/sec'],
+    words: ['kilometre per second', 'kilometres per second', 'kilometer per second', 'kilometers per second', 'km per second', 'km a second', 'kilometres a second', 'kilometers a second', 'km in each second', 'km in every second', 'km in a second', 'kilometres in each second', 'kilometres in a second', 'kilometers in each second', 'kilometres every second', 'km every second'],
   },
   {
     kind: 'speed',
@@ -233,7 +233,7 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 86400, words: ['light-year per day', 'light-years per day', 'light years per day', 'lightyears per day'] },
   { kind: 'speed', unit: 'm/s', factor: 9460730472580800 / 31557600, words: ['light-year per year', 'light-years per year', 'light years per year', 'lightyears per year'] },
   { kind: 'speed', unit: 'ft/s', symbols: ['ft/s', 'ft/sec', 'fps', 'ft s^-1', 'ft s⁻¹'], words: ['foot per second', 'feet per second', 'feet a second'] },
-  { kind: 'speed', unit: 'cm/s', symbols: ['cm/s', 'cm s^-1', 'cm s⁻¹'], words: ['centimetre per second', 'centimetres per second', 'centimeter per second', 'centimeters per second'] },
+  { kind: 'speed', unit: 'cm/s', symbols: ['cm/s', 'cm s^-1', 'cm s⁻¹', 'cm/sec', 'cm./sec.', 'cm. per sec.'], words: ['centimetre per second', 'centimetres per second', 'centimeter per second', 'centimeters per second', 'cm per second'] },
   { kind: 'speed', unit: 'mm/s', symbols: ['mm/s'], words: ['millimetre per second', 'millimetres per second', 'millimeter per second', 'millimeters per second'] },
   {
     kind: 'speed',
