@@ -596,7 +596,7 @@ const CONTROLLED_DEVICE_RE =
   /(?<!\p{L})(?:amplifiers?|amps?|power stages?|output stages?|relays?|contactors?|transistors?|MOSFETs?|IGBTs?|thyristors?|triacs?|solenoid valves?|servo[- ]?valves?|switch(?:es|ed|ing)?|dimmers?|valves?|gain)(?!\p{L})/iu;
 /** Just before a speed that is c itself, quoted: "the speed of light (2.998 × 10^8 m/s)", "where c = 3.00e8 m/s", "light, which travels at". */
 const LIGHT_SPEED_QUOTED_BEFORE_RE =
-  /(?:(?<!\p{L})(?:speed|velocity)[^\S\n]+of[^\S\n]+light(?:[^\S\n]+in[^\S\n]+(?:a[^\S\n]+)?vacuum)?|(?:where|with|using|taking)[^\S\n]+c(?:_0|₀)?|(?<!\p{L})light[^\S\n]+(?:itself[^\S\n]+)?(?:travels|moves|goes)(?:[^\S\n]+at)?)[^\S\n]*(?:[(,:=≈~]|is|of|at|being)?[^\S\n]*(?:(?:about|roughly|approximately|some|nearly|ca\.?)[^\S\n]*)?$/iu;
+  /(?:(?<!\p{L})(?:speed|velocity)[^\S\n]+of[^\S\n]+light(?:[^\S\n]+in[^\S\n]+(?:a[^\S\n]+)?vacuum)?|(?:where|with|using|taking)[^\S\n]+c(?:_0|₀)?|(?<!\p{L})light[^\S\n]+(?:itself[^\S\n]+)?(?:travels|moves|goes|covers|crosses|runs)(?:[^\S\n]+at)?)[^\S\n]*(?:[(,:=≈~]|is|of|at|being)?[^\S\n]*(?:(?:about|roughly|approximately|some|nearly|ca\.?)[^\S\n]*)?$/iu;
 
 /**
  * "just under the speed of light (2.998 × 10^8 m/s)": the speed of light quoted with its value is the

@@ -235,3 +235,9 @@ describe('speeds in CGS and in words of distance each second (c exact, BIPM SI B
     expect(b[0].si).toBeGreaterThan(299_792_458);
   });
 });
+
+describe('light itself covering a distance each second is c, not a claim (invented test data)', () => {
+  test('"Light covers about 300,000 km in a second" is set aside', () => {
+    expect(extractFigures('Light covers about 300,000 km in a second; the probe, at its fastest, covers less than a thousandth of that.').map((f) => f.role)).toEqual(['aside']);
+  });
+});
