@@ -241,3 +241,10 @@ describe('what an engine develops or is indicated at (issue 11, invented test da
     expect(extractFigures('Cylinder bore unknown; indicated 140 H.P. on test.').map((f) => f.role)).toEqual(['out']);
   });
 });
+
+describe('the work a machine does, and work of another kind (issue 11, invented test data)', () => {
+  it('"does 2.7 × 10¹¹ erg of work each minute" is an output; "needs 50 J of work to wind" is not', () => {
+    expect(extractFigures('A small motor does 2.7 × 10¹¹ erg of work each minute.').map((f) => f.role)).toEqual(['out']);
+    expect(extractFigures('The spring needs 50 J of work to wind it fully.').map((f) => f.role)).not.toEqual(['out']);
+  });
+});

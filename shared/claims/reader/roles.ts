@@ -306,6 +306,8 @@ const RATING_CONDITION_RE = /(?<!\p{L})(?:at|under)[^\S\n]+(?:the[^\S\n]+)?(?:ra
 /** Right after a figure: a source that gives nothing ("of power from the quantum vacuum", "out of the aether"). */
 const FROM_NOTHING_AFTER_RE =
   /^[^\S\n]*(?:of[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:power|energy|electricity)[^\S\n]+)?(?:from|out[^\S\n]+of)[^\S\n]+(?:the[^\S\n]+)?(?:(?:quantum|physical)[^\S\n]+)?(?:vacuum(?:[^\S\n]+(?:field|fluctuations?|energy))?|zero[- ]point(?:[^\S\n]+(?:field|energy|fluctuations?))?|a?ether|aether|void|space[- ]time|fabric[^\S\n]+of[^\S\n]+space)(?!\p{L})/iu;
+/** Right before the work a machine does: "does", "did", "performs", "doing". */
+const DOES_WORK_BEFORE_RE = /(?<!\p{L})(?:does|did|doing|performs?|performed|performing)[^\S\n]+(?:(?:about|some|roughly|nearly|only|just|a[^\S\n]+total[^\S\n]+of)[^\S\n]+)?$/iu;
 /** Idioms with "in" or "out" that name no side: "out of curiosity", "in fact", "in short". */
 const NO_SIDE_IDIOM_RE = /(?<!\p{L})(?:out[^\S\n]+of[^\S\n]+(?:curiosity|interest|habit|caution|respect)|in[^\S\n]+(?:fact|short|theory|practice|turn|particular))(?!\p{L})/giu;
 
@@ -323,6 +325,8 @@ export function roleFor(text: string, kind: FigureKind, start: number, end: numb
   // source that gives nothing (the vacuum, a zero-point field, the aether) is the output it claims, whatever
   // verb of taking comes before it.
   if ((kind === 'power' || kind === 'energy') && FROM_NOTHING_AFTER_RE.test(text.slice(end, end + 80))) return 'out';
+  // "A small motor does 2.7 × 10¹¹ erg of work each minute": the work a machine is said to do is its output.
+  if ((kind === 'power' || kind === 'energy') && /^[^\S\n]+of[^\S\n]+(?:useful[^\S\n]+|mechanical[^\S\n]+)?work(?!\p{L})/iu.test(text.slice(end, end + 30)) && DOES_WORK_BEFORE_RE.test(text.slice(Math.max(floor, start - 30), start))) return 'out';
   if (kind === 'power' || kind === 'energy') {
     IN_OUT_AFTER_RE.lastIndex = end;
     const io = IN_OUT_AFTER_RE.exec(text);

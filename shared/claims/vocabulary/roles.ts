@@ -137,8 +137,6 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', '(?:can|could|will|would|to) discharge(?: at)?', 'gave back', 'on the shaft', 'at the shaft', '(?:generators?|alternators?|dynamos?)(?: (?!(?:is|was|are|were|being|been)\\b)[\\w-]+){0,5}? (?:sends?|sent|pushes|pushed|returns?|returned|puts? back|delivers|supplies)', '(?:shaft|brake) (?:power|output)(?:\x27s|\u2019s)?', 'dump(?:s|ed)?', '(?<![\\w-])out ?=', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
-      // "does 2.7 × 10¹¹ erg of work each minute": the work a machine does is what it gives.
-      'of (?:useful |mechanical |external )?work(?! (?:is |was )?(?:done|put|fed|supplied) (?:on|in|into)(?!\\p{L}))',
       // "seven kilowatts to the wheels": what reaches the wheels is what the drive gives.
       '(?:to|at) the (?:driven )?wheels?',
       // "its combustion adds up to 2.1 kW to the engine's output": what is added to an output is output.
