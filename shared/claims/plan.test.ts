@@ -1930,3 +1930,13 @@ describe('a sailing drone and a ferry on its shore charger are lawful (invented 
     expect(r.checks.find((c) => c.check === 'photon-bound')?.finding).toBe('consistent');
   });
 });
+
+describe('a range and a consumption said in words (invented test data)', () => {
+  it('"twelve kilowatt-hours … one thousand one hundred kilometres, using eleven kilowatt-hours for every hundred kilometres" breaks the first law', () => {
+    const text = 'Our Example city car carries a battery of only twelve kilowatt-hours, yet on a test drive it covered one thousand one hundred kilometres, using eleven kilowatt-hours for every hundred kilometres, with no stop to charge.';
+    const fl = runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+    expect(fl?.finding).toBe('breaks');
+    // 11 kWh/100 km × 1,100 km = 121 kWh against 12 kWh → 10.083 (arithmetic).
+    expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(121 / 12, 6);
+  });
+});

@@ -7,7 +7,8 @@
  * favourable to the claim and says so).
  */
 import { sentenceAround } from './context';
-import { typedSi, type Draft } from './draft';
+import { siOf, typedSi, type Draft } from './draft';
+import { tokenize } from './numbers';
 
 /** NIST SP 811 Appendix B.8: the international mile is 1,609.344 m. */
 const MILE_M = 1609.344;
@@ -35,6 +36,8 @@ const DISTANCE_RE = new RegExp(
 const RANGE_WORDS_RE =
   /(?<!\p{L})(?:range|ranges|per[^\S\n]+charge|(?:on|from)[^\S\n]+(?:a|one|each|every|the|its|a[^\S\n]+single|a[^\S\n]+full)[^\S\n]+(?:full[^\S\n]+)?(?:charge|pack|battery|tank)|will[^\S\n]+do|does|did|goes|went|covers?|covered|travell?ed|drove|driven|ridden)(?!\p{L})/iu;
 
+/** After an energy: "for every hundred kilometres", "per 100 km", "each mile". */
+const PER_HUNDRED_AFTER_RE = /^[^\S\n]*(?:for[^\S\n]+every|per|every|each|a)[^\S\n]+(hundred[^\S\n]+|100[^\S\n]*)?(km|kilomet(?:re|er)s?|miles?|mi)(?!\p{L})/iu;
 const km = (n: string, unit: string) => Number(n.replace(/,/g, '')) * (/^mi/iu.test(unit) ? MILE_M / 1000 : 1);
 
 function insert(drafts: Draft[], d: Draft): void {
@@ -50,7 +53,7 @@ export function vehicleRanges(text: string, drafts: Draft[]): void {
   // (A solar car in sun: what came in from the sun over the day is an input the range may rest on.)
   if (SUN_ON_BOARD_RE.test(text)) return;
   // The consumption: Wh per km (low and high ends), from a per-distance or a per-energy form.
-  const rates: { start: number; end: number; low: number; high: number; words: string }[] = [];
+  const rates: { start: number; end: number; low: number; high: number; words: string; of?: Draft }[] = [];
   for (const m of text.matchAll(CONSUMPTION_RE)) {
     const wh = /^k/iu.test(m[3]) ? 1000 : 1;
     const per = km(m[4] ? '100' : '1', m[5]);
@@ -63,10 +66,29 @@ export function vehicleRanges(text: string, drafts: Draft[]): void {
     const b = m[2] !== undefined ? 1000 / km(m[2], m[3]) : a;
     rates.push({ start: m.index!, end: m.index! + m[0].length, low: Math.min(a, b), high: Math.max(a, b), words: m[0].trim() });
   }
+  // (Said in words: "eleven kilowatt-hours for every hundred kilometres" — an energy read already, then its distance.)
+  if (rates.length === 0) {
+    for (const d of drafts) {
+      if (d.kind !== 'energy' || d.derived || d.upper) continue;
+      const per = PER_HUNDRED_AFTER_RE.exec(text.slice(d.end, d.end + 40));
+      const si = siOf(d);
+      if (!per || si === null) continue;
+      const wh = si / 3600 / km(per[1] ? '100' : '1', per[2]);
+      rates.push({ start: d.start, end: d.end + per[0].length, low: wh, high: wh, words: text.slice(d.start, d.end + per[0].length).trim(), of: d });
+    }
+  }
   if (rates.length !== 1) return;
   const rate = rates[0];
   // The range: a distance said with words of a range, outside the consumption's own words.
-  const ranges = [...text.matchAll(DISTANCE_RE)].filter((m) => {
+  const spelled = tokenize(text)
+    .filter((t) => !t.skip && !/^\d/u.test(text.slice(t.start, t.numEnd)))
+    .flatMap((t) => {
+      const unit = /^[^\S\n]*(km|kilomet(?:re|er)s?|miles?)(?!\p{L})(?![^\S\n]*(?:\/|per[^\S\n]+|an?[^\S\n]+hour))/iu.exec(text.slice(t.numEnd, t.numEnd + 20));
+      if (!unit) return [];
+      const m = Object.assign([text.slice(t.start, t.numEnd + unit[0].length), t.num, undefined, unit[1]], { index: t.start, input: text }) as unknown as RegExpMatchArray;
+      return [m];
+    });
+  const ranges = [...text.matchAll(DISTANCE_RE), ...spelled].filter((m) => {
     const [s, e] = [m.index!, m.index! + m[0].length];
     if (s < rate.end && rate.start < e) return false;
     const around = text.slice(Math.max(0, s - 40), Math.min(text.length, e + 25));
@@ -82,6 +104,8 @@ export function vehicleRanges(text: string, drafts: Draft[]): void {
   if (!together) return;
   const low = rate.low * Math.min(lowKm, highKm) * 3600;
   const high = rate.high * Math.max(lowKm, highKm) * 3600;
+  // (The energy of the consumption's words is a rate, no energy of its own: set aside.)
+  if (rate.of) rate.of.role = 'aside';
   // (The figure points at the consumption's words; the range is said in how it was got.)
   const [start, end] = [rate.start, rate.end];
   insert(drafts, {
