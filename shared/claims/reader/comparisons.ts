@@ -5,7 +5,7 @@
  * the relations are read, so that no check and no derived figure uses them.
  */
 import { HEAT_PUMP_RE, sentenceAround, windowStart } from './context';
-import { siOf, type Draft } from './draft';
+import { insertInOrder, siOf, type Draft } from './draft';
 import type { PercentReading } from './kinds';
 import { relateFigures } from './relations';
 
@@ -109,9 +109,7 @@ export function relate(text: string, drafts: Draft[]): void {
   drafts.push(...rest);
   for (const d of compared) {
     d.role = 'aside';
-    const at = drafts.findIndex((x) => x.start > d.start);
-    if (at < 0) drafts.push(d);
-    else drafts.splice(at, 0, d);
+    insertInOrder(drafts, d);
   }
 }
 

@@ -44,6 +44,13 @@ export function upperSiOf(d: Draft): number | null {
 /** Abbreviations whose full stop ends no sentence ("max. current", "approx. 3 kW"). */
 const ABBREVIATIONS_RE = /(?<!\p{L})(?:max|min|approx|nom|avg|ca|cf|e\.g|i\.e|no|vs|incl|excl|resp|est|typ|cont|spec|ref|fig|eq)\./giu;
 
+/** A derived draft put among the others in the order of the text (by where it starts). */
+export function insertInOrder(drafts: Draft[], d: Draft): void {
+  const at = drafts.findIndex((x) => x.start > d.start);
+  if (at < 0) drafts.push(d);
+  else drafts.splice(at, 0, d);
+}
+
 /** Puts a derived figure right after the figure it comes from. */
 export function insertAfter(drafts: Draft[], anchor: Draft, d: Draft): void {
   const at = drafts.indexOf(anchor);

@@ -7,7 +7,7 @@
  */
 import { FIGURE_SI_UNIT, type FigureKind } from '../types';
 import { sentenceAround } from './context';
-import { siOf, typedSi, upperSiOf, type Draft } from './draft';
+import { insertInOrder, siOf, typedSi, upperSiOf, type Draft } from './draft';
 
 const COUNT: Record<string, number> = {
   one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, twenty: 20, fifty: 50, hundred: 100, 'a hundred': 100,
@@ -32,12 +32,6 @@ const FORWARD_RE =
   /^[^\S\n]+(?:(?:(?:more|less)[^\S\n]+[\p{L}-]+|[\p{L}]+er)[^\S\n]+than|as[^\S\n]+[\p{L}-]+[^\S\n]+as|the[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:of|from))[^\S\n]+/iu;
 /** Kinds a multiple may be claimed of. */
 const MULTIPLIABLE: FigureKind[] = ['cop', 'efficiency', 'speed', 'thrust', 'thrust-per-power', 'power', 'energy'];
-
-function insert(drafts: Draft[], d: Draft): void {
-  const at = drafts.findIndex((x) => x.start > d.start);
-  if (at < 0) drafts.push(d);
-  else drafts.splice(at, 0, d);
-}
 
 export function multiplesOfABase(text: string, drafts: Draft[]): void {
   for (const m of text.matchAll(MULTIPLE_RE)) {
@@ -86,6 +80,6 @@ export function multiplesOfABase(text: string, drafts: Draft[]): void {
     if (up !== null && up > si) d.assumption = `the lower end of ${text.slice(base.start, base.end).trim()} taken`;
     base.role = 'aside';
     if (counted >= 0) drafts.splice(counted, 1);
-    insert(drafts, d);
+    insertInOrder(drafts, d);
   }
 }

@@ -14,7 +14,7 @@
 import { FIGURE_SI_UNIT, type FigureRole } from '../types';
 import { formatQuantity } from '../../worksheet/quantity';
 import { sentenceAround } from './context';
-import { siOf, typedSi, type Draft } from './draft';
+import { insertInOrder, siOf, typedSi, type Draft } from './draft';
 import { tokenize } from './numbers';
 import { roleFor } from './roles';
 
@@ -152,12 +152,6 @@ const joined = (text: string, a: { start: number; end: number }, b: { start: num
   return gap.length <= 70 && !/[.!?](?:\s|$)|\n|;/u.test(gap);
 };
 
-function insertByStart(drafts: Draft[], d: Draft): void {
-  const at = drafts.findIndex((x) => x.start > d.start);
-  if (at < 0) drafts.push(d);
-  else drafts.splice(at, 0, d);
-}
-
 const overlaps = (drafts: Draft[], start: number, end: number, kind: Draft['kind']) => drafts.some((d) => d.kind === kind && d.start < end && start < d.end);
 
 /** Adds the powers and energies the text gives through their factors (see the head of this file). */
@@ -177,7 +171,7 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
       if (same.role === null && role !== 'aside') same.role = role;
       role = 'aside';
     }
-    insertByStart(drafts, { start, end, kind, quantity: typedSi(si, FIGURE_SI_UNIT[kind]), role, derived, assumption });
+    insertInOrder(drafts, { start, end, kind, quantity: typedSi(si, FIGURE_SI_UNIT[kind]), role, derived, assumption });
   };
   const roleAround = (start: number, end: number): FigureRole => {
     const r = roleFor(text, 'power', start, end, Math.max(0, start - 80));
@@ -255,7 +249,7 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
     if (overlaps(drafts, start, end, 'power')) continue;
     m.role = 'aside';
     v.role = 'aside';
-    insertByStart(drafts, { start, end, kind: 'power', quantity: typedSi(kg * G_N * ms, 'W'), role: role === 'in' ? 'out' : role, derived: `power = mass × g × speed (${formatQuantity(kg, 'kg')} × 9.80665 m/s² × ${formatQuantity(ms, 'm/s')})` });
+    insertInOrder(drafts, { start, end, kind: 'power', quantity: typedSi(kg * G_N * ms, 'W'), role: role === 'in' ? 'out' : role, derived: `power = mass × g × speed (${formatQuantity(kg, 'kg')} × 9.80665 m/s² × ${formatQuantity(ms, 'm/s')})` });
   }
 
   // A mass lifted through a height in a time: P = m g h / t ("takes a 250 kg pallet up about 9 m in roughly
@@ -275,7 +269,7 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
     const end = Math.max(time.end, sStart + height.t.numEnd + height.u![0].length);
     if (overlaps(drafts, m.start, end, 'power')) continue;
     m.role = 'aside';
-    insertByStart(drafts, { start: m.start, end, kind: 'power', quantity: typedSi((kg * G_N * h) / s_, 'W'), role: 'out', derived: `power = mass × g × height ÷ time (${formatQuantity(kg, 'kg')} × 9.80665 m/s² × ${formatQuantity(h, 'm')} ÷ ${formatQuantity(s_, 's')})` });
+    insertInOrder(drafts, { start: m.start, end, kind: 'power', quantity: typedSi((kg * G_N * h) / s_, 'W'), role: 'out', derived: `power = mass × g × height ÷ time (${formatQuantity(kg, 'kg')} × 9.80665 m/s² × ${formatQuantity(h, 'm')} ÷ ${formatQuantity(s_, 's')})` });
   }
 
   // An energy said per cycle that the reader did not keep ("2 J per pulse at 50 Hz"): P = E f.
@@ -303,6 +297,6 @@ export function multipliedOut(text: string, drafts: Draft[]): void {
     const role = e.role ?? roleAround(start, end) ?? 'out';
     if (overlaps(drafts, start, end, 'power')) continue;
     e.role = 'aside';
-    insertByStart(drafts, { start, end, kind: 'power', quantity: typedSi(si * r.value, 'W'), role, derived: `power = energy per cycle × cycles per second (${formatQuantity(si, 'J')} × ${formatQuantity(r.value, 'Hz')})` });
+    insertInOrder(drafts, { start, end, kind: 'power', quantity: typedSi(si * r.value, 'W'), role, derived: `power = energy per cycle × cycles per second (${formatQuantity(si, 'J')} × ${formatQuantity(r.value, 'Hz')})` });
   }
 }

@@ -9,7 +9,7 @@ import { formatQuantity } from '../../worksheet/quantity';
 import { formatPrint } from '../print';
 import type { FigureRole } from '../types';
 import { COOLING_MACHINE_RE, paragraphAround, sentenceAround } from './context';
-import { sentenceOf, siOf, typedSi, type Draft } from './draft';
+import { insertInOrder, sentenceOf, siOf, typedSi, type Draft } from './draft';
 import { signalSpeeds } from './signal-speeds';
 import { vehicleRanges } from './vehicle-ranges';
 
@@ -144,9 +144,7 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
       role: null,
       derived: `speed = distance / time (${m[1]} ${m[2]} in ${m[3]} ${m[4]})`,
     };
-    const at = drafts.findIndex((x) => x.start > d.start);
-    if (at < 0) drafts.push(d);
-    else drafts.splice(at, 0, d);
+    insertInOrder(drafts, d);
   }
   signalSpeeds(text, drafts);
   vehicleRanges(text, drafts);

@@ -6,7 +6,7 @@
  */
 import { C_LIGHT } from '../../checks/constants';
 import { sentenceAround } from './context';
-import { siOf, typedSi, type Draft } from './draft';
+import { insertInOrder, siOf, typedSi, type Draft } from './draft';
 
 /** A length a signal covers: "1,200 km", "750 miles" (NIST SP 811: the international mile is 1,609.344 m). */
 const PATH_RE = /(?<![\p{L}\p{N}.,])(\d{1,3}(?:,\d{3})+|\d+(?:\.\d+)?)[^\S\n]*(km|kilometres?|kilometers?|miles?|mi)(?!\p{L})/giu;
@@ -30,12 +30,6 @@ const NETWORK_RE = /(?<!\p{L})(?:network|coverage|covers?|covering|covered|of[^\
 const VELOCITY_FACTOR_RE =
   /(?<!\p{L})(?:velocity[^\S\n]+(?:of[^\S\n]+propagation|factor)|propagation[^\S\n]+velocity|nominal[^\S\n]+velocity[^\S\n]+of[^\S\n]+propagation|NVP|VoP|VF)(?:[^\S\n]*\([^)\n]{0,10}\))?[^\S\n]*(?:of|is|:|=)?[^\S\n]*(?:(?:about|around|roughly|approx\.?|approximately|typ\.?|typically|nominal)[^\S\n]*)?(\d+(?:\.\d+)?)[^\S\n]*(%|per[^\S\n]?cent|c(?!\p{L}))?/giu;
 
-function insert(drafts: Draft[], d: Draft): void {
-  const at = drafts.findIndex((x) => x.start > d.start);
-  if (at < 0) drafts.push(d);
-  else drafts.splice(at, 0, d);
-}
-
 export function signalSpeeds(text: string, drafts: Draft[]): void {
   // (Only where the text states no speed of its own: a speed said outright is the one the claim makes.)
   if (drafts.some((d) => d.kind === 'speed')) return;
@@ -45,7 +39,7 @@ export function signalSpeeds(text: string, drafts: Draft[]): void {
     // (A factor is a fraction of c — "0.66", or "1.2" claimed — and "83" with no sign a percentage.)
     const f = !m[2] && n > 2 && n <= 100 ? n / 100 : fraction;
     if (!(f > 0) || f > 10) continue;
-    insert(drafts, { start: m.index!, end: m.index! + m[0].length, kind: 'speed', quantity: typedSi(f * C_LIGHT, 'm/s'), role: null, derived: `speed = velocity factor × c (${m[0].trim()})` });
+    insertInOrder(drafts, { start: m.index!, end: m.index! + m[0].length, kind: 'speed', quantity: typedSi(f * C_LIGHT, 'm/s'), role: null, derived: `speed = velocity factor × c (${m[0].trim()})` });
   }
   if (drafts.some((d) => d.kind === 'speed')) return;
   const paths = [...text.matchAll(PATH_RE)];
@@ -68,7 +62,7 @@ export function signalSpeeds(text: string, drafts: Draft[]): void {
     if (!(metres > 0)) continue;
     // (There and back is twice the path; a time said plainly is taken as one way, the kinder reading.)
     const trips = ROUND_TRIP_RE.test(text.slice(Math.max(0, t.start - 60), t.end + 20)) ? 2 : 1;
-    insert(drafts, {
+    insertInOrder(drafts, {
       start: Math.min(p.index!, t.start),
       end: Math.max(p.index! + p[0].length, t.end),
       kind: 'speed',

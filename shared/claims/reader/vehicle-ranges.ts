@@ -7,7 +7,7 @@
  * favourable to the claim and says so).
  */
 import { sentenceAround } from './context';
-import { siOf, typedSi, type Draft } from './draft';
+import { insertInOrder, siOf, typedSi, type Draft } from './draft';
 import { tokenize } from './numbers';
 
 /** NIST SP 811 Appendix B.8: the international mile is 1,609.344 m. */
@@ -39,12 +39,6 @@ const RANGE_WORDS_RE =
 /** After an energy: "for every hundred kilometres", "per 100 km", "each mile". */
 const PER_HUNDRED_AFTER_RE = /^[^\S\n]*(?:for[^\S\n]+every|per|every|each|a)[^\S\n]+(hundred[^\S\n]+|100[^\S\n]*)?(km|kilomet(?:re|er)s?|miles?|mi)(?!\p{L})/iu;
 const km = (n: string, unit: string) => Number(n.replace(/,/g, '')) * (/^mi/iu.test(unit) ? MILE_M / 1000 : 1);
-
-function insert(drafts: Draft[], d: Draft): void {
-  const at = drafts.findIndex((x) => x.start > d.start);
-  if (at < 0) drafts.push(d);
-  else drafts.splice(at, 0, d);
-}
 
 /** Sunlight harvested on board: the pack is then not the only source, and a range beyond it is no conflict. */
 const SUN_ON_BOARD_RE = /(?<!\p{L})(?:solar|photovoltaic|PV|sun(?:light|shine)?|(?:roof|panel)[^\S\n]+array)(?!\p{L})/iu;
@@ -108,7 +102,7 @@ export function vehicleRanges(text: string, drafts: Draft[]): void {
   if (rate.of) rate.of.role = 'aside';
   // (The figure points at the consumption's words; the range is said in how it was got.)
   const [start, end] = [rate.start, rate.end];
-  insert(drafts, {
+  insertInOrder(drafts, {
     start,
     end,
     kind: 'energy',
