@@ -9,7 +9,7 @@ import { insertAfter, sameClause, sentenceOf, siOf, typedSi, upperSiOf, type Dra
 
 /** Words of a time that is not how long the device ran. */
 const NOT_A_RUN_RE =
-  /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline|install\w*|integrat\w*|spent|calibrat\w*|settl\w*|drills?|swings?|period|saves?|saving|savings|bills?|income|earns?|costs?)(?!\p{L})/iu;
+  /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline|install\w*|fit(?:s|ted|ting)?|bolts?|bolted|retrofit\w*|integrat\w*|spent|calibrat\w*|settl\w*|drills?|swings?|period|saves?|saving|savings|bills?|income|earns?|costs?)(?!\p{L})/iu;
 
 /** Right before a time: a payback, a warranty, a guarantee, a life or a lead time ("payback est.", "pays for itself in"). */
 const TERM_NOT_RUN_BEFORE_RE =

@@ -64,6 +64,14 @@ const MASS_ROLE_AFTER_RE = /^[^\S\n]*(?:(?:dry|empty|wet|fuelled|fueled|full|loa
 /** Between a mass and a bare number that is the craft's other mass: "… and ends at", "…, of which", "… down to". */
 const MASS_LEAD_RE = /(?<!\p{L})(?:ends?|ending|ended|finishes|finishing|burns? (?:out|down)|down|of which)(?!\p{L})[^\S\n]*(?:at|to|with)?[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
 /** After such a number: the clause ends ("… at twenty, and …", "… at 20.", "… at thirty-five)"). */
+/** Just before a mass unit said of a force: "thrust 2.8 g", "a pull of 140 lb", "push of about 3 kg". */
+const FORCE_BEFORE_RE = /(?<!\p{L})(?:thrust|pull|push|tension|drag|force)(?:[^\S\n]+(?:of|was|is|measured|=|:|about|around|roughly|nearly|some))*[^\S\n]*[=:]?[^\S\n]*$/iu;
+/** Just after a mass unit said of a force: "2.8 g (weight)", "12 lb wt". */
+const WEIGHT_AFTER_RE = /^\.?[^\S\n]*(?:\([^\S\n]*(?:weight|wt\.?|force)[^\S\n]*\)|wt\.?(?!\p{L}))/iu;
+/** After a "0–60 mph": the seconds it takes ("in 6.1 s", "(7.9 s)", ": 4.2 sec"). */
+const SPRINT_AFTER_RE = /^[^\S\n]*(?:in|:|\(|—|–|-)?[^\S\n]*(?:in[^\S\n]+)?(?:(?:about|around|under|just under|less than|roughly)[^\S\n]+)?\d[\d.,]*[^\S\n]*(?:s|sec|secs|seconds)(?!\p{L})/iu;
+/** Around a "0–60 mph": the words of a sprint from rest. */
+const SPRINT_WORD_RE = /(?<!\p{L})(?:sprint|accelerat\w*|dash|time)(?!\p{L})/iu;
 const BARE_END_RE = /^[^\S\n]*(?:[,;.!?)\]—–]|and(?!\p{L})|$)/u;
 
 /** Just before an erratum's figure: "It should read", "should have read", "should be". */
@@ -274,7 +282,17 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
           (suffixKind(next.suffix) === 'voltage' && !dash) ||
           (!thirdTemperature && !spread && !rated && suffixKind(next.suffix) === 'temperature' && !dash && !isDifference(text, t.start, next.end, floor));
         suffix = next.suffix;
-        if (!twoSides) {
+        // "0–60 mph in 6.1 s", "0-100 km/h (7.9 s)": a sprint from rest, the speed reached, not a range of speeds.
+        if (
+          Number(t.num) === 0 &&
+          suffixKind(next.suffix) === 'speed' &&
+          (SPRINT_AFTER_RE.test(text.slice(next.end, next.end + 24)) || SPRINT_WORD_RE.test(text.slice(Math.max(0, t.start - 30), Math.min(text.length, next.end + 30))))
+        ) {
+          t.num = next.num;
+          suffix = next.suffix;
+          end = next.end;
+          next.consumed = true;
+        } else if (!twoSides) {
           upperNum = next.num;
           end = next.end;
           next.consumed = true;
@@ -353,6 +371,18 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       quantity = q.quantity;
       if (carried) assumption = 'A number written without a unit, read in the unit of the figure said before it.';
       if (upperNum !== undefined) upper = unitQuantity(upperNum, suffix).quantity;
+      // "measured thrust 2.8 ± 0.1 g", "a pull of 140 lb.", "2.8 g (weight)": a mass unit said of a force is
+      // its weight, the gravitational unit of force (gram-, pound-, kilogram-force).
+      if (kind === 'mass' && (FORCE_BEFORE_RE.test(text.slice(Math.max(floor, start - 30), start)) || WEIGHT_AFTER_RE.test(text.slice(end, end + 16)))) {
+        try {
+          const asForce = (qty: string) => `${Number(parseQuantity(qty, 'kg').toPrecision(15))} kgf`;
+          quantity = asForce(quantity);
+          if (upper !== undefined) upper = asForce(upper);
+          kind = 'thrust';
+        } catch {
+          /* left a mass */
+        }
+      }
       // "degrees" alone: a temperature where the sentence speaks of one, else an angle (not a figure).
       if (kind === 'temperature' && suffix.form.ambiguous && !TEMPERATURE_CONTEXT_RE.test(sentenceAround(text, start, end))) continue;
       if (kind === 'temperature' && isDifference(text, start, end, floor)) {
@@ -524,8 +554,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
       const prev = drafts[drafts.length - 1];
       if (prev && prev.kind === kind && !prev.derived && (prev.role === 'in' || prev.role === 'out') && LISTED_AFTER_RE.test(text.slice(prev.end, start)) && LIST_GOES_ON_RE.test(text.slice(end, end + 60))) role = prev.role;
     }
-    // "10 kWe", "3 MWe": electrical output.
-    if (role === null && kind === 'power' && suffix?.type === 'unit' && /[kMG]?We$/.test(text.slice(t.numEnd, end).trim())) role = 'out';
+    // "10 kWe", "3 MWe": electrical output; "1.1 kWp", "400 watts-peak": a solar array's rated (peak) output.
+    if (role === null && kind === 'power' && suffix?.type === 'unit' && /(?:[kMG]?W[ep]|watts?[- ]peak)$/i.test(text.slice(t.numEnd, end).trim())) role = 'out';
     if (role === null && kind === 'power' && suffix?.type === 'unit' && !suffix.per) role = ratingRole(text, start, end);
     let hedge = hedgeBefore(text, start);
     // "over two weeks", "for over 3 hours" speak of the time the claim covers.

@@ -248,3 +248,29 @@ describe('the work a machine does, and work of another kind (issue 11, invented 
     expect(extractFigures('The spring needs 50 J of work to wind it fully.').map((f) => f.role)).not.toEqual(['out']);
   });
 });
+
+describe('excesses and differences said the long way (invented test data)', () => {
+  test('"2.1 kW more heat out than electricity in" and "800 W more power at the crank than the cell takes" are excesses', () => {
+    const a = extractFigures('It puts 3.2 kW of heat into the cabin while drawing only 1.1 kW — 2.1 kW more heat out than electricity in.');
+    expect(a.filter((x) => x.kind === 'power' && !x.derived).map((x) => [x.role, x.si])).toEqual([
+      ['out', 3200],
+      ['in', 1100],
+      ['excess', 2100],
+    ]);
+    const b = extractFigures('The cell uses about 300 W from the alternator, and the gas gives back 800 W more power at the crank than the cell takes.');
+    expect(b.find((x) => x.si === 800)?.role).toBe('excess');
+    // ("more than in winter": a season, no input.)
+    expect(extractFigures('The pump gave 2 kW more heat than in winter.').find((x) => x.si === 2000)?.role).not.toBe('excess');
+  });
+
+  test('"the temperature difference between the tarmac and the air — about 25 K" is a difference', () => {
+    const f = extractFigures('The cart runs on “the temperature difference between the tarmac and the air” — about 25 K on a summer afternoon.');
+    expect(f.map((x) => [x.kind, x.si])).toEqual([['temperature-difference', 25]]);
+  });
+
+  test('the time it takes to fit a kit is no run: "bolts under the bonnet in an hour"', () => {
+    const f = extractFigures('The kit bolts under the bonnet in an hour. It uses about 300 W from your alternator.');
+    expect(f.find((x) => x.kind === 'duration')?.role).toBe('aside');
+    expect(f.some((x) => x.kind === 'energy')).toBe(false);
+  });
+});

@@ -60,7 +60,7 @@ export const TEMPERATURE_CONTEXT_RE = /(?<!\p{L})(?:temperatures?|heat(?:ed|s|in
 /** "Isp 320 s", "Isp (vac): 320 s", "specific impulse (sea level) of 280 s". */
 // ("specific impulse in vacuum is 65 s", "Isp at sea level of 250 s", "the thruster's specific impulse of the system is".)
 export const ISP_BEFORE_RE = new RegExp(
-  `(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})(?:[^\\S\\n]*\\([^()\\n\\d]{1,60}\\))?(?:[^\\S\\n]+(?:in|at|during)[^\\S\\n]+(?:(?:a|an|the|our|its|their)[^\\S\\n]+)?(?:[\\p{L}-]+[^\\S\\n]+){0,2}?(?:vacuum|sea[^\\S\\n]+level|space|tests?|firings?|runs?|chambers?|measurements?|trials?))?(?:[^\\S\\n]*,[^,\\d.;!?\\n]{3,80},)?${CONNECT}$`,
+  `(?<!\\p{L})(?:${alt(ISP_WORDS)})(?!\\p{L})(?:[^\\S\\n]*\\([^()\\n\\d]{1,60}\\))?(?:[^\\S\\n]+(?:in|at|during)[^\\S\\n]+(?:(?:a|an|the|our|its|their)[^\\S\\n]+)?(?:[\\p{L}-]+[^\\S\\n]+){0,2}?(?:vacuum|sea[^\\S\\n]+level|space|tests?|firings?|runs?|chambers?|measurements?|trials?))?(?:[^\\S\\n]+(?:(?:as[^\\S\\n]+)?(?:found|worked out|derived|calculated|computed|measured)[^\\S\\n]+)?(?:from|via)[^\\S\\n]+(?:[\\p{L}-]+[^\\S\\n]+){0,5}?[\\p{L}-]+)?(?:[^\\S\\n]*,[^,\\d.;!?\\n]{3,80},)?${CONNECT}$`,
   'iu',
 );
 export const ISP_AFTER_RE = new RegExp(

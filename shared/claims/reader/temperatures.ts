@@ -14,7 +14,7 @@ import { CARNOT_SHARE } from './kinds';
 
 // ("ΔT across the engine 170 °C", "ΔT between the plates of 40 K": what the difference is across, between.)
 const DIFF_BEFORE_RE = new RegExp(
-  `(?<![\\p{L}])(?:${alt(DIFFERENCE_BEFORE)})(?!\\p{L})(?:[^\\S\\n]+(?:across|between|over|on)[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+)(?!(?:a|an)[^\\S\\n])[\\p{L}-]+(?:[^\\S\\n]+(?!(?:a|an)[^\\S\\n])[\\p{L}-]+)?)?(?:[^\\S\\n]*(?:[=:≈~]|~~|of|is|was|by|about|around|only|just|a|an|some|up to|nearly|roughly|approximately|just over|just under|over|under))*[^\\S\\n]*$`,
+  `(?<![\\p{L}])(?:${alt(DIFFERENCE_BEFORE)})(?!\\p{L})(?:[^\\S\\n]+(?:across|between|over|on)[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+)(?!(?:a|an)[^\\S\\n])[\\p{L}-]+(?:[^\\S\\n]+(?!(?:a|an)[^\\S\\n])[\\p{L}-]+)?|[^\\S\\n]+between[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+)?[\\p{L}-]+(?:[^\\S\\n]+[\\p{L}-]+)?[^\\S\\n]+and[^\\S\\n]+(?:the[^\\S\\n]+|its[^\\S\\n]+)?[\\p{L}-]+(?:[^\\S\\n]+[\\p{L}-]+)?[”"’')]?[^\\S\\n]*[—–,]?)?(?:[^\\S\\n]*(?:[=:≈~]|~~|of|is|was|by|about|around|only|just|a|an|some|up to|nearly|roughly|approximately|just over|just under|over|under))*[^\\S\\n]*$`,
   'iu',
 );
 /** Just before a figure that corrects the one before it: "170 °C, corrected to", "~~170 °C~~ corrected to". */
@@ -67,7 +67,7 @@ function kelvinBesideCelsius(text: string, start: number, end: number): boolean 
 
 export function isDifference(text: string, start: number, end: number, floor: number): boolean {
   // (A sheet's leader dots are no words: "Working temperature difference .. 5 °C".)
-  const before = text.slice(Math.max(floor, start - 60), start).replace(/\.{2,}|…+/gu, ' ');
+  const before = text.slice(Math.max(floor, start - 90), start).replace(/\.{2,}|…+/gu, ' ');
   // A label of a sheet or a list: "ΔT source to flow: 40 K", "• Temperature lift (W35): 30 K".
   if (DIFF_LABEL_RE.test(before)) return true;
   // A table's row label with no colon: "Temperature drop, head to cooler580K", "ΔT hot to cold 40 K".

@@ -241,3 +241,44 @@ describe('light itself covering a distance each second is c, not a claim (invent
     expect(extractFigures('Light covers about 300,000 km in a second; the probe, at its fastest, covers less than a thousandth of that.').map((f) => f.role)).toEqual(['aside']);
   });
 });
+
+describe('car, boat and solar-panel ratings as spec sheets print them (invented test data)', () => {
+  test('"0–60 mph in 6.1 s" is the speed a sprint from rest reaches, 60 mph, not a range from zero', () => {
+    const f = extractFigures('Example Motors pickup: 300 hp, 0–60 mph in 6.1 s, tows 5,000 lb.');
+    const v = f.find((x) => x.kind === 'speed')!;
+    expectRelClose(v.si, 60 * 0.44704, EXACT); // SP 811 B.8, mile per hour → metre per second 4.4704 E-01 (exact)
+    expect(v.upper).toBeUndefined();
+    // ("a 0–100 km/h sprint (7.9 s)": the same, the seconds in brackets.)
+    expectRelClose(extractFigures('The 0–100 km/h sprint (7.9 s) still feels brisk.').find((x) => x.kind === 'speed')!.si, 100 / 3.6, EXACT);
+    // A spread of speeds from zero with no sprint about it stays a range.
+    const r = extractFigures('The fan runs at 0–12 km/h air speed across the grille, depending on the dial.').find((x) => x.kind === 'speed')!;
+    expect(r.si).toBe(0);
+    expectRelClose(r.upper!.si, 12 / 3.6, EXACT); // 1 km/h = 1000 m / 3600 s
+  });
+
+  test('"1.1 kWp" and "400 watts-peak" are a solar array\'s peak (rated) output', () => {
+    const f = extractFigures('The boat carries 1.1 kWp of cells on its deck, and the roof 400 watts-peak more.');
+    expect(f.map((x) => [x.kind, x.role, x.si])).toEqual([
+      ['power', 'out', 1100],
+      ['power', 'out', 400],
+    ]);
+  });
+
+  test('a mass unit said of a force is that mass\'s weight: "thrust 2.8 g (weight)", "a pull of 140 lb."', () => {
+    const a = extractFigures('Beam power 1.5 kW; measured thrust 2.8 ± 0.1 g (weight).').find((x) => x.kind === 'thrust')!;
+    expectRelClose(a.si, 0.0027 * 9.80665, SEVEN); // SP 811 B.8, gram-force → newton 9.806 65 E-03 (exact); the range's lower end
+    const b = extractFigures('A pull of 140 lb. at the end of the lever raises the full load.').find((x) => x.kind === 'thrust')!;
+    expectRelClose(b.si, 140 * 4.448222, SEVEN); // SP 811 B.8, pound-force → newton 4.448 222 E+00
+    // A weight used to calibrate, and a craft's own weight, stay masses.
+    expect(extractFigures('The load cell was calibrated with a 20 g weight.').map((x) => x.kind)).toEqual(['mass']);
+    expect(extractFigures('It lifts 3 % of its own 12 kg weight.').find((x) => x.si === 12)?.kind).toBe('mass');
+  });
+
+  test('a specific impulse "from beam current and voltage 4,800 s" is a specific impulse, not a run time', () => {
+    const f = extractFigures('Specific impulse from beam current and voltage 4,800 s. Run ended after 212 h.');
+    expect(f.map((x) => [x.kind, x.si])).toEqual([
+      ['specific-impulse', 4800],
+      ['duration', 212 * 3600],
+    ]);
+  });
+});

@@ -19,6 +19,9 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     after: ['excess', 'surplus', 'extra', '(?:from|out of) (?:nowhere|thin air|nothing)', 'more(?= than)', 'more(?= (?:[\\p{L}-]+ ){1,3}?than (?:that|this|it|what (?:it|they) (?:draws?|takes?|uses?|consumes?|gets?))(?!\\p{L}))', 'above(?= (?:the|its) input)', 'in excess', 'net gain',
       // "released 5.1 W more heat than the alumina dummy at the same input": more than a control run.
       'more(?= (?:[\\p{L}-]+ ){0,3}?than (?:the|a|an|its) (?:[\\p{L}-]+ ){0,2}?(?:dumm(?:y|ies)|blanks?|controls?|reference|inactive|calibration) )',
+      // "2.1 kW more heat out than electricity in", "800 W more power at the crank than the cell takes": more
+      // than what the machine itself takes.
+      'more(?= (?:[\\p{L}-]+ ){0,5}?than (?:(?:the|its|it|they) )?(?:[\\p{L}-]+ ){0,2}?(?:takes|draws|uses|consumes|(?:goes |put |fed )?in(?=[,.;:)—–]| (?:and|—|–)|$)))',
       // "3.8 W more heat leaving the cell than the electrical power going in": more than what the device takes.
       'more(?= (?:[\\p{L}-]+ ){0,5}?than (?:the|its) (?:(?:electrical|electric|input|drive|supply) )?(?:power|energy|electricity|work|input)(?: (?:going in|put in|fed in|fed to it|supplied|drawn|consumed|taken|it (?:draws|takes|uses|consumes))|(?=[,.;)]| (?:and|over|during|for|in)\\b)))'],
   },

@@ -93,14 +93,15 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'thrust', unit: 'kgf', factor: 1e-6, symbols: ['mgf'], words: ['milligram-force', 'milligrams-force', 'mg of thrust', 'milligrams of thrust'] },
 
   // Power
+  // "Wp", "kWp", "MWp" (watt-peak): the rated power of solar panels in standard test conditions, a trade usage.
   // Lower-case symbols as forum posts write them ("500w", "2kw", "12v"); "mw" and "a" stay out: mW or MW, and the article.
-  { kind: 'power', unit: 'W', symbols: ['W', 'We', 'Wt', 'Wth', 'w'], words: ['watt', 'watts'] },
+  { kind: 'power', unit: 'W', symbols: ['W', 'We', 'Wt', 'Wth', 'Wp', 'w'], words: ['watt', 'watts', 'watt-peak', 'watts-peak', 'watts peak'] },
   { kind: 'power', unit: 'uW', symbols: micro('W'), words: ['microwatt', 'microwatts'] },
   { kind: 'power', unit: 'mW', symbols: ['mW'], words: ['milliwatt', 'milliwatts'] },
   { kind: 'power', unit: 'nW', symbols: ['nW'], words: ['nanowatt', 'nanowatts'] },
   { kind: 'power', unit: 'pW', symbols: ['pW'], words: ['picowatt', 'picowatts'] },
-  { kind: 'power', unit: 'kW', symbols: ['kW', 'KW', 'kWe', 'kWt', 'kWth', 'kw'], words: ['kilowatt', 'kilowatts'] },
-  { kind: 'power', unit: 'MW', symbols: ['MW', 'MWe', 'MWt', 'MWth'], words: ['megawatt', 'megawatts'] },
+  { kind: 'power', unit: 'kW', symbols: ['kW', 'KW', 'kWe', 'kWt', 'kWth', 'kWp', 'kw'], words: ['kilowatt', 'kilowatts', 'kilowatt-peak', 'kilowatts-peak', 'kilowatts peak', 'kilowatt peak'] },
+  { kind: 'power', unit: 'MW', symbols: ['MW', 'MWe', 'MWt', 'MWth', 'MWp'], words: ['megawatt', 'megawatts'] },
   { kind: 'power', unit: 'GW', symbols: ['GW', 'GWe', 'GWt', 'GWth'], words: ['gigawatt', 'gigawatts'] },
   { kind: 'power', unit: 'TW', symbols: ['TW'], words: ['terawatt', 'terawatts'] },
   { kind: 'power', unit: 'hp', symbols: ['hp', 'HP', 'bhp', 'BHP', 'shp'], words: ['horsepower', 'horse power', 'mechanical horsepower', 'brake horsepower', 'brake horse power', 'shaft horsepower', 'shaft horse power'] },
