@@ -68,6 +68,8 @@ const MASS_LEAD_RE = /(?<!\p{L})(?:ends?|ending|ended|finishes|finishing|burns? 
 const FORCE_BEFORE_RE = /(?<!\p{L})(?:thrust|pull|push|tension|drag|force)(?:[^\S\n]+(?:of|was|is|measured|=|:|about|around|roughly|nearly|some))*[^\S\n]*[=:]?[^\S\n]*$/iu;
 /** Just after a mass unit said of a force: "2.8 g (weight)", "12 lb wt". */
 const WEIGHT_AFTER_RE = /^\.?[^\S\n]*(?:\([^\S\n]*(?:weight|wt\.?|force)[^\S\n]*\)|wt\.?(?!\p{L}))/iu;
+/** Just before a figure that gives a unit's size: "kilocalories of 4,184 joules", "a horse-power being 746 W". */
+const UNIT_SIZE_BEFORE_RE = /(?<!\p{L})(?:(?:kilo)?calories|kcals?|cals|B\.?Th\.?U\.?s?|BTUs?|therms?|horse-?[^\S\n]?power|(?:kilo)?calorie|British thermal units?|foot-pounds?)(?:[^\S\n]*\([^()\n]{1,20}\))?[^\S\n]+(?:of|=|equal to|being|each of|worth)[^\S\n]+(?:(?:exactly|about|some)[^\S\n]+)?$/iu;
 /** After a "0–60 mph": the seconds it takes ("in 6.1 s", "(7.9 s)", ": 4.2 sec"). */
 const SPRINT_AFTER_RE = /^[^\S\n]*(?:in|:|\(|—|–|-)?[^\S\n]*(?:in[^\S\n]+)?(?:(?:about|around|under|just under|less than|roughly)[^\S\n]+)?\d[\d.,]*[^\S\n]*(?:s|sec|secs|seconds)(?!\p{L})/iu;
 /** Around a "0–60 mph": the words of a sprint from rest. */
@@ -557,6 +559,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     // "10 kWe", "3 MWe": electrical output; "1.1 kWp", "400 watts-peak": a solar array's rated (peak) output.
     if (role === null && kind === 'power' && suffix?.type === 'unit' && /(?:[kMG]?W[ep]|watts?[- ]peak)$/i.test(text.slice(t.numEnd, end).trim())) role = 'out';
     if (role === null && kind === 'power' && suffix?.type === 'unit' && !suffix.per) role = ratingRole(text, start, end);
+    // "thermochemical kilocalories of 4,184 joules", "the horse-power of 746 watts": a unit's size, no flow.
+    if ((kind === 'energy' || kind === 'power') && UNIT_SIZE_BEFORE_RE.test(text.slice(Math.max(0, start - 40), start))) role = 'aside';
     let hedge = hedgeBefore(text, start);
     // "over two weeks", "for over 3 hours" speak of the time the claim covers.
     if (kind === 'duration' && (hedge === 'more-than' || hedge === 'less-than')) hedge = undefined;

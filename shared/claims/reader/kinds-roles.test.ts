@@ -274,3 +274,33 @@ describe('excesses and differences said the long way (invented test data)', () =
     expect(f.some((x) => x.kind === 'energy')).toBe(false);
   });
 });
+
+describe('inputs, differences, runs and unit sizes in older prose (invented test data)', () => {
+  test('"110 volts at 5 amperes go into the primary", "85 watts going into the element" are inputs', () => {
+    const a = extractFigures('110 volts at 5 amperes go into the primary, and 1,100 volts at 0.45 ampere come out of the secondary.');
+    expect(a.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 550], // 110 V × 5 A
+      ['out', 495], // 1,100 V × 0.45 A
+    ]);
+    expect(extractFigures('With 85 watts going into the element, the cartridge grew warm.')[0].role).toBe('in');
+  });
+
+  test('"the difference — some 15 degrees Fahrenheit on a summer day — between …" is a difference of 15 °F', () => {
+    const f = extractFigures('It was to run on nothing but the difference — some 15 degrees Fahrenheit on a summer day — between the air and the water of a well.');
+    expect(f[0].kind).toBe('temperature-difference');
+    expectRelClose(f[0].si, (15 * 5) / 9, EXACT); // NIST SP 811 B.9: a Fahrenheit interval is 5/9 K
+  });
+
+  test('"over a steady week" is a run of seven days', () => {
+    const f = extractFigures('With 85 watts going into the element it gave off, over a steady week, an excess of 6 W.');
+    expect(f.find((x) => x.kind === 'duration')?.si).toBe(7 * 86400);
+  });
+
+  test('a unit\'s size is no flow: "thermochemical kilocalories of 4,184 joules"', () => {
+    const f = extractFigures('An excess of 6 kcal per hour — he means thermochemical kilocalories of 4,184 joules.');
+    expect(f.map((x) => [x.kind, x.role])).toEqual([
+      ['power', 'excess'],
+      ['energy', 'aside'],
+    ]);
+  });
+});

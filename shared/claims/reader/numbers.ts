@@ -346,10 +346,10 @@ export function tokenize(text: string): NumberToken[] {
     push(m.index!, m.index! + m[0].length, '1', true);
   }
   // "for an hour", "over a day": one of the unit.
-  for (const m of text.matchAll(/(?<=(?:for|over|in|during|within|after|across|lasting|running)[^\S\n]+)(?:an?|one)(?=[^\S\n]+(?:full[^\S\n]+|whole[^\S\n]+|single[^\S\n]+)?(?:hour|day|week|fortnight|month|year|minute)(?!\p{L}))/giu)) {
+  for (const m of text.matchAll(/(?<=(?:for|over|in|during|within|after|across|lasting|running)[^\S\n]+)(?:an?|one)(?=[^\S\n]+(?:(?:full|whole|single|steady|solid|straight|continuous|entire|complete)[^\S\n]+)?(?:hour|day|week|fortnight|month|year|minute)(?!\p{L}))/giu)) {
     if (tokens.some((t) => t.start <= m.index! && m.index! < t.end)) continue;
     if (/^[^\S\n]+(?:hour|day|week|month|year|minute)[^\S\n]+and[^\S\n]+a[^\S\n]+half/iu.test(text.slice(m.index! + m[0].length))) continue;
-    const gap = /^[^\S\n]+(?:(?:full|whole|single)[^\S\n]+)?/u.exec(text.slice(m.index! + m[0].length))![0];
+    const gap = /^[^\S\n]+(?:(?:full|whole|single|steady|solid|straight|continuous|entire|complete)[^\S\n]+)?/u.exec(text.slice(m.index! + m[0].length))![0];
     push(m.index!, m.index! + m[0].length + gap.length - 1, '1', true);
   }
   // "a minute of cranking", "an hour of charging": one of the unit, spent doing something.

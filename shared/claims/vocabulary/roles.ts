@@ -87,7 +87,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       // "the 960 W the motor is said to draw".
       '(?:that |which )?(?:it|the (?:[\\w-]+ )?(?:device|unit|rig|machine|system|motor|circuit|cell|coil|heater|pump)) (?:is|was|are|were) (?:said|claimed|reported|supposed|rated) to (?:draw|take|use|consume|need)',
       // "2.4e-3 J going into the coil per pulse": what goes into the device's own part.
-      '(?:going|goes|went|fed|put|flowing|flows) in(?:to (?:the|its) (?:[\\w-]+ )?(?:coils?|device|unit|circuit|primary|input|driver|cell|stack|drive|cavity|thruster|module|rig|system))?(?! (?:the|a|an) (?:load|grid|battery|cap|capacitor|tank|store|heater))',
+      '(?:going|goes|go|went|fed|put|flowing|flows) in(?:to (?:the|its) (?:[\\w-]+ )?(?:coils?|device|unit|circuit|primary|input|driver|cell|stack|drive|cavity|thruster|module|rig|system|elements?|heaters?|filaments?|windings?|resistors?))?(?! (?:the|a|an) (?:load|grid|battery|cap|capacitor|tank|store|heater))',
       '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
       'inputs?', '(?:"|“)?drawn(?! from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point|a?ether|nowhere|nothing|thin air))', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 
       // "a 65 W charger": see the same word before the figure.

@@ -36,6 +36,8 @@ export const COOLING_MACHINE_WORDS = [
 /** Words that make a temperature a difference: before ("ΔT of 20 K") or after ("a 20 K difference"). */
 export const DIFFERENCE_BEFORE = [
   'ΔT', 'Δ T', 'delta[- ]?T', 'dT', 'temperature (?:difference|gradient|drop|rise|lift|span|spread|differential|swing|excursion|change|increase|gap)s?', 'gap of',
+  // "the difference — some 15 degrees Fahrenheit on a summer day — between …": the difference, then the figure in a dash's aside.
+  '(?:the|a|this|that) difference(?=[^\\S\\n]*[—–(])[^\\S\\n]*[—–(]',
   'differences? of', 'differential of', 'gradient of', 'rise of', 'drop of', 'lift of', '(?<!(?:to|can|could|will|would|cannot|and) )lift', 'spread of', 'span of', 'increase of', 'swing of', 'change of',
   '(?:pump(?:s|ing)?|lift(?:s|ing)?|rais(?:es|ing)|mov(?:es|ing)) (?:the )?heat(?: up)?(?: by| through| across)?', 'through', 'heats? (?:\\w+ )?by', 'warms? (?:\\w+ )?by', 'cools? (?:\\w+ )?by', 'raises? (?:\\w+ )?by', 'lowers? (?:\\w+ )?by', 'rises? by', 'drops? by',
   '(?:only |just )?across(?: (?:only|just|a|an))*', 'spanning', '(?:rais|lower|increas|decreas|heat|warm|cool|drop|lift)(?:e|es|ed|ing|s)? (?:the )?temperature (?:of )?(?:[\\w-]+ ){0,3}by', '(?:colder|cooler|hotter|warmer|lower|higher) than (?:the |its )?(?:[\\w-]+ ){0,3}by', 'differ(?:s|ing)? by', 'apart by', 'separated by', 'rose by', 'fell by', 'falls? by', 'climbs? by', 'warmer by', 'cooler by', 'hotter by', 'colder by', 'increases? by', 'decreases? by', 'only', 'a mere', 'just',
