@@ -42,9 +42,8 @@ const nodeProject = (name, testMatch, extra = {}) => ({
 });
 
 module.exports = {
-  // Jest's default is one worker per core but one; on 2 cores that is one. Two were tried: the browser
-  // tests' Chromium already keeps both cores busy, so the run took as long and timed out more often.
-  // CW_TEST_WORKERS sets the number for a larger machine.
+  // `npm test` asks for two workers for the projects without a browser and one for the browser tests
+  // (tests/support/phases.ts). CW_TEST_WORKERS sets one number for everything, on a larger machine.
   ...(Number(process.env.CW_TEST_WORKERS) > 0 ? { maxWorkers: Number(process.env.CW_TEST_WORKERS) } : {}),
   // For every project (jest reads it from the top level only): a bound on hanging, not a speed check.
   // Creating and migrating a test database, or rendering a whole screen on a cold transform cache, can
