@@ -63,9 +63,8 @@ const SIDE_LEAD_RE =
 const MASS_ROLE_AFTER_RE = /^[^\S\n]*(?:(?:dry|empty|wet|fuelled|fueled|full|loaded|unfuelled|unfueled)(?!\p{L})|(?:of (?:it|that|them)[^\S\n]+)?(?:is|are|being|was|were|would be|will be|is to be|must be)[^\S\n]+(?:the[^\S\n]+)?(?:propellant|fuel|xenon|cold gas|reaction mass|oxidi[sz]er)(?!\p{L}))/iu;
 /** Between a mass and a bare number that is the craft's other mass: "… and ends at", "…, of which", "… down to". */
 const MASS_LEAD_RE = /(?<!\p{L})(?:ends?|ending|ended|finishes|finishing|burns? (?:out|down)|down|of which)(?!\p{L})[^\S\n]*(?:at|to|with)?[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
-/** After such a number: the clause ends ("… at twenty, and …", "… at 20.", "… at thirty-five)"). */
 /** Just before a mass unit said of a force: "thrust 2.8 g", "a pull of 140 lb", "push of about 3 kg". */
-const FORCE_BEFORE_RE = /(?<!\p{L})(?:thrust|pull|push|tension|drag|force)(?:[^\S\n]+(?:of|was|is|measured|=|:|about|around|roughly|nearly|some))*[^\S\n]*[=:]?[^\S\n]*$/iu;
+const FORCE_BEFORE_RE = /(?<!\p{L})(?:thrust|pull|push|tension|drag|force)(?:[^\S\n]+(?:per|of each|for each)[^\S\n]+[\p{L}-]+)?(?:[^\S\n]+(?:of|was|is|measured|=|:|about|around|roughly|nearly|some))*[^\S\n]*[=:]?[^\S\n]*$/iu;
 /** Just after a mass unit said of a force: "2.8 g (weight)", "12 lb wt". */
 const WEIGHT_AFTER_RE = /^\.?[^\S\n]*(?:\([^\S\n]*(?:weight|wt\.?|force)[^\S\n]*\)|wt\.?(?!\p{L}))/iu;
 /** Just before a figure that gives a unit's size: "kilocalories of 4,184 joules", "a horse-power being 746 W". */
@@ -74,6 +73,7 @@ const UNIT_SIZE_BEFORE_RE = /(?<!\p{L})(?:(?:kilo)?calories|kcals?|cals|B\.?Th\.
 const SPRINT_AFTER_RE = /^[^\S\n]*(?:in|:|\(|—|–|-)?[^\S\n]*(?:in[^\S\n]+)?(?:(?:about|around|under|just under|less than|roughly)[^\S\n]+)?\d[\d.,]*[^\S\n]*(?:s|sec|secs|seconds)(?!\p{L})/iu;
 /** Around a "0–60 mph": the words of a sprint from rest. */
 const SPRINT_WORD_RE = /(?<!\p{L})(?:sprint|accelerat\w*|dash|time)(?!\p{L})/iu;
+/** After such a number: the clause ends ("… at twenty, and …", "… at 20.", "… at thirty-five)"). */
 const BARE_END_RE = /^[^\S\n]*(?:[,;.!?)\]—–]|and(?!\p{L})|$)/u;
 
 /** Just before an erratum's figure: "It should read", "should have read", "should be". */

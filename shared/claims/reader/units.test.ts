@@ -282,3 +282,15 @@ describe('car, boat and solar-panel ratings as spec sheets print them (invented 
     ]);
   });
 });
+
+describe('grams of thrust per watt, the propeller trade\'s figure of merit (invented test data)', () => {
+  test('"9 g per watt" and "6.5 g/W" of a motor and propeller are thrust per power in gram-force', () => {
+    const f = extractFigures('Motor/prop results from the test stand: 9 g per watt at half throttle, about 6.5 g/W flat out. Max thrust per motor 2.6 kg at 410 W.');
+    expect(f.map((x) => x.kind)).toEqual(['thrust-per-power', 'thrust-per-power', 'thrust', 'power']);
+    expectRelClose(f[0].si, 9 * 9.80665e-3, SEVEN); // SP 811 B.8: gram-force 9.806 65 E-03 N (exact), per W
+    expectRelClose(f[1].si, 6.5 * 9.80665e-3, SEVEN);
+    expectRelClose(f[2].si, 2.6 * 9.80665, SEVEN); // kilogram-force 9.806 65 E+00 N (exact)
+    // A mass per power with no thrust about it is no thrust: "1.2 kg per kW" of an engine's own mass.
+    expect(extractFigures('The diesel weighs 1.2 kg per kW of rated output.').some((x) => x.kind === 'thrust-per-power')).toBe(false);
+  });
+});

@@ -137,6 +137,12 @@ export function readSuffix(text: string, at: number): { suffix: Suffix; end: num
       const per = unitAt(text, u.end + c[0].length);
       if (per && !per.form.factor) {
         if (u.form.kind === 'thrust' && per.form.kind === 'power') return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
+        // "9 g per watt", "6.5 g/W" said of a propeller or a thruster: grams of thrust for each watt (the
+        // figure of merit of propellers and fans), in gram-force.
+        const grams = u.form.kind === 'mass' && per.form.kind === 'power' ? GRAMS_IN_KG[u.form.unit] : undefined;
+        if (grams !== undefined && THRUST_TEXT_RE.test(sentenceAround(text, at, per.end))) {
+          return { suffix: { type: 'unit', form: { kind: 'thrust', unit: 'kgf', factor: grams * (u.form.factor ?? 1) }, per: per.form }, end: per.end };
+        }
         if (u.form.kind === 'power' && per.form.kind === 'mass') return { suffix: { type: 'unit', form: u.form, per: per.form }, end: per.end };
         // "3.6 MJ per day": the energy, over the time said after it (read as a rate below).
         if (u.form.kind === 'energy' && per.form.kind === 'duration') return { suffix: { type: 'unit', form: u.form }, end: u.end };
@@ -173,6 +179,11 @@ export function readSuffix(text: string, at: number): { suffix: Suffix; end: num
 }
 
 const SPEED_OF_LIGHT: UnitForm = { kind: 'speed', unit: 'm/s', factor: C_M_PER_S };
+
+/** A mass unit's size in kilograms, for a mass per power said of thrust ("9 g per watt"). */
+const GRAMS_IN_KG: Record<string, number> = { g: 0.001, kg: 1, lb: 0.45359237, lbm: 0.45359237, oz: 0.028349523125 };
+/** Words of thrust in a sentence: "thrust", "prop(eller)s", "lift", "hover". */
+const THRUST_TEXT_RE = /(?<!\p{L})(?:thrust\w*|props?|propellers?|rotors?|fans?|ducted|lift|hover\w*|motor\/prop|test stand|thrust stand)(?!\p{L})/iu;
 
 /** After "per": one of a counted thing, not a unit ("per bit", "per cycle"). */
 const PER_COUNT_RE = /^(?:(?:erased|logical|logic|single|full|complete|charge|working)[^\S\n]+)?(?:bits?|operations?|erasures?|cycles?|batch(?:es)?|flips?|runs?|trips?|laps?|charges?|discharges?|fills?|sessions?|pulses?|shots?|strokes?|revolutions?|turns?|swings?|firings?)(?!\p{L})/iu;
