@@ -13,6 +13,7 @@ import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
 import { asideStatedBounds, statedBound } from './bounds';
 import { comparedPercent, relate } from './comparisons';
+import { thrustFromRatio } from './relations';
 import { BEFORE_WINDOW, BURNER_RE, COOLING_MACHINE_RE, HEAT_PUMP_RE, NAMED_HEAT_PUMP_RE, paragraphAround, sentenceAround, windowStart } from './context';
 import { asideApparentSpeeds, asideIdealDeltaV, asideOtherTopics, asideSignals, asideThresholds, asideWorkedBounds, rolesFromLineLabels, rolesFromWordLabels } from './topics';
 import { insertAfter, siOf, typedSi, type Draft } from './draft';
@@ -58,7 +59,7 @@ function unitQuantity(num: string, s: Extract<Suffix, { type: 'unit' }>): { kind
 
 /** Just before a bare number said of a machine's side: "cold end at", "the floor loop at", "inside, about". */
 const SIDE_LEAD_RE =
-  /(?<!\p{L})(?:(?:hot|cold|warm|cool)(?:[- ](?:side|end|junction|plate|head|reservoir|face))?|sink|source|flow|return|loop|inside|outside|outdoors|indoors|condenser|evaporator|cabinet|exhaust|inlet|outlet|floor|house|room|water|tank|kitchen|head|plate|(?:rejects?|rejecting|dumps?|dumping|sheds?|shedding)(?:[^\S\n]+(?:its[^\S\n]+|the[^\S\n]+)?(?:waste[^\S\n]+)?heat)?)(?!\p{L})[^\S\n]*(?:(?!(?:is|was|at|with|COP|SCOP|EER|efficiency|of|rated|power|output|input)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}?(?:(?:is|was|sits|sat|runs|ran|running|held|kept|stays|stayed|set|goes|went)[^\S\n]+)?(?:at|of|to|around|[:=])(?:[^\S\n]+(?:about|around|roughly|some|nearly))??[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
+  /(?<!\p{L})(?:(?:hot|cold|warm|cool)(?:[- ](?:side|end|junction|plate|head|reservoir|face))?|sink|source|flow|return|loop|inside|outside|outdoors|indoors|condenser|evaporator|cabinet|exhaust|inlet|outlet|(?:under)?floor|radiators?|emitters?|house|room|water|tank|kitchen|head|plate|(?:rejects?|rejecting|dumps?|dumping|sheds?|shedding)(?:[^\S\n]+(?:its[^\S\n]+|the[^\S\n]+)?(?:waste[^\S\n]+)?heat)?)(?!\p{L})[^\S\n]*(?:(?!(?:is|was|at|with|COP|SCOP|EER|efficiency|of|rated|power|output|input)(?!\p{L}))[\p{L}-]+[^\S\n]+){0,3}?(?:(?:is|was|sits|sat|runs|ran|running|held|kept|stays|stayed|set|goes|went)[^\S\n]+)?(?:at|of|to|around|[:=]|(?<=(?<!\p{L})temperatures?[^\S\n]*))(?:[^\S\n]+(?:about|around|roughly|some|nearly))??[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
 /** After a bare number, what part of a craft's mass it is: "… and a hundred and fifty dry", "nine hundred is propellant". */
 const MASS_ROLE_AFTER_RE = /^[^\S\n]*(?:(?:dry|empty|wet|fuelled|fueled|full|loaded|unfuelled|unfueled)(?!\p{L})|(?:of (?:it|that|them)[^\S\n]+)?(?:is|are|being|was|were|would be|will be|is to be|must be)[^\S\n]+(?:the[^\S\n]+)?(?:propellant|fuel|xenon|cold gas|reaction mass|oxidi[sz]er)(?!\p{L}))/iu;
 /** Between a mass and a bare number that is the craft's other mass: "… and ends at", "…, of which", "… down to". */
@@ -75,6 +76,25 @@ const SPRINT_AFTER_RE = /^[^\S\n]*(?:in|:|\(|—|–|-)?[^\S\n]*(?:in[^\S\n]+)?(
 const SPRINT_WORD_RE = /(?<!\p{L})(?:sprint|accelerat\w*|dash|time)(?!\p{L})/iu;
 /** After such a number: the clause ends ("… at twenty, and …", "… at 20.", "… at thirty-five)"). */
 const BARE_END_RE = /^[^\S\n]*(?:[,;.!?)\]—–]|and(?!\p{L})|$)/u;
+
+/**
+ * "3 or 4 kW", "one point eight, one point nine kilowatts": two bare-then-united numbers close together
+ * (the second above the first, by at most half as much again; by a quarter after a comma) said as one
+ * hedged figure — not a list ("1.8, 2.4 and 3.0 kW" goes on after it).
+ */
+function spokenRange(text: string, t: NumberToken, next: NumberToken): boolean {
+  if (t.suffix !== null || next.suffix === null) return false;
+  const gap = text.slice(t.numEnd, next.start);
+  const [a, b] = [Number(t.num), Number(next.num)];
+  if (!(a > 0) || !(b > a)) return false;
+  const or = /^[^\S\n]+or[^\S\n]+$/iu.test(gap);
+  const comma = /^,[^\S\n]*$/u.test(gap);
+  // (After a comma only as said aloud, both in words: "Table 1, 1.18 kW" is a label and a figure.)
+  if (!(or && b <= 1.5 * a) && !(comma && b <= 1.25 * a && t.words && next.words)) return false;
+  // (Not a list: nothing listed before the first or after the second.)
+  if (/\d[^\S\n]*(?:[\p{L}%°]+[^\S\n]*)?(?:,|or)[^\S\n]*$/u.test(text.slice(Math.max(0, t.start - 30), t.start))) return false;
+  return !/^[^\S\n]*(?:,[^\S\n]*\d|(?:and|or)[^\S\n]+\d|,[^\S\n]*(?:and|or)[^\S\n]+\d)/u.test(text.slice(next.end, next.end + 20));
+}
 
 /** Just before an erratum's figure: "It should read", "should have read", "should be". */
 const SHOULD_READ_BEFORE_RE = /(?<!\p{L})should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be)[^\S\n]*[:"“'‘]?[^\S\n]*$/iu;
@@ -254,7 +274,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         next.consumed = true;
       } else if (
         !next.plusMinus &&
-        isRangeGap(text, gapStart, next.start, t.start) &&
+        (isRangeGap(text, gapStart, next.start, t.start) || spokenRange(text, t, next)) &&
         (t.suffix === null || suffixKind(t.suffix) === suffixKind(next.suffix)) &&
         next.suffix &&
         // ("a COP of 2.1 to 70 °F indoor air": a bare number its own words give another kind is no lower end.)
@@ -343,8 +363,11 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         start - flowSibling.end < 80 &&
         !/[\p{N}]/u.test(text.slice(flowSibling.end, start)) &&
         sentenceAround(text, flowSibling.start, flowSibling.end) === sentenceAround(text, start, t.numEnd) &&
-        /^[^\S\n]*(?:in|out|back)(?:[^\S\n]*[,.;:!?)"”’']|[^\S\n]+(?:and|at|of|from|to|with|while|for|on)(?!\p{L})|[^\S\n]*$)/iu.test(text.slice(t.numEnd, t.numEnd + 12)) &&
-        /(?<!\p{L})(?:gave|gives|give|put(?:s|ting)?(?:[^\S\n]+out)?|returned|returns|delivered|delivers|produced|produces|yielded|yields|drew|draws|took|takes|used|uses|got|gets|and|with)[^\S\n]+(?:(?:back|about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start))
+        (/^[^\S\n]*(?:in|out|back)(?:[^\S\n]*[,.;:!?)"”’']|[^\S\n]+(?:and|at|of|from|to|with|while|for|on)(?!\p{L})|[^\S\n]*$)/iu.test(text.slice(t.numEnd, t.numEnd + 12)) ||
+          // ("drawing two point eight from the grid", "measured about four hundred and fifty at the wheel": the
+          // supply or the output named after it.)
+          /^[^\S\n]+(?:from[^\S\n]+(?:the[^\S\n]+)?(?:grid|mains|wall|socket|supply|battery|pack)|at[^\S\n]+the[^\S\n]+(?:wheels?|shaft|crank|output|load))(?!\p{L})/iu.test(text.slice(t.numEnd, t.numEnd + 24))) &&
+        /(?<!\p{L})(?:gave|gives|give|put(?:s|ting)?(?:[^\S\n]+out)?|returned|returns|delivered|delivers|produced|produces|yielded|yields|drew|draws|drawing|took|takes|taking|used|uses|using|got|gets|measured|logged|and|with)[^\S\n]+(?:(?:back|about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start))
       ) {
         suffix = flowSibling.suffix;
         carried = true;
@@ -635,6 +658,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   asideSignals(text, drafts);
   asideThresholds(drafts);
   weightHeldUp(text, drafts);
+  thrustFromRatio(text, drafts);
   heatPumpPercents(text, drafts, unreadPercents);
   asideOtherPercents(text, drafts, unreadPercents);
   asideLoneAmbient(text, drafts);

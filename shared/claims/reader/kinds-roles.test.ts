@@ -304,3 +304,61 @@ describe('inputs, differences, runs and unit sizes in older prose (invented test
     ]);
   });
 });
+
+describe('spoken and hedged figures (invented test data)', () => {
+  test('a bare number after "underfloor at", "the radiators at" or "Flow temperature" takes the unit of a temperature said before', () => {
+    const a = extractFigures('Ground loop at ten degrees, underfloor at thirty, and it has averaged a COP of four point six.');
+    expect(a.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si])).toEqual([
+      ['cold', 283.15], // 10 °C + 273.15 (NIST SP 811 §4.2.1.1)
+      ['hot', 303.15],
+    ]);
+    const b = extractFigures('The coldest day it was two degrees out. It put eleven kilowatts of heat into the house. Flow temperature forty-five.');
+    expect(b.filter((x) => x.kind === 'temperature').map((x) => x.si)).toEqual([275.15, 318.15]);
+  });
+
+  test('"drawing two point eight from the grid" and "about four hundred and fifty at the wheel" take the unit of the power before', () => {
+    const a = extractFigures('It was putting eleven kilowatts of heat into the house and drawing two point eight from the grid.');
+    expect(a.filter((x) => x.kind === 'power' && !x.derived).map((x) => [x.role, x.si])).toEqual([
+      ['out', 11000],
+      ['in', 2800],
+    ]);
+    const b = extractFigures("So you're feeding it, what, five hundred and forty watts, and we measured about four hundred and fifty at the wheel.");
+    expect(b.map((x) => [x.role, x.si])).toEqual([
+      ['in', 540],
+      ['out', 450],
+    ]);
+  });
+
+  test('"3 or 4 kW" and "one point eight, one point nine kilowatts" are ranges; a list is not', () => {
+    expect(extractFigures('The heater gives 3 or 4 kW.').map((x) => [x.si, x.upper?.si])).toEqual([[3000, 4000]]);
+    expect(extractFigures('Output on the genny side: one point eight, one point nine kilowatts.').map((x) => [x.si, x.upper?.si])).toEqual([[1800, 1900]]);
+    // ("1.8, 2.4 and 3.0 kW": a list, each its own; "2 or 5 kW": too far apart to be one hedged figure.)
+    expect(extractFigures('Readings were 1.8, 2.4 and 3.0 kW.').some((x) => x.upper !== undefined)).toBe(false);
+    expect(extractFigures('It gives 2 or 5 kW.').some((x) => x.upper !== undefined)).toBe(false);
+  });
+
+  test('the wind\'s speed is set aside: "in 20 km/h winds", "Wind was light, 8–12 km/h"', () => {
+    expect(extractFigures('The wing sail gives up to 400 N of drive in 20 km/h winds.').find((x) => x.kind === 'speed')?.role).toBe('aside');
+    expect(extractFigures('Wind was light, 8–12 km/h. It stayed aloft for 46 minutes.').find((x) => x.kind === 'speed')?.role).toBe('aside');
+    expect(extractFigures('The boat reached 20 km/h.').find((x) => x.kind === 'speed')?.role).not.toBe('aside');
+  });
+
+  test('"twin 250 hp outboards" are 500 hp in all', () => {
+    const f = extractFigures('Ours had twin 250 hp outboards and topped out at 50 mph.');
+    const total = f.find((x) => x.kind === 'power' && x.derived);
+    expectRelClose(total!.si, 2 * 250 * 745.6999, 1e-6); // NIST SP 811 B.8: 1 hp = 745.699 9 W
+  });
+});
+
+describe('a thrust per power and one power give the thrust (invented test data)', () => {
+  test('"3.2 N per kW … will run at 12 kW" is 38.4 N; "fourteen millinewtons a watt" is a thrust per power', () => {
+    const f = extractFigures('The unit produced 3.2 N per kW in hover tests, and the production version will run at 12 kW.');
+    const thrust = f.find((x) => x.kind === 'thrust')!;
+    expectRelClose(thrust.si, 3.2e-3 * 12000, EXACT);
+    expect(thrust.derived).toBeTruthy();
+    const g = extractFigures('Call it fourteen millinewtons a watt.');
+    expect(g.map((x) => [x.kind, x.si])).toEqual([['thrust-per-power', 0.014]]);
+    // (A thrust already said is not worked out again.)
+    expect(extractFigures('A pull of 4.9 mN, which is 14 mN per kW of the 350 W input.').filter((x) => x.kind === 'thrust')).toHaveLength(1);
+  });
+});

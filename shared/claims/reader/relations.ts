@@ -14,7 +14,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, NAMED_HEAT_PUMP_R
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor, SUPPLY_GIVES_LEAD_RE, TO_DEVICE_PART_AFTER_RE } from './roles';
-import { asideControlPowers, asideDenied, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput } from './roles-by-context';
+import { asideControlPowers, asideDenied, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, asideWindSpeeds, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
 
 /** The text says the input was not given: a claim of no input cannot be read from it. */
@@ -161,12 +161,12 @@ function quantumRestated(text: string, drafts: Draft[]): void {
   }
 }
 
-const COUNT_WORDS: Record<string, number> = { two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, eleven: 11, twelve: 12, twenty: 20, a: 1, pair: 2, dozen: 12 };
-/** Before a power of one of several things: "three 60 W bulbs", "2 x 75 W heaters", "twelve 400-watt panels". */
-const COUNT_BEFORE_RE = /(?<![\p{L}\p{N}.,])(two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|twenty|[2-9]|[1-9]\d)[^\S\n]*(?:[x×][^\S\n]*)?$/iu;
+const COUNT_WORDS: Record<string, number> = { two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, eleven: 11, twelve: 12, twenty: 20, a: 1, pair: 2, dozen: 12, twin: 2, triple: 3, quad: 4 };
+/** Before a power of one of several things: "three 60 W bulbs", "2 x 75 W heaters", "twelve 400-watt panels", "twin 250 hp outboards". */
+const COUNT_BEFORE_RE = /(?<![\p{L}\p{N}.,])(two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|twenty|twin|triple|quad|[2-9]|[1-9]\d)[^\S\n]*(?:[x×][^\S\n]*)?$/iu;
 /** After it: the things, in the plural. */
 const COUNTED_THINGS_AFTER_RE =
-  /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+)?(?:bulbs|lamps|lights|heaters|panels|modules|motors|fans|LEDs|pumps|radiators|elements|units|cells|resistors|loads|speakers|lasers|emitters|thrusters|turbines|generators|engines|strips|tubes|globes)(?!\p{L})/iu;
+  /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+)?(?:bulbs|lamps|lights|heaters|panels|modules|motors|fans|LEDs|pumps|radiators|elements|units|cells|resistors|loads|speakers|lasers|emitters|thrusters|turbines|generators|engines|strips|tubes|globes|outboards|propellers|props|rotors|compressors|boilers|burners)(?!\p{L})/iu;
 
 /**
  * "lights three 60 W bulbs", "2 x 75 W heaters": a power said for each of several things — the total is
@@ -192,6 +192,35 @@ function countedPowers(text: string, drafts: Draft[]): void {
     });
     d.role = 'aside';
   }
+}
+
+/**
+ * "3.2 N per kW in hover tests … the production version will run at 12 kW", "sixty millinewtons per
+ * kilowatt at the nominal point, which is one point three five kilowatts": where a text gives a thrust
+ * per power and one power in the same paragraph but no thrust, the thrust is the one times the other.
+ */
+export function thrustFromRatio(text: string, drafts: Draft[]): void {
+  if (drafts.some((d) => d.kind === 'thrust' && d.role !== 'aside')) return;
+  const ratios = drafts.filter((d) => d.kind === 'thrust-per-power' && d.role !== 'aside' && d.upper === undefined);
+  if (ratios.length !== 1) return;
+  const r = ratios[0];
+  const powers = drafts.filter((d) => d.kind === 'power' && (d.role === 'in' || d.role === null) && d.upper === undefined && paragraphAround(text, d.start, d.end) === paragraphAround(text, r.start, r.end));
+  if (powers.length !== 1) return;
+  const p = powers[0];
+  const [perW, w] = [siOf(r), siOf(p)];
+  if (perW === null || w === null || !(w > 0)) return;
+  // (Not a push at the photon bound itself, P/c or 2P/c — light absorbed or reflected: there the ratio is
+  // the figure the check reads, and which of the two it is rests on the ratio's own words.)
+  const ofC = perW * 299_792_458;
+  if (ofC >= 0.8 && ofC <= 2.2) return;
+  insertAfter(drafts, p.start > r.start ? p : r, {
+    start: Math.min(r.start, p.start),
+    end: Math.max(r.end, p.end),
+    kind: 'thrust',
+    quantity: typedSi(perW * w, 'N'),
+    role: null,
+    derived: `thrust = thrust per power × power (${formatQuantity(perW, 'N/W')} × ${formatQuantity(w, 'W')})`,
+  });
 }
 
 /** Words of the heat a cooling machine removes, said before its figure ("Refrigerating capacity ....", "cooling output:"). */
@@ -562,6 +591,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   storeAloneIsInput(text, drafts);
   wetBelowDry(drafts);
   asideQuotedLightSpeed(text, drafts);
+  asideWindSpeeds(text, drafts);
   asideDenied(text, drafts);
   efficiencyQuotient(text, drafts);
 

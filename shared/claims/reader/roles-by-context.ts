@@ -610,6 +610,20 @@ export function asideQuotedLightSpeed(text: string, drafts: Draft[]): void {
   }
 }
 
+/** Just before a speed of the wind: "Wind was light, 8–12 km/h", "wind speeds of about 6 m/s", "a headwind of 20 km/h". */
+const WIND_BEFORE_RE =
+  /(?<!\p{L})(?:winds?|wind[^\S\n]+speeds?|breezes?|gusts?|head-?winds?|tail-?winds?|cross-?winds?)(?:[^\S\n]+(?:was|were|is|are|of|at|averag(?:ed|ing)|light|strong|gusty|steady|moderate|fresh|blowing|blew|up[^\S\n]+to|gusting(?:[^\S\n]+to)?))*[^\S\n]*[,:]?[^\S\n]*(?:(?:about|around|roughly|some|only|just)[^\S\n]+)?$/iu;
+/** Just after one: "in 20 km/h winds", "a 6 m/s breeze", "15 knots of wind". */
+const WIND_AFTER_RE = /^[^\S\n]*(?:winds?|wind[^\S\n]+speeds?|breezes?|gusts?|head-?winds?|tail-?winds?|cross-?winds?|of[^\S\n]+wind)(?!\p{L})/iu;
+
+/** The wind's speed is no speed of the craft or of anything it throws out: set aside. */
+export function asideWindSpeeds(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (d.kind !== 'speed' || d.derived || d.role === 'aside') continue;
+    if (WIND_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)) || WIND_AFTER_RE.test(text.slice(d.end, d.end + 20))) d.role = 'aside';
+  }
+}
+
 /** Just before a figure said not to be given: "does not give", "never delivered", "no longer claims". */
 const DENIED_BEFORE_RE =
   /(?<!\p{L})(?:(?:does|did|do|will|would|can|could)[^\S\n]+not|doesn['’]t|didn['’]t|don['’]t|won['’]t|can['’]t|cannot|never|no[^\S\n]+longer)[^\S\n]+(?:(?:really|actually|in[^\S\n]+fact|ever)[^\S\n]+)?(?:gives?|gave|make|makes|made|produces?|produced|delivers?|delivered|put[^\S\n]+out|puts[^\S\n]+out|generates?|generated|returns?|returned|output|reach(?:es|ed)?|achieves?|achieved|claims?|claimed)[^\S\n]+(?:(?:anything[^\S\n]+like|anywhere[^\S\n]+near|about|some|the)[^\S\n]+)?$/iu;

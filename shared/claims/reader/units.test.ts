@@ -294,3 +294,11 @@ describe('grams of thrust per watt, the propeller trade\'s figure of merit (inve
     expect(extractFigures('The diesel weighs 1.2 kg per kW of rated output.').some((x) => x.kind === 'thrust-per-power')).toBe(false);
   });
 });
+
+describe('a vehicle range said as what the consumption "works out to" (invented test data)', () => {
+  test('"3.4 miles per kWh … that works out to a real-world 250 miles" is 250/3.4 kWh from the drive', () => {
+    const f = extractFigures('It managed 3.4 miles per kWh on our loop. With 75 kWh usable, that works out to a real-world 250 miles.');
+    const out = f.find((x) => x.kind === 'energy' && x.role === 'out')!;
+    expectRelClose(out.si, (250 / 3.4) * 3.6e6, 1e-9); // SP 811 B.8: kWh = 3.6 MJ exactly; miles cancel
+  });
+});

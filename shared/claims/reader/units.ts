@@ -42,8 +42,9 @@ const WORD_RE = new RegExp(`${SEP}(${wordAlts})(?![\\p{L}\\p{N}_])`, 'iuy');
 const PERCENT_RE = /[^\S\n]{0,3}(?:%|per[ -]?cent(?!\p{L})|pct\.?(?!\p{L}))/iuy;
 /** A compound after a unit: "/kW", " per kilowatt", "·m", "/m²". */
 const COMPOUND_RE = /[^\S\n]*(?:\/|per(?!\p{L})|·|⋅|-(?=[^\S\n]*\p{L}\p{L}?\b))[^\S\n]*/iuy;
-// (Also "3.1 micronewtons of thrust per kilowatt": the quantity named between the unit and "per".)
-const FOR_EVERY_RE = /[^\S\n]+(?:(?:of[^\S\n]+(?:thrust|force|push|lift)[^\S\n]+(?:per|for[^\S\n]+(?:every|each)))|for[^\S\n]+(?:every|each))[^\S\n]+(?:single[^\S\n]+)?/iuy;
+// (Also "3.1 micronewtons of thrust per kilowatt": the quantity named between the unit and "per"; and
+// "fourteen millinewtons a watt", as people say it.)
+const FOR_EVERY_RE = /[^\S\n]+(?:(?:of[^\S\n]+(?:thrust|force|push|lift)[^\S\n]+(?:per|for[^\S\n]+(?:every|each)))|for[^\S\n]+(?:every|each)|an?(?=[^\S\n]+(?:watt|kilowatt|kilogram|kilo)s?(?!\p{L})))[^\S\n]+(?:single[^\S\n]+)?/iuy;
 /** After "per" and a unit of energy or power: the input that unit is of ("per kWh of electricity", "per kW it draws"). */
 export const PER_UNIT_IN_WORDS = String.raw`(?:of[^\S\n]+)?(?:electricity|electrical|electric|input|fuel|gas|drive|work|energy[^\S\n]+(?:in|input|supplied|used)|(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:takes|uses|draws|consumes|burns|is[^\S\n]+fed|gets))(?!\p{L})`;
 const PER_UNIT_IN_RE = new RegExp(String.raw`^[^\S\n]*(?:watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|W|J)s?[^\S\n]+${PER_UNIT_IN_WORDS}`, 'iu');

@@ -34,7 +34,7 @@ const DISTANCE_RE = new RegExp(
 );
 /** Words of a vehicle's range around a distance: "Range:", "per charge", "on one charge", "will do". */
 const RANGE_WORDS_RE =
-  /(?<!\p{L})(?:range|ranges|per[^\S\n]+charge|(?:on|from)[^\S\n]+(?:a|one|each|every|the|its|a[^\S\n]+single|a[^\S\n]+full)[^\S\n]+(?:full[^\S\n]+)?(?:charge|pack|battery|tank)|will[^\S\n]+do|does|did|goes|went|covers?|covered|travell?ed|drove|driven|ridden)(?!\p{L})/iu;
+  /(?<!\p{L})(?:range|ranges|per[^\S\n]+charge|(?:on|from)[^\S\n]+(?:a|one|each|every|the|its|a[^\S\n]+single|a[^\S\n]+full)[^\S\n]+(?:full[^\S\n]+)?(?:charge|pack|battery|tank)|will[^\S\n]+do|does|did|goes|went|covers?|covered|travell?ed|drove|driven|ridden|works?[^\S\n]+out[^\S\n]+(?:to|at)|real[- ]world|good[^\S\n]+for)(?!\p{L})/iu;
 
 /** After an energy: "for every hundred kilometres", "per 100 km", "each mile". */
 const PER_HUNDRED_AFTER_RE = /^[^\S\n]*(?:for[^\S\n]+every|per|every|each|a)[^\S\n]+(hundred[^\S\n]+|100[^\S\n]*)?(km|kilomet(?:re|er)s?|miles?|mi)(?!\p{L})/iu;

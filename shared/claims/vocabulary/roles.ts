@@ -33,7 +33,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       // "The tank holds the equivalent of twelve kilowatt-hours": what a store holds is what it has to give.
       '(?:tanks?|batter(?:y|ies)|stores?|packs?|banks?|cylinders?|reservoirs?|capacitors?|accumulators?) holds?(?: (?:the equivalent of|about|some|roughly|up to))?(?:,? say,?)?',
       // "Feed it 5 V at 2 A": what a reader is told to give the device.
-      '(?<![\\w-])(?:feed|give|supply) (?:it|them|the (?:unit|device|box|board|module|converter|circuit))(?: with)?',
+      '(?<![\\w-])(?:feed|feeding|give|giving|supply|supplying) (?:it|them|the (?:unit|device|box|board|module|converter|circuit|motor))(?: with)?(?:,? (?:what|say|um|uh|er|like),?)?',
       // A store's sheet labels its sides: "Charging from standstill: 2.04 kWh", "Charge energy = 15 kWh".
       '(?<=(?:^|\\n|[.;|•]) *)(?:re)?charg(?:e|ing)(?: (?:energy|input|side|in))?(?: [\\w-]+){0,8}?[^\\S\\n]*[:=](?=[^\\S\\n]*$)',
       '(?:battery|batteries|supply|mains|grid|source|pack|socket|outlet|rail|bus|line)(?: (?:that|which))? (?:supplying|supplies|supplied|providing|provides|delivering|delivers|gave up|gives up|feeding|feeds|fed|powering|powers|driving|drives|shows|showed|reads|read)',
