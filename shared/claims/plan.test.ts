@@ -1940,3 +1940,20 @@ describe('a range and a consumption said in words (invented test data)', () => {
     expect(fl?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(121 / 12, 6);
   });
 });
+
+describe('a table of readings is read line by line: no line\'s input set against another line\'s output (invented test data)', () => {
+  it('a turbine, a house load and a battery hour by hour is no conflict: each hour balances', () => {
+    const text = 'Site day, turbine and house\nTime | Turbine (kW) | House load (kW) | Battery (kW)\n06:00 | 1.2 | 0.4 | 0.8\n12:00 | 0.3 | 1.5 | -1.2\n18:00 | 2.1 | 2.3 | -0.2';
+    const run = checkOf(text, 'first-law');
+    expect(run?.finding).not.toBe('breaks');
+  });
+  it("a table's own average row is its ledger: 456 W out of 405 W in", () => {
+    const text = 'Loop test, motor driving its own alternator.\n\nRun   P_in [W]   P_out [W]\n1     412        455\n2     398        451\n3     405        462\nAvg   405        456';
+    // over-unity ratio = 456 / 405 (the table's own average row)
+    expectRun(text, 'first-law', 'breaks', 'over_unity', 456 / 405, 6);
+  });
+  it('a sweep whose largest input and output share a line keeps that line: the full-load point', () => {
+    const text = 'Dyno sweep\n\nPoint | Input (W) | Shaft (W)\n1 | 197 | 162\n2 | 398 | 338\n3 | 571 | 480';
+    expectRun(text, 'first-law', 'consistent', 'over_unity', 480 / 571, 6);
+  });
+});

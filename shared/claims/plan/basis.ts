@@ -184,6 +184,51 @@ function ledgerParagraphs(figs: Figure[], text: string): [Figure[], Figure[]] {
   return [ins.filter((f) => both.has(key(f))), outs.filter((f) => both.has(key(f)))];
 }
 
+/** The label of a table's summary row: "Avg", "Total", "Mean", "Overall" (after its column's label, in the reader's view: "Run Avg"). */
+const SUMMARY_ROW_RE = /^[^\S\n]*\|?[^\S\n]*(?:[\p{L}][\p{L}\p{N}_.-]*[^\S\n]+){0,2}?(?:avg\.?|average|mean|total|totals|sum|overall|whole (?:run|test|period))(?!\p{L})/iu;
+
+/**
+ * A table or a log of several readings, one per line, each line with what went in and what came out
+ * ("06:00 | 1.2 | 0.4 | 0.8", "Run 2: 45 kW fuel, 14.8 kW out"): each line is a ledger of its own, and
+ * one line's input is never set against another line's output. Where the largest of each stand on one
+ * line (a sweep's full-load point, a total row), that line is the ledger; else a summary row ("Avg",
+ * "Total"); else the line that claims the
+ * most (the highest ratio of out to in, each line's own) is checked: a table conflicts with the first law
+ * only where one of its own lines does.
+ */
+function oneRow(ins: Figure[], outs: Figure[], text: string): [Figure[], Figure[]] {
+  if (!text || ins.length < 2 || outs.length < 2 || [...ins, ...outs].some((f) => f.start === null)) return [ins, outs];
+  const line = (f: Figure) => text.lastIndexOf('\n', f.start! - 1);
+  const lines = new Set([...ins, ...outs].map(line));
+  if (lines.size < 2) return [ins, outs];
+  // (Every line with a figure gives both sides, and reads as a table's row — cells set apart by bars, tabs,
+  // wide gaps, or the "; " the reader puts between a row's labelled cells — or this is no table of readings.)
+  for (const l of lines) {
+    if (!ins.some((f) => line(f) === l) || !outs.some((f) => line(f) === l)) return [ins, outs];
+    const end = text.indexOf('\n', l + 1);
+    const row = text.slice(l + 1, end < 0 ? text.length : end);
+    if (row.length > 200 || !(/[|\t]|\S[^\S\n]{3,}\S/u.test(row) || (row.match(/; /gu) ?? []).length >= 2)) return [ins, outs];
+  }
+  // (Where the largest input and the largest output stand on one line — a sweep's full-load point, a
+  // total row — that line is the ledger already.)
+  const top = (fs: Figure[]) => [...fs].sort((a, b) => (b.upper?.si ?? b.si) - (a.upper?.si ?? a.si))[0];
+  if (line(top(ins)) === line(top(outs))) return [ins, outs];
+  // (A table's own summary row — "Avg", "Total", "Mean" — is its ledger.)
+  const summary = [...lines].filter((l) => SUMMARY_ROW_RE.test(text.slice(l + 1, l + 40)));
+  if (summary.length === 1) return [ins.filter((f) => line(f) === summary[0]), outs.filter((f) => line(f) === summary[0])];
+  let best: { l: number; ratio: number } | null = null;
+  for (const l of lines) {
+    const i = ins.filter((f) => line(f) === l).reduce((a, f) => a + (f.upper?.si ?? f.si), 0);
+    const o = outs.filter((f) => line(f) === l).reduce((a, f) => a + f.si, 0);
+    // (A line whose input is nil or negative — a store charging — gives no ratio; it is passed over.)
+    if (!(i > 0)) continue;
+    const ratio = o / i;
+    if (!best || ratio > best.ratio) best = { l, ratio };
+  }
+  if (!best) return [ins, outs];
+  return [ins.filter((f) => line(f) === best!.l), outs.filter((f) => line(f) === best!.l)];
+}
+
 export interface PlanResult {
   plans: Plan[];
   needs: ClaimCheckNeed[];
@@ -223,8 +268,8 @@ export function basisFor(figures: Figure[], ctx: PlanContext): Basis {
   const power = ofKind(figures, 'power');
   const energy = ofKind(figures, 'energy');
   const text = ctx.text ?? '';
-  const [pIns, pOuts] = ledgerParagraphs(power, text);
-  const [eIns, eOuts] = ledgerParagraphs(energy, text);
+  const [pIns, pOuts] = oneRow(...ledgerParagraphs(power, text), text);
+  const [eIns, eOuts] = oneRow(...ledgerParagraphs(energy, text), text);
   const pIn = combine(pIns, 'in', text);
   const pOut = combine(pOuts, 'out', text);
   const eIn = combine(eIns, 'in', text);
