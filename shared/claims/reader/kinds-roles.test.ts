@@ -362,3 +362,16 @@ describe('a thrust per power and one power give the thrust (invented test data)'
     expect(extractFigures('A pull of 4.9 mN, which is 14 mN per kW of the 350 W input.').filter((x) => x.kind === 'thrust')).toHaveLength(1);
   });
 });
+
+describe('a noun before a verb of driving, and a speed glossed as a multiple of c (invented test data)', () => {
+  test('"a drive motor drawing roughly 1 kW" is the motor\'s input, not a load it drives', () => {
+    expect(extractFigures('A drive motor drawing roughly 1 kW spins the rotor.')[0].role).toBe('in');
+    // (A verb still makes a load: "it drives a pump drawing 1 kW".)
+    expect(extractFigures('The rig drives a pump drawing 1 kW.')[0].role).toBe('out');
+  });
+  test('"1.2 billion mph – nearly twice the speed of light" is 1.2 billion mph; the gloss is set aside', () => {
+    const f = extractFigures('It will reach a top speed of 1.2 billion mph – nearly twice the speed of light.');
+    expect(f.map((x) => x.role)).toEqual([null, 'aside']);
+    expectRelClose(f[0].si, 1.2e9 * 0.44704, EXACT); // NIST SP 811 B.8: mile per hour = 0.447 04 m/s (exact)
+  });
+});

@@ -14,7 +14,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, NAMED_HEAT_PUMP_R
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor, SUPPLY_GIVES_LEAD_RE, TO_DEVICE_PART_AFTER_RE } from './roles';
-import { asideControlPowers, asideDenied, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, asideWindSpeeds, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput } from './roles-by-context';
+import { asideControlPowers, asideDenied, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, asideSpeedGlosses, asideWindSpeeds, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
 
 /** The text says the input was not given: a claim of no input cannot be read from it. */
@@ -592,6 +592,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   wetBelowDry(drafts);
   asideQuotedLightSpeed(text, drafts);
   asideWindSpeeds(text, drafts);
+  asideSpeedGlosses(text, drafts);
   asideDenied(text, drafts);
   efficiencyQuotient(text, drafts);
 

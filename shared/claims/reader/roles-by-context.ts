@@ -616,6 +616,27 @@ const WIND_BEFORE_RE =
 /** Just after one: "in 20 km/h winds", "a 6 m/s breeze", "15 knots of wind". */
 const WIND_AFTER_RE = /^[^\S\n]*(?:winds?|wind[^\S\n]+speeds?|breezes?|gusts?|head-?winds?|tail-?winds?|cross-?winds?|of[^\S\n]+wind)(?!\p{L})/iu;
 
+/** Between a speed and its gloss as a multiple of c: " – nearly", ", about", " (roughly", ", which is over". */
+const GLOSS_GAP_RE = /^[^\S\n]*(?:[–—-]|,|\(|;)?[^\S\n]*(?:(?:which[^\S\n]+is|that[^\S\n]+is|i\.e\.|or)[^\S\n]+)?(?:(?:nearly|almost|about|around|roughly|some|over|more[^\S\n]+than|just[^\S\n]+(?:under|over)|close[^\S\n]+to)[^\S\n]+)?$/iu;
+
+/**
+ * "1.2 billion mph – nearly twice the speed of light": a speed and its gloss as a multiple of c said right
+ * after it are one claim; the stated number is the figure, the rounded gloss set aside.
+ */
+export function asideSpeedGlosses(text: string, drafts: Draft[]): void {
+  for (let i = 1; i < drafts.length; i++) {
+    const [a, b] = [drafts[i - 1], drafts[i]];
+    if (a.kind !== 'speed' || b.kind !== 'speed' || a.role === 'aside' || b.role === 'aside' || a.derived) continue;
+    if (!/(?:speed|velocity)[^\S\n]+of[^\S\n]+light|(?<![\p{L}\d])c(?![\p{L}\d])/iu.test(text.slice(b.start, b.end))) continue;
+    if (!/^(?:\d|an?[^\S\n]|one|two|three|four|five|six|seven|eight|nine|ten|twice|double|triple|half)/iu.test(text.slice(b.start, b.end))) continue;
+    if (!GLOSS_GAP_RE.test(text.slice(a.end, b.start))) continue;
+    const [va, vb] = [siOf(a), siOf(b)];
+    // (Only where the gloss is near the number: within a half either way.)
+    if (va === null || vb === null || !(va > 0) || vb / va > 1.5 || va / vb > 1.5) continue;
+    b.role = 'aside';
+  }
+}
+
 /** The wind's speed is no speed of the craft or of anything it throws out: set aside. */
 export function asideWindSpeeds(text: string, drafts: Draft[]): void {
   for (const d of drafts) {
