@@ -9,7 +9,7 @@ import { insertAfter, sameClause, sentenceOf, siOf, typedSi, upperSiOf, type Dra
 
 /** Words of a time that is not how long the device ran. */
 const NOT_A_RUN_RE =
-  /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline|install\w*|fit(?:s|ted|ting)?|bolts?|bolted|retrofit\w*|integrat\w*|spent|calibrat\w*|settl\w*|drills?|swings?|period|saves?|saving|savings|bills?|income|earns?|costs?)(?!\p{L})/iu;
+  /(?<!\p{L})(?:build|built|develop\w*|design(?:ed|ing)?|research\w*|assembl\w*|construct\w*|ago|warrant\w*|guarantee\w*|founded|old|manufactur\w*|lead time|payback|pays? (?:for )?(?:it|it)self|amorti[sz]\w*|deliver(?:y|ies) (?:time|in)|ship(?:s|ping)? in|funding|grant|contract|project|programme|program|schedule[d]?|planned|deadline|install\w*|fit(?:s|ted|ting)?|bolts?|bolted|retrofit\w*|replac\w*|overhaul\w*|integrat\w*|spent|calibrat\w*|settl\w*|drills?|swings?|period|saves?|saving|savings|bills?|income|earns?|costs?)(?!\p{L})/iu;
 
 /** Right before a time: a payback, a warranty, a guarantee, a life or a lead time ("payback est.", "pays for itself in"). */
 const TERM_NOT_RUN_BEFORE_RE =
@@ -17,6 +17,8 @@ const TERM_NOT_RUN_BEFORE_RE =
 /** Right after a time: "… warranty", "… payback", "… design life". */
 const TERM_NOT_RUN_AFTER_RE = /^[^\S\n]*(?:[-–][^\S\n]*)?(?:warrant(?:y|ies)|guarantee|payback|(?:service|design|useful)[^\S\n]+life|lifetime|lifespan|between[^\S\n]+(?:over-?[^\S\n]*hauls?|services|servicing|maintenance|inspections|rebuilds|refills|recharges))(?!\p{L})/iu;
 
+/** Right before the time a rating's surge lasts: "surge for", "peak for about", "Peak: up to 7.5 kW for". */
+const SURGE_BEFORE_RE = /(?<!\p{L})(?:surges?|peaks?|bursts?|inrush|overloads?|motor[^\S\n]+starting)(?:[^\S\n]*:?[^\S\n]*(?:up[^\S\n]+to[^\S\n]+)?[\d.,]+[^\S\n]*[kMG]?W)?[^\S\n]+(?:is[^\S\n]+real[^\S\n]+)?(?:for|of|lasting|during)[^\S\n]+(?:(?:up[^\S\n]+to|about|around|roughly|some|only|just|at[^\S\n]+most)[^\S\n]+)?$/iu;
 /** A sentence that is a label of a term: "Duration: five months", "Project duration | 24 months". */
 const TERM_LABEL_RE = /^[\s•*-]*(?:(?:project|proposed|planned|total|expected)[^\S\n]+)?(?:duration|term|timescale|time ?frame|period)[^\S\n]*(?:[:|]|\.{2,})/iu;
 /** Words of a funder or an application. */
@@ -110,6 +112,11 @@ export function relateDurations(text: string, drafts: Draft[]): void {
   for (const d of drafts) {
     if (d.kind !== 'duration' || d.role !== null || timed.has(d)) continue;
     const sentence = sentenceAround(text, d.start, d.end);
+    // ("6 kW surge for 3 s", "2000 W peak for about a second": how long a rating's surge lasts, no run.)
+    if (SURGE_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start))) {
+      d.role = 'aside';
+      continue;
+    }
     // (Nor a time of a supposition: "if the panels are covered in snow for a week it will be empty".)
     // ("Amount requested: EUR 7,200. Duration: five months.": the length of the work a funder pays for.)
     const termOfWork = TERM_LABEL_RE.test(sentence) && FUNDING_RE.test(text);

@@ -375,3 +375,31 @@ describe('a noun before a verb of driving, and a speed glossed as a multiple of 
     expectRelClose(f[0].si, 1.2e9 * 0.44704, EXACT); // NIST SP 811 B.8: mile per hour = 0.447 04 m/s (exact)
   });
 });
+
+describe('ratings, surges and service times (invented test data)', () => {
+  test('how long a surge lasts, or when to replace a set, is no run', () => {
+    const a = extractFigures('Plate says 3 kW continuous, 6 kW surge for 3 s.');
+    expect(a.find((x) => x.kind === 'duration')?.role).toBe('aside');
+    expect(a.some((x) => x.kind === 'energy')).toBe(false);
+    const b = extractFigures('Peak: up to 7.5 kW for 10 seconds for motor starting.');
+    expect(b.find((x) => x.kind === 'duration')?.role).toBe('aside');
+    const c = extractFigures('Measured output 2.6 kW with the car at full load. Recommend replacement within 2 years.');
+    expect(c.find((x) => x.kind === 'duration')?.role).toBe('aside');
+    expect(c.some((x) => x.kind === 'energy')).toBe(false);
+  });
+  test('"alternator 10 kW continuous (10,5 kW peak)" are the alternator\'s outputs', () => {
+    const f = extractFigures('Diesel generator: engine 15 CV, alternator 10 kW continuous (10,5 kW peak), tank 25 litres.');
+    expect(f.filter((x) => x.kind === 'power' && x.si !== f[0].si).map((x) => [x.role, x.si])).toEqual([
+      ['out', 10000],
+      ['out', 10500],
+    ]);
+  });
+  test('"chilled water leaving at 7 °C; condensing 28 K above" puts the condensing side 28 K above 7 °C', () => {
+    const f = extractFigures('Test conditions: chilled water leaving at 7 °C; condensing 28 K above the leaving chilled-water temperature. COP (cooling): 3.49');
+    const t = f.filter((x) => x.kind === 'temperature');
+    expect(t.map((x) => [x.role, Number(x.si.toFixed(2))])).toEqual([
+      ['cold', 280.15], // 7 °C + 273.15 (NIST SP 811 §4.2.1.1)
+      ['hot', 308.15], // + 28 K
+    ]);
+  });
+});

@@ -374,7 +374,7 @@ const RATED_DRIVEN_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}
 const GENERATOR_NAMED_RE = /(?<!\p{L})(?:generators?|gensets?|generating[^\S\n]+sets?|alternators?)(?!\p{L})/iu;
 /** Right after a power: its rating word and nothing else ("5 kW rated,", "5.5 kW max.", "2,800 W running"). */
 const GENERATOR_RATING_AFTER_RE =
-  /^[^\S\n]*(?:rated|continuous|cont\.?|max(?:imum)?\.?|peak|surge|running|starting|prime|standby|nominal|nom\.?)(?:[^\S\n]+(?:power|output))?[^\S\n]*(?:[,.;)\n]|$|and(?!\p{L}))/iu;
+  /^[^\S\n]*(?:rated|continuous|cont\.?|max(?:imum)?\.?|peak|surge|running|starting|prime|standby|nominal|nom\.?)(?:[^\S\n]+(?:power|output))?[^\S\n]*(?:[,.;()\n]|$|and(?!\p{L}))/iu;
 /** Just before a power: a rating's label ("Rated:", "Max output", "Surge power:", "Running watts"). */
 const GENERATOR_RATING_BEFORE_RE =
   /(?:^|[.;,(\n|][^\S\n]*)(?:rated|continuous|max(?:imum)?|peak|surge|running|starting|prime|standby)(?:[^\S\n]+(?:power|output|watts|rating))?[^\S\n]*[:=]?[^\S\n]*$/iu;

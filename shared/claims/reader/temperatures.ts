@@ -353,7 +353,7 @@ export function relateTemperatures(text: string, drafts: Draft[]): void {
     // side, named after it, so the stated temperature is the one above (or below) that side.
     // But "… and a sink 50 °C cooler than the head", "hot side 40 K above the cold side": a side named
     // right before the difference is the one it describes, so the direction stands as said.
-    const sideBeforeDiff = /(?<!\p{L})(?:sinks?|reservoirs?|sides?|plates?|ends?|sources?|condensers?|evaporators?|coolers?|heaters?|baths?|loops?|exhaust|outlets?|inlets?|heads?|junctions?|faces?)[^\S\n]+(?:(?:is|sits|runs|at|being|was|lies|stays|kept|held|some|about|only|just|a|full)[^\S\n]+){0,3}$/iu.test(
+    const sideBeforeDiff = /(?<!\p{L})(?:sinks?|reservoirs?|sides?|plates?|ends?|sources?|condensers?|condensing|evaporators?|evaporating|coolers?|heaters?|baths?|loops?|exhaust|outlets?|inlets?|heads?|junctions?|faces?)[^\S\n]+(?:(?:is|sits|runs|at|being|was|lies|stays|kept|held|some|about|only|just|a|full)[^\S\n]+){0,3}$/iu.test(
       text.slice(Math.max(0, diff.start - 50), diff.start),
     );
     const fromNamedOther = t.end <= diff.start && !sideBeforeDiff && NAMED_OTHER_SIDE_RE.test(text.slice(diff.end, diff.end + 60));
