@@ -109,6 +109,10 @@ async function startApp(): Promise<void> {
       UPLOAD_TMP_DIR: dirs.incoming,
       STATIC_DIR: dirs.static,
       SKIP_WEB_BUILD: '1',
+      // The claim check's time limit, generous: on two busy cores (npm test runs two jest workers) the first
+      // check of a freshly restarted app, its worker thread still loading the reader, can pass the 2 s a
+      // server allows. This test is about writes surviving kills, not about compute time.
+      COMPUTE_TIMEOUT_MS: '60000',
       SMTP_URL: '',
       LOG_LEVEL: 'error',
     },
