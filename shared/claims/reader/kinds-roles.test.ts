@@ -403,3 +403,12 @@ describe('ratings, surges and service times (invented test data)', () => {
     ]);
   });
 });
+
+describe('a store\'s energy in brackets (invented test data)', () => {
+  test('"its 22.2 V, 10 Ah pack (222 Wh)" holds 222 Wh, the energy it has to give', () => {
+    const f = extractFigures('It stayed aloft for 46 minutes on its 22.2 V, 10 Ah pack (222 Wh).');
+    const e = f.find((x) => x.kind === 'energy' && x.text === '222 Wh')!;
+    expect(e.role).toBe('in');
+    expectRelClose(e.si, 222 * 3600, EXACT); // 1 Wh = 3600 J (NIST SP 811 B.8)
+  });
+});

@@ -32,6 +32,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:water|hydro|wind|stream|river) power (?:at|of|is|was|comes to|works out at)',
       // "The tank holds the equivalent of twelve kilowatt-hours": what a store holds is what it has to give.
       '(?:tanks?|batter(?:y|ies)|stores?|packs?|banks?|cylinders?|reservoirs?|capacitors?|accumulators?) holds?(?: (?:the equivalent of|about|some|roughly|up to))?(?:,? say,?)?',
+      // "its 22.2 V, 10 Ah pack (222 Wh)": a store's energy in brackets after it is what it holds.
+      '(?:batter(?:y|ies)|packs?|banks?|accumulators?) ?\\(',
       // "Feed it 5 V at 2 A": what a reader is told to give the device.
       '(?<![\\w-])(?:feed|feeding|give|giving|supply|supplying) (?:it|them|the (?:unit|device|box|board|module|converter|circuit|motor))(?: with)?(?:,? (?:what|say|um|uh|er|like),?)?',
       // A store's sheet labels its sides: "Charging from standstill: 2.04 kWh", "Charge energy = 15 kWh".
