@@ -301,4 +301,19 @@ describe('a vehicle range said as what the consumption "works out to" (invented 
     const out = f.find((x) => x.kind === 'energy' && x.role === 'out')!;
     expectRelClose(out.si, (250 / 3.4) * 3.6e6, 1e-9); // SP 811 B.8: kWh = 3.6 MJ exactly; miles cancel
   });
+  test('a decimal comma in the consumption and a round trip on one pack ("arrived with 8 % left") give the drive\'s energy', () => {
+    const f = extractFigures('Our test car has a 77,4 kWh battery. On our 420 km round trip at an average of 16,8 kWh/100 km it arrived with 8 % left.');
+    const out = f.find((x) => x.kind === 'energy' && x.role === 'out')!;
+    expectRelClose(out.si, 16.8 * 4.2 * 3.6e6, 1e-9); // 16.8 kWh per 100 km × 420 km = 70.56 kWh; SP 811 B.8: kWh = 3.6 MJ
+  });
+  test('a trip with charging on the way is not one pack\'s range', () => {
+    const f = extractFigures('We did a 900 km road trip with two charging stops and arrived with 20 % left; the car used 18 kWh/100 km from its 60 kWh pack.');
+    expect(f.some((x) => x.kind === 'energy' && x.role === 'out')).toBe(false);
+    // Without the stops it is the range the pack must give (18 × 9 = 162 kWh against 60 kWh).
+    const g = extractFigures('We did a 900 km road trip and arrived with 20 % left; the car used 18 kWh/100 km from its 60 kWh pack.');
+    expectRelClose(g.find((x) => x.kind === 'energy' && x.role === 'out')!.si, 162 * 3.6e6, 1e-9);
+    // "with no stop to charge" says the opposite.
+    const h = extractFigures('On a 900 km test drive with no stop to charge, the car used 18 kWh/100 km from its 60 kWh pack.');
+    expectRelClose(h.find((x) => x.kind === 'energy' && x.role === 'out')!.si, 162 * 3.6e6, 1e-9);
+  });
 });

@@ -13,7 +13,9 @@ import { tokenize } from './numbers';
 /** NIST SP 811 Appendix B.8: the international mile is 1,609.344 m. */
 const MILE_M = 1609.344;
 
-const NUM = String.raw`\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?`;
+const NUM = String.raw`\d{1,3}(?:,\d{3})+(?:\.\d+)?(?!,\d)|\d+(?:[.,]\d+)?`;
+/** "1,200" groups thousands; "16,8" (a European writer's decimal comma) does not. */
+const num = (s: string) => Number(/^\d{1,3}(?:,\d{3})+(?:\.\d+)?$/u.test(s) ? s.replace(/,/g, '') : s.replace(',', '.'));
 /** A number or a range of two: "6", "19–21", "between 600 and 700", "70 to 90". */
 const SPAN = String.raw`(?:between[^\S\n]+)?(${NUM})(?:[^\S\n]*(?:–|—|-|to|and)[^\S\n]*(${NUM}))?`;
 
@@ -36,9 +38,17 @@ const DISTANCE_RE = new RegExp(
 const RANGE_WORDS_RE =
   /(?<!\p{L})(?:range|ranges|per[^\S\n]+charge|(?:on|from)[^\S\n]+(?:a|one|each|every|the|its|a[^\S\n]+single|a[^\S\n]+full)[^\S\n]+(?:full[^\S\n]+)?(?:charge|pack|battery|tank)|will[^\S\n]+do|does|did|goes|went|covers?|covered|travell?ed|drove|driven|ridden|works?[^\S\n]+out[^\S\n]+(?:to|at)|real[- ]world|good[^\S\n]+for)(?!\p{L})/iu;
 
+/**
+ * A trip said as one leg on one pack: "our 420 km round trip … arrived with 8 % left". Taken as the range only
+ * where the text says the pack carried it alone and names no charging on the way.
+ */
+const TRIP_WORDS_RE = /(?<!\p{L})(?:round[- ]trips?|trips?|journeys?|loop|leg|(?:test[- ])?drive)(?!\p{L})/iu;
+const ONE_PACK_RE = /(?<!\p{L})(?:arrived|finished|got[^\S\n]+(?:home|back)|ended)[^\S\n]+with[^\S\n]+\d|\d[^\S\n]*(?:%|per[^\S\n]*cent)[^\S\n]+(?:left|remaining|to[^\S\n]+spare)|without[^\S\n]+(?:a[^\S\n]+)?(?:re)?charg(?:ing|e)|(?:no|without[^\S\n]+a)[^\S\n]+(?:stop|break)[^\S\n]+to[^\S\n]+(?:re)?charge/iu;
+const CHARGED_ON_THE_WAY_RE = /(?<!\p{L})(?<!(?:no|without|never|not|zero|nor)[^\S\n]+(?:a[^\S\n]+|one[^\S\n]+|single[^\S\n]+)?)(?:charg(?:ing|e)[^\S\n]+stops?|stop(?:ped|s)?[^\S\n]+(?:once[^\S\n]+|twice[^\S\n]+)?to[^\S\n]+(?:re)?charge|(?:re)?charged[^\S\n]+(?:on|along|en)[^\S\n]+(?:the[^\S\n]+)?(?:way|route)|top(?:ped)?[- ]?ups?[^\S\n]+(?:on|along|en)[^\S\n]+(?:the[^\S\n]+)?(?:way|route)|(?:one|two|three|four|\d+)[^\S\n]+(?:charges|charging[^\S\n]+sessions|stops))(?!\p{L})/iu;
+
 /** After an energy: "for every hundred kilometres", "per 100 km", "each mile". */
 const PER_HUNDRED_AFTER_RE = /^[^\S\n]*(?:for[^\S\n]+every|per|every|each|a)[^\S\n]+(hundred[^\S\n]+|100[^\S\n]*)?(km|kilomet(?:re|er)s?|miles?|mi)(?!\p{L})/iu;
-const km = (n: string, unit: string) => Number(n.replace(/,/g, '')) * (/^mi/iu.test(unit) ? MILE_M / 1000 : 1);
+const km = (n: string, unit: string) => num(n) * (/^mi/iu.test(unit) ? MILE_M / 1000 : 1);
 
 /** Sunlight harvested on board: the pack is then not the only source, and a range beyond it is no conflict. */
 const SUN_ON_BOARD_RE = /(?<!\p{L})(?:solar|photovoltaic|PV|sun(?:light|shine)?|(?:roof|panel)[^\S\n]+array)(?!\p{L})/iu;
@@ -51,8 +61,8 @@ export function vehicleRanges(text: string, drafts: Draft[]): void {
   for (const m of text.matchAll(CONSUMPTION_RE)) {
     const wh = /^k/iu.test(m[3]) ? 1000 : 1;
     const per = km(m[4] ? '100' : '1', m[5]);
-    const a = (Number(m[1].replace(/,/g, '')) * wh) / per;
-    const b = m[2] !== undefined ? (Number(m[2].replace(/,/g, '')) * wh) / per : a;
+    const a = (num(m[1]) * wh) / per;
+    const b = m[2] !== undefined ? (num(m[2]) * wh) / per : a;
     rates.push({ start: m.index!, end: m.index! + m[0].length, low: Math.min(a, b), high: Math.max(a, b), words: m[0].trim() });
   }
   for (const m of text.matchAll(DISTANCE_PER_ENERGY_RE)) {
@@ -71,7 +81,8 @@ export function vehicleRanges(text: string, drafts: Draft[]): void {
       rates.push({ start: d.start, end: d.end + per[0].length, low: wh, high: wh, words: text.slice(d.start, d.end + per[0].length).trim(), of: d });
     }
   }
-  if (rates.length !== 1) return;
+  // (Charged on the way: the distance rests on more than the pack.)
+  if (rates.length !== 1 || CHARGED_ON_THE_WAY_RE.test(text)) return;
   const rate = rates[0];
   // The range: a distance said with words of a range, outside the consumption's own words.
   const spelled = tokenize(text)
@@ -86,7 +97,8 @@ export function vehicleRanges(text: string, drafts: Draft[]): void {
     const [s, e] = [m.index!, m.index! + m[0].length];
     if (s < rate.end && rate.start < e) return false;
     const around = text.slice(Math.max(0, s - 40), Math.min(text.length, e + 25));
-    return RANGE_WORDS_RE.test(around) && !/(?<!\p{L})(?:speed|km\/h|mph|top|from[^\S\n]+\d)/iu.test(text.slice(Math.max(0, s - 15, text.lastIndexOf('\n', s - 1) + 1), s));
+    const trip = TRIP_WORDS_RE.test(text.slice(Math.max(0, s - 40), Math.min(text.length, e + 40))) && ONE_PACK_RE.test(text);
+    return (RANGE_WORDS_RE.test(around) || trip) && !/(?<!\p{L})(?:speed|km\/h|mph|top|from[^\S\n]+\d)/iu.test(text.slice(Math.max(0, s - 15, text.lastIndexOf('\n', s - 1) + 1), s));
   });
   if (ranges.length !== 1) return;
   const r = ranges[0];
