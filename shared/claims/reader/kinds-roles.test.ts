@@ -412,3 +412,22 @@ describe('a store\'s energy in brackets (invented test data)', () => {
     expectRelClose(e.si, 222 * 3600, EXACT); // 1 Wh = 3600 J (NIST SP 811 B.8)
   });
 });
+
+describe("a cooler's cooling efficiency, a propellant named by its make-up (invented test data)", () => {
+  test('"a cooling efficiency of 45 %" of a thermoelectric cooler is a cooling COP of 0.45, not an engine efficiency', () => {
+    const text = 'The thermoelectric cooler holds the plate 25 K below the 30 °C heat sink while removing 18 W of heat on 40 W; the maker calls this a cooling efficiency of 45 %.';
+    const f = extractFigures(text);
+    const cop = f.find((x) => x.text === '45 %')!;
+    expect([cop.kind, cop.role]).toEqual(['cop', 'cooling']);
+    expectRelClose(cop.si, 0.45, EXACT);
+    // An engine's percentage beside it stays an efficiency.
+    expect(extractFigures('The engine runs at a thermal efficiency of 45 % between 600 °C and 40 °C.').find((x) => x.text === '45 %')!.kind).toBe('efficiency');
+  });
+  test('"2.4 t including 1.65 t of MMH/MON propellant" is propellant; "0.4 t of empty propellant tanks" is not', () => {
+    const f = extractFigures('The descent stage has a wet mass of 2.4 t including 1.65 t of MMH/MON propellant and an Isp of 318 s.');
+    const p = f.find((x) => x.text === '1.65 t')!;
+    expect(p.role).toBe('propellant');
+    expectRelClose(p.si, 1650, EXACT); // 1 t = 1000 kg (BIPM SI Brochure, Table 8)
+    expect(extractFigures('The stage masses 3 t, of which 0.4 t of empty propellant tanks; it carries 2 t of propellant.').find((x) => x.text === '0.4 t')!.role).not.toBe('propellant');
+  });
+});

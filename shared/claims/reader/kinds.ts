@@ -157,6 +157,11 @@ export function readPercent(text: string, start: number, end: number, floor: num
     const cooling = COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text);
     return { kind: 'cop', role: cooling ? 'cooling' : 'heating', factor: 0.01, unit: '', assumption: `A coefficient of performance written as a percentage: read as a ${cooling ? 'cooling' : 'heating'} COP.` };
   }
+  // ("a cooling efficiency of 45 %" of a thermoelectric cooler): a cooler's "efficiency" of cooling is the heat
+  // it draws out over the work it takes, a cooling COP, whatever its size.
+  if (/(?<!\p{L})(?:cooling|refrigerat(?:ing|ion)|chilling)[- ]efficiency(?:[^\S\n]+(?:of|is|was|at|=|:)|[^\S\n]*[:=])?[^\S\n]*(?:(?:about|around|roughly|some|only|just|nearly|~|≈)[^\S\n]*)?[\p{Pi}"“']?[^\S\n]*$/iu.test(before) && COOLING_MACHINE_RE.test(text)) {
+    return { kind: 'cop', role: 'cooling', factor: 0.01, unit: '', assumption: "A cooler's cooling efficiency written as a percentage: read as a cooling COP (heat drawn out over work put in)." };
+  }
   QE_AFTER_RE.lastIndex = end;
   const qe = QE_BEFORE_RE.exec(before);
   if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };

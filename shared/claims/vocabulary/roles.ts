@@ -234,6 +234,8 @@ export const MASS_ROLES: readonly RoleWords[] = [
     after: [
       '(?:would be|will be|is to be|must be|should be) (?:the )?(?:propellant|fuel|reaction mass)',
       '(?:is|are|was|were|of) (?:the |its )?(?:hydrazine|propellant|fuel|xenon|krypton|kerosene|water|reaction mass|nitrogen|helium|butane|propane|iodine|argon|ammonia|nitrous(?: oxide)?|paraffin|ethanol|alcohol|methanol|sugar|APCP|HTPB|solid propellant|(?:hydrogen )?peroxide|oxidi[sz]er|LOX|liquid oxygen|methane|hydrogen|grain)',
+      // "1.65 t of MMH/MON propellant", "of storable bipropellant": the propellant named by its make-up.
+      'of (?:the |its )?(?:[\\w/+-]+ ){1,2}?(?:(?:bi|mono)?propellants?|reaction mass)(?! (?:tanks?|lines?|feed|system|valves?|pumps?|plumbing|hardware|module))',
       '(?:difference|rest|remainder|balance) (?:is|being|was) (?:propellant|fuel)', 'of (?:that|it|which|this)(?: being| is| was)? (?:[\\w-]+ )?(?:(?:bi|mono)propellants?|propellant|fuel|reaction mass|xenon|krypton|argon|iodine|hydrazine|kerosene|water|nitrogen|helium|methane|hydrogen|ammonia|oxidi[sz]er)',
       '(?:is|are|was|were) (?:liquid oxygen|LOX|liquid hydrogen|methane|oxidi[sz]er)', 'of cold-gas propellant',
       'of (?:[\\w-]+ )?(?:nitrogen|helium|butane|propane|CO2|carbon dioxide|ammonia|iodine|bismuth|caesium|cesium|mercury|argon|nitrous oxide|LOX|liquid oxygen|RP-?1|hydrogen peroxide)', 'of [\\w-]+ propellant', 'of propellant', 'of fuel', 'of reaction mass', 'of xenon', 'of krypton', 'of argon', 'of hydrazine', 'of kerosene', 'of hydrogen', 'of methane',
