@@ -366,7 +366,12 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         (/^[^\S\n]*(?:in|out|back)(?:[^\S\n]*[,.;:!?)"”’']|[^\S\n]+(?:and|at|of|from|to|with|while|for|on)(?!\p{L})|[^\S\n]*$)/iu.test(text.slice(t.numEnd, t.numEnd + 12)) ||
           // ("drawing two point eight from the grid", "measured about four hundred and fifty at the wheel": the
           // supply or the output named after it.)
-          /^[^\S\n]+(?:from[^\S\n]+(?:the[^\S\n]+)?(?:grid|mains|wall|socket|supply|battery|pack)|at[^\S\n]+the[^\S\n]+(?:wheels?|shaft|crank|output|load))(?!\p{L})/iu.test(text.slice(t.numEnd, t.numEnd + 24))) &&
+          /^[^\S\n]+(?:from[^\S\n]+(?:the[^\S\n]+)?(?:grid|mains|wall|socket|supply|battery|pack)|at[^\S\n]+the[^\S\n]+(?:wheels?|shaft|crank|output|load))(?!\p{L})/iu.test(text.slice(t.numEnd, t.numEnd + 24)) ||
+          // ("put back twelve kilowatts while the drive motor is only drawing eight, so …": what the other
+          // part draws, said last in its clause.)
+          (/(?<!\p{L})(?:drew|draws|drawing|takes|took|taking|consumes|consumed|consuming)[^\S\n]+(?:(?:about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start)) &&
+            /(?<!\p{L})(?:while|whereas|but|and|when)(?!\p{L})/iu.test(text.slice(flowSibling.end, start)) &&
+            /^[^\S\n]*(?:[,.;:!?)\]]|—|–|$|[^\S\n]+(?:so|but|and|while|yet)(?!\p{L}))/iu.test(text.slice(t.numEnd, t.numEnd + 8)))) &&
         /(?<!\p{L})(?:gave|gives|give|put(?:s|ting)?(?:[^\S\n]+out)?|returned|returns|delivered|delivers|produced|produces|yielded|yields|drew|draws|drawing|took|takes|taking|used|uses|using|got|gets|measured|logged|and|with)[^\S\n]+(?:(?:back|about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start))
       ) {
         suffix = flowSibling.suffix;

@@ -431,3 +431,24 @@ describe("a cooler's cooling efficiency, a propellant named by its make-up (inve
     expect(extractFigures('The stage masses 3 t, of which 0.4 t of empty propellant tanks; it carries 2 t of propellant.').find((x) => x.text === '0.4 t')!.role).not.toBe('propellant');
   });
 });
+
+describe('inputs said by what the device is run at or given (invented test data)', () => {
+  test('"the input stage supplied at 12 V and 2.1 A" is the input; "the output delivered 0.9 A into a 48 V load" the output', () => {
+    const f = extractFigures('The authors report that with the input stage supplied at 12 V and 2.1 A, the output delivered 0.9 A into a 48 V load.');
+    const p = f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si]);
+    expect(p).toHaveLength(2);
+    expect(p[0][0]).toBe('in');
+    expectRelClose(p[0][1] as number, 25.2, 1e-12); // P = I × V = 2.1 A × 12 V (W = V·A, BIPM SI Brochure Table 4)
+    expect(p[1][0]).toBe('out');
+    expectRelClose(p[1][1] as number, 43.2, 1e-12); // 0.9 A × 48 V
+  });
+  test('"a rider puts about 120 W into the cranks" is what the machine takes', () => {
+    expect(extractFigures('A reasonably fit rider puts about 120 W into the cranks and the hub generator gives back 100 W.').find((x) => x.text === '120 W')!.role).toBe('in');
+  });
+  test('"put back twelve kilowatts while the drive motor is only drawing eight" reads eight kilowatts drawn', () => {
+    const f = extractFigures('Our axle generators put back twelve kilowatts while the drive motor is only drawing eight, so the battery gains charge.');
+    const eight = f.find((x) => x.text === 'eight')!;
+    expect([eight.kind, eight.role]).toEqual(['power', 'in']);
+    expectRelClose(eight.si, 8000, EXACT); // 1 kW = 1000 W (SI prefix kilo, BIPM SI Brochure Table 7)
+  });
+});

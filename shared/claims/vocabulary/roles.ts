@@ -47,7 +47,9 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       // "From a battery bank I give it 12 A at 24 V": what the writer gives the device goes in.
       '(?:I|we|you) (?:give|gave|feed|fed|supply|supplied|put in|apply|applied) (?:it|them|the (?:device|unit|machine|heater|motor|coil|circuit|cell|prototype))(?: with)?',
       // "hydrogen with a chemical energy of 120 MJ", "fuel energy: 40 MJ": what the fuel brings in.
-      '(?:chemical|fuel) energy(?: content)?(?: of| is| was|:)?', 'supplied (?:with|by)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
+      '(?:chemical|fuel) energy(?: content)?(?: of| is| was|:)?', 'supplied (?:with|by)',
+      // "with the input stage supplied at 12 V and 2.1 A": what the device's stage is run at goes in.
+      '(?<!(?:output|outputs|load|loads|grid|secondary)(?: (?:is|are|was|were|being))? )supplied (?:at|from)', '(?:is|was|are|were|being) supplied', 'supply(?: of| power| voltage| current|:)?', 'power supply', 'fed',
       // "the engine gave the dynamo about two kilowatts": what a generator is given is its input.
       '(?:gave|gives|give|delivered|delivers|supplied|supplies|fed|feeds|feeding) (?:the|its|a|an) (?:[\\w-]+ )?(?:dynamos?|generators?|alternators?)(?: with)?(?: (?:about|some|roughly|nearly|around))?',
       // A log's shorthand labels: "compressor + fan 2.31 kW", "heat in 6.9 kW", "Burner heat into the head 10.1 kW".
@@ -99,7 +101,9 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       // "2.0 mW of 405 nm light on the detector", "5 W of laser light onto the cell": the light a detector or a converter takes.
       'of (?:[\\w.-]+ ){0,3}?(?:light|laser light|radiation|illumination|beam) (?:on|onto|incident on|into|falling on) (?:the|its|a|an) (?:[\\w-]+ )?(?:detectors?|photodiodes?|diodes?|sensors?|cells?|panels?|photocells?|receivers?|absorbers?|targets?|samples?|chips?|junctions?|modules?|converters?)', 'of (?:incident |incoming )?(?:sunlight|solar (?:power|radiation|energy)|irradiance)', '(?:home |storage |lithium |lead-acid )?battery', 'of fuel', 'of gas', 'of diesel', 'in(?=\\s*(?:and\\b|,|to\\b))', 'of input', 'of supply', 'supply',
       // "the array feeds 8.2 A at 36 V into the charge controller": what goes into a converter is its input.
-      'into (?:the|its|a|an) (?:[\\w\\x27\\u2019-]+ )?(?:controllers?|inverters?|converters?|regulators?|MPPTs?|chargers?|rectifiers?|electroly[sz]ers?)'],
+      'into (?:the|its|a|an) (?:[\\w\\x27\\u2019-]+ )?(?:controllers?|inverters?|converters?|regulators?|MPPTs?|chargers?|rectifiers?|electroly[sz]ers?)',
+      // "a rider puts about 120 W into the cranks": what the rider gives the pedals is the machine's input.
+      'into (?:the|its|their|his|her) (?:cranks?|pedals?|treadles?)'],
   },
   {
     role: 'out',
