@@ -98,6 +98,9 @@ const FUEL_AT_RE = /(?<!\p{L})(?:fuel|burn\w*|heat|gas|diesel|petrol|gasoline|co
  */
 function auxiliaryInput(text: string, inF: Figure, outF: Figure): boolean {
   if (!text || inF.start === null || inF.end === null || outF.start === null || inF.derived) return false;
+  // (A store's own energy, "a 12 V, 100 Ah lead-acid battery (1.2 kWh) kept the 3 W river-level sensor
+  // running": what the store holds is no auxiliary's draw.)
+  if (/(?<!\p{L})(?:batter(?:y|ies)|packs?|cells?|accumulators?|power[^\S\n]+banks?)(?!\p{L})[^\S\n]*(?:\(|[:=,]|holds?|holding|of|with|storing|stores?)?[^\S\n]*(?:(?:about|some|roughly|nearly|just|only)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, inF.start - 60), inF.start))) return false;
   const around = sentenceAround(text, inF.start, inF.end);
   // (Within the figure's own sentence: "Gas to the engine: 780 MWh. Electricity exported plus own use: 301 MWh"
   // names no auxiliary load at its 780 MWh.)

@@ -452,3 +452,24 @@ describe('inputs said by what the device is run at or given (invented test data)
     expectRelClose(eight.si, 8000, EXACT); // 1 kW = 1000 W (SI prefix kilo, BIPM SI Brochure Table 7)
   });
 });
+
+describe('outputs said by where the energy ends up (invented test data)', () => {
+  test('"4.4 W of the input leaves as visible light" is the lamp\'s output; its "11 W" what it takes', () => {
+    const f = extractFigures('Their 11 W LED bulb is "40 % efficient, i.e. 4.4 W of the input leaves as visible light".');
+    expect(f.find((x) => x.text === '4.4 W')!.role).toBe('out');
+    expect(f.find((x) => x.text === '11 W')!.role).toBe('in');
+    // The input itself is still the input.
+    expect(extractFigures('The heater takes 2 kW of input and gives 1.9 kW of heat.').find((x) => x.text === '2 kW')!.role).toBe('in');
+  });
+  test('"took 9.6 kWh from the meter and 8.9 kWh ended up in the stored water": out of the element', () => {
+    const f = extractFigures('Over the 48-hour run the element took 9.6 kWh from the meter and 8.9 kWh ended up in the stored water.');
+    expect(f.find((x) => x.text === '9.6 kWh')!.role).toBe('in');
+    const out = f.find((x) => x.text === '8.9 kWh')!;
+    expect(out.role).toBe('out');
+    expectRelClose(out.si, 8.9 * 3.6e6, 1e-12); // 1 kWh = 3.6 MJ (NIST SP 811 B.8)
+  });
+  test('"three-quarters of a horsepower" is 0.75 hp', () => {
+    const f = extractFigures('The wheel put out three-quarters of a horsepower for six hours.');
+    expectRelClose(f.find((x) => x.kind === 'power')!.si, 0.75 * 745.69987158227, 1e-9); // hp = 745.699 871 582 27 W (NIST SP 811 B.8)
+  });
+});

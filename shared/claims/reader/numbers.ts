@@ -79,7 +79,7 @@ function cleanNumber(m: RegExpExecArray): string {
 
 const WORD_NUMBER_HINT = /(?<!\p{L})(?:billion|million|quarter|third|tenth|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|sixteen|seventeen|eighteen|nineteen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|thousand|half|dozen|a quarter)(?!\p{L})/iu;
 
-const FRACTION_WORDS_RE = /(?<!\p{L})(a ten-thousandth|one ten-thousandth|a hundred-thousandth|a millionth|one millionth|a thousandth|one thousandth|a hundredth|one hundredth|half a dozen|half|a quarter|one quarter|three quarters|a third|one third|two thirds|a tenth|one tenth|a dozen|a hundred|a thousand|a million|a billion|a trillion)(?:[^\S\n]+of)?(?:[^\S\n]+an?)?(?=[^\S\n]+\p{L}|-\p{L})/giu;
+const FRACTION_WORDS_RE = /(?<!\p{L})(a ten-thousandth|one ten-thousandth|a hundred-thousandth|a millionth|one millionth|a thousandth|one thousandth|a hundredth|one hundredth|half a dozen|half|a quarter|one quarter|three[- ]quarters|a third|one third|two[- ]thirds|a tenth|one tenth|a dozen|a hundred|a thousand|a million|a billion|a trillion)(?:[^\S\n]+of)?(?:[^\S\n]+an?)?(?=[^\S\n]+\p{L}|-\p{L})/giu;
 const FRACTION_VALUE: Record<string, number> = {
   'half a dozen': 6, 'a dozen': 12,
   half: 0.5, 'a quarter': 0.25, 'one quarter': 0.25, 'three quarters': 0.75, 'a third': 1 / 3, 'one third': 1 / 3, 'two thirds': 2 / 3,
@@ -128,7 +128,7 @@ function wordNumbers(text: string): { start: number; end: number; value: number 
   }
   // "half a kilowatt", "a quarter of a kilowatt", "a billion km/h": compromise leaves these.
   for (const m of text.matchAll(FRACTION_WORDS_RE)) {
-    const value = FRACTION_VALUE[m[1].toLowerCase()];
+    const value = FRACTION_VALUE[m[1].toLowerCase().replace(/^(three|two)-/u, '$1 ')];
     if (value === undefined) continue;
     // Part of a number compromise read ("two and a half"): leave it.
     const end = m.index! + m[0].length;

@@ -93,7 +93,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       // "2.4e-3 J going into the coil per pulse": what goes into the device's own part.
       '(?:going|goes|go|went|fed|put|flowing|flows) in(?:to (?:the|its) (?:[\\w-]+ )?(?:coils?|device|unit|circuit|primary|input|driver|cell|stack|drive|cavity|thruster|module|rig|system|elements?|heaters?|filaments?|windings?|resistors?))?(?! (?:the|a|an) (?:load|grid|battery|cap|capacitor|tank|store|heater))',
       '(?:which|that) (?:is|are|was|were) (?:put|fed) in(?:to it)?', 'of (?:input|supply|alternator|battery|mains|grid|compressor|drive|motor) (?:power|energy|electricity)', 'of excitation', 'of drive', '(?:battery )?pack', 'battery', 'of (?:chemical|fuel) (?:power|energy)', 'chemical (?:power|energy)', '\\((?:LHV|HHV)\\)', 'of drive(?: power)?', 'uptake',
-      'inputs?', '(?:"|“)?drawn(?! from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point|a?ether|nowhere|nothing|thin air))', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 
+      'inputs?(?! (?:leaves|leaving|left|comes? out|came out|emerges?|emerging|is emitted|was emitted|is given off|ends? up|ended up|becomes|became|is turned into|is converted (?:in)?to))', '(?:"|“)?drawn(?! from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point|a?ether|nowhere|nothing|thin air))', 'consumed', 'consumption', 'supplied', 'used', 'absorbed', 'draw', 'fed', 
       // "a 65 W charger": see the same word before the figure.
       '(?:USB[- ]?C |fast |wall |mains |GaN |travel )?(?:charger|adapter|adaptor|PSU|power brick)(?! (?:delivers|gives|puts|supplies|outputs))',
       // "about 120 W of sunlight falls on its folds": the light a panel takes.
@@ -146,6 +146,10 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', '(?:can|could|will|would|to) discharge(?: at)?', 'gave back', 'on the shaft', 'at the shaft', '(?:generators?|alternators?|dynamos?)(?: (?!(?:is|was|are|were|being|been)\\b)[\\w-]+){0,5}? (?:sends?|sent|pushes|pushed|returns?|returned|puts? back|delivers|supplies)', '(?:shaft|brake) (?:power|output)(?:\x27s|\u2019s)?', 'dump(?:s|ed)?', '(?<![\\w-])out ?=', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
     ],
     after: [
+      // "4.4 W of the input leaves as visible light": the part of the input that comes out as the output.
+      'of (?:the|its) (?:[\\w-]+ )?(?:input|power|energy|electricity)(?: [\\w-]+)? (?:leaves|leaving|left|comes? out|came out|emerges?|emerging|is emitted|was emitted|is given off|ends? up|ended up|becomes|became|is turned into|is converted (?:in)?to)',
+      // "8.9 kWh ended up in the stored water": what reaches the heated water or the load is what the device gives.
+      '(?:ended|ends|end|finished) up (?:in|as) (?:the |its )?(?:[\\w-]+ )?(?:water|tank|cylinder|load|room|rooms|house|building|heat|light)',
       // "seven kilowatts to the wheels": what reaches the wheels is what the drive gives.
       '(?:to|at) the (?:driven )?wheels?',
       // "its combustion adds up to 2.1 kW to the engine's output": what is added to an output is output.
