@@ -473,3 +473,10 @@ describe('outputs said by where the energy ends up (invented test data)', () => 
     expectRelClose(f.find((x) => x.kind === 'power')!.si, 0.75 * 745.69987158227, 1e-9); // hp = 745.699 871 582 27 W (NIST SP 811 B.8)
   });
 });
+
+test('"nothing was driving it but its own weights" says the wheel takes nothing in (invented test data)', () => {
+  const f = extractFigures('The overbalanced wheel put out half a horsepower for six hours, and nothing was driving it but its own weights.');
+  expect(f.some((x) => x.kind === 'power' && x.role === 'in' && x.si === 0)).toBe(true);
+  // A wheel a motor drives takes what the motor gives.
+  expect(extractFigures('The wheel put out half a horsepower for six hours while a 1 kW motor was driving it.').some((x) => x.role === 'in' && x.si === 0)).toBe(false);
+});
