@@ -1957,3 +1957,36 @@ describe('a table of readings is read line by line: no line\'s input set against
     expectRun(text, 'first-law', 'consistent', 'over_unity', 480 / 571, 6);
   });
 });
+
+describe('claims read from this session\'s tuning parts 102–103 (invented test data)', () => {
+  test('a pulse "detected at the far end 21 µs later" through a 12 km fibre spool is a speed above c', () => {
+    const text = 'The authors report that a pulse launched into the 12 km fibre spool was detected at the far end 21 µs later.';
+    const f = extractFigures(text);
+    const v = f.find((x) => x.kind === 'speed')!;
+    expect(v.si).toBeCloseTo(12000 / 21e-6, 3); // path / time = 12,000 m / 21 µs (arithmetic)
+    const c = runClaimChecks(f, { text }).checks.find((x) => x.check === 'light-speed')!;
+    expect(c.finding).toBe('breaks');
+    // Through a 10 km spool in 50 µs: 2 × 10⁸ m/s, two-thirds of c (c = 299 792 458 m/s exactly, BIPM SI Brochure).
+    const t2 = 'A pulse launched into the 10 km fibre spool was detected at the far end 50 µs later.';
+    expect(runClaimChecks(extractFigures(t2), { text: t2 }).checks.find((x) => x.check === 'light-speed')!.finding).toBe('consistent');
+    // A time with no signal in its sentence gives no speed: "the 12 km cable was laid in 21 days".
+    expect(extractFigures('The 12 km cable was laid and tested 21 days later.').some((x) => x.kind === 'speed')).toBe(false);
+  });
+  test('"gives back 1.3 for every 1 it receives" on 500 W from the wall breaks the first law', () => {
+    const text = 'Our resonant converter takes 500 W from the wall socket and gives back 1.3 for every 1 it receives.';
+    const c = runClaimChecks(extractFigures(text), { text }).checks.find((x) => x.check === 'first-law')!;
+    expect(c.finding).toBe('breaks');
+    // "returns 3 for every 4 it takes" is 0.75, within the law.
+    const t2 = 'The regenerative unit returns 3 for every 4 it takes.';
+    expect(extractFigures(t2).find((x) => x.kind === 'efficiency')!.si).toBeCloseTo(0.75, 12);
+    expect(runClaimChecks(extractFigures(t2), { text: t2 }).checks.some((x) => x.finding === 'breaks')).toBe(false);
+  });
+  test('a lift from gyroscopes "free of any exhaust or propeller" is held to the photon bound', () => {
+    const text = 'Two counter-rotating gyroscopes, precessed by a 1.5 PS drive motor, generate a vertical lift of 12 kgf on the platform, which is free of any exhaust or propeller.';
+    const c = runClaimChecks(extractFigures(text), { text }).checks.find((x) => x.check === 'photon-bound')!;
+    expect(c.finding).toBe('breaks');
+    // 12 kgf × c / (1.5 × 735.49875 W): kgf = 9.806 65 N, PS = 735.498 75 W (NIST SP 811 B.8); c exact (BIPM).
+    const ratio = out(c, 'ratio');
+    expect(Math.abs(ratio / ((12 * 9.80665 * 299792458) / (1.5 * 735.49875)) - 1)).toBeLessThan(1e-9);
+  });
+});

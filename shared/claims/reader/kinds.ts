@@ -76,6 +76,10 @@ const GAIN_AFTER_RE =
  */
 const GAIN_FOR_EVERY_RE =
   /[^\S\n]*units?[^\S\n]+(?:of[^\S\n]+(?:[\p{L}-]+[^\S\n]+){1,4}?)?(?:(?:back|out|returned|delivered)[^\S\n]+)?(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(?:(\d+(?:\.\d+)?|two|three|four|five|six|seven|eight|nine|ten)(?![\p{L}\p{N}])|units?(?!\p{L}))(?=[^.;!?\n]{0,40}(?:in|into|enters?|takes?|took|consumes?|uses?|draws?|of (?:fuel|input|energy|electricity|power|work)|put in|supplied|fed)(?!\p{L}))/iuy;
+/** "gives back 1.3 for every 1 it receives": a bare number out for a bare number in (group 1), after a verb of giving back. */
+const GAIN_BARE_FOR_EVERY_RE =
+  /[^\S\n]+(?:for|per)[^\S\n]+(?:every|each)[^\S\n]+(\d+(?:\.\d+)?|one|two|three|four|five|six|seven|eight|nine|ten)(?![\p{L}\p{N}.,])[^\S\n]+(?:(?:that|which)[^\S\n]+)?(?:it|they|the[^\S\n]+[\p{L}-]+)[^\S\n]+(?:receives|received|takes|took|gets|got|consumes|consumed|uses|used|draws|drew|is[^\S\n]+given|was[^\S\n]+given|is[^\S\n]+fed|was[^\S\n]+fed|puts?[^\S\n]+in|takes[^\S\n]+in)(?!\p{L})/iuy;
+const GAIN_BARE_VERB_RE = /(?<!\p{L})(?:gives?|gave|giving|returns?|returned|returning|yields?|yielded|delivers?|delivered|puts?[^\S\n]+out|sends?[^\S\n]+back|feeds?[^\S\n]+back)(?:[^\S\n]+(?:back|out|us|you|about|roughly|some|nearly))*[^\S\n]*$/iu;
 const SMALL_NUMBER: Record<string, number> = { two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10 };
 /** "For every unit of electricity we put in, the amplifier gives back 1.3." */
 const GAIN_BEFORE_RE =
@@ -362,6 +366,12 @@ export function bareKind(text: string, start: number, end: number, floor: number
   if (every) {
     const per = every[1] === undefined ? 1 : (SMALL_NUMBER[every[1].toLowerCase()] ?? Number(every[1]));
     if (per > 0) return { kind: 'efficiency', factor: 1 / per, derived: per === 1 ? 'units out for each unit in' : `units out for every ${every[1]} in` };
+  }
+  GAIN_BARE_FOR_EVERY_RE.lastIndex = end;
+  const bare = GAIN_BARE_VERB_RE.test(text.slice(Math.max(floor, start - 40), start)) ? GAIN_BARE_FOR_EVERY_RE.exec(text) : null;
+  if (bare) {
+    const per = SMALL_NUMBER[bare[1].toLowerCase()] ?? (/^one$/iu.test(bare[1]) ? 1 : Number(bare[1]));
+    if (per > 0) return { kind: 'efficiency', factor: 1 / per, derived: per === 1 ? 'units out for each unit in' : `units out for every ${bare[1]} in` };
   }
   PERCENT_OF_HEAT_RE.lastIndex = end;
   if (PERCENT_OF_HEAT_RE.test(text)) return { kind: 'efficiency' };

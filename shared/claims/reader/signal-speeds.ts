@@ -15,6 +15,14 @@ const PATH_UNIT: Record<string, number> = { km: 1000, kilometre: 1000, kilometer
 /** Just before a time a signal takes: "a one-way latency of", "round-trip delay:", "ping of". */
 const LATENCY_BEFORE_RE =
   /(?<!\p{L})(?:(?:one[- ]way|round[- ]trip|end[- ]to[- ]end|guaranteed|typical|measured|total)[^\S\n]+)*(?:latency|delay|ping|RTT|transit[^\S\n]+time|propagation[^\S\n]+(?:time|delay))(?:[^\S\n]+(?:time|figure))?[^\S\n]*(?:of|is|was|:|=|at|under|below|less[^\S\n]+than|just|only|about|around|guaranteed[^\S\n]+(?:at|under|below))?[^\S\n]*(?:(?:under|below|less[^\S\n]+than|just|only|about|around|roughly|of)[^\S\n]+)*$/iu;
+/** A signal in the time's sentence: "a pulse launched into the fibre", "the photons", "the message". */
+const SIGNAL_RE = /(?<!\p{L})(?:pulses?|signals?|photons?|beams?|messages?|packets?|wave[- ]?fronts?|light)(?!\p{L})/iu;
+/** A time a signal is said to take to arrive: "detected at the far end 21 µs later", "arrived after 3 ms", "took 40 ns to cross". */
+const ARRIVAL_BEFORE_RE = /(?<!\p{L})(?:arriv\w*|detected|received|registered|reached|reaches|crossed|cross(?:es|ing)?|travell?(?:ed|ing|s)?|propagat\w*|took|takes|taking|emerged|came[^\S\n]+out)(?!\p{L})[^.;!?\n]{0,40}?(?:(?:in|within|after|only|just)[^\S\n]+)*$/iu;
+const LATER_AFTER_RE = /^[^\S\n]*(?:later|after(?:wards)?|afterwards)(?!\p{L})/iu;
+/** The length of a line a signal runs through: "the 12 km fibre spool", "a 3 km coil of cable". */
+const LINE_AFTER_RE = /^[^\S\n]*(?:(?:long|length)[^\S\n]+)?(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:fibre|fiber|cable|coax|line|spool|coil|waveguide|link)s?(?!\p{L})/iu;
+
 /** Words that make a time a lower bound or a change, not the time the signal takes: "over 5 ms", "saves 1.6 ms". */
 const NOT_THE_TIME_BEFORE_RE =
   /(?<!\p{L})(?:over|above|more[^\S\n]+than|at[^\S\n]+least|saves?|saving|saved|cuts?|cutting|shaves?|shaving|shaved|reduc\w*|lower(?:s|ed)?|less|improv\w*|faster|quicker|by|added|adds?|extra|increase\w*|jitter|variation)[^\S\n]*(?:(?:of|by|just|only|about)[^\S\n]+)*$/iu;
@@ -45,7 +53,10 @@ export function signalSpeeds(text: string, drafts: Draft[]): void {
   const paths = [...text.matchAll(PATH_RE)];
   for (const t of drafts.filter((d) => d.kind === 'duration' && !d.upper)) {
     const before = text.slice(Math.max(0, t.start - 60), t.start);
-    if (!LATENCY_BEFORE_RE.test(before) || NOT_THE_TIME_BEFORE_RE.test(text.slice(Math.max(0, t.start - 25), t.start))) continue;
+    const sentenceOfTime = sentenceAround(text, t.start, t.end);
+    // (Or a signal's arrival: "a pulse launched into the 12 km fibre spool was detected at the far end 21 µs later".)
+    const arrival = SIGNAL_RE.test(sentenceOfTime) && (LATER_AFTER_RE.test(text.slice(t.end, t.end + 20)) || ARRIVAL_BEFORE_RE.test(text.slice(Math.max(0, t.start - 60), t.start)));
+    if (!(LATENCY_BEFORE_RE.test(before) || arrival) || NOT_THE_TIME_BEFORE_RE.test(text.slice(Math.max(0, t.start - 25), t.start))) continue;
     const seconds = siOf(t);
     if (seconds === null || !(seconds > 0)) continue;
     // One path said in the time's own sentence: two distances leave open which the signal covers.
@@ -57,7 +68,7 @@ export function signalSpeeds(text: string, drafts: Draft[]): void {
     // (The length of a link between two places, not of a network or of the ground it covers: "1 ms latency
     // across our 1,200 km of motorway coverage" gives no path.)
     const around = text.slice(Math.max(0, p.index! - 40), p.index! + p[0].length + 50);
-    if (!LINK_RE.test(around) || NETWORK_RE.test(around)) continue;
+    if (!(LINK_RE.test(around) || (arrival && LINE_AFTER_RE.test(text.slice(p.index! + p[0].length, p.index! + p[0].length + 30)))) || NETWORK_RE.test(around)) continue;
     const metres = Number(p[1].replace(/,/g, '')) * (PATH_UNIT[p[2].toLowerCase()] ?? NaN);
     if (!(metres > 0)) continue;
     // (There and back is twice the path; a time said plainly is taken as one way, the kinder reading.)

@@ -64,6 +64,8 @@ export const HEAT_ENGINE_WORDS = [
 export const PROPELLANT_FREE_WORDS = [
   // ("no air flow or propellant": before the shorter "no air flow" below, so that the propellant is part of the match.)
   'no (?:[\\w-]+ ){0,2}(?:or|nor) (?:any )?(?:propellant|reaction mass|exhaust)', 'without (?:[\\w-]+,? ){1,3}(?:or|nor) (?:any )?(?:propellant|reaction mass|exhaust)', 'neither (?:[\\w-]+ ){0,2}nor (?:any )?(?:propellant|reaction mass|exhaust)',
+  // "which is free of any exhaust or propeller": a device said to have neither.
+  '(?:free|clear) of (?:any )?(?:exhaust|propellant|reaction mass|propellers?|rotors?|jets?)(?:,? (?:or|and|nor) (?:any )?(?:exhaust|propellant|reaction mass|propellers?|rotors?|jets?))*',
   'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless', 'without (?:spending|using|burning|consuming|expending|carrying|needing|requiring|taking) (?:any |(?:a|one|an?) (?:single )?(?:gram|kilogram|milligram|ounce|drop|atom|molecule|scrap|bit|speck) of )?(?:propellant|fuel|reaction mass)',
   '(?:ion(?:ic)? wind|air currents?|convection) (?:cannot|can ?not|can\'t|could not|is not|isn\'t) (?:be )?(?:the )?(?:cause|explanation|source)', 'rul(?:e|es|ed|ing) out (?:ion(?:ic)? wind|air currents?|convection)',
   'without (?:any )?(?:expelling|ejecting|emitting|throwing|shedding|venting)(?: (?:out )?(?:any )?(?:propellant|mass|reaction mass|material|matter|exhaust|gas))?',
