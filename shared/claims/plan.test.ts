@@ -1989,4 +1989,17 @@ describe('claims read from this session\'s tuning parts 102–103 (invented test
     const ratio = out(c, 'ratio');
     expect(Math.abs(ratio / ((12 * 9.80665 * 299792458) / (1.5 * 735.49875)) - 1)).toBeLessThan(1e-9);
   });
+  test('"a full 2 Ah cell at 3.7 V holds under 27 kJ" is what the cell has to give, an input', () => {
+    const f = extractFigures('A full 2 Ah cell at 3.7 V holds under 27 kJ; the beacon is said to draw 0.5 W for 90 days from it.');
+    const held = f.find((x) => x.text === '27 kJ')!;
+    expect([held.kind, held.role]).toEqual(['energy', 'in']);
+    // What a generator "holds" (a speed, a load) is no store: "the turbine holds 2 MW" stays an output.
+    expect(extractFigures('At rated wind the turbine holds 2 MW for hours.').find((x) => x.text === '2 MW')!.role).not.toBe('in');
+  });
+  test('a heat pump lifting heat "from the 25 °C cooling-water return" has a heating COP', () => {
+    const f = extractFigures('The ammonia heat pump lifts waste heat from the 25 °C cooling-water return by 30 K, delivering 55 °C process water at a COP of 3.2.');
+    expect(f.find((x) => x.kind === 'cop')!.role).toBe('heating');
+    // A chiller's COP beside its chilled water stays a cooling COP.
+    expect(extractFigures('The chiller cools the water loop to 7 °C at a COP of 5.1.').find((x) => x.kind === 'cop')!.role).toBe('cooling');
+  });
 });

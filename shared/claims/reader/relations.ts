@@ -388,7 +388,21 @@ function cellStem(text: string, d: Draft): string {
   return words.length >= 2 && /\p{L}/u.test(words) ? words : '';
 }
 
+/**
+ * "A full 2 Ah cell at 3.7 V holds under 27 kJ": what a store holds, its size said between the store and the
+ * verb (the words a figure's own window cannot see past the size's figures), is what it has to give — an input.
+ */
+const STORE_HOLDS_LEAD_RE =
+  /(?<!\p{L})(?:batter(?:y|ies)|cells?|packs?|banks?|accumulators?|capacitors?|supercaps?|tanks?|stores?|flywheels?)(?!\p{L})(?:[^.;!?\n]|\.(?=\d)){0,40}?(?<!\p{L})holds?(?:[^\S\n]+(?:about|some|roughly|up[^\S\n]+to|under|just[^\S\n]+under|less[^\S\n]+than|below|at[^\S\n]+most|no[^\S\n]+more[^\S\n]+than|only|just))?[^\S\n]*$/iu;
+function storeHolds(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (d.kind !== 'energy' || d.role !== 'out' || d.derived) continue;
+    if (STORE_HOLDS_LEAD_RE.test(text.slice(Math.max(0, d.start - 70), d.start))) d.role = 'in';
+  }
+}
+
 export function relateFigures(text: string, drafts: Draft[]): void {
+  storeHolds(text, drafts);
   loopParts(text, drafts);
   inputForEvery(text, drafts);
   quantumRestated(text, drafts);

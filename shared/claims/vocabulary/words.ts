@@ -188,7 +188,8 @@ export const HEDGES: readonly { hedge: 'up-to' | 'about' | 'at-least' | 'at-most
 /** COP: cooling words are looked for first, then heating words (within COP_WINDOW characters). */
 export const COP_COOLING = [
   // (Not the adjective of a device that does not get hot: "Board runs cool", "stays cool to the touch".)
-  'cool(?:s|ed|ing|er|ers)', '(?<!(?:runs?|running|ran|stays?|stayed|staying|keeps?|kept|remains?|remained|feels?|felt|quite|very|fairly|nice and|is|was|are|were) )cool(?! to the touch)', 'refrigerat\\w*', 'chillers?', 'freezers?', 'fridges?', 'air[- ]condition\\w*', 'cryocoolers?'];
+  // (Nor a plant's cooling water or tower a heat pump draws its heat from: "lifts waste heat from the 25 °C cooling-water return".)
+  'cool(?:s|ed|ing|er|ers)(?![- ](?:water|towers?|circuits?|loops?|returns?|oil|jackets?))', '(?<!(?:runs?|running|ran|stays?|stayed|staying|keeps?|kept|remains?|remained|feels?|felt|quite|very|fairly|nice and|is|was|are|were) )cool(?! to the touch)', 'refrigerat\\w*', 'chillers?', 'freezers?', 'fridges?', 'air[- ]condition\\w*', 'cryocoolers?'];
 export const COP_HEATING = ['heating', 'heat[- ]pumps?', 'heaters?', 'warming', 'heat output', 'flow temperature', 'hot water', 'DHW', 'underfloor', 'radiators?'];
 
 /** Words before a number that make it a label, not a figure ("Figure 2 A", "Section 3.2", "p. 12"). */
