@@ -2002,4 +2002,13 @@ describe('claims read from this session\'s tuning parts 102–103 (invented test
     // A chiller's COP beside its chilled water stays a cooling COP.
     expect(extractFigures('The chiller cools the water loop to 7 °C at a COP of 5.1.').find((x) => x.kind === 'cop')!.role).toBe('cooling');
   });
+  test('a solar collector\'s pump electricity against the heat it gives is no ledger, in prose or in a table with an "extra over pump" column', () => {
+    const prose = 'Our solar thermal collector: pump electricity 0.4 kWh, heat to tank 12 kWh, extra over pump 11.6 kWh.';
+    const table = 'Solar thermal\n| Day | Pump electricity (kWh) | Heat to tank (kWh) | Extra over pump (kWh) |\n| 1 | 0.4 | 12 | 11.6 |\n| 2 | 0.3 | 8 | 7.7 |';
+    for (const text of [prose, table]) {
+      const r = runClaimChecks(extractFigures(text), { text });
+      expect(r.checks.some((c) => c.finding === 'breaks')).toBe(false);
+      expect(r.needs.some((n) => n.check === 'first-law')).toBe(true);
+    }
+  });
 });

@@ -96,8 +96,16 @@ const FUEL_AT_RE = /(?<!\p{L})(?:fuel|burn\w*|heat|gas|diesel|petrol|gasoline|co
  * only a 50 kW yaw and pitch system drawing power", "15 kW of heat from the sun while the fans draw 300
  * W"): not what the plant converts, so no ledger.
  */
+/** An excess said over an auxiliary's draw: "Extra over pump (kWh)", "gain over the fans". */
+const EXCESS_OVER_AUXILIARY_RE =
+  /(?<!\p{L})(?:extra|excess|surplus|gain|net)[^\S\n]+(?:over|above|beyond)[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:(?:circulat\w+|circulation|solar|loop)[^\S\n]+)?(?:pumps?|fans?|blowers?|controls?|controllers?|electronics|trackers?|auxiliar\w*|parasitics?)(?!\p{L})/iu;
+
 function auxiliaryInput(text: string, inF: Figure, outF: Figure): boolean {
-  if (!text || inF.start === null || inF.end === null || outF.start === null || inF.derived) return false;
+  if (!text || inF.start === null || inF.end === null || outF.start === null) return false;
+  // (An input worked out as output − excess, where the excess is said over a pump's or a fan's draw, in a
+  // text on a plant that lives on an outside flow: "Solar thermal | Pump electricity | Heat to tank | Extra over pump".)
+  // (Not a flow said to be absent: "with no sun, wind or fuel".)
+  if (inF.derived) return /^input = output − excess/u.test(inF.derived) && EXCESS_OVER_AUXILIARY_RE.test(text) && OUTSIDE_FLOW_RE.test(text.replace(/(?<!\p{L})(?:no|without|nor|neither|not)(?!\p{L})[^.;!?\n]{0,40}/giu, ' '));
   // (A store's own energy, "a 12 V, 100 Ah lead-acid battery (1.2 kWh) kept the 3 W river-level sensor
   // running": what the store holds is no auxiliary's draw.)
   if (/(?<!\p{L})(?:batter(?:y|ies)|packs?|cells?|accumulators?|power[^\S\n]+banks?)(?!\p{L})[^\S\n]*(?:\(|[:=,]|holds?|holding|of|with|storing|stores?)?[^\S\n]*(?:(?:about|some|roughly|nearly|just|only)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, inF.start - 60), inF.start))) return false;
@@ -110,7 +118,8 @@ function auxiliaryInput(text: string, inF: Figure, outF: Figure): boolean {
   // (Read back only to the clause's start: "6 kW of heat while drawing 150 W" names no fuel at its 150 W.)
   const label = /(?:^|[.!?\n])[^.!?\n:]{0,80}:[^\S\n]*$/u.exec(text.slice(Math.max(0, inF.start - 90), inF.start))?.[0] ?? '';
   const clause = label || (text.slice(Math.max(0, inF.start - 25), inF.start).split(/[,;:]|(?<!\p{L})(?:and|while|but|whereas|with)(?!\p{L})/iu).pop() ?? '');
-  const atFigure = clause + text.slice(inF.start, inF.end + 12);
+  // (Up to the clause's end after it: "pump electricity 0.4 kWh, heat to tank 12 kWh" names no heat at its 0.4 kWh.)
+  const atFigure = clause + text.slice(inF.start, inF.end) + text.slice(inF.end, inF.end + 12).split(/[,;]/u)[0];
   return AUXILIARY_RE.test(local) && !FUEL_AT_RE.test(atFigure) && OUTSIDE_FLOW_RE.test(around + ' ' + sentenceAround(text, outF.start, outF.end ?? outF.start));
 }
 
