@@ -316,3 +316,11 @@ test('an "ideal delta-v" worked out beside the flight\'s own speed change is the
   const claimed = extractFigures('Claimed ideal burnout delta-v of the rocket: 2.8 km/s. Check: 80/32 = 2.5, ln 2.5 ≈ 0.92, times 3.1 km/s gives a delta-v of 2.84 km/s.');
   expect(claimed.find((x) => x.si === 2800)?.role).not.toBe('aside');
 });
+
+test('a group velocity above c is set aside, unless the text says a message is sent at it (invented test data)', () => {
+  const lawful = 'The group velocity in the fibre\'s anomalous region was measured at 1.7 c, a well-known effect that carries no information faster than light.';
+  expect(extractFigures(lawful).find((x) => x.kind === 'speed')!.role).toBe('aside');
+  expect(runClaimChecks(extractFigures(lawful), { text: lawful }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+  const claim = 'We measured the group velocity of the pulse at 1.7 c and used it to send a message from A to B faster than light.';
+  expect(runClaimChecks(extractFigures(claim), { text: claim }).checks.find((c) => c.check === 'light-speed')!.finding).toBe('breaks');
+});

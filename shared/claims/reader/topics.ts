@@ -157,13 +157,20 @@ const WOULD_NEED_BEFORE_RE = /(?<!\p{L})(?:would|could|should|must|might|limit|c
 
 /** Words of a speed above c that carries nothing: an apparent motion, a phase, a recession, a spot or shadow. */
 const APPARENT_SPEED_RE =
-  /(?<!\p{L})(?:apparent(?:ly)?[^\S\n]+(?:speed|velocity|motion|movement)|(?:appear|seem)(?:s|ed)?[^\S\n]+to[^\S\n]+(?:have[^\S\n]+)?(?:move|moved|travel|travelled|traveled|go|gone|outrun|race|raced|sweep|swept|shoot|shot|cross|crossed|jump|jumped)|looks? (?:like|as if) it|phase (?:velocit\w*|speed)|reced\w*|recession|expansion|expanding|spot|shadow|superluminal motion)(?!\p{L})/iu;
+  /(?<!\p{L})(?:apparent(?:ly)?[^\S\n]+(?:speed|velocity|motion|movement)|(?:appear|seem)(?:s|ed)?[^\S\n]+to[^\S\n]+(?:have[^\S\n]+)?(?:move|moved|travel|travelled|traveled|go|gone|outrun|race|raced|sweep|swept|shoot|shot|cross|crossed|jump|jumped)|looks? (?:like|as if) it|(?:phase|group)[- ](?:velocit\w*|speed)|reced\w*|recession|expansion|expanding|spot|shadow|superluminal motion)(?!\p{L})/iu;
 
 /**
  * "A knot in the jet appears to move at four times the speed of light", "the spot sweeps across the Moon
  * faster than light", "galaxies receding faster than light": a speed above c said as an appearance, a
  * phase or a recession carries no object or signal past c, and is set aside (no finding on it).
  */
+/** A message or a signal said to be sent: "to send a message", "transmits data", "signalling". */
+const SIGNAL_SENT_RE = /(?<!\p{L})(?:send(?:s|ing)?|sent|transmit\w*|signall?(?:ing|ed)|communicat\w*|carr(?:y|ies|ied|ying))(?!\p{L})[^.!?]{0,40}(?:messages?|signals?|information|data|bits?|news|pulses?)(?!\p{L})/iu;
+/** A pulse timed from one end to the other: "station B timestamps arrival", "time of flight", "distance divided by mean delay". */
+const PULSE_TIMED_RE = /(?<!\p{L})(?:timestamps?|time[- ]stamp\w*|time[- ]of[- ]flight|arrival[^\S\n]+times?|timestamps[^\S\n]+arrival|divided[^\S\n]+by[^\S\n]+(?:the[^\S\n]+)?(?:mean[^\S\n]+)?delay)(?!\p{L})/iu;
+/** Said to carry nothing: "carries no information faster than light", "no signal travels faster". */
+const NO_SIGNAL_RE = /(?<!\p{L})(?:carr(?:y|ies|ied|ying)|sends?|transmits?)[^\S\n]+no[^\S\n]+(?:information|signals?|messages?|data|energy)|no[^\S\n]+(?:information|signal|message)[^\S\n]+(?:is[^\S\n]+)?(?:sent|carried|travels?|moves?|goes)/iu;
+
 export function asideApparentSpeeds(text: string, drafts: Draft[]): void {
   const apparent: number[] = [];
   for (const d of drafts) {
@@ -172,7 +179,10 @@ export function asideApparentSpeeds(text: string, drafts: Draft[]): void {
     // (Said before it in its sentence, or in the sentence right after: "… at about 1.4 times the speed of
     // light. This is the phase velocity".)
     const next = /^[^.!?\n]*[.!?]["”’')\]]*[^\S\n]+([^.!?\n]{0,120})/u.exec(text.slice(d.end))?.[1] ?? '';
-    if (APPARENT_SPEED_RE.test(text.slice(windowStart(text, d.start, 0, 400), d.start)) || /^(?:this|that|it|the (?:crest|pattern|spot|knot|blob))[^.!?\n]{0,40}(?:phase (?:velocit|speed)|apparent|illusion|not real|no real)/iu.test(next)) {
+    // (A group velocity the text says carries a message or a signal is the claim itself: "used it to send a message faster than light".)
+    const lead = text.slice(windowStart(text, d.start, 0, 400), d.start);
+    const signalled = /(?<!\p{L})group[- ](?:velocit|speed)/iu.test(lead) && (SIGNAL_SENT_RE.test(text) || PULSE_TIMED_RE.test(text)) && !NO_SIGNAL_RE.test(text);
+    if ((APPARENT_SPEED_RE.test(lead) && !signalled) || /^(?:this|that|it|the (?:crest|pattern|spot|knot|blob))[^.!?\n]{0,40}(?:phase (?:velocit|speed)|apparent|illusion|not real|no real)/iu.test(next)) {
       d.role = 'aside';
       apparent.push(si);
     }
