@@ -2012,3 +2012,41 @@ describe('claims read from this session\'s tuning parts 102–103 (invented test
     }
   });
 });
+
+describe('claims read from this session\'s tuning parts 104–105 (invented test data)', () => {
+  const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.some((c) => c.finding === 'breaks');
+  test('a lifter "on 30 kV at 1.1 mA, just 33 W and no fuel at all" takes 33 W in: no power out of nothing', () => {
+    const text = 'My lifter rises off the bench on 30 kV at 1.1 mA, just 33 W and no fuel at all.';
+    const f = extractFigures(text);
+    expect(f.find((x) => x.text === '33 W')!.role).toBe('in');
+    expect(breaks(text)).toBe(false);
+  });
+  test('a collector giving "up to 2.1 kW of heat from a 45 W pump" in sun: the pump is no input of the heat', () => {
+    const text = "The evacuated-tube collector is said to 'deliver up to 2.1 kW of heat from a 45 W pump' in full sun.";
+    expect(breaks(text)).toBe(false);
+    expect(runClaimChecks(extractFigures(text), { text }).needs.some((n) => n.check === 'first-law')).toBe(true);
+  });
+  test('"0.65 kWh for every kWh of braking … 1.3 kWh recovered of the 2.0 kWh spent": the ratio\'s own pair, within the law', () => {
+    const text = "The supplier says the bus's regenerative brakes 'give back 0.65 kWh for every kWh of braking', and quotes 1.3 kWh recovered of the 2.0 kWh spent in braking.";
+    const f = extractFigures(text);
+    expect(f.find((x) => x.text === '2.0 kWh')!.role).toBe('in');
+    expect(breaks(text)).toBe(false);
+  });
+  test('"13.5 kWh went into the battery … the house took 12.4 kWh back out of it": a store\'s round trip, within the law', () => {
+    const text = 'The app says 13.5 kWh went into the battery from the panels, and overnight the house took 12.4 kWh back out of it.';
+    const f = extractFigures(text);
+    expect(f.find((x) => x.text === '13.5 kWh')!.role).toBe('in');
+    expect(f.find((x) => x.text === '12.4 kWh')!.role).toBe('out');
+    const c = runClaimChecks(f, { text }).checks.find((x) => x.check === 'first-law')!;
+    expect(c.finding).toBe('consistent');
+    expect(out(c, 'over_unity')).toBeCloseTo(12.4 / 13.5, 9); // out / in (arithmetic)
+  });
+  test('a mini split "(heat mode)" making "over 3 times the heat it uses" is a heat pump, not over-unity', () => {
+    const text = 'My 12,000 BTU mini split (heat mode) pulls 1.1 kW from the wall when it is 47°F outside and I keep the living room at 70. So it is making over 3 times the heat it uses?';
+    expect(breaks(text)).toBe(false);
+  });
+  test("a surge's ten seconds is no run of a power worked out paragraphs later", () => {
+    const text = 'Evidence\nThe inverter can deliver a short surge of 3.6 kW for ten seconds when a motor starts.\n\nAssessment\nOur adviser calculated the power drawn from the battery in the test as 48 V times 40 A, or 1.92 kW, against 1.8 kW delivered.';
+    expect(breaks(text)).toBe(false);
+  });
+});

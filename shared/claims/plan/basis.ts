@@ -259,6 +259,21 @@ export interface Basis {
   temps: Figure[];
 }
 
+/**
+ * "gives back 0.65 kWh for every kWh of braking, … 1.3 kWh recovered of the 2.0 kWh spent": where the input
+ * taken is the one unit of a stated ratio, its output is the one said with it (in its sentence, before it),
+ * not a total said elsewhere.
+ */
+function ratioPartner(input: Figure | undefined, outs: Figure[], text: string): Figure | undefined {
+  if (!input?.derived || !/^one .+ in, from "for every /u.test(input.derived) || input.start === null || outs.length < 2) return undefined;
+  // (One such ratio in the text: "for every kWh of electricity … 3.2 kWh … a boiler gives 0.9 kWh per kWh of gas"
+  // sets two ratios side by side, and which is the device's is not said by where they stand.)
+  if ((text.match(/(?<!\p{L})(?:for[^\S\n]+every|for[^\S\n]+each|per)[^\S\n]+(?:single[^\S\n]+)?(?:one[^\S\n]+)?(?:kWh|kilowatt[- ]hours?|units?|joules?|J|Wh|watts?|W|kW)(?!\p{L})/giu) ?? []).length !== 1) return undefined;
+  const key = sentenceKey(text, input.start);
+  const said = outs.filter((f) => f.start !== null && f.start < input.start! && input.start! - f.start < 80 && sentenceKey(text, f.start) === key);
+  return said.length ? said[said.length - 1] : undefined;
+}
+
 export function basisFor(figures: Figure[], ctx: PlanContext): Basis {
   const s = readSignals(ctx);
   const plans: Plan[] = [];
@@ -271,9 +286,9 @@ export function basisFor(figures: Figure[], ctx: PlanContext): Basis {
   const [pIns, pOuts] = oneRow(...ledgerParagraphs(power, text), text);
   const [eIns, eOuts] = oneRow(...ledgerParagraphs(energy, text), text);
   const pIn = combine(pIns, 'in', text);
-  const pOut = combine(pOuts, 'out', text);
   const eIn = combine(eIns, 'in', text);
-  const eOut = combine(eOuts, 'out', text);
+  const pOut = ratioPartner(pIn, pOuts, text) ?? combine(pOuts, 'out', text);
+  const eOut = ratioPartner(eIn, eOuts, text) ?? combine(eOuts, 'out', text);
   const duration = largest(ofKind(figures, 'duration'));
   const speeds = ofKind(figures, 'speed');
   const temps = ofKind(figures, 'temperature');

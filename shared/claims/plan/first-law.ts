@@ -117,9 +117,10 @@ function auxiliaryInput(text: string, inF: Figure, outF: Figure): boolean {
   // nor a label's before a colon: "Gas to the engine over the year, by the analyser's count: 780 MWh".)
   // (Read back only to the clause's start: "6 kW of heat while drawing 150 W" names no fuel at its 150 W.)
   const label = /(?:^|[.!?\n])[^.!?\n:]{0,80}:[^\S\n]*$/u.exec(text.slice(Math.max(0, inF.start - 90), inF.start))?.[0] ?? '';
-  const clause = label || (text.slice(Math.max(0, inF.start - 25), inF.start).split(/[,;:]|(?<!\p{L})(?:and|while|but|whereas|with)(?!\p{L})/iu).pop() ?? '');
+  // (Not back into the output's own words: "2.1 kW of heat from a 45 W pump" names no heat at its 45 W.)
+  const clause = label || (text.slice(Math.max(0, inF.start - 25, outF.end !== null && outF.end <= inF.start ? outF.end : 0), inF.start).split(/[,;:]|(?<!\p{L})(?:and|while|but|whereas|with)(?!\p{L})/iu).pop() ?? '');
   // (Up to the clause's end after it: "pump electricity 0.4 kWh, heat to tank 12 kWh" names no heat at its 0.4 kWh.)
-  const atFigure = clause + text.slice(inF.start, inF.end) + text.slice(inF.end, inF.end + 12).split(/[,;]/u)[0];
+  const atFigure = (outF.end !== null && outF.end <= inF.start && inF.start - outF.end < 25 ? clause.replace(/^[^\S\n]*of[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth|hot[^\S\n]+water)(?!\p{L})/iu, ' ') : clause) + text.slice(inF.start, inF.end) + text.slice(inF.end, inF.end + 12).split(/[,;]/u)[0];
   return AUXILIARY_RE.test(local) && !FUEL_AT_RE.test(atFigure) && OUTSIDE_FLOW_RE.test(around + ' ' + sentenceAround(text, outF.start, outF.end ?? outF.start));
 }
 

@@ -18,7 +18,7 @@ const TERM_NOT_RUN_BEFORE_RE =
 const TERM_NOT_RUN_AFTER_RE = /^[^\S\n]*(?:[-–][^\S\n]*)?(?:warrant(?:y|ies)|guarantee|payback|(?:service|design|useful)[^\S\n]+life|lifetime|lifespan|between[^\S\n]+(?:over-?[^\S\n]*hauls?|services|servicing|maintenance|inspections|rebuilds|refills|recharges))(?!\p{L})/iu;
 
 /** Right before the time a rating's surge lasts: "surge for", "peak for about", "Peak: up to 7.5 kW for". */
-const SURGE_BEFORE_RE = /(?<!\p{L})(?:surges?|peaks?|bursts?|inrush|overloads?|motor[^\S\n]+starting)(?:[^\S\n]*:?[^\S\n]*(?:up[^\S\n]+to[^\S\n]+)?[\d.,]+[^\S\n]*[kMG]?W)?[^\S\n]+(?:is[^\S\n]+real[^\S\n]+)?(?:for|of|lasting|during)[^\S\n]+(?:(?:up[^\S\n]+to|about|around|roughly|some|only|just|at[^\S\n]+most)[^\S\n]+)?$/iu;
+const SURGE_BEFORE_RE = /(?<!\p{L})(?:surges?|peaks?|bursts?|inrush|overloads?|motor[^\S\n]+starting)(?:[^\S\n]*(?::|of|at)?[^\S\n]*(?:up[^\S\n]+to[^\S\n]+)?[\d.,]+[^\S\n]*[kMG]?W)?[^\S\n]+(?:is[^\S\n]+real[^\S\n]+)?(?:for|of|lasting|during)[^\S\n]+(?:(?:up[^\S\n]+to|about|around|roughly|some|only|just|at[^\S\n]+most)[^\S\n]+)?$/iu;
 /** A sentence that is a label of a term: "Duration: five months", "Project duration | 24 months". */
 const TERM_LABEL_RE = /^[\s•*-]*(?:(?:project|proposed|planned|total|expected)[^\S\n]+)?(?:duration|term|timescale|time ?frame|period)[^\S\n]*(?:[:|]|\.{2,})/iu;
 /** Words of a funder or an application. */
@@ -195,6 +195,12 @@ export function relateDurations(text: string, drafts: Draft[]): void {
       // "can deliver up to 5 kW at once": the most it can give, not what it gave over the run (the
       // least output, the end favourable to a claim, is not stated).
       if (p.role === 'out' && (p.hedge === 'up-to' || p.hedge === 'at-most' || p.hedge === 'less-than')) continue;
+      // (A time said with another power, in another paragraph: "a short surge of 3.6 kW for ten seconds" is no
+      // run of the "1.92 kW" an adviser works out three paragraphs further on.)
+      if (duration !== own && siOf(p) !== 0 && powers.some((q) => q !== p && ownOf(q) === duration)) {
+        const [a, b] = p.start < duration.start ? [p.end, duration.start] : [duration.end, p.start];
+        if (/\n[^\S\n]*\n/u.test(text.slice(a, b)) || b - a > 400) continue;
+      }
       const tRun = siOf(duration);
       if (!tRun) continue;
       // "emits 2 J in 10 ns … from a supply that draws 1.5 kW": a pulse's length is no run of a power said apart from it.

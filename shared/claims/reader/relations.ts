@@ -401,8 +401,25 @@ function storeHolds(text: string, drafts: Draft[]): void {
   }
 }
 
+/**
+ * "13.5 kWh went into the battery from the panels, and overnight the house took 12.4 kWh back out of it": a
+ * store's round trip said by where the energy went — into the store is what it took in, back out of it
+ * what it gave. Read only where the text says both.
+ */
+const INTO_STORE_AFTER_RE = /^[^\S\n]*(?:(?:of[^\S\n]+)?(?:energy|charge|electricity|power)[^\S\n]+)?(?:went|goes|go|going|was[^\S\n]+put|were[^\S\n]+put|put|flowed|flows|was[^\S\n]+fed|were[^\S\n]+fed)[^\S\n]+in(?:to)?[^\S\n]+(?:the|its|our|my|a)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:batter(?:y|ies)|packs?|stores?|banks?|powerwall|accumulators?|flywheels?)(?!\p{L})/iu;
+const OUT_OF_STORE_AFTER_RE = /^[^\S\n]*(?:back[^\S\n]+)?out[^\S\n]+of[^\S\n]+(?:it|them|the[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:batter(?:y|ies)|packs?|stores?|banks?|accumulators?|flywheels?))(?!\p{L})/iu;
+function storeRoundTrip(text: string, drafts: Draft[]): void {
+  const energies = drafts.filter((d) => d.kind === 'energy' && !d.derived);
+  const into = energies.filter((d) => INTO_STORE_AFTER_RE.test(text.slice(d.end, d.end + 60)));
+  const outOf = energies.filter((d) => OUT_OF_STORE_AFTER_RE.test(text.slice(d.end, d.end + 40)));
+  if (into.length !== 1 || outOf.length !== 1 || into[0] === outOf[0]) return;
+  into[0].role = 'in';
+  outOf[0].role = 'out';
+}
+
 export function relateFigures(text: string, drafts: Draft[]): void {
   storeHolds(text, drafts);
+  storeRoundTrip(text, drafts);
   loopParts(text, drafts);
   inputForEvery(text, drafts);
   quantumRestated(text, drafts);
@@ -488,7 +505,18 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // The text states that power itself already, in the same sentence (not a rating in a title: "a 500 W
     // converter" beside "an input of 10.5 A at 48 V").
     const pairSentence = sentenceAround(text, cur.start, cur.end);
-    if (drafts.some((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= 0.01 * i * v && sentenceAround(text, d.start, d.end) === pairSentence)) continue;
+    const same = drafts.find((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= 0.01 * i * v && sentenceAround(text, d.start, d.end) === pairSentence);
+    if (same) {
+      // ("rises on 30 kV at 1.1 mA, just 33 W and no fuel at all": the power said right after the pair is
+      // the pair's, what the device is run on, where no words give it a side of its own.)
+      const pairEnd = Math.max(cur.end, volt.end);
+      if (same.role === null && same.start >= pairEnd && /^[^\S\n]*(?:,|\(|—|–|-)?[^\S\n]*(?:(?:so|i\.e\.|that['’]s|that[^\S\n]+is|or|just|only|about|roughly|some|which[^\S\n]+is)[^\S\n]+)*$/iu.test(text.slice(pairEnd, same.start))) {
+        const first = cur.start < volt.start ? cur : volt;
+        same.role = roleFor(text, 'power', first.start, pairEnd, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? 'in';
+        if (same.role === 'excess' || same.role === 'aside') same.role = null;
+      }
+      continue;
+    }
     // A three-phase supply ("400 V 3~, 10.6 A", "400 V three-phase, 19 A running current"): its line voltage
     // and line current give at most √3 × V × I (the power factor is at most 1). Not where the text works
     // out the power itself in that sentence ("≈ √3 × 400 × 28 × 0.86 = 16.7 kW").

@@ -17,10 +17,12 @@ export const HEAT_PUMP_WORDS = [
   // (Not a heat pump the device is said to beat: "beating every heat pump", "better than any heat pump".)
   '(?<!(?<![\\w-])(?:every|any|all|than|unlike|beat|beats|beating|outperforms?|outperforming|outdoes|outdoing|rivals?|rivall?ing|no|not|without|nor|is it|isn\x27t|isn\u2019t|nothing like|unlike|not like|instead of)\\s+(?:(?:a|an|the|any|every|all|most|modern|best)\\s+)?(?:[\\w-]+\\s+)?)heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
   'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'ground[- ]loops?',
+  // A reversible air conditioner or mini split said to be heating: "My 12,000 BTU mini split (heat mode)".
+  '(?:mini[- ]?splits?|split (?:units?|systems?)|air[- ]conditioners?|AC units?|aircons?)(?: [\\w,-]+){0,2}? ?\\(?(?:in |on |set to )?heat(?:ing)? mode\\)?',
   // A refrigerating dehumidifier gives out its compressor's work and the heat of the water it condenses.
   'dehumidifiers?', 'heat[- ]pump (?:dryers?|driers?|water heaters?|tumble dryers?)',
   // A ductless split air conditioner, in the trade, is a heat pump that runs either way.
-  'mini-?splits?', 'ductless (?:splits?|units?|systems?|heads?)',
+  'mini[- ]?splits?', 'ductless (?:splits?|units?|systems?|heads?)',
   // A machine that moves heat, said so: "takes the heat out of the milk as it cools it and puts it into the wash water".
   '(?:takes?|taking|took|draws?|drawing|pulls?|pulling|extracts?|extracting|removes?|removing|recovers?|recovering) (?:the )?(?:waste )?heat (?:out of|from) (?:the |its )?[\\w-]+(?: [\\w-]+){0,8}? (?:and )?(?:puts?|putting|pumps?|pumping|moves?|moving|delivers?|delivering|dumps?|dumping|transfers?|transferring|gives?|giving) it (?:in)?to',
   // A log's shorthand: "air/water HP prototype", "brine/water HP", "A/W HP", "HP-12 spot reading" beside a COP.
@@ -31,7 +33,7 @@ export const HEAT_PUMP_WORDS = [
 /** Words that make a percentage a cooling COP ("300 % efficient" for an air conditioner). */
 export const COOLING_MACHINE_WORDS = [
   // (Not a heat exchanger called a cooler: "lube-oil cooler", "charge-air cooler", "water cooler" of a circuit.)
-  '(?<!(?:oil|lube|lube-oil|lubricating oil|air|charge-air|charge air|water|fluid|EGR|gas|liquid|process|coolant|jacket|exhaust|steam|condensate|hydraulic|transformer)[- ])coolers?', 'cold (?:room|store|storage)s?', 'cool ?box(?:es)?', 'cooler box(?:es)?', 'ice makers?', 'refrigerators?', 'refrigeration (?:units?|systems?|plants?|machines?)', '(?:refrigeration |freezer )?condensing units?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini-?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?', '(?:window|portable|room|wall|ducted|rooftop|car|central) (?:AC|A/C)', 'A/C', 'air ?cons?', 'aircons?'];
+  '(?<!(?:oil|lube|lube-oil|lubricating oil|air|charge-air|charge air|water|fluid|EGR|gas|liquid|process|coolant|jacket|exhaust|steam|condensate|hydraulic|transformer)[- ])coolers?', 'cold (?:room|store|storage)s?', 'cool ?box(?:es)?', 'cooler box(?:es)?', 'ice makers?', 'refrigerators?', 'refrigeration (?:units?|systems?|plants?|machines?)', '(?:refrigeration |freezer )?condensing units?', 'air[- ]condition\\w*', 'chillers?', 'fridges?', 'freezers?', 'cryocoolers?', 'heat pumps? in cooling', 'mini[- ]?splits?', 'split (?:units?|systems?|air[- ]conditioners?)', 'AC units?', '(?:window|portable|room|wall|ducted|rooftop|car|central) (?:AC|A/C)', 'A/C', 'air ?cons?', 'aircons?'];
 
 /** Words that make a temperature a difference: before ("ΔT of 20 K") or after ("a 20 K difference"). */
 export const DIFFERENCE_BEFORE = [
