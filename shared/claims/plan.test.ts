@@ -2049,4 +2049,25 @@ describe('claims read from this session\'s tuning parts 104–105 (invented test
     const text = 'Evidence\nThe inverter can deliver a short surge of 3.6 kW for ten seconds when a motor starts.\n\nAssessment\nOur adviser calculated the power drawn from the battery in the test as 48 V times 40 A, or 1.92 kW, against 1.8 kW delivered.';
     expect(breaks(text)).toBe(false);
   });
+  test('a heat pump "will do between 300 and 350 %" or whose "monitor says 510 %" is read as a heating COP; prices and changes are not', () => {
+    const text = "Our new ground source heat pump's monitor says 510% this week. The ground loop comes in at 10 °C and the floor heating runs at 30 °C.";
+    const cop = extractFigures(text).find((x) => x.kind === 'cop')!;
+    expect([cop.role, cop.si]).toEqual(['heating', 5.1]);
+    // Carnot COP for 30 °C from 10 °C: 303.15 / 20 = 15.16 (Carnot's heating COP, Th/(Th − Tc)); 5.1 is within it.
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot')!.finding).toBe('consistent');
+    expect(extractFigures('Since the heat pump went in, our gas bills are down and electricity prices rose 150% this year.').some((x) => x.kind === 'cop')).toBe(false);
+    expect(extractFigures('The heat pump covers 120% of our heating demand on mild days.').some((x) => x.kind === 'cop')).toBe(false);
+  });
+  test('"with no battery and no plug", "nothing drives it but gravity", "turns all on its own": nothing goes in', () => {
+    for (const text of [
+      'Our module powered a 500 watt heater for a 72-hour run with no battery and no plug.',
+      'My wheel turns all on its own and its dynamo gave about eighty watts, steady, for three days. Nothing drives it but gravity.',
+    ]) {
+      expect(extractFigures(text).some((x) => x.kind === 'power' && x.role === 'in' && x.si === 0)).toBe(true);
+      expect(breaks(text)).toBe(true);
+    }
+    // A lamp on sunlight "with no battery and no plug" harvests light: not self-running.
+    const solar = 'The solar garden light runs with no battery and no plug, giving 0.5 W while the sun is on its panel.';
+    expect(breaks(solar)).toBe(false);
+  });
 });

@@ -211,7 +211,7 @@ export function readPercent(text: string, start: number, end: number, floor: num
   // ("'How much of the heat becomes electricity?' About 11 %.": the answer to a question of efficiency.)
   const answered = /(?:efficien\w*|how[^\S\n]+much[^\S\n]+of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:heat|fuel|energy|light|sunlight|power|input)(?!\p{L})[^?\n]{0,60})\?[^\S\n]*['’"”]?[^\S\n]*\n+[^\S\n]*(?:(?:A|Answer)[^\S\n]*[:.)][^\S\n]*)?(?:(?:yes|no|well|so)[,.!]?[^\S\n]+)?(?:(?:about|around|roughly|some|only|just|nearly|almost|approximately|~|≈)[^\S\n]*)?$/iu.test(text.slice(Math.max(floor, start - 240), start));
   const efficiency = after || engineSaid || fromTo || answered || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1].replace(/,[^,\n]{3,140},/u, ' '))) || worked;
-  if (!efficiency) return null;
+  if (!efficiency) return bareHeatPumpPercent(text, start, end, num);
   // ("95 % AFUE", "AFUE: 96 %": an annual fuel utilisation efficiency is a fuel burner's by definition,
   // whatever heat pump the text also names.)
   if (/^[^\S\n]*[\p{Pi}\p{Pf}"']?[^\S\n]*AFUE(?!\p{L})/u.test(text.slice(end, end + 12)) || /(?<!\p{L})AFUE[^\S\n]*(?:\([^)\n]{0,20}\))?[^\S\n]*(?:[:=]|of|is|was|rating(?:[^\S\n]+of)?)?[^\S\n]*$/u.test(before)) return { kind: 'efficiency', factor: 1, unit: '%' };
@@ -268,6 +268,27 @@ export function readPercent(text: string, start: number, end: number, floor: num
     return { kind: 'cop', role: 'cooling', factor: 0.01, unit: '', assumption: 'A refrigerator or air conditioner said to be more than 100 % efficient: read as a cooling COP (heat drawn out over work put in).' };
   }
   return { kind: 'efficiency', factor: 1, unit: '%' };
+}
+
+/** After a percentage: what makes it no COP — a share, a change, a price ("150 % of the cost", "20 % cheaper"). */
+const NOT_A_COP_AFTER_RE =
+  /^[^\S\n]*(?:\?|of|more|less|higher|lower|cheaper|dearer|better|worse|increase|rise|jump|growth|gain|saving|savings|reduction|return|ROI|up|down|faster|slower|bigger|larger|smaller|greater|humidity|RH|APR|interest|margin|markup|mark-up|over[^\S\n]+(?:the|last|budget))(?!\p{L})/iu;
+/** Before a percentage: a change, a price, a rate of money ("up by 120 %", "prices rose 150 %"). */
+const NOT_A_COP_BEFORE_RE =
+  /(?<!\p{L})(?:by|increase[sd]?(?:[^\S\n]+of)?|rise[sn]?(?:[^\S\n]+of)?|rose|grew|jumped|fell|dropped|cut|saving(?:[^\S\n]+of)?|up|down|costs?|prices?|tax|VAT|return|ROI|interest|margin|tariff|bills?|over[^\S\n]+budget)[^\S\n]*(?:(?:about|around|roughly|some|nearly|over|almost)[^\S\n]+)?$/iu;
+
+/**
+ * "The installer reckons it'll do somewhere between 300 and 350 % over the winter", "our ground source heat
+ * pump's monitor says 510 % this week": a percentage above 100 % said bare, with no word of efficiency, in a
+ * text on a heat pump (and no other machine that moves heat) is what heat pumps are quoted by — a heating COP.
+ */
+function bareHeatPumpPercent(text: string, start: number, end: number, num?: string): PercentReading {
+  const value = num !== undefined ? Number(num) : Number((/^[\d.,]+/.exec(text.slice(start, end))?.[0] ?? '').replace(',', '.'));
+  if (!(value > 100 && value <= 1000)) return null;
+  if (!NAMED_HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text.replace(HEAT_PUMP_RE, ' ')) || BURNER_RE.test(sentenceAround(text, start, end))) return null;
+  if (new RegExp(NO_HEAT_PUMP_PARTS_RE.source, 'iu').test(text)) return null;
+  if (NOT_A_COP_AFTER_RE.test(text.slice(end, end + 25)) || NOT_A_COP_BEFORE_RE.test(text.slice(Math.max(0, start - 30), start))) return null;
+  return { kind: 'cop', role: 'heating', factor: 0.01, unit: '', assumption: 'A percentage above 100 % said of a heat pump with no word of what it measures: read as a heating COP (heat delivered over work put in).' };
 }
 
 /** A model's designation, capital letters with digits ("S2", "GS-12", "Mk3"), with its digits made letters. */

@@ -136,7 +136,10 @@ export const SELF_RUNNING_WORDS = [
   'no connection to (?:the )?(?:grid|mains|supply|power)', 'no (?:external |outside )?(?:supply|power supply|power source|source|battery|mains) (?:is |was )?(?:connected|attached|plugged in|hooked up)', '(?:with )?no (?:mains|grid|wall|external power|outside power) (?:connection|hook-?up|supply|feed)', 'not connected to (?:the )?(?:grid|mains|any (?:supply|source))', 'zero input', 'runs? on its own (?:output|power)', 'unplugged', 'disconnected from the (?:mains|supply|grid|battery)',
   'feeds? (?:its own )?output back', '(?:takes|draws|uses|consumes|needs) no (?:power|energy|input|current|electricity|fuel)(?: at all)?',
   'with nothing (?:plugged in|connected|attached)(?: to drive it)?', '(?:with )?nothing (?:else )?(?:supplied|fed|put in|added|given) to it', 'nothing (?:plugged in|connected) to (?:drive|power|run) it',
-  '(?:with )?nothing (?:(?:was|is|were|else)[^\\S\\n]+)?(?:driving|powering|feeding|turning|running) it', '(?:turns|spins|runs|keeps going|keeps turning|goes|turning|spinning) (?:on )?by itself',
+  '(?:with )?nothing (?:(?:was|is|were|else)[^\\S\\n]+)?(?:driving|powering|feeding|turning|running) it', 'nothing (?:else )?(?:drives|drove|powers|powered|feeds|fed|turns|turned|runs|ran) it',
+  // "with no battery and no plug", "no fuel, no wires": two or more supplies said to be absent.
+  '(?:with )?no (?:battery|batteries|plug|wires?|cables?|mains|fuel|supply|power supply|grid connection)(?:,? (?:and |or |nor )?no (?:battery|batteries|plug|wires?|cables?|mains|fuel|supply|power supply|grid connection))+',
+  '(?:turns|spins|runs|goes) (?:all |completely |entirely )?on (?:its|their) own', '(?:turns|spins|runs|keeps going|keeps turning|goes|turning|spinning) (?:on )?by itself',
   '(?:battery|supply|mains|power|source) (?:is |was |being )?(?:disconnected|taken out|removed|unplugged)', '(?:turning|running|spinning|going) on its own', '(?:battery|supply) (?:taken out|removed)',
   // "Nothing enters or leaves the box", "nothing goes in": a sealed box said to take in nothing.
   'nothing (?:enters|goes in(?:to it)?|comes in|is fed in|gets in|enters or leaves|goes in or (?:out|comes out))', 'nothing connected to it', 'with nothing connected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
