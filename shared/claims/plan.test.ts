@@ -2070,4 +2070,20 @@ describe('claims read from this session\'s tuning parts 104–105 (invented test
     const solar = 'The solar garden light runs with no battery and no plug, giving 0.5 W while the sun is on its panel.';
     expect(breaks(solar)).toBe(false);
   });
+  test('an engine that "runs between exhaust-gas heat at 180 °C and cooling water at 25 °C" has that heat as its hot side', () => {
+    const text = 'Our free-piston engine runs between exhaust-gas heat at 180 °C and cooling water at 25 °C and turns 52 % of the heat it takes in into shaft work.';
+    const c = runClaimChecks(extractFigures(text), { text }).checks.find((x) => x.check === 'carnot')!;
+    expect(c.finding).toBe('breaks');
+    // η_max = 1 − 298.15/453.15 = 0.342 (Carnot; °C + 273.15 = K, NIST SP 811 §4.2.1.1); 0.52 / 0.342 = 1.52.
+    expect(out(c, 'eta_ratio')).toBeCloseTo(0.52 / (1 - 298.15 / 453.15), 9);
+    // A car engine's coolant temperature is still no hot side.
+    const car = 'The car engine is 38 % efficient; its coolant runs at 90 °C and the air outside is 15 °C.';
+    expect(runClaimChecks(extractFigures(car), { text: car }).checks.some((x) => x.finding === 'breaks')).toBe(false);
+  });
+  test('"η = 0.62 for the cycle operating between T_h = 5.5 × 10² K and T_c = 3.0 × 10² K" is a heat engine\'s claim', () => {
+    const text = 'The revised manuscript still gives η = 0.62 for the cycle operating between T_h = 5.5 × 10² K and T_c = 3.0 × 10² K.';
+    const c = runClaimChecks(extractFigures(text), { text }).checks.find((x) => x.check === 'carnot')!;
+    expect(c.finding).toBe('breaks');
+    expect(out(c, 'eta_ratio')).toBeCloseTo(0.62 / (1 - 300 / 550), 9); // η / (1 − Tc/Th) (Carnot)
+  });
 });

@@ -144,7 +144,11 @@ function engineGuess(b: Basis, hot: Figure): string | undefined {
   if (!b.s.heatEngine && !ofKind(b.figures, 'temperature-difference').length) {
     return 'confirmation that the device turns heat into work between these temperatures: the text names no heat engine, and a machine that turns electricity or fuel into heat, light or motion (a boiler, a heating network, a lamp, a motor) is not bounded by Carnot';
   }
-  if (hot.start !== null && combustionEngineOwn(b.text) && NOT_THE_HOT_GASES_RE.test(b.text.slice(sentenceKey(b.text, hot.start), hot.start))) {
+  // (Not where the engine is said to run on that heat: "our free-piston engine runs between exhaust-gas heat at
+  // 180 °C and cooling water at 25 °C" recovers exhaust heat, its hot side.)
+  const lead = hot.start !== null ? b.text.slice(sentenceKey(b.text, hot.start), hot.start) : '';
+  const runsOnIt = /(?<!\p{L})(?:runs?|running|ran|works?|working|operates?|operating|driven|powered|fed)[^\S\n]+(?:between|on|from|off|by|with)[^.;!?\n]{0,30}(?:exhaust|flue|stack|waste)[^.;!?\n]{0,30}$|(?<!\p{L})(?:recover\w*|harvest\w*|waste[- ]heat)(?!\p{L})[^.;!?\n]{0,40}$/iu.test(lead);
+  if (hot.start !== null && !runsOnIt && combustionEngineOwn(b.text) && NOT_THE_HOT_GASES_RE.test(lead)) {
     return `the temperature of the burning gas the engine works from: ${hot.display} (“${hot.text}”) is a temperature of its cooling, oil or exhaust, not its hot side`;
   }
   return undefined;

@@ -56,7 +56,9 @@ export const ISP_WORDS = ['I_?sp', 'Isp', 'ISP', 'I sp', 'specific impulses?', '
 /** Words that say a device is a heat engine (so an efficiency is a Carnot claim). */
 export const HEAT_ENGINE_WORDS = [
   'heat motors?', 'thermoacoustic', 'of the heat', 'of the heat (?:it|that)', 'heat (?:it|that it) (?:draws|takes|absorbs|collects|gathers)', 'heat engines?', 'engines?', 'turbines?', 'Stirling\\w*', '\\p{L}+motoren?', 'cooling water', 'condenser', 'heat sink', 'hot side', 'cold side', 'hot (?:head|end|plate|face|junction|source)s?', 'cold (?:end|plate|face|junction|sink)s?', 'reservoirs?',
-  'source temperature', 'thermoelectric\\w*', 'thermo-?electric\\w*', 'thermionic', 'thermophotovoltaic\\w*', 'TPV', 'Stirling',
+  'source temperature', 'thermoelectric\\w*',
+  // "η = 0.62 for the cycle operating between T_h = 550 K and T_c = 300 K": a cycle run between two temperatures.
+  '(?:cycles?|engines?|machines?) (?:operating|running|working|that (?:operates|runs|works)) between', 'T_\\{?h(?:ot)?\\}?', 'T_\\{?c(?:old)?\\}?', 'thermo-?electric\\w*', 'thermionic', 'thermophotovoltaic\\w*', 'TPV', 'Stirling',
   'Rankine', 'ORC', 'steam', 'thermal converters?', 'heat converters?', 'heat to (?:work|power|electricity)', 'converts? (?:\\w+ )?heat', 'waste[- ]heat', 'thermal (?:to|into) (?:electric|mechanical)',
   'Seebeck', 'Peltier', 'generators? running on heat', 'heat-driven', 'thermal generator', 'TEG', 'heat recovery', 'power plant', 'power station', 'combustion', 'binary(?:[- ]cycle)? (?:power )?plants?', 'geothermal (?:power )?plants?', 'thermal efficiency', 'Carnot efficiency',
   'diesel', 'petrol', 'gasoline', 'ambient heat', '(?:harvests?|draws?|takes?|extracts?) (?:the )?(?:warmth|heat) (?:of|from)', 'warmth of', 'of (?:the |its )?(?:absorbed |incoming |collected |input )?heat(?: [\\w-]+){0,4}? (?:as|into|to) (?:useful )?(?:work|electricity|power|motion)', '(?:dumps?|rejects?|sheds?|throws? away) (?:the rest|what is left|(?:its |the )?(?:waste )?heat)', 'heat (?:is )?rejected', 'heat of the (?:air|sea|room|surroundings)', 'temperature difference', 'thermal gradient',
