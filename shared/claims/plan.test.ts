@@ -2086,4 +2086,10 @@ describe('claims read from this session\'s tuning parts 104–105 (invented test
     expect(c.finding).toBe('breaks');
     expect(out(c, 'eta_ratio')).toBeCloseTo(0.62 / (1 - 300 / 550), 9); // η / (1 − Tc/Th) (Carnot)
   });
+  test('"we put 10 kWh into the battery … took 9.2 kWh back out of it": the store gave back less than it took', () => {
+    for (const text of ['We put 10 kWh into the battery at night and took 9.2 kWh back out of it in the evening.', 'My panel array put 14 kWh into the home battery today, and the house took 12.9 kWh back out of it overnight.']) {
+      const c = runClaimChecks(extractFigures(text), { text }).checks.find((x) => x.check === 'first-law')!;
+      expect(c.finding).toBe('consistent');
+    }
+  });
 });

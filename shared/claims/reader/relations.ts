@@ -402,11 +402,12 @@ function storeHolds(text: string, drafts: Draft[]): void {
 }
 
 /**
- * "13.5 kWh went into the battery from the panels, and overnight the house took 12.4 kWh back out of it": a
+ * "13.5 kWh went into the battery from the panels, and overnight the house took 12.4 kWh back out of it", "we
+ * put 10 kWh into the battery … took 9.2 kWh back out of it": a
  * store's round trip said by where the energy went — into the store is what it took in, back out of it
  * what it gave. Read only where the text says both.
  */
-const INTO_STORE_AFTER_RE = /^[^\S\n]*(?:(?:of[^\S\n]+)?(?:energy|charge|electricity|power)[^\S\n]+)?(?:went|goes|go|going|was[^\S\n]+put|were[^\S\n]+put|put|flowed|flows|was[^\S\n]+fed|were[^\S\n]+fed)[^\S\n]+in(?:to)?[^\S\n]+(?:the|its|our|my|a)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:batter(?:y|ies)|packs?|stores?|banks?|powerwall|accumulators?|flywheels?)(?!\p{L})/iu;
+const INTO_STORE_AFTER_RE = /^[^\S\n]*(?:(?:of[^\S\n]+)?(?:energy|charge|electricity|power)[^\S\n]+)?(?:(?:went|goes|go|going|was[^\S\n]+put|were[^\S\n]+put|put|flowed|flows|was[^\S\n]+fed|were[^\S\n]+fed)[^\S\n]+)?in(?:to)?[^\S\n]+(?:the|its|our|my|a)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:batter(?:y|ies)|packs?|stores?|banks?|powerwall|accumulators?|flywheels?)(?!\p{L})/iu;
 const OUT_OF_STORE_AFTER_RE = /^[^\S\n]*(?:back[^\S\n]+)?out[^\S\n]+of[^\S\n]+(?:it|them|the[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:batter(?:y|ies)|packs?|stores?|banks?|accumulators?|flywheels?))(?!\p{L})/iu;
 function storeRoundTrip(text: string, drafts: Draft[]): void {
   const energies = drafts.filter((d) => d.kind === 'energy' && !d.derived);
