@@ -480,3 +480,10 @@ test('"nothing was driving it but its own weights" says the wheel takes nothing 
   // A wheel a motor drives takes what the motor gives.
   expect(extractFigures('The wheel put out half a horsepower for six hours while a 1 kW motor was driving it.').some((x) => x.role === 'in' && x.si === 0)).toBe(false);
 });
+
+test('"fully fuelled, the storable-propellant stage weighs 2,300 kg" is the stage\'s wet mass, not its propellant (invented test data)', () => {
+  const f = extractFigures('Fully fuelled, the storable-propellant stage weighs 2,300 kg and, firing at 320 s Isp, will deliver 6 km/s.');
+  expect(f.find((x) => x.text === '2,300 kg')!.role).toBe('wet');
+  // Propellant said as such stays propellant.
+  expect(extractFigures('The stage carries 1,900 kg of propellant.').find((x) => x.text === '1,900 kg')!.role).toBe('propellant');
+});

@@ -236,7 +236,8 @@ export const MASS_ROLES: readonly RoleWords[] = [
   {
     role: 'propellant',
     before: [
-      'propellants?', 'fuel', 'reaction mass', 'propellant (?:mass|load|loading)', 'mass of (?:propellant|fuel|reaction mass)', 'fuel (?:mass|load)', 'propellant[:=]', 'reaction mass (?:of|is)',
+      // (Not a kind of stage or engine: "the storable-propellant stage weighs 2,300 kg" is the stage's whole mass.)
+      'propellants?(?! (?:stages?|engines?|tanks?|rockets?|thrusters?|motors?|systems?|feed|lines?|valves?)(?!\\p{L}))', 'fuel', 'reaction mass', 'propellant (?:mass|load|loading)', 'mass of (?:propellant|fuel|reaction mass)', 'fuel (?:mass|load)', 'propellant[:=]', 'reaction mass (?:of|is)',
       '(?:carries|carrying|loaded with|tanks? (?:hold|holds|of)|burns?|burning|expels?|expelling)',
     ],
     after: [
