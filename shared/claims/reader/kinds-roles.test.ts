@@ -487,3 +487,8 @@ test('"fully fuelled, the storable-propellant stage weighs 2,300 kg" is the stag
   // Propellant said as such stays propellant.
   expect(extractFigures('The stage carries 1,900 kg of propellant.').find((x) => x.text === '1,900 kg')!.role).toBe('propellant');
 });
+
+test('"converting 4.5 % of the heat it passes into electricity — 12 W" is the converter\'s output (invented test data)', () => {
+  const f = extractFigures('The stove-top thermoelectric generator runs with its hot plate at 300 °C and its fins at 60 °C, converting 4.5 % of the heat it passes into electricity — 12 W, enough to charge phones.');
+  expect(f.find((x) => x.text === '12 W')!.role).toBe('out');
+});

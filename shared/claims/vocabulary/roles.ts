@@ -110,6 +110,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     before: [
       // "On its trial it developed 412 indicated horse-power", "indicated 140 H.P. on test": what an engine develops is its output.
       'develop(?:s|ed|ing)?', 'indicated(?= *(?:about |some |roughly |over |nearly )?$)',
+      // "converting 4.5 % of the heat it passes into electricity — 12 W": the electricity a converter makes, said right after.
+      '(?:into|to|as) (?:electricity|electrical power|electric power|usable power)(?: *[—–:]| *,| +-)(?= *(?:about |some |roughly |around |nearly |just |only )?$)',
       // "the battery sees somewhere between 300 and 400 W": what reaches the store at the end of the chain.
       '(?:the |its )?(?:batter(?:y|ies)|bank|pack) (?:sees|saw)(?: (?:somewhere|about|around|roughly|only|just))?(?: between)?',
       // "… take out 12 V at 3 A", "you get back 1.3 kWh": what a reader is told to take from the device.
