@@ -2092,4 +2092,15 @@ describe('claims read from this session\'s tuning parts 104–105 (invented test
       expect(c.finding).toBe('consistent');
     }
   });
+  test('heat out beyond the electricity in, with the temperature outside given ("It was 38°F outside"), is a heat pump\'s COP, not a first-law breach (invented test data)', () => {
+    const text = 'The installer says our new system puts out 30,000 BTU/h of heat while pulling about 2.6 kW from the panel. It was 38°F outside and the supply air was 100°F. How is that more heat than electricity?';
+    const r = runClaimChecks(extractFigures(text), { text });
+    expect(r.checks.some((x) => x.finding === 'breaks')).toBe(false);
+    const c = r.checks.find((x) => x.check === 'carnot')!;
+    expect(c.finding).toBe('consistent');
+    // Heating COP = 30,000 BTU/h × 0.29307107 W/(BTU/h) / 2,600 W (NIST SP 811 B.8); Carnot bound Th/(Th − Tc), °F → K (NIST SP 811 §4.2.1.1).
+    const th = (100 - 32) * 5 / 9 + 273.15;
+    const tc = (38 - 32) * 5 / 9 + 273.15;
+    expect(out(c, 'cop_heating_ratio')).toBeCloseTo((30000 * 0.29307107) / 2600 / (th / (th - tc)), 4);
+  });
 });

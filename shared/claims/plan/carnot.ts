@@ -9,7 +9,7 @@ import { at, heatMoverCop, need, ofKind, outOverIn, paragraphKey, sentenceKey, u
 import { paragraphOfAnotherMachine, sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE, heatEngineBeyondSink } from './signals';
 
-const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|ground (?:at|temperature|source)|heat (?:drawn |taken |pulled )?from the (?:ground|earth|soil|outdoor air|outside air|river|lake)(?!')|brine|well water|ground ?water|borehole|source temperature|outdoors?)(?!\p{L})/iu;
+const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|ground (?:at|temperature|source)|heat (?:drawn |taken |pulled )?from the (?:ground|earth|soil|outdoor air|outside air|river|lake)(?!')|brine|well water|ground ?water|borehole|source temperature|outdoors?|(?<=\d[^\S\n]*(?:°[^\S\n]*[CFK]?|degrees?(?:[^\S\n]+(?:C|F|Celsius|Fahrenheit|centigrade))?|[CFK])[^\S\n]+)outside)(?!\p{L})/iu;
 const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;

@@ -492,3 +492,23 @@ test('"converting 4.5 % of the heat it passes into electricity — 12 W" is the 
   const f = extractFigures('The stove-top thermoelectric generator runs with its hot plate at 300 °C and its fins at 60 °C, converting 4.5 % of the heat it passes into electricity — 12 W, enough to charge phones.');
   expect(f.find((x) => x.text === '12 W')!.role).toBe('out');
 });
+
+test('"9 kW of cooling", "16 kW nominal heating output": what a cooler or a heat pump gives (invented test data)', () => {
+  expect(extractFigures('Model C-9: 9 kW of cooling, COP 3.4 with 35 °C outdoors and the hall at 26 °C.').find((x) => x.text === '9 kW')!.role).toBe('out');
+  expect(extractFigures('The plant room has an air-to-water unit, 14 kW nominal heating output.').find((x) => x.text === '14 kW')!.role).toBe('out');
+  // Cooling water and a cooling fan are no cooling given.
+  expect(extractFigures('The rig needs 2 kW of cooling water flow.').find((x) => x.text === '2 kW')!.role).not.toBe('out');
+});
+
+test('"puts 2.0e-3 J of work into the piezo stack … 5.0e-4 J of it reaches the sensor": in, then the part that comes out (invented test data)', () => {
+  const f = extractFigures('Every footstep puts 2.0e-3 J of mechanical work into the piezo stack, and 5.0e-4 J of it reaches the sensor node.');
+  expect(f.find((x) => x.text === '2.0e-3 J')!.role).toBe('in');
+  expect(f.find((x) => x.text === '5.0e-4 J')!.role).toBe('out');
+});
+
+test('a quantum efficiency asked about again ("how was the 140 % measured", beside a question on the power conversion efficiency) stays a quantum efficiency (invented test data)', () => {
+  const f = extractFigures('The group reports "140 % external quantum efficiency" from its singlet-fission photodiode: more than one electron per photon. We would ask: what is the power conversion efficiency, and how was the 140 % measured?');
+  expect(f.filter((x) => x.text === '140 %').map((x) => x.kind)).toEqual(['quantum-efficiency', 'quantum-efficiency']);
+  // A power conversion efficiency stated above 100 % is still an energy claim.
+  expect(extractFigures('The cell counts two electrons per photon, and its power conversion efficiency is 130 %.').find((x) => x.text === '130 %')!.kind).toBe('efficiency');
+});

@@ -168,7 +168,10 @@ export function readPercent(text: string, start: number, end: number, floor: num
   }
   QE_AFTER_RE.lastIndex = end;
   const qe = QE_BEFORE_RE.exec(before);
-  if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]))) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };
+  // ("two electrons per photon, and its power conversion efficiency is 130 %": another efficiency named between
+  // the particle count and the figure is the figure's.)
+  const otherEfficiency = qe !== null && /(?<!\p{L})(?:power|energy|wall-?plug|conversion|electrical|luminous|overall|system)[- ](?:conversion[- ])?efficiency(?!\p{L})/iu.test(qe[1]);
+  if (QE_AFTER_RE.test(text) || (qe && !EFFICIENCY_CHANGE_RE.test(qe[1]) && !otherEfficiency)) return { kind: 'quantum-efficiency', factor: 0.01, unit: '' };
   PERCENT_OF_INPUT_RE.lastIndex = end;
   if (PERCENT_OF_INPUT_RE.test(text) && !QE_BEFORE_RE.test(before)) {
     // "A heat-pump dryer gives 250 % of its electrical input as heat": a heating COP.

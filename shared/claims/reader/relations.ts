@@ -141,7 +141,7 @@ const COUNTS_PARTICLES_RE = new RegExp(
   'iu',
 );
 /** A power conversion efficiency named as such: a figure of energy, whatever else the text counts. */
-const POWER_EFFICIENCY_RE = /(?<!\p{L})(?:power[- ]conversion|wall-?plug|energy[- ]conversion)[^\S\n]+efficiency[^.;!?\n]{0,30}?(\d+(?:\.\d+)?)[^\S\n]*%/iu;
+const POWER_EFFICIENCY_RE = /(?<!\p{L})(?:power[- ]conversion|wall-?plug|energy[- ]conversion)[^\S\n]+efficiency[^.;,!?\n]{0,30}?(\d+(?:\.\d+)?)[^\S\n]*%/iu;
 
 /**
  * "A solar cell with 130 % efficiency … the figure is an external quantum efficiency: 1.3 electrons for

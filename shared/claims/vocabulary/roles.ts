@@ -103,7 +103,9 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       // "the array feeds 8.2 A at 36 V into the charge controller": what goes into a converter is its input.
       'into (?:the|its|a|an) (?:[\\w\\x27\\u2019-]+ )?(?:controllers?|inverters?|converters?|regulators?|MPPTs?|chargers?|rectifiers?|electroly[sz]ers?)',
       // "a rider puts about 120 W into the cranks": what the rider gives the pedals is the machine's input.
-      'into (?:the|its|their|his|her) (?:cranks?|pedals?|treadles?)'],
+      'into (?:the|its|their|his|her) (?:cranks?|pedals?|treadles?)',
+      // "each press puts 6.0e-4 J of mechanical work into the piezo stack": what is put into a harvester or a transducer is what it takes.
+      '(?:of (?:[\\w-]+ )?(?:work|energy|power) )?into (?:the|its|a|an) (?:[\\w-]+ )?(?:stacks?|transducers?|harvesters?|piezos?|piezoelectric (?:elements?|discs?|crystals?))'],
   },
   {
     role: 'out',
@@ -173,7 +175,11 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       'on (?:the|its) (?:shaft|output(?: terminals)?|load)', 'at (?:the|its) (?:output )?terminals', 'at the (?:crank|output |drive |propeller |main )?shaft', 'at the (?:wheels?|axles?|flywheel|crank)', 'of shaft power', 'on its output terminals',
       // "4.8 kWh 'drawn from the vacuum'": what a claimed source gives, not what it takes.
       '(?:"|“|\x27|‘)?(?:drawn|taken|extracted|harvested|pulled|pumped|tapped) from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point(?: field| energy)?|a?ether|nowhere|nothing|thin air)',
-      'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)', 'of heat(?:ing)? output', '(?:of )?heat (?:leaving|coming out of|given off by|emitted by|released by) (?:the|its)', 'exported',
+      // "… and 1.8e-4 J of it reaches the radio": the part of what went in that reaches the load.
+      'of (?:it|that|this|them) (?:reaches|reached|gets? to|got to|arrives? at|makes? it to|made it to|is delivered to|was delivered to)',
+      'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)',
+      // "Cascadia 3.5: 3.5 kW of cooling, COP 3.6": the cold a cooler gives (not cooling water, a cooling fan or tower).
+      'of (?:refrigeration|cooling)(?! (?:water|towers?|fans?|fins?|air|loops?|circuits?|jackets?|systems?|plant|demand|load))', 'of heat(?:ing)? output', '(?:of )?heat (?:leaving|coming out of|given off by|emitted by|released by) (?:the|its)', 'exported',
       // "47 MW leaves the station": what a plant or a converter sends on.
       '(?:leaves?|left|leaving) (?:the |its )?(?:station|plant|site|unit|generator|alternator|inverter|converter|terminals|building|works|farm|array|stack|module)',
       // "Runtime test (250 W AC load)", "a 600 W resistive load": the load a supply or a store carries (a bare "2 kW load" may be the device).

@@ -22,7 +22,7 @@ export const HEAT_PUMP_WORDS = [
   // A refrigerating dehumidifier gives out its compressor's work and the heat of the water it condenses.
   'dehumidifiers?', 'heat[- ]pump (?:dryers?|driers?|water heaters?|tumble dryers?)',
   // A ductless split air conditioner, in the trade, is a heat pump that runs either way.
-  'mini[- ]?splits?', 'ductless (?:splits?|units?|systems?|heads?)',
+  'mini[- ]?splits?', '(?:ton|ductless|inverter) splits?', 'ductless (?:splits?|units?|systems?|heads?)',
   // A machine that moves heat, said so: "takes the heat out of the milk as it cools it and puts it into the wash water".
   '(?:takes?|taking|took|draws?|drawing|pulls?|pulling|extracts?|extracting|removes?|removing|recovers?|recovering) (?:the )?(?:waste )?heat (?:out of|from) (?:the |its )?[\\w-]+(?: [\\w-]+){0,8}? (?:and )?(?:puts?|putting|pumps?|pumping|moves?|moving|delivers?|delivering|dumps?|dumping|transfers?|transferring|gives?|giving) it (?:in)?to',
   // A log's shorthand: "air/water HP prototype", "brine/water HP", "A/W HP", "HP-12 spot reading" beside a COP.
