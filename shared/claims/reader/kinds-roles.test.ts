@@ -512,3 +512,11 @@ test('a quantum efficiency asked about again ("how was the 140 % measured", besi
   // A power conversion efficiency stated above 100 % is still an energy claim.
   expect(extractFigures('The cell counts two electrons per photon, and its power conversion efficiency is 130 %.').find((x) => x.text === '130 %')!.kind).toBe('efficiency');
 });
+
+test('"over a 96-hour run the unit, which draws 0.3 kW …, fed 40 kWh into the export meter": the run is a noun, the draw goes in and the meter counts the output (invented test data)', () => {
+  const f = extractFigures('Over a 96-hour run the unit, which draws 0.3 kW for its controller, fed 40 kWh into the export meter.');
+  expect(f.find((x) => x.text === '0.3 kW')!.role).toBe('in');
+  expect(f.find((x) => x.text === '40 kWh')!.role).toBe('out');
+  // A load the device runs still draws its output.
+  expect(extractFigures('The battery ran a chest freezer drawing 300 W.').find((x) => x.text === '300 W')!.role).toBe('out');
+});

@@ -2087,3 +2087,10 @@ describe('a loop said to feed itself: what goes back in and what is spare (inven
     }
   });
 });
+
+test('"carries messages between towns 2,400 km apart in 5 ms" gives the speed the messages would need (invented test data)', () => {
+  const f = extractFigures('The applicant says the link carries messages between towns 2,400 km apart in 5 ms.');
+  const v = f.find((x) => x.kind === 'speed')!;
+  expect(v.si).toBeCloseTo(2400e3 / 5e-3, 0); // distance / time
+  expect(v.si / 299792458).toBeGreaterThan(1); // c = 299 792 458 m/s exactly (BIPM SI Brochure, 9th ed.)
+});

@@ -52,8 +52,9 @@ const STRONG_SIDE_RE = /(?<!\p{L})(hot|warm|cold|cool|sunlit|sunny|heated|shaded
 const STRONG_FLUID_RE =
   /(?<!\p{L})(hot|warm|heated|cold|cool|chilled|cooled)(?:er)?[^\S\n]+(?:brine|water|air|gas|gases|fluid|steam|oil|exhaust|flue gas|coolant)[^\S\n]+(?:at|of|is|near|around)?[^\S\n]*(?:(?:about|around|roughly|some|nearly|only|just)[^\S\n]+)?$/iu;
 /** A load the device runs, then what it draws: "ran a chest freezer drawing", "powers two lamps using". */
+// (Not "run" the noun: "over a 72-hour run the module, which draws 0.4 kW, …" — what the module draws goes in.)
 const LOAD_IT_RUNS_RE =
-  /(?<!\p{L})(?:ran|runs|run|running|powered|powers|powering|drove|drives|driving|kept|keeps|keeping|supplied|supplies|supplying|fed|feeds|feeding)[^\S\n]+(?:a|an|the|its|our|their|two|three|four|several)[^\S\n]+(?:[\p{L}-]+,?[^\S\n]+){0,4}?(?:drawing|using|consuming|taking|pulling|rated at|(?:that|which)[^\S\n]+(?:takes|draws|uses|consumes|needs|pulls))[^\S\n]+(?:(?:only|just|about|some|roughly|nearly|around|approximately|up to|between|an average of)[^\S\n]+)*$/iu;
+  /(?<!\p{L})(?<!(?:hours?|days?|weeks?|months?|minutes?|test|trial|a|the|each|every|this|that|whole|long|first|second|full|one)[^\S\n]+)(?:ran|runs|run|running|powered|powers|powering|drove|drives|driving|kept|keeps|keeping|supplied|supplies|supplying|fed|feeds|feeding)[^\S\n]+(?:a|an|the|its|our|their|two|three|four|several)[^\S\n]+(?:[\p{L}-]+,?[^\S\n]+){0,4}?(?:drawing|using|consuming|taking|pulling|rated at|(?:that|which)[^\S\n]+(?:takes|draws|uses|consumes|needs|pulls))[^\S\n]+(?:(?:only|just|about|some|roughly|nearly|around|approximately|up to|between|an average of)[^\S\n]+)*$/iu;
 /** People (not a machine) charging a store, right before what they put in. */
 const PEOPLE_CHARGED_RE =
   /(?<!\p{L})(?:we|I|they|you|he|she|the team|the authors|researchers|one)[^\S\n]+(?:(?:then|first|had|have|fully)[^\S\n]+)?(?:charged|charge|filled|fill|loaded|load|topped up|pumped)[^\S\n]+(?:the|a|an|its|our|their|my)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:cells?|batter(?:y|ies)|packs?|capacitors?|supercapacitors?|supercaps?|accumulators?|flywheels?|store|bank|tank)[^\S\n]+(?:with|to|at|using)[^\S\n]+(?:(?:about|some|roughly|only|just|exactly)[^\S\n]+)?$/iu;
@@ -210,7 +211,10 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     // (Not when a supply is the subject: "the bench supply delivers 5 A" is what the device takes.)
     if (!/(?<!\p{L})(?:suppl(?:y|ies)|batter(?:y|ies)|mains|grid|sources?|sockets?|packs?|alternators?|chargers?|PSUs?|adapters?)[^\S\n]+\p{L}+[^\S\n]+[^.;!?\n]{0,12}$/iu.test(lead)) {
       // "the battery ran a chest freezer drawing 300 W": what a load the device runs draws is its output.
-      if (LOAD_IT_RUNS_RE.test(text.slice(Math.max(floor, start - 70), start))) return 'out';
+      // (Read with the words before the floor in view, so that "a 72-hour run" shows itself a noun.)
+      const runsFrom = Math.max(0, start - 70);
+      const runs = LOAD_IT_RUNS_RE.exec(text.slice(runsFrom, start));
+      if (runs && runsFrom + runs.index >= floor) return 'out';
       // "then carried the telemetry cabinet, a steady 600 W load, for 7 hours": the load a store or a
       // supply carried, named as such right after the figure.
       if (LOAD_AFTER_RE.test(text.slice(end, end + 30)) && LOAD_CARRIED_RE.test(text.slice(Math.max(floor, start - 90), start))) return 'out';

@@ -18,7 +18,7 @@ const LATENCY_BEFORE_RE =
 /** A signal in the time's sentence: "a pulse launched into the fibre", "the photons", "the message". */
 const SIGNAL_RE = /(?<!\p{L})(?:pulses?|signals?|photons?|beams?|messages?|packets?|wave[- ]?fronts?|light)(?!\p{L})/iu;
 /** A time a signal is said to take to arrive: "detected at the far end 21 µs later", "arrived after 3 ms", "took 40 ns to cross". */
-const ARRIVAL_BEFORE_RE = /(?<!\p{L})(?:arriv\w*|detected|received|registered|reached|reaches|crossed|cross(?:es|ing)?|travell?(?:ed|ing|s)?|propagat\w*|took|takes|taking|emerged|came[^\S\n]+out)(?!\p{L})[^.;!?\n]{0,40}?(?:(?:in|within|after|only|just)[^\S\n]+)*$/iu;
+const ARRIVAL_BEFORE_RE = /(?<!\p{L})(?:arriv\w*|detected|received|registered|reached|reaches|crossed|cross(?:es|ing)?|travell?(?:ed|ing|s)?|propagat\w*|took|takes|taking|emerged|came[^\S\n]+out|carr(?:y|ies|ied|ying)|deliver(?:s|ed|ing)?|transmit(?:s|ted|ting)?|relay(?:s|ed|ing))(?!\p{L})[^.;!?\n]{0,60}?(?:(?:in|within|after|only|just)[^\S\n]+)*$/iu;
 const LATER_AFTER_RE = /^[^\S\n]*(?:later|after(?:wards)?|afterwards)(?!\p{L})/iu;
 /** The length of a line a signal runs through: "the 12 km fibre spool", "a 3 km coil of cable". */
 const LINE_AFTER_RE = /^[^\S\n]*(?:(?:long|length)[^\S\n]+)?(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:fibre|fiber|cable|coax|line|spool|coil|waveguide|link)s?(?!\p{L})/iu;

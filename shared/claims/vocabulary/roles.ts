@@ -176,6 +176,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       // "4.8 kWh 'drawn from the vacuum'": what a claimed source gives, not what it takes.
       '(?:"|“|\x27|‘)?(?:drawn|taken|extracted|harvested|pulled|pumped|tapped) from (?:the )?(?:quantum )?(?:vacuum|zero[- ]point(?: field| energy)?|a?ether|nowhere|nothing|thin air)',
       // "… and 1.8e-4 J of it reaches the radio": the part of what went in that reaches the load.
+      // "fed 42 kWh into the export meter": what is counted going out is the device's output.
+      '(?:in)?to (?:the|its|an|a) (?:[\\w-]+ )?(?:export|output|generation) meters?',
       'of (?:it|that|this|them) (?:reaches|reached|gets? to|got to|arrives? at|makes? it to|made it to|is delivered to|was delivered to)',
       'heating(?: capacity| output| power| duty)?', 'cooling(?: capacity| output| power| duty)',
       // "Cascadia 3.5: 3.5 kW of cooling, COP 3.6": the cold a cooler gives (not cooling water, a cooling fan or tower).
