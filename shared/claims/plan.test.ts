@@ -2104,3 +2104,31 @@ describe('claims read from this session\'s tuning parts 104–105 (invented test
     expect(out(c, 'cop_heating_ratio')).toBeCloseTo((30000 * 0.29307107) / 2600 / (th / (th - tc)), 4);
   });
 });
+
+describe('gains said with a bare second figure, and a lifter\'s lift (invented test data)', () => {
+  test('"takes in 400 watts and puts out 520" and "nine hundred watts out for seven hundred in" carry the watts to the bare figure', () => {
+    for (const [text, pin, pout] of [
+      ['On the demo their box takes in 400 watts and puts out 520.', 400, 520],
+      ['The plans describe a machine giving nine hundred watts out for seven hundred in.', 700, 900],
+    ] as const) {
+      const c = runClaimChecks(extractFigures(text), { text }).checks.find((x) => x.check === 'first-law')!;
+      expect(c.finding).toBe('breaks');
+      expect(out(c, 'over_unity')).toBeCloseTo(pout / pin, 9); // out / in
+    }
+  });
+  test('"returns 1.2 J to its capacitor for every joule it takes out" is a gain of 1.2', () => {
+    const text = 'The pulse board is said to return 1.2 J to its capacitor for every joule it takes out.';
+    const c = runClaimChecks(extractFigures(text), { text }).checks.find((x) => x.check === 'first-law')!;
+    expect(c.finding).toBe('breaks');
+    expect(out(c, 'over_unity')).toBeCloseTo(1.2, 9);
+  });
+  test('a lifter said to "lift the same 3 grams in a vacuum chamber" breaks the photon bound; one that "would not lift at all" there does not', () => {
+    const claim = 'The foil lifter lifts about 3 grams on 15 watts, and its builder says it would lift the same 3 grams in a vacuum chamber, with no propellant at all.';
+    const r = runClaimChecks(extractFigures(claim), { text: claim }).checks.find((x) => x.check === 'photon-bound')!;
+    expect(r.finding).toBe('breaks');
+    // F = m·g0 = 0.003 kg × 9.80665 m/s² (g0 exact, BIPM SI Brochure 9th ed.); bound P/c, c = 299 792 458 m/s.
+    expect(out(r, 'ratio')).toBeCloseTo((0.003 * 9.80665 * 299792458) / 15, 0);
+    const lawful = 'The lifter holds up 2.5 g at 25 kV and 0.4 mA in a room; in a vacuum chamber it would not lift at all, as there is no air to push on.';
+    expect(runClaimChecks(extractFigures(lawful), { text: lawful }).checks.some((x) => x.finding === 'breaks')).toBe(false);
+  });
+});

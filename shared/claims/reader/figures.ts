@@ -369,10 +369,11 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
           /^[^\S\n]+(?:from[^\S\n]+(?:the[^\S\n]+)?(?:grid|mains|wall|socket|supply|battery|pack)|at[^\S\n]+the[^\S\n]+(?:wheels?|shaft|crank|output|load))(?!\p{L})/iu.test(text.slice(t.numEnd, t.numEnd + 24)) ||
           // ("put back twelve kilowatts while the drive motor is only drawing eight, so …": what the other
           // part draws, said last in its clause.)
-          (/(?<!\p{L})(?:drew|draws|drawing|takes|took|taking|consumes|consumed|consuming)[^\S\n]+(?:(?:about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start)) &&
+          // ("takes in 500 watts and puts out 650.": what it gives, said last in its clause.)
+          (/(?<!\p{L})(?:drew|draws|drawing|takes|took|taking|consumes|consumed|consuming|puts?[^\S\n]+out|putting[^\S\n]+out|gives?[^\S\n]+(?:out|back)|gave[^\S\n]+(?:out|back)|returns|returned|delivers|delivered|produces|produced)[^\S\n]+(?:(?:about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start)) &&
             /(?<!\p{L})(?:while|whereas|but|and|when)(?!\p{L})/iu.test(text.slice(flowSibling.end, start)) &&
             /^[^\S\n]*(?:[,.;:!?)\]]|—|–|$|[^\S\n]+(?:so|but|and|while|yet)(?!\p{L}))/iu.test(text.slice(t.numEnd, t.numEnd + 8)))) &&
-        /(?<!\p{L})(?:gave|gives|give|put(?:s|ting)?(?:[^\S\n]+out)?|returned|returns|delivered|delivers|produced|produces|yielded|yields|drew|draws|drawing|took|takes|taking|used|uses|using|got|gets|measured|logged|and|with)[^\S\n]+(?:(?:back|about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start))
+        /(?<!\p{L})(?:gave|gives|give|put(?:s|ting)?(?:[^\S\n]+out)?|returned|returns|delivered|delivers|produced|produces|yielded|yields|drew|draws|drawing|took|takes|taking|used|uses|using|got|gets|measured|logged|and|with|(?:out|in)[^\S\n]+for)[^\S\n]+(?:(?:back|about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start))
       ) {
         suffix = flowSibling.suffix;
         carried = true;
@@ -803,12 +804,12 @@ function asideLoneAmbient(text: string, drafts: Draft[]): void {
   }
 }
 
-/** Said of a body held up with nothing under it: "The 12-gram disc floats 3 cm above any desk", "cancels its own weight". */
+/** Said of a body held up with nothing under it: "The 12-gram disc floats 3 cm above any desk", "cancels its own weight", "lifts about 2 grams". */
 const HOVERS_RE =
-  /(?<!\p{L})(?:floats?|floating|hovers?|hovering|levitat(?:es?|ing|ed)|cancels?[^\S\n]+(?:(?:the|its)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+)?(?:own[^\S\n]+)?weight|holds?[^\S\n]+(?:itself|it)[^\S\n]+(?:up|aloft)|lifts?[^\S\n]+(?:itself|its[^\S\n]+own[^\S\n]+weight))(?!\p{L})/iu;
-/** Words that deny anything the body could push on or hang from ("no base, no strings", "nothing is blown downwards"). */
+  /(?<!\p{L})(?:floats?|floating|hovers?|hovering|levitat(?:es?|ing|ed)|cancels?[^\S\n]+(?:(?:the|its)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+)?(?:own[^\S\n]+)?weight|holds?[^\S\n]+(?:itself|it)[^\S\n]+(?:up|aloft)|lifts?[^\S\n]+(?:itself|its[^\S\n]+own[^\S\n]+weight)|(?:lifts?|lifting|lifted|hold(?:s|ing)?[^\S\n]+up|held[^\S\n]+up)(?=[^\S\n]+(?:(?:about|around|roughly|some|nearly|exactly|the[^\S\n]+same|a)[^\S\n]+)*[\d.,]+[^\S\n]*(?:g|grams?|kg|kilograms?|mg|milligrams?)(?!\p{L})))(?!\p{L})/iu;
+/** Words that deny anything the body could push on or hang from ("no base, no strings", "nothing is blown downwards", "in a vacuum chamber", "no air to push on"). */
 const NO_SUPPORT_RE =
-  /(?<!\p{L})(?:no[^\S\n]+(?:base|stand|strings?|wires?|threads?|magnets?|support|air[- ]?flow|fans?|propellers?|downwash)|nothing[^\S\n]+(?:pushes|presses|rests|is[^\S\n]+blown|blows)|without[^\S\n]+(?:any[^\S\n]+)?(?:support|magnets|strings|wires)|anti-?gravity|gravity[- ](?:field|shield|cancell?(?:er|ing|ation))|weightless)(?!\p{L})/iu;
+  /(?<!\p{L})(?:no[^\S\n]+(?:base|stand|strings?|wires?|threads?|magnets?|support|air[- ]?flow|fans?|propellers?|downwash)|nothing[^\S\n]+(?:pushes|presses|rests|is[^\S\n]+blown|blows)|without[^\S\n]+(?:any[^\S\n]+)?(?:support|magnets|strings|wires)|anti-?gravity|gravity[- ](?:field|shield|cancell?(?:er|ing|ation))|weightless|no[^\S\n]+air[^\S\n]+to[^\S\n]+push(?:[^\S\n]+(?:on|against))?|(?:in|inside)[^\S\n]+(?:a|the)[^\S\n]+(?:vacuum(?:[^\S\n]+(?:chamber|tank|jar))?|bell[^\S\n]+jar))(?!\p{L})/iu;
 /** A lawful way of holding a body up: a magnet (not denied), a jet of air, sound, a balloon. */
 const LAWFUL_HOLD_RE =
   /(?<!\p{L})(?<!no[^\S\n]+)(?:magnets?|magnetic(?:ally)?|electromagnets?|superconduct\w*|maglev|diamagnetic|air[- ]?(?:jets?|cushion|bearing)|acoustic|ultrasonic|balloons?|helium|buoyan\w*)(?!\p{L})/iu;
@@ -821,7 +822,8 @@ const LAWFUL_HOLD_RE =
 function weightHeldUp(text: string, drafts: Draft[]): void {
   if (drafts.some((d) => d.kind === 'thrust' && d.role !== 'aside') || !NO_SUPPORT_RE.test(text) || LAWFUL_HOLD_RE.test(text)) return;
   const held = drafts.filter((d) => d.kind === 'mass' && !d.derived && d.role !== 'propellant' && HOVERS_RE.test(sentenceAround(text, d.start, d.end)));
-  if (held.length !== 1) return;
+  // (The same mass said again — "lifts about 2 grams … would lift exactly the same 2 grams in a vacuum" — is one body.)
+  if (held.length === 0 || held.some((d) => siOf(d) !== siOf(held[0]))) return;
   const m = siOf(held[0]);
   if (m === null || !(m > 0)) return;
   insertAfter(drafts, held[0], {
