@@ -496,3 +496,16 @@ describe('old machines someone keeps are no earlier device (issue 11, invented t
     expect(f.find((x) => x.text === '2.1 kW')?.role).toBe('aside');
   });
 });
+
+test('a part "out of an old microwave oven (running at about 25 watts)" is no earlier device: its power drives the thrust (invented test data)', () => {
+  const f = extractFigures('I made a thruster from a brass can and the magnetron out of an old microwave oven (running at about 25 watts once turned down). My balance shows 4 millinewtons of push with no propellant.');
+  expect(f.find((x) => x.text === '25 watts')!.role).toBe('in');
+  // An earlier device's figure is still its own.
+  expect(extractFigures('Our previous prototype reached 35 % at 800 W; the new unit reaches 41 %.').every((x) => x.text !== '35 %' || x.role === 'aside')).toBe(true);
+});
+
+test('"for every 10 kWh we put in, about 8.4 kWh comes back out" is in, then out (invented test data)', () => {
+  const f = extractFigures('The sand store returns heat to the network: for every 10 kWh we put in, about 8.4 kWh comes back out after a day.');
+  expect(f.find((x) => x.text === '10 kWh')!.role).toBe('in');
+  expect(f.find((x) => x.text === '8.4 kWh')!.role).toBe('out');
+});

@@ -266,6 +266,9 @@ function earlierDeviceSaid(text: string, d: Draft): boolean {
   // ("My grandad restores old steam engines and says the launch engine he is rebuilding is 9 % efficient":
   // old machines someone restores or collects are a pastime, not an earlier device the figures are of.)
   if (earlier && KEEPER_VERB_BEFORE_RE.test(sentence.slice(Math.max(0, earlier.index - 25), earlier.index))) earlier = null;
+  // ("the magnetron out of an old microwave oven (running at about 20 watts)": an old machine parts were taken
+  // from is no earlier version of the device.)
+  if (earlier && /(?<!\p{L})(?:out[^\S\n]+of|(?:salvaged|taken|pulled|scavenged|stripped|removed|recovered|robbed)[^\S\n]+(?:out[^\S\n]+of|from|off)|off)[^\S\n]+(?:an?|the|my|our|some)[^\S\n]+$/iu.test(sentence.slice(Math.max(0, earlier.index - 25), earlier.index))) earlier = null;
   const at = text.lastIndexOf(sentence, d.start);
   // ("replaced the old oil boiler … with a ground-source heat pump, … it delivers 3.2": the new one's figure.)
   const replacedWith = /(?<!\p{L})replac(?:ed|es|ing)[^\S\n]+(?:the|its|their|our|my|an?)[^\S\n]+(?:old|previous|earlier|former|original)(?!\p{L})[^.;!?\n]*?[^\S\n]with[^\S\n]/iu.exec(sentence);

@@ -160,6 +160,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       '(?:to|onto) (?:the |its |an? )?(?:[\\w-]+(?:\'s|’s)? )?(?:output|power output|shaft output|electrical output)',
       // "3.1e-2 J coming out into the cap on the collector side": what comes out of the device.
       '(?:coming|comes|came|going|goes|went|flowing|flows) out(?! of (?:the|a|an) (?:wall|mains|socket|supply|grid|battery))',
+      // "for every 10 kWh we put in, about 8.6 kWh comes back out": what a store gives back.
+      '(?:coming|comes|came) back(?: out)?(?! (?:in|into|to (?:the|its) (?:input|supply|source)))',
       // "1.5 kW of hydraulic power at the duty point": what a pump gives the water.
       'of hydraulic (?:power|output|work)',
       // "produces 100 kW gross, 35 kW net after the pumps": a plant's gross and net outputs.
