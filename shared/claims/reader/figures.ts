@@ -76,6 +76,10 @@ const SPRINT_AFTER_RE = /^[^\S\n]*(?:in|:|\(|—|–|-)?[^\S\n]*(?:in[^\S\n]+)?(
 const SPRINT_WORD_RE = /(?<!\p{L})(?:sprint|accelerat\w*|dash|time)(?!\p{L})/iu;
 /** After such a number: the clause ends ("… at twenty, and …", "… at 20.", "… at thirty-five)"). */
 const BARE_END_RE = /^[^\S\n]*(?:[,;.!?)\]—–]|and(?!\p{L})|$)/u;
+/** Just before a bare temperature of the surroundings: "when it's", "while it is", "if it was about". */
+const WHEN_ITS_LEAD_RE = /(?<!\p{L})(?:when|while|if|and)[^\S\n]+it(?:['’]s|[^\S\n]+is|[^\S\n]+was)[^\S\n]+(?:(?:about|around|only|just|over|under|nearly)[^\S\n]+)?$/iu;
+/** Right after it, the place or the weather: "in the car", "outside", "out in the garage". */
+const PLACE_AFTER_RE = /^[^\S\n]+(?:(?:out[^\S\n]+)?in[^\S\n]+the[^\S\n]+(?:car|room|garage|house|sun|shade|kitchen|loft|attic|cabin|tent|van|boot|trunk|shed|office|lab|workshop)|outside|outdoors|out(?=[^\S\n]*[,.;!?]))(?!\p{L})/iu;
 
 /**
  * "3 or 4 kW", "one point eight, one point nine kilowatts": two bare-then-united numbers close together
@@ -333,8 +337,9 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         (sentenceAround(text, sibling.start, sibling.end) === sentenceAround(text, start, t.numEnd) ||
           (start - sibling.end < 160 && !/\n/.test(text.slice(sibling.end, start)))) &&
         !isDifference(text, sibling.start, sibling.end, 0) &&
-        SIDE_LEAD_RE.test(text.slice(Math.max(sibling.end, start - 40), start)) &&
-        BARE_END_RE.test(text.slice(t.numEnd, t.numEnd + 12))
+        ((SIDE_LEAD_RE.test(text.slice(Math.max(sibling.end, start - 40), start)) && BARE_END_RE.test(text.slice(t.numEnd, t.numEnd + 12))) ||
+          // ("keeps the inside at 5 °C when it's 30 in the car": the weather or the place, said as people say it.)
+          (WHEN_ITS_LEAD_RE.test(text.slice(Math.max(sibling.end, start - 30), start)) && PLACE_AFTER_RE.test(text.slice(t.numEnd, t.numEnd + 30))))
       ) {
         suffix = sibling.suffix;
         carried = true;
@@ -509,6 +514,8 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     if (kind === 'duration' && /(?<!\p{L})(?:logged|sampled|recorded|read|polled|measured|saved|written|averaged)[^\S\n]+(?:once[^\S\n]+)?every[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 30), start))) role = 'aside';
     // "Revenue ×3 year on year": a growth factor over a year, no length of time.
     if (kind === 'duration' && /^[^\S\n]*(?:-|[^\S\n]+)?on[- ]year(?!\p{L})/iu.test(text.slice(end, end + 12))) continue;
+    // "makes 45 horse" is horsepower as people say it; "a two-horse carriage", "a 2 horse trailer" count animals.
+    if (kind === 'power' && /horse$/iu.test(text.slice(t.numEnd, end)) && (/^[^\S\n]*-/u.test(text.slice(t.numEnd, end)) || /^[^\S\n]+(?:trailers?|box(?:es)?|carriages?|carts?|wagons?|towns?|races?|drawn|teams?|floats?|riders?|shows?|farms?|stables?|ploughs?|plows?|buggy|buggies|sleighs?)(?!\p{L})/iu.test(text.slice(end, end + 20)))) continue;
     if ((kind === 'power' || kind === 'energy') && suffix?.type === 'unit' && !suffix.per) {
       GAIN_PER_UNIT_RE.lastIndex = end;
       const g = GAIN_PER_UNIT_RE.exec(text);

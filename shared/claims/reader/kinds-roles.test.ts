@@ -520,3 +520,11 @@ test('"over a 96-hour run the unit, which draws 0.3 kW …, fed 40 kWh into the 
   // A load the device runs still draws its output.
   expect(extractFigures('The battery ran a chest freezer drawing 300 W.').find((x) => x.text === '300 W')!.role).toBe('out');
 });
+
+test('"keeps the inside at 4 °C when it\'s 32 in the car" gives the car\'s temperature in the same scale (invented test data)', () => {
+  const text = 'The Peltier cool box keeps the inside at 4 °C when it\'s 32 in the car, and the label says COP 0.45.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.text === '32')!.si).toBeCloseTo(32 + 273.15, 9); // °C + 273.15 = K (NIST SP 811 §4.2.1.1)
+  // No sibling in °C in the sentence: the bare number stays unread.
+  expect(extractFigures("It keeps drinks cold when it's 32 in the car.").some((x) => x.kind === 'temperature')).toBe(false);
+});

@@ -317,3 +317,10 @@ describe('a vehicle range said as what the consumption "works out to" (invented 
     expectRelClose(h.find((x) => x.kind === 'energy' && x.role === 'out')!.si, 162 * 3.6e6, 1e-9);
   });
 });
+
+test('"the tractor\'s diesel makes 60 horse" is 60 hp; a "two-horse carriage" or a "2 horse trailer" is no power (invented test data)', () => {
+  const f = extractFigures("The old tractor's diesel makes 60 horse at full load.");
+  expect(f.find((x) => x.kind === 'power')!.si / (60 * 745.69987158227)).toBeCloseTo(1, 9); // hp = 745.699 871 582 27 W (NIST SP 811 B.8)
+  expect(extractFigures('We hired a two-horse carriage for 3 hours.').some((x) => x.kind === 'power')).toBe(false);
+  expect(extractFigures('A 2 horse trailer weighs 900 kg.').some((x) => x.kind === 'power')).toBe(false);
+});

@@ -104,7 +104,7 @@ export const UNIT_FORMS: readonly UnitForm[] = [
   { kind: 'power', unit: 'MW', symbols: ['MW', 'MWe', 'MWt', 'MWth', 'MWp'], words: ['megawatt', 'megawatts'] },
   { kind: 'power', unit: 'GW', symbols: ['GW', 'GWe', 'GWt', 'GWth'], words: ['gigawatt', 'gigawatts'] },
   { kind: 'power', unit: 'TW', symbols: ['TW'], words: ['terawatt', 'terawatts'] },
-  { kind: 'power', unit: 'hp', symbols: ['hp', 'HP', 'bhp', 'BHP', 'shp'], words: ['horsepower', 'horse power', 'mechanical horsepower', 'brake horsepower', 'brake horse power', 'shaft horsepower', 'shaft horse power'] },
+  { kind: 'power', unit: 'hp', symbols: ['hp', 'HP', 'bhp', 'BHP', 'shp'], words: ['horsepower', 'horse power', 'mechanical horsepower', 'brake horsepower', 'brake horse power', 'shaft horsepower', 'shaft horse power', 'horse'] },
   // The electric horsepower, 746 W exactly (NIST SP 811 Appendix B.8, "horsepower (electric)").
   { kind: 'power', unit: 'W', factor: 746, words: ['electrical horsepower', 'electrical horse power', 'electric horsepower', 'electric horse power'] },
   {
