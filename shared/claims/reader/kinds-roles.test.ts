@@ -528,3 +528,9 @@ test('"keeps the inside at 4 °C when it\'s 32 in the car" gives the car\'s temp
   // No sibling in °C in the sentence: the bare number stays unread.
   expect(extractFigures("It keeps drinks cold when it's 32 in the car.").some((x) => x.kind === 'temperature')).toBe(false);
 });
+
+test('"puts out about 1.4 kW more heat than it takes from the socket" is an excess, not the output (invented test data)', () => {
+  const f = extractFigures('The heat-pump dryer puts out about 1.4 kW more heat than it takes from the socket.');
+  expect(f.find((x) => x.text === '1.4 kW')!.role).toBe('excess');
+  expect(extractFigures('The heater puts out about 1.4 kW.').find((x) => x.text === '1.4 kW')!.role).toBe('out');
+});

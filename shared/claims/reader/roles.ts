@@ -228,7 +228,8 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
       if (TURNED_INTO_RE.test(lead)) return 'out';
       if (IMMEDIATE_IN_RE.test(lead)) return 'in';
       // "produced 12.5 W of excess heat": an excess said of what it produced.
-      if (IMMEDIATE_OUT_RE.test(lead) && /^[^\S\n]*(?:of[^\S\n]+)?(?:excess|surplus|extra|anomalous)(?!\p{L})/iu.test(text.slice(end, end + 20))) return 'excess';
+      // ("puts out about 1.6 kW more heat than it takes from the socket": more than what it takes.)
+      if (IMMEDIATE_OUT_RE.test(lead) && (/^[^\S\n]*(?:of[^\S\n]+)?(?:excess|surplus|extra|anomalous)(?!\p{L})/iu.test(text.slice(end, end + 20)) || /^[^\S\n]+more[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}?than[^\S\n]+(?:(?:it|they|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:takes|draws|uses|consumes|gets|is[^\S\n]+fed|(?:it[^\S\n]+)?(?:is|was)[^\S\n]+given)(?!\p{L})/iu.test(text.slice(end, end + 60)))) return 'excess';
       if (IMMEDIATE_OUT_RE.test(lead)) return 'out';
     }
   }
