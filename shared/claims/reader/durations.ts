@@ -40,8 +40,10 @@ export const isChargingTime = (text: string, d: { start: number | null | undefin
 export const BURST_RE = /(?<!\p{L})(?:for short periods|for a short (?:time|period)|briefly|momentarily|in (?:short )?bursts|at peak|peaks? (?:at|of)|peak (?:power|output)|for (?:a few|several) (?:seconds|minutes)|for a (?:fraction of a second|split second|moment))(?!\p{L})/iu;
 
 /** A length said as a distance covered: "across a 12 km link", "through 1,000 km of fibre". */
+/** Small counts in words, as a length is spelt ("a twelve-kilometre test line", "fifty miles"). */
+const LENGTH_WORDS: Record<string, number> = { one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, eleven: 11, twelve: 12, fifteen: 15, twenty: 20, thirty: 30, forty: 40, fifty: 50, sixty: 60, eighty: 80, hundred: 100 };
 const DISTANCE_RE =
-  /(?<![\p{L}\p{N}.,])(\d{1,3}(?:,\d{3})+|\d+(?:\.\d+)?)[^\S\n]*(km|kilomet(?:re|er)s?|m|met(?:re|er)s?|miles?|light[- ]?years?|ly|AU|astronomical units?)(?![\p{L}\p{N}/²³])/giu;
+  /(?<![\p{L}\p{N}.,-])(\d{1,3}(?:,\d{3})+|\d+(?:\.\d+)?|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|fifteen|twenty|thirty|forty|fifty|sixty|eighty|hundred)(?:[^\S\n]*|-)(km|kilomet(?:re|er)s?|m|met(?:re|er)s?|miles?|light[- ]?years?|ly|AU|astronomical units?)(?![\p{L}\p{N}/²³])/giu;
 const METRES_PER: Record<string, number> = {
   km: 1000, kilometre: 1000, kilometer: 1000, m: 1, metre: 1, meter: 1, mile: 1609.344,
   // The light-year (IAU 2012 Resolution B2, Julian year) and the astronomical unit (IAU 2012 Resolution B2), both exact.
@@ -83,7 +85,7 @@ function speedsFromDistances(text: string, drafts: Draft[]): Set<Draft> {
     const per = METRES_PER[unit] ?? METRES_PER[unit.replace(/-/gu, ' ')];
     const t = siOf(d);
     if (per === undefined || !t) continue;
-    const metres = Number(last[1].replace(/,/gu, '')) * per;
+    const metres = (LENGTH_WORDS[last[1].toLowerCase()] ?? Number(last[1].replace(/,/gu, ''))) * per;
     const start = from + last.index!;
     if (drafts.some((o) => o !== d && o.start < start + last[0].length && start < o.end)) continue; // (read as something else)
     const v = metres / t;

@@ -2094,3 +2094,12 @@ test('"carries messages between towns 2,400 km apart in 5 ms" gives the speed th
   expect(v.si).toBeCloseTo(2400e3 / 5e-3, 0); // distance / time
   expect(v.si / 299792458).toBeGreaterThan(1); // c = 299 792 458 m/s exactly (BIPM SI Brochure, 9th ed.)
 });
+
+test('"a timing pulse down its fifteen-kilometre test line in forty microseconds": a spelt length gives the pulse\'s speed (invented test data)', () => {
+  const f = extractFigures('The start-up says its optical link sent a timing pulse down its fifteen-kilometre test line in forty microseconds.');
+  const v = f.find((x) => x.kind === 'speed')!;
+  expect(v.si).toBeCloseTo(15e3 / 40e-6, 0); // distance / time
+  // "twenty-five km" is not read as five kilometres.
+  const g = extractFigures('A pulse crossed the twenty-five km link in 100 µs.');
+  expect(g.some((x) => x.kind === 'speed' && Math.abs(x.si - 5e3 / 100e-6) < 1)).toBe(false);
+});
