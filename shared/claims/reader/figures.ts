@@ -330,6 +330,9 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     let carried = false;
     if (!suffix && upperNum === undefined) {
       const sibling = [...tokens.slice(0, i)].reverse().find((o) => !o.skip && o.suffix?.type === 'unit' && o.suffix.form.kind === 'temperature');
+      // ("with the outside air at minus 10": the sign said in words, before the side's words are read.)
+      const minusWord = /^[-−+]/u.test(t.num) ? null : /(?<!\p{L})(?:minus|negative)[^\S\n]+$/iu.exec(text.slice(Math.max(0, start - 12), start));
+      const leadEnd = start - (minusWord?.[0].length ?? 0);
       if (
         sibling &&
         // (In its sentence, or the one before in its paragraph: "Inside, the box holds five degrees C, and
@@ -337,12 +340,13 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         (sentenceAround(text, sibling.start, sibling.end) === sentenceAround(text, start, t.numEnd) ||
           (start - sibling.end < 160 && !/\n/.test(text.slice(sibling.end, start)))) &&
         !isDifference(text, sibling.start, sibling.end, 0) &&
-        ((SIDE_LEAD_RE.test(text.slice(Math.max(sibling.end, start - 40), start)) && BARE_END_RE.test(text.slice(t.numEnd, t.numEnd + 12))) ||
+        ((SIDE_LEAD_RE.test(text.slice(Math.max(sibling.end, leadEnd - 40), leadEnd)) && BARE_END_RE.test(text.slice(t.numEnd, t.numEnd + 12))) ||
           // ("keeps the inside at 5 °C when it's 30 in the car": the weather or the place, said as people say it.)
           (WHEN_ITS_LEAD_RE.test(text.slice(Math.max(sibling.end, start - 30), start)) && PLACE_AFTER_RE.test(text.slice(t.numEnd, t.numEnd + 30))))
       ) {
         suffix = sibling.suffix;
         carried = true;
+        if (minusWord && !/(?<!\p{L})plus[^\S\n]+or[^\S\n]+$/iu.test(text.slice(Math.max(0, leadEnd - 20), leadEnd))) t.num = `-${t.num}`;
       }
       // "five hundred kilos wet and a hundred and fifty dry", "twelve hundred kilograms, of which nine
       // hundred is propellant", "starts at a thousand kilograms and ends at eight hundred": a craft's

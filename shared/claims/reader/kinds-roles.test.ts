@@ -534,3 +534,16 @@ test('"puts out about 1.4 kW more heat than it takes from the socket" is an exce
   expect(f.find((x) => x.text === '1.4 kW')!.role).toBe('excess');
   expect(extractFigures('The heater puts out about 1.4 kW.').find((x) => x.text === '1.4 kW')!.role).toBe('out');
 });
+
+test('"water to 55 °C with the outside air at minus 8" carries °C to the bare figure with its sign said in words (invented test data)', () => {
+  const f = extractFigures('The heat pump heats water to 55 °C with the outside air at minus 8, and the firm says COP 7.');
+  expect(f.find((x) => x.text === '55 °C')!.role).toBe('hot');
+  const cold = f.find((x) => x.kind === 'temperature' && x.role === 'cold')!;
+  expect(cold.si).toBeCloseTo(-8 + 273.15, 9); // °C + 273.15 = K (NIST SP 811 §4.2.1.1)
+});
+
+test('"The 10 kg cubesat (dry) carries 1.2 kg of butane": the craft named, then said dry (invented test data)', () => {
+  const f = extractFigures('The 10 kg cubesat (dry) carries 1.2 kg of butane for its cold-gas thruster.');
+  expect(f.find((x) => x.text === '10 kg')!.role).toBe('dry');
+  expect(f.find((x) => x.text === '1.2 kg')!.role).toBe('propellant');
+});

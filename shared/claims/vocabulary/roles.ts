@@ -241,7 +241,9 @@ export const MASS_ROLES: readonly RoleWords[] = [
       // the longest fitting words win).
       '(?:mass )?(?:after|once|when) (?:all )?(?:the |its )?(?:usable |useable )?(?:propellant|fuel)s? (?:is|are|has been|have been|was|were) (?:all )?(?:burn(?:ed|t)|used(?: up)?|spent|consumed|expended|gone)(?:[^\\S\\n]*[,:;]?[^\\S\\n]*(?:[\\w-]+ ){0,3}?[\\w-]*[:=,]?)?',
       'dry', 'empty of (?:propellant|fuel)', 'empty', 'final', 'burn-?out', 'burns? out (?:at|with)', '(?:burnt|burned) out', 'at burn-?out', 'after burn-?out', '(?:,[^\\S\\n]*)?leaving(?: (?:only|just|about|some))?', 'end-of-burn', 'after the burn', 'unfuell?ed', 'structural', 'inert', '(?:burn(?:s|ing|ed|t)?|drops?|dropping|dropped|falls?|falling|fell) (?:down )?to', 'ends? (?:up )?(?:at|with)', 'ending (?:up )?(?:at|with)'],
-    after: ['(?:dry|empty|final|burn-?out|structural) mass', '\\((?:empty|dry|unfuell?ed|when empty)\\)', 'dry', 'empty',
+    after: ['(?:dry|empty|final|burn-?out|structural) mass', '\\((?:empty|dry|unfuell?ed|when empty)\\)',
+      // "The 12 kg cubesat (dry) carries 1.4 kg of butane": the craft named, then said dry.
+      '(?:[\\w-]+ ){1,2}\\((?:empty|dry|unfuell?ed|when empty)\\)', 'dry', 'empty',
       'when (?:(?:its|the) tanks? (?:are|is) |it is )?(?:empty|dry)', ',[^\\S\\n]*(?:empty|dry)(?=[^\\S\\n]*(?:[;.)\\n]|$))', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end',
       '(?:once|when|after) (?:all )?(?:the |its )?(?:usable |useable )?(?:propellant|fuel)s? (?:is|are|has been|have been|was|were) (?:all )?(?:burn(?:ed|t)|used(?: up)?|spent|consumed|expended|gone)'],
   },
