@@ -547,3 +547,9 @@ test('"The 10 kg cubesat (dry) carries 1.2 kg of butane": the craft named, then 
   expect(f.find((x) => x.text === '10 kg')!.role).toBe('dry');
   expect(f.find((x) => x.text === '1.2 kg')!.role).toBe('propellant');
 });
+
+test('"Eighteen tonnes on the pad, nine when the tanks are dry": the bare second mass is the dry one, in tonnes (invented test data)', () => {
+  const f = extractFigures('Eighteen tonnes on the pad, nine when the tanks are dry, and the engine is 300 seconds Isp.');
+  const dry = f.find((x) => x.kind === 'mass' && x.role === 'dry')!;
+  expect(dry.si).toBeCloseTo(9000, 6); // t = 1000 kg (BIPM SI Brochure, Table 8)
+});
