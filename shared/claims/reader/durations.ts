@@ -6,6 +6,8 @@
 import { formatQuantity } from '../../worksheet/quantity';
 import { sentenceAround } from './context';
 import { insertAfter, sameClause, sentenceOf, siOf, typedSi, upperSiOf, type Draft } from './draft';
+import { tokenize } from './numbers';
+import { C_LIGHT } from '../../checks/constants';
 
 /** Words of a time that is not how long the device ran. */
 const NOT_A_RUN_RE =
@@ -51,8 +53,25 @@ const METRES_PER: Record<string, number> = {
 };
 /** Words of something that travels at a speed worth setting against c: light, a signal, a pulse, a message. */
 const SIGNAL_CONTEXT_RE = /(?<!\p{L})(?:light|superluminal|faster[- ]than[- ]light|FTL|signals?|pulses?|photons?|latency|message|transmission|transmits?|beam|wave(?:front)?|speed of light)(?!\p{L})/iu;
+/** A craft travelling between worlds or stars. */
+const CRAFT_TRAVEL_RE = /(?<!\p{L})(?:spacecraft|starships?|ships?|craft|probes?|drives?|rockets?|vehicles?)(?!\p{L})[^]*?(?<!\p{L})(?:Earth|Moon|Mars|Venus|Jupiter|Saturn|Sun|stars?|planets?|orbit|light[- ]?years?)(?!\p{L})|(?<!\p{L})(?:Earth|Moon)[^\S\n]+to[^\S\n]+(?:the[^\S\n]+)?(?:Moon|Mars|Venus|Jupiter|Saturn|Sun|Pluto)(?!\p{L})/iu;
 /** Just before the time a distance took: "in", "after", "within", "arrived after", "taking". */
 const TOOK_BEFORE_RE = /(?<!\p{L})(?:in|after|within|taking|took|takes|in (?:just|only|under|about)|arrives?|arrived|arriving|gets? there|got there)[^\S\n]+(?:(?:just|only|about|around|roughly|some|a mere)[^\S\n]+)?$/iu;
+
+/** A unit of length right after a number said in words. */
+const SPOKEN_LENGTH_UNIT_RE = /^(?:[^\S\n]*|-)(km|kilomet(?:re|er)s?|miles?|light[- ]?years?)(?!\p{L})/iu;
+/** Lengths said in words ("fifty-six million kilometres"), as matches shaped like DISTANCE_RE's: [whole, number, unit]. */
+function spokenLengths(text: string): RegExpMatchArray[] {
+  const found: RegExpMatchArray[] = [];
+  for (const t of tokenize(text)) {
+    if (!t.words || t.skip) continue;
+    const u = SPOKEN_LENGTH_UNIT_RE.exec(text.slice(t.numEnd));
+    if (!u) continue;
+    const m = Object.assign([text.slice(t.start, t.numEnd + u[0].length), String(Number(t.num)), u[1]], { index: t.start, input: text }) as RegExpMatchArray;
+    found.push(m);
+  }
+  return found;
+}
 
 /**
  * A distance covered in a stated time, in a text about light or a signal ("sends a pulse across a 12 km
@@ -61,13 +80,18 @@ const TOOK_BEFORE_RE = /(?<!\p{L})(?:in|after|within|taking|took|takes|in (?:jus
  */
 function speedsFromDistances(text: string, drafts: Draft[]): Set<Draft> {
   const used = new Set<Draft>();
-  if (!SIGNAL_CONTEXT_RE.test(text)) return used;
+  const signal = SIGNAL_CONTEXT_RE.test(text);
+  // (Or a craft said to cover a distance between worlds: "Earth to Mars … fifty-six million kilometres … in
+  // ninety seconds" — taken only where the speed it implies is a sizeable part of c, worth setting against it.)
+  if (!signal && !CRAFT_TRAVEL_RE.test(text)) return used;
   for (const d of [...drafts]) {
     if (d.kind !== 'duration' || d.role === 'aside' || d.derived) continue;
     const sentenceStart = Math.max(text.lastIndexOf('\n', d.start - 1) + 1, ...['. ', '! ', '? '].map((p) => { const i = text.lastIndexOf(p, d.start - 1); return i < 0 ? 0 : i + 2; }));
     const before = text.slice(sentenceStart, d.start);
     if (!TOOK_BEFORE_RE.test(before)) continue;
-    let lengths = [...before.matchAll(DISTANCE_RE)];
+    let lengths: RegExpMatchArray[] = [...before.matchAll(DISTANCE_RE)];
+    // ("Earth to Mars — fifty-six million kilometres — in ninety seconds": a length said in words.)
+    if (lengths.length === 0) lengths = spokenLengths(before);
     let from = sentenceStart;
     // ("• 1,200 km between the two stations / • first bit arrives 2.1 ms after sending": a list's item before
     // gives the length of the link.)
@@ -89,6 +113,7 @@ function speedsFromDistances(text: string, drafts: Draft[]): Set<Draft> {
     const start = from + last.index!;
     if (drafts.some((o) => o !== d && o.start < start + last[0].length && start < o.end)) continue; // (read as something else)
     const v = metres / t;
+    if (!signal && !(v >= 0.01 * C_LIGHT)) continue;
     insertAfter(drafts, d, {
       start,
       end: d.end,

@@ -2103,3 +2103,10 @@ test('"a timing pulse down its fifteen-kilometre test line in forty microseconds
   const g = extractFigures('A pulse crossed the twenty-five km link in 100 µs.');
   expect(g.some((x) => x.kind === 'speed' && Math.abs(x.si - 5e3 / 100e-6) < 1)).toBe(false);
 });
+
+test('"Earth to Mars — sixty million kilometres — in two minutes" gives the craft\'s speed; a probe\'s months-long trip or a car\'s drive gives none (invented test data)', () => {
+  const f = extractFigures('WITNESS: The ship goes Earth to Mars — sixty million kilometres — in two minutes. That is the specification.');
+  expect(f.find((x) => x.kind === 'speed')!.si).toBeCloseTo(60e9 / 120, 0); // distance / time
+  expect(extractFigures('The probe will reach Mars, 56 million km away, in 120 days.').some((x) => x.kind === 'speed')).toBe(false);
+  expect(extractFigures('Our car drove 300 km to the coast in 3 hours on one charge.').some((x) => x.kind === 'speed')).toBe(false);
+});
