@@ -7,7 +7,7 @@
  */
 import { multipliedOut } from './products';
 import { multiplesOfABase } from './multiples';
-import { asideChanges, asideEmbodied, asideSlips, refills, storeChargeSpans, asidePerDistance, meterReadings, restatedEnergies, statedError } from './ledgers';
+import { asideChanges, asideEmbodied, asideSlips, refills, storeChargeSpans, asidePerDistance, meterReadings, restatedEnergies, statedError, workedLines } from './ledgers';
 import { QuantityError, formatQuantity, parseQuantity } from '../../worksheet/quantity';
 import { C_M_PER_S } from '../figures-vocabulary';
 import { FIGURE_SI_UNIT, type Figure, type FigureKind, type FigureRole } from '../types';
@@ -653,6 +653,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
     else drafts.splice(pos, 0, d);
   }
 
+  workedLines(text, drafts);
   multipliedOut(text, drafts);
   rolesFromLineLabels(text, drafts);
   meterReadings(text, drafts);

@@ -146,3 +146,15 @@ describe("a store's size with its state of charge moved is the energy moved", ()
     expect(runClaimChecks(f, { text }).checks.some((c) => c.finding === 'breaks')).toBe(false);
   });
 });
+
+test('"It stores 1.5 kWh; 80 W for 15 h is 1.2 kWh": the reader\'s own arithmetic on the claim\'s figures is set aside, and the store\'s energy goes in (invented test data)', () => {
+  const text = 'Can the power bank really run an 80 W fridge for 15 hours? It stores 1.5 kWh; 80 W for 15 h is 1.2 kWh, so yes.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.text === '1.5 kWh')!.role).toBe('in');
+  expect(f.find((x) => x.text === '1.2 kWh')!.role).toBe('aside');
+  const c = runClaimChecks(f, { text }).checks.find((x) => x.check === 'first-law')!;
+  expect(c.finding).toBe('consistent');
+  // A labelled ledger line keeps its sides.
+  const g = extractFigures('Charge: 2 kW for 40 minutes. So: in = 2 kW × 2400 s = 4.8 MJ.');
+  expect(g.find((x) => x.text === '4.8 MJ')!.role).not.toBe('aside');
+});

@@ -232,6 +232,33 @@ export function asideEmbodied(text: string, drafts: Draft[]): void {
   }
 }
 
+/** Between a power and a time in a worked line ("60 W for 18 h is 1.08 kWh", "60 W × 18 h = 1.08 kWh"). */
+const WORKED_POWER_TIME_RE = /^[^\S\n]*(?:for|over|×|x|\*|times)[^\S\n]*$/iu;
+/** Between the time and the energy it makes: "is", "=", "makes", "comes to", "gives". */
+const WORKED_RESULT_RE = /^[^\S\n]*(?:is|=|≈|makes|gives|comes[^\S\n]+to|equals|works[^\S\n]+out[^\S\n]+(?:at|to))[^\S\n]*(?:(?:about|around|roughly|only|just)[^\S\n]+)?$/iu;
+
+/**
+ * "It stores 1.2 kWh; 60 W for 18 h is 1.08 kWh": someone working the claim's own power and time (said
+ * again, the same figures as before) into an energy. The line is their arithmetic, not further flows of
+ * the device: all three set aside.
+ */
+export function workedLines(text: string, drafts: Draft[]): void {
+  for (let k = 0; k + 2 < drafts.length; k++) {
+    const [p, t, e] = [drafts[k], drafts[k + 1], drafts[k + 2]];
+    if (p.kind !== 'power' || t.kind !== 'duration' || e.kind !== 'energy' || p.derived || t.derived || e.derived) continue;
+    // (A line whose words give it a side — "in = 2 kW × 2400 s = 4.8 MJ", "Energy delivered to the load: 150 W × 72 h" — is the writer's own ledger: left to it.)
+    if (p.role !== null || e.role !== null) continue;
+    if (!WORKED_POWER_TIME_RE.test(text.slice(p.end, t.start)) || !WORKED_RESULT_RE.test(text.slice(t.end, e.start))) continue;
+    const [w, s, j] = [siOf(p), siOf(t), siOf(e)];
+    if (w === null || s === null || j === null || !(j > 0) || Math.abs(w * s - j) > 0.03 * j) continue;
+    // (Only the claim's figures said again: a power and a time given before, in their own words.)
+    const before = drafts.slice(0, k);
+    const again = (d: Draft, x: number) => before.some((o) => o.kind === d.kind && !o.derived && siOf(o) === x);
+    if (!again(p, w) || !again(t, s)) continue;
+    for (const d of [p, t, e]) d.role = 'aside';
+  }
+}
+
 /** Before an energy worked out from a power just given: "so about", "that is", "i.e.", "which makes". */
 const WORKED_OUT_BEFORE_RE = /(?<!\p{L})(?:so|that(?:'s|’s|[^\S\n]+is)|i\.e\.|which[^\S\n]+(?:is|makes|gives|comes[^\S\n]+to)|making|giving|or)[^\S\n]+(?:(?:about|around|roughly|some|nearly|almost|just[^\S\n]+(?:over|under)|a[^\S\n]+total[^\S\n]+of)[^\S\n]+)?$/iu;
 
