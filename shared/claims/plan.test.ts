@@ -2132,3 +2132,15 @@ describe('gains said with a bare second figure, and a lifter\'s lift (invented t
     expect(runClaimChecks(extractFigures(lawful), { text: lawful }).checks.some((x) => x.finding === 'breaks')).toBe(false);
   });
 });
+
+test('a cryocooler that "lifts 3 W of heat at 80 K, with rejection to a 300 K room" for 90 W of compressor input is within Carnot (invented test data)', () => {
+  const text = 'Cryocooler test: 90 W of compressor input lifts 3 W of heat at 80 K, with rejection to a 300 K room.';
+  const f = extractFigures(text);
+  expect(f.find((x) => x.text === '3 W')!.role).toBe('out');
+  expect(f.find((x) => x.text === '80 K')!.role).toBe('cold');
+  expect(f.find((x) => x.text === '300 K')!.role).toBe('hot');
+  const c = runClaimChecks(f, { text }).checks.find((x) => x.check === 'carnot')!;
+  expect(c.finding).toBe('consistent');
+  // Cooling COP 3/90 against the Carnot bound Tc/(Th − Tc) = 80/220 (Carnot).
+  expect(out(c, 'cop_cooling_ratio')).toBeCloseTo(3 / 90 / (80 / 220), 9);
+});

@@ -115,6 +115,10 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     // A heat pump's or fridge's source is its cold side and its sink the warm one (the other way round for an engine).
     if (HEAT_PUMP_RE.test(text) || COOLING_MACHINE_RE.test(text)) {
       const lead = text.slice(Math.max(floor, start - 40), start);
+      // "lifts 1.5 W at 77 K into a 300 K room", "with rejection to a 300 K room": a cooler's load is taken at its
+      // cold side and its heat given up at its warm one.
+      if (COOLING_MACHINE_RE.test(text) && /(?<!\p{L})(?:into|(?:reject(?:s|ed|ing|ion)?|dump(?:s|ed|ing)?|shed(?:s|ding)?)(?:[^\S\n]+(?:the|its)[^\S\n]+heat)?[^\S\n]+(?:to|into|at))[^\S\n]+(?:a|an|the)[^\S\n]+$/iu.test(text.slice(Math.max(0, start - 40), start)) && /^[^\S\n]*(?:room|radiator|sink|ambient|environment|surroundings|heat[^\S\n]+sink|air)(?!\p{L})/iu.test(text.slice(end, end + 20))) return 'hot';
+      if (COOLING_MACHINE_RE.test(text) && /(?<!\p{L})(?:lifts?|lifting|lifted|removes?|removing|removed|extracts?|extracting|extracted|absorbs?|absorbing)(?!\p{L})[^.;!?\n]{1,40}?(?:W|watts?|mW|milliwatts?)(?:[^\S\n]+of[^\S\n]+heat)?[^\S\n]+at[^\S\n]+$/iu.test(text.slice(Math.max(0, start - 60), start))) return 'cold';
       if (/(?<!\p{L})(?:heat[^\S\n]+)?sink(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'hot';
       if (/(?<!\p{L})(?:(?:air|ground|water|brine|heat|outdoor)[- ])?source(?:[^\S\n]+(?:water|temperature|side|loop|air))?[^\S\n]*(?:at|of|is|[:=])?[^\S\n]*$/iu.test(lead)) return 'cold';
       // A sheet's line labelled with the side: "Source: process cooling water, inlet 10 °C", "Sink | flow 45 °C".
