@@ -672,7 +672,6 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
   asideWorkedBounds(text, drafts);
   asideStatedBounds(bounds);
   asideIdealDeltaV(text, drafts);
-  dryMassAsShare(text, drafts);
   asideApparentSpeeds(text, drafts);
   asideSignals(text, drafts);
   asideThresholds(drafts);
@@ -815,35 +814,6 @@ function asideLoneAmbient(text: string, drafts: Draft[]): void {
   for (const d of drafts) {
     if (d.kind === 'temperature' && d.role === 'cold' && !d.derived && AMBIENT_LEAD_RE.test(text.slice(Math.max(0, d.start - 50), d.start))) d.role = 'aside';
   }
-}
-
-const SHARE_WORDS: Record<string, number> = { half: 1 / 2, 'a half': 1 / 2, 'one half': 1 / 2, 'a third': 1 / 3, 'one third': 1 / 3, 'one-third': 1 / 3, 'two thirds': 2 / 3, 'two-thirds': 2 / 3, 'a quarter': 1 / 4, 'one quarter': 1 / 4, 'three quarters': 3 / 4, 'three-quarters': 3 / 4, 'a fifth': 1 / 5, 'one fifth': 1 / 5, 'one-fifth': 1 / 5, 'a tenth': 1 / 10, 'one tenth': 1 / 10, 'one-tenth': 1 / 10 };
-/** "whose dry mass is a third of its fuelled mass", "the empty stage is 12 % of its lift-off mass". */
-const DRY_SHARE_RE =
-  /(?<!\p{L})(?:dry|empty|burn-?out|final)[^\S\n]+(?:mass|weight|stage|craft|vehicle)[^\S\n]+(?:is|being|was|comes[^\S\n]+to|of)[^\S\n]+(?:(?:only|just|about|roughly|some)[^\S\n]+)?(half|a half|one half|a third|one third|one-third|two thirds|two-thirds|a quarter|one quarter|three quarters|three-quarters|a fifth|one fifth|one-fifth|a tenth|one tenth|one-tenth|(\d+(?:\.\d+)?)[^\S\n]*(?:%|per[^\S\n]?cent))[^\S\n]+(?:of[^\S\n]+)?(?:(?:its|the|their)[^\S\n]+)?(?:fuell?ed|wet|lift-?off|launch|gross|total|initial|full|loaded|take-?off)[^\S\n]+(?:mass|weight)(?!\p{L})/iu;
-
-/**
- * "the 30-tonne upper stage, whose dry mass is a third of its fuelled mass": the dry mass as a share of the
- * one mass the text gives, which is then the fuelled one.
- */
-function dryMassAsShare(text: string, drafts: Draft[]): void {
-  const m = DRY_SHARE_RE.exec(text);
-  if (!m) return;
-  if (drafts.some((d) => d.kind === 'mass' && d.role === 'dry')) return;
-  const masses = drafts.filter((d) => d.kind === 'mass' && d.role !== 'aside' && !d.derived);
-  if (masses.length !== 1 || (masses[0].role !== null && masses[0].role !== 'wet')) return;
-  const share = m[2] !== undefined ? Number(m[2]) / 100 : SHARE_WORDS[m[1].toLowerCase()];
-  const wet = siOf(masses[0]);
-  if (!share || !(share > 0 && share < 1) || wet === null || !(wet > 0)) return;
-  masses[0].role = 'wet';
-  insertAfter(drafts, masses[0], {
-    start: masses[0].start,
-    end: masses[0].end,
-    kind: 'mass',
-    quantity: typedSi(wet * share, 'kg'),
-    role: 'dry',
-    derived: `dry mass = ${m[1]} of the fuelled mass (${formatQuantity(wet, 'kg')})`,
-  });
 }
 
 /** Said of a body held up with nothing under it: "The 12-gram disc floats 3 cm above any desk", "cancels its own weight", "lifts about 2 grams". */

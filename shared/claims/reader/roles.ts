@@ -43,7 +43,6 @@ const ROLES: Partial<Record<FigureKind, CompiledRoles>> = {
 const IN_OUT_AFTER_RE = /[^\S\n]*(?:of[^\S\n]+(?:electricity|electrical power|heat|power|work|energy|light|gas|fuel)[^\S\n]+)?(in|out)(?!\p{L})(?=[^\S\n]*(?:[,;.!?)\]\n:—–]|(?:and|for|from|with|while|against|versus|vs|on|at|to|into|onto|across|through)(?!\p{L})|$))/iuy;
 const COP_COOLING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_COOLING)})(?!\\p{L})`, 'iu');
 const COP_HEATING_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_HEATING)})(?!\\p{L})`, 'iu');
-const COP_HEATING_NOT_RADIATOR_RE = new RegExp(`(?<!\\p{L})(?:${alt(COP_HEATING.filter((w) => !/radiator/.test(w)))})(?!\\p{L})`, 'iu');
 const COP_WINDOW = 120;
 
 /** "warm end", "cold side", "hot junction" just before a temperature outweigh the words after it. */
@@ -363,10 +362,7 @@ export function roleFor(text: string, kind: FigureKind, start: number, end: numb
       }
       return best;
     };
-    // (In a text on a cooler that names no heat pump, a radiator is where it dumps its heat, not a heating word:
-    // "the Stirling cryocooler … dumps the heat at a 300 K radiator. That's a COP of 0.0375".)
-    const coolerOnly = COOLING_MACHINE_RE.test(text) && !HEAT_PUMP_RE.test(text);
-    const [cool, heat] = [nearest(COP_COOLING_RE), nearest(coolerOnly ? COP_HEATING_NOT_RADIATOR_RE : COP_HEATING_RE)];
+    const [cool, heat] = [nearest(COP_COOLING_RE), nearest(COP_HEATING_RE)];
     if (cool < Infinity && cool <= heat) return 'cooling';
     if (heat < Infinity || HEAT_PUMP_RE.test(text)) return 'heating';
     // (A cooler's sheet with its COP far below the name: "Frostline thermoelectric cooler module … COP …… 0.35".)
