@@ -65,6 +65,20 @@ async function main() {
   };
   process.on('SIGINT', () => void shutdown('SIGINT'));
   process.on('SIGTERM', () => void shutdown('SIGTERM'));
+  // An error nothing caught: before a stop, the launcher stops in order (MariaDB included) and exits 1;
+  // during a stop (a late answer of a connection or a worker being closed), it is reported and the
+  // stop goes on: it must not end the process with MariaDB still running.
+  const uncaught = (err: unknown) => {
+    const text = err instanceof Error ? (err.stack ?? err.message) : String(err);
+    if (stopping) {
+      say(`While stopping, an error nothing caught (the stop goes on): ${text}`);
+      return;
+    }
+    say(`An error nothing caught; stopping: ${text}`);
+    void shutdown('an error nothing caught', 1);
+  };
+  process.on('uncaughtException', uncaught);
+  process.on('unhandledRejection', uncaught);
 
   try {
     // Before touching the database: a second launcher must not take over the first one's MariaDB.

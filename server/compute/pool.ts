@@ -182,7 +182,8 @@ export class ComputePool {
     const fail = (err: Error) => {
       if (this.failure) return;
       this.failure = err;
-      this.logger.fatal({ err }, 'the compute pool could not start: worksheets, checks and claim checks will answer 503 until the server is restarted');
+      // A pool closed while its threads were still loading (a Ctrl-C soon after the start) did not fail.
+      if (!this.closed) this.logger.fatal({ err }, 'the compute pool could not start: worksheets, checks and claim checks will answer 503 until the server is restarted');
       this.stopWaiting(this.unavailable());
       // Its workers fail while loading: piscina starts no more of them; end the pool.
       if (this.pool === pool) this.pool = null;
