@@ -33,6 +33,18 @@ const out = (run: { outputs: { name: string; si: number }[] }, name: string) => 
 const FREE = { text: 'A sealed, propellant-free drive (invented test data).' };
 
 describe('nothing is run on a default', () => {
+  it('asks for the input when a text gives only what a device puts out, claim of gain or not', () => {
+    for (const text of [
+      'The tidal kite should supply somewhere around 300 to 500 kW on a good spring tide, its engineer said.',
+      'The fuel-cell stack supplies twelve kilowatts of electricity to the ferry\'s hotel load.',
+      'The community flywheel returned 18 kWh to the village grid across the evening peak.',
+    ]) {
+      const { checks, needs } = runClaimChecks(extractFigures(text), { text });
+      expect(checks).toEqual([]);
+      expect(needs).toEqual([expect.objectContaining({ check: 'first-law', missing: ['the energy or power put in (all of it: electrical, mechanical, chemical, heat)'] })]);
+    }
+  });
+
   it('plans nothing for no figures', () => {
     expect(planChecks([])).toEqual({ planned: [], needs: [], notes: [] });
   });

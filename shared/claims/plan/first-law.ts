@@ -270,13 +270,6 @@ function productBesideRating(text: string, figures: readonly Figure[], inF: Figu
   return RATING_AT_RE.test(text.slice(i.end, i.end + 25)) || RATED_BEFORE_RE.test(text.slice(Math.max(0, i.start - 25), i.start));
 }
 
-/**
- * The text says what went in is not known: "ran our router for three weeks without a charge", "we don't
- * have the readings", "could not find a figure for the charging input".
- */
-const INPUT_UNKNOWN_RE =
-  /(?<!\p{L})(?:without[^\S\n]+(?:a[^\S\n]+|any[^\S\n]+)?(?:re)?charg(?:e|ing)|never[^\S\n]+(?:been[^\S\n]+)?(?:re)?charged|(?:don['’]t|do[^\S\n]+not|did[^\S\n]+not|didn['’]t|could[^\S\n]+not|couldn['’]t|can(?:not|['’]t))[^\S\n]+(?:have|find|get|know|see)[^\S\n]+(?:the[^\S\n]+|a[^\S\n]+|any[^\S\n]+)?(?:figures?|readings?|data|numbers?|measurements?)(?![^.;!?\n]{0,40}(?<!\p{L})(?:output|out)(?!\p{L})))(?!\p{L})/iu;
-
 /** An output said as a burst or a peak ("can deliver 2 MW for short periods"): no steady output over a run. */
 function saidInBursts(text: string, f: Figure): boolean {
   return f.start !== null && f.end !== null && !!text && BURST_RE.test(sentenceAround(text, f.start, f.end));
@@ -491,7 +484,9 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
       why: 'The text gives a "COP" for a device that is no heat pump: its output over its input.',
       assumptions: ['The COP is read as electrical or mechanical output over input, since the text describes no heat pump; run on 1 J supplied.'],
     });
-  } else if ((eOut || pOut) && !(eIn || pIn) && (s.overUnity || INPUT_UNKNOWN_RE.test(text))) {
+  } else if ((eOut || pOut) && !(eIn || pIn) && !thrust) {
+    // Only what comes out ("the tidal kite should supply 300 to 500 kW", "the stack supplies 12 kW"): the
+    // check applies and wants the input, whether or not the text sounds like a claim of gain.
     needs.push(need('first-law', ['the energy or power put in (all of it: electrical, mechanical, chemical, heat)'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eOut, pOut])));
   } else if ((eIn || pIn) && !(eOut || pOut) && s.overUnity && !thrust) {
     needs.push(need('first-law', ['the energy or power got out'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eIn, pIn])));

@@ -491,6 +491,17 @@ describe('old machines someone keeps are no earlier device (issue 11, invented t
     expect(f.filter((x) => x.kind === 'temperature').map((x) => x.role)).toEqual(['hot', 'cold']);
     expect(f.find((x) => x.kind === 'efficiency')?.role).not.toBe('aside');
   });
+  it('a figure said well before the earlier device, and not of it, is the claim\'s own; the one attached to it is the earlier device\'s', () => {
+    const f = extractFigures('The new inverter takes 48 V at 25 A from the boat\'s battery bank and delivers 1,140 W, a conversion that beats the 88 % of its previous model. It weighs 3.1 kg.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.text, x.role])).toEqual([
+      ['48 V at 25 A', 'in'],
+      ['1,140 W', 'out'],
+    ]);
+    expect(f.find((x) => x.text === '88 %')?.role).toBe('aside');
+    // (Figures said to be of the earlier device, before it is named, stay its own.)
+    const g = extractFigures('The 500 W and the 120 W in the leaflet were measured on the previous model. The unit weighs 2 kg.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['aside', 'aside']);
+  });
   it('"the older model drew 2.1 kW" is still an earlier device', () => {
     const f = extractFigures('The older model drew 2.1 kW. This new unit gives 3 kW from 4 kW of input.');
     expect(f.find((x) => x.text === '2.1 kW')?.role).toBe('aside');

@@ -258,6 +258,10 @@ const COMPARED_BEFORE_RE =
  */
 /** Right before old machines: someone keeps them ("restores", "collects", "repairs", "rebuilds"). */
 const KEEPER_VERB_BEFORE_RE = /(?<!\p{L})(?:restor(?:es|ed|ing|e)|collect(?:s|ed|ing)?|repair(?:s|ed|ing)?|rebuild(?:s|ing)?|rebuilt|fix(?:es|ed|ing)?|maintain(?:s|ed|ing)?|restorer[^\S\n]+of|collector[^\S\n]+of)[^\S\n]+(?:(?:the|some|a[^\S\n]+few|many)[^\S\n]+)?$/iu;
+/** Between a figure and the earlier device after it: the figure is the earlier device's ("the 88 % of its", "2 kW for the", "(the"). */
+const ATTACHED_TO_EARLIER_RE = /^[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,2}?(?:of|for|from|on|by|in|with)[^\S\n]+(?:(?:its|the|their|our|my|an?|this|that)[^\S\n]+)?$|^[^\S\n]*(?:\(|[-–—:])?[^\S\n]*(?:(?:its|the|their|our|my|an?)[^\S\n]+)?$/iu;
+/** The earlier device is the sentence's subject, named before its figures ("Our previous prototype reached 35 % at 800 W"), or its figures are said to be its ("… were measured on the old unit"). */
+const EARLIER_SUBJECT_RE = /(?<!\p{L})(?:were|was|are|is)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}?(?:on|of|for|from|with|by)[^\S\n]+(?:(?:its|the|their|our|my|an?|this|that)[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+)?(?:previous|earlier|older|former|first-generation|last year's|original|old|predecessor)(?!\p{L})/iu;
 function earlierDeviceSaid(text: string, d: Draft): boolean {
   const sentence = sentenceAround(text, d.start, d.end);
   // "85 mN …, far more than earlier devices of the same kind": the earlier devices are what the
@@ -274,6 +278,9 @@ function earlierDeviceSaid(text: string, d: Draft): boolean {
   const replacedWith = /(?<!\p{L})replac(?:ed|es|ing)[^\S\n]+(?:the|its|their|our|my|an?)[^\S\n]+(?:old|previous|earlier|former|original)(?!\p{L})[^.;!?\n]*?[^\S\n]with[^\S\n]/iu.exec(sentence);
   if (replacedWith && at >= 0 && d.start - at > replacedWith.index + replacedWith[0].length) return false;
   if (earlier && at >= 0 && d.start - at < earlier.index && ABOVE_BEFORE_RE.test(sentence.slice(0, earlier.index)) && !/\d/u.test(sentence.slice(earlier.index))) return false;
+  // ("The new inverter takes 48 V at 25 A and delivers 1,140 W, a conversion that beats the 88 % of its
+  // previous model": a figure said well before the earlier device, and not of it, is the claim's own.)
+  if (earlier && at >= 0 && d.end - at <= earlier.index && !ATTACHED_TO_EARLIER_RE.test(sentence.slice(d.end - at, earlier.index)) && !EARLIER_SUBJECT_RE.test(sentence.slice(0, earlier.index + earlier[0].length))) return false;
   if (earlier && !LATEST_DEVICE_RE.test(sentence)) return true;
   const clause = clauseAround(text, d);
   return EARLIER_DEVICE_RE.test(clause) && !LATEST_DEVICE_RE.test(clause) && LATEST_DEVICE_RE.test(sentence);

@@ -146,7 +146,7 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       // A log's "Load: 40 W lamp".
       '(?<=(?:^|\\n)[^\\S\\n]*)loads?[^\\S\\n]*[:=]',
       'got out', 'gets out', 'obtained', 'measured at the output', 'at the output', 'on the output', 'output side', 'useful', 'electrical output',
-      'supplies a', 'supplying a', '(?:can|could|will|would|may|might|able to) (?:supply|provide)', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran (?:a|an|the)', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
+      'supplies a', 'supplying a', '(?:can|could|will|would|may|might|should|shall|must|able to) (?:supply|provide)', 'give', 'gives back', 'returns', 'return of', 'keeps?', 'kept', 'ran (?:a|an|the)', 'runs? (?:a|an|the)', 'gain(?:s|ed)?',
       '(?:battery|output|load|consumer|secondary|grid) side', 'secondary', 'puts(?! (?:it |them )?at)', 'put(?! (?:it |them )?at)',
       // "the pulse-tube stage lifts 0.15 W at 4.2 K": the heat a cooler lifts is what it gives (its cooling).
       '(?:lifts|lifting|lifted)(?= (?:about |only |just |roughly |some |up to )?$)', 'turns? out', 'discharg(?:ed|ing|es)(?: at)?', '(?:can|could|will|would|to) discharge(?: at)?', 'gave back', 'on the shaft', 'at the shaft', '(?:generators?|alternators?|dynamos?)(?: (?!(?:is|was|are|were|being|been)\\b)[\\w-]+){0,5}? (?:sends?|sent|pushes|pushed|returns?|returned|puts? back|delivers|supplies)', '(?:shaft|brake) (?:power|output)(?:\x27s|\u2019s)?', 'dump(?:s|ed)?', '(?<![\\w-])out ?=', 'P_?\\{?out\\}?', 'E_?\\{?out\\}?', 'W_?\\{?out\\}?', 'P_?o', 'Pout', 'into the (?:load|grid|house|battery|bath|tank)',
