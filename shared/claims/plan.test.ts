@@ -2156,3 +2156,27 @@ test('a cryocooler that "lifts 3 W of heat at 80 K, with rejection to a 300 K ro
   // Cooling COP 3/90 against the Carnot bound Tc/(Th − Tc) = 80/220 (Carnot).
   expect(out(c, 'cop_cooling_ratio')).toBeCloseTo(3 / 90 / (80 / 220), 9);
 });
+
+describe('nothing in, said of every input at once, and heat passed on with nothing driving it (issue 11, invented test data)', () => {
+  const verdicts = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.map((c) => [c.check, c.finding]);
+
+  it('"produced 2 hp continuously with no electrical or fuel input" breaks the first law; the size it is to be scaled up to is no input', () => {
+    const text = 'The applicant states that the magnet motor has produced 2 hp continuously with no electrical or fuel input for 5K hours, and asks for £250,000 to scale it up to 50 hp.';
+    const figures = extractFigures(text);
+    expect(figures.find((f) => f.text === '50 hp')?.role).toBe('aside');
+    expect(figures.find((f) => f.kind === 'power' && f.role === 'in')?.si).toBe(0);
+    expect(verdicts(text)).toEqual([['first-law', 'breaks']]);
+  });
+
+  it('a heat pipe, a thermosiphon or a passive cooler moving heat "with no electrical input" is no machine making energy', () => {
+    for (const text of [
+      'The heat pipe moves 200 W with no electrical or mechanical input.',
+      'The thermosiphon loop carries 3 kW of heat from the collector to the store with no electrical input.',
+      'The passive cooling tower has no external power source and rejects 40 kW of heat.',
+    ]) {
+      expect(verdicts(text).filter(([, finding]) => finding === 'breaks')).toEqual([]);
+    }
+    // (A box said to give heat with nothing going in still breaks it.)
+    expect(verdicts('The sealed box gives 40 W of heat with no electrical or fuel input.')).toEqual([['first-law', 'breaks']]);
+  });
+});

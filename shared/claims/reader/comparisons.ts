@@ -43,7 +43,7 @@ export function relate(text: string, drafts: Draft[]): void {
     const sentenceBefore = text.slice(windowStart(text, d.start, 0, 200), d.start);
     // ("Explain why no accelerator, however powerful, could ever make the label read 3.1 × 10⁸ m/s": a figure
     // said to be out of reach.)
-    return PROPOSED_BEFORE_RE.test(before) || ASKED_BEFORE_RE.test(before) || CITED_FINDING_BEFORE_RE.test(sentenceBefore) || CALIBRATION_BEFORE_RE.test(before) || CONTROL_RUN_BEFORE_RE.test(sentenceBefore) || OUT_OF_REACH_BEFORE_RE.test(sentenceBefore);
+    return PROPOSED_BEFORE_RE.test(before) || SCALED_UP_BEFORE_RE.test(before) || ASKED_BEFORE_RE.test(before) || CITED_FINDING_BEFORE_RE.test(sentenceBefore) || CALIBRATION_BEFORE_RE.test(before) || CONTROL_RUN_BEFORE_RE.test(sentenceBefore) || OUT_OF_REACH_BEFORE_RE.test(sentenceBefore);
   });
   // ("The heater takes 140 W; the tube gives off 175 W. If that held for a month, it would have delivered
   // 91 MJ more": an energy or a run supposed over powers stated plainly is the writer's sum, not a figure.)
@@ -320,6 +320,8 @@ const OTHERS_CLAIM_RE = /(?<!\p{L})(?:competitors?|rivals?|rival (?:makers?|firm
 const PROPOSED_BEFORE_RE =
   /(?<!\p{L})(?:(?:target(?:ed)?[^\S\n]+(?:product|market|version|model)|planned[^\S\n]+(?:product|version|model)|roadmap|next[^\S\n]+product)[^\S\n]*:[^\S\n]*(?:[\p{L}-]+[^\S\n]+){0,2}|(?:propos\w*|suggest\w*|offer\w*|plans?|planned|planning|intends?|hopes?|wants?|raising [^.;!?\n]{0,40}?)[^\S\n]+(?:to[^\S\n]+)?(?:repeat\w*|build\w*|test\w*|try\w*|tried|run\w*|scal\w*|mak\w*|develop\w*|launch\w*|offer\w*|sell\w*)(?:[^\S\n]+(?:it|them|the[^\S\n]+[\p{L}-]+))?(?:[^\S\n]+up)?(?:[^\S\n]+(?:at|with|to|on))?(?:[^\S\n]+(?:an?|the))?|(?:plans?|planned|planning|promis\w*|announc\w*|is preparing|prepares)[^\S\n]+(?:an?|the)(?:[^\S\n]+(?:larger|bigger|smaller|new|later|future|next|second|home|commercial))?)[^\S\n]*$/iu;
 /** Just before a figure asked about: "asked whether 3 km/s … was possible", "whether a reduced power of 50 W had been tried". */
+/** Just before a size the device is to be scaled up to: "asks for £250,000 to scale it up to 50 hp", "will scale the design up to a". */
+const SCALED_UP_BEFORE_RE = /(?<!\p{L})(?:to|will|would|could|can|should|and|then|plans?[^\S\n]+to|hopes?[^\S\n]+to)[^\S\n]+scale[^\S\n]+(?:(?:it|them|this|that|production|output|(?:the|its|their)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?[\p{L}-]+)[^\S\n]+)?up[^\S\n]+(?:to|into)[^\S\n]+(?:(?:an?|some|about|around|roughly)[^\S\n]+)?$/iu;
 const ASKED_BEFORE_RE = /(?<!\p{L})(?:asked|asks|asking|wondered|wonders|wanted to know)[^\S\n]+(?:(?:us|them|him|her|me|the \p{L}+)[^\S\n]+)?(?:whether|if)(?!\p{L})[^.;!?\n]{0,50}$/iu;
 /** Right after a figure: the device it belongs to was replaced by the one claimed ("the 9 kW oil boiler it replaced"). */
 const REPLACED_AFTER_RE =

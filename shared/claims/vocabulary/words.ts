@@ -145,7 +145,9 @@ export const SELF_RUNNING_WORDS = [
   '(?:battery|supply|mains|power|source) (?:is |was |being )?(?:disconnected|taken out|removed|unplugged)', '(?:turning|running|spinning|going) on its own', '(?:battery|supply) (?:taken out|removed)',
   // "Nothing enters or leaves the box", "nothing goes in": a sealed box said to take in nothing.
   'nothing (?:enters|goes in(?:to it)?|comes in|is fed in|gets in|enters or leaves|goes in or (?:out|comes out))', 'nothing connected to it', 'with nothing connected', 'disconnected from', '(?:any |an )?outside (?:source|supply|power)', 'without (?:drawing|taking|using|consuming) anything(?: from outside)?',
-  'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
+  'no (?:electrical |electric |external |mechanical |outside )?(?:input|supply|power source|energy source)',
+  // "with no electrical or fuel input": every input named absent.
+  'no (?:electrical|electric|external|mechanical|outside|fuel|chemical)(?:,? (?:or|and|nor) (?:electrical|electric|external|mechanical|outside|fuel|chemical))+ (?:inputs?|supply|supplies|power|energy)', 'no power at all', 'with no input', 'loop(?:ed|s)? (?:the )?output back', 'perpetual', 'runs? (?:by itself|on its own|forever|indefinitely)',
   // A sheet's label said to be empty: "Input: none", "Power source: nil".
   '(?:(?:electrical|electric|power|energy|external) )?(?:input|supply|power source|energy source)(?: (?:power|energy))?[^\\S\\n]*[:=][^\\S\\n]*(?:none|nil|nothing|zero|not needed|not required)',
   // "No mains, no battery in the box", "nothing connected but the lamp".
@@ -170,6 +172,10 @@ export const HARVEST_WORDS = [
   'nuclear', 'radioisotope', 'RTG', 'decay', 'chemical', 'fuel cell', 'reactors?', 'fission', 'tidal', 'geothermal', 'hot springs?', 'volcan\\w*', 'ocean thermal', 'OTEC', 'hot (?:rock|brine|well)s?',
   // A vehicle or set that burns fuel (a "self-charging" hybrid charges from its engine).
   'petrol', 'gasoline', 'diesel', 'combustion engine', '(?:petrol|diesel|gas) engine', 'burns? (?:fuel|petrol|diesel|gas)', 'regenerative braking', 'braking',
+  // Heat passed on from a warmer body to a cooler one with nothing driving it: the heat it "moves" comes from
+  // outside ("the heat pipe moves 200 W with no electrical input", "a passive cooling tower rejects 40 kW").
+  'heat[- ]?pipes?', 'thermo-?syphons?', 'thermo-?siphons?', 'vapou?r chambers?', 'cooling towers?', 'heat[- ]?sinks?', 'heat exchangers?', 'radiative(?:ly)? cool\\w*', 'passive(?:ly)? cool\\w*',
+  'natural (?:convection|circulation|draught|draft)', 'convection', '(?:moves?|moving|carries|carrying|carry|transfers?|transferring|transports?|transporting|conducts?|conducting|rejects?|rejecting|sheds?|shedding) (?:about |some |up to )?(?:[\\d.,]+ ?(?:k|M)?W (?:of )?)?(?:the )?heat',
 ];
 
 /** Nouns after "5K" that make the K a thousand ("5K cycles"), not kelvins. */
