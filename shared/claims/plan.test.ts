@@ -2176,6 +2176,10 @@ describe('nothing in, said of every input at once, and heat passed on with nothi
     ]) {
       expect(verdicts(text).filter(([, finding]) => finding === 'breaks')).toEqual([]);
     }
+    // "taking the rest as heat from the lattice": a second input named, not measured, so the check asks for it.
+    const led = 'Our thermoelectric LED delivered 69 pW of light from 30 pW of electrical input, taking the rest as heat from the lattice.';
+    expect(verdicts(led)).toEqual([]);
+    expect(runClaimChecks(extractFigures(led), { text: led }).needs.map((n) => n.check)).toEqual(['first-law']);
     // (A box said to give heat with nothing going in still breaks it.)
     expect(verdicts('The sealed box gives 40 W of heat with no electrical or fuel input.')).toEqual([['first-law', 'breaks']]);
   });

@@ -18,6 +18,10 @@ import type { ThrustReading } from './thrust';
  */
 const UNMEASURED_OTHER_INPUT_RE =
   /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:extra|excess|surplus|additional)(?:[^\S\n]+(?:energy|power|light|output))?[^\S\n]+(?:comes?|coming|came|is[^\S\n]+drawn|drawn|taken|supplied)[^\S\n]+from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth|lattice|phonons|surroundings|room|pump(?:[^\S\n]+(?:laser|diodes?|light))?|sunlight)(?!\p{L})|(?:the[^\S\n]+)?(?:rest|remainder|balance|difference)[^\S\n]+(?:(?:of[^\S\n]+(?:it|the[^\S\n]+[\p{L}-]+)[^\S\n]+)?(?:is|are|comes?|came|coming|being|was)[^\S\n]+)(?:(?:made[^\S\n]+up[^\S\n]+by|made[^\S\n]+up[^\S\n]+from|supplied[^\S\n]+by|provided[^\S\n]+by|drawn[^\S\n]+from|taken[^\S\n]+from|from|by)[^\S\n]+)?(?:the[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:sun|sunlight|solar|ambient|air|ground|earth|fuel|gas|wind|environment|surroundings|waste[^\S\n]+heat|process[^\S\n]+heat|steam)|(?:solar|sun|wind|ambient)[- ]assisted|anti-?Stokes|laser[^\S\n]+cool(?:ing|ed)|optical[^\S\n]+(?:refrigeration|cooling)|(?:crystal|sample|device|LED|diode|chip|emitter)[^\S\n]+(?:cools|is[^\S\n]+cooled|was[^\S\n]+cooled|cooled)|(?:sun|sunlight|solar|ambient|outdoor|outside|air|ground|earth|fuel|gas|wind|environment|surroundings|waste[^\S\n]+heat|process[^\S\n]+heat|steam)(?:[^\S\n]+(?:heat|energy|warmth|air))?[^\S\n]+(?:supplies|supplied|provides|provided|makes[^\S\n]+up|made[^\S\n]+up|covers|covered|contributes|contributed|gives|accounts[^\S\n]+for)[^\S\n]+the[^\S\n]+(?:rest|remainder|balance|difference)|(?:at|on|with)[^\S\n]+(?:the[^\S\n]+)?(?:high|rising|flood)[^\S\n]+tides?|natural[^\S\n]+(?:inflows?|run-?off)|(?:rain(?:fall)?|snow-?melt|river)[^\S\n]+inflows?|(?:plus|together[^\S\n]+with|along[^\S\n]+with|topped[^\S\n]+up[^\S\n]+(?:by|with))[^\S\n]+(?:free[^\S\n]+|unmeasured[^\S\n]+|some[^\S\n]+)?(?:sunlight|solar[^\S\n]+(?:heat|gain|energy)|ambient[^\S\n]+heat|heat[^\S\n]+from[^\S\n]+the[^\S\n]+(?:air|ground|sun)))(?!\p{L})/iu;
+/** The device said to take the rest from outside: "taking the rest as heat from the lattice", "draws the difference from the room air". */
+const REST_TAKEN_FROM_RE =
+  /(?<!\p{L})(?:taking|takes|took|drawing|draws|drew|pulling|pulls|pulled|absorbing|absorbs|absorbed|extracting|extracts|extracted|getting|gets|got)[^\S\n]+(?:the[^\S\n]+)?(?:rest|remainder|balance|difference|extra|excess|shortfall)[^\S\n]+(?:(?:as|in[^\S\n]+the[^\S\n]+form[^\S\n]+of)[^\S\n]+(?:heat|warmth|thermal[^\S\n]+energy)[^\S\n]+)?from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat|warmth|lattice|phonons|surroundings|room|air|ground|earth|environment|sun|sunlight|ambient)(?!\p{L})/iu;
+const otherInputNamed = (text: string) => UNMEASURED_OTHER_INPUT_RE.test(text) || REST_TAKEN_FROM_RE.test(text);
 /** A machine said to run by itself. */
 const SELF_RUNNING_CLAIM_RE = new RegExp(`(?<!\\p{L})(?:${alt(SELF_RUNNING_WORDS)})(?!\\p{L})`, 'iu');
 /** A machine that harvests a flow from outside (sunlight, wind, heat) is no self-running one. */
@@ -330,7 +334,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     [...power, ...energy].some((f) => f.role === 'in' && HEAT_SOURCE_AFTER_RE.test(text.slice(f.end ?? 0, (f.end ?? 0) + 50)));
   // "… only 300 W comes from the wall, the rest is sunlight": a further input the text names but does not
   // measure; the one stated input is not all that goes in.
-  const otherInput = (eIn || pIn) && (eOut || pOut) && !sourceHeatIn && UNMEASURED_OTHER_INPUT_RE.test(text) && [...power, ...energy].filter((f) => f.role === 'in').length === 1;
+  const otherInput = (eIn || pIn) && (eOut || pOut) && !sourceHeatIn && otherInputNamed(text) && [...power, ...energy].filter((f) => f.role === 'in').length === 1;
   if (otherInput) {
     needs.push(
       need(
@@ -448,7 +452,7 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
         [efficiency!],
       ),
     );
-  } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop && UNMEASURED_OTHER_INPUT_RE.test(text)) {
+  } else if (!plans.some((p) => p.check === 'carnot') && (efficiency?.si ?? 0) > 1 && !cop && otherInputNamed(text)) {
     // "120 % electrical efficiency, the rest of the energy coming from waste heat": an efficiency over one
     // input of several, the others unmeasured.
     needs.push(need('first-law', ['the energy of the other input the text names (heat, sunlight, fuel), measured'], 'The text says part of what goes in comes from a source its efficiency leaves out: over all its inputs the device may give back less than it takes.', [efficiency!]));
