@@ -520,3 +520,11 @@ test('"for every 10 kWh we put in, about 8.4 kWh comes back out" is in, then out
   expect(f.find((x) => x.text === '10 kWh')!.role).toBe('in');
   expect(f.find((x) => x.text === '8.4 kWh')!.role).toBe('out');
 });
+
+test("a machine's rating beside what it can give is no input; a driving machine's rating still is the driven one's (issue 11, invented test data)", () => {
+  const f = extractFigures("The e-bike's motor is rated 250 W, but it can deliver 600 W for short climbs.");
+  expect(f.find((x) => x.text === '250 W')?.role).not.toBe('in');
+  expect(runClaimChecks(f, { text: "The e-bike's motor is rated 250 W, but it can deliver 600 W for short climbs." }).checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+  expect(extractFigures('The coil generator gives 20 A at 110 V while the motor turning it is rated at just 2 hp.').find((x) => x.text === '2 hp')?.role).toBe('in');
+  expect(extractFigures('My steam engine makes about 2 hp. The burner is rated 60,000 BTU/h.').find((x) => x.text === '60,000 BTU/h')?.role).toBe('in');
+});

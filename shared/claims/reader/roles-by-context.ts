@@ -128,6 +128,19 @@ const SUPPLY_RATING_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:(?!(?:from|the|a|an|of
 /** Between two values of a flattened table of runs: "; Run 2: ", ", run 3, ", "; hour 24, ", ", and ". */
 const RUN_TABLE_GAP_RE = /^[^\S\n]*[;,][^\S\n]*(?:(?:and[^\S\n]+)?(?:[Rr]un|[Dd]ay|[Hh]our|[Tt]est|[Ss]ample|[Pp]oint|[Uu]nit|[Ww]eek|[Mm]onth|[Tt]rial)[^\S\n]*[\w.-]{1,4}[^\S\n]*[:,]?[^\S\n]*|and[^\S\n]+)?$/u;
 
+/** A figure said as a machine's rating: "is rated 250 W", "rated at 3 kW", "a rating of 5 kW", "250 W rated", "1.5 kW continuous". */
+function ratedAs(text: string, d: Draft): boolean {
+  // (Not where one machine drives another — "the motor turning it is rated at just 2 hp", "Rated at 75 PS,
+  // the tractor engine drives an alternator" — the driver's rating is the driven one's input; nor a burner's,
+  // a heater's or a supply's rating, which is what it feeds in.)
+  if (/(?<!\p{L})(?:driv(?:es|ing|en)|drove|turn(?:s|ing|ed)|spin(?:s|ning)|spun|coupled|belted|geared|alternators?|generators?|dynamos?)(?!\p{L})/iu.test(text)) return false;
+  if (/(?<!\p{L})(?:burners?|heaters?|boilers?|furnaces?|elements?|supply|supplies|chargers?|adapters?|adaptors?|mains|grid|compressors?)(?!\p{L})[^.;!?\n]{0,30}$/iu.test(text.slice(Math.max(0, d.start - 40), d.start))) return false;
+  return (
+    /(?<!\p{L})(?:rated|rating(?:[^\S\n]+(?:of|is|was))?|nameplate(?:[^\S\n]+(?:rating|power|output))?(?:[^\S\n]+(?:of|is|was))?|nominal(?:ly)?)[^\S\n]*(?:(?:at|for|to)[^\S\n]+)?[:=]?[^\S\n]*(?:(?:about|around|roughly|some|only|just|up[^\S\n]+to)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, d.start - 40), d.start)) ||
+    RATING_WORD_AFTER_RE.test(text.slice(d.end, d.end + 25))
+  );
+}
+
 export function rolesByContext(text: string, drafts: Draft[]): void {
   // "covers 4.2 light years in 30 days": a speed, distance over time (IAU 2012 B2 astronomical unit,
   // IAU 2015 B2 parsec, the light-year of the Julian year).
@@ -408,7 +421,9 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     else if (totalOf) open[0].role = totalOf.role;
     else if (goesOn || meanOf || elided) open[0].role = prev.role;
     else if (named.filter(own).every((d) => d.role === 'in')) open[0].role = 'out';
-    else if (named.filter(own).every((d) => d.role === 'out')) open[0].role = 'in';
+    // ("The e-bike's motor is rated 250 W, but it can deliver 600 W for short climbs": a machine's rating
+    // beside what it gives is no input; a rating of what it draws has its own words, read before.)
+    else if (named.filter(own).every((d) => d.role === 'out') && !ratedAs(text, open[0])) open[0].role = 'in';
   }
   // "propellant is 90 % of the vehicle's mass", "90 % propellant by mass": the propellant from a fraction.
   const fraction = PROPELLANT_FRACTION_RE.exec(text);
