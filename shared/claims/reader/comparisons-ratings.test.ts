@@ -528,3 +528,10 @@ test("a machine's rating beside what it can give is no input; a driving machine'
   expect(extractFigures('The coil generator gives 20 A at 110 V while the motor turning it is rated at just 2 hp.').find((x) => x.text === '2 hp')?.role).toBe('in');
   expect(extractFigures('My steam engine makes about 2 hp. The burner is rated 60,000 BTU/h.').find((x) => x.text === '60,000 BTU/h')?.role).toBe('in');
 });
+
+test('what leaves the device and what reaches the drum are its output (issue 11, invented test data)', () => {
+  const f = extractFigures('The cell was fed 40 W of electrical power while the calorimeter recorded 46 W of heat leaving it. Over the run that is roughly 7 MJ no chemistry explains.');
+  expect(f.find((x) => x.text === '46 W')?.role).toBe('out');
+  const g = extractFigures('Our winch supplier lists 48 V, 40 A draw and 1.6 kW at the drum for the model.');
+  expect(g.find((x) => x.text === '1.6 kW')?.role).toBe('out');
+});
