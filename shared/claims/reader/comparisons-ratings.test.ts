@@ -535,3 +535,14 @@ test('what leaves the device and what reaches the drum are its output (issue 11,
   const g = extractFigures('Our winch supplier lists 48 V, 40 A draw and 1.6 kW at the drum for the model.');
   expect(g.find((x) => x.text === '1.6 kW')?.role).toBe('out');
 });
+
+test('"gives back 1.3 for every 1 you put in" is a gain; a cooling machine\'s such gain is its cooling COP (issue 11, invented test data)', () => {
+  const text = "An inventor says his pulsed coil circuit 'gives back 1.3 for every 1 you put in', measured with two multimeters.";
+  const f = extractFigures(text);
+  expect(f.map((x) => [x.kind, x.si])).toEqual([['efficiency', 1.3]]);
+  expect(runClaimChecks(f, { text }).checks.map((c) => [c.check, c.finding])).toEqual([['first-law', 'breaks']]);
+  const ac = 'The air conditioner gives 3.5 for every 1 you put in, the salesman says.';
+  const g = extractFigures(ac);
+  expect(g.map((x) => [x.kind, x.role, x.si])).toEqual([['cop', 'cooling', 3.5]]);
+  expect(runClaimChecks(g, { text: ac }).checks.filter((c) => c.finding === 'breaks')).toEqual([]);
+});

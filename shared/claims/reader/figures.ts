@@ -171,6 +171,8 @@ function gainAsCop(text: string, start: number, end: number): { role: 'heating' 
   const sentence = sentenceAround(text, start, end);
   const heating = { role: 'heating' as const, assumption: "A heat pump's heat out as a multiple of its work in: read as a heating COP." };
   if (HEAT_PUMP_RE.test(sentence)) return heating;
+  // ("The air conditioner gives 3.5 for every 1 you put in": a cooling machine's gain, named in its own sentence.)
+  if (COOLING_MACHINE_RE.test(sentence)) return { role: 'cooling', assumption: 'A cooling machine\'s output as a multiple of its work in: read as a cooling COP.' };
   // ("For every kWh it draws, the HP-5 puts 3.4 kWh of heat into your home … 10 years on the compressor": heat
   // given by a machine with a compressor or named a heat pump anywhere in the text.)
   if (/^[^\S\n]*of[^\S\n]+(?:useful[^\S\n]+)?(?:heat|warmth)(?!\p{L})/iu.test(text.slice(end, end + 20)) && /(?<!\p{L})(?:compressors?|refrigerant)(?!\p{L})/iu.test(text.replace(/(?<!\p{L})(?:no|without|not an?|nor|never)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:compressors?|refrigerant(?:[^\S\n]+circuit)?)(?!\p{L})/giu, ' ')) && !COOLING_MACHINE_RE.test(text)) return heating;
