@@ -2184,3 +2184,17 @@ describe('nothing in, said of every input at once, and heat passed on with nothi
     expect(verdicts('The sealed box gives 40 W of heat with no electrical or fuel input.')).toEqual([['first-law', 'breaks']]);
   });
 });
+
+describe('heat delivered across a cold and a hot side by an unnamed machine (issue 11, invented test data)', () => {
+  const findings = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.map((c) => [c.check, c.finding]);
+
+  it('"2 kW in; 6.5 kW heat out; source 10 °C; sink 35 °C" is a heat pump within its Carnot COP, not a first-law break', () => {
+    // Carnot heating COP Th/(Th − Tc) = 308.15/25 = 12.3 (any thermodynamics text; from memory); 6.5/2 = 3.25 is below it.
+    expect(findings('Unit: 2 kW in; 6.5 kW heat out; source 10 °C; sink 35 °C.')).toEqual([['carnot', 'consistent']]);
+    expect(findings('The device takes 500 W and gives 1.6 kW of heat, working between 0 °C and 35 °C.')).toEqual([['carnot', 'consistent']]);
+  });
+
+  it('a heater named still cannot give more heat than it takes', () => {
+    expect(findings('The heater takes 500 W and gives 1.6 kW of heat; room 20 °C, outside 0 °C.')).toEqual([['first-law', 'breaks']]);
+  });
+});

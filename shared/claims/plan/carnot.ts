@@ -9,7 +9,7 @@ import { at, heatMoverCop, need, ofKind, outOverIn, paragraphKey, sentenceKey, u
 import { paragraphOfAnotherMachine, sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE, heatEngineBeyondSink } from './signals';
 
-const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|ground (?:at|temperature|source)|heat (?:drawn |taken |pulled )?from the (?:ground|earth|soil|outdoor air|outside air|river|lake)(?!')|brine|well water|ground ?water|borehole|source temperature|outdoors?|(?<=\d[^\S\n]*(?:°[^\S\n]*[CFK]?|degrees?(?:[^\S\n]+(?:C|F|Celsius|Fahrenheit|centigrade))?|[CFK])[^\S\n]+)outside)(?!\p{L})/iu;
+const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|ground (?:at|temperature|source)|heat (?:drawn |taken |pulled )?from the (?:ground|earth|soil|outdoor air|outside air|river|lake)(?!')|brine|well water|ground ?water|borehole|source temperature|(?:heat[^\S\n]+)?source(?:[^\S\n]+(?:side|temperature|temp\.?))?[^\S\n]*(?:at|[:=])?[^\S\n]*(?=[-−–]?\d+(?:[.,]\d+)?[^\S\n]*(?:°|degrees?(?!\p{L})|K(?!\p{L})|deg(?!\p{L})))|outdoors?|(?<=\d[^\S\n]*(?:°[^\S\n]*[CFK]?|degrees?(?:[^\S\n]+(?:C|F|Celsius|Fahrenheit|centigrade))?|[CFK])[^\S\n]+)outside)(?!\p{L})/iu;
 const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
@@ -222,7 +222,25 @@ export function planCarnot(b: Basis): HeatReading {
   // ("Rated 12 kW of heat for 3 kW of electricity": heat out and electricity in, from a machine the text does
   // not name and does not say makes its heat from nothing — a heat pump's rating as much as any.)
   const heatOutElectricIn = unnamedHeatGain(text, pIn ?? eIn, pOut ?? eOut) && !s.overUnity && !s.heatEngine;
-  const movesHeat = !elsewhere && (s.heatPump || cooling || heatFromSource || statedCop || heatOutElectricIn || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity));
+  // ("Unit: 2 kW in; 6.5 kW heat out; 10 °C / 35 °C", "takes 500 W and gives 1.6 kW of heat, working between
+  // 0 °C and 35 °C": heat delivered, more than the work in, by a machine given a cold and a hot side and not
+  // said to make its heat — what a heat pump does; its bound is the Carnot COP of those sides.)
+  const outF = pOut ?? eOut;
+  const heatOutAcross =
+    !inIsHeat &&
+    !!(pIn ?? eIn) &&
+    outF !== undefined &&
+    outF.start !== null &&
+    outF.end !== null &&
+    temps.some((t) => t.role === 'hot') &&
+    temps.some((t) => t.role === 'cold') &&
+    (/^[^\S\n]*(?:[\p{L}]+[^\S\n]+)?(?:of[^\S\n]+)?(?:useful[^\S\n]+)?(?:heat|heating|warmth)(?!\p{L})/iu.test(text.slice(outF.end, outF.end + 25)) || /(?<!\p{L})(?:heat|heating)(?:[^\S\n]+(?:output|out|delivered|capacity))?[^\S\n]*[:=]?[^\S\n]*$/iu.test(text.slice(Math.max(0, outF.start - 25), outF.start))) &&
+    !MADE_HEAT_RE.test(text) &&
+    // (A heater, a stove or a fire named: a maker of heat, whose heat out cannot pass what it takes.)
+    !/(?<!\p{L})(?:heaters?|stoves?|fires?|fireplaces?)(?!\p{L})/iu.test(text) &&
+    !s.overUnity &&
+    !s.heatEngine;
+  const movesHeat = !elsewhere && (s.heatPump || cooling || heatFromSource || statedCop || heatOutElectricIn || heatOutAcross || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity));
   // ("Heating capacity 36,000 BTU/h … drawing 3.1 kW" of a mini-split: heat delivered, whatever cooling words the name has.)
   const outFigure = pOut ?? eOut;
   const outHeating = outFigure?.start != null && /(?<!\p{L})heating(?:[^\S\n]+(?:capacity|output|power|duty))?[^\S\n]*[:=]?[^\S\n]*(?:(?:of|is|was|about|up to)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, outFigure.start - 40), outFigure.start));
