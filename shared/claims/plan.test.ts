@@ -2194,6 +2194,10 @@ describe('heat delivered across a cold and a hot side by an unnamed machine (iss
     expect(findings('The device takes 500 W and gives 1.6 kW of heat, working between 0 °C and 35 °C.')).toEqual([['carnot', 'consistent']]);
   });
 
+  it('"3 kW of warm air … pulls heat from outside at 7 °C into the 21 °C lounge": a heat pump, whatever its seller calls it', () => {
+    expect(findings("My neighbour's 'free heat' box: 1 kW from the socket, 3 kW of warm air, pulls heat from outside at 7 °C into the 21 °C lounge.")).toEqual([['carnot', 'consistent']]);
+  });
+
   it('a heater named still cannot give more heat than it takes', () => {
     expect(findings('The heater takes 500 W and gives 1.6 kW of heat; room 20 °C, outside 0 °C.')).toEqual([['first-law', 'breaks']]);
   });

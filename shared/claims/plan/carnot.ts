@@ -9,7 +9,7 @@ import { at, heatMoverCop, need, ofKind, outOverIn, paragraphKey, sentenceKey, u
 import { paragraphOfAnotherMachine, sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE, heatEngineBeyondSink } from './signals';
 
-const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|ground (?:at|temperature|source)|heat (?:drawn |taken |pulled )?from the (?:ground|earth|soil|outdoor air|outside air|river|lake)(?!')|brine|well water|ground ?water|borehole|source temperature|(?:heat[^\S\n]+)?source(?:[^\S\n]+(?:side|temperature|temp\.?))?[^\S\n]*(?:at|[:=])?[^\S\n]*(?=[-−–]?\d+(?:[.,]\d+)?[^\S\n]*(?:°|degrees?(?!\p{L})|K(?!\p{L})|deg(?!\p{L})))|outdoors?|(?<=\d[^\S\n]*(?:°[^\S\n]*[CFK]?|degrees?(?:[^\S\n]+(?:C|F|Celsius|Fahrenheit|centigrade))?|[CFK])[^\S\n]+)outside)(?!\p{L})/iu;
+const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|ground (?:at|temperature|source)|heat (?:drawn |taken |pulled )?from the (?:ground|earth|soil|outdoor air|outside air|river|lake)(?!')|brine|well water|ground ?water|borehole|source temperature|(?:pulls?|pulled|pulling|draws?|drew|drawn|drawing|takes?|took|taken|taking|extracts?|extracted|extracting|absorbs?|absorbed|absorbing|harvests?|harvested|harvesting|moves?|moved|moving)[^\S\n]+(?:its[^\S\n]+)?heat[^\S\n]+(?:in[^\S\n]+)?from[^\S\n]+(?:the[^\S\n]+)?(?:outside|outdoors|outdoor[^\S\n]+air|outside[^\S\n]+air|air|ground|earth|soil|river|lake|sea|garden|well|borehole)|(?:heat[^\S\n]+)?source(?:[^\S\n]+(?:side|temperature|temp\.?))?[^\S\n]*(?:at|[:=])?[^\S\n]*(?=[-−–]?\d+(?:[.,]\d+)?[^\S\n]*(?:°|degrees?(?!\p{L})|K(?!\p{L})|deg(?!\p{L})))|outdoors?|(?<=\d[^\S\n]*(?:°[^\S\n]*[CFK]?|degrees?(?:[^\S\n]+(?:C|F|Celsius|Fahrenheit|centigrade))?|[CFK])[^\S\n]+)outside)(?!\p{L})/iu;
 const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
@@ -212,7 +212,7 @@ export function planCarnot(b: Basis): HeatReading {
   const heatFromSource = !inIsHeat && HEAT_SOURCE_RE.test(text) && !/(?<!\p{L})no[^\S\n]+(?:heat[- ]pump|outdoor (?:coil|unit))/iu.test(text) && [...power, ...energy].some(
       (f) =>
         f.role === 'out' &&
-        (/^[^.;,]{0,30}?(?:heat|heating)/i.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)) || /(?:heat|heating)(?:[^\S\n]+(?:output|delivered|capacity))?[^.;,]{0,12}$/i.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0))),
+        (/^[^.;,]{0,30}?(?:heat|heating|warm[^\S\n]+air|hot[^\S\n]+(?:air|water))/i.test(text.slice(f.end ?? 0, (f.end ?? 0) + 40)) || /(?:heat|heating)(?:[^\S\n]+(?:output|delivered|capacity))?[^.;,]{0,12}$/i.test(text.slice(Math.max(0, (f.start ?? 0) - 40), f.start ?? 0))),
     );
   const statedCop = ofKind(figures, 'cop').some((f) => !f.derived && (f.role === 'heating' || f.role === 'cooling'));
   // In a report on several machines, figures all in paragraphs of another kind of machine (a generator
