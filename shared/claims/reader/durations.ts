@@ -175,10 +175,11 @@ export function relateDurations(text: string, drafts: Draft[]): void {
     per.role = 'aside';
   }
 
-  // "burns 40,000 BTU of pellets an hour": an energy of something per hour is a power, run or no run.
+  // "burns 40,000 BTU of pellets an hour": an energy of something per hour is a power, run or no run
+  // ("3.4 kWh of heat on a day with 6 kWh of sunlight": a total on one day, not a rate).
   for (const e of drafts) {
     if (e.kind !== 'energy' || e.derived) continue;
-    const m = /^[^\S\n]+of[^\S\n]+(?:[\p{L}-]+[^\S\n]+){1,2}?(?:an?|per|each|every)[^\S\n]+(hour|minute|day)(?!\p{L})/iu.exec(text.slice(e.end, e.end + 50));
+    const m = /^[^\S\n]+of[^\S\n]+(?:(?!(?:on|in|over|during|for|across|within|throughout|that|which|one|the)[^\S\n])[\p{L}-]+[^\S\n]+){1,2}?(?:an?|per|each|every)[^\S\n]+(hour|minute|day)(?!\p{L})/iu.exec(text.slice(e.end, e.end + 50));
     const energy = siOf(e);
     if (!m || energy === null) continue;
     const unitTime = { hour: 3600, minute: 60, day: 86400 }[m[1].toLowerCase() as 'hour' | 'minute' | 'day'];

@@ -520,6 +520,28 @@ describe('more ways claims are written (issue 11)', () => {
     ]);
   });
 
+  test.each([
+    // P = V × I on each side (any circuits textbook): 230 × 0.5 = 115 W, 12 × 8.5 = 102 W; 12 × 5 = 60 W, 96 × 0.58 = 55.68 W.
+    ['Transformer: 230 V in, 12 V out, input 0.5 A, output 8.5 A.', 115, 102],
+    ['Step-up module, ×8 voltage gain: 12 V in / 96 V out; input current 5 A, output 0.58 A.', 60, 55.68],
+  ])('voltages and currents labelled by side apart pair by side: %s', (text, pin, pout) => {
+    expect(read(text).filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', pin],
+      ['out', expect.closeTo(pout, 9)],
+    ]);
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
+  });
+
+  test('a total on one day is no rate per day', () => {
+    // 3.4 kWh = 3.4 × 3.6 MJ (SI Brochure, 9th ed., Table 8: 1 kWh = 3.6 MJ).
+    const text = 'The solar water heater collected 3.4 kWh of heat on a day with 6 kWh of sunlight on its 2 m² panel.';
+    expect(read(text).filter((x) => x.kind === 'energy').map((x) => [x.role, x.si])).toEqual([
+      ['out', expect.closeTo(3.4 * 3.6e6, 3)],
+      ['in', expect.closeTo(6 * 3.6e6, 3)],
+    ]);
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
+  });
+
   test('a weight a propellant-free drive is said to lift is a force', () => {
     // 1 lb = 0.45359237 kg and g0 = 9.80665 m/s² (NIST SP 811 (2008), App. B.8): 3 lbf = 13.3447 N.
     const f = read('The saucer model lifts 3 lbs off the scale with no exhaust using 250 watts.');

@@ -288,6 +288,18 @@ function sectionPowers(text: string, drafts: Draft[]): void {
   }
 }
 
+/**
+ * The side a voltage or a current is labelled with, right before it ("input 0.5 A", "output current
+ * 8.5 A", "in: 12 V") or right after it ("230 V in", "12 V out", "5 A input"); else null. ("12 V in the
+ * lab" is no label.)
+ */
+function sideLabel(text: string, d: Draft): 'in' | 'out' | null {
+  const after = /^[^\S\n]*(in|out|input|output)(?!\p{L})(?![^\S\n]+(?:the|a|an|its|their|this|that|series|parallel|use|total|all)(?!\p{L}))/iu.exec(text.slice(d.end, d.end + 24));
+  const before = /(?:^|[\s,;:(/|])(?:(input|output)(?:[^\S\n]+(?:current|voltage|side))?|(in|out)[^\S\n]*[:=])[^\S\n]*[:=]?[^\S\n]*$/iu.exec(text.slice(Math.max(0, d.start - 30), d.start));
+  const word = after?.[1] ?? before?.[1] ?? before?.[2];
+  return word ? (/^in/i.test(word) ? 'in' : 'out') : null;
+}
+
 /** A supply said to be three-phase: "three-phase", "3-phase", "3~", "three phases", "3 × 16 A". */
 const THREE_PHASE_RE = /(?<!\p{L})(?:three[- ]phases?|3[- ]?phases?|3[^\S\n]?~|3[^\S\n]?[×x][^\S\n]?\d+(?:[.,]\d+)?[^\S\n]?A)(?!\p{L})/iu;
 const SINGLE_PHASE_RE = /(?<!\p{L})(?:single[- ]phase|one[- ]phase|1[- ]phase|1[^\S\n]?~)(?!\p{L})/iu;
@@ -498,7 +510,12 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // voltage whose column names the same part as the current's.)
     const stem = cellStem(text, cur);
     const sameColumn = stem ? free.find((d) => cellStem(text, d) === stem) : undefined;
-    const volt = saidWith(cur, candidates) ?? sameColumn ?? free.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0] ?? batteryVoltage(text, drafts, cur);
+    // Each side labelled apart ("230 V in, 12 V out, input 0.5 A, output 8.5 A"; "12 V in / 96 V out;
+    // input current 5 A, output 0.58 A"): the current goes with the one voltage of its own side.
+    const side = sideLabel(text, cur);
+    const sameSide = side ? candidates.filter((d) => sideLabel(text, d) === side) : [];
+    const sideVolt = sameSide.length === 1 && candidates.some((d) => { const o = sideLabel(text, d); return o !== null && o !== side; }) ? sameSide[0] : undefined;
+    const volt = sideVolt ?? saidWith(cur, candidates) ?? sameColumn ?? free.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0] ?? batteryVoltage(text, drafts, cur);
     if (!volt) continue;
     const i = siOf(cur);
     const v = siOf(volt);
