@@ -300,6 +300,13 @@ function clauseAround(text: string, d: Draft): string {
  */
 const SUPERSEDED_AFTER_RE =
   /^(?:[^.;!?\n]{0,30}?(?<!\p{L})(?:was|were|has been|have been|had been|since|later|then)?[^\S\n]*(?:corrected|revised|amended|lowered|reduced|cut|changed)[^\S\n]+(?:down[^\S\n]+)?to(?!\p{L})|(?:[^.;!?\n\d]|(?:Table|Fig\.?|Figure|Eq\.?|row|line|page|p\.)[^\S\n]*[\dA-Z]+){0,30}?(?:[.;][^\S\n]+(?:it|this|that|the (?:value|figure|number))[^\S\n]+)?(?<!\p{L})should(?:[^\S\n]+have)?[^\S\n]+(?:read|been|be)(?!\p{L}))/iu;
+/**
+ * Right after a figure: the writer puts it right in the same sentence ("a Δv of 7.2 km/s in the spring, or
+ * rather 6.1 km/s once we redid the sums", "5 kW — make that 4.6 kW", "3 kW, I mean 3.5"): the later figure
+ * is the claim's.
+ */
+const PUT_RIGHT_AFTER_RE =
+  /^[^.;!?\n\d]{0,40}?(?:,|—|–|\(|[^\S\n]-)[^\S\n]*(?:or[^\S\n]+(?:rather|more[^\S\n]+(?:exactly|precisely|accurately))|make[^\S\n]+that|I[^\S\n]+mean|sorry|correction)(?!\p{L})[^\S\n]*[,:]?[^\S\n]*(?:(?:about|around|roughly|some|only|just|nearer|closer to)[^\S\n]+)?\d/iu;
 /** Just before a figure: a verb denied ("does not produce", "is not", "never gave"), with the figure perhaps in quotes. */
 const DENIED_BEFORE_RE = /(?<!\p{L})(?:(?:does|did|do|is|was|were|are|has|have|had)(?:n['’]t|[^\S\n]+not)|not|never)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?["“‘']?(?:about[^\S\n]+)?$/iu;
 /** Right after a denied figure: the right one follows ('", it produces 3.3 µN', "but 300 W", "; rather …", "— only …"). */
@@ -358,7 +365,7 @@ function saidInComparison(text: string, d: Draft): boolean {
   // "Our previous prototype reached 35 % at 800 W": an earlier device, not the one claimed.
   if (earlierDeviceSaid(text, d)) return true;
   // "The claimed 45 % efficiency was corrected to 4.5 %": a figure superseded by the one after it.
-  if (SUPERSEDED_AFTER_RE.test(text.slice(d.end, d.end + 60))) return true;
+  if (SUPERSEDED_AFTER_RE.test(text.slice(d.end, d.end + 60)) || PUT_RIGHT_AFTER_RE.test(text.slice(d.end, d.end + 70))) return true;
   // 'Our demonstrator does not produce "3.3 mN", it produces 3.3 µN', 'not 3 kW but 300 W', '300 W, not 3 kW':
   // a figure denied and put right in the same breath.
   if ((DENIED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)) && RIGHTED_AFTER_RE.test(text.slice(d.end, d.end + 40))) || RIGHTED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 12), d.start))) return true;

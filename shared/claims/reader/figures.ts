@@ -179,8 +179,8 @@ function gainAsCop(text: string, start: number, end: number): { role: 'heating' 
   // ("Each kWh of electricity gives 3 kWh of heat": heat out per unit of electricity, by a machine the text
   // does not name and does not say makes its heat from nothing — a heat pump's figure as much as any.)
   if (
-    /^[^\S\n]*(?:kWh|kW|W|J|MJ|units?|joules?|watts?)?[^\S\n]*of[^\S\n]+(?:useful[^\S\n]+)?(?:heat|warmth)(?!\p{L})/iu.test(text.slice(end, end + 25)) &&
-    /(?<!\p{L})(?:electricity|electric(?:al)?|kWh of power|you (?:buy|pay for))(?!\p{L})/iu.test(sentence) &&
+    /^[^\S\n]*(?:kWh|kW|W|J|MJ|units?|joules?|watts?)?[^\S\n]*of[^\S\n]+(?:(?:useful|extra|additional)[^\S\n]+)?(?:heat|warmth)(?!\p{L})/iu.test(text.slice(end, end + 30)) &&
+    /(?<!\p{L})(?:electricity|electric(?:al)?|kWh of power|you (?:buy|pay for)|from the (?:wall|mains|socket|plug|grid))(?!\p{L})/iu.test(sentence) &&
     // (A heat pump's backup or immersion element, named beside it, is no claim that the heat is made by resistance.)
     !NO_AMBIENT_SOURCE_RE.test(text.replace(/(?<!\p{L})(?:backup|back-up|booster|auxiliary|immersion|supplementary|emergency|top-up)[^\S\n]+(?:heat(?:ing)?[^\S\n]+)?(?:elements?|heaters?)(?!\p{L})/giu, ' ')) &&
     !HEAT_MAKER_RE.test(text) &&
@@ -542,12 +542,19 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         const per = PER_UNIT_BEFORE_RE.exec(text.slice(windowStart(text, start, floor, 120), start));
         const first = per ? PER_UNIT_QUANTITY[per[1].toLowerCase()] : undefined;
         // ("Every watt you pay for turns into nearly two watts of warmth": what each unit in becomes.)
-        const becomes = /(?<!\p{L})(?:(?:turns?|turned|converts?|converted)[^\S\n]+into|becomes?|became|gives?|yields?|returns?|produces?|puts?|delivers?)[^\S\n]+(?:(?:back|nearly|about|roughly|almost|some|over|more than|up to)[^\S\n]+)*$/iu.test(text.slice(Math.max(0, start - 40), start));
+        const becomes = /(?<!\p{L})(?:(?:turns?|turned|converts?|converted)[^\S\n]+into|becomes?|became|gives?|yields?|returns?|produces?|puts?|delivers?|adds?|added|supplies|supplied|provides?|provided|pumps?|pumped|moves?|moved)[^\S\n]+(?:(?:back|nearly|about|roughly|almost|some|over|more than|up to)[^\S\n]+)*$/iu.test(text.slice(Math.max(0, start - 40), start));
         if (per && (!first || first.kind === kind) && (COMES_OUT_AFTER_RE.test(text.slice(end, end + 40)) || becomes)) {
           kind = 'efficiency';
           quantity = t.num;
           upper = upperNum;
           derived = 'units out for each unit in';
+          // ("for every kilowatt it takes, the dryer puts 1.6 kW of extra heat into the drum": 1.6 beyond the
+          // one unit in, 2.6 in all.)
+          if (/^[^\S\n]*of[^\S\n]+(?:extra|additional|surplus)(?!\p{L})/iu.test(text.slice(end, end + 20))) {
+            quantity = String(Number((1 + Number(t.num)).toPrecision(15)));
+            upper = upperNum !== undefined ? String(Number((1 + Number(upperNum)).toPrecision(15))) : undefined;
+            derived = 'units out for each unit in (the one unit in and the extra said)';
+          }
           const asCop = gainAsCop(text, start, end);
           if (asCop) {
             kind = 'cop';

@@ -532,6 +532,37 @@ describe('more ways claims are written (issue 11)', () => {
     expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
   });
 
+  test('a figure put right in the same sentence gives way to the later one', () => {
+    // Tsiolkovsky: Δv = Isp g0 ln(m0/mf) (NASA Glenn, "Ideal Rocket Equation"); g0 = 9.80665 m/s² (SI Brochure, 9th ed.):
+    // 300 × 9.80665 × ln(40/5) = 6117.6 m/s, so 5.9 km/s keeps to it and 7.5 km/s would not.
+    const text = 'The upper stage is 40 t fuelled and 5 t dry, Isp 300 s. The brochure said 7.5 km/s of Δv, or rather 5.9 km/s after the review.';
+    const f = read(text);
+    expect(f.filter((x) => x.kind === 'speed').map((x) => [x.role, x.si])).toEqual([
+      ['aside', 7500],
+      ['delta-v', 5900],
+    ]);
+    expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'rocket-equation')?.finding).toBe('consistent');
+  });
+
+  test('a power said as rounded beside its current and voltage is that pair, not a second output', () => {
+    // P = V × I = 5 V × 0.19 A = 0.95 W, said as "about 1 W" (any circuits textbook).
+    const text = 'Tracker tag: 5 V at 190 mA while transmitting (about 1 W), 3 µA in sleep.';
+    const f = read(text);
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', expect.closeTo(0.95, 12)],
+      ['aside', 1],
+    ]);
+    expect(runClaimChecks(f, { text }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+
+  test('"for every kilowatt … 1.6 kW of extra heat" is 2.6 units out for each in: a heat pump\'s COP between its two temperatures', () => {
+    // COP_Carnot = Th/(Th − Tc) = 338.15/45 = 7.51 (Çengel & Boles, ch. 6); 2.8 keeps to it.
+    const text = 'For every kilowatt it draws from the mains, the laundry dryer adds 1.8 kW of extra heat to the drum, lifted from 20 °C room air to 65 °C.';
+    const f = read(text);
+    expect(f.filter((x) => x.kind === 'cop').map((x) => [x.role, x.si])).toEqual([['heating', expect.closeTo(2.8, 12)]]);
+    expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+  });
+
   test('a total on one day is no rate per day', () => {
     // 3.4 kWh = 3.4 × 3.6 MJ (SI Brochure, 9th ed., Table 8: 1 kWh = 3.6 MJ).
     const text = 'The solar water heater collected 3.4 kWh of heat on a day with 6 kWh of sunlight on its 2 m² panel.';
@@ -1292,7 +1323,7 @@ test("funding and review texts: 'in month 14' is no duration, a '20-kg class' no
 
 test('"For every kWh it takes from the socket, it puts 3.2 kWh of heat into the tank": the gain said with the unit in first and a clause between (invented test data)', () => {
   const text = 'Heat pump water heater, intake air 15 °C, water heated to 55 °C. For every kWh it takes from the socket, it puts 3.2 kWh of heat into the tank.';
-  expect(extractFigures(text).find((x) => x.text === '3.2 kWh')).toMatchObject({ si: 3.2, derived: 'units out for each unit in' });
+  expect(extractFigures(text).find((x) => x.text === '3.2 kWh')).toMatchObject({ si: 3.2, kind: 'cop', role: 'heating' });
   // Carnot heating COP 328.15/40 = 8.204 (textbook); 3.2 is 0.390 of it: consistent.
   const run = runClaimChecks(extractFigures(text), { text, classes: [] }).checks.find((c) => c.check === 'carnot');
   expect(run?.finding).toBe('consistent');

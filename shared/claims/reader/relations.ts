@@ -288,6 +288,16 @@ function sectionPowers(text: string, drafts: Draft[]): void {
   }
 }
 
+/** Half the place of a written number's last significant digit, relative to the number ("40" → 5/40, "1" → 0.5, "39.6" → 0.05/39.6). */
+function lastDigitHalf(written: string): number {
+  const m = /\d[\d,]*(?:\.(\d+))?/u.exec(written);
+  if (!m) return 0;
+  const value = Number(m[0].replace(/,/gu, ''));
+  if (!(value > 0)) return 0;
+  const place = m[1] ? 10 ** -m[1].length : 10 ** (/0*$/u.exec(m[0].replace(/,/gu, ''))![0].length);
+  return place / 2 / value;
+}
+
 /**
  * The side a voltage or a current is labelled with, right before it ("input 0.5 A", "output current
  * 8.5 A", "in: 12 V") or right after it ("230 V in", "12 V out", "5 A input"); else null. ("12 V in the
@@ -523,12 +533,18 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     // The text states that power itself already, in the same sentence (not a rating in a title: "a 500 W
     // converter" beside "an input of 10.5 A at 48 V").
     const pairSentence = sentenceAround(text, cur.start, cur.end);
-    const same = drafts.find((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= 0.01 * i * v && sentenceAround(text, d.start, d.end) === pairSentence);
-    if (same) {
+    // (Said as rounded — "3.3 V at 12 mA (≈40 mW)", "5 V at 190 mA (about 1 W)" — within half its last
+    // digit, up to 10 %.)
+    const roundedSaid = (d: Draft) => /(?:≈|~|∼|about|around|roughly|approx\.?|approximately|nearly|almost|some|c\.|ca\.)[^\S\n]*$/iu.test(text.slice(Math.max(0, d.start - 16), d.start));
+    const tolerance = (d: Draft) => (roundedSaid(d) ? Math.min(0.1, Math.max(0.01, lastDigitHalf(text.slice(d.start, d.end)))) : 0.01);
+    const same = drafts.find((d) => d.kind === 'power' && !d.derived && Math.abs((siOf(d) ?? 0) - i * v) <= tolerance(d) * i * v && sentenceAround(text, d.start, d.end) === pairSentence);
+    // (Said as rounded: a restatement of the pair's power, which is worked out exactly from the pair.)
+    if (same && Math.abs((siOf(same) ?? 0) - i * v) > 0.01 * i * v) same.role = 'aside';
+    else if (same) {
       // ("rises on 30 kV at 1.1 mA, just 33 W and no fuel at all": the power said right after the pair is
       // the pair's, what the device is run on, where no words give it a side of its own.)
       const pairEnd = Math.max(cur.end, volt.end);
-      if (same.role === null && same.start >= pairEnd && /^[^\S\n]*(?:,|\(|—|–|-)?[^\S\n]*(?:(?:so|i\.e\.|that['’]s|that[^\S\n]+is|or|just|only|about|roughly|some|which[^\S\n]+is)[^\S\n]+)*$/iu.test(text.slice(pairEnd, same.start))) {
+      if (same.role === null && same.start >= pairEnd && /^[^\S\n]*(?:,|\(|—|–|-)?[^\S\n]*(?:(?:so|i\.e\.|that['’]s|that[^\S\n]+is|or|just|only|about|roughly|some|which[^\S\n]+is|around|approx\.?|approximately|nearly)[^\S\n]+|[≈~∼][^\S\n]*)*$/iu.test(text.slice(pairEnd, same.start))) {
         const first = cur.start < volt.start ? cur : volt;
         same.role = roleFor(text, 'power', first.start, pairEnd, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? 'in';
         if (same.role === 'excess' || same.role === 'aside') same.role = null;
