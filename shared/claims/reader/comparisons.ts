@@ -17,6 +17,16 @@ import { relateFigures } from './relations';
  */
 export function relate(text: string, drafts: Draft[]): void {
   let compared = drafts.filter((d) => d.role !== 'aside' && saidInComparison(text, d));
+  // "It gives 4 W more heat than the 20 W it draws … always the same four watts": a figure said again as
+  // "the same" is the earlier one (of the claim's own), not one more. ("makes 8 mN from the same 1 kW", "on
+  // the same 10 W": what another device, or this one, is run on again — not a restatement.)
+  for (const d of drafts) {
+    const before = text.slice(Math.max(0, d.start - 40), d.start);
+    if (d.role === 'aside' || d.derived || !/(?<!\p{L})(?:the|that|those|this)[^\S\n]+(?:very[^\S\n]+)?same[^\S\n]+(?:(?:about|roughly|some|nearly)[^\S\n]+)?$/iu.test(before)) continue;
+    if (/(?<!\p{L})(?:from|with|on|at|for|using|of|by|to|into|in|under|over)[^\S\n]+(?:(?:exactly|just|precisely)[^\S\n]+)?(?:the|that|those|this)[^\S\n]+(?:very[^\S\n]+)?same[^\S\n]+(?:(?:about|roughly|some|nearly)[^\S\n]+)?$/iu.test(before)) continue;
+    const si = siOf(d);
+    if (si !== null && drafts.some((e) => e !== d && e.start < d.start && e.kind === d.kind && e.role !== 'aside' && siOf(e) === si)) d.role = 'aside';
+  }
   // "The old mill engine worked between 400 °F and 100 °F at 18 %": when every figure is of an earlier
   // device, there is no other: the text is about that one.
   const own = drafts.filter((d) => !d.derived && d.role !== 'aside');

@@ -14,7 +14,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, BURNER_RE, NAMED_
 /** ", measured per §7 of the test protocol," between a COP and its value: a clause set off by commas. */
 // (Or a span of time or a test it was measured over, before a colon: "heating COP over the test week: 3.9".)
 const ASIDE = '(?:(?:[^\\S\\n]+(?:over|during|across|for|in|at)[^\\S\\n]+(?:the|a|an|its|our|this|that|these|those|each|every)[^\\S\\n]+[^\\d,;:.!?\\n]{2,40}?(?=[:,]|[^\\S\\n]+(?:is|was|were|came|averaged|stood|sat|lay|reached|varied|ranged)(?!\\p{L})))?(?:[^\\S\\n]*,[^,;.!?\\n]{3,140},)?)';
-const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|)»”"'’]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
+const CONNECT = `(?:[^\\S\\n]*(?:[=:≈~|)»”"'’“‘«]|(?:${alt(BARE_CONNECTORS)})(?!\\p{L})))*[^\\S\\n]*`;
 /** Between a COP and its value: the mode and whose it is ("COP in cooling of", "heating COP of the BW-8 is"). */
 const COP_OWNER = '(?:[^\\S\\n]+(?:in|for|when)[^\\S\\n]+(?:heating|cooling)(?:[^\\S\\n]+mode)?)?(?:[^\\S\\n]+(?:of|for)[^\\S\\n]+(?:the|this|our|its|each|every|a|an)[^\\S\\n]+(?:[\\p{L}\\p{N}-]+[^\\S\\n]+){0,2}?[\\p{L}\\p{N}][\\p{L}\\p{N}-]*(?=[^\\S\\n]+(?:is|was|were|of|at|lay|lies|sits|sat|stands|stood|ranged|ranges|varied|varies|came|comes|=|:)))?';
 const COP_SYMBOL_BEFORE_RE = new RegExp(`(?<!\\p{L})(?:S?COPs?|C\\.O\\.P\\.?)(?:_?\\{?(?:h|c|H|C|heat|heating|cool|cooling)\\}?(?!\\p{L}))?(?:[^\\S\\n]*\\([^)]{0,20}\\))?${COP_OWNER}${ASIDE}(?:[^\\S\\n]+at)?${CONNECT}$`, 'u');

@@ -563,6 +563,50 @@ describe('more ways claims are written (issue 11)', () => {
     expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
   });
 
+  test("a transformer's primary takes its input and its secondary gives its output", () => {
+    const text = 'The isolation transformer was logged at 2.4 kW on the primary side and 2.3 kW at the secondary.';
+    expect(read(text).map((x) => [x.kind, x.role, x.si])).toEqual([
+      ['power', 'in', 2400],
+      ['power', 'out', 2300],
+    ]);
+  });
+
+  test('"always the same 3 W" again is the earlier figure, not one more; "from the same 1 kW" is a figure of its own', () => {
+    const text = 'The coil in the oil bath gives 3 W more heat than the 15 W it takes. Three repeats, and each time it is the same 3 W.';
+    const f = read(text);
+    expect(f.filter((x) => x.kind === 'power' && x.role !== 'aside').map((x) => [x.role, x.si])).toEqual([
+      ['excess', 3],
+      ['in', 15],
+      ['out', 18],
+    ]);
+    expect(f.filter((x) => x.role === 'aside').map((x) => x.si)).toEqual([3]);
+    // 18 W out of 15 W in: the first law (energy conservation; any thermodynamics textbook).
+    expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+    const g = read('A 2 kW arc heater warms the tank in an hour; our cell warms it in ten minutes from the same 2 kW.');
+    expect(g.filter((x) => x.kind === 'power').map((x) => x.si)).toEqual([2000, 2000]);
+    expect(g.filter((x) => x.kind === 'power')[1].role).not.toBe('aside');
+  });
+
+  test('"from just 3 kW of electricity" is what goes in; "on a 30 °C day" is the weather, not a lift', () => {
+    // 1 BTU/h = 0.29307107 W (NIST SP 811 (2008), App. B.8): 30,000 BTU/h = 8792.1 W.
+    const f = read('The rooftop unit puts out 30,000 BTU/h of heat at 45 °F outdoors from just 3 kW of electricity, supply air at 105 °F.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['out', expect.closeTo(30000 * 0.29307107, 2)],
+      ['in', 3000],
+    ]);
+    const g = read('The cold store is held at −20 °C through a 30 °C day by a unit with a COP of 2.5.');
+    expect(g.filter((x) => x.kind === 'temperature').map((x) => [x.role, x.si])).toEqual([
+      ['cold', expect.closeTo(253.15, 9)],
+      ['hot', expect.closeTo(303.15, 9)],
+    ]);
+    expect(g.some((x) => x.kind === 'temperature-difference')).toBe(false);
+  });
+
+  test('a COP in quotes: cooling COP “between 2.8 and 3.1”', () => {
+    const f = read('Supplier states a cooling COP “between 2.8 and 3.1” for the chiller.');
+    expect(f.map((x) => [x.kind, x.role, x.si, x.upper?.si])).toEqual([['cop', 'cooling', 2.8, 3.1]]);
+  });
+
   test('a total on one day is no rate per day', () => {
     // 3.4 kWh = 3.4 × 3.6 MJ (SI Brochure, 9th ed., Table 8: 1 kWh = 3.6 MJ).
     const text = 'The solar water heater collected 3.4 kWh of heat on a day with 6 kWh of sunlight on its 2 m² panel.';

@@ -81,7 +81,9 @@ export function isDifference(text: string, start: number, end: number, floor: nu
     const prevStart = Math.max(0, start - 60) + corrected.index;
     if (isDifference(text, prevStart, prevStart + corrected[0].length, 0)) return true;
   }
-  if (DIFF_BEFORE_RE.test(before)) {
+  // ("holds −18 °C through a 32 °C day": the weather's temperature, not a lift.)
+  const ofWeather = /^[^\S\n]+(?:days?|nights?|afternoons?|mornings?|evenings?|summers?|winters?|heat[- ]?waves?|spells?|weeks?|weather)(?!\p{L})/iu.test(text.slice(end, end + 16));
+  if (DIFF_BEFORE_RE.test(before) && !ofWeather) {
     // "only 20 °C" / "just 20 °C" alone are not differences: the clause must speak of one.
     const m = DIFF_BEFORE_RE.exec(before)!;
     // ("with the hot face at just 60 °C and a 30 K difference": a side named just before it is that side's.)
