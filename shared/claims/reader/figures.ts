@@ -373,7 +373,13 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         flowSibling &&
         start - flowSibling.end < 80 &&
         !/[\p{N}]/u.test(text.slice(flowSibling.end, start)) &&
-        sentenceAround(text, flowSibling.start, flowSibling.end) === sentenceAround(text, start, t.numEnd) &&
+        ((sentenceAround(text, flowSibling.start, flowSibling.end) !== sentenceAround(text, start, t.numEnd) &&
+          // ("The converter takes in two hundred watts. It gives back three hundred and ten, every hour …": the
+          // next sentence, of the same device, what it gives.)
+          /^[^.!?\n]*[.!?]["”’')]*[^\S\n]+(?:It|They|This|That|The[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:device|unit|box|machine|converter|generator|motor|module|rig|prototype|system))[^.!?\n]*$/u.test(text.slice(flowSibling.end, start)) &&
+          /(?<!\p{L})(?:puts?[^\S\n]+out|gives?[^\S\n]+(?:out|back)|gave[^\S\n]+(?:out|back)|returns|returned|delivers|delivered|produces|produced|yields|yielded)[^\S\n]+(?:(?:about|some|nearly|only|just|over|almost)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start)) &&
+          /^[^\S\n]*(?:[,.;:!?)\]]|—|–|$)/u.test(text.slice(t.numEnd, t.numEnd + 4))) ||
+          (sentenceAround(text, flowSibling.start, flowSibling.end) === sentenceAround(text, start, t.numEnd) &&
         (/^[^\S\n]*(?:in|out|back)(?:[^\S\n]*[,.;:!?)"”’']|[^\S\n]+(?:and|at|of|from|to|with|while|for|on)(?!\p{L})|[^\S\n]*$)/iu.test(text.slice(t.numEnd, t.numEnd + 12)) ||
           // ("drawing two point eight from the grid", "measured about four hundred and fifty at the wheel": the
           // supply or the output named after it.)
@@ -383,7 +389,7 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
           // ("takes in 500 watts and puts out 650.": what it gives, said last in its clause.)
           (/(?<!\p{L})(?:drew|draws|drawing|takes|took|taking|consumes|consumed|consuming|puts?[^\S\n]+out|putting[^\S\n]+out|gives?[^\S\n]+(?:out|back)|gave[^\S\n]+(?:out|back)|returns|returned|delivers|delivered|produces|produced)[^\S\n]+(?:(?:about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start)) &&
             /(?<!\p{L})(?:while|whereas|but|and|when)(?!\p{L})/iu.test(text.slice(flowSibling.end, start)) &&
-            /^[^\S\n]*(?:[,.;:!?)\]]|—|–|$|[^\S\n]+(?:so|but|and|while|yet)(?!\p{L}))/iu.test(text.slice(t.numEnd, t.numEnd + 8)))) &&
+            /^[^\S\n]*(?:[,.;:!?)\]]|—|–|$|[^\S\n]+(?:so|but|and|while|yet)(?!\p{L}))/iu.test(text.slice(t.numEnd, t.numEnd + 8)))))) &&
         /(?<!\p{L})(?:gave|gives|give|put(?:s|ting)?(?:[^\S\n]+out)?|returned|returns|delivered|delivers|produced|produces|yielded|yields|drew|draws|drawing|took|takes|taking|used|uses|using|got|gets|measured|logged|and|with|(?:out|in)[^\S\n]+for)[^\S\n]+(?:(?:back|about|some|nearly|only|just)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 30), start))
       ) {
         suffix = flowSibling.suffix;

@@ -607,6 +607,35 @@ describe('more ways claims are written (issue 11)', () => {
     expect(f.map((x) => [x.kind, x.role, x.si, x.upper?.si])).toEqual([['cop', 'cooling', 2.8, 3.1]]);
   });
 
+  test('a bare number in the next sentence, after a verb of giving, is in the unit of the power before it', () => {
+    const text = 'The inverter box draws four hundred watts. It puts out five hundred and twenty, day and night.';
+    expect(read(text).map((x) => [x.kind, x.role, x.si])).toEqual([
+      ['power', 'in', 400],
+      ['power', 'out', 520],
+    ]);
+    // A number that ends no clause is left alone.
+    expect(read('The inverter box draws four hundred watts. It gives back 3 times over the week.').filter((x) => x.kind === 'power')).toHaveLength(1);
+  });
+
+  test('a pair said "to the input" goes in; "of structure and engine" is what is left when the propellant is gone', () => {
+    // P = V × I: 0.5 A × 24 V = 12 W (any circuits textbook).
+    const f = read('The ring circuit sends 3 A at 50 V to the load while the battery supplies only 0.5 A at 24 V to the input.');
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['out', 150],
+      ['in', 12],
+    ]);
+    // Tsiolkovsky: Δv = Isp g0 ln(m0/mf) (NASA Glenn, "Ideal Rocket Equation"); 290 × 9.80665 × ln(1500/300) = 4577 m/s < 8 km/s.
+    const text = 'The sounding rocket carries 1,200 kg of propellant and 300 kg of structure and engine; Isp 290 s; it reaches 8 km/s.';
+    const g = read(text);
+    expect(g.filter((x) => x.kind === 'mass').map((x) => [x.role, x.si])).toEqual(
+      expect.arrayContaining([
+        ['propellant', 1200],
+        ['dry', 300],
+      ]),
+    );
+    expect(runClaimChecks(g, { text }).checks.find((c) => c.check === 'rocket-equation')?.finding).toBe('breaks');
+  });
+
   test('a total on one day is no rate per day', () => {
     // 3.4 kWh = 3.4 × 3.6 MJ (SI Brochure, 9th ed., Table 8: 1 kWh = 3.6 MJ).
     const text = 'The solar water heater collected 3.4 kWh of heat on a day with 6 kWh of sunlight on its 2 m² panel.';

@@ -567,7 +567,8 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const said =
       [volt, cur].map((d) => /^[^\S\n]*(in|out|input|output)(?!\p{L})/iu.exec(text.slice(d.end, d.end + 12))).find((x) => x !== null) ??
       // ("1.1 A at 18 V at the charger's output", "at its input terminals".)
-      /^[^\S\n]*(?:at|on|across)[^\S\n]+(?:(?:the|its|their)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(input|output)(?!\p{L})/iu.exec(text.slice(last.end, last.end + 40)) ??
+      // ("… gives only 0.8 A at 12 V to the input".)
+      /^[^\S\n]*(?:at|on|across|to|into)[^\S\n]+(?:(?:the|its|their)[^\S\n]+)?(?:[\p{L}'’-]+[^\S\n]+){0,2}?(input|output)(?!\p{L})/iu.exec(text.slice(last.end, last.end + 40)) ??
       /(?:^|[|\n•;,(])[^\S\n]*(?:(?:electrical|electric|DC|AC)[^\S\n]+)?(in|out|input|output)[^\S\n]*[:=][^\S\n]*$/iu.exec(text.slice(Math.max(0, first.start - 30), first.start));
     // "the coil charges a 12 V battery at 3 A": what it charges is its output, whatever the words between.
     // ("… which lights a string of mains lamps at 230 V with a measured 0.26 A": the lamps it lights are its load.)

@@ -252,6 +252,8 @@ export const MASS_ROLES: readonly RoleWords[] = [
     after: ['(?:dry|empty|final|burn-?out|structural) mass', '\\((?:empty|dry|unfuell?ed|when empty)\\)',
       // "The 12 kg cubesat (dry) carries 1.4 kg of butane": the craft named, then said dry.
       '(?:[\\w-]+ ){1,2}\\((?:empty|dry|unfuell?ed|when empty)\\)', 'dry', 'empty',
+      // "800 kg of propellant and 200 kg of structure and motor": what is left when the propellant is gone.
+      'of (?:structure|structures|hardware|tankage|airframe|structure and (?:engines?|motors?|payload|avionics))',
       'when (?:(?:its|the) tanks? (?:are|is) |it is )?(?:empty|dry)', ',[^\\S\\n]*(?:empty|dry)(?=[^\\S\\n]*(?:[;.)\\n]|$))', 'at burn-?out', 'at cut-?off', 'at (?:engine )?shutdown', 'at MECO', 'after the burn', 'when empty', 'at the end',
       '(?:once|when|after) (?:all )?(?:the |its )?(?:usable |useable )?(?:propellant|fuel)s? (?:is|are|has been|have been|was|were) (?:all )?(?:burn(?:ed|t)|used(?: up)?|spent|consumed|expended|gone)'],
   },
