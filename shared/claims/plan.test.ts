@@ -117,6 +117,21 @@ describe('texts that say no propellant in other words, or leave out the thrust (
       expect(planned(text).checks).toContainEqual(['photon-bound', 'breaks']);
     }
   });
+  it('"no rotor blades" denies a propulsor; a thrust "held in hard vacuum" by an air-pusher is propellant-free; a thrust with no power asks for it', () => {
+    for (const text of [
+      'Our spinning-mass drive lifts itself with 1.5 N. It carries no propellant and no rotor blades, and weighs 300 g.',
+      'The asymmetric capacitor lifter keeps 4 mN steady in high vacuum for a whole afternoon, so no ion wind explains it.',
+    ]) {
+      expect(planned(text).needs).toContainEqual(['photon-bound', ['the input power']]);
+    }
+    // A drone's rotors still push air.
+    expect(readSignals({ text: 'The drone lifts 2 kg with its four rotors.' })).toMatchObject({ propellant: true });
+  });
+  it('"1.8 litres of gas a minute" is a gas flow', () => {
+    const f = extractFigures('The dry cell under the bonnet gives 1.5 litres of gas a minute from tap water at 25 A.');
+    // 1 L/min = 1e-3 m³ / 60 s = 1.6667e-5 m³/s (SI Brochure, 9th ed., Table 8: 1 L = 1 dm³).
+    expect(f.find((x) => x.kind === 'gas-flow')?.si).toBeCloseTo((1.5 * 1e-3) / 60, 12);
+  });
   it('"without throwing anything out", "no tether": the claim is propellant-free though other drives\' propellant is named', () => {
     // 0.4 N/kW = 4e-4 N/W; × c = 1.2e5 times the photon bound.
     const text =

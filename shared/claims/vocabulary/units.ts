@@ -26,6 +26,14 @@ export interface UnitForm {
 
 const MICRO = ['µ', 'μ', 'u'];
 const micro = (rest: string) => MICRO.map((m) => m + rest);
+/**
+ * A volume of gas per minute or per hour in words: "litres per minute", "litres a minute", "liters of gas
+ * each hour", "litres of hydrogen per minute".
+ */
+const flowWords = (time: 'minute' | 'hour') =>
+  ['litre', 'litres', 'liter', 'liters'].flatMap((l) =>
+    ['', ' of gas', ' of hydrogen', ' of HHO', ' of oxyhydrogen', ' of hydroxy gas', ' of mixed gas'].flatMap((of) => ['per', 'a', 'each', 'every'].map((a) => `${l}${of} ${a} ${time}`)),
+  );
 
 /**
  * Calories: mathjs 15 has no calorie, so "cal" is converted here with the thermochemical calorie,
@@ -268,9 +276,9 @@ export const UNIT_FORMS: readonly UnitForm[] = [
     kind: 'gas-flow',
     unit: 'L/min',
     symbols: ['L/min', 'l/min', 'L/minute', 'LPM', 'lpm', 'SLPM', 'slpm', 'L min^-1', 'L min⁻¹', 'l min⁻¹'],
-    words: ['litre per minute', 'litres per minute', 'liter per minute', 'liters per minute'],
+    words: flowWords('minute'),
   },
-  { kind: 'gas-flow', unit: 'L/h', symbols: ['L/h', 'l/h', 'L/hr', 'l/hr', 'LPH', 'lph'], words: ['litre per hour', 'litres per hour', 'liter per hour', 'liters per hour'] },
+  { kind: 'gas-flow', unit: 'L/h', symbols: ['L/h', 'l/h', 'L/hr', 'l/hr', 'LPH', 'lph'], words: flowWords('hour') },
   {
     kind: 'gas-flow',
     unit: 'mL/min',
