@@ -127,6 +127,22 @@ describe('texts that say no propellant in other words, or leave out the thrust (
     // A drone's rotors still push air.
     expect(readSignals({ text: 'The drone lifts 2 kg with its four rotors.' })).toMatchObject({ propellant: true });
   });
+  it('"no gas, no ions leaving the jar" is propellant-free, and a drive set "far ahead of any ion engine" names no propellant of its own', () => {
+    // 2 mN from 25 W: 2e-3 × c / 25 = 2.4e4 times the photon bound P/c.
+    const text = 'The stacked capacitor rig showed 2 mN on the balance at 25 W input, far ahead of any ion engine. No gas, no ions leaving the chamber.';
+    expect(planned(text).checks).toContainEqual(['photon-bound', 'breaks']);
+  });
+  it('"lifts a weight of 250 g" with no support is a thrust of its weight; "1,5 billions km/h" is a speed', () => {
+    // 0.25 kg × 9.80665 m/s² = 2.45 N (g0, SI Brochure 9th ed.); 60 W / c = 2e-7 N.
+    expect(planned('The antigravity disc lifts a weight of 250 g with 40 W of electric power.').checks).toContainEqual(['photon-bound', 'breaks']);
+    // 1.5e9 km/h = 4.17e8 m/s > c = 299 792 458 m/s (SI Brochure, 9th ed.).
+    expect(planned('The new drive will carry the probe at 1,5 billions km/h.').checks).toContainEqual(['light-speed', 'breaks']);
+  });
+  it('"311 s vacuum Isp" is a specific impulse', () => {
+    // Tsiolkovsky (NASA Glenn, "Ideal Rocket Equation"): 311 × 9.80665 × ln(5400/1150) = 4716 m/s ≥ 4.5 km/s.
+    const text = 'Our upper stage does 4.5 km/s: 5,400 kg fuelled, 1,150 kg dry, 311 s vacuum Isp.';
+    expect(planned(text).checks).toContainEqual(['rocket-equation', 'consistent']);
+  });
   it('"1.8 litres of gas a minute" is a gas flow', () => {
     const f = extractFigures('The dry cell under the bonnet gives 1.5 litres of gas a minute from tap water at 25 A.');
     // 1 L/min = 1e-3 m³ / 60 s = 1.6667e-5 m³/s (SI Brochure, 9th ed., Table 8: 1 L = 1 dm³).

@@ -64,7 +64,7 @@ export const ISP_BEFORE_RE = new RegExp(
   'iu',
 );
 export const ISP_AFTER_RE = new RegExp(
-  `[^\\S\\n]*(?:of[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})|(?:-|[^\\S\\n]+)(?:(?!(?:into|to|for|of|in|over|at|on|the|a|an|from|by|with|after|before|until|while|and|or)(?![\\p{L}–-]))[\\p{L}–-]+[^\\S\\n]+){0,2}?(?:engines?|thrusters?|rocket motors?|motors?)(?!\\p{L})`,
+  `[^\\S\\n]*(?:of[^\\S\\n]+)?(?:(?:vacuum|vac|sea[- ]level|SL|delivered|measured|effective|rated)[^\\S\\n]+)?(?:${alt(ISP_WORDS)})(?!\\p{L})|(?:-|[^\\S\\n]+)(?:(?!(?:into|to|for|of|in|over|at|on|the|a|an|from|by|with|after|before|until|while|and|or)(?![\\p{L}–-]))[\\p{L}–-]+[^\\S\\n]+){0,2}?(?:engines?|thrusters?|rocket motors?|motors?)(?!\\p{L})`,
   'iuy',
 );
 /** Gains: "1.3 units back for every unit", "three times the energy it takes", "output is 3 times the input". */

@@ -13,7 +13,8 @@ import { readSuffix, unitAt, type Suffix } from './units';
 
 /** "5K cycles", "5 k hours", "6K full cycles": a thousand before a counted noun or a unit word (a word of its kind between). */
 const THOUSAND_RE = new RegExp(`(?:[^\\S\\n]?[kK](?=[^\\S\\n]+(?:(?:full|charge|charging|operating|running|test|duty|load|power|flight|service|life|deep|complete|partial)[^\\S\\n]+)?(?:${alt(THOUSAND_NOUNS)})(?![\\p{L}]))|[^\\S\\n]+thousand(?!\\p{L}))`, 'uy');
-const MILLION_RE = /[^\S\n]+(million|billion|trillion|M(?=[^\S\n]+(?:cycles?|hours?|miles?|km|units?)))(?!\p{L})/uy;
+// ("1,2 billions km/h": the plural, as some writers put it.)
+const MILLION_RE = /[^\S\n]+(million|billion|trillion|M(?=[^\S\n]+(?:cycles?|hours?|miles?|km|units?)))s?(?!\p{L})/uy;
 const MULTIPLIER: Record<string, number> = { million: 1e6, M: 1e6, billion: 1e9, trillion: 1e12 };
 
 /**

@@ -98,7 +98,9 @@ export const PROPELLANT_FREE_WORDS = [
   'no (?:external )?reaction', 'momentum from nothing', 'stationary thruster', '(?:reaction mass|propellant|exhaust|mass expelled)[:,]? (?:none|zero|nil|0 kg)',
   // "with nothing ejected", "no mass leaving it", "nothing escaping": said after the noun as well.
   '(?:with )?nothing (?:being )?(?:ejected|expelled|emitted|escaping|vented|thrown out|leaving(?: it| the \\w+)?)',
-  '(?:with )?no (?:mass|matter|material|gas|propellant|particles?) (?:being )?(?:leaving|escaping|ejected|expelled|emitted|vented|thrown out|leaves|escapes)',
+  '(?:with )?no (?:mass|matter|material|gas|propellant|particles?|ions?) (?:being )?(?:leaving|escaping|ejected|expelled|emitted|vented|thrown out|leaves|escapes)',
+  // "No gas, no ions leaving the jar": a list of what is said not to leave.
+  'no (?:gas|ions?|particles?|mass|matter|exhaust|air),? (?:(?:and|or|nor) )?no (?:gas|ions?|particles?|mass|matter|exhaust|air) (?:leaving|escaping|coming out|expelled|ejected|thrown out)',
   // "No mass was expelled during the run", "independent of any reaction mass", "it does not use any propellant".
   'no (?:mass|matter|material|gas|propellant|reaction mass|exhaust|particles?) (?:was|is|were|are|has been|had been|gets|got) (?:ever )?(?:expelled|ejected|emitted|vented|lost|used|consumed|thrown out|released)',
   'independent(?:ly)? of (?:any )?(?:propellant|reaction mass|exhaust|expelled mass)', 'free of (?:any )?(?:propellant|reaction mass|exhaust)',
