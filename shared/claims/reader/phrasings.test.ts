@@ -636,6 +636,14 @@ describe('more ways claims are written (issue 11)', () => {
     expect(runClaimChecks(g, { text }).checks.find((c) => c.check === 'rocket-equation')?.finding).toBe('breaks');
   });
 
+  test('"makes 800 lumen with 9 W": what a figure of output is made with goes in; "supplies the engine with 6 kW" goes out', () => {
+    expect(read('The bulb makes 800 lumen with 9 W, of which about 2.5 W leaves as light.').filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['in', 9],
+      ['out', 2.5],
+    ]);
+    expect(read('The cell runs on 15 A from the 13.8 V alternator, and the gas it makes supplies the engine with 6 kW.').find((x) => x.si === 6000)?.role).not.toBe('in');
+  });
+
   test('a total on one day is no rate per day', () => {
     // 3.4 kWh = 3.4 × 3.6 MJ (SI Brochure, 9th ed., Table 8: 1 kWh = 3.6 MJ).
     const text = 'The solar water heater collected 3.4 kWh of heat on a day with 6 kWh of sunlight on its 2 m² panel.';
