@@ -644,6 +644,15 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('The cell runs on 15 A from the 13.8 V alternator, and the gas it makes supplies the engine with 6 kW.').find((x) => x.si === 6000)?.role).not.toBe('in');
   });
 
+  test('"rendement", "Wirkungsgrad" and a machine\'s "yield" in per cent are its efficiency; a crop\'s or a hydrogen yield is not', () => {
+    for (const text of ['The generator set has a rendement of 34 %.', 'Der Motor: Wirkungsgrad 91 %.', 'The yield of the machine is 88 %.', 'The pump works with a yield of 75 %.']) {
+      expect(read(text).filter((x) => x.kind === 'efficiency').length).toBe(1);
+    }
+    for (const text of ['The farm reported a grain yield of 130 % of the ten-year average.', 'The cell reached a hydrogen yield of 96 %.']) {
+      expect(read(text).some((x) => x.kind === 'efficiency')).toBe(false);
+    }
+  });
+
   test('a total on one day is no rate per day', () => {
     // 3.4 kWh = 3.4 × 3.6 MJ (SI Brochure, 9th ed., Table 8: 1 kWh = 3.6 MJ).
     const text = 'The solar water heater collected 3.4 kWh of heat on a day with 6 kWh of sunlight on its 2 m² panel.';
