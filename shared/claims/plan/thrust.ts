@@ -67,7 +67,7 @@ function reflectorPushed(text: string, thrust: Figure): boolean {
 const LIT_TARGET_RE = /(?<!\p{L})(?:vanes?|foils?|targets?|(?:light |solar |laser )?sails?|lightsails?|mirrors?|reflect\w*|membranes?|films?)(?!\p{L})/iu;
 /** Light recycled between mirrors: "bounces back and forth 500 times between two mirrors", "photon recycling". */
 const RECYCLED_BETWEEN_MIRRORS_RE =
-  /(?<!\p{L})(?:recycl\w+|(?:back and forth|to and fro|\d+ times|many times|(?:multiple|repeated) (?:reflections|bounces|passes))[^.;!?\n]{0,40}between[^.;!?\n]{0,30}mirrors?)(?!\p{L})/iu;
+  /(?<!\p{L})(?:recycl\w+|(?:back and forth|to and fro|\d+ times|many times|(?:multiple|repeated) (?:reflections|bounces|passes))[^.;!?\n]{0,40}between[^.;!?\n]{0,30}mirrors?|(?:bounc\w+|reflect\w+|pass\w*|sen[dt]s?|sending)[^.;!?\n]{0,40}between[^.;!?\n]{0,30}mirrors?[^.;!?\n]{0,20}?(?:back and forth|to and fro|\d[\d,]* times|many times|hundreds of times|thousands of times))(?!\p{L})/iu;
 /** A closed device: light recycled inside it pushes nothing out. */
 const CLOSED_RE = /(?<!\p{L})(?:sealed|closed|enclosed|cavit(?:y|ies)|resonat\w*|box(?:es)?|frustum|inside (?:the|a|its) (?:device|drive|case|housing))(?!\p{L})/iu;
 /** A push said at P/c or 2P/c, in print rounded ("6.7 µN for 1 kW, twice P/c"): the bound said, no claim beyond it. */
