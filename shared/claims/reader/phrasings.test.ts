@@ -653,6 +653,18 @@ describe('more ways claims are written (issue 11)', () => {
     }
   });
 
+  test('"4.1 kW thermal from 1.2 kW electrical": out from in; "with 12 kW of warm air" is given out', () => {
+    const text = '3.6 kW thermal from 1 kW electrical, at 5 °C outside and 40 °C flow — our air-to-water unit.';
+    const f = read(text);
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['out', 3600],
+      ['in', 1000],
+    ]);
+    // COP_Carnot = 313.15/35 = 8.95 (Çengel & Boles, ch. 6); 3.6 keeps to it.
+    expect(runClaimChecks(f, { text }).checks.find((c) => c.check === 'carnot')?.finding).toBe('consistent');
+    expect(read('It warms the hall with 9 kW of warm air for 2.5 kW of electricity.').find((x) => x.si === 9000)?.role).toBe('out');
+  });
+
   test('a total on one day is no rate per day', () => {
     // 3.4 kWh = 3.4 × 3.6 MJ (SI Brochure, 9th ed., Table 8: 1 kWh = 3.6 MJ).
     const text = 'The solar water heater collected 3.4 kWh of heat on a day with 6 kWh of sunlight on its 2 m² panel.';
