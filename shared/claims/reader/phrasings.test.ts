@@ -665,6 +665,17 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('It warms the hall with 9 kW of warm air for 2.5 kW of electricity.').find((x) => x.si === 9000)?.role).toBe('out');
   });
 
+  test('"moves 30 W of heat with 50 W of electricity": after what it gives, what it takes', () => {
+    const text = 'The thermoelectric cooler moves 30 W of heat with 50 W of electricity, cold plate 5 °C, hot side 35 °C.';
+    const f = read(text);
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([
+      ['out', 30],
+      ['in', 50],
+    ]);
+    expect(runClaimChecks(f, { text }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+    expect(read('The lamp gives 12 W of light with 40 W.').filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['out', 'in']);
+  });
+
   test('a total on one day is no rate per day', () => {
     // 3.4 kWh = 3.4 × 3.6 MJ (SI Brochure, 9th ed., Table 8: 1 kWh = 3.6 MJ).
     const text = 'The solar water heater collected 3.4 kWh of heat on a day with 6 kWh of sunlight on its 2 m² panel.';
