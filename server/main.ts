@@ -17,6 +17,7 @@ import { migrateUp } from './db/migrate';
 import { seedIfEmpty } from './db/seed';
 import { seedDemoAccounts } from './db/seed-accounts';
 import { importEntriesIfEmpty } from './db/seed-entries';
+import { keepConnectionsLonger } from './http/keep-alive';
 import { FakeSmtpServer } from './mail/fake-smtp';
 import { createMailer, type Mailer } from './mail/mailer';
 import { createSequelize } from './db/sequelize';
@@ -140,7 +141,7 @@ async function main() {
       trustProxy: config.trustProxy,
     });
     locals = app.locals as unknown as AppLocals;
-    const s = app.listen(config.port, config.host);
+    const s = keepConnectionsLonger(app.listen(config.port, config.host));
     server = s;
     await new Promise<void>((resolve, reject) => {
       s.once('listening', resolve);

@@ -13,6 +13,7 @@ import { ROOT } from '../../server/config';
 import { seedIfEmpty } from '../../server/db/seed';
 import { seedDemoAccounts } from '../../server/db/seed-accounts';
 import { importEntriesIfEmpty } from '../../server/db/seed-entries';
+import { keepConnectionsLonger } from '../../server/http/keep-alive';
 import { LocalStore } from '../../server/storage';
 import { HIGH_LIMITS } from './app';
 import { createTestDatabase, type TestDatabase } from './db';
@@ -70,7 +71,9 @@ export async function startHarness(): Promise<Harness> {
   const mail = await startTestMail();
   const uploads = fs.mkdtempSync(path.join(os.tmpdir(), 'cw-uploads-'));
   // Listen first, so that the e-mailed links can name the server's real address.
-  const server = http.createServer();
+  // Idle sockets outlast the Playwright driver's (Node's agent, 5 s), as in server/main.ts: else a
+  // request sent on a socket the server was closing in the same moment fails with ECONNRESET.
+  const server = keepConnectionsLonger(http.createServer());
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
   const base = `http://127.0.0.1:${(server.address() as { port: number }).port}`;
   const app = createApp({
