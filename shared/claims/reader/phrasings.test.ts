@@ -532,6 +532,26 @@ describe('more ways claims are written (issue 11)', () => {
     expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
   });
 
+  test.each([
+    // P = V × I (any circuits textbook): 12 × 3 = 36 W in, under the lamp's 40 W of light; 24 × 2.5 = 60 W.
+    ['It runs on 12 V. It takes 3 A. The lamp gives 40 W of light.', 36, 'breaks'],
+    ['The lamp is powered from a 12 V supply. At full brightness it draws 3 A and gives 4 W of light.', 36, 'consistent'],
+    ['The pump operates at 24 V. In the test it pulled about 2.5 A. It delivered 30 W of hydraulic power.', 60, 'consistent'],
+  ])('a current the device draws pairs with the supply voltage said in an earlier sentence: %s', (text, pin, finding) => {
+    expect(read(text).filter((x) => x.kind === 'power' && x.role === 'in').map((x) => x.si)).toEqual([pin]);
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe(finding);
+  });
+
+  test.each([
+    // A current given out, a second voltage, or a paragraph between: no pair across sentences (the power
+    // the wrong pair would make: 230 × 2, 230 × 3, 12 × 3).
+    ['The charger runs on 230 V. It delivers 2 A to the phone.', 460],
+    ['The bench supply runs on 230 V. The motor takes 3 A at its own 12 V.', 690],
+    ['It runs on 12 V.\n\nA second unit, tested later, takes 3 A.', 36],
+  ])('no cross-sentence pair where the current is not what the device draws at that voltage: %s', (text, wrong) => {
+    expect(read(text).filter((x) => x.kind === 'power').map((x) => x.si)).not.toContain(wrong);
+  });
+
   test('a figure put right in the same sentence gives way to the later one', () => {
     // Tsiolkovsky: Δv = Isp g0 ln(m0/mf) (NASA Glenn, "Ideal Rocket Equation"); g0 = 9.80665 m/s² (SI Brochure, 9th ed.):
     // 300 × 9.80665 × ln(40/5) = 6117.6 m/s, so 5.9 km/s keeps to it and 7.5 km/s would not.

@@ -248,6 +248,30 @@ function batteryVoltage(text: string, drafts: Draft[], cur: Draft): Draft | unde
   return new Set(volts.map((d) => siOf(d))).size === 1 ? volts[0] : undefined;
 }
 
+/** Right before a voltage: what says it is the device's own supply ("runs on 12 V", "is powered from a 24 V", "operates at 48 V"). */
+const RUNS_ON_BEFORE_RE =
+  /(?<!\p{L})(?:runs?|ran|running|operates?|operated|operating|works?|worked|working|is[^\S\n]+powered|powered|is[^\S\n]+fed|fed|is[^\S\n]+supplied|supplied|is[^\S\n]+rated|rated)[^\S\n]+(?:(?:directly|straight|only)[^\S\n]+)?(?:on|off|from|at|with|by|for)[^\S\n]+(?:(?:a|an|the|its|one|ordinary|plain|standard|nominal|just)[^\S\n]+)?$/iu;
+/** Right before a current: that the device draws it ("It takes 3 A", "draws 1.5 A", "a draw of 2 A", "pulls about 4 A"). */
+const DRAWS_BEFORE_RE =
+  /(?<!\p{L})(?:draws?|drew|drawing|takes?|took|taking|pulls?|pulled|pulling|consumes?|consumed|consuming|uses?|used|using|sips?|sipped|(?:current|draw|consumption|intake)[^\S\n]+(?:is|was|of|at)|(?:current|draw)[^\S\n]*[:=])[^\S\n]+(?:(?:about|around|roughly|some|only|just|nearly|under|a[^\S\n]+steady|a[^\S\n]+mere)[^\S\n]+)?$/iu;
+
+/**
+ * "It runs on 12 V. It takes 3 A.": a current the device draws, in a sentence of its own, at the one
+ * supply voltage the text gave just before (the only voltage of the text, said as what the device runs
+ * on, in the sentence before or the one before that).
+ */
+function supplyVoltageBefore(text: string, drafts: Draft[], cur: Draft): Draft | undefined {
+  if (!DRAWS_BEFORE_RE.test(text.slice(Math.max(0, cur.start - 40), cur.start))) return undefined;
+  const volts = drafts.filter((d) => d.kind === 'voltage' && d.role !== 'aside');
+  if (new Set(volts.map((d) => siOf(d))).size !== 1) return undefined;
+  const volt = volts.find((d) => d.end <= cur.start && cur.start - d.end < 240 && RUNS_ON_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start)));
+  if (!volt || drafts.filter((d) => d.kind === 'current').length !== 1) return undefined;
+  // (No more than two sentence ends between, and no paragraph break.)
+  const gap = text.slice(volt.end, cur.start);
+  if (/\n[^\S\n]*\n/u.test(gap) || (gap.match(/[.!?;](?:\s|$)/gu) ?? []).length > 2) return undefined;
+  return volt;
+}
+
 /** A sheet's heading line of a side: "INPUT", "Output:", "Input side (DC)". */
 const SIDE_HEADING_RE = /^[^\S\n]*(?:electrical[^\S\n]+)?(input|output)(?:[^\S\n]+(?:side|ratings?|data|characteristics))?(?:[^\S\n]*\([^()\n]{0,20}\))?[^\S\n]*:?[^\S\n]*$/iu;
 
@@ -525,7 +549,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const side = sideLabel(text, cur);
     const sameSide = side ? candidates.filter((d) => sideLabel(text, d) === side) : [];
     const sideVolt = sameSide.length === 1 && candidates.some((d) => { const o = sideLabel(text, d); return o !== null && o !== side; }) ? sameSide[0] : undefined;
-    const volt = sideVolt ?? saidWith(cur, candidates) ?? sameColumn ?? free.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0] ?? batteryVoltage(text, drafts, cur);
+    const volt = sideVolt ?? saidWith(cur, candidates) ?? sameColumn ?? free.sort((a, b) => Math.abs(a.start - cur.start) - Math.abs(b.start - cur.start))[0] ?? batteryVoltage(text, drafts, cur) ?? supplyVoltageBefore(text, drafts, cur);
     if (!volt) continue;
     const i = siOf(cur);
     const v = siOf(volt);
