@@ -146,6 +146,49 @@ const HEATING_OUTPUT_RE = /(?<!\p{L})(?:heating (?:output|capacity|power)|heat o
 /** A heat pump or its parts said to be absent: "no outdoor unit", "without a heat pump", "not a heat pump". */
 const NO_HEAT_PUMP_PARTS_RE = /(?<!\p{L})(?:no|without(?:[^\S\n]+an?)?|not[^\S\n]+an?|nor[^\S\n]+an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?(?:outdoor[^\S\n]+units?|heat[- ]pumps?|compressors?|refrigerants?|evaporators?)(?!\p{L})/giu;
 
+/** A power or an energy written in figures: the number, its prefix and its unit ("31 W", "1.1 kWh", "4,2 MJ"). */
+const POWER_OR_ENERGY_WRITTEN_RE = /(?<![\p{L}\d.,])(\d+(?:[.,]\d+)?)[^\S\n]?([mkMG]?)(W|Wh|J)(?![\p{L}\d])/gu;
+const PREFIX: Record<string, number> = { '': 1, m: 1e-3, k: 1e3, M: 1e6, G: 1e9 };
+
+/**
+ * "… 12 A at 11 V into the load. That's 131 % by my sums", "took 1.1 kWh and delivered 2.4 kWh — a net
+ * gain of 1.3 kWh, or 218 %": a percentage that is, to its last written digit, one of two powers (or two
+ * energies) said just before it over the other — the claimant's own ratio of output to input, whatever
+ * words go with it. (Within the percentage's sentence and the one before, in its paragraph; two figures
+ * of the same unit; a ratio other than 1.)
+ */
+function ratioOfFiguresBefore(text: string, start: number, written: string, value: number): boolean {
+  if (!(value > 0) || value === 100) return false;
+  // (Not a share said as more or an excess: "4.2 W more heat than the 20 W it draws: 21 % excess".)
+  if (/^[^\S\n]*(?:%|per[^\S\n]?cent|percent)?[^\S\n]*(?:of[^\S\n]+)?(?:excess|more|extra|surplus|gain|above|over[^\S\n]+(?:the|its|input|what|unity|parity)|higher|greater|less|lower|loss|losses|lost|of[^\S\n]+(?:the|its|that))(?!\p{L})/iu.test(text.slice(start + written.length, start + written.length + 30))) return false;
+  let from = Math.max(0, start - 240);
+  const para = text.slice(from, start).search(/\n[^\S\n]*\n(?![\s\S]*\n[^\S\n]*\n)/u);
+  if (para >= 0) from += para;
+  const ends = [...text.slice(from, start).matchAll(/[.!?](?:\s|$)/gu)];
+  if (ends.length > 1) from += ends[ends.length - 2].index! + 1;
+  // ("a “gain of 70 percent”", "excess ~1.15 W, ~9 %": a share said as a gain or an excess is over the input.)
+  if (/(?<!\p{L})(?:gain|excess|surplus|increase|profit)[^\S\n]*(?:of|:|=|is|was)?[^\S\n]*[\p{Pi}"'“]?[^\S\n]*(?:about|roughly|some|~|≈)?[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 30), start))) return false;
+  const figures = [...text.slice(from, start).matchAll(POWER_OR_ENERGY_WRITTEN_RE)].map((m) => {
+    const at = from + m.index!;
+    // (A figure said as an excess is no side of the ratio: "excess ~1.15 W", "300 W excess heat".)
+    const excess =
+      /^[^\S\n]*(?:of[^\S\n]+)?(?:excess|extra|surplus|more|net|over[^\S\n]+(?:the|its)|gain|above)(?!\p{L})/iu.test(text.slice(at + m[0].length, at + m[0].length + 20)) ||
+      /(?<!\p{L})(?:excess|surplus|gain|net|extra)[^\S\n]*(?:of|:|=|is|was)?[^\S\n]*(?:about|roughly|some|~|≈)?[^\S\n]*$/iu.test(text.slice(Math.max(0, at - 25), at));
+    return { si: Number(m[1].replace(',', '.')) * PREFIX[m[2]], unit: m[3] === 'J' ? 'J' : m[3], excess };
+  });
+  if (figures.length < 2 || figures.length > 4) return false;
+  const m = /\d+(?:[.,](\d+))?/u.exec(written);
+  const half = (m?.[1] ? 10 ** -m[1].length : 1) / 2;
+  const tol = Math.max(half, 0.005 * value);
+  for (const a of figures) {
+    for (const b of figures) {
+      if (a === b || a.excess || b.excess || a.unit !== b.unit || !(b.si > 0) || a.si === b.si) continue;
+      if (Math.abs((100 * a.si) / b.si - value) <= tol) return true;
+    }
+  }
+  return false;
+}
+
 export function readPercent(text: string, start: number, end: number, floor: number, num?: string): PercentReading {
   // 'at "about 29 %" efficiency': the words after a closing quote.
   end += /^["”’'»]*/u.exec(text.slice(end, end + 3))![0].length;
@@ -213,7 +256,9 @@ export function readPercent(text: string, start: number, end: number, floor: num
   const fromTo = /(?<!\p{L})efficiency[^\S\n]+from[^\S\n]+[^\d.;!?\n]{3,110}?[^\S\n]+to[^\S\n]+[^\d.;!?\n]{3,60}?[^\S\n]+(?:is|was|of|=|:)[^\S\n]*(?:(?:about|around|roughly|some|only|just|~|≈)[^\S\n]*)?$/iu.test(text.slice(Math.max(floor, start - 200), start));
   // ("'How much of the heat becomes electricity?' About 11 %.": the answer to a question of efficiency.)
   const answered = /(?:efficien\w*|how[^\S\n]+much[^\S\n]+of[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+)?(?:heat|fuel|energy|light|sunlight|power|input)(?!\p{L})[^?\n]{0,60})\?[^\S\n]*['’"”]?[^\S\n]*\n+[^\S\n]*(?:(?:A|Answer)[^\S\n]*[:.)][^\S\n]*)?(?:(?:yes|no|well|so)[,.!]?[^\S\n]+)?(?:(?:about|around|roughly|some|only|just|nearly|almost|approximately|~|≈)[^\S\n]*)?$/iu.test(text.slice(Math.max(floor, start - 240), start));
-  const efficiency = after || engineSaid || fromTo || answered || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1].replace(/,[^,\n]{3,140},/u, ' '))) || worked;
+  // ("That's 131 % by my sums" after 100.8 W in and 132 W out: the claimant's own ratio of the two.)
+  const ratioSaid = () => ratioOfFiguresBefore(text, start, text.slice(start, end), num !== undefined ? Number(num) : Number((/^[\d.,]+/.exec(text.slice(start, end))?.[0] ?? '').replace(',', '.')));
+  const efficiency = after || engineSaid || fromTo || answered || (m !== null && !EFFICIENCY_CHANGE_RE.test(m[1].replace(/,[^,\n]{3,140},/u, ' '))) || worked || ratioSaid();
   if (!efficiency) return bareHeatPumpPercent(text, start, end, num);
   // ("95 % AFUE", "AFUE: 96 %": an annual fuel utilisation efficiency is a fuel burner's by definition,
   // whatever heat pump the text also names.)

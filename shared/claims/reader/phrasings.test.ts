@@ -552,6 +552,26 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read(text).filter((x) => x.kind === 'power').map((x) => x.si)).not.toContain(wrong);
   });
 
+  test.each([
+    // out / in (first law; any thermodynamics textbook): 2.4 / 1.1 = 2.18; 3.8 / 85 = 0.0447; 486 / 412 = 1.18.
+    ['Over 48 hours it took 1.1 kWh from the grid and delivered 2.4 kWh to the heater bank, or 218 %.', 2.18],
+    ['Heat through the module is about 85 W; the module gives 3.8 W, so roughly 4.5 %.', 0.045],
+    ['In March the electrolyser took 412 kWh off the panels and the fuel cell gave back 486 kWh. That\'s 118 %!!', 1.18],
+  ])('a bare percentage that is one stated power or energy over the other is the claimant\'s efficiency: %s', (text, eta) => {
+    expect(read(text).filter((x) => x.kind === 'efficiency').map((x) => x.si)).toEqual([eta]);
+  });
+
+  test.each([
+    // A share said as an excess or a gain is over the input, not out over in: 4.2 / 20 = 21 %, 35 / 50 = 70 %.
+    'The calorimeter says 24.2 W of heat leaves the cell, so 4.2 W more heat than the 20 W it draws: 21 % excess.',
+    'The module gave 35 W more heat than the 50 W its coil draws. The developers call this a “gain of 70 percent”.',
+    'So 13.9 W out against 12.75 W in: excess ~1.15 W, ~9 %.',
+    // A percentage matching no pair of the figures stays unread.
+    'It took 1.1 kWh and delivered 2.4 kWh, and 40 % of the buyers were farmers.',
+  ])('no efficiency from a percentage that is an excess, a gain or no ratio of the figures: %s', (text) => {
+    expect(read(text).filter((x) => x.kind === 'efficiency' && x.role !== 'aside')).toEqual([]);
+  });
+
   test('a figure put right in the same sentence gives way to the later one', () => {
     // Tsiolkovsky: Δv = Isp g0 ln(m0/mf) (NASA Glenn, "Ideal Rocket Equation"); g0 = 9.80665 m/s² (SI Brochure, 9th ed.):
     // 300 × 9.80665 × ln(40/5) = 6117.6 m/s, so 5.9 km/s keeps to it and 7.5 km/s would not.
