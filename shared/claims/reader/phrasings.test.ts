@@ -572,6 +572,40 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read(text).filter((x) => x.kind === 'efficiency' && x.role !== 'aside')).toEqual([]);
   });
 
+  test.each([
+    // A resistive heater turns what it takes into heat and no more (first law): 3 kW out of a 2 kW heater breaks it,
+    // 1.9 kW of heat into the water from a 2.2 kW kettle keeps to it.
+    ['The 2 kW heater puts out 3 kW of heat.', 2000, 'breaks'],
+    ['Her 2.2 kW electric kettle puts 1.9 kW of heat into the water.', 2200, 'consistent'],
+  ])('an appliance\'s rating before its name is what it takes: %s', (text, pin, finding) => {
+    expect(read(text).filter((x) => x.kind === 'power' && x.role === 'in').map((x) => x.si)).toEqual([pin]);
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe(finding);
+  });
+
+  test.each([
+    // Sized by what they give, or a comparison: no input read.
+    'A 1,000 W microwave heats the cup in a minute.',
+    'The 9 kW heat pump heater warms the whole house.',
+    'It is as bright as a 60 W-equivalent bulb.',
+    'A 5 W laser lamp pointer is sold at the fair.',
+    // A load the device under claim runs: its rating is what the device gives it.
+    'The zero-point module has kept a 2 kW heater going for three weeks.',
+    'The coil lights a 60 W bulb at full brightness.',
+    // A heater it is likened to.
+    'The 1.5 kW panel heats like a 2 kW heater and more.',
+  ])('no input read from the rating of a machine sized by its output, or an equivalent: %s', (text) => {
+    expect(read(text).filter((x) => x.kind === 'power' && x.role === 'in')).toEqual([]);
+  });
+
+  test('a power with its voltage and current in brackets is what the device runs on, and "No fuel" of it claims no nil input', () => {
+    // P = V × I (any circuits textbook): 20 kV × 1.5 mA = 30 W.
+    const text = 'Our 30 W lifter (20 kV at 1.5 mA) rises off the bench carrying a 2.5 g payload. No fuel, no moving parts!';
+    expect(read(text).filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['in', 30]]);
+    expect(runClaimChecks(extractFigures(text), { text }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+    // A machine that gives electricity keeps its own side.
+    expect(read('A 30 W generator (12 V at 2.5 A) on the bench.').filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['out']);
+  });
+
   test('a figure put right in the same sentence gives way to the later one', () => {
     // Tsiolkovsky: Δv = Isp g0 ln(m0/mf) (NASA Glenn, "Ideal Rocket Equation"); g0 = 9.80665 m/s² (SI Brochure, 9th ed.):
     // 300 × 9.80665 × ln(40/5) = 6117.6 m/s, so 5.9 km/s keeps to it and 7.5 km/s would not.

@@ -573,6 +573,15 @@ export function relateFigures(text: string, drafts: Draft[]): void {
         same.role = roleFor(text, 'power', first.start, pairEnd, windowStart(text, first.start, 0, BEFORE_WINDOW)) ?? 'in';
         if (same.role === 'excess' || same.role === 'aside') same.role = null;
       }
+      // ("Our 30 W lifter (20 kV at 1.5 mA) rises …": the pair in brackets right after the power, or after
+      // the name it rates, is what makes it; with no words of a side, it is what the device is run on.)
+      const pairStart = Math.min(cur.start, volt.start);
+      // (Not of a machine that gives electricity: "a 30 W generator (12 V at 2.5 A)".)
+      if (same.role === null && same.end <= pairStart && /^[^\S\n]*(?:[\p{L}-]+[^\S\n]*){0,3}?[([][^\S\n]*$/u.test(text.slice(same.end, pairStart))) {
+        const gives = /(?<!\p{L})(?:generat\w*|alternators?|dynamos?|gensets?|outputs?|deliver\w*|gives?|giving|supplies|supplying|produc\w*|makes?|making|charg\w*|cells?|panels?|modules?|harvest\w*)(?!\p{L})/iu.test(pairSentence);
+        same.role = roleFor(text, 'power', same.start, pairEnd, windowStart(text, same.start, 0, BEFORE_WINDOW)) ?? (gives ? null : 'in');
+        if (same.role === 'excess' || same.role === 'aside') same.role = null;
+      }
       continue;
     }
     // A three-phase supply ("400 V 3~, 10.6 A", "400 V three-phase, 19 A running current"): its line voltage
@@ -867,7 +876,10 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const paired = several ? matches.find((x) => inParagraph(x)) : undefined;
     const first = paired ?? matches[0] ?? null;
     // (A store said to be absent — "No battery, no mains, no fuel" — explains nothing.)
-    const m = labelsOnly && STORE_NAMED_RE.test(text.replace(NO_STORE_RE, ' ')) ? null : first;
+    // (Nor "No fuel" of a device run on a voltage at a current the text gives: "Our 30 W lifter (20 kV at
+    // 1.5 mA) … No fuel, no moving parts!" — what it needs no fuel for, it takes as electricity.)
+    const electric = drafts.some((d) => d.kind === 'voltage') && drafts.some((d) => d.kind === 'current');
+    const m = labelsOnly && (STORE_NAMED_RE.test(text.replace(NO_STORE_RE, ' ')) || electric) ? null : first;
     const out = m && paired ? inParagraph(m) : several ? drafts.find((d) => outLike(d) && d.role !== null) : drafts.find(outLike);
     const inputUnknown =
       /(?<!\p{L})input(?:[^\S\n]+(?:power|energy|log|logs|data|figure|value|itself|current))*[^\S\n]+(?:was|were|is|are|has|have)[^\S\n]+(?:not|still|never|yet to be)[^\S\n]+(?:been[^\S\n]+)?(?:logged|recorded|measured|stated|given|known|analysed|analyzed|being analysed|being analyzed)/iu.test(text) ||

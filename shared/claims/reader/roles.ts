@@ -405,6 +405,20 @@ export function ratingRole(text: string, start: number, end: number): FigureRole
   if (/(?<!\p{L})(?:engines?|turbines?|generators?|gensets?|alternators?)(?!\p{L})[^.!?\n]{0,120}?(?<!\p{L})(?:its|their)[^\S\n]+rated[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 160), start))) return 'out';
   // "An immersion heater rated at 2 kW": a heater, a kettle or a lamp is rated by the electricity it takes.
   if (/(?<!\p{L})(?:heaters?|kettles?|heating elements?|elements?|toasters?|hobs?|lamps?|bulbs?)(?!\p{L})[^.;!?\n]{0,20}?(?<!\p{L})rated[^\S\n]+(?:at|for)[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 60), start))) return 'in';
+  // "a 3 kW kettle", "the 2 kW fan heater", "a 60 W bulb": an appliance that turns electricity into heat or
+  // light is sized by what it takes. (Not a heat pump, a boiler or a stove, sized by what they give; not a
+  // microwave oven or a laser, sized by their output; not "a 100 W-equivalent LED".)
+  if (
+    !horsepower &&
+    /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end)) &&
+    /^[^\S\n]*(?:-[^\S\n]*)?(?:(?:LED|electric|electrical|immersion|fan|oil-filled|radiant|infrared|panel|convector|bar|ceramic|halogen|incandescent|filament|quartz|tungsten|mains|kitchen|travel|cordless|resistive|resistance|storage|water|space|patio|towel|bench|old|new|ordinary|plain|standard|cheap)[^\S\n]+){0,2}(?:kettles?|heaters?|heating[^\S\n]+elements?|elements?|toasters?|hobs?|hotplates?|hot[^\S\n]+plates?|irons?|hair[^\S\n]?dryers?|soldering[^\S\n]+irons?)(?!\p{L})(?![^\S\n]*-?[^\S\n]*equivalent)/iu.test(after) &&
+    !/^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat[- ]pumps?|lasers?)/iu.test(after) &&
+    !/(?<!\p{L})equivalent[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 15), start)) &&
+    // (Nor a heater it is set beside: "heating like a 2 kW heater and more", "as much as a 3 kW fan heater".)
+    !/(?<!\p{L})(?:like|as|than|unlike|versus|vs\.?|rivals?|matches|equivalent[^\S\n]+(?:of|to)|comparable[^\S\n]+(?:to|with)|instead[^\S\n]+of|replaces?|replacing)[^\S\n]+(?:(?:a|an|the|any|your|my|our|their)[^\S\n]+)?(?:(?:ordinary|standard|normal|plain|old|typical|conventional|cheap|regular)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 40), start)) &&
+    // (Not the load of the device the claim is about: "kept a 2 kW heater going", "runs a 3 kW kettle off it".)
+    !/(?<!\p{L})(?:lights?|lit|lighting|powers?|powered|powering|runs?|running|ran|drives?|driving|drove|feeds?|fed|feeding|keeps?|kept|keeping|heats?|supplies|supplying|into|to|with|on|off|boils?|boiling)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their|two|three|four|several|\d+)[^\S\n]+(?:(?:[\p{L}-]+|×)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 50), start))
+  ) return 'in';
   // "a 9 kW ground-source heat pump": a heat pump is rated by the heat it gives.
   if (!horsepower && /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?heat[- ]pumps?(?!\p{L})/iu.test(after) && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end))) return 'out';
   // "(air-source heat pump, 7 kW)", "a 450 kW screw chiller": a machine that moves heat is sized by the heat it
