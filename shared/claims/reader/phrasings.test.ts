@@ -606,6 +606,37 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('A 30 W generator (12 V at 2.5 A) on the bench.').filter((x) => x.kind === 'power').map((x) => x.role)).toEqual(['out']);
   });
 
+  test.each([
+    // c = 299 792 458 m/s exactly (BIPM SI Brochure, 9th ed.): 1.6 c = 479 667 932.8 m/s, 0.2 c = 59 958 491.6 m/s.
+    ['The 1.6 c entangled-pair link relays rover telemetry from Mars in minutes.', 1.6, 'breaks'],
+    ['Gram-scale light sail, design point: 0.2 c after ten minutes under a 100 GW ground beam.', 0.2, 'consistent'],
+  ])('a spaced "c" after a number, in a sentence about light, craft or links, is a multiple of the speed of light: %s', (text, k, finding) => {
+    const v = read(text).find((x) => x.kind === 'speed')!;
+    expect(v.si).toBeCloseTo(k * 299792458, 0);
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'light-speed')?.finding).toBe(finding);
+  });
+
+  test('a spaced "c" that is a price or a coin is no speed', () => {
+    for (const text of ['The light costs 20 c per kWh to run.', 'The probe kit sells for 99 c at the fair.', 'Drop a 5 c coin into the beam slot.']) {
+      expect(read(text).some((x) => x.kind === 'speed')).toBe(false);
+    }
+  });
+
+  test('"far beyond any ion engine" is a comparison: with nothing leaving the craft, the thrust per power meets the photon bound', () => {
+    // Photon rocket: F = P/c, so 1 N/kW is 1e-3 × c ≈ 3 × 10⁵ times the bound (any relativity text; c from the SI Brochure).
+    const text = 'Pitch deck, slide 4: our counter-rotating gyro stack delivers 1 N/kW with nothing leaving the craft — far beyond any ion engine flying today.';
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'photon-bound')?.finding).toBe('breaks');
+  });
+
+  test('"300 W of motor output" is given out, and "without taking a single watt-hour from the battery" is nothing in', () => {
+    const text = 'My e-scooter ran 3 hours at a steady 300 W of motor output without taking a single watt-hour from the battery.';
+    const f = read(text);
+    expect(f.filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['out', 300], ['in', 0]]);
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+    // Drawing from a named battery is no such claim.
+    expect(read('The scooter ran 3 hours at 300 W of motor output, taking 1 kWh from the battery.').some((x) => x.role === 'in' && x.si === 0)).toBe(false);
+  });
+
   test('a figure put right in the same sentence gives way to the later one', () => {
     // Tsiolkovsky: Δv = Isp g0 ln(m0/mf) (NASA Glenn, "Ideal Rocket Equation"); g0 = 9.80665 m/s² (SI Brochure, 9th ed.):
     // 300 × 9.80665 × ln(40/5) = 6117.6 m/s, so 5.9 km/s keeps to it and 7.5 km/s would not.

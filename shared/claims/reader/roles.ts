@@ -11,7 +11,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, paragraphAround, 
 
 /** Words that may stand between a figure and the role word after it ("2 kW of electrical input"). */
 const AFTER_FILLER =
-  '(?:(?:per|each|every|a)[\\s-]+(?:day|hour|week|month|year|minute|second|cycle)[\\s-]+)?(?:(?:of|the|its|electrical|electric|thermal|mechanical|heat|net|total|useful|shaft|continuous|peak|rated|nominal|design|gross|average|mean|power|energy|DC|AC|battery|mains|grid)[\\s-]+){0,3}';
+  '(?:(?:per|each|every|a)[\\s-]+(?:day|hour|week|month|year|minute|second|cycle)[\\s-]+)?(?:(?:of|the|its|electrical|electric|thermal|mechanical|heat|net|total|useful|shaft|continuous|peak|rated|nominal|design|gross|average|mean|power|energy|DC|AC|battery|mains|grid|motor|generator|engine|turbine|alternator|wheel|drive|pump|cell|panel|module|stack|system|device|unit)[\\s-]+){0,3}';
 
 interface CompiledRoles {
   groups: readonly RoleWords[];

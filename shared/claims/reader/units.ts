@@ -170,7 +170,14 @@ export function readSuffix(text: string, at: number): { suffix: Suffix; end: num
   // ("Calderon 24c", "Series 30c": a model's name, a word with a capital just before the number, and no
   // speed said around it.)
   const modelName = /(?<!\p{L})\p{Lu}[\p{L}\p{N}&-]*[^\S\n]+$/u.test(text.slice(Math.max(0, at - 50), at).replace(/[-−+]?[\d.,]+$/, '')) && !/(?<![\p{L}])(?:c|speed of light)(?!\p{L})/iu.test(sentenceAround(text, at, at).replace(/\d[\d.,]*c(?!\p{L})/gu, ''));
-  if (cm && ((/^c/.test(cm[0]) && !modelName) || speedContext)) {
+  // ("The 1.6 c entangled-pair link relays …", "design point: 0.2 c after ten minutes under a 100 GW beam": a
+  // spaced "c" in a sentence about light, sails, craft or links beyond the planets — not a price, "20 c per kWh".)
+  const lightContext =
+    cm !== null &&
+    !/^[^\S\n]*c[^\S\n]*(?:per|a|an|each|\/|for|off|coins?|pieces?)(?!\p{L})/iu.test(text.slice(at, at + 16)) &&
+    !/[$€£¢]|(?<!\p{L})(?:cents?|price|costs?|pays?|paid|buys?|sells?|tariff|euros?|dollars?)(?!\p{L})/iu.test(sentenceAround(text, at, at)) &&
+    /(?<!\p{L})(?:light|photons?|sails?|probes?|craft|starships?|spaceships?|ships?|warp|relativistic|interstellar|Centauri|light-?years?|signals?|links?|telemetry|beams?|faster|FTL|tachyons?|neutrinos?|particles?|jets?|drives?|Mars|Moon|rovers?|stars?)(?!\p{L})/iu.test(sentenceAround(text, at, at));
+  if (cm && ((/^c/.test(cm[0]) && !modelName) || speedContext || lightContext)) {
     return { suffix: { type: 'unit', form: SPEED_OF_LIGHT }, end: at + cm[0].length };
   }
   PERCENT_RE.lastIndex = at;
