@@ -637,6 +637,13 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('The scooter ran 3 hours at 300 W of motor output, taking 1 kWh from the battery.').some((x) => x.role === 'in' && x.si === 0)).toBe(false);
   });
 
+  test('"a 1.5–1.8 kW induction motor turns a ~2 kW alternator": the motor\'s rating goes in, the alternator\'s comes out', () => {
+    const text = 'My bench loop: a 1.5–1.8 kW induction motor turns a ~2 kW alternator, the alternator feeds the motor back and there is still enough left to run the shed lights.';
+    expect(read(text).filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['in', 1500], ['out', 2000]]);
+    // First law: 2 kW out of at most 1.8 kW in (the end of the range kindest to the claim) breaks it.
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
+  });
+
   test('a figure put right in the same sentence gives way to the later one', () => {
     // Tsiolkovsky: Δv = Isp g0 ln(m0/mf) (NASA Glenn, "Ideal Rocket Equation"); g0 = 9.80665 m/s² (SI Brochure, 9th ed.):
     // 300 × 9.80665 × ln(40/5) = 6117.6 m/s, so 5.9 km/s keeps to it and 7.5 km/s would not.

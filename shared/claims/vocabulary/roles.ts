@@ -85,7 +85,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
       // "plugging in at the 2 MW shore charger": what a charger gives is what the pack takes in.
       '(?:(?:shore|fast|rapid|wall|home|mains|onboard|on-board|depot|DC|AC|EV|public|solar|trickle)[- ])?chargers?(?!\\p{L})',
       // "The ½ hp motor turns the generator": a motor's rating, the motor driving the generator, is what the generator is given.
-      '(?:electric |drive |driving )?motors?(?: (?:that|which))? (?:(?:really|then|just|only) )?(?:turns?|drives?|runs?|run|spins?|powers?) (?:the|a|an|its|our|their|this|that) (?:[\\w-]+ ){0,2}?(?:generators?|alternators?|dynamos?|generator heads?|gensets?)(?!\\p{L})',
+      // ("a 1.5–1.8 kW induction motor turns a ~2 kW alternator": the motor's kind named, the generator's rating hedged.)
+      '(?:(?:induction|DC|AC|brushless|brushed|universal|stepper|servo|synchronous|three-phase|single-phase|hub|treadmill|washing-machine|scrap|old|small|big|little) )?(?:electric |drive |driving )?motors?(?: (?:that|which))? (?:(?:really|then|just|only) )?(?:turns?|drives?|runs?|run|spins?|powers?) (?:the|a|an|its|our|their|this|that) (?:[\\w~≈.,–-]+ ){0,3}?(?:generators?|alternators?|dynamos?|generator heads?|gensets?)(?!\\p{L})',
       // "ran nine days on a single 10 kWh charge": the store's charge is what the device had to run on.
       '(?:charge|battery charge|full charge)(?= *(?:[,.;:)]|$|and|of|in|lasts?|lasted|runs?|ran|will|would|gives?|gave|is|was))',
       // "with 180 W of heat passing through it": the heat a thermoelectric module takes.
