@@ -577,6 +577,8 @@ describe('more ways claims are written (issue 11)', () => {
     // 1.9 kW of heat into the water from a 2.2 kW kettle keeps to it.
     ['The 2 kW heater puts out 3 kW of heat.', 2000, 'breaks'],
     ['Her 2.2 kW electric kettle puts 1.9 kW of heat into the water.', 2200, 'consistent'],
+    // A lamp's rating is what it draws; what leaves as light is given out (4.5 W of 10 W keeps to the first law).
+    ['The 10 W LED downlight is 45 % efficient at the wall plug, so about 4.5 W leaves as visible light.', 10, 'consistent'],
   ])('an appliance\'s rating before its name is what it takes: %s', (text, pin, finding) => {
     expect(read(text).filter((x) => x.kind === 'power' && x.role === 'in').map((x) => x.si)).toEqual([pin]);
     expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe(finding);
@@ -593,6 +595,10 @@ describe('more ways claims are written (issue 11)', () => {
     'The coil lights a 60 W bulb at full brightness.',
     // A heater it is likened to.
     'The 1.5 kW panel heats like a 2 kW heater and more.',
+    // A lamp run on something named after it, or in a text about the source it is the load of.
+    'A 100 W lamp ran for 30 hours on a battery box charged with only 1 kWh.',
+    'I connected a 5 W LED panel to the pack and left it for a 72-hour run.',
+    'The coil glows a 60 W incandescent bulb on the output side.',
   ])('no input read from the rating of a machine sized by its output, or an equivalent: %s', (text) => {
     expect(read(text).filter((x) => x.kind === 'power' && x.role === 'in')).toEqual([]);
   });

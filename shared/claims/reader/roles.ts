@@ -411,11 +411,17 @@ export function ratingRole(text: string, start: number, end: number): FigureRole
   if (
     !horsepower &&
     /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end)) &&
-    /^[^\S\n]*(?:-[^\S\n]*)?(?:(?:LED|electric|electrical|immersion|fan|oil-filled|radiant|infrared|panel|convector|bar|ceramic|halogen|incandescent|filament|quartz|tungsten|mains|kitchen|travel|cordless|resistive|resistance|storage|water|space|patio|towel|bench|old|new|ordinary|plain|standard|cheap)[^\S\n]+){0,2}(?:kettles?|heaters?|heating[^\S\n]+elements?|elements?|toasters?|hobs?|hotplates?|hot[^\S\n]+plates?|irons?|hair[^\S\n]?dryers?|soldering[^\S\n]+irons?)(?!\p{L})(?![^\S\n]*-?[^\S\n]*equivalent)/iu.test(after) &&
+    /^[^\S\n]*(?:-[^\S\n]*)?(?:(?:LED|electric|electrical|immersion|fan|oil-filled|radiant|infrared|panel|convector|bar|ceramic|halogen|incandescent|filament|quartz|tungsten|mains|kitchen|travel|cordless|resistive|resistance|storage|water|space|patio|towel|bench|old|new|ordinary|plain|standard|cheap)[^\S\n]+){0,2}(?:kettles?|heaters?|heating[^\S\n]+elements?|elements?|toasters?|hobs?|hotplates?|hot[^\S\n]+plates?|irons?|hair[^\S\n]?dryers?|soldering[^\S\n]+irons?|(?:light[^\S\n]+)?bulbs?|lamps?|downlights?|spotlights?|floodlights?|light[^\S\n]+fittings?|luminaires?|LED[^\S\n]+(?:panels?|strips?|tubes?|fittings?))(?!\p{L})(?![^\S\n]*-?[^\S\n]*equivalent)/iu.test(after) &&
     !/^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:heat[- ]pumps?|lasers?)/iu.test(after) &&
     !/(?<!\p{L})equivalent[^\S\n]*$/iu.test(text.slice(Math.max(0, start - 15), start)) &&
     // (Nor a heater it is set beside: "heating like a 2 kW heater and more", "as much as a 3 kW fan heater".)
     !/(?<!\p{L})(?:like|as|than|unlike|versus|vs\.?|rivals?|matches|equivalent[^\S\n]+(?:of|to)|comparable[^\S\n]+(?:to|with)|instead[^\S\n]+of|replaces?|replacing)[^\S\n]+(?:(?:a|an|the|any|your|my|our|their)[^\S\n]+)?(?:(?:ordinary|standard|normal|plain|old|typical|conventional|cheap|regular)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 40), start)) &&
+    // (Nor one run on or off something named after it, or on an output: "A 100 W lamp ran for 30 hours on a
+    // battery box", "a 60 W bulb on the output side glows".)
+    !/^[^.;!?\n]{0,80}?(?<!\p{L})(?:(?:ran|runs?|running|lit|glow(?:s|ed|ing)?|shone|shines?|burn(?:s|ed|ing)?|powered|fed|kept[^\S\n]+going)(?:[^\S\n]+for[^\S\n]+[^.;!?\n]{1,25}?)?[^\S\n]+(?:on|off|from|by)[^\S\n]+(?:a|an|the|its|our|my|their|this|that)[^\S\n]|on[^\S\n]+the[^\S\n]+(?:output|load|secondary))/iu.test(after) &&
+    // (Nor an appliance in a text about another source of energy — a box, a coil, a pack, a generator — which
+    // it is the load of: "I connected a 5 W LED panel" to a pack, "A sixty-watt mains bulb" the box lights.)
+    !/(?<!\p{L})(?:box(?:es)?|coils?|generators?|alternators?|dynamos?|modules?|circuits?|packs?|batter(?:y|ies)|capacitors?|toroids?|reactors?|inverters?|motors?|engines?|magnets?|flywheels?|regenerators?|converters?|panels?[^\S\n]+(?:of[^\S\n]+)?solar|solar[^\S\n]+panels?)(?!\p{L})/iu.test(text) &&
     // (Not the load of the device the claim is about: "kept a 2 kW heater going", "runs a 3 kW kettle off it".)
     !/(?<!\p{L})(?:lights?|lit|lighting|powers?|powered|powering|runs?|running|ran|drives?|driving|drove|feeds?|fed|feeding|keeps?|kept|keeping|heats?|supplies|supplying|into|to|with|on|off|boils?|boiling)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their|two|three|four|several|\d+)[^\S\n]+(?:(?:[\p{L}-]+|×)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 50), start))
   ) return 'in';

@@ -163,6 +163,8 @@ export const POWER_ENERGY_ROLES: readonly RoleWords[] = [
     ],
     after: [
       // "recorded 46 W of heat leaving it", "120 W coming out of the reactor": what leaves the device is its output.
+      // "about 4.5 W leaves as visible light": what leaves as light, work or electricity is given out.
+      '(?:leaves?|left|leaving|comes? out|came out|coming out|goes out|went out|emerges?|emerged|emerging|is given off|is emitted|is radiated) as (?:visible |useful |usable )?(?:light|electricity|work|motion|sound|radio waves)',
       '(?:of (?:[\\w-]+ ){0,2}?(?:heat|power|energy|electricity|light|warmth) )?(?:leaving|leaves|left|exiting|exits|exited|flowing out of|flows out of|coming out of|comes out of|came out of|given off by|released by|emitted by|radiated by) (?:it|them|the (?:[\\w-]+ )?(?:cell|device|reactor|unit|box|module|core|rig|engine|motor|heater|machine|system|prototype|stack|apparatus|tube|vessel|generator))(?![\\w-])',
       // "4.4 W of the input leaves as visible light": the part of the input that comes out as the output.
       'of (?:the|its) (?:[\\w-]+ )?(?:input|power|energy|electricity)(?: [\\w-]+)? (?:leaves|leaving|left|comes? out|came out|emerges?|emerging|is emitted|was emitted|is given off|ends? up|ended up|becomes|became|is turned into|is converted (?:in)?to)',
