@@ -650,6 +650,13 @@ describe('more ways claims are written (issue 11)', () => {
     expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('breaks');
   });
 
+  test('"each emitter in its grow light runs at 350 mA and 3.1 V": the pair a device runs at is what it takes', () => {
+    // P = V × I: 0.35 A × 3.1 V = 1.085 W in, 0.45 W out as light (first law holds).
+    const text = 'The manufacturer says each emitter in its grow light runs at 350 mA and 3.1 V and gives off 0.45 W as light.';
+    expect(read(text).filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['in', expect.closeTo(1.085, 9)], ['out', 0.45]]);
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
+  });
+
   test('a figure put right in the same sentence gives way to the later one', () => {
     // Tsiolkovsky: Δv = Isp g0 ln(m0/mf) (NASA Glenn, "Ideal Rocket Equation"); g0 = 9.80665 m/s² (SI Brochure, 9th ed.):
     // 300 × 9.80665 × ln(40/5) = 6117.6 m/s, so 5.9 km/s keeps to it and 7.5 km/s would not.

@@ -614,7 +614,10 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     const intoLoad = !said && !fills && !toPart && INTO_LOAD_AFTER_RE.test(text.slice(last.end, last.end + 60));
     // "25 V of reverse bias … a photocurrent of 0.77 mA": a bias supply's voltage, what the supply gives the device.
     const biased = !said && !fills && BIAS_RE.test(text.slice(Math.max(0, volt.start - 20), volt.end + 25));
-    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills || intoLoad ? 'out' : supplied || biased ? 'in' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
+    // ("each emitter in its grow light runs at 350 mA and 3.1 V": the pair a device runs at is what it takes,
+    // whatever words of light or output stand before the verb.)
+    const runsAt = !said && !fills && /(?<!\p{L})(?:runs?|ran|running|operates?|operated|operating|is[^\S\n]+driven|driven|works?|worked|working)[^\S\n]+(?:at|on|with|from)[^\S\n]+(?:(?:about|around|roughly|some|just|only|a[^\S\n]+nominal|a[^\S\n]+steady)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, first.start - 40), first.start));
+    const between = said ? (/^in/i.test(said[1]) ? 'in' : 'out') : fills || intoLoad ? 'out' : supplied || biased || runsAt ? 'in' : /[,;]/.test(text.slice(first.end, last.start)) ? null : roleFor(text, 'power', last.start, last.end, first.end);
     // (Two cells of a table's row, "Start cell V 12.4 V; Start cell A 0.78 A": the side only as their column
     // names it, not words from the lines above.)
     const cells = !said && stem !== '' && stem === cellStem(text, volt) && /;/.test(text.slice(first.end, last.start));
