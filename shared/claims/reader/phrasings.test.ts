@@ -657,6 +657,18 @@ describe('more ways claims are written (issue 11)', () => {
     expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).toBe('consistent');
   });
 
+  test.each([
+    ['Installer\'s note: the 12 kW ground-source unit we fitted in March is showing 420 % on its display.', 12000],
+    ['Our 7,5 kW air-to-water unit reaches a COP of 4,1 at the A7/W35 point.', 7500],
+    ['Our 10 kW ground-source system runs at COP 6.5 all winter.', 10000],
+  ])('a heat pump named by the source it draws on is rated by the heat it gives: %s', (text, pout) => {
+    expect(read(text).filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['out', pout]]);
+  });
+
+  test('a collector or loop of a ground source is no heat pump\'s rating', () => {
+    expect(read('The 12 kW ground-source collector loop was laid in March.').filter((x) => x.kind === 'power' && x.role === 'out')).toEqual([]);
+  });
+
   test('a figure put right in the same sentence gives way to the later one', () => {
     // Tsiolkovsky: Δv = Isp g0 ln(m0/mf) (NASA Glenn, "Ideal Rocket Equation"); g0 = 9.80665 m/s² (SI Brochure, 9th ed.):
     // 300 × 9.80665 × ln(40/5) = 6117.6 m/s, so 5.9 km/s keeps to it and 7.5 km/s would not.

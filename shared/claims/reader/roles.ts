@@ -427,6 +427,12 @@ export function ratingRole(text: string, start: number, end: number): FigureRole
   ) return 'in';
   // "a 9 kW ground-source heat pump": a heat pump is rated by the heat it gives.
   if (!horsepower && /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?heat[- ]pumps?(?!\p{L})/iu.test(after) && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end))) return 'out';
+  // "the 12 kW ground-source unit", "Our 7,5 kW air-to-water unit": a heat pump named by the source it draws on.
+  if (
+    !horsepower &&
+    /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end)) &&
+    /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+)?(?:(?:ground|air|water|brine|exhaust[- ]air|geothermal)[- ]source|air[- ]to[- ](?:water|air)|water[- ]to[- ]water|brine[- ]to[- ]water)(?!\p{L})(?![^\S\n]+(?:heat[^\S\n]+)?(?:collectors?|loops?|boreholes?|arrays?|probes?))/iu.test(after)
+  ) return 'out';
   // "(air-source heat pump, 7 kW)", "a 450 kW screw chiller": a machine that moves heat is sized by the heat it
   // moves. (Not "the unit is rated 2 kW", which in a shop's or a backer's text is as often what it draws.)
   if (!horsepower && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end))) {
