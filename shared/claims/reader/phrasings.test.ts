@@ -669,6 +669,13 @@ describe('more ways claims are written (issue 11)', () => {
     expect(read('The 12 kW ground-source collector loop was laid in March.').filter((x) => x.kind === 'power' && x.role === 'out')).toEqual([]);
   });
 
+  test('"The 400 kW machine" in a text on a heat pump is rated by the heat it gives; not where the sentence says what it takes', () => {
+    const text = "The village heat pump draws on river water at 7 °C to supply the district loop at 45 °C. The 400 kW machine, he said, replaced two oil boilers in 2022.";
+    expect(read(text).filter((x) => x.kind === 'power').map((x) => [x.role, x.si])).toEqual([['out', 400000]]);
+    const takes = 'The village heat pump warms the district loop. The 120 kW machine draws its power from the grid.';
+    expect(read(takes).filter((x) => x.kind === 'power' && x.role === 'out')).toEqual([]);
+  });
+
   test('a figure put right in the same sentence gives way to the later one', () => {
     // Tsiolkovsky: Δv = Isp g0 ln(m0/mf) (NASA Glenn, "Ideal Rocket Equation"); g0 = 9.80665 m/s² (SI Brochure, 9th ed.):
     // 300 × 9.80665 × ln(40/5) = 6117.6 m/s, so 5.9 km/s keeps to it and 7.5 km/s would not.

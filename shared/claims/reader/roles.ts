@@ -427,6 +427,17 @@ export function ratingRole(text: string, start: number, end: number): FigureRole
   ) return 'in';
   // "a 9 kW ground-source heat pump": a heat pump is rated by the heat it gives.
   if (!horsepower && /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?heat[- ]pumps?(?!\p{L})/iu.test(after) && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end))) return 'out';
+  // "The 400 kW machine, he said, replaced two oil boilers" in a text on a heat pump, "The 800 MW block" in one
+  // on a power plant: a machine's rating is what it gives, where the text's machine gives heat it moves or
+  // electricity it generates and the sentence says nothing of what it takes.
+  if (
+    !horsepower &&
+    /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end)) &&
+    /(?:^|[.!?:;\n][^\S\n]*)(?:the|this|that|our|its|their)[^\S\n]+$/iu.test(text.slice(Math.max(0, start - 12), start)) &&
+    /^[^\S\n]*(?:-[^\S\n]*)?(?:machine|unit|block|plant|station|installation)(?!\p{L})/iu.test(after) &&
+    !/(?<!\p{L})(?:draws?|drew|drawing|takes?|took|consum\w*|uses?|used|input|needs?|fed|supplied|electricity[^\S\n]+(?:in|use))(?!\p{L})/iu.test(sentenceAround(text, start, end)) &&
+    ((HEAT_PUMP_RE.test(text) && !COOLING_MACHINE_RE.test(text.replace(HEAT_PUMP_RE, ' '))) || /(?<!\p{L})(?:power[^\S\n]+(?:plant|station)s?|supercritical|combined[- ]cycle|steam[^\S\n]+turbines?|gas[^\S\n]+turbines?|coal[- ]fired|nuclear[^\S\n]+plant)(?!\p{L})/iu.test(text))
+  ) return 'out';
   // "the 12 kW ground-source unit", "Our 7,5 kW air-to-water unit": a heat pump named by the source it draws on.
   if (
     !horsepower &&
