@@ -10,6 +10,8 @@ import { paragraphOfAnotherMachine, sentenceAround } from '../reader/context';
 import { HEAT_ONLY_RE, heatEngineBeyondSink } from './signals';
 
 const HEAT_SOURCE_RE = /(?<!\p{L})(?:(?:outdoor|outside|ambient) air|ground loop|ground (?:at|temperature|source)|heat (?:drawn |taken |pulled )?from the (?:ground|earth|soil|outdoor air|outside air|river|lake)(?!')|brine|well water|ground ?water|borehole|source temperature|(?:pulls?|pulled|pulling|draws?|drew|drawn|drawing|takes?|took|taken|taking|extracts?|extracted|extracting|absorbs?|absorbed|absorbing|harvests?|harvested|harvesting|moves?|moved|moving)[^\S\n]+(?:its[^\S\n]+)?heat[^\S\n]+(?:in[^\S\n]+)?from[^\S\n]+(?:the[^\S\n]+)?(?:outside|outdoors|outdoor[^\S\n]+air|outside[^\S\n]+air|air|ground|earth|soil|river|lake|sea|garden|well|borehole)|(?:heat[^\S\n]+)?source(?:[^\S\n]+(?:side|temperature|temp\.?))?[^\S\n]*(?:at|[:=])?[^\S\n]*(?=[-−–]?\d+(?:[.,]\d+)?[^\S\n]*(?:°|degrees?(?!\p{L})|K(?!\p{L})|deg(?!\p{L})))|outdoors?|(?<=\d[^\S\n]*(?:°[^\S\n]*[CFK]?|degrees?(?:[^\S\n]+(?:C|F|Celsius|Fahrenheit|centigrade))?|[CFK])[^\S\n]+)outside)(?!\p{L})/iu;
+/** A hot source fluid said to be cooled as it gives its heat ("85 °C brine …, cooled to 40 °C"). */
+const HOT_SOURCE_COOLED_RE = /(?<!\p{L})(?:brine|geothermal[^\S\n]+(?:water|fluid)|hot[^\S\n]+water|fluid|steam|flue[^\S\n]+gas(?:es)?|exhaust(?:[^\S\n]+gas(?:es)?)?|thermal[^\S\n]+oil|oil)(?!\p{L})[^.;!?\n]{0,80}?(?<!\p{L})(?:cooled|cooling|cools|chilled)[^\S\n]+(?:(?:down[^\S\n]+)?to|by)[^\S\n]+(?:about[^\S\n]+|around[^\S\n]+)?[-−–]?\d/iu;
 const COMPRESSOR_RE = /(?<!\p{L})(?:compressors?|vapou?r[- ]compression)(?!\p{L})/iu;
 /** A converter of electricity (its operating temperatures are no reservoirs). */
 const ELECTRICAL_CONVERTER_RE = /(?<!\p{L})(?:DC\/DC|DC-DC|AC\/DC|converters?|inverters?|chargers?|power supply|power supplies|PSUs?|transformers?|regulators?|LED drivers?|rectifiers?)(?!\p{L})/iu;
@@ -240,7 +242,11 @@ export function planCarnot(b: Basis): HeatReading {
     !/(?<!\p{L})(?:heaters?|stoves?|fires?|fireplaces?)(?!\p{L})/iu.test(text) &&
     !s.overUnity &&
     !s.heatEngine;
-  const movesHeat = !elsewhere && (s.heatPump || cooling || heatFromSource || statedCop || heatOutElectricIn || heatOutAcross || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity));
+  // ("85 °C brine at 50 L/s, cooled to 40 °C through exchangers, gives about 9 MW of heat. Circulation pumps
+  // use 300 kW": heat taken from a source hotter than where it goes, with no heat pump named — heat that runs
+  // downhill through exchangers, which pumps only circulate; no lift for a Carnot COP to bound.)
+  const downhill = !s.heatPump && !statedCop && !COMPRESSOR_RE.test(text) && HOT_SOURCE_COOLED_RE.test(text);
+  const movesHeat = !elsewhere && !downhill && (s.heatPump || cooling || heatFromSource || statedCop || heatOutElectricIn || heatOutAcross || (COMPRESSOR_RE.test(text) && !s.overUnity && /(?<!\p{L})(?:heat|cool\w*|refrigerant|chill\w*|warm\w*)(?!\p{L})/iu.test(text) && !/no[^\S\n]+compressor/iu.test(text)) || (ofKind(figures, 'cop').length > 0 && !s.overUnity));
   // ("Heating capacity 36,000 BTU/h … drawing 3.1 kW" of a mini-split: heat delivered, whatever cooling words the name has.)
   const outFigure = pOut ?? eOut;
   const outHeating = outFigure?.start != null && /(?<!\p{L})heating(?:[^\S\n]+(?:capacity|output|power|duty))?[^\S\n]*[:=]?[^\S\n]*(?:(?:of|is|was|about|up to)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, outFigure.start - 40), outFigure.start));

@@ -13,6 +13,7 @@ import type { Draft } from './draft';
 const BOUND_NAME =
   String.raw`(?:ideal|perfect|reversible|Carnot|theoretical|thermodynamic|textbook|perfect-engine)[- ](?:\((?:Carnot|reversible)\)[- ])?(?:heating[- ]|cooling[- ]|heat[- ])?(?:heat[- ]pumps?|engines?|machines?|cycles?|coolers?|fridges?|refrigerators?|freezers?|devices?|converters?|modules?|COPs?|coefficients?(?: of performance)?|efficienc(?:y|ies)|limits?|ceilings?|maxim(?:um|a)|bounds?|values?|figures?|case)` +
   String.raw`|(?:the|that|this|its)[^\S\n]+(?:ideal|Carnot|theoretical|thermodynamic)(?:[^\S\n]+(?:one|value|figure|limit|ceiling|maximum))?(?!\p{L})` +
+  String.raw`|(?:ideal|Carnot|reversible|theoretical|thermodynamic)[- ]minim(?:um|a)(?:[- ](?:work|power|input|electricity))?(?!\p{L})` +
   String.raw`|η_?(?:ideal|C|Carnot|max)(?!\p{L})|(?:^|[:;\n])[^\S\n]*ideal(?=[^\S\n]+(?:for|between|at|is|would|here))` +
   String.raw`|(?:Shockley[–-]Queisser|detailed[- ]balance|Betz|Landsberg|physical)[^\S\n]+(?:limit|ceiling|maximum|bound)` +
   String.raw`|(?:the|a|that|this|its|their|such)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,3}(?:limit|ceiling|upper bound)` +

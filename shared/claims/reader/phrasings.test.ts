@@ -2420,3 +2420,46 @@ test('"Earth to Mars — sixty million kilometres — in two minutes" gives the 
   expect(extractFigures('The probe will reach Mars, 56 million km away, in 120 days.').some((x) => x.kind === 'speed')).toBe(false);
   expect(extractFigures('Our car drove 300 km to the coast in 3 hours on one charge.').some((x) => x.kind === 'speed')).toBe(false);
 });
+
+describe('heat said into a place, transistor currents, work put in or drawn out, bounds of least work (invented test data)', () => {
+  const role = (text: string, si: number, kind: FigureKind = 'power') => extractFigures(text).find((f) => f.kind === kind && Math.abs(f.si - si) < 1e-9 * Math.max(1, si))?.role;
+  const carnot = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'carnot');
+
+  test('"5 W more heat into the 45 °C tank than the 25 W it draws": an excess over the input, with where the heat goes said between', () => {
+    const f = extractFigures('The bench unit puts 5 W more heat into the 45 °C tank than the 25 W it draws, taking the rest from 12 °C air.');
+    expect(f.find((x) => x.kind === 'power' && x.si === 5)?.role).toBe('excess');
+    expect(f.find((x) => x.kind === 'power' && x.si === 25)?.role).toBe('in');
+    expect(f.some((x) => x.kind === 'power' && x.role === 'out' && Math.abs(x.si - 30) < 1e-9)).toBe(true); // 25 W + 5 W
+  });
+
+  test('a transistor\'s base and collector currents make no power in or out; its supply current does', () => {
+    const text = 'On a 12 V rail, a 3 mA base current switches 450 mA of collector current, a gain of 150.';
+    const f = extractFigures(text);
+    expect(f.some((x) => x.kind === 'power' && (x.role === 'in' || x.role === 'out'))).toBe(false);
+    expect(runClaimChecks(f, { text }).checks.some((c) => c.finding === 'breaks')).toBe(false);
+    expect(extractFigures('The board draws 0.5 A at 12 V.').find((x) => x.kind === 'power')?.si).toBeCloseTo(6, 9); // P = I·V
+  });
+
+  test('"puts in about 120 W" is an input; "draws roughly 4 MWh out over the winter" is what a store gives', () => {
+    expect(role('Cargo-bike dynamo: the rider puts in about 120 W and the lamps get 2.4 W.', 120)).toBe('in');
+    expect(role('The hot-water store holds about 5 MWh; the estate draws roughly 4 MWh out over the winter.', 4 * 3.6e9, 'energy')).toBe('out');
+    expect(role('The heater draws about 2 kW from the mains.', 2000)).toBe('in');
+  });
+
+  test('a compressor is rated by what it takes; a sentence on the Carnot minimum work is the writer\'s bound', () => {
+    const text = 'Cryocooler: 2 W of cooling at 20 K from a 6 kW helium compressor, rejecting heat at 300 K. The Carnot minimum work for 2 W at 20 K is about 28 W.';
+    expect(role(text, 6000)).toBe('in');
+    expect(role(text, 28)).toBe('aside');
+    // COP 2/6000 against the Carnot cooling COP 20/(300 − 20) ≈ 0.0714 (Tc/(Th − Tc), textbook formula): within the law.
+    expect(carnot(text)?.finding).not.toBe('breaks');
+  });
+
+  test('heat taken from a hot source fluid cooled through exchangers is no heat pump lifting heat', () => {
+    const text = 'A 2 km geothermal doublet: 80 °C brine at 40 L/s, cooled to 35 °C through plate exchangers, gives about 7.5 MW to the district network. Circulation pumps use 250 kW.';
+    expect(carnot(text)?.finding).not.toBe('breaks');
+    // A heat pump named, lifting heat, is still bounded by its Carnot COP: 3 kW out for 0.2 kW in across 5 °C → 55 °C
+    // is a COP of 15 against Th/(Th − Tc) = 328.15/50 ≈ 6.56 (textbook formula).
+    const hp = 'Our heat pump takes 0.2 kW of electricity and gives 3 kW of heat, lifting it from 5 °C to 55 °C.';
+    expect(carnot(hp)?.finding).toBe('breaks');
+  });
+});

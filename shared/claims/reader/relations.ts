@@ -14,8 +14,12 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, NAMED_HEAT_PUMP_R
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor, SUPPLY_GIVES_LEAD_RE, TO_DEVICE_PART_AFTER_RE } from './roles';
-import { asideControlPowers, asideDenied, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, asideSpeedGlosses, asideWindSpeeds, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput } from './roles-by-context';
+import { asideControlPowers, asideDenied, asideIdealWork, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, asideSpeedGlosses, asideWindSpeeds, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
+
+/** A transistor's own currents (base, collector, emitter, gate, drain): "2 mA base current", "300 mA of collector current". */
+const TRANSISTOR_CURRENT_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+)?(?:base|collector|emitter|gate|drain)[^\S\n]+currents?(?!\p{L})/iu;
+const TRANSISTOR_CURRENT_BEFORE_RE = /(?<!\p{L})(?:base|collector|emitter|gate|drain)[^\S\n]+currents?[^\S\n]+(?:of|is|was|=|:)?[^\S\n]*(?:about[^\S\n]+|only[^\S\n]+|just[^\S\n]+)?$/iu;
 
 /** The text says the input was not given: a claim of no input cannot be read from it. */
 const INPUT_NOT_GIVEN_RE =
@@ -519,6 +523,22 @@ export function relateFigures(text: string, drafts: Draft[]): void {
       b.role = 'in';
     }
   }
+  // "4 W more heat into the 50 °C water tank than the 20 W it draws": where the heat goes said between,
+  // other figures (a temperature) among those words.
+  for (let i = 0; i < drafts.length; i++) {
+    const a = drafts[i];
+    if (!(a.kind === 'power' || a.kind === 'energy') || a.role === 'excess') continue;
+    const b = drafts.slice(i + 1).find((d) => d.kind === a.kind);
+    if (!b || sentenceAround(text, a.start, a.end) !== sentenceAround(text, b.start, b.end)) continue;
+    const gap = text.slice(a.end, b.start);
+    if (
+      /^[^\S\n]*(?:of[^\S\n]+)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:more|extra|additional)[^\S\n]+(?:(?:useful|thermal|electrical)[^\S\n]+)?(?:heat|power|energy|electricity|work)[^\S\n]+(?:into|to|in|for)[^\S\n]+(?:the|its|their|a|an)[^\S\n]+[^.;:!?\n]{1,40}?[^\S\n]+than[^\S\n]+(?:the|its|an?)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}$/iu.test(gap) &&
+      /^[^\S\n]*(?:(?:it|the[^\S\n]+\p{L}+)[^\S\n]+)?(?:draws?|drew|takes?|took|uses?|used|consumes?|consumed|is[^\S\n]+fed|needs?|pulls?)(?!\p{L})/iu.test(text.slice(b.end, b.end + 40))
+    ) {
+      a.role = 'excess';
+      b.role = 'in';
+    }
+  }
 
   sectionPowers(text, drafts);
   // Power from a current and a voltage in the same clause: "12 A at 24 V", "3 amps from a 48-volt pack".
@@ -532,6 +552,9 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     candidates.find((d) => d.start >= cur.end && /^[^\S\n]*,[^\S\n]*(?:an?[^\S\n]+)?$/iu.test(text.slice(cur.end, d.start))) ??
     candidates.find((d) => d.end <= cur.start && /^[^\S\n]*,[^\S\n]*$/iu.test(text.slice(d.end, cur.start)));
   for (const cur of currents) {
+    // (Not a transistor's base, collector or gate current, which one controls the other by: "a 2 mA base
+    // current controls 300 mA of collector current" — a current gain, no power taken or given.)
+    if (TRANSISTOR_CURRENT_AFTER_RE.test(text.slice(cur.end, cur.end + 30)) || TRANSISTOR_CURRENT_BEFORE_RE.test(text.slice(Math.max(0, cur.start - 30), cur.start))) continue;
     // The voltage nearest the current in its sentence ("steps 230 V down to 12 V and delivers 5 A": 12 V).
     const candidates = voltsNear(cur);
     // Else the nearest — not one said with another current ("6.1 A at 36 V into the controller, while
@@ -707,6 +730,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   asideWindSpeeds(text, drafts);
   asideSpeedGlosses(text, drafts);
   asideDenied(text, drafts);
+  asideIdealWork(text, drafts);
   efficiencyQuotient(text, drafts);
 
   // "every kilowatt fed to it gives four hundred millinewtons": a thrust per power.

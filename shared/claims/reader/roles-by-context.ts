@@ -816,3 +816,23 @@ export function storeAloneIsInput(text: string, drafts: Draft[]): void {
   sizes[0].role = 'in';
   sizes[0].assumption = 'The text says nothing charged the store while it ran: its stored energy is read as all that went in.';
 }
+
+/** The least work the law allows, named: "the Carnot minimum work", "the ideal (reversible) input". */
+const IDEAL_WORK_RE =
+  /(?<!\p{L})(?:(?:Carnot|ideal|reversible|theoretical|thermodynamic)(?:[- ](?:minimum|least|lowest))?|(?:minimum|least|lowest)[^\S\n]+(?:possible[^\S\n]+)?(?:Carnot|ideal|reversible|theoretical|thermodynamic))[- ](?:work|power|input|electricity|electrical[^\S\n]+input)(?!\p{L})/iu;
+/** Words of the device's own figures in the same sentence: then the sentence is no bound alone. */
+const OWN_FIGURE_WORDS_RE = /(?<!\p{L})(?:claim\w*|measured|we|our|it[^\S\n]+(?:draws?|takes?|uses?|needs?)|the[^\S\n]+(?:unit|device|machine|prototype)[^\S\n]+(?:draws?|takes?|uses?|needs?))(?!\p{L})/iu;
+
+/**
+ * "The Carnot minimum work for 1 W at 4.2 K is roughly 70 W": a sentence that works out the least work the
+ * law allows is the writer's bound, not the device's figures — its powers set aside, so the checks work the
+ * bound out themselves and never take the bound's work for what the device takes.
+ */
+export function asideIdealWork(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (!(d.kind === 'power' || d.kind === 'energy') || d.derived) continue;
+    const sentence = sentenceAround(text, d.start, d.end);
+    if (IDEAL_WORK_RE.test(sentence) && !OWN_FIGURE_WORDS_RE.test(sentence)) d.role = 'aside';
+  }
+}
+

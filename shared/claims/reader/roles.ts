@@ -172,6 +172,11 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     // "Turning the handle briskly puts about 6 W into the little generator inside": what a person's effort
     // puts into the machine is its input (not "the rotor puts 1.2 kW into the generator on its shaft").
     if (MUSCLE_LEAD_RE.test(text.slice(Math.max(floor, start - 70), start)) && /^[^\S\n]+(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?into[^\S\n]+(?:the|its|a|an)[^\S\n]+(?:[\p{L}-]+[^\S\n]+){0,2}?(?:generators?|dynamos?|alternators?|machines?|devices?|units?|mechanisms?|flywheels?|springs?)(?!\p{L})/iu.test(text.slice(end, end + 60))) return 'in';
+    // "The district network draws roughly 6 MWh out over the winter", "takes 2 kWh out of the store": what is
+    // drawn out of a store or a source is what it gives.
+    if (/(?<!\p{L})(?:draws?|drew|drawing|takes?|took|taking|pulls?|pulled|pulling)[^\S\n]+(?:(?:about|around|roughly|some|nearly|only|just|up to|over)[^\S\n]+)?$/iu.test(lead) && /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?out(?!\p{L})(?![^\S\n]+of[^\S\n]+(?:the[^\S\n]+)?(?:mains|grid|socket|wall|supply|battery|batteries|pack)(?!\p{L}))/iu.test(text.slice(end, end + 40))) return 'out';
+    // "the rider puts in about 150 W", "we put in 2 kWh": what is put in is the input.
+    if (/(?<!\p{L})(?:puts?|putting)[^\S\n]+in[^\S\n]+(?:(?:about|around|roughly|some|nearly|only|just|up to|over|a steady)[^\S\n]+)?$/iu.test(lead)) return 'in';
     // "the heat meter read 8.4 kW": a heat meter counts the heat delivered — the output.
     // (The figure itself right after the meter's verb: the text up to its end; where words of heat follow
     // it, they say so themselves.)
@@ -425,6 +430,8 @@ export function ratingRole(text: string, start: number, end: number): FigureRole
     // (Not the load of the device the claim is about: "kept a 2 kW heater going", "runs a 3 kW kettle off it".)
     !/(?<!\p{L})(?:lights?|lit|lighting|powers?|powered|powering|runs?|running|ran|drives?|driving|drove|feeds?|fed|feeding|keeps?|kept|keeping|heats?|supplies|supplying|into|to|with|on|off|boils?|boiling)[^\S\n]+(?:up[^\S\n]+)?(?:a|an|the|its|our|their|two|three|four|several|\d+)[^\S\n]+(?:(?:[\p{L}-]+|×)[^\S\n]+)?$/iu.test(text.slice(Math.max(0, start - 50), start))
   ) return 'in';
+  // "from an 8 kW helium compressor", "the 3 kW scroll compressor": a compressor is rated by what its motor takes.
+  if (!horsepower && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end)) && /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?compressors?(?!\p{L})/iu.test(after)) return 'in';
   // "a 9 kW ground-source heat pump": a heat pump is rated by the heat it gives.
   if (!horsepower && /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?heat[- ]pumps?(?!\p{L})/iu.test(after) && /(?:W|watts?)[^\S\n]*$/iu.test(text.slice(start, end))) return 'out';
   // "The 400 kW machine, he said, replaced two oil boilers" in a text on a heat pump, "The 800 MW block" in one
