@@ -113,6 +113,8 @@ import { claims as heldOut118 } from '../tests/fixtures/claims-corpus/held-out-1
 import { claims as heldOut119 } from '../tests/fixtures/claims-corpus/held-out-119';
 import { claims as heldOut120 } from '../tests/fixtures/claims-corpus/held-out-120';
 import { claims as heldOut121 } from '../tests/fixtures/claims-corpus/held-out-121';
+import { claims as heldOut122 } from '../tests/fixtures/claims-corpus/held-out-122';
+import { claims as heldOut123 } from '../tests/fixtures/claims-corpus/held-out-123';
 import { claims as tuning1 } from '../tests/fixtures/claims-corpus/tuning';
 import { claims as tuning2 } from '../tests/fixtures/claims-corpus/tuning-2';
 import { claims as tuning3 } from '../tests/fixtures/claims-corpus/tuning-3';
@@ -234,12 +236,14 @@ import { claims as tuning118 } from '../tests/fixtures/claims-corpus/tuning-118'
 import { claims as tuning119 } from '../tests/fixtures/claims-corpus/tuning-119';
 import { claims as tuning120 } from '../tests/fixtures/claims-corpus/tuning-120';
 import { claims as tuning121 } from '../tests/fixtures/claims-corpus/tuning-121';
+import { claims as tuning122 } from '../tests/fixtures/claims-corpus/tuning-122';
+import { claims as tuning123 } from '../tests/fixtures/claims-corpus/tuning-123';
 import type { CorpusClaim } from '../tests/fixtures/claims-corpus/types';
 import { CONTENT, startBenchDatabase } from './db';
 import { measureClaim, pct, summarise, type ClaimOutcome, type Matched } from './claims/measure';
 
 /** The tuning part: every tuning file of the corpus (each written without reading the code). */
-const tuning: CorpusClaim[] = [...tuning1, ...tuning2, ...tuning3, ...tuning4, ...tuning5, ...tuning6, ...tuning7, ...tuning8, ...tuning9, ...tuning10, ...tuning11, ...tuning12, ...tuning13, ...tuning14, ...tuning15, ...tuning16, ...tuning17, ...tuning18, ...tuning19, ...tuning20, ...tuning21, ...tuning22, ...tuning23, ...tuning24, ...tuning25, ...tuning26, ...tuning27, ...tuning28, ...tuning29, ...tuning30, ...tuning31, ...tuning32, ...tuning33, ...tuning34, ...tuning35, ...tuning36, ...tuning37, ...tuning38, ...tuning39, ...tuning40, ...tuning41, ...tuning42, ...tuning43, ...tuning44, ...tuning45, ...tuning46, ...tuning47, ...tuning48, ...tuning49, ...tuning50, ...tuning51, ...tuning52, ...tuning53, ...tuning54, ...tuning55, ...tuning56, ...tuning57, ...tuning58, ...tuning59, ...tuning60, ...tuning61, ...tuning62, ...tuning63, ...tuning64, ...tuning65, ...tuning66, ...tuning67, ...tuning68, ...tuning69, ...tuning70, ...tuning71, ...tuning72, ...tuning73, ...tuning74, ...tuning75, ...tuning76, ...tuning77, ...tuning78, ...tuning79, ...tuning80, ...tuning81, ...tuning82, ...tuning83, ...tuning84, ...tuning85, ...tuning86, ...tuning87, ...tuning88, ...tuning89, ...tuning90, ...tuning91, ...tuning92, ...tuning93, ...tuning94, ...tuning95, ...tuning96, ...tuning97, ...tuning98, ...tuning99, ...tuning100, ...tuning101, ...tuning102, ...tuning103, ...tuning104, ...tuning105, ...tuning106, ...tuning107, ...tuning108, ...tuning109, ...tuning110, ...tuning111, ...tuning112, ...tuning113, ...tuning114, ...tuning115, ...tuning116, ...tuning117, ...tuning118, ...tuning119, ...tuning120, ...tuning121];
+const tuning: CorpusClaim[] = [...tuning1, ...tuning2, ...tuning3, ...tuning4, ...tuning5, ...tuning6, ...tuning7, ...tuning8, ...tuning9, ...tuning10, ...tuning11, ...tuning12, ...tuning13, ...tuning14, ...tuning15, ...tuning16, ...tuning17, ...tuning18, ...tuning19, ...tuning20, ...tuning21, ...tuning22, ...tuning23, ...tuning24, ...tuning25, ...tuning26, ...tuning27, ...tuning28, ...tuning29, ...tuning30, ...tuning31, ...tuning32, ...tuning33, ...tuning34, ...tuning35, ...tuning36, ...tuning37, ...tuning38, ...tuning39, ...tuning40, ...tuning41, ...tuning42, ...tuning43, ...tuning44, ...tuning45, ...tuning46, ...tuning47, ...tuning48, ...tuning49, ...tuning50, ...tuning51, ...tuning52, ...tuning53, ...tuning54, ...tuning55, ...tuning56, ...tuning57, ...tuning58, ...tuning59, ...tuning60, ...tuning61, ...tuning62, ...tuning63, ...tuning64, ...tuning65, ...tuning66, ...tuning67, ...tuning68, ...tuning69, ...tuning70, ...tuning71, ...tuning72, ...tuning73, ...tuning74, ...tuning75, ...tuning76, ...tuning77, ...tuning78, ...tuning79, ...tuning80, ...tuning81, ...tuning82, ...tuning83, ...tuning84, ...tuning85, ...tuning86, ...tuning87, ...tuning88, ...tuning89, ...tuning90, ...tuning91, ...tuning92, ...tuning93, ...tuning94, ...tuning95, ...tuning96, ...tuning97, ...tuning98, ...tuning99, ...tuning100, ...tuning101, ...tuning102, ...tuning103, ...tuning104, ...tuning105, ...tuning106, ...tuning107, ...tuning108, ...tuning109, ...tuning110, ...tuning111, ...tuning112, ...tuning113, ...tuning114, ...tuning115, ...tuning116, ...tuning117, ...tuning118, ...tuning119, ...tuning120, ...tuning121, ...tuning122, ...tuning123];
 /**
  * The held-out parts, each written without reading the code and never opened by whoever changes it:
  * the first (held-out.ts) and one written beside each of tuning parts 31–105 (held-out-NN.ts).
@@ -337,6 +341,8 @@ const heldOutParts: [string, CorpusClaim[]][] = [
   ['held-out-119.ts (uncommon real devices — thermoacoustic, magnetocaloric, thermionic, light sails, tethers — and their impossible cousins)', heldOut119],
   ['held-out-120.ts (claims reported at one remove, in indirect speech)', heldOut120],
   ['held-out-121.ts (figures as ratings and sizes attached to nouns: "a 3 kW kettle", "the 250 W hub motor")', heldOut121],
+  ['held-out-122.ts (plain claims by a seventh outside tester: "paste what you were actually sent")', heldOut122],
+  ['held-out-123.ts (claims laid out as lists: bullets, "key: value" lines, headings over bullets)', heldOut123],
 ];
 const heldOut: CorpusClaim[] = heldOutParts.flatMap(([, c]) => c);
 /** Issue 11's aims on the held-out part. */
