@@ -30,6 +30,9 @@ const HEAT_ENGINE_RE = compile(HEAT_ENGINE_WORDS);
 export const heatEngineBeyondSink = (text: string): boolean => HEAT_ENGINE_RE.test(text.replace(/(?<!\p{L})heat[- ]?sinks?(?!\p{L})/giu, ' '));
 const HEAT_PUMP_RE = compile(HEAT_PUMP_WORDS);
 const COOLING_RE = compile(COOLING_MACHINE_WORDS);
+/** Cooling given as a figure, whatever the machine is called: "3 kW of cooling", "12,000 BTU/h of refrigeration", "cooling capacity 3.5 kW". */
+const COOLING_OUTPUT_RE =
+  /\d[\d.,]*[^\S\n]*(?:[kM]?W|watts?|kilowatts?|BTU\/h|BTU\/hr|Btu\/h|tons?)[^\S\n]+of[^\S\n]+(?:cooling|refrigeration)(?![^\S\n]+(?:water|fans?|fluids?|oil|air|towers?|jackets?|loops?|circuits?|pumps?))(?!\p{L})|(?<!\p{L})(?:cooling|refrigeration)[^\S\n]+(?:capacity|output|duty)[^\S\n]*(?:of|is|was|:|=)?[^\S\n]*(?:about[^\S\n]+|up[^\S\n]+to[^\S\n]+)?\d/iu;
 const OVER_UNITY_RE =
   /(?<!\p{L})(?:power conversion efficiency|wall-?plug efficiency|conversion efficiency|electrical efficiency|over-?unity|overunity|free energy|self-?running|self-?sustaining|self-?charging|perpetual|more (?:energy|power) (?:out )?than|more (?:back )?than (?:you|we|it|they|one) (?:put|puts|feed|feeds) in|more out than (?:in|(?:you|we) put in)|generators?|alternators?|magnet(?:ic)? motors?|motors?|output exceeds|exceeds (?:the|its) input|circuits?|coils?|lamps?|LEDs?|bulbs?|(?:solar|fuel|photovoltaic) cells?|panels?|batter(?:y|ies)|zero-?point|ZPE|vacuum(?![^\S\n]+(?:chambers?|tanks?|vessels?|jars?|pumps?|flasks?|tubes?|bottles?|cleaners?|gauges?|insulat\w*|sealed|packed))(?<!(?:in|under|into|inside)[^\S\n]+(?:a[^\S\n]+|the[^\S\n]+)?(?:hard[^\S\n]+|high[^\S\n]+|deep[^\S\n]+|full[^\S\n]+)?vacuum)|electrolys\w*|HHO|oxyhydrogen|wheels?|amplifiers?|converters?|inverters?|electrical (?:output|energy|power))(?!\p{L})/iu;
 /** A device whose output is heat (a solar collector, a boiler, a heater): its efficiency is heat over heat. */
@@ -232,8 +235,8 @@ export function readSignals(ctx: PlanContext): Signals {
     // (Nor an engine that burns fuel: "Stirling engine on natural gas: 1.0 kW electric and 6.0 kW of heat to
     // your radiators" is a combined heat and power unit.)
     heatPump: HEAT_PUMP_RE.test(notDenied) && !deniedPump && !((BURNER_RE.test(text) || FUEL_ENGINE_RE.test(text)) && !NAMED_HEAT_PUMP_RE.test(notDenied)),
-    cooling: COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied),
-    coolingWords: COOLING_RE.test(notDenied),
+    cooling: (COOLING_RE.test(notDenied) && COOLING_ACTION_RE.test(notDenied)) || COOLING_OUTPUT_RE.test(notDenied),
+    coolingWords: COOLING_RE.test(notDenied) || COOLING_OUTPUT_RE.test(notDenied),
     overUnity: OVER_UNITY_RE.test(text) || (top !== undefined && OVER_UNITY_CLASSES.includes(top)),
     lightPush: lightPushed(text),
   };

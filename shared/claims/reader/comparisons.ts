@@ -186,7 +186,11 @@ function corrections(text: string, drafts: Draft[]): [Draft, Draft][] {
     // (An error asked about is none owned: "asked whether this was a misprint".)
     const owned = ERROR_SAID_RE.exec(between);
     const asked = owned !== null && /(?<!\p{L})(?:whether|if)(?!\p{L})[^.;!?\n]{0,30}$/iu.test(between.slice(0, owned.index));
-    if (CORRECT_BEFORE_RE.test(text.slice(windowStart(text, right.start, wrong.end, 80), right.start)) || (erratum && owned && !asked)) pairs.push([wrong, right]);
+    // ("Correction from the team: 26 hours, not 36": the figure put right named by its bare number after "not".)
+    const not = /^[^\S\n]*(?:,|\(|—|–|[^\S\n]-)?[^\S\n]*not[^\S\n]+(?:the[^\S\n]+)?(?:(?:stated|reported|original|published|printed|quoted)[^\S\n]+)?(\d[\d,.]*\d|\d)(?![\d.,]*[^\S\n]*[\p{L}%°])/iu.exec(text.slice(right.end, right.end + 40));
+    const wrongNumber = /^[^\d]{0,3}(\d[\d,.]*\d|\d)/u.exec(text.slice(wrong.start, wrong.end))?.[1];
+    const notThat = not !== null && wrongNumber !== undefined && not[1] === wrongNumber;
+    if (CORRECT_BEFORE_RE.test(text.slice(windowStart(text, right.start, wrong.end, 80), right.start)) || (erratum && owned && !asked) || notThat) pairs.push([wrong, right]);
   }
   return pairs;
 }

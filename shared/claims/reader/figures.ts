@@ -139,7 +139,7 @@ function erratumBare(text: string, start: number, drafts: Draft[]): { kind: Figu
 }
 
 /** "for every watt going in," before a figure: the unit in, said first. */
-const PER_UNIT_BEFORE_RE = /(?<!\p{L})(?:(?:for|per)[^\S\n]+(?:each|every|one)|each|every)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?:(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){1,6}?,(?:[^\S\n]+[\p{L}][\p{L}\p{N}-]*){1,4}?|(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){0,9}?)[^\S\n]*[,:;]?[^\S\n]*(?:about|roughly|some|nearly|only|just)?[^\S\n]*$/iu;
+const PER_UNIT_BEFORE_RE = /(?<!\p{L})(?:(?:for|per)[^\S\n]+(?:each|every|one)|each|every)[^\S\n]+(?:single[^\S\n]+)?(watt|joule|kWh|kilowatt-hour|kilowatt|kW|megajoule|MJ|unit|W|J)s?(?:(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){1,6}?,(?:[^\S\n]+[\p{L}][\p{L}\p{N}-]*){1,7}?|(?:[^\S\n]+(?:of[^\S\n]+)?[\p{L}-]+){0,9}?)[^\S\n]*[,:;]?[^\S\n]*(?:about|roughly|some|nearly|only|just)?[^\S\n]*$/iu;
 /** After a figure: it is what comes out ("1.25 watts would come out", "1.4 J come back"). */
 const COMES_OUT_AFTER_RE = /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?(?:(?:would|will|should|could|does|do|can|did|must)[^\S\n]+)?(?:come|comes|came|go|goes|went|get|gets|got)[^\S\n]+(?:out|back)(?!\p{L})/iu;
 

@@ -64,6 +64,9 @@ export function multiplesOfABase(text: string, drafts: Draft[]): void {
       base = drafts.find((d) => d.start >= end && d.start - end < 140 && (from < 0 || d.start < from + sentence.length) && MULTIPLIABLE.includes(d.kind) && !d.derived);
     }
     if (!base) continue;
+    // ("Twice the light of a 60 W bulb": light set against a lamp's rating, which is what the lamp takes — no
+    // power of the claim's device.)
+    if ((base.kind === 'power' || base.kind === 'energy') && /(?<!\p{L})(?:light|brightness|illumination|lumens?|glow)(?!\p{L})/iu.test(text.slice(Math.min(start, base.start), Math.max(end, base.start)))) continue;
     const si = siOf(base);
     if (si === null || !(si > 0)) continue;
     const up = upperSiOf(base);

@@ -2463,3 +2463,65 @@ describe('heat said into a place, transistor currents, work put in or drawn out,
     expect(carnot(hp)?.finding).toBe('breaks');
   });
 });
+
+describe('corrections by a bare number, versions to come, lamps compared, figures on another basis, heat converted (invented test data)', () => {
+  const fig = (text: string, kind: FigureKind, si: number) => extractFigures(text).find((f) => f.kind === kind && Math.abs(f.si - si) <= 1e-9 * Math.max(1, Math.abs(si)));
+  const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.some((c) => c.finding === 'breaks');
+
+  test('"Update from the makers: 20 hours, not 30" puts the earlier run aside', () => {
+    const text = 'Trial note: the 10 kWh pack kept a 400 W pump going for 30 hours. Update from the makers, 2 June: 20 hours, not 30.';
+    expect(fig(text, 'duration', 30 * 3600)?.role).toBe('aside');
+    // 400 W × 20 h = 8 kWh out of a 10 kWh pack: within the first law (energy = power × time).
+    expect(breaks(text)).toBe(false);
+  });
+
+  test('a rating of a version to come is set aside; a planned operating point is not', () => {
+    expect(fig('With no supply the cell gave 40 W for two days. A 3 kW home version is planned for 2028.', 'power', 3000)?.role).toBe('aside');
+    expect(fig('At the planned 20 kW beam the sail would feel about 0.13 mN.', 'power', 20000)?.role).not.toBe('aside');
+  });
+
+  test('a lamp set beside the claim\'s lamp is another lamp; "Twice the light of" it is no power', () => {
+    const text = 'Twice the light of a 75 W bulb from a 20 W LED lamp: about 2,000 lm against 1,000 lm.';
+    expect(fig(text, 'power', 75)?.role).toBe('aside');
+    expect(extractFigures(text).some((f) => f.kind === 'power' && f.si === 150)).toBe(false);
+    expect(breaks(text)).toBe(false);
+  });
+
+  test('"77 kWh usable (82 kWh gross)": the bracketed figure on another basis is set aside', () => {
+    expect(fig('Battery: 64 kWh usable (70 kWh gross)\nMotor: 120 kW', 'energy', 70 * 3.6e6)?.role).toBe('aside');
+    expect(fig('Store: 12 kWh nominal (10.8 kWh usable)', 'energy', 10.8 * 3.6e6)?.role).toBe('aside');
+    expect(fig('Inverter: 5 kW continuous (7.5 kW peak)', 'power', 7500)?.role).not.toBe('aside');
+  });
+
+  test('"converts 6 % of that heat into 90 W of electricity": the heat is the input, the electricity the output', () => {
+    const text = 'The capsule gives off 1,500 W of decay heat. Its couples, between 500 °C and 150 °C, convert 6 % of that heat into 90 W of electricity.';
+    expect(fig(text, 'power', 1500)?.role).toBe('in');
+    expect(fig(text, 'power', 90)?.role).toBe('out');
+    // 6 % against the Carnot efficiency 1 − 423.15/773.15 ≈ 45 % (textbook formula): within the law.
+    expect(breaks(text)).toBe(false);
+  });
+
+  test('"3 kW of cooling … for 0.85 kW" with no machine named is a cooling machine, bounded by its Carnot COP', () => {
+    const text = 'Rated at 3 kW of cooling for 0.85 kW of electricity, 27 °C indoors and 35 °C outdoors.';
+    expect(runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law')?.finding).not.toBe('breaks');
+    expect(breaks(text)).toBe(false);
+  });
+
+  test('"ionises xenon and accelerates it to about 30 km/s" is an exhaust speed; a sled accelerated is not', () => {
+    expect(fig('The thruster ionises xenon propellant and accelerates it to about 30 km/s.', 'speed', 30000)?.role).toBe('exhaust');
+    expect(fig('The rail accelerates the sled to 300 m/s.', 'speed', 300)?.role).not.toBe('exhaust');
+  });
+
+  test('"takes 12 V at 3 A and gives 400 V — a 33x gain! — at 80 mA": the output pair across an aside in dashes', () => {
+    const text = 'My booster takes 12 V at 3 A and gives 400 V — a 33x gain! — at 80 mA.';
+    const out = extractFigures(text).find((f) => f.kind === 'power' && f.role === 'out');
+    expect(out?.si).toBeCloseTo(400 * 0.08, 9); // P = V·I
+    expect(breaks(text)).toBe(false); // 32 W out of 36 W in
+  });
+
+  test('"For every kilowatt-hour it takes from the wall, the heater gives back 3.9 kWh of heat" is a gain of 3.9', () => {
+    const text = 'For every kilowatt-hour it takes from the wall, the tank heater gives back 3.9 kWh of heat, warming water to 55 °C with air from a 20 °C room.';
+    const f = extractFigures(text);
+    expect(f.some((x) => (x.kind === 'cop' || x.kind === 'efficiency') && Math.abs(x.si - 3.9) < 1e-9)).toBe(true);
+  });
+});

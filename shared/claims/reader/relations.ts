@@ -14,7 +14,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, NAMED_HEAT_PUMP_R
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor, SUPPLY_GIVES_LEAD_RE, TO_DEVICE_PART_AFTER_RE } from './roles';
-import { asideControlPowers, asideDenied, asideIdealWork, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, asideSpeedGlosses, asideWindSpeeds, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput } from './roles-by-context';
+import { asideControlPowers, asideComparedLamps, asideDenied, asideFutureVersions, asideIdealWork, asideOtherBasis, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, asideSpeedGlosses, asideWindSpeeds, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
 
 /** A transistor's own currents (base, collector, emitter, gate, drain): "2 mA base current", "300 mA of collector current". */
@@ -540,6 +540,18 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     }
   }
 
+  // "fuel producing 1,500 W of decay heat … convert 5.0 % of that heat into 75 W of electricity": what the heat
+  // is turned into is the output, and the heat said before it the input.
+  for (const d of drafts) {
+    if (d.kind !== 'power' && d.kind !== 'energy') continue;
+    const lead = /(?<!\p{L})(?:convert(?:s|ed|ing)?|turn(?:s|ed|ing)?)(?:[^\S\n]+(?:about|roughly|some|only|just))?[^\S\n]+(?:[\d.,]+[^\S\n]*(?:%|per[^\S\n]?cent)[^\S\n]+)?of[^\S\n]+(?:that|this|the|its)[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?heat[^\S\n]+into[^\S\n]+(?:(?:about|roughly|some|only|just)[^\S\n]+)?$/iu.exec(text.slice(Math.max(0, d.start - 80), d.start));
+    if (!lead || !/^[^\S\n]*(?:of[^\S\n]+)?(?:electricity|electric(?:al)?[^\S\n]+power|work|mechanical[^\S\n]+power|shaft[^\S\n]+power)(?!\p{L})/iu.test(text.slice(d.end, d.end + 30))) continue;
+    const heat = [...drafts].reverse().find((h) => h.kind === d.kind && h.end <= d.start && h !== d && /^[^\S\n]*of[^\S\n]+(?:[\p{L}-]+[^\S\n]+)?heat(?!\p{L})/iu.test(text.slice(h.end, h.end + 30)));
+    if (!heat) continue;
+    d.role = 'out';
+    heat.role = 'in';
+  }
+
   sectionPowers(text, drafts);
   // Power from a current and a voltage in the same clause: "12 A at 24 V", "3 amps from a 48-volt pack".
   const currents = drafts.filter((d) => d.kind === 'current');
@@ -557,6 +569,11 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     if (TRANSISTOR_CURRENT_AFTER_RE.test(text.slice(cur.end, cur.end + 30)) || TRANSISTOR_CURRENT_BEFORE_RE.test(text.slice(Math.max(0, cur.start - 30), cur.start))) continue;
     // The voltage nearest the current in its sentence ("steps 230 V down to 12 V and delivers 5 A": 12 V).
     const candidates = voltsNear(cur);
+    // (Or said just before it across an aside in dashes: "gives 400 V — a 33x gain!! — at 80 mA".)
+    if (candidates.length === 0) {
+      const dashed = drafts.find((d) => d.kind === 'voltage' && d.end <= cur.start && cur.start - d.end < 60 && /^[^\S\n]*(?:[—–][^—–\n]{1,40}[—–]|\([^()\n]{1,40}\))[^\S\n]*(?:at|@)[^\S\n]*$/iu.test(text.slice(d.end, cur.start)));
+      if (dashed) candidates.push(dashed);
+    }
     // Else the nearest — not one said with another current ("6.1 A at 36 V into the controller, while
     // 17.2 A goes into the batteries at 12.6 V": 17.2 A is at 12.6 V).
     const taken = new Set(currents.filter((c) => c !== cur).map((c) => saidWith(c, voltsNear(c))));
@@ -731,6 +748,9 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   asideSpeedGlosses(text, drafts);
   asideDenied(text, drafts);
   asideIdealWork(text, drafts);
+  asideFutureVersions(text, drafts);
+  asideComparedLamps(text, drafts);
+  asideOtherBasis(text, drafts);
   efficiencyQuotient(text, drafts);
 
   // "every kilowatt fed to it gives four hundred millinewtons": a thrust per power.

@@ -836,3 +836,57 @@ export function asideIdealWork(text: string, drafts: Draft[]): void {
   }
 }
 
+/** After a rating, a version to come: "A 5 kW home version is planned for 2027", "a 50 kW model is due next year". */
+const FUTURE_VERSION_AFTER_RE =
+  /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:versions?|models?|units?|editions?|variants?|systems?|products?|prototypes?)(?!\p{L})[^\S\n]+(?:is|are|will[^\S\n]+be|would[^\S\n]+be)[^\S\n]+(?:(?:now|also|already)[^\S\n]+)?(?:planned|due|expected|scheduled|promised|coming|in[^\S\n]+(?:development|the[^\S\n]+works|design)|under[^\S\n]+development|to[^\S\n]+follow)(?!\p{L})/iu;
+/** Before a rating, a version to come: "a planned 5 kW model", "the upcoming 20 kW version", "next year's 10 kW unit". */
+const FUTURE_VERSION_BEFORE_RE =
+  /(?<!\p{L})(?:planned|upcoming|forthcoming|future|proposed|next[^\S\n]+year(?:['’]s)?|next-generation|next[^\S\n]+generation|later)[^\S\n]+(?:(?:home|commercial|industrial|larger|bigger|scaled-up|full-size|production)[^\S\n]+)?$/iu;
+
+/** Right after a rating: a version of the product ("5 kW model", "20 kW home version"), not an operating point. */
+const VERSION_NOUN_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+)?(?:versions?|models?|editions?|variants?|products?)(?!\p{L})/iu;
+
+/**
+ * "A 5 kW home version is planned for 2027", "a planned 50 kW model": the rating of a version to come is
+ * no figure of the run the claim reports — set aside.
+ */
+export function asideFutureVersions(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (!(d.kind === 'power' || d.kind === 'energy' || d.kind === 'thrust') || d.derived) continue;
+    if (FUTURE_VERSION_AFTER_RE.test(text.slice(d.end, d.end + 80)) || (FUTURE_VERSION_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)) && VERSION_NOUN_AFTER_RE.test(text.slice(d.end, d.end + 40)))) d.role = 'aside';
+  }
+}
+
+/** Before a lamp set beside the claim's: "the light of a", "as bright as an old", "replaces a", "equivalent to a". */
+const COMPARED_LAMP_BEFORE_RE =
+  /(?<!\p{L})(?:(?:the[^\S\n]+)?(?:light|brightness|glow|output|lumens)[^\S\n]+of|as[^\S\n]+bright[^\S\n]+as|brighter[^\S\n]+than|replac(?:es|ed|ing)|instead[^\S\n]+of|equivalent[^\S\n]+(?:to|of)|like|matches|matching|rivals?)[^\S\n]+(?:(?:a|an|the|one|two|three|four|old|ordinary|standard|classic|traditional|incandescent|halogen)[^\S\n]+){1,3}$/iu;
+const LAMP_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:(?:incandescent|halogen|filament|tungsten|mains|old|household|frosted|clear)[^\S\n]+){0,2}(?:bulbs?|lamps?|light[^\S\n]?bulbs?|globes?)(?!\p{L})/iu;
+
+/**
+ * "Twice the light of a 60 W bulb from an 18 W LED lamp": a lamp set beside the claim's is another lamp, its
+ * rating no figure of the claim's device — set aside.
+ */
+export function asideComparedLamps(text: string, drafts: Draft[]): void {
+  for (const d of drafts) {
+    if (d.kind !== 'power' || d.derived || d.role === 'aside') continue;
+    if (LAMP_AFTER_RE.test(text.slice(d.end, d.end + 40)) && COMPARED_LAMP_BEFORE_RE.test(text.slice(Math.max(0, d.start - 50), d.start))) d.role = 'aside';
+  }
+}
+
+/**
+ * "Battery: 77 kWh usable (82 kWh gross)", "12 kWh nominal (10.8 kWh usable)": the same store's size on another
+ * basis, in brackets right after it — no second figure of a side (set aside). (Not a peak or surge rating, a
+ * figure of its own: "10 kW continuous (10,5 kW peak)".)
+ */
+export function asideOtherBasis(text: string, drafts: Draft[]): void {
+  for (let i = 1; i < drafts.length; i++) {
+    const [prev, d] = [drafts[i - 1], drafts[i]];
+    if (d.kind !== prev.kind || !(d.kind === 'power' || d.kind === 'energy') || d.derived || prev.derived) continue;
+    if (
+      /^[^\S\n]*(?:[\p{L}-]+[^\S\n]*){0,2}\([^\S\n]*$/u.test(text.slice(prev.end, d.start)) &&
+      /^[^\S\n]*(?:gross|net|usable|nominal|total|installed|name-?plate)[^\S\n]*\)/iu.test(text.slice(d.end, d.end + 30))
+    )
+      d.role = 'aside';
+  }
+}
+
