@@ -2525,3 +2525,35 @@ describe('corrections by a bare number, versions to come, lamps compared, figure
     expect(f.some((x) => (x.kind === 'cop' || x.kind === 'efficiency') && Math.abs(x.si - 3.9) < 1e-9)).toBe(true);
   });
 });
+
+describe('lists of ratings: counts of a rated thing, labels of mains draw, accessories, shaft power in brackets, a store filled from empty (invented test data)', () => {
+  const fig = (text: string, kind: FigureKind, si: number) => extractFigures(text).find((f) => f.kind === kind && Math.abs(f.si - si) <= 1e-9 * Math.max(1, Math.abs(si)));
+  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+
+  test('"Output: 2 × 120 W" is 240 W out; "three 30 kW units" is 90 kW; a product worked out is no count', () => {
+    expect(fig('Output: 2 × 120 W into 8 Ω', 'power', 240)?.role).toBe('out'); // 2 × 120 W
+    expect(fig('Output: 2 × 120 W into 8 Ω', 'power', 120)?.role).toBe('aside');
+    expect(fig('Three 30 kW units feed the site bus.', 'power', 90000)).toBeDefined(); // 3 × 30 kW
+    expect(fig('A fan using 50 W for 10 hours takes 50 × 10 × 3,600 joules.', 'energy', 10 * 3600)).toBeUndefined();
+    expect(fig('a thrust of 2 × 10⁻³ N', 'thrust', 2e-3)).toBeDefined();
+  });
+
+  test('an amplifier\'s "Mains draw at full power: 380 W" is what it takes; its output pair balances against it', () => {
+    const text = 'Stage amplifier\n• Gain: 29 dB\n• Output: 2 × 130 W into 4 Ω\n• Mains draw at full power: 380 W\n• Idle draw 15 W';
+    expect(fig(text, 'power', 380)?.role).toBe('in');
+    const run = firstLaw(text);
+    expect(run?.finding).toBe('consistent');
+    expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(260 / 380, 6); // out / in
+  });
+
+  test('"optional 0.5 kW heater" is an accessory, set aside; "Propulsive (shaft) power ~2.8 kW" is the output', () => {
+    expect(fig('• Power draw: ~350 W\n• 15 L tank, optional 0.5 kW heater', 'power', 500)?.role).toBe('aside');
+    expect(fig('– Draw from the pack: about 3.4 kW\n– Propulsive (shaft) power ~2.8 kW', 'power', 2800)?.role).toBe('out');
+  });
+
+  test('a store\'s usable size is what it gives back when filling it from empty takes a stated energy', () => {
+    const text = 'Home battery\n- Usable capacity 10 kWh\n- Takes ~11.2 kWh from the grid to fill from empty\n- 10-year warranty';
+    expect(fig(text, 'energy', 10 * 3.6e6)?.role).toBe('out');
+    expect(firstLaw(text)?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(10 / 11.2, 6); // out / in
+  });
+});

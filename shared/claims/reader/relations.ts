@@ -14,7 +14,7 @@ import { alt, BEFORE_WINDOW, COOLING_MACHINE_RE, HEAT_PUMP_RE, NAMED_HEAT_PUMP_R
 import { insertAfter, sameClause, siOf, typedSi, upperSiOf, type Draft } from './draft';
 import { relateDurations } from './durations';
 import { FILLS_LEAD_RE, roleFor, SUPPLY_GIVES_LEAD_RE, TO_DEVICE_PART_AFTER_RE } from './roles';
-import { asideControlPowers, asideComparedLamps, asideDenied, asideFutureVersions, asideIdealWork, asideOtherBasis, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, asideSpeedGlosses, asideWindSpeeds, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput } from './roles-by-context';
+import { asideControlPowers, asideComparedLamps, asideDenied, asideFutureVersions, asideIdealWork, asideOtherBasis, asideLoadsOfSource, asideStoreSize, asidePassedOn, asideQuotedLightSpeed, asideSpeedGlosses, asideWindSpeeds, COOLED_SPACE_AFTER_RE, COOLING_VERB_BEFORE_RE, ROCKET_RE, rolesByContext, storeAloneIsInput, usableSizeOfFilledStore } from './roles-by-context';
 import { relateTemperatures } from './temperatures';
 
 /** A transistor's own currents (base, collector, emitter, gate, drain): "2 mA base current", "300 mA of collector current". */
@@ -540,6 +540,24 @@ export function relateFigures(text: string, drafts: Draft[]): void {
     }
   }
 
+  // "Output: 2 × 150 W into 4 Ω", "three 30 kW units", "twin 250 W motors": so many of a rated thing, the
+  // total what the device's side is; each one's rating set aside.
+  for (const d of [...drafts]) {
+    if (!(d.kind === 'power' || d.kind === 'energy' || d.kind === 'thrust') || d.derived || /^10[⁰-⁹⁻^]/u.test(text.slice(d.start, d.end))) continue;
+    const lead = text.slice(Math.max(0, d.start - 12), d.start);
+    // (Not a factor of a product worked out: "60 × 48 × 3,600 joules".)
+    const times = /[×x*·][^\S\n]*\d[\d.,]*[^\S\n]*[×x][^\S\n]*$/u.test(text.slice(Math.max(0, d.start - 24), d.start)) ? null : /(?<![\d.,^⁰-⁹])(\d{1,2})[^\S\n]*[×x][^\S\n]*$/u.exec(lead);
+    const word = /(?<!\p{L})(two|three|four|five|six|eight|ten|twelve|twin)[^\S\n]+$/iu.exec(lead);
+    const plural = /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+)?(?:channels|units|modules|panels|motors|heaters|elements|thrusters|engines|turbines|stacks|cells|lamps|fans|generators|compressors|pumps|strings|arrays|inverters|machines)(?!\p{L})/iu.test(text.slice(d.end, d.end + 40));
+    const n = times ? Number(times[1]) : word && plural ? { two: 2, twin: 2, three: 3, four: 4, five: 5, six: 6, eight: 8, ten: 10, twelve: 12 }[word[1].toLowerCase()]! : 0;
+    if (!(n >= 2)) continue;
+    const one = siOf(d);
+    if (one === null) continue;
+    const unit = FIGURE_SI_UNIT[d.kind];
+    insertAfter(drafts, d, { start: d.start - (times ?? word)![0].length, end: d.end, kind: d.kind, quantity: typedSi(n * one, unit), role: d.role, derived: `${n} × ${formatQuantity(one, unit)}` });
+    d.role = 'aside';
+  }
+
   // "fuel producing 1,500 W of decay heat … convert 5.0 % of that heat into 75 W of electricity": what the heat
   // is turned into is the output, and the heat said before it the input.
   for (const d of drafts) {
@@ -751,6 +769,7 @@ export function relateFigures(text: string, drafts: Draft[]): void {
   asideFutureVersions(text, drafts);
   asideComparedLamps(text, drafts);
   asideOtherBasis(text, drafts);
+  usableSizeOfFilledStore(text, drafts);
   efficiencyQuotient(text, drafts);
 
   // "every kilowatt fed to it gives four hundred millinewtons": a thrust per power.

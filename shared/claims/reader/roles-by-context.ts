@@ -725,6 +725,8 @@ export function asideControlPowers(text: string, drafts: Draft[]): void {
   // (Not what it draws from its supply: "draws 180 W from the mains".)
   const drawn = (d: Draft) =>
     /(?<!\p{L})(?:draws?|drawing|drew|consum\w*|uses|using|takes|taking|pulls?)(?:[^\S\n]+(?:about|around|up[^\S\n]+to|some|roughly|nearly))?[^\S\n]*$/iu.test(text.slice(Math.max(0, d.start - 25), d.start)) ||
+    // ("Mains draw at full power: 420 W", "Power consumption (max): 95 W": a label of what it takes from its supply.)
+    /(?<!\p{L})(?:mains|supply|wall|power|AC|electrical)[^\S\n]+(?:draw|consumption|input)(?!\p{L})[^:\n]{0,25}:[^\S\n]*(?:(?:about|approx\.?|~)[^\S\n]*)?$/iu.test(text.slice(Math.max(0, d.start - 50), d.start)) ||
     /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?from[^\S\n]+(?:the[^\S\n]+|its[^\S\n]+|a[^\S\n]+)?(?:mains|supply|wall|socket|grid|batter(?:y|ies)|power[^\S\n]+supply|PSU)(?!\p{L})/iu.test(text.slice(d.end, d.end + 40));
   const control = (d: Draft) =>
     d.kind === 'power' && d.role === 'in' && !d.derived && ((amplifier && !drawn(d)) || CONTROL_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) || CONTROL_AFTER_RE.test(text.slice(d.end, d.end + 40)));
@@ -840,6 +842,8 @@ export function asideIdealWork(text: string, drafts: Draft[]): void {
 const FUTURE_VERSION_AFTER_RE =
   /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?(?:versions?|models?|units?|editions?|variants?|systems?|products?|prototypes?)(?!\p{L})[^\S\n]+(?:is|are|will[^\S\n]+be|would[^\S\n]+be)[^\S\n]+(?:(?:now|also|already)[^\S\n]+)?(?:planned|due|expected|scheduled|promised|coming|in[^\S\n]+(?:development|the[^\S\n]+works|design)|under[^\S\n]+development|to[^\S\n]+follow)(?!\p{L})/iu;
 /** Before a rating, a version to come: "a planned 5 kW model", "the upcoming 20 kW version", "next year's 10 kW unit". */
+/** Before an accessory's rating: "optional 0.6 kW heater", "an add-on 2 kW booster". */
+const ACCESSORY_BEFORE_RE = /(?<!\p{L})(?:optional|add-on|extra-cost|available)[^\S\n]+$/iu;
 const FUTURE_VERSION_BEFORE_RE =
   /(?<!\p{L})(?:planned|upcoming|forthcoming|future|proposed|next[^\S\n]+year(?:['’]s)?|next-generation|next[^\S\n]+generation|later)[^\S\n]+(?:(?:home|commercial|industrial|larger|bigger|scaled-up|full-size|production)[^\S\n]+)?$/iu;
 
@@ -853,7 +857,7 @@ const VERSION_NOUN_AFTER_RE = /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+)?(?:v
 export function asideFutureVersions(text: string, drafts: Draft[]): void {
   for (const d of drafts) {
     if (!(d.kind === 'power' || d.kind === 'energy' || d.kind === 'thrust') || d.derived) continue;
-    if (FUTURE_VERSION_AFTER_RE.test(text.slice(d.end, d.end + 80)) || (FUTURE_VERSION_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)) && VERSION_NOUN_AFTER_RE.test(text.slice(d.end, d.end + 40)))) d.role = 'aside';
+    if (ACCESSORY_BEFORE_RE.test(text.slice(Math.max(0, d.start - 20), d.start)) || FUTURE_VERSION_AFTER_RE.test(text.slice(d.end, d.end + 80)) || (FUTURE_VERSION_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)) && VERSION_NOUN_AFTER_RE.test(text.slice(d.end, d.end + 40)))) d.role = 'aside';
   }
 }
 
@@ -888,5 +892,21 @@ export function asideOtherBasis(text: string, drafts: Draft[]): void {
     )
       d.role = 'aside';
   }
+}
+
+/** Before a store's usable size: "Usable capacity 13.5 kWh", "usable energy: 9.8 kWh", "delivers back up to". */
+const USABLE_SIZE_BEFORE_RE = /(?<!\p{L})(?:usable|useable|available|deliverable|discharge)[^\S\n]+(?:capacity|energy|storage)[^\S\n]*(?:(?:of|is|:|=)[^\S\n]*)?(?:(?:about|approx\.?|~|up[^\S\n]+to)[^\S\n]*)?$/iu;
+/** After what a store takes to fill: "from the grid to fill from empty", "to charge it fully", "for a full charge". */
+const TO_FILL_AFTER_RE = /^[^.;!?\n]{0,40}?(?<!\p{L})(?:to[^\S\n]+(?:fill|charge|top[^\S\n]+up|recharge)|for[^\S\n]+a[^\S\n]+full[^\S\n]+(?:charge|fill))(?!\p{L})/iu;
+
+/**
+ * "Usable capacity 13.5 kWh … Takes ~15.0 kWh from the grid to fill from empty": a store whose filling from
+ * empty takes a stated energy gives back its usable size — the size is what comes out of the round trip.
+ */
+export function usableSizeOfFilledStore(text: string, drafts: Draft[]): void {
+  const fill = drafts.filter((d) => d.kind === 'energy' && d.role === 'in' && !d.derived && TO_FILL_AFTER_RE.test(text.slice(d.end, d.end + 60)));
+  if (fill.length !== 1 || drafts.some((d) => d.kind === 'energy' && d.role === 'out')) return;
+  const sizes = drafts.filter((d) => d.kind === 'energy' && d.role === null && !d.derived && USABLE_SIZE_BEFORE_RE.test(text.slice(Math.max(0, d.start - 40), d.start)));
+  if (sizes.length === 1) sizes[0].role = 'out';
 }
 
