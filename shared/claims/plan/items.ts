@@ -93,7 +93,7 @@ function namesDevice(label: string): boolean {
   if (/^['‘“"]/u.test(label.trim())) return false;
   // (Nor a figure with its unit, "Compressor input about 0.5 kW", "Empty weight 92 kg", nor a verb's
   // opening, "Fits most city bikes", "Delivers 2.4 W".)
-  if (/(?<![\p{L}\d.,-])\d[\d.,]*[^\S\n]*(?:(?:million|billion|thousand)[^\S\n]+)?(?:[kMGm]?W|[kMG]?Wh|V|A|mA|°[CF]?|K|kg|g|t|mm|cm|km|m|%|[mµk]?N|s|h|min|bar|psi|hp|PS|rpm|L|mph|km\/h|dB)(?![\p{L}\d])/u.test(label)) return false;
+  if (/(?<![\p{L}\d.,-])\d[\d.,]*[^\S\n]*(?:(?:million|billion|thousand)[^\S\n]+)?(?:[kMGm]?W|[kMG]?Wh|V|A|mA|°[CF]?|K|kg|g|t|mm|cm|km|m|%|[mµk]?N|s|h|min|bar|psi|hp|PS|rpm|L|mph|km\/h|dB|lbs?|lbf|oz|ft|BTU(?:\/h)?)(?![\p{L}\d])/u.test(label)) return false;
   if (VERB_S_RE.test(tokens[0])) return false;
   const caps = tokens.filter((t) => /^\p{Lu}/u.test(t)).length;
   const ownCaps = own.filter((t) => /^\p{Lu}/u.test(t)).length;
@@ -107,7 +107,7 @@ const WHOLE_DEVICE_RE =
 
 /** The head of a list line, up to its first comma, colon, bracket, full stop or "with"/"that"/"which". */
 function headOf(rest: string): string {
-  return rest.split(/[,:;(]|\.(?:\s|$)|[^\S\n](?:with|that|which|who|at|for|from|on|in|running|rated|drawing|giving)[^\S\n]/u)[0].trim();
+  return rest.split(/(?<!\d),|,(?!\d)|[:;(]|\.(?:\s|$)|[^\S\n](?:with|that|which|who|at|for|from|on|in|running|rated|drawing|giving)[^\S\n]/u)[0].trim();
 }
 
 /**
@@ -118,6 +118,8 @@ function headOf(rest: string): string {
 function deviceHead(rest: string): string | null {
   const head = headOf(rest);
   if (!head || /^[\d±~≈<>]/u.test(head)) return null;
+  // (Not a part's size cut off at its unit: "Drum 18 in across".)
+  if (/\d$/u.test(head) && /^[^\S\n]*(?:in|inch(?:es)?|cm|mm|m|ft|feet)(?!\p{L})/iu.test(rest.slice(rest.indexOf(head) + head.length))) return null;
   const words = head.split(/[^\S\n]+/u);
   if (FIELD_WORDS_RE.test(words[0]) || QUANTITY_RE.test(words[words.length - 1]) || words.some((w) => NOT_A_DEVICE_WORD_RE.test(w))) return null;
   if (namesDevice(head.replace(/^(?:the|a|an)[^\S\n]+/iu, ''))) return head;
@@ -149,7 +151,7 @@ function lineKind(line: string): LineKind {
 
 /** A heading of a list of several things: a digest, a queue, a round-up, a watch, notes on several. */
 const LIST_HEADING_RE =
-  /(?<!\p{L})(?:digest|queue|round-?up|roundup|watch|batch|submissions?|this[^\S\n]+(?:week|month)|compared|comparison|options|quotes|booths?|stands?|entries|applications|proposals|threads|posts|campaigns|listings|shortlist|line-?up|(?:two|three|four|five|six|several)[^\S\n]+[\p{L}'-]+)(?!\p{L})/iu;
+  /(?<!\p{L})(?:digest|queue|round-?up|roundup|watch|batch|submissions?|this[^\S\n]+(?:week|month)|compared|comparison|options|quotes|booths?|(?<!(?:it|that|this|things|matters)[^\S\n]+)stands?|entries|applications|proposals|threads|posts|campaigns|listings|shortlist|line-?up|(?:two|three|four|five|six|several)[^\S\n]+[\p{L}'-]+)(?!\p{L})/iu;
 
 /**
  * The list items of a text, or none where it holds no list of two items or more. Bulleted lines of one

@@ -2557,3 +2557,34 @@ describe('lists of ratings: counts of a rated thing, labels of mains draw, acces
     expect(firstLaw(text)?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(10 / 11.2, 6); // out / in
   });
 });
+
+describe('bulleted spec lists of one craft, payloads, zero mass flow (invented test data)', () => {
+  const run = (text: string, check: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === check);
+
+  test('"• Gross lift-off weight 20,000 lb / • Empty weight 2,500 lb" are one craft\'s fields, not two devices (a thousands comma is no cut)', () => {
+    const text = 'Single-stage pitch\n• Gross lift-off weight 20,000 lb\n• Empty weight 2,500 lb\n• Engine Isp 300 s\n• Single stage to orbit: 9.6 km/s Δv';
+    const r = run(text, 'rocket-equation');
+    // Δv = Isp·g0·ln(m_wet/m_dry) = 300 × 9.80665 × ln(8) ≈ 6118 m/s (Tsiolkovsky; g0 exact, BIPM SI Brochure).
+    expect(r?.outputs.find((o) => o.name === 'dv')?.si).toBeCloseTo(300 * 9.80665 * Math.log(8), 0);
+    expect(r?.finding).toBe('breaks');
+  });
+
+  test('"Drum 16 in across" is a size, and "where it stands" no heading of a list of several devices', () => {
+    const text = 'Build log, drive v2 — where it stands:\n- 2 lbf of steady thrust on my hanging scale\n- Driven by a 1 hp electric motor\n- Two masses swing inside a sealed drum, nothing comes out\n- Drum 16 in across, 35 lb with the frame';
+    // F·c/P = 2 × 4.4482216152605 N × 299792458 m/s / 745.69987158227 W (lbf and hp from NIST SP 811 B.8).
+    expect(run(text, 'photon-bound')?.outputs.find((o) => o.name === 'ratio')?.si).toBeCloseTo((2 * 4.4482216152605 * 299792458) / 745.69987158227, -2);
+  });
+
+  test('a payload\'s own mass is no mass of the stage ("Payload to SSO: 400 kg", "with the full 400 kg payload")', () => {
+    const text = '• Propellant load: 10,000 kg\n• Stage dry mass: 1,250 kg\n• Isp 320 s\n• Stage Δv with no payload: 6.0 km/s\n• Payload to SSO: 400 kg\nWith the full 400 kg payload the number drops to roughly 5.4 km/s.';
+    const f = extractFigures(text);
+    expect(f.filter((x) => x.kind === 'mass' && x.si === 400).every((x) => x.role === 'aside')).toBe(true);
+    expect(f.find((x) => x.kind === 'mass' && x.role === 'wet')?.si).toBe(11250); // dry + propellant
+    expect(run(text, 'rocket-equation')?.finding).toBe('consistent'); // 320 × 9.80665 × ln 9 ≈ 6896 m/s ≥ 6.0 km/s
+  });
+
+  test('"zero mass flow" says nothing is thrown out, so a beam inside a ring is no propellant', () => {
+    const text = '- 40 W ion beam bent sideways inside a closed ring\n- Nothing leaves the ring: zero mass flow\n- Net forward force: 10 mN';
+    expect(run(text, 'photon-bound')?.finding).toBe('breaks'); // 0.01 N × c / 40 W ≫ 1
+  });
+});

@@ -542,6 +542,12 @@ export function rolesByContext(text: string, drafts: Draft[]): void {
     for (const m of masses) if ((m.role === null || m.role === 'wet' || m.role === 'dry') && !METAL_MASS_RE.test(sentenceAround(text, m.start, m.end))) m.role = 'aside';
     return;
   }
+  // "Payload to SSO: 450 kg", "with the full 450 kg payload": the payload's own mass is no mass of the craft
+  // with or without its propellant (left out, the check allows the craft more Δv, never less).
+  for (const m of masses) {
+    if (m.derived) continue;
+    if (/^[^\S\n]*(?:of[^\S\n]+)?payloads?(?!\p{L})/iu.test(text.slice(m.end, m.end + 20)) || /(?:^|[\n•·;]|[-–*][^\S\n])[^\S\n]*(?:max(?:imum)?[^\S\n]+)?payloads?(?:[^\S\n]+(?:mass|capacity))?(?:[^\S\n]+(?:to|into)[^\S\n]+[\p{L}\d-]+)?[^\S\n]*[:=][^\S\n]*(?:(?:about|up[^\S\n]+to|~)[^\S\n]*)?$/iu.test(text.slice(Math.max(0, m.start - 40), m.start))) m.role = 'aside';
+  }
   // "burns from 25 t to 9 t", "goes from 100 t down to 33 t": the mass at the start and at the end.
   for (let i = 0; i + 1 < masses.length; i++) {
     const [a, b] = [masses[i], masses[i + 1]];

@@ -67,7 +67,9 @@ export const HEAT_ENGINE_WORDS = [
 /** A device said to throw out nothing: the photon-rocket bound applies to its thrust. */
 export const PROPELLANT_FREE_WORDS = [
   // ("no air flow or propellant": before the shorter "no air flow" below, so that the propellant is part of the match.)
-  'no (?:[\\w-]+ ){0,2}(?:or|nor) (?:any )?(?:propellant|reaction mass|exhaust)', 'without (?:[\\w-]+,? ){1,3}(?:or|nor) (?:any )?(?:propellant|reaction mass|exhaust)', 'neither (?:[\\w-]+ ){0,2}nor (?:any )?(?:propellant|reaction mass|exhaust)',
+  'no (?:[\\w-]+ ){0,2}(?:or|nor) (?:any )?(?:propellant|reaction mass|exhaust)',
+  // "Nothing leaves the ring: zero mass flow": no mass thrown out.
+  '(?:zero|no|nil) (?:net )?mass (?:flow|loss)(?: rate)?', 'without (?:[\\w-]+,? ){1,3}(?:or|nor) (?:any )?(?:propellant|reaction mass|exhaust)', 'neither (?:[\\w-]+ ){0,2}nor (?:any )?(?:propellant|reaction mass|exhaust)',
   // "which is free of any exhaust or propeller": a device said to have neither.
   '(?:free|clear) of (?:any )?(?:exhaust|propellant|reaction mass|propellers?|rotors?|jets?)(?:,? (?:or|and|nor) (?:any )?(?:exhaust|propellant|reaction mass|propellers?|rotors?|jets?))*',
   'propellant[- ]?(?:free|less)', 'reaction[- ]?less', 'reactionless', 'without (?:spending|using|burning|consuming|expending|carrying|needing|requiring|taking) (?:any |(?:a|one|an?) (?:single )?(?:gram|kilogram|milligram|ounce|drop|atom|molecule|scrap|bit|speck) of )?(?:propellant|fuel|reaction mass)',
