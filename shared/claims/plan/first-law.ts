@@ -494,6 +494,15 @@ export function planFirstLaw(b: Basis, { thrust, photonApplies }: ThrustReading,
     needs.push(need('first-law', ['the energy or power put in (all of it: electrical, mechanical, chemical, heat)'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eOut, pOut])));
   } else if ((eIn || pIn) && !(eOut || pOut) && s.overUnity && !thrust) {
     needs.push(need('first-law', ['the energy or power got out'], 'Over a full cycle a machine delivers no more energy than it is given.', uniq([eIn, pIn])));
+  } else if (!(eIn || pIn || eOut || pOut) && !thrust && !plans.some((p) => p.check === 'first-law' || p.check === 'carnot') && [...power, ...energy].some((f) => f.role === 'excess')) {
+    // "excess heat of about 35 W during the loading phase", "puts out about 1.6 kW more heat than it takes from
+    // the socket": an excess alone, with neither side given.
+    const excess = [...power, ...energy].filter((f) => f.role === 'excess');
+    if (movesHeat || s.heatPump || s.cooling) {
+      needs.push(need('carnot', ['the power the machine draws', 'the temperatures of the heat source and of where the heat goes'], 'A machine that moves heat may give out more heat than the work it takes, up to its Carnot COP for its two temperatures.', excess));
+    } else {
+      needs.push(need('first-law', ['the energy or power put in (all of it: electrical, mechanical, chemical, heat)', 'the energy or power got out, measured'], 'Over a full cycle a machine delivers no more energy than it is given.', excess));
+    }
   } else if (power.length === 0 && energy.length === 0 && !thrust && SELF_RUNNING_CLAIM_RE.test(text) && !HARVEST_CLAIM_RE.test(text)) {
     // "The weighted wheel is self-running and has turned for three weeks; no output figure is given."
     needs.push(need('first-law', ['the energy or power got out, measured', 'everything that goes in (a self-running machine is said to take nothing)'], 'Over a full cycle a machine delivers no more energy than it is given.', []));

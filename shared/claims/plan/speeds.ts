@@ -4,7 +4,13 @@
  */
 import { C_LIGHT } from '../../checks/constants';
 import type { Figure } from '../types';
-import { at, largest, type Basis } from './basis';
+import { at, largest, need, type Basis } from './basis';
+
+/** A claim of going or signalling faster than light, in words: "superluminal transfer", "before light could", "FTL link". */
+const FASTER_THAN_LIGHT_WORDS_RE =
+  /(?<!\p{L})(?:superluminal|faster[- ]than[- ]light|FTL|warp[- ]?(?:drive|speed|field|bubble)s?|before[^\S\n]+light[^\S\n]+(?:could|would|can|does|did|gets?|got)|outrun(?:s|ning)?[^\S\n]+light|beats?[^\S\n]+light|quicker[^\S\n]+than[^\S\n]+light|outpaces?[^\S\n]+light)(?!\p{L})/iu;
+/** Just before such words, a denial: "nothing travels", "no signal can go", "not", "never". */
+const DENIED_BEFORE_RE = /(?<!\p{L})(?:nothing|no|not|cannot|can['’]t|never|isn['’]t|aren['’]t|doesn['’]t|don['’]t|won['’]t|without|nor|neither|impossible|forbid\w*|rules?[^\S\n]+out)(?!\p{L})[^.;!?\n]{0,40}$/iu;
 
 /**
  * Speeds from which the light-speed check is run: 100 km/s, beyond anything on or near the Earth
@@ -37,6 +43,14 @@ export function planSpeeds(b: Basis): void {
   const fastest = signalSpeeds.filter((f) => f.role !== 'delta-v' || f.si >= C_LIGHT).sort((a, b) => b.si - a.si)[0] ?? largest(signalSpeeds);
   // (A craft's own speed from 1 km/s, where the text is about a speed and not a rocket's budget: "a probe at 17 km/s".)
   const speedFrom = fastest && fastest.role === null && !plans.some((p) => p.check === 'rocket-equation') ? SPACE_SPEED_FROM : LIGHT_SPEED_FROM;
+  // ("We report superluminal transfer of information …", "gets your message there before light could", with no
+  // speed, distance or time given: the check the claim calls for, and what it needs.)
+  if (!(fastest && (fastest.upper?.si ?? fastest.si) >= speedFrom)) {
+    const m = FASTER_THAN_LIGHT_WORDS_RE.exec(text);
+    if (m && !DENIED_BEFORE_RE.test(text.slice(Math.max(0, m.index - 60), m.index)) && !b.needs.some((n) => n.check === 'light-speed')) {
+      b.needs.push(need('light-speed', ['the speed claimed, or a distance and the time taken to cover it'], 'The text claims something goes or signals faster than light but gives no speed, distance or time to set against c.', []));
+    }
+  }
   if (fastest && (fastest.upper?.si ?? fastest.si) >= speedFrom) {
     plans.push({
       check: 'light-speed',

@@ -2588,3 +2588,30 @@ describe('bulleted spec lists of one craft, payloads, zero mass flow (invented t
     expect(run(text, 'photon-bound')?.finding).toBe('breaks'); // 0.01 N × c / 40 W ≫ 1
   });
 });
+
+describe('what a claim needs when it gives too little: faster than light in words, an excess alone; a Peltier stage held below the room (invented test data)', () => {
+  const result = (text: string) => runClaimChecks(extractFigures(text), { text });
+
+  test('"superluminal transfer of information" with no speed needs the speed; "nothing travels faster than light" needs nothing', () => {
+    expect(result('We report superluminal transfer of information through a chain of 32 coupled resonators. No speed is given.').needs.some((n) => n.check === 'light-speed')).toBe(true);
+    expect(result('The courier app delivers your message to the lunar relay before light could.').needs.some((n) => n.check === 'light-speed')).toBe(true);
+    expect(result('Nothing travels faster than light, so the relay adds 1.3 s each way.').needs.some((n) => n.check === 'light-speed')).toBe(false);
+  });
+
+  test('an excess alone needs both sides; a heat pump\'s excess needs its draw and its temperatures', () => {
+    const cell = result('The nickel cell showed excess heat of about 20 W through most of the run.');
+    expect(cell.needs.some((n) => n.check === 'first-law')).toBe(true);
+    expect(cell.checks.some((c) => c.finding === 'breaks')).toBe(false);
+    const dryer = result('A heat-pump dryer "puts out about 1.2 kW more heat than it takes from the socket".');
+    expect(dryer.needs.some((n) => n.check === 'carnot')).toBe(true);
+    expect(dryer.checks.some((c) => c.finding === 'breaks')).toBe(false);
+  });
+
+  test('a Peltier stage holding a plate 15 °C below 22 °C room air at a COP of 0.6 is a cooling COP within Carnot', () => {
+    const text = 'The Peltier stage holds the plate 15 °C below the 22 °C room air while extracting 12 W, at a COP of 0.6.';
+    const carnot = result(text).checks.find((c) => c.check === 'carnot');
+    // Carnot cooling COP = Tc/(Th − Tc) = 280.15/15 ≈ 18.7 (textbook formula); 0.6 / 18.68 ≈ 0.032.
+    expect(carnot?.outputs.find((o) => o.name === 'cop_cooling_ratio')?.si).toBeCloseTo(0.6 / (280.15 / 15), 4);
+    expect(carnot?.finding).toBe('consistent');
+  });
+});
