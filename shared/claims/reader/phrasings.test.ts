@@ -2615,3 +2615,23 @@ describe('what a claim needs when it gives too little: faster than light in word
     expect(carnot?.finding).toBe('consistent');
   });
 });
+
+describe('what ends up in the water, a load carried, a store spun up with an energy (invented test data)', () => {
+  const role = (text: string, kind: FigureKind, si: number) => extractFigures(text).find((f) => f.kind === kind && Math.abs(f.si - si) <= 1e-9 * Math.max(1, si))?.role;
+  const firstLaw = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.find((c) => c.check === 'first-law');
+
+  test('"650 kJ from the socket for about 520 kJ in the water": the energy in the water is the output', () => {
+    const text = 'The 2.7 kW kettle boils 1.5 litres in four minutes: 650 kJ from the socket for about 520 kJ in the water.';
+    expect(role(text, 'energy', 520e3)).toBe('out');
+    expect(firstLaw(text)?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo(520 / 650, 6); // out / in
+  });
+
+  test('a flywheel "spun up with 1.5 kWh" that "carried the 50 kW load for 80 s" gave 4 MJ for 5.4 MJ', () => {
+    const text = 'Flywheel test: spun up with 1.5 kWh over 30 min, then carried the 50 kW server-room load for 80 s.';
+    expect(role(text, 'energy', 1.5 * 3.6e6)).toBe('in');
+    expect(role(text, 'power', 50e3)).toBe('out');
+    const run = firstLaw(text);
+    expect(run?.finding).toBe('consistent');
+    expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo((50e3 * 80) / (1.5 * 3.6e6), 6); // P·t / E_in
+  });
+});

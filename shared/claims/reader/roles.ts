@@ -175,6 +175,10 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     // "The district network draws roughly 6 MWh out over the winter", "takes 2 kWh out of the store": what is
     // drawn out of a store or a source is what it gives.
     if (/(?<!\p{L})(?:draws?|drew|drawing|takes?|took|taking|pulls?|pulled|pulling)[^\S\n]+(?:(?:about|around|roughly|some|nearly|only|just|up to|over)[^\S\n]+)?$/iu.test(lead) && /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?out(?!\p{L})(?![^\S\n]+of[^\S\n]+(?:the[^\S\n]+)?(?:mains|grid|socket|wall|supply|battery|batteries|pack)(?!\p{L}))/iu.test(text.slice(end, end + 40))) return 'out';
+    // "carried the 75 kW data-hall load for 90 s": a load the device carries is what it gives.
+    if (/(?<!\p{L})(?:carr(?:y|ies|ied|ying)|held|holds?|holding|supports?|supported|supporting|picks?[^\S\n]+up|picked[^\S\n]+up)[^\S\n]+(?:the|a|an|its|their|our)[^\S\n]+(?:full[^\S\n]+)?$/iu.test(lead) && /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?loads?(?!\p{L})/iu.test(text.slice(end, end + 40))) return 'out';
+    // "spun up with 2.2 kWh", "charged with 5 kWh", "wound up with 40 J": what it was given is its input.
+    if (/(?<!\p{L})(?:spun[^\S\n]+up|spin[^\S\n]+up|wound[^\S\n]+up|charged|filled|primed|loaded)[^\S\n]+(?:(?:over|in)[^\S\n]+[^\S\n\d]{0,12}[^\S\n]+)?with[^\S\n]+(?:(?:about|around|roughly|some|nearly|only|just)[^\S\n]+)?$/iu.test(lead)) return 'in';
     // "the rider puts in about 150 W", "we put in 2 kWh": what is put in is the input.
     if (/(?<!\p{L})(?:puts?|putting)[^\S\n]+in[^\S\n]+(?:(?:about|around|roughly|some|nearly|only|just|up to|over|a steady)[^\S\n]+)?$/iu.test(lead)) return 'in';
     // "the heat meter read 8.4 kW": a heat meter counts the heat delivered — the output.
@@ -341,6 +345,8 @@ export function roleFor(text: string, kind: FigureKind, start: number, end: numb
   if ((kind === 'power' || kind === 'energy') && FROM_NOTHING_AFTER_RE.test(text.slice(end, end + 80))) return 'out';
   // "A small motor does 2.7 × 10¹¹ erg of work each minute": the work a machine is said to do is its output.
   if ((kind === 'power' || kind === 'energy') && /^[^\S\n]+of[^\S\n]+(?:useful[^\S\n]+|mechanical[^\S\n]+)?work(?!\p{L})/iu.test(text.slice(end, end + 30)) && DOES_WORK_BEFORE_RE.test(text.slice(Math.max(floor, start - 30), start))) return 'out';
+  // "720 kJ from the socket for roughly 570 kJ in the water": what ends up in the heated water or vessel is the output.
+  if ((kind === 'power' || kind === 'energy') && /^[^\S\n]*(?:of[^\S\n]+heat[^\S\n]+)?(?:(?:ends?|ended)[^\S\n]+up[^\S\n]+|stored[^\S\n]+|(?:is|was)[^\S\n]+)?in[^\S\n]+the[^\S\n]+(?:(?:hot|heated|bath|tank|kettle)[^\S\n]+)?(?:water|tank|bath|pot|pan|kettle|cup|mug|drum|cylinder)(?!\p{L})/iu.test(text.slice(end, end + 50))) return 'out';
   if (kind === 'power' || kind === 'energy') {
     IN_OUT_AFTER_RE.lastIndex = end;
     const io = IN_OUT_AFTER_RE.exec(text);
