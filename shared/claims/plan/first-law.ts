@@ -311,7 +311,15 @@ function pulseOf(text: string, f: Figure, d: Figure): boolean {
 /** "Overnight it runs the compressor fridge, which pulls about 150 W": the machine that moves heat is a load the device runs. */
 function heatMoverIsLoad(text: string, out: Figure | undefined): boolean {
   if (!out || out.start === null || out.end === null) return false;
-  return /(?<!\p{L})(?:runs?|ran|running|powers?|powered|powering|drives?|drove|keeps?|kept)[^\S\n]+(?:the|a|an|our|my|its|your)[^\S\n]+(?:[\p{L}-]+,?[^\S\n]+){0,3}?(?:fridges?|freezers?|refrigerators?|air[- ]conditioners?|heat[- ]pumps?|chillers?|coolers?)(?!\p{L})/iu.test(sentenceAround(text, out.start, out.end));
+  // (The output is the load's own rating or what it used, said in the phrase: "ran a 35 W compressor fridge for
+  // two weeks" — not heat the load delivers, "runs a 700 W heat pump …, delivering about 30 kWh of heat".)
+  const sentence = sentenceAround(text, out.start, out.end);
+  const from = text.indexOf(sentence);
+  const m = /(?<!\p{L})(?:runs?|ran|running|powers?|powered|powering|drives?|drove|keeps?|kept)[^\S\n]+(?:the|a|an|our|my|its|your)[^\S\n]+(?:[\p{L}\d.,-]+,?[^\S\n]+){0,4}?(?:fridges?|freezers?|refrigerators?|air[- ]conditioners?|heat[- ]pumps?|chillers?|coolers?)(?!\p{L})/iu.exec(sentence);
+  if (m === null) return false;
+  if (from < 0) return true;
+  const heat = /^[^\S\n]*(?:of[^\S\n]+)?(?:useful[^\S\n]+)?(?:heat|warmth|cooling)(?!\p{L})/iu.test(text.slice(out.end, out.end + 25)) || /(?<!\p{L})(?:heat|heating|cooling)(?:[^\S\n]+(?:output|delivered|capacity))?[^\S\n]*[:=]?[^\S\n]*$/iu.test(text.slice(Math.max(0, out.start - 25), out.start));
+  return out.start >= from + m.index && !heat;
 }
 
 function electricOnBothSides(inF: Figure | undefined, outF: Figure | undefined): boolean {

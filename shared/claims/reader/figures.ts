@@ -492,7 +492,9 @@ export function readFigures(text: string, restated: [number, number][]): Figure[
         if (upperNum !== undefined) upper = q(upperNum);
       }
     } else {
-      const bare = bareKind(text, start, t.numEnd, sheetRowFloor(text, start, floor, true)) ?? bareFromUpper ?? erratumBare(text, start, drafts);
+      // (Not a term of the writer's working: the "400" of "400/(400 + 4.8) ≈ 98.8 %".)
+      const term = /^[^\S\n]*[/÷×*][^\S\n]*\(/u.test(text.slice(t.numEnd, t.numEnd + 6)) || /[(+−–*×÷/][^\S\n]*$/u.test(text.slice(Math.max(0, start - 3), start)) && /^[^\S\n]*[)+−–*×÷/]/u.test(text.slice(t.numEnd, t.numEnd + 4));
+      const bare = term ? null : bareKind(text, start, t.numEnd, sheetRowFloor(text, start, floor, true)) ?? bareFromUpper ?? erratumBare(text, start, drafts);
       if (bare) {
         kind = bare.kind;
         role = bare.role;

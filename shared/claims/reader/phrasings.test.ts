@@ -2635,3 +2635,51 @@ describe('what ends up in the water, a load carried, a store spun up with an ene
     expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo((50e3 * 80) / (1.5 * 3.6e6), 6); // P·t / E_in
   });
 });
+
+describe('claims at the bound within rounding, savings, recovered heat, ratings beside measurements, loads a store ran (invented test data)', () => {
+  const result = (text: string) => runClaimChecks(extractFigures(text), { text });
+  const breaks = (text: string) => result(text).checks.some((c) => c.finding === 'breaks');
+  const role = (text: string, kind: FigureKind, si: number) => extractFigures(text).find((f) => f.kind === kind && Math.abs(f.si - si) <= 1e-9 * Math.max(1, si))?.role;
+
+  test('a Δv worked out right at the rocket equation and rounded ("about 2.665 km/s") is within the law; one 1 % over is not', () => {
+    // 310 s × 9.80665 m/s² × ln(3000/1250) ≈ 2661.5 m/s (Tsiolkovsky; g0 exact, BIPM SI Brochure): 2.665 km/s is 0.13 %
+    // over it, within what the rounding of 3,000 kg, 1,250 kg and 310 s allows.
+    const at = 'A stage of 3,000 kg wet mass and 1,250 kg dry mass, with an engine of 310 s specific impulse, gives a Δv of about 2.665 km/s.';
+    expect(2665 / (310 * 9.80665 * Math.log(3000 / 1250))).toBeGreaterThan(1);
+    expect(breaks(at)).toBe(false);
+    expect(result(at).checks.find((c) => c.check === 'rocket-equation')?.assumptions.some((a) => /rounded to their last stated digit/.test(a))).toBe(true);
+    const over = 'A stage of 3,000 kg wet mass and 1,250 kg dry mass, with an engine of 310 s specific impulse, gives a Δv of about 2.69 km/s.';
+    expect(breaks(over)).toBe(true); // 2690 / 2661.5 ≈ 1.011
+  });
+
+  test('a saving on another machine and heat a recovery wheel hands back are no outputs of the device', () => {
+    expect(role('Each rotor drive draws up to 80 kW; with the wind abeam the main engine can be throttled back by about 900 kW.', 'power', 900e3)).toBe('aside');
+    const wheel = 'A heat-recovery wheel on a 1,500 m³/h unit: about 8 kW of heat recovered from the exhaust air, while the wheel motor uses under 80 W and the fans about 300 W more than they would without the wheel.';
+    expect(role(wheel, 'power', 8000)).toBe('aside');
+    expect(role(wheel, 'power', 300)).toBe('in');
+    expect(breaks(wheel)).toBe(false);
+  });
+
+  test('a nameplate rating beside a measured input, and a rider\'s own pedalling beside a motor\'s output, are set aside', () => {
+    expect(breaks('Log, compressor 2: motor rated 37 kW, measured electrical input 33 kW at full load, 6.2 m³/min at 7 bar.')).toBe(false);
+    expect(breaks('Can my e-bike (250 W motor output) plus my own 120 W of pedalling hold 18 km/h up a 4 % grade?')).toBe(false);
+  });
+
+  test('"20 rooftop panels of 350 W each" are rated by what they give; a battery that "ran a 40 W compressor fridge for ten days" gave what it ran', () => {
+    expect(role('Can 20 rooftop panels of 350 W each really make 7,500 kWh a year?', 'power', 350)).toBe('out');
+    const text = 'Her 12 kWh pack ran a 40 W compressor fridge for ten days without a recharge.';
+    const run = result(text).checks.find((c) => c.check === 'first-law');
+    expect(run?.outputs.find((o) => o.name === 'over_unity')?.si).toBeCloseTo((40 * 10 * 86400) / (12 * 3.6e6), 6); // P·t / E
+    expect(run?.finding).toBe('consistent');
+    // (A heat pump run off a battery delivers heat it moves: no first-law conflict from that heat.)
+    expect(breaks('A 13.5 kWh battery runs a 700 W heat pump for 15 hours, delivering about 30 kWh of heat at 5 °C outdoors and 35 °C flow.')).toBe(false);
+  });
+
+  test('a kite or rotor sail pulls on the wind: no propellant-free thrust', () => {
+    expect(result('A 300 m² towing kite pulled with 60 kN while the ship made 6 m/s: about 360 kW of propulsive power from the wind.').checks.some((c) => c.check === 'photon-bound' && c.finding === 'breaks')).toBe(false);
+  });
+
+  test('the "400" of a worked "400/(400 + 4.8)" is no efficiency', () => {
+    expect(extractFigures('At full load the efficiency is 400/(400 + 4.8) ≈ 98.8 %.').some((f) => f.kind === 'efficiency' && f.si > 1)).toBe(false);
+  });
+});

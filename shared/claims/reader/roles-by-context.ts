@@ -713,13 +713,15 @@ export function asidePassedOn(text: string, drafts: Draft[]): void {
     if (d.kind !== 'power' || d.derived || d.role === 'in') continue;
     if (PASSES_ON_BEFORE_RE.test(text.slice(Math.max(0, d.start - 30), d.start)) && FROM_TO_AFTER_RE.test(text.slice(d.end, d.end + 80))) d.role = 'aside';
     // (Not electricity or work the recovered heat is turned into: "the ORC module returns 14 kW of electricity".)
+    // ("That is about 11 kW of heat recovered from the exhaust air", "160 W of heat coming back".)
+    else if (recovery && /^[^\S\n]*(?:of[^\S\n]+)?(?:heat|warmth|thermal[^\S\n]+(?:power|energy))[^\S\n]+(?:recovered|reclaimed|recaptured|returned|handed[^\S\n]+back|given[^\S\n]+back|coming[^\S\n]+back|comes?[^\S\n]+back|came[^\S\n]+back|brought[^\S\n]+back)(?!\p{L})/iu.test(text.slice(d.end, d.end + 50))) d.role = 'aside';
     else if (recovery && RECOVERED_BEFORE_RE.test(text.slice(Math.max(0, d.start - 60), d.start).replace(/^[^]*[.!?;\n][^\S\n]/u, '')) && !/^[^\S\n]*(?:e(?![\p{L}])|(?:of[^\S\n]+)?(?:electric\w*|shaft|mechanical|work|net[^\S\n]+electric\w*))/iu.test(text.slice(d.end, d.end + 30))) d.role = 'aside';
   }
 }
 
 /** A heat exchanger that hands back heat that would have left: a heat-recovery ventilator, a recuperator. */
 const HEAT_RECOVERY_RE =
-  /(?<!\p{L})(?:heat[- ]recovery|energy[- ]recovery[^\S\n]+ventilat\w*|HRVs?|ERVs?|MVHR|recuperators?|regenerators?|heat[^\S\n]+exchangers?|heat[^\S\n]+wheels?|economi[sz]ers?)(?!\p{L})/iu;
+  /(?<!\p{L})(?:heat[- ]recovery|heat-?recovery[^\S\n]+(?:wheels?|fans?|units?)|energy[- ]recovery[^\S\n]+ventilat\w*|HRVs?|ERVs?|MVHR|recuperators?|regenerators?|heat[^\S\n]+exchangers?|heat[^\S\n]+wheels?|economi[sz]ers?)(?!\p{L})/iu;
 /** Before the heat it hands back, in its clause: "returns", "recovers … about 2 kW", "reclaims". */
 const RECOVERED_BEFORE_RE =
   /(?<!\p{L})(?:returns?|returned|returning|recovers?|recovered|recovering|reclaims?|reclaimed|recaptures?|recaptured|brings?[^\S\n]+back|hands?[^\S\n]+back|gives?[^\S\n]+back)(?!\p{L})(?:(?!(?<!\p{L})(?:and|generat|produc|electric|makes?|making|deliver|drives?|turns?))[^.;!?\n]){0,45}$/iu;

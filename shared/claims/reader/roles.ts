@@ -175,6 +175,22 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     // "The district network draws roughly 6 MWh out over the winter", "takes 2 kWh out of the store": what is
     // drawn out of a store or a source is what it gives.
     if (/(?<!\p{L})(?:draws?|drew|drawing|takes?|took|taking|pulls?|pulled|pulling)[^\S\n]+(?:(?:about|around|roughly|some|nearly|only|just|up to|over)[^\S\n]+)?$/iu.test(lead) && /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?out(?!\p{L})(?![^\S\n]+of[^\S\n]+(?:the[^\S\n]+)?(?:mains|grid|socket|wall|supply|battery|batteries|pack)(?!\p{L}))/iu.test(text.slice(end, end + 40))) return 'out';
+    // "motor rated 45 kW, measured electrical input 41 kW": a nameplate rating beside a measured input is no
+    // output of the run measured.
+    if (/(?<!\p{L})(?:motor|engine|unit|machine|drive|generator)[^\S\n]+(?:is[^\S\n]+)?rated(?:[^\S\n]+at)?[^\S\n]*:?[^\S\n]*$/iu.test(lead) && /(?<!\p{L})measured[^\S\n]+(?:electrical[^\S\n]+|electric[^\S\n]+)?(?:input|draw|consumption|power)(?!\p{L})/iu.test(text)) return 'aside';
+    // "my e-bike (300 W motor output) plus my own 150 W of pedalling": the rider's effort beside a motor's
+    // assistance is another push on the bike, not what the motor takes.
+    if (/^[^\S\n]*(?:of[^\S\n]+)?(?:pedall?ing|pedal[^\S\n]+power|leg[^\S\n]+power|my[^\S\n]+own[^\S\n]+effort)(?!\p{L})/iu.test(text.slice(end, end + 25)) && /(?<!\p{L})(?:e-?bikes?|electric[^\S\n]+bikes?|pedelecs?|motor[^\S\n]+(?:output|assist\w*))(?!\p{L})/iu.test(text)) return 'aside';
+    // "20 rooftop panels of 400 W each": a solar panel's rating is what it gives in full sun.
+    if (/(?<!\p{L})(?:panels?|modules?)[^\S\n]+(?:of|rated(?:[^\S\n]+at)?)[^\S\n]+$/iu.test(lead) && /^[^\S\n]*(?:\(?[^\S\n]*(?:peak|Wp|DC)[^\S\n]*\)?[^\S\n]*)?each(?!\p{L})/iu.test(text.slice(end, end + 20)) && /(?<!\p{L})(?:solar|PV|photovoltaic|rooftop|sun)(?!\p{L})/iu.test(text)) return 'out';
+    // "for the main engine to be throttled back by about 1.1 MW", "cuts the load by 3 kW": a saving on another
+    // machine, no output of the device.
+    if (/(?<!\p{L})(?:throttled|throttle|cut|cuts|reduced|reduces|reduce|lowered|lowers|trimmed|trims|eased|eases)[^\S\n]+(?:back[^\S\n]+|down[^\S\n]+)?by[^\S\n]+(?:(?:about|around|roughly|some|nearly|up to|over)[^\S\n]+)?$/iu.test(lead)) return 'aside';
+    // "the fans about 400 W more than they would without the wheel": more drawn than otherwise — an input.
+    if (/^[^\S\n]*more[^\S\n]+than[^\S\n]+(?:they|it|we|you|one|the[^\S\n]+[\p{L}-]+)[^\S\n]+would(?!\p{L})/iu.test(text.slice(end, end + 40))) return 'in';
+    // "his 13.5 kWh lithium pack ran a 35 W compressor fridge": the rating of what a store or a source ran is
+    // what it gave, whatever the load's own name says of its input.
+    if (/(?<!\p{L})(?:batter(?:y|ies)|packs?|cells?|stores?|banks?|flywheels?|generators?|gensets?|panels?|arrays?|power[^\S\n]?stations?|inverters?)(?!\p{L})[^.;!?\n]{0,40}?(?<!\p{L})(?:ran|runs|run|powered|powers|kept|keeps|drove|drives|fed|feeds|supplied|supplies)[^\S\n]+(?:a|an|the|its|our|my|their|his|her)[^\S\n]+$/iu.test(text.slice(Math.max(0, start - 70), start))) return 'out';
     // "carried the 75 kW data-hall load for 90 s": a load the device carries is what it gives.
     if (/(?<!\p{L})(?:carr(?:y|ies|ied|ying)|held|holds?|holding|supports?|supported|supporting|picks?[^\S\n]+up|picked[^\S\n]+up)[^\S\n]+(?:the|a|an|its|their|our)[^\S\n]+(?:full[^\S\n]+)?$/iu.test(lead) && /^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?loads?(?!\p{L})/iu.test(text.slice(end, end + 40))) return 'out';
     // "spun up with 2.2 kWh", "charged with 5 kWh", "wound up with 40 J": what it was given is its input.
