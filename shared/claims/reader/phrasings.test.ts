@@ -2683,3 +2683,34 @@ describe('claims at the bound within rounding, savings, recovered heat, ratings 
     expect(extractFigures('At full load the efficiency is 400/(400 + 4.8) ≈ 98.8 %.').some((f) => f.kind === 'efficiency' && f.si > 1)).toBe(false);
   });
 });
+
+describe('electrolysers, vapour recompression, DC into AC at two loads, a supply a cell runs on (invented test data)', () => {
+  const breaks = (text: string) => runClaimChecks(extractFigures(text), { text }).checks.some((c) => c.finding === 'breaks');
+  const role = (text: string, si: number) => extractFigures(text).find((f) => f.kind === 'power' && Math.abs(f.si - si) <= 1e-9 * si)?.role;
+
+  test('"a 2 MW electrolyser that produces hydrogen carrying 1.4 MW" takes 2 MW and gives 1.4 MW', () => {
+    const text = 'The bid offers a 2 MW electrolyser that produces hydrogen carrying 1.4 MW of chemical energy (HHV).';
+    expect(role(text, 2e6)).toBe('in');
+    expect(role(text, 1.4e6)).toBe('out');
+    expect(breaks(text)).toBe(false);
+    // (A fuel cell fed hydrogen "carrying 4 kW" takes it in.)
+    expect(role('The stack converts hydrogen carrying 4 kW of chemical power into 2 kW of DC.', 4000)).not.toBe('out');
+  });
+
+  test('an MVR evaporator giving 10 MW of heat for 0.8 MW is a heat pump across 100 → 108 °C (Carnot COP ≈ 47.6, textbook formula)', () => {
+    const text = 'The mechanical vapour recompression evaporator delivers 10 MW of condensing heat at 108 °C while its compressor uses 0.8 MW, recompressing vapour boiled off at 100 °C.';
+    expect(breaks(text)).toBe(false);
+    expect(381.15 / 8).toBeGreaterThan(10 / 0.8); // Th/(Th − Tc) against the COP 12.5
+  });
+
+  test('"turns 400 W of DC into 370 W of AC at light load and 4,000 W of DC into 3,880 W of AC at full load"', () => {
+    const text = 'The inverter turns 400 W of DC into 370 W of AC at light load and 4,000 W of DC into 3,880 W of AC at full load.';
+    expect(role(text, 4000)).toBe('in');
+    expect(role(text, 3880)).toBe('out');
+    expect(breaks(text)).toBe(false);
+  });
+
+  test('"on its 15 W heater supply" is what the cell takes', () => {
+    expect(role('Once loaded, the cell on its 15 W heater supply puts out 3 W more heat than it draws.', 15)).toBe('in');
+  });
+});

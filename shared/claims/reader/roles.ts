@@ -175,6 +175,15 @@ function roleFromWords(text: string, roles: CompiledRoles, start: number, end: n
     // "The district network draws roughly 6 MWh out over the winter", "takes 2 kWh out of the store": what is
     // drawn out of a store or a source is what it gives.
     if (/(?<!\p{L})(?:draws?|drew|drawing|takes?|took|taking|pulls?|pulled|pulling)[^\S\n]+(?:(?:about|around|roughly|some|nearly|only|just|up to|over)[^\S\n]+)?$/iu.test(lead) && /^[^\S\n]*(?:of[^\S\n]+[\p{L}-]+[^\S\n]+)?out(?!\p{L})(?![^\S\n]+of[^\S\n]+(?:the[^\S\n]+)?(?:mains|grid|socket|wall|supply|battery|batteries|pack)(?!\p{L}))/iu.test(text.slice(end, end + 40))) return 'out';
+    // "a 1 MW electrolyser": an electrolyser is rated by the electricity it takes; "hydrogen carrying 700 kW of
+    // chemical energy" is what it gives.
+    if (/^[^\S\n]*(?:-[^\S\n]*)?(?:[\p{L}-]+[^\S\n]+){0,2}?electroly[sz](?:er|ers|ing[^\S\n]+(?:plant|unit|stack)s?)(?!\p{L})/iu.test(text.slice(end, end + 40))) return 'in';
+    if (/(?<!\p{L})(?:produces?|produced|producing|makes?|made|making|yields?|yielded|gives?|gave)[^\S\n]+hydrogen[^\S\n]+(?:carrying|containing|holding|worth|with)[^\S\n]+(?:(?:about|some|roughly|nearly)[^\S\n]+)?$/iu.test(lead) && /(?<!\p{L})electroly[sz]/iu.test(text)) return 'out';
+    // "turns 500 W of DC into 460 W of AC … and 5,000 W of DC into 4,850 W of AC": each pair's first is in, its second out.
+    if (/^[^\S\n]*of[^\S\n]+(?:DC|AC|electricity|heat|fuel|light|gas|steam)[^\S\n]+(?:in)?to[^\S\n]+(?:(?:about|some|roughly|nearly)[^\S\n]+)?[\d.,]+/iu.test(text.slice(end, end + 40)) && /(?<!\p{L})(?:turns?|turned|turning|converts?|converted|converting|changes?|changed)(?!\p{L})/iu.test(sentenceAround(text, start, end))) return 'in';
+    if (/(?<!\p{L})of[^\S\n]+(?:DC|AC|electricity|heat|fuel|light|gas|steam)[^\S\n]+(?:in)?to[^\S\n]+(?:(?:about|some|roughly|nearly)[^\S\n]+)?$/iu.test(lead) && /(?<!\p{L})(?:turns?|turned|turning|converts?|converted|converting|changes?|changed)(?!\p{L})/iu.test(sentenceAround(text, start, end))) return 'out';
+    // "on its 20 W heater supply": what a device runs on is what it takes.
+    if (/(?<!\p{L})(?:on|from)[^\S\n]+(?:its|a|an|the|their)[^\S\n]+$/iu.test(lead) && /^[^\S\n]*(?:-[^\S\n]*)?(?:(?:heater|power|mains|bench|DC|AC|drive|input)[^\S\n]+)?supply(?!\p{L})/iu.test(text.slice(end, end + 30))) return 'in';
     // "motor rated 45 kW, measured electrical input 41 kW": a nameplate rating beside a measured input is no
     // output of the run measured.
     if (/(?<!\p{L})(?:motor|engine|unit|machine|drive|generator)[^\S\n]+(?:is[^\S\n]+)?rated(?:[^\S\n]+at)?[^\S\n]*:?[^\S\n]*$/iu.test(lead) && /(?<!\p{L})measured[^\S\n]+(?:electrical[^\S\n]+|electric[^\S\n]+)?(?:input|draw|consumption|power)(?!\p{L})/iu.test(text)) return 'aside';

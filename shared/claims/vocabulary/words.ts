@@ -17,6 +17,8 @@ export const HEAT_PUMP_WORDS = [
   // (Not a heat pump the device is said to beat: "beating every heat pump", "better than any heat pump".)
   '(?<!(?<![\\w-])(?:every|any|all|than|unlike|beat|beats|beating|outperforms?|outperforming|outdoes|outdoing|rivals?|rivall?ing|no|not|without|nor|is it|isn\x27t|isn\u2019t|nothing like|unlike|not like|instead of)\\s+(?:(?:a|an|the|any|every|all|most|modern|best)\\s+)?(?:[\\w-]+\\s+)?)heat[- ]pumps?', 'air[- ]source', 'ground[- ]source', 'water[- ]source', 'geothermal heat', 'heat[- ]pumping', 'ASHPs?', 'GSHPs?', 'air[- ]to[- ](?:water|air)',
   'water[- ]to[- ]water', 'brine[- ]to[- ]water', 'ground[- ]loops?',
+  // A mechanical vapour recompression evaporator is a heat pump working across a small lift.
+  '(?:mechanical )?vapou?r[- ]recompression', 'MVR',
   // A reversible air conditioner or mini split said to be heating: "My 12,000 BTU mini split (heat mode)".
   '(?:mini[- ]?splits?|split (?:units?|systems?)|air[- ]conditioners?|AC units?|aircons?)(?: [\\w,-]+){0,2}? ?\\(?(?:in |on |set to )?heat(?:ing)? mode\\)?',
   // A refrigerating dehumidifier gives out its compressor's work and the heat of the water it condenses.
